@@ -1,0 +1,38 @@
+import type { LaunchTableRow, TrimBand } from '@catline/contracts';
+import { Column, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+
+/** A type's launch data as the ship's approved data gives it; entered by the user. */
+@Entity('aircraft_types')
+export class AircraftType {
+  @PrimaryGeneratedColumn()
+  id: number;
+
+  @Index({ unique: true })
+  @Column({ length: 20 })
+  designation: string;
+
+  @Column({ length: 120 })
+  name: string;
+
+  @Column({ name: 'max_gross_weight_lb' })
+  maxGrossWeightLb: number;
+
+  @Column({ name: 'crosswind_limit_kt', type: 'double' })
+  crosswindLimitKt: number;
+
+  @Column({ name: 'thrust_lbf' })
+  thrustLbf: number;
+
+  @Column({ name: 'required_excess_kt', type: 'double' })
+  requiredExcessKt: number;
+
+  @Column({ name: 'afterburner_from_lb', type: 'int', nullable: true })
+  afterburnerFromLb: number | null;
+
+  @Column({ name: 'trim_bands', type: 'json' })
+  trimBands: TrimBand[];
+
+  /** Minimum launch airspeed by gross weight, ordered by increasing weight. */
+  @Column({ name: 'launch_table', type: 'json' })
+  launchTable: LaunchTableRow[];
+}

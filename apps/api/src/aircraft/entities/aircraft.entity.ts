@@ -1,0 +1,37 @@
+import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, type Relation } from 'typeorm';
+import { AircraftType } from '../../aircraft-types/entities/aircraft-type.entity.js';
+import { Squadron } from '../../squadrons/entities/squadron.entity.js';
+
+@Entity('aircraft')
+export class Aircraft {
+  @PrimaryGeneratedColumn()
+  id: number;
+
+  @Index({ unique: true })
+  @Column({ name: 'side_number', length: 8 })
+  sideNumber: string;
+
+  @Column({ name: 'type_id' })
+  typeId: number;
+
+  @ManyToOne(() => AircraftType, { onDelete: 'RESTRICT' })
+  @JoinColumn({ name: 'type_id' })
+  type: Relation<AircraftType>;
+
+  @Column({ name: 'squadron_id' })
+  squadronId: number;
+
+  @ManyToOne(() => Squadron, { onDelete: 'RESTRICT' })
+  @JoinColumn({ name: 'squadron_id' })
+  squadron: Relation<Squadron>;
+
+  /** Deck spot name from the ship's deck spots. */
+  @Column({ name: 'parked_spot', length: 20 })
+  parkedSpot: string;
+
+  @Column({ default: true })
+  serviceable: boolean;
+
+  @Column({ name: 'catapult_shots', default: 0 })
+  catapultShots: number;
+}

@@ -1,0 +1,36 @@
+import { existsSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
+import { Module } from '@nestjs/common';
+import { ConfigModule, ConfigService } from '@nestjs/config';
+import { ServeStaticModule } from '@nestjs/serve-static';
+import { TypeOrmModule } from '@nestjs/typeorm';
+import { ENV_FILE_PATHS, type Environment, validateEnvironment } from './config/environment.js';
+import { dataSourceOptions } from './database/data-source.js';
+import { HealthModule } from './health/health.module.js';
+
+// The built web app, served from the same process when it exists (after `npm start`'s build).
+const webDist = fileURLToPath(new URL('../../web/dist', import.meta.url));
+
+@Module({
+  imports: [
+    ConfigModule.forRoot({ isGlobal: true, envFilePath: ENV_FILE_PATHS, validate: validateEnvironment }),
+    TypeOrmModule.forRootAsync({
+      inject: [ConfigService],
+      useFactory: (config: ConfigService<Environment, true>) => ({
+        ...dataSourceOptions({
+          DB_HOST: config.get('DB_HOST'),
+          DB_PORT: config.get('DB_PORT'),
+          DB_NAME: config.get('DB_NAME'),
+          DB_USER: config.get('DB_USER'),
+          DB_PASSWORD: config.get('DB_PASSWORD'),
+        }),
+        retryAttempts: 3,
+      }),
+    }),
+    ...(existsSync(webDist)
+      ? [ServeStaticModule.forRoot({ rootPath: webDist, exclude: ['/api/{*path}'] })]
+      : []),
+    HealthModule,
+  ],
+})
+export class AppModule {}

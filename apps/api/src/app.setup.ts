@@ -1,0 +1,22 @@
+import { ValidationPipe, type INestApplication } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
+import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
+import helmet from 'helmet';
+import { type Environment, webOrigins } from './config/environment.js';
+
+/** Everything main.ts sets on the app, shared with the integration tests so they test the same thing. */
+export function configureApp(app: INestApplication): void {
+  const config = app.get<ConfigService<Environment, true>>(ConfigService);
+  app.setGlobalPrefix('api');
+  app.use(helmet());
+  app.enableCors({ origin: webOrigins({ WEB_ORIGINS: config.get('WEB_ORIGINS') }), credentials: true });
+  app.useGlobalPipes(
+    new ValidationPipe({ whitelist: true, forbidNonWhitelisted: true, transform: true }),
+  );
+  app.enableShutdownHooks();
+  const document = SwaggerModule.createDocument(
+    app,
+    new DocumentBuilder().setTitle('Catline API').setVersion('1').addBearerAuth().build(),
+  );
+  SwaggerModule.setup('api/docs', app, document);
+}

@@ -1,0 +1,70 @@
+import type { CycleState, WeatherCase } from '@catline/contracts';
+import { Column, Entity, JoinColumn, ManyToOne, PrimaryGeneratedColumn, Unique, type Relation } from 'typeorm';
+import { CreatedAtColumn, InstantColumn, UpdatedAtColumn } from '../../database/columns.js';
+import { Ship } from '../../ships/entities/ship.entity.js';
+
+@Entity('cycles')
+@Unique('uq_cycles_ship_number', ['shipId', 'number'])
+export class Cycle {
+  @PrimaryGeneratedColumn()
+  id: number;
+
+  @Column({ name: 'ship_id' })
+  shipId: number;
+
+  @ManyToOne(() => Ship, { onDelete: 'RESTRICT' })
+  @JoinColumn({ name: 'ship_id' })
+  ship: Relation<Ship>;
+
+  @Column()
+  number: number;
+
+  @InstantColumn({ name: 'planned_launch_at' })
+  plannedLaunchAt: Date;
+
+  @InstantColumn({ name: 'window_start_at' })
+  windowStartAt: Date;
+
+  @InstantColumn({ name: 'window_end_at' })
+  windowEndAt: Date;
+
+  @Column({ name: 'ship_course_deg', type: 'double' })
+  shipCourseDeg: number;
+
+  @Column({ name: 'ship_speed_kt', type: 'double' })
+  shipSpeedKt: number;
+
+  @Column({ name: 'true_wind_from_deg', type: 'double' })
+  trueWindFromDeg: number;
+
+  @Column({ name: 'true_wind_speed_kt', type: 'double' })
+  trueWindSpeedKt: number;
+
+  @Column({ name: 'temperature_c', type: 'double' })
+  temperatureC: number;
+
+  @Column({ name: 'pressure_hpa', type: 'double', default: 1013.25 })
+  pressureHpa: number;
+
+  @Column({ name: 'weather_case', type: 'varchar', length: 3 })
+  weatherCase: WeatherCase;
+
+  @Column({ default: false })
+  night: boolean;
+
+  @Column({ name: 'landing_area_in_use', default: false })
+  landingAreaInUse: boolean;
+
+  @Column({ type: 'varchar', length: 10, default: 'planning' })
+  state: CycleState;
+
+  /** Bumped by one in the transaction of every accepted change; orders the change log. */
+  @Column({ default: 0 })
+  version: number;
+
+  @CreatedAtColumn()
+  createdAt: Date;
+
+  @UpdatedAtColumn()
+  updatedAt: Date;
+}

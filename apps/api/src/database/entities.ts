@@ -1,0 +1,24 @@
+import { AircraftType } from '../aircraft-types/entities/aircraft-type.entity.js';
+import { Aircraft } from '../aircraft/entities/aircraft.entity.js';
+import { Cycle } from '../cycles/entities/cycle.entity.js';
+import { CycleChange } from '../lineup/entities/cycle-change.entity.js';
+import { Slot } from '../lineup/entities/slot.entity.js';
+import { Catapult } from '../ships/entities/catapult.entity.js';
+import { Ship } from '../ships/entities/ship.entity.js';
+import { Squadron } from '../squadrons/entities/squadron.entity.js';
+import { RefreshToken } from '../users/entities/refresh-token.entity.js';
+import { User } from '../users/entities/user.entity.js';
+
+/** Every entity, listed once for the app, the migration CLI and the tests. */
+export const entities = [
+  Aircraft,
+  AircraftType,
+  Catapult,
+  Cycle,
+  CycleChange,
+  RefreshToken,
+  Ship,
+  Slot,
+  Squadron,
+  User,
+];

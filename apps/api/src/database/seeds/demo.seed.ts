@@ -1,0 +1,53 @@
+import type { DataSource } from 'typeorm';
+import { AircraftType } from '../../aircraft-types/entities/aircraft-type.entity.js';
+import { Aircraft } from '../../aircraft/entities/aircraft.entity.js';
+import { hashPassword } from '../../auth/password.js';
+import { Catapult } from '../../ships/entities/catapult.entity.js';
+import { Ship } from '../../ships/entities/ship.entity.js';
+import { Squadron } from '../../squadrons/entities/squadron.entity.js';
+import { User } from '../../users/entities/user.entity.js';
+import {
+  DEMO_PASSWORD,
+  demoAircraft,
+  demoAircraftTypes,
+  demoCatapults,
+  demoDeckSpots,
+  demoPeople,
+  demoShip,
+  demoSquadrons,
+} from './demo-fleet.js';
+
+/** Seeds the demo into an empty database in one transaction; returns false if a ship already exists. */
+export async function seedDemo(dataSource: DataSource): Promise<boolean> {
+  if ((await dataSource.getRepository(Ship).count()) > 0) return false;
+  const passwordHash = await hashPassword(DEMO_PASSWORD);
+  await dataSource.transaction(async (manager) => {
+    const ship = await manager.save(Ship, { ...demoShip, deckSpots: demoDeckSpots });
+    const catapults = await manager.save(
+      Catapult,
+      demoCatapults.map((catapult) => ({ ...catapult, shipId: ship.id })),
+    );
+    const squadrons = await manager.save(Squadron, demoSquadrons);
+    const types = await manager.save(AircraftType, demoAircraftTypes);
+    await manager.save(
+      Aircraft,
+      demoAircraft.map(({ designation, squadron, ...aircraft }) => ({
+        ...aircraft,
+        typeId: types.find((type) => type.designation === designation)!.id,
+        squadronId: squadrons.find((s) => s.code === squadron)!.id,
+      })),
+    );
+    await manager.save(
+      User,
+      demoPeople.map((person) => ({
+        email: person.email,
+        name: person.name,
+        role: person.role,
+        passwordHash,
+        catapultId: catapults.find((c) => c.number === person.catapultNumber)?.id ?? null,
+        squadronId: squadrons.find((s) => s.code === person.squadron)?.id ?? null,
+      })),
+    );
+  });
+  return true;
+}

@@ -1,0 +1,129 @@
+import type { SlotStatus } from '@catline/contracts';
+import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, Unique, type Relation } from 'typeorm';
+import { Aircraft } from '../../aircraft/entities/aircraft.entity.js';
+import { Cycle } from '../../cycles/entities/cycle.entity.js';
+import { InstantColumn } from '../../database/columns.js';
+import { Catapult } from '../../ships/entities/catapult.entity.js';
+import { User } from '../../users/entities/user.entity.js';
+
+/** One aircraft's place in a cycle: in the deck pool (no catapult) or in a catapult's lane. */
+@Entity('slots')
+@Unique('uq_slots_cycle_aircraft', ['cycleId', 'aircraftId'])
+@Unique('uq_slots_launch_key', ['launchIdempotencyKey'])
+@Index('ix_slots_lane', ['cycleId', 'catapultId', 'position'])
+export class Slot {
+  @PrimaryGeneratedColumn()
+  id: number;
+
+  @Column({ name: 'cycle_id' })
+  cycleId: number;
+
+  @ManyToOne(() => Cycle, { onDelete: 'CASCADE' })
+  @JoinColumn({ name: 'cycle_id' })
+  cycle: Relation<Cycle>;
+
+  @Column({ name: 'aircraft_id' })
+  aircraftId: number;
+
+  @ManyToOne(() => Aircraft, { onDelete: 'RESTRICT' })
+  @JoinColumn({ name: 'aircraft_id' })
+  aircraft: Relation<Aircraft>;
+
+  @Column({ name: 'pilot_id', type: 'int', nullable: true })
+  pilotId: number | null;
+
+  @ManyToOne(() => User, { nullable: true, onDelete: 'SET NULL' })
+  @JoinColumn({ name: 'pilot_id' })
+  pilot: Relation<User> | null;
+
+  @Column({ length: 60 })
+  mission: string;
+
+  @Column({ name: 'fuel_lb' })
+  fuelLb: number;
+
+  @Column({ length: 120, default: '' })
+  stores: string;
+
+  @Column({ name: 'gross_weight_lb' })
+  grossWeightLb: number;
+
+  @Column({ default: false })
+  tanker: boolean;
+
+  @Column({ name: 'early_warning', default: false })
+  earlyWarning: boolean;
+
+  @Column({ default: false })
+  spare: boolean;
+
+  /** Null while in the deck pool. */
+  @Column({ name: 'catapult_id', type: 'int', nullable: true })
+  catapultId: number | null;
+
+  @ManyToOne(() => Catapult, { nullable: true, onDelete: 'RESTRICT' })
+  @JoinColumn({ name: 'catapult_id' })
+  catapult: Relation<Catapult> | null;
+
+  /** 0-based place in the lane; null in the deck pool. */
+  @Column({ type: 'int', nullable: true })
+  position: number | null;
+
+  @Column({ type: 'varchar', length: 14, default: 'planned' })
+  status: SlotStatus;
+
+  /** Bumped by every change to this slot; the basis that commands on it must name. */
+  @Column({ default: 0 })
+  version: number;
+
+  @Column({ name: 'pilot_weight_ack_lb', type: 'int', nullable: true })
+  pilotWeightAckLb: number | null;
+
+  @InstantColumn({ name: 'pilot_weight_ack_at', nullable: true })
+  pilotWeightAckAt: Date | null;
+
+  @InstantColumn({ name: 'catapult_weight_ack_at', nullable: true })
+  catapultWeightAckAt: Date | null;
+
+  @InstantColumn({ name: 'taxiing_at', nullable: true })
+  taxiingAt: Date | null;
+
+  @InstantColumn({ name: 'on_catapult_at', nullable: true })
+  onCatapultAt: Date | null;
+
+  @InstantColumn({ name: 'tensioned_at', nullable: true })
+  tensionedAt: Date | null;
+
+  @InstantColumn({ name: 'suspended_at', nullable: true })
+  suspendedAt: Date | null;
+
+  @Column({ name: 'suspend_reason', type: 'varchar', length: 200, nullable: true })
+  suspendReason: string | null;
+
+  @InstantColumn({ name: 'down_at', nullable: true })
+  downAt: Date | null;
+
+  /** The spare slot that took this down aircraft's place. */
+  @Column({ name: 'replaced_by_slot_id', type: 'int', nullable: true })
+  replacedBySlotId: number | null;
+
+  @InstantColumn({ name: 'launched_at', nullable: true })
+  launchedAt: Date | null;
+
+  /** The client's key of the launch that was recorded; a repeat with it is answered, not applied. */
+  @Column({ name: 'launch_idempotency_key', type: 'varchar', length: 64, nullable: true })
+  launchIdempotencyKey: string | null;
+
+  @Column({ name: 'override_reason', type: 'varchar', length: 200, nullable: true })
+  overrideReason: string | null;
+
+  @InstantColumn({ name: 'status_at', nullable: true })
+  statusAt: Date | null;
+
+  @Column({ name: 'status_by_id', type: 'int', nullable: true })
+  statusById: number | null;
+
+  @ManyToOne(() => User, { nullable: true, onDelete: 'SET NULL' })
+  @JoinColumn({ name: 'status_by_id' })
+  statusBy: Relation<User> | null;
+}

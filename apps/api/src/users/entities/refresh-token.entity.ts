@@ -1,0 +1,30 @@
+import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, type Relation } from 'typeorm';
+import { CreatedAtColumn, InstantColumn } from '../../database/columns.js';
+import { User } from './user.entity.js';
+
+/** One refresh token per sign-in; only its SHA-256 is kept, and each use replaces it. */
+@Entity('refresh_tokens')
+export class RefreshToken {
+  @PrimaryGeneratedColumn()
+  id: number;
+
+  @Column({ name: 'user_id' })
+  userId: number;
+
+  @ManyToOne(() => User, { onDelete: 'CASCADE' })
+  @JoinColumn({ name: 'user_id' })
+  user: Relation<User>;
+
+  @Index({ unique: true })
+  @Column({ name: 'token_hash', type: 'char', length: 64 })
+  tokenHash: string;
+
+  @InstantColumn({ name: 'expires_at' })
+  expiresAt: Date;
+
+  @InstantColumn({ name: 'revoked_at', nullable: true })
+  revokedAt: Date | null;
+
+  @CreatedAtColumn()
+  createdAt: Date;
+}

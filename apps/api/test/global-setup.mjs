@@ -1,0 +1,13 @@
+// Runs once per integration run, before any spec: a fresh database with migrations and the demo seed.
+// It loads the built API (the test:integration script builds first) because Jest loads this file
+// outside its ESM transform.
+import 'reflect-metadata';
+import { environmentFromProcess } from '../dist/database/data-source.js';
+import { recreateDatabase } from '../dist/database/recreate-database.js';
+import { testDatabaseName } from './support/test-database-name.mjs';
+
+export default async function globalSetup() {
+  const environment = environmentFromProcess();
+  process.env.DB_NAME = testDatabaseName(environment.DB_NAME);
+  await recreateDatabase({ ...environment, DB_NAME: process.env.DB_NAME });
+}

@@ -1,0 +1,43 @@
+import type { Role } from './roles.js';
+
+export interface LoginRequest {
+  email: string;
+  password: string;
+}
+
+/** The signed-in person as the client sees them. */
+export interface SessionUser {
+  id: number;
+  email: string;
+  name: string;
+  role: Role;
+  /** Set for a catapult officer: the catapult they run now. */
+  catapultId: number | null;
+}
+
+/**
+ * Returned by login and refresh. The access token (JWT, at most 15 minutes) goes in
+ * `Authorization: Bearer`; the refresh token travels only in an httpOnly cookie.
+ */
+export interface SessionResponse {
+  accessToken: string;
+  /** ISO 8601 instant the access token expires. */
+  expiresAt: string;
+  user: SessionUser;
+}
+
+export interface ChangePasswordRequest {
+  currentPassword: string;
+  newPassword: string;
+}
+
+/** The body of every 4xx/5xx answer. */
+export interface ApiError {
+  statusCode: number;
+  /** A stable machine code, e.g. `stale_basis`, `validation_failed`. */
+  code: string;
+  /** A sentence a person understands. */
+  message: string;
+  /** Field-level problems for validation failures. */
+  details?: string[];
+}

@@ -1,0 +1,51 @@
+export const CYCLE_STATES = ['planning', 'executing', 'closed'] as const;
+export type CycleState = (typeof CYCLE_STATES)[number];
+
+export const WEATHER_CASES = ['I', 'II', 'III'] as const;
+export type WeatherCase = (typeof WEATHER_CASES)[number];
+
+/** What air operations sets for a cycle; every launch figure depends on it. */
+export interface CycleConditions {
+  shipCourseDeg: number;
+  shipSpeedKt: number;
+  /** Direction the true wind blows from, degrees true. */
+  trueWindFromDeg: number;
+  trueWindSpeedKt: number;
+  temperatureC: number;
+  pressureHpa: number;
+  weatherCase: WeatherCase;
+  night: boolean;
+  /** While the landing area is in use the waist catapults are closed. */
+  landingAreaInUse: boolean;
+}
+
+export interface CycleView extends CycleConditions {
+  id: number;
+  shipId: number;
+  number: number;
+  /** ISO 8601 instants. */
+  plannedLaunchAt: string;
+  windowStartAt: string;
+  windowEndAt: string;
+  state: CycleState;
+  /** Bumped by one with every accepted change; orders the change log and broadcasts. */
+  version: number;
+  slotCount: number;
+  launchedCount: number;
+}
+
+export interface CreateCycleRequest extends CycleConditions {
+  shipId: number;
+  number: number;
+  plannedLaunchAt: string;
+  windowStartAt: string;
+  windowEndAt: string;
+}
+
+export type UpdateCycleConditionsRequest = Partial<CycleConditions> & {
+  plannedLaunchAt?: string;
+  windowStartAt?: string;
+  windowEndAt?: string;
+  /** The cycle version the change was based on. */
+  basisVersion: number;
+};

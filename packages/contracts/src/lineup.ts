@@ -1,0 +1,230 @@
+import type { CatapultPosition, CatapultStatus } from './fleet.js';
+import type { CycleView } from './cycles.js';
+import type { Role } from './roles.js';
+
+export const SLOT_STATUSES = [
+  'planned',
+  'taxiing',
+  'on_catapult',
+  'weight_agreed',
+  'tensioned',
+  'launched',
+  'suspended',
+  'down',
+  'scratched',
+] as const;
+export type SlotStatus = (typeof SLOT_STATUSES)[number];
+
+export type CrosswindSide = 'port' | 'starboard' | 'none';
+
+export const NO_GO_CODES = [
+  'margin_negative',
+  'crosswind_over_limit',
+  'over_max_gross_weight',
+  'catapult_down',
+  'catapult_closed',
+  'outside_launch_table',
+  'setting_out_of_range',
+] as const;
+export type NoGoCode = (typeof NO_GO_CODES)[number];
+
+export interface NoGoReason {
+  code: NoGoCode;
+  /** A sentence for the deck crew, with the figures that caused it. */
+  message: string;
+}
+
+export interface WindOverDeck {
+  headwindKt: number;
+  crosswindKt: number;
+  crosswindSide: CrosswindSide;
+}
+
+/** The figures of one aircraft on one catapult under the cycle's conditions. */
+export interface LaunchFigures extends WindOverDeck {
+  /** Lowest catapult setting reaching the wanted end speed; null when out of range. */
+  catapultSetting: number | null;
+  endSpeedKt: number;
+  /** Minimum launch airspeed (density-corrected) plus the required excess, knots. */
+  requiredAirspeedKt: number;
+  requiredWindOverDeckKt: number;
+  marginKt: number;
+  go: boolean;
+  reasons: NoGoReason[];
+  /** Degrees; positive to starboard, 0 for none (night). */
+  clearingTurnDeg: number;
+}
+
+export interface SlotView {
+  id: number;
+  cycleId: number;
+  aircraftId: number;
+  sideNumber: string;
+  typeId: number;
+  typeDesignation: string;
+  squadronId: number;
+  squadronCode: string;
+  pilotId: number | null;
+  pilotName: string | null;
+  mission: string;
+  fuelLb: number;
+  stores: string;
+  grossWeightLb: number;
+  tanker: boolean;
+  earlyWarning: boolean;
+  spare: boolean;
+  /** Null while the slot is in the deck pool. */
+  catapultId: number | null;
+  /** 0-based place in its lane; null in the deck pool. */
+  position: number | null;
+  status: SlotStatus;
+  /** Bumped by every change to this slot; the basis of commands on it. */
+  version: number;
+  trimDeg: number | null;
+  afterburnerRequired: boolean;
+  departure: string;
+  pilotWeightAckAt: string | null;
+  catapultWeightAckAt: string | null;
+  suspendReason: string | null;
+  overrideReason: string | null;
+  launchedAt: string | null;
+  /** When and by whom the status last changed. */
+  statusAt: string | null;
+  statusBy: string | null;
+  projectedLaunchAt: string | null;
+  missesWindow: boolean;
+  /** Null in the deck pool. */
+  figures: LaunchFigures | null;
+}
+
+export interface LaneView extends WindOverDeck {
+  catapultId: number;
+  number: number;
+  position: CatapultPosition;
+  status: CatapultStatus;
+  /** Waist catapults are closed while the landing area is in use. */
+  closed: boolean;
+  /** The lane's slots in launch order. */
+  slotIds: number[];
+  /** True when every slot still to launch in the lane is go. */
+  go: boolean;
+}
+
+export interface LineupSnapshot {
+  cycle: CycleView;
+  lanes: LaneView[];
+  /** Slots in the deck pool, by side number. */
+  pool: number[];
+  slots: SlotView[];
+  lastLaunchAt: string | null;
+  version: number;
+}
+
+export const CHANGE_KINDS = [
+  'slot_moved',
+  'suggestion_applied',
+  'aircraft_down',
+  'catapult_status_set',
+  'slot_advanced',
+  'slot_suspended',
+  'slot_launched',
+  'weight_acknowledged',
+  'conditions_changed',
+  'cycle_started',
+  'cycle_closed',
+  'air_plan_imported',
+] as const;
+export type ChangeKind = (typeof CHANGE_KINDS)[number];
+
+/** What changed: replace these parts of the snapshot, by id. */
+export interface LineupPatch {
+  cycle?: CycleView;
+  lanes?: LaneView[];
+  pool?: number[];
+  slots?: SlotView[];
+  lastLaunchAt?: string | null;
+}
+
+export interface ChangeActor {
+  id: number;
+  name: string;
+  role: Role;
+}
+
+/** One accepted change, as kept in the change log and broadcast to the cycle's room. */
+export interface LineupChange {
+  cycleId: number;
+  version: number;
+  kind: ChangeKind;
+  actor: ChangeActor;
+  at: string;
+  /** A one-line account for people, e.g. "201 moved to cat 2, place 3". */
+  summary: string;
+  patch: LineupPatch;
+}
+
+export interface LineupCommandResult {
+  version: number;
+  change: LineupChange;
+}
+
+/** Move a slot into a lane at an index, or back to the deck pool (`toCatapultId: null`). */
+export interface MoveSlotRequest {
+  slotId: number;
+  slotVersion: number;
+  toCatapultId: number | null;
+  toIndex: number;
+  /** The target lane's slot ids as the sender saw them before the move. */
+  targetLaneOrder: number[];
+}
+
+export interface SuggestedLineup {
+  basisVersion: number;
+  lanes: { catapultId: number; slotIds: number[] }[];
+  lastLaunchAt: string | null;
+}
+
+export interface ApplySuggestionRequest {
+  basisVersion: number;
+  lanes: { catapultId: number; slotIds: number[] }[];
+}
+
+export interface MarkDownRequest {
+  slotVersion: number;
+  /** A spare slot of the same cycle that takes the down aircraft's place. */
+  spareSlotId?: number;
+}
+
+export interface SetCatapultStatusRequest {
+  status: CatapultStatus;
+  /** The status the sender saw. */
+  basisStatus: CatapultStatus;
+  reason?: string;
+}
+
+/** Readiness steps a catapult officer takes, in order; `resume` returns a suspended slot to on_catapult. */
+export const READINESS_STEPS = ['taxiing', 'on_catapult', 'weight_agreed', 'tensioned'] as const;
+export type ReadinessStep = (typeof READINESS_STEPS)[number];
+
+export interface AdvanceSlotRequest {
+  slotVersion: number;
+  to: ReadinessStep | 'resume';
+}
+
+export interface SuspendSlotRequest {
+  slotVersion: number;
+  reason: string;
+}
+
+export interface LaunchSlotRequest {
+  slotVersion: number;
+  /** Chosen by the client once per launch intent; a repeat with the same key is answered, not applied. */
+  idempotencyKey: string;
+  /** Required when the figures are no-go. */
+  overrideReason?: string;
+}
+
+export interface WeightAckRequest {
+  slotVersion: number;
+  grossWeightLb: number;
+}

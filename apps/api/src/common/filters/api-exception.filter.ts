@@ -1,0 +1,54 @@
+import type { ApiError } from '@catline/contracts';
+import { type ArgumentsHost, Catch, type ExceptionFilter, HttpException, HttpStatus, Logger } from '@nestjs/common';
+import type { Response } from 'express';
+import { QueryFailedError } from 'typeorm';
+import { DomainException } from '../errors/domain.exception.js';
+
+const CODE_BY_STATUS: Record<number, string> = {
+  400: 'bad_request',
+  401: 'unauthorized',
+  403: 'forbidden',
+  404: 'not_found',
+  409: 'conflict',
+  413: 'payload_too_large',
+  429: 'too_many_requests',
+  503: 'unavailable',
+};
+
+// mysql2 error codes that mean the database is out of reach rather than the request being wrong.
+const DATABASE_DOWN = new Set(['ECONNREFUSED', 'PROTOCOL_CONNECTION_LOST', 'ETIMEDOUT', 'ER_CON_COUNT_ERROR', 'EPIPE']);
+
+/** Every HTTP error leaves as an ApiError: a status, a stable code and a readable message. */
+@Catch()
+export class ApiExceptionFilter implements ExceptionFilter {
+  private readonly logger = new Logger(ApiExceptionFilter.name);
+
+  catch(exception: unknown, host: ArgumentsHost): void {
+    if (host.getType() !== 'http') throw exception;
+    const body = this.toApiError(exception);
+    host.switchToHttp().getResponse<Response>().status(body.statusCode).json(body);
+  }
+
+  private toApiError(exception: unknown): ApiError {
+    if (exception instanceof DomainException) {
+      return { statusCode: exception.getStatus(), code: exception.code, message: exception.message, ...(exception.details ? { details: exception.details } : {}) };
+    }
+    if (exception instanceof HttpException) {
+      const status = exception.getStatus();
+      const response = exception.getResponse();
+      const raw = typeof response === 'object' && response !== null ? (response as { message?: unknown }).message : response;
+      if (Array.isArray(raw)) {
+        return { statusCode: status, code: 'validation_failed', message: `Invalid request: ${raw.join('; ')}`, details: raw.map(String) };
+      }
+      const message = typeof raw === 'string' ? raw : exception.message;
+      return { statusCode: status, code: CODE_BY_STATUS[status] ?? 'error', message };
+    }
+    const code = (exception as { code?: string; driverError?: { code?: string } }).driverError?.code ?? (exception as { code?: string }).code;
+    if (code && DATABASE_DOWN.has(code)) {
+      return { statusCode: HttpStatus.SERVICE_UNAVAILABLE, code: 'database_unavailable', message: 'The database is not answering; nothing was changed. Try again shortly.' };
+    }
+    if (exception instanceof QueryFailedError) this.logger.error(`Query failed: ${exception.message}`);
+    else this.logger.error(exception instanceof Error ? exception.stack : String(exception));
+    return { statusCode: HttpStatus.INTERNAL_SERVER_ERROR, code: 'internal_error', message: 'Something went wrong on the server. The error is logged; please try again.' };
+  }
+}

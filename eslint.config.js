@@ -1,0 +1,66 @@
+// One lint configuration for the workspace; it enforces the layout rules of DEVELOPERS.md.
+import { existsSync, readdirSync } from 'node:fs';
+import js from '@eslint/js';
+import { createTypeScriptImportResolver } from 'eslint-import-resolver-typescript';
+import importX from 'eslint-plugin-import-x';
+import reactHooks from 'eslint-plugin-react-hooks';
+import globals from 'globals';
+import tseslint from 'typescript-eslint';
+
+const webFeatures = './apps/web/src/features';
+const features = existsSync(webFeatures) ? readdirSync(webFeatures) : [];
+
+export default tseslint.config(
+  {
+    ignores: ['**/dist/', '**/node_modules/', '.data/', '.tools/', '**/coverage/', '**/test-results/', '**/playwright-report/', 'bench-results/'],
+  },
+  js.configs.recommended,
+  ...tseslint.configs.recommended,
+  {
+    languageOptions: { globals: { ...globals.node } },
+    plugins: { 'import-x': importX },
+    settings: {
+      'import-x/resolver-next': [
+        createTypeScriptImportResolver({
+          project: ['apps/*/tsconfig.json', 'packages/*/tsconfig.json'],
+          noWarnOnMultipleProjects: true,
+        }),
+      ],
+    },
+    rules: {
+      'import-x/no-cycle': 'error',
+      '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_' }],
+    },
+  },
+  {
+    files: ['apps/api/src/**/*.ts'],
+    rules: { 'no-console': 'error' },
+  },
+  {
+    // The shared packages stay framework-free so server and browser can both use them.
+    files: ['packages/*/src/**/*.ts'],
+    rules: {
+      'no-restricted-imports': ['error', { patterns: ['@nestjs/*', 'react', 'react-*', 'typeorm', 'socket.io*', '@chakra-ui/*'] }],
+    },
+  },
+  {
+    files: ['apps/web/**/*.{ts,tsx}'],
+    languageOptions: { globals: { ...globals.browser } },
+    plugins: { 'react-hooks': reactHooks },
+    rules: {
+      ...reactHooks.configs.recommended.rules,
+      // Features do not import each other; shared code lives in components/ or lib/.
+      'import-x/no-restricted-paths': [
+        'error',
+        {
+          zones: features.map((feature) => ({
+            target: `${webFeatures}/${feature}`,
+            from: webFeatures,
+            except: [`./${feature}`],
+            message: 'Features do not import each other: move shared code to src/components or src/lib.',
+          })),
+        },
+      ],
+    },
+  },
+);

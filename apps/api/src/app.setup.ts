@@ -2,6 +2,7 @@ import { ValidationPipe, type INestApplication } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
 import helmet from 'helmet';
+import { ApiExceptionFilter } from './common/filters/api-exception.filter.js';
 import { type Environment, webOrigins } from './config/environment.js';
 
 /** Everything main.ts sets on the app, shared with the integration tests so they test the same thing. */
@@ -13,6 +14,7 @@ export function configureApp(app: INestApplication): void {
   app.useGlobalPipes(
     new ValidationPipe({ whitelist: true, forbidNonWhitelisted: true, transform: true }),
   );
+  app.useGlobalFilters(new ApiExceptionFilter());
   app.enableShutdownHooks();
   const document = SwaggerModule.createDocument(
     app,

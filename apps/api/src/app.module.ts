@@ -4,9 +4,15 @@ import { Module } from '@nestjs/common';
 import { ConfigModule, ConfigService } from '@nestjs/config';
 import { ServeStaticModule } from '@nestjs/serve-static';
 import { TypeOrmModule } from '@nestjs/typeorm';
+import { AircraftTypesModule } from './aircraft-types/aircraft-types.module.js';
+import { AircraftModule } from './aircraft/aircraft.module.js';
+import { AuthModule } from './auth/auth.module.js';
 import { ENV_FILE_PATHS, type Environment, validateEnvironment } from './config/environment.js';
 import { dataSourceOptions } from './database/data-source.js';
 import { HealthModule } from './health/health.module.js';
+import { ShipsModule } from './ships/ships.module.js';
+import { SquadronsModule } from './squadrons/squadrons.module.js';
+import { UsersModule } from './users/users.module.js';
 
 // The built web app, served from the same process when it exists (after `npm start`'s build).
 const webDist = fileURLToPath(new URL('../../web/dist', import.meta.url));
@@ -31,6 +37,12 @@ const webDist = fileURLToPath(new URL('../../web/dist', import.meta.url));
       ? [ServeStaticModule.forRoot({ rootPath: webDist, exclude: ['/api/{*path}'] })]
       : []),
     HealthModule,
+    AuthModule,
+    UsersModule,
+    ShipsModule,
+    SquadronsModule,
+    AircraftTypesModule,
+    AircraftModule,
   ],
 })
 export class AppModule {}

@@ -1,6 +1,7 @@
 import { ValidationPipe, type INestApplication } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
+import cookieParser from 'cookie-parser';
 import helmet from 'helmet';
 import { ApiExceptionFilter } from './common/filters/api-exception.filter.js';
 import { type Environment, webOrigins } from './config/environment.js';
@@ -10,6 +11,7 @@ export function configureApp(app: INestApplication): void {
   const config = app.get<ConfigService<Environment, true>>(ConfigService);
   app.setGlobalPrefix('api');
   app.use(helmet());
+  app.use(cookieParser());
   app.enableCors({ origin: webOrigins({ WEB_ORIGINS: config.get('WEB_ORIGINS') }), credentials: true });
   app.useGlobalPipes(
     new ValidationPipe({ whitelist: true, forbidNonWhitelisted: true, transform: true }),

@@ -34,6 +34,10 @@ export class Environment {
   @IsString() @IsNotEmpty()
   WEB_ORIGINS: string = 'http://127.0.0.1:3000,http://localhost:3000';
 
+  /** Sign-in attempts allowed per minute for one address and e-mail, against password guessing. */
+  @IsInt() @Min(1)
+  LOGIN_RATE_LIMIT: number = 5;
+
   @IsIn(['on', 'off'])
   DEMO_SEED: 'on' | 'off' = 'on';
 }

@@ -1,0 +1,17 @@
+import type { AircraftTypeView } from '@catline/contracts';
+import type { AircraftType } from './entities/aircraft-type.entity.js';
+
+export function toAircraftTypeView(type: AircraftType): AircraftTypeView {
+  return {
+    id: type.id,
+    designation: type.designation,
+    name: type.name,
+    maxGrossWeightLb: type.maxGrossWeightLb,
+    crosswindLimitKt: type.crosswindLimitKt,
+    thrustLbf: type.thrustLbf,
+    requiredExcessKt: type.requiredExcessKt,
+    afterburnerFromLb: type.afterburnerFromLb,
+    trimBands: type.trimBands,
+    launchTable: type.launchTable,
+  };
+}

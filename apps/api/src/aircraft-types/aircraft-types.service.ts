@@ -1,0 +1,118 @@
+import type { AircraftTypeView, LaunchTableRow } from '@catline/contracts';
+import { Injectable, Logger } from '@nestjs/common';
+import { InjectDataSource } from '@nestjs/typeorm';
+import { type DataSource, type EntityManager, Not } from 'typeorm';
+import { definedFields } from '../common/defined-fields.js';
+import { Aircraft } from '../aircraft/entities/aircraft.entity.js';
+import { isDuplicateKey, isStillReferenced } from '../common/errors/database-errors.js';
+import { toAircraftTypeView } from './aircraft-type.mapper.js';
+import { AircraftTypesException } from './aircraft-types.exception.js';
+import type { CreateAircraftTypeDto } from './dto/create-aircraft-type.dto.js';
+import type { UpdateAircraftTypeDto } from './dto/update-aircraft-type.dto.js';
+import { AircraftType } from './entities/aircraft-type.entity.js';
+import { launchTableProblems, trimBandProblems } from './launch-data.js';
+
+@Injectable()
+export class AircraftTypesService {
+  private readonly logger = new Logger(AircraftTypesService.name);
+
+  constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
+
+  async list(): Promise<AircraftTypeView[]> {
+    const types = await this.dataSource.manager.find(AircraftType, { order: { designation: 'ASC' } });
+    return types.map(toAircraftTypeView);
+  }
+
+  async get(id: number): Promise<AircraftTypeView> {
+    return toAircraftTypeView(await this.findOrFail(this.dataSource.manager, id));
+  }
+
+  async create(body: CreateAircraftTypeDto): Promise<AircraftTypeView> {
+    this.checkLaunchData(trimBandProblems(body.trimBands), launchTableProblems(body.launchTable));
+    const manager = this.dataSource.manager;
+    await this.checkDesignationFree(manager, body.designation);
+    const type = manager.create(AircraftType, { ...body, afterburnerFromLb: body.afterburnerFromLb ?? null });
+    const saved = await this.save(manager, type);
+    this.logger.log(`Aircraft type ${saved.designation} created`);
+    return toAircraftTypeView(saved);
+  }
+
+  async update(id: number, body: UpdateAircraftTypeDto): Promise<AircraftTypeView> {
+    if (body.trimBands) this.checkLaunchData(trimBandProblems(body.trimBands), []);
+    return this.dataSource.transaction(async (manager) => {
+      const type = await this.findOrFail(manager, id, true);
+      if (body.designation !== undefined) await this.checkDesignationFree(manager, body.designation, id);
+      Object.assign(type, definedFields(body));
+      return toAircraftTypeView(await this.save(manager, type));
+    });
+  }
+
+  async replaceLaunchTable(id: number, rows: LaunchTableRow[]): Promise<AircraftTypeView> {
+    this.checkLaunchData([], launchTableProblems(rows));
+    return this.dataSource.transaction(async (manager) => {
+      const type = await this.findOrFail(manager, id, true);
+      type.launchTable = rows;
+      await manager.save(AircraftType, type);
+      this.logger.log(`Launch table of ${type.designation} replaced (${rows.length} rows)`);
+      return toAircraftTypeView(type);
+    });
+  }
+
+  async remove(id: number): Promise<void> {
+    await this.dataSource.transaction(async (manager) => {
+      const type = await this.findOrFail(manager, id, true);
+      const inUse = () => manager.countBy(Aircraft, { typeId: id });
+      const count = await inUse();
+      if (count > 0) throw this.inUse(type, count);
+      try {
+        await manager.delete(AircraftType, { id });
+      } catch (error) {
+        if (isStillReferenced(error)) throw this.inUse(type, await inUse());
+        throw error;
+      }
+    });
+    this.logger.log(`Aircraft type ${id} deleted`);
+  }
+
+  private checkLaunchData(...problemLists: string[][]): void {
+    const problems = problemLists.flat();
+    if (problems.length > 0) {
+      throw new AircraftTypesException('invalid_launch_data', `Invalid launch data: ${problems.join(' ')}`, problems);
+    }
+  }
+
+  private async findOrFail(manager: EntityManager, id: number, lock = false): Promise<AircraftType> {
+    const type = await manager.findOne(AircraftType, {
+      where: { id },
+      ...(lock ? { lock: { mode: 'pessimistic_write' as const } } : {}),
+    });
+    if (!type) throw new AircraftTypesException('aircraft_type_not_found', `There is no aircraft type with id ${id}.`);
+    return type;
+  }
+
+  private async checkDesignationFree(manager: EntityManager, designation: string, exceptId?: number): Promise<void> {
+    const where = exceptId === undefined ? { designation } : { designation, id: Not(exceptId) };
+    if (await manager.existsBy(AircraftType, where)) throw this.designationTaken(designation);
+  }
+
+  /** A save racing another past checkDesignationFree still ends in the readable 409. */
+  private async save(manager: EntityManager, type: AircraftType): Promise<AircraftType> {
+    try {
+      return await manager.save(AircraftType, type);
+    } catch (error) {
+      if (isDuplicateKey(error)) throw this.designationTaken(type.designation);
+      throw error;
+    }
+  }
+
+  private designationTaken(designation: string): AircraftTypesException {
+    return new AircraftTypesException('designation_taken', `Another aircraft type is already designated ${designation}.`);
+  }
+
+  private inUse(type: AircraftType, aircraft: number): AircraftTypesException {
+    return new AircraftTypesException(
+      'aircraft_type_in_use',
+      `${aircraft} aircraft are of type ${type.designation}; change or delete them before deleting the type.`,
+    );
+  }
+}

@@ -1,0 +1,79 @@
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { Type } from 'class-transformer';
+import {
+  ArrayMaxSize,
+  ArrayMinSize,
+  IsArray,
+  IsInt,
+  IsNotEmpty,
+  IsNumber,
+  IsOptional,
+  IsPositive,
+  IsString,
+  Max,
+  MaxLength,
+  Min,
+  ValidateNested,
+} from 'class-validator';
+import { Trim } from '../../common/validation/trim.decorator.js';
+import { LaunchTableRows } from './launch-table.dto.js';
+import { LaunchTableRowDto } from './launch-table-row.dto.js';
+import { TrimBandDto } from './trim-band.dto.js';
+
+export class CreateAircraftTypeDto {
+  @ApiProperty({ example: 'KS-7' })
+  @Trim()
+  @IsString()
+  @IsNotEmpty({ message: 'designation is required' })
+  @MaxLength(20)
+  designation: string;
+
+  @ApiProperty()
+  @Trim()
+  @IsString()
+  @IsNotEmpty({ message: 'name is required' })
+  @MaxLength(120)
+  name: string;
+
+  @ApiProperty({ description: 'Pounds.' })
+  @IsInt()
+  @IsPositive()
+  @Max(1_000_000)
+  maxGrossWeightLb: number;
+
+  @ApiProperty({ description: 'Knots.' })
+  @IsNumber()
+  @Min(0)
+  @Max(100)
+  crosswindLimitKt: number;
+
+  @ApiProperty({ description: 'Pounds-force.' })
+  @IsInt()
+  @Min(0)
+  @Max(1_000_000)
+  thrustLbf: number;
+
+  @ApiProperty({ description: 'Knots above the minimum launch airspeed.' })
+  @IsNumber()
+  @Min(0)
+  @Max(100)
+  requiredExcessKt: number;
+
+  @ApiPropertyOptional({ nullable: true, description: 'Pounds; null when the type never needs afterburner.' })
+  @IsOptional()
+  @IsInt()
+  @IsPositive()
+  @Max(1_000_000)
+  afterburnerFromLb?: number | null;
+
+  @ApiProperty({ type: [TrimBandDto], description: 'Increasing upToLb; the last band has upToLb null.' })
+  @IsArray()
+  @ArrayMinSize(1, { message: 'trimBands needs at least one band' })
+  @ArrayMaxSize(20)
+  @ValidateNested({ each: true })
+  @Type(() => TrimBandDto)
+  trimBands: TrimBandDto[];
+
+  @LaunchTableRows()
+  launchTable: LaunchTableRowDto[];
+}

@@ -1,0 +1,17 @@
+import { HttpStatus } from '@nestjs/common';
+import { DomainException } from '../common/errors/domain.exception.js';
+
+export type AircraftRefusalCode = 'aircraft_not_found' | 'side_number_taken' | 'unknown_reference' | 'aircraft_in_use';
+
+const STATUS: Record<AircraftRefusalCode, HttpStatus> = {
+  aircraft_not_found: HttpStatus.NOT_FOUND,
+  side_number_taken: HttpStatus.CONFLICT,
+  unknown_reference: HttpStatus.BAD_REQUEST,
+  aircraft_in_use: HttpStatus.CONFLICT,
+};
+
+export class AircraftException extends DomainException {
+  constructor(code: AircraftRefusalCode, message: string) {
+    super(STATUS[code], code, message);
+  }
+}

@@ -1,0 +1,113 @@
+import type { AircraftView } from '@catline/contracts';
+import { Injectable, Logger } from '@nestjs/common';
+import { InjectDataSource } from '@nestjs/typeorm';
+import { type DataSource, type EntityManager, Not } from 'typeorm';
+import { definedFields } from '../common/defined-fields.js';
+import { AircraftType } from '../aircraft-types/entities/aircraft-type.entity.js';
+import { isDuplicateKey, isStillReferenced } from '../common/errors/database-errors.js';
+import { Slot } from '../lineup/entities/slot.entity.js';
+import { Ship } from '../ships/entities/ship.entity.js';
+import { Squadron } from '../squadrons/entities/squadron.entity.js';
+import { toAircraftView } from './aircraft.mapper.js';
+import { AircraftException } from './aircraft.exception.js';
+import type { CreateAircraftDto } from './dto/create-aircraft.dto.js';
+import type { UpdateAircraftDto } from './dto/update-aircraft.dto.js';
+import { Aircraft } from './entities/aircraft.entity.js';
+
+const WITH_NAMES = { type: true, squadron: true } as const;
+
+@Injectable()
+export class AircraftService {
+  private readonly logger = new Logger(AircraftService.name);
+
+  constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
+
+  async list(): Promise<AircraftView[]> {
+    const aircraft = await this.dataSource.manager.find(Aircraft, { relations: WITH_NAMES, order: { sideNumber: 'ASC' } });
+    return aircraft.map(toAircraftView);
+  }
+
+  async create(body: CreateAircraftDto): Promise<AircraftView> {
+    return this.dataSource.transaction(async (manager) => {
+      await this.checkReferences(manager, body);
+      const saved = await this.save(manager, manager.create(Aircraft, { ...body, serviceable: body.serviceable ?? true }));
+      this.logger.log(`Aircraft ${saved.sideNumber} added`);
+      return this.view(manager, saved.id);
+    });
+  }
+
+  async update(id: number, body: UpdateAircraftDto): Promise<AircraftView> {
+    return this.dataSource.transaction(async (manager) => {
+      const aircraft = await this.findOrFail(manager, id);
+      await this.checkReferences(manager, body, id);
+      await this.save(manager, Object.assign(aircraft, definedFields(body)));
+      return this.view(manager, id);
+    });
+  }
+
+  async remove(id: number): Promise<void> {
+    await this.dataSource.transaction(async (manager) => {
+      const aircraft = await this.findOrFail(manager, id);
+      const inUse = () => manager.countBy(Slot, { aircraftId: id });
+      const slots = await inUse();
+      if (slots > 0) throw this.inUse(aircraft, slots);
+      try {
+        await manager.delete(Aircraft, { id });
+      } catch (error) {
+        if (isStillReferenced(error)) throw this.inUse(aircraft, await inUse());
+        throw error;
+      }
+    });
+    this.logger.log(`Aircraft ${id} deleted`);
+  }
+
+  private async view(manager: EntityManager, id: number): Promise<AircraftView> {
+    return toAircraftView(await manager.findOneOrFail(Aircraft, { where: { id }, relations: WITH_NAMES }));
+  }
+
+  private async findOrFail(manager: EntityManager, id: number): Promise<Aircraft> {
+    const aircraft = await manager.findOne(Aircraft, { where: { id }, lock: { mode: 'pessimistic_write' } });
+    if (!aircraft) throw new AircraftException('aircraft_not_found', `There is no aircraft with id ${id}.`);
+    return aircraft;
+  }
+
+  private async checkReferences(manager: EntityManager, body: Partial<CreateAircraftDto>, exceptId?: number): Promise<void> {
+    if (body.sideNumber !== undefined) {
+      const where = exceptId === undefined ? { sideNumber: body.sideNumber } : { sideNumber: body.sideNumber, id: Not(exceptId) };
+      if (await manager.existsBy(Aircraft, where)) throw this.sideNumberTaken(body.sideNumber);
+    }
+    if (body.typeId !== undefined && !(await manager.existsBy(AircraftType, { id: body.typeId }))) {
+      throw new AircraftException('unknown_reference', `There is no aircraft type with id ${body.typeId}.`);
+    }
+    if (body.squadronId !== undefined && !(await manager.existsBy(Squadron, { id: body.squadronId }))) {
+      throw new AircraftException('unknown_reference', `There is no squadron with id ${body.squadronId}.`);
+    }
+    if (body.parkedSpot !== undefined) {
+      const spots = (await manager.find(Ship)).flatMap((ship) => ship.deckSpots.map((spot) => spot.name));
+      if (!spots.includes(body.parkedSpot)) {
+        throw new AircraftException('unknown_reference', `There is no deck spot named ${body.parkedSpot}; pick one of ${spots.join(', ')}.`);
+      }
+    }
+  }
+
+  /** A save racing another past checkReferences still ends in the readable 409. */
+  private async save(manager: EntityManager, aircraft: Aircraft): Promise<Aircraft> {
+    try {
+      return await manager.save(Aircraft, aircraft);
+    } catch (error) {
+      if (isDuplicateKey(error)) throw this.sideNumberTaken(aircraft.sideNumber);
+      throw error;
+    }
+  }
+
+  private sideNumberTaken(sideNumber: string): AircraftException {
+    return new AircraftException('side_number_taken', `Side number ${sideNumber} is already taken by another aircraft.`);
+  }
+
+  private inUse(aircraft: Aircraft, slots: number): AircraftException {
+    return new AircraftException(
+      'aircraft_in_use',
+      `Aircraft ${aircraft.sideNumber} appears in ${slots} cycle lineup(s), which keep its record; mark it unserviceable instead of deleting it.`,
+    );
+  }
+}

@@ -1,0 +1,33 @@
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { IsBoolean, IsInt, IsNotEmpty, IsOptional, IsString, Matches, MaxLength, Min } from 'class-validator';
+import { Trim } from '../../common/validation/trim.decorator.js';
+
+export class CreateAircraftDto {
+  @ApiProperty({ example: '101' })
+  @Trim()
+  @IsString()
+  @Matches(/^[A-Za-z0-9-]{1,8}$/, { message: 'sideNumber must be 1 to 8 letters, digits or dashes' })
+  sideNumber: string;
+
+  @ApiProperty()
+  @IsInt()
+  @Min(1)
+  typeId: number;
+
+  @ApiProperty()
+  @IsInt()
+  @Min(1)
+  squadronId: number;
+
+  @ApiProperty({ example: 'bow-1', description: "One of the ship's deck spot names." })
+  @Trim()
+  @IsString()
+  @IsNotEmpty({ message: 'parkedSpot is required' })
+  @MaxLength(20)
+  parkedSpot: string;
+
+  @ApiPropertyOptional({ default: true })
+  @IsOptional()
+  @IsBoolean()
+  serviceable?: boolean;
+}

@@ -1,0 +1,80 @@
+import type { SessionResponse, SessionUser } from '@catline/contracts';
+import { Body, Controller, Get, HttpCode, HttpStatus, Post, Req, Res, UseGuards } from '@nestjs/common';
+import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import type { Request, Response } from 'express';
+import type { AuthenticatedUser } from '../common/authenticated-user.js';
+import { CurrentUser } from '../common/decorators/current-user.decorator.js';
+import { Public } from '../common/decorators/public.decorator.js';
+import { AuthService, type SignedIn } from './auth.service.js';
+import { ChangePasswordDto } from './dto/change-password.dto.js';
+import { LoginDto } from './dto/login.dto.js';
+import { LoginRateLimitGuard } from './login-rate-limit.guard.js';
+import { clearRefreshCookie, readRefreshCookie, setRefreshCookie } from './refresh-cookie.js';
+import { toSessionUser } from './session.mapper.js';
+
+@ApiTags('auth')
+@Controller('auth')
+export class AuthController {
+  constructor(private readonly auth: AuthService) {}
+
+  @Public()
+  @UseGuards(LoginRateLimitGuard)
+  @Post('login')
+  @HttpCode(HttpStatus.OK)
+  async login(
+    @Body() body: LoginDto,
+    @Req() request: Request,
+    @Res({ passthrough: true }) response: Response,
+  ): Promise<SessionResponse> {
+    return this.answer(await this.auth.login(body.email, body.password), request, response);
+  }
+
+  @Public()
+  @Post('refresh')
+  @HttpCode(HttpStatus.OK)
+  async refresh(@Req() request: Request, @Res({ passthrough: true }) response: Response): Promise<SessionResponse> {
+    try {
+      return this.answer(await this.auth.refresh(readRefreshCookie(request)), request, response);
+    } catch (error) {
+      clearRefreshCookie(request, response);
+      throw error;
+    }
+  }
+
+  @ApiBearerAuth()
+  @Post('logout')
+  @HttpCode(HttpStatus.NO_CONTENT)
+  async logout(
+    @CurrentUser() user: AuthenticatedUser,
+    @Req() request: Request,
+    @Res({ passthrough: true }) response: Response,
+  ): Promise<void> {
+    await this.auth.logout(readRefreshCookie(request), user);
+    clearRefreshCookie(request, response);
+  }
+
+  @ApiBearerAuth()
+  @Get('me')
+  me(@CurrentUser() user: AuthenticatedUser): SessionUser {
+    return toSessionUser(user);
+  }
+
+  /** Other sessions end; this one gets a fresh refresh cookie, so POST /auth/refresh continues it. */
+  @ApiBearerAuth()
+  @Post('password')
+  @HttpCode(HttpStatus.NO_CONTENT)
+  async changePassword(
+    @CurrentUser() user: AuthenticatedUser,
+    @Body() body: ChangePasswordDto,
+    @Req() request: Request,
+    @Res({ passthrough: true }) response: Response,
+  ): Promise<void> {
+    const refresh = await this.auth.changePassword(user, body.currentPassword, body.newPassword);
+    setRefreshCookie(request, response, refresh);
+  }
+
+  private answer({ session, refresh }: SignedIn, request: Request, response: Response): SessionResponse {
+    setRefreshCookie(request, response, refresh);
+    return session;
+  }
+}

@@ -1,0 +1,48 @@
+import { ROLE_LABELS, type Role } from '@catline/contracts';
+import { type CanActivate, type ExecutionContext, Injectable } from '@nestjs/common';
+import { Reflector } from '@nestjs/core';
+import type { Request } from 'express';
+import type { AuthenticatedUser } from '../common/authenticated-user.js';
+import { IS_PUBLIC } from '../common/decorators/public.decorator.js';
+import { ROLES_KEY } from '../common/decorators/roles.decorator.js';
+import { AuthException } from './auth.exception.js';
+import { TokenVerifier } from './token-verifier.service.js';
+
+export function bearerToken(header: string | undefined): string | undefined {
+  const match = /^Bearer\s+(\S+)$/i.exec(header ?? '');
+  return match?.[1];
+}
+
+/**
+ * Every HTTP route needs a valid access token unless marked @Public(), and a role from @Roles() when
+ * it has one. Socket events are checked by the gateway itself (its handshake uses TokenVerifier).
+ */
+@Injectable()
+export class AuthGuard implements CanActivate {
+  constructor(
+    private readonly reflector: Reflector,
+    private readonly tokens: TokenVerifier,
+  ) {}
+
+  async canActivate(context: ExecutionContext): Promise<boolean> {
+    if (context.getType() !== 'http') return true;
+    const targets = [context.getHandler(), context.getClass()];
+    if (this.reflector.getAllAndOverride<boolean>(IS_PUBLIC, targets)) return true;
+
+    const request = context.switchToHttp().getRequest<Request & { user?: AuthenticatedUser }>();
+    const token = bearerToken(request.headers.authorization);
+    if (!token) throw new AuthException('unauthenticated', 'Sign in to continue.');
+    const user = await this.tokens.verify(token);
+    request.user = user;
+
+    const roles = this.reflector.getAllAndOverride<Role[] | undefined>(ROLES_KEY, targets);
+    if (roles && !roles.includes(user.role)) {
+      const allowed = roles.map((role) => ROLE_LABELS[role]).join(' or ');
+      throw new AuthException(
+        'forbidden_role',
+        `Only ${allowed} may do this; you are signed in as ${ROLE_LABELS[user.role]}.`,
+      );
+    }
+    return true;
+  }
+}

@@ -1,0 +1,31 @@
+import { Module } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
+import { APP_GUARD } from '@nestjs/core';
+import { JwtModule } from '@nestjs/jwt';
+import { TypeOrmModule } from '@nestjs/typeorm';
+import type { Environment } from '../config/environment.js';
+import { User } from '../users/entities/user.entity.js';
+import { ACCESS_TOKEN_ALGORITHM } from './access-token.js';
+import { AuthController } from './auth.controller.js';
+import { AuthGuard } from './auth.guard.js';
+import { AuthService } from './auth.service.js';
+import { LoginAttempts } from './login-attempts.service.js';
+import { RefreshTokens } from './refresh-tokens.service.js';
+import { TokenVerifier } from './token-verifier.service.js';
+
+@Module({
+  imports: [
+    TypeOrmModule.forFeature([User]),
+    JwtModule.registerAsync({
+      inject: [ConfigService],
+      useFactory: (config: ConfigService<Environment, true>) => ({
+        secret: config.get('JWT_SECRET'),
+        signOptions: { algorithm: ACCESS_TOKEN_ALGORITHM },
+      }),
+    }),
+  ],
+  controllers: [AuthController],
+  providers: [AuthService, LoginAttempts, RefreshTokens, TokenVerifier, { provide: APP_GUARD, useClass: AuthGuard }],
+  exports: [TokenVerifier, RefreshTokens],
+})
+export class AuthModule {}

@@ -1,0 +1,90 @@
+import { randomBytes } from 'node:crypto';
+import type { SessionResponse } from '@catline/contracts';
+import { Injectable, Logger } from '@nestjs/common';
+import { JwtService } from '@nestjs/jwt';
+import { InjectDataSource } from '@nestjs/typeorm';
+import type { DataSource } from 'typeorm';
+import type { AuthenticatedUser } from '../common/authenticated-user.js';
+import { User } from '../users/entities/user.entity.js';
+import { ACCESS_TOKEN_ALGORITHM, ACCESS_TOKEN_LIFETIME_S, type AccessTokenClaims } from './access-token.js';
+import { AuthException } from './auth.exception.js';
+import { normalizeEmail } from './normalize-email.js';
+import { hashPassword, verifyPassword } from './password.js';
+import { type IssuedRefreshToken, RefreshTokens } from './refresh-tokens.service.js';
+import { toAuthenticatedUser, toSessionUser } from './session.mapper.js';
+
+export interface SignedIn {
+  session: SessionResponse;
+  refresh: IssuedRefreshToken;
+}
+
+const BAD_CREDENTIALS = 'The e-mail or password is not right.';
+
+@Injectable()
+export class AuthService {
+  private readonly logger = new Logger(AuthService.name);
+  // Checked against when the e-mail is unknown, so both refusals take as long as a real check.
+  private readonly decoyHash = hashPassword(randomBytes(16).toString('hex'));
+
+  constructor(
+    private readonly jwt: JwtService,
+    private readonly refreshTokens: RefreshTokens,
+    @InjectDataSource() private readonly dataSource: DataSource,
+  ) {}
+
+  async login(email: string, password: string): Promise<SignedIn> {
+    const user = await this.dataSource.manager.findOneBy(User, { email: normalizeEmail(email) });
+    const matches = await verifyPassword(user?.passwordHash ?? (await this.decoyHash), password);
+    if (!user?.passwordHash || !matches || !user.active) throw new AuthException('invalid_credentials', BAD_CREDENTIALS);
+    this.logger.log(`User ${user.id} signed in`);
+    return { session: await this.sessionFor(user), refresh: await this.refreshTokens.issue(user.id) };
+  }
+
+  async refresh(token: string | undefined): Promise<SignedIn> {
+    const result = token ? await this.refreshTokens.rotate(token) : undefined;
+    if (result?.outcome !== 'rotated') {
+      throw new AuthException('session_ended', 'Your session has ended. Sign in again.');
+    }
+    return { session: await this.sessionFor(result.user), refresh: result.next };
+  }
+
+  async logout(token: string | undefined, user: AuthenticatedUser): Promise<void> {
+    if (token) await this.refreshTokens.revoke(token, user.id);
+  }
+
+  /** Sets a new password and signs out every other session; returns this device's new refresh token. */
+  async changePassword(
+    who: AuthenticatedUser,
+    currentPassword: string,
+    newPassword: string,
+  ): Promise<IssuedRefreshToken> {
+    const user = await this.dataSource.manager.findOneByOrFail(User, { id: who.id });
+    if (!user.passwordHash || !(await verifyPassword(user.passwordHash, currentPassword))) {
+      throw new AuthException('wrong_password', 'The current password is not right; the password was not changed.');
+    }
+    if (currentPassword === newPassword) {
+      throw new AuthException('password_unchanged', 'The new password must differ from the current one.');
+    }
+    const passwordHash = await hashPassword(newPassword);
+    return this.dataSource.transaction(async (manager) => {
+      await manager.update(User, { id: user.id }, { passwordHash, tokenVersion: () => 'token_version + 1' });
+      await this.refreshTokens.revokeAllFor(user.id, manager);
+      this.logger.log(`User ${user.id} changed their password; other sessions ended`);
+      return this.refreshTokens.issue(user.id, manager);
+    });
+  }
+
+  private async sessionFor(user: User): Promise<SessionResponse> {
+    const claims: AccessTokenClaims = { sub: user.id, role: user.role, tv: user.tokenVersion };
+    const accessToken = await this.jwt.signAsync(claims, {
+      algorithm: ACCESS_TOKEN_ALGORITHM,
+      expiresIn: ACCESS_TOKEN_LIFETIME_S,
+    });
+    const { exp } = this.jwt.decode<{ exp: number }>(accessToken);
+    return {
+      accessToken,
+      expiresAt: new Date(exp * 1000).toISOString(),
+      user: toSessionUser(toAuthenticatedUser(user)),
+    };
+  }
+}

@@ -1,0 +1,74 @@
+import { createHash, randomBytes } from 'node:crypto';
+import { Injectable, Logger } from '@nestjs/common';
+import { InjectDataSource } from '@nestjs/typeorm';
+import { type DataSource, type EntityManager, LessThan } from 'typeorm';
+import { RefreshToken } from '../users/entities/refresh-token.entity.js';
+import { User } from '../users/entities/user.entity.js';
+
+export const REFRESH_TOKEN_LIFETIME_MS = 12 * 60 * 60 * 1000;
+
+export interface IssuedRefreshToken {
+  token: string;
+  expiresAt: Date;
+}
+
+export type RotationResult =
+  | { outcome: 'rotated'; user: User; next: IssuedRefreshToken }
+  | { outcome: 'refused'; reason: 'unknown' | 'expired' | 'inactive' | 'reused' };
+
+/** Only a token's SHA-256 is stored, so a copy of the table cannot be replayed. */
+function digest(token: string): string {
+  return createHash('sha256').update(token).digest('hex');
+}
+
+/**
+ * Refresh tokens: random, one per sign-in, replaced on every use. A replaced token keeps its row with
+ * `revokedAt` set, so its return means a copy exists and every session of the person ends. Sessions
+ * ended on purpose (logout, password change, removal) delete their rows instead: a stale cookie from
+ * such a session is merely unknown and cannot end the sessions that followed.
+ */
+@Injectable()
+export class RefreshTokens {
+  private readonly logger = new Logger(RefreshTokens.name);
+
+  constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
+
+  async issue(userId: number, manager: EntityManager = this.dataSource.manager): Promise<IssuedRefreshToken> {
+    await manager.delete(RefreshToken, { userId, expiresAt: LessThan(new Date()) });
+    const token = randomBytes(32).toString('base64url');
+    const expiresAt = new Date(Date.now() + REFRESH_TOKEN_LIFETIME_MS);
+    await manager.insert(RefreshToken, { userId, tokenHash: digest(token), expiresAt, revokedAt: null });
+    return { token, expiresAt };
+  }
+
+  /** Swaps a live token for a new one in one transaction; the row lock makes two racing uses see each other. */
+  rotate(token: string): Promise<RotationResult> {
+    return this.dataSource.transaction(async (manager) => {
+      const stored = await manager.findOne(RefreshToken, {
+        where: { tokenHash: digest(token) },
+        lock: { mode: 'pessimistic_write' },
+      });
+      if (!stored) return { outcome: 'refused', reason: 'unknown' };
+      if (stored.revokedAt) {
+        this.logger.warn(`Replaced refresh token of user ${stored.userId} used again; ending all their sessions`);
+        await this.revokeAllFor(stored.userId, manager);
+        await manager.increment(User, { id: stored.userId }, 'tokenVersion', 1);
+        return { outcome: 'refused', reason: 'reused' };
+      }
+      if (stored.expiresAt.getTime() <= Date.now()) return { outcome: 'refused', reason: 'expired' };
+      const user = await manager.findOneBy(User, { id: stored.userId });
+      if (!user?.active) return { outcome: 'refused', reason: 'inactive' };
+      await manager.update(RefreshToken, { id: stored.id }, { revokedAt: new Date() });
+      return { outcome: 'rotated', user, next: await this.issue(user.id, manager) };
+    });
+  }
+
+  /** Ends one session; a token of someone else or an unknown one changes nothing. */
+  async revoke(token: string, userId: number): Promise<void> {
+    await this.dataSource.manager.delete(RefreshToken, { tokenHash: digest(token), userId });
+  }
+
+  async revokeAllFor(userId: number, manager: EntityManager = this.dataSource.manager): Promise<void> {
+    await manager.delete(RefreshToken, { userId });
+  }
+}

@@ -1,0 +1,38 @@
+import type { DeckSpot } from '@catline/contracts';
+import { ApiProperty } from '@nestjs/swagger';
+import { IsNotEmpty, IsString, MaxLength, ValidateBy } from 'class-validator';
+import { Trim } from '../../common/validation/trim.decorator.js';
+
+const MAX_TAXI_S = 3600;
+
+function isTaxiTimes(value: unknown): boolean {
+  if (typeof value !== 'object' || value === null || Array.isArray(value)) return false;
+  const entries = Object.entries(value);
+  return (
+    entries.length > 0 &&
+    entries.every(([key, seconds]) => /^[1-9]$/.test(key) && typeof seconds === 'number' && seconds > 0 && seconds <= MAX_TAXI_S)
+  );
+}
+
+const IsTaxiTimes = () =>
+  ValidateBy({
+    name: 'isTaxiTimes',
+    validator: {
+      validate: isTaxiTimes,
+      defaultMessage: () =>
+        `$property must map catapult numbers to taxi times in seconds (greater than 0, at most ${MAX_TAXI_S})`,
+    },
+  });
+
+export class DeckSpotDto implements DeckSpot {
+  @ApiProperty({ example: 'bow-1' })
+  @Trim()
+  @IsString()
+  @IsNotEmpty({ message: 'a deck spot needs a name' })
+  @MaxLength(20)
+  name: string;
+
+  @ApiProperty({ example: { 1: 70, 2: 60, 3: 150, 4: 170 }, description: 'Seconds, by catapult number.' })
+  @IsTaxiTimes()
+  taxiS: Record<number, number>;
+}

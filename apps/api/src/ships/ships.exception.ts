@@ -1,0 +1,17 @@
+import { HttpStatus } from '@nestjs/common';
+import { DomainException } from '../common/errors/domain.exception.js';
+
+export type ShipRefusalCode = 'ship_not_found' | 'catapult_not_found' | 'invalid_configuration' | 'spot_in_use';
+
+const STATUS: Record<ShipRefusalCode, HttpStatus> = {
+  ship_not_found: HttpStatus.NOT_FOUND,
+  catapult_not_found: HttpStatus.NOT_FOUND,
+  invalid_configuration: HttpStatus.BAD_REQUEST,
+  spot_in_use: HttpStatus.CONFLICT,
+};
+
+export class ShipsException extends DomainException {
+  constructor(code: ShipRefusalCode, message: string) {
+    super(STATUS[code], code, message);
+  }
+}

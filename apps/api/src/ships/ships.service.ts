@@ -1,0 +1,84 @@
+import type { CatapultView, DeckSpot, ShipView } from '@catline/contracts';
+import { Injectable, Logger } from '@nestjs/common';
+import { InjectDataSource } from '@nestjs/typeorm';
+import { type DataSource, type EntityManager, In, Not } from 'typeorm';
+import { definedFields } from '../common/defined-fields.js';
+import { Aircraft } from '../aircraft/entities/aircraft.entity.js';
+import { deckSpotProblems } from './deck-spots.js';
+import type { UpdateCatapultDto } from './dto/update-catapult.dto.js';
+import type { UpdateShipDto } from './dto/update-ship.dto.js';
+import { Catapult } from './entities/catapult.entity.js';
+import { Ship } from './entities/ship.entity.js';
+import { toCatapultView, toShipView } from './ship.mapper.js';
+import { ShipsException } from './ships.exception.js';
+
+@Injectable()
+export class ShipsService {
+  private readonly logger = new Logger(ShipsService.name);
+
+  constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
+
+  async list(): Promise<ShipView[]> {
+    const ships = await this.dataSource.manager.find(Ship, { relations: { catapults: true }, order: { id: 'ASC' } });
+    return ships.map((ship) => toShipView(ship, ship.catapults));
+  }
+
+  async get(id: number): Promise<ShipView> {
+    const ship = await this.dataSource.manager.findOne(Ship, { where: { id }, relations: { catapults: true } });
+    if (!ship) throw this.shipNotFound(id);
+    return toShipView(ship, ship.catapults);
+  }
+
+  async update(id: number, body: UpdateShipDto): Promise<ShipView> {
+    const view = await this.dataSource.transaction(async (manager) => {
+      const ship = await manager.findOne(Ship, { where: { id }, lock: { mode: 'pessimistic_write' } });
+      if (!ship) throw this.shipNotFound(id);
+      const catapults = await manager.findBy(Catapult, { shipId: id });
+      if (body.deckSpots) await this.checkDeckSpots(manager, ship, body.deckSpots, catapults);
+      Object.assign(ship, definedFields(body));
+      await manager.save(Ship, ship);
+      return toShipView(ship, catapults);
+    });
+    this.logger.log(`Ship ${id} updated (${Object.keys(definedFields(body)).join(', ') || 'nothing'})`);
+    return view;
+  }
+
+  async updateCatapult(shipId: number, id: number, body: UpdateCatapultDto): Promise<CatapultView> {
+    return this.dataSource.transaction(async (manager) => {
+      const catapult = await manager.findOne(Catapult, { where: { id, shipId }, lock: { mode: 'pessimistic_write' } });
+      if (!catapult) {
+        throw new ShipsException('catapult_not_found', `Ship ${shipId} has no catapult with id ${id}.`);
+      }
+      Object.assign(catapult, definedFields(body));
+      if (catapult.energyMaxMj <= catapult.energyMinMj) {
+        throw new ShipsException(
+          'invalid_configuration',
+          `The highest energy (${catapult.energyMaxMj} MJ) must be above the lowest (${catapult.energyMinMj} MJ).`,
+        );
+      }
+      await manager.save(Catapult, catapult);
+      return toCatapultView(catapult);
+    });
+  }
+
+  private async checkDeckSpots(
+    manager: EntityManager,
+    ship: Ship,
+    spots: DeckSpot[],
+    catapults: Catapult[],
+  ): Promise<void> {
+    const problems = deckSpotProblems(spots, catapults.map((catapult) => catapult.number));
+    if (problems.length > 0) throw new ShipsException('invalid_configuration', problems.join(' '));
+    const otherShips = await manager.findBy(Ship, { id: Not(ship.id) });
+    const kept = [...spots, ...otherShips.flatMap((other) => other.deckSpots)].map((spot) => spot.name);
+    const stranded = await manager.find(Aircraft, { where: { parkedSpot: Not(In(kept)) }, order: { sideNumber: 'ASC' } });
+    if (stranded.length > 0) {
+      const list = stranded.map((aircraft) => `${aircraft.sideNumber} (${aircraft.parkedSpot})`).join(', ');
+      throw new ShipsException('spot_in_use', `Aircraft are parked on spots this change removes: ${list}. Move them first.`);
+    }
+  }
+
+  private shipNotFound(id: number): ShipsException {
+    return new ShipsException('ship_not_found', `There is no ship with id ${id}.`);
+  }
+}

@@ -1,0 +1,16 @@
+import { HttpStatus } from '@nestjs/common';
+import { DomainException } from '../common/errors/domain.exception.js';
+
+export type SquadronRefusalCode = 'squadron_not_found' | 'code_taken' | 'squadron_in_use';
+
+const STATUS: Record<SquadronRefusalCode, HttpStatus> = {
+  squadron_not_found: HttpStatus.NOT_FOUND,
+  code_taken: HttpStatus.CONFLICT,
+  squadron_in_use: HttpStatus.CONFLICT,
+};
+
+export class SquadronsException extends DomainException {
+  constructor(code: SquadronRefusalCode, message: string) {
+    super(STATUS[code], code, message);
+  }
+}

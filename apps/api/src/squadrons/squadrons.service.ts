@@ -1,0 +1,85 @@
+import type { SquadronView } from '@catline/contracts';
+import { Injectable, Logger } from '@nestjs/common';
+import { InjectDataSource } from '@nestjs/typeorm';
+import { type DataSource, type EntityManager, Not } from 'typeorm';
+import { definedFields } from '../common/defined-fields.js';
+import { Aircraft } from '../aircraft/entities/aircraft.entity.js';
+import { isDuplicateKey, isStillReferenced } from '../common/errors/database-errors.js';
+import type { CreateSquadronDto } from './dto/create-squadron.dto.js';
+import type { UpdateSquadronDto } from './dto/update-squadron.dto.js';
+import { Squadron } from './entities/squadron.entity.js';
+import { toSquadronView } from './squadron.mapper.js';
+import { SquadronsException } from './squadrons.exception.js';
+
+@Injectable()
+export class SquadronsService {
+  private readonly logger = new Logger(SquadronsService.name);
+
+  constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
+
+  async list(): Promise<SquadronView[]> {
+    const squadrons = await this.dataSource.manager.find(Squadron, { order: { code: 'ASC' } });
+    return squadrons.map(toSquadronView);
+  }
+
+  async create(body: CreateSquadronDto): Promise<SquadronView> {
+    const manager = this.dataSource.manager;
+    await this.checkCodeFree(manager, body.code);
+    return toSquadronView(await this.save(manager, manager.create(Squadron, body)));
+  }
+
+  async update(id: number, body: UpdateSquadronDto): Promise<SquadronView> {
+    return this.dataSource.transaction(async (manager) => {
+      const squadron = await this.findOrFail(manager, id);
+      if (body.code !== undefined) await this.checkCodeFree(manager, body.code, id);
+      return toSquadronView(await this.save(manager, Object.assign(squadron, definedFields(body))));
+    });
+  }
+
+  async remove(id: number): Promise<void> {
+    await this.dataSource.transaction(async (manager) => {
+      const squadron = await this.findOrFail(manager, id);
+      const aircraft = await manager.countBy(Aircraft, { squadronId: id });
+      if (aircraft > 0) throw this.inUse(squadron, aircraft);
+      try {
+        await manager.delete(Squadron, { id });
+      } catch (error) {
+        if (isStillReferenced(error)) throw this.inUse(squadron, await manager.countBy(Aircraft, { squadronId: id }));
+        throw error;
+      }
+    });
+    this.logger.log(`Squadron ${id} deleted`);
+  }
+
+  private async findOrFail(manager: EntityManager, id: number): Promise<Squadron> {
+    const squadron = await manager.findOne(Squadron, { where: { id }, lock: { mode: 'pessimistic_write' } });
+    if (!squadron) throw new SquadronsException('squadron_not_found', `There is no squadron with id ${id}.`);
+    return squadron;
+  }
+
+  private async checkCodeFree(manager: EntityManager, code: string, exceptId?: number): Promise<void> {
+    const where = exceptId === undefined ? { code } : { code, id: Not(exceptId) };
+    if (await manager.existsBy(Squadron, where)) throw this.codeTaken(code);
+  }
+
+  /** A save racing another past checkCodeFree still ends in the readable 409. */
+  private async save(manager: EntityManager, squadron: Squadron): Promise<Squadron> {
+    try {
+      return await manager.save(Squadron, squadron);
+    } catch (error) {
+      if (isDuplicateKey(error)) throw this.codeTaken(squadron.code);
+      throw error;
+    }
+  }
+
+  private codeTaken(code: string): SquadronsException {
+    return new SquadronsException('code_taken', `Another squadron already uses the code ${code}.`);
+  }
+
+  private inUse(squadron: Squadron, aircraft: number): SquadronsException {
+    return new SquadronsException(
+      'squadron_in_use',
+      `Squadron ${squadron.code} still has ${aircraft} aircraft; move or delete them before deleting the squadron.`,
+    );
+  }
+}

@@ -1,0 +1,42 @@
+import { ROLES, type Role } from '@catline/contracts';
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { IsEmail, IsIn, IsInt, IsNotEmpty, IsOptional, IsString, MaxLength, Min, MinLength } from 'class-validator';
+import { PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH } from '../../auth/dto/change-password.dto.js';
+import { Trim } from '../../common/validation/trim.decorator.js';
+
+export class CreateUserDto {
+  @ApiProperty()
+  @Trim()
+  @IsEmail({}, { message: 'email must be an e-mail address' })
+  @MaxLength(254)
+  email: string;
+
+  @ApiProperty()
+  @Trim()
+  @IsString()
+  @IsNotEmpty({ message: 'name is required' })
+  @MaxLength(120)
+  name: string;
+
+  @ApiProperty({ enum: ROLES })
+  @IsIn(ROLES, { message: `role must be one of ${ROLES.join(', ')}` })
+  role: Role;
+
+  @ApiProperty({ minLength: PASSWORD_MIN_LENGTH })
+  @IsString()
+  @MinLength(PASSWORD_MIN_LENGTH, { message: `password must be at least ${PASSWORD_MIN_LENGTH} characters` })
+  @MaxLength(PASSWORD_MAX_LENGTH, { message: `password must be at most ${PASSWORD_MAX_LENGTH} characters` })
+  password: string;
+
+  @ApiPropertyOptional({ nullable: true, description: 'Required for a catapult officer, absent otherwise.' })
+  @IsOptional()
+  @IsInt()
+  @Min(1)
+  catapultId?: number | null;
+
+  @ApiPropertyOptional({ nullable: true })
+  @IsOptional()
+  @IsInt()
+  @Min(1)
+  squadronId?: number | null;
+}

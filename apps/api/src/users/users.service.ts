@@ -1,0 +1,121 @@
+import type { UserView } from '@catline/contracts';
+import { Injectable, Logger } from '@nestjs/common';
+import { InjectDataSource } from '@nestjs/typeorm';
+import type { DataSource, EntityManager } from 'typeorm';
+import { normalizeEmail } from '../auth/normalize-email.js';
+import { hashPassword } from '../auth/password.js';
+import { RefreshTokens } from '../auth/refresh-tokens.service.js';
+import type { AuthenticatedUser } from '../common/authenticated-user.js';
+import { isDuplicateKey } from '../common/errors/database-errors.js';
+import { Catapult } from '../ships/entities/catapult.entity.js';
+import { Squadron } from '../squadrons/entities/squadron.entity.js';
+import { catapultBindingProblem } from './catapult-binding.js';
+import type { CreateUserDto } from './dto/create-user.dto.js';
+import type { UpdateUserDto } from './dto/update-user.dto.js';
+import { User } from './entities/user.entity.js';
+import { toUserView } from './user.mapper.js';
+import { UsersException } from './users.exception.js';
+
+@Injectable()
+export class UsersService {
+  private readonly logger = new Logger(UsersService.name);
+
+  constructor(
+    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly refreshTokens: RefreshTokens,
+  ) {}
+
+  async list(): Promise<UserView[]> {
+    const users = await this.dataSource.manager.find(User, { order: { name: 'ASC' } });
+    return users.map(toUserView);
+  }
+
+  async listPilots(): Promise<UserView[]> {
+    const pilots = await this.dataSource.manager.find(User, {
+      where: { role: 'pilot', active: true },
+      order: { name: 'ASC' },
+    });
+    return pilots.map(toUserView);
+  }
+
+  async create(body: CreateUserDto): Promise<UserView> {
+    const email = normalizeEmail(body.email);
+    const binding = { role: body.role, catapultId: body.catapultId ?? null, squadronId: body.squadronId ?? null };
+    const manager = this.dataSource.manager;
+    await this.checkBinding(manager, binding.role, binding.catapultId, binding.squadronId);
+    if (await manager.existsBy(User, { email })) throw this.emailTaken(email);
+    const passwordHash = await hashPassword(body.password);
+    try {
+      const user = await manager.save(User, manager.create(User, { email, name: body.name, passwordHash, ...binding }));
+      this.logger.log(`User ${user.id} (${user.role}) created`);
+      return toUserView(user);
+    } catch (error) {
+      if (isDuplicateKey(error)) throw this.emailTaken(email);
+      throw error;
+    }
+  }
+
+  /**
+   * Role, catapult and active changes take effect at once: the token version moves on, so tokens
+   * signed with the old role stop working (a refresh gives a new one while the person is active).
+   */
+  async update(id: number, body: UpdateUserDto, actor: AuthenticatedUser): Promise<UserView> {
+    return this.dataSource.transaction(async (manager) => {
+      const user = await this.findOrFail(manager, id);
+      if (id === actor.id && ((body.role && body.role !== user.role) || body.active === false)) {
+        throw new UsersException('self_change', 'You cannot change your own role or deactivate yourself; ask another admin.');
+      }
+      const role = body.role ?? user.role;
+      // Leaving the catapult officer role releases the catapult unless the request says otherwise.
+      const catapultId = body.catapultId !== undefined ? body.catapultId : role === 'catapult_officer' ? user.catapultId : null;
+      const squadronId = body.squadronId !== undefined ? body.squadronId : user.squadronId;
+      await this.checkBinding(manager, role, catapultId, squadronId);
+
+      const access = role !== user.role || catapultId !== user.catapultId || (body.active ?? user.active) !== user.active;
+      Object.assign(user, { name: body.name ?? user.name, role, catapultId, squadronId, active: body.active ?? user.active });
+      if (access) user.tokenVersion += 1;
+      await manager.save(User, user);
+      if (!user.active) await this.refreshTokens.revokeAllFor(user.id, manager);
+      return toUserView(user);
+    });
+  }
+
+  /** Deactivates rather than erases: cycle records keep naming the person. Their sessions end at once. */
+  async remove(id: number, actor: AuthenticatedUser): Promise<void> {
+    if (id === actor.id) {
+      throw new UsersException('self_change', 'You cannot remove your own account; ask another admin.');
+    }
+    await this.dataSource.transaction(async (manager) => {
+      const user = await this.findOrFail(manager, id);
+      await manager.update(User, { id: user.id }, { active: false, tokenVersion: user.tokenVersion + 1 });
+      await this.refreshTokens.revokeAllFor(user.id, manager);
+    });
+    this.logger.log(`User ${id} removed by ${actor.id}`);
+  }
+
+  private async findOrFail(manager: EntityManager, id: number): Promise<User> {
+    const user = await manager.findOne(User, { where: { id }, lock: { mode: 'pessimistic_write' } });
+    if (!user) throw new UsersException('user_not_found', `There is no person with id ${id}.`);
+    return user;
+  }
+
+  private async checkBinding(
+    manager: EntityManager,
+    role: User['role'],
+    catapultId: number | null,
+    squadronId: number | null,
+  ): Promise<void> {
+    const problem = catapultBindingProblem(role, catapultId);
+    if (problem) throw new UsersException('invalid_binding', problem);
+    if (catapultId !== null && !(await manager.existsBy(Catapult, { id: catapultId }))) {
+      throw new UsersException('unknown_reference', `There is no catapult with id ${catapultId}.`);
+    }
+    if (squadronId !== null && !(await manager.existsBy(Squadron, { id: squadronId }))) {
+      throw new UsersException('unknown_reference', `There is no squadron with id ${squadronId}.`);
+    }
+  }
+
+  private emailTaken(email: string): UsersException {
+    return new UsersException('email_taken', `Someone already signs in with ${email} (active or removed); use another e-mail or reactivate them.`);
+  }
+}

@@ -1,0 +1,116 @@
+import type { AircraftTypeView } from '@catline/contracts';
+import type { INestApplication } from '@nestjs/common';
+import request from 'supertest';
+import { aircraftTypeBody, createAircraft, createAircraftType } from './support/fleet-fixtures.js';
+import { bearer, signIn } from './support/sign-in.js';
+import { startTestApp } from './support/test-app.js';
+
+describe('aircraft types', () => {
+  let app: INestApplication;
+  let url: string;
+  let admin: string;
+
+  beforeAll(async () => {
+    ({ app, url } = await startTestApp());
+    admin = await signIn(url, 'admin@catline.example');
+  });
+
+  afterAll(async () => {
+    await app.close();
+  });
+
+  const list = async (): Promise<AircraftTypeView[]> => (await request(url).get('/api/aircraft-types').set(bearer(admin))).body;
+  const get = (id: number) => request(url).get(`/api/aircraft-types/${id}`).set(bearer(admin));
+  const putTable = (id: number, rows: unknown) => request(url).put(`/api/aircraft-types/${id}/launch-table`).set(bearer(admin)).send({ rows });
+
+  it('creates a type and reads it back whole', async () => {
+    const body = aircraftTypeBody();
+    const created = await request(url).post('/api/aircraft-types').set(bearer(admin)).send(body);
+    expect(created.status).toBe(201);
+    expect(created.body).toEqual({ id: expect.any(Number), ...body });
+    expect((await get(created.body.id)).body).toEqual(created.body);
+  });
+
+  it('creates a type that never needs afterburner when afterburnerFromLb is null', async () => {
+    const created = await request(url).post('/api/aircraft-types').set(bearer(admin)).send({ ...aircraftTypeBody(), afterburnerFromLb: null });
+    expect(created.status).toBe(201);
+    expect(created.body.afterburnerFromLb).toBeNull();
+  });
+
+  const good = aircraftTypeBody().launchTable;
+  it.each([
+    ['a missing launch table', { launchTable: undefined }, /launchTable/],
+    ['a launch table of one row', { launchTable: [good[0]] }, /launchTable needs at least two rows/],
+    ['a negative weight', { maxGrossWeightLb: -40_000 }, /maxGrossWeightLb must be a positive number/],
+    ['a weight given as text', { maxGrossWeightLb: '40000' }, /maxGrossWeightLb must be an integer number/],
+    ['a negative launch airspeed', { launchTable: [good[0], { ...good[1], minLaunchAirspeedKt: -1 }] }, /minLaunchAirspeedKt must be a positive number/],
+    ['weights not rising', { launchTable: [good[1], good[0]] }, /Launch table row 2 \(25000 lb\) must be heavier than row 1 \(40000 lb\)/],
+    ['a last trim band with an upper weight', { trimBands: [{ upToLb: 30_000, trimDeg: 10 }] }, /The last trim band must have no upper weight/],
+    ['a trim band without a trim', { trimBands: [{ upToLb: null }] }, /trimDeg must be a number/],
+    ['an extra field in a launch table row', { launchTable: [good[0], { ...good[1], note: 'x' }] }, /property note should not exist/],
+    ['the designation of another type', { designation: 'KS-7' }, /Another aircraft type is already designated KS-7/],
+  ])('refuses %s and creates nothing', async (_case, change, message) => {
+    const before = await list();
+    const response = await request(url).post('/api/aircraft-types').set(bearer(admin)).send({ ...aircraftTypeBody(), ...change });
+    expect(response.status).toBeGreaterThanOrEqual(400);
+    expect(response.status).toBeLessThan(500);
+    expect(response.body.message).toMatch(message);
+    expect(await list()).toEqual(before);
+  });
+
+  it('changes a type but not its launch table through PATCH', async () => {
+    const type = await createAircraftType(url, admin);
+    const response = await request(url).patch(`/api/aircraft-types/${type.id}`).set(bearer(admin)).send({ crosswindLimitKt: 18, afterburnerFromLb: null });
+    expect(response.status).toBe(200);
+    expect(response.body).toEqual({ ...type, crosswindLimitKt: 18, afterburnerFromLb: null });
+
+    const table = await request(url).patch(`/api/aircraft-types/${type.id}`).set(bearer(admin)).send({ launchTable: good });
+    expect(table.status).toBe(400);
+    expect(table.body.message).toMatch(/property launchTable should not exist/);
+  });
+
+  it('replaces the launch table', async () => {
+    const type = await createAircraftType(url, admin);
+    const rows = [
+      { grossWeightLb: 24_000, minLaunchAirspeedKt: 113.5 },
+      { grossWeightLb: 32_000, minLaunchAirspeedKt: 124 },
+      { grossWeightLb: 40_000, minLaunchAirspeedKt: 136 },
+    ];
+    const response = await putTable(type.id, rows);
+    expect(response.status).toBe(200);
+    expect(response.body).toEqual({ ...type, launchTable: rows });
+    expect((await get(type.id)).body.launchTable).toEqual(rows);
+  });
+
+  it.each([
+    ['repeated weights', [good[0], good[0]], /row 2 \(25000 lb\) must be heavier than row 1/],
+    ['a zero weight', [{ ...good[0], grossWeightLb: 0 }, good[1]], /grossWeightLb must be a positive number/],
+    ['rows that are not a list', { 0: good[0] }, /rows must be an array/],
+  ])('refuses a launch table with %s and keeps the old one', async (_case, rows, message) => {
+    const type = await createAircraftType(url, admin);
+    const response = await putTable(type.id, rows);
+    expect(response.status).toBe(400);
+    expect(response.body.message).toMatch(message);
+    expect((await get(type.id)).body).toEqual(type);
+  });
+
+  it('deletes an unused type and refuses one still used by aircraft with 409', async () => {
+    const unused = await createAircraftType(url, admin);
+    expect((await request(url).delete(`/api/aircraft-types/${unused.id}`).set(bearer(admin))).status).toBe(204);
+    expect((await get(unused.id)).status).toBe(404);
+
+    const used = await createAircraftType(url, admin);
+    await createAircraft(url, admin, { typeId: used.id });
+    const refused = await request(url).delete(`/api/aircraft-types/${used.id}`).set(bearer(admin));
+    expect(refused.status).toBe(409);
+    expect(refused.body.message).toBe(`1 aircraft are of type ${used.designation}; change or delete them before deleting the type.`);
+    expect((await get(used.id)).status).toBe(200);
+  });
+
+  it('answers 404 with a message for an unknown type', async () => {
+    const response = await get(999_999);
+    expect(response.status).toBe(404);
+    expect(response.body.message).toBe('There is no aircraft type with id 999999.');
+    expect((await putTable(999_999, good)).status).toBe(404);
+  });
+});

@@ -1,0 +1,92 @@
+import { ROLES, type Role } from '@catline/contracts';
+import type { INestApplication } from '@nestjs/common';
+import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
+import request from 'supertest';
+import { type MatrixContext, type MatrixRoute, matrixRoutes } from './role-matrix/index.js';
+import { bearer, demoEmail, signIn } from './support/sign-in.js';
+import { startTestApp } from './support/test-app.js';
+
+const key = (method: string, path: string) => `${method.toUpperCase()} ${path}`;
+
+/** Every HTTP route of the running app, read from its OpenAPI document (which lists every controller route). */
+function appRoutes(app: INestApplication): string[] {
+  const document = SwaggerModule.createDocument(app, new DocumentBuilder().build());
+  return Object.entries(document.paths).flatMap(([path, operations]) =>
+    Object.keys(operations as object)
+      .filter((method) => ['get', 'post', 'put', 'patch', 'delete'].includes(method))
+      .map((method) => key(method, path)),
+  );
+}
+
+function fillPath(path: string, params: Record<string, string | number> = {}): string {
+  return path.replace(/\{(\w+)\}/g, (_placeholder, name: string) => {
+    if (params[name] === undefined) throw new Error(`The example for ${path} gives no value for {${name}}`);
+    return encodeURIComponent(String(params[name]));
+  });
+}
+
+const isAllowed = (route: MatrixRoute, caller: Role | null) =>
+  route.allowed === 'public' || (caller !== null && route.allowed.includes(caller));
+
+describe('role matrix', () => {
+  let app: INestApplication;
+  let url: string;
+  const tokens = new Map<Role, string>();
+
+  beforeAll(async () => {
+    ({ app, url } = await startTestApp());
+    for (const role of ROLES) tokens.set(role, await signIn(url, demoEmail(role)));
+  });
+
+  afterAll(async () => {
+    await app.close();
+  });
+
+  async function call(route: MatrixRoute, caller: Role | null): Promise<request.Response> {
+    const context: MatrixContext = {
+      baseUrl: url,
+      caller,
+      allowed: isAllowed(route, caller),
+      tokenOf: (role) => tokens.get(role)!,
+    };
+    const example = (await route.example?.(context)) ?? {};
+    const pending = request(url)[route.method.toLowerCase() as 'get'](fillPath(route.path, example.params))
+      .query(example.query ?? {})
+      .set(example.headers ?? {});
+    if (caller) pending.set(bearer(tokens.get(caller)!));
+    return example.body === undefined ? pending : pending.send(example.body);
+  }
+
+  it('has a row for every route of the app, and no row for a route it lacks', () => {
+    const routes = appRoutes(app);
+    const rows = matrixRoutes.map((route) => key(route.method, route.path));
+    expect(routes.filter((route) => !rows.includes(route))).toEqual([]);
+    expect(rows.filter((row) => !routes.includes(row))).toEqual([]);
+    expect(rows.filter((row, i) => rows.indexOf(row) !== i)).toEqual([]);
+  });
+
+  it('lets no row count 401 or 403 as an acceptable refusal', () => {
+    expect(matrixRoutes.filter((route) => route.refusals?.some((status) => status === 401 || status === 403))).toEqual([]);
+  });
+
+  it.each(matrixRoutes.map((route) => [key(route.method, route.path), route] as const))(
+    '%s answers each role as the matrix says',
+    async (_name, route) => {
+      const outcomes: string[] = [];
+      const expected: string[] = [];
+      for (const caller of [null, ...ROLES]) {
+        const response = await call(route, caller);
+        const who = caller ?? 'nobody';
+        if (!isAllowed(route, caller)) {
+          expected.push(`${who}: ${caller ? 403 : 401}`);
+          outcomes.push(`${who}: ${response.status}`);
+        } else {
+          const accepted = (response.status >= 200 && response.status < 300) || (route.refusals ?? []).includes(response.status);
+          expected.push(`${who}: admitted`);
+          outcomes.push(`${who}: ${accepted ? 'admitted' : `${response.status} ${JSON.stringify(response.body)}`}`);
+        }
+      }
+      expect(outcomes).toEqual(expected);
+    },
+  );
+});

@@ -1,0 +1,44 @@
+import { testShip } from '../testing/profiles.fixture.js';
+import { feet, nauticalMiles } from '../units/units.js';
+import { afterTheShot, clearingTurn, departureFor } from './after-shot.js';
+import { weatherCase } from './weather-case.js';
+
+describe('weather case', () => {
+  it.each([
+    [3000, 5, 'I'], // NAVEDTRA 14342A, table 11-4: case I, ceiling at least 3,000 ft and visibility 5 nm
+    [null, 10, 'I'], // NAVEDTRA 14342A, table 11-4: no ceiling counts as above 3,000 ft
+    [2999, 5, 'II'], // NAVEDTRA 14342A, table 11-4: case II, at least 1,000 ft and 5 nm
+    [1000, 5, 'II'], // NAVEDTRA 14342A, table 11-4
+    [3000, 4.9, 'III'], // NAVEDTRA 14342A, table 11-4: below case II minimums is case III
+    [999, 5, 'III'], // NAVEDTRA 14342A, table 11-4
+  ] as const)('is case %s ft / %s nm by day: %s', (ceiling, visibility, expected) => {
+    expect(weatherCase({ ceiling: ceiling === null ? null : feet(ceiling), visibility: nauticalMiles(visibility), night: false })).toBe(expected);
+  });
+
+  it('is always case III at night', () => {
+    expect(weatherCase({ ceiling: null, visibility: nauticalMiles(20), night: true })).toBe('III'); // NAVEDTRA 14342A, table 11-4: night is case III
+  });
+});
+
+describe('after the shot', () => {
+  it('turns right off a bow catapult and left off a waist catapult by day, not at night', () => {
+    // Common practice, no source: about 10 degrees right off the bow, left off the waist, none at night.
+    expect(clearingTurn(testShip, 'bow', false)).toEqual({ direction: 'right', degrees: 10 });
+    expect(clearingTurn(testShip, 'waist', false)).toEqual({ direction: 'left', degrees: 10 });
+    expect(clearingTurn(testShip, 'bow', true).direction).toBe('none');
+    expect(clearingTurn(testShip, 'waist', true).direction).toBe('none');
+  });
+
+  it('gives the case I jet departure from the ship profile', () => {
+    const departure = departureFor(testShip, 'I');
+    expect(departure.altitude).toBe(500); // NAVEDTRA 14342A, table 11-10: 500 ft
+    expect(departure.untilRange).toBe(7); // NAVEDTRA 14342A, table 11-10: until 7 nm
+    expect(departure.speed).toBe(300); // common practice, no source: 300 kt
+  });
+
+  it('puts clearing turn and departure on one card', () => {
+    const card = afterTheShot(testShip, { position: 'waist', night: true, weatherCase: 'III' });
+    expect(card.clearingTurn.direction).toBe('none');
+    expect(card.departure.summary).toBe('Case III test departure.');
+  });
+});

@@ -1,0 +1,51 @@
+import type { CatapultPosition } from '../catapult/end-speed.js';
+import type { Degrees, Feet, Knots, NauticalMiles } from '../units/units.js';
+import type { WeatherCase } from './weather-case.js';
+
+export type TurnDirection = 'left' | 'right' | 'none';
+
+/** The turn the aircraft makes right after the shot to clear the ship's bow. */
+export interface ClearingTurn {
+  readonly direction: TurnDirection;
+  /** Heading change, degrees; 0 with direction `none`. */
+  readonly degrees: Degrees;
+}
+
+/** The departure a pilot flies after the clearing turn, as the ship's procedures write it. */
+export interface DepartureInstruction {
+  /** The instruction in words, shown to the pilot as written. */
+  readonly summary: string;
+  /** Altitude to hold after the clearing turn, feet; null when not restricted. */
+  readonly altitude: Feet | null;
+  /** Range from the ship (nautical miles) until which the altitude is held; null when not restricted. */
+  readonly untilRange: NauticalMiles | null;
+  /** Speed to hold, knots; null when not restricted. */
+  readonly speed: Knots | null;
+}
+
+/** The ship's own after-the-shot rules: data entered by the user, not code. */
+export interface ShipProfile {
+  readonly clearingTurns: Readonly<Record<CatapultPosition, { readonly day: ClearingTurn; readonly night: ClearingTurn }>>;
+  readonly departures: Readonly<Record<WeatherCase, DepartureInstruction>>;
+}
+
+/** What the pilot does after the shot. */
+export interface AfterTheShot {
+  readonly clearingTurn: ClearingTurn;
+  readonly departure: DepartureInstruction;
+}
+
+/** The clearing turn off a catapult in this position, by day or night, from the ship's profile. */
+export const clearingTurn = (ship: ShipProfile, position: CatapultPosition, night: boolean): ClearingTurn =>
+  night ? ship.clearingTurns[position].night : ship.clearingTurns[position].day;
+
+/** The departure for the weather case, from the ship's profile. */
+export const departureFor = (ship: ShipProfile, weather: WeatherCase): DepartureInstruction => ship.departures[weather];
+
+/** Clearing turn and departure together, as a pilot's launch card shows them. */
+export function afterTheShot(
+  ship: ShipProfile,
+  launch: { readonly position: CatapultPosition; readonly night: boolean; readonly weatherCase: WeatherCase },
+): AfterTheShot {
+  return { clearingTurn: clearingTurn(ship, launch.position, launch.night), departure: departureFor(ship, launch.weatherCase) };
+}

@@ -1,0 +1,32 @@
+import { LaunchMathInputError } from '../errors.js';
+import { celsius, celsiusToKelvin, kelvin, kilogramsPerCubicMetre, knots, metres, pascals } from '../units/units.js';
+import { airDensity, densityRatio, hotDayMinimumLaunchAirspeed, isaTroposphere } from './isa.js';
+
+describe('ISA air density', () => {
+  it('is 1.225 kg/m3 at 15 C and 101325 Pa', () => {
+    expect(airDensity(celsiusToKelvin(celsius(15)), pascals(101325))).toBeCloseTo(1.225, 5); // ICAO Doc 7488/3 (1993) / US Standard Atmosphere 1976: 1.225 kg/m3
+  });
+
+  it('is 1.1116 kg/m3 at 1000 m', () => {
+    const air = isaTroposphere(metres(1000));
+    expect(Math.abs(air.density - 1.1116)).toBeLessThan(1e-4); // ICAO Doc 7488/3 (1993) / US Standard Atmosphere 1976: 1.1116 kg/m3 at 1000 m
+    expect(air.temperature).toBeCloseTo(281.65, 9); // ICAO Doc 7488/3 (1993): 8.50 C at 1000 m (lapse rate 6.5 K/km)
+  });
+
+  it('has a density ratio of one at sea level and below one on a hot day', () => {
+    expect(densityRatio(kilogramsPerCubicMetre(1.225))).toBe(1); // ICAO Doc 7488/3 (1993): sea-level density 1.225 kg/m3
+    const hotDay = densityRatio(airDensity(celsiusToKelvin(celsius(35)), pascals(101325)));
+    expect(hotDay).toBeCloseTo(288.15 / 308.15, 4); // at equal pressure density goes as 1/T (ideal gas law)
+  });
+
+  it('raises a minimum launch airspeed by 1 / sqrt(sigma) on a hot day', () => {
+    expect(hotDayMinimumLaunchAirspeed(knots(120), 0.81)).toBeCloseTo(120 / 0.9, 9); // TAS = EAS / sqrt(sigma) (product brief)
+    expect(hotDayMinimumLaunchAirspeed(knots(120), 1)).toBe(120);
+  });
+
+  it('refuses an impossible temperature, pressure or altitude', () => {
+    expect(() => airDensity(kelvin(0), pascals(101325))).toThrow(LaunchMathInputError);
+    expect(() => airDensity(kelvin(288.15), pascals(-1))).toThrow(LaunchMathInputError);
+    expect(() => isaTroposphere(metres(12000))).toThrow(LaunchMathInputError);
+  });
+});

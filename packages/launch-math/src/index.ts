@@ -1,0 +1,24 @@
+export { LaunchMathInputError } from './errors.js';
+export * from './units/units.js';
+export * from './units/angles.js';
+export * from './wind/wind-over-deck.js';
+export * from './atmosphere/isa.js';
+export * from './catapult/end-speed.js';
+export * from './aircraft/aircraft-profile.js';
+export * from './launch/launch-assessment.js';
+export * from './launch/launch-settings.js';
+export {
+  catapultClosedReason,
+  projectLaunchTimes,
+  type LaunchCatapult,
+  type LaunchPriority,
+  type LaunchWindow,
+  type ProjectedSlot,
+  type Projection,
+  type ProjectionInput,
+  type UnschedulableReason,
+  type UnschedulableSlot,
+} from './schedule/launch-projection.js';
+export * from './schedule/lineup-suggestion.js';
+export * from './after-shot/weather-case.js';
+export * from './after-shot/after-shot.js';

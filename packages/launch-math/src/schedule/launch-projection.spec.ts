@@ -1,0 +1,101 @@
+import fc from 'fast-check';
+import { LaunchMathInputError } from '../errors.js';
+import { at, CYCLE_START, fourCatapults, projectionInputArbitrary, scheduleViolations } from '../testing/cycles.fixture.js';
+import { seconds } from '../units/units.js';
+import { projectLaunchTimes, type ProjectionInput } from './launch-projection.js';
+
+const base = (overrides: Partial<ProjectionInput> = {}): ProjectionInput => ({
+  cycleStart: CYCLE_START,
+  window: { start: CYCLE_START, end: at(3600) },
+  catapults: fourCatapults(60),
+  landingAreaInUse: false,
+  lanes: {},
+  pairMinimumGap: seconds(0),
+  ...overrides,
+});
+
+const timesOf = (input: ProjectionInput): Record<string, number> =>
+  Object.fromEntries(projectLaunchTimes(input).slots.map((slot) => [slot.slotId, (slot.time - CYCLE_START) / 1000]));
+
+describe('projected launch times', () => {
+  it('launch a lane one reset interval apart, in lane order', () => {
+    expect(timesOf(base({ lanes: { cat1: ['a', 'b', 'c'] } }))).toEqual({ a: 0, b: 60, c: 120 });
+  });
+
+  it('keep the pair gap between the two catapults of a pair but not across pairs', () => {
+    const times = timesOf(base({ pairMinimumGap: seconds(20), lanes: { cat1: ['a'], cat2: ['b'], cat3: ['c'] } }));
+    expect(times).toEqual({ a: 0, b: 20, c: 0 });
+  });
+
+  it('sustain about one launch every 30 s from four catapults each launching every 1 min 45 s', () => {
+    const lanes = Object.fromEntries([1, 2, 3, 4].map((n) => [`cat${n}`, Array.from({ length: 30 }, (_, i) => `c${n}-${i}`)]));
+    const projection = projectLaunchTimes(base({ catapults: fourCatapults(105), pairMinimumGap: seconds(10), lanes, window: { start: CYCLE_START, end: at(7200) } }));
+    const times = projection.slots.map((slot) => slot.time / 1000);
+    // Launch rate over the run: each catapult is busy one reset interval per launch, the last included.
+    const secondsPerLaunch = (Math.max(...times) + 105 - Math.min(...times)) / times.length;
+    expect(Math.abs(secondsPerLaunch - 30)).toBeLessThanOrEqual(5); // PBS Frontline: about one aircraft every 30 s
+    const cat1 = projection.slots.filter((slot) => slot.catapultId === 'cat1').map((slot) => slot.time / 1000);
+    expect(cat1.slice(1).map((time, i) => time - cat1[i])).toEqual(Array(29).fill(105)); // PBS Frontline: each catapult about every 1 min 45 s
+  });
+
+  it('list the slots that miss the window and the last launch', () => {
+    const projection = projectLaunchTimes(base({ window: { start: CYCLE_START, end: at(100) }, lanes: { cat1: ['a', 'b', 'c'] } }));
+    expect(projection.missingWindow).toEqual(['c']);
+    expect(projection.lastLaunch).toBe(at(120));
+    expect(projection.slots.map((slot) => slot.missesWindow)).toEqual([false, false, true]);
+  });
+
+  it('wait for the window to open', () => {
+    expect(timesOf(base({ window: { start: at(300), end: at(900) }, lanes: { cat1: ['a'] } }))).toEqual({ a: 300 });
+  });
+
+  it('cannot schedule slots on a catapult that is down or on the waist while the landing area is in use', () => {
+    const projection = projectLaunchTimes(
+      base({ catapults: fourCatapults(60, [false, true, true, true]), landingAreaInUse: true, lanes: { cat1: ['a'], cat2: ['b'], cat3: ['c'] } }),
+    );
+    expect(projection.slots.map((slot) => slot.slotId)).toEqual(['b']);
+    expect(projection.unschedulable).toEqual([
+      { slotId: 'a', catapultId: 'cat1', reason: 'catapult_down' },
+      { slotId: 'c', catapultId: 'cat3', reason: 'waist_closed' },
+    ]);
+  });
+
+  it('keep launched slots at their actual times and count the reset from them', () => {
+    const projection = projectLaunchTimes(base({ lanes: { cat1: ['a', 'b'] }, launched: { a: at(45) } }));
+    expect(projection.slots).toEqual([
+      { slotId: 'a', catapultId: 'cat1', place: 1, time: at(45), launched: true, missesWindow: false },
+      { slotId: 'b', catapultId: 'cat1', place: 2, time: at(105), launched: false, missesWindow: false },
+    ]);
+  });
+
+  it('project nothing before now or before an aircraft reaches its catapult', () => {
+    expect(timesOf(base({ now: at(30), lanes: { cat1: ['a'], cat3: ['b'] }, notBefore: { b: at(200) } }))).toEqual({ a: 30, b: 200 });
+  });
+
+  it('hold lower priorities until every higher priority has launched', () => {
+    const times = timesOf(
+      base({ lanes: { cat1: ['tanker'], cat3: ['fighter', 'spare'] }, notBefore: { tanker: at(90) }, priorities: { tanker: 'first', spare: 'last' } }),
+    );
+    expect(times).toEqual({ tanker: 90, fighter: 90, spare: 150 });
+  });
+
+  it('lets nothing overtake what is ahead of it in its lane', () => {
+    const times = timesOf(base({ lanes: { cat1: ['spare', 'tanker'], cat3: ['fighter'] }, priorities: { tanker: 'first', spare: 'last' } }));
+    expect(times).toEqual({ fighter: 0, spare: 0, tanker: 60 });
+  });
+
+  it('refuses a slot in two lanes or a lane for an unknown catapult', () => {
+    expect(() => projectLaunchTimes(base({ lanes: { cat1: ['a'], cat2: ['a'] } }))).toThrow(LaunchMathInputError);
+    expect(() => projectLaunchTimes(base({ lanes: { cat9: ['a'] } }))).toThrow(LaunchMathInputError);
+    expect(() => projectLaunchTimes(base({ window: { start: at(10), end: at(5) } }))).toThrow(LaunchMathInputError);
+  });
+
+  it('never break a reset interval, a pair gap, an earliest time, a priority or lane order', () => {
+    fc.assert(
+      fc.property(projectionInputArbitrary, (input) => {
+        expect(scheduleViolations(input, projectLaunchTimes(input))).toEqual([]);
+      }),
+      { numRuns: 300 },
+    );
+  });
+});

@@ -49,3 +49,21 @@ export type UpdateCycleConditionsRequest = Partial<CycleConditions> & {
   /** The cycle version the change was based on. */
   basisVersion: number;
 };
+
+/** Starting or closing a cycle: the cycle version the command was based on. */
+export interface CycleCommandRequest {
+  basisVersion: number;
+}
+
+/** Adds an aircraft to a cycle's deck pool. */
+export interface AddSlotRequest {
+  aircraftId: number;
+  pilotId?: number | null;
+  mission: string;
+  fuelLb: number;
+  stores: string;
+  grossWeightLb: number;
+  tanker: boolean;
+  earlyWarning: boolean;
+  spare: boolean;
+}

@@ -44,11 +44,15 @@ export interface WindOverDeck {
 export interface LaunchFigures extends WindOverDeck {
   /** Lowest catapult setting reaching the wanted end speed; null when out of range. */
   catapultSetting: number | null;
+  /** At the setting given, or at the highest setting when none reaches the wanted end speed. */
   endSpeedKt: number;
-  /** Minimum launch airspeed (density-corrected) plus the required excess, knots. */
-  requiredAirspeedKt: number;
-  requiredWindOverDeckKt: number;
-  marginKt: number;
+  /**
+   * Minimum launch airspeed (density-corrected) plus the required excess, knots. This and the two
+   * figures below are null when the gross weight is outside the type's launch table.
+   */
+  requiredAirspeedKt: number | null;
+  requiredWindOverDeckKt: number | null;
+  marginKt: number | null;
   go: boolean;
   reasons: NoGoReason[];
   /** Degrees; positive to starboard, 0 for none (night). */
@@ -133,6 +137,7 @@ export const CHANGE_KINDS = [
   'cycle_started',
   'cycle_closed',
   'air_plan_imported',
+  'slot_added',
 ] as const;
 export type ChangeKind = (typeof CHANGE_KINDS)[number];
 

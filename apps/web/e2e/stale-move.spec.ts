@@ -1,0 +1,36 @@
+import { expect, test } from '@playwright/test';
+import { planCycle } from './support/demo-api.js';
+import { card, dragWithMouse, lane, openAs, pool } from './support/screens.js';
+
+test('a move based on a lineup that changed meanwhile is refused with the server’s reason and rolled back', async ({ browser }) => {
+  const { cycle } = await planCycle({ aircraft: [{ side: '104', grossWeightLb: 41_000 }] });
+  const first = await openAs(browser, 'handler', `/lineup?cycle=${cycle.id}`);
+
+  // The second handler's screen is a moment behind: broadcasts reach it late (here: not at all).
+  const lagging = await (await browser.newContext({ viewport: { width: 1366, height: 768 } })).newPage();
+  await lagging.routeWebSocket(/\/socket\.io\//, (socket) => {
+    const server = socket.connectToServer();
+    server.onMessage((message) => {
+      if (!String(message).includes('lineup:change')) socket.send(message);
+    });
+  });
+  await lagging.goto(`/lineup?cycle=${cycle.id}`);
+  await lagging.getByLabel('E-mail').fill('handler@catline.example');
+  await lagging.getByLabel('Password').fill('catline-demo');
+  await lagging.getByRole('button', { name: 'Sign in' }).click();
+  await expect(card(pool(lagging), '104')).toBeVisible();
+
+  await dragWithMouse(first, card(pool(first), '104'), lane(first, 2).getByTestId('lane-drop-zone'));
+  await expect(card(lane(first, 2), '104')).toBeVisible();
+  await expect(card(pool(lagging), '104')).toBeVisible();
+
+  await dragWithMouse(lagging, card(pool(lagging), '104'), lane(lagging, 3).getByTestId('lane-drop-zone'));
+
+  const notice = lagging.getByTestId('notice');
+  await expect(notice).toContainText('refused');
+  await expect(notice).toContainText('104');
+  // Rolled back and refreshed: the lagging screen now shows where the first handler put it.
+  await expect(card(lane(lagging, 2), '104')).toBeVisible();
+  await expect(card(lane(lagging, 3), '104')).toHaveCount(0);
+  await expect(card(lane(first, 2), '104')).toBeVisible();
+});

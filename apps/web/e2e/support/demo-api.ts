@@ -1,0 +1,122 @@
+import { expect, request, type APIRequestContext } from '@playwright/test';
+import type {
+  AircraftView,
+  CycleView,
+  LineupChange,
+  LineupCommandResult,
+  LineupSnapshot,
+  SessionResponse,
+  ShipView,
+  UserView,
+} from '@catline/contracts';
+
+export const DEMO_PASSWORD = 'catline-demo';
+export const demoEmail = (who: string) => `${who}@catline.example`;
+
+const baseURL = 'http://127.0.0.1:3100';
+
+/** An API client signed in as one demo person: the tests set up their data the way the screens would. */
+export async function apiAs(who: string, password = DEMO_PASSWORD): Promise<APIRequestContext> {
+  const anonymous = await request.newContext({ baseURL });
+  const response = await anonymous.post('/api/auth/login', { data: { email: demoEmail(who), password } });
+  expect(response.status(), await response.text()).toBe(200);
+  const session = (await response.json()) as SessionResponse;
+  await anonymous.dispose();
+  return request.newContext({ baseURL, extraHTTPHeaders: { Authorization: `Bearer ${session.accessToken}` } });
+}
+
+async function ok<T>(response: Awaited<ReturnType<APIRequestContext['get']>>): Promise<T> {
+  expect(response.ok(), `${response.url()} → ${response.status()} ${await response.text()}`).toBe(true);
+  return (await response.json()) as T;
+}
+
+export interface PlannedAircraft {
+  side: string;
+  grossWeightLb: number;
+  pilot?: string;
+  spare?: boolean;
+}
+
+export interface PlanOptions {
+  aircraft: PlannedAircraft[];
+  start?: boolean;
+  night?: boolean;
+}
+
+/** Air operations creates a cycle flying now in good wind, with the given aircraft in its deck pool. */
+export async function planCycle({ aircraft, start = false, night = false }: PlanOptions) {
+  const airops = await apiAs('airops');
+  const [ship] = await ok<ShipView[]>(await airops.get('/api/ships'));
+  const cycles = await ok<CycleView[]>(await airops.get('/api/cycles'));
+  const now = Date.now();
+  const cycle = await ok<CycleView>(
+    await airops.post('/api/cycles', {
+      data: {
+        shipId: ship.id,
+        number: Math.max(0, ...cycles.map((existing) => existing.number)) + 1,
+        plannedLaunchAt: new Date(now + 5 * 60_000).toISOString(),
+        windowStartAt: new Date(now - 5 * 60_000).toISOString(),
+        windowEndAt: new Date(now + 60 * 60_000).toISOString(),
+        shipCourseDeg: 0,
+        shipSpeedKt: 25,
+        trueWindFromDeg: 0,
+        trueWindSpeedKt: 12,
+        temperatureC: 18,
+        pressureHpa: 1015,
+        weatherCase: night ? 'III' : 'I',
+        night,
+        landingAreaInUse: false,
+      },
+    }),
+  );
+  const fleet = await ok<AircraftView[]>(await airops.get('/api/aircraft'));
+  const pilots = await ok<UserView[]>(await airops.get('/api/users/pilots'));
+  const slotIds = new Map<string, number>();
+  for (const planned of aircraft) {
+    const plane = fleet.find((candidate) => candidate.sideNumber === planned.side);
+    expect(plane, `aircraft ${planned.side} in the demo fleet`).toBeDefined();
+    const result = await ok<LineupCommandResult>(
+      await airops.post(`/api/cycles/${cycle.id}/slots`, {
+        data: {
+          aircraftId: plane!.id,
+          pilotId: planned.pilot ? pilots.find((pilot) => pilot.email === demoEmail(planned.pilot!))?.id : undefined,
+          mission: 'Training sortie',
+          fuelLb: 9000,
+          stores: 'Clean',
+          grossWeightLb: planned.grossWeightLb,
+          tanker: false,
+          earlyWarning: false,
+          spare: planned.spare ?? false,
+        },
+      }),
+    );
+    const slot = result.change.patch.slots?.find((candidate) => candidate.sideNumber === planned.side);
+    slotIds.set(planned.side, slot!.id);
+  }
+  if (start) {
+    const current = await ok<CycleView>(await airops.get(`/api/cycles/${cycle.id}`));
+    await ok(await airops.post(`/api/cycles/${cycle.id}/start`, { data: { basisVersion: current.version } }));
+  }
+  await airops.dispose();
+  return { cycle, slotIds };
+}
+
+export async function lineupOf(api: APIRequestContext, cycleId: number) {
+  return ok<LineupSnapshot>(await api.get(`/api/cycles/${cycleId}/lineup`));
+}
+
+export async function changesOf(api: APIRequestContext, cycleId: number) {
+  return ok<LineupChange[]>(await api.get(`/api/cycles/${cycleId}/lineup/changes?since=0`));
+}
+
+/** The handler puts a slot at the end of a catapult's lane through the API. */
+export async function placeInLane(handler: APIRequestContext, cycleId: number, slotId: number, catapultNumber: number) {
+  const snapshot = await lineupOf(handler, cycleId);
+  const lane = snapshot.lanes.find((candidate) => candidate.number === catapultNumber)!;
+  const slot = snapshot.slots.find((candidate) => candidate.id === slotId)!;
+  await ok(
+    await handler.post(`/api/cycles/${cycleId}/lineup/moves`, {
+      data: { slotId, slotVersion: slot.version, toCatapultId: lane.catapultId, toIndex: lane.slotIds.length, targetLaneOrder: lane.slotIds },
+    }),
+  );
+}

@@ -1,0 +1,40 @@
+import { expect, type Browser, type Locator, type Page } from '@playwright/test';
+import { DEMO_PASSWORD, demoEmail } from './demo-api.js';
+
+/** Opens a screen as a person: the app sends them to sign in and back to the screen they asked for. */
+export async function openAs(browser: Browser, who: string, path: string, viewport = { width: 1366, height: 768 }) {
+  const context = await browser.newContext({ viewport });
+  const page = await context.newPage();
+  await page.goto(path);
+  await signIn(page, who);
+  await expect(page).toHaveURL(new RegExp(path.replace(/[?]/g, '\\?')));
+  return page;
+}
+
+export async function signIn(page: Page, who: string) {
+  await expect(page).toHaveURL(/\/sign-in/);
+  await page.getByLabel('E-mail').fill(demoEmail(who));
+  await page.getByLabel('Password').fill(DEMO_PASSWORD);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+}
+
+export const lane = (page: Page, catapultNumber: number) => page.locator(`[data-testid="lane"][data-catapult-number="${catapultNumber}"]`);
+export const pool = (page: Page) => page.getByTestId('deck-pool');
+export const card = (scope: Page | Locator, side: string) => scope.locator(`[data-testid="slot-card"][data-side-number="${side}"]`);
+
+/** A real pointer drag: press, move in steps (dnd-kit waits for movement), release. */
+export async function dragWithMouse(page: Page, from: Locator, to: Locator) {
+  const start = (await from.boundingBox())!;
+  const end = (await to.boundingBox())!;
+  await page.mouse.move(start.x + start.width / 2, start.y + start.height / 3);
+  await page.mouse.down();
+  await page.mouse.move(start.x + start.width / 2 + 12, start.y + start.height / 3 + 4, { steps: 4 });
+  await page.mouse.move(end.x + end.width / 2, end.y + Math.min(end.height / 2, 40), { steps: 15 });
+  await page.mouse.up();
+}
+
+/** Fails when the page is wider than the window: something overflows sideways. */
+export async function expectNoSidewaysOverflow(page: Page) {
+  const widths = await page.evaluate(() => ({ content: document.documentElement.scrollWidth, window: window.innerWidth }));
+  expect(widths.content, `page is ${widths.content}px wide in a ${widths.window}px window`).toBeLessThanOrEqual(widths.window);
+}

@@ -1,0 +1,47 @@
+import { existsSync } from 'node:fs';
+import { defineConfig } from '@playwright/test';
+
+// DB_* and JWT_SECRET come from the workspace .env; the browser tests get a database of their own.
+if (existsSync('../../.env')) process.loadEnvFile('../../.env');
+
+const port = '3100';
+const baseURL = `http://127.0.0.1:${port}`;
+
+export default defineConfig({
+  testDir: 'e2e',
+  outputDir: 'test-results',
+  timeout: 60_000,
+  expect: { timeout: 5_000 },
+  fullyParallel: false,
+  workers: 1,
+  retries: 0,
+  reporter: process.env.CATLINE_TEST_RESULTS
+    ? [['list'], ['json', { outputFile: process.env.CATLINE_TEST_RESULTS }]]
+    : 'list',
+  use: {
+    baseURL,
+    trace: 'off',
+    screenshot: 'only-on-failure',
+    launchOptions: {
+      executablePath: '/usr/bin/chromium',
+      args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+    },
+  },
+  webServer: {
+    // The built app served by the API, as `npm start` serves it, on a freshly reset database.
+    command: 'node ../api/dist/database/reset.js && node ../api/dist/main.js',
+    url: `${baseURL}/api/health`,
+    reuseExistingServer: false,
+    timeout: 120_000,
+    stdout: 'ignore',
+    stderr: 'pipe',
+    env: {
+      PORT: port,
+      DB_NAME: `${process.env.DB_NAME ?? 'catline'}_e2e`,
+      WEB_ORIGINS: baseURL,
+      NODE_ENV: 'production',
+      // Every test signs its people in afresh; the per-minute sign-in limit is for password guessing.
+      LOGIN_RATE_LIMIT: '1000',
+    },
+  },
+});

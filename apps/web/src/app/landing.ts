@@ -1,0 +1,30 @@
+import type { Role } from '@catline/contracts';
+
+export interface Screen {
+  path: string;
+  label: string;
+}
+
+const screens = {
+  lineup: { path: '/lineup', label: 'Lineup' },
+  catStation: { path: '/cat-station', label: 'Cat station' },
+  myLaunch: { path: '/my-launch', label: 'My launch' },
+  cycles: { path: '/cycles', label: 'Cycles' },
+  fleet: { path: '/fleet', label: 'Fleet' },
+  launchData: { path: '/launch-data', label: 'Launch data' },
+  people: { path: '/people', label: 'People' },
+} satisfies Record<string, Screen>;
+
+const shared = [screens.cycles, screens.fleet, screens.launchData];
+
+/** Each role's screens, its main screen first: that is where it lands after signing in. */
+export const SCREENS_BY_ROLE: Record<Role, Screen[]> = {
+  handler: [screens.lineup, ...shared],
+  catapult_officer: [screens.catStation, screens.lineup, ...shared],
+  pilot: [screens.myLaunch, screens.lineup, ...shared],
+  air_operations: [screens.cycles, screens.lineup, screens.fleet, screens.launchData],
+  admin: [screens.people, screens.fleet, screens.launchData, screens.cycles, screens.lineup],
+  observer: [screens.lineup, ...shared],
+};
+
+export const landingPath = (role: Role) => SCREENS_BY_ROLE[role][0].path;

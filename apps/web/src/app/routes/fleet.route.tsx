@@ -1,0 +1,5 @@
+import { FleetScreen } from '../../features/fleet/components/fleet-screen.js';
+
+export function FleetRoute() {
+  return <FleetScreen />;
+}

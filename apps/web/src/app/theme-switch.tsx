@@ -1,0 +1,34 @@
+import { HStack, NativeSelect } from '@chakra-ui/react';
+import { MoonIcon, SunIcon } from '../components/icons.js';
+import { setThemeOverride, type ThemeOverride, useThemeState } from '../theme/theme-mode.js';
+
+const choices: { value: ThemeOverride; label: string }[] = [
+  { value: 'auto', label: 'Auto' },
+  { value: 'day', label: 'Day' },
+  { value: 'night', label: 'Night' },
+];
+
+/** The manual override of the automatic day/night theme. */
+export function ThemeSwitch() {
+  const { override, mode } = useThemeState();
+  return (
+    <HStack gap="1.5" data-testid="theme-switch" data-mode={mode}>
+      <span aria-hidden="true">{mode === 'night' ? <MoonIcon /> : <SunIcon />}</span>
+      <NativeSelect.Root size="xs" width="auto">
+        <NativeSelect.Field
+          aria-label="Theme"
+          title="Auto dims the screen while the cycle on it flies at night"
+          value={override}
+          onChange={(event) => setThemeOverride(event.currentTarget.value as ThemeOverride)}
+        >
+          {choices.map((choice) => (
+            <option key={choice.value} value={choice.value}>
+              {choice.label}
+            </option>
+          ))}
+        </NativeSelect.Field>
+        <NativeSelect.Indicator />
+      </NativeSelect.Root>
+    </HStack>
+  );
+}

@@ -1,0 +1,38 @@
+import { READINESS_STEPS, type LaneView, type LineupSnapshot, type ReadinessStep, type SlotView } from '@catline/contracts';
+
+const finished = new Set(['launched', 'down', 'scratched']);
+
+/** My catapult's lane: the aircraft on it now (first not yet gone) and the two after it. */
+export function catapultQueue(snapshot: LineupSnapshot, catapultId: number) {
+  const lane = snapshot.lanes.find((candidate) => candidate.catapultId === catapultId);
+  if (!lane) return undefined;
+  const slots = new Map(snapshot.slots.map((slot) => [slot.id, slot]));
+  const waiting = lane.slotIds.map((id) => slots.get(id)).filter((slot): slot is SlotView => !!slot && !finished.has(slot.status));
+  return { lane, current: waiting[0], next: waiting.slice(1, 3) };
+}
+
+export const STEP_LABELS: Record<ReadinessStep, string> = {
+  taxiing: 'Taxiing',
+  on_catapult: 'On catapult',
+  weight_agreed: 'Weight agreed',
+  tensioned: 'Tensioned',
+};
+
+/** How far along the readiness steps a slot is: the index of its last step done, -1 before the first. */
+export function stepIndex(slot: SlotView): number {
+  return READINESS_STEPS.indexOf(slot.status as ReadinessStep);
+}
+
+export const canSuspend = (slot: SlotView) => stepIndex(slot) >= 0;
+
+/** Everything that still stands between this aircraft and the shot, in the deck crew's words. */
+export function launchBlockers(slot: SlotView, lane: LaneView, snapshot: LineupSnapshot): string[] {
+  const blockers: string[] = [];
+  if (snapshot.cycle.state !== 'executing') blockers.push('The cycle has not started launching.');
+  if (lane.status === 'down') blockers.push(`Cat ${lane.number} is down.`);
+  if (lane.closed) blockers.push(`Cat ${lane.number} is closed while the landing area is in use.`);
+  if (!slot.pilotWeightAckAt) blockers.push('The pilot has not acknowledged the gross weight.');
+  if (!slot.catapultWeightAckAt) blockers.push('You have not agreed the gross weight.');
+  if (slot.status !== 'tensioned') blockers.push('The aircraft is not tensioned.');
+  return blockers;
+}

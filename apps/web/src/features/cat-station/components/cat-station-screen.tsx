@@ -1,0 +1,137 @@
+import { Box, Flex, Grid, Stack, Text } from '@chakra-ui/react';
+import type { LineupSnapshot } from '@catline/contracts';
+import { CautionLine } from '../../../components/caution-line.js';
+import { ConnectionBadge } from '../../../components/connection-badge.js';
+import { CyclePicker } from '../../../components/cycle-picker.js';
+import { PageHeader } from '../../../components/page-header.js';
+import { EmptyState, ErrorState, LoadingState, QueryView } from '../../../components/query-states.js';
+import { NoticeBanner, refusalNotice, useNotice } from '../../../components/refusal-notice.js';
+import { SlotStatusBadge } from '../../../components/slot-status-badge.js';
+import { formatOptionalClock } from '../../../lib/format.js';
+import { useLiveCycle } from '../../../lib/live/use-live-cycle.js';
+import { useViewedCycle } from '../../../lib/queries/use-viewed-cycle.js';
+import { useSessionUser } from '../../../lib/session-store.js';
+import { useCycleTheme } from '../../../theme/use-cycle-theme.js';
+import { useAdvanceSlot } from '../api/advance-slot.js';
+import { useLaunchSlot } from '../api/launch-slot.js';
+import { useSuspendSlot } from '../api/suspend-slot.js';
+import { catapultQueue } from '../cat-station-model.js';
+import { useLaunchIntent } from '../hooks/use-launch-intent.js';
+import { AircraftFigures } from './aircraft-figures.js';
+import { LaunchPanel } from './launch-panel.js';
+import { NextUp } from './next-up.js';
+import { ReadinessSteps } from './readiness-steps.js';
+import { SuspendPanel } from './suspend-panel.js';
+
+function Station({ snapshot, catapultId }: { snapshot: LineupSnapshot; catapultId: number }) {
+  const cycleId = snapshot.cycle.id;
+  const queue = catapultQueue(snapshot, catapultId);
+  const current = queue?.current;
+  const { notice, show, dismiss } = useNotice();
+  const advance = useAdvanceSlot(cycleId);
+  const suspend = useSuspendSlot(cycleId);
+  const launch = useLaunchSlot(cycleId);
+  const launchKey = useLaunchIntent(current?.id);
+  const anyPending = advance.isPending || suspend.isPending || launch.isPending;
+
+  if (!queue) {
+    return <EmptyState title="Your catapult is not in this cycle">Pick the cycle of your ship above, or ask the admin to check your catapult.</EmptyState>;
+  }
+  const { lane, next } = queue;
+  const refused = (action: string) => (error: unknown) => show(refusalNotice(error, action));
+
+  return (
+    <Stack gap="3">
+      {notice && <NoticeBanner notice={notice} onDismiss={dismiss} />}
+      <SuspendPanel
+        slot={current}
+        pending={suspend.isPending}
+        onSuspend={(reason) =>
+          current && suspend.mutate({ slotId: current.id, slotVersion: current.version, reason }, { onError: refused('Suspend') })
+        }
+      />
+      {!current ? (
+        <EmptyState title={`No aircraft waiting on cat ${lane.number}`}>The handler has not put anyone in this lane, or every aircraft in it has gone.</EmptyState>
+      ) : (
+        <Grid templateColumns={{ base: 'minmax(0, 1fr)', lg: 'minmax(0, 3fr) minmax(0, 2fr)' }} gap="4" alignItems="start">
+          <Stack gap="4" as="section" aria-label="On the catapult" data-testid="current-aircraft" data-side-number={current.sideNumber}>
+            <Flex gap="3" align="center" wrap="wrap">
+              <Text fontSize={{ base: '3xl', md: '4xl' }} fontWeight="700" lineHeight="1">
+                {current.sideNumber}
+              </Text>
+              <Box>
+                <Text fontWeight="600">
+                  {current.typeDesignation} · {current.squadronCode}
+                </Text>
+                <Text fontSize="sm" color="fg.muted">
+                  {current.pilotName ?? 'No pilot assigned'} · projected {formatOptionalClock(current.projectedLaunchAt)}
+                </Text>
+              </Box>
+              <SlotStatusBadge status={current.status} size="lg" />
+            </Flex>
+            <AircraftFigures slot={current} />
+          </Stack>
+          <Stack gap="4">
+            <ReadinessSteps
+              slot={current}
+              pending={advance.isPending}
+              onAdvance={(to) =>
+                !anyPending && advance.mutate({ slotId: current.id, slotVersion: current.version, to }, { onError: refused('That step') })
+              }
+            />
+            <LaunchPanel
+              key={current.id}
+              slot={current}
+              lane={lane}
+              snapshot={snapshot}
+              pending={launch.isPending}
+              onLaunch={(overrideReason) => {
+                // A second tap while the first is on its way does nothing; a retry reuses the same key.
+                if (launch.isPending) return;
+                launch.mutate(
+                  { slotId: current.id, slotVersion: current.version, idempotencyKey: launchKey(), overrideReason },
+                  { onError: refused('Launch') },
+                );
+              }}
+            />
+            <NextUp slots={next} />
+          </Stack>
+        </Grid>
+      )}
+    </Stack>
+  );
+}
+
+export function CatStationScreen() {
+  const user = useSessionUser();
+  const { cycles, cycle, choose } = useViewedCycle();
+  const live = useLiveCycle(cycle?.id);
+  const snapshot = live.lineup.data;
+  useCycleTheme((snapshot?.cycle ?? cycle)?.night);
+  const lane = snapshot?.lanes.find((candidate) => candidate.catapultId === user.catapultId);
+
+  return (
+    <Stack gap="3">
+      <PageHeader title={lane ? `Cat station · Cat ${lane.number}` : 'Cat station'} subtitle={lane && `${lane.position} catapult${cycle ? ` · cycle ${cycle.number}` : ''}`}>
+        {cycle && <ConnectionBadge state={live.connection} />}
+        {cycles.data && cycles.data.length > 1 && <CyclePicker cycles={cycles.data} value={cycle?.id} onChange={choose} />}
+      </PageHeader>
+      <CautionLine />
+      {user.catapultId === null ? (
+        <EmptyState title="No catapult assigned to you">The admin assigns each catapult officer a catapult under People.</EmptyState>
+      ) : cycles.isPending ? (
+        <LoadingState label="Finding the current cycle…" />
+      ) : cycles.isError ? (
+        <ErrorState error={cycles.error} onRetry={() => void cycles.refetch()} />
+      ) : !cycle ? (
+        <EmptyState title="No cycle yet">Your catapult's aircraft appear here once air operations creates a cycle.</EmptyState>
+      ) : live.refusal ? (
+        <ErrorState title="This cycle cannot be followed live" error={new Error(live.refusal)} />
+      ) : (
+        <QueryView query={live.lineup} loadingLabel="Loading your catapult…">
+          {(data) => <Station key={data.cycle.id} snapshot={data} catapultId={user.catapultId!} />}
+        </QueryView>
+      )}
+    </Stack>
+  );
+}

@@ -1,0 +1,81 @@
+import { Badge, Button, Flex, Heading, HStack, Stack, Text } from '@chakra-ui/react';
+import { Link as RouterLink } from 'react-router-dom';
+import type { CycleView } from '@catline/contracts';
+import { NoticeBanner, refusalNotice, useNotice } from '../../../components/refusal-notice.js';
+import { RoleGate } from '../../../components/role-gate.js';
+import { errorMessage } from '../../../lib/api-error.js';
+import { useHasRole } from '../../../lib/session-store.js';
+import { useCloseCycle } from '../api/close-cycle.js';
+import { useStartCycle } from '../api/start-cycle.js';
+import { useUpdateConditions } from '../api/update-conditions.js';
+import { toConditionsRequest, valuesFromCycle } from '../cycle-form-model.js';
+import { AddSlotForm } from './add-slot-form.js';
+import { CycleForm } from './cycle-form.js';
+
+/** One cycle: its conditions (editable by air operations), start and close, and adding aircraft. */
+export function CyclePanel({ cycle }: { cycle: CycleView }) {
+  const airOps = useHasRole('air_operations');
+  const update = useUpdateConditions(cycle.id);
+  const start = useStartCycle(cycle.id);
+  const close = useCloseCycle(cycle.id);
+  const { notice, show, dismiss } = useNotice();
+
+  return (
+    <Stack gap="4" borderWidth="1px" rounded="card" p={{ base: '3', md: '4' }} bg="bg.panel" as="section" aria-label={`Cycle ${cycle.number}`} data-testid="cycle-panel">
+      <Flex gap="3" align="center" wrap="wrap" justify="space-between">
+        <HStack gap="3">
+          <Heading as="h2" size="lg">
+            Cycle {cycle.number}
+          </Heading>
+          <Badge colorPalette={cycle.state === 'executing' ? 'go' : 'gray'} variant="solid">
+            {cycle.state}
+          </Badge>
+        </HStack>
+        <HStack gap="2" wrap="wrap">
+          <Button asChild size="sm" variant="outline">
+            <RouterLink to={`/lineup?cycle=${cycle.id}`}>Open lineup</RouterLink>
+          </Button>
+          <RoleGate roles={['air_operations']}>
+            {cycle.state === 'planning' && (
+              <Button size="sm" colorPalette="go" loading={start.isPending} onClick={() => start.mutate(cycle.version, { onError: (error) => show(refusalNotice(error, 'Starting')) })}>
+                Start launching
+              </Button>
+            )}
+            {cycle.state === 'executing' && (
+              <Button size="sm" colorPalette="nogo" variant="outline" loading={close.isPending} onClick={() => close.mutate(cycle.version, { onError: (error) => show(refusalNotice(error, 'Closing')) })}>
+                Close cycle
+              </Button>
+            )}
+          </RoleGate>
+        </HStack>
+      </Flex>
+      {notice && <NoticeBanner notice={notice} onDismiss={dismiss} />}
+      <Stack gap="2">
+        <Text fontWeight="700">Conditions</Text>
+        <CycleForm
+          key={`${cycle.id}-${cycle.version}`}
+          initial={valuesFromCycle(cycle)}
+          withNumber={false}
+          readOnly={!airOps || cycle.state === 'closed'}
+          submitLabel="Save conditions"
+          pending={update.isPending}
+          serverError={update.isError ? errorMessage(update.error) : null}
+          onSubmit={(values) => update.mutate(toConditionsRequest(values, cycle.version))}
+        />
+        {update.isSuccess && (
+          <Text color="go.fg" fontSize="sm" role="status">
+            Conditions saved; every launch figure has been worked out again.
+          </Text>
+        )}
+      </Stack>
+      <RoleGate roles={['air_operations']}>
+        {cycle.state !== 'closed' && (
+          <Stack gap="2">
+            <Text fontWeight="700">Add an aircraft</Text>
+            <AddSlotForm cycleId={cycle.id} />
+          </Stack>
+        )}
+      </RoleGate>
+    </Stack>
+  );
+}

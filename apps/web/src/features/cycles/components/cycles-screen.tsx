@@ -1,0 +1,114 @@
+import { useState } from 'react';
+import { Badge, Button, Stack, Text } from '@chakra-ui/react';
+import type { CycleView } from '@catline/contracts';
+import { type Column, DataTable } from '../../../components/data-table.js';
+import { PageHeader } from '../../../components/page-header.js';
+import { QueryView } from '../../../components/query-states.js';
+import { RoleGate } from '../../../components/role-gate.js';
+import { errorMessage } from '../../../lib/api-error.js';
+import { formatDateTime, formatShortClock } from '../../../lib/format.js';
+import { useCycles } from '../../../lib/queries/cycles-query.js';
+import { useShips } from '../../../lib/queries/ships-query.js';
+import { useCreateCycle } from '../api/create-cycle.js';
+import { newCycleValues, toCreateRequest } from '../cycle-form-model.js';
+import { CycleForm } from './cycle-form.js';
+import { CyclePanel } from './cycle-panel.js';
+
+function NewCycle({ cycles, onCreated, onCancel }: { cycles: CycleView[]; onCreated: (cycle: CycleView) => void; onCancel: () => void }) {
+  const ships = useShips();
+  const create = useCreateCycle();
+  const shipId = ships.data?.[0]?.id;
+  const nextNumber = Math.max(0, ...cycles.map((cycle) => cycle.number)) + 1;
+  return (
+    <Stack gap="3" borderWidth="1px" rounded="card" p={{ base: '3', md: '4' }} bg="bg.panel" as="section" aria-label="New cycle">
+      <Text fontWeight="700">New cycle</Text>
+      <CycleForm
+        initial={newCycleValues(new Date(), nextNumber)}
+        withNumber
+        submitLabel="Create cycle"
+        pending={create.isPending}
+        serverError={create.isError ? errorMessage(create.error) : ships.isError ? errorMessage(ships.error) : null}
+        onCancel={onCancel}
+        onSubmit={(values) => shipId !== undefined && create.mutate(toCreateRequest(values, shipId), { onSuccess: onCreated })}
+      />
+    </Stack>
+  );
+}
+
+export function CyclesScreen() {
+  const cycles = useCycles();
+  const [creating, setCreating] = useState(false);
+  const [selectedId, setSelectedId] = useState<number | null>(null);
+
+  const columns: Column<CycleView>[] = [
+    { key: 'number', header: 'Cycle', cell: (cycle) => <Text fontWeight="700">{cycle.number}</Text>, sortValue: (cycle) => cycle.number, numeric: true },
+    {
+      key: 'state',
+      header: 'State',
+      cell: (cycle) => (
+        <Badge colorPalette={cycle.state === 'executing' ? 'go' : 'gray'} variant={cycle.state === 'closed' ? 'outline' : 'solid'}>
+          {cycle.state}
+        </Badge>
+      ),
+      sortValue: (cycle) => cycle.state,
+    },
+    { key: 'planned', header: 'Planned launch', cell: (cycle) => formatDateTime(cycle.plannedLaunchAt), sortValue: (cycle) => Date.parse(cycle.plannedLaunchAt), filterText: (cycle) => formatDateTime(cycle.plannedLaunchAt) },
+    { key: 'window', header: 'Window', cell: (cycle) => `${formatShortClock(cycle.windowStartAt)}–${formatShortClock(cycle.windowEndAt)}` },
+    { key: 'case', header: 'Case', cell: (cycle) => cycle.weatherCase, sortValue: (cycle) => cycle.weatherCase },
+    { key: 'light', header: 'Day / night', cell: (cycle) => (cycle.night ? 'Night' : 'Day'), sortValue: (cycle) => (cycle.night ? 'night' : 'day') },
+    { key: 'aircraft', header: 'Aircraft', cell: (cycle) => cycle.slotCount, sortValue: (cycle) => cycle.slotCount, numeric: true },
+    { key: 'launched', header: 'Launched', cell: (cycle) => cycle.launchedCount, sortValue: (cycle) => cycle.launchedCount, numeric: true },
+    {
+      key: 'open',
+      header: '',
+      cell: (cycle) => (
+        <Button size="xs" variant={cycle.id === selectedId ? 'solid' : 'outline'} onClick={() => setSelectedId(cycle.id)} aria-label={`Show cycle ${cycle.number}`}>
+          Show
+        </Button>
+      ),
+    },
+  ];
+
+  return (
+    <Stack gap="4">
+      <PageHeader title="Cycles" subtitle="Launch events, newest first">
+        <RoleGate roles={['air_operations']}>
+          {!creating && (
+            <Button size="sm" colorPalette="accent" onClick={() => setCreating(true)}>
+              New cycle
+            </Button>
+          )}
+        </RoleGate>
+      </PageHeader>
+      <QueryView query={cycles} loadingLabel="Loading cycles…">
+        {(list) => {
+          const selected = list.find((cycle) => cycle.id === selectedId);
+          return (
+            <Stack gap="4">
+              {creating && (
+                <NewCycle
+                  cycles={list}
+                  onCancel={() => setCreating(false)}
+                  onCreated={(cycle) => {
+                    setCreating(false);
+                    setSelectedId(cycle.id);
+                  }}
+                />
+              )}
+              <DataTable
+                caption="Cycles"
+                rows={list}
+                columns={columns}
+                rowKey={(cycle) => cycle.id}
+                selectedKey={selectedId ?? undefined}
+                emptyTitle="No cycles yet"
+                emptyHint="Air operations creates the first cycle with “New cycle”."
+              />
+              {selected && <CyclePanel key={selected.id} cycle={selected} />}
+            </Stack>
+          );
+        }}
+      </QueryView>
+    </Stack>
+  );
+}

@@ -1,0 +1,30 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { AircraftView } from '@catline/contracts';
+import { apiRequest } from '../../../lib/api-client.js';
+import { fleetKeys } from './fleet-keys.js';
+
+export interface UpdateAircraftVariables {
+  id: number;
+  serviceable?: boolean;
+  parkedSpot?: string;
+}
+
+export const updateAircraft = ({ id, ...changes }: UpdateAircraftVariables) =>
+  apiRequest<AircraftView>(`/aircraft/${id}`, { method: 'PATCH', body: changes });
+
+/** Optimistic: the row flips at once and flips back if the server refuses. */
+export function useUpdateAircraft() {
+  const queryClient = useQueryClient();
+  const key = fleetKeys.aircraft.list();
+  return useMutation({
+    mutationFn: updateAircraft,
+    onMutate: async (variables) => {
+      await queryClient.cancelQueries({ queryKey: key });
+      const previous = queryClient.getQueryData<AircraftView[]>(key);
+      queryClient.setQueryData<AircraftView[]>(key, (list) => list?.map((row) => (row.id === variables.id ? { ...row, ...variables } : row)));
+      return { previous };
+    },
+    onError: (_error, _variables, context) => queryClient.setQueryData(key, context?.previous),
+    onSettled: () => queryClient.invalidateQueries({ queryKey: fleetKeys.aircraft.all }),
+  });
+}

@@ -1,0 +1,153 @@
+import { useState } from 'react';
+import { Badge, Button, HStack, Stack, Tabs, Text } from '@chakra-ui/react';
+import type { AircraftView, SquadronView } from '@catline/contracts';
+import { ActionDialog } from '../../../components/action-dialog.js';
+import { type Column, DataTable } from '../../../components/data-table.js';
+import { PageHeader } from '../../../components/page-header.js';
+import { QueryView } from '../../../components/query-states.js';
+import { NoticeBanner, refusalNotice, useNotice } from '../../../components/refusal-notice.js';
+import { RoleGate } from '../../../components/role-gate.js';
+import { useAircraft } from '../../../lib/queries/aircraft-query.js';
+import { useAircraftTypes } from '../../../lib/queries/aircraft-types-query.js';
+import { useShips } from '../../../lib/queries/ships-query.js';
+import { useSquadrons } from '../../../lib/queries/squadrons-query.js';
+import { useHasRole } from '../../../lib/session-store.js';
+import { useDeleteAircraft } from '../api/delete-aircraft.js';
+import { useDeleteSquadron } from '../api/delete-squadron.js';
+import { useUpdateAircraft } from '../api/update-aircraft.js';
+import { AircraftForm } from './aircraft-form.js';
+import { SquadronForm } from './squadron-form.js';
+
+type Doomed = { kind: 'aircraft'; row: AircraftView } | { kind: 'squadron'; row: SquadronView } | null;
+
+export function FleetScreen() {
+  const admin = useHasRole('admin');
+  const aircraft = useAircraft();
+  const squadrons = useSquadrons();
+  const types = useAircraftTypes();
+  const ships = useShips();
+  const updateAircraft = useUpdateAircraft();
+  const deleteAircraft = useDeleteAircraft();
+  const deleteSquadron = useDeleteSquadron();
+  const { notice, show, dismiss } = useNotice();
+  const [doomed, setDoomed] = useState<Doomed>(null);
+
+  const aircraftColumns: Column<AircraftView>[] = [
+    { key: 'side', header: 'Side number', cell: (row) => <Text fontWeight="700">{row.sideNumber}</Text>, sortValue: (row) => row.sideNumber },
+    { key: 'type', header: 'Type', cell: (row) => row.typeDesignation, sortValue: (row) => row.typeDesignation },
+    { key: 'squadron', header: 'Squadron', cell: (row) => row.squadronCode, sortValue: (row) => row.squadronCode },
+    { key: 'spot', header: 'Parked at', cell: (row) => row.parkedSpot, sortValue: (row) => row.parkedSpot },
+    {
+      key: 'serviceable',
+      header: 'State',
+      cell: (row) => <Badge colorPalette={row.serviceable ? 'go' : 'nogo'}>{row.serviceable ? 'Serviceable' : 'Not serviceable'}</Badge>,
+      sortValue: (row) => (row.serviceable ? 'serviceable' : 'not serviceable'),
+    },
+    { key: 'shots', header: 'Catapult shots', cell: (row) => row.catapultShots, sortValue: (row) => row.catapultShots, numeric: true },
+    ...(admin
+      ? [
+          {
+            key: 'actions',
+            header: 'Actions',
+            cell: (row: AircraftView) => (
+              <HStack gap="1">
+                <Button size="xs" variant="outline" onClick={() => updateAircraft.mutate({ id: row.id, serviceable: !row.serviceable }, { onError: (error) => show(refusalNotice(error, 'The change')) })}>
+                  {row.serviceable ? 'Mark unserviceable' : 'Mark serviceable'}
+                </Button>
+                <Button size="xs" variant="ghost" colorPalette="nogo" onClick={() => setDoomed({ kind: 'aircraft', row })}>
+                  Remove
+                </Button>
+              </HStack>
+            ),
+          },
+        ]
+      : []),
+  ];
+
+  const squadronColumns: Column<SquadronView>[] = [
+    { key: 'code', header: 'Code', cell: (row) => <Text fontWeight="700">{row.code}</Text>, sortValue: (row) => row.code },
+    { key: 'name', header: 'Name', cell: (row) => row.name, sortValue: (row) => row.name },
+    { key: 'email', header: 'Report e-mail', cell: (row) => row.email, sortValue: (row) => row.email },
+    {
+      key: 'aircraft',
+      header: 'Aircraft',
+      cell: (row) => aircraft.data?.filter((candidate) => candidate.squadronId === row.id).length ?? '—',
+      sortValue: (row) => aircraft.data?.filter((candidate) => candidate.squadronId === row.id).length ?? 0,
+      numeric: true,
+    },
+    ...(admin
+      ? [
+          {
+            key: 'actions',
+            header: 'Actions',
+            cell: (row: SquadronView) => (
+              <Button size="xs" variant="ghost" colorPalette="nogo" onClick={() => setDoomed({ kind: 'squadron', row })}>
+                Remove
+              </Button>
+            ),
+          },
+        ]
+      : []),
+  ];
+
+  const remove = () => {
+    if (!doomed) return;
+    const options = { onSettled: () => setDoomed(null), onError: (error: unknown) => show(refusalNotice(error, 'Removing')) };
+    if (doomed.kind === 'aircraft') deleteAircraft.mutate(doomed.row.id, options);
+    else deleteSquadron.mutate(doomed.row.id, options);
+  };
+
+  return (
+    <Stack gap="4">
+      <PageHeader title="Fleet" subtitle="Aircraft and squadrons" />
+      {notice && <NoticeBanner notice={notice} onDismiss={dismiss} />}
+      <Tabs.Root defaultValue="aircraft" variant="line">
+        <Tabs.List>
+          <Tabs.Trigger value="aircraft">Aircraft</Tabs.Trigger>
+          <Tabs.Trigger value="squadrons">Squadrons</Tabs.Trigger>
+        </Tabs.List>
+        <Tabs.Content value="aircraft">
+          <Stack gap="4">
+            <QueryView query={aircraft} loadingLabel="Loading aircraft…">
+              {(rows) => (
+                <DataTable caption="Aircraft" rows={rows} columns={aircraftColumns} rowKey={(row) => row.id} emptyTitle="No aircraft yet" emptyHint="The admin adds aircraft below." initialSort={{ key: 'side' }} />
+              )}
+            </QueryView>
+            <RoleGate roles={['admin']}>
+              <Stack gap="2" borderWidth="1px" rounded="card" p="3">
+                <Text fontWeight="700">Add an aircraft</Text>
+                <AircraftForm types={types.data ?? []} squadrons={squadrons.data ?? []} spots={ships.data?.[0]?.deckSpots ?? []} />
+              </Stack>
+            </RoleGate>
+          </Stack>
+        </Tabs.Content>
+        <Tabs.Content value="squadrons">
+          <Stack gap="4">
+            <QueryView query={squadrons} loadingLabel="Loading squadrons…">
+              {(rows) => <DataTable caption="Squadrons" rows={rows} columns={squadronColumns} rowKey={(row) => row.id} emptyTitle="No squadrons yet" initialSort={{ key: 'code' }} />}
+            </QueryView>
+            <RoleGate roles={['admin']}>
+              <Stack gap="2" borderWidth="1px" rounded="card" p="3">
+                <Text fontWeight="700">Add a squadron</Text>
+                <SquadronForm />
+              </Stack>
+            </RoleGate>
+          </Stack>
+        </Tabs.Content>
+      </Tabs.Root>
+      {doomed && (
+        <ActionDialog
+          open
+          title={doomed.kind === 'aircraft' ? `Remove ${doomed.row.sideNumber}?` : `Remove ${doomed.row.code}?`}
+          onClose={() => setDoomed(null)}
+          confirmLabel="Remove"
+          tone="nogo"
+          pending={deleteAircraft.isPending || deleteSquadron.isPending}
+          onConfirm={remove}
+        >
+          <Text>The server refuses if past cycles or people still refer to it.</Text>
+        </ActionDialog>
+      )}
+    </Stack>
+  );
+}

@@ -1,0 +1,96 @@
+import type { ReactNode } from 'react';
+import { Badge, Box, Flex, HStack, Stack, Text } from '@chakra-ui/react';
+import { useDroppable } from '@dnd-kit/core';
+import { SortableContext, verticalListSortingStrategy } from '@dnd-kit/sortable';
+import type { LaneView } from '@catline/contracts';
+import { GoBadge } from '../../../components/go-badge.js';
+import { WindIcon } from '../../../components/icons.js';
+import { formatKnots } from '../../../lib/format.js';
+import { slotItemId } from '../hooks/use-lineup-drag.js';
+import { laneContainer } from '../lineup-model.js';
+
+interface LaneColumnProps {
+  lane: LaneView;
+  slotIds: number[];
+  headerAction?: ReactNode;
+  children: ReactNode;
+}
+
+function windWords(lane: LaneView) {
+  const cross = lane.crosswindSide === 'none' ? 'no crosswind' : `${formatKnots(lane.crosswindKt)} from ${lane.crosswindSide}`;
+  return `${formatKnots(lane.headwindKt)} headwind, ${cross}`;
+}
+
+/** One catapult's queue: its state and wind over deck on top, its slots in launch order below. */
+export function LaneColumn({ lane, slotIds, headerAction, children }: LaneColumnProps) {
+  const { setNodeRef, isOver } = useDroppable({ id: laneContainer(lane.catapultId) });
+  const unavailable = lane.status === 'down' || lane.closed;
+  return (
+    <Stack
+      as="section"
+      aria-label={`Catapult ${lane.number} lane`}
+      data-testid="lane"
+      data-catapult-number={lane.number}
+      gap="2"
+      minW="0"
+      bg="bg.subtle"
+      borderWidth="1px"
+      borderColor={unavailable ? 'nogo.border' : 'border'}
+      rounded="card"
+      p="2"
+    >
+      <Stack gap="1" px="1">
+        <Flex justify="space-between" align="center" gap="2" wrap="wrap">
+          <HStack gap="2">
+            <Text as="h2" fontWeight="700" fontSize="lg">
+              Cat {lane.number}
+            </Text>
+            <Text fontSize="sm" color="fg.muted" textTransform="capitalize">
+              {lane.position}
+            </Text>
+          </HStack>
+          <HStack gap="1.5">
+            {lane.status === 'down' ? (
+              <Badge colorPalette="nogo" variant="solid" data-testid="catapult-status">
+                DOWN
+              </Badge>
+            ) : lane.closed ? (
+              <Badge colorPalette="caution" variant="solid" data-testid="catapult-status">
+                CLOSED
+              </Badge>
+            ) : (
+              <Badge colorPalette="go" variant="outline" data-testid="catapult-status">
+                UP
+              </Badge>
+            )}
+            <GoBadge go={lane.go} />
+          </HStack>
+        </Flex>
+        <HStack gap="1.5" fontSize="xs" color="fg.muted" title="Wind over deck on this catapult">
+          <WindIcon />
+          <Text>{windWords(lane)}</Text>
+        </HStack>
+        {headerAction}
+      </Stack>
+      <SortableContext id={laneContainer(lane.catapultId)} items={slotIds.map(slotItemId)} strategy={verticalListSortingStrategy}>
+        <Stack
+          ref={setNodeRef}
+          gap="2"
+          minH="6rem"
+          p="1"
+          rounded="card"
+          outline={isOver ? '2px dashed' : undefined}
+          outlineColor="accent.focusRing"
+          data-testid="lane-drop-zone"
+        >
+          {children}
+          {slotIds.length === 0 && (
+            <Box textAlign="center" color="fg.subtle" fontSize="sm" py="6" borderWidth="1px" borderStyle="dashed" rounded="card">
+              No aircraft yet
+            </Box>
+          )}
+        </Stack>
+      </SortableContext>
+    </Stack>
+  );
+}

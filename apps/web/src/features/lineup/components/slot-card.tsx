@@ -1,0 +1,123 @@
+import type { ReactNode } from 'react';
+import { Badge, Box, Flex, HStack, Text } from '@chakra-ui/react';
+import { useSortable } from '@dnd-kit/sortable';
+import { CSS } from '@dnd-kit/utilities';
+import type { SlotView } from '@catline/contracts';
+import { GoBadge } from '../../../components/go-badge.js';
+import { GripIcon } from '../../../components/icons.js';
+import { SLOT_STATUS_LABELS, SlotStatusBadge } from '../../../components/slot-status-badge.js';
+import { formatOptionalClock, formatPounds, formatSignedKnots } from '../../../lib/format.js';
+import { slotItemId } from '../hooks/use-lineup-drag.js';
+
+/** What a slot card shows: who, what, how heavy, when, and whether the figures are go. */
+export function SlotCardBody({ slot, lifted = false, movable = false }: { slot: SlotView; lifted?: boolean; movable?: boolean }) {
+  const figures = slot.figures;
+  return (
+    <Box
+      bg={lifted ? 'bg.emphasized' : 'bg.panel'}
+      borderWidth="1px"
+      borderColor={figures && !figures.go && slot.status !== 'launched' ? 'nogo.border' : 'border'}
+      borderLeftWidth="4px"
+      borderLeftColor={slot.status === 'launched' ? 'go.solid' : figures && !figures.go ? 'nogo.solid' : 'accent.solid'}
+      rounded="card"
+      px="2.5"
+      py="2"
+      boxShadow={lifted ? 'lg' : undefined}
+      opacity={slot.status === 'launched' ? 0.75 : 1}
+    >
+      <Flex justify="space-between" align="center" gap="2">
+        <HStack gap="1.5" minW="0">
+          {movable && (
+            <Box as="span" color="fg.subtle" fontSize="sm" flexShrink={0}>
+              <GripIcon />
+            </Box>
+          )}
+          <Text fontWeight="700" fontSize="lg" textStyle="figure" data-testid="side-number">
+            {slot.sideNumber}
+          </Text>
+          <Text fontSize="xs" color="fg.muted" truncate>
+            {slot.typeDesignation} · {slot.squadronCode}
+          </Text>
+        </HStack>
+        <SlotStatusBadge status={slot.status} />
+      </Flex>
+      <Text fontSize="sm" color="fg.muted" truncate>
+        {slot.pilotName ?? 'No pilot assigned'}
+        {slot.mission ? ` · ${slot.mission}` : ''}
+      </Text>
+      <HStack gap="1.5" wrap="wrap" fontSize="sm" mt="0.5">
+        <Text textStyle="figure">{formatPounds(slot.grossWeightLb)}</Text>
+        {slot.trimDeg !== null && <Text color="fg.muted">Trim {slot.trimDeg}°</Text>}
+        {slot.afterburnerRequired && (
+          <Badge size="sm" colorPalette="caution" variant="subtle">
+            AB
+          </Badge>
+        )}
+        {slot.tanker && <Badge size="sm" variant="outline">Tanker</Badge>}
+        {slot.earlyWarning && <Badge size="sm" variant="outline">Early warning</Badge>}
+        {slot.spare && <Badge size="sm" variant="outline">Spare</Badge>}
+      </HStack>
+      {figures && (
+        <Flex justify="space-between" align="center" gap="2" mt="1" fontSize="sm" wrap="wrap">
+          <Text textStyle="figure" title="Projected launch time">
+            {slot.launchedAt ? `Off ${formatOptionalClock(slot.launchedAt)}` : formatOptionalClock(slot.projectedLaunchAt)}
+            {slot.missesWindow && !slot.launchedAt && (
+              <Text as="span" color="nogo.fg" fontWeight="700">
+                {' '}
+                late
+              </Text>
+            )}
+          </Text>
+          <HStack gap="1.5">
+            <Text textStyle="figure" color={figures.go ? 'go.fg' : 'nogo.fg'} title="Launch margin">
+              {formatSignedKnots(figures.marginKt)}
+            </Text>
+            <GoBadge go={figures.go} />
+          </HStack>
+        </Flex>
+      )}
+    </Box>
+  );
+}
+
+interface SortableSlotCardProps {
+  slot: SlotView;
+  /** Cards a person may not move stay put (wrong role, or the aircraft has gone). */
+  movable: boolean;
+  /** Buttons that sit below the draggable area, so their keys never start a drag. */
+  actions?: ReactNode;
+}
+
+export function SortableSlotCard({ slot, movable, actions }: SortableSlotCardProps) {
+  const { attributes, listeners, setNodeRef, setActivatorNodeRef, transform, transition, isDragging } = useSortable({
+    id: slotItemId(slot.id),
+    disabled: !movable,
+  });
+  return (
+    <Box
+      ref={setNodeRef}
+      style={{ transform: CSS.Translate.toString(transform), transition }}
+      opacity={isDragging ? 0.35 : 1}
+      data-testid="slot-card"
+      data-side-number={slot.sideNumber}
+      data-status={slot.status}
+    >
+      <Box
+        ref={setActivatorNodeRef}
+        {...(movable ? { ...attributes, ...listeners } : {})}
+        aria-label={movable ? `${slot.sideNumber}, ${slot.typeDesignation}, ${SLOT_STATUS_LABELS[slot.status]}` : undefined}
+        cursor={movable ? 'grab' : 'default'}
+        touchAction={movable ? 'manipulation' : undefined}
+        rounded="card"
+        _focusVisible={{ outline: '3px solid', outlineColor: 'accent.focusRing', outlineOffset: '2px' }}
+      >
+        <SlotCardBody slot={slot} movable={movable} />
+      </Box>
+      {actions && (
+        <HStack justify="flex-end" gap="1" mt="1">
+          {actions}
+        </HStack>
+      )}
+    </Box>
+  );
+}

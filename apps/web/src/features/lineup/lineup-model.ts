@@ -1,0 +1,101 @@
+import type { LaneView, LineupSnapshot, MoveSlotRequest, SlotView } from '@catline/contracts';
+
+/** Where a slot sits on the board: the deck pool or a catapult's lane. */
+export type ContainerId = 'pool' | `lane:${number}`;
+export type Containers = Record<ContainerId, number[]>;
+
+export const laneContainer = (catapultId: number): ContainerId => `lane:${catapultId}`;
+export const catapultOf = (container: ContainerId): number | null =>
+  container === 'pool' ? null : Number(container.slice('lane:'.length));
+
+export function containersOf(snapshot: LineupSnapshot): Containers {
+  const containers: Containers = { pool: [...snapshot.pool] };
+  for (const lane of snapshot.lanes) containers[laneContainer(lane.catapultId)] = [...lane.slotIds];
+  return containers;
+}
+
+export const slotsById = (snapshot: LineupSnapshot) => new Map(snapshot.slots.map((slot) => [slot.id, slot]));
+
+export const isDone = (slot: SlotView) => slot.status === 'launched' || slot.status === 'down' || slot.status === 'scratched';
+
+/** The server moves planned aircraft only: once one is taxiing, its place is held. */
+export const isMovable = (slot: SlotView) => slot.status === 'planned';
+
+const bySideNumber = (slots: Map<number, SlotView>) => (a: number, b: number) =>
+  (slots.get(a)?.sideNumber ?? '').localeCompare(slots.get(b)?.sideNumber ?? '', 'en', { numeric: true });
+
+/** The board as it will look once the server accepts the move. */
+export function moveSlotLocally(snapshot: LineupSnapshot, move: MoveSlotRequest): LineupSnapshot {
+  const slots = slotsById(snapshot);
+  const lanes: LaneView[] = snapshot.lanes.map((lane) => {
+    const slotIds = lane.slotIds.filter((id) => id !== move.slotId);
+    if (lane.catapultId === move.toCatapultId) slotIds.splice(Math.min(move.toIndex, slotIds.length), 0, move.slotId);
+    return { ...lane, slotIds };
+  });
+  const pool = snapshot.pool.filter((id) => id !== move.slotId);
+  if (move.toCatapultId === null) pool.push(move.slotId);
+  pool.sort(bySideNumber(slots));
+
+  const placeOf = new Map<number, { catapultId: number; position: number }>();
+  for (const lane of lanes) lane.slotIds.forEach((id, position) => placeOf.set(id, { catapultId: lane.catapultId, position }));
+  const moved = snapshot.slots.map((slot) => {
+    const place = placeOf.get(slot.id);
+    const catapultId = place?.catapultId ?? (pool.includes(slot.id) ? null : slot.catapultId);
+    const position = place?.position ?? (pool.includes(slot.id) ? null : slot.position);
+    return catapultId === slot.catapultId && position === slot.position ? slot : { ...slot, catapultId, position };
+  });
+  return { ...snapshot, lanes, pool, slots: moved };
+}
+
+export function placeName(snapshot: LineupSnapshot, container: ContainerId, index?: number): string {
+  const catapultId = catapultOf(container);
+  if (catapultId === null) return 'the deck pool';
+  const lane = snapshot.lanes.find((candidate) => candidate.catapultId === catapultId);
+  const name = `catapult ${lane?.number ?? '?'}`;
+  return index === undefined ? name : `${name}, place ${index + 1}`;
+}
+
+export type WarningKind = 'no_go' | 'missed_window' | 'catapult_down' | 'catapult_closed' | 'weight_not_agreed';
+
+export interface LineupWarning {
+  kind: WarningKind;
+  key: string;
+  text: string;
+}
+
+/** What the handler must look at now, most serious first. */
+export function lineupWarnings(snapshot: LineupSnapshot, formatTime: (iso: string) => string): LineupWarning[] {
+  const slots = slotsById(snapshot);
+  const warnings: LineupWarning[] = [];
+  const waiting = (lane: LaneView) => lane.slotIds.map((id) => slots.get(id)).filter((slot): slot is SlotView => !!slot && !isDone(slot));
+
+  for (const lane of snapshot.lanes) {
+    const count = waiting(lane).length;
+    if (lane.status === 'down' && count > 0) {
+      warnings.push({ kind: 'catapult_down', key: `down-${lane.catapultId}`, text: `Cat ${lane.number} is down with ${count} aircraft still in its lane.` });
+    } else if (lane.closed && count > 0) {
+      warnings.push({ kind: 'catapult_closed', key: `closed-${lane.catapultId}`, text: `Cat ${lane.number} is closed while the landing area is in use; ${count} aircraft wait in its lane.` });
+    }
+  }
+  for (const lane of snapshot.lanes) {
+    for (const slot of waiting(lane)) {
+      const reasons = slot.figures?.reasons.filter((reason) => reason.code !== 'catapult_down' && reason.code !== 'catapult_closed') ?? [];
+      if (slot.figures && !slot.figures.go && reasons.length > 0) {
+        warnings.push({ kind: 'no_go', key: `nogo-${slot.id}`, text: `${slot.sideNumber} on cat ${lane.number} is no-go: ${reasons.map((reason) => reason.message).join(' ')}` });
+      }
+      if (slot.missesWindow) {
+        const when = slot.projectedLaunchAt ? ` (projected ${formatTime(slot.projectedLaunchAt)}, window ends ${formatTime(snapshot.cycle.windowEndAt)})` : '';
+        warnings.push({ kind: 'missed_window', key: `window-${slot.id}`, text: `${slot.sideNumber} misses the launch window${when}.` });
+      }
+    }
+  }
+  const unagreed = snapshot.lanes.flatMap(waiting).filter((slot) => !slot.pilotWeightAckAt || !slot.catapultWeightAckAt);
+  if (unagreed.length > 0) {
+    warnings.push({
+      kind: 'weight_not_agreed',
+      key: 'weights',
+      text: `Gross weight not yet agreed for ${unagreed.map((slot) => slot.sideNumber).join(', ')}.`,
+    });
+  }
+  return warnings;
+}

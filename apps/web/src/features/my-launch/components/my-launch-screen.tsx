@@ -1,0 +1,139 @@
+import { Box, Button, Grid, HStack, SimpleGrid, Stack, Text } from '@chakra-ui/react';
+import type { LineupSnapshot } from '@catline/contracts';
+import { CautionLine } from '../../../components/caution-line.js';
+import { ConnectionBadge } from '../../../components/connection-badge.js';
+import { CyclePicker } from '../../../components/cycle-picker.js';
+import { FigureStat } from '../../../components/figure-stat.js';
+import { PageHeader } from '../../../components/page-header.js';
+import { EmptyState, ErrorState, LoadingState, QueryView } from '../../../components/query-states.js';
+import { NoticeBanner, refusalNotice, useNotice } from '../../../components/refusal-notice.js';
+import { SlotStatusBadge } from '../../../components/slot-status-badge.js';
+import { formatClearingTurn, formatClock, formatCountdown, formatPounds, ordinal } from '../../../lib/format.js';
+import { useLiveCycle } from '../../../lib/live/use-live-cycle.js';
+import { useViewedCycle } from '../../../lib/queries/use-viewed-cycle.js';
+import { useSessionUser } from '../../../lib/session-store.js';
+import { useNow } from '../../../lib/use-now.js';
+import { useCycleTheme } from '../../../theme/use-cycle-theme.js';
+import { useAcknowledgeWeight } from '../api/acknowledge-weight.js';
+import { findMySlot } from '../my-launch-model.js';
+
+function Countdown({ projectedLaunchAt, launchedAt }: { projectedLaunchAt: string | null; launchedAt: string | null }) {
+  const now = useNow();
+  if (launchedAt) return <FigureStat label="Launched" value={formatClock(launchedAt)} tone="go" size="xl" />;
+  if (!projectedLaunchAt) return <FigureStat label="Projected launch" value="Not yet planned" size="lg" />;
+  return (
+    <Box data-testid="countdown">
+      <FigureStat label={`Projected launch ${formatClock(projectedLaunchAt)}`} value={formatCountdown(projectedLaunchAt, now)} size="xl" />
+    </Box>
+  );
+}
+
+function MySlot({ snapshot, pilotId }: { snapshot: LineupSnapshot; pilotId: number }) {
+  const mine = findMySlot(snapshot, pilotId);
+  const acknowledge = useAcknowledgeWeight(snapshot.cycle.id);
+  const { notice, show, dismiss } = useNotice();
+  if (!mine) {
+    return <EmptyState title={`You are not in cycle ${snapshot.cycle.number}`}>When air operations gives you an aircraft in this cycle, it appears here.</EmptyState>;
+  }
+  const { slot, lane, place } = mine;
+  const turn = slot.figures ? formatClearingTurn(slot.figures.clearingTurnDeg) : 'Known once you have a catapult';
+  return (
+    <Stack gap="4" data-testid="my-slot" data-side-number={slot.sideNumber}>
+      {notice && <NoticeBanner notice={notice} onDismiss={dismiss} />}
+      <Grid templateColumns={{ base: '1fr', md: 'repeat(3, minmax(0, 1fr))' }} gap="3" borderWidth="2px" borderColor="accent.border" rounded="card" p={{ base: '3', md: '4' }} bg="bg.panel">
+        <Box data-testid="my-catapult">
+          <FigureStat label="Catapult" value={lane ? `Cat ${lane.number} · ${lane.position}` : 'Deck pool: no catapult yet'} size="xl" />
+        </Box>
+        <Box data-testid="my-place">
+          <FigureStat
+            label="Place in line"
+            value={slot.status === 'launched' ? 'Gone' : place === null ? '—' : place === 1 ? 'Next (1st)' : ordinal(place)}
+            size="xl"
+          />
+        </Box>
+        <Countdown projectedLaunchAt={slot.projectedLaunchAt} launchedAt={slot.launchedAt} />
+      </Grid>
+      <HStack gap="3" wrap="wrap">
+        <Text fontSize="2xl" fontWeight="700">
+          {slot.sideNumber}
+        </Text>
+        <Text color="fg.muted">
+          {slot.typeDesignation} · {slot.squadronCode} · {slot.mission}
+        </Text>
+        <SlotStatusBadge status={slot.status} size="lg" />
+      </HStack>
+      {slot.status === 'suspended' && slot.suspendReason && (
+        <Text color="caution.fg" fontWeight="600">
+          Suspended: {slot.suspendReason}
+        </Text>
+      )}
+      <Stack gap="3" borderWidth="1px" rounded="card" p={{ base: '3', md: '4' }} as="section" aria-label="Gross weight">
+        <FigureStat label="Gross weight" value={formatPounds(slot.grossWeightLb)} size="xl" />
+        {slot.pilotWeightAckAt ? (
+          <Text color="go.fg" fontWeight="600" data-testid="weight-acknowledged">
+            You acknowledged this weight at {formatClock(slot.pilotWeightAckAt)}.
+          </Text>
+        ) : (
+          <Button
+            h="touch"
+            fontSize="lg"
+            colorPalette="accent"
+            alignSelf={{ base: 'stretch', md: 'flex-start' }}
+            loading={acknowledge.isPending}
+            disabled={slot.status === 'launched' || slot.status === 'down'}
+            data-testid="acknowledge-weight"
+            onClick={() =>
+              acknowledge.mutate(
+                { slotId: slot.id, slotVersion: slot.version, grossWeightLb: slot.grossWeightLb },
+                { onError: (error) => show(refusalNotice(error, 'Your acknowledgement')) },
+              )
+            }
+          >
+            I confirm {formatPounds(slot.grossWeightLb)}
+          </Button>
+        )}
+      </Stack>
+      <SimpleGrid columns={{ base: 2, md: 4 }} gap="3">
+        <FigureStat label="Take-off trim" value={slot.trimDeg === null ? '—' : `${slot.trimDeg}°`} />
+        <FigureStat label="Afterburner" value={slot.afterburnerRequired ? 'Required' : 'Not required'} tone={slot.afterburnerRequired ? 'caution' : undefined} />
+        <FigureStat label="Clearing turn" value={turn} size="md" />
+        <FigureStat label="Fuel" value={formatPounds(slot.fuelLb)} size="md" />
+      </SimpleGrid>
+      <Box borderWidth="1px" rounded="card" p={{ base: '3', md: '4' }} as="section" aria-label="Departure">
+        <Text fontSize="xs" textTransform="uppercase" letterSpacing="wider" color="fg.muted" fontWeight="600">
+          Departure · case {snapshot.cycle.weatherCase}
+        </Text>
+        <Text fontSize="lg">{slot.departure || '—'}</Text>
+      </Box>
+    </Stack>
+  );
+}
+
+export function MyLaunchScreen() {
+  const user = useSessionUser();
+  const { cycles, cycle, choose } = useViewedCycle();
+  const live = useLiveCycle(cycle?.id);
+  useCycleTheme((live.lineup.data?.cycle ?? cycle)?.night);
+  return (
+    <Stack gap="3">
+      <PageHeader title="My launch" subtitle={cycle && `Cycle ${cycle.number}`}>
+        {cycle && <ConnectionBadge state={live.connection} />}
+        {cycles.data && cycles.data.length > 1 && <CyclePicker cycles={cycles.data} value={cycle?.id} onChange={choose} />}
+      </PageHeader>
+      <CautionLine />
+      {cycles.isPending ? (
+        <LoadingState label="Finding the current cycle…" />
+      ) : cycles.isError ? (
+        <ErrorState error={cycles.error} onRetry={() => void cycles.refetch()} />
+      ) : !cycle ? (
+        <EmptyState title="No cycle yet">Your launch appears here once air operations plans a cycle with you in it.</EmptyState>
+      ) : live.refusal ? (
+        <ErrorState title="This cycle cannot be followed live" error={new Error(live.refusal)} />
+      ) : (
+        <QueryView query={live.lineup} loadingLabel="Loading your launch…">
+          {(snapshot) => <MySlot key={snapshot.cycle.id} snapshot={snapshot} pilotId={user.id} />}
+        </QueryView>
+      )}
+    </Stack>
+  );
+}

@@ -1,0 +1,15 @@
+import type { LineupSnapshot, SlotView } from '@catline/contracts';
+
+const gone = new Set(['launched', 'down', 'scratched']);
+
+/** The pilot's slot in this cycle (the one still to fly, else the last one), its lane and place in line. */
+export function findMySlot(snapshot: LineupSnapshot, pilotId: number) {
+  const mine = snapshot.slots.filter((slot) => slot.pilotId === pilotId);
+  const slot = mine.find((candidate) => !gone.has(candidate.status)) ?? mine.at(-1);
+  if (!slot) return undefined;
+  const lane = snapshot.lanes.find((candidate) => candidate.catapultId === slot.catapultId);
+  const slots = new Map(snapshot.slots.map((candidate) => [candidate.id, candidate]));
+  const waiting = lane?.slotIds.map((id) => slots.get(id)).filter((candidate): candidate is SlotView => !!candidate && !gone.has(candidate.status));
+  const index = waiting?.findIndex((candidate) => candidate.id === slot.id) ?? -1;
+  return { slot, lane, place: index >= 0 ? index + 1 : null };
+}

@@ -1,0 +1,243 @@
+import { io, type Socket } from 'socket.io-client';
+import type {
+  ClientToServerEvents,
+  JoinCycleResult,
+  LineupChange,
+  LineupSnapshot,
+  ServerToClientEvents,
+} from '@catline/contracts';
+import { forgetSession, refreshSession, SESSION_ENDED_NOTICE } from '../api-client.js';
+import { queryClient } from '../query-client.js';
+import { getAccessToken, onAccessTokenChange } from '../session-store.js';
+import type { ConnectionState } from './connection-state.js';
+import { lineupKeys } from './lineup-keys.js';
+import { LineupSync } from './lineup-sync.js';
+
+type CatlineSocket = Socket<ServerToClientEvents, ClientToServerEvents>;
+
+/** After this long without the server, "reconnecting" becomes "offline since". */
+const OFFLINE_AFTER_MS = 10_000;
+const ACK_TIMEOUT_MS = 5_000;
+/** Keeps the connection through a quick hop between live screens. */
+const LINGER_MS = 5_000;
+
+export interface LiveState {
+  connection: ConnectionState;
+  /** Why the server would not let this person follow a cycle, by cycle id. */
+  refusals: ReadonlyMap<number, string>;
+}
+
+/**
+ * The one owner of the socket.io connection. Screens ask to watch a cycle (through `useLiveCycle`); this
+ * module joins the cycle's room, feeds every change into the query cache in version order, asks for what
+ * it missed after a gap or a reconnect, and keeps the socket's token fresh.
+ */
+class LiveCycles {
+  private socket: CatlineSocket | null = null;
+  private readonly watchers = new Map<number, number>();
+  private readonly joining = new Set<number>();
+  private readonly resyncTimers = new Map<number, ReturnType<typeof setTimeout>>();
+  private offlineTimer: ReturnType<typeof setTimeout> | undefined;
+  private lingerTimer: ReturnType<typeof setTimeout> | undefined;
+  private retryDelayMs = 1_000;
+  private state: LiveState = { connection: { kind: 'connecting' }, refusals: new Map() };
+  private readonly listeners = new Set<() => void>();
+  readonly sync = new LineupSync(queryClient, (cycleId, sinceVersion) => this.resync(cycleId, sinceVersion));
+
+  constructor() {
+    onAccessTokenChange((token) => (token ? this.renewSocketToken(token) : this.close()));
+    globalThis.addEventListener?.('offline', () => this.markOffline(new Date()));
+    globalThis.addEventListener?.('online', () => this.backOnline());
+  }
+
+  readonly subscribe = (listener: () => void) => {
+    this.listeners.add(listener);
+    return () => this.listeners.delete(listener);
+  };
+
+  readonly getState = () => this.state;
+
+  /** Follows a cycle until the returned function is called. */
+  watch(cycleId: number): () => void {
+    clearTimeout(this.lingerTimer);
+    this.watchers.set(cycleId, (this.watchers.get(cycleId) ?? 0) + 1);
+    const socket = this.open();
+    if (socket.connected) this.join(cycleId);
+    return () => this.unwatch(cycleId);
+  }
+
+  /** A change the server answered a command with: applied in order like any broadcast. */
+  receive(change: LineupChange): void {
+    this.sync.ingest(change);
+  }
+
+  /** The socket may have lived through the outage; either way, ask for what was missed. */
+  private backOnline() {
+    const socket = this.socket;
+    if (!socket) return;
+    if (!socket.connected) {
+      socket.connect();
+      return;
+    }
+    clearTimeout(this.offlineTimer);
+    this.setConnection({ kind: 'live' });
+    for (const cycleId of this.watchers.keys()) this.join(cycleId);
+  }
+
+  private unwatch(cycleId: number) {
+    const left = (this.watchers.get(cycleId) ?? 1) - 1;
+    if (left > 0) {
+      this.watchers.set(cycleId, left);
+      return;
+    }
+    this.watchers.delete(cycleId);
+    this.sync.forget(cycleId);
+    if (this.socket?.connected) this.socket.emit('cycle:leave', { cycleId }, () => undefined);
+    if (this.watchers.size === 0) this.lingerTimer = setTimeout(() => this.close(), LINGER_MS);
+  }
+
+  private open(): CatlineSocket {
+    if (this.socket) return this.socket;
+    const socket: CatlineSocket = io({
+      path: '/socket.io',
+      transports: ['websocket'],
+      autoConnect: false,
+      reconnectionDelay: 500,
+      reconnectionDelayMax: 5_000,
+      auth: (send) => send({ token: getAccessToken() ?? '' }),
+    });
+    socket.on('connect', () => {
+      this.retryDelayMs = 1_000;
+      clearTimeout(this.offlineTimer);
+      this.setConnection({ kind: 'live' });
+      for (const cycleId of this.watchers.keys()) this.join(cycleId);
+    });
+    socket.on('disconnect', (reason) => {
+      if (reason === 'io client disconnect') return;
+      this.markReconnecting(new Date());
+      if (!socket.active) this.retryWithFreshToken(socket);
+    });
+    socket.on('connect_error', () => {
+      this.markReconnecting(new Date());
+      // A refusal by the server's middleware (usually an expired token) is not retried by socket.io itself.
+      if (!socket.active) this.retryWithFreshToken(socket);
+    });
+    socket.on('lineup:change', (change) => this.sync.ingest(change));
+    socket.on('session:expired', () => {
+      void refreshSession().then((session) => {
+        if (!session) forgetSession(SESSION_ENDED_NOTICE);
+      });
+    });
+    this.socket = socket;
+    socket.connect();
+    return socket;
+  }
+
+  private close() {
+    clearTimeout(this.offlineTimer);
+    clearTimeout(this.lingerTimer);
+    this.resyncTimers.forEach((timer) => clearTimeout(timer));
+    this.resyncTimers.clear();
+    this.socket?.removeAllListeners();
+    this.socket?.disconnect();
+    this.socket = null;
+    this.joining.clear();
+    this.state = { connection: { kind: 'connecting' }, refusals: new Map() };
+    this.notify();
+  }
+
+  private retryWithFreshToken(socket: CatlineSocket) {
+    const delay = this.retryDelayMs;
+    this.retryDelayMs = Math.min(this.retryDelayMs * 2, 30_000);
+    setTimeout(() => {
+      if (this.socket !== socket) return;
+      void refreshSession().then((session) => {
+        if (!session) forgetSession(SESSION_ENDED_NOTICE);
+        else if (this.socket === socket) socket.connect();
+      });
+    }, delay);
+  }
+
+  private renewSocketToken(accessToken: string) {
+    const socket = this.socket;
+    if (!socket?.connected) return;
+    socket.timeout(ACK_TIMEOUT_MS).emit('session:refresh', { accessToken }, (error, result) => {
+      // The server did not take the new token: reconnecting hands it over in the handshake instead.
+      if (error || !result.ok) socket.disconnect().connect();
+    });
+  }
+
+  private cachedVersion(cycleId: number): number | undefined {
+    return queryClient.getQueryData<LineupSnapshot>(lineupKeys.snapshot(cycleId))?.version;
+  }
+
+  private join(cycleId: number, sinceVersion = this.cachedVersion(cycleId)) {
+    const socket = this.socket;
+    if (!socket || this.joining.has(cycleId)) return;
+    this.joining.add(cycleId);
+    socket.timeout(ACK_TIMEOUT_MS).emit('cycle:join', { cycleId, sinceVersion }, (error, result) => {
+      this.joining.delete(cycleId);
+      if (this.socket !== socket || !this.watchers.has(cycleId)) return;
+      if (error) {
+        this.resync(cycleId, this.cachedVersion(cycleId));
+        return;
+      }
+      this.applyJoin(cycleId, result);
+    });
+  }
+
+  private applyJoin(cycleId: number, result: JoinCycleResult) {
+    const refusals = new Map(this.state.refusals);
+    if (!result.ok) {
+      refusals.set(cycleId, result.message);
+      this.state = { ...this.state, refusals };
+      this.notify();
+      return;
+    }
+    if (refusals.delete(cycleId)) {
+      this.state = { ...this.state, refusals };
+      this.notify();
+    }
+    if (result.mode === 'snapshot') this.sync.acceptSnapshot(result.snapshot);
+    else result.changes.forEach((change) => this.sync.ingest(change));
+  }
+
+  /** Asks for what was missed: a replay or snapshot over the socket, or a fresh snapshot over HTTP. */
+  private resync(cycleId: number, sinceVersion: number | undefined) {
+    if (this.resyncTimers.has(cycleId)) return;
+    this.resyncTimers.set(
+      cycleId,
+      setTimeout(() => {
+        this.resyncTimers.delete(cycleId);
+        if (!this.watchers.has(cycleId)) return;
+        if (this.socket?.connected) this.join(cycleId, sinceVersion);
+        else void queryClient.invalidateQueries({ queryKey: lineupKeys.snapshot(cycleId) });
+      }, 300),
+    );
+  }
+
+  private markReconnecting(since: Date) {
+    const current = this.state.connection;
+    if (current.kind === 'reconnecting' || current.kind === 'offline') return;
+    this.setConnection({ kind: 'reconnecting', since });
+    clearTimeout(this.offlineTimer);
+    this.offlineTimer = setTimeout(() => this.markOffline(since), OFFLINE_AFTER_MS);
+  }
+
+  private markOffline(fallbackSince: Date) {
+    const current = this.state.connection;
+    if (current.kind === 'offline') return;
+    this.setConnection({ kind: 'offline', since: current.kind === 'reconnecting' ? current.since : fallbackSince });
+  }
+
+  private setConnection(connection: ConnectionState) {
+    this.state = { ...this.state, connection };
+    this.notify();
+  }
+
+  private notify() {
+    this.listeners.forEach((listener) => listener());
+  }
+}
+
+export const liveCycles = new LiveCycles();

@@ -7,9 +7,12 @@ import { TypeOrmModule } from '@nestjs/typeorm';
 import { AircraftTypesModule } from './aircraft-types/aircraft-types.module.js';
 import { AircraftModule } from './aircraft/aircraft.module.js';
 import { AuthModule } from './auth/auth.module.js';
+import { CyclesModule } from './cycles/cycles.module.js';
 import { ENV_FILE_PATHS, type Environment, validateEnvironment } from './config/environment.js';
 import { dataSourceOptions } from './database/data-source.js';
+import { GatewayModule } from './gateway/gateway.module.js';
 import { HealthModule } from './health/health.module.js';
+import { LineupModule } from './lineup/lineup.module.js';
 import { ShipsModule } from './ships/ships.module.js';
 import { SquadronsModule } from './squadrons/squadrons.module.js';
 import { UsersModule } from './users/users.module.js';
@@ -43,6 +46,9 @@ const webDist = fileURLToPath(new URL('../../web/dist', import.meta.url));
     SquadronsModule,
     AircraftTypesModule,
     AircraftModule,
+    CyclesModule,
+    LineupModule,
+    GatewayModule,
   ],
 })
 export class AppModule {}

@@ -9,7 +9,9 @@
 import { aircraftTypesRoutes } from './aircraft-types.routes.js';
 import { aircraftRoutes } from './aircraft.routes.js';
 import { authRoutes } from './auth.routes.js';
+import { cyclesRoutes } from './cycles.routes.js';
 import { healthRoutes } from './health.routes.js';
+import { lineupRoutes } from './lineup.routes.js';
 import type { MatrixRoute } from './route-table.js';
 import { shipsRoutes } from './ships.routes.js';
 import { squadronsRoutes } from './squadrons.routes.js';
@@ -25,4 +27,6 @@ export const matrixRoutes: MatrixRoute[] = [
   ...squadronsRoutes,
   ...aircraftTypesRoutes,
   ...aircraftRoutes,
+  ...cyclesRoutes,
+  ...lineupRoutes,
 ];

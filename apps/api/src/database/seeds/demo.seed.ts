@@ -6,6 +6,7 @@ import { Catapult } from '../../ships/entities/catapult.entity.js';
 import { Ship } from '../../ships/entities/ship.entity.js';
 import { Squadron } from '../../squadrons/entities/squadron.entity.js';
 import { User } from '../../users/entities/user.entity.js';
+import { seedDemoCycles } from './demo-cycles.js';
 import {
   DEMO_PASSWORD,
   demoAircraft,
@@ -17,11 +18,14 @@ import {
   demoSquadrons,
 } from './demo-fleet.js';
 
-/** Seeds the demo into an empty database in one transaction; returns false if a ship already exists. */
+/**
+ * Seeds the fleet and people into an empty database in one transaction, then builds the demo cycles
+ * through the lineup commands; returns false if a ship already exists.
+ */
 export async function seedDemo(dataSource: DataSource): Promise<boolean> {
   if ((await dataSource.getRepository(Ship).count()) > 0) return false;
   const passwordHash = await hashPassword(DEMO_PASSWORD);
-  await dataSource.transaction(async (manager) => {
+  const shipId = await dataSource.transaction(async (manager) => {
     const ship = await manager.save(Ship, { ...demoShip, deckSpots: demoDeckSpots });
     const catapults = await manager.save(
       Catapult,
@@ -48,6 +52,8 @@ export async function seedDemo(dataSource: DataSource): Promise<boolean> {
         squadronId: squadrons.find((s) => s.code === person.squadron)?.id ?? null,
       })),
     );
+    return ship.id;
   });
+  await seedDemoCycles(dataSource, shipId);
   return true;
 }

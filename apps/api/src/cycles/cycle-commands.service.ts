@@ -1,0 +1,140 @@
+import type { ChangeActor, CycleConditions, LineupCommandResult } from '@catline/contracts';
+import { Injectable } from '@nestjs/common';
+import type { EntityManager } from 'typeorm';
+import { Aircraft } from '../aircraft/entities/aircraft.entity.js';
+import { BasisChecks } from '../lineup/basis-checks.service.js';
+import { CycleChangeService } from '../lineup/cycle-change.service.js';
+import { CycleClosing } from '../lineup/cycle-closing.service.js';
+import { Slot } from '../lineup/entities/slot.entity.js';
+import type { LineupState } from '../lineup/lineup-state.js';
+import { LineupException } from '../lineup/lineup.exception.js';
+import { User } from '../users/entities/user.entity.js';
+import { checkWindow, type CycleTimes } from './cycle-window.js';
+import { CyclesException } from './cycles.exception.js';
+import type { AddSlotDto } from './dto/add-slot.dto.js';
+import type { UpdateCycleConditionsDto } from './dto/update-cycle-conditions.dto.js';
+import { Cycle } from './entities/cycle.entity.js';
+
+type ConditionValues = Partial<CycleConditions & CycleTimes>;
+
+const clock = (instant: Date) => `${instant.toISOString().slice(11, 16)}Z`;
+
+/** One short account of what changed in the conditions, e.g. "wind 250° 18 kt, case II". */
+function describeConditions(values: ConditionValues, cycle: Cycle): string {
+  const merged = { ...cycle, ...values };
+  const parts: string[] = [];
+  const changed = (...keys: (keyof ConditionValues)[]) => keys.some((key) => key in values);
+  if (changed('shipCourseDeg', 'shipSpeedKt')) parts.push(`ship ${merged.shipCourseDeg}° ${merged.shipSpeedKt} kt`);
+  if (changed('trueWindFromDeg', 'trueWindSpeedKt')) parts.push(`wind ${merged.trueWindFromDeg}° ${merged.trueWindSpeedKt} kt`);
+  if (changed('temperatureC')) parts.push(`${merged.temperatureC} °C`);
+  if (changed('pressureHpa')) parts.push(`${merged.pressureHpa} hPa`);
+  if (changed('weatherCase')) parts.push(`case ${merged.weatherCase}`);
+  if (changed('night')) parts.push(merged.night ? 'night' : 'day');
+  if (changed('landingAreaInUse')) parts.push(merged.landingAreaInUse ? 'landing area in use' : 'landing area clear');
+  if (changed('plannedLaunchAt')) parts.push(`planned launch ${clock(merged.plannedLaunchAt)}`);
+  if (changed('windowStartAt', 'windowEndAt')) parts.push(`window ${clock(merged.windowStartAt)} to ${clock(merged.windowEndAt)}`);
+  return parts.join(', ');
+}
+
+/** The values of the request that differ from the cycle's, instants as dates. */
+function changedConditions(request: UpdateCycleConditionsDto, cycle: Cycle): ConditionValues {
+  const { basisVersion: _basis, plannedLaunchAt, windowStartAt, windowEndAt, ...figures } = request;
+  const values: Record<string, unknown> = { ...figures };
+  const times = { plannedLaunchAt, windowStartAt, windowEndAt };
+  for (const [key, value] of Object.entries(times)) if (value !== undefined) values[key] = new Date(value);
+  return Object.fromEntries(
+    Object.entries(values).filter(([key, value]) => {
+      // The DTO instance holds every declared field, the ones left out as undefined.
+      if (value === undefined) return false;
+      const current = cycle[key as keyof Cycle];
+      return value instanceof Date && current instanceof Date ? value.getTime() !== current.getTime() : value !== current;
+    }),
+  ) as ConditionValues;
+}
+
+/** Air operations' changes to a cycle; each is a versioned change like a lineup command. */
+@Injectable()
+export class CycleCommandsService {
+  constructor(
+    private readonly changes: CycleChangeService,
+    private readonly basis: BasisChecks,
+    private readonly closing: CycleClosing,
+  ) {}
+
+  updateConditions(cycleId: number, actor: ChangeActor, request: UpdateCycleConditionsDto): Promise<LineupCommandResult> {
+    return this.changes.apply(cycleId, actor, 'conditions_changed', async (manager, state) => {
+      this.basis.requireOpen(state);
+      await this.basis.cycleAsSeen(manager, state, request.basisVersion);
+      const values = changedConditions(request, state.cycle);
+      if (Object.keys(values).length === 0) {
+        throw new LineupException('no_change', 'The conditions already are as given; nothing changed.');
+      }
+      checkWindow({ ...state.cycle, ...values });
+      await manager.update(Cycle, { id: cycleId }, values);
+      return { summary: `Conditions: ${describeConditions(values, state.cycle)}`, command: { type: 'conditions', ...request } };
+    });
+  }
+
+  start(cycleId: number, actor: ChangeActor, basisVersion: number): Promise<LineupCommandResult> {
+    return this.changes.apply(cycleId, actor, 'cycle_started', async (manager, state) => {
+      await this.basis.cycleAsSeen(manager, state, basisVersion);
+      if (state.cycle.state !== 'planning') {
+        throw new CyclesException('wrong_state', `Cycle ${state.cycle.number} is ${state.cycle.state}; only a cycle in planning can start.`);
+      }
+      await manager.update(Cycle, { id: cycleId }, { state: 'executing' });
+      return { summary: `Cycle ${state.cycle.number} started`, command: { type: 'start', basisVersion } };
+    });
+  }
+
+  close(cycleId: number, actor: ChangeActor, basisVersion: number): Promise<LineupCommandResult> {
+    return this.changes.apply(cycleId, actor, 'cycle_closed', async (manager, state) => {
+      this.basis.requireOpen(state);
+      await this.basis.cycleAsSeen(manager, state, basisVersion);
+      const scratched = await this.closing.close(manager, state);
+      const rest = scratched === 0 ? '' : `; ${scratched} aircraft not launched scratched`;
+      return { summary: `Cycle ${state.cycle.number} closed${rest}`, command: { type: 'close', basisVersion } };
+    });
+  }
+
+  addSlot(cycleId: number, actor: ChangeActor, request: AddSlotDto): Promise<LineupCommandResult> {
+    return this.changes.apply(cycleId, actor, 'slot_added', async (manager, state) => {
+      this.basis.requireOpen(state);
+      const aircraft = await manager.findOne(Aircraft, { where: { id: request.aircraftId }, relations: { type: true } });
+      if (!aircraft) throw new CyclesException('not_found', `Aircraft ${request.aircraftId} does not exist.`);
+      const side = aircraft.sideNumber;
+      if (state.slots.some((slot) => slot.aircraftId === aircraft.id)) {
+        throw new CyclesException('aircraft_already_in_cycle', `${side} is already in cycle ${state.cycle.number}.`);
+      }
+      if (!aircraft.serviceable) throw new CyclesException('aircraft_unserviceable', `${side} is marked unserviceable.`);
+      const pilotId = request.pilotId ?? null;
+      if (pilotId !== null) await this.checkPilot(manager, state, pilotId);
+      await manager.insert(Slot, {
+        cycleId,
+        aircraftId: aircraft.id,
+        pilotId,
+        mission: request.mission,
+        fuelLb: request.fuelLb,
+        stores: request.stores,
+        grossWeightLb: request.grossWeightLb,
+        tanker: request.tanker,
+        earlyWarning: request.earlyWarning,
+        spare: request.spare,
+      });
+      return {
+        summary: `${side} (${aircraft.type.designation}) added to the deck pool${request.spare ? ' as a spare' : ''}`,
+        command: { type: 'add_slot', ...request },
+      };
+    });
+  }
+
+  private async checkPilot(manager: EntityManager, state: LineupState, pilotId: number): Promise<void> {
+    const pilot = await manager.findOneBy(User, { id: pilotId });
+    if (!pilot || pilot.role !== 'pilot' || !pilot.active) {
+      throw new CyclesException('invalid_pilot', `Person ${pilotId} is not an active pilot.`);
+    }
+    const flying = state.slots.find((slot) => slot.pilotId === pilotId && slot.status !== 'down' && slot.status !== 'scratched');
+    if (flying) {
+      throw new CyclesException('pilot_already_assigned', `${pilot.name} already flies ${flying.aircraft.sideNumber} in cycle ${state.cycle.number}.`);
+    }
+  }
+}

@@ -1,0 +1,29 @@
+import { HttpStatus } from '@nestjs/common';
+import { DomainException } from '../common/errors/domain.exception.js';
+
+export type CycleRefusalCode =
+  | 'not_found'
+  | 'cycle_number_taken'
+  | 'invalid_window'
+  | 'wrong_state'
+  | 'invalid_pilot'
+  | 'aircraft_already_in_cycle'
+  | 'aircraft_unserviceable'
+  | 'pilot_already_assigned';
+
+const STATUS: Record<CycleRefusalCode, HttpStatus> = {
+  not_found: HttpStatus.NOT_FOUND,
+  cycle_number_taken: HttpStatus.CONFLICT,
+  invalid_window: HttpStatus.BAD_REQUEST,
+  wrong_state: HttpStatus.CONFLICT,
+  invalid_pilot: HttpStatus.BAD_REQUEST,
+  aircraft_already_in_cycle: HttpStatus.CONFLICT,
+  aircraft_unserviceable: HttpStatus.CONFLICT,
+  pilot_already_assigned: HttpStatus.CONFLICT,
+};
+
+export class CyclesException extends DomainException {
+  constructor(code: CycleRefusalCode, message: string) {
+    super(STATUS[code], code, message);
+  }
+}

@@ -1,0 +1,31 @@
+import type { CreateCycleRequest, WeatherCase } from '@catline/contracts';
+import { ApiProperty } from '@nestjs/swagger';
+import { IsInt, Max, Min } from 'class-validator';
+import { ConditionField } from './condition-fields.js';
+
+export class CreateCycleDto implements CreateCycleRequest {
+  @ApiProperty({ minimum: 1 })
+  @IsInt()
+  @Min(1)
+  @Max(2_147_483_647)
+  shipId: number;
+
+  @ApiProperty({ minimum: 1, maximum: 9999, description: "The cycle's number in the ship's flying day." })
+  @IsInt({ message: 'number must be a whole number' })
+  @Min(1)
+  @Max(9999)
+  number: number;
+
+  @ConditionField.instant('plannedLaunchAt') plannedLaunchAt: string;
+  @ConditionField.instant('windowStartAt') windowStartAt: string;
+  @ConditionField.instant('windowEndAt') windowEndAt: string;
+  @ConditionField.shipCourseDeg() shipCourseDeg: number;
+  @ConditionField.shipSpeedKt() shipSpeedKt: number;
+  @ConditionField.trueWindFromDeg() trueWindFromDeg: number;
+  @ConditionField.trueWindSpeedKt() trueWindSpeedKt: number;
+  @ConditionField.temperatureC() temperatureC: number;
+  @ConditionField.pressureHpa() pressureHpa: number;
+  @ConditionField.weatherCase() weatherCase: WeatherCase;
+  @ConditionField.flag('night') night: boolean;
+  @ConditionField.flag('landingAreaInUse') landingAreaInUse: boolean;
+}

@@ -1,0 +1,205 @@
+import type { ReadinessStep } from '@catline/contracts';
+import type { DataSource } from 'typeorm';
+import type { CreateCycleDto } from '../../cycles/dto/create-cycle.dto.js';
+import { DemoDeck, type DemoSortie } from './demo-deck.js';
+
+// The invented demo cycles of the training carrier's flying day: one flown and closed earlier, a day
+// cycle being planned, and a night cycle after it. Weights, missions and times are made up.
+
+const AIR_OPS = 'airops@catline.example';
+const HANDLER = 'handler@catline.example';
+const MINUTE = 60_000;
+
+const pilot = (n: number) => (n === 1 ? 'pilot@catline.example' : `pilot${n}@catline.example`);
+
+const strike = (side: string, grossWeightLb: number, extra: Partial<DemoSortie> = {}): DemoSortie => ({
+  side,
+  mission: 'Strike training',
+  grossWeightLb,
+  fuelLb: 11_500,
+  stores: '4 practice bombs',
+  ...extra,
+});
+
+const dayConditions = {
+  shipCourseDeg: 40,
+  shipSpeedKt: 22,
+  trueWindFromDeg: 30,
+  trueWindSpeedKt: 14,
+  temperatureC: 22,
+  pressureHpa: 1014,
+  weatherCase: 'I',
+  night: false,
+  landingAreaInUse: false,
+} as const;
+
+function cycleAt(number: number, planned: Date, conditions: Omit<CreateCycleDto, 'shipId' | 'number' | 'plannedLaunchAt' | 'windowStartAt' | 'windowEndAt'>) {
+  return (shipId: number): CreateCycleDto => ({
+    shipId,
+    number,
+    plannedLaunchAt: planned.toISOString(),
+    windowStartAt: new Date(planned.getTime() - 10 * MINUTE).toISOString(),
+    windowEndAt: new Date(planned.getTime() + 35 * MINUTE).toISOString(),
+    ...conditions,
+  });
+}
+
+const flownSorties: DemoSortie[] = [
+  { side: '601', mission: 'Airborne early warning', grossWeightLb: 52_500, fuelLb: 11_000, earlyWarning: true, pilot: pilot(2) },
+  { side: '110', mission: 'Recovery tanker', grossWeightLb: 49_800, fuelLb: 15_500, stores: 'Refuelling store', tanker: true, pilot: pilot(3) },
+  strike('101', 44_800, { pilot: pilot(1) }),
+  strike('102', 46_200, { pilot: pilot(4) }),
+  strike('103', 43_500, { pilot: pilot(5) }),
+  strike('104', 45_100),
+  strike('201', 47_300, { pilot: pilot(6) }),
+  strike('202', 42_900, { pilot: pilot(7) }),
+  { side: '301', mission: 'Close air support training', grossWeightLb: 27_400, fuelLb: 7_800, stores: '2 rocket pods', pilot: pilot(8) },
+  strike('111', 44_000, { spare: true, pilot: pilot(9), mission: 'Spare' }),
+];
+
+/** Catapult number, then its aircraft in launch order. */
+const flownLanes: [number, string[]][] = [
+  [1, ['601', '101', '102']],
+  [2, ['110', '201']],
+  [3, ['103', '104']],
+  [4, ['301', '202']],
+];
+
+const STEPS_BEFORE_LAUNCH: [ReadinessStep, number][] = [
+  ['taxiing', 50],
+  ['on_catapult', 38],
+  ['weight_agreed', 28],
+  ['tensioned', 14],
+];
+
+/** The flown cycle: planned, a reorder, a down aircraft replaced by the spare, a suspend, every launch, closed on the last. */
+async function flyEarlierCycle(deck: DemoDeck, shipId: number, planned: Date): Promise<void> {
+  deck.clock.at = new Date(planned.getTime() - 45 * MINUTE);
+  const cycleId = await deck.createCycle(cycleAt(1, planned, { ...dayConditions, trueWindSpeedKt: 11, temperatureC: 19 })(shipId));
+  for (const sortie of flownSorties) {
+    await deck.add(cycleId, AIR_OPS, sortie);
+    deck.clock.advance(40);
+  }
+  for (const [catapult, sides] of flownLanes) {
+    for (const [index, side] of sides.entries()) {
+      await deck.move(cycleId, HANDLER, side, catapult, index);
+      deck.clock.advance(25);
+    }
+  }
+  await deck.move(cycleId, HANDLER, '202', 2, 1);
+  deck.clock.advance(60);
+  for (const sortie of flownSorties.filter((candidate) => candidate.pilot)) {
+    await deck.acknowledgeWeight(cycleId, sortie.side);
+    deck.clock.advance(20);
+  }
+  await deck.markDown(cycleId, HANDLER, '104', '111');
+  deck.clock.at = new Date(planned.getTime() - 2 * MINUTE);
+  await deck.start(cycleId, AIR_OPS);
+
+  // Each lane launches in turn; the pair gap and reset intervals are kept; 201 is suspended once.
+  const events: { at: number; run: () => Promise<void> }[] = [];
+  const lanes = (await deck.snapshot(cycleId)).lanes;
+  for (const lane of lanes) {
+    let launchAt = planned.getTime() + (lane.number - 1) * 13_000;
+    for (const slotId of lane.slotIds) {
+      const side = (await deck.snapshot(cycleId)).slots.find((slot) => slot.id === slotId)!.sideNumber;
+      for (const [step, before] of STEPS_BEFORE_LAUNCH) {
+        events.push({ at: launchAt - before * 1000, run: () => deck.advance(cycleId, side, step) });
+      }
+      if (side === '201') {
+        events.push({ at: launchAt - 9_000, run: () => deck.suspend(cycleId, side, 'Launch bar not seated') });
+        events.push({ at: launchAt + 25_000, run: () => deck.advance(cycleId, side, 'resume') });
+        launchAt += 60_000;
+        events.push({ at: launchAt - 28_000, run: () => deck.advance(cycleId, side, 'weight_agreed') });
+        events.push({ at: launchAt - 14_000, run: () => deck.advance(cycleId, side, 'tensioned') });
+      }
+      events.push({ at: launchAt, run: () => deck.launch(cycleId, side) });
+      launchAt += lane.number <= 2 ? 60_000 : 70_000;
+    }
+  }
+  events.sort((a, b) => a.at - b.at);
+  for (const event of events) {
+    deck.clock.at = new Date(event.at);
+    await event.run();
+  }
+}
+
+const daySorties: DemoSortie[] = [
+  { side: '601', mission: 'Airborne early warning', grossWeightLb: 53_000, fuelLb: 11_500, earlyWarning: true, pilot: pilot(2) },
+  { side: '108', mission: 'Recovery tanker', grossWeightLb: 50_200, fuelLb: 16_000, stores: 'Refuelling store', tanker: true, pilot: pilot(3) },
+  strike('101', 45_400, { pilot: pilot(1) }),
+  ...['102', '103', '104', '105', '106', '107'].map((side, i) => strike(side, 42_600 + i * 700, i < 3 ? { pilot: pilot(4 + i) } : {})),
+  ...['201', '202', '203', '204', '205', '206'].map((side, i) =>
+    strike(side, 41_800 + i * 900, { mission: 'Air combat training', stores: '2 training rounds', pilot: i < 2 ? pilot(7 + i) : undefined }),
+  ),
+  ...['301', '302', '303'].map((side, i) => ({
+    side,
+    mission: 'Close air support training',
+    grossWeightLb: 25_800 + i * 600,
+    fuelLb: 7_500,
+    stores: '2 rocket pods',
+    pilot: i === 0 ? pilot(9) : undefined,
+  })),
+  { side: '602', mission: 'Airborne early warning', grossWeightLb: 51_900, fuelLb: 11_000, earlyWarning: true, spare: true },
+  strike('109', 44_200, { spare: true, mission: 'Spare' }),
+];
+
+const dayLanes: [number, string[]][] = [
+  [1, ['601', '101']],
+  [2, ['108', '201']],
+  [3, ['102', '202']],
+  [4, ['301', '103']],
+];
+
+async function planDayCycle(deck: DemoDeck, shipId: number, planned: Date): Promise<void> {
+  deck.clock.at = new Date(planned.getTime() - 70 * MINUTE);
+  const cycleId = await deck.createCycle(cycleAt(2, planned, dayConditions)(shipId));
+  for (const sortie of daySorties) {
+    await deck.add(cycleId, AIR_OPS, sortie);
+    deck.clock.advance(30);
+  }
+  for (const [catapult, sides] of dayLanes) {
+    for (const [index, side] of sides.entries()) {
+      await deck.move(cycleId, HANDLER, side, catapult, index);
+      deck.clock.advance(20);
+    }
+  }
+}
+
+const nightSorties: DemoSortie[] = [
+  { side: '603', mission: 'Airborne early warning', grossWeightLb: 52_000, fuelLb: 11_000, earlyWarning: true, pilot: pilot(2) },
+  { side: '111', mission: 'Recovery tanker', grossWeightLb: 49_500, fuelLb: 15_000, stores: 'Refuelling store', tanker: true, pilot: pilot(3) },
+  ...['112', '105', '106'].map((side, i) => strike(side, 43_000 + i * 800, { mission: 'Night strike training', pilot: pilot(4 + i) })),
+  ...['207', '208', '209', '210'].map((side, i) => strike(side, 42_000 + i * 600, { mission: 'Night intercept training', stores: '2 training rounds' })),
+  { side: '304', mission: 'Night close air support', grossWeightLb: 26_300, fuelLb: 7_600, stores: '2 rocket pods' },
+];
+
+async function planNightCycle(deck: DemoDeck, shipId: number, planned: Date): Promise<void> {
+  deck.clock.at = new Date(planned.getTime() - 150 * MINUTE);
+  const cycleId = await deck.createCycle(
+    cycleAt(3, planned, {
+      shipCourseDeg: 120,
+      shipSpeedKt: 18,
+      trueWindFromDeg: 150,
+      trueWindSpeedKt: 10,
+      temperatureC: 16,
+      pressureHpa: 1016,
+      weatherCase: 'III',
+      night: true,
+      landingAreaInUse: false,
+    })(shipId),
+  );
+  for (const sortie of nightSorties) {
+    await deck.add(cycleId, AIR_OPS, sortie);
+    deck.clock.advance(30);
+  }
+}
+
+/** Adds the demo cycles to a freshly seeded fleet, around `now`: flown three hours ago, the next hour, the evening. */
+export async function seedDemoCycles(dataSource: DataSource, shipId: number, now = new Date()): Promise<void> {
+  const hour = new Date(Math.floor(now.getTime() / (60 * MINUTE)) * 60 * MINUTE);
+  const deck = await DemoDeck.open(dataSource, now);
+  await flyEarlierCycle(deck, shipId, new Date(hour.getTime() - 3 * 60 * MINUTE));
+  await planDayCycle(deck, shipId, new Date(hour.getTime() + 2 * 60 * MINUTE));
+  await planNightCycle(deck, shipId, new Date(hour.getTime() + 6 * 60 * MINUTE));
+}

@@ -1,0 +1,86 @@
+import { ROLES, type JoinCycleResult, type RefreshSocketResult } from '@catline/contracts';
+import { Logger, type OnModuleDestroy, UseFilters, UseGuards, UsePipes, ValidationPipe } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
+import {
+  Ack,
+  ConnectedSocket,
+  MessageBody,
+  type OnGatewayInit,
+  SubscribeMessage,
+  WebSocketGateway,
+} from '@nestjs/websockets';
+import { TokenVerifier } from '../auth/token-verifier.service.js';
+import { Roles } from '../common/decorators/roles.decorator.js';
+import { type Environment, webOrigins } from '../config/environment.js';
+import { LineupChangeFeed } from '../lineup/change-feed.service.js';
+import { CycleJoinService } from './cycle-join.service.js';
+import { JoinCycleDto } from './dto/join-cycle.dto.js';
+import { LeaveCycleDto } from './dto/leave-cycle.dto.js';
+import { RefreshSessionDto } from './dto/refresh-session.dto.js';
+import { socketHandshake } from './socket-handshake.js';
+import { SocketExceptionFilter } from './socket-exception.filter.js';
+import { SocketRefusal } from './socket-refusal.js';
+import { SocketRolesGuard } from './socket-roles.guard.js';
+import { SocketSessions } from './socket-sessions.service.js';
+import { cycleRoom, type CatlineServer, type CatlineSocket } from './socket.types.js';
+
+/**
+ * The live lineup: one room per cycle. Clients only listen and join; every change arrives through
+ * the REST commands and is broadcast here, after its commit, in version order.
+ */
+@WebSocketGateway({ serveClient: false })
+@UseGuards(SocketRolesGuard)
+@UseFilters(SocketExceptionFilter)
+@UsePipes(new ValidationPipe({ whitelist: true, forbidNonWhitelisted: true, transform: true }))
+export class LineupGateway implements OnGatewayInit<CatlineServer>, OnModuleDestroy {
+  private readonly logger = new Logger(LineupGateway.name);
+  private unsubscribe?: () => void;
+
+  constructor(
+    private readonly verifier: TokenVerifier,
+    private readonly sessions: SocketSessions,
+    private readonly feed: LineupChangeFeed,
+    private readonly joins: CycleJoinService,
+    private readonly config: ConfigService<Environment, true>,
+  ) {}
+
+  afterInit(server: CatlineServer): void {
+    server.use(socketHandshake(this.verifier, this.sessions, webOrigins({ WEB_ORIGINS: this.config.get('WEB_ORIGINS') })));
+    this.unsubscribe = this.feed.subscribe((change) => server.to(cycleRoom(change.cycleId)).emit('lineup:change', change));
+    this.logger.log('Lineup socket ready');
+  }
+
+  onModuleDestroy(): void {
+    this.unsubscribe?.();
+  }
+
+  /** Answers with a snapshot, or with the changes after `sinceVersion` when the change log still holds them. */
+  @Roles(...ROLES)
+  @SubscribeMessage('cycle:join')
+  async join(
+    @ConnectedSocket() socket: CatlineSocket,
+    @MessageBody() request: JoinCycleDto,
+    @Ack() ack: (result: JoinCycleResult) => void,
+  ): Promise<void> {
+    if (typeof ack !== 'function') throw new SocketRefusal('ack_required', 'cycle:join must be sent with an acknowledgement.');
+    await this.joins.join(request, { enter: () => void socket.join(cycleRoom(request.cycleId)), answer: ack });
+  }
+
+  @Roles(...ROLES)
+  @SubscribeMessage('cycle:leave')
+  async leave(@ConnectedSocket() socket: CatlineSocket, @MessageBody() request: LeaveCycleDto): Promise<{ ok: boolean }> {
+    await socket.leave(cycleRoom(request.cycleId));
+    return { ok: true };
+  }
+
+  /** A new access token for the same person keeps the socket open past the old token's expiry. */
+  @Roles(...ROLES)
+  @SubscribeMessage('session:refresh')
+  async refresh(@ConnectedSocket() socket: CatlineSocket, @MessageBody() request: RefreshSessionDto): Promise<RefreshSocketResult> {
+    const session = await this.verifier.verifySession(request.accessToken).catch(() => null);
+    if (!session) return { ok: false, message: 'That token is not valid; sign in again.' };
+    if (session.user.id !== socket.data.user?.id) return { ok: false, message: 'That token belongs to someone else.' };
+    this.sessions.renew(socket, session);
+    return { ok: true, expiresAt: session.expiresAt.toISOString() };
+  }
+}

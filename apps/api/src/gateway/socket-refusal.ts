@@ -1,0 +1,12 @@
+import { WsException } from '@nestjs/websockets';
+
+/** A socket event or connection refused, with a stable code and a sentence a person understands. */
+export class SocketRefusal extends WsException {
+  constructor(
+    readonly code: string,
+    message: string,
+  ) {
+    super({ code, message });
+    this.message = message;
+  }
+}

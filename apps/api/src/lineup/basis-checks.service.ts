@@ -1,0 +1,88 @@
+import type { CatapultStatus, LineupChange, LineupPatch } from '@catline/contracts';
+import { Injectable } from '@nestjs/common';
+import type { EntityManager } from 'typeorm';
+import type { Catapult } from '../ships/entities/catapult.entity.js';
+import type { Slot } from './entities/slot.entity.js';
+import { laneSlots } from './lineup-snapshot.builder.js';
+import type { LineupState } from './lineup-state.js';
+import { LineupException } from './lineup.exception.js';
+import { LineupChangesService } from './lineup-changes.service.js';
+
+const REFRESH = 'Refresh and try again.';
+
+const account = (change: LineupChange | null, what: string) =>
+  change
+    ? `Since you saw it, ${change.actor.name} changed ${what}: ${change.summary}. ${REFRESH}`
+    : `${what} has changed since you saw it. ${REFRESH}`;
+
+/**
+ * Each command checks only its own basis (the slot, the lane, the catapult or the whole cycle as the
+ * sender saw it) against the locked state, and a refusal says what changed and who changed it.
+ */
+@Injectable()
+export class BasisChecks {
+  constructor(private readonly changes: LineupChangesService) {}
+
+  slot(state: LineupState, slotId: number): Slot {
+    const slot = state.slots.find((candidate) => candidate.id === slotId);
+    if (!slot) throw new LineupException('not_found', `Slot ${slotId} is not part of cycle ${state.cycle.number}.`);
+    return slot;
+  }
+
+  catapult(state: LineupState, catapultId: number): Catapult {
+    const catapult = state.catapults.find((candidate) => candidate.id === catapultId);
+    if (!catapult) throw new LineupException('not_found', `Catapult ${catapultId} is not on this cycle's ship.`);
+    return catapult;
+  }
+
+  requireOpen(state: LineupState): void {
+    if (state.cycle.state === 'closed') {
+      throw new LineupException('cycle_closed', `Cycle ${state.cycle.number} is closed; its lineup no longer changes.`);
+    }
+  }
+
+  async slotAsSeen(manager: EntityManager, state: LineupState, slot: Slot, seenVersion: number): Promise<void> {
+    if (slot.version === seenVersion) return;
+    const change = await this.latest(manager, state, (patch) => (patch.slots ?? []).some((view) => view.id === slot.id));
+    throw new LineupException('stale_basis', account(change, slot.aircraft.sideNumber));
+  }
+
+  async laneAsSeen(manager: EntityManager, state: LineupState, catapult: Catapult, seenOrder: readonly number[]): Promise<void> {
+    const order = laneSlots(state, catapult.id).map((slot) => slot.id);
+    if (order.length === seenOrder.length && order.every((id, index) => id === seenOrder[index])) return;
+    const change = await this.latest(manager, state, (patch) =>
+      (patch.lanes ?? []).some((lane) => lane.catapultId === catapult.id),
+    );
+    throw new LineupException('stale_basis', account(change, `the order on cat ${catapult.number}`));
+  }
+
+  async catapultAsSeen(manager: EntityManager, state: LineupState, catapult: Catapult, seen: CatapultStatus): Promise<void> {
+    if (catapult.status === seen) return;
+    const change = await this.latest(manager, state, (patch) =>
+      (patch.lanes ?? []).some((lane) => lane.catapultId === catapult.id && lane.status === catapult.status),
+    );
+    throw new LineupException(
+      'stale_basis',
+      change
+        ? `Cat ${catapult.number} is ${catapult.status} now: ${change.actor.name} set it (${change.summary}). ${REFRESH}`
+        : `Cat ${catapult.number} is ${catapult.status} now, not ${seen}. ${REFRESH}`,
+    );
+  }
+
+  async cycleAsSeen(manager: EntityManager, state: LineupState, basisVersion: number): Promise<void> {
+    const { cycle } = state;
+    if (cycle.version === basisVersion) return;
+    const latest = await this.latest(manager, state, () => true, basisVersion);
+    const behind = cycle.version - basisVersion;
+    throw new LineupException(
+      'stale_basis',
+      latest && behind > 0
+        ? `Cycle ${cycle.number} has changed ${behind} time${behind === 1 ? '' : 's'} since you saw it; the latest: ${latest.summary} (${latest.actor.name}). ${REFRESH}`
+        : `Cycle ${cycle.number} is at version ${cycle.version}, not ${basisVersion}. ${REFRESH}`,
+    );
+  }
+
+  private latest(manager: EntityManager, state: LineupState, matches: (patch: LineupPatch) => boolean, after = 0) {
+    return this.changes.latestMatching(manager, state.cycle.id, matches, after);
+  }
+}

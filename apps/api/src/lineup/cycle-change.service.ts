@@ -1,0 +1,140 @@
+import type { ChangeActor, ChangeKind, LineupChange, LineupCommandResult } from '@catline/contracts';
+import { Injectable } from '@nestjs/common';
+import { InjectDataSource } from '@nestjs/typeorm';
+import { DataSource, type EntityManager } from 'typeorm';
+import { Cycle } from '../cycles/entities/cycle.entity.js';
+import { LineupChangeFeed, type FeedTicket } from './change-feed.service.js';
+import { toLineupChange } from './change.mapper.js';
+import { Clock } from './clock.js';
+import { CycleChange } from './entities/cycle-change.entity.js';
+import { diffSnapshots } from './lineup-diff.js';
+import { buildSnapshot } from './lineup-snapshot.builder.js';
+import { LineupStateLoader, type LineupState } from './lineup-state.js';
+import { asLaunchDataRefusal } from './lineup.exception.js';
+
+/** What a command did, for the change log. */
+export interface ChangeDraft {
+  /** One line for people, e.g. "201 moved to cat 2, place 3". */
+  summary: string;
+  /** The request as accepted, kept with the change. */
+  command: Record<string, unknown>;
+}
+
+/** A command already applied earlier (a repeated launch): answered with its original result, nothing written. */
+export interface RepeatedCommand {
+  repeatOf: LineupCommandResult;
+}
+
+/** Checks the command's own basis against the locked state, writes its rows, and says what it did. */
+export type ChangeStep = (manager: EntityManager, state: LineupState) => Promise<ChangeDraft | RepeatedCommand>;
+
+/** A change that may follow in the same transaction (a cycle closing on its last launch); null when it does not apply. */
+export interface FollowUp {
+  kind: ChangeKind;
+  step: (manager: EntityManager, state: LineupState) => Promise<ChangeDraft | null>;
+}
+
+/**
+ * The one way a cycle changes: lock the cycle row, let the command check its own basis and write,
+ * bump the cycle version with a guarded UPDATE, append the change (its patch is the difference of the
+ * snapshots before and after) and commit; the change is published to the cycle's room only after the commit.
+ */
+@Injectable()
+export class CycleChangeService {
+  constructor(
+    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly loader: LineupStateLoader,
+    private readonly feed: LineupChangeFeed,
+    private readonly clock: Clock,
+  ) {}
+
+  async apply(
+    cycleId: number,
+    actor: ChangeActor,
+    kind: ChangeKind,
+    step: ChangeStep,
+    followUp?: FollowUp,
+  ): Promise<LineupCommandResult> {
+    let ticket: FeedTicket | undefined;
+    let written = false;
+    let outcome: LineupChange[] | RepeatedCommand;
+    try {
+      outcome = await this.dataSource.transaction('READ COMMITTED', async (manager) => {
+        const locked = await this.loader.lockCycle(manager, cycleId);
+        ticket = this.feed.reserve(cycleId, locked.version + 1);
+        let state = await this.loader.load(manager, locked);
+        const first = await step(manager, state);
+        if ('repeatOf' in first) return first;
+
+        const changes: LineupChange[] = [];
+        const record = async (changeKind: ChangeKind, draft: ChangeDraft) => {
+          const before = buildSnapshot(state);
+          await this.bumpVersion(manager, state.cycle);
+          state = await this.loader.load(manager, await manager.findOneByOrFail(Cycle, { id: cycleId }), state);
+          changes.push(await this.append(manager, state, changeKind, actor, draft, diffSnapshots(before, buildSnapshot(state))));
+        };
+        await record(kind, first);
+        if (followUp) {
+          const next = await followUp.step(manager, state);
+          if (next) await record(followUp.kind, next);
+        }
+        ticket.prepare(changes);
+        written = true;
+        return changes;
+      });
+    } catch (error) {
+      // Failing after every row was written means the COMMIT itself failed: it may have landed.
+      if (written) ticket?.uncertain();
+      else ticket?.rolledBack();
+      throw asLaunchDataRefusal(error);
+    }
+    if ('repeatOf' in outcome) {
+      ticket?.rolledBack();
+      return outcome.repeatOf;
+    }
+    ticket?.committed();
+    return { version: outcome[0].version, change: outcome[0] };
+  }
+
+  private async bumpVersion(manager: EntityManager, cycle: Cycle): Promise<void> {
+    const result = await manager
+      .createQueryBuilder()
+      .update(Cycle)
+      .set({ version: () => 'version + 1' })
+      .where('id = :id AND version = :version', { id: cycle.id, version: cycle.version })
+      .execute();
+    if (result.affected !== 1) {
+      throw new Error(`Cycle ${cycle.id} moved past version ${cycle.version} while its row was locked`);
+    }
+  }
+
+  private async append(
+    manager: EntityManager,
+    state: LineupState,
+    kind: ChangeKind,
+    actor: ChangeActor,
+    draft: ChangeDraft,
+    patch: LineupChange['patch'],
+  ): Promise<LineupChange> {
+    const row = manager.create(CycleChange, {
+      cycleId: state.cycle.id,
+      version: state.cycle.version,
+      actorId: actor.id,
+      actorName: actor.name,
+      actorRole: actor.role,
+      at: this.clock.now(),
+      kind,
+      summary: draft.summary.slice(0, 300),
+      payload: { command: draft.command, patch },
+    });
+    await manager.save(CycleChange, row);
+    return toLineupChange(row);
+  }
+}
+
+/** The person behind a change, kept by value in the change log. */
+export const actorOf = (user: { id: number; name: string; role: ChangeActor['role'] }): ChangeActor => ({
+  id: user.id,
+  name: user.name,
+  role: user.role,
+});

@@ -1,0 +1,10 @@
+import type { SuspendSlotRequest } from '@catline/contracts';
+import { ReasonField, VersionField } from './fields.js';
+
+export class SuspendSlotDto implements SuspendSlotRequest {
+  @VersionField('The slot version the suspend is based on.')
+  slotVersion: number;
+
+  @ReasonField('reason')
+  reason: string;
+}

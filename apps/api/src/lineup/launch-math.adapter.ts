@@ -1,0 +1,113 @@
+import type { ShipProfile as ShipProfileData, WeatherCase } from '@catline/contracts';
+import {
+  airDensity,
+  celsius,
+  celsiusToKelvin,
+  degrees,
+  densityRatio,
+  knots,
+  megajoulesToJoules,
+  metres,
+  pascals,
+  pounds,
+  poundsForce,
+  relativeWind,
+  seconds,
+  type AircraftProfile,
+  type CatapultEnergyProfile,
+  type ClearingTurn,
+  type LaunchCatapult,
+  type RelativeWind,
+  type ShipProfile,
+} from '@catline/launch-math';
+import type { AircraftType } from '../aircraft-types/entities/aircraft-type.entity.js';
+import type { Cycle } from '../cycles/entities/cycle.entity.js';
+import type { Catapult } from '../ships/entities/catapult.entity.js';
+
+// Translations from the stored data to @catline/launch-math's inputs. No figure is computed here.
+
+const PASCALS_PER_HECTOPASCAL = 100;
+
+/**
+ * The stored trim bands give each band's highest weight (inclusive, whole pounds); launch-math wants
+ * each band's lowest weight. Weights are whole pounds, so a band starts one pound above the last one's top.
+ */
+export function aircraftProfile(type: AircraftType): AircraftProfile {
+  return {
+    maxGrossWeight: pounds(type.maxGrossWeightLb),
+    crosswindLimit: knots(type.crosswindLimitKt),
+    thrust: poundsForce(type.thrustLbf),
+    requiredExcess: knots(type.requiredExcessKt),
+    minimumLaunchAirspeed: type.launchTable.map((row) => ({
+      grossWeight: pounds(row.grossWeightLb),
+      airspeed: knots(row.minLaunchAirspeedKt),
+    })),
+    trimBands: type.trimBands.map((band, index) => ({
+      fromGrossWeight: pounds(index === 0 ? 0 : (type.trimBands[index - 1].upToLb ?? 0) + 1),
+      trim: degrees(band.trimDeg),
+    })),
+    trimWeightStep: pounds(1),
+    afterburnerFromGrossWeight: type.afterburnerFromLb === null ? null : pounds(type.afterburnerFromLb),
+  };
+}
+
+/** `settingCount` discrete settings, numbered 0 (lowest energy) to settingCount - 1 (highest). */
+export function catapultEnergy(catapult: Catapult): CatapultEnergyProfile {
+  return {
+    strokeLength: metres(catapult.strokeM),
+    energyAtMinSetting: megajoulesToJoules(catapult.energyMinMj),
+    energyAtMaxSetting: megajoulesToJoules(catapult.energyMaxMj),
+    maxSetting: Math.max(1, catapult.settingCount - 1),
+  };
+}
+
+export function launchCatapult(catapult: Catapult): LaunchCatapult {
+  return {
+    id: String(catapult.id),
+    number: catapult.number,
+    position: catapult.position,
+    pairId: String(catapult.pair),
+    resetInterval: seconds(catapult.resetIntervalS),
+    up: catapult.status === 'up',
+  };
+}
+
+const dayTurn = (deg: number): ClearingTurn => ({
+  direction: deg > 0 ? 'right' : deg < 0 ? 'left' : 'none',
+  degrees: degrees(Math.abs(deg)),
+});
+const NO_TURN: ClearingTurn = { direction: 'none', degrees: degrees(0) };
+
+/** The ship's stored profile (signed day turns, departures as text) in launch-math's form; no turn at night. */
+export function shipProfile(profile: ShipProfileData): ShipProfile {
+  const departure = (weatherCase: WeatherCase) => ({
+    summary: profile.departures[weatherCase],
+    altitude: null,
+    untilRange: null,
+    speed: null,
+  });
+  return {
+    clearingTurns: {
+      bow: { day: dayTurn(profile.clearingTurnDeg.bow), night: NO_TURN },
+      waist: { day: dayTurn(profile.clearingTurnDeg.waist), night: NO_TURN },
+    },
+    departures: { I: departure('I'), II: departure('II'), III: departure('III') },
+  };
+}
+
+/** Degrees of turn, positive to starboard, as the contracts carry it. */
+export const signedTurn = (turn: ClearingTurn): number =>
+  turn.direction === 'right' ? turn.degrees : turn.direction === 'left' ? -turn.degrees : 0;
+
+export function cycleRelativeWind(cycle: Cycle): RelativeWind {
+  return relativeWind(
+    { course: degrees(cycle.shipCourseDeg), speed: knots(cycle.shipSpeedKt) },
+    { from: degrees(cycle.trueWindFromDeg), speed: knots(cycle.trueWindSpeedKt) },
+  );
+}
+
+export function cycleDensityRatio(cycle: Cycle): number {
+  return densityRatio(
+    airDensity(celsiusToKelvin(celsius(cycle.temperatureC)), pascals(cycle.pressureHpa * PASCALS_PER_HECTOPASCAL)),
+  );
+}

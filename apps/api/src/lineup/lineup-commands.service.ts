@@ -1,0 +1,198 @@
+import type {
+  ApplySuggestionRequest,
+  ChangeActor,
+  LineupCommandResult,
+  MarkDownRequest,
+  MoveSlotRequest,
+  SetCatapultStatusRequest,
+  SlotStatus,
+} from '@catline/contracts';
+import { Injectable } from '@nestjs/common';
+import { Catapult } from '../ships/entities/catapult.entity.js';
+import { BasisChecks } from './basis-checks.service.js';
+import { Clock } from './clock.js';
+import { CycleChangeService } from './cycle-change.service.js';
+import type { Slot } from './entities/slot.entity.js';
+import { laneSlots } from './lineup-snapshot.builder.js';
+import type { LineupState } from './lineup-state.js';
+import { LineupException } from './lineup.exception.js';
+import { placeSlots, updateSlot } from './slot-writes.js';
+
+const sameOrder = (a: readonly Slot[], b: readonly Slot[]) => a.length === b.length && a.every((slot, i) => slot.id === b[i].id);
+
+/** Lane slots that hold their place: launched, or already in the readiness steps. */
+const heldPlaces = (lane: readonly Slot[]) => lane.filter((slot) => slot.status !== 'planned');
+
+const CANNOT_GO_DOWN: readonly SlotStatus[] = ['launched', 'down', 'scratched'];
+
+/** The handler's commands on a cycle's lineup. */
+@Injectable()
+export class LineupCommandsService {
+  constructor(
+    private readonly changes: CycleChangeService,
+    private readonly basis: BasisChecks,
+    private readonly clock: Clock,
+  ) {}
+
+  move(cycleId: number, actor: ChangeActor, request: MoveSlotRequest): Promise<LineupCommandResult> {
+    return this.changes.apply(cycleId, actor, 'slot_moved', async (manager, state) => {
+      this.basis.requireOpen(state);
+      const slot = this.basis.slot(state, request.slotId);
+      await this.basis.slotAsSeen(manager, state, slot, request.slotVersion);
+      const side = slot.aircraft.sideNumber;
+      if (slot.status !== 'planned') {
+        throw new LineupException('slot_not_movable', `${side} is ${slot.status.replaceAll('_', ' ')}; only planned aircraft can be moved.`);
+      }
+      const source = slot.catapultId === null ? [] : laneSlots(state, slot.catapultId).filter((other) => other.id !== slot.id);
+      const command = { type: 'move', ...request };
+      if (request.toCatapultId === null) {
+        if (slot.catapultId === null) throw new LineupException('no_change', `${side} is already in the deck pool.`);
+        await updateSlot(manager, slot, { catapultId: null, position: null });
+        await placeSlots(manager, source, slot.catapultId);
+        return { summary: `${side} moved to the deck pool`, command };
+      }
+
+      const catapult = this.basis.catapult(state, request.toCatapultId);
+      await this.basis.laneAsSeen(manager, state, catapult, request.targetLaneOrder);
+      const current = laneSlots(state, catapult.id);
+      const target = current.filter((other) => other.id !== slot.id);
+      const held = heldPlaces(target).length;
+      if (request.toIndex < held || request.toIndex > target.length) {
+        throw new LineupException(
+          'invalid_lineup',
+          `Place ${request.toIndex + 1} on cat ${catapult.number} is not open to ${side}: choose place ${held + 1} to ${target.length + 1}.`,
+        );
+      }
+      target.splice(request.toIndex, 0, slot);
+      if (sameOrder(target, current)) {
+        throw new LineupException('no_change', `${side} is already at place ${request.toIndex + 1} on cat ${catapult.number}.`);
+      }
+      if (slot.catapultId !== null && slot.catapultId !== catapult.id) await placeSlots(manager, source, slot.catapultId);
+      await placeSlots(manager, target, catapult.id);
+      return { summary: `${side} moved to cat ${catapult.number}, place ${request.toIndex + 1}`, command };
+    });
+  }
+
+  applySuggestion(cycleId: number, actor: ChangeActor, request: ApplySuggestionRequest): Promise<LineupCommandResult> {
+    return this.changes.apply(cycleId, actor, 'suggestion_applied', async (manager, state) => {
+      this.basis.requireOpen(state);
+      await this.basis.cycleAsSeen(manager, state, request.basisVersion);
+      const placed = this.suggestedLanes(state, request);
+      const listed = new Set([...placed.values()].flat().map((slot) => slot.id));
+      let moved = 0;
+      for (const slot of state.slots) {
+        if (slot.status === 'planned' && slot.catapultId !== null && !listed.has(slot.id)) {
+          await updateSlot(manager, slot, { catapultId: null, position: null });
+          moved += 1;
+        }
+      }
+      const counts: string[] = [];
+      for (const catapult of state.catapults) {
+        const lane = laneSlots(state, catapult.id);
+        const next = [...heldPlaces(lane), ...(placed.get(catapult.id) ?? [])];
+        if (!sameOrder(next, lane)) moved += 1;
+        await placeSlots(manager, next, catapult.id);
+        counts.push(`cat ${catapult.number} ×${next.length}`);
+      }
+      if (moved === 0) throw new LineupException('no_change', 'The lineup already is the suggested one.');
+      return { summary: `Suggested lineup applied: ${counts.join(', ')}`, command: { type: 'apply_suggestion', ...request } };
+    });
+  }
+
+  markDown(cycleId: number, actor: ChangeActor, slotId: number, request: MarkDownRequest): Promise<LineupCommandResult> {
+    return this.changes.apply(cycleId, actor, 'aircraft_down', async (manager, state) => {
+      this.basis.requireOpen(state);
+      const slot = this.basis.slot(state, slotId);
+      await this.basis.slotAsSeen(manager, state, slot, request.slotVersion);
+      const side = slot.aircraft.sideNumber;
+      if (CANNOT_GO_DOWN.includes(slot.status)) {
+        throw new LineupException('wrong_step', `${side} is ${slot.status}; it cannot be marked down.`);
+      }
+      const spare = request.spareSlotId === undefined ? null : this.spareFor(state, slot, request.spareSlotId);
+      const now = this.clock.now();
+      await updateSlot(manager, slot, {
+        status: 'down',
+        downAt: now,
+        statusAt: now,
+        statusById: actor.id,
+        catapultId: null,
+        position: null,
+        replacedBySlotId: spare?.id ?? null,
+      });
+      const command = { type: 'mark_down', slotId, ...request };
+      if (slot.catapultId === null) return { summary: `${side} down`, command };
+      const catapult = this.basis.catapult(state, slot.catapultId);
+      if (!spare) {
+        await placeSlots(manager, laneSlots(state, catapult.id).filter((other) => other.id !== slot.id), catapult.id);
+        return { summary: `${side} down, out of cat ${catapult.number}`, command };
+      }
+      await updateSlot(manager, spare, { catapultId: slot.catapultId, position: slot.position });
+      return {
+        summary: `${side} down; spare ${spare.aircraft.sideNumber} takes cat ${catapult.number}, place ${(slot.position ?? 0) + 1}`,
+        command,
+      };
+    });
+  }
+
+  setCatapultStatus(
+    cycleId: number,
+    actor: ChangeActor,
+    catapultId: number,
+    request: SetCatapultStatusRequest,
+  ): Promise<LineupCommandResult> {
+    return this.changes.apply(cycleId, actor, 'catapult_status_set', async (manager, state) => {
+      this.basis.requireOpen(state);
+      const catapult = this.basis.catapult(state, catapultId);
+      await this.basis.catapultAsSeen(manager, state, catapult, request.basisStatus);
+      if (request.status === catapult.status) {
+        throw new LineupException('no_change', `Cat ${catapult.number} is already ${catapult.status}.`);
+      }
+      const result = await manager
+        .createQueryBuilder()
+        .update(Catapult)
+        .set({ status: request.status })
+        .where('id = :id AND status = :seen', { id: catapult.id, seen: request.basisStatus })
+        .execute();
+      if (result.affected !== 1) throw new Error(`Cat ${catapult.number} changed status while its cycle was locked`);
+      const reason = request.reason ? `: ${request.reason}` : '';
+      return { summary: `Cat ${catapult.number} ${request.status}${reason}`, command: { type: 'catapult_status', catapultId, ...request } };
+    });
+  }
+
+  /** The planned slots of each lane as the request lists them, after checking every id. */
+  private suggestedLanes(state: LineupState, request: ApplySuggestionRequest): Map<number, Slot[]> {
+    const lanes = new Map<number, Slot[]>();
+    const seen = new Set<number>();
+    for (const lane of request.lanes) {
+      const catapult = this.basis.catapult(state, lane.catapultId);
+      if (lanes.has(catapult.id)) throw new LineupException('invalid_lineup', `Cat ${catapult.number} is listed twice.`);
+      lanes.set(
+        catapult.id,
+        lane.slotIds.map((slotId) => {
+          const slot = this.basis.slot(state, slotId);
+          if (seen.has(slotId)) throw new LineupException('invalid_lineup', `${slot.aircraft.sideNumber} is listed twice.`);
+          seen.add(slotId);
+          if (slot.status !== 'planned') {
+            throw new LineupException('invalid_lineup', `${slot.aircraft.sideNumber} is ${slot.status.replaceAll('_', ' ')}; only planned aircraft can be placed.`);
+          }
+          return slot;
+        }),
+      );
+    }
+    return lanes;
+  }
+
+  private spareFor(state: LineupState, down: Slot, spareSlotId: number): Slot {
+    const spare = this.basis.slot(state, spareSlotId);
+    if (down.catapultId === null) {
+      throw new LineupException('spare_unavailable', `${down.aircraft.sideNumber} is in the deck pool; there is no place for a spare to take.`);
+    }
+    if (spare.id === down.id || spare.status !== 'planned' || spare.catapultId !== null) {
+      throw new LineupException(
+        'spare_unavailable',
+        `${spare.aircraft.sideNumber} is not waiting in the deck pool; only a planned aircraft from the pool can stand in.`,
+      );
+    }
+    return spare;
+  }
+}

@@ -1,0 +1,223 @@
+import type { LaneView, LaunchFigures, LineupSnapshot, SlotStatus, SlotView } from '@catline/contracts';
+import {
+  afterburnerRequired,
+  catapultClosedReason,
+  catapultWind,
+  clearingTurn,
+  degrees,
+  departureFor,
+  epochMs,
+  pounds,
+  priorityForRole,
+  projectLaunchTimes,
+  seconds,
+  secondsToMilliseconds,
+  takeOffTrim,
+  type EpochMs,
+  type LaunchPriority,
+  type Projection,
+  type UnschedulableReason,
+  type WindComponents,
+} from '@catline/launch-math';
+import { toCycleView } from '../cycles/cycle.mapper.js';
+import type { Catapult } from '../ships/entities/catapult.entity.js';
+import type { Slot } from './entities/slot.entity.js';
+import { launchFigures } from './launch-figures.js';
+import {
+  aircraftProfile,
+  cycleDensityRatio,
+  cycleRelativeWind,
+  launchCatapult,
+  shipProfile,
+  signedTurn,
+} from './launch-math.adapter.js';
+import type { LineupState } from './lineup-state.js';
+
+/** Slots that have left the lineup for good; every other slot with a catapult is in that catapult's lane. */
+const OUT_OF_LINEUP: readonly SlotStatus[] = ['down', 'scratched'];
+
+export const isInPool = (slot: Slot) => slot.catapultId === null && !OUT_OF_LINEUP.includes(slot.status);
+
+/** A lane's slots in launch order. */
+export function laneSlots(state: LineupState, catapultId: number): Slot[] {
+  return state.slots
+    .filter((slot) => slot.catapultId === catapultId)
+    .sort((a, b) => (a.position ?? 0) - (b.position ?? 0) || a.id - b.id);
+}
+
+export function launchPriority(slot: Pick<Slot, 'tanker' | 'earlyWarning' | 'spare'>): LaunchPriority {
+  return priorityForRole(slot.tanker ? 'tanker' : slot.earlyWarning ? 'early_warning' : slot.spare ? 'spare' : 'mission');
+}
+
+/** Taxi time (s) from where the aircraft is parked to a catapult, from the ship's deck spots. */
+export function taxiSeconds(state: LineupState, slot: Slot, catapult: Catapult): number | undefined {
+  return state.ship.deckSpots.find((spot) => spot.name === slot.aircraft.parkedSpot)?.taxiS[catapult.number];
+}
+
+const iso = (instant: Date | EpochMs | null | undefined): string | null =>
+  instant === null || instant === undefined ? null : new Date(instant).toISOString();
+
+/**
+ * launch-math's projection of a lineup (slot ids per catapult id): launched slots at their recorded
+ * times, planned ones no earlier than their taxi from where they are parked.
+ */
+export function projectLineup(state: LineupState, lanes: Record<string, string[]>): Projection {
+  const { cycle } = state;
+  const start = epochMs(cycle.plannedLaunchAt.getTime());
+  const slotById = new Map(state.slots.map((slot) => [String(slot.id), slot]));
+  const launched: Record<string, EpochMs> = {};
+  const notBefore: Record<string, EpochMs> = {};
+  const priorities: Record<string, LaunchPriority> = {};
+  for (const catapult of state.catapults) {
+    for (const slotId of lanes[String(catapult.id)] ?? []) {
+      const slot = slotById.get(slotId)!;
+      priorities[slotId] = launchPriority(slot);
+      if (slot.launchedAt) launched[slotId] = epochMs(slot.launchedAt.getTime());
+      const taxi = slot.status === 'planned' ? taxiSeconds(state, slot, catapult) : undefined;
+      if (taxi !== undefined) notBefore[slotId] = epochMs(start + secondsToMilliseconds(seconds(taxi)));
+    }
+  }
+  return projectLaunchTimes({
+    cycleStart: start,
+    window: { start: epochMs(cycle.windowStartAt.getTime()), end: epochMs(cycle.windowEndAt.getTime()) },
+    catapults: state.catapults.map(launchCatapult),
+    landingAreaInUse: cycle.landingAreaInUse,
+    lanes,
+    pairMinimumGap: seconds(state.ship.pairGapS),
+    launched,
+    notBefore,
+    priorities,
+  });
+}
+
+interface LaneConditions {
+  catapult: Catapult;
+  wind: WindComponents;
+  closedReason: UnschedulableReason | null;
+  clearingTurnDeg: number;
+}
+
+interface CycleConditions {
+  density: number;
+  departure: string;
+  lanes: Map<number, LaneConditions>;
+}
+
+function cycleConditions(state: LineupState): CycleConditions {
+  const { cycle } = state;
+  const relative = cycleRelativeWind(cycle);
+  const profile = shipProfile(state.ship.profile);
+  return {
+    density: cycleDensityRatio(cycle),
+    departure: departureFor(profile, cycle.weatherCase).summary,
+    lanes: new Map(
+      state.catapults.map((catapult) => [
+        catapult.id,
+        {
+          catapult,
+          wind: catapultWind(relative, degrees(catapult.axisAngleDeg)),
+          closedReason: catapultClosedReason(launchCatapult(catapult), cycle.landingAreaInUse),
+          clearingTurnDeg: signedTurn(clearingTurn(profile, catapult.position, cycle.night)),
+        },
+      ]),
+    ),
+  };
+}
+
+function figuresIn(conditions: CycleConditions, slot: Slot): LaunchFigures | null {
+  const lane = slot.catapultId === null ? undefined : conditions.lanes.get(slot.catapultId);
+  return lane ? launchFigures({ type: slot.aircraft.type, grossWeightLb: slot.grossWeightLb, densityRatio: conditions.density, ...lane }) : null;
+}
+
+/** The figures of one slot on its catapult under the cycle's conditions; null in the deck pool. */
+export const slotFigures = (state: LineupState, slot: Slot): LaunchFigures | null => figuresIn(cycleConditions(state), slot);
+
+/** The lineup snapshot of a cycle, every figure from @catline/launch-math; pure, so equal states give equal snapshots. */
+export function buildSnapshot(state: LineupState): LineupSnapshot {
+  const { cycle } = state;
+  const conditions = cycleConditions(state);
+  const laneOrder = new Map(state.catapults.map((catapult) => [catapult.id, laneSlots(state, catapult.id)]));
+  const projection = projectLineup(
+    state,
+    Object.fromEntries([...laneOrder].map(([catapultId, slots]) => [String(catapultId), slots.map((slot) => String(slot.id))])),
+  );
+  const projected = new Map(projection.slots.map((slot) => [Number(slot.slotId), slot]));
+
+  const slots: SlotView[] = state.slots.map((slot) => {
+    const type = aircraftProfile(slot.aircraft.type);
+    const projectedSlot = projected.get(slot.id);
+    return {
+      id: slot.id,
+      cycleId: slot.cycleId,
+      aircraftId: slot.aircraftId,
+      sideNumber: slot.aircraft.sideNumber,
+      typeId: slot.aircraft.typeId,
+      typeDesignation: slot.aircraft.type.designation,
+      squadronId: slot.aircraft.squadronId,
+      squadronCode: slot.aircraft.squadron.code,
+      pilotId: slot.pilotId,
+      pilotName: slot.pilot?.name ?? null,
+      mission: slot.mission,
+      fuelLb: slot.fuelLb,
+      stores: slot.stores,
+      grossWeightLb: slot.grossWeightLb,
+      tanker: slot.tanker,
+      earlyWarning: slot.earlyWarning,
+      spare: slot.spare,
+      catapultId: slot.catapultId,
+      position: slot.position,
+      status: slot.status,
+      version: slot.version,
+      trimDeg: takeOffTrim(type, pounds(slot.grossWeightLb)),
+      afterburnerRequired: afterburnerRequired(type, pounds(slot.grossWeightLb)),
+      departure: conditions.departure,
+      pilotWeightAckAt: iso(slot.pilotWeightAckAt),
+      catapultWeightAckAt: iso(slot.catapultWeightAckAt),
+      suspendReason: slot.suspendReason,
+      overrideReason: slot.overrideReason,
+      launchedAt: iso(slot.launchedAt),
+      statusAt: iso(slot.statusAt),
+      statusBy: slot.statusBy?.name ?? null,
+      projectedLaunchAt: iso(projectedSlot?.time),
+      missesWindow: projectedSlot?.missesWindow ?? false,
+      figures: figuresIn(conditions, slot),
+    };
+  });
+  const viewOf = new Map(slots.map((view) => [view.id, view]));
+
+  const lanes: LaneView[] = state.catapults.map((catapult) => {
+    const lane = conditions.lanes.get(catapult.id)!;
+    const ids = laneOrder.get(catapult.id)!.map((slot) => slot.id);
+    return {
+      catapultId: catapult.id,
+      number: catapult.number,
+      position: catapult.position,
+      status: catapult.status,
+      closed: lane.closedReason === 'waist_closed',
+      headwindKt: lane.wind.headwind,
+      crosswindKt: lane.wind.crosswind,
+      crosswindSide: lane.wind.side,
+      slotIds: ids,
+      go: ids.every((id) => {
+        const view = viewOf.get(id)!;
+        return view.status === 'launched' || view.figures?.go === true;
+      }),
+    };
+  });
+  const pool = state.slots
+    .filter(isInPool)
+    .sort((a, b) => a.aircraft.sideNumber.localeCompare(b.aircraft.sideNumber, 'en', { numeric: true }))
+    .map((slot) => slot.id);
+
+  return {
+    cycle: toCycleView(cycle, {
+      slotCount: state.slots.length,
+      launchedCount: state.slots.filter((slot) => slot.status === 'launched').length,
+    }),
+    lanes,
+    pool,
+    slots,
+    lastLaunchAt: iso(projection.lastLaunch),
+    version: cycle.version,
+  };
+}

@@ -1,0 +1,29 @@
+import type { LineupSnapshot } from '@catline/contracts';
+import { Injectable } from '@nestjs/common';
+import { InjectDataSource } from '@nestjs/typeorm';
+import { DataSource } from 'typeorm';
+import { buildSnapshot } from './lineup-snapshot.builder.js';
+import { LineupStateLoader, type LineupState } from './lineup-state.js';
+import { asLaunchDataRefusal } from './lineup.exception.js';
+
+@Injectable()
+export class LineupSnapshotService {
+  constructor(
+    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly loader: LineupStateLoader,
+  ) {}
+
+  /** The cycle's state from one consistent read (a repeatable-read transaction sees a single moment). */
+  readState(cycleId: number): Promise<LineupState> {
+    return this.dataSource.transaction('REPEATABLE READ', (manager) => this.loader.read(manager, cycleId));
+  }
+
+  async snapshot(cycleId: number): Promise<LineupSnapshot> {
+    const state = await this.readState(cycleId);
+    try {
+      return buildSnapshot(state);
+    } catch (error) {
+      throw asLaunchDataRefusal(error);
+    }
+  }
+}

@@ -1,0 +1,63 @@
+import { LaunchMathInputError } from '@catline/launch-math';
+import { HttpStatus } from '@nestjs/common';
+import { DomainException } from '../common/errors/domain.exception.js';
+
+export type LineupRefusalCode =
+  | 'not_found'
+  | 'invalid_lineup'
+  | 'stale_basis'
+  | 'no_change'
+  | 'cycle_closed'
+  | 'cycle_not_executing'
+  | 'slot_not_movable'
+  | 'spare_unavailable'
+  | 'not_your_catapult'
+  | 'not_your_slot'
+  | 'not_current_aircraft'
+  | 'wrong_step'
+  | 'weight_not_agreed'
+  | 'weight_mismatch'
+  | 'catapult_unavailable'
+  | 'no_go'
+  | 'already_launched'
+  | 'idempotency_key_reused'
+  | 'launch_data_invalid';
+
+const STATUS: Record<LineupRefusalCode, HttpStatus> = {
+  not_found: HttpStatus.NOT_FOUND,
+  invalid_lineup: HttpStatus.BAD_REQUEST,
+  stale_basis: HttpStatus.CONFLICT,
+  no_change: HttpStatus.CONFLICT,
+  cycle_closed: HttpStatus.CONFLICT,
+  cycle_not_executing: HttpStatus.CONFLICT,
+  slot_not_movable: HttpStatus.CONFLICT,
+  spare_unavailable: HttpStatus.CONFLICT,
+  not_your_catapult: HttpStatus.FORBIDDEN,
+  not_your_slot: HttpStatus.FORBIDDEN,
+  not_current_aircraft: HttpStatus.CONFLICT,
+  wrong_step: HttpStatus.CONFLICT,
+  weight_not_agreed: HttpStatus.CONFLICT,
+  weight_mismatch: HttpStatus.CONFLICT,
+  catapult_unavailable: HttpStatus.CONFLICT,
+  no_go: HttpStatus.CONFLICT,
+  already_launched: HttpStatus.CONFLICT,
+  idempotency_key_reused: HttpStatus.CONFLICT,
+  launch_data_invalid: HttpStatus.UNPROCESSABLE_ENTITY,
+};
+
+/** Every refusal of a lineup or cycle command, with a code the client can act on. */
+export class LineupException extends DomainException {
+  constructor(code: LineupRefusalCode, message: string) {
+    super(STATUS[code], code, message);
+  }
+}
+
+/**
+ * launch-math refuses stored data that cannot describe a real launch (a malformed table, a catapult
+ * without an energy range): say so, instead of failing as a server error.
+ */
+export function asLaunchDataRefusal(error: unknown): unknown {
+  return error instanceof LaunchMathInputError
+    ? new LineupException('launch_data_invalid', `The launch figures cannot be computed from the stored data: ${error.message}.`)
+    : error;
+}

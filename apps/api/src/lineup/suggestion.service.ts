@@ -1,0 +1,61 @@
+import type { SuggestedLineup } from '@catline/contracts';
+import { epochMs, seconds, suggestLineup, type Seconds } from '@catline/launch-math';
+import { Injectable } from '@nestjs/common';
+import { launchCatapult } from './launch-math.adapter.js';
+import { laneSlots, launchPriority, projectLineup, taxiSeconds } from './lineup-snapshot.builder.js';
+import { LineupSnapshotService } from './lineup-snapshot.service.js';
+import type { LineupState } from './lineup-state.js';
+import { asLaunchDataRefusal } from './lineup.exception.js';
+
+/**
+ * launch-math's suggested lineup for the cycle's planned aircraft. Aircraft already launched or in the
+ * readiness steps keep their places at the front of their lanes; the suggestion queues behind them.
+ */
+@Injectable()
+export class SuggestionService {
+  constructor(private readonly snapshots: LineupSnapshotService) {}
+
+  async suggest(cycleId: number): Promise<SuggestedLineup> {
+    const state = await this.snapshots.readState(cycleId);
+    try {
+      return suggestionFor(state);
+    } catch (error) {
+      throw asLaunchDataRefusal(error);
+    }
+  }
+}
+
+export function suggestionFor(state: LineupState): SuggestedLineup {
+  const { cycle } = state;
+  const planned = state.slots.filter((slot) => slot.status === 'planned');
+  const taxiTimes: Record<string, Record<string, Seconds>> = {};
+  for (const slot of planned) {
+    taxiTimes[slot.id] = {};
+    for (const catapult of state.catapults) {
+      const taxi = taxiSeconds(state, slot, catapult);
+      if (taxi !== undefined) taxiTimes[slot.id][catapult.id] = seconds(taxi);
+    }
+  }
+  const suggestion = suggestLineup({
+    cycleStart: epochMs(cycle.plannedLaunchAt.getTime()),
+    window: { start: epochMs(cycle.windowStartAt.getTime()), end: epochMs(cycle.windowEndAt.getTime()) },
+    catapults: state.catapults.map(launchCatapult),
+    landingAreaInUse: cycle.landingAreaInUse,
+    pairMinimumGap: seconds(state.ship.pairGapS),
+    aircraft: planned.map((slot) => ({ id: String(slot.id), priority: launchPriority(slot) })),
+    taxiTimes,
+  });
+  const lanes = state.catapults.map((catapult) => ({
+    catapultId: catapult.id,
+    slotIds: (suggestion.lanes[catapult.id] ?? []).map(Number),
+  }));
+  // The lineup as applying it would leave it, so its last launch is the one the snapshot will show.
+  const applied = Object.fromEntries(
+    lanes.map((lane) => [
+      String(lane.catapultId),
+      [...laneSlots(state, lane.catapultId).filter((slot) => slot.status !== 'planned').map((slot) => slot.id), ...lane.slotIds].map(String),
+    ]),
+  );
+  const lastLaunch = projectLineup(state, applied).lastLaunch;
+  return { basisVersion: cycle.version, lanes, lastLaunchAt: lastLaunch === null ? null : new Date(lastLaunch).toISOString() };
+}

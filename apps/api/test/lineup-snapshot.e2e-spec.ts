@@ -1,0 +1,205 @@
+import type { AircraftTypeView, AircraftView, CycleView, LineupChange, LineupSnapshot, ShipView } from '@catline/contracts';
+import {
+  afterburnerRequired,
+  airDensity,
+  assessLaunch,
+  catapultWind,
+  celsius,
+  celsiusToKelvin,
+  degrees,
+  densityRatio,
+  epochMs,
+  knots,
+  lowestLaunchSetting,
+  megajoulesToJoules,
+  metres,
+  minimumLaunchAirspeed,
+  pascals,
+  pounds,
+  poundsForce,
+  projectLaunchTimes,
+  relativeWind,
+  seconds,
+  takeOffTrim,
+  type AircraftProfile,
+} from '@catline/launch-math';
+import type { INestApplication } from '@nestjs/common';
+import { applyChanges } from './support/apply-patch.js';
+import { LineupDriver, OBSERVER } from './support/lineup-fixtures.js';
+import { startTestApp } from './support/test-app.js';
+
+// The check values here are @catline/launch-math's own results for the seeded data: the snapshot must
+// carry exactly what the package computes (the package's tests name the published sources).
+
+function profileOf(type: AircraftTypeView): AircraftProfile {
+  return {
+    maxGrossWeight: pounds(type.maxGrossWeightLb),
+    crosswindLimit: knots(type.crosswindLimitKt),
+    thrust: poundsForce(type.thrustLbf),
+    requiredExcess: knots(type.requiredExcessKt),
+    minimumLaunchAirspeed: type.launchTable.map((row) => ({ grossWeight: pounds(row.grossWeightLb), airspeed: knots(row.minLaunchAirspeedKt) })),
+    // A stored band holds weights up to and including its upper bound.
+    trimBands: type.trimBands.map((band, i) => ({ fromGrossWeight: pounds(i === 0 ? 0 : type.trimBands[i - 1].upToLb! + 1), trim: degrees(band.trimDeg) })),
+    trimWeightStep: pounds(1),
+    afterburnerFromGrossWeight: type.afterburnerFromLb === null ? null : pounds(type.afterburnerFromLb),
+  };
+}
+
+const bySort = <T>(items: T[], key: (item: T) => number) =>
+  [...items].sort((a, b) => key(a) - key(b));
+
+describe('lineup snapshot of the demo cycles', () => {
+  let app: INestApplication;
+  let deck: LineupDriver;
+  let cycles: CycleView[];
+
+  beforeAll(async () => {
+    const started = await startTestApp();
+    app = started.app;
+    deck = new LineupDriver(started.url);
+    cycles = await deck.ok<CycleView[]>(OBSERVER, 'get', '/api/cycles');
+  });
+
+  afterAll(async () => {
+    await app.close();
+  });
+
+  const demoCycle = (number: number) => cycles.find((cycle) => cycle.number === number)!;
+
+  it('seeds a day cycle in case I with a deck pool, filled lanes and a slot for the demo pilot', async () => {
+    const snapshot = await deck.snapshot(demoCycle(2).id);
+    expect(snapshot.cycle).toMatchObject({ state: 'planning', weatherCase: 'I', night: false });
+    expect(snapshot.slots.length).toBeGreaterThanOrEqual(18);
+    expect(snapshot.pool.length).toBeGreaterThanOrEqual(10);
+    expect(snapshot.lanes.every((lane) => lane.slotIds.length > 0)).toBe(true);
+    expect(snapshot.slots.some((slot) => slot.pilotName === 'Kit Rowan')).toBe(true);
+    const night = await deck.snapshot(demoCycle(3).id);
+    expect(night.cycle).toMatchObject({ state: 'planning', weatherCase: 'III', night: true });
+    expect(night.pool.length).toBe(night.slots.length);
+  });
+
+  it('carries the figures @catline/launch-math computes for every aircraft in a lane', async () => {
+    const snapshot = await deck.snapshot(demoCycle(2).id);
+    const ship = (await deck.ok<ShipView[]>(OBSERVER, 'get', '/api/ships'))[0];
+    const types = await deck.ok<AircraftTypeView[]>(OBSERVER, 'get', '/api/aircraft-types');
+    const { cycle } = snapshot;
+    const relative = relativeWind(
+      { course: degrees(cycle.shipCourseDeg), speed: knots(cycle.shipSpeedKt) },
+      { from: degrees(cycle.trueWindFromDeg), speed: knots(cycle.trueWindSpeedKt) },
+    );
+    const sigma = densityRatio(airDensity(celsiusToKelvin(celsius(cycle.temperatureC)), pascals(cycle.pressureHpa * 100)));
+    let checked = 0;
+    for (const lane of snapshot.lanes) {
+      const catapult = ship.catapults.find((candidate) => candidate.id === lane.catapultId)!;
+      const wind = catapultWind(relative, degrees(catapult.axisAngleDeg));
+      expect([lane.headwindKt, lane.crosswindKt, lane.crosswindSide]).toEqual([wind.headwind, wind.crosswind, wind.side]);
+      for (const slotId of lane.slotIds) {
+        const slot = snapshot.slots.find((candidate) => candidate.id === slotId)!;
+        const profile = profileOf(types.find((type) => type.id === slot.typeId)!);
+        const weight = pounds(slot.grossWeightLb);
+        const minimum = minimumLaunchAirspeed(profile, weight, sigma);
+        if (minimum.kind !== 'airspeed') throw new Error(`${slot.sideNumber} is outside its launch table`);
+        const required = minimum.airspeed + profile.requiredExcess;
+        const setting = lowestLaunchSetting({
+          aircraft: profile,
+          catapult: {
+            strokeLength: metres(catapult.strokeM),
+            energyAtMinSetting: megajoulesToJoules(catapult.energyMinMj),
+            energyAtMaxSetting: megajoulesToJoules(catapult.energyMaxMj),
+            maxSetting: catapult.settingCount - 1,
+          },
+          grossWeight: weight,
+          wanted: knots(Math.max(0, required - wind.headwind)),
+        });
+        if (setting.kind !== 'setting') throw new Error(`No setting launches ${slot.sideNumber}`);
+        const assessment = assessLaunch({ aircraft: profile, grossWeight: weight, endSpeed: setting.endSpeed, wind, catapultUp: true, densityRatio: sigma });
+        expect(slot.figures).toEqual({
+          headwindKt: wind.headwind,
+          crosswindKt: wind.crosswind,
+          crosswindSide: wind.side,
+          catapultSetting: setting.setting,
+          endSpeedKt: setting.endSpeed,
+          requiredAirspeedKt: required,
+          requiredWindOverDeckKt: assessment.requiredWindOverDeck,
+          marginKt: assessment.margin,
+          go: assessment.go,
+          reasons: [],
+          clearingTurnDeg: ship.profile.clearingTurnDeg[catapult.position],
+        });
+        expect(slot.trimDeg).toBe(takeOffTrim(profile, weight));
+        expect(slot.afterburnerRequired).toBe(afterburnerRequired(profile, weight));
+        expect(slot.departure).toBe(ship.profile.departures.I);
+        checked += 1;
+      }
+    }
+    expect(checked).toBe(8);
+  });
+
+  it('projects launch times as @catline/launch-math does, from taxi arrival, priority and catapult timing', async () => {
+    const snapshot = await deck.snapshot(demoCycle(2).id);
+    const ship = (await deck.ok<ShipView[]>(OBSERVER, 'get', '/api/ships'))[0];
+    const aircraft = await deck.ok<AircraftView[]>(OBSERVER, 'get', '/api/aircraft');
+    const start = Date.parse(snapshot.cycle.plannedLaunchAt);
+    const notBefore: Record<string, ReturnType<typeof epochMs>> = {};
+    const priorities: Record<string, 'first' | 'normal' | 'last'> = {};
+    for (const lane of snapshot.lanes) {
+      const number = ship.catapults.find((catapult) => catapult.id === lane.catapultId)!.number;
+      for (const slotId of lane.slotIds) {
+        const slot = snapshot.slots.find((candidate) => candidate.id === slotId)!;
+        const spot = aircraft.find((row) => row.id === slot.aircraftId)!.parkedSpot;
+        notBefore[slotId] = epochMs(start + ship.deckSpots.find((deckSpot) => deckSpot.name === spot)!.taxiS[number] * 1000);
+        priorities[slotId] = slot.tanker || slot.earlyWarning ? 'first' : slot.spare ? 'last' : 'normal';
+      }
+    }
+    const projection = projectLaunchTimes({
+      cycleStart: epochMs(start),
+      window: { start: epochMs(Date.parse(snapshot.cycle.windowStartAt)), end: epochMs(Date.parse(snapshot.cycle.windowEndAt)) },
+      catapults: ship.catapults.map((catapult) => ({
+        id: String(catapult.id),
+        number: catapult.number,
+        position: catapult.position,
+        pairId: String(catapult.pair),
+        resetInterval: seconds(catapult.resetIntervalS),
+        up: catapult.status === 'up',
+      })),
+      landingAreaInUse: snapshot.cycle.landingAreaInUse,
+      lanes: Object.fromEntries(snapshot.lanes.map((lane) => [String(lane.catapultId), lane.slotIds.map(String)])),
+      pairMinimumGap: seconds(ship.pairGapS),
+      notBefore,
+      priorities,
+    });
+    for (const projected of projection.slots) {
+      const slot = snapshot.slots.find((candidate) => String(candidate.id) === projected.slotId)!;
+      expect([slot.projectedLaunchAt, slot.missesWindow]).toEqual([new Date(projected.time).toISOString(), projected.missesWindow]);
+    }
+    expect(projection.slots).toHaveLength(8);
+    expect(snapshot.lastLaunchAt).toBe(new Date(projection.lastLaunch!).toISOString());
+    expect(snapshot.slots.filter((slot) => slot.catapultId === null).every((slot) => slot.projectedLaunchAt === null && slot.figures === null)).toBe(true);
+  });
+
+  it('keeps the flown cycle whole: a history that replays to its final lineup', async () => {
+    const closed = demoCycle(1);
+    const final = await deck.snapshot(closed.id);
+    const changes = await deck.ok<LineupChange[]>(OBSERVER, 'get', `/api/cycles/${closed.id}/lineup/changes?since=0`);
+
+    expect(changes.map((change) => change.version)).toEqual(Array.from({ length: final.version }, (_, i) => i + 1));
+    const kinds = new Set(changes.map((change) => change.kind));
+    for (const kind of ['slot_added', 'slot_moved', 'weight_acknowledged', 'aircraft_down', 'cycle_started', 'slot_advanced', 'slot_suspended', 'slot_launched', 'cycle_closed'] as const) {
+      expect(kinds).toContain(kind);
+    }
+    const times = changes.map((change) => Date.parse(change.at));
+    expect(times).toEqual([...times].sort((a, b) => a - b));
+    expect(final.cycle.state).toBe('closed');
+    expect(final.slots.filter((slot) => slot.status === 'launched').every((slot) => slot.launchedAt !== null)).toBe(true);
+    expect(final.slots.find((slot) => slot.sideNumber === '104')!.status).toBe('down');
+
+    const empty: LineupSnapshot = { cycle: final.cycle, lanes: [], pool: [], slots: [], lastLaunchAt: null, version: 0 };
+    const replayed = applyChanges(empty, changes);
+    const normal = (snapshot: LineupSnapshot) => ({
+      ...snapshot,
+      lanes: bySort(snapshot.lanes, (lane) => lane.catapultId),
+      slots: bySort(snapshot.slots, (slot) => slot.id),
+    });
+    expect(normal(replayed)).toEqual(normal(final));
+  });
+});

@@ -1,0 +1,70 @@
+import { ROLES } from '@catline/contracts';
+import { goodConditions } from '../support/lineup-fixtures.js';
+import { lineupDriver } from './lineup-driver.js';
+import type { MatrixContext, MatrixRoute } from './route-table.js';
+
+// A permitted caller changes a cycle of its own; refused callers aim at demo cycle 2 (the day cycle).
+const DEMO_CYCLE = 2;
+
+async function targetCycle(context: MatrixContext): Promise<number> {
+  return context.allowed ? (await lineupDriver(context).createCycle()).id : DEMO_CYCLE;
+}
+
+export const cyclesRoutes: MatrixRoute[] = [
+  { method: 'GET', path: '/api/cycles', allowed: ROLES },
+  { method: 'GET', path: '/api/cycles/{id}', allowed: ROLES, example: () => ({ params: { id: DEMO_CYCLE } }) },
+  {
+    method: 'POST',
+    path: '/api/cycles',
+    allowed: ['air_operations'],
+    // The number is random; another spec's cycle may hold it.
+    refusals: [409],
+    example: () => ({
+      body: {
+        shipId: 1,
+        number: 1000 + Math.floor(Math.random() * 8999),
+        plannedLaunchAt: '2027-02-01T10:00:00.000Z',
+        windowStartAt: '2027-02-01T09:50:00.000Z',
+        windowEndAt: '2027-02-01T10:40:00.000Z',
+        ...goodConditions,
+      },
+    }),
+  },
+  {
+    method: 'PATCH',
+    path: '/api/cycles/{id}/conditions',
+    allowed: ['air_operations'],
+    example: async (context) => ({ params: { id: await targetCycle(context) }, body: { basisVersion: 0, trueWindSpeedKt: 13 } }),
+  },
+  {
+    method: 'POST',
+    path: '/api/cycles/{id}/start',
+    allowed: ['air_operations'],
+    example: async (context) => ({ params: { id: await targetCycle(context) }, body: { basisVersion: 0 } }),
+  },
+  {
+    method: 'POST',
+    path: '/api/cycles/{id}/close',
+    allowed: ['air_operations'],
+    example: async (context) => ({ params: { id: await targetCycle(context) }, body: { basisVersion: 0 } }),
+  },
+  {
+    method: 'POST',
+    path: '/api/cycles/{id}/slots',
+    allowed: ['air_operations'],
+    example: async (context) => ({
+      params: { id: await targetCycle(context) },
+      body: {
+        aircraftId: 1,
+        pilotId: null,
+        mission: 'Matrix sortie',
+        fuelLb: 9000,
+        stores: '',
+        grossWeightLb: 42_000,
+        tanker: false,
+        earlyWarning: false,
+        spare: false,
+      },
+    }),
+  },
+];

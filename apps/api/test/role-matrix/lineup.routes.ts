@@ -1,0 +1,115 @@
+import { ROLES } from '@catline/contracts';
+import { pilot } from '../support/lineup-fixtures.js';
+import { lineupDriver } from './lineup-driver.js';
+import type { MatrixContext, MatrixRoute } from './route-table.js';
+
+// A permitted caller acts on a fresh cycle of its own, set up as far as its command needs (the
+// catapult officer is cat1@, the pilot pilot@); refused callers aim at the demo day cycle.
+const DEMO_CYCLE = 2;
+const refused = { params: { cycleId: DEMO_CYCLE, slotId: 1, catapultId: 1 }, body: {} };
+
+type Stage = 'pool' | 'lane' | 'executing' | 'taxiing' | 'tensioned';
+
+/** A fresh cycle with one aircraft (flown by pilot@) taken to `stage` on cat 1. */
+async function freshSlot(context: MatrixContext, stage: Stage) {
+  const deck = lineupDriver(context);
+  const cycle = await deck.createCycle();
+  const slot = await deck.addSlot(cycle.id, '101', { pilotEmail: pilot(1) });
+  if (stage !== 'pool') await deck.place(cycle.id, slot.id, 1);
+  if (stage === 'executing' || stage === 'taxiing' || stage === 'tensioned') await deck.start(cycle.id);
+  if (stage === 'taxiing') await deck.step(cycle.id, slot.id, 'taxiing');
+  if (stage === 'tensioned') await deck.readyToLaunch(cycle.id, slot.id, pilot(1));
+  return { deck, cycleId: cycle.id, slot: await deck.slot(cycle.id, slot.id), catapultId: await deck.catapultId(1) };
+}
+
+export const lineupRoutes: MatrixRoute[] = [
+  { method: 'GET', path: '/api/cycles/{cycleId}/lineup', allowed: ROLES, example: () => ({ params: { cycleId: DEMO_CYCLE } }) },
+  {
+    method: 'GET',
+    path: '/api/cycles/{cycleId}/lineup/changes',
+    allowed: ROLES,
+    example: () => ({ params: { cycleId: DEMO_CYCLE }, query: { since: 0 } }),
+  },
+  { method: 'GET', path: '/api/cycles/{cycleId}/lineup/suggestion', allowed: ['handler'], example: () => ({ params: { cycleId: DEMO_CYCLE } }) },
+  {
+    method: 'POST',
+    path: '/api/cycles/{cycleId}/lineup/moves',
+    allowed: ['handler'],
+    example: async (context) => {
+      if (!context.allowed) return refused;
+      const { cycleId, slot, catapultId } = await freshSlot(context, 'pool');
+      return { params: { cycleId }, body: { slotId: slot.id, slotVersion: slot.version, toCatapultId: catapultId, toIndex: 0, targetLaneOrder: [] } };
+    },
+  },
+  {
+    method: 'POST',
+    path: '/api/cycles/{cycleId}/lineup/suggestion/apply',
+    allowed: ['handler'],
+    example: async (context) => {
+      if (!context.allowed) return refused;
+      const { deck, cycleId, slot, catapultId } = await freshSlot(context, 'pool');
+      const { version } = await deck.snapshot(cycleId);
+      return { params: { cycleId }, body: { basisVersion: version, lanes: [{ catapultId, slotIds: [slot.id] }] } };
+    },
+  },
+  {
+    method: 'POST',
+    path: '/api/cycles/{cycleId}/lineup/slots/{slotId}/down',
+    allowed: ['handler'],
+    example: async (context) => {
+      if (!context.allowed) return refused;
+      const { cycleId, slot } = await freshSlot(context, 'lane');
+      return { params: { cycleId, slotId: slot.id }, body: { slotVersion: slot.version } };
+    },
+  },
+  {
+    method: 'POST',
+    path: '/api/cycles/{cycleId}/lineup/catapults/{catapultId}/status',
+    allowed: ['handler'],
+    // Catapults belong to the ship every spec shares: the permitted call asks for the status it already
+    // has, which is refused past the role check (409 no_change) and changes nothing.
+    refusals: [409],
+    example: async (context) =>
+      context.allowed ? { params: { cycleId: DEMO_CYCLE, catapultId: 1 }, body: { status: 'up', basisStatus: 'up' } } : refused,
+  },
+  {
+    method: 'POST',
+    path: '/api/cycles/{cycleId}/lineup/slots/{slotId}/advance',
+    allowed: ['catapult_officer'],
+    example: async (context) => {
+      if (!context.allowed) return refused;
+      const { cycleId, slot } = await freshSlot(context, 'executing');
+      return { params: { cycleId, slotId: slot.id }, body: { slotVersion: slot.version, to: 'taxiing' } };
+    },
+  },
+  {
+    method: 'POST',
+    path: '/api/cycles/{cycleId}/lineup/slots/{slotId}/suspend',
+    allowed: ['catapult_officer'],
+    example: async (context) => {
+      if (!context.allowed) return refused;
+      const { cycleId, slot } = await freshSlot(context, 'taxiing');
+      return { params: { cycleId, slotId: slot.id }, body: { slotVersion: slot.version, reason: 'Matrix hold' } };
+    },
+  },
+  {
+    method: 'POST',
+    path: '/api/cycles/{cycleId}/lineup/slots/{slotId}/launch',
+    allowed: ['catapult_officer'],
+    example: async (context) => {
+      if (!context.allowed) return refused;
+      const { cycleId, slot } = await freshSlot(context, 'tensioned');
+      return { params: { cycleId, slotId: slot.id }, body: { slotVersion: slot.version, idempotencyKey: `matrix-${cycleId}-${slot.id}` } };
+    },
+  },
+  {
+    method: 'POST',
+    path: '/api/cycles/{cycleId}/lineup/slots/{slotId}/weight-ack',
+    allowed: ['pilot'],
+    example: async (context) => {
+      if (!context.allowed) return refused;
+      const { cycleId, slot } = await freshSlot(context, 'pool');
+      return { params: { cycleId, slotId: slot.id }, body: { slotVersion: slot.version, grossWeightLb: slot.grossWeightLb } };
+    },
+  },
+];

@@ -1,0 +1,198 @@
+import type {
+  AddSlotRequest,
+  AircraftView,
+  CreateCycleRequest,
+  CycleView,
+  LineupCommandResult,
+  LineupSnapshot,
+  ReadinessStep,
+  ShipView,
+  SlotView,
+} from '@catline/contracts';
+import request from 'supertest';
+import { bearer, signIn } from './sign-in.js';
+
+export const AIR_OPS = 'airops@catline.example';
+export const HANDLER = 'handler@catline.example';
+export const OBSERVER = 'observer@catline.example';
+export const catapultOfficer = (catapultNumber: number) => `cat${catapultNumber}@catline.example`;
+export const pilot = (n: number) => (n === 1 ? 'pilot@catline.example' : `pilot${n}@catline.example`);
+
+const HOUR = 3_600_000;
+
+/** Conditions where every demo type is go from every catapult (invented; about 35 kt down the deck). */
+export const goodConditions = {
+  shipCourseDeg: 0,
+  shipSpeedKt: 25,
+  trueWindFromDeg: 0,
+  trueWindSpeedKt: 10,
+  temperatureC: 20,
+  pressureHpa: 1013,
+  weatherCase: 'I',
+  night: false,
+  landingAreaInUse: false,
+} as const;
+
+type Method = 'get' | 'post' | 'patch';
+
+/** Drives the API as the demo people do, for specs that need a cycle of their own. */
+export class LineupDriver {
+  private readonly tokens = new Map<string, Promise<string>>();
+  private aircraft?: Promise<AircraftView[]>;
+  private ship?: Promise<ShipView>;
+
+  /** `tokenOf` may hand over tokens the caller already holds; anyone else signs in. */
+  constructor(
+    readonly url: string,
+    private readonly tokenOf: (email: string) => string | undefined = () => undefined,
+  ) {}
+
+  token(email: string): Promise<string> {
+    if (!this.tokens.has(email)) {
+      const held = this.tokenOf(email);
+      this.tokens.set(email, held === undefined ? signIn(this.url, email) : Promise.resolve(held));
+    }
+    return this.tokens.get(email)!;
+  }
+
+  async call(email: string, method: Method, path: string, body?: object): Promise<request.Response> {
+    return this.callWith(await this.token(email), method, path, body);
+  }
+
+  /** As `call`, with a token of someone who is not a demo person. */
+  async callWith(token: string, method: Method, path: string, body?: object): Promise<request.Response> {
+    const pending = request(this.url)[method](path).set(bearer(token));
+    return body === undefined ? pending : pending.send(body);
+  }
+
+  /** The call's body when it answers `status`; throws with the answer otherwise. */
+  async ok<T>(email: string, method: Method, path: string, body?: object, status = 200): Promise<T> {
+    const response = await this.call(email, method, path, body);
+    if (response.status !== status) {
+      throw new Error(`${method.toUpperCase()} ${path} as ${email} answered ${response.status}: ${JSON.stringify(response.body)}`);
+    }
+    return response.body as T;
+  }
+
+  demoShip(): Promise<ShipView> {
+    this.ship ??= this.ok<ShipView[]>(OBSERVER, 'get', '/api/ships').then((ships) => ships[0]);
+    return this.ship;
+  }
+
+  async catapultId(catapultNumber: number): Promise<number> {
+    return (await this.demoShip()).catapults.find((catapult) => catapult.number === catapultNumber)!.id;
+  }
+
+  /** A new cycle of the demo ship in planning, starting in an hour; numbers are picked at random and retried. */
+  async createCycle(overrides: Partial<CreateCycleRequest> = {}): Promise<CycleView> {
+    const planned = Date.now() + HOUR;
+    for (;;) {
+      const response = await this.call(AIR_OPS, 'post', '/api/cycles', {
+        shipId: (await this.demoShip()).id,
+        number: 1000 + Math.floor(Math.random() * 8999),
+        plannedLaunchAt: new Date(planned).toISOString(),
+        windowStartAt: new Date(planned - HOUR / 6).toISOString(),
+        windowEndAt: new Date(planned + HOUR).toISOString(),
+        ...goodConditions,
+        ...overrides,
+      });
+      if (response.status === 201) return response.body as CycleView;
+      if (response.body?.code !== 'cycle_number_taken') throw new Error(`Creating a cycle failed: ${JSON.stringify(response.body)}`);
+    }
+  }
+
+  async aircraftId(side: string): Promise<number> {
+    this.aircraft ??= this.ok<AircraftView[]>(OBSERVER, 'get', '/api/aircraft');
+    return (await this.aircraft).find((aircraft) => aircraft.sideNumber === side)!.id;
+  }
+
+  /** Adds a demo aircraft to the cycle's deck pool (a strike sortie of 44,000 lb unless told otherwise). */
+  async addSlot(cycleId: number, side: string, fields: Partial<AddSlotRequest> & { pilotEmail?: string } = {}): Promise<SlotView> {
+    const { pilotEmail, ...rest } = fields;
+    const pilotId = pilotEmail ? (await this.me(pilotEmail)).id : null;
+    const result = await this.ok<LineupCommandResult>(AIR_OPS, 'post', `/api/cycles/${cycleId}/slots`, {
+      aircraftId: await this.aircraftId(side),
+      pilotId,
+      mission: 'Strike training',
+      fuelLb: 11_000,
+      stores: '',
+      grossWeightLb: 44_000,
+      tanker: false,
+      earlyWarning: false,
+      spare: false,
+      ...rest,
+    });
+    return result.change.patch.slots!.find((slot) => slot.sideNumber === side)!;
+  }
+
+  async me(email: string): Promise<{ id: number; catapultId: number | null }> {
+    return this.ok(email, 'get', '/api/auth/me');
+  }
+
+  snapshot(cycleId: number, email = OBSERVER): Promise<LineupSnapshot> {
+    return this.ok<LineupSnapshot>(email, 'get', `/api/cycles/${cycleId}/lineup`);
+  }
+
+  /** The handler's move of a slot to the end of (or a place in) a catapult's lane, based on the current snapshot. */
+  async place(cycleId: number, slotId: number, catapultNumber: number, index?: number): Promise<LineupCommandResult> {
+    const snapshot = await this.snapshot(cycleId);
+    const lane = snapshot.lanes.find((candidate) => candidate.number === catapultNumber)!;
+    const slot = snapshot.slots.find((candidate) => candidate.id === slotId)!;
+    return this.ok<LineupCommandResult>(HANDLER, 'post', `/api/cycles/${cycleId}/lineup/moves`, {
+      slotId,
+      slotVersion: slot.version,
+      toCatapultId: lane.catapultId,
+      toIndex: index ?? lane.slotIds.filter((id) => id !== slotId).length,
+      targetLaneOrder: lane.slotIds,
+    });
+  }
+
+  async start(cycleId: number): Promise<LineupCommandResult> {
+    const { version } = await this.snapshot(cycleId);
+    return this.ok<LineupCommandResult>(AIR_OPS, 'post', `/api/cycles/${cycleId}/start`, { basisVersion: version });
+  }
+
+  async slot(cycleId: number, slotId: number): Promise<SlotView> {
+    return (await this.snapshot(cycleId)).slots.find((candidate) => candidate.id === slotId)!;
+  }
+
+  async acknowledgeWeight(cycleId: number, slotId: number, pilotEmail: string): Promise<LineupCommandResult> {
+    const slot = await this.slot(cycleId, slotId);
+    return this.ok<LineupCommandResult>(pilotEmail, 'post', `/api/cycles/${cycleId}/lineup/slots/${slotId}/weight-ack`, {
+      slotVersion: slot.version,
+      grossWeightLb: slot.grossWeightLb,
+    });
+  }
+
+  /** A readiness step by the catapult officer of the slot's catapult; the raw answer. */
+  async step(cycleId: number, slotId: number, to: ReadinessStep | 'resume', officer?: string): Promise<request.Response> {
+    const slot = await this.slot(cycleId, slotId);
+    const number = (await this.demoShip()).catapults.find((catapult) => catapult.id === slot.catapultId)?.number ?? 1;
+    return this.call(officer ?? catapultOfficer(number), 'post', `/api/cycles/${cycleId}/lineup/slots/${slotId}/advance`, {
+      slotVersion: slot.version,
+      to,
+    });
+  }
+
+  /** Taxi, on catapult, weight agreed (after the pilot's acknowledgement) and tensioned. */
+  async readyToLaunch(cycleId: number, slotId: number, pilotEmail: string): Promise<SlotView> {
+    await this.acknowledgeWeight(cycleId, slotId, pilotEmail);
+    for (const to of ['taxiing', 'on_catapult', 'weight_agreed', 'tensioned'] as const) {
+      const response = await this.step(cycleId, slotId, to);
+      if (response.status !== 200) throw new Error(`Step ${to} answered ${response.status}: ${JSON.stringify(response.body)}`);
+    }
+    return this.slot(cycleId, slotId);
+  }
+
+  async launch(cycleId: number, slot: SlotView, idempotencyKey: string, fields: { overrideReason?: string } = {}): Promise<request.Response> {
+    const number = (await this.demoShip()).catapults.find((catapult) => catapult.id === slot.catapultId)!.number;
+    return this.call(catapultOfficer(number), 'post', `/api/cycles/${cycleId}/lineup/slots/${slot.id}/launch`, {
+      slotVersion: slot.version,
+      idempotencyKey,
+      ...fields,
+    });
+  }
+}
+
+/** A launch key no other request uses. */
+export const launchKey = () => `test-${Date.now().toString(36)}-${Math.random().toString(36).slice(2, 10)}`;

@@ -12,7 +12,10 @@ import { ENV_FILE_PATHS, type Environment, validateEnvironment } from './config/
 import { dataSourceOptions } from './database/data-source.js';
 import { GatewayModule } from './gateway/gateway.module.js';
 import { HealthModule } from './health/health.module.js';
+import { ImportsModule } from './imports/imports.module.js';
 import { LineupModule } from './lineup/lineup.module.js';
+import { MailModule } from './mail/mail.module.js';
+import { PasswordLinksModule } from './password-links/password-links.module.js';
 import { ShipsModule } from './ships/ships.module.js';
 import { SquadronsModule } from './squadrons/squadrons.module.js';
 import { UsersModule } from './users/users.module.js';
@@ -49,6 +52,9 @@ const webDist = fileURLToPath(new URL('../../web/dist', import.meta.url));
     CyclesModule,
     LineupModule,
     GatewayModule,
+    MailModule,
+    PasswordLinksModule,
+    ImportsModule,
   ],
 })
 export class AppModule {}

@@ -31,6 +31,22 @@ export interface ChangePasswordRequest {
   newPassword: string;
 }
 
+/** Asks for a mail with a one-time link to set a new password; answered the same whether or not the e-mail is known. */
+export interface PasswordResetRequest {
+  email: string;
+}
+
+/** Sets a password with the token of a one-time link (password reset or invitation). */
+export interface SetPasswordWithTokenRequest {
+  token: string;
+  newPassword: string;
+}
+
+/** An accepted request whose effect follows later (e.g. a mail on its way). */
+export interface AcceptedResponse {
+  message: string;
+}
+
 /** The body of every 4xx/5xx answer. */
 export interface ApiError {
   statusCode: number;

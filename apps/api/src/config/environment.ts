@@ -1,5 +1,5 @@
 import { plainToInstance } from 'class-transformer';
-import { IsIn, IsInt, IsNotEmpty, IsOptional, IsString, Max, Min, MinLength, validateSync } from 'class-validator';
+import { IsIn, IsInt, IsNotEmpty, IsOptional, IsString, IsUrl, Max, Min, MinLength, validateSync } from 'class-validator';
 
 /** Every setting the API reads, validated at boot: a bad value stops the start with a clear message. */
 export class Environment {
@@ -40,6 +40,24 @@ export class Environment {
 
   @IsIn(['on', 'off'])
   DEMO_SEED: 'on' | 'off' = 'on';
+
+  /** The SMTP server mail goes to; by default the local mail catcher `npm start` runs. */
+  @IsString() @IsNotEmpty()
+  SMTP_HOST: string = '127.0.0.1';
+
+  @IsInt() @Min(1) @Max(65535)
+  SMTP_PORT: number = 1025;
+
+  @IsString() @IsNotEmpty()
+  MAIL_FROM: string = 'Catline <catline@catline.example>';
+
+  /** Where people open the app; the links in mails start with it. */
+  @IsUrl({ require_tld: false, protocols: ['http', 'https'], require_protocol: true }, { message: 'APP_URL must be an http(s) address' })
+  APP_URL: string = 'http://127.0.0.1:3000';
+
+  /** `off` keeps mail in the outbox unsent (the integration tests, except the spec that reads mail). */
+  @IsIn(['on', 'off'])
+  MAIL_SENDER: 'on' | 'off' = 'on';
 }
 
 export function validateEnvironment(raw: Record<string, unknown>): Environment {

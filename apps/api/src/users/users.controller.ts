@@ -1,4 +1,4 @@
-import type { UserView } from '@catline/contracts';
+import type { AcceptedResponse, UserView } from '@catline/contracts';
 import { Body, Controller, Delete, Get, HttpCode, HttpStatus, Param, ParseIntPipe, Patch, Post } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
@@ -40,6 +40,15 @@ export class UsersController {
     @CurrentUser() actor: AuthenticatedUser,
   ): Promise<UserView> {
     return this.users.update(id, body, actor);
+  }
+
+  /** Mails a new invitation link to a person who has not chosen a password yet. */
+  @Roles('admin')
+  @Post(':id/invitation')
+  @HttpCode(HttpStatus.ACCEPTED)
+  async invite(@Param('id', ParseIntPipe) id: number): Promise<AcceptedResponse> {
+    const email = await this.users.resendInvitation(id);
+    return { message: `A new invitation link is on its way to ${email}; earlier links no longer work.` };
   }
 
   @Roles('admin')

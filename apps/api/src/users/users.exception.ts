@@ -1,7 +1,7 @@
 import { HttpStatus } from '@nestjs/common';
 import { DomainException } from '../common/errors/domain.exception.js';
 
-export type UserRefusalCode = 'user_not_found' | 'email_taken' | 'invalid_binding' | 'unknown_reference' | 'self_change';
+export type UserRefusalCode = 'user_not_found' | 'email_taken' | 'invalid_binding' | 'unknown_reference' | 'self_change' | 'cannot_invite';
 
 const STATUS: Record<UserRefusalCode, HttpStatus> = {
   user_not_found: HttpStatus.NOT_FOUND,
@@ -9,6 +9,7 @@ const STATUS: Record<UserRefusalCode, HttpStatus> = {
   invalid_binding: HttpStatus.BAD_REQUEST,
   unknown_reference: HttpStatus.BAD_REQUEST,
   self_change: HttpStatus.CONFLICT,
+  cannot_invite: HttpStatus.CONFLICT,
 };
 
 export class UsersException extends DomainException {

@@ -6,6 +6,7 @@ import { normalizeEmail } from '../auth/normalize-email.js';
 import { hashPassword } from '../auth/password.js';
 import { RefreshTokens } from '../auth/refresh-tokens.service.js';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
+import { PasswordLinks } from '../password-links/password-links.service.js';
 import { isDuplicateKey } from '../common/errors/database-errors.js';
 import { Catapult } from '../ships/entities/catapult.entity.js';
 import { Squadron } from '../squadrons/entities/squadron.entity.js';
@@ -23,6 +24,7 @@ export class UsersService {
   constructor(
     @InjectDataSource() private readonly dataSource: DataSource,
     private readonly refreshTokens: RefreshTokens,
+    private readonly links: PasswordLinks,
   ) {}
 
   async list(): Promise<UserView[]> {
@@ -44,10 +46,15 @@ export class UsersService {
     const manager = this.dataSource.manager;
     await this.checkBinding(manager, binding.role, binding.catapultId, binding.squadronId);
     if (await manager.existsBy(User, { email })) throw this.emailTaken(email);
-    const passwordHash = await hashPassword(body.password);
+    const passwordHash = body.password === undefined ? null : await hashPassword(body.password);
     try {
-      const user = await manager.save(User, manager.create(User, { email, name: body.name, passwordHash, ...binding }));
-      this.logger.log(`User ${user.id} (${user.role}) created`);
+      // Without a password the person gets an invitation, queued in the same transaction.
+      const user = await this.dataSource.transaction(async (writer) => {
+        const saved = await writer.save(User, writer.create(User, { email, name: body.name, passwordHash, ...binding }));
+        if (passwordHash === null) await this.links.invite(writer, saved);
+        return saved;
+      });
+      this.logger.log(`User ${user.id} (${user.role}) created${passwordHash === null ? ' and invited' : ''}`);
       return toUserView(user);
     } catch (error) {
       if (isDuplicateKey(error)) throw this.emailTaken(email);
@@ -77,6 +84,19 @@ export class UsersService {
       await manager.save(User, user);
       if (!user.active) await this.refreshTokens.revokeAllFor(user.id, manager);
       return toUserView(user);
+    });
+  }
+
+  /** A fresh invitation link for an active person who has no password yet; returns the address it goes to. */
+  async resendInvitation(id: number): Promise<string> {
+    return this.dataSource.transaction(async (manager) => {
+      const user = await this.findOrFail(manager, id);
+      if (!user.active) throw new UsersException('cannot_invite', `${user.name} is removed; reactivate them before inviting them again.`);
+      if (user.passwordHash !== null) {
+        throw new UsersException('cannot_invite', `${user.name} has already chosen a password; they can ask for a reset link on the sign-in page.`);
+      }
+      await this.links.invite(manager, user);
+      return user.email;
     });
   }
 

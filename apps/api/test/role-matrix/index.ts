@@ -11,7 +11,9 @@ import { aircraftRoutes } from './aircraft.routes.js';
 import { authRoutes } from './auth.routes.js';
 import { cyclesRoutes } from './cycles.routes.js';
 import { healthRoutes } from './health.routes.js';
+import { importsRoutes } from './imports.routes.js';
 import { lineupRoutes } from './lineup.routes.js';
+import { passwordLinksRoutes } from './password-links.routes.js';
 import type { MatrixRoute } from './route-table.js';
 import { shipsRoutes } from './ships.routes.js';
 import { squadronsRoutes } from './squadrons.routes.js';
@@ -29,4 +31,6 @@ export const matrixRoutes: MatrixRoute[] = [
   ...aircraftRoutes,
   ...cyclesRoutes,
   ...lineupRoutes,
+  ...importsRoutes,
+  ...passwordLinksRoutes,
 ];

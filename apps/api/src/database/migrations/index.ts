@@ -1,4 +1,5 @@
 import { InitialSchema1796162620410 } from './1796162620410-InitialSchema.js';
+import { MailOutboxPasswordLinksUploads1796164550524 } from './1796164550524-MailOutboxPasswordLinksUploads.js';
 
 /** Every migration in the order it runs; add a new one at the end (see DEVELOPERS.md). */
-export const migrations = [InitialSchema1796162620410];
+export const migrations = [InitialSchema1796162620410, MailOutboxPasswordLinksUploads1796164550524];

@@ -2,6 +2,7 @@ import { ROLES, type Role } from '@catline/contracts';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { IsEmail, IsIn, IsInt, IsNotEmpty, IsOptional, IsString, MaxLength, Min, MinLength } from 'class-validator';
 import { PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH } from '../../auth/dto/change-password.dto.js';
+import { SkipIfAbsent } from '../../common/validation/skip-if-absent.decorator.js';
 import { Trim } from '../../common/validation/trim.decorator.js';
 
 export class CreateUserDto {
@@ -22,11 +23,12 @@ export class CreateUserDto {
   @IsIn(ROLES, { message: `role must be one of ${ROLES.join(', ')}` })
   role: Role;
 
-  @ApiProperty({ minLength: PASSWORD_MIN_LENGTH })
+  @ApiPropertyOptional({ minLength: PASSWORD_MIN_LENGTH, description: 'Left out, the person is mailed an invitation link to choose one.' })
+  @SkipIfAbsent()
   @IsString()
   @MinLength(PASSWORD_MIN_LENGTH, { message: `password must be at least ${PASSWORD_MIN_LENGTH} characters` })
   @MaxLength(PASSWORD_MAX_LENGTH, { message: `password must be at most ${PASSWORD_MAX_LENGTH} characters` })
-  password: string;
+  password?: string;
 
   @ApiPropertyOptional({ nullable: true, description: 'Required for a catapult officer, absent otherwise.' })
   @IsOptional()

@@ -1,0 +1,14 @@
+import { Module } from '@nestjs/common';
+import { LineupModule } from '../lineup/lineup.module.js';
+import { AirPlanController } from './air-plan.controller.js';
+import { AirPlanImports } from './air-plan-imports.service.js';
+import { LaunchTableController } from './launch-table.controller.js';
+import { LaunchTableImports } from './launch-table-imports.service.js';
+import { UploadsService } from './uploads.service.js';
+
+@Module({
+  imports: [LineupModule],
+  controllers: [AirPlanController, LaunchTableController],
+  providers: [AirPlanImports, LaunchTableImports, UploadsService],
+})
+export class ImportsModule {}

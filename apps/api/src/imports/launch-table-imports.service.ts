@@ -1,0 +1,47 @@
+import type { AircraftTypeView, LaunchTableImportRow, LaunchTablePreview } from '@catline/contracts';
+import { Injectable, Logger } from '@nestjs/common';
+import { InjectDataSource } from '@nestjs/typeorm';
+import type { DataSource } from 'typeorm';
+import { toAircraftTypeView } from '../aircraft-types/aircraft-type.mapper.js';
+import { AircraftType } from '../aircraft-types/entities/aircraft-type.entity.js';
+import type { AuthenticatedUser } from '../common/authenticated-user.js';
+import { sortProblems } from './csv-table.js';
+import type { UploadedCsv } from './csv-upload.js';
+import { ImportsException } from './imports.exception.js';
+import { LAUNCH_TABLE_COLUMNS, readLaunchTable } from './launch-table-layout.js';
+import { toImportPreview } from './upload.mapper.js';
+import { UploadsService } from './uploads.service.js';
+
+const notFound = (id: number) => new ImportsException('target_not_found', `There is no aircraft type with id ${id}.`);
+
+/** Launch table import: a preview reads and checks the file; its confirm replaces the type's table whole. */
+@Injectable()
+export class LaunchTableImports {
+  private readonly logger = new Logger(LaunchTableImports.name);
+
+  constructor(
+    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly uploads: UploadsService,
+  ) {}
+
+  async preview(typeId: number, file: UploadedCsv | undefined, user: AuthenticatedUser): Promise<LaunchTablePreview> {
+    if (!(await this.dataSource.manager.existsBy(AircraftType, { id: typeId }))) throw notFound(typeId);
+    const target = { kind: 'launch_table', aircraftTypeId: typeId } as const;
+    const { rows, problems } = readLaunchTable(await this.uploads.textOf(file, target, user));
+    const upload = await this.uploads.record(file!, target, user, sortProblems(problems, LAUNCH_TABLE_COLUMNS), rows);
+    return toImportPreview(upload, rows);
+  }
+
+  async confirm(typeId: number, uploadId: number, user: AuthenticatedUser): Promise<AircraftTypeView> {
+    return this.dataSource.transaction(async (manager) => {
+      const type = await manager.findOne(AircraftType, { where: { id: typeId }, lock: { mode: 'pessimistic_write' } });
+      if (!type) throw notFound(typeId);
+      const upload = await this.uploads.importable(manager, uploadId, { kind: 'launch_table', aircraftTypeId: typeId });
+      type.launchTable = (upload.rows as LaunchTableImportRow[]).map(({ grossWeightLb, minLaunchAirspeedKt }) => ({ grossWeightLb, minLaunchAirspeedKt }));
+      await manager.save(AircraftType, type);
+      await this.uploads.markImported(manager, upload, user);
+      this.logger.log(`Launch table of ${type.designation} replaced from upload ${upload.id} (${type.launchTable.length} rows)`);
+      return toAircraftTypeView(type);
+    });
+  }
+}

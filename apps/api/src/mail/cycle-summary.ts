@@ -1,0 +1,110 @@
+import type { SlotStatus, WeatherCase } from '@catline/contracts';
+
+// The summary a squadron receives when a cycle closes: its own aircraft line by line, the cycle's
+// totals, and what happened to its aircraft on the way (down, suspended, launched on override).
+
+export interface SummarySlot {
+  id: number;
+  sideNumber: string;
+  typeDesignation: string;
+  squadronId: number;
+  mission: string;
+  pilotName: string | null;
+  status: SlotStatus;
+  /** The catapult it launched from; null unless launched. */
+  catapultNumber: number | null;
+  launchedAt: Date | null;
+  /** The side number of the spare that took a down aircraft's place. */
+  replacedBy: string | null;
+}
+
+export interface SummaryEvent {
+  at: Date;
+  slotId: number;
+  summary: string;
+}
+
+export interface SummarySquadron {
+  id: number;
+  name: string;
+  code: string;
+  email: string;
+}
+
+export interface CycleSummaryInput {
+  shipName: string;
+  hullCode: string;
+  cycleNumber: number;
+  plannedLaunchAt: Date;
+  windowStartAt: Date;
+  windowEndAt: Date;
+  weatherCase: WeatherCase;
+  night: boolean;
+  slots: SummarySlot[];
+  events: SummaryEvent[];
+}
+
+export interface ComposedMail {
+  subject: string;
+  text: string;
+}
+
+const CAUTION =
+  "Catline is a planning and coordination aid: the ship's approved launch data, the catapult officers' checks and the ship's procedures govern every launch.";
+
+const hhmm = (at: Date) => `${at.toISOString().slice(11, 16)}Z`;
+const hhmmss = (at: Date) => `${at.toISOString().slice(11, 19)}Z`;
+
+function outcome(slot: SummarySlot): string {
+  switch (slot.status) {
+    case 'launched':
+      return `launched ${slot.launchedAt ? hhmmss(slot.launchedAt) : '(time not recorded)'} from cat ${slot.catapultNumber ?? '?'}`;
+    case 'down':
+      return slot.replacedBy ? `down, replaced by ${slot.replacedBy}` : 'down';
+    default:
+      return 'not launched (scratched when the cycle closed)';
+  }
+}
+
+const launchedOf = (slots: SummarySlot[]) => slots.filter((slot) => slot.status === 'launched');
+
+function cycleTotals(input: CycleSummaryInput): string {
+  const launched = launchedOf(input.slots);
+  const times = launched.flatMap((slot) => (slot.launchedAt ? [slot.launchedAt.getTime()] : [])).sort((a, b) => a - b);
+  const span = times.length > 0 ? `, first at ${hhmmss(new Date(times[0]))}, last at ${hhmmss(new Date(times[times.length - 1]))}` : '';
+  return `Whole cycle: ${launched.length} of ${input.slots.length} aircraft launched${span}.`;
+}
+
+/** The summary of a closed cycle for one squadron, which must have aircraft in it. */
+export function composeCycleSummary(input: CycleSummaryInput, squadron: SummarySquadron): ComposedMail {
+  const own = input.slots.filter((slot) => slot.squadronId === squadron.id);
+  const ownIds = new Set(own.map((slot) => slot.id));
+  const events = input.events.filter((event) => ownIds.has(event.slotId));
+  const width = (pick: (slot: SummarySlot) => string) => Math.max(...own.map((slot) => pick(slot).length));
+  const columns: ((slot: SummarySlot) => string)[] = [
+    (slot) => slot.sideNumber,
+    (slot) => slot.typeDesignation,
+    (slot) => slot.mission,
+    (slot) => slot.pilotName ?? 'no pilot named',
+  ];
+  const widths = columns.map(width);
+  const line = (slot: SummarySlot) =>
+    `  ${columns.map((pick, i) => pick(slot).padEnd(widths[i])).join('  ')}  ${outcome(slot)}`;
+
+  const lines = [
+    `Cycle ${input.cycleNumber} of ${input.shipName} (${input.hullCode}) is closed.`,
+    `Planned launch ${hhmm(input.plannedLaunchAt)} (window ${hhmm(input.windowStartAt)} to ${hhmm(input.windowEndAt)}), case ${input.weatherCase}, ${input.night ? 'night' : 'day'}.`,
+    cycleTotals(input),
+    '',
+    `${squadron.name} (${squadron.code}): ${launchedOf(own).length} of ${own.length} launched`,
+    ...own.map(line),
+  ];
+  if (events.length > 0) {
+    lines.push('', 'What happened to these aircraft:', ...events.map((event) => `  ${hhmmss(event.at)}  ${event.summary}`));
+  }
+  lines.push('', `Sent by Catline when the cycle closed. ${CAUTION}`);
+  return {
+    subject: `Cycle ${input.cycleNumber} closed: ${squadron.name} ${launchedOf(own).length} of ${own.length} launched`,
+    text: `${lines.join('\n')}\n`,
+  };
+}

@@ -1,0 +1,61 @@
+import type { LaunchTableRow } from './fleet.js';
+
+/** One thing wrong with an uploaded file, pointed at the line and column a spreadsheet shows. */
+export interface ImportProblem {
+  /** Line of the file, 1 for the header line. */
+  row: number;
+  /** The column's header name; null when the whole line or file is concerned. */
+  column: string | null;
+  /** The cell as written; null when there is none. */
+  value: string | null;
+  /** A sentence saying what is wrong and what would be right. */
+  reason: string;
+}
+
+/** `accepted`: the preview found no problem and awaits its confirm; `imported`: confirmed. */
+export const UPLOAD_RESULTS = ['accepted', 'rejected', 'imported'] as const;
+export type UploadResult = (typeof UPLOAD_RESULTS)[number];
+
+/** What a preview answers; confirm the upload by its id when `problems` is empty. */
+export interface ImportPreview<Row> {
+  uploadId: number;
+  fileName: string;
+  result: Exclude<UploadResult, 'imported'>;
+  /** Every line whose cells could be read, in file order (a line may still have a problem in `problems`). */
+  rows: Row[];
+  problems: ImportProblem[];
+}
+
+/** One sortie of an air plan, as read from its CSV line and matched against the fleet and people. */
+export interface AirPlanRow {
+  /** Line of the file. */
+  row: number;
+  sideNumber: string;
+  /** Null when the line names no pilot yet. */
+  pilotEmail: string | null;
+  mission: string;
+  fuelLb: number;
+  stores: string;
+  grossWeightLb: number;
+  tanker: boolean;
+  earlyWarning: boolean;
+  spare: boolean;
+  /** Filled from the fleet and people when the side number and e-mail are known; null otherwise. */
+  typeDesignation: string | null;
+  squadronCode: string | null;
+  pilotName: string | null;
+}
+
+export type AirPlanPreview = ImportPreview<AirPlanRow>;
+
+export interface LaunchTableImportRow extends LaunchTableRow {
+  /** Line of the file. */
+  row: number;
+}
+
+export type LaunchTablePreview = ImportPreview<LaunchTableImportRow>;
+
+/** Confirms an air plan preview into the cycle: the cycle version the preview was looked at against. */
+export interface ConfirmAirPlanRequest {
+  basisVersion: number;
+}

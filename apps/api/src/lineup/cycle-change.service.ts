@@ -1,7 +1,7 @@
 import type { ChangeActor, ChangeKind, LineupChange, LineupCommandResult } from '@catline/contracts';
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
-import { DataSource, type EntityManager } from 'typeorm';
+import { DataSource, type EntityManager, type QueryDeepPartialEntity } from 'typeorm';
 import { Cycle } from '../cycles/entities/cycle.entity.js';
 import { LineupChangeFeed, type FeedTicket } from './change-feed.service.js';
 import { toLineupChange } from './change.mapper.js';
@@ -127,7 +127,15 @@ export class CycleChangeService {
       summary: draft.summary.slice(0, 300),
       payload: { command: draft.command, patch },
     });
-    await manager.save(CycleChange, row);
+    // One INSERT and nothing read back (save() reads the row again), while the cycle stays locked. The cast
+    // only bridges TypeORM's deep-partial typing of the JSON payload column.
+    await manager
+      .createQueryBuilder()
+      .insert()
+      .into(CycleChange)
+      .values(row as QueryDeepPartialEntity<CycleChange>)
+      .updateEntity(false)
+      .execute();
     return toLineupChange(row);
   }
 }

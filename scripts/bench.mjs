@@ -1,0 +1,112 @@
+// `npm run bench`: the same set-up as `npm start` on a database of its own (catline_bench), the
+// API on :3200, then the measurements of DEVELOPERS.md § Benchmarks. Client load runs in separate
+// processes on 127.0.0.1. Prints a table and writes bench-results/bench-<time>.json (git-ignored).
+// Options: --clients=100,500,1000,2000 --moves=200 --per-second=2 --commands=800 --only=fanout,commit,math,web
+import { spawnSync } from 'node:child_process';
+import { mkdirSync, writeFileSync } from 'node:fs';
+import path from 'node:path';
+import { parseArgs } from 'node:util';
+import { createBenchCycle } from '../apps/api/bench/lib/bench-cycle.mjs';
+import { root, run, runAsync, sleep, step } from './lib/run.mjs';
+import { setUp } from './lib/setup.mjs';
+
+const { values: args } = parseArgs({
+  options: {
+    clients: { type: 'string', default: '100,500,1000,2000' },
+    moves: { type: 'string', default: '200' },
+    'per-second': { type: 'string', default: '2' },
+    commands: { type: 'string', default: '800' },
+    only: { type: 'string', default: 'fanout,commit,math,web' },
+  },
+});
+const parts = new Set(args.only.split(','));
+const port = 3200;
+const url = `http://127.0.0.1:${port}`;
+
+const { pnpm, env } = await setUp({ browser: parts.has('web') });
+step('Building');
+run(pnpm, ['-r', 'build']);
+const benchEnv = {
+  ...process.env,
+  ...env,
+  DB_NAME: `${env.DB_NAME}_bench`,
+  PORT: String(port),
+  WEB_ORIGINS: url,
+  NODE_ENV: 'production',
+  LOGIN_RATE_LIMIT: '100000',
+};
+step(`Recreating ${benchEnv.DB_NAME}`);
+run(pnpm, ['--filter', '@catline/api', 'db:reset'], { env: benchEnv });
+
+const server = runAsync('node', ['apps/api/dist/main.js'], { env: benchEnv, stdio: ['ignore', 'ignore', 'inherit'] });
+const results = { at: new Date().toISOString(), machine: { cpus: (await import('node:os')).cpus().length, node: process.version } };
+try {
+  for (let waited = 0; !(await fetch(`${url}/api/health`).then((r) => r.ok, () => false)); waited += 250) {
+    if (waited > 30_000) throw new Error('the API did not start');
+    await sleep(250);
+  }
+  const cycleId = await createBenchCycle(url);
+  const node = (script, options) => {
+    const result = spawnSync('node', [script, JSON.stringify(options)], { cwd: root, encoding: 'utf8', stdio: ['ignore', 'pipe', 'inherit'], maxBuffer: 1 << 26 });
+    if (result.status !== 0) throw new Error(`${script} failed`);
+    return JSON.parse(result.stdout.trim().split('\n').pop());
+  };
+  if (parts.has('fanout')) {
+    step('Fan-out latency (this takes a while: paced moves run at the given rate)');
+    results.fanOut = node('apps/api/bench/fan-out.mjs', {
+      url, origin: url, cycleId, barePort: port + 1,
+      clients: args.clients.split(',').map(Number), moves: Number(args.moves), perSecond: Number(args['per-second']),
+    });
+  }
+  if (parts.has('commit')) {
+    step('Commit rate');
+    results.commitRate = node('apps/api/bench/commit-rate.mjs', {
+      url, cycleId, handlers: [1, 4, 16], commands: Number(args.commands),
+      db: { host: env.DB_HOST, port: Number(env.DB_PORT), user: env.DB_USER, password: env.DB_PASSWORD, database: benchEnv.DB_NAME },
+    });
+  }
+  if (parts.has('math')) {
+    step('Computation');
+    results.computation = node('packages/launch-math/bench/plan-40.mjs', { json: true });
+  }
+  if (parts.has('web')) {
+    step('Web');
+    results.web = node('apps/web/bench/web.mjs', { url, cycleId });
+  }
+} finally {
+  server.child.kill('SIGTERM');
+  await server.exited;
+}
+
+const dir = path.join(root, 'bench-results');
+mkdirSync(dir, { recursive: true });
+const file = path.join(dir, `bench-${results.at.replace(/[:.]/g, '-')}.json`);
+writeFileSync(file, `${JSON.stringify(results, null, 2)}\n`);
+printTables(results);
+console.log(`\nWritten to ${path.relative(root, file)}`);
+
+function printTables({ fanOut, commitRate, computation, web }) {
+  if (fanOut) {
+    console.log('\nFan-out latency, ms from sending the command to each client receiving the change');
+    console.table(fanOut.flatMap((row) => ['paced', 'burst'].map((mode) => ({
+      clients: row.clients, mode,
+      'p50': row.catline[mode].p50, 'p95': row.catline[mode].p95, 'p99': row.catline[mode].p99, 'max': row.catline[mode].max,
+      'bare p50': row.bare[mode].p50, 'bare p99': row.bare[mode].p99,
+      'p50 ratio': row.ratio[`${mode}P50`], 'p99 ratio': row.ratio[`${mode}P99`],
+      missing: row.catline[mode].missing, 'out of order': row.catline[mode].outOfOrder, duplicates: row.catline[mode].duplicates,
+      'payload B': row.payloadBytes,
+    }))));
+  }
+  if (commitRate) {
+    console.log('\nCommit rate: lineup moves through the API against single-row mysql2 transactions');
+    console.table(commitRate);
+  }
+  if (computation) {
+    console.log('\nComputation: projection plus suggestion, 40 aircraft on 4 catapults');
+    console.table([computation]);
+  }
+  if (web) {
+    console.log('\nWeb');
+    console.table([web]);
+  }
+}

@@ -2,11 +2,14 @@
 // API on :3200, then the measurements of DEVELOPERS.md § Benchmarks. Client load runs in separate
 // processes on 127.0.0.1. Prints a table and writes bench-results/bench-<time>.json (git-ignored).
 // Options: --clients=100,500,1000,2000 --moves=200 --per-second=2 --commands=800 --only=fanout,commit,math,web
+// --cluster: two API processes (:3200 and :3202) sharing rooms through a Redis of their own (:6381),
+// with the fan-out clients spread over both; commands still go to :3200.
 import { spawnSync } from 'node:child_process';
 import { mkdirSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { parseArgs } from 'node:util';
 import { createBenchCycle } from '../apps/api/bench/lib/bench-cycle.mjs';
+import { ensureRedisInstalled, startRedis, stopRedis } from './lib/redis.mjs';
 import { root, run, runAsync, sleep, step } from './lib/run.mjs';
 import { setUp } from './lib/setup.mjs';
 
@@ -17,11 +20,16 @@ const { values: args } = parseArgs({
     'per-second': { type: 'string', default: '2' },
     commands: { type: 'string', default: '800' },
     only: { type: 'string', default: 'fanout,commit,math,web' },
+    cluster: { type: 'boolean', default: false },
   },
 });
 const parts = new Set(args.only.split(','));
 const port = 3200;
 const url = `http://127.0.0.1:${port}`;
+// The bare socket.io baseline takes port + 1.
+const ports = args.cluster ? [port, port + 2] : [port];
+const urls = ports.map((p) => `http://127.0.0.1:${p}`);
+const REDIS_PORT = 6381;
 
 const { pnpm, env } = await setUp({ browser: parts.has('web') });
 step('Building');
@@ -38,12 +46,21 @@ const benchEnv = {
 step(`Recreating ${benchEnv.DB_NAME}`);
 run(pnpm, ['--filter', '@catline/api', 'db:reset'], { env: benchEnv });
 
-const server = runAsync('node', ['apps/api/dist/main.js'], { env: benchEnv, stdio: ['ignore', 'ignore', 'inherit'] });
-const results = { at: new Date().toISOString(), machine: { cpus: (await import('node:os')).cpus().length, node: process.version } };
+if (args.cluster) ensureRedisInstalled();
+const redis = args.cluster ? await startRedis({ port: REDIS_PORT, dir: path.join(root, '.data/redis-bench') }) : null;
+const servers = ports.map((p) =>
+  runAsync('node', ['apps/api/dist/main.js'], {
+    env: { ...benchEnv, PORT: String(p), ...(redis ? { REDIS_URL: redis.url } : {}) },
+    stdio: ['ignore', 'ignore', 'inherit'],
+  }),
+);
+const results = { at: new Date().toISOString(), machine: { cpus: (await import('node:os')).cpus().length, node: process.version }, apiProcesses: ports.length };
 try {
-  for (let waited = 0; !(await fetch(`${url}/api/health`).then((r) => r.ok, () => false)); waited += 250) {
-    if (waited > 30_000) throw new Error('the API did not start');
-    await sleep(250);
+  for (const each of urls) {
+    for (let waited = 0; !(await fetch(`${each}/api/health`).then((r) => r.ok, () => false)); waited += 250) {
+      if (waited > 30_000) throw new Error(`the API at ${each} did not start`);
+      await sleep(250);
+    }
   }
   const cycleId = await createBenchCycle(url);
   const node = (script, options) => {
@@ -54,7 +71,7 @@ try {
   if (parts.has('fanout')) {
     step('Fan-out latency (this takes a while: paced moves run at the given rate)');
     results.fanOut = node('apps/api/bench/fan-out.mjs', {
-      url, origin: url, cycleId, barePort: port + 1,
+      url, urls, origin: url, cycleId, barePort: port + 1,
       clients: args.clients.split(',').map(Number), moves: Number(args.moves), perSecond: Number(args['per-second']),
     });
   }
@@ -74,8 +91,9 @@ try {
     results.web = node('apps/web/bench/web.mjs', { url, cycleId });
   }
 } finally {
-  server.child.kill('SIGTERM');
-  await server.exited;
+  for (const server of servers) server.child.kill('SIGTERM');
+  await Promise.all(servers.map((server) => server.exited));
+  if (redis?.started) stopRedis(REDIS_PORT);
 }
 
 const dir = path.join(root, 'bench-results');
@@ -85,9 +103,10 @@ writeFileSync(file, `${JSON.stringify(results, null, 2)}\n`);
 printTables(results);
 console.log(`\nWritten to ${path.relative(root, file)}`);
 
-function printTables({ fanOut, commitRate, computation, web }) {
+function printTables({ fanOut, commitRate, computation, web, apiProcesses }) {
   if (fanOut) {
-    console.log('\nFan-out latency, ms from sending the command to each client receiving the change');
+    const spread = apiProcesses > 1 ? `, clients spread over ${apiProcesses} API processes` : '';
+    console.log(`\nFan-out latency, ms from sending the command to each client receiving the change${spread}`);
     console.table(fanOut.flatMap((row) => ['paced', 'burst'].map((mode) => ({
       clients: row.clients, mode,
       'p50': row.catline[mode].p50, 'p95': row.catline[mode].p95, 'p99': row.catline[mode].p99, 'max': row.catline[mode].max,

@@ -7,7 +7,7 @@ import { root, run, step } from './lib/run.mjs';
 import { setUp } from './lib/setup.mjs';
 
 const resultsDir = path.join(root, '.data/test-results');
-const testScripts = ['test', 'test:integration', 'test:e2e'];
+const testScripts = ['test', 'test:integration', 'test:cluster', 'test:e2e'];
 
 function workspacePackages() {
   return ['packages', 'apps'].flatMap((group) =>
@@ -53,7 +53,7 @@ if (failures.length === 0) {
   stage('Lint', pnpm, ['lint']);
   for (const script of testScripts) {
     for (const pkg of workspacePackages().filter((p) => p.scripts[script])) {
-      const file = path.join(resultsDir, `${pkg.name.replace(/\W+/g, '-')}-${script.replace(':', '-')}.json`);
+      const file = path.join(resultsDir, `${pkg.name.replace(/^@/, '').replace(/\W+/g, '-')}-${script.replace(':', '-')}.json`);
       // Jest writes its counts with --json; the Playwright config reads CATLINE_TEST_RESULTS.
       const jestArgs = script === 'test:e2e' ? [] : ['--json', `--outputFile=${file}`];
       stage(`${pkg.name} ${script}`, pnpm, ['--filter', pkg.name, 'run', script, ...jestArgs], file);

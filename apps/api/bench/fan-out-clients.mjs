@@ -3,12 +3,13 @@
 import { io } from 'socket.io-client';
 import { now } from './lib/stats.mjs';
 
-const { url, token, origin, cycleId, count } = JSON.parse(process.argv[2]);
+// Clients are spread over `urls` (several API processes sharing one board) in turn.
+const { urls, token, origin, cycleId, count } = JSON.parse(process.argv[2]);
 const clients = [];
 
 function connect(index) {
   return new Promise((resolve, reject) => {
-    const socket = io(url, {
+    const socket = io(urls[index % urls.length], {
       transports: ['websocket'],
       auth: { token },
       extraHeaders: { origin },

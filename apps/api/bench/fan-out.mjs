@@ -2,7 +2,8 @@
 // sends lineup moves through the real API (paced, then as a burst) and every client's arrival time
 // is set against the time the command was sent. The same payloads then go through a bare socket.io
 // server to the same number of clients, for the ratio.
-// usage: node bench/fan-out.mjs '{"url","origin","cycleId","clients":[100,...],"moves":200,"perSecond":2}'
+// usage: node bench/fan-out.mjs '{"url","urls"?,"origin","cycleId","clients":[100,...],"moves":200,"perSecond":2}'
+// `urls` (default [url]) spreads the clients over several API processes; the handler sends to `url`.
 import { fork } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
 import { signIn } from './lib/http.mjs';
@@ -21,11 +22,11 @@ function ask(child, message) {
   });
 }
 
-async function openClients(url, token, total) {
+async function openClients(urls, token, total) {
   const share = Math.ceil(total / LOAD_PROCESSES);
   const loads = Array.from({ length: LOAD_PROCESSES }, (_, i) =>
     fork(here('./fan-out-clients.mjs'), [
-      JSON.stringify({ url, token, origin: options.origin, cycleId: options.cycleId, count: Math.min(share, total - i * share) }),
+      JSON.stringify({ urls, token, origin: options.origin, cycleId: options.cycleId, count: Math.min(share, total - i * share) }),
     ]),
   );
   await Promise.all(loads.map((load) => ask(load, { cmd: 'connect' })));
@@ -69,7 +70,7 @@ async function measureCatline(clients, handlerToken, observerToken) {
     payloads[kind].push(response.body.change);
     return response.body.version;
   };
-  const loads = await openClients(options.url, observerToken, clients);
+  const loads = await openClients(options.urls ?? [options.url], observerToken, clients);
   try {
     const paced = await collect(loads, await drive(options.moves, options.perSecond, move('paced')));
     const burst = await collect(loads, await drive(options.moves, 0, move('burst')));
@@ -84,7 +85,7 @@ async function measureBare(clients, bareUrl, payloads) {
     await fetch(`${bareUrl}/emit`, { method: 'POST', body: JSON.stringify(list[i]) });
     return list[i].version;
   };
-  const loads = await openClients(bareUrl, 'none', clients);
+  const loads = await openClients([bareUrl], 'none', clients);
   try {
     const paced = await collect(loads, await drive(payloads.paced.length, options.perSecond, emit(payloads.paced)));
     const burst = await collect(loads, await drive(payloads.burst.length, 0, emit(payloads.burst)));

@@ -1,4 +1,4 @@
-import { plainToInstance } from 'class-transformer';
+import { plainToInstance, Transform } from 'class-transformer';
 import { IsIn, IsInt, IsNotEmpty, IsOptional, IsString, IsUrl, Max, Min, MinLength, validateSync } from 'class-validator';
 
 /** Every setting the API reads, validated at boot: a bad value stops the start with a clear message. */
@@ -58,6 +58,15 @@ export class Environment {
   /** `off` keeps mail in the outbox unsent (the integration tests, except the spec that reads mail). */
   @IsIn(['on', 'off'])
   MAIL_SENDER: 'on' | 'off' = 'on';
+
+  /**
+   * Set when several API processes serve one board (redis://host:port): socket.io rooms then span
+   * every process through this Redis. Unset, one process keeps its rooms in memory.
+   */
+  @IsOptional()
+  @Transform(({ value }: { value: unknown }) => (value === '' ? undefined : value))
+  @IsUrl({ require_tld: false, protocols: ['redis', 'rediss'], require_protocol: true }, { message: 'REDIS_URL must be a redis:// address' })
+  REDIS_URL?: string;
 }
 
 export function validateEnvironment(raw: Record<string, unknown>): Environment {

@@ -26,7 +26,8 @@ import { cycleRoom, type CatlineServer, type CatlineSocket } from './socket.type
 
 /**
  * The live lineup: one room per cycle. Clients only listen and join; every change arrives through
- * the REST commands and is broadcast here, after its commit, in version order.
+ * the REST commands and is broadcast here, after its commit, in version order. With REDIS_URL the
+ * rooms span every API process: each process broadcasts the changes it committed, right away.
  */
 @WebSocketGateway({ serveClient: false })
 @UseGuards(SocketRolesGuard)
@@ -46,7 +47,14 @@ export class LineupGateway implements OnGatewayInit<CatlineServer>, OnModuleDest
 
   afterInit(server: CatlineServer): void {
     server.use(socketHandshake(this.verifier, this.sessions, webOrigins({ WEB_ORIGINS: this.config.get('WEB_ORIGINS') })));
-    this.unsubscribe = this.feed.subscribe((change) => server.to(cycleRoom(change.cycleId)).emit('lineup:change', change));
+    const clustered = Boolean(this.config.get('REDIS_URL', { infer: true }));
+    if (clustered) server.on('lineup:committed', (cycleId, version) => this.feed.noteCommittedElsewhere(cycleId, version));
+    this.unsubscribe = this.feed.subscribe((change) => {
+      // Sent ahead of the broadcast on the same Redis connection, so another process learns of the version
+      // before its sockets get it: a socket joining there meanwhile re-reads the log instead of missing it.
+      if (clustered) server.serverSideEmit('lineup:committed', change.cycleId, change.version);
+      server.to(cycleRoom(change.cycleId)).emit('lineup:change', change);
+    });
     this.logger.log('Lineup socket ready');
   }
 

@@ -8,7 +8,13 @@ export interface SocketSession {
   expiresAt: Date;
 }
 
-export type CatlineServer = Server<ClientToServerEvents, ServerToClientEvents, Record<string, never>, Partial<SocketSession>>;
-export type CatlineSocket = Socket<ClientToServerEvents, ServerToClientEvents, Record<string, never>, Partial<SocketSession>>;
+/** What API processes tell each other through the Redis adapter when several serve one board. */
+export interface ProcessToProcessEvents {
+  /** A process committed `version` of the cycle and is broadcasting it now. */
+  'lineup:committed': (cycleId: number, version: number) => void;
+}
+
+export type CatlineServer = Server<ClientToServerEvents, ServerToClientEvents, ProcessToProcessEvents, Partial<SocketSession>>;
+export type CatlineSocket = Socket<ClientToServerEvents, ServerToClientEvents, ProcessToProcessEvents, Partial<SocketSession>>;
 
 export const cycleRoom = (cycleId: number) => `cycle:${cycleId}`;

@@ -93,4 +93,17 @@ describe('LineupChangeFeed', () => {
     expect(published).toEqual([]);
     expect(feed.firstPending(1)).toBeUndefined();
   });
+
+  it('counts versions committed by another process as published without holding back its own', () => {
+    const { feed, published } = feedWithLog();
+    const own = feed.reserve(1, 5);
+    feed.noteCommittedElsewhere(1, 6);
+    expect(feed.lastPublished(1)).toBe(6);
+    own.prepare([change(5)]);
+    own.committed();
+    expect(published).toEqual([5]);
+    expect(feed.lastPublished(1)).toBe(6);
+    feed.noteCommittedElsewhere(1, 4);
+    expect(feed.lastPublished(1)).toBe(6);
+  });
 });

@@ -34,6 +34,7 @@ export class LineupChangeFeed {
   private readonly logger = new Logger(LineupChangeFeed.name);
   private readonly queues = new Map<number, Ticket[]>();
   private readonly published = new Map<number, number>();
+  private readonly committedElsewhere = new Map<number, number>();
   private readonly listeners = new Set<ChangeListener>();
 
   constructor(private readonly log: LineupChangesService) {}
@@ -61,9 +62,19 @@ export class LineupChangeFeed {
     };
   }
 
-  /** The highest version published for the cycle since the app started. */
+  /** The highest version of the cycle published since the app started, here or by another API process. */
   lastPublished(cycleId: number): number | undefined {
-    return this.published.get(cycleId);
+    const here = this.published.get(cycleId);
+    const elsewhere = this.committedElsewhere.get(cycleId);
+    return here === undefined || elsewhere === undefined ? (here ?? elsewhere) : Math.max(here, elsewhere);
+  }
+
+  /**
+   * Another API process committed `version` and broadcasts it itself. Kept apart from what this
+   * process published: its own earlier versions may still be on their way here and must go out.
+   */
+  noteCommittedElsewhere(cycleId: number, version: number): void {
+    if (version > (this.committedElsewhere.get(cycleId) ?? 0)) this.committedElsewhere.set(cycleId, version);
   }
 
   /** The lowest version of the cycle still waiting to be published. */

@@ -6,6 +6,7 @@ import { Cycle } from '../cycles/entities/cycle.entity.js';
 import { LineupChangeFeed, type FeedTicket } from './change-feed.service.js';
 import { toLineupChange } from './change.mapper.js';
 import { Clock } from './clock.js';
+import { isDeadlock, retryOnDeadlock } from './deadlock-retry.js';
 import { CycleChange } from './entities/cycle-change.entity.js';
 import { diffSnapshots } from './lineup-diff.js';
 import { buildSnapshot } from './lineup-snapshot.builder.js';
@@ -38,6 +39,7 @@ export interface FollowUp {
  * The one way a cycle changes: lock the cycle row, let the command check its own basis and write,
  * bump the cycle version with a guarded UPDATE, append the change (its patch is the difference of the
  * snapshots before and after) and commit; the change is published to the cycle's room only after the commit.
+ * A transaction that ends in a deadlock runs again, a few times (see deadlock-retry.ts).
  */
 @Injectable()
 export class CycleChangeService {
@@ -49,6 +51,21 @@ export class CycleChangeService {
   ) {}
 
   async apply(
+    cycleId: number,
+    actor: ChangeActor,
+    kind: ChangeKind,
+    step: ChangeStep,
+    followUp?: FollowUp,
+  ): Promise<LineupCommandResult> {
+    try {
+      // A rerun checks the command's basis again on the rows as they are now.
+      return await retryOnDeadlock(() => this.attempt(cycleId, actor, kind, step, followUp));
+    } catch (error) {
+      throw asLaunchDataRefusal(error);
+    }
+  }
+
+  private async attempt(
     cycleId: number,
     actor: ChangeActor,
     kind: ChangeKind,
@@ -83,10 +100,11 @@ export class CycleChangeService {
         return changes;
       });
     } catch (error) {
-      // Failing after every row was written means the COMMIT itself failed: it may have landed.
-      if (written) ticket?.uncertain();
+      // Failing after every row was written means the COMMIT itself failed: it may have landed,
+      // unless the server reports a deadlock (or a Galera certification failure), which rolled it back.
+      if (written && !isDeadlock(error)) ticket?.uncertain();
       else ticket?.rolledBack();
-      throw asLaunchDataRefusal(error);
+      throw error;
     }
     if ('repeatOf' in outcome) {
       ticket?.rolledBack();

@@ -1,0 +1,107 @@
+import type { LineupSnapshot } from '@catline/contracts';
+import { HANDLER, LineupDriver, OBSERVER } from '../support/lineup-fixtures.js';
+import { eventually } from '../support/socket-client.js';
+import { ApiCluster, redisUnavailable } from './api-cluster.js';
+import { CatapultToggler } from './catapult-toggler.js';
+import { FollowingClient } from './following-client.js';
+
+const CLIENTS_PER_PROCESS = 3;
+const SIDES = ['101', '102', '103', '104', '105', '106', '107', '108'];
+
+const skipReason = redisUnavailable();
+if (skipReason) console.warn(`Skipping the scale-out tests: redis-server is missing and could not be installed.\n${skipReason}`);
+const describeWithRedis = skipReason ? describe.skip : describe;
+
+/** The versions after `from` up to `to`, each once, in order. */
+const versionsBetween = (from: number, to: number) => Array.from({ length: to - from }, (_, i) => from + 1 + i);
+
+describeWithRedis('two API processes sharing one board through Redis', () => {
+  let cluster: ApiCluster;
+  let deck: LineupDriver;
+  let cycleId: number;
+  let catapultIds: number[];
+  let observerToken: string;
+  let handlerToken: string;
+  const clients: FollowingClient[] = [];
+
+  beforeAll(async () => {
+    cluster = await ApiCluster.start(2);
+    deck = new LineupDriver(cluster.urls[0]);
+    const cycle = await deck.createCycle();
+    cycleId = cycle.id;
+    for (const [index, side] of SIDES.entries()) {
+      const slot = await deck.addSlot(cycleId, side);
+      await deck.place(cycleId, slot.id, (index % 4) + 1);
+    }
+    catapultIds = await Promise.all([1, 2, 3, 4].map((number) => deck.catapultId(number)));
+    observerToken = await deck.token(OBSERVER);
+    handlerToken = await deck.token(HANDLER);
+  }, 90_000);
+
+  afterEach(() => {
+    for (const client of clients.splice(0)) client.close();
+  });
+
+  afterAll(async () => {
+    await cluster?.stop();
+  });
+
+  /** CLIENTS_PER_PROCESS clients on each process, joined to the cycle. */
+  async function followers(): Promise<FollowingClient[]> {
+    const opened = cluster.urls.flatMap((_, at) =>
+      Array.from({ length: CLIENTS_PER_PROCESS }, () => new FollowingClient(cluster.urls, at, observerToken, cycleId)),
+    );
+    clients.push(...opened);
+    await Promise.all(opened.map((client) => client.start()));
+    return opened;
+  }
+
+  /** Waits for every client to reach the database's version, then checks what each applied against it. */
+  async function expectEveryChangeInOrder(following: FollowingClient[], startedAt: number[]): Promise<LineupSnapshot> {
+    const final = await deck.snapshot(cycleId);
+    await eventually(() => following.every((client) => client.version >= final.version), 20_000, 'every client to reach the last version');
+    following.forEach((client, index) => {
+      expect(client.failures).toEqual([]);
+      expect(client.applied).toEqual(versionsBetween(startedAt[index], final.version));
+      expect(client.snapshot).toEqual(final);
+    });
+    return final;
+  }
+
+  it('delivers 500 changes committed on both processes to every client on either, in order', async () => {
+    const following = await followers();
+    const startedAt = following.map((client) => client.version);
+    // Two handlers on each process, each on a catapult of its own, all at once.
+    const handlers = catapultIds.map((catapultId, index) => new CatapultToggler(cluster.urls, index % 2, handlerToken, cycleId, catapultId));
+    await Promise.all(handlers.map((handler) => handler.run(125)));
+
+    const final = await expectEveryChangeInOrder(following, startedAt);
+    expect(final.version - startedAt[0]).toBe(500);
+    // Broadcasts cross between the processes: without the shared rooms, a client would get half the
+    // changes only through rejoining. A gap now and then (two processes' broadcasts overtaking) is fine.
+    for (const client of following) expect(client.replayed).toBeLessThan(50);
+    const gaps = following.reduce((sum, client) => sum + client.gaps, 0);
+    const replayed = following.reduce((sum, client) => sum + client.replayed, 0);
+    console.info(`500 changes from two processes, ${following.length} clients: ${gaps} gaps, ${replayed} changes taken from a replay`);
+  });
+
+  it('moves the clients of a crashed process to the other one without losing a change', async () => {
+    const following = await followers();
+    const startedAt = following.map((client) => client.version);
+    const onSecond = following.filter((client) => client.url === cluster.urls[1]);
+    const handlers = [0, 1].map((at) => new CatapultToggler(cluster.urls, at, handlerToken, cycleId, catapultIds[at * 2]));
+    const running = Promise.all(handlers.map((handler) => handler.run(100)));
+
+    await eventually(() => following.every((client) => client.applied.length >= 40), 30_000, '40 changes before the crash');
+    await cluster.crash(1);
+    await running;
+
+    const final = await expectEveryChangeInOrder(following, startedAt);
+    // A command cut off by the crash may have committed without an answer.
+    expect(final.version - startedAt[0]).toBeGreaterThanOrEqual(200);
+    for (const client of onSecond) {
+      expect(client.url).toBe(cluster.urls[0]);
+      expect(client.failovers).toBe(1);
+    }
+  });
+});

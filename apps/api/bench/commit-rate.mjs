@@ -15,7 +15,7 @@ async function catlineRun(handlerCount, token) {
   const lanes = snapshot.lanes.filter((lane) => lane.status === 'up' && !lane.closed).map((lane) => lane.catapultId);
   const slots = [...snapshot.pool, ...snapshot.lanes.flatMap((lane) => lane.slotIds)];
   const perHandler = Math.ceil(options.commands / handlerCount);
-  const counts = { accepted: 0, conflicts: 0, refused: 0 };
+  const counts = { accepted: 0, conflicts: 0, busy: 0, refused: 0 };
   const started = now();
   await Promise.all(
     handlers.map(async (handler, h) => {
@@ -23,6 +23,7 @@ async function catlineRun(handlerCount, token) {
         const { status } = await handler.toggle(slots[h], lanes[h % lanes.length]);
         if (status < 300) counts.accepted += 1;
         else if (status === 409) counts.conflicts += 1;
+        else if (status === 503) counts.busy += 1;
         else counts.refused += 1;
       }
     }),

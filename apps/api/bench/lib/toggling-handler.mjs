@@ -29,7 +29,8 @@ export class TogglingHandler {
     if (response.status >= 200 && response.status < 300) {
       const { change } = response.body;
       this.snapshot = applyLineupPatch(this.snapshot, change.version, change.patch);
-    } else if (response.status === 409) {
+    } else if (response.status === 409 || response.status === 503) {
+      // Refused on a stale basis, or rolled back by the database: nothing changed; reload and go on.
       await this.load();
     } else {
       throw new Error(`move refused: ${response.status} ${response.body?.message}`);

@@ -17,6 +17,8 @@ const CODE_BY_STATUS: Record<number, string> = {
 
 // mysql2 error codes that mean the database is out of reach rather than the request being wrong.
 const DATABASE_DOWN = new Set(['ECONNREFUSED', 'PROTOCOL_CONNECTION_LOST', 'ETIMEDOUT', 'ER_CON_COUNT_ERROR', 'EPIPE']);
+// A transaction MariaDB rolled back to break a lock cycle (after the pipeline's own retries): nothing changed.
+const DATABASE_BUSY = new Set(['ER_LOCK_DEADLOCK', 'ER_LOCK_WAIT_TIMEOUT']);
 
 /** Every HTTP error leaves as an ApiError: a status, a stable code and a readable message. */
 @Catch()
@@ -46,6 +48,10 @@ export class ApiExceptionFilter implements ExceptionFilter {
     const code = (exception as { code?: string; driverError?: { code?: string } }).driverError?.code ?? (exception as { code?: string }).code;
     if (code && DATABASE_DOWN.has(code)) {
       return { statusCode: HttpStatus.SERVICE_UNAVAILABLE, code: 'database_unavailable', message: 'The database is not answering; nothing was changed. Try again shortly.' };
+    }
+    if (code && DATABASE_BUSY.has(code)) {
+      this.logger.warn(`Transaction rolled back by the database: ${code}`);
+      return { statusCode: HttpStatus.SERVICE_UNAVAILABLE, code: 'database_busy', message: 'The database was busy and nothing was changed. Try again.' };
     }
     if (exception instanceof QueryFailedError) this.logger.error(`Query failed: ${exception.message}`);
     else this.logger.error(exception instanceof Error ? exception.stack : String(exception));

@@ -103,3 +103,56 @@ export interface UserView {
   squadronId: number | null;
   active: boolean;
 }
+
+// Requests. The API's DTOs implement these and add the validation rules.
+
+export interface CreateSquadronRequest {
+  name: string;
+  code: string;
+  /** Where the cycle summary goes. */
+  email: string;
+}
+
+export interface CreateAircraftTypeRequest {
+  designation: string;
+  name: string;
+  maxGrossWeightLb: number;
+  crosswindLimitKt: number;
+  thrustLbf: number;
+  requiredExcessKt: number;
+  /** Null or left out when the type never needs afterburner. */
+  afterburnerFromLb?: number | null;
+  /** Increasing upToLb; the last band has upToLb null. */
+  trimBands: TrimBand[];
+  /** Ordered by strictly increasing gross weight, two rows at least. */
+  launchTable: LaunchTableRow[];
+}
+
+export interface CreateAircraftRequest {
+  sideNumber: string;
+  typeId: number;
+  squadronId: number;
+  /** One of the ship's deck spot names. */
+  parkedSpot: string;
+  /** True when left out. */
+  serviceable?: boolean;
+}
+
+export interface CreateUserRequest {
+  email: string;
+  name: string;
+  role: Role;
+  /** Left out, the person is mailed an invitation link to choose one. */
+  password?: string;
+  /** Required for a catapult officer. */
+  catapultId?: number | null;
+  squadronId?: number | null;
+}
+
+export interface UpdateUserRequest {
+  name?: string;
+  role?: Role;
+  catapultId?: number | null;
+  squadronId?: number | null;
+  active?: boolean;
+}

@@ -17,6 +17,9 @@ const router = createBrowserRouter([
     HydrateFallback: () => <LoadingState label="Opening Catline…" />,
     children: [
       { path: '/sign-in', lazy: async () => ({ Component: (await import('./routes/sign-in.route.js')).SignInRoute }) },
+      { path: '/forgot-password', lazy: async () => ({ Component: (await import('./routes/forgot-password.route.js')).ForgotPasswordRoute }) },
+      { path: '/reset-password', lazy: async () => ({ Component: (await import('./routes/reset-password.route.js')).ResetPasswordRoute }) },
+      { path: '/invitation', lazy: async () => ({ Component: (await import('./routes/invitation.route.js')).InvitationRoute }) },
       {
         element: <RequireSession />,
         children: [

@@ -13,17 +13,18 @@ const screens = {
   fleet: { path: '/fleet', label: 'Fleet' },
   launchData: { path: '/launch-data', label: 'Launch data' },
   people: { path: '/people', label: 'People' },
+  reports: { path: '/reports', label: 'Reports' },
 } satisfies Record<string, Screen>;
 
-const shared = [screens.cycles, screens.fleet, screens.launchData];
+const shared = [screens.cycles, screens.fleet, screens.launchData, screens.reports];
 
 /** Each role's screens, its main screen first: that is where it lands after signing in. */
 export const SCREENS_BY_ROLE: Record<Role, Screen[]> = {
   handler: [screens.lineup, ...shared],
   catapult_officer: [screens.catStation, screens.lineup, ...shared],
   pilot: [screens.myLaunch, screens.lineup, ...shared],
-  air_operations: [screens.cycles, screens.lineup, screens.fleet, screens.launchData],
-  admin: [screens.people, screens.fleet, screens.launchData, screens.cycles, screens.lineup],
+  air_operations: [screens.cycles, screens.lineup, screens.fleet, screens.launchData, screens.reports],
+  admin: [screens.people, screens.fleet, screens.launchData, screens.cycles, screens.lineup, screens.reports],
   observer: [screens.lineup, ...shared],
 };
 

@@ -5,6 +5,8 @@ import { useSession } from '../lib/session-store.js';
 export interface SignInState {
   /** Where the person was when the session ended or was missing. */
   from?: string;
+  /** What a screen before sign-in has just done, e.g. set a password. */
+  notice?: string;
 }
 
 /** Everything below needs a signed-in person; without one, go to sign-in and remember where we were. */

@@ -8,19 +8,22 @@ type Method = 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE';
 
 export interface RequestOptions {
   method?: Method;
+  /** Sent as JSON, or as multipart/form-data when it is a FormData (an uploaded file). */
   body?: unknown;
   signal?: AbortSignal;
 }
 
 async function send(path: string, { method = 'GET', body, signal }: RequestOptions, token: string | null) {
   const headers: Record<string, string> = { Accept: 'application/json' };
-  if (body !== undefined) headers['Content-Type'] = 'application/json';
+  const form = body instanceof FormData;
+  // The browser writes a multipart body's Content-Type itself, with the boundary.
+  if (body !== undefined && !form) headers['Content-Type'] = 'application/json';
   if (token) headers.Authorization = `Bearer ${token}`;
   try {
     return await fetch(`/api${path}`, {
       method,
       headers,
-      body: body === undefined ? undefined : JSON.stringify(body),
+      body: body === undefined ? undefined : form ? body : JSON.stringify(body),
       signal,
       credentials: 'same-origin',
     });
@@ -74,16 +77,35 @@ export function forgetSession(notice: string | null = null, leftOnPurpose = fals
   endSession(notice, leftOnPurpose);
 }
 
-/** Every call to the API goes through here: bearer token, one refresh and retry on 401, ApiError parsing. */
-export async function apiRequest<T>(path: string, options: RequestOptions = {}): Promise<T> {
+/** Sends with the bearer token; on a 401, refreshes once and sends again. */
+async function sendSignedIn(path: string, options: RequestOptions): Promise<Response> {
   const token = getAccessToken();
   const response = await send(path, options, token);
-  if (response.status !== 401 || !token) return read<T>(response);
+  if (response.status !== 401 || !token) return response;
 
   const renewed = await refreshSession();
   if (!renewed) {
     forgetSession(SESSION_ENDED_NOTICE);
     throw new ApiRequestError(401, 'session_ended', SESSION_ENDED_NOTICE);
   }
-  return read<T>(await send(path, options, renewed.accessToken));
+  return send(path, options, renewed.accessToken);
+}
+
+/** Every call to the API goes through here: bearer token, one refresh and retry on 401, ApiError parsing. */
+export async function apiRequest<T>(path: string, options: RequestOptions = {}): Promise<T> {
+  return read<T>(await sendSignedIn(path, options));
+}
+
+export interface ApiFile {
+  blob: Blob;
+  /** The name the server suggests in Content-Disposition, if any. */
+  fileName: string | null;
+}
+
+/** A file the API serves (a CSV template): fetched here because a plain link carries no bearer token. */
+export async function apiFile(path: string): Promise<ApiFile> {
+  const response = await sendSignedIn(path, {});
+  if (!response.ok) throw await toApiRequestError(response);
+  const disposition = response.headers.get('Content-Disposition') ?? '';
+  return { blob: await response.blob(), fileName: /filename="([^"]+)"/.exec(disposition)?.[1] ?? null };
 }

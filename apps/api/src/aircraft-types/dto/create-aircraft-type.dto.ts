@@ -1,3 +1,4 @@
+import type { CreateAircraftTypeRequest } from '@catline/contracts';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import {
@@ -20,7 +21,7 @@ import { LaunchTableRows } from './launch-table.dto.js';
 import { LaunchTableRowDto } from './launch-table-row.dto.js';
 import { TrimBandDto } from './trim-band.dto.js';
 
-export class CreateAircraftTypeDto {
+export class CreateAircraftTypeDto implements CreateAircraftTypeRequest {
   @ApiProperty({ example: 'KS-7' })
   @Trim()
   @IsString()

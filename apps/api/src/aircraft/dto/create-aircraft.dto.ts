@@ -1,8 +1,9 @@
+import type { CreateAircraftRequest } from '@catline/contracts';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { IsBoolean, IsInt, IsNotEmpty, IsOptional, IsString, Matches, MaxLength, Min } from 'class-validator';
 import { Trim } from '../../common/validation/trim.decorator.js';
 
-export class CreateAircraftDto {
+export class CreateAircraftDto implements CreateAircraftRequest {
   @ApiProperty({ example: '101' })
   @Trim()
   @IsString()

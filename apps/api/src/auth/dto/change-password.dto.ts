@@ -1,11 +1,6 @@
-import type { ChangePasswordRequest } from '@catline/contracts';
+import { type ChangePasswordRequest, PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH } from '@catline/contracts';
 import { ApiProperty } from '@nestjs/swagger';
 import { IsString, MaxLength, MinLength } from 'class-validator';
-
-// Length rules from the OWASP Authentication Cheat Sheet: at least 12 characters when there is no
-// second factor, and a generous maximum so pass phrases fit.
-export const PASSWORD_MIN_LENGTH = 12;
-export const PASSWORD_MAX_LENGTH = 128;
 
 export class ChangePasswordDto implements ChangePasswordRequest {
   @ApiProperty()

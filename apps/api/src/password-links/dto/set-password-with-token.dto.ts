@@ -1,7 +1,6 @@
-import type { SetPasswordWithTokenRequest } from '@catline/contracts';
+import { PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH, type SetPasswordWithTokenRequest } from '@catline/contracts';
 import { ApiProperty } from '@nestjs/swagger';
 import { IsString, Matches, MaxLength, MinLength } from 'class-validator';
-import { PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH } from '../../auth/dto/change-password.dto.js';
 
 export class SetPasswordWithTokenDto implements SetPasswordWithTokenRequest {
   @ApiProperty({ description: 'The token from the link in the mail (after `#token=`).' })

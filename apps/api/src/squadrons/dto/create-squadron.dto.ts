@@ -1,8 +1,9 @@
+import type { CreateSquadronRequest } from '@catline/contracts';
 import { ApiProperty } from '@nestjs/swagger';
 import { IsEmail, IsNotEmpty, IsString, Matches, MaxLength } from 'class-validator';
 import { Trim } from '../../common/validation/trim.decorator.js';
 
-export class CreateSquadronDto {
+export class CreateSquadronDto implements CreateSquadronRequest {
   @ApiProperty()
   @Trim()
   @IsString()

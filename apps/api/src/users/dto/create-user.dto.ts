@@ -1,11 +1,10 @@
-import { ROLES, type Role } from '@catline/contracts';
+import { type CreateUserRequest, PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH, ROLES, type Role } from '@catline/contracts';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { IsEmail, IsIn, IsInt, IsNotEmpty, IsOptional, IsString, MaxLength, Min, MinLength } from 'class-validator';
-import { PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH } from '../../auth/dto/change-password.dto.js';
 import { SkipIfAbsent } from '../../common/validation/skip-if-absent.decorator.js';
 import { Trim } from '../../common/validation/trim.decorator.js';
 
-export class CreateUserDto {
+export class CreateUserDto implements CreateUserRequest {
   @ApiProperty()
   @Trim()
   @IsEmail({}, { message: 'email must be an e-mail address' })

@@ -1,3 +1,4 @@
+import type { UpdateUserRequest } from '@catline/contracts';
 import { ApiPropertyOptional, OmitType, PartialType } from '@nestjs/swagger';
 import { IsBoolean } from 'class-validator';
 import { SkipIfAbsent } from '../../common/validation/skip-if-absent.decorator.js';
@@ -7,7 +8,7 @@ import { CreateUserDto } from './create-user.dto.js';
 // stay nullable through their own @IsOptional().
 export class UpdateUserDto extends PartialType(OmitType(CreateUserDto, ['email', 'password'] as const), {
   skipNullProperties: false,
-}) {
+}) implements UpdateUserRequest {
   @ApiPropertyOptional()
   @SkipIfAbsent()
   @IsBoolean()

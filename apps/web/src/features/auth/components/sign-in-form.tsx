@@ -3,8 +3,7 @@ import { Alert, Button, Input, Stack } from '@chakra-ui/react';
 import { FormField } from '../../../components/form-field.js';
 import { errorMessage } from '../../../lib/api-error.js';
 import { useSignIn } from '../api/sign-in.js';
-
-const emailPattern = /^[^\s@]+@[^\s@]+\.[^\s@]+$/;
+import { emailPattern } from '../auth-model.js';
 
 export function SignInForm() {
   const signIn = useSignIn();

@@ -10,6 +10,7 @@ import { useStartCycle } from '../api/start-cycle.js';
 import { useUpdateConditions } from '../api/update-conditions.js';
 import { toConditionsRequest, valuesFromCycle } from '../cycle-form-model.js';
 import { AddSlotForm } from './add-slot-form.js';
+import { AirPlanImport } from './air-plan-import.js';
 import { CycleForm } from './cycle-form.js';
 
 /** One cycle: its conditions (editable by air operations), start and close, and adding aircraft. */
@@ -73,6 +74,12 @@ export function CyclePanel({ cycle }: { cycle: CycleView }) {
           <Stack gap="2">
             <Text fontWeight="700">Add an aircraft</Text>
             <AddSlotForm cycleId={cycle.id} />
+          </Stack>
+        )}
+        {cycle.state !== 'closed' && (
+          <Stack gap="2" as="section" aria-label="Import an air plan">
+            <Text fontWeight="700">Import an air plan</Text>
+            <AirPlanImport cycle={cycle} />
           </Stack>
         )}
       </RoleGate>

@@ -1,15 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { AircraftView } from '@catline/contracts';
+import type { AircraftView, CreateAircraftRequest } from '@catline/contracts';
 import { apiRequest } from '../../../lib/api-client.js';
 import { fleetKeys } from './fleet-keys.js';
-
-export interface CreateAircraftRequest {
-  sideNumber: string;
-  typeId: number;
-  squadronId: number;
-  parkedSpot: string;
-  serviceable: boolean;
-}
 
 export const createAircraft = (request: CreateAircraftRequest) => apiRequest<AircraftView>('/aircraft', { method: 'POST', body: request });
 

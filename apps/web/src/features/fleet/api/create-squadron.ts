@@ -1,9 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { SquadronView } from '@catline/contracts';
+import type { CreateSquadronRequest, SquadronView } from '@catline/contracts';
 import { apiRequest } from '../../../lib/api-client.js';
 import { fleetKeys } from './fleet-keys.js';
-
-export type CreateSquadronRequest = Omit<SquadronView, 'id'>;
 
 export const createSquadron = (request: CreateSquadronRequest) => apiRequest<SquadronView>('/squadrons', { method: 'POST', body: request });
 

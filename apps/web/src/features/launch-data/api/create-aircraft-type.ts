@@ -1,9 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { AircraftTypeView } from '@catline/contracts';
+import type { AircraftTypeView, CreateAircraftTypeRequest } from '@catline/contracts';
 import { apiRequest } from '../../../lib/api-client.js';
 import { aircraftTypeKeys } from '../../../lib/queries/aircraft-types-query.js';
-
-export type CreateAircraftTypeRequest = Omit<AircraftTypeView, 'id'>;
 
 export const createAircraftType = (request: CreateAircraftTypeRequest) =>
   apiRequest<AircraftTypeView>('/aircraft-types', { method: 'POST', body: request });

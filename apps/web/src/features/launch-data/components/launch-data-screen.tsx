@@ -13,6 +13,7 @@ import { useHasRole } from '../../../lib/session-store.js';
 import { formatTrimBands } from '../launch-data-model.js';
 import { AircraftTypeForm } from './aircraft-type-form.js';
 import { LaunchTableEditor } from './launch-table-editor.js';
+import { LaunchTableImport } from './launch-table-import.js';
 
 function TypeDetail({ type, editable }: { type: AircraftTypeView; editable: boolean }) {
   return (
@@ -39,6 +40,12 @@ function TypeDetail({ type, editable }: { type: AircraftTypeView; editable: bool
         </Text>
         <LaunchTableEditor key={`${type.id}-${JSON.stringify(type.launchTable)}`} type={type} editable={editable} />
       </Box>
+      {editable && (
+        <Stack gap="2" as="section" aria-label="Import a launch table">
+          <Text fontWeight="700">Import a launch table</Text>
+          <LaunchTableImport key={type.id} type={type} />
+        </Stack>
+      )}
     </Stack>
   );
 }

@@ -1,16 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { Role, UserView } from '@catline/contracts';
+import type { UpdateUserRequest, UserView } from '@catline/contracts';
 import { apiRequest } from '../../../lib/api-client.js';
 import { peopleKeys } from './people-keys.js';
 
-export interface UpdateUserVariables {
-  id: number;
-  name?: string;
-  role?: Role;
-  catapultId?: number | null;
-  squadronId?: number | null;
-  active?: boolean;
-}
+export type UpdateUserVariables = UpdateUserRequest & { id: number };
 
 export const updateUser = ({ id, ...changes }: UpdateUserVariables) => apiRequest<UserView>(`/users/${id}`, { method: 'PATCH', body: changes });
 

@@ -7,11 +7,13 @@ import { PageHeader } from '../../../components/page-header.js';
 import { QueryView } from '../../../components/query-states.js';
 import { NoticeBanner, refusalNotice, useNotice } from '../../../components/refusal-notice.js';
 import { SelectInput } from '../../../components/select-field.js';
+import { errorMessage } from '../../../lib/api-error.js';
 import { useShips } from '../../../lib/queries/ships-query.js';
 import { useSquadrons } from '../../../lib/queries/squadrons-query.js';
 import { useSessionUser } from '../../../lib/session-store.js';
 import { useDeleteUser } from '../api/delete-user.js';
 import { useUsers } from '../api/get-users.js';
+import { useSendInvitation } from '../api/send-invitation.js';
 import { useUpdateUser } from '../api/update-user.js';
 import { roleChoices, UserForm } from './user-form.js';
 
@@ -22,6 +24,7 @@ export function PeopleScreen() {
   const squadrons = useSquadrons();
   const update = useUpdateUser();
   const remove = useDeleteUser();
+  const invite = useSendInvitation();
   const { notice, show, dismiss } = useNotice();
   const [doomed, setDoomed] = useState<UserView | null>(null);
   const catapults = ships.data?.flatMap((ship) => ship.catapults) ?? [];
@@ -31,6 +34,12 @@ export function PeopleScreen() {
   };
   const squadronCode = (id: number | null) => squadrons.data?.find((squadron) => squadron.id === id)?.code ?? '—';
   const refused = (error: unknown) => show(refusalNotice(error, 'The change'));
+  // The list does not say who still has to choose a password: the server answers 409 for those who have one.
+  const inviteAgain = (user: UserView) =>
+    invite.mutate(user.id, {
+      onSuccess: ({ message }) => show({ tone: 'done', title: `Invitation sent to ${user.name}`, message }),
+      onError: (error) => show({ tone: 'refused', title: `No invitation sent to ${user.name}`, message: errorMessage(error) }),
+    });
 
   const columns: Column<UserView>[] = [
     { key: 'name', header: 'Name', cell: (user) => <Text fontWeight="600">{user.name}</Text>, sortValue: (user) => user.name },
@@ -85,6 +94,11 @@ export function PeopleScreen() {
             <Button size="xs" variant="outline" onClick={() => update.mutate({ id: user.id, active: !user.active }, { onError: refused })}>
               {user.active ? 'Block' : 'Unblock'}
             </Button>
+            {user.active && (
+              <Button size="xs" variant="outline" onClick={() => inviteAgain(user)} loading={invite.isPending && invite.variables === user.id}>
+                Send invitation again
+              </Button>
+            )}
             <Button size="xs" variant="ghost" colorPalette="nogo" onClick={() => setDoomed(user)}>
               Delete
             </Button>

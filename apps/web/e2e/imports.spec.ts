@@ -1,0 +1,147 @@
+import { expect, test, type Page } from '@playwright/test';
+import type { AircraftTypeView, AircraftView } from '@catline/contracts';
+import { apiAs, planCycle } from './support/demo-api.js';
+import { card, openAs, pool } from './support/screens.js';
+
+const AIR_PLAN_HEADER = 'side_number,pilot_email,mission,fuel_lb,stores,gross_weight_lb,tanker,early_warning,spare';
+
+async function chooseAndCheck(page: Page, label: string, name: string, lines: string[]) {
+  await page.getByLabel(label).setInputFiles({ name, mimeType: 'text/csv', buffer: Buffer.from(lines.join('\r\n')) });
+  await page.getByRole('button', { name: 'Check file' }).click();
+}
+
+test('air operations sees every problem of an air plan file, then imports a good one into the deck pool', async ({ browser }) => {
+  const { cycle } = await planCycle({ aircraft: [] });
+  const airops = await openAs(browser, 'airops', '/cycles');
+  await airops.getByRole('button', { name: `Show cycle ${cycle.number}` }).click();
+  const download = airops.waitForEvent('download');
+  await airops.getByRole('button', { name: 'Download template' }).click();
+  expect((await download).suggestedFilename()).toBe('air-plan-template.csv');
+
+  await chooseAndCheck(airops, 'Air plan file (CSV)', 'bad-plan.csv', [
+    AIR_PLAN_HEADER,
+    '107,,Strike training,11500,,44900,no,no,no',
+    '999,,Strike training,11500,,44900,no,no,no',
+    '108,,Strike training,lots,,44900,no,no,maybe',
+  ]);
+  const problems = airops.getByTestId('import-problems').locator('tbody tr');
+  await expect(problems).toHaveCount(3);
+  await expect(problems.nth(0)).toContainText('No aircraft has the side number 999.');
+  await expect(problems.nth(1)).toContainText('fuel_lb');
+  await expect(problems.nth(1)).toContainText('lots');
+  await expect(problems.nth(1)).toContainText('Must be a whole number');
+  await expect(problems.nth(2)).toContainText('spare');
+  await expect(problems.nth(2)).toContainText('Must be yes or no');
+  await expect(airops.getByText('bad-plan.csv: 3 problems.')).toBeVisible();
+  await expect(airops.getByRole('button', { name: /^Import / })).toHaveCount(0);
+
+  await chooseAndCheck(airops, 'Air plan file (CSV)', 'good-plan.csv', [
+    AIR_PLAN_HEADER,
+    '107,pilot2@catline.example,Strike training,11500,4 practice bombs,44900,no,no,no',
+    '108,,Recovery tanker,15800,Refuelling store,47600,yes,no,no',
+  ]);
+  await expect(airops.getByTestId('import-problems')).toHaveCount(0);
+  const rows = airops.getByTestId('import-rows').locator('tbody tr');
+  await expect(rows).toHaveCount(2);
+  await expect(rows.nth(0)).toContainText('Jo Abernathy');
+  await expect(rows.nth(1)).toContainText('Tanker');
+  // Someone changes the cycle after the check: the import is refused in words, and works once the screen has caught up.
+  const api = await apiAs('airops');
+  const fleet = (await (await api.get('/api/aircraft')).json()) as AircraftView[];
+  const added = await api.post(`/api/cycles/${cycle.id}/slots`, {
+    data: { aircraftId: fleet.find((plane) => plane.sideNumber === '109')!.id, mission: 'Spare', fuelLb: 9000, stores: '', grossWeightLb: 42_000, tanker: false, earlyWarning: false, spare: true },
+  });
+  expect(added.ok(), await added.text()).toBe(true);
+  await api.dispose();
+  const importButton = airops.getByRole('button', { name: `Import 2 aircraft into cycle ${cycle.number}` });
+  await importButton.click();
+  await expect(airops.getByTestId('import-refusal')).toContainText(`Cycle ${cycle.number} has changed 1 time since you saw it`);
+  await importButton.click();
+  await expect(airops.getByTestId('import-done')).toContainText(`deck pool of cycle ${cycle.number}`);
+
+  const handler = await openAs(browser, 'handler', `/lineup?cycle=${cycle.id}`);
+  await expect(card(pool(handler), '107')).toBeVisible();
+  await expect(card(pool(handler), '108')).toBeVisible();
+  await expect(card(pool(handler), '109')).toBeVisible();
+});
+
+test('the admin replaces a launch table from a CSV file once its problems are put right', async ({ browser }) => {
+  const api = await apiAs('admin');
+  const designation = `IM-${Date.now() % 100_000}`;
+  const created = await api.post('/api/aircraft-types', {
+    data: {
+      designation,
+      name: 'Import trial type',
+      maxGrossWeightLb: 52_000,
+      crosswindLimitKt: 15,
+      thrustLbf: 20_000,
+      requiredExcessKt: 15,
+      afterburnerFromLb: null,
+      trimBands: [{ upToLb: null, trimDeg: 12 }],
+      launchTable: [
+        { grossWeightLb: 34_000, minLaunchAirspeedKt: 124 },
+        { grossWeightLb: 46_000, minLaunchAirspeedKt: 143 },
+      ],
+    },
+  });
+  expect(created.status(), await created.text()).toBe(201);
+  const type = (await created.json()) as AircraftTypeView;
+  await api.dispose();
+
+  const admin = await openAs(browser, 'admin', '/launch-data');
+  await admin.getByRole('button', { name: `Show ${designation}` }).click();
+  await chooseAndCheck(admin, 'Launch table file (CSV)', 'table.csv', ['gross_weight_lb,min_launch_airspeed_kt', '36000,126', '35000,130', '52000,-4']);
+  const problems = admin.getByTestId('import-problems').locator('tbody tr');
+  await expect(problems).toHaveCount(2);
+  await expect(problems.nth(0)).toContainText('Must be heavier than line 2');
+  await expect(problems.nth(1)).toContainText('Cannot be negative.');
+  await expect(admin.getByRole('button', { name: /^Replace the / })).toHaveCount(0);
+
+  await chooseAndCheck(admin, 'Launch table file (CSV)', 'table.csv', ['gross_weight_lb,min_launch_airspeed_kt', '36000,126', '44000,139', '52000,152.5']);
+  await admin.getByRole('button', { name: `Replace the ${type.designation} table with these 3 rows` }).click();
+  await expect(admin.getByTestId('import-done')).toBeVisible();
+  await expect(admin.getByLabel('Row 3 gross weight')).toHaveValue('52000');
+  await expect(admin.getByLabel('Row 3 minimum launch airspeed')).toHaveValue('152.5');
+});
+
+test('the admin invites a person without a password, and a second invitation to someone with one is refused in words', async ({ browser }) => {
+  const admin = await openAs(browser, 'admin', '/people');
+  const email = `invitee${Date.now() % 100_000}@catline.example`;
+  const form = admin.getByRole('form', { name: 'Add a person' });
+  await form.getByLabel('Name').fill('Ira Invitee');
+  await form.getByLabel('E-mail').fill(email);
+  await form.getByRole('button', { name: 'Add person' }).click();
+  await expect(admin.getByTestId('person-added')).toContainText('Invitation sent');
+  await expect(admin.getByTestId('person-added')).toContainText(email);
+
+  const invitee = admin.getByRole('row', { name: new RegExp(email) });
+  await invitee.getByRole('button', { name: 'Send invitation again' }).click();
+  await expect(admin.getByTestId('notice')).toContainText(`A new invitation link is on its way to ${email}`);
+
+  const pilot = admin.getByRole('row', { name: /pilot@catline\.example/ });
+  await pilot.getByRole('button', { name: 'Send invitation again' }).click();
+  await expect(admin.getByTestId('notice')).toContainText('No invitation sent to Kit Rowan');
+  await expect(admin.getByTestId('notice')).toContainText('has already chosen a password');
+});
+
+test('the screens before sign-in ask for a reset link and refuse a bogus invitation link with the server’s reason', async ({ page }) => {
+  await page.goto('/sign-in');
+  await page.getByRole('link', { name: 'Forgot password?' }).click();
+  await expect(page).toHaveURL(/\/forgot-password$/);
+  await page.getByLabel('E-mail').fill('nobody-here@catline.example');
+  await page.getByRole('button', { name: 'Send me a link' }).click();
+  await expect(page.getByTestId('reset-requested')).toContainText('a link to set a new password is on its way');
+
+  await page.goto('/invitation#token=not-a-real-token');
+  await page.getByRole('textbox', { name: 'New password', exact: true }).fill('short');
+  await page.getByLabel('New password again').fill('different');
+  await page.getByRole('button', { name: 'Set my password' }).click();
+  await expect(page.getByText('At least 12 characters')).toBeVisible();
+  await expect(page.getByText('The two do not match')).toBeVisible();
+
+  await page.getByRole('textbox', { name: 'New password', exact: true }).fill('a long enough pass phrase');
+  await page.getByLabel('New password again').fill('a long enough pass phrase');
+  await page.getByRole('button', { name: 'Set my password' }).click();
+  await expect(page.getByTestId('set-password-error')).toContainText('This invitation link is not valid any more');
+  await expect(page).toHaveURL(/\/invitation/);
+});

@@ -16,6 +16,7 @@ import { ImportsModule } from './imports/imports.module.js';
 import { LineupModule } from './lineup/lineup.module.js';
 import { MailModule } from './mail/mail.module.js';
 import { PasswordLinksModule } from './password-links/password-links.module.js';
+import { ReportsModule } from './reports/reports.module.js';
 import { ShipsModule } from './ships/ships.module.js';
 import { SquadronsModule } from './squadrons/squadrons.module.js';
 import { UsersModule } from './users/users.module.js';
@@ -55,6 +56,7 @@ const webDist = fileURLToPath(new URL('../../web/dist', import.meta.url));
     MailModule,
     PasswordLinksModule,
     ImportsModule,
+    ReportsModule,
   ],
 })
 export class AppModule {}

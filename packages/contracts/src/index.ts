@@ -4,5 +4,6 @@ export * from './fleet.js';
 export * from './imports.js';
 export * from './lineup.js';
 export * from './lineup-patch.js';
+export * from './reports.js';
 export * from './roles.js';
 export * from './socket.js';

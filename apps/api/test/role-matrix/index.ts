@@ -14,12 +14,14 @@ import { healthRoutes } from './health.routes.js';
 import { importsRoutes } from './imports.routes.js';
 import { lineupRoutes } from './lineup.routes.js';
 import { passwordLinksRoutes } from './password-links.routes.js';
+import { reportsRoutes } from './reports.routes.js';
 import type { MatrixRoute } from './route-table.js';
 import { shipsRoutes } from './ships.routes.js';
 import { squadronsRoutes } from './squadrons.routes.js';
 import { usersRoutes } from './users.routes.js';
 
 export type { MatrixContext, MatrixRoute, RouteExample } from './route-table.js';
+export { type MatrixSocketEvent, matrixSocketEvents } from './socket-events.js';
 
 export const matrixRoutes: MatrixRoute[] = [
   ...healthRoutes,
@@ -33,4 +35,5 @@ export const matrixRoutes: MatrixRoute[] = [
   ...lineupRoutes,
   ...importsRoutes,
   ...passwordLinksRoutes,
+  ...reportsRoutes,
 ];

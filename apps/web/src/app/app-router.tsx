@@ -43,6 +43,10 @@ const router = createBrowserRouter([
               { path: 'cycles', lazy: async () => ({ Component: (await import('./routes/cycles.route.js')).CyclesRoute }) },
               { path: 'fleet', lazy: async () => ({ Component: (await import('./routes/fleet.route.js')).FleetRoute }) },
               { path: 'launch-data', lazy: async () => ({ Component: (await import('./routes/launch-data.route.js')).LaunchDataRoute }) },
+              { path: 'reports', lazy: async () => ({ Component: (await import('./routes/reports.route.js')).ReportsRoute }) },
+              { path: 'reports/replay', lazy: async () => ({ Component: (await import('./routes/replay.route.js')).ReplayRoute }) },
+              { path: 'reports/launch-sheet', lazy: async () => ({ Component: (await import('./routes/launch-sheet.route.js')).LaunchSheetRoute }) },
+              { path: 'reports/shot-counts', lazy: async () => ({ Component: (await import('./routes/shot-counts.route.js')).ShotCountsRoute }) },
               {
                 element: <RoleRoute roles={['admin']} screen="People" />,
                 children: [

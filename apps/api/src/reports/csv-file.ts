@@ -1,0 +1,31 @@
+import { stringify } from 'csv-stringify/sync';
+
+export type CsvCell = string | number | boolean | null;
+
+/** A CSV document and the name it is saved under. */
+export interface CsvFile {
+  fileName: string;
+  content: string;
+}
+
+/**
+ * Text that a spreadsheet would run as a formula gets a leading apostrophe (OWASP, "CSV Injection").
+ * Only text cells are guarded: a negative number stays a number.
+ */
+export function guardText(text: string): string {
+  return /^[=+\-@\t\r]/.test(text) ? `'${text}` : text;
+}
+
+/**
+ * RFC 4180 CSV (comma, CRLF, quotes where needed) with a byte-order mark so spreadsheets read it as
+ * UTF-8; booleans as true/false, null as an empty cell.
+ */
+export function toCsv(header: readonly string[], rows: readonly (readonly CsvCell[])[]): string {
+  return stringify([header, ...rows.map((row) => row.map((cell) => (typeof cell === 'string' ? guardText(cell) : cell)))], {
+    bom: true,
+    record_delimiter: 'windows',
+    // Only the record delimiter itself is quoted by default: a bare line break would split the row elsewhere.
+    quoted_match: /[\r\n]/,
+    cast: { boolean: (value) => (value ? 'true' : 'false') },
+  });
+}

@@ -1,0 +1,204 @@
+import type { ChangeKind, LineupChange, SlotStatus, SlotView } from '@catline/contracts';
+import type { Cycle } from '../cycles/entities/cycle.entity.js';
+import type { Slot } from '../lineup/entities/slot.entity.js';
+import type { LineupState } from '../lineup/lineup-state.js';
+import type { Catapult } from '../ships/entities/catapult.entity.js';
+import type { Ship } from '../ships/entities/ship.entity.js';
+import { buildCycleReport } from './cycle-report.builder.js';
+
+// A small invented cycle; every expected figure is worked by hand from its times (common practice, no source).
+
+const t = (clock: string) => `2027-01-05T${clock}.000Z`;
+
+const cycle = {
+  id: 1,
+  shipId: 1,
+  number: 12,
+  plannedLaunchAt: new Date(t('10:00:00')),
+  windowStartAt: new Date(t('09:50:00')),
+  windowEndAt: new Date(t('10:35:00')),
+  shipCourseDeg: 0,
+  shipSpeedKt: 25,
+  trueWindFromDeg: 0,
+  trueWindSpeedKt: 10,
+  temperatureC: 20,
+  pressureHpa: 1013,
+  weatherCase: 'I',
+  night: false,
+  landingAreaInUse: false,
+  state: 'closed',
+  version: 0,
+} as Cycle;
+
+const catapult = (id: number, number: number, pair: number) =>
+  ({ id, number, pair, position: number <= 2 ? 'bow' : 'waist', resetIntervalS: 55 }) as Catapult;
+
+const squadrons = {
+  TDC: { id: 1, code: 'TDC', name: 'Tidecallers' },
+  BRH: { id: 2, code: 'BRH', name: 'Brass Herons' },
+  NJR: { id: 3, code: 'NJR', name: 'Nightjars' },
+};
+
+interface SlotFields {
+  id: number;
+  side: string;
+  squadron: keyof typeof squadrons;
+  status: SlotStatus;
+  catapultId?: number | null;
+  launchedAt?: string;
+  overrideReason?: string;
+  replacedBySlotId?: number;
+}
+
+const slot = (fields: SlotFields) =>
+  ({
+    id: fields.id,
+    cycleId: 1,
+    aircraftId: fields.id,
+    aircraft: { sideNumber: fields.side, squadronId: squadrons[fields.squadron].id, squadron: squadrons[fields.squadron], type: { designation: 'KS-7' } },
+    pilot: null,
+    mission: 'Strike training',
+    status: fields.status,
+    catapultId: fields.catapultId ?? null,
+    launchedAt: fields.launchedAt ? new Date(fields.launchedAt) : null,
+    overrideReason: fields.overrideReason ?? null,
+    replacedBySlotId: fields.replacedBySlotId ?? null,
+  }) as unknown as Slot;
+
+const state: LineupState = {
+  cycle,
+  ship: { pairGapS: 10 } as Ship,
+  catapults: [catapult(11, 1, 1), catapult(12, 2, 1), catapult(13, 3, 2)],
+  slots: [
+    slot({ id: 1, side: '101', squadron: 'TDC', status: 'launched', catapultId: 11, launchedAt: t('10:00:05') }),
+    slot({ id: 2, side: '102', squadron: 'TDC', status: 'launched', catapultId: 11, launchedAt: t('10:01:10'), overrideReason: 'Crosswind checked by hand' }),
+    slot({ id: 3, side: '201', squadron: 'BRH', status: 'down', replacedBySlotId: 4 }),
+    slot({ id: 4, side: '202', squadron: 'BRH', status: 'launched', catapultId: 12, launchedAt: t('10:00:50') }),
+    slot({ id: 5, side: '203', squadron: 'BRH', status: 'launched', catapultId: 12, launchedAt: t('10:36:00') }),
+    slot({ id: 6, side: '301', squadron: 'NJR', status: 'scratched' }),
+    slot({ id: 7, side: '109', squadron: 'TDC', status: 'scratched' }),
+  ],
+};
+
+let version = 0;
+const change = (kind: ChangeKind, at: string, by: string, slots: Partial<SlotView>[]): LineupChange => ({
+  cycleId: 1,
+  version: ++version,
+  kind,
+  actor: { id: 1, name: by, role: 'handler' },
+  at: t(at),
+  summary: kind,
+  patch: { slots: slots.map((fields) => ({ projectedLaunchAt: null, suspendReason: null, ...fields }) as SlotView) },
+});
+
+const HANDLER = 'Tomas Achterberg';
+const changes = [
+  change('slot_moved', '09:40:00', HANDLER, [
+    { id: 1, status: 'planned', catapultId: 11, projectedLaunchAt: t('10:00:00') },
+    { id: 2, status: 'planned', catapultId: 11, projectedLaunchAt: t('10:00:55') },
+    { id: 3, status: 'planned', catapultId: 12, projectedLaunchAt: t('10:00:10') },
+    { id: 4, status: 'planned', catapultId: null },
+    { id: 5, status: 'planned', catapultId: 12, projectedLaunchAt: t('10:01:05') },
+    { id: 6, status: 'planned', catapultId: 13, projectedLaunchAt: t('10:00:20') },
+    { id: 7, status: 'planned', catapultId: null },
+  ]),
+  change('cycle_started', '09:58:00', 'Priya Vennard', []),
+  change('slot_launched', '10:00:05', 'Lia Okonkwo', [{ id: 1, status: 'launched', catapultId: 11 }]),
+  change('aircraft_down', '10:00:30', HANDLER, [
+    { id: 3, status: 'down', catapultId: null },
+    { id: 4, status: 'planned', catapultId: 12, projectedLaunchAt: t('10:00:50') },
+  ]),
+  change('slot_launched', '10:00:50', 'Sam Falkner', [{ id: 4, status: 'launched', catapultId: 12 }]),
+  change('slot_suspended', '10:01:00', 'Sam Falkner', [{ id: 5, status: 'suspended', catapultId: 12, suspendReason: 'Launch bar not seated' }]),
+  change('slot_launched', '10:01:10', 'Lia Okonkwo', [{ id: 2, status: 'launched', catapultId: 11 }]),
+  change('slot_advanced', '10:02:00', 'Sam Falkner', [{ id: 5, status: 'on_catapult', catapultId: 12 }]),
+  change('slot_launched', '10:36:00', 'Sam Falkner', [{ id: 5, status: 'launched', catapultId: 12 }]),
+  change('cycle_closed', '10:40:00', 'Priya Vennard', [
+    { id: 6, status: 'scratched', catapultId: null },
+    { id: 7, status: 'scratched', catapultId: null },
+  ]),
+];
+
+describe('buildCycleReport', () => {
+  const report = buildCycleReport({ state, changes });
+  const lane = (number: number) => report.catapults.find((catapult) => catapult.number === number)!;
+
+  it('puts launches on their catapult in launch order, then what was planned there and did not launch', () => {
+    expect(lane(1).launches.map((line) => line.sideNumber)).toEqual(['101', '102']);
+    expect(lane(2).launches.map((line) => line.sideNumber)).toEqual(['202', '203', '201']);
+    expect(lane(3).launches.map((line) => [line.sideNumber, line.status, line.plannedAt])).toEqual([['301', 'scratched', t('10:00:20')]]);
+  });
+
+  it('compares each launch with the time planned when the cycle started', () => {
+    expect(report.plannedBasis).toBe('cycle_start');
+    expect(report.plannedAtVersion).toBe(2);
+    const delta = (side: string) => report.catapults.flatMap((catapult) => catapult.launches).find((line) => line.sideNumber === side)!.deltaS;
+    expect(delta('101')).toBe(5); // 10:00:00 → 10:00:05
+    expect(delta('102')).toBe(15); // 10:00:55 → 10:01:10
+    expect(delta('203')).toBe(2095); // 10:01:05 → 10:36:00
+  });
+
+  it('gives a spare that was in the deck pool at the start the planned time of the aircraft it replaced', () => {
+    const spare = lane(2).launches.find((line) => line.sideNumber === '202')!;
+    expect(spare).toMatchObject({ plannedAt: t('10:00:10'), plannedCatapultNumber: 2, deltaS: 40 }); // 10:00:10 → 10:00:50
+  });
+
+  it('measures intervals per catapult and per pair', () => {
+    expect(lane(1).intervals.map((interval) => interval.seconds)).toEqual([65]); // 10:00:05 → 10:01:10
+    expect(lane(2).intervals.map((interval) => interval.seconds)).toEqual([2110]); // 10:00:50 → 10:36:00
+    expect(lane(3).intervals).toEqual([]);
+    const [bow, waist] = report.pairs;
+    expect(bow).toMatchObject({ pair: 1, catapultNumbers: [1, 2], minimumGapS: 10 });
+    // 101 10:00:05, 202 10:00:50, 102 10:01:10, 203 10:36:00
+    expect(bow.intervals.map((interval) => [interval.fromSideNumber, interval.toSideNumber, interval.seconds])).toEqual([
+      ['101', '202', 45],
+      ['202', '102', 20],
+      ['102', '203', 2090],
+    ]);
+    expect(bow.spread).toEqual({ shortestS: 20, meanS: 718.333, longestS: 2090 }); // 2155 / 3 = 718.333…
+    expect(waist.intervals).toEqual([]);
+  });
+
+  it('judges each launch against the cycle window', () => {
+    const verdicts = report.catapults.flatMap((catapult) => catapult.launches).map((line) => [line.sideNumber, line.inWindow]);
+    expect(verdicts).toEqual([
+      ['101', true],
+      ['102', true],
+      ['202', true],
+      ['203', false],
+      ['201', null],
+      ['301', null],
+    ]);
+  });
+
+  it('lists the suspend, the down aircraft with its spare, and the override with who launched', () => {
+    expect(report.suspends).toEqual([
+      { slotId: 5, sideNumber: '203', squadronCode: 'BRH', catapultNumber: 2, at: t('10:01:00'), reason: 'Launch bar not seated', by: 'Sam Falkner', resumedAt: t('10:02:00') },
+    ]);
+    expect(report.downs).toEqual([
+      { slotId: 3, sideNumber: '201', squadronCode: 'BRH', catapultNumber: 2, at: t('10:00:30'), by: HANDLER, spare: { slotId: 4, sideNumber: '202', squadronCode: 'BRH' } },
+    ]);
+    expect(report.overrides).toEqual([
+      { slotId: 2, sideNumber: '102', squadronCode: 'TDC', catapultNumber: 1, launchedAt: t('10:01:10'), reason: 'Crosswind checked by hand', by: 'Lia Okonkwo' },
+    ]);
+  });
+
+  it('sums the figures for the cycle and per squadron', () => {
+    expect(report.totals).toEqual({ aircraft: 7, launched: 4, onTime: 3, outsideWindow: 1, suspends: 1, down: 1, overrides: 1, scratched: 2 });
+    expect(report.squadrons).toEqual([
+      { squadronId: 2, squadronCode: 'BRH', squadronName: 'Brass Herons', aircraft: 3, launched: 2, onTime: 1, outsideWindow: 1, suspends: 1, down: 1, overrides: 0, scratched: 0 },
+      { squadronId: 3, squadronCode: 'NJR', squadronName: 'Nightjars', aircraft: 1, launched: 0, onTime: 0, outsideWindow: 0, suspends: 0, down: 0, overrides: 0, scratched: 1 },
+      { squadronId: 1, squadronCode: 'TDC', squadronName: 'Tidecallers', aircraft: 3, launched: 2, onTime: 2, outsideWindow: 0, suspends: 0, down: 0, overrides: 1, scratched: 1 },
+    ]);
+  });
+
+  it('records when the cycle started, closed, and launched first and last', () => {
+    expect(report).toMatchObject({
+      startedAt: t('09:58:00'),
+      closedAt: t('10:40:00'),
+      firstLaunchAt: t('10:00:05'),
+      lastLaunchAt: t('10:36:00'),
+    });
+    expect(report.cycle).toMatchObject({ id: 1, number: 12, slotCount: 7, launchedCount: 4 });
+  });
+});

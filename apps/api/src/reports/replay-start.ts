@@ -1,0 +1,34 @@
+import type { CycleView } from '@catline/contracts';
+import type { Cycle } from '../cycles/entities/cycle.entity.js';
+import type { LineupState } from '../lineup/lineup-state.js';
+
+const conditionsOf = (view: CycleView): Partial<Cycle> => ({
+  plannedLaunchAt: new Date(view.plannedLaunchAt),
+  windowStartAt: new Date(view.windowStartAt),
+  windowEndAt: new Date(view.windowEndAt),
+  shipCourseDeg: view.shipCourseDeg,
+  shipSpeedKt: view.shipSpeedKt,
+  trueWindFromDeg: view.trueWindFromDeg,
+  trueWindSpeedKt: view.trueWindSpeedKt,
+  temperatureC: view.temperatureC,
+  pressureHpa: view.pressureHpa,
+  weatherCase: view.weatherCase,
+  night: view.night,
+  landingAreaInUse: view.landingAreaInUse,
+});
+
+/**
+ * The cycle as it stood at version 0, just created: no aircraft (each one enters through a logged
+ * change), planning, under the conditions the log first records (every change carries the cycle view,
+ * so the first change's view holds them). The ship and its catapults are taken as they are now: the
+ * log records a catapult's status only when a change of this cycle touched it.
+ */
+export function versionZeroState(state: LineupState, firstRecordedCycle: CycleView | undefined): LineupState {
+  const cycle: Cycle = {
+    ...state.cycle,
+    ...(firstRecordedCycle ? conditionsOf(firstRecordedCycle) : {}),
+    state: 'planning',
+    version: 0,
+  };
+  return { ...state, cycle, slots: [] };
+}

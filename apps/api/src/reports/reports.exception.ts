@@ -1,0 +1,14 @@
+import { HttpStatus } from '@nestjs/common';
+import { DomainException } from '../common/errors/domain.exception.js';
+
+export type ReportRefusalCode = 'invalid_date_range';
+
+const STATUS: Record<ReportRefusalCode, HttpStatus> = {
+  invalid_date_range: HttpStatus.BAD_REQUEST,
+};
+
+export class ReportsException extends DomainException {
+  constructor(code: ReportRefusalCode, message: string) {
+    super(STATUS[code], code, message);
+  }
+}

@@ -1,0 +1,14 @@
+import { Module } from '@nestjs/common';
+import { LineupModule } from '../lineup/lineup.module.js';
+import { CycleRecordReader } from './cycle-record.reader.js';
+import { CycleReportsController } from './cycle-reports.controller.js';
+import { CycleReportsService } from './cycle-reports.service.js';
+import { ShotCountsController } from './shot-counts.controller.js';
+import { ShotCountsService } from './shot-counts.service.js';
+
+@Module({
+  imports: [LineupModule],
+  controllers: [CycleReportsController, ShotCountsController],
+  providers: [CycleRecordReader, CycleReportsService, ShotCountsService],
+})
+export class ReportsModule {}

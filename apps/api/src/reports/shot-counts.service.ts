@@ -1,0 +1,70 @@
+import type { ShotCounts } from '@catline/contracts';
+import { Injectable } from '@nestjs/common';
+import { InjectDataSource } from '@nestjs/typeorm';
+import { DataSource } from 'typeorm';
+import { Aircraft } from '../aircraft/entities/aircraft.entity.js';
+import { Slot } from '../lineup/entities/slot.entity.js';
+import { Catapult } from '../ships/entities/catapult.entity.js';
+import { toCsv, type CsvFile } from './csv-file.js';
+import type { DayRange } from './day-range.js';
+
+export const SHOT_COUNT_COLUMNS = ['kind', 'ship', 'catapult', 'side_number', 'type', 'squadron', 'launches', 'lifetime_shots'] as const;
+
+const bySide = (a: Aircraft, b: Aircraft) => a.sideNumber.localeCompare(b.sideNumber, 'en', { numeric: true });
+
+/** Maintenance's counts of catapult launches per airframe and per catapult, from the recorded launch times. */
+@Injectable()
+export class ShotCountsService {
+  constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
+
+  async counts(range: DayRange): Promise<ShotCounts> {
+    const manager = this.dataSource.manager;
+    const [perAircraft, perCatapult, aircraft, catapults] = await Promise.all([
+      this.launchesBy(range, 'aircraftId'),
+      this.launchesBy(range, 'catapultId'),
+      manager.find(Aircraft, { relations: { type: true, squadron: true } }),
+      manager.find(Catapult, { relations: { ship: true }, order: { shipId: 'ASC', number: 'ASC' } }),
+    ]);
+    return {
+      from: range.from,
+      to: range.to,
+      totalLaunches: [...perAircraft.values()].reduce((sum, count) => sum + count, 0),
+      airframes: aircraft.sort(bySide).map((plane) => ({
+        aircraftId: plane.id,
+        sideNumber: plane.sideNumber,
+        typeDesignation: plane.type.designation,
+        squadronCode: plane.squadron.code,
+        launches: perAircraft.get(plane.id) ?? 0,
+        lifetimeShots: plane.catapultShots,
+      })),
+      catapults: catapults.map((catapult) => ({
+        catapultId: catapult.id,
+        shipName: catapult.ship.name,
+        number: catapult.number,
+        launches: perCatapult.get(catapult.id) ?? 0,
+        lifetimeShots: catapult.shotCount,
+      })),
+    };
+  }
+
+  async csv(range: DayRange): Promise<CsvFile> {
+    const counts = await this.counts(range);
+    const rows = [
+      ...counts.airframes.map((row) => ['airframe', null, null, row.sideNumber, row.typeDesignation, row.squadronCode, row.launches, row.lifetimeShots]),
+      ...counts.catapults.map((row) => ['catapult', row.shipName, row.number, null, null, null, row.launches, row.lifetimeShots]),
+    ];
+    return { fileName: `shot-counts-${range.from}-to-${range.to}.csv`, content: toCsv(SHOT_COUNT_COLUMNS, rows) };
+  }
+
+  /** Launches recorded inside the range, counted per aircraft or per catapult. */
+  private async launchesBy(range: DayRange, key: 'aircraftId' | 'catapultId'): Promise<Map<number, number>> {
+    const rows = await this.dataSource.manager
+      .createQueryBuilder(Slot, 'slot')
+      .select(`slot.${key}`, 'id')
+      .addSelect('COUNT(*)', 'launches')
+      .where('slot.launchedAt >= :start AND slot.launchedAt < :end', { start: range.start, end: range.end })
+      .groupBy(`slot.${key}`)
+      .getRawMany<{ id: number | string; launches: number | string }>();
+    return new Map(rows.map((row) => [Number(row.id), Number(row.launches)]));
+  }
+}

@@ -1,0 +1,5 @@
+import { ReplayScreen } from '../../features/reports/components/replay-screen.js';
+
+export function ReplayRoute() {
+  return <ReplayScreen />;
+}

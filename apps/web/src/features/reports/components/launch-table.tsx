@@ -1,0 +1,42 @@
+import { Badge, Text } from '@chakra-ui/react';
+import type { CycleReport, ReportLaunch } from '@catline/contracts';
+import { SlotStatusBadge } from '../../../components/slot-status-badge.js';
+import { formatOptionalClock } from '../../../lib/format.js';
+import { formatDelta, timelineLaunches } from '../report-model.js';
+import { ReportTable, type ReportColumn } from './report-table.js';
+
+export const LAUNCH_TABLE_CAPTION = 'Launches, planned against actual';
+
+function WindowVerdict({ inWindow }: { inWindow: boolean | null }) {
+  if (inWindow === null) return <Text color="fg.muted">—</Text>;
+  return (
+    <Badge colorPalette={inWindow ? 'go' : 'nogo'} variant="surface">
+      {inWindow ? 'Inside' : 'Outside'}
+    </Badge>
+  );
+}
+
+const columns: ReportColumn<ReportLaunch>[] = [
+  { header: 'Cat', cell: (launch) => launch.catapultNumber, numeric: true },
+  { header: 'Side', cell: (launch) => <Text fontWeight="700">{launch.sideNumber}</Text> },
+  { header: 'Type', cell: (launch) => launch.typeDesignation },
+  { header: 'Sqn', cell: (launch) => launch.squadronCode },
+  { header: 'Planned', cell: (launch) => formatOptionalClock(launch.plannedAt), numeric: true },
+  { header: 'Launched', cell: (launch) => formatOptionalClock(launch.launchedAt), numeric: true },
+  { header: 'Against plan', cell: (launch) => formatDelta(launch.deltaS), numeric: true },
+  { header: 'Window', cell: (launch) => <WindowVerdict inWindow={launch.inWindow} /> },
+  { header: 'Status', cell: (launch) => <SlotStatusBadge status={launch.status} /> },
+];
+
+/** The timeline's launches as a table, in the chart's order: by catapult, then by launch. */
+export function LaunchTable({ report }: { report: CycleReport }) {
+  return (
+    <ReportTable
+      caption={LAUNCH_TABLE_CAPTION}
+      rows={timelineLaunches(report)}
+      columns={columns}
+      rowKey={(launch) => launch.slotId}
+      empty="No aircraft was planned on a catapult in this cycle."
+    />
+  );
+}

@@ -3,10 +3,10 @@ import { Badge, Box, Flex, HStack, Text } from '@chakra-ui/react';
 import { useSortable } from '@dnd-kit/sortable';
 import { CSS } from '@dnd-kit/utilities';
 import type { SlotView } from '@catline/contracts';
-import { GoBadge } from '../../../components/go-badge.js';
+import { MarginGo } from '../../../components/go-badge.js';
 import { GripIcon } from '../../../components/icons.js';
 import { SLOT_STATUS_LABELS, SlotStatusBadge } from '../../../components/slot-status-badge.js';
-import { formatOptionalClock, formatPounds, formatSignedKnots } from '../../../lib/format.js';
+import { formatOptionalClock, formatPounds } from '../../../lib/format.js';
 import { slotItemId } from '../hooks/use-lineup-drag.js';
 
 /** What a slot card shows: who, what, how heavy, when, and whether the figures are go. */
@@ -68,12 +68,7 @@ export function SlotCardBody({ slot, lifted = false, movable = false }: { slot: 
               </Text>
             )}
           </Text>
-          <HStack gap="1.5">
-            <Text textStyle="figure" color={figures.go ? 'go.fg' : 'nogo.fg'} title="Launch margin">
-              {formatSignedKnots(figures.marginKt)}
-            </Text>
-            <GoBadge go={figures.go} />
-          </HStack>
+          <MarginGo figures={figures} />
         </Flex>
       )}
     </Box>

@@ -1,13 +1,13 @@
 import { Button, Stack, Text } from '@chakra-ui/react';
 import { errorMessage } from '../../../lib/api-error.js';
-import { useCsvDownload } from '../api/download-csv.js';
+import { useFileDownload } from '../../../lib/use-file-download.js';
 
 /** Fetches a CSV export with the person's token and saves it; a refusal is said beside the button. */
 export function CsvButton({ path, label }: { path: string; label: string }) {
-  const download = useCsvDownload();
+  const download = useFileDownload(path, 'catline-export.csv');
   return (
     <Stack gap="1" align="flex-start">
-      <Button size="sm" variant="outline" loading={download.isPending} onClick={() => download.mutate(path)}>
+      <Button size="sm" variant="outline" loading={download.isPending} onClick={() => download.mutate()}>
         {label}
       </Button>
       {download.isError && (

@@ -1,8 +1,8 @@
 import { Badge, Box, Flex, HStack, SimpleGrid, Stack, Text } from '@chakra-ui/react';
 import type { LaneView, LineupSnapshot, SlotView } from '@catline/contracts';
-import { GoBadge } from '../../../components/go-badge.js';
+import { MarginGo } from '../../../components/go-badge.js';
 import { SlotStatusBadge } from '../../../components/slot-status-badge.js';
-import { formatOptionalClock, formatSignedKnots } from '../../../lib/format.js';
+import { formatOptionalClock } from '../../../lib/format.js';
 import { outOfLineup } from '../replay-model.js';
 
 /** One aircraft as the lineup held it at the step; the ones the step changed are marked. */
@@ -36,12 +36,7 @@ function ReplaySlot({ slot, changed }: { slot: SlotView; changed: boolean }) {
           {slot.launchedAt ? `Off ${formatOptionalClock(slot.launchedAt)}` : `Proj. ${formatOptionalClock(slot.projectedLaunchAt)}`}
         </Text>
         {figures && (
-          <HStack gap="1.5">
-            <Text textStyle="figure" color={figures.go ? 'go.fg' : 'nogo.fg'} title="Launch margin">
-              {formatSignedKnots(figures.marginKt)}
-            </Text>
-            <GoBadge go={figures.go} />
-          </HStack>
+          <MarginGo figures={figures} />
         )}
       </Flex>
     </Box>

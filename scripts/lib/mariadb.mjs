@@ -5,10 +5,24 @@ import { ensureDebianPackages } from './debian.mjs';
 import { read, root, run, sleep, step } from './run.mjs';
 
 const dataRoot = path.join(root, '.data');
-const dataDir = path.join(dataRoot, 'mariadb');
-const socket = path.join(dataRoot, 'mysqld.sock');
 const configFile = path.join(root, 'scripts/mariadb/catline.cnf');
 const isRoot = process.getuid?.() === 0;
+
+/**
+ * The files of one MariaDB server of the project's, all under .data/: the private one that `npm start`
+ * and `npm test` share is `mariadbServer()`; the reliability tests stop and start one of their own.
+ */
+export function mariadbServer(name = 'mariadb') {
+  const suffix = name === 'mariadb' ? '' : name.replace(/^mariadb/, '');
+  return {
+    dataDir: path.join(dataRoot, name),
+    socket: path.join(dataRoot, `mysqld${suffix}.sock`),
+    pidFile: path.join(dataRoot, `${name}.pid`),
+    logFile: path.join(dataRoot, `${name}.err`),
+  };
+}
+
+const privateServer = mariadbServer();
 
 function binary(name) {
   const found = ['/usr/sbin', '/usr/bin'].map((dir) => path.join(dir, name)).find((file) => existsSync(file));
@@ -16,17 +30,67 @@ function binary(name) {
   return found;
 }
 
-const adminArgs = ['--no-defaults', `--socket=${socket}`, '-uroot'];
+const adminArgs = (server) => ['--no-defaults', `--socket=${server.socket}`, '-uroot'];
 
-function isRunning() {
-  return existsSync(socket) && read(binary('mariadb-admin'), [...adminArgs, 'ping']) !== null;
+export function isMariaDBRunning(server = privateServer) {
+  return existsSync(server.socket) && read(binary('mariadb-admin'), [...adminArgs(server), 'ping']) !== null;
 }
 
-function sql(statements) {
-  run(binary('mariadb'), [...adminArgs, '-e', statements]);
+function sql(server, statements) {
+  run(binary('mariadb'), [...adminArgs(server), '-e', statements]);
 }
 
 const quote = (value) => `'${String(value).replace(/\\/g, '\\\\').replace(/'/g, "\\'")}'`;
+
+/** Starts a server on 127.0.0.1:`port` (initialising its data folder when needed) and waits until it answers. */
+export async function startMariaDB(server, port) {
+  if (!existsSync(path.join(server.dataDir, 'mysql'))) {
+    step(`Initialising a private MariaDB in ${path.relative(root, server.dataDir)}/`);
+    mkdirSync(server.dataDir, { recursive: true });
+    run(binary('mariadb-install-db'), [
+      '--no-defaults',
+      ...(isRoot ? ['--user=root'] : []),
+      `--datadir=${server.dataDir}`,
+      '--auth-root-authentication-method=normal',
+      '--skip-test-db',
+    ], { stdio: ['ignore', 'ignore', 'inherit'] });
+  }
+  step(`Starting MariaDB on 127.0.0.1:${port}`);
+  const child = spawn(binary('mariadbd'), [
+    `--defaults-file=${configFile}`,
+    ...(isRoot ? ['--user=root'] : []),
+    `--datadir=${server.dataDir}`,
+    `--socket=${server.socket}`,
+    `--port=${port}`,
+    `--pid-file=${server.pidFile}`,
+    `--log-error=${server.logFile}`,
+  ], { detached: true, stdio: 'ignore' });
+  child.unref();
+  for (let waited = 0; !isMariaDBRunning(server); waited += 200) {
+    if (waited > 30_000) throw new Error(`MariaDB did not start; see ${server.logFile}`);
+    await sleep(200);
+  }
+}
+
+/** Makes sure the application database and user exist on the server. */
+export function grantAppUser(server, env) {
+  const user = quote(env.DB_USER);
+  const password = quote(env.DB_PASSWORD);
+  // The app user owns every database named catline*, so tests can create fresh ones of their own.
+  sql(server, [
+    `CREATE DATABASE IF NOT EXISTS \`${env.DB_NAME}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci`,
+    ...['localhost', '127.0.0.1'].flatMap((host) => [
+      `CREATE USER IF NOT EXISTS ${user}@'${host}' IDENTIFIED BY ${password}`,
+      `ALTER USER ${user}@'${host}' IDENTIFIED BY ${password}`,
+      `GRANT ALL PRIVILEGES ON \`catline%\`.* TO ${user}@'${host}'`,
+    ]),
+  ].join(';\n'));
+}
+
+/** A clean shutdown; waits until the server has stopped. */
+export function stopMariaDB(server) {
+  run(binary('mariadb-admin'), [...adminArgs(server), 'shutdown']);
+}
 
 /**
  * Starts the project's private MariaDB on loopback (installing and initialising it when needed)
@@ -35,56 +99,21 @@ const quote = (value) => `'${String(value).replace(/\\/g, '\\\\').replace(/'/g, 
 export async function ensurePrivateMariaDB(env) {
   ensureDebianPackages(['mariadb-server', 'mariadb-client']);
   let started = false;
-  if (!isRunning()) {
-    if (!existsSync(path.join(dataDir, 'mysql'))) {
-      step(`Initialising a private MariaDB in ${path.relative(root, dataDir)}/`);
-      mkdirSync(dataDir, { recursive: true });
-      run(binary('mariadb-install-db'), [
-        '--no-defaults',
-        ...(isRoot ? ['--user=root'] : []),
-        `--datadir=${dataDir}`,
-        '--auth-root-authentication-method=normal',
-        '--skip-test-db',
-      ], { stdio: ['ignore', 'ignore', 'inherit'] });
-    }
-    step(`Starting MariaDB on 127.0.0.1:${env.DB_PORT}`);
-    const server = spawn(binary('mariadbd'), [
-      `--defaults-file=${configFile}`,
-      ...(isRoot ? ['--user=root'] : []),
-      `--datadir=${dataDir}`,
-      `--socket=${socket}`,
-      `--port=${env.DB_PORT}`,
-      `--pid-file=${path.join(dataRoot, 'mariadb.pid')}`,
-      `--log-error=${path.join(dataRoot, 'mariadb.err')}`,
-    ], { detached: true, stdio: 'ignore' });
-    server.unref();
+  if (!isMariaDBRunning()) {
+    await startMariaDB(privateServer, env.DB_PORT);
     started = true;
-    for (let waited = 0; !isRunning(); waited += 200) {
-      if (waited > 30_000) throw new Error(`MariaDB did not start; see ${path.join(dataRoot, 'mariadb.err')}`);
-      await sleep(200);
-    }
   } else {
     step(`Reusing the private MariaDB already running on 127.0.0.1:${env.DB_PORT}`);
   }
-  const user = quote(env.DB_USER);
-  const password = quote(env.DB_PASSWORD);
-  // The app user owns every database named catline*, so tests can create fresh ones of their own.
-  sql([
-    `CREATE DATABASE IF NOT EXISTS \`${env.DB_NAME}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci`,
-    ...['localhost', '127.0.0.1'].flatMap((host) => [
-      `CREATE USER IF NOT EXISTS ${user}@'${host}' IDENTIFIED BY ${password}`,
-      `ALTER USER ${user}@'${host}' IDENTIFIED BY ${password}`,
-      `GRANT ALL PRIVILEGES ON \`catline%\`.* TO ${user}@'${host}'`,
-    ]),
-  ].join(';\n'));
+  grantAppUser(privateServer, env);
   return started;
 }
 
 export function stopPrivateMariaDB() {
-  if (!isRunning()) {
+  if (!isMariaDBRunning()) {
     console.log('The private MariaDB is not running.');
     return;
   }
-  run(binary('mariadb-admin'), [...adminArgs, 'shutdown']);
+  stopMariaDB(privateServer);
   console.log('The private MariaDB has stopped.');
 }

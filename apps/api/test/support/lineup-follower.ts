@@ -1,0 +1,119 @@
+import { applyLineupChanges, applyLineupPatch, type JoinCycleResult, type LineupChange, type LineupSnapshot } from '@catline/contracts';
+import { io } from 'socket.io-client';
+import type { ClientSocket } from './socket-client.js';
+
+export interface FollowerOptions {
+  url: string;
+  origin: string;
+  token: string;
+  cycleId: number;
+  /** Reconnect after losing the server, as the web app does (off for specs that restart nothing). */
+  reconnect?: boolean;
+}
+
+/**
+ * A client that holds a cycle's lineup the way the web app does: it joins the room, applies each
+ * broadcast change in version order, and after a reconnect or a gap rejoins from the version it holds
+ * (replay or snapshot). It records gaps, and refused or unanswered joins.
+ */
+export class LineupFollower {
+  readonly socket: ClientSocket;
+  held: LineupSnapshot | null = null;
+  readonly problems: string[] = [];
+  /** When each resync after a reconnect completed (ms since the epoch). */
+  readonly resyncedAt: number[] = [];
+  /** Versions skipped in the broadcast (each answered by a rejoin from the version held, as the web app does). */
+  gaps = 0;
+  private joined = false;
+  private joinedOnThisConnection = false;
+  private buffered: LineupChange[] = [];
+
+  constructor(private readonly options: FollowerOptions) {
+    this.socket = io(options.url, {
+      transports: ['websocket'],
+      forceNew: true,
+      reconnection: options.reconnect ?? false,
+      reconnectionDelay: 200,
+      reconnectionDelayMax: 1_000,
+      auth: { token: options.token },
+      extraHeaders: { origin: options.origin },
+    });
+    this.socket.on('lineup:change', (change) => this.receive(change));
+    this.socket.on('connect', () => void this.join());
+    this.socket.on('disconnect', () => {
+      this.joined = false;
+      this.joinedOnThisConnection = false;
+    });
+  }
+
+  /** Resolves once the first join has answered. */
+  async ready(timeoutMs = 15_000): Promise<this> {
+    const deadline = Date.now() + timeoutMs;
+    while (!this.held) {
+      if (Date.now() > deadline) throw new Error(`Follower never joined cycle ${this.options.cycleId}: ${this.problems.join('; ')}`);
+      await new Promise((resolve) => setTimeout(resolve, 20));
+    }
+    return this;
+  }
+
+  get version(): number {
+    return this.held?.version ?? -1;
+  }
+
+  close(): void {
+    this.socket.disconnect();
+  }
+
+  private async join(): Promise<void> {
+    const reconnected = this.held !== null && this.socket.connected && !this.joinedOnThisConnection;
+    this.joinedOnThisConnection = true;
+    let result: JoinCycleResult;
+    try {
+      result = await this.socket.timeout(10_000).emitWithAck('cycle:join', {
+        cycleId: this.options.cycleId,
+        ...(this.held ? { sinceVersion: this.held.version } : {}),
+      });
+    } catch (error) {
+      this.problems.push(`join got no answer: ${String(error)}`);
+      return;
+    }
+    if (!result.ok) {
+      this.problems.push(`join refused: ${result.code} ${result.message}`);
+      return;
+    }
+    if (result.mode === 'snapshot') this.held = result.snapshot;
+    else this.held = applyLineupChanges(this.held!, result.changes);
+    this.joined = true;
+    const buffered = this.buffered.splice(0);
+    for (const change of buffered) this.receive(change);
+    if (reconnected) this.resyncedAt.push(Date.now());
+  }
+
+  private receive(change: LineupChange): void {
+    if (!this.joined || !this.held) {
+      this.buffered.push(change);
+      return;
+    }
+    if (change.version <= this.held.version) return;
+    if (change.version !== this.held.version + 1) {
+      this.gaps += 1;
+      this.joined = false;
+      this.buffered.push(change);
+      void this.join();
+      return;
+    }
+    this.held = applyLineupPatch(this.held, change.version, change.patch);
+  }
+}
+
+/** Polls until every follower holds `version`, failing after `timeoutMs` with who lags. */
+export async function allAt(followers: readonly LineupFollower[], version: number, timeoutMs: number): Promise<void> {
+  const deadline = Date.now() + timeoutMs;
+  while (followers.some((follower) => follower.version !== version)) {
+    if (Date.now() > deadline) {
+      const lagging = followers.map((follower) => follower.version).filter((held) => held !== version);
+      throw new Error(`${lagging.length} clients are not at version ${version} (they hold ${lagging.slice(0, 5).join(', ')})`);
+    }
+    await new Promise((resolve) => setTimeout(resolve, 25));
+  }
+}

@@ -1,0 +1,224 @@
+import { applyLineupPatch, type LineupCommandResult, type LineupSnapshot, type SlotView } from '@catline/contracts';
+import fc from 'fast-check';
+import { type CommandOutcome, send } from './random-lineup-commands.js';
+
+/**
+ * The model of fast-check's model-based run: the lineup as the rules say it must be. It starts from a
+ * fetched snapshot; each command predicts the server's answer (accepted, or refused with 409/400) and
+ * the lanes after it from the rules alone, then takes the accepted change's patch.
+ */
+export interface LineupModel {
+  snapshot: LineupSnapshot;
+  /** Every answer, for the run's own bookkeeping (the change log check). */
+  outcomes: CommandOutcome[];
+}
+
+export interface LineupReal {
+  url: string;
+  tokens: readonly string[];
+}
+
+type Lanes = Map<number, number[]>;
+
+const MAX_DOWN = 4;
+
+const lanesOf = (snapshot: LineupSnapshot): Lanes => new Map(snapshot.lanes.map((lane) => [lane.catapultId, [...lane.slotIds]]));
+
+const sameIds = (a: readonly number[], b: readonly number[]) => a.length === b.length && a.every((id, i) => id === b[i]);
+
+const byId = (snapshot: LineupSnapshot) => [...snapshot.slots].sort((a, b) => a.id - b.id);
+
+/** Expected answer: 200 with the lanes after it, or the refusal status. */
+type Prediction = { status: 200; lanes: Lanes; down?: number } | { status: 400 | 409 };
+
+abstract class ModelCommand implements fc.AsyncCommand<LineupModel, LineupReal> {
+  constructor(readonly handler: number) {}
+
+  check(_model: Readonly<LineupModel>): boolean {
+    return true;
+  }
+
+  protected abstract request(model: LineupModel): { path: string; body: object; prediction: Prediction };
+
+  async run(model: LineupModel, real: LineupReal): Promise<void> {
+    const { path, body, prediction } = this.request(model);
+    const outcome = await send(real.url, real.tokens[this.handler], { path, body }, this.handler);
+    model.outcomes.push(outcome);
+    const answer = `${this.toString()} answered ${outcome.status} ${JSON.stringify(outcome.body)}`;
+    if (outcome.status !== prediction.status) throw new Error(`expected ${prediction.status}: ${answer}`);
+    if (prediction.status !== 200) return;
+
+    const result = outcome.body as LineupCommandResult;
+    if (result.version !== model.snapshot.version + 1) throw new Error(`expected version ${model.snapshot.version + 1}: ${answer}`);
+    model.snapshot = applyLineupPatch(model.snapshot, result.version, result.change.patch);
+    for (const lane of model.snapshot.lanes) {
+      const expected = prediction.lanes.get(lane.catapultId)!;
+      if (!sameIds(lane.slotIds, expected)) throw new Error(`cat ${lane.number} holds ${lane.slotIds}, the rules say ${expected}: ${answer}`);
+    }
+    if (prediction.down !== undefined && model.snapshot.slots.find((slot) => slot.id === prediction.down)?.status !== 'down') {
+      throw new Error(`slot ${prediction.down} is not down: ${answer}`);
+    }
+  }
+}
+
+class MoveCommand extends ModelCommand {
+  constructor(
+    handler: number,
+    private readonly slotPick: number,
+    /** -1 for the deck pool, otherwise a lane by its order in the snapshot. */
+    private readonly target: number,
+    private readonly placePick: number,
+    private readonly staleSlot: boolean,
+    private readonly staleLane: boolean,
+  ) {
+    super(handler);
+  }
+
+  protected request(model: LineupModel) {
+    const { snapshot } = model;
+    const slots = byId(snapshot);
+    const slot = slots[this.slotPick % slots.length];
+    const slotVersion = this.staleSlot ? slot.version + 1 : slot.version;
+    const path = `/api/cycles/${snapshot.cycle.id}/lineup/moves`;
+    const lanes = lanesOf(snapshot);
+    const source = slot.catapultId === null ? undefined : lanes.get(slot.catapultId);
+    const refused = (status: 400 | 409) => ({ status }) as const;
+
+    if (this.target < 0) {
+      const body = { slotId: slot.id, slotVersion, toCatapultId: null, toIndex: 0, targetLaneOrder: [] };
+      if (this.staleSlot || slot.status !== 'planned' || !source) return { path, body, prediction: refused(409) };
+      source.splice(source.indexOf(slot.id), 1);
+      return { path, body, prediction: { status: 200 as const, lanes } };
+    }
+    const lane = snapshot.lanes[this.target % snapshot.lanes.length];
+    const order = lanes.get(lane.catapultId)!;
+    const seen = this.staleLane ? [...order.slice(1), slots[(this.slotPick + 1) % slots.length].id] : [...order];
+    const others = order.filter((id) => id !== slot.id);
+    const toIndex = this.placePick % (others.length + 2);
+    const body = { slotId: slot.id, slotVersion, toCatapultId: lane.catapultId, toIndex, targetLaneOrder: seen };
+    if (this.staleSlot || slot.status !== 'planned' || !sameIds(seen, order)) return { path, body, prediction: refused(409) };
+    if (toIndex > others.length) return { path, body, prediction: refused(400) };
+    const next = [...others];
+    next.splice(toIndex, 0, slot.id);
+    if (sameIds(next, order)) return { path, body, prediction: refused(409) };
+    if (source && source !== order) source.splice(source.indexOf(slot.id), 1);
+    lanes.set(lane.catapultId, next);
+    return { path, body, prediction: { status: 200 as const, lanes } };
+  }
+
+  override toString(): string {
+    return `move(handler ${this.handler}, slot #${this.slotPick}, to ${this.target < 0 ? 'pool' : `lane #${this.target}`} place #${this.placePick}${this.staleSlot ? ', stale slot' : ''}${this.staleLane ? ', stale lane' : ''})`;
+  }
+}
+
+class MarkDownCommand extends ModelCommand {
+  constructor(
+    handler: number,
+    private readonly slotPick: number,
+    private readonly stale: boolean,
+    private readonly withSpare: boolean,
+  ) {
+    super(handler);
+  }
+
+  /** Downs cannot be undone: past a few, every later command would meet a lineup with nothing left to move. */
+  override check(model: Readonly<LineupModel>): boolean {
+    return model.snapshot.slots.filter((slot) => slot.status === 'down').length < MAX_DOWN;
+  }
+
+  protected request(model: LineupModel) {
+    const { snapshot } = model;
+    const slots = byId(snapshot);
+    const slot = slots[this.slotPick % slots.length];
+    const spare = this.withSpare ? slots.find((candidate: SlotView) => candidate.status === 'planned' && candidate.catapultId === null && candidate.id !== slot.id) : undefined;
+    const path = `/api/cycles/${snapshot.cycle.id}/lineup/slots/${slot.id}/down`;
+    const body = { slotVersion: this.stale ? slot.version + 1 : slot.version, ...(spare ? { spareSlotId: spare.id } : {}) };
+    if (this.stale || slot.status !== 'planned' || (spare && slot.catapultId === null)) return { path, body, prediction: { status: 409 as const } };
+    const lanes = lanesOf(snapshot);
+    if (slot.catapultId !== null) {
+      const lane = lanes.get(slot.catapultId)!;
+      if (spare) lane.splice(lane.indexOf(slot.id), 1, spare.id);
+      else lane.splice(lane.indexOf(slot.id), 1);
+    }
+    return { path, body, prediction: { status: 200 as const, lanes, down: slot.id } };
+  }
+
+  override toString(): string {
+    return `down(handler ${this.handler}, slot #${this.slotPick}${this.withSpare ? ', spare' : ''}${this.stale ? ', stale' : ''})`;
+  }
+}
+
+class CatapultStatusCommand extends ModelCommand {
+  constructor(
+    handler: number,
+    private readonly lanePick: number,
+    private readonly stale: boolean,
+  ) {
+    super(handler);
+  }
+
+  protected request(model: LineupModel) {
+    const { snapshot } = model;
+    const lane = snapshot.lanes[this.lanePick % snapshot.lanes.length];
+    const other = lane.status === 'up' ? 'down' : 'up';
+    const path = `/api/cycles/${snapshot.cycle.id}/lineup/catapults/${lane.catapultId}/status`;
+    const body = { status: other, basisStatus: this.stale ? other : lane.status };
+    return { path, body, prediction: this.stale ? { status: 409 as const } : { status: 200 as const, lanes: lanesOf(snapshot) } };
+  }
+
+  override toString(): string {
+    return `catapult(handler ${this.handler}, lane #${this.lanePick}${this.stale ? ', stale' : ''})`;
+  }
+}
+
+class ApplyLineupCommand extends ModelCommand {
+  constructor(
+    handler: number,
+    /** Per slot (by id order): a lane by its order, or past the last lane for "leave it out". */
+    private readonly places: readonly number[],
+    private readonly stale: boolean,
+  ) {
+    super(handler);
+  }
+
+  protected request(model: LineupModel) {
+    const { snapshot } = model;
+    const current = lanesOf(snapshot);
+    const lanes: Lanes = new Map(snapshot.lanes.map((lane) => [lane.catapultId, []]));
+    byId(snapshot)
+      .filter((slot) => slot.status === 'planned')
+      .forEach((slot, i) => {
+        const place = this.places[i % this.places.length] % (snapshot.lanes.length + 1);
+        if (place < snapshot.lanes.length) lanes.get(snapshot.lanes[place].catapultId)!.push(slot.id);
+      });
+    const path = `/api/cycles/${snapshot.cycle.id}/lineup/suggestion/apply`;
+    const body = {
+      basisVersion: this.stale ? Math.max(0, snapshot.version - 1) : snapshot.version,
+      lanes: [...lanes].map(([catapultId, slotIds]) => ({ catapultId, slotIds })),
+    };
+    const unchanged = [...lanes].every(([catapultId, slotIds]) => sameIds(slotIds, current.get(catapultId)!));
+    if (this.stale || unchanged) return { path, body, prediction: { status: 409 as const } };
+    return { path, body, prediction: { status: 200 as const, lanes } };
+  }
+
+  override toString(): string {
+    return `apply(handler ${this.handler}, places ${this.places.slice(0, 8).join('')}…${this.stale ? ', stale' : ''})`;
+  }
+}
+
+/** fast-check's commands for a run by `handlers` handlers; downs are rare because they cannot be undone. */
+export function lineupModelCommands(handlers: number, maxCommands: number) {
+  const handler = fc.nat(handlers - 1);
+  const sometimes = fc.nat(4).map((n) => n === 0);
+  return fc.commands(
+    [
+      fc.oneof(
+        { weight: 40, arbitrary: fc.tuple(handler, fc.nat(), fc.integer({ min: -1, max: 3 }), fc.nat(), sometimes, sometimes).map((args) => new MoveCommand(...args)) },
+        { weight: 2, arbitrary: fc.tuple(handler, fc.nat(), sometimes, fc.boolean()).map((args) => new MarkDownCommand(...args)) },
+        { weight: 3, arbitrary: fc.tuple(handler, fc.nat(), sometimes).map((args) => new CatapultStatusCommand(...args)) },
+        { weight: 3, arbitrary: fc.tuple(handler, fc.array(fc.nat(), { minLength: 1, maxLength: 40 }), sometimes).map((args) => new ApplyLineupCommand(...args)) },
+      ),
+    ],
+    { maxCommands, size: 'max' },
+  );
+}

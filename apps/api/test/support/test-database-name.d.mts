@@ -1,0 +1,1 @@
+export function testDatabaseName(appDatabase: string): string;

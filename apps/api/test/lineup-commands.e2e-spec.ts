@@ -1,6 +1,6 @@
 import type { LineupChange, LineupCommandResult, LineupSnapshot } from '@catline/contracts';
 import type { INestApplication } from '@nestjs/common';
-import { applyChanges } from './support/apply-patch.js';
+import { applyLineupChanges } from '@catline/contracts';
 import { AIR_OPS, HANDLER, LineupDriver, OBSERVER, launchKey, pilot } from './support/lineup-fixtures.js';
 import { startTestApp } from './support/test-app.js';
 
@@ -302,7 +302,7 @@ describe('lineup commands', () => {
       'slot_added', 'slot_added', 'slot_added', 'slot_moved', 'slot_moved', 'slot_moved', 'conditions_changed',
     ]);
     expect(changes[4].summary).toBe('201 moved to cat 1, place 1');
-    const replayed = applyChanges(start, changes);
+    const replayed = applyLineupChanges(start, changes);
     expect(replayed).toEqual(await deck.snapshot(cycle.id));
     expect(replayed.slots.map((slot) => slot.id)).toEqual(slots.map((slot) => slot.id));
     expect((await changesOf(cycle.id, 5)).map((change) => change.version)).toEqual([6, 7]);

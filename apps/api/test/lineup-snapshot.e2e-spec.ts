@@ -24,7 +24,7 @@ import {
   type AircraftProfile,
 } from '@catline/launch-math';
 import type { INestApplication } from '@nestjs/common';
-import { applyChanges } from './support/apply-patch.js';
+import { applyLineupChanges } from '@catline/contracts';
 import { LineupDriver, OBSERVER } from './support/lineup-fixtures.js';
 import { startTestApp } from './support/test-app.js';
 
@@ -194,7 +194,7 @@ describe('lineup snapshot of the demo cycles', () => {
     expect(final.slots.find((slot) => slot.sideNumber === '104')!.status).toBe('down');
 
     const empty: LineupSnapshot = { cycle: final.cycle, lanes: [], pool: [], slots: [], lastLaunchAt: null, version: 0 };
-    const replayed = applyChanges(empty, changes);
+    const replayed = applyLineupChanges(empty, changes);
     const normal = (snapshot: LineupSnapshot) => ({
       ...snapshot,
       lanes: bySort(snapshot.lanes, (lane) => lane.catapultId),

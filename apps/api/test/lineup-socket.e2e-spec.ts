@@ -1,8 +1,7 @@
-import { ROLES, type LineupChange, type LineupCommandResult, type LineupSnapshot } from '@catline/contracts';
+import { ROLES, type LineupChange, type LineupCommandResult, type LineupSnapshot, applyLineupChanges } from '@catline/contracts';
 import type { INestApplication } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { JwtService } from '@nestjs/jwt';
-import { applyChanges } from './support/apply-patch.js';
 import { TEST_PASSWORD, createUser } from './support/fleet-fixtures.js';
 import { HANDLER, LineupDriver, OBSERVER, pilot } from './support/lineup-fixtures.js';
 import { demoEmail, signIn } from './support/sign-in.js';
@@ -101,7 +100,7 @@ describe('live lineup over socket.io', () => {
     await eventually(() => clients.every((client) => client.received.length >= 200), 30_000, 'all 50 clients to get 200 changes');
     for (const client of clients) {
       expect(versionsOf(client.received)).toEqual(range(start.version + 1, 200));
-      expect(applyChanges(client.snapshot, client.received)).toEqual(final);
+      expect(applyLineupChanges(client.snapshot, client.received)).toEqual(final);
     }
     expect(new Set(clients[0].received.map((change) => change.actor.name)).size).toBe(4);
   }, 120_000);
@@ -120,7 +119,7 @@ describe('live lineup over socket.io', () => {
     const result = await join(socket, { cycleId: cycle.id, sinceVersion: held.version });
     if (!result.ok || result.mode !== 'replay') throw new Error(`Rejoin answered ${JSON.stringify(result)}`);
     expect(versionsOf(result.changes)).toEqual(range(held.version + 1, 20));
-    expect(applyChanges(held, result.changes)).toEqual(await deck.snapshot(cycle.id));
+    expect(applyLineupChanges(held, result.changes)).toEqual(await deck.snapshot(cycle.id));
     expect(live).toEqual([]);
 
     await rotateLane(await deck.token(HANDLER), cycle.id, await deck.snapshot(cycle.id), 1, 1);

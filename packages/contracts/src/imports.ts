@@ -55,7 +55,3 @@ export interface LaunchTableImportRow extends LaunchTableRow {
 
 export type LaunchTablePreview = ImportPreview<LaunchTableImportRow>;
 
-/** Confirms an air plan preview into the cycle: the cycle version the preview was looked at against. */
-export interface ConfirmAirPlanRequest {
-  basisVersion: number;
-}

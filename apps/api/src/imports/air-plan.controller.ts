@@ -4,11 +4,11 @@ import { ApiBearerAuth, ApiProduces, ApiTags } from '@nestjs/swagger';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { Roles } from '../common/decorators/roles.decorator.js';
+import { BasisVersionDto } from '../cycles/dto/basis-version.dto.js';
 import { AIR_PLAN_TEMPLATE } from './air-plan-layout.js';
 import { AirPlanImports } from './air-plan-imports.service.js';
 import { CsvUpload } from './csv-upload.decorator.js';
 import type { UploadedCsv } from './csv-upload.js';
-import { ConfirmAirPlanDto } from './dto/confirm-air-plan.dto.js';
 
 @ApiTags('imports')
 @ApiBearerAuth()
@@ -43,7 +43,7 @@ export class AirPlanController {
   confirm(
     @Param('id', ParseIntPipe) id: number,
     @Param('uploadId', ParseIntPipe) uploadId: number,
-    @Body() body: ConfirmAirPlanDto,
+    @Body() body: BasisVersionDto,
     @CurrentUser() user: AuthenticatedUser,
   ): Promise<LineupCommandResult> {
     return this.imports.confirm(id, uploadId, body.basisVersion, user);

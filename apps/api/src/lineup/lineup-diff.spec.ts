@@ -1,5 +1,5 @@
 import type { CycleView, LaneView, LineupSnapshot, SlotView } from '@catline/contracts';
-import { applyPatch } from '../../test/support/apply-patch.js';
+import { applyLineupPatch } from '@catline/contracts';
 import { diffSnapshots } from './lineup-diff.js';
 
 const cycle = (version: number): CycleView => ({
@@ -134,7 +134,7 @@ describe('diffSnapshots', () => {
       slots: [slot(1, 1, 1, 1), slot(2, 1, 0, 1), slot(3, 2, 0, 1), slot(4, null, null)],
       lastLaunchAt: '2026-12-02T10:05:00.000Z',
     });
-    expect(applyPatch(before, 5, diffSnapshots(before, after))).toEqual(after);
+    expect(applyLineupPatch(before, 5, diffSnapshots(before, after))).toEqual(after);
   });
 
   it('is empty apart from the cycle between equal lineups', () => {

@@ -1,5 +1,5 @@
 import type { LineupChange, LineupSnapshot } from '@catline/contracts';
-import { applyPatch } from '../support/apply-patch.js';
+import { applyLineupPatch } from '@catline/contracts';
 import { type ClientSocket, connected, join, openSocket } from '../support/socket-client.js';
 import { CLUSTER_ORIGIN } from './api-cluster.js';
 
@@ -76,7 +76,7 @@ export class FollowingClient {
     this.highestSeen = Math.max(this.highestSeen, change.version);
     if (change.version <= this.snapshot.version) return;
     if (change.version === this.snapshot.version + 1) {
-      this.snapshot = applyPatch(this.snapshot, change.version, change.patch);
+      this.snapshot = applyLineupPatch(this.snapshot, change.version, change.patch);
       this.applied.push(change.version);
       if (fromReplay) this.replayed += 1;
       return;

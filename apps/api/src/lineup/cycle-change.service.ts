@@ -10,6 +10,7 @@ import { isDeadlock, retryOnDeadlock } from './deadlock-retry.js';
 import { CycleChange } from './entities/cycle-change.entity.js';
 import { diffSnapshots } from './lineup-diff.js';
 import { buildSnapshot } from './lineup-snapshot.builder.js';
+import { LineupStateCache, type KeptState } from './lineup-state.cache.js';
 import { LineupStateLoader, type LineupState } from './lineup-state.js';
 import { asLaunchDataRefusal } from './lineup.exception.js';
 
@@ -19,6 +20,11 @@ export interface ChangeDraft {
   summary: string;
   /** The request as accepted, kept with the change. */
   command: Record<string, unknown>;
+  /**
+   * True when the step wrote only through slot-writes (or set what it wrote on `state` itself), so
+   * `state` already equals the rows: the pipeline then skips reading the cycle again.
+   */
+  mirrored?: boolean;
 }
 
 /** A command already applied earlier (a repeated launch): answered with its original result, nothing written. */
@@ -46,6 +52,7 @@ export class CycleChangeService {
   constructor(
     @InjectDataSource() private readonly dataSource: DataSource,
     private readonly loader: LineupStateLoader,
+    private readonly cache: LineupStateCache,
     private readonly feed: LineupChangeFeed,
     private readonly clock: Clock,
   ) {}
@@ -74,21 +81,27 @@ export class CycleChangeService {
   ): Promise<LineupCommandResult> {
     let ticket: FeedTicket | undefined;
     let written = false;
+    let kept: KeptState | undefined;
     let outcome: LineupChange[] | RepeatedCommand;
     try {
       outcome = await this.dataSource.transaction('READ COMMITTED', async (manager) => {
         const locked = await this.loader.lockCycle(manager, cycleId);
         ticket = this.feed.reserve(cycleId, locked.version + 1);
-        let state = await this.loader.load(manager, locked);
+        const generation = this.cache.generation;
+        const cached = this.cache.take(locked);
+        let state = cached?.state ?? (await this.loader.load(manager, locked));
+        // Taken before the step: steps apply what they write to `state`.
+        let before = cached?.snapshot ?? buildSnapshot(state);
         const first = await step(manager, state);
         if ('repeatOf' in first) return first;
 
         const changes: LineupChange[] = [];
         const record = async (changeKind: ChangeKind, draft: ChangeDraft) => {
-          const before = buildSnapshot(state);
           await this.bumpVersion(manager, state.cycle);
-          state = await this.loader.load(manager, await manager.findOneByOrFail(Cycle, { id: cycleId }), state);
-          changes.push(await this.append(manager, state, changeKind, actor, draft, diffSnapshots(before, buildSnapshot(state))));
+          if (!draft.mirrored) state = await this.loader.load(manager, await manager.findOneByOrFail(Cycle, { id: cycleId }), state);
+          const after = buildSnapshot(state);
+          changes.push(await this.append(manager, state, changeKind, actor, draft, diffSnapshots(before, after)));
+          before = after;
         };
         await record(kind, first);
         if (followUp) {
@@ -96,12 +109,15 @@ export class CycleChangeService {
           if (next) await record(followUp.kind, next);
         }
         ticket.prepare(changes);
+        // Kept before the COMMIT: the next command on the cycle may hold its lock before this one hears back.
+        kept = this.cache.keep(state, before, generation);
         written = true;
         return changes;
       });
     } catch (error) {
       // Failing after every row was written means the COMMIT itself failed: it may have landed,
       // unless the server reports a deadlock (or a Galera certification failure), which rolled it back.
+      if (kept) this.cache.forget(kept);
       if (written && !isDeadlock(error)) ticket?.uncertain();
       else ticket?.rolledBack();
       throw error;
@@ -124,6 +140,7 @@ export class CycleChangeService {
     if (result.affected !== 1) {
       throw new Error(`Cycle ${cycle.id} moved past version ${cycle.version} while its row was locked`);
     }
+    cycle.version += 1;
   }
 
   private async append(

@@ -47,9 +47,10 @@ export class LineupCommandsService {
       const command = { type: 'move', ...request };
       if (request.toCatapultId === null) {
         if (slot.catapultId === null) throw new LineupException('no_change', `${side} is already in the deck pool.`);
+        const from = slot.catapultId;
         await updateSlot(manager, slot, { catapultId: null, position: null });
-        await placeSlots(manager, source, slot.catapultId);
-        return { summary: `${side} moved to the deck pool`, command };
+        await placeSlots(manager, source, from);
+        return { summary: `${side} moved to the deck pool`, command, mirrored: true };
       }
 
       const catapult = this.basis.catapult(state, request.toCatapultId);
@@ -69,7 +70,7 @@ export class LineupCommandsService {
       }
       if (slot.catapultId !== null && slot.catapultId !== catapult.id) await placeSlots(manager, source, slot.catapultId);
       await placeSlots(manager, target, catapult.id);
-      return { summary: `${side} moved to cat ${catapult.number}, place ${request.toIndex + 1}`, command };
+      return { summary: `${side} moved to cat ${catapult.number}, place ${request.toIndex + 1}`, command, mirrored: true };
     });
   }
 
@@ -95,7 +96,7 @@ export class LineupCommandsService {
         counts.push(`cat ${catapult.number} ×${next.length}`);
       }
       if (moved === 0) throw new LineupException('no_change', 'The lineup already is the suggested one.');
-      return { summary: `Suggested lineup applied: ${counts.join(', ')}`, command: { type: 'apply_suggestion', ...request } };
+      return { summary: `Suggested lineup applied: ${counts.join(', ')}`, command: { type: 'apply_suggestion', ...request }, mirrored: true };
     });
   }
 
@@ -109,27 +110,29 @@ export class LineupCommandsService {
         throw new LineupException('wrong_step', `${side} is ${slot.status}; it cannot be marked down.`);
       }
       const spare = request.spareSlotId === undefined ? null : this.spareFor(state, slot, request.spareSlotId);
+      const { catapultId, position } = slot;
       const now = this.clock.now();
       await updateSlot(manager, slot, {
         status: 'down',
         downAt: now,
         statusAt: now,
-        statusById: actor.id,
+        statusBy: actor,
         catapultId: null,
         position: null,
         replacedBySlotId: spare?.id ?? null,
       });
       const command = { type: 'mark_down', slotId, ...request };
-      if (slot.catapultId === null) return { summary: `${side} down`, command };
-      const catapult = this.basis.catapult(state, slot.catapultId);
+      if (catapultId === null) return { summary: `${side} down`, command, mirrored: true };
+      const catapult = this.basis.catapult(state, catapultId);
       if (!spare) {
-        await placeSlots(manager, laneSlots(state, catapult.id).filter((other) => other.id !== slot.id), catapult.id);
-        return { summary: `${side} down, out of cat ${catapult.number}`, command };
+        await placeSlots(manager, laneSlots(state, catapult.id), catapult.id);
+        return { summary: `${side} down, out of cat ${catapult.number}`, command, mirrored: true };
       }
-      await updateSlot(manager, spare, { catapultId: slot.catapultId, position: slot.position });
+      await updateSlot(manager, spare, { catapultId, position });
       return {
-        summary: `${side} down; spare ${spare.aircraft.sideNumber} takes cat ${catapult.number}, place ${(slot.position ?? 0) + 1}`,
+        summary: `${side} down; spare ${spare.aircraft.sideNumber} takes cat ${catapult.number}, place ${(position ?? 0) + 1}`,
         command,
+        mirrored: true,
       };
     });
   }
@@ -154,8 +157,13 @@ export class LineupCommandsService {
         .where('id = :id AND status = :seen', { id: catapult.id, seen: request.basisStatus })
         .execute();
       if (result.affected !== 1) throw new Error(`Cat ${catapult.number} changed status while its cycle was locked`);
+      catapult.status = request.status;
       const reason = request.reason ? `: ${request.reason}` : '';
-      return { summary: `Cat ${catapult.number} ${request.status}${reason}`, command: { type: 'catapult_status', catapultId, ...request } };
+      return {
+        summary: `Cat ${catapult.number} ${request.status}${reason}`,
+        command: { type: 'catapult_status', catapultId, ...request },
+        mirrored: true,
+      };
     });
   }
 

@@ -36,6 +36,9 @@ import type { LineupState } from './lineup-state.js';
 /** Slots that have left the lineup for good; every other slot with a catapult is in that catapult's lane. */
 const OUT_OF_LINEUP: readonly SlotStatus[] = ['down', 'scratched'];
 
+/** "9" before "10". One collator for all: localeCompare with options builds a new one per comparison. */
+const SIDE_NUMBER_ORDER = new Intl.Collator('en', { numeric: true });
+
 export const isInPool = (slot: Slot) => slot.catapultId === null && !OUT_OF_LINEUP.includes(slot.status);
 
 /** A lane's slots in launch order. */
@@ -206,7 +209,7 @@ export function buildSnapshot(state: LineupState): LineupSnapshot {
   });
   const pool = state.slots
     .filter(isInPool)
-    .sort((a, b) => a.aircraft.sideNumber.localeCompare(b.aircraft.sideNumber, 'en', { numeric: true }))
+    .sort((a, b) => SIDE_NUMBER_ORDER.compare(a.aircraft.sideNumber, b.aircraft.sideNumber))
     .map((slot) => slot.id);
 
   return {

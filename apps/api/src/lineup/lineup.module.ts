@@ -1,4 +1,8 @@
 import { Module } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
+import { getDataSourceToken } from '@nestjs/typeorm';
+import type { DataSource } from 'typeorm';
+import type { Environment } from '../config/environment.js';
 import { MailModule } from '../mail/mail.module.js';
 import { BasisChecks } from './basis-checks.service.js';
 import { LineupChangeFeed } from './change-feed.service.js';
@@ -8,6 +12,7 @@ import { CycleClosing } from './cycle-closing.service.js';
 import { LineupChangesService } from './lineup-changes.service.js';
 import { LineupCommandsService } from './lineup-commands.service.js';
 import { LineupSnapshotService } from './lineup-snapshot.service.js';
+import { LineupStateCache } from './lineup-state.cache.js';
 import { LineupStateLoader } from './lineup-state.js';
 import { LineupController } from './lineup.controller.js';
 import { ReadinessService } from './readiness.service.js';
@@ -25,6 +30,12 @@ import { SuggestionService } from './suggestion.service.js';
     LineupChangesService,
     LineupCommandsService,
     LineupSnapshotService,
+    {
+      provide: LineupStateCache,
+      inject: [getDataSourceToken(), ConfigService],
+      useFactory: (dataSource: DataSource, config: ConfigService<Environment, true>) =>
+        new LineupStateCache(dataSource, !config.get('REDIS_URL', { infer: true })),
+    },
     LineupStateLoader,
     ReadinessService,
     SuggestionService,

@@ -7,7 +7,7 @@ import type {
   WeightAckRequest,
 } from '@catline/contracts';
 import { Injectable } from '@nestjs/common';
-import type { EntityManager, QueryDeepPartialEntity } from 'typeorm';
+import type { EntityManager } from 'typeorm';
 import { Aircraft } from '../aircraft/entities/aircraft.entity.js';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
 import { isDuplicateKey } from '../common/errors/database-errors.js';
@@ -22,7 +22,7 @@ import { laneSlots, slotFigures } from './lineup-snapshot.builder.js';
 import type { LineupState } from './lineup-state.js';
 import { LineupException } from './lineup.exception.js';
 import { advance, launchRefusal, suspend, type Transition } from './readiness-machine.js';
-import { updateSlot } from './slot-writes.js';
+import { type SlotValues, updateSlot } from './slot-writes.js';
 
 const ACKNOWLEDGEABLE: readonly SlotStatus[] = ['planned', 'taxiing', 'on_catapult', 'suspended'];
 
@@ -66,7 +66,7 @@ export class ReadinessService {
       }
       const status = allowed(advance(side, slot.status, request.to));
       const now = this.clock.now();
-      const values: QueryDeepPartialEntity<Slot> = { status, statusAt: now, statusById: user.id };
+      const values: SlotValues = { status, statusAt: now, statusBy: user };
       if (status === 'taxiing') values.taxiingAt = now;
       if (status === 'on_catapult') Object.assign(values, { onCatapultAt: now, suspendReason: null, catapultWeightAckAt: null });
       if (status === 'tensioned') values.tensionedAt = now;
@@ -81,7 +81,7 @@ export class ReadinessService {
       }
       await updateSlot(manager, slot, values);
       const step = request.to === 'resume' ? 'resumed on' : STEP_SUMMARY[status];
-      return { summary: `${side} ${step} cat ${catapult.number}`, command: { type: 'advance', slotId, ...request } };
+      return { summary: `${side} ${step} cat ${catapult.number}`, command: { type: 'advance', slotId, ...request }, mirrored: true };
     });
   }
 
@@ -92,10 +92,11 @@ export class ReadinessService {
       await this.basis.slotAsSeen(manager, state, slot, request.slotVersion);
       const status = allowed(suspend(slot.aircraft.sideNumber, slot.status));
       const now = this.clock.now();
-      await updateSlot(manager, slot, { status, suspendedAt: now, suspendReason: request.reason, statusAt: now, statusById: user.id });
+      await updateSlot(manager, slot, { status, suspendedAt: now, suspendReason: request.reason, statusAt: now, statusBy: user });
       return {
         summary: `${slot.aircraft.sideNumber} suspended on cat ${catapult.number}: ${request.reason}`,
         command: { type: 'suspend', slotId, ...request },
+        mirrored: true,
       };
     });
   }
@@ -161,7 +162,11 @@ export class ReadinessService {
         );
       }
       await updateSlot(manager, slot, { pilotWeightAckAt: this.clock.now(), pilotWeightAckLb: request.grossWeightLb });
-      return { summary: `Pilot of ${side} acknowledged ${lb(request.grossWeightLb)}`, command: { type: 'weight_ack', slotId, ...request } };
+      return {
+        summary: `Pilot of ${side} acknowledged ${lb(request.grossWeightLb)}`,
+        command: { type: 'weight_ack', slotId, ...request },
+        mirrored: true,
+      };
     });
   }
 
@@ -189,7 +194,7 @@ export class ReadinessService {
         launchIdempotencyKey: key,
         overrideReason: override,
         statusAt: now,
-        statusById: user.id,
+        statusBy: user,
       });
     } catch (error) {
       if (!isDuplicateKey(error)) throw error;

@@ -1,24 +1,40 @@
 import type { EntityManager, QueryDeepPartialEntity } from 'typeorm';
+import type { User } from '../users/entities/user.entity.js';
 import { Slot } from './entities/slot.entity.js';
 
 const movedPastVersion = (ids: number[]) =>
   new Error(`Slot ${ids.join(', ')} moved past the version read while its cycle was locked`);
 
-/** Writes a slot and bumps its version, guarded by the version the command read under the cycle lock. */
-export async function updateSlot(manager: EntityManager, slot: Slot, values: QueryDeepPartialEntity<Slot>): Promise<void> {
+type SlotColumns = Omit<Slot, 'id' | 'version' | 'cycle' | 'aircraft' | 'pilot' | 'catapult' | 'statusBy' | 'statusById'>;
+
+/** Values a command writes to a slot; `statusBy` is the person who changed its status. */
+export type SlotValues = Partial<SlotColumns> & { statusBy?: Pick<User, 'id' | 'name'> };
+
+/**
+ * Writes a slot and bumps its version, guarded by the version the command read under the cycle lock,
+ * then applies the same values to `slot`: the command's state stays equal to the rows, so the change
+ * pipeline need not read them again (see ChangeDraft.mirrored).
+ */
+export async function updateSlot(manager: EntityManager, slot: Slot, values: SlotValues): Promise<void> {
+  const { statusBy, ...columns } = values;
+  const row: QueryDeepPartialEntity<Slot> = statusBy ? { ...columns, statusById: statusBy.id } : columns;
   const result = await manager
     .createQueryBuilder()
     .update(Slot)
-    .set({ ...values, version: () => 'version + 1' })
+    .set({ ...row, version: () => 'version + 1' })
     .where('id = :id AND version = :version', { id: slot.id, version: slot.version })
     .execute();
   if (result.affected !== 1) throw movedPastVersion([slot.id]);
+  Object.assign(slot, columns);
+  if (statusBy) Object.assign(slot, { statusById: statusBy.id, statusBy: { id: statusBy.id, name: statusBy.name } });
+  slot.version += 1;
 }
 
 /**
  * Puts `slots` in this order on a catapult's lane (or the deck pool for null), writing only the slots
  * whose place changes, in one guarded UPDATE: a move into a full lane shifts every slot behind it, and
- * one statement instead of one per slot keeps the time the cycle stays locked short.
+ * one statement instead of one per slot keeps the time the cycle stays locked short. Like updateSlot,
+ * it applies the places to the slots it wrote.
  */
 export async function placeSlots(manager: EntityManager, slots: readonly Slot[], catapultId: number | null): Promise<void> {
   const moved = slots
@@ -36,4 +52,5 @@ export async function placeSlots(manager: EntityManager, slots: readonly Slot[],
     ],
   );
   if (result.affectedRows !== moved.length) throw movedPastVersion(moved.map(({ slot }) => slot.id));
+  for (const { slot, position } of moved) Object.assign(slot, { catapultId, position, version: slot.version + 1 });
 }

@@ -9,6 +9,7 @@ import { BasisChecks } from '../../lineup/basis-checks.service.js';
 import { LineupChangeFeed } from '../../lineup/change-feed.service.js';
 import { Clock } from '../../lineup/clock.js';
 import { CycleChangeService, actorOf } from '../../lineup/cycle-change.service.js';
+import { LineupStateCache } from '../../lineup/lineup-state.cache.js';
 import { CycleClosing } from '../../lineup/cycle-closing.service.js';
 import { LineupChangesService } from '../../lineup/lineup-changes.service.js';
 import { LineupCommandsService } from '../../lineup/lineup-commands.service.js';
@@ -65,7 +66,7 @@ export class DemoDeck {
     this.clock = new SetClock(start);
     const loader = new LineupStateLoader();
     const log = new LineupChangesService(dataSource);
-    const changes = new CycleChangeService(dataSource, loader, new LineupChangeFeed(log), this.clock);
+    const changes = new CycleChangeService(dataSource, loader, new LineupStateCache(dataSource, true), new LineupChangeFeed(log), this.clock);
     const basis = new BasisChecks(log);
     const closing = new CycleClosing(new MailOutbox());
     this.cycles = new CyclesService(dataSource);

@@ -1,7 +1,7 @@
-import type { LineupChange, LineupCommandResult, LineupSnapshot } from '@catline/contracts';
+import type { AircraftView, LineupChange, LineupCommandResult, LineupSnapshot } from '@catline/contracts';
 import type { INestApplication } from '@nestjs/common';
-import { applyLineupChanges } from '@catline/contracts';
-import { AIR_OPS, HANDLER, LineupDriver, OBSERVER, launchKey, pilot } from './support/lineup-fixtures.js';
+import { applyLineupChanges, applyLineupPatch } from '@catline/contracts';
+import { ADMIN, AIR_OPS, HANDLER, LineupDriver, OBSERVER, launchKey, pilot } from './support/lineup-fixtures.js';
 import { startTestApp } from './support/test-app.js';
 
 const idsOf = (snapshot: LineupSnapshot, catapultNumber: number) => snapshot.lanes.find((lane) => lane.number === catapultNumber)!.slotIds;
@@ -306,6 +306,29 @@ describe('lineup commands', () => {
     expect(replayed).toEqual(await deck.snapshot(cycle.id));
     expect(replayed.slots.map((slot) => slot.id)).toEqual(slots.map((slot) => slot.id));
     expect((await changesOf(cycle.id, 5)).map((change) => change.version)).toEqual([6, 7]);
+  });
+
+  it('carries an aircraft edited between two changes in the next patch, as a fresh read shows it', async () => {
+    const cycle = await deck.createCycle();
+    const [model] = await deck.ok<AircraftView[]>(OBSERVER, 'get', '/api/aircraft');
+    const side = () => `T${Math.floor(Math.random() * 1_000_000)}`;
+    const { typeId, squadronId, parkedSpot } = model;
+    const aircraft = await deck.ok<AircraftView>(ADMIN, 'post', '/api/aircraft', { sideNumber: side(), typeId, squadronId, parkedSpot }, 201);
+    const added = await deck.ok<LineupCommandResult>(AIR_OPS, 'post', `/api/cycles/${cycle.id}/slots`, {
+      aircraftId: aircraft.id, pilotId: null, mission: 'Strike training', fuelLb: 11_000, stores: '', grossWeightLb: 44_000,
+      tanker: false, earlyWarning: false, spare: false,
+    });
+    const slotId = added.change.patch.slots![0].id;
+    // After this change the API holds the cycle's state in memory (LineupStateCache).
+    await deck.place(cycle.id, slotId, 1);
+    const renamed = side();
+    await deck.ok(ADMIN, 'patch', `/api/aircraft/${aircraft.id}`, { sideNumber: renamed });
+    const before = await deck.snapshot(cycle.id);
+
+    const moved = await deck.place(cycle.id, slotId, 2);
+
+    expect(moved.change.patch.slots!.find((slot) => slot.id === slotId)!.sideNumber).toBe(renamed);
+    expect(applyLineupPatch(before, moved.version, moved.change.patch)).toEqual(await deck.snapshot(cycle.id));
   });
 
   it('answers a missing cycle with 404 and a bad since with 400', async () => {

@@ -84,7 +84,9 @@ export class CycleChangeService {
     let kept: KeptState | undefined;
     let outcome: LineupChange[] | RepeatedCommand;
     try {
-      outcome = await this.dataSource.transaction('READ COMMITTED', async (manager) => {
+      // The server's default isolation (REPEATABLE READ) without a SET statement per command: the first
+      // statement takes the cycle's lock, so every later read sees all that committed before it.
+      outcome = await this.dataSource.transaction(async (manager) => {
         const locked = await this.loader.lockCycle(manager, cycleId);
         ticket = this.feed.reserve(cycleId, locked.version + 1);
         const generation = this.cache.generation;

@@ -12,6 +12,7 @@ import type {
 import request from 'supertest';
 import { bearer, signIn } from './sign-in.js';
 
+export const ADMIN = 'admin@catline.example';
 export const AIR_OPS = 'airops@catline.example';
 export const HANDLER = 'handler@catline.example';
 export const OBSERVER = 'observer@catline.example';

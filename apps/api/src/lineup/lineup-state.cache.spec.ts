@@ -1,0 +1,94 @@
+import type { LineupSnapshot } from '@catline/contracts';
+import type { DataSource, EntitySubscriberInterface, QueryRunner } from 'typeorm';
+import { Aircraft } from '../aircraft/entities/aircraft.entity.js';
+import { Cycle } from '../cycles/entities/cycle.entity.js';
+import { User } from '../users/entities/user.entity.js';
+import { Slot } from './entities/slot.entity.js';
+import { LineupStateCache } from './lineup-state.cache.js';
+import type { LineupState } from './lineup-state.js';
+
+const cycleAt = (version: number) => Object.assign(new Cycle(), { id: 7, version });
+const stateAt = (version: number) => ({ cycle: cycleAt(version), ship: {}, catapults: [], slots: [] }) as unknown as LineupState;
+const snapshotAt = (version: number) => ({ version }) as LineupSnapshot;
+
+/** What TypeORM hands a subscriber after a write of `target`, inside a transaction or not. */
+const write = (target: unknown, queryRunner: Partial<QueryRunner> = { isTransactionActive: false, data: {} }) =>
+  ({ metadata: { target }, queryRunner }) as never;
+
+function cacheWithSubscribers(enabled = true) {
+  const dataSource = { subscribers: [] as EntitySubscriberInterface[] };
+  const cache = new LineupStateCache(dataSource as unknown as DataSource, enabled);
+  return { cache, subscribers: dataSource.subscribers };
+}
+
+describe('LineupStateCache', () => {
+  it('hands a kept state over once, to a command that locked the cycle at its version', () => {
+    const { cache } = cacheWithSubscribers();
+    const kept = stateAt(4);
+    cache.keep(kept, snapshotAt(4), cache.generation);
+
+    const locked = cycleAt(4);
+    const taken = cache.take(locked);
+    expect(taken?.state.slots).toBe(kept.slots);
+    expect(taken?.state.cycle).toBe(locked);
+    expect(taken?.snapshot.version).toBe(4);
+    expect(cache.take(cycleAt(4))).toBeUndefined();
+  });
+
+  it('serves nothing to a command that found the cycle at another version', () => {
+    const { cache } = cacheWithSubscribers();
+    cache.keep(stateAt(4), snapshotAt(4), cache.generation);
+    expect(cache.take(cycleAt(5))).toBeUndefined();
+  });
+
+  it('drops what was read before a ship, catapult, aircraft, type, squadron or person was written', () => {
+    const { cache } = cacheWithSubscribers();
+    const generation = cache.generation;
+    cache.afterUpdate(write(User));
+    expect(cache.keep(stateAt(4), snapshotAt(4), generation)).toBeUndefined();
+
+    cache.keep(stateAt(4), snapshotAt(4), cache.generation);
+    cache.afterInsert(write(Aircraft));
+    expect(cache.take(cycleAt(4))).toBeUndefined();
+  });
+
+  it('is not spoiled by the lineup writes it mirrors itself', () => {
+    const { cache } = cacheWithSubscribers();
+    cache.keep(stateAt(4), snapshotAt(4), cache.generation);
+    cache.afterUpdate(write(Slot));
+    cache.afterUpdate(write(Cycle));
+    expect(cache.take(cycleAt(4))).toBeDefined();
+  });
+
+  it('counts a reference write again when its transaction commits, so a load read in between is not kept', () => {
+    const { cache } = cacheWithSubscribers();
+    const runner = { isTransactionActive: true, data: {} } as QueryRunner;
+    cache.afterUpdate(write(Aircraft, runner));
+    const readBeforeCommit = cache.generation;
+    cache.afterTransactionCommit({ queryRunner: runner } as never);
+    expect(cache.keep(stateAt(4), snapshotAt(4), readBeforeCommit)).toBeUndefined();
+
+    const later = cache.generation;
+    cache.afterTransactionCommit({ queryRunner: runner } as never);
+    expect(cache.generation).toBe(later);
+  });
+
+  it('forgets a kept state whose commit failed, and only that one', () => {
+    const { cache } = cacheWithSubscribers();
+    const failed = cache.keep(stateAt(4), snapshotAt(4), cache.generation)!;
+    cache.keep(stateAt(5), snapshotAt(5), cache.generation);
+    cache.forget(failed);
+    expect(cache.take(cycleAt(5))?.snapshot.version).toBe(5);
+
+    const again = cache.keep(stateAt(6), snapshotAt(6), cache.generation)!;
+    cache.forget(again);
+    expect(cache.take(cycleAt(6))).toBeUndefined();
+  });
+
+  it('keeps nothing and listens to nothing when off (several API processes)', () => {
+    const { cache, subscribers } = cacheWithSubscribers(false);
+    expect(subscribers).toHaveLength(0);
+    expect(cache.keep(stateAt(4), snapshotAt(4), cache.generation)).toBeUndefined();
+    expect(cache.take(cycleAt(4))).toBeUndefined();
+  });
+});

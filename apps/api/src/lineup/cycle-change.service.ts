@@ -10,7 +10,7 @@ import { isDeadlock, retryOnDeadlock } from './deadlock-retry.js';
 import { CycleChange } from './entities/cycle-change.entity.js';
 import { diffSnapshots } from './lineup-diff.js';
 import { buildSnapshot } from './lineup-snapshot.builder.js';
-import { LineupStateCache, type KeptState } from './lineup-state.cache.js';
+import { LineupStateCache, StartingPoint } from './lineup-state.cache.js';
 import { LineupStateLoader, type LineupState } from './lineup-state.js';
 import { asLaunchDataRefusal } from './lineup.exception.js';
 
@@ -81,19 +81,23 @@ export class CycleChangeService {
   ): Promise<LineupCommandResult> {
     let ticket: FeedTicket | undefined;
     let written = false;
-    let kept: KeptState | undefined;
+    let start: StartingPoint | undefined;
+    let kept: StartingPoint | undefined;
     let outcome: LineupChange[] | RepeatedCommand;
     try {
       // The server's default isolation (REPEATABLE READ) without a SET statement per command: the first
       // statement takes the cycle's lock, so every later read sees all that committed before it.
       outcome = await this.dataSource.transaction(async (manager) => {
-        const locked = await this.loader.lockCycle(manager, cycleId);
-        ticket = this.feed.reserve(cycleId, locked.version + 1);
+        const version = await this.loader.lockCycle(manager, cycleId);
+        ticket = this.feed.reserve(cycleId, version + 1);
         const generation = this.cache.generation;
-        const cached = this.cache.take(locked);
-        let state = cached?.state ?? (await this.loader.load(manager, locked));
-        // Taken before the step: steps apply what they write to `state`.
-        let before = cached?.snapshot ?? buildSnapshot(state);
+        start = this.cache.take(cycleId, version);
+        if (!start) {
+          const read = await this.loader.read(manager, cycleId);
+          start = new StartingPoint(read, buildSnapshot(read), generation);
+        }
+        // The snapshot was taken before the step: steps apply what they write to the state.
+        let { state, snapshot: before } = start;
         const first = await step(manager, state);
         if ('repeatOf' in first) return first;
 
@@ -112,7 +116,7 @@ export class CycleChangeService {
         }
         ticket.prepare(changes);
         // Kept before the COMMIT: the next command on the cycle may hold its lock before this one hears back.
-        kept = this.cache.keep(state, before, generation);
+        kept = this.cache.keep(state, before, start.generation);
         written = true;
         return changes;
       });
@@ -120,12 +124,14 @@ export class CycleChangeService {
       // Failing after every row was written means the COMMIT itself failed: it may have landed,
       // unless the server reports a deadlock (or a Galera certification failure), which rolled it back.
       if (kept) this.cache.forget(kept);
+      else if (start) this.cache.handBack(start);
       if (written && !isDeadlock(error)) ticket?.uncertain();
       else ticket?.rolledBack();
       throw error;
     }
     if ('repeatOf' in outcome) {
       ticket?.rolledBack();
+      if (start) this.cache.handBack(start);
       return outcome.repeatOf;
     }
     ticket?.committed();
@@ -133,13 +139,11 @@ export class CycleChangeService {
   }
 
   private async bumpVersion(manager: EntityManager, cycle: Cycle): Promise<void> {
-    const result = await manager
-      .createQueryBuilder()
-      .update(Cycle)
-      .set({ version: () => 'version + 1' })
-      .where('id = :id AND version = :version', { id: cycle.id, version: cycle.version })
-      .execute();
-    if (result.affected !== 1) {
+    const result: { affectedRows: number } = await manager.query('UPDATE cycles SET version = version + 1 WHERE id = ? AND version = ?', [
+      cycle.id,
+      cycle.version,
+    ]);
+    if (result.affectedRows !== 1) {
       throw new Error(`Cycle ${cycle.id} moved past version ${cycle.version} while its row was locked`);
     }
     cycle.version += 1;

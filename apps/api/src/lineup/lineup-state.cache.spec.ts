@@ -7,8 +7,13 @@ import { Slot } from './entities/slot.entity.js';
 import { LineupStateCache } from './lineup-state.cache.js';
 import type { LineupState } from './lineup-state.js';
 
-const cycleAt = (version: number) => Object.assign(new Cycle(), { id: 7, version });
-const stateAt = (version: number) => ({ cycle: cycleAt(version), ship: {}, catapults: [], slots: [] }) as unknown as LineupState;
+const stateAt = (version: number) =>
+  ({
+    cycle: Object.assign(new Cycle(), { id: 7, version }),
+    ship: {},
+    catapults: [{ id: 1, status: 'up' }],
+    slots: [Object.assign(new Slot(), { id: 11, version: 2 })],
+  }) as unknown as LineupState;
 const snapshotAt = (version: number) => ({ version }) as LineupSnapshot;
 
 /** What TypeORM hands a subscriber after a write of `target`, inside a transaction or not. */
@@ -27,18 +32,16 @@ describe('LineupStateCache', () => {
     const kept = stateAt(4);
     cache.keep(kept, snapshotAt(4), cache.generation);
 
-    const locked = cycleAt(4);
-    const taken = cache.take(locked);
-    expect(taken?.state.slots).toBe(kept.slots);
-    expect(taken?.state.cycle).toBe(locked);
+    const taken = cache.take(7, 4);
+    expect(taken?.state).toBe(kept);
     expect(taken?.snapshot.version).toBe(4);
-    expect(cache.take(cycleAt(4))).toBeUndefined();
+    expect(cache.take(7, 4)).toBeUndefined();
   });
 
   it('serves nothing to a command that found the cycle at another version', () => {
     const { cache } = cacheWithSubscribers();
     cache.keep(stateAt(4), snapshotAt(4), cache.generation);
-    expect(cache.take(cycleAt(5))).toBeUndefined();
+    expect(cache.take(7, 5)).toBeUndefined();
   });
 
   it('drops what was read before a ship, catapult, aircraft, type, squadron or person was written', () => {
@@ -49,7 +52,7 @@ describe('LineupStateCache', () => {
 
     cache.keep(stateAt(4), snapshotAt(4), cache.generation);
     cache.afterInsert(write(Aircraft));
-    expect(cache.take(cycleAt(4))).toBeUndefined();
+    expect(cache.take(7, 4)).toBeUndefined();
   });
 
   it('is not spoiled by the lineup writes it mirrors itself', () => {
@@ -57,7 +60,7 @@ describe('LineupStateCache', () => {
     cache.keep(stateAt(4), snapshotAt(4), cache.generation);
     cache.afterUpdate(write(Slot));
     cache.afterUpdate(write(Cycle));
-    expect(cache.take(cycleAt(4))).toBeDefined();
+    expect(cache.take(7, 4)).toBeDefined();
   });
 
   it('counts a reference write again when its transaction commits, so a load read in between is not kept', () => {
@@ -78,17 +81,35 @@ describe('LineupStateCache', () => {
     const failed = cache.keep(stateAt(4), snapshotAt(4), cache.generation)!;
     cache.keep(stateAt(5), snapshotAt(5), cache.generation);
     cache.forget(failed);
-    expect(cache.take(cycleAt(5))?.snapshot.version).toBe(5);
+    expect(cache.take(7, 5)?.snapshot.version).toBe(5);
 
     const again = cache.keep(stateAt(6), snapshotAt(6), cache.generation)!;
     cache.forget(again);
-    expect(cache.take(cycleAt(6))).toBeUndefined();
+    expect(cache.take(7, 6)).toBeUndefined();
+  });
+
+  it('takes back where a refused command started only if nothing was written to it', () => {
+    const { cache } = cacheWithSubscribers();
+    const refused = cache.keep(stateAt(4), snapshotAt(4), cache.generation)!;
+    expect(cache.take(7, 4)).toBe(refused);
+    cache.handBack(refused);
+    expect(cache.take(7, 4)).toBe(refused);
+
+    refused.state.slots[0].version += 1;
+    cache.handBack(refused);
+    expect(cache.take(7, 4)).toBeUndefined();
+
+    const closedCat = cache.keep(stateAt(4), snapshotAt(4), cache.generation)!;
+    cache.take(7, 4);
+    closedCat.state.catapults[0].status = 'down';
+    cache.handBack(closedCat);
+    expect(cache.take(7, 4)).toBeUndefined();
   });
 
   it('keeps nothing and listens to nothing when off (several API processes)', () => {
     const { cache, subscribers } = cacheWithSubscribers(false);
     expect(subscribers).toHaveLength(0);
     expect(cache.keep(stateAt(4), snapshotAt(4), cache.generation)).toBeUndefined();
-    expect(cache.take(cycleAt(4))).toBeUndefined();
+    expect(cache.take(7, 4)).toBeUndefined();
   });
 });

@@ -10,7 +10,6 @@ import type {
 } from 'typeorm';
 import { AircraftType } from '../aircraft-types/entities/aircraft-type.entity.js';
 import { Aircraft } from '../aircraft/entities/aircraft.entity.js';
-import type { Cycle } from '../cycles/entities/cycle.entity.js';
 import { Catapult } from '../ships/entities/catapult.entity.js';
 import { Ship } from '../ships/entities/ship.entity.js';
 import { Squadron } from '../squadrons/entities/squadron.entity.js';
@@ -25,17 +24,31 @@ const MAX_ENTRIES = 32;
 
 const WROTE_REFERENCE = 'catline.wroteReferenceData';
 
-export interface KeptState {
-  version: number;
-  generation: number;
-  state: LineupState;
-  snapshot: LineupSnapshot;
-}
+/** What a command's writes change in a state it was given: slot versions and catapult statuses. */
+const writesIn = (state: LineupState) =>
+  `${state.cycle.version}|${state.slots.map((slot) => slot.version).join(',')}|${state.catapults.map((catapult) => catapult.status).join(',')}`;
 
-/** The state a command starts from, and the snapshot of it (the "before" of the change). */
-export interface StartingPoint {
-  state: LineupState;
-  snapshot: LineupSnapshot;
+/** The state a command starts from at the cycle's locked version, and its snapshot (the "before" of the change). */
+export class StartingPoint {
+  private readonly writes: string;
+
+  constructor(
+    readonly state: LineupState,
+    readonly snapshot: LineupSnapshot,
+    /** LineupStateCache.generation when the state was read. */
+    readonly generation: number,
+  ) {
+    this.writes = writesIn(state);
+  }
+
+  get version(): number {
+    return this.state.cycle.version;
+  }
+
+  /** True while no write has been applied to the state (a refusal comes before any). */
+  get untouched(): boolean {
+    return writesIn(this.state) === this.writes;
+  }
 }
 
 /**
@@ -50,7 +63,7 @@ export interface StartingPoint {
  * Those events are this process's own: with several API processes (REDIS_URL) the cache is off.
  */
 export class LineupStateCache implements EntitySubscriberInterface {
-  private readonly entries = new Map<number, KeptState>();
+  private readonly entries = new Map<number, StartingPoint>();
   private written = 0;
 
   constructor(
@@ -66,15 +79,15 @@ export class LineupStateCache implements EntitySubscriberInterface {
   }
 
   /**
-   * The state at the locked cycle's version, or undefined. It is handed over, not copied: the command
-   * changes it as it writes, and keep() puts the result back (a command that fails leaves nothing).
+   * Where a command on the cycle starts if its lock was taken at the version of the kept state, or
+   * undefined. The state is handed over, not copied: the command changes it as it writes, and keep()
+   * or handBack() puts it back.
    */
-  take(locked: Cycle): StartingPoint | undefined {
-    const entry = this.entries.get(locked.id);
+  take(cycleId: number, version: number): StartingPoint | undefined {
+    const entry = this.entries.get(cycleId);
     if (!entry) return undefined;
-    this.entries.delete(locked.id);
-    if (entry.version !== locked.version || entry.generation !== this.written) return undefined;
-    return { state: { ...entry.state, cycle: locked }, snapshot: entry.snapshot };
+    this.entries.delete(cycleId);
+    return entry.version === version && entry.generation === this.written ? entry : undefined;
   }
 
   /**
@@ -82,18 +95,27 @@ export class LineupStateCache implements EntitySubscriberInterface {
    * data was written since `generation` was read. Commands on a cycle hold its lock in turn, so the
    * last one kept is the newest.
    */
-  keep(state: LineupState, snapshot: LineupSnapshot, generation: number): KeptState | undefined {
-    if (!this.enabled || generation !== this.written) return undefined;
-    const entry: KeptState = { version: state.cycle.version, generation, state, snapshot };
-    this.entries.delete(state.cycle.id);
-    this.entries.set(state.cycle.id, entry);
-    if (this.entries.size > MAX_ENTRIES) this.entries.delete(this.entries.keys().next().value!);
-    return entry;
+  keep(state: LineupState, snapshot: LineupSnapshot, generation: number): StartingPoint | undefined {
+    return this.put(new StartingPoint(state, snapshot, generation));
   }
 
   /** Drops a kept state whose COMMIT failed (the rows may be as before it). */
-  forget(entry: KeptState): void {
+  forget(entry: StartingPoint): void {
     if (this.entries.get(entry.state.cycle.id) === entry) this.entries.delete(entry.state.cycle.id);
+  }
+
+  /** Takes back where a failed command started, if it wrote nothing: its rollback left the rows as they were. */
+  handBack(start: StartingPoint): void {
+    if (start.untouched) this.put(start);
+  }
+
+  private put(entry: StartingPoint): StartingPoint | undefined {
+    if (!this.enabled || entry.generation !== this.written) return undefined;
+    const cycleId = entry.state.cycle.id;
+    this.entries.delete(cycleId);
+    this.entries.set(cycleId, entry);
+    if (this.entries.size > MAX_ENTRIES) this.entries.delete(this.entries.keys().next().value!);
+    return entry;
   }
 
   afterInsert(event: InsertEvent<unknown>): void {

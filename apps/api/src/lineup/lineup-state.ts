@@ -22,11 +22,14 @@ export const cycleNotFound = (cycleId: number) => new LineupException('not_found
 
 @Injectable()
 export class LineupStateLoader {
-  /** Locks the cycle row until the transaction ends: every change to a cycle's lineup takes this lock first. */
-  async lockCycle(manager: EntityManager, cycleId: number): Promise<Cycle> {
-    const cycle = await manager.findOne(Cycle, { where: { id: cycleId }, lock: { mode: 'pessimistic_write' } });
-    if (!cycle) throw cycleNotFound(cycleId);
-    return cycle;
+  /**
+   * Locks the cycle row until the transaction ends and answers its version: every change to a cycle's
+   * lineup takes this lock first. Plain SQL, as it runs once per command and needs no entity.
+   */
+  async lockCycle(manager: EntityManager, cycleId: number): Promise<number> {
+    const rows: { version: number }[] = await manager.query('SELECT version FROM cycles WHERE id = ? FOR UPDATE', [cycleId]);
+    if (rows.length === 0) throw cycleNotFound(cycleId);
+    return rows[0].version;
   }
 
   /** The state of a cycle that exists, or 404. */

@@ -11,6 +11,7 @@ import { AuthController } from './auth.controller.js';
 import { AuthGuard } from './auth.guard.js';
 import { AuthService } from './auth.service.js';
 import { LoginAttempts } from './login-attempts.service.js';
+import { PersonLookup } from './person-lookup.service.js';
 import { RefreshTokens } from './refresh-tokens.service.js';
 import { TokenVerifier } from './token-verifier.service.js';
 
@@ -28,7 +29,7 @@ import { TokenVerifier } from './token-verifier.service.js';
     }),
   ],
   controllers: [AuthController],
-  providers: [AuthService, LoginAttempts, RefreshTokens, TokenVerifier, { provide: APP_GUARD, useClass: AuthGuard }],
+  providers: [AuthService, LoginAttempts, PersonLookup, RefreshTokens, TokenVerifier, { provide: APP_GUARD, useClass: AuthGuard }],
   exports: [TokenVerifier, RefreshTokens],
 })
 export class AuthModule {}

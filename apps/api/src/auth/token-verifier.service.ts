@@ -1,11 +1,9 @@
 import { Injectable } from '@nestjs/common';
 import { JwtService } from '@nestjs/jwt';
-import { InjectRepository } from '@nestjs/typeorm';
-import type { Repository } from 'typeorm';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
-import { User } from '../users/entities/user.entity.js';
 import { ACCESS_TOKEN_ALGORITHM, type AccessTokenClaims } from './access-token.js';
 import { AuthException } from './auth.exception.js';
+import { PersonLookup } from './person-lookup.service.js';
 import { toAuthenticatedUser } from './session.mapper.js';
 
 export interface VerifiedSession {
@@ -24,7 +22,7 @@ const INVALID = 'Your session has expired or is no longer valid. Sign in again.'
 export class TokenVerifier {
   constructor(
     private readonly jwt: JwtService,
-    @InjectRepository(User) private readonly users: Repository<User>,
+    private readonly people: PersonLookup,
   ) {}
 
   /** The signed-in person; throws AuthException (401, code session_invalid) otherwise. */
@@ -35,7 +33,7 @@ export class TokenVerifier {
   /** As verify, plus when the token expires (for a socket that must end the session then). */
   async verifySession(token: string): Promise<VerifiedSession> {
     const claims = await this.readClaims(token);
-    const user = await this.users.findOneBy({ id: claims.sub });
+    const user = await this.people.byId(claims.sub);
     if (!user || !user.active || user.tokenVersion !== claims.tv) {
       throw new AuthException('session_invalid', INVALID);
     }

@@ -47,9 +47,7 @@ export class LineupCommandsService {
       const command = { type: 'move', ...request };
       if (request.toCatapultId === null) {
         if (slot.catapultId === null) throw new LineupException('no_change', `${side} is already in the deck pool.`);
-        const from = slot.catapultId;
-        await updateSlot(manager, slot, { catapultId: null, position: null });
-        await placeSlots(manager, source, from);
+        await placeSlots(manager, { catapultId: slot.catapultId, slots: source }, { catapultId: null, slots: [slot] });
         return { summary: `${side} moved to the deck pool`, command, mirrored: true };
       }
 
@@ -68,8 +66,8 @@ export class LineupCommandsService {
       if (sameOrder(target, current)) {
         throw new LineupException('no_change', `${side} is already at place ${request.toIndex + 1} on cat ${catapult.number}.`);
       }
-      if (slot.catapultId !== null && slot.catapultId !== catapult.id) await placeSlots(manager, source, slot.catapultId);
-      await placeSlots(manager, target, catapult.id);
+      const left = slot.catapultId !== null && slot.catapultId !== catapult.id ? [{ catapultId: slot.catapultId, slots: source }] : [];
+      await placeSlots(manager, ...left, { catapultId: catapult.id, slots: target });
       return { summary: `${side} moved to cat ${catapult.number}, place ${request.toIndex + 1}`, command, mirrored: true };
     });
   }
@@ -80,22 +78,20 @@ export class LineupCommandsService {
       await this.basis.cycleAsSeen(manager, state, request.basisVersion);
       const placed = this.suggestedLanes(state, request);
       const listed = new Set([...placed.values()].flat().map((slot) => slot.id));
-      let moved = 0;
-      for (const slot of state.slots) {
-        if (slot.status === 'planned' && slot.catapultId !== null && !listed.has(slot.id)) {
-          await updateSlot(manager, slot, { catapultId: null, position: null });
-          moved += 1;
-        }
-      }
-      const counts: string[] = [];
-      for (const catapult of state.catapults) {
+      const pooled = state.slots.filter((slot) => slot.status === 'planned' && slot.catapultId !== null && !listed.has(slot.id));
+      const lanes = state.catapults.map((catapult) => {
         const lane = laneSlots(state, catapult.id);
-        const next = [...heldPlaces(lane), ...(placed.get(catapult.id) ?? [])];
-        if (!sameOrder(next, lane)) moved += 1;
-        await placeSlots(manager, next, catapult.id);
-        counts.push(`cat ${catapult.number} ×${next.length}`);
+        return { catapult, lane, next: [...heldPlaces(lane), ...(placed.get(catapult.id) ?? [])] };
+      });
+      if (pooled.length === 0 && lanes.every(({ lane, next }) => sameOrder(next, lane))) {
+        throw new LineupException('no_change', 'The lineup already is the suggested one.');
       }
-      if (moved === 0) throw new LineupException('no_change', 'The lineup already is the suggested one.');
+      await placeSlots(
+        manager,
+        { catapultId: null, slots: pooled },
+        ...lanes.map(({ catapult, next }) => ({ catapultId: catapult.id, slots: next })),
+      );
+      const counts = lanes.map(({ catapult, next }) => `cat ${catapult.number} ×${next.length}`);
       return { summary: `Suggested lineup applied: ${counts.join(', ')}`, command: { type: 'apply_suggestion', ...request }, mirrored: true };
     });
   }
@@ -125,7 +121,7 @@ export class LineupCommandsService {
       if (catapultId === null) return { summary: `${side} down`, command, mirrored: true };
       const catapult = this.basis.catapult(state, catapultId);
       if (!spare) {
-        await placeSlots(manager, laneSlots(state, catapult.id), catapult.id);
+        await placeSlots(manager, { catapultId: catapult.id, slots: laneSlots(state, catapult.id) });
         return { summary: `${side} down, out of cat ${catapult.number}`, command, mirrored: true };
       }
       await updateSlot(manager, spare, { catapultId, position });

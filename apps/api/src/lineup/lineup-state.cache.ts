@@ -1,15 +1,8 @@
 import type { LineupSnapshot } from '@catline/contracts';
-import type {
-  DataSource,
-  EntitySubscriberInterface,
-  InsertEvent,
-  QueryRunner,
-  RemoveEvent,
-  TransactionCommitEvent,
-  UpdateEvent,
-} from 'typeorm';
+import type { DataSource } from 'typeorm';
 import { AircraftType } from '../aircraft-types/entities/aircraft-type.entity.js';
 import { Aircraft } from '../aircraft/entities/aircraft.entity.js';
+import { EntityWriteCounter } from '../database/entity-write-counter.js';
 import { Catapult } from '../ships/entities/catapult.entity.js';
 import { Ship } from '../ships/entities/ship.entity.js';
 import { Squadron } from '../squadrons/entities/squadron.entity.js';
@@ -21,8 +14,6 @@ const REFERENCE_ENTITIES: ReadonlySet<unknown> = new Set([Ship, Catapult, Aircra
 
 /** Enough for every cycle a deck runs at once; the oldest entry goes first. */
 const MAX_ENTRIES = 32;
-
-const WROTE_REFERENCE = 'catline.wroteReferenceData';
 
 /** What a command's writes change in a state it was given: slot versions and catapult statuses. */
 const writesIn = (state: LineupState) =>
@@ -45,7 +36,7 @@ export class StartingPoint {
     return this.state.cycle.version;
   }
 
-  /** True while no write has been applied to the state (a refusal comes before any). */
+  /** True while no write has been applied to the state. */
   get untouched(): boolean {
     return writesIn(this.state) === this.writes;
   }
@@ -56,26 +47,22 @@ export class StartingPoint {
  * command on the cycle starts from memory instead of five queries and their hydration while it holds
  * the cycle's lock. An entry serves only a command that locked the cycle at the entry's version (every
  * write to a cycle's row or slots goes through the change pipeline, which bumps it), and only while no
- * ship, catapult, aircraft, type, squadron or person has been written since it was read: TypeORM's
- * entity events count those writes here (again when their transaction commits, so a load that read
- * between the write and its commit is not kept).
+ * ship, catapult, aircraft, type, squadron or person has been written since it was read (an
+ * EntityWriteCounter counts those writes).
  *
- * Those events are this process's own: with several API processes (REDIS_URL) the cache is off.
+ * The counter sees this process's writes only: with several API processes (REDIS_URL) the cache is off.
  */
-export class LineupStateCache implements EntitySubscriberInterface {
+export class LineupStateCache {
   private readonly entries = new Map<number, StartingPoint>();
-  private written = 0;
+  private readonly referenceWrites?: EntityWriteCounter;
 
-  constructor(
-    dataSource: DataSource,
-    private readonly enabled: boolean,
-  ) {
-    if (enabled) dataSource.subscribers.push(this);
+  constructor(dataSource: DataSource, enabled: boolean) {
+    if (enabled) this.referenceWrites = new EntityWriteCounter(dataSource, REFERENCE_ENTITIES);
   }
 
   /** Counts writes to reference data; read it before loading a state that will be kept. */
   get generation(): number {
-    return this.written;
+    return this.referenceWrites?.count ?? 0;
   }
 
   /**
@@ -87,7 +74,7 @@ export class LineupStateCache implements EntitySubscriberInterface {
     const entry = this.entries.get(cycleId);
     if (!entry) return undefined;
     this.entries.delete(cycleId);
-    return entry.version === version && entry.generation === this.written ? entry : undefined;
+    return entry.version === version && entry.generation === this.generation ? entry : undefined;
   }
 
   /**
@@ -110,7 +97,7 @@ export class LineupStateCache implements EntitySubscriberInterface {
   }
 
   private put(entry: StartingPoint): StartingPoint | undefined {
-    if (!this.enabled || entry.generation !== this.written) return undefined;
+    if (!this.referenceWrites || entry.generation !== this.generation) return undefined;
     const cycleId = entry.state.cycle.id;
     this.entries.delete(cycleId);
     this.entries.set(cycleId, entry);
@@ -118,27 +105,4 @@ export class LineupStateCache implements EntitySubscriberInterface {
     return entry;
   }
 
-  afterInsert(event: InsertEvent<unknown>): void {
-    this.noteWrite(event.metadata.target, event.queryRunner);
-  }
-
-  afterUpdate(event: UpdateEvent<unknown>): void {
-    this.noteWrite(event.metadata.target, event.queryRunner);
-  }
-
-  afterRemove(event: RemoveEvent<unknown>): void {
-    this.noteWrite(event.metadata.target, event.queryRunner);
-  }
-
-  afterTransactionCommit(event: TransactionCommitEvent): void {
-    if (event.queryRunner.data[WROTE_REFERENCE] !== true) return;
-    event.queryRunner.data[WROTE_REFERENCE] = false;
-    this.written += 1;
-  }
-
-  private noteWrite(target: unknown, queryRunner: QueryRunner): void {
-    if (!REFERENCE_ENTITIES.has(target)) return;
-    this.written += 1;
-    if (queryRunner.isTransactionActive) queryRunner.data[WROTE_REFERENCE] = true;
-  }
 }

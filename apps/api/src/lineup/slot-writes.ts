@@ -30,27 +30,33 @@ export async function updateSlot(manager: EntityManager, slot: Slot, values: Slo
   slot.version += 1;
 }
 
+/** Slots in their order on a catapult's lane, or in the deck pool (catapultId null). */
+export interface Placement {
+  catapultId: number | null;
+  slots: readonly Slot[];
+}
+
 /**
- * Puts `slots` in this order on a catapult's lane (or the deck pool for null), writing only the slots
- * whose place changes, in one guarded UPDATE: a move into a full lane shifts every slot behind it, and
- * one statement instead of one per slot keeps the time the cycle stays locked short. Like updateSlot,
- * it applies the places to the slots it wrote.
+ * Puts slots in the given order on their lanes (or in the deck pool), writing only the slots whose
+ * place changes, in one guarded UPDATE: a move into a full lane shifts every slot behind it and may
+ * close a gap in the lane it left, and one statement instead of one per slot keeps the time the cycle
+ * stays locked short. Like updateSlot, it applies the places to the slots it wrote.
  */
-export async function placeSlots(manager: EntityManager, slots: readonly Slot[], catapultId: number | null): Promise<void> {
-  const moved = slots
-    .map((slot, index) => ({ slot, position: catapultId === null ? null : index }))
-    .filter(({ slot, position }) => slot.catapultId !== catapultId || slot.position !== position);
+export async function placeSlots(manager: EntityManager, ...placements: Placement[]): Promise<void> {
+  const moved = placements
+    .flatMap(({ catapultId, slots }) => slots.map((slot, index) => ({ slot, catapultId, position: catapultId === null ? null : index })))
+    .filter(({ slot, catapultId, position }) => slot.catapultId !== catapultId || slot.position !== position);
   if (moved.length === 0) return;
+  const cases = moved.map(() => 'WHEN ? THEN ?').join(' ');
   const result: { affectedRows: number } = await manager.query(
-    `UPDATE slots SET catapult_id = ?, position = CASE id ${moved.map(() => 'WHEN ? THEN ?').join(' ')} END,
-       version = version + 1
+    `UPDATE slots SET catapult_id = CASE id ${cases} END, position = CASE id ${cases} END, version = version + 1
      WHERE ${moved.map(() => '(id = ? AND version = ?)').join(' OR ')}`,
     [
-      catapultId,
+      ...moved.flatMap(({ slot, catapultId }) => [slot.id, catapultId]),
       ...moved.flatMap(({ slot, position }) => [slot.id, position]),
       ...moved.flatMap(({ slot }) => [slot.id, slot.version]),
     ],
   );
   if (result.affectedRows !== moved.length) throw movedPastVersion(moved.map(({ slot }) => slot.id));
-  for (const { slot, position } of moved) Object.assign(slot, { catapultId, position, version: slot.version + 1 });
+  for (const { slot, catapultId, position } of moved) Object.assign(slot, { catapultId, position, version: slot.version + 1 });
 }

@@ -7,6 +7,7 @@ import { LineupChangeFeed, type FeedTicket } from './change-feed.service.js';
 import { toLineupChange } from './change.mapper.js';
 import { Clock } from './clock.js';
 import { isDeadlock, retryOnDeadlock } from './deadlock-retry.js';
+import { bumpVersion, lockCycle } from './cycle-version.js';
 import { CycleChange } from './entities/cycle-change.entity.js';
 import { diffSnapshots } from './lineup-diff.js';
 import { buildSnapshot } from './lineup-snapshot.builder.js';
@@ -88,25 +89,19 @@ export class CycleChangeService {
       // The server's default isolation (REPEATABLE READ) without a SET statement per command: the first
       // statement takes the cycle's lock, so every later read sees all that committed before it.
       outcome = await this.dataSource.transaction(async (manager) => {
-        const version = await this.loader.lockCycle(manager, cycleId);
-        ticket = this.feed.reserve(cycleId, version + 1);
-        const generation = this.cache.generation;
-        start = this.cache.take(cycleId, version);
-        if (!start) {
-          const read = await this.loader.read(manager, cycleId);
-          start = new StartingPoint(read, buildSnapshot(read), generation);
-        }
+        start = await this.claim(manager, cycleId);
+        ticket = this.feed.reserve(cycleId, start.version + 1);
         // The snapshot was taken before the step: steps apply what they write to the state.
         let { state, snapshot: before } = start;
         const first = await step(manager, state);
         if ('repeatOf' in first) return first;
 
-        const changes: LineupChange[] = [];
+        const recorded: LineupChange[] = [];
         const record = async (changeKind: ChangeKind, draft: ChangeDraft) => {
-          await this.bumpVersion(manager, state.cycle);
+          await this.bumpFrom(manager, state.cycle);
           if (!draft.mirrored) state = await this.loader.load(manager, await manager.findOneByOrFail(Cycle, { id: cycleId }), state);
           const after = buildSnapshot(state);
-          changes.push(await this.append(manager, state, changeKind, actor, draft, diffSnapshots(before, after)));
+          recorded.push(await this.append(manager, state, changeKind, actor, draft, diffSnapshots(before, after)));
           before = after;
         };
         await record(kind, first);
@@ -114,17 +109,17 @@ export class CycleChangeService {
           const next = await followUp.step(manager, state);
           if (next) await record(followUp.kind, next);
         }
-        ticket.prepare(changes);
+        ticket.prepare(recorded);
         // Kept before the COMMIT: the next command on the cycle may hold its lock before this one hears back.
         kept = this.cache.keep(state, before, start.generation);
         written = true;
-        return changes;
+        return recorded;
       });
     } catch (error) {
-      // Failing after every row was written means the COMMIT itself failed: it may have landed,
-      // unless the server reports a deadlock (or a Galera certification failure), which rolled it back.
       if (kept) this.cache.forget(kept);
       else if (start) this.cache.handBack(start);
+      // Failing after every row was written means the COMMIT itself failed: it may have landed,
+      // unless the server reports a deadlock (or a Galera certification failure), which rolled it back.
       if (written && !isDeadlock(error)) ticket?.uncertain();
       else ticket?.rolledBack();
       throw error;
@@ -138,12 +133,18 @@ export class CycleChangeService {
     return { version: outcome[0].version, change: outcome[0] };
   }
 
-  private async bumpVersion(manager: EntityManager, cycle: Cycle): Promise<void> {
-    const result: { affectedRows: number } = await manager.query('UPDATE cycles SET version = version + 1 WHERE id = ? AND version = ?', [
-      cycle.id,
-      cycle.version,
-    ]);
-    if (result.affectedRows !== 1) {
+  /** Takes the cycle's lock, then the state the command starts from: the one kept here if it is at the locked version. */
+  private async claim(manager: EntityManager, cycleId: number): Promise<StartingPoint> {
+    const version = await lockCycle(manager, cycleId);
+    const generation = this.cache.generation;
+    const kept = this.cache.take(cycleId);
+    if (kept?.version === version) return kept;
+    const read = await this.loader.read(manager, cycleId);
+    return new StartingPoint(read, buildSnapshot(read), generation);
+  }
+
+  private async bumpFrom(manager: EntityManager, cycle: Cycle): Promise<void> {
+    if (!(await bumpVersion(manager, cycle.id, cycle.version))) {
       throw new Error(`Cycle ${cycle.id} moved past version ${cycle.version} while its row was locked`);
     }
     cycle.version += 1;

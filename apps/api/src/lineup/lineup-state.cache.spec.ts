@@ -28,21 +28,15 @@ function cacheWithSubscribers(enabled = true) {
 }
 
 describe('LineupStateCache', () => {
-  it('hands a kept state over once, to a command that locked the cycle at its version', () => {
+  it('hands a kept state over once', () => {
     const { cache } = cacheWithSubscribers();
     const kept = stateAt(4);
     cache.keep(kept, snapshotAt(4), cache.generation);
 
-    const taken = cache.take(7, 4);
+    const taken = cache.take(7);
     expect(taken?.state).toBe(kept);
     expect(taken?.snapshot.version).toBe(4);
-    expect(cache.take(7, 4)).toBeUndefined();
-  });
-
-  it('serves nothing to a command that found the cycle at another version', () => {
-    const { cache } = cacheWithSubscribers();
-    cache.keep(stateAt(4), snapshotAt(4), cache.generation);
-    expect(cache.take(7, 5)).toBeUndefined();
+    expect(cache.take(7)).toBeUndefined();
   });
 
   it('drops what was read before a ship, catapult, aircraft, type, squadron or person was written', () => {
@@ -53,7 +47,7 @@ describe('LineupStateCache', () => {
 
     cache.keep(stateAt(4), snapshotAt(4), cache.generation);
     wrote(Aircraft);
-    expect(cache.take(7, 4)).toBeUndefined();
+    expect(cache.take(7)).toBeUndefined();
   });
 
   it('is not spoiled by the lineup writes it mirrors itself', () => {
@@ -61,7 +55,7 @@ describe('LineupStateCache', () => {
     cache.keep(stateAt(4), snapshotAt(4), cache.generation);
     wrote(Slot);
     wrote(Cycle);
-    expect(cache.take(7, 4)).toBeDefined();
+    expect(cache.take(7)).toBeDefined();
   });
 
   it('forgets a kept state whose commit failed, and only that one', () => {
@@ -69,35 +63,35 @@ describe('LineupStateCache', () => {
     const failed = cache.keep(stateAt(4), snapshotAt(4), cache.generation)!;
     cache.keep(stateAt(5), snapshotAt(5), cache.generation);
     cache.forget(failed);
-    expect(cache.take(7, 5)?.snapshot.version).toBe(5);
+    expect(cache.take(7)?.snapshot.version).toBe(5);
 
     const again = cache.keep(stateAt(6), snapshotAt(6), cache.generation)!;
     cache.forget(again);
-    expect(cache.take(7, 6)).toBeUndefined();
+    expect(cache.take(7)).toBeUndefined();
   });
 
   it('takes back where a refused command started only if nothing was written to it', () => {
     const { cache } = cacheWithSubscribers();
     const refused = cache.keep(stateAt(4), snapshotAt(4), cache.generation)!;
-    expect(cache.take(7, 4)).toBe(refused);
+    expect(cache.take(7)).toBe(refused);
     cache.handBack(refused);
-    expect(cache.take(7, 4)).toBe(refused);
+    expect(cache.take(7)).toBe(refused);
 
     refused.state.slots[0].version += 1;
     cache.handBack(refused);
-    expect(cache.take(7, 4)).toBeUndefined();
+    expect(cache.take(7)).toBeUndefined();
 
     const closedCat = cache.keep(stateAt(4), snapshotAt(4), cache.generation)!;
-    cache.take(7, 4);
+    cache.take(7);
     closedCat.state.catapults[0].status = 'down';
     cache.handBack(closedCat);
-    expect(cache.take(7, 4)).toBeUndefined();
+    expect(cache.take(7)).toBeUndefined();
   });
 
   it('keeps nothing and listens to nothing when off (several API processes)', () => {
     const { cache, subscribers } = cacheWithSubscribers(false);
     expect(subscribers).toHaveLength(0);
     expect(cache.keep(stateAt(4), snapshotAt(4), cache.generation)).toBeUndefined();
-    expect(cache.take(7, 4)).toBeUndefined();
+    expect(cache.take(7)).toBeUndefined();
   });
 });

@@ -45,7 +45,7 @@ export class StartingPoint {
 /**
  * The state and snapshot each cycle reached with its last change in this process, so that the next
  * command on the cycle starts from memory instead of five queries and their hydration while it holds
- * the cycle's lock. An entry serves only a command that locked the cycle at the entry's version (every
+ * the cycle's lock. An entry serves only a command that finds the cycle at the entry's version (every
  * write to a cycle's row or slots goes through the change pipeline, which bumps it), and only while no
  * ship, catapult, aircraft, type, squadron or person has been written since it was read (an
  * EntityWriteCounter counts those writes).
@@ -66,15 +66,15 @@ export class LineupStateCache {
   }
 
   /**
-   * Where a command on the cycle starts if its lock was taken at the version of the kept state, or
-   * undefined. The state is handed over, not copied: the command changes it as it writes, and keep()
-   * or handBack() puts it back.
+   * The state the cycle's last change reached here, or undefined. It is handed over, not copied: the
+   * command checks that the cycle is still at its version, changes it as it writes, and keep() or
+   * handBack() puts it back.
    */
-  take(cycleId: number, version: number): StartingPoint | undefined {
+  take(cycleId: number): StartingPoint | undefined {
     const entry = this.entries.get(cycleId);
     if (!entry) return undefined;
     this.entries.delete(cycleId);
-    return entry.version === version && entry.generation === this.generation ? entry : undefined;
+    return entry.generation === this.generation ? entry : undefined;
   }
 
   /**

@@ -22,16 +22,6 @@ export const cycleNotFound = (cycleId: number) => new LineupException('not_found
 
 @Injectable()
 export class LineupStateLoader {
-  /**
-   * Locks the cycle row until the transaction ends and answers its version: every change to a cycle's
-   * lineup takes this lock first. Plain SQL, as it runs once per command and needs no entity.
-   */
-  async lockCycle(manager: EntityManager, cycleId: number): Promise<number> {
-    const rows: { version: number }[] = await manager.query('SELECT version FROM cycles WHERE id = ? FOR UPDATE', [cycleId]);
-    if (rows.length === 0) throw cycleNotFound(cycleId);
-    return rows[0].version;
-  }
-
   /** The state of a cycle that exists, or 404. */
   async read(manager: EntityManager, cycleId: number): Promise<LineupState> {
     const cycle = await manager.findOneBy(Cycle, { id: cycleId });

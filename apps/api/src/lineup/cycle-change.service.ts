@@ -7,7 +7,7 @@ import { LineupChangeFeed, type FeedTicket } from './change-feed.service.js';
 import { toLineupChange } from './change.mapper.js';
 import { Clock } from './clock.js';
 import { isDeadlock, retryOnDeadlock } from './deadlock-retry.js';
-import { bumpVersion, lockCycle } from './cycle-version.js';
+import { bumpVersion, claimNextVersion } from './cycle-version.js';
 import { CycleChange } from './entities/cycle-change.entity.js';
 import { diffSnapshots } from './lineup-diff.js';
 import { buildSnapshot } from './lineup-snapshot.builder.js';
@@ -31,6 +31,13 @@ export interface ChangeDraft {
 /** A command already applied earlier (a repeated launch): answered with its original result, nothing written. */
 export interface RepeatedCommand {
   repeatOf: LineupCommandResult;
+}
+
+/** Ends the transaction of a repeated command, rolled back, with the answer it had the first time. */
+class RepeatedCommandAnswer extends Error {
+  constructor(readonly result: LineupCommandResult) {
+    super('repeated command');
+  }
 }
 
 /** Checks the command's own basis against the locked state, writes its rows, and says what it did. */
@@ -84,21 +91,24 @@ export class CycleChangeService {
     let written = false;
     let start: StartingPoint | undefined;
     let kept: StartingPoint | undefined;
-    let outcome: LineupChange[] | RepeatedCommand;
+    let changes: LineupChange[];
     try {
       // The server's default isolation (REPEATABLE READ) without a SET statement per command: the first
       // statement takes the cycle's lock, so every later read sees all that committed before it.
-      outcome = await this.dataSource.transaction(async (manager) => {
+      changes = await this.dataSource.transaction(async (manager) => {
         start = await this.claim(manager, cycleId);
         ticket = this.feed.reserve(cycleId, start.version + 1);
         // The snapshot was taken before the step: steps apply what they write to the state.
         let { state, snapshot: before } = start;
         const first = await step(manager, state);
-        if ('repeatOf' in first) return first;
+        // Rolled back, not committed: the claim moved the version on.
+        if ('repeatOf' in first) throw new RepeatedCommandAnswer(first.repeatOf);
 
         const recorded: LineupChange[] = [];
         const record = async (changeKind: ChangeKind, draft: ChangeDraft) => {
-          await this.bumpFrom(manager, state.cycle);
+          // The first change has the version the claim took; a follow-up bumps it again.
+          if (recorded.length === 0) state.cycle.version += 1;
+          else await this.bumpFrom(manager, state.cycle);
           if (!draft.mirrored) state = await this.loader.load(manager, await manager.findOneByOrFail(Cycle, { id: cycleId }), state);
           const after = buildSnapshot(state);
           recorded.push(await this.append(manager, state, changeKind, actor, draft, diffSnapshots(before, after)));
@@ -118,28 +128,32 @@ export class CycleChangeService {
     } catch (error) {
       if (kept) this.cache.forget(kept);
       else if (start) this.cache.handBack(start);
+      if (error instanceof RepeatedCommandAnswer) {
+        ticket?.rolledBack();
+        return error.result;
+      }
       // Failing after every row was written means the COMMIT itself failed: it may have landed,
       // unless the server reports a deadlock (or a Galera certification failure), which rolled it back.
       if (written && !isDeadlock(error)) ticket?.uncertain();
       else ticket?.rolledBack();
       throw error;
     }
-    if ('repeatOf' in outcome) {
-      ticket?.rolledBack();
-      if (start) this.cache.handBack(start);
-      return outcome.repeatOf;
-    }
     ticket?.committed();
-    return { version: outcome[0].version, change: outcome[0] };
+    return { version: changes[0].version, change: changes[0] };
   }
 
-  /** Takes the cycle's lock, then the state the command starts from: the one kept here if it is at the locked version. */
+  /**
+   * Takes the cycle's lock and its next version in one statement, then the state the command starts
+   * from (one version back): the one kept here if it is at that version, else read.
+   */
   private async claim(manager: EntityManager, cycleId: number): Promise<StartingPoint> {
-    const version = await lockCycle(manager, cycleId);
+    const next = await claimNextVersion(manager, cycleId);
     const generation = this.cache.generation;
     const kept = this.cache.take(cycleId);
-    if (kept?.version === version) return kept;
+    if (kept?.version === next - 1) return kept;
     const read = await this.loader.read(manager, cycleId);
+    // Read after the claim; the row differs from the state before the change in its version only.
+    read.cycle.version = next - 1;
     return new StartingPoint(read, buildSnapshot(read), generation);
   }
 

@@ -314,11 +314,7 @@ describe('lineup commands', () => {
     const side = () => `T${Math.floor(Math.random() * 1_000_000)}`;
     const { typeId, squadronId, parkedSpot } = model;
     const aircraft = await deck.ok<AircraftView>(ADMIN, 'post', '/api/aircraft', { sideNumber: side(), typeId, squadronId, parkedSpot }, 201);
-    const added = await deck.ok<LineupCommandResult>(AIR_OPS, 'post', `/api/cycles/${cycle.id}/slots`, {
-      aircraftId: aircraft.id, pilotId: null, mission: 'Strike training', fuelLb: 11_000, stores: '', grossWeightLb: 44_000,
-      tanker: false, earlyWarning: false, spare: false,
-    });
-    const slotId = added.change.patch.slots![0].id;
+    const slotId = (await deck.addSlot(cycle.id, aircraft.sideNumber)).id;
     // After this change the API holds the cycle's state in memory (LineupStateCache).
     await deck.place(cycle.id, slotId, 1);
     const renamed = side();

@@ -2,7 +2,7 @@ import { Injectable } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
 import type { DataSource, Repository } from 'typeorm';
-import type { Environment } from '../config/environment.js';
+import { type Environment, runsClustered } from '../config/environment.js';
 import { EntityWriteCounter } from '../database/entity-write-counter.js';
 import { User } from '../users/entities/user.entity.js';
 
@@ -23,7 +23,7 @@ export class PersonLookup {
     @InjectDataSource() dataSource: DataSource,
     config: ConfigService<Environment, true>,
   ) {
-    if (!config.get('REDIS_URL', { infer: true })) this.personWrites = new EntityWriteCounter(dataSource, new Set([User]));
+    if (!runsClustered({ REDIS_URL: config.get('REDIS_URL', { infer: true }) })) this.personWrites = new EntityWriteCounter(dataSource, new Set([User]));
   }
 
   async byId(id: number): Promise<User | null> {

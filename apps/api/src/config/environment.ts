@@ -82,6 +82,14 @@ export function validateEnvironment(raw: Record<string, unknown>): Environment {
 /** The .env of the workspace root, whether the API runs from the root or from apps/api. */
 export const ENV_FILE_PATHS = ['.env', '../../.env'];
 
+/**
+ * True when several API processes share one deck through Redis (REDIS_URL): what a process keeps in
+ * memory about rows others may write must then be read again instead.
+ */
+export function runsClustered(environment: Pick<Environment, 'REDIS_URL'>): boolean {
+  return Boolean(environment.REDIS_URL);
+}
+
 export function webOrigins(environment: Pick<Environment, 'WEB_ORIGINS'>): string[] {
   return environment.WEB_ORIGINS.split(',').map((origin) => origin.trim()).filter(Boolean);
 }

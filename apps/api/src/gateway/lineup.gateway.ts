@@ -11,7 +11,7 @@ import {
 } from '@nestjs/websockets';
 import { TokenVerifier } from '../auth/token-verifier.service.js';
 import { Roles } from '../common/decorators/roles.decorator.js';
-import { type Environment, webOrigins } from '../config/environment.js';
+import { type Environment, runsClustered, webOrigins } from '../config/environment.js';
 import { LineupChangeFeed } from '../lineup/change-feed.service.js';
 import { CycleJoinService } from './cycle-join.service.js';
 import { JoinCycleDto } from './dto/join-cycle.dto.js';
@@ -47,7 +47,7 @@ export class LineupGateway implements OnGatewayInit<CatlineServer>, OnModuleDest
 
   afterInit(server: CatlineServer): void {
     server.use(socketHandshake(this.verifier, this.sessions, webOrigins({ WEB_ORIGINS: this.config.get('WEB_ORIGINS') })));
-    const clustered = Boolean(this.config.get('REDIS_URL', { infer: true }));
+    const clustered = runsClustered({ REDIS_URL: this.config.get('REDIS_URL', { infer: true }) });
     if (clustered) server.on('lineup:committed', (cycleId, version) => this.feed.noteCommittedElsewhere(cycleId, version));
     this.unsubscribe = this.feed.subscribe((change) => {
       // Sent ahead of the broadcast on the same Redis connection, so another process learns of the version

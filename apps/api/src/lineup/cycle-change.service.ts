@@ -50,10 +50,11 @@ export interface FollowUp {
 }
 
 /**
- * The one way a cycle changes: lock the cycle row, let the command check its own basis and write,
- * bump the cycle version with a guarded UPDATE, append the change (its patch is the difference of the
- * snapshots before and after) and commit; the change is published to the cycle's room only after the commit.
- * A transaction that ends in a deadlock runs again, a few times (see deadlock-retry.ts).
+ * The one way a cycle changes: take the cycle row's lock and its next version in one statement, let the
+ * command check its own basis and write, append the change (its patch is the difference of the
+ * snapshots before and after) and commit; the change is published to the cycle's room only after the
+ * commit. The state a command starts from is usually the one the cycle's last change left in memory
+ * (LineupStateCache). A transaction that ends in a deadlock runs again, a few times (see deadlock-retry.ts).
  */
 @Injectable()
 export class CycleChangeService {

@@ -2,7 +2,7 @@ import { Module } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { getDataSourceToken } from '@nestjs/typeorm';
 import type { DataSource } from 'typeorm';
-import type { Environment } from '../config/environment.js';
+import { type Environment, runsClustered } from '../config/environment.js';
 import { MailModule } from '../mail/mail.module.js';
 import { BasisChecks } from './basis-checks.service.js';
 import { LineupChangeFeed } from './change-feed.service.js';
@@ -34,7 +34,7 @@ import { SuggestionService } from './suggestion.service.js';
       provide: LineupStateCache,
       inject: [getDataSourceToken(), ConfigService],
       useFactory: (dataSource: DataSource, config: ConfigService<Environment, true>) =>
-        new LineupStateCache(dataSource, !config.get('REDIS_URL', { infer: true })),
+        new LineupStateCache(dataSource, !runsClustered({ REDIS_URL: config.get('REDIS_URL', { infer: true }) })),
     },
     LineupStateLoader,
     ReadinessService,

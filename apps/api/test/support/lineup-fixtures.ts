@@ -102,9 +102,15 @@ export class LineupDriver {
     }
   }
 
+  /** The id of an aircraft by side number; the fleet is read once, and again for one added since. */
   async aircraftId(side: string): Promise<number> {
     this.aircraft ??= this.ok<AircraftView[]>(OBSERVER, 'get', '/api/aircraft');
-    return (await this.aircraft).find((aircraft) => aircraft.sideNumber === side)!.id;
+    let found = (await this.aircraft).find((aircraft) => aircraft.sideNumber === side);
+    if (!found) {
+      this.aircraft = this.ok<AircraftView[]>(OBSERVER, 'get', '/api/aircraft');
+      found = (await this.aircraft).find((aircraft) => aircraft.sideNumber === side);
+    }
+    return found!.id;
   }
 
   /** Adds a demo aircraft to the cycle's deck pool (a strike sortie of 44,000 lb unless told otherwise). */

@@ -104,5 +104,4 @@ export class LineupStateCache {
     if (this.entries.size > MAX_ENTRIES) this.entries.delete(this.entries.keys().next().value!);
     return entry;
   }
-
 }

@@ -4,7 +4,8 @@ import { defineConfig } from '@playwright/test';
 // DB_* and JWT_SECRET come from the workspace .env; the browser tests get a database of their own.
 if (existsSync('../../.env')) process.loadEnvFile('../../.env');
 
-const port = '3100';
+// E2E_PORT lets two checkouts run their browser tests side by side.
+const port = process.env.E2E_PORT ?? '3100';
 const baseURL = `http://127.0.0.1:${port}`;
 
 export default defineConfig({

@@ -13,7 +13,7 @@ import type {
 export const DEMO_PASSWORD = 'catline-demo';
 export const demoEmail = (who: string) => `${who}@catline.example`;
 
-const baseURL = 'http://127.0.0.1:3100';
+const baseURL = `http://127.0.0.1:${process.env.E2E_PORT ?? '3100'}`;
 
 /** An API client signed in as one demo person: the tests set up their data the way the screens would. */
 export async function apiAs(who: string, password = DEMO_PASSWORD): Promise<APIRequestContext> {

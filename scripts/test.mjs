@@ -18,7 +18,7 @@ function workspacePackages() {
   );
 }
 
-/** Reads the counts of a Jest (--json) or Playwright (json reporter) result file. */
+/** Reads the counts of a Jest (--json), Vitest or Playwright (json reporter) result file. */
 function countsOf(file) {
   if (!existsSync(file)) return null;
   const report = JSON.parse(readFileSync(file, 'utf8'));
@@ -27,6 +27,16 @@ function countsOf(file) {
     return { passed: expected + flaky, failed: unexpected, skipped };
   }
   return { passed: report.numPassedTests, failed: report.numFailedTests, skipped: report.numPendingTests + (report.numTodoTests ?? 0) };
+}
+
+/**
+ * Asks a runner for its counts in a Jest-shaped JSON file: Jest with --json, Vitest with its json
+ * reporter (it refuses --json); the Playwright config reads CATLINE_TEST_RESULTS itself.
+ */
+function resultArgs(command, file) {
+  if (/^playwright\b/.test(command)) return [];
+  if (/^vitest\b/.test(command)) return ['--reporter=default', '--reporter=json', `--outputFile.json=${file}`];
+  return ['--json', `--outputFile=${file}`];
 }
 
 const { pnpm, env, startedDatabase } = await setUp({ browser: true });
@@ -54,9 +64,7 @@ if (failures.length === 0) {
   for (const script of testScripts) {
     for (const pkg of workspacePackages().filter((p) => p.scripts[script])) {
       const file = path.join(resultsDir, `${pkg.name.replace(/^@/, '').replace(/\W+/g, '-')}-${script.replace(':', '-')}.json`);
-      // Jest writes its counts with --json; the Playwright config reads CATLINE_TEST_RESULTS.
-      const jestArgs = script === 'test:e2e' ? [] : ['--json', `--outputFile=${file}`];
-      stage(`${pkg.name} ${script}`, pnpm, ['--filter', pkg.name, 'run', script, ...jestArgs], file);
+      stage(`${pkg.name} ${script}`, pnpm, ['--filter', pkg.name, 'run', script, ...resultArgs(pkg.scripts[script], file)], file);
     }
   }
 }

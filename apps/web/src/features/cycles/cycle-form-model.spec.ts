@@ -1,0 +1,86 @@
+import type { CycleView } from '@catline/contracts';
+import { describe, expect, it } from 'vitest';
+import { newCycleValues, toConditionsRequest, toCreateRequest, validateCycleForm, valuesFromCycle } from './cycle-form-model.js';
+
+// vitest.config.ts pins the device's zone to UTC, so local inputs read as UTC here.
+const now = new Date('2026-12-02T09:12:34.000Z');
+
+describe('a new cycle', () => {
+  it('is planned half an hour ahead, on the minute, with a window from 5 min before to 20 min after', () => {
+    const values = newCycleValues(now, 4);
+    expect(values.number).toBe('4');
+    expect(values.plannedLaunchAt).toBe('2026-12-02T09:42');
+    expect(values.windowStartAt).toBe('2026-12-02T09:37');
+    expect(values.windowEndAt).toBe('2026-12-02T10:02');
+    expect(validateCycleForm(values, true)).toEqual({});
+  });
+
+  it('becomes a create request with numbers and UTC instants', () => {
+    expect(toCreateRequest(newCycleValues(now, 4), 2)).toEqual({
+      shipId: 2,
+      number: 4,
+      plannedLaunchAt: '2026-12-02T09:42:00.000Z',
+      windowStartAt: '2026-12-02T09:37:00.000Z',
+      windowEndAt: '2026-12-02T10:02:00.000Z',
+      shipCourseDeg: 0,
+      shipSpeedKt: 20,
+      trueWindFromDeg: 0,
+      trueWindSpeedKt: 10,
+      temperatureC: 15,
+      pressureHpa: 1013,
+      weatherCase: 'I',
+      night: false,
+      landingAreaInUse: false,
+    });
+  });
+});
+
+describe('editing a cycle', () => {
+  const cycle: CycleView = {
+    id: 9, shipId: 1, number: 12, state: 'planning', version: 5, slotCount: 0, launchedCount: 0,
+    plannedLaunchAt: '2026-12-02T14:30:00.000Z', windowStartAt: '2026-12-02T14:20:00.000Z', windowEndAt: '2026-12-02T15:00:00.000Z',
+    shipCourseDeg: 275.5, shipSpeedKt: 24, trueWindFromDeg: 250, trueWindSpeedKt: 14, temperatureC: -3, pressureHpa: 998,
+    weatherCase: 'III', night: true, landingAreaInUse: true,
+  };
+
+  it('round-trips the cycle through the form into a conditions change on the version it saw', () => {
+    const { shipId: _ship, number: _number, id: _id, state: _state, version: _version, slotCount: _slots, launchedCount: _launched, ...conditions } = cycle;
+    expect(toConditionsRequest(valuesFromCycle(cycle), cycle.version)).toEqual({ ...conditions, basisVersion: 5 });
+  });
+
+  it('does not ask for the number, which a conditions change cannot alter', () => {
+    expect(validateCycleForm({ ...valuesFromCycle(cycle), number: '' }, false)).toEqual({});
+  });
+});
+
+describe('validateCycleForm', () => {
+  const valid = newCycleValues(now, 1);
+
+  it('asks for a whole cycle number', () => {
+    expect(validateCycleForm({ ...valid, number: '2.5' }, true)).toEqual({ number: 'Enter the cycle number, a whole number.' });
+  });
+
+  it.each([
+    ['shipCourseDeg', '360', 'Enter a course from 0 to 359°.'],
+    ['shipSpeedKt', '-1', 'Enter a speed from 0 to 40 kt.'],
+    ['trueWindSpeedKt', '81', 'Enter a wind speed from 0 to 80 kt.'],
+    ['temperatureC', '', 'Enter a temperature from −40 to 55 °C.'],
+    ['pressureHpa', '1013 hPa', 'Enter a pressure from 900 to 1080 hPa.'],
+  ] as const)('refuses %s = "%s"', (field, value, message) => {
+    expect(validateCycleForm({ ...valid, [field]: value }, true)).toEqual({ [field]: message });
+  });
+
+  it('accepts the ends of each range', () => {
+    expect(validateCycleForm({ ...valid, shipSpeedKt: '40', temperatureC: '-40', pressureHpa: '900', trueWindFromDeg: '359.9' }, true)).toEqual({});
+  });
+
+  it('wants the window to open no later than the planned launch and close after it', () => {
+    expect(validateCycleForm({ ...valid, windowStartAt: '2026-12-02T09:43' }, true)).toEqual({ windowStartAt: 'The window must open before the planned launch.' });
+    expect(validateCycleForm({ ...valid, windowStartAt: valid.plannedLaunchAt }, true)).toEqual({});
+    expect(validateCycleForm({ ...valid, windowEndAt: valid.plannedLaunchAt }, true)).toEqual({ windowEndAt: 'The window must close after the planned launch.' });
+  });
+
+  it('asks for a date and time when one is missing, and then does not compare it', () => {
+    expect(validateCycleForm({ ...valid, plannedLaunchAt: '' }, true)).toEqual({ plannedLaunchAt: 'Enter a date and time.' });
+  });
+});

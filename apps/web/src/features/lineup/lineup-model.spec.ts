@@ -1,0 +1,161 @@
+import type { CycleView, LaneView, LineupSnapshot, SlotView } from '@catline/contracts';
+import { describe, expect, it } from 'vitest';
+import { containersOf, isMovable, lineupWarnings, moveSlotLocally, placeName } from './lineup-model.js';
+
+const cycle: CycleView = {
+  id: 7, shipId: 1, number: 3, state: 'planning', version: 12, slotCount: 5, launchedCount: 0,
+  plannedLaunchAt: '2026-12-02T10:00:00.000Z', windowStartAt: '2026-12-02T09:55:00.000Z', windowEndAt: '2026-12-02T10:20:00.000Z',
+  shipCourseDeg: 0, shipSpeedKt: 20, trueWindFromDeg: 0, trueWindSpeedKt: 10, temperatureC: 15, pressureHpa: 1013,
+  weatherCase: 'I', night: false, landingAreaInUse: false,
+};
+
+function slot(id: number, sideNumber: string, place: { catapultId: number; position: number } | null, extra: Partial<SlotView> = {}): SlotView {
+  return {
+    id, cycleId: cycle.id, aircraftId: id, sideNumber, typeId: 1, typeDesignation: 'KX-9', squadronId: 1, squadronCode: 'VX-41',
+    pilotId: null, pilotName: null, mission: 'CAP', fuelLb: 9000, stores: '', grossWeightLb: 42_000,
+    tanker: false, earlyWarning: false, spare: false,
+    catapultId: place?.catapultId ?? null, position: place?.position ?? null, status: 'planned', version: 1,
+    trimDeg: null, afterburnerRequired: false, departure: 'Case I',
+    pilotWeightAckAt: '2026-12-02T09:40:00.000Z', catapultWeightAckAt: '2026-12-02T09:41:00.000Z',
+    suspendReason: null, overrideReason: null, launchedAt: null, statusAt: null, statusBy: null,
+    projectedLaunchAt: null, missesWindow: false, figures: null,
+    ...extra,
+  };
+}
+
+function lane(catapultId: number, number: number, slotIds: number[], extra: Partial<LaneView> = {}): LaneView {
+  return { catapultId, number, position: 'bow', status: 'up', closed: false, slotIds, go: true, headwindKt: 30, crosswindKt: 0, crosswindSide: 'none', ...extra };
+}
+
+// Cat 1 (id 11) holds 101 then 102; cat 2 (id 12) holds 201; the pool holds 110 and 300 by side number.
+function board(): LineupSnapshot {
+  return {
+    cycle,
+    lanes: [lane(11, 1, [1, 2]), lane(12, 2, [3])],
+    pool: [5, 4],
+    slots: [
+      slot(1, '101', { catapultId: 11, position: 0 }),
+      slot(2, '102', { catapultId: 11, position: 1 }),
+      slot(3, '201', { catapultId: 12, position: 0 }),
+      slot(4, '300', null),
+      slot(5, '110', null),
+    ],
+    lastLaunchAt: null,
+    version: 12,
+  };
+}
+
+const move = (slotId: number, toCatapultId: number | null, toIndex: number) => ({ slotId, slotVersion: 1, toCatapultId, toIndex, targetLaneOrder: [] });
+const placeOf = (snapshot: LineupSnapshot, id: number) => {
+  const found = snapshot.slots.find((candidate) => candidate.id === id)!;
+  return { catapultId: found.catapultId, position: found.position };
+};
+
+describe('moveSlotLocally', () => {
+  it('moves a slot from the pool into a lane and renumbers the places behind it', () => {
+    const moved = moveSlotLocally(board(), move(4, 11, 1));
+    expect(moved.lanes[0].slotIds).toEqual([1, 4, 2]);
+    expect(moved.pool).toEqual([5]);
+    expect(placeOf(moved, 4)).toEqual({ catapultId: 11, position: 1 });
+    expect(placeOf(moved, 2)).toEqual({ catapultId: 11, position: 2 });
+  });
+
+  it('moves a slot between lanes, closing the gap it leaves', () => {
+    const moved = moveSlotLocally(board(), move(1, 12, 0));
+    expect(moved.lanes.map((each) => each.slotIds)).toEqual([[2], [1, 3]]);
+    expect(placeOf(moved, 2)).toEqual({ catapultId: 11, position: 0 });
+    expect(placeOf(moved, 3)).toEqual({ catapultId: 12, position: 1 });
+  });
+
+  it('returns a slot to the pool, kept in side-number order with numbers compared as numbers', () => {
+    const snapshot = board();
+    snapshot.slots[1] = { ...snapshot.slots[1], sideNumber: '99' };
+    const moved = moveSlotLocally(snapshot, move(2, null, 0));
+    expect(moved.pool).toEqual([2, 5, 4]);
+    expect(placeOf(moved, 2)).toEqual({ catapultId: null, position: null });
+  });
+
+  it('puts a slot asked for past the end of a lane at its end', () => {
+    expect(moveSlotLocally(board(), move(5, 12, 40)).lanes[1].slotIds).toEqual([3, 5]);
+  });
+
+  it('keeps the slots it did not move as the same objects and leaves the input as it was', () => {
+    const snapshot = board();
+    const moved = moveSlotLocally(snapshot, move(4, 12, 1));
+    expect(moved.slots[0]).toBe(snapshot.slots[0]);
+    expect(snapshot.lanes[1].slotIds).toEqual([3]);
+    expect(snapshot.pool).toEqual([5, 4]);
+  });
+});
+
+describe('the board model', () => {
+  it('gives one container per lane and one for the pool', () => {
+    expect(containersOf(board())).toEqual({ pool: [5, 4], 'lane:11': [1, 2], 'lane:12': [3] });
+  });
+
+  it('names places as a person reads them, counting from one', () => {
+    expect(placeName(board(), 'lane:12', 0)).toBe('catapult 2, place 1');
+    expect(placeName(board(), 'lane:11')).toBe('catapult 1');
+    expect(placeName(board(), 'pool', 3)).toBe('the deck pool');
+  });
+
+  it('lets only planned aircraft move', () => {
+    expect(isMovable(slot(1, '101', null))).toBe(true);
+    expect(isMovable(slot(1, '101', null, { status: 'taxiing' }))).toBe(false);
+  });
+});
+
+describe('lineupWarnings', () => {
+  const clock = (iso: string) => iso.slice(11, 16);
+
+  it('has nothing to say about a ready board with agreed weights', () => {
+    expect(lineupWarnings(board(), clock)).toEqual([]);
+  });
+
+  it('puts a down catapult with aircraft waiting first, then no-go, window and weight warnings', () => {
+    const snapshot = board();
+    snapshot.lanes[1] = lane(12, 2, [3], { status: 'down' });
+    snapshot.slots[0] = {
+      ...snapshot.slots[0],
+      missesWindow: true,
+      projectedLaunchAt: '2026-12-02T10:25:00.000Z',
+      pilotWeightAckAt: null,
+    };
+    snapshot.slots[1] = {
+      ...snapshot.slots[1],
+      figures: {
+        catapultSetting: null, endSpeedKt: 120, requiredAirspeedKt: 140, requiredWindOverDeckKt: 30, marginKt: -4, go: false,
+        reasons: [{ code: 'margin_negative', message: 'End speed is 4 kt short.' }],
+        clearingTurnDeg: 10, headwindKt: 26, crosswindKt: 0, crosswindSide: 'none',
+      },
+    };
+    expect(lineupWarnings(snapshot, clock)).toEqual([
+      { kind: 'catapult_down', key: 'down-12', text: 'Cat 2 is down with 1 aircraft still in its lane.' },
+      { kind: 'missed_window', key: 'window-1', text: '101 misses the launch window (projected 10:25, window ends 10:20).' },
+      { kind: 'no_go', key: 'nogo-2', text: '102 on cat 1 is no-go: End speed is 4 kt short.' },
+      { kind: 'weight_not_agreed', key: 'weights', text: 'Gross weight not yet agreed for 101.' },
+    ]);
+  });
+
+  it('does not repeat a down or closed catapult as a no-go reason of each aircraft in its lane', () => {
+    const snapshot = board();
+    snapshot.lanes[1] = lane(12, 2, [3], { closed: true });
+    snapshot.slots[2] = {
+      ...snapshot.slots[2],
+      figures: {
+        catapultSetting: 20, endSpeedKt: 150, requiredAirspeedKt: 140, requiredWindOverDeckKt: 10, marginKt: 20, go: false,
+        reasons: [{ code: 'catapult_closed', message: 'Cat 2 is closed.' }],
+        clearingTurnDeg: 10, headwindKt: 26, crosswindKt: 0, crosswindSide: 'none',
+      },
+    };
+    expect(lineupWarnings(snapshot, clock).map((warning) => warning.key)).toEqual(['closed-12']);
+  });
+
+  it('ignores aircraft already launched, down or scratched', () => {
+    const snapshot = board();
+    snapshot.lanes[0] = lane(11, 1, [1, 2], { status: 'down' });
+    snapshot.slots[0] = { ...snapshot.slots[0], status: 'launched', pilotWeightAckAt: null };
+    snapshot.slots[1] = { ...snapshot.slots[1], status: 'scratched', missesWindow: true };
+    expect(lineupWarnings(snapshot, clock)).toEqual([]);
+  });
+});

@@ -1,0 +1,110 @@
+import type { CatapultTimeline, CycleReport, CycleView, ReportLaunch } from '@catline/contracts';
+import { describe, expect, it } from 'vitest';
+import { formatDelta, formatDuration, pickReportCycle, timelinePoints, timelineSummary } from './report-model.js';
+
+function cycle(id: number, plannedLaunchAt: string, state: CycleView['state']): CycleView {
+  return {
+    id, shipId: 1, number: id, state, version: 1, slotCount: 0, launchedCount: 0,
+    plannedLaunchAt, windowStartAt: plannedLaunchAt, windowEndAt: plannedLaunchAt,
+    shipCourseDeg: 0, shipSpeedKt: 20, trueWindFromDeg: 0, trueWindSpeedKt: 10, temperatureC: 15, pressureHpa: 1013,
+    weatherCase: 'I', night: false, landingAreaInUse: false,
+  };
+}
+
+function launch(slotId: number, sideNumber: string, catapultNumber: number, plannedAt: string | null, launchedAt: string | null, deltaS: number | null): ReportLaunch {
+  return {
+    slotId, sideNumber, typeDesignation: 'KX-9', squadronId: 1, squadronCode: 'VX-41', pilotName: null, mission: 'CAP',
+    catapultNumber, plannedCatapultNumber: catapultNumber, plannedAt, launchedAt, deltaS,
+    inWindow: launchedAt ? true : null, status: launchedAt ? 'launched' : 'scratched', overrideReason: null,
+  };
+}
+
+function catapult(number: number, launches: ReportLaunch[]): CatapultTimeline {
+  return {
+    catapultId: 10 + number, number, position: 'bow', pair: 1, resetIntervalS: 45, launches, intervals: [],
+    spread: { shortestS: null, meanS: null, longestS: null },
+  };
+}
+
+function report(catapults: CatapultTimeline[]): CycleReport {
+  const empty = { aircraft: 0, launched: 0, onTime: 0, outsideWindow: 0, suspends: 0, down: 0, overrides: 0, scratched: 0 };
+  return {
+    cycle: cycle(1, '2026-12-02T10:00:00.000Z', 'closed'), plannedBasis: 'cycle_start', plannedAtVersion: 3,
+    startedAt: null, closedAt: null, firstLaunchAt: null, lastLaunchAt: null,
+    catapults, pairs: [], suspends: [], downs: [], overrides: [], totals: empty, squadrons: [],
+  };
+}
+
+describe('pickReportCycle', () => {
+  const cycles = [
+    cycle(1, '2026-12-01T08:00:00.000Z', 'closed'),
+    cycle(2, '2026-12-01T12:00:00.000Z', 'closed'),
+    cycle(3, '2026-12-01T16:00:00.000Z', 'executing'),
+  ];
+
+  it('opens on the cycle asked for', () => {
+    expect(pickReportCycle(cycles, 1)?.id).toBe(1);
+  });
+
+  it('otherwise opens on the latest closed cycle by planned launch', () => {
+    expect(pickReportCycle(cycles, null)?.id).toBe(2);
+    expect(pickReportCycle(cycles, 99)?.id).toBe(2);
+  });
+
+  it('opens on the latest cycle when none is closed, and on nothing without cycles', () => {
+    expect(pickReportCycle([cycles[0], cycles[2]].map((each) => ({ ...each, state: 'planning' as const })), null)?.id).toBe(3);
+    expect(pickReportCycle([], null)).toBeUndefined();
+  });
+});
+
+describe('durations for people', () => {
+  it.each([
+    [58.44, '58.4 s'],
+    [119.94, '119.9 s'],
+    [120, '2 min 00 s'],
+    [2095, '34 min 55 s'],
+    [-7.25, '7.3 s'],
+  ])('%d s reads "%s"', (seconds, text) => {
+    expect(formatDuration(seconds)).toBe(text);
+  });
+
+  it('signs a delta by late or early, and calls a twentieth of a second "as planned"', () => {
+    expect(formatDelta(12.5)).toBe('+12.5 s');
+    expect(formatDelta(-3)).toBe('−3.0 s');
+    expect(formatDelta(0.049)).toBe('as planned');
+    expect(formatDelta(null)).toBe('—');
+  });
+});
+
+describe('the timeline', () => {
+  const cat1 = catapult(1, [
+    launch(1, '101', 1, '2026-12-02T10:00:00.000Z', '2026-12-02T10:00:12.000Z', 12),
+    launch(2, '102', 1, '2026-12-02T10:01:00.000Z', '2026-12-02T10:00:58.000Z', -2),
+    launch(3, '103', 1, '2026-12-02T10:02:00.000Z', null, null),
+  ]);
+  const cat2 = catapult(2, [launch(4, '201', 2, null, '2026-12-02T10:03:00.000Z', null)]);
+
+  it('marks planned and actual launches with a label each', () => {
+    const { planned, actual } = timelinePoints(report([cat1, cat2]));
+    expect(planned.map((point) => point.label)).toEqual([
+      '101 planned 10:00:00 on cat 1',
+      '102 planned 10:01:00 on cat 1',
+      '103 planned 10:02:00 on cat 1',
+    ]);
+    expect(actual.map((point) => [point.slotId, point.time])).toEqual([
+      [1, Date.parse('2026-12-02T10:00:12.000Z')],
+      [2, Date.parse('2026-12-02T10:00:58.000Z')],
+      [4, Date.parse('2026-12-02T10:03:00.000Z')],
+    ]);
+  });
+
+  it('summarises each catapult with its launches, their span and the mean delta', () => {
+    expect(timelineSummary(report([cat1, cat2, catapult(3, [])]))).toBe(
+      'Cat 1: 2 of 3 launched, from 10:00:12 to 10:00:58, on average +5.0 s against the plan. Cat 2: 1 of 1 launched, from 10:03:00 to 10:03:00.',
+    );
+  });
+
+  it('says so when no aircraft was planned on a catapult', () => {
+    expect(timelineSummary(report([catapult(1, [])]))).toBe('No aircraft were planned on a catapult in this cycle.');
+  });
+});

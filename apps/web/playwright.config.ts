@@ -39,7 +39,8 @@ export default defineConfig({
     env: {
       PORT: port,
       DB_NAME: `${process.env.DB_NAME ?? 'catline'}_e2e`,
-      WEB_ORIGINS: baseURL,
+      // ship.test: the plain-HTTP spec opens the app under a ship-network name that Chromium maps to 127.0.0.1.
+      WEB_ORIGINS: `${baseURL},http://ship.test:${port}`,
       NODE_ENV: 'production',
       // Every test signs its people in afresh; the per-minute sign-in limit is for password guessing.
       LOGIN_RATE_LIMIT: '1000',

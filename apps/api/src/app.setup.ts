@@ -4,13 +4,26 @@ import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
 import cookieParser from 'cookie-parser';
 import helmet from 'helmet';
 import { ApiExceptionFilter } from './common/filters/api-exception.filter.js';
-import { type Environment, webOrigins } from './config/environment.js';
+import { type Environment, servedOverHttps, trustedProxies, webOrigins } from './config/environment.js';
+
+/**
+ * Helmet's defaults, except that plain HTTP stays plain: `upgrade-insecure-requests` would make the
+ * browser fetch every script and style over HTTPS, which a ship's internal network may not serve (a
+ * blank page), and HSTS would pin the host to HTTPS.
+ */
+function securityHeaders(https: boolean): Parameters<typeof helmet>[0] {
+  return {
+    contentSecurityPolicy: { directives: { upgradeInsecureRequests: https ? [] : null } },
+    strictTransportSecurity: https,
+  };
+}
 
 /** Everything main.ts sets on the app, shared with the integration tests so they test the same thing. */
 export function configureApp(app: INestApplication): void {
   const config = app.get<ConfigService<Environment, true>>(ConfigService);
   app.setGlobalPrefix('api');
-  app.use(helmet());
+  app.getHttpAdapter().getInstance().set('trust proxy', trustedProxies({ TRUST_PROXY: config.get('TRUST_PROXY') }));
+  app.use(helmet(securityHeaders(servedOverHttps({ APP_URL: config.get('APP_URL') }))));
   app.use(cookieParser());
   app.enableCors({ origin: webOrigins({ WEB_ORIGINS: config.get('WEB_ORIGINS') }), credentials: true });
   app.useGlobalPipes(

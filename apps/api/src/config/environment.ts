@@ -1,5 +1,5 @@
 import { plainToInstance, Transform } from 'class-transformer';
-import { IsIn, IsInt, IsNotEmpty, IsOptional, IsString, IsUrl, Max, Min, MinLength, validateSync } from 'class-validator';
+import { IsIn, IsInt, IsNotEmpty, IsOptional, IsString, IsUrl, Matches, Max, Min, MinLength, validateSync } from 'class-validator';
 
 /** Every setting the API reads, validated at boot: a bad value stops the start with a clear message. */
 export class Environment {
@@ -56,6 +56,18 @@ export class Environment {
   APP_URL: string = 'http://127.0.0.1:3000';
 
   /** `off` keeps mail in the outbox unsent (the integration tests, except the spec that reads mail). */
+  /**
+   * Express's `trust proxy` when a TLS-terminating proxy stands in front: `loopback`, a hop count, or
+   * comma-separated addresses/subnets. The client address and the refresh cookie's `Secure` flag then
+   * come from the proxy's X-Forwarded-* headers. Unset, nothing in front is trusted.
+   */
+  @IsOptional()
+  @Transform(({ value }: { value: unknown }) => (value === '' ? undefined : value))
+  @Matches(/^(loopback|linklocal|uniquelocal|\d{1,2}|[0-9a-fA-F.:/]+(\s*,\s*[0-9a-fA-F.:/]+)*)$/, {
+    message: 'TRUST_PROXY must be loopback, linklocal, uniquelocal, a hop count, or comma-separated addresses',
+  })
+  TRUST_PROXY?: string;
+
   @IsIn(['on', 'off'])
   MAIL_SENDER: 'on' | 'off' = 'on';
 
@@ -92,4 +104,16 @@ export function runsClustered(environment: Pick<Environment, 'REDIS_URL'>): bool
 
 export function webOrigins(environment: Pick<Environment, 'WEB_ORIGINS'>): string[] {
   return environment.WEB_ORIGINS.split(',').map((origin) => origin.trim()).filter(Boolean);
+}
+
+/** True when people open the app over HTTPS (APP_URL); ship networks often serve plain HTTP inside. */
+export function servedOverHttps(environment: Pick<Environment, 'APP_URL'>): boolean {
+  return new URL(environment.APP_URL).protocol === 'https:';
+}
+
+/** Express's `trust proxy` value for TRUST_PROXY: a hop count as a number, anything else as written. */
+export function trustedProxies(environment: Pick<Environment, 'TRUST_PROXY'>): string | number | false {
+  const value = environment.TRUST_PROXY?.trim();
+  if (!value) return false;
+  return /^\d+$/.test(value) ? Number(value) : value;
 }

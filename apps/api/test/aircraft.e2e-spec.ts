@@ -3,7 +3,7 @@ import type { INestApplication } from '@nestjs/common';
 import request from 'supertest';
 import { DataSource } from 'typeorm';
 import { Cycle } from '../src/cycles/entities/cycle.entity.js';
-import { Slot } from '../src/lineup/entities/slot.entity.js';
+import { Slot } from '../src/cycle-changes/entities/slot.entity.js';
 import { createAircraft, unique } from './support/fleet-fixtures.js';
 import { bearer, signIn } from './support/sign-in.js';
 import { startTestApp } from './support/test-app.js';

@@ -5,7 +5,7 @@ import { type DataSource, type EntityManager, Not } from 'typeorm';
 import { definedFields } from '../common/defined-fields.js';
 import { AircraftType } from '../aircraft-types/entities/aircraft-type.entity.js';
 import { isDuplicateKey, isStillReferenced } from '../common/errors/database-errors.js';
-import { Slot } from '../lineup/entities/slot.entity.js';
+import { Slot } from '../cycle-changes/entities/slot.entity.js';
 import { Ship } from '../ships/entities/ship.entity.js';
 import { Squadron } from '../squadrons/entities/squadron.entity.js';
 import { toAircraftView } from './aircraft.mapper.js';

@@ -2,12 +2,12 @@ import type { ChangeActor, CycleConditions, LineupCommandResult } from '@catline
 import { Injectable } from '@nestjs/common';
 import type { EntityManager } from 'typeorm';
 import { Aircraft } from '../aircraft/entities/aircraft.entity.js';
-import { BasisChecks } from '../lineup/basis-checks.service.js';
-import { CycleChangeService } from '../lineup/cycle-change.service.js';
+import { BasisChecks } from '../cycle-changes/basis-checks.service.js';
+import { CycleChangeService } from '../cycle-changes/cycle-change.service.js';
 import { CycleClosing } from '../lineup/cycle-closing.service.js';
-import { Slot } from '../lineup/entities/slot.entity.js';
-import type { LineupState } from '../lineup/lineup-state.js';
-import { LineupException } from '../lineup/lineup.exception.js';
+import { Slot } from '../cycle-changes/entities/slot.entity.js';
+import type { LineupState } from '../cycle-changes/lineup-state.js';
+import { LineupException } from '../cycle-changes/lineup.exception.js';
 import { User } from '../users/entities/user.entity.js';
 import { checkWindow, type CycleTimes } from './cycle-window.js';
 import { CyclesException } from './cycles.exception.js';

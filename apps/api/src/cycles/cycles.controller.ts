@@ -4,7 +4,7 @@ import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { Roles } from '../common/decorators/roles.decorator.js';
-import { actorOf } from '../lineup/cycle-change.service.js';
+import { actorOf } from '../cycle-changes/cycle-change.service.js';
 import { CycleCommandsService } from './cycle-commands.service.js';
 import { CyclesService } from './cycles.service.js';
 import { AddSlotDto } from './dto/add-slot.dto.js';

@@ -2,8 +2,8 @@ import { AircraftType } from '../aircraft-types/entities/aircraft-type.entity.js
 import { Aircraft } from '../aircraft/entities/aircraft.entity.js';
 import { Cycle } from '../cycles/entities/cycle.entity.js';
 import { Upload } from '../imports/entities/upload.entity.js';
-import { CycleChange } from '../lineup/entities/cycle-change.entity.js';
-import { Slot } from '../lineup/entities/slot.entity.js';
+import { CycleChange } from '../cycle-changes/entities/cycle-change.entity.js';
+import { Slot } from '../cycle-changes/entities/slot.entity.js';
 import { OutboxMail } from '../mail/entities/outbox-mail.entity.js';
 import { PasswordLink } from '../password-links/entities/password-link.entity.js';
 import { Catapult } from '../ships/entities/catapult.entity.js';

@@ -1,9 +1,9 @@
 import { setTimeout as delay } from 'node:timers/promises';
 import { MAX_REPLAY_CHANGES, type JoinCycleRequest, type JoinCycleResult } from '@catline/contracts';
 import { Injectable } from '@nestjs/common';
-import { LineupChangeFeed } from '../lineup/change-feed.service.js';
-import { LineupChangesService } from '../lineup/lineup-changes.service.js';
-import { LineupSnapshotService } from '../lineup/lineup-snapshot.service.js';
+import { LineupChangeFeed } from '../cycle-changes/change-feed.service.js';
+import { LineupChangesService } from '../cycle-changes/lineup-changes.service.js';
+import { LineupSnapshotService } from '../cycle-changes/lineup-snapshot.service.js';
 
 /** How a joining socket enters the room and gets its answer; both are called together, synchronously. */
 export interface JoinDelivery {

@@ -12,7 +12,7 @@ import {
 import { TokenVerifier } from '../auth/token-verifier.service.js';
 import { Roles } from '../common/decorators/roles.decorator.js';
 import { type Environment, runsClustered, webOrigins } from '../config/environment.js';
-import { LineupChangeFeed } from '../lineup/change-feed.service.js';
+import { LineupChangeFeed } from '../cycle-changes/change-feed.service.js';
 import { CycleJoinService } from './cycle-join.service.js';
 import { JoinCycleDto } from './dto/join-cycle.dto.js';
 import { LeaveCycleDto } from './dto/leave-cycle.dto.js';

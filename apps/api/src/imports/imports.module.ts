@@ -1,5 +1,5 @@
 import { Module } from '@nestjs/common';
-import { LineupModule } from '../lineup/lineup.module.js';
+import { CycleChangesModule } from '../cycle-changes/cycle-changes.module.js';
 import { AirPlanController } from './air-plan.controller.js';
 import { AirPlanImports } from './air-plan-imports.service.js';
 import { LaunchTableController } from './launch-table.controller.js';
@@ -7,7 +7,7 @@ import { LaunchTableImports } from './launch-table-imports.service.js';
 import { UploadsService } from './uploads.service.js';
 
 @Module({
-  imports: [LineupModule],
+  imports: [CycleChangesModule],
   controllers: [AirPlanController, LaunchTableController],
   providers: [AirPlanImports, LaunchTableImports, UploadsService],
 })

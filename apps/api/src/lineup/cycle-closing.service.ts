@@ -3,10 +3,10 @@ import { Injectable } from '@nestjs/common';
 import type { EntityManager } from 'typeorm';
 import { Cycle } from '../cycles/entities/cycle.entity.js';
 import { MailOutbox } from '../mail/mail-outbox.service.js';
-import type { ChangeDraft } from './cycle-change.service.js';
-import type { LineupState } from './lineup-state.js';
-import { isInPool } from './lineup-snapshot.builder.js';
-import { updateSlot } from './slot-writes.js';
+import type { ChangeDraft } from '../cycle-changes/cycle-change.service.js';
+import type { LineupState } from '../cycle-changes/lineup-state.js';
+import { isInPool } from '../cycle-changes/lineup-snapshot.builder.js';
+import { updateSlot } from '../cycle-changes/slot-writes.js';
 
 const FINISHED: readonly SlotStatus[] = ['launched', 'down', 'scratched'];
 

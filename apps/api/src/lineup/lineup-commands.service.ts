@@ -9,14 +9,14 @@ import type {
 } from '@catline/contracts';
 import { Injectable } from '@nestjs/common';
 import { Catapult } from '../ships/entities/catapult.entity.js';
-import { BasisChecks } from './basis-checks.service.js';
-import { Clock } from './clock.js';
-import { CycleChangeService } from './cycle-change.service.js';
-import type { Slot } from './entities/slot.entity.js';
-import { laneSlots } from './lineup-snapshot.builder.js';
-import type { LineupState } from './lineup-state.js';
-import { LineupException } from './lineup.exception.js';
-import { placeSlots, updateSlot } from './slot-writes.js';
+import { BasisChecks } from '../cycle-changes/basis-checks.service.js';
+import { Clock } from '../cycle-changes/clock.js';
+import { CycleChangeService } from '../cycle-changes/cycle-change.service.js';
+import type { Slot } from '../cycle-changes/entities/slot.entity.js';
+import { laneSlots } from '../cycle-changes/lineup-snapshot.builder.js';
+import type { LineupState } from '../cycle-changes/lineup-state.js';
+import { LineupException } from '../cycle-changes/lineup.exception.js';
+import { placeSlots, updateSlot } from '../cycle-changes/slot-writes.js';
 
 const sameOrder = (a: readonly Slot[], b: readonly Slot[]) => a.length === b.length && a.every((slot, i) => slot.id === b[i].id);
 

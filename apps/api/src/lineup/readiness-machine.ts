@@ -1,5 +1,5 @@
 import type { CycleState, ReadinessStep, SlotStatus } from '@catline/contracts';
-import type { LineupRefusalCode } from './lineup.exception.js';
+import type { LineupRefusalCode } from '../cycle-changes/lineup.exception.js';
 
 // The readiness steps of the aircraft on a catapult, as a pure state machine: the services only
 // gather the facts and write what it allows.

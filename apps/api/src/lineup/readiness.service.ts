@@ -12,17 +12,17 @@ import { Aircraft } from '../aircraft/entities/aircraft.entity.js';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
 import { isDuplicateKey } from '../common/errors/database-errors.js';
 import { Catapult } from '../ships/entities/catapult.entity.js';
-import { BasisChecks } from './basis-checks.service.js';
-import { Clock } from './clock.js';
-import { CycleChangeService, actorOf } from './cycle-change.service.js';
+import { BasisChecks } from '../cycle-changes/basis-checks.service.js';
+import { Clock } from '../cycle-changes/clock.js';
+import { CycleChangeService, actorOf } from '../cycle-changes/cycle-change.service.js';
 import { CycleClosing } from './cycle-closing.service.js';
-import type { Slot } from './entities/slot.entity.js';
-import { LineupChangesService } from './lineup-changes.service.js';
-import { laneSlots, slotFigures } from './lineup-snapshot.builder.js';
-import type { LineupState } from './lineup-state.js';
-import { LineupException } from './lineup.exception.js';
+import type { Slot } from '../cycle-changes/entities/slot.entity.js';
+import { LineupChangesService } from '../cycle-changes/lineup-changes.service.js';
+import { laneSlots, slotFigures } from '../cycle-changes/lineup-snapshot.builder.js';
+import type { LineupState } from '../cycle-changes/lineup-state.js';
+import { LineupException } from '../cycle-changes/lineup.exception.js';
 import { advance, launchRefusal, suspend, type Transition } from './readiness-machine.js';
-import { type SlotValues, updateSlot } from './slot-writes.js';
+import { type SlotValues, updateSlot } from '../cycle-changes/slot-writes.js';
 
 const ACKNOWLEDGEABLE: readonly SlotStatus[] = ['planned', 'taxiing', 'on_catapult', 'suspended'];
 

@@ -1,11 +1,11 @@
 import type { SuggestedLineup } from '@catline/contracts';
 import { epochMs, seconds, suggestLineup, type Seconds } from '@catline/launch-math';
 import { Injectable } from '@nestjs/common';
-import { launchCatapult } from './launch-math.adapter.js';
-import { laneSlots, launchPriority, projectLineup, taxiSeconds } from './lineup-snapshot.builder.js';
-import { LineupSnapshotService } from './lineup-snapshot.service.js';
-import type { LineupState } from './lineup-state.js';
-import { asLaunchDataRefusal } from './lineup.exception.js';
+import { launchCatapult } from '../cycle-changes/launch-math.adapter.js';
+import { laneSlots, launchPriority, projectLineup, taxiSeconds } from '../cycle-changes/lineup-snapshot.builder.js';
+import { LineupSnapshotService } from '../cycle-changes/lineup-snapshot.service.js';
+import type { LineupState } from '../cycle-changes/lineup-state.js';
+import { asLaunchDataRefusal } from '../cycle-changes/lineup.exception.js';
 
 /**
  * launch-math's suggested lineup for the cycle's planned aircraft. Aircraft already launched or in the

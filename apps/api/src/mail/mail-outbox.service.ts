@@ -1,8 +1,8 @@
 import { Injectable } from '@nestjs/common';
 import { type EntityManager, In } from 'typeorm';
 import type { Cycle } from '../cycles/entities/cycle.entity.js';
-import { CycleChange } from '../lineup/entities/cycle-change.entity.js';
-import { Slot } from '../lineup/entities/slot.entity.js';
+import { CycleChange } from '../cycle-changes/entities/cycle-change.entity.js';
+import { Slot } from '../cycle-changes/entities/slot.entity.js';
 import { Catapult } from '../ships/entities/catapult.entity.js';
 import { Ship } from '../ships/entities/ship.entity.js';
 import type { Squadron } from '../squadrons/entities/squadron.entity.js';

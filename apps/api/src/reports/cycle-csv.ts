@@ -1,6 +1,6 @@
 import type { CycleReport } from '@catline/contracts';
-import type { CycleChange } from '../lineup/entities/cycle-change.entity.js';
-import type { LineupState } from '../lineup/lineup-state.js';
+import type { CycleChange } from '../cycle-changes/entities/cycle-change.entity.js';
+import type { LineupState } from '../cycle-changes/lineup-state.js';
 import type { CsvCell } from './csv-file.js';
 
 // The columns of a cycle's CSV exports; README.md describes them.

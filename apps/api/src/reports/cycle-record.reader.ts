@@ -1,9 +1,9 @@
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { DataSource, LessThanOrEqual } from 'typeorm';
-import { CycleChange } from '../lineup/entities/cycle-change.entity.js';
-import { LineupSnapshotService } from '../lineup/lineup-snapshot.service.js';
-import type { LineupState } from '../lineup/lineup-state.js';
+import { CycleChange } from '../cycle-changes/entities/cycle-change.entity.js';
+import { LineupSnapshotService } from '../cycle-changes/lineup-snapshot.service.js';
+import type { LineupState } from '../cycle-changes/lineup-state.js';
 
 /** A cycle's state and its change-log rows, in version order, up to the state's version. */
 export interface CycleRecordRows {

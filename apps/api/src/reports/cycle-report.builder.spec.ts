@@ -1,7 +1,7 @@
 import type { ChangeKind, LineupChange, SlotStatus, SlotView } from '@catline/contracts';
 import type { Cycle } from '../cycles/entities/cycle.entity.js';
-import type { Slot } from '../lineup/entities/slot.entity.js';
-import type { LineupState } from '../lineup/lineup-state.js';
+import type { Slot } from '../cycle-changes/entities/slot.entity.js';
+import type { LineupState } from '../cycle-changes/lineup-state.js';
 import type { Catapult } from '../ships/entities/catapult.entity.js';
 import type { Ship } from '../ships/entities/ship.entity.js';
 import { buildCycleReport } from './cycle-report.builder.js';

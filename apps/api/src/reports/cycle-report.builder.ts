@@ -9,9 +9,9 @@ import type {
   ReportSuspend,
   SquadronReport,
 } from '@catline/contracts';
-import { toCycleView } from '../cycles/cycle.mapper.js';
-import type { Slot } from '../lineup/entities/slot.entity.js';
-import type { LineupState } from '../lineup/lineup-state.js';
+import { toCycleView } from '../cycle-changes/cycle.mapper.js';
+import type { Slot } from '../cycle-changes/entities/slot.entity.js';
+import type { LineupState } from '../cycle-changes/lineup-state.js';
 import { readChangeLog, type ChangeLogReading } from './change-log-reading.js';
 import { countFigures, insideWindow, intervalSpread, launchIntervals, secondsBetween, type FlownLaunch } from './report-figures.js';
 

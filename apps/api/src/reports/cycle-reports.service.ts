@@ -1,8 +1,8 @@
 import type { CycleReplay, CycleReport } from '@catline/contracts';
 import { Injectable } from '@nestjs/common';
-import { toLineupChange } from '../lineup/change.mapper.js';
-import { buildSnapshot } from '../lineup/lineup-snapshot.builder.js';
-import { asLaunchDataRefusal } from '../lineup/lineup.exception.js';
+import { toLineupChange } from '../cycle-changes/change.mapper.js';
+import { buildSnapshot } from '../cycle-changes/lineup-snapshot.builder.js';
+import { asLaunchDataRefusal } from '../cycle-changes/lineup.exception.js';
 import { buildCycleReport } from './cycle-report.builder.js';
 import { CycleRecordReader } from './cycle-record.reader.js';
 import { CHANGE_COLUMNS, SLOT_COLUMNS, changeRows, slotRows } from './cycle-csv.js';

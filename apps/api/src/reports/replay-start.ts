@@ -1,6 +1,6 @@
 import type { CycleView } from '@catline/contracts';
 import type { Cycle } from '../cycles/entities/cycle.entity.js';
-import type { LineupState } from '../lineup/lineup-state.js';
+import type { LineupState } from '../cycle-changes/lineup-state.js';
 
 const conditionsOf = (view: CycleView): Partial<Cycle> => ({
   plannedLaunchAt: new Date(view.plannedLaunchAt),

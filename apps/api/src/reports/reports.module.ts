@@ -1,5 +1,5 @@
 import { Module } from '@nestjs/common';
-import { LineupModule } from '../lineup/lineup.module.js';
+import { CycleChangesModule } from '../cycle-changes/cycle-changes.module.js';
 import { CycleRecordReader } from './cycle-record.reader.js';
 import { CycleReportsController } from './cycle-reports.controller.js';
 import { CycleReportsService } from './cycle-reports.service.js';
@@ -7,7 +7,7 @@ import { ShotCountsController } from './shot-counts.controller.js';
 import { ShotCountsService } from './shot-counts.service.js';
 
 @Module({
-  imports: [LineupModule],
+  imports: [CycleChangesModule],
   controllers: [CycleReportsController, ShotCountsController],
   providers: [CycleRecordReader, CycleReportsService, ShotCountsService],
 })

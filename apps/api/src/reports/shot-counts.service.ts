@@ -3,7 +3,7 @@ import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { DataSource } from 'typeorm';
 import { Aircraft } from '../aircraft/entities/aircraft.entity.js';
-import { Slot } from '../lineup/entities/slot.entity.js';
+import { Slot } from '../cycle-changes/entities/slot.entity.js';
 import { Catapult } from '../ships/entities/catapult.entity.js';
 import { toCsv, type CsvFile } from './csv-file.js';
 import type { DayRange } from './day-range.js';

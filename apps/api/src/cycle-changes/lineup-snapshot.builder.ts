@@ -19,7 +19,7 @@ import {
   type UnschedulableReason,
   type WindComponents,
 } from '@catline/launch-math';
-import { toCycleView } from '../cycles/cycle.mapper.js';
+import { toCycleView } from './cycle.mapper.js';
 import type { Catapult } from '../ships/entities/catapult.entity.js';
 import type { Slot } from './entities/slot.entity.js';
 import { launchFigures } from './launch-figures.js';

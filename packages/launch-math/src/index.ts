@@ -7,6 +7,7 @@ export * from './catapult/end-speed.js';
 export * from './aircraft/aircraft-profile.js';
 export * from './launch/launch-assessment.js';
 export * from './launch/launch-settings.js';
+export * from './launch/launch-figures.js';
 export {
   catapultClosedReason,
   projectLaunchTimes,

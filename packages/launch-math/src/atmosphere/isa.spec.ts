@@ -1,6 +1,6 @@
 import { LaunchMathInputError } from '../errors.js';
 import { celsius, celsiusToKelvin, kelvin, kilogramsPerCubicMetre, knots, metres, pascals } from '../units/units.js';
-import { airDensity, densityRatio, hotDayMinimumLaunchAirspeed, isaTroposphere } from './isa.js';
+import { airDensity, densityRatio, hotDayMinimumLaunchAirspeed, isaSpeedOfSound, isaTroposphere, speedOfSound } from './isa.js';
 
 describe('ISA air density', () => {
   it('is 1.225 kg/m3 at 15 C and 101325 Pa', () => {
@@ -24,9 +24,20 @@ describe('ISA air density', () => {
     expect(hotDayMinimumLaunchAirspeed(knots(120), 1)).toBe(120);
   });
 
+  it('gives the speed of sound of the standard tables at sea level and at the tropopause', () => {
+    expect(isaSpeedOfSound(metres(0))).toBeCloseTo(340.294, 3); // US Standard Atmosphere 1976 / ICAO Doc 7488/3 (1993): 340.294 m/s at sea level
+    // ICAO Doc 7488/3 (1993), table by geopotential altitude: 295.07 m/s at 11,000 m (216.65 K). US Standard
+    // Atmosphere 1976 gives the same at 11 km geopotential; its geometric table reads 295.15 m/s at 11 km
+    // geometric, which is 10,981 m geopotential.
+    expect(isaSpeedOfSound(metres(11000))).toBeCloseTo(295.07, 2);
+    expect(speedOfSound(kelvin(216.65))).toBeCloseTo(295.07, 2); // the same air at the tropopause temperature: pressure does not enter
+  });
+
   it('refuses an impossible temperature, pressure or altitude', () => {
     expect(() => airDensity(kelvin(0), pascals(101325))).toThrow(LaunchMathInputError);
     expect(() => airDensity(kelvin(288.15), pascals(-1))).toThrow(LaunchMathInputError);
     expect(() => isaTroposphere(metres(12000))).toThrow(LaunchMathInputError);
+    expect(() => isaSpeedOfSound(metres(-1))).toThrow(LaunchMathInputError);
+    expect(() => speedOfSound(kelvin(0))).toThrow(LaunchMathInputError);
   });
 });

@@ -7,13 +7,18 @@ import {
   STANDARD_GRAVITY,
   type Kelvin,
   type KilogramsPerCubicMetre,
+  metresPerSecond,
   type Knots,
   type Metres,
+  type MetresPerSecond,
   type Pascals,
 } from '../units/units.js';
 
 /** Specific gas constant of dry air in J/(kg K), as the ICAO standard atmosphere fixes it. */
 export const DRY_AIR_GAS_CONSTANT = 287.05287;
+
+/** Ratio of specific heats of dry air (cp / cv), as the ICAO standard atmosphere fixes it. */
+export const AIR_HEAT_CAPACITY_RATIO = 1.4;
 
 /** ICAO standard atmosphere at mean sea level. */
 export const ISA_SEA_LEVEL = {
@@ -54,6 +59,15 @@ export function isaTroposphere(altitude: Metres): {
   const pressure = pascals(ISA_SEA_LEVEL.pressure * (temperature / ISA_SEA_LEVEL.temperature) ** exponent);
   return { temperature, pressure, density: airDensity(temperature, pressure) };
 }
+
+/** Speed of sound (m/s) in dry air at a temperature (K): a = sqrt(gamma R T); pressure does not enter. */
+export function speedOfSound(temperature: Kelvin): MetresPerSecond {
+  requirePositive(temperature, 'Temperature (K)');
+  return metresPerSecond(Math.sqrt(AIR_HEAT_CAPACITY_RATIO * DRY_AIR_GAS_CONSTANT * temperature));
+}
+
+/** Speed of sound (m/s) in the ISA troposphere at a geopotential altitude from 0 to 11,000 m. */
+export const isaSpeedOfSound = (altitude: Metres): MetresPerSecond => speedOfSound(isaTroposphere(altitude).temperature);
 
 /**
  * Hot-day correction of a minimum launch airspeed: the launch data gives an equivalent airspeed;

@@ -1,12 +1,14 @@
 import fc from 'fast-check';
 import { LaunchMathInputError } from '../errors.js';
-import { joules, kilograms, megajoulesToJoules, metres, metresPerSecond, newtons } from '../units/units.js';
+import { joules, kilograms, megajoulesToJoules, metres, metresPerSecond, newtons, seconds } from '../units/units.js';
 import {
   catapultEnergyAtSetting,
   catapultEnergyForEndSpeed,
   endSpeed,
+  endSpeedFromStrokeTime,
   lowestSettingForEndSpeed,
   meanStrokeAcceleration,
+  meanStrokeAccelerationFromTime,
   type CatapultEnergyProfile,
 } from './end-speed.js';
 
@@ -57,6 +59,31 @@ describe('catapult end speed', () => {
         },
       ),
     );
+  });
+});
+
+describe('mean acceleration from stroke length and stroke time', () => {
+  // OpenStax, College Physics, Examples 2.10 and 2.11: a dragster accelerating from rest at 26.0 m/s2 for
+  // 5.56 s covers 402 m and reaches 145 m/s. Read backwards: a 402 m "stroke" run in 5.56 s.
+  it('matches the OpenStax dragster worked example read backwards', () => {
+    expect(meanStrokeAccelerationFromTime(metres(402), seconds(5.56))).toBeCloseTo(26.0, 1); // OpenStax College Physics, Example 2.10: 26.0 m/s2
+    expect(endSpeedFromStrokeTime(metres(402), seconds(5.56))).toBeCloseTo(145, 0); // OpenStax College Physics, Example 2.11: 145 m/s
+  });
+
+  it('agrees with the acceleration from the end speed when the stroke time is 2 s / v', () => {
+    fc.assert(
+      fc.property(fc.double({ min: 10, max: 120, noNaN: true }), fc.double({ min: 50, max: 110, noNaN: true }), (stroke, speed) => {
+        const time = seconds((2 * stroke) / speed); // constant acceleration from rest: mean speed v / 2 (Halliday, Resnick & Walker, ch. 2)
+        const fromTime = meanStrokeAccelerationFromTime(metres(stroke), time);
+        expect(fromTime / meanStrokeAcceleration(metresPerSecond(speed), metres(stroke))).toBeCloseTo(1, 12);
+        expect(endSpeedFromStrokeTime(metres(stroke), time) / speed).toBeCloseTo(1, 12);
+      }),
+    );
+  });
+
+  it('refuses a stroke or a time that is not above zero', () => {
+    expect(() => meanStrokeAccelerationFromTime(metres(90), seconds(0))).toThrow(LaunchMathInputError);
+    expect(() => endSpeedFromStrokeTime(metres(-1), seconds(2))).toThrow(LaunchMathInputError);
   });
 });
 

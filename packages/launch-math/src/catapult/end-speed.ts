@@ -9,6 +9,7 @@ import {
   type MetresPerSecond,
   type MetresPerSecondSquared,
   type Newtons,
+  type Seconds,
 } from '../units/units.js';
 
 /** Where a catapult sits on the deck. */
@@ -98,6 +99,21 @@ export function catapultEnergyForEndSpeed(input: StrokeInput & { readonly endSpe
 export function meanStrokeAcceleration(speed: MetresPerSecond, stroke: Metres): MetresPerSecondSquared {
   requirePositive(stroke, 'Stroke (m)');
   return metresPerSecondSquared(speed ** 2 / (2 * stroke));
+}
+
+/**
+ * Mean acceleration (m/s2) over a stroke (m) run from rest in a measured stroke time (s): from
+ * s = a t^2 / 2, a = 2 s / t^2. With the stroke time from a shot record this checks the energy model.
+ */
+export function meanStrokeAccelerationFromTime(stroke: Metres, time: Seconds): MetresPerSecondSquared {
+  requirePositive(stroke, 'Stroke (m)');
+  requirePositive(time, 'Stroke time (s)');
+  return metresPerSecondSquared((2 * stroke) / time ** 2);
+}
+
+/** End speed (m/s) that a stroke (m) run from rest in `time` (s) at constant acceleration implies: v = a t = 2 s / t. */
+export function endSpeedFromStrokeTime(stroke: Metres, time: Seconds): MetresPerSecond {
+  return metresPerSecond(meanStrokeAccelerationFromTime(stroke, time) * time);
 }
 
 /**

@@ -45,7 +45,11 @@ const fourStepCatapult: CatapultEnergyProfile = {
   maxSetting: 4,
 };
 // The same catapult stopping at the textbook's setting: its best is 165.20 kt for this jet.
-const textbookCatapult: CatapultEnergyProfile = { ...fourStepCatapult, energyAtMaxSetting: joules(7.56e7), maxSetting: 2 };
+const textbookCatapult: CatapultEnergyProfile = {
+  ...fourStepCatapult,
+  energyAtMaxSetting: joules(7.56e7),
+  maxSetting: 2,
+};
 
 const wind = (headwind: number, crosswind = 0, side: WindComponents['side'] = 'none'): WindComponents => ({
   headwind: knots(headwind),
@@ -60,7 +64,12 @@ const open = (overrides: Partial<LaunchConditionsNow> = {}): LaunchConditionsNow
 
 describe('launch figures', () => {
   it('is go on the lowest setting that reaches the end speed wanted, with every figure', () => {
-    const figures = launchFigures({ aircraft: textbookJet, catapult: fourStepCatapult, grossWeight, conditions: open() });
+    const figures = launchFigures({
+      aircraft: textbookJet,
+      catapult: fourStepCatapult,
+      grossWeight,
+      conditions: open(),
+    });
     expect(figures.go).toBe(true);
     expect(figures.reasons).toEqual([]);
     expect(figures.minimumLaunchAirspeed).toBe(140); // flat table (invented)
@@ -78,7 +87,12 @@ describe('launch figures', () => {
   });
 
   it('takes setting 0 when the headwind alone nearly makes the airspeed', () => {
-    const figures = launchFigures({ aircraft: textbookJet, catapult: fourStepCatapult, grossWeight, conditions: open({ wind: wind(100) }) });
+    const figures = launchFigures({
+      aircraft: textbookJet,
+      catapult: fourStepCatapult,
+      grossWeight,
+      conditions: open({ wind: wind(100) }),
+    });
     expect(figures.wantedEndSpeed).toBe(45); // 145 - 100
     expect(figures.setting).toEqual({ setting: 0, source: 'energy_model' }); // 55.53 kt from thrust alone (by hand above)
     expect(figures.margin).toBeCloseTo(10.53, 2); // 100 - (145 - 55.53)
@@ -156,7 +170,12 @@ describe('launch figures', () => {
   });
 
   it('is no-go one knot over the crosswind limit', () => {
-    const figures = launchFigures({ aircraft: textbookJet, catapult: fourStepCatapult, grossWeight, conditions: open({ wind: wind(25, 16, 'port') }) });
+    const figures = launchFigures({
+      aircraft: textbookJet,
+      catapult: fourStepCatapult,
+      grossWeight,
+      conditions: open({ wind: wind(25, 16, 'port') }),
+    });
     expect(figures.reasons).toEqual([{ code: 'crosswind_over_limit', crosswind: 16, side: 'port', limit: 15 }]);
   });
 
@@ -173,8 +192,8 @@ describe('launch figures', () => {
   });
 
   it('refuses a gross weight that is not a weight', () => {
-    expect(() => launchFigures({ aircraft: textbookJet, catapult: fourStepCatapult, grossWeight: pounds(0), conditions: open() })).toThrow(
-      LaunchMathInputError,
-    );
+    expect(() =>
+      launchFigures({ aircraft: textbookJet, catapult: fourStepCatapult, grossWeight: pounds(0), conditions: open() }),
+    ).toThrow(LaunchMathInputError);
   });
 });

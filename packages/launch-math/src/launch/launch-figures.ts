@@ -17,11 +17,26 @@ export type LaunchNoGoReason =
   /** A waist catapult while the landing area is in use. */
   | { readonly code: 'catapult_closed' }
   | { readonly code: 'over_max_gross_weight'; readonly grossWeight: Pounds; readonly maxGrossWeight: Pounds }
-  | { readonly code: 'crosswind_over_limit'; readonly crosswind: Knots; readonly side: CrosswindSide; readonly limit: Knots }
-  | { readonly code: 'outside_launch_table'; readonly grossWeight: Pounds; readonly lowest: Pounds; readonly highest: Pounds }
+  | {
+      readonly code: 'crosswind_over_limit';
+      readonly crosswind: Knots;
+      readonly side: CrosswindSide;
+      readonly limit: Knots;
+    }
+  | {
+      readonly code: 'outside_launch_table';
+      readonly grossWeight: Pounds;
+      readonly lowest: Pounds;
+      readonly highest: Pounds;
+    }
   /** Even the highest setting falls short of the end speed wanted. */
   | { readonly code: 'setting_out_of_range'; readonly wantedEndSpeed: Knots; readonly maxEndSpeed: Knots }
-  | { readonly code: 'margin_negative'; readonly margin: Knots; readonly headwind: Knots; readonly requiredWindOverDeck: Knots };
+  | {
+      readonly code: 'margin_negative';
+      readonly margin: Knots;
+      readonly headwind: Knots;
+      readonly requiredWindOverDeck: Knots;
+    };
 
 export type LaunchNoGoCode = LaunchNoGoReason['code'];
 
@@ -116,14 +131,21 @@ export function launchFigures(input: LaunchFiguresInput): LaunchFigures {
   const minimumAirspeed = minimum.kind === 'airspeed' ? minimum.airspeed : null;
   const requiredAirspeed = minimumAirspeed === null ? null : knots(minimumAirspeed + aircraft.requiredExcess);
   const wantedEndSpeed = requiredAirspeed === null ? null : knots(Math.max(0, requiredAirspeed - wind.headwind));
-  const search = wantedEndSpeed === null ? null : lowestLaunchSetting({ aircraft, catapult, grossWeight, wanted: wantedEndSpeed });
+  const search =
+    wantedEndSpeed === null ? null : lowestLaunchSetting({ aircraft, catapult, grossWeight, wanted: wantedEndSpeed });
   const endSpeed =
-    search?.kind === 'setting' ? search.endSpeed : launchEndSpeed({ aircraft, catapult, setting: catapult.maxSetting, grossWeight });
+    search?.kind === 'setting'
+      ? search.endSpeed
+      : launchEndSpeed({ aircraft, catapult, setting: catapult.maxSetting, grossWeight });
 
   const required =
     minimumAirspeed === null
       ? null
-      : requiredWindOverDeck({ minimumLaunchAirspeed: minimumAirspeed, requiredExcess: aircraft.requiredExcess, endSpeed });
+      : requiredWindOverDeck({
+          minimumLaunchAirspeed: minimumAirspeed,
+          requiredExcess: aircraft.requiredExcess,
+          endSpeed,
+        });
   const margin = required === null ? null : launchMargin(wind.headwind, required);
 
   const reasons: LaunchNoGoReason[] = [];
@@ -133,7 +155,12 @@ export function launchFigures(input: LaunchFiguresInput): LaunchFigures {
     reasons.push({ code: 'over_max_gross_weight', grossWeight, maxGrossWeight: aircraft.maxGrossWeight });
   }
   if (wind.crosswind > aircraft.crosswindLimit) {
-    reasons.push({ code: 'crosswind_over_limit', crosswind: wind.crosswind, side: wind.side, limit: aircraft.crosswindLimit });
+    reasons.push({
+      code: 'crosswind_over_limit',
+      crosswind: wind.crosswind,
+      side: wind.side,
+      limit: aircraft.crosswindLimit,
+    });
   }
   if (minimum.kind === 'outside_launch_table') {
     reasons.push({ code: 'outside_launch_table', grossWeight, lowest: minimum.lowest, highest: minimum.highest });

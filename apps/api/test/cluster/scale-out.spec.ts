@@ -1,21 +1,17 @@
 import type { LineupSnapshot } from '@catline/contracts';
 import { HANDLER, LineupDriver, OBSERVER } from '../support/lineup-fixtures.js';
 import { eventually } from '../support/socket-client.js';
-import { ApiCluster, redisUnavailable } from './api-cluster.js';
+import { ApiCluster } from './api-cluster.js';
 import { CatapultToggler } from './catapult-toggler.js';
 import { FollowingClient } from './following-client.js';
 
 const CLIENTS_PER_PROCESS = 3;
 const SIDES = ['101', '102', '103', '104', '105', '106', '107', '108'];
 
-const skipReason = redisUnavailable();
-if (skipReason) console.warn(`Skipping the scale-out tests: redis-server is missing and could not be installed.\n${skipReason}`);
-const describeWithRedis = skipReason ? describe.skip : describe;
-
 /** The versions after `from` up to `to`, each once, in order. */
 const versionsBetween = (from: number, to: number) => Array.from({ length: to - from }, (_, i) => from + 1 + i);
 
-describeWithRedis('two API processes sharing one board through Redis', () => {
+describe('two API processes sharing one board through Redis', () => {
   let cluster: ApiCluster;
   let deck: LineupDriver;
   let cycleId: number;

@@ -34,10 +34,12 @@ export class CommandBurst {
     });
   }
 
-  /** Resolves once `count` commands were accepted (or after `timeoutMs`). */
+  /** Resolves once `count` commands were accepted; throws after `timeoutMs`, so a stalled burst fails the test. */
   async acceptedAtLeast(count: number, timeoutMs = 30_000): Promise<void> {
     const deadline = Date.now() + timeoutMs;
-    while (this.outcomes.filter((outcome) => outcome.status === 200).length < count && Date.now() < deadline) {
+    const acceptedSoFar = () => this.outcomes.filter((outcome) => outcome.status === 200).length;
+    while (acceptedSoFar() < count) {
+      if (Date.now() > deadline) throw new Error(`Only ${acceptedSoFar()} of ${count} commands accepted within ${timeoutMs} ms`);
       await new Promise((resolve) => setTimeout(resolve, 10));
     }
   }

@@ -12,6 +12,8 @@ export interface CommandOutcome {
   command: LineupCommand;
   status: number;
   body: unknown;
+  /** The answer's Connection header; null without an answer or header. */
+  connection: string | null;
   sentAt: number;
   answeredAt: number;
 }
@@ -96,9 +98,9 @@ export async function send(url: string, token: string, command: LineupCommand, h
     } catch {
       // Not JSON: kept as text for the failure message.
     }
-    return { handler, command, status: response.status, body, sentAt, answeredAt: Date.now() };
+    return { handler, command, status: response.status, body, connection: response.headers.get('connection'), sentAt, answeredAt: Date.now() };
   } catch (error) {
-    return { handler, command, status: 0, body: String(error), sentAt, answeredAt: Date.now() };
+    return { handler, command, status: 0, body: String(error), connection: null, sentAt, answeredAt: Date.now() };
   }
 }
 

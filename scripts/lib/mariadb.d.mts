@@ -14,7 +14,8 @@ export interface AppDatabaseUser {
 
 export function mariadbServer(name?: string): MariaDBServer;
 export function isMariaDBRunning(server?: MariaDBServer): boolean;
-export function startMariaDB(server: MariaDBServer, port: number | string): Promise<void>;
+export function startMariaDB(server: MariaDBServer, port: number | string, options?: { extraArgs?: string[] }): Promise<void>;
+export function queryValue(server: MariaDBServer, statement: string): string | null;
 export function grantAppUser(server: MariaDBServer, env: AppDatabaseUser): void;
 export function stopMariaDB(server: MariaDBServer): void;
 export function ensurePrivateMariaDB(env: AppDatabaseUser & { DB_PORT: number | string }): Promise<boolean>;

@@ -24,13 +24,13 @@ export function mariadbServer(name = 'mariadb') {
 
 const privateServer = mariadbServer();
 
-function binary(name) {
+export function binary(name) {
   const found = ['/usr/sbin', '/usr/bin'].map((dir) => path.join(dir, name)).find((file) => existsSync(file));
   if (!found) throw new Error(`${name} not found; is mariadb-server installed?`);
   return found;
 }
 
-const adminArgs = (server) => ['--no-defaults', `--socket=${server.socket}`, '-uroot'];
+export const adminArgs = (server) => ['--no-defaults', `--socket=${server.socket}`, '-uroot'];
 
 export function isMariaDBRunning(server = privateServer) {
   return existsSync(server.socket) && read(binary('mariadb-admin'), [...adminArgs(server), 'ping']) !== null;
@@ -40,10 +40,18 @@ function sql(server, statements) {
   run(binary('mariadb'), [...adminArgs(server), '-e', statements]);
 }
 
+/** The first column of the first row of a query run as root, or null when the server does not answer. */
+export function queryValue(server, statement) {
+  return read(binary('mariadb'), [...adminArgs(server), '--batch', '--skip-column-names', '-e', statement]);
+}
+
 const quote = (value) => `'${String(value).replace(/\\/g, '\\\\').replace(/'/g, "\\'")}'`;
 
-/** Starts a server on 127.0.0.1:`port` (initialising its data folder when needed) and waits until it answers. */
-export async function startMariaDB(server, port) {
+/**
+ * Starts a server on 127.0.0.1:`port` (initialising its data folder when needed) and waits until it answers;
+ * `extraArgs` are added to the server's command line.
+ */
+export async function startMariaDB(server, port, { extraArgs = [] } = {}) {
   if (!existsSync(path.join(server.dataDir, 'mysql'))) {
     step(`Initialising a private MariaDB in ${path.relative(root, server.dataDir)}/`);
     mkdirSync(server.dataDir, { recursive: true });
@@ -64,6 +72,7 @@ export async function startMariaDB(server, port) {
     `--port=${port}`,
     `--pid-file=${server.pidFile}`,
     `--log-error=${server.logFile}`,
+    ...extraArgs,
   ], { detached: true, stdio: 'ignore' });
   child.unref();
   for (let waited = 0; !isMariaDBRunning(server); waited += 200) {

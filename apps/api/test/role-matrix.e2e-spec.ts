@@ -1,4 +1,4 @@
-import { ROLES, type Role } from '@catline/contracts';
+import { type LineupSnapshot, ROLES, type Role } from '@catline/contracts';
 import type { INestApplication } from '@nestjs/common';
 import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
 import request from 'supertest';
@@ -68,6 +68,29 @@ describe('role matrix', () => {
   it('lets no row count 401 or 403 as an acceptable refusal', () => {
     expect(matrixRoutes.filter((route) => route.refusals?.some((status) => status === 401 || status === 403))).toEqual([]);
   });
+
+  it.each(matrixRoutes.filter((route) => route.notOwner).map((route) => [key(route.method, route.path), route] as const))(
+    '%s refuses a second person of the permitted role, who does not own the target',
+    async (_name, route) => {
+      const [role] = route.allowed as readonly Role[];
+      const context: MatrixContext = { baseUrl: url, caller: role, allowed: true, tokenOf: (of) => tokens.get(of)! };
+      const example = await route.example!(context);
+      const { cycleId, slotId } = example.params as { cycleId: number; slotId: number };
+      const before = await request(url).get(`/api/cycles/${cycleId}/lineup`).set(bearer(tokens.get('observer')!));
+      const response = await request(url)
+        .post(fillPath(route.path, example.params))
+        .set(bearer(await signIn(url, route.notOwner!)))
+        .send(example.body);
+      const after = await request(url).get(`/api/cycles/${cycleId}/lineup`).set(bearer(tokens.get('observer')!));
+      expect({ status: response.status, code: response.body.code }).toEqual({
+        status: 403,
+        code: expect.stringMatching(/^not_your_(catapult|slot)$/),
+      });
+      const slotOf = (snapshot: request.Response) => (snapshot.body as LineupSnapshot).slots.find((slot) => slot.id === slotId);
+      expect(slotOf(after)).toEqual(slotOf(before));
+      expect((after.body as LineupSnapshot).version).toBe((before.body as LineupSnapshot).version);
+    },
+  );
 
   it.each(matrixRoutes.map((route) => [key(route.method, route.path), route] as const))(
     '%s answers each role as the matrix says',

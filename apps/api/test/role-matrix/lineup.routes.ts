@@ -76,6 +76,7 @@ export const lineupRoutes: MatrixRoute[] = [
     method: 'POST',
     path: '/api/cycles/{cycleId}/lineup/slots/{slotId}/advance',
     allowed: ['catapult_officer'],
+    notOwner: 'cat2@catline.example',
     example: async (context) => {
       if (!context.allowed) return refused;
       const { cycleId, slot } = await freshSlot(context, 'executing');
@@ -86,6 +87,7 @@ export const lineupRoutes: MatrixRoute[] = [
     method: 'POST',
     path: '/api/cycles/{cycleId}/lineup/slots/{slotId}/suspend',
     allowed: ['catapult_officer'],
+    notOwner: 'cat2@catline.example',
     example: async (context) => {
       if (!context.allowed) return refused;
       const { cycleId, slot } = await freshSlot(context, 'taxiing');
@@ -96,6 +98,7 @@ export const lineupRoutes: MatrixRoute[] = [
     method: 'POST',
     path: '/api/cycles/{cycleId}/lineup/slots/{slotId}/launch',
     allowed: ['catapult_officer'],
+    notOwner: 'cat2@catline.example',
     example: async (context) => {
       if (!context.allowed) return refused;
       const { cycleId, slot } = await freshSlot(context, 'tensioned');
@@ -106,6 +109,7 @@ export const lineupRoutes: MatrixRoute[] = [
     method: 'POST',
     path: '/api/cycles/{cycleId}/lineup/slots/{slotId}/weight-ack',
     allowed: ['pilot'],
+    notOwner: 'pilot2@catline.example',
     example: async (context) => {
       if (!context.allowed) return refused;
       const { cycleId, slot } = await freshSlot(context, 'pool');

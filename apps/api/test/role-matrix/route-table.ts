@@ -34,4 +34,10 @@ export interface MatrixRoute {
    * example (e.g. 400 for a wrong current password). Never 401 or 403.
    */
   refusals?: readonly number[];
+  /**
+   * For a command on one catapult's lane or one pilot's slot: the e-mail of a second demo person of the
+   * permitted role who does not own the example's target (cat2@ for a slot on cat 1, pilot2@ for
+   * pilot@'s slot). Sent the permitted example, they must be refused with 403 and the slot left as it was.
+   */
+  notOwner?: string;
 }

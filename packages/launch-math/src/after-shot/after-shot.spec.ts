@@ -29,11 +29,13 @@ describe('after the shot', () => {
     expect(clearingTurn(testShip, 'waist', true).direction).toBe('none');
   });
 
-  it('gives the case I jet departure from the ship profile', () => {
-    const departure = departureFor(testShip, 'I');
-    expect(departure.altitude).toBe(500); // NAVEDTRA 14342A, table 11-10: 500 ft
-    expect(departure.untilRange).toBe(7); // NAVEDTRA 14342A, table 11-10: until 7 nm
-    expect(departure.speed).toBe(300); // common practice, no source: 300 kt
+  // Departures are the ship's own data, not a rule of the package: the check is that each case gets its
+  // own entry of the profile, whatever the ship wrote there.
+  it("gives each weather case the ship profile's own departure", () => {
+    expect(departureFor(testShip, 'I')).toBe(testShip.departures.I);
+    expect(departureFor(testShip, 'II')).toBe(testShip.departures.II);
+    expect(departureFor(testShip, 'III')).toBe(testShip.departures.III);
+    expect(departureFor(testShip, 'I')).not.toEqual(departureFor(testShip, 'III'));
   });
 
   it('puts clearing turn and departure on one card', () => {

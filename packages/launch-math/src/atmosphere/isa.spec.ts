@@ -16,11 +16,15 @@ describe('ISA air density', () => {
   it('has a density ratio of one at sea level and below one on a hot day', () => {
     expect(densityRatio(kilogramsPerCubicMetre(1.225))).toBe(1); // ICAO Doc 7488/3 (1993): sea-level density 1.225 kg/m3
     const hotDay = densityRatio(airDensity(celsiusToKelvin(celsius(35)), pascals(101325)));
-    expect(hotDay).toBeCloseTo(288.15 / 308.15, 4); // at equal pressure density goes as 1/T (ideal gas law)
+    // Dry air at 101.325 kPa and 35 C: 1.1455 kg/m3 (density-of-air table at standard pressure, as in the
+    // CRC Handbook of Chemistry and Physics; from memory), over the ISA sea-level 1.225 kg/m3: 0.9351.
+    expect(hotDay).toBeCloseTo(0.9351, 3);
   });
 
   it('raises a minimum launch airspeed by 1 / sqrt(sigma) on a hot day', () => {
-    expect(hotDayMinimumLaunchAirspeed(knots(120), 0.81)).toBeCloseTo(120 / 0.9, 9); // TAS = EAS / sqrt(sigma) (product brief)
+    // TAS = EAS / sqrt(sigma) (FAA-H-8083-25, Pilot's Handbook of Aeronautical Knowledge, ch. 8: true
+    // airspeed rises as density falls). By hand: 120 / sqrt(0.81) = 120 / 0.9 = 133.33 kt.
+    expect(hotDayMinimumLaunchAirspeed(knots(120), 0.81)).toBeCloseTo(133.33, 2);
     expect(hotDayMinimumLaunchAirspeed(knots(120), 1)).toBe(120);
   });
 

@@ -1,4 +1,5 @@
 import fc from 'fast-check';
+import { evaluate } from 'mathjs';
 import { LaunchMathInputError } from '../errors.js';
 import { joules, kilograms, megajoulesToJoules, metres, metresPerSecond, newtons, seconds } from '../units/units.js';
 import {
@@ -34,7 +35,9 @@ describe('catapult end speed', () => {
   });
 
   it('needs no catapult when thrust alone gives the end speed', () => {
-    expect(endSpeed({ ...jet, catapultEnergy: joules(0) })).toBeCloseTo(Math.sqrt((2 * 107e3 * 90) / 2.36e4), 9); // v = sqrt(2 T s / m) (product brief)
+    // Work-energy theorem (Halliday, Resnick & Walker, ch. 7) with the chapter 5 jet: v = sqrt(2 T s / m).
+    expect(endSpeed({ ...jet, catapultEnergy: joules(0) })).toBeCloseTo(evaluate('sqrt(2 * 107 kN * 90 m / 23600 kg)').toNumber('m/s'), 9); // mathjs units
+    expect(endSpeed({ ...jet, catapultEnergy: joules(0) })).toBeCloseTo(28.57, 2); // by hand: sqrt(19,260,000 / 23,600) = sqrt(816.1) = 28.57 m/s
   });
 
   it('delivers energy linearly between the ends of the setting range', () => {

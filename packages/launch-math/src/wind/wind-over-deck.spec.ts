@@ -1,4 +1,5 @@
 import fc from 'fast-check';
+import { evaluate } from 'mathjs';
 import { LaunchMathInputError } from '../errors.js';
 import { angularDistance } from '../units/angles.js';
 import { degrees, knots } from '../units/units.js';
@@ -26,13 +27,16 @@ describe('wind components', () => {
   it('put a wind down the bow on the starboard side of a catapult angled to port', () => {
     const components = catapultWind({ from: degrees(90), bearing: degrees(0), speed: knots(30) }, degrees(-9));
     expect(components.side).toBe('starboard');
-    expect(components.crosswind).toBeCloseTo(30 * Math.sin((9 * Math.PI) / 180), 10); // crosswind = V sin a (product brief)
-    expect(components.headwind).toBeCloseTo(30 * Math.cos((9 * Math.PI) / 180), 10); // headwind = V cos a (product brief)
+    expect(components.crosswind).toBeCloseTo(evaluate('30 * sin(9 deg)'), 10); // mathjs: 4.693 kt (crosswind = V sin a)
+    expect(components.crosswind).toBeCloseTo(4.693, 3); // by hand: 30 x 0.15643 = 4.693 kt (sin 9 deg from a four-figure table)
+    expect(components.headwind).toBeCloseTo(evaluate('30 * cos(9 deg)'), 10); // mathjs: 29.631 kt (headwind = V cos a)
+    expect(components.headwind).toBeCloseTo(29.631, 3); // by hand: 30 x 0.98769 = 29.631 kt (cos 9 deg from a four-figure table)
   });
 
   it('report a tailwind as a negative headwind and a wind from the left as port', () => {
     const components = windComponents(degrees(0), degrees(225), knots(10));
-    expect(components.headwind).toBeCloseTo(-10 * Math.SQRT1_2, 10); // V cos 225 (product brief formula)
+    expect(components.headwind).toBeCloseTo(evaluate('10 * cos(225 deg)'), 10); // mathjs: -7.071 kt
+    expect(components.headwind).toBeCloseTo(-7.071, 3); // by hand: 10 x cos 225 deg = -10 / sqrt 2 = -7.071 kt
     expect(components.side).toBe('port');
   });
 

@@ -26,11 +26,6 @@ export interface SessionResponse {
   user: SessionUser;
 }
 
-// Length rules from the OWASP Authentication Cheat Sheet: at least 12 characters when there is no
-// second factor, and a generous maximum so pass phrases fit. The server enforces them; forms check early.
-export const PASSWORD_MIN_LENGTH = 12;
-export const PASSWORD_MAX_LENGTH = 128;
-
 export interface ChangePasswordRequest {
   currentPassword: string;
   newPassword: string;

@@ -1,4 +1,5 @@
 export * from './auth.js';
+export * from './constraints.js';
 export * from './cycles.js';
 export * from './fleet.js';
 export * from './imports.js';

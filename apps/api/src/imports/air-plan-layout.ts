@@ -1,4 +1,12 @@
-import type { AirPlanRow, ImportProblem } from '@catline/contracts';
+import {
+  type AirPlanRow,
+  FUEL_LB,
+  GROSS_WEIGHT_LB,
+  type ImportProblem,
+  MISSION_MAX_LENGTH,
+  SIDE_NUMBER_MAX_LENGTH,
+  STORES_MAX_LENGTH,
+} from '@catline/contracts';
 import { type Cell, flag, isProblem, optionalEmail, text, wholeNumber } from './cell-parsers.js';
 import { type CsvLayout, type CsvRecord, csvLine, readCsvTable, sortProblems } from './csv-table.js';
 
@@ -32,12 +40,12 @@ export type AirPlanLine = Omit<AirPlanRow, 'typeDesignation' | 'squadronCode' | 
 type Parsers = { [Column in AirPlanColumn]: (raw: string) => Cell<unknown> };
 
 const PARSERS: Parsers = {
-  side_number: (raw) => text(raw, { required: true, maxLength: 8, what: 'A side number' }),
+  side_number: (raw) => text(raw, { required: true, maxLength: SIDE_NUMBER_MAX_LENGTH, what: 'A side number' }),
   pilot_email: optionalEmail,
-  mission: (raw) => text(raw, { required: true, maxLength: 60, what: 'A mission' }),
-  fuel_lb: (raw) => wholeNumber(raw, { min: 0, max: 100_000, unit: 'lb' }),
-  stores: (raw) => text(raw, { required: false, maxLength: 120, what: 'Stores' }),
-  gross_weight_lb: (raw) => wholeNumber(raw, { min: 1, max: 200_000, unit: 'lb' }),
+  mission: (raw) => text(raw, { required: true, maxLength: MISSION_MAX_LENGTH, what: 'A mission' }),
+  fuel_lb: (raw) => wholeNumber(raw, { ...FUEL_LB, unit: 'lb' }),
+  stores: (raw) => text(raw, { required: false, maxLength: STORES_MAX_LENGTH, what: 'Stores' }),
+  gross_weight_lb: (raw) => wholeNumber(raw, { ...GROSS_WEIGHT_LB, unit: 'lb' }),
   tanker: flag,
   early_warning: flag,
   spare: flag,

@@ -1,3 +1,4 @@
+import { EMAIL_MAX_LENGTH } from '@catline/contracts';
 import { isEmail } from 'class-validator';
 
 // Each parser reads one trimmed cell: a value, or the reason it cannot be one.
@@ -45,6 +46,6 @@ export function flag(raw: string): Cell<boolean> {
 /** Empty for none. */
 export function optionalEmail(raw: string): Cell<string | null> {
   if (raw === '') return { value: null };
-  if (raw.length > 254 || !isEmail(raw)) return { reason: 'Not an e-mail address.' };
+  if (raw.length > EMAIL_MAX_LENGTH || !isEmail(raw)) return { reason: 'Not an e-mail address.' };
   return { value: raw.toLowerCase() };
 }

@@ -1,4 +1,4 @@
-import type { CreateAircraftTypeRequest } from '@catline/contracts';
+import { AIRCRAFT_TYPE_RANGES as RANGES, type CreateAircraftTypeRequest, NAME_MAX_LENGTH, TYPE_DESIGNATION_MAX_LENGTH } from '@catline/contracts';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import {
@@ -26,45 +26,45 @@ export class CreateAircraftTypeDto implements CreateAircraftTypeRequest {
   @Trim()
   @IsString()
   @IsNotEmpty({ message: 'designation is required' })
-  @MaxLength(20)
+  @MaxLength(TYPE_DESIGNATION_MAX_LENGTH)
   designation: string;
 
   @ApiProperty()
   @Trim()
   @IsString()
   @IsNotEmpty({ message: 'name is required' })
-  @MaxLength(120)
+  @MaxLength(NAME_MAX_LENGTH)
   name: string;
 
   @ApiProperty({ description: 'Pounds.' })
   @IsInt()
   @IsPositive()
-  @Max(1_000_000)
+  @Max(RANGES.maxGrossWeightLb.max)
   maxGrossWeightLb: number;
 
   @ApiProperty({ description: 'Knots.' })
   @IsNumber()
-  @Min(0)
-  @Max(100)
+  @Min(RANGES.crosswindLimitKt.min)
+  @Max(RANGES.crosswindLimitKt.max)
   crosswindLimitKt: number;
 
   @ApiProperty({ description: 'Pounds-force.' })
   @IsInt()
-  @Min(0)
-  @Max(1_000_000)
+  @Min(RANGES.thrustLbf.min)
+  @Max(RANGES.thrustLbf.max)
   thrustLbf: number;
 
   @ApiProperty({ description: 'Knots above the minimum launch airspeed.' })
   @IsNumber()
-  @Min(0)
-  @Max(100)
+  @Min(RANGES.requiredExcessKt.min)
+  @Max(RANGES.requiredExcessKt.max)
   requiredExcessKt: number;
 
   @ApiPropertyOptional({ nullable: true, description: 'Pounds; null when the type never needs afterburner.' })
   @IsOptional()
   @IsInt()
   @IsPositive()
-  @Max(1_000_000)
+  @Max(RANGES.afterburnerFromLb.max)
   afterburnerFromLb?: number | null;
 
   @ApiProperty({ type: [TrimBandDto], description: 'Increasing upToLb; the last band has upToLb null.' })

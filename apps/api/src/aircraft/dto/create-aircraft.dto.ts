@@ -1,4 +1,4 @@
-import type { CreateAircraftRequest } from '@catline/contracts';
+import { type CreateAircraftRequest, SIDE_NUMBER_MAX_LENGTH, SIDE_NUMBER_PATTERN } from '@catline/contracts';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { IsBoolean, IsInt, IsNotEmpty, IsOptional, IsString, Matches, MaxLength, Min } from 'class-validator';
 import { Trim } from '../../common/validation/trim.decorator.js';
@@ -7,7 +7,7 @@ export class CreateAircraftDto implements CreateAircraftRequest {
   @ApiProperty({ example: '101' })
   @Trim()
   @IsString()
-  @Matches(/^[A-Za-z0-9-]{1,8}$/, { message: 'sideNumber must be 1 to 8 letters, digits or dashes' })
+  @Matches(SIDE_NUMBER_PATTERN, { message: `sideNumber must be 1 to ${SIDE_NUMBER_MAX_LENGTH} letters, digits or dashes` })
   sideNumber: string;
 
   @ApiProperty()

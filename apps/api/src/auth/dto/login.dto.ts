@@ -1,4 +1,4 @@
-import type { LoginRequest } from '@catline/contracts';
+import { EMAIL_MAX_LENGTH, type LoginRequest } from '@catline/contracts';
 import { ApiProperty } from '@nestjs/swagger';
 import { IsEmail, IsString, MaxLength, MinLength } from 'class-validator';
 import { Trim } from '../../common/validation/trim.decorator.js';
@@ -7,7 +7,7 @@ export class LoginDto implements LoginRequest {
   @ApiProperty({ example: 'admin@catline.example' })
   @Trim()
   @IsEmail({}, { message: 'email must be an e-mail address' })
-  @MaxLength(254)
+  @MaxLength(EMAIL_MAX_LENGTH)
   email: string;
 
   @ApiProperty()

@@ -1,4 +1,4 @@
-import type { AddSlotRequest } from '@catline/contracts';
+import { type AddSlotRequest, FUEL_LB, GROSS_WEIGHT_LB, MISSION_MAX_LENGTH, STORES_MAX_LENGTH } from '@catline/contracts';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { IsBoolean, IsInt, IsNotEmpty, IsOptional, IsString, Max, MaxLength, Min } from 'class-validator';
 import { Trim } from '../../common/validation/trim.decorator.js';
@@ -17,29 +17,29 @@ export class AddSlotDto implements AddSlotRequest {
   @Max(2_147_483_647)
   pilotId?: number | null;
 
-  @ApiProperty({ maxLength: 60 })
+  @ApiProperty({ maxLength: MISSION_MAX_LENGTH })
   @Trim()
   @IsString()
   @IsNotEmpty({ message: 'mission is required' })
-  @MaxLength(60)
+  @MaxLength(MISSION_MAX_LENGTH)
   mission: string;
 
-  @ApiProperty({ minimum: 0, maximum: 100_000, description: 'lb' })
+  @ApiProperty({ minimum: FUEL_LB.min, maximum: FUEL_LB.max, description: 'lb' })
   @IsInt({ message: 'fuelLb must be a whole number of pounds' })
-  @Min(0)
-  @Max(100_000)
+  @Min(FUEL_LB.min)
+  @Max(FUEL_LB.max)
   fuelLb: number;
 
-  @ApiProperty({ maxLength: 120 })
+  @ApiProperty({ maxLength: STORES_MAX_LENGTH })
   @Trim()
   @IsString()
-  @MaxLength(120)
+  @MaxLength(STORES_MAX_LENGTH)
   stores: string;
 
-  @ApiProperty({ minimum: 1, maximum: 200_000, description: 'lb' })
+  @ApiProperty({ minimum: GROSS_WEIGHT_LB.min, maximum: GROSS_WEIGHT_LB.max, description: 'lb' })
   @IsInt({ message: 'grossWeightLb must be a whole number of pounds' })
-  @Min(1)
-  @Max(200_000)
+  @Min(GROSS_WEIGHT_LB.min)
+  @Max(GROSS_WEIGHT_LB.max)
   grossWeightLb: number;
 
   @ApiProperty() @IsBoolean() tanker: boolean;

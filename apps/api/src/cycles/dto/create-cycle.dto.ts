@@ -1,4 +1,4 @@
-import type { CreateCycleRequest, WeatherCase } from '@catline/contracts';
+import { type CreateCycleRequest, CYCLE_NUMBER, type WeatherCase } from '@catline/contracts';
 import { ApiProperty } from '@nestjs/swagger';
 import { IsInt, Max, Min } from 'class-validator';
 import { ConditionField } from './condition-fields.js';
@@ -10,10 +10,10 @@ export class CreateCycleDto implements CreateCycleRequest {
   @Max(2_147_483_647)
   shipId: number;
 
-  @ApiProperty({ minimum: 1, maximum: 9999, description: "The cycle's number in the ship's flying day." })
+  @ApiProperty({ minimum: CYCLE_NUMBER.min, maximum: CYCLE_NUMBER.max, description: "The cycle's number in the ship's flying day." })
   @IsInt({ message: 'number must be a whole number' })
-  @Min(1)
-  @Max(9999)
+  @Min(CYCLE_NUMBER.min)
+  @Max(CYCLE_NUMBER.max)
   number: number;
 
   @ConditionField.instant('plannedLaunchAt') plannedLaunchAt: string;

@@ -1,4 +1,10 @@
-import type { CreateSquadronRequest } from '@catline/contracts';
+import {
+  type CreateSquadronRequest,
+  EMAIL_MAX_LENGTH,
+  NAME_MAX_LENGTH,
+  SQUADRON_CODE_MAX_LENGTH,
+  SQUADRON_CODE_PATTERN,
+} from '@catline/contracts';
 import { ApiProperty } from '@nestjs/swagger';
 import { IsEmail, IsNotEmpty, IsString, Matches, MaxLength } from 'class-validator';
 import { Trim } from '../../common/validation/trim.decorator.js';
@@ -8,18 +14,18 @@ export class CreateSquadronDto implements CreateSquadronRequest {
   @Trim()
   @IsString()
   @IsNotEmpty({ message: 'name is required' })
-  @MaxLength(120)
+  @MaxLength(NAME_MAX_LENGTH)
   name: string;
 
   @ApiProperty({ example: 'TDC' })
   @Trim()
   @IsString()
-  @Matches(/^[A-Za-z0-9-]{1,12}$/, { message: 'code must be 1 to 12 letters, digits or dashes' })
+  @Matches(SQUADRON_CODE_PATTERN, { message: `code must be 1 to ${SQUADRON_CODE_MAX_LENGTH} letters, digits or dashes` })
   code: string;
 
   @ApiProperty({ description: 'Where the cycle summary goes.' })
   @Trim()
   @IsEmail({}, { message: 'email must be an e-mail address' })
-  @MaxLength(254)
+  @MaxLength(EMAIL_MAX_LENGTH)
   email: string;
 }

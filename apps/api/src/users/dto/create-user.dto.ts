@@ -1,4 +1,12 @@
-import { type CreateUserRequest, PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH, ROLES, type Role } from '@catline/contracts';
+import {
+  type CreateUserRequest,
+  EMAIL_MAX_LENGTH,
+  NAME_MAX_LENGTH,
+  PASSWORD_MAX_LENGTH,
+  PASSWORD_MIN_LENGTH,
+  ROLES,
+  type Role,
+} from '@catline/contracts';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { IsEmail, IsIn, IsInt, IsNotEmpty, IsOptional, IsString, MaxLength, Min, MinLength } from 'class-validator';
 import { SkipIfAbsent } from '../../common/validation/skip-if-absent.decorator.js';
@@ -8,14 +16,14 @@ export class CreateUserDto implements CreateUserRequest {
   @ApiProperty()
   @Trim()
   @IsEmail({}, { message: 'email must be an e-mail address' })
-  @MaxLength(254)
+  @MaxLength(EMAIL_MAX_LENGTH)
   email: string;
 
   @ApiProperty()
   @Trim()
   @IsString()
   @IsNotEmpty({ message: 'name is required' })
-  @MaxLength(120)
+  @MaxLength(NAME_MAX_LENGTH)
   name: string;
 
   @ApiProperty({ enum: ROLES })

@@ -1,21 +1,27 @@
 import { PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH } from '@catline/contracts';
+import * as z from 'zod/mini';
+import { emailText } from '../../lib/form-rules.js';
 
-/** Enough of an e-mail address to catch a typing slip; the server decides. */
-export const emailPattern = /^[^\s@]+@[^\s@]+\.[^\s@]+$/;
+const yourEmail = emailText('Enter your e-mail address, like name@ship.example.');
 
-export interface NewPasswordProblems {
-  password?: string;
-  repeated?: string;
-}
+export const signInSchema = z.object({
+  email: yourEmail,
+  password: z.string().check(z.minLength(1, 'Enter your password.')),
+});
 
-/** The server's length rules, checked before sending, and the same password typed twice. */
-export function newPasswordProblems(password: string, repeated: string): NewPasswordProblems {
-  const problems: NewPasswordProblems = {};
-  if (password.length < PASSWORD_MIN_LENGTH) problems.password = `At least ${PASSWORD_MIN_LENGTH} characters; a few words make a good one.`;
-  else if (password.length > PASSWORD_MAX_LENGTH) problems.password = `At most ${PASSWORD_MAX_LENGTH} characters.`;
-  if (repeated !== password) problems.repeated = 'The two do not match: type the same password twice.';
-  return problems;
-}
+export const passwordLinkSchema = z.object({ email: yourEmail });
+
+/** The server's length rules, checked before sending, and the same password typed twice; both said at once. */
+export const newPasswordSchema = z.object({ password: z.string(), repeated: z.string() }).check(
+  z.superRefine(({ password, repeated }, context) => {
+    if (password.length < PASSWORD_MIN_LENGTH) {
+      context.addIssue({ code: 'custom', path: ['password'], message: `At least ${PASSWORD_MIN_LENGTH} characters; a few words make a good one.` });
+    } else if (password.length > PASSWORD_MAX_LENGTH) {
+      context.addIssue({ code: 'custom', path: ['password'], message: `At most ${PASSWORD_MAX_LENGTH} characters.` });
+    }
+    if (repeated !== password) context.addIssue({ code: 'custom', path: ['repeated'], message: 'The two do not match: type the same password twice.' });
+  }),
+);
 
 /** The token of a mailed link, which travels after `#token=` so that it never reaches a server log. */
 export function tokenFromHash(hash: string): string | null {

@@ -1,6 +1,12 @@
 import type { CycleView } from '@catline/contracts';
 import { describe, expect, it } from 'vitest';
-import { newCycleValues, toConditionsRequest, toCreateRequest, validateCycleForm, valuesFromCycle } from './cycle-form-model.js';
+import { cycleFormSchema, type CycleFormValues, newCycleValues, toConditionsRequest, toCreateRequest, valuesFromCycle } from './cycle-form-model.js';
+
+/** What the form would show under each field. */
+function validateCycleForm(values: CycleFormValues, withNumber: boolean): Record<string, string> {
+  const result = cycleFormSchema(withNumber).safeParse(values);
+  return Object.fromEntries((result.error?.issues ?? []).map((issue) => [issue.path.join('.'), issue.message]));
+}
 
 // vitest.config.ts pins the device's zone to UTC, so local inputs read as UTC here.
 const now = new Date('2026-12-02T09:12:34.000Z');
@@ -56,22 +62,31 @@ describe('editing a cycle', () => {
 describe('validateCycleForm', () => {
   const valid = newCycleValues(now, 1);
 
-  it('asks for a whole cycle number', () => {
-    expect(validateCycleForm({ ...valid, number: '2.5' }, true)).toEqual({ number: 'Enter the cycle number, a whole number.' });
+  it('asks for a whole cycle number within the server\'s range', () => {
+    const message = 'Enter the cycle number, a whole number from 1 to 9,999.';
+    expect(validateCycleForm({ ...valid, number: '2.5' }, true)).toEqual({ number: message });
+    expect(validateCycleForm({ ...valid, number: '0' }, true)).toEqual({ number: message });
+    expect(validateCycleForm({ ...valid, number: '10000' }, true)).toEqual({ number: message });
   });
 
   it.each([
-    ['shipCourseDeg', '360', 'Enter a course from 0 to 359°.'],
+    ['shipCourseDeg', '360.5', 'Enter a course from 0 to 360°.'],
     ['shipSpeedKt', '-1', 'Enter a speed from 0 to 40 kt.'],
     ['trueWindSpeedKt', '81', 'Enter a wind speed from 0 to 80 kt.'],
     ['temperatureC', '', 'Enter a temperature from −40 to 55 °C.'],
-    ['pressureHpa', '1013 hPa', 'Enter a pressure from 900 to 1080 hPa.'],
+    ['temperatureC', '-40.1', 'Enter a temperature from −40 to 55 °C.'],
+    ['pressureHpa', '1013 hPa', 'Enter a pressure from 870 to 1,085 hPa.'],
   ] as const)('refuses %s = "%s"', (field, value, message) => {
     expect(validateCycleForm({ ...valid, [field]: value }, true)).toEqual({ [field]: message });
   });
 
   it('accepts the ends of each range', () => {
-    expect(validateCycleForm({ ...valid, shipSpeedKt: '40', temperatureC: '-40', pressureHpa: '900', trueWindFromDeg: '359.9' }, true)).toEqual({});
+    expect(validateCycleForm({ ...valid, shipSpeedKt: '40', temperatureC: '-40', pressureHpa: '870', trueWindFromDeg: '360' }, true)).toEqual({});
+    expect(validateCycleForm({ ...valid, shipSpeedKt: '0', temperatureC: '55', pressureHpa: '1085', trueWindSpeedKt: '80' }, true)).toEqual({});
+  });
+
+  it('names every field in trouble at once, figures and window alike', () => {
+    expect(Object.keys(validateCycleForm({ ...valid, shipSpeedKt: '41', windowEndAt: valid.plannedLaunchAt }, true))).toEqual(['shipSpeedKt', 'windowEndAt']);
   });
 
   it('wants the window to open no later than the planned launch and close after it', () => {

@@ -1,23 +1,15 @@
-import type { CreateCycleRequest, CycleConditions, CycleView, UpdateCycleConditionsRequest, WeatherCase } from '@catline/contracts';
-
-/** Form values as typed: strings until they pass validation. */
-export interface CycleFormValues {
-  number: string;
-  plannedLaunchAt: string;
-  windowStartAt: string;
-  windowEndAt: string;
-  shipCourseDeg: string;
-  shipSpeedKt: string;
-  trueWindFromDeg: string;
-  trueWindSpeedKt: string;
-  temperatureC: string;
-  pressureHpa: string;
-  weatherCase: WeatherCase;
-  night: boolean;
-  landingAreaInUse: boolean;
-}
-
-export type CycleFormErrors = Partial<Record<keyof CycleFormValues, string>>;
+import {
+  CONDITION_RANGES,
+  type CreateCycleRequest,
+  CYCLE_NUMBER,
+  type CycleConditions,
+  type CycleView,
+  type UpdateCycleConditionsRequest,
+  WEATHER_CASES,
+} from '@catline/contracts';
+import * as z from 'zod/mini';
+import { formatWhole } from '../../lib/format.js';
+import { numberText } from '../../lib/form-rules.js';
 
 const pad = (n: number) => String(n).padStart(2, '0');
 
@@ -67,33 +59,62 @@ export function valuesFromCycle(cycle: CycleView): CycleFormValues {
   };
 }
 
-type NumericField = 'shipCourseDeg' | 'shipSpeedKt' | 'trueWindFromDeg' | 'trueWindSpeedKt' | 'temperatureC' | 'pressureHpa';
+type ConditionFigure = keyof typeof CONDITION_RANGES;
 
-// Plausible bounds for a person's typing mistakes; the server holds the real rules.
-const ranges: Record<NumericField, [number, number, string]> = {
-  shipCourseDeg: [0, 359.9, 'a course from 0 to 359°'],
-  shipSpeedKt: [0, 40, 'a speed from 0 to 40 kt'],
-  trueWindFromDeg: [0, 359.9, 'a direction from 0 to 359°'],
-  trueWindSpeedKt: [0, 80, 'a wind speed from 0 to 80 kt'],
-  temperatureC: [-40, 55, 'a temperature from −40 to 55 °C'],
-  pressureHpa: [900, 1080, 'a pressure from 900 to 1080 hPa'],
+const figureWords: Record<ConditionFigure, [words: string, unit: string]> = {
+  shipCourseDeg: ['a course', '°'],
+  shipSpeedKt: ['a speed', ' kt'],
+  trueWindFromDeg: ['a direction', '°'],
+  trueWindSpeedKt: ['a wind speed', ' kt'],
+  temperatureC: ['a temperature', ' °C'],
+  pressureHpa: ['a pressure', ' hPa'],
 };
 
-export function validateCycleForm(values: CycleFormValues, withNumber: boolean): CycleFormErrors {
-  const errors: CycleFormErrors = {};
-  if (withNumber && !/^\d+$/.test(values.number.trim())) errors.number = 'Enter the cycle number, a whole number.';
-  for (const [field, [min, max, words]] of Object.entries(ranges) as [NumericField, [number, number, string]][]) {
-    const value = Number(values[field]);
-    if (values[field].trim() === '' || !Number.isFinite(value) || value < min || value > max) errors[field] = `Enter ${words}.`;
-  }
-  const times = (['windowStartAt', 'plannedLaunchAt', 'windowEndAt'] as const).map((field) => Date.parse(values[field]));
-  (['windowStartAt', 'plannedLaunchAt', 'windowEndAt'] as const).forEach((field, index) => {
-    if (Number.isNaN(times[index])) errors[field] = 'Enter a date and time.';
-  });
-  if (!errors.windowStartAt && !errors.plannedLaunchAt && times[0] > times[1]) errors.windowStartAt = 'The window must open before the planned launch.';
-  if (!errors.windowEndAt && !errors.plannedLaunchAt && times[2] <= times[1]) errors.windowEndAt = 'The window must close after the planned launch.';
-  return errors;
-}
+// A typographic minus, as people write a temperature below zero.
+const figure = (value: number) => (value < 0 ? `−${formatWhole(-value)}` : formatWhole(value));
+
+const conditionFigure = (field: ConditionFigure) => {
+  const [words, unit] = figureWords[field];
+  const range = CONDITION_RANGES[field];
+  return numberText(range, `Enter ${words} from ${figure(range.min)} to ${figure(range.max)}${unit}.`);
+};
+
+const dateTime = z.string().check(z.refine((text) => !Number.isNaN(Date.parse(text)), 'Enter a date and time.'));
+
+/**
+ * The cycle form as typed (text until it passes), checked against the server's ranges. Only a new
+ * cycle takes a number; a conditions change keeps it.
+ */
+export const cycleFormSchema = (withNumber: boolean) =>
+  z
+    .object({
+      number: withNumber
+        ? numberText(CYCLE_NUMBER, `Enter the cycle number, a whole number from ${CYCLE_NUMBER.min} to ${formatWhole(CYCLE_NUMBER.max)}.`, { whole: true })
+        : z.string(),
+      plannedLaunchAt: dateTime,
+      windowStartAt: dateTime,
+      windowEndAt: dateTime,
+      shipCourseDeg: conditionFigure('shipCourseDeg'),
+      shipSpeedKt: conditionFigure('shipSpeedKt'),
+      trueWindFromDeg: conditionFigure('trueWindFromDeg'),
+      trueWindSpeedKt: conditionFigure('trueWindSpeedKt'),
+      temperatureC: conditionFigure('temperatureC'),
+      pressureHpa: conditionFigure('pressureHpa'),
+      weatherCase: z.enum(WEATHER_CASES),
+      night: z.boolean(),
+      landingAreaInUse: z.boolean(),
+    })
+    .check(
+      z.superRefine((values, context) => {
+        const [opens, planned, closes] = [values.windowStartAt, values.plannedLaunchAt, values.windowEndAt].map(Date.parse);
+        if (Number.isNaN(planned)) return;
+        if (opens > planned) context.addIssue({ code: 'custom', path: ['windowStartAt'], message: 'The window must open before the planned launch.' });
+        if (closes <= planned) context.addIssue({ code: 'custom', path: ['windowEndAt'], message: 'The window must close after the planned launch.' });
+      }),
+    );
+
+/** Form values as typed: text until they pass the schema. */
+export type CycleFormValues = z.infer<ReturnType<typeof cycleFormSchema>>;
 
 function conditionsOf(values: CycleFormValues): CycleConditions & Pick<CreateCycleRequest, 'plannedLaunchAt' | 'windowStartAt' | 'windowEndAt'> {
   return {

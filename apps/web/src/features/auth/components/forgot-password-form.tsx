@@ -1,23 +1,16 @@
-import { useState, type FormEvent } from 'react';
 import { Alert, Button, Input, Stack } from '@chakra-ui/react';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useForm } from 'react-hook-form';
 import { FormField } from '../../../components/form-field.js';
 import { errorMessage } from '../../../lib/api-error.js';
 import { useRequestPasswordReset } from '../api/request-password-reset.js';
-import { emailPattern } from '../auth-model.js';
+import { passwordLinkSchema } from '../auth-model.js';
 import { PageLink } from './page-link.js';
 
 /** Asks for a link to set a new password; shows the server's answer, which is the same for every e-mail. */
 export function ForgotPasswordForm() {
   const request = useRequestPasswordReset();
-  const [email, setEmail] = useState('');
-  const [problem, setProblem] = useState<string | undefined>();
-
-  const submit = (event: FormEvent) => {
-    event.preventDefault();
-    const found = emailPattern.test(email.trim()) ? undefined : 'Enter your e-mail address, like name@ship.example.';
-    setProblem(found);
-    if (!found) request.mutate({ email: email.trim() });
-  };
+  const { register, handleSubmit, formState: { errors } } = useForm({ resolver: zodResolver(passwordLinkSchema), defaultValues: { email: '' } });
 
   if (request.isSuccess) {
     return (
@@ -32,7 +25,7 @@ export function ForgotPasswordForm() {
   }
 
   return (
-    <form onSubmit={submit} noValidate aria-label="Ask for a new password link">
+    <form onSubmit={handleSubmit((values) => request.mutate(values))} noValidate aria-label="Ask for a new password link">
       <Stack gap="4">
         {request.isError && (
           <Alert.Root status="error" colorPalette="nogo" role="alert">
@@ -40,8 +33,8 @@ export function ForgotPasswordForm() {
             <Alert.Title>{errorMessage(request.error)}</Alert.Title>
           </Alert.Root>
         )}
-        <FormField label="E-mail" error={problem} required>
-          <Input type="email" autoComplete="username" value={email} onChange={(event) => setEmail(event.currentTarget.value)} size="lg" />
+        <FormField label="E-mail" error={errors.email?.message} required>
+          <Input type="email" autoComplete="username" {...register('email')} size="lg" />
         </FormField>
         <Button type="submit" size="lg" colorPalette="accent" loading={request.isPending} loadingText="Sending…">
           Send me a link

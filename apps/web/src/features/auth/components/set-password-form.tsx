@@ -1,11 +1,13 @@
-import { useState, type FormEvent } from 'react';
+import { useState } from 'react';
 import { Alert, Button, Input, Stack, Text } from '@chakra-ui/react';
+import { zodResolver } from '@hookform/resolvers/zod';
 import type { UseMutationResult } from '@tanstack/react-query';
 import type { SetPasswordWithTokenRequest } from '@catline/contracts';
+import { useForm } from 'react-hook-form';
 import { useLocation, useNavigate } from 'react-router-dom';
 import { FormField } from '../../../components/form-field.js';
 import { errorMessage } from '../../../lib/api-error.js';
-import { type NewPasswordProblems, newPasswordProblems, tokenFromHash } from '../auth-model.js';
+import { newPasswordSchema, tokenFromHash } from '../auth-model.js';
 import { PageLink } from './page-link.js';
 
 interface SetPasswordFormProps {
@@ -22,17 +24,7 @@ export function SetPasswordForm({ send, submitLabel, doneNotice, newLink }: SetP
   const location = useLocation();
   const navigate = useNavigate();
   const [token] = useState(() => tokenFromHash(location.hash));
-  const [password, setPassword] = useState('');
-  const [repeated, setRepeated] = useState('');
-  const [problems, setProblems] = useState<NewPasswordProblems>({});
-
-  const submit = (event: FormEvent) => {
-    event.preventDefault();
-    const found = newPasswordProblems(password, repeated);
-    setProblems(found);
-    if (!token || found.password || found.repeated) return;
-    send.mutate({ token, newPassword: password }, { onSuccess: () => void navigate('/sign-in', { replace: true, state: { notice: doneNotice } }) });
-  };
+  const { register, handleSubmit, formState: { errors } } = useForm({ resolver: zodResolver(newPasswordSchema), defaultValues: { password: '', repeated: '' } });
 
   if (!token) {
     return (
@@ -47,7 +39,13 @@ export function SetPasswordForm({ send, submitLabel, doneNotice, newLink }: SetP
   }
 
   return (
-    <form onSubmit={submit} noValidate aria-label={submitLabel}>
+    <form
+      onSubmit={handleSubmit(({ password }) =>
+        send.mutate({ token, newPassword: password }, { onSuccess: () => void navigate('/sign-in', { replace: true, state: { notice: doneNotice } }) }),
+      )}
+      noValidate
+      aria-label={submitLabel}
+    >
       <Stack gap="4">
         {send.isError && (
           <Stack gap="2">
@@ -58,11 +56,11 @@ export function SetPasswordForm({ send, submitLabel, doneNotice, newLink }: SetP
             {newLink && <PageLink to={newLink.to}>{newLink.label}</PageLink>}
           </Stack>
         )}
-        <FormField label="New password" error={problems.password} required>
-          <Input type="password" autoComplete="new-password" value={password} onChange={(event) => setPassword(event.currentTarget.value)} size="lg" />
+        <FormField label="New password" error={errors.password?.message} required>
+          <Input type="password" autoComplete="new-password" {...register('password')} size="lg" />
         </FormField>
-        <FormField label="New password again" error={problems.repeated} required>
-          <Input type="password" autoComplete="new-password" value={repeated} onChange={(event) => setRepeated(event.currentTarget.value)} size="lg" />
+        <FormField label="New password again" error={errors.repeated?.message} required>
+          <Input type="password" autoComplete="new-password" {...register('repeated')} size="lg" />
         </FormField>
         <Text fontSize="sm" color="fg.muted">
           The link works once. After this you sign in with your e-mail and this password.

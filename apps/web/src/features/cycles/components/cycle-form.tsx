@@ -1,10 +1,10 @@
-import { useState, type FormEvent } from 'react';
 import { Alert, Button, HStack, Input, SimpleGrid, Stack } from '@chakra-ui/react';
-import { WEATHER_CASES, type WeatherCase } from '@catline/contracts';
-import { CheckField } from '../../../components/check-field.js';
+import { WEATHER_CASES } from '@catline/contracts';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useForm } from 'react-hook-form';
+import { CheckControl, SelectControl } from '../../../components/form-controls.js';
 import { FormField } from '../../../components/form-field.js';
-import { SelectInput } from '../../../components/select-field.js';
-import { type CycleFormErrors, type CycleFormValues, validateCycleForm } from '../cycle-form-model.js';
+import { cycleFormSchema, type CycleFormValues } from '../cycle-form-model.js';
 
 interface CycleFormProps {
   initial: CycleFormValues;
@@ -28,19 +28,10 @@ const numberFields = [
 ] as const;
 
 export function CycleForm({ initial, withNumber, submitLabel, pending, serverError, readOnly, onSubmit, onCancel }: CycleFormProps) {
-  const [values, setValues] = useState(initial);
-  const [errors, setErrors] = useState<CycleFormErrors>({});
-  const set = <K extends keyof CycleFormValues>(field: K, value: CycleFormValues[K]) => setValues((current) => ({ ...current, [field]: value }));
-
-  const submit = (event: FormEvent) => {
-    event.preventDefault();
-    const found = validateCycleForm(values, withNumber);
-    setErrors(found);
-    if (Object.keys(found).length === 0) onSubmit(values);
-  };
+  const { register, control, handleSubmit, formState: { errors } } = useForm({ resolver: zodResolver(cycleFormSchema(withNumber)), defaultValues: initial });
 
   return (
-    <form onSubmit={submit} noValidate aria-label={submitLabel}>
+    <form onSubmit={handleSubmit(onSubmit)} noValidate aria-label={submitLabel}>
       <Stack gap="4">
         {serverError && (
           <Alert.Root status="error" colorPalette="nogo" role="alert">
@@ -50,36 +41,36 @@ export function CycleForm({ initial, withNumber, submitLabel, pending, serverErr
         )}
         <SimpleGrid columns={{ base: 1, sm: 2, lg: 4 }} gap="3">
           {withNumber && (
-            <FormField label="Cycle number" error={errors.number} required>
-              <Input inputMode="numeric" value={values.number} onChange={(event) => set('number', event.currentTarget.value)} disabled={readOnly} />
+            <FormField label="Cycle number" error={errors.number?.message} required>
+              <Input inputMode="numeric" {...register('number')} disabled={readOnly} />
             </FormField>
           )}
-          <FormField label="Window opens" error={errors.windowStartAt} required>
-            <Input type="datetime-local" value={values.windowStartAt} onChange={(event) => set('windowStartAt', event.currentTarget.value)} disabled={readOnly} />
+          <FormField label="Window opens" error={errors.windowStartAt?.message} required>
+            <Input type="datetime-local" {...register('windowStartAt')} disabled={readOnly} />
           </FormField>
-          <FormField label="Planned first launch" error={errors.plannedLaunchAt} required>
-            <Input type="datetime-local" value={values.plannedLaunchAt} onChange={(event) => set('plannedLaunchAt', event.currentTarget.value)} disabled={readOnly} />
+          <FormField label="Planned first launch" error={errors.plannedLaunchAt?.message} required>
+            <Input type="datetime-local" {...register('plannedLaunchAt')} disabled={readOnly} />
           </FormField>
-          <FormField label="Window closes" error={errors.windowEndAt} required>
-            <Input type="datetime-local" value={values.windowEndAt} onChange={(event) => set('windowEndAt', event.currentTarget.value)} disabled={readOnly} />
+          <FormField label="Window closes" error={errors.windowEndAt?.message} required>
+            <Input type="datetime-local" {...register('windowEndAt')} disabled={readOnly} />
           </FormField>
           {numberFields.map(([field, label]) => (
-            <FormField key={field} label={label} error={errors[field]} required>
-              <Input inputMode="decimal" value={values[field]} onChange={(event) => set(field, event.currentTarget.value)} disabled={readOnly} />
+            <FormField key={field} label={label} error={errors[field]?.message} required>
+              <Input inputMode="decimal" {...register(field)} disabled={readOnly} />
             </FormField>
           ))}
           <FormField label="Weather case" required>
-            <SelectInput
-              value={values.weatherCase}
-              onChange={(value) => set('weatherCase', value as WeatherCase)}
+            <SelectControl
+              control={control}
+              name="weatherCase"
               choices={WEATHER_CASES.map((weatherCase) => ({ value: weatherCase, label: `Case ${weatherCase}` }))}
               disabled={readOnly}
             />
           </FormField>
         </SimpleGrid>
         <HStack gap="6" wrap="wrap">
-          <CheckField label="Night cycle" checked={values.night} onChange={(checked) => set('night', checked)} disabled={readOnly} />
-          <CheckField label="Landing area in use (waist catapults closed)" checked={values.landingAreaInUse} onChange={(checked) => set('landingAreaInUse', checked)} disabled={readOnly} />
+          <CheckControl control={control} name="night" label="Night cycle" disabled={readOnly} />
+          <CheckControl control={control} name="landingAreaInUse" label="Landing area in use (waist catapults closed)" disabled={readOnly} />
         </HStack>
         {!readOnly && (
           <HStack gap="2">

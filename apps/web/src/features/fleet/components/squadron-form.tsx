@@ -1,32 +1,18 @@
-import { useState, type FormEvent } from 'react';
 import { Alert, Button, Input, SimpleGrid, Stack } from '@chakra-ui/react';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useForm } from 'react-hook-form';
 import { FormField } from '../../../components/form-field.js';
 import { errorMessage } from '../../../lib/api-error.js';
 import { useCreateSquadron } from '../api/create-squadron.js';
-
-const blank = { name: '', code: '', email: '' };
-type Errors = Partial<Record<keyof typeof blank, string>>;
+import { blankSquadron, squadronSchema } from '../fleet-model.js';
 
 export function SquadronForm() {
   const create = useCreateSquadron();
-  const [values, setValues] = useState(blank);
-  const [errors, setErrors] = useState<Errors>({});
-  const set = (field: keyof typeof blank, value: string) => setValues((current) => ({ ...current, [field]: value }));
-
-  const submit = (event: FormEvent) => {
-    event.preventDefault();
-    const found: Errors = {
-      name: values.name.trim() ? undefined : 'Enter the squadron name.',
-      code: /^[A-Za-z0-9-]{1,12}$/.test(values.code.trim()) ? undefined : 'Up to 12 letters, digits or dashes.',
-      email: /^[^\s@]+@[^\s@]+\.[^\s@]+$/.test(values.email.trim()) ? undefined : 'Enter the duty officer e-mail address.',
-    };
-    setErrors(found);
-    if (Object.values(found).some(Boolean)) return;
-    create.mutate({ name: values.name.trim(), code: values.code.trim(), email: values.email.trim() }, { onSuccess: () => setValues(blank) });
-  };
+  const { register, handleSubmit, reset, formState: { errors } } = useForm({ resolver: zodResolver(squadronSchema), defaultValues: blankSquadron });
+  const code = register('code');
 
   return (
-    <form onSubmit={submit} noValidate aria-label="Add a squadron">
+    <form onSubmit={handleSubmit((squadron) => create.mutate(squadron, { onSuccess: () => reset() }))} noValidate aria-label="Add a squadron">
       <Stack gap="3">
         {create.isError && (
           <Alert.Root status="error" colorPalette="nogo" role="alert">
@@ -35,14 +21,21 @@ export function SquadronForm() {
           </Alert.Root>
         )}
         <SimpleGrid columns={{ base: 1, sm: 3 }} gap="3">
-          <FormField label="Name" error={errors.name} required>
-            <Input value={values.name} onChange={(event) => set('name', event.currentTarget.value)} />
+          <FormField label="Name" error={errors.name?.message} required>
+            <Input {...register('name')} />
           </FormField>
-          <FormField label="Code" error={errors.code} required>
-            <Input value={values.code} onChange={(event) => set('code', event.currentTarget.value.toUpperCase())} />
+          <FormField label="Code" error={errors.code?.message} required>
+            <Input
+              {...code}
+              onChange={(event) => {
+                // Codes are written in capitals; the text changes as it is typed.
+                event.currentTarget.value = event.currentTarget.value.toUpperCase();
+                return code.onChange(event);
+              }}
+            />
           </FormField>
-          <FormField label="E-mail for reports" error={errors.email} required>
-            <Input type="email" value={values.email} onChange={(event) => set('email', event.currentTarget.value)} />
+          <FormField label="E-mail for reports" error={errors.email?.message} required>
+            <Input type="email" {...register('email')} />
           </FormField>
         </SimpleGrid>
         <Button type="submit" colorPalette="accent" alignSelf="flex-start" loading={create.isPending}>

@@ -1,52 +1,31 @@
-import { useState, type FormEvent } from 'react';
+import { useState } from 'react';
 import { Alert, Button, Input, SimpleGrid, Stack } from '@chakra-ui/react';
-import { PASSWORD_MIN_LENGTH, ROLE_LABELS, ROLES, type CatapultView, type Role, type SquadronView, type UserView } from '@catline/contracts';
+import { ROLE_LABELS, ROLES, type CatapultView, type SquadronView, type UserView } from '@catline/contracts';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useForm, useWatch } from 'react-hook-form';
+import { SelectControl } from '../../../components/form-controls.js';
 import { FormField } from '../../../components/form-field.js';
-import { SelectInput } from '../../../components/select-field.js';
 import { errorMessage } from '../../../lib/api-error.js';
 import { useCreateUser } from '../api/create-user.js';
-
-const blank = { name: '', email: '', role: 'observer' as Role, password: '', catapultId: '', squadronId: '' };
-type Values = typeof blank;
-type Errors = Partial<Record<keyof Values, string>>;
+import { blankUser, userSchema } from '../user-form-model.js';
 
 export const roleChoices = ROLES.map((role) => ({ value: role, label: ROLE_LABELS[role] }));
 
 export function UserForm({ catapults, squadrons }: { catapults: CatapultView[]; squadrons: SquadronView[] }) {
   const create = useCreateUser();
-  const [values, setValues] = useState(blank);
-  const [errors, setErrors] = useState<Errors>({});
+  const { register, control, handleSubmit, reset, formState: { errors } } = useForm({ resolver: zodResolver(userSchema), defaultValues: blankUser });
+  const role = useWatch({ control, name: 'role' });
   const [created, setCreated] = useState<{ user: UserView; invited: boolean } | null>(null);
-  const set = <K extends keyof Values>(field: K, value: Values[K]) => setValues((current) => ({ ...current, [field]: value }));
 
-  const submit = (event: FormEvent) => {
-    event.preventDefault();
-    const found: Errors = {
-      name: values.name.trim() ? undefined : 'Enter the name.',
-      email: /^[^\s@]+@[^\s@]+\.[^\s@]+$/.test(values.email.trim()) ? undefined : 'Enter an e-mail address.',
-      password: values.password === '' || values.password.length >= PASSWORD_MIN_LENGTH ? undefined : `At least ${PASSWORD_MIN_LENGTH} characters, or leave it empty to send an invitation.`,
-      catapultId: values.role === 'catapult_officer' && !values.catapultId ? 'A catapult officer runs one catapult: pick it.' : undefined,
-    };
-    setErrors(found);
-    if (Object.values(found).some(Boolean)) return;
+  const submit = handleSubmit((person) => {
     setCreated(null);
-    create.mutate(
-      {
-        name: values.name.trim(),
-        email: values.email.trim(),
-        role: values.role,
-        password: values.password === '' ? undefined : values.password,
-        catapultId: values.role === 'catapult_officer' ? Number(values.catapultId) : undefined,
-        squadronId: values.role === 'pilot' && values.squadronId ? Number(values.squadronId) : undefined,
+    create.mutate(person, {
+      onSuccess: (user) => {
+        setCreated({ user, invited: person.password === undefined });
+        reset();
       },
-      {
-        onSuccess: (user) => {
-          setCreated({ user, invited: values.password === '' });
-          setValues(blank);
-        },
-      },
-    );
-  };
+    });
+  });
 
   return (
     <form onSubmit={submit} noValidate aria-label="Add a person">
@@ -71,26 +50,26 @@ export function UserForm({ catapults, squadrons }: { catapults: CatapultView[]; 
           </Alert.Root>
         )}
         <SimpleGrid columns={{ base: 1, sm: 2, lg: 3 }} gap="3">
-          <FormField label="Name" error={errors.name} required>
-            <Input value={values.name} onChange={(event) => set('name', event.currentTarget.value)} />
+          <FormField label="Name" error={errors.name?.message} required>
+            <Input {...register('name')} />
           </FormField>
-          <FormField label="E-mail" error={errors.email} required>
-            <Input type="email" value={values.email} onChange={(event) => set('email', event.currentTarget.value)} />
+          <FormField label="E-mail" error={errors.email?.message} required>
+            <Input type="email" {...register('email')} />
           </FormField>
-          <FormField label="First password" error={errors.password} helper="Leave empty to e-mail them an invitation to choose their own.">
-            <Input type="password" autoComplete="new-password" value={values.password} onChange={(event) => set('password', event.currentTarget.value)} />
+          <FormField label="First password" error={errors.password?.message} helper="Leave empty to e-mail them an invitation to choose their own.">
+            <Input type="password" autoComplete="new-password" {...register('password')} />
           </FormField>
           <FormField label="Role" required>
-            <SelectInput value={values.role} onChange={(value) => set('role', value as Role)} choices={roleChoices} />
+            <SelectControl control={control} name="role" choices={roleChoices} />
           </FormField>
-          {values.role === 'catapult_officer' && (
-            <FormField label="Catapult" error={errors.catapultId} required>
-              <SelectInput value={values.catapultId} onChange={(value) => set('catapultId', value)} placeholder="Pick a catapult" choices={catapults.map((catapult) => ({ value: String(catapult.id), label: `Cat ${catapult.number} (${catapult.position})` }))} />
+          {role === 'catapult_officer' && (
+            <FormField label="Catapult" error={errors.catapultId?.message} required>
+              <SelectControl control={control} name="catapultId" placeholder="Pick a catapult" choices={catapults.map((catapult) => ({ value: String(catapult.id), label: `Cat ${catapult.number} (${catapult.position})` }))} />
             </FormField>
           )}
-          {values.role === 'pilot' && (
+          {role === 'pilot' && (
             <FormField label="Squadron">
-              <SelectInput value={values.squadronId} onChange={(value) => set('squadronId', value)} placeholder="No squadron" choices={squadrons.map((squadron) => ({ value: String(squadron.id), label: `${squadron.code} · ${squadron.name}` }))} />
+              <SelectControl control={control} name="squadronId" placeholder="No squadron" choices={squadrons.map((squadron) => ({ value: String(squadron.id), label: `${squadron.code} · ${squadron.name}` }))} />
             </FormField>
           )}
         </SimpleGrid>

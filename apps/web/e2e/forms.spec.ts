@@ -30,7 +30,12 @@ test('the admin is told what is missing, then adds a squadron and an aircraft of
   const aircraft = admin.getByRole('form', { name: 'Add an aircraft' });
   await aircraft.getByLabel('Side number').fill('1 0 1');
   await aircraft.getByRole('button', { name: 'Add aircraft' }).click();
-  for (const problem of ['Up to 8 letters, digits or dashes.', 'Pick a type.', 'Pick a squadron.', 'Pick where it is parked.']) {
+  for (const problem of [
+    'Up to 8 letters, digits or dashes.',
+    'Pick a type.',
+    'Pick a squadron.',
+    'Pick where it is parked.',
+  ]) {
     await expect(aircraft.getByText(problem)).toBeVisible();
   }
 
@@ -45,7 +50,9 @@ test('the admin is told what is missing, then adds a squadron and an aircraft of
   await expect(aircraft.getByLabel('Side number')).toHaveValue('');
 });
 
-test('air operations is stopped on a wrong figure and window, creates the cycle, then adds an aircraft to its deck pool', async ({ browser }) => {
+test('air operations is stopped on a wrong figure and window, creates the cycle, then adds an aircraft to its deck pool', async ({
+  browser,
+}) => {
   const airops = await openAs(browser, 'airops', '/cycles');
   await airops.getByRole('button', { name: 'New cycle' }).click();
   const form = airops.getByRole('form', { name: 'Create cycle' });
@@ -67,7 +74,12 @@ test('air operations is stopped on a wrong figure and window, creates the cycle,
   const addSlot = panel.getByRole('form', { name: 'Add an aircraft to the cycle' });
   await addSlot.getByLabel('Fuel (lb)').fill('11500.5');
   await addSlot.getByRole('button', { name: 'Add to deck pool' }).click();
-  for (const problem of ['Pick an aircraft.', 'Say what the sortie is for.', 'Enter the fuel in whole pounds, up to 100,000.', 'Enter the gross weight in whole pounds, from 1 to 200,000.']) {
+  for (const problem of [
+    'Pick an aircraft.',
+    'Say what the sortie is for.',
+    'Enter the fuel in whole pounds, up to 100,000.',
+    'Enter the gross weight in whole pounds, from 1 to 200,000.',
+  ]) {
     await expect(addSlot.getByText(problem)).toBeVisible();
   }
 
@@ -85,7 +97,13 @@ test('air operations is stopped on a wrong figure and window, creates the cycle,
   const cycle = cycles.find((candidate) => candidate.number === Number(number))!;
   expect(cycle.shipSpeedKt).toBe(25);
   const lineup = await lineupOf(api, cycle.id);
-  expect(lineup.slots.map(({ sideNumber, mission, fuelLb, grossWeightLb, tanker }) => ({ sideNumber, mission, fuelLb, grossWeightLb, tanker }))).toEqual([
-    { sideNumber: side, mission: 'Tanker track', fuelLb: 11_500, grossWeightLb: 45_400, tanker: true },
-  ]);
+  expect(
+    lineup.slots.map(({ sideNumber, mission, fuelLb, grossWeightLb, tanker }) => ({
+      sideNumber,
+      mission,
+      fuelLb,
+      grossWeightLb,
+      tanker,
+    })),
+  ).toEqual([{ sideNumber: side, mission: 'Tanker track', fuelLb: 11_500, grossWeightLb: 45_400, tanker: true }]);
 });

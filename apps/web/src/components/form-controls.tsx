@@ -13,7 +13,11 @@ interface SelectControlProps<T extends FieldValues, Out extends FieldValues> {
   disabled?: boolean;
 }
 
-export function SelectControl<T extends FieldValues, Out extends FieldValues>({ control, name, ...select }: SelectControlProps<T, Out>) {
+export function SelectControl<T extends FieldValues, Out extends FieldValues>({
+  control,
+  name,
+  ...select
+}: SelectControlProps<T, Out>) {
   const { field } = useController({ control, name });
   return <SelectInput {...select} value={field.value} onChange={field.onChange} />;
 }
@@ -25,7 +29,11 @@ interface CheckControlProps<T extends FieldValues, Out extends FieldValues> {
   disabled?: boolean;
 }
 
-export function CheckControl<T extends FieldValues, Out extends FieldValues>({ control, name, ...check }: CheckControlProps<T, Out>) {
+export function CheckControl<T extends FieldValues, Out extends FieldValues>({
+  control,
+  name,
+  ...check
+}: CheckControlProps<T, Out>) {
   const { field } = useController({ control, name });
   return <CheckField {...check} checked={field.value} onChange={field.onChange} />;
 }

@@ -15,16 +15,20 @@ export const requiredText = (maxLength: number, message: string) =>
   z.string().check(z.trim(), z.minLength(1, message), z.maxLength(maxLength, atMost(maxLength)));
 
 /** Text that may stay empty, trimmed. */
-export const optionalText = (maxLength: number) => z.string().check(z.trim(), z.maxLength(maxLength, atMost(maxLength)));
+export const optionalText = (maxLength: number) =>
+  z.string().check(z.trim(), z.maxLength(maxLength, atMost(maxLength)));
 
-export const emailText = (message: string) => z.string().check(z.trim(), z.maxLength(EMAIL_MAX_LENGTH, message), z.regex(emailPattern, message));
+export const emailText = (message: string) =>
+  z.string().check(z.trim(), z.maxLength(EMAIL_MAX_LENGTH, message), z.regex(emailPattern, message));
 
 /** A whole text matching the pattern, after trimming. */
 export const patternText = (pattern: RegExp, message: string) => z.string().check(z.trim(), z.regex(pattern, message));
 
 const readsInRange = (text: string, { min, max }: Range, whole: boolean) => {
   const value = Number(text);
-  return text.trim() !== '' && Number.isFinite(value) && value >= min && value <= max && (!whole || Number.isInteger(value));
+  return (
+    text.trim() !== '' && Number.isFinite(value) && value >= min && value <= max && (!whole || Number.isInteger(value))
+  );
 };
 
 /** Text that reads as a number within the range (a whole one when asked), kept as typed. */

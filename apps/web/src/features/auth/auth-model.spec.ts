@@ -31,7 +31,9 @@ describe('choosing a new password', () => {
   it('takes 12 to 128 characters typed twice the same', () => {
     expect(newPasswordSchema.safeParse({ password: 'x'.repeat(12), repeated: 'x'.repeat(12) }).success).toBe(true);
     expect(newPasswordSchema.safeParse({ password: 'x'.repeat(128), repeated: 'x'.repeat(128) }).success).toBe(true);
-    expect(problems(newPasswordSchema.safeParse({ password: 'x'.repeat(129), repeated: 'x'.repeat(129) }))).toEqual({ password: 'At most 128 characters.' });
+    expect(problems(newPasswordSchema.safeParse({ password: 'x'.repeat(129), repeated: 'x'.repeat(129) }))).toEqual({
+      password: 'At most 128 characters.',
+    });
   });
 });
 

@@ -1,8 +1,16 @@
 import { describe, expect, it } from 'vitest';
 import { addSlotSchema, blankSlot } from './add-slot-model.js';
 
-const typed = { ...blankSlot, aircraftId: '7', mission: ' Tanker track ', fuelLb: '11500', grossWeightLb: '45400', tanker: true };
-const messages = (values: typeof blankSlot) => addSlotSchema.safeParse(values).error?.issues.map((issue) => [issue.path.join('.'), issue.message]) ?? [];
+const typed = {
+  ...blankSlot,
+  aircraftId: '7',
+  mission: ' Tanker track ',
+  fuelLb: '11500',
+  grossWeightLb: '45400',
+  tanker: true,
+};
+const messages = (values: typeof blankSlot) =>
+  addSlotSchema.safeParse(values).error?.issues.map((issue) => [issue.path.join('.'), issue.message]) ?? [];
 
 describe('adding an aircraft to the deck pool', () => {
   it('hands on the add-slot request, with no pilot when none is picked', () => {
@@ -26,7 +34,10 @@ describe('adding an aircraft to the deck pool', () => {
       ['fuelLb', 'Enter the fuel in whole pounds, up to 100,000.'],
       ['grossWeightLb', 'Enter the gross weight in whole pounds, from 1 to 200,000.'],
     ]);
-    expect(messages({ ...typed, fuelLb: '11500.5', grossWeightLb: '-45400' }).map(([field]) => field)).toEqual(['fuelLb', 'grossWeightLb']);
+    expect(messages({ ...typed, fuelLb: '11500.5', grossWeightLb: '-45400' }).map(([field]) => field)).toEqual([
+      'fuelLb',
+      'grossWeightLb',
+    ]);
   });
 
   it('asks for an aircraft and a mission, and keeps the mission to 60 characters', () => {

@@ -1,6 +1,13 @@
 import type { CycleView } from '@catline/contracts';
 import { describe, expect, it } from 'vitest';
-import { cycleFormSchema, type CycleFormValues, newCycleValues, toConditionsRequest, toCreateRequest, valuesFromCycle } from './cycle-form-model.js';
+import {
+  cycleFormSchema,
+  type CycleFormValues,
+  newCycleValues,
+  toConditionsRequest,
+  toCreateRequest,
+  valuesFromCycle,
+} from './cycle-form-model.js';
 
 /** What the form would show under each field. */
 function validateCycleForm(values: CycleFormValues, withNumber: boolean): Record<string, string> {
@@ -43,14 +50,38 @@ describe('a new cycle', () => {
 
 describe('editing a cycle', () => {
   const cycle: CycleView = {
-    id: 9, shipId: 1, number: 12, state: 'planning', version: 5, slotCount: 0, launchedCount: 0,
-    plannedLaunchAt: '2026-12-02T14:30:00.000Z', windowStartAt: '2026-12-02T14:20:00.000Z', windowEndAt: '2026-12-02T15:00:00.000Z',
-    shipCourseDeg: 275.5, shipSpeedKt: 24, trueWindFromDeg: 250, trueWindSpeedKt: 14, temperatureC: -3, pressureHpa: 998,
-    weatherCase: 'III', night: true, landingAreaInUse: true,
+    id: 9,
+    shipId: 1,
+    number: 12,
+    state: 'planning',
+    version: 5,
+    slotCount: 0,
+    launchedCount: 0,
+    plannedLaunchAt: '2026-12-02T14:30:00.000Z',
+    windowStartAt: '2026-12-02T14:20:00.000Z',
+    windowEndAt: '2026-12-02T15:00:00.000Z',
+    shipCourseDeg: 275.5,
+    shipSpeedKt: 24,
+    trueWindFromDeg: 250,
+    trueWindSpeedKt: 14,
+    temperatureC: -3,
+    pressureHpa: 998,
+    weatherCase: 'III',
+    night: true,
+    landingAreaInUse: true,
   };
 
   it('round-trips the cycle through the form into a conditions change on the version it saw', () => {
-    const { shipId: _ship, number: _number, id: _id, state: _state, version: _version, slotCount: _slots, launchedCount: _launched, ...conditions } = cycle;
+    const {
+      shipId: _ship,
+      number: _number,
+      id: _id,
+      state: _state,
+      version: _version,
+      slotCount: _slots,
+      launchedCount: _launched,
+      ...conditions
+    } = cycle;
     expect(toConditionsRequest(valuesFromCycle(cycle), cycle.version)).toEqual({ ...conditions, basisVersion: 5 });
   });
 
@@ -62,7 +93,7 @@ describe('editing a cycle', () => {
 describe('validateCycleForm', () => {
   const valid = newCycleValues(now, 1);
 
-  it('asks for a whole cycle number within the server\'s range', () => {
+  it("asks for a whole cycle number within the server's range", () => {
     const message = 'Enter the cycle number, a whole number from 1 to 9,999.';
     expect(validateCycleForm({ ...valid, number: '2.5' }, true)).toEqual({ number: message });
     expect(validateCycleForm({ ...valid, number: '0' }, true)).toEqual({ number: message });
@@ -81,21 +112,39 @@ describe('validateCycleForm', () => {
   });
 
   it('accepts the ends of each range', () => {
-    expect(validateCycleForm({ ...valid, shipSpeedKt: '40', temperatureC: '-40', pressureHpa: '870', trueWindFromDeg: '360' }, true)).toEqual({});
-    expect(validateCycleForm({ ...valid, shipSpeedKt: '0', temperatureC: '55', pressureHpa: '1085', trueWindSpeedKt: '80' }, true)).toEqual({});
+    expect(
+      validateCycleForm(
+        { ...valid, shipSpeedKt: '40', temperatureC: '-40', pressureHpa: '870', trueWindFromDeg: '360' },
+        true,
+      ),
+    ).toEqual({});
+    expect(
+      validateCycleForm(
+        { ...valid, shipSpeedKt: '0', temperatureC: '55', pressureHpa: '1085', trueWindSpeedKt: '80' },
+        true,
+      ),
+    ).toEqual({});
   });
 
   it('names every field in trouble at once, figures and window alike', () => {
-    expect(Object.keys(validateCycleForm({ ...valid, shipSpeedKt: '41', windowEndAt: valid.plannedLaunchAt }, true))).toEqual(['shipSpeedKt', 'windowEndAt']);
+    expect(
+      Object.keys(validateCycleForm({ ...valid, shipSpeedKt: '41', windowEndAt: valid.plannedLaunchAt }, true)),
+    ).toEqual(['shipSpeedKt', 'windowEndAt']);
   });
 
   it('wants the window to open no later than the planned launch and close after it', () => {
-    expect(validateCycleForm({ ...valid, windowStartAt: '2026-12-02T09:43' }, true)).toEqual({ windowStartAt: 'The window must open before the planned launch.' });
+    expect(validateCycleForm({ ...valid, windowStartAt: '2026-12-02T09:43' }, true)).toEqual({
+      windowStartAt: 'The window must open before the planned launch.',
+    });
     expect(validateCycleForm({ ...valid, windowStartAt: valid.plannedLaunchAt }, true)).toEqual({});
-    expect(validateCycleForm({ ...valid, windowEndAt: valid.plannedLaunchAt }, true)).toEqual({ windowEndAt: 'The window must close after the planned launch.' });
+    expect(validateCycleForm({ ...valid, windowEndAt: valid.plannedLaunchAt }, true)).toEqual({
+      windowEndAt: 'The window must close after the planned launch.',
+    });
   });
 
   it('asks for a date and time when one is missing, and then does not compare it', () => {
-    expect(validateCycleForm({ ...valid, plannedLaunchAt: '' }, true)).toEqual({ plannedLaunchAt: 'Enter a date and time.' });
+    expect(validateCycleForm({ ...valid, plannedLaunchAt: '' }, true)).toEqual({
+      plannedLaunchAt: 'Enter a date and time.',
+    });
   });
 });

@@ -13,12 +13,18 @@ describe('a new aircraft', () => {
 
   it.each(['', '123456789', '10 1', '10_1'])('refuses the side number "%s" as the server does', (sideNumber) => {
     const result = aircraftSchema.safeParse({ sideNumber, typeId: '3', squadronId: '2', parkedSpot: 'bow-1' });
-    expect(result.error?.issues.map((issue) => [issue.path.join('.'), issue.message])).toEqual([['sideNumber', 'Up to 8 letters, digits or dashes.']]);
+    expect(result.error?.issues.map((issue) => [issue.path.join('.'), issue.message])).toEqual([
+      ['sideNumber', 'Up to 8 letters, digits or dashes.'],
+    ]);
   });
 
   it('asks for each choice not made', () => {
     const result = aircraftSchema.safeParse({ sideNumber: 'AB-12345', typeId: '', squadronId: '', parkedSpot: '' });
-    expect(result.error?.issues.map((issue) => issue.message)).toEqual(['Pick a type.', 'Pick a squadron.', 'Pick where it is parked.']);
+    expect(result.error?.issues.map((issue) => issue.message)).toEqual([
+      'Pick a type.',
+      'Pick a squadron.',
+      'Pick where it is parked.',
+    ]);
   });
 });
 

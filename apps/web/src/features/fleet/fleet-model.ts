@@ -1,4 +1,10 @@
-import { NAME_MAX_LENGTH, SIDE_NUMBER_MAX_LENGTH, SIDE_NUMBER_PATTERN, SQUADRON_CODE_MAX_LENGTH, SQUADRON_CODE_PATTERN } from '@catline/contracts';
+import {
+  NAME_MAX_LENGTH,
+  SIDE_NUMBER_MAX_LENGTH,
+  SIDE_NUMBER_PATTERN,
+  SQUADRON_CODE_MAX_LENGTH,
+  SQUADRON_CODE_PATTERN,
+} from '@catline/contracts';
 import * as z from 'zod/mini';
 import { chosenId, emailText, patternText, requiredText } from '../../lib/form-rules.js';
 
@@ -19,4 +25,9 @@ export const aircraftSchema = z.object({
   parkedSpot: z.string().check(z.minLength(1, 'Pick where it is parked.')),
 });
 
-export const blankAircraft: z.input<typeof aircraftSchema> = { sideNumber: '', typeId: '', squadronId: '', parkedSpot: '' };
+export const blankAircraft: z.input<typeof aircraftSchema> = {
+  sideNumber: '',
+  typeId: '',
+  squadronId: '',
+  parkedSpot: '',
+};

@@ -12,7 +12,8 @@ const typed = {
   trimBands: '44000:15, *:18',
   launchTable: '34000:124, 46000:143',
 };
-const fields = (values: typeof blankAircraftType) => aircraftTypeSchema.safeParse(values).error?.issues.map((issue) => issue.path.join('.')) ?? [];
+const fields = (values: typeof blankAircraftType) =>
+  aircraftTypeSchema.safeParse(values).error?.issues.map((issue) => issue.path.join('.')) ?? [];
 
 describe('a new aircraft type', () => {
   it('hands on the create request with bands and table read from their text', () => {
@@ -24,30 +25,47 @@ describe('a new aircraft type', () => {
       thrustLbf: 0,
       requiredExcessKt: 10,
       afterburnerFromLb: null,
-      trimBands: [{ upToLb: 44_000, trimDeg: 15 }, { upToLb: null, trimDeg: 18 }],
-      launchTable: [{ grossWeightLb: 34_000, minLaunchAirspeedKt: 124 }, { grossWeightLb: 46_000, minLaunchAirspeedKt: 143 }],
+      trimBands: [
+        { upToLb: 44_000, trimDeg: 15 },
+        { upToLb: null, trimDeg: 18 },
+      ],
+      launchTable: [
+        { grossWeightLb: 34_000, minLaunchAirspeedKt: 124 },
+        { grossWeightLb: 46_000, minLaunchAirspeedKt: 143 },
+      ],
     });
   });
 
   it('wants whole pounds where the server does', () => {
-    expect(fields({ ...typed, maxGrossWeightLb: '52000.5', thrustLbf: '1.5', afterburnerFromLb: '48000.5', crosswindLimitKt: '15.5' })).toEqual([
-      'maxGrossWeightLb',
-      'thrustLbf',
-      'afterburnerFromLb',
-    ]);
+    expect(
+      fields({
+        ...typed,
+        maxGrossWeightLb: '52000.5',
+        thrustLbf: '1.5',
+        afterburnerFromLb: '48000.5',
+        crosswindLimitKt: '15.5',
+      }),
+    ).toEqual(['maxGrossWeightLb', 'thrustLbf', 'afterburnerFromLb']);
   });
 
   it('refuses figures outside the server ranges', () => {
-    expect(fields({ ...typed, maxGrossWeightLb: '0', crosswindLimitKt: '101', requiredExcessKt: '-1', afterburnerFromLb: '1000001' })).toEqual([
-      'maxGrossWeightLb',
-      'crosswindLimitKt',
-      'requiredExcessKt',
-      'afterburnerFromLb',
-    ]);
+    expect(
+      fields({
+        ...typed,
+        maxGrossWeightLb: '0',
+        crosswindLimitKt: '101',
+        requiredExcessKt: '-1',
+        afterburnerFromLb: '1000001',
+      }),
+    ).toEqual(['maxGrossWeightLb', 'crosswindLimitKt', 'requiredExcessKt', 'afterburnerFromLb']);
   });
 
   it('says what is wrong with the bands and the table', () => {
-    const issues = aircraftTypeSchema.safeParse({ ...typed, trimBands: '44000:15', launchTable: '34000:124, 30000:120' }).error?.issues;
+    const issues = aircraftTypeSchema.safeParse({
+      ...typed,
+      trimBands: '44000:15',
+      launchTable: '34000:124, 30000:120',
+    }).error?.issues;
     expect(issues?.map((issue) => issue.message)).toEqual([
       'Write bands as 44000:15, 48000:17, *:18 — the last one with *.',
       'Row 2: each weight must be heavier than the row above.',

@@ -1,4 +1,10 @@
-import { AIRCRAFT_TYPE_RANGES as RANGES, NAME_MAX_LENGTH, type Range, type TrimBand, TYPE_DESIGNATION_MAX_LENGTH } from '@catline/contracts';
+import {
+  AIRCRAFT_TYPE_RANGES as RANGES,
+  NAME_MAX_LENGTH,
+  type Range,
+  type TrimBand,
+  TYPE_DESIGNATION_MAX_LENGTH,
+} from '@catline/contracts';
 import * as z from 'zod/mini';
 import { formatWhole } from '../../lib/format.js';
 import { optionalTypedNumber, parsedText, requiredText, typedNumber } from '../../lib/form-rules.js';
@@ -8,10 +14,14 @@ const span = ({ min, max }: Range) => `${formatWhole(min)} to ${formatWhole(max)
 
 /** The launch table typed as `34000:124, 40000:133` (gross weight : minimum launch airspeed). */
 function launchRowsOf(text: string) {
-  const rows = text.split(',').map((pair) => pair.trim()).filter(Boolean).map((pair) => {
-    const [grossWeightLb = '', minLaunchAirspeedKt = ''] = pair.split(':').map((piece) => piece.trim());
-    return { grossWeightLb, minLaunchAirspeedKt };
-  });
+  const rows = text
+    .split(',')
+    .map((pair) => pair.trim())
+    .filter(Boolean)
+    .map((pair) => {
+      const [grossWeightLb = '', minLaunchAirspeedKt = ''] = pair.split(':').map((piece) => piece.trim());
+      return { grossWeightLb, minLaunchAirspeedKt };
+    });
   return parseLaunchTable(rows);
 }
 
@@ -19,11 +29,25 @@ function launchRowsOf(text: string) {
 export const aircraftTypeSchema = z.object({
   designation: requiredText(TYPE_DESIGNATION_MAX_LENGTH, 'Enter the designation.'),
   name: requiredText(NAME_MAX_LENGTH, 'Enter the name.'),
-  maxGrossWeightLb: typedNumber(RANGES.maxGrossWeightLb, `Enter the maximum gross weight in whole pounds, ${span(RANGES.maxGrossWeightLb)}.`, { whole: true }),
-  crosswindLimitKt: typedNumber(RANGES.crosswindLimitKt, `Enter the crosswind limit in knots, ${span(RANGES.crosswindLimitKt)}.`),
-  thrustLbf: typedNumber(RANGES.thrustLbf, `Enter the thrust in whole pounds-force, ${span(RANGES.thrustLbf)}.`, { whole: true }),
-  requiredExcessKt: typedNumber(RANGES.requiredExcessKt, `Enter the required excess in knots, ${span(RANGES.requiredExcessKt)}.`),
-  afterburnerFromLb: optionalTypedNumber(RANGES.afterburnerFromLb, 'Leave empty, or enter a weight in whole pounds.', { whole: true }),
+  maxGrossWeightLb: typedNumber(
+    RANGES.maxGrossWeightLb,
+    `Enter the maximum gross weight in whole pounds, ${span(RANGES.maxGrossWeightLb)}.`,
+    { whole: true },
+  ),
+  crosswindLimitKt: typedNumber(
+    RANGES.crosswindLimitKt,
+    `Enter the crosswind limit in knots, ${span(RANGES.crosswindLimitKt)}.`,
+  ),
+  thrustLbf: typedNumber(RANGES.thrustLbf, `Enter the thrust in whole pounds-force, ${span(RANGES.thrustLbf)}.`, {
+    whole: true,
+  }),
+  requiredExcessKt: typedNumber(
+    RANGES.requiredExcessKt,
+    `Enter the required excess in knots, ${span(RANGES.requiredExcessKt)}.`,
+  ),
+  afterburnerFromLb: optionalTypedNumber(RANGES.afterburnerFromLb, 'Leave empty, or enter a weight in whole pounds.', {
+    whole: true,
+  }),
   trimBands: parsedText<TrimBand[]>((text) => {
     const bands = parseTrimBands(text);
     return bands ? { value: bands } : { problem: 'Write bands as 44000:15, 48000:17, *:18 — the last one with *.' };

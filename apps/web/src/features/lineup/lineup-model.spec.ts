@@ -3,28 +3,86 @@ import { describe, expect, it } from 'vitest';
 import { containersOf, isMovable, lineupWarnings, moveSlotLocally, placeName } from './lineup-model.js';
 
 const cycle: CycleView = {
-  id: 7, shipId: 1, number: 3, state: 'planning', version: 12, slotCount: 5, launchedCount: 0,
-  plannedLaunchAt: '2026-12-02T10:00:00.000Z', windowStartAt: '2026-12-02T09:55:00.000Z', windowEndAt: '2026-12-02T10:20:00.000Z',
-  shipCourseDeg: 0, shipSpeedKt: 20, trueWindFromDeg: 0, trueWindSpeedKt: 10, temperatureC: 15, pressureHpa: 1013,
-  weatherCase: 'I', night: false, landingAreaInUse: false,
+  id: 7,
+  shipId: 1,
+  number: 3,
+  state: 'planning',
+  version: 12,
+  slotCount: 5,
+  launchedCount: 0,
+  plannedLaunchAt: '2026-12-02T10:00:00.000Z',
+  windowStartAt: '2026-12-02T09:55:00.000Z',
+  windowEndAt: '2026-12-02T10:20:00.000Z',
+  shipCourseDeg: 0,
+  shipSpeedKt: 20,
+  trueWindFromDeg: 0,
+  trueWindSpeedKt: 10,
+  temperatureC: 15,
+  pressureHpa: 1013,
+  weatherCase: 'I',
+  night: false,
+  landingAreaInUse: false,
 };
 
-function slot(id: number, sideNumber: string, place: { catapultId: number; position: number } | null, extra: Partial<SlotView> = {}): SlotView {
+function slot(
+  id: number,
+  sideNumber: string,
+  place: { catapultId: number; position: number } | null,
+  extra: Partial<SlotView> = {},
+): SlotView {
   return {
-    id, cycleId: cycle.id, aircraftId: id, sideNumber, typeId: 1, typeDesignation: 'KX-9', squadronId: 1, squadronCode: 'VX-41',
-    pilotId: null, pilotName: null, mission: 'CAP', fuelLb: 9000, stores: '', grossWeightLb: 42_000,
-    tanker: false, earlyWarning: false, spare: false,
-    catapultId: place?.catapultId ?? null, position: place?.position ?? null, status: 'planned', version: 1,
-    trimDeg: null, afterburnerRequired: false, departure: 'Case I',
-    pilotWeightAckAt: '2026-12-02T09:40:00.000Z', catapultWeightAckAt: '2026-12-02T09:41:00.000Z',
-    suspendReason: null, overrideReason: null, launchedAt: null, statusAt: null, statusBy: null,
-    projectedLaunchAt: null, missesWindow: false, figures: null,
+    id,
+    cycleId: cycle.id,
+    aircraftId: id,
+    sideNumber,
+    typeId: 1,
+    typeDesignation: 'KX-9',
+    squadronId: 1,
+    squadronCode: 'VX-41',
+    pilotId: null,
+    pilotName: null,
+    mission: 'CAP',
+    fuelLb: 9000,
+    stores: '',
+    grossWeightLb: 42_000,
+    tanker: false,
+    earlyWarning: false,
+    spare: false,
+    catapultId: place?.catapultId ?? null,
+    position: place?.position ?? null,
+    status: 'planned',
+    version: 1,
+    trimDeg: null,
+    afterburnerRequired: false,
+    departure: 'Case I',
+    pilotWeightAckAt: '2026-12-02T09:40:00.000Z',
+    catapultWeightAckAt: '2026-12-02T09:41:00.000Z',
+    suspendReason: null,
+    overrideReason: null,
+    launchedAt: null,
+    statusAt: null,
+    statusBy: null,
+    projectedLaunchAt: null,
+    missesWindow: false,
+    figures: null,
     ...extra,
   };
 }
 
 function lane(catapultId: number, number: number, slotIds: number[], extra: Partial<LaneView> = {}): LaneView {
-  return { catapultId, number, position: 'bow', status: 'up', closed: false, slotIds, go: true, headwindKt: 30, crosswindKt: 0, crosswindSide: 'none', ...extra };
+  return {
+    catapultId,
+    number,
+    position: 'bow',
+    status: 'up',
+    closed: false,
+    slotIds,
+    go: true,
+    headwindKt: 30,
+    crosswindKt: 0,
+    crosswindSide: 'none',
+    ...extra,
+  };
 }
 
 // Cat 1 (id 11) holds 101 then 102; cat 2 (id 12) holds 201; the pool holds 110 and 300 by side number.
@@ -45,7 +103,13 @@ function board(): LineupSnapshot {
   };
 }
 
-const move = (slotId: number, toCatapultId: number | null, toIndex: number) => ({ slotId, slotVersion: 1, toCatapultId, toIndex, targetLaneOrder: [] });
+const move = (slotId: number, toCatapultId: number | null, toIndex: number) => ({
+  slotId,
+  slotVersion: 1,
+  toCatapultId,
+  toIndex,
+  targetLaneOrder: [],
+});
 const placeOf = (snapshot: LineupSnapshot, id: number) => {
   const found = snapshot.slots.find((candidate) => candidate.id === id)!;
   return { catapultId: found.catapultId, position: found.position };
@@ -124,14 +188,26 @@ describe('lineupWarnings', () => {
     snapshot.slots[1] = {
       ...snapshot.slots[1],
       figures: {
-        catapultSetting: null, endSpeedKt: 120, requiredAirspeedKt: 140, requiredWindOverDeckKt: 30, marginKt: -4, go: false,
+        catapultSetting: null,
+        endSpeedKt: 120,
+        requiredAirspeedKt: 140,
+        requiredWindOverDeckKt: 30,
+        marginKt: -4,
+        go: false,
         reasons: [{ code: 'margin_negative', message: 'End speed is 4 kt short.' }],
-        clearingTurnDeg: 10, headwindKt: 26, crosswindKt: 0, crosswindSide: 'none',
+        clearingTurnDeg: 10,
+        headwindKt: 26,
+        crosswindKt: 0,
+        crosswindSide: 'none',
       },
     };
     expect(lineupWarnings(snapshot, clock)).toEqual([
       { kind: 'catapult_down', key: 'down-12', text: 'Cat 2 is down with 1 aircraft still in its lane.' },
-      { kind: 'missed_window', key: 'window-1', text: '101 misses the launch window (projected 10:25, window ends 10:20).' },
+      {
+        kind: 'missed_window',
+        key: 'window-1',
+        text: '101 misses the launch window (projected 10:25, window ends 10:20).',
+      },
       { kind: 'no_go', key: 'nogo-2', text: '102 on cat 1 is no-go: End speed is 4 kt short.' },
       { kind: 'weight_not_agreed', key: 'weights', text: 'Gross weight not yet agreed for 101.' },
     ]);
@@ -143,9 +219,17 @@ describe('lineupWarnings', () => {
     snapshot.slots[2] = {
       ...snapshot.slots[2],
       figures: {
-        catapultSetting: 20, endSpeedKt: 150, requiredAirspeedKt: 140, requiredWindOverDeckKt: 10, marginKt: 20, go: false,
+        catapultSetting: 20,
+        endSpeedKt: 150,
+        requiredAirspeedKt: 140,
+        requiredWindOverDeckKt: 10,
+        marginKt: 20,
+        go: false,
         reasons: [{ code: 'catapult_closed', message: 'Cat 2 is closed.' }],
-        clearingTurnDeg: 10, headwindKt: 26, crosswindKt: 0, crosswindSide: 'none',
+        clearingTurnDeg: 10,
+        headwindKt: 26,
+        crosswindKt: 0,
+        crosswindSide: 'none',
       },
     };
     expect(lineupWarnings(snapshot, clock).map((warning) => warning.key)).toEqual(['closed-12']);

@@ -1,4 +1,10 @@
-import { type CreateUserRequest, NAME_MAX_LENGTH, PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH, ROLES } from '@catline/contracts';
+import {
+  type CreateUserRequest,
+  NAME_MAX_LENGTH,
+  PASSWORD_MAX_LENGTH,
+  PASSWORD_MIN_LENGTH,
+  ROLES,
+} from '@catline/contracts';
 import * as z from 'zod/mini';
 import { emailText, requiredText } from '../../lib/form-rules.js';
 
@@ -11,7 +17,10 @@ export const userSchema = z.pipe(
       role: z.enum(ROLES),
       // Empty sends an invitation to choose one.
       password: z.string().check(
-        z.refine((password) => password === '' || password.length >= PASSWORD_MIN_LENGTH, `At least ${PASSWORD_MIN_LENGTH} characters, or leave it empty to send an invitation.`),
+        z.refine(
+          (password) => password === '' || password.length >= PASSWORD_MIN_LENGTH,
+          `At least ${PASSWORD_MIN_LENGTH} characters, or leave it empty to send an invitation.`,
+        ),
         z.maxLength(PASSWORD_MAX_LENGTH, `At most ${PASSWORD_MAX_LENGTH} characters.`),
       ),
       catapultId: z.string(),
@@ -19,19 +28,29 @@ export const userSchema = z.pipe(
     })
     .check(
       z.superRefine(({ role, catapultId }, context) => {
-        if (role === 'catapult_officer' && !catapultId) context.addIssue({ code: 'custom', path: ['catapultId'], message: 'A catapult officer runs one catapult: pick it.' });
+        if (role === 'catapult_officer' && !catapultId)
+          context.addIssue({
+            code: 'custom',
+            path: ['catapultId'],
+            message: 'A catapult officer runs one catapult: pick it.',
+          });
       }),
     ),
-  z.transform(
-    ({ name, email, role, password, catapultId, squadronId }): CreateUserRequest => ({
-      name,
-      email,
-      role,
-      password: password === '' ? undefined : password,
-      catapultId: role === 'catapult_officer' ? Number(catapultId) : undefined,
-      squadronId: role === 'pilot' && squadronId ? Number(squadronId) : undefined,
-    }),
-  ),
+  z.transform(({ name, email, role, password, catapultId, squadronId }): CreateUserRequest => ({
+    name,
+    email,
+    role,
+    password: password === '' ? undefined : password,
+    catapultId: role === 'catapult_officer' ? Number(catapultId) : undefined,
+    squadronId: role === 'pilot' && squadronId ? Number(squadronId) : undefined,
+  })),
 );
 
-export const blankUser: z.input<typeof userSchema> = { name: '', email: '', role: 'observer', password: '', catapultId: '', squadronId: '' };
+export const blankUser: z.input<typeof userSchema> = {
+  name: '',
+  email: '',
+  role: 'observer',
+  password: '',
+  catapultId: '',
+  squadronId: '',
+};

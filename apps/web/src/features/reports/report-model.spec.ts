@@ -4,34 +4,94 @@ import { formatDelta, formatDuration, pickReportCycle, timelinePoints, timelineS
 
 function cycle(id: number, plannedLaunchAt: string, state: CycleView['state']): CycleView {
   return {
-    id, shipId: 1, number: id, state, version: 1, slotCount: 0, launchedCount: 0,
-    plannedLaunchAt, windowStartAt: plannedLaunchAt, windowEndAt: plannedLaunchAt,
-    shipCourseDeg: 0, shipSpeedKt: 20, trueWindFromDeg: 0, trueWindSpeedKt: 10, temperatureC: 15, pressureHpa: 1013,
-    weatherCase: 'I', night: false, landingAreaInUse: false,
+    id,
+    shipId: 1,
+    number: id,
+    state,
+    version: 1,
+    slotCount: 0,
+    launchedCount: 0,
+    plannedLaunchAt,
+    windowStartAt: plannedLaunchAt,
+    windowEndAt: plannedLaunchAt,
+    shipCourseDeg: 0,
+    shipSpeedKt: 20,
+    trueWindFromDeg: 0,
+    trueWindSpeedKt: 10,
+    temperatureC: 15,
+    pressureHpa: 1013,
+    weatherCase: 'I',
+    night: false,
+    landingAreaInUse: false,
   };
 }
 
-function launch(slotId: number, sideNumber: string, catapultNumber: number, plannedAt: string | null, launchedAt: string | null, deltaS: number | null): ReportLaunch {
+function launch(
+  slotId: number,
+  sideNumber: string,
+  catapultNumber: number,
+  plannedAt: string | null,
+  launchedAt: string | null,
+  deltaS: number | null,
+): ReportLaunch {
   return {
-    slotId, sideNumber, typeDesignation: 'KX-9', squadronId: 1, squadronCode: 'VX-41', pilotName: null, mission: 'CAP',
-    catapultNumber, plannedCatapultNumber: catapultNumber, plannedAt, launchedAt, deltaS,
-    inWindow: launchedAt ? true : null, status: launchedAt ? 'launched' : 'scratched', overrideReason: null,
+    slotId,
+    sideNumber,
+    typeDesignation: 'KX-9',
+    squadronId: 1,
+    squadronCode: 'VX-41',
+    pilotName: null,
+    mission: 'CAP',
+    catapultNumber,
+    plannedCatapultNumber: catapultNumber,
+    plannedAt,
+    launchedAt,
+    deltaS,
+    inWindow: launchedAt ? true : null,
+    status: launchedAt ? 'launched' : 'scratched',
+    overrideReason: null,
   };
 }
 
 function catapult(number: number, launches: ReportLaunch[]): CatapultTimeline {
   return {
-    catapultId: 10 + number, number, position: 'bow', pair: 1, resetIntervalS: 45, launches, intervals: [],
+    catapultId: 10 + number,
+    number,
+    position: 'bow',
+    pair: 1,
+    resetIntervalS: 45,
+    launches,
+    intervals: [],
     spread: { shortestS: null, meanS: null, longestS: null },
   };
 }
 
 function report(catapults: CatapultTimeline[]): CycleReport {
-  const empty = { aircraft: 0, launched: 0, onTime: 0, outsideWindow: 0, suspends: 0, down: 0, overrides: 0, scratched: 0 };
+  const empty = {
+    aircraft: 0,
+    launched: 0,
+    onTime: 0,
+    outsideWindow: 0,
+    suspends: 0,
+    down: 0,
+    overrides: 0,
+    scratched: 0,
+  };
   return {
-    cycle: cycle(1, '2026-12-02T10:00:00.000Z', 'closed'), plannedBasis: 'cycle_start', plannedAtVersion: 3,
-    startedAt: null, closedAt: null, firstLaunchAt: null, lastLaunchAt: null,
-    catapults, pairs: [], suspends: [], downs: [], overrides: [], totals: empty, squadrons: [],
+    cycle: cycle(1, '2026-12-02T10:00:00.000Z', 'closed'),
+    plannedBasis: 'cycle_start',
+    plannedAtVersion: 3,
+    startedAt: null,
+    closedAt: null,
+    firstLaunchAt: null,
+    lastLaunchAt: null,
+    catapults,
+    pairs: [],
+    suspends: [],
+    downs: [],
+    overrides: [],
+    totals: empty,
+    squadrons: [],
   };
 }
 
@@ -52,7 +112,12 @@ describe('pickReportCycle', () => {
   });
 
   it('opens on the latest cycle when none is closed, and on nothing without cycles', () => {
-    expect(pickReportCycle([cycles[0], cycles[2]].map((each) => ({ ...each, state: 'planning' as const })), null)?.id).toBe(3);
+    expect(
+      pickReportCycle(
+        [cycles[0], cycles[2]].map((each) => ({ ...each, state: 'planning' as const })),
+        null,
+      )?.id,
+    ).toBe(3);
     expect(pickReportCycle([], null)).toBeUndefined();
   });
 });

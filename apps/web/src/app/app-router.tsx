@@ -27,30 +27,30 @@ const router = createBrowserRouter([
             element: <AppShell />,
             children: [
               { index: true, element: <Landing /> },
-              { path: 'lineup', lazy: async () => ({ Component: (await import('./routes/lineup.route.js')).LineupRoute }) },
+              { path: 'lineup', lazy: async () => ({ Component: (await import('../features/lineup/components/lineup-screen.js')).LineupScreen }) },
               {
                 element: <RoleRoute roles={['catapult_officer']} screen="Cat station" />,
                 children: [
-                  { path: 'cat-station', lazy: async () => ({ Component: (await import('./routes/cat-station.route.js')).CatStationRoute }) },
+                  { path: 'cat-station', lazy: async () => ({ Component: (await import('../features/cat-station/components/cat-station-screen.js')).CatStationScreen }) },
                 ],
               },
               {
                 element: <RoleRoute roles={['pilot']} screen="My launch" />,
                 children: [
-                  { path: 'my-launch', lazy: async () => ({ Component: (await import('./routes/my-launch.route.js')).MyLaunchRoute }) },
+                  { path: 'my-launch', lazy: async () => ({ Component: (await import('../features/my-launch/components/my-launch-screen.js')).MyLaunchScreen }) },
                 ],
               },
-              { path: 'cycles', lazy: async () => ({ Component: (await import('./routes/cycles.route.js')).CyclesRoute }) },
-              { path: 'fleet', lazy: async () => ({ Component: (await import('./routes/fleet.route.js')).FleetRoute }) },
-              { path: 'launch-data', lazy: async () => ({ Component: (await import('./routes/launch-data.route.js')).LaunchDataRoute }) },
-              { path: 'reports', lazy: async () => ({ Component: (await import('./routes/reports.route.js')).ReportsRoute }) },
-              { path: 'reports/replay', lazy: async () => ({ Component: (await import('./routes/replay.route.js')).ReplayRoute }) },
-              { path: 'reports/launch-sheet', lazy: async () => ({ Component: (await import('./routes/launch-sheet.route.js')).LaunchSheetRoute }) },
-              { path: 'reports/shot-counts', lazy: async () => ({ Component: (await import('./routes/shot-counts.route.js')).ShotCountsRoute }) },
+              { path: 'cycles', lazy: async () => ({ Component: (await import('../features/cycles/components/cycles-screen.js')).CyclesScreen }) },
+              { path: 'fleet', lazy: async () => ({ Component: (await import('../features/fleet/components/fleet-screen.js')).FleetScreen }) },
+              { path: 'launch-data', lazy: async () => ({ Component: (await import('../features/launch-data/components/launch-data-screen.js')).LaunchDataScreen }) },
+              { path: 'reports', lazy: async () => ({ Component: (await import('../features/reports/components/reports-screen.js')).ReportsScreen }) },
+              { path: 'reports/replay', lazy: async () => ({ Component: (await import('../features/reports/components/replay-screen.js')).ReplayScreen }) },
+              { path: 'reports/launch-sheet', lazy: async () => ({ Component: (await import('../features/reports/components/launch-sheet-screen.js')).LaunchSheetScreen }) },
+              { path: 'reports/shot-counts', lazy: async () => ({ Component: (await import('../features/reports/components/shot-counts-screen.js')).ShotCountsScreen }) },
               {
                 element: <RoleRoute roles={['admin']} screen="People" />,
                 children: [
-                  { path: 'people', lazy: async () => ({ Component: (await import('./routes/people.route.js')).PeopleRoute }) },
+                  { path: 'people', lazy: async () => ({ Component: (await import('../features/people/components/people-screen.js')).PeopleScreen }) },
                 ],
               },
               { path: '*', element: <NotFound /> },

@@ -1,5 +1,6 @@
-import { useSyncExternalStore } from 'react';
 import type { Role, SessionResponse, SessionUser } from '@catline/contracts';
+import { useStore } from 'zustand';
+import { createStore } from 'zustand/vanilla';
 
 export type SessionStatus = 'restoring' | 'signed-in' | 'signed-out';
 
@@ -14,55 +15,35 @@ export interface SessionState {
   leftOnPurpose: boolean;
 }
 
-let state: SessionState = {
+const session = createStore<SessionState>(() => ({
   status: 'restoring',
   user: null,
   accessToken: null,
   expiresAt: null,
   endedNotice: null,
   leftOnPurpose: false,
-};
-const listeners = new Set<() => void>();
-const tokenListeners = new Set<(token: string | null) => void>();
+}));
 
-function update(next: SessionState) {
-  const tokenChanged = next.accessToken !== state.accessToken;
-  state = next;
-  listeners.forEach((listener) => listener());
-  if (tokenChanged) tokenListeners.forEach((listener) => listener(next.accessToken));
-}
+export const getSession = session.getState;
+export const getAccessToken = () => session.getState().accessToken;
 
-export const getSession = () => state;
-export const getAccessToken = () => state.accessToken;
-
-export function startSession(session: SessionResponse) {
-  update({
-    status: 'signed-in',
-    user: session.user,
-    accessToken: session.accessToken,
-    expiresAt: session.expiresAt,
-    endedNotice: null,
-    leftOnPurpose: false,
-  });
+export function startSession({ user, accessToken, expiresAt }: SessionResponse) {
+  session.setState({ status: 'signed-in', user, accessToken, expiresAt, endedNotice: null, leftOnPurpose: false });
 }
 
 export function endSession(notice: string | null = null, leftOnPurpose = false) {
-  update({ status: 'signed-out', user: null, accessToken: null, expiresAt: null, endedNotice: notice, leftOnPurpose });
+  session.setState({ status: 'signed-out', user: null, accessToken: null, expiresAt: null, endedNotice: notice, leftOnPurpose });
 }
 
 /** Called whenever the access token changes (sign-in, refresh, sign-out). */
 export function onAccessTokenChange(listener: (token: string | null) => void) {
-  tokenListeners.add(listener);
-  return () => tokenListeners.delete(listener);
-}
-
-function subscribe(listener: () => void) {
-  listeners.add(listener);
-  return () => listeners.delete(listener);
+  return session.subscribe((state, previous) => {
+    if (state.accessToken !== previous.accessToken) listener(state.accessToken);
+  });
 }
 
 export function useSession(): SessionState {
-  return useSyncExternalStore(subscribe, getSession);
+  return useStore(session);
 }
 
 /** The signed-in person; only call below the route guard that requires a session. */

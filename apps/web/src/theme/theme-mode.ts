@@ -1,4 +1,5 @@
-import { useSyncExternalStore } from 'react';
+import { useStore } from 'zustand';
+import { createStore } from 'zustand/vanilla';
 
 export type ThemeOverride = 'auto' | 'day' | 'night';
 export type ThemeMode = 'day' | 'night';
@@ -16,18 +17,11 @@ function readOverride(): ThemeOverride {
   return stored === 'day' || stored === 'night' ? stored : 'auto';
 }
 
-let state: ThemeState = { override: readOverride(), viewedCycleNight: null };
-const listeners = new Set<() => void>();
+const theme = createStore<ThemeState>(() => ({ override: readOverride(), viewedCycleNight: null }));
 
-export function effectiveMode(current: ThemeState = state): ThemeMode {
+export function effectiveMode(current: ThemeState = theme.getState()): ThemeMode {
   if (current.override !== 'auto') return current.override;
   return current.viewedCycleNight ? 'night' : 'day';
-}
-
-function update(next: Partial<ThemeState>) {
-  state = { ...state, ...next };
-  applyToDocument();
-  listeners.forEach((listener) => listener());
 }
 
 /** Chakra's `_dark` condition follows the `dark` class on the root element. */
@@ -38,21 +32,19 @@ export function applyToDocument() {
   document.documentElement.style.colorScheme = night ? 'dark' : 'light';
 }
 
+// The document follows every change, before the screens draw with the new mode.
+theme.subscribe(applyToDocument);
+
 export function setThemeOverride(override: ThemeOverride) {
   localStorage.setItem(storageKey, override);
-  update({ override });
+  theme.setState({ override });
 }
 
 export function setViewedCycleNight(night: boolean | null) {
-  if (state.viewedCycleNight !== night) update({ viewedCycleNight: night });
-}
-
-function subscribe(listener: () => void) {
-  listeners.add(listener);
-  return () => listeners.delete(listener);
+  if (theme.getState().viewedCycleNight !== night) theme.setState({ viewedCycleNight: night });
 }
 
 export function useThemeState(): ThemeState & { mode: ThemeMode } {
-  const current = useSyncExternalStore(subscribe, () => state);
+  const current = useStore(theme);
   return { ...current, mode: effectiveMode(current) };
 }

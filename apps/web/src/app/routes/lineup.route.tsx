@@ -1,5 +1,0 @@
-import { LineupScreen } from '../../features/lineup/components/lineup-screen.js';
-
-export function LineupRoute() {
-  return <LineupScreen />;
-}

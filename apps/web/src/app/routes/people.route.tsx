@@ -1,5 +1,0 @@
-import { PeopleScreen } from '../../features/people/components/people-screen.js';
-
-export function PeopleRoute() {
-  return <PeopleScreen />;
-}

@@ -1,5 +1,0 @@
-import { ReplayScreen } from '../../features/reports/components/replay-screen.js';
-
-export function ReplayRoute() {
-  return <ReplayScreen />;
-}

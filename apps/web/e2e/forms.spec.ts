@@ -107,3 +107,38 @@ test('air operations is stopped on a wrong figure and window, creates the cycle,
     })),
   ).toEqual([{ sideNumber: side, mission: 'Tanker track', fuelLb: 11_500, grossWeightLb: 45_400, tanker: true }]);
 });
+
+test('the admin is told which figures of a new aircraft type are wrong, then adds it and sees its launch data', async ({
+  browser,
+}) => {
+  const admin = await openAs(browser, 'admin', '/launch-data');
+  const form = admin.getByRole('form', { name: 'Add an aircraft type' });
+  const designation = `KT-${Date.now() % 10_000}`;
+  await form.getByLabel('Designation').fill(designation);
+  await form.getByLabel('Name').fill('Kestrel trainer');
+  await form.getByLabel('Max gross weight (lb)').fill('52000.5');
+  await form.getByLabel('Crosswind limit (kt)').fill('101');
+  await form.getByLabel('Thrust (lbf)').fill('22000');
+  await form.getByLabel('Required excess (kt)').fill('10');
+  await form.getByLabel('Trim bands').fill('44000:15');
+  await form.getByLabel('Launch table').fill('34000:124, 30000:120');
+  await form.getByRole('button', { name: 'Add type' }).click();
+  for (const problem of [
+    'Enter the maximum gross weight in whole pounds, 1 to 1,000,000.',
+    'Enter the crosswind limit in knots, 0 to 100.',
+    'Write bands as 44000:15, 48000:17, *:18 — the last one with *.',
+    'Row 2: each weight must be heavier than the row above.',
+  ]) {
+    await expect(form.getByText(problem)).toBeVisible();
+  }
+
+  await form.getByLabel('Max gross weight (lb)').fill('52000');
+  await form.getByLabel('Crosswind limit (kt)').fill('15');
+  await form.getByLabel('Trim bands').fill('44000:15, *:18');
+  await form.getByLabel('Launch table').fill('34000:124, 46000:143');
+  await form.getByRole('button', { name: 'Add type' }).click();
+  const detail = admin.getByRole('region', { name: `${designation} launch data` });
+  await expect(detail).toContainText('52,000 lb');
+  await expect(detail).toContainText('up to 44,000 lb: 15° · above: 18°');
+  await expect(form.getByLabel('Designation')).toHaveValue('');
+});

@@ -1,9 +1,11 @@
 import { ValidationPipe, type INestApplication } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
+import type { NestExpressApplication, NestExpressBodyParserOptionsFor } from '@nestjs/platform-express';
 import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
 import cookieParser from 'cookie-parser';
 import helmet from 'helmet';
 import { ApiExceptionFilter } from './common/filters/api-exception.filter.js';
+import { refuseDeepJson } from './common/validation/json-depth.js';
 import { type Environment, servedOverHttps, trustedProxies, webOrigins } from './config/environment.js';
 
 /**
@@ -25,6 +27,9 @@ export function configureApp(app: INestApplication): void {
   app.getHttpAdapter().getInstance().set('trust proxy', trustedProxies({ TRUST_PROXY: config.get('TRUST_PROXY') }));
   app.use(helmet(securityHeaders(servedOverHttps({ APP_URL: config.get('APP_URL') }))));
   app.use(cookieParser());
+  // Replaces Nest's default JSON parser (same limits), adding the depth check before parsing. Nest's type
+  // leaves out `verify` because Nest sets it itself for the `rawBody` option, which this app does not use.
+  (app as NestExpressApplication).useBodyParser('json', { verify: refuseDeepJson } as NestExpressBodyParserOptionsFor<'json'>);
   app.enableCors({ origin: webOrigins({ WEB_ORIGINS: config.get('WEB_ORIGINS') }), credentials: true });
   app.useGlobalPipes(
     new ValidationPipe({ whitelist: true, forbidNonWhitelisted: true, transform: true }),

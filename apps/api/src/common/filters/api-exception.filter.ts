@@ -32,6 +32,8 @@ export class ApiExceptionFilter implements ExceptionFilter {
   }
 
   private toApiError(exception: unknown): ApiError {
+    // The body parser's refusals (see json-depth.ts) reach here wrapped in an HttpException by Nest.
+    if (exception instanceof HttpException && exception.cause instanceof DomainException) exception = exception.cause;
     if (exception instanceof DomainException) {
       return { statusCode: exception.getStatus(), code: exception.code, message: exception.message, ...(exception.details ? { details: exception.details } : {}) };
     }

@@ -6,6 +6,7 @@ import cookieParser from 'cookie-parser';
 import helmet from 'helmet';
 import { ApiExceptionFilter } from './common/filters/api-exception.filter.js';
 import { refuseDeepJson } from './common/validation/json-depth.js';
+import { StrictIdPipe } from './common/validation/strict-id.pipe.js';
 import { type Environment, servedOverHttps, trustedProxies, webOrigins } from './config/environment.js';
 
 /**
@@ -32,6 +33,7 @@ export function configureApp(app: INestApplication): void {
   (app as NestExpressApplication).useBodyParser('json', { verify: refuseDeepJson } as NestExpressBodyParserOptionsFor<'json'>);
   app.enableCors({ origin: webOrigins({ WEB_ORIGINS: config.get('WEB_ORIGINS') }), credentials: true });
   app.useGlobalPipes(
+    new StrictIdPipe(),
     new ValidationPipe({ whitelist: true, forbidNonWhitelisted: true, transform: true }),
   );
   app.useGlobalFilters(new ApiExceptionFilter());

@@ -1,5 +1,5 @@
 import type { SessionResponse, SessionUser } from '@catline/contracts';
-import { Body, Controller, Get, HttpCode, HttpStatus, Post, Req, Res, UseGuards } from '@nestjs/common';
+import { Body, Controller, Get, Header, HttpCode, HttpStatus, Post, Req, Res, UseGuards } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import type { Request, Response } from 'express';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
@@ -12,6 +12,9 @@ import { LoginRateLimitGuard } from './login-rate-limit.guard.js';
 import { clearRefreshCookie, readRefreshCookie, setRefreshCookie } from './refresh-cookie.js';
 import { toSessionUser } from './session.mapper.js';
 
+// Answers holding an access token: no browser or proxy cache may keep them.
+const NO_STORE = 'no-store';
+
 @ApiTags('auth')
 @Controller('auth')
 export class AuthController {
@@ -21,6 +24,7 @@ export class AuthController {
   @UseGuards(LoginRateLimitGuard)
   @Post('login')
   @HttpCode(HttpStatus.OK)
+  @Header('Cache-Control', NO_STORE)
   async login(
     @Body() body: LoginDto,
     @Req() request: Request,
@@ -32,6 +36,7 @@ export class AuthController {
   @Public()
   @Post('refresh')
   @HttpCode(HttpStatus.OK)
+  @Header('Cache-Control', NO_STORE)
   async refresh(@Req() request: Request, @Res({ passthrough: true }) response: Response): Promise<SessionResponse> {
     try {
       return this.answer(await this.auth.refresh(readRefreshCookie(request)), request, response);

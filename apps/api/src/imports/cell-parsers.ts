@@ -1,5 +1,6 @@
 import { EMAIL_MAX_LENGTH } from '@catline/contracts';
 import { isEmail } from 'class-validator';
+import { UNSAFE_TEXT } from '../common/validation/plain-text.decorator.js';
 
 // Each parser reads one trimmed cell: a value, or the reason it cannot be one.
 
@@ -10,6 +11,7 @@ export const isProblem = <T>(cell: Cell<T>): cell is { reason: string } => 'reas
 export function text(raw: string, { required, maxLength, what }: { required: boolean; maxLength: number; what: string }): Cell<string> {
   if (required && raw === '') return { reason: `${what} is required.` };
   if (raw.length > maxLength) return { reason: `${what} has at most ${maxLength} characters; this one has ${raw.length}.` };
+  if (UNSAFE_TEXT.test(raw)) return { reason: `${what} must not hold control or text-direction characters.` };
   return { value: raw };
 }
 

@@ -20,12 +20,14 @@ import { Trim } from '../../common/validation/trim.decorator.js';
 import { LaunchTableRows } from './launch-table.dto.js';
 import { LaunchTableRowDto } from './launch-table-row.dto.js';
 import { TrimBandDto } from './trim-band.dto.js';
+import { PlainText } from '../../common/validation/plain-text.decorator.js';
 
 export class CreateAircraftTypeDto implements CreateAircraftTypeRequest {
   @ApiProperty({ example: 'KS-7' })
   @Trim()
   @IsString()
   @IsNotEmpty({ message: 'designation is required' })
+  @PlainText()
   @MaxLength(TYPE_DESIGNATION_MAX_LENGTH)
   designation: string;
 
@@ -33,6 +35,7 @@ export class CreateAircraftTypeDto implements CreateAircraftTypeRequest {
   @Trim()
   @IsString()
   @IsNotEmpty({ message: 'name is required' })
+  @PlainText()
   @MaxLength(NAME_MAX_LENGTH)
   name: string;
 

@@ -2,6 +2,7 @@ import { type AddSlotRequest, FUEL_LB, GROSS_WEIGHT_LB, MISSION_MAX_LENGTH, STOR
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { IsBoolean, IsInt, IsNotEmpty, IsOptional, IsString, Max, MaxLength, Min } from 'class-validator';
 import { Trim } from '../../common/validation/trim.decorator.js';
+import { PlainText } from '../../common/validation/plain-text.decorator.js';
 
 export class AddSlotDto implements AddSlotRequest {
   @ApiProperty({ minimum: 1 })
@@ -21,6 +22,7 @@ export class AddSlotDto implements AddSlotRequest {
   @Trim()
   @IsString()
   @IsNotEmpty({ message: 'mission is required' })
+  @PlainText()
   @MaxLength(MISSION_MAX_LENGTH)
   mission: string;
 
@@ -33,6 +35,7 @@ export class AddSlotDto implements AddSlotRequest {
   @ApiProperty({ maxLength: STORES_MAX_LENGTH })
   @Trim()
   @IsString()
+  @PlainText()
   @MaxLength(STORES_MAX_LENGTH)
   stores: string;
 

@@ -1,6 +1,7 @@
 import { applyDecorators } from '@nestjs/common';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { IsInt, IsNotEmpty, IsOptional, IsString, Max, MaxLength, Min } from 'class-validator';
+import { PlainText } from '../../common/validation/plain-text.decorator.js';
 import { Trim } from '../../common/validation/trim.decorator.js';
 
 /** The largest id or version a column holds (signed INT). */
@@ -26,5 +27,6 @@ export const ReasonField = (field: string, { optional = false } = {}) =>
     Trim(),
     IsString(),
     IsNotEmpty({ message: `${field} must not be empty` }),
+    PlainText(),
     MaxLength(200, { message: `${field} must be at most 200 characters` }),
   );

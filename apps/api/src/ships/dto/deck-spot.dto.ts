@@ -2,6 +2,7 @@ import type { DeckSpot } from '@catline/contracts';
 import { ApiProperty } from '@nestjs/swagger';
 import { IsNotEmpty, IsString, MaxLength, ValidateBy } from 'class-validator';
 import { Trim } from '../../common/validation/trim.decorator.js';
+import { PlainText } from '../../common/validation/plain-text.decorator.js';
 
 const MAX_TAXI_S = 3600;
 
@@ -29,6 +30,7 @@ export class DeckSpotDto implements DeckSpot {
   @Trim()
   @IsString()
   @IsNotEmpty({ message: 'a deck spot needs a name' })
+  @PlainText()
   @MaxLength(20)
   name: string;
 

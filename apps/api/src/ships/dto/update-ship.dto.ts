@@ -17,6 +17,7 @@ import { SkipIfAbsent } from '../../common/validation/skip-if-absent.decorator.j
 import { Trim } from '../../common/validation/trim.decorator.js';
 import { DeckSpotDto } from './deck-spot.dto.js';
 import { ShipProfileDto } from './ship-profile.dto.js';
+import { PlainText } from '../../common/validation/plain-text.decorator.js';
 
 export class UpdateShipDto {
   @ApiPropertyOptional()
@@ -24,6 +25,7 @@ export class UpdateShipDto {
   @Trim()
   @IsString()
   @IsNotEmpty({ message: 'name must not be blank' })
+  @PlainText()
   @MaxLength(120)
   name?: string;
 
@@ -32,6 +34,7 @@ export class UpdateShipDto {
   @Trim()
   @IsString()
   @IsNotEmpty({ message: 'hullCode must not be blank' })
+  @PlainText()
   @MaxLength(20)
   hullCode?: string;
 

@@ -8,12 +8,14 @@ import {
 import { ApiProperty } from '@nestjs/swagger';
 import { IsEmail, IsNotEmpty, IsString, Matches, MaxLength } from 'class-validator';
 import { Trim } from '../../common/validation/trim.decorator.js';
+import { PlainText } from '../../common/validation/plain-text.decorator.js';
 
 export class CreateSquadronDto implements CreateSquadronRequest {
   @ApiProperty()
   @Trim()
   @IsString()
   @IsNotEmpty({ message: 'name is required' })
+  @PlainText()
   @MaxLength(NAME_MAX_LENGTH)
   name: string;
 

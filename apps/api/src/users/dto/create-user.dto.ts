@@ -11,6 +11,7 @@ import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { IsEmail, IsIn, IsInt, IsNotEmpty, IsOptional, IsString, MaxLength, Min, MinLength } from 'class-validator';
 import { SkipIfAbsent } from '../../common/validation/skip-if-absent.decorator.js';
 import { Trim } from '../../common/validation/trim.decorator.js';
+import { PlainText } from '../../common/validation/plain-text.decorator.js';
 
 export class CreateUserDto implements CreateUserRequest {
   @ApiProperty()
@@ -23,6 +24,7 @@ export class CreateUserDto implements CreateUserRequest {
   @Trim()
   @IsString()
   @IsNotEmpty({ message: 'name is required' })
+  @PlainText()
   @MaxLength(NAME_MAX_LENGTH)
   name: string;
 

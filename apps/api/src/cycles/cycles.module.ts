@@ -1,14 +1,15 @@
 import { Module } from '@nestjs/common';
 import { CycleChangesModule } from '../cycle-changes/cycle-changes.module.js';
-import { LineupModule } from '../lineup/lineup.module.js';
+import { MailModule } from '../mail/mail.module.js';
+import { CycleClosing } from './cycle-closing.service.js';
 import { CycleCommandsService } from './cycle-commands.service.js';
 import { CyclesController } from './cycles.controller.js';
 import { CyclesService } from './cycles.service.js';
 
 @Module({
-  imports: [CycleChangesModule, LineupModule],
+  imports: [CycleChangesModule, MailModule],
   controllers: [CyclesController],
-  providers: [CyclesService, CycleCommandsService],
-  exports: [CyclesService],
+  providers: [CyclesService, CycleClosing, CycleCommandsService],
+  exports: [CyclesService, CycleClosing],
 })
 export class CyclesModule {}

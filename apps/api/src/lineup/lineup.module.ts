@@ -1,16 +1,14 @@
 import { Module } from '@nestjs/common';
 import { CycleChangesModule } from '../cycle-changes/cycle-changes.module.js';
-import { MailModule } from '../mail/mail.module.js';
-import { CycleClosing } from './cycle-closing.service.js';
+import { CyclesModule } from '../cycles/cycles.module.js';
 import { LineupCommandsService } from './lineup-commands.service.js';
 import { LineupController } from './lineup.controller.js';
 import { ReadinessService } from './readiness.service.js';
 import { SuggestionService } from './suggestion.service.js';
 
 @Module({
-  imports: [CycleChangesModule, MailModule],
+  imports: [CycleChangesModule, CyclesModule],
   controllers: [LineupController],
-  providers: [CycleClosing, LineupCommandsService, ReadinessService, SuggestionService],
-  exports: [CycleClosing],
+  providers: [LineupCommandsService, ReadinessService, SuggestionService],
 })
 export class LineupModule {}

@@ -15,7 +15,7 @@ import { Catapult } from '../ships/entities/catapult.entity.js';
 import { BasisChecks } from '../cycle-changes/basis-checks.service.js';
 import { Clock } from '../cycle-changes/clock.js';
 import { CycleChangeService, actorOf } from '../cycle-changes/cycle-change.service.js';
-import { CycleClosing } from './cycle-closing.service.js';
+import { CycleClosing } from '../cycles/cycle-closing.service.js';
 import type { Slot } from '../cycle-changes/entities/slot.entity.js';
 import { LineupChangesService } from '../cycle-changes/lineup-changes.service.js';
 import { laneSlots, slotFigures } from '../cycle-changes/lineup-snapshot.builder.js';

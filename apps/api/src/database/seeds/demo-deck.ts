@@ -10,7 +10,7 @@ import { LineupChangeFeed } from '../../cycle-changes/change-feed.service.js';
 import { Clock } from '../../cycle-changes/clock.js';
 import { CycleChangeService, actorOf } from '../../cycle-changes/cycle-change.service.js';
 import { LineupStateCache } from '../../cycle-changes/lineup-state.cache.js';
-import { CycleClosing } from '../../lineup/cycle-closing.service.js';
+import { CycleClosing } from '../../cycles/cycle-closing.service.js';
 import { LineupChangesService } from '../../cycle-changes/lineup-changes.service.js';
 import { LineupCommandsService } from '../../lineup/lineup-commands.service.js';
 import { LineupSnapshotService } from '../../cycle-changes/lineup-snapshot.service.js';

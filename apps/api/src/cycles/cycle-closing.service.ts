@@ -1,12 +1,14 @@
 import type { SlotStatus } from '@catline/contracts';
 import { Injectable } from '@nestjs/common';
 import type { EntityManager } from 'typeorm';
-import { Cycle } from '../cycles/entities/cycle.entity.js';
-import { MailOutbox } from '../mail/mail-outbox.service.js';
 import type { ChangeDraft } from '../cycle-changes/cycle-change.service.js';
-import type { LineupState } from '../cycle-changes/lineup-state.js';
 import { isInPool } from '../cycle-changes/lineup-snapshot.builder.js';
+import type { LineupState } from '../cycle-changes/lineup-state.js';
 import { updateSlot } from '../cycle-changes/slot-writes.js';
+import { MailOutbox } from '../mail/mail-outbox.service.js';
+import { composeCycleSummary } from './cycle-summary.js';
+import { readCycleSummary } from './cycle-summary.reader.js';
+import { Cycle } from './entities/cycle.entity.js';
 
 const FINISHED: readonly SlotStatus[] = ['launched', 'down', 'scratched'];
 
@@ -22,8 +24,18 @@ export class CycleClosing {
       await updateSlot(manager, slot, { status: 'scratched', catapultId: null, position: null });
     }
     // In the closing transaction: the squadrons' summaries exist exactly when the cycle is closed.
-    await this.outbox.enqueueCycleSummary(manager, state.cycle);
+    await this.queueSummaries(manager, state.cycle);
     return unlaunched.length;
+  }
+
+  /** One summary per squadron with aircraft in the cycle, to the squadron's address. */
+  private async queueSummaries(manager: EntityManager, cycle: Cycle): Promise<void> {
+    const summary = await readCycleSummary(manager, cycle);
+    if (!summary) return;
+    for (const squadron of summary.squadrons) {
+      const mail = composeCycleSummary(summary.input, squadron);
+      await this.outbox.enqueue(manager, { kind: 'cycle_summary', to: squadron.email, ...mail, dedupeKey: `cycle-summary:${cycle.id}:${squadron.id}` });
+    }
   }
 
   /** The follow-up of a launch: the cycle closes when nothing but unused spares is left to launch. */

@@ -6,6 +6,7 @@ import importX from 'eslint-plugin-import-x';
 import reactHooks from 'eslint-plugin-react-hooks';
 import globals from 'globals';
 import tseslint from 'typescript-eslint';
+import { apiFolderLoops } from './eslint/api-folder-loops.js';
 
 const webFeatures = './apps/web/src/features';
 const features = existsSync(webFeatures) ? readdirSync(webFeatures) : [];
@@ -34,7 +35,9 @@ export default tseslint.config(
   },
   {
     files: ['apps/api/src/**/*.ts'],
-    rules: { 'no-console': 'error' },
+    plugins: { catline: { rules: { 'api-folder-loops': apiFolderLoops } } },
+    // A feature depends on another (or on cycle-changes/) in one direction only; see DEVELOPERS.md.
+    rules: { 'no-console': 'error', 'catline/api-folder-loops': 'error' },
   },
   {
     // The shared packages stay framework-free so server and browser can both use them.

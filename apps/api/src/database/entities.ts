@@ -9,7 +9,7 @@ import { PasswordLink } from '../password-links/entities/password-link.entity.js
 import { Catapult } from '../ships/entities/catapult.entity.js';
 import { Ship } from '../ships/entities/ship.entity.js';
 import { Squadron } from '../squadrons/entities/squadron.entity.js';
-import { RefreshToken } from '../users/entities/refresh-token.entity.js';
+import { RefreshToken } from '../auth/entities/refresh-token.entity.js';
 import { User } from '../users/entities/user.entity.js';
 
 /** Every entity, listed once for the app, the migration CLI and the tests. */

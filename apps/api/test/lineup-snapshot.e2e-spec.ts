@@ -2,7 +2,6 @@ import type { AircraftTypeView, AircraftView, CycleView, LineupChange, LineupSna
 import {
   afterburnerRequired,
   airDensity,
-  assessLaunch,
   catapultWind,
   celsius,
   celsiusToKelvin,
@@ -10,10 +9,9 @@ import {
   densityRatio,
   epochMs,
   knots,
-  lowestLaunchSetting,
+  launchFigures,
   megajoulesToJoules,
   metres,
-  minimumLaunchAirspeed,
   pascals,
   pounds,
   poundsForce,
@@ -97,10 +95,7 @@ describe('lineup snapshot of the demo cycles', () => {
         const slot = snapshot.slots.find((candidate) => candidate.id === slotId)!;
         const profile = profileOf(types.find((type) => type.id === slot.typeId)!);
         const weight = pounds(slot.grossWeightLb);
-        const minimum = minimumLaunchAirspeed(profile, weight, sigma);
-        if (minimum.kind !== 'airspeed') throw new Error(`${slot.sideNumber} is outside its launch table`);
-        const required = minimum.airspeed + profile.requiredExcess;
-        const setting = lowestLaunchSetting({
+        const figures = launchFigures({
           aircraft: profile,
           catapult: {
             strokeLength: metres(catapult.strokeM),
@@ -109,20 +104,18 @@ describe('lineup snapshot of the demo cycles', () => {
             maxSetting: catapult.settingCount - 1,
           },
           grossWeight: weight,
-          wanted: knots(Math.max(0, required - wind.headwind)),
+          conditions: { wind, densityRatio: sigma, closedReason: null },
         });
-        if (setting.kind !== 'setting') throw new Error(`No setting launches ${slot.sideNumber}`);
-        const assessment = assessLaunch({ aircraft: profile, grossWeight: weight, endSpeed: setting.endSpeed, wind, catapultUp: true, densityRatio: sigma });
         expect(slot.figures).toEqual({
           headwindKt: wind.headwind,
           crosswindKt: wind.crosswind,
           crosswindSide: wind.side,
-          catapultSetting: setting.setting,
-          endSpeedKt: setting.endSpeed,
-          requiredAirspeedKt: required,
-          requiredWindOverDeckKt: assessment.requiredWindOverDeck,
-          marginKt: assessment.margin,
-          go: assessment.go,
+          catapultSetting: figures.setting?.setting ?? null,
+          endSpeedKt: figures.endSpeed,
+          requiredAirspeedKt: figures.requiredAirspeed,
+          requiredWindOverDeckKt: figures.requiredWindOverDeck,
+          marginKt: figures.margin,
+          go: true,
           reasons: [],
           clearingTurnDeg: ship.profile.clearingTurnDeg[catapult.position],
         });

@@ -22,7 +22,7 @@ import {
 import { toCycleView } from './cycle.mapper.js';
 import type { Catapult } from '../ships/entities/catapult.entity.js';
 import type { Slot } from './entities/slot.entity.js';
-import { launchFigures } from './launch-figures.js';
+import { launchFiguresView } from './launch-figures.js';
 import {
   aircraftProfile,
   cycleDensityRatio,
@@ -129,7 +129,7 @@ function cycleConditions(state: LineupState): CycleConditions {
 
 function figuresIn(conditions: CycleConditions, slot: Slot): LaunchFigures | null {
   const lane = slot.catapultId === null ? undefined : conditions.lanes.get(slot.catapultId);
-  return lane ? launchFigures({ type: slot.aircraft.type, grossWeightLb: slot.grossWeightLb, densityRatio: conditions.density, ...lane }) : null;
+  return lane ? launchFiguresView({ type: slot.aircraft.type, grossWeightLb: slot.grossWeightLb, densityRatio: conditions.density, ...lane }) : null;
 }
 
 /** The figures of one slot on its catapult under the cycle's conditions; null in the deck pool. */

@@ -4,7 +4,7 @@ import { requirePositive } from '../errors.js';
 import type { UnschedulableReason } from '../schedule/launch-projection.js';
 import { knots, type Degrees, type Knots, type Pounds } from '../units/units.js';
 import type { CrosswindSide, WindComponents } from '../wind/wind-over-deck.js';
-import { launchMargin, minimumLaunchAirspeed, requiredWindOverDeck } from './launch-assessment.js';
+import { launchMargin, minimumLaunchAirspeed, requiredWindOverDeck } from './launch-airspeed.js';
 import { launchEndSpeed, lowestLaunchSetting } from './launch-settings.js';
 
 /**

@@ -1,0 +1,104 @@
+import { NO_GO_CODES } from '@catline/contracts';
+import { knots, LAUNCH_NO_GO_CODES, type WindComponents } from '@catline/launch-math';
+import type { AircraftType } from '../aircraft-types/entities/aircraft-type.entity.js';
+import type { Catapult } from '../ships/entities/catapult.entity.js';
+import { launchFiguresView, type FiguresInput } from './launch-figures.js';
+
+// The worked example of launch-math's launch-figures spec in stored units: Halliday, Resnick & Walker,
+// Fundamentals of Physics, ch. 5 (2.36e4 kg = 52,029 lb, 107 kN = 24,054.56 lbf, a 90 m stroke, 7.56e7 J at
+// the highest setting: 85 m/s = 165.2 kt); launch table, limits and excess invented for the tests.
+const type = {
+  designation: 'KX-1',
+  maxGrossWeightLb: 66000,
+  crosswindLimitKt: 15,
+  thrustLbf: 107e3 / 4.4482216152605,
+  requiredExcessKt: 5,
+  afterburnerFromLb: 55000,
+  trimBands: [{ upToLb: null, trimDeg: 12 }],
+  launchTable: [
+    { grossWeightLb: 30000, minLaunchAirspeedKt: 140 },
+    { grossWeightLb: 66000, minLaunchAirspeedKt: 140 },
+  ],
+} as unknown as AircraftType;
+const catapult = {
+  number: 3,
+  strokeM: 90,
+  energyMinMj: 0,
+  energyMaxMj: 75.6,
+  settingCount: 3,
+  status: 'up',
+} as Catapult;
+
+const wind = (headwind: number, crosswind = 0, side: WindComponents['side'] = 'none'): WindComponents => ({
+  headwind: knots(headwind),
+  crosswind: knots(crosswind),
+  side,
+});
+const input = (overrides: Partial<FiguresInput> = {}): FiguresInput => ({
+  type,
+  grossWeightLb: 52029,
+  catapult,
+  wind: wind(25),
+  closedReason: null,
+  densityRatio: 1,
+  clearingTurnDeg: 10,
+  ...overrides,
+});
+
+describe('launch figures as the deck crew reads them', () => {
+  it('carries launch-math figures and verdict unchanged when go', () => {
+    const view = launchFiguresView(input());
+    expect(view).toMatchObject({
+      go: true,
+      reasons: [],
+      catapultSetting: 1,
+      requiredAirspeedKt: 145,
+      clearingTurnDeg: 10,
+    });
+    expect(view.marginKt).toBeGreaterThan(0);
+  });
+
+  it('words a setting out of range and a negative margin with their figures', () => {
+    // Hot day (sigma 0.81) with 10 kt of tailwind: 140 / 0.9 + 5 + 10 = 170.6 kt wanted, 165.2 kt at best,
+    // required wind over deck 160.56 - 165.20 = -4.6 kt, margin -10 - (-4.6) = -5.4 kt (worked by hand).
+    const view = launchFiguresView(input({ wind: wind(-10), densityRatio: 0.81 }));
+    expect(view.go).toBe(false);
+    expect(view.catapultSetting).toBeNull();
+    expect(view.reasons).toEqual([
+      {
+        code: 'setting_out_of_range',
+        message: 'The highest setting of cat 3 gives 165.2 kt end speed; 170.6 kt is wanted.',
+      },
+      {
+        code: 'margin_negative',
+        message: 'Launch margin -5.4 kt: headwind -10.0 kt is below the -4.6 kt wind over deck required.',
+      },
+    ]);
+  });
+
+  it('words every hard limit', () => {
+    const view = launchFiguresView(
+      input({ grossWeightLb: 70000, wind: wind(25, 18, 'starboard'), closedReason: 'catapult_down' }),
+    );
+    expect(view.reasons).toEqual([
+      { code: 'catapult_down', message: 'Cat 3 is down.' },
+      { code: 'over_max_gross_weight', message: 'Gross weight 70,000 lb is over the KX-1 maximum of 66,000 lb.' },
+      { code: 'crosswind_over_limit', message: 'Crosswind 18.0 kt from starboard is over the KX-1 limit of 15.0 kt.' },
+      {
+        code: 'outside_launch_table',
+        message: 'Gross weight 70,000 lb is outside the KX-1 launch data (30,000 lb to 66,000 lb).',
+      },
+    ]);
+    expect(view).toMatchObject({ requiredAirspeedKt: null, requiredWindOverDeckKt: null, marginKt: null });
+  });
+
+  it('words a waist catapult closed while the landing area is in use', () => {
+    expect(launchFiguresView(input({ closedReason: 'waist_closed' })).reasons).toEqual([
+      { code: 'catapult_closed', message: 'Cat 3 is closed while the landing area is in use.' },
+    ]);
+  });
+
+  it('keeps the contracts no-go codes in step with launch-math', () => {
+    expect([...NO_GO_CODES].sort()).toEqual([...LAUNCH_NO_GO_CODES].sort());
+  });
+});

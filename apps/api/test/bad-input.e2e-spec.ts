@@ -31,32 +31,35 @@ const junkValue: fc.Arbitrary<unknown> = fc.oneof(
   fc.anything({ maxDepth: 3, withNullPrototype: true }),
 );
 
-/** A body: junk of any shape, or the route's own fields (and some made up) holding junk. */
-function junkBody(example: object | undefined): fc.Arbitrary<unknown> {
-  const keys = [...Object.keys(example ?? {}), 'id', 'role', '__proto__', 'constructor'];
-  return fc.oneof(
-    fc.anything({ maxDepth: 4 }),
-    fc.dictionary(fc.constantFrom(...keys), junkValue, { maxKeys: keys.length }),
-    example ? fc.record(Object.fromEntries(Object.keys(example).map((key) => [key, junkValue])), { requiredKeys: [] }) : fc.constant({}),
-    fc.string({ unit: 'grapheme', minLength: 120_000, maxLength: 130_000 }).map((text) => ({ text })),
-  );
+/**
+ * What makes a request junk for certain, so that no answer but a 4xx is right: a field the route does not
+ * know, one of its fields holding a value of the wrong JSON type, a path id that is no id, a path id of a
+ * real row that belongs to another cycle, malformed JSON, or no token.
+ */
+type Fault = 'unknown_field' | 'wrong_type' | 'bad_param' | 'other_rows_id' | 'malformed' | 'no_token';
+
+/** A value of another JSON type than `value`: no validator of ours takes it in its place. */
+function wrongTypeFor(value: unknown): unknown {
+  if (typeof value === 'string') return { text: value };
+  if (typeof value === 'number') return 'not a number';
+  if (typeof value === 'boolean') return 'yes';
+  if (Array.isArray(value)) return 'not a list';
+  return 12;
 }
 
-/**
- * A path parameter: mostly the example's, sometimes junk. Never empty or a dot segment (those name another
- * route), and never digits, which could name a real row (deleting the people the examples sign in as).
- */
+/** A path parameter that is no id: never empty, a dot segment (another route) or digits (a real row). */
 const junkParam = fc.oneof(
-  fc.constantFrom('0', '-1', '1.5', 'abc', '99999999999999999999', '%00', '..%2F..', '🛩', ' ', 'null'),
+  fc.constantFrom('0x10', '1e3', ' 4', '-1', '1.5', 'abc', '99999999999999999999', '%00', '..%2F..', '🛩', ' ', 'null'),
   fc.string({ minLength: 1, maxLength: 30 }).filter((text) => text !== '.' && text !== '..' && !/\d/.test(text)),
 );
 
 interface Fuzzed {
-  body: unknown;
-  /** Raw text sent as application/json, when set (malformed JSON). */
-  raw?: string;
-  params: Record<string, string>;
-  withToken: boolean;
+  fault: Fault;
+  value: unknown;
+  /** Index into the example's body keys or the path's placeholders. */
+  pick: number;
+  param: string;
+  raw: string;
 }
 
 describe(`bad input to every write route and socket event (${RUNS} tries each, seed ${SEED})`, () => {
@@ -89,48 +92,78 @@ describe(`bad input to every write route and socket event (${RUNS} tries each, s
     return rows.map((row) => `${row.Table}=${row.Checksum}`).join(' ');
   }
 
-  const callerOf = (route: MatrixRoute): Role | null => (route.allowed === 'public' ? null : route.allowed[0]);
-
   async function exampleOf(route: MatrixRoute, caller: Role | null): Promise<RouteExample> {
     const context: MatrixContext = { baseUrl: url, caller, allowed: true, tokenOf: (role) => tokens.get(role)! };
     return (await route.example?.(context)) ?? {};
   }
 
-  function send(route: MatrixRoute, caller: Role | null, example: RouteExample, fuzzed: Fuzzed) {
-    const path = route.path.replace(/\{(\w+)\}/g, (_whole, name: string) => encodeURIComponent(fuzzed.params[name] ?? String(example.params?.[name] ?? 1)));
-    const pending = request(url)[route.method.toLowerCase() as 'post'](path);
-    if (caller && fuzzed.withToken) pending.set(bearer(tokens.get(caller)!));
-    // Serialised here: superagent itself cannot send a bare number or boolean as a body.
-    const text = fuzzed.raw ?? JSON.stringify(fuzzed.body);
-    return text === undefined ? pending : pending.set('Content-Type', 'application/json').send(text);
+  /**
+   * The faults a route can be given: malformed JSON any route; field faults need a JSON body, id faults
+   * path ids, no token a guarded route.
+   */
+  function faultsOf(route: MatrixRoute, caller: Role | null, example: RouteExample): Fault[] {
+    const jsonBody = typeof example.body === 'object' && example.body !== null && !Array.isArray(example.body);
+    const placeholders = [...route.path.matchAll(/\{(\w+)\}/g)].map((match) => match[1]);
+    return [
+      'malformed',
+      ...(jsonBody ? (['unknown_field'] as const) : []),
+      ...(jsonBody && Object.keys(example.body!).length > 0 ? (['wrong_type'] as const) : []),
+      ...(placeholders.length > 0 ? (['bad_param'] as const) : []),
+      ...(placeholders.includes('slotId') && example.params?.cycleId !== undefined ? (['other_rows_id'] as const) : []),
+      ...(caller ? (['no_token'] as const) : []),
+    ];
   }
 
-  it.each(writeRoutes.map((route) => [`${route.method} ${route.path}`, route] as const))(
+  /** A slot of another cycle than `cycleId`: a real id, but not of this cycle's rows. */
+  async function slotOfAnotherCycle(cycleId: number): Promise<number> {
+    const [row] = (await dataSource.query('SELECT id FROM slots WHERE cycle_id <> ? ORDER BY id LIMIT 1', [cycleId])) as { id: number }[];
+    return row.id;
+  }
+
+  async function send(route: MatrixRoute, caller: Role | null, example: RouteExample, fuzzed: Fuzzed) {
+    const params: Record<string, string | number> = { ...(example.params ?? {}) };
+    const placeholders = [...route.path.matchAll(/\{(\w+)\}/g)].map((match) => match[1]);
+    if (fuzzed.fault === 'bad_param') params[placeholders[fuzzed.pick % placeholders.length]] = fuzzed.param;
+    if (fuzzed.fault === 'other_rows_id') params.slotId = await slotOfAnotherCycle(Number(example.params!.cycleId));
+    const path = route.path.replace(/\{(\w+)\}/g, (_whole, name: string) => encodeURIComponent(String(params[name] ?? 1)));
+    const pending = request(url)[route.method.toLowerCase() as 'post'](path);
+    if (caller && fuzzed.fault !== 'no_token') pending.set(bearer(tokens.get(caller)!));
+    const body = { ...(example.body ?? {}) } as Record<string, unknown>;
+    if (fuzzed.fault === 'unknown_field') body.catlineJunk = fuzzed.value;
+    if (fuzzed.fault === 'wrong_type') {
+      const keys = Object.keys(body);
+      const key = keys[fuzzed.pick % keys.length];
+      body[key] = wrongTypeFor(body[key]);
+    }
+    if (fuzzed.fault === 'malformed') return pending.set('Content-Type', 'application/json').send(fuzzed.raw);
+    return example.body === undefined ? pending : pending.set('Content-Type', 'application/json').send(JSON.stringify(body));
+  }
+
+  // Every role the route admits is tried, each with its own valid example spoiled by one certain fault.
+  const callsOf = (route: MatrixRoute) => (route.allowed === 'public' ? [null] : route.allowed).map((caller) => [`${route.method} ${route.path} as ${caller ?? 'nobody'}`, route, caller] as const);
+
+  it.each(writeRoutes.flatMap(callsOf))(
     '%s answers junk with a 4xx and changes nothing',
-    async (_name, route) => {
-      const caller = callerOf(route);
+    async (_name, route, caller) => {
       const example = await exampleOf(route, caller);
-      const placeholders = [...route.path.matchAll(/\{(\w+)\}/g)].map((match) => match[1]);
+      const faults = faultsOf(route, caller, example);
       const fuzzed: fc.Arbitrary<Fuzzed> = fc.record({
-        body: junkBody(example.body),
-        raw: fc.option(fc.constantFrom('{', '{"a":', '[1,2', 'null', '"text"', '{"__proto__":{"role":"admin"}}', '\u0000'), { freq: 8, nil: undefined }),
-        params: fc.record(Object.fromEntries(placeholders.map((name) => [name, junkParam])), { requiredKeys: [] }) as fc.Arbitrary<Record<string, string>>,
-        withToken: fc.nat(4).map((n) => caller === null || n !== 0),
+        fault: fc.constantFrom(...faults),
+        value: fc.oneof(junkValue, fc.string({ unit: 'grapheme', minLength: 120_000, maxLength: 130_000 })),
+        pick: fc.nat(20),
+        param: junkParam,
+        raw: fc.constantFrom('{', '{"a":', '[1,2', '{"__proto__":{"role":"admin"}', '\u0000', '{"a":1}}'),
       });
       const failures: string[] = [];
       await fc.assert(
         fc.asyncProperty(fuzzed, async (input) => {
           const before = await fingerprint();
           const response = await send(route, caller, example, input);
-          if (response.status >= 500) failures.push(`${response.status} ${JSON.stringify(response.body).slice(0, 300)}`);
-          if (response.status >= 300 && (await fingerprint()) !== before) failures.push(`refused ${response.status} yet changed the database`);
-          // Without a token: 401, unless the body parser refused the body first (malformed JSON 400, too large 413).
-          const plainObject = input.raw === undefined && typeof input.body === 'object' && input.body !== null && !Array.isArray(input.body);
-          const parserRefusal = !plainObject && [400, 413].includes(response.status);
-          if (caller && !input.withToken && response.status !== 401 && !parserRefusal && response.status !== 413) {
-            failures.push(`answered ${response.status} without a token`);
-          }
-          if (response.status >= 400 && typeof response.body?.message !== 'string') failures.push(`${response.status} without a message`);
+          const what = `${input.fault}: ${response.status} ${JSON.stringify(response.body).slice(0, 300)}`;
+          if (response.status < 400 || response.status >= 500) failures.push(what);
+          else if ((await fingerprint()) !== before) failures.push(`${what}, yet the database changed`);
+          if (input.fault === 'no_token' && response.status !== 401) failures.push(`${what} (no token must be 401)`);
+          if (typeof response.body?.message !== 'string') failures.push(`${what} without a message`);
         }),
         { numRuns: RUNS, seed: SEED, endOnFailure: true },
       );

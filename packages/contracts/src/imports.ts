@@ -23,8 +23,16 @@ export interface ImportPreview<Row> {
   result: Exclude<UploadResult, 'imported'>;
   /** Every line whose cells could be read, in file order (a line may still have a problem in `problems`). */
   rows: Row[];
+  /** The first MAX_IMPORT_PROBLEMS problems in file order, each cell value cut to MAX_PROBLEM_VALUE_CHARS. */
   problems: ImportProblem[];
+  /** How many problems the file has in all. */
+  problemCount: number;
 }
+
+/** Problems an import preview answers and keeps; `problemCount` says how many there are in all. */
+export const MAX_IMPORT_PROBLEMS = 100;
+/** Characters of a cell a problem repeats; a longer one ends in `…`. */
+export const MAX_PROBLEM_VALUE_CHARS = 100;
 
 /** One sortie of an air plan, as read from its CSV line and matched against the fleet and people. */
 export interface AirPlanRow {

@@ -10,7 +10,7 @@ import { actorOf, CycleChangeService } from '../cycle-changes/cycle-change.servi
 import { Slot } from '../cycle-changes/entities/slot.entity.js';
 import { LineupException } from '../cycle-changes/lineup.exception.js';
 import { User } from '../users/entities/user.entity.js';
-import { AIR_PLAN_COLUMNS, type AirPlanLine, readAirPlan } from './air-plan-layout.js';
+import { AIR_PLAN_COLUMNS, AIR_PLAN_LAYOUT, type AirPlanLine, readAirPlan } from './air-plan-layout.js';
 import { type CheckedPlan, checkAirPlan, type PlanContext, sideKey } from './air-plan-references.js';
 import { sortProblems } from './csv-table.js';
 import type { UploadedCsv } from './csv-upload.js';
@@ -75,7 +75,7 @@ export class AirPlanImports {
     if (!cycle) throw new ImportsException('target_not_found', `Cycle ${cycleId} does not exist.`);
     if (cycle.state === 'closed') throw new LineupException('cycle_closed', `Cycle ${cycle.number} is closed; an air plan no longer goes into it.`);
     const target = { kind: 'air_plan', cycleId } as const;
-    const text = await this.uploads.textOf(file, target, user);
+    const text = await this.uploads.textOf(file, target, user, AIR_PLAN_LAYOUT);
     const read = readAirPlan(text);
     const slots = await manager.find(Slot, { where: { cycleId }, relations: { aircraft: true } });
     const checked = checkAirPlan(read.lines, await planContext(manager, read.lines, cycle.number, slots));

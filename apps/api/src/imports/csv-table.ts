@@ -22,6 +22,18 @@ export type CsvTable<Column extends string> =
 
 const fileProblem = (reason: string, row = 1, value: string | null = null): ImportProblem => ({ row, column: null, value, reason });
 
+/**
+ * Why the header line is refused before the file is read, or null: a header of many more cells than the
+ * layout has (60,000 made-up columns) would otherwise be parsed whole and answered one problem a column.
+ */
+export function headerWidthProblem<Column extends string>(text: string, layout: CsvLayout<Column>, fileNoun: string): string | null {
+  const end = text.indexOf('\n');
+  const header = end === -1 ? text : text.slice(0, end);
+  const cells = header.split(',').length;
+  if (cells <= layout.columns.length * 2) return null;
+  return `The header line has ${cells} columns; the ${fileNoun} layout has ${layout.columns.length}: ${layout.columns.join(', ')}. Nothing of the file was read.`;
+}
+
 /** A record as csv-parse gives it with `info` on (its typings do not follow that option). */
 interface ParsedRecord {
   record: string[];
@@ -59,7 +71,8 @@ function headerProblems<Column extends string>(header: string[], layout: CsvLayo
   const problems: ImportProblem[] = [];
   names.forEach((name, i) => {
     if (!(layout.columns as readonly string[]).includes(name)) {
-      problems.push(fileProblem(`Unknown column "${header[i]}"; the columns are ${known}.`, 1, header[i]));
+      const shown = header[i].length > 40 ? `${header[i].slice(0, 40)}…` : header[i];
+      problems.push(fileProblem(`Unknown column "${shown}"; the columns are ${known}.`, 1, header[i]));
     } else if (names.indexOf(name) !== i) {
       problems.push({ row: 1, column: name, value: header[i], reason: 'This column is named twice in the header line.' });
     }

@@ -5,6 +5,7 @@ export type ImportRefusalCode =
   | 'file_missing'
   | 'file_too_large'
   | 'not_csv'
+  | 'header_too_wide'
   | 'target_not_found'
   | 'upload_not_found'
   | 'upload_not_importable'
@@ -14,6 +15,7 @@ const STATUS: Record<ImportRefusalCode, HttpStatus> = {
   file_missing: HttpStatus.BAD_REQUEST,
   file_too_large: HttpStatus.PAYLOAD_TOO_LARGE,
   not_csv: HttpStatus.UNSUPPORTED_MEDIA_TYPE,
+  header_too_wide: HttpStatus.BAD_REQUEST,
   target_not_found: HttpStatus.NOT_FOUND,
   upload_not_found: HttpStatus.NOT_FOUND,
   upload_not_importable: HttpStatus.CONFLICT,

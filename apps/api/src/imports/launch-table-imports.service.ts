@@ -8,7 +8,7 @@ import type { AuthenticatedUser } from '../common/authenticated-user.js';
 import { sortProblems } from './csv-table.js';
 import type { UploadedCsv } from './csv-upload.js';
 import { ImportsException } from './imports.exception.js';
-import { LAUNCH_TABLE_COLUMNS, readLaunchTable } from './launch-table-layout.js';
+import { LAUNCH_TABLE_COLUMNS, LAUNCH_TABLE_LAYOUT, readLaunchTable } from './launch-table-layout.js';
 import { toImportPreview } from './upload.mapper.js';
 import { UploadsService } from './uploads.service.js';
 
@@ -27,7 +27,7 @@ export class LaunchTableImports {
   async preview(typeId: number, file: UploadedCsv | undefined, user: AuthenticatedUser): Promise<LaunchTablePreview> {
     if (!(await this.dataSource.manager.existsBy(AircraftType, { id: typeId }))) throw notFound(typeId);
     const target = { kind: 'launch_table', aircraftTypeId: typeId } as const;
-    const { rows, problems } = readLaunchTable(await this.uploads.textOf(file, target, user));
+    const { rows, problems } = readLaunchTable(await this.uploads.textOf(file, target, user, LAUNCH_TABLE_LAYOUT));
     const upload = await this.uploads.record(file!, target, user, sortProblems(problems, LAUNCH_TABLE_COLUMNS), rows);
     return toImportPreview(upload, rows);
   }

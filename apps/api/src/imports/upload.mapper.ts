@@ -8,5 +8,6 @@ export function toImportPreview<Row>(upload: Upload, rows: Row[]): ImportPreview
     result: upload.result === 'accepted' ? 'accepted' : 'rejected',
     rows,
     problems: upload.problems,
+    problemCount: upload.problemCount,
   };
 }

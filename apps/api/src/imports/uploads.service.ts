@@ -1,9 +1,10 @@
 import { createHash } from 'node:crypto';
-import type { ImportProblem } from '@catline/contracts';
+import { type ImportProblem, MAX_IMPORT_PROBLEMS, MAX_PROBLEM_VALUE_CHARS } from '@catline/contracts';
 import { Injectable, Logger } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
-import type { DataSource, EntityManager } from 'typeorm';
+import { type DataSource, type EntityManager, LessThan } from 'typeorm';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
+import { type CsvLayout, headerWidthProblem } from './csv-table.js';
 import { csvText, notCsvReason, type UploadedCsv, CSV_FIELD } from './csv-upload.js';
 import { Upload, type UploadKind } from './entities/upload.entity.js';
 import { ImportsException } from './imports.exception.js';
@@ -13,6 +14,15 @@ export type UploadTarget = { kind: 'air_plan'; cycleId: number } | { kind: 'laun
 
 const KIND_NAMES: Record<UploadKind, string> = { air_plan: 'air plan', launch_table: 'launch table' };
 
+/** A rejected upload is kept this long for the record, then deleted: nothing will ever import it. */
+export const REJECTED_UPLOAD_LIFETIME_MS = 24 * 3_600_000;
+
+/** The problem as kept and answered: its cell cut short, so a huge cell is not repeated back whole. */
+function shortened(problem: ImportProblem): ImportProblem {
+  const { value } = problem;
+  return value !== null && value.length > MAX_PROBLEM_VALUE_CHARS ? { ...problem, value: `${value.slice(0, MAX_PROBLEM_VALUE_CHARS)}…` } : problem;
+}
+
 /** Keeps every upload with its outcome, and hands a confirmed one over exactly once. */
 @Injectable()
 export class UploadsService {
@@ -20,17 +30,30 @@ export class UploadsService {
 
   constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
 
-  /** The file's CSV text; a file that is not CSV text is kept as rejected and refused. */
-  async textOf(file: UploadedCsv | undefined, target: UploadTarget, by: AuthenticatedUser): Promise<string> {
+  /** The file's CSV text; a file that is not CSV text, or whose header is far wider than the layout, is kept as rejected and refused. */
+  async textOf<Column extends string>(file: UploadedCsv | undefined, target: UploadTarget, by: AuthenticatedUser, layout: CsvLayout<Column>): Promise<string> {
     if (!file) throw new ImportsException('file_missing', `Attach the CSV file in the form field "${CSV_FIELD}".`);
     const reason = notCsvReason(file);
-    if (reason === null) return csvText(file);
-    await this.record(file, target, by, [{ row: 1, column: null, value: null, reason }], null);
-    throw new ImportsException('not_csv', reason);
+    if (reason !== null) {
+      await this.record(file, target, by, [{ row: 1, column: null, value: null, reason }], null);
+      throw new ImportsException('not_csv', reason);
+    }
+    const text = csvText(file);
+    const tooWide = headerWidthProblem(text, layout, KIND_NAMES[target.kind]);
+    if (tooWide !== null) {
+      await this.record(file, target, by, [{ row: 1, column: null, value: null, reason: tooWide }], null);
+      throw new ImportsException('header_too_wide', tooWide);
+    }
+    return text;
   }
 
-  /** Keeps the upload: accepted when nothing is wrong, rejected otherwise. */
+  /**
+   * Keeps the upload: accepted when nothing is wrong, rejected otherwise, with its first problems and
+   * their count; the rows only when accepted. Rejected uploads older than a day go at the same time.
+   */
   async record(file: UploadedCsv, target: UploadTarget, by: AuthenticatedUser, problems: ImportProblem[], rows: object[] | null): Promise<Upload> {
+    const accepted = problems.length === 0;
+    await this.dataSource.manager.delete(Upload, { result: 'rejected', uploadedAt: LessThan(new Date(Date.now() - REJECTED_UPLOAD_LIFETIME_MS)) });
     const upload = this.dataSource.manager.create(Upload, {
       kind: target.kind,
       cycleId: target.kind === 'air_plan' ? target.cycleId : null,
@@ -41,10 +64,10 @@ export class UploadsService {
       mimeType: file.mimetype.slice(0, 100),
       sizeBytes: file.size,
       sha256: createHash('sha256').update(file.buffer).digest('hex'),
-      result: problems.length === 0 ? 'accepted' : 'rejected',
+      result: accepted ? 'accepted' : 'rejected',
       problemCount: problems.length,
-      problems,
-      rows,
+      problems: problems.slice(0, MAX_IMPORT_PROBLEMS).map(shortened),
+      rows: accepted ? rows : null,
       importedAt: null,
       importedById: null,
     });

@@ -167,8 +167,9 @@ interface CheckedFileProps<Row extends { row: number }> {
 
 /** What the server found in the file: its problems first, then the lines it could read. */
 function CheckedFile<Row extends { row: number }>({ checked, columns, importLabel, importing, onImport }: CheckedFileProps<Row>) {
-  const { fileName, rows, problems } = checked;
-  const importable = checked.result === 'accepted' && problems.length === 0;
+  const { fileName, rows, problems, problemCount } = checked;
+  const importable = checked.result === 'accepted' && problemCount === 0;
+  const firstOnly = problemCount > problems.length ? ` (the first ${problems.length} are listed)` : '';
   return (
     <Stack gap="3">
       {importable ? (
@@ -177,7 +178,7 @@ function CheckedFile<Row extends { row: number }>({ checked, columns, importLabe
         </Text>
       ) : (
         <Text color="nogo.fg" fontWeight="600" role="status">
-          {fileName}: {plural(problems.length, 'problem')}. Nothing can be imported until the file is put right and checked again.
+          {fileName}: {plural(problemCount, 'problem')}{firstOnly}. Nothing can be imported until the file is put right and checked again.
         </Text>
       )}
       {problems.length > 0 && <ProblemList problems={problems} />}

@@ -65,10 +65,11 @@ export class Upload {
   @Column({ name: 'problem_count' })
   problemCount: number;
 
+  /** The first MAX_IMPORT_PROBLEMS of them, cells cut short; problemCount counts them all. */
   @Column({ type: 'json' })
   problems: ImportProblem[];
 
-  /** The rows read, for the confirm; null when the file could not be read as CSV at all. */
+  /** The rows read, for the confirm; null when the upload was rejected (nothing of it is ever imported). */
   @Column({ name: 'parsed_rows', type: 'json', nullable: true })
   rows: object[] | null;
 

@@ -1,6 +1,7 @@
 import { randomBytes } from 'node:crypto';
 import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
+import { parseEnv } from 'node:util';
 import { root, step } from './run.mjs';
 
 export const envPath = path.join(root, '.env');
@@ -20,15 +21,6 @@ function defaults() {
     WEB_ORIGINS: 'http://127.0.0.1:3000,http://localhost:3000,http://127.0.0.1:5173,http://localhost:5173',
     DEMO_SEED: 'on',
   };
-}
-
-export function parseEnv(text) {
-  const values = {};
-  for (const line of text.split(/\r?\n/)) {
-    const match = /^\s*([A-Z0-9_]+)\s*=\s*(.*)\s*$/.exec(line);
-    if (match) values[match[1]] = match[2];
-  }
-  return values;
 }
 
 /** Makes sure .env exists with every key, and returns its values overlaid by the process environment. */

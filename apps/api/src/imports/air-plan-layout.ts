@@ -7,8 +7,9 @@ import {
   SIDE_NUMBER_MAX_LENGTH,
   STORES_MAX_LENGTH,
 } from '@catline/contracts';
+import { toCsv } from '../common/csv.js';
 import { type Cell, flag, isProblem, optionalEmail, text, wholeNumber } from './cell-parsers.js';
-import { type CsvLayout, type CsvRecord, csvLine, readCsvTable, sortProblems } from './csv-table.js';
+import { type CsvLayout, type CsvRecord, readCsvTable, sortProblems } from './csv-table.js';
 
 // Our air plan layout: one line per sortie of the cycle. README.md in this folder documents it.
 
@@ -28,11 +29,9 @@ export type AirPlanColumn = (typeof AIR_PLAN_COLUMNS)[number];
 export const AIR_PLAN_LAYOUT: CsvLayout<AirPlanColumn> = { columns: AIR_PLAN_COLUMNS, maxRows: 200, rowNoun: 'aircraft' };
 
 /** The template's header and one example line (an invented sortie of the demo fleet). */
-export const AIR_PLAN_TEMPLATE = [
-  AIR_PLAN_COLUMNS.join(','),
-  csvLine(['101', 'pilot@catline.example', 'Strike training', 11_500, '4 practice bombs', 45_400, 'no', 'no', 'no']),
-  '',
-].join('\r\n');
+export const AIR_PLAN_TEMPLATE = toCsv(AIR_PLAN_COLUMNS, [
+  ['101', 'pilot@catline.example', 'Strike training', 11_500, '4 practice bombs', 45_400, 'no', 'no', 'no'],
+]);
 
 /** An air plan line as read, before the side number and e-mail are matched. */
 export type AirPlanLine = Omit<AirPlanRow, 'typeDesignation' | 'squadronCode' | 'pilotName'>;

@@ -116,16 +116,6 @@ export function readCsvTable<Column extends string>(text: string, layout: CsvLay
   return { ok: true, records: read, problems: lineProblems };
 }
 
-/** A CSV line of the layout's columns, quoting what needs it. */
-export function csvLine(cells: readonly (string | number)[]): string {
-  return cells
-    .map((cell) => {
-      const text = String(cell);
-      return /[",\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
-    })
-    .join(',');
-}
-
 /** Problems in file order: by line, then by the column's place in the layout (whole-line problems first). */
 export function sortProblems(problems: ImportProblem[], columns: readonly string[]): ImportProblem[] {
   const place = (column: string | null) => (column === null ? -1 : columns.indexOf(column));

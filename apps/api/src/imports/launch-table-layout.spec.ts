@@ -10,6 +10,8 @@ describe('readLaunchTable', () => {
       ],
     });
     expect(readLaunchTable(LAUNCH_TABLE_TEMPLATE).problems).toEqual([]);
+    // Written like every CSV the API hands out: byte-order mark, header, CRLF line ends.
+    expect(LAUNCH_TABLE_TEMPLATE).toBe('\uFEFFgross_weight_lb,min_launch_airspeed_kt\r\n34000,124\r\n40000,133\r\n');
   });
 
   it('refuses a weight no heavier than the line before, and bad figures, by line', () => {

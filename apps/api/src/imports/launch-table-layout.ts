@@ -1,6 +1,7 @@
 import type { ImportProblem, LaunchTableImportRow } from '@catline/contracts';
+import { toCsv } from '../common/csv.js';
 import { isProblem, positiveDecimal } from './cell-parsers.js';
-import { type CsvLayout, csvLine, readCsvTable } from './csv-table.js';
+import { type CsvLayout, readCsvTable } from './csv-table.js';
 
 // A type's minimum launch airspeed by gross weight, one line per table row. README.md documents it.
 
@@ -10,7 +11,10 @@ export type LaunchTableColumn = (typeof LAUNCH_TABLE_COLUMNS)[number];
 export const LAUNCH_TABLE_LAYOUT: CsvLayout<LaunchTableColumn> = { columns: LAUNCH_TABLE_COLUMNS, maxRows: 100, rowNoun: 'table row' };
 
 /** Header and two invented example lines. */
-export const LAUNCH_TABLE_TEMPLATE = [LAUNCH_TABLE_COLUMNS.join(','), csvLine([34_000, 124]), csvLine([40_000, 133]), ''].join('\r\n');
+export const LAUNCH_TABLE_TEMPLATE = toCsv(LAUNCH_TABLE_COLUMNS, [
+  [34_000, 124],
+  [40_000, 133],
+]);
 
 const LIMITS: Record<LaunchTableColumn, { max: number; unit: string }> = {
   gross_weight_lb: { max: 1_000_000, unit: 'lb' },

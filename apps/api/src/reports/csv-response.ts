@@ -1,5 +1,10 @@
 import { StreamableFile } from '@nestjs/common';
-import type { CsvFile } from './csv-file.js';
+
+/** A CSV document and the name it is saved under. */
+export interface CsvFile {
+  fileName: string;
+  content: string;
+}
 
 /** A CSV answer the browser saves under the file's name. */
 export function csvResponse(file: CsvFile): StreamableFile {

@@ -1,7 +1,7 @@
 import type { CycleReport } from '@catline/contracts';
+import type { CsvCell } from '../common/csv.js';
 import type { CycleChange } from '../cycle-changes/entities/cycle-change.entity.js';
 import type { LineupState } from '../cycle-changes/lineup-state.js';
-import type { CsvCell } from './csv-file.js';
 
 // The columns of a cycle's CSV exports; README.md describes them.
 

@@ -1,12 +1,13 @@
 import type { CycleReplay, CycleReport } from '@catline/contracts';
 import { Injectable } from '@nestjs/common';
+import { toCsv } from '../common/csv.js';
 import { toLineupChange } from '../cycle-changes/change.mapper.js';
 import { buildSnapshot } from '../cycle-changes/lineup-snapshot.builder.js';
 import { asLaunchDataRefusal } from '../cycle-changes/lineup.exception.js';
 import { buildCycleReport } from './cycle-report.builder.js';
 import { CycleRecordReader } from './cycle-record.reader.js';
 import { CHANGE_COLUMNS, SLOT_COLUMNS, changeRows, slotRows } from './cycle-csv.js';
-import { toCsv, type CsvFile } from './csv-file.js';
+import type { CsvFile } from './csv-response.js';
 import { versionZeroState } from './replay-start.js';
 
 /** A cycle's record for people: the report, the replay and the CSV exports. */

@@ -3,9 +3,10 @@ import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { DataSource } from 'typeorm';
 import { Aircraft } from '../aircraft/entities/aircraft.entity.js';
+import { toCsv } from '../common/csv.js';
 import { Slot } from '../cycle-changes/entities/slot.entity.js';
 import { Catapult } from '../ships/entities/catapult.entity.js';
-import { toCsv, type CsvFile } from './csv-file.js';
+import type { CsvFile } from './csv-response.js';
 import type { DayRange } from './day-range.js';
 
 export const SHOT_COUNT_COLUMNS = ['kind', 'ship', 'catapult', 'side_number', 'type', 'squadron', 'launches', 'lifetime_shots'] as const;

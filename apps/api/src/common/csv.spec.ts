@@ -1,4 +1,4 @@
-import { guardText, toCsv } from './csv-file.js';
+import { guardText, toCsv } from './csv.js';
 
 const BOM = '\uFEFF';
 

@@ -1,12 +1,8 @@
 import { stringify } from 'csv-stringify/sync';
 
-export type CsvCell = string | number | boolean | null;
+// Every CSV the API writes (report downloads, import templates) comes from here.
 
-/** A CSV document and the name it is saved under. */
-export interface CsvFile {
-  fileName: string;
-  content: string;
-}
+export type CsvCell = string | number | boolean | null;
 
 /**
  * Text that a spreadsheet would run as a formula gets a leading apostrophe (OWASP, "CSV Injection").

@@ -1,0 +1,37 @@
+import { toCsv } from '../common/csv.js';
+import { type CsvLayout, readCsvTable } from './csv-table.js';
+
+type Column = 'side_number' | 'stores';
+const LAYOUT: CsvLayout<Column> = { columns: ['side_number', 'stores'], maxRows: 10, rowNoun: 'aircraft' };
+
+describe('readCsvTable on what toCsv writes', () => {
+  it('reads back cells with commas, quotes and line breaks, on the line where each record starts', () => {
+    // RFC 4180 §2.6 and §2.7: such fields are quoted, inner quotes doubled; the reader undoes both.
+    const text = toCsv(LAYOUT.columns, [
+      ['101', '2 tanks, 4 bombs'],
+      ['102', 'pod "A"'],
+      ['103', 'two\nlines'],
+      ['104', 'none'],
+    ]);
+    expect(readCsvTable(text, LAYOUT)).toEqual({
+      ok: true,
+      problems: [],
+      records: [
+        { line: 2, cells: { side_number: '101', stores: '2 tanks, 4 bombs' } },
+        { line: 3, cells: { side_number: '102', stores: 'pod "A"' } },
+        { line: 4, cells: { side_number: '103', stores: 'two\nlines' } },
+        { line: 6, cells: { side_number: '104', stores: 'none' } },
+      ],
+    });
+  });
+
+  it('reads a cell a spreadsheet would run as a formula as the defused text that was written', () => {
+    // OWASP "CSV Injection": the writer prefixes an apostrophe; nothing strips it on the way back.
+    const text = toCsv(LAYOUT.columns, [['101', '=HYPERLINK("http://127.0.0.1")']]);
+    expect(text).toContain(`"'=HYPERLINK(""http://127.0.0.1"")"`);
+    expect(readCsvTable(text, LAYOUT)).toMatchObject({
+      ok: true,
+      records: [{ cells: { stores: `'=HYPERLINK("http://127.0.0.1")` } }],
+    });
+  });
+});

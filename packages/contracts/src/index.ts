@@ -1,5 +1,6 @@
 export * from './auth.js';
 export * from './constraints.js';
+export * from './cycle-follow.js';
 export * from './cycles.js';
 export * from './fleet.js';
 export * from './imports.js';

@@ -1,5 +1,13 @@
-import type { LineupChange, LineupSnapshot } from '@catline/contracts';
-import { applyLineupPatch } from '@catline/contracts';
+import {
+  type CycleFollow,
+  type FollowStep,
+  followChange,
+  followJoin,
+  followJoinAsked,
+  type LineupChange,
+  type LineupSnapshot,
+  startFollow,
+} from '@catline/contracts';
 import { type ClientSocket, connected, join, openSocket } from '../support/socket-client.js';
 import { CLUSTER_ORIGIN } from './api-cluster.js';
 
@@ -8,10 +16,10 @@ const RECONNECT_PAUSE_MS = 100;
 const pause = (ms: number) => new Promise((resolve) => setTimeout(resolve, ms));
 
 /**
- * A board client that follows one cycle by the clients' rule: it applies a change only when it is the
- * next version and ignores versions it already holds; on a gap it joins again with `sinceVersion` and
- * takes the replay from the change log. When its API process goes away it connects to the next
- * address in its list and does the same. It records every version it applied, in order.
+ * A board client that follows one cycle by the clients' one rule (`cycle-follow` in @catline/contracts,
+ * as the web app does): a gap asks for a rejoin with `sinceVersion`, answered by a replay from the
+ * change log. When its API process goes away it connects to the next address in its list and joins
+ * again from the version it holds. It records every version it applied, in order.
  */
 export class FollowingClient {
   readonly applied: number[] = [];
@@ -21,12 +29,9 @@ export class FollowingClient {
   /** Changes applied from a rejoin's replay rather than from their broadcast. */
   replayed = 0;
   failovers = 0;
-  snapshot?: LineupSnapshot;
+  private follow: CycleFollow = startFollow();
   private socket?: ClientSocket;
-  private early: LineupChange[] = [];
-  private highestSeen = 0;
-  private catchingUp = false;
-  private rejoinWanted = false;
+  private joinLoopRunning = false;
   private closed = false;
 
   constructor(
@@ -40,17 +45,20 @@ export class FollowingClient {
     return this.urls[this.at];
   }
 
+  get snapshot(): LineupSnapshot | undefined {
+    return this.follow.held ?? undefined;
+  }
+
   get version(): number {
-    return this.snapshot?.version ?? 0;
+    return this.follow.held?.version ?? 0;
   }
 
   async start(): Promise<void> {
     await this.connect();
+    this.follow = followJoinAsked(this.follow);
     const result = await join(this.socket!, { cycleId: this.cycleId });
     if (!result.ok || result.mode !== 'snapshot') throw new Error(`Joining cycle ${this.cycleId} at ${this.url} answered ${JSON.stringify(result)}`);
-    this.snapshot = result.snapshot;
-    // Broadcasts that arrived in the same read as the answer.
-    this.early.splice(0).forEach((change) => this.receive(change));
+    this.take(followJoin(this.follow, result));
   }
 
   close(): void {
@@ -61,57 +69,45 @@ export class FollowingClient {
   private async connect(): Promise<void> {
     const socket = openSocket(this.url, { token: this.token, origin: CLUSTER_ORIGIN });
     this.socket = socket;
-    socket.on('lineup:change', (change) => this.receive(change));
+    socket.on('lineup:change', (change) => this.take(followChange(this.follow, change)));
     await connected(socket);
     socket.once('disconnect', () => {
       if (!this.closed) this.inBackground(this.failOver());
     });
   }
 
-  private receive(change: LineupChange, fromReplay = false): void {
-    if (!this.snapshot) {
-      this.early.push(change);
-      return;
-    }
-    this.highestSeen = Math.max(this.highestSeen, change.version);
-    if (change.version <= this.snapshot.version) return;
-    if (change.version === this.snapshot.version + 1) {
-      this.snapshot = applyLineupPatch(this.snapshot, change.version, change.patch);
+  private take(step: FollowStep, replay: readonly LineupChange[] = []): void {
+    this.follow = step.follow;
+    for (const change of step.applied) {
       this.applied.push(change.version);
-      if (fromReplay) this.replayed += 1;
-      return;
+      if (replay.some((replayed) => replayed.version === change.version)) this.replayed += 1;
     }
+    if (step.rejoinFrom === null) return;
     this.gaps += 1;
-    this.inBackground(this.catchUp());
+    this.inBackground(this.joinWhileAsked());
   }
 
   /**
-   * Joins again with the version held, until the client holds everything it has seen announced. A join
-   * cut off by a lost connection is asked again on the connection the failover opens.
+   * Sends the join the rule asked for, with the version held, until one is answered (a join cut off by
+   * a lost connection is sent again on the connection the failover opens); the answer may ask again.
    */
-  private async catchUp(): Promise<void> {
-    this.rejoinWanted = true;
-    if (this.catchingUp) return;
-    this.catchingUp = true;
+  private async joinWhileAsked(): Promise<void> {
+    if (this.joinLoopRunning) return;
+    this.joinLoopRunning = true;
     try {
-      while (!this.closed && (this.rejoinWanted || this.highestSeen > this.version)) {
-        if (!this.socket?.connected) {
-          await pause(RECONNECT_PAUSE_MS);
-          continue;
-        }
-        this.rejoinWanted = false;
-        const result = await join(this.socket!, { cycleId: this.cycleId, sinceVersion: this.version }).catch(() => null);
+      while (!this.closed && this.follow.joining) {
+        const socket = this.socket;
+        const result = socket?.connected ? await join(socket, { cycleId: this.cycleId, sinceVersion: this.version }).catch(() => null) : null;
         if (!result) {
-          this.rejoinWanted = true;
           await pause(RECONNECT_PAUSE_MS);
           continue;
         }
         if (!result.ok) throw new Error(`Rejoining cycle ${this.cycleId} at ${this.url} was refused: ${result.message}`);
         if (result.mode !== 'replay') throw new Error(`Rejoining at version ${this.version} answered a snapshot instead of a replay`);
-        result.changes.forEach((change) => this.receive(change, true));
+        this.take(followJoin(this.follow, result), result.changes);
       }
     } finally {
-      this.catchingUp = false;
+      this.joinLoopRunning = false;
     }
   }
 
@@ -132,6 +128,8 @@ export class FollowingClient {
         await pause(RECONNECT_PAUSE_MS);
       }
     }
-    await this.catchUp();
+    // What was broadcast while no connection was open is only in the change log.
+    this.follow = followJoinAsked(this.follow);
+    await this.joinWhileAsked();
   }
 }

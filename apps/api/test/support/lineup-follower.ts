@@ -1,4 +1,14 @@
-import { applyLineupChanges, applyLineupPatch, type JoinCycleResult, type LineupChange, type LineupSnapshot } from '@catline/contracts';
+import {
+  type CycleFollow,
+  type FollowStep,
+  followChange,
+  followJoin,
+  followJoinAsked,
+  followJoinFailed,
+  type JoinCycleResult,
+  type LineupSnapshot,
+  startFollow,
+} from '@catline/contracts';
 import { io } from 'socket.io-client';
 import type { ClientSocket } from './socket-client.js';
 
@@ -12,21 +22,19 @@ export interface FollowerOptions {
 }
 
 /**
- * A client that holds a cycle's lineup the way the web app does: it joins the room, applies each
- * broadcast change in version order, and after a reconnect or a gap rejoins from the version it holds
- * (replay or snapshot). It records gaps, and refused or unanswered joins.
+ * A client that holds a cycle's lineup by the clients' one rule (`cycle-follow` in @catline/contracts,
+ * as the web app does): it joins the room and after a reconnect or a gap rejoins from the version it
+ * holds (replay or snapshot). It records gaps, and refused or unanswered joins.
  */
 export class LineupFollower {
   readonly socket: ClientSocket;
-  held: LineupSnapshot | null = null;
   readonly problems: string[] = [];
   /** When each resync after a reconnect completed (ms since the epoch). */
   readonly resyncedAt: number[] = [];
-  /** Versions skipped in the broadcast (each answered by a rejoin from the version held, as the web app does). */
+  /** Rejoins the rule asked for because a version was missing from the broadcast. */
   gaps = 0;
-  private joined = false;
+  private follow: CycleFollow = startFollow();
   private joinedOnThisConnection = false;
-  private buffered: LineupChange[] = [];
 
   constructor(private readonly options: FollowerOptions) {
     this.socket = io(options.url, {
@@ -38,12 +46,15 @@ export class LineupFollower {
       auth: { token: options.token },
       extraHeaders: { origin: options.origin },
     });
-    this.socket.on('lineup:change', (change) => this.receive(change));
+    this.socket.on('lineup:change', (change) => this.take(followChange(this.follow, change)));
     this.socket.on('connect', () => void this.join());
     this.socket.on('disconnect', () => {
-      this.joined = false;
       this.joinedOnThisConnection = false;
     });
+  }
+
+  get held(): LineupSnapshot | null {
+    return this.follow.held;
   }
 
   /** Resolves once the first join has answered. */
@@ -67,6 +78,7 @@ export class LineupFollower {
   private async join(): Promise<void> {
     const reconnected = this.held !== null && this.socket.connected && !this.joinedOnThisConnection;
     this.joinedOnThisConnection = true;
+    this.follow = followJoinAsked(this.follow);
     let result: JoinCycleResult;
     try {
       result = await this.socket.timeout(10_000).emitWithAck('cycle:join', {
@@ -75,34 +87,22 @@ export class LineupFollower {
       });
     } catch (error) {
       this.problems.push(`join got no answer: ${String(error)}`);
+      this.take(followJoinFailed(this.follow));
       return;
     }
     if (!result.ok) {
       this.problems.push(`join refused: ${result.code} ${result.message}`);
       return;
     }
-    if (result.mode === 'snapshot') this.held = result.snapshot;
-    else this.held = applyLineupChanges(this.held!, result.changes);
-    this.joined = true;
-    const buffered = this.buffered.splice(0);
-    for (const change of buffered) this.receive(change);
+    this.take(followJoin(this.follow, result));
     if (reconnected) this.resyncedAt.push(Date.now());
   }
 
-  private receive(change: LineupChange): void {
-    if (!this.joined || !this.held) {
-      this.buffered.push(change);
-      return;
-    }
-    if (change.version <= this.held.version) return;
-    if (change.version !== this.held.version + 1) {
-      this.gaps += 1;
-      this.joined = false;
-      this.buffered.push(change);
-      void this.join();
-      return;
-    }
-    this.held = applyLineupPatch(this.held, change.version, change.patch);
+  private take(step: FollowStep): void {
+    this.follow = step.follow;
+    if (step.rejoinFrom === null) return;
+    this.gaps += 1;
+    void this.join();
   }
 }
 

@@ -1,7 +1,6 @@
 import { queryOptions } from '@tanstack/react-query';
 import type { LineupSnapshot } from '@catline/contracts';
 import { apiRequest } from '../api-client.js';
-import { queryClient } from '../query-client.js';
 import { lineupKeys } from './lineup-keys.js';
 import { liveCycles } from './live-cycles.js';
 
@@ -13,9 +12,7 @@ export const lineupSnapshotQueryOptions = (cycleId: number) =>
   queryOptions({
     queryKey: lineupKeys.snapshot(cycleId),
     queryFn: async ({ signal }) => {
-      const fetched = await fetchLineupSnapshot(cycleId, signal);
-      const current = queryClient.getQueryData<LineupSnapshot>(lineupKeys.snapshot(cycleId));
-      return liveCycles.sync.catchUp(liveCycles.sync.newer(current, fetched));
+      return liveCycles.sync.fetched(await fetchLineupSnapshot(cycleId, signal));
     },
     // The socket keeps it current while a screen shows it; a screen opening again starts from a fresh copy.
     staleTime: Infinity,

@@ -1,70 +1,70 @@
 import type { QueryClient } from '@tanstack/react-query';
-import { applyLineupPatch, type LineupChange, type LineupSnapshot } from '@catline/contracts';
+import {
+  type CycleFollow,
+  type FollowStep,
+  followChange,
+  followJoin,
+  followJoinAsked,
+  followJoinFailed,
+  followSnapshot,
+  type JoinCycleResult,
+  type LineupChange,
+  type LineupSnapshot,
+  startFollow,
+} from '@catline/contracts';
 import { lineupKeys } from './lineup-keys.js';
 
+type JoinAnswer = Extract<JoinCycleResult, { ok: true }>;
+
 /**
- * Keeps each cycle's cached lineup snapshot in step with the server: changes are applied strictly in
- * version order, each once; a change that arrives ahead of its predecessor waits, and the gap is reported
- * so the caller can ask for what was missed.
+ * Keeps each cycle's cached lineup in step with the server by the clients' one rule (`cycle-follow`
+ * in @catline/contracts). The query cache holds the lineup; this holds, per cycle, the changes that
+ * arrived early and whether a rejoin is under way, and tells the caller when to join again.
  */
 export class LineupSync {
-  private readonly waiting = new Map<number, Map<number, LineupChange>>();
+  private readonly waiting = new Map<number, Omit<CycleFollow, 'held'>>();
 
   constructor(
     private readonly queryClient: QueryClient,
-    private readonly onGap: (cycleId: number, sinceVersion: number) => void,
+    private readonly onRejoin: (cycleId: number) => void,
   ) {}
 
   ingest(change: LineupChange): void {
-    const key = lineupKeys.snapshot(change.cycleId);
-    const current = this.queryClient.getQueryData<LineupSnapshot>(key);
-    if (current && change.version <= current.version) return;
-    this.waitingFor(change.cycleId).set(change.version, change);
-    if (!current) return;
-    const next = this.catchUp(current);
-    if (next !== current) this.queryClient.setQueryData(key, next);
-    if (this.waitingFor(change.cycleId).size > 0) this.onGap(change.cycleId, next.version);
+    this.advance(change.cycleId, (follow) => followChange(follow, change));
   }
 
-  /** Takes a full snapshot unless the cache already holds a newer one. */
-  acceptSnapshot(snapshot: LineupSnapshot): void {
-    const key = lineupKeys.snapshot(snapshot.cycle.id);
-    this.queryClient.setQueryData<LineupSnapshot>(key, (current) => this.catchUp(this.newer(current, snapshot)));
+  /** A join is sent: no rejoin is asked for until it answers. */
+  joinSent(cycleId: number): void {
+    this.advance(cycleId, (follow) => ({ follow: followJoinAsked(follow), applied: [], rejoinFrom: null }));
   }
 
-  newer(current: LineupSnapshot | undefined, fetched: LineupSnapshot): LineupSnapshot {
-    return current && current.version > fetched.version ? current : fetched;
+  /** A join's answer: the snapshot (unless the cache holds a newer one) or the replay. */
+  acceptJoin(cycleId: number, answer: JoinAnswer): void {
+    this.advance(cycleId, (follow) => followJoin(follow, answer));
   }
 
-  /** Applies the waiting changes that directly follow the snapshot and drops the ones it already holds. */
-  catchUp(snapshot: LineupSnapshot): LineupSnapshot {
-    const waiting = this.waiting.get(snapshot.cycle.id);
-    if (!waiting) return snapshot;
-    let result = snapshot;
-    for (const version of [...waiting.keys()].sort((a, b) => a - b)) {
-      if (version <= result.version) {
-        waiting.delete(version);
-      } else if (version === result.version + 1) {
-        const change = waiting.get(version)!;
-        result = applyLineupPatch(result, change.version, change.patch);
-        waiting.delete(version);
-      } else {
-        break;
-      }
-    }
-    return result;
+  /** A join that got no answer. */
+  joinFailed(cycleId: number): void {
+    this.advance(cycleId, followJoinFailed);
+  }
+
+  /** What the cache should hold after an HTTP read: never older than what it holds, with early changes applied. */
+  fetched(snapshot: LineupSnapshot): LineupSnapshot {
+    return this.advance(snapshot.cycle.id, (follow) => followSnapshot(follow, snapshot)).follow.held ?? snapshot;
   }
 
   forget(cycleId: number): void {
     this.waiting.delete(cycleId);
   }
 
-  private waitingFor(cycleId: number): Map<number, LineupChange> {
-    let waiting = this.waiting.get(cycleId);
-    if (!waiting) {
-      waiting = new Map();
-      this.waiting.set(cycleId, waiting);
-    }
-    return waiting;
+  private advance(cycleId: number, rule: (follow: CycleFollow) => FollowStep): FollowStep {
+    const key = lineupKeys.snapshot(cycleId);
+    const held = this.queryClient.getQueryData<LineupSnapshot>(key) ?? null;
+    const step = rule({ ...startFollow(held), ...this.waiting.get(cycleId) });
+    const { held: next, ...rest } = step.follow;
+    if (next && next !== held) this.queryClient.setQueryData(key, next);
+    this.waiting.set(cycleId, rest);
+    if (step.rejoinFrom !== null) this.onRejoin(cycleId);
+    return step;
   }
 }

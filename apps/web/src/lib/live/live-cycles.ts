@@ -42,7 +42,7 @@ class LiveCycles {
   private retryDelayMs = 1_000;
   private state: LiveState = { connection: { kind: 'connecting' }, refusals: new Map() };
   private readonly listeners = new Set<() => void>();
-  readonly sync = new LineupSync(queryClient, (cycleId, sinceVersion) => this.resync(cycleId, sinceVersion));
+  readonly sync = new LineupSync(queryClient, (cycleId) => this.resync(cycleId));
 
   constructor() {
     onAccessTokenChange((token) => (token ? this.renewSocketToken(token) : this.close()));
@@ -171,15 +171,19 @@ class LiveCycles {
     return queryClient.getQueryData<LineupSnapshot>(lineupKeys.snapshot(cycleId))?.version;
   }
 
-  private join(cycleId: number, sinceVersion = this.cachedVersion(cycleId)) {
+  /** Joins with the version held, so the server answers with a replay when it can. */
+  private join(cycleId: number) {
     const socket = this.socket;
     if (!socket || this.joining.has(cycleId)) return;
+    const sinceVersion = this.cachedVersion(cycleId);
     this.joining.add(cycleId);
+    this.sync.joinSent(cycleId);
     socket.timeout(ACK_TIMEOUT_MS).emit('cycle:join', { cycleId, sinceVersion }, (error, result) => {
       this.joining.delete(cycleId);
       if (this.socket !== socket || !this.watchers.has(cycleId)) return;
       if (error) {
-        this.resync(cycleId, this.cachedVersion(cycleId));
+        this.sync.joinFailed(cycleId);
+        this.resync(cycleId);
         return;
       }
       this.applyJoin(cycleId, result);
@@ -189,6 +193,8 @@ class LiveCycles {
   private applyJoin(cycleId: number, result: JoinCycleResult) {
     const refusals = new Map(this.state.refusals);
     if (!result.ok) {
+      // Not following the cycle: what waited for a rejoin can no longer be completed.
+      this.sync.forget(cycleId);
       refusals.set(cycleId, result.message);
       this.state = { ...this.state, refusals };
       this.notify();
@@ -198,19 +204,18 @@ class LiveCycles {
       this.state = { ...this.state, refusals };
       this.notify();
     }
-    if (result.mode === 'snapshot') this.sync.acceptSnapshot(result.snapshot);
-    else result.changes.forEach((change) => this.sync.ingest(change));
+    this.sync.acceptJoin(cycleId, result);
   }
 
-  /** Asks for what was missed: a replay or snapshot over the socket, or a fresh snapshot over HTTP. */
-  private resync(cycleId: number, sinceVersion: number | undefined) {
+  /** Asks for what was missed since the version held: a replay or snapshot over the socket, or a fresh snapshot over HTTP. */
+  private resync(cycleId: number) {
     if (this.resyncTimers.has(cycleId)) return;
     this.resyncTimers.set(
       cycleId,
       setTimeout(() => {
         this.resyncTimers.delete(cycleId);
         if (!this.watchers.has(cycleId)) return;
-        if (this.socket?.connected) this.join(cycleId, sinceVersion);
+        if (this.socket?.connected) this.join(cycleId);
         else void queryClient.invalidateQueries({ queryKey: lineupKeys.snapshot(cycleId) });
       }, 300),
     );

@@ -1,0 +1,2 @@
+import { swcEsmPreset } from '../../scripts/jest/swc-esm.js';
+export default { ...swcEsmPreset, roots: ['<rootDir>/src'] };

@@ -50,7 +50,7 @@ export interface AcceptedResponse {
 /** The body of every 4xx/5xx answer. */
 export interface ApiError {
   statusCode: number;
-  /** A stable machine code, e.g. `stale_basis`, `validation_failed`. */
+  /** A stable machine code from `refusals.ts`, e.g. `stale_basis`, `validation_failed`. */
   code: string;
   /** A sentence a person understands. */
   message: string;

@@ -1,4 +1,5 @@
 import type { LineupChange, LineupSnapshot } from './lineup.js';
+import type { RefusalCode } from './refusals.js';
 
 export interface JoinCycleRequest {
   cycleId: number;
@@ -9,7 +10,7 @@ export interface JoinCycleRequest {
 export type JoinCycleResult =
   | { ok: true; mode: 'snapshot'; snapshot: LineupSnapshot }
   | { ok: true; mode: 'replay'; changes: LineupChange[] }
-  | { ok: false; code: string; message: string };
+  | { ok: false; code: RefusalCode; message: string };
 
 export type RefreshSocketResult = { ok: true; expiresAt: string } | { ok: false; message: string };
 

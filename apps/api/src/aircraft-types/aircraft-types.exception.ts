@@ -1,7 +1,6 @@
+import type { AircraftTypeRefusalCode } from '@catline/contracts';
 import { HttpStatus } from '@nestjs/common';
 import { DomainException } from '../common/errors/domain.exception.js';
-
-export type AircraftTypeRefusalCode = 'aircraft_type_not_found' | 'designation_taken' | 'invalid_launch_data' | 'aircraft_type_in_use';
 
 const STATUS: Record<AircraftTypeRefusalCode, HttpStatus> = {
   aircraft_type_not_found: HttpStatus.NOT_FOUND,

@@ -1,7 +1,6 @@
+import type { AircraftRefusalCode } from '@catline/contracts';
 import { HttpStatus } from '@nestjs/common';
 import { DomainException } from '../common/errors/domain.exception.js';
-
-export type AircraftRefusalCode = 'aircraft_not_found' | 'side_number_taken' | 'unknown_reference' | 'aircraft_in_use';
 
 const STATUS: Record<AircraftRefusalCode, HttpStatus> = {
   aircraft_not_found: HttpStatus.NOT_FOUND,

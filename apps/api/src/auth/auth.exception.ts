@@ -1,15 +1,6 @@
+import type { AuthRefusalCode } from '@catline/contracts';
 import { HttpStatus } from '@nestjs/common';
 import { DomainException } from '../common/errors/domain.exception.js';
-
-export type AuthRefusalCode =
-  | 'invalid_credentials'
-  | 'unauthenticated'
-  | 'session_invalid'
-  | 'session_ended'
-  | 'forbidden_role'
-  | 'wrong_password'
-  | 'password_unchanged'
-  | 'too_many_attempts';
 
 const STATUS: Record<AuthRefusalCode, HttpStatus> = {
   invalid_credentials: HttpStatus.UNAUTHORIZED,

@@ -1,27 +1,7 @@
+import type { LineupRefusalCode } from '@catline/contracts';
 import { LaunchMathInputError } from '@catline/launch-math';
 import { HttpStatus } from '@nestjs/common';
 import { DomainException } from '../common/errors/domain.exception.js';
-
-export type LineupRefusalCode =
-  | 'not_found'
-  | 'invalid_lineup'
-  | 'stale_basis'
-  | 'no_change'
-  | 'cycle_closed'
-  | 'cycle_not_executing'
-  | 'slot_not_movable'
-  | 'spare_unavailable'
-  | 'not_your_catapult'
-  | 'not_your_slot'
-  | 'not_current_aircraft'
-  | 'wrong_step'
-  | 'weight_not_agreed'
-  | 'weight_mismatch'
-  | 'catapult_unavailable'
-  | 'no_go'
-  | 'already_launched'
-  | 'idempotency_key_reused'
-  | 'launch_data_invalid';
 
 const STATUS: Record<LineupRefusalCode, HttpStatus> = {
   not_found: HttpStatus.NOT_FOUND,

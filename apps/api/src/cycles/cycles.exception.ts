@@ -1,15 +1,6 @@
+import type { CycleRefusalCode } from '@catline/contracts';
 import { HttpStatus } from '@nestjs/common';
 import { DomainException } from '../common/errors/domain.exception.js';
-
-export type CycleRefusalCode =
-  | 'not_found'
-  | 'cycle_number_taken'
-  | 'invalid_window'
-  | 'wrong_state'
-  | 'invalid_pilot'
-  | 'aircraft_already_in_cycle'
-  | 'aircraft_unserviceable'
-  | 'pilot_already_assigned';
 
 const STATUS: Record<CycleRefusalCode, HttpStatus> = {
   not_found: HttpStatus.NOT_FOUND,

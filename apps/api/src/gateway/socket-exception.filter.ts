@@ -1,10 +1,11 @@
+import type { RefusalCode } from '@catline/contracts';
 import { type ArgumentsHost, Catch, type ExceptionFilter, HttpException, Logger } from '@nestjs/common';
 import { DomainException } from '../common/errors/domain.exception.js';
 import { SocketRefusal } from './socket-refusal.js';
 
 interface SocketFailure {
   ok: false;
-  code: string;
+  code: RefusalCode;
   message: string;
 }
 

@@ -1,3 +1,4 @@
+import type { GatewayRefusalCode } from '@catline/contracts';
 import { Logger } from '@nestjs/common';
 import type { TokenVerifier } from '../auth/token-verifier.service.js';
 import type { SocketSessions } from './socket-sessions.service.js';
@@ -5,7 +6,7 @@ import type { CatlineSocket } from './socket.types.js';
 
 const logger = new Logger('SocketHandshake');
 
-function refuse(code: string, message: string): Error {
+function refuse(code: GatewayRefusalCode, message: string): Error {
   return Object.assign(new Error(message), { data: { code } });
 }
 

@@ -1,15 +1,6 @@
+import type { ImportRefusalCode } from '@catline/contracts';
 import { HttpStatus } from '@nestjs/common';
 import { DomainException } from '../common/errors/domain.exception.js';
-
-export type ImportRefusalCode =
-  | 'file_missing'
-  | 'file_too_large'
-  | 'not_csv'
-  | 'header_too_wide'
-  | 'target_not_found'
-  | 'upload_not_found'
-  | 'upload_not_importable'
-  | 'import_out_of_date';
 
 const STATUS: Record<ImportRefusalCode, HttpStatus> = {
   file_missing: HttpStatus.BAD_REQUEST,

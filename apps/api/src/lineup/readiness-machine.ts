@@ -1,5 +1,4 @@
-import type { CycleState, ReadinessStep, SlotStatus } from '@catline/contracts';
-import type { LineupRefusalCode } from '../cycle-changes/lineup.exception.js';
+import type { CycleState, LineupRefusalCode, ReadinessStep, SlotStatus } from '@catline/contracts';
 
 // The readiness steps of the aircraft on a catapult, as a pure state machine: the services only
 // gather the facts and write what it allows.

@@ -1,7 +1,6 @@
+import type { PasswordLinkRefusalCode } from '@catline/contracts';
 import { HttpStatus } from '@nestjs/common';
 import { DomainException } from '../common/errors/domain.exception.js';
-
-export type PasswordLinkRefusalCode = 'link_invalid';
 
 const STATUS: Record<PasswordLinkRefusalCode, HttpStatus> = {
   link_invalid: HttpStatus.BAD_REQUEST,

@@ -1,7 +1,6 @@
+import type { ReportRefusalCode } from '@catline/contracts';
 import { HttpStatus } from '@nestjs/common';
 import { DomainException } from '../common/errors/domain.exception.js';
-
-export type ReportRefusalCode = 'invalid_date_range';
 
 const STATUS: Record<ReportRefusalCode, HttpStatus> = {
   invalid_date_range: HttpStatus.BAD_REQUEST,

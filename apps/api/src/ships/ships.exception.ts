@@ -1,7 +1,6 @@
+import type { ShipRefusalCode } from '@catline/contracts';
 import { HttpStatus } from '@nestjs/common';
 import { DomainException } from '../common/errors/domain.exception.js';
-
-export type ShipRefusalCode = 'ship_not_found' | 'catapult_not_found' | 'invalid_configuration' | 'spot_in_use';
 
 const STATUS: Record<ShipRefusalCode, HttpStatus> = {
   ship_not_found: HttpStatus.NOT_FOUND,

@@ -1,7 +1,6 @@
+import type { SquadronRefusalCode } from '@catline/contracts';
 import { HttpStatus } from '@nestjs/common';
 import { DomainException } from '../common/errors/domain.exception.js';
-
-export type SquadronRefusalCode = 'squadron_not_found' | 'code_taken' | 'squadron_in_use';
 
 const STATUS: Record<SquadronRefusalCode, HttpStatus> = {
   squadron_not_found: HttpStatus.NOT_FOUND,

@@ -1,7 +1,6 @@
+import type { UserRefusalCode } from '@catline/contracts';
 import { HttpStatus } from '@nestjs/common';
 import { DomainException } from '../common/errors/domain.exception.js';
-
-export type UserRefusalCode = 'user_not_found' | 'email_taken' | 'invalid_binding' | 'unknown_reference' | 'self_change' | 'cannot_invite';
 
 const STATUS: Record<UserRefusalCode, HttpStatus> = {
   user_not_found: HttpStatus.NOT_FOUND,

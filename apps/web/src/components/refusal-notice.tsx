@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import { Alert, CloseButton } from '@chakra-ui/react';
 import { ApiRequestError, errorMessage } from '../lib/api-error.js';
+import { refusalText } from '../lib/refusal-texts.js';
 
 export interface Notice {
   title: string;
@@ -30,16 +31,10 @@ export function NoticeBanner({ notice, onDismiss }: { notice: Notice; onDismiss:
   );
 }
 
-/** Turns a refused command into a notice; a 409 says plainly that someone else got there first. */
+/** Turns a refused command into a notice whose title says why, by the server's refusal code. */
 export function refusalNotice(error: unknown, action: string): Notice {
-  if (error instanceof ApiRequestError && error.isConflict) {
-    return {
-      tone: 'refused',
-      title: `${action} refused: the lineup changed first`,
-      message: `${error.message} The board now shows the latest lineup.`,
-    };
-  }
-  return { tone: 'refused', title: `${action} did not go through`, message: errorMessage(error) };
+  const code = error instanceof ApiRequestError ? error.code : 'unknown';
+  return { tone: 'refused', ...refusalText(action, { code, message: errorMessage(error) }) };
 }
 
 export function useNotice() {

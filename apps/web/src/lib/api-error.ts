@@ -11,10 +11,6 @@ export class ApiRequestError extends Error implements ApiError {
     super(message);
     this.name = 'ApiRequestError';
   }
-
-  get isConflict() {
-    return this.statusCode === 409;
-  }
 }
 
 function isApiErrorBody(body: unknown): body is ApiError {

@@ -1,0 +1,146 @@
+// Every code a refusal (ApiError.code, or a socket acknowledgement's `code`) can carry, by the part
+// of Catline that refuses. The server's exceptions take their code types from here, and the web app
+// picks a refusal's title by code, so a new code must be added here first.
+
+/** Commands on a cycle's lineup and its readiness steps (HTTP and socket). */
+export const LINEUP_REFUSAL_CODES = [
+  'not_found',
+  'invalid_lineup',
+  /** The command was based on a version someone else changed first. */
+  'stale_basis',
+  'no_change',
+  'cycle_closed',
+  'cycle_not_executing',
+  'slot_not_movable',
+  'spare_unavailable',
+  'not_your_catapult',
+  'not_your_slot',
+  'not_current_aircraft',
+  'wrong_step',
+  'weight_not_agreed',
+  'weight_mismatch',
+  'catapult_unavailable',
+  'no_go',
+  'already_launched',
+  'idempotency_key_reused',
+  'launch_data_invalid',
+] as const;
+export type LineupRefusalCode = (typeof LINEUP_REFUSAL_CODES)[number];
+
+/** Creating, starting and closing cycles and adding aircraft to them. */
+export const CYCLE_REFUSAL_CODES = [
+  'not_found',
+  'cycle_number_taken',
+  'invalid_window',
+  'wrong_state',
+  'invalid_pilot',
+  'aircraft_already_in_cycle',
+  'aircraft_unserviceable',
+  'pilot_already_assigned',
+] as const;
+export type CycleRefusalCode = (typeof CYCLE_REFUSAL_CODES)[number];
+
+/** Uploads and their confirmation. */
+export const IMPORT_REFUSAL_CODES = [
+  'file_missing',
+  'file_too_large',
+  'not_csv',
+  'header_too_wide',
+  'target_not_found',
+  'upload_not_found',
+  'upload_not_importable',
+  /** The cycle changed between the preview and the confirm. */
+  'import_out_of_date',
+] as const;
+export type ImportRefusalCode = (typeof IMPORT_REFUSAL_CODES)[number];
+
+/** Sign-in, sessions, passwords and role checks. */
+export const AUTH_REFUSAL_CODES = [
+  'invalid_credentials',
+  'unauthenticated',
+  'session_invalid',
+  'session_ended',
+  'forbidden_role',
+  'wrong_password',
+  'password_unchanged',
+  'too_many_attempts',
+] as const;
+export type AuthRefusalCode = (typeof AUTH_REFUSAL_CODES)[number];
+
+/** People and their invitations. */
+export const USER_REFUSAL_CODES = [
+  'user_not_found',
+  'email_taken',
+  'invalid_binding',
+  'unknown_reference',
+  'self_change',
+  'cannot_invite',
+] as const;
+export type UserRefusalCode = (typeof USER_REFUSAL_CODES)[number];
+
+/** Invitation and password-reset links. */
+export const PASSWORD_LINK_REFUSAL_CODES = ['link_invalid'] as const;
+export type PasswordLinkRefusalCode = (typeof PASSWORD_LINK_REFUSAL_CODES)[number];
+
+/** The fleet: ships and catapults, aircraft, aircraft types, squadrons. */
+export const SHIP_REFUSAL_CODES = ['ship_not_found', 'catapult_not_found', 'invalid_configuration', 'spot_in_use'] as const;
+export type ShipRefusalCode = (typeof SHIP_REFUSAL_CODES)[number];
+
+export const AIRCRAFT_REFUSAL_CODES = ['aircraft_not_found', 'side_number_taken', 'unknown_reference', 'aircraft_in_use'] as const;
+export type AircraftRefusalCode = (typeof AIRCRAFT_REFUSAL_CODES)[number];
+
+export const AIRCRAFT_TYPE_REFUSAL_CODES = [
+  'aircraft_type_not_found',
+  'designation_taken',
+  'invalid_launch_data',
+  'aircraft_type_in_use',
+] as const;
+export type AircraftTypeRefusalCode = (typeof AIRCRAFT_TYPE_REFUSAL_CODES)[number];
+
+export const SQUADRON_REFUSAL_CODES = ['squadron_not_found', 'code_taken', 'squadron_in_use'] as const;
+export type SquadronRefusalCode = (typeof SQUADRON_REFUSAL_CODES)[number];
+
+/** Reports. */
+export const REPORT_REFUSAL_CODES = ['invalid_date_range'] as const;
+export type ReportRefusalCode = (typeof REPORT_REFUSAL_CODES)[number];
+
+/** The socket connection and its events, before any feature's rules. */
+export const GATEWAY_REFUSAL_CODES = ['origin_refused', 'unauthenticated', 'session_invalid', 'forbidden_role', 'ack_required'] as const;
+export type GatewayRefusalCode = (typeof GATEWAY_REFUSAL_CODES)[number];
+
+/** What the server's error filters answer for a request no feature refused by name. */
+export const REQUEST_REFUSAL_CODES = [
+  'validation_failed',
+  'bad_request',
+  'unauthorized',
+  'forbidden',
+  'not_found',
+  'conflict',
+  'payload_too_large',
+  'too_many_requests',
+  'unavailable',
+  'error',
+  'database_unavailable',
+  'database_busy',
+  'internal_error',
+] as const;
+export type RequestRefusalCode = (typeof REQUEST_REFUSAL_CODES)[number];
+
+/** Every refusal code, by family. */
+export const REFUSAL_CODE_FAMILIES = {
+  lineup: LINEUP_REFUSAL_CODES,
+  cycles: CYCLE_REFUSAL_CODES,
+  imports: IMPORT_REFUSAL_CODES,
+  auth: AUTH_REFUSAL_CODES,
+  users: USER_REFUSAL_CODES,
+  passwordLinks: PASSWORD_LINK_REFUSAL_CODES,
+  ships: SHIP_REFUSAL_CODES,
+  aircraft: AIRCRAFT_REFUSAL_CODES,
+  aircraftTypes: AIRCRAFT_TYPE_REFUSAL_CODES,
+  squadrons: SQUADRON_REFUSAL_CODES,
+  reports: REPORT_REFUSAL_CODES,
+  gateway: GATEWAY_REFUSAL_CODES,
+  request: REQUEST_REFUSAL_CODES,
+} as const;
+export type RefusalFamily = keyof typeof REFUSAL_CODE_FAMILIES;
+export type RefusalCode = (typeof REFUSAL_CODE_FAMILIES)[RefusalFamily][number];

@@ -1,6 +1,15 @@
 import fc from 'fast-check';
 import type { CycleView } from './cycles.js';
-import { type CycleFollow, type FollowStep, followChange, followJoin, followJoinAsked, followJoinFailed, followSnapshot, startFollow } from './cycle-follow.js';
+import {
+  type CycleFollow,
+  type FollowStep,
+  followChange,
+  followJoin,
+  followJoinAsked,
+  followJoinFailed,
+  followSnapshot,
+  startFollow,
+} from './cycle-follow.js';
 import type { LaneView, LineupChange, LineupSnapshot } from './lineup.js';
 import { applyLineupChanges } from './lineup-patch.js';
 
@@ -127,7 +136,12 @@ function simulate(startVersion: number, laneOfChange: readonly number[], deliver
     if (join.sinceVersion === undefined || committed - join.sinceVersion > delivery.maxReplay) {
       take(followJoin(follow, { mode: 'snapshot', snapshot: states.get(committed)! }));
     } else {
-      take(followJoin(follow, { mode: 'replay', changes: changes.filter((c) => c.version > join.sinceVersion! && c.version <= committed) }));
+      take(
+        followJoin(follow, {
+          mode: 'replay',
+          changes: changes.filter((c) => c.version > join.sinceVersion! && c.version <= committed),
+        }),
+      );
     }
   };
 
@@ -141,7 +155,10 @@ function simulate(startVersion: number, laneOfChange: readonly number[], deliver
     const event = events[next() % events.length];
     if (event === 'commit') {
       committed += 1;
-      const copies = committed === lastVersion ? Math.max(1, delivery.copies[committed - startVersion - 1]) : delivery.copies[committed - startVersion - 1];
+      const copies =
+        committed === lastVersion
+          ? Math.max(1, delivery.copies[committed - startVersion - 1])
+          : delivery.copies[committed - startVersion - 1];
       for (let copy = 0; copy < copies; copy += 1) inFlight.push(changes[committed - startVersion - 1]);
     } else if (event === 'deliver') {
       take(followChange(follow, inFlight.splice(next() % inFlight.length, 1)[0]));
@@ -161,7 +178,11 @@ const scenario = fc
     maxReplay: fc.integer({ min: 1, max: 50 }),
     copiesPool: fc.array(fc.integer({ min: 0, max: 2 }), { minLength: 40, maxLength: 40 }),
   })
-  .map(({ copiesPool, laneOfChange, ...rest }) => ({ ...rest, laneOfChange, copies: copiesPool.slice(0, laneOfChange.length) }));
+  .map(({ copiesPool, laneOfChange, ...rest }) => ({
+    ...rest,
+    laneOfChange,
+    copies: copiesPool.slice(0, laneOfChange.length),
+  }));
 
 describe('following a cycle', () => {
   it('ends equal to the server whatever the order, duplicates and drops of the broadcast', () => {
@@ -212,7 +233,10 @@ describe('following a cycle', () => {
   it('keeps changes that arrive before the first snapshot and applies those after it', () => {
     const before = followChange(followChange(startFollow(), changes[0]).follow, changes[1]);
     expect(before.rejoinFrom).toBeNull();
-    const joined = followJoin(before.follow, { mode: 'snapshot', snapshot: followChange(startFollow(start), changes[0]).follow.held! });
+    const joined = followJoin(before.follow, {
+      mode: 'snapshot',
+      snapshot: followChange(startFollow(start), changes[0]).follow.held!,
+    });
     expect(joined.applied.map((c) => c.version)).toEqual([12]);
     expect(joined.follow.early).toEqual([]);
   });

@@ -83,10 +83,20 @@ export const PASSWORD_LINK_REFUSAL_CODES = ['link_invalid'] as const;
 export type PasswordLinkRefusalCode = (typeof PASSWORD_LINK_REFUSAL_CODES)[number];
 
 /** The fleet: ships and catapults, aircraft, aircraft types, squadrons. */
-export const SHIP_REFUSAL_CODES = ['ship_not_found', 'catapult_not_found', 'invalid_configuration', 'spot_in_use'] as const;
+export const SHIP_REFUSAL_CODES = [
+  'ship_not_found',
+  'catapult_not_found',
+  'invalid_configuration',
+  'spot_in_use',
+] as const;
 export type ShipRefusalCode = (typeof SHIP_REFUSAL_CODES)[number];
 
-export const AIRCRAFT_REFUSAL_CODES = ['aircraft_not_found', 'side_number_taken', 'unknown_reference', 'aircraft_in_use'] as const;
+export const AIRCRAFT_REFUSAL_CODES = [
+  'aircraft_not_found',
+  'side_number_taken',
+  'unknown_reference',
+  'aircraft_in_use',
+] as const;
 export type AircraftRefusalCode = (typeof AIRCRAFT_REFUSAL_CODES)[number];
 
 export const AIRCRAFT_TYPE_REFUSAL_CODES = [
@@ -105,7 +115,13 @@ export const REPORT_REFUSAL_CODES = ['invalid_date_range'] as const;
 export type ReportRefusalCode = (typeof REPORT_REFUSAL_CODES)[number];
 
 /** The socket connection and its events, before any feature's rules. */
-export const GATEWAY_REFUSAL_CODES = ['origin_refused', 'unauthenticated', 'session_invalid', 'forbidden_role', 'ack_required'] as const;
+export const GATEWAY_REFUSAL_CODES = [
+  'origin_refused',
+  'unauthenticated',
+  'session_invalid',
+  'forbidden_role',
+  'ack_required',
+] as const;
 export type GatewayRefusalCode = (typeof GATEWAY_REFUSAL_CODES)[number];
 
 /** What the server's error filters answer for a request no feature refused by name. */

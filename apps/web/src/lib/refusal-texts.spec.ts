@@ -18,17 +18,29 @@ const FAMILIES: Record<RefusalFamily, { changedFirst: RefusalCode[]; titles: Par
       not_current_aircraft: 'Moving 104 refused: not the aircraft on the catapult',
     },
   },
-  cycles: { changedFirst: [], titles: { wrong_state: 'Moving 104 refused: not possible in the cycle’s present state' } },
+  cycles: {
+    changedFirst: [],
+    titles: { wrong_state: 'Moving 104 refused: not possible in the cycle’s present state' },
+  },
   imports: {
     changedFirst: ['import_out_of_date'],
-    titles: { import_out_of_date: 'Moving 104 refused: the cycle changed first', not_csv: 'Moving 104 refused: not a CSV file' },
+    titles: {
+      import_out_of_date: 'Moving 104 refused: the cycle changed first',
+      not_csv: 'Moving 104 refused: not a CSV file',
+    },
   },
   auth: { changedFirst: [], titles: { forbidden_role: 'Moving 104 refused: not allowed for your role' } },
-  users: { changedFirst: [], titles: { cannot_invite: 'Moving 104 refused: the person has already chosen a password' } },
+  users: {
+    changedFirst: [],
+    titles: { cannot_invite: 'Moving 104 refused: the person has already chosen a password' },
+  },
   passwordLinks: { changedFirst: [], titles: { link_invalid: 'Moving 104 refused: the link is not valid' } },
   ships: { changedFirst: [], titles: { spot_in_use: 'Moving 104 refused: the spot is in use' } },
   aircraft: { changedFirst: [], titles: { side_number_taken: 'Moving 104 refused: the side number is taken' } },
-  aircraftTypes: { changedFirst: [], titles: { aircraft_type_in_use: 'Moving 104 refused: the aircraft type is in use' } },
+  aircraftTypes: {
+    changedFirst: [],
+    titles: { aircraft_type_in_use: 'Moving 104 refused: the aircraft type is in use' },
+  },
   squadrons: { changedFirst: [], titles: { code_taken: 'Moving 104 refused: the squadron code is taken' } },
   reports: { changedFirst: [], titles: { invalid_date_range: 'Moving 104 refused: the dates are not a valid range' } },
   gateway: { changedFirst: [], titles: { origin_refused: 'Moving 104 refused: this page may not connect to Catline' } },

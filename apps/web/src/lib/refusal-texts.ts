@@ -13,7 +13,13 @@ const CHANGED_FIRST: Partial<Record<RefusalCode, string>> = {
 };
 
 // The server could not act (rather than refusing what was asked): nothing changed, and trying again may work.
-const NOT_DONE = new Set<RefusalCode>(['unavailable', 'error', 'database_unavailable', 'database_busy', 'internal_error']);
+const NOT_DONE = new Set<RefusalCode>([
+  'unavailable',
+  'error',
+  'database_unavailable',
+  'database_busy',
+  'internal_error',
+]);
 
 /** Why, in a few words, after "<action> refused:". Typed by every code, so a new code needs its words here. */
 const REASONS: Record<RefusalCode, string> = {

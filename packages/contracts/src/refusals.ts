@@ -124,8 +124,12 @@ export const GATEWAY_REFUSAL_CODES = [
 ] as const;
 export type GatewayRefusalCode = (typeof GATEWAY_REFUSAL_CODES)[number];
 
+/** A request refused for its form (a body nested too deep, an id not in digits) before any feature reads it. */
+export const REQUEST_REFUSAL_CODES = ['json_too_deep', 'invalid_id'] as const;
+export type RequestRefusalCode = (typeof REQUEST_REFUSAL_CODES)[number];
+
 /** What the server's error filters answer for a request no feature refused by name. */
-export const REQUEST_REFUSAL_CODES = [
+export const GENERIC_REFUSAL_CODES = [
   'validation_failed',
   'bad_request',
   'unauthorized',
@@ -140,7 +144,7 @@ export const REQUEST_REFUSAL_CODES = [
   'database_busy',
   'internal_error',
 ] as const;
-export type RequestRefusalCode = (typeof REQUEST_REFUSAL_CODES)[number];
+export type GenericRefusalCode = (typeof GENERIC_REFUSAL_CODES)[number];
 
 /** Every refusal code, by family. */
 export const REFUSAL_CODE_FAMILIES = {
@@ -157,6 +161,7 @@ export const REFUSAL_CODE_FAMILIES = {
   reports: REPORT_REFUSAL_CODES,
   gateway: GATEWAY_REFUSAL_CODES,
   request: REQUEST_REFUSAL_CODES,
+  generic: GENERIC_REFUSAL_CODES,
 } as const;
 export type RefusalFamily = keyof typeof REFUSAL_CODE_FAMILIES;
 export type RefusalCode = (typeof REFUSAL_CODE_FAMILIES)[RefusalFamily][number];

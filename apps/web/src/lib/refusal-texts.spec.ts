@@ -44,7 +44,8 @@ const FAMILIES: Record<RefusalFamily, { changedFirst: RefusalCode[]; titles: Par
   squadrons: { changedFirst: [], titles: { code_taken: 'Moving 104 refused: the squadron code is taken' } },
   reports: { changedFirst: [], titles: { invalid_date_range: 'Moving 104 refused: the dates are not a valid range' } },
   gateway: { changedFirst: [], titles: { origin_refused: 'Moving 104 refused: this page may not connect to Catline' } },
-  request: {
+  request: { changedFirst: [], titles: { invalid_id: 'Moving 104 refused: not a valid id' } },
+  generic: {
     changedFirst: [],
     titles: {
       validation_failed: 'Moving 104 refused: some values are not valid',

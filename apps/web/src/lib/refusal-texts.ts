@@ -98,6 +98,9 @@ const REASONS: Record<RefusalCode, string> = {
   // socket
   origin_refused: 'this page may not connect to Catline',
   ack_required: 'the request was sent without waiting for an answer',
+  // request form
+  json_too_deep: 'the request is nested too deep',
+  invalid_id: 'not a valid id',
   // any request
   validation_failed: 'some values are not valid',
   bad_request: 'the request is not valid',

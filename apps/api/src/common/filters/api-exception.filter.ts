@@ -1,10 +1,10 @@
-import type { ApiError, RequestRefusalCode } from '@catline/contracts';
+import type { ApiError, GenericRefusalCode } from '@catline/contracts';
 import { type ArgumentsHost, Catch, type ExceptionFilter, HttpException, HttpStatus, Logger } from '@nestjs/common';
 import type { Response } from 'express';
 import { QueryFailedError } from 'typeorm';
 import { DomainException } from '../errors/domain.exception.js';
 
-const CODE_BY_STATUS: Record<number, RequestRefusalCode> = {
+const CODE_BY_STATUS: Record<number, GenericRefusalCode> = {
   400: 'bad_request',
   401: 'unauthorized',
   403: 'forbidden',

@@ -36,11 +36,12 @@ export function isMariaDBRunning(server = privateServer) {
   return existsSync(server.socket) && read(binary('mariadb-admin'), [...adminArgs(server), 'ping']) !== null;
 }
 
-function sql(server, statements) {
+/** Runs statements as root over the server's socket; throws when one fails. */
+export function sql(server, statements) {
   run(binary('mariadb'), [...adminArgs(server), '-e', statements]);
 }
 
-/** The first column of the first row of a query run as root, or null when the server does not answer. */
+/** What a query run as root prints (rows on lines, columns split by tabs), or null when it fails. */
 export function queryValue(server, statement) {
   return read(binary('mariadb'), [...adminArgs(server), '--batch', '--skip-column-names', '-e', statement]);
 }

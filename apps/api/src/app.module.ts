@@ -36,6 +36,8 @@ const webDist = fileURLToPath(new URL('../../web/dist', import.meta.url));
           DB_NAME: config.get('DB_NAME'),
           DB_USER: config.get('DB_USER'),
           DB_PASSWORD: config.get('DB_PASSWORD'),
+          DB_REPLICA_HOST: config.get('DB_REPLICA_HOST'),
+          DB_REPLICA_PORT: config.get('DB_REPLICA_PORT'),
         }),
         retryAttempts: 3,
       }),

@@ -27,6 +27,21 @@ export class Environment {
   @IsString()
   DB_PASSWORD: string = '';
 
+  /**
+   * An asynchronous replica of DB_HOST (same database, user and password) that reports and exports
+   * read from; unset, they read from DB_HOST like everything else.
+   */
+  @IsOptional()
+  @Transform(({ value }: { value: unknown }) => (value === '' ? undefined : value))
+  @IsString()
+  DB_REPLICA_HOST?: string;
+
+  /** The replica's port; DB_PORT when unset. */
+  @IsOptional()
+  @Transform(({ value }: { value: unknown }) => (value === '' ? undefined : value))
+  @IsInt() @Min(1) @Max(65535)
+  DB_REPLICA_PORT?: number;
+
   @IsString() @MinLength(16, { message: 'JWT_SECRET must be at least 16 characters' })
   JWT_SECRET: string;
 

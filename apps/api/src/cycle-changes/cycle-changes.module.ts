@@ -33,6 +33,6 @@ import { LineupStateLoader } from './lineup-state.js';
     },
     LineupStateLoader,
   ],
-  exports: [Clock, BasisChecks, CycleChangeService, LineupChangeFeed, LineupChangesService, LineupSnapshotService],
+  exports: [Clock, BasisChecks, CycleChangeService, LineupChangeFeed, LineupChangesService, LineupSnapshotService, LineupStateLoader],
 })
 export class CycleChangesModule {}

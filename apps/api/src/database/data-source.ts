@@ -4,17 +4,32 @@ import { ENV_FILE_PATHS, type Environment, validateEnvironment } from '../config
 import { entities } from './entities.js';
 import { migrations } from './migrations/index.js';
 
-type DatabaseSettings = Pick<Environment, 'DB_HOST' | 'DB_PORT' | 'DB_NAME' | 'DB_USER' | 'DB_PASSWORD'>;
+type DatabaseSettings = Pick<Environment, 'DB_HOST' | 'DB_PORT' | 'DB_NAME' | 'DB_USER' | 'DB_PASSWORD'> &
+  Partial<Pick<Environment, 'DB_REPLICA_HOST' | 'DB_REPLICA_PORT'>>;
 
-/** One definition of the connection for the app, the command-line tools and the tests. */
-export function dataSourceOptions(settings: DatabaseSettings): DataSourceOptions {
-  return {
-    type: 'mariadb',
+/**
+ * The server(s) to connect to. With a replica, TypeORM keeps a pool on each, and `defaultMode: 'master'`
+ * sends every query to the primary unless a query runner is asked for on the replica (`ReplicaReads`):
+ * a read that must see the latest commit cannot land on the replica by default.
+ */
+function servers(settings: DatabaseSettings) {
+  const primary = {
     host: settings.DB_HOST,
     port: settings.DB_PORT,
     database: settings.DB_NAME,
     username: settings.DB_USER,
     password: settings.DB_PASSWORD,
+  };
+  if (!settings.DB_REPLICA_HOST) return primary;
+  const replica = { ...primary, host: settings.DB_REPLICA_HOST, port: settings.DB_REPLICA_PORT ?? settings.DB_PORT };
+  return { replication: { master: primary, slaves: [replica], defaultMode: 'master' as const } };
+}
+
+/** One definition of the connection for the app, the command-line tools and the tests. */
+export function dataSourceOptions(settings: DatabaseSettings): DataSourceOptions {
+  return {
+    type: 'mariadb',
+    ...servers(settings),
     entities,
     migrations,
     migrationsTransactionMode: 'each',

@@ -1,10 +1,10 @@
 import type { ShotCounts } from '@catline/contracts';
 import { Injectable } from '@nestjs/common';
-import { InjectDataSource } from '@nestjs/typeorm';
-import { DataSource } from 'typeorm';
+import type { EntityManager } from 'typeorm';
 import { Aircraft } from '../aircraft/entities/aircraft.entity.js';
 import { toCsv } from '../common/csv.js';
 import { Slot } from '../cycle-changes/entities/slot.entity.js';
+import { ReplicaReads } from '../database/replica-reads.js';
 import { Catapult } from '../ships/entities/catapult.entity.js';
 import type { CsvFile } from './csv-response.js';
 import type { DayRange } from './day-range.js';
@@ -16,16 +16,17 @@ const bySide = (a: Aircraft, b: Aircraft) => a.sideNumber.localeCompare(b.sideNu
 /** Maintenance's counts of catapult launches per airframe and per catapult, from the recorded launch times. */
 @Injectable()
 export class ShotCountsService {
-  constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
+  constructor(private readonly replica: ReplicaReads) {}
 
   async counts(range: DayRange): Promise<ShotCounts> {
-    const manager = this.dataSource.manager;
-    const [perAircraft, perCatapult, aircraft, catapults] = await Promise.all([
-      this.launchesBy(range, 'aircraftId'),
-      this.launchesBy(range, 'catapultId'),
-      manager.find(Aircraft, { relations: { type: true, squadron: true } }),
-      manager.find(Catapult, { relations: { ship: true }, order: { shipId: 'ASC', number: 'ASC' } }),
-    ]);
+    const [perAircraft, perCatapult, aircraft, catapults] = await this.replica.read((manager) =>
+      Promise.all([
+        this.launchesBy(manager, range, 'aircraftId'),
+        this.launchesBy(manager, range, 'catapultId'),
+        manager.find(Aircraft, { relations: { type: true, squadron: true } }),
+        manager.find(Catapult, { relations: { ship: true }, order: { shipId: 'ASC', number: 'ASC' } }),
+      ]),
+    );
     return {
       from: range.from,
       to: range.to,
@@ -58,8 +59,8 @@ export class ShotCountsService {
   }
 
   /** Launches recorded inside the range, counted per aircraft or per catapult. */
-  private async launchesBy(range: DayRange, key: 'aircraftId' | 'catapultId'): Promise<Map<number, number>> {
-    const rows = await this.dataSource.manager
+  private async launchesBy(manager: EntityManager, range: DayRange, key: 'aircraftId' | 'catapultId'): Promise<Map<number, number>> {
+    const rows = await manager
       .createQueryBuilder(Slot, 'slot')
       .select(`slot.${key}`, 'id')
       .addSelect('COUNT(*)', 'launches')

@@ -9,7 +9,7 @@ import {
   startMariaDB,
   stopMariaDB,
 } from '../../../../scripts/lib/mariadb.mjs';
-import { createBusyCycle } from '../support/busy-cycle.js';
+import { createBusyCycle, placeFromPool } from '../support/busy-cycle.js';
 import { readChangeLog } from '../support/change-log.js';
 import { LineupDriver, OBSERVER } from '../support/lineup-fixtures.js';
 import { freePort } from '../support/mail-catcher.js';
@@ -29,12 +29,6 @@ function removeServerFiles(): void {
     if (name.startsWith(`${path.basename(server.dataDir)}.replaced-`))
       rmSync(path.join(parent, name), { recursive: true, force: true });
   }
-}
-
-/** Places the first `count` aircraft of the deck pool at the end of lanes 1–4 in turn, one command each. */
-async function placeFromPool(deck: LineupDriver, cycleId: number, count: number): Promise<void> {
-  const pool = (await deck.snapshot(cycleId)).slots.filter((slot) => slot.catapultId === null).slice(0, count);
-  for (const [index, slot] of pool.entries()) await deck.place(cycleId, slot.id, (index % 4) + 1);
 }
 
 const sleep = (ms: number) => new Promise((resolve) => setTimeout(resolve, ms));

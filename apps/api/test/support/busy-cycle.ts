@@ -32,3 +32,9 @@ export async function handlerTokens(deck: LineupDriver, count: number): Promise<
   while (tokens.length < count) tokens.push(await signIn(deck.url, (await createUser(deck.url, admin, 'handler')).email, TEST_PASSWORD));
   return tokens;
 }
+
+/** Places the first `count` aircraft of the deck pool at the end of lanes 1–4 in turn, one command each. */
+export async function placeFromPool(deck: LineupDriver, cycleId: number, count: number): Promise<void> {
+  const pool = (await deck.snapshot(cycleId)).slots.filter((slot) => slot.catapultId === null).slice(0, count);
+  for (const [index, slot] of pool.entries()) await deck.place(cycleId, slot.id, (index % 4) + 1);
+}

@@ -1,4 +1,5 @@
 import { io, type Socket } from 'socket.io-client';
+import { createStore } from 'zustand/vanilla';
 import type {
   ClientToServerEvents,
   JoinCycleResult,
@@ -40,8 +41,8 @@ class LiveCycles {
   private offlineTimer: ReturnType<typeof setTimeout> | undefined;
   private lingerTimer: ReturnType<typeof setTimeout> | undefined;
   private retryDelayMs = 1_000;
-  private state: LiveState = { connection: { kind: 'connecting' }, refusals: new Map() };
-  private readonly listeners = new Set<() => void>();
+  /** What screens show about the link; they read it with `useStore`. */
+  readonly state = createStore<LiveState>(() => ({ connection: { kind: 'connecting' }, refusals: new Map() }));
   readonly sync = new LineupSync(queryClient, (cycleId) => this.resync(cycleId));
 
   constructor() {
@@ -49,13 +50,6 @@ class LiveCycles {
     globalThis.addEventListener?.('offline', () => this.markOffline(new Date()));
     globalThis.addEventListener?.('online', () => this.backOnline());
   }
-
-  readonly subscribe = (listener: () => void) => {
-    this.listeners.add(listener);
-    return () => this.listeners.delete(listener);
-  };
-
-  readonly getState = () => this.state;
 
   /** Follows a cycle until the returned function is called. */
   watch(cycleId: number): () => void {
@@ -142,8 +136,7 @@ class LiveCycles {
     this.socket?.disconnect();
     this.socket = null;
     this.joining.clear();
-    this.state = { connection: { kind: 'connecting' }, refusals: new Map() };
-    this.notify();
+    this.state.setState({ connection: { kind: 'connecting' }, refusals: new Map() });
   }
 
   private retryWithFreshToken(socket: CatlineSocket) {
@@ -191,19 +184,15 @@ class LiveCycles {
   }
 
   private applyJoin(cycleId: number, result: JoinCycleResult) {
-    const refusals = new Map(this.state.refusals);
+    const refusals = new Map(this.state.getState().refusals);
     if (!result.ok) {
       // Not following the cycle: what waited for a rejoin can no longer be completed.
       this.sync.forget(cycleId);
       refusals.set(cycleId, result.message);
-      this.state = { ...this.state, refusals };
-      this.notify();
+      this.state.setState({ refusals });
       return;
     }
-    if (refusals.delete(cycleId)) {
-      this.state = { ...this.state, refusals };
-      this.notify();
-    }
+    if (refusals.delete(cycleId)) this.state.setState({ refusals });
     this.sync.acceptJoin(cycleId, result);
   }
 
@@ -222,7 +211,7 @@ class LiveCycles {
   }
 
   private markReconnecting(since: Date) {
-    const current = this.state.connection;
+    const current = this.state.getState().connection;
     if (current.kind === 'reconnecting' || current.kind === 'offline') return;
     this.setConnection({ kind: 'reconnecting', since });
     clearTimeout(this.offlineTimer);
@@ -230,18 +219,13 @@ class LiveCycles {
   }
 
   private markOffline(fallbackSince: Date) {
-    const current = this.state.connection;
+    const current = this.state.getState().connection;
     if (current.kind === 'offline') return;
     this.setConnection({ kind: 'offline', since: current.kind === 'reconnecting' ? current.since : fallbackSince });
   }
 
   private setConnection(connection: ConnectionState) {
-    this.state = { ...this.state, connection };
-    this.notify();
-  }
-
-  private notify() {
-    this.listeners.forEach((listener) => listener());
+    this.state.setState({ connection });
   }
 }
 

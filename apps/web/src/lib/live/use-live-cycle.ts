@@ -1,5 +1,6 @@
-import { useEffect, useSyncExternalStore } from 'react';
+import { useEffect } from 'react';
 import { useQuery } from '@tanstack/react-query';
+import { useStore } from 'zustand';
 import { lineupSnapshotQueryOptions } from './lineup-query.js';
 import { liveCycles } from './live-cycles.js';
 
@@ -9,7 +10,7 @@ import { liveCycles } from './live-cycles.js';
  */
 export function useLiveCycle(cycleId: number | undefined) {
   useEffect(() => (cycleId === undefined ? undefined : liveCycles.watch(cycleId)), [cycleId]);
-  const live = useSyncExternalStore(liveCycles.subscribe, liveCycles.getState);
+  const live = useStore(liveCycles.state);
   const lineup = useQuery({ ...lineupSnapshotQueryOptions(cycleId ?? 0), enabled: cycleId !== undefined });
   return {
     lineup,

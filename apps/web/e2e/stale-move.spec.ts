@@ -27,7 +27,7 @@ test('a move based on a lineup that changed meanwhile is refused with the server
   await dragWithMouse(lagging, card(pool(lagging), '104'), lane(lagging, 3).getByTestId('lane-drop-zone'));
 
   const notice = lagging.getByTestId('notice');
-  await expect(notice).toContainText('refused');
+  await expect(notice).toContainText('refused: the lineup changed first');
   await expect(notice).toContainText('104');
   // Rolled back and refreshed: the lagging screen now shows where the first handler put it.
   await expect(card(lane(lagging, 2), '104')).toBeVisible();

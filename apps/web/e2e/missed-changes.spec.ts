@@ -1,0 +1,66 @@
+import { expect, test, type Page } from '@playwright/test';
+import { apiAs, lineupOf, placeInLane, planCycle } from './support/demo-api.js';
+import { card, lane, pool, signIn } from './support/screens.js';
+
+const BROADCAST = '42["lineup:change"';
+
+/** What the board shows: each lane's side numbers in launch order, and the deck pool's. */
+async function shownLineup(page: Page, catapultNumbers: number[]) {
+  const sides = (scope: ReturnType<typeof lane>) =>
+    scope
+      .locator('[data-testid="slot-card"]')
+      .evaluateAll((cards) => cards.map((element) => element.getAttribute('data-side-number')));
+  return {
+    lanes: await Promise.all(catapultNumbers.map((number) => sides(lane(page, number)))),
+    pool: (await sides(pool(page))).sort(),
+  };
+}
+
+test('a page that gets one change late and misses another still ends with the server’s lineup, through a rejoin', async ({
+  browser,
+}) => {
+  const sides = ['105', '106', '201', '202'];
+  const { cycle, slotIds } = await planCycle({ aircraft: sides.map((side) => ({ side, grossWeightLb: 42_000 })) });
+
+  // This page's broadcasts go wrong on the way: the 1st arrives only after the 2nd, the 3rd never arrives.
+  const page = await (await browser.newContext({ viewport: { width: 1366, height: 768 } })).newPage();
+  const fate = { seen: 0, late: null as string | Buffer | null, dropped: 0 };
+  await page.routeWebSocket(/\/socket\.io\//, (socket) => {
+    const server = socket.connectToServer();
+    server.onMessage((message) => {
+      if (!String(message).startsWith(BROADCAST)) return socket.send(message);
+      fate.seen += 1;
+      if (fate.seen === 1) fate.late = message;
+      else if (fate.seen === 3) fate.dropped += 1;
+      else socket.send(message);
+      if (fate.seen === 2 && fate.late) socket.send(fate.late);
+    });
+  });
+  await page.goto(`/lineup?cycle=${cycle.id}`);
+  await signIn(page, 'handler');
+  for (const side of sides) await expect(card(pool(page), side)).toBeVisible();
+  // Catching up must come through the socket's rejoin, not a fresh read of the whole lineup.
+  let lineupReads = 0;
+  page.on('request', (request) => {
+    if (request.method() === 'GET' && new URL(request.url()).pathname === `/api/cycles/${cycle.id}/lineup`)
+      lineupReads += 1;
+  });
+
+  const handler = await apiAs('handler');
+  for (const [index, side] of sides.entries())
+    await placeInLane(handler, cycle.id, slotIds.get(side)!, (index % 2) + 1);
+  const server = await lineupOf(handler, cycle.id);
+  await handler.dispose();
+
+  const catapults = server.lanes.map((serverLane) => serverLane.number);
+  const sideOf = new Map(server.slots.map((slot) => [slot.id, slot.sideNumber]));
+  const expected = {
+    lanes: server.lanes.map((serverLane) => serverLane.slotIds.map((id) => sideOf.get(id))),
+    pool: server.pool.map((id) => sideOf.get(id)).sort(),
+  };
+  expect(expected.lanes[catapults.indexOf(1)]).toEqual(['105', '201']);
+  expect(expected.lanes[catapults.indexOf(2)]).toEqual(['106', '202']);
+  await expect.poll(() => shownLineup(page, catapults), { timeout: 10_000 }).toEqual(expected);
+  expect(fate).toMatchObject({ seen: 4, dropped: 1 });
+  expect(lineupReads).toBe(0);
+});

@@ -121,8 +121,8 @@ function printTables({ fanOut, commitRate, computation, web, apiProcesses }) {
     console.table(commitRate);
   }
   if (computation) {
-    console.log('\nComputation: projection plus suggestion, 40 aircraft on 4 catapults');
-    console.table([computation]);
+    console.log('\nComputation: projection and suggested lineup on 4 catapults (packages/launch-math/bench/plan-40.mjs)');
+    console.table(computation.rows);
   }
   if (web) {
     console.log('\nWeb');

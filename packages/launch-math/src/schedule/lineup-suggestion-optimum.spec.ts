@@ -2,8 +2,51 @@ import fc from 'fast-check';
 import { suggestionInputArbitrary, suggestionViolations } from '../testing/cycles.fixture.js';
 import { epochMs } from '../units/units.js';
 import { priorityTier, projectLaunchTimes } from './launch-projection.js';
-import { scheduleLaunches } from './launch-scheduler.js';
 import { suggestLineup, type SuggestionInput } from './lineup-suggestion.js';
+
+interface PlainCycle {
+  readonly earliest: number;
+  readonly pairGapMs: number;
+  readonly resetMs: readonly number[];
+  readonly pair: readonly string[];
+  /** arrival[aircraft][catapult], epoch ms; Infinity when out of reach. */
+  readonly arrival: readonly (readonly number[])[];
+  readonly tier: readonly number[];
+}
+
+/**
+ * The last launch of a lineup, simulated plainly from the rules as the package README states them
+ * (lane order, reset interval, taxi arrival, pair gap, priority holds with no overtaking in a lane,
+ * earliest launch first, ties to the lower catapult): written apart from launch-scheduler.ts, and
+ * slow, so that the optimum below does not lean on the code it judges.
+ */
+function plainLastLaunch(cycle: PlainCycle, lanes: readonly (readonly number[])[]): number {
+  const launches: { catapult: number; time: number; tier: number }[] = [];
+  const effective = lanes.map((lane) => lane.map((_, place) => Math.max(...lane.slice(0, place + 1).map((aircraft) => cycle.tier[aircraft]))));
+  const head = lanes.map(() => 0);
+  let last = cycle.earliest;
+  for (;;) {
+    const waiting = lanes.flatMap((lane, catapult) => (head[catapult] < lane.length ? [catapult] : []));
+    if (waiting.length === 0) return last;
+    const phase = Math.min(...waiting.map((catapult) => effective[catapult][head[catapult]]));
+    const hold = Math.max(cycle.earliest, ...launches.filter((launch) => launch.tier < phase).map((launch) => launch.time));
+    let chosen = { catapult: -1, time: Infinity };
+    for (const catapult of waiting) {
+      if (effective[catapult][head[catapult]] !== phase) continue;
+      const own = launches.filter((launch) => launch.catapult === catapult).map((launch) => launch.time + cycle.resetMs[catapult]);
+      let time = Math.max(hold, cycle.arrival[lanes[catapult][head[catapult]]][catapult], ...own);
+      const partners = launches.filter((launch) => launch.catapult !== catapult && cycle.pair[launch.catapult] === cycle.pair[catapult]);
+      for (let clash = partners.find((launch) => Math.abs(launch.time - time) < cycle.pairGapMs); clash; ) {
+        time = clash.time + cycle.pairGapMs;
+        clash = partners.find((launch) => Math.abs(launch.time - time) < cycle.pairGapMs);
+      }
+      if (time < chosen.time) chosen = { catapult, time };
+    }
+    launches.push({ catapult: chosen.catapult, time: chosen.time, tier: phase });
+    head[chosen.catapult] += 1;
+    last = Math.max(last, chosen.time);
+  }
+}
 
 /**
  * The earliest possible last launch over every lineup that keeps the rules (open catapults in reach,
@@ -15,48 +58,42 @@ function optimumLastLaunch(input: SuggestionInput, upperBound: number): number {
   const open = [...input.catapults]
     .sort((a, b) => a.number - b.number)
     .filter((catapult) => catapult.up && !(input.landingAreaInUse && catapult.position === 'waist'));
-  const resetMs = open.map((catapult) => catapult.resetInterval * 1000);
-  const arrival = input.aircraft.map((aircraft) =>
-    open.map((catapult) => {
-      const taxi = input.taxiTimes[aircraft.id]?.[catapult.id];
-      return taxi === undefined ? Infinity : input.cycleStart + taxi * 1000;
-    }),
-  );
-  const tier = input.aircraft.map((aircraft) => priorityTier(aircraft.priority));
+  const cycle: PlainCycle = {
+    earliest: Math.max(input.cycleStart, input.window.start),
+    pairGapMs: input.pairMinimumGap * 1000,
+    resetMs: open.map((catapult) => catapult.resetInterval * 1000),
+    pair: open.map((catapult) => catapult.pairId),
+    arrival: input.aircraft.map((aircraft) =>
+      open.map((catapult) => {
+        const taxi = input.taxiTimes[aircraft.id]?.[catapult.id];
+        return taxi === undefined ? Infinity : input.cycleStart + taxi * 1000;
+      }),
+    ),
+    tier: input.aircraft.map((aircraft) => ({ first: 0, normal: 1, last: 2 })[aircraft.priority]),
+  };
   const order = input.aircraft
     .map((_, index) => index)
-    .filter((index) => arrival[index].some(Number.isFinite))
-    .sort((a, b) => tier[a] - tier[b]);
+    .filter((index) => cycle.arrival[index].some(Number.isFinite))
+    .sort((a, b) => cycle.tier[a] - cycle.tier[b]);
   const lanes: number[][] = open.map(() => []);
-  const notBefore = new Float64Array(input.aircraft.length);
   let best = upperBound;
 
   // A lane's last launch is no earlier than its aircraft sorted by arrival, each one reset apart.
   const laneBound = (lane: readonly number[], catapult: number): number => {
-    const arrivals = lane.map((aircraft) => Math.max(input.cycleStart, arrival[aircraft][catapult])).sort((a, b) => a - b);
-    return Math.max(input.cycleStart, ...arrivals.map((time, j) => time + (arrivals.length - 1 - j) * resetMs[catapult]));
+    const arrivals = lane.map((aircraft) => Math.max(cycle.earliest, cycle.arrival[aircraft][catapult])).sort((a, b) => a - b);
+    return Math.max(cycle.earliest, ...arrivals.map((time, j) => time + (arrivals.length - 1 - j) * cycle.resetMs[catapult]));
   };
 
   const search = (next: number): void => {
     if (lanes.some((lane, catapult) => laneBound(lane, catapult) >= best)) return;
     if (next === order.length) {
-      lanes.forEach((lane, catapult) => lane.forEach((aircraft) => (notBefore[aircraft] = arrival[aircraft][catapult])));
-      const times = scheduleLaunches({
-        earliest: input.cycleStart,
-        pairGapMs: input.pairMinimumGap * 1000,
-        catapults: open.map((catapult, c) => ({ resetMs: resetMs[c], group: catapult.pairId })),
-        lanes,
-        notBefore,
-        tier,
-        fixed: [],
-      });
-      best = Math.min(best, Math.max(input.cycleStart, ...lanes.flat().map((aircraft) => times[aircraft])));
+      best = Math.min(best, plainLastLaunch(cycle, lanes));
       return;
     }
     const aircraft = order[next];
     lanes.forEach((lane, catapult) => {
-      if (!Number.isFinite(arrival[aircraft][catapult])) return;
-      const firstPlace = lane.filter((other) => tier[other] < tier[aircraft]).length;
+      if (!Number.isFinite(cycle.arrival[aircraft][catapult])) return;
+      const firstPlace = lane.filter((other) => cycle.tier[other] < cycle.tier[aircraft]).length;
       for (let place = firstPlace; place <= lane.length; place += 1) {
         lane.splice(place, 0, aircraft);
         search(next + 1);
@@ -115,16 +152,19 @@ describe('exhaustive search used as the yardstick', () => {
       fc.property(suggestionInputArbitrary(4), (input) => {
         expect(optimumLastLaunch(input, Infinity)).toBe(plainOptimumLastLaunch(input));
       }),
-      { numRuns: 60, seed: 4 },
+      { numRuns: 60 },
     );
   });
 });
 
 describe('suggested lineup against the exhaustive optimum', () => {
-  it('finishes within 5% of the optimum on 200 random cycles of up to 8 aircraft and breaks no rule', () => {
+  it.each([
+    { cycles: 200, minAircraft: 1, maxAircraft: 8 },
+    { cycles: 30, minAircraft: 9, maxAircraft: 10 },
+  ])('finishes within 5% of the optimum on $cycles random cycles of $minAircraft to $maxAircraft aircraft and breaks no rule', ({ cycles, minAircraft, maxAircraft }) => {
     const gaps: number[] = [];
     fc.assert(
-      fc.property(suggestionInputArbitrary(8), (input) => {
+      fc.property(suggestionInputArbitrary(maxAircraft, minAircraft), (input) => {
         const suggestion = suggestLineup(input);
         expect(suggestionViolations(input, suggestion)).toEqual([]);
         const suggested = suggestion.projection.lastLaunch ?? input.cycleStart;
@@ -134,11 +174,11 @@ describe('suggested lineup against the exhaustive optimum', () => {
         gaps.push(gap);
         expect(gap).toBeLessThanOrEqual(0.05);
       }),
-      { numRuns: 200, seed: 20261201 },
+      { numRuns: cycles },
     );
     const worst = Math.max(...gaps);
     const optimal = gaps.filter((gap) => gap === 0).length;
-    console.info(`Suggested lineup vs optimum over ${gaps.length} cycles: worst gap ${(worst * 100).toFixed(2)}%, optimal in ${optimal}`);
-    expect(gaps).toHaveLength(200);
-  });
+    console.info(`Suggested lineup vs optimum over ${gaps.length} cycles of ${minAircraft}-${maxAircraft} aircraft (fast-check seed ${process.env.FC_SEED ?? 'of this run'}): worst gap ${(worst * 100).toFixed(2)}%, optimal in ${optimal}`);
+    expect(gaps).toHaveLength(cycles);
+  }, 600_000);
 });

@@ -133,8 +133,8 @@ export const projectionInputArbitrary: fc.Arbitrary<ProjectionInput> = fc
     };
   });
 
-/** Random small cycles for the suggested lineup: up to `maxAircraft`, some catapults down or closed, some unreachable. */
-export function suggestionInputArbitrary(maxAircraft: number): fc.Arbitrary<SuggestionInput> {
+/** Random small cycles for the suggested lineup: `minAircraft` to `maxAircraft`, some catapults down or closed, some unreachable. */
+export function suggestionInputArbitrary(maxAircraft: number, minAircraft = 1): fc.Arbitrary<SuggestionInput> {
   return fc
     .record({
       resets: fc.array(fc.integer({ min: 40, max: 120 }), { minLength: 4, maxLength: 4 }),
@@ -146,7 +146,7 @@ export function suggestionInputArbitrary(maxAircraft: number): fc.Arbitrary<Sugg
           priority: priorityArbitrary,
           taxi: fc.array(fc.option(fc.integer({ min: 0, max: 480 }), { nil: undefined, freq: 12 }), { minLength: 4, maxLength: 4 }),
         }),
-        { minLength: 1, maxLength: maxAircraft },
+        { minLength: minAircraft, maxLength: maxAircraft },
       ),
     })
     .map((draw) => {

@@ -85,6 +85,7 @@ try {
   if (parts.has('math')) {
     step('Computation');
     results.computation = node('packages/launch-math/bench/plan-40.mjs', { json: true });
+    results.suggestionLoop = node('apps/api/bench/suggestion-loop.mjs', { json: true });
   }
   if (parts.has('web')) {
     step('Web');
@@ -103,7 +104,7 @@ writeFileSync(file, `${JSON.stringify(results, null, 2)}\n`);
 printTables(results);
 console.log(`\nWritten to ${path.relative(root, file)}`);
 
-function printTables({ fanOut, commitRate, computation, web, apiProcesses }) {
+function printTables({ fanOut, commitRate, computation, suggestionLoop, web, apiProcesses }) {
   if (fanOut) {
     const spread = apiProcesses > 1 ? `, clients spread over ${apiProcesses} API processes` : '';
     console.log(`\nFan-out latency, ms from sending the command to each client receiving the change${spread}`);
@@ -123,6 +124,10 @@ function printTables({ fanOut, commitRate, computation, web, apiProcesses }) {
   if (computation) {
     console.log('\nComputation: projection and suggested lineup on 4 catapults (packages/launch-math/bench/plan-40.mjs)');
     console.table(computation.rows);
+  }
+  if (suggestionLoop) {
+    console.log("\nThe API's event loop while a suggestion runs (apps/api/bench/suggestion-loop.mjs)");
+    console.table(suggestionLoop.rows);
   }
   if (web) {
     console.log('\nWeb');

@@ -4,11 +4,12 @@ import { CyclesModule } from '../cycles/cycles.module.js';
 import { LineupCommandsService } from './lineup-commands.service.js';
 import { LineupController } from './lineup.controller.js';
 import { ReadinessService } from './readiness.service.js';
+import { SuggestionPool } from './suggestion-pool.js';
 import { SuggestionService } from './suggestion.service.js';
 
 @Module({
   imports: [CycleChangesModule, CyclesModule],
   controllers: [LineupController],
-  providers: [LineupCommandsService, ReadinessService, SuggestionService],
+  providers: [LineupCommandsService, ReadinessService, SuggestionPool, SuggestionService],
 })
 export class LineupModule {}

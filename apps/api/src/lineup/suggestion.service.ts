@@ -1,31 +1,37 @@
 import type { SuggestedLineup } from '@catline/contracts';
-import { epochMs, seconds, suggestLineup, type Seconds } from '@catline/launch-math';
+import { epochMs, seconds, type LineupSuggestion, type Seconds, type SuggestionInput } from '@catline/launch-math';
 import { Injectable } from '@nestjs/common';
 import { launchCatapult } from '../cycle-changes/launch-math.adapter.js';
 import { laneSlots, launchPriority, projectLineup, taxiSeconds } from '../cycle-changes/lineup-snapshot.builder.js';
 import { LineupSnapshotService } from '../cycle-changes/lineup-snapshot.service.js';
 import type { LineupState } from '../cycle-changes/lineup-state.js';
 import { asLaunchDataRefusal } from '../cycle-changes/lineup.exception.js';
+import { SuggestionPool } from './suggestion-pool.js';
 
 /**
  * launch-math's suggested lineup for the cycle's planned aircraft. Aircraft already launched or in the
  * readiness steps keep their places at the front of their lanes; the suggestion queues behind them.
+ * The search runs on a worker thread ({@link SuggestionPool}), so the API's thread stays free.
  */
 @Injectable()
 export class SuggestionService {
-  constructor(private readonly snapshots: LineupSnapshotService) {}
+  constructor(
+    private readonly snapshots: LineupSnapshotService,
+    private readonly pool: SuggestionPool,
+  ) {}
 
   async suggest(cycleId: number): Promise<SuggestedLineup> {
     const state = await this.snapshots.readState(cycleId);
     try {
-      return suggestionFor(state);
+      return suggestedLineup(state, await this.pool.suggest(suggestionInput(state)));
     } catch (error) {
       throw asLaunchDataRefusal(error);
     }
   }
 }
 
-export function suggestionFor(state: LineupState): SuggestedLineup {
+/** launch-math's input for the cycle's planned aircraft. */
+export function suggestionInput(state: LineupState): SuggestionInput {
   const { cycle } = state;
   const planned = state.slots.filter((slot) => slot.status === 'planned');
   const taxiTimes: Record<string, Record<string, Seconds>> = {};
@@ -36,7 +42,7 @@ export function suggestionFor(state: LineupState): SuggestedLineup {
       if (taxi !== undefined) taxiTimes[slot.id][catapult.id] = seconds(taxi);
     }
   }
-  const suggestion = suggestLineup({
+  return {
     cycleStart: epochMs(cycle.plannedLaunchAt.getTime()),
     window: { start: epochMs(cycle.windowStartAt.getTime()), end: epochMs(cycle.windowEndAt.getTime()) },
     catapults: state.catapults.map(launchCatapult),
@@ -44,7 +50,12 @@ export function suggestionFor(state: LineupState): SuggestedLineup {
     pairMinimumGap: seconds(state.ship.pairGapS),
     aircraft: planned.map((slot) => ({ id: String(slot.id), priority: launchPriority(slot) })),
     taxiTimes,
-  });
+  };
+}
+
+/** The suggestion as the API answers it, with the last launch the lineup would have once applied. */
+export function suggestedLineup(state: LineupState, suggestion: LineupSuggestion): SuggestedLineup {
+  const { cycle } = state;
   const lanes = state.catapults.map((catapult) => ({
     catapultId: catapult.id,
     slotIds: (suggestion.lanes[catapult.id] ?? []).map(Number),

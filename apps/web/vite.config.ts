@@ -1,10 +1,13 @@
 import react from '@vitejs/plugin-react';
 import { defineConfig } from 'vite';
+import { compression } from 'vite-plugin-compression2';
 
 const api = 'http://127.0.0.1:3000';
 
 export default defineConfig({
-  plugins: [react()],
+  // Text assets also written as .br and .gz beside the originals: the API serves them with their
+  // Content-Encoding, so nothing is compressed per request (apps/api/src/web-app/web-app.ts).
+  plugins: [react(), compression({ algorithms: ['brotliCompress', 'gzip'], include: /\.(js|css|html|svg|json|txt)$/ })],
   server: {
     host: '127.0.0.1',
     port: 5173,

@@ -1,5 +1,3 @@
-import { existsSync } from 'node:fs';
-import { fileURLToPath } from 'node:url';
 import { Module } from '@nestjs/common';
 import { ConfigModule, ConfigService } from '@nestjs/config';
 import { ServeStaticModule } from '@nestjs/serve-static';
@@ -20,9 +18,7 @@ import { ReportsModule } from './reports/reports.module.js';
 import { ShipsModule } from './ships/ships.module.js';
 import { SquadronsModule } from './squadrons/squadrons.module.js';
 import { UsersModule } from './users/users.module.js';
-
-// The built web app, served from the same process when it exists (after `npm start`'s build).
-const webDist = fileURLToPath(new URL('../../web/dist', import.meta.url));
+import { webAppBuilt, webDist } from './web-app/web-app.js';
 
 @Module({
   imports: [
@@ -42,7 +38,7 @@ const webDist = fileURLToPath(new URL('../../web/dist', import.meta.url));
         retryAttempts: 3,
       }),
     }),
-    ...(existsSync(webDist)
+    ...(webAppBuilt()
       ? [ServeStaticModule.forRoot({ rootPath: webDist, exclude: ['/api/{*path}'] })]
       : []),
     HealthModule,

@@ -8,6 +8,7 @@ import { ApiExceptionFilter } from './common/filters/api-exception.filter.js';
 import { refuseDeepJson } from './common/validation/json-depth.js';
 import { StrictIdPipe } from './common/validation/strict-id.pipe.js';
 import { type Environment, servedOverHttps, trustedProxies, webOrigins } from './config/environment.js';
+import { compressResponses } from './web-app/web-app.js';
 
 /**
  * Helmet's defaults, except that plain HTTP stays plain: `upgrade-insecure-requests` would make the
@@ -27,6 +28,7 @@ export function configureApp(app: INestApplication): void {
   app.setGlobalPrefix('api');
   app.getHttpAdapter().getInstance().set('trust proxy', trustedProxies({ TRUST_PROXY: config.get('TRUST_PROXY') }));
   app.use(helmet(securityHeaders(servedOverHttps({ APP_URL: config.get('APP_URL') }))));
+  compressResponses(app);
   app.use(cookieParser());
   // Replaces Nest's default JSON parser (same limits), adding the depth check before parsing. Nest's type
   // leaves out `verify` because Nest sets it itself for the `rawBody` option, which this app does not use.

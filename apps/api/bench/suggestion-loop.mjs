@@ -32,11 +32,20 @@ const pool = new SuggestionPool();
 await pool.suggest(seededCycle(SEED, 10)); // start the worker thread before timing
 const rows = [];
 // Baseline of the same run: the same timer with nothing to do for a second (the machine's own jitter).
-rows.push({ case: 'baseline: idle for 1 s', ...(await measure(() => new Promise((resolve) => setTimeout(resolve, 1000)))) });
+rows.push({
+  case: 'baseline: idle for 1 s',
+  ...(await measure(() => new Promise((resolve) => setTimeout(resolve, 1000)))),
+});
 for (const size of [40, 80]) {
   const input = seededCycle(SEED, size);
-  rows.push({ case: `${size} aircraft on the API's thread (before)`, ...(await measure(async () => suggestLineup(input))) });
-  rows.push({ case: `${size} aircraft through SuggestionPool (worker)`, ...(await measure(() => pool.suggest(input))) });
+  rows.push({
+    case: `${size} aircraft on the API's thread (before)`,
+    ...(await measure(async () => suggestLineup(input))),
+  });
+  rows.push({
+    case: `${size} aircraft through SuggestionPool (worker)`,
+    ...(await measure(() => pool.suggest(input))),
+  });
 }
 await pool.onModuleDestroy();
 

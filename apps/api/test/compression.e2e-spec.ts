@@ -19,7 +19,9 @@ function rawGet(url: string, headers: Record<string, string>): Promise<RawRespon
     get(url, { headers }, (response) => {
       const chunks: Buffer[] = [];
       response.on('data', (chunk: Buffer) => chunks.push(chunk));
-      response.on('end', () => resolve({ status: response.statusCode ?? 0, headers: response.headers, body: Buffer.concat(chunks) }));
+      response.on('end', () =>
+        resolve({ status: response.statusCode ?? 0, headers: response.headers, body: Buffer.concat(chunks) }),
+      );
       response.on('error', reject);
     }).on('error', reject);
   });

@@ -5,7 +5,14 @@ const start = epochMs(Date.UTC(2026, 5, 1, 9, 0, 0));
 const cycle = (taxi: number): SuggestionInput => ({
   cycleStart: start,
   window: { start, end: epochMs(start + 30 * 60_000) },
-  catapults: [1, 2].map((number) => ({ id: `cat${number}`, number, position: 'bow', pairId: 'bow', resetInterval: seconds(60), up: true })),
+  catapults: [1, 2].map((number) => ({
+    id: `cat${number}`,
+    number,
+    position: 'bow',
+    pairId: 'bow',
+    resetInterval: seconds(60),
+    up: true,
+  })),
   landingAreaInUse: false,
   pairMinimumGap: seconds(10),
   aircraft: ['a', 'b', 'c'].map((id) => ({ id, priority: 'normal' })),

@@ -35,7 +35,9 @@ function benchCycle(size) {
   const taxiTimes = Object.fromEntries(
     aircraft.map((entry, index) => [
       entry.id,
-      Object.fromEntries(catapults.map((catapult) => [catapult.id, seconds(30 + scatter(index * 4 + catapult.number, 571))])),
+      Object.fromEntries(
+        catapults.map((catapult) => [catapult.id, seconds(30 + scatter(index * 4 + catapult.number, 571))]),
+      ),
     ]),
   );
   return {
@@ -56,13 +58,16 @@ function benchCycle(size) {
  */
 function lowerBound(input) {
   const earliest = Math.max(input.cycleStart, input.window.start);
-  const open = input.catapults.filter((catapult) => catapult.up && !(input.landingAreaInUse && catapult.position === 'waist'));
+  const open = input.catapults.filter(
+    (catapult) => catapult.up && !(input.landingAreaInUse && catapult.position === 'waist'),
+  );
   const nearest = input.aircraft
     .map((aircraft) => Math.min(...open.map((catapult) => input.taxiTimes[aircraft.id]?.[catapult.id] ?? Infinity)))
     .filter(Number.isFinite);
   if (nearest.length === 0) return earliest;
   const arrival = earliest + Math.max(0, ...nearest.map((taxi) => taxi * 1000 + input.cycleStart - earliest));
-  const launchesBy = (time) => open.reduce((sum, catapult) => sum + Math.floor((time - earliest) / (catapult.resetInterval * 1000)) + 1, 0);
+  const launchesBy = (time) =>
+    open.reduce((sum, catapult) => sum + Math.floor((time - earliest) / (catapult.resetInterval * 1000)) + 1, 0);
   let capacity = earliest;
   for (let step = 2 ** 30; step >= 1; step /= 2) if (launchesBy(capacity + step - 1) < nearest.length) capacity += step;
   return Math.max(arrival, capacity);
@@ -88,19 +93,33 @@ const aboveBound = (input, suggestion) => {
 };
 
 const numbers = Array.from({ length: 40 }, (_, index) => (index * 7919) % 40);
-const baseline = timeRuns(() => {
-  for (let i = 0; i < BASELINE_BATCH; i += 1) [...numbers].sort((a, b) => a - b);
-}, 15) / BASELINE_BATCH;
+const baseline =
+  timeRuns(() => {
+    for (let i = 0; i < BASELINE_BATCH; i += 1) [...numbers].sort((a, b) => a - b);
+  }, 15) / BASELINE_BATCH;
 
 const forty = benchCycle(40);
 const fortySuggestion = suggestLineup(forty);
 const projection = timeRuns(
-  () => projectLaunchTimes({ ...forty, lanes: fortySuggestion.lanes, notBefore: fortySuggestion.notBefore, priorities: fortySuggestion.priorities }),
+  () =>
+    projectLaunchTimes({
+      ...forty,
+      lanes: fortySuggestion.lanes,
+      notBefore: fortySuggestion.notBefore,
+      priorities: fortySuggestion.priorities,
+    }),
   15,
 );
 
 const round = (value, places = 1) => Math.round(value * 10 ** places) / 10 ** places;
-const rows = [{ case: 'baseline: sort 40 numbers', medianMs: round(baseline, 4) }, { case: 'projection, bench cycle, 40 aircraft', medianMs: round(projection, 3), ratioToBaseline: Math.round(projection / baseline) }];
+const rows = [
+  { case: 'baseline: sort 40 numbers', medianMs: round(baseline, 4) },
+  {
+    case: 'projection, bench cycle, 40 aircraft',
+    medianMs: round(projection, 3),
+    ratioToBaseline: Math.round(projection / baseline),
+  },
+];
 const seeds = fixture.cycles.slice(0, options.cycles).map((cycle) => cycle.seed);
 const draw = seededRandom(1);
 for (const size of [40, 80]) {
@@ -137,6 +156,8 @@ if (options.json) {
   // The form `npm run bench` at the repository root collects.
   console.log(JSON.stringify({ runs: RUNS, rows }));
 } else {
-  console.log(`Projection and suggested lineup, four catapults (timings: median; ${options.cycles} seeded cycles each timed once)`);
+  console.log(
+    `Projection and suggested lineup, four catapults (timings: median; ${options.cycles} seeded cycles each timed once)`,
+  );
   console.table(rows);
 }

@@ -22,7 +22,8 @@ const cycles = seeds.map((seed) => {
   const suggestion = suggestLineup(input);
   return {
     seed,
-    lastLaunchAfterStartMs: suggestion.projection.lastLaunch === null ? null : suggestion.projection.lastLaunch - input.cycleStart,
+    lastLaunchAfterStartMs:
+      suggestion.projection.lastLaunch === null ? null : suggestion.projection.lastLaunch - input.cycleStart,
     windowMisses: suggestion.projection.missingWindow.length,
     unplaced: suggestion.unplaced.length,
   };

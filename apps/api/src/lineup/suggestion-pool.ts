@@ -15,7 +15,12 @@ const WORKER = fileURLToPath(new URL('../../dist/lineup/suggestion.worker.js', i
  */
 @Injectable()
 export class SuggestionPool implements OnModuleDestroy {
-  private readonly pool = new Piscina<SuggestionInput, SuggestionOutcome>({ filename: WORKER, minThreads: 0, maxThreads: 1, idleTimeout: 60_000 });
+  private readonly pool = new Piscina<SuggestionInput, SuggestionOutcome>({
+    filename: WORKER,
+    minThreads: 0,
+    maxThreads: 1,
+    idleTimeout: 60_000,
+  });
 
   async suggest(input: SuggestionInput): Promise<LineupSuggestion> {
     const outcome = await this.pool.run(input);

@@ -20,12 +20,17 @@ describe('suggested lineup against the stored results of 50 seeded 40-aircraft c
     expect(fixture.cycles).toHaveLength(50);
   });
 
-  it.each(fixture.cycles)('finishes no later, then misses the window no more, on the cycle of seed $seed', (stored) => {
-    const input = seededCycle(stored.seed, fixture.aircraft);
-    const { projection } = suggestLineup(input);
-    const lastLaunch = projection.lastLaunch === null ? null : projection.lastLaunch - input.cycleStart;
-    expect(lastLaunch === null).toBe(stored.lastLaunchAfterStartMs === null);
-    expect(lastLaunch ?? 0).toBeLessThanOrEqual(stored.lastLaunchAfterStartMs ?? 0);
-    if (lastLaunch === stored.lastLaunchAfterStartMs) expect(projection.missingWindow.length).toBeLessThanOrEqual(stored.windowMisses);
-  }, 30_000);
+  it.each(fixture.cycles)(
+    'finishes no later, then misses the window no more, on the cycle of seed $seed',
+    (stored) => {
+      const input = seededCycle(stored.seed, fixture.aircraft);
+      const { projection } = suggestLineup(input);
+      const lastLaunch = projection.lastLaunch === null ? null : projection.lastLaunch - input.cycleStart;
+      expect(lastLaunch === null).toBe(stored.lastLaunchAfterStartMs === null);
+      expect(lastLaunch ?? 0).toBeLessThanOrEqual(stored.lastLaunchAfterStartMs ?? 0);
+      if (lastLaunch === stored.lastLaunchAfterStartMs)
+        expect(projection.missingWindow.length).toBeLessThanOrEqual(stored.windowMisses);
+    },
+    30_000,
+  );
 });

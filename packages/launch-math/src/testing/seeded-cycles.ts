@@ -36,7 +36,9 @@ export function seededCycle(seed: number, aircraftCount: number): SuggestionInpu
   const taxiTimes = Object.fromEntries(
     aircraft.map((entry) => [
       entry.id,
-      Object.fromEntries(catapults.flatMap((catapult) => (random() < 0.05 ? [] : [[catapult.id, seconds(between(30, 600))]]))),
+      Object.fromEntries(
+        catapults.flatMap((catapult) => (random() < 0.05 ? [] : [[catapult.id, seconds(between(30, 600))]])),
+      ),
     ]),
   );
   const windowMinutes = between(10, 30);

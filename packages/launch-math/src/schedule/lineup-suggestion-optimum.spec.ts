@@ -84,8 +84,24 @@ function optimumLastLaunch(input: SuggestionInput, upperBound: number): number {
     return Math.max(cycle.earliest, ...arrivals.map((time, j) => time + (arrivals.length - 1 - j) * cycle.resetMs[catapult]));
   };
 
+  // With the aircraft still to place, each lane's last launch is also no earlier than its count of
+  // aircraft, one reset apart from the earliest time: fill the lanes where that costs least (as if
+  // any aircraft could reach any lane, so the bound stays below every real lineup).
+  const withRest = (next: number): number => {
+    const counts = lanes.map((lane) => lane.length);
+    const ends = lanes.map((lane, catapult) => laneBound(lane, catapult));
+    for (let rest = next; rest < order.length; rest += 1) {
+      const cost = (catapult: number): number =>
+        Math.max(ends[catapult], cycle.earliest + counts[catapult] * cycle.resetMs[catapult]);
+      const cheapest = lanes.reduce((chosen, _, catapult) => (cost(catapult) < cost(chosen) ? catapult : chosen), 0);
+      ends[cheapest] = cost(cheapest);
+      counts[cheapest] += 1;
+    }
+    return Math.max(...ends);
+  };
+
   const search = (next: number): void => {
-    if (lanes.some((lane, catapult) => laneBound(lane, catapult) >= best)) return;
+    if (withRest(next) >= best) return;
     if (next === order.length) {
       best = Math.min(best, plainLastLaunch(cycle, lanes));
       return;
@@ -160,7 +176,7 @@ describe('exhaustive search used as the yardstick', () => {
 describe('suggested lineup against the exhaustive optimum', () => {
   it.each([
     { cycles: 200, minAircraft: 1, maxAircraft: 8 },
-    { cycles: 30, minAircraft: 9, maxAircraft: 10 },
+    { cycles: 10, minAircraft: 10, maxAircraft: 10 },
   ])('finishes within 5% of the optimum on $cycles random cycles of $minAircraft to $maxAircraft aircraft and breaks no rule', ({ cycles, minAircraft, maxAircraft }) => {
     const gaps: number[] = [];
     fc.assert(

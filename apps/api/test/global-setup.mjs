@@ -11,6 +11,7 @@ export default async function globalSetup() {
   process.env.DB_NAME = testDatabaseName(environment.DB_NAME);
   // Specs sign in many times; the rate-limit spec sets its own low limit.
   process.env.LOGIN_RATE_LIMIT ??= '1000';
+  process.env.PASSWORD_RESET_RATE_LIMIT ??= '1000';
   // Mail stays queued in the outbox; the mail spec turns the sender on against its own mail catcher.
   process.env.MAIL_SENDER ??= 'off';
   await recreateDatabase({ ...environment, DB_NAME: process.env.DB_NAME });

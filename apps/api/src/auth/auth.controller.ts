@@ -1,5 +1,5 @@
 import type { SessionResponse, SessionUser } from '@catline/contracts';
-import { Body, Controller, Get, Header, HttpCode, HttpStatus, Post, Req, Res, UseGuards } from '@nestjs/common';
+import { Body, Controller, Get, Header, HttpCode, HttpStatus, Post, Req, Res } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import type { Request, Response } from 'express';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
@@ -8,7 +8,6 @@ import { Public } from '../common/decorators/public.decorator.js';
 import { AuthService, type SignedIn } from './auth.service.js';
 import { ChangePasswordDto } from './dto/change-password.dto.js';
 import { LoginDto } from './dto/login.dto.js';
-import { LoginRateLimitGuard } from './login-rate-limit.guard.js';
 import { clearRefreshCookie, readRefreshCookie, setRefreshCookie } from './refresh-cookie.js';
 import { toSessionUser } from './session.mapper.js';
 
@@ -21,7 +20,6 @@ export class AuthController {
   constructor(private readonly auth: AuthService) {}
 
   @Public()
-  @UseGuards(LoginRateLimitGuard)
   @Post('login')
   @HttpCode(HttpStatus.OK)
   @Header('Cache-Control', NO_STORE)
@@ -30,7 +28,7 @@ export class AuthController {
     @Req() request: Request,
     @Res({ passthrough: true }) response: Response,
   ): Promise<SessionResponse> {
-    return this.answer(await this.auth.login(body.email, body.password), request, response);
+    return this.answer(await this.auth.login(body.email, body.password, request.ip ?? ''), request, response);
   }
 
   @Public()

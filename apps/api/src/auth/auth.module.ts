@@ -7,10 +7,10 @@ import { TypeOrmModule } from '@nestjs/typeorm';
 import type { Environment } from '../config/environment.js';
 import { User } from '../users/entities/user.entity.js';
 import { ACCESS_TOKEN_ALGORITHM } from './access-token.js';
+import { AttemptLimits } from './attempt-limits.service.js';
 import { AuthController } from './auth.controller.js';
 import { AuthGuard } from './auth.guard.js';
 import { AuthService } from './auth.service.js';
-import { LoginAttempts } from './login-attempts.service.js';
 import { PersonLookup } from './person-lookup.service.js';
 import { RefreshTokens } from './refresh-tokens.service.js';
 import { TokenVerifier } from './token-verifier.service.js';
@@ -29,7 +29,7 @@ import { TokenVerifier } from './token-verifier.service.js';
     }),
   ],
   controllers: [AuthController],
-  providers: [AuthService, LoginAttempts, PersonLookup, RefreshTokens, TokenVerifier, { provide: APP_GUARD, useClass: AuthGuard }],
-  exports: [TokenVerifier, RefreshTokens],
+  providers: [AuthService, AttemptLimits, PersonLookup, RefreshTokens, TokenVerifier, { provide: APP_GUARD, useClass: AuthGuard }],
+  exports: [AttemptLimits, TokenVerifier, RefreshTokens],
 })
 export class AuthModule {}

@@ -8,7 +8,8 @@ import type { AuthenticatedUser } from '../common/authenticated-user.js';
 import { User } from '../users/entities/user.entity.js';
 import { ACCESS_TOKEN_ALGORITHM, ACCESS_TOKEN_LIFETIME_S, type AccessTokenClaims } from './access-token.js';
 import { AuthException } from './auth.exception.js';
-import { normalizeEmail } from './normalize-email.js';
+import { AttemptLimits } from './attempt-limits.service.js';
+import { emailIdentity } from './normalize-email.js';
 import { hashPassword, verifyPassword } from './password.js';
 import { type IssuedRefreshToken, RefreshTokens } from './refresh-tokens.service.js';
 import { toAuthenticatedUser, toSessionUser } from './session.mapper.js';
@@ -29,11 +30,16 @@ export class AuthService {
   constructor(
     private readonly jwt: JwtService,
     private readonly refreshTokens: RefreshTokens,
+    private readonly attempts: AttemptLimits,
     @InjectDataSource() private readonly dataSource: DataSource,
   ) {}
 
-  async login(email: string, password: string): Promise<SignedIn> {
-    const user = await this.dataSource.manager.findOneBy(User, { email: normalizeEmail(email) });
+  /** Attempts count per client address and per person found (per e-mail when nobody is), the right password included. */
+  async login(email: string, password: string, clientAddress: string): Promise<SignedIn> {
+    await this.attempts.count('sign_in_from', clientAddress);
+    const identity = emailIdentity(email);
+    const user = await this.dataSource.manager.findOneBy(User, { email: identity });
+    await this.attempts.count('sign_in', user ? `person:${user.id}` : `email:${identity}`);
     const matches = await verifyPassword(user?.passwordHash ?? (await this.decoyHash), password);
     if (!user?.passwordHash || !matches || !user.active) throw new AuthException('invalid_credentials', BAD_CREDENTIALS);
     this.logger.log(`User ${user.id} signed in`);

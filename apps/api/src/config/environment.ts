@@ -49,9 +49,13 @@ export class Environment {
   @IsString() @IsNotEmpty()
   WEB_ORIGINS: string = 'http://127.0.0.1:3000,http://localhost:3000';
 
-  /** Sign-in attempts allowed per minute for one address and e-mail, against password guessing. */
+  /** Sign-in attempts allowed per minute for one person (or unknown e-mail); ten times that from one client address. */
   @IsInt() @Min(1)
   LOGIN_RATE_LIMIT: number = 5;
+
+  /** Password-reset requests allowed per 15 minutes for one e-mail (ten times that from one client address). */
+  @IsInt() @Min(1)
+  PASSWORD_RESET_RATE_LIMIT: number = 3;
 
   @IsIn(['on', 'off'])
   DEMO_SEED: 'on' | 'off' = 'on';

@@ -1,6 +1,7 @@
 import type { AcceptedResponse } from '@catline/contracts';
-import { Body, Controller, HttpCode, HttpStatus, Post } from '@nestjs/common';
+import { Body, Controller, HttpCode, HttpStatus, Post, Req } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
+import type { Request } from 'express';
 import { Public } from '../common/decorators/public.decorator.js';
 import { PasswordResetRequestDto } from './dto/password-reset-request.dto.js';
 import { SetPasswordWithTokenDto } from './dto/set-password-with-token.dto.js';
@@ -17,8 +18,8 @@ export class PasswordLinksController {
   @Public()
   @Post('password-reset')
   @HttpCode(HttpStatus.ACCEPTED)
-  async requestReset(@Body() body: PasswordResetRequestDto): Promise<AcceptedResponse> {
-    await this.links.requestReset(body.email);
+  async requestReset(@Body() body: PasswordResetRequestDto, @Req() request: Request): Promise<AcceptedResponse> {
+    await this.links.requestReset(body.email, request.ip ?? '');
     return { message: RESET_ACCEPTED };
   }
 

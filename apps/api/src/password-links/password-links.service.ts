@@ -3,7 +3,8 @@ import { Injectable, Logger } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, type EntityManager, IsNull, MoreThan } from 'typeorm';
-import { normalizeEmail } from '../auth/normalize-email.js';
+import { AttemptLimits } from '../auth/attempt-limits.service.js';
+import { emailIdentity } from '../auth/normalize-email.js';
 import { hashPassword } from '../auth/password.js';
 import { RefreshTokens } from '../auth/refresh-tokens.service.js';
 import type { Environment } from '../config/environment.js';
@@ -44,6 +45,7 @@ export class PasswordLinks {
     @InjectDataSource() private readonly dataSource: DataSource,
     private readonly outbox: MailOutbox,
     private readonly refreshTokens: RefreshTokens,
+    private readonly attempts: AttemptLimits,
     private readonly config: ConfigService<Environment, true>,
   ) {}
 
@@ -54,9 +56,23 @@ export class PasswordLinks {
     this.logger.log(`Invitation queued for user ${user.id}`);
   }
 
-  /** Mails a reset link to an active person with this e-mail; does nothing, visibly the same, otherwise. */
-  async requestReset(email: string): Promise<void> {
-    const found = await this.dataSource.manager.findOneBy(User, { email: normalizeEmail(email) });
+  /**
+   * Counts the request (per client address and per e-mail, 429 past the limits), then returns at once:
+   * the link is issued afterwards, so neither the answer's time nor a lock on a person's row tells
+   * whether the address has an account.
+   */
+  async requestReset(email: string, clientAddress: string): Promise<void> {
+    const identity = emailIdentity(email);
+    await this.attempts.count('reset_from', clientAddress);
+    await this.attempts.count('reset', identity);
+    void this.issueReset(identity).catch((error: unknown) =>
+      this.logger.error(`A password reset request could not be handled: ${error instanceof Error ? error.message : String(error)}`),
+    );
+  }
+
+  /** Mails a reset link to an active person with this e-mail; does nothing otherwise. */
+  private async issueReset(identity: string): Promise<void> {
+    const found = await this.dataSource.manager.findOneBy(User, { email: identity });
     if (!found?.active) return;
     await this.dataSource.transaction(async (manager) => {
       // The person's row lock makes two simultaneous requests queue one mail.

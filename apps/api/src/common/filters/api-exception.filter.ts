@@ -3,6 +3,7 @@ import { type ArgumentsHost, Catch, type ExceptionFilter, HttpException, HttpSta
 import type { Response } from 'express';
 import { QueryFailedError } from 'typeorm';
 import { DomainException } from '../errors/domain.exception.js';
+import { TooManyAttemptsException } from '../errors/too-many-attempts.exception.js';
 
 const CODE_BY_STATUS: Record<number, GenericRefusalCode> = {
   400: 'bad_request',
@@ -28,7 +29,9 @@ export class ApiExceptionFilter implements ExceptionFilter {
   catch(exception: unknown, host: ArgumentsHost): void {
     if (host.getType() !== 'http') throw exception;
     const body = this.toApiError(exception);
-    host.switchToHttp().getResponse<Response>().status(body.statusCode).json(body);
+    const response = host.switchToHttp().getResponse<Response>();
+    if (exception instanceof TooManyAttemptsException) response.setHeader('Retry-After', String(exception.retryAfterS));
+    response.status(body.statusCode).json(body);
   }
 
   private toApiError(exception: unknown): ApiError {

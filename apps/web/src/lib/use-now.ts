@@ -1,11 +1,12 @@
 import { useEffect, useState } from 'react';
 
-/** The current time, re-read every `everyMs`: for countdowns. */
-export function useNow(everyMs = 1_000): number {
+/** The current time, re-read every `everyMs` while `running`: for countdowns, which stop when not live. */
+export function useNow(everyMs = 1_000, running = true): number {
   const [now, setNow] = useState(() => Date.now());
   useEffect(() => {
+    if (!running) return undefined;
     const timer = setInterval(() => setNow(Date.now()), everyMs);
     return () => clearInterval(timer);
-  }, [everyMs]);
+  }, [everyMs, running]);
   return now;
 }

@@ -26,6 +26,8 @@ export interface LiveState {
   connection: ConnectionState;
   /** Why the server would not let this person follow a cycle, by cycle id. */
   refusals: ReadonlyMap<number, string>;
+  /** Cycles whose lineup has been brought up to the server's version since the link last came up. */
+  caughtUp: ReadonlySet<number>;
 }
 
 /**
@@ -42,7 +44,11 @@ class LiveCycles {
   private lingerTimer: ReturnType<typeof setTimeout> | undefined;
   private retryDelayMs = 1_000;
   /** What screens show about the link; they read it with `useStore`. */
-  readonly state = createStore<LiveState>(() => ({ connection: { kind: 'connecting' }, refusals: new Map() }));
+  readonly state = createStore<LiveState>(() => ({
+    connection: { kind: 'connecting' },
+    refusals: new Map(),
+    caughtUp: new Set(),
+  }));
   readonly sync = new LineupSync(queryClient, (cycleId) => this.resync(cycleId));
 
   constructor() {
@@ -86,6 +92,7 @@ class LiveCycles {
     }
     this.watchers.delete(cycleId);
     this.sync.forget(cycleId);
+    this.setCaughtUp(cycleId, false);
     if (this.socket?.connected) this.socket.emit('cycle:leave', { cycleId }, () => undefined);
     if (this.watchers.size === 0) this.lingerTimer = setTimeout(() => this.close(), LINGER_MS);
   }
@@ -136,7 +143,7 @@ class LiveCycles {
     this.socket?.disconnect();
     this.socket = null;
     this.joining.clear();
-    this.state.setState({ connection: { kind: 'connecting' }, refusals: new Map() });
+    this.state.setState({ connection: { kind: 'connecting' }, refusals: new Map(), caughtUp: new Set() });
   }
 
   private retryWithFreshToken(socket: CatlineSocket) {
@@ -194,6 +201,7 @@ class LiveCycles {
     }
     if (refusals.delete(cycleId)) this.state.setState({ refusals });
     this.sync.acceptJoin(cycleId, result);
+    this.setCaughtUp(cycleId, true);
   }
 
   /** Asks for what was missed since the version held: a replay or snapshot over the socket, or a fresh snapshot over HTTP. */
@@ -225,7 +233,18 @@ class LiveCycles {
   }
 
   private setConnection(connection: ConnectionState) {
-    this.state.setState({ connection });
+    // Whatever was caught up may miss changes from here on: each cycle catches up again when it rejoins.
+    if (connection.kind === 'live') this.state.setState({ connection });
+    else this.state.setState({ connection, caughtUp: new Set() });
+  }
+
+  private setCaughtUp(cycleId: number, caughtUp: boolean) {
+    const current = this.state.getState().caughtUp;
+    if (current.has(cycleId) === caughtUp) return;
+    const next = new Set(current);
+    if (caughtUp) next.add(cycleId);
+    else next.delete(cycleId);
+    this.state.setState({ caughtUp: next });
   }
 }
 

@@ -1,6 +1,7 @@
 import { useEffect } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import { useStore } from 'zustand';
+import type { ConnectionState, Freshness } from './connection-state.js';
 import { lineupSnapshotQueryOptions } from './lineup-query.js';
 import { liveCycles } from './live-cycles.js';
 
@@ -12,11 +13,23 @@ export function useLiveCycle(cycleId: number | undefined) {
   useEffect(() => (cycleId === undefined ? undefined : liveCycles.watch(cycleId)), [cycleId]);
   const live = useStore(liveCycles.state);
   const lineup = useQuery({ ...lineupSnapshotQueryOptions(cycleId ?? 0), enabled: cycleId !== undefined });
+  const caughtUp = cycleId !== undefined && live.connection.kind === 'live' && live.caughtUp.has(cycleId);
   return {
     lineup,
     connection: live.connection,
+    freshness: freshness(caughtUp, live.connection, lineup.dataUpdatedAt),
     refusal: cycleId === undefined ? undefined : live.refusals.get(cycleId),
   };
+}
+
+/**
+ * The one rule for "is this screen live": the link is up and the lineup has caught up with the server's
+ * version since. Until then the figures were last known current when the link dropped (or, before the
+ * first catch-up, when the lineup was last fetched).
+ */
+function freshness(caughtUp: boolean, connection: ConnectionState, dataUpdatedAt: number): Freshness {
+  if (caughtUp) return { live: true };
+  return { live: false, lastUpdate: 'since' in connection ? connection.since : new Date(dataUpdatedAt) };
 }
 
 /** Hands a command's answer to the live feed so the sender sees its own change at once, in order. */

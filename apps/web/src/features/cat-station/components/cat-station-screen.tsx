@@ -2,6 +2,7 @@ import { Box, Flex, Grid, Stack, Text } from '@chakra-ui/react';
 import type { LineupSnapshot } from '@catline/contracts';
 import { CautionLine } from '../../../components/caution-line.js';
 import { ConnectionBadge } from '../../../components/connection-badge.js';
+import { LiveFigures } from '../../../components/live-figures.js';
 import { CyclePicker } from '../../../components/cycle-picker.js';
 import { PageHeader } from '../../../components/page-header.js';
 import { EmptyState, ErrorState, LoadingState, QueryView } from '../../../components/query-states.js';
@@ -129,7 +130,11 @@ export function CatStationScreen() {
         <ErrorState title="This cycle cannot be followed live" error={new Error(live.refusal)} />
       ) : (
         <QueryView query={live.lineup} loadingLabel="Loading your catapult…">
-          {(data) => <Station key={data.cycle.id} snapshot={data} catapultId={user.catapultId!} />}
+          {(data) => (
+            <LiveFigures freshness={live.freshness}>
+              <Station key={data.cycle.id} snapshot={data} catapultId={user.catapultId!} />
+            </LiveFigures>
+          )}
         </QueryView>
       )}
     </Stack>

@@ -3,6 +3,7 @@ import { Box, Button, Flex, HStack, Stack, Text } from '@chakra-ui/react';
 import type { LaneView, LineupSnapshot, SlotView } from '@catline/contracts';
 import { CautionLine } from '../../../components/caution-line.js';
 import { ConnectionBadge } from '../../../components/connection-badge.js';
+import { LiveFigures, useFiguresLive } from '../../../components/live-figures.js';
 import { CyclePicker } from '../../../components/cycle-picker.js';
 import { PageHeader } from '../../../components/page-header.js';
 import { EmptyState, ErrorState, LoadingState, QueryView } from '../../../components/query-states.js';
@@ -27,7 +28,10 @@ type OpenDialog = { kind: 'down'; slot: SlotView } | { kind: 'catapult'; lane: L
 
 function LineupWorkspace({ snapshot }: { snapshot: LineupSnapshot }) {
   const cycleId = snapshot.cycle.id;
-  const editable = useHasRole('handler') && snapshot.cycle.state !== 'closed';
+  const arranges = useHasRole('handler') && snapshot.cycle.state !== 'closed';
+  // Moves are drags, which the disabled fieldset of a stale board does not stop: they wait for it to be live.
+  const live = useFiguresLive();
+  const editable = arranges && live;
   const { notice, show, dismiss } = useNotice();
   const [dialog, setDialog] = useState<OpenDialog>(null);
   const move = useMoveSlot(cycleId);
@@ -81,7 +85,7 @@ function LineupWorkspace({ snapshot }: { snapshot: LineupSnapshot }) {
               </Text>
             </Box>
           </HStack>
-          {editable ? (
+          {arranges ? (
             <HStack gap="2" wrap="wrap" mt="1">
               <Button size="sm" colorPalette="accent" onClick={() => setDialog({ kind: 'suggestion' })}>
                 Suggest lineup
@@ -182,7 +186,11 @@ export function LineupScreen() {
         <ErrorState title="This cycle cannot be followed live" error={new Error(live.refusal)} />
       ) : (
         <QueryView query={live.lineup} loadingLabel="Loading the lineup…">
-          {(snapshot) => <LineupWorkspace key={snapshot.cycle.id} snapshot={snapshot} />}
+          {(snapshot) => (
+            <LiveFigures freshness={live.freshness}>
+              <LineupWorkspace key={snapshot.cycle.id} snapshot={snapshot} />
+            </LiveFigures>
+          )}
         </QueryView>
       )}
     </Stack>

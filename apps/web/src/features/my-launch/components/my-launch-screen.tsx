@@ -4,6 +4,7 @@ import { CautionLine } from '../../../components/caution-line.js';
 import { ConnectionBadge } from '../../../components/connection-badge.js';
 import { CyclePicker } from '../../../components/cycle-picker.js';
 import { FigureStat } from '../../../components/figure-stat.js';
+import { LiveFigures, useFiguresLive } from '../../../components/live-figures.js';
 import { PageHeader } from '../../../components/page-header.js';
 import { EmptyState, ErrorState, LoadingState, QueryView } from '../../../components/query-states.js';
 import { NoticeBanner, refusalNotice, useNotice } from '../../../components/refusal-notice.js';
@@ -18,7 +19,7 @@ import { useAcknowledgeWeight } from '../api/acknowledge-weight.js';
 import { findMySlot } from '../my-launch-model.js';
 
 function Countdown({ projectedLaunchAt, launchedAt }: { projectedLaunchAt: string | null; launchedAt: string | null }) {
-  const now = useNow();
+  const now = useNow(1_000, useFiguresLive());
   if (launchedAt) return <FigureStat label="Launched" value={formatClock(launchedAt)} tone="go" size="xl" />;
   if (!projectedLaunchAt) return <FigureStat label="Projected launch" value="Not yet planned" size="lg" />;
   return (
@@ -131,7 +132,11 @@ export function MyLaunchScreen() {
         <ErrorState title="This cycle cannot be followed live" error={new Error(live.refusal)} />
       ) : (
         <QueryView query={live.lineup} loadingLabel="Loading your launch…">
-          {(snapshot) => <MySlot key={snapshot.cycle.id} snapshot={snapshot} pilotId={user.id} />}
+          {(snapshot) => (
+            <LiveFigures freshness={live.freshness}>
+              <MySlot key={snapshot.cycle.id} snapshot={snapshot} pilotId={user.id} />
+            </LiveFigures>
+          )}
         </QueryView>
       )}
     </Stack>

@@ -7,7 +7,7 @@ import { root, run, step } from './lib/run.mjs';
 import { setUp } from './lib/setup.mjs';
 
 const resultsDir = path.join(root, '.data/test-results');
-const testScripts = ['test', 'test:integration', 'test:reliability', 'test:cluster', 'test:e2e'];
+const testScripts = ['test', 'test:integration', 'test:reliability', 'test:cluster', 'test:galera', 'test:e2e'];
 
 function workspacePackages() {
   return ['packages', 'apps'].flatMap((group) =>

@@ -19,6 +19,8 @@ export interface FollowerOptions {
   cycleId: number;
   /** Reconnect after losing the server, as the web app does (off for specs that restart nothing). */
   reconnect?: boolean;
+  /** Ask again this long after a refused join, as the web app does (by default a refusal is final). */
+  rejoinAfterRefusalMs?: number;
 }
 
 /**
@@ -92,6 +94,8 @@ export class LineupFollower {
     }
     if (!result.ok) {
       this.problems.push(`join refused: ${result.code} ${result.message}`);
+      const { rejoinAfterRefusalMs } = this.options;
+      if (rejoinAfterRefusalMs !== undefined) setTimeout(() => this.socket.connected && this.follow.joining && void this.join(), rejoinAfterRefusalMs);
       return;
     }
     this.take(followJoin(this.follow, result));

@@ -16,8 +16,20 @@ const CODE_BY_STATUS: Record<number, GenericRefusalCode> = {
   503: 'unavailable',
 };
 
-// mysql2 error codes that mean the database is out of reach rather than the request being wrong.
-const DATABASE_DOWN = new Set(['ECONNREFUSED', 'PROTOCOL_CONNECTION_LOST', 'ETIMEDOUT', 'ER_CON_COUNT_ERROR', 'EPIPE']);
+// mysql2 error codes that mean the database is out of reach rather than the request being wrong. A server
+// shutting down kills its connections (ER_SERVER_SHUTDOWN, ER_CONNECTION_KILLED), and a Galera node that
+// is not in sync with its cluster refuses every statement (ER_UNKNOWN_COM_ERROR, "WSREP has not yet
+// prepared node for application use").
+const DATABASE_DOWN = new Set([
+  'ECONNREFUSED',
+  'PROTOCOL_CONNECTION_LOST',
+  'ETIMEDOUT',
+  'ER_CON_COUNT_ERROR',
+  'EPIPE',
+  'ER_SERVER_SHUTDOWN',
+  'ER_CONNECTION_KILLED',
+  'ER_UNKNOWN_COM_ERROR',
+]);
 // A transaction MariaDB rolled back to break a lock cycle (after the pipeline's own retries): nothing changed.
 const DATABASE_BUSY = new Set(['ER_LOCK_DEADLOCK', 'ER_LOCK_WAIT_TIMEOUT']);
 

@@ -48,7 +48,7 @@ describe('aircraft types', () => {
     ['a last trim band with an upper weight', { trimBands: [{ upToLb: 30_000, trimDeg: 10 }] }, /The last trim band must have no upper weight/],
     ['a trim band without a trim', { trimBands: [{ upToLb: null }] }, /trimDeg must be a number/],
     ['an extra field in a launch table row', { launchTable: [good[0], { ...good[1], note: 'x' }] }, /property note should not exist/],
-    ['the designation of another type', { designation: 'KS-7' }, /Another aircraft type is already designated KS-7/],
+    ['the designation of another type', { designation: 'WKD-41' }, /Another aircraft type is already designated WKD-41/],
   ])('refuses %s and creates nothing', async (_case, change, message) => {
     const before = await list();
     const response = await request(url).post('/api/aircraft-types').set(bearer(admin)).send({ ...aircraftTypeBody(), ...change });

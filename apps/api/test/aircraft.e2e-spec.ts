@@ -28,7 +28,7 @@ describe('aircraft', () => {
 
   it('lists the fleet by side number with type and squadron', async () => {
     const fleet = await list();
-    expect(fleet.find((aircraft) => aircraft.sideNumber === '601')).toMatchObject({ typeDesignation: 'RV-3', squadronCode: 'LNB', parkedSpot: 'stern-1' });
+    expect(fleet.find((aircraft) => aircraft.sideNumber === 'L47')).toMatchObject({ typeDesignation: 'FGD-63', squadronCode: 'LNB', parkedSpot: 'stern-1' });
     const sides = fleet.map((aircraft) => aircraft.sideNumber);
     expect(sides).toEqual([...sides].sort());
   });
@@ -38,15 +38,15 @@ describe('aircraft', () => {
     const response = await post({ sideNumber, typeId: 2, squadronId: 3, parkedSpot: 'aft-2' });
     expect(response.status).toBe(201);
     expect(response.body).toEqual({
-      id: expect.any(Number), sideNumber, typeId: 2, typeDesignation: 'LT-5', squadronId: 3, squadronCode: 'NJR', parkedSpot: 'aft-2', serviceable: true, catapultShots: 0,
+      id: expect.any(Number), sideNumber, typeId: 2, typeDesignation: 'MSD-26', squadronId: 3, squadronCode: 'GSB', parkedSpot: 'aft-2', serviceable: true, catapultShots: 0,
     });
   });
 
   it('refuses a side number already in use with a readable 409', async () => {
     const before = await list();
-    const response = await post({ sideNumber: '101', typeId: 1, squadronId: 1, parkedSpot: 'bow-1' });
+    const response = await post({ sideNumber: 'C21', typeId: 1, squadronId: 1, parkedSpot: 'bow-1' });
     expect(response.status).toBe(409);
-    expect(response.body).toEqual({ statusCode: 409, code: 'side_number_taken', message: 'Side number 101 is already taken by another aircraft.' });
+    expect(response.body).toEqual({ statusCode: 409, code: 'side_number_taken', message: 'Side number C21 is already taken by another aircraft.' });
     expect(await list()).toEqual(before);
   });
 
@@ -75,7 +75,7 @@ describe('aircraft', () => {
 
   it('refuses renumbering onto a taken side number and changes nothing', async () => {
     const aircraft = await createAircraft(url, admin);
-    const response = await patch(aircraft.id, { sideNumber: '102' });
+    const response = await patch(aircraft.id, { sideNumber: 'C22' });
     expect(response.status).toBe(409);
     expect((await list()).find((a) => a.id === aircraft.id)).toEqual(aircraft);
   });

@@ -37,7 +37,7 @@ describe('auth', () => {
       const response = await login('cat2@catline.example', 'catline-demo');
 
       expect(response.status).toBe(200);
-      expect(response.body.user).toEqual({ id: expect.any(Number), email: 'cat2@catline.example', name: 'Sam Falkner', role: 'catapult_officer', catapultId: 2 });
+      expect(response.body.user).toEqual({ id: expect.any(Number), email: 'cat2@catline.example', name: 'Sam Dellavint', role: 'catapult_officer', catapultId: 2 });
       const lifetimeS = (Date.parse(response.body.expiresAt) - before) / 1000;
       expect(lifetimeS).toBeGreaterThan(14 * 60);
       expect(lifetimeS).toBeLessThanOrEqual(15 * 60 + 1);

@@ -72,13 +72,13 @@ describe('cycles', () => {
     const path = `/api/cycles/${cycle.id}/conditions`;
     const changed = await deck.ok<LineupCommandResult>(AIR_OPS, 'patch', path, { basisVersion: 0, trueWindFromDeg: 250, trueWindSpeedKt: 18, weatherCase: 'II' });
     expect(changed.version).toBe(1);
-    expect(changed.change).toMatchObject({ kind: 'conditions_changed', summary: 'Conditions: wind 250° 18 kt, case II', actor: { name: 'Priya Vennard' } });
+    expect(changed.change).toMatchObject({ kind: 'conditions_changed', summary: 'Conditions: wind 250° 18 kt, case II', actor: { name: 'Priya Quennevar' } });
     expect(changed.change.patch.cycle).toMatchObject({ trueWindFromDeg: 250, trueWindSpeedKt: 18, weatherCase: 'II', version: 1 });
 
     const stale = await deck.call(AIR_OPS, 'patch', path, { basisVersion: 0, night: true });
     expect(stale.status).toBe(409);
     expect(stale.body).toMatchObject({ code: 'stale_basis' });
-    expect(stale.body.message).toContain('Conditions: wind 250° 18 kt, case II (Priya Vennard)');
+    expect(stale.body.message).toContain('Conditions: wind 250° 18 kt, case II (Priya Quennevar)');
 
     const blank = await deck.call(AIR_OPS, 'patch', path, { basisVersion: 1, shipSpeedKt: null });
     expect(blank.status).toBe(400);
@@ -90,7 +90,7 @@ describe('cycles', () => {
 
   it('starts a cycle in planning once, and closes it, scratching what did not launch', async () => {
     const cycle = await deck.createCycle();
-    const slot = await deck.addSlot(cycle.id, '109');
+    const slot = await deck.addSlot(cycle.id, 'C29');
     await deck.place(cycle.id, slot.id, 2);
     const started = await deck.start(cycle.id);
     expect(started.change).toMatchObject({ kind: 'cycle_started', summary: `Cycle ${cycle.number} started` });
@@ -116,24 +116,24 @@ describe('cycles', () => {
 
   it('adds aircraft to the deck pool, once each, with an active pilot who flies nothing else in the cycle', async () => {
     const cycle = await deck.createCycle();
-    const slot = await deck.addSlot(cycle.id, '205', { pilotEmail: pilot(4), spare: true });
-    expect(slot).toMatchObject({ sideNumber: '205', pilotName: 'Dev Aranda', spare: true, catapultId: null, status: 'planned' });
+    const slot = await deck.addSlot(cycle.id, 'D37', { pilotEmail: pilot(4), spare: true });
+    expect(slot).toMatchObject({ sideNumber: 'D37', pilotName: 'Dev Hollowmere', spare: true, catapultId: null, status: 'planned' });
     expect((await deck.snapshot(cycle.id)).pool).toEqual([slot.id]);
 
     const body = { pilotId: null, mission: 'Strike', fuelLb: 9000, stores: '', grossWeightLb: 41_000, tanker: false, earlyWarning: false, spare: false };
     const path = `/api/cycles/${cycle.id}/slots`;
-    const twice = await deck.call(AIR_OPS, 'post', path, { ...body, aircraftId: await deck.aircraftId('205') });
+    const twice = await deck.call(AIR_OPS, 'post', path, { ...body, aircraftId: await deck.aircraftId('D37') });
     expect(twice.status).toBe(409);
     expect(twice.body.code).toBe('aircraft_already_in_cycle');
     const unknown = await deck.call(AIR_OPS, 'post', path, { ...body, aircraftId: 999_999 });
     expect(unknown.status).toBe(404);
-    const notAPilot = await deck.call(AIR_OPS, 'post', path, { ...body, aircraftId: await deck.aircraftId('206'), pilotId: (await deck.me(HANDLER)).id });
+    const notAPilot = await deck.call(AIR_OPS, 'post', path, { ...body, aircraftId: await deck.aircraftId('D38'), pilotId: (await deck.me(HANDLER)).id });
     expect(notAPilot.status).toBe(400);
     expect(notAPilot.body.code).toBe('invalid_pilot');
-    const busyPilot = await deck.call(AIR_OPS, 'post', path, { ...body, aircraftId: await deck.aircraftId('206'), pilotId: (await deck.me(pilot(4))).id });
+    const busyPilot = await deck.call(AIR_OPS, 'post', path, { ...body, aircraftId: await deck.aircraftId('D38'), pilotId: (await deck.me(pilot(4))).id });
     expect(busyPilot.status).toBe(409);
-    expect(busyPilot.body.message).toBe(`Dev Aranda already flies 205 in cycle ${cycle.number}.`);
-    const heavy = await deck.call(AIR_OPS, 'post', path, { ...body, aircraftId: await deck.aircraftId('206'), grossWeightLb: -5 });
+    expect(busyPilot.body.message).toBe(`Dev Hollowmere already flies D37 in cycle ${cycle.number}.`);
+    const heavy = await deck.call(AIR_OPS, 'post', path, { ...body, aircraftId: await deck.aircraftId('D38'), grossWeightLb: -5 });
     expect(heavy.status).toBe(400);
     expect((await deck.snapshot(cycle.id)).version).toBe(1);
   });

@@ -56,7 +56,7 @@ describe('air plan and launch table import', () => {
     it.each([
       [
         'a wrong header',
-        csv('101,,Strike training,11500,,45000,no,no,no').replace('side_number', 'side'),
+        csv('C21,,Strike training,11500,,45000,no,no,no').replace('side_number', 'side'),
         [
           { row: 1, column: null, value: 'side', reason: `Unknown column "side"; the columns are ${COLUMNS_TEXT}.` },
           { row: 1, column: 'side_number', value: null, reason: 'The column side_number is missing from the header line.' },
@@ -64,45 +64,45 @@ describe('air plan and launch table import', () => {
       ],
       [
         'a missing column',
-        'side_number,pilot_email,mission,fuel_lb,stores,tanker,early_warning,spare\n101,,Strike training,11500,,no,no,no',
+        'side_number,pilot_email,mission,fuel_lb,stores,tanker,early_warning,spare\nC21,,Strike training,11500,,no,no,no',
         [{ row: 1, column: 'gross_weight_lb', value: null, reason: 'The column gross_weight_lb is missing from the header line.' }],
       ],
       [
         'text in a number column',
-        csv('101,,Strike training,a lot,,45000,no,no,no'),
+        csv('C21,,Strike training,a lot,,45000,no,no,no'),
         [{ row: 2, column: 'fuel_lb', value: 'a lot', reason: 'Must be a whole number (digits only), in lb.' }],
       ],
       [
         'an unknown side number',
-        csv('101,,Strike training,11500,,45000,no,no,no', '999,,Strike training,11500,,45000,no,no,no'),
+        csv('C21,,Strike training,11500,,45000,no,no,no', '999,,Strike training,11500,,45000,no,no,no'),
         [{ row: 3, column: 'side_number', value: '999', reason: 'No aircraft has the side number 999.' }],
       ],
       [
         'the same aircraft twice',
-        csv('101,,Strike training,11500,,45000,no,no,no', '102,,Strike training,11500,,45000,no,no,no', '101,,Tanker,15000,,49000,yes,no,no'),
-        [{ row: 4, column: 'side_number', value: '101', reason: '101 is already on line 2; an aircraft flies once in a cycle.' }],
+        csv('C21,,Strike training,11500,,45000,no,no,no', 'C22,,Strike training,11500,,45000,no,no,no', 'C21,,Tanker,15000,,49000,yes,no,no'),
+        [{ row: 4, column: 'side_number', value: 'C21', reason: 'C21 is already on line 2; an aircraft flies once in a cycle.' }],
       ],
       [
         'a negative weight',
-        csv('101,,Strike training,11500,,-45000,no,no,no'),
+        csv('C21,,Strike training,11500,,-45000,no,no,no'),
         [{ row: 2, column: 'gross_weight_lb', value: '-45000', reason: 'Cannot be negative.' }],
       ],
       [
         'a weight over the type maximum',
-        csv('101,,Strike training,11500,,52000,no,no,no'),
-        [{ row: 2, column: 'gross_weight_lb', value: '52000', reason: 'Over the KS-7 maximum gross weight of 51000 lb.' }],
+        csv('C21,,Strike training,11500,,52000,no,no,no'),
+        [{ row: 2, column: 'gross_weight_lb', value: '52000', reason: 'Over the WKD-41 maximum gross weight of 51000 lb.' }],
       ],
       [
         'an e-mail nobody signs in with, and one pilot on two aircraft',
-        csv('101,ghost@catline.example,Strike training,11500,,45000,no,no,no', '102,pilot@catline.example,A,1,,45000,no,no,no', '103,PILOT@catline.example,B,1,,45000,no,no,no'),
+        csv('C21,ghost@catline.example,Strike training,11500,,45000,no,no,no', 'C22,pilot@catline.example,A,1,,45000,no,no,no', 'C23,PILOT@catline.example,B,1,,45000,no,no,no'),
         [
           { row: 2, column: 'pilot_email', value: 'ghost@catline.example', reason: 'Nobody signs in with this e-mail.' },
-          { row: 4, column: 'pilot_email', value: 'pilot@catline.example', reason: 'Kit Rowan already flies 102 on line 3.' },
+          { row: 4, column: 'pilot_email', value: 'pilot@catline.example', reason: 'Kit Marrowby already flies C22 on line 3.' },
         ],
       ],
       [
         'a line with a cell too few',
-        csv('101,,Strike training,11500,45000,no,no,no'),
+        csv('C21,,Strike training,11500,45000,no,no,no'),
         [{ row: 2, column: null, value: null, reason: 'This line has 8 cells; the header line has 9.' }],
       ],
       [
@@ -126,10 +126,10 @@ describe('air plan and launch table import', () => {
       ['a binary file', { content: PNG }, 415, 'not_csv', 'The file holds binary data, not CSV text; save the sheet as CSV (UTF-8) and upload that.'],
       ['a spreadsheet file', { content: 'a,b', fileName: 'plan.xlsx' }, 415, 'not_csv', '"plan.xlsx" is not a .csv file; save the sheet as CSV (UTF-8) and upload that.'],
       ['an image type', { content: 'a,b', contentType: 'image/png' }, 415, 'not_csv', 'The file was sent as image/png, not as CSV text (text/csv).'],
-      ['text that is not UTF-8', { content: Buffer.from(csv('101,,Café,1,,45000,no,no,no'), 'latin1') }, 415, 'not_csv', 'The file is not UTF-8 text; save the sheet as CSV (UTF-8) and upload that.'],
+      ['text that is not UTF-8', { content: Buffer.from(csv('C21,,Café,1,,45000,no,no,no'), 'latin1') }, 415, 'not_csv', 'The file is not UTF-8 text; save the sheet as CSV (UTF-8) and upload that.'],
       [
         'a file over the size limit',
-        { content: csv(...Array.from({ length: 5_000 }, () => '101,,Strike training with a long mission name,11500,,45000,no,no,no')) },
+        { content: csv(...Array.from({ length: 5_000 }, () => 'C21,,Strike training with a long mission name,11500,,45000,no,no,no')) },
         413,
         'file_too_large',
         'The file is larger than 256 KB; nothing was read. Split it or remove what is not needed.',
@@ -158,19 +158,19 @@ describe('air plan and launch table import', () => {
 
   it('imports a file with a byte-order mark and Windows line ends into the deck pool as one change', async () => {
     const cycle = await driver.createCycle();
-    const content = `\uFEFF${HEADER}\r\n101,pilot@catline.example,Strike training,11500,4 practice bombs,45400,no,no,no\r\n\r\n602,,Airborne early warning,11000,,51900,no,yes,yes\r\n`;
+    const content = `\uFEFF${HEADER}\r\nC21,pilot@catline.example,Strike training,11500,4 practice bombs,45400,no,no,no\r\n\r\nL48,,Airborne early warning,11000,,51900,no,yes,yes\r\n`;
     const response = await preview(cycle.id, { content, fileName: 'day-plan.csv', contentType: 'application/vnd.ms-excel' });
     expect(response.status).toBe(201);
     const body = response.body as AirPlanPreview;
     expect(body).toMatchObject({ fileName: 'day-plan.csv', result: 'accepted', problems: [] });
     expect(body.rows).toEqual([
       {
-        row: 2, sideNumber: '101', pilotEmail: 'pilot@catline.example', mission: 'Strike training', fuelLb: 11_500, stores: '4 practice bombs',
-        grossWeightLb: 45_400, tanker: false, earlyWarning: false, spare: false, typeDesignation: 'KS-7', squadronCode: 'TDC', pilotName: 'Kit Rowan',
+        row: 2, sideNumber: 'C21', pilotEmail: 'pilot@catline.example', mission: 'Strike training', fuelLb: 11_500, stores: '4 practice bombs',
+        grossWeightLb: 45_400, tanker: false, earlyWarning: false, spare: false, typeDesignation: 'WKD-41', squadronCode: 'CWR', pilotName: 'Kit Marrowby',
       },
       {
-        row: 4, sideNumber: '602', pilotEmail: null, mission: 'Airborne early warning', fuelLb: 11_000, stores: '',
-        grossWeightLb: 51_900, tanker: false, earlyWarning: true, spare: true, typeDesignation: 'RV-3', squadronCode: 'LNB', pilotName: null,
+        row: 4, sideNumber: 'L48', pilotEmail: null, mission: 'Airborne early warning', fuelLb: 11_000, stores: '',
+        grossWeightLb: 51_900, tanker: false, earlyWarning: true, spare: true, typeDesignation: 'FGD-63', squadronCode: 'LNB', pilotName: null,
       },
     ]);
 
@@ -182,8 +182,8 @@ describe('air plan and launch table import', () => {
     expect(snapshot.version).toBe(cycle.version + 1);
     expect(snapshot.pool).toHaveLength(2);
     expect(snapshot.slots.map(({ sideNumber, pilotName, grossWeightLb, spare, earlyWarning, stores }) => ({ sideNumber, pilotName, grossWeightLb, spare, earlyWarning, stores }))).toEqual([
-      { sideNumber: '101', pilotName: 'Kit Rowan', grossWeightLb: 45_400, spare: false, earlyWarning: false, stores: '4 practice bombs' },
-      { sideNumber: '602', pilotName: null, grossWeightLb: 51_900, spare: true, earlyWarning: true, stores: '' },
+      { sideNumber: 'C21', pilotName: 'Kit Marrowby', grossWeightLb: 45_400, spare: false, earlyWarning: false, stores: '4 practice bombs' },
+      { sideNumber: 'L48', pilotName: null, grossWeightLb: 51_900, spare: true, earlyWarning: true, stores: '' },
     ]);
     await expect(uploadsOf(cycle.id)).resolves.toEqual([expect.objectContaining({ result: 'imported', problem_count: 0, sha256: sha256(content) })]);
 
@@ -194,23 +194,23 @@ describe('air plan and launch table import', () => {
 
   it('refuses a confirm on a stale cycle version and imports nothing', async () => {
     const cycle = await driver.createCycle();
-    const { uploadId } = (await preview(cycle.id, { content: csv('103,,Strike training,11500,,45000,no,no,no') })).body as AirPlanPreview;
-    await driver.addSlot(cycle.id, '104');
+    const { uploadId } = (await preview(cycle.id, { content: csv('C23,,Strike training,11500,,45000,no,no,no') })).body as AirPlanPreview;
+    await driver.addSlot(cycle.id, 'C24');
     const refused = await confirm(cycle.id, uploadId, cycle.version);
     expect(refused.status).toBe(409);
     expect(refused.body.code).toBe('stale_basis');
-    expect((await driver.snapshot(cycle.id)).slots.map((slot) => slot.sideNumber)).toEqual(['104']);
+    expect((await driver.snapshot(cycle.id)).slots.map((slot) => slot.sideNumber)).toEqual(['C24']);
   });
 
   it('checks the lines again at the confirm and imports nothing when one no longer fits', async () => {
     const cycle = await driver.createCycle();
-    const { uploadId } = (await preview(cycle.id, { content: csv('105,,Strike training,11500,,45000,no,no,no', '106,,Strike training,11500,,45000,no,no,no') })).body as AirPlanPreview;
-    await driver.addSlot(cycle.id, '106');
+    const { uploadId } = (await preview(cycle.id, { content: csv('C25,,Strike training,11500,,45000,no,no,no', 'C26,,Strike training,11500,,45000,no,no,no') })).body as AirPlanPreview;
+    await driver.addSlot(cycle.id, 'C26');
     const { version } = await driver.snapshot(cycle.id);
     const refused = await confirm(cycle.id, uploadId, version);
     expect(refused.status).toBe(409);
-    expect(refused.body).toMatchObject({ code: 'import_out_of_date', details: [`Line 3: 106 is already in cycle ${cycle.number}.`] });
-    expect((await driver.snapshot(cycle.id)).slots.map((slot) => slot.sideNumber)).toEqual(['106']);
+    expect(refused.body).toMatchObject({ code: 'import_out_of_date', details: [`Line 3: C26 is already in cycle ${cycle.number}.`] });
+    expect((await driver.snapshot(cycle.id)).slots.map((slot) => slot.sideNumber)).toEqual(['C26']);
   });
 
   it('serves a template that previews clean, and the demo example fits the seeded day cycle', async () => {

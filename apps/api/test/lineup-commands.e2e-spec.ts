@@ -23,7 +23,7 @@ describe('lineup commands', () => {
   /** A cycle with three aircraft on cat 1 and two on cat 2. */
   async function cycleWithLanes() {
     const cycle = await deck.createCycle();
-    const sides = ['101', '102', '103', '201', '202'];
+    const sides = ['C21', 'C22', 'C23', 'D33', 'D34'];
     const slots = [];
     for (const side of sides) slots.push(await deck.addSlot(cycle.id, side));
     for (const [index, slot] of slots.entries()) await deck.place(cycle.id, slot.id, index < 3 ? 1 : 2);
@@ -48,7 +48,7 @@ describe('lineup commands', () => {
     expect([first.status, second.status].sort()).toEqual([200, 409]);
     const [winner, loser] = first.status === 200 ? [first, second] : [second, first];
     expect(loser.body.code).toBe('stale_basis');
-    expect(loser.body.message).toContain('Tomas Achterberg');
+    expect(loser.body.message).toContain('Tomas Ebberhold');
     expect(loser.body.message).toContain((winner.body as LineupCommandResult).change.summary);
     const changes = await changesOf(cycle.id, snapshot.version);
     expect(changes.map((change) => change.version)).toEqual([snapshot.version + 1]);
@@ -84,8 +84,8 @@ describe('lineup commands', () => {
 
   it('launches on one catapult while the handler reorders another', async () => {
     const cycle = await deck.createCycle();
-    const launching = await deck.addSlot(cycle.id, '104', { pilotEmail: pilot(2) });
-    const waiting = [await deck.addSlot(cycle.id, '203'), await deck.addSlot(cycle.id, '204')];
+    const launching = await deck.addSlot(cycle.id, 'C24', { pilotEmail: pilot(2) });
+    const waiting = [await deck.addSlot(cycle.id, 'D35'), await deck.addSlot(cycle.id, 'D36')];
     await deck.place(cycle.id, launching.id, 1);
     for (const slot of waiting) await deck.place(cycle.id, slot.id, 2);
     await deck.start(cycle.id);
@@ -114,7 +114,7 @@ describe('lineup commands', () => {
 
   it('records a double launch once and counts one shot', async () => {
     const cycle = await deck.createCycle();
-    const slot = await deck.addSlot(cycle.id, '105', { pilotEmail: pilot(1) });
+    const slot = await deck.addSlot(cycle.id, 'C25', { pilotEmail: pilot(1) });
     await deck.place(cycle.id, slot.id, 1);
     await deck.start(cycle.id);
     const ready = await deck.readyToLaunch(cycle.id, slot.id, pilot(1));
@@ -135,8 +135,8 @@ describe('lineup commands', () => {
 
   it('closes the cycle in the same transaction as its last launch, as the next version', async () => {
     const cycle = await deck.createCycle();
-    const slot = await deck.addSlot(cycle.id, '106', { pilotEmail: pilot(3) });
-    await deck.addSlot(cycle.id, '107', { spare: true });
+    const slot = await deck.addSlot(cycle.id, 'C26', { pilotEmail: pilot(3) });
+    await deck.addSlot(cycle.id, 'C27', { spare: true });
     await deck.place(cycle.id, slot.id, 3);
     await deck.start(cycle.id);
     const ready = await deck.readyToLaunch(cycle.id, slot.id, pilot(3));
@@ -158,7 +158,7 @@ describe('lineup commands', () => {
     ['a missing slot version', { toIndex: 0, targetLaneOrder: [] }, 'slotVersion'],
     ['a text index', { slotVersion: 0, toIndex: 'first', targetLaneOrder: [] }, 'toIndex'],
     ['a negative index', { slotVersion: 0, toIndex: -1, targetLaneOrder: [] }, 'toIndex'],
-    ['a lane order of names', { slotVersion: 0, toIndex: 0, targetLaneOrder: ['201'] }, 'targetLaneOrder'],
+    ['a lane order of names', { slotVersion: 0, toIndex: 0, targetLaneOrder: ['D33'] }, 'targetLaneOrder'],
     ['an unknown field', { slotVersion: 0, toIndex: 0, targetLaneOrder: [], speed: 'fast' }, 'speed'],
   ])('refuses a move with %s with a readable 400 and changes nothing', async (_case, fields, named) => {
     const { cycle, slots, snapshot } = await sharedCycle();
@@ -202,13 +202,13 @@ describe('lineup commands', () => {
       targetLaneOrder: lane.slotIds,
     });
     expect(response.status).toBe(400);
-    expect(response.body).toMatchObject({ code: 'invalid_lineup', message: 'Place 8 on cat 2 is not open to 101: choose place 1 to 3.' });
+    expect(response.body).toMatchObject({ code: 'invalid_lineup', message: 'Place 8 on cat 2 is not open to C21: choose place 1 to 3.' });
     expect((await deck.snapshot(cycle.id)).version).toBe(snapshot.version);
   });
 
   it('marks an aircraft down and lets a spare from the pool take its place', async () => {
     const { cycle, slots } = await cycleWithLanes();
-    const spare = await deck.addSlot(cycle.id, '108', { spare: true });
+    const spare = await deck.addSlot(cycle.id, 'C28', { spare: true });
     const down = await deck.slot(cycle.id, slots[1].id);
 
     const result = await deck.ok<LineupCommandResult>(HANDLER, 'post', `/api/cycles/${cycle.id}/lineup/slots/${down.id}/down`, {
@@ -216,7 +216,7 @@ describe('lineup commands', () => {
       spareSlotId: spare.id,
     });
 
-    expect(result.change.summary).toBe('102 down; spare 108 takes cat 1, place 2');
+    expect(result.change.summary).toBe('C22 down; spare C28 takes cat 1, place 2');
     const after = await deck.snapshot(cycle.id);
     expect(idsOf(after, 1)).toEqual([slots[0].id, spare.id, slots[2].id]);
     expect(after.slots.find((slot) => slot.id === down.id)).toMatchObject({ status: 'down', catapultId: null, position: null });
@@ -255,8 +255,8 @@ describe('lineup commands', () => {
 
   it('applies the suggested lineup from the version it was made at, and refuses it from an older one', async () => {
     const cycle = await deck.createCycle();
-    for (const side of ['110', '111', '112', '205', '206', '602']) {
-      await deck.addSlot(cycle.id, side, side === '602' ? { earlyWarning: true, grossWeightLb: 52_000 } : {});
+    for (const side of ['C30', 'C31', 'C32', 'D37', 'D38', 'L48']) {
+      await deck.addSlot(cycle.id, side, side === 'L48' ? { earlyWarning: true, grossWeightLb: 52_000 } : {});
     }
     const suggestion = await deck.ok<{ basisVersion: number; lanes: { catapultId: number; slotIds: number[] }[]; lastLaunchAt: string }>(
       HANDLER,
@@ -287,7 +287,7 @@ describe('lineup commands', () => {
     const cycle = await deck.createCycle();
     const start = await deck.snapshot(cycle.id);
     const { slots } = await (async () => {
-      const added = [await deck.addSlot(cycle.id, '101'), await deck.addSlot(cycle.id, '201'), await deck.addSlot(cycle.id, '301', { grossWeightLb: 26_000 })];
+      const added = [await deck.addSlot(cycle.id, 'C21'), await deck.addSlot(cycle.id, 'D33'), await deck.addSlot(cycle.id, 'G43', { grossWeightLb: 26_000 })];
       await deck.place(cycle.id, added[0].id, 1);
       await deck.place(cycle.id, added[1].id, 1, 0);
       await deck.place(cycle.id, added[2].id, 4);
@@ -301,7 +301,7 @@ describe('lineup commands', () => {
     expect(changes.map((change) => change.kind)).toEqual([
       'slot_added', 'slot_added', 'slot_added', 'slot_moved', 'slot_moved', 'slot_moved', 'conditions_changed',
     ]);
-    expect(changes[4].summary).toBe('201 moved to cat 1, place 1');
+    expect(changes[4].summary).toBe('D33 moved to cat 1, place 1');
     const replayed = applyLineupChanges(start, changes);
     expect(replayed).toEqual(await deck.snapshot(cycle.id));
     expect(replayed.slots.map((slot) => slot.id)).toEqual(slots.map((slot) => slot.id));

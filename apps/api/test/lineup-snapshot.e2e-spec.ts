@@ -70,7 +70,7 @@ describe('lineup snapshot of the demo cycles', () => {
     expect(snapshot.slots.length).toBeGreaterThanOrEqual(18);
     expect(snapshot.pool.length).toBeGreaterThanOrEqual(10);
     expect(snapshot.lanes.every((lane) => lane.slotIds.length > 0)).toBe(true);
-    expect(snapshot.slots.some((slot) => slot.pilotName === 'Kit Rowan')).toBe(true);
+    expect(snapshot.slots.some((slot) => slot.pilotName === 'Kit Marrowby')).toBe(true);
     const night = await deck.snapshot(demoCycle(3).id);
     expect(night.cycle).toMatchObject({ state: 'planning', weatherCase: 'III', night: true });
     expect(night.pool.length).toBe(night.slots.length);
@@ -184,7 +184,7 @@ describe('lineup snapshot of the demo cycles', () => {
     expect(times).toEqual([...times].sort((a, b) => a - b));
     expect(final.cycle.state).toBe('closed');
     expect(final.slots.filter((slot) => slot.status === 'launched').every((slot) => slot.launchedAt !== null)).toBe(true);
-    expect(final.slots.find((slot) => slot.sideNumber === '104')!.status).toBe('down');
+    expect(final.slots.find((slot) => slot.sideNumber === 'C24')!.status).toBe('down');
 
     const empty: LineupSnapshot = { cycle: final.cycle, lanes: [], pool: [], slots: [], lastLaunchAt: null, version: 0 };
     const replayed = applyLineupChanges(empty, changes);

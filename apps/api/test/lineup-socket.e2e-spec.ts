@@ -45,7 +45,7 @@ describe('live lineup over socket.io', () => {
   /** A cycle with `perLane` planned aircraft on each of the four catapults. */
   async function cycleWithFullLanes(perLane: number) {
     const cycle = await deck.createCycle();
-    const sides = ['101', '102', '103', '104', '105', '106', '107', '108', '109', '110', '111', '112', '201', '202', '203', '204'];
+    const sides = ['C21', 'C22', 'C23', 'C24', 'C25', 'C26', 'C27', 'C28', 'C29', 'C30', 'C31', 'C32', 'D33', 'D34', 'D35', 'D36'];
     for (const [index, side] of sides.slice(0, perLane * 4).entries()) {
       const slot = await deck.addSlot(cycle.id, side);
       await deck.place(cycle.id, slot.id, (index % 4) + 1);

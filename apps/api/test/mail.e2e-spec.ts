@@ -128,8 +128,8 @@ describe('mail through the local mail catcher', () => {
   it('keeps the cycle summaries through a mail server outage and sends each squadron exactly one', async () => {
     const driver = new LineupDriver(url);
     const cycle = await driver.createCycle();
-    await driver.addSlot(cycle.id, '107');
-    await driver.addSlot(cycle.id, '207');
+    await driver.addSlot(cycle.id, 'C27');
+    await driver.addSlot(cycle.id, 'D39');
     await catcher.stop();
 
     const { version } = await driver.snapshot(cycle.id);
@@ -141,8 +141,8 @@ describe('mail through the local mail catcher', () => {
       );
     const failed = await eventually(summaries, (rows) => rows.length === 2 && rows.every((row) => row.attempts >= 1 && row.last_error !== null));
     expect(failed.map((row) => ({ to: row.to_address, sent: row.sent_at !== null, failedOnce: row.last_error !== null }))).toEqual([
-      { to: 'brass-herons@catline.example', sent: false, failedOnce: true },
-      { to: 'tidecallers@catline.example', sent: false, failedOnce: true },
+      { to: 'cinderwrights@catline.example', sent: false, failedOnce: true },
+      { to: 'driftmenders@catline.example', sent: false, failedOnce: true },
     ]);
 
     await catcher.start();
@@ -151,7 +151,7 @@ describe('mail through the local mail catcher', () => {
     // A few more rounds of the sender: nothing goes out twice.
     await new Promise((resolve) => setTimeout(resolve, 2_500));
     const caught = (await catcher.mails()).filter((mail) => mail.subject.startsWith(`Cycle ${cycle.number} closed:`));
-    expect(caught.map((mail) => mail.to[0].address).sort()).toEqual(['brass-herons@catline.example', 'tidecallers@catline.example']);
-    expect(caught.find((mail) => mail.to[0].address === 'tidecallers@catline.example')!.text).toContain('107  KS-7  Strike training');
+    expect(caught.map((mail) => mail.to[0].address).sort()).toEqual(['cinderwrights@catline.example', 'driftmenders@catline.example']);
+    expect(caught.find((mail) => mail.to[0].address === 'cinderwrights@catline.example')!.text).toContain('C27  WKD-41  Strike training');
   });
 });

@@ -19,9 +19,9 @@ describe('readiness steps and launch', () => {
   /** An executing cycle with two aircraft on cat 1 (the first flown by `pilotEmail`) and one on cat 2. */
   async function executingCycle(pilotEmail: string, conditions = {}) {
     const cycle = await deck.createCycle(conditions);
-    const first = await deck.addSlot(cycle.id, '101', { pilotEmail });
-    const second = await deck.addSlot(cycle.id, '102');
-    const other = await deck.addSlot(cycle.id, '201');
+    const first = await deck.addSlot(cycle.id, 'C21', { pilotEmail });
+    const second = await deck.addSlot(cycle.id, 'C22');
+    const other = await deck.addSlot(cycle.id, 'D33');
     await deck.place(cycle.id, first.id, 1);
     await deck.place(cycle.id, second.id, 1);
     await deck.place(cycle.id, other.id, 2);
@@ -33,22 +33,22 @@ describe('readiness steps and launch', () => {
     const { cycle, first } = await executingCycle(pilot(4));
     const response = await deck.step(cycle.id, first.id, 'taxiing', catapultOfficer(2));
     expect(response.status).toBe(403);
-    expect(response.body).toMatchObject({ code: 'not_your_catapult', message: '101 is not on your catapult (cat 2).' });
+    expect(response.body).toMatchObject({ code: 'not_your_catapult', message: 'C21 is not on your catapult (cat 2).' });
   });
 
   it('refuses a skipped step, and a step for the aircraft behind the current one, with 409', async () => {
     const { cycle, first, second } = await executingCycle(pilot(4));
     const skipped = await deck.step(cycle.id, first.id, 'on_catapult');
     expect(skipped.status).toBe(409);
-    expect(skipped.body).toMatchObject({ code: 'wrong_step', message: '101 is planned; the next step is taxiing, not on catapult.' });
+    expect(skipped.body).toMatchObject({ code: 'wrong_step', message: 'C21 is planned; the next step is taxiing, not on catapult.' });
     const behind = await deck.step(cycle.id, second.id, 'taxiing');
     expect(behind.status).toBe(409);
-    expect(behind.body).toMatchObject({ code: 'not_current_aircraft', message: '102 is not next on cat 1; 101 is.' });
+    expect(behind.body).toMatchObject({ code: 'not_current_aircraft', message: 'C22 is not next on cat 1; C21 is.' });
   });
 
   it('refuses readiness steps before the cycle executes', async () => {
     const cycle = await deck.createCycle();
-    const slot = await deck.addSlot(cycle.id, '103');
+    const slot = await deck.addSlot(cycle.id, 'C23');
     await deck.place(cycle.id, slot.id, 1);
     const response = await deck.step(cycle.id, slot.id, 'taxiing');
     expect(response.status).toBe(409);
@@ -62,7 +62,7 @@ describe('readiness steps and launch', () => {
 
     const agreed = await deck.step(cycle.id, first.id, 'weight_agreed');
     expect(agreed.status).toBe(409);
-    expect(agreed.body).toMatchObject({ code: 'weight_not_agreed', message: 'The pilot of 101 has not acknowledged the gross weight of 44,000 lb yet.' });
+    expect(agreed.body).toMatchObject({ code: 'weight_not_agreed', message: 'The pilot of C21 has not acknowledged the gross weight of 44,000 lb yet.' });
     const launch = await deck.launch(cycle.id, await deck.slot(cycle.id, first.id), launchKey());
     expect(launch.status).toBe(409);
     expect(launch.body.code).toBe('wrong_step');
@@ -85,7 +85,7 @@ describe('readiness steps and launch', () => {
     expect(wrong.status).toBe(409);
     expect(wrong.body).toMatchObject({
       code: 'weight_mismatch',
-      message: 'You entered 43,000 lb; the planned gross weight of 101 is 44,000 lb. Settle it with the catapult officer.',
+      message: 'You entered 43,000 lb; the planned gross weight of C21 is 44,000 lb. Settle it with the catapult officer.',
     });
   });
 
@@ -97,7 +97,7 @@ describe('readiness steps and launch', () => {
       reason: 'Launch bar not seated',
     });
     expect(suspended.status).toBe(200);
-    expect(suspended.body.change.summary).toBe('101 suspended on cat 1: Launch bar not seated');
+    expect(suspended.body.change.summary).toBe('C21 suspended on cat 1: Launch bar not seated');
     expect((await deck.launch(cycle.id, await deck.slot(cycle.id, first.id), launchKey())).status).toBe(409);
 
     expect((await deck.step(cycle.id, first.id, 'resume')).status).toBe(200);
@@ -121,7 +121,7 @@ describe('readiness steps and launch', () => {
 
     const overridden = await deck.launch(cycle.id, ready, launchKey(), { overrideReason: 'Air boss accepts the crosswind' });
     expect(overridden.status).toBe(200);
-    expect(overridden.body.change.summary).toBe('101 launched from cat 1 on override: Air boss accepts the crosswind');
+    expect(overridden.body.change.summary).toBe('C21 launched from cat 1 on override: Air boss accepts the crosswind');
     expect((await deck.slot(cycle.id, first.id)).overrideReason).toBe('Air boss accepts the crosswind');
   });
 

@@ -69,20 +69,20 @@ describe('cycle reports, exports and shot counts', () => {
     });
     const add = async (side: string, fields: Parameters<LineupDriver['addSlot']>[2] = {}) => (await deck.addSlot(cycle.id, side, fields)).id;
     const ids: Record<string, number> = {
-      '105': await add('105', { pilotEmail: pilot(2) }),
-      '106': await add('106', { pilotEmail: pilot(3) }),
-      '205': await add('205', { pilotEmail: pilot(4), grossWeightLb: 52_000 }),
-      '206': await add('206'),
-      '107': await add('107', { pilotEmail: pilot(5), spare: true }),
-      '207': await add('207'),
+      C25: await add('C25', { pilotEmail: pilot(2) }),
+      C26: await add('C26', { pilotEmail: pilot(3) }),
+      D37: await add('D37', { pilotEmail: pilot(4), grossWeightLb: 52_000 }),
+      D38: await add('D38'),
+      C27: await add('C27', { pilotEmail: pilot(5), spare: true }),
+      D39: await add('D39'),
     };
 
-    await deck.place(cycle.id, ids['105'], 1);
-    await deck.place(cycle.id, ids['106'], 1);
-    await deck.place(cycle.id, ids['106'], 1, 0);
-    for (const side of ['205', '206', '207']) await deck.place(cycle.id, ids[side], 2);
-    const down = await deck.slot(cycle.id, ids['206']);
-    await deck.ok(HANDLER, 'post', `/api/cycles/${cycle.id}/lineup/slots/${down.id}/down`, { slotVersion: down.version, spareSlotId: ids['107'] });
+    await deck.place(cycle.id, ids['C25'], 1);
+    await deck.place(cycle.id, ids['C26'], 1);
+    await deck.place(cycle.id, ids['C26'], 1, 0);
+    for (const side of ['D37', 'D38', 'D39']) await deck.place(cycle.id, ids[side], 2);
+    const down = await deck.slot(cycle.id, ids['D38']);
+    await deck.ok(HANDLER, 'post', `/api/cycles/${cycle.id}/lineup/slots/${down.id}/down`, { slotVersion: down.version, spareSlotId: ids['C27'] });
 
     await deck.start(cycle.id);
     const atStart = await deck.snapshot(cycle.id);
@@ -93,24 +93,24 @@ describe('cycle reports, exports and shot counts', () => {
       launchedAt[side] = (await deck.slot(cycle.id, ids[side])).launchedAt!;
     };
 
-    await deck.readyToLaunch(cycle.id, ids['106'], pilot(3));
-    await launch('106');
-    const heavy = await deck.readyToLaunch(cycle.id, ids['205'], pilot(4));
+    await deck.readyToLaunch(cycle.id, ids['C26'], pilot(3));
+    await launch('C26');
+    const heavy = await deck.readyToLaunch(cycle.id, ids['D37'], pilot(4));
     expect(heavy.figures!.go).toBe(false);
-    await launch('205', { overrideReason: OVERRIDE });
+    await launch('D37', { overrideReason: OVERRIDE });
 
     // The window closes a millisecond after the last launch so far: what follows launches outside it.
-    const windowEndAt = iso(Math.max(Date.parse(launchedAt['106']), Date.parse(launchedAt['205'])) + 1);
+    const windowEndAt = iso(Math.max(Date.parse(launchedAt['C26']), Date.parse(launchedAt['D37'])) + 1);
     const { version } = await deck.snapshot(cycle.id);
     await deck.ok(AIR_OPS, 'patch', `/api/cycles/${cycle.id}/conditions`, { basisVersion: version, windowEndAt });
 
-    await deck.readyToLaunch(cycle.id, ids['105'], pilot(2));
-    const tensioned = await deck.slot(cycle.id, ids['105']);
+    await deck.readyToLaunch(cycle.id, ids['C25'], pilot(2));
+    const tensioned = await deck.slot(cycle.id, ids['C25']);
     await deck.ok(catapultOfficer(1), 'post', `/api/cycles/${cycle.id}/lineup/slots/${tensioned.id}/suspend`, { slotVersion: tensioned.version, reason: SUSPEND });
-    for (const to of ['resume', 'weight_agreed', 'tensioned'] as const) expect((await deck.step(cycle.id, ids['105'], to)).status).toBe(200);
-    await launch('105');
-    await deck.readyToLaunch(cycle.id, ids['107'], pilot(5));
-    await launch('107');
+    for (const to of ['resume', 'weight_agreed', 'tensioned'] as const) expect((await deck.step(cycle.id, ids['C25'], to)).status).toBe(200);
+    await launch('C25');
+    await deck.readyToLaunch(cycle.id, ids['C27'], pilot(5));
+    await launch('C27');
 
     const { version: last } = await deck.snapshot(cycle.id);
     await deck.ok(AIR_OPS, 'post', `/api/cycles/${cycle.id}/close`, { basisVersion: last });
@@ -144,35 +144,35 @@ describe('cycle reports, exports and shot counts', () => {
     it('reads the planned times from the lineup as it stood when the cycle started', () => {
       expect(report.cycle).toMatchObject({ id: flown.cycle.id, state: 'closed', windowEndAt: flown.windowEndAt });
       expect(report.plannedBasis).toBe('cycle_start');
-      for (const side of ['105', '106', '205', '107', '207']) {
+      for (const side of ['C25', 'C26', 'D37', 'C27', 'D39']) {
         expect({ side, plannedAt: line(side).plannedAt }).toEqual({ side, plannedAt: planned(side) });
       }
-      expect(line('105')).toMatchObject({ plannedCatapultNumber: 1, catapultNumber: 1 });
-      expect(line('107')).toMatchObject({ plannedCatapultNumber: 2, catapultNumber: 2 });
+      expect(line('C25')).toMatchObject({ plannedCatapultNumber: 1, catapultNumber: 1 });
+      expect(line('C27')).toMatchObject({ plannedCatapultNumber: 2, catapultNumber: 2 });
     });
 
     it('sets each actual launch time against its planned time', () => {
-      for (const side of ['105', '106', '205', '107']) {
+      for (const side of ['C25', 'C26', 'D37', 'C27']) {
         expect({ side, launchedAt: line(side).launchedAt, deltaS: line(side).deltaS }).toEqual({
           side,
           launchedAt: flown.launchedAt[side],
           deltaS: seconds(planned(side), flown.launchedAt[side]),
         });
       }
-      expect(line('207')).toMatchObject({ status: 'scratched', launchedAt: null, deltaS: null, inWindow: null });
+      expect(line('D39')).toMatchObject({ status: 'scratched', launchedAt: null, deltaS: null, inWindow: null });
     });
 
     it('orders each catapult by launch, and measures the intervals per catapult and per pair', () => {
       const cat = (number: number) => report.catapults.find((catapult) => catapult.number === number)!;
-      expect(cat(1).launches.map((entry) => entry.sideNumber)).toEqual(['106', '105']);
-      expect(cat(2).launches.map((entry) => entry.sideNumber)).toEqual(['205', '107', '207']);
+      expect(cat(1).launches.map((entry) => entry.sideNumber)).toEqual(['C26', 'C25']);
+      expect(cat(2).launches.map((entry) => entry.sideNumber)).toEqual(['D37', 'C27', 'D39']);
       expect(cat(3).launches).toEqual([]);
-      expect(cat(1).intervals.map((interval) => interval.seconds)).toEqual([seconds(flown.launchedAt['106'], flown.launchedAt['105'])]);
-      expect(cat(2).intervals.map((interval) => interval.seconds)).toEqual([seconds(flown.launchedAt['205'], flown.launchedAt['107'])]);
+      expect(cat(1).intervals.map((interval) => interval.seconds)).toEqual([seconds(flown.launchedAt['C26'], flown.launchedAt['C25'])]);
+      expect(cat(2).intervals.map((interval) => interval.seconds)).toEqual([seconds(flown.launchedAt['D37'], flown.launchedAt['C27'])]);
 
       // Catapults 1 and 2 are the bow pair: its four launches in the order they were made.
       const bow = report.pairs.find((pair) => pair.pair === 1)!;
-      const order = ['106', '205', '105', '107'];
+      const order = ['C26', 'D37', 'C25', 'C27'];
       expect(bow.catapultNumbers).toEqual([1, 2]);
       expect(bow.intervals.map((interval) => [interval.fromSideNumber, interval.toSideNumber, interval.seconds])).toEqual(
         order.slice(1).map((side, i) => [order[i], side, seconds(flown.launchedAt[order[i]], flown.launchedAt[side])]),
@@ -184,32 +184,32 @@ describe('cycle reports, exports and shot counts', () => {
     });
 
     it('judges the launches against the window as it was last set', () => {
-      expect(['106', '205', '105', '107'].map((side) => [side, line(side).inWindow])).toEqual([
-        ['106', true],
-        ['205', true],
-        ['105', false],
-        ['107', false],
+      expect(['C26', 'D37', 'C25', 'C27'].map((side) => [side, line(side).inWindow])).toEqual([
+        ['C26', true],
+        ['D37', true],
+        ['C25', false],
+        ['C27', false],
       ]);
     });
 
     it('lists the suspend, the down aircraft with its spare and the override', () => {
       expect(report.suspends).toHaveLength(1);
-      expect(report.suspends[0]).toMatchObject({ sideNumber: '105', squadronCode: 'TDC', catapultNumber: 1, reason: SUSPEND, by: 'Lia Okonkwo' });
+      expect(report.suspends[0]).toMatchObject({ sideNumber: 'C25', squadronCode: 'CWR', catapultNumber: 1, reason: SUSPEND, by: 'Lia Corrimand' });
       expect(Date.parse(report.suspends[0].resumedAt!)).toBeGreaterThanOrEqual(Date.parse(report.suspends[0].at));
       expect(report.downs).toEqual([
-        expect.objectContaining({ sideNumber: '206', squadronCode: 'BRH', catapultNumber: 2, by: 'Tomas Achterberg', spare: { slotId: flown.ids['107'], sideNumber: '107', squadronCode: 'TDC' } }),
+        expect.objectContaining({ sideNumber: 'D38', squadronCode: 'DFM', catapultNumber: 2, by: 'Tomas Ebberhold', spare: { slotId: flown.ids['C27'], sideNumber: 'C27', squadronCode: 'CWR' } }),
       ]);
       expect(report.overrides).toEqual([
-        { slotId: flown.ids['205'], sideNumber: '205', squadronCode: 'BRH', catapultNumber: 2, launchedAt: flown.launchedAt['205'], reason: OVERRIDE, by: 'Sam Falkner' },
+        { slotId: flown.ids['D37'], sideNumber: 'D37', squadronCode: 'DFM', catapultNumber: 2, launchedAt: flown.launchedAt['D37'], reason: OVERRIDE, by: 'Sam Dellavint' },
       ]);
     });
 
     it('sums the figures for the cycle and per squadron', () => {
-      // 105, 106, 107 (TDC) and 205, 206, 207 (BRH); 206 down, 207 scratched; 106 and 205 inside the window.
+      // C25, C26, C27 (CWR) and D37, D38, D39 (DFM); D38 down, D39 scratched; C26 and D37 inside the window.
       expect(report.totals).toEqual({ aircraft: 6, launched: 4, onTime: 2, outsideWindow: 2, suspends: 1, down: 1, overrides: 1, scratched: 1 });
       expect(report.squadrons.map(({ squadronId: _id, ...figures }) => figures)).toEqual([
-        { squadronCode: 'BRH', squadronName: 'Brass Herons', aircraft: 3, launched: 1, onTime: 1, outsideWindow: 0, suspends: 0, down: 1, overrides: 1, scratched: 1 },
-        { squadronCode: 'TDC', squadronName: 'Tidecallers', aircraft: 3, launched: 3, onTime: 1, outsideWindow: 2, suspends: 1, down: 0, overrides: 0, scratched: 0 },
+        { squadronCode: 'CWR', squadronName: 'Cinderwrights', aircraft: 3, launched: 3, onTime: 1, outsideWindow: 2, suspends: 1, down: 0, overrides: 0, scratched: 0 },
+        { squadronCode: 'DFM', squadronName: 'Driftmenders', aircraft: 3, launched: 1, onTime: 1, outsideWindow: 0, suspends: 0, down: 1, overrides: 1, scratched: 1 },
       ]);
       const times = Object.values(flown.launchedAt).sort();
       expect(report).toMatchObject({ firstLaunchAt: times[0], lastLaunchAt: times[3] });
@@ -260,28 +260,28 @@ describe('cycle reports, exports and shot counts', () => {
         'early_warning', 'spare', 'status', 'catapult', 'position', 'planned_catapult', 'planned_at', 'launched_at', 'delta_s',
         'in_window', 'pilot_weight_ack_at', 'catapult_weight_ack_at', 'suspend_reason', 'override_reason', 'down_at', 'replaced_by',
       ]);
-      expect(rows.map((row) => row.side_number)).toEqual(['105', '106', '205', '206', '107', '207']);
+      expect(rows.map((row) => row.side_number)).toEqual(['C25', 'C26', 'D37', 'D38', 'C27', 'D39']);
       const row = (side: string) => rows.find((candidate) => candidate.side_number === side)!;
-      const plannedAt = flown.atStart.slots.find((slot) => slot.id === flown.ids['105'])!.projectedLaunchAt!;
-      expect(row('105')).toMatchObject({
-        slot_id: String(flown.ids['105']),
-        squadron: 'TDC',
-        pilot: 'Jo Abernathy',
+      const plannedAt = flown.atStart.slots.find((slot) => slot.id === flown.ids['C25'])!.projectedLaunchAt!;
+      expect(row('C25')).toMatchObject({
+        slot_id: String(flown.ids['C25']),
+        squadron: 'CWR',
+        pilot: 'Jo Fettleworth',
         status: 'launched',
         catapult: '1',
         position: '2',
         planned_catapult: '1',
         planned_at: plannedAt,
-        launched_at: flown.launchedAt['105'],
-        delta_s: String(seconds(plannedAt, flown.launchedAt['105'])),
+        launched_at: flown.launchedAt['C25'],
+        delta_s: String(seconds(plannedAt, flown.launchedAt['C25'])),
         in_window: 'false',
         spare: 'false',
         suspend_reason: '',
       });
-      expect(row('205')).toMatchObject({ gross_weight_lb: '52000', override_reason: OVERRIDE, in_window: 'true' });
-      expect(row('206')).toMatchObject({ status: 'down', catapult: '', replaced_by: '107' });
-      expect(row('107')).toMatchObject({ spare: 'true', catapult: '2', position: '2' });
-      expect(row('207')).toMatchObject({ status: 'scratched', launched_at: '', planned_catapult: '2' });
+      expect(row('D37')).toMatchObject({ gross_weight_lb: '52000', override_reason: OVERRIDE, in_window: 'true' });
+      expect(row('D38')).toMatchObject({ status: 'down', catapult: '', replaced_by: 'C27' });
+      expect(row('C27')).toMatchObject({ spare: 'true', catapult: '2', position: '2' });
+      expect(row('D39')).toMatchObject({ status: 'scratched', launched_at: '', planned_catapult: '2' });
     });
 
     it('exports the change log, one row per change in version order', async () => {
@@ -295,10 +295,10 @@ describe('cycle reports, exports and shot counts', () => {
       expect(rows.map((row) => [Number(row.version), row.kind, row.summary, row.at])).toEqual(
         log.map((change) => [change.version, change.kind, change.summary, change.at]),
       );
-      expect(rows[0]).toMatchObject({ kind: 'slot_added', actor: 'Priya Vennard', actor_role: 'air_operations' });
+      expect(rows[0]).toMatchObject({ kind: 'slot_added', actor: 'Priya Quennevar', actor_role: 'air_operations' });
       expect(JSON.parse(rows[0].command)).toMatchObject({ type: 'add_slot', aircraftId: expect.any(Number) });
       const suspended = rows.find((row) => row.kind === 'slot_suspended')!;
-      expect(JSON.parse(suspended.command)).toMatchObject({ type: 'suspend', slotId: flown.ids['105'], reason: SUSPEND });
+      expect(JSON.parse(suspended.command)).toMatchObject({ type: 'suspend', slotId: flown.ids['C25'], reason: SUSPEND });
     });
   });
 
@@ -317,10 +317,10 @@ describe('cycle reports, exports and shot counts', () => {
       });
       expect(after).toMatchObject({ from: range.from, to: range.to });
       expect(after.totalLaunches - shotsBefore.totalLaunches).toBe(4);
-      for (const side of ['105', '106', '205', '107']) {
+      for (const side of ['C25', 'C26', 'D37', 'C27']) {
         expect({ side, ...added((counts) => airframe(counts, side)) }).toEqual({ side, launches: 1, lifetime: 1 });
       }
-      for (const side of ['206', '207']) expect({ side, ...added((counts) => airframe(counts, side)) }).toEqual({ side, launches: 0, lifetime: 0 });
+      for (const side of ['D38', 'D39']) expect({ side, ...added((counts) => airframe(counts, side)) }).toEqual({ side, launches: 0, lifetime: 0 });
       expect(added((counts) => catapult(counts, 1))).toEqual({ launches: 2, lifetime: 2 });
       expect(added((counts) => catapult(counts, 2))).toEqual({ launches: 2, lifetime: 2 });
     });
@@ -362,7 +362,7 @@ describe('cycle reports, exports and shot counts', () => {
       ['a range that ends before it starts', 'from=2027-03-02&to=2027-03-01', 'invalid_date_range', 'The range ends before it starts: to (2027-03-01) is earlier than from (2027-03-02).'],
       ['a date in another format', 'from=05/01/2027&to=2027-03-01', 'validation_failed', 'Invalid request: from must be a day written YYYY-MM-DD, e.g. 2027-01-01'],
       ['a missing end', 'from=2027-03-01', 'validation_failed', 'Invalid request: to must be a day written YYYY-MM-DD, e.g. 2027-01-31'],
-      ['an unknown parameter', 'from=2027-03-01&to=2027-03-02&squadron=TDC', 'validation_failed', 'Invalid request: property squadron should not exist'],
+      ['an unknown parameter', 'from=2027-03-01&to=2027-03-02&squadron=CWR', 'validation_failed', 'Invalid request: property squadron should not exist'],
     ])('refuses %s with a readable 400', async (_name, query, code, message) => {
       for (const path of ['/api/reports/shot-counts', '/api/reports/shot-counts.csv']) {
         const response = await get(`${path}?${query}`);

@@ -74,7 +74,7 @@ describe('ships and catapults', () => {
     const response = await patchShip({ deckSpots: demoDeckSpots.filter((spot) => spot.name !== 'bow-1') });
     expect(response.status).toBe(409);
     expect(response.body.code).toBe('spot_in_use');
-    expect(response.body.message).toMatch(/^Aircraft are parked on spots this change removes: 101 \(bow-1\)/);
+    expect(response.body.message).toMatch(/^Aircraft are parked on spots this change removes: C21 \(bow-1\)/);
     expect(await ship()).toEqual(before);
   });
 

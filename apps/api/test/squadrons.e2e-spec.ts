@@ -49,12 +49,12 @@ describe('squadrons', () => {
   });
 
   it('refuses a code already in use with 409, on create and on rename', async () => {
-    const created = await request(url).post('/api/squadrons').set(bearer(admin)).send({ name: 'Copy', code: 'TDC', email: 'copy@catline.example' });
+    const created = await request(url).post('/api/squadrons').set(bearer(admin)).send({ name: 'Copy', code: 'CWR', email: 'copy@catline.example' });
     expect(created.status).toBe(409);
-    expect(created.body).toEqual({ statusCode: 409, code: 'code_taken', message: 'Another squadron already uses the code TDC.' });
+    expect(created.body).toEqual({ statusCode: 409, code: 'code_taken', message: 'Another squadron already uses the code CWR.' });
 
     const own = await createSquadron(url, admin);
-    const renamed = await request(url).patch(`/api/squadrons/${own.id}`).set(bearer(admin)).send({ code: 'BRH' });
+    const renamed = await request(url).patch(`/api/squadrons/${own.id}`).set(bearer(admin)).send({ code: 'DFM' });
     expect(renamed.status).toBe(409);
     expect((await list()).find((squadron) => squadron.id === own.id)).toEqual(own);
   });

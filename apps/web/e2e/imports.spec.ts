@@ -20,9 +20,9 @@ test('air operations sees every problem of an air plan file, then imports a good
 
   await chooseAndCheck(airops, 'Air plan file (CSV)', 'bad-plan.csv', [
     AIR_PLAN_HEADER,
-    '107,,Strike training,11500,,44900,no,no,no',
+    'C27,,Strike training,11500,,44900,no,no,no',
     '999,,Strike training,11500,,44900,no,no,no',
-    '108,,Strike training,lots,,44900,no,no,maybe',
+    'C28,,Strike training,lots,,44900,no,no,maybe',
   ]);
   const problems = airops.getByTestId('import-problems').locator('tbody tr');
   await expect(problems).toHaveCount(3);
@@ -37,19 +37,19 @@ test('air operations sees every problem of an air plan file, then imports a good
 
   await chooseAndCheck(airops, 'Air plan file (CSV)', 'good-plan.csv', [
     AIR_PLAN_HEADER,
-    '107,pilot2@catline.example,Strike training,11500,4 practice bombs,44900,no,no,no',
-    '108,,Recovery tanker,15800,Refuelling store,47600,yes,no,no',
+    'C27,pilot2@catline.example,Strike training,11500,4 practice bombs,44900,no,no,no',
+    'C28,,Recovery tanker,15800,Refuelling store,47600,yes,no,no',
   ]);
   await expect(airops.getByTestId('import-problems')).toHaveCount(0);
   const rows = airops.getByTestId('import-rows').locator('tbody tr');
   await expect(rows).toHaveCount(2);
-  await expect(rows.nth(0)).toContainText('Jo Abernathy');
+  await expect(rows.nth(0)).toContainText('Jo Fettleworth');
   await expect(rows.nth(1)).toContainText('Tanker');
   // Someone changes the cycle after the check: the import is refused in words, and works once the screen has caught up.
   const api = await apiAs('airops');
   const fleet = (await (await api.get('/api/aircraft')).json()) as AircraftView[];
   const added = await api.post(`/api/cycles/${cycle.id}/slots`, {
-    data: { aircraftId: fleet.find((plane) => plane.sideNumber === '109')!.id, mission: 'Spare', fuelLb: 9000, stores: '', grossWeightLb: 42_000, tanker: false, earlyWarning: false, spare: true },
+    data: { aircraftId: fleet.find((plane) => plane.sideNumber === 'C29')!.id, mission: 'Spare', fuelLb: 9000, stores: '', grossWeightLb: 42_000, tanker: false, earlyWarning: false, spare: true },
   });
   expect(added.ok(), await added.text()).toBe(true);
   await api.dispose();
@@ -60,9 +60,9 @@ test('air operations sees every problem of an air plan file, then imports a good
   await expect(airops.getByTestId('import-done')).toContainText(`deck pool of cycle ${cycle.number}`);
 
   const handler = await openAs(browser, 'handler', `/lineup?cycle=${cycle.id}`);
-  await expect(card(pool(handler), '107')).toBeVisible();
-  await expect(card(pool(handler), '108')).toBeVisible();
-  await expect(card(pool(handler), '109')).toBeVisible();
+  await expect(card(pool(handler), 'C27')).toBeVisible();
+  await expect(card(pool(handler), 'C28')).toBeVisible();
+  await expect(card(pool(handler), 'C29')).toBeVisible();
 });
 
 test('the admin replaces a launch table from a CSV file once its problems are put right', async ({ browser }) => {
@@ -120,7 +120,7 @@ test('the admin invites a person without a password, and a second invitation to 
 
   const pilot = admin.getByRole('row', { name: /pilot@catline\.example/ });
   await pilot.getByRole('button', { name: 'Send invitation again' }).click();
-  await expect(admin.getByTestId('notice')).toContainText('No invitation sent to Kit Rowan');
+  await expect(admin.getByTestId('notice')).toContainText('No invitation sent to Kit Marrowby');
   await expect(admin.getByTestId('notice')).toContainText('has already chosen a password');
 });
 

@@ -3,26 +3,26 @@ import { apiAs, changesOf, lineupOf, planCycle } from './support/demo-api.js';
 import { card, dragWithMouse, lane, openAs, pool } from './support/screens.js';
 
 test('handler drags an aircraft to cat 1, the pilot sees it live, the catapult officer launches it once', async ({ browser }) => {
-  const { cycle } = await planCycle({ aircraft: [{ side: '101', grossWeightLb: 40_000, pilot: 'pilot' }], start: true });
+  const { cycle } = await planCycle({ aircraft: [{ side: 'C21', grossWeightLb: 40_000, pilot: 'pilot' }], start: true });
 
   const handler = await openAs(browser, 'handler', `/lineup?cycle=${cycle.id}`);
   const pilot = await openAs(browser, 'pilot', `/my-launch?cycle=${cycle.id}`);
   const catOfficer = await openAs(browser, 'cat1', `/cat-station?cycle=${cycle.id}`);
 
-  await expect(card(pool(handler), '101')).toBeVisible();
+  await expect(card(pool(handler), 'C21')).toBeVisible();
   await expect(handler.getByTestId('connection-state')).toHaveAttribute('data-state', 'live');
   await expect(pilot.getByTestId('my-catapult')).toContainText('Deck pool');
   await expect(pilot.getByTestId('connection-state')).toHaveAttribute('data-state', 'live');
   await expect(catOfficer.getByText('No aircraft waiting on cat 1')).toBeVisible();
 
-  await dragWithMouse(handler, card(pool(handler), '101'), lane(handler, 1).getByTestId('lane-drop-zone'));
-  await expect(card(lane(handler, 1), '101')).toBeVisible();
+  await dragWithMouse(handler, card(pool(handler), 'C21'), lane(handler, 1).getByTestId('lane-drop-zone'));
+  await expect(card(lane(handler, 1), 'C21')).toBeVisible();
 
   // Live, without a reload, within two seconds.
   await expect(pilot.getByTestId('my-catapult')).toContainText('Cat 1', { timeout: 2_000 });
   await expect(pilot.getByTestId('my-place')).toContainText('Next (1st)', { timeout: 2_000 });
 
-  await expect(catOfficer.getByTestId('current-aircraft')).toHaveAttribute('data-side-number', '101');
+  await expect(catOfficer.getByTestId('current-aircraft')).toHaveAttribute('data-side-number', 'C21');
   await catOfficer.getByTestId('step-taxiing').click();
   await catOfficer.getByTestId('step-on_catapult').click();
   await expect(catOfficer.getByTestId('step-on_catapult')).toHaveAttribute('data-done', 'true');
@@ -40,7 +40,7 @@ test('handler drags an aircraft to cat 1, the pilot sees it live, the catapult o
   // A double tap must launch once.
   await catOfficer.getByTestId('launch').dblclick();
 
-  await expect(card(lane(handler, 1), '101')).toHaveAttribute('data-status', 'launched');
+  await expect(card(lane(handler, 1), 'C21')).toHaveAttribute('data-status', 'launched');
   await expect(pilot.getByTestId('slot-status')).toHaveText('Launched');
   await expect(catOfficer.getByText('No aircraft waiting on cat 1')).toBeVisible();
 
@@ -48,6 +48,6 @@ test('handler drags an aircraft to cat 1, the pilot sees it live, the catapult o
   const launches = (await changesOf(observer, cycle.id)).filter((change) => change.kind === 'slot_launched');
   expect(launches).toHaveLength(1);
   const snapshot = await lineupOf(observer, cycle.id);
-  expect(snapshot.slots.find((slot) => slot.sideNumber === '101')?.launchedAt).not.toBeNull();
+  expect(snapshot.slots.find((slot) => slot.sideNumber === 'C21')?.launchedAt).not.toBeNull();
   await observer.dispose();
 });

@@ -55,8 +55,8 @@ test('the report of the flown cycle draws the same launches in its chart as its 
   await expect(surface.locator(':scope > desc')).toHaveText(await page.getByTestId('timeline-summary').innerText());
 
   await expect(page.getByRole('region', { name: 'Suspends' })).toContainText('Launch bar not seated');
-  await expect(page.getByRole('region', { name: 'Down aircraft and spares' })).toContainText('104 (TDC)');
-  await expect(page.getByRole('region', { name: 'Down aircraft and spares' })).toContainText('111 (TDC)');
+  await expect(page.getByRole('region', { name: 'Down aircraft and spares' })).toContainText('C24 (CWR)');
+  await expect(page.getByRole('region', { name: 'Down aircraft and spares' })).toContainText('C31 (CWR)');
   await expectNoSidewaysOverflow(page);
   await page.screenshot({ path: 'test-results/reports/report-1366x768.png', fullPage: true });
 
@@ -94,17 +94,17 @@ test('the replay steps through the change log with the slider, the buttons and t
   await expect(current).toContainText(first.actor.name);
   await expect(page.getByTestId('replay-slot')).toHaveCount(1);
 
-  // The step that marked 104 down: 104 leaves cat 3 and the spare 111 takes its place.
+  // The step that marked C24 down: C24 leaves cat 3 and the spare C31 takes its place.
   const down = replay.changes.findIndex((change) => change.kind === 'aircraft_down') + 1;
   const cat3 = page.getByTestId('replay-lane').nth(2);
   await page.getByRole('slider', { name: 'Step through the change log' }).fill(String(down - 1));
   await expect(current).toContainText(`Change ${down - 1} of ${total}`);
-  await expect(cat3.locator('[data-side-number="104"]')).toBeVisible();
+  await expect(cat3.locator('[data-side-number="C24"]')).toBeVisible();
   await page.getByRole('button', { name: 'Next', exact: true }).click();
   await expect(current).toContainText(replay.changes[down - 1].summary);
-  await expect(cat3.locator('[data-side-number="104"]')).toHaveCount(0);
-  await expect(cat3.locator('[data-side-number="111"]')).toHaveAttribute('data-changed', '');
-  await expect(page.getByTestId('replay-out')).toContainText('104 (down)');
+  await expect(cat3.locator('[data-side-number="C24"]')).toHaveCount(0);
+  await expect(cat3.locator('[data-side-number="C31"]')).toHaveAttribute('data-changed', '');
+  await expect(page.getByTestId('replay-out')).toContainText('C24 (down)');
   await page.screenshot({ path: 'test-results/reports/replay-down-1366x768.png', fullPage: true });
 
   await page.getByRole('button', { name: 'Previous', exact: true }).click();

@@ -3,7 +3,7 @@ import { planCycle } from './support/demo-api.js';
 import { card, dragWithMouse, lane, openAs, pool } from './support/screens.js';
 
 test('a move based on a lineup that changed meanwhile is refused with the server’s reason and rolled back', async ({ browser }) => {
-  const { cycle } = await planCycle({ aircraft: [{ side: '104', grossWeightLb: 41_000 }] });
+  const { cycle } = await planCycle({ aircraft: [{ side: 'C24', grossWeightLb: 41_000 }] });
   const first = await openAs(browser, 'handler', `/lineup?cycle=${cycle.id}`);
 
   // The second handler's screen is a moment behind: broadcasts reach it late (here: not at all).
@@ -18,19 +18,19 @@ test('a move based on a lineup that changed meanwhile is refused with the server
   await lagging.getByLabel('E-mail').fill('handler@catline.example');
   await lagging.getByLabel('Password').fill('catline-demo');
   await lagging.getByRole('button', { name: 'Sign in' }).click();
-  await expect(card(pool(lagging), '104')).toBeVisible();
+  await expect(card(pool(lagging), 'C24')).toBeVisible();
 
-  await dragWithMouse(first, card(pool(first), '104'), lane(first, 2).getByTestId('lane-drop-zone'));
-  await expect(card(lane(first, 2), '104')).toBeVisible();
-  await expect(card(pool(lagging), '104')).toBeVisible();
+  await dragWithMouse(first, card(pool(first), 'C24'), lane(first, 2).getByTestId('lane-drop-zone'));
+  await expect(card(lane(first, 2), 'C24')).toBeVisible();
+  await expect(card(pool(lagging), 'C24')).toBeVisible();
 
-  await dragWithMouse(lagging, card(pool(lagging), '104'), lane(lagging, 3).getByTestId('lane-drop-zone'));
+  await dragWithMouse(lagging, card(pool(lagging), 'C24'), lane(lagging, 3).getByTestId('lane-drop-zone'));
 
   const notice = lagging.getByTestId('notice');
   await expect(notice).toContainText('refused: the lineup changed first');
-  await expect(notice).toContainText('104');
+  await expect(notice).toContainText('C24');
   // Rolled back and refreshed: the lagging screen now shows where the first handler put it.
-  await expect(card(lane(lagging, 2), '104')).toBeVisible();
-  await expect(card(lane(lagging, 3), '104')).toHaveCount(0);
-  await expect(card(lane(first, 2), '104')).toBeVisible();
+  await expect(card(lane(lagging, 2), 'C24')).toBeVisible();
+  await expect(card(lane(lagging, 3), 'C24')).toHaveCount(0);
+  await expect(card(lane(first, 2), 'C24')).toBeVisible();
 });

@@ -163,7 +163,7 @@ export interface LineupChange {
   kind: ChangeKind;
   actor: ChangeActor;
   at: string;
-  /** A one-line account for people, e.g. "201 moved to cat 2, place 3". */
+  /** A one-line account for people, e.g. "D33 moved to cat 2, place 3". */
   summary: string;
   patch: LineupPatch;
 }

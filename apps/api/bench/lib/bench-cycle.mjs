@@ -14,7 +14,7 @@ export async function createBenchCycle(baseUrl) {
   for (let n = 0; aircraft.length < BENCH_AIRCRAFT; n += 1) {
     expectOk(
       await admin.post('/aircraft', {
-        sideNumber: String(900 + n),
+        sideNumber: `B${50 + n}`,
         typeId: strike.id,
         squadronId: squadrons[n % squadrons.length].id,
         parkedSpot: ship.deckSpots[n % ship.deckSpots.length].name,

@@ -6,7 +6,7 @@ const change = (version: number, cycleId = 1): LineupChange => ({
   cycleId,
   version,
   kind: 'slot_moved',
-  actor: { id: 1, name: 'Tomas Achterberg', role: 'handler' },
+  actor: { id: 1, name: 'Tomas Ebberhold', role: 'handler' },
   at: '2026-12-02T10:00:00.000Z',
   summary: `change ${version}`,
   patch: {},

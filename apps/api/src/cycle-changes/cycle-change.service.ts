@@ -17,7 +17,7 @@ import { asLaunchDataRefusal } from './lineup.exception.js';
 
 /** What a command did, for the change log. */
 export interface ChangeDraft {
-  /** One line for people, e.g. "201 moved to cat 2, place 3". */
+  /** One line for people, e.g. "D33 moved to cat 2, place 3". */
   summary: string;
   /** The request as accepted, kept with the change. */
   command: Record<string, unknown>;

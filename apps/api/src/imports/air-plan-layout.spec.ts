@@ -6,24 +6,24 @@ const file = (...lines: string[]) => [HEADER, ...lines].join('\n');
 describe('readAirPlan', () => {
   it('reads a file with a byte-order mark, Windows line ends, shuffled columns and a quoted comma', () => {
     const text = '\uFEFFspare,side_number,pilot_email,mission,fuel_lb,stores,gross_weight_lb,tanker,early_warning\r\n' +
-      'no,101,Pilot@Catline.Example,Strike training,11500,"2 bombs, 1 pod",45400,no,no\r\n' +
+      'no,C21,Pilot@Catline.Example,Strike training,11500,"2 bombs, 1 pod",45400,no,no\r\n' +
       '\r\n' +
-      'Y,602,,Airborne early warning,11000,,51900,false,1\r\n';
+      'Y,L48,,Airborne early warning,11000,,51900,false,1\r\n';
     expect(readAirPlan(text)).toEqual({
       problems: [],
       lines: [
-        { row: 2, sideNumber: '101', pilotEmail: 'pilot@catline.example', mission: 'Strike training', fuelLb: 11_500, stores: '2 bombs, 1 pod', grossWeightLb: 45_400, tanker: false, earlyWarning: false, spare: false },
-        { row: 4, sideNumber: '602', pilotEmail: null, mission: 'Airborne early warning', fuelLb: 11_000, stores: '', grossWeightLb: 51_900, tanker: false, earlyWarning: true, spare: true },
+        { row: 2, sideNumber: 'C21', pilotEmail: 'pilot@catline.example', mission: 'Strike training', fuelLb: 11_500, stores: '2 bombs, 1 pod', grossWeightLb: 45_400, tanker: false, earlyWarning: false, spare: false },
+        { row: 4, sideNumber: 'L48', pilotEmail: null, mission: 'Airborne early warning', fuelLb: 11_000, stores: '', grossWeightLb: 51_900, tanker: false, earlyWarning: true, spare: true },
       ],
     });
   });
 
   it('reads its own template', () => {
-    expect(readAirPlan(AIR_PLAN_TEMPLATE)).toMatchObject({ problems: [], lines: [{ row: 2, sideNumber: '101', grossWeightLb: 45_400 }] });
+    expect(readAirPlan(AIR_PLAN_TEMPLATE)).toMatchObject({ problems: [], lines: [{ row: 2, sideNumber: 'C21', grossWeightLb: 45_400 }] });
   });
 
   it('reports each wrong cell by line and column and leaves the line out', () => {
-    const result = readAirPlan(file('101,,,lots,,-45000,maybe,no,no', '102,x@,Strike,11500,,45000,no,no,no', '103,,Strike,11500,,45000,no,no'));
+    const result = readAirPlan(file('C21,,,lots,,-45000,maybe,no,no', 'C22,x@,Strike,11500,,45000,no,no,no', 'C23,,Strike,11500,,45000,no,no'));
     expect(result.lines).toEqual([]);
     expect(result.problems).toEqual([
       { row: 2, column: 'mission', value: '', reason: 'A mission is required.' },
@@ -36,7 +36,7 @@ describe('readAirPlan', () => {
   });
 
   it('refuses a header with an unknown, a doubled and a missing column', () => {
-    const text = 'side,side_number,pilot_email,mission,mission,fuel_lb,stores,tanker,early_warning,spare\n101,101,,a,a,1,,no,no,no';
+    const text = 'side,side_number,pilot_email,mission,mission,fuel_lb,stores,tanker,early_warning,spare\nC21,C21,,a,a,1,,no,no,no';
     expect(readAirPlan(text)).toEqual({
       lines: [],
       problems: [
@@ -54,7 +54,7 @@ describe('readAirPlan', () => {
     expect(readAirPlan(`${HEADER}\r\n\r\n`).problems).toEqual([
       { row: 1, column: null, value: null, reason: 'The file has the header line but no aircraft under it.' },
     ]);
-    expect(readAirPlan(file('101,,"Strike,11500,,45000,no,no,no')).problems).toEqual([
+    expect(readAirPlan(file('C21,,"Strike,11500,,45000,no,no,no')).problems).toEqual([
       { row: 2, column: null, value: null, reason: 'A quoted cell is never closed: a " opens it but no " ends it.' },
     ]);
   });

@@ -30,7 +30,7 @@ export const AIR_PLAN_LAYOUT: CsvLayout<AirPlanColumn> = { columns: AIR_PLAN_COL
 
 /** The template's header and one example line (an invented sortie of the demo fleet). */
 export const AIR_PLAN_TEMPLATE = toCsv(AIR_PLAN_COLUMNS, [
-  ['101', 'pilot@catline.example', 'Strike training', 11_500, '4 practice bombs', 45_400, 'no', 'no', 'no'],
+  ['C21', 'pilot@catline.example', 'Strike training', 11_500, '4 practice bombs', 45_400, 'no', 'no', 'no'],
 ]);
 
 /** An air plan line as read, before the side number and e-mail are matched. */

@@ -1,7 +1,7 @@
 import { advance, launchRefusal, suspend, type LaunchFacts } from './readiness-machine.js';
 
 const ready: LaunchFacts = {
-  side: '201',
+  side: 'D33',
   status: 'tensioned',
   cycleNumber: 3,
   cycleState: 'executing',
@@ -21,39 +21,39 @@ describe('readiness steps', () => {
     ['on_catapult', 'weight_agreed'],
     ['weight_agreed', 'tensioned'],
   ] as const)('moves from %s to %s', (from, to) => {
-    expect(advance('201', from, to)).toEqual({ ok: true, status: to });
+    expect(advance('D33', from, to)).toEqual({ ok: true, status: to });
   });
 
   it('refuses a skipped step and names the next one', () => {
-    const result = advance('201', 'taxiing', 'tensioned');
+    const result = advance('D33', 'taxiing', 'tensioned');
     expect(result.ok).toBe(false);
     expect(!result.ok && result.refusal).toEqual({
       code: 'wrong_step',
-      message: '201 is taxiing; the next step is on catapult, not tensioned.',
+      message: 'D33 is taxiing; the next step is on catapult, not tensioned.',
     });
   });
 
   it('refuses going back a step', () => {
-    expect(advance('201', 'tensioned', 'on_catapult').ok).toBe(false);
+    expect(advance('D33', 'tensioned', 'on_catapult').ok).toBe(false);
   });
 
   it('resumes a suspended aircraft to on catapult, and nothing else', () => {
-    expect(advance('201', 'suspended', 'resume')).toEqual({ ok: true, status: 'on_catapult' });
-    expect(advance('201', 'on_catapult', 'resume').ok).toBe(false);
-    expect(advance('201', 'suspended', 'tensioned').ok).toBe(false);
+    expect(advance('D33', 'suspended', 'resume')).toEqual({ ok: true, status: 'on_catapult' });
+    expect(advance('D33', 'on_catapult', 'resume').ok).toBe(false);
+    expect(advance('D33', 'suspended', 'tensioned').ok).toBe(false);
   });
 
   it('takes no step after a launch', () => {
-    const result = advance('201', 'launched', 'taxiing');
-    expect(!result.ok && result.refusal.message).toBe('201 is launched; it takes no more readiness steps.');
+    const result = advance('D33', 'launched', 'taxiing');
+    expect(!result.ok && result.refusal.message).toBe('D33 is launched; it takes no more readiness steps.');
   });
 
   it.each(['taxiing', 'on_catapult', 'weight_agreed', 'tensioned'] as const)('suspends from %s', (status) => {
-    expect(suspend('201', status)).toEqual({ ok: true, status: 'suspended' });
+    expect(suspend('D33', status)).toEqual({ ok: true, status: 'suspended' });
   });
 
   it.each(['planned', 'launched', 'suspended', 'down'] as const)('does not suspend from %s', (status) => {
-    expect(suspend('201', status).ok).toBe(false);
+    expect(suspend('D33', status).ok).toBe(false);
   });
 });
 
@@ -69,7 +69,7 @@ describe('launchRefusal', () => {
   it('refuses without both weight agreements', () => {
     expect(launchRefusal({ ...ready, pilotWeightAgreed: false })?.code).toBe('weight_not_agreed');
     expect(launchRefusal({ ...ready, catapultWeightAgreed: false })?.message).toBe(
-      "201 cannot launch without the catapult officer's gross weight agreement.",
+      "D33 cannot launch without the catapult officer's gross weight agreement.",
     );
   });
 
@@ -83,10 +83,10 @@ describe('launchRefusal', () => {
   });
 
   it('refuses a no-go figure unless an override reason is given', () => {
-    const noGo = { ...ready, go: false, noGoReasons: ['Crosswind 18.0 kt from port is over the KS-7 limit of 15.0 kt.'] };
+    const noGo = { ...ready, go: false, noGoReasons: ['Crosswind 18.0 kt from port is over the WKD-41 limit of 15.0 kt.'] };
     expect(launchRefusal(noGo)).toEqual({
       code: 'no_go',
-      message: '201 is no-go: Crosswind 18.0 kt from port is over the KS-7 limit of 15.0 kt. Launch only with an override reason.',
+      message: 'D33 is no-go: Crosswind 18.0 kt from port is over the WKD-41 limit of 15.0 kt. Launch only with an override reason.',
     });
     expect(launchRefusal({ ...noGo, overrideReason: 'Ship cannot turn into the wind; air boss approved' })).toBeNull();
   });

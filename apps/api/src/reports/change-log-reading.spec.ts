@@ -6,7 +6,7 @@ type SlotState = Pick<SlotView, 'id' | 'status' | 'catapultId'> & Partial<SlotVi
 const view = (fields: SlotState) => ({ projectedLaunchAt: null, suspendReason: null, ...fields }) as SlotView;
 
 let version = 0;
-const change = (kind: ChangeKind, slots: SlotState[], at: string, actor = 'Tomas Achterberg'): LineupChange => ({
+const change = (kind: ChangeKind, slots: SlotState[], at: string, actor = 'Tomas Ebberhold'): LineupChange => ({
   cycleId: 1,
   version: ++version,
   kind,
@@ -25,7 +25,7 @@ describe('readChangeLog', () => {
     const log = [
       change('slot_added', [{ id: 1, status: 'planned', catapultId: null }], '2027-01-05T09:00:00.000Z'),
       change('slot_moved', [{ id: 1, status: 'planned', catapultId: 7, projectedLaunchAt: '2027-01-05T10:00:00.000Z' }], '2027-01-05T09:01:00.000Z'),
-      change('cycle_started', [], '2027-01-05T09:58:00.000Z', 'Priya Vennard'),
+      change('cycle_started', [], '2027-01-05T09:58:00.000Z', 'Priya Quennevar'),
       change('slot_advanced', [{ id: 1, status: 'taxiing', catapultId: 7, projectedLaunchAt: '2027-01-05T10:02:00.000Z' }], '2027-01-05T09:59:00.000Z'),
     ];
     const reading = readChangeLog(log);
@@ -52,16 +52,16 @@ describe('readChangeLog', () => {
   it('finds each suspend with its reason and the time the aircraft went back on the catapult', () => {
     const log = [
       change('slot_added', [{ id: 2, status: 'planned', catapultId: 8 }], '2027-01-05T09:00:00.000Z'),
-      change('slot_suspended', [{ id: 2, status: 'suspended', catapultId: 8, suspendReason: 'Launch bar not seated' }], '2027-01-05T10:00:00.000Z', 'Sam Falkner'),
-      change('slot_advanced', [{ id: 2, status: 'on_catapult', catapultId: 8 }], '2027-01-05T10:00:40.000Z', 'Sam Falkner'),
-      change('slot_suspended', [{ id: 2, status: 'suspended', catapultId: 8, suspendReason: 'Deck crew clear' }], '2027-01-05T10:01:10.000Z', 'Sam Falkner'),
+      change('slot_suspended', [{ id: 2, status: 'suspended', catapultId: 8, suspendReason: 'Launch bar not seated' }], '2027-01-05T10:00:00.000Z', 'Sam Dellavint'),
+      change('slot_advanced', [{ id: 2, status: 'on_catapult', catapultId: 8 }], '2027-01-05T10:00:40.000Z', 'Sam Dellavint'),
+      change('slot_suspended', [{ id: 2, status: 'suspended', catapultId: 8, suspendReason: 'Deck crew clear' }], '2027-01-05T10:01:10.000Z', 'Sam Dellavint'),
       change('cycle_closed', [{ id: 2, status: 'scratched', catapultId: null }], '2027-01-05T10:20:00.000Z'),
     ];
     const reading = readChangeLog(log);
     expect(reading.suspends).toEqual([
-      { slotId: 2, catapultId: 8, at: '2027-01-05T10:00:00.000Z', reason: 'Launch bar not seated', by: 'Sam Falkner', resumedAt: '2027-01-05T10:00:40.000Z' },
+      { slotId: 2, catapultId: 8, at: '2027-01-05T10:00:00.000Z', reason: 'Launch bar not seated', by: 'Sam Dellavint', resumedAt: '2027-01-05T10:00:40.000Z' },
       // Scratched at the close is not a resume.
-      { slotId: 2, catapultId: 8, at: '2027-01-05T10:01:10.000Z', reason: 'Deck crew clear', by: 'Sam Falkner', resumedAt: null },
+      { slotId: 2, catapultId: 8, at: '2027-01-05T10:01:10.000Z', reason: 'Deck crew clear', by: 'Sam Dellavint', resumedAt: null },
     ]);
     expect(reading.closedAt).toBe('2027-01-05T10:20:00.000Z');
   });
@@ -71,11 +71,11 @@ describe('readChangeLog', () => {
       change('slot_added', [{ id: 3, status: 'planned', catapultId: null }], '2027-01-05T09:00:00.000Z'),
       change('slot_moved', [{ id: 3, status: 'planned', catapultId: 9 }], '2027-01-05T09:01:00.000Z'),
       change('aircraft_down', [{ id: 3, status: 'down', catapultId: null }, { id: 4, status: 'planned', catapultId: 9 }], '2027-01-05T09:30:00.000Z'),
-      change('slot_launched', [{ id: 4, status: 'launched', catapultId: 9 }], '2027-01-05T10:03:00.000Z', 'Rui Tavares'),
+      change('slot_launched', [{ id: 4, status: 'launched', catapultId: 9 }], '2027-01-05T10:03:00.000Z', 'Ines Ashwicke'),
     ];
     const reading = readChangeLog(log);
-    expect(reading.downs).toEqual([{ slotId: 3, catapultId: 9, at: '2027-01-05T09:30:00.000Z', by: 'Tomas Achterberg' }]);
-    expect(reading.launchedBy).toEqual(new Map([[4, 'Rui Tavares']]));
+    expect(reading.downs).toEqual([{ slotId: 3, catapultId: 9, at: '2027-01-05T09:30:00.000Z', by: 'Tomas Ebberhold' }]);
+    expect(reading.launchedBy).toEqual(new Map([[4, 'Ines Ashwicke']]));
   });
 
   it('reads an empty log as a plan at version 0', () => {

@@ -5,7 +5,7 @@ import { countFigures, insideWindow, intervalSpread, launchIntervals, secondsBet
 const at = (clock: string) => Date.parse(`2027-01-05T${clock}Z`);
 const launch = (slotId: number, catapultNumber: number, clock: string): FlownLaunch => ({
   slotId,
-  sideNumber: String(100 + slotId),
+  sideNumber: `C${20 + slotId}`,
   catapultNumber,
   launchedAtMs: at(clock),
 });
@@ -14,8 +14,8 @@ describe('launchIntervals', () => {
   it('measures each launch from the one before it, in launch order whatever the input order', () => {
     const intervals = launchIntervals([launch(3, 1, '10:02:10.500'), launch(1, 1, '10:00:00.000'), launch(2, 2, '10:01:05.250')]);
     expect(intervals.map((interval) => [interval.fromSideNumber, interval.toSideNumber, interval.seconds])).toEqual([
-      ['101', '102', 65.25], // 10:00:00.000 → 10:01:05.250
-      ['102', '103', 65.25], // 10:01:05.250 → 10:02:10.500
+      ['C21', 'C22', 65.25], // 10:00:00.000 → 10:01:05.250
+      ['C22', 'C23', 65.25], // 10:01:05.250 → 10:02:10.500
     ]);
     expect(intervals[0]).toMatchObject({ fromCatapultNumber: 1, toCatapultNumber: 2 });
   });

@@ -6,7 +6,7 @@ import { CatapultToggler } from './catapult-toggler.js';
 import { FollowingClient } from './following-client.js';
 
 const CLIENTS_PER_PROCESS = 3;
-const SIDES = ['101', '102', '103', '104', '105', '106', '107', '108'];
+const SIDES = ['C21', 'C22', 'C23', 'C24', 'C25', 'C26', 'C27', 'C28'];
 
 /** The versions after `from` up to `to`, each once, in order. */
 const versionsBetween = (from: number, to: number) => Array.from({ length: to - from }, (_, i) => from + 1 + i);

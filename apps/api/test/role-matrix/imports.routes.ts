@@ -4,7 +4,7 @@ import { createAircraftType } from '../support/fleet-fixtures.js';
 import { LineupDriver } from '../support/lineup-fixtures.js';
 import type { MatrixContext, MatrixRoute } from './route-table.js';
 
-const AIR_PLAN = 'side_number,pilot_email,mission,fuel_lb,stores,gross_weight_lb,tanker,early_warning,spare\n101,,Strike training,11500,,45000,no,no,no\n';
+const AIR_PLAN = 'side_number,pilot_email,mission,fuel_lb,stores,gross_weight_lb,tanker,early_warning,spare\nC21,,Strike training,11500,,45000,no,no,no\n';
 const LAUNCH_TABLE = 'gross_weight_lb,min_launch_airspeed_kt\n25000,115\n40000,135\n';
 
 // A preview changes no cycle, so every caller previews into one; a permitted confirm gets a fresh cycle.

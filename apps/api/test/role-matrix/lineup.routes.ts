@@ -14,7 +14,7 @@ type Stage = 'pool' | 'lane' | 'executing' | 'taxiing' | 'tensioned';
 async function freshSlot(context: MatrixContext, stage: Stage) {
   const deck = lineupDriver(context);
   const cycle = await deck.createCycle();
-  const slot = await deck.addSlot(cycle.id, '101', { pilotEmail: pilot(1) });
+  const slot = await deck.addSlot(cycle.id, 'C21', { pilotEmail: pilot(1) });
   if (stage !== 'pool') await deck.place(cycle.id, slot.id, 1);
   if (stage === 'executing' || stage === 'taxiing' || stage === 'tensioned') await deck.start(cycle.id);
   if (stage === 'taxiing') await deck.step(cycle.id, slot.id, 'taxiing');

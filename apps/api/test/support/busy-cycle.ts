@@ -3,7 +3,7 @@ import { TEST_PASSWORD, createUser } from './fleet-fixtures.js';
 import { HANDLER, type LineupDriver } from './lineup-fixtures.js';
 import { demoEmail, signIn } from './sign-in.js';
 
-const SIDES = [...Array.from({ length: 12 }, (_, i) => String(101 + i)), ...Array.from({ length: 10 }, (_, i) => String(201 + i))];
+const SIDES = [...Array.from({ length: 12 }, (_, i) => `C${21 + i}`), ...Array.from({ length: 10 }, (_, i) => `D${33 + i}`)];
 const IN_LANES = 12;
 
 export interface BusyCycle {

@@ -23,7 +23,7 @@ import { TrimBandDto } from './trim-band.dto.js';
 import { PlainText } from '../../common/validation/plain-text.decorator.js';
 
 export class CreateAircraftTypeDto implements CreateAircraftTypeRequest {
-  @ApiProperty({ example: 'KS-7' })
+  @ApiProperty({ example: 'WKD-41' })
   @Trim()
   @IsString()
   @IsNotEmpty({ message: 'designation is required' })

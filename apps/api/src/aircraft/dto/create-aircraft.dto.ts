@@ -4,7 +4,7 @@ import { IsBoolean, IsInt, IsNotEmpty, IsOptional, IsString, Matches, MaxLength,
 import { Trim } from '../../common/validation/trim.decorator.js';
 
 export class CreateAircraftDto implements CreateAircraftRequest {
-  @ApiProperty({ example: '101' })
+  @ApiProperty({ example: 'C21' })
   @Trim()
   @IsString()
   @Matches(SIDE_NUMBER_PATTERN, { message: `sideNumber must be 1 to ${SIDE_NUMBER_MAX_LENGTH} letters, digits or dashes` })

@@ -45,24 +45,24 @@ function cycleAt(number: number, planned: Date, conditions: Omit<CreateCycleDto,
 }
 
 const flownSorties: DemoSortie[] = [
-  { side: '601', mission: 'Airborne early warning', grossWeightLb: 52_500, fuelLb: 11_000, earlyWarning: true, pilot: pilot(2) },
-  { side: '110', mission: 'Recovery tanker', grossWeightLb: 49_800, fuelLb: 15_500, stores: 'Refuelling store', tanker: true, pilot: pilot(3) },
-  strike('101', 44_800, { pilot: pilot(1) }),
-  strike('102', 46_200, { pilot: pilot(4) }),
-  strike('103', 43_500, { pilot: pilot(5) }),
-  strike('104', 45_100),
-  strike('201', 47_300, { pilot: pilot(6) }),
-  strike('202', 42_900, { pilot: pilot(7) }),
-  { side: '301', mission: 'Close air support training', grossWeightLb: 27_400, fuelLb: 7_800, stores: '2 rocket pods', pilot: pilot(8) },
-  strike('111', 44_000, { spare: true, pilot: pilot(9), mission: 'Spare' }),
+  { side: 'L47', mission: 'Airborne early warning', grossWeightLb: 52_500, fuelLb: 11_000, earlyWarning: true, pilot: pilot(2) },
+  { side: 'C30', mission: 'Recovery tanker', grossWeightLb: 49_800, fuelLb: 15_500, stores: 'Refuelling store', tanker: true, pilot: pilot(3) },
+  strike('C21', 44_800, { pilot: pilot(1) }),
+  strike('C22', 46_200, { pilot: pilot(4) }),
+  strike('C23', 43_500, { pilot: pilot(5) }),
+  strike('C24', 45_100),
+  strike('D33', 47_300, { pilot: pilot(6) }),
+  strike('D34', 42_900, { pilot: pilot(7) }),
+  { side: 'G43', mission: 'Close air support training', grossWeightLb: 27_400, fuelLb: 7_800, stores: '2 rocket pods', pilot: pilot(8) },
+  strike('C31', 44_000, { spare: true, pilot: pilot(9), mission: 'Spare' }),
 ];
 
 /** Catapult number, then its aircraft in launch order. */
 const flownLanes: [number, string[]][] = [
-  [1, ['601', '101', '102']],
-  [2, ['110', '201']],
-  [3, ['103', '104']],
-  [4, ['301', '202']],
+  [1, ['L47', 'C21', 'C22']],
+  [2, ['C30', 'D33']],
+  [3, ['C23', 'C24']],
+  [4, ['G43', 'D34']],
 ];
 
 const STEPS_BEFORE_LAUNCH: [ReadinessStep, number][] = [
@@ -86,17 +86,17 @@ async function flyEarlierCycle(deck: DemoDeck, shipId: number, planned: Date): P
       deck.clock.advance(25);
     }
   }
-  await deck.move(cycleId, HANDLER, '202', 2, 1);
+  await deck.move(cycleId, HANDLER, 'D34', 2, 1);
   deck.clock.advance(60);
   for (const sortie of flownSorties.filter((candidate) => candidate.pilot)) {
     await deck.acknowledgeWeight(cycleId, sortie.side);
     deck.clock.advance(20);
   }
-  await deck.markDown(cycleId, HANDLER, '104', '111');
+  await deck.markDown(cycleId, HANDLER, 'C24', 'C31');
   deck.clock.at = new Date(planned.getTime() - 2 * MINUTE);
   await deck.start(cycleId, AIR_OPS);
 
-  // Each lane launches in turn; the pair gap and reset intervals are kept; 201 is suspended once.
+  // Each lane launches in turn; the pair gap and reset intervals are kept; D33 is suspended once.
   const events: { at: number; run: () => Promise<void> }[] = [];
   const lanes = (await deck.snapshot(cycleId)).lanes;
   for (const lane of lanes) {
@@ -106,7 +106,7 @@ async function flyEarlierCycle(deck: DemoDeck, shipId: number, planned: Date): P
       for (const [step, before] of STEPS_BEFORE_LAUNCH) {
         events.push({ at: launchAt - before * 1000, run: () => deck.advance(cycleId, side, step) });
       }
-      if (side === '201') {
+      if (side === 'D33') {
         events.push({ at: launchAt - 9_000, run: () => deck.suspend(cycleId, side, 'Launch bar not seated') });
         events.push({ at: launchAt + 25_000, run: () => deck.advance(cycleId, side, 'resume') });
         launchAt += 60_000;
@@ -125,14 +125,14 @@ async function flyEarlierCycle(deck: DemoDeck, shipId: number, planned: Date): P
 }
 
 const daySorties: DemoSortie[] = [
-  { side: '601', mission: 'Airborne early warning', grossWeightLb: 53_000, fuelLb: 11_500, earlyWarning: true, pilot: pilot(2) },
-  { side: '108', mission: 'Recovery tanker', grossWeightLb: 50_200, fuelLb: 16_000, stores: 'Refuelling store', tanker: true, pilot: pilot(3) },
-  strike('101', 45_400, { pilot: pilot(1) }),
-  ...['102', '103', '104', '105', '106', '107'].map((side, i) => strike(side, 42_600 + i * 700, i < 3 ? { pilot: pilot(4 + i) } : {})),
-  ...['201', '202', '203', '204', '205', '206'].map((side, i) =>
+  { side: 'L47', mission: 'Airborne early warning', grossWeightLb: 53_000, fuelLb: 11_500, earlyWarning: true, pilot: pilot(2) },
+  { side: 'C28', mission: 'Recovery tanker', grossWeightLb: 50_200, fuelLb: 16_000, stores: 'Refuelling store', tanker: true, pilot: pilot(3) },
+  strike('C21', 45_400, { pilot: pilot(1) }),
+  ...['C22', 'C23', 'C24', 'C25', 'C26', 'C27'].map((side, i) => strike(side, 42_600 + i * 700, i < 3 ? { pilot: pilot(4 + i) } : {})),
+  ...['D33', 'D34', 'D35', 'D36', 'D37', 'D38'].map((side, i) =>
     strike(side, 41_800 + i * 900, { mission: 'Air combat training', stores: '2 training rounds', pilot: i < 2 ? pilot(7 + i) : undefined }),
   ),
-  ...['301', '302', '303'].map((side, i) => ({
+  ...['G43', 'G44', 'G45'].map((side, i) => ({
     side,
     mission: 'Close air support training',
     grossWeightLb: 25_800 + i * 600,
@@ -140,15 +140,15 @@ const daySorties: DemoSortie[] = [
     stores: '2 rocket pods',
     pilot: i === 0 ? pilot(9) : undefined,
   })),
-  { side: '602', mission: 'Airborne early warning', grossWeightLb: 51_900, fuelLb: 11_000, earlyWarning: true, spare: true },
-  strike('109', 44_200, { spare: true, mission: 'Spare' }),
+  { side: 'L48', mission: 'Airborne early warning', grossWeightLb: 51_900, fuelLb: 11_000, earlyWarning: true, spare: true },
+  strike('C29', 44_200, { spare: true, mission: 'Spare' }),
 ];
 
 const dayLanes: [number, string[]][] = [
-  [1, ['601', '101']],
-  [2, ['108', '201']],
-  [3, ['102', '202']],
-  [4, ['301', '103']],
+  [1, ['L47', 'C21']],
+  [2, ['C28', 'D33']],
+  [3, ['C22', 'D34']],
+  [4, ['G43', 'C23']],
 ];
 
 async function planDayCycle(deck: DemoDeck, shipId: number, planned: Date): Promise<void> {
@@ -167,11 +167,11 @@ async function planDayCycle(deck: DemoDeck, shipId: number, planned: Date): Prom
 }
 
 const nightSorties: DemoSortie[] = [
-  { side: '603', mission: 'Airborne early warning', grossWeightLb: 52_000, fuelLb: 11_000, earlyWarning: true, pilot: pilot(2) },
-  { side: '111', mission: 'Recovery tanker', grossWeightLb: 49_500, fuelLb: 15_000, stores: 'Refuelling store', tanker: true, pilot: pilot(3) },
-  ...['112', '105', '106'].map((side, i) => strike(side, 43_000 + i * 800, { mission: 'Night strike training', pilot: pilot(4 + i) })),
-  ...['207', '208', '209', '210'].map((side, i) => strike(side, 42_000 + i * 600, { mission: 'Night intercept training', stores: '2 training rounds' })),
-  { side: '304', mission: 'Night close air support', grossWeightLb: 26_300, fuelLb: 7_600, stores: '2 rocket pods' },
+  { side: 'L49', mission: 'Airborne early warning', grossWeightLb: 52_000, fuelLb: 11_000, earlyWarning: true, pilot: pilot(2) },
+  { side: 'C31', mission: 'Recovery tanker', grossWeightLb: 49_500, fuelLb: 15_000, stores: 'Refuelling store', tanker: true, pilot: pilot(3) },
+  ...['C32', 'C25', 'C26'].map((side, i) => strike(side, 43_000 + i * 800, { mission: 'Night strike training', pilot: pilot(4 + i) })),
+  ...['D39', 'D40', 'D41', 'D42'].map((side, i) => strike(side, 42_000 + i * 600, { mission: 'Night intercept training', stores: '2 training rounds' })),
+  { side: 'G46', mission: 'Night close air support', grossWeightLb: 26_300, fuelLb: 7_600, stores: '2 rocket pods' },
 ];
 
 async function planNightCycle(deck: DemoDeck, shipId: number, planned: Date): Promise<void> {

@@ -1,20 +1,23 @@
 import type { DeckSpot, LaunchTableRow, Role, ShipProfile, TrimBand } from '@catline/contracts';
 
 // The invented demo scenario: a fictional training carrier, its squadrons and aircraft types.
-// Every name and number here is made up for the demo; none is real launch data.
+// Every name and number here is made up for the demo; none is real launch data. The hull code, the
+// type designations and the side numbers follow schemes of our own, not any service's, and the
+// departures are the invented ship's own procedures, not published ones.
+// demo-names.spec.ts checks these names against real ones.
 
 export const DEMO_PASSWORD = 'catline-demo';
 
 export const demoShip = {
-  name: 'Halcyon Reach',
-  hullCode: 'CVT-9',
+  name: 'Brindlemark',
+  hullCode: 'DKT 3',
   pairGapS: 10,
   profile: {
     clearingTurnDeg: { bow: 10, waist: -10 },
     departures: {
-      I: 'After the clearing turn, parallel the base recovery course at 500 ft until 7 nm, then climb unrestricted in visual conditions.',
-      II: 'Straight ahead to 7 nm at 500 ft, then climb on the assigned departure radial under departure control.',
-      III: 'Straight ahead, climb to 1,000 ft; at 7 nm turn to the assigned departure radial under positive control.',
+      I: 'Brindlemark house departure, Case I (invented for the demo): after the clearing turn hold 800 ft to the Lantern gate, 5 nm out on the launch side of the bow; from the gate climb on your own to the briefed block, clear of the ship’s 3 nm ring.',
+      II: 'Brindlemark house departure, Case II (invented for the demo): after the clearing turn hold 800 ft on the ship’s heading to 5 nm, call "gate" to the ship’s departure desk, then climb on the heading the desk gives to the briefed block.',
+      III: 'Brindlemark house departure, Case III (invented for the demo): no turn off the catapult; climb at once to 1,500 ft on the ship’s heading; at 4 nm take the heading the departure desk gives, climb to the briefed block and report level.',
     },
   } satisfies ShipProfile,
 };
@@ -35,9 +38,9 @@ export const demoDeckSpots: DeckSpot[] = [
 ];
 
 export const demoSquadrons = [
-  { code: 'TDC', name: 'Tidecallers', email: 'tidecallers@catline.example' },
-  { code: 'BRH', name: 'Brass Herons', email: 'brass-herons@catline.example' },
-  { code: 'NJR', name: 'Nightjars', email: 'nightjars@catline.example' },
+  { code: 'CWR', name: 'Cinderwrights', email: 'cinderwrights@catline.example' },
+  { code: 'DFM', name: 'Driftmenders', email: 'driftmenders@catline.example' },
+  { code: 'GSB', name: 'Gorsebinders', email: 'gorsebinders@catline.example' },
   { code: 'LNB', name: 'Lanternbearers', email: 'lanternbearers@catline.example' },
 ];
 
@@ -49,8 +52,8 @@ const strikeTrim: TrimBand[] = [
 
 export const demoAircraftTypes = [
   {
-    designation: 'KS-7',
-    name: 'Kestrin strike fighter',
+    designation: 'WKD-41',
+    name: 'Wickerbolt strike jet',
     maxGrossWeightLb: 51_000,
     crosswindLimitKt: 15,
     thrustLbf: 26_000,
@@ -65,8 +68,8 @@ export const demoAircraftTypes = [
     ] satisfies LaunchTableRow[],
   },
   {
-    designation: 'LT-5',
-    name: 'Larkspur light attack',
+    designation: 'MSD-26',
+    name: 'Mistlewing light attack',
     maxGrossWeightLb: 31_000,
     crosswindLimitKt: 12,
     thrustLbf: 17_500,
@@ -83,8 +86,8 @@ export const demoAircraftTypes = [
     ],
   },
   {
-    designation: 'RV-3',
-    name: 'Vireo early warning',
+    designation: 'FGD-63',
+    name: 'Farglass early warning',
     maxGrossWeightLb: 56_000,
     crosswindLimitKt: 20,
     thrustLbf: 11_000,
@@ -100,19 +103,23 @@ export const demoAircraftTypes = [
 ];
 
 const spots = demoDeckSpots.map((spot) => spot.name);
-const fleetOf = (first: number, count: number, designation: string, squadron: string, spotOffset: number) =>
+/**
+ * The demo's own side numbers: the squadron's letter, then the airframe's number in the air wing,
+ * counted on from squadron to squadron.
+ */
+const fleetOf = (letter: string, first: number, count: number, designation: string, squadron: string, spotOffset: number) =>
   Array.from({ length: count }, (_, i) => ({
-    sideNumber: String(first + i),
+    sideNumber: `${letter}${first + i}`,
     designation,
     squadron,
     parkedSpot: spots[(spotOffset + i) % spots.length],
   }));
 
 export const demoAircraft = [
-  ...fleetOf(101, 12, 'KS-7', 'TDC', 0),
-  ...fleetOf(201, 10, 'KS-7', 'BRH', 5),
-  ...fleetOf(301, 4, 'LT-5', 'NJR', 9),
-  ...fleetOf(601, 3, 'RV-3', 'LNB', 12),
+  ...fleetOf('C', 21, 12, 'WKD-41', 'CWR', 0),
+  ...fleetOf('D', 33, 10, 'WKD-41', 'DFM', 5),
+  ...fleetOf('G', 43, 4, 'MSD-26', 'GSB', 9),
+  ...fleetOf('L', 47, 3, 'FGD-63', 'LNB', 12),
 ];
 
 interface DemoPerson {
@@ -124,22 +131,22 @@ interface DemoPerson {
 }
 
 export const demoPeople: DemoPerson[] = [
-  { email: 'admin@catline.example', name: 'Ada Marlowe', role: 'admin' },
-  { email: 'airops@catline.example', name: 'Priya Vennard', role: 'air_operations' },
-  { email: 'handler@catline.example', name: 'Tomas Achterberg', role: 'handler' },
+  { email: 'admin@catline.example', name: 'Ada Tollingrave', role: 'admin' },
+  { email: 'airops@catline.example', name: 'Priya Quennevar', role: 'air_operations' },
+  { email: 'handler@catline.example', name: 'Tomas Ebberhold', role: 'handler' },
   ...[1, 2, 3, 4].map((n) => ({
     email: `cat${n}@catline.example`,
-    name: ['Lia Okonkwo', 'Sam Falkner', 'Rui Tavares', 'Hanne Lindqvist'][n - 1],
+    name: ['Lia Corrimand', 'Sam Dellavint', 'Ines Ashwicke', 'Hanne Brenlowe'][n - 1],
     role: 'catapult_officer' as const,
     catapultNumber: n,
   })),
-  { email: 'pilot@catline.example', name: 'Kit Rowan', role: 'pilot', squadron: 'TDC' },
-  ...['Jo Abernathy', 'Mika Sorensen', 'Dev Aranda', 'Noor Halloran', 'Ezra Quill', 'Tess Varga', 'Ravi Osei', 'Lou Brandt']
+  { email: 'pilot@catline.example', name: 'Kit Marrowby', role: 'pilot', squadron: 'CWR' },
+  ...['Jo Fettleworth', 'Mika Grennadine', 'Dev Hollowmere', 'Noor Inchwhistle', 'Ezra Jessamont', 'Tess Kilvarren', 'Ravi Lowenthorpe', 'Lou Nimblethorn']
     .map((name, i) => ({
       email: `pilot${i + 2}@catline.example`,
       name,
       role: 'pilot' as const,
       squadron: demoSquadrons[i % demoSquadrons.length].code,
     })),
-  { email: 'observer@catline.example', name: 'Oren Castell', role: 'observer' },
+  { email: 'observer@catline.example', name: 'Oren Pellicott', role: 'observer' },
 ];

@@ -19,7 +19,7 @@ export class CreateSquadronDto implements CreateSquadronRequest {
   @MaxLength(NAME_MAX_LENGTH)
   name: string;
 
-  @ApiProperty({ example: 'TDC' })
+  @ApiProperty({ example: 'CWR' })
   @Trim()
   @IsString()
   @Matches(SQUADRON_CODE_PATTERN, { message: `code must be 1 to ${SQUADRON_CODE_MAX_LENGTH} letters, digits or dashes` })

@@ -85,18 +85,18 @@ function lane(catapultId: number, number: number, slotIds: number[], extra: Part
   };
 }
 
-// Cat 1 (id 11) holds 101 then 102; cat 2 (id 12) holds 201; the pool holds 110 and 300 by side number.
+// Cat 1 (id 11) holds C21 then C22; cat 2 (id 12) holds D33; the pool holds C30 and G43 by side number.
 function board(): LineupSnapshot {
   return {
     cycle,
     lanes: [lane(11, 1, [1, 2]), lane(12, 2, [3])],
     pool: [5, 4],
     slots: [
-      slot(1, '101', { catapultId: 11, position: 0 }),
-      slot(2, '102', { catapultId: 11, position: 1 }),
-      slot(3, '201', { catapultId: 12, position: 0 }),
-      slot(4, '300', null),
-      slot(5, '110', null),
+      slot(1, 'C21', { catapultId: 11, position: 0 }),
+      slot(2, 'C22', { catapultId: 11, position: 1 }),
+      slot(3, 'D33', { catapultId: 12, position: 0 }),
+      slot(4, 'G43', null),
+      slot(5, 'C30', null),
     ],
     lastLaunchAt: null,
     version: 12,
@@ -133,7 +133,7 @@ describe('moveSlotLocally', () => {
 
   it('returns a slot to the pool, kept in side-number order with numbers compared as numbers', () => {
     const snapshot = board();
-    snapshot.slots[1] = { ...snapshot.slots[1], sideNumber: '99' };
+    snapshot.slots[1] = { ...snapshot.slots[1], sideNumber: 'C9' };
     const moved = moveSlotLocally(snapshot, move(2, null, 0));
     expect(moved.pool).toEqual([2, 5, 4]);
     expect(placeOf(moved, 2)).toEqual({ catapultId: null, position: null });
@@ -164,8 +164,8 @@ describe('the board model', () => {
   });
 
   it('lets only planned aircraft move', () => {
-    expect(isMovable(slot(1, '101', null))).toBe(true);
-    expect(isMovable(slot(1, '101', null, { status: 'taxiing' }))).toBe(false);
+    expect(isMovable(slot(1, 'C21', null))).toBe(true);
+    expect(isMovable(slot(1, 'C21', null, { status: 'taxiing' }))).toBe(false);
   });
 });
 
@@ -206,10 +206,10 @@ describe('lineupWarnings', () => {
       {
         kind: 'missed_window',
         key: 'window-1',
-        text: '101 misses the launch window (projected 10:25, window ends 10:20).',
+        text: 'C21 misses the launch window (projected 10:25, window ends 10:20).',
       },
-      { kind: 'no_go', key: 'nogo-2', text: '102 on cat 1 is no-go: End speed is 4 kt short.' },
-      { kind: 'weight_not_agreed', key: 'weights', text: 'Gross weight not yet agreed for 101.' },
+      { kind: 'no_go', key: 'nogo-2', text: 'C22 on cat 1 is no-go: End speed is 4 kt short.' },
+      { kind: 'weight_not_agreed', key: 'weights', text: 'Gross weight not yet agreed for C21.' },
     ]);
   });
 

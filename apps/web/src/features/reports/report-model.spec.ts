@@ -143,18 +143,18 @@ describe('durations for people', () => {
 
 describe('the timeline', () => {
   const cat1 = catapult(1, [
-    launch(1, '101', 1, '2026-12-02T10:00:00.000Z', '2026-12-02T10:00:12.000Z', 12),
-    launch(2, '102', 1, '2026-12-02T10:01:00.000Z', '2026-12-02T10:00:58.000Z', -2),
-    launch(3, '103', 1, '2026-12-02T10:02:00.000Z', null, null),
+    launch(1, 'C21', 1, '2026-12-02T10:00:00.000Z', '2026-12-02T10:00:12.000Z', 12),
+    launch(2, 'C22', 1, '2026-12-02T10:01:00.000Z', '2026-12-02T10:00:58.000Z', -2),
+    launch(3, 'C23', 1, '2026-12-02T10:02:00.000Z', null, null),
   ]);
-  const cat2 = catapult(2, [launch(4, '201', 2, null, '2026-12-02T10:03:00.000Z', null)]);
+  const cat2 = catapult(2, [launch(4, 'D33', 2, null, '2026-12-02T10:03:00.000Z', null)]);
 
   it('marks planned and actual launches with a label each', () => {
     const { planned, actual } = timelinePoints(report([cat1, cat2]));
     expect(planned.map((point) => point.label)).toEqual([
-      '101 planned 10:00:00 on cat 1',
-      '102 planned 10:01:00 on cat 1',
-      '103 planned 10:02:00 on cat 1',
+      'C21 planned 10:00:00 on cat 1',
+      'C22 planned 10:01:00 on cat 1',
+      'C23 planned 10:02:00 on cat 1',
     ]);
     expect(actual.map((point) => [point.slotId, point.time])).toEqual([
       [1, Date.parse('2026-12-02T10:00:12.000Z')],

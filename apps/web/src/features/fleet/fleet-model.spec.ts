@@ -3,8 +3,8 @@ import { aircraftSchema, squadronSchema } from './fleet-model.js';
 
 describe('a new aircraft', () => {
   it('hands on the create request with ids as numbers', () => {
-    expect(aircraftSchema.parse({ sideNumber: ' 101 ', typeId: '3', squadronId: '2', parkedSpot: 'bow-1' })).toEqual({
-      sideNumber: '101',
+    expect(aircraftSchema.parse({ sideNumber: ' C21 ', typeId: '3', squadronId: '2', parkedSpot: 'bow-1' })).toEqual({
+      sideNumber: 'C21',
       typeId: 3,
       squadronId: 2,
       parkedSpot: 'bow-1',

@@ -8,26 +8,26 @@ describe('readCsvTable on what toCsv writes', () => {
   it('reads back cells with commas, quotes and line breaks, on the line where each record starts', () => {
     // RFC 4180 §2.6 and §2.7: such fields are quoted, inner quotes doubled; the reader undoes both.
     const text = toCsv(LAYOUT.columns, [
-      ['101', '2 tanks, 4 bombs'],
-      ['102', 'pod "A"'],
-      ['103', 'two\nlines'],
-      ['104', 'none'],
+      ['C21', '2 tanks, 4 bombs'],
+      ['C22', 'pod "A"'],
+      ['C23', 'two\nlines'],
+      ['C24', 'none'],
     ]);
     expect(readCsvTable(text, LAYOUT)).toEqual({
       ok: true,
       problems: [],
       records: [
-        { line: 2, cells: { side_number: '101', stores: '2 tanks, 4 bombs' } },
-        { line: 3, cells: { side_number: '102', stores: 'pod "A"' } },
-        { line: 4, cells: { side_number: '103', stores: 'two\nlines' } },
-        { line: 6, cells: { side_number: '104', stores: 'none' } },
+        { line: 2, cells: { side_number: 'C21', stores: '2 tanks, 4 bombs' } },
+        { line: 3, cells: { side_number: 'C22', stores: 'pod "A"' } },
+        { line: 4, cells: { side_number: 'C23', stores: 'two\nlines' } },
+        { line: 6, cells: { side_number: 'C24', stores: 'none' } },
       ],
     });
   });
 
   it('reads a cell a spreadsheet would run as a formula as the defused text that was written', () => {
     // OWASP "CSV Injection": the writer prefixes an apostrophe; nothing strips it on the way back.
-    const text = toCsv(LAYOUT.columns, [['101', '=HYPERLINK("http://127.0.0.1")']]);
+    const text = toCsv(LAYOUT.columns, [['C21', '=HYPERLINK("http://127.0.0.1")']]);
     expect(text).toContain(`"'=HYPERLINK(""http://127.0.0.1"")"`);
     expect(readCsvTable(text, LAYOUT)).toMatchObject({
       ok: true,

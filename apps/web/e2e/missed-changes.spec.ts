@@ -19,7 +19,7 @@ async function shownLineup(page: Page, catapultNumbers: number[]) {
 test('a page that gets one change late and misses another still ends with the server’s lineup, through a rejoin', async ({
   browser,
 }) => {
-  const sides = ['105', '106', '201', '202'];
+  const sides = ['C25', 'C26', 'D33', 'D34'];
   const { cycle, slotIds } = await planCycle({ aircraft: sides.map((side) => ({ side, grossWeightLb: 42_000 })) });
 
   // This page's broadcasts go wrong on the way: the 1st arrives only after the 2nd, the 3rd never arrives.
@@ -58,8 +58,8 @@ test('a page that gets one change late and misses another still ends with the se
     lanes: server.lanes.map((serverLane) => serverLane.slotIds.map((id) => sideOf.get(id))),
     pool: server.pool.map((id) => sideOf.get(id)).sort(),
   };
-  expect(expected.lanes[catapults.indexOf(1)]).toEqual(['105', '201']);
-  expect(expected.lanes[catapults.indexOf(2)]).toEqual(['106', '202']);
+  expect(expected.lanes[catapults.indexOf(1)]).toEqual(['C25', 'D33']);
+  expect(expected.lanes[catapults.indexOf(2)]).toEqual(['C26', 'D34']);
   await expect.poll(() => shownLineup(page, catapults), { timeout: 10_000 }).toEqual(expected);
   expect(fate).toMatchObject({ seen: 4, dropped: 1 });
   expect(lineupReads).toBe(0);

@@ -20,9 +20,9 @@ test('a live screen says when it is offline and catches up when the network is b
 });
 
 test('while the network is gone the pilot sees stale figures marked, a stopped countdown and no confirm', async ({ browser }) => {
-  const { cycle, slotIds } = await planCycle({ aircraft: [{ side: '206', grossWeightLb: 42_000, pilot: 'pilot3' }] });
+  const { cycle, slotIds } = await planCycle({ aircraft: [{ side: 'D38', grossWeightLb: 42_000, pilot: 'pilot3' }] });
   const handler = await apiAs('handler');
-  await placeInLane(handler, cycle.id, slotIds.get('206')!, 1);
+  await placeInLane(handler, cycle.id, slotIds.get('D38')!, 1);
   await handler.dispose();
   const pilot = await openAs(browser, 'pilot3', `/my-launch?cycle=${cycle.id}`);
   const figures = pilot.getByTestId('live-figures');

@@ -29,7 +29,7 @@ describe('auth', () => {
 
   const login = (email: string, password: string) => request(url).post('/api/auth/login').send({ email, password });
   const me = (token: string) => request(url).get('/api/auth/me').set(bearer(token));
-  const refresh = (cookie: string) => request(url).post('/api/auth/refresh').set('Cookie', cookie);
+  const refresh = (cookie: string) => request(url).post('/api/auth/refresh').set('Cookie', cookie).set('X-Catline-Refresh', '1');
 
   describe('login', () => {
     it('returns a 15-minute access token, the person and an httpOnly refresh cookie for the auth routes', async () => {
@@ -157,7 +157,7 @@ describe('auth', () => {
     });
 
     it('refuses a refresh without a cookie or with an unknown token', async () => {
-      const none = await request(url).post('/api/auth/refresh');
+      const none = await request(url).post('/api/auth/refresh').set('X-Catline-Refresh', '1');
       expect(none.status).toBe(401);
       expect(none.body).toEqual({ statusCode: 401, code: 'session_ended', message: 'Your session has ended. Sign in again.' });
       expect((await refresh('catline_refresh=made-up')).status).toBe(401);

@@ -1,5 +1,11 @@
 import type { Role } from './roles.js';
 
+/**
+ * The header every POST /auth/refresh must carry: a page of another site cannot add it without a CORS
+ * preflight, which the API refuses, so it cannot spend the refresh cookie.
+ */
+export const REFRESH_HEADER = 'X-Catline-Refresh';
+
 export interface LoginRequest {
   email: string;
   password: string;

@@ -64,6 +64,7 @@ export const AUTH_REFUSAL_CODES = [
   'wrong_password',
   'password_unchanged',
   'too_many_attempts',
+  'refresh_refused',
 ] as const;
 export type AuthRefusalCode = (typeof AUTH_REFUSAL_CODES)[number];
 

@@ -1,10 +1,13 @@
-import type { SessionResponse, SessionUser } from '@catline/contracts';
+import { REFRESH_HEADER, type SessionResponse, type SessionUser } from '@catline/contracts';
 import { Body, Controller, Get, Header, HttpCode, HttpStatus, Post, Req, Res } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import type { Request, Response } from 'express';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { Public } from '../common/decorators/public.decorator.js';
+import { type Environment, webOrigins } from '../config/environment.js';
+import { AuthException } from './auth.exception.js';
 import { AuthService, type SignedIn } from './auth.service.js';
 import { ChangePasswordDto } from './dto/change-password.dto.js';
 import { LoginDto } from './dto/login.dto.js';
@@ -17,7 +20,14 @@ const NO_STORE = 'no-store';
 @ApiTags('auth')
 @Controller('auth')
 export class AuthController {
-  constructor(private readonly auth: AuthService) {}
+  private readonly origins: string[];
+
+  constructor(
+    private readonly auth: AuthService,
+    config: ConfigService<Environment, true>,
+  ) {
+    this.origins = webOrigins({ WEB_ORIGINS: config.get('WEB_ORIGINS') });
+  }
 
   @Public()
   @Post('login')
@@ -36,6 +46,10 @@ export class AuthController {
   @HttpCode(HttpStatus.OK)
   @Header('Cache-Control', NO_STORE)
   async refresh(@Req() request: Request, @Res({ passthrough: true }) response: Response): Promise<SessionResponse> {
+    const origin = request.headers.origin;
+    if (request.get(REFRESH_HEADER) !== '1' || (origin !== undefined && !this.origins.includes(origin))) {
+      throw new AuthException('refresh_refused', `A session is renewed only by the Catline page itself (origin and ${REFRESH_HEADER} header).`);
+    }
     try {
       return this.answer(await this.auth.refresh(readRefreshCookie(request)), request, response);
     } catch (error) {

@@ -12,6 +12,7 @@ const STATUS: Record<AuthRefusalCode, HttpStatus> = {
   wrong_password: HttpStatus.BAD_REQUEST,
   password_unchanged: HttpStatus.BAD_REQUEST,
   too_many_attempts: HttpStatus.TOO_MANY_REQUESTS,
+  refresh_refused: HttpStatus.FORBIDDEN,
 };
 
 /** Every refusal of sign-in, session or role checks. */

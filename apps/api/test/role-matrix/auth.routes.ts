@@ -13,7 +13,7 @@ export const authRoutes: MatrixRoute[] = [
     allowed: 'public',
     example: async ({ baseUrl }) => {
       const login = await request(baseUrl).post('/api/auth/login').send(OBSERVER);
-      return { headers: { Cookie: refreshCookie(login) } };
+      return { headers: { Cookie: refreshCookie(login), 'X-Catline-Refresh': '1' } };
     },
   },
   { method: 'POST', path: '/api/auth/logout', allowed: ROLES },

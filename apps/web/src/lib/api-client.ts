@@ -1,4 +1,4 @@
-import type { SessionResponse } from '@catline/contracts';
+import { REFRESH_HEADER, type SessionResponse } from '@catline/contracts';
 import { ApiRequestError, toApiRequestError, unreachableServer } from './api-error.js';
 import { endSession, getAccessToken, getSession, startSession } from './session-store.js';
 
@@ -13,8 +13,8 @@ export interface RequestOptions {
   signal?: AbortSignal;
 }
 
-async function send(path: string, { method = 'GET', body, signal }: RequestOptions, token: string | null) {
-  const headers: Record<string, string> = { Accept: 'application/json' };
+async function send(path: string, { method = 'GET', body, signal }: RequestOptions, token: string | null, extraHeaders: Record<string, string> = {}) {
+  const headers: Record<string, string> = { Accept: 'application/json', ...extraHeaders };
   const form = body instanceof FormData;
   // The browser writes a multipart body's Content-Type itself, with the boundary.
   if (body !== undefined && !form) headers['Content-Type'] = 'application/json';
@@ -46,7 +46,7 @@ let refreshTimer: ReturnType<typeof setTimeout> | undefined;
 export function refreshSession(): Promise<SessionResponse | null> {
   refreshing ??= (async () => {
     try {
-      const response = await send('/auth/refresh', { method: 'POST' }, null);
+      const response = await send('/auth/refresh', { method: 'POST' }, null, { [REFRESH_HEADER]: '1' });
       if (!response.ok) return null;
       const session = (await response.json()) as SessionResponse;
       beginSession(session);

@@ -69,6 +69,7 @@ const REASONS: Record<RefusalCode, string> = {
   wrong_password: 'the current password is wrong',
   password_unchanged: 'the new password is the old one',
   too_many_attempts: 'too many attempts',
+  refresh_refused: 'the session was not renewed',
   // users
   user_not_found: 'person not found',
   email_taken: 'the e-mail address is taken',

@@ -13,7 +13,16 @@ const features = existsSync(webFeatures) ? readdirSync(webFeatures) : [];
 
 export default tseslint.config(
   {
-    ignores: ['**/dist/', '**/node_modules/', '.data/', '.tools/', '**/coverage/', '**/test-results/', '**/playwright-report/', 'bench-results/'],
+    ignores: [
+      '**/dist/',
+      '**/node_modules/',
+      '.data/',
+      '.tools/',
+      '**/coverage/',
+      '**/test-results/',
+      '**/playwright-report/',
+      'bench-results/',
+    ],
   },
   js.configs.recommended,
   ...tseslint.configs.recommended,
@@ -43,7 +52,10 @@ export default tseslint.config(
     // The shared packages stay framework-free so server and browser can both use them.
     files: ['packages/*/src/**/*.ts'],
     rules: {
-      'no-restricted-imports': ['error', { patterns: ['@nestjs/*', 'react', 'react-*', 'typeorm', 'socket.io*', '@chakra-ui/*'] }],
+      'no-restricted-imports': [
+        'error',
+        { patterns: ['@nestjs/*', 'react', 'react-*', 'typeorm', 'socket.io*', '@chakra-ui/*'] },
+      ],
     },
   },
   {

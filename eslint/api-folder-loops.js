@@ -27,7 +27,8 @@ function importedFolder(file, specifier) {
   const target = path.resolve(path.dirname(file), specifier);
   const from = folderOf(file);
   const to = folderOf(target);
-  if (from === null || to === null || from === to || WIRING.has(from) || sharesEntities(path.relative(SRC, target))) return null;
+  if (from === null || to === null || from === to || WIRING.has(from) || sharesEntities(path.relative(SRC, target)))
+    return null;
   return to;
 }
 
@@ -66,7 +67,8 @@ function pathBetween(start, goal) {
     const folder = queue.shift();
     if (folder === goal) {
       const steps = [];
-      for (let at = goal; cameFrom.get(at) !== null; at = cameFrom.get(at)) steps.unshift(`${cameFrom.get(at)} -> ${at} (${edges.get(cameFrom.get(at)).get(at)})`);
+      for (let at = goal; cameFrom.get(at) !== null; at = cameFrom.get(at))
+        steps.unshift(`${cameFrom.get(at)} -> ${at} (${edges.get(cameFrom.get(at)).get(at)})`);
       return steps;
     }
     for (const next of edges.get(folder)?.keys() ?? []) {
@@ -101,6 +103,11 @@ export const apiFolderLoops = {
         });
       }
     };
-    return { ImportDeclaration: check, ExportNamedDeclaration: check, ExportAllDeclaration: check, ImportExpression: check };
+    return {
+      ImportDeclaration: check,
+      ExportNamedDeclaration: check,
+      ExportAllDeclaration: check,
+      ImportExpression: check,
+    };
   },
 };

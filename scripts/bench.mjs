@@ -54,32 +54,63 @@ const servers = ports.map((p) =>
     stdio: ['ignore', 'ignore', 'inherit'],
   }),
 );
-const results = { at: new Date().toISOString(), machine: { cpus: (await import('node:os')).cpus().length, node: process.version }, apiProcesses: ports.length };
+const results = {
+  at: new Date().toISOString(),
+  machine: { cpus: (await import('node:os')).cpus().length, node: process.version },
+  apiProcesses: ports.length,
+};
 try {
   for (const each of urls) {
-    for (let waited = 0; !(await fetch(`${each}/api/health`).then((r) => r.ok, () => false)); waited += 250) {
+    for (
+      let waited = 0;
+      !(await fetch(`${each}/api/health`).then(
+        (r) => r.ok,
+        () => false,
+      ));
+      waited += 250
+    ) {
       if (waited > 30_000) throw new Error(`the API at ${each} did not start`);
       await sleep(250);
     }
   }
   const cycleId = await createBenchCycle(url);
   const node = (script, options) => {
-    const result = spawnSync('node', [script, JSON.stringify(options)], { cwd: root, encoding: 'utf8', stdio: ['ignore', 'pipe', 'inherit'], maxBuffer: 1 << 26 });
+    const result = spawnSync('node', [script, JSON.stringify(options)], {
+      cwd: root,
+      encoding: 'utf8',
+      stdio: ['ignore', 'pipe', 'inherit'],
+      maxBuffer: 1 << 26,
+    });
     if (result.status !== 0) throw new Error(`${script} failed`);
     return JSON.parse(result.stdout.trim().split('\n').pop());
   };
   if (parts.has('fanout')) {
     step('Fan-out latency (this takes a while: paced moves run at the given rate)');
     results.fanOut = node('apps/api/bench/fan-out.mjs', {
-      url, urls, origin: url, cycleId, barePort: port + 1,
-      clients: args.clients.split(',').map(Number), moves: Number(args.moves), perSecond: Number(args['per-second']),
+      url,
+      urls,
+      origin: url,
+      cycleId,
+      barePort: port + 1,
+      clients: args.clients.split(',').map(Number),
+      moves: Number(args.moves),
+      perSecond: Number(args['per-second']),
     });
   }
   if (parts.has('commit')) {
     step('Commit rate');
     results.commitRate = node('apps/api/bench/commit-rate.mjs', {
-      url, cycleId, handlers: [1, 4, 16], commands: Number(args.commands),
-      db: { host: env.DB_HOST, port: Number(env.DB_PORT), user: env.DB_USER, password: env.DB_PASSWORD, database: benchEnv.DB_NAME },
+      url,
+      cycleId,
+      handlers: [1, 4, 16],
+      commands: Number(args.commands),
+      db: {
+        host: env.DB_HOST,
+        port: Number(env.DB_PORT),
+        user: env.DB_USER,
+        password: env.DB_PASSWORD,
+        database: benchEnv.DB_NAME,
+      },
     });
   }
   if (parts.has('math')) {
@@ -108,21 +139,35 @@ function printTables({ fanOut, commitRate, computation, suggestionLoop, web, api
   if (fanOut) {
     const spread = apiProcesses > 1 ? `, clients spread over ${apiProcesses} API processes` : '';
     console.log(`\nFan-out latency, ms from sending the command to each client receiving the change${spread}`);
-    console.table(fanOut.flatMap((row) => ['paced', 'burst'].map((mode) => ({
-      clients: row.clients, mode,
-      'p50': row.catline[mode].p50, 'p95': row.catline[mode].p95, 'p99': row.catline[mode].p99, 'max': row.catline[mode].max,
-      'bare p50': row.bare[mode].p50, 'bare p99': row.bare[mode].p99,
-      'p50 ratio': row.ratio[`${mode}P50`], 'p99 ratio': row.ratio[`${mode}P99`],
-      missing: row.catline[mode].missing, 'out of order': row.catline[mode].outOfOrder, duplicates: row.catline[mode].duplicates,
-      'payload B': row.payloadBytes,
-    }))));
+    console.table(
+      fanOut.flatMap((row) =>
+        ['paced', 'burst'].map((mode) => ({
+          clients: row.clients,
+          mode,
+          p50: row.catline[mode].p50,
+          p95: row.catline[mode].p95,
+          p99: row.catline[mode].p99,
+          max: row.catline[mode].max,
+          'bare p50': row.bare[mode].p50,
+          'bare p99': row.bare[mode].p99,
+          'p50 ratio': row.ratio[`${mode}P50`],
+          'p99 ratio': row.ratio[`${mode}P99`],
+          missing: row.catline[mode].missing,
+          'out of order': row.catline[mode].outOfOrder,
+          duplicates: row.catline[mode].duplicates,
+          'payload B': row.payloadBytes,
+        })),
+      ),
+    );
   }
   if (commitRate) {
     console.log('\nCommit rate: lineup moves through the API against single-row mysql2 transactions');
     console.table(commitRate);
   }
   if (computation) {
-    console.log('\nComputation: projection and suggested lineup on 4 catapults (packages/launch-math/bench/plan-40.mjs)');
+    console.log(
+      '\nComputation: projection and suggested lineup on 4 catapults (packages/launch-math/bench/plan-40.mjs)',
+    );
     console.table(computation.rows);
   }
   if (suggestionLoop) {

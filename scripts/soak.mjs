@@ -30,9 +30,22 @@ function timed(name, command, args) {
 }
 
 timed('Build', pnpm, ['-r', 'build']);
-const jest = (config, ...patterns) => ['--filter', '@catline/api', 'exec', 'jest', '--config', config, '--runInBand', ...patterns];
+const jest = (config, ...patterns) => [
+  '--filter',
+  '@catline/api',
+  'exec',
+  'jest',
+  '--config',
+  config,
+  '--runInBand',
+  ...patterns,
+];
 try {
-  timed('Concurrent writers and bad input', pnpm, jest('test/jest-integration.config.js', 'concurrent-writers', 'bad-input'));
+  timed(
+    'Concurrent writers and bad input',
+    pnpm,
+    jest('test/jest-integration.config.js', 'concurrent-writers', 'bad-input'),
+  );
   timed('Crash, stop and database restart', pnpm, jest('test/reliability/jest-reliability.config.js'));
 } finally {
   console.log(`\nSoak durations:\n  ${timings.join('\n  ')}`);

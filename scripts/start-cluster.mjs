@@ -35,7 +35,12 @@ await proxy.listening;
 
 let stopped = false;
 async function answering(target) {
-  while (!(await fetch(`${target}/api/health`).then((response) => response.ok, () => false))) {
+  while (
+    !(await fetch(`${target}/api/health`).then(
+      (response) => response.ok,
+      () => false,
+    ))
+  ) {
     if (stopped) throw new Error(`The API at ${target} stopped before it answered`);
     await sleep(250);
   }
@@ -49,12 +54,17 @@ function stopAll() {
 // Ctrl-C reaches the API processes too (same process group); wait for their clean shutdown.
 process.on('SIGINT', () => proxy.close());
 process.on('SIGTERM', stopAll);
-void Promise.all(targets.map(answering)).then(() => {
-  printBanner(env.PORT);
-  console.log(`Two API processes (${API_PORTS.join(', ')}) behind the proxy on ${env.PORT}; Redis on 127.0.0.1:${REDIS_PORT}.`);
-  if (mail.inbox) console.log(`Mail the app sends is caught at ${mail.inbox}`);
-  console.log('');
-}, (error) => console.error(error.message));
+void Promise.all(targets.map(answering)).then(
+  () => {
+    printBanner(env.PORT);
+    console.log(
+      `Two API processes (${API_PORTS.join(', ')}) behind the proxy on ${env.PORT}; Redis on 127.0.0.1:${REDIS_PORT}.`,
+    );
+    if (mail.inbox) console.log(`Mail the app sends is caught at ${mail.inbox}`);
+    console.log('');
+  },
+  (error) => console.error(error.message),
+);
 
 const codes = await Promise.all(apis.map((api) => api.exited));
 stopped = true;

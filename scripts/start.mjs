@@ -25,7 +25,8 @@ process.on('SIGTERM', () => {
 child.once('spawn', () =>
   setTimeout(() => {
     printBanner(env.PORT);
-    if (mail.inbox) console.log(`Mail the app sends (invitations, password links, cycle summaries) is caught at ${mail.inbox}\n`);
+    if (mail.inbox)
+      console.log(`Mail the app sends (invitations, password links, cycle summaries) is caught at ${mail.inbox}\n`);
   }, 1500),
 );
 process.exitCode = await exited;

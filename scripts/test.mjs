@@ -26,7 +26,11 @@ function countsOf(file) {
     const { expected = 0, unexpected = 0, flaky = 0, skipped = 0 } = report.stats;
     return { passed: expected + flaky, failed: unexpected, skipped };
   }
-  return { passed: report.numPassedTests, failed: report.numFailedTests, skipped: report.numPendingTests + (report.numTodoTests ?? 0) };
+  return {
+    passed: report.numPassedTests,
+    failed: report.numFailedTests,
+    skipped: report.numPendingTests + (report.numTodoTests ?? 0),
+  };
 }
 
 /**
@@ -65,8 +69,16 @@ if (failures.length === 0) {
   stage('Lint', pnpm, ['lint']);
   for (const script of testScripts) {
     for (const pkg of workspacePackages().filter((p) => p.scripts[script])) {
-      const file = path.join(resultsDir, `${pkg.name.replace(/^@/, '').replace(/\W+/g, '-')}-${script.replace(':', '-')}.json`);
-      stage(`${pkg.name} ${script}`, pnpm, ['--filter', pkg.name, 'run', script, ...resultArgs(pkg.scripts[script], file)], file);
+      const file = path.join(
+        resultsDir,
+        `${pkg.name.replace(/^@/, '').replace(/\W+/g, '-')}-${script.replace(':', '-')}.json`,
+      );
+      stage(
+        `${pkg.name} ${script}`,
+        pnpm,
+        ['--filter', pkg.name, 'run', script, ...resultArgs(pkg.scripts[script], file)],
+        file,
+      );
     }
   }
 }

@@ -20,8 +20,7 @@ export function ensureDebianPackages(packages) {
   }
   step(`Installing Debian packages: ${missing.join(' ')}`);
   const env = { ...process.env, DEBIAN_FRONTEND: 'noninteractive' };
-  const aptGet = (...args) =>
-    isRoot ? run('apt-get', args, { env }) : run('sudo', ['apt-get', ...args], { env });
+  const aptGet = (...args) => (isRoot ? run('apt-get', args, { env }) : run('sudo', ['apt-get', ...args], { env }));
   aptGet('update', '-qq');
   aptGet('install', '-y', '-qq', '--no-install-recommends', ...missing);
 }

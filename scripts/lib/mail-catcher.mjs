@@ -36,12 +36,26 @@ export async function ensureMailCatcher(env) {
   step(`Starting the local mail catcher: SMTP on 127.0.0.1:${port}, caught mail at ${inbox}`);
   const folder = path.join(root, '.data/maildev');
   mkdirSync(folder, { recursive: true });
-  const args = ['--smtp', port, '--ip', '127.0.0.1', '--web', MAIL_INBOX_PORT, '--web-ip', '127.0.0.1', '--mail-directory', folder, '--silent'];
+  const args = [
+    '--smtp',
+    port,
+    '--ip',
+    '127.0.0.1',
+    '--web',
+    MAIL_INBOX_PORT,
+    '--web-ip',
+    '127.0.0.1',
+    '--mail-directory',
+    folder,
+    '--silent',
+  ];
   const child = spawn(process.execPath, [maildev, ...args.map(String)], { cwd: root, stdio: 'ignore' });
   for (let waited = 0; !(await listening(port)); waited += 200) {
     if (child.exitCode !== null || waited > 15_000) {
       child.kill();
-      console.warn('The mail catcher did not start; the app keeps its mail in the outbox until an SMTP server answers.');
+      console.warn(
+        'The mail catcher did not start; the app keeps its mail in the outbox until an SMTP server answers.',
+      );
       return { child: null, inbox: null };
     }
     await sleep(200);

@@ -14,7 +14,11 @@ export interface AppDatabaseUser {
 
 export function mariadbServer(name?: string): MariaDBServer;
 export function isMariaDBRunning(server?: MariaDBServer): boolean;
-export function startMariaDB(server: MariaDBServer, port: number | string, options?: { extraArgs?: string[] }): Promise<void>;
+export function startMariaDB(
+  server: MariaDBServer,
+  port: number | string,
+  options?: { extraArgs?: string[] },
+): Promise<void>;
 export function sql(server: MariaDBServer, statements: string): void;
 export function queryValue(server: MariaDBServer, statement: string): string | null;
 export function grantAppUser(server: MariaDBServer, env: AppDatabaseUser): void;

@@ -56,25 +56,33 @@ export async function startMariaDB(server, port, { extraArgs = [] } = {}) {
   if (!existsSync(path.join(server.dataDir, 'mysql'))) {
     step(`Initialising a private MariaDB in ${path.relative(root, server.dataDir)}/`);
     mkdirSync(server.dataDir, { recursive: true });
-    run(binary('mariadb-install-db'), [
-      '--no-defaults',
-      ...(isRoot ? ['--user=root'] : []),
-      `--datadir=${server.dataDir}`,
-      '--auth-root-authentication-method=normal',
-      '--skip-test-db',
-    ], { stdio: ['ignore', 'ignore', 'inherit'] });
+    run(
+      binary('mariadb-install-db'),
+      [
+        '--no-defaults',
+        ...(isRoot ? ['--user=root'] : []),
+        `--datadir=${server.dataDir}`,
+        '--auth-root-authentication-method=normal',
+        '--skip-test-db',
+      ],
+      { stdio: ['ignore', 'ignore', 'inherit'] },
+    );
   }
   step(`Starting MariaDB on 127.0.0.1:${port}`);
-  const child = spawn(binary('mariadbd'), [
-    `--defaults-file=${configFile}`,
-    ...(isRoot ? ['--user=root'] : []),
-    `--datadir=${server.dataDir}`,
-    `--socket=${server.socket}`,
-    `--port=${port}`,
-    `--pid-file=${server.pidFile}`,
-    `--log-error=${server.logFile}`,
-    ...extraArgs,
-  ], { detached: true, stdio: 'ignore' });
+  const child = spawn(
+    binary('mariadbd'),
+    [
+      `--defaults-file=${configFile}`,
+      ...(isRoot ? ['--user=root'] : []),
+      `--datadir=${server.dataDir}`,
+      `--socket=${server.socket}`,
+      `--port=${port}`,
+      `--pid-file=${server.pidFile}`,
+      `--log-error=${server.logFile}`,
+      ...extraArgs,
+    ],
+    { detached: true, stdio: 'ignore' },
+  );
   child.unref();
   for (let waited = 0; !isMariaDBRunning(server); waited += 200) {
     if (waited > 30_000) throw new Error(`MariaDB did not start; see ${server.logFile}`);
@@ -87,14 +95,17 @@ export function grantAppUser(server, env) {
   const user = quote(env.DB_USER);
   const password = quote(env.DB_PASSWORD);
   // The app user owns every database named catline*, so tests can create fresh ones of their own.
-  sql(server, [
-    `CREATE DATABASE IF NOT EXISTS \`${env.DB_NAME}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci`,
-    ...['localhost', '127.0.0.1'].flatMap((host) => [
-      `CREATE USER IF NOT EXISTS ${user}@'${host}' IDENTIFIED BY ${password}`,
-      `ALTER USER ${user}@'${host}' IDENTIFIED BY ${password}`,
-      `GRANT ALL PRIVILEGES ON \`catline%\`.* TO ${user}@'${host}'`,
-    ]),
-  ].join(';\n'));
+  sql(
+    server,
+    [
+      `CREATE DATABASE IF NOT EXISTS \`${env.DB_NAME}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci`,
+      ...['localhost', '127.0.0.1'].flatMap((host) => [
+        `CREATE USER IF NOT EXISTS ${user}@'${host}' IDENTIFIED BY ${password}`,
+        `ALTER USER ${user}@'${host}' IDENTIFIED BY ${password}`,
+        `GRANT ALL PRIVILEGES ON \`catline%\`.* TO ${user}@'${host}'`,
+      ]),
+    ].join(';\n'),
+  );
 }
 
 /** A clean shutdown; waits until the server has stopped. */

@@ -24,14 +24,22 @@ export async function startRedis({ port, dir }) {
   step(`Starting Redis on 127.0.0.1:${port}`);
   mkdirSync(dir, { recursive: true });
   run('redis-server', [
-    '--port', String(port),
-    '--bind', '127.0.0.1',
-    '--daemonize', 'yes',
-    '--save', '',
-    '--appendonly', 'no',
-    '--dir', dir,
-    '--pidfile', path.join(dir, 'redis.pid'),
-    '--logfile', path.join(dir, 'redis.log'),
+    '--port',
+    String(port),
+    '--bind',
+    '127.0.0.1',
+    '--daemonize',
+    'yes',
+    '--save',
+    '',
+    '--appendonly',
+    'no',
+    '--dir',
+    dir,
+    '--pidfile',
+    path.join(dir, 'redis.pid'),
+    '--logfile',
+    path.join(dir, 'redis.log'),
   ]);
   for (let waited = 0; !ping(port); waited += 100) {
     if (waited > 10_000) throw new Error(`Redis did not start on port ${port}; see ${path.join(dir, 'redis.log')}`);

@@ -29,13 +29,20 @@ async function catlineRun(handlerCount, token) {
     }),
   );
   const seconds = (now() - started) / 1000;
-  return { handlers: handlerCount, ...counts, seconds: Math.round(seconds * 100) / 100, acceptedPerSecond: Math.round(counts.accepted / seconds) };
+  return {
+    handlers: handlerCount,
+    ...counts,
+    seconds: Math.round(seconds * 100) / 100,
+    acceptedPerSecond: Math.round(counts.accepted / seconds),
+  };
 }
 
 async function mysqlRun(concurrency, pool) {
   await pool.query('CREATE TABLE IF NOT EXISTS bench_counter (id INT PRIMARY KEY, n INT NOT NULL) ENGINE=InnoDB');
   await pool.query('DELETE FROM bench_counter');
-  await pool.query(`INSERT INTO bench_counter VALUES ${Array.from({ length: concurrency }, (_, i) => `(${i}, 0)`).join(',')}`);
+  await pool.query(
+    `INSERT INTO bench_counter VALUES ${Array.from({ length: concurrency }, (_, i) => `(${i}, 0)`).join(',')}`,
+  );
   const perWorker = Math.ceil(options.commands / concurrency);
   const started = now();
   await Promise.all(
@@ -53,7 +60,11 @@ async function mysqlRun(concurrency, pool) {
     }),
   );
   const seconds = (now() - started) / 1000;
-  return { transactions: perWorker * concurrency, seconds: Math.round(seconds * 100) / 100, perSecond: Math.round((perWorker * concurrency) / seconds) };
+  return {
+    transactions: perWorker * concurrency,
+    seconds: Math.round(seconds * 100) / 100,
+    perSecond: Math.round((perWorker * concurrency) / seconds),
+  };
 }
 
 const token = await signIn(options.url, 'handler@catline.example');
@@ -63,7 +74,11 @@ try {
   for (const handlers of options.handlers) {
     const catline = await catlineRun(handlers, token);
     const mysql = await mysqlRun(handlers, pool);
-    results.push({ ...catline, baselinePerSecond: mysql.perSecond, ratio: Math.round((catline.acceptedPerSecond / mysql.perSecond) * 100) / 100 });
+    results.push({
+      ...catline,
+      baselinePerSecond: mysql.perSecond,
+      ratio: Math.round((catline.acceptedPerSecond / mysql.perSecond) * 100) / 100,
+    });
     console.error(`commit rate with ${handlers} handlers done`);
   }
 } finally {

@@ -26,7 +26,13 @@ async function openClients(urls, token, total) {
   const share = Math.ceil(total / LOAD_PROCESSES);
   const loads = Array.from({ length: LOAD_PROCESSES }, (_, i) =>
     fork(here('./fan-out-clients.mjs'), [
-      JSON.stringify({ urls, token, origin: options.origin, cycleId: options.cycleId, count: Math.min(share, total - i * share) }),
+      JSON.stringify({
+        urls,
+        token,
+        origin: options.origin,
+        cycleId: options.cycleId,
+        count: Math.min(share, total - i * share),
+      }),
     ]),
   );
   await Promise.all(loads.map((load) => ask(load, { cmd: 'connect' })));
@@ -107,7 +113,8 @@ try {
     const catline = await measureCatline(clients, handlerToken, observerToken);
     const baseline = await measureBare(clients, bareUrl, catline.payloads);
     const payloadBytes = Math.round(
-      catline.payloads.paced.reduce((sum, change) => sum + JSON.stringify(change).length, 0) / Math.max(1, catline.payloads.paced.length),
+      catline.payloads.paced.reduce((sum, change) => sum + JSON.stringify(change).length, 0) /
+        Math.max(1, catline.payloads.paced.length),
     );
     const ratio = (a, b) => (a && b ? Math.round((a / b) * 100) / 100 : null);
     results.push({

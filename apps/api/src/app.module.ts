@@ -38,9 +38,7 @@ import { webAppBuilt, webDist } from './web-app/web-app.js';
         retryAttempts: 3,
       }),
     }),
-    ...(webAppBuilt()
-      ? [ServeStaticModule.forRoot({ rootPath: webDist, exclude: ['/api/{*path}'] })]
-      : []),
+    ...(webAppBuilt() ? [ServeStaticModule.forRoot({ rootPath: webDist, exclude: ['/api/{*path}'] })] : []),
     HealthModule,
     AuthModule,
     UsersModule,

@@ -26,13 +26,18 @@ function securityHeaders(https: boolean): Parameters<typeof helmet>[0] {
 export function configureApp(app: INestApplication): void {
   const config = app.get<ConfigService<Environment, true>>(ConfigService);
   app.setGlobalPrefix('api');
-  app.getHttpAdapter().getInstance().set('trust proxy', trustedProxies({ TRUST_PROXY: config.get('TRUST_PROXY') }));
+  app
+    .getHttpAdapter()
+    .getInstance()
+    .set('trust proxy', trustedProxies({ TRUST_PROXY: config.get('TRUST_PROXY') }));
   app.use(helmet(securityHeaders(servedOverHttps({ APP_URL: config.get('APP_URL') }))));
   compressResponses(app);
   app.use(cookieParser());
   // Replaces Nest's default JSON parser (same limits), adding the depth check before parsing. Nest's type
   // leaves out `verify` because Nest sets it itself for the `rawBody` option, which this app does not use.
-  (app as NestExpressApplication).useBodyParser('json', { verify: refuseDeepJson } as NestExpressBodyParserOptionsFor<'json'>);
+  (app as NestExpressApplication).useBodyParser('json', {
+    verify: refuseDeepJson,
+  } as NestExpressBodyParserOptionsFor<'json'>);
   app.enableCors({ origin: webOrigins({ WEB_ORIGINS: config.get('WEB_ORIGINS') }), credentials: true });
   app.useGlobalPipes(
     new StrictIdPipe(),

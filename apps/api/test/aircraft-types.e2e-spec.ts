@@ -19,9 +19,11 @@ describe('aircraft types', () => {
     await app.close();
   });
 
-  const list = async (): Promise<AircraftTypeView[]> => (await request(url).get('/api/aircraft-types').set(bearer(admin))).body;
+  const list = async (): Promise<AircraftTypeView[]> =>
+    (await request(url).get('/api/aircraft-types').set(bearer(admin))).body;
   const get = (id: number) => request(url).get(`/api/aircraft-types/${id}`).set(bearer(admin));
-  const putTable = (id: number, rows: unknown) => request(url).put(`/api/aircraft-types/${id}/launch-table`).set(bearer(admin)).send({ rows });
+  const putTable = (id: number, rows: unknown) =>
+    request(url).put(`/api/aircraft-types/${id}/launch-table`).set(bearer(admin)).send({ rows });
 
   it('creates a type and reads it back whole', async () => {
     const body = aircraftTypeBody();
@@ -32,7 +34,10 @@ describe('aircraft types', () => {
   });
 
   it('creates a type that never needs afterburner when afterburnerFromLb is null', async () => {
-    const created = await request(url).post('/api/aircraft-types').set(bearer(admin)).send({ ...aircraftTypeBody(), afterburnerFromLb: null });
+    const created = await request(url)
+      .post('/api/aircraft-types')
+      .set(bearer(admin))
+      .send({ ...aircraftTypeBody(), afterburnerFromLb: null });
     expect(created.status).toBe(201);
     expect(created.body.afterburnerFromLb).toBeNull();
   });
@@ -43,15 +48,38 @@ describe('aircraft types', () => {
     ['a launch table of one row', { launchTable: [good[0]] }, /launchTable needs at least two rows/],
     ['a negative weight', { maxGrossWeightLb: -40_000 }, /maxGrossWeightLb must be a positive number/],
     ['a weight given as text', { maxGrossWeightLb: '40000' }, /maxGrossWeightLb must be an integer number/],
-    ['a negative launch airspeed', { launchTable: [good[0], { ...good[1], minLaunchAirspeedKt: -1 }] }, /minLaunchAirspeedKt must be a positive number/],
-    ['weights not rising', { launchTable: [good[1], good[0]] }, /Launch table row 2 \(25000 lb\) must be heavier than row 1 \(40000 lb\)/],
-    ['a last trim band with an upper weight', { trimBands: [{ upToLb: 30_000, trimDeg: 10 }] }, /The last trim band must have no upper weight/],
+    [
+      'a negative launch airspeed',
+      { launchTable: [good[0], { ...good[1], minLaunchAirspeedKt: -1 }] },
+      /minLaunchAirspeedKt must be a positive number/,
+    ],
+    [
+      'weights not rising',
+      { launchTable: [good[1], good[0]] },
+      /Launch table row 2 \(25000 lb\) must be heavier than row 1 \(40000 lb\)/,
+    ],
+    [
+      'a last trim band with an upper weight',
+      { trimBands: [{ upToLb: 30_000, trimDeg: 10 }] },
+      /The last trim band must have no upper weight/,
+    ],
     ['a trim band without a trim', { trimBands: [{ upToLb: null }] }, /trimDeg must be a number/],
-    ['an extra field in a launch table row', { launchTable: [good[0], { ...good[1], note: 'x' }] }, /property note should not exist/],
-    ['the designation of another type', { designation: 'WKD-41' }, /Another aircraft type is already designated WKD-41/],
+    [
+      'an extra field in a launch table row',
+      { launchTable: [good[0], { ...good[1], note: 'x' }] },
+      /property note should not exist/,
+    ],
+    [
+      'the designation of another type',
+      { designation: 'WKD-41' },
+      /Another aircraft type is already designated WKD-41/,
+    ],
   ])('refuses %s and creates nothing', async (_case, change, message) => {
     const before = await list();
-    const response = await request(url).post('/api/aircraft-types').set(bearer(admin)).send({ ...aircraftTypeBody(), ...change });
+    const response = await request(url)
+      .post('/api/aircraft-types')
+      .set(bearer(admin))
+      .send({ ...aircraftTypeBody(), ...change });
     expect(response.status).toBeGreaterThanOrEqual(400);
     expect(response.status).toBeLessThan(500);
     expect(response.body.message).toMatch(message);
@@ -60,11 +88,17 @@ describe('aircraft types', () => {
 
   it('changes a type but not its launch table through PATCH', async () => {
     const type = await createAircraftType(url, admin);
-    const response = await request(url).patch(`/api/aircraft-types/${type.id}`).set(bearer(admin)).send({ crosswindLimitKt: 18, afterburnerFromLb: null });
+    const response = await request(url)
+      .patch(`/api/aircraft-types/${type.id}`)
+      .set(bearer(admin))
+      .send({ crosswindLimitKt: 18, afterburnerFromLb: null });
     expect(response.status).toBe(200);
     expect(response.body).toEqual({ ...type, crosswindLimitKt: 18, afterburnerFromLb: null });
 
-    const table = await request(url).patch(`/api/aircraft-types/${type.id}`).set(bearer(admin)).send({ launchTable: good });
+    const table = await request(url)
+      .patch(`/api/aircraft-types/${type.id}`)
+      .set(bearer(admin))
+      .send({ launchTable: good });
     expect(table.status).toBe(400);
     expect(table.body.message).toMatch(/property launchTable should not exist/);
   });
@@ -103,7 +137,9 @@ describe('aircraft types', () => {
     await createAircraft(url, admin, { typeId: used.id });
     const refused = await request(url).delete(`/api/aircraft-types/${used.id}`).set(bearer(admin));
     expect(refused.status).toBe(409);
-    expect(refused.body.message).toBe(`1 aircraft are of type ${used.designation}; change or delete them before deleting the type.`);
+    expect(refused.body.message).toBe(
+      `1 aircraft are of type ${used.designation}; change or delete them before deleting the type.`,
+    );
     expect((await get(used.id)).status).toBe(200);
   });
 

@@ -28,7 +28,11 @@ describe('aircraft', () => {
 
   it('lists the fleet by side number with type and squadron', async () => {
     const fleet = await list();
-    expect(fleet.find((aircraft) => aircraft.sideNumber === 'L47')).toMatchObject({ typeDesignation: 'FGD-63', squadronCode: 'LNB', parkedSpot: 'stern-1' });
+    expect(fleet.find((aircraft) => aircraft.sideNumber === 'L47')).toMatchObject({
+      typeDesignation: 'FGD-63',
+      squadronCode: 'LNB',
+      parkedSpot: 'stern-1',
+    });
     const sides = fleet.map((aircraft) => aircraft.sideNumber);
     expect(sides).toEqual([...sides].sort());
   });
@@ -38,7 +42,15 @@ describe('aircraft', () => {
     const response = await post({ sideNumber, typeId: 2, squadronId: 3, parkedSpot: 'aft-2' });
     expect(response.status).toBe(201);
     expect(response.body).toEqual({
-      id: expect.any(Number), sideNumber, typeId: 2, typeDesignation: 'MSD-26', squadronId: 3, squadronCode: 'GSB', parkedSpot: 'aft-2', serviceable: true, catapultShots: 0,
+      id: expect.any(Number),
+      sideNumber,
+      typeId: 2,
+      typeDesignation: 'MSD-26',
+      squadronId: 3,
+      squadronCode: 'GSB',
+      parkedSpot: 'aft-2',
+      serviceable: true,
+      catapultShots: 0,
     });
   });
 
@@ -46,7 +58,11 @@ describe('aircraft', () => {
     const before = await list();
     const response = await post({ sideNumber: 'C21', typeId: 1, squadronId: 1, parkedSpot: 'bow-1' });
     expect(response.status).toBe(409);
-    expect(response.body).toEqual({ statusCode: 409, code: 'side_number_taken', message: 'Side number C21 is already taken by another aircraft.' });
+    expect(response.body).toEqual({
+      statusCode: 409,
+      code: 'side_number_taken',
+      message: 'Side number C21 is already taken by another aircraft.',
+    });
     expect(await list()).toEqual(before);
   });
 
@@ -60,7 +76,13 @@ describe('aircraft', () => {
     ['a shot count', { catapultShots: 3 }, /property catapultShots should not exist/],
   ])('refuses %s with a 400 and adds nothing', async (_case, change, message) => {
     const before = await list();
-    const response = await post({ sideNumber: unique('B', 8), typeId: 1, squadronId: 1, parkedSpot: 'bow-1', ...change });
+    const response = await post({
+      sideNumber: unique('B', 8),
+      typeId: 1,
+      squadronId: 1,
+      parkedSpot: 'bow-1',
+      ...change,
+    });
     expect(response.status).toBe(400);
     expect(response.body.message).toMatch(message);
     expect(await list()).toEqual(before);
@@ -92,14 +114,27 @@ describe('aircraft', () => {
     const dataSource = app.get(DataSource);
     const now = new Date();
     const cycle = await dataSource.getRepository(Cycle).save({
-      shipId: 1, number: 900_000 + aircraft.id, plannedLaunchAt: now, windowStartAt: now, windowEndAt: now,
-      shipCourseDeg: 90, shipSpeedKt: 20, trueWindFromDeg: 90, trueWindSpeedKt: 10, temperatureC: 15, weatherCase: 'I',
+      shipId: 1,
+      number: 900_000 + aircraft.id,
+      plannedLaunchAt: now,
+      windowStartAt: now,
+      windowEndAt: now,
+      shipCourseDeg: 90,
+      shipSpeedKt: 20,
+      trueWindFromDeg: 90,
+      trueWindSpeedKt: 10,
+      temperatureC: 15,
+      weatherCase: 'I',
     });
-    await dataSource.getRepository(Slot).save({ cycleId: cycle.id, aircraftId: aircraft.id, mission: 'Test', fuelLb: 8_000, grossWeightLb: 38_000 });
+    await dataSource
+      .getRepository(Slot)
+      .save({ cycleId: cycle.id, aircraftId: aircraft.id, mission: 'Test', fuelLb: 8_000, grossWeightLb: 38_000 });
 
     const response = await request(url).delete(`/api/aircraft/${aircraft.id}`).set(bearer(admin));
     expect(response.status).toBe(409);
-    expect(response.body.message).toBe(`Aircraft ${aircraft.sideNumber} appears in 1 cycle lineup(s), which keep its record; mark it unserviceable instead of deleting it.`);
+    expect(response.body.message).toBe(
+      `Aircraft ${aircraft.sideNumber} appears in 1 cycle lineup(s), which keep its record; mark it unserviceable instead of deleting it.`,
+    );
     expect((await list()).map((a) => a.id)).toContain(aircraft.id);
   });
 

@@ -30,7 +30,9 @@ describe('login rate limit', () => {
     const refused = await attempt('handler@catline.example', 'catline-demo');
     expect(refused.status).toBe(429);
     expect(refused.body.code).toBe('too_many_attempts');
-    expect(refused.body.message).toMatch(/^Too many sign-in attempts for this e-mail\. Wait \d+ seconds, then try again\.$/);
+    expect(refused.body.message).toMatch(
+      /^Too many sign-in attempts for this e-mail\. Wait \d+ seconds, then try again\.$/,
+    );
     expect(Number(refused.headers['retry-after'])).toBeGreaterThan(0);
   });
 

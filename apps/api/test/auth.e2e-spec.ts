@@ -29,7 +29,8 @@ describe('auth', () => {
 
   const login = (email: string, password: string) => request(url).post('/api/auth/login').send({ email, password });
   const me = (token: string) => request(url).get('/api/auth/me').set(bearer(token));
-  const refresh = (cookie: string) => request(url).post('/api/auth/refresh').set('Cookie', cookie).set('X-Catline-Refresh', '1');
+  const refresh = (cookie: string) =>
+    request(url).post('/api/auth/refresh').set('Cookie', cookie).set('X-Catline-Refresh', '1');
 
   describe('login', () => {
     it('returns a 15-minute access token, the person and an httpOnly refresh cookie for the auth routes', async () => {
@@ -37,11 +38,19 @@ describe('auth', () => {
       const response = await login('cat2@catline.example', 'catline-demo');
 
       expect(response.status).toBe(200);
-      expect(response.body.user).toEqual({ id: expect.any(Number), email: 'cat2@catline.example', name: 'Sam Dellavint', role: 'catapult_officer', catapultId: 2 });
+      expect(response.body.user).toEqual({
+        id: expect.any(Number),
+        email: 'cat2@catline.example',
+        name: 'Sam Dellavint',
+        role: 'catapult_officer',
+        catapultId: 2,
+      });
       const lifetimeS = (Date.parse(response.body.expiresAt) - before) / 1000;
       expect(lifetimeS).toBeGreaterThan(14 * 60);
       expect(lifetimeS).toBeLessThanOrEqual(15 * 60 + 1);
-      const cookie = (response.headers['set-cookie'] as unknown as string[]).find((c) => c.startsWith('catline_refresh='))!;
+      const cookie = (response.headers['set-cookie'] as unknown as string[]).find((c) =>
+        c.startsWith('catline_refresh='),
+      )!;
       expect(cookie).toMatch(/; HttpOnly/);
       expect(cookie).toMatch(/; SameSite=Strict/);
       expect(cookie).toMatch(/; Path=\/api\/auth/);
@@ -61,7 +70,11 @@ describe('auth', () => {
       expect(wrongPassword.status).toBe(401);
       expect(unknownEmail.status).toBe(401);
       expect(wrongPassword.body).toEqual(unknownEmail.body);
-      expect(wrongPassword.body).toEqual({ statusCode: 401, code: 'invalid_credentials', message: 'The e-mail or password is not right.' });
+      expect(wrongPassword.body).toEqual({
+        statusCode: 401,
+        code: 'invalid_credentials',
+        message: 'The e-mail or password is not right.',
+      });
       expect(wrongPassword.headers['set-cookie']).toBeUndefined();
     });
 
@@ -70,7 +83,9 @@ describe('auth', () => {
       expect(missing.status).toBe(400);
       expect(missing.body.message).toMatch(/password/);
 
-      const extra = await request(url).post('/api/auth/login').send({ email: ADMIN, password: 'catline-demo', role: 'admin' });
+      const extra = await request(url)
+        .post('/api/auth/login')
+        .send({ email: ADMIN, password: 'catline-demo', role: 'admin' });
       expect(extra.status).toBe(400);
       expect(extra.body.message).toMatch(/property role should not exist/);
     });
@@ -94,7 +109,10 @@ describe('auth', () => {
     it('refuses an expired token', async () => {
       const { id } = (await me(adminToken)).body;
       const now = Math.floor(Date.now() / 1000);
-      const expired = new JwtService().sign({ sub: id, role: 'admin', tv: 0, iat: now - 1000, exp: now - 100 }, { secret, algorithm: 'HS256' });
+      const expired = new JwtService().sign(
+        { sub: id, role: 'admin', tv: 0, iat: now - 1000, exp: now - 100 },
+        { secret, algorithm: 'HS256' },
+      );
       const response = await me(expired);
       expect(response.status).toBe(401);
       expect(response.body.code).toBe('session_invalid');
@@ -102,7 +120,10 @@ describe('auth', () => {
 
     it('refuses a token signed with another key', async () => {
       const { id } = (await me(adminToken)).body;
-      const forged = new JwtService().sign({ sub: id, role: 'admin', tv: 0 }, { secret: 'another-key-of-enough-length', algorithm: 'HS256', expiresIn: 600 });
+      const forged = new JwtService().sign(
+        { sub: id, role: 'admin', tv: 0 },
+        { secret: 'another-key-of-enough-length', algorithm: 'HS256', expiresIn: 600 },
+      );
       expect((await me(forged)).status).toBe(401);
     });
 
@@ -159,7 +180,11 @@ describe('auth', () => {
     it('refuses a refresh without a cookie or with an unknown token', async () => {
       const none = await request(url).post('/api/auth/refresh').set('X-Catline-Refresh', '1');
       expect(none.status).toBe(401);
-      expect(none.body).toEqual({ statusCode: 401, code: 'session_ended', message: 'Your session has ended. Sign in again.' });
+      expect(none.body).toEqual({
+        statusCode: 401,
+        code: 'session_ended',
+        message: 'Your session has ended. Sign in again.',
+      });
       expect((await refresh('catline_refresh=made-up')).status).toBe(401);
     });
 
@@ -177,16 +202,22 @@ describe('auth', () => {
       const session = await login(person.email, TEST_PASSWORD);
       const cookie = refreshCookie(session);
 
-      const response = await request(url).post('/api/auth/logout').set(bearer(session.body.accessToken)).set('Cookie', cookie);
+      const response = await request(url)
+        .post('/api/auth/logout')
+        .set(bearer(session.body.accessToken))
+        .set('Cookie', cookie);
       expect(response.status).toBe(204);
-      expect((response.headers['set-cookie'] as unknown as string[])[0]).toMatch(/^catline_refresh=;.*Expires=Thu, 01 Jan 1970/);
+      expect((response.headers['set-cookie'] as unknown as string[])[0]).toMatch(
+        /^catline_refresh=;.*Expires=Thu, 01 Jan 1970/,
+      );
 
       expect((await refresh(cookie)).status).toBe(401);
     });
   });
 
   describe('change password', () => {
-    const change = (token: string, body: object) => request(url).post('/api/auth/password').set(bearer(token)).send(body);
+    const change = (token: string, body: object) =>
+      request(url).post('/api/auth/password').set(bearer(token)).send(body);
 
     it('refuses a wrong current password and a new one under 12 characters, changing nothing', async () => {
       const person = await createUser(url, adminToken);
@@ -224,7 +255,10 @@ describe('auth', () => {
   it('stores passwords as argon2id with at least 19 MiB, 2 iterations and 1 lane', async () => {
     // Minimum from the OWASP Password Storage Cheat Sheet (argon2id, m=19456 KiB, t=2, p=1).
     const person = await createUser(url, adminToken);
-    const hashes = await app.get(DataSource).getRepository(User).find({ where: [{ email: ADMIN }, { id: person.id }] });
+    const hashes = await app
+      .get(DataSource)
+      .getRepository(User)
+      .find({ where: [{ email: ADMIN }, { id: person.id }] });
     expect(hashes).toHaveLength(2);
     for (const { passwordHash } of hashes) {
       const match = /^\$argon2id\$v=19\$m=(\d+),t=(\d+),p=(\d+)\$/.exec(passwordHash ?? '');

@@ -21,7 +21,21 @@ const writeRoutes = matrixRoutes.filter((route) => route.method !== 'GET');
 const junkValue: fc.Arbitrary<unknown> = fc.oneof(
   fc.string({ unit: 'grapheme', maxLength: 40 }),
   fc.string({ unit: 'binary', minLength: 2_000, maxLength: 6_000 }),
-  fc.constantFrom('', ' ', '0', '-1', '1e309', 'null', 'true', '__proto__', '<script>alert(1)</script>', "' OR 1=1 --", '\u0000', '\ud800', '𝔘𝔫𝔦𝔠𝔬𝔡𝔢 ✈️'),
+  fc.constantFrom(
+    '',
+    ' ',
+    '0',
+    '-1',
+    '1e309',
+    'null',
+    'true',
+    '__proto__',
+    '<script>alert(1)</script>',
+    "' OR 1=1 --",
+    '\u0000',
+    '\ud800',
+    '𝔘𝔫𝔦𝔠𝔬𝔡𝔢 ✈️',
+  ),
   fc.integer(),
   fc.constantFrom(-1, 0, 2 ** 31, 2 ** 53, Number.MAX_SAFE_INTEGER + 2, 1e308, -0, 0.5),
   fc.double(),
@@ -90,7 +104,10 @@ describe(`bad input to every write route and socket event (${RUNS} tries each, s
 
   /** Every table's content checksum: any write anywhere changes it. */
   async function fingerprint(): Promise<string> {
-    const rows = (await dataSource.query(`CHECKSUM TABLE ${tables.map((table) => `\`${table}\``).join(', ')}`)) as { Table: string; Checksum: string }[];
+    const rows = (await dataSource.query(`CHECKSUM TABLE ${tables.map((table) => `\`${table}\``).join(', ')}`)) as {
+      Table: string;
+      Checksum: string;
+    }[];
     return rows.map((row) => `${row.Table}=${row.Checksum}`).join(' ');
   }
 
@@ -118,7 +135,9 @@ describe(`bad input to every write route and socket event (${RUNS} tries each, s
 
   /** A slot of another cycle than `cycleId`: a real id, but not of this cycle's rows. */
   async function slotOfAnotherCycle(cycleId: number): Promise<number> {
-    const [row] = (await dataSource.query('SELECT id FROM slots WHERE cycle_id <> ? ORDER BY id LIMIT 1', [cycleId])) as { id: number }[];
+    const [row] = (await dataSource.query('SELECT id FROM slots WHERE cycle_id <> ? ORDER BY id LIMIT 1', [
+      cycleId,
+    ])) as { id: number }[];
     return row.id;
   }
 
@@ -127,7 +146,9 @@ describe(`bad input to every write route and socket event (${RUNS} tries each, s
     const placeholders = [...route.path.matchAll(/\{(\w+)\}/g)].map((match) => match[1]);
     if (fuzzed.fault === 'bad_param') params[placeholders[fuzzed.pick % placeholders.length]] = fuzzed.param;
     if (fuzzed.fault === 'other_rows_id') params.slotId = await slotOfAnotherCycle(Number(example.params!.cycleId));
-    const path = route.path.replace(/\{(\w+)\}/g, (_whole, name: string) => encodeURIComponent(String(params[name] ?? 1)));
+    const path = route.path.replace(/\{(\w+)\}/g, (_whole, name: string) =>
+      encodeURIComponent(String(params[name] ?? 1)),
+    );
     const pending = request(url)[route.method.toLowerCase() as 'post'](path);
     if (caller && fuzzed.fault !== 'no_token') pending.set(bearer(tokens.get(caller)!));
     const body = { ...(example.body ?? {}) } as Record<string, unknown>;
@@ -138,11 +159,16 @@ describe(`bad input to every write route and socket event (${RUNS} tries each, s
       body[key] = wrongTypeFor(body[key]);
     }
     if (fuzzed.fault === 'malformed') return pending.set('Content-Type', 'application/json').send(fuzzed.raw);
-    return example.body === undefined ? pending : pending.set('Content-Type', 'application/json').send(JSON.stringify(body));
+    return example.body === undefined
+      ? pending
+      : pending.set('Content-Type', 'application/json').send(JSON.stringify(body));
   }
 
   // Every role the route admits is tried, each with its own valid example spoiled by one certain fault.
-  const callsOf = (route: MatrixRoute) => (route.allowed === 'public' ? [null] : route.allowed).map((caller) => [`${route.method} ${route.path} as ${caller ?? 'nobody'}`, route, caller] as const);
+  const callsOf = (route: MatrixRoute) =>
+    (route.allowed === 'public' ? [null] : route.allowed).map(
+      (caller) => [`${route.method} ${route.path} as ${caller ?? 'nobody'}`, route, caller] as const,
+    );
 
   it.each(writeRoutes.flatMap(callsOf))(
     '%s answers junk with a 4xx and changes nothing',
@@ -181,17 +207,41 @@ describe(`bad input to every write route and socket event (${RUNS} tries each, s
     const cycle = await deck.createCycle();
     const socket: ClientSocket = openSocket(url, { token: tokens.get('pilot')!, origin });
     await connected(socket);
-    const raw = socket as unknown as { timeout(ms: number): { emitWithAck(event: string, ...args: unknown[]): Promise<unknown> }; emit(event: string, ...args: unknown[]): void };
+    const raw = socket as unknown as {
+      timeout(ms: number): { emitWithAck(event: string, ...args: unknown[]): Promise<unknown> };
+      emit(event: string, ...args: unknown[]): void;
+    };
     const answers: unknown[] = [];
     try {
       await fc.assert(
         fc.asyncProperty(
-          fc.constantFrom('cycle:join', 'cycle:leave', 'session:refresh', 'lineup:move', 'slot:launch', 'cycle:close', '__proto__', ''),
-          fc.oneof(junkValue, fc.record({ cycleId: fc.oneof(junkValue, fc.constant(cycle.id)), sinceVersion: junkValue, accessToken: junkValue }, { requiredKeys: [] })),
+          fc.constantFrom(
+            'cycle:join',
+            'cycle:leave',
+            'session:refresh',
+            'lineup:move',
+            'slot:launch',
+            'cycle:close',
+            '__proto__',
+            '',
+          ),
+          fc.oneof(
+            junkValue,
+            fc.record(
+              { cycleId: fc.oneof(junkValue, fc.constant(cycle.id)), sinceVersion: junkValue, accessToken: junkValue },
+              { requiredKeys: [] },
+            ),
+          ),
           fc.boolean(),
           async (event, payload, withAck) => {
             const before = await fingerprint();
-            if (withAck) answers.push(await raw.timeout(300).emitWithAck(event, payload).catch(() => 'no answer'));
+            if (withAck)
+              answers.push(
+                await raw
+                  .timeout(300)
+                  .emitWithAck(event, payload)
+                  .catch(() => 'no answer'),
+              );
             else raw.emit(event, payload);
             expect(socket.connected).toBe(true);
             expect(await fingerprint()).toBe(before);
@@ -203,7 +253,9 @@ describe(`bad input to every write route and socket event (${RUNS} tries each, s
       socket.disconnect();
     }
     // Every answer is a refusal with a message, or a join/leave that did what it says for a valid request.
-    const bad = answers.filter((answer) => answer !== 'no answer' && !(typeof answer === 'object' && answer !== null && 'ok' in answer));
+    const bad = answers.filter(
+      (answer) => answer !== 'no answer' && !(typeof answer === 'object' && answer !== null && 'ok' in answer),
+    );
     expect(bad).toEqual([]);
     expect(answers.filter((answer) => (answer as { code?: string }).code === 'internal_error')).toEqual([]);
     expect((await request(url).get('/api/health')).status).toBe(200);

@@ -7,7 +7,14 @@ import { createBusyCycle, handlerTokens } from './support/busy-cycle.js';
 import { LineupDriver, OBSERVER } from './support/lineup-fixtures.js';
 import { LineupFollower, allAt } from './support/lineup-follower.js';
 import { type LineupModel, lineupModelCommands } from './support/lineup-model-commands.js';
-import { type CommandOutcome, accepted, acceptedVersion, randomCommand, seededRandom, send } from './support/random-lineup-commands.js';
+import {
+  type CommandOutcome,
+  accepted,
+  acceptedVersion,
+  randomCommand,
+  seededRandom,
+  send,
+} from './support/random-lineup-commands.js';
 import { startTestApp } from './support/test-app.js';
 
 // `npm test` sends 1,000 commands; `npm run soak` sets RELIABILITY_COMMANDS=10000.
@@ -77,7 +84,12 @@ describe(`${HANDLERS} handlers sending ${TOTAL} lineup commands at one cycle (se
     // Put the shared ship's catapults back up, through the same pipeline (these are accepted changes too).
     const now = await deck.snapshot(cycleId);
     for (const lane of now.lanes.filter((candidate) => candidate.status !== 'up')) {
-      outcomes.push(await send(url, tokens[0], { path: `/api/cycles/${cycleId}/lineup/catapults/${lane.catapultId}/status`, body: { status: 'up', basisStatus: lane.status } }));
+      outcomes.push(
+        await send(url, tokens[0], {
+          path: `/api/cycles/${cycleId}/lineup/catapults/${lane.catapultId}/status`,
+          body: { status: 'up', basisStatus: lane.status },
+        }),
+      );
     }
 
     const final = await deck.snapshot(cycleId);
@@ -91,7 +103,11 @@ describe(`${HANDLERS} handlers sending ${TOTAL} lineup commands at one cycle (se
     );
 
     expect(outcomes.length).toBeGreaterThanOrEqual(TOTAL);
-    expect(refused.filter((outcome) => outcome.status !== 409 && outcome.status !== 400).map((o) => `${o.status} ${JSON.stringify(o.body)}`)).toEqual([]);
+    expect(
+      refused
+        .filter((outcome) => outcome.status !== 409 && outcome.status !== 400)
+        .map((o) => `${o.status} ${JSON.stringify(o.body)}`),
+    ).toEqual([]);
     expect(acceptedOnes.length).toBeGreaterThan(TOTAL / 10);
 
     // Versions 1..final without a gap or a repeat; each accepted command is exactly one of them.

@@ -34,15 +34,30 @@ describe('cycles', () => {
     expect(response.body).toMatchObject({ ...body, state: 'planning', version: 0, slotCount: 0, launchedCount: 0 });
     const again = await deck.call(AIR_OPS, 'post', '/api/cycles', body);
     expect(again.status).toBe(409);
-    expect(again.body).toMatchObject({ code: 'cycle_number_taken', message: `This ship already has a cycle ${body.number}.` });
+    expect(again.body).toMatchObject({
+      code: 'cycle_number_taken',
+      message: `This ship already has a cycle ${body.number}.`,
+    });
   });
 
   it.each([
-    ['a window that ends before it starts', { windowEndAt: '2027-01-10T08:00:00.000Z' }, 'The launch window must end after it starts.'],
-    ['a planned launch outside the window', { plannedLaunchAt: '2027-01-10T11:00:00.000Z' }, 'The planned launch time must fall inside the launch window.'],
+    [
+      'a window that ends before it starts',
+      { windowEndAt: '2027-01-10T08:00:00.000Z' },
+      'The launch window must end after it starts.',
+    ],
+    [
+      'a planned launch outside the window',
+      { plannedLaunchAt: '2027-01-10T11:00:00.000Z' },
+      'The planned launch time must fall inside the launch window.',
+    ],
     ['a course past 360°', { shipCourseDeg: 400 }, 'shipCourseDeg must be at most 360 degrees true'],
     ['an unknown weather case', { weatherCase: 'IV' }, 'weatherCase must be I, II or III'],
-    ['a date without a time zone', { plannedLaunchAt: 'tomorrow' }, 'plannedLaunchAt must be an ISO 8601 date and time'],
+    [
+      'a date without a time zone',
+      { plannedLaunchAt: 'tomorrow' },
+      'plannedLaunchAt must be an ISO 8601 date and time',
+    ],
     ['a missing wind', { trueWindSpeedKt: undefined }, 'trueWindSpeedKt must be a number'],
   ])('refuses %s with a readable 400', async (_case, fields, message) => {
     const before = (await deck.ok<CycleView[]>(OBSERVER, 'get', '/api/cycles')).length;
@@ -70,10 +85,24 @@ describe('cycles', () => {
   it('changes conditions as a versioned change and refuses a stale basis with what changed', async () => {
     const cycle = await deck.createCycle();
     const path = `/api/cycles/${cycle.id}/conditions`;
-    const changed = await deck.ok<LineupCommandResult>(AIR_OPS, 'patch', path, { basisVersion: 0, trueWindFromDeg: 250, trueWindSpeedKt: 18, weatherCase: 'II' });
+    const changed = await deck.ok<LineupCommandResult>(AIR_OPS, 'patch', path, {
+      basisVersion: 0,
+      trueWindFromDeg: 250,
+      trueWindSpeedKt: 18,
+      weatherCase: 'II',
+    });
     expect(changed.version).toBe(1);
-    expect(changed.change).toMatchObject({ kind: 'conditions_changed', summary: 'Conditions: wind 250° 18 kt, case II', actor: { name: 'Priya Quennevar' } });
-    expect(changed.change.patch.cycle).toMatchObject({ trueWindFromDeg: 250, trueWindSpeedKt: 18, weatherCase: 'II', version: 1 });
+    expect(changed.change).toMatchObject({
+      kind: 'conditions_changed',
+      summary: 'Conditions: wind 250° 18 kt, case II',
+      actor: { name: 'Priya Quennevar' },
+    });
+    expect(changed.change.patch.cycle).toMatchObject({
+      trueWindFromDeg: 250,
+      trueWindSpeedKt: 18,
+      weatherCase: 'II',
+      version: 1,
+    });
 
     const stale = await deck.call(AIR_OPS, 'patch', path, { basisVersion: 0, night: true });
     expect(stale.status).toBe(409);
@@ -98,7 +127,9 @@ describe('cycles', () => {
     expect(twice.status).toBe(409);
     expect(twice.body.code).toBe('wrong_state');
 
-    const closed = await deck.ok<LineupCommandResult>(AIR_OPS, 'post', `/api/cycles/${cycle.id}/close`, { basisVersion: started.version });
+    const closed = await deck.ok<LineupCommandResult>(AIR_OPS, 'post', `/api/cycles/${cycle.id}/close`, {
+      basisVersion: started.version,
+    });
     expect(closed.change.summary).toBe(`Cycle ${cycle.number} closed; 1 aircraft not launched scratched`);
     const after = await deck.snapshot(cycle.id);
     expect(after.cycle.state).toBe('closed');
@@ -117,23 +148,50 @@ describe('cycles', () => {
   it('adds aircraft to the deck pool, once each, with an active pilot who flies nothing else in the cycle', async () => {
     const cycle = await deck.createCycle();
     const slot = await deck.addSlot(cycle.id, 'D37', { pilotEmail: pilot(4), spare: true });
-    expect(slot).toMatchObject({ sideNumber: 'D37', pilotName: 'Dev Hollowmere', spare: true, catapultId: null, status: 'planned' });
+    expect(slot).toMatchObject({
+      sideNumber: 'D37',
+      pilotName: 'Dev Hollowmere',
+      spare: true,
+      catapultId: null,
+      status: 'planned',
+    });
     expect((await deck.snapshot(cycle.id)).pool).toEqual([slot.id]);
 
-    const body = { pilotId: null, mission: 'Strike', fuelLb: 9000, stores: '', grossWeightLb: 41_000, tanker: false, earlyWarning: false, spare: false };
+    const body = {
+      pilotId: null,
+      mission: 'Strike',
+      fuelLb: 9000,
+      stores: '',
+      grossWeightLb: 41_000,
+      tanker: false,
+      earlyWarning: false,
+      spare: false,
+    };
     const path = `/api/cycles/${cycle.id}/slots`;
     const twice = await deck.call(AIR_OPS, 'post', path, { ...body, aircraftId: await deck.aircraftId('D37') });
     expect(twice.status).toBe(409);
     expect(twice.body.code).toBe('aircraft_already_in_cycle');
     const unknown = await deck.call(AIR_OPS, 'post', path, { ...body, aircraftId: 999_999 });
     expect(unknown.status).toBe(404);
-    const notAPilot = await deck.call(AIR_OPS, 'post', path, { ...body, aircraftId: await deck.aircraftId('D38'), pilotId: (await deck.me(HANDLER)).id });
+    const notAPilot = await deck.call(AIR_OPS, 'post', path, {
+      ...body,
+      aircraftId: await deck.aircraftId('D38'),
+      pilotId: (await deck.me(HANDLER)).id,
+    });
     expect(notAPilot.status).toBe(400);
     expect(notAPilot.body.code).toBe('invalid_pilot');
-    const busyPilot = await deck.call(AIR_OPS, 'post', path, { ...body, aircraftId: await deck.aircraftId('D38'), pilotId: (await deck.me(pilot(4))).id });
+    const busyPilot = await deck.call(AIR_OPS, 'post', path, {
+      ...body,
+      aircraftId: await deck.aircraftId('D38'),
+      pilotId: (await deck.me(pilot(4))).id,
+    });
     expect(busyPilot.status).toBe(409);
     expect(busyPilot.body.message).toBe(`Dev Hollowmere already flies D37 in cycle ${cycle.number}.`);
-    const heavy = await deck.call(AIR_OPS, 'post', path, { ...body, aircraftId: await deck.aircraftId('D38'), grossWeightLb: -5 });
+    const heavy = await deck.call(AIR_OPS, 'post', path, {
+      ...body,
+      aircraftId: await deck.aircraftId('D38'),
+      grossWeightLb: -5,
+    });
     expect(heavy.status).toBe(400);
     expect((await deck.snapshot(cycle.id)).version).toBe(1);
   });

@@ -4,7 +4,8 @@ import { applyLineupChanges, applyLineupPatch } from '@catline/contracts';
 import { ADMIN, AIR_OPS, HANDLER, LineupDriver, OBSERVER, launchKey, pilot } from './support/lineup-fixtures.js';
 import { startTestApp } from './support/test-app.js';
 
-const idsOf = (snapshot: LineupSnapshot, catapultNumber: number) => snapshot.lanes.find((lane) => lane.number === catapultNumber)!.slotIds;
+const idsOf = (snapshot: LineupSnapshot, catapultNumber: number) =>
+  snapshot.lanes.find((lane) => lane.number === catapultNumber)!.slotIds;
 
 describe('lineup commands', () => {
   let app: INestApplication;
@@ -30,15 +31,28 @@ describe('lineup commands', () => {
     return { cycle, slots, snapshot: await deck.snapshot(cycle.id) };
   }
 
-  const changesOf = (cycleId: number, since: number) => deck.ok<LineupChange[]>(OBSERVER, 'get', `/api/cycles/${cycleId}/lineup/changes?since=${since}`);
+  const changesOf = (cycleId: number, since: number) =>
+    deck.ok<LineupChange[]>(OBSERVER, 'get', `/api/cycles/${cycleId}/lineup/changes?since=${since}`);
 
   it('accepts one of two moves of the same slot from the same basis and refuses the other with what changed', async () => {
     const { cycle, slots, snapshot } = await cycleWithLanes();
     const moving = snapshot.slots.find((slot) => slot.id === slots[2].id)!;
     const lane = snapshot.lanes.find((candidate) => candidate.number === 1)!;
     const other = snapshot.lanes.find((candidate) => candidate.number === 2)!;
-    const toFront = { slotId: moving.id, slotVersion: moving.version, toCatapultId: lane.catapultId, toIndex: 0, targetLaneOrder: lane.slotIds };
-    const toCat2 = { slotId: moving.id, slotVersion: moving.version, toCatapultId: other.catapultId, toIndex: 0, targetLaneOrder: other.slotIds };
+    const toFront = {
+      slotId: moving.id,
+      slotVersion: moving.version,
+      toCatapultId: lane.catapultId,
+      toIndex: 0,
+      targetLaneOrder: lane.slotIds,
+    };
+    const toCat2 = {
+      slotId: moving.id,
+      slotVersion: moving.version,
+      toCatapultId: other.catapultId,
+      toIndex: 0,
+      targetLaneOrder: other.slotIds,
+    };
 
     const [first, second] = await Promise.all([
       deck.call(HANDLER, 'post', `/api/cycles/${cycle.id}/lineup/moves`, toFront),
@@ -125,7 +139,10 @@ describe('lineup commands', () => {
 
     expect(answers.map((answer) => answer.status)).toEqual([200, 200]);
     expect(answers[0].body).toEqual(answers[1].body);
-    expect(await shots(slot.aircraftId, ready.catapultId!)).toEqual({ aircraft: shotsBefore.aircraft + 1, catapult: shotsBefore.catapult + 1 });
+    expect(await shots(slot.aircraftId, ready.catapultId!)).toEqual({
+      aircraft: shotsBefore.aircraft + 1,
+      catapult: shotsBefore.catapult + 1,
+    });
     const launches = (await changesOf(cycle.id, 0)).filter((change) => change.kind === 'slot_launched');
     expect(launches).toHaveLength(1);
     const again = await deck.launch(cycle.id, ready, launchKey());
@@ -183,8 +200,19 @@ describe('lineup commands', () => {
     ['a down with a spare named by side number', 'down', { slotVersion: 0, spareSlotId: 'spare' }, 'spareSlotId'],
   ])('refuses %s with a readable 400', async (_case, command, body, named) => {
     const { cycle, slots, snapshot } = await sharedCycle();
-    const email = { launch: 'cat1@catline.example', suspend: 'cat1@catline.example', advance: 'cat1@catline.example', 'weight-ack': pilot(1), down: HANDLER }[command]!;
-    const response = await deck.call(email, 'post', `/api/cycles/${cycle.id}/lineup/slots/${slots[0].id}/${command}`, body);
+    const email = {
+      launch: 'cat1@catline.example',
+      suspend: 'cat1@catline.example',
+      advance: 'cat1@catline.example',
+      'weight-ack': pilot(1),
+      down: HANDLER,
+    }[command]!;
+    const response = await deck.call(
+      email,
+      'post',
+      `/api/cycles/${cycle.id}/lineup/slots/${slots[0].id}/${command}`,
+      body,
+    );
     expect(response.status).toBe(400);
     expect(response.body.message).toContain(named);
     expect((await deck.snapshot(cycle.id)).version).toBe(snapshot.version);
@@ -202,7 +230,10 @@ describe('lineup commands', () => {
       targetLaneOrder: lane.slotIds,
     });
     expect(response.status).toBe(400);
-    expect(response.body).toMatchObject({ code: 'invalid_lineup', message: 'Place 8 on cat 2 is not open to C21: choose place 1 to 3.' });
+    expect(response.body).toMatchObject({
+      code: 'invalid_lineup',
+      message: 'Place 8 on cat 2 is not open to C21: choose place 1 to 3.',
+    });
     expect((await deck.snapshot(cycle.id)).version).toBe(snapshot.version);
   });
 
@@ -211,15 +242,24 @@ describe('lineup commands', () => {
     const spare = await deck.addSlot(cycle.id, 'C28', { spare: true });
     const down = await deck.slot(cycle.id, slots[1].id);
 
-    const result = await deck.ok<LineupCommandResult>(HANDLER, 'post', `/api/cycles/${cycle.id}/lineup/slots/${down.id}/down`, {
-      slotVersion: down.version,
-      spareSlotId: spare.id,
-    });
+    const result = await deck.ok<LineupCommandResult>(
+      HANDLER,
+      'post',
+      `/api/cycles/${cycle.id}/lineup/slots/${down.id}/down`,
+      {
+        slotVersion: down.version,
+        spareSlotId: spare.id,
+      },
+    );
 
     expect(result.change.summary).toBe('C22 down; spare C28 takes cat 1, place 2');
     const after = await deck.snapshot(cycle.id);
     expect(idsOf(after, 1)).toEqual([slots[0].id, spare.id, slots[2].id]);
-    expect(after.slots.find((slot) => slot.id === down.id)).toMatchObject({ status: 'down', catapultId: null, position: null });
+    expect(after.slots.find((slot) => slot.id === down.id)).toMatchObject({
+      status: 'down',
+      catapultId: null,
+      position: null,
+    });
     expect(after.pool).not.toContain(down.id);
     const again = await deck.call(HANDLER, 'post', `/api/cycles/${cycle.id}/lineup/slots/${slots[0].id}/down`, {
       slotVersion: (await deck.slot(cycle.id, slots[0].id)).version,
@@ -234,7 +274,11 @@ describe('lineup commands', () => {
     const catapultId = await deck.catapultId(2);
     const path = `/api/cycles/${cycle.id}/lineup/catapults/${catapultId}/status`;
     try {
-      const result = await deck.ok<LineupCommandResult>(HANDLER, 'post', path, { status: 'down', basisStatus: 'up', reason: 'Shuttle fault' });
+      const result = await deck.ok<LineupCommandResult>(HANDLER, 'post', path, {
+        status: 'down',
+        basisStatus: 'up',
+        reason: 'Shuttle fault',
+      });
       expect(result.change.summary).toBe('Cat 2 down: Shuttle fault');
       const after = await deck.snapshot(cycle.id);
       const lane = after.lanes.find((candidate) => candidate.number === 2)!;
@@ -258,20 +302,26 @@ describe('lineup commands', () => {
     for (const side of ['C30', 'C31', 'C32', 'D37', 'D38', 'L48']) {
       await deck.addSlot(cycle.id, side, side === 'L48' ? { earlyWarning: true, grossWeightLb: 52_000 } : {});
     }
-    const suggestion = await deck.ok<{ basisVersion: number; lanes: { catapultId: number; slotIds: number[] }[]; lastLaunchAt: string }>(
-      HANDLER,
-      'get',
-      `/api/cycles/${cycle.id}/lineup/suggestion`,
-    );
+    const suggestion = await deck.ok<{
+      basisVersion: number;
+      lanes: { catapultId: number; slotIds: number[] }[];
+      lastLaunchAt: string;
+    }>(HANDLER, 'get', `/api/cycles/${cycle.id}/lineup/suggestion`);
     expect(suggestion.lanes.flatMap((lane) => lane.slotIds)).toHaveLength(6);
 
-    const applied = await deck.ok<LineupCommandResult>(HANDLER, 'post', `/api/cycles/${cycle.id}/lineup/suggestion/apply`, {
-      basisVersion: suggestion.basisVersion,
-      lanes: suggestion.lanes,
-    });
+    const applied = await deck.ok<LineupCommandResult>(
+      HANDLER,
+      'post',
+      `/api/cycles/${cycle.id}/lineup/suggestion/apply`,
+      {
+        basisVersion: suggestion.basisVersion,
+        lanes: suggestion.lanes,
+      },
+    );
 
     const after = await deck.snapshot(cycle.id);
-    for (const lane of suggestion.lanes) expect(after.lanes.find((candidate) => candidate.catapultId === lane.catapultId)!.slotIds).toEqual(lane.slotIds);
+    for (const lane of suggestion.lanes)
+      expect(after.lanes.find((candidate) => candidate.catapultId === lane.catapultId)!.slotIds).toEqual(lane.slotIds);
     expect(after.pool).toEqual([]);
     expect(after.lastLaunchAt).toBe(suggestion.lastLaunchAt);
     expect(applied.version).toBe(suggestion.basisVersion + 1);
@@ -287,11 +337,18 @@ describe('lineup commands', () => {
     const cycle = await deck.createCycle();
     const start = await deck.snapshot(cycle.id);
     const { slots } = await (async () => {
-      const added = [await deck.addSlot(cycle.id, 'C21'), await deck.addSlot(cycle.id, 'D33'), await deck.addSlot(cycle.id, 'G43', { grossWeightLb: 26_000 })];
+      const added = [
+        await deck.addSlot(cycle.id, 'C21'),
+        await deck.addSlot(cycle.id, 'D33'),
+        await deck.addSlot(cycle.id, 'G43', { grossWeightLb: 26_000 }),
+      ];
       await deck.place(cycle.id, added[0].id, 1);
       await deck.place(cycle.id, added[1].id, 1, 0);
       await deck.place(cycle.id, added[2].id, 4);
-      await deck.ok(AIR_OPS, 'patch', `/api/cycles/${cycle.id}/conditions`, { basisVersion: (await deck.snapshot(cycle.id)).version, trueWindSpeedKt: 4 });
+      await deck.ok(AIR_OPS, 'patch', `/api/cycles/${cycle.id}/conditions`, {
+        basisVersion: (await deck.snapshot(cycle.id)).version,
+        trueWindSpeedKt: 4,
+      });
       return { slots: added };
     })();
 
@@ -299,7 +356,13 @@ describe('lineup commands', () => {
 
     expect(changes.map((change) => change.version)).toEqual([1, 2, 3, 4, 5, 6, 7]);
     expect(changes.map((change) => change.kind)).toEqual([
-      'slot_added', 'slot_added', 'slot_added', 'slot_moved', 'slot_moved', 'slot_moved', 'conditions_changed',
+      'slot_added',
+      'slot_added',
+      'slot_added',
+      'slot_moved',
+      'slot_moved',
+      'slot_moved',
+      'conditions_changed',
     ]);
     expect(changes[4].summary).toBe('D33 moved to cat 1, place 1');
     const replayed = applyLineupChanges(start, changes);
@@ -313,7 +376,13 @@ describe('lineup commands', () => {
     const [model] = await deck.ok<AircraftView[]>(OBSERVER, 'get', '/api/aircraft');
     const side = () => `T${Math.floor(Math.random() * 1_000_000)}`;
     const { typeId, squadronId, parkedSpot } = model;
-    const aircraft = await deck.ok<AircraftView>(ADMIN, 'post', '/api/aircraft', { sideNumber: side(), typeId, squadronId, parkedSpot }, 201);
+    const aircraft = await deck.ok<AircraftView>(
+      ADMIN,
+      'post',
+      '/api/aircraft',
+      { sideNumber: side(), typeId, squadronId, parkedSpot },
+      201,
+    );
     const slotId = (await deck.addSlot(cycle.id, aircraft.sideNumber)).id;
     // After this change the API holds the cycle's state in memory (LineupStateCache).
     await deck.place(cycle.id, slotId, 1);

@@ -1,4 +1,11 @@
-import type { AircraftTypeView, AircraftView, CycleView, LineupChange, LineupSnapshot, ShipView } from '@catline/contracts';
+import type {
+  AircraftTypeView,
+  AircraftView,
+  CycleView,
+  LineupChange,
+  LineupSnapshot,
+  ShipView,
+} from '@catline/contracts';
 import {
   afterburnerRequired,
   airDensity,
@@ -35,16 +42,21 @@ function profileOf(type: AircraftTypeView): AircraftProfile {
     crosswindLimit: knots(type.crosswindLimitKt),
     thrust: poundsForce(type.thrustLbf),
     requiredExcess: knots(type.requiredExcessKt),
-    minimumLaunchAirspeed: type.launchTable.map((row) => ({ grossWeight: pounds(row.grossWeightLb), airspeed: knots(row.minLaunchAirspeedKt) })),
+    minimumLaunchAirspeed: type.launchTable.map((row) => ({
+      grossWeight: pounds(row.grossWeightLb),
+      airspeed: knots(row.minLaunchAirspeedKt),
+    })),
     // A stored band holds weights up to and including its upper bound.
-    trimBands: type.trimBands.map((band, i) => ({ fromGrossWeight: pounds(i === 0 ? 0 : type.trimBands[i - 1].upToLb! + 1), trim: degrees(band.trimDeg) })),
+    trimBands: type.trimBands.map((band, i) => ({
+      fromGrossWeight: pounds(i === 0 ? 0 : type.trimBands[i - 1].upToLb! + 1),
+      trim: degrees(band.trimDeg),
+    })),
     trimWeightStep: pounds(1),
     afterburnerFromGrossWeight: type.afterburnerFromLb === null ? null : pounds(type.afterburnerFromLb),
   };
 }
 
-const bySort = <T>(items: T[], key: (item: T) => number) =>
-  [...items].sort((a, b) => key(a) - key(b));
+const bySort = <T>(items: T[], key: (item: T) => number) => [...items].sort((a, b) => key(a) - key(b));
 
 describe('lineup snapshot of the demo cycles', () => {
   let app: INestApplication;
@@ -85,12 +97,18 @@ describe('lineup snapshot of the demo cycles', () => {
       { course: degrees(cycle.shipCourseDeg), speed: knots(cycle.shipSpeedKt) },
       { from: degrees(cycle.trueWindFromDeg), speed: knots(cycle.trueWindSpeedKt) },
     );
-    const sigma = densityRatio(airDensity(celsiusToKelvin(celsius(cycle.temperatureC)), pascals(cycle.pressureHpa * 100)));
+    const sigma = densityRatio(
+      airDensity(celsiusToKelvin(celsius(cycle.temperatureC)), pascals(cycle.pressureHpa * 100)),
+    );
     let checked = 0;
     for (const lane of snapshot.lanes) {
       const catapult = ship.catapults.find((candidate) => candidate.id === lane.catapultId)!;
       const wind = catapultWind(relative, degrees(catapult.axisAngleDeg));
-      expect([lane.headwindKt, lane.crosswindKt, lane.crosswindSide]).toEqual([wind.headwind, wind.crosswind, wind.side]);
+      expect([lane.headwindKt, lane.crosswindKt, lane.crosswindSide]).toEqual([
+        wind.headwind,
+        wind.crosswind,
+        wind.side,
+      ]);
       for (const slotId of lane.slotIds) {
         const slot = snapshot.slots.find((candidate) => candidate.id === slotId)!;
         const profile = profileOf(types.find((type) => type.id === slot.typeId)!);
@@ -140,13 +158,18 @@ describe('lineup snapshot of the demo cycles', () => {
       for (const slotId of lane.slotIds) {
         const slot = snapshot.slots.find((candidate) => candidate.id === slotId)!;
         const spot = aircraft.find((row) => row.id === slot.aircraftId)!.parkedSpot;
-        notBefore[slotId] = epochMs(start + ship.deckSpots.find((deckSpot) => deckSpot.name === spot)!.taxiS[number] * 1000);
+        notBefore[slotId] = epochMs(
+          start + ship.deckSpots.find((deckSpot) => deckSpot.name === spot)!.taxiS[number] * 1000,
+        );
         priorities[slotId] = slot.tanker || slot.earlyWarning ? 'first' : slot.spare ? 'last' : 'normal';
       }
     }
     const projection = projectLaunchTimes({
       cycleStart: epochMs(start),
-      window: { start: epochMs(Date.parse(snapshot.cycle.windowStartAt)), end: epochMs(Date.parse(snapshot.cycle.windowEndAt)) },
+      window: {
+        start: epochMs(Date.parse(snapshot.cycle.windowStartAt)),
+        end: epochMs(Date.parse(snapshot.cycle.windowEndAt)),
+      },
       catapults: ship.catapults.map((catapult) => ({
         id: String(catapult.id),
         number: catapult.number,
@@ -163,11 +186,18 @@ describe('lineup snapshot of the demo cycles', () => {
     });
     for (const projected of projection.slots) {
       const slot = snapshot.slots.find((candidate) => String(candidate.id) === projected.slotId)!;
-      expect([slot.projectedLaunchAt, slot.missesWindow]).toEqual([new Date(projected.time).toISOString(), projected.missesWindow]);
+      expect([slot.projectedLaunchAt, slot.missesWindow]).toEqual([
+        new Date(projected.time).toISOString(),
+        projected.missesWindow,
+      ]);
     }
     expect(projection.slots).toHaveLength(8);
     expect(snapshot.lastLaunchAt).toBe(new Date(projection.lastLaunch!).toISOString());
-    expect(snapshot.slots.filter((slot) => slot.catapultId === null).every((slot) => slot.projectedLaunchAt === null && slot.figures === null)).toBe(true);
+    expect(
+      snapshot.slots
+        .filter((slot) => slot.catapultId === null)
+        .every((slot) => slot.projectedLaunchAt === null && slot.figures === null),
+    ).toBe(true);
   });
 
   it('keeps the flown cycle whole: a history that replays to its final lineup', async () => {
@@ -177,16 +207,35 @@ describe('lineup snapshot of the demo cycles', () => {
 
     expect(changes.map((change) => change.version)).toEqual(Array.from({ length: final.version }, (_, i) => i + 1));
     const kinds = new Set(changes.map((change) => change.kind));
-    for (const kind of ['slot_added', 'slot_moved', 'weight_acknowledged', 'aircraft_down', 'cycle_started', 'slot_advanced', 'slot_suspended', 'slot_launched', 'cycle_closed'] as const) {
+    for (const kind of [
+      'slot_added',
+      'slot_moved',
+      'weight_acknowledged',
+      'aircraft_down',
+      'cycle_started',
+      'slot_advanced',
+      'slot_suspended',
+      'slot_launched',
+      'cycle_closed',
+    ] as const) {
       expect(kinds).toContain(kind);
     }
     const times = changes.map((change) => Date.parse(change.at));
     expect(times).toEqual([...times].sort((a, b) => a - b));
     expect(final.cycle.state).toBe('closed');
-    expect(final.slots.filter((slot) => slot.status === 'launched').every((slot) => slot.launchedAt !== null)).toBe(true);
+    expect(final.slots.filter((slot) => slot.status === 'launched').every((slot) => slot.launchedAt !== null)).toBe(
+      true,
+    );
     expect(final.slots.find((slot) => slot.sideNumber === 'C24')!.status).toBe('down');
 
-    const empty: LineupSnapshot = { cycle: final.cycle, lanes: [], pool: [], slots: [], lastLaunchAt: null, version: 0 };
+    const empty: LineupSnapshot = {
+      cycle: final.cycle,
+      lanes: [],
+      pool: [],
+      slots: [],
+      lastLaunchAt: null,
+      version: 0,
+    };
     const replayed = applyLineupChanges(empty, changes);
     const normal = (snapshot: LineupSnapshot) => ({
       ...snapshot,

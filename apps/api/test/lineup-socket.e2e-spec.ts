@@ -1,4 +1,10 @@
-import { ROLES, type LineupChange, type LineupCommandResult, type LineupSnapshot, applyLineupChanges } from '@catline/contracts';
+import {
+  ROLES,
+  type LineupChange,
+  type LineupCommandResult,
+  type LineupSnapshot,
+  applyLineupChanges,
+} from '@catline/contracts';
 import type { INestApplication } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { JwtService } from '@nestjs/jwt';
@@ -45,7 +51,24 @@ describe('live lineup over socket.io', () => {
   /** A cycle with `perLane` planned aircraft on each of the four catapults. */
   async function cycleWithFullLanes(perLane: number) {
     const cycle = await deck.createCycle();
-    const sides = ['C21', 'C22', 'C23', 'C24', 'C25', 'C26', 'C27', 'C28', 'C29', 'C30', 'C31', 'C32', 'D33', 'D34', 'D35', 'D36'];
+    const sides = [
+      'C21',
+      'C22',
+      'C23',
+      'C24',
+      'C25',
+      'C26',
+      'C27',
+      'C28',
+      'C29',
+      'C30',
+      'C31',
+      'C32',
+      'D33',
+      'D34',
+      'D35',
+      'D36',
+    ];
     for (const [index, side] of sides.slice(0, perLane * 4).entries()) {
       const slot = await deck.addSlot(cycle.id, side);
       await deck.place(cycle.id, slot.id, (index % 4) + 1);
@@ -54,7 +77,13 @@ describe('live lineup over socket.io', () => {
   }
 
   /** Moves the last aircraft of a lane to its front, `count` times, keeping its basis from each answer. */
-  async function rotateLane(token: string, cycleId: number, start: LineupSnapshot, catapultNumber: number, count: number) {
+  async function rotateLane(
+    token: string,
+    cycleId: number,
+    start: LineupSnapshot,
+    catapultNumber: number,
+    count: number,
+  ) {
     const lane = start.lanes.find((candidate) => candidate.number === catapultNumber)!;
     let order = [...lane.slotIds];
     const versions = new Map(start.slots.map((slot) => [slot.id, slot.version]));
@@ -67,7 +96,10 @@ describe('live lineup over socket.io', () => {
         toIndex: 0,
         targetLaneOrder: order,
       });
-      if (response.status !== 200) throw new Error(`Move ${i} on cat ${catapultNumber} answered ${response.status}: ${JSON.stringify(response.body)}`);
+      if (response.status !== 200)
+        throw new Error(
+          `Move ${i} on cat ${catapultNumber} answered ${response.status}: ${JSON.stringify(response.body)}`,
+        );
       const { patch } = (response.body as LineupCommandResult).change;
       for (const slot of patch.slots ?? []) versions.set(slot.id, slot.version);
       order = patch.lanes!.find((candidate) => candidate.catapultId === lane.catapultId)!.slotIds;
@@ -81,7 +113,8 @@ describe('live lineup over socket.io', () => {
     const cycle = await cycleWithFullLanes(4);
     const admin = await deck.token(demoEmail('admin'));
     const handlers = [await deck.token(HANDLER)];
-    for (let i = 0; i < 3; i += 1) handlers.push(await signIn(url, (await createUser(url, admin, 'handler')).email, TEST_PASSWORD));
+    for (let i = 0; i < 3; i += 1)
+      handlers.push(await signIn(url, (await createUser(url, admin, 'handler')).email, TEST_PASSWORD));
     const observer = await deck.token(OBSERVER);
     const clients = await Promise.all(
       Array.from({ length: 50 }, async () => {
@@ -97,7 +130,11 @@ describe('live lineup over socket.io', () => {
 
     const final = await deck.snapshot(cycle.id);
     expect(final.version).toBe(start.version + 200);
-    await eventually(() => clients.every((client) => client.received.length >= 200), 30_000, 'all 50 clients to get 200 changes');
+    await eventually(
+      () => clients.every((client) => client.received.length >= 200),
+      30_000,
+      'all 50 clients to get 200 changes',
+    );
     for (const client of clients) {
       expect(versionsOf(client.received)).toEqual(range(start.version + 1, 200));
       expect(applyLineupChanges(client.snapshot, client.received)).toEqual(final);
@@ -147,7 +184,11 @@ describe('live lineup over socket.io', () => {
     const malformed = await join(socket, { cycleId: 'seven' as unknown as number });
     expect(malformed).toMatchObject({ ok: false, code: 'validation_failed' });
     expect(malformed.ok === false && malformed.message).toContain('cycleId');
-    expect(await join(socket, { cycleId: 999_999 })).toEqual({ ok: false, code: 'not_found', message: 'Cycle 999999 does not exist.' });
+    expect(await join(socket, { cycleId: 999_999 })).toEqual({
+      ok: false,
+      code: 'not_found',
+      message: 'Cycle 999999 does not exist.',
+    });
   });
 
   describe('refuses a connection', () => {
@@ -194,7 +235,9 @@ describe('live lineup over socket.io', () => {
       const cut = await open(await shortLived());
       const kept = await open(await shortLived());
       const expired = new Promise<void>((resolve) => cut.once('session:expired', () => resolve()));
-      const refreshed = await kept.timeout(5_000).emitWithAck('session:refresh', { accessToken: await deck.token(OBSERVER) });
+      const refreshed = await kept
+        .timeout(5_000)
+        .emitWithAck('session:refresh', { accessToken: await deck.token(OBSERVER) });
       expect(refreshed).toMatchObject({ ok: true });
 
       await expired;
@@ -212,12 +255,19 @@ describe('live lineup over socket.io', () => {
     const slot = held.slots.find((candidate) => candidate.id === lane.slotIds[0])!;
     const move = { slotId: slot.id, slotVersion: slot.version, toCatapultId: null, toIndex: 0, targetLaneOrder: [] };
 
-    const unanswered = await (socket as unknown as { timeout(ms: number): { emitWithAck(event: string, body: object): Promise<unknown> } })
+    const unanswered = await (
+      socket as unknown as { timeout(ms: number): { emitWithAck(event: string, body: object): Promise<unknown> } }
+    )
       .timeout(500)
       .emitWithAck('lineup:move', move)
-      .then(() => 'answered', () => 'no answer');
+      .then(
+        () => 'answered',
+        () => 'no answer',
+      );
     expect(unanswered).toBe('no answer');
-    const refresh = await socket.timeout(5_000).emitWithAck('session:refresh', { accessToken: await deck.token(HANDLER) });
+    const refresh = await socket
+      .timeout(5_000)
+      .emitWithAck('session:refresh', { accessToken: await deck.token(HANDLER) });
     expect(refresh).toEqual({ ok: false, message: 'That token belongs to someone else.' });
     const rest = await deck.call(pilot(1), 'post', `/api/cycles/${cycle.id}/lineup/moves`, move);
     expect(rest.status).toBe(403);

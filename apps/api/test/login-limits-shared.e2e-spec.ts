@@ -33,7 +33,10 @@ describe('sign-in limits shared by several API processes through Redis', () => {
     await Promise.all(apps.map((app) => app.close()));
     stopRedis(redisPort);
     rmSync(redisDir, { recursive: true, force: true });
-    for (const [name, value] of [['LOGIN_RATE_LIMIT', previous.limit], ['REDIS_URL', previous.redis]] as const) {
+    for (const [name, value] of [
+      ['LOGIN_RATE_LIMIT', previous.limit],
+      ['REDIS_URL', previous.redis],
+    ] as const) {
       if (value === undefined) delete process.env[name];
       else process.env[name] = value;
     }
@@ -41,11 +44,17 @@ describe('sign-in limits shared by several API processes through Redis', () => {
 
   it('counts the attempts made through either process together: the sixth is refused wherever it lands', async () => {
     for (let i = 0; i < 5; i += 1) {
-      const status = (await request(urls[i % 2]).post('/api/auth/login').send({ email: 'observer@catline.example', password: 'wrong guess' })).status;
+      const status = (
+        await request(urls[i % 2])
+          .post('/api/auth/login')
+          .send({ email: 'observer@catline.example', password: 'wrong guess' })
+      ).status;
       expect({ attempt: i + 1, status }).toEqual({ attempt: i + 1, status: 401 });
     }
     for (const url of urls) {
-      const refused = await request(url).post('/api/auth/login').send({ email: 'observer@catline.example', password: 'catline-demo' });
+      const refused = await request(url)
+        .post('/api/auth/login')
+        .send({ email: 'observer@catline.example', password: 'catline-demo' });
       expect(refused.status).toBe(429);
     }
   });

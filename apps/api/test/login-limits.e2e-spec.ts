@@ -14,8 +14,16 @@ const { startTestApp } = await import('./support/test-app.js');
 /** The same address as the collation compares it: accents, full-width letters and case changed. */
 function lookalikes(email: string): string[] {
   const [local, domain] = email.split('@');
-  const fullWidth = [...local].map((c) => (/[a-z]/.test(c) ? String.fromCharCode(c.charCodeAt(0) + 0xfee0) : c)).join('');
-  return [`${local.replace('e', 'é')}@${domain}`, `${fullWidth}@${domain}`, `${local.toUpperCase()}@${domain}`, `${local.replace('o', 'ö')}@${domain}`, ` ${email}`];
+  const fullWidth = [...local]
+    .map((c) => (/[a-z]/.test(c) ? String.fromCharCode(c.charCodeAt(0) + 0xfee0) : c))
+    .join('');
+  return [
+    `${local.replace('e', 'é')}@${domain}`,
+    `${fullWidth}@${domain}`,
+    `${local.toUpperCase()}@${domain}`,
+    `${local.replace('o', 'ö')}@${domain}`,
+    ` ${email}`,
+  ];
 }
 
 describe('sign-in and password-reset limits', () => {
@@ -32,7 +40,10 @@ describe('sign-in and password-reset limits', () => {
 
   afterAll(async () => {
     await app.close();
-    for (const [name, value] of [['LOGIN_RATE_LIMIT', previous.login], ['PASSWORD_RESET_RATE_LIMIT', previous.reset]] as const) {
+    for (const [name, value] of [
+      ['LOGIN_RATE_LIMIT', previous.login],
+      ['PASSWORD_RESET_RATE_LIMIT', previous.reset],
+    ] as const) {
       if (value === undefined) delete process.env[name];
       else process.env[name] = value;
     }
@@ -44,7 +55,8 @@ describe('sign-in and password-reset limits', () => {
   describe('sign-in', () => {
     it('counts the attempts of one person however the e-mail is typed: accents, width, case', async () => {
       const person = await createUser(url, admin, 'pilot');
-      for (const typed of lookalikes(person.email)) expect({ typed, status: (await login(typed, 'not the password')).status }).toEqual({ typed, status: 401 });
+      for (const typed of lookalikes(person.email))
+        expect({ typed, status: (await login(typed, 'not the password')).status }).toEqual({ typed, status: 401 });
 
       const refused = await login(person.email, TEST_PASSWORD);
       expect(refused.status).toBe(429);
@@ -88,14 +100,22 @@ describe('sign-in and password-reset limits', () => {
       const deadline = Date.now() + 10_000;
       let queued = 0;
       while (queued === 0 && Date.now() < deadline) {
-        queued = Number((await dataSource.query<{ n: string }[]>('SELECT COUNT(*) AS n FROM password_links WHERE user_id = ?', [person.id]))[0].n);
+        queued = Number(
+          (
+            await dataSource.query<{ n: string }[]>('SELECT COUNT(*) AS n FROM password_links WHERE user_id = ?', [
+              person.id,
+            ])
+          )[0].n,
+        );
         if (queued === 0) await new Promise((resolve) => setTimeout(resolve, 100));
       }
       expect(queued).toBe(1);
     });
 
     it('refuses a burst from one client address across many addresses', async () => {
-      const answers = await Promise.all(Array.from({ length: 60 }, (_, i) => reset(`burst${i}@catline.example`).then((response) => response.status)));
+      const answers = await Promise.all(
+        Array.from({ length: 60 }, (_, i) => reset(`burst${i}@catline.example`).then((response) => response.status)),
+      );
       expect(answers.filter((status) => status === 429).length).toBeGreaterThan(20);
       expect(answers.every((status) => status === 202 || status === 429)).toBe(true);
     });
@@ -105,7 +125,8 @@ describe('sign-in and password-reset limits', () => {
   describe('sign-in from one client address', () => {
     it('refuses guessing across many addresses, even the right password of another person', async () => {
       const statuses: number[] = [];
-      for (let i = 0; i < 60 && !statuses.includes(429); i += 1) statuses.push((await login(`guess${i}@catline.example`, 'x')).status);
+      for (let i = 0; i < 60 && !statuses.includes(429); i += 1)
+        statuses.push((await login(`guess${i}@catline.example`, 'x')).status);
       expect(statuses.at(-1)).toBe(429);
       expect((await login('handler@catline.example', 'catline-demo')).status).toBe(429);
     });

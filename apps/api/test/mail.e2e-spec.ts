@@ -59,14 +59,20 @@ describe('mail through the local mail catcher', () => {
 
   it('invites a person added without a password: the mailed link sets it once, and they sign in', async () => {
     const email = `${unique('invitee', 14).toLowerCase()}@catline.example`;
-    const created = await request(url).post('/api/users').set(bearer(admin)).send({ email, name: 'Ines Invited', role: 'observer' });
+    const created = await request(url)
+      .post('/api/users')
+      .set(bearer(admin))
+      .send({ email, name: 'Ines Invited', role: 'observer' });
     expect(created.status).toBe(201);
 
     const [mail] = await catcher.mailsTo(email);
     expect(mail.subject).toBe('Your Catline account: choose a password');
     expect(mail.text).toContain('Hello Ines Invited,');
     const token = tokenIn(mail.text, '/invitation');
-    const stored = await database.query<{ token_hash: string }[]>('SELECT token_hash FROM password_links WHERE user_id = ?', [created.body.id]);
+    const stored = await database.query<{ token_hash: string }[]>(
+      'SELECT token_hash FROM password_links WHERE user_id = ?',
+      [created.body.id],
+    );
     expect(stored).toEqual([{ token_hash: sha256(token) }]);
     expect((await login(email, NEW_PASSWORD)).status).toBe(401);
 
@@ -76,7 +82,9 @@ describe('mail through the local mail catcher', () => {
     expect(session.status).toBe(200);
     expect(session.body.user).toMatchObject({ email, role: 'observer' });
 
-    const reused = await request(url).post('/api/auth/invitations/accept').send({ token, newPassword: 'yet another pass phrase' });
+    const reused = await request(url)
+      .post('/api/auth/invitations/accept')
+      .send({ token, newPassword: 'yet another pass phrase' });
     expect(reused.status).toBe(400);
     expect(reused.body.code).toBe('link_invalid');
     expect((await login(email, NEW_PASSWORD)).status).toBe(200);
@@ -84,7 +92,10 @@ describe('mail through the local mail catcher', () => {
 
   it('sends a new invitation on request, after which the earlier link no longer works', async () => {
     const email = `${unique('reinvite', 14).toLowerCase()}@catline.example`;
-    const created = await request(url).post('/api/users').set(bearer(admin)).send({ email, name: 'Rafe Reinvited', role: 'pilot', squadronId: 1 });
+    const created = await request(url)
+      .post('/api/users')
+      .set(bearer(admin))
+      .send({ email, name: 'Rafe Reinvited', role: 'pilot', squadronId: 1 });
     const first = tokenIn((await catcher.mailsTo(email))[0].text, '/invitation');
     const again = await request(url).post(`/api/users/${created.body.id}/invitation`).set(bearer(admin));
     expect(again.status).toBe(202);
@@ -92,8 +103,14 @@ describe('mail through the local mail catcher', () => {
     expect(mails).toHaveLength(2);
     const second = mails.map((mail) => tokenIn(mail.text, '/invitation')).find((token) => token !== first)!;
 
-    expect((await request(url).post('/api/auth/invitations/accept').send({ token: first, newPassword: NEW_PASSWORD })).status).toBe(400);
-    expect((await request(url).post('/api/auth/invitations/accept').send({ token: second, newPassword: NEW_PASSWORD })).status).toBe(204);
+    expect(
+      (await request(url).post('/api/auth/invitations/accept').send({ token: first, newPassword: NEW_PASSWORD }))
+        .status,
+    ).toBe(400);
+    expect(
+      (await request(url).post('/api/auth/invitations/accept').send({ token: second, newPassword: NEW_PASSWORD }))
+        .status,
+    ).toBe(204);
     const refused = await request(url).post(`/api/users/${created.body.id}/invitation`).set(bearer(admin));
     expect(refused.status).toBe(409);
     expect(refused.body.code).toBe('cannot_invite');
@@ -112,16 +129,23 @@ describe('mail through the local mail catcher', () => {
     const token = tokenIn(mail.text, '/reset-password');
     // A second request within the minute queues no second mail.
     await request(url).post('/api/auth/password-reset').send({ email: person.email });
-    const wrongRoute = await request(url).post('/api/auth/invitations/accept').send({ token, newPassword: NEW_PASSWORD });
+    const wrongRoute = await request(url)
+      .post('/api/auth/invitations/accept')
+      .send({ token, newPassword: NEW_PASSWORD });
     expect(wrongRoute.body.code).toBe('link_invalid');
     const short = await request(url).post('/api/auth/password-reset/confirm').send({ token, newPassword: 'short' });
     expect(short.status).toBe(400);
 
-    const confirmed = await request(url).post('/api/auth/password-reset/confirm').send({ token, newPassword: NEW_PASSWORD });
+    const confirmed = await request(url)
+      .post('/api/auth/password-reset/confirm')
+      .send({ token, newPassword: NEW_PASSWORD });
     expect(confirmed.status).toBe(204);
     expect((await login(person.email, TEST_PASSWORD)).status).toBe(401);
     expect((await login(person.email, NEW_PASSWORD)).status).toBe(200);
-    expect((await request(url).post('/api/auth/password-reset/confirm').send({ token, newPassword: 'one more pass phrase' })).status).toBe(400);
+    expect(
+      (await request(url).post('/api/auth/password-reset/confirm').send({ token, newPassword: 'one more pass phrase' }))
+        .status,
+    ).toBe(400);
     await expect(catcher.mailsTo(person.email, 2, 2_500)).resolves.toHaveLength(1);
   });
 
@@ -139,8 +163,13 @@ describe('mail through the local mail catcher', () => {
         'SELECT to_address, attempts, sent_at, last_error FROM mail_outbox WHERE dedupe_key LIKE ? ORDER BY to_address',
         [`cycle-summary:${cycle.id}:%`],
       );
-    const failed = await eventually(summaries, (rows) => rows.length === 2 && rows.every((row) => row.attempts >= 1 && row.last_error !== null));
-    expect(failed.map((row) => ({ to: row.to_address, sent: row.sent_at !== null, failedOnce: row.last_error !== null }))).toEqual([
+    const failed = await eventually(
+      summaries,
+      (rows) => rows.length === 2 && rows.every((row) => row.attempts >= 1 && row.last_error !== null),
+    );
+    expect(
+      failed.map((row) => ({ to: row.to_address, sent: row.sent_at !== null, failedOnce: row.last_error !== null })),
+    ).toEqual([
       { to: 'cinderwrights@catline.example', sent: false, failedOnce: true },
       { to: 'driftmenders@catline.example', sent: false, failedOnce: true },
     ]);
@@ -151,7 +180,12 @@ describe('mail through the local mail catcher', () => {
     // A few more rounds of the sender: nothing goes out twice.
     await new Promise((resolve) => setTimeout(resolve, 2_500));
     const caught = (await catcher.mails()).filter((mail) => mail.subject.startsWith(`Cycle ${cycle.number} closed:`));
-    expect(caught.map((mail) => mail.to[0].address).sort()).toEqual(['cinderwrights@catline.example', 'driftmenders@catline.example']);
-    expect(caught.find((mail) => mail.to[0].address === 'cinderwrights@catline.example')!.text).toContain('C27  WKD-41  Strike training');
+    expect(caught.map((mail) => mail.to[0].address).sort()).toEqual([
+      'cinderwrights@catline.example',
+      'driftmenders@catline.example',
+    ]);
+    expect(caught.find((mail) => mail.to[0].address === 'cinderwrights@catline.example')!.text).toContain(
+      'C27  WKD-41  Strike training',
+    );
   });
 });

@@ -33,12 +33,17 @@ describe('deeply nested JSON bodies', () => {
 
   it('refuses one level past the limit and reads the body at the limit', async () => {
     // 31 arrays in the object that holds them: 32 levels in all, which the validation then refuses as a field.
-    expect((await post('/api/auth/password-reset', `{"email":${nestedArrays(31)}}`)).body.code).toBe('validation_failed');
+    expect((await post('/api/auth/password-reset', `{"email":${nestedArrays(31)}}`)).body.code).toBe(
+      'validation_failed',
+    );
     expect((await post('/api/auth/password-reset', `{"email":${nestedArrays(32)}}`)).body.code).toBe('json_too_deep');
   });
 
   it('counts brackets inside strings as text, not as nesting', async () => {
-    const response = await post('/api/auth/password-reset', JSON.stringify({ email: `${'['.repeat(100)}@catline.example` }));
+    const response = await post(
+      '/api/auth/password-reset',
+      JSON.stringify({ email: `${'['.repeat(100)}@catline.example` }),
+    );
     expect(response.body.code).toBe('validation_failed');
   });
 

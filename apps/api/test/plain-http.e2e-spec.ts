@@ -22,7 +22,9 @@ async function withApp(overrides: Record<string, string>, check: (url: string) =
 }
 
 const login = (url: string) =>
-  request(url).post('/api/auth/login').send({ email: demoEmail('observer'), password: 'catline-demo' });
+  request(url)
+    .post('/api/auth/login')
+    .send({ email: demoEmail('observer'), password: 'catline-demo' });
 
 const refreshCookie = (response: request.Response) =>
   ([] as string[]).concat(response.headers['set-cookie'] ?? []).find((cookie) => cookie.startsWith('catline_refresh='));

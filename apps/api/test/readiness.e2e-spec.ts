@@ -40,7 +40,10 @@ describe('readiness steps and launch', () => {
     const { cycle, first, second } = await executingCycle(pilot(4));
     const skipped = await deck.step(cycle.id, first.id, 'on_catapult');
     expect(skipped.status).toBe(409);
-    expect(skipped.body).toMatchObject({ code: 'wrong_step', message: 'C21 is planned; the next step is taxiing, not on catapult.' });
+    expect(skipped.body).toMatchObject({
+      code: 'wrong_step',
+      message: 'C21 is planned; the next step is taxiing, not on catapult.',
+    });
     const behind = await deck.step(cycle.id, second.id, 'taxiing');
     expect(behind.status).toBe(409);
     expect(behind.body).toMatchObject({ code: 'not_current_aircraft', message: 'C22 is not next on cat 1; C21 is.' });
@@ -62,7 +65,10 @@ describe('readiness steps and launch', () => {
 
     const agreed = await deck.step(cycle.id, first.id, 'weight_agreed');
     expect(agreed.status).toBe(409);
-    expect(agreed.body).toMatchObject({ code: 'weight_not_agreed', message: 'The pilot of C21 has not acknowledged the gross weight of 44,000 lb yet.' });
+    expect(agreed.body).toMatchObject({
+      code: 'weight_not_agreed',
+      message: 'The pilot of C21 has not acknowledged the gross weight of 44,000 lb yet.',
+    });
     const launch = await deck.launch(cycle.id, await deck.slot(cycle.id, first.id), launchKey());
     expect(launch.status).toBe(409);
     expect(launch.body.code).toBe('wrong_step');
@@ -85,17 +91,23 @@ describe('readiness steps and launch', () => {
     expect(wrong.status).toBe(409);
     expect(wrong.body).toMatchObject({
       code: 'weight_mismatch',
-      message: 'You entered 43,000 lb; the planned gross weight of C21 is 44,000 lb. Settle it with the catapult officer.',
+      message:
+        'You entered 43,000 lb; the planned gross weight of C21 is 44,000 lb. Settle it with the catapult officer.',
     });
   });
 
   it('suspends with a reason, resumes to on catapult, and launches after the steps again', async () => {
     const { cycle, first } = await executingCycle(pilot(8));
     const ready = await deck.readyToLaunch(cycle.id, first.id, pilot(8));
-    const suspended = await deck.call(catapultOfficer(1), 'post', `/api/cycles/${cycle.id}/lineup/slots/${first.id}/suspend`, {
-      slotVersion: ready.version,
-      reason: 'Launch bar not seated',
-    });
+    const suspended = await deck.call(
+      catapultOfficer(1),
+      'post',
+      `/api/cycles/${cycle.id}/lineup/slots/${first.id}/suspend`,
+      {
+        slotVersion: ready.version,
+        reason: 'Launch bar not seated',
+      },
+    );
     expect(suspended.status).toBe(200);
     expect(suspended.body.change.summary).toBe('C21 suspended on cat 1: Launch bar not seated');
     expect((await deck.launch(cycle.id, await deck.slot(cycle.id, first.id), launchKey())).status).toBe(409);
@@ -110,7 +122,11 @@ describe('readiness steps and launch', () => {
 
   it('refuses a no-go launch without an override reason and records the reason when given', async () => {
     // Wind from 60° off the bow at 30 kt while the ship lies still: far over the 15 kt crosswind limit.
-    const { cycle, first } = await executingCycle(pilot(9), { shipSpeedKt: 0, trueWindFromDeg: 60, trueWindSpeedKt: 30 });
+    const { cycle, first } = await executingCycle(pilot(9), {
+      shipSpeedKt: 0,
+      trueWindFromDeg: 60,
+      trueWindSpeedKt: 30,
+    });
     const ready = await deck.readyToLaunch(cycle.id, first.id, pilot(9));
     expect(ready.figures!.go).toBe(false);
 
@@ -119,7 +135,9 @@ describe('readiness steps and launch', () => {
     expect(refused.body.code).toBe('no_go');
     expect(refused.body.message).toContain('Crosswind');
 
-    const overridden = await deck.launch(cycle.id, ready, launchKey(), { overrideReason: 'Air boss accepts the crosswind' });
+    const overridden = await deck.launch(cycle.id, ready, launchKey(), {
+      overrideReason: 'Air boss accepts the crosswind',
+    });
     expect(overridden.status).toBe(200);
     expect(overridden.body.change.summary).toBe('C21 launched from cat 1 on override: Air boss accepts the crosswind');
     expect((await deck.slot(cycle.id, first.id)).overrideReason).toBe('Air boss accepts the crosswind');
@@ -132,7 +150,9 @@ describe('readiness steps and launch', () => {
     const path = `/api/cycles/${cycle.id}/lineup/catapults/${catapultId}/status`;
     await deck.ok(HANDLER, 'post', path, { status: 'down', basisStatus: 'up' });
     try {
-      const response = await deck.launch(cycle.id, await deck.slot(cycle.id, first.id), launchKey(), { overrideReason: 'Try anyway' });
+      const response = await deck.launch(cycle.id, await deck.slot(cycle.id, first.id), launchKey(), {
+        overrideReason: 'Try anyway',
+      });
       expect(response.status).toBe(409);
       expect(response.body).toMatchObject({ code: 'catapult_unavailable', message: 'Cat 1 is down.' });
     } finally {

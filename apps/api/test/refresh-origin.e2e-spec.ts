@@ -18,17 +18,28 @@ describe('POST /auth/refresh is for the Catline page only', () => {
     await app.close();
   });
 
-  const cookie = async () => refreshCookie(await request(url).post('/api/auth/login').send({ email: 'observer@catline.example', password: 'catline-demo' }));
+  const cookie = async () =>
+    refreshCookie(
+      await request(url).post('/api/auth/login').send({ email: 'observer@catline.example', password: 'catline-demo' }),
+    );
 
-  it('refuses another site\'s origin and a request without the X-Catline-Refresh header, keeping the cookie usable', async () => {
+  it("refuses another site's origin and a request without the X-Catline-Refresh header, keeping the cookie usable", async () => {
     const held = await cookie();
-    const foreign = await request(url).post('/api/auth/refresh').set('Cookie', held).set('Origin', 'http://elsewhere.example').set('X-Catline-Refresh', '1');
+    const foreign = await request(url)
+      .post('/api/auth/refresh')
+      .set('Cookie', held)
+      .set('Origin', 'http://elsewhere.example')
+      .set('X-Catline-Refresh', '1');
     expect(foreign.status).toBe(403);
     expect(foreign.body.code).toBe('refresh_refused');
     const bare = await request(url).post('/api/auth/refresh').set('Cookie', held).set('Origin', origin);
     expect(bare.status).toBe(403);
 
-    const own = await request(url).post('/api/auth/refresh').set('Cookie', held).set('Origin', origin).set('X-Catline-Refresh', '1');
+    const own = await request(url)
+      .post('/api/auth/refresh')
+      .set('Cookie', held)
+      .set('Origin', origin)
+      .set('X-Catline-Refresh', '1');
     expect(own.status).toBe(200);
   });
 });

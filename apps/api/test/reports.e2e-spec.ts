@@ -12,7 +12,15 @@ import {
 import type { INestApplication } from '@nestjs/common';
 import { parse } from 'csv-parse/sync';
 import request from 'supertest';
-import { AIR_OPS, HANDLER, LineupDriver, OBSERVER, catapultOfficer, launchKey, pilot } from './support/lineup-fixtures.js';
+import {
+  AIR_OPS,
+  HANDLER,
+  LineupDriver,
+  OBSERVER,
+  catapultOfficer,
+  launchKey,
+  pilot,
+} from './support/lineup-fixtures.js';
 import { bearer } from './support/sign-in.js';
 import { startTestApp } from './support/test-app.js';
 
@@ -58,7 +66,10 @@ describe('cycle reports, exports and shot counts', () => {
   let range: { from: string; to: string };
   let shotsBefore: ShotCounts;
 
-  const get = async (path: string, email = OBSERVER) => request(url).get(path).set(bearer(await deck.token(email)));
+  const get = async (path: string, email = OBSERVER) =>
+    request(url)
+      .get(path)
+      .set(bearer(await deck.token(email)));
 
   async function fly(): Promise<Flown> {
     const now = Date.now();
@@ -67,7 +78,8 @@ describe('cycle reports, exports and shot counts', () => {
       windowStartAt: iso(now - 10 * MINUTE),
       windowEndAt: iso(now + 50 * MINUTE),
     });
-    const add = async (side: string, fields: Parameters<LineupDriver['addSlot']>[2] = {}) => (await deck.addSlot(cycle.id, side, fields)).id;
+    const add = async (side: string, fields: Parameters<LineupDriver['addSlot']>[2] = {}) =>
+      (await deck.addSlot(cycle.id, side, fields)).id;
     const ids: Record<string, number> = {
       C25: await add('C25', { pilotEmail: pilot(2) }),
       C26: await add('C26', { pilotEmail: pilot(3) }),
@@ -82,7 +94,10 @@ describe('cycle reports, exports and shot counts', () => {
     await deck.place(cycle.id, ids['C26'], 1, 0);
     for (const side of ['D37', 'D38', 'D39']) await deck.place(cycle.id, ids[side], 2);
     const down = await deck.slot(cycle.id, ids['D38']);
-    await deck.ok(HANDLER, 'post', `/api/cycles/${cycle.id}/lineup/slots/${down.id}/down`, { slotVersion: down.version, spareSlotId: ids['C27'] });
+    await deck.ok(HANDLER, 'post', `/api/cycles/${cycle.id}/lineup/slots/${down.id}/down`, {
+      slotVersion: down.version,
+      spareSlotId: ids['C27'],
+    });
 
     await deck.start(cycle.id);
     const atStart = await deck.snapshot(cycle.id);
@@ -106,8 +121,12 @@ describe('cycle reports, exports and shot counts', () => {
 
     await deck.readyToLaunch(cycle.id, ids['C25'], pilot(2));
     const tensioned = await deck.slot(cycle.id, ids['C25']);
-    await deck.ok(catapultOfficer(1), 'post', `/api/cycles/${cycle.id}/lineup/slots/${tensioned.id}/suspend`, { slotVersion: tensioned.version, reason: SUSPEND });
-    for (const to of ['resume', 'weight_agreed', 'tensioned'] as const) expect((await deck.step(cycle.id, ids['C25'], to)).status).toBe(200);
+    await deck.ok(catapultOfficer(1), 'post', `/api/cycles/${cycle.id}/lineup/slots/${tensioned.id}/suspend`, {
+      slotVersion: tensioned.version,
+      reason: SUSPEND,
+    });
+    for (const to of ['resume', 'weight_agreed', 'tensioned'] as const)
+      expect((await deck.step(cycle.id, ids['C25'], to)).status).toBe(200);
     await launch('C25');
     await deck.readyToLaunch(cycle.id, ids['C27'], pilot(5));
     await launch('C27');
@@ -132,8 +151,10 @@ describe('cycle reports, exports and shot counts', () => {
 
   describe('the cycle report', () => {
     let report: CycleReport;
-    const line = (side: string): ReportLaunch => report.catapults.flatMap((catapult) => catapult.launches).find((entry) => entry.sideNumber === side)!;
-    const planned = (side: string): string => flown.atStart.slots.find((slot) => slot.id === flown.ids[side])!.projectedLaunchAt!;
+    const line = (side: string): ReportLaunch =>
+      report.catapults.flatMap((catapult) => catapult.launches).find((entry) => entry.sideNumber === side)!;
+    const planned = (side: string): string =>
+      flown.atStart.slots.find((slot) => slot.id === flown.ids[side])!.projectedLaunchAt!;
 
     beforeAll(async () => {
       const response = await get(`/api/cycles/${flown.cycle.id}/report`);
@@ -167,14 +188,20 @@ describe('cycle reports, exports and shot counts', () => {
       expect(cat(1).launches.map((entry) => entry.sideNumber)).toEqual(['C26', 'C25']);
       expect(cat(2).launches.map((entry) => entry.sideNumber)).toEqual(['D37', 'C27', 'D39']);
       expect(cat(3).launches).toEqual([]);
-      expect(cat(1).intervals.map((interval) => interval.seconds)).toEqual([seconds(flown.launchedAt['C26'], flown.launchedAt['C25'])]);
-      expect(cat(2).intervals.map((interval) => interval.seconds)).toEqual([seconds(flown.launchedAt['D37'], flown.launchedAt['C27'])]);
+      expect(cat(1).intervals.map((interval) => interval.seconds)).toEqual([
+        seconds(flown.launchedAt['C26'], flown.launchedAt['C25']),
+      ]);
+      expect(cat(2).intervals.map((interval) => interval.seconds)).toEqual([
+        seconds(flown.launchedAt['D37'], flown.launchedAt['C27']),
+      ]);
 
       // Catapults 1 and 2 are the bow pair: its four launches in the order they were made.
       const bow = report.pairs.find((pair) => pair.pair === 1)!;
       const order = ['C26', 'D37', 'C25', 'C27'];
       expect(bow.catapultNumbers).toEqual([1, 2]);
-      expect(bow.intervals.map((interval) => [interval.fromSideNumber, interval.toSideNumber, interval.seconds])).toEqual(
+      expect(
+        bow.intervals.map((interval) => [interval.fromSideNumber, interval.toSideNumber, interval.seconds]),
+      ).toEqual(
         order.slice(1).map((side, i) => [order[i], side, seconds(flown.launchedAt[order[i]], flown.launchedAt[side])]),
       );
       const gaps = bow.intervals.map((interval) => interval.seconds);
@@ -194,22 +221,73 @@ describe('cycle reports, exports and shot counts', () => {
 
     it('lists the suspend, the down aircraft with its spare and the override', () => {
       expect(report.suspends).toHaveLength(1);
-      expect(report.suspends[0]).toMatchObject({ sideNumber: 'C25', squadronCode: 'CWR', catapultNumber: 1, reason: SUSPEND, by: 'Lia Corrimand' });
+      expect(report.suspends[0]).toMatchObject({
+        sideNumber: 'C25',
+        squadronCode: 'CWR',
+        catapultNumber: 1,
+        reason: SUSPEND,
+        by: 'Lia Corrimand',
+      });
       expect(Date.parse(report.suspends[0].resumedAt!)).toBeGreaterThanOrEqual(Date.parse(report.suspends[0].at));
       expect(report.downs).toEqual([
-        expect.objectContaining({ sideNumber: 'D38', squadronCode: 'DFM', catapultNumber: 2, by: 'Tomas Ebberhold', spare: { slotId: flown.ids['C27'], sideNumber: 'C27', squadronCode: 'CWR' } }),
+        expect.objectContaining({
+          sideNumber: 'D38',
+          squadronCode: 'DFM',
+          catapultNumber: 2,
+          by: 'Tomas Ebberhold',
+          spare: { slotId: flown.ids['C27'], sideNumber: 'C27', squadronCode: 'CWR' },
+        }),
       ]);
       expect(report.overrides).toEqual([
-        { slotId: flown.ids['D37'], sideNumber: 'D37', squadronCode: 'DFM', catapultNumber: 2, launchedAt: flown.launchedAt['D37'], reason: OVERRIDE, by: 'Sam Dellavint' },
+        {
+          slotId: flown.ids['D37'],
+          sideNumber: 'D37',
+          squadronCode: 'DFM',
+          catapultNumber: 2,
+          launchedAt: flown.launchedAt['D37'],
+          reason: OVERRIDE,
+          by: 'Sam Dellavint',
+        },
       ]);
     });
 
     it('sums the figures for the cycle and per squadron', () => {
       // C25, C26, C27 (CWR) and D37, D38, D39 (DFM); D38 down, D39 scratched; C26 and D37 inside the window.
-      expect(report.totals).toEqual({ aircraft: 6, launched: 4, onTime: 2, outsideWindow: 2, suspends: 1, down: 1, overrides: 1, scratched: 1 });
+      expect(report.totals).toEqual({
+        aircraft: 6,
+        launched: 4,
+        onTime: 2,
+        outsideWindow: 2,
+        suspends: 1,
+        down: 1,
+        overrides: 1,
+        scratched: 1,
+      });
       expect(report.squadrons.map(({ squadronId: _id, ...figures }) => figures)).toEqual([
-        { squadronCode: 'CWR', squadronName: 'Cinderwrights', aircraft: 3, launched: 3, onTime: 1, outsideWindow: 2, suspends: 1, down: 0, overrides: 0, scratched: 0 },
-        { squadronCode: 'DFM', squadronName: 'Driftmenders', aircraft: 3, launched: 1, onTime: 1, outsideWindow: 0, suspends: 0, down: 1, overrides: 1, scratched: 1 },
+        {
+          squadronCode: 'CWR',
+          squadronName: 'Cinderwrights',
+          aircraft: 3,
+          launched: 3,
+          onTime: 1,
+          outsideWindow: 2,
+          suspends: 1,
+          down: 0,
+          overrides: 0,
+          scratched: 0,
+        },
+        {
+          squadronCode: 'DFM',
+          squadronName: 'Driftmenders',
+          aircraft: 3,
+          launched: 1,
+          onTime: 1,
+          outsideWindow: 0,
+          suspends: 0,
+          down: 1,
+          overrides: 1,
+          scratched: 1,
+        },
       ]);
       const times = Object.values(flown.launchedAt).sort();
       expect(report).toMatchObject({ firstLaunchAt: times[0], lastLaunchAt: times[3] });
@@ -237,7 +315,9 @@ describe('cycle reports, exports and shot counts', () => {
       expect(replay.start).toMatchObject({ version: 0, slots: [], pool: [] });
       expect(replay.start.cycle).toMatchObject({ id: flown.cycle.id, state: 'planning', version: 0, slotCount: 0 });
       expect(replay.start.lanes.map((lane) => lane.slotIds)).toEqual([[], [], [], []]);
-      expect(replay.changes.map((change) => change.version)).toEqual(Array.from({ length: flown.final.version }, (_, i) => i + 1));
+      expect(replay.changes.map((change) => change.version)).toEqual(
+        Array.from({ length: flown.final.version }, (_, i) => i + 1),
+      );
     });
 
     it('rebuilds the lineup as it stood at the start and at the end', () => {
@@ -253,12 +333,37 @@ describe('cycle reports, exports and shot counts', () => {
       const response = await get(`/api/cycles/${flown.cycle.id}/slots.csv`);
       expect(response.status).toBe(200);
       expect(response.headers['content-type']).toBe('text/csv; charset=utf-8');
-      expect(response.headers['content-disposition']).toBe(`attachment; filename="cycle-${flown.cycle.number}-slots.csv"`);
+      expect(response.headers['content-disposition']).toBe(
+        `attachment; filename="cycle-${flown.cycle.number}-slots.csv"`,
+      );
       const { header, rows } = readCsv(response);
       expect(header).toEqual([
-        'slot_id', 'side_number', 'type', 'squadron', 'pilot', 'mission', 'gross_weight_lb', 'fuel_lb', 'stores', 'tanker',
-        'early_warning', 'spare', 'status', 'catapult', 'position', 'planned_catapult', 'planned_at', 'launched_at', 'delta_s',
-        'in_window', 'pilot_weight_ack_at', 'catapult_weight_ack_at', 'suspend_reason', 'override_reason', 'down_at', 'replaced_by',
+        'slot_id',
+        'side_number',
+        'type',
+        'squadron',
+        'pilot',
+        'mission',
+        'gross_weight_lb',
+        'fuel_lb',
+        'stores',
+        'tanker',
+        'early_warning',
+        'spare',
+        'status',
+        'catapult',
+        'position',
+        'planned_catapult',
+        'planned_at',
+        'launched_at',
+        'delta_s',
+        'in_window',
+        'pilot_weight_ack_at',
+        'catapult_weight_ack_at',
+        'suspend_reason',
+        'override_reason',
+        'down_at',
+        'replaced_by',
       ]);
       expect(rows.map((row) => row.side_number)).toEqual(['C25', 'C26', 'D37', 'D38', 'C27', 'D39']);
       const row = (side: string) => rows.find((candidate) => candidate.side_number === side)!;
@@ -288,29 +393,43 @@ describe('cycle reports, exports and shot counts', () => {
       const response = await get(`/api/cycles/${flown.cycle.id}/changes.csv`);
       expect(response.status).toBe(200);
       expect(response.headers['content-type']).toBe('text/csv; charset=utf-8');
-      expect(response.headers['content-disposition']).toBe(`attachment; filename="cycle-${flown.cycle.number}-changes.csv"`);
+      expect(response.headers['content-disposition']).toBe(
+        `attachment; filename="cycle-${flown.cycle.number}-changes.csv"`,
+      );
       const { header, rows } = readCsv(response);
       expect(header).toEqual(['version', 'at', 'kind', 'actor', 'actor_role', 'summary', 'command']);
-      const log = (await get(`/api/cycles/${flown.cycle.id}/lineup/changes?since=0`)).body as { version: number; kind: string; summary: string; at: string }[];
+      const log = (await get(`/api/cycles/${flown.cycle.id}/lineup/changes?since=0`)).body as {
+        version: number;
+        kind: string;
+        summary: string;
+        at: string;
+      }[];
       expect(rows.map((row) => [Number(row.version), row.kind, row.summary, row.at])).toEqual(
         log.map((change) => [change.version, change.kind, change.summary, change.at]),
       );
       expect(rows[0]).toMatchObject({ kind: 'slot_added', actor: 'Priya Quennevar', actor_role: 'air_operations' });
       expect(JSON.parse(rows[0].command)).toMatchObject({ type: 'add_slot', aircraftId: expect.any(Number) });
       const suspended = rows.find((row) => row.kind === 'slot_suspended')!;
-      expect(JSON.parse(suspended.command)).toMatchObject({ type: 'suspend', slotId: flown.ids['C25'], reason: SUSPEND });
+      expect(JSON.parse(suspended.command)).toMatchObject({
+        type: 'suspend',
+        slotId: flown.ids['C25'],
+        reason: SUSPEND,
+      });
     });
   });
 
   describe('shot counts', () => {
-    const shots = async (from: string, to: string, email = pilot(1)) => get(`/api/reports/shot-counts?from=${from}&to=${to}`, email);
+    const shots = async (from: string, to: string, email = pilot(1)) =>
+      get(`/api/reports/shot-counts?from=${from}&to=${to}`, email);
 
     it('counts the launches of the range per airframe and per catapult', async () => {
       const response = await shots(range.from, range.to);
       expect(response.status).toBe(200);
       const after = response.body as ShotCounts;
-      const airframe = (counts: ShotCounts, side: string) => counts.airframes.find((entry) => entry.sideNumber === side)!;
-      const catapult = (counts: ShotCounts, number: number) => counts.catapults.find((entry) => entry.number === number)!;
+      const airframe = (counts: ShotCounts, side: string) =>
+        counts.airframes.find((entry) => entry.sideNumber === side)!;
+      const catapult = (counts: ShotCounts, number: number) =>
+        counts.catapults.find((entry) => entry.number === number)!;
       const added = (pick: (counts: ShotCounts) => { launches: number; lifetimeShots: number }) => ({
         launches: pick(after).launches - pick(shotsBefore).launches,
         lifetime: pick(after).lifetimeShots - pick(shotsBefore).lifetimeShots,
@@ -320,7 +439,8 @@ describe('cycle reports, exports and shot counts', () => {
       for (const side of ['C25', 'C26', 'D37', 'C27']) {
         expect({ side, ...added((counts) => airframe(counts, side)) }).toEqual({ side, launches: 1, lifetime: 1 });
       }
-      for (const side of ['D38', 'D39']) expect({ side, ...added((counts) => airframe(counts, side)) }).toEqual({ side, launches: 0, lifetime: 0 });
+      for (const side of ['D38', 'D39'])
+        expect({ side, ...added((counts) => airframe(counts, side)) }).toEqual({ side, launches: 0, lifetime: 0 });
       expect(added((counts) => catapult(counts, 1))).toEqual({ launches: 2, lifetime: 2 });
       expect(added((counts) => catapult(counts, 2))).toEqual({ launches: 2, lifetime: 2 });
     });
@@ -331,7 +451,9 @@ describe('cycle reports, exports and shot counts', () => {
       const counts = response.body as ShotCounts;
       const fleet = (await get('/api/aircraft')).body as AircraftView[];
       expect(counts.totalLaunches).toBe(0);
-      expect(counts.airframes.map((entry) => entry.sideNumber).sort()).toEqual(fleet.map((plane) => plane.sideNumber).sort());
+      expect(counts.airframes.map((entry) => entry.sideNumber).sort()).toEqual(
+        fleet.map((plane) => plane.sideNumber).sort(),
+      );
       expect(counts.airframes.every((entry) => entry.launches === 0)).toBe(true);
       expect(counts.catapults.map((entry) => [entry.number, entry.launches])).toEqual([
         [1, 0],
@@ -346,27 +468,80 @@ describe('cycle reports, exports and shot counts', () => {
       const response = await get(`/api/reports/shot-counts.csv?from=${range.from}&to=${range.to}`);
       expect(response.status).toBe(200);
       expect(response.headers['content-type']).toBe('text/csv; charset=utf-8');
-      expect(response.headers['content-disposition']).toBe(`attachment; filename="shot-counts-${range.from}-to-${range.to}.csv"`);
+      expect(response.headers['content-disposition']).toBe(
+        `attachment; filename="shot-counts-${range.from}-to-${range.to}.csv"`,
+      );
       const { header, rows } = readCsv(response);
-      expect(header).toEqual(['kind', 'ship', 'catapult', 'side_number', 'type', 'squadron', 'launches', 'lifetime_shots']);
-      expect(rows.filter((row) => row.kind === 'airframe').map((row) => [row.side_number, row.type, row.squadron, Number(row.launches), Number(row.lifetime_shots)])).toEqual(
-        json.airframes.map((entry) => [entry.sideNumber, entry.typeDesignation, entry.squadronCode, entry.launches, entry.lifetimeShots]),
+      expect(header).toEqual([
+        'kind',
+        'ship',
+        'catapult',
+        'side_number',
+        'type',
+        'squadron',
+        'launches',
+        'lifetime_shots',
+      ]);
+      expect(
+        rows
+          .filter((row) => row.kind === 'airframe')
+          .map((row) => [row.side_number, row.type, row.squadron, Number(row.launches), Number(row.lifetime_shots)]),
+      ).toEqual(
+        json.airframes.map((entry) => [
+          entry.sideNumber,
+          entry.typeDesignation,
+          entry.squadronCode,
+          entry.launches,
+          entry.lifetimeShots,
+        ]),
       );
-      expect(rows.filter((row) => row.kind === 'catapult').map((row) => [row.ship, Number(row.catapult), Number(row.launches)])).toEqual(
-        json.catapults.map((entry) => [entry.shipName, entry.number, entry.launches]),
-      );
+      expect(
+        rows
+          .filter((row) => row.kind === 'catapult')
+          .map((row) => [row.ship, Number(row.catapult), Number(row.launches)]),
+      ).toEqual(json.catapults.map((entry) => [entry.shipName, entry.number, entry.launches]));
     });
 
     it.each([
-      ['a day the calendar lacks', 'from=2027-02-30&to=2027-03-01', 'invalid_date_range', 'from: 2027-02-30 is not a calendar day; write it as YYYY-MM-DD, e.g. 2027-01-31.'],
-      ['a range that ends before it starts', 'from=2027-03-02&to=2027-03-01', 'invalid_date_range', 'The range ends before it starts: to (2027-03-01) is earlier than from (2027-03-02).'],
-      ['a date in another format', 'from=05/01/2027&to=2027-03-01', 'validation_failed', 'Invalid request: from must be a day written YYYY-MM-DD, e.g. 2027-01-01'],
-      ['a missing end', 'from=2027-03-01', 'validation_failed', 'Invalid request: to must be a day written YYYY-MM-DD, e.g. 2027-01-31'],
-      ['an unknown parameter', 'from=2027-03-01&to=2027-03-02&squadron=CWR', 'validation_failed', 'Invalid request: property squadron should not exist'],
+      [
+        'a day the calendar lacks',
+        'from=2027-02-30&to=2027-03-01',
+        'invalid_date_range',
+        'from: 2027-02-30 is not a calendar day; write it as YYYY-MM-DD, e.g. 2027-01-31.',
+      ],
+      [
+        'a range that ends before it starts',
+        'from=2027-03-02&to=2027-03-01',
+        'invalid_date_range',
+        'The range ends before it starts: to (2027-03-01) is earlier than from (2027-03-02).',
+      ],
+      [
+        'a date in another format',
+        'from=05/01/2027&to=2027-03-01',
+        'validation_failed',
+        'Invalid request: from must be a day written YYYY-MM-DD, e.g. 2027-01-01',
+      ],
+      [
+        'a missing end',
+        'from=2027-03-01',
+        'validation_failed',
+        'Invalid request: to must be a day written YYYY-MM-DD, e.g. 2027-01-31',
+      ],
+      [
+        'an unknown parameter',
+        'from=2027-03-01&to=2027-03-02&squadron=CWR',
+        'validation_failed',
+        'Invalid request: property squadron should not exist',
+      ],
     ])('refuses %s with a readable 400', async (_name, query, code, message) => {
       for (const path of ['/api/reports/shot-counts', '/api/reports/shot-counts.csv']) {
         const response = await get(`${path}?${query}`);
-        expect({ path, status: response.status, code: response.body.code, message: response.body.message }).toEqual({ path, status: 400, code, message });
+        expect({ path, status: response.status, code: response.body.code, message: response.body.message }).toEqual({
+          path,
+          status: 400,
+          code,
+          message,
+        });
       }
     });
   });

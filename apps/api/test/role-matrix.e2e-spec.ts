@@ -50,9 +50,9 @@ describe('role matrix', () => {
       tokenOf: (role) => tokens.get(role)!,
     };
     const example = (await route.example?.(context)) ?? {};
-    const pending = request(url)[route.method.toLowerCase() as 'get'](fillPath(route.path, example.params))
-      .query(example.query ?? {})
-      .set(example.headers ?? {});
+    const method = route.method.toLowerCase() as 'get';
+    const target = request(url)[method](fillPath(route.path, example.params));
+    const pending = target.query(example.query ?? {}).set(example.headers ?? {});
     if (caller) pending.set(bearer(tokens.get(caller)!));
     return example.body === undefined ? pending : pending.send(example.body);
   }
@@ -66,31 +66,37 @@ describe('role matrix', () => {
   });
 
   it('lets no row count 401 or 403 as an acceptable refusal', () => {
-    expect(matrixRoutes.filter((route) => route.refusals?.some((status) => status === 401 || status === 403))).toEqual([]);
+    expect(matrixRoutes.filter((route) => route.refusals?.some((status) => status === 401 || status === 403))).toEqual(
+      [],
+    );
   });
 
-  it.each(matrixRoutes.filter((route) => route.notOwner).map((route) => [key(route.method, route.path), route] as const))(
-    '%s refuses a second person of the permitted role, who does not own the target',
-    async (_name, route) => {
-      const [role] = route.allowed as readonly Role[];
-      const context: MatrixContext = { baseUrl: url, caller: role, allowed: true, tokenOf: (of) => tokens.get(of)! };
-      const example = await route.example!(context);
-      const { cycleId, slotId } = example.params as { cycleId: number; slotId: number };
-      const before = await request(url).get(`/api/cycles/${cycleId}/lineup`).set(bearer(tokens.get('observer')!));
-      const response = await request(url)
-        .post(fillPath(route.path, example.params))
-        .set(bearer(await signIn(url, route.notOwner!)))
-        .send(example.body);
-      const after = await request(url).get(`/api/cycles/${cycleId}/lineup`).set(bearer(tokens.get('observer')!));
-      expect({ status: response.status, code: response.body.code }).toEqual({
-        status: 403,
-        code: expect.stringMatching(/^not_your_(catapult|slot)$/),
-      });
-      const slotOf = (snapshot: request.Response) => (snapshot.body as LineupSnapshot).slots.find((slot) => slot.id === slotId);
-      expect(slotOf(after)).toEqual(slotOf(before));
-      expect((after.body as LineupSnapshot).version).toBe((before.body as LineupSnapshot).version);
-    },
-  );
+  it.each(
+    matrixRoutes.filter((route) => route.notOwner).map((route) => [key(route.method, route.path), route] as const),
+  )('%s refuses a second person of the permitted role, who does not own the target', async (_name, route) => {
+    const [role] = route.allowed as readonly Role[];
+    const context: MatrixContext = { baseUrl: url, caller: role, allowed: true, tokenOf: (of) => tokens.get(of)! };
+    const example = await route.example!(context);
+    const { cycleId, slotId } = example.params as { cycleId: number; slotId: number };
+    const before = await request(url)
+      .get(`/api/cycles/${cycleId}/lineup`)
+      .set(bearer(tokens.get('observer')!));
+    const response = await request(url)
+      .post(fillPath(route.path, example.params))
+      .set(bearer(await signIn(url, route.notOwner!)))
+      .send(example.body);
+    const after = await request(url)
+      .get(`/api/cycles/${cycleId}/lineup`)
+      .set(bearer(tokens.get('observer')!));
+    expect({ status: response.status, code: response.body.code }).toEqual({
+      status: 403,
+      code: expect.stringMatching(/^not_your_(catapult|slot)$/),
+    });
+    const slotOf = (snapshot: request.Response) =>
+      (snapshot.body as LineupSnapshot).slots.find((slot) => slot.id === slotId);
+    expect(slotOf(after)).toEqual(slotOf(before));
+    expect((after.body as LineupSnapshot).version).toBe((before.body as LineupSnapshot).version);
+  });
 
   it.each(matrixRoutes.map((route) => [key(route.method, route.path), route] as const))(
     '%s answers each role as the matrix says',
@@ -104,7 +110,8 @@ describe('role matrix', () => {
           expected.push(`${who}: ${caller ? 403 : 401}`);
           outcomes.push(`${who}: ${response.status}`);
         } else {
-          const accepted = (response.status >= 200 && response.status < 300) || (route.refusals ?? []).includes(response.status);
+          const accepted =
+            (response.status >= 200 && response.status < 300) || (route.refusals ?? []).includes(response.status);
           expected.push(`${who}: admitted`);
           outcomes.push(`${who}: ${accepted ? 'admitted' : `${response.status} ${JSON.stringify(response.body)}`}`);
         }

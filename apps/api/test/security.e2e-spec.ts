@@ -67,23 +67,39 @@ describe('security', () => {
     it('has a row for every event the gateway answers, each with the roles the gateway enforces', () => {
       const handlers = Object.getOwnPropertyNames(LineupGateway.prototype)
         .map((name) => (LineupGateway.prototype as unknown as Record<string, unknown>)[name])
-        .filter((handler): handler is object => typeof handler === 'function' && Reflect.getMetadata('message', handler) !== undefined);
-      const gateway = handlers.map((handler) => ({ event: Reflect.getMetadata('message', handler) as string, allowed: Reflect.getMetadata(ROLES_KEY, handler) as Role[] }));
+        .filter(
+          (handler): handler is object =>
+            typeof handler === 'function' && Reflect.getMetadata('message', handler) !== undefined,
+        );
+      const gateway = handlers.map((handler) => ({
+        event: Reflect.getMetadata('message', handler) as string,
+        allowed: Reflect.getMetadata(ROLES_KEY, handler) as Role[],
+      }));
       expect(gateway.sort((a, b) => a.event.localeCompare(b.event))).toEqual(
-        matrixSocketEvents.map(({ event, allowed }) => ({ event, allowed: [...allowed] })).sort((a, b) => a.event.localeCompare(b.event)),
+        matrixSocketEvents
+          .map(({ event, allowed }) => ({ event, allowed: [...allowed] }))
+          .sort((a, b) => a.event.localeCompare(b.event)),
       );
     });
 
-    it.each(ROLES.map((role) => [role]))('lets %s send every event, and none of them changes the database', async (role) => {
-      const cycle = await new LineupDriver(url, () => tokens.get('air_operations')).createCycle();
-      const socket = await open(tokens.get(role));
-      for (const row of matrixSocketEvents) {
-        const before = await fingerprint();
-        const answer = await (socket as unknown as AnyEmitter).timeout(5_000).emitWithAck(row.event, row.example(cycle.id, tokens.get(role)!));
-        expect({ event: row.event, answer }).toMatchObject({ event: row.event, answer: { ok: row.allowed.includes(role) } });
-        expect(await fingerprint()).toBe(before);
-      }
-    });
+    it.each(ROLES.map((role) => [role]))(
+      'lets %s send every event, and none of them changes the database',
+      async (role) => {
+        const cycle = await new LineupDriver(url, () => tokens.get('air_operations')).createCycle();
+        const socket = await open(tokens.get(role));
+        for (const row of matrixSocketEvents) {
+          const before = await fingerprint();
+          const answer = await (socket as unknown as AnyEmitter)
+            .timeout(5_000)
+            .emitWithAck(row.event, row.example(cycle.id, tokens.get(role)!));
+          expect({ event: row.event, answer }).toMatchObject({
+            event: row.event,
+            answer: { ok: row.allowed.includes(role) },
+          });
+          expect(await fingerprint()).toBe(before);
+        }
+      },
+    );
 
     it('refuses a connection without a token or with a malformed one', async () => {
       expect(await refusalCode(undefined)).toBe('unauthenticated');
@@ -94,8 +110,18 @@ describe('security', () => {
     it('ignores events it does not know: no answer, nothing changed, the connection stays', async () => {
       const socket = await open(tokens.get('pilot'));
       const before = await fingerprint();
-      for (const event of ['lineup:move', 'slot:launch', 'cycle:close', 'cycle:start', 'users:delete', 'lineup:change']) {
-        const answer = await (socket as unknown as AnyEmitter).timeout(300).emitWithAck(event, { cycleId: 1, slotId: 1 }).catch(() => 'no answer');
+      for (const event of [
+        'lineup:move',
+        'slot:launch',
+        'cycle:close',
+        'cycle:start',
+        'users:delete',
+        'lineup:change',
+      ]) {
+        const answer = await (socket as unknown as AnyEmitter)
+          .timeout(300)
+          .emitWithAck(event, { cycleId: 1, slotId: 1 })
+          .catch(() => 'no answer');
         expect({ event, answer }).toEqual({ event, answer: 'no answer' });
       }
       expect(socket.connected).toBe(true);
@@ -105,11 +131,15 @@ describe('security', () => {
 
   // HTTP refusals of these tokens are in auth.e2e-spec.ts; these are the same tokens at the socket handshake.
   describe('socket handshake refuses', () => {
-    const claimsOf = (token: string) => app.get(JwtService).decode<{ sub: number; role: string; tv: number; exp: number }>(token);
+    const claimsOf = (token: string) =>
+      app.get(JwtService).decode<{ sub: number; role: string; tv: number; exp: number }>(token);
 
     it('a token signed with another key', async () => {
       const { sub, role, tv } = claimsOf(tokens.get('observer')!);
-      const forged = new JwtService().sign({ sub, role, tv }, { secret: 'another-key-of-at-least-32-chars!!', algorithm: 'HS256', expiresIn: 600 });
+      const forged = new JwtService().sign(
+        { sub, role, tv },
+        { secret: 'another-key-of-at-least-32-chars!!', algorithm: 'HS256', expiresIn: 600 },
+      );
       expect(await refusalCode(forged)).toBe('session_invalid');
     });
 
@@ -131,7 +161,13 @@ describe('security', () => {
       const person = await createUser(url, tokens.get('admin')!, 'handler');
       const token = await signIn(url, person.email, TEST_PASSWORD);
       expect(await refusalCode(token)).toBe('connected');
-      expect((await request(url).delete(`/api/users/${person.id}`).set(bearer(tokens.get('admin')!))).status).toBe(204);
+      expect(
+        (
+          await request(url)
+            .delete(`/api/users/${person.id}`)
+            .set(bearer(tokens.get('admin')!))
+        ).status,
+      ).toBe(204);
       expect(await refusalCode(token)).toBe('session_invalid');
     });
   });
@@ -149,13 +185,20 @@ describe('security', () => {
 
     it('grants CORS to the configured web origins only', async () => {
       const preflight = (from: string) =>
-        request(url).options('/api/cycles').set('Origin', from).set('Access-Control-Request-Method', 'POST').set('Access-Control-Request-Headers', 'authorization,content-type');
+        request(url)
+          .options('/api/cycles')
+          .set('Origin', from)
+          .set('Access-Control-Request-Method', 'POST')
+          .set('Access-Control-Request-Headers', 'authorization,content-type');
       const allowed = await preflight(origin);
       expect(allowed.headers['access-control-allow-origin']).toBe(origin);
       expect(allowed.headers['access-control-allow-credentials']).toBe('true');
       for (const foreign of ['http://elsewhere.example', 'null', `${origin}.elsewhere.example`]) {
         const refused = await preflight(foreign);
-        expect({ foreign, allow: refused.headers['access-control-allow-origin'] }).toEqual({ foreign, allow: undefined });
+        expect({ foreign, allow: refused.headers['access-control-allow-origin'] }).toEqual({
+          foreign,
+          allow: undefined,
+        });
         const simple = await request(url).get('/api/health').set('Origin', foreign);
         expect(simple.headers['access-control-allow-origin']).toBeUndefined();
       }
@@ -167,26 +210,40 @@ describe('security', () => {
       const rows = (await dataSource.query(
         "SHOW VARIABLES WHERE Variable_name IN ('innodb_flush_log_at_trx_commit', 'sync_binlog')",
       )) as { Variable_name: string; Value: string }[];
-      expect(Object.fromEntries(rows.map((row) => [row.Variable_name, row.Value]))).toEqual({ innodb_flush_log_at_trx_commit: '1', sync_binlog: '1' });
+      expect(Object.fromEntries(rows.map((row) => [row.Variable_name, row.Value]))).toEqual({
+        innodb_flush_log_at_trx_commit: '1',
+        sync_binlog: '1',
+      });
     });
   });
 
   describe('the repository', () => {
-    const files = execFileSync('git', ['ls-files', '--cached', '--others', '--exclude-standard'], { cwd: REPOSITORY, encoding: 'utf8' })
+    const files = execFileSync('git', ['ls-files', '--cached', '--others', '--exclude-standard'], {
+      cwd: REPOSITORY,
+      encoding: 'utf8',
+    })
       .split('\n')
       .filter(Boolean);
 
     it('keeps .env and the local data out of git', () => {
       for (const ignored of ['.env', '.data/mariadb/ibdata1', 'apps/api/.env']) {
-        expect({ ignored, status: spawnSync('git', ['check-ignore', '-q', ignored], { cwd: REPOSITORY }).status }).toEqual({ ignored, status: 0 });
+        expect({
+          ignored,
+          status: spawnSync('git', ['check-ignore', '-q', ignored], { cwd: REPOSITORY }).status,
+        }).toEqual({ ignored, status: 0 });
       }
-      expect(files.filter((file) => /(^|\/)\.env(\.|$)/.test(path.basename(file)) && !file.endsWith('.example'))).toEqual([]);
+      expect(
+        files.filter((file) => /(^|\/)\.env(\.|$)/.test(path.basename(file)) && !file.endsWith('.example')),
+      ).toEqual([]);
     });
 
     it('holds no secret: no assigned keys or passwords, no private keys, no cloud or chat tokens', () => {
       // Written in pieces so this file does not match itself.
       const patterns = [
-        new RegExp(`^\\s*(export\\s+)?(JWT_SECRET|DB_PASSWORD|SMTP_PASSWORD|MARIADB_(ROOT_)?PASSWORD)=(?!\\.\\.\\.|\\$\\{|<)\\S`, 'm'),
+        new RegExp(
+          `^\\s*(export\\s+)?(JWT_SECRET|DB_PASSWORD|SMTP_PASSWORD|MARIADB_(ROOT_)?PASSWORD)=(?!\\.\\.\\.|\\$\\{|<)\\S`,
+          'm',
+        ),
         new RegExp(['-----BEGIN', '[A-Z ]*PRIVATE KEY-----'].join(' ')),
         new RegExp(['AKIA', '[0-9A-Z]{16}'].join('')),
         new RegExp(['xox[bap]-', '[0-9A-Za-z-]{10,}'].join('')),
@@ -199,7 +256,9 @@ describe('security', () => {
         } catch {
           return [];
         }
-        return patterns.filter((pattern) => pattern.test(text)).map((pattern) => `${file}: ${pattern.source.slice(0, 30)}`);
+        return patterns
+          .filter((pattern) => pattern.test(text))
+          .map((pattern) => `${file}: ${pattern.source.slice(0, 30)}`);
       });
       expect(leaks).toEqual([]);
       expect(files.length).toBeGreaterThan(100);

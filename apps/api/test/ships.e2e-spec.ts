@@ -31,15 +31,26 @@ describe('ships and catapults', () => {
     const response = await request(url).get('/api/ships').set(bearer(observer));
     expect(response.status).toBe(200);
     expect(response.body).toHaveLength(1);
-    expect(response.body[0]).toMatchObject({ name: demoShip.name, hullCode: demoShip.hullCode, pairGapS: 10, profile: demoShip.profile });
+    expect(response.body[0]).toMatchObject({
+      name: demoShip.name,
+      hullCode: demoShip.hullCode,
+      pairGapS: 10,
+      profile: demoShip.profile,
+    });
     expect(response.body[0].deckSpots).toEqual(JSON.parse(JSON.stringify(demoDeckSpots)));
-    expect(response.body[0].catapults.map((c: { number: number; position: string }) => `${c.number}${c.position}`)).toEqual(['1bow', '2bow', '3waist', '4waist']);
+    expect(
+      response.body[0].catapults.map((c: { number: number; position: string }) => `${c.number}${c.position}`),
+    ).toEqual(['1bow', '2bow', '3waist', '4waist']);
   });
 
   it('answers 404 with a message for an unknown ship', async () => {
     const response = await request(url).get('/api/ships/999').set(bearer(observer));
     expect(response.status).toBe(404);
-    expect(response.body).toEqual({ statusCode: 404, code: 'ship_not_found', message: 'There is no ship with id 999.' });
+    expect(response.body).toEqual({
+      statusCode: 404,
+      code: 'ship_not_found',
+      message: 'There is no ship with id 999.',
+    });
   });
 
   it('changes the ship and its profile', async () => {
@@ -54,12 +65,28 @@ describe('ships and catapults', () => {
 
   it.each([
     ['a negative pair gap', { pairGapS: -1 }, /pairGapS must not be less than 0/],
-    ['a clearing turn past 180 degrees', { profile: { ...demoShip.profile, clearingTurnDeg: { bow: 200, waist: -10 } } }, /bow must not be greater than 180/],
+    [
+      'a clearing turn past 180 degrees',
+      { profile: { ...demoShip.profile, clearingTurnDeg: { bow: 200, waist: -10 } } },
+      /bow must not be greater than 180/,
+    ],
     ['a profile without departures', { profile: { clearingTurnDeg: { bow: 10, waist: -10 } } }, /departures/],
     ['a null name', { name: null }, /name must be a string/],
-    ['a deck spot with a negative taxi time', { deckSpots: [{ name: 'bow-1', taxiS: { 1: -5, 2: 60, 3: 150, 4: 170 } }] }, /taxiS must map catapult numbers/],
-    ['a deck spot missing a catapult', { deckSpots: demoDeckSpots.map((spot) => ({ ...spot, taxiS: { 1: 60 } })) }, /needs a taxi time to catapult 2, 3, 4/],
-    ['a deck spot listed twice', { deckSpots: [...demoDeckSpots, demoDeckSpots[0]] }, /Deck spot bow-1 is listed twice/],
+    [
+      'a deck spot with a negative taxi time',
+      { deckSpots: [{ name: 'bow-1', taxiS: { 1: -5, 2: 60, 3: 150, 4: 170 } }] },
+      /taxiS must map catapult numbers/,
+    ],
+    [
+      'a deck spot missing a catapult',
+      { deckSpots: demoDeckSpots.map((spot) => ({ ...spot, taxiS: { 1: 60 } })) },
+      /needs a taxi time to catapult 2, 3, 4/,
+    ],
+    [
+      'a deck spot listed twice',
+      { deckSpots: [...demoDeckSpots, demoDeckSpots[0]] },
+      /Deck spot bow-1 is listed twice/,
+    ],
     ['an extra field', { catapults: [] }, /property catapults should not exist/],
   ])('refuses %s with a 400 and changes nothing', async (_case, body, message) => {
     const before = await ship();
@@ -83,7 +110,14 @@ describe('ships and catapults', () => {
     const response = await patchCatapult(1, catapult.id, { resetIntervalS: 70, axisAngleDeg: -8 });
     expect(response.status).toBe(200);
     expect(response.body).toEqual({ ...catapult, resetIntervalS: 70, axisAngleDeg: -8 });
-    expect((await patchCatapult(1, catapult.id, { resetIntervalS: catapult.resetIntervalS, axisAngleDeg: catapult.axisAngleDeg })).status).toBe(200);
+    expect(
+      (
+        await patchCatapult(1, catapult.id, {
+          resetIntervalS: catapult.resetIntervalS,
+          axisAngleDeg: catapult.axisAngleDeg,
+        })
+      ).status,
+    ).toBe(200);
 
     const status = await patchCatapult(1, catapult.id, { status: 'down', shotCount: 0 });
     expect(status.status).toBe(400);
@@ -95,7 +129,11 @@ describe('ships and catapults', () => {
     ['a zero stroke', { strokeM: 0 }, /strokeM must be a positive number/],
     ['a text reset interval', { resetIntervalS: '55' }, /resetIntervalS must be an integer number/],
     ['an unknown position', { position: 'stern' }, /position must be bow or waist/],
-    ['a highest energy below the lowest', { energyMaxMj: 10 }, /The highest energy \(10 MJ\) must be above the lowest \(18 MJ\)/],
+    [
+      'a highest energy below the lowest',
+      { energyMaxMj: 10 },
+      /The highest energy \(10 MJ\) must be above the lowest \(18 MJ\)/,
+    ],
   ])('refuses a catapult with %s and changes nothing', async (_case, body, message) => {
     const before = await ship();
     const response = await patchCatapult(1, before.catapults[0].id, body);

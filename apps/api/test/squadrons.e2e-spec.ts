@@ -23,11 +23,22 @@ describe('squadrons', () => {
 
   it('creates, renames and deletes a squadron', async () => {
     const code = unique('NEW', 10);
-    const created = await request(url).post('/api/squadrons').set(bearer(admin)).send({ name: ' Stormpetrels ', code, email: 'storm@catline.example' });
+    const created = await request(url)
+      .post('/api/squadrons')
+      .set(bearer(admin))
+      .send({ name: ' Stormpetrels ', code, email: 'storm@catline.example' });
     expect(created.status).toBe(201);
-    expect(created.body).toEqual({ id: expect.any(Number), name: 'Stormpetrels', code, email: 'storm@catline.example' });
+    expect(created.body).toEqual({
+      id: expect.any(Number),
+      name: 'Stormpetrels',
+      code,
+      email: 'storm@catline.example',
+    });
 
-    const renamed = await request(url).patch(`/api/squadrons/${created.body.id}`).set(bearer(admin)).send({ name: 'Storm Petrels' });
+    const renamed = await request(url)
+      .patch(`/api/squadrons/${created.body.id}`)
+      .set(bearer(admin))
+      .send({ name: 'Storm Petrels' });
     expect(renamed.status).toBe(200);
     expect(renamed.body).toEqual({ ...created.body, name: 'Storm Petrels' });
 
@@ -42,16 +53,26 @@ describe('squadrons', () => {
     ['an extra field', { id: 7 }, /property id should not exist/],
   ])('refuses %s with a 400 and creates nothing', async (_case, change, message) => {
     const before = await list();
-    const response = await request(url).post('/api/squadrons').set(bearer(admin)).send({ name: 'Bad', code: unique('BAD', 10), email: 'bad@catline.example', ...change });
+    const response = await request(url)
+      .post('/api/squadrons')
+      .set(bearer(admin))
+      .send({ name: 'Bad', code: unique('BAD', 10), email: 'bad@catline.example', ...change });
     expect(response.status).toBe(400);
     expect(response.body.message).toMatch(message);
     expect(await list()).toEqual(before);
   });
 
   it('refuses a code already in use with 409, on create and on rename', async () => {
-    const created = await request(url).post('/api/squadrons').set(bearer(admin)).send({ name: 'Copy', code: 'CWR', email: 'copy@catline.example' });
+    const created = await request(url)
+      .post('/api/squadrons')
+      .set(bearer(admin))
+      .send({ name: 'Copy', code: 'CWR', email: 'copy@catline.example' });
     expect(created.status).toBe(409);
-    expect(created.body).toEqual({ statusCode: 409, code: 'code_taken', message: 'Another squadron already uses the code CWR.' });
+    expect(created.body).toEqual({
+      statusCode: 409,
+      code: 'code_taken',
+      message: 'Another squadron already uses the code CWR.',
+    });
 
     const own = await createSquadron(url, admin);
     const renamed = await request(url).patch(`/api/squadrons/${own.id}`).set(bearer(admin)).send({ code: 'DFM' });
@@ -64,7 +85,9 @@ describe('squadrons', () => {
     await createAircraft(url, admin, { squadronId: squadron.id });
     const response = await request(url).delete(`/api/squadrons/${squadron.id}`).set(bearer(admin));
     expect(response.status).toBe(409);
-    expect(response.body.message).toBe(`Squadron ${squadron.code} still has 1 aircraft; move or delete them before deleting the squadron.`);
+    expect(response.body.message).toBe(
+      `Squadron ${squadron.code} still has 1 aircraft; move or delete them before deleting the squadron.`,
+    );
     expect((await list()).map((s) => s.id)).toContain(squadron.id);
   });
 

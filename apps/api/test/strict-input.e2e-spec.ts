@@ -21,20 +21,42 @@ describe('strict input: names, path ids and token answers', () => {
 
   describe('names', () => {
     // NUL, a line break, escape; the bidi overrides and isolates (Unicode UAX #9, "explicit formatting").
-    const unsafe = ['\u0000', '\n', '\u001b', '\u007f', '\u202e', '\u202d', '\u2066', '\u2067', '\u2068', '\u2069', '\u200f', '\u061c'];
+    const unsafe = [
+      '\u0000',
+      '\n',
+      '\u001b',
+      '\u007f',
+      '\u202e',
+      '\u202d',
+      '\u2066',
+      '\u2067',
+      '\u2068',
+      '\u2069',
+      '\u200f',
+      '\u061c',
+    ];
 
-    it.each(unsafe.map((character) => [JSON.stringify(character), character]))('refuses a person named with %s and stores nobody', async (_shown, character) => {
-      const email = `${unique('ctl', 12).toLowerCase()}@catline.example`;
-      const response = await request(url).post('/api/users').set(bearer(admin)).send({ email, name: `Ada${character}gnol`, role: 'observer', password: TEST_PASSWORD });
-      expect(response.status).toBe(400);
-      expect(response.body.message).toMatch(/name must not hold control or text-direction characters/);
-      const people = (await request(url).get('/api/users').set(bearer(admin))).body as { email: string }[];
-      expect(people.some((person) => person.email === email)).toBe(false);
-    });
+    it.each(unsafe.map((character) => [JSON.stringify(character), character]))(
+      'refuses a person named with %s and stores nobody',
+      async (_shown, character) => {
+        const email = `${unique('ctl', 12).toLowerCase()}@catline.example`;
+        const response = await request(url)
+          .post('/api/users')
+          .set(bearer(admin))
+          .send({ email, name: `Ada${character}gnol`, role: 'observer', password: TEST_PASSWORD });
+        expect(response.status).toBe(400);
+        expect(response.body.message).toMatch(/name must not hold control or text-direction characters/);
+        const people = (await request(url).get('/api/users').set(bearer(admin))).body as { email: string }[];
+        expect(people.some((person) => person.email === email)).toBe(false);
+      },
+    );
 
     it('refuses a right-to-left override in a squadron name and a NUL in a ship name', async () => {
       const code = unique('SQ', 10);
-      const squadron = await request(url).post('/api/squadrons').set(bearer(admin)).send({ name: 'Fighting \u202eevil', code, email: `${code.toLowerCase()}@catline.example` });
+      const squadron = await request(url)
+        .post('/api/squadrons')
+        .set(bearer(admin))
+        .send({ name: 'Fighting \u202eevil', code, email: `${code.toLowerCase()}@catline.example` });
       expect(squadron.status).toBe(400);
       const ship = await request(url).patch('/api/ships/1').set(bearer(admin)).send({ name: 'Ship\u0000' });
       expect(ship.status).toBe(400);
@@ -42,17 +64,23 @@ describe('strict input: names, path ids and token answers', () => {
 
     it('keeps accepting names in any script', async () => {
       const email = `${unique('intl', 12).toLowerCase()}@catline.example`;
-      const response = await request(url).post('/api/users').set(bearer(admin)).send({ email, name: 'Zoë Ó Briain-Łukasz 渡辺 عمر', role: 'observer', password: TEST_PASSWORD });
+      const response = await request(url)
+        .post('/api/users')
+        .set(bearer(admin))
+        .send({ email, name: 'Zoë Ó Briain-Łukasz 渡辺 عمر', role: 'observer', password: TEST_PASSWORD });
       expect(response.status).toBe(201);
     });
   });
 
   describe('path ids', () => {
-    it.each(['0x10', '1e3', '%204', '4%20', '+4', '-1', '4.0', '0b1', '99999999999'])('refuses /api/cycles/%s with 400', async (id) => {
-      const response = await request(url).get(`/api/cycles/${id}`).set(bearer(admin));
-      expect(response.status).toBe(400);
-      expect(response.body.code).toBe('invalid_id');
-    });
+    it.each(['0x10', '1e3', '%204', '4%20', '+4', '-1', '4.0', '0b1', '99999999999'])(
+      'refuses /api/cycles/%s with 400',
+      async (id) => {
+        const response = await request(url).get(`/api/cycles/${id}`).set(bearer(admin));
+        expect(response.status).toBe(400);
+        expect(response.body.code).toBe('invalid_id');
+      },
+    );
 
     it('reads an id written in plain digits', async () => {
       const [first] = (await request(url).get('/api/cycles').set(bearer(admin))).body as { id: number }[];
@@ -63,10 +91,15 @@ describe('strict input: names, path ids and token answers', () => {
 
   describe('token answers', () => {
     it('are never stored by a cache: sign-in and refresh send Cache-Control: no-store', async () => {
-      const login = await request(url).post('/api/auth/login').send({ email: 'observer@catline.example', password: 'catline-demo' });
+      const login = await request(url)
+        .post('/api/auth/login')
+        .send({ email: 'observer@catline.example', password: 'catline-demo' });
       expect(login.status).toBe(200);
       expect(login.headers['cache-control']).toBe('no-store');
-      const refresh = await request(url).post('/api/auth/refresh').set('Cookie', refreshCookie(login)).set('X-Catline-Refresh', '1');
+      const refresh = await request(url)
+        .post('/api/auth/refresh')
+        .set('Cookie', refreshCookie(login))
+        .set('X-Catline-Refresh', '1');
       expect(refresh.status).toBe(200);
       expect(refresh.headers['cache-control']).toBe('no-store');
     });

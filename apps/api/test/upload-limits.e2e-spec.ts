@@ -42,15 +42,18 @@ describe('upload limits', () => {
   it.each([
     ['120 KB with 60,000 unknown columns', 60_000],
     ['240 KB with 120,000 unknown columns', 120_000],
-  ])('refuses a header of %s with a short 400, before reading the lines, and stores no large row', async (_what, columns) => {
-    const content = wideHeader(columns);
-    const response = await preview(content);
-    expect(response.status).toBe(400);
-    expect(response.body.code).toBe('header_too_wide');
-    expect(response.body.message).toMatch(/header line has \d+ columns; the air plan layout has 9/);
-    expect(JSON.stringify(response.body).length).toBeLessThan(2_000);
-    expect(await storedBytes()).toBeLessThan(4_000);
-  });
+  ])(
+    'refuses a header of %s with a short 400, before reading the lines, and stores no large row',
+    async (_what, columns) => {
+      const content = wideHeader(columns);
+      const response = await preview(content);
+      expect(response.status).toBe(400);
+      expect(response.body.code).toBe('header_too_wide');
+      expect(response.body.message).toMatch(/header line has \d+ columns; the air plan layout has 9/);
+      expect(JSON.stringify(response.body).length).toBeLessThan(2_000);
+      expect(await storedBytes()).toBeLessThan(4_000);
+    },
+  );
 
   it('answers and keeps the first 100 problems and the count of all of them', async () => {
     // 200 lines, each with a fuel figure in words and a flag that is neither yes nor no: 400 problems.
@@ -76,8 +79,13 @@ describe('upload limits', () => {
 
   it('forgets rejected uploads after a day, and keeps accepted and imported ones', async () => {
     await preview([HEADER, 'ZZ9,,Strike,lots,,45000,no,no,no'].join('\n'));
-    await database.query("UPDATE uploads SET uploaded_at = uploaded_at - INTERVAL 2 DAY WHERE cycle_id = ?", [cycle.id]);
-    const kept = await database.query<{ n: string }[]>("SELECT COUNT(*) AS n FROM uploads WHERE cycle_id = ? AND result <> 'rejected'", [cycle.id]);
+    await database.query('UPDATE uploads SET uploaded_at = uploaded_at - INTERVAL 2 DAY WHERE cycle_id = ?', [
+      cycle.id,
+    ]);
+    const kept = await database.query<{ n: string }[]>(
+      "SELECT COUNT(*) AS n FROM uploads WHERE cycle_id = ? AND result <> 'rejected'",
+      [cycle.id],
+    );
 
     await preview([HEADER, 'ZZ10,,Strike,lots,,45000,no,no,no'].join('\n'));
 

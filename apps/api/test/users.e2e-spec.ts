@@ -31,8 +31,16 @@ describe('people', () => {
 
   it('lists everyone for the admin, with their bindings', async () => {
     const people = await list();
-    expect(people.find((person) => person.email === 'cat3@catline.example')).toMatchObject({ role: 'catapult_officer', catapultId: 3, active: true });
-    expect(people.find((person) => person.email === 'pilot@catline.example')).toMatchObject({ role: 'pilot', catapultId: null, squadronId: 1 });
+    expect(people.find((person) => person.email === 'cat3@catline.example')).toMatchObject({
+      role: 'catapult_officer',
+      catapultId: 3,
+      active: true,
+    });
+    expect(people.find((person) => person.email === 'pilot@catline.example')).toMatchObject({
+      role: 'pilot',
+      catapultId: null,
+      squadronId: 1,
+    });
   });
 
   it('lists only active pilots for assigning', async () => {
@@ -54,7 +62,15 @@ describe('people', () => {
       const body = { ...newPerson(), squadronId: squadron.id };
       const response = await post(body);
       expect(response.status).toBe(201);
-      expect(response.body).toEqual({ id: expect.any(Number), email: body.email, name: body.name, role: 'pilot', catapultId: null, squadronId: squadron.id, active: true });
+      expect(response.body).toEqual({
+        id: expect.any(Number),
+        email: body.email,
+        name: body.name,
+        role: 'pilot',
+        catapultId: null,
+        squadronId: squadron.id,
+        active: true,
+      });
       await expect(signIn(url, body.email, TEST_PASSWORD)).resolves.toEqual(expect.any(String));
     });
 
@@ -88,7 +104,10 @@ describe('people', () => {
     it('refuses an e-mail already in use, in any case, with 409', async () => {
       const response = await post({ ...newPerson(), email: 'Handler@Catline.example' });
       expect(response.status).toBe(409);
-      expect(response.body).toMatchObject({ code: 'email_taken', message: expect.stringMatching(/handler@catline\.example/) });
+      expect(response.body).toMatchObject({
+        code: 'email_taken',
+        message: expect.stringMatching(/handler@catline\.example/),
+      });
     });
   });
 
@@ -135,7 +154,10 @@ describe('people', () => {
       expect((await patch(999_999, { name: 'Nobody' })).status).toBe(404);
       const text = await patch(Number.NaN, { name: 'Nobody' });
       expect(text.status).toBe(400);
-      expect(text.body).toMatchObject({ code: 'invalid_id', message: 'The id in the address must be a whole number from 1, written in digits only.' });
+      expect(text.body).toMatchObject({
+        code: 'invalid_id',
+        message: 'The id in the address must be a whole number from 1, written in digits only.',
+      });
     });
 
     it('refuses an admin changing their own role or deactivating themselves', async () => {

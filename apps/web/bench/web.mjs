@@ -15,8 +15,14 @@ function initialAssets() {
   const html = readFileSync(`${dist}index.html`, 'utf8');
   const refs = [...html.matchAll(/(?:src|href)="\/(assets\/[^"]+\.(?:js|css))"/g)].map((match) => match[1]);
   const size = (ext) =>
-    refs.filter((ref) => ref.endsWith(ext)).reduce((sum, ref) => sum + gzipSync(readFileSync(`${dist}${ref}`), { level: 9 }).length, 0);
-  return { initialJsGzipKb: Math.round(size('.js') / 102.4) / 10, initialCssGzipKb: Math.round(size('.css') / 102.4) / 10, initialFiles: refs.length };
+    refs
+      .filter((ref) => ref.endsWith(ext))
+      .reduce((sum, ref) => sum + gzipSync(readFileSync(`${dist}${ref}`), { level: 9 }).length, 0);
+  return {
+    initialJsGzipKb: Math.round(size('.js') / 102.4) / 10,
+    initialCssGzipKb: Math.round(size('.css') / 102.4) / 10,
+    initialFiles: refs.length,
+  };
 }
 
 async function medianMs(task) {
@@ -33,7 +39,15 @@ async function medianMs(task) {
 async function timeToLineup() {
   const browser = await chromium.launch({
     executablePath: '/usr/bin/chromium',
-    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+    ],
   });
   try {
     const context = await browser.newContext({ viewport: { width: 1366, height: 768 } });
@@ -46,7 +60,11 @@ async function timeToLineup() {
     const lineup = await medianMs(async () => {
       await page.goto(`${url}/lineup?cycle=${cycleId}`);
       // Runs in the page, where document is defined.
-      await page.waitForFunction((count) => globalThis.document.querySelectorAll('[data-testid="slot-card"]').length >= count, aircraft, { timeout: 30_000 });
+      await page.waitForFunction(
+        (count) => globalThis.document.querySelectorAll('[data-testid="slot-card"]').length >= count,
+        aircraft,
+        { timeout: 30_000 },
+      );
     });
     // Baseline in the same browser: a cold load of the sign-in page, which fetches no data.
     const anonymous = await (await browser.newContext({ viewport: { width: 1366, height: 768 } })).newPage();
@@ -54,7 +72,11 @@ async function timeToLineup() {
       await anonymous.goto(`${url}/sign-in`);
       await anonymous.getByRole('button', { name: 'Sign in' }).waitFor();
     });
-    return { lineupDrawnMedianMs: lineup, signInDrawnMedianMs: signInPage, lineupRatio: Math.round((lineup / signInPage) * 100) / 100 };
+    return {
+      lineupDrawnMedianMs: lineup,
+      signInDrawnMedianMs: signInPage,
+      lineupRatio: Math.round((lineup / signInPage) * 100) / 100,
+    };
   } finally {
     await browser.close();
   }

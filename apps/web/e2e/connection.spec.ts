@@ -19,7 +19,9 @@ test('a live screen says when it is offline and catches up when the network is b
   await expect(pilot.getByTestId('my-catapult')).toContainText('Cat 2');
 });
 
-test('while the network is gone the pilot sees stale figures marked, a stopped countdown and no confirm', async ({ browser }) => {
+test('while the network is gone the pilot sees stale figures marked, a stopped countdown and no confirm', async ({
+  browser,
+}) => {
   const { cycle, slotIds } = await planCycle({ aircraft: [{ side: 'D38', grossWeightLb: 42_000, pilot: 'pilot3' }] });
   const handler = await apiAs('handler');
   await placeInLane(handler, cycle.id, slotIds.get('D38')!, 1);

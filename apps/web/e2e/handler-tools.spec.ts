@@ -29,12 +29,20 @@ test('the handler swaps in a spare, applies the suggested lineup and marks a cat
   await expect(handler.getByTestId('notice')).toContainText('Suggested lineup applied');
   await expect(card(pool(handler), 'G43')).toHaveCount(0);
 
-  const catapult = await handler.locator('[data-testid="lane"]', { has: card(handler, 'G43') }).getAttribute('data-catapult-number');
+  const catapult = await handler
+    .locator('[data-testid="lane"]', { has: card(handler, 'G43') })
+    .getAttribute('data-catapult-number');
   await handler.getByRole('button', { name: `Mark cat ${catapult} down` }).click();
-  await handler.getByRole('dialog').getByRole('button', { name: `Cat ${catapult} is down` }).click();
+  await handler
+    .getByRole('dialog')
+    .getByRole('button', { name: `Cat ${catapult} is down` })
+    .click();
   await expect(handler.getByRole('dialog').getByText('Say why the catapult is down.')).toBeVisible();
   await handler.getByRole('dialog').getByLabel('Reason').fill('Shuttle fault');
-  await handler.getByRole('dialog').getByRole('button', { name: `Cat ${catapult} is down` }).click();
+  await handler
+    .getByRole('dialog')
+    .getByRole('button', { name: `Cat ${catapult} is down` })
+    .click();
   await expect(lane(handler, Number(catapult)).getByTestId('catapult-status')).toHaveText('DOWN');
   await expect(handler.getByTestId('lineup-warnings')).toContainText(`Cat ${catapult} is down`);
 });

@@ -10,7 +10,9 @@ async function chooseAndCheck(page: Page, label: string, name: string, lines: st
   await page.getByRole('button', { name: 'Check file' }).click();
 }
 
-test('air operations sees every problem of an air plan file, then imports a good one into the deck pool', async ({ browser }) => {
+test('air operations sees every problem of an air plan file, then imports a good one into the deck pool', async ({
+  browser,
+}) => {
   const { cycle } = await planCycle({ aircraft: [] });
   const airops = await openAs(browser, 'airops', '/cycles');
   await airops.getByRole('button', { name: `Show cycle ${cycle.number}` }).click();
@@ -49,13 +51,24 @@ test('air operations sees every problem of an air plan file, then imports a good
   const api = await apiAs('airops');
   const fleet = (await (await api.get('/api/aircraft')).json()) as AircraftView[];
   const added = await api.post(`/api/cycles/${cycle.id}/slots`, {
-    data: { aircraftId: fleet.find((plane) => plane.sideNumber === 'C29')!.id, mission: 'Spare', fuelLb: 9000, stores: '', grossWeightLb: 42_000, tanker: false, earlyWarning: false, spare: true },
+    data: {
+      aircraftId: fleet.find((plane) => plane.sideNumber === 'C29')!.id,
+      mission: 'Spare',
+      fuelLb: 9000,
+      stores: '',
+      grossWeightLb: 42_000,
+      tanker: false,
+      earlyWarning: false,
+      spare: true,
+    },
   });
   expect(added.ok(), await added.text()).toBe(true);
   await api.dispose();
   const importButton = airops.getByRole('button', { name: `Import 2 aircraft into cycle ${cycle.number}` });
   await importButton.click();
-  await expect(airops.getByTestId('import-refusal')).toContainText(`Cycle ${cycle.number} has changed 1 time since you saw it`);
+  await expect(airops.getByTestId('import-refusal')).toContainText(
+    `Cycle ${cycle.number} has changed 1 time since you saw it`,
+  );
   await importButton.click();
   await expect(airops.getByTestId('import-done')).toContainText(`deck pool of cycle ${cycle.number}`);
 
@@ -90,21 +103,33 @@ test('the admin replaces a launch table from a CSV file once its problems are pu
 
   const admin = await openAs(browser, 'admin', '/launch-data');
   await admin.getByRole('button', { name: `Show ${designation}` }).click();
-  await chooseAndCheck(admin, 'Launch table file (CSV)', 'table.csv', ['gross_weight_lb,min_launch_airspeed_kt', '36000,126', '35000,130', '52000,-4']);
+  await chooseAndCheck(admin, 'Launch table file (CSV)', 'table.csv', [
+    'gross_weight_lb,min_launch_airspeed_kt',
+    '36000,126',
+    '35000,130',
+    '52000,-4',
+  ]);
   const problems = admin.getByTestId('import-problems').locator('tbody tr');
   await expect(problems).toHaveCount(2);
   await expect(problems.nth(0)).toContainText('Must be heavier than line 2');
   await expect(problems.nth(1)).toContainText('Cannot be negative.');
   await expect(admin.getByRole('button', { name: /^Replace the / })).toHaveCount(0);
 
-  await chooseAndCheck(admin, 'Launch table file (CSV)', 'table.csv', ['gross_weight_lb,min_launch_airspeed_kt', '36000,126', '44000,139', '52000,152.5']);
+  await chooseAndCheck(admin, 'Launch table file (CSV)', 'table.csv', [
+    'gross_weight_lb,min_launch_airspeed_kt',
+    '36000,126',
+    '44000,139',
+    '52000,152.5',
+  ]);
   await admin.getByRole('button', { name: `Replace the ${type.designation} table with these 3 rows` }).click();
   await expect(admin.getByTestId('import-done')).toBeVisible();
   await expect(admin.getByLabel('Row 3 gross weight')).toHaveValue('52000');
   await expect(admin.getByLabel('Row 3 minimum launch airspeed')).toHaveValue('152.5');
 });
 
-test('the admin invites a person without a password, and a second invitation to someone with one is refused in words', async ({ browser }) => {
+test('the admin invites a person without a password, and a second invitation to someone with one is refused in words', async ({
+  browser,
+}) => {
   const admin = await openAs(browser, 'admin', '/people');
   const email = `invitee${Date.now() % 100_000}@catline.example`;
   const form = admin.getByRole('form', { name: 'Add a person' });
@@ -124,7 +149,9 @@ test('the admin invites a person without a password, and a second invitation to 
   await expect(admin.getByTestId('notice')).toContainText('has already chosen a password');
 });
 
-test('the screens before sign-in ask for a reset link and refuse a bogus invitation link with the server’s reason', async ({ page }) => {
+test('the screens before sign-in ask for a reset link and refuse a bogus invitation link with the server’s reason', async ({
+  page,
+}) => {
   await page.goto('/sign-in');
   await page.getByRole('link', { name: 'Forgot password?' }).click();
   await expect(page).toHaveURL(/\/forgot-password$/);

@@ -2,8 +2,13 @@ import { expect, test } from '@playwright/test';
 import { apiAs, changesOf, lineupOf, planCycle } from './support/demo-api.js';
 import { card, dragWithMouse, lane, openAs, pool } from './support/screens.js';
 
-test('handler drags an aircraft to cat 1, the pilot sees it live, the catapult officer launches it once', async ({ browser }) => {
-  const { cycle } = await planCycle({ aircraft: [{ side: 'C21', grossWeightLb: 40_000, pilot: 'pilot' }], start: true });
+test('handler drags an aircraft to cat 1, the pilot sees it live, the catapult officer launches it once', async ({
+  browser,
+}) => {
+  const { cycle } = await planCycle({
+    aircraft: [{ side: 'C21', grossWeightLb: 40_000, pilot: 'pilot' }],
+    start: true,
+  });
 
   const handler = await openAs(browser, 'handler', `/lineup?cycle=${cycle.id}`);
   const pilot = await openAs(browser, 'pilot', `/my-launch?cycle=${cycle.id}`);

@@ -35,6 +35,8 @@ test('over plain HTTP under a ship-network name the app loads, signs in and goes
   await expect(page.getByTestId('connection-state')).toHaveAttribute('data-state', 'live');
 
   expect(errors).toEqual([]);
-  const elsewhere = requested.filter((url) => !url.startsWith(`${shipAddress}/`) && !url.startsWith(`ws://ship.test:${port}/`));
+  const elsewhere = requested.filter(
+    (url) => !url.startsWith(`${shipAddress}/`) && !url.startsWith(`ws://ship.test:${port}/`),
+  );
   expect(elsewhere).toEqual([]);
 });

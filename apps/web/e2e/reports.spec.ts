@@ -30,28 +30,40 @@ async function tableRows(page: Page) {
 }
 
 const marks = (page: Page, kind: 'launch-mark' | 'planned-mark') =>
-  page.locator(`[data-testid="${kind}"]`).evaluateAll((nodes) => nodes.map((node) => node.getAttribute('aria-label') ?? ''));
+  page
+    .locator(`[data-testid="${kind}"]`)
+    .evaluateAll((nodes) => nodes.map((node) => node.getAttribute('aria-label') ?? ''));
 
 test('the report of the flown cycle draws the same launches in its chart as its table lists', async ({ browser }) => {
   const { flown, report } = await demo();
   const page = await openAs(browser, 'observer', `/reports?cycle=${flown.id}`);
   await expect(page.getByTestId('launch-timeline')).toBeVisible();
-  await expect(page.getByTestId('report-totals')).toContainText(`${report.totals.launched} of ${report.totals.aircraft}`);
+  await expect(page.getByTestId('report-totals')).toContainText(
+    `${report.totals.launched} of ${report.totals.aircraft}`,
+  );
 
   const rows = await tableRows(page);
   const launchedRows = rows.filter((row) => row.launched !== '—');
   const plannedRows = rows.filter((row) => row.planned !== '—');
   expect(launchedRows).toHaveLength(report.totals.launched);
   // Each dot says which aircraft left which catapult when: the same words the table's row gives.
-  expect((await marks(page, 'launch-mark')).sort()).toEqual(launchedRows.map((row) => `${row.side} launched ${row.launched} on cat ${row.cat}`).sort());
-  expect((await marks(page, 'planned-mark')).sort()).toEqual(plannedRows.map((row) => `${row.side} planned ${row.planned} on cat ${row.cat}`).sort());
+  expect((await marks(page, 'launch-mark')).sort()).toEqual(
+    launchedRows.map((row) => `${row.side} launched ${row.launched} on cat ${row.cat}`).sort(),
+  );
+  expect((await marks(page, 'planned-mark')).sort()).toEqual(
+    plannedRows.map((row) => `${row.side} planned ${row.planned} on cat ${row.cat}`).sort(),
+  );
 
   // The chart is named and described for people who cannot see it.
   const figure = page.getByTestId('launch-timeline');
-  await expect(figure.locator('figcaption')).toHaveText(`Cycle ${flown.number}: planned and actual launch times per catapult`);
+  await expect(figure.locator('figcaption')).toHaveText(
+    `Cycle ${flown.number}: planned and actual launch times per catapult`,
+  );
   await expect(page.getByTestId('timeline-summary')).toContainText('Cat 1: 3 of 3 launched');
   const surface = figure.locator('.recharts-wrapper > svg.recharts-surface');
-  await expect(surface.locator(':scope > title')).toHaveText(`Cycle ${flown.number}: planned and actual launch times per catapult`);
+  await expect(surface.locator(':scope > title')).toHaveText(
+    `Cycle ${flown.number}: planned and actual launch times per catapult`,
+  );
   await expect(surface.locator(':scope > desc')).toHaveText(await page.getByTestId('timeline-summary').innerText());
 
   await expect(page.getByRole('region', { name: 'Suspends' })).toContainText('Launch bar not seated');
@@ -60,7 +72,10 @@ test('the report of the flown cycle draws the same launches in its chart as its 
   await expectNoSidewaysOverflow(page);
   await page.screenshot({ path: 'test-results/reports/report-1366x768.png', fullPage: true });
 
-  const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Slots (CSV)' }).click()]);
+  const [download] = await Promise.all([
+    page.waitForEvent('download'),
+    page.getByRole('button', { name: 'Slots (CSV)' }).click(),
+  ]);
   expect(download.suggestedFilename()).toBe(`cycle-${flown.number}-slots.csv`);
   const csv = await readFile((await download.path())!, 'utf8');
   expect(csv.replace(/^\uFEFF/, '').split('\r\n')[0]).toMatch(/^slot_id,side_number,type,squadron,/);
@@ -111,7 +126,9 @@ test('the replay steps through the change log with the slider, the buttons and t
   await expect(current).toContainText(`Change ${down - 1} of ${total}`);
   await page.keyboard.press('End');
   await expect(current).toContainText(`Change ${total} of ${total}`);
-  await expect(page.locator('[data-testid="replay-slot"] [data-testid="slot-status"]', { hasText: 'Launched' })).toHaveCount(9);
+  await expect(
+    page.locator('[data-testid="replay-slot"] [data-testid="slot-status"]', { hasText: 'Launched' }),
+  ).toHaveCount(9);
   await page.getByRole('button', { name: new RegExp(`^${replay.changes[2].version} ·`) }).click();
   await expect(current).toContainText(`Change 3 of ${total}`);
   await expectNoSidewaysOverflow(page);
@@ -124,7 +141,9 @@ test('the replay steps through the change log with the slider, the buttons and t
   await tablet.context().close();
 });
 
-test('the launch sheet lists every lane in order with its figures and prints without the app around it', async ({ browser }) => {
+test('the launch sheet lists every lane in order with its figures and prints without the app around it', async ({
+  browser,
+}) => {
   const { planned, lineup } = await demo();
   const page = await openAs(browser, 'airops', `/reports/launch-sheet?cycle=${planned.id}`);
   const sheet = page.getByTestId('launch-sheet');
@@ -135,7 +154,10 @@ test('the launch sheet lists every lane in order with its figures and prints wit
     const sides = lane.slotIds.map((id) => lineup.slots.find((slot) => slot.id === id)!.sideNumber);
     await expect(sheet.getByTestId('sheet-lane').nth(index).getByTestId('sheet-row')).toHaveCount(sides.length);
     for (const [place, side] of sides.entries()) {
-      await expect(sheet.getByTestId('sheet-lane').nth(index).getByTestId('sheet-row').nth(place)).toHaveAttribute('data-side-number', side);
+      await expect(sheet.getByTestId('sheet-lane').nth(index).getByTestId('sheet-row').nth(place)).toHaveAttribute(
+        'data-side-number',
+        side,
+      );
     }
   }
   const first = lineup.slots.find((slot) => slot.id === lineup.lanes[0].slotIds[0])!;
@@ -162,11 +184,15 @@ test('the launch sheet lists every lane in order with its figures and prints wit
   await page.context().close();
 });
 
-test('shot counts over a range of days match the API, export as CSV and refuse a backward range', async ({ browser }) => {
+test('shot counts over a range of days match the API, export as CSV and refuse a backward range', async ({
+  browser,
+}) => {
   const day = (offset: number) => new Date(Date.now() + offset * 86_400_000).toISOString().slice(0, 10);
   const range = { from: day(-1), to: day(1) };
   const observer = await apiAs('observer');
-  const counts = (await (await observer.get(`/api/reports/shot-counts?from=${range.from}&to=${range.to}`)).json()) as ShotCounts;
+  const counts = (await (
+    await observer.get(`/api/reports/shot-counts?from=${range.from}&to=${range.to}`)
+  ).json()) as ShotCounts;
   await observer.dispose();
   expect(counts.totalLaunches).toBeGreaterThanOrEqual(9);
 
@@ -177,16 +203,23 @@ test('shot counts over a range of days match the API, export as CSV and refuse a
     await expect(perCatapult.locator('tbody tr').nth(index).locator('td').nth(2)).toHaveText(String(catapult.launches));
   }
   const busiest = [...counts.airframes].sort((a, b) => b.launches - a.launches)[0];
-  await expect(page.getByRole('table', { name: 'Shot counts per airframe' }).locator('tbody tr').first()).toContainText(busiest.sideNumber);
+  await expect(page.getByRole('table', { name: 'Shot counts per airframe' }).locator('tbody tr').first()).toContainText(
+    busiest.sideNumber,
+  );
   await expectNoSidewaysOverflow(page);
   await page.screenshot({ path: 'test-results/reports/shot-counts-1366x768.png', fullPage: true });
 
-  const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Export CSV' }).click()]);
+  const [download] = await Promise.all([
+    page.waitForEvent('download'),
+    page.getByRole('button', { name: 'Export CSV' }).click(),
+  ]);
   expect(download.suggestedFilename()).toBe(`shot-counts-${range.from}-to-${range.to}.csv`);
   const lines = (await readFile((await download.path())!, 'utf8')).split('\r\n').filter(Boolean);
   expect(lines).toHaveLength(1 + counts.airframes.length + counts.catapults.length);
 
   await page.goto(`/reports/shot-counts?from=${range.to}&to=${range.from}`);
-  await expect(page.getByRole('alert')).toContainText(`The range ends before it starts: to (${range.from}) is earlier than from (${range.to}).`);
+  await expect(page.getByRole('alert')).toContainText(
+    `The range ends before it starts: to (${range.from}) is earlier than from (${range.to}).`,
+  );
   await page.context().close();
 });

@@ -10,7 +10,12 @@ const sizes = [
 
 const screens = [
   { name: 'lineup', who: 'handler', path: '/lineup', ready: (page: Page) => page.getByTestId('lane').first() },
-  { name: 'cat-station', who: 'cat1', path: '/cat-station', ready: (page: Page) => page.getByTestId('current-aircraft') },
+  {
+    name: 'cat-station',
+    who: 'cat1',
+    path: '/cat-station',
+    ready: (page: Page) => page.getByTestId('current-aircraft'),
+  },
   { name: 'my-launch', who: 'pilot', path: '/my-launch', ready: (page: Page) => page.getByTestId('my-slot') },
 ];
 
@@ -38,7 +43,9 @@ async function busyCycle(night: boolean) {
   const cat1 = await apiAs('cat1');
   for (const to of ['taxiing', 'on_catapult']) {
     const slot = (await lineupOf(cat1, cycle.id)).slots.find((candidate) => candidate.id === ids[0])!;
-    const response = await cat1.post(`/api/cycles/${cycle.id}/lineup/slots/${slot.id}/advance`, { data: { slotVersion: slot.version, to } });
+    const response = await cat1.post(`/api/cycles/${cycle.id}/lineup/slots/${slot.id}/advance`, {
+      data: { slotVersion: slot.version, to },
+    });
     expect(response.ok(), await response.text()).toBe(true);
   }
   await Promise.all([handler.dispose(), cat1.dispose()]);
@@ -55,7 +62,10 @@ test('Lineup, Cat station and My launch fit a laptop, a tablet and a phone', asy
       await expect(page.getByTestId('caution-line')).toBeVisible();
       await expect(page.getByTestId('connection-state')).toHaveAttribute('data-state', 'live');
       await expectNoSidewaysOverflow(page);
-      await page.screenshot({ path: `test-results/screens/${screen.name}-${size.width}x${size.height}.png`, fullPage: true });
+      await page.screenshot({
+        path: `test-results/screens/${screen.name}-${size.width}x${size.height}.png`,
+        fullPage: true,
+      });
       await page.context().close();
     }
   }

@@ -2,13 +2,18 @@ import { expect, test } from '@playwright/test';
 import { apiAs, DEMO_PASSWORD } from './support/demo-api.js';
 import { openAs, signIn } from './support/screens.js';
 
-test('an ended session sends the person to sign in with a reason, then back to where they were', async ({ browser }) => {
+test('an ended session sends the person to sign in with a reason, then back to where they were', async ({
+  browser,
+}) => {
   const page = await openAs(browser, 'pilot2', '/fleet');
   await expect(page.getByRole('heading', { name: 'Fleet' })).toBeVisible();
 
   // Changing the password ends every session of that person, this tablet's included.
   // (and back again, from a new session, so the demo password stays the same).
-  for (const [currentPassword, newPassword] of [[DEMO_PASSWORD, 'catline-demo-2'], ['catline-demo-2', DEMO_PASSWORD]]) {
+  for (const [currentPassword, newPassword] of [
+    [DEMO_PASSWORD, 'catline-demo-2'],
+    ['catline-demo-2', DEMO_PASSWORD],
+  ]) {
     const elsewhere = await apiAs('pilot2', currentPassword);
     const response = await elsewhere.post('/api/auth/password', { data: { currentPassword, newPassword } });
     expect(response.status(), await response.text()).toBe(204);

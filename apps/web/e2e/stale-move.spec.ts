@@ -2,7 +2,9 @@ import { expect, test } from '@playwright/test';
 import { planCycle } from './support/demo-api.js';
 import { card, dragWithMouse, lane, openAs, pool } from './support/screens.js';
 
-test('a move based on a lineup that changed meanwhile is refused with the server’s reason and rolled back', async ({ browser }) => {
+test('a move based on a lineup that changed meanwhile is refused with the server’s reason and rolled back', async ({
+  browser,
+}) => {
   const { cycle } = await planCycle({ aircraft: [{ side: 'C24', grossWeightLb: 41_000 }] });
   const first = await openAs(browser, 'handler', `/lineup?cycle=${cycle.id}`);
 

@@ -62,4 +62,3 @@ export interface LaunchTableImportRow extends LaunchTableRow {
 }
 
 export type LaunchTablePreview = ImportPreview<LaunchTableImportRow>;
-

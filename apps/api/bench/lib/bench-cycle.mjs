@@ -32,8 +32,15 @@ export async function createBenchCycle(baseUrl) {
       plannedLaunchAt: new Date(start).toISOString(),
       windowStartAt: new Date(start - 300_000).toISOString(),
       windowEndAt: new Date(start + 1_800_000).toISOString(),
-      shipCourseDeg: 90, shipSpeedKt: 24, trueWindFromDeg: 90, trueWindSpeedKt: 10,
-      temperatureC: 18, pressureHpa: 1013.25, weatherCase: 'I', night: false, landingAreaInUse: false,
+      shipCourseDeg: 90,
+      shipSpeedKt: 24,
+      trueWindFromDeg: 90,
+      trueWindSpeedKt: 10,
+      temperatureC: 18,
+      pressureHpa: 1013.25,
+      weatherCase: 'I',
+      night: false,
+      landingAreaInUse: false,
     }),
     'create cycle',
   );
@@ -42,9 +49,14 @@ export async function createBenchCycle(baseUrl) {
     const weights = type.launchTable.map((row) => row.grossWeightLb);
     expectOk(
       await airops.post(`/cycles/${cycle.id}/slots`, {
-        aircraftId: plane.id, mission: 'bench', fuelLb: 9_000, stores: '',
+        aircraftId: plane.id,
+        mission: 'bench',
+        fuelLb: 9_000,
+        stores: '',
         grossWeightLb: Math.round((weights[0] + weights[weights.length - 1]) / 2),
-        tanker: i === 0, earlyWarning: false, spare: i >= BENCH_AIRCRAFT - 2,
+        tanker: i === 0,
+        earlyWarning: false,
+        spare: i >= BENCH_AIRCRAFT - 2,
       }),
       'add slot',
     );

@@ -15,7 +15,9 @@ export function apiClient(baseUrl, token) {
           method,
           agent,
           headers: {
-            ...(payload === undefined ? {} : { 'content-type': 'application/json', 'content-length': Buffer.byteLength(payload) }),
+            ...(payload === undefined
+              ? {}
+              : { 'content-type': 'application/json', 'content-length': Buffer.byteLength(payload) }),
             ...(token ? { authorization: `Bearer ${token}` } : {}),
           },
         },
@@ -45,12 +47,14 @@ export function apiClient(baseUrl, token) {
 
 export async function signIn(baseUrl, email, password = 'catline-demo') {
   const { status, body } = await apiClient(baseUrl).post('/auth/login', { email, password });
-  if (status !== 200 && status !== 201) throw new Error(`Sign-in of ${email} failed: ${status} ${JSON.stringify(body)}`);
+  if (status !== 200 && status !== 201)
+    throw new Error(`Sign-in of ${email} failed: ${status} ${JSON.stringify(body)}`);
   return body.accessToken;
 }
 
 /** Throws with the server's message unless the status is 2xx. */
 export function expectOk({ status, body }, what) {
-  if (status < 200 || status >= 300) throw new Error(`${what} failed: ${status} ${body?.message ?? JSON.stringify(body)}`);
+  if (status < 200 || status >= 300)
+    throw new Error(`${what} failed: ${status} ${body?.message ?? JSON.stringify(body)}`);
   return body;
 }

@@ -106,7 +106,10 @@ export class AircraftTypesService {
   }
 
   private designationTaken(designation: string): AircraftTypesException {
-    return new AircraftTypesException('designation_taken', `Another aircraft type is already designated ${designation}.`);
+    return new AircraftTypesException(
+      'designation_taken',
+      `Another aircraft type is already designated ${designation}.`,
+    );
   }
 
   private inUse(type: AircraftType, aircraft: number): AircraftTypesException {

@@ -4,7 +4,9 @@ import type { LaunchTableRow, TrimBand } from '@catline/contracts';
 export function launchTableProblems(rows: LaunchTableRow[]): string[] {
   return rows.flatMap((row, i) =>
     i > 0 && row.grossWeightLb <= rows[i - 1].grossWeightLb
-      ? [`Launch table row ${i + 1} (${row.grossWeightLb} lb) must be heavier than row ${i} (${rows[i - 1].grossWeightLb} lb).`]
+      ? [
+          `Launch table row ${i + 1} (${row.grossWeightLb} lb) must be heavier than row ${i} (${rows[i - 1].grossWeightLb} lb).`,
+        ]
       : [],
   );
 }
@@ -14,8 +16,10 @@ export function trimBandProblems(bands: TrimBand[]): string[] {
   const problems: string[] = [];
   bands.forEach((band, i) => {
     const last = i === bands.length - 1;
-    if (last && band.upToLb !== null) problems.push('The last trim band must have no upper weight (upToLb null) so every weight has a trim.');
-    if (!last && band.upToLb === null) problems.push(`Only the last trim band may be open-ended; band ${i + 1} has no upper weight.`);
+    if (last && band.upToLb !== null)
+      problems.push('The last trim band must have no upper weight (upToLb null) so every weight has a trim.');
+    if (!last && band.upToLb === null)
+      problems.push(`Only the last trim band may be open-ended; band ${i + 1} has no upper weight.`);
     const previous = bands[i - 1]?.upToLb;
     if (band.upToLb !== null && previous != null && band.upToLb <= previous) {
       problems.push(`Trim band ${i + 1} (up to ${band.upToLb} lb) must end above band ${i} (up to ${previous} lb).`);

@@ -23,14 +23,20 @@ export class AircraftService {
   constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
 
   async list(): Promise<AircraftView[]> {
-    const aircraft = await this.dataSource.manager.find(Aircraft, { relations: WITH_NAMES, order: { sideNumber: 'ASC' } });
+    const aircraft = await this.dataSource.manager.find(Aircraft, {
+      relations: WITH_NAMES,
+      order: { sideNumber: 'ASC' },
+    });
     return aircraft.map(toAircraftView);
   }
 
   async create(body: CreateAircraftDto): Promise<AircraftView> {
     return this.dataSource.transaction(async (manager) => {
       await this.checkReferences(manager, body);
-      const saved = await this.save(manager, manager.create(Aircraft, { ...body, serviceable: body.serviceable ?? true }));
+      const saved = await this.save(
+        manager,
+        manager.create(Aircraft, { ...body, serviceable: body.serviceable ?? true }),
+      );
       this.logger.log(`Aircraft ${saved.sideNumber} added`);
       return this.view(manager, saved.id);
     });
@@ -71,9 +77,14 @@ export class AircraftService {
     return aircraft;
   }
 
-  private async checkReferences(manager: EntityManager, body: Partial<CreateAircraftDto>, exceptId?: number): Promise<void> {
+  private async checkReferences(
+    manager: EntityManager,
+    body: Partial<CreateAircraftDto>,
+    exceptId?: number,
+  ): Promise<void> {
     if (body.sideNumber !== undefined) {
-      const where = exceptId === undefined ? { sideNumber: body.sideNumber } : { sideNumber: body.sideNumber, id: Not(exceptId) };
+      const where =
+        exceptId === undefined ? { sideNumber: body.sideNumber } : { sideNumber: body.sideNumber, id: Not(exceptId) };
       if (await manager.existsBy(Aircraft, where)) throw this.sideNumberTaken(body.sideNumber);
     }
     if (body.typeId !== undefined && !(await manager.existsBy(AircraftType, { id: body.typeId }))) {
@@ -85,7 +96,10 @@ export class AircraftService {
     if (body.parkedSpot !== undefined) {
       const spots = (await manager.find(Ship)).flatMap((ship) => ship.deckSpots.map((spot) => spot.name));
       if (!spots.includes(body.parkedSpot)) {
-        throw new AircraftException('unknown_reference', `There is no deck spot named ${body.parkedSpot}; pick one of ${spots.join(', ')}.`);
+        throw new AircraftException(
+          'unknown_reference',
+          `There is no deck spot named ${body.parkedSpot}; pick one of ${spots.join(', ')}.`,
+        );
       }
     }
   }
@@ -101,7 +115,10 @@ export class AircraftService {
   }
 
   private sideNumberTaken(sideNumber: string): AircraftException {
-    return new AircraftException('side_number_taken', `Side number ${sideNumber} is already taken by another aircraft.`);
+    return new AircraftException(
+      'side_number_taken',
+      `Side number ${sideNumber} is already taken by another aircraft.`,
+    );
   }
 
   private inUse(aircraft: Aircraft, slots: number): AircraftException {

@@ -19,13 +19,31 @@ interface Limit {
 const PER_ADDRESS = 10;
 const RESET_WINDOW_S = 15 * 60;
 
-function limits(environment: Pick<Environment, 'LOGIN_RATE_LIMIT' | 'PASSWORD_RESET_RATE_LIMIT'>): Record<AttemptKind, Limit> {
+function limits(
+  environment: Pick<Environment, 'LOGIN_RATE_LIMIT' | 'PASSWORD_RESET_RATE_LIMIT'>,
+): Record<AttemptKind, Limit> {
   const wait = (waitS: number) => `Wait ${waitS} seconds, then try again.`;
   return {
-    sign_in: { points: environment.LOGIN_RATE_LIMIT, durationS: 60, message: (s) => `Too many sign-in attempts for this e-mail. ${wait(s)}` },
-    sign_in_from: { points: environment.LOGIN_RATE_LIMIT * PER_ADDRESS, durationS: 60, message: (s) => `Too many sign-in attempts from this computer. ${wait(s)}` },
-    reset: { points: environment.PASSWORD_RESET_RATE_LIMIT, durationS: RESET_WINDOW_S, message: (s) => `Too many password requests for this e-mail. ${wait(s)}` },
-    reset_from: { points: environment.PASSWORD_RESET_RATE_LIMIT * PER_ADDRESS, durationS: RESET_WINDOW_S, message: (s) => `Too many password requests from this computer. ${wait(s)}` },
+    sign_in: {
+      points: environment.LOGIN_RATE_LIMIT,
+      durationS: 60,
+      message: (s) => `Too many sign-in attempts for this e-mail. ${wait(s)}`,
+    },
+    sign_in_from: {
+      points: environment.LOGIN_RATE_LIMIT * PER_ADDRESS,
+      durationS: 60,
+      message: (s) => `Too many sign-in attempts from this computer. ${wait(s)}`,
+    },
+    reset: {
+      points: environment.PASSWORD_RESET_RATE_LIMIT,
+      durationS: RESET_WINDOW_S,
+      message: (s) => `Too many password requests for this e-mail. ${wait(s)}`,
+    },
+    reset_from: {
+      points: environment.PASSWORD_RESET_RATE_LIMIT * PER_ADDRESS,
+      durationS: RESET_WINDOW_S,
+      message: (s) => `Too many password requests from this computer. ${wait(s)}`,
+    },
   };
 }
 
@@ -41,7 +59,10 @@ export class AttemptLimits implements OnModuleInit, OnModuleDestroy {
   private readonly redis?: ReturnType<typeof createClient>;
 
   constructor(config: ConfigService<Environment, true>) {
-    this.limits = limits({ LOGIN_RATE_LIMIT: config.get('LOGIN_RATE_LIMIT'), PASSWORD_RESET_RATE_LIMIT: config.get('PASSWORD_RESET_RATE_LIMIT') });
+    this.limits = limits({
+      LOGIN_RATE_LIMIT: config.get('LOGIN_RATE_LIMIT'),
+      PASSWORD_RESET_RATE_LIMIT: config.get('PASSWORD_RESET_RATE_LIMIT'),
+    });
     const url = config.get('REDIS_URL', { infer: true });
     if (url) {
       this.redis = createClient({ url });
@@ -49,7 +70,12 @@ export class AttemptLimits implements OnModuleInit, OnModuleDestroy {
     }
     const entries = Object.entries(this.limits).map(([kind, { points, durationS }]) => {
       const options = { points, duration: durationS, keyPrefix: `catline:attempts:${kind}` };
-      return [kind, this.redis ? new RateLimiterRedis({ ...options, storeClient: this.redis, useRedisPackage: true }) : new RateLimiterMemory(options)];
+      return [
+        kind,
+        this.redis
+          ? new RateLimiterRedis({ ...options, storeClient: this.redis, useRedisPackage: true })
+          : new RateLimiterMemory(options),
+      ];
     });
     this.limiters = Object.fromEntries(entries) as Record<AttemptKind, RateLimiterAbstract>;
   }

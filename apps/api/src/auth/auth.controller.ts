@@ -48,7 +48,10 @@ export class AuthController {
   async refresh(@Req() request: Request, @Res({ passthrough: true }) response: Response): Promise<SessionResponse> {
     const origin = request.headers.origin;
     if (request.get(REFRESH_HEADER) !== '1' || (origin !== undefined && !this.origins.includes(origin))) {
-      throw new AuthException('refresh_refused', `A session is renewed only by the Catline page itself (origin and ${REFRESH_HEADER} header).`);
+      throw new AuthException(
+        'refresh_refused',
+        `A session is renewed only by the Catline page itself (origin and ${REFRESH_HEADER} header).`,
+      );
     }
     try {
       return this.answer(await this.auth.refresh(readRefreshCookie(request)), request, response);

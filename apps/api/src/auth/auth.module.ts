@@ -29,7 +29,14 @@ import { TokenVerifier } from './token-verifier.service.js';
     }),
   ],
   controllers: [AuthController],
-  providers: [AuthService, AttemptLimits, PersonLookup, RefreshTokens, TokenVerifier, { provide: APP_GUARD, useClass: AuthGuard }],
+  providers: [
+    AuthService,
+    AttemptLimits,
+    PersonLookup,
+    RefreshTokens,
+    TokenVerifier,
+    { provide: APP_GUARD, useClass: AuthGuard },
+  ],
   exports: [AttemptLimits, TokenVerifier, RefreshTokens],
 })
 export class AuthModule {}

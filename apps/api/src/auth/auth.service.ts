@@ -41,7 +41,8 @@ export class AuthService {
     const user = await this.dataSource.manager.findOneBy(User, { email: identity });
     await this.attempts.count('sign_in', user ? `person:${user.id}` : `email:${identity}`);
     const matches = await verifyPassword(user?.passwordHash ?? (await this.decoyHash), password);
-    if (!user?.passwordHash || !matches || !user.active) throw new AuthException('invalid_credentials', BAD_CREDENTIALS);
+    if (!user?.passwordHash || !matches || !user.active)
+      throw new AuthException('invalid_credentials', BAD_CREDENTIALS);
     this.logger.log(`User ${user.id} signed in`);
     return { session: await this.sessionFor(user), refresh: await this.refreshTokens.issue(user.id) };
   }

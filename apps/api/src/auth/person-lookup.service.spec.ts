@@ -17,7 +17,9 @@ function lookup(redisUrl?: string) {
   const config = { get: () => redisUrl } as unknown as ConfigService<Environment, true>;
   const people = new PersonLookup(users, dataSource as unknown as DataSource, config);
   const personWritten = () =>
-    dataSource.subscribers.forEach((subscriber) => subscriber.afterUpdate?.({ metadata: { target: User }, queryRunner: { isTransactionActive: false } } as never));
+    dataSource.subscribers.forEach((subscriber) =>
+      subscriber.afterUpdate?.({ metadata: { target: User }, queryRunner: { isTransactionActive: false } } as never),
+    );
   return { people, reads, rows, personWritten };
 }
 

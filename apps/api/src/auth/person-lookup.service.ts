@@ -23,7 +23,8 @@ export class PersonLookup {
     @InjectDataSource() dataSource: DataSource,
     config: ConfigService<Environment, true>,
   ) {
-    if (!runsClustered({ REDIS_URL: config.get('REDIS_URL', { infer: true }) })) this.personWrites = new EntityWriteCounter(dataSource, new Set([User]));
+    if (!runsClustered({ REDIS_URL: config.get('REDIS_URL', { infer: true }) }))
+      this.personWrites = new EntityWriteCounter(dataSource, new Set([User]));
   }
 
   async byId(id: number): Promise<User | null> {

@@ -16,16 +16,29 @@ describe('toCsv', () => {
   });
 
   it('writes booleans as true/false and null as an empty cell', () => {
-    expect(toCsv(['spare', 'pilot', 'delta'], [[true, null, -2.5], [false, 'Kit Marrowby', 0]])).toBe(
-      `${BOM}spare,pilot,delta\r\ntrue,,-2.5\r\nfalse,Kit Marrowby,0\r\n`,
-    );
+    expect(
+      toCsv(
+        ['spare', 'pilot', 'delta'],
+        [
+          [true, null, -2.5],
+          [false, 'Kit Marrowby', 0],
+        ],
+      ),
+    ).toBe(`${BOM}spare,pilot,delta\r\ntrue,,-2.5\r\nfalse,Kit Marrowby,0\r\n`);
   });
 });
 
 describe('guardText', () => {
   it('defuses text a spreadsheet would run as a formula', () => {
     // OWASP "CSV Injection": cells starting with = + - @ tab or carriage return.
-    expect(['=1+1', '+1', '-1', '@SUM(A1)', '\tx', '\rx'].map(guardText)).toEqual(["'=1+1", "'+1", "'-1", "'@SUM(A1)", "'\tx", "'\rx"]);
+    expect(['=1+1', '+1', '-1', '@SUM(A1)', '\tx', '\rx'].map(guardText)).toEqual([
+      "'=1+1",
+      "'+1",
+      "'-1",
+      "'@SUM(A1)",
+      "'\tx",
+      "'\rx",
+    ]);
   });
 
   it('leaves other text alone', () => {

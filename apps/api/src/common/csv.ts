@@ -17,11 +17,14 @@ export function guardText(text: string): string {
  * UTF-8; booleans as true/false, null as an empty cell.
  */
 export function toCsv(header: readonly string[], rows: readonly (readonly CsvCell[])[]): string {
-  return stringify([header, ...rows.map((row) => row.map((cell) => (typeof cell === 'string' ? guardText(cell) : cell)))], {
-    bom: true,
-    record_delimiter: 'windows',
-    // Only the record delimiter itself is quoted by default: a bare line break would split the row elsewhere.
-    quoted_match: /[\r\n]/,
-    cast: { boolean: (value) => (value ? 'true' : 'false') },
-  });
+  return stringify(
+    [header, ...rows.map((row) => row.map((cell) => (typeof cell === 'string' ? guardText(cell) : cell)))],
+    {
+      bom: true,
+      record_delimiter: 'windows',
+      // Only the record delimiter itself is quoted by default: a bare line break would split the row elsewhere.
+      quoted_match: /[\r\n]/,
+      cast: { boolean: (value) => (value ? 'true' : 'false') },
+    },
+  );
 }

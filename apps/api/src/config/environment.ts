@@ -1,27 +1,48 @@
 import { plainToInstance, Transform } from 'class-transformer';
-import { IsIn, IsInt, IsNotEmpty, IsOptional, IsString, IsUrl, Matches, Max, Min, MinLength, validateSync } from 'class-validator';
+import {
+  IsIn,
+  IsInt,
+  IsNotEmpty,
+  IsOptional,
+  IsString,
+  IsUrl,
+  Matches,
+  Max,
+  Min,
+  MinLength,
+  validateSync,
+} from 'class-validator';
 
 /** Every setting the API reads, validated at boot: a bad value stops the start with a clear message. */
 export class Environment {
-  @IsOptional() @IsIn(['development', 'production', 'test'])
+  @IsOptional()
+  @IsIn(['development', 'production', 'test'])
   NODE_ENV: 'development' | 'production' | 'test' = 'development';
 
-  @IsInt() @Min(1) @Max(65535)
+  @IsInt()
+  @Min(1)
+  @Max(65535)
   PORT: number = 3000;
 
-  @IsString() @IsNotEmpty()
+  @IsString()
+  @IsNotEmpty()
   HOST: string = '127.0.0.1';
 
-  @IsString() @IsNotEmpty()
+  @IsString()
+  @IsNotEmpty()
   DB_HOST: string = '127.0.0.1';
 
-  @IsInt() @Min(1) @Max(65535)
+  @IsInt()
+  @Min(1)
+  @Max(65535)
   DB_PORT: number = 3307;
 
-  @IsString() @IsNotEmpty()
+  @IsString()
+  @IsNotEmpty()
   DB_NAME: string = 'catline';
 
-  @IsString() @IsNotEmpty()
+  @IsString()
+  @IsNotEmpty()
   DB_USER: string = 'catline';
 
   @IsString()
@@ -39,39 +60,52 @@ export class Environment {
   /** The replica's port; DB_PORT when unset. */
   @IsOptional()
   @Transform(({ value }: { value: unknown }) => (value === '' ? undefined : value))
-  @IsInt() @Min(1) @Max(65535)
+  @IsInt()
+  @Min(1)
+  @Max(65535)
   DB_REPLICA_PORT?: number;
 
-  @IsString() @MinLength(16, { message: 'JWT_SECRET must be at least 16 characters' })
+  @IsString()
+  @MinLength(16, { message: 'JWT_SECRET must be at least 16 characters' })
   JWT_SECRET: string;
 
   /** Comma-separated origins allowed for CORS and socket.io connections. */
-  @IsString() @IsNotEmpty()
+  @IsString()
+  @IsNotEmpty()
   WEB_ORIGINS: string = 'http://127.0.0.1:3000,http://localhost:3000';
 
   /** Sign-in attempts allowed per minute for one person (or unknown e-mail); ten times that from one client address. */
-  @IsInt() @Min(1)
+  @IsInt()
+  @Min(1)
   LOGIN_RATE_LIMIT: number = 5;
 
   /** Password-reset requests allowed per 15 minutes for one e-mail (ten times that from one client address). */
-  @IsInt() @Min(1)
+  @IsInt()
+  @Min(1)
   PASSWORD_RESET_RATE_LIMIT: number = 3;
 
   @IsIn(['on', 'off'])
   DEMO_SEED: 'on' | 'off' = 'on';
 
   /** The SMTP server mail goes to; by default the local mail catcher `npm start` runs. */
-  @IsString() @IsNotEmpty()
+  @IsString()
+  @IsNotEmpty()
   SMTP_HOST: string = '127.0.0.1';
 
-  @IsInt() @Min(1) @Max(65535)
+  @IsInt()
+  @Min(1)
+  @Max(65535)
   SMTP_PORT: number = 1025;
 
-  @IsString() @IsNotEmpty()
+  @IsString()
+  @IsNotEmpty()
   MAIL_FROM: string = 'Catline <catline@catline.example>';
 
   /** Where people open the app; the links in mails start with it. */
-  @IsUrl({ require_tld: false, protocols: ['http', 'https'], require_protocol: true }, { message: 'APP_URL must be an http(s) address' })
+  @IsUrl(
+    { require_tld: false, protocols: ['http', 'https'], require_protocol: true },
+    { message: 'APP_URL must be an http(s) address' },
+  )
   APP_URL: string = 'http://127.0.0.1:3000';
 
   /** `off` keeps mail in the outbox unsent (the integration tests, except the spec that reads mail). */
@@ -96,7 +130,10 @@ export class Environment {
    */
   @IsOptional()
   @Transform(({ value }: { value: unknown }) => (value === '' ? undefined : value))
-  @IsUrl({ require_tld: false, protocols: ['redis', 'rediss'], require_protocol: true }, { message: 'REDIS_URL must be a redis:// address' })
+  @IsUrl(
+    { require_tld: false, protocols: ['redis', 'rediss'], require_protocol: true },
+    { message: 'REDIS_URL must be a redis:// address' },
+  )
   REDIS_URL?: string;
 }
 
@@ -122,7 +159,9 @@ export function runsClustered(environment: Pick<Environment, 'REDIS_URL'>): bool
 }
 
 export function webOrigins(environment: Pick<Environment, 'WEB_ORIGINS'>): string[] {
-  return environment.WEB_ORIGINS.split(',').map((origin) => origin.trim()).filter(Boolean);
+  return environment.WEB_ORIGINS.split(',')
+    .map((origin) => origin.trim())
+    .filter(Boolean);
 }
 
 /** True when people open the app over HTTPS (APP_URL); ship networks often serve plain HTTP inside. */

@@ -43,11 +43,18 @@ export class BasisChecks {
 
   async slotAsSeen(manager: EntityManager, state: LineupState, slot: Slot, seenVersion: number): Promise<void> {
     if (slot.version === seenVersion) return;
-    const change = await this.latest(manager, state, (patch) => (patch.slots ?? []).some((view) => view.id === slot.id));
+    const change = await this.latest(manager, state, (patch) =>
+      (patch.slots ?? []).some((view) => view.id === slot.id),
+    );
     throw new LineupException('stale_basis', account(change, slot.aircraft.sideNumber));
   }
 
-  async laneAsSeen(manager: EntityManager, state: LineupState, catapult: Catapult, seenOrder: readonly number[]): Promise<void> {
+  async laneAsSeen(
+    manager: EntityManager,
+    state: LineupState,
+    catapult: Catapult,
+    seenOrder: readonly number[],
+  ): Promise<void> {
     const order = laneSlots(state, catapult.id).map((slot) => slot.id);
     if (order.length === seenOrder.length && order.every((id, index) => id === seenOrder[index])) return;
     const change = await this.latest(manager, state, (patch) =>
@@ -56,7 +63,12 @@ export class BasisChecks {
     throw new LineupException('stale_basis', account(change, `the order on cat ${catapult.number}`));
   }
 
-  async catapultAsSeen(manager: EntityManager, state: LineupState, catapult: Catapult, seen: CatapultStatus): Promise<void> {
+  async catapultAsSeen(
+    manager: EntityManager,
+    state: LineupState,
+    catapult: Catapult,
+    seen: CatapultStatus,
+  ): Promise<void> {
     if (catapult.status === seen) return;
     const change = await this.latest(manager, state, (patch) =>
       (patch.lanes ?? []).some((lane) => lane.catapultId === catapult.id && lane.status === catapult.status),

@@ -104,7 +104,9 @@ export class LineupChangeFeed {
       ticket.changes = await this.log.between(ticket.cycleId, ticket.firstVersion, last);
       ticket.state = 'committed';
     } catch (error) {
-      this.logger.error(`Cycle ${ticket.cycleId}: could not read back versions ${ticket.firstVersion}-${last}: ${String(error)}`);
+      this.logger.error(
+        `Cycle ${ticket.cycleId}: could not read back versions ${ticket.firstVersion}-${last}: ${String(error)}`,
+      );
       ticket.state = 'rolled_back';
     }
     this.drain(ticket.cycleId);

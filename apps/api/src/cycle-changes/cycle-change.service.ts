@@ -110,7 +110,8 @@ export class CycleChangeService {
           // The first change has the version the claim took; a follow-up bumps it again.
           if (recorded.length === 0) state.cycle.version += 1;
           else await this.bumpFrom(manager, state.cycle);
-          if (!draft.mirrored) state = await this.loader.load(manager, await manager.findOneByOrFail(Cycle, { id: cycleId }), state);
+          if (!draft.mirrored)
+            state = await this.loader.load(manager, await manager.findOneByOrFail(Cycle, { id: cycleId }), state);
           const after = buildSnapshot(state);
           recorded.push(await this.append(manager, state, changeKind, actor, draft, diffSnapshots(before, after)));
           before = after;

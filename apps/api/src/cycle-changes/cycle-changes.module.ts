@@ -33,6 +33,14 @@ import { LineupStateLoader } from './lineup-state.js';
     },
     LineupStateLoader,
   ],
-  exports: [Clock, BasisChecks, CycleChangeService, LineupChangeFeed, LineupChangesService, LineupSnapshotService, LineupStateLoader],
+  exports: [
+    Clock,
+    BasisChecks,
+    CycleChangeService,
+    LineupChangeFeed,
+    LineupChangesService,
+    LineupSnapshotService,
+    LineupStateLoader,
+  ],
 })
 export class CycleChangesModule {}

@@ -20,9 +20,9 @@ export async function claimNextVersion(manager: EntityManager, cycleId: number):
 
 /** Moves the locked cycle's version from `from` to the next one, and says whether it was at `from`. */
 export async function bumpVersion(manager: EntityManager, cycleId: number, from: number): Promise<boolean> {
-  const result: { affectedRows: number } = await manager.query('UPDATE cycles SET version = version + 1 WHERE id = ? AND version = ?', [
-    cycleId,
-    from,
-  ]);
+  const result: { affectedRows: number } = await manager.query(
+    'UPDATE cycles SET version = version + 1 WHERE id = ? AND version = ?',
+    [cycleId, from],
+  );
   return result.affectedRows === 1;
 }

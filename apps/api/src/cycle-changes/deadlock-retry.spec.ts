@@ -5,7 +5,8 @@ import { isDeadlock, retryOnDeadlock } from './deadlock-retry.js';
 // 1213 ER_LOCK_DEADLOCK, 1205 ER_LOCK_WAIT_TIMEOUT.
 const driverError = (errno: number, code: string) => Object.assign(new Error(code), { errno, code });
 const deadlock = () => new QueryFailedError('COMMIT', [], driverError(1213, 'ER_LOCK_DEADLOCK'));
-const lockWaitTimeout = () => new QueryFailedError('SELECT 1 FOR UPDATE', [], driverError(1205, 'ER_LOCK_WAIT_TIMEOUT'));
+const lockWaitTimeout = () =>
+  new QueryFailedError('SELECT 1 FOR UPDATE', [], driverError(1205, 'ER_LOCK_WAIT_TIMEOUT'));
 
 /** A transaction that fails with each of `failures` in turn, then answers 'done'. */
 function flaky(failures: Error[]) {

@@ -10,11 +10,13 @@ export const DEADLOCK_ATTEMPTS = 3;
 
 const logger = new Logger('DeadlockRetry');
 
-const errnoOf = (value: unknown): unknown => (typeof value === 'object' && value !== null ? (value as { errno?: unknown }).errno : undefined);
+const errnoOf = (value: unknown): unknown =>
+  typeof value === 'object' && value !== null ? (value as { errno?: unknown }).errno : undefined;
 
 /** Whether a query failed on a deadlock; TypeORM wraps the driver's error in `driverError`. */
 export function isDeadlock(error: unknown): boolean {
-  const driverError = typeof error === 'object' && error !== null ? (error as { driverError?: unknown }).driverError : undefined;
+  const driverError =
+    typeof error === 'object' && error !== null ? (error as { driverError?: unknown }).driverError : undefined;
   return errnoOf(error) === ER_LOCK_DEADLOCK || errnoOf(driverError) === ER_LOCK_DEADLOCK;
 }
 
@@ -23,7 +25,11 @@ export function isDeadlock(error: unknown): boolean {
  * pause. Only 1213: a lock wait timeout (1205) means something held a lock far too long, and
  * repeating the wait would only double it.
  */
-export async function retryOnDeadlock<T>(transaction: () => Promise<T>, attempts = DEADLOCK_ATTEMPTS, pauseMs = 25): Promise<T> {
+export async function retryOnDeadlock<T>(
+  transaction: () => Promise<T>,
+  attempts = DEADLOCK_ATTEMPTS,
+  pauseMs = 25,
+): Promise<T> {
   for (let attempt = 1; ; attempt += 1) {
     try {
       return await transaction();

@@ -30,7 +30,10 @@ export class LineupChangesService {
   }
 
   async currentVersion(cycleId: number): Promise<number> {
-    const cycle = await this.dataSource.manager.findOne(Cycle, { where: { id: cycleId }, select: { id: true, version: true } });
+    const cycle = await this.dataSource.manager.findOne(Cycle, {
+      where: { id: cycleId },
+      select: { id: true, version: true },
+    });
     if (!cycle) throw cycleNotFound(cycleId);
     return cycle.version;
   }
@@ -62,7 +65,10 @@ export class LineupChangesService {
 
   /** The result a repeated launch request is answered with: the change that recorded the launch. */
   async launchResult(manager: EntityManager, cycleId: number, slotId: number): Promise<LineupCommandResult | null> {
-    const launches = await manager.find(CycleChange, { where: { cycleId, kind: 'slot_launched' }, order: { version: 'ASC' } });
+    const launches = await manager.find(CycleChange, {
+      where: { cycleId, kind: 'slot_launched' },
+      order: { version: 'ASC' },
+    });
     const row = launches.find((candidate) => candidate.payload.command.slotId === slotId);
     return row ? { version: row.version, change: toLineupChange(row) } : null;
   }

@@ -49,7 +49,9 @@ export function laneSlots(state: LineupState, catapultId: number): Slot[] {
 }
 
 export function launchPriority(slot: Pick<Slot, 'tanker' | 'earlyWarning' | 'spare'>): LaunchPriority {
-  return priorityForRole(slot.tanker ? 'tanker' : slot.earlyWarning ? 'early_warning' : slot.spare ? 'spare' : 'mission');
+  return priorityForRole(
+    slot.tanker ? 'tanker' : slot.earlyWarning ? 'early_warning' : slot.spare ? 'spare' : 'mission',
+  );
 }
 
 /** Taxi time (s) from where the aircraft is parked to a catapult, from the ship's deck spots. */
@@ -129,11 +131,19 @@ function cycleConditions(state: LineupState): CycleConditions {
 
 function figuresIn(conditions: CycleConditions, slot: Slot): LaunchFigures | null {
   const lane = slot.catapultId === null ? undefined : conditions.lanes.get(slot.catapultId);
-  return lane ? launchFiguresView({ type: slot.aircraft.type, grossWeightLb: slot.grossWeightLb, densityRatio: conditions.density, ...lane }) : null;
+  return lane
+    ? launchFiguresView({
+        type: slot.aircraft.type,
+        grossWeightLb: slot.grossWeightLb,
+        densityRatio: conditions.density,
+        ...lane,
+      })
+    : null;
 }
 
 /** The figures of one slot on its catapult under the cycle's conditions; null in the deck pool. */
-export const slotFigures = (state: LineupState, slot: Slot): LaunchFigures | null => figuresIn(cycleConditions(state), slot);
+export const slotFigures = (state: LineupState, slot: Slot): LaunchFigures | null =>
+  figuresIn(cycleConditions(state), slot);
 
 /** The lineup snapshot of a cycle, every figure from @catline/launch-math; pure, so equal states give equal snapshots. */
 export function buildSnapshot(state: LineupState): LineupSnapshot {
@@ -142,7 +152,9 @@ export function buildSnapshot(state: LineupState): LineupSnapshot {
   const laneOrder = new Map(state.catapults.map((catapult) => [catapult.id, laneSlots(state, catapult.id)]));
   const projection = projectLineup(
     state,
-    Object.fromEntries([...laneOrder].map(([catapultId, slots]) => [String(catapultId), slots.map((slot) => String(slot.id))])),
+    Object.fromEntries(
+      [...laneOrder].map(([catapultId, slots]) => [String(catapultId), slots.map((slot) => String(slot.id))]),
+    ),
   );
   const projected = new Map(projection.slots.map((slot) => [Number(slot.slotId), slot]));
 

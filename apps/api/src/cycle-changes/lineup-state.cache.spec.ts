@@ -23,7 +23,8 @@ function cacheWithSubscribers(enabled = true) {
   const dataSource = { subscribers: [] as EntitySubscriberInterface[] };
   const cache = new LineupStateCache(dataSource as unknown as DataSource, enabled);
   /** TypeORM's side: it tells every subscriber of each write. */
-  const wrote = (target: unknown) => dataSource.subscribers.forEach((subscriber) => subscriber.afterUpdate?.(write(target)));
+  const wrote = (target: unknown) =>
+    dataSource.subscribers.forEach((subscriber) => subscriber.afterUpdate?.(write(target)));
   return { cache, subscribers: dataSource.subscribers, wrote };
 }
 

@@ -41,7 +41,10 @@ export class LineupStateLoader {
     ]);
     const aircraftById = new Map((earlier?.slots ?? []).map((slot) => [slot.aircraftId, slot.aircraft]));
     const personById = new Map(
-      (earlier?.slots ?? []).flatMap((slot) => [slot.pilot, slot.statusBy]).filter((person) => person !== null).map((person) => [person.id, person]),
+      (earlier?.slots ?? [])
+        .flatMap((slot) => [slot.pilot, slot.statusBy])
+        .filter((person) => person !== null)
+        .map((person) => [person.id, person]),
     );
     // Related rows by id in two plain queries: TypeORM's joined load of the same costs several times more.
     const missingAircraft = [...new Set(slots.map((slot) => slot.aircraftId))].filter((id) => !aircraftById.has(id));
@@ -49,8 +52,12 @@ export class LineupStateLoader {
       (id): id is number => id !== null && !personById.has(id),
     );
     const [aircraft, people] = await Promise.all([
-      missingAircraft.length === 0 ? [] : manager.find(Aircraft, { where: { id: In(missingAircraft) }, relations: { type: true, squadron: true } }),
-      missingPeople.length === 0 ? [] : manager.find(User, { where: { id: In(missingPeople) }, select: { id: true, name: true } }),
+      missingAircraft.length === 0
+        ? []
+        : manager.find(Aircraft, { where: { id: In(missingAircraft) }, relations: { type: true, squadron: true } }),
+      missingPeople.length === 0
+        ? []
+        : manager.find(User, { where: { id: In(missingPeople) }, select: { id: true, name: true } }),
     ]);
     for (const row of aircraft) aircraftById.set(row.id, row);
     for (const row of people) personById.set(row.id, row);

@@ -38,6 +38,9 @@ export class LineupException extends DomainException {
  */
 export function asLaunchDataRefusal(error: unknown): unknown {
   return error instanceof LaunchMathInputError
-    ? new LineupException('launch_data_invalid', `The launch figures cannot be computed from the stored data: ${error.message}.`)
+    ? new LineupException(
+        'launch_data_invalid',
+        `The launch figures cannot be computed from the stored data: ${error.message}.`,
+      )
     : error;
 }

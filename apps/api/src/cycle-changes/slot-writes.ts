@@ -5,7 +5,10 @@ import { Slot } from './entities/slot.entity.js';
 const movedPastVersion = (ids: number[]) =>
   new Error(`Slot ${ids.join(', ')} moved past the version read while its cycle was locked`);
 
-type SlotColumns = Omit<Slot, 'id' | 'version' | 'cycle' | 'aircraft' | 'pilot' | 'catapult' | 'statusBy' | 'statusById'>;
+type SlotColumns = Omit<
+  Slot,
+  'id' | 'version' | 'cycle' | 'aircraft' | 'pilot' | 'catapult' | 'statusBy' | 'statusById'
+>;
 
 /** Values a command writes to a slot; `statusBy` is the person who changed its status. */
 export type SlotValues = Partial<SlotColumns> & { statusBy?: Pick<User, 'id' | 'name'> };
@@ -44,7 +47,9 @@ export interface Placement {
  */
 export async function placeSlots(manager: EntityManager, ...placements: Placement[]): Promise<void> {
   const moved = placements
-    .flatMap(({ catapultId, slots }) => slots.map((slot, index) => ({ slot, catapultId, position: catapultId === null ? null : index })))
+    .flatMap(({ catapultId, slots }) =>
+      slots.map((slot, index) => ({ slot, catapultId, position: catapultId === null ? null : index })),
+    )
     .filter(({ slot, catapultId, position }) => slot.catapultId !== catapultId || slot.position !== position);
   if (moved.length === 0) return;
   const cases = moved.map(() => 'WHEN ? THEN ?').join(' ');
@@ -58,5 +63,6 @@ export async function placeSlots(manager: EntityManager, ...placements: Placemen
     ],
   );
   if (result.affectedRows !== moved.length) throw movedPastVersion(moved.map(({ slot }) => slot.id));
-  for (const { slot, catapultId, position } of moved) Object.assign(slot, { catapultId, position, version: slot.version + 1 });
+  for (const { slot, catapultId, position } of moved)
+    Object.assign(slot, { catapultId, position, version: slot.version + 1 });
 }

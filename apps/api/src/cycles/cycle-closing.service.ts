@@ -34,7 +34,12 @@ export class CycleClosing {
     if (!summary) return;
     for (const squadron of summary.squadrons) {
       const mail = composeCycleSummary(summary.input, squadron);
-      await this.outbox.enqueue(manager, { kind: 'cycle_summary', to: squadron.email, ...mail, dedupeKey: `cycle-summary:${cycle.id}:${squadron.id}` });
+      await this.outbox.enqueue(manager, {
+        kind: 'cycle_summary',
+        to: squadron.email,
+        ...mail,
+        dedupeKey: `cycle-summary:${cycle.id}:${squadron.id}`,
+      });
     }
   }
 
@@ -44,6 +49,9 @@ export class CycleClosing {
     if (state.cycle.state !== 'executing' || waiting.length > 0) return null;
     const scratched = await this.close(manager, state);
     const spares = scratched === 0 ? '' : `; ${scratched} unused spare${scratched === 1 ? '' : 's'} scratched`;
-    return { summary: `Cycle ${state.cycle.number} closed: last aircraft off${spares}`, command: { type: 'close', reason: 'last_launch' } };
+    return {
+      summary: `Cycle ${state.cycle.number} closed: last aircraft off${spares}`,
+      command: { type: 'close', reason: 'last_launch' },
+    };
   }
 }

@@ -25,14 +25,16 @@ function describeConditions(values: ConditionValues, cycle: Cycle): string {
   const parts: string[] = [];
   const changed = (...keys: (keyof ConditionValues)[]) => keys.some((key) => key in values);
   if (changed('shipCourseDeg', 'shipSpeedKt')) parts.push(`ship ${merged.shipCourseDeg}° ${merged.shipSpeedKt} kt`);
-  if (changed('trueWindFromDeg', 'trueWindSpeedKt')) parts.push(`wind ${merged.trueWindFromDeg}° ${merged.trueWindSpeedKt} kt`);
+  if (changed('trueWindFromDeg', 'trueWindSpeedKt'))
+    parts.push(`wind ${merged.trueWindFromDeg}° ${merged.trueWindSpeedKt} kt`);
   if (changed('temperatureC')) parts.push(`${merged.temperatureC} °C`);
   if (changed('pressureHpa')) parts.push(`${merged.pressureHpa} hPa`);
   if (changed('weatherCase')) parts.push(`case ${merged.weatherCase}`);
   if (changed('night')) parts.push(merged.night ? 'night' : 'day');
   if (changed('landingAreaInUse')) parts.push(merged.landingAreaInUse ? 'landing area in use' : 'landing area clear');
   if (changed('plannedLaunchAt')) parts.push(`planned launch ${clock(merged.plannedLaunchAt)}`);
-  if (changed('windowStartAt', 'windowEndAt')) parts.push(`window ${clock(merged.windowStartAt)} to ${clock(merged.windowEndAt)}`);
+  if (changed('windowStartAt', 'windowEndAt'))
+    parts.push(`window ${clock(merged.windowStartAt)} to ${clock(merged.windowEndAt)}`);
   return parts.join(', ');
 }
 
@@ -47,7 +49,9 @@ function changedConditions(request: UpdateCycleConditionsDto, cycle: Cycle): Con
       // The DTO instance holds every declared field, the ones left out as undefined.
       if (value === undefined) return false;
       const current = cycle[key as keyof Cycle];
-      return value instanceof Date && current instanceof Date ? value.getTime() !== current.getTime() : value !== current;
+      return value instanceof Date && current instanceof Date
+        ? value.getTime() !== current.getTime()
+        : value !== current;
     }),
   ) as ConditionValues;
 }
@@ -61,7 +65,11 @@ export class CycleCommandsService {
     private readonly closing: CycleClosing,
   ) {}
 
-  updateConditions(cycleId: number, actor: ChangeActor, request: UpdateCycleConditionsDto): Promise<LineupCommandResult> {
+  updateConditions(
+    cycleId: number,
+    actor: ChangeActor,
+    request: UpdateCycleConditionsDto,
+  ): Promise<LineupCommandResult> {
     return this.changes.apply(cycleId, actor, 'conditions_changed', async (manager, state) => {
       this.basis.requireOpen(state);
       await this.basis.cycleAsSeen(manager, state, request.basisVersion);
@@ -71,7 +79,10 @@ export class CycleCommandsService {
       }
       checkWindow({ ...state.cycle, ...values });
       await manager.update(Cycle, { id: cycleId }, values);
-      return { summary: `Conditions: ${describeConditions(values, state.cycle)}`, command: { type: 'conditions', ...request } };
+      return {
+        summary: `Conditions: ${describeConditions(values, state.cycle)}`,
+        command: { type: 'conditions', ...request },
+      };
     });
   }
 
@@ -79,7 +90,10 @@ export class CycleCommandsService {
     return this.changes.apply(cycleId, actor, 'cycle_started', async (manager, state) => {
       await this.basis.cycleAsSeen(manager, state, basisVersion);
       if (state.cycle.state !== 'planning') {
-        throw new CyclesException('wrong_state', `Cycle ${state.cycle.number} is ${state.cycle.state}; only a cycle in planning can start.`);
+        throw new CyclesException(
+          'wrong_state',
+          `Cycle ${state.cycle.number} is ${state.cycle.state}; only a cycle in planning can start.`,
+        );
       }
       await manager.update(Cycle, { id: cycleId }, { state: 'executing' });
       return { summary: `Cycle ${state.cycle.number} started`, command: { type: 'start', basisVersion } };
@@ -99,13 +113,17 @@ export class CycleCommandsService {
   addSlot(cycleId: number, actor: ChangeActor, request: AddSlotDto): Promise<LineupCommandResult> {
     return this.changes.apply(cycleId, actor, 'slot_added', async (manager, state) => {
       this.basis.requireOpen(state);
-      const aircraft = await manager.findOne(Aircraft, { where: { id: request.aircraftId }, relations: { type: true } });
+      const aircraft = await manager.findOne(Aircraft, {
+        where: { id: request.aircraftId },
+        relations: { type: true },
+      });
       if (!aircraft) throw new CyclesException('not_found', `Aircraft ${request.aircraftId} does not exist.`);
       const side = aircraft.sideNumber;
       if (state.slots.some((slot) => slot.aircraftId === aircraft.id)) {
         throw new CyclesException('aircraft_already_in_cycle', `${side} is already in cycle ${state.cycle.number}.`);
       }
-      if (!aircraft.serviceable) throw new CyclesException('aircraft_unserviceable', `${side} is marked unserviceable.`);
+      if (!aircraft.serviceable)
+        throw new CyclesException('aircraft_unserviceable', `${side} is marked unserviceable.`);
       const pilotId = request.pilotId ?? null;
       if (pilotId !== null) await this.checkPilot(manager, state, pilotId);
       await manager.insert(Slot, {
@@ -132,9 +150,14 @@ export class CycleCommandsService {
     if (!pilot || pilot.role !== 'pilot' || !pilot.active) {
       throw new CyclesException('invalid_pilot', `Person ${pilotId} is not an active pilot.`);
     }
-    const flying = state.slots.find((slot) => slot.pilotId === pilotId && slot.status !== 'down' && slot.status !== 'scratched');
+    const flying = state.slots.find(
+      (slot) => slot.pilotId === pilotId && slot.status !== 'down' && slot.status !== 'scratched',
+    );
     if (flying) {
-      throw new CyclesException('pilot_already_assigned', `${pilot.name} already flies ${flying.aircraft.sideNumber} in cycle ${state.cycle.number}.`);
+      throw new CyclesException(
+        'pilot_already_assigned',
+        `${pilot.name} already flies ${flying.aircraft.sideNumber} in cycle ${state.cycle.number}.`,
+      );
     }
   }
 }

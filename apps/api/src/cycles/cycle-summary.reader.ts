@@ -33,7 +33,13 @@ export async function readCycleSummary(manager: EntityManager, cycle: Cycle): Pr
   return { input: summaryInput(cycle, ship, catapults, slots, changes), squadrons: [...squadrons.values()] };
 }
 
-function summaryInput(cycle: Cycle, ship: Ship, catapults: Catapult[], slots: Slot[], changes: CycleChange[]): CycleSummaryInput {
+function summaryInput(
+  cycle: Cycle,
+  ship: Ship,
+  catapults: Catapult[],
+  slots: Slot[],
+  changes: CycleChange[],
+): CycleSummaryInput {
   const catapultNumber = new Map(catapults.map((catapult) => [catapult.id, catapult.number]));
   const sideOf = new Map(slots.map((slot) => [slot.id, slot.aircraft.sideNumber]));
   return {
@@ -53,7 +59,8 @@ function summaryInput(cycle: Cycle, ship: Ship, catapults: Catapult[], slots: Sl
       mission: slot.mission,
       pilotName: slot.pilot?.name ?? null,
       status: slot.status,
-      catapultNumber: slot.status === 'launched' && slot.catapultId !== null ? (catapultNumber.get(slot.catapultId) ?? null) : null,
+      catapultNumber:
+        slot.status === 'launched' && slot.catapultId !== null ? (catapultNumber.get(slot.catapultId) ?? null) : null,
       launchedAt: slot.launchedAt,
       replacedBy: slot.replacedBySlotId === null ? null : (sideOf.get(slot.replacedBySlotId) ?? null),
     })),

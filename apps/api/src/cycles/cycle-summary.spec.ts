@@ -39,7 +39,12 @@ const input: CycleSummaryInput = {
 
 describe('composeCycleSummary', () => {
   it("lists the squadron's own aircraft with their outcome, the cycle's totals and what happened to them", () => {
-    const mail = composeCycleSummary(input, { id: 1, name: 'Cinderwrights', code: 'CWR', email: 'cinderwrights@catline.example' });
+    const mail = composeCycleSummary(input, {
+      id: 1,
+      name: 'Cinderwrights',
+      code: 'CWR',
+      email: 'cinderwrights@catline.example',
+    });
     expect(mail.subject).toBe('Cycle 7 closed: Cinderwrights 2 of 4 launched');
     expect(mail.text.split('\n')).toEqual([
       'Cycle 7 of Brindlemark (DKT 3) is closed.',
@@ -61,7 +66,12 @@ describe('composeCycleSummary', () => {
   });
 
   it("leaves out other squadrons' aircraft and events", () => {
-    const mail = composeCycleSummary(input, { id: 2, name: 'Driftmenders', code: 'DFM', email: 'driftmenders@catline.example' });
+    const mail = composeCycleSummary(input, {
+      id: 2,
+      name: 'Driftmenders',
+      code: 'DFM',
+      email: 'driftmenders@catline.example',
+    });
     expect(mail.subject).toBe('Cycle 7 closed: Driftmenders 1 of 1 launched');
     expect(mail.text).toContain('D33 suspended on cat 2: Launch bar not seated');
     expect(mail.text).not.toContain('C21');

@@ -71,7 +71,10 @@ const launchedOf = (slots: SummarySlot[]) => slots.filter((slot) => slot.status 
 function cycleTotals(input: CycleSummaryInput): string {
   const launched = launchedOf(input.slots);
   const times = launched.flatMap((slot) => (slot.launchedAt ? [slot.launchedAt.getTime()] : [])).sort((a, b) => a - b);
-  const span = times.length > 0 ? `, first at ${hhmmss(new Date(times[0]))}, last at ${hhmmss(new Date(times[times.length - 1]))}` : '';
+  const span =
+    times.length > 0
+      ? `, first at ${hhmmss(new Date(times[0]))}, last at ${hhmmss(new Date(times[times.length - 1]))}`
+      : '';
   return `Whole cycle: ${launched.length} of ${input.slots.length} aircraft launched${span}.`;
 }
 
@@ -100,7 +103,11 @@ export function composeCycleSummary(input: CycleSummaryInput, squadron: SummaryS
     ...own.map(line),
   ];
   if (events.length > 0) {
-    lines.push('', 'What happened to these aircraft:', ...events.map((event) => `  ${hhmmss(event.at)}  ${event.summary}`));
+    lines.push(
+      '',
+      'What happened to these aircraft:',
+      ...events.map((event) => `  ${hhmmss(event.at)}  ${event.summary}`),
+    );
   }
   lines.push('', `Sent by Catline when the cycle closed. ${CAUTION}`);
   return {

@@ -41,7 +41,10 @@ export class CyclesService {
       throw new CyclesException('not_found', `Ship ${request.shipId} does not exist.`);
     }
     try {
-      const cycle = await this.dataSource.manager.save(Cycle, this.dataSource.manager.create(Cycle, { ...request, ...times }));
+      const cycle = await this.dataSource.manager.save(
+        Cycle,
+        this.dataSource.manager.create(Cycle, { ...request, ...times }),
+      );
       return this.get(cycle.id);
     } catch (error) {
       if (!isDuplicateKey(error)) throw error;
@@ -57,9 +60,16 @@ export class CyclesService {
       .addSelect("SUM(CASE WHEN slot.status = 'launched' THEN 1 ELSE 0 END)", 'launchedCount')
       .groupBy('slot.cycleId');
     if (cycleId !== undefined) query.where('slot.cycleId = :cycleId', { cycleId });
-    const rows = await query.getRawMany<{ cycleId: number | string; slotCount: number | string; launchedCount: number | string }>();
+    const rows = await query.getRawMany<{
+      cycleId: number | string;
+      slotCount: number | string;
+      launchedCount: number | string;
+    }>();
     return new Map(
-      rows.map((row) => [Number(row.cycleId), { slotCount: Number(row.slotCount), launchedCount: Number(row.launchedCount) }]),
+      rows.map((row) => [
+        Number(row.cycleId),
+        { slotCount: Number(row.slotCount), launchedCount: Number(row.launchedCount) },
+      ]),
     );
   }
 }

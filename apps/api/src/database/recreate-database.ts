@@ -8,7 +8,9 @@ type Settings = Pick<Environment, 'DB_HOST' | 'DB_PORT' | 'DB_NAME' | 'DB_USER' 
 /** Drops and recreates a throwaway database, migrates it and seeds the demo (tests, benchmarks). */
 export async function recreateDatabase(settings: Settings): Promise<void> {
   if (!/_(test|e2e|bench|cluster)\w*$/.test(settings.DB_NAME)) {
-    throw new Error(`Only throwaway databases (*_test, *_e2e, *_bench, *_cluster) are recreated, not ${settings.DB_NAME}`);
+    throw new Error(
+      `Only throwaway databases (*_test, *_e2e, *_bench, *_cluster) are recreated, not ${settings.DB_NAME}`,
+    );
   }
   const server = await createConnection({
     host: settings.DB_HOST,

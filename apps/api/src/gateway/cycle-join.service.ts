@@ -38,7 +38,8 @@ export class CycleJoinService {
       if (sinceVersion !== undefined) {
         const changes = await this.log.since(cycleId, sinceVersion, MAX_REPLAY_CHANGES + 1);
         const readUpTo = changes.at(-1)?.version ?? sinceVersion;
-        const replayable = changes.length <= MAX_REPLAY_CHANGES && (changes.length > 0 || (await this.holds(cycleId, sinceVersion)));
+        const replayable =
+          changes.length <= MAX_REPLAY_CHANGES && (changes.length > 0 || (await this.holds(cycleId, sinceVersion)));
         if (replayable) {
           if (published() > readUpTo && !lastTry) continue;
           const pending = this.feed.firstPending(cycleId) ?? Number.POSITIVE_INFINITY;

@@ -46,9 +46,12 @@ export class LineupGateway implements OnGatewayInit<CatlineServer>, OnModuleDest
   ) {}
 
   afterInit(server: CatlineServer): void {
-    server.use(socketHandshake(this.verifier, this.sessions, webOrigins({ WEB_ORIGINS: this.config.get('WEB_ORIGINS') })));
+    server.use(
+      socketHandshake(this.verifier, this.sessions, webOrigins({ WEB_ORIGINS: this.config.get('WEB_ORIGINS') })),
+    );
     const clustered = runsClustered({ REDIS_URL: this.config.get('REDIS_URL', { infer: true }) });
-    if (clustered) server.on('lineup:committed', (cycleId, version) => this.feed.noteCommittedElsewhere(cycleId, version));
+    if (clustered)
+      server.on('lineup:committed', (cycleId, version) => this.feed.noteCommittedElsewhere(cycleId, version));
     this.unsubscribe = this.feed.subscribe((change) => {
       // Sent ahead of the broadcast on the same Redis connection, so another process learns of the version
       // before its sockets get it: a socket joining there meanwhile re-reads the log instead of missing it.
@@ -70,13 +73,17 @@ export class LineupGateway implements OnGatewayInit<CatlineServer>, OnModuleDest
     @MessageBody() request: JoinCycleDto,
     @Ack() ack: (result: JoinCycleResult) => void,
   ): Promise<void> {
-    if (typeof ack !== 'function') throw new SocketRefusal('ack_required', 'cycle:join must be sent with an acknowledgement.');
+    if (typeof ack !== 'function')
+      throw new SocketRefusal('ack_required', 'cycle:join must be sent with an acknowledgement.');
     await this.joins.join(request, { enter: () => void socket.join(cycleRoom(request.cycleId)), answer: ack });
   }
 
   @Roles(...ROLES)
   @SubscribeMessage('cycle:leave')
-  async leave(@ConnectedSocket() socket: CatlineSocket, @MessageBody() request: LeaveCycleDto): Promise<{ ok: boolean }> {
+  async leave(
+    @ConnectedSocket() socket: CatlineSocket,
+    @MessageBody() request: LeaveCycleDto,
+  ): Promise<{ ok: boolean }> {
     await socket.leave(cycleRoom(request.cycleId));
     return { ok: true };
   }
@@ -84,7 +91,10 @@ export class LineupGateway implements OnGatewayInit<CatlineServer>, OnModuleDest
   /** A new access token for the same person keeps the socket open past the old token's expiry. */
   @Roles(...ROLES)
   @SubscribeMessage('session:refresh')
-  async refresh(@ConnectedSocket() socket: CatlineSocket, @MessageBody() request: RefreshSessionDto): Promise<RefreshSocketResult> {
+  async refresh(
+    @ConnectedSocket() socket: CatlineSocket,
+    @MessageBody() request: RefreshSessionDto,
+  ): Promise<RefreshSocketResult> {
     const session = await this.verifier.verifySession(request.accessToken).catch(() => null);
     if (!session) return { ok: false, message: 'That token is not valid; sign in again.' };
     if (session.user.id !== socket.data.user?.id) return { ok: false, message: 'That token belongs to someone else.' };

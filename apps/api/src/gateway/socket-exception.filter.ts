@@ -25,7 +25,8 @@ export class SocketExceptionFilter implements ExceptionFilter {
     }
     if (exception instanceof HttpException) {
       const response = exception.getResponse();
-      const messages = typeof response === 'object' && response !== null ? (response as { message?: unknown }).message : response;
+      const messages =
+        typeof response === 'object' && response !== null ? (response as { message?: unknown }).message : response;
       return Array.isArray(messages)
         ? { ok: false, code: 'validation_failed', message: `Invalid request: ${messages.join('; ')}` }
         : { ok: false, code: 'bad_request', message: exception.message };

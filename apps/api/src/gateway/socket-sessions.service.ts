@@ -19,10 +19,13 @@ export class SocketSessions {
     socket.data.user = session.user;
     socket.data.expiresAt = session.expiresAt;
     clearTimeout(this.timers.get(socket));
-    const timer = setTimeout(() => {
-      socket.emit('session:expired');
-      socket.disconnect(true);
-    }, Math.max(0, session.expiresAt.getTime() - Date.now()));
+    const timer = setTimeout(
+      () => {
+        socket.emit('session:expired');
+        socket.disconnect(true);
+      },
+      Math.max(0, session.expiresAt.getTime() - Date.now()),
+    );
     timer.unref();
     this.timers.set(socket, timer);
   }

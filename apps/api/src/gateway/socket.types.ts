@@ -14,7 +14,17 @@ export interface ProcessToProcessEvents {
   'lineup:committed': (cycleId: number, version: number) => void;
 }
 
-export type CatlineServer = Server<ClientToServerEvents, ServerToClientEvents, ProcessToProcessEvents, Partial<SocketSession>>;
-export type CatlineSocket = Socket<ClientToServerEvents, ServerToClientEvents, ProcessToProcessEvents, Partial<SocketSession>>;
+export type CatlineServer = Server<
+  ClientToServerEvents,
+  ServerToClientEvents,
+  ProcessToProcessEvents,
+  Partial<SocketSession>
+>;
+export type CatlineSocket = Socket<
+  ClientToServerEvents,
+  ServerToClientEvents,
+  ProcessToProcessEvents,
+  Partial<SocketSession>
+>;
 
 export const cycleRoom = (cycleId: number) => `cycle:${cycleId}`;

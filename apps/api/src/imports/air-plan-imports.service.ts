@@ -24,11 +24,18 @@ const NOT_FLYING: readonly SlotStatus[] = ['down', 'scratched'];
 type CycleSlot = Pick<Slot, 'aircraftId' | 'pilotId' | 'status'> & { aircraft: Pick<Aircraft, 'sideNumber'> };
 
 /** The fleet, people and cycle an air plan's lines are matched against, read with the caller's manager. */
-async function planContext(manager: EntityManager, lines: AirPlanLine[], cycleNumber: number, slots: CycleSlot[]): Promise<PlanContext> {
+async function planContext(
+  manager: EntityManager,
+  lines: AirPlanLine[],
+  cycleNumber: number,
+  slots: CycleSlot[],
+): Promise<PlanContext> {
   const sides = [...new Set(lines.map((line) => line.sideNumber))];
   const emails = [...new Set(lines.flatMap((line) => (line.pilotEmail === null ? [] : [line.pilotEmail])))];
   const [aircraft, people] = await Promise.all([
-    sides.length === 0 ? [] : manager.find(Aircraft, { where: { sideNumber: In(sides) }, relations: { type: true, squadron: true } }),
+    sides.length === 0
+      ? []
+      : manager.find(Aircraft, { where: { sideNumber: In(sides) }, relations: { type: true, squadron: true } }),
     emails.length === 0 ? [] : manager.find(User, { where: { email: In(emails) } }),
   ]);
   return {
@@ -45,12 +52,21 @@ async function planContext(manager: EntityManager, lines: AirPlanLine[], cycleNu
         },
       ]),
     ),
-    people: new Map(people.map((person) => [person.email, { id: person.id, name: person.name, email: person.email, role: person.role, active: person.active }])),
+    people: new Map(
+      people.map((person) => [
+        person.email,
+        { id: person.id, name: person.name, email: person.email, role: person.role, active: person.active },
+      ]),
+    ),
     cycle: {
       number: cycleNumber,
       aircraftIds: new Set(slots.map((slot) => slot.aircraftId)),
       pilotsFlying: new Map(
-        slots.flatMap((slot) => (slot.pilotId !== null && !NOT_FLYING.includes(slot.status) ? [[slot.pilotId, slot.aircraft.sideNumber] as const] : [])),
+        slots.flatMap((slot) =>
+          slot.pilotId !== null && !NOT_FLYING.includes(slot.status)
+            ? [[slot.pilotId, slot.aircraft.sideNumber] as const]
+            : [],
+        ),
       ),
     },
   };
@@ -73,7 +89,8 @@ export class AirPlanImports {
     const manager = this.dataSource.manager;
     const cycle = await manager.findOneBy(Cycle, { id: cycleId });
     if (!cycle) throw new ImportsException('target_not_found', `Cycle ${cycleId} does not exist.`);
-    if (cycle.state === 'closed') throw new LineupException('cycle_closed', `Cycle ${cycle.number} is closed; an air plan no longer goes into it.`);
+    if (cycle.state === 'closed')
+      throw new LineupException('cycle_closed', `Cycle ${cycle.number} is closed; an air plan no longer goes into it.`);
     const target = { kind: 'air_plan', cycleId } as const;
     const text = await this.uploads.textOf(file, target, user, AIR_PLAN_LAYOUT);
     const read = readAirPlan(text);
@@ -84,7 +101,12 @@ export class AirPlanImports {
     return toImportPreview<AirPlanRow>(upload, checked.rows);
   }
 
-  confirm(cycleId: number, uploadId: number, basisVersion: number, user: AuthenticatedUser): Promise<LineupCommandResult> {
+  confirm(
+    cycleId: number,
+    uploadId: number,
+    basisVersion: number,
+    user: AuthenticatedUser,
+  ): Promise<LineupCommandResult> {
     return this.changes.apply(cycleId, actorOf(user), 'air_plan_imported', async (manager, state) => {
       this.basis.requireOpen(state);
       const upload = await this.uploads.importable(manager, uploadId, { kind: 'air_plan', cycleId });
@@ -118,7 +140,9 @@ export class AirPlanImports {
   }
 
   private outOfDate(checked: CheckedPlan): ImportsException {
-    const details = sortProblems(checked.problems, AIR_PLAN_COLUMNS).map((problem) => `Line ${problem.row}: ${problem.reason}`);
+    const details = sortProblems(checked.problems, AIR_PLAN_COLUMNS).map(
+      (problem) => `Line ${problem.row}: ${problem.reason}`,
+    );
     return new ImportsException(
       'import_out_of_date',
       `Nothing was imported: since the preview, ${details.length === 1 ? 'a problem has' : `${details.length} problems have`} come up (${details[0]}). Upload the file again to see them all.`,

@@ -26,7 +26,11 @@ export const AIR_PLAN_COLUMNS = [
 ] as const;
 export type AirPlanColumn = (typeof AIR_PLAN_COLUMNS)[number];
 
-export const AIR_PLAN_LAYOUT: CsvLayout<AirPlanColumn> = { columns: AIR_PLAN_COLUMNS, maxRows: 200, rowNoun: 'aircraft' };
+export const AIR_PLAN_LAYOUT: CsvLayout<AirPlanColumn> = {
+  columns: AIR_PLAN_COLUMNS,
+  maxRows: 200,
+  rowNoun: 'aircraft',
+};
 
 /** The template's header and one example line (an invented sortie of the demo fleet). */
 export const AIR_PLAN_TEMPLATE = toCsv(AIR_PLAN_COLUMNS, [
@@ -51,7 +55,9 @@ const PARSERS: Parsers = {
 };
 
 /** Reads each cell of one line; the line when every cell is right, its problems otherwise. */
-export function readAirPlanLine(record: CsvRecord<AirPlanColumn>): { line: AirPlanLine } | { problems: ImportProblem[] } {
+export function readAirPlanLine(
+  record: CsvRecord<AirPlanColumn>,
+): { line: AirPlanLine } | { problems: ImportProblem[] } {
   const values: Partial<Record<AirPlanColumn, unknown>> = {};
   const problems: ImportProblem[] = [];
   for (const column of AIR_PLAN_COLUMNS) {

@@ -66,18 +66,25 @@ export function checkAirPlan(lines: AirPlanLine[], context: PlanContext): Checke
 
   for (const line of lines) {
     const before = problems.length;
-    const flag = (column: string, value: string | null, reason: string) => problems.push({ row: line.row, column, value, reason });
+    const flag = (column: string, value: string | null, reason: string) =>
+      problems.push({ row: line.row, column, value, reason });
 
     const aircraft = context.aircraft.get(sideKey(line.sideNumber));
     const side = aircraft?.sideNumber ?? line.sideNumber;
     const earlier = firstLineOfSide.get(sideKey(side));
     if (!aircraft) flag('side_number', line.sideNumber, `No aircraft has the side number ${line.sideNumber}.`);
-    else if (earlier !== undefined) flag('side_number', line.sideNumber, `${side} is already on line ${earlier}; an aircraft flies once in a cycle.`);
-    else if (cycle.aircraftIds.has(aircraft.id)) flag('side_number', line.sideNumber, `${side} is already in cycle ${cycle.number}.`);
+    else if (earlier !== undefined)
+      flag('side_number', line.sideNumber, `${side} is already on line ${earlier}; an aircraft flies once in a cycle.`);
+    else if (cycle.aircraftIds.has(aircraft.id))
+      flag('side_number', line.sideNumber, `${side} is already in cycle ${cycle.number}.`);
     else if (!aircraft.serviceable) flag('side_number', line.sideNumber, `${side} is marked unserviceable.`);
     if (earlier === undefined) firstLineOfSide.set(sideKey(side), line.row);
     if (aircraft && line.grossWeightLb > aircraft.maxGrossWeightLb) {
-      flag('gross_weight_lb', String(line.grossWeightLb), `Over the ${aircraft.typeDesignation} maximum gross weight of ${aircraft.maxGrossWeightLb} lb.`);
+      flag(
+        'gross_weight_lb',
+        String(line.grossWeightLb),
+        `Over the ${aircraft.typeDesignation} maximum gross weight of ${aircraft.maxGrossWeightLb} lb.`,
+      );
     }
 
     const pilot = line.pilotEmail === null ? undefined : context.people.get(line.pilotEmail);
@@ -85,9 +92,16 @@ export function checkAirPlan(lines: AirPlanLine[], context: PlanContext): Checke
       const flying = pilot ? cycle.pilotsFlying.get(pilot.id) : undefined;
       const pilotEarlier = pilot ? firstLineOfPilot.get(pilot.id) : undefined;
       if (!pilot) flag('pilot_email', line.pilotEmail, 'Nobody signs in with this e-mail.');
-      else if (pilot.role !== 'pilot' || !pilot.active) flag('pilot_email', line.pilotEmail, `${pilot.name} is not an active pilot.`);
-      else if (flying) flag('pilot_email', line.pilotEmail, `${pilot.name} already flies ${flying} in cycle ${cycle.number}.`);
-      else if (pilotEarlier) flag('pilot_email', line.pilotEmail, `${pilot.name} already flies ${pilotEarlier.side} on line ${pilotEarlier.line}.`);
+      else if (pilot.role !== 'pilot' || !pilot.active)
+        flag('pilot_email', line.pilotEmail, `${pilot.name} is not an active pilot.`);
+      else if (flying)
+        flag('pilot_email', line.pilotEmail, `${pilot.name} already flies ${flying} in cycle ${cycle.number}.`);
+      else if (pilotEarlier)
+        flag(
+          'pilot_email',
+          line.pilotEmail,
+          `${pilot.name} already flies ${pilotEarlier.side} on line ${pilotEarlier.line}.`,
+        );
       if (pilot && !pilotEarlier) firstLineOfPilot.set(pilot.id, { line: line.row, side });
     }
 
@@ -98,7 +112,8 @@ export function checkAirPlan(lines: AirPlanLine[], context: PlanContext): Checke
       squadronCode: aircraft?.squadronCode ?? null,
       pilotName: pilot?.name ?? null,
     });
-    if (problems.length === before && aircraft) resolved.push({ ...line, sideNumber: side, aircraftId: aircraft.id, pilotId: pilot?.id ?? null });
+    if (problems.length === before && aircraft)
+      resolved.push({ ...line, sideNumber: side, aircraftId: aircraft.id, pilotId: pilot?.id ?? null });
   }
   return { rows, resolved, problems };
 }

@@ -1,5 +1,16 @@
 import type { AirPlanPreview, LineupCommandResult } from '@catline/contracts';
-import { Body, Controller, Get, Header, HttpCode, HttpStatus, Param, ParseIntPipe, Post, UploadedFile } from '@nestjs/common';
+import {
+  Body,
+  Controller,
+  Get,
+  Header,
+  HttpCode,
+  HttpStatus,
+  Param,
+  ParseIntPipe,
+  Post,
+  UploadedFile,
+} from '@nestjs/common';
 import { ApiBearerAuth, ApiProduces, ApiTags } from '@nestjs/swagger';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';

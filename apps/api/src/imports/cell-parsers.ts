@@ -8,9 +8,13 @@ export type Cell<T> = { value: T } | { reason: string };
 
 export const isProblem = <T>(cell: Cell<T>): cell is { reason: string } => 'reason' in cell;
 
-export function text(raw: string, { required, maxLength, what }: { required: boolean; maxLength: number; what: string }): Cell<string> {
+export function text(
+  raw: string,
+  { required, maxLength, what }: { required: boolean; maxLength: number; what: string },
+): Cell<string> {
   if (required && raw === '') return { reason: `${what} is required.` };
-  if (raw.length > maxLength) return { reason: `${what} has at most ${maxLength} characters; this one has ${raw.length}.` };
+  if (raw.length > maxLength)
+    return { reason: `${what} has at most ${maxLength} characters; this one has ${raw.length}.` };
   if (UNSAFE_TEXT.test(raw)) return { reason: `${what} must not hold control or text-direction characters.` };
   return { value: raw };
 }

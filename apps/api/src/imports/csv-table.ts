@@ -17,16 +17,24 @@ export interface CsvRecord<Column extends string> {
 }
 
 export type CsvTable<Column extends string> =
-  | { ok: true; records: CsvRecord<Column>[]; problems: ImportProblem[] }
-  | { ok: false; problems: ImportProblem[] };
+  { ok: true; records: CsvRecord<Column>[]; problems: ImportProblem[] } | { ok: false; problems: ImportProblem[] };
 
-const fileProblem = (reason: string, row = 1, value: string | null = null): ImportProblem => ({ row, column: null, value, reason });
+const fileProblem = (reason: string, row = 1, value: string | null = null): ImportProblem => ({
+  row,
+  column: null,
+  value,
+  reason,
+});
 
 /**
  * Why the header line is refused before the file is read, or null: a header of many more cells than the
  * layout has (60,000 made-up columns) would otherwise be parsed whole and answered one problem a column.
  */
-export function headerWidthProblem<Column extends string>(text: string, layout: CsvLayout<Column>, fileNoun: string): string | null {
+export function headerWidthProblem<Column extends string>(
+  text: string,
+  layout: CsvLayout<Column>,
+  fileNoun: string,
+): string | null {
   const end = text.indexOf('\n');
   const header = end === -1 ? text : text.slice(0, end);
   const cells = header.split(',').length;
@@ -74,7 +82,12 @@ function headerProblems<Column extends string>(header: string[], layout: CsvLayo
       const shown = header[i].length > 40 ? `${header[i].slice(0, 40)}…` : header[i];
       problems.push(fileProblem(`Unknown column "${shown}"; the columns are ${known}.`, 1, header[i]));
     } else if (names.indexOf(name) !== i) {
-      problems.push({ row: 1, column: name, value: header[i], reason: 'This column is named twice in the header line.' });
+      problems.push({
+        row: 1,
+        column: name,
+        value: header[i],
+        reason: 'This column is named twice in the header line.',
+      });
     }
   });
   for (const column of layout.columns) {
@@ -94,14 +107,27 @@ export function readCsvTable<Column extends string>(text: string, layout: CsvLay
   const records = parseRecords(text);
   if (!Array.isArray(records)) return { ok: false, problems: [records] };
   if (records.length === 0) {
-    return { ok: false, problems: [fileProblem(`The file is empty: it needs the header line (${layout.columns.join(',')}) and a line per ${layout.rowNoun}.`)] };
+    return {
+      ok: false,
+      problems: [
+        fileProblem(
+          `The file is empty: it needs the header line (${layout.columns.join(',')}) and a line per ${layout.rowNoun}.`,
+        ),
+      ],
+    };
   }
   const [header, ...data] = records;
   const problems = headerProblems(header.cells, layout);
   if (problems.length > 0) return { ok: false, problems };
-  if (data.length === 0) return { ok: false, problems: [fileProblem(`The file has the header line but no ${layout.rowNoun} under it.`)] };
+  if (data.length === 0)
+    return { ok: false, problems: [fileProblem(`The file has the header line but no ${layout.rowNoun} under it.`)] };
   if (data.length > layout.maxRows) {
-    return { ok: false, problems: [fileProblem(`The file has ${data.length} lines under the header; one upload takes at most ${layout.maxRows}.`)] };
+    return {
+      ok: false,
+      problems: [
+        fileProblem(`The file has ${data.length} lines under the header; one upload takes at most ${layout.maxRows}.`),
+      ],
+    };
   }
   const order = header.cells.map((name) => name.toLowerCase() as Column);
   const read: CsvRecord<Column>[] = [];
@@ -111,7 +137,10 @@ export function readCsvTable<Column extends string>(text: string, layout: CsvLay
       lineProblems.push(fileProblem(`This line has ${cells.length} cells; the header line has ${order.length}.`, line));
       continue;
     }
-    read.push({ line, cells: Object.fromEntries(order.map((column, i) => [column, cells[i]])) as Record<Column, string> });
+    read.push({
+      line,
+      cells: Object.fromEntries(order.map((column, i) => [column, cells[i]])) as Record<Column, string>,
+    });
   }
   return { ok: true, records: read, problems: lineProblems };
 }

@@ -11,7 +11,13 @@ export const CsvUpload = () =>
       schema: {
         type: 'object',
         required: [CSV_FIELD],
-        properties: { [CSV_FIELD]: { type: 'string', format: 'binary', description: `A .csv file, UTF-8, at most ${CSV_MAX_BYTES / 1024} KB.` } },
+        properties: {
+          [CSV_FIELD]: {
+            type: 'string',
+            format: 'binary',
+            description: `A .csv file, UTF-8, at most ${CSV_MAX_BYTES / 1024} KB.`,
+          },
+        },
       },
     }),
   );

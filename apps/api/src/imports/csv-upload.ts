@@ -36,10 +36,16 @@ export class CsvUploadInterceptor implements NestInterceptor {
       return await this.multer.intercept(context, next);
     } catch (error) {
       if (error instanceof PayloadTooLargeException) {
-        throw new ImportsException('file_too_large', `The file is larger than ${CSV_MAX_BYTES / 1024} KB; nothing was read. Split it or remove what is not needed.`);
+        throw new ImportsException(
+          'file_too_large',
+          `The file is larger than ${CSV_MAX_BYTES / 1024} KB; nothing was read. Split it or remove what is not needed.`,
+        );
       }
       if (error instanceof HttpException) {
-        throw new ImportsException('file_missing', `The upload could not be read (${error.message}). Send one CSV file in the form field "${CSV_FIELD}".`);
+        throw new ImportsException(
+          'file_missing',
+          `The upload could not be read (${error.message}). Send one CSV file in the form field "${CSV_FIELD}".`,
+        );
       }
       throw error;
     }
@@ -56,7 +62,8 @@ function hasBinaryBytes(buffer: Buffer): boolean {
 
 /** Why the file is not a CSV text we read, or null when it is one. */
 export function notCsvReason(file: UploadedCsv): string | null {
-  if (!/\.csv$/i.test(file.originalname)) return `"${file.originalname}" is not a .csv file; save the sheet as CSV (UTF-8) and upload that.`;
+  if (!/\.csv$/i.test(file.originalname))
+    return `"${file.originalname}" is not a .csv file; save the sheet as CSV (UTF-8) and upload that.`;
   const mime = file.mimetype.toLowerCase().split(';')[0].trim();
   if (!CSV_MIME_TYPES.includes(mime)) return `The file was sent as ${mime}, not as CSV text (text/csv).`;
   if (hasBinaryBytes(file.buffer)) {

@@ -37,10 +37,15 @@ export class LaunchTableImports {
       const type = await manager.findOne(AircraftType, { where: { id: typeId }, lock: { mode: 'pessimistic_write' } });
       if (!type) throw notFound(typeId);
       const upload = await this.uploads.importable(manager, uploadId, { kind: 'launch_table', aircraftTypeId: typeId });
-      type.launchTable = (upload.rows as LaunchTableImportRow[]).map(({ grossWeightLb, minLaunchAirspeedKt }) => ({ grossWeightLb, minLaunchAirspeedKt }));
+      type.launchTable = (upload.rows as LaunchTableImportRow[]).map(({ grossWeightLb, minLaunchAirspeedKt }) => ({
+        grossWeightLb,
+        minLaunchAirspeedKt,
+      }));
       await manager.save(AircraftType, type);
       await this.uploads.markImported(manager, upload, user);
-      this.logger.log(`Launch table of ${type.designation} replaced from upload ${upload.id} (${type.launchTable.length} rows)`);
+      this.logger.log(
+        `Launch table of ${type.designation} replaced from upload ${upload.id} (${type.launchTable.length} rows)`,
+      );
       return toAircraftTypeView(type);
     });
   }

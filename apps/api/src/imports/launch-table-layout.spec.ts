@@ -15,10 +15,22 @@ describe('readLaunchTable', () => {
   });
 
   it('refuses a weight no heavier than the line before, and bad figures, by line', () => {
-    const { problems } = readLaunchTable('gross_weight_lb,min_launch_airspeed_kt\n25000,121\n25000,125\n24000,119\nheavy,0\n31000,-4\n');
+    const { problems } = readLaunchTable(
+      'gross_weight_lb,min_launch_airspeed_kt\n25000,121\n25000,125\n24000,119\nheavy,0\n31000,-4\n',
+    );
     expect(problems).toEqual([
-      { row: 3, column: 'gross_weight_lb', value: '25000', reason: 'Must be heavier than line 2 (25000 lb): the weights must rise from line to line.' },
-      { row: 4, column: 'gross_weight_lb', value: '24000', reason: 'Must be heavier than line 2 (25000 lb): the weights must rise from line to line.' },
+      {
+        row: 3,
+        column: 'gross_weight_lb',
+        value: '25000',
+        reason: 'Must be heavier than line 2 (25000 lb): the weights must rise from line to line.',
+      },
+      {
+        row: 4,
+        column: 'gross_weight_lb',
+        value: '24000',
+        reason: 'Must be heavier than line 2 (25000 lb): the weights must rise from line to line.',
+      },
       { row: 5, column: 'gross_weight_lb', value: 'heavy', reason: 'Must be a number of lb, e.g. 132 or 132.5.' },
       { row: 5, column: 'min_launch_airspeed_kt', value: '0', reason: 'Must be more than 0.' },
       { row: 6, column: 'min_launch_airspeed_kt', value: '-4', reason: 'Cannot be negative.' },

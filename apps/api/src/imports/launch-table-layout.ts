@@ -8,7 +8,11 @@ import { type CsvLayout, readCsvTable } from './csv-table.js';
 export const LAUNCH_TABLE_COLUMNS = ['gross_weight_lb', 'min_launch_airspeed_kt'] as const;
 export type LaunchTableColumn = (typeof LAUNCH_TABLE_COLUMNS)[number];
 
-export const LAUNCH_TABLE_LAYOUT: CsvLayout<LaunchTableColumn> = { columns: LAUNCH_TABLE_COLUMNS, maxRows: 100, rowNoun: 'table row' };
+export const LAUNCH_TABLE_LAYOUT: CsvLayout<LaunchTableColumn> = {
+  columns: LAUNCH_TABLE_COLUMNS,
+  maxRows: 100,
+  rowNoun: 'table row',
+};
 
 /** Header and two invented example lines. */
 export const LAUNCH_TABLE_TEMPLATE = toCsv(LAUNCH_TABLE_COLUMNS, [
@@ -31,8 +35,14 @@ export function readLaunchTable(text: string): { rows: LaunchTableImportRow[]; p
   const problems = [...table.problems];
   const rows: LaunchTableImportRow[] = [];
   for (const record of table.records) {
-    const cells = LAUNCH_TABLE_COLUMNS.map((column) => ({ column, raw: record.cells[column], cell: positiveDecimal(record.cells[column], LIMITS[column]) }));
-    const wrong = cells.flatMap(({ column, raw, cell }) => (isProblem(cell) ? [{ row: record.line, column, value: raw, reason: cell.reason }] : []));
+    const cells = LAUNCH_TABLE_COLUMNS.map((column) => ({
+      column,
+      raw: record.cells[column],
+      cell: positiveDecimal(record.cells[column], LIMITS[column]),
+    }));
+    const wrong = cells.flatMap(({ column, raw, cell }) =>
+      isProblem(cell) ? [{ row: record.line, column, value: raw, reason: cell.reason }] : [],
+    );
     if (wrong.length > 0) {
       problems.push(...wrong);
       continue;
@@ -51,7 +61,12 @@ export function readLaunchTable(text: string): { rows: LaunchTableImportRow[]; p
     rows.push({ row: record.line, grossWeightLb: weight, minLaunchAirspeedKt: airspeed });
   }
   if (problems.length === 0 && rows.length < 2) {
-    problems.push({ row: 1, column: null, value: null, reason: 'A launch table needs at least two rows to interpolate between.' });
+    problems.push({
+      row: 1,
+      column: null,
+      value: null,
+      reason: 'A launch table needs at least two rows to interpolate between.',
+    });
   }
   return { rows, problems };
 }

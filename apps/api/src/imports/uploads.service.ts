@@ -20,7 +20,9 @@ export const REJECTED_UPLOAD_LIFETIME_MS = 24 * 3_600_000;
 /** The problem as kept and answered: its cell cut short, so a huge cell is not repeated back whole. */
 function shortened(problem: ImportProblem): ImportProblem {
   const { value } = problem;
-  return value !== null && value.length > MAX_PROBLEM_VALUE_CHARS ? { ...problem, value: `${value.slice(0, MAX_PROBLEM_VALUE_CHARS)}…` } : problem;
+  return value !== null && value.length > MAX_PROBLEM_VALUE_CHARS
+    ? { ...problem, value: `${value.slice(0, MAX_PROBLEM_VALUE_CHARS)}…` }
+    : problem;
 }
 
 /** Keeps every upload with its outcome, and hands a confirmed one over exactly once. */
@@ -31,7 +33,12 @@ export class UploadsService {
   constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
 
   /** The file's CSV text; a file that is not CSV text, or whose header is far wider than the layout, is kept as rejected and refused. */
-  async textOf<Column extends string>(file: UploadedCsv | undefined, target: UploadTarget, by: AuthenticatedUser, layout: CsvLayout<Column>): Promise<string> {
+  async textOf<Column extends string>(
+    file: UploadedCsv | undefined,
+    target: UploadTarget,
+    by: AuthenticatedUser,
+    layout: CsvLayout<Column>,
+  ): Promise<string> {
     if (!file) throw new ImportsException('file_missing', `Attach the CSV file in the form field "${CSV_FIELD}".`);
     const reason = notCsvReason(file);
     if (reason !== null) {
@@ -51,9 +58,18 @@ export class UploadsService {
    * Keeps the upload: accepted when nothing is wrong, rejected otherwise, with its first problems and
    * their count; the rows only when accepted. Rejected uploads older than a day go at the same time.
    */
-  async record(file: UploadedCsv, target: UploadTarget, by: AuthenticatedUser, problems: ImportProblem[], rows: object[] | null): Promise<Upload> {
+  async record(
+    file: UploadedCsv,
+    target: UploadTarget,
+    by: AuthenticatedUser,
+    problems: ImportProblem[],
+    rows: object[] | null,
+  ): Promise<Upload> {
     const accepted = problems.length === 0;
-    await this.dataSource.manager.delete(Upload, { result: 'rejected', uploadedAt: LessThan(new Date(Date.now() - REJECTED_UPLOAD_LIFETIME_MS)) });
+    await this.dataSource.manager.delete(Upload, {
+      result: 'rejected',
+      uploadedAt: LessThan(new Date(Date.now() - REJECTED_UPLOAD_LIFETIME_MS)),
+    });
     const upload = this.dataSource.manager.create(Upload, {
       kind: target.kind,
       cycleId: target.kind === 'air_plan' ? target.cycleId : null,
@@ -72,7 +88,9 @@ export class UploadsService {
       importedById: null,
     });
     await this.dataSource.manager.save(Upload, upload);
-    this.logger.log(`Upload ${upload.id} (${upload.kind}, ${upload.fileName}, ${upload.sizeBytes} B) ${upload.result} with ${upload.problemCount} problems`);
+    this.logger.log(
+      `Upload ${upload.id} (${upload.kind}, ${upload.fileName}, ${upload.sizeBytes} B) ${upload.result} with ${upload.problemCount} problems`,
+    );
     return upload;
   }
 
@@ -82,7 +100,10 @@ export class UploadsService {
     const targetId = target.kind === 'air_plan' ? upload?.cycleId : upload?.aircraftTypeId;
     const wanted = target.kind === 'air_plan' ? target.cycleId : target.aircraftTypeId;
     if (!upload || upload.kind !== target.kind || targetId !== wanted) {
-      throw new ImportsException('upload_not_found', `There is no ${KIND_NAMES[target.kind]} upload ${id} for this ${target.kind === 'air_plan' ? 'cycle' : 'aircraft type'}.`);
+      throw new ImportsException(
+        'upload_not_found',
+        `There is no ${KIND_NAMES[target.kind]} upload ${id} for this ${target.kind === 'air_plan' ? 'cycle' : 'aircraft type'}.`,
+      );
     }
     if (upload.result === 'imported') {
       throw new ImportsException('upload_not_importable', `${upload.fileName} (upload ${id}) is already imported.`);
@@ -97,6 +118,10 @@ export class UploadsService {
   }
 
   async markImported(manager: EntityManager, upload: Upload, by: AuthenticatedUser): Promise<void> {
-    await manager.update(Upload, { id: upload.id }, { result: 'imported', importedAt: new Date(), importedById: by.id });
+    await manager.update(
+      Upload,
+      { id: upload.id },
+      { result: 'imported', importedAt: new Date(), importedById: by.id },
+    );
   }
 }

@@ -18,7 +18,8 @@ import type { LineupState } from '../cycle-changes/lineup-state.js';
 import { LineupException } from '../cycle-changes/lineup.exception.js';
 import { placeSlots, updateSlot } from '../cycle-changes/slot-writes.js';
 
-const sameOrder = (a: readonly Slot[], b: readonly Slot[]) => a.length === b.length && a.every((slot, i) => slot.id === b[i].id);
+const sameOrder = (a: readonly Slot[], b: readonly Slot[]) =>
+  a.length === b.length && a.every((slot, i) => slot.id === b[i].id);
 
 /** Lane slots that hold their place: launched, or already in the readiness steps. */
 const heldPlaces = (lane: readonly Slot[]) => lane.filter((slot) => slot.status !== 'planned');
@@ -41,9 +42,13 @@ export class LineupCommandsService {
       await this.basis.slotAsSeen(manager, state, slot, request.slotVersion);
       const side = slot.aircraft.sideNumber;
       if (slot.status !== 'planned') {
-        throw new LineupException('slot_not_movable', `${side} is ${slot.status.replaceAll('_', ' ')}; only planned aircraft can be moved.`);
+        throw new LineupException(
+          'slot_not_movable',
+          `${side} is ${slot.status.replaceAll('_', ' ')}; only planned aircraft can be moved.`,
+        );
       }
-      const source = slot.catapultId === null ? [] : laneSlots(state, slot.catapultId).filter((other) => other.id !== slot.id);
+      const source =
+        slot.catapultId === null ? [] : laneSlots(state, slot.catapultId).filter((other) => other.id !== slot.id);
       const command = { type: 'move', ...request };
       if (request.toCatapultId === null) {
         if (slot.catapultId === null) throw new LineupException('no_change', `${side} is already in the deck pool.`);
@@ -64,11 +69,21 @@ export class LineupCommandsService {
       }
       target.splice(request.toIndex, 0, slot);
       if (sameOrder(target, current)) {
-        throw new LineupException('no_change', `${side} is already at place ${request.toIndex + 1} on cat ${catapult.number}.`);
+        throw new LineupException(
+          'no_change',
+          `${side} is already at place ${request.toIndex + 1} on cat ${catapult.number}.`,
+        );
       }
-      const left = slot.catapultId !== null && slot.catapultId !== catapult.id ? [{ catapultId: slot.catapultId, slots: source }] : [];
+      const left =
+        slot.catapultId !== null && slot.catapultId !== catapult.id
+          ? [{ catapultId: slot.catapultId, slots: source }]
+          : [];
       await placeSlots(manager, ...left, { catapultId: catapult.id, slots: target });
-      return { summary: `${side} moved to cat ${catapult.number}, place ${request.toIndex + 1}`, command, mirrored: true };
+      return {
+        summary: `${side} moved to cat ${catapult.number}, place ${request.toIndex + 1}`,
+        command,
+        mirrored: true,
+      };
     });
   }
 
@@ -78,7 +93,9 @@ export class LineupCommandsService {
       await this.basis.cycleAsSeen(manager, state, request.basisVersion);
       const placed = this.suggestedLanes(state, request);
       const listed = new Set([...placed.values()].flat().map((slot) => slot.id));
-      const pooled = state.slots.filter((slot) => slot.status === 'planned' && slot.catapultId !== null && !listed.has(slot.id));
+      const pooled = state.slots.filter(
+        (slot) => slot.status === 'planned' && slot.catapultId !== null && !listed.has(slot.id),
+      );
       const lanes = state.catapults.map((catapult) => {
         const lane = laneSlots(state, catapult.id);
         return { catapult, lane, next: [...heldPlaces(lane), ...(placed.get(catapult.id) ?? [])] };
@@ -92,11 +109,20 @@ export class LineupCommandsService {
         ...lanes.map(({ catapult, next }) => ({ catapultId: catapult.id, slots: next })),
       );
       const counts = lanes.map(({ catapult, next }) => `cat ${catapult.number} ×${next.length}`);
-      return { summary: `Suggested lineup applied: ${counts.join(', ')}`, command: { type: 'apply_suggestion', ...request }, mirrored: true };
+      return {
+        summary: `Suggested lineup applied: ${counts.join(', ')}`,
+        command: { type: 'apply_suggestion', ...request },
+        mirrored: true,
+      };
     });
   }
 
-  markDown(cycleId: number, actor: ChangeActor, slotId: number, request: MarkDownRequest): Promise<LineupCommandResult> {
+  markDown(
+    cycleId: number,
+    actor: ChangeActor,
+    slotId: number,
+    request: MarkDownRequest,
+  ): Promise<LineupCommandResult> {
     return this.changes.apply(cycleId, actor, 'aircraft_down', async (manager, state) => {
       this.basis.requireOpen(state);
       const slot = this.basis.slot(state, slotId);
@@ -169,15 +195,20 @@ export class LineupCommandsService {
     const seen = new Set<number>();
     for (const lane of request.lanes) {
       const catapult = this.basis.catapult(state, lane.catapultId);
-      if (lanes.has(catapult.id)) throw new LineupException('invalid_lineup', `Cat ${catapult.number} is listed twice.`);
+      if (lanes.has(catapult.id))
+        throw new LineupException('invalid_lineup', `Cat ${catapult.number} is listed twice.`);
       lanes.set(
         catapult.id,
         lane.slotIds.map((slotId) => {
           const slot = this.basis.slot(state, slotId);
-          if (seen.has(slotId)) throw new LineupException('invalid_lineup', `${slot.aircraft.sideNumber} is listed twice.`);
+          if (seen.has(slotId))
+            throw new LineupException('invalid_lineup', `${slot.aircraft.sideNumber} is listed twice.`);
           seen.add(slotId);
           if (slot.status !== 'planned') {
-            throw new LineupException('invalid_lineup', `${slot.aircraft.sideNumber} is ${slot.status.replaceAll('_', ' ')}; only planned aircraft can be placed.`);
+            throw new LineupException(
+              'invalid_lineup',
+              `${slot.aircraft.sideNumber} is ${slot.status.replaceAll('_', ' ')}; only planned aircraft can be placed.`,
+            );
           }
           return slot;
         }),
@@ -189,7 +220,10 @@ export class LineupCommandsService {
   private spareFor(state: LineupState, down: Slot, spareSlotId: number): Slot {
     const spare = this.basis.slot(state, spareSlotId);
     if (down.catapultId === null) {
-      throw new LineupException('spare_unavailable', `${down.aircraft.sideNumber} is in the deck pool; there is no place for a spare to take.`);
+      throw new LineupException(
+        'spare_unavailable',
+        `${down.aircraft.sideNumber} is in the deck pool; there is no place for a spare to take.`,
+      );
     }
     if (spare.id === down.id || spare.status !== 'planned' || spare.catapultId !== null) {
       throw new LineupException(

@@ -39,7 +39,10 @@ export class LineupController {
   }
 
   @Get('changes')
-  changesSince(@Param('cycleId', ParseIntPipe) cycleId: number, @Query() query: ChangesQueryDto): Promise<LineupChange[]> {
+  changesSince(
+    @Param('cycleId', ParseIntPipe) cycleId: number,
+    @Query() query: ChangesQueryDto,
+  ): Promise<LineupChange[]> {
     return this.changes.since(cycleId, query.since);
   }
 

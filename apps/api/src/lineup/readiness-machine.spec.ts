@@ -79,14 +79,21 @@ describe('launchRefusal', () => {
 
   it('refuses from a catapult that is down or closed, even with an override', () => {
     expect(launchRefusal({ ...ready, catapultUp: false, overrideReason: 'needed' })?.code).toBe('catapult_unavailable');
-    expect(launchRefusal({ ...ready, catapultClosed: true, overrideReason: 'needed' })?.code).toBe('catapult_unavailable');
+    expect(launchRefusal({ ...ready, catapultClosed: true, overrideReason: 'needed' })?.code).toBe(
+      'catapult_unavailable',
+    );
   });
 
   it('refuses a no-go figure unless an override reason is given', () => {
-    const noGo = { ...ready, go: false, noGoReasons: ['Crosswind 18.0 kt from port is over the WKD-41 limit of 15.0 kt.'] };
+    const noGo = {
+      ...ready,
+      go: false,
+      noGoReasons: ['Crosswind 18.0 kt from port is over the WKD-41 limit of 15.0 kt.'],
+    };
     expect(launchRefusal(noGo)).toEqual({
       code: 'no_go',
-      message: 'D33 is no-go: Crosswind 18.0 kt from port is over the WKD-41 limit of 15.0 kt. Launch only with an override reason.',
+      message:
+        'D33 is no-go: Crosswind 18.0 kt from port is over the WKD-41 limit of 15.0 kt. Launch only with an override reason.',
     });
     expect(launchRefusal({ ...noGo, overrideReason: 'Ship cannot turn into the wind; air boss approved' })).toBeNull();
   });

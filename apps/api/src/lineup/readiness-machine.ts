@@ -37,7 +37,8 @@ function wrongStep(side: string, status: SlotStatus, asked: string): Transition 
 
 /** One step forward, or `resume` from suspended back to on catapult. */
 export function advance(side: string, status: SlotStatus, to: ReadinessStep | 'resume'): Transition {
-  if (to === 'resume') return status === 'suspended' ? { ok: true, status: 'on_catapult' } : wrongStep(side, status, to);
+  if (to === 'resume')
+    return status === 'suspended' ? { ok: true, status: 'on_catapult' } : wrongStep(side, status, to);
   return NEXT_STEP[status] === to ? { ok: true, status: to } : wrongStep(side, status, to);
 }
 
@@ -64,7 +65,10 @@ export interface LaunchFacts {
 /** Why a launch may not happen now, or null when it may. A no-go figure can be overridden; the rest cannot. */
 export function launchRefusal(facts: LaunchFacts): Refusal | null {
   if (facts.cycleState !== 'executing') {
-    return { code: 'cycle_not_executing', message: `Cycle ${facts.cycleNumber} is ${facts.cycleState}, not executing; nothing launches.` };
+    return {
+      code: 'cycle_not_executing',
+      message: `Cycle ${facts.cycleNumber} is ${facts.cycleState}, not executing; nothing launches.`,
+    };
   }
   if (!facts.catapultUp || facts.catapultClosed) {
     return {
@@ -80,7 +84,10 @@ export function launchRefusal(facts: LaunchFacts): Refusal | null {
   }
   if (!facts.pilotWeightAgreed || !facts.catapultWeightAgreed) {
     const missing = !facts.pilotWeightAgreed ? "the pilot's" : "the catapult officer's";
-    return { code: 'weight_not_agreed', message: `${facts.side} cannot launch without ${missing} gross weight agreement.` };
+    return {
+      code: 'weight_not_agreed',
+      message: `${facts.side} cannot launch without ${missing} gross weight agreement.`,
+    };
   }
   if (!facts.go && !facts.overrideReason) {
     return {

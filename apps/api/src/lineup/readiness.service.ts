@@ -51,24 +51,36 @@ export class ReadinessService {
     private readonly clock: Clock,
   ) {}
 
-  advance(cycleId: number, user: AuthenticatedUser, slotId: number, request: AdvanceSlotRequest): Promise<LineupCommandResult> {
+  advance(
+    cycleId: number,
+    user: AuthenticatedUser,
+    slotId: number,
+    request: AdvanceSlotRequest,
+  ): Promise<LineupCommandResult> {
     return this.changes.apply(cycleId, actorOf(user), 'slot_advanced', async (manager, state) => {
       const slot = this.basis.slot(state, slotId);
       const catapult = this.ownCatapult(state, user, slot);
       await this.basis.slotAsSeen(manager, state, slot, request.slotVersion);
       const side = slot.aircraft.sideNumber;
       if (state.cycle.state !== 'executing') {
-        throw new LineupException('cycle_not_executing', `Cycle ${state.cycle.number} is ${state.cycle.state}; readiness steps start once it is executing.`);
+        throw new LineupException(
+          'cycle_not_executing',
+          `Cycle ${state.cycle.number} is ${state.cycle.state}; readiness steps start once it is executing.`,
+        );
       }
       const current = laneSlots(state, catapult.id).find((other) => other.status !== 'launched');
       if (current && current.id !== slot.id) {
-        throw new LineupException('not_current_aircraft', `${side} is not next on cat ${catapult.number}; ${current.aircraft.sideNumber} is.`);
+        throw new LineupException(
+          'not_current_aircraft',
+          `${side} is not next on cat ${catapult.number}; ${current.aircraft.sideNumber} is.`,
+        );
       }
       const status = allowed(advance(side, slot.status, request.to));
       const now = this.clock.now();
       const values: SlotValues = { status, statusAt: now, statusBy: user };
       if (status === 'taxiing') values.taxiingAt = now;
-      if (status === 'on_catapult') Object.assign(values, { onCatapultAt: now, suspendReason: null, catapultWeightAckAt: null });
+      if (status === 'on_catapult')
+        Object.assign(values, { onCatapultAt: now, suspendReason: null, catapultWeightAckAt: null });
       if (status === 'tensioned') values.tensionedAt = now;
       if (status === 'weight_agreed') {
         if (!this.pilotAgreed(slot)) {
@@ -81,18 +93,33 @@ export class ReadinessService {
       }
       await updateSlot(manager, slot, values);
       const step = request.to === 'resume' ? 'resumed on' : STEP_SUMMARY[status];
-      return { summary: `${side} ${step} cat ${catapult.number}`, command: { type: 'advance', slotId, ...request }, mirrored: true };
+      return {
+        summary: `${side} ${step} cat ${catapult.number}`,
+        command: { type: 'advance', slotId, ...request },
+        mirrored: true,
+      };
     });
   }
 
-  suspend(cycleId: number, user: AuthenticatedUser, slotId: number, request: SuspendSlotRequest): Promise<LineupCommandResult> {
+  suspend(
+    cycleId: number,
+    user: AuthenticatedUser,
+    slotId: number,
+    request: SuspendSlotRequest,
+  ): Promise<LineupCommandResult> {
     return this.changes.apply(cycleId, actorOf(user), 'slot_suspended', async (manager, state) => {
       const slot = this.basis.slot(state, slotId);
       const catapult = this.ownCatapult(state, user, slot);
       await this.basis.slotAsSeen(manager, state, slot, request.slotVersion);
       const status = allowed(suspend(slot.aircraft.sideNumber, slot.status));
       const now = this.clock.now();
-      await updateSlot(manager, slot, { status, suspendedAt: now, suspendReason: request.reason, statusAt: now, statusBy: user });
+      await updateSlot(manager, slot, {
+        status,
+        suspendedAt: now,
+        suspendReason: request.reason,
+        statusAt: now,
+        statusBy: user,
+      });
       return {
         summary: `${slot.aircraft.sideNumber} suspended on cat ${catapult.number}: ${request.reason}`,
         command: { type: 'suspend', slotId, ...request },
@@ -101,7 +128,12 @@ export class ReadinessService {
     });
   }
 
-  launch(cycleId: number, user: AuthenticatedUser, slotId: number, request: LaunchSlotRequest): Promise<LineupCommandResult> {
+  launch(
+    cycleId: number,
+    user: AuthenticatedUser,
+    slotId: number,
+    request: LaunchSlotRequest,
+  ): Promise<LineupCommandResult> {
     return this.changes.apply(
       cycleId,
       actorOf(user),
@@ -111,9 +143,15 @@ export class ReadinessService {
         const catapult = this.ownCatapult(state, user, slot);
         const side = slot.aircraft.sideNumber;
         if (slot.status === 'launched') {
-          const original = slot.launchIdempotencyKey === request.idempotencyKey ? await this.log.launchResult(manager, cycleId, slotId) : null;
+          const original =
+            slot.launchIdempotencyKey === request.idempotencyKey
+              ? await this.log.launchResult(manager, cycleId, slotId)
+              : null;
           if (original) return { repeatOf: original };
-          throw new LineupException('already_launched', `${side} was launched at ${slot.launchedAt?.toISOString()}; this is a different launch request.`);
+          throw new LineupException(
+            'already_launched',
+            `${side} was launched at ${slot.launchedAt?.toISOString()}; this is a different launch request.`,
+          );
         }
         await this.basis.slotAsSeen(manager, state, slot, request.slotVersion);
         const figures = slotFigures(state, slot);
@@ -145,15 +183,24 @@ export class ReadinessService {
     );
   }
 
-  acknowledgeWeight(cycleId: number, user: AuthenticatedUser, slotId: number, request: WeightAckRequest): Promise<LineupCommandResult> {
+  acknowledgeWeight(
+    cycleId: number,
+    user: AuthenticatedUser,
+    slotId: number,
+    request: WeightAckRequest,
+  ): Promise<LineupCommandResult> {
     return this.changes.apply(cycleId, actorOf(user), 'weight_acknowledged', async (manager, state) => {
       this.basis.requireOpen(state);
       const slot = this.basis.slot(state, slotId);
       const side = slot.aircraft.sideNumber;
-      if (slot.pilotId !== user.id) throw new LineupException('not_your_slot', `${side} is not your aircraft in cycle ${state.cycle.number}.`);
+      if (slot.pilotId !== user.id)
+        throw new LineupException('not_your_slot', `${side} is not your aircraft in cycle ${state.cycle.number}.`);
       await this.basis.slotAsSeen(manager, state, slot, request.slotVersion);
       if (!ACKNOWLEDGEABLE.includes(slot.status)) {
-        throw new LineupException('wrong_step', `${side} is ${slot.status.replaceAll('_', ' ')}; its weight can no longer be acknowledged.`);
+        throw new LineupException(
+          'wrong_step',
+          `${side} is ${slot.status.replaceAll('_', ' ')}; its weight can no longer be acknowledged.`,
+        );
       }
       if (request.grossWeightLb !== slot.grossWeightLb) {
         throw new LineupException(
@@ -180,12 +227,21 @@ export class ReadinessService {
     if (user.catapultId === null) throw new LineupException('not_your_catapult', 'You are not assigned to a catapult.');
     if (slot.catapultId !== user.catapultId) {
       const yours = state.catapults.find((catapult) => catapult.id === user.catapultId);
-      throw new LineupException('not_your_catapult', `${side} is not on your catapult${yours ? ` (cat ${yours.number})` : ''}.`);
+      throw new LineupException(
+        'not_your_catapult',
+        `${side} is not on your catapult${yours ? ` (cat ${yours.number})` : ''}.`,
+      );
     }
     return this.basis.catapult(state, slot.catapultId);
   }
 
-  private async recordLaunch(manager: EntityManager, slot: Slot, user: AuthenticatedUser, key: string, override: string | null) {
+  private async recordLaunch(
+    manager: EntityManager,
+    slot: Slot,
+    user: AuthenticatedUser,
+    key: string,
+    override: string | null,
+  ) {
     const now = this.clock.now();
     try {
       await updateSlot(manager, slot, {
@@ -198,7 +254,10 @@ export class ReadinessService {
       });
     } catch (error) {
       if (!isDuplicateKey(error)) throw error;
-      throw new LineupException('idempotency_key_reused', 'This launch key was already used for another launch; the client must choose a new one per launch.');
+      throw new LineupException(
+        'idempotency_key_reused',
+        'This launch key was already used for another launch; the client must choose a new one per launch.',
+      );
     }
   }
 }

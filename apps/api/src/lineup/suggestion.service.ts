@@ -64,9 +64,18 @@ export function suggestedLineup(state: LineupState, suggestion: LineupSuggestion
   const applied = Object.fromEntries(
     lanes.map((lane) => [
       String(lane.catapultId),
-      [...laneSlots(state, lane.catapultId).filter((slot) => slot.status !== 'planned').map((slot) => slot.id), ...lane.slotIds].map(String),
+      [
+        ...laneSlots(state, lane.catapultId)
+          .filter((slot) => slot.status !== 'planned')
+          .map((slot) => slot.id),
+        ...lane.slotIds,
+      ].map(String),
     ]),
   );
   const lastLaunch = projectLineup(state, applied).lastLaunch;
-  return { basisVersion: cycle.version, lanes, lastLaunchAt: lastLaunch === null ? null : new Date(lastLaunch).toISOString() };
+  return {
+    basisVersion: cycle.version,
+    lanes,
+    lastLaunchAt: lastLaunch === null ? null : new Date(lastLaunch).toISOString(),
+  };
 }

@@ -82,10 +82,16 @@ export class MailSender implements OnApplicationBootstrap, OnApplicationShutdown
       );
       if (due.length === 0) return [];
       const ids = due.map((row) => row.id);
-      await manager.update(OutboxMail, { id: In(ids) }, { nextAttemptAt: new Date(now.getTime() + LEASE_MS), attempts: () => 'attempts + 1' });
+      await manager.update(
+        OutboxMail,
+        { id: In(ids) },
+        { nextAttemptAt: new Date(now.getTime() + LEASE_MS), attempts: () => 'attempts + 1' },
+      );
       return ids;
     });
-    return ids.length === 0 ? [] : this.dataSource.manager.find(OutboxMail, { where: { id: In(ids) }, order: { id: 'ASC' } });
+    return ids.length === 0
+      ? []
+      : this.dataSource.manager.find(OutboxMail, { where: { id: In(ids) }, order: { id: 'ASC' } });
   }
 
   private async deliver(mail: OutboxMail): Promise<boolean> {

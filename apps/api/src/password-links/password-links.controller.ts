@@ -8,7 +8,8 @@ import { SetPasswordWithTokenDto } from './dto/set-password-with-token.dto.js';
 import { PasswordLinks } from './password-links.service.js';
 
 // The same answer for every e-mail, so the route tells nobody who has an account.
-const RESET_ACCEPTED = 'If an active account signs in with that e-mail, a link to set a new password is on its way. It works once, within 60 minutes.';
+const RESET_ACCEPTED =
+  'If an active account signs in with that e-mail, a link to set a new password is on its way. It works once, within 60 minutes.';
 
 @ApiTags('auth')
 @Controller('auth')

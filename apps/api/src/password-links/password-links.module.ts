@@ -4,5 +4,10 @@ import { MailModule } from '../mail/mail.module.js';
 import { PasswordLinksController } from './password-links.controller.js';
 import { PasswordLinks } from './password-links.service.js';
 
-@Module({ imports: [AuthModule, MailModule], controllers: [PasswordLinksController], providers: [PasswordLinks], exports: [PasswordLinks] })
+@Module({
+  imports: [AuthModule, MailModule],
+  controllers: [PasswordLinksController],
+  providers: [PasswordLinks],
+  exports: [PasswordLinks],
+})
 export class PasswordLinksModule {}

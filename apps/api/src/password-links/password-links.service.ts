@@ -26,8 +26,10 @@ const LIFETIME: Record<LinkPurpose, { ms: number; text: string }> = {
 export const RESET_MAIL_INTERVAL_MS = 60_000;
 
 const INVALID: Record<LinkPurpose, string> = {
-  invitation: 'This invitation link is not valid any more: it has expired or was already used. Ask an admin to send a new invitation.',
-  reset: 'This password link is not valid any more: it has expired or was already used. Ask for a new one from the sign-in page.',
+  invitation:
+    'This invitation link is not valid any more: it has expired or was already used. Ask an admin to send a new invitation.',
+  reset:
+    'This password link is not valid any more: it has expired or was already used. Ask for a new one from the sign-in page.',
 };
 
 const digest = (token: string) => createHash('sha256').update(token).digest('hex');
@@ -66,7 +68,9 @@ export class PasswordLinks {
     await this.attempts.count('reset_from', clientAddress);
     await this.attempts.count('reset', identity);
     void this.issueReset(identity).catch((error: unknown) =>
-      this.logger.error(`A password reset request could not be handled: ${error instanceof Error ? error.message : String(error)}`),
+      this.logger.error(
+        `A password reset request could not be handled: ${error instanceof Error ? error.message : String(error)}`,
+      ),
     );
   }
 
@@ -78,7 +82,8 @@ export class PasswordLinks {
       // The person's row lock makes two simultaneous requests queue one mail.
       const user = await manager.findOneOrFail(User, { where: { id: found.id }, lock: { mode: 'pessimistic_write' } });
       const since = new Date(Date.now() - RESET_MAIL_INTERVAL_MS);
-      if (await manager.existsBy(PasswordLink, { userId: user.id, purpose: 'reset', createdAt: MoreThan(since) })) return;
+      if (await manager.existsBy(PasswordLink, { userId: user.id, purpose: 'reset', createdAt: MoreThan(since) }))
+        return;
       await manager.delete(PasswordLink, { userId: user.id, purpose: 'reset', usedAt: IsNull() });
       await this.issue(manager, user, 'reset');
       this.logger.log(`Password reset link queued for user ${user.id}`);
@@ -104,7 +109,9 @@ export class PasswordLinks {
       await manager.delete(PasswordLink, { userId: user.id, usedAt: IsNull() });
       await this.refreshTokens.revokeAllFor(user.id, manager);
     });
-    this.logger.log(`User ${link.userId} set a password through a${purpose === 'invitation' ? 'n invitation' : ' reset'} link`);
+    this.logger.log(
+      `User ${link.userId} set a password through a${purpose === 'invitation' ? 'n invitation' : ' reset'} link`,
+    );
   }
 
   private async issue(manager: EntityManager, user: User, purpose: LinkPurpose): Promise<void> {

@@ -78,5 +78,13 @@ export function slotRows(state: LineupState, report: CycleReport): CsvCell[][] {
 
 /** One row per change, in version order; the command as the server accepted it, in JSON. */
 export function changeRows(rows: readonly CycleChange[]): CsvCell[][] {
-  return rows.map((row) => [row.version, row.at.toISOString(), row.kind, row.actorName, row.actorRole, row.summary, JSON.stringify(row.payload.command)]);
+  return rows.map((row) => [
+    row.version,
+    row.at.toISOString(),
+    row.kind,
+    row.actorName,
+    row.actorRole,
+    row.summary,
+    JSON.stringify(row.payload.command),
+  ]);
 }

@@ -55,7 +55,12 @@ const slot = (fields: SlotFields) =>
     id: fields.id,
     cycleId: 1,
     aircraftId: fields.id,
-    aircraft: { sideNumber: fields.side, squadronId: squadrons[fields.squadron].id, squadron: squadrons[fields.squadron], type: { designation: 'WKD-41' } },
+    aircraft: {
+      sideNumber: fields.side,
+      squadronId: squadrons[fields.squadron].id,
+      squadron: squadrons[fields.squadron],
+      type: { designation: 'WKD-41' },
+    },
     pilot: null,
     mission: 'Strike training',
     status: fields.status,
@@ -71,7 +76,15 @@ const state: LineupState = {
   catapults: [catapult(11, 1, 1), catapult(12, 2, 1), catapult(13, 3, 2)],
   slots: [
     slot({ id: 1, side: 'C21', squadron: 'CWR', status: 'launched', catapultId: 11, launchedAt: t('10:00:05') }),
-    slot({ id: 2, side: 'C22', squadron: 'CWR', status: 'launched', catapultId: 11, launchedAt: t('10:01:10'), overrideReason: 'Crosswind checked by hand' }),
+    slot({
+      id: 2,
+      side: 'C22',
+      squadron: 'CWR',
+      status: 'launched',
+      catapultId: 11,
+      launchedAt: t('10:01:10'),
+      overrideReason: 'Crosswind checked by hand',
+    }),
     slot({ id: 3, side: 'D33', squadron: 'DFM', status: 'down', replacedBySlotId: 4 }),
     slot({ id: 4, side: 'D34', squadron: 'DFM', status: 'launched', catapultId: 12, launchedAt: t('10:00:50') }),
     slot({ id: 5, side: 'D35', squadron: 'DFM', status: 'launched', catapultId: 12, launchedAt: t('10:36:00') }),
@@ -109,7 +122,9 @@ const changes = [
     { id: 4, status: 'planned', catapultId: 12, projectedLaunchAt: t('10:00:50') },
   ]),
   change('slot_launched', '10:00:50', 'Sam Dellavint', [{ id: 4, status: 'launched', catapultId: 12 }]),
-  change('slot_suspended', '10:01:00', 'Sam Dellavint', [{ id: 5, status: 'suspended', catapultId: 12, suspendReason: 'Launch bar not seated' }]),
+  change('slot_suspended', '10:01:00', 'Sam Dellavint', [
+    { id: 5, status: 'suspended', catapultId: 12, suspendReason: 'Launch bar not seated' },
+  ]),
   change('slot_launched', '10:01:10', 'Lia Corrimand', [{ id: 2, status: 'launched', catapultId: 11 }]),
   change('slot_advanced', '10:02:00', 'Sam Dellavint', [{ id: 5, status: 'on_catapult', catapultId: 12 }]),
   change('slot_launched', '10:36:00', 'Sam Dellavint', [{ id: 5, status: 'launched', catapultId: 12 }]),
@@ -126,13 +141,16 @@ describe('buildCycleReport', () => {
   it('puts launches on their catapult in launch order, then what was planned there and did not launch', () => {
     expect(lane(1).launches.map((line) => line.sideNumber)).toEqual(['C21', 'C22']);
     expect(lane(2).launches.map((line) => line.sideNumber)).toEqual(['D34', 'D35', 'D33']);
-    expect(lane(3).launches.map((line) => [line.sideNumber, line.status, line.plannedAt])).toEqual([['G43', 'scratched', t('10:00:20')]]);
+    expect(lane(3).launches.map((line) => [line.sideNumber, line.status, line.plannedAt])).toEqual([
+      ['G43', 'scratched', t('10:00:20')],
+    ]);
   });
 
   it('compares each launch with the time planned when the cycle started', () => {
     expect(report.plannedBasis).toBe('cycle_start');
     expect(report.plannedAtVersion).toBe(2);
-    const delta = (side: string) => report.catapults.flatMap((catapult) => catapult.launches).find((line) => line.sideNumber === side)!.deltaS;
+    const delta = (side: string) =>
+      report.catapults.flatMap((catapult) => catapult.launches).find((line) => line.sideNumber === side)!.deltaS;
     expect(delta('C21')).toBe(5); // 10:00:00 → 10:00:05
     expect(delta('C22')).toBe(15); // 10:00:55 → 10:01:10
     expect(delta('D35')).toBe(2095); // 10:01:05 → 10:36:00
@@ -150,17 +168,21 @@ describe('buildCycleReport', () => {
     const [bow, waist] = report.pairs;
     expect(bow).toMatchObject({ pair: 1, catapultNumbers: [1, 2], minimumGapS: 10 });
     // 101 10:00:05, 202 10:00:50, 102 10:01:10, 203 10:36:00
-    expect(bow.intervals.map((interval) => [interval.fromSideNumber, interval.toSideNumber, interval.seconds])).toEqual([
-      ['C21', 'D34', 45],
-      ['D34', 'C22', 20],
-      ['C22', 'D35', 2090],
-    ]);
+    expect(bow.intervals.map((interval) => [interval.fromSideNumber, interval.toSideNumber, interval.seconds])).toEqual(
+      [
+        ['C21', 'D34', 45],
+        ['D34', 'C22', 20],
+        ['C22', 'D35', 2090],
+      ],
+    );
     expect(bow.spread).toEqual({ shortestS: 20, meanS: 718.333, longestS: 2090 }); // 2155 / 3 = 718.333…
     expect(waist.intervals).toEqual([]);
   });
 
   it('judges each launch against the cycle window', () => {
-    const verdicts = report.catapults.flatMap((catapult) => catapult.launches).map((line) => [line.sideNumber, line.inWindow]);
+    const verdicts = report.catapults
+      .flatMap((catapult) => catapult.launches)
+      .map((line) => [line.sideNumber, line.inWindow]);
     expect(verdicts).toEqual([
       ['C21', true],
       ['C22', true],
@@ -173,22 +195,92 @@ describe('buildCycleReport', () => {
 
   it('lists the suspend, the down aircraft with its spare, and the override with who launched', () => {
     expect(report.suspends).toEqual([
-      { slotId: 5, sideNumber: 'D35', squadronCode: 'DFM', catapultNumber: 2, at: t('10:01:00'), reason: 'Launch bar not seated', by: 'Sam Dellavint', resumedAt: t('10:02:00') },
+      {
+        slotId: 5,
+        sideNumber: 'D35',
+        squadronCode: 'DFM',
+        catapultNumber: 2,
+        at: t('10:01:00'),
+        reason: 'Launch bar not seated',
+        by: 'Sam Dellavint',
+        resumedAt: t('10:02:00'),
+      },
     ]);
     expect(report.downs).toEqual([
-      { slotId: 3, sideNumber: 'D33', squadronCode: 'DFM', catapultNumber: 2, at: t('10:00:30'), by: HANDLER, spare: { slotId: 4, sideNumber: 'D34', squadronCode: 'DFM' } },
+      {
+        slotId: 3,
+        sideNumber: 'D33',
+        squadronCode: 'DFM',
+        catapultNumber: 2,
+        at: t('10:00:30'),
+        by: HANDLER,
+        spare: { slotId: 4, sideNumber: 'D34', squadronCode: 'DFM' },
+      },
     ]);
     expect(report.overrides).toEqual([
-      { slotId: 2, sideNumber: 'C22', squadronCode: 'CWR', catapultNumber: 1, launchedAt: t('10:01:10'), reason: 'Crosswind checked by hand', by: 'Lia Corrimand' },
+      {
+        slotId: 2,
+        sideNumber: 'C22',
+        squadronCode: 'CWR',
+        catapultNumber: 1,
+        launchedAt: t('10:01:10'),
+        reason: 'Crosswind checked by hand',
+        by: 'Lia Corrimand',
+      },
     ]);
   });
 
   it('sums the figures for the cycle and per squadron', () => {
-    expect(report.totals).toEqual({ aircraft: 7, launched: 4, onTime: 3, outsideWindow: 1, suspends: 1, down: 1, overrides: 1, scratched: 2 });
+    expect(report.totals).toEqual({
+      aircraft: 7,
+      launched: 4,
+      onTime: 3,
+      outsideWindow: 1,
+      suspends: 1,
+      down: 1,
+      overrides: 1,
+      scratched: 2,
+    });
     expect(report.squadrons).toEqual([
-      { squadronId: 1, squadronCode: 'CWR', squadronName: 'Cinderwrights', aircraft: 3, launched: 2, onTime: 2, outsideWindow: 0, suspends: 0, down: 0, overrides: 1, scratched: 1 },
-      { squadronId: 2, squadronCode: 'DFM', squadronName: 'Driftmenders', aircraft: 3, launched: 2, onTime: 1, outsideWindow: 1, suspends: 1, down: 1, overrides: 0, scratched: 0 },
-      { squadronId: 3, squadronCode: 'GSB', squadronName: 'Gorsebinders', aircraft: 1, launched: 0, onTime: 0, outsideWindow: 0, suspends: 0, down: 0, overrides: 0, scratched: 1 },
+      {
+        squadronId: 1,
+        squadronCode: 'CWR',
+        squadronName: 'Cinderwrights',
+        aircraft: 3,
+        launched: 2,
+        onTime: 2,
+        outsideWindow: 0,
+        suspends: 0,
+        down: 0,
+        overrides: 1,
+        scratched: 1,
+      },
+      {
+        squadronId: 2,
+        squadronCode: 'DFM',
+        squadronName: 'Driftmenders',
+        aircraft: 3,
+        launched: 2,
+        onTime: 1,
+        outsideWindow: 1,
+        suspends: 1,
+        down: 1,
+        overrides: 0,
+        scratched: 0,
+      },
+      {
+        squadronId: 3,
+        squadronCode: 'GSB',
+        squadronName: 'Gorsebinders',
+        aircraft: 1,
+        launched: 0,
+        onTime: 0,
+        outsideWindow: 0,
+        suspends: 0,
+        down: 0,
+        overrides: 0,
+        scratched: 1,
+      },
     ]);
   });
 

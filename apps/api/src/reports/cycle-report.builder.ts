@@ -13,7 +13,14 @@ import { toCycleView } from '../cycle-changes/cycle.mapper.js';
 import type { Slot } from '../cycle-changes/entities/slot.entity.js';
 import type { LineupState } from '../cycle-changes/lineup-state.js';
 import { readChangeLog, type ChangeLogReading } from './change-log-reading.js';
-import { countFigures, insideWindow, intervalSpread, launchIntervals, secondsBetween, type FlownLaunch } from './report-figures.js';
+import {
+  countFigures,
+  insideWindow,
+  intervalSpread,
+  launchIntervals,
+  secondsBetween,
+  type FlownLaunch,
+} from './report-figures.js';
 
 /** A cycle's record as read at one version: its state and every change up to that version. */
 export interface CycleRecord {
@@ -48,14 +55,22 @@ const iso = (instant: Date | null) => instant?.toISOString() ?? null;
 
 function byLaunchThenPlan(a: SlotLine, b: SlotLine): number {
   const time = (value: string | null) => (value === null ? Number.POSITIVE_INFINITY : Date.parse(value));
-  if (a.launchedAt !== null || b.launchedAt !== null) return time(a.launchedAt) - time(b.launchedAt) || a.slotId - b.slotId;
+  if (a.launchedAt !== null || b.launchedAt !== null)
+    return time(a.launchedAt) - time(b.launchedAt) || a.slotId - b.slotId;
   return time(a.plannedAt) - time(b.plannedAt) || a.sideNumber.localeCompare(b.sideNumber, 'en', { numeric: true });
 }
 
 const flown = (lines: readonly SlotLine[]): FlownLaunch[] =>
   lines.flatMap((line) =>
     line.launchedAt !== null && line.catapultNumber !== null
-      ? [{ slotId: line.slotId, sideNumber: line.sideNumber, catapultNumber: line.catapultNumber, launchedAtMs: Date.parse(line.launchedAt) }]
+      ? [
+          {
+            slotId: line.slotId,
+            sideNumber: line.sideNumber,
+            catapultNumber: line.catapultNumber,
+            launchedAtMs: Date.parse(line.launchedAt),
+          },
+        ]
       : [],
   );
 
@@ -112,8 +127,16 @@ export function buildCycleReport({ state, changes }: CycleRecord): CycleReport {
     .sort((a, b) => a - b)
     .map((pair) => {
       const members = state.catapults.filter((catapult) => catapult.pair === pair).map((catapult) => catapult.number);
-      const intervals = launchIntervals(flown(lines.filter((line) => line.catapultNumber !== null && members.includes(line.catapultNumber))));
-      return { pair, catapultNumbers: members, minimumGapS: state.ship.pairGapS, intervals, spread: intervalSpread(intervals) };
+      const intervals = launchIntervals(
+        flown(lines.filter((line) => line.catapultNumber !== null && members.includes(line.catapultNumber))),
+      );
+      return {
+        pair,
+        catapultNumbers: members,
+        minimumGapS: state.ship.pairGapS,
+        intervals,
+        spread: intervalSpread(intervals),
+      };
     });
 
   const aircraftOf = (slotId: number) => {
@@ -158,7 +181,9 @@ export function buildCycleReport({ state, changes }: CycleRecord): CycleReport {
   );
 
   const suspendsOf = (slotIds: Set<number>) => log.suspends.filter((event) => slotIds.has(event.slotId)).length;
-  const squadrons: SquadronReport[] = [...new Map(state.slots.map((slot) => [slot.aircraft.squadronId, slot.aircraft.squadron])).values()]
+  const squadrons: SquadronReport[] = [
+    ...new Map(state.slots.map((slot) => [slot.aircraft.squadronId, slot.aircraft.squadron])).values(),
+  ]
     .sort((a, b) => a.code.localeCompare(b.code))
     .map((squadron) => {
       const own = lines.filter((line) => line.squadronId === squadron.id);
@@ -172,7 +197,10 @@ export function buildCycleReport({ state, changes }: CycleRecord): CycleReport {
 
   const launchTimes = lines.flatMap((line) => (line.launchedAt === null ? [] : [line.launchedAt])).sort();
   return {
-    cycle: toCycleView(cycle, { slotCount: state.slots.length, launchedCount: lines.filter((line) => line.status === 'launched').length }),
+    cycle: toCycleView(cycle, {
+      slotCount: state.slots.length,
+      launchedCount: lines.filter((line) => line.status === 'launched').length,
+    }),
     plannedBasis: log.plannedBasis,
     plannedAtVersion: log.plannedAtVersion,
     startedAt: log.startedAt,

@@ -24,12 +24,16 @@ describe('dayRange', () => {
       }
       expect(refusal).toBeInstanceOf(ReportsException);
       expect((refusal as ReportsException).getStatus()).toBe(400);
-      expect((refusal as ReportsException).message).toBe(`from: ${bad} is not a calendar day; write it as YYYY-MM-DD, e.g. 2027-01-31.`);
+      expect((refusal as ReportsException).message).toBe(
+        `from: ${bad} is not a calendar day; write it as YYYY-MM-DD, e.g. 2027-01-31.`,
+      );
     }
   });
 
   it('refuses a range that ends before it starts', () => {
-    expect(() => dayRange('2027-03-02', '2027-03-01')).toThrow('The range ends before it starts: to (2027-03-01) is earlier than from (2027-03-02).');
+    expect(() => dayRange('2027-03-02', '2027-03-01')).toThrow(
+      'The range ends before it starts: to (2027-03-01) is earlier than from (2027-03-02).',
+    );
   });
 
   it('refuses text that is not YYYY-MM-DD', () => {

@@ -1,4 +1,11 @@
-import { countFigures, insideWindow, intervalSpread, launchIntervals, secondsBetween, type FlownLaunch } from './report-figures.js';
+import {
+  countFigures,
+  insideWindow,
+  intervalSpread,
+  launchIntervals,
+  secondsBetween,
+  type FlownLaunch,
+} from './report-figures.js';
 
 // Every expected value below is worked by hand from the times in the test (common practice, no source).
 
@@ -12,7 +19,11 @@ const launch = (slotId: number, catapultNumber: number, clock: string): FlownLau
 
 describe('launchIntervals', () => {
   it('measures each launch from the one before it, in launch order whatever the input order', () => {
-    const intervals = launchIntervals([launch(3, 1, '10:02:10.500'), launch(1, 1, '10:00:00.000'), launch(2, 2, '10:01:05.250')]);
+    const intervals = launchIntervals([
+      launch(3, 1, '10:02:10.500'),
+      launch(1, 1, '10:00:00.000'),
+      launch(2, 2, '10:01:05.250'),
+    ]);
     expect(intervals.map((interval) => [interval.fromSideNumber, interval.toSideNumber, interval.seconds])).toEqual([
       ['C21', 'C22', 65.25], // 10:00:00.000 → 10:01:05.250
       ['C22', 'C23', 65.25], // 10:01:05.250 → 10:02:10.500
@@ -34,13 +45,22 @@ describe('launchIntervals', () => {
 
 describe('intervalSpread', () => {
   it('gives the shortest, the mean to the millisecond and the longest', () => {
-    const intervals = launchIntervals([launch(1, 1, '10:00:00.000'), launch(2, 1, '10:00:55.000'), launch(3, 1, '10:02:00.001'), launch(4, 1, '10:03:00.000')]);
+    const intervals = launchIntervals([
+      launch(1, 1, '10:00:00.000'),
+      launch(2, 1, '10:00:55.000'),
+      launch(3, 1, '10:02:00.001'),
+      launch(4, 1, '10:03:00.000'),
+    ]);
     // 55.000, 65.001 and 59.999 s: mean 180.000 / 3 = 60.000 s.
     expect(intervalSpread(intervals)).toEqual({ shortestS: 55, meanS: 60, longestS: 65.001 });
   });
 
   it('rounds a mean that does not fall on a millisecond', () => {
-    const intervals = launchIntervals([launch(1, 1, '10:00:00.000'), launch(2, 1, '10:00:00.001'), launch(3, 1, '10:00:00.003')]);
+    const intervals = launchIntervals([
+      launch(1, 1, '10:00:00.000'),
+      launch(2, 1, '10:00:00.001'),
+      launch(3, 1, '10:00:00.003'),
+    ]);
     // 1 ms and 2 ms: mean 1.5 ms, rounded half up to 2 ms.
     expect(intervalSpread(intervals).meanS).toBe(0.002);
   });
@@ -84,6 +104,15 @@ describe('countFigures', () => {
       ],
       2,
     );
-    expect(figures).toEqual({ aircraft: 5, launched: 3, onTime: 2, outsideWindow: 1, suspends: 2, down: 1, overrides: 1, scratched: 1 });
+    expect(figures).toEqual({
+      aircraft: 5,
+      launched: 3,
+      onTime: 2,
+      outsideWindow: 1,
+      suspends: 2,
+      down: 1,
+      overrides: 1,
+      scratched: 1,
+    });
   });
 });

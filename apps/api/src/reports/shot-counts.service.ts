@@ -9,7 +9,16 @@ import { Catapult } from '../ships/entities/catapult.entity.js';
 import type { CsvFile } from './csv-response.js';
 import type { DayRange } from './day-range.js';
 
-export const SHOT_COUNT_COLUMNS = ['kind', 'ship', 'catapult', 'side_number', 'type', 'squadron', 'launches', 'lifetime_shots'] as const;
+export const SHOT_COUNT_COLUMNS = [
+  'kind',
+  'ship',
+  'catapult',
+  'side_number',
+  'type',
+  'squadron',
+  'launches',
+  'lifetime_shots',
+] as const;
 
 const bySide = (a: Aircraft, b: Aircraft) => a.sideNumber.localeCompare(b.sideNumber, 'en', { numeric: true });
 
@@ -52,14 +61,36 @@ export class ShotCountsService {
   async csv(range: DayRange): Promise<CsvFile> {
     const counts = await this.counts(range);
     const rows = [
-      ...counts.airframes.map((row) => ['airframe', null, null, row.sideNumber, row.typeDesignation, row.squadronCode, row.launches, row.lifetimeShots]),
-      ...counts.catapults.map((row) => ['catapult', row.shipName, row.number, null, null, null, row.launches, row.lifetimeShots]),
+      ...counts.airframes.map((row) => [
+        'airframe',
+        null,
+        null,
+        row.sideNumber,
+        row.typeDesignation,
+        row.squadronCode,
+        row.launches,
+        row.lifetimeShots,
+      ]),
+      ...counts.catapults.map((row) => [
+        'catapult',
+        row.shipName,
+        row.number,
+        null,
+        null,
+        null,
+        row.launches,
+        row.lifetimeShots,
+      ]),
     ];
     return { fileName: `shot-counts-${range.from}-to-${range.to}.csv`, content: toCsv(SHOT_COUNT_COLUMNS, rows) };
   }
 
   /** Launches recorded inside the range, counted per aircraft or per catapult. */
-  private async launchesBy(manager: EntityManager, range: DayRange, key: 'aircraftId' | 'catapultId'): Promise<Map<number, number>> {
+  private async launchesBy(
+    manager: EntityManager,
+    range: DayRange,
+    key: 'aircraftId' | 'catapultId',
+  ): Promise<Map<number, number>> {
     const rows = await manager
       .createQueryBuilder(Slot, 'slot')
       .select(`slot.${key}`, 'id')

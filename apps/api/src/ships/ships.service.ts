@@ -67,14 +67,23 @@ export class ShipsService {
     spots: DeckSpot[],
     catapults: Catapult[],
   ): Promise<void> {
-    const problems = deckSpotProblems(spots, catapults.map((catapult) => catapult.number));
+    const problems = deckSpotProblems(
+      spots,
+      catapults.map((catapult) => catapult.number),
+    );
     if (problems.length > 0) throw new ShipsException('invalid_configuration', problems.join(' '));
     const otherShips = await manager.findBy(Ship, { id: Not(ship.id) });
     const kept = [...spots, ...otherShips.flatMap((other) => other.deckSpots)].map((spot) => spot.name);
-    const stranded = await manager.find(Aircraft, { where: { parkedSpot: Not(In(kept)) }, order: { sideNumber: 'ASC' } });
+    const stranded = await manager.find(Aircraft, {
+      where: { parkedSpot: Not(In(kept)) },
+      order: { sideNumber: 'ASC' },
+    });
     if (stranded.length > 0) {
       const list = stranded.map((aircraft) => `${aircraft.sideNumber} (${aircraft.parkedSpot})`).join(', ');
-      throw new ShipsException('spot_in_use', `Aircraft are parked on spots this change removes: ${list}. Move them first.`);
+      throw new ShipsException(
+        'spot_in_use',
+        `Aircraft are parked on spots this change removes: ${list}. Move them first.`,
+      );
     }
   }
 

@@ -50,7 +50,10 @@ export class UsersService {
     try {
       // Without a password the person gets an invitation, queued in the same transaction.
       const user = await this.dataSource.transaction(async (writer) => {
-        const saved = await writer.save(User, writer.create(User, { email, name: body.name, passwordHash, ...binding }));
+        const saved = await writer.save(
+          User,
+          writer.create(User, { email, name: body.name, passwordHash, ...binding }),
+        );
         if (passwordHash === null) await this.links.invite(writer, saved);
         return saved;
       });
@@ -70,16 +73,27 @@ export class UsersService {
     return this.dataSource.transaction(async (manager) => {
       const user = await this.findOrFail(manager, id);
       if (id === actor.id && ((body.role && body.role !== user.role) || body.active === false)) {
-        throw new UsersException('self_change', 'You cannot change your own role or deactivate yourself; ask another admin.');
+        throw new UsersException(
+          'self_change',
+          'You cannot change your own role or deactivate yourself; ask another admin.',
+        );
       }
       const role = body.role ?? user.role;
       // Leaving the catapult officer role releases the catapult unless the request says otherwise.
-      const catapultId = body.catapultId !== undefined ? body.catapultId : role === 'catapult_officer' ? user.catapultId : null;
+      const catapultId =
+        body.catapultId !== undefined ? body.catapultId : role === 'catapult_officer' ? user.catapultId : null;
       const squadronId = body.squadronId !== undefined ? body.squadronId : user.squadronId;
       await this.checkBinding(manager, role, catapultId, squadronId);
 
-      const access = role !== user.role || catapultId !== user.catapultId || (body.active ?? user.active) !== user.active;
-      Object.assign(user, { name: body.name ?? user.name, role, catapultId, squadronId, active: body.active ?? user.active });
+      const access =
+        role !== user.role || catapultId !== user.catapultId || (body.active ?? user.active) !== user.active;
+      Object.assign(user, {
+        name: body.name ?? user.name,
+        role,
+        catapultId,
+        squadronId,
+        active: body.active ?? user.active,
+      });
       if (access) user.tokenVersion += 1;
       await manager.save(User, user);
       if (!user.active) await this.refreshTokens.revokeAllFor(user.id, manager);
@@ -91,9 +105,16 @@ export class UsersService {
   async resendInvitation(id: number): Promise<string> {
     return this.dataSource.transaction(async (manager) => {
       const user = await this.findOrFail(manager, id);
-      if (!user.active) throw new UsersException('cannot_invite', `${user.name} is removed; reactivate them before inviting them again.`);
+      if (!user.active)
+        throw new UsersException(
+          'cannot_invite',
+          `${user.name} is removed; reactivate them before inviting them again.`,
+        );
       if (user.passwordHash !== null) {
-        throw new UsersException('cannot_invite', `${user.name} has already chosen a password; they can ask for a reset link on the sign-in page.`);
+        throw new UsersException(
+          'cannot_invite',
+          `${user.name} has already chosen a password; they can ask for a reset link on the sign-in page.`,
+        );
       }
       await this.links.invite(manager, user);
       return user.email;
@@ -136,6 +157,9 @@ export class UsersService {
   }
 
   private emailTaken(email: string): UsersException {
-    return new UsersException('email_taken', `Someone already signs in with ${email} (active or removed); use another e-mail or reactivate them.`);
+    return new UsersException(
+      'email_taken',
+      `Someone already signs in with ${email} (active or removed); use another e-mail or reactivate them.`,
+    );
   }
 }

@@ -71,7 +71,12 @@ export class ApiCluster {
         },
       });
     });
-    const cluster = new ApiCluster(ports.map((port) => `http://127.0.0.1:${port}`), children, redisPort, dir);
+    const cluster = new ApiCluster(
+      ports.map((port) => `http://127.0.0.1:${port}`),
+      children,
+      redisPort,
+      dir,
+    );
     try {
       await Promise.all(cluster.urls.map((url, index) => cluster.healthy(url, children[index])));
     } catch (error) {
@@ -103,7 +108,12 @@ export class ApiCluster {
 
   private async healthy(url: string, child: ChildProcess): Promise<void> {
     const deadline = Date.now() + STARTUP_MS;
-    while (!(await fetch(`${url}/api/health`).then((response) => response.ok, () => false))) {
+    while (
+      !(await fetch(`${url}/api/health`).then(
+        (response) => response.ok,
+        () => false,
+      ))
+    ) {
       if (child.exitCode !== null || Date.now() > deadline) {
         const log = readFileSync(path.join(this.dir, `api-${new URL(url).port}.log`), 'utf8');
         throw new Error(`The API process at ${url} did not start:\n${log.slice(-3000)}`);

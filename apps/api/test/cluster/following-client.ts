@@ -57,7 +57,8 @@ export class FollowingClient {
     await this.connect();
     this.follow = followJoinAsked(this.follow);
     const result = await join(this.socket!, { cycleId: this.cycleId });
-    if (!result.ok || result.mode !== 'snapshot') throw new Error(`Joining cycle ${this.cycleId} at ${this.url} answered ${JSON.stringify(result)}`);
+    if (!result.ok || result.mode !== 'snapshot')
+      throw new Error(`Joining cycle ${this.cycleId} at ${this.url} answered ${JSON.stringify(result)}`);
     this.take(followJoin(this.follow, result));
   }
 
@@ -97,13 +98,17 @@ export class FollowingClient {
     try {
       while (!this.closed && this.follow.joining) {
         const socket = this.socket;
-        const result = socket?.connected ? await join(socket, { cycleId: this.cycleId, sinceVersion: this.version }).catch(() => null) : null;
+        const result = socket?.connected
+          ? await join(socket, { cycleId: this.cycleId, sinceVersion: this.version }).catch(() => null)
+          : null;
         if (!result) {
           await pause(RECONNECT_PAUSE_MS);
           continue;
         }
-        if (!result.ok) throw new Error(`Rejoining cycle ${this.cycleId} at ${this.url} was refused: ${result.message}`);
-        if (result.mode !== 'replay') throw new Error(`Rejoining at version ${this.version} answered a snapshot instead of a replay`);
+        if (!result.ok)
+          throw new Error(`Rejoining cycle ${this.cycleId} at ${this.url} was refused: ${result.message}`);
+        if (result.mode !== 'replay')
+          throw new Error(`Rejoining at version ${this.version} answered a snapshot instead of a replay`);
         this.take(followJoin(this.follow, result), result.changes);
       }
     } finally {

@@ -55,7 +55,11 @@ describe('two API processes sharing one board through Redis', () => {
   /** Waits for every client to reach the database's version, then checks what each applied against it. */
   async function expectEveryChangeInOrder(following: FollowingClient[], startedAt: number[]): Promise<LineupSnapshot> {
     const final = await deck.snapshot(cycleId);
-    await eventually(() => following.every((client) => client.version >= final.version), 20_000, 'every client to reach the last version');
+    await eventually(
+      () => following.every((client) => client.version >= final.version),
+      20_000,
+      'every client to reach the last version',
+    );
     following.forEach((client, index) => {
       expect(client.failures).toEqual([]);
       expect(client.applied).toEqual(versionsBetween(startedAt[index], final.version));
@@ -68,7 +72,9 @@ describe('two API processes sharing one board through Redis', () => {
     const following = await followers();
     const startedAt = following.map((client) => client.version);
     // Two handlers on each process, each on a catapult of its own, all at once.
-    const handlers = catapultIds.map((catapultId, index) => new CatapultToggler(cluster.urls, index % 2, handlerToken, cycleId, catapultId));
+    const handlers = catapultIds.map(
+      (catapultId, index) => new CatapultToggler(cluster.urls, index % 2, handlerToken, cycleId, catapultId),
+    );
     await Promise.all(handlers.map((handler) => handler.run(125)));
 
     const final = await expectEveryChangeInOrder(following, startedAt);
@@ -78,17 +84,25 @@ describe('two API processes sharing one board through Redis', () => {
     for (const client of following) expect(client.replayed).toBeLessThan(50);
     const gaps = following.reduce((sum, client) => sum + client.gaps, 0);
     const replayed = following.reduce((sum, client) => sum + client.replayed, 0);
-    console.info(`500 changes from two processes, ${following.length} clients: ${gaps} gaps, ${replayed} changes taken from a replay`);
+    console.info(
+      `500 changes from two processes, ${following.length} clients: ${gaps} gaps, ${replayed} changes taken from a replay`,
+    );
   });
 
   it('moves the clients of a crashed process to the other one without losing a change', async () => {
     const following = await followers();
     const startedAt = following.map((client) => client.version);
     const onSecond = following.filter((client) => client.url === cluster.urls[1]);
-    const handlers = [0, 1].map((at) => new CatapultToggler(cluster.urls, at, handlerToken, cycleId, catapultIds[at * 2]));
+    const handlers = [0, 1].map(
+      (at) => new CatapultToggler(cluster.urls, at, handlerToken, cycleId, catapultIds[at * 2]),
+    );
     const running = Promise.all(handlers.map((handler) => handler.run(100)));
 
-    await eventually(() => following.every((client) => client.applied.length >= 40), 30_000, '40 changes before the crash');
+    await eventually(
+      () => following.every((client) => client.applied.length >= 40),
+      30_000,
+      '40 changes before the crash',
+    );
     await cluster.crash(1);
     await running;
 

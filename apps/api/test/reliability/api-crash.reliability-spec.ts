@@ -37,7 +37,15 @@ describe(`the API killed with kill -9 during a burst, ${CLIENTS} clients followi
     const tokens = await handlerTokens(deck, HANDLERS);
     const observer = await deck.token(OBSERVER);
     for (let i = 0; i < CLIENTS; i += 1) {
-      followers.push(new LineupFollower({ url: settings.url, origin: settings.origin, token: i < HANDLERS ? tokens[i] : observer, cycleId, reconnect: true }));
+      followers.push(
+        new LineupFollower({
+          url: settings.url,
+          origin: settings.origin,
+          token: i < HANDLERS ? tokens[i] : observer,
+          cycleId,
+          reconnect: true,
+        }),
+      );
     }
     await Promise.all(followers.map((follower) => follower.ready()));
 
@@ -48,11 +56,19 @@ describe(`the API killed with kill -9 during a burst, ${CLIENTS} clients followi
     api!.kill();
     expect((await api!.exited).signal).toBe('SIGKILL');
     const beforeCrash = await burst.stop();
-    await eventually(() => followers.every((follower) => !follower.socket.connected), 10_000, 'every client to notice the crash');
+    await eventually(
+      () => followers.every((follower) => !follower.socket.connected),
+      10_000,
+      'every client to notice the crash',
+    );
 
     api = await ApiProcess.start(settings);
     const upAt = Date.now();
-    await eventually(() => followers.every((follower) => follower.resyncedAt.length > 0), 60_000, 'every client to resync');
+    await eventually(
+      () => followers.every((follower) => follower.resyncedAt.length > 0),
+      60_000,
+      'every client to resync',
+    );
     const sinceUp = followers.map((follower) => follower.resyncedAt[0] - upAt);
     const sinceKill = followers.map((follower) => follower.resyncedAt[0] - killedAt);
 

@@ -1,4 +1,10 @@
-import { grantAppUser, isMariaDBRunning, mariadbServer, startMariaDB, stopMariaDB } from '../../../../scripts/lib/mariadb.mjs';
+import {
+  grantAppUser,
+  isMariaDBRunning,
+  mariadbServer,
+  startMariaDB,
+  stopMariaDB,
+} from '../../../../scripts/lib/mariadb.mjs';
 import { createBusyCycle, handlerTokens } from '../support/busy-cycle.js';
 import { readChangeLog } from '../support/change-log.js';
 import { CommandBurst } from '../support/command-burst.js';
@@ -56,7 +62,8 @@ describe(`MariaDB stopped and started under a running API (seed ${SEED})`, () =>
     const { cycleId, first, setUpVersions } = await createBusyCycle(deck);
     const tokens = await handlerTokens(deck, HANDLERS);
     const observer = await deck.token(OBSERVER);
-    for (const token of tokens) followers.push(new LineupFollower({ url: settings.url, origin: settings.origin, token, cycleId }));
+    for (const token of tokens)
+      followers.push(new LineupFollower({ url: settings.url, origin: settings.origin, token, cycleId }));
     await Promise.all(followers.map((follower) => follower.ready()));
 
     const burst = new CommandBurst(settings.url, tokens, followers, SEED);
@@ -90,9 +97,17 @@ describe(`MariaDB stopped and started under a running API (seed ${SEED})`, () =>
 
     expect(api!.running).toBe(true);
     expect(duringOutage.length).toBeGreaterThan(0);
-    expect(duringOutage.filter((outcome) => outcome.status !== 503).map((o) => `${o.status} ${JSON.stringify(o.body)}`)).toEqual([]);
-    expect(duringOutage.map((outcome) => (outcome.body as { code?: string }).code)).toEqual(duringOutage.map(() => 'database_unavailable'));
-    expect(outcomes.filter((outcome) => ![200, 400, 409, 503].includes(outcome.status)).map((o) => `${o.status} ${JSON.stringify(o.body)}`)).toEqual([]);
+    expect(
+      duringOutage.filter((outcome) => outcome.status !== 503).map((o) => `${o.status} ${JSON.stringify(o.body)}`),
+    ).toEqual([]);
+    expect(duringOutage.map((outcome) => (outcome.body as { code?: string }).code)).toEqual(
+      duringOutage.map(() => 'database_unavailable'),
+    );
+    expect(
+      outcomes
+        .filter((outcome) => ![200, 400, 409, 503].includes(outcome.status))
+        .map((o) => `${o.status} ${JSON.stringify(o.body)}`),
+    ).toEqual([]);
 
     const final = await deck.snapshot(cycleId);
     const log = await readChangeLog(settings.url, observer, cycleId);

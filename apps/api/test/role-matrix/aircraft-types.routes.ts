@@ -21,7 +21,10 @@ export const aircraftTypesRoutes: MatrixRoute[] = [
     method: 'PUT',
     path: '/api/aircraft-types/{id}/launch-table',
     allowed: ['admin'],
-    example: async (context) => ({ params: { id: await targetId(context) }, body: { rows: aircraftTypeBody().launchTable } }),
+    example: async (context) => ({
+      params: { id: await targetId(context) },
+      body: { rows: aircraftTypeBody().launchTable },
+    }),
   },
   {
     method: 'DELETE',

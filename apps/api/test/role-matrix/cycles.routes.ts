@@ -34,7 +34,10 @@ export const cyclesRoutes: MatrixRoute[] = [
     method: 'PATCH',
     path: '/api/cycles/{id}/conditions',
     allowed: ['air_operations'],
-    example: async (context) => ({ params: { id: await targetCycle(context) }, body: { basisVersion: 0, trueWindSpeedKt: 13 } }),
+    example: async (context) => ({
+      params: { id: await targetCycle(context) },
+      body: { basisVersion: 0, trueWindSpeedKt: 13 },
+    }),
   },
   {
     method: 'POST',

@@ -4,7 +4,8 @@ import { createAircraftType } from '../support/fleet-fixtures.js';
 import { LineupDriver } from '../support/lineup-fixtures.js';
 import type { MatrixContext, MatrixRoute } from './route-table.js';
 
-const AIR_PLAN = 'side_number,pilot_email,mission,fuel_lb,stores,gross_weight_lb,tanker,early_warning,spare\nC21,,Strike training,11500,,45000,no,no,no\n';
+const AIR_PLAN =
+  'side_number,pilot_email,mission,fuel_lb,stores,gross_weight_lb,tanker,early_warning,spare\nC21,,Strike training,11500,,45000,no,no,no\n';
 const LAUNCH_TABLE = 'gross_weight_lb,min_launch_airspeed_kt\n25000,115\n40000,135\n';
 
 // A preview changes no cycle, so every caller previews into one; a permitted confirm gets a fresh cycle.
@@ -24,9 +25,15 @@ const typeFor = (context: MatrixContext) => {
   return sharedType;
 };
 
-async function previewed(context: MatrixContext, path: string, role: 'air_operations' | 'admin', content: string): Promise<number> {
+async function previewed(
+  context: MatrixContext,
+  path: string,
+  role: 'air_operations' | 'admin',
+  content: string,
+): Promise<number> {
   const response = await uploadCsv(context.baseUrl, context.tokenOf(role), path, { content });
-  if (response.status !== 201 || response.body.result !== 'accepted') throw new Error(`Preview of ${path} failed: ${JSON.stringify(response.body)}`);
+  if (response.status !== 201 || response.body.result !== 'accepted')
+    throw new Error(`Preview of ${path} failed: ${JSON.stringify(response.body)}`);
   return response.body.uploadId as number;
 }
 
@@ -36,7 +43,10 @@ export const importsRoutes: MatrixRoute[] = [
     method: 'POST',
     path: '/api/cycles/{id}/air-plan/preview',
     allowed: ['air_operations'],
-    example: async (context) => ({ params: { id: (await cycleFor({ ...context, allowed: false })).id }, ...multipartCsv(AIR_PLAN) }),
+    example: async (context) => ({
+      params: { id: (await cycleFor({ ...context, allowed: false })).id },
+      ...multipartCsv(AIR_PLAN),
+    }),
   },
   {
     method: 'POST',
@@ -44,7 +54,9 @@ export const importsRoutes: MatrixRoute[] = [
     allowed: ['air_operations'],
     example: async (context) => {
       const cycle = await cycleFor(context);
-      const uploadId = context.allowed ? await previewed(context, `/api/cycles/${cycle.id}/air-plan/preview`, 'air_operations', AIR_PLAN) : 1;
+      const uploadId = context.allowed
+        ? await previewed(context, `/api/cycles/${cycle.id}/air-plan/preview`, 'air_operations', AIR_PLAN)
+        : 1;
       return { params: { id: cycle.id, uploadId }, body: { basisVersion: cycle.version } };
     },
   },
@@ -53,7 +65,10 @@ export const importsRoutes: MatrixRoute[] = [
     method: 'POST',
     path: '/api/aircraft-types/{id}/launch-table/preview',
     allowed: ['admin'],
-    example: async (context) => ({ params: { id: (await typeFor({ ...context, allowed: false })).id }, ...multipartCsv(LAUNCH_TABLE) }),
+    example: async (context) => ({
+      params: { id: (await typeFor({ ...context, allowed: false })).id },
+      ...multipartCsv(LAUNCH_TABLE),
+    }),
   },
   {
     method: 'POST',
@@ -61,7 +76,9 @@ export const importsRoutes: MatrixRoute[] = [
     allowed: ['admin'],
     example: async (context) => {
       const type = await typeFor(context);
-      const uploadId = context.allowed ? await previewed(context, `/api/aircraft-types/${type.id}/launch-table/preview`, 'admin', LAUNCH_TABLE) : 1;
+      const uploadId = context.allowed
+        ? await previewed(context, `/api/aircraft-types/${type.id}/launch-table/preview`, 'admin', LAUNCH_TABLE)
+        : 1;
       return { params: { id: type.id, uploadId } };
     },
   },

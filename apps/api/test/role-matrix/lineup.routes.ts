@@ -23,14 +23,24 @@ async function freshSlot(context: MatrixContext, stage: Stage) {
 }
 
 export const lineupRoutes: MatrixRoute[] = [
-  { method: 'GET', path: '/api/cycles/{cycleId}/lineup', allowed: ROLES, example: () => ({ params: { cycleId: DEMO_CYCLE } }) },
+  {
+    method: 'GET',
+    path: '/api/cycles/{cycleId}/lineup',
+    allowed: ROLES,
+    example: () => ({ params: { cycleId: DEMO_CYCLE } }),
+  },
   {
     method: 'GET',
     path: '/api/cycles/{cycleId}/lineup/changes',
     allowed: ROLES,
     example: () => ({ params: { cycleId: DEMO_CYCLE }, query: { since: 0 } }),
   },
-  { method: 'GET', path: '/api/cycles/{cycleId}/lineup/suggestion', allowed: ['handler'], example: () => ({ params: { cycleId: DEMO_CYCLE } }) },
+  {
+    method: 'GET',
+    path: '/api/cycles/{cycleId}/lineup/suggestion',
+    allowed: ['handler'],
+    example: () => ({ params: { cycleId: DEMO_CYCLE } }),
+  },
   {
     method: 'POST',
     path: '/api/cycles/{cycleId}/lineup/moves',
@@ -38,7 +48,10 @@ export const lineupRoutes: MatrixRoute[] = [
     example: async (context) => {
       if (!context.allowed) return refused;
       const { cycleId, slot, catapultId } = await freshSlot(context, 'pool');
-      return { params: { cycleId }, body: { slotId: slot.id, slotVersion: slot.version, toCatapultId: catapultId, toIndex: 0, targetLaneOrder: [] } };
+      return {
+        params: { cycleId },
+        body: { slotId: slot.id, slotVersion: slot.version, toCatapultId: catapultId, toIndex: 0, targetLaneOrder: [] },
+      };
     },
   },
   {
@@ -70,7 +83,9 @@ export const lineupRoutes: MatrixRoute[] = [
     // has, which is refused past the role check (409 no_change) and changes nothing.
     refusals: [409],
     example: async (context) =>
-      context.allowed ? { params: { cycleId: DEMO_CYCLE, catapultId: 1 }, body: { status: 'up', basisStatus: 'up' } } : refused,
+      context.allowed
+        ? { params: { cycleId: DEMO_CYCLE, catapultId: 1 }, body: { status: 'up', basisStatus: 'up' } }
+        : refused,
   },
   {
     method: 'POST',
@@ -102,7 +117,10 @@ export const lineupRoutes: MatrixRoute[] = [
     example: async (context) => {
       if (!context.allowed) return refused;
       const { cycleId, slot } = await freshSlot(context, 'tensioned');
-      return { params: { cycleId, slotId: slot.id }, body: { slotVersion: slot.version, idempotencyKey: `matrix-${cycleId}-${slot.id}` } };
+      return {
+        params: { cycleId, slotId: slot.id },
+        body: { slotVersion: slot.version, idempotencyKey: `matrix-${cycleId}-${slot.id}` },
+      };
     },
   },
   {
@@ -113,7 +131,10 @@ export const lineupRoutes: MatrixRoute[] = [
     example: async (context) => {
       if (!context.allowed) return refused;
       const { cycleId, slot } = await freshSlot(context, 'pool');
-      return { params: { cycleId, slotId: slot.id }, body: { slotVersion: slot.version, grossWeightLb: slot.grossWeightLb } };
+      return {
+        params: { cycleId, slotId: slot.id },
+        body: { slotVersion: slot.version, grossWeightLb: slot.grossWeightLb },
+      };
     },
   },
 ];

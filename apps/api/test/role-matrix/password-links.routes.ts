@@ -21,9 +21,26 @@ async function invitedPerson(context: MatrixContext): Promise<number> {
 let refusedInvitee: Promise<number> | undefined;
 
 export const passwordLinksRoutes: MatrixRoute[] = [
-  { method: 'POST', path: '/api/auth/password-reset', allowed: 'public', example: () => ({ body: { email: 'nobody-in-the-matrix@catline.example' } }) },
-  { method: 'POST', path: '/api/auth/password-reset/confirm', allowed: 'public', example: () => ({ body: UNKNOWN_LINK }), refusals: [400] },
-  { method: 'POST', path: '/api/auth/invitations/accept', allowed: 'public', example: () => ({ body: UNKNOWN_LINK }), refusals: [400] },
+  {
+    method: 'POST',
+    path: '/api/auth/password-reset',
+    allowed: 'public',
+    example: () => ({ body: { email: 'nobody-in-the-matrix@catline.example' } }),
+  },
+  {
+    method: 'POST',
+    path: '/api/auth/password-reset/confirm',
+    allowed: 'public',
+    example: () => ({ body: UNKNOWN_LINK }),
+    refusals: [400],
+  },
+  {
+    method: 'POST',
+    path: '/api/auth/invitations/accept',
+    allowed: 'public',
+    example: () => ({ body: UNKNOWN_LINK }),
+    refusals: [400],
+  },
   {
     method: 'POST',
     path: '/api/users/{id}/invitation',

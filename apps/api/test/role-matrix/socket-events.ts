@@ -14,5 +14,10 @@ export interface MatrixSocketEvent {
 export const matrixSocketEvents: MatrixSocketEvent[] = [
   { event: 'cycle:join', allowed: ROLES, mutates: false, example: (cycleId) => ({ cycleId }) },
   { event: 'cycle:leave', allowed: ROLES, mutates: false, example: (cycleId) => ({ cycleId }) },
-  { event: 'session:refresh', allowed: ROLES, mutates: false, example: (_cycleId, ownToken) => ({ accessToken: ownToken }) },
+  {
+    event: 'session:refresh',
+    allowed: ROLES,
+    mutates: false,
+    example: (_cycleId, ownToken) => ({ accessToken: ownToken }),
+  },
 ];

@@ -19,7 +19,12 @@ export const usersRoutes: MatrixRoute[] = [
     path: '/api/users',
     allowed: ['admin'],
     example: () => ({
-      body: { email: `${unique('matrix', 16).toLowerCase()}@catline.example`, name: 'Matrix person', role: 'observer', password: 'long enough password' },
+      body: {
+        email: `${unique('matrix', 16).toLowerCase()}@catline.example`,
+        name: 'Matrix person',
+        role: 'observer',
+        password: 'long enough password',
+      },
     }),
   },
   {

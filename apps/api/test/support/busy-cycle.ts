@@ -3,7 +3,10 @@ import { TEST_PASSWORD, createUser } from './fleet-fixtures.js';
 import { HANDLER, type LineupDriver } from './lineup-fixtures.js';
 import { demoEmail, signIn } from './sign-in.js';
 
-const SIDES = [...Array.from({ length: 12 }, (_, i) => `C${21 + i}`), ...Array.from({ length: 10 }, (_, i) => `D${33 + i}`)];
+const SIDES = [
+  ...Array.from({ length: 12 }, (_, i) => `C${21 + i}`),
+  ...Array.from({ length: 10 }, (_, i) => `D${33 + i}`),
+];
 const IN_LANES = 12;
 
 export interface BusyCycle {
@@ -29,7 +32,8 @@ export async function createBusyCycle(deck: LineupDriver): Promise<BusyCycle> {
 export async function handlerTokens(deck: LineupDriver, count: number): Promise<string[]> {
   const admin = await deck.token(demoEmail('admin'));
   const tokens = [await deck.token(HANDLER)];
-  while (tokens.length < count) tokens.push(await signIn(deck.url, (await createUser(deck.url, admin, 'handler')).email, TEST_PASSWORD));
+  while (tokens.length < count)
+    tokens.push(await signIn(deck.url, (await createUser(deck.url, admin, 'handler')).email, TEST_PASSWORD));
   return tokens;
 }
 

@@ -5,7 +5,9 @@ export async function readChangeLog(url: string, token: string, cycleId: number)
   const log: LineupChange[] = [];
   for (;;) {
     const since = log.at(-1)?.version ?? 0;
-    const response = await fetch(`${url}/api/cycles/${cycleId}/lineup/changes?since=${since}`, { headers: { Authorization: `Bearer ${token}` } });
+    const response = await fetch(`${url}/api/cycles/${cycleId}/lineup/changes?since=${since}`, {
+      headers: { Authorization: `Bearer ${token}` },
+    });
     if (!response.ok) throw new Error(`Reading the change log answered ${response.status}`);
     const page = (await response.json()) as LineupChange[];
     log.push(...page);
@@ -15,5 +17,7 @@ export async function readChangeLog(url: string, token: string, cycleId: number)
 
 /** Versions that are missing from, or repeated in, 1..last. */
 export function versionProblems(log: readonly LineupChange[]): string[] {
-  return log.flatMap((change, i) => (change.version === i + 1 ? [] : [`place ${i + 1} holds version ${change.version}`]));
+  return log.flatMap((change, i) =>
+    change.version === i + 1 ? [] : [`place ${i + 1} holds version ${change.version}`],
+  );
 }

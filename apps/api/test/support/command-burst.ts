@@ -39,7 +39,8 @@ export class CommandBurst {
     const deadline = Date.now() + timeoutMs;
     const acceptedSoFar = () => this.outcomes.filter((outcome) => outcome.status === 200).length;
     while (acceptedSoFar() < count) {
-      if (Date.now() > deadline) throw new Error(`Only ${acceptedSoFar()} of ${count} commands accepted within ${timeoutMs} ms`);
+      if (Date.now() > deadline)
+        throw new Error(`Only ${acceptedSoFar()} of ${count} commands accepted within ${timeoutMs} ms`);
       await new Promise((resolve) => setTimeout(resolve, 10));
     }
   }

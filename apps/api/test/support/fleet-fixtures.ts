@@ -11,14 +11,18 @@ export function unique(prefix: string, length = 8): string {
 
 async function created<T>(pending: request.Test, what: string): Promise<T> {
   const response = await pending;
-  if (response.status !== 201) throw new Error(`Creating ${what} failed with ${response.status}: ${JSON.stringify(response.body)}`);
+  if (response.status !== 201)
+    throw new Error(`Creating ${what} failed with ${response.status}: ${JSON.stringify(response.body)}`);
   return response.body as T;
 }
 
 export function createSquadron(baseUrl: string, adminToken: string): Promise<SquadronView> {
   const code = unique('SQ', 10);
   return created(
-    request(baseUrl).post('/api/squadrons').set(bearer(adminToken)).send({ name: `Squadron ${code}`, code, email: `${code.toLowerCase()}@catline.example` }),
+    request(baseUrl)
+      .post('/api/squadrons')
+      .set(bearer(adminToken))
+      .send({ name: `Squadron ${code}`, code, email: `${code.toLowerCase()}@catline.example` }),
     'a squadron',
   );
 }
@@ -45,7 +49,10 @@ export function aircraftTypeBody(designation = unique('T-', 12)) {
 }
 
 export function createAircraftType(baseUrl: string, adminToken: string): Promise<AircraftTypeView> {
-  return created(request(baseUrl).post('/api/aircraft-types').set(bearer(adminToken)).send(aircraftTypeBody()), 'an aircraft type');
+  return created(
+    request(baseUrl).post('/api/aircraft-types').set(bearer(adminToken)).send(aircraftTypeBody()),
+    'an aircraft type',
+  );
 }
 
 /** An aircraft of a demo type and squadron (ids 1) on the demo deck spot `bow-1`, unless told otherwise. */
@@ -67,7 +74,13 @@ export function createUser(baseUrl: string, adminToken: string, role: Role = 'ob
     request(baseUrl)
       .post('/api/users')
       .set(bearer(adminToken))
-      .send({ email: `${name}@catline.example`, name: `Test ${name}`, role, password: TEST_PASSWORD, ...(role === 'catapult_officer' ? { catapultId: 1 } : {}) }),
+      .send({
+        email: `${name}@catline.example`,
+        name: `Test ${name}`,
+        role,
+        password: TEST_PASSWORD,
+        ...(role === 'catapult_officer' ? { catapultId: 1 } : {}),
+      }),
     'a person',
   );
 }

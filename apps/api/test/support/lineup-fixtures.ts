@@ -70,7 +70,9 @@ export class LineupDriver {
   async ok<T>(email: string, method: Method, path: string, body?: object, status = 200): Promise<T> {
     const response = await this.call(email, method, path, body);
     if (response.status !== status) {
-      throw new Error(`${method.toUpperCase()} ${path} as ${email} answered ${response.status}: ${JSON.stringify(response.body)}`);
+      throw new Error(
+        `${method.toUpperCase()} ${path} as ${email} answered ${response.status}: ${JSON.stringify(response.body)}`,
+      );
     }
     return response.body as T;
   }
@@ -98,7 +100,8 @@ export class LineupDriver {
         ...overrides,
       });
       if (response.status === 201) return response.body as CycleView;
-      if (response.body?.code !== 'cycle_number_taken') throw new Error(`Creating a cycle failed: ${JSON.stringify(response.body)}`);
+      if (response.body?.code !== 'cycle_number_taken')
+        throw new Error(`Creating a cycle failed: ${JSON.stringify(response.body)}`);
     }
   }
 
@@ -114,7 +117,11 @@ export class LineupDriver {
   }
 
   /** Adds a demo aircraft to the cycle's deck pool (a strike sortie of 44,000 lb unless told otherwise). */
-  async addSlot(cycleId: number, side: string, fields: Partial<AddSlotRequest> & { pilotEmail?: string } = {}): Promise<SlotView> {
+  async addSlot(
+    cycleId: number,
+    side: string,
+    fields: Partial<AddSlotRequest> & { pilotEmail?: string } = {},
+  ): Promise<SlotView> {
     const { pilotEmail, ...rest } = fields;
     const pilotId = pilotEmail ? (await this.me(pilotEmail)).id : null;
     const result = await this.ok<LineupCommandResult>(AIR_OPS, 'post', `/api/cycles/${cycleId}/slots`, {
@@ -165,20 +172,35 @@ export class LineupDriver {
 
   async acknowledgeWeight(cycleId: number, slotId: number, pilotEmail: string): Promise<LineupCommandResult> {
     const slot = await this.slot(cycleId, slotId);
-    return this.ok<LineupCommandResult>(pilotEmail, 'post', `/api/cycles/${cycleId}/lineup/slots/${slotId}/weight-ack`, {
-      slotVersion: slot.version,
-      grossWeightLb: slot.grossWeightLb,
-    });
+    return this.ok<LineupCommandResult>(
+      pilotEmail,
+      'post',
+      `/api/cycles/${cycleId}/lineup/slots/${slotId}/weight-ack`,
+      {
+        slotVersion: slot.version,
+        grossWeightLb: slot.grossWeightLb,
+      },
+    );
   }
 
   /** A readiness step by the catapult officer of the slot's catapult; the raw answer. */
-  async step(cycleId: number, slotId: number, to: ReadinessStep | 'resume', officer?: string): Promise<request.Response> {
+  async step(
+    cycleId: number,
+    slotId: number,
+    to: ReadinessStep | 'resume',
+    officer?: string,
+  ): Promise<request.Response> {
     const slot = await this.slot(cycleId, slotId);
     const number = (await this.demoShip()).catapults.find((catapult) => catapult.id === slot.catapultId)?.number ?? 1;
-    return this.call(officer ?? catapultOfficer(number), 'post', `/api/cycles/${cycleId}/lineup/slots/${slotId}/advance`, {
-      slotVersion: slot.version,
-      to,
-    });
+    return this.call(
+      officer ?? catapultOfficer(number),
+      'post',
+      `/api/cycles/${cycleId}/lineup/slots/${slotId}/advance`,
+      {
+        slotVersion: slot.version,
+        to,
+      },
+    );
   }
 
   /** Taxi, on catapult, weight agreed (after the pilot's acknowledgement) and tensioned. */
@@ -186,12 +208,18 @@ export class LineupDriver {
     await this.acknowledgeWeight(cycleId, slotId, pilotEmail);
     for (const to of ['taxiing', 'on_catapult', 'weight_agreed', 'tensioned'] as const) {
       const response = await this.step(cycleId, slotId, to);
-      if (response.status !== 200) throw new Error(`Step ${to} answered ${response.status}: ${JSON.stringify(response.body)}`);
+      if (response.status !== 200)
+        throw new Error(`Step ${to} answered ${response.status}: ${JSON.stringify(response.body)}`);
     }
     return this.slot(cycleId, slotId);
   }
 
-  async launch(cycleId: number, slot: SlotView, idempotencyKey: string, fields: { overrideReason?: string } = {}): Promise<request.Response> {
+  async launch(
+    cycleId: number,
+    slot: SlotView,
+    idempotencyKey: string,
+    fields: { overrideReason?: string } = {},
+  ): Promise<request.Response> {
     const number = (await this.demoShip()).catapults.find((catapult) => catapult.id === slot.catapultId)!.number;
     return this.call(catapultOfficer(number), 'post', `/api/cycles/${cycleId}/lineup/slots/${slot.id}/launch`, {
       slotVersion: slot.version,

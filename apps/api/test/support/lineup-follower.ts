@@ -63,7 +63,8 @@ export class LineupFollower {
   async ready(timeoutMs = 15_000): Promise<this> {
     const deadline = Date.now() + timeoutMs;
     while (!this.held) {
-      if (Date.now() > deadline) throw new Error(`Follower never joined cycle ${this.options.cycleId}: ${this.problems.join('; ')}`);
+      if (Date.now() > deadline)
+        throw new Error(`Follower never joined cycle ${this.options.cycleId}: ${this.problems.join('; ')}`);
       await new Promise((resolve) => setTimeout(resolve, 20));
     }
     return this;
@@ -95,7 +96,8 @@ export class LineupFollower {
     if (!result.ok) {
       this.problems.push(`join refused: ${result.code} ${result.message}`);
       const { rejoinAfterRefusalMs } = this.options;
-      if (rejoinAfterRefusalMs !== undefined) setTimeout(() => this.socket.connected && this.follow.joining && void this.join(), rejoinAfterRefusalMs);
+      if (rejoinAfterRefusalMs !== undefined)
+        setTimeout(() => this.socket.connected && this.follow.joining && void this.join(), rejoinAfterRefusalMs);
       return;
     }
     this.take(followJoin(this.follow, result));
@@ -116,7 +118,9 @@ export async function allAt(followers: readonly LineupFollower[], version: numbe
   while (followers.some((follower) => follower.version !== version)) {
     if (Date.now() > deadline) {
       const lagging = followers.map((follower) => follower.version).filter((held) => held !== version);
-      throw new Error(`${lagging.length} clients are not at version ${version} (they hold ${lagging.slice(0, 5).join(', ')})`);
+      throw new Error(
+        `${lagging.length} clients are not at version ${version} (they hold ${lagging.slice(0, 5).join(', ')})`,
+      );
     }
     await new Promise((resolve) => setTimeout(resolve, 25));
   }

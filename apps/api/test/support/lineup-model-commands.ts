@@ -22,9 +22,11 @@ type Lanes = Map<number, number[]>;
 
 const MAX_DOWN = 4;
 
-const lanesOf = (snapshot: LineupSnapshot): Lanes => new Map(snapshot.lanes.map((lane) => [lane.catapultId, [...lane.slotIds]]));
+const lanesOf = (snapshot: LineupSnapshot): Lanes =>
+  new Map(snapshot.lanes.map((lane) => [lane.catapultId, [...lane.slotIds]]));
 
-const sameIds = (a: readonly number[], b: readonly number[]) => a.length === b.length && a.every((id, i) => id === b[i]);
+const sameIds = (a: readonly number[], b: readonly number[]) =>
+  a.length === b.length && a.every((id, i) => id === b[i]);
 
 const byId = (snapshot: LineupSnapshot) => [...snapshot.slots].sort((a, b) => a.id - b.id);
 
@@ -49,13 +51,18 @@ abstract class ModelCommand implements fc.AsyncCommand<LineupModel, LineupReal> 
     if (prediction.status !== 200) return;
 
     const result = outcome.body as LineupCommandResult;
-    if (result.version !== model.snapshot.version + 1) throw new Error(`expected version ${model.snapshot.version + 1}: ${answer}`);
+    if (result.version !== model.snapshot.version + 1)
+      throw new Error(`expected version ${model.snapshot.version + 1}: ${answer}`);
     model.snapshot = applyLineupPatch(model.snapshot, result.version, result.change.patch);
     for (const lane of model.snapshot.lanes) {
       const expected = prediction.lanes.get(lane.catapultId)!;
-      if (!sameIds(lane.slotIds, expected)) throw new Error(`cat ${lane.number} holds ${lane.slotIds}, the rules say ${expected}: ${answer}`);
+      if (!sameIds(lane.slotIds, expected))
+        throw new Error(`cat ${lane.number} holds ${lane.slotIds}, the rules say ${expected}: ${answer}`);
     }
-    if (prediction.down !== undefined && model.snapshot.slots.find((slot) => slot.id === prediction.down)?.status !== 'down') {
+    if (
+      prediction.down !== undefined &&
+      model.snapshot.slots.find((slot) => slot.id === prediction.down)?.status !== 'down'
+    ) {
       throw new Error(`slot ${prediction.down} is not down: ${answer}`);
     }
   }
@@ -96,7 +103,8 @@ class MoveCommand extends ModelCommand {
     const others = order.filter((id) => id !== slot.id);
     const toIndex = this.placePick % (others.length + 2);
     const body = { slotId: slot.id, slotVersion, toCatapultId: lane.catapultId, toIndex, targetLaneOrder: seen };
-    if (this.staleSlot || slot.status !== 'planned' || !sameIds(seen, order)) return { path, body, prediction: refused(409) };
+    if (this.staleSlot || slot.status !== 'planned' || !sameIds(seen, order))
+      return { path, body, prediction: refused(409) };
     if (toIndex > others.length) return { path, body, prediction: refused(400) };
     const next = [...others];
     next.splice(toIndex, 0, slot.id);
@@ -130,10 +138,19 @@ class MarkDownCommand extends ModelCommand {
     const { snapshot } = model;
     const slots = byId(snapshot);
     const slot = slots[this.slotPick % slots.length];
-    const spare = this.withSpare ? slots.find((candidate: SlotView) => candidate.status === 'planned' && candidate.catapultId === null && candidate.id !== slot.id) : undefined;
+    const spare = this.withSpare
+      ? slots.find(
+          (candidate: SlotView) =>
+            candidate.status === 'planned' && candidate.catapultId === null && candidate.id !== slot.id,
+        )
+      : undefined;
     const path = `/api/cycles/${snapshot.cycle.id}/lineup/slots/${slot.id}/down`;
-    const body = { slotVersion: this.stale ? slot.version + 1 : slot.version, ...(spare ? { spareSlotId: spare.id } : {}) };
-    if (this.stale || slot.status !== 'planned' || (spare && slot.catapultId === null)) return { path, body, prediction: { status: 409 as const } };
+    const body = {
+      slotVersion: this.stale ? slot.version + 1 : slot.version,
+      ...(spare ? { spareSlotId: spare.id } : {}),
+    };
+    if (this.stale || slot.status !== 'planned' || (spare && slot.catapultId === null))
+      return { path, body, prediction: { status: 409 as const } };
     const lanes = lanesOf(snapshot);
     if (slot.catapultId !== null) {
       const lane = lanes.get(slot.catapultId)!;
@@ -163,7 +180,11 @@ class CatapultStatusCommand extends ModelCommand {
     const other = lane.status === 'up' ? 'down' : 'up';
     const path = `/api/cycles/${snapshot.cycle.id}/lineup/catapults/${lane.catapultId}/status`;
     const body = { status: other, basisStatus: this.stale ? other : lane.status };
-    return { path, body, prediction: this.stale ? { status: 409 as const } : { status: 200 as const, lanes: lanesOf(snapshot) } };
+    return {
+      path,
+      body,
+      prediction: this.stale ? { status: 409 as const } : { status: 200 as const, lanes: lanesOf(snapshot) },
+    };
   }
 
   override toString(): string {
@@ -213,10 +234,26 @@ export function lineupModelCommands(handlers: number, maxCommands: number) {
   return fc.commands(
     [
       fc.oneof(
-        { weight: 40, arbitrary: fc.tuple(handler, fc.nat(), fc.integer({ min: -1, max: 3 }), fc.nat(), sometimes, sometimes).map((args) => new MoveCommand(...args)) },
-        { weight: 2, arbitrary: fc.tuple(handler, fc.nat(), sometimes, fc.boolean()).map((args) => new MarkDownCommand(...args)) },
-        { weight: 3, arbitrary: fc.tuple(handler, fc.nat(), sometimes).map((args) => new CatapultStatusCommand(...args)) },
-        { weight: 3, arbitrary: fc.tuple(handler, fc.array(fc.nat(), { minLength: 1, maxLength: 40 }), sometimes).map((args) => new ApplyLineupCommand(...args)) },
+        {
+          weight: 40,
+          arbitrary: fc
+            .tuple(handler, fc.nat(), fc.integer({ min: -1, max: 3 }), fc.nat(), sometimes, sometimes)
+            .map((args) => new MoveCommand(...args)),
+        },
+        {
+          weight: 2,
+          arbitrary: fc.tuple(handler, fc.nat(), sometimes, fc.boolean()).map((args) => new MarkDownCommand(...args)),
+        },
+        {
+          weight: 3,
+          arbitrary: fc.tuple(handler, fc.nat(), sometimes).map((args) => new CatapultStatusCommand(...args)),
+        },
+        {
+          weight: 3,
+          arbitrary: fc
+            .tuple(handler, fc.array(fc.nat(), { minLength: 1, maxLength: 40 }), sometimes)
+            .map((args) => new ApplyLineupCommand(...args)),
+        },
       ),
     ],
     { maxCommands, size: 'max' },

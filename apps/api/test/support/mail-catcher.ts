@@ -46,11 +46,24 @@ export class MailCatcher {
 
   async start(): Promise<void> {
     this.folder = mkdtempSync(path.join(tmpdir(), 'catline-mail-'));
-    const args = ['--smtp', this.smtpPort, '--ip', '127.0.0.1', '--web', this.webPort, '--web-ip', '127.0.0.1', '--mail-directory', this.folder, '--silent'];
+    const args = [
+      '--smtp',
+      this.smtpPort,
+      '--ip',
+      '127.0.0.1',
+      '--web',
+      this.webPort,
+      '--web-ip',
+      '127.0.0.1',
+      '--mail-directory',
+      this.folder,
+      '--silent',
+    ];
     this.server = spawn(process.execPath, [MAILDEV, ...args.map(String)], { stdio: 'ignore' });
     const deadline = Date.now() + 15_000;
     while (!(await this.answers())) {
-      if (Date.now() > deadline || this.server.exitCode !== null) throw new Error(`maildev did not start on ${this.smtpPort}/${this.webPort}`);
+      if (Date.now() > deadline || this.server.exitCode !== null)
+        throw new Error(`maildev did not start on ${this.smtpPort}/${this.webPort}`);
       await new Promise((resolve) => setTimeout(resolve, 100));
     }
   }

@@ -52,24 +52,35 @@ export function randomCommand(view: LineupSnapshot, random: () => number, mix: C
   const roll = random();
   if (roll < mix.catapult) {
     const lane = pick(random, view.lanes);
-    return { path: `${base}/catapults/${lane.catapultId}/status`, body: { status: lane.status === 'up' ? 'down' : 'up', basisStatus: lane.status } };
+    return {
+      path: `${base}/catapults/${lane.catapultId}/status`,
+      body: { status: lane.status === 'up' ? 'down' : 'up', basisStatus: lane.status },
+    };
   }
   if (roll < mix.catapult + mix.down && planned.length > 0) {
     const slot = pick(random, planned);
-    const spare = view.pool.length > 0 && slot.catapultId !== null && random() < 0.5 ? pick(random, view.pool) : undefined;
-    return { path: `${base}/slots/${slot.id}/down`, body: { slotVersion: slot.version, ...(spare === undefined ? {} : { spareSlotId: spare }) } };
+    const spare =
+      view.pool.length > 0 && slot.catapultId !== null && random() < 0.5 ? pick(random, view.pool) : undefined;
+    return {
+      path: `${base}/slots/${slot.id}/down`,
+      body: { slotVersion: slot.version, ...(spare === undefined ? {} : { spareSlotId: spare }) },
+    };
   }
   if (roll < mix.catapult + mix.down + mix.suggestion) {
     const lanes = view.lanes.map((lane) => ({ catapultId: lane.catapultId, slotIds: [] as number[] }));
     for (const slot of planned) {
       const lane = Math.floor(random() * (lanes.length + 1));
-      if (lane < lanes.length) lanes[lane].slotIds.splice(Math.floor(random() * (lanes[lane].slotIds.length + 1)), 0, slot.id);
+      if (lane < lanes.length)
+        lanes[lane].slotIds.splice(Math.floor(random() * (lanes[lane].slotIds.length + 1)), 0, slot.id);
     }
     return { path: `${base}/suggestion/apply`, body: { basisVersion: view.version, lanes } };
   }
   const slot = pick(random, planned.length > 0 ? planned : view.slots);
   if (slot.catapultId !== null && random() < 0.15) {
-    return { path: `${base}/moves`, body: { slotId: slot.id, slotVersion: slot.version, toCatapultId: null, toIndex: 0, targetLaneOrder: [] } };
+    return {
+      path: `${base}/moves`,
+      body: { slotId: slot.id, slotVersion: slot.version, toCatapultId: null, toIndex: 0, targetLaneOrder: [] },
+    };
   }
   const lane = pick(random, view.lanes);
   const others = lane.slotIds.filter((id) => id !== slot.id).length;
@@ -77,7 +88,13 @@ export function randomCommand(view: LineupSnapshot, random: () => number, mix: C
   const toIndex = Math.floor(random() * (others + 1.1));
   return {
     path: `${base}/moves`,
-    body: { slotId: slot.id, slotVersion: slot.version, toCatapultId: lane.catapultId, toIndex, targetLaneOrder: lane.slotIds },
+    body: {
+      slotId: slot.id,
+      slotVersion: slot.version,
+      toCatapultId: lane.catapultId,
+      toIndex,
+      targetLaneOrder: lane.slotIds,
+    },
   };
 }
 
@@ -98,7 +115,15 @@ export async function send(url: string, token: string, command: LineupCommand, h
     } catch {
       // Not JSON: kept as text for the failure message.
     }
-    return { handler, command, status: response.status, body, connection: response.headers.get('connection'), sentAt, answeredAt: Date.now() };
+    return {
+      handler,
+      command,
+      status: response.status,
+      body,
+      connection: response.headers.get('connection'),
+      sentAt,
+      answeredAt: Date.now(),
+    };
   } catch (error) {
     return { handler, command, status: 0, body: String(error), connection: null, sentAt, answeredAt: Date.now() };
   }

@@ -1,4 +1,10 @@
-import type { ClientToServerEvents, JoinCycleRequest, JoinCycleResult, LineupChange, ServerToClientEvents } from '@catline/contracts';
+import type {
+  ClientToServerEvents,
+  JoinCycleRequest,
+  JoinCycleResult,
+  LineupChange,
+  ServerToClientEvents,
+} from '@catline/contracts';
 import { io, type Socket } from 'socket.io-client';
 
 export type ClientSocket = Socket<ServerToClientEvents, ClientToServerEvents>;

@@ -116,7 +116,13 @@ export async function placeInLane(handler: APIRequestContext, cycleId: number, s
   const slot = snapshot.slots.find((candidate) => candidate.id === slotId)!;
   await ok(
     await handler.post(`/api/cycles/${cycleId}/lineup/moves`, {
-      data: { slotId, slotVersion: slot.version, toCatapultId: lane.catapultId, toIndex: lane.slotIds.length, targetLaneOrder: lane.slotIds },
+      data: {
+        slotId,
+        slotVersion: slot.version,
+        toCatapultId: lane.catapultId,
+        toIndex: lane.slotIds.length,
+        targetLaneOrder: lane.slotIds,
+      },
     }),
   );
 }

@@ -18,9 +18,11 @@ export async function signIn(page: Page, who: string) {
   await page.getByRole('button', { name: 'Sign in' }).click();
 }
 
-export const lane = (page: Page, catapultNumber: number) => page.locator(`[data-testid="lane"][data-catapult-number="${catapultNumber}"]`);
+export const lane = (page: Page, catapultNumber: number) =>
+  page.locator(`[data-testid="lane"][data-catapult-number="${catapultNumber}"]`);
 export const pool = (page: Page) => page.getByTestId('deck-pool');
-export const card = (scope: Page | Locator, side: string) => scope.locator(`[data-testid="slot-card"][data-side-number="${side}"]`);
+export const card = (scope: Page | Locator, side: string) =>
+  scope.locator(`[data-testid="slot-card"][data-side-number="${side}"]`);
 
 /** A real pointer drag: press, move in steps (dnd-kit waits for movement), release. */
 export async function dragWithMouse(page: Page, from: Locator, to: Locator) {
@@ -35,6 +37,11 @@ export async function dragWithMouse(page: Page, from: Locator, to: Locator) {
 
 /** Fails when the page is wider than the window: something overflows sideways. */
 export async function expectNoSidewaysOverflow(page: Page) {
-  const widths = await page.evaluate(() => ({ content: document.documentElement.scrollWidth, window: window.innerWidth }));
-  expect(widths.content, `page is ${widths.content}px wide in a ${widths.window}px window`).toBeLessThanOrEqual(widths.window);
+  const widths = await page.evaluate(() => ({
+    content: document.documentElement.scrollWidth,
+    window: window.innerWidth,
+  }));
+  expect(widths.content, `page is ${widths.content}px wide in a ${widths.window}px window`).toBeLessThanOrEqual(
+    widths.window,
+  );
 }

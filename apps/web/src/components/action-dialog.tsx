@@ -15,9 +15,26 @@ interface ActionDialogProps {
 }
 
 /** A question before a change that others will see at once. */
-export function ActionDialog({ open, title, onClose, children, confirmLabel, onConfirm, confirmDisabled, pending, tone = 'accent', size = 'md' }: ActionDialogProps) {
+export function ActionDialog({
+  open,
+  title,
+  onClose,
+  children,
+  confirmLabel,
+  onConfirm,
+  confirmDisabled,
+  pending,
+  tone = 'accent',
+  size = 'md',
+}: ActionDialogProps) {
   return (
-    <Dialog.Root open={open} onOpenChange={(details) => !details.open && onClose()} placement="center" size={{ base: 'full', md: size }} scrollBehavior="inside">
+    <Dialog.Root
+      open={open}
+      onOpenChange={(details) => !details.open && onClose()}
+      placement="center"
+      size={{ base: 'full', md: size }}
+      scrollBehavior="inside"
+    >
       <Portal>
         <Dialog.Backdrop />
         <Dialog.Positioner>

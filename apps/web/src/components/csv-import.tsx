@@ -38,9 +38,13 @@ function ProblemList({ problems }: { problems: ImportProblem[] }) {
         <Table.Body>
           {problems.map((problem, index) => (
             <Table.Row key={index}>
-              <Table.Cell textAlign="end" textStyle="figure">{problem.row}</Table.Cell>
+              <Table.Cell textAlign="end" textStyle="figure">
+                {problem.row}
+              </Table.Cell>
               <Table.Cell>{problem.column ?? (problem.row === 1 ? 'Header' : 'Whole line')}</Table.Cell>
-              <Table.Cell fontFamily="mono">{problem.value === null ? '—' : problem.value === '' ? '(empty)' : problem.value}</Table.Cell>
+              <Table.Cell fontFamily="mono">
+                {problem.value === null ? '—' : problem.value === '' ? '(empty)' : problem.value}
+              </Table.Cell>
               <Table.Cell>{problem.reason}</Table.Cell>
             </Table.Row>
           ))}
@@ -50,7 +54,15 @@ function ProblemList({ problems }: { problems: ImportProblem[] }) {
   );
 }
 
-function RowsRead<Row extends { row: number }>({ rows, columns, problemLines }: { rows: Row[]; columns: Column<Row>[]; problemLines: Set<number> }) {
+function RowsRead<Row extends { row: number }>({
+  rows,
+  columns,
+  problemLines,
+}: {
+  rows: Row[];
+  columns: Column<Row>[];
+  problemLines: Set<number>;
+}) {
   return (
     <Table.ScrollArea borderWidth="1px" rounded="card">
       <Table.Root size="sm" data-testid="import-rows">
@@ -68,9 +80,15 @@ function RowsRead<Row extends { row: number }>({ rows, columns, problemLines }: 
         <Table.Body>
           {rows.map((row) => (
             <Table.Row key={row.row} bg={problemLines.has(row.row) ? 'nogo.subtle' : undefined}>
-              <Table.Cell textAlign="end" textStyle="figure">{row.row}</Table.Cell>
+              <Table.Cell textAlign="end" textStyle="figure">
+                {row.row}
+              </Table.Cell>
               {columns.map((column) => (
-                <Table.Cell key={column.key} textAlign={column.numeric ? 'end' : 'start'} textStyle={column.numeric ? 'figure' : undefined}>
+                <Table.Cell
+                  key={column.key}
+                  textAlign={column.numeric ? 'end' : 'start'}
+                  textStyle={column.numeric ? 'figure' : undefined}
+                >
                   {column.cell(row)}
                 </Table.Cell>
               ))}
@@ -86,7 +104,16 @@ function RowsRead<Row extends { row: number }>({ rows, columns, problemLines }: 
  * A CSV import in two steps: the server reads and checks the file and answers what it found; only a
  * file without a problem can then be imported, whole.
  */
-export function CsvImport<Row extends { row: number }>({ subject, hint, template, preview, confirm, columns, importLabel, importedMessage }: CsvImportProps<Row>) {
+export function CsvImport<Row extends { row: number }>({
+  subject,
+  hint,
+  template,
+  preview,
+  confirm,
+  columns,
+  importLabel,
+  importedMessage,
+}: CsvImportProps<Row>) {
   const [file, setFile] = useState<File | null>(null);
   const [missing, setMissing] = useState(false);
   // A new input element forgets the chosen file after an import.
@@ -126,8 +153,17 @@ export function CsvImport<Row extends { row: number }>({ subject, hint, template
       <form onSubmit={check} noValidate aria-label={`Check a ${subject} file`}>
         <HStack gap="2" align="flex-end" wrap="wrap">
           <Stack flex="1" minW="14rem" maxW="28rem">
-            <FormField label={`${capitalized(subject)} file (CSV)`} error={missing ? 'Choose a CSV file first.' : undefined}>
-              <Input key={inputKey} type="file" accept=".csv,text/csv" py="1.5" onChange={(event) => choose(event.currentTarget.files?.[0] ?? null)} />
+            <FormField
+              label={`${capitalized(subject)} file (CSV)`}
+              error={missing ? 'Choose a CSV file first.' : undefined}
+            >
+              <Input
+                key={inputKey}
+                type="file"
+                accept=".csv,text/csv"
+                py="1.5"
+                onChange={(event) => choose(event.currentTarget.files?.[0] ?? null)}
+              />
             </FormField>
           </Stack>
           <Button type="submit" variant="outline" loading={preview.isPending} loadingText="Checking…">
@@ -150,7 +186,15 @@ export function CsvImport<Row extends { row: number }>({ subject, hint, template
           <Alert.Title>{importedMessage}</Alert.Title>
         </Alert.Root>
       )}
-      {checked && <CheckedFile checked={checked} columns={columns} importLabel={importLabel} importing={confirm.isPending} onImport={importChecked} />}
+      {checked && (
+        <CheckedFile
+          checked={checked}
+          columns={columns}
+          importLabel={importLabel}
+          importing={confirm.isPending}
+          onImport={importChecked}
+        />
+      )}
     </Stack>
   );
 }
@@ -166,7 +210,13 @@ interface CheckedFileProps<Row extends { row: number }> {
 }
 
 /** What the server found in the file: its problems first, then the lines it could read. */
-function CheckedFile<Row extends { row: number }>({ checked, columns, importLabel, importing, onImport }: CheckedFileProps<Row>) {
+function CheckedFile<Row extends { row: number }>({
+  checked,
+  columns,
+  importLabel,
+  importing,
+  onImport,
+}: CheckedFileProps<Row>) {
   const { fileName, rows, problems, problemCount } = checked;
   const importable = checked.result === 'accepted' && problemCount === 0;
   const firstOnly = problemCount > problems.length ? ` (the first ${problems.length} are listed)` : '';
@@ -178,13 +228,21 @@ function CheckedFile<Row extends { row: number }>({ checked, columns, importLabe
         </Text>
       ) : (
         <Text color="nogo.fg" fontWeight="600" role="status">
-          {fileName}: {plural(problemCount, 'problem')}{firstOnly}. Nothing can be imported until the file is put right and checked again.
+          {fileName}: {plural(problemCount, 'problem')}
+          {firstOnly}. Nothing can be imported until the file is put right and checked again.
         </Text>
       )}
       {problems.length > 0 && <ProblemList problems={problems} />}
-      {rows.length > 0 && <RowsRead rows={rows} columns={columns} problemLines={new Set(problems.map((problem) => problem.row))} />}
+      {rows.length > 0 && (
+        <RowsRead rows={rows} columns={columns} problemLines={new Set(problems.map((problem) => problem.row))} />
+      )}
       {importable && (
-        <Button colorPalette="accent" alignSelf="flex-start" loading={importing} onClick={() => onImport(checked.uploadId)}>
+        <Button
+          colorPalette="accent"
+          alignSelf="flex-start"
+          loading={importing}
+          onClick={() => onImport(checked.uploadId)}
+        >
           {importLabel(rows.length)}
         </Button>
       )}

@@ -4,7 +4,15 @@ import { formatShortClock } from '../lib/format.js';
 
 const stateWords = { planning: 'planning', executing: 'launching', closed: 'closed' } as const;
 
-export function CyclePicker({ cycles, value, onChange }: { cycles: CycleView[]; value: number | undefined; onChange: (cycleId: number) => void }) {
+export function CyclePicker({
+  cycles,
+  value,
+  onChange,
+}: {
+  cycles: CycleView[];
+  value: number | undefined;
+  onChange: (cycleId: number) => void;
+}) {
   return (
     <NativeSelect.Root size="sm" width={{ base: 'full', sm: '16rem' }}>
       <NativeSelect.Field

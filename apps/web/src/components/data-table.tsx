@@ -36,11 +36,27 @@ function compare(a: Sortable, b: Sortable): number {
 }
 
 const SortButton = chakra('button', {
-  base: { display: 'inline-flex', gap: '1', alignItems: 'center', fontWeight: '700', cursor: 'pointer', _focusVisible: { outline: '2px solid', outlineColor: 'accent.focusRing' } },
+  base: {
+    display: 'inline-flex',
+    gap: '1',
+    alignItems: 'center',
+    fontWeight: '700',
+    cursor: 'pointer',
+    _focusVisible: { outline: '2px solid', outlineColor: 'accent.focusRing' },
+  },
 });
 
 /** A table that sorts by a column header and filters on text; the header says how it is sorted. */
-export function DataTable<T>({ caption, rows, columns, rowKey, emptyTitle, emptyHint, selectedKey, initialSort }: DataTableProps<T>) {
+export function DataTable<T>({
+  caption,
+  rows,
+  columns,
+  rowKey,
+  emptyTitle,
+  emptyHint,
+  selectedKey,
+  initialSort,
+}: DataTableProps<T>) {
   const [filter, setFilter] = useState('');
   const [sort, setSort] = useState(initialSort ?? null);
 
@@ -61,7 +77,9 @@ export function DataTable<T>({ caption, rows, columns, rowKey, emptyTitle, empty
   if (rows.length === 0) return <EmptyState title={emptyTitle}>{emptyHint}</EmptyState>;
 
   const toggle = (key: string) =>
-    setSort((current) => (current?.key === key ? { key, descending: !current.descending } : { key, descending: false }));
+    setSort((current) =>
+      current?.key === key ? { key, descending: !current.descending } : { key, descending: false },
+    );
 
   return (
     <Box>
@@ -86,11 +104,18 @@ export function DataTable<T>({ caption, rows, columns, rowKey, emptyTitle, empty
               {columns.map((column) => {
                 const sorted = sort?.key === column.key ? (sort.descending ? 'descending' : 'ascending') : undefined;
                 return (
-                  <Table.ColumnHeader key={column.key} aria-sort={sorted ?? (column.sortValue ? 'none' : undefined)} textAlign={column.numeric ? 'end' : 'start'} whiteSpace="nowrap">
+                  <Table.ColumnHeader
+                    key={column.key}
+                    aria-sort={sorted ?? (column.sortValue ? 'none' : undefined)}
+                    textAlign={column.numeric ? 'end' : 'start'}
+                    whiteSpace="nowrap"
+                  >
                     {column.sortValue ? (
                       <SortButton type="button" onClick={() => toggle(column.key)}>
                         {column.header}
-                        <span aria-hidden="true">{sorted === 'ascending' ? '▲' : sorted === 'descending' ? '▼' : '↕'}</span>
+                        <span aria-hidden="true">
+                          {sorted === 'ascending' ? '▲' : sorted === 'descending' ? '▼' : '↕'}
+                        </span>
                       </SortButton>
                     ) : (
                       column.header
@@ -110,7 +135,11 @@ export function DataTable<T>({ caption, rows, columns, rowKey, emptyTitle, empty
                   bg={key === selectedKey ? 'accent.subtle' : undefined}
                 >
                   {columns.map((column) => (
-                    <Table.Cell key={column.key} textAlign={column.numeric ? 'end' : 'start'} textStyle={column.numeric ? 'figure' : undefined}>
+                    <Table.Cell
+                      key={column.key}
+                      textAlign={column.numeric ? 'end' : 'start'}
+                      textStyle={column.numeric ? 'figure' : undefined}
+                    >
                       {column.cell(row)}
                     </Table.Cell>
                   ))}

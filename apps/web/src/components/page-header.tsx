@@ -1,7 +1,15 @@
 import type { ReactNode } from 'react';
 import { Flex, Heading, HStack, Text } from '@chakra-ui/react';
 
-export function PageHeader({ title, subtitle, children }: { title: string; subtitle?: ReactNode; children?: ReactNode }) {
+export function PageHeader({
+  title,
+  subtitle,
+  children,
+}: {
+  title: string;
+  subtitle?: ReactNode;
+  children?: ReactNode;
+}) {
   return (
     <Flex gap="3" wrap="wrap" align="center" justify="space-between">
       <HStack gap="3" align="baseline" wrap="wrap" minW="0">

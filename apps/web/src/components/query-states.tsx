@@ -14,7 +14,16 @@ export function LoadingState({ label = 'Loading…' }: { label?: string }) {
 
 export function EmptyState({ title, children }: { title: string; children?: ReactNode }) {
   return (
-    <Box data-testid="empty-state" textAlign="center" py="8" px="4" borderWidth="1px" borderStyle="dashed" rounded="card" color="fg.muted">
+    <Box
+      data-testid="empty-state"
+      textAlign="center"
+      py="8"
+      px="4"
+      borderWidth="1px"
+      borderStyle="dashed"
+      rounded="card"
+      color="fg.muted"
+    >
       <Heading as="h3" size="md" color="fg" mb="1">
         {title}
       </Heading>
@@ -23,9 +32,26 @@ export function EmptyState({ title, children }: { title: string; children?: Reac
   );
 }
 
-export function ErrorState({ error, onRetry, title = 'This could not be loaded' }: { error: unknown; onRetry?: () => void; title?: string }) {
+export function ErrorState({
+  error,
+  onRetry,
+  title = 'This could not be loaded',
+}: {
+  error: unknown;
+  onRetry?: () => void;
+  title?: string;
+}) {
   return (
-    <Box role="alert" py="6" px="4" borderWidth="1px" borderColor="nogo.border" bg="nogo.subtle" color="nogo.fg" rounded="card">
+    <Box
+      role="alert"
+      py="6"
+      px="4"
+      borderWidth="1px"
+      borderColor="nogo.border"
+      bg="nogo.subtle"
+      color="nogo.fg"
+      rounded="card"
+    >
       <Heading as="h3" size="md" mb="1">
         {title}
       </Heading>

@@ -20,7 +20,11 @@ interface SelectInputProps {
 export function SelectInput({ value, choices, onChange, disabled, placeholder, ariaLabel, minW }: SelectInputProps) {
   return (
     <NativeSelect.Root disabled={disabled} minW={minW}>
-      <NativeSelect.Field value={value} onChange={(event) => onChange(event.currentTarget.value)} aria-label={ariaLabel}>
+      <NativeSelect.Field
+        value={value}
+        onChange={(event) => onChange(event.currentTarget.value)}
+        aria-label={ariaLabel}
+      >
         {placeholder !== undefined && <option value="">{placeholder}</option>}
         {choices.map((choice) => (
           <option key={choice.value} value={choice.value}>

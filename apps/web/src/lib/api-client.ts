@@ -13,7 +13,12 @@ export interface RequestOptions {
   signal?: AbortSignal;
 }
 
-async function send(path: string, { method = 'GET', body, signal }: RequestOptions, token: string | null, extraHeaders: Record<string, string> = {}) {
+async function send(
+  path: string,
+  { method = 'GET', body, signal }: RequestOptions,
+  token: string | null,
+  extraHeaders: Record<string, string> = {},
+) {
   const headers: Record<string, string> = { Accept: 'application/json', ...extraHeaders };
   const form = body instanceof FormData;
   // The browser writes a multipart body's Content-Type itself, with the boundary.

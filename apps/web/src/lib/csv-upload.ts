@@ -6,7 +6,8 @@ const CSV_FIELD = 'file';
  * browser would send as binary: such a file goes as text/csv, and the server still checks its content.
  */
 export function csvFormData(file: File): FormData {
-  const typed = file.type === '' && /\.csv$/i.test(file.name) ? new File([file], file.name, { type: 'text/csv' }) : file;
+  const typed =
+    file.type === '' && /\.csv$/i.test(file.name) ? new File([file], file.name, { type: 'text/csv' }) : file;
   const form = new FormData();
   form.append(CSV_FIELD, typed);
   return form;

@@ -32,7 +32,14 @@ export function startSession({ user, accessToken, expiresAt }: SessionResponse) 
 }
 
 export function endSession(notice: string | null = null, leftOnPurpose = false) {
-  session.setState({ status: 'signed-out', user: null, accessToken: null, expiresAt: null, endedNotice: notice, leftOnPurpose });
+  session.setState({
+    status: 'signed-out',
+    user: null,
+    accessToken: null,
+    expiresAt: null,
+    endedNotice: notice,
+    leftOnPurpose,
+  });
 }
 
 /** Called whenever the access token changes (sign-in, refresh, sign-out). */

@@ -74,7 +74,10 @@ const catlineConfig = defineConfig({
         accent: semanticPalette('tide'),
         go: semanticPalette('kelp'),
         nogo: semanticPalette('ember'),
-        caution: { ...semanticPalette('flare', ref('hull', '950')), solid: dayNight(ref('flare', '300'), ref('flare', '800')) },
+        caution: {
+          ...semanticPalette('flare', ref('hull', '950')),
+          solid: dayNight(ref('flare', '300'), ref('flare', '800')),
+        },
       },
     },
     textStyles: {

@@ -12,7 +12,13 @@ describe('weather case', () => {
     [3000, 4.9, 'III'], // NAVEDTRA 14342A, table 11-4: below case II minimums is case III
     [999, 5, 'III'], // NAVEDTRA 14342A, table 11-4
   ] as const)('is case %s ft / %s nm by day: %s', (ceiling, visibility, expected) => {
-    expect(weatherCase({ ceiling: ceiling === null ? null : feet(ceiling), visibility: nauticalMiles(visibility), night: false })).toBe(expected);
+    expect(
+      weatherCase({
+        ceiling: ceiling === null ? null : feet(ceiling),
+        visibility: nauticalMiles(visibility),
+        night: false,
+      }),
+    ).toBe(expected);
   });
 
   it('is always case III at night', () => {

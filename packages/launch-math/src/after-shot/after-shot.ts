@@ -25,7 +25,9 @@ export interface DepartureInstruction {
 
 /** The ship's own after-the-shot rules: data entered by the user, not code. */
 export interface ShipProfile {
-  readonly clearingTurns: Readonly<Record<CatapultPosition, { readonly day: ClearingTurn; readonly night: ClearingTurn }>>;
+  readonly clearingTurns: Readonly<
+    Record<CatapultPosition, { readonly day: ClearingTurn; readonly night: ClearingTurn }>
+  >;
   readonly departures: Readonly<Record<WeatherCase, DepartureInstruction>>;
 }
 
@@ -47,5 +49,8 @@ export function afterTheShot(
   ship: ShipProfile,
   launch: { readonly position: CatapultPosition; readonly night: boolean; readonly weatherCase: WeatherCase },
 ): AfterTheShot {
-  return { clearingTurn: clearingTurn(ship, launch.position, launch.night), departure: departureFor(ship, launch.weatherCase) };
+  return {
+    clearingTurn: clearingTurn(ship, launch.position, launch.night),
+    departure: departureFor(ship, launch.weatherCase),
+  };
 }

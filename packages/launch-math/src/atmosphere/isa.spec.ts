@@ -1,6 +1,13 @@
 import { LaunchMathInputError } from '../errors.js';
 import { celsius, celsiusToKelvin, kelvin, kilogramsPerCubicMetre, knots, metres, pascals } from '../units/units.js';
-import { airDensity, densityRatio, hotDayMinimumLaunchAirspeed, isaSpeedOfSound, isaTroposphere, speedOfSound } from './isa.js';
+import {
+  airDensity,
+  densityRatio,
+  hotDayMinimumLaunchAirspeed,
+  isaSpeedOfSound,
+  isaTroposphere,
+  speedOfSound,
+} from './isa.js';
 
 describe('ISA air density', () => {
   it('is 1.225 kg/m3 at 15 C and 101325 Pa', () => {

@@ -52,7 +52,9 @@ export function isaTroposphere(altitude: Metres): {
   readonly density: KilogramsPerCubicMetre;
 } {
   if (!(altitude >= 0 && altitude <= TROPOPAUSE_ALTITUDE)) {
-    throw new LaunchMathInputError(`Altitude must be within the troposphere (0 to ${TROPOPAUSE_ALTITUDE} m), got ${altitude}`);
+    throw new LaunchMathInputError(
+      `Altitude must be within the troposphere (0 to ${TROPOPAUSE_ALTITUDE} m), got ${altitude}`,
+    );
   }
   const temperature = kelvin(ISA_SEA_LEVEL.temperature - TROPOSPHERE_LAPSE_RATE * altitude);
   const exponent = STANDARD_GRAVITY / (DRY_AIR_GAS_CONSTANT * TROPOSPHERE_LAPSE_RATE);
@@ -67,7 +69,8 @@ export function speedOfSound(temperature: Kelvin): MetresPerSecond {
 }
 
 /** Speed of sound (m/s) in the ISA troposphere at a geopotential altitude from 0 to 11,000 m. */
-export const isaSpeedOfSound = (altitude: Metres): MetresPerSecond => speedOfSound(isaTroposphere(altitude).temperature);
+export const isaSpeedOfSound = (altitude: Metres): MetresPerSecond =>
+  speedOfSound(isaTroposphere(altitude).temperature);
 
 /**
  * Hot-day correction of a minimum launch airspeed: the launch data gives an equivalent airspeed;

@@ -36,7 +36,10 @@ describe('catapult end speed', () => {
 
   it('needs no catapult when thrust alone gives the end speed', () => {
     // Work-energy theorem (Halliday, Resnick & Walker, ch. 7) with the chapter 5 jet: v = sqrt(2 T s / m).
-    expect(endSpeed({ ...jet, catapultEnergy: joules(0) })).toBeCloseTo(evaluate('sqrt(2 * 107 kN * 90 m / 23600 kg)').toNumber('m/s'), 9); // mathjs units
+    expect(endSpeed({ ...jet, catapultEnergy: joules(0) })).toBeCloseTo(
+      evaluate('sqrt(2 * 107 kN * 90 m / 23600 kg)').toNumber('m/s'),
+      9,
+    ); // mathjs units
     expect(endSpeed({ ...jet, catapultEnergy: joules(0) })).toBeCloseTo(28.57, 2); // by hand: sqrt(19,260,000 / 23,600) = sqrt(816.1) = 28.57 m/s
   });
 
@@ -57,7 +60,12 @@ describe('catapult end speed', () => {
         fc.double({ min: 0, max: 2e5, noNaN: true }),
         (mass, extra, setting, thrust) => {
           const at = (kg: number): number =>
-            endSpeed({ catapultEnergy: catapultEnergyAtSetting(catapult, setting), thrust: newtons(thrust), stroke: catapult.strokeLength, mass: kilograms(kg) });
+            endSpeed({
+              catapultEnergy: catapultEnergyAtSetting(catapult, setting),
+              thrust: newtons(thrust),
+              stroke: catapult.strokeLength,
+              mass: kilograms(kg),
+            });
           expect(at(mass + extra)).toBeLessThanOrEqual(at(mass));
         },
       ),
@@ -75,12 +83,16 @@ describe('mean acceleration from stroke length and stroke time', () => {
 
   it('agrees with the acceleration from the end speed when the stroke time is 2 s / v', () => {
     fc.assert(
-      fc.property(fc.double({ min: 10, max: 120, noNaN: true }), fc.double({ min: 50, max: 110, noNaN: true }), (stroke, speed) => {
-        const time = seconds((2 * stroke) / speed); // constant acceleration from rest: mean speed v / 2 (Halliday, Resnick & Walker, ch. 2)
-        const fromTime = meanStrokeAccelerationFromTime(metres(stroke), time);
-        expect(fromTime / meanStrokeAcceleration(metresPerSecond(speed), metres(stroke))).toBeCloseTo(1, 12);
-        expect(endSpeedFromStrokeTime(metres(stroke), time) / speed).toBeCloseTo(1, 12);
-      }),
+      fc.property(
+        fc.double({ min: 10, max: 120, noNaN: true }),
+        fc.double({ min: 50, max: 110, noNaN: true }),
+        (stroke, speed) => {
+          const time = seconds((2 * stroke) / speed); // constant acceleration from rest: mean speed v / 2 (Halliday, Resnick & Walker, ch. 2)
+          const fromTime = meanStrokeAccelerationFromTime(metres(stroke), time);
+          expect(fromTime / meanStrokeAcceleration(metresPerSecond(speed), metres(stroke))).toBeCloseTo(1, 12);
+          expect(endSpeedFromStrokeTime(metres(stroke), time) / speed).toBeCloseTo(1, 12);
+        },
+      ),
     );
   });
 
@@ -92,37 +104,66 @@ describe('mean acceleration from stroke length and stroke time', () => {
 
 describe('lowest setting for an end speed', () => {
   const speedAt = (setting: number, mass: number): number =>
-    endSpeed({ catapultEnergy: catapultEnergyAtSetting(catapult, setting), thrust: jet.thrust, stroke: catapult.strokeLength, mass: kilograms(mass) });
+    endSpeed({
+      catapultEnergy: catapultEnergyAtSetting(catapult, setting),
+      thrust: jet.thrust,
+      stroke: catapult.strokeLength,
+      mass: kilograms(mass),
+    });
 
   it('finds the lowest setting that reaches the wanted end speed', () => {
     fc.assert(
-      fc.property(fc.double({ min: 1e4, max: 3e4, noNaN: true }), fc.double({ min: 40, max: 90, noNaN: true }), (mass, wanted) => {
-        const found = lowestSettingForEndSpeed({ catapult, thrust: jet.thrust, mass: kilograms(mass), wanted: metresPerSecond(wanted) });
-        if (found.kind === 'out_of_range') {
-          expect(speedAt(80, mass)).toBeLessThan(wanted);
-          return;
-        }
-        expect(found.endSpeed).toBeGreaterThanOrEqual(wanted);
-        expect(found.endSpeed).toBe(speedAt(found.setting, mass));
-        if (found.setting > 0) expect(speedAt(found.setting - 1, mass)).toBeLessThan(wanted);
-      }),
+      fc.property(
+        fc.double({ min: 1e4, max: 3e4, noNaN: true }),
+        fc.double({ min: 40, max: 90, noNaN: true }),
+        (mass, wanted) => {
+          const found = lowestSettingForEndSpeed({
+            catapult,
+            thrust: jet.thrust,
+            mass: kilograms(mass),
+            wanted: metresPerSecond(wanted),
+          });
+          if (found.kind === 'out_of_range') {
+            expect(speedAt(80, mass)).toBeLessThan(wanted);
+            return;
+          }
+          expect(found.endSpeed).toBeGreaterThanOrEqual(wanted);
+          expect(found.endSpeed).toBe(speedAt(found.setting, mass));
+          if (found.setting > 0) expect(speedAt(found.setting - 1, mass)).toBeLessThan(wanted);
+        },
+      ),
     );
   });
 
   it('says out of range, with the best it can do, when the highest setting falls short', () => {
-    const found = lowestSettingForEndSpeed({ catapult, thrust: jet.thrust, mass: kilograms(3e4), wanted: metresPerSecond(100) });
+    const found = lowestSettingForEndSpeed({
+      catapult,
+      thrust: jet.thrust,
+      mass: kilograms(3e4),
+      wanted: metresPerSecond(100),
+    });
     expect(found).toEqual({ kind: 'out_of_range', maxEndSpeed: speedAt(80, 3e4) });
   });
 
   it('returns setting 0 when even the lowest energy is enough', () => {
-    const found = lowestSettingForEndSpeed({ catapult, thrust: jet.thrust, mass: kilograms(1e4), wanted: metresPerSecond(10) });
+    const found = lowestSettingForEndSpeed({
+      catapult,
+      thrust: jet.thrust,
+      mass: kilograms(1e4),
+      wanted: metresPerSecond(10),
+    });
     expect(found.kind === 'setting' && found.setting).toBe(0);
   });
 
   it('refuses a catapult whose range runs backwards', () => {
     const backwards = { ...catapult, energyAtMaxSetting: joules(5e6) };
-    expect(() => lowestSettingForEndSpeed({ catapult: backwards, thrust: jet.thrust, mass: kilograms(1e4), wanted: metresPerSecond(60) })).toThrow(
-      LaunchMathInputError,
-    );
+    expect(() =>
+      lowestSettingForEndSpeed({
+        catapult: backwards,
+        thrust: jet.thrust,
+        mass: kilograms(1e4),
+        wanted: metresPerSecond(60),
+      }),
+    ).toThrow(LaunchMathInputError);
   });
 });

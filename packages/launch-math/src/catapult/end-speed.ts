@@ -54,7 +54,9 @@ function requireEnergyProfile(catapult: CatapultEnergyProfile): void {
     throw new LaunchMathInputError('Catapult energy at the highest setting must be above its energy at setting 0');
   }
   if (!Number.isInteger(catapult.maxSetting) || catapult.maxSetting < 1) {
-    throw new LaunchMathInputError(`Catapult highest setting must be a whole number of at least 1, got ${catapult.maxSetting}`);
+    throw new LaunchMathInputError(
+      `Catapult highest setting must be a whole number of at least 1, got ${catapult.maxSetting}`,
+    );
   }
 }
 
@@ -68,7 +70,9 @@ function requireStroke({ thrust, stroke, mass }: StrokeInput): void {
 export function catapultEnergyAtSetting(catapult: CatapultEnergyProfile, setting: number): Joules {
   requireEnergyProfile(catapult);
   if (!Number.isInteger(setting) || setting < 0 || setting > catapult.maxSetting) {
-    throw new LaunchMathInputError(`Catapult setting must be a whole number from 0 to ${catapult.maxSetting}, got ${setting}`);
+    throw new LaunchMathInputError(
+      `Catapult setting must be a whole number from 0 to ${catapult.maxSetting}, got ${setting}`,
+    );
   }
   const span = catapult.energyAtMaxSetting - catapult.energyAtMinSetting;
   return joules(catapult.energyAtMinSetting + (span * setting) / catapult.maxSetting);
@@ -129,7 +133,12 @@ export function lowestSettingForEndSpeed(input: {
   const { catapult, thrust, mass, wanted } = input;
   requireEnergyProfile(catapult);
   const speedAt = (setting: number): MetresPerSecond =>
-    endSpeed({ catapultEnergy: catapultEnergyAtSetting(catapult, setting), thrust, stroke: catapult.strokeLength, mass });
+    endSpeed({
+      catapultEnergy: catapultEnergyAtSetting(catapult, setting),
+      thrust,
+      stroke: catapult.strokeLength,
+      mass,
+    });
   const maxEndSpeed = speedAt(catapult.maxSetting);
   if (maxEndSpeed < wanted) return { kind: 'out_of_range', maxEndSpeed };
 

@@ -23,7 +23,23 @@ describe('table interpolation', () => {
 
   it('refuses an empty or unordered table', () => {
     expect(() => interpolateInTable([], 1)).toThrow(LaunchMathInputError);
-    expect(() => interpolateInTable([[2, 1], [1, 2]], 1.5)).toThrow(LaunchMathInputError);
-    expect(() => interpolateInTable([[1, 1], [1, 2]], 1)).toThrow(LaunchMathInputError);
+    expect(() =>
+      interpolateInTable(
+        [
+          [2, 1],
+          [1, 2],
+        ],
+        1.5,
+      ),
+    ).toThrow(LaunchMathInputError);
+    expect(() =>
+      interpolateInTable(
+        [
+          [1, 1],
+          [1, 2],
+        ],
+        1,
+      ),
+    ).toThrow(LaunchMathInputError);
   });
 });

@@ -13,8 +13,10 @@ export function interpolateInTable(points: readonly (readonly [number, number])[
   if (points.length === 0) throw new LaunchMathInputError('The table has no rows');
   for (let i = 0; i < points.length; i += 1) {
     const [px, py] = points[i];
-    if (!Number.isFinite(px) || !Number.isFinite(py)) throw new LaunchMathInputError('The table holds a value that is not a number');
-    if (i > 0 && !(px > points[i - 1][0])) throw new LaunchMathInputError('Table rows must be in strictly ascending order');
+    if (!Number.isFinite(px) || !Number.isFinite(py))
+      throw new LaunchMathInputError('The table holds a value that is not a number');
+    if (i > 0 && !(px > points[i - 1][0]))
+      throw new LaunchMathInputError('Table rows must be in strictly ascending order');
   }
   const lowest = points[0][0];
   const highest = points[points.length - 1][0];

@@ -13,7 +13,11 @@ export type MinimumLaunchAirspeed =
  * The type's minimum launch airspeed (knots) at a gross weight (lb) by linear interpolation in its
  * table, corrected to true airspeed for the density ratio; never extrapolated.
  */
-export function minimumLaunchAirspeed(aircraft: AircraftProfile, grossWeight: Pounds, densityRatio = 1): MinimumLaunchAirspeed {
+export function minimumLaunchAirspeed(
+  aircraft: AircraftProfile,
+  grossWeight: Pounds,
+  densityRatio = 1,
+): MinimumLaunchAirspeed {
   requirePositive(grossWeight, 'Gross weight (lb)');
   const table = aircraft.minimumLaunchAirspeed.map((point) => [point.grossWeight, point.airspeed] as const);
   const found = interpolateInTable(table, grossWeight);

@@ -22,11 +22,20 @@ describe('launch settings in trade units', () => {
 
   it('find the setting back from its own end speed', () => {
     const wanted = launchEndSpeed({ aircraft: textbookJet, catapult: textbookCatapult, setting: 1, grossWeight });
-    expect(lowestLaunchSetting({ aircraft: textbookJet, catapult: textbookCatapult, grossWeight, wanted: knots(wanted - 1e-9) })).toEqual({
+    expect(
+      lowestLaunchSetting({
+        aircraft: textbookJet,
+        catapult: textbookCatapult,
+        grossWeight,
+        wanted: knots(wanted - 1e-9),
+      }),
+    ).toEqual({
       kind: 'setting',
       setting: 1,
       endSpeed: wanted,
     });
-    expect(lowestLaunchSetting({ aircraft: textbookJet, catapult: textbookCatapult, grossWeight, wanted: knots(400) }).kind).toBe('out_of_range');
+    expect(
+      lowestLaunchSetting({ aircraft: textbookJet, catapult: textbookCatapult, grossWeight, wanted: knots(400) }).kind,
+    ).toBe('out_of_range');
   });
 });

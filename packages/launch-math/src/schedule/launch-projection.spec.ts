@@ -1,6 +1,12 @@
 import fc from 'fast-check';
 import { LaunchMathInputError } from '../errors.js';
-import { at, CYCLE_START, fourCatapults, projectionInputArbitrary, scheduleViolations } from '../testing/cycles.fixture.js';
+import {
+  at,
+  CYCLE_START,
+  fourCatapults,
+  projectionInputArbitrary,
+  scheduleViolations,
+} from '../testing/cycles.fixture.js';
 import { seconds } from '../units/units.js';
 import { projectLaunchTimes, type ProjectionInput } from './launch-projection.js';
 
@@ -31,20 +37,32 @@ describe('projected launch times', () => {
   // catapults each busy 105 s per launch give 105 / 4 = 26.25 s per launch over a long run (the source
   // rounds it to "about one plane every 30 seconds"). The pair gap of 10 s is common practice, no source.
   it('sustain one launch every 26.25 s from four catapults each launching every 1 min 45 s', () => {
-    const lanes = Object.fromEntries([1, 2, 3, 4].map((n) => [`cat${n}`, Array.from({ length: 30 }, (_, i) => `c${n}-${i}`)]));
-    const projection = projectLaunchTimes(base({ catapults: fourCatapults(105), pairMinimumGap: seconds(10), lanes, window: { start: CYCLE_START, end: at(7200) } }));
+    const lanes = Object.fromEntries(
+      [1, 2, 3, 4].map((n) => [`cat${n}`, Array.from({ length: 30 }, (_, i) => `c${n}-${i}`)]),
+    );
+    const projection = projectLaunchTimes(
+      base({
+        catapults: fourCatapults(105),
+        pairMinimumGap: seconds(10),
+        lanes,
+        window: { start: CYCLE_START, end: at(7200) },
+      }),
+    );
     const times = projection.slots.map((slot) => (slot.time - CYCLE_START) / 1000);
     // 120 launches: each catapult's last launch at 29 x 105 = 3,045 s; one more reset ends its run at 3,150 s.
     expect(Math.max(...times) + 105).toBe(3150 + 10); // by hand: the second of each pair runs 10 s behind the first
     expect((Math.max(...times) + 105 - 10) / times.length).toBe(26.25); // by hand: 3,150 s / 120 launches
     // The pair gap, not the input interval, is what this checks: the second catapult of a pair always
     // fires 10 s after the first, never with it.
-    const of = (catapult: string) => projection.slots.filter((slot) => slot.catapultId === catapult).map((slot) => (slot.time - CYCLE_START) / 1000);
+    const of = (catapult: string) =>
+      projection.slots.filter((slot) => slot.catapultId === catapult).map((slot) => (slot.time - CYCLE_START) / 1000);
     expect(of('cat2').map((time, i) => time - of('cat1')[i])).toEqual(Array(30).fill(10));
   });
 
   it('list the slots that miss the window and the last launch', () => {
-    const projection = projectLaunchTimes(base({ window: { start: CYCLE_START, end: at(100) }, lanes: { cat1: ['a', 'b', 'c'] } }));
+    const projection = projectLaunchTimes(
+      base({ window: { start: CYCLE_START, end: at(100) }, lanes: { cat1: ['a', 'b', 'c'] } }),
+    );
     expect(projection.missingWindow).toEqual(['c']);
     expect(projection.lastLaunch).toBe(at(120));
     expect(projection.slots.map((slot) => slot.missesWindow)).toEqual([false, false, true]);
@@ -56,7 +74,11 @@ describe('projected launch times', () => {
 
   it('cannot schedule slots on a catapult that is down or on the waist while the landing area is in use', () => {
     const projection = projectLaunchTimes(
-      base({ catapults: fourCatapults(60, [false, true, true, true]), landingAreaInUse: true, lanes: { cat1: ['a'], cat2: ['b'], cat3: ['c'] } }),
+      base({
+        catapults: fourCatapults(60, [false, true, true, true]),
+        landingAreaInUse: true,
+        lanes: { cat1: ['a'], cat2: ['b'], cat3: ['c'] },
+      }),
     );
     expect(projection.slots.map((slot) => slot.slotId)).toEqual(['b']);
     expect(projection.unschedulable).toEqual([
@@ -74,18 +96,27 @@ describe('projected launch times', () => {
   });
 
   it('project nothing before now or before an aircraft reaches its catapult', () => {
-    expect(timesOf(base({ now: at(30), lanes: { cat1: ['a'], cat3: ['b'] }, notBefore: { b: at(200) } }))).toEqual({ a: 30, b: 200 });
+    expect(timesOf(base({ now: at(30), lanes: { cat1: ['a'], cat3: ['b'] }, notBefore: { b: at(200) } }))).toEqual({
+      a: 30,
+      b: 200,
+    });
   });
 
   it('hold lower priorities until every higher priority has launched', () => {
     const times = timesOf(
-      base({ lanes: { cat1: ['tanker'], cat3: ['fighter', 'spare'] }, notBefore: { tanker: at(90) }, priorities: { tanker: 'first', spare: 'last' } }),
+      base({
+        lanes: { cat1: ['tanker'], cat3: ['fighter', 'spare'] },
+        notBefore: { tanker: at(90) },
+        priorities: { tanker: 'first', spare: 'last' },
+      }),
     );
     expect(times).toEqual({ tanker: 90, fighter: 90, spare: 150 });
   });
 
   it('lets nothing overtake what is ahead of it in its lane', () => {
-    const times = timesOf(base({ lanes: { cat1: ['spare', 'tanker'], cat3: ['fighter'] }, priorities: { tanker: 'first', spare: 'last' } }));
+    const times = timesOf(
+      base({ lanes: { cat1: ['spare', 'tanker'], cat3: ['fighter'] }, priorities: { tanker: 'first', spare: 'last' } }),
+    );
     expect(times).toEqual({ fighter: 0, spare: 0, tanker: 60 });
   });
 

@@ -101,7 +101,9 @@ export function orderedCatapults(catapults: readonly LaunchCatapult[]): LaunchCa
 }
 
 /** The earliest any launch may happen: cycle start, window start and now, whichever is latest. */
-export function earliestLaunch(input: Pick<ProjectionInput, 'cycleStart' | 'window' | 'now' | 'pairMinimumGap'>): number {
+export function earliestLaunch(
+  input: Pick<ProjectionInput, 'cycleStart' | 'window' | 'now' | 'pairMinimumGap'>,
+): number {
   requireFinite(input.cycleStart, 'Cycle start');
   requireFinite(input.window.start, 'Window start');
   requireFinite(input.window.end, 'Window end');
@@ -161,7 +163,10 @@ export function projectLaunchTimes(input: ProjectionInput): Projection {
   const times = scheduleLaunches({
     earliest,
     pairGapMs: secondsToMilliseconds(input.pairMinimumGap),
-    catapults: catapults.map((catapult) => ({ resetMs: secondsToMilliseconds(catapult.resetInterval), group: catapult.pairId })),
+    catapults: catapults.map((catapult) => ({
+      resetMs: secondsToMilliseconds(catapult.resetInterval),
+      group: catapult.pairId,
+    })),
     lanes: pendingLanes,
     notBefore,
     tier: slotIds.map((slotId) => priorityTier(input.priorities?.[slotId])),

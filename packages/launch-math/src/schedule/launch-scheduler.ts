@@ -91,7 +91,7 @@ export function scheduleLaunches(problem: SchedulerProblem): Float64Array {
 
   const clearOfPartners = (catapult: number, start: number): number => {
     let time = start;
-    for (let moved = true; moved; ) {
+    for (let moved = true; moved;) {
       moved = false;
       for (let partner = 0; partner < count; partner += 1) {
         if (partner === catapult || catapults[partner].group !== catapults[catapult].group) continue;
@@ -108,7 +108,8 @@ export function scheduleLaunches(problem: SchedulerProblem): Float64Array {
   const candidate = new Float64Array(count);
   for (let phase = 0; phase <= lastPhase; phase += 1) {
     let hold = Number.NEGATIVE_INFINITY;
-    for (let earlier = 0; earlier < phase; earlier += 1) hold = Math.max(hold, latestOfTier[earlier] ?? Number.NEGATIVE_INFINITY);
+    for (let earlier = 0; earlier < phase; earlier += 1)
+      hold = Math.max(hold, latestOfTier[earlier] ?? Number.NEGATIVE_INFINITY);
     const start = Math.max(problem.earliest, hold);
     candidate.fill(Number.NaN);
     for (;;) {

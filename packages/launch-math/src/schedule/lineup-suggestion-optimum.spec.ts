@@ -22,21 +22,30 @@ interface PlainCycle {
  */
 function plainLastLaunch(cycle: PlainCycle, lanes: readonly (readonly number[])[]): number {
   const launches: { catapult: number; time: number; tier: number }[] = [];
-  const effective = lanes.map((lane) => lane.map((_, place) => Math.max(...lane.slice(0, place + 1).map((aircraft) => cycle.tier[aircraft]))));
+  const effective = lanes.map((lane) =>
+    lane.map((_, place) => Math.max(...lane.slice(0, place + 1).map((aircraft) => cycle.tier[aircraft]))),
+  );
   const head = lanes.map(() => 0);
   let last = cycle.earliest;
   for (;;) {
     const waiting = lanes.flatMap((lane, catapult) => (head[catapult] < lane.length ? [catapult] : []));
     if (waiting.length === 0) return last;
     const phase = Math.min(...waiting.map((catapult) => effective[catapult][head[catapult]]));
-    const hold = Math.max(cycle.earliest, ...launches.filter((launch) => launch.tier < phase).map((launch) => launch.time));
+    const hold = Math.max(
+      cycle.earliest,
+      ...launches.filter((launch) => launch.tier < phase).map((launch) => launch.time),
+    );
     let chosen = { catapult: -1, time: Infinity };
     for (const catapult of waiting) {
       if (effective[catapult][head[catapult]] !== phase) continue;
-      const own = launches.filter((launch) => launch.catapult === catapult).map((launch) => launch.time + cycle.resetMs[catapult]);
+      const own = launches
+        .filter((launch) => launch.catapult === catapult)
+        .map((launch) => launch.time + cycle.resetMs[catapult]);
       let time = Math.max(hold, cycle.arrival[lanes[catapult][head[catapult]]][catapult], ...own);
-      const partners = launches.filter((launch) => launch.catapult !== catapult && cycle.pair[launch.catapult] === cycle.pair[catapult]);
-      for (let clash = partners.find((launch) => Math.abs(launch.time - time) < cycle.pairGapMs); clash; ) {
+      const partners = launches.filter(
+        (launch) => launch.catapult !== catapult && cycle.pair[launch.catapult] === cycle.pair[catapult],
+      );
+      for (let clash = partners.find((launch) => Math.abs(launch.time - time) < cycle.pairGapMs); clash;) {
         time = clash.time + cycle.pairGapMs;
         clash = partners.find((launch) => Math.abs(launch.time - time) < cycle.pairGapMs);
       }
@@ -80,8 +89,13 @@ function optimumLastLaunch(input: SuggestionInput, upperBound: number): number {
 
   // A lane's last launch is no earlier than its aircraft sorted by arrival, each one reset apart.
   const laneBound = (lane: readonly number[], catapult: number): number => {
-    const arrivals = lane.map((aircraft) => Math.max(cycle.earliest, cycle.arrival[aircraft][catapult])).sort((a, b) => a - b);
-    return Math.max(cycle.earliest, ...arrivals.map((time, j) => time + (arrivals.length - 1 - j) * cycle.resetMs[catapult]));
+    const arrivals = lane
+      .map((aircraft) => Math.max(cycle.earliest, cycle.arrival[aircraft][catapult]))
+      .sort((a, b) => a - b);
+    return Math.max(
+      cycle.earliest,
+      ...arrivals.map((time, j) => time + (arrivals.length - 1 - j) * cycle.resetMs[catapult]),
+    );
   };
 
   // With the aircraft still to place, each lane's last launch is also no earlier than its count of
@@ -122,25 +136,37 @@ function optimumLastLaunch(input: SuggestionInput, upperBound: number): number {
 }
 
 const permutations = <T>(items: readonly T[]): T[][] =>
-  items.length <= 1 ? [[...items]] : items.flatMap((item, index) => permutations(items.filter((_, other) => other !== index)).map((rest) => [item, ...rest]));
+  items.length <= 1
+    ? [[...items]]
+    : items.flatMap((item, index) =>
+        permutations(items.filter((_, other) => other !== index)).map((rest) => [item, ...rest]),
+      );
 
 /** The same optimum the plain way: every assignment, every order, through the public projection, no bound. */
 function plainOptimumLastLaunch(input: SuggestionInput): number {
-  const open = input.catapults.filter((catapult) => catapult.up && !(input.landingAreaInUse && catapult.position === 'waist'));
-  const reachable = input.aircraft.filter((aircraft) => open.some((catapult) => input.taxiTimes[aircraft.id]?.[catapult.id] !== undefined));
+  const open = input.catapults.filter(
+    (catapult) => catapult.up && !(input.landingAreaInUse && catapult.position === 'waist'),
+  );
+  const reachable = input.aircraft.filter((aircraft) =>
+    open.some((catapult) => input.taxiTimes[aircraft.id]?.[catapult.id] !== undefined),
+  );
   const tierOf = new Map(input.aircraft.map((aircraft) => [aircraft.id, priorityTier(aircraft.priority)]));
   let best = Infinity;
   const assign = (index: number, lanes: Record<string, string[]>): void => {
     if (index === reachable.length) {
       const orders = Object.entries(lanes).map(([catapultId, lane]) =>
         permutations(lane)
-          .filter((order) => order.every((id, place) => place === 0 || (tierOf.get(order[place - 1]) ?? 1) <= (tierOf.get(id) ?? 1)))
+          .filter((order) =>
+            order.every((id, place) => place === 0 || (tierOf.get(order[place - 1]) ?? 1) <= (tierOf.get(id) ?? 1)),
+          )
           .map((order) => [catapultId, order] as const),
       );
       const combine = (lane: number, chosen: Record<string, string[]>): void => {
         if (lane === orders.length) {
           const notBefore = Object.fromEntries(
-            Object.entries(chosen).flatMap(([catapultId, order]) => order.map((id) => [id, epochMs(input.cycleStart + (input.taxiTimes[id]?.[catapultId] ?? 0) * 1000)])),
+            Object.entries(chosen).flatMap(([catapultId, order]) =>
+              order.map((id) => [id, epochMs(input.cycleStart + (input.taxiTimes[id]?.[catapultId] ?? 0) * 1000)]),
+            ),
           );
           const priorities = Object.fromEntries(input.aircraft.map((aircraft) => [aircraft.id, aircraft.priority]));
           const projection = projectLaunchTimes({ ...input, lanes: chosen, notBefore, priorities });
@@ -177,24 +203,30 @@ describe('suggested lineup against the exhaustive optimum', () => {
   it.each([
     { cycles: 200, minAircraft: 1, maxAircraft: 8 },
     { cycles: 10, minAircraft: 10, maxAircraft: 10 },
-  ])('finishes within 5% of the optimum on $cycles random cycles of $minAircraft to $maxAircraft aircraft and breaks no rule', ({ cycles, minAircraft, maxAircraft }) => {
-    const gaps: number[] = [];
-    fc.assert(
-      fc.property(suggestionInputArbitrary(maxAircraft, minAircraft), (input) => {
-        const suggestion = suggestLineup(input);
-        expect(suggestionViolations(input, suggestion)).toEqual([]);
-        const suggested = suggestion.projection.lastLaunch ?? input.cycleStart;
-        const optimum = optimumLastLaunch(input, suggested + 1);
-        expect(optimum).toBeLessThanOrEqual(suggested);
-        const gap = optimum === input.cycleStart ? 0 : (suggested - optimum) / (optimum - input.cycleStart);
-        gaps.push(gap);
-        expect(gap).toBeLessThanOrEqual(0.05);
-      }),
-      { numRuns: cycles },
-    );
-    const worst = Math.max(...gaps);
-    const optimal = gaps.filter((gap) => gap === 0).length;
-    console.info(`Suggested lineup vs optimum over ${gaps.length} cycles of ${minAircraft}-${maxAircraft} aircraft (fast-check seed ${process.env.FC_SEED ?? 'of this run'}): worst gap ${(worst * 100).toFixed(2)}%, optimal in ${optimal}`);
-    expect(gaps).toHaveLength(cycles);
-  }, 600_000);
+  ])(
+    'finishes within 5% of the optimum on $cycles random cycles of $minAircraft to $maxAircraft aircraft and breaks no rule',
+    ({ cycles, minAircraft, maxAircraft }) => {
+      const gaps: number[] = [];
+      fc.assert(
+        fc.property(suggestionInputArbitrary(maxAircraft, minAircraft), (input) => {
+          const suggestion = suggestLineup(input);
+          expect(suggestionViolations(input, suggestion)).toEqual([]);
+          const suggested = suggestion.projection.lastLaunch ?? input.cycleStart;
+          const optimum = optimumLastLaunch(input, suggested + 1);
+          expect(optimum).toBeLessThanOrEqual(suggested);
+          const gap = optimum === input.cycleStart ? 0 : (suggested - optimum) / (optimum - input.cycleStart);
+          gaps.push(gap);
+          expect(gap).toBeLessThanOrEqual(0.05);
+        }),
+        { numRuns: cycles },
+      );
+      const worst = Math.max(...gaps);
+      const optimal = gaps.filter((gap) => gap === 0).length;
+      console.info(
+        `Suggested lineup vs optimum over ${gaps.length} cycles of ${minAircraft}-${maxAircraft} aircraft (fast-check seed ${process.env.FC_SEED ?? 'of this run'}): worst gap ${(worst * 100).toFixed(2)}%, optimal in ${optimal}`,
+      );
+      expect(gaps).toHaveLength(cycles);
+    },
+    600_000,
+  );
 });

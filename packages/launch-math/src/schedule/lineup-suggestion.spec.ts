@@ -1,6 +1,12 @@
 import fc from 'fast-check';
 import { LaunchMathInputError } from '../errors.js';
-import { at, CYCLE_START, fourCatapults, suggestionInputArbitrary, suggestionViolations } from '../testing/cycles.fixture.js';
+import {
+  at,
+  CYCLE_START,
+  fourCatapults,
+  suggestionInputArbitrary,
+  suggestionViolations,
+} from '../testing/cycles.fixture.js';
 import { seconds } from '../units/units.js';
 import { projectLaunchTimes } from './launch-projection.js';
 import { priorityForRole, suggestLineup, type SuggestionInput } from './lineup-suggestion.js';
@@ -20,7 +26,12 @@ const cycle = (overrides: Partial<SuggestionInput> = {}): SuggestionInput => ({
 
 describe('suggested lineup', () => {
   it('maps tankers and early warning to first and spares to last', () => {
-    expect(['tanker', 'early_warning', 'mission', 'spare'].map((role) => priorityForRole(role as never))).toEqual(['first', 'first', 'normal', 'last']);
+    expect(['tanker', 'early_warning', 'mission', 'spare'].map((role) => priorityForRole(role as never))).toEqual([
+      'first',
+      'first',
+      'normal',
+      'last',
+    ]);
   });
 
   it('spreads aircraft over the open catapults and sends each to the one it reaches first', () => {
@@ -30,7 +41,10 @@ describe('suggested lineup', () => {
         { id: 'near1', priority: 'normal' },
         { id: 'near2', priority: 'normal' },
       ],
-      taxiTimes: { near1: { cat1: seconds(30), cat2: seconds(300), cat3: seconds(10) }, near2: { cat1: seconds(300), cat2: seconds(30) } },
+      taxiTimes: {
+        near1: { cat1: seconds(30), cat2: seconds(300), cat3: seconds(10) },
+        near2: { cat1: seconds(300), cat2: seconds(30) },
+      },
     });
     const suggestion = suggestLineup(input);
     expect(suggestion.lanes).toEqual({ cat1: ['near1'], cat2: ['near2'], cat3: [], cat4: [] });
@@ -68,7 +82,12 @@ describe('suggested lineup', () => {
     fc.assert(
       fc.property(suggestionInputArbitrary(10), (input) => {
         const suggestion = suggestLineup(input);
-        const again = projectLaunchTimes({ ...input, lanes: suggestion.lanes, notBefore: suggestion.notBefore, priorities: suggestion.priorities });
+        const again = projectLaunchTimes({
+          ...input,
+          lanes: suggestion.lanes,
+          notBefore: suggestion.notBefore,
+          priorities: suggestion.priorities,
+        });
         expect(again).toEqual(suggestion.projection);
         expect(suggestionViolations(input, suggestion)).toEqual([]);
       }),
@@ -77,9 +96,18 @@ describe('suggested lineup', () => {
   });
 
   it('refuses the same aircraft twice or a negative taxi time', () => {
-    expect(() => suggestLineup(cycle({ aircraft: [{ id: 'a', priority: 'normal' }, { id: 'a', priority: 'normal' }] }))).toThrow(LaunchMathInputError);
-    expect(() => suggestLineup(cycle({ aircraft: [{ id: 'a', priority: 'normal' }], taxiTimes: { a: { cat1: seconds(-5) } } }))).toThrow(
-      LaunchMathInputError,
-    );
+    expect(() =>
+      suggestLineup(
+        cycle({
+          aircraft: [
+            { id: 'a', priority: 'normal' },
+            { id: 'a', priority: 'normal' },
+          ],
+        }),
+      ),
+    ).toThrow(LaunchMathInputError);
+    expect(() =>
+      suggestLineup(cycle({ aircraft: [{ id: 'a', priority: 'normal' }], taxiTimes: { a: { cat1: seconds(-5) } } })),
+    ).toThrow(LaunchMathInputError);
   });
 });

@@ -95,7 +95,9 @@ const KICK_SEED = 0x5eed;
 function evaluate(space: SearchSpace, lanes: Lanes): Score {
   space.evaluations.count += 1;
   const notBefore = new Float64Array(space.tier.length);
-  lanes.forEach((lane, catapult) => lane.forEach((aircraft) => (notBefore[aircraft] = space.arrival[aircraft][catapult])));
+  lanes.forEach((lane, catapult) =>
+    lane.forEach((aircraft) => (notBefore[aircraft] = space.arrival[aircraft][catapult])),
+  );
   const times = scheduleLaunches({
     earliest: space.earliest,
     pairGapMs: space.pairGapMs,
@@ -117,7 +119,8 @@ function evaluate(space: SearchSpace, lanes: Lanes): Score {
 }
 
 const fitsAt = (space: SearchSpace, lane: readonly number[], position: number, tier: number): boolean =>
-  (position === 0 || space.tier[lane[position - 1]] <= tier) && (position === lane.length || space.tier[lane[position]] >= tier);
+  (position === 0 || space.tier[lane[position - 1]] <= tier) &&
+  (position === lane.length || space.tier[lane[position]] >= tier);
 
 const inOrderAround = (space: SearchSpace, lane: readonly number[], position: number): boolean =>
   fitsAt(space, lane.slice(0, position).concat(lane.slice(position + 1)), position, space.tier[lane[position]]);
@@ -149,7 +152,8 @@ function relocate(space: SearchSpace, lanes: Lanes, aircraft: number, current: S
     if (!Number.isFinite(space.arrival[aircraft][catapult])) continue;
     const lane = lanes[catapult];
     for (let position = 0; position <= lane.length; position += 1) {
-      if ((catapult === from && position === fromPosition) || !fitsAt(space, lane, position, space.tier[aircraft])) continue;
+      if ((catapult === from && position === fromPosition) || !fitsAt(space, lane, position, space.tier[aircraft]))
+        continue;
       lane.splice(position, 0, aircraft);
       const score = evaluate(space, lanes);
       lane.splice(position, 1);
@@ -165,7 +169,13 @@ function relocate(space: SearchSpace, lanes: Lanes, aircraft: number, current: S
 }
 
 /** Swaps two aircraft's places when both can use the other's catapult and that scores better. */
-function swap(space: SearchSpace, lanes: Lanes, a: [number, number], b: [number, number], current: Score): Score | null {
+function swap(
+  space: SearchSpace,
+  lanes: Lanes,
+  a: [number, number],
+  b: [number, number],
+  current: Score,
+): Score | null {
   const first = lanes[a[0]][a[1]];
   const second = lanes[b[0]][b[1]];
   if (!Number.isFinite(space.arrival[first][b[0]]) || !Number.isFinite(space.arrival[second][a[0]])) return null;
@@ -252,7 +262,11 @@ function iterate(space: SearchSpace, start: { lanes: Lanes; score: Score }): { l
   let best = start;
   let current = start;
   let sinceBest = 0;
-  for (let kicks = 0; kicks < MAX_KICKS && sinceBest < KICK_PATIENCE && space.evaluations.count < budget && best.score.lastLaunch > floor; kicks += 1) {
+  for (
+    let kicks = 0;
+    kicks < MAX_KICKS && sinceBest < KICK_PATIENCE && space.evaluations.count < budget && best.score.lastLaunch > floor;
+    kicks += 1
+  ) {
     const candidate = improve(space, kick(space, current.lanes, random));
     if (!isBetter(current.score, candidate.score)) current = candidate;
     sinceBest += 1;
@@ -286,7 +300,9 @@ function startOrders(space: SearchSpace, aircraft: readonly number[]): number[][
  */
 export function suggestLineup(input: SuggestionInput): LineupSuggestion {
   const earliest = earliestLaunch(input);
-  const open = orderedCatapults(input.catapults).filter((catapult) => catapultClosedReason(catapult, input.landingAreaInUse) === null);
+  const open = orderedCatapults(input.catapults).filter(
+    (catapult) => catapultClosedReason(catapult, input.landingAreaInUse) === null,
+  );
   const ids = new Set<string>();
   for (const aircraft of input.aircraft) {
     if (ids.has(aircraft.id)) throw new LaunchMathInputError(`Aircraft ${aircraft.id} is listed twice`);
@@ -303,7 +319,10 @@ export function suggestLineup(input: SuggestionInput): LineupSuggestion {
   const space: SearchSpace = {
     earliest,
     pairGapMs: secondsToMilliseconds(input.pairMinimumGap),
-    catapults: open.map((catapult) => ({ resetMs: secondsToMilliseconds(catapult.resetInterval), group: catapult.pairId })),
+    catapults: open.map((catapult) => ({
+      resetMs: secondsToMilliseconds(catapult.resetInterval),
+      group: catapult.pairId,
+    })),
     arrival,
     tier: input.aircraft.map((aircraft) => priorityTier(aircraft.priority)),
     evaluations: { count: 0 },

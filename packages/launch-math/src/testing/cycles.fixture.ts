@@ -29,9 +29,13 @@ const TOLERANCE_MS = 1e-6;
 export function scheduleViolations(input: ProjectionInput, projection: Projection): string[] {
   const problems: string[] = [];
   const timeOf = new Map(projection.slots.map((slot) => [slot.slotId, slot.time as number]));
-  const accounted = [...projection.slots.map((slot) => slot.slotId), ...projection.unschedulable.map((slot) => slot.slotId)];
+  const accounted = [
+    ...projection.slots.map((slot) => slot.slotId),
+    ...projection.unschedulable.map((slot) => slot.slotId),
+  ];
   const inLanes = Object.values(input.lanes).flat();
-  if (accounted.length !== inLanes.length || new Set(accounted).size !== inLanes.length) problems.push('slots not accounted for once each');
+  if (accounted.length !== inLanes.length || new Set(accounted).size !== inLanes.length)
+    problems.push('slots not accounted for once each');
   const earliest = Math.max(input.cycleStart, input.window.start, input.now ?? -Infinity);
   const effectiveTier = new Map<string, number>();
 
@@ -43,10 +47,13 @@ export function scheduleViolations(input: ProjectionInput, projection: Projectio
       const time = timeOf.get(slotId) ?? NaN;
       const launched = input.launched?.[slotId] !== undefined;
       if (!launched) {
-        if (!catapult.up || (input.landingAreaInUse && catapult.position === 'waist')) problems.push(`${slotId} projected on a closed catapult`);
-        if (previous !== null && time < previous + catapult.resetInterval * 1000 - TOLERANCE_MS) problems.push(`${slotId} breaks the reset interval`);
+        if (!catapult.up || (input.landingAreaInUse && catapult.position === 'waist'))
+          problems.push(`${slotId} projected on a closed catapult`);
+        if (previous !== null && time < previous + catapult.resetInterval * 1000 - TOLERANCE_MS)
+          problems.push(`${slotId} breaks the reset interval`);
         if (time < earliest - TOLERANCE_MS) problems.push(`${slotId} before the earliest launch`);
-        if (time < (input.notBefore?.[slotId] ?? -Infinity) - TOLERANCE_MS) problems.push(`${slotId} before its taxi arrival`);
+        if (time < (input.notBefore?.[slotId] ?? -Infinity) - TOLERANCE_MS)
+          problems.push(`${slotId} before its taxi arrival`);
         running = Math.max(running, TIER[input.priorities?.[slotId] ?? 'normal']);
         effectiveTier.set(slotId, running);
       }
@@ -62,7 +69,8 @@ export function scheduleViolations(input: ProjectionInput, projection: Projectio
           if (!timeOf.has(slotA) || !timeOf.has(slotB)) continue;
           if (input.launched?.[slotA] !== undefined && input.launched?.[slotB] !== undefined) continue;
           const apart = Math.abs((timeOf.get(slotA) ?? NaN) - (timeOf.get(slotB) ?? NaN));
-          if (!(apart >= input.pairMinimumGap * 1000 - TOLERANCE_MS)) problems.push(`${slotA} and ${slotB} break the pair gap`);
+          if (!(apart >= input.pairMinimumGap * 1000 - TOLERANCE_MS))
+            problems.push(`${slotA} and ${slotB} break the pair gap`);
         }
       }
     }
@@ -103,7 +111,11 @@ export const projectionInputArbitrary: fc.Arbitrary<ProjectionInput> = fc
     windowLength: fc.integer({ min: 60, max: 1800 }),
   })
   .map((draw) => {
-    const catapults = fourCatapults().map((catapult, index) => ({ ...catapult, resetInterval: seconds(draw.resets[index]), up: draw.up[index] }));
+    const catapults = fourCatapults().map((catapult, index) => ({
+      ...catapult,
+      resetInterval: seconds(draw.resets[index]),
+      up: draw.up[index],
+    }));
     const lanes: Record<string, string[]> = Object.fromEntries(catapults.map((catapult) => [catapult.id, []]));
     const notBefore: Record<string, ReturnType<typeof at>> = {};
     const priorities: Record<string, LaunchPriority> = {};
@@ -144,7 +156,10 @@ export function suggestionInputArbitrary(maxAircraft: number, minAircraft = 1): 
       aircraft: fc.array(
         fc.record({
           priority: priorityArbitrary,
-          taxi: fc.array(fc.option(fc.integer({ min: 0, max: 480 }), { nil: undefined, freq: 12 }), { minLength: 4, maxLength: 4 }),
+          taxi: fc.array(fc.option(fc.integer({ min: 0, max: 480 }), { nil: undefined, freq: 12 }), {
+            minLength: 4,
+            maxLength: 4,
+          }),
         }),
         { minLength: minAircraft, maxLength: maxAircraft },
       ),
@@ -165,7 +180,11 @@ export function suggestionInputArbitrary(maxAircraft: number, minAircraft = 1): 
         taxiTimes: Object.fromEntries(
           draw.aircraft.map((aircraft, index) => [
             `a${index}`,
-            Object.fromEntries(catapults.flatMap((catapult, c) => (aircraft.taxi[c] === undefined ? [] : [[catapult.id, seconds(aircraft.taxi[c] ?? 0)]]))),
+            Object.fromEntries(
+              catapults.flatMap((catapult, c) =>
+                aircraft.taxi[c] === undefined ? [] : [[catapult.id, seconds(aircraft.taxi[c] ?? 0)]],
+              ),
+            ),
           ]),
         ),
       };
@@ -179,28 +198,41 @@ export function suggestionInputArbitrary(maxAircraft: number, minAircraft = 1): 
  */
 export function suggestionViolations(input: SuggestionInput, suggestion: LineupSuggestion): string[] {
   const problems: string[] = [];
-  const open = input.catapults.filter((catapult) => catapult.up && !(input.landingAreaInUse && catapult.position === 'waist'));
+  const open = input.catapults.filter(
+    (catapult) => catapult.up && !(input.landingAreaInUse && catapult.position === 'waist'),
+  );
   const placed = Object.values(suggestion.lanes).flat();
   const unplaced = suggestion.unplaced.map((entry) => entry.aircraftId);
   for (const aircraft of input.aircraft) {
     const count = placed.filter((id) => id === aircraft.id).length + unplaced.filter((id) => id === aircraft.id).length;
     if (count !== 1) problems.push(`${aircraft.id} placed ${count} times`);
     const reachable = open.some((catapult) => input.taxiTimes[aircraft.id]?.[catapult.id] !== undefined);
-    if (unplaced.includes(aircraft.id) && reachable) problems.push(`${aircraft.id} left out though a catapult is in reach`);
+    if (unplaced.includes(aircraft.id) && reachable)
+      problems.push(`${aircraft.id} left out though a catapult is in reach`);
   }
   const priorityOf = new Map(input.aircraft.map((aircraft) => [aircraft.id, aircraft.priority]));
   for (const [catapultId, lane] of Object.entries(suggestion.lanes)) {
-    if (lane.length > 0 && !open.some((catapult) => catapult.id === catapultId)) problems.push(`lane on closed catapult ${catapultId}`);
+    if (lane.length > 0 && !open.some((catapult) => catapult.id === catapultId))
+      problems.push(`lane on closed catapult ${catapultId}`);
     lane.forEach((aircraftId, place) => {
       const taxi = input.taxiTimes[aircraftId]?.[catapultId];
       if (taxi === undefined) problems.push(`${aircraftId} cannot reach ${catapultId}`);
-      else if (suggestion.notBefore[aircraftId] !== input.cycleStart + taxi * 1000) problems.push(`${aircraftId} taxi arrival wrong`);
-      if (place > 0 && TIER[priorityOf.get(lane[place - 1]) ?? 'normal'] > TIER[priorityOf.get(aircraftId) ?? 'normal']) {
+      else if (suggestion.notBefore[aircraftId] !== input.cycleStart + taxi * 1000)
+        problems.push(`${aircraftId} taxi arrival wrong`);
+      if (
+        place > 0 &&
+        TIER[priorityOf.get(lane[place - 1]) ?? 'normal'] > TIER[priorityOf.get(aircraftId) ?? 'normal']
+      ) {
         problems.push(`${aircraftId} queued behind a lower priority`);
       }
     });
   }
-  const projectionInput = { ...input, lanes: suggestion.lanes, notBefore: suggestion.notBefore, priorities: suggestion.priorities };
+  const projectionInput = {
+    ...input,
+    lanes: suggestion.lanes,
+    notBefore: suggestion.notBefore,
+    priorities: suggestion.priorities,
+  };
   if (suggestion.projection.unschedulable.length > 0) problems.push('suggestion has unschedulable slots');
   return [...problems, ...scheduleViolations(projectionInput, suggestion.projection)];
 }

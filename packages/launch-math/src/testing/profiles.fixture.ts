@@ -39,7 +39,8 @@ export const testShip: ShipProfile = {
   },
   departures: {
     I: {
-      summary: 'After the clearing turn, parallel the base recovery course at 500 ft until 7 nm, then climb unrestricted in visual conditions.',
+      summary:
+        'After the clearing turn, parallel the base recovery course at 500 ft until 7 nm, then climb unrestricted in visual conditions.',
       altitude: feet(500),
       untilRange: nauticalMiles(7),
       speed: knots(300),

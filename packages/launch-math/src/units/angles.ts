@@ -21,4 +21,5 @@ export function normaliseRelative(angle: Degrees): Degrees {
 }
 
 /** The smallest angle between two bearings, in [0, 180] degrees. */
-export const angularDistance = (a: Degrees, b: Degrees): Degrees => degrees(Math.abs(normaliseRelative(degrees(a - b))));
+export const angularDistance = (a: Degrees, b: Degrees): Degrees =>
+  degrees(Math.abs(normaliseRelative(degrees(a - b))));

@@ -60,7 +60,8 @@ describe('wind components', () => {
         expect(Math.hypot(headwind, crosswind)).toBeCloseTo(relative.speed, 9);
         const signedCrosswind = side === 'port' ? -crosswind : crosswind;
         const offAxis = (Math.atan2(signedCrosswind, headwind) * 180) / Math.PI;
-        if (relative.speed > 1e-6) expect(angularDistance(degrees(angle + offAxis), relative.bearing)).toBeLessThan(1e-6);
+        if (relative.speed > 1e-6)
+          expect(angularDistance(degrees(angle + offAxis), relative.bearing)).toBeLessThan(1e-6);
       }),
     );
   });
@@ -68,19 +69,28 @@ describe('wind components', () => {
 
 describe('relative and true wind', () => {
   it('match Smith, Bourassa and Sharp (1999): ship 090 at 5 kt, relative 5 kt from 90 degrees relative', () => {
-    const wind = trueWindFromRelative({ course: degrees(90), speed: knots(5) }, { bearing: degrees(90), speed: knots(5) });
+    const wind = trueWindFromRelative(
+      { course: degrees(90), speed: knots(5) },
+      { bearing: degrees(90), speed: knots(5) },
+    );
     expect(wind.from).toBeCloseTo(225, 9); // Smith, Bourassa & Sharp (1999), J. Atmos. Oceanic Technol. 16: from 225
     expect(wind.speed).toBeCloseTo(7.07, 2); // Smith, Bourassa & Sharp (1999): 7.07 kt
   });
 
   it('match Smith, Bourassa and Sharp (1999): ship 180 at 5 kt, relative 5 kt from dead astern', () => {
-    const wind = trueWindFromRelative({ course: degrees(180), speed: knots(5) }, { bearing: degrees(180), speed: knots(5) });
+    const wind = trueWindFromRelative(
+      { course: degrees(180), speed: knots(5) },
+      { bearing: degrees(180), speed: knots(5) },
+    );
     expect(wind.from).toBeCloseTo(360, 9); // Smith, Bourassa & Sharp (1999): from 360 (north is 360, not 0)
     expect(wind.speed).toBeCloseTo(10, 9); // Smith, Bourassa & Sharp (1999): 10 kt
   });
 
   it('turn the Smith, Bourassa and Sharp true winds back into their relative winds', () => {
-    const beam = relativeWind({ course: degrees(90), speed: knots(5) }, { from: degrees(225), speed: knots(5 * Math.SQRT2) });
+    const beam = relativeWind(
+      { course: degrees(90), speed: knots(5) },
+      { from: degrees(225), speed: knots(5 * Math.SQRT2) },
+    );
     expect(beam.bearing).toBeCloseTo(90, 9); // Smith, Bourassa & Sharp (1999): 90 degrees relative
     expect(beam.speed).toBeCloseTo(5, 9); // Smith, Bourassa & Sharp (1999): 5 kt
     const astern = relativeWind({ course: degrees(180), speed: knots(5) }, { from: degrees(360), speed: knots(10) });
@@ -103,16 +113,24 @@ describe('relative and true wind', () => {
 
   it('round-trip true to relative and back', () => {
     fc.assert(
-      fc.property(bearing, speed, bearing, fc.double({ min: 0.5, max: 60, noNaN: true }), (course, shipSpeed, from, windSpeed) => {
-        const ship = { course, speed: shipSpeed };
-        const back = trueWindFromRelative(ship, relativeWind(ship, { from, speed: knots(windSpeed) }));
-        expect(back.speed).toBeCloseTo(windSpeed, 9);
-        expect(angularDistance(back.from, from)).toBeLessThan(1e-7);
-      }),
+      fc.property(
+        bearing,
+        speed,
+        bearing,
+        fc.double({ min: 0.5, max: 60, noNaN: true }),
+        (course, shipSpeed, from, windSpeed) => {
+          const ship = { course, speed: shipSpeed };
+          const back = trueWindFromRelative(ship, relativeWind(ship, { from, speed: knots(windSpeed) }));
+          expect(back.speed).toBeCloseTo(windSpeed, 9);
+          expect(angularDistance(back.from, from)).toBeLessThan(1e-7);
+        },
+      ),
     );
   });
 
   it('refuses a negative speed', () => {
-    expect(() => relativeWind({ course: degrees(0), speed: knots(-1) }, { from: degrees(0), speed: knots(0) })).toThrow(LaunchMathInputError);
+    expect(() => relativeWind({ course: degrees(0), speed: knots(-1) }, { from: degrees(0), speed: knots(0) })).toThrow(
+      LaunchMathInputError,
+    );
   });
 });

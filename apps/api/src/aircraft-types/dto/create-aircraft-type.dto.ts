@@ -1,4 +1,9 @@
-import { AIRCRAFT_TYPE_RANGES as RANGES, type CreateAircraftTypeRequest, NAME_MAX_LENGTH, TYPE_DESIGNATION_MAX_LENGTH } from '@catline/contracts';
+import {
+  AIRCRAFT_TYPE_RANGES as RANGES,
+  type CreateAircraftTypeRequest,
+  NAME_MAX_LENGTH,
+  TYPE_DESIGNATION_MAX_LENGTH,
+} from '@catline/contracts';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import {

@@ -7,7 +7,9 @@ export class CreateAircraftDto implements CreateAircraftRequest {
   @ApiProperty({ example: 'C21' })
   @Trim()
   @IsString()
-  @Matches(SIDE_NUMBER_PATTERN, { message: `sideNumber must be 1 to ${SIDE_NUMBER_MAX_LENGTH} letters, digits or dashes` })
+  @Matches(SIDE_NUMBER_PATTERN, {
+    message: `sideNumber must be 1 to ${SIDE_NUMBER_MAX_LENGTH} letters, digits or dashes`,
+  })
   sideNumber: string;
 
   @ApiProperty()

@@ -50,28 +50,53 @@ export class ApiExceptionFilter implements ExceptionFilter {
     // The body parser's refusals (see json-depth.ts) reach here wrapped in an HttpException by Nest.
     if (exception instanceof HttpException && exception.cause instanceof DomainException) exception = exception.cause;
     if (exception instanceof DomainException) {
-      return { statusCode: exception.getStatus(), code: exception.code, message: exception.message, ...(exception.details ? { details: exception.details } : {}) };
+      return {
+        statusCode: exception.getStatus(),
+        code: exception.code,
+        message: exception.message,
+        ...(exception.details ? { details: exception.details } : {}),
+      };
     }
     if (exception instanceof HttpException) {
       const status = exception.getStatus();
       const response = exception.getResponse();
-      const raw = typeof response === 'object' && response !== null ? (response as { message?: unknown }).message : response;
+      const raw =
+        typeof response === 'object' && response !== null ? (response as { message?: unknown }).message : response;
       if (Array.isArray(raw)) {
-        return { statusCode: status, code: 'validation_failed', message: `Invalid request: ${raw.join('; ')}`, details: raw.map(String) };
+        return {
+          statusCode: status,
+          code: 'validation_failed',
+          message: `Invalid request: ${raw.join('; ')}`,
+          details: raw.map(String),
+        };
       }
       const message = typeof raw === 'string' ? raw : exception.message;
       return { statusCode: status, code: CODE_BY_STATUS[status] ?? 'error', message };
     }
-    const code = (exception as { code?: string; driverError?: { code?: string } }).driverError?.code ?? (exception as { code?: string }).code;
+    const code =
+      (exception as { code?: string; driverError?: { code?: string } }).driverError?.code ??
+      (exception as { code?: string }).code;
     if (code && DATABASE_DOWN.has(code)) {
-      return { statusCode: HttpStatus.SERVICE_UNAVAILABLE, code: 'database_unavailable', message: 'The database is not answering; nothing was changed. Try again shortly.' };
+      return {
+        statusCode: HttpStatus.SERVICE_UNAVAILABLE,
+        code: 'database_unavailable',
+        message: 'The database is not answering; nothing was changed. Try again shortly.',
+      };
     }
     if (code && DATABASE_BUSY.has(code)) {
       this.logger.warn(`Transaction rolled back by the database: ${code}`);
-      return { statusCode: HttpStatus.SERVICE_UNAVAILABLE, code: 'database_busy', message: 'The database was busy and nothing was changed. Try again.' };
+      return {
+        statusCode: HttpStatus.SERVICE_UNAVAILABLE,
+        code: 'database_busy',
+        message: 'The database was busy and nothing was changed. Try again.',
+      };
     }
     if (exception instanceof QueryFailedError) this.logger.error(`Query failed: ${exception.message}`);
     else this.logger.error(exception instanceof Error ? exception.stack : String(exception));
-    return { statusCode: HttpStatus.INTERNAL_SERVER_ERROR, code: 'internal_error', message: 'Something went wrong on the server. The error is logged; please try again.' };
+    return {
+      statusCode: HttpStatus.INTERNAL_SERVER_ERROR,
+      code: 'internal_error',
+      message: 'Something went wrong on the server. The error is logged; please try again.',
+    };
   }
 }

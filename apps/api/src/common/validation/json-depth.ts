@@ -39,6 +39,9 @@ export function nestsDeeperThan(text: Uint8Array, limit: number): boolean {
  */
 export function refuseDeepJson(_request: IncomingMessage, _response: ServerResponse, body: Buffer): void {
   if (nestsDeeperThan(body, JSON_MAX_DEPTH)) {
-    throw new RequestException('json_too_deep', `The request body is nested more than ${JSON_MAX_DEPTH} levels deep; nothing was read.`);
+    throw new RequestException(
+      'json_too_deep',
+      `The request body is nested more than ${JSON_MAX_DEPTH} levels deep; nothing was read.`,
+    );
   }
 }

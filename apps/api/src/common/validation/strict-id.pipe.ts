@@ -14,7 +14,10 @@ export class StrictIdPipe implements PipeTransform {
   transform(value: unknown, { type, metatype, data }: ArgumentMetadata): unknown {
     if (type !== 'param' || metatype !== Number || typeof value !== 'string') return value;
     if (!DIGITS.test(value) || Number(value) < 1 || Number(value) > MAX_ID) {
-      throw new RequestException('invalid_id', `The ${data ?? 'id'} in the address must be a whole number from 1, written in digits only.`);
+      throw new RequestException(
+        'invalid_id',
+        `The ${data ?? 'id'} in the address must be a whole number from 1, written in digits only.`,
+      );
     }
     return value;
   }

@@ -1,4 +1,10 @@
-import { type AddSlotRequest, FUEL_LB, GROSS_WEIGHT_LB, MISSION_MAX_LENGTH, STORES_MAX_LENGTH } from '@catline/contracts';
+import {
+  type AddSlotRequest,
+  FUEL_LB,
+  GROSS_WEIGHT_LB,
+  MISSION_MAX_LENGTH,
+  STORES_MAX_LENGTH,
+} from '@catline/contracts';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { IsBoolean, IsInt, IsNotEmpty, IsOptional, IsString, Max, MaxLength, Min } from 'class-validator';
 import { Trim } from '../../common/validation/trim.decorator.js';

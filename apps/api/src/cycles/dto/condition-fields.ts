@@ -23,7 +23,10 @@ export const ConditionField = {
   temperatureC: () => Figure('temperatureC', 'degrees Celsius'),
   pressureHpa: () => Figure('pressureHpa', 'hectopascals'),
   weatherCase: () =>
-    applyDecorators(ApiProperty({ enum: WEATHER_CASES }), IsIn(WEATHER_CASES, { message: 'weatherCase must be I, II or III' })),
+    applyDecorators(
+      ApiProperty({ enum: WEATHER_CASES }),
+      IsIn(WEATHER_CASES, { message: 'weatherCase must be I, II or III' }),
+    ),
   flag: (field: string) => applyDecorators(ApiProperty(), IsBoolean({ message: `${field} must be true or false` })),
   instant: (field: string) =>
     applyDecorators(

@@ -10,7 +10,11 @@ export class CreateCycleDto implements CreateCycleRequest {
   @Max(2_147_483_647)
   shipId: number;
 
-  @ApiProperty({ minimum: CYCLE_NUMBER.min, maximum: CYCLE_NUMBER.max, description: "The cycle's number in the ship's flying day." })
+  @ApiProperty({
+    minimum: CYCLE_NUMBER.min,
+    maximum: CYCLE_NUMBER.max,
+    description: "The cycle's number in the ship's flying day.",
+  })
   @IsInt({ message: 'number must be a whole number' })
   @Min(CYCLE_NUMBER.min)
   @Max(CYCLE_NUMBER.max)

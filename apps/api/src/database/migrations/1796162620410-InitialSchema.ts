@@ -1,10 +1,10 @@
-import { MigrationInterface, QueryRunner } from "typeorm";
+import { MigrationInterface, QueryRunner } from 'typeorm';
 
 export class InitialSchema1796162620410 implements MigrationInterface {
-    name = 'InitialSchema1796162620410'
+  name = 'InitialSchema1796162620410';
 
-    public async up(queryRunner: QueryRunner): Promise<void> {
-        await queryRunner.query(`
+  public async up(queryRunner: QueryRunner): Promise<void> {
+    await queryRunner.query(`
             CREATE TABLE \`aircraft_types\` (
                 \`id\` int NOT NULL AUTO_INCREMENT,
                 \`designation\` varchar(20) NOT NULL,
@@ -20,7 +20,7 @@ export class InitialSchema1796162620410 implements MigrationInterface {
                 PRIMARY KEY (\`id\`)
             ) ENGINE = InnoDB
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             CREATE TABLE \`squadrons\` (
                 \`id\` int NOT NULL AUTO_INCREMENT,
                 \`name\` varchar(120) NOT NULL,
@@ -30,7 +30,7 @@ export class InitialSchema1796162620410 implements MigrationInterface {
                 PRIMARY KEY (\`id\`)
             ) ENGINE = InnoDB
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             CREATE TABLE \`aircraft\` (
                 \`id\` int NOT NULL AUTO_INCREMENT,
                 \`side_number\` varchar(8) NOT NULL,
@@ -43,7 +43,7 @@ export class InitialSchema1796162620410 implements MigrationInterface {
                 PRIMARY KEY (\`id\`)
             ) ENGINE = InnoDB
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             CREATE TABLE \`catapults\` (
                 \`id\` int NOT NULL AUTO_INCREMENT,
                 \`ship_id\` int NOT NULL,
@@ -62,7 +62,7 @@ export class InitialSchema1796162620410 implements MigrationInterface {
                 PRIMARY KEY (\`id\`)
             ) ENGINE = InnoDB
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             CREATE TABLE \`ships\` (
                 \`id\` int NOT NULL AUTO_INCREMENT,
                 \`name\` varchar(120) NOT NULL,
@@ -73,7 +73,7 @@ export class InitialSchema1796162620410 implements MigrationInterface {
                 PRIMARY KEY (\`id\`)
             ) ENGINE = InnoDB
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             CREATE TABLE \`cycles\` (
                 \`id\` int NOT NULL AUTO_INCREMENT,
                 \`ship_id\` int NOT NULL,
@@ -98,7 +98,7 @@ export class InitialSchema1796162620410 implements MigrationInterface {
                 PRIMARY KEY (\`id\`)
             ) ENGINE = InnoDB
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             CREATE TABLE \`cycle_changes\` (
                 \`id\` bigint NOT NULL AUTO_INCREMENT,
                 \`cycle_id\` int NOT NULL,
@@ -114,7 +114,7 @@ export class InitialSchema1796162620410 implements MigrationInterface {
                 PRIMARY KEY (\`id\`)
             ) ENGINE = InnoDB
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             CREATE TABLE \`users\` (
                 \`id\` int NOT NULL AUTO_INCREMENT,
                 \`email\` varchar(254) NOT NULL,
@@ -131,7 +131,7 @@ export class InitialSchema1796162620410 implements MigrationInterface {
                 PRIMARY KEY (\`id\`)
             ) ENGINE = InnoDB
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             CREATE TABLE \`slots\` (
                 \`id\` int NOT NULL AUTO_INCREMENT,
                 \`cycle_id\` int NOT NULL,
@@ -169,7 +169,7 @@ export class InitialSchema1796162620410 implements MigrationInterface {
                 PRIMARY KEY (\`id\`)
             ) ENGINE = InnoDB
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             CREATE TABLE \`refresh_tokens\` (
                 \`id\` int NOT NULL AUTO_INCREMENT,
                 \`user_id\` int NOT NULL,
@@ -181,167 +181,166 @@ export class InitialSchema1796162620410 implements MigrationInterface {
                 PRIMARY KEY (\`id\`)
             ) ENGINE = InnoDB
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             ALTER TABLE \`aircraft\`
             ADD CONSTRAINT \`FK_48233365948450420f62c447a06\` FOREIGN KEY (\`type_id\`) REFERENCES \`aircraft_types\`(\`id\`) ON DELETE RESTRICT ON UPDATE NO ACTION
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             ALTER TABLE \`aircraft\`
             ADD CONSTRAINT \`FK_d8681cc62d89fceae071a74437d\` FOREIGN KEY (\`squadron_id\`) REFERENCES \`squadrons\`(\`id\`) ON DELETE RESTRICT ON UPDATE NO ACTION
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             ALTER TABLE \`catapults\`
             ADD CONSTRAINT \`FK_289c5dda05c99d566c058eb7ab8\` FOREIGN KEY (\`ship_id\`) REFERENCES \`ships\`(\`id\`) ON DELETE CASCADE ON UPDATE NO ACTION
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             ALTER TABLE \`cycles\`
             ADD CONSTRAINT \`FK_77610ea418ad42e451ce0ce3736\` FOREIGN KEY (\`ship_id\`) REFERENCES \`ships\`(\`id\`) ON DELETE RESTRICT ON UPDATE NO ACTION
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             ALTER TABLE \`cycle_changes\`
             ADD CONSTRAINT \`FK_73c8b4bba7e07571306c02f35ad\` FOREIGN KEY (\`cycle_id\`) REFERENCES \`cycles\`(\`id\`) ON DELETE CASCADE ON UPDATE NO ACTION
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             ALTER TABLE \`users\`
             ADD CONSTRAINT \`FK_e9c53c4cfdf41d198fd27ef198e\` FOREIGN KEY (\`catapult_id\`) REFERENCES \`catapults\`(\`id\`) ON DELETE
             SET NULL ON UPDATE NO ACTION
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             ALTER TABLE \`users\`
             ADD CONSTRAINT \`FK_bf7bdd3cdaae529a352d641571e\` FOREIGN KEY (\`squadron_id\`) REFERENCES \`squadrons\`(\`id\`) ON DELETE
             SET NULL ON UPDATE NO ACTION
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             ALTER TABLE \`slots\`
             ADD CONSTRAINT \`FK_d3b275f5b7992f1b8f315032b8a\` FOREIGN KEY (\`cycle_id\`) REFERENCES \`cycles\`(\`id\`) ON DELETE CASCADE ON UPDATE NO ACTION
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             ALTER TABLE \`slots\`
             ADD CONSTRAINT \`FK_e2a565a73710a288880d1ab0525\` FOREIGN KEY (\`aircraft_id\`) REFERENCES \`aircraft\`(\`id\`) ON DELETE RESTRICT ON UPDATE NO ACTION
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             ALTER TABLE \`slots\`
             ADD CONSTRAINT \`FK_85ef05f8cce4d600980d1fd70ef\` FOREIGN KEY (\`pilot_id\`) REFERENCES \`users\`(\`id\`) ON DELETE
             SET NULL ON UPDATE NO ACTION
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             ALTER TABLE \`slots\`
             ADD CONSTRAINT \`FK_acb575174a4c81dbbca797e1a79\` FOREIGN KEY (\`catapult_id\`) REFERENCES \`catapults\`(\`id\`) ON DELETE RESTRICT ON UPDATE NO ACTION
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             ALTER TABLE \`slots\`
             ADD CONSTRAINT \`FK_741290c4a1e467d4e7b7888ef5d\` FOREIGN KEY (\`status_by_id\`) REFERENCES \`users\`(\`id\`) ON DELETE
             SET NULL ON UPDATE NO ACTION
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             ALTER TABLE \`refresh_tokens\`
             ADD CONSTRAINT \`FK_3ddc983c5f7bcf132fd8732c3f4\` FOREIGN KEY (\`user_id\`) REFERENCES \`users\`(\`id\`) ON DELETE CASCADE ON UPDATE NO ACTION
         `);
-    }
+  }
 
-    public async down(queryRunner: QueryRunner): Promise<void> {
-        await queryRunner.query(`
+  public async down(queryRunner: QueryRunner): Promise<void> {
+    await queryRunner.query(`
             ALTER TABLE \`refresh_tokens\` DROP FOREIGN KEY \`FK_3ddc983c5f7bcf132fd8732c3f4\`
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             ALTER TABLE \`slots\` DROP FOREIGN KEY \`FK_741290c4a1e467d4e7b7888ef5d\`
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             ALTER TABLE \`slots\` DROP FOREIGN KEY \`FK_acb575174a4c81dbbca797e1a79\`
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             ALTER TABLE \`slots\` DROP FOREIGN KEY \`FK_85ef05f8cce4d600980d1fd70ef\`
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             ALTER TABLE \`slots\` DROP FOREIGN KEY \`FK_e2a565a73710a288880d1ab0525\`
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             ALTER TABLE \`slots\` DROP FOREIGN KEY \`FK_d3b275f5b7992f1b8f315032b8a\`
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             ALTER TABLE \`users\` DROP FOREIGN KEY \`FK_bf7bdd3cdaae529a352d641571e\`
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             ALTER TABLE \`users\` DROP FOREIGN KEY \`FK_e9c53c4cfdf41d198fd27ef198e\`
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             ALTER TABLE \`cycle_changes\` DROP FOREIGN KEY \`FK_73c8b4bba7e07571306c02f35ad\`
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             ALTER TABLE \`cycles\` DROP FOREIGN KEY \`FK_77610ea418ad42e451ce0ce3736\`
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             ALTER TABLE \`catapults\` DROP FOREIGN KEY \`FK_289c5dda05c99d566c058eb7ab8\`
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             ALTER TABLE \`aircraft\` DROP FOREIGN KEY \`FK_d8681cc62d89fceae071a74437d\`
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             ALTER TABLE \`aircraft\` DROP FOREIGN KEY \`FK_48233365948450420f62c447a06\`
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             DROP INDEX \`IDX_a7838d2ba25be1342091b6695f\` ON \`refresh_tokens\`
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             DROP TABLE \`refresh_tokens\`
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             DROP INDEX \`uq_slots_cycle_aircraft\` ON \`slots\`
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             DROP INDEX \`uq_slots_launch_key\` ON \`slots\`
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             DROP INDEX \`ix_slots_lane\` ON \`slots\`
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             DROP TABLE \`slots\`
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             DROP INDEX \`IDX_97672ac88f789774dd47f7c8be\` ON \`users\`
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             DROP TABLE \`users\`
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             DROP INDEX \`uq_cycle_changes_version\` ON \`cycle_changes\`
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             DROP TABLE \`cycle_changes\`
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             DROP INDEX \`uq_cycles_ship_number\` ON \`cycles\`
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             DROP TABLE \`cycles\`
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             DROP TABLE \`ships\`
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             DROP INDEX \`uq_catapults_ship_number\` ON \`catapults\`
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             DROP TABLE \`catapults\`
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             DROP INDEX \`IDX_f1de2167c5711f751172c1e70e\` ON \`aircraft\`
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             DROP TABLE \`aircraft\`
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             DROP INDEX \`IDX_9a169f17ef614da0e9a6d0e98e\` ON \`squadrons\`
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             DROP TABLE \`squadrons\`
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             DROP INDEX \`IDX_fc8d7e38875546d38c5338fda7\` ON \`aircraft_types\`
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             DROP TABLE \`aircraft_types\`
         `);
-    }
-
+  }
 }

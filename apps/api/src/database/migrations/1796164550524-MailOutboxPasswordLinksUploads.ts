@@ -1,10 +1,10 @@
-import { MigrationInterface, QueryRunner } from "typeorm";
+import { MigrationInterface, QueryRunner } from 'typeorm';
 
 export class MailOutboxPasswordLinksUploads1796164550524 implements MigrationInterface {
-    name = 'MailOutboxPasswordLinksUploads1796164550524'
+  name = 'MailOutboxPasswordLinksUploads1796164550524';
 
-    public async up(queryRunner: QueryRunner): Promise<void> {
-        await queryRunner.query(`
+  public async up(queryRunner: QueryRunner): Promise<void> {
+    await queryRunner.query(`
             CREATE TABLE \`uploads\` (
                 \`id\` int NOT NULL AUTO_INCREMENT,
                 \`kind\` varchar(20) NOT NULL,
@@ -25,7 +25,7 @@ export class MailOutboxPasswordLinksUploads1796164550524 implements MigrationInt
                 PRIMARY KEY (\`id\`)
             ) ENGINE = InnoDB
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             CREATE TABLE \`mail_outbox\` (
                 \`id\` int NOT NULL AUTO_INCREMENT,
                 \`kind\` varchar(20) NOT NULL,
@@ -44,7 +44,7 @@ export class MailOutboxPasswordLinksUploads1796164550524 implements MigrationInt
                 PRIMARY KEY (\`id\`)
             ) ENGINE = InnoDB
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             CREATE TABLE \`password_links\` (
                 \`id\` int NOT NULL AUTO_INCREMENT,
                 \`user_id\` int NOT NULL,
@@ -57,63 +57,62 @@ export class MailOutboxPasswordLinksUploads1796164550524 implements MigrationInt
                 PRIMARY KEY (\`id\`)
             ) ENGINE = InnoDB
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             ALTER TABLE \`uploads\`
             ADD CONSTRAINT \`FK_9c939f8cf2a5b19c80393027e75\` FOREIGN KEY (\`cycle_id\`) REFERENCES \`cycles\`(\`id\`) ON DELETE CASCADE ON UPDATE NO ACTION
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             ALTER TABLE \`uploads\`
             ADD CONSTRAINT \`FK_ac02dc59ddf4c6925d1955d2934\` FOREIGN KEY (\`aircraft_type_id\`) REFERENCES \`aircraft_types\`(\`id\`) ON DELETE CASCADE ON UPDATE NO ACTION
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             ALTER TABLE \`uploads\`
             ADD CONSTRAINT \`FK_e4eac210e1666317baf35a7dd40\` FOREIGN KEY (\`uploaded_by_id\`) REFERENCES \`users\`(\`id\`) ON DELETE RESTRICT ON UPDATE NO ACTION
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             ALTER TABLE \`uploads\`
             ADD CONSTRAINT \`FK_ade019accbaee94ea9cfbc70ab8\` FOREIGN KEY (\`imported_by_id\`) REFERENCES \`users\`(\`id\`) ON DELETE
             SET NULL ON UPDATE NO ACTION
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             ALTER TABLE \`password_links\`
             ADD CONSTRAINT \`FK_5df8ca33044c0215813e3bb68be\` FOREIGN KEY (\`user_id\`) REFERENCES \`users\`(\`id\`) ON DELETE CASCADE ON UPDATE NO ACTION
         `);
-    }
+  }
 
-    public async down(queryRunner: QueryRunner): Promise<void> {
-        await queryRunner.query(`
+  public async down(queryRunner: QueryRunner): Promise<void> {
+    await queryRunner.query(`
             ALTER TABLE \`password_links\` DROP FOREIGN KEY \`FK_5df8ca33044c0215813e3bb68be\`
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             ALTER TABLE \`uploads\` DROP FOREIGN KEY \`FK_ade019accbaee94ea9cfbc70ab8\`
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             ALTER TABLE \`uploads\` DROP FOREIGN KEY \`FK_e4eac210e1666317baf35a7dd40\`
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             ALTER TABLE \`uploads\` DROP FOREIGN KEY \`FK_ac02dc59ddf4c6925d1955d2934\`
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             ALTER TABLE \`uploads\` DROP FOREIGN KEY \`FK_9c939f8cf2a5b19c80393027e75\`
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             DROP INDEX \`uq_password_links_token_hash\` ON \`password_links\`
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             DROP TABLE \`password_links\`
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             DROP INDEX \`uq_mail_outbox_dedupe_key\` ON \`mail_outbox\`
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             DROP INDEX \`ix_mail_outbox_due\` ON \`mail_outbox\`
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             DROP TABLE \`mail_outbox\`
         `);
-        await queryRunner.query(`
+    await queryRunner.query(`
             DROP TABLE \`uploads\`
         `);
-    }
-
+  }
 }

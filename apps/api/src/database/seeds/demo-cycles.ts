@@ -33,7 +33,11 @@ const dayConditions = {
   landingAreaInUse: false,
 } as const;
 
-function cycleAt(number: number, planned: Date, conditions: Omit<CreateCycleDto, 'shipId' | 'number' | 'plannedLaunchAt' | 'windowStartAt' | 'windowEndAt'>) {
+function cycleAt(
+  number: number,
+  planned: Date,
+  conditions: Omit<CreateCycleDto, 'shipId' | 'number' | 'plannedLaunchAt' | 'windowStartAt' | 'windowEndAt'>,
+) {
   return (shipId: number): CreateCycleDto => ({
     shipId,
     number,
@@ -45,15 +49,37 @@ function cycleAt(number: number, planned: Date, conditions: Omit<CreateCycleDto,
 }
 
 const flownSorties: DemoSortie[] = [
-  { side: 'L47', mission: 'Airborne early warning', grossWeightLb: 52_500, fuelLb: 11_000, earlyWarning: true, pilot: pilot(2) },
-  { side: 'C30', mission: 'Recovery tanker', grossWeightLb: 49_800, fuelLb: 15_500, stores: 'Refuelling store', tanker: true, pilot: pilot(3) },
+  {
+    side: 'L47',
+    mission: 'Airborne early warning',
+    grossWeightLb: 52_500,
+    fuelLb: 11_000,
+    earlyWarning: true,
+    pilot: pilot(2),
+  },
+  {
+    side: 'C30',
+    mission: 'Recovery tanker',
+    grossWeightLb: 49_800,
+    fuelLb: 15_500,
+    stores: 'Refuelling store',
+    tanker: true,
+    pilot: pilot(3),
+  },
   strike('C21', 44_800, { pilot: pilot(1) }),
   strike('C22', 46_200, { pilot: pilot(4) }),
   strike('C23', 43_500, { pilot: pilot(5) }),
   strike('C24', 45_100),
   strike('D33', 47_300, { pilot: pilot(6) }),
   strike('D34', 42_900, { pilot: pilot(7) }),
-  { side: 'G43', mission: 'Close air support training', grossWeightLb: 27_400, fuelLb: 7_800, stores: '2 rocket pods', pilot: pilot(8) },
+  {
+    side: 'G43',
+    mission: 'Close air support training',
+    grossWeightLb: 27_400,
+    fuelLb: 7_800,
+    stores: '2 rocket pods',
+    pilot: pilot(8),
+  },
   strike('C31', 44_000, { spare: true, pilot: pilot(9), mission: 'Spare' }),
 ];
 
@@ -75,7 +101,9 @@ const STEPS_BEFORE_LAUNCH: [ReadinessStep, number][] = [
 /** The flown cycle: planned, a reorder, a down aircraft replaced by the spare, a suspend, every launch, closed on the last. */
 async function flyEarlierCycle(deck: DemoDeck, shipId: number, planned: Date): Promise<void> {
   deck.clock.at = new Date(planned.getTime() - 45 * MINUTE);
-  const cycleId = await deck.createCycle(cycleAt(1, planned, { ...dayConditions, trueWindSpeedKt: 11, temperatureC: 19 })(shipId));
+  const cycleId = await deck.createCycle(
+    cycleAt(1, planned, { ...dayConditions, trueWindSpeedKt: 11, temperatureC: 19 })(shipId),
+  );
   for (const sortie of flownSorties) {
     await deck.add(cycleId, AIR_OPS, sortie);
     deck.clock.advance(40);
@@ -125,12 +153,33 @@ async function flyEarlierCycle(deck: DemoDeck, shipId: number, planned: Date): P
 }
 
 const daySorties: DemoSortie[] = [
-  { side: 'L47', mission: 'Airborne early warning', grossWeightLb: 53_000, fuelLb: 11_500, earlyWarning: true, pilot: pilot(2) },
-  { side: 'C28', mission: 'Recovery tanker', grossWeightLb: 50_200, fuelLb: 16_000, stores: 'Refuelling store', tanker: true, pilot: pilot(3) },
+  {
+    side: 'L47',
+    mission: 'Airborne early warning',
+    grossWeightLb: 53_000,
+    fuelLb: 11_500,
+    earlyWarning: true,
+    pilot: pilot(2),
+  },
+  {
+    side: 'C28',
+    mission: 'Recovery tanker',
+    grossWeightLb: 50_200,
+    fuelLb: 16_000,
+    stores: 'Refuelling store',
+    tanker: true,
+    pilot: pilot(3),
+  },
   strike('C21', 45_400, { pilot: pilot(1) }),
-  ...['C22', 'C23', 'C24', 'C25', 'C26', 'C27'].map((side, i) => strike(side, 42_600 + i * 700, i < 3 ? { pilot: pilot(4 + i) } : {})),
+  ...['C22', 'C23', 'C24', 'C25', 'C26', 'C27'].map((side, i) =>
+    strike(side, 42_600 + i * 700, i < 3 ? { pilot: pilot(4 + i) } : {}),
+  ),
   ...['D33', 'D34', 'D35', 'D36', 'D37', 'D38'].map((side, i) =>
-    strike(side, 41_800 + i * 900, { mission: 'Air combat training', stores: '2 training rounds', pilot: i < 2 ? pilot(7 + i) : undefined }),
+    strike(side, 41_800 + i * 900, {
+      mission: 'Air combat training',
+      stores: '2 training rounds',
+      pilot: i < 2 ? pilot(7 + i) : undefined,
+    }),
   ),
   ...['G43', 'G44', 'G45'].map((side, i) => ({
     side,
@@ -140,7 +189,14 @@ const daySorties: DemoSortie[] = [
     stores: '2 rocket pods',
     pilot: i === 0 ? pilot(9) : undefined,
   })),
-  { side: 'L48', mission: 'Airborne early warning', grossWeightLb: 51_900, fuelLb: 11_000, earlyWarning: true, spare: true },
+  {
+    side: 'L48',
+    mission: 'Airborne early warning',
+    grossWeightLb: 51_900,
+    fuelLb: 11_000,
+    earlyWarning: true,
+    spare: true,
+  },
   strike('C29', 44_200, { spare: true, mission: 'Spare' }),
 ];
 
@@ -167,10 +223,29 @@ async function planDayCycle(deck: DemoDeck, shipId: number, planned: Date): Prom
 }
 
 const nightSorties: DemoSortie[] = [
-  { side: 'L49', mission: 'Airborne early warning', grossWeightLb: 52_000, fuelLb: 11_000, earlyWarning: true, pilot: pilot(2) },
-  { side: 'C31', mission: 'Recovery tanker', grossWeightLb: 49_500, fuelLb: 15_000, stores: 'Refuelling store', tanker: true, pilot: pilot(3) },
-  ...['C32', 'C25', 'C26'].map((side, i) => strike(side, 43_000 + i * 800, { mission: 'Night strike training', pilot: pilot(4 + i) })),
-  ...['D39', 'D40', 'D41', 'D42'].map((side, i) => strike(side, 42_000 + i * 600, { mission: 'Night intercept training', stores: '2 training rounds' })),
+  {
+    side: 'L49',
+    mission: 'Airborne early warning',
+    grossWeightLb: 52_000,
+    fuelLb: 11_000,
+    earlyWarning: true,
+    pilot: pilot(2),
+  },
+  {
+    side: 'C31',
+    mission: 'Recovery tanker',
+    grossWeightLb: 49_500,
+    fuelLb: 15_000,
+    stores: 'Refuelling store',
+    tanker: true,
+    pilot: pilot(3),
+  },
+  ...['C32', 'C25', 'C26'].map((side, i) =>
+    strike(side, 43_000 + i * 800, { mission: 'Night strike training', pilot: pilot(4 + i) }),
+  ),
+  ...['D39', 'D40', 'D41', 'D42'].map((side, i) =>
+    strike(side, 42_000 + i * 600, { mission: 'Night intercept training', stores: '2 training rounds' }),
+  ),
   { side: 'G46', mission: 'Night close air support', grossWeightLb: 26_300, fuelLb: 7_600, stores: '2 rocket pods' },
 ];
 

@@ -66,7 +66,13 @@ export class DemoDeck {
     this.clock = new SetClock(start);
     const loader = new LineupStateLoader();
     const log = new LineupChangesService(dataSource);
-    const changes = new CycleChangeService(dataSource, loader, new LineupStateCache(dataSource, true), new LineupChangeFeed(log), this.clock);
+    const changes = new CycleChangeService(
+      dataSource,
+      loader,
+      new LineupStateCache(dataSource, true),
+      new LineupChangeFeed(log),
+      this.clock,
+    );
     const basis = new BasisChecks(log);
     const closing = new CycleClosing(new MailOutbox());
     this.cycles = new CyclesService(dataSource);
@@ -106,7 +112,9 @@ export class DemoDeck {
   }
 
   async add(cycleId: number, by: string, sortie: DemoSortie): Promise<void> {
-    const aircraft = await this.dataSource.query<{ id: number }[]>('SELECT id FROM aircraft WHERE side_number = ?', [sortie.side]);
+    const aircraft = await this.dataSource.query<{ id: number }[]>('SELECT id FROM aircraft WHERE side_number = ?', [
+      sortie.side,
+    ]);
     await this.cycleCommands.addSlot(cycleId, this.actor(by), {
       aircraftId: aircraft[0].id,
       pilotId: sortie.pilot ? this.person(sortie.pilot).id : null,
@@ -143,7 +151,10 @@ export class DemoDeck {
   async acknowledgeWeight(cycleId: number, side: string): Promise<void> {
     const slot = await this.slot(cycleId, side);
     const pilot = [...this.people.values()].find((person) => person.id === slot.pilotId)!;
-    await this.readiness.acknowledgeWeight(cycleId, pilot, slot.id, { slotVersion: slot.version, grossWeightLb: slot.grossWeightLb });
+    await this.readiness.acknowledgeWeight(cycleId, pilot, slot.id, {
+      slotVersion: slot.version,
+      grossWeightLb: slot.grossWeightLb,
+    });
   }
 
   async start(cycleId: number, by: string): Promise<void> {
@@ -170,7 +181,9 @@ export class DemoDeck {
   }
 
   private officerOf(slot: SlotView): AuthenticatedUser {
-    const officer = [...this.people.values()].find((person) => person.role === 'catapult_officer' && person.catapultId === slot.catapultId);
+    const officer = [...this.people.values()].find(
+      (person) => person.role === 'catapult_officer' && person.catapultId === slot.catapultId,
+    );
     if (!officer) throw new Error(`No catapult officer runs the catapult of ${slot.sideNumber}`);
     return officer;
   }

@@ -23,10 +23,50 @@ export const demoShip = {
 };
 
 export const demoCatapults = [
-  { number: 1, position: 'bow', axisAngleDeg: 1.5, strokeM: 94, energyMinMj: 18, energyMaxMj: 96, settingCount: 40, resetIntervalS: 55, pair: 1 },
-  { number: 2, position: 'bow', axisAngleDeg: -1.5, strokeM: 94, energyMinMj: 18, energyMaxMj: 96, settingCount: 40, resetIntervalS: 55, pair: 1 },
-  { number: 3, position: 'waist', axisAngleDeg: -7.5, strokeM: 90, energyMinMj: 16, energyMaxMj: 90, settingCount: 40, resetIntervalS: 65, pair: 2 },
-  { number: 4, position: 'waist', axisAngleDeg: -9, strokeM: 90, energyMinMj: 16, energyMaxMj: 90, settingCount: 40, resetIntervalS: 65, pair: 2 },
+  {
+    number: 1,
+    position: 'bow',
+    axisAngleDeg: 1.5,
+    strokeM: 94,
+    energyMinMj: 18,
+    energyMaxMj: 96,
+    settingCount: 40,
+    resetIntervalS: 55,
+    pair: 1,
+  },
+  {
+    number: 2,
+    position: 'bow',
+    axisAngleDeg: -1.5,
+    strokeM: 94,
+    energyMinMj: 18,
+    energyMaxMj: 96,
+    settingCount: 40,
+    resetIntervalS: 55,
+    pair: 1,
+  },
+  {
+    number: 3,
+    position: 'waist',
+    axisAngleDeg: -7.5,
+    strokeM: 90,
+    energyMinMj: 16,
+    energyMaxMj: 90,
+    settingCount: 40,
+    resetIntervalS: 65,
+    pair: 2,
+  },
+  {
+    number: 4,
+    position: 'waist',
+    axisAngleDeg: -9,
+    strokeM: 90,
+    energyMinMj: 16,
+    energyMaxMj: 90,
+    settingCount: 40,
+    resetIntervalS: 65,
+    pair: 2,
+  },
 ] as const;
 
 /** Taxi times in seconds from each parking area to catapults 1 to 4. */
@@ -107,7 +147,14 @@ const spots = demoDeckSpots.map((spot) => spot.name);
  * The demo's own side numbers: the squadron's letter, then the airframe's number in the air wing,
  * counted on from squadron to squadron.
  */
-const fleetOf = (letter: string, first: number, count: number, designation: string, squadron: string, spotOffset: number) =>
+const fleetOf = (
+  letter: string,
+  first: number,
+  count: number,
+  designation: string,
+  squadron: string,
+  spotOffset: number,
+) =>
   Array.from({ length: count }, (_, i) => ({
     sideNumber: `${letter}${first + i}`,
     designation,
@@ -141,12 +188,20 @@ export const demoPeople: DemoPerson[] = [
     catapultNumber: n,
   })),
   { email: 'pilot@catline.example', name: 'Kit Marrowby', role: 'pilot', squadron: 'CWR' },
-  ...['Jo Fettleworth', 'Mika Grennadine', 'Dev Hollowmere', 'Noor Inchwhistle', 'Ezra Jessamont', 'Tess Kilvarren', 'Ravi Lowenthorpe', 'Lou Nimblethorn']
-    .map((name, i) => ({
-      email: `pilot${i + 2}@catline.example`,
-      name,
-      role: 'pilot' as const,
-      squadron: demoSquadrons[i % demoSquadrons.length].code,
-    })),
+  ...[
+    'Jo Fettleworth',
+    'Mika Grennadine',
+    'Dev Hollowmere',
+    'Noor Inchwhistle',
+    'Ezra Jessamont',
+    'Tess Kilvarren',
+    'Ravi Lowenthorpe',
+    'Lou Nimblethorn',
+  ].map((name, i) => ({
+    email: `pilot${i + 2}@catline.example`,
+    name,
+    role: 'pilot' as const,
+    squadron: demoSquadrons[i % demoSquadrons.length].code,
+  })),
   { email: 'observer@catline.example', name: 'Oren Pellicott', role: 'observer' },
 ];

@@ -8,7 +8,10 @@ export class SuggestedLaneDto {
   @IdField()
   catapultId: number;
 
-  @ApiProperty({ type: [Number], description: 'Planned slots to queue behind the aircraft already launched or in readiness.' })
+  @ApiProperty({
+    type: [Number],
+    description: 'Planned slots to queue behind the aircraft already launched or in readiness.',
+  })
   @IsArray()
   @ArrayMaxSize(200)
   @IsInt({ each: true, message: 'slotIds must hold slot ids' })

@@ -10,7 +10,9 @@ export const MAX_ID = 2_147_483_647;
 /** A row id in a request. */
 export const IdField = (description?: string, { optional = false } = {}) =>
   applyDecorators(
-    ...(optional ? [ApiPropertyOptional({ minimum: 1, description }), IsOptional()] : [ApiProperty({ minimum: 1, description })]),
+    ...(optional
+      ? [ApiPropertyOptional({ minimum: 1, description }), IsOptional()]
+      : [ApiProperty({ minimum: 1, description })]),
     IsInt(),
     Min(1),
     Max(MAX_ID),

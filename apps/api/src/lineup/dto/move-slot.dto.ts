@@ -23,7 +23,10 @@ export class MoveSlotDto implements MoveSlotRequest {
   @Max(999)
   toIndex: number;
 
-  @ApiProperty({ type: [Number], description: "The target lane's slot ids as seen before the move; ignored for the deck pool." })
+  @ApiProperty({
+    type: [Number],
+    description: "The target lane's slot ids as seen before the move; ignored for the deck pool.",
+  })
   @IsArray()
   @ArrayMaxSize(200)
   @IsInt({ each: true, message: 'targetLaneOrder must hold slot ids' })

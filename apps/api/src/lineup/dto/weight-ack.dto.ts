@@ -7,7 +7,11 @@ export class WeightAckDto implements WeightAckRequest {
   @VersionField('The slot version the acknowledgement is based on.')
   slotVersion: number;
 
-  @ApiProperty({ minimum: GROSS_WEIGHT_LB.min, maximum: GROSS_WEIGHT_LB.max, description: 'The gross weight the pilot agrees to, lb.' })
+  @ApiProperty({
+    minimum: GROSS_WEIGHT_LB.min,
+    maximum: GROSS_WEIGHT_LB.max,
+    description: 'The gross weight the pilot agrees to, lb.',
+  })
   @IsInt({ message: 'grossWeightLb must be a whole number of pounds' })
   @Min(GROSS_WEIGHT_LB.min)
   @Max(GROSS_WEIGHT_LB.max)

@@ -11,7 +11,9 @@ function isTaxiTimes(value: unknown): boolean {
   const entries = Object.entries(value);
   return (
     entries.length > 0 &&
-    entries.every(([key, seconds]) => /^[1-9]$/.test(key) && typeof seconds === 'number' && seconds > 0 && seconds <= MAX_TAXI_S)
+    entries.every(
+      ([key, seconds]) => /^[1-9]$/.test(key) && typeof seconds === 'number' && seconds > 0 && seconds <= MAX_TAXI_S,
+    )
   );
 }
 

@@ -19,13 +19,25 @@ class ClearingTurnDto {
 }
 
 class DeparturesDto {
-  @ApiProperty() @Trim() @IsString() @IsNotEmpty() @MaxLength(1000)
+  @ApiProperty()
+  @Trim()
+  @IsString()
+  @IsNotEmpty()
+  @MaxLength(1000)
   I: string;
 
-  @ApiProperty() @Trim() @IsString() @IsNotEmpty() @MaxLength(1000)
+  @ApiProperty()
+  @Trim()
+  @IsString()
+  @IsNotEmpty()
+  @MaxLength(1000)
   II: string;
 
-  @ApiProperty() @Trim() @IsString() @IsNotEmpty() @MaxLength(1000)
+  @ApiProperty()
+  @Trim()
+  @IsString()
+  @IsNotEmpty()
+  @MaxLength(1000)
   III: string;
 }
 

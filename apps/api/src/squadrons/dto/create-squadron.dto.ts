@@ -22,7 +22,9 @@ export class CreateSquadronDto implements CreateSquadronRequest {
   @ApiProperty({ example: 'CWR' })
   @Trim()
   @IsString()
-  @Matches(SQUADRON_CODE_PATTERN, { message: `code must be 1 to ${SQUADRON_CODE_MAX_LENGTH} letters, digits or dashes` })
+  @Matches(SQUADRON_CODE_PATTERN, {
+    message: `code must be 1 to ${SQUADRON_CODE_MAX_LENGTH} letters, digits or dashes`,
+  })
   code: string;
 
   @ApiProperty({ description: 'Where the cycle summary goes.' })

@@ -32,7 +32,10 @@ export class CreateUserDto implements CreateUserRequest {
   @IsIn(ROLES, { message: `role must be one of ${ROLES.join(', ')}` })
   role: Role;
 
-  @ApiPropertyOptional({ minLength: PASSWORD_MIN_LENGTH, description: 'Left out, the person is mailed an invitation link to choose one.' })
+  @ApiPropertyOptional({
+    minLength: PASSWORD_MIN_LENGTH,
+    description: 'Left out, the person is mailed an invitation link to choose one.',
+  })
   @SkipIfAbsent()
   @IsString()
   @MinLength(PASSWORD_MIN_LENGTH, { message: `password must be at least ${PASSWORD_MIN_LENGTH} characters` })

@@ -6,9 +6,12 @@ import { CreateUserDto } from './create-user.dto.js';
 
 // skipNullProperties: false keeps `null` from blanking required columns; catapultId and squadronId
 // stay nullable through their own @IsOptional().
-export class UpdateUserDto extends PartialType(OmitType(CreateUserDto, ['email', 'password'] as const), {
-  skipNullProperties: false,
-}) implements UpdateUserRequest {
+export class UpdateUserDto
+  extends PartialType(OmitType(CreateUserDto, ['email', 'password'] as const), {
+    skipNullProperties: false,
+  })
+  implements UpdateUserRequest
+{
   @ApiPropertyOptional()
   @SkipIfAbsent()
   @IsBoolean()

@@ -1,6 +1,17 @@
-import { type ChangeKind, type LineupChange, type LineupCommandResult, applyLineupChanges, type LineupSnapshot } from '@catline/contracts';
+import {
+  type ChangeKind,
+  type LineupChange,
+  type LineupCommandResult,
+  applyLineupChanges,
+  type LineupSnapshot,
+} from '@catline/contracts';
 import { versionProblems } from '../../support/change-log.js';
-import { type CommandOutcome, type LineupCommand, accepted, acceptedVersion } from '../../support/random-lineup-commands.js';
+import {
+  type CommandOutcome,
+  type LineupCommand,
+  accepted,
+  acceptedVersion,
+} from '../../support/random-lineup-commands.js';
 
 /** The kind of change a command makes, and the slot or catapult it must touch (by the change's patch). */
 function expectedChange(command: LineupCommand): { kind: ChangeKind; slotId?: number; catapultId?: number } {
@@ -17,8 +28,13 @@ function expectedChange(command: LineupCommand): { kind: ChangeKind; slotId?: nu
 function changeFits(change: LineupChange, command: LineupCommand): boolean {
   const expected = expectedChange(command);
   if (change.kind !== expected.kind) return false;
-  if (expected.slotId !== undefined && !(change.patch.slots ?? []).some((slot) => slot.id === expected.slotId)) return false;
-  if (expected.catapultId !== undefined && !(change.patch.lanes ?? []).some((lane) => lane.catapultId === expected.catapultId)) return false;
+  if (expected.slotId !== undefined && !(change.patch.slots ?? []).some((slot) => slot.id === expected.slotId))
+    return false;
+  if (
+    expected.catapultId !== undefined &&
+    !(change.patch.lanes ?? []).some((lane) => lane.catapultId === expected.catapultId)
+  )
+    return false;
   return true;
 }
 
@@ -31,7 +47,13 @@ const describeCommand = (command: LineupCommand) => `${command.path} ${JSON.stri
  * by the interruption), each such request explaining one row at most; the log has no gap and replays to
  * the lineup the database holds.
  */
-export function logProblems(outcomes: readonly CommandOutcome[], log: readonly LineupChange[], setUpVersions: number, first: LineupSnapshot, final: LineupSnapshot): string[] {
+export function logProblems(
+  outcomes: readonly CommandOutcome[],
+  log: readonly LineupChange[],
+  setUpVersions: number,
+  first: LineupSnapshot,
+  final: LineupSnapshot,
+): string[] {
   const problems = [...versionProblems(log)];
   const claimed = new Set<number>();
   for (const outcome of outcomes.filter(accepted)) {
@@ -39,17 +61,21 @@ export function logProblems(outcomes: readonly CommandOutcome[], log: readonly L
     const row = log[version - 1];
     if (claimed.has(version)) problems.push(`two accepted commands share version ${version}`);
     claimed.add(version);
-    if (JSON.stringify(row) !== JSON.stringify((outcome.body as LineupCommandResult).change)) problems.push(`accepted version ${version} is not in the log as answered`);
-    else if (!changeFits(row, outcome.command)) problems.push(`version ${version} is a ${row.kind}, not what ${describeCommand(outcome.command)} asked for`);
+    if (JSON.stringify(row) !== JSON.stringify((outcome.body as LineupCommandResult).change))
+      problems.push(`accepted version ${version} is not in the log as answered`);
+    else if (!changeFits(row, outcome.command))
+      problems.push(`version ${version} is a ${row.kind}, not what ${describeCommand(outcome.command)} asked for`);
   }
   const unanswered = outcomes.filter((outcome) => outcome.status === 0 || outcome.status >= 500);
   for (const row of log.slice(setUpVersions)) {
     if (claimed.has(row.version)) continue;
     const cause = unanswered.findIndex((outcome) => changeFits(row, outcome.command));
-    if (cause === -1) problems.push(`version ${row.version} (${row.kind}: ${row.summary}) answers no request that was sent`);
+    if (cause === -1)
+      problems.push(`version ${row.version} (${row.kind}: ${row.summary}) answers no request that was sent`);
     else unanswered.splice(cause, 1);
   }
   if (log.length !== final.version) problems.push(`the log ends at ${log.length}, the cycle is at ${final.version}`);
-  if (JSON.stringify(applyLineupChanges(first, log)) !== JSON.stringify(final)) problems.push('the log does not replay to the lineup');
+  if (JSON.stringify(applyLineupChanges(first, log)) !== JSON.stringify(final))
+    problems.push('the log does not replay to the lineup');
   return problems;
 }

@@ -49,7 +49,11 @@ export class ApiProcess {
   private readonly child: ChildProcess;
 
   private constructor(private readonly settings: ApiSettings) {
-    this.child = spawn(process.execPath, [MAIN], { cwd: API_DIR, env: settings.env, stdio: ['ignore', 'pipe', 'pipe'] });
+    this.child = spawn(process.execPath, [MAIN], {
+      cwd: API_DIR,
+      env: settings.env,
+      stdio: ['ignore', 'pipe', 'pipe'],
+    });
     const keep = (chunk: Buffer) => {
       this.output.push(chunk.toString());
       if (this.output.length > 400) this.output.splice(0, 100);
@@ -64,7 +68,8 @@ export class ApiProcess {
     const api = new ApiProcess(settings);
     const deadline = Date.now() + timeoutMs;
     while (!(await api.healthy())) {
-      if (api.child.exitCode !== null || api.child.signalCode !== null) throw new Error(`The API exited while starting:\n${api.log()}`);
+      if (api.child.exitCode !== null || api.child.signalCode !== null)
+        throw new Error(`The API exited while starting:\n${api.log()}`);
       if (Date.now() > deadline) {
         api.kill();
         throw new Error(`The API did not answer within ${timeoutMs} ms:\n${api.log()}`);
@@ -101,9 +106,13 @@ export class ApiProcess {
   }
 
   /** How the process exited, or 'still running' after `timeoutMs`. */
-  async exitWithin(timeoutMs: number): Promise<{ code: number | null; signal: NodeJS.Signals | null } | 'still running'> {
+  async exitWithin(
+    timeoutMs: number,
+  ): Promise<{ code: number | null; signal: NodeJS.Signals | null } | 'still running'> {
     let timer: NodeJS.Timeout | undefined;
-    const late = new Promise<'still running'>((resolve) => (timer = setTimeout(() => resolve('still running'), timeoutMs)));
+    const late = new Promise<'still running'>(
+      (resolve) => (timer = setTimeout(() => resolve('still running'), timeoutMs)),
+    );
     try {
       return await Promise.race([this.exited, late]);
     } finally {

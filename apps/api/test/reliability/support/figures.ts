@@ -7,5 +7,9 @@ export function percentile(values: readonly number[], p: number): number {
 
 /** Prints one figure line for the README's reliability section (collected from the run's output). */
 export function reportFigure(name: string, figures: Record<string, string | number>): void {
-  console.log(`[reliability] ${name}: ${Object.entries(figures).map(([key, value]) => `${key}=${value}`).join(', ')}`);
+  console.log(
+    `[reliability] ${name}: ${Object.entries(figures)
+      .map(([key, value]) => `${key}=${value}`)
+      .join(', ')}`,
+  );
 }

@@ -12,7 +12,8 @@ export function SignInRoute() {
   const location = useLocation();
   const { from, notice } = (location.state as SignInState | null) ?? {};
 
-  if (status === 'signed-in' && user) return <Navigate to={from && from !== '/' ? from : landingPath(user.role)} replace />;
+  if (status === 'signed-in' && user)
+    return <Navigate to={from && from !== '/' ? from : landingPath(user.role)} replace />;
 
   return (
     <AuthPage intro="The live launch board. Sign in with your ship account.">

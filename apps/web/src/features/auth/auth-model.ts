@@ -15,11 +15,20 @@ export const passwordLinkSchema = z.object({ email: yourEmail });
 export const newPasswordSchema = z.object({ password: z.string(), repeated: z.string() }).check(
   z.superRefine(({ password, repeated }, context) => {
     if (password.length < PASSWORD_MIN_LENGTH) {
-      context.addIssue({ code: 'custom', path: ['password'], message: `At least ${PASSWORD_MIN_LENGTH} characters; a few words make a good one.` });
+      context.addIssue({
+        code: 'custom',
+        path: ['password'],
+        message: `At least ${PASSWORD_MIN_LENGTH} characters; a few words make a good one.`,
+      });
     } else if (password.length > PASSWORD_MAX_LENGTH) {
       context.addIssue({ code: 'custom', path: ['password'], message: `At most ${PASSWORD_MAX_LENGTH} characters.` });
     }
-    if (repeated !== password) context.addIssue({ code: 'custom', path: ['repeated'], message: 'The two do not match: type the same password twice.' });
+    if (repeated !== password)
+      context.addIssue({
+        code: 'custom',
+        path: ['repeated'],
+        message: 'The two do not match: type the same password twice.',
+      });
   }),
 );
 

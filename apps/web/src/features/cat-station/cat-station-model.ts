@@ -1,4 +1,10 @@
-import { READINESS_STEPS, type LaneView, type LineupSnapshot, type ReadinessStep, type SlotView } from '@catline/contracts';
+import {
+  READINESS_STEPS,
+  type LaneView,
+  type LineupSnapshot,
+  type ReadinessStep,
+  type SlotView,
+} from '@catline/contracts';
 
 const finished = new Set(['launched', 'down', 'scratched']);
 
@@ -7,7 +13,9 @@ export function catapultQueue(snapshot: LineupSnapshot, catapultId: number) {
   const lane = snapshot.lanes.find((candidate) => candidate.catapultId === catapultId);
   if (!lane) return undefined;
   const slots = new Map(snapshot.slots.map((slot) => [slot.id, slot]));
-  const waiting = lane.slotIds.map((id) => slots.get(id)).filter((slot): slot is SlotView => !!slot && !finished.has(slot.status));
+  const waiting = lane.slotIds
+    .map((id) => slots.get(id))
+    .filter((slot): slot is SlotView => !!slot && !finished.has(slot.status));
   return { lane, current: waiting[0], next: waiting.slice(1, 3) };
 }
 

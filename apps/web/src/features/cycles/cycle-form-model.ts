@@ -89,7 +89,11 @@ export const cycleFormSchema = (withNumber: boolean) =>
   z
     .object({
       number: withNumber
-        ? numberText(CYCLE_NUMBER, `Enter the cycle number, a whole number from ${CYCLE_NUMBER.min} to ${formatWhole(CYCLE_NUMBER.max)}.`, { whole: true })
+        ? numberText(
+            CYCLE_NUMBER,
+            `Enter the cycle number, a whole number from ${CYCLE_NUMBER.min} to ${formatWhole(CYCLE_NUMBER.max)}.`,
+            { whole: true },
+          )
         : z.string(),
       plannedLaunchAt: dateTime,
       windowStartAt: dateTime,
@@ -106,17 +110,31 @@ export const cycleFormSchema = (withNumber: boolean) =>
     })
     .check(
       z.superRefine((values, context) => {
-        const [opens, planned, closes] = [values.windowStartAt, values.plannedLaunchAt, values.windowEndAt].map(Date.parse);
+        const [opens, planned, closes] = [values.windowStartAt, values.plannedLaunchAt, values.windowEndAt].map(
+          Date.parse,
+        );
         if (Number.isNaN(planned)) return;
-        if (opens > planned) context.addIssue({ code: 'custom', path: ['windowStartAt'], message: 'The window must open before the planned launch.' });
-        if (closes <= planned) context.addIssue({ code: 'custom', path: ['windowEndAt'], message: 'The window must close after the planned launch.' });
+        if (opens > planned)
+          context.addIssue({
+            code: 'custom',
+            path: ['windowStartAt'],
+            message: 'The window must open before the planned launch.',
+          });
+        if (closes <= planned)
+          context.addIssue({
+            code: 'custom',
+            path: ['windowEndAt'],
+            message: 'The window must close after the planned launch.',
+          });
       }),
     );
 
 /** Form values as typed: text until they pass the schema. */
 export type CycleFormValues = z.infer<ReturnType<typeof cycleFormSchema>>;
 
-function conditionsOf(values: CycleFormValues): CycleConditions & Pick<CreateCycleRequest, 'plannedLaunchAt' | 'windowStartAt' | 'windowEndAt'> {
+function conditionsOf(
+  values: CycleFormValues,
+): CycleConditions & Pick<CreateCycleRequest, 'plannedLaunchAt' | 'windowStartAt' | 'windowEndAt'> {
   return {
     plannedLaunchAt: fromLocalInput(values.plannedLaunchAt),
     windowStartAt: fromLocalInput(values.windowStartAt),

@@ -16,7 +16,8 @@ export function containersOf(snapshot: LineupSnapshot): Containers {
 
 export const slotsById = (snapshot: LineupSnapshot) => new Map(snapshot.slots.map((slot) => [slot.id, slot]));
 
-export const isDone = (slot: SlotView) => slot.status === 'launched' || slot.status === 'down' || slot.status === 'scratched';
+export const isDone = (slot: SlotView) =>
+  slot.status === 'launched' || slot.status === 'down' || slot.status === 'scratched';
 
 /** The server moves planned aircraft only: once one is taxiing, its place is held. */
 export const isMovable = (slot: SlotView) => slot.status === 'planned';
@@ -37,7 +38,8 @@ export function moveSlotLocally(snapshot: LineupSnapshot, move: MoveSlotRequest)
   pool.sort(bySideNumber(slots));
 
   const placeOf = new Map<number, { catapultId: number; position: number }>();
-  for (const lane of lanes) lane.slotIds.forEach((id, position) => placeOf.set(id, { catapultId: lane.catapultId, position }));
+  for (const lane of lanes)
+    lane.slotIds.forEach((id, position) => placeOf.set(id, { catapultId: lane.catapultId, position }));
   const moved = snapshot.slots.map((slot) => {
     const place = placeOf.get(slot.id);
     const catapultId = place?.catapultId ?? (pool.includes(slot.id) ? null : slot.catapultId);
@@ -67,29 +69,53 @@ export interface LineupWarning {
 export function lineupWarnings(snapshot: LineupSnapshot, formatTime: (iso: string) => string): LineupWarning[] {
   const slots = slotsById(snapshot);
   const warnings: LineupWarning[] = [];
-  const waiting = (lane: LaneView) => lane.slotIds.map((id) => slots.get(id)).filter((slot): slot is SlotView => !!slot && !isDone(slot));
+  const waiting = (lane: LaneView) =>
+    lane.slotIds.map((id) => slots.get(id)).filter((slot): slot is SlotView => !!slot && !isDone(slot));
 
   for (const lane of snapshot.lanes) {
     const count = waiting(lane).length;
     if (lane.status === 'down' && count > 0) {
-      warnings.push({ kind: 'catapult_down', key: `down-${lane.catapultId}`, text: `Cat ${lane.number} is down with ${count} aircraft still in its lane.` });
+      warnings.push({
+        kind: 'catapult_down',
+        key: `down-${lane.catapultId}`,
+        text: `Cat ${lane.number} is down with ${count} aircraft still in its lane.`,
+      });
     } else if (lane.closed && count > 0) {
-      warnings.push({ kind: 'catapult_closed', key: `closed-${lane.catapultId}`, text: `Cat ${lane.number} is closed while the landing area is in use; ${count} aircraft wait in its lane.` });
+      warnings.push({
+        kind: 'catapult_closed',
+        key: `closed-${lane.catapultId}`,
+        text: `Cat ${lane.number} is closed while the landing area is in use; ${count} aircraft wait in its lane.`,
+      });
     }
   }
   for (const lane of snapshot.lanes) {
     for (const slot of waiting(lane)) {
-      const reasons = slot.figures?.reasons.filter((reason) => reason.code !== 'catapult_down' && reason.code !== 'catapult_closed') ?? [];
+      const reasons =
+        slot.figures?.reasons.filter(
+          (reason) => reason.code !== 'catapult_down' && reason.code !== 'catapult_closed',
+        ) ?? [];
       if (slot.figures && !slot.figures.go && reasons.length > 0) {
-        warnings.push({ kind: 'no_go', key: `nogo-${slot.id}`, text: `${slot.sideNumber} on cat ${lane.number} is no-go: ${reasons.map((reason) => reason.message).join(' ')}` });
+        warnings.push({
+          kind: 'no_go',
+          key: `nogo-${slot.id}`,
+          text: `${slot.sideNumber} on cat ${lane.number} is no-go: ${reasons.map((reason) => reason.message).join(' ')}`,
+        });
       }
       if (slot.missesWindow) {
-        const when = slot.projectedLaunchAt ? ` (projected ${formatTime(slot.projectedLaunchAt)}, window ends ${formatTime(snapshot.cycle.windowEndAt)})` : '';
-        warnings.push({ kind: 'missed_window', key: `window-${slot.id}`, text: `${slot.sideNumber} misses the launch window${when}.` });
+        const when = slot.projectedLaunchAt
+          ? ` (projected ${formatTime(slot.projectedLaunchAt)}, window ends ${formatTime(snapshot.cycle.windowEndAt)})`
+          : '';
+        warnings.push({
+          kind: 'missed_window',
+          key: `window-${slot.id}`,
+          text: `${slot.sideNumber} misses the launch window${when}.`,
+        });
       }
     }
   }
-  const unagreed = snapshot.lanes.flatMap(waiting).filter((slot) => !slot.pilotWeightAckAt || !slot.catapultWeightAckAt);
+  const unagreed = snapshot.lanes
+    .flatMap(waiting)
+    .filter((slot) => !slot.pilotWeightAckAt || !slot.catapultWeightAckAt);
   if (unagreed.length > 0) {
     warnings.push({
       kind: 'weight_not_agreed',

@@ -9,7 +9,9 @@ export function findMySlot(snapshot: LineupSnapshot, pilotId: number) {
   if (!slot) return undefined;
   const lane = snapshot.lanes.find((candidate) => candidate.catapultId === slot.catapultId);
   const slots = new Map(snapshot.slots.map((candidate) => [candidate.id, candidate]));
-  const waiting = lane?.slotIds.map((id) => slots.get(id)).filter((candidate): candidate is SlotView => !!candidate && !gone.has(candidate.status));
+  const waiting = lane?.slotIds
+    .map((id) => slots.get(id))
+    .filter((candidate): candidate is SlotView => !!candidate && !gone.has(candidate.status));
   const index = waiting?.findIndex((candidate) => candidate.id === slot.id) ?? -1;
   return { slot, lane, place: index >= 0 ? index + 1 : null };
 }

@@ -1,9 +1,16 @@
-import { applyLineupPatch, type ChangeKind, type CycleReplay, type LineupSnapshot, type SlotView } from '@catline/contracts';
+import {
+  applyLineupPatch,
+  type ChangeKind,
+  type CycleReplay,
+  type LineupSnapshot,
+  type SlotView,
+} from '@catline/contracts';
 
 /** The lineup after each step: index 0 is the empty cycle at version 0, index n the lineup after the n-th change. */
 export function replaySteps(replay: CycleReplay): LineupSnapshot[] {
   const steps = [replay.start];
-  for (const change of replay.changes) steps.push(applyLineupPatch(steps[steps.length - 1], change.version, change.patch));
+  for (const change of replay.changes)
+    steps.push(applyLineupPatch(steps[steps.length - 1], change.version, change.patch));
   return steps;
 }
 
@@ -31,7 +38,14 @@ export function outOfLineup(snapshot: LineupSnapshot): SlotView[] {
 
 /** Keys that step the replay, and how far: the arrow keys by one, Page Up/Down by ten, Home/End to the ends. */
 export function stepForKey(key: string, current: number, last: number): number | null {
-  const moves: Record<string, number> = { ArrowLeft: current - 1, ArrowRight: current + 1, PageUp: current - 10, PageDown: current + 10, Home: 0, End: last };
+  const moves: Record<string, number> = {
+    ArrowLeft: current - 1,
+    ArrowRight: current + 1,
+    PageUp: current - 10,
+    PageDown: current + 10,
+    Home: 0,
+    End: last,
+  };
   const target = moves[key];
   return target === undefined ? null : Math.min(last, Math.max(0, target));
 }

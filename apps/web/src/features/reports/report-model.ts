@@ -10,7 +10,8 @@ export function pickReportCycle(cycles: CycleView[], chosen: number | null): Cyc
 }
 
 /** The report's launches in timeline order: by catapult, launches first by time, then what did not launch. */
-export const timelineLaunches = (report: CycleReport): ReportLaunch[] => report.catapults.flatMap((catapult) => catapult.launches);
+export const timelineLaunches = (report: CycleReport): ReportLaunch[] =>
+  report.catapults.flatMap((catapult) => catapult.launches);
 
 export interface TimelinePoint {
   slotId: number;
@@ -62,7 +63,10 @@ export function timelineSummary(report: CycleReport): string {
       const launched = catapult.launches.filter((launch) => launch.launchedAt !== null);
       const deltas = launched.flatMap((launch) => (launch.deltaS === null ? [] : [launch.deltaS]));
       const mean = deltas.length > 0 ? deltas.reduce((sum, value) => sum + value, 0) / deltas.length : null;
-      const span = launched.length > 0 ? `, from ${formatClock(launched[0].launchedAt!)} to ${formatClock(launched.at(-1)!.launchedAt!)}` : '';
+      const span =
+        launched.length > 0
+          ? `, from ${formatClock(launched[0].launchedAt!)} to ${formatClock(launched.at(-1)!.launchedAt!)}`
+          : '';
       const against = mean === null ? '' : `, on average ${formatDelta(mean)} against the plan`;
       return `Cat ${catapult.number}: ${launched.length} of ${catapult.launches.length} launched${span}${against}.`;
     });

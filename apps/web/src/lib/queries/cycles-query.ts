@@ -11,6 +11,7 @@ export const cycleKeys = {
 
 export const fetchCycles = (signal?: AbortSignal) => apiRequest<CycleView[]>('/cycles', { signal });
 
-export const cyclesQueryOptions = () => queryOptions({ queryKey: cycleKeys.list(), queryFn: ({ signal }) => fetchCycles(signal) });
+export const cyclesQueryOptions = () =>
+  queryOptions({ queryKey: cycleKeys.list(), queryFn: ({ signal }) => fetchCycles(signal) });
 
 export const useCycles = () => useQuery(cyclesQueryOptions());

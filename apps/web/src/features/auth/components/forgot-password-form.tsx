@@ -10,7 +10,11 @@ import { PageLink } from './page-link.js';
 /** Asks for a link to set a new password; shows the server's answer, which is the same for every e-mail. */
 export function ForgotPasswordForm() {
   const request = useRequestPasswordReset();
-  const { register, handleSubmit, formState: { errors } } = useForm({ resolver: zodResolver(passwordLinkSchema), defaultValues: { email: '' } });
+  const {
+    register,
+    handleSubmit,
+    formState: { errors },
+  } = useForm({ resolver: zodResolver(passwordLinkSchema), defaultValues: { email: '' } });
 
   if (request.isSuccess) {
     return (
@@ -25,7 +29,11 @@ export function ForgotPasswordForm() {
   }
 
   return (
-    <form onSubmit={handleSubmit((values) => request.mutate(values))} noValidate aria-label="Ask for a new password link">
+    <form
+      onSubmit={handleSubmit((values) => request.mutate(values))}
+      noValidate
+      aria-label="Ask for a new password link"
+    >
       <Stack gap="4">
         {request.isError && (
           <Alert.Root status="error" colorPalette="nogo" role="alert">

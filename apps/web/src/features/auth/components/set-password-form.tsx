@@ -24,14 +24,21 @@ export function SetPasswordForm({ send, submitLabel, doneNotice, newLink }: SetP
   const location = useLocation();
   const navigate = useNavigate();
   const [token] = useState(() => tokenFromHash(location.hash));
-  const { register, handleSubmit, formState: { errors } } = useForm({ resolver: zodResolver(newPasswordSchema), defaultValues: { password: '', repeated: '' } });
+  const {
+    register,
+    handleSubmit,
+    formState: { errors },
+  } = useForm({ resolver: zodResolver(newPasswordSchema), defaultValues: { password: '', repeated: '' } });
 
   if (!token) {
     return (
       <Stack gap="4">
         <Alert.Root status="warning" colorPalette="caution" role="alert" data-testid="link-incomplete">
           <Alert.Indicator />
-          <Alert.Title>This page opens from the link in your e-mail, and that link did not arrive whole. Open it again from the mail, or copy the entire address.</Alert.Title>
+          <Alert.Title>
+            This page opens from the link in your e-mail, and that link did not arrive whole. Open it again from the
+            mail, or copy the entire address.
+          </Alert.Title>
         </Alert.Root>
         {newLink && <PageLink to={newLink.to}>{newLink.label}</PageLink>}
       </Stack>
@@ -41,7 +48,10 @@ export function SetPasswordForm({ send, submitLabel, doneNotice, newLink }: SetP
   return (
     <form
       onSubmit={handleSubmit(({ password }) =>
-        send.mutate({ token, newPassword: password }, { onSuccess: () => void navigate('/sign-in', { replace: true, state: { notice: doneNotice } }) }),
+        send.mutate(
+          { token, newPassword: password },
+          { onSuccess: () => void navigate('/sign-in', { replace: true, state: { notice: doneNotice } }) },
+        ),
       )}
       noValidate
       aria-label={submitLabel}

@@ -7,7 +7,10 @@ export interface AdvanceVariables extends AdvanceSlotRequest {
 }
 
 export const advanceSlot = (cycleId: number, { slotId, ...request }: AdvanceVariables) =>
-  apiRequest<LineupCommandResult>(`/cycles/${cycleId}/lineup/slots/${slotId}/advance`, { method: 'POST', body: request });
+  apiRequest<LineupCommandResult>(`/cycles/${cycleId}/lineup/slots/${slotId}/advance`, {
+    method: 'POST',
+    body: request,
+  });
 
 export const useAdvanceSlot = (cycleId: number) =>
   useLineupCommand({ cycleId, send: (variables: AdvanceVariables) => advanceSlot(cycleId, variables) });

@@ -7,7 +7,10 @@ export interface LaunchVariables extends LaunchSlotRequest {
 }
 
 export const launchSlot = (cycleId: number, { slotId, ...request }: LaunchVariables) =>
-  apiRequest<LineupCommandResult>(`/cycles/${cycleId}/lineup/slots/${slotId}/launch`, { method: 'POST', body: request });
+  apiRequest<LineupCommandResult>(`/cycles/${cycleId}/lineup/slots/${slotId}/launch`, {
+    method: 'POST',
+    body: request,
+  });
 
 export const useLaunchSlot = (cycleId: number) =>
   useLineupCommand({ cycleId, send: (variables: LaunchVariables) => launchSlot(cycleId, variables) });

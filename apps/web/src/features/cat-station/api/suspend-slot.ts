@@ -7,7 +7,10 @@ export interface SuspendVariables extends SuspendSlotRequest {
 }
 
 export const suspendSlot = (cycleId: number, { slotId, ...request }: SuspendVariables) =>
-  apiRequest<LineupCommandResult>(`/cycles/${cycleId}/lineup/slots/${slotId}/suspend`, { method: 'POST', body: request });
+  apiRequest<LineupCommandResult>(`/cycles/${cycleId}/lineup/slots/${slotId}/suspend`, {
+    method: 'POST',
+    body: request,
+  });
 
 export const useSuspendSlot = (cycleId: number) =>
   useLineupCommand({ cycleId, send: (variables: SuspendVariables) => suspendSlot(cycleId, variables) });

@@ -15,15 +15,39 @@ export function AircraftFigures({ slot }: { slot: SlotView }) {
     <Stack gap="3">
       <SimpleGrid columns={{ base: 2, md: 3 }} gap="3" data-testid="cat-figures">
         <FigureStat label="Gross weight" value={formatPounds(slot.grossWeightLb)} size="xl" />
-        <FigureStat label="Agreed by pilot" value={agreement(slot.pilotWeightAckAt)} tone={slot.pilotWeightAckAt ? 'go' : 'caution'} size="md" />
-        <FigureStat label="Agreed by me" value={agreement(slot.catapultWeightAckAt)} tone={slot.catapultWeightAckAt ? 'go' : 'caution'} size="md" />
-        <FigureStat label="Catapult setting" value={figures?.catapultSetting ?? 'Out of range'} tone={figures?.catapultSetting == null ? 'nogo' : undefined} size="xl" />
+        <FigureStat
+          label="Agreed by pilot"
+          value={agreement(slot.pilotWeightAckAt)}
+          tone={slot.pilotWeightAckAt ? 'go' : 'caution'}
+          size="md"
+        />
+        <FigureStat
+          label="Agreed by me"
+          value={agreement(slot.catapultWeightAckAt)}
+          tone={slot.catapultWeightAckAt ? 'go' : 'caution'}
+          size="md"
+        />
+        <FigureStat
+          label="Catapult setting"
+          value={figures?.catapultSetting ?? 'Out of range'}
+          tone={figures?.catapultSetting == null ? 'nogo' : undefined}
+          size="xl"
+        />
         <FigureStat label="End speed" value={figures ? formatKnots(figures.endSpeedKt) : '—'} />
         <FigureStat label="Required wind over deck" value={formatKnots(figures?.requiredWindOverDeckKt ?? null)} />
         <FigureStat label="Headwind" value={figures ? formatKnots(figures.headwindKt) : '—'} />
-        <FigureStat label="Margin" value={formatSignedKnots(figures?.marginKt ?? null)} tone={figures?.go ? 'go' : 'nogo'} size="xl" />
+        <FigureStat
+          label="Margin"
+          value={formatSignedKnots(figures?.marginKt ?? null)}
+          tone={figures?.go ? 'go' : 'nogo'}
+          size="xl"
+        />
         <FigureStat label="Trim" value={slot.trimDeg === null ? '—' : `${slot.trimDeg}°`} />
-        <FigureStat label="Afterburner" value={slot.afterburnerRequired ? 'Required' : 'Not required'} tone={slot.afterburnerRequired ? 'caution' : undefined} />
+        <FigureStat
+          label="Afterburner"
+          value={slot.afterburnerRequired ? 'Required' : 'Not required'}
+          tone={slot.afterburnerRequired ? 'caution' : undefined}
+        />
       </SimpleGrid>
       {figures && (
         <HStack gap="2" align="flex-start" wrap="wrap">

@@ -36,7 +36,11 @@ function Station({ snapshot, catapultId }: { snapshot: LineupSnapshot; catapultI
   const anyPending = advance.isPending || suspend.isPending || launch.isPending;
 
   if (!queue) {
-    return <EmptyState title="Your catapult is not in this cycle">Pick the cycle of your ship above, or ask the admin to check your catapult.</EmptyState>;
+    return (
+      <EmptyState title="Your catapult is not in this cycle">
+        Pick the cycle of your ship above, or ask the admin to check your catapult.
+      </EmptyState>
+    );
   }
   const { lane, next } = queue;
   const refused = (action: string) => (error: unknown) => show(refusalNotice(error, action));
@@ -48,14 +52,27 @@ function Station({ snapshot, catapultId }: { snapshot: LineupSnapshot; catapultI
         slot={current}
         pending={suspend.isPending}
         onSuspend={(reason) =>
-          current && suspend.mutate({ slotId: current.id, slotVersion: current.version, reason }, { onError: refused('Suspend') })
+          current &&
+          suspend.mutate({ slotId: current.id, slotVersion: current.version, reason }, { onError: refused('Suspend') })
         }
       />
       {!current ? (
-        <EmptyState title={`No aircraft waiting on cat ${lane.number}`}>The handler has not put anyone in this lane, or every aircraft in it has gone.</EmptyState>
+        <EmptyState title={`No aircraft waiting on cat ${lane.number}`}>
+          The handler has not put anyone in this lane, or every aircraft in it has gone.
+        </EmptyState>
       ) : (
-        <Grid templateColumns={{ base: 'minmax(0, 1fr)', lg: 'minmax(0, 3fr) minmax(0, 2fr)' }} gap="4" alignItems="start">
-          <Stack gap="4" as="section" aria-label="On the catapult" data-testid="current-aircraft" data-side-number={current.sideNumber}>
+        <Grid
+          templateColumns={{ base: 'minmax(0, 1fr)', lg: 'minmax(0, 3fr) minmax(0, 2fr)' }}
+          gap="4"
+          alignItems="start"
+        >
+          <Stack
+            gap="4"
+            as="section"
+            aria-label="On the catapult"
+            data-testid="current-aircraft"
+            data-side-number={current.sideNumber}
+          >
             <Flex gap="3" align="center" wrap="wrap">
               <Text fontSize={{ base: '3xl', md: '4xl' }} fontWeight="700" lineHeight="1">
                 {current.sideNumber}
@@ -65,7 +82,8 @@ function Station({ snapshot, catapultId }: { snapshot: LineupSnapshot; catapultI
                   {current.typeDesignation} · {current.squadronCode}
                 </Text>
                 <Text fontSize="sm" color="fg.muted">
-                  {current.pilotName ?? 'No pilot assigned'} · projected {formatOptionalClock(current.projectedLaunchAt)}
+                  {current.pilotName ?? 'No pilot assigned'} · projected{' '}
+                  {formatOptionalClock(current.projectedLaunchAt)}
                 </Text>
               </Box>
               <SlotStatusBadge status={current.status} size="lg" />
@@ -77,7 +95,11 @@ function Station({ snapshot, catapultId }: { snapshot: LineupSnapshot; catapultI
               slot={current}
               pending={advance.isPending}
               onAdvance={(to) =>
-                !anyPending && advance.mutate({ slotId: current.id, slotVersion: current.version, to }, { onError: refused('That step') })
+                !anyPending &&
+                advance.mutate(
+                  { slotId: current.id, slotVersion: current.version, to },
+                  { onError: refused('That step') },
+                )
               }
             />
             <LaunchPanel
@@ -113,19 +135,28 @@ export function CatStationScreen() {
 
   return (
     <Stack gap="3">
-      <PageHeader title={lane ? `Cat station · Cat ${lane.number}` : 'Cat station'} subtitle={lane && `${lane.position} catapult${cycle ? ` · cycle ${cycle.number}` : ''}`}>
+      <PageHeader
+        title={lane ? `Cat station · Cat ${lane.number}` : 'Cat station'}
+        subtitle={lane && `${lane.position} catapult${cycle ? ` · cycle ${cycle.number}` : ''}`}
+      >
         {cycle && <ConnectionBadge state={live.connection} />}
-        {cycles.data && cycles.data.length > 1 && <CyclePicker cycles={cycles.data} value={cycle?.id} onChange={choose} />}
+        {cycles.data && cycles.data.length > 1 && (
+          <CyclePicker cycles={cycles.data} value={cycle?.id} onChange={choose} />
+        )}
       </PageHeader>
       <CautionLine />
       {user.catapultId === null ? (
-        <EmptyState title="No catapult assigned to you">The admin assigns each catapult officer a catapult under People.</EmptyState>
+        <EmptyState title="No catapult assigned to you">
+          The admin assigns each catapult officer a catapult under People.
+        </EmptyState>
       ) : cycles.isPending ? (
         <LoadingState label="Finding the current cycle…" />
       ) : cycles.isError ? (
         <ErrorState error={cycles.error} onRetry={() => void cycles.refetch()} />
       ) : !cycle ? (
-        <EmptyState title="No cycle yet">Your catapult's aircraft appear here once air operations creates a cycle.</EmptyState>
+        <EmptyState title="No cycle yet">
+          Your catapult's aircraft appear here once air operations creates a cycle.
+        </EmptyState>
       ) : live.refusal ? (
         <ErrorState title="This cycle cannot be followed live" error={new Error(live.refusal)} />
       ) : (

@@ -19,10 +19,23 @@ export function LaunchPanel({ slot, lane, snapshot, pending, onLaunch }: LaunchP
   const noGo = slot.figures !== null && !slot.figures.go;
   const needsReason = noGo && overrideReason.trim().length === 0;
   return (
-    <Stack as="section" aria-label="Launch" gap="3" borderWidth="2px" borderColor={blockers.length === 0 && !needsReason ? 'go.border' : 'border'} rounded="card" p="3">
+    <Stack
+      as="section"
+      aria-label="Launch"
+      gap="3"
+      borderWidth="2px"
+      borderColor={blockers.length === 0 && !needsReason ? 'go.border' : 'border'}
+      rounded="card"
+      p="3"
+    >
       {noGo && (
         <FormField label="Launch despite no-go: your reason" required helper="Recorded with the launch.">
-          <Input value={overrideReason} onChange={(event) => setOverrideReason(event.currentTarget.value)} h="tap" maxLength={300} />
+          <Input
+            value={overrideReason}
+            onChange={(event) => setOverrideReason(event.currentTarget.value)}
+            h="tap"
+            maxLength={300}
+          />
         </FormField>
       )}
       <Button

@@ -20,7 +20,9 @@ export function NextUp({ slots }: { slots: SlotView[] }) {
             <SlotStatusBadge status={slot.status} />
           </Flex>
           <Text fontSize="sm" color="fg.muted" textStyle="figure">
-            {formatPounds(slot.grossWeightLb)} · {slot.pilotWeightAckAt ? 'weight acknowledged' : 'weight not acknowledged'} · projected {formatOptionalClock(slot.projectedLaunchAt)}
+            {formatPounds(slot.grossWeightLb)} ·{' '}
+            {slot.pilotWeightAckAt ? 'weight acknowledged' : 'weight not acknowledged'} · projected{' '}
+            {formatOptionalClock(slot.projectedLaunchAt)}
           </Text>
         </Box>
       ))}

@@ -13,7 +13,14 @@ interface ReadinessStepsProps {
 export function ReadinessSteps({ slot, pending, onAdvance }: ReadinessStepsProps) {
   if (slot.status === 'suspended') {
     return (
-      <Button h="touch" fontSize="xl" colorPalette="caution" onClick={() => onAdvance('resume')} loading={pending} data-testid="resume">
+      <Button
+        h="touch"
+        fontSize="xl"
+        colorPalette="caution"
+        onClick={() => onAdvance('resume')}
+        loading={pending}
+        data-testid="resume"
+      >
         Resume: back on the catapult
       </Button>
     );

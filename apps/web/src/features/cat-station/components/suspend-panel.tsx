@@ -4,13 +4,30 @@ import type { SlotView } from '@catline/contracts';
 import { canSuspend } from '../cat-station-model.js';
 
 /** Always on screen: stopping a launch must never be more than one tap and a word away. */
-export function SuspendPanel({ slot, pending, onSuspend }: { slot: SlotView | undefined; pending: boolean; onSuspend: (reason: string) => void }) {
+export function SuspendPanel({
+  slot,
+  pending,
+  onSuspend,
+}: {
+  slot: SlotView | undefined;
+  pending: boolean;
+  onSuspend: (reason: string) => void;
+}) {
   const [reason, setReason] = useState('');
   const [tried, setTried] = useState(false);
   const possible = slot !== undefined && canSuspend(slot);
   const missing = reason.trim().length === 0;
   return (
-    <Stack as="section" aria-label="Suspend" gap="2" borderWidth="2px" borderColor="nogo.border" rounded="card" p="3" bg="nogo.subtle">
+    <Stack
+      as="section"
+      aria-label="Suspend"
+      gap="2"
+      borderWidth="2px"
+      borderColor="nogo.border"
+      rounded="card"
+      p="3"
+      bg="nogo.subtle"
+    >
       <HStack gap="2" align="stretch" wrap={{ base: 'wrap', md: 'nowrap' }}>
         <Input
           aria-label="Reason to suspend"
@@ -50,7 +67,9 @@ export function SuspendPanel({ slot, pending, onSuspend }: { slot: SlotView | un
       )}
       {!possible && (
         <Text fontSize="sm" color="fg.muted">
-          {slot?.status === 'suspended' ? `Suspended: ${slot.suspendReason ?? 'no reason given'}` : 'Suspend becomes possible once the aircraft is taxiing.'}
+          {slot?.status === 'suspended'
+            ? `Suspended: ${slot.suspendReason ?? 'no reason given'}`
+            : 'Suspend becomes possible once the aircraft is taxiing.'}
         </Text>
       )}
     </Stack>

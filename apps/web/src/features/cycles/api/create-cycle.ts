@@ -3,7 +3,8 @@ import type { CreateCycleRequest, CycleView } from '@catline/contracts';
 import { apiRequest } from '../../../lib/api-client.js';
 import { cyclesFeatureKeys } from './cycles-feature-keys.js';
 
-export const createCycle = (request: CreateCycleRequest) => apiRequest<CycleView>('/cycles', { method: 'POST', body: request });
+export const createCycle = (request: CreateCycleRequest) =>
+  apiRequest<CycleView>('/cycles', { method: 'POST', body: request });
 
 export function useCreateCycle() {
   const queryClient = useQueryClient();

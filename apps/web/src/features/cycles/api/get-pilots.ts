@@ -5,6 +5,7 @@ import { cyclesFeatureKeys } from './cycles-feature-keys.js';
 
 export const getPilots = (signal?: AbortSignal) => apiRequest<UserView[]>('/users/pilots', { signal });
 
-export const pilotsQueryOptions = () => queryOptions({ queryKey: cyclesFeatureKeys.pilots(), queryFn: ({ signal }) => getPilots(signal) });
+export const pilotsQueryOptions = () =>
+  queryOptions({ queryKey: cyclesFeatureKeys.pilots(), queryFn: ({ signal }) => getPilots(signal) });
 
 export const usePilots = () => useQuery(pilotsQueryOptions());

@@ -7,4 +7,5 @@ import { csvFormData } from '../../../lib/csv-upload.js';
 export const previewAirPlan = (cycleId: number, file: File) =>
   apiRequest<AirPlanPreview>(`/cycles/${cycleId}/air-plan/preview`, { method: 'POST', body: csvFormData(file) });
 
-export const usePreviewAirPlan = (cycleId: number) => useMutation({ mutationFn: (file: File) => previewAirPlan(cycleId, file) });
+export const usePreviewAirPlan = (cycleId: number) =>
+  useMutation({ mutationFn: (file: File) => previewAirPlan(cycleId, file) });

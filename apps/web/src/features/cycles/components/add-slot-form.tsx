@@ -15,10 +15,20 @@ export function AddSlotForm({ cycleId }: { cycleId: number }) {
   const aircraft = useAircraft();
   const pilots = usePilots();
   const addSlot = useAddSlot(cycleId);
-  const { register, control, handleSubmit, reset, formState: { errors } } = useForm({ resolver: zodResolver(addSlotSchema), defaultValues: blankSlot });
+  const {
+    register,
+    control,
+    handleSubmit,
+    reset,
+    formState: { errors },
+  } = useForm({ resolver: zodResolver(addSlotSchema), defaultValues: blankSlot });
 
   return (
-    <form onSubmit={handleSubmit((slot) => addSlot.mutate(slot, { onSuccess: () => reset() }))} noValidate aria-label="Add an aircraft to the cycle">
+    <form
+      onSubmit={handleSubmit((slot) => addSlot.mutate(slot, { onSuccess: () => reset() }))}
+      noValidate
+      aria-label="Add an aircraft to the cycle"
+    >
       <Stack gap="3">
         {addSlot.isError && (
           <Alert.Root status="error" colorPalette="nogo" role="alert">
@@ -34,7 +44,10 @@ export function AddSlotForm({ cycleId }: { cycleId: number }) {
               placeholder={aircraft.isPending ? 'Loading…' : 'Pick an aircraft'}
               choices={(aircraft.data ?? [])
                 .filter((candidate) => candidate.serviceable)
-                .map((candidate) => ({ value: String(candidate.id), label: `${candidate.sideNumber} · ${candidate.typeDesignation} · ${candidate.squadronCode}` }))}
+                .map((candidate) => ({
+                  value: String(candidate.id),
+                  label: `${candidate.sideNumber} · ${candidate.typeDesignation} · ${candidate.squadronCode}`,
+                }))}
             />
           </FormField>
           <FormField label="Pilot">

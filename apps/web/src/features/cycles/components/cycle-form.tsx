@@ -27,8 +27,22 @@ const numberFields = [
   ['pressureHpa', 'Pressure (hPa)'],
 ] as const;
 
-export function CycleForm({ initial, withNumber, submitLabel, pending, serverError, readOnly, onSubmit, onCancel }: CycleFormProps) {
-  const { register, control, handleSubmit, formState: { errors } } = useForm({ resolver: zodResolver(cycleFormSchema(withNumber)), defaultValues: initial });
+export function CycleForm({
+  initial,
+  withNumber,
+  submitLabel,
+  pending,
+  serverError,
+  readOnly,
+  onSubmit,
+  onCancel,
+}: CycleFormProps) {
+  const {
+    register,
+    control,
+    handleSubmit,
+    formState: { errors },
+  } = useForm({ resolver: zodResolver(cycleFormSchema(withNumber)), defaultValues: initial });
 
   return (
     <form onSubmit={handleSubmit(onSubmit)} noValidate aria-label={submitLabel}>
@@ -70,7 +84,12 @@ export function CycleForm({ initial, withNumber, submitLabel, pending, serverErr
         </SimpleGrid>
         <HStack gap="6" wrap="wrap">
           <CheckControl control={control} name="night" label="Night cycle" disabled={readOnly} />
-          <CheckControl control={control} name="landingAreaInUse" label="Landing area in use (waist catapults closed)" disabled={readOnly} />
+          <CheckControl
+            control={control}
+            name="landingAreaInUse"
+            label="Landing area in use (waist catapults closed)"
+            disabled={readOnly}
+          />
         </HStack>
         {!readOnly && (
           <HStack gap="2">

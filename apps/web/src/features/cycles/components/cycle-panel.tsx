@@ -22,7 +22,16 @@ export function CyclePanel({ cycle }: { cycle: CycleView }) {
   const { notice, show, dismiss } = useNotice();
 
   return (
-    <Stack gap="4" borderWidth="1px" rounded="card" p={{ base: '3', md: '4' }} bg="bg.panel" as="section" aria-label={`Cycle ${cycle.number}`} data-testid="cycle-panel">
+    <Stack
+      gap="4"
+      borderWidth="1px"
+      rounded="card"
+      p={{ base: '3', md: '4' }}
+      bg="bg.panel"
+      as="section"
+      aria-label={`Cycle ${cycle.number}`}
+      data-testid="cycle-panel"
+    >
       <Flex gap="3" align="center" wrap="wrap" justify="space-between">
         <HStack gap="3">
           <Heading as="h2" size="lg">
@@ -38,12 +47,27 @@ export function CyclePanel({ cycle }: { cycle: CycleView }) {
           </Button>
           <RoleGate roles={['air_operations']}>
             {cycle.state === 'planning' && (
-              <Button size="sm" colorPalette="go" loading={start.isPending} onClick={() => start.mutate(cycle.version, { onError: (error) => show(refusalNotice(error, 'Starting')) })}>
+              <Button
+                size="sm"
+                colorPalette="go"
+                loading={start.isPending}
+                onClick={() =>
+                  start.mutate(cycle.version, { onError: (error) => show(refusalNotice(error, 'Starting')) })
+                }
+              >
                 Start launching
               </Button>
             )}
             {cycle.state === 'executing' && (
-              <Button size="sm" colorPalette="nogo" variant="outline" loading={close.isPending} onClick={() => close.mutate(cycle.version, { onError: (error) => show(refusalNotice(error, 'Closing')) })}>
+              <Button
+                size="sm"
+                colorPalette="nogo"
+                variant="outline"
+                loading={close.isPending}
+                onClick={() =>
+                  close.mutate(cycle.version, { onError: (error) => show(refusalNotice(error, 'Closing')) })
+                }
+              >
                 Close cycle
               </Button>
             )}

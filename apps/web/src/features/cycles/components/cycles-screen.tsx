@@ -14,13 +14,29 @@ import { newCycleValues, toCreateRequest } from '../cycle-form-model.js';
 import { CycleForm } from './cycle-form.js';
 import { CyclePanel } from './cycle-panel.js';
 
-function NewCycle({ cycles, onCreated, onCancel }: { cycles: CycleView[]; onCreated: (cycle: CycleView) => void; onCancel: () => void }) {
+function NewCycle({
+  cycles,
+  onCreated,
+  onCancel,
+}: {
+  cycles: CycleView[];
+  onCreated: (cycle: CycleView) => void;
+  onCancel: () => void;
+}) {
   const ships = useShips();
   const create = useCreateCycle();
   const shipId = ships.data?.[0]?.id;
   const nextNumber = Math.max(0, ...cycles.map((cycle) => cycle.number)) + 1;
   return (
-    <Stack gap="3" borderWidth="1px" rounded="card" p={{ base: '3', md: '4' }} bg="bg.panel" as="section" aria-label="New cycle">
+    <Stack
+      gap="3"
+      borderWidth="1px"
+      rounded="card"
+      p={{ base: '3', md: '4' }}
+      bg="bg.panel"
+      as="section"
+      aria-label="New cycle"
+    >
       <Text fontWeight="700">New cycle</Text>
       <CycleForm
         initial={newCycleValues(new Date(), nextNumber)}
@@ -29,7 +45,9 @@ function NewCycle({ cycles, onCreated, onCancel }: { cycles: CycleView[]; onCrea
         pending={create.isPending}
         serverError={create.isError ? errorMessage(create.error) : ships.isError ? errorMessage(ships.error) : null}
         onCancel={onCancel}
-        onSubmit={(values) => shipId !== undefined && create.mutate(toCreateRequest(values, shipId), { onSuccess: onCreated })}
+        onSubmit={(values) =>
+          shipId !== undefined && create.mutate(toCreateRequest(values, shipId), { onSuccess: onCreated })
+        }
       />
     </Stack>
   );
@@ -41,28 +59,69 @@ export function CyclesScreen() {
   const [selectedId, setSelectedId] = useState<number | null>(null);
 
   const columns: Column<CycleView>[] = [
-    { key: 'number', header: 'Cycle', cell: (cycle) => <Text fontWeight="700">{cycle.number}</Text>, sortValue: (cycle) => cycle.number, numeric: true },
+    {
+      key: 'number',
+      header: 'Cycle',
+      cell: (cycle) => <Text fontWeight="700">{cycle.number}</Text>,
+      sortValue: (cycle) => cycle.number,
+      numeric: true,
+    },
     {
       key: 'state',
       header: 'State',
       cell: (cycle) => (
-        <Badge colorPalette={cycle.state === 'executing' ? 'go' : 'gray'} variant={cycle.state === 'closed' ? 'outline' : 'solid'}>
+        <Badge
+          colorPalette={cycle.state === 'executing' ? 'go' : 'gray'}
+          variant={cycle.state === 'closed' ? 'outline' : 'solid'}
+        >
           {cycle.state}
         </Badge>
       ),
       sortValue: (cycle) => cycle.state,
     },
-    { key: 'planned', header: 'Planned launch', cell: (cycle) => formatDateTime(cycle.plannedLaunchAt), sortValue: (cycle) => Date.parse(cycle.plannedLaunchAt), filterText: (cycle) => formatDateTime(cycle.plannedLaunchAt) },
-    { key: 'window', header: 'Window', cell: (cycle) => `${formatShortClock(cycle.windowStartAt)}–${formatShortClock(cycle.windowEndAt)}` },
+    {
+      key: 'planned',
+      header: 'Planned launch',
+      cell: (cycle) => formatDateTime(cycle.plannedLaunchAt),
+      sortValue: (cycle) => Date.parse(cycle.plannedLaunchAt),
+      filterText: (cycle) => formatDateTime(cycle.plannedLaunchAt),
+    },
+    {
+      key: 'window',
+      header: 'Window',
+      cell: (cycle) => `${formatShortClock(cycle.windowStartAt)}–${formatShortClock(cycle.windowEndAt)}`,
+    },
     { key: 'case', header: 'Case', cell: (cycle) => cycle.weatherCase, sortValue: (cycle) => cycle.weatherCase },
-    { key: 'light', header: 'Day / night', cell: (cycle) => (cycle.night ? 'Night' : 'Day'), sortValue: (cycle) => (cycle.night ? 'night' : 'day') },
-    { key: 'aircraft', header: 'Aircraft', cell: (cycle) => cycle.slotCount, sortValue: (cycle) => cycle.slotCount, numeric: true },
-    { key: 'launched', header: 'Launched', cell: (cycle) => cycle.launchedCount, sortValue: (cycle) => cycle.launchedCount, numeric: true },
+    {
+      key: 'light',
+      header: 'Day / night',
+      cell: (cycle) => (cycle.night ? 'Night' : 'Day'),
+      sortValue: (cycle) => (cycle.night ? 'night' : 'day'),
+    },
+    {
+      key: 'aircraft',
+      header: 'Aircraft',
+      cell: (cycle) => cycle.slotCount,
+      sortValue: (cycle) => cycle.slotCount,
+      numeric: true,
+    },
+    {
+      key: 'launched',
+      header: 'Launched',
+      cell: (cycle) => cycle.launchedCount,
+      sortValue: (cycle) => cycle.launchedCount,
+      numeric: true,
+    },
     {
       key: 'open',
       header: '',
       cell: (cycle) => (
-        <Button size="xs" variant={cycle.id === selectedId ? 'solid' : 'outline'} onClick={() => setSelectedId(cycle.id)} aria-label={`Show cycle ${cycle.number}`}>
+        <Button
+          size="xs"
+          variant={cycle.id === selectedId ? 'solid' : 'outline'}
+          onClick={() => setSelectedId(cycle.id)}
+          aria-label={`Show cycle ${cycle.number}`}
+        >
           Show
         </Button>
       ),

@@ -3,9 +3,13 @@ import type { CreateSquadronRequest, SquadronView } from '@catline/contracts';
 import { apiRequest } from '../../../lib/api-client.js';
 import { fleetKeys } from './fleet-keys.js';
 
-export const createSquadron = (request: CreateSquadronRequest) => apiRequest<SquadronView>('/squadrons', { method: 'POST', body: request });
+export const createSquadron = (request: CreateSquadronRequest) =>
+  apiRequest<SquadronView>('/squadrons', { method: 'POST', body: request });
 
 export function useCreateSquadron() {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: createSquadron, onSettled: () => queryClient.invalidateQueries({ queryKey: fleetKeys.squadrons.all }) });
+  return useMutation({
+    mutationFn: createSquadron,
+    onSettled: () => queryClient.invalidateQueries({ queryKey: fleetKeys.squadrons.all }),
+  });
 }

@@ -6,5 +6,8 @@ export const deleteAircraft = (id: number) => apiRequest<void>(`/aircraft/${id}`
 
 export function useDeleteAircraft() {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: deleteAircraft, onSettled: () => queryClient.invalidateQueries({ queryKey: fleetKeys.aircraft.all }) });
+  return useMutation({
+    mutationFn: deleteAircraft,
+    onSettled: () => queryClient.invalidateQueries({ queryKey: fleetKeys.aircraft.all }),
+  });
 }

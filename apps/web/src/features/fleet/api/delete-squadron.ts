@@ -6,5 +6,8 @@ export const deleteSquadron = (id: number) => apiRequest<void>(`/squadrons/${id}
 
 export function useDeleteSquadron() {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: deleteSquadron, onSettled: () => queryClient.invalidateQueries({ queryKey: fleetKeys.squadrons.all }) });
+  return useMutation({
+    mutationFn: deleteSquadron,
+    onSettled: () => queryClient.invalidateQueries({ queryKey: fleetKeys.squadrons.all }),
+  });
 }

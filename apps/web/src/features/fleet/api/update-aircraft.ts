@@ -21,7 +21,9 @@ export function useUpdateAircraft() {
     onMutate: async (variables) => {
       await queryClient.cancelQueries({ queryKey: key });
       const previous = queryClient.getQueryData<AircraftView[]>(key);
-      queryClient.setQueryData<AircraftView[]>(key, (list) => list?.map((row) => (row.id === variables.id ? { ...row, ...variables } : row)));
+      queryClient.setQueryData<AircraftView[]>(key, (list) =>
+        list?.map((row) => (row.id === variables.id ? { ...row, ...variables } : row)),
+      );
       return { previous };
     },
     onError: (_error, _variables, context) => queryClient.setQueryData(key, context?.previous),

@@ -8,12 +8,32 @@ import { errorMessage } from '../../../lib/api-error.js';
 import { useCreateAircraft } from '../api/create-aircraft.js';
 import { aircraftSchema, blankAircraft } from '../fleet-model.js';
 
-export function AircraftForm({ types, squadrons, spots }: { types: AircraftTypeView[]; squadrons: SquadronView[]; spots: DeckSpot[] }) {
+export function AircraftForm({
+  types,
+  squadrons,
+  spots,
+}: {
+  types: AircraftTypeView[];
+  squadrons: SquadronView[];
+  spots: DeckSpot[];
+}) {
   const create = useCreateAircraft();
-  const { register, control, handleSubmit, reset, formState: { errors } } = useForm({ resolver: zodResolver(aircraftSchema), defaultValues: blankAircraft });
+  const {
+    register,
+    control,
+    handleSubmit,
+    reset,
+    formState: { errors },
+  } = useForm({ resolver: zodResolver(aircraftSchema), defaultValues: blankAircraft });
 
   return (
-    <form onSubmit={handleSubmit((aircraft) => create.mutate({ ...aircraft, serviceable: true }, { onSuccess: () => reset() }))} noValidate aria-label="Add an aircraft">
+    <form
+      onSubmit={handleSubmit((aircraft) =>
+        create.mutate({ ...aircraft, serviceable: true }, { onSuccess: () => reset() }),
+      )}
+      noValidate
+      aria-label="Add an aircraft"
+    >
       <Stack gap="3">
         {create.isError && (
           <Alert.Root status="error" colorPalette="nogo" role="alert">
@@ -26,13 +46,31 @@ export function AircraftForm({ types, squadrons, spots }: { types: AircraftTypeV
             <Input {...register('sideNumber')} />
           </FormField>
           <FormField label="Type" error={errors.typeId?.message} required>
-            <SelectControl control={control} name="typeId" placeholder="Pick a type" choices={types.map((type) => ({ value: String(type.id), label: `${type.designation} · ${type.name}` }))} />
+            <SelectControl
+              control={control}
+              name="typeId"
+              placeholder="Pick a type"
+              choices={types.map((type) => ({ value: String(type.id), label: `${type.designation} · ${type.name}` }))}
+            />
           </FormField>
           <FormField label="Squadron" error={errors.squadronId?.message} required>
-            <SelectControl control={control} name="squadronId" placeholder="Pick a squadron" choices={squadrons.map((squadron) => ({ value: String(squadron.id), label: `${squadron.code} · ${squadron.name}` }))} />
+            <SelectControl
+              control={control}
+              name="squadronId"
+              placeholder="Pick a squadron"
+              choices={squadrons.map((squadron) => ({
+                value: String(squadron.id),
+                label: `${squadron.code} · ${squadron.name}`,
+              }))}
+            />
           </FormField>
           <FormField label="Parked at" error={errors.parkedSpot?.message} required>
-            <SelectControl control={control} name="parkedSpot" placeholder="Pick a deck spot" choices={spots.map((spot) => ({ value: spot.name, label: spot.name }))} />
+            <SelectControl
+              control={control}
+              name="parkedSpot"
+              placeholder="Pick a deck spot"
+              choices={spots.map((spot) => ({ value: spot.name, label: spot.name }))}
+            />
           </FormField>
         </SimpleGrid>
         <Button type="submit" colorPalette="accent" alignSelf="flex-start" loading={create.isPending}>

@@ -33,17 +33,32 @@ export function FleetScreen() {
   const [doomed, setDoomed] = useState<Doomed>(null);
 
   const aircraftColumns: Column<AircraftView>[] = [
-    { key: 'side', header: 'Side number', cell: (row) => <Text fontWeight="700">{row.sideNumber}</Text>, sortValue: (row) => row.sideNumber },
+    {
+      key: 'side',
+      header: 'Side number',
+      cell: (row) => <Text fontWeight="700">{row.sideNumber}</Text>,
+      sortValue: (row) => row.sideNumber,
+    },
     { key: 'type', header: 'Type', cell: (row) => row.typeDesignation, sortValue: (row) => row.typeDesignation },
     { key: 'squadron', header: 'Squadron', cell: (row) => row.squadronCode, sortValue: (row) => row.squadronCode },
     { key: 'spot', header: 'Parked at', cell: (row) => row.parkedSpot, sortValue: (row) => row.parkedSpot },
     {
       key: 'serviceable',
       header: 'State',
-      cell: (row) => <Badge colorPalette={row.serviceable ? 'go' : 'nogo'}>{row.serviceable ? 'Serviceable' : 'Not serviceable'}</Badge>,
+      cell: (row) => (
+        <Badge colorPalette={row.serviceable ? 'go' : 'nogo'}>
+          {row.serviceable ? 'Serviceable' : 'Not serviceable'}
+        </Badge>
+      ),
       sortValue: (row) => (row.serviceable ? 'serviceable' : 'not serviceable'),
     },
-    { key: 'shots', header: 'Catapult shots', cell: (row) => row.catapultShots, sortValue: (row) => row.catapultShots, numeric: true },
+    {
+      key: 'shots',
+      header: 'Catapult shots',
+      cell: (row) => row.catapultShots,
+      sortValue: (row) => row.catapultShots,
+      numeric: true,
+    },
     ...(admin
       ? [
           {
@@ -51,10 +66,24 @@ export function FleetScreen() {
             header: 'Actions',
             cell: (row: AircraftView) => (
               <HStack gap="1">
-                <Button size="xs" variant="outline" onClick={() => updateAircraft.mutate({ id: row.id, serviceable: !row.serviceable }, { onError: (error) => show(refusalNotice(error, 'The change')) })}>
+                <Button
+                  size="xs"
+                  variant="outline"
+                  onClick={() =>
+                    updateAircraft.mutate(
+                      { id: row.id, serviceable: !row.serviceable },
+                      { onError: (error) => show(refusalNotice(error, 'The change')) },
+                    )
+                  }
+                >
                   {row.serviceable ? 'Mark unserviceable' : 'Mark serviceable'}
                 </Button>
-                <Button size="xs" variant="ghost" colorPalette="nogo" onClick={() => setDoomed({ kind: 'aircraft', row })}>
+                <Button
+                  size="xs"
+                  variant="ghost"
+                  colorPalette="nogo"
+                  onClick={() => setDoomed({ kind: 'aircraft', row })}
+                >
                   Remove
                 </Button>
               </HStack>
@@ -65,7 +94,12 @@ export function FleetScreen() {
   ];
 
   const squadronColumns: Column<SquadronView>[] = [
-    { key: 'code', header: 'Code', cell: (row) => <Text fontWeight="700">{row.code}</Text>, sortValue: (row) => row.code },
+    {
+      key: 'code',
+      header: 'Code',
+      cell: (row) => <Text fontWeight="700">{row.code}</Text>,
+      sortValue: (row) => row.code,
+    },
     { key: 'name', header: 'Name', cell: (row) => row.name, sortValue: (row) => row.name },
     { key: 'email', header: 'Report e-mail', cell: (row) => row.email, sortValue: (row) => row.email },
     {
@@ -81,7 +115,12 @@ export function FleetScreen() {
             key: 'actions',
             header: 'Actions',
             cell: (row: SquadronView) => (
-              <Button size="xs" variant="ghost" colorPalette="nogo" onClick={() => setDoomed({ kind: 'squadron', row })}>
+              <Button
+                size="xs"
+                variant="ghost"
+                colorPalette="nogo"
+                onClick={() => setDoomed({ kind: 'squadron', row })}
+              >
                 Remove
               </Button>
             ),
@@ -92,7 +131,10 @@ export function FleetScreen() {
 
   const remove = () => {
     if (!doomed) return;
-    const options = { onSettled: () => setDoomed(null), onError: (error: unknown) => show(refusalNotice(error, 'Removing')) };
+    const options = {
+      onSettled: () => setDoomed(null),
+      onError: (error: unknown) => show(refusalNotice(error, 'Removing')),
+    };
     if (doomed.kind === 'aircraft') deleteAircraft.mutate(doomed.row.id, options);
     else deleteSquadron.mutate(doomed.row.id, options);
   };
@@ -110,13 +152,25 @@ export function FleetScreen() {
           <Stack gap="4">
             <QueryView query={aircraft} loadingLabel="Loading aircraft…">
               {(rows) => (
-                <DataTable caption="Aircraft" rows={rows} columns={aircraftColumns} rowKey={(row) => row.id} emptyTitle="No aircraft yet" emptyHint="The admin adds aircraft below." initialSort={{ key: 'side' }} />
+                <DataTable
+                  caption="Aircraft"
+                  rows={rows}
+                  columns={aircraftColumns}
+                  rowKey={(row) => row.id}
+                  emptyTitle="No aircraft yet"
+                  emptyHint="The admin adds aircraft below."
+                  initialSort={{ key: 'side' }}
+                />
               )}
             </QueryView>
             <RoleGate roles={['admin']}>
               <Stack gap="2" borderWidth="1px" rounded="card" p="3">
                 <Text fontWeight="700">Add an aircraft</Text>
-                <AircraftForm types={types.data ?? []} squadrons={squadrons.data ?? []} spots={ships.data?.[0]?.deckSpots ?? []} />
+                <AircraftForm
+                  types={types.data ?? []}
+                  squadrons={squadrons.data ?? []}
+                  spots={ships.data?.[0]?.deckSpots ?? []}
+                />
               </Stack>
             </RoleGate>
           </Stack>
@@ -124,7 +178,16 @@ export function FleetScreen() {
         <Tabs.Content value="squadrons">
           <Stack gap="4">
             <QueryView query={squadrons} loadingLabel="Loading squadrons…">
-              {(rows) => <DataTable caption="Squadrons" rows={rows} columns={squadronColumns} rowKey={(row) => row.id} emptyTitle="No squadrons yet" initialSort={{ key: 'code' }} />}
+              {(rows) => (
+                <DataTable
+                  caption="Squadrons"
+                  rows={rows}
+                  columns={squadronColumns}
+                  rowKey={(row) => row.id}
+                  emptyTitle="No squadrons yet"
+                  initialSort={{ key: 'code' }}
+                />
+              )}
             </QueryView>
             <RoleGate roles={['admin']}>
               <Stack gap="2" borderWidth="1px" rounded="card" p="3">

@@ -8,11 +8,20 @@ import { blankSquadron, squadronSchema } from '../fleet-model.js';
 
 export function SquadronForm() {
   const create = useCreateSquadron();
-  const { register, handleSubmit, reset, formState: { errors } } = useForm({ resolver: zodResolver(squadronSchema), defaultValues: blankSquadron });
+  const {
+    register,
+    handleSubmit,
+    reset,
+    formState: { errors },
+  } = useForm({ resolver: zodResolver(squadronSchema), defaultValues: blankSquadron });
   const code = register('code');
 
   return (
-    <form onSubmit={handleSubmit((squadron) => create.mutate(squadron, { onSuccess: () => reset() }))} noValidate aria-label="Add a squadron">
+    <form
+      onSubmit={handleSubmit((squadron) => create.mutate(squadron, { onSuccess: () => reset() }))}
+      noValidate
+      aria-label="Add a squadron"
+    >
       <Stack gap="3">
         {create.isError && (
           <Alert.Root status="error" colorPalette="nogo" role="alert">

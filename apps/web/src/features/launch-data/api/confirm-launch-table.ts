@@ -4,7 +4,9 @@ import { apiRequest } from '../../../lib/api-client.js';
 import { aircraftTypeKeys } from '../../../lib/queries/aircraft-types-query.js';
 
 export const confirmLaunchTable = (typeId: number, uploadId: number) =>
-  apiRequest<AircraftTypeView>(`/aircraft-types/${typeId}/launch-table/imports/${uploadId}/confirm`, { method: 'POST' });
+  apiRequest<AircraftTypeView>(`/aircraft-types/${typeId}/launch-table/imports/${uploadId}/confirm`, {
+    method: 'POST',
+  });
 
 /** Replaces the type's whole launch table with a checked upload; the screen shows the type as answered. */
 export function useConfirmLaunchTable(typeId: number) {
@@ -12,7 +14,9 @@ export function useConfirmLaunchTable(typeId: number) {
   return useMutation({
     mutationFn: (uploadId: number) => confirmLaunchTable(typeId, uploadId),
     onSuccess: (updated) =>
-      queryClient.setQueryData<AircraftTypeView[]>(aircraftTypeKeys.list(), (list) => list?.map((type) => (type.id === updated.id ? updated : type))),
+      queryClient.setQueryData<AircraftTypeView[]>(aircraftTypeKeys.list(), (list) =>
+        list?.map((type) => (type.id === updated.id ? updated : type)),
+      ),
     onSettled: () => queryClient.invalidateQueries({ queryKey: aircraftTypeKeys.all }),
   });
 }

@@ -8,5 +8,8 @@ export const createAircraftType = (request: CreateAircraftTypeRequest) =>
 
 export function useCreateAircraftType() {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: createAircraftType, onSettled: () => queryClient.invalidateQueries({ queryKey: aircraftTypeKeys.all }) });
+  return useMutation({
+    mutationFn: createAircraftType,
+    onSettled: () => queryClient.invalidateQueries({ queryKey: aircraftTypeKeys.all }),
+  });
 }

@@ -15,7 +15,9 @@ export function useSaveLaunchTable() {
     onMutate: async ({ typeId, rows }) => {
       await queryClient.cancelQueries({ queryKey: key });
       const previous = queryClient.getQueryData<AircraftTypeView[]>(key);
-      queryClient.setQueryData<AircraftTypeView[]>(key, (list) => list?.map((type) => (type.id === typeId ? { ...type, launchTable: rows } : type)));
+      queryClient.setQueryData<AircraftTypeView[]>(key, (list) =>
+        list?.map((type) => (type.id === typeId ? { ...type, launchTable: rows } : type)),
+      );
       return { previous };
     },
     onError: (_error, _variables, context) => queryClient.setQueryData(key, context?.previous),

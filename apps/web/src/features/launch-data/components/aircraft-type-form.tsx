@@ -10,10 +10,21 @@ type Field = keyof typeof blankAircraftType;
 
 export function AircraftTypeForm({ onCreated }: { onCreated: (id: number) => void }) {
   const create = useCreateAircraftType();
-  const { register, handleSubmit, reset, formState: { errors } } = useForm({ resolver: zodResolver(aircraftTypeSchema), defaultValues: blankAircraftType });
+  const {
+    register,
+    handleSubmit,
+    reset,
+    formState: { errors },
+  } = useForm({ resolver: zodResolver(aircraftTypeSchema), defaultValues: blankAircraftType });
 
   const field = (key: Field, label: string, helper?: string, numeric = true) => (
-    <FormField key={key} label={label} error={errors[key]?.message} helper={helper} required={key !== 'afterburnerFromLb'}>
+    <FormField
+      key={key}
+      label={label}
+      error={errors[key]?.message}
+      helper={helper}
+      required={key !== 'afterburnerFromLb'}
+    >
       <Input inputMode={numeric ? 'decimal' : 'text'} {...register(key)} />
     </FormField>
   );

@@ -17,7 +17,16 @@ import { LaunchTableImport } from './launch-table-import.js';
 
 function TypeDetail({ type, editable }: { type: AircraftTypeView; editable: boolean }) {
   return (
-    <Stack gap="3" borderWidth="1px" rounded="card" p={{ base: '3', md: '4' }} bg="bg.panel" as="section" aria-label={`${type.designation} launch data`} data-testid="type-detail">
+    <Stack
+      gap="3"
+      borderWidth="1px"
+      rounded="card"
+      p={{ base: '3', md: '4' }}
+      bg="bg.panel"
+      as="section"
+      aria-label={`${type.designation} launch data`}
+      data-testid="type-detail"
+    >
       <Heading as="h2" size="lg">
         {type.designation} · {type.name}
       </Heading>
@@ -26,7 +35,11 @@ function TypeDetail({ type, editable }: { type: AircraftTypeView; editable: bool
         <FigureStat label="Crosswind limit" value={`${type.crosswindLimitKt} kt`} size="md" />
         <FigureStat label="Thrust" value={`${formatWhole(type.thrustLbf)} lbf`} size="md" />
         <FigureStat label="Required excess" value={`${type.requiredExcessKt} kt`} size="md" />
-        <FigureStat label="Afterburner from" value={type.afterburnerFromLb === null ? 'Never' : formatPounds(type.afterburnerFromLb)} size="md" />
+        <FigureStat
+          label="Afterburner from"
+          value={type.afterburnerFromLb === null ? 'Never' : formatPounds(type.afterburnerFromLb)}
+          size="md"
+        />
       </SimpleGrid>
       <Box>
         <Text fontSize="xs" textTransform="uppercase" letterSpacing="wider" color="fg.muted" fontWeight="600">
@@ -56,16 +69,44 @@ export function LaunchDataScreen() {
   const [selectedId, setSelectedId] = useState<number | null>(null);
 
   const columns: Column<AircraftTypeView>[] = [
-    { key: 'designation', header: 'Designation', cell: (type) => <Text fontWeight="700">{type.designation}</Text>, sortValue: (type) => type.designation },
+    {
+      key: 'designation',
+      header: 'Designation',
+      cell: (type) => <Text fontWeight="700">{type.designation}</Text>,
+      sortValue: (type) => type.designation,
+    },
     { key: 'name', header: 'Name', cell: (type) => type.name, sortValue: (type) => type.name },
-    { key: 'max', header: 'Max gross (lb)', cell: (type) => formatWhole(type.maxGrossWeightLb), sortValue: (type) => type.maxGrossWeightLb, numeric: true },
-    { key: 'crosswind', header: 'Crosswind limit (kt)', cell: (type) => type.crosswindLimitKt, sortValue: (type) => type.crosswindLimitKt, numeric: true },
-    { key: 'rows', header: 'Table rows', cell: (type) => type.launchTable.length, sortValue: (type) => type.launchTable.length, numeric: true },
+    {
+      key: 'max',
+      header: 'Max gross (lb)',
+      cell: (type) => formatWhole(type.maxGrossWeightLb),
+      sortValue: (type) => type.maxGrossWeightLb,
+      numeric: true,
+    },
+    {
+      key: 'crosswind',
+      header: 'Crosswind limit (kt)',
+      cell: (type) => type.crosswindLimitKt,
+      sortValue: (type) => type.crosswindLimitKt,
+      numeric: true,
+    },
+    {
+      key: 'rows',
+      header: 'Table rows',
+      cell: (type) => type.launchTable.length,
+      sortValue: (type) => type.launchTable.length,
+      numeric: true,
+    },
     {
       key: 'show',
       header: '',
       cell: (type) => (
-        <Button size="xs" variant={type.id === selectedId ? 'solid' : 'outline'} onClick={() => setSelectedId(type.id)} aria-label={`Show ${type.designation}`}>
+        <Button
+          size="xs"
+          variant={type.id === selectedId ? 'solid' : 'outline'}
+          onClick={() => setSelectedId(type.id)}
+          aria-label={`Show ${type.designation}`}
+        >
           Show
         </Button>
       ),
@@ -81,7 +122,16 @@ export function LaunchDataScreen() {
           const selected = list.find((type) => type.id === selectedId);
           return (
             <Stack gap="4">
-              <DataTable caption="Aircraft types" rows={list} columns={columns} rowKey={(type) => type.id} selectedKey={selectedId ?? undefined} emptyTitle="No aircraft types yet" emptyHint="The admin adds types below." initialSort={{ key: 'designation' }} />
+              <DataTable
+                caption="Aircraft types"
+                rows={list}
+                columns={columns}
+                rowKey={(type) => type.id}
+                selectedKey={selectedId ?? undefined}
+                emptyTitle="No aircraft types yet"
+                emptyHint="The admin adds types below."
+                initialSort={{ key: 'designation' }}
+              />
               {selected && <TypeDetail type={selected} editable={admin} />}
             </Stack>
           );

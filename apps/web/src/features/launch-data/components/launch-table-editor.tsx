@@ -26,8 +26,12 @@ export function LaunchTableEditor({ type, editable }: { type: AircraftTypeView; 
         <Table.Body>
           {type.launchTable.map((row) => (
             <Table.Row key={row.grossWeightLb}>
-              <Table.Cell textAlign="end" textStyle="figure">{formatWhole(row.grossWeightLb)}</Table.Cell>
-              <Table.Cell textAlign="end" textStyle="figure">{row.minLaunchAirspeedKt}</Table.Cell>
+              <Table.Cell textAlign="end" textStyle="figure">
+                {formatWhole(row.grossWeightLb)}
+              </Table.Cell>
+              <Table.Cell textAlign="end" textStyle="figure">
+                {row.minLaunchAirspeedKt}
+              </Table.Cell>
             </Table.Row>
           ))}
         </Table.Body>
@@ -60,15 +64,36 @@ export function LaunchTableEditor({ type, editable }: { type: AircraftTypeView; 
       </HStack>
       {rows.map((row, index) => (
         <HStack key={index} gap="2">
-          <Input flex="1" inputMode="numeric" aria-label={`Row ${index + 1} gross weight`} value={row.grossWeightLb} onChange={(event) => setCell(index, 'grossWeightLb', event.currentTarget.value)} />
-          <Input flex="1" inputMode="decimal" aria-label={`Row ${index + 1} minimum launch airspeed`} value={row.minLaunchAirspeedKt} onChange={(event) => setCell(index, 'minLaunchAirspeedKt', event.currentTarget.value)} />
-          <IconButton aria-label={`Remove row ${index + 1}`} variant="ghost" colorPalette="nogo" onClick={() => setRows((current) => current.filter((_, at) => at !== index))}>
+          <Input
+            flex="1"
+            inputMode="numeric"
+            aria-label={`Row ${index + 1} gross weight`}
+            value={row.grossWeightLb}
+            onChange={(event) => setCell(index, 'grossWeightLb', event.currentTarget.value)}
+          />
+          <Input
+            flex="1"
+            inputMode="decimal"
+            aria-label={`Row ${index + 1} minimum launch airspeed`}
+            value={row.minLaunchAirspeedKt}
+            onChange={(event) => setCell(index, 'minLaunchAirspeedKt', event.currentTarget.value)}
+          />
+          <IconButton
+            aria-label={`Remove row ${index + 1}`}
+            variant="ghost"
+            colorPalette="nogo"
+            onClick={() => setRows((current) => current.filter((_, at) => at !== index))}
+          >
             ×
           </IconButton>
         </HStack>
       ))}
       <HStack gap="2">
-        <Button size="sm" variant="outline" onClick={() => setRows((current) => [...current, { grossWeightLb: '', minLaunchAirspeedKt: '' }])}>
+        <Button
+          size="sm"
+          variant="outline"
+          onClick={() => setRows((current) => [...current, { grossWeightLb: '', minLaunchAirspeedKt: '' }])}
+        >
           Add row
         </Button>
         <Button size="sm" colorPalette="accent" onClick={submit} loading={save.isPending}>

@@ -7,7 +7,10 @@ export interface CatapultStatusVariables extends SetCatapultStatusRequest {
 }
 
 export const setCatapultStatus = (cycleId: number, { catapultId, ...request }: CatapultStatusVariables) =>
-  apiRequest<LineupCommandResult>(`/cycles/${cycleId}/lineup/catapults/${catapultId}/status`, { method: 'POST', body: request });
+  apiRequest<LineupCommandResult>(`/cycles/${cycleId}/lineup/catapults/${catapultId}/status`, {
+    method: 'POST',
+    body: request,
+  });
 
 export const useSetCatapultStatus = (cycleId: number) =>
   useLineupCommand({ cycleId, send: (variables: CatapultStatusVariables) => setCatapultStatus(cycleId, variables) });

@@ -36,8 +36,17 @@ export function CatapultStatusDialog({ lane, pending, onClose, onConfirm }: Cata
             : 'Its aircraft become available to launch again.'}
         </Text>
         {goingDown && (
-          <FormField label="Reason" required error={touched && missingReason ? 'Say why the catapult is down.' : undefined}>
-            <Input value={reason} onChange={(event) => setReason(event.currentTarget.value)} placeholder="e.g. shuttle fault" maxLength={200} />
+          <FormField
+            label="Reason"
+            required
+            error={touched && missingReason ? 'Say why the catapult is down.' : undefined}
+          >
+            <Input
+              value={reason}
+              onChange={(event) => setReason(event.currentTarget.value)}
+              placeholder="e.g. shuttle fault"
+              maxLength={200}
+            />
           </FormField>
         )}
       </Stack>

@@ -17,7 +17,8 @@ interface LaneColumnProps {
 }
 
 function windWords(lane: LaneView) {
-  const cross = lane.crosswindSide === 'none' ? 'no crosswind' : `${formatKnots(lane.crosswindKt)} from ${lane.crosswindSide}`;
+  const cross =
+    lane.crosswindSide === 'none' ? 'no crosswind' : `${formatKnots(lane.crosswindKt)} from ${lane.crosswindSide}`;
   return `${formatKnots(lane.headwindKt)} headwind, ${cross}`;
 }
 
@@ -72,7 +73,11 @@ export function LaneColumn({ lane, slotIds, headerAction, children }: LaneColumn
         </HStack>
         {headerAction}
       </Stack>
-      <SortableContext id={laneContainer(lane.catapultId)} items={slotIds.map(slotItemId)} strategy={verticalListSortingStrategy}>
+      <SortableContext
+        id={laneContainer(lane.catapultId)}
+        items={slotIds.map(slotItemId)}
+        strategy={verticalListSortingStrategy}
+      >
         <Stack
           ref={setNodeRef}
           gap="2"
@@ -85,7 +90,15 @@ export function LaneColumn({ lane, slotIds, headerAction, children }: LaneColumn
         >
           {children}
           {slotIds.length === 0 && (
-            <Box textAlign="center" color="fg.subtle" fontSize="sm" py="6" borderWidth="1px" borderStyle="dashed" rounded="card">
+            <Box
+              textAlign="center"
+              color="fg.subtle"
+              fontSize="sm"
+              py="6"
+              borderWidth="1px"
+              borderStyle="dashed"
+              rounded="card"
+            >
               No aircraft yet
             </Box>
           )}

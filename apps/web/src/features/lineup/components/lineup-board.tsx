@@ -78,7 +78,13 @@ export function LineupBoard({ snapshot, editable, onMove, onMarkDown, onCatapult
               slotIds={slotIds}
               headerAction={
                 editable && (
-                  <Button size="xs" variant="outline" colorPalette={lane.status === 'up' ? 'nogo' : 'go'} onClick={() => onCatapultStatus(lane)} alignSelf="flex-start">
+                  <Button
+                    size="xs"
+                    variant="outline"
+                    colorPalette={lane.status === 'up' ? 'nogo' : 'go'}
+                    onClick={() => onCatapultStatus(lane)}
+                    alignSelf="flex-start"
+                  >
                     {lane.status === 'up' ? `Mark cat ${lane.number} down` : `Mark cat ${lane.number} up`}
                   </Button>
                 )

@@ -24,7 +24,8 @@ import { LineupWarnings } from './lineup-warnings.js';
 import { MarkDownDialog } from './mark-down-dialog.js';
 import { SuggestionDialog } from './suggestion-dialog.js';
 
-type OpenDialog = { kind: 'down'; slot: SlotView } | { kind: 'catapult'; lane: LaneView } | { kind: 'suggestion' } | null;
+type OpenDialog =
+  { kind: 'down'; slot: SlotView } | { kind: 'catapult'; lane: LaneView } | { kind: 'suggestion' } | null;
 
 function LineupWorkspace({ snapshot }: { snapshot: LineupSnapshot }) {
   const cycleId = snapshot.cycle.id;
@@ -58,7 +59,15 @@ function LineupWorkspace({ snapshot }: { snapshot: LineupSnapshot }) {
     <Stack gap="3">
       {notice && <NoticeBanner notice={notice} onDismiss={dismiss} />}
       <Flex gap="3" wrap="wrap" align="stretch">
-        <Stack gap="1" flex="1 1 18rem" borderWidth="1px" rounded="card" p="3" bg="bg.panel" data-testid="lineup-summary">
+        <Stack
+          gap="1"
+          flex="1 1 18rem"
+          borderWidth="1px"
+          rounded="card"
+          p="3"
+          bg="bg.panel"
+          data-testid="lineup-summary"
+        >
           <HStack gap="4" wrap="wrap">
             <Box>
               <Text fontSize="xs" color="fg.muted" textTransform="uppercase" fontWeight="600">
@@ -138,7 +147,10 @@ function LineupWorkspace({ snapshot }: { snapshot: LineupSnapshot }) {
                 basisStatus: dialog.lane.status,
                 reason,
               },
-              { onSuccess: done(`Cat ${dialog.lane.number} is ${dialog.lane.status === 'up' ? 'down' : 'up'}`), onError: refused('The catapult change') },
+              {
+                onSuccess: done(`Cat ${dialog.lane.number} is ${dialog.lane.status === 'up' ? 'down' : 'up'}`),
+                onError: refused('The catapult change'),
+              },
             )
           }
         />
@@ -170,10 +182,15 @@ export function LineupScreen() {
     <Stack gap="3">
       <PageHeader
         title="Lineup"
-        subtitle={snapshotCycle && `Cycle ${snapshotCycle.number} · ${snapshotCycle.state} · ${snapshotCycle.night ? 'night' : 'day'} · case ${snapshotCycle.weatherCase}`}
+        subtitle={
+          snapshotCycle &&
+          `Cycle ${snapshotCycle.number} · ${snapshotCycle.state} · ${snapshotCycle.night ? 'night' : 'day'} · case ${snapshotCycle.weatherCase}`
+        }
       >
         {cycle && <ConnectionBadge state={live.connection} />}
-        {cycles.data && cycles.data.length > 0 && <CyclePicker cycles={cycles.data} value={cycle?.id} onChange={choose} />}
+        {cycles.data && cycles.data.length > 0 && (
+          <CyclePicker cycles={cycles.data} value={cycle?.id} onChange={choose} />
+        )}
       </PageHeader>
       <CautionLine />
       {cycles.isPending ? (
@@ -181,7 +198,9 @@ export function LineupScreen() {
       ) : cycles.isError ? (
         <ErrorState error={cycles.error} onRetry={() => void cycles.refetch()} />
       ) : !cycle ? (
-        <EmptyState title="No cycle yet">Air operations creates cycles; the lineup appears here as soon as one exists.</EmptyState>
+        <EmptyState title="No cycle yet">
+          Air operations creates cycles; the lineup appears here as soon as one exists.
+        </EmptyState>
       ) : live.refusal ? (
         <ErrorState title="This cycle cannot be followed live" error={new Error(live.refusal)} />
       ) : (

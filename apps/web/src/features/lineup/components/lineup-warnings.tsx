@@ -11,9 +11,22 @@ const palette: Record<WarningKind, string> = {
 
 export function LineupWarnings({ warnings }: { warnings: LineupWarning[] }) {
   return (
-    <Box as="section" aria-label="Warnings" data-testid="lineup-warnings" borderWidth="1px" rounded="card" p="3" bg="bg.panel">
+    <Box
+      as="section"
+      aria-label="Warnings"
+      data-testid="lineup-warnings"
+      borderWidth="1px"
+      rounded="card"
+      p="3"
+      bg="bg.panel"
+    >
       <Text fontWeight="700" mb="1">
-        Warnings {warnings.length > 0 && <Text as="span" color="fg.muted">({warnings.length})</Text>}
+        Warnings{' '}
+        {warnings.length > 0 && (
+          <Text as="span" color="fg.muted">
+            ({warnings.length})
+          </Text>
+        )}
       </Text>
       {warnings.length === 0 ? (
         <Text fontSize="sm" color="fg.muted">
@@ -22,7 +35,16 @@ export function LineupWarnings({ warnings }: { warnings: LineupWarning[] }) {
       ) : (
         <List.Root gap="1" maxH="9rem" overflowY="auto" ps="0" listStyleType="none">
           {warnings.map((warning) => (
-            <List.Item key={warning.key} data-kind={warning.kind} fontSize="sm" colorPalette={palette[warning.kind]} color="colorPalette.fg" borderLeftWidth="3px" borderColor="colorPalette.solid" ps="2">
+            <List.Item
+              key={warning.key}
+              data-kind={warning.kind}
+              fontSize="sm"
+              colorPalette={palette[warning.kind]}
+              color="colorPalette.fg"
+              borderLeftWidth="3px"
+              borderColor="colorPalette.solid"
+              ps="2"
+            >
               {warning.text}
             </List.Item>
           ))}

@@ -27,14 +27,21 @@ export function MarkDownDialog({ slot, spares, pending, onClose, onConfirm }: Ma
     >
       <Stack gap="4">
         <Text>
-          {slot.sideNumber} leaves its lane and will not launch in this cycle. A spare can take its place in the same lane and position.
+          {slot.sideNumber} leaves its lane and will not launch in this cycle. A spare can take its place in the same
+          lane and position.
         </Text>
-        <FormField label="Spare to bring in" helper={spares.length === 0 ? 'No spare is waiting in the deck pool.' : undefined}>
+        <FormField
+          label="Spare to bring in"
+          helper={spares.length === 0 ? 'No spare is waiting in the deck pool.' : undefined}
+        >
           <SelectInput
             value={spareId}
             onChange={setSpareId}
             placeholder="No spare"
-            choices={spares.map((spare) => ({ value: String(spare.id), label: `${spare.sideNumber} · ${spare.typeDesignation} · ${spare.squadronCode}` }))}
+            choices={spares.map((spare) => ({
+              value: String(spare.id),
+              label: `${spare.sideNumber} · ${spare.typeDesignation} · ${spare.squadronCode}`,
+            }))}
           />
         </FormField>
       </Stack>

@@ -5,10 +5,28 @@ import { rectSortingStrategy, SortableContext } from '@dnd-kit/sortable';
 import { slotItemId } from '../hooks/use-lineup-drag.js';
 
 /** Aircraft of the cycle not yet in a lane; they leave it by being dragged onto a catapult. */
-export function PoolColumn({ slotIds, children, downList }: { slotIds: number[]; children: ReactNode; downList: ReactNode }) {
+export function PoolColumn({
+  slotIds,
+  children,
+  downList,
+}: {
+  slotIds: number[];
+  children: ReactNode;
+  downList: ReactNode;
+}) {
   const { setNodeRef, isOver } = useDroppable({ id: 'pool' });
   return (
-    <Stack as="section" aria-label="Deck pool" data-testid="deck-pool" gap="2" minW="0" bg="bg.muted" borderWidth="1px" rounded="card" p="2">
+    <Stack
+      as="section"
+      aria-label="Deck pool"
+      data-testid="deck-pool"
+      gap="2"
+      minW="0"
+      bg="bg.muted"
+      borderWidth="1px"
+      rounded="card"
+      p="2"
+    >
       <Text as="h2" fontWeight="700" fontSize="lg" px="1">
         Deck pool{' '}
         <Text as="span" color="fg.muted" fontWeight="500">

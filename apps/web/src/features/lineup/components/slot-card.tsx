@@ -10,7 +10,15 @@ import { formatOptionalClock, formatPounds } from '../../../lib/format.js';
 import { slotItemId } from '../hooks/use-lineup-drag.js';
 
 /** What a slot card shows: who, what, how heavy, when, and whether the figures are go. */
-export function SlotCardBody({ slot, lifted = false, movable = false }: { slot: SlotView; lifted?: boolean; movable?: boolean }) {
+export function SlotCardBody({
+  slot,
+  lifted = false,
+  movable = false,
+}: {
+  slot: SlotView;
+  lifted?: boolean;
+  movable?: boolean;
+}) {
   const figures = slot.figures;
   return (
     <Box
@@ -53,14 +61,28 @@ export function SlotCardBody({ slot, lifted = false, movable = false }: { slot: 
             AB
           </Badge>
         )}
-        {slot.tanker && <Badge size="sm" variant="outline">Tanker</Badge>}
-        {slot.earlyWarning && <Badge size="sm" variant="outline">Early warning</Badge>}
-        {slot.spare && <Badge size="sm" variant="outline">Spare</Badge>}
+        {slot.tanker && (
+          <Badge size="sm" variant="outline">
+            Tanker
+          </Badge>
+        )}
+        {slot.earlyWarning && (
+          <Badge size="sm" variant="outline">
+            Early warning
+          </Badge>
+        )}
+        {slot.spare && (
+          <Badge size="sm" variant="outline">
+            Spare
+          </Badge>
+        )}
       </HStack>
       {figures && (
         <Flex justify="space-between" align="center" gap="2" mt="1" fontSize="sm" wrap="wrap">
           <Text textStyle="figure" title="Projected launch time">
-            {slot.launchedAt ? `Off ${formatOptionalClock(slot.launchedAt)}` : formatOptionalClock(slot.projectedLaunchAt)}
+            {slot.launchedAt
+              ? `Off ${formatOptionalClock(slot.launchedAt)}`
+              : formatOptionalClock(slot.projectedLaunchAt)}
             {slot.missesWindow && !slot.launchedAt && (
               <Text as="span" color="nogo.fg" fontWeight="700">
                 {' '}
@@ -100,7 +122,9 @@ export function SortableSlotCard({ slot, movable, actions }: SortableSlotCardPro
       <Box
         ref={setActivatorNodeRef}
         {...(movable ? { ...attributes, ...listeners } : {})}
-        aria-label={movable ? `${slot.sideNumber}, ${slot.typeDesignation}, ${SLOT_STATUS_LABELS[slot.status]}` : undefined}
+        aria-label={
+          movable ? `${slot.sideNumber}, ${slot.typeDesignation}, ${SLOT_STATUS_LABELS[slot.status]}` : undefined
+        }
         cursor={movable ? 'grab' : 'default'}
         touchAction={movable ? 'manipulation' : undefined}
         rounded="card"

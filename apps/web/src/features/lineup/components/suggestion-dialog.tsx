@@ -15,13 +15,28 @@ interface SuggestionDialogProps {
 
 type LaneOrder = { catapultId: number; slotIds: number[] }[];
 
-function LineupColumn({ title, lastLaunchAt, lanes, snapshot, testId }: { title: string; lastLaunchAt: string | null; lanes: LaneOrder; snapshot: LineupSnapshot; testId: string }) {
+function LineupColumn({
+  title,
+  lastLaunchAt,
+  lanes,
+  snapshot,
+  testId,
+}: {
+  title: string;
+  lastLaunchAt: string | null;
+  lanes: LaneOrder;
+  snapshot: LineupSnapshot;
+  testId: string;
+}) {
   const slots = slotsById(snapshot);
   return (
     <Stack gap="2" data-testid={testId} borderWidth="1px" rounded="card" p="3" minW="0">
       <Text fontWeight="700">{title}</Text>
       <Text fontSize="sm" color="fg.muted">
-        Last launch <Text as="span" textStyle="figure" color="fg">{formatOptionalClock(lastLaunchAt)}</Text>
+        Last launch{' '}
+        <Text as="span" textStyle="figure" color="fg">
+          {formatOptionalClock(lastLaunchAt)}
+        </Text>
       </Text>
       {snapshot.lanes.map((lane) => {
         const order = lanes.find((candidate) => candidate.catapultId === lane.catapultId)?.slotIds ?? [];
@@ -61,8 +76,20 @@ export function SuggestionDialog({ snapshot, pending, onClose, onApply }: Sugges
           ) : (
             <Box>
               <Grid templateColumns={{ base: '1fr', md: '1fr 1fr' }} gap="3">
-                <LineupColumn title="Now" testId="suggestion-now" lastLaunchAt={snapshot.lastLaunchAt} lanes={snapshot.lanes} snapshot={snapshot} />
-                <LineupColumn title="Suggested" testId="suggestion-proposed" lastLaunchAt={suggested.lastLaunchAt} lanes={suggested.lanes} snapshot={snapshot} />
+                <LineupColumn
+                  title="Now"
+                  testId="suggestion-now"
+                  lastLaunchAt={snapshot.lastLaunchAt}
+                  lanes={snapshot.lanes}
+                  snapshot={snapshot}
+                />
+                <LineupColumn
+                  title="Suggested"
+                  testId="suggestion-proposed"
+                  lastLaunchAt={suggested.lastLaunchAt}
+                  lanes={suggested.lanes}
+                  snapshot={snapshot}
+                />
               </Grid>
               <Text mt="3" fontSize="sm" color="fg.muted">
                 Applying replaces every lane's order with the suggestion. You can drag from there.

@@ -55,11 +55,14 @@ export function useLineupDrag(snapshot: LineupSnapshot, onMove: (request: MoveSl
     const card = hits.find((hit) => !isContainerId(hit.id));
     if (card) return [card];
     const container = hits[0]?.id;
-    if (container === undefined || !isContainerId(container)) return args.pointerCoordinates ? closestCorners(args).slice(0, 1) : [];
+    if (container === undefined || !isContainerId(container))
+      return args.pointerCoordinates ? closestCorners(args).slice(0, 1) : [];
     const inside = containers[container] ?? [];
     const nearest = closestCenter({
       ...args,
-      droppableContainers: args.droppableContainers.filter((candidate) => !isContainerId(candidate.id) && inside.includes(slotIdOf(candidate.id))),
+      droppableContainers: args.droppableContainers.filter(
+        (candidate) => !isContainerId(candidate.id) && inside.includes(slotIdOf(candidate.id)),
+      ),
     });
     return nearest.length > 0 ? nearest.slice(0, 1) : hits;
   };
@@ -84,7 +87,9 @@ export function useLineupDrag(snapshot: LineupSnapshot, onMove: (request: MoveSl
       return place === startPlace.current ? undefined : `${sideOf(active.id)} is over ${place}.`;
     },
     onDragEnd: ({ active, over }) =>
-      over ? `${sideOf(active.id)} put down in ${describePlace(active.id)}.` : `${sideOf(active.id)} put back where it was.`,
+      over
+        ? `${sideOf(active.id)} put down in ${describePlace(active.id)}.`
+        : `${sideOf(active.id)} put back where it was.`,
     onDragCancel: ({ active }) => `Move cancelled. ${sideOf(active.id)} stays where it was.`,
   };
 

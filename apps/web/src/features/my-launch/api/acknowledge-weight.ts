@@ -7,7 +7,10 @@ export interface WeightAckVariables extends WeightAckRequest {
 }
 
 export const acknowledgeWeight = (cycleId: number, { slotId, ...request }: WeightAckVariables) =>
-  apiRequest<LineupCommandResult>(`/cycles/${cycleId}/lineup/slots/${slotId}/weight-ack`, { method: 'POST', body: request });
+  apiRequest<LineupCommandResult>(`/cycles/${cycleId}/lineup/slots/${slotId}/weight-ack`, {
+    method: 'POST',
+    body: request,
+  });
 
 export const useAcknowledgeWeight = (cycleId: number) =>
   useLineupCommand({ cycleId, send: (variables: WeightAckVariables) => acknowledgeWeight(cycleId, variables) });

@@ -24,7 +24,11 @@ function Countdown({ projectedLaunchAt, launchedAt }: { projectedLaunchAt: strin
   if (!projectedLaunchAt) return <FigureStat label="Projected launch" value="Not yet planned" size="lg" />;
   return (
     <Box data-testid="countdown">
-      <FigureStat label={`Projected launch ${formatClock(projectedLaunchAt)}`} value={formatCountdown(projectedLaunchAt, now)} size="xl" />
+      <FigureStat
+        label={`Projected launch ${formatClock(projectedLaunchAt)}`}
+        value={formatCountdown(projectedLaunchAt, now)}
+        size="xl"
+      />
     </Box>
   );
 }
@@ -34,21 +38,39 @@ function MySlot({ snapshot, pilotId }: { snapshot: LineupSnapshot; pilotId: numb
   const acknowledge = useAcknowledgeWeight(snapshot.cycle.id);
   const { notice, show, dismiss } = useNotice();
   if (!mine) {
-    return <EmptyState title={`You are not in cycle ${snapshot.cycle.number}`}>When air operations gives you an aircraft in this cycle, it appears here.</EmptyState>;
+    return (
+      <EmptyState title={`You are not in cycle ${snapshot.cycle.number}`}>
+        When air operations gives you an aircraft in this cycle, it appears here.
+      </EmptyState>
+    );
   }
   const { slot, lane, place } = mine;
   const turn = slot.figures ? formatClearingTurn(slot.figures.clearingTurnDeg) : 'Known once you have a catapult';
   return (
     <Stack gap="4" data-testid="my-slot" data-side-number={slot.sideNumber}>
       {notice && <NoticeBanner notice={notice} onDismiss={dismiss} />}
-      <Grid templateColumns={{ base: '1fr', md: 'repeat(3, minmax(0, 1fr))' }} gap="3" borderWidth="2px" borderColor="accent.border" rounded="card" p={{ base: '3', md: '4' }} bg="bg.panel">
+      <Grid
+        templateColumns={{ base: '1fr', md: 'repeat(3, minmax(0, 1fr))' }}
+        gap="3"
+        borderWidth="2px"
+        borderColor="accent.border"
+        rounded="card"
+        p={{ base: '3', md: '4' }}
+        bg="bg.panel"
+      >
         <Box data-testid="my-catapult">
-          <FigureStat label="Catapult" value={lane ? `Cat ${lane.number} · ${lane.position}` : 'Deck pool: no catapult yet'} size="xl" />
+          <FigureStat
+            label="Catapult"
+            value={lane ? `Cat ${lane.number} · ${lane.position}` : 'Deck pool: no catapult yet'}
+            size="xl"
+          />
         </Box>
         <Box data-testid="my-place">
           <FigureStat
             label="Place in line"
-            value={slot.status === 'launched' ? 'Gone' : place === null ? '—' : place === 1 ? 'Next (1st)' : ordinal(place)}
+            value={
+              slot.status === 'launched' ? 'Gone' : place === null ? '—' : place === 1 ? 'Next (1st)' : ordinal(place)
+            }
             size="xl"
           />
         </Box>
@@ -96,7 +118,11 @@ function MySlot({ snapshot, pilotId }: { snapshot: LineupSnapshot; pilotId: numb
       </Stack>
       <SimpleGrid columns={{ base: 2, md: 4 }} gap="3">
         <FigureStat label="Take-off trim" value={slot.trimDeg === null ? '—' : `${slot.trimDeg}°`} />
-        <FigureStat label="Afterburner" value={slot.afterburnerRequired ? 'Required' : 'Not required'} tone={slot.afterburnerRequired ? 'caution' : undefined} />
+        <FigureStat
+          label="Afterburner"
+          value={slot.afterburnerRequired ? 'Required' : 'Not required'}
+          tone={slot.afterburnerRequired ? 'caution' : undefined}
+        />
         <FigureStat label="Clearing turn" value={turn} size="md" />
         <FigureStat label="Fuel" value={formatPounds(slot.fuelLb)} size="md" />
       </SimpleGrid>
@@ -119,7 +145,9 @@ export function MyLaunchScreen() {
     <Stack gap="3">
       <PageHeader title="My launch" subtitle={cycle && `Cycle ${cycle.number}`}>
         {cycle && <ConnectionBadge state={live.connection} />}
-        {cycles.data && cycles.data.length > 1 && <CyclePicker cycles={cycles.data} value={cycle?.id} onChange={choose} />}
+        {cycles.data && cycles.data.length > 1 && (
+          <CyclePicker cycles={cycles.data} value={cycle?.id} onChange={choose} />
+        )}
       </PageHeader>
       <CautionLine />
       {cycles.isPending ? (
@@ -127,7 +155,9 @@ export function MyLaunchScreen() {
       ) : cycles.isError ? (
         <ErrorState error={cycles.error} onRetry={() => void cycles.refetch()} />
       ) : !cycle ? (
-        <EmptyState title="No cycle yet">Your launch appears here once air operations plans a cycle with you in it.</EmptyState>
+        <EmptyState title="No cycle yet">
+          Your launch appears here once air operations plans a cycle with you in it.
+        </EmptyState>
       ) : live.refusal ? (
         <ErrorState title="This cycle cannot be followed live" error={new Error(live.refusal)} />
       ) : (

@@ -6,5 +6,8 @@ export const deleteUser = (id: number) => apiRequest<void>(`/users/${id}`, { met
 
 export function useDeleteUser() {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: deleteUser, onSettled: () => queryClient.invalidateQueries({ queryKey: peopleKeys.all }) });
+  return useMutation({
+    mutationFn: deleteUser,
+    onSettled: () => queryClient.invalidateQueries({ queryKey: peopleKeys.all }),
+  });
 }

@@ -5,6 +5,7 @@ import { peopleKeys } from './people-keys.js';
 
 export const getUsers = (signal?: AbortSignal) => apiRequest<UserView[]>('/users', { signal });
 
-export const usersQueryOptions = () => queryOptions({ queryKey: peopleKeys.list(), queryFn: ({ signal }) => getUsers(signal) });
+export const usersQueryOptions = () =>
+  queryOptions({ queryKey: peopleKeys.list(), queryFn: ({ signal }) => getUsers(signal) });
 
 export const useUsers = () => useQuery(usersQueryOptions());

@@ -5,7 +5,8 @@ import { peopleKeys } from './people-keys.js';
 
 export type UpdateUserVariables = UpdateUserRequest & { id: number };
 
-export const updateUser = ({ id, ...changes }: UpdateUserVariables) => apiRequest<UserView>(`/users/${id}`, { method: 'PATCH', body: changes });
+export const updateUser = ({ id, ...changes }: UpdateUserVariables) =>
+  apiRequest<UserView>(`/users/${id}`, { method: 'PATCH', body: changes });
 
 /** Optimistic: the row shows the change at once and the old values again if the server refuses. */
 export function useUpdateUser() {
@@ -16,7 +17,9 @@ export function useUpdateUser() {
     onMutate: async (variables) => {
       await queryClient.cancelQueries({ queryKey: key });
       const previous = queryClient.getQueryData<UserView[]>(key);
-      queryClient.setQueryData<UserView[]>(key, (list) => list?.map((user) => (user.id === variables.id ? { ...user, ...variables } : user)));
+      queryClient.setQueryData<UserView[]>(key, (list) =>
+        list?.map((user) => (user.id === variables.id ? { ...user, ...variables } : user)),
+      );
       return { previous };
     },
     onError: (_error, _variables, context) => queryClient.setQueryData(key, context?.previous),

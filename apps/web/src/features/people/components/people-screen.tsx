@@ -38,11 +38,17 @@ export function PeopleScreen() {
   const inviteAgain = (user: UserView) =>
     invite.mutate(user.id, {
       onSuccess: ({ message }) => show({ tone: 'done', title: `Invitation sent to ${user.name}`, message }),
-      onError: (error) => show({ tone: 'refused', title: `No invitation sent to ${user.name}`, message: errorMessage(error) }),
+      onError: (error) =>
+        show({ tone: 'refused', title: `No invitation sent to ${user.name}`, message: errorMessage(error) }),
     });
 
   const columns: Column<UserView>[] = [
-    { key: 'name', header: 'Name', cell: (user) => <Text fontWeight="600">{user.name}</Text>, sortValue: (user) => user.name },
+    {
+      key: 'name',
+      header: 'Name',
+      cell: (user) => <Text fontWeight="600">{user.name}</Text>,
+      sortValue: (user) => user.name,
+    },
     { key: 'email', header: 'E-mail', cell: (user) => user.email, sortValue: (user) => user.email },
     {
       key: 'role',
@@ -51,7 +57,13 @@ export function PeopleScreen() {
         user.id === me.id ? (
           ROLE_LABELS[user.role]
         ) : (
-          <SelectInput minW="10rem" ariaLabel={`Role of ${user.name}`} value={user.role} choices={roleChoices} onChange={(role) => update.mutate({ id: user.id, role: role as Role }, { onError: refused })} />
+          <SelectInput
+            minW="10rem"
+            ariaLabel={`Role of ${user.name}`}
+            value={user.role}
+            choices={roleChoices}
+            onChange={(role) => update.mutate({ id: user.id, role: role as Role }, { onError: refused })}
+          />
         ),
       sortValue: (user) => ROLE_LABELS[user.role],
     },
@@ -66,14 +78,17 @@ export function PeopleScreen() {
             value={user.catapultId === null ? '' : String(user.catapultId)}
             placeholder="None"
             choices={catapults.map((catapult) => ({ value: String(catapult.id), label: `Cat ${catapult.number}` }))}
-            onChange={(value) => update.mutate({ id: user.id, catapultId: value ? Number(value) : null }, { onError: refused })}
+            onChange={(value) =>
+              update.mutate({ id: user.id, catapultId: value ? Number(value) : null }, { onError: refused })
+            }
           />
         ) : user.role === 'pilot' ? (
           squadronCode(user.squadronId)
         ) : (
           '—'
         ),
-      sortValue: (user) => (user.role === 'catapult_officer' ? catapultName(user.catapultId) : squadronCode(user.squadronId)),
+      sortValue: (user) =>
+        user.role === 'catapult_officer' ? catapultName(user.catapultId) : squadronCode(user.squadronId),
     },
     {
       key: 'active',
@@ -91,11 +106,20 @@ export function PeopleScreen() {
           </Text>
         ) : (
           <HStack gap="1">
-            <Button size="xs" variant="outline" onClick={() => update.mutate({ id: user.id, active: !user.active }, { onError: refused })}>
+            <Button
+              size="xs"
+              variant="outline"
+              onClick={() => update.mutate({ id: user.id, active: !user.active }, { onError: refused })}
+            >
               {user.active ? 'Block' : 'Unblock'}
             </Button>
             {user.active && (
-              <Button size="xs" variant="outline" onClick={() => inviteAgain(user)} loading={invite.isPending && invite.variables === user.id}>
+              <Button
+                size="xs"
+                variant="outline"
+                onClick={() => inviteAgain(user)}
+                loading={invite.isPending && invite.variables === user.id}
+              >
                 Send invitation again
               </Button>
             )}
@@ -112,7 +136,16 @@ export function PeopleScreen() {
       <PageHeader title="People" subtitle="Sign-ins and roles" />
       {notice && <NoticeBanner notice={notice} onDismiss={dismiss} />}
       <QueryView query={users} loadingLabel="Loading people…">
-        {(list) => <DataTable caption="People" rows={list} columns={columns} rowKey={(user) => user.id} emptyTitle="No people yet" initialSort={{ key: 'name' }} />}
+        {(list) => (
+          <DataTable
+            caption="People"
+            rows={list}
+            columns={columns}
+            rowKey={(user) => user.id}
+            emptyTitle="No people yet"
+            initialSort={{ key: 'name' }}
+          />
+        )}
       </QueryView>
       <Stack gap="2" borderWidth="1px" rounded="card" p="3">
         <Text fontWeight="700">Add a person</Text>

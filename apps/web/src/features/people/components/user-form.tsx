@@ -13,7 +13,13 @@ export const roleChoices = ROLES.map((role) => ({ value: role, label: ROLE_LABEL
 
 export function UserForm({ catapults, squadrons }: { catapults: CatapultView[]; squadrons: SquadronView[] }) {
   const create = useCreateUser();
-  const { register, control, handleSubmit, reset, formState: { errors } } = useForm({ resolver: zodResolver(userSchema), defaultValues: blankUser });
+  const {
+    register,
+    control,
+    handleSubmit,
+    reset,
+    formState: { errors },
+  } = useForm({ resolver: zodResolver(userSchema), defaultValues: blankUser });
   const role = useWatch({ control, name: 'role' });
   const [created, setCreated] = useState<{ user: UserView; invited: boolean } | null>(null);
 
@@ -56,7 +62,11 @@ export function UserForm({ catapults, squadrons }: { catapults: CatapultView[]; 
           <FormField label="E-mail" error={errors.email?.message} required>
             <Input type="email" {...register('email')} />
           </FormField>
-          <FormField label="First password" error={errors.password?.message} helper="Leave empty to e-mail them an invitation to choose their own.">
+          <FormField
+            label="First password"
+            error={errors.password?.message}
+            helper="Leave empty to e-mail them an invitation to choose their own."
+          >
             <Input type="password" autoComplete="new-password" {...register('password')} />
           </FormField>
           <FormField label="Role" required>
@@ -64,12 +74,28 @@ export function UserForm({ catapults, squadrons }: { catapults: CatapultView[]; 
           </FormField>
           {role === 'catapult_officer' && (
             <FormField label="Catapult" error={errors.catapultId?.message} required>
-              <SelectControl control={control} name="catapultId" placeholder="Pick a catapult" choices={catapults.map((catapult) => ({ value: String(catapult.id), label: `Cat ${catapult.number} (${catapult.position})` }))} />
+              <SelectControl
+                control={control}
+                name="catapultId"
+                placeholder="Pick a catapult"
+                choices={catapults.map((catapult) => ({
+                  value: String(catapult.id),
+                  label: `Cat ${catapult.number} (${catapult.position})`,
+                }))}
+              />
             </FormField>
           )}
           {role === 'pilot' && (
             <FormField label="Squadron">
-              <SelectControl control={control} name="squadronId" placeholder="No squadron" choices={squadrons.map((squadron) => ({ value: String(squadron.id), label: `${squadron.code} · ${squadron.name}` }))} />
+              <SelectControl
+                control={control}
+                name="squadronId"
+                placeholder="No squadron"
+                choices={squadrons.map((squadron) => ({
+                  value: String(squadron.id),
+                  label: `${squadron.code} · ${squadron.name}`,
+                }))}
+              />
             </FormField>
           )}
         </SimpleGrid>

@@ -6,7 +6,8 @@ import { reportKeys } from './reports-keys.js';
 export const shotCountsPath = (range: ShotCountsQuery, format: '' | '.csv' = '') =>
   `/reports/shot-counts${format}?${new URLSearchParams({ from: range.from, to: range.to })}`;
 
-export const fetchShotCounts = (range: ShotCountsQuery, signal?: AbortSignal) => apiRequest<ShotCounts>(shotCountsPath(range), { signal });
+export const fetchShotCounts = (range: ShotCountsQuery, signal?: AbortSignal) =>
+  apiRequest<ShotCounts>(shotCountsPath(range), { signal });
 
 export const shotCountsQueryOptions = (range: ShotCountsQuery) =>
   queryOptions({

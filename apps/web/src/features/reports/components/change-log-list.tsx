@@ -18,7 +18,15 @@ const StepButton = chakra('button', {
 });
 
 /** Every change of the log, each a button to jump to it; the step on show is marked and kept in view. */
-export function ChangeLogList({ changes, step, onStep }: { changes: LineupChange[]; step: number; onStep: (step: number) => void }) {
+export function ChangeLogList({
+  changes,
+  step,
+  onStep,
+}: {
+  changes: LineupChange[];
+  step: number;
+  onStep: (step: number) => void;
+}) {
   const listRef = useRef<HTMLOListElement>(null);
   useEffect(() => {
     const list = listRef.current;
@@ -32,12 +40,26 @@ export function ChangeLogList({ changes, step, onStep }: { changes: LineupChange
       <Text fontWeight="700" px="3" pt="2" pb="1">
         Change log ({changes.length})
       </Text>
-      <chakra.ol ref={listRef} listStyleType="none" m="0" px="1" pb="1" maxH={{ base: '16rem', xl: '34rem' }} overflowY="auto" position="relative">
+      <chakra.ol
+        ref={listRef}
+        listStyleType="none"
+        m="0"
+        px="1"
+        pb="1"
+        maxH={{ base: '16rem', xl: '34rem' }}
+        overflowY="auto"
+        position="relative"
+      >
         {changes.map((change, index) => {
           const current = index + 1 === step;
           return (
             <li key={change.version}>
-              <StepButton type="button" aria-current={current ? 'step' : undefined} bg={current ? 'accent.subtle' : undefined} onClick={() => onStep(index + 1)}>
+              <StepButton
+                type="button"
+                aria-current={current ? 'step' : undefined}
+                bg={current ? 'accent.subtle' : undefined}
+                onClick={() => onStep(index + 1)}
+              >
                 <Text fontSize="xs" color="fg.muted" textStyle="figure">
                   {change.version} · {formatClock(change.at)} · {change.actor.name}
                 </Text>

@@ -6,7 +6,16 @@ import { CautionLine } from '../../../components/caution-line.js';
 import { CyclePicker } from '../../../components/cycle-picker.js';
 import { GoBadge } from '../../../components/go-badge.js';
 import { EmptyState, QueryView } from '../../../components/query-states.js';
-import { formatClock, formatDegrees, formatKnots, formatOptionalClock, formatPounds, formatShortClock, formatSignedKnots, formatWhole } from '../../../lib/format.js';
+import {
+  formatClock,
+  formatDegrees,
+  formatKnots,
+  formatOptionalClock,
+  formatPounds,
+  formatShortClock,
+  formatSignedKnots,
+  formatWhole,
+} from '../../../lib/format.js';
 import { useLiveCycle } from '../../../lib/live/use-live-cycle.js';
 import { useShips } from '../../../lib/queries/ships-query.js';
 import { useViewedCycle } from '../../../lib/queries/use-viewed-cycle.js';
@@ -74,7 +83,10 @@ function conditionsLine(cycle: CycleView): string {
 }
 
 function laneHeading(lane: LaneView): string {
-  const cross = lane.crosswindSide === 'none' ? 'no crosswind' : `crosswind ${formatKnots(lane.crosswindKt)} from ${lane.crosswindSide}`;
+  const cross =
+    lane.crosswindSide === 'none'
+      ? 'no crosswind'
+      : `crosswind ${formatKnots(lane.crosswindKt)} from ${lane.crosswindSide}`;
   const state = lane.status === 'down' ? ' · DOWN' : lane.closed ? ' · CLOSED' : '';
   return `Cat ${lane.number} · ${lane.position} · headwind ${formatKnots(lane.headwindKt)}, ${cross}${state}`;
 }
@@ -102,7 +114,12 @@ function SheetRow({ slot, place }: { slot: SlotView; place: number }) {
   return (
     <Table.Row data-testid="sheet-row" data-side-number={slot.sideNumber}>
       {cells.map((cell, i) => (
-        <Table.Cell key={COLUMNS[i]} textAlign={NUMERIC.has(COLUMNS[i]) ? 'end' : 'start'} textStyle={NUMERIC.has(COLUMNS[i]) ? 'figure' : undefined} whiteSpace="nowrap">
+        <Table.Cell
+          key={COLUMNS[i]}
+          textAlign={NUMERIC.has(COLUMNS[i]) ? 'end' : 'start'}
+          textStyle={NUMERIC.has(COLUMNS[i]) ? 'figure' : undefined}
+          whiteSpace="nowrap"
+        >
           {cell}
         </Table.Cell>
       ))}
@@ -134,7 +151,11 @@ function SheetLane({ lane, slots }: { lane: LaneView; slots: Map<number, SlotVie
             <Table.Header>
               <Table.Row bg="bg.muted">
                 {COLUMNS.map((column) => (
-                  <Table.ColumnHeader key={column} textAlign={NUMERIC.has(column) ? 'end' : 'start'} whiteSpace="nowrap">
+                  <Table.ColumnHeader
+                    key={column}
+                    textAlign={NUMERIC.has(column) ? 'end' : 'start'}
+                    whiteSpace="nowrap"
+                  >
                     {column}
                   </Table.ColumnHeader>
                 ))}
@@ -171,7 +192,8 @@ function Sheet({ snapshot, shipName }: { snapshot: LineupSnapshot; shipName: str
         </Heading>
         <Text fontSize="sm">{conditionsLine(cycle)}</Text>
         <Text fontSize="xs" color="fg.muted">
-          The lineup at change {snapshot.version} ({cycle.state}); printed {formatClock(new Date(now))}. Times are this device's.
+          The lineup at change {snapshot.version} ({cycle.state}); printed {formatClock(new Date(now))}. Times are this
+          device's.
         </Text>
       </Stack>
       <CautionLine />
@@ -182,7 +204,9 @@ function Sheet({ snapshot, shipName }: { snapshot: LineupSnapshot; shipName: str
         <Text as="span" fontWeight="700">
           Deck pool (in no lane):{' '}
         </Text>
-        {pool.length === 0 ? 'none' : pool.map((slot) => `${slot.sideNumber}${slot.spare ? ' (spare)' : ''}`).join(', ')}
+        {pool.length === 0
+          ? 'none'
+          : pool.map((slot) => `${slot.sideNumber}${slot.spare ? ' (spare)' : ''}`).join(', ')}
       </Text>
     </Stack>
   );
@@ -202,7 +226,9 @@ export function LaunchSheetScreen() {
     <Stack gap="3">
       <Global styles={printStyles} />
       <HStack gap="2" wrap="wrap" justify="space-between" className="no-print">
-        <QueryView query={cycles}>{(list) => <CyclePicker cycles={list} value={cycle?.id} onChange={choose} />}</QueryView>
+        <QueryView query={cycles}>
+          {(list) => <CyclePicker cycles={list} value={cycle?.id} onChange={choose} />}
+        </QueryView>
         <HStack gap="2">
           {cycle && (
             <Button asChild size="sm" variant="outline">
@@ -214,7 +240,13 @@ export function LaunchSheetScreen() {
           </Button>
         </HStack>
       </HStack>
-      <Box>{cycle ? <SheetForCycle key={cycle.id} cycle={cycle} /> : <EmptyState title="No cycles yet">A launch sheet needs a cycle with a lineup.</EmptyState>}</Box>
+      <Box>
+        {cycle ? (
+          <SheetForCycle key={cycle.id} cycle={cycle} />
+        ) : (
+          <EmptyState title="No cycles yet">A launch sheet needs a cycle with a lineup.</EmptyState>
+        )}
+      </Box>
     </Stack>
   );
 }

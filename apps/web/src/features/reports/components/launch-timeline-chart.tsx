@@ -1,6 +1,16 @@
 import { useId, useMemo } from 'react';
 import { Box, Text } from '@chakra-ui/react';
-import { CartesianGrid, Legend, ReferenceLine, Scatter, ScatterChart, Tooltip, XAxis, YAxis, type TooltipContentProps } from 'recharts';
+import {
+  CartesianGrid,
+  Legend,
+  ReferenceLine,
+  Scatter,
+  ScatterChart,
+  Tooltip,
+  XAxis,
+  YAxis,
+  type TooltipContentProps,
+} from 'recharts';
 import type { CycleReport } from '@catline/contracts';
 import { EmptyState } from '../../../components/query-states.js';
 import { formatClock } from '../../../lib/format.js';
@@ -28,7 +38,15 @@ interface MarkProps {
 function ActualMark({ cx, cy, payload }: MarkProps) {
   if (cx === undefined || cy === undefined || !payload) return null;
   return (
-    <circle cx={cx} cy={cy} r={6} style={{ fill: colour.actual }} data-testid="launch-mark" data-side={payload.side} aria-label={payload.label}>
+    <circle
+      cx={cx}
+      cy={cy}
+      r={6}
+      style={{ fill: colour.actual }}
+      data-testid="launch-mark"
+      data-side={payload.side}
+      aria-label={payload.label}
+    >
       <title>{payload.label}</title>
     </circle>
   );
@@ -66,7 +84,9 @@ export function LaunchTimelineChart({ report }: { report: CycleReport }) {
   const { planned, actual } = useMemo(() => timelinePoints(report), [report]);
   const times = [...planned, ...actual].map((point) => point.time);
   if (times.length === 0) {
-    return <EmptyState title="Nothing to draw">No aircraft was planned on a catapult or launched in this cycle.</EmptyState>;
+    return (
+      <EmptyState title="Nothing to draw">No aircraft was planned on a catapult or launched in this cycle.</EmptyState>
+    );
   }
   const numbers = report.catapults.map((catapult) => catapult.number);
   const plannedBySlot = new Map(planned.map((point) => [point.slotId, point]));
@@ -93,7 +113,13 @@ export function LaunchTimelineChart({ report }: { report: CycleReport }) {
           tickFormatter={(value: number) => formatClock(new Date(value))}
           tick={{ fill: colour.text, fontSize: 12 }}
           stroke={colour.text}
-          label={{ value: 'Time (hh:mm:ss, this device)', position: 'insideBottom', offset: -16, fill: colour.text, fontSize: 12 }}
+          label={{
+            value: 'Time (hh:mm:ss, this device)',
+            position: 'insideBottom',
+            offset: -16,
+            fill: colour.text,
+            fontSize: 12,
+          }}
         />
         <YAxis
           type="number"
@@ -108,18 +134,52 @@ export function LaunchTimelineChart({ report }: { report: CycleReport }) {
           stroke={colour.text}
           label={{ value: 'Catapult', angle: -90, position: 'insideLeft', fill: colour.text, fontSize: 12 }}
         />
-        <ReferenceLine x={Date.parse(report.cycle.windowStartAt)} stroke={colour.window} strokeDasharray="6 3" label={{ value: 'Window opens', fill: colour.window, fontSize: 11, position: 'insideTopRight' }} />
-        <ReferenceLine x={Date.parse(report.cycle.windowEndAt)} stroke={colour.window} strokeDasharray="6 3" label={{ value: 'Window closes', fill: colour.window, fontSize: 11, position: 'insideTopLeft' }} />
+        <ReferenceLine
+          x={Date.parse(report.cycle.windowStartAt)}
+          stroke={colour.window}
+          strokeDasharray="6 3"
+          label={{ value: 'Window opens', fill: colour.window, fontSize: 11, position: 'insideTopRight' }}
+        />
+        <ReferenceLine
+          x={Date.parse(report.cycle.windowEndAt)}
+          stroke={colour.window}
+          strokeDasharray="6 3"
+          label={{ value: 'Window closes', fill: colour.window, fontSize: 11, position: 'insideTopLeft' }}
+        />
         {actual.flatMap((point) => {
           const plan = plannedBySlot.get(point.slotId);
           return plan
-            ? [<ReferenceLine key={point.slotId} segment={[{ x: plan.time, y: plan.catapult }, { x: point.time, y: point.catapult }]} stroke={colour.planned} ifOverflow="extendDomain" />]
+            ? [
+                <ReferenceLine
+                  key={point.slotId}
+                  segment={[
+                    { x: plan.time, y: plan.catapult },
+                    { x: point.time, y: point.catapult },
+                  ]}
+                  stroke={colour.planned}
+                  ifOverflow="extendDomain"
+                />,
+              ]
             : [];
         })}
         <Tooltip content={PointTooltip} cursor={false} />
         <Legend verticalAlign="top" height={28} />
-        <Scatter name="Planned at the start" data={planned} shape={PlannedMark} legendType="diamond" fill={colour.planned} isAnimationActive={false} />
-        <Scatter name="Launched" data={actual} shape={ActualMark} legendType="circle" fill={colour.actual} isAnimationActive={false} />
+        <Scatter
+          name="Planned at the start"
+          data={planned}
+          shape={PlannedMark}
+          legendType="diamond"
+          fill={colour.planned}
+          isAnimationActive={false}
+        />
+        <Scatter
+          name="Launched"
+          data={actual}
+          shape={ActualMark}
+          legendType="circle"
+          fill={colour.actual}
+          isAnimationActive={false}
+        />
       </ScatterChart>
       <Text id={summaryId} fontSize="sm" color="fg.muted" mt="1" data-testid="timeline-summary">
         {timelineSummary(report)}

@@ -33,11 +33,11 @@ function ReplaySlot({ slot, changed }: { slot: SlotView; changed: boolean }) {
       </Flex>
       <Flex justify="space-between" align="center" gap="2" fontSize="sm" mt="0.5" wrap="wrap">
         <Text textStyle="figure" color="fg.muted">
-          {slot.launchedAt ? `Off ${formatOptionalClock(slot.launchedAt)}` : `Proj. ${formatOptionalClock(slot.projectedLaunchAt)}`}
+          {slot.launchedAt
+            ? `Off ${formatOptionalClock(slot.launchedAt)}`
+            : `Proj. ${formatOptionalClock(slot.projectedLaunchAt)}`}
         </Text>
-        {figures && (
-          <MarginGo figures={figures} />
-        )}
+        {figures && <MarginGo figures={figures} />}
       </Flex>
     </Box>
   );
@@ -45,7 +45,17 @@ function ReplaySlot({ slot, changed }: { slot: SlotView; changed: boolean }) {
 
 function ReplayLane({ lane, slots, changed }: { lane: LaneView; slots: Map<number, SlotView>; changed: Set<number> }) {
   return (
-    <Stack as="section" aria-label={`Cat ${lane.number} at this step`} data-testid="replay-lane" gap="1.5" bg="bg.subtle" borderWidth="1px" rounded="card" p="2" minW="0">
+    <Stack
+      as="section"
+      aria-label={`Cat ${lane.number} at this step`}
+      data-testid="replay-lane"
+      gap="1.5"
+      bg="bg.subtle"
+      borderWidth="1px"
+      rounded="card"
+      p="2"
+      minW="0"
+    >
       <HStack justify="space-between">
         <Text fontWeight="700">
           Cat {lane.number}{' '}
@@ -85,7 +95,15 @@ export function ReplayBoard({ snapshot, changed }: { snapshot: LineupSnapshot; c
           <ReplayLane key={lane.catapultId} lane={lane} slots={slots} changed={changed} />
         ))}
       </SimpleGrid>
-      <Stack as="section" aria-label="Deck pool at this step" gap="1.5" borderWidth="1px" borderStyle="dashed" rounded="card" p="2">
+      <Stack
+        as="section"
+        aria-label="Deck pool at this step"
+        gap="1.5"
+        borderWidth="1px"
+        borderStyle="dashed"
+        rounded="card"
+        p="2"
+      >
         <Text fontWeight="700">Deck pool</Text>
         {snapshot.pool.length === 0 ? (
           <Text fontSize="sm" color="fg.muted">

@@ -11,7 +11,8 @@ interface ReplayControlsProps {
 }
 
 const isTyping = (target: EventTarget | null) =>
-  target instanceof HTMLElement && (target.isContentEditable || ['INPUT', 'SELECT', 'TEXTAREA'].includes(target.tagName));
+  target instanceof HTMLElement &&
+  (target.isContentEditable || ['INPUT', 'SELECT', 'TEXTAREA'].includes(target.tagName));
 
 /** The slider, first/previous/next/last, and the arrow keys anywhere on the page. */
 export function ReplayControls({ step, changes, onStep }: ReplayControlsProps) {
@@ -31,7 +32,9 @@ export function ReplayControls({ step, changes, onStep }: ReplayControlsProps) {
     return () => window.removeEventListener('keydown', onKey);
   }, [step, last, onStep]);
 
-  const described = change ? `Change ${step} of ${last}: ${change.summary}` : `Start: the cycle as created, before change 1 of ${last}`;
+  const described = change
+    ? `Change ${step} of ${last}: ${change.summary}`
+    : `Start: the cycle as created, before change 1 of ${last}`;
   return (
     <Stack gap="2" borderWidth="1px" rounded="card" p="3" bg="bg.panel" data-testid="replay-controls">
       <HStack gap="2" wrap="wrap">
@@ -62,7 +65,9 @@ export function ReplayControls({ step, changes, onStep }: ReplayControlsProps) {
       </HStack>
       <Box aria-live="polite" data-testid="replay-change">
         <Text fontWeight="700">
-          {change ? `Change ${change.version} of ${last} · ${CHANGE_KIND_LABELS[change.kind]}` : `Start · change 0 of ${last}`}
+          {change
+            ? `Change ${change.version} of ${last} · ${CHANGE_KIND_LABELS[change.kind]}`
+            : `Start · change 0 of ${last}`}
         </Text>
         <Text fontSize="sm">{change ? change.summary : 'The cycle as created: no aircraft yet.'}</Text>
         {change && (

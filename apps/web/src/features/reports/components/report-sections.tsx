@@ -1,6 +1,16 @@
 import type { ReactNode } from 'react';
 import { Heading, SimpleGrid, Stack, Text } from '@chakra-ui/react';
-import type { CatapultTimeline, CycleReport, IntervalSpread, LaunchInterval, PairTimeline, ReportDown, ReportOverride, ReportSuspend, SquadronReport } from '@catline/contracts';
+import type {
+  CatapultTimeline,
+  CycleReport,
+  IntervalSpread,
+  LaunchInterval,
+  PairTimeline,
+  ReportDown,
+  ReportOverride,
+  ReportSuspend,
+  SquadronReport,
+} from '@catline/contracts';
 import { FigureStat } from '../../../components/figure-stat.js';
 import { formatClock, formatOptionalClock, formatShortClock } from '../../../lib/format.js';
 import { formatDuration } from '../report-model.js';
@@ -32,11 +42,31 @@ export function ReportSummary({ report }: { report: CycleReport }) {
     <Stack gap="2">
       <SimpleGrid columns={{ base: 2, sm: 4, lg: 8 }} gap="3" data-testid="report-totals">
         <FigureStat label="Launched" value={`${totals.launched} of ${totals.aircraft}`} size="md" />
-        <FigureStat label="Inside window" value={totals.onTime} tone={totals.onTime === totals.launched ? 'go' : undefined} size="md" />
-        <FigureStat label="Outside window" value={totals.outsideWindow} tone={totals.outsideWindow > 0 ? 'nogo' : undefined} size="md" />
-        <FigureStat label="Suspends" value={totals.suspends} tone={totals.suspends > 0 ? 'caution' : undefined} size="md" />
+        <FigureStat
+          label="Inside window"
+          value={totals.onTime}
+          tone={totals.onTime === totals.launched ? 'go' : undefined}
+          size="md"
+        />
+        <FigureStat
+          label="Outside window"
+          value={totals.outsideWindow}
+          tone={totals.outsideWindow > 0 ? 'nogo' : undefined}
+          size="md"
+        />
+        <FigureStat
+          label="Suspends"
+          value={totals.suspends}
+          tone={totals.suspends > 0 ? 'caution' : undefined}
+          size="md"
+        />
         <FigureStat label="Down" value={totals.down} tone={totals.down > 0 ? 'caution' : undefined} size="md" />
-        <FigureStat label="Overrides" value={totals.overrides} tone={totals.overrides > 0 ? 'caution' : undefined} size="md" />
+        <FigureStat
+          label="Overrides"
+          value={totals.overrides}
+          tone={totals.overrides > 0 ? 'caution' : undefined}
+          size="md"
+        />
         <FigureStat label="First launch" value={formatOptionalClock(report.firstLaunchAt)} size="md" />
         <FigureStat label="Last launch" value={formatOptionalClock(report.lastLaunchAt)} size="md" />
       </SimpleGrid>
@@ -48,14 +78,24 @@ export function ReportSummary({ report }: { report: CycleReport }) {
 }
 
 const spreadText = (spread: IntervalSpread) =>
-  spread.meanS === null ? '—' : `${formatDuration(spread.shortestS!)} / ${formatDuration(spread.meanS)} / ${formatDuration(spread.longestS!)}`;
+  spread.meanS === null
+    ? '—'
+    : `${formatDuration(spread.shortestS!)} / ${formatDuration(spread.meanS)} / ${formatDuration(spread.longestS!)}`;
 
 const intervalList = (intervals: LaunchInterval[]) =>
-  intervals.length === 0 ? '—' : intervals.map((interval) => `${interval.fromSideNumber}→${interval.toSideNumber} ${formatDuration(interval.seconds)}`).join(', ');
+  intervals.length === 0
+    ? '—'
+    : intervals
+        .map((interval) => `${interval.fromSideNumber}→${interval.toSideNumber} ${formatDuration(interval.seconds)}`)
+        .join(', ');
 
 const catapultColumns: ReportColumn<CatapultTimeline>[] = [
   { header: 'Cat', cell: (catapult) => `${catapult.number} (${catapult.position})` },
-  { header: 'Launched', cell: (catapult) => catapult.launches.filter((launch) => launch.launchedAt !== null).length, numeric: true },
+  {
+    header: 'Launched',
+    cell: (catapult) => catapult.launches.filter((launch) => launch.launchedAt !== null).length,
+    numeric: true,
+  },
   { header: 'Reset interval', cell: (catapult) => formatDuration(catapult.resetIntervalS), numeric: true },
   { header: 'Shortest / mean / longest', cell: (catapult) => spreadText(catapult.spread), numeric: true },
   { header: 'Between launches', cell: (catapult) => intervalList(catapult.intervals) },
@@ -71,8 +111,20 @@ const pairColumns: ReportColumn<PairTimeline>[] = [
 export function IntervalsSection({ report }: { report: CycleReport }) {
   return (
     <ReportSection title="Intervals between launches">
-      <ReportTable caption="Intervals per catapult" rows={report.catapults} columns={catapultColumns} rowKey={(catapult) => catapult.catapultId} empty="No catapult." />
-      <ReportTable caption="Intervals per catapult pair" rows={report.pairs} columns={pairColumns} rowKey={(pair) => pair.pair} empty="No catapult pair." />
+      <ReportTable
+        caption="Intervals per catapult"
+        rows={report.catapults}
+        columns={catapultColumns}
+        rowKey={(catapult) => catapult.catapultId}
+        empty="No catapult."
+      />
+      <ReportTable
+        caption="Intervals per catapult pair"
+        rows={report.pairs}
+        columns={pairColumns}
+        rowKey={(pair) => pair.pair}
+        empty="No catapult pair."
+      />
     </ReportSection>
   );
 }
@@ -90,7 +142,10 @@ const downColumns: ReportColumn<ReportDown>[] = [
   { header: 'Down', cell: (event) => `${event.sideNumber} (${event.squadronCode})` },
   { header: 'Cat', cell: (event) => event.catapultNumber ?? 'pool', numeric: true },
   { header: 'At', cell: (event) => formatClock(event.at), numeric: true },
-  { header: 'Spare in its place', cell: (event) => (event.spare ? `${event.spare.sideNumber} (${event.spare.squadronCode})` : 'none') },
+  {
+    header: 'Spare in its place',
+    cell: (event) => (event.spare ? `${event.spare.sideNumber} (${event.spare.squadronCode})` : 'none'),
+  },
   { header: 'By', cell: (event) => event.by },
 ];
 
@@ -106,13 +161,31 @@ export function EventsSection({ report }: { report: CycleReport }) {
   return (
     <SimpleGrid columns={{ base: 1, lg: 2 }} gap="4">
       <ReportSection title="Suspends">
-        <ReportTable caption="Suspends" rows={report.suspends} columns={suspendColumns} rowKey={(event) => `${event.slotId}-${event.at}`} empty="No launch was suspended." />
+        <ReportTable
+          caption="Suspends"
+          rows={report.suspends}
+          columns={suspendColumns}
+          rowKey={(event) => `${event.slotId}-${event.at}`}
+          empty="No launch was suspended."
+        />
       </ReportSection>
       <ReportSection title="Down aircraft and spares">
-        <ReportTable caption="Down aircraft and spares" rows={report.downs} columns={downColumns} rowKey={(event) => event.slotId} empty="No aircraft went down." />
+        <ReportTable
+          caption="Down aircraft and spares"
+          rows={report.downs}
+          columns={downColumns}
+          rowKey={(event) => event.slotId}
+          empty="No aircraft went down."
+        />
       </ReportSection>
       <ReportSection title="Launches on override">
-        <ReportTable caption="Launches on override" rows={report.overrides} columns={overrideColumns} rowKey={(event) => event.slotId} empty="No launch needed an override." />
+        <ReportTable
+          caption="Launches on override"
+          rows={report.overrides}
+          columns={overrideColumns}
+          rowKey={(event) => event.slotId}
+          empty="No launch needed an override."
+        />
       </ReportSection>
     </SimpleGrid>
   );
@@ -133,7 +206,13 @@ const squadronColumns: ReportColumn<SquadronReport>[] = [
 export function SquadronsSection({ report }: { report: CycleReport }) {
   return (
     <ReportSection title="Per squadron">
-      <ReportTable caption="Figures per squadron" rows={report.squadrons} columns={squadronColumns} rowKey={(squadron) => squadron.squadronId} empty="No aircraft in this cycle." />
+      <ReportTable
+        caption="Figures per squadron"
+        rows={report.squadrons}
+        columns={squadronColumns}
+        rowKey={(squadron) => squadron.squadronId}
+        empty="No aircraft in this cycle."
+      />
     </ReportSection>
   );
 }

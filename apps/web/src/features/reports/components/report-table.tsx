@@ -41,7 +41,11 @@ export function ReportTable<T>({ caption, rows, columns, rowKey, empty }: Report
           {rows.map((row) => (
             <Table.Row key={rowKey(row)}>
               {columns.map((column) => (
-                <Table.Cell key={column.header} textAlign={column.numeric ? 'end' : 'start'} textStyle={column.numeric ? 'figure' : undefined}>
+                <Table.Cell
+                  key={column.header}
+                  textAlign={column.numeric ? 'end' : 'start'}
+                  textStyle={column.numeric ? 'figure' : undefined}
+                >
                   {column.cell(row)}
                 </Table.Cell>
               ))}

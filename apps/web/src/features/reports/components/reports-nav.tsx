@@ -13,7 +13,16 @@ export function ReportsNav() {
       {pages.map((page) => (
         <NavLink key={page.to} to={page.to} end>
           {({ isActive }) => (
-            <Box px="2.5" py="1" rounded="card" fontSize="sm" fontWeight="600" bg={isActive ? 'accent.subtle' : undefined} color={isActive ? 'accent.fg' : 'fg.muted'} _hover={{ color: 'fg' }}>
+            <Box
+              px="2.5"
+              py="1"
+              rounded="card"
+              fontSize="sm"
+              fontWeight="600"
+              bg={isActive ? 'accent.subtle' : undefined}
+              color={isActive ? 'accent.fg' : 'fg.muted'}
+              _hover={{ color: 'fg' }}
+            >
               {page.label}
             </Box>
           )}

@@ -34,7 +34,11 @@ function CycleReportPanel({ cycle }: { cycle: CycleView }) {
       {(data) => (
         <Stack gap="5">
           <ReportSummary report={data} />
-          <Grid templateColumns={{ base: 'minmax(0, 1fr)', xl: 'minmax(0, 1.1fr) minmax(0, 1fr)' }} gap="4" alignItems="start">
+          <Grid
+            templateColumns={{ base: 'minmax(0, 1fr)', xl: 'minmax(0, 1.1fr) minmax(0, 1fr)' }}
+            gap="4"
+            alignItems="start"
+          >
             <ReportSection title="Timeline per catapult">
               <LaunchTimelineChart report={data} />
             </ReportSection>
@@ -70,7 +74,9 @@ export function ReportsScreen() {
               <CycleReportPanel key={cycle.id} cycle={cycle} />
             </Stack>
           ) : (
-            <EmptyState title="No cycles yet">A report appears here once air operations has created a cycle.</EmptyState>
+            <EmptyState title="No cycles yet">
+              A report appears here once air operations has created a cycle.
+            </EmptyState>
           )
         }
       </QueryView>

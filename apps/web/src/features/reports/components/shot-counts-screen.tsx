@@ -37,11 +37,28 @@ function useRange(): [ShotCountsQuery, (change: Partial<ShotCountsQuery>) => voi
 }
 
 const airframeColumns: Column<AirframeShotCount>[] = [
-  { key: 'side', header: 'Side', cell: (row) => <Text fontWeight="700">{row.sideNumber}</Text>, sortValue: (row) => row.sideNumber },
+  {
+    key: 'side',
+    header: 'Side',
+    cell: (row) => <Text fontWeight="700">{row.sideNumber}</Text>,
+    sortValue: (row) => row.sideNumber,
+  },
   { key: 'type', header: 'Type', cell: (row) => row.typeDesignation, sortValue: (row) => row.typeDesignation },
   { key: 'squadron', header: 'Squadron', cell: (row) => row.squadronCode, sortValue: (row) => row.squadronCode },
-  { key: 'launches', header: 'Launches in range', cell: (row) => formatWhole(row.launches), sortValue: (row) => row.launches, numeric: true },
-  { key: 'lifetime', header: 'Shots on record', cell: (row) => formatWhole(row.lifetimeShots), sortValue: (row) => row.lifetimeShots, numeric: true },
+  {
+    key: 'launches',
+    header: 'Launches in range',
+    cell: (row) => formatWhole(row.launches),
+    sortValue: (row) => row.launches,
+    numeric: true,
+  },
+  {
+    key: 'lifetime',
+    header: 'Shots on record',
+    cell: (row) => formatWhole(row.lifetimeShots),
+    sortValue: (row) => row.lifetimeShots,
+    numeric: true,
+  },
 ];
 
 const catapultColumns: ReportColumn<CatapultShotCount>[] = [
@@ -63,12 +80,24 @@ export function ShotCountsScreen() {
       <HStack gap="3" wrap="wrap" align="flex-end">
         <Box w={{ base: 'full', sm: '13rem' }}>
           <FormField label="From (UTC day)">
-            <Input type="date" size="sm" value={range.from} max={range.to} onChange={(event) => event.currentTarget.value && setRange({ from: event.currentTarget.value })} />
+            <Input
+              type="date"
+              size="sm"
+              value={range.from}
+              max={range.to}
+              onChange={(event) => event.currentTarget.value && setRange({ from: event.currentTarget.value })}
+            />
           </FormField>
         </Box>
         <Box w={{ base: 'full', sm: '13rem' }}>
           <FormField label="To (UTC day, included)">
-            <Input type="date" size="sm" value={range.to} min={range.from} onChange={(event) => event.currentTarget.value && setRange({ to: event.currentTarget.value })} />
+            <Input
+              type="date"
+              size="sm"
+              value={range.to}
+              min={range.from}
+              onChange={(event) => event.currentTarget.value && setRange({ to: event.currentTarget.value })}
+            />
           </FormField>
         </Box>
         <CsvButton path={shotCountsPath(range, '.csv')} label="Export CSV" />
@@ -81,7 +110,13 @@ export function ShotCountsScreen() {
               <FigureStat label="Airframes launched" value={data.airframes.filter((row) => row.launches > 0).length} />
             </SimpleGrid>
             <ReportSection title="Per catapult">
-              <ReportTable caption="Shot counts per catapult" rows={data.catapults} columns={catapultColumns} rowKey={(row) => row.catapultId} empty="No catapults." />
+              <ReportTable
+                caption="Shot counts per catapult"
+                rows={data.catapults}
+                columns={catapultColumns}
+                rowKey={(row) => row.catapultId}
+                empty="No catapults."
+              />
             </ReportSection>
             <ReportSection title="Per airframe">
               <DataTable

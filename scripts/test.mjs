@@ -67,6 +67,7 @@ stage('Build', pnpm, ['-r', 'build']);
 if (failures.length === 0) {
   stage('Type-check', pnpm, ['-r', 'typecheck']);
   stage('Lint', pnpm, ['lint']);
+  stage('Format', pnpm, ['format:check']);
   for (const script of testScripts) {
     for (const pkg of workspacePackages().filter((p) => p.scripts[script])) {
       const file = path.join(

@@ -1,5 +1,6 @@
 import { existsSync } from 'node:fs';
 import { defineConfig } from '@playwright/test';
+import { debianChromium } from './e2e/support/chromium.js';
 
 // DB_* and JWT_SECRET come from the workspace .env; the browser tests get a database of their own.
 if (existsSync('../../.env')) process.loadEnvFile('../../.env');
@@ -23,18 +24,7 @@ export default defineConfig({
     baseURL,
     trace: 'off',
     screenshot: 'only-on-failure',
-    launchOptions: {
-      executablePath: '/usr/bin/chromium',
-      args: [
-        '--no-sandbox',
-        '--disable-gpu',
-        '--disable-quic',
-        '--no-first-run',
-        '--disable-background-networking',
-        '--disable-component-update',
-        '--disable-sync',
-      ],
-    },
+    launchOptions: debianChromium,
   },
   webServer: {
     // The built app served by the API, as `npm start` serves it, on a freshly reset database.

@@ -1,4 +1,5 @@
 import { expect, test } from '@playwright/test';
+import { debianChromium } from './support/chromium.js';
 import { signIn } from './support/screens.js';
 
 // A ship's internal network serves the app over plain HTTP under its own host name. Chromium maps
@@ -7,19 +8,7 @@ const port = process.env.E2E_PORT ?? '3100';
 const shipAddress = `http://ship.test:${port}`;
 
 test.use({
-  launchOptions: {
-    executablePath: '/usr/bin/chromium',
-    args: [
-      '--no-sandbox',
-      '--disable-gpu',
-      '--disable-quic',
-      '--no-first-run',
-      '--disable-background-networking',
-      '--disable-component-update',
-      '--disable-sync',
-      '--host-resolver-rules=MAP ship.test 127.0.0.1',
-    ],
-  },
+  launchOptions: { ...debianChromium, args: [...debianChromium.args, '--host-resolver-rules=MAP ship.test 127.0.0.1'] },
 });
 
 test('over plain HTTP under a ship-network name the app loads, signs in and goes live', async ({ page }) => {

@@ -8,11 +8,10 @@ import ts from 'typescript';
 const SRC = path.resolve(import.meta.dirname, '../apps/api/src');
 
 /**
- * Reading another folder's entities is not a dependency on that feature: the entities are the shared
- * persistence model, and TypeORM relations point both ways by nature. database/ is the wiring that
- * lists every entity and migration and drives the features to seed, like app.module.ts.
+ * database/ holds the entities (the persistence model every feature reads; TypeORM relations point
+ * both ways by nature, so they live together) and the wiring that lists them with the migrations and
+ * drives the features to seed, like app.module.ts. A feature may import it; its own imports do not count.
  */
-const sharesEntities = (target) => target.split(path.sep).includes('entities');
 const WIRING = new Set(['database']);
 
 const folderOf = (file) => {
@@ -27,8 +26,7 @@ function importedFolder(file, specifier) {
   const target = path.resolve(path.dirname(file), specifier);
   const from = folderOf(file);
   const to = folderOf(target);
-  if (from === null || to === null || from === to || WIRING.has(from) || sharesEntities(path.relative(SRC, target)))
-    return null;
+  if (from === null || to === null || from === to || WIRING.has(from)) return null;
   return to;
 }
 

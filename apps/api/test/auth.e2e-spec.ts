@@ -3,7 +3,7 @@ import { ConfigService } from '@nestjs/config';
 import { JwtService } from '@nestjs/jwt';
 import request from 'supertest';
 import { DataSource } from 'typeorm';
-import { User } from '../src/users/entities/user.entity.js';
+import { User } from '../src/database/entities/user.entity.js';
 import { refreshCookie } from './support/cookies.js';
 import { createUser, TEST_PASSWORD } from './support/fleet-fixtures.js';
 import { bearer, signIn } from './support/sign-in.js';

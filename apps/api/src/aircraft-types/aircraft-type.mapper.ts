@@ -1,5 +1,5 @@
 import type { AircraftTypeView } from '@catline/contracts';
-import type { AircraftType } from './entities/aircraft-type.entity.js';
+import type { AircraftType } from '../database/entities/aircraft-type.entity.js';
 
 export function toAircraftTypeView(type: AircraftType): AircraftTypeView {
   return {

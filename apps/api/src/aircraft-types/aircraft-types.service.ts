@@ -3,13 +3,13 @@ import { Injectable, Logger } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, type EntityManager, Not } from 'typeorm';
 import { definedFields } from '../common/defined-fields.js';
-import { Aircraft } from '../aircraft/entities/aircraft.entity.js';
+import { Aircraft } from '../database/entities/aircraft.entity.js';
 import { isDuplicateKey, isStillReferenced } from '../common/errors/database-errors.js';
 import { toAircraftTypeView } from './aircraft-type.mapper.js';
 import { AircraftTypesException } from './aircraft-types.exception.js';
 import type { CreateAircraftTypeDto } from './dto/create-aircraft-type.dto.js';
 import type { UpdateAircraftTypeDto } from './dto/update-aircraft-type.dto.js';
-import { AircraftType } from './entities/aircraft-type.entity.js';
+import { AircraftType } from '../database/entities/aircraft-type.entity.js';
 import { launchTableProblems, trimBandProblems } from './launch-data.js';
 
 @Injectable()

@@ -1,5 +1,5 @@
 import type { AircraftView } from '@catline/contracts';
-import type { Aircraft } from './entities/aircraft.entity.js';
+import type { Aircraft } from '../database/entities/aircraft.entity.js';
 
 /** Needs the aircraft loaded with its type and squadron. */
 export function toAircraftView(aircraft: Aircraft): AircraftView {

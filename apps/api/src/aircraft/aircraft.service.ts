@@ -3,16 +3,16 @@ import { Injectable, Logger } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, type EntityManager, Not } from 'typeorm';
 import { definedFields } from '../common/defined-fields.js';
-import { AircraftType } from '../aircraft-types/entities/aircraft-type.entity.js';
+import { AircraftType } from '../database/entities/aircraft-type.entity.js';
 import { isDuplicateKey, isStillReferenced } from '../common/errors/database-errors.js';
-import { Slot } from '../cycle-changes/entities/slot.entity.js';
-import { Ship } from '../ships/entities/ship.entity.js';
-import { Squadron } from '../squadrons/entities/squadron.entity.js';
+import { Slot } from '../database/entities/slot.entity.js';
+import { Ship } from '../database/entities/ship.entity.js';
+import { Squadron } from '../database/entities/squadron.entity.js';
 import { toAircraftView } from './aircraft.mapper.js';
 import { AircraftException } from './aircraft.exception.js';
 import type { CreateAircraftDto } from './dto/create-aircraft.dto.js';
 import type { UpdateAircraftDto } from './dto/update-aircraft.dto.js';
-import { Aircraft } from './entities/aircraft.entity.js';
+import { Aircraft } from '../database/entities/aircraft.entity.js';
 
 const WITH_NAMES = { type: true, squadron: true } as const;
 

@@ -5,7 +5,7 @@ import { APP_GUARD } from '@nestjs/core';
 import { JwtModule } from '@nestjs/jwt';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import type { Environment } from '../config/environment.js';
-import { User } from '../users/entities/user.entity.js';
+import { User } from '../database/entities/user.entity.js';
 import { ACCESS_TOKEN_ALGORITHM } from './access-token.js';
 import { AttemptLimits } from './attempt-limits.service.js';
 import { AuthController } from './auth.controller.js';

@@ -5,7 +5,7 @@ import { JwtService } from '@nestjs/jwt';
 import { InjectDataSource } from '@nestjs/typeorm';
 import type { DataSource } from 'typeorm';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
-import { User } from '../users/entities/user.entity.js';
+import { User } from '../database/entities/user.entity.js';
 import { ACCESS_TOKEN_ALGORITHM, ACCESS_TOKEN_LIFETIME_S, type AccessTokenClaims } from './access-token.js';
 import { AuthException } from './auth.exception.js';
 import { AttemptLimits } from './attempt-limits.service.js';

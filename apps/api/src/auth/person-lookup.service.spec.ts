@@ -1,7 +1,7 @@
 import type { ConfigService } from '@nestjs/config';
 import type { DataSource, EntitySubscriberInterface, Repository } from 'typeorm';
 import type { Environment } from '../config/environment.js';
-import { User } from '../users/entities/user.entity.js';
+import { User } from '../database/entities/user.entity.js';
 import { PersonLookup } from './person-lookup.service.js';
 
 function lookup(redisUrl?: string) {

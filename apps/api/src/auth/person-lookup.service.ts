@@ -4,7 +4,7 @@ import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
 import type { DataSource, Repository } from 'typeorm';
 import { type Environment, runsClustered } from '../config/environment.js';
 import { EntityWriteCounter } from '../database/entity-write-counter.js';
-import { User } from '../users/entities/user.entity.js';
+import { User } from '../database/entities/user.entity.js';
 
 /**
  * The person behind each access token, read once and then kept in memory until any person is written

@@ -2,8 +2,8 @@ import { createHash, randomBytes } from 'node:crypto';
 import { Injectable, Logger } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, type EntityManager, LessThan } from 'typeorm';
-import { RefreshToken } from './entities/refresh-token.entity.js';
-import { User } from '../users/entities/user.entity.js';
+import { RefreshToken } from '../database/entities/refresh-token.entity.js';
+import { User } from '../database/entities/user.entity.js';
 
 export const REFRESH_TOKEN_LIFETIME_MS = 12 * 60 * 60 * 1000;
 

@@ -1,8 +1,8 @@
 import type { CatapultStatus, LineupChange, LineupPatch } from '@catline/contracts';
 import { Injectable } from '@nestjs/common';
 import type { EntityManager } from 'typeorm';
-import type { Catapult } from '../ships/entities/catapult.entity.js';
-import type { Slot } from './entities/slot.entity.js';
+import type { Catapult } from '../database/entities/catapult.entity.js';
+import type { Slot } from '../database/entities/slot.entity.js';
 import { laneSlots } from './lineup-snapshot.builder.js';
 import type { LineupState } from './lineup-state.js';
 import { LineupException } from './lineup.exception.js';

@@ -1,5 +1,5 @@
 import type { LineupChange } from '@catline/contracts';
-import type { CycleChange } from './entities/cycle-change.entity.js';
+import type { CycleChange } from '../database/entities/cycle-change.entity.js';
 
 export function toLineupChange(row: CycleChange): LineupChange {
   return {

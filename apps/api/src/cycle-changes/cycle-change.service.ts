@@ -2,13 +2,13 @@ import type { ChangeActor, ChangeKind, LineupChange, LineupCommandResult } from 
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { DataSource, type EntityManager, type QueryDeepPartialEntity } from 'typeorm';
-import { Cycle } from '../cycles/entities/cycle.entity.js';
+import { Cycle } from '../database/entities/cycle.entity.js';
 import { LineupChangeFeed, type FeedTicket } from './change-feed.service.js';
 import { toLineupChange } from './change.mapper.js';
 import { Clock } from './clock.js';
 import { isDeadlock, retryOnDeadlock } from './deadlock-retry.js';
 import { bumpVersion, claimNextVersion } from './cycle-version.js';
-import { CycleChange } from './entities/cycle-change.entity.js';
+import { CycleChange } from '../database/entities/cycle-change.entity.js';
 import { diffSnapshots } from './lineup-diff.js';
 import { buildSnapshot } from './lineup-snapshot.builder.js';
 import { LineupStateCache, StartingPoint } from './lineup-state.cache.js';

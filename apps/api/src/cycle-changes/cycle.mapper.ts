@@ -1,5 +1,5 @@
 import type { CycleView } from '@catline/contracts';
-import type { Cycle } from '../cycles/entities/cycle.entity.js';
+import type { Cycle } from '../database/entities/cycle.entity.js';
 
 export interface CycleCounts {
   slotCount: number;

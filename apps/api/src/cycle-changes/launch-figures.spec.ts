@@ -1,7 +1,7 @@
 import { NO_GO_CODES } from '@catline/contracts';
 import { knots, LAUNCH_NO_GO_CODES, type WindComponents } from '@catline/launch-math';
-import type { AircraftType } from '../aircraft-types/entities/aircraft-type.entity.js';
-import type { Catapult } from '../ships/entities/catapult.entity.js';
+import type { AircraftType } from '../database/entities/aircraft-type.entity.js';
+import type { Catapult } from '../database/entities/catapult.entity.js';
 import { launchFiguresView, type FiguresInput } from './launch-figures.js';
 
 // The worked example of launch-math's launch-figures spec in stored units: Halliday, Resnick & Walker,

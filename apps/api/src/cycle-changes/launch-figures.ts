@@ -6,8 +6,8 @@ import {
   type UnschedulableReason,
   type WindComponents,
 } from '@catline/launch-math';
-import type { AircraftType } from '../aircraft-types/entities/aircraft-type.entity.js';
-import type { Catapult } from '../ships/entities/catapult.entity.js';
+import type { AircraftType } from '../database/entities/aircraft-type.entity.js';
+import type { Catapult } from '../database/entities/catapult.entity.js';
 import { aircraftProfile, catapultEnergy } from './launch-math.adapter.js';
 
 export interface FiguresInput {

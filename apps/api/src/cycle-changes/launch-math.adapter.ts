@@ -20,9 +20,9 @@ import {
   type RelativeWind,
   type ShipProfile,
 } from '@catline/launch-math';
-import type { AircraftType } from '../aircraft-types/entities/aircraft-type.entity.js';
-import type { Cycle } from '../cycles/entities/cycle.entity.js';
-import type { Catapult } from '../ships/entities/catapult.entity.js';
+import type { AircraftType } from '../database/entities/aircraft-type.entity.js';
+import type { Cycle } from '../database/entities/cycle.entity.js';
+import type { Catapult } from '../database/entities/catapult.entity.js';
 
 // Translations from the stored data to @catline/launch-math's inputs. No figure is computed here.
 

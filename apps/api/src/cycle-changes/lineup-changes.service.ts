@@ -3,9 +3,9 @@ import { MAX_REPLAY_CHANGES } from '@catline/contracts';
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { Between, DataSource, MoreThan, type EntityManager } from 'typeorm';
-import { Cycle } from '../cycles/entities/cycle.entity.js';
+import { Cycle } from '../database/entities/cycle.entity.js';
 import { toLineupChange } from './change.mapper.js';
-import { CycleChange } from './entities/cycle-change.entity.js';
+import { CycleChange } from '../database/entities/cycle-change.entity.js';
 import { cycleNotFound } from './lineup-state.js';
 
 /** How far back a stale-basis explanation looks for the change that moved things on. */

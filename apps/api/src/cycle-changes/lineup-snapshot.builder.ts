@@ -20,8 +20,8 @@ import {
   type WindComponents,
 } from '@catline/launch-math';
 import { toCycleView } from './cycle.mapper.js';
-import type { Catapult } from '../ships/entities/catapult.entity.js';
-import type { Slot } from './entities/slot.entity.js';
+import type { Catapult } from '../database/entities/catapult.entity.js';
+import type { Slot } from '../database/entities/slot.entity.js';
 import { launchFiguresView } from './launch-figures.js';
 import {
   aircraftProfile,

@@ -1,9 +1,9 @@
 import type { LineupSnapshot } from '@catline/contracts';
 import type { DataSource, EntitySubscriberInterface } from 'typeorm';
-import { Aircraft } from '../aircraft/entities/aircraft.entity.js';
-import { Cycle } from '../cycles/entities/cycle.entity.js';
-import { User } from '../users/entities/user.entity.js';
-import { Slot } from './entities/slot.entity.js';
+import { Aircraft } from '../database/entities/aircraft.entity.js';
+import { Cycle } from '../database/entities/cycle.entity.js';
+import { User } from '../database/entities/user.entity.js';
+import { Slot } from '../database/entities/slot.entity.js';
 import { LineupStateCache } from './lineup-state.cache.js';
 import type { LineupState } from './lineup-state.js';
 

@@ -1,12 +1,12 @@
 import type { LineupSnapshot } from '@catline/contracts';
 import type { DataSource } from 'typeorm';
-import { AircraftType } from '../aircraft-types/entities/aircraft-type.entity.js';
-import { Aircraft } from '../aircraft/entities/aircraft.entity.js';
+import { AircraftType } from '../database/entities/aircraft-type.entity.js';
+import { Aircraft } from '../database/entities/aircraft.entity.js';
 import { EntityWriteCounter } from '../database/entity-write-counter.js';
-import { Catapult } from '../ships/entities/catapult.entity.js';
-import { Ship } from '../ships/entities/ship.entity.js';
-import { Squadron } from '../squadrons/entities/squadron.entity.js';
-import { User } from '../users/entities/user.entity.js';
+import { Catapult } from '../database/entities/catapult.entity.js';
+import { Ship } from '../database/entities/ship.entity.js';
+import { Squadron } from '../database/entities/squadron.entity.js';
+import { User } from '../database/entities/user.entity.js';
 import type { LineupState } from './lineup-state.js';
 
 /** What a cycle's lineup is computed from besides its own slots and row. */

@@ -1,11 +1,11 @@
 import { Injectable } from '@nestjs/common';
 import { In, type EntityManager } from 'typeorm';
-import { Aircraft } from '../aircraft/entities/aircraft.entity.js';
-import { Cycle } from '../cycles/entities/cycle.entity.js';
-import { Catapult } from '../ships/entities/catapult.entity.js';
-import { Ship } from '../ships/entities/ship.entity.js';
-import { User } from '../users/entities/user.entity.js';
-import { Slot } from './entities/slot.entity.js';
+import { Aircraft } from '../database/entities/aircraft.entity.js';
+import { Cycle } from '../database/entities/cycle.entity.js';
+import { Catapult } from '../database/entities/catapult.entity.js';
+import { Ship } from '../database/entities/ship.entity.js';
+import { User } from '../database/entities/user.entity.js';
+import { Slot } from '../database/entities/slot.entity.js';
 import { LineupException } from './lineup.exception.js';
 
 /** Everything a cycle's lineup is computed from, read in one transaction. */

@@ -1,6 +1,6 @@
 import type { EntityManager, QueryDeepPartialEntity } from 'typeorm';
-import type { User } from '../users/entities/user.entity.js';
-import { Slot } from './entities/slot.entity.js';
+import type { User } from '../database/entities/user.entity.js';
+import { Slot } from '../database/entities/slot.entity.js';
 
 const movedPastVersion = (ids: number[]) =>
   new Error(`Slot ${ids.join(', ')} moved past the version read while its cycle was locked`);

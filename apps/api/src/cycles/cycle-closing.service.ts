@@ -8,7 +8,7 @@ import { updateSlot } from '../cycle-changes/slot-writes.js';
 import { MailOutbox } from '../mail/mail-outbox.service.js';
 import { composeCycleSummary } from './cycle-summary.js';
 import { readCycleSummary } from './cycle-summary.reader.js';
-import { Cycle } from './entities/cycle.entity.js';
+import { Cycle } from '../database/entities/cycle.entity.js';
 
 const FINISHED: readonly SlotStatus[] = ['launched', 'down', 'scratched'];
 

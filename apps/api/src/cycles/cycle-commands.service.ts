@@ -1,19 +1,19 @@
 import type { ChangeActor, CycleConditions, LineupCommandResult } from '@catline/contracts';
 import { Injectable } from '@nestjs/common';
 import type { EntityManager } from 'typeorm';
-import { Aircraft } from '../aircraft/entities/aircraft.entity.js';
+import { Aircraft } from '../database/entities/aircraft.entity.js';
 import { BasisChecks } from '../cycle-changes/basis-checks.service.js';
 import { CycleChangeService } from '../cycle-changes/cycle-change.service.js';
-import { Slot } from '../cycle-changes/entities/slot.entity.js';
+import { Slot } from '../database/entities/slot.entity.js';
 import type { LineupState } from '../cycle-changes/lineup-state.js';
 import { LineupException } from '../cycle-changes/lineup.exception.js';
-import { User } from '../users/entities/user.entity.js';
+import { User } from '../database/entities/user.entity.js';
 import { CycleClosing } from './cycle-closing.service.js';
 import { checkWindow, type CycleTimes } from './cycle-window.js';
 import { CyclesException } from './cycles.exception.js';
 import type { AddSlotDto } from './dto/add-slot.dto.js';
 import type { UpdateCycleConditionsDto } from './dto/update-cycle-conditions.dto.js';
-import { Cycle } from './entities/cycle.entity.js';
+import { Cycle } from '../database/entities/cycle.entity.js';
 
 type ConditionValues = Partial<CycleConditions & CycleTimes>;
 

@@ -1,11 +1,11 @@
 import { type EntityManager, In } from 'typeorm';
-import { CycleChange } from '../cycle-changes/entities/cycle-change.entity.js';
-import { Slot } from '../cycle-changes/entities/slot.entity.js';
-import { Catapult } from '../ships/entities/catapult.entity.js';
-import { Ship } from '../ships/entities/ship.entity.js';
-import type { Squadron } from '../squadrons/entities/squadron.entity.js';
+import { CycleChange } from '../database/entities/cycle-change.entity.js';
+import { Slot } from '../database/entities/slot.entity.js';
+import { Catapult } from '../database/entities/catapult.entity.js';
+import { Ship } from '../database/entities/ship.entity.js';
+import type { Squadron } from '../database/entities/squadron.entity.js';
 import type { CycleSummaryInput, SummaryEvent } from './cycle-summary.js';
-import type { Cycle } from './entities/cycle.entity.js';
+import type { Cycle } from '../database/entities/cycle.entity.js';
 
 /** Changes whose account a squadron wants besides its aircraft's outcome. */
 const TOLD_KINDS = ['aircraft_down', 'slot_suspended', 'slot_launched'] as const;

@@ -3,13 +3,13 @@ import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { DataSource } from 'typeorm';
 import { isDuplicateKey } from '../common/errors/database-errors.js';
-import { Slot } from '../cycle-changes/entities/slot.entity.js';
-import { Ship } from '../ships/entities/ship.entity.js';
+import { Slot } from '../database/entities/slot.entity.js';
+import { Ship } from '../database/entities/ship.entity.js';
 import { toCycleView, type CycleCounts } from '../cycle-changes/cycle.mapper.js';
 import { checkWindow } from './cycle-window.js';
 import { CyclesException } from './cycles.exception.js';
 import type { CreateCycleDto } from './dto/create-cycle.dto.js';
-import { Cycle } from './entities/cycle.entity.js';
+import { Cycle } from '../database/entities/cycle.entity.js';
 
 const NO_SLOTS: CycleCounts = { slotCount: 0, launchedCount: 0 };
 

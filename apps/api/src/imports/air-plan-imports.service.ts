@@ -2,14 +2,14 @@ import type { AirPlanPreview, AirPlanRow, LineupCommandResult, SlotStatus } from
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, type EntityManager, In } from 'typeorm';
-import { Aircraft } from '../aircraft/entities/aircraft.entity.js';
+import { Aircraft } from '../database/entities/aircraft.entity.js';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
-import { Cycle } from '../cycles/entities/cycle.entity.js';
+import { Cycle } from '../database/entities/cycle.entity.js';
 import { BasisChecks } from '../cycle-changes/basis-checks.service.js';
 import { actorOf, CycleChangeService } from '../cycle-changes/cycle-change.service.js';
-import { Slot } from '../cycle-changes/entities/slot.entity.js';
+import { Slot } from '../database/entities/slot.entity.js';
 import { LineupException } from '../cycle-changes/lineup.exception.js';
-import { User } from '../users/entities/user.entity.js';
+import { User } from '../database/entities/user.entity.js';
 import { AIR_PLAN_COLUMNS, AIR_PLAN_LAYOUT, type AirPlanLine, readAirPlan } from './air-plan-layout.js';
 import { type CheckedPlan, checkAirPlan, type PlanContext, sideKey } from './air-plan-references.js';
 import { sortProblems } from './csv-table.js';

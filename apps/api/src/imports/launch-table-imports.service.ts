@@ -3,7 +3,7 @@ import { Injectable, Logger } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import type { DataSource } from 'typeorm';
 import { toAircraftTypeView } from '../aircraft-types/aircraft-type.mapper.js';
-import { AircraftType } from '../aircraft-types/entities/aircraft-type.entity.js';
+import { AircraftType } from '../database/entities/aircraft-type.entity.js';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
 import { sortProblems } from './csv-table.js';
 import type { UploadedCsv } from './csv-upload.js';

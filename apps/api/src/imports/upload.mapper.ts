@@ -1,5 +1,5 @@
 import type { ImportPreview } from '@catline/contracts';
-import type { Upload } from './entities/upload.entity.js';
+import type { Upload } from '../database/entities/upload.entity.js';
 
 export function toImportPreview<Row>(upload: Upload, rows: Row[]): ImportPreview<Row> {
   return {

@@ -6,7 +6,7 @@ import { type DataSource, type EntityManager, LessThan } from 'typeorm';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
 import { type CsvLayout, headerWidthProblem } from './csv-table.js';
 import { csvText, notCsvReason, type UploadedCsv, CSV_FIELD } from './csv-upload.js';
-import { Upload, type UploadKind } from './entities/upload.entity.js';
+import { Upload, type UploadKind } from '../database/entities/upload.entity.js';
 import { ImportsException } from './imports.exception.js';
 
 /** What an upload is for: an air plan's cycle or a launch table's aircraft type. */

@@ -8,11 +8,11 @@ import type {
   SlotStatus,
 } from '@catline/contracts';
 import { Injectable } from '@nestjs/common';
-import { Catapult } from '../ships/entities/catapult.entity.js';
+import { Catapult } from '../database/entities/catapult.entity.js';
 import { BasisChecks } from '../cycle-changes/basis-checks.service.js';
 import { Clock } from '../cycle-changes/clock.js';
 import { CycleChangeService } from '../cycle-changes/cycle-change.service.js';
-import type { Slot } from '../cycle-changes/entities/slot.entity.js';
+import type { Slot } from '../database/entities/slot.entity.js';
 import { laneSlots } from '../cycle-changes/lineup-snapshot.builder.js';
 import type { LineupState } from '../cycle-changes/lineup-state.js';
 import { LineupException } from '../cycle-changes/lineup.exception.js';

@@ -8,15 +8,15 @@ import type {
 } from '@catline/contracts';
 import { Injectable } from '@nestjs/common';
 import type { EntityManager } from 'typeorm';
-import { Aircraft } from '../aircraft/entities/aircraft.entity.js';
+import { Aircraft } from '../database/entities/aircraft.entity.js';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
 import { isDuplicateKey } from '../common/errors/database-errors.js';
-import { Catapult } from '../ships/entities/catapult.entity.js';
+import { Catapult } from '../database/entities/catapult.entity.js';
 import { BasisChecks } from '../cycle-changes/basis-checks.service.js';
 import { Clock } from '../cycle-changes/clock.js';
 import { CycleChangeService, actorOf } from '../cycle-changes/cycle-change.service.js';
 import { CycleClosing } from '../cycles/cycle-closing.service.js';
-import type { Slot } from '../cycle-changes/entities/slot.entity.js';
+import type { Slot } from '../database/entities/slot.entity.js';
 import { LineupChangesService } from '../cycle-changes/lineup-changes.service.js';
 import { laneSlots, slotFigures } from '../cycle-changes/lineup-snapshot.builder.js';
 import type { LineupState } from '../cycle-changes/lineup-state.js';

@@ -1,6 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import type { EntityManager } from 'typeorm';
-import type { MailKind } from './entities/outbox-mail.entity.js';
+import type { MailKind } from '../database/entities/outbox-mail.entity.js';
 
 export interface MailDraft {
   kind: MailKind;

@@ -3,7 +3,7 @@ import { ConfigService } from '@nestjs/config';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, In } from 'typeorm';
 import type { Environment } from '../config/environment.js';
-import { OutboxMail } from './entities/outbox-mail.entity.js';
+import { OutboxMail } from '../database/entities/outbox-mail.entity.js';
 import { MailTransport } from './mail-transport.js';
 import { retryDelayMs } from './retry-delay.js';
 

@@ -2,7 +2,7 @@ import { Injectable, type OnApplicationShutdown } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { createTransport } from 'nodemailer';
 import type { Environment } from '../config/environment.js';
-import type { OutboxMail } from './entities/outbox-mail.entity.js';
+import type { OutboxMail } from '../database/entities/outbox-mail.entity.js';
 
 /** The SMTP connection, through nodemailer; one message at a time, each on its own connection. */
 @Injectable()

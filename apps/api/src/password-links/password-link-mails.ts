@@ -1,5 +1,5 @@
 import { ROLE_LABELS, type Role } from '@catline/contracts';
-import type { LinkPurpose } from './entities/password-link.entity.js';
+import type { LinkPurpose } from '../database/entities/password-link.entity.js';
 
 export interface LinkMailInput {
   name: string;

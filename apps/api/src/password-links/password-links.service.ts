@@ -9,8 +9,8 @@ import { hashPassword } from '../auth/password.js';
 import { RefreshTokens } from '../auth/refresh-tokens.service.js';
 import type { Environment } from '../config/environment.js';
 import { MailOutbox } from '../mail/mail-outbox.service.js';
-import { User } from '../users/entities/user.entity.js';
-import { type LinkPurpose, PasswordLink } from './entities/password-link.entity.js';
+import { User } from '../database/entities/user.entity.js';
+import { type LinkPurpose, PasswordLink } from '../database/entities/password-link.entity.js';
 import { invitationMail, LINK_PATHS, resetMail } from './password-link-mails.js';
 import { PasswordLinksException } from './password-links.exception.js';
 

@@ -1,6 +1,6 @@
 import type { CycleReport } from '@catline/contracts';
 import type { CsvCell } from '../common/csv.js';
-import type { CycleChange } from '../cycle-changes/entities/cycle-change.entity.js';
+import type { CycleChange } from '../database/entities/cycle-change.entity.js';
 import type { LineupState } from '../cycle-changes/lineup-state.js';
 
 // The columns of a cycle's CSV exports; README.md describes them.

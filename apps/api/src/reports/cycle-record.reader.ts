@@ -1,6 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import { LessThanOrEqual } from 'typeorm';
-import { CycleChange } from '../cycle-changes/entities/cycle-change.entity.js';
+import { CycleChange } from '../database/entities/cycle-change.entity.js';
 import { LineupStateLoader, type LineupState } from '../cycle-changes/lineup-state.js';
 import { ReplicaReads } from '../database/replica-reads.js';
 

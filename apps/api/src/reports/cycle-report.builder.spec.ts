@@ -1,9 +1,9 @@
 import type { ChangeKind, LineupChange, SlotStatus, SlotView } from '@catline/contracts';
-import type { Cycle } from '../cycles/entities/cycle.entity.js';
-import type { Slot } from '../cycle-changes/entities/slot.entity.js';
+import type { Cycle } from '../database/entities/cycle.entity.js';
+import type { Slot } from '../database/entities/slot.entity.js';
 import type { LineupState } from '../cycle-changes/lineup-state.js';
-import type { Catapult } from '../ships/entities/catapult.entity.js';
-import type { Ship } from '../ships/entities/ship.entity.js';
+import type { Catapult } from '../database/entities/catapult.entity.js';
+import type { Ship } from '../database/entities/ship.entity.js';
 import { buildCycleReport } from './cycle-report.builder.js';
 
 // A small invented cycle; every expected figure is worked by hand from its times (common practice, no source).

@@ -10,7 +10,7 @@ import type {
   SquadronReport,
 } from '@catline/contracts';
 import { toCycleView } from '../cycle-changes/cycle.mapper.js';
-import type { Slot } from '../cycle-changes/entities/slot.entity.js';
+import type { Slot } from '../database/entities/slot.entity.js';
 import type { LineupState } from '../cycle-changes/lineup-state.js';
 import { readChangeLog, type ChangeLogReading } from './change-log-reading.js';
 import {

@@ -1,11 +1,11 @@
 import type { ShotCounts } from '@catline/contracts';
 import { Injectable } from '@nestjs/common';
 import type { EntityManager } from 'typeorm';
-import { Aircraft } from '../aircraft/entities/aircraft.entity.js';
+import { Aircraft } from '../database/entities/aircraft.entity.js';
 import { toCsv } from '../common/csv.js';
-import { Slot } from '../cycle-changes/entities/slot.entity.js';
+import { Slot } from '../database/entities/slot.entity.js';
 import { ReplicaReads } from '../database/replica-reads.js';
-import { Catapult } from '../ships/entities/catapult.entity.js';
+import { Catapult } from '../database/entities/catapult.entity.js';
 import type { CsvFile } from './csv-response.js';
 import type { DayRange } from './day-range.js';
 

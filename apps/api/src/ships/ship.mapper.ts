@@ -1,6 +1,6 @@
 import type { CatapultView, ShipView } from '@catline/contracts';
-import type { Catapult } from './entities/catapult.entity.js';
-import type { Ship } from './entities/ship.entity.js';
+import type { Catapult } from '../database/entities/catapult.entity.js';
+import type { Ship } from '../database/entities/ship.entity.js';
 
 export function toCatapultView(catapult: Catapult): CatapultView {
   return {

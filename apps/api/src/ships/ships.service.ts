@@ -3,12 +3,12 @@ import { Injectable, Logger } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, type EntityManager, In, Not } from 'typeorm';
 import { definedFields } from '../common/defined-fields.js';
-import { Aircraft } from '../aircraft/entities/aircraft.entity.js';
+import { Aircraft } from '../database/entities/aircraft.entity.js';
 import { deckSpotProblems } from './deck-spots.js';
 import type { UpdateCatapultDto } from './dto/update-catapult.dto.js';
 import type { UpdateShipDto } from './dto/update-ship.dto.js';
-import { Catapult } from './entities/catapult.entity.js';
-import { Ship } from './entities/ship.entity.js';
+import { Catapult } from '../database/entities/catapult.entity.js';
+import { Ship } from '../database/entities/ship.entity.js';
 import { toCatapultView, toShipView } from './ship.mapper.js';
 import { ShipsException } from './ships.exception.js';
 

@@ -3,11 +3,11 @@ import { Injectable, Logger } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, type EntityManager, Not } from 'typeorm';
 import { definedFields } from '../common/defined-fields.js';
-import { Aircraft } from '../aircraft/entities/aircraft.entity.js';
+import { Aircraft } from '../database/entities/aircraft.entity.js';
 import { isDuplicateKey, isStillReferenced } from '../common/errors/database-errors.js';
 import type { CreateSquadronDto } from './dto/create-squadron.dto.js';
 import type { UpdateSquadronDto } from './dto/update-squadron.dto.js';
-import { Squadron } from './entities/squadron.entity.js';
+import { Squadron } from '../database/entities/squadron.entity.js';
 import { toSquadronView } from './squadron.mapper.js';
 import { SquadronsException } from './squadrons.exception.js';
 

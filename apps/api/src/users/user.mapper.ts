@@ -1,5 +1,5 @@
 import type { UserView } from '@catline/contracts';
-import type { User } from './entities/user.entity.js';
+import type { User } from '../database/entities/user.entity.js';
 
 export function toUserView(user: User): UserView {
   return {

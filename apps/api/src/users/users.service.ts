@@ -8,12 +8,12 @@ import { RefreshTokens } from '../auth/refresh-tokens.service.js';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
 import { PasswordLinks } from '../password-links/password-links.service.js';
 import { isDuplicateKey } from '../common/errors/database-errors.js';
-import { Catapult } from '../ships/entities/catapult.entity.js';
-import { Squadron } from '../squadrons/entities/squadron.entity.js';
+import { Catapult } from '../database/entities/catapult.entity.js';
+import { Squadron } from '../database/entities/squadron.entity.js';
 import { catapultBindingProblem } from './catapult-binding.js';
 import type { CreateUserDto } from './dto/create-user.dto.js';
 import type { UpdateUserDto } from './dto/update-user.dto.js';
-import { User } from './entities/user.entity.js';
+import { User } from '../database/entities/user.entity.js';
 import { toUserView } from './user.mapper.js';
 import { UsersException } from './users.exception.js';
 

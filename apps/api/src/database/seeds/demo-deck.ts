@@ -17,7 +17,7 @@ import { LineupSnapshotService } from '../../cycle-changes/lineup-snapshot.servi
 import { LineupStateLoader } from '../../cycle-changes/lineup-state.js';
 import { ReadinessService } from '../../lineup/readiness.service.js';
 import { MailOutbox } from '../../mail/mail-outbox.service.js';
-import { User } from '../../users/entities/user.entity.js';
+import { User } from '../entities/user.entity.js';
 
 /** A clock the demo sets, so the history it builds carries the times of an invented flying day. */
 export class SetClock extends Clock {

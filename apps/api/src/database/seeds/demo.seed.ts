@@ -1,11 +1,11 @@
 import type { DataSource } from 'typeorm';
-import { AircraftType } from '../../aircraft-types/entities/aircraft-type.entity.js';
-import { Aircraft } from '../../aircraft/entities/aircraft.entity.js';
+import { AircraftType } from '../entities/aircraft-type.entity.js';
+import { Aircraft } from '../entities/aircraft.entity.js';
 import { hashPassword } from '../../auth/password.js';
-import { Catapult } from '../../ships/entities/catapult.entity.js';
-import { Ship } from '../../ships/entities/ship.entity.js';
-import { Squadron } from '../../squadrons/entities/squadron.entity.js';
-import { User } from '../../users/entities/user.entity.js';
+import { Catapult } from '../entities/catapult.entity.js';
+import { Ship } from '../entities/ship.entity.js';
+import { Squadron } from '../entities/squadron.entity.js';
+import { User } from '../entities/user.entity.js';
 import { seedDemoCycles } from './demo-cycles.js';
 import {
   DEMO_PASSWORD,

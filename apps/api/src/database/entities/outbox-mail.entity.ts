@@ -1,5 +1,5 @@
 import { Column, Entity, Index, PrimaryGeneratedColumn, Unique } from 'typeorm';
-import { CreatedAtColumn, InstantColumn } from '../../database/columns.js';
+import { CreatedAtColumn, InstantColumn } from '../columns.js';
 
 export const MAIL_KINDS = ['invitation', 'password_reset', 'cycle_summary'] as const;
 export type MailKind = (typeof MAIL_KINDS)[number];

@@ -1,10 +1,10 @@
 import type { SlotStatus } from '@catline/contracts';
 import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, Unique, type Relation } from 'typeorm';
-import { Aircraft } from '../../aircraft/entities/aircraft.entity.js';
-import { Cycle } from '../../cycles/entities/cycle.entity.js';
-import { InstantColumn } from '../../database/columns.js';
-import { Catapult } from '../../ships/entities/catapult.entity.js';
-import { User } from '../../users/entities/user.entity.js';
+import { Aircraft } from './aircraft.entity.js';
+import { Cycle } from './cycle.entity.js';
+import { InstantColumn } from '../columns.js';
+import { Catapult } from './catapult.entity.js';
+import { User } from './user.entity.js';
 
 /** One aircraft's place in a cycle: in the deck pool (no catapult) or in a catapult's lane. */
 @Entity('slots')

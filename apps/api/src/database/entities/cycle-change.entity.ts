@@ -1,7 +1,7 @@
 import type { ChangeKind, LineupPatch, Role } from '@catline/contracts';
 import { Column, Entity, JoinColumn, ManyToOne, PrimaryGeneratedColumn, Unique, type Relation } from 'typeorm';
-import { Cycle } from '../../cycles/entities/cycle.entity.js';
-import { InstantColumn } from '../../database/columns.js';
+import { Cycle } from './cycle.entity.js';
+import { InstantColumn } from '../columns.js';
 
 /** What a change was asked to do, and what it changed in the lineup. */
 export interface CycleChangePayload {

@@ -1,8 +1,8 @@
 import type { Role } from '@catline/contracts';
 import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, type Relation } from 'typeorm';
-import { CreatedAtColumn, UpdatedAtColumn } from '../../database/columns.js';
-import { Catapult } from '../../ships/entities/catapult.entity.js';
-import { Squadron } from '../../squadrons/entities/squadron.entity.js';
+import { CreatedAtColumn, UpdatedAtColumn } from '../columns.js';
+import { Catapult } from './catapult.entity.js';
+import { Squadron } from './squadron.entity.js';
 
 @Entity('users')
 export class User {

@@ -1,7 +1,7 @@
 import type { CycleState, WeatherCase } from '@catline/contracts';
 import { Column, Entity, JoinColumn, ManyToOne, PrimaryGeneratedColumn, Unique, type Relation } from 'typeorm';
-import { CreatedAtColumn, InstantColumn, UpdatedAtColumn } from '../../database/columns.js';
-import { Ship } from '../../ships/entities/ship.entity.js';
+import { CreatedAtColumn, InstantColumn, UpdatedAtColumn } from '../columns.js';
+import { Ship } from './ship.entity.js';
 
 @Entity('cycles')
 @Unique('uq_cycles_ship_number', ['shipId', 'number'])

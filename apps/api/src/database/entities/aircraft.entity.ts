@@ -1,6 +1,6 @@
 import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, type Relation } from 'typeorm';
-import { AircraftType } from '../../aircraft-types/entities/aircraft-type.entity.js';
-import { Squadron } from '../../squadrons/entities/squadron.entity.js';
+import { AircraftType } from './aircraft-type.entity.js';
+import { Squadron } from './squadron.entity.js';
 
 @Entity('aircraft')
 export class Aircraft {

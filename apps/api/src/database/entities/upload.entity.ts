@@ -1,9 +1,9 @@
 import type { ImportProblem, UploadResult } from '@catline/contracts';
 import { Column, Entity, JoinColumn, ManyToOne, PrimaryGeneratedColumn, type Relation } from 'typeorm';
-import { AircraftType } from '../../aircraft-types/entities/aircraft-type.entity.js';
-import { Cycle } from '../../cycles/entities/cycle.entity.js';
-import { InstantColumn } from '../../database/columns.js';
-import { User } from '../../users/entities/user.entity.js';
+import { AircraftType } from './aircraft-type.entity.js';
+import { Cycle } from './cycle.entity.js';
+import { InstantColumn } from '../columns.js';
+import { User } from './user.entity.js';
 
 export const UPLOAD_KINDS = ['air_plan', 'launch_table'] as const;
 export type UploadKind = (typeof UPLOAD_KINDS)[number];

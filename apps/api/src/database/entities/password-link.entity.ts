@@ -1,6 +1,6 @@
 import { Column, Entity, JoinColumn, ManyToOne, PrimaryGeneratedColumn, Unique, type Relation } from 'typeorm';
-import { InstantColumn } from '../../database/columns.js';
-import { User } from '../../users/entities/user.entity.js';
+import { InstantColumn } from '../columns.js';
+import { User } from './user.entity.js';
 
 export const LINK_PURPOSES = ['invitation', 'reset'] as const;
 export type LinkPurpose = (typeof LINK_PURPOSES)[number];

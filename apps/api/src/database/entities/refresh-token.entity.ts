@@ -1,6 +1,6 @@
 import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, type Relation } from 'typeorm';
-import { CreatedAtColumn, InstantColumn } from '../../database/columns.js';
-import { User } from '../../users/entities/user.entity.js';
+import { CreatedAtColumn, InstantColumn } from '../columns.js';
+import { User } from './user.entity.js';
 
 /** One refresh token per sign-in; only its SHA-256 is kept, and each use replaces it. */
 @Entity('refresh_tokens')

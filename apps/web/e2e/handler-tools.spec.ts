@@ -15,7 +15,8 @@ test('the handler swaps in a spare, applies the suggested lineup and marks a cat
   await api.dispose();
   const handler = await openAs(browser, 'handler', `/lineup?cycle=${cycle.id}`);
 
-  await handler.getByRole('button', { name: 'Mark D38 down' }).click();
+  await handler.getByRole('button', { name: 'Actions for D38' }).click();
+  await handler.getByRole('menuitem', { name: 'Mark down…' }).click();
   await handler.getByRole('dialog').getByRole('combobox').selectOption({ label: 'C30 · WKD-41 · CWR' });
   await handler.getByRole('dialog').getByRole('button', { name: 'Mark D38 down' }).click();
   await expect(card(lane(handler, 1), 'C30')).toBeVisible();

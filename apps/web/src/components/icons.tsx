@@ -59,3 +59,10 @@ export const WindIcon = (props: SVGProps<SVGSVGElement>) => (
     <path d="M3 9h11a3 3 0 1 0-3-3M3 15h15a3 3 0 1 1-3 3" />
   </LineIcon>
 );
+
+/** Three dots in a row: more actions for the item beside it. */
+export const MoreIcon = (props: SVGProps<SVGSVGElement>) => (
+  <LineIcon {...props}>
+    <path d="M5 12h.01M12 12h.01M19 12h.01" strokeWidth={3.5} />
+  </LineIcon>
+);

@@ -2,21 +2,24 @@ import { Button, Grid, GridItem, Text } from '@chakra-ui/react';
 import { DndContext, DragOverlay } from '@dnd-kit/core';
 import type { LaneView, LineupSnapshot, MoveSlotRequest, SlotView } from '@catline/contracts';
 import { useLineupDrag } from '../hooks/use-lineup-drag.js';
-import { isDone, isMovable, laneContainer, slotsById } from '../lineup-model.js';
+import { isMovable, laneContainer, slotsById } from '../lineup-model.js';
 import { LaneColumn } from './lane-column.js';
 import { PoolColumn } from './pool-column.js';
-import { SlotCardBody, SortableSlotCard } from './slot-card.js';
+import type { SlotAction } from '../slot-actions.js';
+import { LiftedSlotCard, SortableSlotCard } from './slot-card.js';
+import { SlotMenu } from './slot-menu.js';
 
 interface LineupBoardProps {
   snapshot: LineupSnapshot;
   /** The handler edits; everyone else watches. */
   editable: boolean;
   onMove: (request: MoveSlotRequest) => void;
-  onMarkDown: (slot: SlotView) => void;
+  /** The entries of a card's menu (empty for a person who only watches). */
+  actionsFor: (slot: SlotView) => SlotAction[];
   onCatapultStatus: (lane: LaneView) => void;
 }
 
-export function LineupBoard({ snapshot, editable, onMove, onMarkDown, onCatapultStatus }: LineupBoardProps) {
+export function LineupBoard({ snapshot, editable, onMove, actionsFor, onCatapultStatus }: LineupBoardProps) {
   const drag = useLineupDrag(snapshot, onMove);
   const slots = slotsById(snapshot);
   const held = drag.activeSlotId === null ? undefined : slots.get(drag.activeSlotId);
@@ -31,14 +34,7 @@ export function LineupBoard({ snapshot, editable, onMove, onMarkDown, onCatapult
         key={slot.id}
         slot={slot}
         movable={editable && isMovable(slot)}
-        actions={
-          editable &&
-          !isDone(slot) && (
-            <Button size="2xs" variant="ghost" colorPalette="nogo" onClick={() => onMarkDown(slot)}>
-              Mark {slot.sideNumber} down
-            </Button>
-          )
-        }
+        menu={editable && <SlotMenu slot={slot} actions={actionsFor(slot)} />}
       />
     );
   };
@@ -95,7 +91,7 @@ export function LineupBoard({ snapshot, editable, onMove, onMarkDown, onCatapult
           );
         })}
       </Grid>
-      <DragOverlay>{held ? <SlotCardBody slot={held} lifted movable /> : null}</DragOverlay>
+      <DragOverlay>{held ? <LiftedSlotCard slot={held} /> : null}</DragOverlay>
     </DndContext>
   );
 }

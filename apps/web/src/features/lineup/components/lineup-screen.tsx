@@ -18,6 +18,7 @@ import { useMarkDown } from '../api/mark-down.js';
 import { useMoveSlot } from '../api/move-slot.js';
 import { useSetCatapultStatus } from '../api/set-catapult-status.js';
 import { isDone, lineupWarnings } from '../lineup-model.js';
+import { slotActions } from '../slot-actions.js';
 import { CatapultStatusDialog } from './catapult-status-dialog.js';
 import { LineupBoard } from './lineup-board.js';
 import { LineupWarnings } from './lineup-warnings.js';
@@ -117,7 +118,7 @@ function LineupWorkspace({ snapshot }: { snapshot: LineupSnapshot }) {
         snapshot={snapshot}
         editable={editable}
         onMove={(request) => move.mutate(request, { onError: refused('Your move') })}
-        onMarkDown={(slot) => setDialog({ kind: 'down', slot })}
+        actionsFor={(slot) => slotActions(slot, { markDown: (chosen) => setDialog({ kind: 'down', slot: chosen }) })}
         onCatapultStatus={(lane) => setDialog({ kind: 'catapult', lane })}
       />
       {dialog?.kind === 'down' && (

@@ -9,30 +9,31 @@ import { SLOT_STATUS_LABELS, SlotStatusBadge } from '../../../components/slot-st
 import { formatOptionalClock, formatPounds } from '../../../lib/format.js';
 import { slotItemId } from '../hooks/use-lineup-drag.js';
 
-/** What a slot card shows: who, what, how heavy, when, and whether the figures are go. */
-export function SlotCardBody({
-  slot,
-  lifted = false,
-  movable = false,
-}: {
-  slot: SlotView;
-  lifted?: boolean;
-  movable?: boolean;
-}) {
+/** The card's frame: its edge says launched, no-go or waiting; a lifted card floats above the board. */
+function SlotCardFrame({ slot, lifted, children }: { slot: SlotView; lifted: boolean; children: ReactNode }) {
   const figures = slot.figures;
   return (
-    <Box
+    <Flex
+      align="flex-start"
       bg={lifted ? 'bg.emphasized' : 'bg.panel'}
       borderWidth="1px"
       borderColor={figures && !figures.go && slot.status !== 'launched' ? 'nogo.border' : 'border'}
       borderLeftWidth="4px"
       borderLeftColor={slot.status === 'launched' ? 'go.solid' : figures && !figures.go ? 'nogo.solid' : 'accent.solid'}
       rounded="card"
-      px="2.5"
-      py="2"
       boxShadow={lifted ? 'lg' : undefined}
       opacity={slot.status === 'launched' ? 0.75 : 1}
     >
+      {children}
+    </Flex>
+  );
+}
+
+/** What a slot card shows: who, what, how heavy, when, and whether the figures are go. */
+function SlotCardContent({ slot, movable }: { slot: SlotView; movable: boolean }) {
+  const figures = slot.figures;
+  return (
+    <Box px="2.5" py="1.5" minW="0" flex="1">
       <Flex justify="space-between" align="center" gap="2">
         <HStack gap="1.5" minW="0">
           {movable && (
@@ -40,7 +41,7 @@ export function SlotCardBody({
               <GripIcon />
             </Box>
           )}
-          <Text fontWeight="700" fontSize="lg" textStyle="figure" data-testid="side-number">
+          <Text fontWeight="700" fontSize="2xl" lineHeight="1.1" textStyle="figure" data-testid="side-number">
             {slot.sideNumber}
           </Text>
           <Text fontSize="xs" color="fg.muted" truncate>
@@ -97,15 +98,24 @@ export function SlotCardBody({
   );
 }
 
+/** A card as it floats under the pointer while it is being dragged. */
+export function LiftedSlotCard({ slot }: { slot: SlotView }) {
+  return (
+    <SlotCardFrame slot={slot} lifted>
+      <SlotCardContent slot={slot} movable />
+    </SlotCardFrame>
+  );
+}
+
 interface SortableSlotCardProps {
   slot: SlotView;
   /** Cards a person may not move stay put (wrong role, or the aircraft has gone). */
   movable: boolean;
-  /** Buttons that sit below the draggable area, so their keys never start a drag. */
-  actions?: ReactNode;
+  /** The card's menu: it sits beside the draggable area, so its keys and taps never start a drag. */
+  menu?: ReactNode;
 }
 
-export function SortableSlotCard({ slot, movable, actions }: SortableSlotCardProps) {
+export function SortableSlotCard({ slot, movable, menu }: SortableSlotCardProps) {
   const { attributes, listeners, setNodeRef, setActivatorNodeRef, transform, transition, isDragging } = useSortable({
     id: slotItemId(slot.id),
     disabled: !movable,
@@ -119,24 +129,25 @@ export function SortableSlotCard({ slot, movable, actions }: SortableSlotCardPro
       data-side-number={slot.sideNumber}
       data-status={slot.status}
     >
-      <Box
-        ref={setActivatorNodeRef}
-        {...(movable ? { ...attributes, ...listeners } : {})}
-        aria-label={
-          movable ? `${slot.sideNumber}, ${slot.typeDesignation}, ${SLOT_STATUS_LABELS[slot.status]}` : undefined
-        }
-        cursor={movable ? 'grab' : 'default'}
-        touchAction={movable ? 'manipulation' : undefined}
-        rounded="card"
-        _focusVisible={{ outline: '3px solid', outlineColor: 'accent.focusRing', outlineOffset: '2px' }}
-      >
-        <SlotCardBody slot={slot} movable={movable} />
-      </Box>
-      {actions && (
-        <HStack justify="flex-end" gap="1" mt="1">
-          {actions}
-        </HStack>
-      )}
+      <SlotCardFrame slot={slot} lifted={false}>
+        <Box
+          ref={setActivatorNodeRef}
+          {...(movable ? { ...attributes, ...listeners } : {})}
+          aria-label={
+            movable ? `${slot.sideNumber}, ${slot.typeDesignation}, ${SLOT_STATUS_LABELS[slot.status]}` : undefined
+          }
+          flex="1"
+          minW="0"
+          display="flex"
+          cursor={movable ? 'grab' : 'default'}
+          touchAction={movable ? 'manipulation' : undefined}
+          rounded="card"
+          _focusVisible={{ outline: '3px solid', outlineColor: 'accent.focusRing', outlineOffset: '2px' }}
+        >
+          <SlotCardContent slot={slot} movable={movable} />
+        </Box>
+        {menu}
+      </SlotCardFrame>
     </Box>
   );
 }

@@ -3,6 +3,7 @@ export const DEMO_PASSWORD = 'catline-demo';
 export const DEMO_SIGN_INS = [
   ['admin', 'admin@catline.example'],
   ['air operations', 'airops@catline.example'],
+  ['air boss', 'airboss@catline.example'],
   ['handler', 'handler@catline.example'],
   ['catapult officers', 'cat1@catline.example … cat4@catline.example'],
   ['pilot', 'pilot@catline.example'],

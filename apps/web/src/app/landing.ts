@@ -24,6 +24,8 @@ export const SCREENS_BY_ROLE: Record<Role, Screen[]> = {
   catapult_officer: [screens.catStation, screens.lineup, ...shared],
   pilot: [screens.myLaunch, screens.lineup, ...shared],
   air_operations: [screens.cycles, screens.lineup, screens.fleet, screens.launchData, screens.reports],
+  // Primary flight control runs the launch from the board: prerequisites, deck status, start and stop.
+  air_boss: [screens.lineup, ...shared],
   admin: [screens.people, screens.fleet, screens.launchData, screens.cycles, screens.lineup, screens.reports],
   observer: [screens.lineup, ...shared],
 };

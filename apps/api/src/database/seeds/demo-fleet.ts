@@ -180,6 +180,7 @@ interface DemoPerson {
 export const demoPeople: DemoPerson[] = [
   { email: 'admin@catline.example', name: 'Ada Tollingrave', role: 'admin' },
   { email: 'airops@catline.example', name: 'Priya Quennevar', role: 'air_operations' },
+  { email: 'airboss@catline.example', name: 'Bram Osterwick', role: 'air_boss' },
   { email: 'handler@catline.example', name: 'Tomas Ebberhold', role: 'handler' },
   ...[1, 2, 3, 4].map((n) => ({
     email: `cat${n}@catline.example`,

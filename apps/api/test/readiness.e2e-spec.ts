@@ -140,7 +140,10 @@ describe('readiness steps and launch', () => {
     });
     expect(overridden.status).toBe(200);
     expect(overridden.body.change.summary).toBe('C21 launched from cat 1 on override: Air boss accepts the crosswind');
-    expect((await deck.slot(cycle.id, first.id)).overrideReason).toBe('Air boss accepts the crosswind');
+    const launched = await deck.slot(cycle.id, first.id);
+    expect(launched.overrideReason).toBe('Air boss accepts the crosswind');
+    expect(launched.launchRecord).toMatchObject({ go: false, waiver: 'Air boss accepts the crosswind' });
+    expect(launched.launchRecord!.reasons.map((reason) => reason.code)).toContain('crosswind_over_limit');
   });
 
   it('refuses a launch from a catapult marked down, even with an override', async () => {

@@ -59,6 +59,75 @@ export interface LaunchFigures extends WindOverDeck {
   clearingTurnDeg: number;
 }
 
+/**
+ * `shot`: written by the launch command itself. `rebuilt`: put together afterwards by a migration
+ * from the change log of a launch recorded before the record existed; a figure the log did not keep
+ * is null.
+ */
+export const LAUNCH_RECORD_SOURCES = ['shot', 'rebuilt'] as const;
+export type LaunchRecordSource = (typeof LAUNCH_RECORD_SOURCES)[number];
+
+/** The wind over the deck as it was read when the aircraft was fired. */
+export interface WindReadingUsed {
+  /** When the reading was taken; null when the cycle's conditions held no time of reading. */
+  readAt: string | null;
+  shipCourseDeg: number;
+  shipSpeedKt: number;
+  /** Direction the true wind blew from, degrees true. */
+  trueWindFromDeg: number;
+  trueWindSpeedKt: number;
+  temperatureC: number;
+  pressureHpa: number;
+}
+
+/** Who gave the launch command. */
+export interface LaunchFiredBy {
+  /** Null when only the name was kept (a rebuilt record of a person since removed). */
+  id: number | null;
+  name: string;
+  role: Role | null;
+}
+
+/**
+ * What was used with the shot, frozen at the launch command: reports, replay, exports and shot counts
+ * read these figures and never compute them again from the conditions of today.
+ */
+export interface LaunchRecord {
+  source: LaunchRecordSource;
+  launchedAt: string;
+  catapultId: number;
+  catapultNumber: number;
+  /** The gross weight the pilot and the catapult officer agreed, pounds. */
+  grossWeightLb: number;
+  fuelLb: number;
+  stores: string;
+  /** The setting the ship's approved launch data gives; null when the launch data gives no setting. */
+  launchDataSetting: number | null;
+  /** Catline's estimate from the catapult's energy model, the cross-check of the setting. */
+  crossCheckSetting: number | null;
+  windReading: WindReadingUsed | null;
+  /** Along and across the catapult, knots; null when a rebuilt record had no figures. */
+  headwindKt: number | null;
+  crosswindKt: number | null;
+  crosswindSide: CrosswindSide | null;
+  endSpeedKt: number | null;
+  /** Minimum launch airspeed (density-corrected) plus the required excess, knots. */
+  requiredAirspeedKt: number | null;
+  requiredWindOverDeckKt: number | null;
+  /** Headwind along the catapult minus the wind over deck required (the launch margin), knots. */
+  excessWindKt: number | null;
+  /** The figures' verdict at the shot and why it was no-go, if it was. */
+  go: boolean | null;
+  reasons: NoGoReason[];
+  trimDeg: number | null;
+  afterburnerRequired: boolean | null;
+  /** Degrees, positive to starboard, 0 for none. */
+  clearingTurnDeg: number | null;
+  /** The reason given to launch on a no-go figure (the air boss's waiver or the officer's override). */
+  waiver: string | null;
+  firedBy: LaunchFiredBy | null;
+}
+
 export interface SlotView {
   id: number;
   cycleId: number;
@@ -97,8 +166,10 @@ export interface SlotView {
   statusBy: string | null;
   projectedLaunchAt: string | null;
   missesWindow: boolean;
-  /** Null in the deck pool. */
+  /** Null in the deck pool; for a launched aircraft, the figures its launch record froze. */
   figures: LaunchFigures | null;
+  /** What was used with the shot; null until launched. */
+  launchRecord: LaunchRecord | null;
 }
 
 export interface LaneView extends WindOverDeck {

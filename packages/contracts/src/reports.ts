@@ -1,6 +1,6 @@
 import type { CycleView } from './cycles.js';
 import type { CatapultPosition } from './fleet.js';
-import type { LineupChange, LineupSnapshot, SlotStatus } from './lineup.js';
+import type { LaunchRecord, LineupChange, LineupSnapshot, SlotStatus } from './lineup.js';
 
 /**
  * Which lineup a report's planned times come from: the lineup as it stood when the cycle started
@@ -31,6 +31,8 @@ export interface ReportLaunch {
   status: SlotStatus;
   /** The catapult officer's reason for launching on a no-go figure. */
   overrideReason: string | null;
+  /** The figures used with the shot as frozen at the launch command; null unless launched. */
+  launchRecord: LaunchRecord | null;
 }
 
 /** The time between two launches that followed each other. */

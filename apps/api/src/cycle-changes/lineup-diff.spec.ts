@@ -59,6 +59,7 @@ const slot = (id: number, catapultId: number | null, position: number | null, ve
   projectedLaunchAt: null,
   missesWindow: false,
   figures: null,
+  launchRecord: null,
 });
 
 const lane = (catapultId: number, slotIds: number[]): LaneView => ({

@@ -23,6 +23,7 @@ import { toCycleView } from './cycle.mapper.js';
 import type { Catapult } from '../database/entities/catapult.entity.js';
 import type { Slot } from '../database/entities/slot.entity.js';
 import { launchFiguresView } from './launch-figures.js';
+import { recordedFigures } from './launch-record.js';
 import {
   aircraftProfile,
   cycleDensityRatio,
@@ -161,6 +162,8 @@ export function buildSnapshot(state: LineupState): LineupSnapshot {
   const slots: SlotView[] = state.slots.map((slot) => {
     const type = aircraftProfile(slot.aircraft.type);
     const projectedSlot = projected.get(slot.id);
+    // A launched aircraft shows what was used at the shot, never figures from the conditions of now.
+    const record = slot.launchRecord;
     return {
       id: slot.id,
       cycleId: slot.cycleId,
@@ -183,8 +186,8 @@ export function buildSnapshot(state: LineupState): LineupSnapshot {
       position: slot.position,
       status: slot.status,
       version: slot.version,
-      trimDeg: takeOffTrim(type, pounds(slot.grossWeightLb)),
-      afterburnerRequired: afterburnerRequired(type, pounds(slot.grossWeightLb)),
+      trimDeg: record ? record.trimDeg : takeOffTrim(type, pounds(slot.grossWeightLb)),
+      afterburnerRequired: record?.afterburnerRequired ?? afterburnerRequired(type, pounds(slot.grossWeightLb)),
       departure: conditions.departure,
       pilotWeightAckAt: iso(slot.pilotWeightAckAt),
       catapultWeightAckAt: iso(slot.catapultWeightAckAt),
@@ -195,7 +198,8 @@ export function buildSnapshot(state: LineupState): LineupSnapshot {
       statusBy: slot.statusBy?.name ?? null,
       projectedLaunchAt: iso(projectedSlot?.time),
       missesWindow: projectedSlot?.missesWindow ?? false,
-      figures: figuresIn(conditions, slot),
+      figures: record ? recordedFigures(record) : figuresIn(conditions, slot),
+      launchRecord: record,
     };
   });
   const viewOf = new Map(slots.map((view) => [view.id, view]));

@@ -1,11 +1,13 @@
 import type {
   AdvanceSlotRequest,
+  LaunchRecord,
   LaunchSlotRequest,
   LineupCommandResult,
   SlotStatus,
   SuspendSlotRequest,
   WeightAckRequest,
 } from '@catline/contracts';
+import { afterburnerRequired, pounds, takeOffTrim } from '@catline/launch-math';
 import { Injectable } from '@nestjs/common';
 import type { EntityManager } from 'typeorm';
 import { Aircraft } from '../database/entities/aircraft.entity.js';
@@ -18,7 +20,9 @@ import { CycleChangeService, actorOf } from '../cycle-changes/cycle-change.servi
 import { CycleClosing } from '../cycles/cycle-closing.service.js';
 import type { Slot } from '../database/entities/slot.entity.js';
 import { LineupChangesService } from '../cycle-changes/lineup-changes.service.js';
+import { aircraftProfile } from '../cycle-changes/launch-math.adapter.js';
 import { laneSlots, slotFigures } from '../cycle-changes/lineup-snapshot.builder.js';
+import { recordShot } from '../cycle-changes/launch-record.js';
 import type { LineupState } from '../cycle-changes/lineup-state.js';
 import { LineupException } from '../cycle-changes/lineup.exception.js';
 import { advance, launchRefusal, suspend, type Transition } from './readiness-machine.js';
@@ -171,7 +175,22 @@ export class ReadinessService {
         });
         if (refusal) throw new LineupException(refusal.code, refusal.message);
         const override = figures?.go ? null : (request.overrideReason ?? null);
-        await this.recordLaunch(manager, slot, user, request.idempotencyKey, override);
+        const now = this.clock.now();
+        const profile = aircraftProfile(slot.aircraft.type);
+        const record = figures
+          ? recordShot({
+              cycle: state.cycle,
+              slot,
+              catapult,
+              figures,
+              trimDeg: takeOffTrim(profile, pounds(slot.grossWeightLb)),
+              afterburnerRequired: afterburnerRequired(profile, pounds(slot.grossWeightLb)),
+              waiver: override,
+              firedBy: actorOf(user),
+              at: now,
+            })
+          : null;
+        await this.recordLaunch(manager, slot, user, request.idempotencyKey, override, record, now);
         await manager.increment(Aircraft, { id: slot.aircraftId }, 'catapultShots', 1);
         await manager.increment(Catapult, { id: catapult.id }, 'shotCount', 1);
         return {
@@ -241,12 +260,14 @@ export class ReadinessService {
     user: AuthenticatedUser,
     key: string,
     override: string | null,
+    record: LaunchRecord | null,
+    now: Date,
   ) {
-    const now = this.clock.now();
     try {
       await updateSlot(manager, slot, {
         status: 'launched',
         launchedAt: now,
+        launchRecord: record,
         launchIdempotencyKey: key,
         overrideReason: override,
         statusAt: now,

@@ -1,9 +1,56 @@
-import type { CycleReport } from '@catline/contracts';
+import type { CycleReport, LaunchRecord } from '@catline/contracts';
 import type { CsvCell } from '../common/csv.js';
 import type { CycleChange } from '../database/entities/cycle-change.entity.js';
 import type { LineupState } from '../cycle-changes/lineup-state.js';
 
 // The columns of a cycle's CSV exports; README.md describes them.
+
+/** What was used with the shot, from the slot's launch record (empty unless launched). */
+const LAUNCH_RECORD_COLUMNS = [
+  'record_source',
+  'agreed_weight_lb',
+  'launch_data_setting',
+  'cross_check_setting',
+  'wind_from_deg',
+  'wind_speed_kt',
+  'ship_course_deg',
+  'ship_speed_kt',
+  'wind_read_at',
+  'headwind_kt',
+  'crosswind_kt',
+  'crosswind_side',
+  'end_speed_kt',
+  'excess_wind_kt',
+  'trim_deg',
+  'afterburner',
+  'waiver',
+  'fired_by',
+] as const;
+
+function launchRecordCells(record: LaunchRecord | null): CsvCell[] {
+  if (!record) return LAUNCH_RECORD_COLUMNS.map(() => null);
+  const wind = record.windReading;
+  return [
+    record.source,
+    record.grossWeightLb,
+    record.launchDataSetting,
+    record.crossCheckSetting,
+    wind?.trueWindFromDeg ?? null,
+    wind?.trueWindSpeedKt ?? null,
+    wind?.shipCourseDeg ?? null,
+    wind?.shipSpeedKt ?? null,
+    wind?.readAt ?? null,
+    record.headwindKt,
+    record.crosswindKt,
+    record.crosswindSide,
+    record.endSpeedKt,
+    record.excessWindKt,
+    record.trimDeg,
+    record.afterburnerRequired,
+    record.waiver,
+    record.firedBy?.name ?? null,
+  ];
+}
 
 export const SLOT_COLUMNS = [
   'slot_id',
@@ -32,6 +79,7 @@ export const SLOT_COLUMNS = [
   'override_reason',
   'down_at',
   'replaced_by',
+  ...LAUNCH_RECORD_COLUMNS,
 ] as const;
 
 export const CHANGE_COLUMNS = ['version', 'at', 'kind', 'actor', 'actor_role', 'summary', 'command'] as const;
@@ -72,6 +120,7 @@ export function slotRows(state: LineupState, report: CycleReport): CsvCell[][] {
       slot.overrideReason,
       iso(slot.downAt),
       slot.replacedBySlotId === null ? null : (sides.get(slot.replacedBySlotId) ?? null),
+      ...launchRecordCells(slot.status === 'launched' ? slot.launchRecord : null),
     ];
   });
 }

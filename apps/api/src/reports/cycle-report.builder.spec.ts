@@ -68,6 +68,7 @@ const slot = (fields: SlotFields) =>
     launchedAt: fields.launchedAt ? new Date(fields.launchedAt) : null,
     overrideReason: fields.overrideReason ?? null,
     replacedBySlotId: fields.replacedBySlotId ?? null,
+    launchRecord: null,
   }) as unknown as Slot;
 
 const state: LineupState = {

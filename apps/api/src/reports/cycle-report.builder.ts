@@ -103,6 +103,7 @@ export function buildCycleReport({ state, changes }: CycleRecord): CycleReport {
       inWindow: launchedAt === null ? null : insideWindow(launchedAt, window),
       status: slot.status,
       overrideReason: slot.status === 'launched' ? slot.overrideReason : null,
+      launchRecord: slot.status === 'launched' ? slot.launchRecord : null,
     };
   });
 

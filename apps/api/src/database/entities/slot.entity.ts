@@ -1,4 +1,4 @@
-import type { SlotStatus } from '@catline/contracts';
+import type { LaunchRecord, SlotStatus } from '@catline/contracts';
 import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, Unique, type Relation } from 'typeorm';
 import { Aircraft } from './aircraft.entity.js';
 import { Cycle } from './cycle.entity.js';
@@ -113,6 +113,10 @@ export class Slot {
   /** The client's key of the launch that was recorded; a repeat with it is answered, not applied. */
   @Column({ name: 'launch_idempotency_key', type: 'varchar', length: 64, nullable: true })
   launchIdempotencyKey: string | null;
+
+  /** What was used with the shot, frozen by the launch command; never computed again. */
+  @Column({ name: 'launch_record', type: 'json', nullable: true })
+  launchRecord: LaunchRecord | null;
 
   @Column({ name: 'override_reason', type: 'varchar', length: 200, nullable: true })
   overrideReason: string | null;

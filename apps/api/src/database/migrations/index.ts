@@ -1,5 +1,10 @@
 import { InitialSchema1796162620410 } from './1796162620410-InitialSchema.js';
 import { MailOutboxPasswordLinksUploads1796164550524 } from './1796164550524-MailOutboxPasswordLinksUploads.js';
+import { SlotLaunchRecord1796200292167 } from './1796200292167-SlotLaunchRecord.js';
 
 /** Every migration in the order it runs; add a new one at the end (see DEVELOPERS.md). */
-export const migrations = [InitialSchema1796162620410, MailOutboxPasswordLinksUploads1796164550524];
+export const migrations = [
+  InitialSchema1796162620410,
+  MailOutboxPasswordLinksUploads1796164550524,
+  SlotLaunchRecord1796200292167,
+];

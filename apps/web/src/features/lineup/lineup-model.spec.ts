@@ -65,6 +65,7 @@ function slot(
     projectedLaunchAt: null,
     missesWindow: false,
     figures: null,
+    launchRecord: null,
     ...extra,
   };
 }

@@ -50,6 +50,7 @@ function launch(
     inWindow: launchedAt ? true : null,
     status: launchedAt ? 'launched' : 'scratched',
     overrideReason: null,
+    launchRecord: null,
   };
 }
 

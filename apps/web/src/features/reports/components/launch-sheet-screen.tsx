@@ -102,7 +102,7 @@ function SheetRow({ slot, place }: { slot: SlotView; place: number }) {
     slot.squadronCode,
     slot.pilotName ?? '—',
     slot.launchedAt ? `Off ${formatClock(slot.launchedAt)}` : formatOptionalClock(slot.projectedLaunchAt),
-    formatPounds(slot.grossWeightLb),
+    formatPounds(slot.launchRecord?.grossWeightLb ?? slot.grossWeightLb),
     figures?.catapultSetting ?? 'Out of range',
     figures ? formatKnots(figures.endSpeedKt) : '—',
     formatKnots(figures?.requiredWindOverDeckKt ?? null),

@@ -1,7 +1,7 @@
 import { Badge, Text } from '@chakra-ui/react';
 import type { CycleReport, ReportLaunch } from '@catline/contracts';
 import { SlotStatusBadge } from '../../../components/slot-status-badge.js';
-import { formatOptionalClock } from '../../../lib/format.js';
+import { formatKnots, formatOptionalClock, formatPounds, formatSignedKnots } from '../../../lib/format.js';
 import { formatDelta, timelineLaunches } from '../report-model.js';
 import { ReportTable, type ReportColumn } from './report-table.js';
 
@@ -26,6 +26,16 @@ const columns: ReportColumn<ReportLaunch>[] = [
   { header: 'Against plan', cell: (launch) => formatDelta(launch.deltaS), numeric: true },
   { header: 'Window', cell: (launch) => <WindowVerdict inWindow={launch.inWindow} /> },
   { header: 'Status', cell: (launch) => <SlotStatusBadge status={launch.status} /> },
+  // What was used at the shot, as the launch record froze it; nothing worked out again from today's wind.
+  {
+    header: 'Weight used',
+    cell: (launch) => (launch.launchRecord ? formatPounds(launch.launchRecord.grossWeightLb) : '—'),
+    numeric: true,
+  },
+  { header: 'Headwind', cell: (launch) => formatKnots(launch.launchRecord?.headwindKt ?? null), numeric: true },
+  { header: 'End speed', cell: (launch) => formatKnots(launch.launchRecord?.endSpeedKt ?? null), numeric: true },
+  { header: 'Excess', cell: (launch) => formatSignedKnots(launch.launchRecord?.excessWindKt ?? null), numeric: true },
+  { header: 'Fired by', cell: (launch) => launch.launchRecord?.firedBy?.name ?? '—' },
 ];
 
 /** The timeline's launches as a table, in the chart's order: by catapult, then by launch. */

@@ -1,6 +1,7 @@
 import { Button, Grid, HStack, Stack } from '@chakra-ui/react';
 import { Link as RouterLink } from 'react-router-dom';
 import type { CycleView } from '@catline/contracts';
+import { CautionLine } from '../../../components/caution-line.js';
 import { CyclePicker } from '../../../components/cycle-picker.js';
 import { PageHeader } from '../../../components/page-header.js';
 import { EmptyState, QueryView } from '../../../components/query-states.js';
@@ -46,6 +47,7 @@ function CycleReportPanel({ cycle }: { cycle: CycleView }) {
               <LaunchTable report={data} />
             </ReportSection>
           </Grid>
+          <CautionLine />
           <IntervalsSection report={data} />
           <EventsSection report={data} />
           <SquadronsSection report={data} />

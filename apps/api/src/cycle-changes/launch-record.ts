@@ -1,0 +1,82 @@
+import type { ChangeActor, LaunchFigures, LaunchRecord } from '@catline/contracts';
+import type { Catapult } from '../database/entities/catapult.entity.js';
+import type { Cycle } from '../database/entities/cycle.entity.js';
+import type { Slot } from '../database/entities/slot.entity.js';
+
+/** What the launch command had in hand at the shot. */
+export interface ShotInput {
+  cycle: Cycle;
+  slot: Slot;
+  catapult: Catapult;
+  /** The figures the go/no-go was decided on, under the conditions in force. */
+  figures: LaunchFigures;
+  trimDeg: number | null;
+  afterburnerRequired: boolean;
+  waiver: string | null;
+  firedBy: ChangeActor;
+  at: Date;
+}
+
+/**
+ * The launch record of a shot: the figures the command decided on, copied, so that nothing read
+ * later (a new wind, a changed launch table) can alter what the record says was used.
+ */
+export function recordShot(input: ShotInput): LaunchRecord {
+  const { cycle, slot, catapult, figures } = input;
+  return {
+    source: 'shot',
+    launchedAt: input.at.toISOString(),
+    catapultId: catapult.id,
+    catapultNumber: catapult.number,
+    grossWeightLb: slot.grossWeightLb,
+    fuelLb: slot.fuelLb,
+    stores: slot.stores,
+    // The approved launch data gives no setting yet; the energy model's is the cross-check.
+    launchDataSetting: null,
+    crossCheckSetting: figures.catapultSetting,
+    windReading: {
+      readAt: null,
+      shipCourseDeg: cycle.shipCourseDeg,
+      shipSpeedKt: cycle.shipSpeedKt,
+      trueWindFromDeg: cycle.trueWindFromDeg,
+      trueWindSpeedKt: cycle.trueWindSpeedKt,
+      temperatureC: cycle.temperatureC,
+      pressureHpa: cycle.pressureHpa,
+    },
+    headwindKt: figures.headwindKt,
+    crosswindKt: figures.crosswindKt,
+    crosswindSide: figures.crosswindSide,
+    endSpeedKt: figures.endSpeedKt,
+    requiredAirspeedKt: figures.requiredAirspeedKt,
+    requiredWindOverDeckKt: figures.requiredWindOverDeckKt,
+    excessWindKt: figures.marginKt,
+    go: figures.go,
+    reasons: figures.reasons,
+    trimDeg: input.trimDeg,
+    afterburnerRequired: input.afterburnerRequired,
+    clearingTurnDeg: figures.clearingTurnDeg,
+    waiver: input.waiver,
+    firedBy: { id: input.firedBy.id, name: input.firedBy.name, role: input.firedBy.role },
+  };
+}
+
+/**
+ * A launched slot's figures as its record froze them; null for a rebuilt record whose change log
+ * kept no figures (they are not worked out again from today's conditions).
+ */
+export function recordedFigures(record: LaunchRecord): LaunchFigures | null {
+  if (record.headwindKt === null || record.crosswindKt === null || record.endSpeedKt === null) return null;
+  return {
+    headwindKt: record.headwindKt,
+    crosswindKt: record.crosswindKt,
+    crosswindSide: record.crosswindSide ?? 'none',
+    catapultSetting: record.launchDataSetting ?? record.crossCheckSetting,
+    endSpeedKt: record.endSpeedKt,
+    requiredAirspeedKt: record.requiredAirspeedKt,
+    requiredWindOverDeckKt: record.requiredWindOverDeckKt,
+    marginKt: record.excessWindKt,
+    go: record.go ?? false,
+    reasons: record.reasons,
+    clearingTurnDeg: record.clearingTurnDeg ?? 0,
+  };
+}

@@ -1,0 +1,79 @@
+import type { LaunchRecord, LineupPatch, Role } from '@catline/contracts';
+
+// Launch records for aircraft launched before the record existed, put together from what the change log
+// kept. Used by the SlotLaunchRecord migration; it reads plain rows so a later change of the entities
+// cannot change what the migration did.
+
+/** The launched slot as its row holds it. */
+export interface LaunchedSlotRow {
+  id: number;
+  catapultId: number;
+  catapultNumber: number;
+  launchedAt: Date;
+  grossWeightLb: number;
+  fuelLb: number;
+  stores: string;
+  overrideReason: string | null;
+  /** Who last changed its status (the launch), by name; null when the person is gone. */
+  statusById: number | null;
+  statusByName: string | null;
+}
+
+/** The change that recorded the launch, when the log still holds it. */
+export interface LaunchChangeRow {
+  actorId: number;
+  actorName: string;
+  actorRole: Role;
+  patch: LineupPatch;
+}
+
+/**
+ * The record of a launch from the change that recorded it: its patch carries the slot's view with the
+ * figures worked out at that version (under the conditions then in force) and the cycle's conditions.
+ * Without the change only the slot's own columns are known, and every figure stays null.
+ */
+export function rebuildLaunchRecord(slot: LaunchedSlotRow, change: LaunchChangeRow | null): LaunchRecord {
+  const view = change?.patch.slots?.find((candidate) => candidate.id === slot.id) ?? null;
+  const figures = view?.figures ?? null;
+  const cycle = change?.patch.cycle ?? null;
+  return {
+    source: 'rebuilt',
+    launchedAt: slot.launchedAt.toISOString(),
+    catapultId: slot.catapultId,
+    catapultNumber: slot.catapultNumber,
+    grossWeightLb: slot.grossWeightLb,
+    fuelLb: slot.fuelLb,
+    stores: slot.stores,
+    launchDataSetting: null,
+    crossCheckSetting: figures?.catapultSetting ?? null,
+    windReading: cycle
+      ? {
+          readAt: null,
+          shipCourseDeg: cycle.shipCourseDeg,
+          shipSpeedKt: cycle.shipSpeedKt,
+          trueWindFromDeg: cycle.trueWindFromDeg,
+          trueWindSpeedKt: cycle.trueWindSpeedKt,
+          temperatureC: cycle.temperatureC,
+          pressureHpa: cycle.pressureHpa,
+        }
+      : null,
+    headwindKt: figures?.headwindKt ?? null,
+    crosswindKt: figures?.crosswindKt ?? null,
+    crosswindSide: figures?.crosswindSide ?? null,
+    endSpeedKt: figures?.endSpeedKt ?? null,
+    requiredAirspeedKt: figures?.requiredAirspeedKt ?? null,
+    requiredWindOverDeckKt: figures?.requiredWindOverDeckKt ?? null,
+    excessWindKt: figures?.marginKt ?? null,
+    go: figures?.go ?? null,
+    reasons: figures?.reasons ?? [],
+    trimDeg: view?.trimDeg ?? null,
+    afterburnerRequired: view?.afterburnerRequired ?? null,
+    clearingTurnDeg: figures?.clearingTurnDeg ?? null,
+    waiver: slot.overrideReason,
+    firedBy: change
+      ? { id: change.actorId, name: change.actorName, role: change.actorRole }
+      : slot.statusByName === null
+        ? null
+        : { id: slot.statusById, name: slot.statusByName, role: null },
+  };
+}

@@ -1,5 +1,7 @@
 import type { CycleReport, LaunchRecord, SlotView } from '@catline/contracts';
 import type { INestApplication } from '@nestjs/common';
+import { DataSource } from 'typeorm';
+import { rebuildMissingLaunchRecords } from '../src/database/migrations/1796200292167-SlotLaunchRecord.js';
 import { parse } from 'csv-parse/sync';
 import { AIR_OPS, LineupDriver, OBSERVER, launchKey, pilot } from './support/lineup-fixtures.js';
 import { startTestApp } from './support/test-app.js';
@@ -102,5 +104,30 @@ describe('the launch record', () => {
     const launch = replay.changes.find((change) => change.kind === 'slot_launched')!;
     const view = launch.patch.slots!.find((slot) => slot.id === launched.id)!;
     expect(view.launchRecord).toEqual<LaunchRecord>(launched.launchRecord!);
+  });
+
+  it('rebuilds, for a slot launched before the record existed, the same figures from its launch change', async () => {
+    const { cycle, launched } = await launchedAircraft(pilot(7));
+    // The wind changes after the shot; the rebuilt record must still hold the wind of the shot.
+    const { version } = await deck.snapshot(cycle.id);
+    await deck.ok(AIR_OPS, 'patch', `/api/cycles/${cycle.id}/conditions`, {
+      basisVersion: version,
+      trueWindSpeedKt: 3,
+    });
+    const dataSource = app.get(DataSource);
+    await dataSource.query('UPDATE slots SET launch_record = NULL WHERE id = ?', [launched.id]);
+    const runner = dataSource.createQueryRunner();
+    try {
+      await rebuildMissingLaunchRecords(runner);
+    } finally {
+      await runner.release();
+    }
+    const [row]: { launch_record: string | LaunchRecord }[] = await dataSource.query(
+      'SELECT launch_record FROM slots WHERE id = ?',
+      [launched.id],
+    );
+    // The driver hands JSON columns back parsed.
+    const rebuilt = typeof row.launch_record === 'string' ? JSON.parse(row.launch_record) : row.launch_record;
+    expect(rebuilt).toEqual({ ...launched.launchRecord!, source: 'rebuilt', launchDataSetting: null });
   });
 });

@@ -1,11 +1,12 @@
 import { createHash } from 'node:crypto';
 import { readFileSync } from 'node:fs';
-import type {
-  AirPlanPreview,
-  AircraftTypeView,
-  CycleView,
-  LaunchTablePreview,
-  LineupCommandResult,
+import {
+  LAUNCH_CAUTION,
+  type AirPlanPreview,
+  type AircraftTypeView,
+  type CycleView,
+  type LaunchTablePreview,
+  type LineupCommandResult,
 } from '@catline/contracts';
 import type { INestApplication } from '@nestjs/common';
 import request from 'supertest';
@@ -390,8 +391,9 @@ describe('air plan and launch table import', () => {
     expect(template.status).toBe(200);
     expect(template.headers['content-type']).toBe('text/csv; charset=utf-8');
     expect(template.headers['content-disposition']).toBe('attachment; filename="air-plan-template.csv"');
-    // A byte-order mark first, as in every CSV the API writes, so a spreadsheet opens it as UTF-8.
-    expect(template.text.split('\r\n')[0]).toBe(`\uFEFF${HEADER}`);
+    // A byte-order mark first, as in every CSV the API writes, so a spreadsheet opens it as UTF-8; then the
+    // launch caution as a # line the import skips.
+    expect(template.text.split('\r\n').slice(0, 2)).toEqual([`\uFEFF# ${LAUNCH_CAUTION}`, HEADER]);
     const fresh = await driver.createCycle();
     await expect(
       preview(fresh.id, { content: template.text }).then((response) => response.body.problems),

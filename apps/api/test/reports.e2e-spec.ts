@@ -1,4 +1,5 @@
 import {
+  LAUNCH_CAUTION,
   applyLineupChanges,
   type AircraftView,
   type CycleReplay,
@@ -50,10 +51,11 @@ interface Flown {
   windowEndAt: string;
 }
 
-/** Parses a CSV answer (after checking it is one) into its header and rows. */
+/** Parses a CSV answer into its header and rows, after checking it opens with the launch caution line. */
 function readCsv(response: request.Response): { header: string[]; rows: Record<string, string>[] } {
   const text = response.text;
-  const records = parse(text, { bom: true }) as string[][];
+  expect(text.startsWith(`\uFEFF# ${LAUNCH_CAUTION}\r\n`)).toBe(true);
+  const records = parse(text, { bom: true, comment: '#', comment_no_infix: true }) as string[][];
   const [header, ...lines] = records;
   return { header, rows: lines.map((line) => Object.fromEntries(header.map((name, i) => [name, line[i]]))) };
 }

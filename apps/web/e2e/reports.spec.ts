@@ -1,6 +1,13 @@
 import { readFile } from 'node:fs/promises';
 import { expect, test, type Page } from '@playwright/test';
-import type { CycleReplay, CycleReport, CycleView, LineupSnapshot, ShotCounts } from '@catline/contracts';
+import {
+  LAUNCH_CAUTION,
+  type CycleReplay,
+  type CycleReport,
+  type CycleView,
+  type LineupSnapshot,
+  type ShotCounts,
+} from '@catline/contracts';
 import { apiAs } from './support/demo-api.js';
 import { expectNoSidewaysOverflow, openAs } from './support/screens.js';
 
@@ -78,8 +85,13 @@ test('the report of the flown cycle draws the same launches in its chart as its 
   ]);
   expect(download.suggestedFilename()).toBe(`cycle-${flown.number}-slots.csv`);
   const csv = await readFile((await download.path())!, 'utf8');
-  expect(csv.replace(/^\uFEFF/, '').split('\r\n')[0]).toMatch(/^slot_id,side_number,type,squadron,/);
-  expect(csv.split('\r\n').filter(Boolean)).toHaveLength(1 + flown.slotCount);
+  const [caution, header, ...csvRows] = csv
+    .replace(/^\uFEFF/, '')
+    .split('\r\n')
+    .filter(Boolean);
+  expect(caution).toBe(`# ${LAUNCH_CAUTION}`);
+  expect(header).toMatch(/^slot_id,side_number,type,squadron,/);
+  expect(csvRows).toHaveLength(flown.slotCount);
   await page.context().close();
 
   const phone = await openAs(browser, 'pilot', `/reports?cycle=${flown.id}`, { width: 390, height: 844 });
@@ -214,7 +226,8 @@ test('shot counts over a range of days match the API, export as CSV and refuse a
     page.getByRole('button', { name: 'Export CSV' }).click(),
   ]);
   expect(download.suggestedFilename()).toBe(`shot-counts-${range.from}-to-${range.to}.csv`);
-  const lines = (await readFile((await download.path())!, 'utf8')).split('\r\n').filter(Boolean);
+  const [caution, ...lines] = (await readFile((await download.path())!, 'utf8')).split('\r\n').filter(Boolean);
+  expect(caution).toBe(`\uFEFF# ${LAUNCH_CAUTION}`);
   expect(lines).toHaveLength(1 + counts.airframes.length + counts.catapults.length);
 
   await page.goto(`/reports/shot-counts?from=${range.to}&to=${range.from}`);

@@ -1,4 +1,5 @@
 export * from './auth.js';
+export * from './caution.js';
 export * from './constraints.js';
 export * from './cycle-follow.js';
 export * from './cycles.js';

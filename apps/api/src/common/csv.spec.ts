@@ -1,17 +1,24 @@
-import { guardText, toCsv } from './csv.js';
+import { LAUNCH_CAUTION } from '@catline/contracts';
+import { CAUTION_LINE, guardText, toCsv } from './csv.js';
 
 const BOM = '\uFEFF';
+const OPENING = `${BOM}${CAUTION_LINE}\r\n`;
 
 describe('toCsv', () => {
+  it('opens with the launch caution as one # line that a spreadsheet shows in one cell', () => {
+    expect(CAUTION_LINE).toBe(`# ${LAUNCH_CAUTION}`);
+    expect(LAUNCH_CAUTION).not.toMatch(/[,"\r\n]/);
+  });
+
   it('writes a header and rows with CRLF line ends after a byte-order mark', () => {
     // RFC 4180 §2: records end with CRLF.
-    expect(toCsv(['side', 'weight'], [['C21', 44_000]])).toBe(`${BOM}side,weight\r\nC21,44000\r\n`);
+    expect(toCsv(['side', 'weight'], [['C21', 44_000]])).toBe(`${OPENING}side,weight\r\nC21,44000\r\n`);
   });
 
   it('quotes commas, quotes and line breaks inside a cell', () => {
     // RFC 4180 §2.6 and §2.7: such fields are enclosed in quotes, inner quotes doubled.
     expect(toCsv(['summary'], [['D33 moved to cat 2, place 3'], ['said "go"'], ['two\nlines']])).toBe(
-      `${BOM}summary\r\n"D33 moved to cat 2, place 3"\r\n"said ""go"""\r\n"two\nlines"\r\n`,
+      `${OPENING}summary\r\n"D33 moved to cat 2, place 3"\r\n"said ""go"""\r\n"two\nlines"\r\n`,
     );
   });
 
@@ -24,7 +31,7 @@ describe('toCsv', () => {
           [false, 'Kit Marrowby', 0],
         ],
       ),
-    ).toBe(`${BOM}spare,pilot,delta\r\ntrue,,-2.5\r\nfalse,Kit Marrowby,0\r\n`);
+    ).toBe(`${OPENING}spare,pilot,delta\r\ntrue,,-2.5\r\nfalse,Kit Marrowby,0\r\n`);
   });
 });
 

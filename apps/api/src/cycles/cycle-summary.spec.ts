@@ -1,3 +1,4 @@
+import { LAUNCH_CAUTION } from '@catline/contracts';
 import { composeCycleSummary, type CycleSummaryInput, type SummarySlot } from './cycle-summary.js';
 
 const at = (time: string) => new Date(`2026-05-04T${time}Z`);
@@ -60,7 +61,7 @@ describe('composeCycleSummary', () => {
       'What happened to these aircraft:',
       '  13:58:02Z  C24 down; spare C31 takes cat 3, place 2',
       '',
-      "Sent by Catline when the cycle closed. Catline is a planning and coordination aid: the ship's approved launch data, the catapult officers' checks and the ship's procedures govern every launch.",
+      `Sent by Catline when the cycle closed. ${LAUNCH_CAUTION}`,
       '',
     ]);
   });

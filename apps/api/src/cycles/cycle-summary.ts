@@ -1,4 +1,4 @@
-import type { SlotStatus, WeatherCase } from '@catline/contracts';
+import { LAUNCH_CAUTION, type SlotStatus, type WeatherCase } from '@catline/contracts';
 
 // The summary a squadron receives when a cycle closes: its own aircraft line by line, the cycle's
 // totals, and what happened to its aircraft on the way (down, suspended, launched on override).
@@ -48,9 +48,6 @@ export interface ComposedMail {
   subject: string;
   text: string;
 }
-
-const CAUTION =
-  "Catline is a planning and coordination aid: the ship's approved launch data, the catapult officers' checks and the ship's procedures govern every launch.";
 
 const hhmm = (at: Date) => `${at.toISOString().slice(11, 16)}Z`;
 const hhmmss = (at: Date) => `${at.toISOString().slice(11, 19)}Z`;
@@ -109,7 +106,7 @@ export function composeCycleSummary(input: CycleSummaryInput, squadron: SummaryS
       ...events.map((event) => `  ${hhmmss(event.at)}  ${event.summary}`),
     );
   }
-  lines.push('', `Sent by Catline when the cycle closed. ${CAUTION}`);
+  lines.push('', `Sent by Catline when the cycle closed. ${LAUNCH_CAUTION}`);
   return {
     subject: `Cycle ${input.cycleNumber} closed: ${squadron.name} ${launchedOf(own).length} of ${own.length} launched`,
     text: `${lines.join('\n')}\n`,

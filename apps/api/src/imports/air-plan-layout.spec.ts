@@ -44,7 +44,7 @@ describe('readAirPlan', () => {
   it('reads its own template', () => {
     expect(readAirPlan(AIR_PLAN_TEMPLATE)).toMatchObject({
       problems: [],
-      lines: [{ row: 2, sideNumber: 'C21', grossWeightLb: 45_400 }],
+      lines: [{ row: 3, sideNumber: 'C21', grossWeightLb: 45_400 }],
     });
   });
 

@@ -35,12 +35,18 @@ export function headerWidthProblem<Column extends string>(
   layout: CsvLayout<Column>,
   fileNoun: string,
 ): string | null {
-  const end = text.indexOf('\n');
-  const header = end === -1 ? text : text.slice(0, end);
+  const header = text.split('\n', 50).find((line) => !isCommentLine(line)) ?? '';
   const cells = header.split(',').length;
   if (cells <= layout.columns.length * 2) return null;
   return `The header line has ${cells} columns; the ${fileNoun} layout has ${layout.columns.length}: ${layout.columns.join(', ')}. Nothing of the file was read.`;
 }
+
+/**
+ * A line starting with # is a note, not data: Catline's own templates and exports open with the launch
+ * caution written that way, and a file filled in from them comes back with it.
+ */
+const COMMENT = '#';
+const isCommentLine = (line: string) => line.replace(/^\uFEFF/, '').startsWith(COMMENT);
 
 /** A record as csv-parse gives it with `info` on (its typings do not follow that option). */
 interface ParsedRecord {
@@ -54,6 +60,8 @@ function parseRecords(text: string): { line: number; cells: string[] }[] | Impor
   try {
     const parsed: ParsedRecord[] = parse(text, {
       bom: true,
+      comment: COMMENT,
+      comment_no_infix: true,
       info: true,
       trim: true,
       skip_empty_lines: true,
@@ -73,17 +81,21 @@ function parseRecords(text: string): { line: number; cells: string[] }[] | Impor
   }
 }
 
-function headerProblems<Column extends string>(header: string[], layout: CsvLayout<Column>): ImportProblem[] {
+function headerProblems<Column extends string>(
+  header: string[],
+  line: number,
+  layout: CsvLayout<Column>,
+): ImportProblem[] {
   const known = layout.columns.join(', ');
   const names = header.map((name) => name.toLowerCase());
   const problems: ImportProblem[] = [];
   names.forEach((name, i) => {
     if (!(layout.columns as readonly string[]).includes(name)) {
       const shown = header[i].length > 40 ? `${header[i].slice(0, 40)}…` : header[i];
-      problems.push(fileProblem(`Unknown column "${shown}"; the columns are ${known}.`, 1, header[i]));
+      problems.push(fileProblem(`Unknown column "${shown}"; the columns are ${known}.`, line, header[i]));
     } else if (names.indexOf(name) !== i) {
       problems.push({
-        row: 1,
+        row: line,
         column: name,
         value: header[i],
         reason: 'This column is named twice in the header line.',
@@ -92,7 +104,12 @@ function headerProblems<Column extends string>(header: string[], layout: CsvLayo
   });
   for (const column of layout.columns) {
     if (!names.includes(column)) {
-      problems.push({ row: 1, column, value: null, reason: `The column ${column} is missing from the header line.` });
+      problems.push({
+        row: line,
+        column,
+        value: null,
+        reason: `The column ${column} is missing from the header line.`,
+      });
     }
   }
   return problems;
@@ -117,7 +134,7 @@ export function readCsvTable<Column extends string>(text: string, layout: CsvLay
     };
   }
   const [header, ...data] = records;
-  const problems = headerProblems(header.cells, layout);
+  const problems = headerProblems(header.cells, header.line, layout);
   if (problems.length > 0) return { ok: false, problems };
   if (data.length === 0)
     return { ok: false, problems: [fileProblem(`The file has the header line but no ${layout.rowNoun} under it.`)] };

@@ -1,3 +1,4 @@
+import { CAUTION_LINE } from '../common/csv.js';
 import { LAUNCH_TABLE_TEMPLATE, readLaunchTable } from './launch-table-layout.js';
 
 describe('readLaunchTable', () => {
@@ -10,8 +11,10 @@ describe('readLaunchTable', () => {
       ],
     });
     expect(readLaunchTable(LAUNCH_TABLE_TEMPLATE).problems).toEqual([]);
-    // Written like every CSV the API hands out: byte-order mark, header, CRLF line ends.
-    expect(LAUNCH_TABLE_TEMPLATE).toBe('\uFEFFgross_weight_lb,min_launch_airspeed_kt\r\n34000,124\r\n40000,133\r\n');
+    // Written like every CSV the API hands out: byte-order mark, the caution line, header, CRLF line ends.
+    expect(LAUNCH_TABLE_TEMPLATE).toBe(
+      `\uFEFF${CAUTION_LINE}\r\ngross_weight_lb,min_launch_airspeed_kt\r\n34000,124\r\n40000,133\r\n`,
+    );
   });
 
   it('refuses a weight no heavier than the line before, and bad figures, by line', () => {

@@ -1,8 +1,6 @@
+import { LAUNCH_CAUTION } from '@catline/contracts';
 import { Box, HStack, Text } from '@chakra-ui/react';
 import { CautionIcon } from './icons.js';
-
-export const CAUTION_TEXT =
-  "Planning aid only. Launch settings come from the ship's approved launch data and the catapult officer's own checks; the ship's procedures and the service's regulations govern.";
 
 /** Required on every screen that shows a launch figure. */
 export function CautionLine() {
@@ -24,7 +22,7 @@ export function CautionLine() {
           <CautionIcon />
         </Box>
         <Text fontSize="sm" fontWeight="500">
-          {CAUTION_TEXT}
+          {LAUNCH_CAUTION}
         </Text>
       </HStack>
     </Box>

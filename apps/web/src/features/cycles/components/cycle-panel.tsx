@@ -1,6 +1,7 @@
 import { Badge, Button, Flex, Heading, HStack, Stack, Text } from '@chakra-ui/react';
 import { Link as RouterLink } from 'react-router-dom';
 import type { CycleView } from '@catline/contracts';
+import { CautionLine } from '../../../components/caution-line.js';
 import { NoticeBanner, refusalNotice, useNotice } from '../../../components/refusal-notice.js';
 import { RoleGate } from '../../../components/role-gate.js';
 import { errorMessage } from '../../../lib/api-error.js';
@@ -74,6 +75,8 @@ export function CyclePanel({ cycle }: { cycle: CycleView }) {
           </RoleGate>
         </HStack>
       </Flex>
+      {/* Gross weights are launch figures: the aircraft added below and the air-plan preview show them. */}
+      <CautionLine />
       {notice && <NoticeBanner notice={notice} onDismiss={dismiss} />}
       <Stack gap="2">
         <Text fontWeight="700">Conditions</Text>

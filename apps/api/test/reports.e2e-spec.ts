@@ -19,14 +19,15 @@ import {
   LineupDriver,
   OBSERVER,
   catapultOfficer,
+  goodConditions,
   launchKey,
   pilot,
 } from './support/lineup-fixtures.js';
 import { bearer } from './support/sign-in.js';
 import { startTestApp } from './support/test-app.js';
 
-// One cycle flown through the real commands: a reorder, a down aircraft replaced by a spare, a no-go
-// launch on override, the window closed early so two launches fall outside it, a suspend and resume,
+// One cycle flown through the real commands: a reorder, a down aircraft replaced by a spare, a launch
+// under the air boss's waiver, the window closed early so two launches fall outside it, a suspend and resume,
 // and an aircraft left to be scratched at the close. Every expected figure is worked out here by hand
 // from the times the API recorded.
 
@@ -36,7 +37,8 @@ const iso = (ms: number) => new Date(ms).toISOString();
 const utcDay = (ms: number) => iso(ms).slice(0, 10);
 const seconds = (from: string, to: string) => (Date.parse(to) - Date.parse(from)) / 1000;
 
-const OVERRIDE = "Weight checked against the ship's own table";
+// The launch record's note of the waiver: the gate in words, then the air boss's reason.
+const OVERRIDE = 'excess wind over deck below the recommended value: Ship cannot make more wind';
 const SUSPEND = 'Launch bar not seated';
 
 interface Flown {
@@ -85,7 +87,7 @@ describe('cycle reports, exports and shot counts', () => {
     const ids: Record<string, number> = {
       C25: await add('C25', { pilotEmail: pilot(2) }),
       C26: await add('C26', { pilotEmail: pilot(3) }),
-      D37: await add('D37', { pilotEmail: pilot(4), grossWeightLb: 52_000 }),
+      D37: await add('D37', { pilotEmail: pilot(4), grossWeightLb: 51_000 }),
       D38: await add('D38'),
       C27: await add('C27', { pilotEmail: pilot(5), spare: true }),
       D39: await add('D39'),
@@ -104,17 +106,29 @@ describe('cycle reports, exports and shot counts', () => {
     await deck.start(cycle.id);
     const atStart = await deck.snapshot(cycle.id);
     const launchedAt: Record<string, string> = {};
-    const launch = async (side: string, fields: { overrideReason?: string } = {}) => {
-      const response = await deck.launch(cycle.id, await deck.slot(cycle.id, ids[side]), launchKey(), fields);
+    const launch = async (side: string) => {
+      const response = await deck.launch(cycle.id, await deck.slot(cycle.id, ids[side]), launchKey());
       expect(response.status).toBe(200);
       launchedAt[side] = (await deck.slot(cycle.id, ids[side])).launchedAt!;
     };
 
     await deck.readyToLaunch(cycle.id, ids['C26'], pilot(3));
     await launch('C26');
+    // 30 kt of tailwind with the ship stopped: D37 at 51,000 lb has excess wind over deck above zero but
+    // under the recommended value (readiness.e2e-spec works the figure), which the air boss waives.
+    const conditions = async (values: object) =>
+      deck.ok(AIR_OPS, 'patch', `/api/cycles/${cycle.id}/conditions`, {
+        basisVersion: (await deck.snapshot(cycle.id)).version,
+        ...values,
+      });
+    await conditions({ shipSpeedKt: 0, trueWindFromDeg: 180, trueWindSpeedKt: 30 });
     const heavy = await deck.readyToLaunch(cycle.id, ids['D37'], pilot(4));
     expect(heavy.figures!.go).toBe(false);
-    await launch('D37', { overrideReason: OVERRIDE });
+    expect(
+      (await deck.waive(cycle.id, ids['D37'], 'excess_below_recommended', 'Ship cannot make more wind')).status,
+    ).toBe(200);
+    await launch('D37');
+    await conditions({ shipSpeedKt: goodConditions.shipSpeedKt, trueWindFromDeg: 0, trueWindSpeedKt: 10 });
 
     // The window closes a millisecond after the last launch so far: what follows launches outside it.
     const windowEndAt = iso(Math.max(Date.parse(launchedAt['C26']), Date.parse(launchedAt['D37'])) + 1);
@@ -403,7 +417,7 @@ describe('cycle reports, exports and shot counts', () => {
         spare: 'false',
         suspend_reason: '',
       });
-      expect(row('D37')).toMatchObject({ gross_weight_lb: '52000', override_reason: OVERRIDE, in_window: 'true' });
+      expect(row('D37')).toMatchObject({ gross_weight_lb: '51000', override_reason: OVERRIDE, in_window: 'true' });
       expect(row('D38')).toMatchObject({ status: 'down', catapult: '', replaced_by: 'C27' });
       expect(row('C27')).toMatchObject({ spare: 'true', catapult: '2', position: '2' });
       expect(row('D39')).toMatchObject({ status: 'scratched', launched_at: '', planned_catapult: '2' });

@@ -72,9 +72,12 @@ describe('role matrix', () => {
   });
 
   it.each(
-    matrixRoutes.filter((route) => route.notOwner).map((route) => [key(route.method, route.path), route] as const),
-  )('%s refuses a second person of the permitted role, who does not own the target', async (_name, route) => {
-    const [role] = route.allowed as readonly Role[];
+    matrixRoutes.flatMap((route) =>
+      Object.entries(route.notOwner ?? {}).map(
+        ([role, email]) => [key(route.method, route.path), role as Role, email, route] as const,
+      ),
+    ),
+  )('%s refuses a second %s, who does not own the target', async (_name, role, notOwner, route) => {
     const context: MatrixContext = { baseUrl: url, caller: role, allowed: true, tokenOf: (of) => tokens.get(of)! };
     const example = await route.example!(context);
     const { cycleId, slotId } = example.params as { cycleId: number; slotId: number };
@@ -83,7 +86,7 @@ describe('role matrix', () => {
       .set(bearer(tokens.get('observer')!));
     const response = await request(url)
       .post(fillPath(route.path, example.params))
-      .set(bearer(await signIn(url, route.notOwner!)))
+      .set(bearer(await signIn(url, notOwner)))
       .send(example.body);
     const after = await request(url)
       .get(`/api/cycles/${cycleId}/lineup`)

@@ -15,6 +15,10 @@ export const SLOT_STATUSES = [
 ] as const;
 export type SlotStatus = (typeof SLOT_STATUSES)[number];
 
+/** What changed under an aircraft's agreed figures (launch-math's REVERIFY_CAUSES). */
+export const REVERIFY_CAUSES = ['wind', 'ship_speed', 'weight', 'launch_data'] as const;
+export type ReverifyCause = (typeof REVERIFY_CAUSES)[number];
+
 export type CrosswindSide = 'port' | 'starboard' | 'none';
 
 export const NO_GO_CODES = [
@@ -31,6 +35,45 @@ export type NoGoCode = (typeof NO_GO_CODES)[number];
 export interface NoGoReason {
   code: NoGoCode;
   /** A sentence for the deck crew, with the figures that caused it. */
+  message: string;
+}
+
+/** What must hold before a catapult fires (launch-math's LAUNCH_GATES): hard ones first, then soft. */
+export const LAUNCH_GATE_CODES = [
+  'cycle_not_executing',
+  'catapult_down',
+  'catapult_closed',
+  'deck_not_clear',
+  'weight_not_agreed',
+  'reverify_required',
+  'over_max_gross_weight',
+  'crosswind_over_limit',
+  'outside_launch_table',
+  'end_speed_below_minimum',
+  'end_speed_over_max',
+  'excess_below_recommended',
+  'wind_reading_stale',
+] as const;
+export type LaunchGateCode = (typeof LAUNCH_GATE_CODES)[number];
+
+/** The gates the air boss may waive with a reason; every other gate refuses with no override. */
+export const SOFT_LAUNCH_GATE_CODES = ['excess_below_recommended', 'wind_reading_stale'] as const;
+export type SoftLaunchGateCode = (typeof SOFT_LAUNCH_GATE_CODES)[number];
+
+/** A soft gate the air boss waived for one aircraft, kept on its record. */
+export interface WaiverView {
+  gate: SoftLaunchGateCode;
+  reason: string;
+  by: string;
+  at: string;
+}
+
+/** A launch gate that is closed for an aircraft: hard ones refuse the shot; soft ones until waived. */
+export interface LaunchGateView {
+  gate: LaunchGateCode;
+  soft: boolean;
+  waived: boolean;
+  /** A sentence for the deck crew, with the figures that close it. */
   message: string;
 }
 
@@ -53,6 +96,10 @@ export interface LaunchFigures extends WindOverDeck {
   requiredAirspeedKt: number | null;
   requiredWindOverDeckKt: number | null;
   marginKt: number | null;
+  /** Headwind less (minimum launch airspeed - end speed); null outside the launch table or not recorded. */
+  excessWindOverDeckKt: number | null;
+  /** The type's recommended excess wind over deck, to show beside the excess; null where not recorded. */
+  recommendedExcessKt: number | null;
   go: boolean;
   reasons: NoGoReason[];
   /** Degrees; positive to starboard, 0 for none (night). */
@@ -160,6 +207,8 @@ export interface SlotView {
   catapultWeightAckAt: string | null;
   suspendReason: string | null;
   overrideReason: string | null;
+  /** What changed under the agreed figures since they were verified; null when nothing waits for a read-back. */
+  reverifyCause: ReverifyCause | null;
   launchedAt: string | null;
   /** When and by whom the status last changed. */
   statusAt: string | null;
@@ -170,6 +219,10 @@ export interface SlotView {
   figures: LaunchFigures | null;
   /** What was used with the shot; null until launched. */
   launchRecord: LaunchRecord | null;
+  /** Soft gates the air boss waived for this aircraft; cleared when its figures change. */
+  waivers: WaiverView[];
+  /** The launch gates closed for it on its catapult now, in order; null in the deck pool. */
+  gates: LaunchGateView[] | null;
 }
 
 export interface LaneView extends WindOverDeck {
@@ -209,6 +262,7 @@ export const CHANGE_KINDS = [
   'cycle_closed',
   'air_plan_imported',
   'slot_added',
+  'gate_waived',
 ] as const;
 export type ChangeKind = (typeof CHANGE_KINDS)[number];
 
@@ -296,8 +350,13 @@ export interface LaunchSlotRequest {
   slotVersion: number;
   /** Chosen by the client once per launch intent; a repeat with the same key is answered, not applied. */
   idempotencyKey: string;
-  /** Required when the figures are no-go. */
-  overrideReason?: string;
+}
+
+/** The air boss waives a soft launch gate for one aircraft. */
+export interface WaiveGateRequest {
+  slotVersion: number;
+  gate: SoftLaunchGateCode;
+  reason: string;
 }
 
 export interface WeightAckRequest {

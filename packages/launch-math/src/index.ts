@@ -23,3 +23,5 @@ export {
 export * from './schedule/lineup-suggestion.js';
 export * from './after-shot/weather-case.js';
 export * from './after-shot/after-shot.js';
+export * from './launch/launch-gates.js';
+export * from './readiness/reverify.js';

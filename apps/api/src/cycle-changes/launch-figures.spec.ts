@@ -1,5 +1,18 @@
-import { NO_GO_CODES } from '@catline/contracts';
-import { knots, LAUNCH_NO_GO_CODES, type WindComponents } from '@catline/launch-math';
+import {
+  LAUNCH_GATE_CODES,
+  LINEUP_REFUSAL_CODES,
+  NO_GO_CODES,
+  REVERIFY_CAUSES as REVERIFY_CAUSE_CODES,
+  SOFT_LAUNCH_GATE_CODES,
+} from '@catline/contracts';
+import {
+  knots,
+  LAUNCH_GATES,
+  LAUNCH_NO_GO_CODES,
+  REVERIFY_CAUSES,
+  SOFT_LAUNCH_GATES,
+  type WindComponents,
+} from '@catline/launch-math';
 import type { AircraftType } from '../database/entities/aircraft-type.entity.js';
 import type { Catapult } from '../database/entities/catapult.entity.js';
 import { launchFiguresView, type FiguresInput } from './launch-figures.js';
@@ -100,5 +113,15 @@ describe('launch figures as the deck crew reads them', () => {
 
   it('keeps the contracts no-go codes in step with launch-math', () => {
     expect([...NO_GO_CODES].sort()).toEqual([...LAUNCH_NO_GO_CODES].sort());
+  });
+
+  it('keeps the contracts launch gates, soft gates and re-verify causes in step with launch-math', () => {
+    expect(LAUNCH_GATE_CODES).toEqual(LAUNCH_GATES);
+    expect(SOFT_LAUNCH_GATE_CODES).toEqual(SOFT_LAUNCH_GATES);
+    expect(REVERIFY_CAUSE_CODES).toEqual(REVERIFY_CAUSES);
+  });
+
+  it('gives every launch gate a refusal code of its own', () => {
+    expect(LAUNCH_GATES.filter((gate) => !(LINEUP_REFUSAL_CODES as readonly string[]).includes(gate))).toEqual([]);
   });
 });

@@ -80,6 +80,8 @@ export function launchFiguresView(input: FiguresInput): LaunchFigures {
     requiredAirspeedKt: figures.requiredAirspeed,
     requiredWindOverDeckKt: figures.requiredWindOverDeck,
     marginKt: figures.margin,
+    excessWindOverDeckKt: figures.excessWindOverDeck,
+    recommendedExcessKt: figures.recommendedExcess,
     go: figures.go,
     reasons: figures.reasons.map((reason) => describe(reason, input)),
     clearingTurnDeg: input.clearingTurnDeg,

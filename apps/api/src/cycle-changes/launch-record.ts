@@ -75,6 +75,9 @@ export function recordedFigures(record: LaunchRecord): LaunchFigures | null {
     requiredAirspeedKt: record.requiredAirspeedKt,
     requiredWindOverDeckKt: record.requiredWindOverDeckKt,
     marginKt: record.excessWindKt,
+    // The record keeps the margin over the recommended excess, not these two.
+    excessWindOverDeckKt: null,
+    recommendedExcessKt: null,
     go: record.go ?? false,
     reasons: record.reasons,
     clearingTurnDeg: record.clearingTurnDeg ?? 0,

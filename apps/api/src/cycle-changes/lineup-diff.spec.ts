@@ -53,6 +53,8 @@ const slot = (id: number, catapultId: number | null, position: number | null, ve
   catapultWeightAckAt: null,
   suspendReason: null,
   overrideReason: null,
+  reverifyCause: null,
+  waivers: [],
   launchedAt: null,
   statusAt: null,
   statusBy: null,
@@ -60,6 +62,7 @@ const slot = (id: number, catapultId: number | null, position: number | null, ve
   missesWindow: false,
   figures: null,
   launchRecord: null,
+  gates: null,
 });
 
 const lane = (catapultId: number, slotIds: number[]): LaneView => ({

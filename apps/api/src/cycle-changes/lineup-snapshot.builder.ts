@@ -24,6 +24,7 @@ import type { Catapult } from '../database/entities/catapult.entity.js';
 import type { Slot } from '../database/entities/slot.entity.js';
 import { launchFiguresView } from './launch-figures.js';
 import { recordedFigures } from './launch-record.js';
+import { slotLaunchGates } from './slot-launch-gates.js';
 import {
   aircraftProfile,
   cycleDensityRatio,
@@ -164,6 +165,7 @@ export function buildSnapshot(state: LineupState): LineupSnapshot {
     const projectedSlot = projected.get(slot.id);
     // A launched aircraft shows what was used at the shot, never figures from the conditions of now.
     const record = slot.launchRecord;
+    const figures = record ? recordedFigures(record) : figuresIn(conditions, slot);
     return {
       id: slot.id,
       cycleId: slot.cycleId,
@@ -193,13 +195,16 @@ export function buildSnapshot(state: LineupState): LineupSnapshot {
       catapultWeightAckAt: iso(slot.catapultWeightAckAt),
       suspendReason: slot.suspendReason,
       overrideReason: slot.overrideReason,
+      reverifyCause: slot.reverifyCause,
+      waivers: (slot.waivers ?? []).map(({ gate, reason, byName, at }) => ({ gate, reason, by: byName, at })),
       launchedAt: iso(slot.launchedAt),
       statusAt: iso(slot.statusAt),
       statusBy: slot.statusBy?.name ?? null,
       projectedLaunchAt: iso(projectedSlot?.time),
       missesWindow: projectedSlot?.missesWindow ?? false,
-      figures: record ? recordedFigures(record) : figuresIn(conditions, slot),
+      figures,
       launchRecord: record,
+      gates: figures && !record ? slotLaunchGates(state, slot, figures).views : null,
     };
   });
   const viewOf = new Map(slots.map((view) => [view.id, view]));

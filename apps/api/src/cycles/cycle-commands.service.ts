@@ -3,7 +3,9 @@ import { Injectable } from '@nestjs/common';
 import type { EntityManager } from 'typeorm';
 import { Aircraft } from '../database/entities/aircraft.entity.js';
 import { BasisChecks } from '../cycle-changes/basis-checks.service.js';
+import { Clock } from '../cycle-changes/clock.js';
 import { CycleChangeService } from '../cycle-changes/cycle-change.service.js';
+import { dropBackForReverify } from '../cycle-changes/reverify-drop-back.js';
 import { Slot } from '../database/entities/slot.entity.js';
 import type { LineupState } from '../cycle-changes/lineup-state.js';
 import { LineupException } from '../cycle-changes/lineup.exception.js';
@@ -63,6 +65,7 @@ export class CycleCommandsService {
     private readonly changes: CycleChangeService,
     private readonly basis: BasisChecks,
     private readonly closing: CycleClosing,
+    private readonly clock: Clock,
   ) {}
 
   updateConditions(
@@ -79,11 +82,22 @@ export class CycleCommandsService {
       }
       checkWindow({ ...state.cycle, ...values });
       await manager.update(Cycle, { id: cycleId }, values);
+      const reverify = await this.reverifyFor(manager, state, values, actor);
       return {
-        summary: `Conditions: ${describeConditions(values, state.cycle)}`,
+        summary: `Conditions: ${describeConditions(values, state.cycle)}${reverify}`,
         command: { type: 'conditions', ...request },
       };
     });
+  }
+
+  /** A new wind or ship's speed moves the figures under every agreed weight: those aircraft re-verify. */
+  private async reverifyFor(manager: EntityManager, state: LineupState, values: ConditionValues, actor: ChangeActor) {
+    const changed = (...keys: (keyof ConditionValues)[]) => keys.some((key) => key in values);
+    const now = this.clock.now();
+    if (changed('shipCourseDeg', 'trueWindFromDeg', 'trueWindSpeedKt'))
+      return dropBackForReverify(manager, state, 'wind', actor, now);
+    if (changed('shipSpeedKt')) return dropBackForReverify(manager, state, 'ship_speed', actor, now);
+    return '';
   }
 
   start(cycleId: number, actor: ChangeActor, basisVersion: number): Promise<LineupCommandResult> {

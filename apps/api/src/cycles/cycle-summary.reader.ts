@@ -65,9 +65,9 @@ function summaryInput(
       replacedBy: slot.replacedBySlotId === null ? null : (sideOf.get(slot.replacedBySlotId) ?? null),
     })),
     events: changes.flatMap((change): SummaryEvent[] => {
-      const { slotId, overrideReason } = change.payload.command as { slotId?: unknown; overrideReason?: unknown };
-      // A launch is told only when it went on override; the slot's line already gives its time.
-      if (typeof slotId !== 'number' || (change.kind === 'slot_launched' && !overrideReason)) return [];
+      const { slotId, waived } = change.payload.command as { slotId?: unknown; waived?: unknown };
+      // A launch is told only when it went under a waiver; the slot's line already gives its time.
+      if (typeof slotId !== 'number' || (change.kind === 'slot_launched' && !waived)) return [];
       return [{ at: change.at, slotId, summary: change.summary }];
     }),
   };

@@ -1,7 +1,7 @@
 import { LAUNCH_CAUTION, type SlotStatus, type WeatherCase } from '@catline/contracts';
 
 // The summary a squadron receives when a cycle closes: its own aircraft line by line, the cycle's
-// totals, and what happened to its aircraft on the way (down, suspended, launched on override).
+// totals, and what happened to its aircraft on the way (down, suspended, launched under a waiver).
 
 export interface SummarySlot {
   id: number;

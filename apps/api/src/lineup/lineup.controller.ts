@@ -1,4 +1,10 @@
-import type { LineupChange, LineupCommandResult, LineupSnapshot, SuggestedLineup } from '@catline/contracts';
+import {
+  CATAPULT_ROLES,
+  type LineupChange,
+  type LineupCommandResult,
+  type LineupSnapshot,
+  type SuggestedLineup,
+} from '@catline/contracts';
 import { Body, Controller, Get, HttpCode, HttpStatus, Param, ParseIntPipe, Post, Query } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
@@ -19,6 +25,8 @@ import { LineupCommandsService } from './lineup-commands.service.js';
 import { LineupSnapshotService } from '../cycle-changes/lineup-snapshot.service.js';
 import { ReadinessService } from './readiness.service.js';
 import { SuggestionService } from './suggestion.service.js';
+import { WaiversService } from './waivers.service.js';
+import { WaiveGateDto } from './dto/waive-gate.dto.js';
 
 // Every command answers 200 with the accepted change (a repeated launch answers with the original one).
 @ApiTags('lineup')
@@ -31,6 +39,7 @@ export class LineupController {
     private readonly suggestions: SuggestionService,
     private readonly commands: LineupCommandsService,
     private readonly readiness: ReadinessService,
+    private readonly waivers: WaiversService,
   ) {}
 
   @Get()
@@ -98,7 +107,7 @@ export class LineupController {
     return this.commands.setCatapultStatus(cycleId, actorOf(user), catapultId, body);
   }
 
-  @Roles('catapult_officer')
+  @Roles(...CATAPULT_ROLES)
   @Post('slots/:slotId/advance')
   @HttpCode(HttpStatus.OK)
   advance(
@@ -110,7 +119,7 @@ export class LineupController {
     return this.readiness.advance(cycleId, user, slotId, body);
   }
 
-  @Roles('catapult_officer')
+  @Roles(...CATAPULT_ROLES)
   @Post('slots/:slotId/suspend')
   @HttpCode(HttpStatus.OK)
   suspend(
@@ -122,7 +131,7 @@ export class LineupController {
     return this.readiness.suspend(cycleId, user, slotId, body);
   }
 
-  @Roles('catapult_officer')
+  @Roles(...CATAPULT_ROLES)
   @Post('slots/:slotId/launch')
   @HttpCode(HttpStatus.OK)
   launch(
@@ -132,6 +141,19 @@ export class LineupController {
     @CurrentUser() user: AuthenticatedUser,
   ): Promise<LineupCommandResult> {
     return this.readiness.launch(cycleId, user, slotId, body);
+  }
+
+  /** Soft gates only (the DTO refuses a hard one); recorded on the slot and with the launch. */
+  @Roles('air_boss')
+  @Post('slots/:slotId/waivers')
+  @HttpCode(HttpStatus.OK)
+  waive(
+    @Param('cycleId', ParseIntPipe) cycleId: number,
+    @Param('slotId', ParseIntPipe) slotId: number,
+    @Body() body: WaiveGateDto,
+    @CurrentUser() user: AuthenticatedUser,
+  ): Promise<LineupCommandResult> {
+    return this.waivers.waive(cycleId, user, slotId, body);
   }
 
   @Roles('pilot')

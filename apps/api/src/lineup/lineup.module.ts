@@ -6,10 +6,11 @@ import { LineupController } from './lineup.controller.js';
 import { ReadinessService } from './readiness.service.js';
 import { SuggestionPool } from './suggestion-pool.js';
 import { SuggestionService } from './suggestion.service.js';
+import { WaiversService } from './waivers.service.js';
 
 @Module({
   imports: [CycleChangesModule, CyclesModule],
   controllers: [LineupController],
-  providers: [LineupCommandsService, ReadinessService, SuggestionPool, SuggestionService],
+  providers: [LineupCommandsService, ReadinessService, SuggestionPool, SuggestionService, WaiversService],
 })
 export class LineupModule {}

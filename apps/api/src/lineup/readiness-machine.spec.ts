@@ -3,16 +3,16 @@ import { advance, launchRefusal, suspend, type LaunchFacts } from './readiness-m
 const ready: LaunchFacts = {
   side: 'D33',
   status: 'tensioned',
-  cycleNumber: 3,
-  cycleState: 'executing',
-  catapultNumber: 2,
-  catapultUp: true,
-  catapultClosed: false,
-  pilotWeightAgreed: true,
-  catapultWeightAgreed: true,
-  go: true,
-  noGoReasons: [],
+  gates: [],
+  refusals: [],
 };
+const crosswind = {
+  gate: 'crosswind_over_limit',
+  soft: false,
+  waived: false,
+  message: 'Crosswind 18.0 kt from port is over the WKD-41 limit of 15.0 kt.',
+} as const;
+const staleWind = { gate: 'wind_reading_stale', soft: true, waived: true, message: 'Stale.' } as const;
 
 describe('readiness steps', () => {
   it.each([
@@ -58,7 +58,7 @@ describe('readiness steps', () => {
 });
 
 describe('launchRefusal', () => {
-  it('lets a tensioned, agreed, go aircraft launch', () => {
+  it('lets a tensioned aircraft with every gate open launch', () => {
     expect(launchRefusal(ready)).toBeNull();
   });
 
@@ -66,35 +66,20 @@ describe('launchRefusal', () => {
     expect(launchRefusal({ ...ready, status: 'weight_agreed' })?.code).toBe('wrong_step');
   });
 
-  it('refuses without both weight agreements', () => {
-    expect(launchRefusal({ ...ready, pilotWeightAgreed: false })?.code).toBe('weight_not_agreed');
-    expect(launchRefusal({ ...ready, catapultWeightAgreed: false })?.message).toBe(
-      "D33 cannot launch without the catapult officer's gross weight agreement.",
-    );
-  });
-
-  it('refuses outside an executing cycle', () => {
-    expect(launchRefusal({ ...ready, cycleState: 'planning' })?.code).toBe('cycle_not_executing');
-  });
-
-  it('refuses from a catapult that is down or closed, even with an override', () => {
-    expect(launchRefusal({ ...ready, catapultUp: false, overrideReason: 'needed' })?.code).toBe('catapult_unavailable');
-    expect(launchRefusal({ ...ready, catapultClosed: true, overrideReason: 'needed' })?.code).toBe(
-      'catapult_unavailable',
-    );
-  });
-
-  it('refuses a no-go figure unless an override reason is given', () => {
-    const noGo = {
-      ...ready,
-      go: false,
-      noGoReasons: ['Crosswind 18.0 kt from port is over the WKD-41 limit of 15.0 kt.'],
-    };
-    expect(launchRefusal(noGo)).toEqual({
-      code: 'no_go',
-      message:
-        'D33 is no-go: Crosswind 18.0 kt from port is over the WKD-41 limit of 15.0 kt. Launch only with an override reason.',
+  it('refuses on a closed hard gate with its code and sentence, with no way around it', () => {
+    expect(launchRefusal({ ...ready, gates: [crosswind], refusals: ['crosswind_over_limit'] })).toEqual({
+      code: 'crosswind_over_limit',
+      message: 'Crosswind 18.0 kt from port is over the WKD-41 limit of 15.0 kt.',
     });
-    expect(launchRefusal({ ...noGo, overrideReason: 'Ship cannot turn into the wind; air boss approved' })).toBeNull();
+  });
+
+  it('names the first refusing gate and words only the gates that refuse', () => {
+    const refusal = launchRefusal({
+      ...ready,
+      status: 'on_catapult',
+      gates: [crosswind, staleWind],
+      refusals: ['crosswind_over_limit'],
+    });
+    expect(refusal).toEqual({ code: 'crosswind_over_limit', message: crosswind.message });
   });
 });

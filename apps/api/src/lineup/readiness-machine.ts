@@ -1,4 +1,4 @@
-import type { CycleState, LineupRefusalCode, ReadinessStep, SlotStatus } from '@catline/contracts';
+import type { LaunchGateCode, LaunchGateView, LineupRefusalCode, ReadinessStep, SlotStatus } from '@catline/contracts';
 
 // The readiness steps of the aircraft on a catapult, as a pure state machine: the services only
 // gather the facts and write what it allows.
@@ -49,51 +49,22 @@ export function suspend(side: string, status: SlotStatus): Transition {
 export interface LaunchFacts {
   side: string;
   status: SlotStatus;
-  cycleNumber: number;
-  cycleState: CycleState;
-  catapultNumber: number;
-  catapultUp: boolean;
-  /** A waist catapult while the landing area is in use. */
-  catapultClosed: boolean;
-  pilotWeightAgreed: boolean;
-  catapultWeightAgreed: boolean;
-  go: boolean;
-  noGoReasons: readonly string[];
-  overrideReason?: string;
+  /** The slot's launch gates (slotLaunchGates), with a sentence per gate. */
+  gates: readonly LaunchGateView[];
+  refusals: readonly LaunchGateCode[];
 }
 
-/** Why a launch may not happen now, or null when it may. A no-go figure can be overridden; the rest cannot. */
+/**
+ * Why a launch may not happen now, or null when it may: every launch gate open or waived, then the
+ * aircraft at the last readiness step. The first gate refusing names the code and the message gives
+ * every one. Nothing overrides a hard gate.
+ */
 export function launchRefusal(facts: LaunchFacts): Refusal | null {
-  if (facts.cycleState !== 'executing') {
-    return {
-      code: 'cycle_not_executing',
-      message: `Cycle ${facts.cycleNumber} is ${facts.cycleState}, not executing; nothing launches.`,
-    };
+  const [first] = facts.refusals;
+  if (first) {
+    const messages = facts.gates.filter((gate) => facts.refusals.includes(gate.gate)).map((gate) => gate.message);
+    return { code: first, message: messages.join(' ') };
   }
-  if (!facts.catapultUp || facts.catapultClosed) {
-    return {
-      code: 'catapult_unavailable',
-      message: facts.catapultUp
-        ? `Cat ${facts.catapultNumber} is closed while the landing area is in use.`
-        : `Cat ${facts.catapultNumber} is down.`,
-    };
-  }
-  if (facts.status !== 'tensioned') {
-    const transition = wrongStep(facts.side, facts.status, 'launched');
-    return transition.ok ? null : transition.refusal;
-  }
-  if (!facts.pilotWeightAgreed || !facts.catapultWeightAgreed) {
-    const missing = !facts.pilotWeightAgreed ? "the pilot's" : "the catapult officer's";
-    return {
-      code: 'weight_not_agreed',
-      message: `${facts.side} cannot launch without ${missing} gross weight agreement.`,
-    };
-  }
-  if (!facts.go && !facts.overrideReason) {
-    return {
-      code: 'no_go',
-      message: `${facts.side} is no-go: ${facts.noGoReasons.join(' ')} Launch only with an override reason.`,
-    };
-  }
-  return null;
+  const transition = facts.status === 'tensioned' ? null : wrongStep(facts.side, facts.status, 'launched');
+  return transition && !transition.ok ? transition.refusal : null;
 }

@@ -23,6 +23,7 @@ import { LineupChangesService } from '../cycle-changes/lineup-changes.service.js
 import { aircraftProfile } from '../cycle-changes/launch-math.adapter.js';
 import { laneSlots, slotFigures } from '../cycle-changes/lineup-snapshot.builder.js';
 import { recordShot } from '../cycle-changes/launch-record.js';
+import { slotLaunchGates, waiverNote } from '../cycle-changes/slot-launch-gates.js';
 import type { LineupState } from '../cycle-changes/lineup-state.js';
 import { LineupException } from '../cycle-changes/lineup.exception.js';
 import { advance, launchRefusal, suspend, type Transition } from './readiness-machine.js';
@@ -85,7 +86,8 @@ export class ReadinessService {
       if (status === 'taxiing') values.taxiingAt = now;
       if (status === 'on_catapult')
         Object.assign(values, { onCatapultAt: now, suspendReason: null, catapultWeightAckAt: null });
-      if (status === 'tensioned') values.tensionedAt = now;
+      // Tension is taken on the setting read back for the figures as they are now: any re-verify is done.
+      if (status === 'tensioned') Object.assign(values, { tensionedAt: now, reverifyCause: null });
       if (status === 'weight_agreed') {
         if (!this.pilotAgreed(slot)) {
           throw new LineupException(
@@ -159,22 +161,15 @@ export class ReadinessService {
         }
         await this.basis.slotAsSeen(manager, state, slot, request.slotVersion);
         const figures = slotFigures(state, slot);
+        const gates = figures ? slotLaunchGates(state, slot, figures) : null;
         const refusal = launchRefusal({
           side,
           status: slot.status,
-          cycleNumber: state.cycle.number,
-          cycleState: state.cycle.state,
-          catapultNumber: catapult.number,
-          catapultUp: catapult.status === 'up',
-          catapultClosed: (figures?.reasons ?? []).some((reason) => reason.code === 'catapult_closed'),
-          pilotWeightAgreed: this.pilotAgreed(slot),
-          catapultWeightAgreed: slot.catapultWeightAckAt !== null,
-          go: figures?.go ?? false,
-          noGoReasons: (figures?.reasons ?? []).map((reason) => reason.message),
-          overrideReason: request.overrideReason,
+          gates: gates?.views ?? [],
+          refusals: gates?.verdict.refusals ?? ['outside_launch_table'],
         });
         if (refusal) throw new LineupException(refusal.code, refusal.message);
-        const override = figures?.go ? null : (request.overrideReason ?? null);
+        const waived = waiverNote(slot, gates?.verdict.waivedGates ?? []);
         const now = this.clock.now();
         const profile = aircraftProfile(slot.aircraft.type);
         const record = figures
@@ -185,17 +180,17 @@ export class ReadinessService {
               figures,
               trimDeg: takeOffTrim(profile, pounds(slot.grossWeightLb)),
               afterburnerRequired: afterburnerRequired(profile, pounds(slot.grossWeightLb)),
-              waiver: override,
+              waiver: waived,
               firedBy: actorOf(user),
               at: now,
             })
           : null;
-        await this.recordLaunch(manager, slot, user, request.idempotencyKey, override, record, now);
+        await this.recordLaunch(manager, slot, user, request.idempotencyKey, waived, record, now);
         await manager.increment(Aircraft, { id: slot.aircraftId }, 'catapultShots', 1);
         await manager.increment(Catapult, { id: catapult.id }, 'shotCount', 1);
         return {
-          summary: `${side} launched from cat ${catapult.number}${override ? ` on override: ${override}` : ''}`,
-          command: { type: 'launch', slotId, ...request },
+          summary: `${side} launched from cat ${catapult.number}${waived ? ` under waiver: ${waived}` : ''}`,
+          command: { type: 'launch', slotId, ...request, ...(waived ? { waived } : {}) },
         };
       },
       { kind: 'cycle_closed', step: (manager, state) => this.closing.closeWhenAllLaunched(manager, state) },
@@ -259,7 +254,7 @@ export class ReadinessService {
     slot: Slot,
     user: AuthenticatedUser,
     key: string,
-    override: string | null,
+    waived: string | null,
     record: LaunchRecord | null,
     now: Date,
   ) {
@@ -269,7 +264,7 @@ export class ReadinessService {
         launchedAt: now,
         launchRecord: record,
         launchIdempotencyKey: key,
-        overrideReason: override,
+        overrideReason: waived,
         statusAt: now,
         statusBy: user,
       });

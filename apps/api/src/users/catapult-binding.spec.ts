@@ -1,17 +1,18 @@
-import { ROLES } from '@catline/contracts';
+import { CATAPULT_ROLES, ROLES, isCatapultRole } from '@catline/contracts';
 import { catapultBindingProblem } from './catapult-binding.js';
 
 describe('catapultBindingProblem', () => {
-  it('accepts a catapult officer bound to a catapult', () => {
-    expect(catapultBindingProblem('catapult_officer', 3)).toBeNull();
+  it.each(CATAPULT_ROLES)('accepts a %s bound to a catapult', (role) => {
+    expect(catapultBindingProblem(role, 3)).toBeNull();
   });
 
-  it('refuses a catapult officer without a catapult', () => {
-    expect(catapultBindingProblem('catapult_officer', null)).toMatch(/must be given the catapult/);
+  it('refuses a catapult officer or deck edge operator without a catapult', () => {
+    expect(catapultBindingProblem('catapult_officer', null)).toMatch(/catapult officer must be given the catapult/);
+    expect(catapultBindingProblem('deck_edge_operator', null)).toMatch(/deck edge operator must be given the catapult/);
   });
 
-  it.each(ROLES.filter((role) => role !== 'catapult_officer'))('refuses binding a %s to a catapult', (role) => {
-    expect(catapultBindingProblem(role, 2)).toMatch(/Only a catapult officer/);
+  it.each(ROLES.filter((role) => !isCatapultRole(role)))('refuses binding a %s to a catapult', (role) => {
+    expect(catapultBindingProblem(role, 2)).toMatch(/Only a catapult officer or a deck edge operator/);
     expect(catapultBindingProblem(role, null)).toBeNull();
   });
 });

@@ -1,4 +1,4 @@
-import type { UserView } from '@catline/contracts';
+import { isCatapultRole, type UserView } from '@catline/contracts';
 import { Injectable, Logger } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import type { DataSource, EntityManager } from 'typeorm';
@@ -79,9 +79,9 @@ export class UsersService {
         );
       }
       const role = body.role ?? user.role;
-      // Leaving the catapult officer role releases the catapult unless the request says otherwise.
+      // Leaving a catapult role releases the catapult unless the request says otherwise.
       const catapultId =
-        body.catapultId !== undefined ? body.catapultId : role === 'catapult_officer' ? user.catapultId : null;
+        body.catapultId !== undefined ? body.catapultId : isCatapultRole(role) ? user.catapultId : null;
       const squadronId = body.squadronId !== undefined ? body.squadronId : user.squadronId;
       await this.checkBinding(manager, role, catapultId, squadronId);
 

@@ -1,4 +1,4 @@
-import { ROLES } from '@catline/contracts';
+import { CATAPULT_ROLES, ROLES } from '@catline/contracts';
 import { pilot } from '../support/lineup-fixtures.js';
 import { lineupDriver } from './lineup-driver.js';
 import type { MatrixContext, MatrixRoute } from './route-table.js';
@@ -7,6 +7,8 @@ import type { MatrixContext, MatrixRoute } from './route-table.js';
 // catapult officer is cat1@, the pilot pilot@); refused callers aim at the demo day cycle.
 const DEMO_CYCLE = 2;
 const refused = { params: { cycleId: DEMO_CYCLE, slotId: 1, catapultId: 1 }, body: {} };
+/** The same roles on cat 2, for commands on a slot of cat 1. */
+const OTHER_CATAPULT = { catapult_officer: 'cat2@catline.example', deck_edge_operator: 'deo2@catline.example' };
 
 type Stage = 'pool' | 'lane' | 'executing' | 'taxiing' | 'tensioned';
 
@@ -90,8 +92,8 @@ export const lineupRoutes: MatrixRoute[] = [
   {
     method: 'POST',
     path: '/api/cycles/{cycleId}/lineup/slots/{slotId}/advance',
-    allowed: ['catapult_officer'],
-    notOwner: 'cat2@catline.example',
+    allowed: CATAPULT_ROLES,
+    notOwner: OTHER_CATAPULT,
     example: async (context) => {
       if (!context.allowed) return refused;
       const { cycleId, slot } = await freshSlot(context, 'executing');
@@ -101,8 +103,8 @@ export const lineupRoutes: MatrixRoute[] = [
   {
     method: 'POST',
     path: '/api/cycles/{cycleId}/lineup/slots/{slotId}/suspend',
-    allowed: ['catapult_officer'],
-    notOwner: 'cat2@catline.example',
+    allowed: CATAPULT_ROLES,
+    notOwner: OTHER_CATAPULT,
     example: async (context) => {
       if (!context.allowed) return refused;
       const { cycleId, slot } = await freshSlot(context, 'taxiing');
@@ -112,8 +114,8 @@ export const lineupRoutes: MatrixRoute[] = [
   {
     method: 'POST',
     path: '/api/cycles/{cycleId}/lineup/slots/{slotId}/launch',
-    allowed: ['catapult_officer'],
-    notOwner: 'cat2@catline.example',
+    allowed: CATAPULT_ROLES,
+    notOwner: OTHER_CATAPULT,
     example: async (context) => {
       if (!context.allowed) return refused;
       const { cycleId, slot } = await freshSlot(context, 'tensioned');
@@ -125,9 +127,25 @@ export const lineupRoutes: MatrixRoute[] = [
   },
   {
     method: 'POST',
+    path: '/api/cycles/{cycleId}/lineup/slots/{slotId}/waivers',
+    allowed: ['air_boss'],
+    // The fresh aircraft's gates are all hard or open: the permitted call is refused past the role check
+    // (409 nothing_to_waive), which changes nothing.
+    refusals: [409],
+    example: async (context) => {
+      if (!context.allowed) return refused;
+      const { cycleId, slot } = await freshSlot(context, 'executing');
+      return {
+        params: { cycleId, slotId: slot.id },
+        body: { slotVersion: slot.version, gate: 'excess_below_recommended', reason: 'Matrix waiver' },
+      };
+    },
+  },
+  {
+    method: 'POST',
     path: '/api/cycles/{cycleId}/lineup/slots/{slotId}/weight-ack',
     allowed: ['pilot'],
-    notOwner: 'pilot2@catline.example',
+    notOwner: { pilot: 'pilot2@catline.example' },
     example: async (context) => {
       if (!context.allowed) return refused;
       const { cycleId, slot } = await freshSlot(context, 'pool');

@@ -35,9 +35,10 @@ export interface MatrixRoute {
    */
   refusals?: readonly number[];
   /**
-   * For a command on one catapult's lane or one pilot's slot: the e-mail of a second demo person of the
-   * permitted role who does not own the example's target (cat2@ for a slot on cat 1, pilot2@ for
-   * pilot@'s slot). Sent the permitted example, they must be refused with 403 and the slot left as it was.
+   * For a command on one catapult's lane or one pilot's slot: per permitted role, the e-mail of a second
+   * demo person of that role who does not own the example's target (cat2@ or deo2@ for a slot on cat 1,
+   * pilot2@ for pilot@'s slot). Sent the permitted example, they must be refused with 403 and the slot
+   * left as it was.
    */
-  notOwner?: string;
+  notOwner?: Partial<Record<Role, string>>;
 }

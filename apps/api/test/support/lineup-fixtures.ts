@@ -16,6 +16,8 @@ export const ADMIN = 'admin@catline.example';
 export const AIR_OPS = 'airops@catline.example';
 export const HANDLER = 'handler@catline.example';
 export const OBSERVER = 'observer@catline.example';
+export const AIR_BOSS = 'airboss@catline.example';
+export const deckEdgeOperator = (catapultNumber: number) => `deo${catapultNumber}@catline.example`;
 export const catapultOfficer = (catapultNumber: number) => `cat${catapultNumber}@catline.example`;
 export const pilot = (n: number) => (n === 1 ? 'pilot@catline.example' : `pilot${n}@catline.example`);
 
@@ -214,17 +216,22 @@ export class LineupDriver {
     return this.slot(cycleId, slotId);
   }
 
-  async launch(
-    cycleId: number,
-    slot: SlotView,
-    idempotencyKey: string,
-    fields: { overrideReason?: string } = {},
-  ): Promise<request.Response> {
+  /** Launch as the catapult officer of the slot's catapult, or as `by`. */
+  async launch(cycleId: number, slot: SlotView, idempotencyKey: string, by?: string): Promise<request.Response> {
     const number = (await this.demoShip()).catapults.find((catapult) => catapult.id === slot.catapultId)!.number;
-    return this.call(catapultOfficer(number), 'post', `/api/cycles/${cycleId}/lineup/slots/${slot.id}/launch`, {
+    return this.call(by ?? catapultOfficer(number), 'post', `/api/cycles/${cycleId}/lineup/slots/${slot.id}/launch`, {
       slotVersion: slot.version,
       idempotencyKey,
-      ...fields,
+    });
+  }
+
+  /** The air boss waives a soft launch gate of a slot. */
+  async waive(cycleId: number, slotId: number, gate: string, reason: string): Promise<request.Response> {
+    const slot = await this.slot(cycleId, slotId);
+    return this.call(AIR_BOSS, 'post', `/api/cycles/${cycleId}/lineup/slots/${slotId}/waivers`, {
+      slotVersion: slot.version,
+      gate,
+      reason,
     });
   }
 }

@@ -1,3 +1,4 @@
+import { CATAPULT_ROLES } from '@catline/contracts';
 import { createBrowserRouter, Navigate, RouterProvider } from 'react-router-dom';
 import { LoadingState } from '../components/query-states.js';
 import { useSessionUser } from '../lib/session-store.js';
@@ -43,7 +44,7 @@ const router = createBrowserRouter([
                 }),
               },
               {
-                element: <RoleRoute roles={['catapult_officer']} screen="Cat station" />,
+                element: <RoleRoute roles={CATAPULT_ROLES} screen="Cat station" />,
                 children: [
                   {
                     path: 'cat-station',

@@ -22,6 +22,7 @@ const shared = [screens.cycles, screens.fleet, screens.launchData, screens.repor
 export const SCREENS_BY_ROLE: Record<Role, Screen[]> = {
   handler: [screens.lineup, ...shared],
   catapult_officer: [screens.catStation, screens.lineup, ...shared],
+  deck_edge_operator: [screens.catStation, screens.lineup, ...shared],
   pilot: [screens.myLaunch, screens.lineup, ...shared],
   air_operations: [screens.cycles, screens.lineup, screens.fleet, screens.launchData, screens.reports],
   // Primary flight control runs the launch from the board: prerequisites, deck status, start and stop.

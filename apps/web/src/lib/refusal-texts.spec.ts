@@ -13,7 +13,7 @@ const FAMILIES: Record<RefusalFamily, { changedFirst: RefusalCode[]; titles: Par
     titles: {
       stale_basis: 'Moving 104 refused: the lineup changed first',
       weight_not_agreed: 'Moving 104 refused: gross weight not agreed',
-      no_go: 'Moving 104 refused: the launch figures are no-go',
+      over_max_gross_weight: 'Moving 104 refused: over the type’s maximum catapult weight',
       cycle_not_executing: 'Moving 104 refused: the cycle is not executing',
       not_current_aircraft: 'Moving 104 refused: not the aircraft on the catapult',
     },

@@ -1,10 +1,20 @@
-import type { LaunchRecord, SlotStatus } from '@catline/contracts';
+import type { LaunchRecord, ReverifyCause, SlotStatus, SoftLaunchGateCode } from '@catline/contracts';
 import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, Unique, type Relation } from 'typeorm';
 import { Aircraft } from './aircraft.entity.js';
 import { Cycle } from './cycle.entity.js';
 import { InstantColumn } from '../columns.js';
 import { Catapult } from './catapult.entity.js';
 import { User } from './user.entity.js';
+
+/** A soft launch gate the air boss waived for this aircraft, with who and when. */
+export interface StoredWaiver {
+  gate: SoftLaunchGateCode;
+  reason: string;
+  byId: number;
+  byName: string;
+  /** ISO instant. */
+  at: string;
+}
 
 /** One aircraft's place in a cycle: in the deck pool (no catapult) or in a catapult's lane. */
 @Entity('slots')
@@ -107,6 +117,14 @@ export class Slot {
   @Column({ name: 'replaced_by_slot_id', type: 'int', nullable: true })
   replacedBySlotId: number | null;
 
+  /** What changed under the agreed figures since they were verified; cleared when the setting is read back again. */
+  @Column({ name: 'reverify_cause', type: 'varchar', length: 12, nullable: true })
+  reverifyCause: ReverifyCause | null;
+
+  /** Waivers of soft launch gates; null for none. Cleared when the figures change under them. */
+  @Column({ type: 'json', nullable: true })
+  waivers: StoredWaiver[] | null;
+
   @InstantColumn({ name: 'launched_at', nullable: true })
   launchedAt: Date | null;
 
@@ -118,6 +136,7 @@ export class Slot {
   @Column({ name: 'launch_record', type: 'json', nullable: true })
   launchRecord: LaunchRecord | null;
 
+  /** Set at the shot when it went under waivers: which gates, and why (the full waivers stay in `waivers`). */
   @Column({ name: 'override_reason', type: 'varchar', length: 200, nullable: true })
   overrideReason: string | null;
 

@@ -76,7 +76,7 @@ export class DemoDeck {
     const basis = new BasisChecks(log);
     const closing = new CycleClosing(new MailOutbox());
     this.cycles = new CyclesService(dataSource);
-    this.cycleCommands = new CycleCommandsService(changes, basis, closing);
+    this.cycleCommands = new CycleCommandsService(changes, basis, closing, this.clock);
     this.lineup = new LineupCommandsService(changes, basis, this.clock);
     this.readiness = new ReadinessService(changes, basis, log, closing, this.clock);
     this.snapshots = new LineupSnapshotService(dataSource, loader);

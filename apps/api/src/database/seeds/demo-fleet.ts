@@ -188,6 +188,12 @@ export const demoPeople: DemoPerson[] = [
     role: 'catapult_officer' as const,
     catapultNumber: n,
   })),
+  ...[1, 2].map((n) => ({
+    email: `deo${n}@catline.example`,
+    name: ['Rune Halsworthy', 'Ama Quillbrook'][n - 1],
+    role: 'deck_edge_operator' as const,
+    catapultNumber: n,
+  })),
   { email: 'pilot@catline.example', name: 'Kit Marrowby', role: 'pilot', squadron: 'CWR' },
   ...[
     'Jo Fettleworth',

@@ -1,7 +1,7 @@
 import type { LaunchSlotRequest } from '@catline/contracts';
 import { ApiProperty } from '@nestjs/swagger';
 import { IsString, Matches } from 'class-validator';
-import { ReasonField, VersionField } from './fields.js';
+import { VersionField } from './fields.js';
 
 export class LaunchSlotDto implements LaunchSlotRequest {
   @VersionField('The slot version the launch is based on.')
@@ -13,7 +13,4 @@ export class LaunchSlotDto implements LaunchSlotRequest {
   @IsString()
   @Matches(/^[A-Za-z0-9_-]{8,64}$/, { message: 'idempotencyKey must be 8 to 64 letters, digits, - or _' })
   idempotencyKey: string;
-
-  @ReasonField('overrideReason', { optional: true })
-  overrideReason?: string;
 }

@@ -1,10 +1,4 @@
-import {
-  READINESS_STEPS,
-  type LaneView,
-  type LineupSnapshot,
-  type ReadinessStep,
-  type SlotView,
-} from '@catline/contracts';
+import { READINESS_STEPS, type LineupSnapshot, type ReadinessStep, type SlotView } from '@catline/contracts';
 
 const finished = new Set(['launched', 'down', 'scratched']);
 
@@ -33,14 +27,12 @@ export function stepIndex(slot: SlotView): number {
 
 export const canSuspend = (slot: SlotView) => stepIndex(slot) >= 0;
 
-/** Everything that still stands between this aircraft and the shot, in the deck crew's words. */
-export function launchBlockers(slot: SlotView, lane: LaneView, snapshot: LineupSnapshot): string[] {
-  const blockers: string[] = [];
-  if (snapshot.cycle.state !== 'executing') blockers.push('The cycle has not started launching.');
-  if (lane.status === 'down') blockers.push(`Cat ${lane.number} is down.`);
-  if (lane.closed) blockers.push(`Cat ${lane.number} is closed while the landing area is in use.`);
-  if (!slot.pilotWeightAckAt) blockers.push('The pilot has not acknowledged the gross weight.');
-  if (!slot.catapultWeightAckAt) blockers.push('You have not agreed the gross weight.');
+/**
+ * Everything that still stands between this aircraft and the shot, in the deck crew's words: the
+ * server's own launch gates (so the station never offers a shot the server would refuse), then the step.
+ */
+export function launchBlockers(slot: SlotView): string[] {
+  const blockers = (slot.gates ?? []).filter((gate) => !gate.waived).map((gate) => gate.message);
   if (slot.status !== 'tensioned') blockers.push('The aircraft is not tensioned.');
   return blockers;
 }

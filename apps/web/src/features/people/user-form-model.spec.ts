@@ -20,7 +20,7 @@ describe('adding a person', () => {
       userSchema
         .safeParse({ ...person, role: 'catapult_officer', squadronId: '2' })
         .error?.issues.map((issue) => [issue.path.join('.'), issue.message]),
-    ).toEqual([['catapultId', 'A catapult officer runs one catapult: pick it.']]);
+    ).toEqual([['catapultId', 'A catapult officer works one catapult: pick it.']]);
     expect(userSchema.parse({ ...person, role: 'catapult_officer', catapultId: '3', squadronId: '2' })).toMatchObject({
       catapultId: 3,
       squadronId: undefined,
@@ -28,6 +28,15 @@ describe('adding a person', () => {
     expect(userSchema.parse({ ...person, role: 'pilot', catapultId: '3', squadronId: '2' })).toMatchObject({
       catapultId: undefined,
       squadronId: 2,
+    });
+  });
+
+  it('binds a deck edge operator to a catapult too', () => {
+    expect(
+      userSchema.safeParse({ ...person, role: 'deck_edge_operator' }).error?.issues.map((issue) => issue.message),
+    ).toEqual(['A deck edge operator works one catapult: pick it.']);
+    expect(userSchema.parse({ ...person, role: 'deck_edge_operator', catapultId: '2' })).toMatchObject({
+      catapultId: 2,
     });
   });
 

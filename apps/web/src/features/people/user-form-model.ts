@@ -3,6 +3,8 @@ import {
   NAME_MAX_LENGTH,
   PASSWORD_MAX_LENGTH,
   PASSWORD_MIN_LENGTH,
+  isCatapultRole,
+  ROLE_LABELS,
   ROLES,
 } from '@catline/contracts';
 import * as z from 'zod/mini';
@@ -28,11 +30,11 @@ export const userSchema = z.pipe(
     })
     .check(
       z.superRefine(({ role, catapultId }, context) => {
-        if (role === 'catapult_officer' && !catapultId)
+        if (isCatapultRole(role) && !catapultId)
           context.addIssue({
             code: 'custom',
             path: ['catapultId'],
-            message: 'A catapult officer runs one catapult: pick it.',
+            message: `A ${ROLE_LABELS[role].toLowerCase()} works one catapult: pick it.`,
           });
       }),
     ),
@@ -41,7 +43,7 @@ export const userSchema = z.pipe(
     email,
     role,
     password: password === '' ? undefined : password,
-    catapultId: role === 'catapult_officer' ? Number(catapultId) : undefined,
+    catapultId: isCatapultRole(role) ? Number(catapultId) : undefined,
     squadronId: role === 'pilot' && squadronId ? Number(squadronId) : undefined,
   })),
 );

@@ -28,6 +28,7 @@ export const CHANGE_KIND_LABELS: Record<ChangeKind, string> = {
   cycle_closed: 'Cycle closed',
   air_plan_imported: 'Air plan imported',
   slot_added: 'Aircraft added',
+  gate_waived: 'Waiver',
 };
 
 /** Slots in no lane and not in the deck pool: down or scratched aircraft. */

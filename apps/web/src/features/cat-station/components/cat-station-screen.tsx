@@ -105,14 +105,12 @@ function Station({ snapshot, catapultId }: { snapshot: LineupSnapshot; catapultI
             <LaunchPanel
               key={current.id}
               slot={current}
-              lane={lane}
-              snapshot={snapshot}
               pending={launch.isPending}
-              onLaunch={(overrideReason) => {
+              onLaunch={() => {
                 // A second tap while the first is on its way does nothing; a retry reuses the same key.
                 if (launch.isPending) return;
                 launch.mutate(
-                  { slotId: current.id, slotVersion: current.version, idempotencyKey: launchKey(), overrideReason },
+                  { slotId: current.id, slotVersion: current.version, idempotencyKey: launchKey() },
                   { onError: refused('Launch') },
                 );
               }}

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { Badge, Button, HStack, Stack, Text } from '@chakra-ui/react';
-import { ROLE_LABELS, type Role, type UserView } from '@catline/contracts';
+import { isCatapultRole, ROLE_LABELS, type Role, type UserView } from '@catline/contracts';
 import { ActionDialog } from '../../../components/action-dialog.js';
 import { type Column, DataTable } from '../../../components/data-table.js';
 import { PageHeader } from '../../../components/page-header.js';
@@ -71,7 +71,7 @@ export function PeopleScreen() {
       key: 'assignment',
       header: 'Catapult / squadron',
       cell: (user) =>
-        user.role === 'catapult_officer' ? (
+        isCatapultRole(user.role) ? (
           <SelectInput
             minW="7rem"
             ariaLabel={`Catapult of ${user.name}`}
@@ -87,8 +87,7 @@ export function PeopleScreen() {
         ) : (
           '—'
         ),
-      sortValue: (user) =>
-        user.role === 'catapult_officer' ? catapultName(user.catapultId) : squadronCode(user.squadronId),
+      sortValue: (user) => (isCatapultRole(user.role) ? catapultName(user.catapultId) : squadronCode(user.squadronId)),
     },
     {
       key: 'active',

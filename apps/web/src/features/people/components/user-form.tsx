@@ -1,6 +1,13 @@
 import { useState } from 'react';
 import { Alert, Button, Input, SimpleGrid, Stack } from '@chakra-ui/react';
-import { ROLE_LABELS, ROLES, type CatapultView, type SquadronView, type UserView } from '@catline/contracts';
+import {
+  isCatapultRole,
+  ROLE_LABELS,
+  ROLES,
+  type CatapultView,
+  type SquadronView,
+  type UserView,
+} from '@catline/contracts';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm, useWatch } from 'react-hook-form';
 import { SelectControl } from '../../../components/form-controls.js';
@@ -72,7 +79,7 @@ export function UserForm({ catapults, squadrons }: { catapults: CatapultView[]; 
           <FormField label="Role" required>
             <SelectControl control={control} name="role" choices={roleChoices} />
           </FormField>
-          {role === 'catapult_officer' && (
+          {isCatapultRole(role) && (
             <FormField label="Catapult" error={errors.catapultId?.message} required>
               <SelectControl
                 control={control}

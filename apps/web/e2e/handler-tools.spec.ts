@@ -33,7 +33,8 @@ test('the handler swaps in a spare, applies the suggested lineup and marks a cat
   const catapult = await handler
     .locator('[data-testid="lane"]', { has: card(handler, 'G43') })
     .getAttribute('data-catapult-number');
-  await handler.getByRole('button', { name: `Mark cat ${catapult} down` }).click();
+  await handler.getByRole('button', { name: `Actions for cat ${catapult}` }).click();
+  await handler.getByRole('menuitem', { name: `Mark cat ${catapult} down…` }).click();
   await handler
     .getByRole('dialog')
     .getByRole('button', { name: `Cat ${catapult} is down` })

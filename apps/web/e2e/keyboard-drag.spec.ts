@@ -6,12 +6,12 @@ test('the handler moves an aircraft from the deck pool to cat 1 with the keyboar
   const { cycle } = await planCycle({ aircraft: [{ side: 'C23', grossWeightLb: 42_000 }] });
   const handler = await openAs(browser, 'handler', `/lineup?cycle=${cycle.id}`);
 
-  const grip = card(pool(handler), 'C23').getByRole('button', { name: /^C23,/ });
+  const grip = card(pool(handler), 'C23').getByRole('button', { name: /^C23 / });
   await grip.focus();
   const announcement = handler.locator('[id^="DndLiveRegion"]');
   await handler.keyboard.press('Enter');
   await expect(announcement).toHaveText('Picked up C23 from the deck pool.');
-  await handler.keyboard.press('ArrowRight');
+  await handler.keyboard.press('ArrowDown');
   await expect(announcement).toHaveText('C23 is over catapult 1, place 1.');
   await handler.keyboard.press('Enter');
   await expect(announcement).toHaveText('C23 put down in catapult 1, place 1.');

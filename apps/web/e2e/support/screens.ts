@@ -2,8 +2,14 @@ import { expect, type Browser, type Locator, type Page } from '@playwright/test'
 import { DEMO_PASSWORD, demoEmail } from './demo-api.js';
 
 /** Opens a screen as a person: the app sends them to sign in and back to the screen they asked for. */
-export async function openAs(browser: Browser, who: string, path: string, viewport = { width: 1366, height: 768 }) {
-  const context = await browser.newContext({ viewport });
+export async function openAs(
+  browser: Browser,
+  who: string,
+  path: string,
+  viewport = { width: 1366, height: 768 },
+  hasTouch = false,
+) {
+  const context = await browser.newContext({ viewport, hasTouch });
   const page = await context.newPage();
   await page.goto(path);
   await signIn(page, who);

@@ -14,7 +14,7 @@ export function ThemeSwitch() {
   return (
     <HStack gap="1.5" data-testid="theme-switch" data-mode={mode}>
       <span aria-hidden="true">{mode === 'night' ? <MoonIcon /> : <SunIcon />}</span>
-      <NativeSelect.Root size="xs" width="auto">
+      <NativeSelect.Root size="md" width="auto">
         <NativeSelect.Field
           aria-label="Theme"
           title="Auto dims the screen while the cycle on it flies at night"

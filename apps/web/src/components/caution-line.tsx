@@ -2,8 +2,11 @@ import { LAUNCH_CAUTION } from '@catline/contracts';
 import { Box, HStack, Text } from '@chakra-ui/react';
 import { CautionIcon } from './icons.js';
 
-/** Required on every screen that shows a launch figure. */
-export function CautionLine() {
+/**
+ * Required on every screen that shows a launch figure. `compact` fits it into a screen's header band
+ * (the lineup board's), still in full and still in the caution colours.
+ */
+export function CautionLine({ compact = false }: { compact?: boolean }) {
   return (
     <Box
       role="note"
@@ -14,14 +17,14 @@ export function CautionLine() {
       borderWidth="1px"
       borderColor="caution.border"
       rounded="card"
-      px="3"
-      py="2"
+      px={compact ? '2' : '3'}
+      py={compact ? '1' : '2'}
     >
-      <HStack gap="2" alignItems="flex-start">
-        <Box as="span" fontSize="lg" flexShrink={0} mt="0.5">
+      <HStack gap="2" alignItems={compact ? 'center' : 'flex-start'}>
+        <Box as="span" fontSize={compact ? 'md' : 'lg'} flexShrink={0} mt={compact ? undefined : '0.5'}>
           <CautionIcon />
         </Box>
-        <Text fontSize="sm" fontWeight="500">
+        <Text fontSize={compact ? 'xs' : 'sm'} fontWeight="500" lineHeight={compact ? '1.35' : undefined}>
           {LAUNCH_CAUTION}
         </Text>
       </HStack>

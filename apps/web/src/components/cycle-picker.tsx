@@ -14,7 +14,7 @@ export function CyclePicker({
   onChange: (cycleId: number) => void;
 }) {
   return (
-    <NativeSelect.Root size="sm" width={{ base: 'full', sm: '16rem' }}>
+    <NativeSelect.Root size="lg" width={{ base: 'full', sm: '16rem' }}>
       <NativeSelect.Field
         aria-label="Cycle on screen"
         value={value ?? ''}

@@ -1,6 +1,15 @@
 import type { CycleView, LaneView, LineupSnapshot, SlotView } from '@catline/contracts';
 import { describe, expect, it } from 'vitest';
-import { containersOf, isMovable, lineupWarnings, moveSlotLocally, placeName } from './lineup-model.js';
+import {
+  containersOf,
+  isMovable,
+  laneCounts,
+  laneMarks,
+  lineupWarnings,
+  moveSlotLocally,
+  placeName,
+  slotsById,
+} from './lineup-model.js';
 
 const cycle: CycleView = {
   id: 7,
@@ -170,6 +179,51 @@ describe('the board model', () => {
   it('lets only planned aircraft move', () => {
     expect(isMovable(slot(1, 'C21', null))).toBe(true);
     expect(isMovable(slot(1, 'C21', null, { status: 'taxiing' }))).toBe(false);
+  });
+});
+
+describe('the marks and counts of a lane', () => {
+  // Cat 1 holds C21, C22, C23, C24 in launch order.
+  function lane1(...statuses: SlotView['status'][]) {
+    const snapshot = board();
+    const sides = ['C21', 'C22', 'C23', 'C24'];
+    snapshot.slots = statuses.map((status, index) =>
+      slot(index + 1, sides[index], { catapultId: 11, position: index }, { status }),
+    );
+    snapshot.lanes = [
+      lane(
+        11,
+        1,
+        snapshot.slots.map((each) => each.id),
+      ),
+    ];
+    return { lane: snapshot.lanes[0], slots: slotsById(snapshot) };
+  }
+  const marked = ({ lane: one, slots }: ReturnType<typeof lane1>) =>
+    Object.fromEntries([...laneMarks(one, slots)].map(([id, mark]) => [slots.get(id)!.sideNumber, mark]));
+
+  it('marks the first aircraft still to launch as next while nobody is on the catapult', () => {
+    expect(marked(lane1('planned', 'planned', 'planned'))).toEqual({ C21: 'next' });
+    expect(marked(lane1('taxiing', 'planned'))).toEqual({ C21: 'next' });
+  });
+
+  it('marks the aircraft hooked up, or held on the catapult by a suspend, and the one behind it', () => {
+    expect(marked(lane1('launched', 'weight_agreed', 'planned', 'planned'))).toEqual({
+      C22: 'on-catapult',
+      C23: 'next',
+    });
+    expect(marked(lane1('suspended', 'planned'))).toEqual({ C21: 'on-catapult', C22: 'next' });
+    expect(marked(lane1('launched', 'launched', 'tensioned'))).toEqual({ C23: 'on-catapult' });
+  });
+
+  it('marks nothing in a lane whose aircraft have all gone', () => {
+    expect(marked(lane1('launched', 'launched'))).toEqual({});
+  });
+
+  it('counts aircraft off, still to go and late', () => {
+    const one = lane1('launched', 'on_catapult', 'planned', 'planned');
+    one.slots.set(4, { ...one.slots.get(4)!, missesWindow: true });
+    expect(laneCounts(one.lane, one.slots)).toEqual({ launched: 1, toGo: 3, late: 1 });
   });
 });
 

@@ -1,4 +1,4 @@
-import type { LaneView, LineupSnapshot, MoveSlotRequest, SlotView } from '@catline/contracts';
+import type { LaneView, LineupSnapshot, MoveSlotRequest, SlotStatus, SlotView } from '@catline/contracts';
 
 /** Where a slot sits on the board: the deck pool or a catapult's lane. */
 export type ContainerId = 'pool' | `lane:${number}`;
@@ -49,6 +49,40 @@ export function moveSlotLocally(snapshot: LineupSnapshot, move: MoveSlotRequest)
   return { ...snapshot, lanes, pool, slots: moved };
 }
 
+/** Statuses of an aircraft standing on its catapult: hooked up and stepping through readiness, or held there. */
+const ON_CATAPULT: readonly SlotStatus[] = ['on_catapult', 'weight_agreed', 'tensioned', 'suspended'];
+
+/** The two aircraft of a lane the deck watches: the one on the catapult and the one to go after it. */
+export type SlotMark = 'on-catapult' | 'next';
+
+/** A lane's aircraft still to launch, in launch order. */
+export const laneWaiting = (lane: LaneView, slots: Map<number, SlotView>) =>
+  lane.slotIds.map((id) => slots.get(id)).filter((slot): slot is SlotView => !!slot && !isDone(slot));
+
+/**
+ * Marks the aircraft on a lane's catapult and the next one. With nobody on the catapult yet, the first
+ * aircraft still to launch is the next one.
+ */
+export function laneMarks(lane: LaneView, slots: Map<number, SlotView>): Map<number, SlotMark> {
+  const [first, second] = laneWaiting(lane, slots);
+  const marks = new Map<number, SlotMark>();
+  if (!first) return marks;
+  if (!ON_CATAPULT.includes(first.status)) return marks.set(first.id, 'next');
+  marks.set(first.id, 'on-catapult');
+  return second ? marks.set(second.id, 'next') : marks;
+}
+
+/** What a lane's head counts: aircraft already off, still to go, and still to go but past the window. */
+export function laneCounts(lane: LaneView, slots: Map<number, SlotView>) {
+  const inLane = lane.slotIds.map((id) => slots.get(id)).filter((slot): slot is SlotView => !!slot);
+  const waiting = laneWaiting(lane, slots);
+  return {
+    launched: inLane.filter((slot) => slot.status === 'launched').length,
+    toGo: waiting.length,
+    late: waiting.filter((slot) => slot.missesWindow).length,
+  };
+}
+
 export function placeName(snapshot: LineupSnapshot, container: ContainerId, index?: number): string {
   const catapultId = catapultOf(container);
   if (catapultId === null) return 'the deck pool';
@@ -69,8 +103,7 @@ export interface LineupWarning {
 export function lineupWarnings(snapshot: LineupSnapshot, formatTime: (iso: string) => string): LineupWarning[] {
   const slots = slotsById(snapshot);
   const warnings: LineupWarning[] = [];
-  const waiting = (lane: LaneView) =>
-    lane.slotIds.map((id) => slots.get(id)).filter((slot): slot is SlotView => !!slot && !isDone(slot));
+  const waiting = (lane: LaneView) => laneWaiting(lane, slots);
 
   for (const lane of snapshot.lanes) {
     const count = waiting(lane).length;

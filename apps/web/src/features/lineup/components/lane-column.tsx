@@ -12,7 +12,9 @@ import { laneContainer } from '../lineup-model.js';
 interface LaneColumnProps {
   lane: LaneView;
   slotIds: number[];
-  headerAction?: ReactNode;
+  counts: { launched: number; toGo: number; late: number };
+  /** The catapult's own menu (mark it down or up), for the handler. */
+  menu?: ReactNode;
   children: ReactNode;
 }
 
@@ -23,7 +25,7 @@ function windWords(lane: LaneView) {
 }
 
 /** One catapult's queue: its state and wind over deck on top, its slots in launch order below. */
-export function LaneColumn({ lane, slotIds, headerAction, children }: LaneColumnProps) {
+export function LaneColumn({ lane, slotIds, counts, menu, children }: LaneColumnProps) {
   const { setNodeRef, isOver } = useDroppable({ id: laneContainer(lane.catapultId) });
   const unavailable = lane.status === 'down' || lane.closed;
   return (
@@ -32,25 +34,25 @@ export function LaneColumn({ lane, slotIds, headerAction, children }: LaneColumn
       aria-label={`Catapult ${lane.number} lane`}
       data-testid="lane"
       data-catapult-number={lane.number}
-      gap="2"
+      gap="1"
       minW="0"
       bg="bg.subtle"
       borderWidth="1px"
       borderColor={unavailable ? 'nogo.border' : 'border'}
       rounded="card"
-      p="2"
+      p="1"
     >
-      <Stack gap="1" px="1">
-        <Flex justify="space-between" align="center" gap="2" wrap="wrap">
-          <HStack gap="2">
-            <Text as="h2" fontWeight="700" fontSize="lg">
+      <Stack gap="0" ps="1">
+        <Flex justify="space-between" align="center" gap="1.5" minH="tap">
+          <HStack gap="1.5" minW="0">
+            <Text as="h2" fontWeight="700" fontSize="lg" whiteSpace="nowrap">
               Cat {lane.number}
             </Text>
-            <Text fontSize="sm" color="fg.muted" textTransform="capitalize">
+            <Text fontSize="sm" color="fg.muted" textTransform="capitalize" truncate>
               {lane.position}
             </Text>
           </HStack>
-          <HStack gap="1.5">
+          <HStack gap="1" flexShrink={0}>
             {lane.status === 'down' ? (
               <Badge colorPalette="nogo" variant="solid" data-testid="catapult-status">
                 DOWN
@@ -65,13 +67,29 @@ export function LaneColumn({ lane, slotIds, headerAction, children }: LaneColumn
               </Badge>
             )}
             <GoBadge go={lane.go} />
+            {menu}
           </HStack>
         </Flex>
-        <HStack gap="1.5" fontSize="xs" color="fg.muted" title="Wind over deck on this catapult">
+        <HStack gap="1.5" fontSize="xs" color="fg.muted" title="Wind over deck on this catapult" minW="0">
           <WindIcon />
-          <Text>{windWords(lane)}</Text>
+          <Text truncate>{windWords(lane)}</Text>
         </HStack>
-        {headerAction}
+        <Text fontSize="xs" color="fg.muted" data-testid="lane-counts">
+          <Text as="span" textStyle="figure" color="fg">
+            {counts.launched}
+          </Text>{' '}
+          off ·{' '}
+          <Text as="span" textStyle="figure" color="fg">
+            {counts.toGo}
+          </Text>{' '}
+          to go
+          {counts.late > 0 && (
+            <Text as="span" color="nogo.fg" fontWeight="700">
+              {' '}
+              · {counts.late} late
+            </Text>
+          )}
+        </Text>
       </Stack>
       <SortableContext
         id={laneContainer(lane.catapultId)}
@@ -80,9 +98,9 @@ export function LaneColumn({ lane, slotIds, headerAction, children }: LaneColumn
       >
         <Stack
           ref={setNodeRef}
-          gap="2"
+          gap="1.5"
           minH="6rem"
-          p="1"
+          p="0.5"
           rounded="card"
           outline={isOver ? '2px dashed' : undefined}
           outlineColor="accent.focusRing"

@@ -1,13 +1,14 @@
-import { Button, Grid, GridItem, Text } from '@chakra-ui/react';
+import type { ReactNode } from 'react';
+import { Box, Grid, Text } from '@chakra-ui/react';
 import { DndContext, DragOverlay } from '@dnd-kit/core';
 import type { LaneView, LineupSnapshot, MoveSlotRequest, SlotView } from '@catline/contracts';
 import { useLineupDrag } from '../hooks/use-lineup-drag.js';
-import { isMovable, laneContainer, slotsById } from '../lineup-model.js';
-import { LaneColumn } from './lane-column.js';
-import { PoolColumn } from './pool-column.js';
+import { isMovable, laneContainer, laneCounts, laneMarks, slotsById, type SlotMark } from '../lineup-model.js';
 import type { SlotAction } from '../slot-actions.js';
+import { ActionMenu, SlotMenu } from './action-menu.js';
+import { DeckPoolStrip } from './deck-pool-strip.js';
+import { LaneColumn } from './lane-column.js';
 import { LiftedSlotCard, SortableSlotCard } from './slot-card.js';
-import { SlotMenu } from './slot-menu.js';
 
 interface LineupBoardProps {
   snapshot: LineupSnapshot;
@@ -17,14 +18,27 @@ interface LineupBoardProps {
   /** The entries of a card's menu (empty for a person who only watches). */
   actionsFor: (slot: SlotView) => SlotAction[];
   onCatapultStatus: (lane: LaneView) => void;
+  /** Under the deck pool's title: the handler's suggestion, or a word for those who only watch. */
+  poolAction: ReactNode;
+  /** Shown beside the deck pool, in the same band above the lanes. */
+  aside: ReactNode;
 }
 
-export function LineupBoard({ snapshot, editable, onMove, actionsFor, onCatapultStatus }: LineupBoardProps) {
+export function LineupBoard({
+  snapshot,
+  editable,
+  onMove,
+  actionsFor,
+  onCatapultStatus,
+  poolAction,
+  aside,
+}: LineupBoardProps) {
   const drag = useLineupDrag(snapshot, onMove);
   const slots = slotsById(snapshot);
   const held = drag.activeSlotId === null ? undefined : slots.get(drag.activeSlotId);
   const downSlots = snapshot.slots.filter((slot) => slot.status === 'down');
   const lanes = [...snapshot.lanes].sort((a, b) => a.number - b.number);
+  const marks = new Map<number, SlotMark>(lanes.flatMap((lane) => [...laneMarks(lane, slots)]));
 
   const card = (slotId: number) => {
     const slot = slots.get(slotId);
@@ -34,6 +48,7 @@ export function LineupBoard({ snapshot, editable, onMove, actionsFor, onCatapult
         key={slot.id}
         slot={slot}
         movable={editable && isMovable(slot)}
+        mark={marks.get(slot.id)}
         menu={editable && <SlotMenu slot={slot} actions={actionsFor(slot)} />}
       />
     );
@@ -41,30 +56,32 @@ export function LineupBoard({ snapshot, editable, onMove, actionsFor, onCatapult
 
   return (
     <DndContext {...drag.contextProps}>
+      <Grid gap="2" templateColumns={{ base: 'minmax(0, 1fr)', lg: 'minmax(0, 3fr) minmax(24rem, 2fr)' }} mb="2">
+        <DeckPoolStrip
+          slotIds={drag.containers.pool}
+          defaultOpen={snapshot.pool.length > 0}
+          action={poolAction}
+          downList={
+            downSlots.length > 0 && (
+              <Text fontSize="sm" color="nogo.fg" px="2" data-testid="down-list">
+                Down: {downSlots.map((slot) => slot.sideNumber).join(', ')}
+              </Text>
+            )
+          }
+        >
+          {drag.containers.pool.map((slotId) => (
+            <Box key={slotId} w="15rem" flexShrink={0}>
+              {card(slotId)}
+            </Box>
+          ))}
+        </DeckPoolStrip>
+        <Box minW="0">{aside}</Box>
+      </Grid>
       <Grid
-        gap="3"
+        gap="2"
         alignItems="start"
-        templateColumns={{
-          base: 'minmax(0, 1fr)',
-          md: 'repeat(2, minmax(0, 1fr))',
-          lg: 'repeat(4, minmax(0, 1fr))',
-          xl: 'minmax(0, 1.1fr) repeat(4, minmax(0, 1fr))',
-        }}
+        templateColumns={{ base: 'minmax(0, 1fr)', sm: 'repeat(2, minmax(0, 1fr))', md: 'repeat(4, minmax(0, 1fr))' }}
       >
-        <GridItem colSpan={{ base: 1, md: 2, lg: 4, xl: 1 }} minW="0">
-          <PoolColumn
-            slotIds={drag.containers.pool}
-            downList={
-              downSlots.length > 0 && (
-                <Text fontSize="sm" color="nogo.fg" px="1" data-testid="down-list">
-                  Down: {downSlots.map((slot) => slot.sideNumber).join(', ')}
-                </Text>
-              )
-            }
-          >
-            {drag.containers.pool.map(card)}
-          </PoolColumn>
-        </GridItem>
         {lanes.map((lane) => {
           const slotIds = drag.containers[laneContainer(lane.catapultId)] ?? lane.slotIds;
           return (
@@ -72,17 +89,21 @@ export function LineupBoard({ snapshot, editable, onMove, actionsFor, onCatapult
               key={lane.catapultId}
               lane={lane}
               slotIds={slotIds}
-              headerAction={
+              counts={laneCounts(lane, slots)}
+              menu={
                 editable && (
-                  <Button
-                    size="xs"
-                    variant="outline"
-                    colorPalette={lane.status === 'up' ? 'nogo' : 'go'}
-                    onClick={() => onCatapultStatus(lane)}
-                    alignSelf="flex-start"
-                  >
-                    {lane.status === 'up' ? `Mark cat ${lane.number} down` : `Mark cat ${lane.number} up`}
-                  </Button>
+                  <ActionMenu
+                    label={`Actions for cat ${lane.number}`}
+                    testId="catapult-menu"
+                    actions={[
+                      {
+                        id: 'catapult-status',
+                        label: lane.status === 'up' ? `Mark cat ${lane.number} down…` : `Mark cat ${lane.number} up…`,
+                        tone: lane.status === 'up' ? 'danger' : undefined,
+                        run: () => onCatapultStatus(lane),
+                      },
+                    ]}
+                  />
                 )
               }
             >

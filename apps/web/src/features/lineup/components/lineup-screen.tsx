@@ -1,11 +1,10 @@
-import { useState } from 'react';
-import { Box, Button, Flex, HStack, Stack, Text } from '@chakra-ui/react';
+import { useState, type ReactNode } from 'react';
+import { Box, Button, Flex, Heading, HStack, Stack, Text } from '@chakra-ui/react';
 import type { LaneView, LineupSnapshot, SlotView } from '@catline/contracts';
 import { CautionLine } from '../../../components/caution-line.js';
 import { ConnectionBadge } from '../../../components/connection-badge.js';
 import { LiveFigures, useFiguresLive } from '../../../components/live-figures.js';
 import { CyclePicker } from '../../../components/cycle-picker.js';
-import { PageHeader } from '../../../components/page-header.js';
 import { EmptyState, ErrorState, LoadingState, QueryView } from '../../../components/query-states.js';
 import { NoticeBanner, refusalNotice, useNotice } from '../../../components/refusal-notice.js';
 import { formatClock, formatOptionalClock, formatShortClock } from '../../../lib/format.js';
@@ -27,6 +26,42 @@ import { SuggestionDialog } from './suggestion-dialog.js';
 
 type OpenDialog =
   { kind: 'down'; slot: SlotView } | { kind: 'catapult'; lane: LaneView } | { kind: 'suggestion' } | null;
+
+function Figure({ label, children, testId }: { label: string; children: ReactNode; testId?: string }) {
+  return (
+    <Box>
+      <Text fontSize="xs" color="fg.muted" textTransform="uppercase" fontWeight="600" lineHeight="1.2">
+        {label}
+      </Text>
+      <Text fontSize="lg" textStyle="figure" lineHeight="1.3" whiteSpace="nowrap" data-testid={testId}>
+        {children}
+      </Text>
+    </Box>
+  );
+}
+
+/** The cycle's figures, above its warnings. */
+function LineupSummary({ snapshot }: { snapshot: LineupSnapshot }) {
+  const slots = snapshot.slots;
+  const launched = slots.filter((slot) => slot.status === 'launched').length;
+  const toLaunch = slots.filter((slot) => slot.status !== 'down' && slot.status !== 'scratched').length;
+  return (
+    <HStack gap="3" wrap="wrap" rowGap="1" data-testid="lineup-summary">
+      <Figure label="Last launch" testId="last-launch">
+        {formatOptionalClock(snapshot.lastLaunchAt)}
+      </Figure>
+      <Figure label="Window">
+        {formatShortClock(snapshot.cycle.windowStartAt)}–{formatShortClock(snapshot.cycle.windowEndAt)}
+      </Figure>
+      <Figure label="Launched" testId="launched-count">
+        {launched} of {toLaunch}
+      </Figure>
+      <Figure label="Case">
+        {snapshot.cycle.weatherCase} · {snapshot.cycle.night ? 'night' : 'day'}
+      </Figure>
+    </HStack>
+  );
+}
 
 function LineupWorkspace({ snapshot }: { snapshot: LineupSnapshot }) {
   const cycleId = snapshot.cycle.id;
@@ -51,75 +86,34 @@ function LineupWorkspace({ snapshot }: { snapshot: LineupSnapshot }) {
     show(refusalNotice(error, action));
   };
 
-  const slots = snapshot.slots;
-  const launched = slots.filter((slot) => slot.status === 'launched').length;
-  const toLaunch = slots.filter((slot) => slot.status !== 'down' && slot.status !== 'scratched').length;
-  const spares = slots.filter((slot) => slot.spare && slot.catapultId === null && !isDone(slot));
+  const spares = snapshot.slots.filter((slot) => slot.spare && slot.catapultId === null && !isDone(slot));
 
   return (
-    <Stack gap="3">
+    <Stack gap="2">
       {notice && <NoticeBanner notice={notice} onDismiss={dismiss} />}
-      <Flex gap="3" wrap="wrap" align="stretch">
-        <Stack
-          gap="1"
-          flex="1 1 18rem"
-          borderWidth="1px"
-          rounded="card"
-          p="3"
-          bg="bg.panel"
-          data-testid="lineup-summary"
-        >
-          <HStack gap="4" wrap="wrap">
-            <Box>
-              <Text fontSize="xs" color="fg.muted" textTransform="uppercase" fontWeight="600">
-                Last projected launch
-              </Text>
-              <Text fontSize="2xl" textStyle="figure" data-testid="last-launch">
-                {formatOptionalClock(snapshot.lastLaunchAt)}
-              </Text>
-            </Box>
-            <Box>
-              <Text fontSize="xs" color="fg.muted" textTransform="uppercase" fontWeight="600">
-                Window
-              </Text>
-              <Text fontSize="lg" textStyle="figure">
-                {formatShortClock(snapshot.cycle.windowStartAt)}–{formatShortClock(snapshot.cycle.windowEndAt)}
-              </Text>
-            </Box>
-            <Box>
-              <Text fontSize="xs" color="fg.muted" textTransform="uppercase" fontWeight="600">
-                Launched
-              </Text>
-              <Text fontSize="lg" textStyle="figure" data-testid="launched-count">
-                {launched} of {toLaunch}
-              </Text>
-            </Box>
-          </HStack>
-          {arranges ? (
-            <HStack gap="2" wrap="wrap" mt="1">
-              <Button size="sm" colorPalette="accent" onClick={() => setDialog({ kind: 'suggestion' })}>
-                Suggest lineup
-              </Button>
-              <Text fontSize="xs" color="fg.muted">
-                Drag cards, or focus one and press Enter, then the arrow keys.
-              </Text>
-            </HStack>
-          ) : (
-            <Text fontSize="sm" color="fg.muted" data-testid="read-only-note">
-              Read only: the handler arranges the lineup.
-            </Text>
-          )}
-        </Stack>
-        <Box flex="2 1 22rem" minW="0">
-          <LineupWarnings warnings={lineupWarnings(snapshot, formatClock)} />
-        </Box>
-      </Flex>
       <LineupBoard
         snapshot={snapshot}
         editable={editable}
         onMove={(request) => move.mutate(request, { onError: refused('Your move') })}
         actionsFor={(slot) => slotActions(slot, { markDown: (chosen) => setDialog({ kind: 'down', slot: chosen }) })}
         onCatapultStatus={(lane) => setDialog({ kind: 'catapult', lane })}
+        poolAction={
+          arranges ? (
+            <Button size="sm" minH="tap" colorPalette="accent" onClick={() => setDialog({ kind: 'suggestion' })}>
+              Suggest lineup
+            </Button>
+          ) : (
+            <Text fontSize="xs" color="fg.muted" px="2" maxW="9rem" data-testid="read-only-note">
+              Read only: the handler arranges the lineup.
+            </Text>
+          )
+        }
+        aside={
+          <Stack gap="1" minW="0">
+            <LineupSummary snapshot={snapshot} />
+            <LineupWarnings warnings={lineupWarnings(snapshot, formatClock)} />
+          </Stack>
+        }
       />
       {dialog?.kind === 'down' && (
         <MarkDownDialog
@@ -176,24 +170,22 @@ function LineupWorkspace({ snapshot }: { snapshot: LineupSnapshot }) {
 export function LineupScreen() {
   const { cycles, cycle, choose } = useViewedCycle();
   const live = useLiveCycle(cycle?.id);
-  const snapshotCycle = live.lineup.data?.cycle ?? cycle;
-  useCycleTheme(snapshotCycle?.night);
+  useCycleTheme((live.lineup.data?.cycle ?? cycle)?.night);
 
   return (
-    <Stack gap="3">
-      <PageHeader
-        title="Lineup"
-        subtitle={
-          snapshotCycle &&
-          `Cycle ${snapshotCycle.number} · ${snapshotCycle.state} · ${snapshotCycle.night ? 'night' : 'day'} · case ${snapshotCycle.weatherCase}`
-        }
-      >
+    <Stack gap="2">
+      <Flex gap="2" rowGap="1" wrap="wrap" align="center">
+        <Heading as="h1" size="xl" fontWeight="700" flexShrink={0}>
+          Lineup
+        </Heading>
+        <Box flex="1 1 24rem" minW="0">
+          <CautionLine compact />
+        </Box>
         {cycle && <ConnectionBadge state={live.connection} />}
         {cycles.data && cycles.data.length > 0 && (
           <CyclePicker cycles={cycles.data} value={cycle?.id} onChange={choose} />
         )}
-      </PageHeader>
-      <CautionLine />
+      </Flex>
       {cycles.isPending ? (
         <LoadingState label="Finding the current cycle…" />
       ) : cycles.isError ? (

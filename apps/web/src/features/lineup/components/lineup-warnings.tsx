@@ -9,6 +9,7 @@ const palette: Record<WarningKind, string> = {
   weight_not_agreed: 'gray',
 };
 
+/** The warnings, most serious first, in a short band that scrolls rather than pushing the lanes down. */
 export function LineupWarnings({ warnings }: { warnings: LineupWarning[] }) {
   return (
     <Box
@@ -17,28 +18,25 @@ export function LineupWarnings({ warnings }: { warnings: LineupWarning[] }) {
       data-testid="lineup-warnings"
       borderWidth="1px"
       rounded="card"
-      p="3"
+      px="2"
+      py="1"
       bg="bg.panel"
     >
-      <Text fontWeight="700" mb="1">
-        Warnings{' '}
-        {warnings.length > 0 && (
-          <Text as="span" color="fg.muted">
-            ({warnings.length})
-          </Text>
-        )}
+      <Text fontSize="xs" color="fg.muted" textTransform="uppercase" fontWeight="600">
+        Warnings{warnings.length > 0 && ` (${warnings.length})`}
       </Text>
       {warnings.length === 0 ? (
         <Text fontSize="sm" color="fg.muted">
           None: every aircraft in a lane is go and within the window.
         </Text>
       ) : (
-        <List.Root gap="1" maxH="9rem" overflowY="auto" ps="0" listStyleType="none">
+        <List.Root gap="0.5" maxH="2.75rem" overflowY="auto" ps="0" listStyleType="none" tabIndex={0}>
           {warnings.map((warning) => (
             <List.Item
               key={warning.key}
               data-kind={warning.kind}
               fontSize="sm"
+              lineHeight="1.3"
               colorPalette={palette[warning.kind]}
               color="colorPalette.fg"
               borderLeftWidth="3px"

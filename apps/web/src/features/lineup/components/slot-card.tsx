@@ -5,21 +5,35 @@ import { CSS } from '@dnd-kit/utilities';
 import type { SlotView } from '@catline/contracts';
 import { MarginGo } from '../../../components/go-badge.js';
 import { GripIcon } from '../../../components/icons.js';
-import { SLOT_STATUS_LABELS, SlotStatusBadge } from '../../../components/slot-status-badge.js';
+import { SlotStatusBadge } from '../../../components/slot-status-badge.js';
 import { formatOptionalClock, formatPounds } from '../../../lib/format.js';
 import { slotItemId } from '../hooks/use-lineup-drag.js';
+import type { SlotMark } from '../lineup-model.js';
+
+const MARK_LABELS: Record<SlotMark, string> = { 'on-catapult': 'On cat', next: 'Next' };
 
 /** The card's frame: its edge says launched, no-go or waiting; a lifted card floats above the board. */
-function SlotCardFrame({ slot, lifted, children }: { slot: SlotView; lifted: boolean; children: ReactNode }) {
+function SlotCardFrame({
+  slot,
+  lifted,
+  mark,
+  children,
+}: {
+  slot: SlotView;
+  lifted: boolean;
+  mark?: SlotMark;
+  children: ReactNode;
+}) {
   const figures = slot.figures;
+  const nogo = figures && !figures.go && slot.status !== 'launched';
   return (
     <Flex
       align="flex-start"
       bg={lifted ? 'bg.emphasized' : 'bg.panel'}
-      borderWidth="1px"
-      borderColor={figures && !figures.go && slot.status !== 'launched' ? 'nogo.border' : 'border'}
-      borderLeftWidth="4px"
-      borderLeftColor={slot.status === 'launched' ? 'go.solid' : figures && !figures.go ? 'nogo.solid' : 'accent.solid'}
+      borderWidth={mark === 'on-catapult' ? '2px' : '1px'}
+      borderColor={nogo ? 'nogo.border' : mark === 'on-catapult' ? 'accent.solid' : 'border'}
+      borderLeftWidth={mark ? '8px' : '4px'}
+      borderLeftColor={slot.status === 'launched' ? 'go.solid' : nogo ? 'nogo.solid' : 'accent.solid'}
       rounded="card"
       boxShadow={lifted ? 'lg' : undefined}
       opacity={slot.status === 'launched' ? 0.75 : 1}
@@ -30,31 +44,47 @@ function SlotCardFrame({ slot, lifted, children }: { slot: SlotView; lifted: boo
 }
 
 /** What a slot card shows: who, what, how heavy, when, and whether the figures are go. */
-function SlotCardContent({ slot, movable }: { slot: SlotView; movable: boolean }) {
+function SlotCardContent({ slot, movable, mark }: { slot: SlotView; movable: boolean; mark?: SlotMark }) {
   const figures = slot.figures;
   return (
-    <Box px="2.5" py="1.5" minW="0" flex="1">
-      <Flex justify="space-between" align="center" gap="2">
+    <Box ps="2" pe="1" py="1" minW="0" flex="1">
+      <Flex align="center" gap="1.5" minW="0">
         <HStack gap="1.5" minW="0">
           {movable && (
             <Box as="span" color="fg.subtle" fontSize="sm" flexShrink={0}>
               <GripIcon />
             </Box>
           )}
-          <Text fontWeight="700" fontSize="2xl" lineHeight="1.1" textStyle="figure" data-testid="side-number">
+          <Text
+            fontWeight="700"
+            fontSize="2xl"
+            lineHeight="1.1"
+            textStyle="figure"
+            flexShrink={0}
+            data-testid="side-number"
+          >
             {slot.sideNumber}
           </Text>
-          <Text fontSize="xs" color="fg.muted" truncate>
-            {slot.typeDesignation} · {slot.squadronCode}
-          </Text>
+          {mark && (
+            <Badge
+              size="sm"
+              colorPalette="accent"
+              variant={mark === 'on-catapult' ? 'solid' : 'outline'}
+              flexShrink={0}
+            >
+              {MARK_LABELS[mark]}
+            </Badge>
+          )}
         </HStack>
-        <SlotStatusBadge status={slot.status} />
       </Flex>
-      <Text fontSize="sm" color="fg.muted" truncate>
-        {slot.pilotName ?? 'No pilot assigned'}
-        {slot.mission ? ` · ${slot.mission}` : ''}
-      </Text>
-      <HStack gap="1.5" wrap="wrap" fontSize="sm" mt="0.5">
+      <HStack gap="1.5" minW="0">
+        <SlotStatusBadge status={slot.status} />
+        <Text fontSize="sm" color="fg.muted" truncate>
+          {slot.typeDesignation} · {slot.squadronCode} · {slot.pilotName ?? 'no pilot'}
+          {slot.mission ? ` · ${slot.mission}` : ''}
+        </Text>
+      </HStack>
+      <HStack gap="1.5" wrap="wrap" fontSize="sm" rowGap="0">
         <Text textStyle="figure">{formatPounds(slot.grossWeightLb)}</Text>
         {slot.trimDeg !== null && <Text color="fg.muted">Trim {slot.trimDeg}°</Text>}
         {slot.afterburnerRequired && (
@@ -79,7 +109,7 @@ function SlotCardContent({ slot, movable }: { slot: SlotView; movable: boolean }
         )}
       </HStack>
       {figures && (
-        <Flex justify="space-between" align="center" gap="2" mt="1" fontSize="sm" wrap="wrap">
+        <Flex justify="space-between" align="center" gap="2" fontSize="sm" wrap="wrap">
           <Text textStyle="figure" title="Projected launch time">
             {slot.launchedAt
               ? `Off ${formatOptionalClock(slot.launchedAt)}`
@@ -111,11 +141,15 @@ interface SortableSlotCardProps {
   slot: SlotView;
   /** Cards a person may not move stay put (wrong role, or the aircraft has gone). */
   movable: boolean;
+  /** The aircraft on its lane's catapult, or the next one. */
+  mark?: SlotMark;
   /** The card's menu: it sits beside the draggable area, so its keys and taps never start a drag. */
   menu?: ReactNode;
 }
 
-export function SortableSlotCard({ slot, movable, menu }: SortableSlotCardProps) {
+export function SortableSlotCard({ slot, movable, mark, menu }: SortableSlotCardProps) {
+  // The handle is named by what it shows (side number, mark, status, type, pilot, figures), so a person
+  // who says or reads what they see finds it.
   const { attributes, listeners, setNodeRef, setActivatorNodeRef, transform, transition, isDragging } = useSortable({
     id: slotItemId(slot.id),
     disabled: !movable,
@@ -128,14 +162,12 @@ export function SortableSlotCard({ slot, movable, menu }: SortableSlotCardProps)
       data-testid="slot-card"
       data-side-number={slot.sideNumber}
       data-status={slot.status}
+      data-mark={mark}
     >
-      <SlotCardFrame slot={slot} lifted={false}>
+      <SlotCardFrame slot={slot} lifted={false} mark={mark}>
         <Box
           ref={setActivatorNodeRef}
           {...(movable ? { ...attributes, ...listeners } : {})}
-          aria-label={
-            movable ? `${slot.sideNumber}, ${slot.typeDesignation}, ${SLOT_STATUS_LABELS[slot.status]}` : undefined
-          }
           flex="1"
           minW="0"
           display="flex"
@@ -144,7 +176,7 @@ export function SortableSlotCard({ slot, movable, menu }: SortableSlotCardProps)
           rounded="card"
           _focusVisible={{ outline: '3px solid', outlineColor: 'accent.focusRing', outlineOffset: '2px' }}
         >
-          <SlotCardContent slot={slot} movable={movable} />
+          <SlotCardContent slot={slot} movable={movable} mark={mark} />
         </Box>
         {menu}
       </SlotCardFrame>

@@ -3,8 +3,8 @@ import type { SlotView } from '@catline/contracts';
 import { MoreIcon } from '../../../components/icons.js';
 import type { SlotAction } from '../slot-actions.js';
 
-/** A slot card's actions behind one button, so a busy lane shows aircraft rather than buttons. */
-export function SlotMenu({ slot, actions }: { slot: SlotView; actions: SlotAction[] }) {
+/** Actions behind one button, so a busy board shows aircraft and catapults rather than buttons. */
+export function ActionMenu({ label, actions, testId }: { label: string; actions: SlotAction[]; testId: string }) {
   if (actions.length === 0) return null;
   return (
     <Menu.Root
@@ -12,15 +12,7 @@ export function SlotMenu({ slot, actions }: { slot: SlotView; actions: SlotActio
       onSelect={({ value }) => actions.find((action) => action.id === value)?.run()}
     >
       <Menu.Trigger asChild>
-        <IconButton
-          aria-label={`Actions for ${slot.sideNumber}`}
-          variant="ghost"
-          size="sm"
-          minW="tap"
-          h="tap"
-          flexShrink={0}
-          data-testid="slot-menu"
-        >
+        <IconButton aria-label={label} variant="ghost" size="sm" minW="tap" h="tap" flexShrink={0} data-testid={testId}>
           <MoreIcon />
         </IconButton>
       </Menu.Trigger>
@@ -45,3 +37,8 @@ export function SlotMenu({ slot, actions }: { slot: SlotView; actions: SlotActio
     </Menu.Root>
   );
 }
+
+/** A slot card's menu. */
+export const SlotMenu = ({ slot, actions }: { slot: SlotView; actions: SlotAction[] }) => (
+  <ActionMenu label={`Actions for ${slot.sideNumber}`} actions={actions} testId="slot-menu" />
+);

@@ -8,8 +8,11 @@ export * from './aircraft/aircraft-profile.js';
 export * from './launch/launch-airspeed.js';
 export * from './launch/launch-settings.js';
 export * from './launch/launch-figures.js';
+export * from './deck/deck-positions.js';
 export {
   catapultClosedReason,
+  clearingTiers,
+  inLandingArea,
   projectLaunchTimes,
   type LaunchCatapult,
   type LaunchPriority,

@@ -120,6 +120,81 @@ describe('projected launch times', () => {
     expect(times).toEqual({ fighter: 0, spare: 0, tanker: 60 });
   });
 
+  // Worked example, by hand (times invented, common practice, no source): A parked at the front of a
+  // row taxis 60 s to catapult 1; B behind it taxis 30 s to catapult 3. A leaves its spot just in time
+  // for its launch: catapult 1 is busy with x until 120 s, so A launches at 120 s and leaves at
+  // 120 - 60 = 60 s. B can leave then and launches at 60 + 30 = 90 s, not at its 30 s taxi arrival.
+  it('let an aircraft parked behind another taxi out only once the one in front has left', () => {
+    const input = base({
+      catapults: fourCatapults(120),
+      lanes: { cat1: ['x', 'A'], cat3: ['B'] },
+      notBefore: { A: at(60), B: at(30) },
+      clearBefore: { B: ['A'] },
+    });
+    expect(timesOf(input)).toEqual({ x: 0, A: 120, B: 90 });
+    // Without the rule B would go at its arrival.
+    expect(timesOf({ ...input, clearBefore: undefined })).toEqual({ x: 0, A: 120, B: 30 });
+  });
+
+  it('take a launched aircraft in front as gone', () => {
+    const input = base({
+      lanes: { cat1: ['A'], cat3: ['B'] },
+      launched: { A: at(10) },
+      notBefore: { B: at(30) },
+      clearBefore: { B: ['A'] },
+    });
+    expect(timesOf(input)).toEqual({ A: 10, B: 30 });
+  });
+
+  it('send the aircraft in front first when the one behind has the higher priority', () => {
+    // The tanker is parked behind a fighter: the fighter takes the tanker's priority so that the
+    // tanker is not stuck waiting for it; the spare on catapult 2 then waits for both.
+    const times = timesOf(
+      base({
+        lanes: { cat1: ['fighter'], cat3: ['tanker'], cat2: ['other'] },
+        notBefore: { fighter: at(40), tanker: at(20), other: at(0) },
+        priorities: { tanker: 'first' },
+        clearBefore: { tanker: ['fighter'] },
+      }),
+    );
+    // By hand: fighter at 40 s (left at 0 s), tanker at max(20, 0 + 20) = 20 s; other holds for both: 40 s.
+    expect(times).toEqual({ fighter: 40, tanker: 20, other: 40 });
+  });
+
+  it('name the aircraft that must move when the one in front does not go first', () => {
+    // B is ahead of A in the lane but parked behind it: neither can go, and everything behind B waits.
+    // C is parked behind an aircraft in no lane at all.
+    const projection = projectLaunchTimes(
+      base({
+        lanes: { cat1: ['B', 'A', 'D'], cat2: ['C'], cat3: ['E'] },
+        clearBefore: { B: ['A'], C: ['parked'] },
+      }),
+    );
+    expect(projection.slots.map((slot) => slot.slotId)).toEqual(['E']);
+    expect(projection.unschedulable).toEqual([
+      { slotId: 'B', catapultId: 'cat1', reason: 'spot_blocked', mustMove: ['A'] },
+      { slotId: 'A', catapultId: 'cat1', reason: 'spot_blocked', mustMove: ['A'] },
+      { slotId: 'D', catapultId: 'cat1', reason: 'spot_blocked', mustMove: ['A'] },
+      { slotId: 'C', catapultId: 'cat2', reason: 'spot_blocked', mustMove: ['parked'] },
+    ]);
+  });
+
+  it('pause the catapults the ship marks as inside the landing area while it is in use', () => {
+    // A ship whose landing area covers catapult 2 and not the waist catapult 4.
+    const catapults = fourCatapults(60).map((catapult) => ({
+      ...catapult,
+      inLandingArea: catapult.id === 'cat2' || catapult.id === 'cat3',
+    }));
+    const lanes = { cat1: ['a'], cat2: ['b'], cat3: ['c'], cat4: ['d'] };
+    const recovering = projectLaunchTimes(base({ catapults, landingAreaInUse: true, lanes }));
+    expect(recovering.slots.map((slot) => slot.slotId)).toEqual(['a', 'd']);
+    expect(recovering.unschedulable.map((slot) => [slot.slotId, slot.reason])).toEqual([
+      ['b', 'waist_closed'],
+      ['c', 'waist_closed'],
+    ]);
+    expect(projectLaunchTimes(base({ catapults, landingAreaInUse: false, lanes })).unschedulable).toEqual([]);
+  });
+
   it('refuses a slot in two lanes or a lane for an unknown catapult', () => {
     expect(() => projectLaunchTimes(base({ lanes: { cat1: ['a'], cat2: ['a'] } }))).toThrow(LaunchMathInputError);
     expect(() => projectLaunchTimes(base({ lanes: { cat9: ['a'] } }))).toThrow(LaunchMathInputError);

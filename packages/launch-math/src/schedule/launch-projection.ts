@@ -14,6 +14,8 @@ export interface LaunchCatapult {
   /** Launch to next launch on this catapult, seconds. */
   readonly resetInterval: Seconds;
   readonly up: boolean;
+  /** Whether the catapult lies in the landing area (default: the waist catapults). */
+  readonly inLandingArea?: boolean;
 }
 
 /** The cycle's launch window, epoch ms. */
@@ -30,7 +32,7 @@ export interface ProjectionInput {
   readonly cycleStart: EpochMs;
   readonly window: LaunchWindow;
   readonly catapults: readonly LaunchCatapult[];
-  /** While the landing area is in use the waist catapults are closed. */
+  /** While the landing area is recovering or fouled the catapults inside it are paused. */
   readonly landingAreaInUse: boolean;
   /** Ordered slot ids per catapult id. */
   readonly lanes: Readonly<Record<string, readonly string[]>>;
@@ -44,6 +46,12 @@ export interface ProjectionInput {
   readonly priorities?: Readonly<Record<string, LaunchPriority>>;
   /** Current time (epoch ms): nothing still to launch is projected before it. */
   readonly now?: EpochMs;
+  /**
+   * Per slot, the slots parked in front of it in its row that must have taxied out before it can
+   * (from {@link blockingAircraft}). Each aircraft is taken to leave its spot its taxi time
+   * (`notBefore` minus `cycleStart`) before its launch. Launched blockers have gone.
+   */
+  readonly clearBefore?: Readonly<Record<string, readonly string[]>>;
 }
 
 export interface ProjectedSlot {
@@ -58,12 +66,15 @@ export interface ProjectedSlot {
   readonly missesWindow: boolean;
 }
 
-export type UnschedulableReason = 'catapult_down' | 'waist_closed';
+/** `waist_closed`: a catapult in the landing area, paused while it recovers or is fouled. */
+export type UnschedulableReason = 'catapult_down' | 'waist_closed' | 'spot_blocked';
 
 export interface UnschedulableSlot {
   readonly slotId: string;
   readonly catapultId: string;
   readonly reason: UnschedulableReason;
+  /** For `spot_blocked`: the aircraft that must move (it is parked in front and does not go first). */
+  readonly mustMove?: readonly string[];
 }
 
 export interface Projection {
@@ -82,10 +93,43 @@ const PRIORITY_TIER: Readonly<Record<LaunchPriority, number>> = { first: 0, norm
 /** Priority tier of a launch priority: 0 launches first. */
 export const priorityTier = (priority: LaunchPriority | undefined): number => PRIORITY_TIER[priority ?? 'normal'];
 
-/** Whether a catapult can launch now: up, and not a waist catapult while the landing area is in use. */
+/**
+ * Priority tiers with the clear-before rule applied: an aircraft parked in front of others takes the
+ * highest priority of any aircraft it holds in (directly or down the row), since it must go first to
+ * let them out. `tiers` is indexed like `ids`; blockers outside `ids` are ignored.
+ */
+export function clearingTiers(
+  ids: readonly string[],
+  tiers: readonly number[],
+  clearBefore: Readonly<Record<string, readonly string[]>> | undefined,
+): number[] {
+  const lifted = [...tiers];
+  if (clearBefore === undefined) return lifted;
+  const indexOf = new Map(ids.map((id, index) => [id, index]));
+  // Rows are short: lifting until nothing changes settles within a row's length of passes.
+  for (let changed = true, passes = 0; changed && passes <= ids.length; passes += 1) {
+    changed = false;
+    ids.forEach((id, index) => {
+      for (const blocker of clearBefore[id] ?? []) {
+        const at = indexOf.get(blocker);
+        if (at !== undefined && lifted[at] > lifted[index]) {
+          lifted[at] = lifted[index];
+          changed = true;
+        }
+      }
+    });
+  }
+  return lifted;
+}
+
+/** Whether a catapult lies in the landing area: as the ship marks it, else the waist catapults. */
+export const inLandingArea = (catapult: Pick<LaunchCatapult, 'position' | 'inLandingArea'>): boolean =>
+  catapult.inLandingArea ?? catapult.position === 'waist';
+
+/** Whether a catapult can launch now: up, and not in the landing area while that is in use. */
 export function catapultClosedReason(catapult: LaunchCatapult, landingAreaInUse: boolean): UnschedulableReason | null {
   if (!catapult.up) return 'catapult_down';
-  return landingAreaInUse && catapult.position === 'waist' ? 'waist_closed' : null;
+  return landingAreaInUse && inLandingArea(catapult) ? 'waist_closed' : null;
 }
 
 /** Catapults in tie-break order (by number), after checking their figures. */
@@ -130,7 +174,7 @@ export function projectLaunchTimes(input: ProjectionInput): Projection {
   const slotCatapult: number[] = [];
   const slotPlace: number[] = [];
   const pendingLanes: number[][] = catapults.map(() => []);
-  const fixed: FixedLaunch[] = [];
+  const launchedSlots: number[] = [];
   const unschedulable: UnschedulableSlot[] = [];
   const seen = new Set<string>();
   catapults.forEach((catapult, catapultIndex) => {
@@ -147,11 +191,10 @@ export function projectLaunchTimes(input: ProjectionInput): Projection {
       slotIds.push(slotId);
       slotCatapult.push(catapultIndex);
       slotPlace.push(laneIndex + 1);
-      const tier = priorityTier(input.priorities?.[slotId]);
       if (launchedAt === undefined) pendingLanes[catapultIndex].push(slot);
       else {
         requireFinite(launchedAt, `Launch time of ${slotId}`);
-        fixed.push({ catapult: catapultIndex, time: launchedAt, tier });
+        launchedSlots.push(slot);
       }
     });
   });
@@ -160,8 +203,27 @@ export function projectLaunchTimes(input: ProjectionInput): Projection {
   notBefore.forEach((time, slot) => {
     if (Number.isNaN(time)) throw new LaunchMathInputError(`Earliest launch of ${slotIds[slot]} is not a number`);
   });
+  const indexOfSlot = new Map(slotIds.map((slotId, slot) => [slotId, slot]));
+  const tier = clearingTiers(
+    slotIds,
+    slotIds.map((slotId) => priorityTier(input.priorities?.[slotId])),
+    input.clearBefore,
+  );
+  const fixed: FixedLaunch[] = launchedSlots.map((slot) => ({
+    catapult: slotCatapult[slot],
+    time: input.launched![slotIds[slot]],
+    tier: tier[slot],
+  }));
+  const clearAfter = slotIds.map((slotId) => {
+    const blockers = input.clearBefore?.[slotId]?.filter((blocker) => input.launched?.[blocker] === undefined);
+    return blockers === undefined || blockers.length === 0
+      ? undefined
+      : blockers.map((blocker) => indexOfSlot.get(blocker) ?? -1);
+  });
   const times = scheduleLaunches({
     earliest,
+    taxiStart: input.cycleStart,
+    clearAfter,
     pairGapMs: secondsToMilliseconds(input.pairMinimumGap),
     catapults: catapults.map((catapult) => ({
       resetMs: secondsToMilliseconds(catapult.resetInterval),
@@ -169,14 +231,34 @@ export function projectLaunchTimes(input: ProjectionInput): Projection {
     })),
     lanes: pendingLanes,
     notBefore,
-    tier: slotIds.map((slotId) => priorityTier(input.priorities?.[slotId])),
+    tier,
     fixed,
   });
   // Launched slots are not scheduled: their recorded time stands.
   const timeOf = (slot: number): number => input.launched?.[slotIds[slot]] ?? times[slot];
+  // A slot left without a time waits on an aircraft in front of its spot that does not go first, or
+  // stands in its lane behind one that does: it names the aircraft that must move.
+  for (const lane of pendingLanes) {
+    let ahead: readonly string[] = [];
+    for (const slot of lane) {
+      if (!Number.isNaN(times[slot])) continue;
+      const own = (input.clearBefore?.[slotIds[slot]] ?? []).filter((blocker) => {
+        const index = indexOfSlot.get(blocker);
+        return input.launched?.[blocker] === undefined && (index === undefined || Number.isNaN(times[index]));
+      });
+      if (own.length > 0) ahead = own;
+      unschedulable.push({
+        slotId: slotIds[slot],
+        catapultId: catapults[slotCatapult[slot]].id,
+        reason: 'spot_blocked',
+        mustMove: ahead,
+      });
+    }
+  }
 
   const slots: ProjectedSlot[] = slotIds
-    .map((slotId, slot) => ({
+    .flatMap((slotId, slot) => (Number.isNaN(timeOf(slot)) ? [] : [{ slotId, slot }]))
+    .map(({ slotId, slot }) => ({
       slotId,
       catapultId: catapults[slotCatapult[slot]].id,
       place: slotPlace[slot],

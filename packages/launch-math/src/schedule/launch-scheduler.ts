@@ -8,6 +8,10 @@
  * - launches on two catapults of the same group (a pair) are at least the pair gap apart;
  * - priority holds: a slot's effective tier is the highest tier at or ahead of it in its lane (it
  *   cannot overtake what is ahead), and no slot launches before every launch of a lower tier;
+ * - clear before: a slot parked behind others in its row cannot taxi out before they have left. Each
+ *   aircraft leaves its spot just in time to reach its catapult at its launch (its launch minus its
+ *   taxi lead, `notBefore` minus `taxiStart`), so a blocked slot launches no earlier than each
+ *   blocker's departure plus its own taxi lead; a slot whose blocker never launches is never scheduled;
  * - within those rules the earliest possible launch is taken first, ties to the lower catapult index.
  */
 export interface SchedulerCatapult {
@@ -35,6 +39,10 @@ export interface SchedulerProblem {
   readonly tier: ArrayLike<number>;
   /** Launches already made: they hold their catapult and pair partner like any other. */
   readonly fixed: readonly FixedLaunch[];
+  /** When taxiing starts: a slot's taxi lead is its `notBefore` minus this. */
+  readonly taxiStart?: number;
+  /** Per slot, the slots (indices) that must leave their spots before it can taxi out. */
+  readonly clearAfter?: ArrayLike<readonly number[] | undefined>;
 }
 
 function insertSorted(list: number[], value: number): void {
@@ -89,6 +97,18 @@ export function scheduleLaunches(problem: SchedulerProblem): Float64Array {
     lastPhase = Math.max(lastPhase, running);
   }
 
+  const taxiStart = problem.taxiStart ?? Number.NEGATIVE_INFINITY;
+  const { clearAfter } = problem;
+  const lead = (slot: number): number => (Number.isFinite(notBefore[slot]) ? notBefore[slot] - taxiStart : 0);
+  /** The earliest the slot can launch once its blockers have left; NaN while one is not yet scheduled. */
+  const clearedAt = (slot: number): number => {
+    const blockers = clearAfter?.[slot];
+    if (blockers === undefined) return Number.NEGATIVE_INFINITY;
+    let time = Number.NEGATIVE_INFINITY;
+    for (const blocker of blockers) time = Math.max(time, times[blocker] - lead(blocker) + lead(slot));
+    return time;
+  };
+
   const clearOfPartners = (catapult: number, start: number): number => {
     let time = start;
     for (let moved = true; moved;) {
@@ -120,7 +140,14 @@ export function scheduleLaunches(problem: SchedulerProblem): Float64Array {
         const slot = lanes[catapult][head[catapult]];
         if (effectiveTier[slot] !== phase) continue;
         if (Number.isNaN(candidate[catapult])) {
-          candidate[catapult] = clearOfPartners(catapult, Math.max(start, readyAt[catapult], notBefore[slot]));
+          let from = Math.max(start, readyAt[catapult], notBefore[slot]);
+          if (clearAfter !== undefined) {
+            const cleared = clearedAt(slot);
+            // Waits, without a candidate, until every blocker has its time.
+            if (Number.isNaN(cleared)) continue;
+            from = Math.max(from, cleared);
+          }
+          candidate[catapult] = clearOfPartners(catapult, from);
         }
         if (candidate[catapult] < bestTime) {
           best = catapult;

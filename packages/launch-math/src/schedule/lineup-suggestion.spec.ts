@@ -24,6 +24,17 @@ const cycle = (overrides: Partial<SuggestionInput> = {}): SuggestionInput => ({
   ...overrides,
 });
 
+/** Aircraft in rows, in the order listed: each waits for every aircraft in front of it in its row. */
+function rowsOf(ids: readonly string[], rowLengths: readonly number[]): Record<string, string[]> {
+  const clearBefore: Record<string, string[]> = {};
+  let rowStart = 0;
+  ids.forEach((id, index) => {
+    if (index - rowStart >= rowLengths[rowStart]) rowStart = index;
+    if (index > rowStart) clearBefore[id] = ids.slice(rowStart, index).reverse();
+  });
+  return clearBefore;
+}
+
 describe('suggested lineup', () => {
   it('maps tankers and early warning to first and spares to last', () => {
     expect(['tanker', 'early_warning', 'mission', 'spare'].map((role) => priorityForRole(role as never))).toEqual([
@@ -76,6 +87,87 @@ describe('suggested lineup', () => {
     const suggestion = suggestLineup(input);
     expect(suggestion.unplaced).toEqual([{ aircraftId: 'stuck', reason: 'no_catapult_reachable' }]);
     expect(Object.values(suggestion.lanes).flat()).toEqual(['free']);
+  });
+
+  // Worked example, by hand (invented times, common practice, no source): one catapult, reset 60 s.
+  // B taxis 10 s but is parked behind A, which taxis 60 s. Ignoring the row, B then A finishes at
+  // 10 + 60 = 70 s. With it, B cannot leave before A: A launches at 60 s (leaving at 0 s) and B at
+  // 60 + 60 = 120 s; B first would strand both.
+  it('sends the aircraft in front of a row before the one parked behind it', () => {
+    const input = cycle({
+      catapults: fourCatapults(60, [true, false, false, false]),
+      aircraft: [
+        { id: 'B', priority: 'normal' },
+        { id: 'A', priority: 'normal' },
+      ],
+      taxiTimes: { A: everywhere(60), B: everywhere(10) },
+    });
+    expect(suggestLineup(input).lanes.cat1).toEqual(['B', 'A']);
+    expect(suggestLineup(input).projection.lastLaunch).toBe(at(70));
+    const rowed = suggestLineup({ ...input, clearBefore: { B: ['A'] } });
+    expect(rowed.lanes.cat1).toEqual(['A', 'B']);
+    expect(rowed.projection.lastLaunch).toBe(at(120));
+    expect(rowed.projection.unschedulable).toEqual([]);
+  });
+
+  it('leaves out, naming who must move, aircraft parked behind one that does not launch in the cycle', () => {
+    const suggestion = suggestLineup(
+      cycle({
+        aircraft: [
+          { id: 'behind', priority: 'normal' },
+          { id: 'further', priority: 'normal' },
+          { id: 'free', priority: 'normal' },
+        ],
+        taxiTimes: { behind: everywhere(30), further: everywhere(40), free: everywhere(30) },
+        clearBefore: { behind: ['parked'], further: ['behind', 'parked'] },
+      }),
+    );
+    expect(suggestion.unplaced).toEqual([
+      { aircraftId: 'behind', reason: 'spot_blocked', mustMove: ['parked'] },
+      { aircraftId: 'further', reason: 'spot_blocked', mustMove: ['behind', 'parked'] },
+    ]);
+    expect(Object.values(suggestion.lanes).flat()).toEqual(['free']);
+  });
+
+  it('strands no aircraft behind another in its row, and gives the same times as projecting its lineup', () => {
+    fc.assert(
+      fc.property(
+        suggestionInputArbitrary(10).chain((input) =>
+          fc
+            .array(fc.integer({ min: 1, max: 3 }), {
+              minLength: input.aircraft.length,
+              maxLength: input.aircraft.length,
+            })
+            .map((rowLengths) => ({
+              ...input,
+              clearBefore: rowsOf(
+                input.aircraft.map((a) => a.id),
+                rowLengths,
+              ),
+            })),
+        ),
+        (input) => {
+          const suggestion = suggestLineup(input);
+          const again = projectLaunchTimes({
+            ...input,
+            lanes: suggestion.lanes,
+            notBefore: suggestion.notBefore,
+            priorities: suggestion.priorities,
+          });
+          expect(again).toEqual(suggestion.projection);
+          expect(suggestion.projection.unschedulable.filter((slot) => slot.reason === 'spot_blocked')).toEqual([]);
+          // Checked apart from the scheduler: each aircraft leaves its spot its taxi time before its launch,
+          // and none leaves before every aircraft in front of it in its row.
+          const time = new Map(suggestion.projection.slots.map((slot) => [slot.slotId, slot.time as number]));
+          const leaves = (id: string) => time.get(id)! - (suggestion.notBefore[id] - CYCLE_START);
+          for (const [behind, fronts] of Object.entries(input.clearBefore ?? {})) {
+            if (!time.has(behind)) continue;
+            for (const front of fronts) expect(time.has(front) && leaves(front) <= leaves(behind)).toBe(true);
+          }
+        },
+      ),
+      { numRuns: 60 },
+    );
   });
 
   it('gives the same times as projecting its lineup', () => {

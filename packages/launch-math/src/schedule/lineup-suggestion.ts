@@ -2,6 +2,7 @@ import { LaunchMathInputError, requireNonNegative } from '../errors.js';
 import { epochMs, secondsToMilliseconds, type EpochMs, type Seconds } from '../units/units.js';
 import {
   catapultClosedReason,
+  clearingTiers,
   earliestLaunch,
   orderedCatapults,
   priorityTier,
@@ -39,11 +40,18 @@ export interface SuggestionInput {
    * `taxiTimes[aircraftId][catapultId]`. A missing entry means the aircraft cannot reach that catapult.
    */
   readonly taxiTimes: Readonly<Record<string, Readonly<Record<string, Seconds>>>>;
+  /**
+   * Per aircraft, the aircraft parked in front of it that must taxi out first (from
+   * {@link blockingAircraft}); one blocked by an aircraft not in the list cannot be placed.
+   */
+  readonly clearBefore?: Readonly<Record<string, readonly string[]>>;
 }
 
 export interface UnplacedAircraft {
   readonly aircraftId: string;
-  readonly reason: 'no_catapult_reachable';
+  readonly reason: 'no_catapult_reachable' | 'spot_blocked';
+  /** For `spot_blocked`: the aircraft in front, outside the cycle or unplaced themselves, that must move. */
+  readonly mustMove?: readonly string[];
 }
 
 export interface LineupSuggestion {
@@ -61,11 +69,15 @@ export interface LineupSuggestion {
 /** Index-based view of the problem for the search. */
 interface SearchSpace {
   readonly earliest: number;
+  /** When taxiing starts: arrivals are this plus the taxi time. */
+  readonly taxiStart: number;
   readonly pairGapMs: number;
   readonly catapults: readonly SchedulerCatapult[];
   /** arrival[aircraft][catapult], epoch ms; +Infinity when unreachable. */
   readonly arrival: readonly Float64Array[];
   readonly tier: readonly number[];
+  /** Per aircraft, the aircraft (indices) that must leave their spots before it can taxi out; none when undefined. */
+  readonly clearAfter: readonly (readonly number[] | undefined)[] | undefined;
   /** Evaluations spent so far, so the search stays within its budget. */
   readonly evaluations: { count: number };
 }
@@ -73,13 +85,18 @@ interface SearchSpace {
 type Lanes = number[][];
 
 interface Score {
+  /** Aircraft left waiting for one in front that never goes before them: no lineup the handler can use. */
+  readonly stranded: number;
   readonly lastLaunch: number;
   readonly totalTime: number;
 }
 
-// Finishing soonest comes first; among equal finishes the lineup whose launches come earlier overall.
+// No aircraft stranded comes first; then finishing soonest; among equal finishes the lineup whose
+// launches come earlier overall.
 const isBetter = (a: Score, b: Score): boolean =>
-  a.lastLaunch < b.lastLaunch || (a.lastLaunch === b.lastLaunch && a.totalTime < b.totalTime);
+  a.stranded < b.stranded ||
+  (a.stranded === b.stranded &&
+    (a.lastLaunch < b.lastLaunch || (a.lastLaunch === b.lastLaunch && a.totalTime < b.totalTime)));
 
 // Limits of the search, set against the exhaustive optimum on 2,200 random cycles of up to 8 aircraft
 // (as in lineup-suggestion-optimum.spec.ts): with them the worst cycle finished 3.1% late and all but
@@ -106,16 +123,23 @@ function evaluate(space: SearchSpace, lanes: Lanes): Score {
     notBefore,
     tier: space.tier,
     fixed: [],
+    taxiStart: space.taxiStart,
+    clearAfter: space.clearAfter,
   });
+  let stranded = 0;
   let lastLaunch = space.earliest;
   let totalTime = 0;
   for (const lane of lanes) {
     for (const aircraft of lane) {
+      if (Number.isNaN(times[aircraft])) {
+        stranded += 1;
+        continue;
+      }
       lastLaunch = Math.max(lastLaunch, times[aircraft]);
       totalTime += times[aircraft] - space.earliest;
     }
   }
-  return { lastLaunch, totalTime };
+  return { stranded, lastLaunch, totalTime };
 }
 
 const fitsAt = (space: SearchSpace, lane: readonly number[], position: number, tier: number): boolean =>
@@ -125,10 +149,27 @@ const fitsAt = (space: SearchSpace, lane: readonly number[], position: number, t
 const inOrderAround = (space: SearchSpace, lane: readonly number[], position: number): boolean =>
   fitsAt(space, lane.slice(0, position).concat(lane.slice(position + 1)), position, space.tier[lane[position]]);
 
-/** Greedy start: in the given order (tiers first), each aircraft goes to the end of the lane that scores best. */
+/** How many aircraft stand in front of one in its row, down to the row's front. */
+function rowDepth(space: SearchSpace): number[] {
+  const depth = space.tier.map(() => -1);
+  const of = (aircraft: number, guard: number): number => {
+    if (depth[aircraft] < 0) {
+      const ahead = space.clearAfter?.[aircraft] ?? [];
+      depth[aircraft] = guard > depth.length ? 0 : Math.max(0, ...ahead.map((front) => of(front, guard + 1) + 1));
+    }
+    return depth[aircraft];
+  };
+  return depth.map((_, aircraft) => of(aircraft, 0));
+}
+
+/**
+ * Greedy start: in the given order (tiers first, then an aircraft before those parked behind it), each
+ * aircraft goes to the end of the lane that scores best.
+ */
 function construct(space: SearchSpace, order: readonly number[]): Lanes {
   const lanes: Lanes = space.catapults.map(() => []);
-  for (const aircraft of [...order].sort((a, b) => space.tier[a] - space.tier[b])) {
+  const depth = rowDepth(space);
+  for (const aircraft of [...order].sort((a, b) => space.tier[a] - space.tier[b] || depth[a] - depth[b])) {
     let best: { lane: number; score: Score } | null = null;
     for (let catapult = 0; catapult < lanes.length; catapult += 1) {
       if (!Number.isFinite(space.arrival[aircraft][catapult])) continue;
@@ -303,10 +344,10 @@ export function suggestLineup(input: SuggestionInput): LineupSuggestion {
   const open = orderedCatapults(input.catapults).filter(
     (catapult) => catapultClosedReason(catapult, input.landingAreaInUse) === null,
   );
-  const ids = new Set<string>();
+  const listed = new Set<string>();
   for (const aircraft of input.aircraft) {
-    if (ids.has(aircraft.id)) throw new LaunchMathInputError(`Aircraft ${aircraft.id} is listed twice`);
-    ids.add(aircraft.id);
+    if (listed.has(aircraft.id)) throw new LaunchMathInputError(`Aircraft ${aircraft.id} is listed twice`);
+    listed.add(aircraft.id);
   }
   const arrivalOf = (aircraftId: string): Float64Array =>
     Float64Array.from(open, (catapult) => {
@@ -315,16 +356,37 @@ export function suggestLineup(input: SuggestionInput): LineupSuggestion {
       requireNonNegative(taxi, `Taxi time of ${aircraftId} to catapult ${catapult.id} (s)`);
       return input.cycleStart + secondsToMilliseconds(taxi);
     });
-  const arrival = input.aircraft.map((aircraft) => arrivalOf(aircraft.id));
+  const ids = input.aircraft.map((aircraft) => aircraft.id);
+  const indexOf = new Map(ids.map((id, index) => [id, index]));
+  const reachable = input.aircraft.map((aircraft) => arrivalOf(aircraft.id));
+  const blocked = blockedOutright(input, (front) => {
+    const index = indexOf.get(front);
+    return index === undefined || !reachable[index].some(Number.isFinite);
+  });
+  const arrival = input.aircraft.map((aircraft, index) =>
+    blocked.has(aircraft.id) ? Float64Array.from(open, () => Number.POSITIVE_INFINITY) : reachable[index],
+  );
   const space: SearchSpace = {
     earliest,
+    taxiStart: input.cycleStart,
+    // Left out when no aircraft waits on another, so the search's inner loop skips the rule entirely.
+    clearAfter:
+      input.clearBefore === undefined || Object.keys(input.clearBefore).length === 0
+        ? undefined
+        : ids.map((id) =>
+            blocked.has(id) ? undefined : input.clearBefore?.[id]?.map((front) => indexOf.get(front) ?? -1),
+          ),
     pairGapMs: secondsToMilliseconds(input.pairMinimumGap),
     catapults: open.map((catapult) => ({
       resetMs: secondsToMilliseconds(catapult.resetInterval),
       group: catapult.pairId,
     })),
     arrival,
-    tier: input.aircraft.map((aircraft) => priorityTier(aircraft.priority)),
+    tier: clearingTiers(
+      ids,
+      input.aircraft.map((aircraft) => priorityTier(aircraft.priority)),
+      input.clearBefore,
+    ),
     evaluations: { count: 0 },
   };
   const placeable = input.aircraft.flatMap((_, index) => (arrival[index].some(Number.isFinite) ? [index] : []));
@@ -351,8 +413,33 @@ export function suggestLineup(input: SuggestionInput): LineupSuggestion {
     notBefore,
     priorities,
     projection: projectLaunchTimes({ ...input, lanes, notBefore, priorities }),
-    unplaced: input.aircraft
-      .filter((_, index) => !placeable.includes(index))
-      .map((aircraft) => ({ aircraftId: aircraft.id, reason: 'no_catapult_reachable' as const })),
+    unplaced: input.aircraft.flatMap((aircraft, index): UnplacedAircraft[] => {
+      if (placeable.includes(index)) return [];
+      const mustMove = reachable[index].some(Number.isFinite) ? blocked.get(aircraft.id) : undefined;
+      return mustMove === undefined
+        ? [{ aircraftId: aircraft.id, reason: 'no_catapult_reachable' }]
+        : [{ aircraftId: aircraft.id, reason: 'spot_blocked', mustMove }];
+    }),
   };
+}
+
+/**
+ * Aircraft that cannot taxi out whatever the lineup: parked behind an aircraft that cannot go (outside
+ * the cycle, or reaching no open catapult), or behind one blocked itself; each with the aircraft in
+ * front that must move.
+ */
+function blockedOutright(input: SuggestionInput, cannotGo: (aircraftId: string) => boolean): Map<string, string[]> {
+  const blocked = new Map<string, string[]>();
+  for (let changed = true; changed;) {
+    changed = false;
+    for (const aircraft of input.aircraft) {
+      if (blocked.has(aircraft.id)) continue;
+      const stuck = (input.clearBefore?.[aircraft.id] ?? []).filter((front) => cannotGo(front) || blocked.has(front));
+      if (stuck.length > 0) {
+        blocked.set(aircraft.id, stuck);
+        changed = true;
+      }
+    }
+  }
+  return blocked;
 }

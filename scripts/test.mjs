@@ -68,6 +68,8 @@ if (failures.length === 0) {
   stage('Type-check', pnpm, ['-r', 'typecheck']);
   stage('Lint', pnpm, ['lint']);
   stage('Format', pnpm, ['format:check']);
+  // The OpenAPI document the app serves, linted by Spectral (spectral:oas and apps/api/.spectral.yaml).
+  stage('API document', pnpm, ['--filter', '@catline/api', 'lint:api-document']);
   for (const script of testScripts) {
     for (const pkg of workspacePackages().filter((p) => p.scripts[script])) {
       const file = path.join(

@@ -1,10 +1,10 @@
 import { ValidationPipe, type INestApplication } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import type { NestExpressApplication, NestExpressBodyParserOptionsFor } from '@nestjs/platform-express';
-import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
 import cookieParser from 'cookie-parser';
 import helmet from 'helmet';
 import { ApiExceptionFilter } from './common/filters/api-exception.filter.js';
+import { serveApiDocument } from './common/openapi/api-document.js';
 import { refuseDeepJson } from './common/validation/json-depth.js';
 import { StrictIdPipe } from './common/validation/strict-id.pipe.js';
 import { type Environment, servedOverHttps, trustedProxies, webOrigins } from './config/environment.js';
@@ -45,9 +45,5 @@ export function configureApp(app: INestApplication): void {
   );
   app.useGlobalFilters(new ApiExceptionFilter());
   app.enableShutdownHooks();
-  const document = SwaggerModule.createDocument(
-    app,
-    new DocumentBuilder().setTitle('Catline API').setVersion('1').addBearerAuth().build(),
-  );
-  SwaggerModule.setup('api/docs', app, document);
+  serveApiDocument(app, config.get('APP_URL'));
 }

@@ -32,6 +32,9 @@ describe('cycles', () => {
     const response = await deck.call(AIR_OPS, 'post', '/api/cycles', body);
     expect(response.status).toBe(201);
     expect(response.body).toMatchObject({ ...body, state: 'planning', version: 0, slotCount: 0, launchedCount: 0 });
+    expect(response.headers.location).toBe(`/api/cycles/${response.body.id}`);
+    const located = await deck.call(AIR_OPS, 'get', response.headers.location);
+    expect(located.body).toEqual(response.body);
     const again = await deck.call(AIR_OPS, 'post', '/api/cycles', body);
     expect(again.status).toBe(409);
     expect(again.body).toMatchObject({

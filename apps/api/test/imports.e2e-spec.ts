@@ -183,7 +183,7 @@ describe('air plan and launch table import', () => {
       ],
     ])('reports %s line by line and keeps it as rejected', async (_name, content, problems) => {
       const response = await preview(cycle.id, { content });
-      expect(response.status).toBe(201);
+      expect(response.status).toBe(200);
       const body = response.body as AirPlanPreview;
       expect(body.result).toBe('rejected');
       expect(body.problems).toEqual(problems);
@@ -276,7 +276,7 @@ describe('air plan and launch table import', () => {
       fileName: 'day-plan.csv',
       contentType: 'application/vnd.ms-excel',
     });
-    expect(response.status).toBe(201);
+    expect(response.status).toBe(200);
     const body = response.body as AirPlanPreview;
     expect(body).toMatchObject({ fileName: 'day-plan.csv', result: 'accepted', problems: [] });
     expect(body.rows).toEqual([
@@ -421,7 +421,7 @@ describe('air plan and launch table import', () => {
       const response = await previewTable(
         'gross_weight_lb,min_launch_airspeed_kt\r\n25000,115\r\n30000,122\r\n30000,124\r\n',
       );
-      expect(response.status).toBe(201);
+      expect(response.status).toBe(200);
       expect(response.body as LaunchTablePreview).toMatchObject({
         result: 'rejected',
         problems: [

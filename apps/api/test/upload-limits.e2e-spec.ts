@@ -59,7 +59,7 @@ describe('upload limits', () => {
     // 200 lines, each with a fuel figure in words and a flag that is neither yes nor no: 400 problems.
     const lines = Array.from({ length: 200 }, (_, i) => `ZZ${i},,Strike,lots,,45000,maybe,no,no`);
     const response = await preview([HEADER, ...lines].join('\n'));
-    expect(response.status).toBe(201);
+    expect(response.status).toBe(200);
     const body = response.body as AirPlanPreview;
     expect(body.result).toBe('rejected');
     expect(body.problemCount).toBe(400);
@@ -71,7 +71,7 @@ describe('upload limits', () => {
   it('cuts a long cell in a problem to 100 characters', async () => {
     const long = 'M'.repeat(50_000);
     const response = await preview([HEADER, `ZZ1,,${long},1000,,45000,no,no,no`].join('\n'));
-    expect(response.status).toBe(201);
+    expect(response.status).toBe(200);
     const problem = (response.body as AirPlanPreview).problems.find((candidate) => candidate.column === 'mission');
     expect(problem?.value).toBe(`${'M'.repeat(100)}…`);
     expect(JSON.stringify(response.body).length).toBeLessThan(5_000);

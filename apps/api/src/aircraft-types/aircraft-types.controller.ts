@@ -12,47 +12,67 @@ import {
   Post,
   Put,
 } from '@nestjs/common';
-import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import { ApiTags } from '@nestjs/swagger';
 import { Roles } from '../common/decorators/roles.decorator.js';
 import { AircraftTypesService } from './aircraft-types.service.js';
 import { CreateAircraftTypeDto } from './dto/create-aircraft-type.dto.js';
 import { LaunchTableDto } from './dto/launch-table.dto.js';
 import { UpdateAircraftTypeDto } from './dto/update-aircraft-type.dto.js';
+import { ApiDoc } from '../common/openapi/api-doc.decorator.js';
+import { Created } from '../common/openapi/created.decorator.js';
+import { AircraftTypeViewDto } from '../common/openapi/views/fleet.view.js';
 
 @ApiTags('aircraft-types')
-@ApiBearerAuth()
 @Controller('aircraft-types')
 export class AircraftTypesController {
   constructor(private readonly types: AircraftTypesService) {}
 
+  @ApiDoc('List the aircraft types', { response: [AircraftTypeViewDto] })
   @Get()
   list(): Promise<AircraftTypeView[]> {
     return this.types.list();
   }
 
+  @ApiDoc('Read one aircraft type', { response: AircraftTypeViewDto, refuses: { 404: ['aircraft_type_not_found'] } })
   @Get(':id')
   get(@Param('id', ParseIntPipe) id: number): Promise<AircraftTypeView> {
     return this.types.get(id);
   }
 
+  @ApiDoc('Add an aircraft type', {
+    response: AircraftTypeViewDto,
+    refuses: { 400: ['invalid_launch_data'], 409: ['designation_taken'] },
+  })
   @Roles('admin')
   @Post()
+  @Created((created: AircraftTypeView) => `/api/aircraft-types/${created.id}`)
   create(@Body() body: CreateAircraftTypeDto): Promise<AircraftTypeView> {
     return this.types.create(body);
   }
 
+  @ApiDoc('Change an aircraft type', {
+    response: AircraftTypeViewDto,
+    refuses: { 400: ['invalid_launch_data'], 404: ['aircraft_type_not_found'], 409: ['designation_taken'] },
+  })
   @Roles('admin')
   @Patch(':id')
   update(@Param('id', ParseIntPipe) id: number, @Body() body: UpdateAircraftTypeDto): Promise<AircraftTypeView> {
     return this.types.update(id, body);
   }
 
+  @ApiDoc('Replace the launch table of an aircraft type', {
+    response: AircraftTypeViewDto,
+    refuses: { 400: ['invalid_launch_data'], 404: ['aircraft_type_not_found'] },
+  })
   @Roles('admin')
   @Put(':id/launch-table')
   replaceLaunchTable(@Param('id', ParseIntPipe) id: number, @Body() body: LaunchTableDto): Promise<AircraftTypeView> {
     return this.types.replaceLaunchTable(id, body.rows);
   }
 
+  @ApiDoc('Remove an aircraft type', {
+    refuses: { 404: ['aircraft_type_not_found'], 409: ['aircraft_type_in_use'] },
+  })
   @Roles('admin')
   @Delete(':id')
   @HttpCode(HttpStatus.NO_CONTENT)

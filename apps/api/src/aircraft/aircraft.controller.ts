@@ -1,34 +1,47 @@
 import type { AircraftView } from '@catline/contracts';
 import { Body, Controller, Delete, Get, HttpCode, HttpStatus, Param, ParseIntPipe, Patch, Post } from '@nestjs/common';
-import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import { ApiTags } from '@nestjs/swagger';
 import { Roles } from '../common/decorators/roles.decorator.js';
 import { AircraftService } from './aircraft.service.js';
 import { CreateAircraftDto } from './dto/create-aircraft.dto.js';
 import { UpdateAircraftDto } from './dto/update-aircraft.dto.js';
+import { ApiDoc } from '../common/openapi/api-doc.decorator.js';
+import { Created } from '../common/openapi/created.decorator.js';
+import { AircraftViewDto } from '../common/openapi/views/fleet.view.js';
 
 @ApiTags('aircraft')
-@ApiBearerAuth()
 @Controller('aircraft')
 export class AircraftController {
   constructor(private readonly aircraft: AircraftService) {}
 
+  @ApiDoc('List the aircraft', { response: [AircraftViewDto] })
   @Get()
   list(): Promise<AircraftView[]> {
     return this.aircraft.list();
   }
 
+  @ApiDoc('Add an aircraft', {
+    response: AircraftViewDto,
+    refuses: { 400: ['unknown_reference'], 409: ['side_number_taken'] },
+  })
   @Roles('admin')
   @Post()
+  @Created((created: AircraftView) => `/api/aircraft/${created.id}`)
   create(@Body() body: CreateAircraftDto): Promise<AircraftView> {
     return this.aircraft.create(body);
   }
 
+  @ApiDoc('Change an aircraft', {
+    response: AircraftViewDto,
+    refuses: { 400: ['unknown_reference'], 404: ['aircraft_not_found'], 409: ['side_number_taken'] },
+  })
   @Roles('admin')
   @Patch(':id')
   update(@Param('id', ParseIntPipe) id: number, @Body() body: UpdateAircraftDto): Promise<AircraftView> {
     return this.aircraft.update(id, body);
   }
 
+  @ApiDoc('Remove an aircraft', { refuses: { 404: ['aircraft_not_found'], 409: ['aircraft_in_use'] } })
   @Roles('admin')
   @Delete(':id')
   @HttpCode(HttpStatus.NO_CONTENT)

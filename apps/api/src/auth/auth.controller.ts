@@ -1,7 +1,7 @@
 import { REFRESH_HEADER, type SessionResponse, type SessionUser } from '@catline/contracts';
 import { Body, Controller, Get, Header, HttpCode, HttpStatus, Post, Req, Res } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
-import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import { ApiTags } from '@nestjs/swagger';
 import type { Request, Response } from 'express';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
@@ -13,6 +13,8 @@ import { ChangePasswordDto } from './dto/change-password.dto.js';
 import { LoginDto } from './dto/login.dto.js';
 import { clearRefreshCookie, readRefreshCookie, setRefreshCookie } from './refresh-cookie.js';
 import { toSessionUser } from './session.mapper.js';
+import { ApiDoc } from '../common/openapi/api-doc.decorator.js';
+import { SessionResponseDto, SessionUserDto } from '../common/openapi/views/auth.view.js';
 
 // Answers holding an access token: no browser or proxy cache may keep them.
 const NO_STORE = 'no-store';
@@ -29,6 +31,11 @@ export class AuthController {
     this.origins = webOrigins({ WEB_ORIGINS: config.get('WEB_ORIGINS') });
   }
 
+  @ApiDoc('Sign in', {
+    response: SessionResponseDto,
+    description: 'Answers an access token and sets the refresh cookie.',
+    refuses: { 401: ['invalid_credentials'], 429: ['too_many_attempts'] },
+  })
   @Public()
   @Post('login')
   @HttpCode(HttpStatus.OK)
@@ -41,6 +48,11 @@ export class AuthController {
     return this.answer(await this.auth.login(body.email, body.password, request.ip ?? ''), request, response);
   }
 
+  @ApiDoc('Renew the session', {
+    response: SessionResponseDto,
+    description: `Spends the refresh cookie for a new access token; only from a Catline page, with the ${REFRESH_HEADER} header.`,
+    refuses: { 401: ['session_invalid', 'session_ended'], 403: ['refresh_refused'] },
+  })
   @Public()
   @Post('refresh')
   @HttpCode(HttpStatus.OK)
@@ -61,7 +73,7 @@ export class AuthController {
     }
   }
 
-  @ApiBearerAuth()
+  @ApiDoc('Sign out', { description: 'Ends this session and clears the refresh cookie.' })
   @Post('logout')
   @HttpCode(HttpStatus.NO_CONTENT)
   async logout(
@@ -73,14 +85,17 @@ export class AuthController {
     clearRefreshCookie(request, response);
   }
 
-  @ApiBearerAuth()
+  @ApiDoc('Read the signed-in person', { response: SessionUserDto })
   @Get('me')
   me(@CurrentUser() user: AuthenticatedUser): SessionUser {
     return toSessionUser(user);
   }
 
   /** Other sessions end; this one gets a fresh refresh cookie, so POST /auth/refresh continues it. */
-  @ApiBearerAuth()
+  @ApiDoc('Change your password', {
+    description: 'Ends your other sessions; this one continues with a fresh refresh cookie.',
+    refuses: { 400: ['wrong_password', 'password_unchanged'] },
+  })
   @Post('password')
   @HttpCode(HttpStatus.NO_CONTENT)
   async changePassword(

@@ -1,9 +1,13 @@
 import type { CycleView, LineupCommandResult } from '@catline/contracts';
 import { Body, Controller, Get, HttpCode, HttpStatus, Param, ParseIntPipe, Patch, Post } from '@nestjs/common';
-import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import { ApiTags } from '@nestjs/swagger';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { Roles } from '../common/decorators/roles.decorator.js';
+import { ApiDoc } from '../common/openapi/api-doc.decorator.js';
+import { Created } from '../common/openapi/created.decorator.js';
+import { CycleViewDto } from '../common/openapi/views/cycles.view.js';
+import { LineupCommandResultDto } from '../common/openapi/views/lineup.view.js';
 import { actorOf } from '../cycle-changes/cycle-change.service.js';
 import { CycleCommandsService } from './cycle-commands.service.js';
 import { CyclesService } from './cycles.service.js';
@@ -13,7 +17,6 @@ import { CreateCycleDto } from './dto/create-cycle.dto.js';
 import { UpdateCycleConditionsDto } from './dto/update-cycle-conditions.dto.js';
 
 @ApiTags('cycles')
-@ApiBearerAuth()
 @Controller('cycles')
 export class CyclesController {
   constructor(
@@ -21,22 +24,34 @@ export class CyclesController {
     private readonly commands: CycleCommandsService,
   ) {}
 
+  @ApiDoc('List the cycles', { response: [CycleViewDto] })
   @Get()
   list(): Promise<CycleView[]> {
     return this.cycles.list();
   }
 
+  @ApiDoc('Read one cycle', { response: CycleViewDto, refuses: { 404: ['not_found'] } })
   @Get(':id')
   get(@Param('id', ParseIntPipe) id: number): Promise<CycleView> {
     return this.cycles.get(id);
   }
 
+  @ApiDoc('Create a cycle', {
+    response: CycleViewDto,
+    refuses: { 400: ['invalid_window'], 404: ['not_found'], 409: ['cycle_number_taken'] },
+  })
   @Roles('air_operations')
   @Post()
+  @Created((cycle: CycleView) => `/api/cycles/${cycle.id}`)
   create(@Body() body: CreateCycleDto): Promise<CycleView> {
     return this.cycles.create(body);
   }
 
+  @ApiDoc('Change the conditions of a cycle', {
+    response: LineupCommandResultDto,
+    description: 'Every launch figure of the lineup is computed again under the new conditions.',
+    refuses: { 400: ['invalid_window'], 404: ['not_found'], 409: ['stale_basis', 'cycle_closed', 'no_change'] },
+  })
   @Roles('air_operations')
   @Patch(':id/conditions')
   updateConditions(
@@ -47,6 +62,10 @@ export class CyclesController {
     return this.commands.updateConditions(id, actorOf(user), body);
   }
 
+  @ApiDoc('Start executing a cycle', {
+    response: LineupCommandResultDto,
+    refuses: { 404: ['not_found'], 409: ['stale_basis', 'wrong_state'] },
+  })
   @Roles('air_operations')
   @Post(':id/start')
   @HttpCode(HttpStatus.OK)
@@ -58,6 +77,11 @@ export class CyclesController {
     return this.commands.start(id, actorOf(user), body.basisVersion);
   }
 
+  @ApiDoc('Close a cycle', {
+    response: LineupCommandResultDto,
+    description: 'Aircraft not launched are scratched and the squadrons are mailed their summaries.',
+    refuses: { 404: ['not_found'], 409: ['stale_basis', 'wrong_state'] },
+  })
   @Roles('air_operations')
   @Post(':id/close')
   @HttpCode(HttpStatus.OK)
@@ -69,6 +93,21 @@ export class CyclesController {
     return this.commands.close(id, actorOf(user), body.basisVersion);
   }
 
+  @ApiDoc('Add an aircraft to a cycle', {
+    response: LineupCommandResultDto,
+    description: 'The aircraft joins the deck pool of the cycle.',
+    refuses: {
+      400: ['invalid_pilot'],
+      404: ['not_found'],
+      409: [
+        'stale_basis',
+        'cycle_closed',
+        'aircraft_already_in_cycle',
+        'aircraft_unserviceable',
+        'pilot_already_assigned',
+      ],
+    },
+  })
   @Roles('air_operations')
   @Post(':id/slots')
   @HttpCode(HttpStatus.OK)

@@ -11,7 +11,7 @@ import {
   Post,
   UploadedFile,
 } from '@nestjs/common';
-import { ApiBearerAuth, ApiProduces, ApiTags } from '@nestjs/swagger';
+import { ApiTags } from '@nestjs/swagger';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { Roles } from '../common/decorators/roles.decorator.js';
@@ -20,25 +20,39 @@ import { AIR_PLAN_TEMPLATE } from './air-plan-layout.js';
 import { AirPlanImports } from './air-plan-imports.service.js';
 import { CsvUpload } from './csv-upload.decorator.js';
 import type { UploadedCsv } from './csv-upload.js';
+import { ApiDoc } from '../common/openapi/api-doc.decorator.js';
+import { LineupCommandResultDto } from '../common/openapi/views/lineup.view.js';
+import { AirPlanPreviewDto } from '../common/openapi/views/imports.view.js';
 
 @ApiTags('imports')
-@ApiBearerAuth()
 @Controller()
 export class AirPlanController {
   constructor(private readonly imports: AirPlanImports) {}
 
   /** The air plan layout: the header line and one example line. */
+  @ApiDoc('Download the air plan template', { response: 'csv' })
   @Roles('air_operations')
   @Get('air-plan/template')
-  @ApiProduces('text/csv')
   @Header('Content-Type', 'text/csv; charset=utf-8')
   @Header('Content-Disposition', 'attachment; filename="air-plan-template.csv"')
   template(): string {
     return AIR_PLAN_TEMPLATE;
   }
 
+  @ApiDoc('Preview an air plan', {
+    response: AirPlanPreviewDto,
+    description: 'Reads the CSV and lists every problem; nothing is imported until the confirm.',
+    refuses: {
+      400: ['file_missing', 'header_too_wide'],
+      404: ['target_not_found'],
+      409: ['cycle_closed'],
+      413: ['file_too_large'],
+      415: ['not_csv'],
+    },
+  })
   @Roles('air_operations')
   @Post('cycles/:id/air-plan/preview')
+  @HttpCode(HttpStatus.OK)
   @CsvUpload()
   preview(
     @Param('id', ParseIntPipe) id: number,
@@ -48,6 +62,14 @@ export class AirPlanController {
     return this.imports.preview(id, file, user);
   }
 
+  @ApiDoc('Import a previewed air plan', {
+    response: LineupCommandResultDto,
+    description: 'Adds its sorties to the deck pool in one change.',
+    refuses: {
+      404: ['target_not_found', 'upload_not_found'],
+      409: ['stale_basis', 'cycle_closed', 'upload_not_importable', 'import_out_of_date'],
+    },
+  })
   @Roles('air_operations')
   @Post('cycles/:id/air-plan/imports/:uploadId/confirm')
   @HttpCode(HttpStatus.OK)

@@ -1,12 +1,13 @@
 import {
   CATAPULT_ROLES,
+  LAUNCH_GATE_CODES,
   type LineupChange,
   type LineupCommandResult,
   type LineupSnapshot,
   type SuggestedLineup,
 } from '@catline/contracts';
 import { Body, Controller, Get, HttpCode, HttpStatus, Param, ParseIntPipe, Post, Query } from '@nestjs/common';
-import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import { ApiTags } from '@nestjs/swagger';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { Roles } from '../common/decorators/roles.decorator.js';
@@ -27,10 +28,16 @@ import { ReadinessService } from './readiness.service.js';
 import { SuggestionService } from './suggestion.service.js';
 import { WaiversService } from './waivers.service.js';
 import { WaiveGateDto } from './dto/waive-gate.dto.js';
+import { ApiDoc } from '../common/openapi/api-doc.decorator.js';
+import {
+  LineupChangeDto,
+  LineupCommandResultDto,
+  LineupSnapshotDto,
+  SuggestedLineupDto,
+} from '../common/openapi/views/lineup.view.js';
 
 // Every command answers 200 with the accepted change (a repeated launch answers with the original one).
 @ApiTags('lineup')
-@ApiBearerAuth()
 @Controller('cycles/:cycleId/lineup')
 export class LineupController {
   constructor(
@@ -42,11 +49,20 @@ export class LineupController {
     private readonly waivers: WaiversService,
   ) {}
 
+  @ApiDoc('Read the lineup of a cycle', {
+    response: LineupSnapshotDto,
+    refuses: { 404: ['not_found'], 422: ['launch_data_invalid'] },
+  })
   @Get()
   snapshot(@Param('cycleId', ParseIntPipe) cycleId: number): Promise<LineupSnapshot> {
     return this.snapshots.snapshot(cycleId);
   }
 
+  @ApiDoc('Read the changes after a version', {
+    response: [LineupChangeDto],
+    description: 'How a client that missed broadcasts catches up, in version order.',
+    refuses: { 404: ['not_found'] },
+  })
   @Get('changes')
   changesSince(
     @Param('cycleId', ParseIntPipe) cycleId: number,
@@ -55,12 +71,27 @@ export class LineupController {
     return this.changes.since(cycleId, query.since);
   }
 
+  @ApiDoc('Suggest a lineup', {
+    response: SuggestedLineupDto,
+    description: 'A lineup that launches everyone as early as the catapults allow; nothing is changed.',
+    refuses: { 404: ['not_found'], 409: ['cycle_closed'], 422: ['launch_data_invalid'] },
+  })
   @Roles('handler')
   @Get('suggestion')
   suggestion(@Param('cycleId', ParseIntPipe) cycleId: number): Promise<SuggestedLineup> {
     return this.suggestions.suggest(cycleId);
   }
 
+  @ApiDoc('Move a slot', {
+    response: LineupCommandResultDto,
+    description: 'Into a lane at a place, or back to the deck pool.',
+    refuses: {
+      400: ['invalid_lineup'],
+      404: ['not_found'],
+      409: ['stale_basis', 'cycle_closed', 'slot_not_movable', 'no_change'],
+      422: ['launch_data_invalid'],
+    },
+  })
   @Roles('handler')
   @Post('moves')
   @HttpCode(HttpStatus.OK)
@@ -72,6 +103,15 @@ export class LineupController {
     return this.commands.move(cycleId, actorOf(user), body);
   }
 
+  @ApiDoc('Apply a suggested lineup', {
+    response: LineupCommandResultDto,
+    refuses: {
+      400: ['invalid_lineup'],
+      404: ['not_found'],
+      409: ['stale_basis', 'cycle_closed', 'slot_not_movable', 'no_change'],
+      422: ['launch_data_invalid'],
+    },
+  })
   @Roles('handler')
   @Post('suggestion/apply')
   @HttpCode(HttpStatus.OK)
@@ -83,6 +123,15 @@ export class LineupController {
     return this.commands.applySuggestion(cycleId, actorOf(user), body);
   }
 
+  @ApiDoc('Mark an aircraft down', {
+    response: LineupCommandResultDto,
+    description: 'A spare of the cycle may take its place.',
+    refuses: {
+      404: ['not_found'],
+      409: ['stale_basis', 'cycle_closed', 'slot_not_movable', 'spare_unavailable'],
+      422: ['launch_data_invalid'],
+    },
+  })
   @Roles('handler')
   @Post('slots/:slotId/down')
   @HttpCode(HttpStatus.OK)
@@ -95,6 +144,10 @@ export class LineupController {
     return this.commands.markDown(cycleId, actorOf(user), slotId, body);
   }
 
+  @ApiDoc('Set a catapult up or down', {
+    response: LineupCommandResultDto,
+    refuses: { 404: ['not_found'], 409: ['stale_basis', 'cycle_closed', 'no_change'], 422: ['launch_data_invalid'] },
+  })
   @Roles('handler')
   @Post('catapults/:catapultId/status')
   @HttpCode(HttpStatus.OK)
@@ -107,6 +160,14 @@ export class LineupController {
     return this.commands.setCatapultStatus(cycleId, actorOf(user), catapultId, body);
   }
 
+  @ApiDoc('Take the next readiness step', {
+    response: LineupCommandResultDto,
+    refuses: {
+      403: ['not_your_catapult'],
+      404: ['not_found'],
+      409: ['stale_basis', 'cycle_not_executing', 'not_current_aircraft', 'wrong_step', 'weight_not_agreed'],
+    },
+  })
   @Roles(...CATAPULT_ROLES)
   @Post('slots/:slotId/advance')
   @HttpCode(HttpStatus.OK)
@@ -119,6 +180,14 @@ export class LineupController {
     return this.readiness.advance(cycleId, user, slotId, body);
   }
 
+  @ApiDoc('Suspend the aircraft on the catapult', {
+    response: LineupCommandResultDto,
+    refuses: {
+      403: ['not_your_catapult'],
+      404: ['not_found'],
+      409: ['stale_basis', 'cycle_not_executing', 'not_current_aircraft', 'wrong_step'],
+    },
+  })
   @Roles(...CATAPULT_ROLES)
   @Post('slots/:slotId/suspend')
   @HttpCode(HttpStatus.OK)
@@ -131,6 +200,24 @@ export class LineupController {
     return this.readiness.suspend(cycleId, user, slotId, body);
   }
 
+  @ApiDoc('Launch the aircraft on the catapult', {
+    response: LineupCommandResultDto,
+    description: 'A repeat with the same idempotency key answers the original change.',
+    refuses: {
+      403: ['not_your_catapult'],
+      404: ['not_found'],
+      // The launch gates refuse with the first one closed.
+      409: [
+        'stale_basis',
+        'not_current_aircraft',
+        'wrong_step',
+        ...LAUNCH_GATE_CODES,
+        'already_launched',
+        'idempotency_key_reused',
+      ],
+      422: ['launch_data_invalid'],
+    },
+  })
   @Roles(...CATAPULT_ROLES)
   @Post('slots/:slotId/launch')
   @HttpCode(HttpStatus.OK)
@@ -144,6 +231,15 @@ export class LineupController {
   }
 
   /** Soft gates only (the DTO refuses a hard one); recorded on the slot and with the launch. */
+  @ApiDoc('Waive a launch gate of a slot', {
+    response: LineupCommandResultDto,
+    description: 'A soft gate only, with a reason; the waiver is kept with the slot and its launch.',
+    refuses: {
+      404: ['not_found'],
+      409: ['stale_basis', 'cycle_closed', 'nothing_to_waive'],
+      422: ['launch_data_invalid'],
+    },
+  })
   @Roles('air_boss')
   @Post('slots/:slotId/waivers')
   @HttpCode(HttpStatus.OK)
@@ -156,6 +252,15 @@ export class LineupController {
     return this.waivers.waive(cycleId, user, slotId, body);
   }
 
+  @ApiDoc('Agree the gross weight', {
+    response: LineupCommandResultDto,
+    description: "The pilot's side of the weight check.",
+    refuses: {
+      403: ['not_your_slot'],
+      404: ['not_found'],
+      409: ['stale_basis', 'cycle_not_executing', 'wrong_step', 'weight_mismatch'],
+    },
+  })
   @Roles('pilot')
   @Post('slots/:slotId/weight-ack')
   @HttpCode(HttpStatus.OK)

@@ -6,6 +6,8 @@ import { Public } from '../common/decorators/public.decorator.js';
 import { PasswordResetRequestDto } from './dto/password-reset-request.dto.js';
 import { SetPasswordWithTokenDto } from './dto/set-password-with-token.dto.js';
 import { PasswordLinks } from './password-links.service.js';
+import { ApiDoc } from '../common/openapi/api-doc.decorator.js';
+import { AcceptedResponseDto } from '../common/openapi/views/auth.view.js';
 
 // The same answer for every e-mail, so the route tells nobody who has an account.
 const RESET_ACCEPTED =
@@ -16,6 +18,11 @@ const RESET_ACCEPTED =
 export class PasswordLinksController {
   constructor(private readonly links: PasswordLinks) {}
 
+  @ApiDoc('Ask for a password reset link', {
+    response: AcceptedResponseDto,
+    description: 'Answered the same whether or not the e-mail is known.',
+    refuses: { 429: ['too_many_attempts'] },
+  })
   @Public()
   @Post('password-reset')
   @HttpCode(HttpStatus.ACCEPTED)
@@ -24,6 +31,7 @@ export class PasswordLinksController {
     return { message: RESET_ACCEPTED };
   }
 
+  @ApiDoc('Set a new password with a reset link', { refuses: { 400: ['link_invalid'] } })
   @Public()
   @Post('password-reset/confirm')
   @HttpCode(HttpStatus.NO_CONTENT)
@@ -31,6 +39,7 @@ export class PasswordLinksController {
     return this.links.redeem('reset', body.token, body.newPassword);
   }
 
+  @ApiDoc('Accept an invitation and choose a password', { refuses: { 400: ['link_invalid'] } })
   @Public()
   @Post('invitations/accept')
   @HttpCode(HttpStatus.NO_CONTENT)

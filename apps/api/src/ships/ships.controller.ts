@@ -1,33 +1,45 @@
 import type { CatapultView, ShipView } from '@catline/contracts';
 import { Body, Controller, Get, Param, ParseIntPipe, Patch } from '@nestjs/common';
-import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import { ApiTags } from '@nestjs/swagger';
 import { Roles } from '../common/decorators/roles.decorator.js';
 import { UpdateCatapultDto } from './dto/update-catapult.dto.js';
 import { UpdateShipDto } from './dto/update-ship.dto.js';
 import { ShipsService } from './ships.service.js';
+import { ApiDoc } from '../common/openapi/api-doc.decorator.js';
+import { CatapultViewDto, ShipViewDto } from '../common/openapi/views/fleet.view.js';
 
 @ApiTags('ships')
-@ApiBearerAuth()
 @Controller('ships')
 export class ShipsController {
   constructor(private readonly ships: ShipsService) {}
 
+  @ApiDoc('List the ships', { response: [ShipViewDto] })
   @Get()
   list(): Promise<ShipView[]> {
     return this.ships.list();
   }
 
+  @ApiDoc('Read one ship', { response: ShipViewDto, refuses: { 404: ['ship_not_found'] } })
   @Get(':id')
   get(@Param('id', ParseIntPipe) id: number): Promise<ShipView> {
     return this.ships.get(id);
   }
 
+  @ApiDoc('Change a ship', {
+    response: ShipViewDto,
+    description: 'Its pair gap, profile and deck spots.',
+    refuses: { 400: ['invalid_configuration'], 404: ['ship_not_found'], 409: ['spot_in_use'] },
+  })
   @Roles('admin')
   @Patch(':id')
   update(@Param('id', ParseIntPipe) id: number, @Body() body: UpdateShipDto): Promise<ShipView> {
     return this.ships.update(id, body);
   }
 
+  @ApiDoc('Change a catapult', {
+    response: CatapultViewDto,
+    refuses: { 400: ['invalid_configuration'], 404: ['ship_not_found', 'catapult_not_found'] },
+  })
   @Roles('admin')
   @Patch(':shipId/catapults/:id')
   updateCatapult(

@@ -1,34 +1,44 @@
 import type { SquadronView } from '@catline/contracts';
 import { Body, Controller, Delete, Get, HttpCode, HttpStatus, Param, ParseIntPipe, Patch, Post } from '@nestjs/common';
-import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import { ApiTags } from '@nestjs/swagger';
 import { Roles } from '../common/decorators/roles.decorator.js';
 import { CreateSquadronDto } from './dto/create-squadron.dto.js';
 import { UpdateSquadronDto } from './dto/update-squadron.dto.js';
 import { SquadronsService } from './squadrons.service.js';
+import { ApiDoc } from '../common/openapi/api-doc.decorator.js';
+import { Created } from '../common/openapi/created.decorator.js';
+import { SquadronViewDto } from '../common/openapi/views/fleet.view.js';
 
 @ApiTags('squadrons')
-@ApiBearerAuth()
 @Controller('squadrons')
 export class SquadronsController {
   constructor(private readonly squadrons: SquadronsService) {}
 
+  @ApiDoc('List the squadrons', { response: [SquadronViewDto] })
   @Get()
   list(): Promise<SquadronView[]> {
     return this.squadrons.list();
   }
 
+  @ApiDoc('Add a squadron', { response: SquadronViewDto, refuses: { 409: ['code_taken'] } })
   @Roles('admin')
   @Post()
+  @Created((created: SquadronView) => `/api/squadrons/${created.id}`)
   create(@Body() body: CreateSquadronDto): Promise<SquadronView> {
     return this.squadrons.create(body);
   }
 
+  @ApiDoc('Change a squadron', {
+    response: SquadronViewDto,
+    refuses: { 404: ['squadron_not_found'], 409: ['code_taken'] },
+  })
   @Roles('admin')
   @Patch(':id')
   update(@Param('id', ParseIntPipe) id: number, @Body() body: UpdateSquadronDto): Promise<SquadronView> {
     return this.squadrons.update(id, body);
   }
 
+  @ApiDoc('Remove a squadron', { refuses: { 404: ['squadron_not_found'], 409: ['squadron_in_use'] } })
   @Roles('admin')
   @Delete(':id')
   @HttpCode(HttpStatus.NO_CONTENT)

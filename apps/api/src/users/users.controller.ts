@@ -1,37 +1,52 @@
 import type { AcceptedResponse, UserView } from '@catline/contracts';
 import { Body, Controller, Delete, Get, HttpCode, HttpStatus, Param, ParseIntPipe, Patch, Post } from '@nestjs/common';
-import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import { ApiTags } from '@nestjs/swagger';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { Roles } from '../common/decorators/roles.decorator.js';
 import { CreateUserDto } from './dto/create-user.dto.js';
 import { UpdateUserDto } from './dto/update-user.dto.js';
 import { UsersService } from './users.service.js';
+import { ApiDoc } from '../common/openapi/api-doc.decorator.js';
+import { Created } from '../common/openapi/created.decorator.js';
+import { AcceptedResponseDto } from '../common/openapi/views/auth.view.js';
+import { UserViewDto } from '../common/openapi/views/fleet.view.js';
 
 @ApiTags('users')
-@ApiBearerAuth()
 @Controller('users')
 export class UsersController {
   constructor(private readonly users: UsersService) {}
 
+  @ApiDoc('List the people', { response: [UserViewDto] })
   @Roles('admin')
   @Get()
   list(): Promise<UserView[]> {
     return this.users.list();
   }
 
+  @ApiDoc('List the pilots', { response: [UserViewDto], description: 'The active pilots, to assign to sorties.' })
   @Roles('admin', 'air_operations', 'handler')
   @Get('pilots')
   listPilots(): Promise<UserView[]> {
     return this.users.listPilots();
   }
 
+  @ApiDoc('Add a person', {
+    response: UserViewDto,
+    description: 'Without a password the person is mailed an invitation link.',
+    refuses: { 400: ['invalid_binding', 'unknown_reference'], 409: ['email_taken'] },
+  })
   @Roles('admin')
   @Post()
+  @Created((created: UserView) => `/api/users/${created.id}`)
   create(@Body() body: CreateUserDto): Promise<UserView> {
     return this.users.create(body);
   }
 
+  @ApiDoc('Change a person', {
+    response: UserViewDto,
+    refuses: { 400: ['invalid_binding', 'unknown_reference'], 404: ['user_not_found'], 409: ['self_change'] },
+  })
   @Roles('admin')
   @Patch(':id')
   update(
@@ -43,6 +58,10 @@ export class UsersController {
   }
 
   /** Mails a new invitation link to a person who has not chosen a password yet. */
+  @ApiDoc('Send a person a new invitation', {
+    response: AcceptedResponseDto,
+    refuses: { 404: ['user_not_found'], 409: ['cannot_invite'] },
+  })
   @Roles('admin')
   @Post(':id/invitation')
   @HttpCode(HttpStatus.ACCEPTED)
@@ -51,6 +70,7 @@ export class UsersController {
     return { message: `A new invitation link is on its way to ${email}; earlier links no longer work.` };
   }
 
+  @ApiDoc('Remove a person', { refuses: { 404: ['user_not_found'], 409: ['self_change'] } })
   @Roles('admin')
   @Delete(':id')
   @HttpCode(HttpStatus.NO_CONTENT)

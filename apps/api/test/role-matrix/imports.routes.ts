@@ -32,7 +32,7 @@ async function previewed(
   content: string,
 ): Promise<number> {
   const response = await uploadCsv(context.baseUrl, context.tokenOf(role), path, { content });
-  if (response.status !== 201 || response.body.result !== 'accepted')
+  if (response.status !== 200 || response.body.result !== 'accepted')
     throw new Error(`Preview of ${path} failed: ${JSON.stringify(response.body)}`);
   return response.body.uploadId as number;
 }

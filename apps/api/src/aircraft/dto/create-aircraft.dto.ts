@@ -12,12 +12,12 @@ export class CreateAircraftDto implements CreateAircraftRequest {
   })
   sideNumber: string;
 
-  @ApiProperty()
+  @ApiProperty({ type: 'integer' })
   @IsInt()
   @Min(1)
   typeId: number;
 
-  @ApiProperty()
+  @ApiProperty({ type: 'integer' })
   @IsInt()
   @Min(1)
   squadronId: number;

@@ -11,13 +11,17 @@ import { Trim } from '../../common/validation/trim.decorator.js';
 import { PlainText } from '../../common/validation/plain-text.decorator.js';
 
 export class AddSlotDto implements AddSlotRequest {
-  @ApiProperty({ minimum: 1 })
+  @ApiProperty({ type: 'integer', minimum: 1 })
   @IsInt()
   @Min(1)
   @Max(2_147_483_647)
   aircraftId: number;
 
-  @ApiPropertyOptional({ nullable: true, description: 'The pilot (a person with the pilot role) flying it.' })
+  @ApiPropertyOptional({
+    type: 'integer',
+    nullable: true,
+    description: 'The pilot (a person with the pilot role) flying it.',
+  })
   @IsOptional()
   @IsInt()
   @Min(1)

@@ -4,7 +4,7 @@ import { IsInt, Max, Min } from 'class-validator';
 import { ConditionField } from './condition-fields.js';
 
 export class CreateCycleDto implements CreateCycleRequest {
-  @ApiProperty({ minimum: 1 })
+  @ApiProperty({ type: 'integer', minimum: 1 })
   @IsInt()
   @Min(1)
   @Max(2_147_483_647)

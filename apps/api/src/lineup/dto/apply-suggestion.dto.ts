@@ -9,7 +9,8 @@ export class SuggestedLaneDto {
   catapultId: number;
 
   @ApiProperty({
-    type: [Number],
+    type: 'integer',
+    isArray: true,
     description: 'Planned slots to queue behind the aircraft already launched or in readiness.',
   })
   @IsArray()

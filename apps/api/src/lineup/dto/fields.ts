@@ -11,8 +11,8 @@ export const MAX_ID = 2_147_483_647;
 export const IdField = (description?: string, { optional = false } = {}) =>
   applyDecorators(
     ...(optional
-      ? [ApiPropertyOptional({ minimum: 1, description }), IsOptional()]
-      : [ApiProperty({ minimum: 1, description })]),
+      ? [ApiPropertyOptional({ type: 'integer', minimum: 1, description }), IsOptional()]
+      : [ApiProperty({ type: 'integer', minimum: 1, description })]),
     IsInt(),
     Min(1),
     Max(MAX_ID),
@@ -20,7 +20,7 @@ export const IdField = (description?: string, { optional = false } = {}) =>
 
 /** The version of what the command is based on, as the sender saw it. */
 export const VersionField = (description: string) =>
-  applyDecorators(ApiProperty({ minimum: 0, description }), IsInt(), Min(0), Max(MAX_ID));
+  applyDecorators(ApiProperty({ type: 'integer', minimum: 0, description }), IsInt(), Min(0), Max(MAX_ID));
 
 /** A reason a person writes, kept with the slot and the change (200 characters). */
 export const ReasonField = (field: string, { optional = false } = {}) =>

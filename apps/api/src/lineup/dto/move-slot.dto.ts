@@ -10,7 +10,7 @@ export class MoveSlotDto implements MoveSlotRequest {
   @VersionField('The slot version the move is based on.')
   slotVersion: number;
 
-  @ApiProperty({ nullable: true, description: 'The target catapult, or null for the deck pool.' })
+  @ApiProperty({ type: 'integer', nullable: true, description: 'The target catapult, or null for the deck pool.' })
   @ValidateIf((_dto, value) => value !== null)
   @IsInt({ message: 'toCatapultId must be a catapult id or null' })
   @Min(1)
@@ -24,7 +24,8 @@ export class MoveSlotDto implements MoveSlotRequest {
   toIndex: number;
 
   @ApiProperty({
-    type: [Number],
+    type: 'integer',
+    isArray: true,
     description: "The target lane's slot ids as seen before the move; ignored for the deck pool.",
   })
   @IsArray()

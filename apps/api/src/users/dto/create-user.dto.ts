@@ -42,13 +42,17 @@ export class CreateUserDto implements CreateUserRequest {
   @MaxLength(PASSWORD_MAX_LENGTH, { message: `password must be at most ${PASSWORD_MAX_LENGTH} characters` })
   password?: string;
 
-  @ApiPropertyOptional({ nullable: true, description: 'Required for a catapult officer, absent otherwise.' })
+  @ApiPropertyOptional({
+    type: 'integer',
+    nullable: true,
+    description: 'Required for a catapult officer, absent otherwise.',
+  })
   @IsOptional()
   @IsInt()
   @Min(1)
   catapultId?: number | null;
 
-  @ApiPropertyOptional({ nullable: true })
+  @ApiPropertyOptional({ type: 'integer', nullable: true })
   @IsOptional()
   @IsInt()
   @Min(1)

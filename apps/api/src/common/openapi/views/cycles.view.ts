@@ -1,0 +1,63 @@
+import { CYCLE_STATES, type CycleState, type CycleView, WEATHER_CASES, type WeatherCase } from '@catline/contracts';
+import { ApiProperty, ApiSchema } from '@nestjs/swagger';
+import { EnumProperty, IdProperty, InstantProperty, IntProperty } from './fields.js';
+
+@ApiSchema({ name: 'CycleView' })
+export class CycleViewDto implements CycleView {
+  @IdProperty()
+  id: number;
+
+  @IdProperty()
+  shipId: number;
+
+  @IntProperty({ minimum: 1 })
+  number: number;
+
+  @InstantProperty()
+  plannedLaunchAt: string;
+
+  @InstantProperty()
+  windowStartAt: string;
+
+  @InstantProperty()
+  windowEndAt: string;
+
+  @EnumProperty(CYCLE_STATES, 'CycleState')
+  state: CycleState;
+
+  @IntProperty({ minimum: 0, description: 'Bumped by one with every accepted change; orders the change log.' })
+  version: number;
+
+  @IntProperty({ minimum: 0 })
+  slotCount: number;
+
+  @IntProperty({ minimum: 0 })
+  launchedCount: number;
+
+  @ApiProperty({ description: 'Degrees true.' })
+  shipCourseDeg: number;
+
+  @ApiProperty({ description: 'Knots.' })
+  shipSpeedKt: number;
+
+  @ApiProperty({ description: 'Direction the true wind blows from, degrees true.' })
+  trueWindFromDeg: number;
+
+  @ApiProperty({ description: 'Knots.' })
+  trueWindSpeedKt: number;
+
+  @ApiProperty({ description: 'Degrees Celsius.' })
+  temperatureC: number;
+
+  @ApiProperty({ description: 'Hectopascals.' })
+  pressureHpa: number;
+
+  @EnumProperty(WEATHER_CASES, 'WeatherCase')
+  weatherCase: WeatherCase;
+
+  @ApiProperty()
+  night: boolean;
+
+  @ApiProperty({ description: 'While the landing area is in use the waist catapults are closed.' })
+  landingAreaInUse: boolean;
+}

@@ -1,0 +1,250 @@
+import {
+  type AircraftTypeView,
+  type AircraftView,
+  type CatapultPosition,
+  type CatapultStatus,
+  type CatapultView,
+  type DeckSpot,
+  type LaunchTableRow,
+  ROLES,
+  type Role,
+  type ShipProfile,
+  type ShipView,
+  type SquadronView,
+  type TrimBand,
+  type UserView,
+} from '@catline/contracts';
+import { ApiProperty, ApiSchema } from '@nestjs/swagger';
+import { EnumProperty, IdProperty, IntProperty } from './fields.js';
+
+export const CATAPULT_POSITIONS: CatapultPosition[] = ['bow', 'waist'];
+export const CATAPULT_STATUSES: CatapultStatus[] = ['up', 'down'];
+
+@ApiSchema({ name: 'CatapultView' })
+export class CatapultViewDto implements CatapultView {
+  @IdProperty()
+  id: number;
+
+  @IdProperty()
+  shipId: number;
+
+  @IntProperty({ minimum: 1, description: '1 to 4.' })
+  number: number;
+
+  @EnumProperty(CATAPULT_POSITIONS, 'CatapultPosition')
+  position: CatapultPosition;
+
+  @ApiProperty({ description: "Axis angle relative to the ship's heading, degrees; negative to port." })
+  axisAngleDeg: number;
+
+  @ApiProperty({ description: 'Metres.' })
+  strokeM: number;
+
+  @ApiProperty({ description: 'Energy at the lowest setting, megajoules.' })
+  energyMinMj: number;
+
+  @ApiProperty({ description: 'Energy at the highest setting, megajoules.' })
+  energyMaxMj: number;
+
+  @IntProperty({ minimum: 1 })
+  settingCount: number;
+
+  @ApiProperty({ description: 'Launch to next launch on this catapult, seconds.' })
+  resetIntervalS: number;
+
+  @IntProperty({ description: 'Catapults with the same pair number share the minimum pair gap.' })
+  pair: number;
+
+  @EnumProperty(CATAPULT_STATUSES, 'CatapultStatus')
+  status: CatapultStatus;
+
+  @IntProperty({ minimum: 0 })
+  shotCount: number;
+}
+
+@ApiSchema({ name: 'DeckSpot' })
+export class DeckSpotDto implements DeckSpot {
+  @ApiProperty()
+  name: string;
+
+  @ApiProperty({
+    type: 'object',
+    additionalProperties: { type: 'number' },
+    description: 'Taxi time from this spot to each catapult, seconds, keyed by catapult number.',
+  })
+  taxiS: Record<number, number>;
+}
+
+@ApiSchema({ name: 'ClearingTurns' })
+class ClearingTurnsDto {
+  @ApiProperty({ description: 'Degrees; positive to starboard.' })
+  bow: number;
+
+  @ApiProperty({ description: 'Degrees; positive to starboard.' })
+  waist: number;
+}
+
+@ApiSchema({ name: 'Departures' })
+class DeparturesDto {
+  @ApiProperty()
+  I: string;
+
+  @ApiProperty()
+  II: string;
+
+  @ApiProperty()
+  III: string;
+}
+
+@ApiSchema({ name: 'ShipProfile', description: "The ship's own after-the-shot profile." })
+export class ShipProfileDto implements ShipProfile {
+  @ApiProperty({ type: () => ClearingTurnsDto, description: 'Clearing turn off a bow and a waist catapult by day.' })
+  clearingTurnDeg: ClearingTurnsDto;
+
+  @ApiProperty({ type: () => DeparturesDto, description: 'Departure instruction per weather case.' })
+  departures: DeparturesDto;
+}
+
+@ApiSchema({ name: 'ShipView' })
+export class ShipViewDto implements ShipView {
+  @IdProperty()
+  id: number;
+
+  @ApiProperty()
+  name: string;
+
+  @ApiProperty()
+  hullCode: string;
+
+  @ApiProperty({ description: 'Minimum time between launches of the two catapults of a pair, seconds.' })
+  pairGapS: number;
+
+  @ApiProperty({ type: () => ShipProfileDto })
+  profile: ShipProfile;
+
+  @ApiProperty({ type: [DeckSpotDto] })
+  deckSpots: DeckSpot[];
+
+  @ApiProperty({ type: [CatapultViewDto] })
+  catapults: CatapultView[];
+}
+
+@ApiSchema({ name: 'SquadronView' })
+export class SquadronViewDto implements SquadronView {
+  @IdProperty()
+  id: number;
+
+  @ApiProperty()
+  name: string;
+
+  @ApiProperty()
+  code: string;
+
+  @ApiProperty({ format: 'email', description: 'Where the cycle summary goes.' })
+  email: string;
+}
+
+@ApiSchema({ name: 'TrimBand' })
+export class TrimBandDto implements TrimBand {
+  @IntProperty({ nullable: true, description: 'Upper gross-weight bound of the band, lb; null for the last band.' })
+  upToLb: number | null;
+
+  @ApiProperty({ description: 'Degrees.' })
+  trimDeg: number;
+}
+
+@ApiSchema({ name: 'LaunchTableRow' })
+export class LaunchTableRowDto implements LaunchTableRow {
+  @IntProperty({ minimum: 0, description: 'Pounds.' })
+  grossWeightLb: number;
+
+  @ApiProperty({ description: 'Knots.' })
+  minLaunchAirspeedKt: number;
+}
+
+@ApiSchema({ name: 'AircraftTypeView' })
+export class AircraftTypeViewDto implements AircraftTypeView {
+  @IdProperty()
+  id: number;
+
+  @ApiProperty()
+  designation: string;
+
+  @ApiProperty()
+  name: string;
+
+  @IntProperty({ minimum: 0, description: 'Pounds.' })
+  maxGrossWeightLb: number;
+
+  @ApiProperty({ description: 'Knots.' })
+  crosswindLimitKt: number;
+
+  @ApiProperty({ description: 'Pounds-force.' })
+  thrustLbf: number;
+
+  @ApiProperty({ description: 'Knots.' })
+  requiredExcessKt: number;
+
+  @IntProperty({ nullable: true, description: 'Pounds; null when the type never needs afterburner.' })
+  afterburnerFromLb: number | null;
+
+  @ApiProperty({ type: [TrimBandDto] })
+  trimBands: TrimBand[];
+
+  @ApiProperty({ type: [LaunchTableRowDto] })
+  launchTable: LaunchTableRow[];
+}
+
+@ApiSchema({ name: 'AircraftView' })
+export class AircraftViewDto implements AircraftView {
+  @IdProperty()
+  id: number;
+
+  @ApiProperty()
+  sideNumber: string;
+
+  @IdProperty()
+  typeId: number;
+
+  @ApiProperty()
+  typeDesignation: string;
+
+  @IdProperty()
+  squadronId: number;
+
+  @ApiProperty()
+  squadronCode: string;
+
+  @ApiProperty({ description: 'Where it is parked, a deck spot name.' })
+  parkedSpot: string;
+
+  @ApiProperty()
+  serviceable: boolean;
+
+  @IntProperty({ minimum: 0 })
+  catapultShots: number;
+}
+
+@ApiSchema({ name: 'UserView' })
+export class UserViewDto implements UserView {
+  @IdProperty()
+  id: number;
+
+  @ApiProperty({ format: 'email' })
+  email: string;
+
+  @ApiProperty()
+  name: string;
+
+  @EnumProperty(ROLES, 'Role')
+  role: Role;
+
+  @IdProperty({ nullable: true })
+  catapultId: number | null;
+
+  @IdProperty({ nullable: true })
+  squadronId: number | null;
+
+  @ApiProperty()
+  active: boolean;
+}

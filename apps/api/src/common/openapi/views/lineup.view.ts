@@ -1,0 +1,498 @@
+import {
+  CHANGE_KINDS,
+  type ChangeActor,
+  type ChangeKind,
+  type CrosswindSide,
+  type LaneView,
+  LAUNCH_GATE_CODES,
+  type LaunchGateCode,
+  type LaunchGateView,
+  LAUNCH_RECORD_SOURCES,
+  type LaunchFiredBy,
+  type LaunchRecord,
+  type LaunchRecordSource,
+  type LaunchFigures,
+  type LineupChange,
+  type LineupCommandResult,
+  type LineupPatch,
+  type LineupSnapshot,
+  NO_GO_CODES,
+  type NoGoCode,
+  type NoGoReason,
+  REVERIFY_CAUSES,
+  type ReverifyCause,
+  ROLES,
+  type Role,
+  SLOT_STATUSES,
+  SOFT_LAUNCH_GATE_CODES,
+  type SoftLaunchGateCode,
+  type SlotStatus,
+  type SlotView,
+  type SuggestedLineup,
+  type WaiverView,
+  type WindReadingUsed,
+} from '@catline/contracts';
+import { ApiProperty, ApiSchema } from '@nestjs/swagger';
+import { CycleViewDto } from './cycles.view.js';
+import { EnumProperty, IdProperty, InstantProperty, IntProperty } from './fields.js';
+import { CATAPULT_POSITIONS, CATAPULT_STATUSES } from './fleet.view.js';
+
+const CROSSWIND_SIDES: CrosswindSide[] = ['port', 'starboard', 'none'];
+
+@ApiSchema({ name: 'NoGoReason' })
+export class NoGoReasonDto implements NoGoReason {
+  @EnumProperty(NO_GO_CODES, 'NoGoCode')
+  code: NoGoCode;
+
+  @ApiProperty({ description: 'A sentence for the deck crew, with the figures that caused it.' })
+  message: string;
+}
+
+@ApiSchema({ name: 'LaunchFigures', description: 'The figures of one aircraft on one catapult under the conditions.' })
+export class LaunchFiguresDto implements LaunchFigures {
+  @ApiProperty({ description: 'Knots.' })
+  headwindKt: number;
+
+  @ApiProperty({ description: 'Knots.' })
+  crosswindKt: number;
+
+  @EnumProperty(CROSSWIND_SIDES, 'CrosswindSide')
+  crosswindSide: CrosswindSide;
+
+  @IntProperty({ nullable: true, description: 'Lowest setting reaching the wanted end speed; null when out of range.' })
+  catapultSetting: number | null;
+
+  @ApiProperty({ description: 'Knots.' })
+  endSpeedKt: number;
+
+  @ApiProperty({ nullable: true, description: 'Knots; null outside the launch table.' })
+  requiredAirspeedKt: number | null;
+
+  @ApiProperty({ nullable: true, description: 'Knots; null outside the launch table.' })
+  requiredWindOverDeckKt: number | null;
+
+  @ApiProperty({ nullable: true, description: 'Knots; null outside the launch table.' })
+  marginKt: number | null;
+
+  @ApiProperty({
+    type: Number,
+    nullable: true,
+    description: 'Headwind less (minimum launch airspeed - end speed), knots; null outside the launch table.',
+  })
+  excessWindOverDeckKt: number | null;
+
+  @ApiProperty({ type: Number, nullable: true, description: "The type's recommended excess wind over deck, knots." })
+  recommendedExcessKt: number | null;
+
+  @ApiProperty()
+  go: boolean;
+
+  @ApiProperty({ type: [NoGoReasonDto] })
+  reasons: NoGoReason[];
+
+  @ApiProperty({ description: 'Degrees; positive to starboard, 0 for none (night).' })
+  clearingTurnDeg: number;
+}
+
+@ApiSchema({ name: 'WindReadingUsed', description: 'The wind over the deck as read when the aircraft was fired.' })
+export class WindReadingUsedDto implements WindReadingUsed {
+  @InstantProperty({ nullable: true, description: 'When the reading was taken; null when none was kept.' })
+  readAt: string | null;
+
+  @ApiProperty({ description: 'Degrees true.' })
+  shipCourseDeg: number;
+
+  @ApiProperty({ description: 'Knots.' })
+  shipSpeedKt: number;
+
+  @ApiProperty({ description: 'Direction the true wind blew from, degrees true.' })
+  trueWindFromDeg: number;
+
+  @ApiProperty({ description: 'Knots.' })
+  trueWindSpeedKt: number;
+
+  @ApiProperty({ description: 'Degrees Celsius.' })
+  temperatureC: number;
+
+  @ApiProperty({ description: 'Hectopascals.' })
+  pressureHpa: number;
+}
+
+@ApiSchema({ name: 'LaunchFiredBy', description: 'Who gave the launch command.' })
+export class LaunchFiredByDto implements LaunchFiredBy {
+  @IdProperty({ nullable: true, description: 'Null when only the name was kept.' })
+  id: number | null;
+
+  @ApiProperty()
+  name: string;
+
+  @EnumProperty(ROLES, 'Role', { nullable: true })
+  role: Role | null;
+}
+
+@ApiSchema({ name: 'LaunchRecord', description: 'What was used with the shot, frozen at the launch command.' })
+export class LaunchRecordDto implements LaunchRecord {
+  @EnumProperty(LAUNCH_RECORD_SOURCES, 'LaunchRecordSource')
+  source: LaunchRecordSource;
+
+  @InstantProperty()
+  launchedAt: string;
+
+  @IdProperty()
+  catapultId: number;
+
+  @IntProperty({ minimum: 1 })
+  catapultNumber: number;
+
+  @IntProperty({ minimum: 0, description: 'The agreed gross weight, pounds.' })
+  grossWeightLb: number;
+
+  @IntProperty({ minimum: 0 })
+  fuelLb: number;
+
+  @ApiProperty()
+  stores: string;
+
+  @IntProperty({ nullable: true, description: "The setting of the ship's approved launch data." })
+  launchDataSetting: number | null;
+
+  @IntProperty({ nullable: true, description: "Catline's estimate from the catapult's energy model." })
+  crossCheckSetting: number | null;
+
+  @ApiProperty({ type: () => WindReadingUsedDto, nullable: true })
+  windReading: WindReadingUsed | null;
+
+  @ApiProperty({ type: Number, nullable: true, description: 'Knots.' })
+  headwindKt: number | null;
+
+  @ApiProperty({ type: Number, nullable: true, description: 'Knots.' })
+  crosswindKt: number | null;
+
+  @EnumProperty(CROSSWIND_SIDES, 'CrosswindSide', { nullable: true })
+  crosswindSide: CrosswindSide | null;
+
+  @ApiProperty({ type: Number, nullable: true, description: 'Knots.' })
+  endSpeedKt: number | null;
+
+  @ApiProperty({ type: Number, nullable: true, description: 'Knots.' })
+  requiredAirspeedKt: number | null;
+
+  @ApiProperty({ type: Number, nullable: true, description: 'Knots.' })
+  requiredWindOverDeckKt: number | null;
+
+  @ApiProperty({ type: Number, nullable: true, description: 'The launch margin, knots.' })
+  excessWindKt: number | null;
+
+  @ApiProperty({ type: Boolean, nullable: true })
+  go: boolean | null;
+
+  @ApiProperty({ type: [NoGoReasonDto] })
+  reasons: NoGoReason[];
+
+  @ApiProperty({ type: Number, nullable: true, description: 'Degrees.' })
+  trimDeg: number | null;
+
+  @ApiProperty({ type: Boolean, nullable: true })
+  afterburnerRequired: boolean | null;
+
+  @ApiProperty({ type: Number, nullable: true, description: 'Degrees, positive to starboard.' })
+  clearingTurnDeg: number | null;
+
+  @ApiProperty({ type: String, nullable: true, description: 'The reason given to launch on a no-go figure.' })
+  waiver: string | null;
+
+  @ApiProperty({ type: () => LaunchFiredByDto, nullable: true })
+  firedBy: LaunchFiredBy | null;
+}
+
+@ApiSchema({ name: 'WaiverView', description: 'A soft gate the air boss waived for one aircraft.' })
+export class WaiverViewDto implements WaiverView {
+  @EnumProperty(SOFT_LAUNCH_GATE_CODES, 'SoftLaunchGateCode')
+  gate: SoftLaunchGateCode;
+
+  @ApiProperty()
+  reason: string;
+
+  @ApiProperty()
+  by: string;
+
+  @InstantProperty()
+  at: string;
+}
+
+@ApiSchema({ name: 'LaunchGateView', description: 'A launch gate closed for an aircraft.' })
+export class LaunchGateViewDto implements LaunchGateView {
+  @EnumProperty(LAUNCH_GATE_CODES, 'LaunchGateCode')
+  gate: LaunchGateCode;
+
+  @ApiProperty({ description: 'Soft gates may be waived by the air boss; hard ones refuse the shot.' })
+  soft: boolean;
+
+  @ApiProperty()
+  waived: boolean;
+
+  @ApiProperty({ description: 'A sentence for the deck crew, with the figures that close it.' })
+  message: string;
+}
+
+@ApiSchema({ name: 'SlotView', description: 'One aircraft of a cycle: where it stands in the lineup and its figures.' })
+export class SlotViewDto implements SlotView {
+  @IdProperty()
+  id: number;
+
+  @IdProperty()
+  cycleId: number;
+
+  @IdProperty()
+  aircraftId: number;
+
+  @ApiProperty()
+  sideNumber: string;
+
+  @IdProperty()
+  typeId: number;
+
+  @ApiProperty()
+  typeDesignation: string;
+
+  @IdProperty()
+  squadronId: number;
+
+  @ApiProperty()
+  squadronCode: string;
+
+  @IdProperty({ nullable: true })
+  pilotId: number | null;
+
+  @ApiProperty({ type: String, nullable: true })
+  pilotName: string | null;
+
+  @ApiProperty()
+  mission: string;
+
+  @IntProperty({ minimum: 0 })
+  fuelLb: number;
+
+  @ApiProperty()
+  stores: string;
+
+  @IntProperty({ minimum: 0 })
+  grossWeightLb: number;
+
+  @ApiProperty()
+  tanker: boolean;
+
+  @ApiProperty()
+  earlyWarning: boolean;
+
+  @ApiProperty()
+  spare: boolean;
+
+  @IdProperty({ nullable: true, description: 'Null while the slot is in the deck pool.' })
+  catapultId: number | null;
+
+  @IntProperty({ nullable: true, minimum: 0, description: '0-based place in its lane; null in the deck pool.' })
+  position: number | null;
+
+  @EnumProperty(SLOT_STATUSES, 'SlotStatus')
+  status: SlotStatus;
+
+  @IntProperty({ minimum: 0, description: 'Bumped by every change to this slot; the basis of commands on it.' })
+  version: number;
+
+  @ApiProperty({ type: Number, nullable: true, description: 'Degrees.' })
+  trimDeg: number | null;
+
+  @ApiProperty()
+  afterburnerRequired: boolean;
+
+  @ApiProperty()
+  departure: string;
+
+  @InstantProperty({ nullable: true })
+  pilotWeightAckAt: string | null;
+
+  @InstantProperty({ nullable: true })
+  catapultWeightAckAt: string | null;
+
+  @ApiProperty({ type: String, nullable: true })
+  suspendReason: string | null;
+
+  @ApiProperty({ type: String, nullable: true })
+  overrideReason: string | null;
+
+  @InstantProperty({ nullable: true })
+  launchedAt: string | null;
+
+  @InstantProperty({ nullable: true, description: 'When the status last changed.' })
+  statusAt: string | null;
+
+  @ApiProperty({ type: String, nullable: true, description: 'Who last changed the status.' })
+  statusBy: string | null;
+
+  @InstantProperty({ nullable: true })
+  projectedLaunchAt: string | null;
+
+  @ApiProperty()
+  missesWindow: boolean;
+
+  @ApiProperty({ type: () => LaunchFiguresDto, nullable: true, description: 'Null in the deck pool.' })
+  figures: LaunchFigures | null;
+
+  @ApiProperty({
+    type: () => LaunchRecordDto,
+    nullable: true,
+    description: 'What was used with the shot; null until launched.',
+  })
+  launchRecord: LaunchRecord | null;
+
+  @EnumProperty(REVERIFY_CAUSES, 'ReverifyCause', {
+    nullable: true,
+    description: 'What changed under the agreed figures since they were verified; null when nothing waits.',
+  })
+  reverifyCause: ReverifyCause | null;
+
+  @ApiProperty({ type: [WaiverViewDto] })
+  waivers: WaiverView[];
+
+  @ApiProperty({ type: [LaunchGateViewDto], nullable: true, description: 'Null in the deck pool.' })
+  gates: LaunchGateView[] | null;
+}
+
+@ApiSchema({ name: 'LaneView', description: "A catapult's lane of the lineup." })
+export class LaneViewDto implements LaneView {
+  @IdProperty()
+  catapultId: number;
+
+  @IntProperty({ minimum: 1 })
+  number: number;
+
+  @EnumProperty(CATAPULT_POSITIONS, 'CatapultPosition')
+  position: LaneView['position'];
+
+  @EnumProperty(CATAPULT_STATUSES, 'CatapultStatus')
+  status: LaneView['status'];
+
+  @ApiProperty({ description: 'Waist catapults are closed while the landing area is in use.' })
+  closed: boolean;
+
+  @ApiProperty({ type: 'integer', isArray: true, description: "The lane's slots in launch order." })
+  slotIds: number[];
+
+  @ApiProperty({ description: 'True when every slot still to launch in the lane is go.' })
+  go: boolean;
+
+  @ApiProperty({ description: 'Knots.' })
+  headwindKt: number;
+
+  @ApiProperty({ description: 'Knots.' })
+  crosswindKt: number;
+
+  @EnumProperty(CROSSWIND_SIDES, 'CrosswindSide')
+  crosswindSide: CrosswindSide;
+}
+
+@ApiSchema({ name: 'LineupSnapshot', description: "A cycle's whole lineup at one version." })
+export class LineupSnapshotDto implements LineupSnapshot {
+  @ApiProperty({ type: () => CycleViewDto })
+  cycle: CycleViewDto;
+
+  @ApiProperty({ type: [LaneViewDto] })
+  lanes: LaneView[];
+
+  @ApiProperty({ type: 'integer', isArray: true, description: 'Slots in the deck pool, by side number.' })
+  pool: number[];
+
+  @ApiProperty({ type: [SlotViewDto] })
+  slots: SlotView[];
+
+  @InstantProperty({ nullable: true })
+  lastLaunchAt: string | null;
+
+  @IntProperty({ minimum: 0 })
+  version: number;
+}
+
+@ApiSchema({ name: 'LineupPatch', description: 'What changed: replace these parts of the snapshot, by id.' })
+export class LineupPatchDto implements LineupPatch {
+  @ApiProperty({ type: () => CycleViewDto, required: false })
+  cycle?: CycleViewDto;
+
+  @ApiProperty({ type: [LaneViewDto], required: false })
+  lanes?: LaneView[];
+
+  @ApiProperty({ type: 'integer', isArray: true, required: false })
+  pool?: number[];
+
+  @ApiProperty({ type: [SlotViewDto], required: false })
+  slots?: SlotView[];
+
+  @InstantProperty({ nullable: true, required: false })
+  lastLaunchAt?: string | null;
+}
+
+@ApiSchema({ name: 'ChangeActor' })
+export class ChangeActorDto implements ChangeActor {
+  @IdProperty()
+  id: number;
+
+  @ApiProperty()
+  name: string;
+
+  @EnumProperty(ROLES, 'Role')
+  role: Role;
+}
+
+@ApiSchema({ name: 'LineupChange', description: 'One accepted change, as kept in the change log and broadcast.' })
+export class LineupChangeDto implements LineupChange {
+  @IdProperty()
+  cycleId: number;
+
+  @IntProperty({ minimum: 1 })
+  version: number;
+
+  @EnumProperty(CHANGE_KINDS, 'ChangeKind')
+  kind: ChangeKind;
+
+  @ApiProperty({ type: () => ChangeActorDto })
+  actor: ChangeActor;
+
+  @InstantProperty()
+  at: string;
+
+  @ApiProperty({ description: 'A one-line account for people.' })
+  summary: string;
+
+  @ApiProperty({ type: () => LineupPatchDto })
+  patch: LineupPatch;
+}
+
+@ApiSchema({ name: 'LineupCommandResult', description: 'The accepted change and the version it made.' })
+export class LineupCommandResultDto implements LineupCommandResult {
+  @IntProperty({ minimum: 1 })
+  version: number;
+
+  @ApiProperty({ type: () => LineupChangeDto })
+  change: LineupChange;
+}
+
+@ApiSchema({ name: 'SuggestedLane' })
+export class SuggestedLaneDto {
+  @IdProperty()
+  catapultId: number;
+
+  @ApiProperty({ type: 'integer', isArray: true })
+  slotIds: number[];
+}
+
+@ApiSchema({ name: 'SuggestedLineup' })
+export class SuggestedLineupDto implements SuggestedLineup {
+  @IntProperty({ minimum: 0 })
+  basisVersion: number;
+
+  @ApiProperty({ type: [SuggestedLaneDto] })
+  lanes: SuggestedLaneDto[];
+
+  @InstantProperty({ nullable: true })
+  lastLaunchAt: string | null;
+}

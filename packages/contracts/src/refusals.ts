@@ -150,6 +150,8 @@ export const GENERIC_REFUSAL_CODES = [
   'not_found',
   'conflict',
   'payload_too_large',
+  /** The path exists, but not with this method (the answer's Allow header lists the ones it takes). */
+  'method_not_allowed',
   'too_many_requests',
   'unavailable',
   'error',

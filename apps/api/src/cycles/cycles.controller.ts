@@ -31,9 +31,9 @@ export class CyclesController {
   }
 
   @ApiDoc('Read one cycle', { response: CycleViewDto, refuses: { 404: ['not_found'] } })
-  @Get(':id')
-  get(@Param('id', ParseIntPipe) id: number): Promise<CycleView> {
-    return this.cycles.get(id);
+  @Get(':cycleId')
+  get(@Param('cycleId', ParseIntPipe) cycleId: number): Promise<CycleView> {
+    return this.cycles.get(cycleId);
   }
 
   @ApiDoc('Create a cycle', {
@@ -53,13 +53,13 @@ export class CyclesController {
     refuses: { 400: ['invalid_window'], 404: ['not_found'], 409: ['stale_basis', 'cycle_closed', 'no_change'] },
   })
   @Roles('air_operations')
-  @Patch(':id/conditions')
+  @Patch(':cycleId/conditions')
   updateConditions(
-    @Param('id', ParseIntPipe) id: number,
+    @Param('cycleId', ParseIntPipe) cycleId: number,
     @Body() body: UpdateCycleConditionsDto,
     @CurrentUser() user: AuthenticatedUser,
   ): Promise<LineupCommandResult> {
-    return this.commands.updateConditions(id, actorOf(user), body);
+    return this.commands.updateConditions(cycleId, actorOf(user), body);
   }
 
   @ApiDoc('Start executing a cycle', {
@@ -67,14 +67,14 @@ export class CyclesController {
     refuses: { 404: ['not_found'], 409: ['stale_basis', 'wrong_state'] },
   })
   @Roles('air_operations')
-  @Post(':id/start')
+  @Post(':cycleId/start')
   @HttpCode(HttpStatus.OK)
   start(
-    @Param('id', ParseIntPipe) id: number,
+    @Param('cycleId', ParseIntPipe) cycleId: number,
     @Body() body: BasisVersionDto,
     @CurrentUser() user: AuthenticatedUser,
   ): Promise<LineupCommandResult> {
-    return this.commands.start(id, actorOf(user), body.basisVersion);
+    return this.commands.start(cycleId, actorOf(user), body.basisVersion);
   }
 
   @ApiDoc('Close a cycle', {
@@ -83,14 +83,14 @@ export class CyclesController {
     refuses: { 404: ['not_found'], 409: ['stale_basis', 'wrong_state'] },
   })
   @Roles('air_operations')
-  @Post(':id/close')
+  @Post(':cycleId/close')
   @HttpCode(HttpStatus.OK)
   close(
-    @Param('id', ParseIntPipe) id: number,
+    @Param('cycleId', ParseIntPipe) cycleId: number,
     @Body() body: BasisVersionDto,
     @CurrentUser() user: AuthenticatedUser,
   ): Promise<LineupCommandResult> {
-    return this.commands.close(id, actorOf(user), body.basisVersion);
+    return this.commands.close(cycleId, actorOf(user), body.basisVersion);
   }
 
   @ApiDoc('Add an aircraft to a cycle', {
@@ -109,13 +109,13 @@ export class CyclesController {
     },
   })
   @Roles('air_operations')
-  @Post(':id/slots')
+  @Post(':cycleId/slots')
   @HttpCode(HttpStatus.OK)
   addSlot(
-    @Param('id', ParseIntPipe) id: number,
+    @Param('cycleId', ParseIntPipe) cycleId: number,
     @Body() body: AddSlotDto,
     @CurrentUser() user: AuthenticatedUser,
   ): Promise<LineupCommandResult> {
-    return this.commands.addSlot(id, actorOf(user), body);
+    return this.commands.addSlot(cycleId, actorOf(user), body);
   }
 }

@@ -51,15 +51,15 @@ export class AirPlanController {
     },
   })
   @Roles('air_operations')
-  @Post('cycles/:id/air-plan/preview')
+  @Post('cycles/:cycleId/air-plan/preview')
   @HttpCode(HttpStatus.OK)
   @CsvUpload()
   preview(
-    @Param('id', ParseIntPipe) id: number,
+    @Param('cycleId', ParseIntPipe) cycleId: number,
     @UploadedFile() file: UploadedCsv | undefined,
     @CurrentUser() user: AuthenticatedUser,
   ): Promise<AirPlanPreview> {
-    return this.imports.preview(id, file, user);
+    return this.imports.preview(cycleId, file, user);
   }
 
   @ApiDoc('Import a previewed air plan', {
@@ -71,14 +71,14 @@ export class AirPlanController {
     },
   })
   @Roles('air_operations')
-  @Post('cycles/:id/air-plan/imports/:uploadId/confirm')
+  @Post('cycles/:cycleId/air-plan/imports/:uploadId/confirm')
   @HttpCode(HttpStatus.OK)
   confirm(
-    @Param('id', ParseIntPipe) id: number,
+    @Param('cycleId', ParseIntPipe) cycleId: number,
     @Param('uploadId', ParseIntPipe) uploadId: number,
     @Body() body: BasisVersionDto,
     @CurrentUser() user: AuthenticatedUser,
   ): Promise<LineupCommandResult> {
-    return this.imports.confirm(id, uploadId, body.basisVersion, user);
+    return this.imports.confirm(cycleId, uploadId, body.basisVersion, user);
   }
 }

@@ -8,14 +8,14 @@ import { CycleReplayDto, CycleReportDto } from '../common/openapi/views/reports.
 
 // Every signed-in role reads a cycle's record; nothing here changes it.
 @ApiTags('reports')
-@Controller('cycles/:id')
+@Controller('cycles/:cycleId')
 export class CycleReportsController {
   constructor(private readonly reports: CycleReportsService) {}
 
   @ApiDoc('Read the record of a cycle', { response: CycleReportDto, refuses: { 404: ['not_found'] } })
   @Get('report')
-  report(@Param('id', ParseIntPipe) id: number): Promise<CycleReport> {
-    return this.reports.report(id);
+  report(@Param('cycleId', ParseIntPipe) cycleId: number): Promise<CycleReport> {
+    return this.reports.report(cycleId);
   }
 
   @ApiDoc('Read the history of a cycle', {
@@ -24,19 +24,19 @@ export class CycleReportsController {
     refuses: { 404: ['not_found'] },
   })
   @Get('replay')
-  replay(@Param('id', ParseIntPipe) id: number): Promise<CycleReplay> {
-    return this.reports.replay(id);
+  replay(@Param('cycleId', ParseIntPipe) cycleId: number): Promise<CycleReplay> {
+    return this.reports.replay(cycleId);
   }
 
   @ApiDoc('Download the aircraft of a cycle as CSV', { response: 'csv', refuses: { 404: ['not_found'] } })
   @Get('slots.csv')
-  async slotsCsv(@Param('id', ParseIntPipe) id: number): Promise<StreamableFile> {
-    return csvResponse(await this.reports.slotsCsv(id));
+  async slotsCsv(@Param('cycleId', ParseIntPipe) cycleId: number): Promise<StreamableFile> {
+    return csvResponse(await this.reports.slotsCsv(cycleId));
   }
 
   @ApiDoc('Download the change log of a cycle as CSV', { response: 'csv', refuses: { 404: ['not_found'] } })
   @Get('changes.csv')
-  async changesCsv(@Param('id', ParseIntPipe) id: number): Promise<StreamableFile> {
-    return csvResponse(await this.reports.changesCsv(id));
+  async changesCsv(@Param('cycleId', ParseIntPipe) cycleId: number): Promise<StreamableFile> {
+    return csvResponse(await this.reports.changesCsv(cycleId));
   }
 }

@@ -20,9 +20,9 @@ export class ShipsController {
   }
 
   @ApiDoc('Read one ship', { response: ShipViewDto, refuses: { 404: ['ship_not_found'] } })
-  @Get(':id')
-  get(@Param('id', ParseIntPipe) id: number): Promise<ShipView> {
-    return this.ships.get(id);
+  @Get(':shipId')
+  get(@Param('shipId', ParseIntPipe) shipId: number): Promise<ShipView> {
+    return this.ships.get(shipId);
   }
 
   @ApiDoc('Change a ship', {
@@ -31,9 +31,9 @@ export class ShipsController {
     refuses: { 400: ['invalid_configuration'], 404: ['ship_not_found'], 409: ['spot_in_use'] },
   })
   @Roles('admin')
-  @Patch(':id')
-  update(@Param('id', ParseIntPipe) id: number, @Body() body: UpdateShipDto): Promise<ShipView> {
-    return this.ships.update(id, body);
+  @Patch(':shipId')
+  update(@Param('shipId', ParseIntPipe) shipId: number, @Body() body: UpdateShipDto): Promise<ShipView> {
+    return this.ships.update(shipId, body);
   }
 
   @ApiDoc('Change a catapult', {
@@ -41,12 +41,12 @@ export class ShipsController {
     refuses: { 400: ['invalid_configuration'], 404: ['ship_not_found', 'catapult_not_found'] },
   })
   @Roles('admin')
-  @Patch(':shipId/catapults/:id')
+  @Patch(':shipId/catapults/:catapultId')
   updateCatapult(
     @Param('shipId', ParseIntPipe) shipId: number,
-    @Param('id', ParseIntPipe) id: number,
+    @Param('catapultId', ParseIntPipe) catapultId: number,
     @Body() body: UpdateCatapultDto,
   ): Promise<CatapultView> {
-    return this.ships.updateCatapult(shipId, id, body);
+    return this.ships.updateCatapult(shipId, catapultId, body);
   }
 }

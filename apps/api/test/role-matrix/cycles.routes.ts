@@ -12,7 +12,12 @@ async function targetCycle(context: MatrixContext): Promise<number> {
 
 export const cyclesRoutes: MatrixRoute[] = [
   { method: 'GET', path: '/api/cycles', allowed: ROLES },
-  { method: 'GET', path: '/api/cycles/{id}', allowed: ROLES, example: () => ({ params: { id: DEMO_CYCLE } }) },
+  {
+    method: 'GET',
+    path: '/api/cycles/{cycleId}',
+    allowed: ROLES,
+    example: () => ({ params: { cycleId: DEMO_CYCLE } }),
+  },
   {
     method: 'POST',
     path: '/api/cycles',
@@ -32,31 +37,31 @@ export const cyclesRoutes: MatrixRoute[] = [
   },
   {
     method: 'PATCH',
-    path: '/api/cycles/{id}/conditions',
+    path: '/api/cycles/{cycleId}/conditions',
     allowed: ['air_operations'],
     example: async (context) => ({
-      params: { id: await targetCycle(context) },
+      params: { cycleId: await targetCycle(context) },
       body: { basisVersion: 0, trueWindSpeedKt: 13 },
     }),
   },
   {
     method: 'POST',
-    path: '/api/cycles/{id}/start',
+    path: '/api/cycles/{cycleId}/start',
     allowed: ['air_operations'],
-    example: async (context) => ({ params: { id: await targetCycle(context) }, body: { basisVersion: 0 } }),
+    example: async (context) => ({ params: { cycleId: await targetCycle(context) }, body: { basisVersion: 0 } }),
   },
   {
     method: 'POST',
-    path: '/api/cycles/{id}/close',
+    path: '/api/cycles/{cycleId}/close',
     allowed: ['air_operations'],
-    example: async (context) => ({ params: { id: await targetCycle(context) }, body: { basisVersion: 0 } }),
+    example: async (context) => ({ params: { cycleId: await targetCycle(context) }, body: { basisVersion: 0 } }),
   },
   {
     method: 'POST',
-    path: '/api/cycles/{id}/slots',
+    path: '/api/cycles/{cycleId}/slots',
     allowed: ['air_operations'],
     example: async (context) => ({
-      params: { id: await targetCycle(context) },
+      params: { cycleId: await targetCycle(context) },
       body: {
         aircraftId: 1,
         pilotId: null,

@@ -41,23 +41,23 @@ export const importsRoutes: MatrixRoute[] = [
   { method: 'GET', path: '/api/air-plan/template', allowed: ['air_operations'] },
   {
     method: 'POST',
-    path: '/api/cycles/{id}/air-plan/preview',
+    path: '/api/cycles/{cycleId}/air-plan/preview',
     allowed: ['air_operations'],
     example: async (context) => ({
-      params: { id: (await cycleFor({ ...context, allowed: false })).id },
+      params: { cycleId: (await cycleFor({ ...context, allowed: false })).id },
       ...multipartCsv(AIR_PLAN),
     }),
   },
   {
     method: 'POST',
-    path: '/api/cycles/{id}/air-plan/imports/{uploadId}/confirm',
+    path: '/api/cycles/{cycleId}/air-plan/imports/{uploadId}/confirm',
     allowed: ['air_operations'],
     example: async (context) => {
       const cycle = await cycleFor(context);
       const uploadId = context.allowed
         ? await previewed(context, `/api/cycles/${cycle.id}/air-plan/preview`, 'air_operations', AIR_PLAN)
         : 1;
-      return { params: { id: cycle.id, uploadId }, body: { basisVersion: cycle.version } };
+      return { params: { cycleId: cycle.id, uploadId }, body: { basisVersion: cycle.version } };
     },
   },
   { method: 'GET', path: '/api/aircraft-types/launch-table/template', allowed: ['admin'] },

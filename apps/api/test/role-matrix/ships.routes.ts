@@ -5,17 +5,20 @@ import type { MatrixRoute } from './route-table.js';
 // The demo ship and its catapult 1 (ids 1 in the fresh test database), patched to the values they have.
 export const shipsRoutes: MatrixRoute[] = [
   { method: 'GET', path: '/api/ships', allowed: ROLES },
-  { method: 'GET', path: '/api/ships/{id}', allowed: ROLES, example: () => ({ params: { id: 1 } }) },
+  { method: 'GET', path: '/api/ships/{shipId}', allowed: ROLES, example: () => ({ params: { shipId: 1 } }) },
   {
     method: 'PATCH',
-    path: '/api/ships/{id}',
+    path: '/api/ships/{shipId}',
     allowed: ['admin'],
-    example: () => ({ params: { id: 1 }, body: { pairGapS: demoShip.pairGapS } }),
+    example: () => ({ params: { shipId: 1 }, body: { pairGapS: demoShip.pairGapS } }),
   },
   {
     method: 'PATCH',
-    path: '/api/ships/{shipId}/catapults/{id}',
+    path: '/api/ships/{shipId}/catapults/{catapultId}',
     allowed: ['admin'],
-    example: () => ({ params: { shipId: 1, id: 1 }, body: { resetIntervalS: demoCatapults[0].resetIntervalS } }),
+    example: () => ({
+      params: { shipId: 1, catapultId: 1 },
+      body: { resetIntervalS: demoCatapults[0].resetIntervalS },
+    }),
   },
 ];

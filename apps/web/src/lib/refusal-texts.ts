@@ -119,6 +119,7 @@ const REASONS: Record<RefusalCode, string> = {
   forbidden: 'not allowed',
   conflict: 'it conflicts with what the server holds',
   payload_too_large: 'too large',
+  method_not_allowed: 'the server does not take this request there',
   too_many_requests: 'too many requests',
   unavailable: 'the server is unavailable',
   error: 'the server could not do it',

@@ -1,6 +1,7 @@
 import type { INestApplication } from '@nestjs/common';
 import { DocumentBuilder, type OpenAPIObject, SwaggerModule } from '@nestjs/swagger';
 import { API_TAGS } from './api-tags.js';
+import { refuseUnsupportedMethods } from './method-not-allowed.js';
 import { completeRouteDocs } from './route-docs.js';
 
 const DESCRIPTION = [
@@ -11,7 +12,10 @@ const DESCRIPTION = [
   'codes it answers. Live changes to a lineup are also broadcast over socket.io (see the contracts package).',
 ].join(' ');
 
-/** The OpenAPI document of every route, served at /api/docs (UI) and /api/docs-json. */
+/**
+ * The OpenAPI document of every route, served at /api/docs (UI) and /api/docs-json; its paths also
+ * tell a wrong method (405) from an unknown path (404).
+ */
 export function serveApiDocument(app: INestApplication, appUrl: string): OpenAPIObject {
   completeRouteDocs(app);
   const builder = new DocumentBuilder()
@@ -23,5 +27,6 @@ export function serveApiDocument(app: INestApplication, appUrl: string): OpenAPI
   for (const [name, description] of Object.entries(API_TAGS)) builder.addTag(name, description);
   const document = SwaggerModule.createDocument(app, builder.build());
   SwaggerModule.setup('api/docs', app, document);
+  refuseUnsupportedMethods(app, document);
   return document;
 }

@@ -269,8 +269,51 @@ describe('lineupWarnings', () => {
         text: 'C21 misses the launch window (projected 10:25, window ends 10:20).',
       },
       { kind: 'no_go', key: 'nogo-2', text: 'C22 on cat 1 is no-go: End speed is 4 kt short.' },
-      { kind: 'weight_not_agreed', key: 'weights', text: 'Gross weight not yet agreed for C21.' },
     ]);
+  });
+
+  it('says nothing of gross weights while the cycle is planned: they are agreed at the catapult', () => {
+    const snapshot = board();
+    snapshot.slots = snapshot.slots.map((each) => ({ ...each, pilotWeightAckAt: null, catapultWeightAckAt: null }));
+    expect(lineupWarnings(snapshot, clock)).toEqual([]);
+  });
+
+  it('once launching, warns only about the aircraft on each catapult and the next one', () => {
+    const snapshot = board();
+    snapshot.cycle = { ...cycle, state: 'executing' };
+    // Cat 1: C21 on the catapult, C22 next, C23 behind them; cat 2: D33 next. Nobody has agreed a weight.
+    snapshot.lanes[0] = lane(11, 1, [1, 2, 6]);
+    snapshot.slots = [
+      ...snapshot.slots.map((each) => ({ ...each, pilotWeightAckAt: null, catapultWeightAckAt: null })),
+      slot(6, 'C23', { catapultId: 11, position: 2 }, { missesWindow: true, pilotWeightAckAt: null }),
+    ];
+    snapshot.slots[0] = { ...snapshot.slots[0], status: 'on_catapult', pilotWeightAckAt: '2026-12-02T09:40:00.000Z' };
+    snapshot.slots[1] = { ...snapshot.slots[1], missesWindow: true };
+    expect(lineupWarnings(snapshot, clock)).toEqual([
+      { kind: 'missed_window', key: 'window-2', text: 'C22 misses the launch window.' },
+      {
+        kind: 'weight_not_agreed',
+        key: 'weight-1',
+        text: 'C21, on cat 1: gross weight not yet agreed by the catapult officer.',
+      },
+      {
+        kind: 'weight_not_agreed',
+        key: 'weight-2',
+        text: 'C22, next on cat 1: gross weight not yet agreed by the pilot and the catapult officer.',
+      },
+      {
+        kind: 'weight_not_agreed',
+        key: 'weight-3',
+        text: 'D33, next on cat 2: gross weight not yet agreed by the pilot and the catapult officer.',
+      },
+    ]);
+  });
+
+  it('has no warnings for a closed cycle', () => {
+    const snapshot = board();
+    snapshot.cycle = { ...cycle, state: 'closed' };
+    snapshot.lanes[1] = lane(12, 2, [3], { status: 'down' });
+    expect(lineupWarnings(snapshot, clock)).toEqual([]);
   });
 
   it('does not repeat a down or closed catapult as a no-go reason of each aircraft in its lane', () => {

@@ -99,8 +99,23 @@ export interface LineupWarning {
   text: string;
 }
 
-/** What the handler must look at now, most serious first. */
+/** Who has yet to agree an aircraft's gross weight, in words; null once both have. */
+function weightStillToAgree(slot: SlotView): string | null {
+  if (slot.pilotWeightAckAt && slot.catapultWeightAckAt) return null;
+  if (slot.pilotWeightAckAt) return 'the catapult officer';
+  if (slot.catapultWeightAckAt) return 'the pilot';
+  return 'the pilot and the catapult officer';
+}
+
+/**
+ * What the handler must look at now, most serious first. While the cycle is planned, the whole plan:
+ * catapults that cannot launch their lane, and every aircraft in a lane that is no-go or misses the window.
+ * Once launching, only what the aircraft on each catapult and the next one need, the gross weight
+ * agreement among them: the rest of each lane is planning the handler already did.
+ */
 export function lineupWarnings(snapshot: LineupSnapshot, formatTime: (iso: string) => string): LineupWarning[] {
+  if (snapshot.cycle.state === 'closed') return [];
+  const launching = snapshot.cycle.state === 'executing';
   const slots = slotsById(snapshot);
   const warnings: LineupWarning[] = [];
   const waiting = (lane: LaneView) => laneWaiting(lane, slots);
@@ -121,8 +136,11 @@ export function lineupWarnings(snapshot: LineupSnapshot, formatTime: (iso: strin
       });
     }
   }
+  const weights: LineupWarning[] = [];
   for (const lane of snapshot.lanes) {
-    for (const slot of waiting(lane)) {
+    const marks = laneMarks(lane, slots);
+    const watched = launching ? waiting(lane).filter((slot) => marks.has(slot.id)) : waiting(lane);
+    for (const slot of watched) {
       const reasons =
         slot.figures?.reasons.filter(
           (reason) => reason.code !== 'catapult_down' && reason.code !== 'catapult_closed',
@@ -144,17 +162,16 @@ export function lineupWarnings(snapshot: LineupSnapshot, formatTime: (iso: strin
           text: `${slot.sideNumber} misses the launch window${when}.`,
         });
       }
+      const stillToAgree = launching ? weightStillToAgree(slot) : null;
+      if (stillToAgree) {
+        const place = marks.get(slot.id) === 'on-catapult' ? `on cat ${lane.number}` : `next on cat ${lane.number}`;
+        weights.push({
+          kind: 'weight_not_agreed',
+          key: `weight-${slot.id}`,
+          text: `${slot.sideNumber}, ${place}: gross weight not yet agreed by ${stillToAgree}.`,
+        });
+      }
     }
   }
-  const unagreed = snapshot.lanes
-    .flatMap(waiting)
-    .filter((slot) => !slot.pilotWeightAckAt || !slot.catapultWeightAckAt);
-  if (unagreed.length > 0) {
-    warnings.push({
-      kind: 'weight_not_agreed',
-      key: 'weights',
-      text: `Gross weight not yet agreed for ${unagreed.map((slot) => slot.sideNumber).join(', ')}.`,
-    });
-  }
-  return warnings;
+  return [...warnings, ...weights];
 }

@@ -1,4 +1,10 @@
-import type { AircraftView, LineupChange, LineupCommandResult, LineupSnapshot } from '@catline/contracts';
+import type {
+  AircraftView,
+  LineupChange,
+  LineupCommandResult,
+  LineupSnapshot,
+  SuggestedLineup,
+} from '@catline/contracts';
 import type { INestApplication } from '@nestjs/common';
 import { applyLineupChanges, applyLineupPatch } from '@catline/contracts';
 import { ADMIN, AIR_OPS, HANDLER, LineupDriver, OBSERVER, launchKey, pilot } from './support/lineup-fixtures.js';
@@ -302,11 +308,7 @@ describe('lineup commands', () => {
     for (const side of ['C30', 'C31', 'C32', 'D37', 'D38', 'L48']) {
       await deck.addSlot(cycle.id, side, side === 'L48' ? { earlyWarning: true, grossWeightLb: 52_000 } : {});
     }
-    const suggestion = await deck.ok<{
-      basisVersion: number;
-      lanes: { catapultId: number; slotIds: number[] }[];
-      lastLaunchAt: string;
-    }>(HANDLER, 'get', `/api/cycles/${cycle.id}/lineup/suggestion`);
+    const suggestion = await deck.ok<SuggestedLineup>(HANDLER, 'get', `/api/cycles/${cycle.id}/lineup/suggestion`);
     expect(suggestion.lanes.flatMap((lane) => lane.slotIds)).toHaveLength(6);
 
     const applied = await deck.ok<LineupCommandResult>(
@@ -324,6 +326,16 @@ describe('lineup commands', () => {
       expect(after.lanes.find((candidate) => candidate.catapultId === lane.catapultId)!.slotIds).toEqual(lane.slotIds);
     expect(after.pool).toEqual([]);
     expect(after.lastLaunchAt).toBe(suggestion.lastLaunchAt);
+    // The times the dialog shows before applying are the ones the board then shows.
+    expect(suggestion.projected).toHaveLength(6);
+    for (const launch of suggestion.projected) {
+      const slot = after.slots.find((candidate) => candidate.id === launch.slotId)!;
+      expect([slot.catapultId, slot.projectedLaunchAt, slot.missesWindow]).toEqual([
+        launch.catapultId,
+        launch.launchAt,
+        launch.missesWindow,
+      ]);
+    }
     expect(applied.version).toBe(suggestion.basisVersion + 1);
     const stale = await deck.call(HANDLER, 'post', `/api/cycles/${cycle.id}/lineup/suggestion/apply`, {
       basisVersion: suggestion.basisVersion,

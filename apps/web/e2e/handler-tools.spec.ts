@@ -24,8 +24,10 @@ test('the handler swaps in a spare, applies the suggested lineup and marks a cat
 
   await handler.getByRole('button', { name: 'Suggest lineup' }).click();
   const dialog = handler.getByRole('dialog');
-  await expect(dialog.getByTestId('suggestion-now')).toContainText('C30');
-  await expect(dialog.getByTestId('suggestion-proposed')).toContainText('G43');
+  // What moves where, and what it gains, not just chains of side numbers.
+  await expect(dialog.getByTestId('suggestion-lanes')).toContainText(/G43(, \w+)* join/);
+  await expect(dialog.getByTestId('suggestion-last-launch')).toContainText(/\d\d:\d\d:\d\d → \d\d:\d\d:\d\d/);
+  await expect(dialog.getByTestId('suggestion-window')).toContainText('Aircraft missing the window');
   await dialog.getByRole('button', { name: 'Apply suggestion' }).click();
   await expect(handler.getByTestId('notice')).toContainText('Suggested lineup applied');
   await expect(card(pool(handler), 'G43')).toHaveCount(0);

@@ -308,10 +308,20 @@ export interface MoveSlotRequest {
   targetLaneOrder: number[];
 }
 
+/** One aircraft's launch as a lineup would project it. */
+export interface ProjectedLaunch {
+  slotId: number;
+  catapultId: number;
+  launchAt: string;
+  missesWindow: boolean;
+}
+
 export interface SuggestedLineup {
   basisVersion: number;
   lanes: { catapultId: number; slotIds: number[] }[];
   lastLaunchAt: string | null;
+  /** Every aircraft still to launch, as the lineup would stand once the suggestion is applied, in time order. */
+  projected: ProjectedLaunch[];
 }
 
 export interface ApplySuggestionRequest {

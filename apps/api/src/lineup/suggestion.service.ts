@@ -53,7 +53,7 @@ export function suggestionInput(state: LineupState): SuggestionInput {
   };
 }
 
-/** The suggestion as the API answers it, with the last launch the lineup would have once applied. */
+/** The suggestion as the API answers it, with the launch times the lineup would have once applied. */
 export function suggestedLineup(state: LineupState, suggestion: LineupSuggestion): SuggestedLineup {
   const { cycle } = state;
   const lanes = state.catapults.map((catapult) => ({
@@ -72,10 +72,18 @@ export function suggestedLineup(state: LineupState, suggestion: LineupSuggestion
       ].map(String),
     ]),
   );
-  const lastLaunch = projectLineup(state, applied).lastLaunch;
+  const projection = projectLineup(state, applied);
   return {
     basisVersion: cycle.version,
     lanes,
-    lastLaunchAt: lastLaunch === null ? null : new Date(lastLaunch).toISOString(),
+    lastLaunchAt: projection.lastLaunch === null ? null : new Date(projection.lastLaunch).toISOString(),
+    projected: projection.slots
+      .filter((slot) => !slot.launched)
+      .map((slot) => ({
+        slotId: Number(slot.slotId),
+        catapultId: Number(slot.catapultId),
+        launchAt: new Date(slot.time).toISOString(),
+        missesWindow: slot.missesWindow,
+      })),
   };
 }

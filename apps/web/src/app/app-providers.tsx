@@ -1,7 +1,7 @@
 import { useEffect, type ReactNode } from 'react';
 import { ChakraProvider } from '@chakra-ui/react';
 import { QueryClientProvider } from '@tanstack/react-query';
-import { forgetSession, refreshSession } from '../lib/api-client.js';
+import { forgetSession, mayRestoreSession, refreshSession } from '../lib/api-client.js';
 import { queryClient } from '../lib/query-client.js';
 import { getSession, onAccessTokenChange } from '../lib/session-store.js';
 import { system } from '../theme/system.js';
@@ -15,6 +15,10 @@ export function AppProviders({ children }: { children: ReactNode }) {
   useEffect(() => {
     // A reload keeps the person signed in through the refresh cookie.
     if (getSession().status !== 'restoring') return;
+    if (!mayRestoreSession()) {
+      forgetSession();
+      return;
+    }
     void refreshSession().then((session) => {
       if (!session) forgetSession();
     });

@@ -65,8 +65,21 @@ export function refreshSession(): Promise<SessionResponse | null> {
   return refreshing;
 }
 
+// Whether this browser was given a refresh cookie (which scripts cannot read). Without one there is no
+// session to restore, and asking the server would only log a 401 on the sign-in page.
+const SESSION_HINT = 'catline.session';
+const hint = {
+  set: () => globalThis.localStorage?.setItem(SESSION_HINT, '1'),
+  clear: () => globalThis.localStorage?.removeItem(SESSION_HINT),
+  present: () => globalThis.localStorage?.getItem(SESSION_HINT) === '1',
+};
+
+/** Whether a reload may find a session to restore through the refresh cookie. */
+export const mayRestoreSession = () => hint.present();
+
 /** Starts a session and renews its access token a minute before it runs out. */
 export function beginSession(session: SessionResponse) {
+  hint.set();
   startSession(session);
   clearTimeout(refreshTimer);
   const renewInMs = Math.max(5_000, Date.parse(session.expiresAt) - Date.now() - 60_000);
@@ -78,6 +91,7 @@ export function beginSession(session: SessionResponse) {
 }
 
 export function forgetSession(notice: string | null = null, leftOnPurpose = false) {
+  hint.clear();
   clearTimeout(refreshTimer);
   endSession(notice, leftOnPurpose);
 }

@@ -1,4 +1,4 @@
-import { IconButton, Menu, Portal } from '@chakra-ui/react';
+import { IconButton, Menu } from '@chakra-ui/react';
 import type { SlotView } from '@catline/contracts';
 import { MoreIcon } from '../../../components/icons.js';
 import type { SlotAction } from '../slot-actions.js';
@@ -7,8 +7,10 @@ import type { SlotAction } from '../slot-actions.js';
 export function ActionMenu({ label, actions, testId }: { label: string; actions: SlotAction[]; testId: string }) {
   if (actions.length === 0) return null;
   return (
+    // Rendered beside its button (no portal), so the open menu stays inside the page's main landmark;
+    // fixed positioning keeps it clear of the deck pool strip's scrolling.
     <Menu.Root
-      positioning={{ placement: 'bottom-end' }}
+      positioning={{ placement: 'bottom-end', strategy: 'fixed' }}
       onSelect={({ value }) => actions.find((action) => action.id === value)?.run()}
     >
       <Menu.Trigger asChild>
@@ -16,24 +18,22 @@ export function ActionMenu({ label, actions, testId }: { label: string; actions:
           <MoreIcon />
         </IconButton>
       </Menu.Trigger>
-      <Portal>
-        <Menu.Positioner>
-          <Menu.Content minW="12rem">
-            {actions.map((action) => (
-              <Menu.Item
-                key={action.id}
-                value={action.id}
-                minH="tap"
-                fontSize="md"
-                color={action.tone === 'danger' ? 'nogo.fg' : undefined}
-                data-action={action.id}
-              >
-                {action.label}
-              </Menu.Item>
-            ))}
-          </Menu.Content>
-        </Menu.Positioner>
-      </Portal>
+      <Menu.Positioner>
+        <Menu.Content minW="12rem">
+          {actions.map((action) => (
+            <Menu.Item
+              key={action.id}
+              value={action.id}
+              minH="tap"
+              fontSize="md"
+              color={action.tone === 'danger' ? 'nogo.fg' : undefined}
+              data-action={action.id}
+            >
+              {action.label}
+            </Menu.Item>
+          ))}
+        </Menu.Content>
+      </Menu.Positioner>
     </Menu.Root>
   );
 }

@@ -110,7 +110,7 @@ export function LaneColumn({ lane, slotIds, counts, menu, children }: LaneColumn
           {slotIds.length === 0 && (
             <Box
               textAlign="center"
-              color="fg.subtle"
+              color="fg.muted"
               fontSize="sm"
               py="6"
               borderWidth="1px"

@@ -29,14 +29,14 @@ function SlotCardFrame({
   return (
     <Flex
       align="flex-start"
-      bg={lifted ? 'bg.emphasized' : 'bg.panel'}
+      // A launched card steps back by its background, not by transparency: its badge keeps full contrast.
+      bg={lifted ? 'bg.emphasized' : slot.status === 'launched' ? 'bg.muted' : 'bg.panel'}
       borderWidth={mark === 'on-catapult' ? '2px' : '1px'}
       borderColor={nogo ? 'nogo.border' : mark === 'on-catapult' ? 'accent.solid' : 'border'}
       borderLeftWidth={mark ? '8px' : '4px'}
       borderLeftColor={slot.status === 'launched' ? 'go.solid' : nogo ? 'nogo.solid' : 'accent.solid'}
       rounded="card"
       boxShadow={lifted ? 'lg' : undefined}
-      opacity={slot.status === 'launched' ? 0.75 : 1}
     >
       {children}
     </Flex>

@@ -1,0 +1,99 @@
+import AxeBuilder from '@axe-core/playwright';
+import { expect, test, type Page } from '@playwright/test';
+import type { CycleView } from '@catline/contracts';
+import { apiAs, placeInLane, planCycle } from './support/demo-api.js';
+import { card, lane, openAs, pool } from './support/screens.js';
+
+/** axe's findings on the page as it stands, as "rule: the elements" lines, so a failure says what to fix. */
+async function axeViolations(page: Page) {
+  const results = await new AxeBuilder({ page }).analyze();
+  return results.violations.map(
+    (violation) =>
+      `${violation.id}: ${violation.nodes.map((node) => `${node.html.slice(0, 120)} (${node.failureSummary})`).join(', ')}`,
+  );
+}
+
+/** A launching cycle with an aircraft off, one on cat 1, aircraft waiting and one left in the pool. */
+async function launchingCycle(night: boolean) {
+  const { cycle, slotIds } = await planCycle({
+    start: true,
+    night,
+    aircraft: [
+      { side: 'C21', grossWeightLb: 44_800, pilot: 'pilot' },
+      { side: 'C22', grossWeightLb: 46_200 },
+      { side: 'D33', grossWeightLb: 45_500 },
+      { side: 'G43', grossWeightLb: 24_000 },
+      { side: 'L47', grossWeightLb: 48_000 },
+    ],
+  });
+  const handler = await apiAs('handler');
+  for (const [side, catapult] of [
+    ['C21', 1],
+    ['C22', 1],
+    ['D33', 2],
+    ['G43', 3],
+  ] as const) {
+    await placeInLane(handler, cycle.id, slotIds.get(side)!, catapult);
+  }
+  await handler.dispose();
+  return cycle;
+}
+
+for (const night of [false, true]) {
+  test(`the lineup board has no axe violation by ${night ? 'night' : 'day'}`, async ({ browser }) => {
+    const cycle = await launchingCycle(night);
+    const page = await openAs(browser, 'handler', `/lineup?cycle=${cycle.id}`);
+    await expect(card(lane(page, 1), 'C21')).toBeVisible();
+    await expect(page.getByTestId('connection-state')).toHaveAttribute('data-state', 'live');
+    expect(await axeViolations(page)).toEqual([]);
+
+    await page.getByRole('button', { name: 'Actions for C22' }).click();
+    await expect(page.getByRole('menuitem', { name: 'Mark down…' })).toBeVisible();
+    expect(await axeViolations(page), 'with a card menu open').toEqual([]);
+    await page.keyboard.press('Escape');
+    await page.context().close();
+  });
+}
+
+test('a draggable card is named by what it shows', async ({ browser }) => {
+  const cycle = await launchingCycle(false);
+  const page = await openAs(browser, 'handler', `/lineup?cycle=${cycle.id}`);
+  const handle = card(pool(page), 'L47').getByRole('button', { name: /^L47\b/ });
+  await expect(handle).toBeVisible();
+  await expect(handle).toHaveAccessibleName(/L47.*Planned.*FGD-63.*48,000 lb/);
+  await page.context().close();
+});
+
+test('launched aircraft on the board keep their badge readable (4.5:1)', async ({ browser }) => {
+  // The demo's flown cycle: its aircraft are off, each card with a "Launched" badge.
+  const observer = await apiAs('observer');
+  const cycles = (await (await observer.get('/api/cycles')).json()) as CycleView[];
+  await observer.dispose();
+  const flown = cycles.find((cycle) => cycle.launchedCount > 0)!;
+  expect(flown, 'a demo cycle with launched aircraft').toBeDefined();
+  const page = await openAs(browser, 'handler', `/lineup?cycle=${flown.id}`);
+  const launched = page.locator('[data-testid="slot-card"][data-status="launched"] [data-testid="slot-status"]');
+  await expect(launched.first()).toHaveText('Launched');
+  const results = await new AxeBuilder({ page }).withRules(['color-contrast']).analyze();
+  expect(results.violations.flatMap((violation) => violation.nodes.map((node) => node.failureSummary))).toEqual([]);
+  await page.context().close();
+});
+
+test('the sign-in page logs no error before anyone signs in', async ({ browser }) => {
+  const context = await browser.newContext();
+  const page = await context.newPage();
+  const problems: string[] = [];
+  page.on('console', (message) => {
+    if (message.type() === 'error') problems.push(message.text());
+  });
+  page.on('response', (response) => {
+    if (response.status() >= 400) problems.push(`${response.status()} ${response.url()}`);
+  });
+  await page.goto('/lineup');
+  await expect(page).toHaveURL(/\/sign-in/);
+  await expect(page.getByLabel('E-mail')).toBeVisible();
+  await page.waitForTimeout(1_000);
+  expect(problems).toEqual([]);
+  expect(await axeViolations(page), 'the sign-in page').toEqual([]);
+  await context.close();
+});

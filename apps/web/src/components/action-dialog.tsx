@@ -1,5 +1,6 @@
 import type { ReactNode } from 'react';
-import { Button, CloseButton, Dialog, Portal } from '@chakra-ui/react';
+import { Button, CloseButton, Dialog, Portal, Text } from '@chakra-ui/react';
+import { useFiguresLive } from './live-figures.js';
 
 interface ActionDialogProps {
   open: boolean;
@@ -27,6 +28,8 @@ export function ActionDialog({
   tone = 'accent',
   size = 'md',
 }: ActionDialogProps) {
+  // A dialog opens outside the live figures' disabled controls: its confirm waits for a live screen itself.
+  const live = useFiguresLive();
   return (
     <Dialog.Root
       open={open}
@@ -44,10 +47,15 @@ export function ActionDialog({
             </Dialog.Header>
             <Dialog.Body>{children}</Dialog.Body>
             <Dialog.Footer>
+              {!live && (
+                <Text fontSize="sm" color="fg.muted" me="auto" role="status">
+                  Not live: this waits until the screen has caught up.
+                </Text>
+              )}
               <Button variant="outline" onClick={onClose}>
                 Cancel
               </Button>
-              <Button colorPalette={tone} onClick={onConfirm} disabled={confirmDisabled} loading={pending}>
+              <Button colorPalette={tone} onClick={onConfirm} disabled={confirmDisabled || !live} loading={pending}>
                 {confirmLabel}
               </Button>
             </Dialog.Footer>

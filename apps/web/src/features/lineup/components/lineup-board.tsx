@@ -12,7 +12,9 @@ import { LiftedSlotCard, SortableSlotCard } from './slot-card.js';
 
 interface LineupBoardProps {
   snapshot: LineupSnapshot;
-  /** The handler edits; everyone else watches. */
+  /** The handler arranges the lineup: the card and catapult menus are there (disabled while not live). */
+  arranges: boolean;
+  /** The handler may drag now: arranges, and the board is live. */
   editable: boolean;
   onMove: (request: MoveSlotRequest) => void;
   /** The entries of a card's menu (empty for a person who only watches). */
@@ -26,6 +28,7 @@ interface LineupBoardProps {
 
 export function LineupBoard({
   snapshot,
+  arranges,
   editable,
   onMove,
   actionsFor,
@@ -49,7 +52,7 @@ export function LineupBoard({
         slot={slot}
         movable={editable && isMovable(slot)}
         mark={marks.get(slot.id)}
-        menu={editable && <SlotMenu slot={slot} actions={actionsFor(slot)} />}
+        menu={arranges && <SlotMenu slot={slot} actions={actionsFor(slot)} />}
       />
     );
   };
@@ -91,7 +94,7 @@ export function LineupBoard({
               slotIds={slotIds}
               counts={laneCounts(lane, slots)}
               menu={
-                editable && (
+                arranges && (
                   <ActionMenu
                     label={`Actions for cat ${lane.number}`}
                     testId="catapult-menu"

@@ -93,6 +93,7 @@ function LineupWorkspace({ snapshot }: { snapshot: LineupSnapshot }) {
       {notice && <NoticeBanner notice={notice} onDismiss={dismiss} />}
       <LineupBoard
         snapshot={snapshot}
+        arranges={arranges}
         editable={editable}
         onMove={(request) => move.mutate(request, { onError: refused('Your move') })}
         actionsFor={(slot) => slotActions(slot, { markDown: (chosen) => setDialog({ kind: 'down', slot: chosen }) })}

@@ -59,6 +59,11 @@ export default tseslint.config(
     },
   },
   {
+    // The web app's service worker runs in the worker's own scope, not the page's.
+    files: ['apps/web/public/sw.js'],
+    languageOptions: { globals: { ...globals.serviceworker } },
+  },
+  {
     files: ['apps/web/**/*.{ts,tsx}'],
     languageOptions: { globals: { ...globals.browser } },
     plugins: { 'react-hooks': reactHooks },

@@ -18,7 +18,7 @@ import { ReportsModule } from './reports/reports.module.js';
 import { ShipsModule } from './ships/ships.module.js';
 import { SquadronsModule } from './squadrons/squadrons.module.js';
 import { UsersModule } from './users/users.module.js';
-import { webAppBuilt, webDist } from './web-app/web-app.js';
+import { webAppBuilt, webAppHeaders, webDist } from './web-app/web-app.js';
 
 @Module({
   imports: [
@@ -38,7 +38,15 @@ import { webAppBuilt, webDist } from './web-app/web-app.js';
         retryAttempts: 3,
       }),
     }),
-    ...(webAppBuilt() ? [ServeStaticModule.forRoot({ rootPath: webDist, exclude: ['/api/{*path}'] })] : []),
+    ...(webAppBuilt()
+      ? [
+          ServeStaticModule.forRoot({
+            rootPath: webDist,
+            exclude: ['/api/{*path}'],
+            serveStaticOptions: { setHeaders: webAppHeaders },
+          }),
+        ]
+      : []),
     HealthModule,
     AuthModule,
     UsersModule,

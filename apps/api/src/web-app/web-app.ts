@@ -1,5 +1,6 @@
 import { existsSync } from 'node:fs';
-import { join } from 'node:path';
+import type { ServerResponse } from 'node:http';
+import { basename, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import type { INestApplication } from '@nestjs/common';
 import compression from 'compression';
@@ -9,6 +10,15 @@ import expressStaticGzip from 'express-static-gzip';
 export const webDist = fileURLToPath(new URL('../../../web/dist', import.meta.url));
 
 export const webAppBuilt = (): boolean => existsSync(webDist);
+
+/**
+ * Headers of the web app's own files (not the hashed assets, served below). The page and the service
+ * worker are checked again at every visit, so a new version reaches an installed tablet at once.
+ */
+export function webAppHeaders(response: ServerResponse, path: string): void {
+  const name = basename(path);
+  if (name === 'index.html' || name === 'sw.js') response.setHeader('Cache-Control', 'no-cache');
+}
 
 /**
  * Every text response compressed. The web app's assets were compressed at build (brotli and gzip

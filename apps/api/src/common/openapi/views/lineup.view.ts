@@ -19,6 +19,7 @@ import {
   NO_GO_CODES,
   type NoGoCode,
   type NoGoReason,
+  type ProjectedLaunch,
   REVERIFY_CAUSES,
   type ReverifyCause,
   ROLES,
@@ -485,6 +486,21 @@ export class SuggestedLaneDto {
   slotIds: number[];
 }
 
+@ApiSchema({ name: 'ProjectedLaunch', description: "One aircraft's launch as a lineup would project it." })
+export class ProjectedLaunchDto implements ProjectedLaunch {
+  @IdProperty()
+  slotId: number;
+
+  @IdProperty()
+  catapultId: number;
+
+  @InstantProperty()
+  launchAt: string;
+
+  @ApiProperty()
+  missesWindow: boolean;
+}
+
 @ApiSchema({ name: 'SuggestedLineup' })
 export class SuggestedLineupDto implements SuggestedLineup {
   @IntProperty({ minimum: 0 })
@@ -495,4 +511,10 @@ export class SuggestedLineupDto implements SuggestedLineup {
 
   @InstantProperty({ nullable: true })
   lastLaunchAt: string | null;
+
+  @ApiProperty({
+    type: [ProjectedLaunchDto],
+    description: 'Every aircraft still to launch once the suggestion is applied, in time order.',
+  })
+  projected: ProjectedLaunchDto[];
 }

@@ -200,7 +200,7 @@ describe('lineup commands', () => {
   it.each([
     ['a launch without a key', 'launch', { slotVersion: 0 }, 'idempotencyKey'],
     ['a launch key with spaces', 'launch', { slotVersion: 0, idempotencyKey: 'two words here' }, 'idempotencyKey'],
-    ['a suspend without a reason', 'suspend', { slotVersion: 0, reason: '   ' }, 'reason'],
+    ['a suspend with a blank reason', 'suspend', { slotVersion: 0, reason: '   ' }, 'reason'],
     ['an unknown readiness step', 'advance', { slotVersion: 0, to: 'airborne' }, 'to'],
     ['a weight in kilograms', 'weight-ack', { slotVersion: 0, grossWeightLb: '20 t' }, 'grossWeightLb'],
     ['a down with a spare named by side number', 'down', { slotVersion: 0, spareSlotId: 'spare' }, 'spareSlotId'],

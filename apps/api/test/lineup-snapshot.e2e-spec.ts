@@ -233,6 +233,7 @@ describe('lineup snapshot of the demo cycles', () => {
       lanes: [],
       pool: [],
       slots: [],
+      readinessSteps: [],
       lastLaunchAt: null,
       version: 0,
     };

@@ -1,5 +1,6 @@
 import type { INestApplication } from '@nestjs/common';
 import {
+  AIR_BOSS,
   AIR_OPS,
   HANDLER,
   LineupDriver,
@@ -44,7 +45,7 @@ describe('readiness steps and launch', () => {
     expect(response.body).toMatchObject({ code: 'not_your_catapult', message: 'C21 is not on your catapult (cat 2).' });
   });
 
-  it('refuses a skipped step, and a step for the aircraft behind the current one, with 409', async () => {
+  it('refuses a skipped step, and lets the aircraft behind taxi up and wait but go no further', async () => {
     const { cycle, first, second } = await executingCycle(pilot(4));
     const skipped = await deck.step(cycle.id, first.id, 'on_catapult');
     expect(skipped.status).toBe(409);
@@ -52,9 +53,15 @@ describe('readiness steps and launch', () => {
       code: 'wrong_step',
       message: 'C21 is planned; the next step is taxiing, not on catapult.',
     });
-    const behind = await deck.step(cycle.id, second.id, 'taxiing');
+    expect((await deck.step(cycle.id, first.id, 'taxiing')).status).toBe(200);
+    expect((await deck.step(cycle.id, first.id, 'on_catapult')).status).toBe(200);
+    expect((await deck.step(cycle.id, second.id, 'taxiing')).status).toBe(200);
+    const behind = await deck.step(cycle.id, second.id, 'on_catapult');
     expect(behind.status).toBe(409);
-    expect(behind.body).toMatchObject({ code: 'not_current_aircraft', message: 'C22 is not next on cat 1; C21 is.' });
+    expect(behind.body).toMatchObject({
+      code: 'not_current_aircraft',
+      message: 'C22 may taxi up and wait behind the deflector; C21 is on the catapult.',
+    });
   });
 
   it('refuses readiness steps before the cycle executes', async () => {
@@ -66,42 +73,94 @@ describe('readiness steps and launch', () => {
     expect(response.body.code).toBe('cycle_not_executing');
   });
 
-  it('refuses weight agreement and launch until the pilot has acknowledged the weight', async () => {
+  it('records the weight the pilot corrects from the tablet, works the setting out from it and logs both figures', async () => {
     const { cycle, first } = await executingCycle(pilot(5));
-    expect((await deck.step(cycle.id, first.id, 'taxiing')).status).toBe(200);
-    expect((await deck.step(cycle.id, first.id, 'on_catapult')).status).toBe(200);
-
-    const agreed = await deck.step(cycle.id, first.id, 'weight_agreed');
-    expect(agreed.status).toBe(409);
-    expect(agreed.body).toMatchObject({
-      code: 'weight_not_agreed',
-      message: 'The pilot of C21 has not acknowledged the gross weight of 44,000 lb yet.',
-    });
-    const launch = await deck.launch(cycle.id, await deck.slot(cycle.id, first.id), launchKey());
-    expect(launch.status).toBe(409);
-    expect(launch.body.code).toBe('weight_not_agreed');
-
-    await deck.acknowledgeWeight(cycle.id, first.id, pilot(5));
-    expect((await deck.step(cycle.id, first.id, 'weight_agreed')).status).toBe(200);
-    const slot = await deck.slot(cycle.id, first.id);
-    expect(slot.pilotWeightAckAt).not.toBeNull();
-    expect(slot.catapultWeightAckAt).not.toBeNull();
-  });
-
-  it('lets only the pilot of the slot acknowledge, and only the planned weight', async () => {
-    const { cycle, first } = await executingCycle(pilot(6));
-    const slot = await deck.slot(cycle.id, first.id);
-    const path = `/api/cycles/${cycle.id}/lineup/slots/${slot.id}/weight-ack`;
-    const stranger = await deck.call(pilot(7), 'post', path, { slotVersion: slot.version, grossWeightLb: 44_000 });
+    await deck.stepThrough(cycle.id, first.id, 'on_catapult', deckEdgeOperator(1));
+    const shown = await deck.slot(cycle.id, first.id);
+    const path = `/api/cycles/${cycle.id}/lineup/slots/${first.id}/weight-ack`;
+    const stranger = await deck.call(pilot(7), 'post', path, { slotVersion: shown.version, grossWeightLb: 44_000 });
     expect(stranger.status).toBe(403);
     expect(stranger.body.code).toBe('not_your_slot');
-    const wrong = await deck.call(pilot(6), 'post', path, { slotVersion: slot.version, grossWeightLb: 43_000 });
-    expect(wrong.status).toBe(409);
-    expect(wrong.body).toMatchObject({
-      code: 'weight_mismatch',
-      message:
-        'You entered 43,000 lb; the planned gross weight of C21 is 44,000 lb. Settle it with the catapult officer.',
+    const answered = await deck.call(pilot(5), 'post', path, { slotVersion: shown.version, grossWeightLb: 46_500 });
+    expect(answered.status).toBe(200);
+    expect(answered.body.change.summary).toBe('Pilot of C21 answers 46,500 lb (planned 44,000 lb)');
+
+    const planned = await deck.step(cycle.id, first.id, 'weight_agreed', deckEdgeOperator(1), 44_000);
+    expect(planned.status).toBe(409);
+    expect(planned.body.code).toBe('weight_mismatch');
+    const agreed = await deck.step(cycle.id, first.id, 'weight_agreed', deckEdgeOperator(1), 46_500);
+    expect(agreed.body.change.summary).toBe('C21 weight agreed on cat 1: 46,500 lb (planned 44,000 lb)');
+    expect(agreed.body.change.actor).toMatchObject({ role: 'deck_edge_operator' });
+    expect(agreed.body.change.at).toEqual(expect.any(String));
+    const recorded = await deck.slot(cycle.id, first.id);
+    expect(recorded).toMatchObject({ status: 'weight_agreed', agreedWeightLb: 46_500, grossWeightLb: 44_000 });
+    // 2,500 lb more on the same catapult and wind: a higher end speed is wanted, so no lower setting.
+    expect(recorded.figures!.catapultSetting!).toBeGreaterThanOrEqual(shown.figures!.catapultSetting!);
+    expect(recorded.figures!.requiredAirspeedKt!).toBeGreaterThan(shown.figures!.requiredAirspeedKt!);
+  });
+
+  it('takes the agreement back when the pilot answers a different figure after it was recorded', async () => {
+    const { cycle, first } = await executingCycle(pilot(4));
+    await deck.readyToLaunch(cycle.id, first.id, pilot(4));
+    const ready = await deck.slot(cycle.id, first.id);
+    const corrected = await deck.call(pilot(4), 'post', `/api/cycles/${cycle.id}/lineup/slots/${first.id}/weight-ack`, {
+      slotVersion: ready.version,
+      grossWeightLb: 45_000,
     });
+    expect(corrected.body.change.summary).toBe(
+      'Pilot of C21 answers 45,000 lb (planned 44,000 lb); re-verify: C21 to on catapult',
+    );
+    expect(await deck.slot(cycle.id, first.id)).toMatchObject({
+      status: 'on_catapult',
+      agreedWeightLb: null,
+      reverifyCause: 'weight',
+    });
+    expect((await deck.launch(cycle.id, await deck.slot(cycle.id, first.id), launchKey())).body.code).toBe(
+      'weight_not_agreed',
+    );
+  });
+
+  it.each([
+    ['the catapult officer', () => catapultOfficer(1)],
+    ['the deck edge operator', () => deckEdgeOperator(1)],
+    ['the pilot of the aircraft', () => pilot(2)],
+    ['the air boss', () => AIR_BOSS],
+  ])('suspends in one tap by %s, with no reason asked', async (_who, by) => {
+    const { cycle, first } = await executingCycle(pilot(2));
+    const ready = await deck.readyToLaunch(cycle.id, first.id, pilot(2));
+    const path = `/api/cycles/${cycle.id}/lineup/slots/${first.id}/suspend`;
+    const response = await deck.call(by(), 'post', path, { slotVersion: ready.version });
+    expect(response.status).toBe(200);
+    expect(response.body.change.summary).toBe('C21 suspended on cat 1');
+    expect(await deck.slot(cycle.id, first.id)).toMatchObject({ status: 'suspended', suspendReason: null });
+  });
+
+  it('refuses a suspend by another pilot, the crew of another catapult and the handler', async () => {
+    const { cycle, first } = await executingCycle(pilot(2));
+    const ready = await deck.readyToLaunch(cycle.id, first.id, pilot(2));
+    const path = `/api/cycles/${cycle.id}/lineup/slots/${first.id}/suspend`;
+    const codes = [];
+    for (const by of [pilot(3), deckEdgeOperator(2), catapultOfficer(2), HANDLER])
+      codes.push((await deck.call(by, 'post', path, { slotVersion: ready.version })).body.code);
+    expect(codes).toEqual(['not_your_slot', 'not_your_catapult', 'not_your_catapult', 'forbidden_role']);
+    expect((await deck.slot(cycle.id, first.id)).status).toBe('pilot_ready');
+  });
+
+  it('lets the person who took a step undo it within 10 s, and nobody else', async () => {
+    const { cycle, first } = await executingCycle(pilot(3));
+    await deck.readyToLaunch(cycle.id, first.id, pilot(3));
+    const undoBy = async (email: string) =>
+      deck.call(email, 'post', `/api/cycles/${cycle.id}/lineup/slots/${first.id}/undo`, {
+        slotVersion: (await deck.slot(cycle.id, first.id)).version,
+      });
+    const other = await undoBy(deckEdgeOperator(1));
+    expect(other.status).toBe(403);
+    expect(other.body.code).toBe('not_your_step');
+    const undone = await undoBy(catapultOfficer(1));
+    expect(undone.status).toBe(200);
+    expect(undone.body.change.summary).toBe('C21 on cat 1: pilot ready undone');
+    expect((await deck.slot(cycle.id, first.id)).status).toBe('checks_clear');
+    expect((await undoBy(catapultOfficer(1))).body.code).toBe('nothing_to_undo');
   });
 
   it('suspends with a reason, resumes to on catapult, and launches after the steps again', async () => {
@@ -122,9 +181,13 @@ describe('readiness steps and launch', () => {
 
     expect((await deck.step(cycle.id, first.id, 'resume')).status).toBe(200);
     const resumed = await deck.slot(cycle.id, first.id);
-    expect(resumed).toMatchObject({ status: 'on_catapult', suspendReason: null, catapultWeightAckAt: null });
-    expect((await deck.step(cycle.id, first.id, 'weight_agreed')).status).toBe(200);
-    expect((await deck.step(cycle.id, first.id, 'tensioned')).status).toBe(200);
+    expect(resumed).toMatchObject({
+      status: 'on_catapult',
+      suspendReason: null,
+      catapultWeightAckAt: null,
+      agreedWeightLb: null,
+    });
+    await deck.stepThrough(cycle.id, first.id);
     expect((await deck.launch(cycle.id, await deck.slot(cycle.id, first.id), launchKey())).status).toBe(200);
   });
 
@@ -169,7 +232,7 @@ describe('readiness steps and launch', () => {
         deckEdgeOperator(1),
       );
       expect(refusedAgain.body.code).toBe(code);
-      expect((await deck.slot(cycle.id, slot.id)).status).toBe('tensioned');
+      expect((await deck.slot(cycle.id, slot.id)).status).toBe('pilot_ready');
     },
   );
 
@@ -187,7 +250,7 @@ describe('readiness steps and launch', () => {
       },
     );
     expect(response.status).toBe(400);
-    expect((await deck.slot(cycle.id, first.id)).status).toBe('tensioned');
+    expect((await deck.slot(cycle.id, first.id)).status).toBe('pilot_ready');
   });
 
   it('launches a soft limit only under the air boss’s waiver, marked on the record', async () => {
@@ -241,7 +304,7 @@ describe('readiness steps and launch', () => {
     });
   });
 
-  it('drops a tensioned aircraft back to weight agreed when the wind changes, until tension is taken again', async () => {
+  it('drops an aircraft past the weight agreement back to it when the wind changes, until the setting is read back', async () => {
     const { cycle, first } = await executingCycle(pilot(7));
     await deck.readyToLaunch(cycle.id, first.id, pilot(7));
     const { version } = await deck.snapshot(cycle.id);
@@ -264,9 +327,10 @@ describe('readiness steps and launch', () => {
       message: 'Figures changed (the wind) — re-verify the setting for C21.',
     });
 
-    expect((await deck.step(cycle.id, first.id, 'tensioned')).status).toBe(200);
+    expect((await deck.step(cycle.id, first.id, 'setting_set')).status).toBe(200);
+    expect(await deck.slot(cycle.id, first.id)).toMatchObject({ reverifyCause: null, gates: [] });
+    await deck.stepThrough(cycle.id, first.id);
     const verified = await deck.slot(cycle.id, first.id);
-    expect(verified).toMatchObject({ status: 'tensioned', reverifyCause: null, gates: [] });
     expect((await deck.launch(cycle.id, verified, launchKey())).status).toBe(200);
   });
 
@@ -283,7 +347,7 @@ describe('readiness steps and launch', () => {
     } finally {
       await deck.ok(HANDLER, 'post', path, { status: 'up', basisStatus: 'down' });
     }
-    expect(ready.status).toBe('tensioned');
+    expect(ready.status).toBe('pilot_ready');
   });
 
   it('lets the deck edge operator of the catapult step, suspend and launch, and refuses the one of another', async () => {
@@ -293,8 +357,7 @@ describe('readiness steps and launch', () => {
     expect(other.body.code).toBe('not_your_catapult');
     expect((await deck.step(cycle.id, first.id, 'taxiing', deckEdgeOperator(1))).status).toBe(200);
     await deck.acknowledgeWeight(cycle.id, first.id, pilot(6));
-    for (const to of ['on_catapult', 'weight_agreed', 'tensioned'] as const)
-      expect((await deck.step(cycle.id, first.id, to, deckEdgeOperator(1))).status).toBe(200);
+    await deck.stepThrough(cycle.id, first.id, undefined, deckEdgeOperator(1));
     const launched = await deck.launch(cycle.id, await deck.slot(cycle.id, first.id), launchKey(), deckEdgeOperator(1));
     expect(launched.status).toBe(200);
     expect(launched.body.change.actor).toMatchObject({ role: 'deck_edge_operator', name: 'Rune Halsworthy' });

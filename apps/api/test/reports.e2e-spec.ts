@@ -141,8 +141,8 @@ describe('cycle reports, exports and shot counts', () => {
       slotVersion: tensioned.version,
       reason: SUSPEND,
     });
-    for (const to of ['resume', 'weight_agreed', 'tensioned'] as const)
-      expect((await deck.step(cycle.id, ids['C25'], to)).status).toBe(200);
+    expect((await deck.step(cycle.id, ids['C25'], 'resume')).status).toBe(200);
+    await deck.stepThrough(cycle.id, ids['C25']);
     await launch('C25');
     await deck.readyToLaunch(cycle.id, ids['C27'], pilot(5));
     await launch('C27');

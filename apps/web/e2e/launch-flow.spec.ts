@@ -31,16 +31,26 @@ test('handler drags an aircraft to cat 1, the pilot sees it live, the catapult o
   await catOfficer.getByTestId('step-taxiing').click();
   await catOfficer.getByTestId('step-on_catapult').click();
   await expect(catOfficer.getByTestId('step-on_catapult')).toHaveAttribute('data-done', 'true');
-  await expect(catOfficer.getByTestId('waiting-for-pilot')).toBeVisible();
-  await expect(catOfficer.getByTestId('step-weight_agreed')).toBeDisabled();
+  await expect(catOfficer.getByTestId('pilot-weight')).toContainText('Show the pilot 40,000 lb');
   await expect(catOfficer.getByTestId('launch')).toBeDisabled();
 
   await pilot.getByTestId('acknowledge-weight').click();
   await expect(pilot.getByTestId('weight-acknowledged')).toBeVisible();
+  await expect(catOfficer.getByTestId('pilot-weight')).toContainText('The pilot agrees 40,000 lb');
 
-  await expect(catOfficer.getByTestId('step-weight_agreed')).toBeEnabled();
-  await catOfficer.getByTestId('step-weight_agreed').click();
-  await catOfficer.getByTestId('step-tensioned').click();
+  // One tap per step, in the ship's order.
+  for (const step of [
+    'weight_agreed',
+    'setting_set',
+    'deflector_up',
+    'tensioned',
+    'run_up',
+    'checks_clear',
+    'pilot_ready',
+  ]) {
+    await catOfficer.getByTestId(`step-${step}`).click();
+    await expect(catOfficer.getByTestId(`step-${step}`)).toHaveAttribute('data-done', 'true');
+  }
   await expect(catOfficer.getByTestId('launch')).toBeEnabled();
   // A double tap must launch once.
   await catOfficer.getByTestId('launch').dblclick();

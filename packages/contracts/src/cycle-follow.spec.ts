@@ -63,6 +63,7 @@ function serverHistory(startVersion: number, laneOfChange: readonly number[]) {
     lanes: Array.from({ length: LANES }, (_, i) => lane(i + 1, [])),
     pool: [],
     slots: [],
+    readinessSteps: [],
     lastLaunchAt: null,
     version: startVersion,
   };

@@ -1,3 +1,4 @@
+import type { ReadinessStep } from './lineup.js';
 import type { Role } from './roles.js';
 
 export type CatapultPosition = 'bow' | 'waist';
@@ -37,6 +38,11 @@ export interface ShipProfile {
   clearingTurnDeg: Record<CatapultPosition, number>;
   /** Departure instruction per weather case. */
   departures: Record<'I' | 'II' | 'III', string>;
+  /**
+   * The readiness steps the ship runs, a subset of READINESS_STEPS in its order with on_catapult,
+   * weight_agreed, setting_set and tensioned in; left out, every step.
+   */
+  readinessSteps?: ReadinessStep[];
 }
 
 export interface ShipView {

@@ -13,6 +13,8 @@ function replaceById<T>(items: readonly T[], updates: readonly T[] | undefined, 
  */
 export function applyLineupPatch(snapshot: LineupSnapshot, version: number, patch: LineupPatch): LineupSnapshot {
   return {
+    // The ship's steps change with its profile, not with a cycle's change: a fresh snapshot brings them.
+    readinessSteps: snapshot.readinessSteps,
     cycle: patch.cycle ?? snapshot.cycle,
     lanes: replaceById(snapshot.lanes, patch.lanes, (lane) => lane.catapultId),
     pool: patch.pool ?? snapshot.pool,

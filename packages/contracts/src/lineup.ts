@@ -7,7 +7,12 @@ export const SLOT_STATUSES = [
   'taxiing',
   'on_catapult',
   'weight_agreed',
+  'setting_set',
+  'deflector_up',
   'tensioned',
+  'run_up',
+  'checks_clear',
+  'pilot_ready',
   'launched',
   'suspended',
   'down',
@@ -204,6 +209,10 @@ export interface SlotView {
   afterburnerRequired: boolean;
   departure: string;
   pilotWeightAckAt: string | null;
+  /** The figure the pilot answered from the tablet; null when not answered there. */
+  pilotWeightAckLb: number | null;
+  /** The gross weight the crew recorded as agreed; the setting is worked out from it. */
+  agreedWeightLb: number | null;
   catapultWeightAckAt: string | null;
   suspendReason: string | null;
   overrideReason: string | null;
@@ -240,6 +249,8 @@ export interface LaneView extends WindOverDeck {
 
 export interface LineupSnapshot {
   cycle: CycleView;
+  /** The ship's readiness steps, in order. */
+  readinessSteps: ReadinessStep[];
   lanes: LaneView[];
   /** Slots in the deck pool, by side number. */
   pool: number[];
@@ -342,18 +353,40 @@ export interface SetCatapultStatusRequest {
   reason?: string;
 }
 
-/** Readiness steps a catapult officer takes, in order; `resume` returns a suspended slot to on_catapult. */
-export const READINESS_STEPS = ['taxiing', 'on_catapult', 'weight_agreed', 'tensioned'] as const;
+/**
+ * Every readiness step in the trade's order (launch-math's READINESS_STEP_CATALOGUE); a ship runs these
+ * or a subset of them in this order (its profile's `readinessSteps`). `resume` returns a suspended slot
+ * to on_catapult.
+ */
+export const READINESS_STEPS = [
+  'taxiing',
+  'on_catapult',
+  'weight_agreed',
+  'setting_set',
+  'deflector_up',
+  'tensioned',
+  'run_up',
+  'checks_clear',
+  'pilot_ready',
+] as const;
 export type ReadinessStep = (typeof READINESS_STEPS)[number];
 
 export interface AdvanceSlotRequest {
   slotVersion: number;
   to: ReadinessStep | 'resume';
+  /** With `weight_agreed`: the gross weight the crew records as agreed with the pilot, lb. */
+  agreedWeightLb?: number;
+}
+
+/** The person who took the last step takes it back, within 10 s. */
+export interface UndoStepRequest {
+  slotVersion: number;
 }
 
 export interface SuspendSlotRequest {
   slotVersion: number;
-  reason: string;
+  /** Left out: one tap suspends, and the reason is chosen afterwards. */
+  reason?: string;
 }
 
 export interface LaunchSlotRequest {

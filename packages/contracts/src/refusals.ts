@@ -31,6 +31,10 @@ export const LINEUP_REFUSAL_CODES = [
   'end_speed_over_max',
   'excess_below_recommended',
   'wind_reading_stale',
+  /** Undo of a readiness step: none to undo, someone else's step, or more than 10 s ago. */
+  'nothing_to_undo',
+  'not_your_step',
+  'undo_expired',
   /** A waiver for a soft gate that is open: there is nothing to waive. */
   'nothing_to_waive',
   'already_launched',

@@ -28,3 +28,5 @@ export * from './after-shot/weather-case.js';
 export * from './after-shot/after-shot.js';
 export * from './launch/launch-gates.js';
 export * from './readiness/reverify.js';
+export * from './readiness/readiness-steps.js';
+export * from './readiness/readiness-machine.js';

@@ -28,7 +28,8 @@ export function recordShot(input: ShotInput): LaunchRecord {
     launchedAt: input.at.toISOString(),
     catapultId: catapult.id,
     catapultNumber: catapult.number,
-    grossWeightLb: slot.grossWeightLb,
+    // The weight the crew recorded as agreed with the pilot, which the setting was worked out for.
+    grossWeightLb: slot.agreedWeightLb ?? slot.grossWeightLb,
     fuelLb: slot.fuelLb,
     stores: slot.stores,
     // The approved launch data gives no setting yet; the energy model's is the cross-check.

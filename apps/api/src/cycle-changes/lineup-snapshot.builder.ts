@@ -24,6 +24,7 @@ import type { Catapult } from '../database/entities/catapult.entity.js';
 import type { Slot } from '../database/entities/slot.entity.js';
 import { launchFiguresView } from './launch-figures.js';
 import { recordedFigures } from './launch-record.js';
+import { shipReadinessSteps } from './readiness-steps.js';
 import { slotLaunchGates } from './slot-launch-gates.js';
 import {
   aircraftProfile,
@@ -136,12 +137,15 @@ function figuresIn(conditions: CycleConditions, slot: Slot): LaunchFigures | nul
   return lane
     ? launchFiguresView({
         type: slot.aircraft.type,
-        grossWeightLb: slot.grossWeightLb,
+        grossWeightLb: launchWeight(slot),
         densityRatio: conditions.density,
         ...lane,
       })
     : null;
 }
+
+/** The weight the figures are worked out for: the agreed one once the crew recorded it, the planned one before. */
+export const launchWeight = (slot: Slot): number => slot.agreedWeightLb ?? slot.grossWeightLb;
 
 /** The figures of one slot on its catapult under the cycle's conditions; null in the deck pool. */
 export const slotFigures = (state: LineupState, slot: Slot): LaunchFigures | null =>
@@ -188,10 +192,12 @@ export function buildSnapshot(state: LineupState): LineupSnapshot {
       position: slot.position,
       status: slot.status,
       version: slot.version,
-      trimDeg: record ? record.trimDeg : takeOffTrim(type, pounds(slot.grossWeightLb)),
-      afterburnerRequired: record?.afterburnerRequired ?? afterburnerRequired(type, pounds(slot.grossWeightLb)),
+      trimDeg: record ? record.trimDeg : takeOffTrim(type, pounds(launchWeight(slot))),
+      afterburnerRequired: record?.afterburnerRequired ?? afterburnerRequired(type, pounds(launchWeight(slot))),
       departure: conditions.departure,
       pilotWeightAckAt: iso(slot.pilotWeightAckAt),
+      pilotWeightAckLb: slot.pilotWeightAckLb,
+      agreedWeightLb: slot.agreedWeightLb,
       catapultWeightAckAt: iso(slot.catapultWeightAckAt),
       suspendReason: slot.suspendReason,
       overrideReason: slot.overrideReason,
@@ -234,6 +240,7 @@ export function buildSnapshot(state: LineupState): LineupSnapshot {
     .map((slot) => slot.id);
 
   return {
+    readinessSteps: shipReadinessSteps(state),
     cycle: toCycleView(cycle, {
       slotCount: state.slots.length,
       launchedCount: state.slots.filter((slot) => slot.status === 'launched').length,

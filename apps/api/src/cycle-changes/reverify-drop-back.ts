@@ -1,7 +1,8 @@
-import { READINESS_STEPS, type ChangeActor, type SlotStatus } from '@catline/contracts';
+import type { ChangeActor, SlotStatus } from '@catline/contracts';
 import { reverifyDropBack, type ReverifyCause } from '@catline/launch-math';
 import type { EntityManager } from 'typeorm';
 import type { LineupState } from './lineup-state.js';
+import { shipReadinessSteps } from './readiness-steps.js';
 import { updateSlot, type SlotValues } from './slot-writes.js';
 
 const label = (status: string) => status.replaceAll('_', ' ');
@@ -24,13 +25,12 @@ export async function dropBackForReverify(
   const dropped: string[] = [];
   for (const slot of state.slots) {
     if (slotIds && !slotIds.includes(slot.id)) continue;
-    const back = reverifyDropBack(READINESS_STEPS, slot.status, cause);
+    const back = reverifyDropBack(shipReadinessSteps(state), slot.status, cause);
     if (!back) continue;
     // A waiver was given for the figures as they were; the new ones need their own.
-    const values: SlotValues = { status: back.to as SlotStatus, reverifyCause: cause, waivers: null };
+    const values: SlotValues = { status: back.to as SlotStatus, reverifyCause: cause, waivers: null, lastStep: null };
     if (back.to !== slot.status) Object.assign(values, { statusAt: now, statusBy: by });
-    if (back.weightAgreementVoid)
-      Object.assign(values, { catapultWeightAckAt: null, pilotWeightAckAt: null, pilotWeightAckLb: null });
+    if (back.weightAgreementVoid) Object.assign(values, { catapultWeightAckAt: null, agreedWeightLb: null });
     await updateSlot(manager, slot, values);
     dropped.push(`${slot.aircraft.sideNumber} to ${label(back.to)}`);
   }

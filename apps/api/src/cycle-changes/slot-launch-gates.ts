@@ -12,9 +12,8 @@ const REVERIFY_WORDS = {
   launch_data: 'the launch data',
 } as const;
 
-/** The pilot's agreement and the crew's record of the same figure. */
-export const weightAgreed = (slot: Slot) =>
-  slot.catapultWeightAckAt !== null && slot.pilotWeightAckAt !== null && slot.pilotWeightAckLb === slot.grossWeightLb;
+/** The crew recorded the figure agreed with the pilot (by the tablet or by signal). */
+export const weightAgreed = (slot: Slot) => slot.catapultWeightAckAt !== null && slot.agreedWeightLb !== null;
 
 /** A gate in a sentence for the deck crew; a gate the figures close takes the figures' own sentence. */
 function sentence(gate: LaunchGate, state: LineupState, slot: Slot, figures: LaunchFigures): string {

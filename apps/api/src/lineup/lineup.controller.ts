@@ -35,6 +35,7 @@ import {
   LineupSnapshotDto,
   SuggestedLineupDto,
 } from '../common/openapi/views/lineup.view.js';
+import { UndoStepDto } from './dto/undo-step.dto.js';
 
 // Every command answers 200 with the accepted change (a repeated launch answers with the original one).
 @ApiTags('lineup')
@@ -165,7 +166,14 @@ export class LineupController {
     refuses: {
       403: ['not_your_catapult'],
       404: ['not_found'],
-      409: ['stale_basis', 'cycle_not_executing', 'not_current_aircraft', 'wrong_step', 'weight_not_agreed'],
+      409: [
+        'stale_basis',
+        'cycle_not_executing',
+        'not_current_aircraft',
+        'wrong_step',
+        'weight_not_agreed',
+        'weight_mismatch',
+      ],
     },
   })
   @Roles(...CATAPULT_ROLES)
@@ -183,12 +191,12 @@ export class LineupController {
   @ApiDoc('Suspend the aircraft on the catapult', {
     response: LineupCommandResultDto,
     refuses: {
-      403: ['not_your_catapult'],
+      403: ['not_your_catapult', 'not_your_slot'],
       404: ['not_found'],
-      409: ['stale_basis', 'cycle_not_executing', 'not_current_aircraft', 'wrong_step'],
+      409: ['stale_basis', 'wrong_step'],
     },
   })
-  @Roles(...CATAPULT_ROLES)
+  @Roles(...CATAPULT_ROLES, 'pilot', 'air_boss')
   @Post('slots/:slotId/suspend')
   @HttpCode(HttpStatus.OK)
   suspend(
@@ -198,6 +206,27 @@ export class LineupController {
     @CurrentUser() user: AuthenticatedUser,
   ): Promise<LineupCommandResult> {
     return this.readiness.suspend(cycleId, user, slotId, body);
+  }
+
+  @ApiDoc('Undo the last readiness step', {
+    response: LineupCommandResultDto,
+    description: 'Only by the person who took it, within 10 seconds.',
+    refuses: {
+      403: ['not_your_catapult', 'not_your_step'],
+      404: ['not_found'],
+      409: ['stale_basis', 'nothing_to_undo', 'undo_expired'],
+    },
+  })
+  @Roles(...CATAPULT_ROLES)
+  @Post('slots/:slotId/undo')
+  @HttpCode(HttpStatus.OK)
+  undo(
+    @Param('cycleId', ParseIntPipe) cycleId: number,
+    @Param('slotId', ParseIntPipe) slotId: number,
+    @Body() body: UndoStepDto,
+    @CurrentUser() user: AuthenticatedUser,
+  ): Promise<LineupCommandResult> {
+    return this.readiness.undo(cycleId, user, slotId, body);
   }
 
   @ApiDoc('Launch the aircraft on the catapult', {
@@ -252,13 +281,13 @@ export class LineupController {
     return this.waivers.waive(cycleId, user, slotId, body);
   }
 
-  @ApiDoc('Agree the gross weight', {
+  @ApiDoc('Agree or answer the gross weight', {
     response: LineupCommandResultDto,
-    description: "The pilot's side of the weight check.",
+    description: "The pilot's side of the weight check: the planned figure, or the one the pilot holds.",
     refuses: {
       403: ['not_your_slot'],
       404: ['not_found'],
-      409: ['stale_basis', 'cycle_not_executing', 'wrong_step', 'weight_mismatch'],
+      409: ['stale_basis', 'cycle_closed', 'wrong_step'],
     },
   })
   @Roles('pilot')

@@ -5,9 +5,10 @@ import type {
   LineupCommandResult,
   SlotStatus,
   SuspendSlotRequest,
+  UndoStepRequest,
   WeightAckRequest,
 } from '@catline/contracts';
-import { afterburnerRequired, pounds, takeOffTrim } from '@catline/launch-math';
+import { afterburnerRequired, pounds, takeOffTrim, type ReadinessCommand } from '@catline/launch-math';
 import { Injectable } from '@nestjs/common';
 import type { EntityManager } from 'typeorm';
 import { Aircraft } from '../database/entities/aircraft.entity.js';
@@ -21,31 +22,22 @@ import { CycleClosing } from '../cycles/cycle-closing.service.js';
 import type { Slot } from '../database/entities/slot.entity.js';
 import { LineupChangesService } from '../cycle-changes/lineup-changes.service.js';
 import { aircraftProfile } from '../cycle-changes/launch-math.adapter.js';
-import { laneSlots, slotFigures } from '../cycle-changes/lineup-snapshot.builder.js';
+import { launchWeight, slotFigures } from '../cycle-changes/lineup-snapshot.builder.js';
 import { recordShot } from '../cycle-changes/launch-record.js';
 import { slotLaunchGates, waiverNote } from '../cycle-changes/slot-launch-gates.js';
+import { dropBackForReverify } from '../cycle-changes/reverify-drop-back.js';
 import type { LineupState } from '../cycle-changes/lineup-state.js';
 import { LineupException } from '../cycle-changes/lineup.exception.js';
-import { advance, launchRefusal, suspend, type Transition } from './readiness-machine.js';
+import { transition } from './readiness-facts.js';
 import { type SlotValues, updateSlot } from '../cycle-changes/slot-writes.js';
 
-const ACKNOWLEDGEABLE: readonly SlotStatus[] = ['planned', 'taxiing', 'on_catapult', 'suspended'];
+const ANSWERED_AFTER: readonly SlotStatus[] = ['launched', 'down', 'scratched'];
 
-const STEP_SUMMARY: Partial<Record<SlotStatus, string>> = {
-  taxiing: 'taxiing to',
-  on_catapult: 'on',
-  weight_agreed: 'weight agreed on',
-  tensioned: 'tensioned on',
-};
+const label = (status: string) => status.replaceAll('_', ' ');
 
 const lb = (weight: number) => `${weight.toLocaleString('en-US')} lb`;
 
-function allowed(transition: Transition): SlotStatus {
-  if (!transition.ok) throw new LineupException(transition.refusal.code, transition.refusal.message);
-  return transition.status;
-}
-
-/** The catapult officer's readiness steps, suspend and launch, and the pilot's weight acknowledgement. */
+/** The catapult crew's readiness steps, undo, suspend and launch, and the pilot's answer on the weight. */
 @Injectable()
 export class ReadinessService {
   constructor(
@@ -67,46 +59,70 @@ export class ReadinessService {
       const catapult = this.ownCatapult(state, user, slot);
       await this.basis.slotAsSeen(manager, state, slot, request.slotVersion);
       const side = slot.aircraft.sideNumber;
-      if (state.cycle.state !== 'executing') {
-        throw new LineupException(
-          'cycle_not_executing',
-          `Cycle ${state.cycle.number} is ${state.cycle.state}; readiness steps start once it is executing.`,
-        );
-      }
-      const current = laneSlots(state, catapult.id).find((other) => other.status !== 'launched');
-      if (current && current.id !== slot.id) {
-        throw new LineupException(
-          'not_current_aircraft',
-          `${side} is not next on cat ${catapult.number}; ${current.aircraft.sideNumber} is.`,
-        );
-      }
-      const status = allowed(advance(side, slot.status, request.to));
+      this.requireExecuting(state);
       const now = this.clock.now();
-      const values: SlotValues = { status, statusAt: now, statusBy: user };
+      const command: ReadinessCommand =
+        request.to === 'resume'
+          ? { kind: 'resume' }
+          : { kind: 'advance', to: request.to, at: now.getTime(), agreedWeight: request.agreedWeightLb };
+      const next = transition(state, slot, user, command, request.to);
+      const status = next.status as SlotStatus;
+      const values: SlotValues = {
+        status,
+        statusAt: now,
+        statusBy: user,
+        agreedWeightLb: next.agreedWeight,
+        reverifyCause: next.reverify,
+        lastStep: next.lastStep,
+      };
       if (status === 'taxiing') values.taxiingAt = now;
-      if (status === 'on_catapult')
-        Object.assign(values, { onCatapultAt: now, suspendReason: null, catapultWeightAckAt: null });
-      // Tension is taken on the setting read back for the figures as they are now: any re-verify is done.
-      if (status === 'tensioned') Object.assign(values, { tensionedAt: now, reverifyCause: null });
-      if (status === 'weight_agreed') {
-        if (!this.pilotAgreed(slot)) {
-          throw new LineupException(
-            'weight_not_agreed',
-            `The pilot of ${side} has not acknowledged the gross weight of ${lb(slot.grossWeightLb)} yet.`,
-          );
-        }
-        values.catapultWeightAckAt = now;
-      }
+      if (status === 'on_catapult') Object.assign(values, { onCatapultAt: now, suspendReason: null });
+      if (next.agreedWeight === null) values.catapultWeightAckAt = null;
+      if (status === 'tensioned') values.tensionedAt = now;
+      if (status === 'weight_agreed') values.catapultWeightAckAt = now;
       await updateSlot(manager, slot, values);
-      const step = request.to === 'resume' ? 'resumed on' : STEP_SUMMARY[status];
+      const what =
+        request.to === 'resume'
+          ? `${side} resumed on cat ${catapult.number}`
+          : status === 'weight_agreed'
+            ? `${side} weight agreed on cat ${catapult.number}: ${lb(next.agreedWeight!)} (planned ${lb(slot.grossWeightLb)})`
+            : `${side} ${label(status)} on cat ${catapult.number}`;
+      return { summary: what, command: { type: 'advance', slotId, ...request }, mirrored: true };
+    });
+  }
+
+  /** The person who took the last step takes it back, within 10 s: a mis-tap, not a rethink. */
+  undo(
+    cycleId: number,
+    user: AuthenticatedUser,
+    slotId: number,
+    request: UndoStepRequest,
+  ): Promise<LineupCommandResult> {
+    return this.changes.apply(cycleId, actorOf(user), 'slot_advanced', async (manager, state) => {
+      const slot = this.basis.slot(state, slotId);
+      const catapult = this.ownCatapult(state, user, slot);
+      await this.basis.slotAsSeen(manager, state, slot, request.slotVersion);
+      const undone = slot.status;
+      const now = this.clock.now();
+      const next = transition(state, slot, user, { kind: 'undo', at: now.getTime() }, 'undo');
+      await updateSlot(manager, slot, {
+        status: next.status as SlotStatus,
+        statusAt: now,
+        statusBy: user,
+        agreedWeightLb: next.agreedWeight,
+        catapultWeightAckAt: next.agreedWeight === null ? null : slot.catapultWeightAckAt,
+        reverifyCause: next.reverify,
+        lastStep: null,
+      });
       return {
-        summary: `${side} ${step} cat ${catapult.number}`,
-        command: { type: 'advance', slotId, ...request },
+        summary: `${slot.aircraft.sideNumber} on cat ${catapult.number}: ${label(undone)} undone`,
+        command: { type: 'undo', slotId, ...request },
         mirrored: true,
       };
     });
   }
 
+  /** One tap: the crew, the pilot of the aircraft or the air boss. The reason may follow. */
   suspend(
     cycleId: number,
     user: AuthenticatedUser,
@@ -115,19 +131,20 @@ export class ReadinessService {
   ): Promise<LineupCommandResult> {
     return this.changes.apply(cycleId, actorOf(user), 'slot_suspended', async (manager, state) => {
       const slot = this.basis.slot(state, slotId);
-      const catapult = this.ownCatapult(state, user, slot);
       await this.basis.slotAsSeen(manager, state, slot, request.slotVersion);
-      const status = allowed(suspend(slot.aircraft.sideNumber, slot.status));
+      const next = transition(state, slot, user, { kind: 'suspend' }, 'suspended');
       const now = this.clock.now();
       await updateSlot(manager, slot, {
-        status,
+        status: next.status as SlotStatus,
         suspendedAt: now,
-        suspendReason: request.reason,
+        suspendReason: request.reason ?? null,
         statusAt: now,
         statusBy: user,
+        lastStep: null,
       });
+      const catapult = this.basis.catapult(state, slot.catapultId!);
       return {
-        summary: `${slot.aircraft.sideNumber} suspended on cat ${catapult.number}: ${request.reason}`,
+        summary: `${slot.aircraft.sideNumber} suspended on cat ${catapult.number}${request.reason ? `: ${request.reason}` : ''}`,
         command: { type: 'suspend', slotId, ...request },
         mirrored: true,
       };
@@ -162,13 +179,12 @@ export class ReadinessService {
         await this.basis.slotAsSeen(manager, state, slot, request.slotVersion);
         const figures = slotFigures(state, slot);
         const gates = figures ? slotLaunchGates(state, slot, figures) : null;
-        const refusal = launchRefusal({
-          side,
-          status: slot.status,
-          gates: gates?.views ?? [],
-          refusals: gates?.verdict.refusals ?? ['outside_launch_table'],
-        });
-        if (refusal) throw new LineupException(refusal.code, refusal.message);
+        const refusals = gates?.verdict.refusals ?? ['outside_launch_table'];
+        if (refusals.length > 0) {
+          const words = gates?.views.filter((gate) => refusals.includes(gate.gate)).map((gate) => gate.message);
+          throw new LineupException(refusals[0], words?.join(' ') || `${side} has no launch figures.`);
+        }
+        transition(state, slot, user, { kind: 'launch', refusals }, 'launch');
         const waived = waiverNote(slot, gates?.verdict.waivedGates ?? []);
         const now = this.clock.now();
         const profile = aircraftProfile(slot.aircraft.type);
@@ -178,8 +194,8 @@ export class ReadinessService {
               slot,
               catapult,
               figures,
-              trimDeg: takeOffTrim(profile, pounds(slot.grossWeightLb)),
-              afterburnerRequired: afterburnerRequired(profile, pounds(slot.grossWeightLb)),
+              trimDeg: takeOffTrim(profile, pounds(launchWeight(slot))),
+              afterburnerRequired: afterburnerRequired(profile, pounds(launchWeight(slot))),
               waiver: waived,
               firedBy: actorOf(user),
               at: now,
@@ -210,32 +226,41 @@ export class ReadinessService {
       if (slot.pilotId !== user.id)
         throw new LineupException('not_your_slot', `${side} is not your aircraft in cycle ${state.cycle.number}.`);
       await this.basis.slotAsSeen(manager, state, slot, request.slotVersion);
-      if (!ACKNOWLEDGEABLE.includes(slot.status)) {
+      if (ANSWERED_AFTER.includes(slot.status)) {
         throw new LineupException(
           'wrong_step',
-          `${side} is ${slot.status.replaceAll('_', ' ')}; its weight can no longer be acknowledged.`,
+          `${side} is ${slot.status.replaceAll('_', ' ')}; its weight can no longer be answered.`,
         );
       }
-      if (request.grossWeightLb !== slot.grossWeightLb) {
-        throw new LineupException(
-          'weight_mismatch',
-          `You entered ${lb(request.grossWeightLb)}; the planned gross weight of ${side} is ${lb(slot.grossWeightLb)}. Settle it with the catapult officer.`,
-        );
-      }
-      await updateSlot(manager, slot, { pilotWeightAckAt: this.clock.now(), pilotWeightAckLb: request.grossWeightLb });
+      const now = this.clock.now();
+      await updateSlot(manager, slot, { pilotWeightAckAt: now, pilotWeightAckLb: request.grossWeightLb });
+      // A different figure after the crew recorded one: the agreement and the setting on it no longer hold.
+      const reverify =
+        slot.agreedWeightLb !== null && slot.agreedWeightLb !== request.grossWeightLb
+          ? await dropBackForReverify(manager, state, 'weight', actorOf(user), now, [slot.id])
+          : '';
+      const answer =
+        request.grossWeightLb === slot.grossWeightLb
+          ? `agrees ${lb(request.grossWeightLb)}`
+          : `answers ${lb(request.grossWeightLb)} (planned ${lb(slot.grossWeightLb)})`;
       return {
-        summary: `Pilot of ${side} acknowledged ${lb(request.grossWeightLb)}`,
+        summary: `Pilot of ${side} ${answer}${reverify}`,
         command: { type: 'weight_ack', slotId, ...request },
         mirrored: true,
       };
     });
   }
 
-  private pilotAgreed(slot: Slot): boolean {
-    return slot.pilotWeightAckAt !== null && slot.pilotWeightAckLb === slot.grossWeightLb;
+  private requireExecuting(state: LineupState): void {
+    if (state.cycle.state !== 'executing') {
+      throw new LineupException(
+        'cycle_not_executing',
+        `Cycle ${state.cycle.number} is ${state.cycle.state}; readiness steps start once it is executing.`,
+      );
+    }
   }
 
-  /** A catapult officer acts only on their own catapult's lane. */
+  /** The catapult crew act only on their own catapult's lane. */
   private ownCatapult(state: LineupState, user: AuthenticatedUser, slot: Slot): Catapult {
     const side = slot.aircraft.sideNumber;
     if (user.catapultId === null) throw new LineupException('not_your_catapult', 'You are not assigned to a catapult.');

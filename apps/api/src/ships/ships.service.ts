@@ -1,4 +1,5 @@
 import type { CatapultView, DeckSpot, ShipView } from '@catline/contracts';
+import { readinessStepsProblem } from '@catline/launch-math';
 import { Injectable, Logger } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, type EntityManager, In, Not } from 'typeorm';
@@ -35,6 +36,8 @@ export class ShipsService {
       if (!ship) throw this.shipNotFound(id);
       const catapults = await manager.findBy(Catapult, { shipId: id });
       if (body.deckSpots) await this.checkDeckSpots(manager, ship, body.deckSpots, catapults);
+      const stepsProblem = body.profile?.readinessSteps && readinessStepsProblem(body.profile.readinessSteps);
+      if (stepsProblem) throw new ShipsException('invalid_configuration', stepsProblem);
       Object.assign(ship, definedFields(body));
       await manager.save(Ship, ship);
       return toShipView(ship, catapults);

@@ -1,5 +1,6 @@
 import { CATAPULT_ROLES, ROLES } from '@catline/contracts';
 import { pilot } from '../support/lineup-fixtures.js';
+import { demoEmail } from '../support/sign-in.js';
 import { lineupDriver } from './lineup-driver.js';
 import type { MatrixContext, MatrixRoute } from './route-table.js';
 
@@ -103,12 +104,28 @@ export const lineupRoutes: MatrixRoute[] = [
   {
     method: 'POST',
     path: '/api/cycles/{cycleId}/lineup/slots/{slotId}/suspend',
-    allowed: CATAPULT_ROLES,
-    notOwner: OTHER_CATAPULT,
+    allowed: [...CATAPULT_ROLES, 'pilot', 'air_boss'],
+    notOwner: { ...OTHER_CATAPULT, pilot: 'pilot2@catline.example' },
     example: async (context) => {
       if (!context.allowed) return refused;
       const { cycleId, slot } = await freshSlot(context, 'taxiing');
       return { params: { cycleId, slotId: slot.id }, body: { slotVersion: slot.version, reason: 'Matrix hold' } };
+    },
+  },
+  {
+    method: 'POST',
+    path: '/api/cycles/{cycleId}/lineup/slots/{slotId}/undo',
+    allowed: CATAPULT_ROLES,
+    notOwner: OTHER_CATAPULT,
+    example: async (context) => {
+      if (!context.allowed) return refused;
+      const { deck, cycleId, slot } = await freshSlot(context, 'executing');
+      // Only the person who took the step may undo it: the caller takes it first.
+      await deck.step(cycleId, slot.id, 'taxiing', demoEmail(context.caller!));
+      return {
+        params: { cycleId, slotId: slot.id },
+        body: { slotVersion: (await deck.slot(cycleId, slot.id)).version },
+      };
     },
   },
   {

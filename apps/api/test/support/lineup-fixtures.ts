@@ -185,34 +185,44 @@ export class LineupDriver {
     );
   }
 
-  /** A readiness step by the catapult officer of the slot's catapult; the raw answer. */
+  /**
+   * A readiness step by the catapult officer of the slot's catapult (or `by`); the raw answer. Weight
+   * agreed records the pilot's answer from the tablet, else the planned weight, unless `agreedWeightLb`.
+   */
   async step(
     cycleId: number,
     slotId: number,
     to: ReadinessStep | 'resume',
-    officer?: string,
+    by?: string,
+    agreedWeightLb?: number,
   ): Promise<request.Response> {
     const slot = await this.slot(cycleId, slotId);
     const number = (await this.demoShip()).catapults.find((catapult) => catapult.id === slot.catapultId)?.number ?? 1;
-    return this.call(
-      officer ?? catapultOfficer(number),
-      'post',
-      `/api/cycles/${cycleId}/lineup/slots/${slotId}/advance`,
-      {
-        slotVersion: slot.version,
-        to,
-      },
-    );
+    const weight = to === 'weight_agreed' ? (agreedWeightLb ?? slot.pilotWeightAckLb ?? slot.grossWeightLb) : undefined;
+    return this.call(by ?? catapultOfficer(number), 'post', `/api/cycles/${cycleId}/lineup/slots/${slotId}/advance`, {
+      slotVersion: slot.version,
+      to,
+      ...(weight === undefined ? {} : { agreedWeightLb: weight }),
+    });
   }
 
-  /** Taxi, on catapult, weight agreed (after the pilot's acknowledgement) and tensioned. */
+  /** Takes the slot through the ship's steps from where it is up to `last` (every step by default). */
+  async stepThrough(cycleId: number, slotId: number, last?: ReadinessStep, by?: string): Promise<void> {
+    const { readinessSteps } = await this.snapshot(cycleId);
+    const slot = await this.slot(cycleId, slotId);
+    const from = readinessSteps.indexOf(slot.status as ReadinessStep) + 1;
+    const to = last === undefined ? readinessSteps.length - 1 : readinessSteps.indexOf(last);
+    for (const step of readinessSteps.slice(from, to + 1)) {
+      const response = await this.step(cycleId, slotId, step, by);
+      if (response.status !== 200)
+        throw new Error(`Step ${step} answered ${response.status}: ${JSON.stringify(response.body)}`);
+    }
+  }
+
+  /** The pilot agrees the planned weight on the tablet, then every readiness step: ready to launch. */
   async readyToLaunch(cycleId: number, slotId: number, pilotEmail: string): Promise<SlotView> {
     await this.acknowledgeWeight(cycleId, slotId, pilotEmail);
-    for (const to of ['taxiing', 'on_catapult', 'weight_agreed', 'tensioned'] as const) {
-      const response = await this.step(cycleId, slotId, to);
-      if (response.status !== 200)
-        throw new Error(`Step ${to} answered ${response.status}: ${JSON.stringify(response.body)}`);
-    }
+    await this.stepThrough(cycleId, slotId);
     return this.slot(cycleId, slotId);
   }
 

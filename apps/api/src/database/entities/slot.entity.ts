@@ -1,4 +1,5 @@
 import type { LaunchRecord, ReverifyCause, SlotStatus, SoftLaunchGateCode } from '@catline/contracts';
+import type { LastStep } from '@catline/launch-math';
 import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, Unique, type Relation } from 'typeorm';
 import { Aircraft } from './aircraft.entity.js';
 import { Cycle } from './cycle.entity.js';
@@ -92,6 +93,10 @@ export class Slot {
   @InstantColumn({ name: 'pilot_weight_ack_at', nullable: true })
   pilotWeightAckAt: Date | null;
 
+  /** The gross weight the crew recorded as agreed with the pilot (lb); the setting is worked out from it. */
+  @Column({ name: 'agreed_weight_lb', type: 'int', nullable: true })
+  agreedWeightLb: number | null;
+
   @InstantColumn({ name: 'catapult_weight_ack_at', nullable: true })
   catapultWeightAckAt: Date | null;
 
@@ -120,6 +125,10 @@ export class Slot {
   /** What changed under the agreed figures since they were verified; cleared when the setting is read back again. */
   @Column({ name: 'reverify_cause', type: 'varchar', length: 12, nullable: true })
   reverifyCause: ReverifyCause | null;
+
+  /** The last readiness step taken, which its taker may undo for a short while; null when none is. */
+  @Column({ name: 'last_step', type: 'json', nullable: true })
+  lastStep: LastStep | null;
 
   /** Waivers of soft launch gates; null for none. Cleared when the figures change under them. */
   @Column({ type: 'json', nullable: true })

@@ -91,12 +91,20 @@ const flownLanes: [number, string[]][] = [
   [4, ['G43', 'D34']],
 ];
 
+/** Each readiness step, seconds before the aircraft's launch. */
 const STEPS_BEFORE_LAUNCH: [ReadinessStep, number][] = [
   ['taxiing', 50],
-  ['on_catapult', 38],
-  ['weight_agreed', 28],
-  ['tensioned', 14],
+  ['on_catapult', 40],
+  ['weight_agreed', 34],
+  ['setting_set', 30],
+  ['deflector_up', 26],
+  ['tensioned', 20],
+  ['run_up', 14],
+  ['checks_clear', 9],
+  ['pilot_ready', 5],
 ];
+/** After a resume the aircraft is hooked up again: weight, setting and the rest once more. */
+const STEPS_AFTER_RESUME = STEPS_BEFORE_LAUNCH.slice(2);
 
 /** The flown cycle: planned, a reorder, a down aircraft replaced by the spare, a suspend, every launch, closed on the last. */
 async function flyEarlierCycle(deck: DemoDeck, shipId: number, planned: Date): Promise<void> {
@@ -131,15 +139,18 @@ async function flyEarlierCycle(deck: DemoDeck, shipId: number, planned: Date): P
     let launchAt = planned.getTime() + (lane.number - 1) * 13_000;
     for (const slotId of lane.slotIds) {
       const side = (await deck.snapshot(cycleId)).slots.find((slot) => slot.id === slotId)!.sideNumber;
-      for (const [step, before] of STEPS_BEFORE_LAUNCH) {
+      // D33 is suspended 9 s before its launch, at full power: the steps after that wait for the resume.
+      const suspendedAt = side === 'D33' ? 9 : 0;
+      for (const [step, before] of STEPS_BEFORE_LAUNCH.filter(([, before]) => before > suspendedAt)) {
         events.push({ at: launchAt - before * 1000, run: () => deck.advance(cycleId, side, step) });
       }
       if (side === 'D33') {
         events.push({ at: launchAt - 9_000, run: () => deck.suspend(cycleId, side, 'Launch bar not seated') });
         events.push({ at: launchAt + 25_000, run: () => deck.advance(cycleId, side, 'resume') });
         launchAt += 60_000;
-        events.push({ at: launchAt - 28_000, run: () => deck.advance(cycleId, side, 'weight_agreed') });
-        events.push({ at: launchAt - 14_000, run: () => deck.advance(cycleId, side, 'tensioned') });
+        for (const [step, before] of STEPS_AFTER_RESUME) {
+          events.push({ at: launchAt - before * 1000, run: () => deck.advance(cycleId, side, step) });
+        }
       }
       events.push({ at: launchAt, run: () => deck.launch(cycleId, side) });
       launchAt += lane.number <= 2 ? 60_000 : 70_000;

@@ -164,7 +164,13 @@ export class DemoDeck {
   /** The catapult officer of the aircraft's catapult takes the step. */
   async advance(cycleId: number, side: string, to: ReadinessStep | 'resume'): Promise<void> {
     const slot = await this.slot(cycleId, side);
-    await this.readiness.advance(cycleId, this.officerOf(slot), slot.id, { slotVersion: slot.version, to });
+    // The pilot agreed the planned weight on the tablet; the officer records that figure.
+    const agreedWeightLb = to === 'weight_agreed' ? slot.grossWeightLb : undefined;
+    await this.readiness.advance(cycleId, this.officerOf(slot), slot.id, {
+      slotVersion: slot.version,
+      to,
+      agreedWeightLb,
+    });
   }
 
   async suspend(cycleId: number, side: string, reason: string): Promise<void> {

@@ -5,6 +5,7 @@ export class SuspendSlotDto implements SuspendSlotRequest {
   @VersionField('The slot version the suspend is based on.')
   slotVersion: number;
 
-  @ReasonField('reason')
-  reason: string;
+  /** Left out: one tap suspends, and the reason is chosen afterwards. */
+  @ReasonField('reason', { optional: true })
+  reason?: string;
 }

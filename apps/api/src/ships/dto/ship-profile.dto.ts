@@ -1,7 +1,20 @@
-import type { ShipProfile } from '@catline/contracts';
-import { ApiProperty } from '@nestjs/swagger';
+import { READINESS_STEPS, type ReadinessStep, type ShipProfile } from '@catline/contracts';
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
-import { IsNotEmpty, IsNumber, IsObject, IsString, Max, MaxLength, Min, ValidateNested } from 'class-validator';
+import {
+  ArrayMaxSize,
+  IsArray,
+  IsIn,
+  IsNotEmpty,
+  IsNumber,
+  IsObject,
+  IsOptional,
+  IsString,
+  Max,
+  MaxLength,
+  Min,
+  ValidateNested,
+} from 'class-validator';
 import { Trim } from '../../common/validation/trim.decorator.js';
 
 class ClearingTurnDto {
@@ -53,4 +66,15 @@ export class ShipProfileDto implements ShipProfile {
   @ValidateNested()
   @Type(() => DeparturesDto)
   departures: DeparturesDto;
+
+  @ApiPropertyOptional({
+    enum: READINESS_STEPS,
+    isArray: true,
+    description: 'The steps this ship runs, in the trade’s order; left out, every step.',
+  })
+  @IsOptional()
+  @IsArray()
+  @ArrayMaxSize(READINESS_STEPS.length)
+  @IsIn(READINESS_STEPS, { each: true, message: `readinessSteps must each be one of ${READINESS_STEPS.join(', ')}` })
+  readinessSteps?: ReadinessStep[];
 }

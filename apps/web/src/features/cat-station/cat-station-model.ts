@@ -13,26 +13,36 @@ export function catapultQueue(snapshot: LineupSnapshot, catapultId: number) {
   return { lane, current: waiting[0], next: waiting.slice(1, 3) };
 }
 
+/** Each step in the deck crew's words. */
 export const STEP_LABELS: Record<ReadinessStep, string> = {
-  taxiing: 'Taxiing',
-  on_catapult: 'On catapult',
+  taxiing: 'Taxi up behind the deflector',
+  on_catapult: 'Hooked up: launch bar, holdback',
   weight_agreed: 'Weight agreed',
-  tensioned: 'Tensioned',
+  setting_set: 'Setting set and read back',
+  deflector_up: 'Deflector raised',
+  tensioned: 'Tension',
+  run_up: 'Full power, engine checks',
+  checks_clear: 'Final checks clear',
+  pilot_ready: 'Pilot ready',
 };
 
-/** How far along the readiness steps a slot is: the index of its last step done, -1 before the first. */
-export function stepIndex(slot: SlotView): number {
-  return READINESS_STEPS.indexOf(slot.status as ReadinessStep);
+/** How far along the ship's readiness steps a slot is: the index of its last step done, -1 before the first. */
+export function stepIndex(slot: SlotView, steps: readonly ReadinessStep[]): number {
+  return steps.indexOf(slot.status as ReadinessStep);
 }
 
-export const canSuspend = (slot: SlotView) => stepIndex(slot) >= 0;
+export const canSuspend = (slot: SlotView) => (READINESS_STEPS as readonly string[]).includes(slot.status);
+
+/** The figure the crew records as agreed: the pilot's answer from the tablet, else the planned weight shown. */
+export const weightToRecord = (slot: SlotView): number => slot.pilotWeightAckLb ?? slot.grossWeightLb;
 
 /**
  * Everything that still stands between this aircraft and the shot, in the deck crew's words: the
  * server's own launch gates (so the station never offers a shot the server would refuse), then the step.
  */
-export function launchBlockers(slot: SlotView): string[] {
+export function launchBlockers(slot: SlotView, steps: readonly ReadinessStep[]): string[] {
   const blockers = (slot.gates ?? []).filter((gate) => !gate.waived).map((gate) => gate.message);
-  if (slot.status !== 'tensioned') blockers.push('The aircraft is not tensioned.');
+  const last = steps[steps.length - 1];
+  if (slot.status !== last) blockers.push(`Not yet at “${STEP_LABELS[last]}”.`);
   return blockers;
 }

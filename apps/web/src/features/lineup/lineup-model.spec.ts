@@ -65,6 +65,8 @@ function slot(
     afterburnerRequired: false,
     departure: 'Case I',
     pilotWeightAckAt: '2026-12-02T09:40:00.000Z',
+    pilotWeightAckLb: 44_000,
+    agreedWeightLb: 44_000,
     catapultWeightAckAt: '2026-12-02T09:41:00.000Z',
     suspendReason: null,
     overrideReason: null,
@@ -111,6 +113,7 @@ function board(): LineupSnapshot {
       slot(4, 'G43', null),
       slot(5, 'C30', null),
     ],
+    readinessSteps: [],
     lastLaunchAt: null,
     version: 12,
   };

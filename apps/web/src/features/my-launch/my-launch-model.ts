@@ -1,4 +1,4 @@
-import type { LineupSnapshot, SlotView } from '@catline/contracts';
+import { GROSS_WEIGHT_LB, type LineupSnapshot, type SlotView } from '@catline/contracts';
 
 const gone = new Set(['launched', 'down', 'scratched']);
 
@@ -14,4 +14,14 @@ export function findMySlot(snapshot: LineupSnapshot, pilotId: number) {
     .filter((candidate): candidate is SlotView => !!candidate && !gone.has(candidate.status));
   const index = waiting?.findIndex((candidate) => candidate.id === slot.id) ?? -1;
   return { slot, lane, place: index >= 0 ? index + 1 : null };
+}
+
+/** The pilot's answer typed on the tablet: whole pounds within the request's limits, or why not. */
+export function weightAnswer(typed: string): { weight: number } | { problem: string } {
+  const text = typed.replaceAll(',', '').trim();
+  if (!/^\d+$/.test(text)) return { problem: 'Type the gross weight in whole pounds.' };
+  const weight = Number(text);
+  if (weight < GROSS_WEIGHT_LB.min || weight > GROSS_WEIGHT_LB.max)
+    return { problem: `Between ${GROSS_WEIGHT_LB.min} and ${GROSS_WEIGHT_LB.max.toLocaleString('en-US')} lb.` };
+  return { weight };
 }

@@ -25,6 +25,8 @@ import {
   ROLES,
   type Role,
   SLOT_STATUSES,
+  READINESS_STEPS,
+  type ReadinessStep,
   SOFT_LAUNCH_GATE_CODES,
   type SoftLaunchGateCode,
   type SlotStatus,
@@ -313,6 +315,16 @@ export class SlotViewDto implements SlotView {
   @InstantProperty({ nullable: true })
   pilotWeightAckAt: string | null;
 
+  @ApiProperty({ type: Number, nullable: true, description: 'The figure the pilot answered from the tablet, lb.' })
+  pilotWeightAckLb: number | null;
+
+  @ApiProperty({
+    type: Number,
+    nullable: true,
+    description: 'The gross weight the crew recorded as agreed, lb; the setting is worked out from it.',
+  })
+  agreedWeightLb: number | null;
+
   @InstantProperty({ nullable: true })
   catapultWeightAckAt: string | null;
 
@@ -395,6 +407,9 @@ export class LaneViewDto implements LaneView {
 
 @ApiSchema({ name: 'LineupSnapshot', description: "A cycle's whole lineup at one version." })
 export class LineupSnapshotDto implements LineupSnapshot {
+  @ApiProperty({ enum: READINESS_STEPS, isArray: true, description: "The ship's readiness steps, in order." })
+  readinessSteps: ReadinessStep[];
+
   @ApiProperty({ type: () => CycleViewDto })
   cycle: CycleViewDto;
 

@@ -1,5 +1,5 @@
-import { Box, Flex, Grid, Stack, Text } from '@chakra-ui/react';
-import type { LineupSnapshot } from '@catline/contracts';
+import { Box, Button, Flex, Grid, Stack, Text } from '@chakra-ui/react';
+import type { LineupSnapshot, ReadinessStep } from '@catline/contracts';
 import { CautionLine } from '../../../components/caution-line.js';
 import { ConnectionBadge } from '../../../components/connection-badge.js';
 import { LiveFigures } from '../../../components/live-figures.js';
@@ -16,7 +16,9 @@ import { useCycleTheme } from '../../../theme/use-cycle-theme.js';
 import { useAdvanceSlot } from '../api/advance-slot.js';
 import { useLaunchSlot } from '../api/launch-slot.js';
 import { useSuspendSlot } from '../api/suspend-slot.js';
-import { catapultQueue } from '../cat-station-model.js';
+import { STEP_LABELS, catapultQueue } from '../cat-station-model.js';
+import { useUndoStep } from '../api/undo-step.js';
+import { useUndoWindow } from '../hooks/use-undo-window.js';
 import { useLaunchIntent } from '../hooks/use-launch-intent.js';
 import { AircraftFigures } from './aircraft-figures.js';
 import { LaunchPanel } from './launch-panel.js';
@@ -32,8 +34,10 @@ function Station({ snapshot, catapultId }: { snapshot: LineupSnapshot; catapultI
   const advance = useAdvanceSlot(cycleId);
   const suspend = useSuspendSlot(cycleId);
   const launch = useLaunchSlot(cycleId);
+  const undo = useUndoStep(cycleId);
+  const undoWindow = useUndoWindow();
   const launchKey = useLaunchIntent(current?.id);
-  const anyPending = advance.isPending || suspend.isPending || launch.isPending;
+  const anyPending = advance.isPending || suspend.isPending || launch.isPending || undo.isPending;
 
   if (!queue) {
     return (
@@ -93,18 +97,42 @@ function Station({ snapshot, catapultId }: { snapshot: LineupSnapshot; catapultI
           <Stack gap="4">
             <ReadinessSteps
               slot={current}
+              steps={snapshot.readinessSteps}
+              night={snapshot.cycle.night}
               pending={advance.isPending}
-              onAdvance={(to) =>
+              onAdvance={(request) =>
                 !anyPending &&
                 advance.mutate(
-                  { slotId: current.id, slotVersion: current.version, to },
-                  { onError: refused('That step') },
+                  { slotId: current.id, slotVersion: current.version, ...request },
+                  {
+                    onError: refused('That step'),
+                    onSuccess: () =>
+                      request.to !== 'resume' && undoWindow.took({ slotId: current.id, step: request.to }),
+                  },
                 )
               }
             />
+            {undoWindow.taken?.slotId === current.id && (
+              <Button
+                h="touch"
+                variant="outline"
+                colorPalette="caution"
+                disabled={anyPending}
+                onClick={() =>
+                  undo.mutate(
+                    { slotId: current.id, slotVersion: current.version },
+                    { onError: refused('Undo'), onSettled: undoWindow.clear },
+                  )
+                }
+                data-testid="undo-step"
+              >
+                Undo {STEP_LABELS[undoWindow.taken.step as ReadinessStep].toLowerCase()}
+              </Button>
+            )}
             <LaunchPanel
               key={current.id}
               slot={current}
+              steps={snapshot.readinessSteps}
               pending={launch.isPending}
               onLaunch={() => {
                 // A second tap while the first is on its way does nothing; a retry reuses the same key.
@@ -115,7 +143,16 @@ function Station({ snapshot, catapultId }: { snapshot: LineupSnapshot; catapultI
                 );
               }}
             />
-            <NextUp slots={next} />
+            <NextUp
+              slots={next}
+              pending={anyPending}
+              onTaxi={(slot) =>
+                advance.mutate(
+                  { slotId: slot.id, slotVersion: slot.version, to: 'taxiing' },
+                  { onError: refused('Taxi') },
+                )
+              }
+            />
           </Stack>
         </Grid>
       )}

@@ -1,16 +1,17 @@
 import { Box, Button, List, Stack, Text } from '@chakra-ui/react';
-import type { SlotView } from '@catline/contracts';
+import type { ReadinessStep, SlotView } from '@catline/contracts';
 import { launchBlockers } from '../cat-station-model.js';
 
 interface LaunchPanelProps {
   slot: SlotView;
+  steps: readonly ReadinessStep[];
   pending: boolean;
   onLaunch: () => void;
 }
 
 /** The shot: offered only when every readiness step is done and every launch gate is open or waived. */
-export function LaunchPanel({ slot, pending, onLaunch }: LaunchPanelProps) {
-  const blockers = launchBlockers(slot);
+export function LaunchPanel({ slot, steps, pending, onLaunch }: LaunchPanelProps) {
+  const blockers = launchBlockers(slot, steps);
   return (
     <Stack
       as="section"

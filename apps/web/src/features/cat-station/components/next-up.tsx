@@ -1,9 +1,16 @@
-import { Box, Flex, Stack, Text } from '@chakra-ui/react';
+import { Box, Button, Flex, Stack, Text } from '@chakra-ui/react';
 import type { SlotView } from '@catline/contracts';
 import { SlotStatusBadge } from '../../../components/slot-status-badge.js';
 import { formatOptionalClock, formatPounds } from '../../../lib/format.js';
 
-export function NextUp({ slots }: { slots: SlotView[] }) {
+interface NextUpProps {
+  slots: SlotView[];
+  pending: boolean;
+  /** The aircraft right behind the one on the catapult taxis up and waits behind the deflector. */
+  onTaxi: (slot: SlotView) => void;
+}
+
+export function NextUp({ slots, pending, onTaxi }: NextUpProps) {
   return (
     <Stack as="section" aria-label="Next on this catapult" gap="2" data-testid="next-up">
       <Text fontWeight="700">Next on this catapult</Text>
@@ -21,9 +28,22 @@ export function NextUp({ slots }: { slots: SlotView[] }) {
           </Flex>
           <Text fontSize="sm" color="fg.muted" textStyle="figure">
             {formatPounds(slot.grossWeightLb)} ·{' '}
-            {slot.pilotWeightAckAt ? 'weight acknowledged' : 'weight not acknowledged'} · projected{' '}
+            {slot.pilotWeightAckAt ? 'pilot answered the weight' : 'pilot has not answered the weight'} · projected{' '}
             {formatOptionalClock(slot.projectedLaunchAt)}
           </Text>
+          {index === 0 && slot.status === 'planned' && (
+            <Button
+              mt="2"
+              h="touch"
+              w="full"
+              colorPalette="accent"
+              disabled={pending}
+              onClick={() => onTaxi(slot)}
+              data-testid="taxi-next"
+            >
+              Taxi {slot.sideNumber} up behind the deflector
+            </Button>
+          )}
         </Box>
       ))}
     </Stack>

@@ -1,23 +1,32 @@
 import { Button, SimpleGrid, Text } from '@chakra-ui/react';
-import { READINESS_STEPS, type AdvanceSlotRequest, type SlotView } from '@catline/contracts';
+import type { AdvanceSlotRequest, ReadinessStep, SlotView } from '@catline/contracts';
 import { formatPounds } from '../../../lib/format.js';
-import { STEP_LABELS, stepIndex } from '../cat-station-model.js';
+import { STEP_LABELS, stepIndex, weightToRecord } from '../cat-station-model.js';
 
 interface ReadinessStepsProps {
   slot: SlotView;
+  steps: readonly ReadinessStep[];
+  night: boolean;
   pending: boolean;
-  onAdvance: (to: AdvanceSlotRequest['to']) => void;
+  onAdvance: (request: Omit<AdvanceSlotRequest, 'slotVersion'>) => void;
 }
 
-/** One big button per readiness step; only the next one is live, done ones stay visible as done. */
-export function ReadinessSteps({ slot, pending, onAdvance }: ReadinessStepsProps) {
+function label(step: ReadinessStep, slot: SlotView, night: boolean): string {
+  if (step === 'weight_agreed')
+    return `${STEP_LABELS[step]}: ${formatPounds(slot.agreedWeightLb ?? weightToRecord(slot))}`;
+  if (step === 'pilot_ready') return `${STEP_LABELS[step]} (${night ? 'lights on' : 'salute'})`;
+  return STEP_LABELS[step];
+}
+
+/** One big button per step of the ship's list, one tap each; only the next one is live, done ones stay as a record. */
+export function ReadinessSteps({ slot, steps, night, pending, onAdvance }: ReadinessStepsProps) {
   if (slot.status === 'suspended') {
     return (
       <Button
         h="touch"
         fontSize="xl"
         colorPalette="caution"
-        onClick={() => onAdvance('resume')}
+        onClick={() => onAdvance({ to: 'resume' })}
         loading={pending}
         data-testid="resume"
       >
@@ -25,14 +34,13 @@ export function ReadinessSteps({ slot, pending, onAdvance }: ReadinessStepsProps
       </Button>
     );
   }
-  const done = stepIndex(slot);
-  const waitingForPilot = !slot.pilotWeightAckAt;
+  const done = stepIndex(slot, steps);
+  const answered = slot.pilotWeightAckLb;
   return (
     <SimpleGrid columns={{ base: 1, sm: 2 }} gap="3" role="group" aria-label="Readiness steps">
-      {READINESS_STEPS.map((step, index) => {
+      {steps.map((step, index) => {
         const isDone = index <= done;
         const isNext = index === done + 1;
-        const blocked = isNext && step === 'weight_agreed' && waitingForPilot;
         return (
           <Button
             key={step}
@@ -40,22 +48,28 @@ export function ReadinessSteps({ slot, pending, onAdvance }: ReadinessStepsProps
             fontSize="lg"
             variant={isDone ? 'subtle' : isNext ? 'solid' : 'outline'}
             colorPalette={isDone ? 'go' : 'accent'}
-            disabled={!isNext || blocked || pending}
+            disabled={!isNext || pending}
             loading={isNext && pending}
-            onClick={() => onAdvance(step)}
+            onClick={() =>
+              onAdvance(step === 'weight_agreed' ? { to: step, agreedWeightLb: weightToRecord(slot) } : { to: step })
+            }
             data-testid={`step-${step}`}
             data-done={isDone || undefined}
             // A done step stays fully readable: it is a record, not a greyed-out control.
             _disabled={isDone ? { opacity: 1, cursor: 'default' } : undefined}
             whiteSpace="normal"
           >
-            {isDone ? `✓ ${STEP_LABELS[step]}` : STEP_LABELS[step]}
+            {isDone ? `✓ ${label(step, slot, night)}` : label(step, slot, night)}
           </Button>
         );
       })}
-      {done + 1 === READINESS_STEPS.indexOf('weight_agreed') && waitingForPilot && (
-        <Text gridColumn="1 / -1" color="caution.fg" fontWeight="600" data-testid="waiting-for-pilot">
-          Waiting for the pilot to acknowledge {formatPounds(slot.grossWeightLb)}.
+      {steps[done + 1] === 'weight_agreed' && (
+        <Text gridColumn="1 / -1" fontWeight="600" data-testid="pilot-weight">
+          {answered === null
+            ? `Show the pilot ${formatPounds(slot.grossWeightLb)}; record it when the pilot agrees by signal.`
+            : answered === slot.grossWeightLb
+              ? `The pilot agrees ${formatPounds(answered)} on the tablet.`
+              : `The pilot answers ${formatPounds(answered)} (planned ${formatPounds(slot.grossWeightLb)}).`}
         </Text>
       )}
     </SimpleGrid>

@@ -1,4 +1,4 @@
-import { Box, Button, Grid, HStack, SimpleGrid, Stack, Text } from '@chakra-ui/react';
+import { Box, Grid, HStack, SimpleGrid, Stack, Text } from '@chakra-ui/react';
 import type { LineupSnapshot } from '@catline/contracts';
 import { CautionLine } from '../../../components/caution-line.js';
 import { ConnectionBadge } from '../../../components/connection-badge.js';
@@ -17,6 +17,7 @@ import { useNow } from '../../../lib/use-now.js';
 import { useCycleTheme } from '../../../theme/use-cycle-theme.js';
 import { useAcknowledgeWeight } from '../api/acknowledge-weight.js';
 import { findMySlot } from '../my-launch-model.js';
+import { WeightAnswer } from './weight-answer.js';
 
 function Countdown({ projectedLaunchAt, launchedAt }: { projectedLaunchAt: string | null; launchedAt: string | null }) {
   const now = useNow(1_000, useFiguresLive());
@@ -90,32 +91,16 @@ function MySlot({ snapshot, pilotId }: { snapshot: LineupSnapshot; pilotId: numb
           Suspended: {slot.suspendReason}
         </Text>
       )}
-      <Stack gap="3" borderWidth="1px" rounded="card" p={{ base: '3', md: '4' }} as="section" aria-label="Gross weight">
-        <FigureStat label="Gross weight" value={formatPounds(slot.grossWeightLb)} size="xl" />
-        {slot.pilotWeightAckAt ? (
-          <Text color="go.fg" fontWeight="600" data-testid="weight-acknowledged">
-            You acknowledged this weight at {formatClock(slot.pilotWeightAckAt)}.
-          </Text>
-        ) : (
-          <Button
-            h="touch"
-            fontSize="lg"
-            colorPalette="accent"
-            alignSelf={{ base: 'stretch', md: 'flex-start' }}
-            loading={acknowledge.isPending}
-            disabled={slot.status === 'launched' || slot.status === 'down'}
-            data-testid="acknowledge-weight"
-            onClick={() =>
-              acknowledge.mutate(
-                { slotId: slot.id, slotVersion: slot.version, grossWeightLb: slot.grossWeightLb },
-                { onError: (error) => show(refusalNotice(error, 'Your acknowledgement')) },
-              )
-            }
-          >
-            I confirm {formatPounds(slot.grossWeightLb)}
-          </Button>
-        )}
-      </Stack>
+      <WeightAnswer
+        slot={slot}
+        pending={acknowledge.isPending}
+        onAnswer={(grossWeightLb) =>
+          acknowledge.mutate(
+            { slotId: slot.id, slotVersion: slot.version, grossWeightLb },
+            { onError: (error) => show(refusalNotice(error, 'Your answer')) },
+          )
+        }
+      />
       <SimpleGrid columns={{ base: 2, md: 4 }} gap="3">
         <FigureStat label="Take-off trim" value={slot.trimDeg === null ? '—' : `${slot.trimDeg}°`} />
         <FigureStat

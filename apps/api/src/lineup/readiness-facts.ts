@@ -1,0 +1,108 @@
+import type { ReadinessStep, SlotStatus } from '@catline/contracts';
+import {
+  readinessTransition,
+  type ReadinessActor,
+  type ReadinessCommand,
+  type ReadinessStatus,
+  type SlotReadiness,
+} from '@catline/launch-math';
+import type { AuthenticatedUser } from '../common/authenticated-user.js';
+import { laneSlots } from '../cycle-changes/lineup-snapshot.builder.js';
+import type { LineupState } from '../cycle-changes/lineup-state.js';
+import { LineupException } from '../cycle-changes/lineup.exception.js';
+import { shipReadinessSteps } from '../cycle-changes/readiness-steps.js';
+import type { Slot } from '../database/entities/slot.entity.js';
+
+const GONE: readonly SlotStatus[] = ['launched', 'down', 'scratched'];
+const label = (status: string) => status.replaceAll('_', ' ');
+
+/** The slot as launch-math's readiness machine sees it. */
+export function slotReadiness(state: LineupState, slot: Slot): SlotReadiness {
+  const ahead = slot.catapultId === null ? [] : laneSlots(state, slot.catapultId);
+  const waiting = ahead.filter((other) => !GONE.includes(other.status));
+  return {
+    status: slot.status as ReadinessStatus,
+    placeInLane: Math.max(0, waiting.indexOf(slot)),
+    agreedWeight: slot.agreedWeightLb,
+    pilotAnswer: slot.pilotWeightAckAt === null ? null : slot.pilotWeightAckLb,
+    reverify: slot.reverifyCause,
+    lastStep: slot.lastStep,
+  };
+}
+
+export function readinessActor(user: AuthenticatedUser, slot: Slot): ReadinessActor {
+  return {
+    id: user.id,
+    role: user.role,
+    atThisCatapult: user.catapultId !== null && user.catapultId === slot.catapultId,
+    fliesIt: slot.pilotId === user.id,
+  };
+}
+
+/** A refusal of the machine in a sentence for the deck crew. */
+function refusal(state: LineupState, slot: Slot, code: string, to: string): LineupException {
+  const side = slot.aircraft.sideNumber;
+  const steps = shipReadinessSteps(state);
+  switch (code) {
+    case 'not_your_catapult':
+    case 'forbidden_role':
+      return new LineupException('not_your_catapult', `${side} is not on your catapult.`);
+    case 'not_your_slot':
+      return new LineupException('not_your_slot', `${side} is not your aircraft in cycle ${state.cycle.number}.`);
+    case 'not_current_aircraft': {
+      const first = laneSlots(state, slot.catapultId ?? 0).find((other) => !GONE.includes(other.status));
+      return new LineupException(
+        'not_current_aircraft',
+        `${side} may taxi up and wait behind the deflector; ${first?.aircraft.sideNumber ?? 'another aircraft'} is on the catapult.`,
+      );
+    }
+    case 'weight_not_agreed':
+      return new LineupException('weight_not_agreed', `Record the gross weight agreed with the pilot of ${side}.`);
+    case 'weight_mismatch':
+      return new LineupException(
+        'weight_mismatch',
+        `The pilot of ${side} answered ${slot.pilotWeightAckLb?.toLocaleString('en-US')} lb; record that figure or settle it with the pilot.`,
+      );
+    case 'nothing_to_undo':
+      return new LineupException('nothing_to_undo', `${side} has no step to undo.`);
+    case 'not_your_step':
+      return new LineupException('not_your_step', `Only the person who took the last step of ${side} may undo it.`);
+    case 'undo_expired':
+      return new LineupException('undo_expired', `The last step of ${side} was taken more than 10 seconds ago.`);
+    default: {
+      const status = slot.status as ReadinessStatus;
+      const next = status === 'suspended' ? 'resume' : nextOf(steps, status);
+      return new LineupException(
+        'wrong_step',
+        next
+          ? `${side} is ${label(status)}; the next step is ${label(next)}, not ${label(to)}.`
+          : `${side} is ${label(status)}; it takes no more readiness steps.`,
+      );
+    }
+  }
+}
+
+function nextOf(steps: readonly ReadinessStep[], status: ReadinessStatus): string | null {
+  if (status === 'planned') return steps[0];
+  const at = steps.indexOf(status as ReadinessStep);
+  if (at < 0) return null;
+  return steps[at + 1] ?? 'launch';
+}
+
+/** The machine's answer for this slot, or its refusal as an exception. Launch refusals by gate are the caller's. */
+export function transition(
+  state: LineupState,
+  slot: Slot,
+  user: AuthenticatedUser,
+  command: ReadinessCommand,
+  asked: string,
+): SlotReadiness {
+  const result = readinessTransition(
+    shipReadinessSteps(state),
+    slotReadiness(state, slot),
+    readinessActor(user, slot),
+    command,
+  );
+  if (!result.ok) throw refusal(state, slot, result.code, asked);
+  return result.state;
+}

@@ -12,6 +12,7 @@ import { GatewayModule } from './gateway/gateway.module.js';
 import { HealthModule } from './health/health.module.js';
 import { ImportsModule } from './imports/imports.module.js';
 import { LineupModule } from './lineup/lineup.module.js';
+import { DeckModule } from './deck/deck.module.js';
 import { MailModule } from './mail/mail.module.js';
 import { PasswordLinksModule } from './password-links/password-links.module.js';
 import { ReportsModule } from './reports/reports.module.js';
@@ -56,6 +57,7 @@ import { webAppBuilt, webAppHeaders, webDist } from './web-app/web-app.js';
     AircraftModule,
     CyclesModule,
     LineupModule,
+    DeckModule,
     GatewayModule,
     MailModule,
     PasswordLinksModule,

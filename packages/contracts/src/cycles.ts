@@ -1,3 +1,5 @@
+import type { LandingAreaState } from './deck.js';
+
 export const CYCLE_STATES = ['planning', 'executing', 'closed'] as const;
 export type CycleState = (typeof CYCLE_STATES)[number];
 
@@ -28,6 +30,10 @@ export interface CycleView extends CycleConditions {
   windowStartAt: string;
   windowEndAt: string;
   state: CycleState;
+  /** Set by the air boss (or air operations) or the handler; `landingAreaInUse` is true unless clear. */
+  landingArea: LandingAreaState;
+  /** Why the landing area is fouled, or a note on the recovery; null when none. */
+  landingAreaReason: string | null;
   /** Bumped by one with every accepted change; orders the change log and broadcasts. */
   version: number;
   slotCount: number;

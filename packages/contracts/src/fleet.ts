@@ -28,8 +28,34 @@ export interface CatapultView {
 
 export interface DeckSpot {
   name: string;
+  /** The named deck area the spot belongs to; a spot without one stands alone. */
+  area?: string;
+  /** Spots in front of this one in its row, which must be clear before an aircraft here can taxi out. */
+  clearBefore?: string[];
   /** Taxi time from this spot to each catapult, seconds, keyed by catapult number. */
   taxiS: Record<number, number>;
+}
+
+export interface ElevatorLayout {
+  name: string;
+  /** One trip between the hangar deck and the flight deck, seconds. */
+  cycleS: number;
+  /** Taxi time from the elevator at flight-deck level to each catapult, seconds, keyed by catapult number. */
+  taxiS: Record<number, number>;
+}
+
+export interface HangarBayLayout {
+  name: string;
+  /** Names of the elevators that serve the bay. */
+  elevators: string[];
+}
+
+/** The rest of the ship's deck besides its spots. */
+export interface DeckLayout {
+  elevators: ElevatorLayout[];
+  hangarBays: HangarBayLayout[];
+  /** Numbers of the catapults inside the landing area (the waist catapults by default). */
+  landingAreaCatapults: number[];
 }
 
 /** The ship's own after-the-shot profile: data the ship writes, not code. */
@@ -53,6 +79,7 @@ export interface ShipView {
   pairGapS: number;
   profile: ShipProfile;
   deckSpots: DeckSpot[];
+  deckLayout: DeckLayout;
   catapults: CatapultView[];
 }
 

@@ -1,5 +1,6 @@
 import type { CatapultPosition, CatapultStatus } from './fleet.js';
 import type { CycleView } from './cycles.js';
+import type { DeckPositionView } from './deck.js';
 import type { Role } from './roles.js';
 
 export const SLOT_STATUSES = [
@@ -232,6 +233,10 @@ export interface SlotView {
   waivers: WaiverView[];
   /** The launch gates closed for it on its catapult now, in order; null in the deck pool. */
   gates: LaunchGateView[] | null;
+  /** Where the aircraft is now in this cycle; null once it has launched. */
+  deckPosition: DeckPositionView | null;
+  /** Side numbers of the aircraft parked in front that must move before this one can taxi out to launch. */
+  mustMove: string[];
 }
 
 export interface LaneView extends WindOverDeck {
@@ -274,6 +279,8 @@ export const CHANGE_KINDS = [
   'air_plan_imported',
   'slot_added',
   'gate_waived',
+  'aircraft_towed',
+  'landing_area_set',
 ] as const;
 export type ChangeKind = (typeof CHANGE_KINDS)[number];
 

@@ -40,6 +40,11 @@ export const LINEUP_REFUSAL_CODES = [
   'already_launched',
   'idempotency_key_reused',
   'launch_data_invalid',
+  /** A tow into a position another aircraft holds. */
+  'position_occupied',
+  /** A tow out of, or into, a spot behind aircraft that must move first. */
+  'path_blocked',
+  'unknown_position',
 ] as const;
 export type LineupRefusalCode = (typeof LINEUP_REFUSAL_CODES)[number];
 

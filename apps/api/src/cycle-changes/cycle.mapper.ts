@@ -23,6 +23,8 @@ export function toCycleView(cycle: Cycle, counts: CycleCounts): CycleView {
     weatherCase: cycle.weatherCase,
     night: cycle.night,
     landingAreaInUse: cycle.landingAreaInUse,
+    landingArea: cycle.landingArea,
+    landingAreaReason: cycle.landingAreaReason,
     state: cycle.state,
     version: cycle.version,
     slotCount: counts.slotCount,

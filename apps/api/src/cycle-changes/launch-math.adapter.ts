@@ -61,8 +61,10 @@ export function catapultEnergy(catapult: Catapult): CatapultEnergyProfile {
   };
 }
 
-export function launchCatapult(catapult: Catapult): LaunchCatapult {
+/** `inLandingArea`: whether the ship marks the catapult inside the landing area (else: waist catapults). */
+export function launchCatapult(catapult: Catapult, inLandingArea?: boolean): LaunchCatapult {
   return {
+    inLandingArea,
     id: String(catapult.id),
     number: catapult.number,
     position: catapult.position,

@@ -18,6 +18,8 @@ const cycle = (version: number): CycleView => ({
   weatherCase: 'I',
   night: false,
   landingAreaInUse: false,
+  landingArea: 'clear',
+  landingAreaReason: null,
   state: 'planning',
   version,
   slotCount: 3,
@@ -65,6 +67,8 @@ const slot = (id: number, catapultId: number | null, position: number | null, ve
   figures: null,
   launchRecord: null,
   gates: null,
+  deckPosition: { kind: 'spot', name: `spot-${id}` },
+  mustMove: [],
 });
 
 const lane = (catapultId: number, slotIds: number[]): LaneView => ({

@@ -35,6 +35,7 @@ import {
   signedTurn,
 } from './launch-math.adapter.js';
 import type { LineupState } from './lineup-state.js';
+import { clearBefore, deckLayout, deckLayoutData, deckPositionView, taxiSeconds } from './deck-positions.js';
 
 /** Slots that have left the lineup for good; every other slot with a catapult is in that catapult's lane. */
 const OUT_OF_LINEUP: readonly SlotStatus[] = ['down', 'scratched'];
@@ -57,20 +58,23 @@ export function launchPriority(slot: Pick<Slot, 'tanker' | 'earlyWarning' | 'spa
   );
 }
 
-/** Taxi time (s) from where the aircraft is parked to a catapult, from the ship's deck spots. */
-export function taxiSeconds(state: LineupState, slot: Slot, catapult: Catapult): number | undefined {
-  return state.ship.deckSpots.find((spot) => spot.name === slot.aircraft.parkedSpot)?.taxiS[catapult.number];
-}
-
 const iso = (instant: Date | EpochMs | null | undefined): string | null =>
   instant === null || instant === undefined ? null : new Date(instant).toISOString();
 
+/** The cycle's catapults for launch-math, each marked inside the landing area or not as the ship says. */
+export const launchCatapults = (state: LineupState) => {
+  const inside = deckLayoutData(state.ship, state.catapults).landingAreaCatapults;
+  return state.catapults.map((catapult) => launchCatapult(catapult, inside.includes(catapult.number)));
+};
+
 /**
  * launch-math's projection of a lineup (slot ids per catapult id): launched slots at their recorded
- * times, planned ones no earlier than their taxi from where they are parked.
+ * times, planned ones no earlier than their taxi from where they are now, and none out of its row
+ * before the aircraft parked in front of it.
  */
 export function projectLineup(state: LineupState, lanes: Record<string, string[]>): Projection {
   const { cycle } = state;
+  const layout = deckLayout(state.ship, state.catapults);
   const start = epochMs(cycle.plannedLaunchAt.getTime());
   const slotById = new Map(state.slots.map((slot) => [String(slot.id), slot]));
   const launched: Record<string, EpochMs> = {};
@@ -81,20 +85,21 @@ export function projectLineup(state: LineupState, lanes: Record<string, string[]
       const slot = slotById.get(slotId)!;
       priorities[slotId] = launchPriority(slot);
       if (slot.launchedAt) launched[slotId] = epochMs(slot.launchedAt.getTime());
-      const taxi = slot.status === 'planned' ? taxiSeconds(state, slot, catapult) : undefined;
+      const taxi = slot.status === 'planned' ? taxiSeconds(state, layout, slot, catapult) : undefined;
       if (taxi !== undefined) notBefore[slotId] = epochMs(start + secondsToMilliseconds(seconds(taxi)));
     }
   }
   return projectLaunchTimes({
     cycleStart: start,
     window: { start: epochMs(cycle.windowStartAt.getTime()), end: epochMs(cycle.windowEndAt.getTime()) },
-    catapults: state.catapults.map(launchCatapult),
+    catapults: launchCatapults(state),
     landingAreaInUse: cycle.landingAreaInUse,
     lanes,
     pairMinimumGap: seconds(state.ship.pairGapS),
     launched,
     notBefore,
     priorities,
+    clearBefore: clearBefore(state, layout),
   });
 }
 
@@ -113,6 +118,7 @@ interface CycleConditions {
 
 function cycleConditions(state: LineupState): CycleConditions {
   const { cycle } = state;
+  const catapults = new Map(launchCatapults(state).map((catapult) => [catapult.id, catapult]));
   const relative = cycleRelativeWind(cycle);
   const profile = shipProfile(state.ship.profile);
   return {
@@ -124,7 +130,7 @@ function cycleConditions(state: LineupState): CycleConditions {
         {
           catapult,
           wind: catapultWind(relative, degrees(catapult.axisAngleDeg)),
-          closedReason: catapultClosedReason(launchCatapult(catapult), cycle.landingAreaInUse),
+          closedReason: catapultClosedReason(catapults.get(String(catapult.id))!, cycle.landingAreaInUse),
           clearingTurnDeg: signedTurn(clearingTurn(profile, catapult.position, cycle.night)),
         },
       ]),
@@ -163,6 +169,8 @@ export function buildSnapshot(state: LineupState): LineupSnapshot {
     ),
   );
   const projected = new Map(projection.slots.map((slot) => [Number(slot.slotId), slot]));
+  const mustMove = new Map(projection.unschedulable.map((slot) => [slot.slotId, slot.mustMove ?? []]));
+  const sideOf = new Map(state.slots.map((slot) => [String(slot.id), slot.aircraft.sideNumber]));
 
   const slots: SlotView[] = state.slots.map((slot) => {
     const type = aircraftProfile(slot.aircraft.type);
@@ -211,6 +219,8 @@ export function buildSnapshot(state: LineupState): LineupSnapshot {
       figures,
       launchRecord: record,
       gates: figures && !record ? slotLaunchGates(state, slot, figures).views : null,
+      deckPosition: slot.status === 'launched' ? null : deckPositionView(slot),
+      mustMove: (mustMove.get(String(slot.id)) ?? []).map((id) => sideOf.get(id) ?? id),
     };
   });
   const viewOf = new Map(slots.map((view) => [view.id, view]));

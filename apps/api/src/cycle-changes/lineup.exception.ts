@@ -36,6 +36,9 @@ const STATUS: Record<LineupRefusalCode, HttpStatus> = {
   already_launched: HttpStatus.CONFLICT,
   idempotency_key_reused: HttpStatus.CONFLICT,
   launch_data_invalid: HttpStatus.UNPROCESSABLE_ENTITY,
+  position_occupied: HttpStatus.CONFLICT,
+  path_blocked: HttpStatus.CONFLICT,
+  unknown_position: HttpStatus.BAD_REQUEST,
 };
 
 /** Every refusal of a lineup or cycle command, with a code the client can act on. */

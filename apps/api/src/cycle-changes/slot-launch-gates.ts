@@ -15,12 +15,22 @@ const REVERIFY_WORDS = {
 /** The crew recorded the figure agreed with the pilot (by the tablet or by signal). */
 export const weightAgreed = (slot: Slot) => slot.catapultWeightAckAt !== null && slot.agreedWeightLb !== null;
 
+/** Why a catapult inside the landing area cannot fire now: the state, and the reason it is fouled. */
+function landingAreaSentence(state: LineupState, slot: Slot): string {
+  const catapult = state.catapults.find((candidate) => candidate.id === slot.catapultId);
+  const { landingArea, landingAreaReason } = state.cycle;
+  const why =
+    landingArea === 'fouled' ? `fouled${landingAreaReason ? `: ${landingAreaReason}` : ''}` : 'recovering aircraft';
+  return `Cat ${catapult?.number ?? '?'} lies in the landing area, which is ${why}; it fires when the landing area is clear.`;
+}
+
 /** A gate in a sentence for the deck crew; a gate the figures close takes the figures' own sentence. */
 function sentence(gate: LaunchGate, state: LineupState, slot: Slot, figures: LaunchFigures): string {
   const side = slot.aircraft.sideNumber;
   switch (gate) {
-    case 'catapult_down':
     case 'catapult_closed':
+      return landingAreaSentence(state, slot);
+    case 'catapult_down':
     case 'over_max_gross_weight':
     case 'crosswind_over_limit':
     case 'outside_launch_table':

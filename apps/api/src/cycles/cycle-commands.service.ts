@@ -8,6 +8,7 @@ import { CycleChangeService } from '../cycle-changes/cycle-change.service.js';
 import { dropBackForReverify } from '../cycle-changes/reverify-drop-back.js';
 import { Slot } from '../database/entities/slot.entity.js';
 import type { LineupState } from '../cycle-changes/lineup-state.js';
+import { startingPositions } from '../cycle-changes/starting-positions.js';
 import { LineupException } from '../cycle-changes/lineup.exception.js';
 import { User } from '../database/entities/user.entity.js';
 import { CycleClosing } from './cycle-closing.service.js';
@@ -58,6 +59,13 @@ function changedConditions(request: UpdateCycleConditionsDto, cycle: Cycle): Con
   ) as ConditionValues;
 }
 
+/** The conditions' landing-area flag sets the landing area's state with it: in use is recovering. */
+function landingAreaFor(values: ConditionValues, cycle: Cycle): Partial<Cycle> {
+  if (!('landingAreaInUse' in values)) return {};
+  if (values.landingAreaInUse) return cycle.landingArea === 'clear' ? { landingArea: 'recovering' } : {};
+  return { landingArea: 'clear', landingAreaReason: null };
+}
+
 /** Air operations' changes to a cycle; each is a versioned change like a lineup command. */
 @Injectable()
 export class CycleCommandsService {
@@ -81,7 +89,7 @@ export class CycleCommandsService {
         throw new LineupException('no_change', 'The conditions already are as given; nothing changed.');
       }
       checkWindow({ ...state.cycle, ...values });
-      await manager.update(Cycle, { id: cycleId }, values);
+      await manager.update(Cycle, { id: cycleId }, { ...values, ...landingAreaFor(values, state.cycle) });
       const reverify = await this.reverifyFor(manager, state, values, actor);
       return {
         summary: `Conditions: ${describeConditions(values, state.cycle)}${reverify}`,
@@ -140,7 +148,9 @@ export class CycleCommandsService {
         throw new CyclesException('aircraft_unserviceable', `${side} is marked unserviceable.`);
       const pilotId = request.pilotId ?? null;
       if (pilotId !== null) await this.checkPilot(manager, state, pilotId);
+      const start = (await startingPositions(manager, state, [aircraft.id])).get(aircraft.id);
       await manager.insert(Slot, {
+        ...start,
         cycleId,
         aircraftId: aircraft.id,
         pilotId,

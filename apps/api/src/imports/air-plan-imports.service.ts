@@ -8,6 +8,7 @@ import { Cycle } from '../database/entities/cycle.entity.js';
 import { BasisChecks } from '../cycle-changes/basis-checks.service.js';
 import { actorOf, CycleChangeService } from '../cycle-changes/cycle-change.service.js';
 import { Slot } from '../database/entities/slot.entity.js';
+import { startingPositions } from '../cycle-changes/starting-positions.js';
 import { LineupException } from '../cycle-changes/lineup.exception.js';
 import { User } from '../database/entities/user.entity.js';
 import { AIR_PLAN_COLUMNS, AIR_PLAN_LAYOUT, type AirPlanLine, readAirPlan } from './air-plan-layout.js';
@@ -115,9 +116,15 @@ export class AirPlanImports {
       // The fleet, the people and the cycle may have moved on since the preview: checked again, under the cycle's lock.
       const checked = checkAirPlan(lines, await planContext(manager, lines, state.cycle.number, state.slots));
       if (checked.problems.length > 0) throw this.outOfDate(checked);
+      const starts = await startingPositions(
+        manager,
+        state,
+        checked.resolved.map((line) => line.aircraftId),
+      );
       await manager.insert(
         Slot,
         checked.resolved.map((line) => ({
+          ...starts.get(line.aircraftId),
           cycleId,
           aircraftId: line.aircraftId,
           pilotId: line.pilotId,

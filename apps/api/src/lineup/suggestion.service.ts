@@ -1,8 +1,8 @@
 import type { SuggestedLineup } from '@catline/contracts';
 import { epochMs, seconds, type LineupSuggestion, type Seconds, type SuggestionInput } from '@catline/launch-math';
 import { Injectable } from '@nestjs/common';
-import { launchCatapult } from '../cycle-changes/launch-math.adapter.js';
-import { laneSlots, launchPriority, projectLineup, taxiSeconds } from '../cycle-changes/lineup-snapshot.builder.js';
+import { clearBefore, deckLayout, taxiSeconds } from '../cycle-changes/deck-positions.js';
+import { laneSlots, launchCatapults, launchPriority, projectLineup } from '../cycle-changes/lineup-snapshot.builder.js';
 import { LineupSnapshotService } from '../cycle-changes/lineup-snapshot.service.js';
 import type { LineupState } from '../cycle-changes/lineup-state.js';
 import { asLaunchDataRefusal } from '../cycle-changes/lineup.exception.js';
@@ -34,22 +34,24 @@ export class SuggestionService {
 export function suggestionInput(state: LineupState): SuggestionInput {
   const { cycle } = state;
   const planned = state.slots.filter((slot) => slot.status === 'planned');
+  const layout = deckLayout(state.ship, state.catapults);
   const taxiTimes: Record<string, Record<string, Seconds>> = {};
   for (const slot of planned) {
     taxiTimes[slot.id] = {};
     for (const catapult of state.catapults) {
-      const taxi = taxiSeconds(state, slot, catapult);
+      const taxi = taxiSeconds(state, layout, slot, catapult);
       if (taxi !== undefined) taxiTimes[slot.id][catapult.id] = seconds(taxi);
     }
   }
   return {
     cycleStart: epochMs(cycle.plannedLaunchAt.getTime()),
     window: { start: epochMs(cycle.windowStartAt.getTime()), end: epochMs(cycle.windowEndAt.getTime()) },
-    catapults: state.catapults.map(launchCatapult),
+    catapults: launchCatapults(state),
     landingAreaInUse: cycle.landingAreaInUse,
     pairMinimumGap: seconds(state.ship.pairGapS),
     aircraft: planned.map((slot) => ({ id: String(slot.id), priority: launchPriority(slot) })),
     taxiTimes,
+    clearBefore: clearBefore(state, layout),
   };
 }
 

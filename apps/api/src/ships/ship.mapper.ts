@@ -1,6 +1,7 @@
 import type { CatapultView, ShipView } from '@catline/contracts';
 import type { Catapult } from '../database/entities/catapult.entity.js';
 import type { Ship } from '../database/entities/ship.entity.js';
+import { deckLayoutData } from '../cycle-changes/deck-positions.js';
 
 export function toCatapultView(catapult: Catapult): CatapultView {
   return {
@@ -29,6 +30,7 @@ export function toShipView(ship: Ship, catapults: Catapult[]): ShipView {
     pairGapS: ship.pairGapS,
     profile: ship.profile,
     deckSpots: ship.deckSpots,
+    deckLayout: deckLayoutData(ship, catapults),
     catapults: [...catapults].sort((a, b) => a.number - b.number).map(toCatapultView),
   };
 }

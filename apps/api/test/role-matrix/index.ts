@@ -10,6 +10,7 @@ import { aircraftTypesRoutes } from './aircraft-types.routes.js';
 import { aircraftRoutes } from './aircraft.routes.js';
 import { authRoutes } from './auth.routes.js';
 import { cyclesRoutes } from './cycles.routes.js';
+import { deckRoutes } from './deck.routes.js';
 import { healthRoutes } from './health.routes.js';
 import { importsRoutes } from './imports.routes.js';
 import { lineupRoutes } from './lineup.routes.js';
@@ -28,6 +29,7 @@ export const matrixRoutes: MatrixRoute[] = [
   ...authRoutes,
   ...usersRoutes,
   ...shipsRoutes,
+  ...deckRoutes,
   ...squadronsRoutes,
   ...aircraftTypesRoutes,
   ...aircraftRoutes,

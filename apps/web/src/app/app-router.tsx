@@ -44,6 +44,12 @@ const router = createBrowserRouter([
                 }),
               },
               {
+                path: 'deck',
+                lazy: async () => ({
+                  Component: (await import('../features/deck/components/deck-screen.js')).DeckScreen,
+                }),
+              },
+              {
                 element: <RoleRoute roles={CATAPULT_ROLES} screen="Cat station" />,
                 children: [
                   {

@@ -56,6 +56,9 @@ const REASONS: Record<RefusalCode, string> = {
   already_launched: 'already launched',
   idempotency_key_reused: 'the launch request was sent twice with different contents',
   launch_data_invalid: 'the stored launch data cannot give figures',
+  position_occupied: 'another aircraft is there',
+  path_blocked: 'aircraft in the way must move first',
+  unknown_position: 'the ship has no such position',
   // cycles
   cycle_number_taken: 'the cycle number is taken',
   invalid_window: 'the launch window is not valid',

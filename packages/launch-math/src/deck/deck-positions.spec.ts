@@ -1,6 +1,6 @@
 import { LaunchMathInputError } from '../errors.js';
 import { seconds } from '../units/units.js';
-import { blockingAircraft, taxiTimeFrom, taxiTimesFrom, type DeckLayout } from './deck-positions.js';
+import { blockingAircraft, taxiTimeFrom, taxiTimesFrom, towBlockers, type DeckLayout } from './deck-positions.js';
 
 // An invented deck (common practice, no source): a bow row of three spots (b1 at the front), a waist
 // area of two spots, one elevator of 45 s per trip, and a hangar bay served by that elevator and by a
@@ -74,5 +74,37 @@ describe('aircraft that must clear first', () => {
     expect(() => blockingAircraft(layout, { A: { kind: 'spot', id: 'b1' }, B: { kind: 'spot', id: 'b1' } })).toThrow(
       LaunchMathInputError,
     );
+  });
+});
+
+describe('a tow', () => {
+  const spot = (id: string) => ({ kind: 'spot' as const, id });
+  const free = { occupiedBy: null, mustMove: [], noRoute: false };
+
+  it('goes when the target is free and nothing stands in front', () => {
+    expect(towBlockers(layout, { A: spot('b1') }, 'A', spot('w1'))).toEqual(free);
+  });
+
+  it('is refused into an occupied spot, naming who holds it', () => {
+    expect(towBlockers(layout, { A: spot('b1'), B: spot('w1') }, 'A', spot('w1')).occupiedBy).toBe('B');
+  });
+
+  it('cannot leave a spot, nor enter one, past an aircraft parked in front', () => {
+    // C on b3 is behind A on b1 (b3 clears b2 and b1 first); D goes into b2, which is behind b1.
+    expect(towBlockers(layout, { A: spot('b1'), C: spot('b3') }, 'C', spot('w1')).mustMove).toEqual(['A']);
+    expect(towBlockers(layout, { A: spot('b1'), D: spot('w2') }, 'D', spot('b2')).mustMove).toEqual(['A']);
+  });
+
+  it('needs a free elevator of the bay between the hangar and the deck', () => {
+    const hangar = { kind: 'hangar' as const, id: 'bay1' };
+    const positions = {
+      H: hangar,
+      E1: { kind: 'elevator' as const, id: 'el1' },
+      E2: { kind: 'elevator' as const, id: 'el2' },
+    };
+    expect(towBlockers(layout, positions, 'H', spot('w1')).mustMove).toEqual(['E1', 'E2']);
+    expect(towBlockers(layout, { H: hangar, E1: positions.E1 }, 'H', spot('w1'))).toEqual(free);
+    // The aircraft on an elevator goes down on it, whatever the other elevator holds.
+    expect(towBlockers(layout, positions, 'E1', hangar)).toEqual(free);
   });
 });

@@ -129,3 +129,57 @@ export function blockingAircraft(
   }
   return blockers;
 }
+
+/** What stands in the way of one tow; all empty when it can go now. */
+export interface TowBlockers {
+  /** The aircraft already on the target spot or elevator. */
+  readonly occupiedBy: string | null;
+  /** Aircraft in front of the spot it leaves or enters, or on every elevator between hangar and deck. */
+  readonly mustMove: readonly string[];
+  /** The target cannot be reached from where the aircraft is (a hangar bay its elevator does not serve). */
+  readonly noRoute: boolean;
+}
+
+/**
+ * Whether an aircraft can be towed from where it is to `target` now: the target is free (a hangar bay
+ * holds any number); it does not leave a spot past aircraft parked in front of it, nor enter one past
+ * aircraft in front of that; between hangar and flight deck it needs an elevator of the bay that is
+ * free (or the one it stands on).
+ */
+export function towBlockers(
+  layout: DeckLayout,
+  positions: Readonly<Record<string, DeckPosition>>,
+  aircraftId: string,
+  target: DeckPosition,
+): TowBlockers {
+  const from = positions[aircraftId];
+  if (from === undefined) throw new LaunchMathInputError(`Aircraft ${aircraftId} has no position`);
+  const holderOf = (position: DeckPosition): string | undefined =>
+    Object.keys(positions).find(
+      (other) => other !== aircraftId && positions[other].kind === position.kind && positions[other].id === position.id,
+    );
+  const inFront = (spotId: string): string[] =>
+    (findIn(layout.spots, spotId, 'deck spot').clearBefore ?? []).flatMap((front) => {
+      const holder = holderOf({ kind: 'spot', id: front });
+      return holder === undefined ? [] : [holder];
+    });
+
+  const occupiedBy = target.kind === 'hangar' ? null : (holderOf(target) ?? null);
+  const mustMove = new Set<string>();
+  if (from.kind === 'spot') inFront(from.id).forEach((holder) => mustMove.add(holder));
+  if (target.kind === 'spot') inFront(target.id).forEach((holder) => mustMove.add(holder));
+
+  let noRoute = false;
+  const bay = from.kind === 'hangar' ? from : target.kind === 'hangar' ? target : null;
+  const other = bay === from ? target : from;
+  if (bay !== null && other.kind !== 'hangar') {
+    const elevators = findIn(layout.hangarBays, bay.id, 'hangar bay').elevatorIds;
+    if (other.kind === 'elevator') noRoute = !elevators.includes(other.id);
+    else {
+      const holders = elevators.map((id) => holderOf({ kind: 'elevator', id }));
+      if (elevators.length === 0) noRoute = true;
+      else if (holders.every((holder) => holder !== undefined)) holders.forEach((holder) => mustMove.add(holder!));
+    }
+  }
+  return { occupiedBy, mustMove: [...mustMove], noRoute };
+}

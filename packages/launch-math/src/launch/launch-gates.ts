@@ -8,7 +8,7 @@ import type { LaunchNoGoCode } from './launch-figures.js';
 export const HARD_LAUNCH_GATES = [
   'cycle_not_executing',
   'catapult_down',
-  /** A waist catapult while the landing area is in use. */
+  /** A catapult inside the landing area (the waist ones by default) while it recovers or is fouled. */
   'catapult_closed',
   /** The air boss has not cleared the deck ahead of this catapult. */
   'deck_not_clear',

@@ -11,6 +11,7 @@ export const API_TAGS = {
   aircraft: 'The airframes of the fleet.',
   cycles: 'Launch cycles: conditions, start, close and the aircraft taking part.',
   lineup: 'The live lineup of a cycle: its snapshot, change feed and the commands that change it.',
+  deck: "Where a cycle's aircraft are: tows between positions, and the landing area's state.",
   imports: 'CSV uploads (air plans, launch tables) in two steps: preview, then confirm.',
   reports: "A cycle's record, its replay and shot counts, as JSON or CSV.",
   health: 'Whether the API and its database answer.',

@@ -1,4 +1,4 @@
-import type { CycleState, WeatherCase } from '@catline/contracts';
+import type { CycleState, LandingAreaState, WeatherCase } from '@catline/contracts';
 import { Column, Entity, JoinColumn, ManyToOne, PrimaryGeneratedColumn, Unique, type Relation } from 'typeorm';
 import { CreatedAtColumn, InstantColumn, UpdatedAtColumn } from '../columns.js';
 import { Ship } from './ship.entity.js';
@@ -52,8 +52,15 @@ export class Cycle {
   @Column({ default: false })
   night: boolean;
 
+  /** True unless `landingArea` is clear; kept with it by every write (the projection reads this). */
   @Column({ name: 'landing_area_in_use', default: false })
   landingAreaInUse: boolean;
+
+  @Column({ name: 'landing_area', type: 'varchar', length: 10, default: 'clear' })
+  landingArea: LandingAreaState;
+
+  @Column({ name: 'landing_area_reason', type: 'varchar', length: 200, nullable: true })
+  landingAreaReason: string | null;
 
   @Column({ type: 'varchar', length: 10, default: 'planning' })
   state: CycleState;

@@ -1,4 +1,4 @@
-import type { DeckSpot, ShipProfile } from '@catline/contracts';
+import type { DeckLayout, DeckSpot, ShipProfile } from '@catline/contracts';
 import { Column, Entity, OneToMany, PrimaryGeneratedColumn, type Relation } from 'typeorm';
 import { Catapult } from './catapult.entity.js';
 
@@ -22,6 +22,10 @@ export class Ship {
 
   @Column({ name: 'deck_spots', type: 'json' })
   deckSpots: DeckSpot[];
+
+  /** Elevators, hangar bays and the landing area's catapults; null for a ship with none given yet. */
+  @Column({ name: 'deck_layout', type: 'json', nullable: true })
+  deckLayout: DeckLayout | null;
 
   @OneToMany(() => Catapult, (catapult) => catapult.ship)
   catapults: Relation<Catapult>[];

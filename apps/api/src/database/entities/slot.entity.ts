@@ -1,4 +1,4 @@
-import type { LaunchRecord, ReverifyCause, SlotStatus, SoftLaunchGateCode } from '@catline/contracts';
+import type { DeckPositionKind, LaunchRecord, ReverifyCause, SlotStatus, SoftLaunchGateCode } from '@catline/contracts';
 import type { LastStep } from '@catline/launch-math';
 import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, Unique, type Relation } from 'typeorm';
 import { Aircraft } from './aircraft.entity.js';
@@ -79,6 +79,14 @@ export class Slot {
   /** 0-based place in the lane; null in the deck pool. */
   @Column({ type: 'int', nullable: true })
   position: number | null;
+
+  /** Where the aircraft is in this cycle: a deck spot, an elevator or a hangar bay. */
+  @Column({ name: 'deck_position_kind', type: 'varchar', length: 8, default: 'spot' })
+  deckPositionKind: DeckPositionKind;
+
+  /** The spot's, elevator's or bay's name; empty until the slot's starting position is set. */
+  @Column({ name: 'deck_position_name', length: 20, default: '' })
+  deckPositionName: string;
 
   @Column({ type: 'varchar', length: 14, default: 'planned' })
   status: SlotStatus;

@@ -2,6 +2,7 @@ import { InitialSchema1796162620410 } from './1796162620410-InitialSchema.js';
 import { MailOutboxPasswordLinksUploads1796164550524 } from './1796164550524-MailOutboxPasswordLinksUploads.js';
 import { SlotLaunchRecord1796200292167 } from './1796200292167-SlotLaunchRecord.js';
 import { SlotReverifyAndWaivers1796200677124 } from './1796200677124-SlotReverifyAndWaivers.js';
+import { DeckPositionsLandingArea1796201917830 } from './1796201917830-DeckPositionsLandingArea.js';
 import { SlotAgreedWeightAndLastStep1796203000000 } from './1796203000000-SlotAgreedWeightAndLastStep.js';
 
 /** Every migration in the order it runs; add a new one at the end (see DEVELOPERS.md). */
@@ -10,5 +11,6 @@ export const migrations = [
   MailOutboxPasswordLinksUploads1796164550524,
   SlotLaunchRecord1796200292167,
   SlotReverifyAndWaivers1796200677124,
+  DeckPositionsLandingArea1796201917830,
   SlotAgreedWeightAndLastStep1796203000000,
 ];

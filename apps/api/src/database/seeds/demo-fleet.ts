@@ -1,4 +1,4 @@
-import type { DeckSpot, LaunchTableRow, Role, ShipProfile, TrimBand } from '@catline/contracts';
+import type { DeckLayout, DeckSpot, LaunchTableRow, Role, ShipProfile, TrimBand } from '@catline/contracts';
 
 // The invented demo scenario: a fictional training carrier, its squadrons and aircraft types.
 // Every name and number here is made up for the demo; none is real launch data. The hull code, the
@@ -69,13 +69,47 @@ export const demoCatapults = [
   },
 ] as const;
 
-/** Taxi times in seconds from each parking area to catapults 1 to 4. */
+/**
+ * Taxi times in seconds from each spot to catapults 1 to 4, spots grouped in four deck areas. Two rows
+ * hold one aircraft behind another: aft-4 waits for aft-3, stern-2 for stern-1. All invented.
+ */
 export const demoDeckSpots: DeckSpot[] = [
-  ...[1, 2, 3, 4].map((n) => ({ name: `bow-${n}`, taxiS: { 1: 60 + n * 10, 2: 50 + n * 10, 3: 150, 4: 170 } })),
-  ...[1, 2, 3, 4].map((n) => ({ name: `mid-${n}`, taxiS: { 1: 110, 2: 100, 3: 80 + n * 5, 4: 90 + n * 5 } })),
-  ...[1, 2, 3, 4].map((n) => ({ name: `aft-${n}`, taxiS: { 1: 180, 2: 170, 3: 90 + n * 10, 4: 80 + n * 10 } })),
-  ...[1, 2].map((n) => ({ name: `stern-${n}`, taxiS: { 1: 220, 2: 210, 3: 130, 4: 120 } })),
+  ...[1, 2, 3, 4].map((n) => ({
+    name: `bow-${n}`,
+    area: 'Bow',
+    taxiS: { 1: 60 + n * 10, 2: 50 + n * 10, 3: 150, 4: 170 },
+  })),
+  ...[1, 2, 3, 4].map((n) => ({
+    name: `mid-${n}`,
+    area: 'Midships',
+    taxiS: { 1: 110, 2: 100, 3: 80 + n * 5, 4: 90 + n * 5 },
+  })),
+  ...[1, 2, 3, 4].map((n) => ({
+    name: `aft-${n}`,
+    area: 'Aft',
+    ...(n === 4 ? { clearBefore: ['aft-3'] } : {}),
+    taxiS: { 1: 180, 2: 170, 3: 90 + n * 10, 4: 80 + n * 10 },
+  })),
+  ...[1, 2].map((n) => ({
+    name: `stern-${n}`,
+    area: 'Stern',
+    ...(n === 2 ? { clearBefore: ['stern-1'] } : {}),
+    taxiS: { 1: 220, 2: 210, 3: 130, 4: 120 },
+  })),
 ];
+
+/** Two elevators (a trip up or down takes 50 and 65 s) serving two hangar bays; invented. */
+export const demoDeckLayout: DeckLayout = {
+  elevators: [
+    { name: 'lift-fwd', cycleS: 50, taxiS: { 1: 90, 2: 80, 3: 140, 4: 150 } },
+    { name: 'lift-aft', cycleS: 65, taxiS: { 1: 200, 2: 190, 3: 100, 4: 90 } },
+  ],
+  hangarBays: [
+    { name: 'bay-A', elevators: ['lift-fwd', 'lift-aft'] },
+    { name: 'bay-B', elevators: ['lift-aft'] },
+  ],
+  landingAreaCatapults: [3, 4],
+};
 
 export const demoSquadrons = [
   { code: 'CWR', name: 'Cinderwrights', email: 'cinderwrights@catline.example' },

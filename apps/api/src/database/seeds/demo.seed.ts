@@ -12,6 +12,7 @@ import {
   demoAircraft,
   demoAircraftTypes,
   demoCatapults,
+  demoDeckLayout,
   demoDeckSpots,
   demoPeople,
   demoShip,
@@ -26,7 +27,7 @@ export async function seedDemo(dataSource: DataSource): Promise<boolean> {
   if ((await dataSource.getRepository(Ship).count()) > 0) return false;
   const passwordHash = await hashPassword(DEMO_PASSWORD);
   const shipId = await dataSource.transaction(async (manager) => {
-    const ship = await manager.save(Ship, { ...demoShip, deckSpots: demoDeckSpots });
+    const ship = await manager.save(Ship, { ...demoShip, deckSpots: demoDeckSpots, deckLayout: demoDeckLayout });
     const catapults = await manager.save(
       Catapult,
       demoCatapults.map((catapult) => ({ ...catapult, shipId: ship.id })),

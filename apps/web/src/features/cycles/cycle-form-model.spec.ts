@@ -69,6 +69,8 @@ describe('editing a cycle', () => {
     weatherCase: 'III',
     night: true,
     landingAreaInUse: true,
+    landingArea: 'recovering',
+    landingAreaReason: null,
   };
 
   it('round-trips the cycle through the form into a conditions change on the version it saw', () => {
@@ -80,6 +82,8 @@ describe('editing a cycle', () => {
       version: _version,
       slotCount: _slots,
       launchedCount: _launched,
+      landingArea: _landingArea,
+      landingAreaReason: _landingAreaReason,
       ...conditions
     } = cycle;
     expect(toConditionsRequest(valuesFromCycle(cycle), cycle.version)).toEqual({ ...conditions, basisVersion: 5 });

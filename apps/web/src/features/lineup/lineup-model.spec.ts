@@ -31,6 +31,8 @@ const cycle: CycleView = {
   weatherCase: 'I',
   night: false,
   landingAreaInUse: false,
+  landingArea: 'clear',
+  landingAreaReason: null,
 };
 
 function slot(
@@ -80,6 +82,8 @@ function slot(
     figures: null,
     launchRecord: null,
     gates: null,
+    deckPosition: { kind: 'spot', name: `spot-${id}` },
+    mustMove: [],
     ...extra,
   };
 }
@@ -341,6 +345,18 @@ describe('lineupWarnings', () => {
       },
     };
     expect(lineupWarnings(snapshot, clock).map((warning) => warning.key)).toEqual(['closed-12']);
+  });
+
+  it('names the aircraft that must move when the lineup sends one parked behind it', () => {
+    const snapshot = board();
+    snapshot.slots[1] = { ...snapshot.slots[1], mustMove: ['C21', 'D40'] };
+    expect(lineupWarnings(snapshot, clock)).toEqual([
+      {
+        kind: 'spot_blocked',
+        key: 'blocked-2',
+        text: 'C22 on cat 1 cannot taxi out: C21, D40 parked in front must move first.',
+      },
+    ]);
   });
 
   it('ignores aircraft already launched, down or scratched', () => {

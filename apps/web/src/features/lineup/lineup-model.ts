@@ -91,7 +91,8 @@ export function placeName(snapshot: LineupSnapshot, container: ContainerId, inde
   return index === undefined ? name : `${name}, place ${index + 1}`;
 }
 
-export type WarningKind = 'no_go' | 'missed_window' | 'catapult_down' | 'catapult_closed' | 'weight_not_agreed';
+export type WarningKind =
+  'no_go' | 'spot_blocked' | 'missed_window' | 'catapult_down' | 'catapult_closed' | 'weight_not_agreed';
 
 export interface LineupWarning {
   kind: WarningKind;
@@ -132,7 +133,7 @@ export function lineupWarnings(snapshot: LineupSnapshot, formatTime: (iso: strin
       warnings.push({
         kind: 'catapult_closed',
         key: `closed-${lane.catapultId}`,
-        text: `Cat ${lane.number} is closed while the landing area is in use; ${count} aircraft wait in its lane.`,
+        text: `Cat ${lane.number} is paused while the landing area is ${snapshot.cycle.landingArea === 'fouled' ? 'fouled' : 'recovering'}; ${count} aircraft wait in its lane.`,
       });
     }
   }
@@ -141,6 +142,13 @@ export function lineupWarnings(snapshot: LineupSnapshot, formatTime: (iso: strin
     const marks = laneMarks(lane, slots);
     const watched = launching ? waiting(lane).filter((slot) => marks.has(slot.id)) : waiting(lane);
     for (const slot of watched) {
+      if (slot.mustMove.length > 0) {
+        warnings.push({
+          kind: 'spot_blocked',
+          key: `blocked-${slot.id}`,
+          text: `${slot.sideNumber} on cat ${lane.number} cannot taxi out: ${slot.mustMove.join(', ')} parked in front must move first.`,
+        });
+      }
       const reasons =
         slot.figures?.reasons.filter(
           (reason) => reason.code !== 'catapult_down' && reason.code !== 'catapult_closed',

@@ -29,6 +29,8 @@ export const CHANGE_KIND_LABELS: Record<ChangeKind, string> = {
   air_plan_imported: 'Air plan imported',
   slot_added: 'Aircraft added',
   gate_waived: 'Waiver',
+  aircraft_towed: 'Tow',
+  landing_area_set: 'Landing area',
 };
 
 /** Slots in no lane and not in the deck pool: down or scratched aircraft. */

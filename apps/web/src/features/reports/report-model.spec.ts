@@ -23,6 +23,8 @@ function cycle(id: number, plannedLaunchAt: string, state: CycleView['state']): 
     weatherCase: 'I',
     night: false,
     landingAreaInUse: false,
+    landingArea: 'clear',
+    landingAreaReason: null,
   };
 }
 

@@ -1,4 +1,12 @@
-import { CYCLE_STATES, type CycleState, type CycleView, WEATHER_CASES, type WeatherCase } from '@catline/contracts';
+import {
+  CYCLE_STATES,
+  type CycleState,
+  type CycleView,
+  LANDING_AREA_STATES,
+  type LandingAreaState,
+  WEATHER_CASES,
+  type WeatherCase,
+} from '@catline/contracts';
 import { ApiProperty, ApiSchema } from '@nestjs/swagger';
 import { EnumProperty, IdProperty, InstantProperty, IntProperty } from './fields.js';
 
@@ -24,6 +32,14 @@ export class CycleViewDto implements CycleView {
 
   @EnumProperty(CYCLE_STATES, 'CycleState')
   state: CycleState;
+
+  @EnumProperty(LANDING_AREA_STATES, 'LandingAreaState', {
+    description: 'Set by the air boss or the handler; landingAreaInUse is true unless clear.',
+  })
+  landingArea: LandingAreaState;
+
+  @ApiProperty({ type: 'string', nullable: true, description: 'Why the landing area is fouled; null when none.' })
+  landingAreaReason: string | null;
 
   @IntProperty({ minimum: 0, description: 'Bumped by one with every accepted change; orders the change log.' })
   version: number;

@@ -4,7 +4,10 @@ import {
   type CatapultPosition,
   type CatapultStatus,
   type CatapultView,
+  type DeckLayout,
   type DeckSpot,
+  type ElevatorLayout,
+  type HangarBayLayout,
   type LaunchTableRow,
   ROLES,
   type Role,
@@ -73,6 +76,53 @@ export class DeckSpotDto implements DeckSpot {
     description: 'Taxi time from this spot to each catapult, seconds, keyed by catapult number.',
   })
   taxiS: Record<number, number>;
+
+  @ApiProperty({ required: false, description: 'The named deck area the spot belongs to.' })
+  area?: string;
+
+  @ApiProperty({
+    type: [String],
+    required: false,
+    description: 'Spots in front of this one in its row, which must be clear before an aircraft here can taxi out.',
+  })
+  clearBefore?: string[];
+}
+
+@ApiSchema({ name: 'ElevatorLayout' })
+export class ElevatorLayoutDto implements ElevatorLayout {
+  @ApiProperty()
+  name: string;
+
+  @ApiProperty({ description: 'One trip between the hangar deck and the flight deck, seconds.' })
+  cycleS: number;
+
+  @ApiProperty({
+    type: 'object',
+    additionalProperties: { type: 'number' },
+    description: 'Taxi time from the elevator at flight-deck level to each catapult, seconds, by catapult number.',
+  })
+  taxiS: Record<number, number>;
+}
+
+@ApiSchema({ name: 'HangarBayLayout' })
+export class HangarBayLayoutDto implements HangarBayLayout {
+  @ApiProperty()
+  name: string;
+
+  @ApiProperty({ type: [String], description: 'Names of the elevators that serve the bay.' })
+  elevators: string[];
+}
+
+@ApiSchema({ name: 'DeckLayout', description: "The ship's elevators, hangar bays and landing-area catapults." })
+export class DeckLayoutDto implements DeckLayout {
+  @ApiProperty({ type: [ElevatorLayoutDto] })
+  elevators: ElevatorLayout[];
+
+  @ApiProperty({ type: [HangarBayLayoutDto] })
+  hangarBays: HangarBayLayout[];
+
+  @ApiProperty({ type: [Number], description: 'Numbers of the catapults inside the landing area.' })
+  landingAreaCatapults: number[];
 }
 
 @ApiSchema({ name: 'ClearingTurns' })
@@ -124,6 +174,9 @@ export class ShipViewDto implements ShipView {
 
   @ApiProperty({ type: [DeckSpotDto] })
   deckSpots: DeckSpot[];
+
+  @ApiProperty({ type: () => DeckLayoutDto })
+  deckLayout: DeckLayout;
 
   @ApiProperty({ type: [CatapultViewDto] })
   catapults: CatapultView[];

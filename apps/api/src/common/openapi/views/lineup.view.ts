@@ -1,5 +1,8 @@
 import {
   CHANGE_KINDS,
+  DECK_POSITION_KINDS,
+  type DeckPositionKind,
+  type DeckPositionView,
   type ChangeActor,
   type ChangeKind,
   type CrosswindSide,
@@ -238,6 +241,15 @@ export class LaunchGateViewDto implements LaunchGateView {
   message: string;
 }
 
+@ApiSchema({ name: 'DeckPositionView', description: 'A deck spot, an elevator or a hangar bay.' })
+export class DeckPositionViewDto implements DeckPositionView {
+  @EnumProperty(DECK_POSITION_KINDS, 'DeckPositionKind')
+  kind: DeckPositionKind;
+
+  @ApiProperty({ description: "The spot's, elevator's or hangar bay's name in the ship's deck layout." })
+  name: string;
+}
+
 @ApiSchema({ name: 'SlotView', description: 'One aircraft of a cycle: where it stands in the lineup and its figures.' })
 export class SlotViewDto implements SlotView {
   @IdProperty()
@@ -370,6 +382,15 @@ export class SlotViewDto implements SlotView {
 
   @ApiProperty({ type: [LaunchGateViewDto], nullable: true, description: 'Null in the deck pool.' })
   gates: LaunchGateView[] | null;
+
+  @ApiProperty({ type: () => DeckPositionViewDto, nullable: true, description: 'Where it is; null once launched.' })
+  deckPosition: DeckPositionView | null;
+
+  @ApiProperty({
+    type: [String],
+    description: 'Side numbers of the aircraft parked in front that must move before this one can taxi out.',
+  })
+  mustMove: string[];
 }
 
 @ApiSchema({ name: 'LaneView', description: "A catapult's lane of the lineup." })

@@ -4,6 +4,7 @@ import type { LineupWarning, WarningKind } from '../lineup-model.js';
 const palette: Record<WarningKind, string> = {
   no_go: 'nogo',
   catapult_down: 'nogo',
+  spot_blocked: 'caution',
   missed_window: 'caution',
   catapult_closed: 'caution',
   weight_not_agreed: 'gray',

@@ -1,0 +1,57 @@
+import type { LineupCommandResult } from '@catline/contracts';
+import { Body, Controller, HttpCode, HttpStatus, Param, ParseIntPipe, Post } from '@nestjs/common';
+import { ApiTags } from '@nestjs/swagger';
+import type { AuthenticatedUser } from '../common/authenticated-user.js';
+import { CurrentUser } from '../common/decorators/current-user.decorator.js';
+import { Roles } from '../common/decorators/roles.decorator.js';
+import { actorOf } from '../cycle-changes/cycle-change.service.js';
+import { ApiDoc } from '../common/openapi/api-doc.decorator.js';
+import { LineupCommandResultDto } from '../common/openapi/views/lineup.view.js';
+import { DeckCommandsService } from './deck-commands.service.js';
+import { SetLandingAreaDto } from './dto/set-landing-area.dto.js';
+import { TowAircraftDto } from './dto/tow-aircraft.dto.js';
+
+// Each command answers 200 with the accepted change, like the lineup's; the lineup snapshot carries
+// every aircraft's position and the landing area.
+@ApiTags('deck')
+@Controller('cycles/:cycleId/deck')
+export class DeckController {
+  constructor(private readonly commands: DeckCommandsService) {}
+
+  @ApiDoc('Tow an aircraft to another position', {
+    response: LineupCommandResultDto,
+    description: 'To a free deck spot or elevator, or a hangar bay; refused when the way is blocked.',
+    refuses: {
+      400: ['unknown_position'],
+      404: ['not_found'],
+      409: ['stale_basis', 'cycle_closed', 'slot_not_movable', 'no_change', 'position_occupied', 'path_blocked'],
+      422: ['launch_data_invalid'],
+    },
+  })
+  @Roles('handler')
+  @Post('tows')
+  @HttpCode(HttpStatus.OK)
+  tow(
+    @Param('cycleId', ParseIntPipe) cycleId: number,
+    @Body() body: TowAircraftDto,
+    @CurrentUser() user: AuthenticatedUser,
+  ): Promise<LineupCommandResult> {
+    return this.commands.tow(cycleId, actorOf(user), body);
+  }
+
+  @ApiDoc('Set the landing area', {
+    response: LineupCommandResultDto,
+    description: 'Clear, recovering or fouled (with a reason); the catapults inside it pause unless clear.',
+    refuses: { 404: ['not_found'], 409: ['stale_basis', 'cycle_closed', 'no_change'], 422: ['launch_data_invalid'] },
+  })
+  @Roles('air_boss', 'handler')
+  @Post('landing-area')
+  @HttpCode(HttpStatus.OK)
+  setLandingArea(
+    @Param('cycleId', ParseIntPipe) cycleId: number,
+    @Body() body: SetLandingAreaDto,
+    @CurrentUser() user: AuthenticatedUser,
+  ): Promise<LineupCommandResult> {
+    return this.commands.setLandingArea(cycleId, actorOf(user), body);
+  }
+}

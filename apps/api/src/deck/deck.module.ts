@@ -1,0 +1,11 @@
+import { Module } from '@nestjs/common';
+import { CycleChangesModule } from '../cycle-changes/cycle-changes.module.js';
+import { DeckCommandsService } from './deck-commands.service.js';
+import { DeckController } from './deck.controller.js';
+
+@Module({
+  imports: [CycleChangesModule],
+  controllers: [DeckController],
+  providers: [DeckCommandsService],
+})
+export class DeckModule {}

@@ -1,0 +1,44 @@
+import type { LineupSnapshot, ShipView, SlotView } from '@catline/contracts';
+import { describe, expect, it } from 'vitest';
+import { deckPanels, towTargets } from './deck-model.js';
+
+const ship = {
+  deckSpots: [
+    { name: 'b1', area: 'Bow', taxiS: { 1: 60 } },
+    { name: 'b2', area: 'Bow', clearBefore: ['b1'], taxiS: { 1: 70 } },
+    { name: 'lone', taxiS: { 1: 90 } },
+  ],
+  deckLayout: {
+    elevators: [{ name: 'lift', cycleS: 50, taxiS: { 1: 80 } }],
+    hangarBays: [{ name: 'bay', elevators: ['lift'] }],
+    landingAreaCatapults: [],
+  },
+} as unknown as ShipView;
+
+const slot = (id: number, deckPosition: SlotView['deckPosition']) =>
+  ({ id, sideNumber: `X${id}`, deckPosition, status: 'planned' }) as SlotView;
+
+const snapshot = (slots: SlotView[]) => ({ slots }) as LineupSnapshot;
+
+describe('the deck screen model', () => {
+  it('groups spots by deck area in the ship’s order, then elevators and hangar bays, with their aircraft', () => {
+    const panels = deckPanels(
+      ship,
+      snapshot([slot(1, { kind: 'spot', name: 'b2' }), slot(2, { kind: 'hangar', name: 'bay' }), slot(3, null)]),
+    );
+    expect(panels.map((panel) => [panel.title, panel.places.map((place) => place.position.name)])).toEqual([
+      ['Bow', ['b1', 'b2']],
+      ['lone', ['lone']],
+      ['Elevators', ['lift']],
+      ['Hangar', ['bay']],
+    ]);
+    expect(panels[0].places[1].slots.map((on) => on.sideNumber)).toEqual(['X1']);
+    expect(panels[3].places[0].slots.map((on) => on.sideNumber)).toEqual(['X2']);
+  });
+
+  it('offers free spots and elevators and every hangar bay, not where the aircraft already is', () => {
+    const aboard = slot(1, { kind: 'spot', name: 'b2' });
+    const panels = deckPanels(ship, snapshot([aboard, slot(2, { kind: 'spot', name: 'lone' })]));
+    expect(towTargets(panels, aboard).map((position) => position.name)).toEqual(['b1', 'lift', 'bay']);
+  });
+});

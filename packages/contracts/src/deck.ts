@@ -1,0 +1,31 @@
+// The deck: where each aircraft of a cycle is, the landing area, and the commands that change them.
+
+export const DECK_POSITION_KINDS = ['spot', 'elevator', 'hangar'] as const;
+/** A deck spot (in a named deck area), an elevator at flight-deck level, or a hangar bay. */
+export type DeckPositionKind = (typeof DECK_POSITION_KINDS)[number];
+
+export interface DeckPositionView {
+  kind: DeckPositionKind;
+  /** The spot's, elevator's or hangar bay's name in the ship's deck layout. */
+  name: string;
+}
+
+export const LANDING_AREA_STATES = ['clear', 'recovering', 'fouled'] as const;
+/** While the landing area is recovering or fouled the catapults inside it cannot launch. */
+export type LandingAreaState = (typeof LANDING_AREA_STATES)[number];
+
+/** Tows an aircraft of the cycle to another position (a change through the cycle's pipeline). */
+export interface TowAircraftRequest {
+  slotId: number;
+  to: DeckPositionView;
+  /** The slot version the move was based on. */
+  slotVersion: number;
+}
+
+/** Sets the cycle's landing area; a reason is required when fouled. */
+export interface SetLandingAreaRequest {
+  state: LandingAreaState;
+  reason?: string | null;
+  /** The cycle version the change was based on. */
+  basisVersion: number;
+}

@@ -21,6 +21,7 @@ const lane = (catapultId: number, number: number, slotIds: number[]) => ({ catap
 // Now: cat 1 launches C21 (10:05) then C22 (10:22, late); cat 2 launches D33 (10:06); G43 waits in the pool.
 function board(): LineupSnapshot {
   return {
+    readinessSteps: [],
     cycle,
     version: 12,
     lanes: [lane(11, 1, [1, 2]), lane(12, 2, [3])],

@@ -79,7 +79,12 @@ describe('the launch record', () => {
     expect(line.launchRecord).toEqual(record);
 
     const csv = await deck.call(OBSERVER, 'get', `/api/cycles/${cycle.id}/slots.csv`);
-    const rows: Record<string, string>[] = parse(csv.text, { columns: true, bom: true });
+    const rows: Record<string, string>[] = parse(csv.text, {
+      columns: true,
+      bom: true,
+      comment: '#',
+      comment_no_infix: true,
+    });
     const row = rows.find((candidate) => Number(candidate.slot_id) === launched.id)!;
     expect(row).toMatchObject({
       record_source: 'shot',

@@ -82,7 +82,11 @@ describe('people', () => {
 
     it.each([
       ['a catapult officer without a catapult', { role: 'catapult_officer' }, /must be given the catapult/],
-      ['a pilot bound to a catapult', { catapultId: 1 }, /Only a catapult officer is bound to a catapult/],
+      [
+        'a pilot bound to a catapult',
+        { catapultId: 1 },
+        /Only a catapult officer or a deck edge operator is bound to a catapult/,
+      ],
       ['an unknown catapult', { role: 'catapult_officer', catapultId: 999_999 }, /no catapult with id 999999/],
       ['an unknown squadron', { squadronId: 999_999 }, /no squadron with id 999999/],
       ['a password under 12 characters', { password: 'short pass' }, /password must be at least 12 characters/],

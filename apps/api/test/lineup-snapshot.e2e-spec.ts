@@ -133,6 +133,8 @@ describe('lineup snapshot of the demo cycles', () => {
           requiredAirspeedKt: figures.requiredAirspeed,
           requiredWindOverDeckKt: figures.requiredWindOverDeck,
           marginKt: figures.margin,
+          excessWindOverDeckKt: figures.excessWindOverDeck,
+          recommendedExcessKt: figures.recommendedExcess,
           go: true,
           reasons: [],
           clearingTurnDeg: ship.profile.clearingTurnDeg[catapult.position],
@@ -233,7 +235,7 @@ describe('lineup snapshot of the demo cycles', () => {
       lanes: [],
       pool: [],
       slots: [],
-      readinessSteps: [],
+      readinessSteps: final.readinessSteps, // the ship's list: no change carries it
       lastLaunchAt: null,
       version: 0,
     };

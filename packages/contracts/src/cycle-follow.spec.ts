@@ -39,6 +39,8 @@ const cycle: CycleView = {
   weatherCase: 'I',
   night: false,
   landingAreaInUse: false,
+  landingArea: 'clear',
+  landingAreaReason: null,
 };
 
 function lane(catapultId: number, slotIds: number[]): LaneView {

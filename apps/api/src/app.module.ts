@@ -4,6 +4,7 @@ import { ServeStaticModule } from '@nestjs/serve-static';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { AircraftTypesModule } from './aircraft-types/aircraft-types.module.js';
 import { AircraftModule } from './aircraft/aircraft.module.js';
+import { AuditModule } from './audit/audit.module.js';
 import { AuthModule } from './auth/auth.module.js';
 import { CyclesModule } from './cycles/cycles.module.js';
 import { ENV_FILE_PATHS, type Environment, validateEnvironment } from './config/environment.js';
@@ -49,6 +50,7 @@ import { webAppBuilt, webAppHeaders, webDist } from './web-app/web-app.js';
         ]
       : []),
     HealthModule,
+    AuditModule,
     AuthModule,
     UsersModule,
     ShipsModule,

@@ -3,6 +3,7 @@ import { ConfigService } from '@nestjs/config';
 import type { NestExpressApplication, NestExpressBodyParserOptionsFor } from '@nestjs/platform-express';
 import cookieParser from 'cookie-parser';
 import helmet from 'helmet';
+import { withRequestContext } from './common/request-context.js';
 import { ApiExceptionFilter } from './common/filters/api-exception.filter.js';
 import { serveApiDocument } from './common/openapi/api-document.js';
 import { refuseDeepJson } from './common/validation/json-depth.js';
@@ -33,6 +34,7 @@ export function configureApp(app: INestApplication): void {
   app.use(helmet(securityHeaders(servedOverHttps({ APP_URL: config.get('APP_URL') }))));
   compressResponses(app);
   app.use(cookieParser());
+  app.use(withRequestContext);
   // Replaces Nest's default JSON parser (same limits), adding the depth check before parsing. Nest's type
   // leaves out `verify` because Nest sets it itself for the `rawBody` option, which this app does not use.
   (app as NestExpressApplication).useBodyParser('json', {

@@ -2,6 +2,7 @@ import type { AircraftTypeView, LaunchTableRow } from '@catline/contracts';
 import { Injectable, Logger } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, type EntityManager, Not } from 'typeorm';
+import { AuditTrail } from '../audit/audit-trail.service.js';
 import { definedFields } from '../common/defined-fields.js';
 import { Aircraft } from '../database/entities/aircraft.entity.js';
 import { isDuplicateKey, isStillReferenced } from '../common/errors/database-errors.js';
@@ -16,7 +17,10 @@ import { launchTableProblems, trimBandProblems } from './launch-data.js';
 export class AircraftTypesService {
   private readonly logger = new Logger(AircraftTypesService.name);
 
-  constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
+  constructor(
+    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly audit: AuditTrail,
+  ) {}
 
   async list(): Promise<AircraftTypeView[]> {
     const types = await this.dataSource.manager.find(AircraftType, { order: { designation: 'ASC' } });
@@ -29,10 +33,18 @@ export class AircraftTypesService {
 
   async create(body: CreateAircraftTypeDto): Promise<AircraftTypeView> {
     this.checkLaunchData(trimBandProblems(body.trimBands), launchTableProblems(body.launchTable));
-    const manager = this.dataSource.manager;
-    await this.checkDesignationFree(manager, body.designation);
-    const type = manager.create(AircraftType, { ...body, afterburnerFromLb: body.afterburnerFromLb ?? null });
-    const saved = await this.save(manager, type);
+    const saved = await this.dataSource.transaction(async (manager) => {
+      await this.checkDesignationFree(manager, body.designation);
+      const type = manager.create(AircraftType, { ...body, afterburnerFromLb: body.afterburnerFromLb ?? null });
+      const created = await this.save(manager, type);
+      await this.audit.record(manager, {
+        action: 'aircraft_type.created',
+        subject: { type: 'aircraft_type', id: created.id },
+        summary: `Aircraft type ${created.designation} created`,
+        after: { ...toAircraftTypeView(created) },
+      });
+      return created;
+    });
     this.logger.log(`Aircraft type ${saved.designation} created`);
     return toAircraftTypeView(saved);
   }
@@ -42,8 +54,17 @@ export class AircraftTypesService {
     return this.dataSource.transaction(async (manager) => {
       const type = await this.findOrFail(manager, id, true);
       if (body.designation !== undefined) await this.checkDesignationFree(manager, body.designation, id);
+      const before = toAircraftTypeView(type);
       Object.assign(type, definedFields(body));
-      return toAircraftTypeView(await this.save(manager, type));
+      const after = toAircraftTypeView(await this.save(manager, type));
+      await this.audit.record(manager, {
+        action: 'aircraft_type.updated',
+        subject: { type: 'aircraft_type', id },
+        summary: `Aircraft type ${after.designation} changed`,
+        before: { ...before },
+        after: { ...after },
+      });
+      return after;
     });
   }
 
@@ -51,8 +72,16 @@ export class AircraftTypesService {
     this.checkLaunchData([], launchTableProblems(rows));
     return this.dataSource.transaction(async (manager) => {
       const type = await this.findOrFail(manager, id, true);
+      const before = type.launchTable;
       type.launchTable = rows;
       await manager.save(AircraftType, type);
+      await this.audit.record(manager, {
+        action: 'launch_table.replaced',
+        subject: { type: 'aircraft_type', id },
+        summary: `Launch table of ${type.designation} replaced (${rows.length} rows)`,
+        before: { launchTable: before },
+        after: { launchTable: rows },
+      });
       this.logger.log(`Launch table of ${type.designation} replaced (${rows.length} rows)`);
       return toAircraftTypeView(type);
     });
@@ -70,6 +99,12 @@ export class AircraftTypesService {
         if (isStillReferenced(error)) throw this.inUse(type, await inUse());
         throw error;
       }
+      await this.audit.record(manager, {
+        action: 'aircraft_type.deleted',
+        subject: { type: 'aircraft_type', id },
+        summary: `Aircraft type ${type.designation} deleted`,
+        before: { ...toAircraftTypeView(type) },
+      });
     });
     this.logger.log(`Aircraft type ${id} deleted`);
   }

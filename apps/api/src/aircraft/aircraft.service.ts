@@ -2,6 +2,7 @@ import type { AircraftView } from '@catline/contracts';
 import { Injectable, Logger } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, type EntityManager, Not } from 'typeorm';
+import { AuditTrail } from '../audit/audit-trail.service.js';
 import { definedFields } from '../common/defined-fields.js';
 import { AircraftType } from '../database/entities/aircraft-type.entity.js';
 import { isDuplicateKey, isStillReferenced } from '../common/errors/database-errors.js';
@@ -20,7 +21,10 @@ const WITH_NAMES = { type: true, squadron: true } as const;
 export class AircraftService {
   private readonly logger = new Logger(AircraftService.name);
 
-  constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
+  constructor(
+    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly audit: AuditTrail,
+  ) {}
 
   async list(): Promise<AircraftView[]> {
     const aircraft = await this.dataSource.manager.find(Aircraft, {
@@ -38,7 +42,14 @@ export class AircraftService {
         manager.create(Aircraft, { ...body, serviceable: body.serviceable ?? true }),
       );
       this.logger.log(`Aircraft ${saved.sideNumber} added`);
-      return this.view(manager, saved.id);
+      const view = await this.view(manager, saved.id);
+      await this.audit.record(manager, {
+        action: 'aircraft.created',
+        subject: { type: 'aircraft', id: saved.id },
+        summary: `Aircraft ${saved.sideNumber} added`,
+        after: { ...view },
+      });
+      return view;
     });
   }
 
@@ -46,8 +57,17 @@ export class AircraftService {
     return this.dataSource.transaction(async (manager) => {
       const aircraft = await this.findOrFail(manager, id);
       await this.checkReferences(manager, body, id);
+      const before = await this.view(manager, id);
       await this.save(manager, Object.assign(aircraft, definedFields(body)));
-      return this.view(manager, id);
+      const after = await this.view(manager, id);
+      await this.audit.record(manager, {
+        action: 'aircraft.updated',
+        subject: { type: 'aircraft', id },
+        summary: `Aircraft ${after.sideNumber} changed`,
+        before: { ...before },
+        after: { ...after },
+      });
+      return after;
     });
   }
 
@@ -63,6 +83,12 @@ export class AircraftService {
         if (isStillReferenced(error)) throw this.inUse(aircraft, await inUse());
         throw error;
       }
+      await this.audit.record(manager, {
+        action: 'aircraft.deleted',
+        subject: { type: 'aircraft', id },
+        summary: `Aircraft ${aircraft.sideNumber} deleted`,
+        before: { sideNumber: aircraft.sideNumber, typeId: aircraft.typeId, squadronId: aircraft.squadronId },
+      });
     });
     this.logger.log(`Aircraft ${id} deleted`);
   }

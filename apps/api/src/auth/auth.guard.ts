@@ -3,6 +3,7 @@ import { type CanActivate, type ExecutionContext, Injectable } from '@nestjs/com
 import { Reflector } from '@nestjs/core';
 import type { Request } from 'express';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
+import { requestContext } from '../common/request-context.js';
 import { IS_PUBLIC } from '../common/decorators/public.decorator.js';
 import { ROLES_KEY } from '../common/decorators/roles.decorator.js';
 import { AuthException } from './auth.exception.js';
@@ -34,6 +35,8 @@ export class AuthGuard implements CanActivate {
     if (!token) throw new AuthException('unauthenticated', 'Sign in to continue.');
     const user = await this.tokens.verify(token);
     request.user = user;
+    const requestState = requestContext();
+    if (requestState) requestState.actor = user;
 
     const roles = this.reflector.getAllAndOverride<Role[] | undefined>(ROLES_KEY, targets);
     if (roles && !roles.includes(user.role)) {

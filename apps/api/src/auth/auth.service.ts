@@ -4,6 +4,7 @@ import { Injectable, Logger } from '@nestjs/common';
 import { JwtService } from '@nestjs/jwt';
 import { InjectDataSource } from '@nestjs/typeorm';
 import type { DataSource } from 'typeorm';
+import { AuditTrail } from '../audit/audit-trail.service.js';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
 import { User } from '../database/entities/user.entity.js';
 import { ACCESS_TOKEN_ALGORITHM, ACCESS_TOKEN_LIFETIME_S, type AccessTokenClaims } from './access-token.js';
@@ -31,6 +32,7 @@ export class AuthService {
     private readonly jwt: JwtService,
     private readonly refreshTokens: RefreshTokens,
     private readonly attempts: AttemptLimits,
+    private readonly audit: AuditTrail,
     @InjectDataSource() private readonly dataSource: DataSource,
   ) {}
 
@@ -41,8 +43,21 @@ export class AuthService {
     const user = await this.dataSource.manager.findOneBy(User, { email: identity });
     await this.attempts.count('sign_in', user ? `person:${user.id}` : `email:${identity}`);
     const matches = await verifyPassword(user?.passwordHash ?? (await this.decoyHash), password);
-    if (!user?.passwordHash || !matches || !user.active)
+    if (!user?.passwordHash || !matches || !user.active) {
+      await this.audit.record(this.dataSource.manager, {
+        action: 'sign_in.failed',
+        subject: { type: 'person', id: user?.id ?? null },
+        summary: !user ? 'No person signs in with this e-mail' : !user.active ? 'Removed person' : 'Wrong password',
+        actor: { email: identity },
+      });
       throw new AuthException('invalid_credentials', BAD_CREDENTIALS);
+    }
+    await this.audit.record(this.dataSource.manager, {
+      action: 'sign_in.succeeded',
+      subject: { type: 'person', id: user.id },
+      summary: `${user.name} signed in`,
+      actor: { id: user.id, email: user.email, role: user.role },
+    });
     this.logger.log(`User ${user.id} signed in`);
     return { session: await this.sessionFor(user), refresh: await this.refreshTokens.issue(user.id) };
   }
@@ -76,6 +91,11 @@ export class AuthService {
     return this.dataSource.transaction(async (manager) => {
       await manager.update(User, { id: user.id }, { passwordHash, tokenVersion: () => 'token_version + 1' });
       await this.refreshTokens.revokeAllFor(user.id, manager);
+      await this.audit.record(manager, {
+        action: 'password.changed',
+        subject: { type: 'person', id: user.id },
+        summary: `${user.name} changed their password; other sessions ended`,
+      });
       this.logger.log(`User ${user.id} changed their password; other sessions ended`);
       return this.refreshTokens.issue(user.id, manager);
     });

@@ -2,6 +2,7 @@ import type { CycleView } from '@catline/contracts';
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { DataSource } from 'typeorm';
+import { AuditTrail } from '../audit/audit-trail.service.js';
 import { isDuplicateKey } from '../common/errors/database-errors.js';
 import { Slot } from '../database/entities/slot.entity.js';
 import { Ship } from '../database/entities/ship.entity.js';
@@ -16,7 +17,10 @@ const NO_SLOTS: CycleCounts = { slotCount: 0, launchedCount: 0 };
 /** Cycles as records: listing, reading and creating. Changes to a cycle go through CycleCommandsService. */
 @Injectable()
 export class CyclesService {
-  constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
+  constructor(
+    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly audit: AuditTrail,
+  ) {}
 
   async list(): Promise<CycleView[]> {
     const cycles = await this.dataSource.manager.find(Cycle, { order: { plannedLaunchAt: 'DESC', id: 'DESC' } });
@@ -41,10 +45,16 @@ export class CyclesService {
       throw new CyclesException('not_found', `Ship ${request.shipId} does not exist.`);
     }
     try {
-      const cycle = await this.dataSource.manager.save(
-        Cycle,
-        this.dataSource.manager.create(Cycle, { ...request, ...times }),
-      );
+      const cycle = await this.dataSource.transaction(async (manager) => {
+        const created = await manager.save(Cycle, manager.create(Cycle, { ...request, ...times }));
+        await this.audit.record(manager, {
+          action: 'cycle.created',
+          subject: { type: 'cycle', id: created.id },
+          summary: `Cycle ${created.number} created`,
+          after: { ...toCycleView(created, NO_SLOTS) },
+        });
+        return created;
+      });
       return this.get(cycle.id);
     } catch (error) {
       if (!isDuplicateKey(error)) throw error;

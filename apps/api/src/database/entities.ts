@@ -1,3 +1,4 @@
+import { AuditEntry } from './entities/audit-entry.entity.js';
 import { AircraftType } from './entities/aircraft-type.entity.js';
 import { Aircraft } from './entities/aircraft.entity.js';
 import { Cycle } from './entities/cycle.entity.js';
@@ -16,6 +17,7 @@ import { User } from './entities/user.entity.js';
 export const entities = [
   Aircraft,
   AircraftType,
+  AuditEntry,
   Catapult,
   Cycle,
   CycleChange,

@@ -2,6 +2,7 @@ import type { AircraftTypeView, LaunchTableImportRow, LaunchTablePreview } from 
 import { Injectable, Logger } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import type { DataSource } from 'typeorm';
+import { AuditTrail } from '../audit/audit-trail.service.js';
 import { toAircraftTypeView } from '../aircraft-types/aircraft-type.mapper.js';
 import { AircraftType } from '../database/entities/aircraft-type.entity.js';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
@@ -22,6 +23,7 @@ export class LaunchTableImports {
   constructor(
     @InjectDataSource() private readonly dataSource: DataSource,
     private readonly uploads: UploadsService,
+    private readonly audit: AuditTrail,
   ) {}
 
   async preview(typeId: number, file: UploadedCsv | undefined, user: AuthenticatedUser): Promise<LaunchTablePreview> {
@@ -37,12 +39,20 @@ export class LaunchTableImports {
       const type = await manager.findOne(AircraftType, { where: { id: typeId }, lock: { mode: 'pessimistic_write' } });
       if (!type) throw notFound(typeId);
       const upload = await this.uploads.importable(manager, uploadId, { kind: 'launch_table', aircraftTypeId: typeId });
+      const before = type.launchTable;
       type.launchTable = (upload.rows as LaunchTableImportRow[]).map(({ grossWeightLb, minLaunchAirspeedKt }) => ({
         grossWeightLb,
         minLaunchAirspeedKt,
       }));
       await manager.save(AircraftType, type);
       await this.uploads.markImported(manager, upload, user);
+      await this.audit.record(manager, {
+        action: 'launch_table.replaced',
+        subject: { type: 'aircraft_type', id: typeId },
+        summary: `Launch table of ${type.designation} replaced from upload ${upload.id} (${type.launchTable.length} rows)`,
+        before: { launchTable: before },
+        after: { launchTable: type.launchTable },
+      });
       this.logger.log(
         `Launch table of ${type.designation} replaced from upload ${upload.id} (${type.launchTable.length} rows)`,
       );

@@ -3,6 +3,7 @@ import { Injectable, Logger } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, type EntityManager, IsNull, MoreThan } from 'typeorm';
+import { AuditTrail } from '../audit/audit-trail.service.js';
 import { AttemptLimits } from '../auth/attempt-limits.service.js';
 import { emailIdentity } from '../auth/normalize-email.js';
 import { hashPassword } from '../auth/password.js';
@@ -49,6 +50,7 @@ export class PasswordLinks {
     private readonly refreshTokens: RefreshTokens,
     private readonly attempts: AttemptLimits,
     private readonly config: ConfigService<Environment, true>,
+    private readonly audit: AuditTrail,
   ) {}
 
   /** Mails a fresh invitation (earlier unused ones stop working); call inside the transaction that adds or re-invites the person. */
@@ -108,6 +110,12 @@ export class PasswordLinks {
       await manager.update(User, { id: user.id }, { passwordHash, tokenVersion: () => 'token_version + 1' });
       await manager.delete(PasswordLink, { userId: user.id, usedAt: IsNull() });
       await this.refreshTokens.revokeAllFor(user.id, manager);
+      await this.audit.record(manager, {
+        action: 'password.set_by_link',
+        subject: { type: 'person', id: user.id },
+        summary: `${user.name} set a password through a${purpose === 'invitation' ? 'n invitation' : ' reset'} link`,
+        actor: { id: user.id, email: user.email, role: user.role },
+      });
     });
     this.logger.log(
       `User ${link.userId} set a password through a${purpose === 'invitation' ? 'n invitation' : ' reset'} link`,

@@ -1,7 +1,7 @@
 import type { CycleReplay, CycleReport } from '@catline/contracts';
 import { Controller, Get, Param, ParseIntPipe, type StreamableFile } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
-import { csvResponse } from './csv-response.js';
+import { csvResponse } from '../common/csv-response.js';
 import { CycleReportsService } from './cycle-reports.service.js';
 import { ApiDoc } from '../common/openapi/api-doc.decorator.js';
 import { CycleReplayDto, CycleReportDto } from '../common/openapi/views/reports.view.js';

@@ -7,7 +7,7 @@ import { asLaunchDataRefusal } from '../cycle-changes/lineup.exception.js';
 import { buildCycleReport } from './cycle-report.builder.js';
 import { CycleRecordReader } from './cycle-record.reader.js';
 import { CHANGE_COLUMNS, SLOT_COLUMNS, changeRows, slotRows } from './cycle-csv.js';
-import type { CsvFile } from './csv-response.js';
+import type { CsvFile } from '../common/csv-response.js';
 import { versionZeroState } from './replay-start.js';
 
 /** A cycle's record for people: the report, the replay and the CSV exports. */

@@ -1,7 +1,7 @@
 import type { ShotCounts } from '@catline/contracts';
 import { Controller, Get, Query, type StreamableFile } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
-import { csvResponse } from './csv-response.js';
+import { csvResponse } from '../common/csv-response.js';
 import { dayRange } from './day-range.js';
 import { ShotCountsQueryDto } from './dto/shot-counts-query.dto.js';
 import { ShotCountsService } from './shot-counts.service.js';

@@ -6,7 +6,7 @@ import { toCsv } from '../common/csv.js';
 import { Slot } from '../database/entities/slot.entity.js';
 import { ReplicaReads } from '../database/replica-reads.js';
 import { Catapult } from '../database/entities/catapult.entity.js';
-import type { CsvFile } from './csv-response.js';
+import type { CsvFile } from '../common/csv-response.js';
 import type { DayRange } from './day-range.js';
 
 export const SHOT_COUNT_COLUMNS = [

@@ -6,6 +6,7 @@ import { normalizeEmail } from '../auth/normalize-email.js';
 import { hashPassword } from '../auth/password.js';
 import { RefreshTokens } from '../auth/refresh-tokens.service.js';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
+import { AuditTrail } from '../audit/audit-trail.service.js';
 import { PasswordLinks } from '../password-links/password-links.service.js';
 import { isDuplicateKey } from '../common/errors/database-errors.js';
 import { Catapult } from '../database/entities/catapult.entity.js';
@@ -25,6 +26,7 @@ export class UsersService {
     @InjectDataSource() private readonly dataSource: DataSource,
     private readonly refreshTokens: RefreshTokens,
     private readonly links: PasswordLinks,
+    private readonly audit: AuditTrail,
   ) {}
 
   async list(): Promise<UserView[]> {
@@ -55,6 +57,12 @@ export class UsersService {
           writer.create(User, { email, name: body.name, passwordHash, ...binding }),
         );
         if (passwordHash === null) await this.links.invite(writer, saved);
+        await this.audit.record(writer, {
+          action: 'person.created',
+          subject: { type: 'person', id: saved.id },
+          summary: `${saved.name} added as ${saved.role}`,
+          after: { ...toUserView(saved) },
+        });
         return saved;
       });
       this.logger.log(`User ${user.id} (${user.role}) created${passwordHash === null ? ' and invited' : ''}`);
@@ -78,6 +86,7 @@ export class UsersService {
           'You cannot change your own role or deactivate yourself; ask another admin.',
         );
       }
+      const before = toUserView(user);
       const role = body.role ?? user.role;
       // Leaving a catapult role releases the catapult unless the request says otherwise.
       const catapultId =
@@ -97,7 +106,15 @@ export class UsersService {
       if (access) user.tokenVersion += 1;
       await manager.save(User, user);
       if (!user.active) await this.refreshTokens.revokeAllFor(user.id, manager);
-      return toUserView(user);
+      const after = toUserView(user);
+      await this.audit.record(manager, {
+        action: 'person.updated',
+        subject: { type: 'person', id },
+        summary: `${user.name} changed`,
+        before: { ...before },
+        after: { ...after },
+      });
+      return after;
     });
   }
 
@@ -130,6 +147,13 @@ export class UsersService {
       const user = await this.findOrFail(manager, id);
       await manager.update(User, { id: user.id }, { active: false, tokenVersion: user.tokenVersion + 1 });
       await this.refreshTokens.revokeAllFor(user.id, manager);
+      await this.audit.record(manager, {
+        action: 'person.removed',
+        subject: { type: 'person', id },
+        summary: `${user.name} removed`,
+        before: { active: user.active },
+        after: { active: false },
+      });
     });
     this.logger.log(`User ${id} removed by ${actor.id}`);
   }

@@ -8,6 +8,7 @@
 // example consumes its target (delete, launch) should build a fresh target whenever `allowed` is true.
 import { aircraftTypesRoutes } from './aircraft-types.routes.js';
 import { aircraftRoutes } from './aircraft.routes.js';
+import { auditRoutes } from './audit.routes.js';
 import { authRoutes } from './auth.routes.js';
 import { cyclesRoutes } from './cycles.routes.js';
 import { deckRoutes } from './deck.routes.js';
@@ -38,4 +39,5 @@ export const matrixRoutes: MatrixRoute[] = [
   ...importsRoutes,
   ...passwordLinksRoutes,
   ...reportsRoutes,
+  ...auditRoutes,
 ];

@@ -126,6 +126,17 @@ const router = createBrowserRouter([
                   },
                 ],
               },
+              {
+                element: <RoleRoute roles={['admin']} screen="Audit" />,
+                children: [
+                  {
+                    path: 'audit',
+                    lazy: async () => ({
+                      Component: (await import('../features/audit/components/audit-screen.js')).AuditScreen,
+                    }),
+                  },
+                ],
+              },
               { path: '*', element: <NotFound /> },
             ],
           },

@@ -15,6 +15,7 @@ const screens = {
   launchData: { path: '/launch-data', label: 'Launch data' },
   people: { path: '/people', label: 'People' },
   reports: { path: '/reports', label: 'Reports' },
+  audit: { path: '/audit', label: 'Audit' },
 } satisfies Record<string, Screen>;
 
 const shared = [screens.cycles, screens.fleet, screens.launchData, screens.reports];
@@ -28,7 +29,15 @@ export const SCREENS_BY_ROLE: Record<Role, Screen[]> = {
   air_operations: [screens.cycles, screens.lineup, screens.fleet, screens.launchData, screens.reports],
   // Primary flight control runs the launch from the board: prerequisites, deck status, start and stop.
   air_boss: [screens.lineup, screens.deck, ...shared],
-  admin: [screens.people, screens.fleet, screens.launchData, screens.cycles, screens.lineup, screens.reports],
+  admin: [
+    screens.people,
+    screens.fleet,
+    screens.launchData,
+    screens.cycles,
+    screens.lineup,
+    screens.reports,
+    screens.audit,
+  ],
   observer: [screens.lineup, screens.deck, ...shared],
 };
 

@@ -14,6 +14,7 @@ export const API_TAGS = {
   deck: "Where a cycle's aircraft are: tows between positions, and the landing area's state.",
   imports: 'CSV uploads (air plans, launch tables) in two steps: preview, then confirm.',
   reports: "A cycle's record, its replay and shot counts, as JSON or CSV.",
+  audit: 'The audit trail: who changed what and when, and every sign-in; as JSON pages or CSV.',
   health: 'Whether the API and its database answer.',
 } as const;
 

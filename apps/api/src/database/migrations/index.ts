@@ -1,6 +1,7 @@
 import { InitialSchema1796162620410 } from './1796162620410-InitialSchema.js';
 import { MailOutboxPasswordLinksUploads1796164550524 } from './1796164550524-MailOutboxPasswordLinksUploads.js';
 import { SlotLaunchRecord1796200292167 } from './1796200292167-SlotLaunchRecord.js';
+import { AuditTrail1796200656653 } from './1796200656653-AuditTrail.js';
 import { SlotReverifyAndWaivers1796200677124 } from './1796200677124-SlotReverifyAndWaivers.js';
 import { DeckPositionsLandingArea1796201917830 } from './1796201917830-DeckPositionsLandingArea.js';
 import { SlotAgreedWeightAndLastStep1796203000000 } from './1796203000000-SlotAgreedWeightAndLastStep.js';
@@ -10,6 +11,7 @@ export const migrations = [
   InitialSchema1796162620410,
   MailOutboxPasswordLinksUploads1796164550524,
   SlotLaunchRecord1796200292167,
+  AuditTrail1796200656653,
   SlotReverifyAndWaivers1796200677124,
   DeckPositionsLandingArea1796201917830,
   SlotAgreedWeightAndLastStep1796203000000,

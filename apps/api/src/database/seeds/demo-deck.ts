@@ -1,5 +1,6 @@
 import type { ChangeActor, LineupSnapshot, ReadinessStep, SlotView } from '@catline/contracts';
 import type { DataSource } from 'typeorm';
+import { AuditTrail } from '../../audit/audit-trail.service.js';
 import { toAuthenticatedUser } from '../../auth/session.mapper.js';
 import type { AuthenticatedUser } from '../../common/authenticated-user.js';
 import { CycleCommandsService } from '../../cycles/cycle-commands.service.js';
@@ -75,7 +76,7 @@ export class DemoDeck {
     );
     const basis = new BasisChecks(log);
     const closing = new CycleClosing(new MailOutbox());
-    this.cycles = new CyclesService(dataSource);
+    this.cycles = new CyclesService(dataSource, new AuditTrail());
     this.cycleCommands = new CycleCommandsService(changes, basis, closing, this.clock);
     this.lineup = new LineupCommandsService(changes, basis, this.clock);
     this.readiness = new ReadinessService(changes, basis, log, closing, this.clock);

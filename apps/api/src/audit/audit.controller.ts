@@ -1,0 +1,29 @@
+import type { AuditEntryView, Page } from '@catline/contracts';
+import { Controller, Get, Query, type StreamableFile } from '@nestjs/common';
+import { ApiTags } from '@nestjs/swagger';
+import { csvResponse } from '../common/csv-response.js';
+import { Roles } from '../common/decorators/roles.decorator.js';
+import { ApiDoc } from '../common/openapi/api-doc.decorator.js';
+import { AuditEntryPageDto } from '../common/openapi/views/audit.view.js';
+import { AuditLog } from './audit-log.service.js';
+import { AuditFilterDto, AuditPageQueryDto } from './dto/audit-query.dto.js';
+
+@ApiTags('audit')
+@Controller('audit')
+export class AuditController {
+  constructor(private readonly log: AuditLog) {}
+
+  @Roles('admin')
+  @ApiDoc('List the audit trail, a page at a time', { response: AuditEntryPageDto })
+  @Get()
+  list(@Query() query: AuditPageQueryDto): Promise<Page<AuditEntryView>> {
+    return this.log.page(query);
+  }
+
+  @Roles('admin')
+  @ApiDoc('Download the filtered audit trail as CSV', { response: 'csv' })
+  @Get('export.csv')
+  async export(@Query() filter: AuditFilterDto): Promise<StreamableFile> {
+    return csvResponse(await this.log.csv(filter));
+  }
+}

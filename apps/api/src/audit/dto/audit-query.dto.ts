@@ -1,0 +1,44 @@
+import { AUDIT_ACTIONS, AUDIT_PAGE_SIZE, type AuditAction } from '@catline/contracts';
+import { ApiPropertyOptional } from '@nestjs/swagger';
+import { Type } from 'class-transformer';
+import { IsEmail, IsIn, IsInt, IsISO8601, IsOptional, Max, Min } from 'class-validator';
+
+/** Which entries: every filter given must hold. */
+export class AuditFilterDto {
+  @ApiPropertyOptional({ enum: AUDIT_ACTIONS })
+  @IsOptional()
+  @IsIn(AUDIT_ACTIONS, { message: `action must be one of ${AUDIT_ACTIONS.join(', ')}` })
+  action?: AuditAction;
+
+  @ApiPropertyOptional({ description: 'The actor’s e-mail (or the address typed at a failed sign-in).' })
+  @IsOptional()
+  @IsEmail({}, { message: 'actor must be an e-mail address' })
+  actor?: string;
+
+  @ApiPropertyOptional({ example: '2027-01-01T00:00:00Z', description: 'Entries at or after this instant.' })
+  @IsOptional()
+  @IsISO8601({ strict: true }, { message: 'since must be an ISO 8601 instant, e.g. 2027-01-01T00:00:00Z' })
+  since?: string;
+
+  @ApiPropertyOptional({ example: '2027-01-02T00:00:00Z', description: 'Entries before this instant.' })
+  @IsOptional()
+  @IsISO8601({ strict: true }, { message: 'until must be an ISO 8601 instant, e.g. 2027-01-02T00:00:00Z' })
+  until?: string;
+}
+
+export class AuditPageQueryDto extends AuditFilterDto {
+  @ApiPropertyOptional({ default: AUDIT_PAGE_SIZE.default, maximum: AUDIT_PAGE_SIZE.max })
+  @IsOptional()
+  @Type(() => Number)
+  @IsInt()
+  @Min(1)
+  @Max(AUDIT_PAGE_SIZE.max)
+  limit?: number;
+
+  @ApiPropertyOptional({ default: 0 })
+  @IsOptional()
+  @Type(() => Number)
+  @IsInt()
+  @Min(0)
+  offset?: number;
+}

@@ -1,0 +1,151 @@
+import { useState } from 'react';
+import { Box, Button, Code, HStack, Input, Stack, Table, Text } from '@chakra-ui/react';
+import { AUDIT_ACTIONS, AUDIT_PAGE_SIZE, type AuditAction, type AuditEntryView } from '@catline/contracts';
+import { FormField } from '../../../components/form-field.js';
+import { PageHeader } from '../../../components/page-header.js';
+import { EmptyState, QueryView } from '../../../components/query-states.js';
+import { SelectInput } from '../../../components/select-field.js';
+import { errorMessage } from '../../../lib/api-error.js';
+import { useFileDownload } from '../../../lib/use-file-download.js';
+import { type AuditFilter, auditExportPath, useAuditEntries } from '../api/get-audit-entries.js';
+
+const ACTION_CHOICES = AUDIT_ACTIONS.map((action) => ({ value: action, label: action.replace(/[._]/g, ' ') }));
+
+function Change({ entry }: { entry: AuditEntryView }) {
+  const fields = Object.keys({ ...entry.before, ...entry.after });
+  if (fields.length === 0) return null;
+  return (
+    <Stack gap="0.5">
+      {fields.map((field) => (
+        <Text key={field} fontSize="xs">
+          {field}: <Code>{JSON.stringify(entry.before?.[field] ?? null)}</Code> →{' '}
+          <Code>{JSON.stringify(entry.after?.[field] ?? null)}</Code>
+        </Text>
+      ))}
+    </Stack>
+  );
+}
+
+function ExportButton({ filter }: { filter: AuditFilter }) {
+  const download = useFileDownload(auditExportPath(filter), 'audit-trail.csv');
+  return (
+    <Stack gap="1" align="flex-start">
+      <Button size="sm" variant="outline" loading={download.isPending} onClick={() => download.mutate()}>
+        Export CSV
+      </Button>
+      {download.isError && (
+        <Text role="alert" fontSize="xs" color="nogo.fg">
+          {errorMessage(download.error)}
+        </Text>
+      )}
+    </Stack>
+  );
+}
+
+/** The admin's record of who changed what: newest first, a page at a time, filtered by action and person. */
+export function AuditScreen() {
+  const [filter, setFilter] = useState<AuditFilter>({ action: '', actor: '' });
+  const [offset, setOffset] = useState(0);
+  const limit = AUDIT_PAGE_SIZE.default;
+  const entries = useAuditEntries({ ...filter, limit, offset });
+  const change = (next: Partial<AuditFilter>) => {
+    setFilter((current) => ({ ...current, ...next }));
+    setOffset(0);
+  };
+
+  return (
+    <Stack gap="4">
+      <PageHeader title="Audit" subtitle="Who changed what, and every sign-in" />
+      <HStack gap="3" wrap="wrap" align="flex-end">
+        <Box w={{ base: 'full', sm: '16rem' }}>
+          <FormField label="Action">
+            <SelectInput
+              value={filter.action}
+              choices={ACTION_CHOICES}
+              placeholder="Every action"
+              onChange={(value) => change({ action: value as AuditAction | '' })}
+            />
+          </FormField>
+        </Box>
+        <Box w={{ base: 'full', sm: '18rem' }}>
+          <FormField label="Person (e-mail)">
+            <Input
+              size="sm"
+              type="email"
+              value={filter.actor}
+              onChange={(event) => change({ actor: event.currentTarget.value })}
+            />
+          </FormField>
+        </Box>
+        <ExportButton filter={filter} />
+      </HStack>
+      <QueryView query={entries} loadingLabel="Reading the audit trail…">
+        {(page) =>
+          page.items.length === 0 ? (
+            <EmptyState title="No entries match." />
+          ) : (
+            <Stack gap="3">
+              <Table.ScrollArea borderWidth="1px" rounded="card">
+                <Table.Root size="sm">
+                  <Table.Caption srOnly>Audit trail</Table.Caption>
+                  <Table.Header>
+                    <Table.Row bg="bg.muted">
+                      <Table.ColumnHeader>When (UTC)</Table.ColumnHeader>
+                      <Table.ColumnHeader>Who</Table.ColumnHeader>
+                      <Table.ColumnHeader>Action</Table.ColumnHeader>
+                      <Table.ColumnHeader>What</Table.ColumnHeader>
+                      <Table.ColumnHeader>Change</Table.ColumnHeader>
+                    </Table.Row>
+                  </Table.Header>
+                  <Table.Body>
+                    {page.items.map((entry) => (
+                      <Table.Row key={entry.id} data-testid="audit-entry">
+                        <Table.Cell whiteSpace="nowrap" textStyle="figure">
+                          {entry.at.slice(0, 19).replace('T', ' ')}
+                        </Table.Cell>
+                        <Table.Cell>
+                          {entry.actorEmail ?? 'system'}
+                          {entry.clientAddress && (
+                            <Text fontSize="xs" color="fg.muted">
+                              from {entry.clientAddress}
+                            </Text>
+                          )}
+                        </Table.Cell>
+                        <Table.Cell whiteSpace="nowrap">{entry.action}</Table.Cell>
+                        <Table.Cell>{entry.summary}</Table.Cell>
+                        <Table.Cell>
+                          <Change entry={entry} />
+                        </Table.Cell>
+                      </Table.Row>
+                    ))}
+                  </Table.Body>
+                </Table.Root>
+              </Table.ScrollArea>
+              <HStack gap="3">
+                <Button
+                  size="sm"
+                  variant="outline"
+                  disabled={offset === 0}
+                  onClick={() => setOffset(Math.max(0, offset - limit))}
+                >
+                  Newer
+                </Button>
+                <Text fontSize="sm" textStyle="figure">
+                  {page.offset + 1}–{page.offset + page.items.length} of {page.total}
+                </Text>
+                <Button
+                  size="sm"
+                  variant="outline"
+                  disabled={page.offset + page.items.length >= page.total}
+                  onClick={() => setOffset(offset + limit)}
+                >
+                  Older
+                </Button>
+              </HStack>
+            </Stack>
+          )
+        }
+      </QueryView>
+    </Stack>
+  );
+}

@@ -1,0 +1,51 @@
+// The audit trail: who did what, when, and what it changed. A new kind of audited change adds its
+// action here first (the server's AuditTrail.record takes its type from this list, the web filters by it).
+
+export const AUDIT_ACTIONS = [
+  'sign_in.succeeded',
+  'sign_in.failed',
+  'password.changed',
+  'password.set_by_link',
+  'person.created',
+  'person.updated',
+  'person.removed',
+  'aircraft.created',
+  'aircraft.updated',
+  'aircraft.deleted',
+  'aircraft_type.created',
+  'aircraft_type.updated',
+  'aircraft_type.deleted',
+  'launch_table.replaced',
+  'cycle.created',
+] as const;
+export type AuditAction = (typeof AUDIT_ACTIONS)[number];
+
+/** One audited event. `before`/`after` hold only the fields that changed (whole records on create/delete). */
+export interface AuditEntryView {
+  id: number;
+  at: string;
+  /** Null when nobody was signed in (a failed sign-in, a password set through a link). */
+  actorId: number | null;
+  /** The actor's e-mail, or for a failed sign-in the address as typed. */
+  actorEmail: string | null;
+  actorRole: string | null;
+  clientAddress: string | null;
+  action: AuditAction;
+  subjectType: string;
+  subjectId: number | null;
+  summary: string;
+  before: Record<string, unknown> | null;
+  after: Record<string, unknown> | null;
+}
+
+/** One page of a list that grows without bound: `total` rows match, these are from `offset` on. */
+export interface Page<T> {
+  items: T[];
+  total: number;
+  limit: number;
+  offset: number;
+}
+
+export const AUDIT_PAGE_SIZE = { default: 50, max: 200 } as const;
+/** The most rows one CSV export holds (newest first); narrow the filters for older ones. */
+export const AUDIT_EXPORT_MAX_ROWS = 20_000;

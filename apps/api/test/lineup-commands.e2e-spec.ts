@@ -305,8 +305,13 @@ describe('lineup commands', () => {
 
   it('applies the suggested lineup from the version it was made at, and refuses it from an older one', async () => {
     const cycle = await deck.createCycle();
-    for (const side of ['C30', 'C31', 'C32', 'D37', 'D38', 'L48']) {
-      await deck.addSlot(cycle.id, side, side === 'L48' ? { earlyWarning: true, grossWeightLb: 52_000 } : {});
+    // Each with a pilot: the suggestion leaves an aircraft without one out.
+    const sides = ['C30', 'C31', 'C32', 'D37', 'D38', 'L48'];
+    for (const [i, side] of sides.entries()) {
+      await deck.addSlot(cycle.id, side, {
+        pilotEmail: pilot(i + 2),
+        ...(side === 'L48' ? { earlyWarning: true, grossWeightLb: 52_000 } : {}),
+      });
     }
     const suggestion = await deck.ok<SuggestedLineup>(HANDLER, 'get', `/api/cycles/${cycle.id}/lineup/suggestion`);
     expect(suggestion.lanes.flatMap((lane) => lane.slotIds)).toHaveLength(6);

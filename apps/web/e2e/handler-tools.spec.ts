@@ -7,7 +7,7 @@ test('the handler swaps in a spare, applies the suggested lineup and marks a cat
     aircraft: [
       { side: 'D38', grossWeightLb: 42_000 },
       { side: 'C30', grossWeightLb: 40_000, spare: true },
-      { side: 'G43', grossWeightLb: 24_000 },
+      { side: 'G43', grossWeightLb: 24_000, pilot: 'pilot4' },
     ],
   });
   const api = await apiAs('handler');

@@ -199,6 +199,11 @@ export interface SlotView {
   tanker: boolean;
   earlyWarning: boolean;
   spare: boolean;
+  /**
+   * A spare not yet called: held aside, in no catapult's order and not counted in the cycle's
+   * aircraft until the handler calls it for a down aircraft.
+   */
+  heldSpare: boolean;
   /** Null while the slot is in the deck pool. */
   catapultId: number | null;
   /** 0-based place in its lane; null in the deck pool. */
@@ -281,6 +286,10 @@ export const CHANGE_KINDS = [
   'gate_waived',
   'aircraft_towed',
   'landing_area_set',
+  'spare_called',
+  'pilot_assigned',
+  'aircraft_up',
+  'slot_returned',
 ] as const;
 export type ChangeKind = (typeof CHANGE_KINDS)[number];
 
@@ -337,6 +346,8 @@ export interface ProjectedLaunch {
 export interface SuggestedLineup {
   basisVersion: number;
   lanes: { catapultId: number; slotIds: number[] }[];
+  /** Planned aircraft with no pilot, left out of the suggestion until one is assigned. */
+  unassigned: number[];
   lastLaunchAt: string | null;
   /** Every aircraft still to launch, as the lineup would stand once the suggestion is applied, in time order. */
   projected: ProjectedLaunch[];
@@ -412,4 +423,43 @@ export interface WaiveGateRequest {
 export interface WeightAckRequest {
   slotVersion: number;
   grossWeightLb: number;
+}
+
+/** How a spare matches the down aircraft it would replace; spares are offered in this order. */
+export type SpareMatch = 'type' | 'mission' | 'other';
+
+export interface SpareCandidate {
+  slotId: number;
+  sideNumber: string;
+  typeDesignation: string;
+  mission: string;
+  match: SpareMatch;
+}
+
+/** Call a held spare for a down aircraft: it joins the cycle and the down aircraft's pilot moves to it. */
+export interface CallSpareRequest {
+  /** The down slot's version as the sender saw it. */
+  slotVersion: number;
+  spareSlotId: number;
+  spareVersion: number;
+}
+
+/** Assign a pilot to an aircraft, or take the pilot off it (`pilotId: null`); a pilot flying another aircraft moves. */
+export interface AssignPilotRequest {
+  slotVersion: number;
+  pilotId: number | null;
+}
+
+/** A down aircraft is serviceable again and goes back to the deck pool. */
+export interface UpAgainRequest {
+  slotVersion: number;
+  reason: string;
+}
+
+/** A taxiing or on-catapult aircraft goes back to the deck pool instead of being scrapped. */
+export interface ReturnToPoolRequest {
+  slotVersion: number;
+  reason: string;
+  /** Required from the handler: the catapult officer of the aircraft's catapult agreed. */
+  catapultOfficerAgreed?: boolean;
 }

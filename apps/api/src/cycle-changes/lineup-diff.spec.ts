@@ -44,6 +44,7 @@ const slot = (id: number, catapultId: number | null, position: number | null, ve
   tanker: false,
   earlyWarning: false,
   spare: false,
+  heldSpare: false,
   catapultId,
   position,
   status: 'planned',

@@ -45,6 +45,16 @@ const SIDE_NUMBER_ORDER = new Intl.Collator('en', { numeric: true });
 
 export const isInPool = (slot: Slot) => slot.catapultId === null && !OUT_OF_LINEUP.includes(slot.status);
 
+/**
+ * A spare the handler has not called yet: it stays aside, in no lane and out of the cycle's count.
+ * Calling it (for a down aircraft) is what `replacedBySlotId` of the down slot records.
+ */
+export const isHeldSpare = (state: LineupState, slot: Slot) =>
+  slot.spare && slot.status === 'planned' && !state.slots.some((other) => other.replacedBySlotId === slot.id);
+
+/** The cycle's aircraft as "launched x of y" counts them: every one but the spares still held. */
+export const countedSlots = (state: LineupState) => state.slots.filter((slot) => !isHeldSpare(state, slot));
+
 /** A lane's slots in launch order. */
 export function laneSlots(state: LineupState, catapultId: number): Slot[] {
   return state.slots
@@ -196,6 +206,7 @@ export function buildSnapshot(state: LineupState): LineupSnapshot {
       tanker: slot.tanker,
       earlyWarning: slot.earlyWarning,
       spare: slot.spare,
+      heldSpare: isHeldSpare(state, slot),
       catapultId: slot.catapultId,
       position: slot.position,
       status: slot.status,
@@ -252,7 +263,7 @@ export function buildSnapshot(state: LineupState): LineupSnapshot {
   return {
     readinessSteps: shipReadinessSteps(state),
     cycle: toCycleView(cycle, {
-      slotCount: state.slots.length,
+      slotCount: countedSlots(state).length,
       launchedCount: state.slots.filter((slot) => slot.status === 'launched').length,
     }),
     lanes,

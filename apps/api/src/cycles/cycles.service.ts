@@ -66,7 +66,13 @@ export class CyclesService {
     const query = this.dataSource.manager
       .createQueryBuilder(Slot, 'slot')
       .select('slot.cycleId', 'cycleId')
-      .addSelect('COUNT(*)', 'slotCount')
+      // Spares still held (not called for a down aircraft) are not counted: see isHeldSpare.
+      .addSelect(
+        `SUM(CASE WHEN slot.spare = 1 AND slot.status = 'planned'
+           AND NOT EXISTS (SELECT 1 FROM slots called WHERE called.replaced_by_slot_id = slot.id)
+           THEN 0 ELSE 1 END)`,
+        'slotCount',
+      )
       .addSelect("SUM(CASE WHEN slot.status = 'launched' THEN 1 ELSE 0 END)", 'launchedCount')
       .groupBy('slot.cycleId');
     if (cycleId !== undefined) query.where('slot.cycleId = :cycleId', { cycleId });

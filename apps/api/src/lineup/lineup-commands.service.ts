@@ -13,10 +13,11 @@ import { BasisChecks } from '../cycle-changes/basis-checks.service.js';
 import { Clock } from '../cycle-changes/clock.js';
 import { CycleChangeService } from '../cycle-changes/cycle-change.service.js';
 import type { Slot } from '../database/entities/slot.entity.js';
-import { laneSlots } from '../cycle-changes/lineup-snapshot.builder.js';
+import { isHeldSpare, laneSlots } from '../cycle-changes/lineup-snapshot.builder.js';
 import type { LineupState } from '../cycle-changes/lineup-state.js';
 import { LineupException } from '../cycle-changes/lineup.exception.js';
 import { placeSlots, updateSlot } from '../cycle-changes/slot-writes.js';
+import { movePilotToSpare } from './spare-takeover.js';
 
 const sameOrder = (a: readonly Slot[], b: readonly Slot[]) =>
   a.length === b.length && a.every((slot, i) => slot.id === b[i].id);
@@ -25,6 +26,12 @@ const sameOrder = (a: readonly Slot[], b: readonly Slot[]) =>
 const heldPlaces = (lane: readonly Slot[]) => lane.filter((slot) => slot.status !== 'planned');
 
 const CANNOT_GO_DOWN: readonly SlotStatus[] = ['launched', 'down', 'scratched'];
+
+const heldSpareRefusal = (slot: Slot) =>
+  new LineupException(
+    'spare_held',
+    `${slot.aircraft.sideNumber} is a spare held aside; call it for a down aircraft before it joins a lane.`,
+  );
 
 /** The handler's commands on a cycle's lineup. */
 @Injectable()
@@ -57,6 +64,7 @@ export class LineupCommandsService {
       }
 
       const catapult = this.basis.catapult(state, request.toCatapultId);
+      if (isHeldSpare(state, slot)) throw heldSpareRefusal(slot);
       await this.basis.laneAsSeen(manager, state, catapult, request.targetLaneOrder);
       const current = laneSlots(state, catapult.id);
       const target = current.filter((other) => other.id !== slot.id);
@@ -150,9 +158,9 @@ export class LineupCommandsService {
         await placeSlots(manager, { catapultId: catapult.id, slots: laneSlots(state, catapult.id) });
         return { summary: `${side} down, out of cat ${catapult.number}`, command, mirrored: true };
       }
-      await updateSlot(manager, spare, { catapultId, position });
+      const pilot = await movePilotToSpare(manager, slot, spare, { catapultId, position });
       return {
-        summary: `${side} down; spare ${spare.aircraft.sideNumber} takes cat ${catapult.number}, place ${(position ?? 0) + 1}`,
+        summary: `${side} down; spare ${spare.aircraft.sideNumber} takes cat ${catapult.number}, place ${(position ?? 0) + 1}${pilot ? `; ${pilot} moves to ${spare.aircraft.sideNumber}` : ''}`,
         command,
         mirrored: true,
       };
@@ -204,6 +212,7 @@ export class LineupCommandsService {
           if (seen.has(slotId))
             throw new LineupException('invalid_lineup', `${slot.aircraft.sideNumber} is listed twice.`);
           seen.add(slotId);
+          if (isHeldSpare(state, slot)) throw heldSpareRefusal(slot);
           if (slot.status !== 'planned') {
             throw new LineupException(
               'invalid_lineup',

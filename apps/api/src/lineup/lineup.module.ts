@@ -3,6 +3,10 @@ import { CycleChangesModule } from '../cycle-changes/cycle-changes.module.js';
 import { CyclesModule } from '../cycles/cycles.module.js';
 import { LineupCommandsService } from './lineup-commands.service.js';
 import { LineupController } from './lineup.controller.js';
+import { PilotAssignmentService } from './pilot-assignment.service.js';
+import { ReturnToPoolService } from './return-to-pool.service.js';
+import { SparesController } from './spares.controller.js';
+import { SparesService } from './spares.service.js';
 import { ReadinessService } from './readiness.service.js';
 import { SuggestionPool } from './suggestion-pool.js';
 import { SuggestionService } from './suggestion.service.js';
@@ -10,7 +14,16 @@ import { WaiversService } from './waivers.service.js';
 
 @Module({
   imports: [CycleChangesModule, CyclesModule],
-  controllers: [LineupController],
-  providers: [LineupCommandsService, ReadinessService, SuggestionPool, SuggestionService, WaiversService],
+  controllers: [LineupController, SparesController],
+  providers: [
+    LineupCommandsService,
+    ReadinessService,
+    SuggestionPool,
+    SuggestionService,
+    SparesService,
+    PilotAssignmentService,
+    ReturnToPoolService,
+    WaiversService,
+  ],
 })
 export class LineupModule {}

@@ -2,7 +2,13 @@ import type { SuggestedLineup } from '@catline/contracts';
 import { epochMs, seconds, type LineupSuggestion, type Seconds, type SuggestionInput } from '@catline/launch-math';
 import { Injectable } from '@nestjs/common';
 import { clearBefore, deckLayout, taxiSeconds } from '../cycle-changes/deck-positions.js';
-import { laneSlots, launchCatapults, launchPriority, projectLineup } from '../cycle-changes/lineup-snapshot.builder.js';
+import {
+  isHeldSpare,
+  laneSlots,
+  launchCatapults,
+  launchPriority,
+  projectLineup,
+} from '../cycle-changes/lineup-snapshot.builder.js';
 import { LineupSnapshotService } from '../cycle-changes/lineup-snapshot.service.js';
 import type { LineupState } from '../cycle-changes/lineup-state.js';
 import { asLaunchDataRefusal } from '../cycle-changes/lineup.exception.js';
@@ -30,10 +36,17 @@ export class SuggestionService {
   }
 }
 
+/**
+ * The planned aircraft the suggestion may place: held spares wait until called, and an aircraft with
+ * no pilot would stop its lane at the catapult, so both stay out.
+ */
+export const suggestable = (state: LineupState) =>
+  state.slots.filter((slot) => slot.status === 'planned' && slot.pilotId !== null && !isHeldSpare(state, slot));
+
 /** launch-math's input for the cycle's planned aircraft. */
 export function suggestionInput(state: LineupState): SuggestionInput {
   const { cycle } = state;
-  const planned = state.slots.filter((slot) => slot.status === 'planned');
+  const planned = suggestable(state);
   const layout = deckLayout(state.ship, state.catapults);
   const taxiTimes: Record<string, Record<string, Seconds>> = {};
   for (const slot of planned) {
@@ -78,6 +91,9 @@ export function suggestedLineup(state: LineupState, suggestion: LineupSuggestion
   return {
     basisVersion: cycle.version,
     lanes,
+    unassigned: state.slots
+      .filter((slot) => slot.status === 'planned' && slot.pilotId === null && !isHeldSpare(state, slot))
+      .map((slot) => slot.id),
     lastLaunchAt: projection.lastLaunch === null ? null : new Date(projection.lastLaunch).toISOString(),
     projected: projection.slots
       .filter((slot) => !slot.launched)

@@ -10,6 +10,7 @@ import type {
   SquadronReport,
 } from '@catline/contracts';
 import { toCycleView } from '../cycle-changes/cycle.mapper.js';
+import { countedSlots } from '../cycle-changes/lineup-snapshot.builder.js';
 import type { Slot } from '../database/entities/slot.entity.js';
 import type { LineupState } from '../cycle-changes/lineup-state.js';
 import { readChangeLog, type ChangeLogReading } from './change-log-reading.js';
@@ -199,7 +200,7 @@ export function buildCycleReport({ state, changes }: CycleRecord): CycleReport {
   const launchTimes = lines.flatMap((line) => (line.launchedAt === null ? [] : [line.launchedAt])).sort();
   return {
     cycle: toCycleView(cycle, {
-      slotCount: state.slots.length,
+      slotCount: countedSlots(state).length,
       launchedCount: lines.filter((line) => line.status === 'launched').length,
     }),
     plannedBasis: log.plannedBasis,

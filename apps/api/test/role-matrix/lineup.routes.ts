@@ -25,6 +25,16 @@ async function freshSlot(context: MatrixContext, stage: Stage) {
   return { deck, cycleId: cycle.id, slot: await deck.slot(cycle.id, slot.id), catapultId: await deck.catapultId(1) };
 }
 
+/** A fresh cycle whose aircraft on cat 1 is down, with a spare held aside (C28, no pilot). */
+async function downWithSpare(context: MatrixContext) {
+  const { deck, cycleId, slot } = await freshSlot(context, 'lane');
+  const spare = await deck.addSlot(cycleId, 'C28', { spare: true });
+  await deck.ok('handler@catline.example', 'post', `/api/cycles/${cycleId}/lineup/slots/${slot.id}/down`, {
+    slotVersion: slot.version,
+  });
+  return { cycleId, down: await deck.slot(cycleId, slot.id), spare: await deck.slot(cycleId, spare.id) };
+}
+
 export const lineupRoutes: MatrixRoute[] = [
   {
     method: 'GET',
@@ -169,6 +179,64 @@ export const lineupRoutes: MatrixRoute[] = [
       return {
         params: { cycleId, slotId: slot.id },
         body: { slotVersion: slot.version, grossWeightLb: slot.grossWeightLb },
+      };
+    },
+  },
+  {
+    method: 'GET',
+    path: '/api/cycles/{cycleId}/lineup/slots/{slotId}/spares',
+    allowed: ['handler'],
+    example: async (context) => {
+      if (!context.allowed) return refused;
+      const { cycleId, down } = await downWithSpare(context);
+      return { params: { cycleId, slotId: down.id } };
+    },
+  },
+  {
+    method: 'POST',
+    path: '/api/cycles/{cycleId}/lineup/slots/{slotId}/spare',
+    allowed: ['handler'],
+    example: async (context) => {
+      if (!context.allowed) return refused;
+      const { cycleId, down, spare } = await downWithSpare(context);
+      return {
+        params: { cycleId, slotId: down.id },
+        body: { slotVersion: down.version, spareSlotId: spare.id, spareVersion: spare.version },
+      };
+    },
+  },
+  {
+    method: 'POST',
+    path: '/api/cycles/{cycleId}/lineup/slots/{slotId}/up',
+    allowed: ['handler'],
+    example: async (context) => {
+      if (!context.allowed) return refused;
+      const { cycleId, down } = await downWithSpare(context);
+      return { params: { cycleId, slotId: down.id }, body: { slotVersion: down.version, reason: 'Hydraulics fixed' } };
+    },
+  },
+  {
+    method: 'POST',
+    path: '/api/cycles/{cycleId}/lineup/slots/{slotId}/pilot',
+    allowed: ['handler', 'air_operations'],
+    example: async (context) => {
+      if (!context.allowed) return refused;
+      const { cycleId, slot } = await freshSlot(context, 'pool');
+      return { params: { cycleId, slotId: slot.id }, body: { slotVersion: slot.version, pilotId: null } };
+    },
+  },
+  {
+    method: 'POST',
+    path: '/api/cycles/{cycleId}/lineup/slots/{slotId}/return',
+    allowed: ['catapult_officer', 'handler'],
+    // The officer of another catapult may not return it (the handler needs the officer's agreement).
+    notOwner: 'cat2@catline.example',
+    example: async (context) => {
+      if (!context.allowed) return refused;
+      const { cycleId, slot } = await freshSlot(context, 'taxiing');
+      return {
+        params: { cycleId, slotId: slot.id },
+        body: { slotVersion: slot.version, reason: 'Matrix return', catapultOfficerAgreed: true },
       };
     },
   },

@@ -32,6 +32,8 @@ const REASONS: Record<RefusalCode, string> = {
   cycle_not_executing: 'the cycle is not executing',
   slot_not_movable: 'the aircraft cannot be moved now',
   spare_unavailable: 'no spare can take its place',
+  spare_held: 'the spare is held until called',
+  agreement_required: "the catapult officer's agreement is needed",
   not_your_catapult: 'not your catapult',
   not_your_slot: 'not your aircraft',
   not_current_aircraft: 'not the aircraft on the catapult',

@@ -50,8 +50,8 @@ function slot(
     typeDesignation: 'KX-9',
     squadronId: 1,
     squadronCode: 'VX-41',
-    pilotId: null,
-    pilotName: null,
+    pilotId: id,
+    pilotName: `Pilot ${id}`,
     mission: 'CAP',
     fuelLb: 9000,
     stores: '',
@@ -59,6 +59,7 @@ function slot(
     tanker: false,
     earlyWarning: false,
     spare: false,
+    heldSpare: false,
     catapultId: place?.catapultId ?? null,
     position: place?.position ?? null,
     status: 'planned',
@@ -365,5 +366,13 @@ describe('lineupWarnings', () => {
     snapshot.slots[0] = { ...snapshot.slots[0], status: 'launched', pilotWeightAckAt: null };
     snapshot.slots[1] = { ...snapshot.slots[1], status: 'scratched', missesWindow: true };
     expect(lineupWarnings(snapshot, clock)).toEqual([]);
+  });
+
+  it('names every aircraft still to fly that has no pilot, but not a spare held aside', () => {
+    const snapshot = board();
+    snapshot.slots[0] = { ...snapshot.slots[0], pilotId: null, pilotName: null };
+    snapshot.slots[1] = { ...snapshot.slots[1], pilotId: null, pilotName: null, spare: true, heldSpare: true };
+    const warnings = lineupWarnings(snapshot, clock).filter((warning) => warning.kind === 'no_pilot');
+    expect(warnings.map((warning) => warning.text)).toEqual([`No pilot assigned to ${snapshot.slots[0].sideNumber}.`]);
   });
 });

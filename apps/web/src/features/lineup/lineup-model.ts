@@ -92,7 +92,13 @@ export function placeName(snapshot: LineupSnapshot, container: ContainerId, inde
 }
 
 export type WarningKind =
-  'no_go' | 'spot_blocked' | 'missed_window' | 'catapult_down' | 'catapult_closed' | 'weight_not_agreed';
+  | 'no_go'
+  | 'spot_blocked'
+  | 'no_pilot'
+  | 'missed_window'
+  | 'catapult_down'
+  | 'catapult_closed'
+  | 'weight_not_agreed';
 
 export interface LineupWarning {
   kind: WarningKind;
@@ -180,6 +186,15 @@ export function lineupWarnings(snapshot: LineupSnapshot, formatTime: (iso: strin
         });
       }
     }
+  }
+  // An aircraft without a pilot cannot get past taxiing; the suggestion leaves it out until one is assigned.
+  const pilotless = snapshot.slots.filter((slot) => slot.pilotId === null && !isDone(slot) && !slot.heldSpare);
+  if (pilotless.length > 0) {
+    warnings.push({
+      kind: 'no_pilot',
+      key: 'pilots',
+      text: `No pilot assigned to ${pilotless.map((slot) => slot.sideNumber).join(', ')}.`,
+    });
   }
   return [...warnings, ...weights];
 }

@@ -31,6 +31,10 @@ export const CHANGE_KIND_LABELS: Record<ChangeKind, string> = {
   gate_waived: 'Waiver',
   aircraft_towed: 'Tow',
   landing_area_set: 'Landing area',
+  spare_called: 'Spare called',
+  pilot_assigned: 'Pilot',
+  aircraft_up: 'Up again',
+  slot_returned: 'Back to the pool',
 };
 
 /** Slots in no lane and not in the deck pool: down or scratched aircraft. */

@@ -3,6 +3,7 @@ import type { LineupWarning, WarningKind } from '../lineup-model.js';
 
 const palette: Record<WarningKind, string> = {
   no_go: 'nogo',
+  no_pilot: 'caution',
   catapult_down: 'nogo',
   spot_blocked: 'caution',
   missed_window: 'caution',

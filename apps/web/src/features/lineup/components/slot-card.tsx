@@ -8,7 +8,7 @@ import { GripIcon } from '../../../components/icons.js';
 import { SlotStatusBadge } from '../../../components/slot-status-badge.js';
 import { formatOptionalClock, formatPounds } from '../../../lib/format.js';
 import { slotItemId } from '../hooks/use-lineup-drag.js';
-import type { SlotMark } from '../lineup-model.js';
+import { isDone, type SlotMark } from '../lineup-model.js';
 
 const MARK_LABELS: Record<SlotMark, string> = { 'on-catapult': 'On cat', next: 'Next' };
 
@@ -104,7 +104,12 @@ function SlotCardContent({ slot, movable, mark }: { slot: SlotView; movable: boo
         )}
         {slot.spare && (
           <Badge size="sm" variant="outline">
-            Spare
+            {slot.heldSpare ? 'Spare, held' : 'Spare'}
+          </Badge>
+        )}
+        {slot.pilotId === null && !isDone(slot) && !slot.heldSpare && (
+          <Badge size="sm" colorPalette="caution" variant="solid" data-testid="no-pilot">
+            No pilot
           </Badge>
         )}
       </HStack>

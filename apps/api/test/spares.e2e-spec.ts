@@ -1,0 +1,191 @@
+import type { LineupCommandResult, SpareCandidate, SuggestedLineup } from '@catline/contracts';
+import type { INestApplication } from '@nestjs/common';
+import { AIR_OPS, HANDLER, LineupDriver, catapultOfficer, pilot } from './support/lineup-fixtures.js';
+import { startTestApp } from './support/test-app.js';
+
+describe('spares, down aircraft, pilots and returns to the pool', () => {
+  let app: INestApplication;
+  let deck: LineupDriver;
+
+  beforeAll(async () => {
+    const started = await startTestApp();
+    app = started.app;
+    deck = new LineupDriver(started.url);
+  });
+
+  afterAll(async () => {
+    await app.close();
+  });
+
+  const slotPath = (cycleId: number, slotId: number, action: string) =>
+    `/api/cycles/${cycleId}/lineup/slots/${slotId}/${action}`;
+
+  async function markDown(cycleId: number, slotId: number) {
+    const slot = await deck.slot(cycleId, slotId);
+    return deck.ok<LineupCommandResult>(HANDLER, 'post', slotPath(cycleId, slotId, 'down'), {
+      slotVersion: slot.version,
+    });
+  }
+
+  it('holds a spare aside: out of the count, the lanes and the suggestion until called', async () => {
+    const cycle = await deck.createCycle();
+    const flying = await deck.addSlot(cycle.id, 'C21', { pilotEmail: pilot(2) });
+    const spare = await deck.addSlot(cycle.id, 'D40', { pilotEmail: pilot(3), spare: true, mission: 'Spare' });
+    const snapshot = await deck.snapshot(cycle.id);
+    expect(snapshot.cycle.slotCount).toBe(1);
+    expect(snapshot.slots.find((slot) => slot.id === spare.id)!.heldSpare).toBe(true);
+
+    const lane = snapshot.lanes.find((candidate) => candidate.number === 1)!;
+    const move = await deck.call(HANDLER, 'post', `/api/cycles/${cycle.id}/lineup/moves`, {
+      slotId: spare.id,
+      slotVersion: spare.version,
+      toCatapultId: lane.catapultId,
+      toIndex: 0,
+      targetLaneOrder: lane.slotIds,
+    });
+    expect(move.status).toBe(409);
+    expect(move.body.code).toBe('spare_held');
+
+    const suggestion = await deck.ok<SuggestedLineup>(HANDLER, 'get', `/api/cycles/${cycle.id}/lineup/suggestion`);
+    expect(suggestion.lanes.flatMap((entry) => entry.slotIds)).toEqual([flying.id]);
+  });
+
+  it('offers spares of the type first, then of the mission; calling one moves the down pilot to it', async () => {
+    const cycle = await deck.createCycle();
+    const down = await deck.addSlot(cycle.id, 'C22', { pilotEmail: pilot(4) });
+    const other = await deck.addSlot(cycle.id, 'L47', { spare: true, mission: 'Tanker' });
+    const sameMission = await deck.addSlot(cycle.id, 'G43', { spare: true });
+    const sameType = await deck.addSlot(cycle.id, 'D41', { spare: true, mission: 'Spare' });
+    await deck.place(cycle.id, down.id, 1);
+    await markDown(cycle.id, down.id);
+
+    const offered = await deck.ok<SpareCandidate[]>(HANDLER, 'get', slotPath(cycle.id, down.id, 'spares'));
+    expect(offered.map((candidate) => [candidate.slotId, candidate.match])).toEqual([
+      [sameType.id, 'type'],
+      [sameMission.id, 'mission'],
+      [other.id, 'other'],
+    ]);
+
+    const before = await deck.snapshot(cycle.id);
+    const downNow = before.slots.find((slot) => slot.id === down.id)!;
+    const spareNow = before.slots.find((slot) => slot.id === sameType.id)!;
+    const called = await deck.ok<LineupCommandResult>(HANDLER, 'post', slotPath(cycle.id, down.id, 'spare'), {
+      slotVersion: downNow.version,
+      spareSlotId: sameType.id,
+      spareVersion: spareNow.version,
+    });
+    expect(called.version).toBe(before.version + 1);
+    expect(called.change.summary).toBe(`Spare D41 called for C22; ${downNow.pilotName} moves to D41`);
+    const after = await deck.snapshot(cycle.id);
+    expect(after.slots.find((slot) => slot.id === sameType.id)).toMatchObject({
+      heldSpare: false,
+      pilotId: downNow.pilotId,
+      pilotWeightAckAt: null,
+    });
+    expect(after.slots.find((slot) => slot.id === down.id)!.pilotId).toBeNull();
+    expect(after.cycle.slotCount).toBe(before.cycle.slotCount + 1);
+    // The spare, called, may now join a lane.
+    await deck.place(cycle.id, sameType.id, 1);
+  });
+
+  it('puts a down aircraft back in the deck pool with a reason ("up again")', async () => {
+    const cycle = await deck.createCycle();
+    const slot = await deck.addSlot(cycle.id, 'C23', { pilotEmail: pilot(5) });
+    await deck.place(cycle.id, slot.id, 2);
+    await markDown(cycle.id, slot.id);
+    const down = await deck.slot(cycle.id, slot.id);
+    const up = await deck.ok<LineupCommandResult>(HANDLER, 'post', slotPath(cycle.id, slot.id, 'up'), {
+      slotVersion: down.version,
+      reason: 'Hydraulic leak fixed',
+    });
+    expect(up.change).toMatchObject({
+      kind: 'aircraft_up',
+      summary: 'C23 up again, back in the deck pool: Hydraulic leak fixed',
+      actor: { role: 'handler' },
+    });
+    const after = await deck.snapshot(cycle.id);
+    expect(after.slots.find((candidate) => candidate.id === slot.id)).toMatchObject({
+      status: 'planned',
+      catapultId: null,
+    });
+    expect(after.pool).toContain(slot.id);
+    const again = await deck.call(HANDLER, 'post', slotPath(cycle.id, slot.id, 'up'), {
+      slotVersion: (await deck.slot(cycle.id, slot.id)).version,
+      reason: 'Twice',
+    });
+    expect(again.status).toBe(409);
+  });
+
+  it('returns a taxiing aircraft (officer) and an on-catapult one (handler with agreement) to the pool', async () => {
+    const cycle = await deck.createCycle();
+    const first = await deck.addSlot(cycle.id, 'C24', { pilotEmail: pilot(6) });
+    const second = await deck.addSlot(cycle.id, 'C25', { pilotEmail: pilot(7) });
+    await deck.place(cycle.id, first.id, 1);
+    await deck.place(cycle.id, second.id, 1);
+    await deck.start(cycle.id);
+    expect((await deck.step(cycle.id, first.id, 'taxiing')).status).toBe(200);
+
+    const taxiing = await deck.slot(cycle.id, first.id);
+    const byOfficer = await deck.ok<LineupCommandResult>(
+      catapultOfficer(1),
+      'post',
+      slotPath(cycle.id, first.id, 'return'),
+      { slotVersion: taxiing.version, reason: 'Nose wheel steering fault' },
+    );
+    expect(byOfficer.change.summary).toBe('C24 returned from cat 1 to the deck pool: Nose wheel steering fault');
+    let after = await deck.snapshot(cycle.id);
+    expect(after.pool).toContain(first.id);
+    expect(after.lanes.find((lane) => lane.number === 1)!.slotIds).toEqual([second.id]);
+    expect(after.slots.find((slot) => slot.id === first.id)).toMatchObject({ status: 'planned', position: null });
+
+    for (const to of ['taxiing', 'on_catapult'] as const)
+      expect((await deck.step(cycle.id, second.id, to)).status).toBe(200);
+    const onCatapult = await deck.slot(cycle.id, second.id);
+    const withoutAgreement = await deck.call(HANDLER, 'post', slotPath(cycle.id, second.id, 'return'), {
+      slotVersion: onCatapult.version,
+      reason: 'Respot',
+    });
+    expect(withoutAgreement.status).toBe(403);
+    expect(withoutAgreement.body.code).toBe('agreement_required');
+    const byHandler = await deck.ok<LineupCommandResult>(HANDLER, 'post', slotPath(cycle.id, second.id, 'return'), {
+      slotVersion: onCatapult.version,
+      reason: 'Respot',
+      catapultOfficerAgreed: true,
+    });
+    expect(byHandler.change.summary).toBe(
+      "C25 returned from cat 1 to the deck pool with the catapult officer's agreement: Respot",
+    );
+    after = await deck.snapshot(cycle.id);
+    expect(after.lanes.find((lane) => lane.number === 1)!.slotIds).toEqual([]);
+  });
+
+  it('leaves a pilot-less aircraft out of the suggestion, listed as unassigned, until air operations assigns one', async () => {
+    const cycle = await deck.createCycle();
+    const manned = await deck.addSlot(cycle.id, 'C26', { pilotEmail: pilot(8) });
+    const tanker = await deck.addSlot(cycle.id, 'L48', { tanker: true, mission: 'Tanker' });
+    let suggestion = await deck.ok<SuggestedLineup>(HANDLER, 'get', `/api/cycles/${cycle.id}/lineup/suggestion`);
+    expect(suggestion.lanes.flatMap((lane) => lane.slotIds)).toEqual([manned.id]);
+    expect(suggestion.unassigned).toEqual([tanker.id]);
+
+    // Air operations moves the pilot from C26 to the tanker in one change.
+    const pilotId = (await deck.me(pilot(8))).id;
+    const moved = await deck.ok<LineupCommandResult>(AIR_OPS, 'post', slotPath(cycle.id, tanker.id, 'pilot'), {
+      slotVersion: tanker.version,
+      pilotId,
+    });
+    expect(moved.change.summary).toMatch(/ moves from C26 to L48$/);
+    const after = await deck.snapshot(cycle.id);
+    expect(after.slots.find((slot) => slot.id === tanker.id)!.pilotId).toBe(pilotId);
+    expect(after.slots.find((slot) => slot.id === manned.id)!.pilotId).toBeNull();
+    suggestion = await deck.ok<SuggestedLineup>(HANDLER, 'get', `/api/cycles/${cycle.id}/lineup/suggestion`);
+    expect(suggestion.lanes.flatMap((lane) => lane.slotIds)).toEqual([tanker.id]);
+    expect(suggestion.unassigned).toEqual([manned.id]);
+
+    const notPilot = await deck.call(HANDLER, 'post', slotPath(cycle.id, manned.id, 'pilot'), {
+      slotVersion: (await deck.slot(cycle.id, manned.id)).version,
+      pilotId: (await deck.me(HANDLER)).id,
+    });
+    expect(notPilot.status).toBe(400);
+    expect(notPilot.body.code).toBe('invalid_pilot');
+  });
+});

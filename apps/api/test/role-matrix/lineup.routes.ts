@@ -230,7 +230,7 @@ export const lineupRoutes: MatrixRoute[] = [
     path: '/api/cycles/{cycleId}/lineup/slots/{slotId}/return',
     allowed: ['catapult_officer', 'handler'],
     // The officer of another catapult may not return it (the handler needs the officer's agreement).
-    notOwner: 'cat2@catline.example',
+    notOwner: { catapult_officer: 'cat2@catline.example' },
     example: async (context) => {
       if (!context.allowed) return refused;
       const { cycleId, slot } = await freshSlot(context, 'taxiing');

@@ -34,6 +34,8 @@ import {
   type SoftLaunchGateCode,
   type SlotStatus,
   type SlotView,
+  type SpareCandidate,
+  type SpareMatch,
   type SuggestedLineup,
   type WaiverView,
   type WindReadingUsed,
@@ -303,6 +305,9 @@ export class SlotViewDto implements SlotView {
   @ApiProperty()
   spare: boolean;
 
+  @ApiProperty({ description: 'A spare not yet called: in no lane and not counted until called for a down aircraft.' })
+  heldSpare: boolean;
+
   @IdProperty({ nullable: true, description: 'Null while the slot is in the deck pool.' })
   catapultId: number | null;
 
@@ -545,6 +550,9 @@ export class SuggestedLineupDto implements SuggestedLineup {
   @ApiProperty({ type: [SuggestedLaneDto] })
   lanes: SuggestedLaneDto[];
 
+  @ApiProperty({ type: 'integer', isArray: true, description: 'Planned aircraft with no pilot, left out.' })
+  unassigned: number[];
+
   @InstantProperty({ nullable: true })
   lastLaunchAt: string | null;
 
@@ -553,4 +561,24 @@ export class SuggestedLineupDto implements SuggestedLineup {
     description: 'Every aircraft still to launch once the suggestion is applied, in time order.',
   })
   projected: ProjectedLaunchDto[];
+}
+
+const SPARE_MATCHES: readonly SpareMatch[] = ['type', 'mission', 'other'];
+
+@ApiSchema({ name: 'SpareCandidate' })
+export class SpareCandidateDto implements SpareCandidate {
+  @IdProperty()
+  slotId: number;
+
+  @ApiProperty()
+  sideNumber: string;
+
+  @ApiProperty()
+  typeDesignation: string;
+
+  @ApiProperty()
+  mission: string;
+
+  @EnumProperty(SPARE_MATCHES, 'SpareMatch', { description: 'Offered in this order: type, then mission, then other.' })
+  match: SpareMatch;
 }

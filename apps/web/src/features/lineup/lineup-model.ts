@@ -92,13 +92,7 @@ export function placeName(snapshot: LineupSnapshot, container: ContainerId, inde
 }
 
 export type WarningKind =
-  | 'no_go'
-  | 'spot_blocked'
-  | 'no_pilot'
-  | 'missed_window'
-  | 'catapult_down'
-  | 'catapult_closed'
-  | 'weight_not_agreed';
+  'no_go' | 'spot_blocked' | 'no_pilot' | 'missed_window' | 'catapult_down' | 'catapult_closed' | 'weight_not_agreed';
 
 export interface LineupWarning {
   kind: WarningKind;

@@ -43,6 +43,7 @@ const suggestion: SuggestedLineup = {
     { catapultId: 11, slotIds: [1, 4] },
     { catapultId: 12, slotIds: [3, 2] },
   ],
+  unassigned: [],
   lastLaunchAt: '2026-12-02T10:09:30.000Z',
   projected: [
     { slotId: 1, catapultId: 11, launchAt: '2026-12-02T10:05:00.000Z', missesWindow: false },

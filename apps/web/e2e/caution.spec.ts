@@ -50,3 +50,42 @@ test('every screen with a launch figure shows the launch caution, and the launch
     await page.context().close();
   }
 });
+
+test('the tablet stations keep the caution in view while their figures scroll', async ({ browser }) => {
+  test.setTimeout(120_000);
+  const { cycle, slotIds } = await planCycle({
+    start: true,
+    aircraft: [{ side: 'C22', grossWeightLb: 44_000, pilot: 'pilot' }],
+  });
+  const handler = await apiAs('handler');
+  await placeInLane(handler, cycle.id, slotIds.get('C22')!, 1);
+  await handler.dispose();
+
+  // Windows shorter than the station's page, so that it scrolls and the caution has somewhere to go.
+  for (const station of [
+    {
+      who: 'cat1',
+      path: `/cat-station?cycle=${cycle.id}`,
+      ready: 'current-aircraft',
+      viewport: { width: 1024, height: 480 },
+    },
+    { who: 'pilot', path: `/my-launch?cycle=${cycle.id}`, ready: 'my-slot', viewport: { width: 820, height: 480 } },
+    { who: 'pilot', path: `/my-launch?cycle=${cycle.id}`, ready: 'my-slot', viewport: { width: 390, height: 600 } },
+  ]) {
+    const page = await openAs(browser, station.who, station.path, station.viewport);
+    await expect(page.getByTestId(station.ready)).toBeVisible();
+    const caution = page.getByTestId('caution-line');
+    const overflow = await page.evaluate(() => document.documentElement.scrollHeight - window.innerHeight);
+    expect(overflow, `${station.path} scrolls at ${station.viewport.width}x${station.viewport.height}`).toBeGreaterThan(
+      100,
+    );
+    for (const to of ['top', 'bottom'] as const) {
+      await page.evaluate((end) => window.scrollTo(0, end === 'top' ? 0 : document.body.scrollHeight), to);
+      await expect(
+        caution,
+        `${station.path} at ${station.viewport.width}x${station.viewport.height}, ${to}`,
+      ).toBeInViewport({ ratio: 1 });
+    }
+    await page.context().close();
+  }
+});

@@ -4,11 +4,13 @@ import { CautionIcon } from './icons.js';
 
 /**
  * Required on every screen that shows a launch figure. `compact` fits it into a screen's header band
- * (the lineup board's), still in full and still in the caution colours.
+ * (the lineup board's), still in full and still in the caution colours; `pinned` keeps it at the foot
+ * of the window while the page scrolls, for the tablet stations.
  */
-export function CautionLine({ compact = false }: { compact?: boolean }) {
+export function CautionLine({ compact = false, pinned = false }: { compact?: boolean; pinned?: boolean }) {
   return (
     <Box
+      {...(pinned && { position: 'sticky', bottom: '0', zIndex: 'sticky', boxShadow: 'md' })}
       role="note"
       aria-label="Caution"
       data-testid="caution-line"

@@ -179,7 +179,6 @@ export function CatStationScreen() {
           <CyclePicker cycles={cycles.data} value={cycle?.id} onChange={choose} />
         )}
       </PageHeader>
-      <CautionLine />
       {user.catapultId === null ? (
         <EmptyState title="No catapult assigned to you">
           The admin assigns each catapult officer a catapult under People.
@@ -203,6 +202,8 @@ export function CatStationScreen() {
           )}
         </QueryView>
       )}
+      {/* Pinned to the foot of the tablet's screen: the figures scroll, the caution stays in view. */}
+      <CautionLine pinned />
     </Stack>
   );
 }

@@ -134,7 +134,6 @@ export function MyLaunchScreen() {
           <CyclePicker cycles={cycles.data} value={cycle?.id} onChange={choose} />
         )}
       </PageHeader>
-      <CautionLine />
       {cycles.isPending ? (
         <LoadingState label="Finding the current cycle…" />
       ) : cycles.isError ? (
@@ -154,6 +153,8 @@ export function MyLaunchScreen() {
           )}
         </QueryView>
       )}
+      {/* Pinned to the foot of the tablet's screen: the figures scroll, the caution stays in view. */}
+      <CautionLine pinned />
     </Stack>
   );
 }

@@ -1,6 +1,6 @@
 import type { DeckSpot } from '@catline/contracts';
-import { ApiProperty } from '@nestjs/swagger';
-import { IsNotEmpty, IsString, MaxLength, ValidateBy } from 'class-validator';
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { ArrayMaxSize, IsArray, IsNotEmpty, IsOptional, IsString, MaxLength, ValidateBy } from 'class-validator';
 import { Trim } from '../../common/validation/trim.decorator.js';
 import { PlainText } from '../../common/validation/plain-text.decorator.js';
 
@@ -35,6 +35,26 @@ export class DeckSpotDto implements DeckSpot {
   @PlainText()
   @MaxLength(20)
   name: string;
+
+  @ApiPropertyOptional({ example: 'Bow', description: 'The named deck area the spot belongs to.' })
+  @IsOptional()
+  @Trim()
+  @IsString()
+  @IsNotEmpty({ message: 'a deck area needs a name' })
+  @PlainText()
+  @MaxLength(40)
+  area?: string;
+
+  @ApiPropertyOptional({
+    example: ['bow-1'],
+    description: 'Spots in front of this one in its row, which must be clear before an aircraft here can taxi out.',
+  })
+  @IsOptional()
+  @IsArray()
+  @ArrayMaxSize(20)
+  @IsString({ each: true })
+  @MaxLength(20, { each: true })
+  clearBefore?: string[];
 
   @ApiProperty({ example: { 1: 70, 2: 60, 3: 150, 4: 170 }, description: 'Seconds, by catapult number.' })
   @IsTaxiTimes()

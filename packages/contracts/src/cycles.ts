@@ -56,9 +56,15 @@ export type UpdateCycleConditionsRequest = Partial<CycleConditions> & {
   basisVersion: number;
 };
 
-/** Starting or closing a cycle: the cycle version the command was based on. */
+/** Stopping or closing a cycle: the cycle version the command was based on. */
 export interface CycleCommandRequest {
   basisVersion: number;
+}
+
+/** The air boss starts launching; outside the launch window only once confirmed. */
+export interface StartCycleRequest extends CycleCommandRequest {
+  /** Start although now is outside the launch window (asked again after the `outside_window` warning). */
+  confirmOutsideWindow?: boolean;
 }
 
 /** Adds an aircraft to a cycle's deck pool. */

@@ -280,6 +280,7 @@ export const CHANGE_KINDS = [
   'weight_acknowledged',
   'conditions_changed',
   'cycle_started',
+  'cycle_stopped',
   'cycle_closed',
   'air_plan_imported',
   'slot_added',

@@ -61,6 +61,10 @@ export const CYCLE_REFUSAL_CODES = [
   'aircraft_already_in_cycle',
   'aircraft_unserviceable',
   'pilot_already_assigned',
+  /** Another cycle of the same ship is launching: one launching cycle per ship. */
+  'ship_already_launching',
+  /** Starting outside the launch window: a warning the air boss confirms by asking again. */
+  'outside_window',
 ] as const;
 export type CycleRefusalCode = (typeof CYCLE_REFUSAL_CODES)[number];
 

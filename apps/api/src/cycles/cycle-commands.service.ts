@@ -12,15 +12,15 @@ import { startingPositions } from '../cycle-changes/starting-positions.js';
 import { LineupException } from '../cycle-changes/lineup.exception.js';
 import { User } from '../database/entities/user.entity.js';
 import { CycleClosing } from './cycle-closing.service.js';
-import { checkWindow, type CycleTimes } from './cycle-window.js';
+import { checkStartInWindow, checkWindow, clock, type CycleTimes } from './cycle-window.js';
+import { startLaunching } from './launching-rule.js';
 import { CyclesException } from './cycles.exception.js';
 import type { AddSlotDto } from './dto/add-slot.dto.js';
+import type { StartCycleDto } from './dto/start-cycle.dto.js';
 import type { UpdateCycleConditionsDto } from './dto/update-cycle-conditions.dto.js';
 import { Cycle } from '../database/entities/cycle.entity.js';
 
 type ConditionValues = Partial<CycleConditions & CycleTimes>;
-
-const clock = (instant: Date) => `${instant.toISOString().slice(11, 16)}Z`;
 
 /** One short account of what changed in the conditions, e.g. "wind 250° 18 kt, case II". */
 function describeConditions(values: ConditionValues, cycle: Cycle): string {
@@ -108,17 +108,39 @@ export class CycleCommandsService {
     return '';
   }
 
-  start(cycleId: number, actor: ChangeActor, basisVersion: number): Promise<LineupCommandResult> {
+  /** The air boss starts launching: one launching cycle per ship, and outside the window only once confirmed. */
+  start(cycleId: number, actor: ChangeActor, request: StartCycleDto): Promise<LineupCommandResult> {
     return this.changes.apply(cycleId, actor, 'cycle_started', async (manager, state) => {
-      await this.basis.cycleAsSeen(manager, state, basisVersion);
+      await this.basis.cycleAsSeen(manager, state, request.basisVersion);
       if (state.cycle.state !== 'planning') {
         throw new CyclesException(
           'wrong_state',
           `Cycle ${state.cycle.number} is ${state.cycle.state}; only a cycle in planning can start.`,
         );
       }
-      await manager.update(Cycle, { id: cycleId }, { state: 'executing' });
-      return { summary: `Cycle ${state.cycle.number} started`, command: { type: 'start', basisVersion } };
+      const now = this.clock.now();
+      checkStartInWindow(state.cycle, now, request.confirmOutsideWindow === true);
+      await startLaunching(manager, state.cycle);
+      const inWindow = now >= state.cycle.windowStartAt && now <= state.cycle.windowEndAt;
+      return {
+        summary: `Cycle ${state.cycle.number} started${inWindow ? '' : ', outside its window (confirmed)'}`,
+        command: { type: 'start', ...request },
+      };
+    });
+  }
+
+  /** The air boss stops launching: the cycle goes back to planning, and another cycle of the ship may start. */
+  stop(cycleId: number, actor: ChangeActor, basisVersion: number): Promise<LineupCommandResult> {
+    return this.changes.apply(cycleId, actor, 'cycle_stopped', async (manager, state) => {
+      await this.basis.cycleAsSeen(manager, state, basisVersion);
+      if (state.cycle.state !== 'executing') {
+        throw new CyclesException(
+          'wrong_state',
+          `Cycle ${state.cycle.number} is ${state.cycle.state}; only a launching cycle can stop.`,
+        );
+      }
+      await manager.update(Cycle, { id: cycleId }, { state: 'planning' });
+      return { summary: `Cycle ${state.cycle.number}: launching stopped`, command: { type: 'stop', basisVersion } };
     });
   }
 

@@ -16,3 +16,19 @@ export function checkWindow(times: CycleTimes): void {
     throw new CyclesException('invalid_window', 'The planned launch time must fall inside the launch window.');
   }
 }
+
+/** An instant as the cycles' messages show it, e.g. "09:50Z". */
+export const clock = (instant: Date) => `${instant.toISOString().slice(11, 16)}Z`;
+
+/** Launching outside the window is allowed only once the air boss confirms it, having been warned. */
+export function checkStartInWindow(times: CycleTimes, now: Date, confirmed: boolean): void {
+  const early = now.getTime() < times.windowStartAt.getTime();
+  const late = now.getTime() > times.windowEndAt.getTime();
+  if (confirmed || (!early && !late)) return;
+  const window = `${clock(times.windowStartAt)} to ${clock(times.windowEndAt)}`;
+  throw new CyclesException(
+    'outside_window',
+    `The launch window is ${window}; now, ${clock(now)}, is ${early ? 'before it opens' : 'after it closed'}. ` +
+      'Confirm to start launching anyway.',
+  );
+}

@@ -14,6 +14,7 @@ import { CyclesService } from './cycles.service.js';
 import { AddSlotDto } from './dto/add-slot.dto.js';
 import { BasisVersionDto } from './dto/basis-version.dto.js';
 import { CreateCycleDto } from './dto/create-cycle.dto.js';
+import { StartCycleDto } from './dto/start-cycle.dto.js';
 import { UpdateCycleConditionsDto } from './dto/update-cycle-conditions.dto.js';
 
 @ApiTags('cycles')
@@ -62,19 +63,38 @@ export class CyclesController {
     return this.commands.updateConditions(cycleId, actorOf(user), body);
   }
 
-  @ApiDoc('Start executing a cycle', {
+  @ApiDoc('Start launching a cycle', {
     response: LineupCommandResultDto,
-    refuses: { 404: ['not_found'], 409: ['stale_basis', 'wrong_state'] },
+    description:
+      'By the air boss. One cycle per ship launches at a time; outside the launch window the start is ' +
+      'refused with outside_window until asked again with confirmOutsideWindow.',
+    refuses: { 404: ['not_found'], 409: ['stale_basis', 'wrong_state', 'ship_already_launching', 'outside_window'] },
   })
-  @Roles('air_operations')
+  @Roles('air_boss')
   @Post(':cycleId/start')
   @HttpCode(HttpStatus.OK)
   start(
     @Param('cycleId', ParseIntPipe) cycleId: number,
+    @Body() body: StartCycleDto,
+    @CurrentUser() user: AuthenticatedUser,
+  ): Promise<LineupCommandResult> {
+    return this.commands.start(cycleId, actorOf(user), body);
+  }
+
+  @ApiDoc('Stop launching a cycle', {
+    response: LineupCommandResultDto,
+    description: 'By the air boss: the cycle goes back to planning, and another cycle of the ship may start.',
+    refuses: { 404: ['not_found'], 409: ['stale_basis', 'wrong_state'] },
+  })
+  @Roles('air_boss')
+  @Post(':cycleId/stop')
+  @HttpCode(HttpStatus.OK)
+  stop(
+    @Param('cycleId', ParseIntPipe) cycleId: number,
     @Body() body: BasisVersionDto,
     @CurrentUser() user: AuthenticatedUser,
   ): Promise<LineupCommandResult> {
-    return this.commands.start(cycleId, actorOf(user), body.basisVersion);
+    return this.commands.stop(cycleId, actorOf(user), body.basisVersion);
   }
 
   @ApiDoc('Close a cycle', {

@@ -11,6 +11,8 @@ const STATUS: Record<CycleRefusalCode, HttpStatus> = {
   aircraft_already_in_cycle: HttpStatus.CONFLICT,
   aircraft_unserviceable: HttpStatus.CONFLICT,
   pilot_already_assigned: HttpStatus.CONFLICT,
+  ship_already_launching: HttpStatus.CONFLICT,
+  outside_window: HttpStatus.CONFLICT,
 };
 
 export class CyclesException extends DomainException {

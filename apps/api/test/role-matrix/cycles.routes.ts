@@ -47,7 +47,18 @@ export const cyclesRoutes: MatrixRoute[] = [
   {
     method: 'POST',
     path: '/api/cycles/{cycleId}/start',
-    allowed: ['air_operations'],
+    allowed: ['air_boss'],
+    // The matrix's cycle is planned an hour ahead: the air boss is warned, and starting is not confirmed, so
+    // no cycle of the demo ship is left launching.
+    refusals: [409],
+    example: async (context) => ({ params: { cycleId: await targetCycle(context) }, body: { basisVersion: 0 } }),
+  },
+  {
+    method: 'POST',
+    path: '/api/cycles/{cycleId}/stop',
+    allowed: ['air_boss'],
+    // A cycle in planning does not stop: the answer is a refusal, after the role check let it through.
+    refusals: [409],
     example: async (context) => ({ params: { cycleId: await targetCycle(context) }, body: { basisVersion: 0 } }),
   },
   {

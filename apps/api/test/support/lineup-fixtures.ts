@@ -163,9 +163,25 @@ export class LineupDriver {
     });
   }
 
+  /**
+   * The air boss starts launching the cycle, confirming a start outside its window (a spec's cycle is planned
+   * an hour ahead). One cycle per ship launches: a cycle an earlier spec left launching is stopped first.
+   */
   async start(cycleId: number): Promise<LineupCommandResult> {
+    await this.stopLaunching((await this.demoShip()).id);
     const { version } = await this.snapshot(cycleId);
-    return this.ok<LineupCommandResult>(AIR_OPS, 'post', `/api/cycles/${cycleId}/start`, { basisVersion: version });
+    return this.ok<LineupCommandResult>(AIR_BOSS, 'post', `/api/cycles/${cycleId}/start`, {
+      basisVersion: version,
+      confirmOutsideWindow: true,
+    });
+  }
+
+  /** The air boss stops whichever cycle of the ship is launching, if one is. */
+  async stopLaunching(shipId: number): Promise<void> {
+    const cycles = await this.ok<CycleView[]>(OBSERVER, 'get', '/api/cycles');
+    for (const cycle of cycles.filter((candidate) => candidate.shipId === shipId && candidate.state === 'executing')) {
+      await this.ok(AIR_BOSS, 'post', `/api/cycles/${cycle.id}/stop`, { basisVersion: cycle.version });
+    }
   }
 
   async slot(cycleId: number, slotId: number): Promise<SlotView> {

@@ -93,12 +93,26 @@ export async function planCycle({ aircraft, start = false, night = false }: Plan
     const slot = result.change.patch.slots?.find((candidate) => candidate.sideNumber === planned.side);
     slotIds.set(planned.side, slot!.id);
   }
-  if (start) {
-    const current = await ok<CycleView>(await airops.get(`/api/cycles/${cycle.id}`));
-    await ok(await airops.post(`/api/cycles/${cycle.id}/start`, { data: { basisVersion: current.version } }));
-  }
+  if (start) await startLaunching(cycle.id);
   await airops.dispose();
   return { cycle, slotIds };
+}
+
+/**
+ * The air boss starts launching the cycle; one cycle per ship launches, so one an earlier test left
+ * launching is stopped first.
+ */
+export async function startLaunching(cycleId: number) {
+  const airboss = await apiAs('airboss');
+  const cycles = await ok<CycleView[]>(await airboss.get('/api/cycles'));
+  const cycle = cycles.find((candidate) => candidate.id === cycleId)!;
+  for (const other of cycles.filter(
+    (candidate) => candidate.shipId === cycle.shipId && candidate.state === 'executing',
+  )) {
+    await ok(await airboss.post(`/api/cycles/${other.id}/stop`, { data: { basisVersion: other.version } }));
+  }
+  await ok(await airboss.post(`/api/cycles/${cycleId}/start`, { data: { basisVersion: cycle.version } }));
+  await airboss.dispose();
 }
 
 export async function lineupOf(api: APIRequestContext, cycleId: number) {

@@ -69,6 +69,8 @@ const REASONS: Record<RefusalCode, string> = {
   aircraft_already_in_cycle: 'the aircraft is already in the cycle',
   aircraft_unserviceable: 'the aircraft is unserviceable',
   pilot_already_assigned: 'the pilot already has an aircraft in the cycle',
+  ship_already_launching: 'another cycle of the ship is launching',
+  outside_window: 'now is outside the launch window',
   // imports
   file_missing: 'no file was sent',
   file_too_large: 'the file is too large',

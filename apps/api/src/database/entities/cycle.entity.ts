@@ -1,5 +1,5 @@
 import type { CycleState, LandingAreaState, WeatherCase } from '@catline/contracts';
-import { Column, Entity, JoinColumn, ManyToOne, PrimaryGeneratedColumn, Unique, type Relation } from 'typeorm';
+import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, Unique, type Relation } from 'typeorm';
 import { CreatedAtColumn, InstantColumn, UpdatedAtColumn } from '../columns.js';
 import { Ship } from './ship.entity.js';
 
@@ -64,6 +64,23 @@ export class Cycle {
 
   @Column({ type: 'varchar', length: 10, default: 'planning' })
   state: CycleState;
+
+  /**
+   * The ship's id while this cycle launches, else null: its unique index lets one cycle per ship launch,
+   * whatever two starts racing on two cycles each checked (many rows may hold null).
+   */
+  @Index('uq_cycles_launching_ship', { unique: true })
+  @Column({
+    name: 'launching_ship_id',
+    type: 'int',
+    nullable: true,
+    generatedType: 'STORED',
+    asExpression: "case when `state` = 'executing' then `ship_id` end",
+    insert: false,
+    update: false,
+    select: false,
+  })
+  launchingShipId: number | null;
 
   /** Bumped by one in the transaction of every accepted change; orders the change log. */
   @Column({ default: 0 })

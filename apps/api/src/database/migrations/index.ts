@@ -5,6 +5,7 @@ import { AuditTrail1796200656653 } from './1796200656653-AuditTrail.js';
 import { SlotReverifyAndWaivers1796200677124 } from './1796200677124-SlotReverifyAndWaivers.js';
 import { DeckPositionsLandingArea1796201917830 } from './1796201917830-DeckPositionsLandingArea.js';
 import { SlotAgreedWeightAndLastStep1796203000000 } from './1796203000000-SlotAgreedWeightAndLastStep.js';
+import { LaunchingCycleOnePerShip1796213798790 } from './1796213798790-LaunchingCycleOnePerShip.js';
 
 /** Every migration in the order it runs; add a new one at the end (see DEVELOPERS.md). */
 export const migrations = [
@@ -15,4 +16,5 @@ export const migrations = [
   SlotReverifyAndWaivers1796200677124,
   DeckPositionsLandingArea1796201917830,
   SlotAgreedWeightAndLastStep1796203000000,
+  LaunchingCycleOnePerShip1796213798790,
 ];

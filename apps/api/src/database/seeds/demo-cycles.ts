@@ -7,6 +7,7 @@ import { DemoDeck, type DemoSortie } from './demo-deck.js';
 // cycle being planned, and a night cycle after it. Weights, missions and times are made up.
 
 const AIR_OPS = 'airops@catline.example';
+const AIR_BOSS = 'airboss@catline.example';
 const HANDLER = 'handler@catline.example';
 const MINUTE = 60_000;
 
@@ -130,7 +131,7 @@ async function flyEarlierCycle(deck: DemoDeck, shipId: number, planned: Date): P
   }
   await deck.markDown(cycleId, HANDLER, 'C24', 'C31');
   deck.clock.at = new Date(planned.getTime() - 2 * MINUTE);
-  await deck.start(cycleId, AIR_OPS);
+  await deck.start(cycleId, AIR_BOSS);
 
   // Each lane launches in turn; the pair gap and reset intervals are kept; D33 is suspended once.
   const events: { at: number; run: () => Promise<void> }[] = [];

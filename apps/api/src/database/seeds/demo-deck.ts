@@ -159,7 +159,7 @@ export class DemoDeck {
   }
 
   async start(cycleId: number, by: string): Promise<void> {
-    await this.cycleCommands.start(cycleId, this.actor(by), (await this.snapshot(cycleId)).version);
+    await this.cycleCommands.start(cycleId, this.actor(by), { basisVersion: (await this.snapshot(cycleId)).version });
   }
 
   /** The catapult officer of the aircraft's catapult takes the step. */

@@ -25,6 +25,7 @@ export const CHANGE_KIND_LABELS: Record<ChangeKind, string> = {
   weight_acknowledged: 'Weight acknowledged',
   conditions_changed: 'Conditions',
   cycle_started: 'Cycle started',
+  cycle_stopped: 'Launching stopped',
   cycle_closed: 'Cycle closed',
   air_plan_imported: 'Air plan imported',
   slot_added: 'Aircraft added',

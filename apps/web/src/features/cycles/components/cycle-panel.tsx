@@ -6,20 +6,19 @@ import { NoticeBanner, refusalNotice, useNotice } from '../../../components/refu
 import { RoleGate } from '../../../components/role-gate.js';
 import { errorMessage } from '../../../lib/api-error.js';
 import { useHasRole } from '../../../lib/session-store.js';
-import { useCloseCycle } from '../api/close-cycle.js';
-import { useStartCycle } from '../api/start-cycle.js';
+import { useEndCycleStep } from '../api/end-cycle-step.js';
 import { useUpdateConditions } from '../api/update-conditions.js';
 import { toConditionsRequest, valuesFromCycle } from '../cycle-form-model.js';
 import { AddSlotForm } from './add-slot-form.js';
 import { AirPlanImport } from './air-plan-import.js';
 import { CycleForm } from './cycle-form.js';
+import { LaunchingControls } from './launching-controls.js';
 
-/** One cycle: its conditions (editable by air operations), start and close, and adding aircraft. */
+/** One cycle: its conditions (editable by air operations), the air boss's start and stop, closing, and adding aircraft. */
 export function CyclePanel({ cycle }: { cycle: CycleView }) {
   const airOps = useHasRole('air_operations');
   const update = useUpdateConditions(cycle.id);
-  const start = useStartCycle(cycle.id);
-  const close = useCloseCycle(cycle.id);
+  const close = useEndCycleStep(cycle.id, 'close');
   const { notice, show, dismiss } = useNotice();
 
   return (
@@ -46,19 +45,10 @@ export function CyclePanel({ cycle }: { cycle: CycleView }) {
           <Button asChild size="sm" variant="outline">
             <RouterLink to={`/lineup?cycle=${cycle.id}`}>Open lineup</RouterLink>
           </Button>
+          <RoleGate roles={['air_boss']}>
+            <LaunchingControls cycle={cycle} onRefused={show} />
+          </RoleGate>
           <RoleGate roles={['air_operations']}>
-            {cycle.state === 'planning' && (
-              <Button
-                size="sm"
-                colorPalette="go"
-                loading={start.isPending}
-                onClick={() =>
-                  start.mutate(cycle.version, { onError: (error) => show(refusalNotice(error, 'Starting')) })
-                }
-              >
-                Start launching
-              </Button>
-            )}
             {cycle.state === 'executing' && (
               <Button
                 size="sm"

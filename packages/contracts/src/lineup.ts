@@ -291,6 +291,9 @@ export const CHANGE_KINDS = [
   'pilot_assigned',
   'aircraft_up',
   'slot_returned',
+  'hangfire',
+  'cold_shot_suspected',
+  'down_on_catapult',
 ] as const;
 export type ChangeKind = (typeof CHANGE_KINDS)[number];
 
@@ -406,6 +409,21 @@ export interface SuspendSlotRequest {
   slotVersion: number;
   /** Left out: one tap suspends, and the reason is chosen afterwards. */
   reason?: string;
+}
+
+/** The catapult fired and the aircraft did not go (hangfire), or went on a shot the crew suspect was cold. */
+export interface CatapultEventRequest {
+  slotVersion: number;
+}
+
+/** What becomes of an aircraft that went unserviceable on the catapult. */
+export const DOWN_ON_CATAPULT_OUTCOMES = ['pool', 'down'] as const;
+export type DownOnCatapultOutcome = (typeof DOWN_ON_CATAPULT_OUTCOMES)[number];
+
+/** The aircraft on the catapult went unserviceable: back to the deck pool, or down. */
+export interface DownOnCatapultRequest {
+  slotVersion: number;
+  outcome: DownOnCatapultOutcome;
 }
 
 export interface LaunchSlotRequest {

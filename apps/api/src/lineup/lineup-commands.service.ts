@@ -8,7 +8,6 @@ import type {
   SlotStatus,
 } from '@catline/contracts';
 import { Injectable } from '@nestjs/common';
-import { Catapult } from '../database/entities/catapult.entity.js';
 import { BasisChecks } from '../cycle-changes/basis-checks.service.js';
 import { Clock } from '../cycle-changes/clock.js';
 import { CycleChangeService } from '../cycle-changes/cycle-change.service.js';
@@ -17,6 +16,7 @@ import { isHeldSpare, laneSlots } from '../cycle-changes/lineup-snapshot.builder
 import type { LineupState } from '../cycle-changes/lineup-state.js';
 import { LineupException } from '../cycle-changes/lineup.exception.js';
 import { placeSlots, updateSlot } from '../cycle-changes/slot-writes.js';
+import { writeCatapultStatus } from './catapult-stop.js';
 import { movePilotToSpare } from './spare-takeover.js';
 
 const sameOrder = (a: readonly Slot[], b: readonly Slot[]) =>
@@ -180,14 +180,7 @@ export class LineupCommandsService {
       if (request.status === catapult.status) {
         throw new LineupException('no_change', `Cat ${catapult.number} is already ${catapult.status}.`);
       }
-      const result = await manager
-        .createQueryBuilder()
-        .update(Catapult)
-        .set({ status: request.status })
-        .where('id = :id AND status = :seen', { id: catapult.id, seen: request.basisStatus })
-        .execute();
-      if (result.affected !== 1) throw new Error(`Cat ${catapult.number} changed status while its cycle was locked`);
-      catapult.status = request.status;
+      await writeCatapultStatus(manager, catapult, request.status);
       const reason = request.reason ? `: ${request.reason}` : '';
       return {
         summary: `Cat ${catapult.number} ${request.status}${reason}`,

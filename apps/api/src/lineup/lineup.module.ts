@@ -1,6 +1,8 @@
 import { Module } from '@nestjs/common';
 import { CycleChangesModule } from '../cycle-changes/cycle-changes.module.js';
 import { CyclesModule } from '../cycles/cycles.module.js';
+import { CatapultEventsController } from './catapult-events.controller.js';
+import { CatapultEventsService } from './catapult-events.service.js';
 import { LineupCommandsService } from './lineup-commands.service.js';
 import { LineupController } from './lineup.controller.js';
 import { PilotAssignmentService } from './pilot-assignment.service.js';
@@ -14,9 +16,10 @@ import { WaiversService } from './waivers.service.js';
 
 @Module({
   imports: [CycleChangesModule, CyclesModule],
-  controllers: [LineupController, SparesController],
+  controllers: [LineupController, SparesController, CatapultEventsController],
   providers: [
     LineupCommandsService,
+    CatapultEventsService,
     ReadinessService,
     SuggestionPool,
     SuggestionService,

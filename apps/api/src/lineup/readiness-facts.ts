@@ -40,7 +40,7 @@ export function readinessActor(user: AuthenticatedUser, slot: Slot): ReadinessAc
 }
 
 /** A refusal of the machine in a sentence for the deck crew. */
-function refusal(state: LineupState, slot: Slot, code: string, to: string): LineupException {
+function refusal(state: LineupState, slot: Slot, code: string, to: string, wrongStep?: string): LineupException {
   const side = slot.aircraft.sideNumber;
   const steps = shipReadinessSteps(state);
   switch (code) {
@@ -70,6 +70,7 @@ function refusal(state: LineupState, slot: Slot, code: string, to: string): Line
     case 'undo_expired':
       return new LineupException('undo_expired', `The last step of ${side} was taken more than 10 seconds ago.`);
     default: {
+      if (wrongStep) return new LineupException('wrong_step', wrongStep);
       const status = slot.status as ReadinessStatus;
       const next = status === 'suspended' ? 'resume' : nextOf(steps, status);
       return new LineupException(
@@ -89,13 +90,17 @@ function nextOf(steps: readonly ReadinessStep[], status: ReadinessStatus): strin
   return steps[at + 1] ?? 'launch';
 }
 
-/** The machine's answer for this slot, or its refusal as an exception. Launch refusals by gate are the caller's. */
+/**
+ * The machine's answer for this slot, or its refusal as an exception. Launch refusals by gate are the
+ * caller's; `wrongStep` words a wrong-step refusal of a command that is not a step.
+ */
 export function transition(
   state: LineupState,
   slot: Slot,
   user: AuthenticatedUser,
   command: ReadinessCommand,
   asked: string,
+  wrongStep?: string,
 ): SlotReadiness {
   const result = readinessTransition(
     shipReadinessSteps(state),
@@ -103,6 +108,6 @@ export function transition(
     readinessActor(user, slot),
     command,
   );
-  if (!result.ok) throw refusal(state, slot, result.code, asked);
+  if (!result.ok) throw refusal(state, slot, result.code, asked, wrongStep);
   return result.state;
 }

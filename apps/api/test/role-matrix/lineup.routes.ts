@@ -154,6 +154,42 @@ export const lineupRoutes: MatrixRoute[] = [
   },
   {
     method: 'POST',
+    path: '/api/cycles/{cycleId}/lineup/slots/{slotId}/hangfire',
+    allowed: CATAPULT_ROLES,
+    notOwner: OTHER_CATAPULT,
+    example: async (context) => {
+      if (!context.allowed) return refused;
+      const { cycleId, slot } = await freshSlot(context, 'tensioned');
+      return { params: { cycleId, slotId: slot.id }, body: { slotVersion: slot.version } };
+    },
+  },
+  {
+    method: 'POST',
+    path: '/api/cycles/{cycleId}/lineup/slots/{slotId}/cold-shot',
+    allowed: CATAPULT_ROLES,
+    notOwner: OTHER_CATAPULT,
+    // A cold shot takes the ship's shared catapult down: the permitted call reports one on an aircraft that
+    // has not launched, refused past the role check (409 wrong_step), which changes nothing.
+    refusals: [409],
+    example: async (context) => {
+      if (!context.allowed) return refused;
+      const { cycleId, slot } = await freshSlot(context, 'taxiing');
+      return { params: { cycleId, slotId: slot.id }, body: { slotVersion: slot.version } };
+    },
+  },
+  {
+    method: 'POST',
+    path: '/api/cycles/{cycleId}/lineup/slots/{slotId}/down-on-catapult',
+    allowed: CATAPULT_ROLES,
+    notOwner: OTHER_CATAPULT,
+    example: async (context) => {
+      if (!context.allowed) return refused;
+      const { cycleId, slot } = await freshSlot(context, 'tensioned');
+      return { params: { cycleId, slotId: slot.id }, body: { slotVersion: slot.version, outcome: 'pool' } };
+    },
+  },
+  {
+    method: 'POST',
     path: '/api/cycles/{cycleId}/lineup/slots/{slotId}/waivers',
     allowed: ['air_boss'],
     // The fresh aircraft's gates are all hard or open: the permitted call is refused past the role check

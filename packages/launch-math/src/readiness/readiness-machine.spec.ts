@@ -141,6 +141,19 @@ describe('readinessTransition', () => {
     });
   });
 
+  it('takes a suspected cold shot only on a launched aircraft, and leaves it launched', () => {
+    const launched: SlotReadiness = { ...stepTo('pilot_ready'), status: 'launched', lastStep: null };
+    expect(readinessTransition(steps, launched, officer, { kind: 'cold_shot' })).toEqual({ ok: true, state: launched });
+    expect(readinessTransition(steps, stepTo('pilot_ready'), officer, { kind: 'cold_shot' })).toEqual({
+      ok: false,
+      code: 'wrong_step',
+    });
+    expect(readinessTransition(steps, launched, { ...officer, role: 'pilot' }, { kind: 'cold_shot' })).toEqual({
+      ok: false,
+      code: 'forbidden_role',
+    });
+  });
+
   it('refuses a launch with the first gate that refuses, hard or soft', () => {
     const ready = stepTo('pilot_ready');
     expect(
@@ -220,6 +233,7 @@ const commandArb: fc.Arbitrary<Drawn> = fc.oneof(
     }),
   },
   fc.constant({ kind: 'hangfire' as const }),
+  fc.constant({ kind: 'cold_shot' as const }),
   fc.record({
     kind: fc.constant('down_on_catapult' as const),
     outcome: fc.constantFrom('pool' as const, 'down' as const),
@@ -310,6 +324,8 @@ describe('readiness model run', () => {
             expect(before.status).toBe(steps[steps.length - 1]);
             expect(place(step.slot)).toBe(0);
           }
+          // A suspected cold shot is a report: the aircraft has gone and stays gone.
+          if (command.kind === 'cold_shot') expect(after.status).toBe('launched');
           if (command.kind === 'advance' && after.status !== 'taxiing') expect(place(step.slot)).toBe(0);
           lane[step.slot] = { ...after, out: command.kind === 'down_on_catapult' && after.status === 'planned' };
           for (const slot of lane) {

@@ -52,6 +52,8 @@ export type ReadinessCommand =
   | { readonly kind: 'launch'; readonly refusals: readonly string[] }
   /** The catapult fired and the aircraft did not go. */
   | { readonly kind: 'hangfire' }
+  /** The aircraft went, but the crew suspect the shot was short of end speed: a report on a launched aircraft. */
+  | { readonly kind: 'cold_shot' }
   /** The aircraft went unserviceable on the catapult: back to the deck pool, or down for good. */
   | { readonly kind: 'down_on_catapult'; readonly outcome: 'pool' | 'down' };
 
@@ -192,6 +194,8 @@ export function readinessTransition(
       return slot.status === 'tensioned' || isPast(slot.status, 'tensioned')
         ? { ok: true, state: { ...slot, status: 'suspended', lastStep: null } }
         : refuse('wrong_step');
+    case 'cold_shot':
+      return slot.status === 'launched' ? { ok: true, state: slot } : refuse('wrong_step');
     case 'down_on_catapult':
       return slot.status === 'suspended' || (inSteps(steps, slot.status) && slot.status !== 'taxiing')
         ? {

@@ -46,3 +46,19 @@ export function launchBlockers(slot: SlotView, steps: readonly ReadinessStep[]):
   if (slot.status !== last) blockers.push(`Not yet at “${STEP_LABELS[last]}”.`);
   return blockers;
 }
+
+const stepOrder = (status: string) => (READINESS_STEPS as readonly string[]).indexOf(status);
+
+/** A hangfire can only follow a shot fired, so only once tension is taken. */
+export const canReportHangfire = (slot: SlotView) => stepOrder(slot.status) >= stepOrder('tensioned');
+
+/** Hooked up or further, or suspended there: the aircraft is on the catapult and can go down on it. */
+export const canGoDownOnCatapult = (slot: SlotView) =>
+  slot.status === 'suspended' || stepOrder(slot.status) > stepOrder('taxiing');
+
+/** The aircraft launched last from my catapult: the one a suspected cold shot is reported on. */
+export function lastLaunched(snapshot: LineupSnapshot, catapultId: number): SlotView | undefined {
+  return snapshot.slots
+    .filter((slot) => slot.catapultId === catapultId && slot.launchedAt !== null)
+    .sort((a, b) => Date.parse(b.launchedAt!) - Date.parse(a.launchedAt!))[0];
+}

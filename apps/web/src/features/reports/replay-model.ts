@@ -36,6 +36,9 @@ export const CHANGE_KIND_LABELS: Record<ChangeKind, string> = {
   pilot_assigned: 'Pilot',
   aircraft_up: 'Up again',
   slot_returned: 'Back to the pool',
+  hangfire: 'Hangfire',
+  cold_shot_suspected: 'Suspected cold shot',
+  down_on_catapult: 'Down on the catapult',
 };
 
 /** Slots in no lane and not in the deck pool: down or scratched aircraft. */

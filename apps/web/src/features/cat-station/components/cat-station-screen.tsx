@@ -16,11 +16,15 @@ import { useCycleTheme } from '../../../theme/use-cycle-theme.js';
 import { useAdvanceSlot } from '../api/advance-slot.js';
 import { useLaunchSlot } from '../api/launch-slot.js';
 import { useSuspendSlot } from '../api/suspend-slot.js';
-import { STEP_LABELS, catapultQueue } from '../cat-station-model.js';
+import { STEP_LABELS, catapultQueue, lastLaunched } from '../cat-station-model.js';
+import { useReportColdShot } from '../api/report-cold-shot.js';
+import { useReportDownOnCatapult } from '../api/report-down-on-catapult.js';
+import { useReportHangfire } from '../api/report-hangfire.js';
 import { useUndoStep } from '../api/undo-step.js';
 import { useUndoWindow } from '../hooks/use-undo-window.js';
 import { useLaunchIntent } from '../hooks/use-launch-intent.js';
 import { AircraftFigures } from './aircraft-figures.js';
+import { CatapultEvents } from './catapult-events.js';
 import { LaunchPanel } from './launch-panel.js';
 import { NextUp } from './next-up.js';
 import { ReadinessSteps } from './readiness-steps.js';
@@ -35,9 +39,14 @@ function Station({ snapshot, catapultId }: { snapshot: LineupSnapshot; catapultI
   const suspend = useSuspendSlot(cycleId);
   const launch = useLaunchSlot(cycleId);
   const undo = useUndoStep(cycleId);
+  const hangfire = useReportHangfire(cycleId);
+  const downOnCatapult = useReportDownOnCatapult(cycleId);
+  const coldShot = useReportColdShot(cycleId);
   const undoWindow = useUndoWindow();
   const launchKey = useLaunchIntent(current?.id);
-  const anyPending = advance.isPending || suspend.isPending || launch.isPending || undo.isPending;
+  const anyPending = [advance, suspend, launch, undo, hangfire, downOnCatapult, coldShot].some(
+    (command) => command.isPending,
+  );
 
   if (!queue) {
     return (
@@ -48,6 +57,26 @@ function Station({ snapshot, catapultId }: { snapshot: LineupSnapshot; catapultI
   }
   const { lane, next } = queue;
   const refused = (action: string) => (error: unknown) => show(refusalNotice(error, action));
+  const events = (
+    <CatapultEvents
+      current={current}
+      lastLaunched={lastLaunched(snapshot, catapultId)}
+      catapultNumber={lane.number}
+      pending={anyPending}
+      onHangfire={(slot) =>
+        hangfire.mutate({ slotId: slot.id, slotVersion: slot.version }, { onError: refused('Hangfire') })
+      }
+      onDownOnCatapult={(slot, outcome) =>
+        downOnCatapult.mutate(
+          { slotId: slot.id, slotVersion: slot.version, outcome },
+          { onError: refused('Down on the catapult') },
+        )
+      }
+      onColdShot={(slot) =>
+        coldShot.mutate({ slotId: slot.id, slotVersion: slot.version }, { onError: refused('Cold shot') })
+      }
+    />
+  );
 
   return (
     <Stack gap="3">
@@ -61,9 +90,12 @@ function Station({ snapshot, catapultId }: { snapshot: LineupSnapshot; catapultI
         }
       />
       {!current ? (
-        <EmptyState title={`No aircraft waiting on cat ${lane.number}`}>
-          The handler has not put anyone in this lane, or every aircraft in it has gone.
-        </EmptyState>
+        <>
+          <EmptyState title={`No aircraft waiting on cat ${lane.number}`}>
+            The handler has not put anyone in this lane, or every aircraft in it has gone.
+          </EmptyState>
+          {events}
+        </>
       ) : (
         <Grid
           templateColumns={{ base: 'minmax(0, 1fr)', lg: 'minmax(0, 3fr) minmax(0, 2fr)' }}
@@ -143,6 +175,7 @@ function Station({ snapshot, catapultId }: { snapshot: LineupSnapshot; catapultI
                 );
               }}
             />
+            {events}
             <NextUp
               slots={next}
               pending={anyPending}

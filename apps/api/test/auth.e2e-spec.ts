@@ -108,9 +108,10 @@ describe('auth', () => {
 
     it('refuses an expired token', async () => {
       const { id } = (await me(adminToken)).body;
+      const { sid } = new JwtService().decode<{ sid: string }>(adminToken);
       const now = Math.floor(Date.now() / 1000);
       const expired = new JwtService().sign(
-        { sub: id, role: 'admin', tv: 0, iat: now - 1000, exp: now - 100 },
+        { sub: id, role: 'admin', tv: 0, sid, iat: now - 1000, exp: now - 100 },
         { secret, algorithm: 'HS256' },
       );
       const response = await me(expired);
@@ -120,8 +121,9 @@ describe('auth', () => {
 
     it('refuses a token signed with another key', async () => {
       const { id } = (await me(adminToken)).body;
+      const { sid } = new JwtService().decode<{ sid: string }>(adminToken);
       const forged = new JwtService().sign(
-        { sub: id, role: 'admin', tv: 0 },
+        { sub: id, role: 'admin', tv: 0, sid },
         { secret: 'another-key-of-enough-length', algorithm: 'HS256', expiresIn: 600 },
       );
       expect((await me(forged)).status).toBe(401);
@@ -129,9 +131,10 @@ describe('auth', () => {
 
     it('refuses an unsigned token (alg none)', async () => {
       const { id } = (await me(adminToken)).body;
+      const { sid } = new JwtService().decode<{ sid: string }>(adminToken);
       const encode = (part: object) => Buffer.from(JSON.stringify(part)).toString('base64url');
       const now = Math.floor(Date.now() / 1000);
-      const unsigned = `${encode({ alg: 'none', typ: 'JWT' })}.${encode({ sub: id, role: 'admin', tv: 0, iat: now, exp: now + 600 })}.`;
+      const unsigned = `${encode({ alg: 'none', typ: 'JWT' })}.${encode({ sub: id, role: 'admin', tv: 0, sid, iat: now, exp: now + 600 })}.`;
       expect((await me(unsigned)).status).toBe(401);
     });
 

@@ -204,8 +204,10 @@ describe('live lineup over socket.io', () => {
 
     async function tokenWith(claims: { exp: number }) {
       const jwt = app.get(JwtService);
-      const { sub, role, tv } = jwt.decode<{ sub: number; role: string; tv: number }>(await deck.token(OBSERVER));
-      return jwt.signAsync({ sub, role, tv, ...claims });
+      const { sub, role, tv, sid } = jwt.decode<{ sub: number; role: string; tv: number; sid: string }>(
+        await deck.token(OBSERVER),
+      );
+      return jwt.signAsync({ sub, role, tv, sid, ...claims });
     }
 
     it('without a token', async () => {

@@ -123,28 +123,28 @@ describe('security', () => {
   // HTTP refusals of these tokens are in auth.e2e-spec.ts; these are the same tokens at the socket handshake.
   describe('socket handshake refuses', () => {
     const claimsOf = (token: string) =>
-      app.get(JwtService).decode<{ sub: number; role: string; tv: number; exp: number }>(token);
+      app.get(JwtService).decode<{ sub: number; role: string; tv: number; sid: string; exp: number }>(token);
 
     it('a token signed with another key', async () => {
-      const { sub, role, tv } = claimsOf(tokens.get('observer')!);
+      const { sub, role, tv, sid } = claimsOf(tokens.get('observer')!);
       const forged = new JwtService().sign(
-        { sub, role, tv },
+        { sub, role, tv, sid },
         { secret: 'another-key-of-at-least-32-chars!!', algorithm: 'HS256', expiresIn: 600 },
       );
       expect(await refusalCode(forged)).toBe('session_invalid');
     });
 
     it('an unsigned token (alg none), even claiming to be the admin', async () => {
-      const { sub, tv, exp } = claimsOf(tokens.get('admin')!);
+      const { sub, tv, sid, exp } = claimsOf(tokens.get('admin')!);
       const encode = (part: object) => Buffer.from(JSON.stringify(part)).toString('base64url');
-      const unsigned = `${encode({ alg: 'none', typ: 'JWT' })}.${encode({ sub, role: 'admin', tv, exp })}.`;
+      const unsigned = `${encode({ alg: 'none', typ: 'JWT' })}.${encode({ sub, role: 'admin', tv, sid, exp })}.`;
       expect(await refusalCode(unsigned)).toBe('session_invalid');
     });
 
     it('an expired token', async () => {
-      const { sub, role, tv } = claimsOf(tokens.get('observer')!);
+      const { sub, role, tv, sid } = claimsOf(tokens.get('observer')!);
       const now = Math.floor(Date.now() / 1000);
-      const expired = await app.get(JwtService).signAsync({ sub, role, tv, iat: now - 1_000, exp: now - 60 });
+      const expired = await app.get(JwtService).signAsync({ sub, role, tv, sid, iat: now - 1_000, exp: now - 60 });
       expect(await refusalCode(expired)).toBe('session_invalid');
     });
 

@@ -8,6 +8,7 @@ import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { Public } from '../common/decorators/public.decorator.js';
 import { type Environment, webOrigins } from '../config/environment.js';
 import { AuthException } from './auth.exception.js';
+import type { SignedInRequest } from './auth.guard.js';
 import { AuthService, type SignedIn } from './auth.service.js';
 import { ChangePasswordDto } from './dto/change-password.dto.js';
 import { LoginDto } from './dto/login.dto.js';
@@ -78,10 +79,10 @@ export class AuthController {
   @HttpCode(HttpStatus.NO_CONTENT)
   async logout(
     @CurrentUser() user: AuthenticatedUser,
-    @Req() request: Request,
+    @Req() request: SignedInRequest,
     @Res({ passthrough: true }) response: Response,
   ): Promise<void> {
-    await this.auth.logout(readRefreshCookie(request), user);
+    await this.auth.logout(request.sessionId!, readRefreshCookie(request), user);
     clearRefreshCookie(request, response);
   }
 

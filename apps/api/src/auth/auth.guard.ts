@@ -9,6 +9,9 @@ import { ROLES_KEY } from '../common/decorators/roles.decorator.js';
 import { AuthException } from './auth.exception.js';
 import { TokenVerifier } from './token-verifier.service.js';
 
+/** An HTTP request once the guard has let it through: the person and the session of their token. */
+export type SignedInRequest = Request & { user?: AuthenticatedUser; sessionId?: string };
+
 export function bearerToken(header: string | undefined): string | undefined {
   const match = /^Bearer\s+(\S+)$/i.exec(header ?? '');
   return match?.[1];
@@ -16,7 +19,7 @@ export function bearerToken(header: string | undefined): string | undefined {
 
 /**
  * Every HTTP route needs a valid access token unless marked @Public(), and a role from @Roles() when
- * it has one. Socket events are checked by the gateway itself (its handshake uses TokenVerifier).
+ * it has one. Socket events are checked by the gateway itself (its handshake and guard use TokenVerifier).
  */
 @Injectable()
 export class AuthGuard implements CanActivate {
@@ -30,11 +33,12 @@ export class AuthGuard implements CanActivate {
     const targets = [context.getHandler(), context.getClass()];
     if (this.reflector.getAllAndOverride<boolean>(IS_PUBLIC, targets)) return true;
 
-    const request = context.switchToHttp().getRequest<Request & { user?: AuthenticatedUser }>();
+    const request = context.switchToHttp().getRequest<SignedInRequest>();
     const token = bearerToken(request.headers.authorization);
     if (!token) throw new AuthException('unauthenticated', 'Sign in to continue.');
-    const user = await this.tokens.verify(token);
+    const { user, claims } = await this.tokens.verifySession(token);
     request.user = user;
+    request.sessionId = claims.sid;
     const requestState = requestContext();
     if (requestState) requestState.actor = user;
 

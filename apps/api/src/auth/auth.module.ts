@@ -3,9 +3,7 @@ import { Module } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { APP_GUARD } from '@nestjs/core';
 import { JwtModule } from '@nestjs/jwt';
-import { TypeOrmModule } from '@nestjs/typeorm';
 import type { Environment } from '../config/environment.js';
-import { User } from '../database/entities/user.entity.js';
 import { ACCESS_TOKEN_ALGORITHM } from './access-token.js';
 import { AttemptLimits } from './attempt-limits.service.js';
 import { AuthController } from './auth.controller.js';
@@ -13,11 +11,11 @@ import { AuthGuard } from './auth.guard.js';
 import { AuthService } from './auth.service.js';
 import { PersonLookup } from './person-lookup.service.js';
 import { RefreshTokens } from './refresh-tokens.service.js';
+import { SessionEnds } from './session-ends.service.js';
 import { TokenVerifier } from './token-verifier.service.js';
 
 @Module({
   imports: [
-    TypeOrmModule.forFeature([User]),
     JwtModule.registerAsync({
       inject: [ConfigService],
       useFactory: (config: ConfigService<Environment, true>) => ({
@@ -34,9 +32,10 @@ import { TokenVerifier } from './token-verifier.service.js';
     AttemptLimits,
     PersonLookup,
     RefreshTokens,
+    SessionEnds,
     TokenVerifier,
     { provide: APP_GUARD, useClass: AuthGuard },
   ],
-  exports: [AttemptLimits, TokenVerifier, RefreshTokens],
+  exports: [AttemptLimits, TokenVerifier, RefreshTokens, SessionEnds],
 })
 export class AuthModule {}

@@ -1,4 +1,4 @@
-import { randomBytes } from 'node:crypto';
+import { randomBytes, randomUUID } from 'node:crypto';
 import type { SessionResponse } from '@catline/contracts';
 import { Injectable, Logger } from '@nestjs/common';
 import { JwtService } from '@nestjs/jwt';
@@ -13,6 +13,7 @@ import { AttemptLimits } from './attempt-limits.service.js';
 import { emailIdentity } from './normalize-email.js';
 import { hashPassword, verifyPassword } from './password.js';
 import { type IssuedRefreshToken, RefreshTokens } from './refresh-tokens.service.js';
+import { SessionEnds } from './session-ends.service.js';
 import { toAuthenticatedUser, toSessionUser } from './session.mapper.js';
 
 export interface SignedIn {
@@ -33,6 +34,7 @@ export class AuthService {
     private readonly refreshTokens: RefreshTokens,
     private readonly attempts: AttemptLimits,
     private readonly audit: AuditTrail,
+    private readonly sessionEnds: SessionEnds,
     @InjectDataSource() private readonly dataSource: DataSource,
   ) {}
 
@@ -59,19 +61,28 @@ export class AuthService {
       actor: { id: user.id, email: user.email, role: user.role },
     });
     this.logger.log(`User ${user.id} signed in`);
-    return { session: await this.sessionFor(user), refresh: await this.refreshTokens.issue(user.id) };
+    const sessionId = randomUUID();
+    const session = await this.sessionFor(user, sessionId);
+    return { session, refresh: await this.refreshTokens.issue(user.id, undefined, sessionId) };
   }
 
   async refresh(token: string | undefined): Promise<SignedIn> {
     const result = token ? await this.refreshTokens.rotate(token) : undefined;
     if (result?.outcome !== 'rotated') {
+      if (result?.reason === 'reused') this.sessionEnds.tell({ personId: result.userId });
       throw new AuthException('session_ended', 'Your session has ended. Sign in again.');
     }
-    return { session: await this.sessionFor(result.user), refresh: result.next };
+    return { session: await this.sessionFor(result.user, result.next.sessionId), refresh: result.next };
   }
 
-  async logout(token: string | undefined, user: AuthenticatedUser): Promise<void> {
-    if (token) await this.refreshTokens.revoke(token, user.id);
+  /** Ends the access token's session, and the refresh cookie's when that is another one (a later sign-in in this browser). */
+  async logout(sessionId: string, token: string | undefined, user: AuthenticatedUser): Promise<void> {
+    const cookieSession = token ? await this.refreshTokens.sessionOf(token, user.id) : undefined;
+    for (const ended of new Set([sessionId, cookieSession])) {
+      if (ended === undefined) continue;
+      await this.refreshTokens.endSession(ended, user.id);
+      this.sessionEnds.tell({ sessionId: ended });
+    }
   }
 
   /** Sets a new password and signs out every other session; returns this device's new refresh token. */
@@ -88,7 +99,7 @@ export class AuthService {
       throw new AuthException('password_unchanged', 'The new password must differ from the current one.');
     }
     const passwordHash = await hashPassword(newPassword);
-    return this.dataSource.transaction(async (manager) => {
+    const refresh = await this.dataSource.transaction(async (manager) => {
       await manager.update(User, { id: user.id }, { passwordHash, tokenVersion: () => 'token_version + 1' });
       await this.refreshTokens.revokeAllFor(user.id, manager);
       await this.audit.record(manager, {
@@ -99,10 +110,12 @@ export class AuthService {
       this.logger.log(`User ${user.id} changed their password; other sessions ended`);
       return this.refreshTokens.issue(user.id, manager);
     });
+    this.sessionEnds.tell({ personId: user.id });
+    return refresh;
   }
 
-  private async sessionFor(user: User): Promise<SessionResponse> {
-    const claims: AccessTokenClaims = { sub: user.id, role: user.role, tv: user.tokenVersion };
+  private async sessionFor(user: User, sessionId: string): Promise<SessionResponse> {
+    const claims: AccessTokenClaims = { sub: user.id, role: user.role, tv: user.tokenVersion, sid: sessionId };
     const accessToken = await this.jwt.signAsync(claims, {
       algorithm: ACCESS_TOKEN_ALGORITHM,
       expiresIn: ACCESS_TOKEN_LIFETIME_S,

@@ -1,5 +1,5 @@
 import type { ConfigService } from '@nestjs/config';
-import type { DataSource, EntitySubscriberInterface, Repository } from 'typeorm';
+import type { DataSource, EntitySubscriberInterface } from 'typeorm';
 import type { Environment } from '../config/environment.js';
 import { User } from '../database/entities/user.entity.js';
 import { PersonLookup } from './person-lookup.service.js';
@@ -7,15 +7,15 @@ import { PersonLookup } from './person-lookup.service.js';
 function lookup(redisUrl?: string) {
   const rows = new Map([[3, Object.assign(new User(), { id: 3, name: 'Ines Calloway', active: true })]]);
   const reads: number[] = [];
-  const users = {
-    findOneBy: async ({ id }: { id: number }) => {
+  const manager = {
+    findOneBy: async (_entity: unknown, { id }: { id: number }) => {
       reads.push(id);
       return rows.get(id) ?? null;
     },
-  } as unknown as Repository<User>;
-  const dataSource = { subscribers: [] as EntitySubscriberInterface[] };
+  };
+  const dataSource = { subscribers: [] as EntitySubscriberInterface[], manager };
   const config = { get: () => redisUrl } as unknown as ConfigService<Environment, true>;
-  const people = new PersonLookup(users, dataSource as unknown as DataSource, config);
+  const people = new PersonLookup(dataSource as unknown as DataSource, config);
   const personWritten = () =>
     dataSource.subscribers.forEach((subscriber) =>
       subscriber.afterUpdate?.({ metadata: { target: User }, queryRunner: { isTransactionActive: false } } as never),

@@ -1,43 +1,53 @@
 import { Injectable } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
-import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
-import type { DataSource, Repository } from 'typeorm';
+import { InjectDataSource } from '@nestjs/typeorm';
+import type { DataSource } from 'typeorm';
 import { type Environment, runsClustered } from '../config/environment.js';
-import { EntityWriteCounter } from '../database/entity-write-counter.js';
+import { RefreshToken } from '../database/entities/refresh-token.entity.js';
 import { User } from '../database/entities/user.entity.js';
+import { RowsCache } from '../database/rows-cache.js';
 
 /**
- * The person behind each access token, read once and then kept in memory until any person is written
- * (removed, deactivated, tokens withdrawn, renamed): every request checks its token against the person,
- * and a read per request was a tenth of the cost of a lineup command. The writes are counted from
- * TypeORM's entity events of this process, so with several API processes (REDIS_URL) every check reads.
+ * What every request and socket event checks its token against: the person (active, token version) and
+ * their session (a live refresh token row). A read of each per request was a tenth of the cost of a lineup
+ * command, so both are kept in memory until this process writes a person or a refresh token (sign-in,
+ * refresh, logout, removal, role or password change): a session ended here is refused on the very next
+ * request, with no window. The person's token version ends all their sessions in one write; the session row
+ * is what lets logout end one session alone. With several API processes (REDIS_URL) every check reads, as
+ * another process's writes are not seen here.
  */
 @Injectable()
 export class PersonLookup {
-  private readonly known = new Map<number, User>();
-  private readonly personWrites?: EntityWriteCounter;
-  private knownAt = 0;
+  private readonly people: RowsCache<number, User | null>;
+  private readonly sessions: RowsCache<string, Date | null>;
 
-  constructor(
-    @InjectRepository(User) private readonly users: Repository<User>,
-    @InjectDataSource() dataSource: DataSource,
-    config: ConfigService<Environment, true>,
-  ) {
-    if (!runsClustered({ REDIS_URL: config.get('REDIS_URL', { infer: true }) }))
-      this.personWrites = new EntityWriteCounter(dataSource, new Set([User]));
+  constructor(@InjectDataSource() dataSource: DataSource, config: ConfigService<Environment, true>) {
+    const enabled = !runsClustered({ REDIS_URL: config.get('REDIS_URL', { infer: true }) });
+    this.people = new RowsCache(dataSource, new Set([User]), (id) => dataSource.manager.findOneBy(User, { id }), {
+      enabled,
+    });
+    this.sessions = new RowsCache(
+      dataSource,
+      new Set([RefreshToken]),
+      async (sessionId) => {
+        const live = await dataSource.manager
+          .createQueryBuilder(RefreshToken, 'token')
+          .select('MAX(token.expiresAt)', 'expiresAt')
+          .where('token.sessionId = :sessionId AND token.revokedAt IS NULL', { sessionId })
+          .getRawOne<{ expiresAt: Date | string | null }>();
+        return live?.expiresAt ? new Date(live.expiresAt) : null;
+      },
+      { enabled },
+    );
   }
 
-  async byId(id: number): Promise<User | null> {
-    if (!this.personWrites) return this.users.findOneBy({ id });
-    const writes = this.personWrites.count;
-    if (writes !== this.knownAt) {
-      this.known.clear();
-      this.knownAt = writes;
-    }
-    const known = this.known.get(id);
-    if (known) return known;
-    const person = await this.users.findOneBy({ id });
-    if (person && this.personWrites.count === writes) this.known.set(id, person);
-    return person;
+  byId(id: number): Promise<User | null> {
+    return this.people.get(id);
+  }
+
+  /** Whether the session still has a live refresh token (not ended by logout, removal or a password change). */
+  async sessionLive(sessionId: string): Promise<boolean> {
+    const expiresAt = await this.sessions.get(sessionId);
+    return expiresAt !== null && expiresAt.getTime() > Date.now();
   }
 }

@@ -1,4 +1,4 @@
-import { createHash, randomBytes } from 'node:crypto';
+import { createHash, randomBytes, randomUUID } from 'node:crypto';
 import { Injectable, Logger } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, type EntityManager, LessThan } from 'typeorm';
@@ -9,12 +9,14 @@ export const REFRESH_TOKEN_LIFETIME_MS = 12 * 60 * 60 * 1000;
 
 export interface IssuedRefreshToken {
   token: string;
+  sessionId: string;
   expiresAt: Date;
 }
 
 export type RotationResult =
   | { outcome: 'rotated'; user: User; next: IssuedRefreshToken }
-  | { outcome: 'refused'; reason: 'unknown' | 'expired' | 'inactive' | 'reused' };
+  | { outcome: 'refused'; reason: 'unknown' | 'expired' | 'inactive' }
+  | { outcome: 'refused'; reason: 'reused'; userId: number };
 
 /** Only a token's SHA-256 is stored, so a copy of the table cannot be replayed. */
 function digest(token: string): string {
@@ -33,12 +35,17 @@ export class RefreshTokens {
 
   constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
 
-  async issue(userId: number, manager: EntityManager = this.dataSource.manager): Promise<IssuedRefreshToken> {
+  /** A token of a new session, or the next token of `sessionId`. */
+  async issue(
+    userId: number,
+    manager: EntityManager = this.dataSource.manager,
+    sessionId: string = randomUUID(),
+  ): Promise<IssuedRefreshToken> {
     await manager.delete(RefreshToken, { userId, expiresAt: LessThan(new Date()) });
     const token = randomBytes(32).toString('base64url');
     const expiresAt = new Date(Date.now() + REFRESH_TOKEN_LIFETIME_MS);
-    await manager.insert(RefreshToken, { userId, tokenHash: digest(token), expiresAt, revokedAt: null });
-    return { token, expiresAt };
+    await manager.insert(RefreshToken, { userId, sessionId, tokenHash: digest(token), expiresAt, revokedAt: null });
+    return { token, sessionId, expiresAt };
   }
 
   /** Swaps a live token for a new one in one transaction; the row lock makes two racing uses see each other. */
@@ -53,19 +60,24 @@ export class RefreshTokens {
         this.logger.warn(`Replaced refresh token of user ${stored.userId} used again; ending all their sessions`);
         await this.revokeAllFor(stored.userId, manager);
         await manager.increment(User, { id: stored.userId }, 'tokenVersion', 1);
-        return { outcome: 'refused', reason: 'reused' };
+        return { outcome: 'refused', reason: 'reused', userId: stored.userId };
       }
       if (stored.expiresAt.getTime() <= Date.now()) return { outcome: 'refused', reason: 'expired' };
       const user = await manager.findOneBy(User, { id: stored.userId });
       if (!user?.active) return { outcome: 'refused', reason: 'inactive' };
       await manager.update(RefreshToken, { id: stored.id }, { revokedAt: new Date() });
-      return { outcome: 'rotated', user, next: await this.issue(user.id, manager) };
+      return { outcome: 'rotated', user, next: await this.issue(user.id, manager, stored.sessionId) };
     });
   }
 
-  /** Ends one session; a token of someone else or an unknown one changes nothing. */
-  async revoke(token: string, userId: number): Promise<void> {
-    await this.dataSource.manager.delete(RefreshToken, { tokenHash: digest(token), userId });
+  /** The session a token of the person belongs to (undefined for someone else's or an unknown token). */
+  async sessionOf(token: string, userId: number): Promise<string | undefined> {
+    return (await this.dataSource.manager.findOneBy(RefreshToken, { tokenHash: digest(token), userId }))?.sessionId;
+  }
+
+  /** Ends one session of the person: every token of it goes, so none can be refreshed or count as reuse. */
+  async endSession(sessionId: string, userId: number): Promise<void> {
+    await this.dataSource.manager.delete(RefreshToken, { sessionId, userId });
   }
 
   async revokeAllFor(userId: number, manager: EntityManager = this.dataSource.manager): Promise<void> {

@@ -6,17 +6,21 @@ import { AuthException } from './auth.exception.js';
 import { PersonLookup } from './person-lookup.service.js';
 import { toAuthenticatedUser } from './session.mapper.js';
 
+/** What a token said about its session, kept by a socket to check again on each event. */
+export type SessionClaims = Pick<AccessTokenClaims, 'sub' | 'tv' | 'sid'>;
+
 export interface VerifiedSession {
   user: AuthenticatedUser;
+  claims: SessionClaims;
   expiresAt: Date;
 }
 
 const INVALID = 'Your session has expired or is no longer valid. Sign in again.';
 
 /**
- * The one check of an access token, shared by the HTTP guard and the socket handshake: a valid HS256
- * signature with our key, not expired, and a person who still exists, is active and has not had their
- * tokens withdrawn since (token version).
+ * The one check of an access token, shared by the HTTP guard and the socket gateway: a valid HS256
+ * signature with our key, not expired, a person who still exists, is active and has not had their
+ * tokens withdrawn since (token version), and a session not ended since (logout).
  */
 @Injectable()
 export class TokenVerifier {
@@ -30,14 +34,19 @@ export class TokenVerifier {
     return (await this.verifySession(token)).user;
   }
 
-  /** As verify, plus when the token expires (for a socket that must end the session then). */
+  /** As verify, plus the session's claims and when the token expires (for a socket, which checks again). */
   async verifySession(token: string): Promise<VerifiedSession> {
     const claims = await this.readClaims(token);
+    return { user: await this.recheck(claims), claims, expiresAt: new Date(claims.exp * 1000) };
+  }
+
+  /** The person as they are now, if the session still holds; throws AuthException otherwise. */
+  async recheck(claims: SessionClaims): Promise<AuthenticatedUser> {
     const user = await this.people.byId(claims.sub);
-    if (!user || !user.active || user.tokenVersion !== claims.tv) {
+    if (!user || !user.active || user.tokenVersion !== claims.tv || !(await this.people.sessionLive(claims.sid))) {
       throw new AuthException('session_invalid', INVALID);
     }
-    return { user: toAuthenticatedUser(user), expiresAt: new Date(claims.exp * 1000) };
+    return toAuthenticatedUser(user);
   }
 
   private async readClaims(token: string): Promise<AccessTokenClaims & { exp: number }> {
@@ -45,7 +54,12 @@ export class TokenVerifier {
       const claims = await this.jwt.verifyAsync<AccessTokenClaims & { exp: number }>(token, {
         algorithms: [ACCESS_TOKEN_ALGORITHM],
       });
-      if (!Number.isInteger(claims.sub) || !Number.isInteger(claims.tv) || !Number.isFinite(claims.exp)) {
+      if (
+        !Number.isInteger(claims.sub) ||
+        !Number.isInteger(claims.tv) ||
+        typeof claims.sid !== 'string' ||
+        !Number.isFinite(claims.exp)
+      ) {
         throw new Error('missing claims');
       }
       return claims;

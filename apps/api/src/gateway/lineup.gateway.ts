@@ -9,6 +9,7 @@ import {
   SubscribeMessage,
   WebSocketGateway,
 } from '@nestjs/websockets';
+import { SessionEnds } from '../auth/session-ends.service.js';
 import { TokenVerifier } from '../auth/token-verifier.service.js';
 import { Roles } from '../common/decorators/roles.decorator.js';
 import { type Environment, runsClustered, webOrigins } from '../config/environment.js';
@@ -35,11 +36,12 @@ import { cycleRoom, type CatlineServer, type CatlineSocket } from './socket.type
 @UsePipes(new ValidationPipe({ whitelist: true, forbidNonWhitelisted: true, transform: true }))
 export class LineupGateway implements OnGatewayInit<CatlineServer>, OnModuleDestroy {
   private readonly logger = new Logger(LineupGateway.name);
-  private unsubscribe?: () => void;
+  private readonly unsubscribe: Array<() => void> = [];
 
   constructor(
     private readonly verifier: TokenVerifier,
     private readonly sessions: SocketSessions,
+    private readonly sessionEnds: SessionEnds,
     private readonly feed: LineupChangeFeed,
     private readonly joins: CycleJoinService,
     private readonly config: ConfigService<Environment, true>,
@@ -52,20 +54,26 @@ export class LineupGateway implements OnGatewayInit<CatlineServer>, OnModuleDest
     const clustered = runsClustered({ REDIS_URL: this.config.get('REDIS_URL', { infer: true }) });
     if (clustered)
       server.on('lineup:committed', (cycleId, version) => this.feed.noteCommittedElsewhere(cycleId, version));
-    this.unsubscribe = this.feed.subscribe((change) => {
-      // Sent ahead of the broadcast on the same Redis connection, so another process learns of the version
-      // before its sockets get it: a socket joining there meanwhile re-reads the log instead of missing it.
-      if (clustered) server.serverSideEmit('lineup:committed', change.cycleId, change.version);
-      server.to(cycleRoom(change.cycleId)).emit('lineup:change', change);
-    });
+    this.unsubscribe.push(this.sessionEnds.subscribe((ended) => this.sessions.end(server, ended)));
+    this.unsubscribe.push(
+      this.feed.subscribe((change) => {
+        // Sent ahead of the broadcast on the same Redis connection, so another process learns of the version
+        // before its sockets get it: a socket joining there meanwhile re-reads the log instead of missing it.
+        if (clustered) server.serverSideEmit('lineup:committed', change.cycleId, change.version);
+        server.to(cycleRoom(change.cycleId)).emit('lineup:change', change);
+      }),
+    );
     this.logger.log('Lineup socket ready');
   }
 
   onModuleDestroy(): void {
-    this.unsubscribe?.();
+    for (const unsubscribe of this.unsubscribe) unsubscribe();
   }
 
-  /** Answers with a snapshot, or with the changes after `sinceVersion` when the change log still holds them. */
+  /**
+   * Answers with a snapshot, or with the changes after `sinceVersion` when the change log still holds them.
+   * The guard has just checked the person again (removed, role or password changed, logged out).
+   */
   @Roles(...ROLES)
   @SubscribeMessage('cycle:join')
   async join(

@@ -1,10 +1,12 @@
 import type { ClientToServerEvents, ServerToClientEvents } from '@catline/contracts';
 import type { Server, Socket } from 'socket.io';
+import type { SessionClaims } from '../auth/token-verifier.service.js';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
 
-/** What the handshake puts on a socket: who is connected, and until when their token holds. */
+/** What the handshake puts on a socket: who is connected, their token's session, and until when it holds. */
 export interface SocketSession {
   user: AuthenticatedUser;
+  claims: SessionClaims;
   expiresAt: Date;
 }
 
@@ -28,3 +30,6 @@ export type CatlineSocket = Socket<
 >;
 
 export const cycleRoom = (cycleId: number) => `cycle:${cycleId}`;
+/** Every socket is in its person's room and its session's room, so ending either disconnects it on every process. */
+export const personRoom = (personId: number) => `person:${personId}`;
+export const sessionRoom = (sessionId: string) => `session:${sessionId}`;

@@ -8,6 +8,7 @@ import { AttemptLimits } from '../auth/attempt-limits.service.js';
 import { emailIdentity } from '../auth/normalize-email.js';
 import { hashPassword } from '../auth/password.js';
 import { RefreshTokens } from '../auth/refresh-tokens.service.js';
+import { SessionEnds } from '../auth/session-ends.service.js';
 import type { Environment } from '../config/environment.js';
 import { MailOutbox } from '../mail/mail-outbox.service.js';
 import { User } from '../database/entities/user.entity.js';
@@ -51,6 +52,7 @@ export class PasswordLinks {
     private readonly attempts: AttemptLimits,
     private readonly config: ConfigService<Environment, true>,
     private readonly audit: AuditTrail,
+    private readonly sessionEnds: SessionEnds,
   ) {}
 
   /** Mails a fresh invitation (earlier unused ones stop working); call inside the transaction that adds or re-invites the person. */
@@ -117,6 +119,7 @@ export class PasswordLinks {
         actor: { id: user.id, email: user.email, role: user.role },
       });
     });
+    this.sessionEnds.tell({ personId: link.userId });
     this.logger.log(
       `User ${link.userId} set a password through a${purpose === 'invitation' ? 'n invitation' : ' reset'} link`,
     );

@@ -5,6 +5,7 @@ import type { DataSource, EntityManager } from 'typeorm';
 import { normalizeEmail } from '../auth/normalize-email.js';
 import { hashPassword } from '../auth/password.js';
 import { RefreshTokens } from '../auth/refresh-tokens.service.js';
+import { SessionEnds } from '../auth/session-ends.service.js';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
 import { AuditTrail } from '../audit/audit-trail.service.js';
 import { PasswordLinks } from '../password-links/password-links.service.js';
@@ -27,6 +28,7 @@ export class UsersService {
     private readonly refreshTokens: RefreshTokens,
     private readonly links: PasswordLinks,
     private readonly audit: AuditTrail,
+    private readonly sessionEnds: SessionEnds,
   ) {}
 
   async list(): Promise<UserView[]> {
@@ -77,8 +79,10 @@ export class UsersService {
    * Role, catapult and active changes take effect at once: the token version moves on, so tokens
    * signed with the old role stop working (a refresh gives a new one while the person is active).
    */
+  /** A change of role, catapult or activity ends the person's sessions at once (their sockets too). */
   async update(id: number, body: UpdateUserDto, actor: AuthenticatedUser): Promise<UserView> {
-    return this.dataSource.transaction(async (manager) => {
+    let accessChanged = false;
+    const view = await this.dataSource.transaction(async (manager) => {
       const user = await this.findOrFail(manager, id);
       if (id === actor.id && ((body.role && body.role !== user.role) || body.active === false)) {
         throw new UsersException(
@@ -104,6 +108,7 @@ export class UsersService {
         active: body.active ?? user.active,
       });
       if (access) user.tokenVersion += 1;
+      accessChanged = access;
       await manager.save(User, user);
       if (!user.active) await this.refreshTokens.revokeAllFor(user.id, manager);
       const after = toUserView(user);
@@ -116,6 +121,8 @@ export class UsersService {
       });
       return after;
     });
+    if (accessChanged) this.sessionEnds.tell({ personId: id });
+    return view;
   }
 
   /** A fresh invitation link for an active person who has no password yet; returns the address it goes to. */
@@ -155,6 +162,7 @@ export class UsersService {
         after: { active: false },
       });
     });
+    this.sessionEnds.tell({ personId: id });
     this.logger.log(`User ${id} removed by ${actor.id}`);
   }
 

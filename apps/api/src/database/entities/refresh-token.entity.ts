@@ -2,7 +2,10 @@ import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, t
 import { CreatedAtColumn, InstantColumn } from '../columns.js';
 import { User } from './user.entity.js';
 
-/** One refresh token per sign-in; only its SHA-256 is kept, and each use replaces it. */
+/**
+ * One live refresh token per session; only its SHA-256 is kept, and each use replaces it with a row of the
+ * same session. A sign-in starts a session; its id is in every access token of that session.
+ */
 @Entity('refresh_tokens')
 export class RefreshToken {
   @PrimaryGeneratedColumn()
@@ -14,6 +17,10 @@ export class RefreshToken {
   @ManyToOne(() => User, { onDelete: 'CASCADE' })
   @JoinColumn({ name: 'user_id' })
   user: Relation<User>;
+
+  @Index('ix_refresh_tokens_session')
+  @Column({ name: 'session_id', type: 'char', length: 36 })
+  sessionId: string;
 
   @Index({ unique: true })
   @Column({ name: 'token_hash', type: 'char', length: 64 })

@@ -6,6 +6,7 @@ import { SlotReverifyAndWaivers1796200677124 } from './1796200677124-SlotReverif
 import { DeckPositionsLandingArea1796201917830 } from './1796201917830-DeckPositionsLandingArea.js';
 import { SlotAgreedWeightAndLastStep1796203000000 } from './1796203000000-SlotAgreedWeightAndLastStep.js';
 import { LaunchingCycleOnePerShip1796213798790 } from './1796213798790-LaunchingCycleOnePerShip.js';
+import { RefreshTokenSession1796213925015 } from './1796213925015-RefreshTokenSession.js';
 
 /** Every migration in the order it runs; add a new one at the end (see DEVELOPERS.md). */
 export const migrations = [
@@ -17,4 +18,5 @@ export const migrations = [
   DeckPositionsLandingArea1796201917830,
   SlotAgreedWeightAndLastStep1796203000000,
   LaunchingCycleOnePerShip1796213798790,
+  RefreshTokenSession1796213925015,
 ];

@@ -4,6 +4,7 @@ import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { type ClusterProxy, startClusterProxy } from '../../../../scripts/lib/cluster-proxy.mjs';
 import { ensureRedisInstalled, startRedis, stopRedis } from '../../../../scripts/lib/redis.mjs';
 import { environmentFromProcess } from '../../src/database/data-source.js';
 import { recreateDatabase } from '../../src/database/recreate-database.js';
@@ -12,7 +13,7 @@ import { recreateDatabase } from '../../src/database/recreate-database.js';
 export const CLUSTER_ORIGIN = 'http://127.0.0.1:3000';
 
 const apiDir = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
-const STARTUP_MS = 30_000;
+const STARTUP_MS = 90_000;
 
 function freePort(): Promise<number> {
   return new Promise((resolve, reject) => {
@@ -36,6 +37,8 @@ const exited = (child: ChildProcess) =>
  * migrations and the demo seed. Their logs go to files in a temporary folder, shown when one fails to start.
  */
 export class ApiCluster {
+  private readonly proxies: ClusterProxy[] = [];
+
   private constructor(
     readonly urls: string[],
     private readonly children: ChildProcess[],
@@ -93,7 +96,17 @@ export class ApiCluster {
     await exited(child);
   }
 
+  /** The proxy `npm run start:cluster` puts in front of the processes, on a port of its own; its address. */
+  async frontDoor(): Promise<string> {
+    const port = await freePort();
+    const proxy = startClusterProxy({ port, targets: this.urls });
+    this.proxies.push(proxy);
+    await proxy.listening;
+    return `http://127.0.0.1:${port}`;
+  }
+
   async stop(): Promise<void> {
+    for (const proxy of this.proxies.splice(0)) proxy.close();
     await Promise.all(
       this.children.map(async (child) => {
         child.kill('SIGTERM');

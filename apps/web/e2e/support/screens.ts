@@ -51,3 +51,29 @@ export async function expectNoSidewaysOverflow(page: Page) {
     widths.window,
   );
 }
+
+/**
+ * A real finger drag through Chromium's touch input: press, hold past the touch sensor's delay, slide in
+ * steps, lift. The page must have been opened with touch.
+ */
+export async function dragWithTouch(page: Page, from: Locator, to: Locator) {
+  const start = (await from.boundingBox())!;
+  const end = (await to.boundingBox())!;
+  const touch = await page.context().newCDPSession(page);
+  const at = (x: number, y: number) => [{ x: Math.round(x), y: Math.round(y) }];
+  const x0 = start.x + start.width / 2;
+  const y0 = start.y + start.height / 2;
+  const x1 = end.x + Math.min(end.width / 2, 60);
+  const y1 = end.y + end.height / 2;
+  await touch.send('Input.dispatchTouchEvent', { type: 'touchStart', touchPoints: at(x0, y0) });
+  await page.waitForTimeout(400);
+  for (let step = 1; step <= 15; step += 1) {
+    const share = step / 15;
+    await touch.send('Input.dispatchTouchEvent', {
+      type: 'touchMove',
+      touchPoints: at(x0 + (x1 - x0) * share, y0 + (y1 - y0) * share),
+    });
+  }
+  await touch.send('Input.dispatchTouchEvent', { type: 'touchEnd', touchPoints: [] });
+  await touch.detach();
+}

@@ -1,6 +1,6 @@
 import type { LineupSnapshot, ShipView, SlotView } from '@catline/contracts';
 import { describe, expect, it } from 'vitest';
-import { deckPanels, towTargets } from './deck-model.js';
+import { deckPanels, isElsewhere, positionFromKey, positionKey, towTargets } from './deck-model.js';
 
 const ship = {
   deckSpots: [
@@ -40,5 +40,16 @@ describe('the deck screen model', () => {
     const aboard = slot(1, { kind: 'spot', name: 'b2' });
     const panels = deckPanels(ship, snapshot([aboard, slot(2, { kind: 'spot', name: 'lone' })]));
     expect(towTargets(panels, aboard).map((position) => position.name)).toEqual(['b1', 'lift', 'bay']);
+  });
+
+  it('reads a place key back into its position, names with a colon included', () => {
+    const position = { kind: 'elevator' as const, name: 'lift:fwd' };
+    expect(positionFromKey(positionKey(position))).toEqual(position);
+  });
+
+  it('asks for a tow on a drop only somewhere other than where the aircraft is', () => {
+    const aboard = slot(1, { kind: 'spot', name: 'b2' });
+    const [bow] = deckPanels(ship, snapshot([aboard]));
+    expect(bow.places.map((place) => isElsewhere(place, aboard))).toEqual([true, false]);
   });
 });

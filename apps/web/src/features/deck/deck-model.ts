@@ -51,9 +51,11 @@ export function deckPanels(ship: ShipView, snapshot: LineupSnapshot): DeckPanel[
 export function towTargets(panels: readonly DeckPanel[], slot: SlotView): DeckPositionView[] {
   return panels
     .flatMap((panel) => panel.places)
-    .filter((candidate) => candidate.position.kind === 'hangar' || candidate.slots.length === 0)
-    .map((candidate) => candidate.position)
-    .filter((position) => slot.deckPosition === null || key(position) !== key(slot.deckPosition));
+    .filter(
+      (candidate) =>
+        (candidate.position.kind === 'hangar' || candidate.slots.length === 0) && isElsewhere(candidate, slot),
+    )
+    .map((candidate) => candidate.position);
 }
 
 export const positionLabel = (position: DeckPositionView) =>
@@ -64,3 +66,14 @@ export const positionLabel = (position: DeckPositionView) =>
       : `Hangar ${position.name}`;
 
 export const positionKey = key;
+
+/** The position a place's key names (the inverse of {@link positionKey}). */
+export function positionFromKey(placeKey: string): DeckPositionView {
+  const [kind, ...name] = placeKey.split(':');
+  return { kind: kind as DeckPositionView['kind'], name: name.join(':') };
+}
+
+/** Whether the aircraft is somewhere other than the place (a drop where it already is asks for nothing). */
+export function isElsewhere(place: DeckPlace, slot: SlotView): boolean {
+  return slot.deckPosition === null || key(place.position) !== key(slot.deckPosition);
+}

@@ -1,8 +1,8 @@
 import { useState } from 'react';
 import { Box, Button, Flex, Heading, HStack, Input, SimpleGrid, Stack, Text } from '@chakra-ui/react';
+import { DndContext, DragOverlay } from '@dnd-kit/core';
 import {
   LANDING_AREA_STATES,
-  type DeckPositionKind,
   type LandingAreaState,
   type LineupSnapshot,
   type ShipView,
@@ -15,60 +15,18 @@ import { LiveFigures, useFiguresLive } from '../../../components/live-figures.js
 import { EmptyState, ErrorState, LoadingState, QueryView } from '../../../components/query-states.js';
 import { NoticeBanner, refusalNotice, useNotice } from '../../../components/refusal-notice.js';
 import { SelectInput } from '../../../components/select-field.js';
-import { formatOptionalClock } from '../../../lib/format.js';
 import { useLiveCycle } from '../../../lib/live/use-live-cycle.js';
 import { useShips } from '../../../lib/queries/ships-query.js';
 import { useViewedCycle } from '../../../lib/queries/use-viewed-cycle.js';
 import { useHasRole } from '../../../lib/session-store.js';
 import { useSetLandingArea } from '../api/set-landing-area.js';
 import { useTowAircraft } from '../api/tow-aircraft.js';
-import { deckPanels, positionKey, positionLabel, towTargets, type DeckPanel } from '../deck-model.js';
+import { deckPanels, positionFromKey, positionKey } from '../deck-model.js';
+import { useDeckDrag } from '../hooks/use-deck-drag.js';
+import { DeckPlaceRow } from './deck-place-row.js';
+import { LiftedChip, PositionChip } from './position-chip.js';
 
 const LANDING_WORDS: Record<LandingAreaState, string> = { clear: 'Clear', recovering: 'Recovering', fouled: 'Fouled' };
-
-/** One aircraft on its position: side number, type, projected launch, and the handler's "move to". */
-function PositionChip({
-  slot,
-  panels,
-  onTow,
-}: {
-  slot: SlotView;
-  panels: readonly DeckPanel[];
-  onTow: ((slot: SlotView, to: string) => void) | null;
-}) {
-  const targets = towTargets(panels, slot);
-  return (
-    <Box
-      borderWidth="1px"
-      borderColor="border.emphasized"
-      rounded="md"
-      px="2"
-      py="1"
-      data-testid={`chip-${slot.sideNumber}`}
-    >
-      <Text fontWeight="700" fontSize="lg" lineHeight="1.2">
-        {slot.sideNumber}
-      </Text>
-      <Text fontSize="xs" color="fg.muted">
-        {slot.typeDesignation} · launch {formatOptionalClock(slot.projectedLaunchAt)}
-      </Text>
-      {slot.mustMove.length > 0 && (
-        <Text fontSize="xs" color="fg.warning">
-          Waits for {slot.mustMove.join(', ')}
-        </Text>
-      )}
-      {onTow && slot.status === 'planned' && (
-        <SelectInput
-          value=""
-          placeholder="Move to…"
-          ariaLabel={`Move ${slot.sideNumber} to`}
-          choices={targets.map((position) => ({ value: positionKey(position), label: positionLabel(position) }))}
-          onChange={(value) => value && onTow(slot, value)}
-        />
-      )}
-    </Box>
-  );
-}
 
 function LandingAreaControl({ snapshot }: { snapshot: LineupSnapshot }) {
   const { cycle } = snapshot;
@@ -133,50 +91,37 @@ function DeckWorkspace({ snapshot, ship }: { snapshot: LineupSnapshot; ship: Shi
   const { notice, show, dismiss } = useNotice();
   const panels = deckPanels(ship, snapshot);
   const onTow = (slot: SlotView, to: string) => {
-    const [kind, ...name] = to.split(':');
     tow.mutate(
-      { slotId: slot.id, slotVersion: slot.version, to: { kind: kind as DeckPositionKind, name: name.join(':') } },
+      { slotId: slot.id, slotVersion: slot.version, to: positionFromKey(to) },
       { onError: (error) => show(refusalNotice(error, 'The tow')) },
     );
   };
+  const drag = useDeckDrag(panels, onTow);
   return (
     <Stack gap="2">
       {notice && <NoticeBanner notice={notice} onDismiss={dismiss} />}
       <LandingAreaControl snapshot={snapshot} />
-      <SimpleGrid columns={{ base: 2, lg: 3 }} gap="2">
-        {panels.map((panel) => (
-          <Box key={panel.title} borderWidth="1px" rounded="md" p="2" as="section" aria-label={panel.title}>
-            <Heading as="h2" size="md" mb="1">
-              {panel.title}
-            </Heading>
-            <Stack gap="1">
-              {panel.places.map((place) => (
-                <Flex
-                  key={positionKey(place.position)}
-                  gap="2"
-                  align="flex-start"
-                  data-testid={`place-${positionKey(place.position)}`}
-                >
-                  <Text fontSize="sm" color="fg.muted" minW="5.5rem" pt="1">
-                    {place.position.name}
-                  </Text>
-                  <Flex gap="1" wrap="wrap" flex="1">
-                    {place.slots.length === 0 ? (
-                      <Text fontSize="sm" color="fg.subtle" pt="1">
-                        free
-                      </Text>
-                    ) : (
-                      place.slots.map((slot) => (
-                        <PositionChip key={slot.id} slot={slot} panels={panels} onTow={tows ? onTow : null} />
-                      ))
-                    )}
-                  </Flex>
-                </Flex>
-              ))}
-            </Stack>
-          </Box>
-        ))}
-      </SimpleGrid>
+      <DndContext {...drag.contextProps}>
+        <SimpleGrid columns={{ base: 2, lg: 3 }} gap="2">
+          {panels.map((panel) => (
+            <Box key={panel.title} borderWidth="1px" rounded="md" p="2" as="section" aria-label={panel.title}>
+              <Heading as="h2" size="md" mb="1">
+                {panel.title}
+              </Heading>
+              <Stack gap="1">
+                {panel.places.map((place) => (
+                  <DeckPlaceRow key={positionKey(place.position)} place={place}>
+                    {place.slots.map((slot) => (
+                      <PositionChip key={slot.id} slot={slot} panels={panels} onTow={tows ? onTow : null} />
+                    ))}
+                  </DeckPlaceRow>
+                ))}
+              </Stack>
+            </Box>
+          ))}
+        </SimpleGrid>
+        <DragOverlay>{drag.held ? <LiftedChip slot={drag.held} /> : null}</DragOverlay>
+      </DndContext>
     </Stack>
   );
 }

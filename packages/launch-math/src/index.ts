@@ -5,6 +5,7 @@ export * from './wind/wind-over-deck.js';
 export * from './atmosphere/isa.js';
 export * from './catapult/end-speed.js';
 export * from './aircraft/aircraft-profile.js';
+export * from './aircraft/gross-weight.js';
 export * from './launch/launch-airspeed.js';
 export * from './launch/launch-settings.js';
 export * from './launch/launch-figures.js';

@@ -258,7 +258,8 @@ describe('lineup commands', () => {
       },
     );
 
-    expect(result.change.summary).toBe('C22 down; spare C28 takes cat 1, place 2');
+    // Its pilot walks to the spare with the place.
+    expect(result.change.summary).toBe(`C22 down; spare C28 takes cat 1, place 2; ${down.pilotName} moves to C28`);
     const after = await deck.snapshot(cycle.id);
     expect(idsOf(after, 1)).toEqual([slots[0].id, spare.id, slots[2].id]);
     expect(after.slots.find((slot) => slot.id === down.id)).toMatchObject({
@@ -355,9 +356,9 @@ describe('lineup commands', () => {
     const start = await deck.snapshot(cycle.id);
     const { slots } = await (async () => {
       const added = [
-        await deck.addSlot(cycle.id, 'C21'),
-        await deck.addSlot(cycle.id, 'D33'),
-        await deck.addSlot(cycle.id, 'G43', { grossWeightLb: 26_000 }),
+        await deck.addSlot(cycle.id, 'C21', { pilotEmail: pilot(2) }),
+        await deck.addSlot(cycle.id, 'D33', { pilotEmail: pilot(3) }),
+        await deck.addSlot(cycle.id, 'G43', { grossWeightLb: 26_000, pilotEmail: pilot(4) }),
       ];
       await deck.place(cycle.id, added[0].id, 1);
       await deck.place(cycle.id, added[1].id, 1, 0);

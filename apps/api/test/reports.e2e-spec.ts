@@ -88,8 +88,9 @@ describe('cycle reports, exports and shot counts', () => {
       C25: await add('C25', { pilotEmail: pilot(2) }),
       C26: await add('C26', { pilotEmail: pilot(3) }),
       D37: await add('D37', { pilotEmail: pilot(4), grossWeightLb: 51_000 }),
-      D38: await add('D38'),
-      C27: await add('C27', { pilotEmail: pilot(5), spare: true }),
+      // D38's pilot walks to the spare C27 when D38 goes down.
+      D38: await add('D38', { pilotEmail: pilot(5) }),
+      C27: await add('C27', { spare: true }),
       D39: await add('D39'),
     };
 

@@ -159,6 +159,48 @@ describe('spares, down aircraft, pilots and returns to the pool', () => {
     expect(after.lanes.find((lane) => lane.number === 1)!.slotIds).toEqual([]);
   });
 
+  it('keeps a pilot-less aircraft out of every catapult order, so it never waits on a catapult for a pilot', async () => {
+    const cycle = await deck.createCycle();
+    const tanker = await deck.addSlot(cycle.id, 'L49', { tanker: true, mission: 'Tanker' });
+    const lane = (await deck.snapshot(cycle.id)).lanes.find((candidate) => candidate.number === 2)!;
+    const move = await deck.call(HANDLER, 'post', `/api/cycles/${cycle.id}/lineup/moves`, {
+      slotId: tanker.id,
+      slotVersion: tanker.version,
+      toCatapultId: lane.catapultId,
+      toIndex: 0,
+      targetLaneOrder: lane.slotIds,
+    });
+    expect(move.status).toBe(409);
+    expect(move.body).toMatchObject({
+      code: 'pilot_missing',
+      message: 'L49 has no pilot; assign one before it joins cat 2.',
+    });
+
+    const applied = await deck.call(HANDLER, 'post', `/api/cycles/${cycle.id}/lineup/suggestion/apply`, {
+      basisVersion: (await deck.snapshot(cycle.id)).version,
+      lanes: [{ catapultId: lane.catapultId, slotIds: [tanker.id] }],
+    });
+    expect(applied.status).toBe(409);
+    expect(applied.body.code).toBe('pilot_missing');
+
+    // Crewed and placed, it keeps its pilot while it stands in the order.
+    await deck.place(cycle.id, tanker.id, 2);
+    const placed = await deck.slot(cycle.id, tanker.id);
+    const off = await deck.call(AIR_OPS, 'post', slotPath(cycle.id, tanker.id, 'pilot'), {
+      slotVersion: placed.version,
+      pilotId: null,
+    });
+    expect(off.status).toBe(409);
+    expect(off.body.message).toBe('L49 is in the order of cat 2; move it to the deck pool before its pilot leaves it.');
+    const elsewhere = await deck.addSlot(cycle.id, 'C32');
+    const moved = await deck.call(AIR_OPS, 'post', slotPath(cycle.id, elsewhere.id, 'pilot'), {
+      slotVersion: elsewhere.version,
+      pilotId: placed.pilotId,
+    });
+    expect(moved.status).toBe(409);
+    expect(moved.body.code).toBe('pilot_missing');
+  });
+
   it('leaves a pilot-less aircraft out of the suggestion, listed as unassigned, until air operations assigns one', async () => {
     const cycle = await deck.createCycle();
     const manned = await deck.addSlot(cycle.id, 'C26', { pilotEmail: pilot(8) });

@@ -1,6 +1,6 @@
 import { expect, test } from '@playwright/test';
 import { apiAs, placeInLane, planCycle } from './support/demo-api.js';
-import { card, lane, openAs, pool } from './support/screens.js';
+import { card, dragWithMouse, lane, openAs, pool } from './support/screens.js';
 
 test('the handler swaps in a spare, applies the suggested lineup and marks a catapult down', async ({ browser }) => {
   const { cycle, slotIds } = await planCycle({
@@ -49,4 +49,35 @@ test('the handler swaps in a spare, applies the suggested lineup and marks a cat
     .click();
   await expect(lane(handler, Number(catapult)).getByTestId('catapult-status')).toHaveText('DOWN');
   await expect(handler.getByTestId('lineup-warnings')).toContainText(`Cat ${catapult} is down`);
+});
+
+test('an aircraft without a pilot cannot reach a catapult, so it never waits there for one', async ({ browser }) => {
+  const { cycle } = await planCycle({ aircraft: [{ side: 'L48', grossWeightLb: 47_000, pilot: null }] });
+  const handler = await openAs(browser, 'handler', `/lineup?cycle=${cycle.id}`);
+  const tanker = card(pool(handler), 'L48');
+  await expect(tanker.getByTestId('no-pilot')).toBeVisible();
+  await expect(handler.getByTestId('lineup-warnings')).toContainText('No pilot assigned to L48');
+
+  await dragWithMouse(handler, tanker, lane(handler, 2).getByTestId('lane-drop-zone'));
+  await expect(handler.getByTestId('notice')).toContainText('L48 has no pilot; assign one before it joins cat 2.');
+  await expect(card(lane(handler, 2), 'L48')).toHaveCount(0);
+  await expect(card(pool(handler), 'L48')).toBeVisible();
+
+  await handler.getByRole('button', { name: 'Actions for L48' }).click();
+  await handler.getByRole('menuitem', { name: 'Assign pilot…' }).click();
+  await handler.getByRole('dialog').getByRole('combobox').selectOption({ label: 'Una Dapplewick' });
+  await handler.getByRole('dialog').getByRole('button', { name: 'Save pilot' }).click();
+  await expect(handler.getByTestId('notice')).toContainText('Pilot of L48 saved');
+  await expect(card(pool(handler), 'L48').getByTestId('no-pilot')).toHaveCount(0);
+
+  await dragWithMouse(handler, card(pool(handler), 'L48'), lane(handler, 2).getByTestId('lane-drop-zone'));
+  await expect(card(lane(handler, 2), 'L48')).toBeVisible();
+
+  // Standing in the order, it keeps its pilot.
+  await handler.getByRole('button', { name: 'Actions for L48' }).click();
+  await handler.getByRole('menuitem', { name: 'Change pilot…' }).click();
+  await handler.getByRole('dialog').getByRole('combobox').selectOption({ label: 'No pilot' });
+  await handler.getByRole('dialog').getByRole('button', { name: 'Save pilot' }).click();
+  await expect(handler.getByTestId('notice')).toContainText('move it to the deck pool before its pilot leaves it');
+  await expect(card(lane(handler, 2), 'L48')).toContainText('Una Dapplewick');
 });

@@ -21,6 +21,15 @@ export const SLOT_STATUSES = [
 ] as const;
 export type SlotStatus = (typeof SLOT_STATUSES)[number];
 
+/** Past planned and not yet launched: the aircraft that can leave the catapult for the deck pool. */
+export const RETURNABLE_STATUSES: readonly SlotStatus[] = [
+  'taxiing',
+  'on_catapult',
+  'weight_agreed',
+  'tensioned',
+  'suspended',
+];
+
 /** What changed under an aircraft's agreed figures (launch-math's REVERIFY_CAUSES). */
 export const REVERIFY_CAUSES = ['wind', 'ship_speed', 'weight', 'launch_data'] as const;
 export type ReverifyCause = (typeof REVERIFY_CAUSES)[number];

@@ -15,6 +15,8 @@ export const LINEUP_REFUSAL_CODES = [
   'spare_unavailable',
   'spare_held',
   'invalid_pilot',
+  /** An aircraft without a pilot cannot join a catapult's order: it would wait there for a pilot forever. */
+  'pilot_missing',
   'agreement_required',
   'not_your_catapult',
   'not_your_slot',

@@ -44,12 +44,15 @@ export async function createBenchCycle(baseUrl) {
     }),
     'create cycle',
   );
+  // Pilots for as many aircraft as there are: only an aircraft with one may join a lane.
+  const pilots = expectOk(await airops.get('/users/pilots'), 'list pilots');
   for (const [i, plane] of aircraft.slice(0, BENCH_AIRCRAFT).entries()) {
     const type = types.find((t) => t.id === plane.typeId);
     const weights = type.launchTable.map((row) => row.grossWeightLb);
     expectOk(
       await airops.post(`/cycles/${cycle.id}/slots`, {
         aircraftId: plane.id,
+        pilotId: pilots[i]?.id ?? null,
         mission: 'bench',
         fuelLb: 9_000,
         stores: '',

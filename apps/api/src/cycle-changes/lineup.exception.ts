@@ -14,6 +14,7 @@ const STATUS: Record<LineupRefusalCode, HttpStatus> = {
   spare_unavailable: HttpStatus.CONFLICT,
   spare_held: HttpStatus.CONFLICT,
   invalid_pilot: HttpStatus.BAD_REQUEST,
+  pilot_missing: HttpStatus.CONFLICT,
   agreement_required: HttpStatus.FORBIDDEN,
   not_your_catapult: HttpStatus.FORBIDDEN,
   not_your_slot: HttpStatus.FORBIDDEN,

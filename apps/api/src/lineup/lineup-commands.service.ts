@@ -27,6 +27,16 @@ const heldPlaces = (lane: readonly Slot[]) => lane.filter((slot) => slot.status 
 
 const CANNOT_GO_DOWN: readonly SlotStatus[] = ['launched', 'down', 'scratched'];
 
+/** Refuses a pilot-less aircraft a place in a catapult's order: it would stop there, waiting for its pilot. */
+export function requirePilot(slot: Slot, catapultNumber?: number): void {
+  if (slot.pilotId !== null) return;
+  const side = slot.aircraft.sideNumber;
+  throw new LineupException(
+    'pilot_missing',
+    `${side} has no pilot; assign one before it joins ${catapultNumber === undefined ? 'a catapult' : `cat ${catapultNumber}`}.`,
+  );
+}
+
 const heldSpareRefusal = (slot: Slot) =>
   new LineupException(
     'spare_held',
@@ -65,6 +75,7 @@ export class LineupCommandsService {
 
       const catapult = this.basis.catapult(state, request.toCatapultId);
       if (isHeldSpare(state, slot)) throw heldSpareRefusal(slot);
+      if (slot.catapultId !== catapult.id) requirePilot(slot, catapult.number);
       await this.basis.laneAsSeen(manager, state, catapult, request.targetLaneOrder);
       const current = laneSlots(state, catapult.id);
       const target = current.filter((other) => other.id !== slot.id);
@@ -206,6 +217,7 @@ export class LineupCommandsService {
             throw new LineupException('invalid_lineup', `${slot.aircraft.sideNumber} is listed twice.`);
           seen.add(slotId);
           if (isHeldSpare(state, slot)) throw heldSpareRefusal(slot);
+          requirePilot(slot, catapult.number);
           if (slot.status !== 'planned') {
             throw new LineupException(
               'invalid_lineup',
@@ -233,6 +245,8 @@ export class LineupCommandsService {
         `${spare.aircraft.sideNumber} is not waiting in the deck pool; only a planned aircraft from the pool can stand in.`,
       );
     }
+    // The down aircraft's pilot walks to the spare; without one, the spare must bring its own.
+    if (down.pilotId === null) requirePilot(spare);
     return spare;
   }
 }

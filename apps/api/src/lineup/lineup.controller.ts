@@ -89,7 +89,7 @@ export class LineupController {
     refuses: {
       400: ['invalid_lineup'],
       404: ['not_found'],
-      409: ['stale_basis', 'cycle_closed', 'slot_not_movable', 'no_change'],
+      409: ['stale_basis', 'cycle_closed', 'slot_not_movable', 'no_change', 'spare_held', 'pilot_missing'],
       422: ['launch_data_invalid'],
     },
   })
@@ -109,7 +109,7 @@ export class LineupController {
     refuses: {
       400: ['invalid_lineup'],
       404: ['not_found'],
-      409: ['stale_basis', 'cycle_closed', 'slot_not_movable', 'no_change'],
+      409: ['stale_basis', 'cycle_closed', 'slot_not_movable', 'no_change', 'spare_held', 'pilot_missing'],
       422: ['launch_data_invalid'],
     },
   })
@@ -129,7 +129,7 @@ export class LineupController {
     description: 'A spare of the cycle may take its place.',
     refuses: {
       404: ['not_found'],
-      409: ['stale_basis', 'cycle_closed', 'slot_not_movable', 'spare_unavailable'],
+      409: ['stale_basis', 'cycle_closed', 'slot_not_movable', 'spare_unavailable', 'pilot_missing'],
       422: ['launch_data_invalid'],
     },
   })

@@ -12,6 +12,17 @@ import { User } from '../database/entities/user.entity.js';
 /** A pilot's aircraft may change hands only before it starts to taxi (or while it is down). */
 const pilotCanChange = (slot: Slot) => slot.status === 'planned' || slot.status === 'down';
 
+/** An aircraft in a catapult's order keeps its pilot: without one it would stop there, waiting (see requirePilot). */
+function requireOutOfLane(state: LineupState, slot: Slot): void {
+  if (slot.catapultId === null) return;
+  const catapult = state.catapults.find((candidate) => candidate.id === slot.catapultId);
+  const side = slot.aircraft.sideNumber;
+  throw new LineupException(
+    'pilot_missing',
+    `${side} is in the order of cat ${catapult?.number ?? slot.catapultId}; move it to the deck pool before its pilot leaves it.`,
+  );
+}
+
 const NO_ACKNOWLEDGEMENT = { pilotWeightAckAt: null, pilotWeightAckLb: null };
 
 /** The handler's and air operations' assignment of pilots to the cycle's aircraft. */
@@ -48,6 +59,7 @@ export class PilotAssignmentService {
       }
       const command = { type: 'assign_pilot', slotId, ...request };
       if (request.pilotId === null) {
+        requireOutOfLane(state, slot);
         const name = slot.pilot?.name ?? 'the pilot';
         await updateSlot(manager, slot, { pilotId: null, ...NO_ACKNOWLEDGEMENT });
         slot.pilot = null;
@@ -56,6 +68,7 @@ export class PilotAssignmentService {
       const pilot = await this.activePilot(manager, request.pilotId);
       const from = this.currentAircraft(state, pilot, slot);
       if (from) {
+        requireOutOfLane(state, from);
         await updateSlot(manager, from, { pilotId: null, ...NO_ACKNOWLEDGEMENT });
         from.pilot = null;
       }

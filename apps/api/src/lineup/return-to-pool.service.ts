@@ -1,4 +1,4 @@
-import type { LineupCommandResult, ReturnToPoolRequest, SlotStatus } from '@catline/contracts';
+import { RETURNABLE_STATUSES, type LineupCommandResult, type ReturnToPoolRequest } from '@catline/contracts';
 import { Injectable } from '@nestjs/common';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
 import { BasisChecks } from '../cycle-changes/basis-checks.service.js';
@@ -7,9 +7,6 @@ import { CycleChangeService, actorOf } from '../cycle-changes/cycle-change.servi
 import { laneSlots } from '../cycle-changes/lineup-snapshot.builder.js';
 import { LineupException } from '../cycle-changes/lineup.exception.js';
 import { placeSlots, updateSlot } from '../cycle-changes/slot-writes.js';
-
-/** Past planned and not yet launched: the aircraft that can leave the catapult for the deck pool. */
-const RETURNABLE: readonly SlotStatus[] = ['taxiing', 'on_catapult', 'weight_agreed', 'tensioned', 'suspended'];
 
 /**
  * A taxiing or on-catapult aircraft goes back to the deck pool instead of being marked down: by the
@@ -46,7 +43,7 @@ export class ReturnToPoolService {
         );
       }
       await this.basis.slotAsSeen(manager, state, slot, request.slotVersion);
-      if (!RETURNABLE.includes(slot.status)) {
+      if (!RETURNABLE_STATUSES.includes(slot.status)) {
         throw new LineupException(
           'wrong_step',
           `${side} is ${slot.status.replaceAll('_', ' ')}; only a taxiing or on-catapult aircraft returns to the pool.`,

@@ -77,7 +77,7 @@ export class SparesController {
     refuses: {
       400: ['invalid_pilot'],
       404: ['not_found'],
-      409: ['wrong_step', 'no_change', 'stale_basis', 'cycle_closed'],
+      409: ['wrong_step', 'no_change', 'pilot_missing', 'stale_basis', 'cycle_closed'],
     },
   })
   @Roles('handler', 'air_operations')

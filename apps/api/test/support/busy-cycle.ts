@@ -1,6 +1,6 @@
 import type { LineupSnapshot } from '@catline/contracts';
 import { TEST_PASSWORD, createUser } from './fleet-fixtures.js';
-import { HANDLER, type LineupDriver } from './lineup-fixtures.js';
+import { DEMO_PILOTS, HANDLER, pilot, type LineupDriver } from './lineup-fixtures.js';
 import { demoEmail, signIn } from './sign-in.js';
 
 const SIDES = [
@@ -22,7 +22,8 @@ export async function createBusyCycle(deck: LineupDriver): Promise<BusyCycle> {
   const { id: cycleId } = await deck.createCycle();
   const first = await deck.snapshot(cycleId);
   for (const [index, side] of SIDES.entries()) {
-    const slot = await deck.addSlot(cycleId, side);
+    // Each with a pilot of its own, as an aircraft needs one to join a lane.
+    const slot = await deck.addSlot(cycleId, side, { pilotEmail: pilot(DEMO_PILOTS - index) });
     if (index < IN_LANES) await deck.place(cycleId, slot.id, (index % 4) + 1);
   }
   return { cycleId, first, setUpVersions: SIDES.length + IN_LANES };

@@ -8,6 +8,7 @@ import type {
   ReadinessStep,
   ShipView,
   SlotView,
+  UserView,
 } from '@catline/contracts';
 import request from 'supertest';
 import { bearer, signIn } from './sign-in.js';
@@ -19,6 +20,8 @@ export const OBSERVER = 'observer@catline.example';
 export const AIR_BOSS = 'airboss@catline.example';
 export const deckEdgeOperator = (catapultNumber: number) => `deo${catapultNumber}@catline.example`;
 export const catapultOfficer = (catapultNumber: number) => `cat${catapultNumber}@catline.example`;
+/** The demo fleet's pilots: pilot(1) to pilot(DEMO_PILOTS). */
+export const DEMO_PILOTS = 24;
 export const pilot = (n: number) => (n === 1 ? 'pilot@catline.example' : `pilot${n}@catline.example`);
 
 const HOUR = 3_600_000;
@@ -149,8 +152,35 @@ export class LineupDriver {
     return this.ok<LineupSnapshot>(email, 'get', `/api/cycles/${cycleId}/lineup`);
   }
 
-  /** The handler's move of a slot to the end of (or a place in) a catapult's lane, based on the current snapshot. */
+  /**
+   * Air operations gives a pilot-less aircraft a demo pilot who flies nothing else in the cycle (from the
+   * last demo pilot down, clear of the first ones specs name), as it must have before it joins a lane.
+   */
+  async crew(cycleId: number, slotId: number): Promise<void> {
+    const snapshot = await this.snapshot(cycleId);
+    const slot = snapshot.slots.find((candidate) => candidate.id === slotId)!;
+    if (slot.pilotId !== null) return;
+    const flying = new Set(snapshot.slots.map((candidate) => candidate.pilotId));
+    const pilots = await this.ok<UserView[]>(AIR_OPS, 'get', '/api/users/pilots');
+    const byEmail = new Map(pilots.map((person) => [person.email, person.id]));
+    for (let n = DEMO_PILOTS; n >= 1; n--) {
+      const id = byEmail.get(pilot(n));
+      if (id === undefined || flying.has(id)) continue;
+      await this.ok(AIR_OPS, 'post', `/api/cycles/${cycleId}/lineup/slots/${slotId}/pilot`, {
+        slotVersion: slot.version,
+        pilotId: id,
+      });
+      return;
+    }
+    throw new Error(`no free demo pilot for cycle ${cycleId}`);
+  }
+
+  /**
+   * The handler's move of a slot to the end of (or a place in) a catapult's lane, based on the current
+   * snapshot; an aircraft without a pilot is crewed first.
+   */
   async place(cycleId: number, slotId: number, catapultNumber: number, index?: number): Promise<LineupCommandResult> {
+    await this.crew(cycleId, slotId);
     const snapshot = await this.snapshot(cycleId);
     const lane = snapshot.lanes.find((candidate) => candidate.number === catapultNumber)!;
     const slot = snapshot.slots.find((candidate) => candidate.id === slotId)!;

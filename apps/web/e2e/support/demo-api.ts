@@ -33,8 +33,25 @@ async function ok<T>(response: Awaited<ReturnType<APIRequestContext['get']>>): P
 export interface PlannedAircraft {
   side: string;
   grossWeightLb: number;
-  pilot?: string;
+  /**
+   * The demo pilot (`pilot`, `pilot2`…); left out, a demo pilot the plan names nowhere else, since an
+   * aircraft without one cannot join a catapult; `null` for none (a spare brings none either).
+   */
+  pilot?: string | null;
   spare?: boolean;
+}
+
+/** Each aircraft's pilot id: the one named, or the next demo pilot nobody in the plan has (from the last). */
+function crewOf(aircraft: PlannedAircraft[], pilots: UserView[]): (number | undefined)[] {
+  const named = new Set(aircraft.map((planned) => planned.pilot && demoEmail(planned.pilot)));
+  const free = pilots.filter((pilot) => !named.has(pilot.email)).reverse();
+  return aircraft.map((planned) => {
+    if (planned.pilot) return pilots.find((pilot) => pilot.email === demoEmail(planned.pilot!))?.id;
+    if (planned.pilot === null || planned.spare) return undefined;
+    const pilot = free.shift();
+    expect(pilot, 'a free demo pilot for every aircraft').toBeDefined();
+    return pilot!.id;
+  });
 }
 
 export interface PlanOptions {
@@ -72,14 +89,15 @@ export async function planCycle({ aircraft, start = false, night = false }: Plan
   const fleet = await ok<AircraftView[]>(await airops.get('/api/aircraft'));
   const pilots = await ok<UserView[]>(await airops.get('/api/users/pilots'));
   const slotIds = new Map<string, number>();
-  for (const planned of aircraft) {
+  const crew = crewOf(aircraft, pilots);
+  for (const [index, planned] of aircraft.entries()) {
     const plane = fleet.find((candidate) => candidate.sideNumber === planned.side);
     expect(plane, `aircraft ${planned.side} in the demo fleet`).toBeDefined();
     const result = await ok<LineupCommandResult>(
       await airops.post(`/api/cycles/${cycle.id}/slots`, {
         data: {
           aircraftId: plane!.id,
-          pilotId: planned.pilot ? pilots.find((pilot) => pilot.email === demoEmail(planned.pilot!))?.id : undefined,
+          pilotId: crew[index],
           mission: 'Training sortie',
           fuelLb: 9000,
           stores: 'Clean',

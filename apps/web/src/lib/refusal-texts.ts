@@ -33,6 +33,7 @@ const REASONS: Record<RefusalCode, string> = {
   slot_not_movable: 'the aircraft cannot be moved now',
   spare_unavailable: 'no spare can take its place',
   spare_held: 'the spare is held until called',
+  pilot_missing: 'the aircraft has no pilot',
   agreement_required: "the catapult officer's agreement is needed",
   not_your_catapult: 'not your catapult',
   not_your_slot: 'not your aircraft',

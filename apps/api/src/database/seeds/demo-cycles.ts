@@ -70,7 +70,7 @@ const flownSorties: DemoSortie[] = [
   strike('C21', 44_800, { pilot: pilot(1) }),
   strike('C22', 46_200, { pilot: pilot(4) }),
   strike('C23', 43_500, { pilot: pilot(5) }),
-  strike('C24', 45_100),
+  strike('C24', 45_100, { pilot: pilot(9) }),
   strike('D33', 47_300, { pilot: pilot(6) }),
   strike('D34', 42_900, { pilot: pilot(7) }),
   {
@@ -81,7 +81,8 @@ const flownSorties: DemoSortie[] = [
     stores: '2 rocket pods',
     pilot: pilot(8),
   },
-  strike('C31', 44_000, { spare: true, pilot: pilot(9), mission: 'Spare' }),
+  // Its pilot comes from C24 when C24 goes down.
+  strike('C31', 44_000, { spare: true, mission: 'Spare' }),
 ];
 
 /** Catapult number, then its aircraft in launch order. */
@@ -130,6 +131,8 @@ async function flyEarlierCycle(deck: DemoDeck, shipId: number, planned: Date): P
     deck.clock.advance(20);
   }
   await deck.markDown(cycleId, HANDLER, 'C24', 'C31');
+  deck.clock.advance(20);
+  await deck.acknowledgeWeight(cycleId, 'C31');
   deck.clock.at = new Date(planned.getTime() - 2 * MINUTE);
   await deck.start(cycleId, AIR_BOSS);
 

@@ -1,4 +1,4 @@
-import type { SlotView } from '@catline/contracts';
+import { RETURNABLE_STATUSES, type SlotView } from '@catline/contracts';
 import { isDone } from './lineup-model.js';
 
 /** One entry of a slot card's menu. */
@@ -14,6 +14,10 @@ export interface SlotAction {
 /** What the lineup screen can do to a slot; each handler opens its dialog or sends its command. */
 export interface SlotActionHandlers {
   markDown: (slot: SlotView) => void;
+  assignPilot: (slot: SlotView) => void;
+  callSpare: (slot: SlotView) => void;
+  upAgain: (slot: SlotView) => void;
+  returnToPool: (slot: SlotView) => void;
 }
 
 /**
@@ -23,6 +27,18 @@ export interface SlotActionHandlers {
  */
 export function slotActions(slot: SlotView, handlers: SlotActionHandlers): SlotAction[] {
   const actions: SlotAction[] = [];
+  // The server lets a pilot change only while the aircraft is planned or down.
+  if ((slot.status === 'planned' && !slot.heldSpare) || slot.status === 'down') {
+    const label = slot.pilotId === null ? 'Assign pilot…' : 'Change pilot…';
+    actions.push({ id: 'assign-pilot', label, run: () => handlers.assignPilot(slot) });
+  }
+  if (slot.status === 'down') {
+    actions.push({ id: 'call-spare', label: 'Call a spare…', run: () => handlers.callSpare(slot) });
+    actions.push({ id: 'up-again', label: 'Up again…', run: () => handlers.upAgain(slot) });
+  }
+  if (RETURNABLE_STATUSES.includes(slot.status)) {
+    actions.push({ id: 'return-to-pool', label: 'Return to deck pool…', run: () => handlers.returnToPool(slot) });
+  }
   if (!isDone(slot)) {
     actions.push({ id: 'mark-down', label: 'Mark down…', tone: 'danger', run: () => handlers.markDown(slot) });
   }

@@ -4,4 +4,7 @@ import { lineupKeys } from '../../../lib/live/lineup-keys.js';
 export const lineupFeatureKeys = {
   ...lineupKeys,
   suggestion: (cycleId: number, basisVersion: number) => ['lineup', 'suggestion', cycleId, basisVersion] as const,
+  spares: (cycleId: number, slotId: number, basisVersion: number) =>
+    ['lineup', 'spares', cycleId, slotId, basisVersion] as const,
+  pilots: () => ['lineup', 'pilots'] as const,
 };

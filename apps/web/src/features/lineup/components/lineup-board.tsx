@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react';
-import { Box, Grid, Text } from '@chakra-ui/react';
+import { Box, Grid, HStack, Text } from '@chakra-ui/react';
 import { DndContext, DragOverlay } from '@dnd-kit/core';
 import type { LaneView, LineupSnapshot, MoveSlotRequest, SlotView } from '@catline/contracts';
 import { useLineupDrag } from '../hooks/use-lineup-drag.js';
@@ -66,9 +66,20 @@ export function LineupBoard({
           action={poolAction}
           downList={
             downSlots.length > 0 && (
-              <Text fontSize="sm" color="nogo.fg" px="2" data-testid="down-list">
-                Down: {downSlots.map((slot) => slot.sideNumber).join(', ')}
-              </Text>
+              <HStack gap="1" px="2" wrap="wrap" data-testid="down-list">
+                <Text fontSize="sm" color="nogo.fg">
+                  Down:
+                </Text>
+                {downSlots.map((slot) => (
+                  // Each down aircraft keeps its menu: a spare for it, up again, its pilot.
+                  <HStack key={slot.id} gap="0" data-side-number={slot.sideNumber}>
+                    <Text fontSize="sm" color="nogo.fg" fontWeight="600">
+                      {slot.sideNumber}
+                    </Text>
+                    {arranges && <SlotMenu slot={slot} actions={actionsFor(slot)} />}
+                  </HStack>
+                ))}
+              </HStack>
             )
           }
         >

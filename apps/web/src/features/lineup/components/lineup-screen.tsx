@@ -13,19 +13,29 @@ import { useViewedCycle } from '../../../lib/queries/use-viewed-cycle.js';
 import { useHasRole } from '../../../lib/session-store.js';
 import { useCycleTheme } from '../../../theme/use-cycle-theme.js';
 import { useApplySuggestion } from '../api/apply-suggestion.js';
+import { useAssignPilot } from '../api/assign-pilot.js';
+import { useCallSpare } from '../api/call-spare.js';
 import { useMarkDown } from '../api/mark-down.js';
 import { useMoveSlot } from '../api/move-slot.js';
+import { useReturnToPool } from '../api/return-to-pool.js';
 import { useSetCatapultStatus } from '../api/set-catapult-status.js';
+import { useUpAgain } from '../api/up-again.js';
 import { isDone, lineupWarnings } from '../lineup-model.js';
 import { slotActions } from '../slot-actions.js';
+import { AssignPilotDialog } from './assign-pilot-dialog.js';
+import { CallSpareDialog } from './call-spare-dialog.js';
 import { CatapultStatusDialog } from './catapult-status-dialog.js';
 import { LineupBoard } from './lineup-board.js';
 import { LineupWarnings } from './lineup-warnings.js';
 import { MarkDownDialog } from './mark-down-dialog.js';
+import { ReasonDialog } from './reason-dialog.js';
 import { SuggestionDialog } from './suggestion-dialog.js';
 
 type OpenDialog =
-  { kind: 'down'; slot: SlotView } | { kind: 'catapult'; lane: LaneView } | { kind: 'suggestion' } | null;
+  | { kind: 'down' | 'pilot' | 'spare' | 'up' | 'return'; slot: SlotView }
+  | { kind: 'catapult'; lane: LaneView }
+  | { kind: 'suggestion' }
+  | null;
 
 function Figure({ label, children, testId }: { label: string; children: ReactNode; testId?: string }) {
   return (
@@ -75,6 +85,10 @@ function LineupWorkspace({ snapshot }: { snapshot: LineupSnapshot }) {
   const markDown = useMarkDown(cycleId);
   const catapultStatus = useSetCatapultStatus(cycleId);
   const applySuggestion = useApplySuggestion(cycleId);
+  const assignPilot = useAssignPilot(cycleId);
+  const callSpare = useCallSpare(cycleId);
+  const upAgain = useUpAgain(cycleId);
+  const returnToPool = useReturnToPool(cycleId);
 
   const close = () => setDialog(null);
   const done = (title: string) => () => {
@@ -96,7 +110,15 @@ function LineupWorkspace({ snapshot }: { snapshot: LineupSnapshot }) {
         arranges={arranges}
         editable={editable}
         onMove={(request) => move.mutate(request, { onError: refused('Your move') })}
-        actionsFor={(slot) => slotActions(slot, { markDown: (chosen) => setDialog({ kind: 'down', slot: chosen }) })}
+        actionsFor={(slot) =>
+          slotActions(slot, {
+            markDown: (chosen) => setDialog({ kind: 'down', slot: chosen }),
+            assignPilot: (chosen) => setDialog({ kind: 'pilot', slot: chosen }),
+            callSpare: (chosen) => setDialog({ kind: 'spare', slot: chosen }),
+            upAgain: (chosen) => setDialog({ kind: 'up', slot: chosen }),
+            returnToPool: (chosen) => setDialog({ kind: 'return', slot: chosen }),
+          })
+        }
         onCatapultStatus={(lane) => setDialog({ kind: 'catapult', lane })}
         poolAction={
           arranges ? (
@@ -126,6 +148,75 @@ function LineupWorkspace({ snapshot }: { snapshot: LineupSnapshot }) {
             markDown.mutate(
               { slotId: dialog.slot.id, slotVersion: dialog.slot.version, spareSlotId },
               { onSuccess: done(`${dialog.slot.sideNumber} is down`), onError: refused('Marking down') },
+            )
+          }
+        />
+      )}
+      {dialog?.kind === 'pilot' && (
+        <AssignPilotDialog
+          snapshot={snapshot}
+          slot={dialog.slot}
+          pending={assignPilot.isPending}
+          onClose={close}
+          onConfirm={(pilotId) =>
+            assignPilot.mutate(
+              { slotId: dialog.slot.id, slotVersion: dialog.slot.version, pilotId },
+              { onSuccess: done(`Pilot of ${dialog.slot.sideNumber} saved`), onError: refused('The pilot change') },
+            )
+          }
+        />
+      )}
+      {dialog?.kind === 'spare' && (
+        <CallSpareDialog
+          snapshot={snapshot}
+          down={dialog.slot}
+          pending={callSpare.isPending}
+          onClose={close}
+          onConfirm={(spare) =>
+            callSpare.mutate(
+              {
+                slotId: dialog.slot.id,
+                slotVersion: dialog.slot.version,
+                spareSlotId: spare.id,
+                spareVersion: spare.version,
+              },
+              {
+                onSuccess: done(`${spare.sideNumber} called for ${dialog.slot.sideNumber}`),
+                onError: refused('Calling the spare'),
+              },
+            )
+          }
+        />
+      )}
+      {dialog?.kind === 'up' && (
+        <ReasonDialog
+          title={`${dialog.slot.sideNumber} up again`}
+          explanation="It goes back to the deck pool, planned, and can join a catapult again."
+          confirmLabel={`${dialog.slot.sideNumber} is up`}
+          placeholder="e.g. hydraulic leak fixed"
+          pending={upAgain.isPending}
+          onClose={close}
+          onConfirm={(reason) =>
+            upAgain.mutate(
+              { slotId: dialog.slot.id, slotVersion: dialog.slot.version, reason },
+              { onSuccess: done(`${dialog.slot.sideNumber} is up again`), onError: refused('Up again') },
+            )
+          }
+        />
+      )}
+      {dialog?.kind === 'return' && (
+        <ReasonDialog
+          title={`Return ${dialog.slot.sideNumber} to the deck pool`}
+          explanation="It leaves its catapult and keeps its pilot; the catapult's steps start again when it next comes up."
+          confirmLabel={`Return ${dialog.slot.sideNumber}`}
+          placeholder="e.g. nose wheel steering fault"
+          agreement="The catapult officer agreed"
+          pending={returnToPool.isPending}
+          onClose={close}
+          onConfirm={(reason, catapultOfficerAgreed) =>
+            returnToPool.mutate(
+              { slotId: dialog.slot.id, slotVersion: dialog.slot.version, reason, catapultOfficerAgreed },
+              { onSuccess: done(`${dialog.slot.sideNumber} is back in the deck pool`), onError: refused('The return') },
             )
           }
         />

@@ -45,6 +45,7 @@ type Method = 'get' | 'post' | 'patch';
 export class LineupDriver {
   private readonly tokens = new Map<string, Promise<string>>();
   private aircraft?: Promise<AircraftView[]>;
+  private pilots?: Promise<UserView[]>;
   private ship?: Promise<ShipView>;
 
   /** `tokenOf` may hand over tokens the caller already holds; anyone else signs in. */
@@ -128,7 +129,7 @@ export class LineupDriver {
     fields: Partial<AddSlotRequest> & { pilotEmail?: string } = {},
   ): Promise<SlotView> {
     const { pilotEmail, ...rest } = fields;
-    const pilotId = pilotEmail ? (await this.me(pilotEmail)).id : null;
+    const pilotId = pilotEmail ? await this.pilotId(pilotEmail) : null;
     const result = await this.ok<LineupCommandResult>(AIR_OPS, 'post', `/api/cycles/${cycleId}/slots`, {
       aircraftId: await this.aircraftId(side),
       pilotId,
@@ -142,6 +143,16 @@ export class LineupDriver {
       ...rest,
     });
     return result.change.patch.slots!.find((slot) => slot.sideNumber === side)!;
+  }
+
+  /** A pilot's id from air operations' list (no sign-in as the pilot, which the login limits would slow). */
+  async pilotId(email: string): Promise<number> {
+    const find = async () => (await this.pilots)?.find((person) => person.email === email);
+    // A pilot created after the list was read: read it again.
+    if (!(await find())) this.pilots = this.ok<UserView[]>(AIR_OPS, 'get', '/api/users/pilots');
+    const found = await find();
+    if (!found) throw new Error(`${email} is not an active pilot`);
+    return found.id;
   }
 
   async me(email: string): Promise<{ id: number; catapultId: number | null }> {
@@ -161,11 +172,9 @@ export class LineupDriver {
     const slot = snapshot.slots.find((candidate) => candidate.id === slotId)!;
     if (slot.pilotId !== null) return;
     const flying = new Set(snapshot.slots.map((candidate) => candidate.pilotId));
-    const pilots = await this.ok<UserView[]>(AIR_OPS, 'get', '/api/users/pilots');
-    const byEmail = new Map(pilots.map((person) => [person.email, person.id]));
     for (let n = DEMO_PILOTS; n >= 1; n--) {
-      const id = byEmail.get(pilot(n));
-      if (id === undefined || flying.has(id)) continue;
+      const id = await this.pilotId(pilot(n));
+      if (flying.has(id)) continue;
       await this.ok(AIR_OPS, 'post', `/api/cycles/${cycleId}/lineup/slots/${slotId}/pilot`, {
         slotVersion: slot.version,
         pilotId: id,

@@ -38,7 +38,7 @@ const utcDay = (ms: number) => iso(ms).slice(0, 10);
 const seconds = (from: string, to: string) => (Date.parse(to) - Date.parse(from)) / 1000;
 
 // The launch record's note of the waiver: the gate in words, then the air boss's reason.
-const OVERRIDE = 'excess wind over deck below the recommended value: Ship cannot make more wind';
+const WAIVER = 'excess wind over deck below the recommended value: Ship cannot make more wind';
 const SUSPEND = 'Launch bar not seated';
 
 interface Flown {
@@ -236,7 +236,7 @@ describe('cycle reports, exports and shot counts', () => {
       ]);
     });
 
-    it('lists the suspend, the down aircraft with its spare and the override', () => {
+    it('lists the suspend, the down aircraft with its spare and the waiver', () => {
       expect(report.suspends).toHaveLength(1);
       expect(report.suspends[0]).toMatchObject({
         sideNumber: 'C25',
@@ -255,14 +255,14 @@ describe('cycle reports, exports and shot counts', () => {
           spare: { slotId: flown.ids['C27'], sideNumber: 'C27', squadronCode: 'CWR' },
         }),
       ]);
-      expect(report.overrides).toEqual([
+      expect(report.waivers).toEqual([
         {
           slotId: flown.ids['D37'],
           sideNumber: 'D37',
           squadronCode: 'DFM',
           catapultNumber: 2,
           launchedAt: flown.launchedAt['D37'],
-          reason: OVERRIDE,
+          reason: WAIVER,
           by: 'Sam Dellavint',
         },
       ]);
@@ -277,7 +277,7 @@ describe('cycle reports, exports and shot counts', () => {
         outsideWindow: 2,
         suspends: 1,
         down: 1,
-        overrides: 1,
+        waivers: 1,
         scratched: 1,
       });
       expect(report.squadrons.map(({ squadronId: _id, ...figures }) => figures)).toEqual([
@@ -290,7 +290,7 @@ describe('cycle reports, exports and shot counts', () => {
           outsideWindow: 2,
           suspends: 1,
           down: 0,
-          overrides: 0,
+          waivers: 0,
           scratched: 0,
         },
         {
@@ -302,7 +302,7 @@ describe('cycle reports, exports and shot counts', () => {
           outsideWindow: 0,
           suspends: 0,
           down: 1,
-          overrides: 1,
+          waivers: 1,
           scratched: 1,
         },
       ]);
@@ -378,7 +378,7 @@ describe('cycle reports, exports and shot counts', () => {
         'pilot_weight_ack_at',
         'catapult_weight_ack_at',
         'suspend_reason',
-        'override_reason',
+        'waiver_reason',
         'down_at',
         'replaced_by',
         'record_source',
@@ -418,7 +418,7 @@ describe('cycle reports, exports and shot counts', () => {
         spare: 'false',
         suspend_reason: '',
       });
-      expect(row('D37')).toMatchObject({ gross_weight_lb: '51000', override_reason: OVERRIDE, in_window: 'true' });
+      expect(row('D37')).toMatchObject({ gross_weight_lb: '51000', waiver_reason: WAIVER, in_window: 'true' });
       expect(row('D38')).toMatchObject({ status: 'down', catapult: '', replaced_by: 'C27' });
       expect(row('C27')).toMatchObject({ spare: 'true', catapult: '2', position: '2' });
       expect(row('D39')).toMatchObject({ status: 'scratched', launched_at: '', planned_catapult: '2' });

@@ -29,8 +29,8 @@ export interface ReportLaunch {
   /** Launched inside the cycle's launch window; null unless launched. */
   inWindow: boolean | null;
   status: SlotStatus;
-  /** The catapult officer's reason for launching on a no-go figure. */
-  overrideReason: string | null;
+  /** The air boss's waiver the aircraft launched on (the soft gate and the reason); null without one. */
+  waiverReason: string | null;
   /** The figures used with the shot as frozen at the launch command; null unless launched. */
   launchRecord: LaunchRecord | null;
 }
@@ -102,7 +102,8 @@ export interface ReportDown {
   spare: { slotId: number; sideNumber: string; squadronCode: string } | null;
 }
 
-export interface ReportOverride {
+/** A launch on a waiver of a soft gate. */
+export interface ReportWaiver {
   slotId: number;
   sideNumber: string;
   squadronCode: string;
@@ -123,7 +124,8 @@ export interface ReportFigures {
   /** Suspend events (an aircraft suspended twice counts twice). */
   suspends: number;
   down: number;
-  overrides: number;
+  /** Launched on a waiver. */
+  waivers: number;
   /** Not launched when the cycle closed. */
   scratched: number;
 }
@@ -134,7 +136,7 @@ export interface SquadronReport extends ReportFigures {
   squadronName: string;
 }
 
-/** The record of one cycle: planned against actual per catapult, intervals, suspends, down aircraft, overrides. */
+/** The record of one cycle: planned against actual per catapult, intervals, suspends, down aircraft, waivers. */
 export interface CycleReport {
   cycle: CycleView;
   plannedBasis: PlannedBasis;
@@ -148,7 +150,7 @@ export interface CycleReport {
   pairs: PairTimeline[];
   suspends: ReportSuspend[];
   downs: ReportDown[];
-  overrides: ReportOverride[];
+  waivers: ReportWaiver[];
   totals: ReportFigures;
   squadrons: SquadronReport[];
 }

@@ -76,7 +76,7 @@ export const SLOT_COLUMNS = [
   'pilot_weight_ack_at',
   'catapult_weight_ack_at',
   'suspend_reason',
-  'override_reason',
+  'waiver_reason',
   'down_at',
   'replaced_by',
   ...LAUNCH_RECORD_COLUMNS,

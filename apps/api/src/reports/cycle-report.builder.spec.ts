@@ -194,7 +194,7 @@ describe('buildCycleReport', () => {
     ]);
   });
 
-  it('lists the suspend, the down aircraft with its spare, and the override with who launched', () => {
+  it('lists the suspend, the down aircraft with its spare, and the waiver with who launched', () => {
     expect(report.suspends).toEqual([
       {
         slotId: 5,
@@ -218,7 +218,7 @@ describe('buildCycleReport', () => {
         spare: { slotId: 4, sideNumber: 'D34', squadronCode: 'DFM' },
       },
     ]);
-    expect(report.overrides).toEqual([
+    expect(report.waivers).toEqual([
       {
         slotId: 2,
         sideNumber: 'C22',
@@ -239,7 +239,7 @@ describe('buildCycleReport', () => {
       outsideWindow: 1,
       suspends: 1,
       down: 1,
-      overrides: 1,
+      waivers: 1,
       scratched: 2,
     });
     expect(report.squadrons).toEqual([
@@ -253,7 +253,7 @@ describe('buildCycleReport', () => {
         outsideWindow: 0,
         suspends: 0,
         down: 0,
-        overrides: 1,
+        waivers: 1,
         scratched: 1,
       },
       {
@@ -266,7 +266,7 @@ describe('buildCycleReport', () => {
         outsideWindow: 1,
         suspends: 1,
         down: 1,
-        overrides: 0,
+        waivers: 0,
         scratched: 0,
       },
       {
@@ -279,7 +279,7 @@ describe('buildCycleReport', () => {
         outsideWindow: 0,
         suspends: 0,
         down: 0,
-        overrides: 0,
+        waivers: 0,
         scratched: 1,
       },
     ]);

@@ -5,7 +5,7 @@ import type {
   PairTimeline,
   ReportDown,
   ReportLaunch,
-  ReportOverride,
+  ReportWaiver,
   ReportSuspend,
   SquadronReport,
 } from '@catline/contracts';
@@ -103,7 +103,7 @@ export function buildCycleReport({ state, changes }: CycleRecord): CycleReport {
       deltaS: plannedAt !== null && launchedAt !== null ? secondsBetween(plannedAt, launchedAt) : null,
       inWindow: launchedAt === null ? null : insideWindow(launchedAt, window),
       status: slot.status,
-      overrideReason: slot.status === 'launched' ? slot.overrideReason : null,
+      waiverReason: slot.status === 'launched' ? slot.overrideReason : null,
       launchRecord: slot.status === 'launched' ? slot.launchRecord : null,
     };
   });
@@ -166,8 +166,8 @@ export function buildCycleReport({ state, changes }: CycleRecord): CycleReport {
     };
   });
 
-  const overrides: ReportOverride[] = lines.flatMap((line) =>
-    line.overrideReason !== null && line.launchedAt !== null && line.catapultNumber !== null
+  const waivers: ReportWaiver[] = lines.flatMap((line) =>
+    line.waiverReason !== null && line.launchedAt !== null && line.catapultNumber !== null
       ? [
           {
             slotId: line.slotId,
@@ -175,7 +175,7 @@ export function buildCycleReport({ state, changes }: CycleRecord): CycleReport {
             squadronCode: line.squadronCode,
             catapultNumber: line.catapultNumber,
             launchedAt: line.launchedAt,
-            reason: line.overrideReason,
+            reason: line.waiverReason,
             by: log.launchedBy.get(line.slotId) ?? null,
           },
         ]
@@ -213,7 +213,7 @@ export function buildCycleReport({ state, changes }: CycleRecord): CycleReport {
     pairs,
     suspends,
     downs,
-    overrides,
+    waivers,
     totals: countFigures(lines, log.suspends.length),
     squadrons,
   };

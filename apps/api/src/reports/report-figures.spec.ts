@@ -93,14 +93,14 @@ describe('secondsBetween', () => {
 });
 
 describe('countFigures', () => {
-  it('counts launches, window verdicts, down, overrides and scratched aircraft, with the suspends given', () => {
+  it('counts launches, window verdicts, down, waivers and scratched aircraft, with the suspends given', () => {
     const figures = countFigures(
       [
-        { status: 'launched', inWindow: true, overrideReason: null },
-        { status: 'launched', inWindow: false, overrideReason: 'Margin within ship limits' },
-        { status: 'launched', inWindow: true, overrideReason: null },
-        { status: 'down', inWindow: null, overrideReason: null },
-        { status: 'scratched', inWindow: null, overrideReason: null },
+        { status: 'launched', inWindow: true, waiverReason: null },
+        { status: 'launched', inWindow: false, waiverReason: 'Margin within ship limits' },
+        { status: 'launched', inWindow: true, waiverReason: null },
+        { status: 'down', inWindow: null, waiverReason: null },
+        { status: 'scratched', inWindow: null, waiverReason: null },
       ],
       2,
     );
@@ -111,7 +111,7 @@ describe('countFigures', () => {
       outsideWindow: 1,
       suspends: 2,
       down: 1,
-      overrides: 1,
+      waivers: 1,
       scratched: 1,
     });
   });

@@ -55,7 +55,7 @@ export function intervalSpread(intervals: readonly LaunchInterval[]): IntervalSp
 }
 
 /** How one aircraft's part in the cycle ended. */
-export type SlotOutcome = Pick<ReportLaunch, 'status' | 'inWindow' | 'overrideReason'>;
+export type SlotOutcome = Pick<ReportLaunch, 'status' | 'inWindow' | 'waiverReason'>;
 
 /** The counts over a set of aircraft (a squadron's, or the cycle's) and the suspends they had. */
 export function countFigures(outcomes: readonly SlotOutcome[], suspends: number): ReportFigures {
@@ -67,7 +67,7 @@ export function countFigures(outcomes: readonly SlotOutcome[], suspends: number)
     outsideWindow: count((outcome) => outcome.inWindow === false),
     suspends,
     down: count((outcome) => outcome.status === 'down'),
-    overrides: count((outcome) => outcome.overrideReason !== null),
+    waivers: count((outcome) => outcome.waiverReason !== null),
     scratched: count((outcome) => outcome.status === 'scratched'),
   };
 }

@@ -51,7 +51,7 @@ function launch(
     deltaS,
     inWindow: launchedAt ? true : null,
     status: launchedAt ? 'launched' : 'scratched',
-    overrideReason: null,
+    waiverReason: null,
     launchRecord: null,
   };
 }
@@ -77,7 +77,7 @@ function report(catapults: CatapultTimeline[]): CycleReport {
     outsideWindow: 0,
     suspends: 0,
     down: 0,
-    overrides: 0,
+    waivers: 0,
     scratched: 0,
   };
   return {
@@ -92,7 +92,7 @@ function report(catapults: CatapultTimeline[]): CycleReport {
     pairs: [],
     suspends: [],
     downs: [],
-    overrides: [],
+    waivers: [],
     totals: empty,
     squadrons: [],
   };

@@ -12,7 +12,7 @@ import {
   type ReportDown,
   type ReportFigures,
   type ReportLaunch,
-  type ReportOverride,
+  type ReportWaiver,
   type ReportSuspend,
   SLOT_STATUSES,
   type ShotCounts,
@@ -71,8 +71,8 @@ export class ReportLaunchDto implements ReportLaunch {
   @EnumProperty(SLOT_STATUSES, 'SlotStatus')
   status: SlotStatus;
 
-  @ApiProperty({ type: String, nullable: true })
-  overrideReason: string | null;
+  @ApiProperty({ type: String, nullable: true, description: 'The waiver the aircraft launched on.' })
+  waiverReason: string | null;
 
   @ApiProperty({ type: () => LaunchRecordDto, nullable: true, description: 'Null unless launched.' })
   launchRecord: LaunchRecord | null;
@@ -222,8 +222,8 @@ export class ReportDownDto implements ReportDown {
   spare: ReportSpareDto | null;
 }
 
-@ApiSchema({ name: 'ReportOverride' })
-export class ReportOverrideDto implements ReportOverride {
+@ApiSchema({ name: 'ReportWaiver' })
+export class ReportWaiverDto implements ReportWaiver {
   @IdProperty()
   slotId: number;
 
@@ -267,7 +267,7 @@ export class ReportFiguresDto implements ReportFigures {
   down: number;
 
   @IntProperty({ minimum: 0 })
-  overrides: number;
+  waivers: number;
 
   @IntProperty({ minimum: 0 })
   scratched: number;
@@ -320,8 +320,8 @@ export class CycleReportDto implements CycleReport {
   @ApiProperty({ type: [ReportDownDto] })
   downs: ReportDown[];
 
-  @ApiProperty({ type: [ReportOverrideDto] })
-  overrides: ReportOverride[];
+  @ApiProperty({ type: [ReportWaiverDto] })
+  waivers: ReportWaiver[];
 
   @ApiProperty({ type: () => ReportFiguresDto })
   totals: ReportFigures;

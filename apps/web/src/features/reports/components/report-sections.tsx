@@ -7,7 +7,7 @@ import type {
   LaunchInterval,
   PairTimeline,
   ReportDown,
-  ReportOverride,
+  ReportWaiver,
   ReportSuspend,
   SquadronReport,
 } from '@catline/contracts';
@@ -62,9 +62,9 @@ export function ReportSummary({ report }: { report: CycleReport }) {
         />
         <FigureStat label="Down" value={totals.down} tone={totals.down > 0 ? 'caution' : undefined} size="md" />
         <FigureStat
-          label="Overrides"
-          value={totals.overrides}
-          tone={totals.overrides > 0 ? 'caution' : undefined}
+          label="Waivers"
+          value={totals.waivers}
+          tone={totals.waivers > 0 ? 'caution' : undefined}
           size="md"
         />
         <FigureStat label="First launch" value={formatOptionalClock(report.firstLaunchAt)} size="md" />
@@ -149,7 +149,7 @@ const downColumns: ReportColumn<ReportDown>[] = [
   { header: 'By', cell: (event) => event.by },
 ];
 
-const overrideColumns: ReportColumn<ReportOverride>[] = [
+const waiverColumns: ReportColumn<ReportWaiver>[] = [
   { header: 'Side', cell: (event) => `${event.sideNumber} (${event.squadronCode})` },
   { header: 'Cat', cell: (event) => event.catapultNumber, numeric: true },
   { header: 'Launched', cell: (event) => formatClock(event.launchedAt), numeric: true },
@@ -178,13 +178,13 @@ export function EventsSection({ report }: { report: CycleReport }) {
           empty="No aircraft went down."
         />
       </ReportSection>
-      <ReportSection title="Launches on override">
+      <ReportSection title="Launches on a waiver">
         <ReportTable
-          caption="Launches on override"
-          rows={report.overrides}
-          columns={overrideColumns}
+          caption="Launches on a waiver"
+          rows={report.waivers}
+          columns={waiverColumns}
           rowKey={(event) => event.slotId}
-          empty="No launch needed an override."
+          empty="No launch needed a waiver."
         />
       </ReportSection>
     </SimpleGrid>
@@ -199,7 +199,7 @@ const squadronColumns: ReportColumn<SquadronReport>[] = [
   { header: 'Outside window', cell: (squadron) => squadron.outsideWindow, numeric: true },
   { header: 'Suspends', cell: (squadron) => squadron.suspends, numeric: true },
   { header: 'Down', cell: (squadron) => squadron.down, numeric: true },
-  { header: 'Overrides', cell: (squadron) => squadron.overrides, numeric: true },
+  { header: 'Waivers', cell: (squadron) => squadron.waivers, numeric: true },
   { header: 'Scratched', cell: (squadron) => squadron.scratched, numeric: true },
 ];
 

@@ -57,7 +57,7 @@ function CycleReportPanel({ cycle }: { cycle: CycleView }) {
   );
 }
 
-/** A cycle's record: planned against actual per catapult, intervals, suspends, down aircraft and spares, overrides, squadrons. */
+/** A cycle's record: planned against actual per catapult, intervals, suspends, down aircraft and spares, waivers, squadrons. */
 export function ReportsScreen() {
   const { cycles, cycle, choose } = useReportCycle();
   return (

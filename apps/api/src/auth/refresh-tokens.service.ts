@@ -1,11 +1,16 @@
-import { createHash, randomBytes, randomUUID } from 'node:crypto';
+import { createHash, createHmac, randomBytes, randomUUID } from 'node:crypto';
 import { Injectable, Logger } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, type EntityManager, LessThan } from 'typeorm';
 import { RefreshToken } from '../database/entities/refresh-token.entity.js';
+import type { Environment } from '../config/environment.js';
 import { User } from '../database/entities/user.entity.js';
 
 export const REFRESH_TOKEN_LIFETIME_MS = 12 * 60 * 60 * 1000;
+// A token replaced this recently is answered with the same successor: tabs (or a retry after a lost answer)
+// that sent one cookie at the same moment all go on. Long enough for a slow network, short for a thief.
+export const REPLACED_TOKEN_GRACE_MS = 10_000;
 
 export interface IssuedRefreshToken {
   token: string;
@@ -24,8 +29,9 @@ function digest(token: string): string {
 }
 
 /**
- * Refresh tokens: random, one per sign-in, replaced on every use. A replaced token keeps its row with
- * `revokedAt` set, so its return means a copy exists and every session of the person ends. Sessions
+ * Refresh tokens: random at sign-in, replaced on every use. A replaced token keeps its row with
+ * `revokedAt` set; used again within REPLACED_TOKEN_GRACE_MS it gets the same successor, later its
+ * return means a copy exists and every session of the person ends. Sessions
  * ended on purpose (logout, password change, removal) delete their rows instead: a stale cookie from
  * such a session is merely unknown and cannot end the sessions that followed.
  */
@@ -33,16 +39,33 @@ function digest(token: string): string {
 export class RefreshTokens {
   private readonly logger = new Logger(RefreshTokens.name);
 
-  constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
+  private readonly successorKey: Buffer;
+
+  constructor(
+    @InjectDataSource() private readonly dataSource: DataSource,
+    config: ConfigService<Environment, true>,
+  ) {
+    this.successorKey = createHash('sha256')
+      .update(`refresh-successor:${config.get<string>('JWT_SECRET')}`)
+      .digest();
+  }
+
+  /**
+   * The token that replaces `token`: derived from it with a key of ours, so the same successor can be
+   * answered again within the grace without keeping any token in clear, by any API process.
+   */
+  private successorOf(token: string): string {
+    return createHmac('sha256', this.successorKey).update(token).digest('base64url');
+  }
 
   /** A token of a new session, or the next token of `sessionId`. */
   async issue(
     userId: number,
     manager: EntityManager = this.dataSource.manager,
     sessionId: string = randomUUID(),
+    token: string = randomBytes(32).toString('base64url'),
   ): Promise<IssuedRefreshToken> {
     await manager.delete(RefreshToken, { userId, expiresAt: LessThan(new Date()) });
-    const token = randomBytes(32).toString('base64url');
     const expiresAt = new Date(Date.now() + REFRESH_TOKEN_LIFETIME_MS);
     await manager.insert(RefreshToken, { userId, sessionId, tokenHash: digest(token), expiresAt, revokedAt: null });
     return { token, sessionId, expiresAt };
@@ -56,6 +79,8 @@ export class RefreshTokens {
         lock: { mode: 'pessimistic_write' },
       });
       if (!stored) return { outcome: 'refused', reason: 'unknown' };
+      const again = stored.revokedAt ? await this.successorWithinGrace(stored, token, manager) : undefined;
+      if (again) return again;
       if (stored.revokedAt) {
         this.logger.warn(`Replaced refresh token of user ${stored.userId} used again; ending all their sessions`);
         await this.revokeAllFor(stored.userId, manager);
@@ -66,8 +91,28 @@ export class RefreshTokens {
       const user = await manager.findOneBy(User, { id: stored.userId });
       if (!user?.active) return { outcome: 'refused', reason: 'inactive' };
       await manager.update(RefreshToken, { id: stored.id }, { revokedAt: new Date() });
-      return { outcome: 'rotated', user, next: await this.issue(user.id, manager, stored.sessionId) };
+      const next = await this.issue(user.id, manager, stored.sessionId, this.successorOf(token));
+      return { outcome: 'rotated', user, next };
     });
+  }
+
+  /** The live successor of a token replaced within the grace, answered again; undefined past it. */
+  private async successorWithinGrace(
+    stored: RefreshToken,
+    token: string,
+    manager: EntityManager,
+  ): Promise<RotationResult | undefined> {
+    if (!stored.revokedAt || Date.now() - stored.revokedAt.getTime() > REPLACED_TOKEN_GRACE_MS) return undefined;
+    const next = this.successorOf(token);
+    const successor = await manager.findOneBy(RefreshToken, { tokenHash: digest(next), sessionId: stored.sessionId });
+    if (!successor || successor.revokedAt || successor.expiresAt.getTime() <= Date.now()) return undefined;
+    const user = await manager.findOneBy(User, { id: stored.userId });
+    if (!user?.active) return { outcome: 'refused', reason: 'inactive' };
+    return {
+      outcome: 'rotated',
+      user,
+      next: { token: next, sessionId: successor.sessionId, expiresAt: successor.expiresAt },
+    };
   }
 
   /** The session a token of the person belongs to (undefined for someone else's or an unknown token). */

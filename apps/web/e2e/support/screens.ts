@@ -1,4 +1,4 @@
-import { expect, type Browser, type Locator, type Page } from '@playwright/test';
+import { expect, type Browser, type CDPSession, type Locator, type Page } from '@playwright/test';
 import { DEMO_PASSWORD, demoEmail } from './demo-api.js';
 
 /** Opens a screen as a person: the app sends them to sign in and back to the screen they asked for. */
@@ -76,4 +76,44 @@ export async function dragWithTouch(page: Page, from: Locator, to: Locator) {
   }
   await touch.send('Input.dispatchTouchEvent', { type: 'touchEnd', touchPoints: [] });
   await touch.detach();
+}
+
+type Point = { x: number; y: number };
+
+/** Where a drag grabs a card or drops onto a place: across the middle, a little below the top. */
+export async function grabPoint(target: Locator): Promise<Point> {
+  const box = (await target.boundingBox())!;
+  return { x: box.x + box.width / 2, y: box.y + Math.min(box.height / 3, 40) };
+}
+
+/** A mouse drag between two points, with no look-up in between (so it can start right after another). */
+export async function mouseDragBetween(page: Page, from: Point, to: Point) {
+  await page.mouse.move(from.x, from.y);
+  await page.mouse.down();
+  await page.mouse.move(from.x + 12, from.y + 4, { steps: 4 });
+  await page.mouse.move(to.x, to.y, { steps: 15 });
+  await page.mouse.up();
+}
+
+/**
+ * A finger drag between two points through the browser's own touch input: touch, hold past the board's
+ * press delay, move in steps, lift.
+ */
+export async function touchDragBetween(page: Page, from: Point, to: Point, holdMs = 250) {
+  const session = await touchInput(page);
+  const touch = (type: 'touchStart' | 'touchMove' | 'touchEnd', at?: Point) =>
+    session.send('Input.dispatchTouchEvent', { type, touchPoints: at ? [at] : [] });
+  await touch('touchStart', from);
+  await page.waitForTimeout(holdMs);
+  for (let step = 1; step <= 15; step++) {
+    await touch('touchMove', { x: from.x + ((to.x - from.x) * step) / 15, y: from.y + ((to.y - from.y) * step) / 15 });
+  }
+  await touch('touchEnd');
+}
+
+const touchSessions = new WeakMap<Page, Promise<CDPSession>>();
+/** One input session per page, opened once, so a touch starts without a round of set-up before it. */
+function touchInput(page: Page) {
+  if (!touchSessions.has(page)) touchSessions.set(page, page.context().newCDPSession(page));
+  return touchSessions.get(page)!;
 }

@@ -126,7 +126,9 @@ export function LineupBoard({
           );
         })}
       </Grid>
-      <DragOverlay>{held ? <LiftedSlotCard slot={held} /> : null}</DragOverlay>
+      {/* No drop animation: the lifted card would float over the board after the drop and swallow the
+          press of a drag started at once (the board already shows the card in its new place). */}
+      <DragOverlay dropAnimation={null}>{held ? <LiftedSlotCard slot={held} /> : null}</DragOverlay>
     </DndContext>
   );
 }

@@ -3,7 +3,7 @@ import type { INestApplication } from '@nestjs/common';
 import { AIR_BOSS, HANDLER, LineupDriver, catapultOfficer, launchKey, pilot } from './support/lineup-fixtures.js';
 import { startTestApp } from './support/test-app.js';
 
-describe('the deck: tows and the landing area', () => {
+describe('the deck: tows, the landing area and the deck status', () => {
   let app: INestApplication;
   let deck: LineupDriver;
 
@@ -160,6 +160,56 @@ describe('the deck: tows and the landing area', () => {
     });
     expect((await set('clear')).status).toBe(200);
     const launched = await deck.launch(cycle.id, await deck.slot(cycle.id, slot.id), launchKey(), catapultOfficer(3));
+    expect(launched.status).toBe(200);
+  });
+
+  it("holds a catapult on the air boss's deck status: its launch is refused, the other catapult's is not", async () => {
+    const cycle = await deck.createCycle();
+    const held = await deck.addSlot(cycle.id, 'D34', { pilotEmail: pilot(6) });
+    const free = await deck.addSlot(cycle.id, 'C29', { pilotEmail: pilot(7) });
+    await deck.place(cycle.id, held.id, 1);
+    await deck.place(cycle.id, free.id, 2);
+    await deck.start(cycle.id);
+    await deck.readyToLaunch(cycle.id, held.id, pilot(6));
+    await deck.readyToLaunch(cycle.id, free.id, pilot(7));
+    const catapultId = await deck.catapultId(1);
+    const set = (by: string, fields: object) =>
+      deck.snapshot(cycle.id).then((snapshot) =>
+        deck.call(by, 'post', `/api/cycles/${cycle.id}/deck/catapult-status`, {
+          catapultId,
+          basisVersion: snapshot.version,
+          ...fields,
+        }),
+      );
+
+    expect((await set(AIR_BOSS, { clear: false })).status).toBe(400);
+    expect((await set(HANDLER, { clear: false, reason: 'Deck crew forward' })).status).toBe(403);
+    const holding = await set(AIR_BOSS, { clear: false, reason: 'Deck crew forward' });
+    expect(holding.status).toBe(200);
+    expect(holding.body.change).toMatchObject({
+      kind: 'deck_status_set',
+      summary: 'Cat 1 not clear: Deck crew forward',
+    });
+    const lanes = (await deck.snapshot(cycle.id)).lanes;
+    expect(lanes.find((lane) => lane.number === 1)).toMatchObject({
+      deckClear: false,
+      deckHoldReason: 'Deck crew forward',
+    });
+    expect(lanes.find((lane) => lane.number === 2)).toMatchObject({ deckClear: true, deckHoldReason: null });
+
+    const refused = await deck.launch(cycle.id, await deck.slot(cycle.id, held.id), launchKey(), catapultOfficer(1));
+    expect(refused.status).toBe(409);
+    expect(refused.body).toMatchObject({
+      code: 'deck_not_clear',
+      message: 'The air boss has not cleared this catapult to launch: Deck crew forward.',
+    });
+    const other = await deck.launch(cycle.id, await deck.slot(cycle.id, free.id), launchKey(), catapultOfficer(2));
+    expect(other.status).toBe(200);
+    // A hard gate: there is nothing the air boss can waive.
+    expect((await deck.waive(cycle.id, held.id, 'deck_not_clear', 'Hurry')).status).toBeGreaterThanOrEqual(400);
+
+    expect((await set(AIR_BOSS, { clear: true })).body.change.summary).toBe('Cat 1 clear to launch');
+    const launched = await deck.launch(cycle.id, await deck.slot(cycle.id, held.id), launchKey(), catapultOfficer(1));
     expect(launched.status).toBe(200);
   });
 });

@@ -50,6 +50,8 @@ function lane(catapultId: number, slotIds: number[]): LaneView {
     position: catapultId <= 2 ? 'bow' : 'waist',
     status: 'up',
     closed: false,
+    deckClear: true,
+    deckHoldReason: null,
     slotIds,
     go: true,
     headwindKt: 30,

@@ -22,6 +22,22 @@ export interface TowAircraftRequest {
   slotVersion: number;
 }
 
+/** A catapult the air boss has not cleared to launch, and why; every other catapult of the cycle is clear. */
+export interface CatapultDeckHold {
+  catapultId: number;
+  reason: string;
+}
+
+/** The air boss clears a catapult to launch, or holds it with a reason (a change through the cycle's pipeline). */
+export interface SetDeckStatusRequest {
+  catapultId: number;
+  clear: boolean;
+  /** Required when not clear: what keeps the deck ahead of the catapult from launching. */
+  reason?: string | null;
+  /** The cycle version the change was based on. */
+  basisVersion: number;
+}
+
 /** Sets the cycle's landing area; a reason is required when fouled. */
 export interface SetLandingAreaRequest {
   state: LandingAreaState;

@@ -260,6 +260,9 @@ export interface LaneView extends WindOverDeck {
   status: CatapultStatus;
   /** Waist catapults are closed while the landing area is in use. */
   closed: boolean;
+  /** The air boss's deck status for this catapult: clear to launch, or not clear for `deckHoldReason`. */
+  deckClear: boolean;
+  deckHoldReason: string | null;
   /** The lane's slots in launch order. */
   slotIds: number[];
   /** True when every slot still to launch in the lane is go. */
@@ -296,6 +299,7 @@ export const CHANGE_KINDS = [
   'gate_waived',
   'aircraft_towed',
   'landing_area_set',
+  'deck_status_set',
   'spare_called',
   'pilot_assigned',
   'aircraft_up',

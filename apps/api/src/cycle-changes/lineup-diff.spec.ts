@@ -78,6 +78,8 @@ const lane = (catapultId: number, slotIds: number[]): LaneView => ({
   position: 'bow',
   status: 'up',
   closed: false,
+  deckClear: true,
+  deckHoldReason: null,
   headwindKt: 30,
   crosswindKt: 2,
   crosswindSide: 'port',

@@ -1,4 +1,5 @@
 import type { LaneView, LaunchFigures, LineupSnapshot, SlotStatus, SlotView } from '@catline/contracts';
+import { deckHoldOf } from './deck-holds.js';
 import {
   afterburnerRequired,
   catapultClosedReason,
@@ -239,12 +240,15 @@ export function buildSnapshot(state: LineupState): LineupSnapshot {
   const lanes: LaneView[] = state.catapults.map((catapult) => {
     const lane = conditions.lanes.get(catapult.id)!;
     const ids = laneOrder.get(catapult.id)!.map((slot) => slot.id);
+    const hold = deckHoldOf(state.cycle, catapult.id);
     return {
       catapultId: catapult.id,
       number: catapult.number,
       position: catapult.position,
       status: catapult.status,
       closed: lane.closedReason === 'waist_closed',
+      deckClear: hold === undefined,
+      deckHoldReason: hold?.reason ?? null,
       headwindKt: lane.wind.headwind,
       crosswindKt: lane.wind.crosswind,
       crosswindSide: lane.wind.side,

@@ -1,6 +1,7 @@
 import type { LaunchFigures, LaunchGateView } from '@catline/contracts';
 import { launchGates, type LaunchGate, type LaunchGateVerdict, type SoftLaunchGate } from '@catline/launch-math';
 import type { Slot } from '../database/entities/slot.entity.js';
+import { deckHoldOf } from './deck-holds.js';
 import type { LineupState } from './lineup-state.js';
 
 const kt = (value: number) => `${value.toFixed(1)} kt`;
@@ -38,7 +39,7 @@ function sentence(gate: LaunchGate, state: LineupState, slot: Slot, figures: Lau
     case 'cycle_not_executing':
       return `Cycle ${state.cycle.number} is ${state.cycle.state}, not executing; nothing launches.`;
     case 'deck_not_clear':
-      return 'The deck ahead of this catapult is not clear.';
+      return `The air boss has not cleared this catapult to launch: ${deckHoldOf(state.cycle, slot.catapultId)?.reason ?? 'deck not clear'}.`;
     case 'weight_not_agreed':
       return `${side} has no gross weight agreed between the pilot and the catapult crew.`;
     case 'reverify_required':
@@ -87,7 +88,7 @@ export function slotLaunchGates(state: LineupState, slot: Slot, figures: LaunchF
     },
     {
       cycleExecuting: state.cycle.state === 'executing',
-      deckClear: true,
+      deckClear: deckHoldOf(state.cycle, slot.catapultId) === undefined,
       weightAgreed: weightAgreed(slot),
       reverifyRequired: slot.reverifyCause !== null,
       windReadingStale: false,

@@ -12,7 +12,9 @@ import {
 } from '../cycle-changes/deck-positions.js';
 import { LineupException } from '../cycle-changes/lineup.exception.js';
 import { updateSlot } from '../cycle-changes/slot-writes.js';
+import { deckHoldOf } from '../cycle-changes/deck-holds.js';
 import { Cycle } from '../database/entities/cycle.entity.js';
+import type { SetDeckStatusDto } from './dto/set-deck-status.dto.js';
 import type { SetLandingAreaDto } from './dto/set-landing-area.dto.js';
 import type { TowAircraftDto } from './dto/tow-aircraft.dto.js';
 
@@ -98,6 +100,30 @@ export class DeckCommandsService {
       return {
         summary: `Landing area ${request.state}${reason ? `: ${reason}` : ''}`,
         command: { type: 'landing_area', ...request },
+      };
+    });
+  }
+
+  /** The air boss clears a catapult to launch, or holds it with a reason; a held catapult launches nothing. */
+  setDeckStatus(cycleId: number, actor: ChangeActor, request: SetDeckStatusDto): Promise<LineupCommandResult> {
+    return this.changes.apply(cycleId, actor, 'deck_status_set', async (manager, state) => {
+      this.basis.requireOpen(state);
+      await this.basis.cycleAsSeen(manager, state, request.basisVersion);
+      const catapult = state.catapults.find((candidate) => candidate.id === request.catapultId);
+      if (!catapult) {
+        throw new LineupException('not_found', `Catapult ${request.catapultId} is not a catapult of this ship.`);
+      }
+      const reason = request.clear ? null : request.reason!;
+      const held = deckHoldOf(state.cycle, catapult.id);
+      if ((held?.reason ?? null) === reason) {
+        throw new LineupException('no_change', `Cat ${catapult.number} already is ${reason ? 'held' : 'clear'}.`);
+      }
+      const others = (state.cycle.deckHolds ?? []).filter((hold) => hold.catapultId !== catapult.id);
+      const deckHolds = reason === null ? others : [...others, { catapultId: catapult.id, reason }];
+      await manager.update(Cycle, { id: cycleId }, { deckHolds });
+      return {
+        summary: `Cat ${catapult.number} ${reason === null ? 'clear to launch' : `not clear: ${reason}`}`,
+        command: { type: 'deck_status', ...request },
       };
     });
   }

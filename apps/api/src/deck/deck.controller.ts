@@ -8,6 +8,7 @@ import { actorOf } from '../cycle-changes/cycle-change.service.js';
 import { ApiDoc } from '../common/openapi/api-doc.decorator.js';
 import { LineupCommandResultDto } from '../common/openapi/views/lineup.view.js';
 import { DeckCommandsService } from './deck-commands.service.js';
+import { SetDeckStatusDto } from './dto/set-deck-status.dto.js';
 import { SetLandingAreaDto } from './dto/set-landing-area.dto.js';
 import { TowAircraftDto } from './dto/tow-aircraft.dto.js';
 
@@ -53,5 +54,21 @@ export class DeckController {
     @CurrentUser() user: AuthenticatedUser,
   ): Promise<LineupCommandResult> {
     return this.commands.setLandingArea(cycleId, actorOf(user), body);
+  }
+
+  @ApiDoc("Set a catapult's deck status", {
+    response: LineupCommandResultDto,
+    description: 'By the air boss: clear to launch, or not clear with a reason; a catapult not clear launches nothing.',
+    refuses: { 404: ['not_found'], 409: ['stale_basis', 'cycle_closed', 'no_change'], 422: ['launch_data_invalid'] },
+  })
+  @Roles('air_boss')
+  @Post('catapult-status')
+  @HttpCode(HttpStatus.OK)
+  setDeckStatus(
+    @Param('cycleId', ParseIntPipe) cycleId: number,
+    @Body() body: SetDeckStatusDto,
+    @CurrentUser() user: AuthenticatedUser,
+  ): Promise<LineupCommandResult> {
+    return this.commands.setDeckStatus(cycleId, actorOf(user), body);
   }
 }

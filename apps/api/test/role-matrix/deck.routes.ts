@@ -41,4 +41,18 @@ export const deckRoutes: MatrixRoute[] = [
       return { params: { cycleId }, body: { state: 'fouled', reason: 'Arresting wire down', basisVersion: version } };
     },
   },
+  {
+    method: 'POST',
+    path: '/api/cycles/{cycleId}/deck/catapult-status',
+    allowed: ['air_boss'],
+    example: async (context) => {
+      if (!context.allowed) return refused;
+      const { cycleId, version } = await freshCycle(context);
+      const catapultId = await lineupDriver(context).catapultId(1);
+      return {
+        params: { cycleId },
+        body: { catapultId, clear: false, reason: 'Deck crew forward', basisVersion: version },
+      };
+    },
+  },
 ];

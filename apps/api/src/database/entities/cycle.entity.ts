@@ -1,4 +1,4 @@
-import type { CycleState, LandingAreaState, WeatherCase } from '@catline/contracts';
+import type { CatapultDeckHold, CycleState, LandingAreaState, WeatherCase } from '@catline/contracts';
 import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, Unique, type Relation } from 'typeorm';
 import { CreatedAtColumn, InstantColumn, UpdatedAtColumn } from '../columns.js';
 import { Ship } from './ship.entity.js';
@@ -61,6 +61,10 @@ export class Cycle {
 
   @Column({ name: 'landing_area_reason', type: 'varchar', length: 200, nullable: true })
   landingAreaReason: string | null;
+
+  /** The catapults the air boss holds (deck not clear), with why; null or empty when every catapult is clear. */
+  @Column({ name: 'deck_holds', type: 'json', nullable: true })
+  deckHolds: CatapultDeckHold[] | null;
 
   @Column({ type: 'varchar', length: 10, default: 'planning' })
   state: CycleState;

@@ -7,6 +7,7 @@ import { DeckPositionsLandingArea1796201917830 } from './1796201917830-DeckPosit
 import { SlotAgreedWeightAndLastStep1796203000000 } from './1796203000000-SlotAgreedWeightAndLastStep.js';
 import { LaunchingCycleOnePerShip1796213798790 } from './1796213798790-LaunchingCycleOnePerShip.js';
 import { RefreshTokenSession1796213925015 } from './1796213925015-RefreshTokenSession.js';
+import { CycleDeckHolds1796216225592 } from './1796216225592-CycleDeckHolds.js';
 
 /** Every migration in the order it runs; add a new one at the end (see DEVELOPERS.md). */
 export const migrations = [
@@ -19,4 +20,5 @@ export const migrations = [
   SlotAgreedWeightAndLastStep1796203000000,
   LaunchingCycleOnePerShip1796213798790,
   RefreshTokenSession1796213925015,
+  CycleDeckHolds1796216225592,
 ];

@@ -96,6 +96,8 @@ function lane(catapultId: number, number: number, slotIds: number[], extra: Part
     position: 'bow',
     status: 'up',
     closed: false,
+    deckClear: true,
+    deckHoldReason: null,
     slotIds,
     go: true,
     headwindKt: 30,

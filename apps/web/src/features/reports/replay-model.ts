@@ -32,6 +32,7 @@ export const CHANGE_KIND_LABELS: Record<ChangeKind, string> = {
   gate_waived: 'Waiver',
   aircraft_towed: 'Tow',
   landing_area_set: 'Landing area',
+  deck_status_set: 'Deck status',
   spare_called: 'Spare called',
   pilot_assigned: 'Pilot',
   aircraft_up: 'Up again',

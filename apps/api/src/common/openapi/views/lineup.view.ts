@@ -415,6 +415,12 @@ export class LaneViewDto implements LaneView {
   @ApiProperty({ description: 'Waist catapults are closed while the landing area is in use.' })
   closed: boolean;
 
+  @ApiProperty({ description: "The air boss's deck status: clear to launch from this catapult, or not." })
+  deckClear: boolean;
+
+  @ApiProperty({ type: 'string', nullable: true, description: 'Why the deck is not clear; null when clear.' })
+  deckHoldReason: string | null;
+
   @ApiProperty({ type: 'integer', isArray: true, description: "The lane's slots in launch order." })
   slotIds: number[];
 

@@ -28,6 +28,7 @@ import { CatapultEvents } from './catapult-events.js';
 import { LaunchPanel } from './launch-panel.js';
 import { NextUp } from './next-up.js';
 import { ReadinessSteps } from './readiness-steps.js';
+import { DeckStatusLine } from '../../../components/deck-status-line.js';
 import { SuspendPanel } from './suspend-panel.js';
 
 function Station({ snapshot, catapultId }: { snapshot: LineupSnapshot; catapultId: number }) {
@@ -81,6 +82,7 @@ function Station({ snapshot, catapultId }: { snapshot: LineupSnapshot; catapultI
   return (
     <Stack gap="3">
       {notice && <NoticeBanner notice={notice} onDismiss={dismiss} />}
+      <DeckStatusLine lane={lane} size="lg" />
       <SuspendPanel
         slot={current}
         pending={suspend.isPending}

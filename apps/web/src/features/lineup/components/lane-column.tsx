@@ -7,6 +7,7 @@ import { GoBadge } from '../../../components/go-badge.js';
 import { WindIcon } from '../../../components/icons.js';
 import { formatKnots } from '../../../lib/format.js';
 import { slotItemId } from '../hooks/use-lineup-drag.js';
+import { DeckStatusLine } from '../../../components/deck-status-line.js';
 import { laneContainer } from '../lineup-model.js';
 
 interface LaneColumnProps {
@@ -70,6 +71,7 @@ export function LaneColumn({ lane, slotIds, counts, menu, children }: LaneColumn
             {menu}
           </HStack>
         </Flex>
+        <DeckStatusLine lane={lane} />
         <HStack gap="1.5" fontSize="xs" color="fg.muted" title="Wind over deck on this catapult" minW="0">
           <WindIcon />
           <Text truncate>{windWords(lane)}</Text>

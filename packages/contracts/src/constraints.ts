@@ -45,6 +45,13 @@ export const CONDITION_RANGES = {
   trueWindSpeedKt: { min: 0, max: 80 },
   temperatureC: { min: -40, max: 55 },
   pressureHpa: { min: 870, max: 1085 },
+  /** Where the relative wind blows from off the bow, negative to port. */
+  relativeWindBearingDeg: { min: -180, max: 180 },
+  relativeWindSpeedKt: { min: 0, max: 120 },
+  windGustKt: { min: 0, max: 120 },
+  windLullKt: { min: 0, max: 120 },
+  latitudeDeg: { min: -90, max: 90 },
+  longitudeDeg: { min: -180, max: 180 },
 } as const satisfies Record<string, Range>;
 
 /** An aircraft type's figures; the pound and pound-force figures are whole (a minimum of 1: positive). */

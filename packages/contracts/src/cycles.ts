@@ -38,9 +38,48 @@ export interface CycleView extends CycleConditions {
   version: number;
   slotCount: number;
   launchedCount: number;
+  /** The gust and the lull of the wind reading in force, as true winds; the lull is what the headwind rests on. */
+  windGustFromDeg: number;
+  windGustKt: number;
+  windLullFromDeg: number;
+  windLullKt: number;
+  /** When the wind reading in force was taken (ISO 8601). */
+  windReadAt: string;
+  /** When that reading turns stale by the ship profile's age (ISO 8601); every station flags it from then. */
+  windStaleAt: string;
+  /** The ship's position for the cycle, degrees north and east; null when not given (night is then as entered). */
+  latitudeDeg: number | null;
+  longitudeDeg: number | null;
+  /** The ship's time zone (IANA name) every time of the cycle is shown in. */
+  timeZone: string;
 }
 
-export interface CreateCycleRequest extends CycleConditions {
+/** The wind reading is older than the ship allows: flagged on every station, a waivable launch gate. */
+export const isWindReadingStale = (cycle: Pick<CycleView, 'windStaleAt'>, now: Date): boolean =>
+  now.getTime() >= Date.parse(cycle.windStaleAt);
+
+/**
+ * A new wind reading with a change of conditions: either across the deck (relative bearing and speed)
+ * or the true wind (`trueWindFromDeg`, `trueWindSpeedKt`), with an optional gust and lull in the same
+ * frame (left out, the steady speed). The other frame is computed with the ship's course and speed.
+ */
+export interface WindReadingFields {
+  /** Where the wind blows from off the bow, degrees, negative to port. */
+  relativeWindBearingDeg?: number;
+  relativeWindSpeedKt?: number;
+  windGustKt?: number;
+  windLullKt?: number;
+  /** When the reading was taken (ISO 8601), if before it is entered; left out, now. Never in the future. */
+  windReadAt?: string;
+}
+
+/** The ship's position; with it, night is worked out from the sun at the planned launch. */
+export interface SeaPositionFields {
+  latitudeDeg?: number;
+  longitudeDeg?: number;
+}
+
+export interface CreateCycleRequest extends CycleConditions, SeaPositionFields {
   shipId: number;
   number: number;
   plannedLaunchAt: string;
@@ -48,13 +87,15 @@ export interface CreateCycleRequest extends CycleConditions {
   windowEndAt: string;
 }
 
-export type UpdateCycleConditionsRequest = Partial<CycleConditions> & {
-  plannedLaunchAt?: string;
-  windowStartAt?: string;
-  windowEndAt?: string;
-  /** The cycle version the change was based on. */
-  basisVersion: number;
-};
+export type UpdateCycleConditionsRequest = Partial<CycleConditions> &
+  WindReadingFields &
+  SeaPositionFields & {
+    plannedLaunchAt?: string;
+    windowStartAt?: string;
+    windowEndAt?: string;
+    /** The cycle version the change was based on. */
+    basisVersion: number;
+  };
 
 /** Stopping or closing a cycle: the cycle version the command was based on. */
 export interface CycleCommandRequest {

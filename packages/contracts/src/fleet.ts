@@ -60,7 +60,7 @@ export interface DeckLayout {
 
 /** The ship's own after-the-shot profile: data the ship writes, not code. */
 export interface ShipProfile {
-  /** Clearing turn off a bow and a waist catapult by day, degrees; positive to starboard. */
+  /** Clearing turn off a bow and a waist catapult in cases I and II (none in case III), degrees; positive to starboard. */
   clearingTurnDeg: Record<CatapultPosition, number>;
   /** Departure instruction per weather case. */
   departures: Record<'I' | 'II' | 'III', string>;
@@ -69,7 +69,17 @@ export interface ShipProfile {
    * weight_agreed, setting_set and tensioned in; left out, every step.
    */
   readinessSteps?: ReadinessStep[];
+  /** How old a wind reading may be before every station flags it stale, minutes; left out, 30. */
+  windReadingMaxAgeMin?: number;
+  /** The time zone the ship keeps, an IANA name ("Pacific/Guam"); every time is shown in it. Left out, UTC. */
+  timeZone?: string;
 }
+
+/** A wind reading is stale this long after it was taken unless the ship profile says otherwise, minutes. */
+export const DEFAULT_WIND_READING_MAX_AGE_MIN = 30;
+
+/** The zone times are shown in unless the ship profile names one. */
+export const DEFAULT_SHIP_TIME_ZONE = 'UTC';
 
 export interface ShipView {
   id: number;

@@ -13,3 +13,4 @@ export * from './refusals.js';
 export * from './reports.js';
 export * from './roles.js';
 export * from './socket.js';
+export * from './time.js';

@@ -67,6 +67,12 @@ export const CYCLE_REFUSAL_CODES = [
   'ship_already_launching',
   /** Starting outside the launch window: a warning the air boss confirms by asking again. */
   'outside_window',
+  /** Half a wind reading, both frames at once, or a lull above the steady speed or a gust below it. */
+  'invalid_wind_reading',
+  /** Night by the sun at the cycle's position, or entered as night, with a case other than III. */
+  'night_needs_case_iii',
+  /** A night flag that the sun at the cycle's position contradicts. */
+  'night_by_position',
 ] as const;
 export type CycleRefusalCode = (typeof CYCLE_REFUSAL_CODES)[number];
 

@@ -2,6 +2,7 @@ export { LaunchMathInputError } from './errors.js';
 export * from './units/units.js';
 export * from './units/angles.js';
 export * from './wind/wind-over-deck.js';
+export * from './wind/wind-reading.js';
 export * from './atmosphere/isa.js';
 export * from './catapult/end-speed.js';
 export * from './aircraft/aircraft-profile.js';
@@ -28,6 +29,7 @@ export {
 export * from './schedule/lineup-suggestion.js';
 export * from './after-shot/weather-case.js';
 export * from './after-shot/after-shot.js';
+export * from './after-shot/night.js';
 export * from './launch/launch-gates.js';
 export * from './readiness/reverify.js';
 export * from './readiness/readiness-steps.js';

@@ -1,4 +1,9 @@
-import type { CycleView } from '@catline/contracts';
+import {
+  DEFAULT_SHIP_TIME_ZONE,
+  DEFAULT_WIND_READING_MAX_AGE_MIN,
+  type CycleView,
+  type ShipProfile,
+} from '@catline/contracts';
 import type { Cycle } from '../database/entities/cycle.entity.js';
 
 export interface CycleCounts {
@@ -6,7 +11,11 @@ export interface CycleCounts {
   launchedCount: number;
 }
 
-export function toCycleView(cycle: Cycle, counts: CycleCounts): CycleView {
+/** When a wind reading taken at `readAt` turns stale by the ship profile's age. */
+export const windStaleAt = (readAt: Date, profile: ShipProfile): Date =>
+  new Date(readAt.getTime() + (profile.windReadingMaxAgeMin ?? DEFAULT_WIND_READING_MAX_AGE_MIN) * 60_000);
+
+export function toCycleView(cycle: Cycle, profile: ShipProfile, counts: CycleCounts): CycleView {
   return {
     id: cycle.id,
     shipId: cycle.shipId,
@@ -29,5 +38,14 @@ export function toCycleView(cycle: Cycle, counts: CycleCounts): CycleView {
     version: cycle.version,
     slotCount: counts.slotCount,
     launchedCount: counts.launchedCount,
+    windGustFromDeg: cycle.windGustFromDeg,
+    windGustKt: cycle.windGustKt,
+    windLullFromDeg: cycle.windLullFromDeg,
+    windLullKt: cycle.windLullKt,
+    windReadAt: cycle.windReadAt.toISOString(),
+    windStaleAt: windStaleAt(cycle.windReadAt, profile).toISOString(),
+    latitudeDeg: cycle.latitudeDeg,
+    longitudeDeg: cycle.longitudeDeg,
+    timeZone: profile.timeZone ?? DEFAULT_SHIP_TIME_ZONE,
   };
 }

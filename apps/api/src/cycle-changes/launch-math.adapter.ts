@@ -74,13 +74,12 @@ export function launchCatapult(catapult: Catapult, inLandingArea?: boolean): Lau
   };
 }
 
-const dayTurn = (deg: number): ClearingTurn => ({
+const signedToTurn = (deg: number): ClearingTurn => ({
   direction: deg > 0 ? 'right' : deg < 0 ? 'left' : 'none',
   degrees: degrees(Math.abs(deg)),
 });
-const NO_TURN: ClearingTurn = { direction: 'none', degrees: degrees(0) };
 
-/** The ship's stored profile (signed day turns, departures as text) in launch-math's form; no turn at night. */
+/** The ship’s stored profile (signed turns for cases I and II, departures as text) in launch-math’s form. */
 export function shipProfile(profile: ShipProfileData): ShipProfile {
   const departure = (weatherCase: WeatherCase) => ({
     summary: profile.departures[weatherCase],
@@ -90,8 +89,8 @@ export function shipProfile(profile: ShipProfileData): ShipProfile {
   });
   return {
     clearingTurns: {
-      bow: { day: dayTurn(profile.clearingTurnDeg.bow), night: NO_TURN },
-      waist: { day: dayTurn(profile.clearingTurnDeg.waist), night: NO_TURN },
+      bow: signedToTurn(profile.clearingTurnDeg.bow),
+      waist: signedToTurn(profile.clearingTurnDeg.waist),
     },
     departures: { I: departure('I'), II: departure('II'), III: departure('III') },
   };
@@ -101,10 +100,14 @@ export function shipProfile(profile: ShipProfileData): ShipProfile {
 export const signedTurn = (turn: ClearingTurn): number =>
   turn.direction === 'right' ? turn.degrees : turn.direction === 'left' ? -turn.degrees : 0;
 
+/**
+ * The wind across the deck the launch figures rest on: the reading's lull, so the minimum headwind holds
+ * when the wind drops (common practice, no source).
+ */
 export function cycleRelativeWind(cycle: Cycle): RelativeWind {
   return relativeWind(
     { course: degrees(cycle.shipCourseDeg), speed: knots(cycle.shipSpeedKt) },
-    { from: degrees(cycle.trueWindFromDeg), speed: knots(cycle.trueWindSpeedKt) },
+    { from: degrees(cycle.windLullFromDeg), speed: knots(cycle.windLullKt) },
   );
 }
 

@@ -24,6 +24,15 @@ const cycle = (version: number): CycleView => ({
   version,
   slotCount: 3,
   launchedCount: 0,
+  windGustFromDeg: 260,
+  windGustKt: 12,
+  windLullFromDeg: 260,
+  windLullKt: 12,
+  windReadAt: '2026-12-02T09:40:00.000Z',
+  windStaleAt: '2026-12-02T10:10:00.000Z',
+  latitudeDeg: null,
+  longitudeDeg: null,
+  timeZone: 'UTC',
 });
 
 const slot = (id: number, catapultId: number | null, position: number | null, version = 0): SlotView => ({

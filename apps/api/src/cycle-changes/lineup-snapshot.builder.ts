@@ -142,7 +142,7 @@ function cycleConditions(state: LineupState): CycleConditions {
           catapult,
           wind: catapultWind(relative, degrees(catapult.axisAngleDeg)),
           closedReason: catapultClosedReason(catapults.get(String(catapult.id))!, cycle.landingAreaInUse),
-          clearingTurnDeg: signedTurn(clearingTurn(profile, catapult.position, cycle.night)),
+          clearingTurnDeg: signedTurn(clearingTurn(profile, catapult.position, cycle.weatherCase)),
         },
       ]),
     ),
@@ -230,7 +230,7 @@ export function buildSnapshot(state: LineupState): LineupSnapshot {
       missesWindow: projectedSlot?.missesWindow ?? false,
       figures,
       launchRecord: record,
-      gates: figures && !record ? slotLaunchGates(state, slot, figures).views : null,
+      gates: figures && !record ? slotLaunchGates(state, slot, figures, null).views : null,
       deckPosition: slot.status === 'launched' ? null : deckPositionView(slot),
       mustMove: (mustMove.get(String(slot.id)) ?? []).map((id) => sideOf.get(id) ?? id),
     };
@@ -266,7 +266,7 @@ export function buildSnapshot(state: LineupState): LineupSnapshot {
 
   return {
     readinessSteps: shipReadinessSteps(state),
-    cycle: toCycleView(cycle, {
+    cycle: toCycleView(cycle, state.ship.profile, {
       slotCount: countedSlots(state).length,
       launchedCount: state.slots.filter((slot) => slot.status === 'launched').length,
     }),

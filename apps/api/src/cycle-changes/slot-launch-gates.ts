@@ -2,6 +2,7 @@ import type { LaunchFigures, LaunchGateView } from '@catline/contracts';
 import { launchGates, type LaunchGate, type LaunchGateVerdict, type SoftLaunchGate } from '@catline/launch-math';
 import type { Slot } from '../database/entities/slot.entity.js';
 import { deckHoldOf } from './deck-holds.js';
+import { windStaleAt } from './cycle.mapper.js';
 import type { LineupState } from './lineup-state.js';
 
 const kt = (value: number) => `${value.toFixed(1)} kt`;
@@ -75,11 +76,17 @@ export interface SlotGates {
   views: LaunchGateView[];
 }
 
+/** The cycle's wind reading is older than the ship profile allows at `now`. */
+export const windReadingStale = (state: LineupState, now: Date): boolean =>
+  now.getTime() >= windStaleAt(state.cycle.windReadAt, state.ship.profile).getTime();
+
 /**
  * The launch gates of a slot on its catapult, from launch-math's one list: the snapshot shows them and
- * the launch command refuses on them, so the station never offers a shot the server would refuse.
+ * the launch command refuses on them, so the station never offers a shot the server would refuse. A
+ * stale wind reading turns with the clock, not with a change: the commands judge it at their own `now`;
+ * the snapshot leaves it out (null) and every station flags it from the cycle's `windStaleAt`.
  */
-export function slotLaunchGates(state: LineupState, slot: Slot, figures: LaunchFigures): SlotGates {
+export function slotLaunchGates(state: LineupState, slot: Slot, figures: LaunchFigures, now: Date | null): SlotGates {
   const verdict = launchGates(
     {
       noGo: figures.reasons.map((reason) => reason.code),
@@ -91,7 +98,7 @@ export function slotLaunchGates(state: LineupState, slot: Slot, figures: LaunchF
       deckClear: deckHoldOf(state.cycle, slot.catapultId) === undefined,
       weightAgreed: weightAgreed(slot),
       reverifyRequired: slot.reverifyCause !== null,
-      windReadingStale: false,
+      windReadingStale: now !== null && windReadingStale(state, now),
       maxEndSpeed: null,
       waived: (slot.waivers ?? []).map((waiver) => waiver.gate),
     },

@@ -1,4 +1,4 @@
-import type { ChangeActor, CycleConditions, LineupCommandResult } from '@catline/contracts';
+import { DEFAULT_SHIP_TIME_ZONE, type ChangeActor, type LineupCommandResult } from '@catline/contracts';
 import { Injectable } from '@nestjs/common';
 import type { EntityManager } from 'typeorm';
 import { Aircraft } from '../database/entities/aircraft.entity.js';
@@ -12,15 +12,28 @@ import { startingPositions } from '../cycle-changes/starting-positions.js';
 import { LineupException } from '../cycle-changes/lineup.exception.js';
 import { User } from '../database/entities/user.entity.js';
 import { CycleClosing } from './cycle-closing.service.js';
-import { checkStartInWindow, checkWindow, clock, type CycleTimes } from './cycle-window.js';
+import { checkStartInWindow, checkWindow, clock } from './cycle-window.js';
 import { startLaunching } from './launching-rule.js';
+import { nightOf, windReading } from './cycle-sky.js';
 import { CyclesException } from './cycles.exception.js';
 import type { AddSlotDto } from './dto/add-slot.dto.js';
 import type { StartCycleDto } from './dto/start-cycle.dto.js';
 import type { UpdateCycleConditionsDto } from './dto/update-cycle-conditions.dto.js';
 import { Cycle } from '../database/entities/cycle.entity.js';
 
-type ConditionValues = Partial<CycleConditions & CycleTimes>;
+type ConditionValues = Partial<Cycle>;
+
+const figure = (value: number) => String(Number(value.toFixed(1)));
+
+/** "wind 250° 18 kt, lull 14 gust 24": the spread only where it differs from the steady wind. */
+function describeWind(cycle: Cycle): string {
+  const spread = [
+    cycle.windLullKt !== cycle.trueWindSpeedKt && `lull ${figure(cycle.windLullKt)}`,
+    cycle.windGustKt !== cycle.trueWindSpeedKt && `gust ${figure(cycle.windGustKt)}`,
+  ].filter(Boolean);
+  const steady = `wind ${figure(cycle.trueWindFromDeg)}° ${figure(cycle.trueWindSpeedKt)} kt`;
+  return spread.length ? `${steady}, ${spread.join(' ')}` : steady;
+}
 
 /** One short account of what changed in the conditions, e.g. "wind 250° 18 kt, case II". */
 function describeConditions(values: ConditionValues, cycle: Cycle): string {
@@ -28,11 +41,11 @@ function describeConditions(values: ConditionValues, cycle: Cycle): string {
   const parts: string[] = [];
   const changed = (...keys: (keyof ConditionValues)[]) => keys.some((key) => key in values);
   if (changed('shipCourseDeg', 'shipSpeedKt')) parts.push(`ship ${merged.shipCourseDeg}° ${merged.shipSpeedKt} kt`);
-  if (changed('trueWindFromDeg', 'trueWindSpeedKt'))
-    parts.push(`wind ${merged.trueWindFromDeg}° ${merged.trueWindSpeedKt} kt`);
+  if (changed('windReadAt', 'trueWindFromDeg', 'trueWindSpeedKt')) parts.push(describeWind(merged));
   if (changed('temperatureC')) parts.push(`${merged.temperatureC} °C`);
   if (changed('pressureHpa')) parts.push(`${merged.pressureHpa} hPa`);
   if (changed('weatherCase')) parts.push(`case ${merged.weatherCase}`);
+  if (changed('latitudeDeg', 'longitudeDeg')) parts.push(`position ${merged.latitudeDeg}°, ${merged.longitudeDeg}°`);
   if (changed('night')) parts.push(merged.night ? 'night' : 'day');
   if (changed('landingAreaInUse')) parts.push(merged.landingAreaInUse ? 'landing area in use' : 'landing area clear');
   if (changed('plannedLaunchAt')) parts.push(`planned launch ${clock(merged.plannedLaunchAt)}`);
@@ -41,12 +54,8 @@ function describeConditions(values: ConditionValues, cycle: Cycle): string {
   return parts.join(', ');
 }
 
-/** The values of the request that differ from the cycle's, instants as dates. */
-function changedConditions(request: UpdateCycleConditionsDto, cycle: Cycle): ConditionValues {
-  const { basisVersion: _basis, plannedLaunchAt, windowStartAt, windowEndAt, ...figures } = request;
-  const values: Record<string, unknown> = { ...figures };
-  const times = { plannedLaunchAt, windowStartAt, windowEndAt };
-  for (const [key, value] of Object.entries(times)) if (value !== undefined) values[key] = new Date(value);
+/** The values that differ from the cycle's. */
+function differing(values: Record<string, unknown>, cycle: Cycle): ConditionValues {
   return Object.fromEntries(
     Object.entries(values).filter(([key, value]) => {
       // The DTO instance holds every declared field, the ones left out as undefined.
@@ -57,6 +66,42 @@ function changedConditions(request: UpdateCycleConditionsDto, cycle: Cycle): Con
         : value !== current;
     }),
   ) as ConditionValues;
+}
+
+/**
+ * The conditions the request changes, instants as dates. A wind reading (either frame) becomes the true
+ * wind, gust and lull the cycle keeps, and is new even when the figures are the same: it is taken now.
+ * The night follows the sun where the cycle has a position.
+ */
+function changedConditions(
+  request: UpdateCycleConditionsDto,
+  cycle: Cycle,
+  timeZone: string,
+  now: Date,
+): ConditionValues {
+  const {
+    basisVersion: _basis,
+    plannedLaunchAt,
+    windowStartAt,
+    windowEndAt,
+    relativeWindBearingDeg: _bearing,
+    relativeWindSpeedKt: _relativeSpeed,
+    trueWindFromDeg: _from,
+    trueWindSpeedKt: _speed,
+    windGustKt: _gust,
+    windLullKt: _lull,
+    windReadAt: _readAt,
+    night: _night,
+    ...figures
+  } = request;
+  const values: Record<string, unknown> = { ...figures };
+  const times = { plannedLaunchAt, windowStartAt, windowEndAt };
+  for (const [key, value] of Object.entries(times)) if (value !== undefined) values[key] = new Date(value);
+  const changed = differing(values, cycle);
+  const wind = windReading(request, { ...cycle, ...changed }, now);
+  const withWind = wind ? { ...changed, ...differing(wind, cycle), windReadAt: wind.windReadAt } : changed;
+  const night = nightOf({ ...cycle, ...withWind }, request.night, timeZone);
+  return night === cycle.night ? withWind : { ...withWind, night };
 }
 
 /** The conditions' landing-area flag sets the landing area's state with it: in use is recovering. */
@@ -84,7 +129,8 @@ export class CycleCommandsService {
     return this.changes.apply(cycleId, actor, 'conditions_changed', async (manager, state) => {
       this.basis.requireOpen(state);
       await this.basis.cycleAsSeen(manager, state, request.basisVersion);
-      const values = changedConditions(request, state.cycle);
+      const timeZone = state.ship.profile.timeZone ?? DEFAULT_SHIP_TIME_ZONE;
+      const values = changedConditions(request, state.cycle, timeZone, this.clock.now());
       if (Object.keys(values).length === 0) {
         throw new LineupException('no_change', 'The conditions already are as given; nothing changed.');
       }
@@ -102,7 +148,7 @@ export class CycleCommandsService {
   private async reverifyFor(manager: EntityManager, state: LineupState, values: ConditionValues, actor: ChangeActor) {
     const changed = (...keys: (keyof ConditionValues)[]) => keys.some((key) => key in values);
     const now = this.clock.now();
-    if (changed('shipCourseDeg', 'trueWindFromDeg', 'trueWindSpeedKt'))
+    if (changed('shipCourseDeg', 'trueWindFromDeg', 'trueWindSpeedKt', 'windLullFromDeg', 'windLullKt'))
       return dropBackForReverify(manager, state, 'wind', actor, now);
     if (changed('shipSpeedKt')) return dropBackForReverify(manager, state, 'ship_speed', actor, now);
     return '';

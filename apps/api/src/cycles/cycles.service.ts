@@ -1,4 +1,4 @@
-import type { CycleView } from '@catline/contracts';
+import { DEFAULT_SHIP_TIME_ZONE, type CycleView } from '@catline/contracts';
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { DataSource } from 'typeorm';
@@ -6,8 +6,10 @@ import { AuditTrail } from '../audit/audit-trail.service.js';
 import { isDuplicateKey } from '../common/errors/database-errors.js';
 import { Slot } from '../database/entities/slot.entity.js';
 import { Ship } from '../database/entities/ship.entity.js';
+import { Clock } from '../cycle-changes/clock.js';
 import { toCycleView, type CycleCounts } from '../cycle-changes/cycle.mapper.js';
 import { checkWindow } from './cycle-window.js';
+import { nightOf } from './cycle-sky.js';
 import { CyclesException } from './cycles.exception.js';
 import type { CreateCycleDto } from './dto/create-cycle.dto.js';
 import { Cycle } from '../database/entities/cycle.entity.js';
@@ -20,18 +22,22 @@ export class CyclesService {
   constructor(
     @InjectDataSource() private readonly dataSource: DataSource,
     private readonly audit: AuditTrail,
+    private readonly clock: Clock,
   ) {}
 
   async list(): Promise<CycleView[]> {
-    const cycles = await this.dataSource.manager.find(Cycle, { order: { plannedLaunchAt: 'DESC', id: 'DESC' } });
+    const cycles = await this.dataSource.manager.find(Cycle, {
+      relations: { ship: true },
+      order: { plannedLaunchAt: 'DESC', id: 'DESC' },
+    });
     const counts = await this.counts();
-    return cycles.map((cycle) => toCycleView(cycle, counts.get(cycle.id) ?? NO_SLOTS));
+    return cycles.map((cycle) => toCycleView(cycle, cycle.ship.profile, counts.get(cycle.id) ?? NO_SLOTS));
   }
 
   async get(id: number): Promise<CycleView> {
-    const cycle = await this.dataSource.manager.findOneBy(Cycle, { id });
+    const cycle = await this.dataSource.manager.findOne(Cycle, { where: { id }, relations: { ship: true } });
     if (!cycle) throw new CyclesException('not_found', `Cycle ${id} does not exist.`);
-    return toCycleView(cycle, (await this.counts(id)).get(id) ?? NO_SLOTS);
+    return toCycleView(cycle, cycle.ship.profile, (await this.counts(id)).get(id) ?? NO_SLOTS);
   }
 
   async create(request: CreateCycleDto): Promise<CycleView> {
@@ -41,17 +47,33 @@ export class CyclesService {
       windowEndAt: new Date(request.windowEndAt),
     };
     checkWindow(times);
-    if (!(await this.dataSource.manager.existsBy(Ship, { id: request.shipId }))) {
-      throw new CyclesException('not_found', `Ship ${request.shipId} does not exist.`);
-    }
+    const ship = await this.dataSource.manager.findOneBy(Ship, { id: request.shipId });
+    if (!ship) throw new CyclesException('not_found', `Ship ${request.shipId} does not exist.`);
+    const { latitudeDeg = null, longitudeDeg = null } = request;
+    const position = { latitudeDeg, longitudeDeg };
+    const night = nightOf(
+      { ...request, ...times, ...position },
+      request.night,
+      ship.profile.timeZone ?? DEFAULT_SHIP_TIME_ZONE,
+    );
+    // The wind entered with a new cycle is its first reading, steady: its gust and lull are the wind itself.
+    const spread = {
+      windGustFromDeg: request.trueWindFromDeg,
+      windGustKt: request.trueWindSpeedKt,
+      windLullFromDeg: request.trueWindFromDeg,
+      windLullKt: request.trueWindSpeedKt,
+    };
     try {
       const cycle = await this.dataSource.transaction(async (manager) => {
-        const created = await manager.save(Cycle, manager.create(Cycle, { ...request, ...times }));
+        const created = await manager.save(
+          Cycle,
+          manager.create(Cycle, { ...request, ...times, ...position, ...spread, night, windReadAt: this.clock.now() }),
+        );
         await this.audit.record(manager, {
           action: 'cycle.created',
           subject: { type: 'cycle', id: created.id },
           summary: `Cycle ${created.number} created`,
-          after: { ...toCycleView(created, NO_SLOTS) },
+          after: { ...toCycleView(created, ship.profile, NO_SLOTS) },
         });
         return created;
       });

@@ -178,7 +178,8 @@ export class ReadinessService {
         }
         await this.basis.slotAsSeen(manager, state, slot, request.slotVersion);
         const figures = slotFigures(state, slot);
-        const gates = figures ? slotLaunchGates(state, slot, figures) : null;
+        const now = this.clock.now();
+        const gates = figures ? slotLaunchGates(state, slot, figures, now) : null;
         const refusals = gates?.verdict.refusals ?? ['outside_launch_table'];
         if (refusals.length > 0) {
           const words = gates?.views.filter((gate) => refusals.includes(gate.gate)).map((gate) => gate.message);
@@ -186,7 +187,6 @@ export class ReadinessService {
         }
         transition(state, slot, user, { kind: 'launch', refusals }, 'launch');
         const waived = waiverNote(slot, gates?.verdict.waivedGates ?? []);
-        const now = this.clock.now();
         const profile = aircraftProfile(slot.aircraft.type);
         const record = figures
           ? recordShot({

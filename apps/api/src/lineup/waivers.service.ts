@@ -31,7 +31,10 @@ export class WaiversService {
       const side = slot.aircraft.sideNumber;
       const figures = slot.status === 'launched' ? null : slotFigures(state, slot);
       const closed =
-        figures && slotLaunchGates(state, slot, figures).verdict.closed.some(({ gate }) => gate === request.gate);
+        figures &&
+        slotLaunchGates(state, slot, figures, this.clock.now()).verdict.closed.some(
+          ({ gate }) => gate === request.gate,
+        );
       if (!closed) {
         throw new LineupException(
           'nothing_to_waive',

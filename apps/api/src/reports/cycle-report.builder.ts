@@ -199,7 +199,7 @@ export function buildCycleReport({ state, changes }: CycleRecord): CycleReport {
 
   const launchTimes = lines.flatMap((line) => (line.launchedAt === null ? [] : [line.launchedAt])).sort();
   return {
-    cycle: toCycleView(cycle, {
+    cycle: toCycleView(cycle, state.ship.profile, {
       slotCount: countedSlots(state).length,
       launchedCount: lines.filter((line) => line.status === 'launched').length,
     }),

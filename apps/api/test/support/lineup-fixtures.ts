@@ -94,21 +94,28 @@ export class LineupDriver {
 
   /** A new cycle of the demo ship in planning, starting in an hour; numbers are picked at random and retried. */
   async createCycle(overrides: Partial<CreateCycleRequest> = {}): Promise<CycleView> {
-    const planned = Date.now() + HOUR;
     for (;;) {
       const response = await this.call(AIR_OPS, 'post', '/api/cycles', {
-        shipId: (await this.demoShip()).id,
-        number: 1000 + Math.floor(Math.random() * 8999),
-        plannedLaunchAt: new Date(planned).toISOString(),
-        windowStartAt: new Date(planned - HOUR / 6).toISOString(),
-        windowEndAt: new Date(planned + HOUR).toISOString(),
-        ...goodConditions,
+        ...(await this.createCycleBody()),
         ...overrides,
       });
       if (response.status === 201) return response.body as CycleView;
       if (response.body?.code !== 'cycle_number_taken')
         throw new Error(`Creating a cycle failed: ${JSON.stringify(response.body)}`);
     }
+  }
+
+  /** A request for a new cycle of the demo ship in good conditions, starting in an hour, at a random number. */
+  async createCycleBody(): Promise<CreateCycleRequest> {
+    const planned = Date.now() + HOUR;
+    return {
+      shipId: (await this.demoShip()).id,
+      number: 1000 + Math.floor(Math.random() * 8999),
+      plannedLaunchAt: new Date(planned).toISOString(),
+      windowStartAt: new Date(planned - HOUR / 6).toISOString(),
+      windowEndAt: new Date(planned + HOUR).toISOString(),
+      ...goodConditions,
+    };
   }
 
   /** The id of an aircraft by side number; the fleet is read once, and again for one added since. */

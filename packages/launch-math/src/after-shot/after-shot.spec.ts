@@ -27,12 +27,14 @@ describe('weather case', () => {
 });
 
 describe('after the shot', () => {
-  it('turns right off a bow catapult and left off a waist catapult by day, not at night', () => {
-    // Common practice, no source: about 10 degrees right off the bow, left off the waist, none at night.
-    expect(clearingTurn(testShip, 'bow', false)).toEqual({ direction: 'right', degrees: 10 });
-    expect(clearingTurn(testShip, 'waist', false)).toEqual({ direction: 'left', degrees: 10 });
-    expect(clearingTurn(testShip, 'bow', true).direction).toBe('none');
-    expect(clearingTurn(testShip, 'waist', true).direction).toBe('none');
+  it('turns right off a bow catapult and left off a waist catapult in cases I and II, not in case III', () => {
+    // Common practice, no source: about 10 degrees right off the bow, left off the waist; case III none.
+    for (const weather of ['I', 'II'] as const) {
+      expect(clearingTurn(testShip, 'bow', weather)).toEqual({ direction: 'right', degrees: 10 });
+      expect(clearingTurn(testShip, 'waist', weather)).toEqual({ direction: 'left', degrees: 10 });
+    }
+    expect(clearingTurn(testShip, 'bow', 'III').direction).toBe('none');
+    expect(clearingTurn(testShip, 'waist', 'III').direction).toBe('none');
   });
 
   // Departures are the ship's own data, not a rule of the package: the check is that each case gets its
@@ -45,7 +47,7 @@ describe('after the shot', () => {
   });
 
   it('puts clearing turn and departure on one card', () => {
-    const card = afterTheShot(testShip, { position: 'waist', night: true, weatherCase: 'III' });
+    const card = afterTheShot(testShip, { position: 'waist', weatherCase: 'III' });
     expect(card.clearingTurn.direction).toBe('none');
     expect(card.departure.summary).toBe('Case III test departure.');
   });

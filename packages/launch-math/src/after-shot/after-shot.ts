@@ -1,5 +1,5 @@
 import type { CatapultPosition } from '../catapult/end-speed.js';
-import type { Degrees, Feet, Knots, NauticalMiles } from '../units/units.js';
+import { degrees, type Degrees, type Feet, type Knots, type NauticalMiles } from '../units/units.js';
 import type { WeatherCase } from './weather-case.js';
 
 export type TurnDirection = 'left' | 'right' | 'none';
@@ -25,9 +25,8 @@ export interface DepartureInstruction {
 
 /** The ship's own after-the-shot rules: data entered by the user, not code. */
 export interface ShipProfile {
-  readonly clearingTurns: Readonly<
-    Record<CatapultPosition, { readonly day: ClearingTurn; readonly night: ClearingTurn }>
-  >;
+  /** The turn off each kind of catapult in cases I and II; case III flies straight ahead. */
+  readonly clearingTurns: Readonly<Record<CatapultPosition, ClearingTurn>>;
   readonly departures: Readonly<Record<WeatherCase, DepartureInstruction>>;
 }
 
@@ -37,9 +36,14 @@ export interface AfterTheShot {
   readonly departure: DepartureInstruction;
 }
 
-/** The clearing turn off a catapult in this position, by day or night, from the ship's profile. */
-export const clearingTurn = (ship: ShipProfile, position: CatapultPosition, night: boolean): ClearingTurn =>
-  night ? ship.clearingTurns[position].night : ship.clearingTurns[position].day;
+export const NO_CLEARING_TURN: ClearingTurn = { direction: 'none', degrees: degrees(0) };
+
+/**
+ * The clearing turn off a catapult in this position: the ship profile's turn by catapult side in cases I
+ * and II; none in case III, by day or by night, where the departure starts straight off the bow.
+ */
+export const clearingTurn = (ship: ShipProfile, position: CatapultPosition, weather: WeatherCase): ClearingTurn =>
+  weather === 'III' ? NO_CLEARING_TURN : ship.clearingTurns[position];
 
 /** The departure for the weather case, from the ship's profile. */
 export const departureFor = (ship: ShipProfile, weather: WeatherCase): DepartureInstruction => ship.departures[weather];
@@ -47,10 +51,10 @@ export const departureFor = (ship: ShipProfile, weather: WeatherCase): Departure
 /** Clearing turn and departure together, as a pilot's launch card shows them. */
 export function afterTheShot(
   ship: ShipProfile,
-  launch: { readonly position: CatapultPosition; readonly night: boolean; readonly weatherCase: WeatherCase },
+  launch: { readonly position: CatapultPosition; readonly weatherCase: WeatherCase },
 ): AfterTheShot {
   return {
-    clearingTurn: clearingTurn(ship, launch.position, launch.night),
+    clearingTurn: clearingTurn(ship, launch.position, launch.weatherCase),
     departure: departureFor(ship, launch.weatherCase),
   };
 }

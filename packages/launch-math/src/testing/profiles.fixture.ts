@@ -28,14 +28,14 @@ export const strikeFighter: AircraftProfile = {
 
 /**
  * A ship's after-the-shot rules for tests. Clearing turns about 10 degrees right off the bow, left off
- * the waist, none at night: common practice, no source. Case I departure: NAVEDTRA 14342A table 11-10
+ * the waist in cases I and II, none in case III: common practice, no source. Case I departure: NAVEDTRA 14342A table 11-10
  * (500 ft until 7 nm, then climb unrestricted in visual conditions); 300 kt: common practice, no source.
  * Cases II and III: wording invented for the tests.
  */
 export const testShip: ShipProfile = {
   clearingTurns: {
-    bow: { day: { direction: 'right', degrees: degrees(10) }, night: { direction: 'none', degrees: degrees(0) } },
-    waist: { day: { direction: 'left', degrees: degrees(10) }, night: { direction: 'none', degrees: degrees(0) } },
+    bow: { direction: 'right', degrees: degrees(10) },
+    waist: { direction: 'left', degrees: degrees(10) },
   },
   departures: {
     I: {

@@ -20,6 +20,13 @@ export const ConditionField = {
   shipSpeedKt: () => Figure('shipSpeedKt', 'knots'),
   trueWindFromDeg: () => Figure('trueWindFromDeg', 'degrees true, where the wind blows from'),
   trueWindSpeedKt: () => Figure('trueWindSpeedKt', 'knots'),
+  relativeWindBearingDeg: () =>
+    Figure('relativeWindBearingDeg', 'degrees off the bow where the wind across the deck blows from, negative to port'),
+  relativeWindSpeedKt: () => Figure('relativeWindSpeedKt', 'knots across the deck'),
+  windGustKt: () => Figure('windGustKt', 'knots, in the frame of the reading it comes with'),
+  windLullKt: () => Figure('windLullKt', 'knots, in the frame of the reading it comes with'),
+  latitudeDeg: () => Figure('latitudeDeg', 'degrees, north positive'),
+  longitudeDeg: () => Figure('longitudeDeg', 'degrees, east positive'),
   temperatureC: () => Figure('temperatureC', 'degrees Celsius'),
   pressureHpa: () => Figure('pressureHpa', 'hectopascals'),
   weatherCase: () =>

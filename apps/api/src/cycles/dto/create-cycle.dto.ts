@@ -1,6 +1,7 @@
 import { type CreateCycleRequest, CYCLE_NUMBER, type WeatherCase } from '@catline/contracts';
 import { ApiProperty } from '@nestjs/swagger';
 import { IsInt, Max, Min } from 'class-validator';
+import { SkipIfAbsent } from '../../common/validation/skip-if-absent.decorator.js';
 import { ConditionField } from './condition-fields.js';
 
 export class CreateCycleDto implements CreateCycleRequest {
@@ -27,6 +28,8 @@ export class CreateCycleDto implements CreateCycleRequest {
   @ConditionField.shipSpeedKt() shipSpeedKt: number;
   @ConditionField.trueWindFromDeg() trueWindFromDeg: number;
   @ConditionField.trueWindSpeedKt() trueWindSpeedKt: number;
+  @SkipIfAbsent() @ConditionField.latitudeDeg() latitudeDeg?: number;
+  @SkipIfAbsent() @ConditionField.longitudeDeg() longitudeDeg?: number;
   @ConditionField.temperatureC() temperatureC: number;
   @ConditionField.pressureHpa() pressureHpa: number;
   @ConditionField.weatherCase() weatherCase: WeatherCase;

@@ -19,6 +19,13 @@ export class UpdateCycleConditionsDto implements UpdateCycleConditionsRequest {
   @SkipIfAbsent() @ConditionField.shipSpeedKt() shipSpeedKt?: number;
   @SkipIfAbsent() @ConditionField.trueWindFromDeg() trueWindFromDeg?: number;
   @SkipIfAbsent() @ConditionField.trueWindSpeedKt() trueWindSpeedKt?: number;
+  @SkipIfAbsent() @ConditionField.relativeWindBearingDeg() relativeWindBearingDeg?: number;
+  @SkipIfAbsent() @ConditionField.relativeWindSpeedKt() relativeWindSpeedKt?: number;
+  @SkipIfAbsent() @ConditionField.windGustKt() windGustKt?: number;
+  @SkipIfAbsent() @ConditionField.windLullKt() windLullKt?: number;
+  @SkipIfAbsent() @ConditionField.instant('windReadAt') windReadAt?: string;
+  @SkipIfAbsent() @ConditionField.latitudeDeg() latitudeDeg?: number;
+  @SkipIfAbsent() @ConditionField.longitudeDeg() longitudeDeg?: number;
   @SkipIfAbsent() @ConditionField.temperatureC() temperatureC?: number;
   @SkipIfAbsent() @ConditionField.pressureHpa() pressureHpa?: number;
   @SkipIfAbsent() @ConditionField.weatherCase() weatherCase?: WeatherCase;

@@ -40,6 +40,30 @@ export class Cycle {
   @Column({ name: 'true_wind_speed_kt', type: 'double' })
   trueWindSpeedKt: number;
 
+  /** The gust and the lull of the wind reading as true winds (a reading without a spread: the steady wind). */
+  @Column({ name: 'wind_gust_from_deg', type: 'double' })
+  windGustFromDeg: number;
+
+  @Column({ name: 'wind_gust_kt', type: 'double' })
+  windGustKt: number;
+
+  @Column({ name: 'wind_lull_from_deg', type: 'double' })
+  windLullFromDeg: number;
+
+  @Column({ name: 'wind_lull_kt', type: 'double' })
+  windLullKt: number;
+
+  /** When the wind reading in force was taken: the change that entered it. */
+  @InstantColumn({ name: 'wind_read_at', default: () => 'CURRENT_TIMESTAMP(3)' })
+  windReadAt: Date;
+
+  /** The ship's position for the cycle; with it, night follows the sun at the planned launch. */
+  @Column({ name: 'latitude_deg', type: 'double', nullable: true })
+  latitudeDeg: number | null;
+
+  @Column({ name: 'longitude_deg', type: 'double', nullable: true })
+  longitudeDeg: number | null;
+
   @Column({ name: 'temperature_c', type: 'double' })
   temperatureC: number;
 

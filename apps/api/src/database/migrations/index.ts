@@ -7,6 +7,7 @@ import { DeckPositionsLandingArea1796201917830 } from './1796201917830-DeckPosit
 import { SlotAgreedWeightAndLastStep1796203000000 } from './1796203000000-SlotAgreedWeightAndLastStep.js';
 import { LaunchingCycleOnePerShip1796213798790 } from './1796213798790-LaunchingCycleOnePerShip.js';
 import { RefreshTokenSession1796213925015 } from './1796213925015-RefreshTokenSession.js';
+import { CycleWindReadingAndPosition1796214000000 } from './1796214000000-CycleWindReadingAndPosition.js';
 import { CycleDeckHolds1796216225592 } from './1796216225592-CycleDeckHolds.js';
 
 /** Every migration in the order it runs; add a new one at the end (see DEVELOPERS.md). */
@@ -20,5 +21,6 @@ export const migrations = [
   SlotAgreedWeightAndLastStep1796203000000,
   LaunchingCycleOnePerShip1796213798790,
   RefreshTokenSession1796213925015,
+  CycleWindReadingAndPosition1796214000000,
   CycleDeckHolds1796216225592,
 ];

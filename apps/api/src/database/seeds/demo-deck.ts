@@ -1,4 +1,11 @@
-import type { ChangeActor, LineupSnapshot, ReadinessStep, SlotView } from '@catline/contracts';
+import type {
+  ChangeActor,
+  CycleConditions,
+  LineupSnapshot,
+  ReadinessStep,
+  SlotView,
+  WindReadingFields,
+} from '@catline/contracts';
 import type { DataSource } from 'typeorm';
 import { AuditTrail } from '../../audit/audit-trail.service.js';
 import { toAuthenticatedUser } from '../../auth/session.mapper.js';
@@ -76,7 +83,7 @@ export class DemoDeck {
     );
     const basis = new BasisChecks(log);
     const closing = new CycleClosing(new MailOutbox());
-    this.cycles = new CyclesService(dataSource, new AuditTrail());
+    this.cycles = new CyclesService(dataSource, new AuditTrail(), this.clock);
     this.cycleCommands = new CycleCommandsService(changes, basis, closing, this.clock);
     this.lineup = new LineupCommandsService(changes, basis, this.clock);
     this.readiness = new ReadinessService(changes, basis, log, closing, this.clock);
@@ -100,6 +107,12 @@ export class DemoDeck {
 
   async createCycle(request: CreateCycleDto): Promise<number> {
     return (await this.cycles.create(request)).id;
+  }
+
+  /** Air operations enters a wind reading (the ship's wind figures read again count as a new one). */
+  async readWind(cycleId: number, by: string, reading: WindReadingFields & Partial<CycleConditions>): Promise<void> {
+    const { version } = (await this.snapshot(cycleId)).cycle;
+    await this.cycleCommands.updateConditions(cycleId, this.actor(by), { basisVersion: version, ...reading });
   }
 
   snapshot(cycleId: number): Promise<LineupSnapshot> {

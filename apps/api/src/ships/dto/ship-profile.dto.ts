@@ -1,15 +1,23 @@
-import { READINESS_STEPS, type ReadinessStep, type ShipProfile } from '@catline/contracts';
+import {
+  DEFAULT_SHIP_TIME_ZONE,
+  DEFAULT_WIND_READING_MAX_AGE_MIN,
+  READINESS_STEPS,
+  type ReadinessStep,
+  type ShipProfile,
+} from '@catline/contracts';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import {
   ArrayMaxSize,
   IsArray,
   IsIn,
+  IsInt,
   IsNotEmpty,
   IsNumber,
   IsObject,
   IsOptional,
   IsString,
+  IsTimeZone,
   Max,
   MaxLength,
   Min,
@@ -77,4 +85,20 @@ export class ShipProfileDto implements ShipProfile {
   @ArrayMaxSize(READINESS_STEPS.length)
   @IsIn(READINESS_STEPS, { each: true, message: `readinessSteps must each be one of ${READINESS_STEPS.join(', ')}` })
   readinessSteps?: ReadinessStep[];
+
+  @ApiPropertyOptional({
+    minimum: 1,
+    maximum: 720,
+    description: `Minutes a wind reading stays fresh; left out, ${DEFAULT_WIND_READING_MAX_AGE_MIN}.`,
+  })
+  @IsOptional()
+  @IsInt({ message: 'windReadingMaxAgeMin must be a whole number of minutes' })
+  @Min(1, { message: 'windReadingMaxAgeMin must be at least 1 minute' })
+  @Max(720, { message: 'windReadingMaxAgeMin must be at most 720 minutes' })
+  windReadingMaxAgeMin?: number;
+
+  @ApiPropertyOptional({ description: `The ship's time zone, an IANA name; left out, ${DEFAULT_SHIP_TIME_ZONE}.` })
+  @IsOptional()
+  @IsTimeZone({ message: 'timeZone must be a time zone name such as Pacific/Guam or UTC' })
+  timeZone?: string;
 }

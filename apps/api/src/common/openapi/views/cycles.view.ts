@@ -76,4 +76,31 @@ export class CycleViewDto implements CycleView {
 
   @ApiProperty({ description: 'While the landing area is in use the waist catapults are closed.' })
   landingAreaInUse: boolean;
+
+  @ApiProperty({ description: 'Direction the gust blows from, degrees true.' })
+  windGustFromDeg: number;
+
+  @ApiProperty({ description: 'Gust, knots over the ground.' })
+  windGustKt: number;
+
+  @ApiProperty({ description: 'Direction the lull blows from, degrees true.' })
+  windLullFromDeg: number;
+
+  @ApiProperty({ description: 'Lull, knots over the ground; the minimum headwind is checked against it.' })
+  windLullKt: number;
+
+  @InstantProperty({ description: 'When the wind reading in force was taken.' })
+  windReadAt: string;
+
+  @InstantProperty({ description: 'When that reading turns stale by the ship profile; stations flag it from then.' })
+  windStaleAt: string;
+
+  @ApiProperty({ type: 'number', nullable: true, description: 'Degrees north; null when not given.' })
+  latitudeDeg: number | null;
+
+  @ApiProperty({ type: 'number', nullable: true, description: 'Degrees east; null when not given.' })
+  longitudeDeg: number | null;
+
+  @ApiProperty({ description: 'The ship’s time zone (IANA name) the cycle’s times are shown in.' })
+  timeZone: string;
 }

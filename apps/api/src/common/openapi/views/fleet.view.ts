@@ -17,7 +17,7 @@ import {
   type TrimBand,
   type UserView,
 } from '@catline/contracts';
-import { ApiProperty, ApiSchema } from '@nestjs/swagger';
+import { ApiProperty, ApiPropertyOptional, ApiSchema } from '@nestjs/swagger';
 import { EnumProperty, IdProperty, IntProperty } from './fields.js';
 
 export const CATAPULT_POSITIONS: CatapultPosition[] = ['bow', 'waist'];
@@ -148,11 +148,20 @@ class DeparturesDto {
 
 @ApiSchema({ name: 'ShipProfile', description: "The ship's own after-the-shot profile." })
 export class ShipProfileDto implements ShipProfile {
-  @ApiProperty({ type: () => ClearingTurnsDto, description: 'Clearing turn off a bow and a waist catapult by day.' })
+  @ApiProperty({
+    type: () => ClearingTurnsDto,
+    description: 'Clearing turn off a bow and a waist catapult in cases I and II; none in case III.',
+  })
   clearingTurnDeg: ClearingTurnsDto;
 
   @ApiProperty({ type: () => DeparturesDto, description: 'Departure instruction per weather case.' })
   departures: DeparturesDto;
+
+  @ApiPropertyOptional({ type: 'integer', description: 'Minutes a wind reading stays fresh; left out, 30.' })
+  windReadingMaxAgeMin?: number;
+
+  @ApiPropertyOptional({ description: 'The ship’s time zone, an IANA name; left out, UTC.' })
+  timeZone?: string;
 }
 
 @ApiSchema({ name: 'ShipView' })

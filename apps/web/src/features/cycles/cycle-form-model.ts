@@ -68,6 +68,12 @@ const figureWords: Record<ConditionFigure, [words: string, unit: string]> = {
   trueWindSpeedKt: ['a wind speed', ' kt'],
   temperatureC: ['a temperature', ' °C'],
   pressureHpa: ['a pressure', ' hPa'],
+  relativeWindBearingDeg: ['a bearing off the bow', '°'],
+  relativeWindSpeedKt: ['a wind speed', ' kt'],
+  windGustKt: ['a gust', ' kt'],
+  windLullKt: ['a lull', ' kt'],
+  latitudeDeg: ['a latitude', '°'],
+  longitudeDeg: ['a longitude', '°'],
 };
 
 // A typographic minus, as people write a temperature below zero.

@@ -307,6 +307,7 @@ export const CHANGE_KINDS = [
   'hangfire',
   'cold_shot_suspected',
   'down_on_catapult',
+  'suspend_reason_given',
 ] as const;
 export type ChangeKind = (typeof CHANGE_KINDS)[number];
 
@@ -437,6 +438,27 @@ export type DownOnCatapultOutcome = (typeof DOWN_ON_CATAPULT_OUTCOMES)[number];
 export interface DownOnCatapultRequest {
   slotVersion: number;
   outcome: DownOnCatapultOutcome;
+}
+
+/** The quick choices for why an aircraft was suspended, picked after the one tap that suspended it. */
+export const SUSPEND_REASONS = ['launch_bar', 'holdback', 'aircraft_fault', 'pilot', 'deck', 'other'] as const;
+export type SuspendReason = (typeof SUSPEND_REASONS)[number];
+
+/** Each quick choice in the deck crew's words, as kept in the record. */
+export const SUSPEND_REASON_LABELS: Record<SuspendReason, string> = {
+  launch_bar: 'Launch bar',
+  holdback: 'Holdback',
+  aircraft_fault: 'Aircraft fault',
+  pilot: 'Pilot',
+  deck: 'Deck',
+  other: 'Other',
+};
+
+export interface SuspendReasonRequest {
+  slotVersion: number;
+  reason: SuspendReason;
+  /** Required with `other`: the reason in a few words. */
+  text?: string;
 }
 
 export interface LaunchSlotRequest {

@@ -18,6 +18,7 @@ export const LINEUP_REFUSAL_CODES = [
   /** An aircraft without a pilot cannot join a catapult's order: it would wait there for a pilot forever. */
   'pilot_missing',
   'agreement_required',
+  'reason_required',
   'not_your_catapult',
   'not_your_slot',
   'not_current_aircraft',

@@ -16,6 +16,7 @@ const STATUS: Record<LineupRefusalCode, HttpStatus> = {
   invalid_pilot: HttpStatus.BAD_REQUEST,
   pilot_missing: HttpStatus.CONFLICT,
   agreement_required: HttpStatus.FORBIDDEN,
+  reason_required: HttpStatus.UNPROCESSABLE_ENTITY,
   not_your_catapult: HttpStatus.FORBIDDEN,
   not_your_slot: HttpStatus.FORBIDDEN,
   not_current_aircraft: HttpStatus.CONFLICT,

@@ -19,6 +19,7 @@ import { LaunchSlotDto } from './dto/launch-slot.dto.js';
 import { MarkDownDto } from './dto/mark-down.dto.js';
 import { MoveSlotDto } from './dto/move-slot.dto.js';
 import { SetCatapultStatusDto } from './dto/set-catapult-status.dto.js';
+import { SuspendReasonDto } from './dto/suspend-reason.dto.js';
 import { SuspendSlotDto } from './dto/suspend-slot.dto.js';
 import { WeightAckDto } from './dto/weight-ack.dto.js';
 import { LineupChangesService } from '../cycle-changes/lineup-changes.service.js';
@@ -206,6 +207,28 @@ export class LineupController {
     @CurrentUser() user: AuthenticatedUser,
   ): Promise<LineupCommandResult> {
     return this.readiness.suspend(cycleId, user, slotId, body);
+  }
+
+  @ApiDoc('Give the reason for a suspend', {
+    response: LineupCommandResultDto,
+    description: 'A quick choice (other with a few words), after the one tap that suspended the aircraft.',
+    refuses: {
+      403: ['not_your_catapult', 'not_your_slot'],
+      404: ['not_found'],
+      409: ['stale_basis', 'wrong_step'],
+      422: ['reason_required'],
+    },
+  })
+  @Roles(...CATAPULT_ROLES, 'pilot', 'air_boss')
+  @Post('slots/:slotId/suspend-reason')
+  @HttpCode(HttpStatus.OK)
+  giveSuspendReason(
+    @Param('cycleId', ParseIntPipe) cycleId: number,
+    @Param('slotId', ParseIntPipe) slotId: number,
+    @Body() body: SuspendReasonDto,
+    @CurrentUser() user: AuthenticatedUser,
+  ): Promise<LineupCommandResult> {
+    return this.readiness.giveSuspendReason(cycleId, user, slotId, body);
   }
 
   @ApiDoc('Undo the last readiness step', {

@@ -4,10 +4,12 @@ import type {
   LaunchSlotRequest,
   LineupCommandResult,
   SlotStatus,
+  SuspendReasonRequest,
   SuspendSlotRequest,
   UndoStepRequest,
   WeightAckRequest,
 } from '@catline/contracts';
+import { SUSPEND_REASON_LABELS } from '@catline/contracts';
 import { afterburnerRequired, pounds, takeOffTrim, type ReadinessCommand } from '@catline/launch-math';
 import { Injectable } from '@nestjs/common';
 import type { EntityManager } from 'typeorm';
@@ -146,6 +148,38 @@ export class ReadinessService {
       return {
         summary: `${slot.aircraft.sideNumber} suspended on cat ${catapult.number}${request.reason ? `: ${request.reason}` : ''}`,
         command: { type: 'suspend', slotId, ...request },
+        mirrored: true,
+      };
+    });
+  }
+
+  /** The reason for a suspend, from the quick choices, chosen after the tap by anyone who may suspend. */
+  giveSuspendReason(
+    cycleId: number,
+    user: AuthenticatedUser,
+    slotId: number,
+    request: SuspendReasonRequest,
+  ): Promise<LineupCommandResult> {
+    return this.changes.apply(cycleId, actorOf(user), 'suspend_reason_given', async (manager, state) => {
+      const slot = this.basis.slot(state, slotId);
+      await this.basis.slotAsSeen(manager, state, slot, request.slotVersion);
+      const side = slot.aircraft.sideNumber;
+      transition(
+        state,
+        slot,
+        user,
+        { kind: 'suspend_reason' },
+        'suspend reason',
+        `${side} is ${label(slot.status)}; a reason is given only while it is suspended.`,
+      );
+      if (request.reason === 'other' && !request.text) {
+        throw new LineupException('reason_required', `Say in a few words why ${side} was suspended.`);
+      }
+      const reason = request.reason === 'other' ? request.text! : SUSPEND_REASON_LABELS[request.reason];
+      await updateSlot(manager, slot, { suspendReason: reason });
+      return {
+        summary: `${side} suspended for: ${reason}`,
+        command: { type: 'suspend_reason', slotId, ...request },
         mirrored: true,
       };
     });

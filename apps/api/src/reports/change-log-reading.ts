@@ -59,6 +59,11 @@ export function readChangeLog(changes: readonly LineupChange[]): ChangeLogReadin
           resumedAt: null,
         });
       }
+      // The reason is chosen after the tap that suspended.
+      if (before?.status === 'suspended' && view.status === 'suspended' && view.suspendReason) {
+        const open = suspends.findLast((event) => event.slotId === view.id);
+        if (open) open.reason = view.suspendReason;
+      }
       if (before?.status === 'suspended' && view.status === 'on_catapult') {
         const open = suspends.findLast((event) => event.slotId === view.id);
         if (open) open.resumedAt = change.at;

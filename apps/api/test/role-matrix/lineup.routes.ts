@@ -124,6 +124,21 @@ export const lineupRoutes: MatrixRoute[] = [
   },
   {
     method: 'POST',
+    path: '/api/cycles/{cycleId}/lineup/slots/{slotId}/suspend-reason',
+    allowed: [...CATAPULT_ROLES, 'pilot', 'air_boss'],
+    notOwner: { ...OTHER_CATAPULT, pilot: 'pilot2@catline.example' },
+    example: async (context) => {
+      if (!context.allowed) return refused;
+      const { deck, cycleId, slot } = await freshSlot(context, 'taxiing');
+      await deck.ok('cat1@catline.example', 'post', `/api/cycles/${cycleId}/lineup/slots/${slot.id}/suspend`, {
+        slotVersion: slot.version,
+      });
+      const suspended = await deck.slot(cycleId, slot.id);
+      return { params: { cycleId, slotId: slot.id }, body: { slotVersion: suspended.version, reason: 'holdback' } };
+    },
+  },
+  {
+    method: 'POST',
     path: '/api/cycles/{cycleId}/lineup/slots/{slotId}/undo',
     allowed: CATAPULT_ROLES,
     notOwner: OTHER_CATAPULT,

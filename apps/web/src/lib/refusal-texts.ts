@@ -35,6 +35,7 @@ const REASONS: Record<RefusalCode, string> = {
   spare_held: 'the spare is held until called',
   pilot_missing: 'the aircraft has no pilot',
   agreement_required: "the catapult officer's agreement is needed",
+  reason_required: 'a reason in a few words is needed',
   not_your_catapult: 'not your catapult',
   not_your_slot: 'not your aircraft',
   not_current_aircraft: 'not the aircraft on the catapult',

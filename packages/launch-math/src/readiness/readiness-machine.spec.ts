@@ -141,6 +141,23 @@ describe('readinessTransition', () => {
     });
   });
 
+  it('takes the reason for a suspend afterwards, from whoever may suspend, only while suspended', () => {
+    const suspended: SlotReadiness = { ...stepTo('tensioned'), status: 'suspended', lastStep: null };
+    const pilot = { ...officer, role: 'pilot', atThisCatapult: false, fliesIt: true };
+    expect(readinessTransition(steps, suspended, pilot, { kind: 'suspend_reason' })).toEqual({
+      ok: true,
+      state: suspended,
+    });
+    expect(readinessTransition(steps, suspended, { ...pilot, fliesIt: false }, { kind: 'suspend_reason' })).toEqual({
+      ok: false,
+      code: 'not_your_slot',
+    });
+    expect(readinessTransition(steps, stepTo('tensioned'), officer, { kind: 'suspend_reason' })).toEqual({
+      ok: false,
+      code: 'wrong_step',
+    });
+  });
+
   it('takes a suspected cold shot only on a launched aircraft, and leaves it launched', () => {
     const launched: SlotReadiness = { ...stepTo('pilot_ready'), status: 'launched', lastStep: null };
     expect(readinessTransition(steps, launched, officer, { kind: 'cold_shot' })).toEqual({ ok: true, state: launched });
@@ -224,6 +241,7 @@ const commandArb: fc.Arbitrary<Drawn> = fc.oneof(
   },
   fc.record({ kind: fc.constant('undo' as const), at: fc.integer({ min: 0, max: 30_000 }) }),
   fc.constant({ kind: 'suspend' as const }),
+  fc.constant({ kind: 'suspend_reason' as const }),
   fc.constant({ kind: 'resume' as const }),
   {
     weight: 3,
@@ -315,7 +333,9 @@ describe('readiness model run', () => {
           }
           const after = result.state;
           // Only the catapult's own crew moves an aircraft, bar a suspend.
-          if (command.kind !== 'suspend') {
+          // A reason changes nothing of where the aircraft stands.
+          if (command.kind === 'suspend_reason') expect(after.status).toBe('suspended');
+          if (command.kind !== 'suspend' && command.kind !== 'suspend_reason') {
             expect(CATAPULT_ROLES).toContain(step.actor.role);
             expect(step.actor.atThisCatapult).toBe(true);
           }

@@ -47,6 +47,8 @@ export type ReadinessCommand =
   | { readonly kind: 'advance'; readonly to: ReadinessStepKey; readonly at: number; readonly agreedWeight?: number }
   | { readonly kind: 'undo'; readonly at: number }
   | { readonly kind: 'suspend' }
+  /** The reason for a suspend, chosen after the one tap that suspended. */
+  | { readonly kind: 'suspend_reason' }
   | { readonly kind: 'resume' }
   /** `refusals`: the launch gates that refuse now (launchGates' `refusals`). */
   | { readonly kind: 'launch'; readonly refusals: readonly string[] }
@@ -163,10 +165,12 @@ export function readinessTransition(
   actor: ReadinessActor,
   command: ReadinessCommand,
 ): ReadinessTransition {
-  if (command.kind === 'suspend') {
+  if (command.kind === 'suspend' || command.kind === 'suspend_reason') {
     if (!SUSPEND_ROLES.includes(actor.role)) return refuse('forbidden_role');
     if (actor.role === 'pilot' && !actor.fliesIt) return refuse('not_your_slot');
     if (CATAPULT_ROLES.includes(actor.role) && !actor.atThisCatapult) return refuse('not_your_catapult');
+    if (command.kind === 'suspend_reason')
+      return slot.status === 'suspended' ? { ok: true, state: slot } : refuse('wrong_step');
     if (!inSteps(steps, slot.status)) return refuse('wrong_step');
     return { ok: true, state: { ...slot, status: 'suspended', lastStep: null } };
   }

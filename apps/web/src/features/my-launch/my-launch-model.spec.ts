@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { weightAnswer } from './my-launch-model.js';
+import type { SlotView } from '@catline/contracts';
+import { onTheCatapult, weightAnswer } from './my-launch-model.js';
 
 describe('weightAnswer', () => {
   it('reads whole pounds, with or without thousands separators', () => {
@@ -11,5 +12,18 @@ describe('weightAnswer', () => {
     expect(weightAnswer('45.5k')).toEqual({ problem: 'Type the gross weight in whole pounds.' });
     expect(weightAnswer('')).toEqual({ problem: 'Type the gross weight in whole pounds.' });
     expect(weightAnswer('250000')).toEqual({ problem: 'Between 1 and 200,000 lb.' });
+  });
+});
+
+describe('onTheCatapult', () => {
+  it('offers the pilot a suspend from taxiing to pilot ready, not before nor after', () => {
+    const at = (status: SlotView['status']) => onTheCatapult({ status } as SlotView);
+    expect([at('planned'), at('taxiing'), at('pilot_ready'), at('suspended'), at('launched')]).toEqual([
+      false,
+      true,
+      true,
+      false,
+      false,
+    ]);
   });
 });

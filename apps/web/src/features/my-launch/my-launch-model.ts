@@ -1,4 +1,4 @@
-import { GROSS_WEIGHT_LB, type LineupSnapshot, type SlotView } from '@catline/contracts';
+import { GROSS_WEIGHT_LB, READINESS_STEPS, type LineupSnapshot, type SlotView } from '@catline/contracts';
 
 const gone = new Set(['launched', 'down', 'scratched']);
 
@@ -25,3 +25,6 @@ export function weightAnswer(typed: string): { weight: number } | { problem: str
     return { problem: `Between ${GROSS_WEIGHT_LB.min} and ${GROSS_WEIGHT_LB.max.toLocaleString('en-US')} lb.` };
   return { weight };
 }
+
+/** In the catapult's readiness steps (taxiing up to pilot ready): the pilot may suspend with one tap. */
+export const onTheCatapult = (slot: SlotView) => (READINESS_STEPS as readonly string[]).includes(slot.status);

@@ -40,6 +40,7 @@ export const CHANGE_KIND_LABELS: Record<ChangeKind, string> = {
   hangfire: 'Hangfire',
   cold_shot_suspected: 'Suspected cold shot',
   down_on_catapult: 'Down on the catapult',
+  suspend_reason_given: 'Suspend reason',
 };
 
 /** Slots in no lane and not in the deck pool: down or scratched aircraft. */

@@ -8,6 +8,7 @@ import { PageHeader } from '../../../components/page-header.js';
 import { EmptyState, ErrorState, LoadingState, QueryView } from '../../../components/query-states.js';
 import { NoticeBanner, refusalNotice, useNotice } from '../../../components/refusal-notice.js';
 import { SlotStatusBadge } from '../../../components/slot-status-badge.js';
+import { SuspendControls } from '../../../components/suspend-controls.js';
 import { formatOptionalClock } from '../../../lib/format.js';
 import { useLiveCycle } from '../../../lib/live/use-live-cycle.js';
 import { useViewedCycle } from '../../../lib/queries/use-viewed-cycle.js';
@@ -16,7 +17,8 @@ import { useCycleTheme } from '../../../theme/use-cycle-theme.js';
 import { useAdvanceSlot } from '../api/advance-slot.js';
 import { useLaunchSlot } from '../api/launch-slot.js';
 import { useSuspendSlot } from '../api/suspend-slot.js';
-import { STEP_LABELS, catapultQueue, lastLaunched } from '../cat-station-model.js';
+import { STEP_LABELS, canSuspend, catapultQueue, lastLaunched } from '../cat-station-model.js';
+import { useGiveSuspendReason } from '../api/give-suspend-reason.js';
 import { useReportColdShot } from '../api/report-cold-shot.js';
 import { useReportDownOnCatapult } from '../api/report-down-on-catapult.js';
 import { useReportHangfire } from '../api/report-hangfire.js';
@@ -29,7 +31,6 @@ import { LaunchPanel } from './launch-panel.js';
 import { NextUp } from './next-up.js';
 import { ReadinessSteps } from './readiness-steps.js';
 import { DeckStatusLine } from '../../../components/deck-status-line.js';
-import { SuspendPanel } from './suspend-panel.js';
 
 function Station({ snapshot, catapultId }: { snapshot: LineupSnapshot; catapultId: number }) {
   const cycleId = snapshot.cycle.id;
@@ -38,6 +39,7 @@ function Station({ snapshot, catapultId }: { snapshot: LineupSnapshot; catapultI
   const { notice, show, dismiss } = useNotice();
   const advance = useAdvanceSlot(cycleId);
   const suspend = useSuspendSlot(cycleId);
+  const suspendReason = useGiveSuspendReason(cycleId);
   const launch = useLaunchSlot(cycleId);
   const undo = useUndoStep(cycleId);
   const hangfire = useReportHangfire(cycleId);
@@ -45,7 +47,7 @@ function Station({ snapshot, catapultId }: { snapshot: LineupSnapshot; catapultI
   const coldShot = useReportColdShot(cycleId);
   const undoWindow = useUndoWindow();
   const launchKey = useLaunchIntent(current?.id);
-  const anyPending = [advance, suspend, launch, undo, hangfire, downOnCatapult, coldShot].some(
+  const anyPending = [advance, suspend, suspendReason, launch, undo, hangfire, downOnCatapult, coldShot].some(
     (command) => command.isPending,
   );
 
@@ -83,14 +85,22 @@ function Station({ snapshot, catapultId }: { snapshot: LineupSnapshot; catapultI
     <Stack gap="3">
       {notice && <NoticeBanner notice={notice} onDismiss={dismiss} />}
       <DeckStatusLine lane={lane} size="lg" />
-      <SuspendPanel
-        slot={current}
-        pending={suspend.isPending}
-        onSuspend={(reason) =>
-          current &&
-          suspend.mutate({ slotId: current.id, slotVersion: current.version, reason }, { onError: refused('Suspend') })
-        }
-      />
+      {current && (
+        <SuspendControls
+          slot={current}
+          possible={canSuspend(current)}
+          pending={suspend.isPending || suspendReason.isPending}
+          onSuspend={() =>
+            suspend.mutate({ slotId: current.id, slotVersion: current.version }, { onError: refused('Suspend') })
+          }
+          onReason={(reason) =>
+            suspendReason.mutate(
+              { slotId: current.id, slotVersion: current.version, ...reason },
+              { onError: refused('The reason') },
+            )
+          }
+        />
+      )}
       {!current ? (
         <>
           <EmptyState title={`No aircraft waiting on cat ${lane.number}`}>

@@ -9,6 +9,7 @@ import { PageHeader } from '../../../components/page-header.js';
 import { EmptyState, ErrorState, LoadingState, QueryView } from '../../../components/query-states.js';
 import { NoticeBanner, refusalNotice, useNotice } from '../../../components/refusal-notice.js';
 import { SlotStatusBadge } from '../../../components/slot-status-badge.js';
+import { SuspendControls } from '../../../components/suspend-controls.js';
 import { formatClearingTurn, formatClock, formatCountdown, formatPounds, ordinal } from '../../../lib/format.js';
 import { useLiveCycle } from '../../../lib/live/use-live-cycle.js';
 import { useViewedCycle } from '../../../lib/queries/use-viewed-cycle.js';
@@ -16,7 +17,9 @@ import { useSessionUser } from '../../../lib/session-store.js';
 import { useNow } from '../../../lib/use-now.js';
 import { useCycleTheme } from '../../../theme/use-cycle-theme.js';
 import { useAcknowledgeWeight } from '../api/acknowledge-weight.js';
-import { findMySlot } from '../my-launch-model.js';
+import { useGiveSuspendReason } from '../api/give-suspend-reason.js';
+import { useSuspendSlot } from '../api/suspend-slot.js';
+import { findMySlot, onTheCatapult } from '../my-launch-model.js';
 import { WeightAnswer } from './weight-answer.js';
 
 function Countdown({ projectedLaunchAt, launchedAt }: { projectedLaunchAt: string | null; launchedAt: string | null }) {
@@ -37,6 +40,8 @@ function Countdown({ projectedLaunchAt, launchedAt }: { projectedLaunchAt: strin
 function MySlot({ snapshot, pilotId }: { snapshot: LineupSnapshot; pilotId: number }) {
   const mine = findMySlot(snapshot, pilotId);
   const acknowledge = useAcknowledgeWeight(snapshot.cycle.id);
+  const suspend = useSuspendSlot(snapshot.cycle.id);
+  const suspendReason = useGiveSuspendReason(snapshot.cycle.id);
   const { notice, show, dismiss } = useNotice();
   if (!mine) {
     return (
@@ -86,10 +91,24 @@ function MySlot({ snapshot, pilotId }: { snapshot: LineupSnapshot; pilotId: numb
         </Text>
         <SlotStatusBadge status={slot.status} size="lg" />
       </HStack>
-      {slot.status === 'suspended' && slot.suspendReason && (
-        <Text color="caution.fg" fontWeight="600">
-          Suspended: {slot.suspendReason}
-        </Text>
+      {(onTheCatapult(slot) || slot.status === 'suspended') && (
+        <SuspendControls
+          slot={slot}
+          possible={onTheCatapult(slot)}
+          pending={suspend.isPending || suspendReason.isPending}
+          onSuspend={() =>
+            suspend.mutate(
+              { slotId: slot.id, slotVersion: slot.version },
+              { onError: (error) => show(refusalNotice(error, 'Suspend')) },
+            )
+          }
+          onReason={(reason) =>
+            suspendReason.mutate(
+              { slotId: slot.id, slotVersion: slot.version, ...reason },
+              { onError: (error) => show(refusalNotice(error, 'The reason')) },
+            )
+          }
+        />
       )}
       <WeightAnswer
         slot={slot}

@@ -50,6 +50,7 @@ const cycle: CycleView = {
   landingAreaInUse: false,
   landingArea: 'clear',
   landingAreaReason: null,
+  respot: null,
 };
 
 function lane(catapultId: number, slotIds: number[]): LaneView {

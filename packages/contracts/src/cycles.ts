@@ -1,4 +1,4 @@
-import type { LandingAreaState } from './deck.js';
+import type { LandingAreaState, RespotView } from './deck.js';
 
 export const CYCLE_STATES = ['planning', 'executing', 'closed'] as const;
 export type CycleState = (typeof CYCLE_STATES)[number];
@@ -34,6 +34,8 @@ export interface CycleView extends CycleConditions {
   landingArea: LandingAreaState;
   /** Why the landing area is fouled, or a note on the recovery; null when none. */
   landingAreaReason: string | null;
+  /** The respot for the coming recovery, once the handler has built one after the last launch. */
+  respot: RespotView | null;
   /** Bumped by one with every accepted change; orders the change log and broadcasts. */
   version: number;
   slotCount: number;

@@ -45,3 +45,37 @@ export interface SetLandingAreaRequest {
   /** The cycle version the change was based on. */
   basisVersion: number;
 }
+
+/** Where one aircraft is to be after the respot; an airborne one lands there in the recovery. */
+export interface RespotTarget {
+  slotId: number;
+  to: DeckPositionView;
+}
+
+/** One tow of the respot, in the order the deck crew makes them. */
+export interface RespotTow {
+  slotId: number;
+  from: DeckPositionView;
+  to: DeckPositionView;
+  /** ISO 8601 instant the tow was ticked off; null while still to do. */
+  doneAt: string | null;
+}
+
+/** The respot the handler built for the coming recovery: the targets and the tows that reach them. */
+export interface RespotView {
+  targets: RespotTarget[];
+  tows: RespotTow[];
+}
+
+/** Builds (or builds again) the cycle's respot after its last launch; Catline orders the tows. */
+export interface BuildRespotRequest {
+  targets: RespotTarget[];
+  /** The cycle version the respot was based on. */
+  basisVersion: number;
+}
+
+/** Ticks off the respot's next tow: the aircraft is towed there. */
+export interface RespotTowDoneRequest {
+  /** The cycle version the tick was based on. */
+  basisVersion: number;
+}

@@ -300,6 +300,8 @@ export const CHANGE_KINDS = [
   'aircraft_towed',
   'landing_area_set',
   'deck_status_set',
+  'respot_built',
+  'respot_tow_done',
   'spare_called',
   'pilot_assigned',
   'aircraft_up',

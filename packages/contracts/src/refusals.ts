@@ -51,6 +51,14 @@ export const LINEUP_REFUSAL_CODES = [
   /** A tow out of, or into, a spot behind aircraft that must move first. */
   'path_blocked',
   'unknown_position',
+  /** A respot while aircraft are still to launch. */
+  'launches_pending',
+  /** A respot that gives one aircraft two targets. */
+  'invalid_respot',
+  /** A respot tow ticked off before an earlier one. */
+  'respot_out_of_order',
+  /** A respot tow whose aircraft was towed elsewhere since the respot was built. */
+  'respot_out_of_date',
 ] as const;
 export type LineupRefusalCode = (typeof LINEUP_REFUSAL_CODES)[number];
 

@@ -34,6 +34,7 @@ export function toCycleView(cycle: Cycle, profile: ShipProfile, counts: CycleCou
     landingAreaInUse: cycle.landingAreaInUse,
     landingArea: cycle.landingArea,
     landingAreaReason: cycle.landingAreaReason,
+    respot: cycle.respot,
     state: cycle.state,
     version: cycle.version,
     slotCount: counts.slotCount,

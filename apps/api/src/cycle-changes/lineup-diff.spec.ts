@@ -20,6 +20,7 @@ const cycle = (version: number): CycleView => ({
   landingAreaInUse: false,
   landingArea: 'clear',
   landingAreaReason: null,
+  respot: null,
   state: 'planning',
   version,
   slotCount: 3,

@@ -44,6 +44,10 @@ const STATUS: Record<LineupRefusalCode, HttpStatus> = {
   position_occupied: HttpStatus.CONFLICT,
   path_blocked: HttpStatus.CONFLICT,
   unknown_position: HttpStatus.BAD_REQUEST,
+  launches_pending: HttpStatus.CONFLICT,
+  invalid_respot: HttpStatus.BAD_REQUEST,
+  respot_out_of_order: HttpStatus.CONFLICT,
+  respot_out_of_date: HttpStatus.CONFLICT,
 };
 
 /** Every refusal of a lineup or cycle command, with a code the client can act on. */

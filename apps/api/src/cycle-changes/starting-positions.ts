@@ -8,9 +8,9 @@ import type { LineupState } from './lineup-state.js';
 const key = (position: DeckPositionView) => `${position.kind}:${position.name}`;
 
 /**
- * Where aircraft joining a cycle start: where the ship's latest earlier cycle left them, else on their
- * parked spot; when another aircraft of this cycle holds that spot or elevator already, in the ship's
- * first hangar bay (a ship without one leaves them on the parked spot, as before positions were kept).
+ * Where aircraft joining a cycle start: where the ship's latest earlier cycle left them (one launched
+ * in it, where that cycle's respot had it land), else on their parked spot; when another aircraft of
+ * this cycle holds that spot or elevator already, in the ship's first hangar bay (a ship without one leaves them on the parked spot, as before positions were kept).
  */
 export async function startingPositions(
   manager: EntityManager,
@@ -31,7 +31,10 @@ export async function startingPositions(
   const starts = new Map<number, Pick<Slot, 'deckPositionKind' | 'deckPositionName'>>();
   for (const slot of earlier) {
     if (starts.has(slot.aircraftId) || slot.cycleId === state.cycle.id) continue;
-    const position = { kind: slot.deckPositionKind, name: slot.deckPositionName };
+    // A recovered aircraft lands where its cycle's respot placed it.
+    const landed =
+      slot.status === 'launched' ? slot.cycle.respot?.targets.find((t) => t.slotId === slot.id) : undefined;
+    const position = landed?.to ?? { kind: slot.deckPositionKind, name: slot.deckPositionName };
     if (position.kind !== 'hangar' && taken.has(key(position))) continue;
     taken.add(key(position));
     starts.set(slot.aircraftId, { deckPositionKind: position.kind, deckPositionName: position.name });

@@ -17,9 +17,7 @@ import { Cycle } from '../database/entities/cycle.entity.js';
 import type { SetDeckStatusDto } from './dto/set-deck-status.dto.js';
 import type { SetLandingAreaDto } from './dto/set-landing-area.dto.js';
 import type { TowAircraftDto } from './dto/tow-aircraft.dto.js';
-
-const PLACE_WORDS = { spot: 'spot', elevator: 'elevator', hangar: 'hangar bay' } as const;
-const place = (position: DeckPositionView) => `${PLACE_WORDS[position.kind]} ${position.name}`;
+import { placeWords } from './place-words.js';
 
 /** The deck's commands: tows between positions and the landing area's state, each a versioned change. */
 @Injectable()
@@ -43,11 +41,11 @@ export class DeckCommandsService {
         );
       }
       if (!positionExists(state.ship, to)) {
-        throw new LineupException('unknown_position', `This ship has no ${place(to)}.`);
+        throw new LineupException('unknown_position', `This ship has no ${placeWords(to)}.`);
       }
       const from = deckPositionView(slot);
       if (from.kind === to.kind && from.name === to.name) {
-        throw new LineupException('no_change', `${side} is already on ${place(to)}.`);
+        throw new LineupException('no_change', `${side} is already on ${placeWords(to)}.`);
       }
       // A slot sharing its spot with an earlier one is not in the deck's positions yet: it takes its own now.
       const positions = { ...heldPositions(state), [String(slot.id)]: { kind: from.kind, id: from.name } };
@@ -59,24 +57,24 @@ export class DeckCommandsService {
       if (blockers.occupiedBy !== null) {
         throw new LineupException(
           'position_occupied',
-          `${place(to)} is held by ${sideOf(blockers.occupiedBy)}; tow it away first.`,
+          `${placeWords(to)} is held by ${sideOf(blockers.occupiedBy)}; tow it away first.`,
         );
       }
       if (blockers.noRoute) {
         throw new LineupException(
           'path_blocked',
-          `${side} cannot go from ${place(from)} to ${place(to)}: no elevator serves that way.`,
+          `${side} cannot go from ${placeWords(from)} to ${placeWords(to)}: no elevator serves that way.`,
         );
       }
       if (blockers.mustMove.length > 0) {
         throw new LineupException(
           'path_blocked',
-          `${side} cannot be towed from ${place(from)} to ${place(to)} until ${blockers.mustMove.map(sideOf).join(', ')} ${blockers.mustMove.length === 1 ? 'moves' : 'move'}.`,
+          `${side} cannot be towed from ${placeWords(from)} to ${placeWords(to)} until ${blockers.mustMove.map(sideOf).join(', ')} ${blockers.mustMove.length === 1 ? 'moves' : 'move'}.`,
         );
       }
       await updateSlot(manager, slot, { deckPositionKind: to.kind, deckPositionName: to.name });
       return {
-        summary: `${side} towed from ${place(from)} to ${place(to)}`,
+        summary: `${side} towed from ${placeWords(from)} to ${placeWords(to)}`,
         command: { type: 'tow', ...request, to },
         mirrored: true,
       };

@@ -11,13 +11,18 @@ import { DeckCommandsService } from './deck-commands.service.js';
 import { SetDeckStatusDto } from './dto/set-deck-status.dto.js';
 import { SetLandingAreaDto } from './dto/set-landing-area.dto.js';
 import { TowAircraftDto } from './dto/tow-aircraft.dto.js';
+import { BuildRespotDto, RespotTowDoneDto } from './dto/respot.dto.js';
+import { RespotService } from './respot.service.js';
 
 // Each command answers 200 with the accepted change, like the lineup's; the lineup snapshot carries
 // every aircraft's position and the landing area.
 @ApiTags('deck')
 @Controller('cycles/:cycleId/deck')
 export class DeckController {
-  constructor(private readonly commands: DeckCommandsService) {}
+  constructor(
+    private readonly commands: DeckCommandsService,
+    private readonly respots: RespotService,
+  ) {}
 
   @ApiDoc('Tow an aircraft to another position', {
     response: LineupCommandResultDto,
@@ -70,5 +75,55 @@ export class DeckController {
     @CurrentUser() user: AuthenticatedUser,
   ): Promise<LineupCommandResult> {
     return this.commands.setDeckStatus(cycleId, actorOf(user), body);
+  }
+
+  @ApiDoc('Build the respot for the recovery', {
+    response: LineupCommandResultDto,
+    description:
+      'After the last launch: target positions for aircraft on deck or below, and where the airborne ones land; answers with the tows in order.',
+    refuses: {
+      400: ['unknown_position', 'invalid_respot'],
+      404: ['not_found'],
+      409: ['stale_basis', 'launches_pending', 'slot_not_movable', 'position_occupied', 'path_blocked'],
+      422: ['launch_data_invalid'],
+    },
+  })
+  @Roles('handler')
+  @Post('respot')
+  @HttpCode(HttpStatus.OK)
+  buildRespot(
+    @Param('cycleId', ParseIntPipe) cycleId: number,
+    @Body() body: BuildRespotDto,
+    @CurrentUser() user: AuthenticatedUser,
+  ): Promise<LineupCommandResult> {
+    return this.respots.build(cycleId, actorOf(user), body);
+  }
+
+  @ApiDoc('Tick off a tow of the respot', {
+    response: LineupCommandResultDto,
+    description: 'The next tow in order: the aircraft is towed to its target.',
+    refuses: {
+      404: ['not_found'],
+      409: [
+        'stale_basis',
+        'no_change',
+        'respot_out_of_order',
+        'respot_out_of_date',
+        'position_occupied',
+        'path_blocked',
+      ],
+      422: ['launch_data_invalid'],
+    },
+  })
+  @Roles('handler')
+  @Post('respot/tows/:step')
+  @HttpCode(HttpStatus.OK)
+  respotTowDone(
+    @Param('cycleId', ParseIntPipe) cycleId: number,
+    @Param('step', ParseIntPipe) step: number,
+    @Body() body: RespotTowDoneDto,
+    @CurrentUser() user: AuthenticatedUser,
+  ): Promise<LineupCommandResult> {
+    return this.respots.towDone(cycleId, actorOf(user), step, body);
   }
 }

@@ -63,6 +63,10 @@ const REASONS: Record<RefusalCode, string> = {
   position_occupied: 'another aircraft is there',
   path_blocked: 'aircraft in the way must move first',
   unknown_position: 'the ship has no such position',
+  launches_pending: 'aircraft are still to launch',
+  invalid_respot: 'an aircraft has two targets',
+  respot_out_of_order: 'an earlier tow comes first',
+  respot_out_of_date: 'the aircraft has been towed since',
   // cycles
   cycle_number_taken: 'the cycle number is taken',
   invalid_window: 'the launch window is not valid',

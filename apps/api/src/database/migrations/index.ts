@@ -9,6 +9,7 @@ import { LaunchingCycleOnePerShip1796213798790 } from './1796213798790-Launching
 import { RefreshTokenSession1796213925015 } from './1796213925015-RefreshTokenSession.js';
 import { CycleWindReadingAndPosition1796214000000 } from './1796214000000-CycleWindReadingAndPosition.js';
 import { CycleDeckHolds1796216225592 } from './1796216225592-CycleDeckHolds.js';
+import { CycleRespot1796217149940 } from './1796217149940-CycleRespot.js';
 
 /** Every migration in the order it runs; add a new one at the end (see DEVELOPERS.md). */
 export const migrations = [
@@ -23,4 +24,5 @@ export const migrations = [
   RefreshTokenSession1796213925015,
   CycleWindReadingAndPosition1796214000000,
   CycleDeckHolds1796216225592,
+  CycleRespot1796217149940,
 ];

@@ -80,6 +80,7 @@ describe('editing a cycle', () => {
     landingAreaInUse: true,
     landingArea: 'recovering',
     landingAreaReason: null,
+    respot: null,
   };
 
   it('round-trips the cycle through the form into a conditions change on the version it saw', () => {
@@ -102,6 +103,7 @@ describe('editing a cycle', () => {
       latitudeDeg: _latitude,
       longitudeDeg: _longitude,
       timeZone: _timeZone,
+      respot: _respot,
       ...conditions
     } = cycle;
     expect(toConditionsRequest(valuesFromCycle(cycle), cycle.version)).toEqual({ ...conditions, basisVersion: 5 });

@@ -1,6 +1,14 @@
 import type { LineupSnapshot, ShipView, SlotView } from '@catline/contracts';
 import { describe, expect, it } from 'vitest';
-import { deckPanels, isElsewhere, positionFromKey, positionKey, towTargets } from './deck-model.js';
+import {
+  deckPanels,
+  isElsewhere,
+  positionFromKey,
+  positionKey,
+  respotCandidates,
+  respotSteps,
+  towTargets,
+} from './deck-model.js';
 
 const ship = {
   deckSpots: [
@@ -51,5 +59,35 @@ describe('the deck screen model', () => {
     const aboard = slot(1, { kind: 'spot', name: 'b2' });
     const [bow] = deckPanels(ship, snapshot([aboard]));
     expect(bow.places.map((place) => isElsewhere(place, aboard))).toEqual([true, false]);
+  });
+
+  it('numbers the respot tows with their side numbers, the first not done being next', () => {
+    const tows = [
+      {
+        slotId: 1,
+        from: { kind: 'spot', name: 'b1' },
+        to: { kind: 'spot', name: 'lone' },
+        doneAt: '2026-12-02T13:00:00Z',
+      },
+      { slotId: 2, from: { kind: 'hangar', name: 'bay' }, to: { kind: 'spot', name: 'b1' }, doneAt: null },
+    ] as const;
+    const steps = respotSteps({
+      cycle: { respot: { targets: [], tows } },
+      slots: [slot(1, null), slot(2, null)],
+    } as unknown as LineupSnapshot);
+    expect(steps.map((step) => [step.step, step.sideNumber, step.next])).toEqual([
+      [1, 'X1', false],
+      [2, 'X2', true],
+    ]);
+  });
+
+  it('offers aircraft on deck or below and airborne ones for the respot, not those taxiing', () => {
+    const taxiing = { ...slot(3, { kind: 'spot', name: 'b2' }), status: 'taxiing' } as SlotView;
+    const airborne = { ...slot(2, null), status: 'launched' } as SlotView;
+    const candidates = respotCandidates(snapshot([slot(1, { kind: 'spot', name: 'b1' }), airborne, taxiing]));
+    expect(candidates.map(({ slot: on, now }) => [on.sideNumber, now?.name ?? null])).toEqual([
+      ['X1', 'b1'],
+      ['X2', null],
+    ]);
   });
 });

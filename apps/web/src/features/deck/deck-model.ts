@@ -77,3 +77,40 @@ export function positionFromKey(placeKey: string): DeckPositionView {
 export function isElsewhere(place: DeckPlace, slot: SlotView): boolean {
   return slot.deckPosition === null || key(place.position) !== key(slot.deckPosition);
 }
+
+export interface RespotStep {
+  /** 1-based, the order the deck crew tows in. */
+  step: number;
+  sideNumber: string;
+  from: DeckPositionView;
+  to: DeckPositionView;
+  doneAt: string | null;
+  /** The first tow not yet done: the only one the deck crew can tick off. */
+  next: boolean;
+}
+
+/** The respot's tows in order, each with its aircraft's side number. */
+export function respotSteps(snapshot: LineupSnapshot): RespotStep[] {
+  const tows = snapshot.cycle.respot?.tows ?? [];
+  const next = tows.findIndex((tow) => tow.doneAt === null);
+  const sides = new Map(snapshot.slots.map((slot) => [slot.id, slot.sideNumber]));
+  return tows.map((tow, index) => ({
+    step: index + 1,
+    sideNumber: sides.get(tow.slotId) ?? `slot ${tow.slotId}`,
+    from: tow.from,
+    to: tow.to,
+    doneAt: tow.doneAt,
+    next: index === next,
+  }));
+}
+
+/**
+ * The aircraft a respot can place, by side number: those on deck or below (where they are now) and
+ * those launched, airborne until the recovery (now: null).
+ */
+export function respotCandidates(snapshot: LineupSnapshot): { slot: SlotView; now: DeckPositionView | null }[] {
+  return snapshot.slots
+    .filter((slot) => ['launched', 'planned', 'down', 'scratched'].includes(slot.status))
+    .sort((a, b) => a.sideNumber.localeCompare(b.sideNumber))
+    .map((slot) => ({ slot, now: slot.status === 'launched' ? null : slot.deckPosition }));
+}

@@ -42,6 +42,7 @@ const cycle: CycleView = {
   landingAreaInUse: false,
   landingArea: 'clear',
   landingAreaReason: null,
+  respot: null,
 };
 
 function slot(

@@ -33,6 +33,8 @@ export const CHANGE_KIND_LABELS: Record<ChangeKind, string> = {
   aircraft_towed: 'Tow',
   landing_area_set: 'Landing area',
   deck_status_set: 'Deck status',
+  respot_built: 'Respot',
+  respot_tow_done: 'Respot tow',
   spare_called: 'Spare called',
   pilot_assigned: 'Pilot',
   aircraft_up: 'Up again',

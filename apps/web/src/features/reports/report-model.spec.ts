@@ -34,6 +34,7 @@ function cycle(id: number, plannedLaunchAt: string, state: CycleView['state']): 
     landingAreaInUse: false,
     landingArea: 'clear',
     landingAreaReason: null,
+    respot: null,
   };
 }
 

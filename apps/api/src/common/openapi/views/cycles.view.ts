@@ -4,10 +4,12 @@ import {
   type CycleView,
   LANDING_AREA_STATES,
   type LandingAreaState,
+  type RespotView,
   WEATHER_CASES,
   type WeatherCase,
 } from '@catline/contracts';
 import { ApiProperty, ApiSchema } from '@nestjs/swagger';
+import { RespotViewDto } from './deck.view.js';
 import { EnumProperty, IdProperty, InstantProperty, IntProperty } from './fields.js';
 
 @ApiSchema({ name: 'CycleView' })
@@ -40,6 +42,9 @@ export class CycleViewDto implements CycleView {
 
   @ApiProperty({ type: 'string', nullable: true, description: 'Why the landing area is fouled; null when none.' })
   landingAreaReason: string | null;
+
+  @ApiProperty({ type: () => RespotViewDto, nullable: true, description: 'Null until the handler builds one.' })
+  respot: RespotView | null;
 
   @IntProperty({ minimum: 0, description: 'Bumped by one with every accepted change; orders the change log.' })
   version: number;

@@ -1,7 +1,5 @@
 import {
   CHANGE_KINDS,
-  DECK_POSITION_KINDS,
-  type DeckPositionKind,
   type DeckPositionView,
   type ChangeActor,
   type ChangeKind,
@@ -42,6 +40,7 @@ import {
 } from '@catline/contracts';
 import { ApiProperty, ApiSchema } from '@nestjs/swagger';
 import { CycleViewDto } from './cycles.view.js';
+import { DeckPositionViewDto } from './deck.view.js';
 import { EnumProperty, IdProperty, InstantProperty, IntProperty } from './fields.js';
 import { CATAPULT_POSITIONS, CATAPULT_STATUSES } from './fleet.view.js';
 
@@ -241,15 +240,6 @@ export class LaunchGateViewDto implements LaunchGateView {
 
   @ApiProperty({ description: 'A sentence for the deck crew, with the figures that close it.' })
   message: string;
-}
-
-@ApiSchema({ name: 'DeckPositionView', description: 'A deck spot, an elevator or a hangar bay.' })
-export class DeckPositionViewDto implements DeckPositionView {
-  @EnumProperty(DECK_POSITION_KINDS, 'DeckPositionKind')
-  kind: DeckPositionKind;
-
-  @ApiProperty({ description: "The spot's, elevator's or hangar bay's name in the ship's deck layout." })
-  name: string;
 }
 
 @ApiSchema({ name: 'SlotView', description: 'One aircraft of a cycle: where it stands in the lineup and its figures.' })

@@ -25,6 +25,7 @@ import { deckPanels, positionFromKey, positionKey } from '../deck-model.js';
 import { useDeckDrag } from '../hooks/use-deck-drag.js';
 import { DeckPlaceRow } from './deck-place-row.js';
 import { LiftedChip, PositionChip } from './position-chip.js';
+import { RespotPanel } from './respot-panel.js';
 
 const LANDING_WORDS: Record<LandingAreaState, string> = { clear: 'Clear', recovering: 'Recovering', fouled: 'Fouled' };
 
@@ -101,6 +102,7 @@ function DeckWorkspace({ snapshot, ship }: { snapshot: LineupSnapshot; ship: Shi
     <Stack gap="2">
       {notice && <NoticeBanner notice={notice} onDismiss={dismiss} />}
       <LandingAreaControl snapshot={snapshot} />
+      <RespotPanel snapshot={snapshot} panels={panels} live={live} />
       <DndContext {...drag.contextProps}>
         <SimpleGrid columns={{ base: 2, lg: 3 }} gap="2">
           {panels.map((panel) => (

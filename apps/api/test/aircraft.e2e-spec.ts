@@ -123,6 +123,10 @@ describe('aircraft', () => {
       shipSpeedKt: 20,
       trueWindFromDeg: 90,
       trueWindSpeedKt: 10,
+      windGustFromDeg: 90,
+      windGustKt: 10,
+      windLullFromDeg: 90,
+      windLullKt: 10,
       temperatureC: 15,
       weatherCase: 'I',
     });

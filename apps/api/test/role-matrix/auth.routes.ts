@@ -1,6 +1,7 @@
 import { ROLES } from '@catline/contracts';
 import request from 'supertest';
 import { refreshCookie } from '../support/cookies.js';
+import { bearer, demoEmail, signIn } from '../support/sign-in.js';
 import type { MatrixRoute } from './route-table.js';
 
 const OBSERVER = { email: 'observer@catline.example', password: 'catline-demo' };
@@ -16,7 +17,14 @@ export const authRoutes: MatrixRoute[] = [
       return { headers: { Cookie: refreshCookie(login), 'X-Catline-Refresh': '1' } };
     },
   },
-  { method: 'POST', path: '/api/auth/logout', allowed: ROLES },
+  {
+    method: 'POST',
+    path: '/api/auth/logout',
+    allowed: ROLES,
+    // Logout ends the session it is called with: a session of its own, not the one the matrix goes on with.
+    example: async ({ baseUrl, caller }) =>
+      caller ? { headers: bearer(await signIn(baseUrl, demoEmail(caller))) } : {},
+  },
   { method: 'GET', path: '/api/auth/me', allowed: ROLES },
   {
     method: 'POST',

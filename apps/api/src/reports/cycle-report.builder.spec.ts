@@ -21,6 +21,13 @@ const cycle = {
   shipSpeedKt: 25,
   trueWindFromDeg: 0,
   trueWindSpeedKt: 10,
+  windGustFromDeg: 0,
+  windGustKt: 10,
+  windLullFromDeg: 0,
+  windLullKt: 10,
+  windReadAt: new Date(t('09:45:00')),
+  latitudeDeg: null,
+  longitudeDeg: null,
   temperatureC: 20,
   pressureHpa: 1013,
   weatherCase: 'I',
@@ -73,7 +80,7 @@ const slot = (fields: SlotFields) =>
 
 const state: LineupState = {
   cycle,
-  ship: { pairGapS: 10 } as Ship,
+  ship: { pairGapS: 10, profile: {} } as Ship,
   catapults: [catapult(11, 1, 1), catapult(12, 2, 1), catapult(13, 3, 2)],
   slots: [
     slot({ id: 1, side: 'C21', squadron: 'CWR', status: 'launched', catapultId: 11, launchedAt: t('10:00:05') }),

@@ -29,7 +29,7 @@ describe('aircraft types', () => {
     const body = aircraftTypeBody();
     const created = await request(url).post('/api/aircraft-types').set(bearer(admin)).send(body);
     expect(created.status).toBe(201);
-    expect(created.body).toEqual({ id: expect.any(Number), ...body });
+    expect(created.body).toEqual({ id: expect.any(Number), ...body, storesCatalogue: [] });
     expect((await get(created.body.id)).body).toEqual(created.body);
   });
 
@@ -123,6 +123,49 @@ describe('aircraft types', () => {
   ])('refuses a launch table with %s and keeps the old one', async (_case, rows, message) => {
     const type = await createAircraftType(url, admin);
     const response = await putTable(type.id, rows);
+    expect(response.status).toBe(400);
+    expect(response.body.message).toMatch(message);
+    expect((await get(type.id)).body).toEqual(type);
+  });
+
+  const putStores = (id: number, items: unknown) =>
+    request(url).put(`/api/aircraft-types/${id}/stores-catalogue`).set(bearer(admin)).send({ items });
+
+  it('replaces the stores catalogue, keeps it ordered by name, and audits it', async () => {
+    const type = await createAircraftType(url, admin);
+    const items = [
+      { name: 'Training pod', weightEachLb: 175 },
+      { name: 'Fuel tank', weightEachLb: 1_210 },
+    ];
+    const response = await putStores(type.id, items);
+    expect(response.status).toBe(200);
+    expect(response.body).toEqual({ ...type, storesCatalogue: [items[1], items[0]] });
+    expect((await get(type.id)).body.storesCatalogue).toEqual([items[1], items[0]]);
+    const audit = await request(url)
+      .get('/api/audit')
+      .query({ action: 'stores_catalogue.replaced' })
+      .set(bearer(admin));
+    expect(audit.body.items[0]).toMatchObject({
+      subjectId: type.id,
+      summary: `Stores catalogue of ${type.designation} replaced (2 items)`,
+    });
+  });
+
+  it.each([
+    [
+      'a name given twice',
+      [
+        { name: 'Pod', weightEachLb: 1 },
+        { name: 'POD', weightEachLb: 2 },
+      ],
+      /names POD twice/,
+    ],
+    ['a weight of zero', [{ name: 'Pod', weightEachLb: 0 }], /weightEachLb must not be less than 1/],
+    ['a fractional weight', [{ name: 'Pod', weightEachLb: 1.5 }], /whole pounds/],
+    ['an empty name', [{ name: ' ', weightEachLb: 10 }], /needs a name/],
+  ])('refuses a stores catalogue with %s and keeps the old one', async (_case, items, message) => {
+    const type = await createAircraftType(url, admin);
+    const response = await putStores(type.id, items);
     expect(response.status).toBe(400);
     expect(response.body.message).toMatch(message);
     expect((await get(type.id)).body).toEqual(type);

@@ -16,6 +16,7 @@ export const AUDIT_ACTIONS = [
   'aircraft_type.updated',
   'aircraft_type.deleted',
   'launch_table.replaced',
+  'stores_catalogue.replaced',
   'cycle.created',
 ] as const;
 export type AuditAction = (typeof AUDIT_ACTIONS)[number];

@@ -34,6 +34,11 @@ export const FUEL_LB: Range = { min: 0, max: 100_000 };
 /** Whole pounds; also the range of a weight the pilot and the catapult officer agree. */
 export const GROSS_WEIGHT_LB: Range = { min: 1, max: 200_000 };
 
+/** A type's stores catalogue: items, the name of one, and one item's weight in whole pounds. */
+export const STORES_CATALOGUE_MAX_ITEMS = 40;
+export const STORES_ITEM_NAME_MAX_LENGTH = 60;
+export const STORES_ITEM_WEIGHT_LB: Range = { min: 1, max: 20_000 };
+
 /** A cycle's number in the ship's flying day. */
 export const CYCLE_NUMBER: Range = { min: 1, max: 9999 };
 
@@ -57,6 +62,7 @@ export const CONDITION_RANGES = {
 /** An aircraft type's figures; the pound and pound-force figures are whole (a minimum of 1: positive). */
 export const AIRCRAFT_TYPE_RANGES = {
   maxGrossWeightLb: { min: 1, max: 1_000_000 },
+  operatingWeightLb: { min: 1, max: 1_000_000 },
   crosswindLimitKt: { min: 0, max: 100 },
   thrustLbf: { min: 0, max: 1_000_000 },
   requiredExcessKt: { min: 0, max: 100 },

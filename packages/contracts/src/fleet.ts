@@ -111,17 +111,34 @@ export interface LaunchTableRow {
   minLaunchAirspeedKt: number;
 }
 
+/** An item of a type's stores catalogue: what the launch data says one of it weighs. */
+export interface StoresItem {
+  /** Unique within the type's catalogue (letter case aside). */
+  name: string;
+  /** Weight of one item, whole pounds. */
+  weightEachLb: number;
+}
+
 export interface AircraftTypeView {
   id: number;
   designation: string;
   name: string;
   maxGrossWeightLb: number;
+  /** Operating weight with crew, empty of fuel and stores, lb; null until the admin enters it. */
+  operatingWeightLb: number | null;
   crosswindLimitKt: number;
   thrustLbf: number;
   requiredExcessKt: number;
   afterburnerFromLb: number | null;
   trimBands: TrimBand[];
   launchTable: LaunchTableRow[];
+  /** What an aircraft of the type can carry, ordered by name. */
+  storesCatalogue: StoresItem[];
+}
+
+/** PUT /aircraft-types/:id/stores-catalogue: the whole catalogue, replacing the one held. */
+export interface ReplaceStoresCatalogueRequest {
+  items: StoresItem[];
 }
 
 export interface AircraftView {
@@ -160,6 +177,8 @@ export interface CreateAircraftTypeRequest {
   designation: string;
   name: string;
   maxGrossWeightLb: number;
+  /** Operating weight with crew, lb; null or left out while not known. */
+  operatingWeightLb?: number | null;
   crosswindLimitKt: number;
   thrustLbf: number;
   requiredExcessKt: number;

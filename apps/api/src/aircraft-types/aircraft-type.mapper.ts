@@ -7,11 +7,13 @@ export function toAircraftTypeView(type: AircraftType): AircraftTypeView {
     designation: type.designation,
     name: type.name,
     maxGrossWeightLb: type.maxGrossWeightLb,
+    operatingWeightLb: type.operatingWeightLb,
     crosswindLimitKt: type.crosswindLimitKt,
     thrustLbf: type.thrustLbf,
     requiredExcessKt: type.requiredExcessKt,
     afterburnerFromLb: type.afterburnerFromLb,
     trimBands: type.trimBands,
     launchTable: type.launchTable,
+    storesCatalogue: type.storesCatalogue,
   };
 }

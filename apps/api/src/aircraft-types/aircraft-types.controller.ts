@@ -17,6 +17,7 @@ import { Roles } from '../common/decorators/roles.decorator.js';
 import { AircraftTypesService } from './aircraft-types.service.js';
 import { CreateAircraftTypeDto } from './dto/create-aircraft-type.dto.js';
 import { LaunchTableDto } from './dto/launch-table.dto.js';
+import { StoresCatalogueDto } from './dto/stores-catalogue.dto.js';
 import { UpdateAircraftTypeDto } from './dto/update-aircraft-type.dto.js';
 import { ApiDoc } from '../common/openapi/api-doc.decorator.js';
 import { Created } from '../common/openapi/created.decorator.js';
@@ -68,6 +69,20 @@ export class AircraftTypesController {
   @Put(':id/launch-table')
   replaceLaunchTable(@Param('id', ParseIntPipe) id: number, @Body() body: LaunchTableDto): Promise<AircraftTypeView> {
     return this.types.replaceLaunchTable(id, body.rows);
+  }
+
+  @ApiDoc('Replace the stores catalogue of an aircraft type', {
+    response: AircraftTypeViewDto,
+    description: 'The whole catalogue: what an aircraft of the type can carry, with the weight of one item.',
+    refuses: { 400: ['invalid_launch_data'], 404: ['aircraft_type_not_found'] },
+  })
+  @Roles('admin')
+  @Put(':id/stores-catalogue')
+  replaceStoresCatalogue(
+    @Param('id', ParseIntPipe) id: number,
+    @Body() body: StoresCatalogueDto,
+  ): Promise<AircraftTypeView> {
+    return this.types.replaceStoresCatalogue(id, body.items);
   }
 
   @ApiDoc('Remove an aircraft type', {

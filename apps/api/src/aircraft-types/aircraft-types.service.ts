@@ -1,4 +1,4 @@
-import type { AircraftTypeView, LaunchTableRow } from '@catline/contracts';
+import type { AircraftTypeView, LaunchTableRow, StoresItem } from '@catline/contracts';
 import { Injectable, Logger } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, type EntityManager, Not } from 'typeorm';
@@ -11,7 +11,12 @@ import { AircraftTypesException } from './aircraft-types.exception.js';
 import type { CreateAircraftTypeDto } from './dto/create-aircraft-type.dto.js';
 import type { UpdateAircraftTypeDto } from './dto/update-aircraft-type.dto.js';
 import { AircraftType } from '../database/entities/aircraft-type.entity.js';
-import { launchTableProblems, trimBandProblems } from './launch-data.js';
+import {
+  launchTableProblems,
+  orderedStoresCatalogue,
+  storesCatalogueProblems,
+  trimBandProblems,
+} from './launch-data.js';
 
 @Injectable()
 export class AircraftTypesService {
@@ -35,7 +40,12 @@ export class AircraftTypesService {
     this.checkLaunchData(trimBandProblems(body.trimBands), launchTableProblems(body.launchTable));
     const saved = await this.dataSource.transaction(async (manager) => {
       await this.checkDesignationFree(manager, body.designation);
-      const type = manager.create(AircraftType, { ...body, afterburnerFromLb: body.afterburnerFromLb ?? null });
+      const type = manager.create(AircraftType, {
+        ...body,
+        operatingWeightLb: body.operatingWeightLb ?? null,
+        afterburnerFromLb: body.afterburnerFromLb ?? null,
+        storesCatalogue: [],
+      });
       const created = await this.save(manager, type);
       await this.audit.record(manager, {
         action: 'aircraft_type.created',
@@ -83,6 +93,26 @@ export class AircraftTypesService {
         after: { launchTable: rows },
       });
       this.logger.log(`Launch table of ${type.designation} replaced (${rows.length} rows)`);
+      return toAircraftTypeView(type);
+    });
+  }
+
+  async replaceStoresCatalogue(id: number, items: StoresItem[]): Promise<AircraftTypeView> {
+    this.checkLaunchData(storesCatalogueProblems(items));
+    const catalogue = orderedStoresCatalogue(items);
+    return this.dataSource.transaction(async (manager) => {
+      const type = await this.findOrFail(manager, id, true);
+      const before = type.storesCatalogue;
+      type.storesCatalogue = catalogue;
+      await manager.save(AircraftType, type);
+      await this.audit.record(manager, {
+        action: 'stores_catalogue.replaced',
+        subject: { type: 'aircraft_type', id },
+        summary: `Stores catalogue of ${type.designation} replaced (${catalogue.length} items)`,
+        before: { storesCatalogue: before },
+        after: { storesCatalogue: catalogue },
+      });
+      this.logger.log(`Stores catalogue of ${type.designation} replaced (${catalogue.length} items)`);
       return toAircraftTypeView(type);
     });
   }

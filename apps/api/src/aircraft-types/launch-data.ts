@@ -1,4 +1,4 @@
-import type { LaunchTableRow, TrimBand } from '@catline/contracts';
+import type { LaunchTableRow, StoresItem, TrimBand } from '@catline/contracts';
 
 /** A launch table is read by interpolation, so its weights must rise strictly from row to row. */
 export function launchTableProblems(rows: LaunchTableRow[]): string[] {
@@ -26,4 +26,22 @@ export function trimBandProblems(bands: TrimBand[]): string[] {
     }
   });
   return problems;
+}
+
+/** A slot names a stores item by its name, so two items of one catalogue may not share it, whatever the case. */
+export function storesCatalogueProblems(items: StoresItem[]): string[] {
+  const seen = new Set<string>();
+  return items.flatMap((item) => {
+    const key = item.name.toLocaleLowerCase('en');
+    if (seen.has(key)) return [`The stores catalogue names ${item.name} twice.`];
+    seen.add(key);
+    return [];
+  });
+}
+
+/** The catalogue as kept: ordered by name, so every reader lists it alike. */
+export function orderedStoresCatalogue(items: StoresItem[]): StoresItem[] {
+  return [...items]
+    .map(({ name, weightEachLb }) => ({ name, weightEachLb }))
+    .sort((a, b) => a.name.localeCompare(b.name, 'en'));
 }

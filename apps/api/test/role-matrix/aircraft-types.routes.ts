@@ -27,6 +27,15 @@ export const aircraftTypesRoutes: MatrixRoute[] = [
     }),
   },
   {
+    method: 'PUT',
+    path: '/api/aircraft-types/{id}/stores-catalogue',
+    allowed: ['admin'],
+    example: async (context) => ({
+      params: { id: await targetId(context) },
+      body: { items: [{ name: 'Matrix pod', weightEachLb: 300 }] },
+    }),
+  },
+  {
     method: 'DELETE',
     path: '/api/aircraft-types/{id}',
     allowed: ['admin'],

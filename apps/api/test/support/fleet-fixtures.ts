@@ -33,6 +33,7 @@ export function aircraftTypeBody(designation = unique('T-', 12)) {
     designation,
     name: `Test type ${designation}`,
     maxGrossWeightLb: 40_000,
+    operatingWeightLb: 22_000,
     crosswindLimitKt: 15,
     thrustLbf: 20_000,
     requiredExcessKt: 10,

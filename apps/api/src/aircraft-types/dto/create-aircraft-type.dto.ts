@@ -50,6 +50,13 @@ export class CreateAircraftTypeDto implements CreateAircraftTypeRequest {
   @Max(RANGES.maxGrossWeightLb.max)
   maxGrossWeightLb: number;
 
+  @ApiPropertyOptional({ nullable: true, description: 'Operating weight with crew, pounds; null while not known.' })
+  @IsOptional()
+  @IsInt()
+  @Min(RANGES.operatingWeightLb.min)
+  @Max(RANGES.operatingWeightLb.max)
+  operatingWeightLb?: number | null;
+
   @ApiProperty({ description: 'Knots.' })
   @IsNumber()
   @Min(RANGES.crosswindLimitKt.min)

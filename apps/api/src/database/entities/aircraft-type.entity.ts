@@ -1,4 +1,4 @@
-import type { LaunchTableRow, TrimBand } from '@catline/contracts';
+import type { LaunchTableRow, StoresItem, TrimBand } from '@catline/contracts';
 import { Column, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
 
 /** A type's launch data as the ship's approved data gives it; entered by the user. */
@@ -16,6 +16,10 @@ export class AircraftType {
 
   @Column({ name: 'max_gross_weight_lb' })
   maxGrossWeightLb: number;
+
+  /** With crew, empty of fuel and stores; null until entered, and then no gross weight is built up. */
+  @Column({ name: 'operating_weight_lb', type: 'int', nullable: true })
+  operatingWeightLb: number | null;
 
   @Column({ name: 'crosswind_limit_kt', type: 'double' })
   crosswindLimitKt: number;
@@ -35,4 +39,8 @@ export class AircraftType {
   /** Minimum launch airspeed by gross weight, ordered by increasing weight. */
   @Column({ name: 'launch_table', type: 'json' })
   launchTable: LaunchTableRow[];
+
+  /** What an aircraft of the type can carry, ordered by name; names unique regardless of case. */
+  @Column({ name: 'stores_catalogue', type: 'json' })
+  storesCatalogue: StoresItem[];
 }

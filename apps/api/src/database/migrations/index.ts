@@ -10,6 +10,7 @@ import { RefreshTokenSession1796213925015 } from './1796213925015-RefreshTokenSe
 import { CycleWindReadingAndPosition1796214000000 } from './1796214000000-CycleWindReadingAndPosition.js';
 import { CycleDeckHolds1796216225592 } from './1796216225592-CycleDeckHolds.js';
 import { CycleRespot1796217149940 } from './1796217149940-CycleRespot.js';
+import { AircraftTypeStoresCatalogue1796225154045 } from './1796225154045-AircraftTypeStoresCatalogue.js';
 
 /** Every migration in the order it runs; add a new one at the end (see DEVELOPERS.md). */
 export const migrations = [
@@ -25,4 +26,5 @@ export const migrations = [
   CycleWindReadingAndPosition1796214000000,
   CycleDeckHolds1796216225592,
   CycleRespot1796217149940,
+  AircraftTypeStoresCatalogue1796225154045,
 ];

@@ -1,4 +1,4 @@
-import type { DeckLayout, DeckSpot, LaunchTableRow, Role, ShipProfile, TrimBand } from '@catline/contracts';
+import type { DeckLayout, DeckSpot, LaunchTableRow, Role, ShipProfile, StoresItem, TrimBand } from '@catline/contracts';
 
 // The invented demo scenario: a fictional training carrier, its squadrons and aircraft types.
 // Every name and number here is made up for the demo; none is real launch data. The hull code, the
@@ -124,11 +124,21 @@ const strikeTrim: TrimBand[] = [
   { upToLb: null, trimDeg: 18 },
 ];
 
+/** Invented items and weights; each catalogue ordered by name, as the API keeps it. */
+const strikeStores: StoresItem[] = [
+  { name: 'Drop tank', weightEachLb: 1_240 },
+  { name: 'Practice bomb', weightEachLb: 30 },
+  { name: 'Refuelling store', weightEachLb: 1_980 },
+  { name: 'Rocket pod', weightEachLb: 520 },
+  { name: 'Training round', weightEachLb: 190 },
+];
+
 export const demoAircraftTypes = [
   {
     designation: 'WKD-41',
     name: 'Wickerbolt strike jet',
     maxGrossWeightLb: 51_000,
+    operatingWeightLb: 29_400,
     crosswindLimitKt: 15,
     thrustLbf: 26_000,
     requiredExcessKt: 12,
@@ -140,11 +150,13 @@ export const demoAircraftTypes = [
       { grossWeightLb: 46_000, minLaunchAirspeedKt: 143 },
       { grossWeightLb: 51_000, minLaunchAirspeedKt: 151 },
     ] satisfies LaunchTableRow[],
+    storesCatalogue: strikeStores,
   },
   {
     designation: 'MSD-26',
     name: 'Mistlewing light attack',
     maxGrossWeightLb: 31_000,
+    operatingWeightLb: 16_800,
     crosswindLimitKt: 12,
     thrustLbf: 17_500,
     requiredExcessKt: 10,
@@ -158,11 +170,17 @@ export const demoAircraftTypes = [
       { grossWeightLb: 25_000, minLaunchAirspeedKt: 121 },
       { grossWeightLb: 31_000, minLaunchAirspeedKt: 133 },
     ],
+    storesCatalogue: [
+      { name: 'Drop tank', weightEachLb: 980 },
+      { name: 'Practice bomb', weightEachLb: 30 },
+      { name: 'Rocket pod', weightEachLb: 520 },
+    ] satisfies StoresItem[],
   },
   {
     designation: 'FGD-63',
     name: 'Farglass early warning',
     maxGrossWeightLb: 56_000,
+    operatingWeightLb: 39_500,
     crosswindLimitKt: 20,
     thrustLbf: 11_000,
     requiredExcessKt: 10,
@@ -173,6 +191,7 @@ export const demoAircraftTypes = [
       { grossWeightLb: 50_000, minLaunchAirspeedKt: 111 },
       { grossWeightLb: 56_000, minLaunchAirspeedKt: 119 },
     ],
+    storesCatalogue: [{ name: 'Cargo pannier', weightEachLb: 260 }] satisfies StoresItem[],
   },
 ];
 

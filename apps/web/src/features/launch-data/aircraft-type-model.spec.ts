@@ -21,6 +21,7 @@ describe('a new aircraft type', () => {
       designation: 'KX-9',
       name: 'Kestrel',
       maxGrossWeightLb: 52_000,
+      operatingWeightLb: null,
       crosswindLimitKt: 15,
       thrustLbf: 0,
       requiredExcessKt: 10,
@@ -41,11 +42,12 @@ describe('a new aircraft type', () => {
       fields({
         ...typed,
         maxGrossWeightLb: '52000.5',
+        operatingWeightLb: '30000.5',
         thrustLbf: '1.5',
         afterburnerFromLb: '48000.5',
         crosswindLimitKt: '15.5',
       }),
-    ).toEqual(['maxGrossWeightLb', 'thrustLbf', 'afterburnerFromLb']);
+    ).toEqual(['maxGrossWeightLb', 'operatingWeightLb', 'thrustLbf', 'afterburnerFromLb']);
   });
 
   it('refuses figures outside the server ranges', () => {

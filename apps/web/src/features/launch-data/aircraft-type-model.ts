@@ -34,6 +34,11 @@ export const aircraftTypeSchema = z.object({
     `Enter the maximum gross weight in whole pounds, ${span(RANGES.maxGrossWeightLb)}.`,
     { whole: true },
   ),
+  operatingWeightLb: optionalTypedNumber(
+    RANGES.operatingWeightLb,
+    'Leave empty, or enter the operating weight with crew in whole pounds.',
+    { whole: true },
+  ),
   crosswindLimitKt: typedNumber(
     RANGES.crosswindLimitKt,
     `Enter the crosswind limit in knots, ${span(RANGES.crosswindLimitKt)}.`,
@@ -62,6 +67,7 @@ export const blankAircraftType: z.input<typeof aircraftTypeSchema> = {
   designation: '',
   name: '',
   maxGrossWeightLb: '',
+  operatingWeightLb: '',
   crosswindLimitKt: '',
   thrustLbf: '',
   requiredExcessKt: '',

@@ -14,6 +14,7 @@ import {
   type ShipProfile,
   type ShipView,
   type SquadronView,
+  type StoresItem,
   type TrimBand,
   type UserView,
 } from '@catline/contracts';
@@ -224,6 +225,15 @@ export class LaunchTableRowDto implements LaunchTableRow {
   minLaunchAirspeedKt: number;
 }
 
+@ApiSchema({ name: 'StoresItem' })
+export class StoresItemDto implements StoresItem {
+  @ApiProperty()
+  name: string;
+
+  @IntProperty({ minimum: 1, description: 'Weight of one item, pounds.' })
+  weightEachLb: number;
+}
+
 @ApiSchema({ name: 'AircraftTypeView' })
 export class AircraftTypeViewDto implements AircraftTypeView {
   @IdProperty()
@@ -237,6 +247,12 @@ export class AircraftTypeViewDto implements AircraftTypeView {
 
   @IntProperty({ minimum: 0, description: 'Pounds.' })
   maxGrossWeightLb: number;
+
+  @IntProperty({
+    nullable: true,
+    description: 'Operating weight with crew, empty of fuel and stores, pounds; null until entered.',
+  })
+  operatingWeightLb: number | null;
 
   @ApiProperty({ description: 'Knots.' })
   crosswindLimitKt: number;
@@ -255,6 +271,9 @@ export class AircraftTypeViewDto implements AircraftTypeView {
 
   @ApiProperty({ type: [LaunchTableRowDto] })
   launchTable: LaunchTableRow[];
+
+  @ApiProperty({ type: [StoresItemDto], description: 'Ordered by name.' })
+  storesCatalogue: StoresItem[];
 }
 
 @ApiSchema({ name: 'AircraftView' })

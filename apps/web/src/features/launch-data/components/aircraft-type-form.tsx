@@ -23,7 +23,7 @@ export function AircraftTypeForm({ onCreated }: { onCreated: (id: number) => voi
       label={label}
       error={errors[key]?.message}
       helper={helper}
-      required={key !== 'afterburnerFromLb'}
+      required={key !== 'afterburnerFromLb' && key !== 'operatingWeightLb'}
     >
       <Input inputMode={numeric ? 'decimal' : 'text'} {...register(key)} />
     </FormField>
@@ -53,6 +53,7 @@ export function AircraftTypeForm({ onCreated }: { onCreated: (id: number) => voi
           {field('designation', 'Designation', undefined, false)}
           {field('name', 'Name', undefined, false)}
           {field('maxGrossWeightLb', 'Max gross weight (lb)')}
+          {field('operatingWeightLb', 'Operating weight (lb)', 'With crew, no fuel or stores; empty if not known.')}
           {field('crosswindLimitKt', 'Crosswind limit (kt)')}
           {field('thrustLbf', 'Thrust (lbf)')}
           {field('requiredExcessKt', 'Required excess (kt)')}

@@ -14,6 +14,7 @@ import { formatTrimBands } from '../launch-data-model.js';
 import { AircraftTypeForm } from './aircraft-type-form.js';
 import { LaunchTableEditor } from './launch-table-editor.js';
 import { LaunchTableImport } from './launch-table-import.js';
+import { StoresCatalogueEditor } from './stores-catalogue-editor.js';
 
 function TypeDetail({ type, editable }: { type: AircraftTypeView; editable: boolean }) {
   return (
@@ -32,6 +33,11 @@ function TypeDetail({ type, editable }: { type: AircraftTypeView; editable: bool
       </Heading>
       <SimpleGrid columns={{ base: 2, md: 3, lg: 6 }} gap="3">
         <FigureStat label="Max gross weight" value={formatPounds(type.maxGrossWeightLb)} size="md" />
+        <FigureStat
+          label="Operating weight"
+          value={type.operatingWeightLb === null ? 'Not entered' : formatPounds(type.operatingWeightLb)}
+          size="md"
+        />
         <FigureStat label="Crosswind limit" value={`${type.crosswindLimitKt} kt`} size="md" />
         <FigureStat label="Thrust" value={`${formatWhole(type.thrustLbf)} lbf`} size="md" />
         <FigureStat label="Required excess" value={`${type.requiredExcessKt} kt`} size="md" />
@@ -52,6 +58,16 @@ function TypeDetail({ type, editable }: { type: AircraftTypeView; editable: bool
           Launch table
         </Text>
         <LaunchTableEditor key={`${type.id}-${JSON.stringify(type.launchTable)}`} type={type} editable={editable} />
+      </Box>
+      <Box as="section" aria-label="Stores catalogue">
+        <Text fontWeight="700" mb="2">
+          Stores catalogue
+        </Text>
+        <StoresCatalogueEditor
+          key={`${type.id}-${JSON.stringify(type.storesCatalogue)}`}
+          type={type}
+          editable={editable}
+        />
       </Box>
       {editable && (
         <Stack gap="2" as="section" aria-label="Import a launch table">

@@ -19,6 +19,9 @@ for (const input of inputs) {
     const { cycle } = await planCycle({ aircraft: SIDES.map((side) => ({ side, grossWeightLb: 42_000 })) });
     const handler = await openAs(browser, 'handler', `/lineup?cycle=${cycle.id}`, input.viewport, input.touch);
     await expect(handler.getByTestId('live-figures')).toHaveAttribute('data-live', 'true');
+    // A deck tablet's processor, not this machine's: the board has as long to settle as on the deck.
+    const cdp = await handler.context().newCDPSession(handler);
+    await cdp.send('Emulation.setCPUThrottlingRate', { rate: 6 });
 
     // Each aircraft goes to the empty cat 1 and at once on from there to a catapult of its own.
     const target = (side: string) => SIDES.indexOf(side) + 2;

@@ -96,15 +96,15 @@ export async function mouseDragBetween(page: Page, from: Point, to: Point) {
 }
 
 /**
- * A finger drag between two points through the browser's own touch input: touch, hold past the board's
- * press delay, move in steps, lift.
+ * A finger drag between two points through the browser's own touch input: touch, hold until the board
+ * says the card is picked up (as a person waits to see it lift), move in steps, lift.
  */
-export async function touchDragBetween(page: Page, from: Point, to: Point, holdMs = 250) {
+export async function touchDragBetween(page: Page, from: Point, to: Point) {
   const session = await touchInput(page);
   const touch = (type: 'touchStart' | 'touchMove' | 'touchEnd', at?: Point) =>
     session.send('Input.dispatchTouchEvent', { type, touchPoints: at ? [at] : [] });
   await touch('touchStart', from);
-  await page.waitForTimeout(holdMs);
+  await expect(page.locator('[id^="DndLiveRegion"]')).toHaveText(/^Picked up /);
   for (let step = 1; step <= 15; step++) {
     await touch('touchMove', { x: from.x + ((to.x - from.x) * step) / 15, y: from.y + ((to.y - from.y) * step) / 15 });
   }

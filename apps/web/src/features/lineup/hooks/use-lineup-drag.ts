@@ -39,7 +39,14 @@ const instructions =
 export function useLineupDrag(snapshot: LineupSnapshot, onMove: (request: MoveSlotRequest) => void) {
   const [draft, setDraft] = useState<Containers | null>(null);
   const [activeSlotId, setActiveSlotId] = useState<number | null>(null);
-  const containers = useMemo(() => draft ?? containersOf(snapshot), [draft, snapshot]);
+  // A dropped card stays where it was put until the lineup itself changes (the move's optimistic view
+  // arrives a render or more later): the board never shows it back in its old place meanwhile, where a
+  // drag started at once would find the wrong card or none.
+  const [landed, setLanded] = useState<{ board: Containers; basis: LineupSnapshot } | null>(null);
+  const containers = useMemo(
+    () => draft ?? (landed?.basis === snapshot ? landed.board : containersOf(snapshot)),
+    [draft, landed, snapshot],
+  );
   // DndContext always calls the handlers of the latest render, so they may read this render's values.
 
   const sensors = useSensors(
@@ -101,13 +108,13 @@ export function useLineupDrag(snapshot: LineupSnapshot, onMove: (request: MoveSl
   const onDragStart = ({ active }: DragStartEvent) => {
     startPlace.current = describePlace(active.id);
     setActiveSlotId(slotIdOf(active.id));
-    setDraft(containersOf(snapshot));
+    setDraft(containers);
   };
 
   const onDragOver = ({ active, over }: DragOverEvent) => {
     if (!over) return;
     setDraft((current) => {
-      const board = current ?? containersOf(snapshot);
+      const board = current ?? containers;
       const from = containerOf(active.id, board);
       const to = containerOf(over.id, board);
       if (!from || !to || from === to) return current;
@@ -140,6 +147,7 @@ export function useLineupDrag(snapshot: LineupSnapshot, onMove: (request: MoveSl
     if (from === container && (container === 'pool' || before[container].indexOf(slotId) === toIndex)) return;
     const slot = slotsById(snapshot).get(slotId);
     if (!slot) return;
+    setLanded({ board: { ...board, [container]: order }, basis: snapshot });
     onMove({
       slotId,
       slotVersion: slot.version,

@@ -36,3 +36,19 @@ test('a move based on a lineup that changed meanwhile is refused with the server
   await expect(card(lane(lagging, 3), 'C24')).toHaveCount(0);
   await expect(card(lane(first, 2), 'C24')).toBeVisible();
 });
+
+test('a move refused on a lineup nobody else changed puts the card back where it was', async ({ browser }) => {
+  // No pilot: the server refuses to put the aircraft in a catapult's order, and nothing else changes.
+  const { cycle } = await planCycle({ aircraft: [{ side: 'L47', grossWeightLb: 44_000, pilot: null }] });
+  const handler = await openAs(browser, 'handler', `/lineup?cycle=${cycle.id}`);
+  await expect(handler.getByTestId('live-figures')).toHaveAttribute('data-live', 'true');
+  // The lineup read again after the refusal is held back: the screen must undo the move by itself.
+  await handler.route(`**/api/cycles/${cycle.id}/lineup`, () => undefined);
+
+  await dragWithMouse(handler, card(pool(handler), 'L47'), lane(handler, 2).getByTestId('lane-drop-zone'));
+
+  await expect(handler.getByTestId('notice')).toContainText('the aircraft has no pilot');
+  await expect(card(pool(handler), 'L47')).toBeVisible();
+  await expect(card(lane(handler, 2), 'L47')).toHaveCount(0);
+  await handler.context().close();
+});

@@ -43,6 +43,9 @@ export function useLineupDrag(snapshot: LineupSnapshot, onMove: (request: MoveSl
   // arrives a render or more later): the board never shows it back in its old place meanwhile, where a
   // drag started at once would find the wrong card or none.
   const [landed, setLanded] = useState<{ board: Containers; basis: LineupSnapshot } | null>(null);
+  // Once the lineup has changed, it alone says where the card is: a refused move's rollback puts back the
+  // lineup the card was dropped on, which must not pass for "not changed yet" and keep the refused place.
+  if (landed && landed.basis !== snapshot) setLanded(null);
   const containers = useMemo(
     () => draft ?? (landed?.basis === snapshot ? landed.board : containersOf(snapshot)),
     [draft, landed, snapshot],

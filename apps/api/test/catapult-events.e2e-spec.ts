@@ -134,4 +134,52 @@ describe('hangfire, suspected cold shot and down on the catapult', () => {
       await deck.call(HANDLER, 'post', statusPath, { status: 'up', basisStatus: 'down' });
     }
   });
+
+  it('asks the handler to confirm a catapult down under a tensioned aircraft, then suspends the aircraft with a record', async () => {
+    const { cycle, first, second } = await executingCycle(pilot(3));
+    const catapultId = await deck.catapultId(1);
+    const statusPath = `/api/cycles/${cycle.id}/lineup/catapults/${catapultId}/status`;
+    await deck.stepThrough(cycle.id, first.id, 'tensioned');
+    await deck.stepThrough(cycle.id, second.id, 'taxiing');
+    const before = await deck.slot(cycle.id, first.id);
+    try {
+      const asked = await deck.call(HANDLER, 'post', statusPath, {
+        status: 'down',
+        basisStatus: 'up',
+        reason: 'Shuttle fault',
+      });
+      expect(asked.status).toBe(409);
+      expect(asked.body).toMatchObject({
+        code: 'aircraft_on_catapult',
+        message: 'C21 is tensioned on cat 1; marking the catapult down suspends C21. Confirm to go on.',
+      });
+      const unchanged = await deck.snapshot(cycle.id);
+      expect(unchanged.lanes.find((lane) => lane.catapultId === catapultId)!.status).toBe('up');
+      expect(await deck.slot(cycle.id, first.id)).toMatchObject({ status: 'tensioned', version: before.version });
+
+      const confirmed = await deck.call(HANDLER, 'post', statusPath, {
+        status: 'down',
+        basisStatus: 'up',
+        reason: 'Shuttle fault',
+        confirm: true,
+      });
+      expect(confirmed.status).toBe(200);
+      expect(confirmed.body.change).toMatchObject({
+        kind: 'catapult_status_set',
+        actor: { role: 'handler' },
+        summary: 'Cat 1 down: Shuttle fault; C21 suspended on it',
+      });
+      const after = await deck.snapshot(cycle.id);
+      expect(after.lanes.find((lane) => lane.catapultId === catapultId)!.status).toBe('down');
+      expect(after.slots.find((slot) => slot.id === first.id)).toMatchObject({
+        status: 'suspended',
+        suspendReason: 'cat 1 down: Shuttle fault',
+      });
+      // Waiting behind the deflector is not on the catapult: it stays as it was.
+      expect(after.slots.find((slot) => slot.id === second.id)!.status).toBe('taxiing');
+      expect((await lastChange(cycle.id)).summary).toBe('Cat 1 down: Shuttle fault; C21 suspended on it');
+    } finally {
+      await deck.call(HANDLER, 'post', statusPath, { status: 'up', basisStatus: 'down' });
+    }
+  });
 });

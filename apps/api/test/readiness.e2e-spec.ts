@@ -336,18 +336,19 @@ describe('readiness steps and launch', () => {
 
   it('refuses a launch from a catapult marked down, with its own code', async () => {
     const { cycle, first } = await executingCycle(pilot(2));
-    const ready = await deck.readyToLaunch(cycle.id, first.id, pilot(2));
     const catapultId = await deck.catapultId(1);
     const path = `/api/cycles/${cycle.id}/lineup/catapults/${catapultId}/status`;
+    // Down before the aircraft comes up: marking it down under the aircraft would suspend it.
     await deck.ok(HANDLER, 'post', path, { status: 'down', basisStatus: 'up' });
     try {
+      const ready = await deck.readyToLaunch(cycle.id, first.id, pilot(2));
+      expect(ready.status).toBe('pilot_ready');
       const response = await deck.launch(cycle.id, await deck.slot(cycle.id, first.id), launchKey());
       expect(response.status).toBe(409);
       expect(response.body).toMatchObject({ code: 'catapult_down', message: 'Cat 1 is down.' });
     } finally {
       await deck.ok(HANDLER, 'post', path, { status: 'up', basisStatus: 'down' });
     }
-    expect(ready.status).toBe('pilot_ready');
   });
 
   it('lets the deck edge operator of the catapult step, suspend and launch, and refuses the one of another', async () => {

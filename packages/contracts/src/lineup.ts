@@ -389,6 +389,11 @@ export interface SetCatapultStatusRequest {
   /** The status the sender saw. */
   basisStatus: CatapultStatus;
   reason?: string;
+  /**
+   * Mark it down although an aircraft is on it or tensioned (asked again after the `aircraft_on_catapult`
+   * refusal): the aircraft is then suspended.
+   */
+  confirm?: boolean;
 }
 
 /**

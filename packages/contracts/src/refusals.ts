@@ -25,6 +25,8 @@ export const LINEUP_REFUSAL_CODES = [
   'wrong_step',
   'weight_not_agreed',
   'weight_mismatch',
+  /** Marking a catapult down under an aircraft: a warning the handler confirms by asking again. */
+  'aircraft_on_catapult',
   // The launch gates (launch-math's launchGates): the launch command refuses with the first one closed.
   'catapult_down',
   'catapult_closed',

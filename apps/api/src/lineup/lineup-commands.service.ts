@@ -16,7 +16,7 @@ import { isHeldSpare, laneSlots } from '../cycle-changes/lineup-snapshot.builder
 import type { LineupState } from '../cycle-changes/lineup-state.js';
 import { LineupException } from '../cycle-changes/lineup.exception.js';
 import { placeSlots, updateSlot } from '../cycle-changes/slot-writes.js';
-import { writeCatapultStatus } from './catapult-stop.js';
+import { aircraftOnCatapult, suspendOnStoppedCatapult, writeCatapultStatus } from './catapult-stop.js';
 import { movePilotToSpare } from './spare-takeover.js';
 
 const sameOrder = (a: readonly Slot[], b: readonly Slot[]) =>
@@ -191,10 +191,28 @@ export class LineupCommandsService {
       if (request.status === catapult.status) {
         throw new LineupException('no_change', `Cat ${catapult.number} is already ${catapult.status}.`);
       }
+      const onIt = request.status === 'down' ? aircraftOnCatapult(state, catapult.id) : null;
+      if (onIt && !request.confirm) {
+        const side = onIt.aircraft.sideNumber;
+        throw new LineupException(
+          'aircraft_on_catapult',
+          `${side} is ${onIt.status.replaceAll('_', ' ')} on cat ${catapult.number}; marking the catapult down suspends ${side}. Confirm to go on.`,
+        );
+      }
       await writeCatapultStatus(manager, catapult, request.status);
       const reason = request.reason ? `: ${request.reason}` : '';
+      const suspended = onIt
+        ? await suspendOnStoppedCatapult(
+            manager,
+            state,
+            catapult,
+            actor,
+            this.clock.now(),
+            `cat ${catapult.number} down${reason}`,
+          )
+        : '';
       return {
-        summary: `Cat ${catapult.number} ${request.status}${reason}`,
+        summary: `Cat ${catapult.number} ${request.status}${reason}${suspended}`,
         command: { type: 'catapult_status', catapultId, ...request },
         mirrored: true,
       };

@@ -148,7 +148,13 @@ export class LineupController {
 
   @ApiDoc('Set a catapult up or down', {
     response: LineupCommandResultDto,
-    refuses: { 404: ['not_found'], 409: ['stale_basis', 'cycle_closed', 'no_change'], 422: ['launch_data_invalid'] },
+    description:
+      'Marking it down under an aircraft on it or tensioned is refused with aircraft_on_catapult until asked again with confirm; the aircraft is then suspended.',
+    refuses: {
+      404: ['not_found'],
+      409: ['stale_basis', 'cycle_closed', 'no_change', 'aircraft_on_catapult'],
+      422: ['launch_data_invalid'],
+    },
   })
   @Roles('handler')
   @Post('catapults/:catapultId/status')

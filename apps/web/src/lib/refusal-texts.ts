@@ -40,6 +40,7 @@ const REASONS: Record<RefusalCode, string> = {
   not_your_slot: 'not your aircraft',
   not_current_aircraft: 'not the aircraft on the catapult',
   wrong_step: 'not the next readiness step',
+  aircraft_on_catapult: 'an aircraft is on the catapult',
   weight_not_agreed: 'gross weight not agreed',
   weight_mismatch: 'the gross weights do not match',
   catapult_down: 'the catapult is down',

@@ -1,6 +1,6 @@
 import type { CatapultStatus, SetCatapultStatusRequest } from '@catline/contracts';
-import { ApiProperty } from '@nestjs/swagger';
-import { IsIn } from 'class-validator';
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { IsBoolean, IsIn, IsOptional } from 'class-validator';
 import { ReasonField } from './fields.js';
 
 const STATUSES: CatapultStatus[] = ['up', 'down'];
@@ -16,4 +16,12 @@ export class SetCatapultStatusDto implements SetCatapultStatusRequest {
 
   @ReasonField('reason', { optional: true })
   reason?: string;
+
+  @ApiPropertyOptional({
+    description:
+      'Mark it down although an aircraft is on it or tensioned; asked after the aircraft_on_catapult refusal. The aircraft is suspended.',
+  })
+  @IsOptional()
+  @IsBoolean({ message: 'confirm must be true or false' })
+  confirm?: boolean;
 }

@@ -6,12 +6,14 @@ import { FormField } from '../../../components/form-field.js';
 
 interface CatapultStatusDialogProps {
   lane: LaneView;
+  /** The server's sentence naming the aircraft on the catapult: the next confirm marks it down anyway. */
+  warning?: string;
   pending: boolean;
   onClose: () => void;
   onConfirm: (reason: string | undefined) => void;
 }
 
-export function CatapultStatusDialog({ lane, pending, onClose, onConfirm }: CatapultStatusDialogProps) {
+export function CatapultStatusDialog({ lane, warning, pending, onClose, onConfirm }: CatapultStatusDialogProps) {
   const goingDown = lane.status === 'up';
   const [reason, setReason] = useState('');
   const [touched, setTouched] = useState(false);
@@ -21,7 +23,9 @@ export function CatapultStatusDialog({ lane, pending, onClose, onConfirm }: Cata
       open
       title={goingDown ? `Mark cat ${lane.number} down` : `Bring cat ${lane.number} back up`}
       onClose={onClose}
-      confirmLabel={goingDown ? `Cat ${lane.number} is down` : `Cat ${lane.number} is up`}
+      confirmLabel={
+        warning ? 'Mark down and suspend' : goingDown ? `Cat ${lane.number} is down` : `Cat ${lane.number} is up`
+      }
       onConfirm={() => {
         setTouched(true);
         if (!missingReason) onConfirm(reason.trim() || undefined);
@@ -35,6 +39,11 @@ export function CatapultStatusDialog({ lane, pending, onClose, onConfirm }: Cata
             ? 'Its aircraft stay in the lane but are no-go until it is back up. Move them to another catapult if it will be long.'
             : 'Its aircraft become available to launch again.'}
         </Text>
+        {warning && (
+          <Text role="alert" fontWeight="700" data-testid="catapult-down-warning">
+            {warning}
+          </Text>
+        )}
         {goingDown && (
           <FormField
             label="Reason"

@@ -7,6 +7,7 @@ import { LiveFigures, useFiguresLive } from '../../../components/live-figures.js
 import { CyclePicker } from '../../../components/cycle-picker.js';
 import { EmptyState, ErrorState, LoadingState, QueryView } from '../../../components/query-states.js';
 import { NoticeBanner, refusalNotice, useNotice } from '../../../components/refusal-notice.js';
+import { ApiRequestError, errorMessage } from '../../../lib/api-error.js';
 import { formatClock, formatOptionalClock, formatShortClock } from '../../../lib/format.js';
 import { useLiveCycle } from '../../../lib/live/use-live-cycle.js';
 import { useViewedCycle } from '../../../lib/queries/use-viewed-cycle.js';
@@ -33,7 +34,8 @@ import { SuggestionDialog } from './suggestion-dialog.js';
 
 type OpenDialog =
   | { kind: 'down' | 'pilot' | 'spare' | 'up' | 'return'; slot: SlotView }
-  | { kind: 'catapult'; lane: LaneView }
+  /** `warning`: the server's sentence naming the aircraft a catapult down would suspend, to confirm. */
+  | { kind: 'catapult'; lane: LaneView; warning?: string }
   | { kind: 'suggestion' }
   | null;
 
@@ -224,6 +226,7 @@ function LineupWorkspace({ snapshot }: { snapshot: LineupSnapshot }) {
       {dialog?.kind === 'catapult' && (
         <CatapultStatusDialog
           lane={dialog.lane}
+          warning={dialog.warning}
           pending={catapultStatus.isPending}
           onClose={close}
           onConfirm={(reason) =>
@@ -233,10 +236,14 @@ function LineupWorkspace({ snapshot }: { snapshot: LineupSnapshot }) {
                 status: dialog.lane.status === 'up' ? 'down' : 'up',
                 basisStatus: dialog.lane.status,
                 reason,
+                ...(dialog.warning ? { confirm: true } : {}),
               },
               {
                 onSuccess: done(`Cat ${dialog.lane.number} is ${dialog.lane.status === 'up' ? 'down' : 'up'}`),
-                onError: refused('The catapult change'),
+                onError: (error) =>
+                  error instanceof ApiRequestError && error.code === 'aircraft_on_catapult'
+                    ? setDialog({ ...dialog, warning: errorMessage(error) })
+                    : refused('The catapult change')(error),
               },
             )
           }

@@ -148,7 +148,6 @@ describe('the deck: tows, the landing area and the deck status', () => {
     expect(snapshot.cycle).toMatchObject({
       landingArea: 'fouled',
       landingAreaReason: 'Arresting wire down',
-      landingAreaInUse: true,
     });
     expect(snapshot.lanes.find((lane) => lane.number === 3)!.closed).toBe(true);
     const refused = await deck.launch(cycle.id, await deck.slot(cycle.id, slot.id), launchKey(), catapultOfficer(3));

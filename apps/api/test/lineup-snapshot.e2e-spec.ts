@@ -29,7 +29,7 @@ import {
   type AircraftProfile,
 } from '@catline/launch-math';
 import type { INestApplication } from '@nestjs/common';
-import { applyLineupChanges } from '@catline/contracts';
+import { applyLineupChanges, isLandingAreaInUse } from '@catline/contracts';
 import { LineupDriver, OBSERVER } from './support/lineup-fixtures.js';
 import { startTestApp } from './support/test-app.js';
 
@@ -180,7 +180,7 @@ describe('lineup snapshot of the demo cycles', () => {
         resetInterval: seconds(catapult.resetIntervalS),
         up: catapult.status === 'up',
       })),
-      landingAreaInUse: snapshot.cycle.landingAreaInUse,
+      landingAreaInUse: isLandingAreaInUse(snapshot.cycle.landingArea),
       lanes: Object.fromEntries(snapshot.lanes.map((lane) => [String(lane.catapultId), lane.slotIds.map(String)])),
       pairMinimumGap: seconds(ship.pairGapS),
       notBefore,

@@ -17,8 +17,6 @@ export interface CycleConditions {
   pressureHpa: number;
   weatherCase: WeatherCase;
   night: boolean;
-  /** While the landing area is in use the waist catapults are closed. */
-  landingAreaInUse: boolean;
 }
 
 export interface CycleView extends CycleConditions {
@@ -30,7 +28,7 @@ export interface CycleView extends CycleConditions {
   windowStartAt: string;
   windowEndAt: string;
   state: CycleState;
-  /** Set by the air boss (or air operations) or the handler; `landingAreaInUse` is true unless clear. */
+  /** Set by the air boss or the handler; the catapults inside it pause unless clear (`isLandingAreaInUse`). */
   landingArea: LandingAreaState;
   /** Why the landing area is fouled, or a note on the recovery; null when none. */
   landingAreaReason: string | null;

@@ -14,6 +14,9 @@ export const LANDING_AREA_STATES = ['clear', 'recovering', 'fouled'] as const;
 /** While the landing area is recovering or fouled the catapults inside it cannot launch. */
 export type LandingAreaState = (typeof LANDING_AREA_STATES)[number];
 
+/** In use (recovering or fouled): the one rule every station and the projection read off the state. */
+export const isLandingAreaInUse = (state: LandingAreaState): boolean => state === 'recovering' || state === 'fouled';
+
 /** Tows an aircraft of the cycle to another position (a change through the cycle's pipeline). */
 export interface TowAircraftRequest {
   slotId: number;

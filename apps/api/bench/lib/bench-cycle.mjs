@@ -40,7 +40,6 @@ export async function createBenchCycle(baseUrl) {
       pressureHpa: 1013.25,
       weatherCase: 'I',
       night: false,
-      landingAreaInUse: false,
     }),
     'create cycle',
   );

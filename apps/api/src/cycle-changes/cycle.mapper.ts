@@ -31,7 +31,6 @@ export function toCycleView(cycle: Cycle, profile: ShipProfile, counts: CycleCou
     pressureHpa: cycle.pressureHpa,
     weatherCase: cycle.weatherCase,
     night: cycle.night,
-    landingAreaInUse: cycle.landingAreaInUse,
     landingArea: cycle.landingArea,
     landingAreaReason: cycle.landingAreaReason,
     respot: cycle.respot,

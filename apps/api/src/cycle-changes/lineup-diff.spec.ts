@@ -17,7 +17,6 @@ const cycle = (version: number): CycleView => ({
   pressureHpa: 1013,
   weatherCase: 'I',
   night: false,
-  landingAreaInUse: false,
   landingArea: 'clear',
   landingAreaReason: null,
   respot: null,

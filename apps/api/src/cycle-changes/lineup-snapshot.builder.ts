@@ -1,4 +1,11 @@
-import type { LaneView, LaunchFigures, LineupSnapshot, SlotStatus, SlotView } from '@catline/contracts';
+import {
+  isLandingAreaInUse,
+  type LaneView,
+  type LaunchFigures,
+  type LineupSnapshot,
+  type SlotStatus,
+  type SlotView,
+} from '@catline/contracts';
 import { deckHoldOf } from './deck-holds.js';
 import {
   afterburnerRequired,
@@ -104,7 +111,7 @@ export function projectLineup(state: LineupState, lanes: Record<string, string[]
     cycleStart: start,
     window: { start: epochMs(cycle.windowStartAt.getTime()), end: epochMs(cycle.windowEndAt.getTime()) },
     catapults: launchCatapults(state),
-    landingAreaInUse: cycle.landingAreaInUse,
+    landingAreaInUse: isLandingAreaInUse(cycle.landingArea),
     lanes,
     pairMinimumGap: seconds(state.ship.pairGapS),
     launched,
@@ -141,7 +148,10 @@ function cycleConditions(state: LineupState): CycleConditions {
         {
           catapult,
           wind: catapultWind(relative, degrees(catapult.axisAngleDeg)),
-          closedReason: catapultClosedReason(catapults.get(String(catapult.id))!, cycle.landingAreaInUse),
+          closedReason: catapultClosedReason(
+            catapults.get(String(catapult.id))!,
+            isLandingAreaInUse(cycle.landingArea),
+          ),
           clearingTurnDeg: signedTurn(clearingTurn(profile, catapult.position, cycle.weatherCase)),
         },
       ]),

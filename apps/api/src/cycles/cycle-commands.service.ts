@@ -47,7 +47,6 @@ function describeConditions(values: ConditionValues, cycle: Cycle): string {
   if (changed('weatherCase')) parts.push(`case ${merged.weatherCase}`);
   if (changed('latitudeDeg', 'longitudeDeg')) parts.push(`position ${merged.latitudeDeg}°, ${merged.longitudeDeg}°`);
   if (changed('night')) parts.push(merged.night ? 'night' : 'day');
-  if (changed('landingAreaInUse')) parts.push(merged.landingAreaInUse ? 'landing area in use' : 'landing area clear');
   if (changed('plannedLaunchAt')) parts.push(`planned launch ${clock(merged.plannedLaunchAt)}`);
   if (changed('windowStartAt', 'windowEndAt'))
     parts.push(`window ${clock(merged.windowStartAt)} to ${clock(merged.windowEndAt)}`);
@@ -104,13 +103,6 @@ function changedConditions(
   return night === cycle.night ? withWind : { ...withWind, night };
 }
 
-/** The conditions' landing-area flag sets the landing area's state with it: in use is recovering. */
-function landingAreaFor(values: ConditionValues, cycle: Cycle): Partial<Cycle> {
-  if (!('landingAreaInUse' in values)) return {};
-  if (values.landingAreaInUse) return cycle.landingArea === 'clear' ? { landingArea: 'recovering' } : {};
-  return { landingArea: 'clear', landingAreaReason: null };
-}
-
 /** Air operations' changes to a cycle; each is a versioned change like a lineup command. */
 @Injectable()
 export class CycleCommandsService {
@@ -135,7 +127,7 @@ export class CycleCommandsService {
         throw new LineupException('no_change', 'The conditions already are as given; nothing changed.');
       }
       checkWindow({ ...state.cycle, ...values });
-      await manager.update(Cycle, { id: cycleId }, { ...values, ...landingAreaFor(values, state.cycle) });
+      await manager.update(Cycle, { id: cycleId }, values);
       const reverify = await this.reverifyFor(manager, state, values, actor);
       return {
         summary: `Conditions: ${describeConditions(values, state.cycle)}${reverify}`,

@@ -90,11 +90,7 @@ export class DeckCommandsService {
       if (cycle.landingArea === request.state && cycle.landingAreaReason === reason) {
         throw new LineupException('no_change', `The landing area already is ${request.state}.`);
       }
-      await manager.update(
-        Cycle,
-        { id: cycleId },
-        { landingArea: request.state, landingAreaReason: reason, landingAreaInUse: request.state !== 'clear' },
-      );
+      await manager.update(Cycle, { id: cycleId }, { landingArea: request.state, landingAreaReason: reason });
       return {
         summary: `Landing area ${request.state}${reason ? `: ${reason}` : ''}`,
         command: { type: 'landing_area', ...request },

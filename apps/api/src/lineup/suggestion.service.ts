@@ -1,4 +1,4 @@
-import type { SuggestedLineup } from '@catline/contracts';
+import { isLandingAreaInUse, type SuggestedLineup } from '@catline/contracts';
 import { epochMs, seconds, type LineupSuggestion, type Seconds, type SuggestionInput } from '@catline/launch-math';
 import { Injectable } from '@nestjs/common';
 import { clearBefore, deckLayout, taxiSeconds } from '../cycle-changes/deck-positions.js';
@@ -60,7 +60,7 @@ export function suggestionInput(state: LineupState): SuggestionInput {
     cycleStart: epochMs(cycle.plannedLaunchAt.getTime()),
     window: { start: epochMs(cycle.windowStartAt.getTime()), end: epochMs(cycle.windowEndAt.getTime()) },
     catapults: launchCatapults(state),
-    landingAreaInUse: cycle.landingAreaInUse,
+    landingAreaInUse: isLandingAreaInUse(cycle.landingArea),
     pairMinimumGap: seconds(state.ship.pairGapS),
     aircraft: planned.map((slot) => ({ id: String(slot.id), priority: launchPriority(slot) })),
     taxiTimes,

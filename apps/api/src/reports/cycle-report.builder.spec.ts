@@ -32,7 +32,6 @@ const cycle = {
   pressureHpa: 1013,
   weatherCase: 'I',
   night: false,
-  landingAreaInUse: false,
   state: 'closed',
   version: 0,
 } as Cycle;

@@ -14,7 +14,8 @@ const conditionsOf = (view: CycleView): Partial<Cycle> => ({
   pressureHpa: view.pressureHpa,
   weatherCase: view.weatherCase,
   night: view.night,
-  landingAreaInUse: view.landingAreaInUse,
+  landingArea: view.landingArea,
+  landingAreaReason: view.landingAreaReason,
 });
 
 /**

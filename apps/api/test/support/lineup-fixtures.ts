@@ -36,7 +36,6 @@ export const goodConditions = {
   pressureHpa: 1013,
   weatherCase: 'I',
   night: false,
-  landingAreaInUse: false,
 } as const;
 
 type Method = 'get' | 'post' | 'patch';

@@ -82,7 +82,6 @@ export async function planCycle({ aircraft, start = false, night = false }: Plan
         pressureHpa: 1015,
         weatherCase: night ? 'III' : 'I',
         night,
-        landingAreaInUse: false,
       },
     }),
   );

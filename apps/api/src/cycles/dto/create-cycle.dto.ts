@@ -34,5 +34,4 @@ export class CreateCycleDto implements CreateCycleRequest {
   @ConditionField.pressureHpa() pressureHpa: number;
   @ConditionField.weatherCase() weatherCase: WeatherCase;
   @ConditionField.flag('night') night: boolean;
-  @ConditionField.flag('landingAreaInUse') landingAreaInUse: boolean;
 }

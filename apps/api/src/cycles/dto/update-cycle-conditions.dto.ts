@@ -30,5 +30,4 @@ export class UpdateCycleConditionsDto implements UpdateCycleConditionsRequest {
   @SkipIfAbsent() @ConditionField.pressureHpa() pressureHpa?: number;
   @SkipIfAbsent() @ConditionField.weatherCase() weatherCase?: WeatherCase;
   @SkipIfAbsent() @ConditionField.flag('night') night?: boolean;
-  @SkipIfAbsent() @ConditionField.flag('landingAreaInUse') landingAreaInUse?: boolean;
 }

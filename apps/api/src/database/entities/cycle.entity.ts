@@ -76,10 +76,6 @@ export class Cycle {
   @Column({ default: false })
   night: boolean;
 
-  /** True unless `landingArea` is clear; kept with it by every write (the projection reads this). */
-  @Column({ name: 'landing_area_in_use', default: false })
-  landingAreaInUse: boolean;
-
   @Column({ name: 'landing_area', type: 'varchar', length: 10, default: 'clear' })
   landingArea: LandingAreaState;
 

@@ -11,6 +11,7 @@ import { CycleWindReadingAndPosition1796214000000 } from './1796214000000-CycleW
 import { CycleDeckHolds1796216225592 } from './1796216225592-CycleDeckHolds.js';
 import { CycleRespot1796217149940 } from './1796217149940-CycleRespot.js';
 import { AircraftTypeStoresCatalogue1796225154045 } from './1796225154045-AircraftTypeStoresCatalogue.js';
+import { LandingAreaInUseDerived1796225353747 } from './1796225353747-LandingAreaInUseDerived.js';
 
 /** Every migration in the order it runs; add a new one at the end (see DEVELOPERS.md). */
 export const migrations = [
@@ -27,4 +28,5 @@ export const migrations = [
   CycleDeckHolds1796216225592,
   CycleRespot1796217149940,
   AircraftTypeStoresCatalogue1796225154045,
+  LandingAreaInUseDerived1796225353747,
 ];

@@ -31,7 +31,6 @@ const dayConditions = {
   pressureHpa: 1014,
   weatherCase: 'I',
   night: false,
-  landingAreaInUse: false,
 } as const;
 
 function cycleAt(
@@ -278,7 +277,6 @@ async function planNightCycle(deck: DemoDeck, shipId: number, planned: Date): Pr
       pressureHpa: 1016,
       weatherCase: 'III',
       night: true,
-      landingAreaInUse: false,
     })(shipId),
   );
   for (const sortie of nightSorties) {

@@ -43,7 +43,6 @@ describe('a new cycle', () => {
       pressureHpa: 1013,
       weatherCase: 'I',
       night: false,
-      landingAreaInUse: false,
     });
   });
 });
@@ -77,7 +76,6 @@ describe('editing a cycle', () => {
     pressureHpa: 998,
     weatherCase: 'III',
     night: true,
-    landingAreaInUse: true,
     landingArea: 'recovering',
     landingAreaReason: null,
     respot: null,

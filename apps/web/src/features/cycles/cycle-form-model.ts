@@ -37,7 +37,6 @@ export function newCycleValues(now = new Date(), nextNumber = 1): CycleFormValue
     pressureHpa: '1013',
     weatherCase: 'I',
     night: false,
-    landingAreaInUse: false,
   };
 }
 
@@ -55,7 +54,6 @@ export function valuesFromCycle(cycle: CycleView): CycleFormValues {
     pressureHpa: String(cycle.pressureHpa),
     weatherCase: cycle.weatherCase,
     night: cycle.night,
-    landingAreaInUse: cycle.landingAreaInUse,
   };
 }
 
@@ -112,7 +110,6 @@ export const cycleFormSchema = (withNumber: boolean) =>
       pressureHpa: conditionFigure('pressureHpa'),
       weatherCase: z.enum(WEATHER_CASES),
       night: z.boolean(),
-      landingAreaInUse: z.boolean(),
     })
     .check(
       z.superRefine((values, context) => {
@@ -153,7 +150,6 @@ function conditionsOf(
     pressureHpa: Number(values.pressureHpa),
     weatherCase: values.weatherCase,
     night: values.night,
-    landingAreaInUse: values.landingAreaInUse,
   };
 }
 

@@ -39,7 +39,6 @@ const cycle: CycleView = {
   pressureHpa: 1013,
   weatherCase: 'I',
   night: false,
-  landingAreaInUse: false,
   landingArea: 'clear',
   landingAreaReason: null,
   respot: null,

@@ -31,7 +31,6 @@ function cycle(id: number, plannedLaunchAt: string, state: CycleView['state']): 
     pressureHpa: 1013,
     weatherCase: 'I',
     night: false,
-    landingAreaInUse: false,
     landingArea: 'clear',
     landingAreaReason: null,
     respot: null,

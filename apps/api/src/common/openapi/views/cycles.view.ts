@@ -36,7 +36,7 @@ export class CycleViewDto implements CycleView {
   state: CycleState;
 
   @EnumProperty(LANDING_AREA_STATES, 'LandingAreaState', {
-    description: 'Set by the air boss or the handler; landingAreaInUse is true unless clear.',
+    description: 'Set by the air boss or the handler; the catapults inside it pause unless clear.',
   })
   landingArea: LandingAreaState;
 
@@ -78,9 +78,6 @@ export class CycleViewDto implements CycleView {
 
   @ApiProperty()
   night: boolean;
-
-  @ApiProperty({ description: 'While the landing area is in use the waist catapults are closed.' })
-  landingAreaInUse: boolean;
 
   @ApiProperty({ description: 'Direction the gust blows from, degrees true.' })
   windGustFromDeg: number;

@@ -84,12 +84,6 @@ export function CycleForm({
         </SimpleGrid>
         <HStack gap="6" wrap="wrap">
           <CheckControl control={control} name="night" label="Night cycle" disabled={readOnly} />
-          <CheckControl
-            control={control}
-            name="landingAreaInUse"
-            label="Landing area in use (waist catapults closed)"
-            disabled={readOnly}
-          />
         </HStack>
         {!readOnly && (
           <HStack gap="2">

@@ -1,7 +1,13 @@
 import { Global } from '@emotion/react';
 import { Box, Button, Heading, HStack, Stack, Table, Text } from '@chakra-ui/react';
 import { Link as RouterLink } from 'react-router-dom';
-import type { CycleView, LaneView, LineupSnapshot, SlotView } from '@catline/contracts';
+import {
+  isLandingAreaInUse,
+  type CycleView,
+  type LaneView,
+  type LineupSnapshot,
+  type SlotView,
+} from '@catline/contracts';
 import { CautionLine } from '../../../components/caution-line.js';
 import { CyclePicker } from '../../../components/cycle-picker.js';
 import { GoBadge } from '../../../components/go-badge.js';
@@ -75,7 +81,9 @@ function conditionsLine(cycle: CycleView): string {
     `true wind from ${formatWhole(cycle.trueWindFromDeg)}° at ${formatWhole(cycle.trueWindSpeedKt)} kt`,
     `${cycle.temperatureC} °C, ${cycle.pressureHpa} hPa`,
     `case ${cycle.weatherCase}, ${cycle.night ? 'night' : 'day'}`,
-    cycle.landingAreaInUse ? 'landing area in use (waist closed)' : null,
+    isLandingAreaInUse(cycle.landingArea)
+      ? `landing area ${cycle.landingArea}${cycle.landingAreaReason ? ` (${cycle.landingAreaReason})` : ''}, its catapults paused`
+      : null,
     `planned launch ${formatShortClock(cycle.plannedLaunchAt)}, window ${formatShortClock(cycle.windowStartAt)}–${formatShortClock(cycle.windowEndAt)}`,
   ]
     .filter(Boolean)

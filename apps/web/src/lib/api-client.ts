@@ -1,6 +1,7 @@
 import { REFRESH_HEADER, type SessionResponse } from '@catline/contracts';
 import { ApiRequestError, toApiRequestError, unreachableServer } from './api-error.js';
 import { endSession, getAccessToken, getSession, startSession } from './session-store.js';
+import { onSessionHandedOver, refreshOnceForAllTabs } from './shared-refresh.js';
 
 export const SESSION_ENDED_NOTICE = 'Your session has ended. Sign in again and you will return to where you were.';
 
@@ -47,14 +48,15 @@ async function read<T>(response: Response): Promise<T> {
 let refreshing: Promise<SessionResponse | null> | null = null;
 let refreshTimer: ReturnType<typeof setTimeout> | undefined;
 
-/** Trades the refresh cookie for a new access token; one request at a time however many callers ask. */
+/** Trades the refresh cookie for a new access token; one request at a time however many callers and tabs ask. */
 export function refreshSession(): Promise<SessionResponse | null> {
   refreshing ??= (async () => {
     try {
-      const response = await send('/auth/refresh', { method: 'POST' }, null, { [REFRESH_HEADER]: '1' });
-      if (!response.ok) return null;
-      const session = (await response.json()) as SessionResponse;
-      beginSession(session);
+      const session = await refreshOnceForAllTabs(async () => {
+        const response = await send('/auth/refresh', { method: 'POST' }, null, { [REFRESH_HEADER]: '1' });
+        return response.ok ? ((await response.json()) as SessionResponse) : null;
+      });
+      if (session) beginSession(session);
       return session;
     } catch {
       return null;
@@ -89,6 +91,11 @@ export function beginSession(session: SessionResponse) {
     });
   }, renewInMs);
 }
+
+// Another tab refreshed: this one goes on with the same session (unless it was signed out here).
+onSessionHandedOver((session) => {
+  if (getSession().status !== 'signed-out') beginSession(session);
+});
 
 export function forgetSession(notice: string | null = null, leftOnPurpose = false) {
   hint.clear();

@@ -1,7 +1,7 @@
 import { REFRESH_HEADER, type SessionResponse } from '@catline/contracts';
 import { ApiRequestError, toApiRequestError, unreachableServer } from './api-error.js';
 import { endSession, getAccessToken, getSession, startSession } from './session-store.js';
-import { onSessionHandedOver, refreshOnceForAllTabs } from './shared-refresh.js';
+import { onSessionHandedOver, refreshOnceForAllTabs, shareSessionWithNewTabs } from './shared-refresh.js';
 
 export const SESSION_ENDED_NOTICE = 'Your session has ended. Sign in again and you will return to where you were.';
 
@@ -95,6 +95,10 @@ export function beginSession(session: SessionResponse) {
 // Another tab refreshed: this one goes on with the same session (unless it was signed out here).
 onSessionHandedOver((session) => {
   if (getSession().status !== 'signed-out') beginSession(session);
+});
+shareSessionWithNewTabs(() => {
+  const { status, user, accessToken, expiresAt } = getSession();
+  return status === 'signed-in' && user && accessToken && expiresAt ? { user, accessToken, expiresAt } : null;
 });
 
 export function forgetSession(notice: string | null = null, leftOnPurpose = false) {

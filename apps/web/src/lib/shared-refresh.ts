@@ -4,24 +4,39 @@ import type { SessionResponse } from '@catline/contracts';
  * Every tab of this browser holds the same refresh cookie, and the server takes each cookie once (a copy
  * used again after a few seconds means it was stolen). So the tabs refresh one at a time (Web Locks), and
  * the tab that refreshed hands the new session to the others (BroadcastChannel): a tab that waited for the
- * lock while another refreshed takes that session instead of asking again. Without Web Locks (a page over
- * plain HTTP under a host name is not a secure context) tabs may refresh together; the server's grace for
- * a just-replaced cookie answers them all alike. The access token travels only between this origin's tabs;
- * localStorage holds the time of the last refresh, never a token.
+ * lock while another refreshed takes that session instead of asking again, and a tab opened just after a
+ * refresh (too late to hear it) asks the open tabs for it. Without Web Locks (a page over plain HTTP under
+ * a host name is not a secure context) tabs may refresh together; the server's grace for a just-replaced
+ * cookie answers them all alike. The access token travels only between this origin's tabs; localStorage
+ * holds the time of the last refresh, never a token.
  */
 const LOCK = 'catline.refresh';
 const REFRESHED_AT = 'catline.refreshed-at';
-// How long a tab that saw another refresh waits for its session to arrive before asking itself.
+// How long a tab waits for another tab's session before asking the server itself.
 const HANDOVER_WAIT_MS = 1_000;
+// A refresh this recent was heard by the tabs open then; a tab opened since asks them for its session.
+const RECENT_REFRESH_MS = 60_000;
+// A session handed to a new tab keeps at least this long; one closer to its end is renewed instead.
+const HANDOVER_MIN_LIFE_MS = 2 * 60_000;
+
+type Message = { kind: 'session'; session: SessionResponse } | { kind: 'ask' };
 
 const channel = typeof BroadcastChannel === 'undefined' ? null : new BroadcastChannel('catline.session');
 let handedOver: { session: SessionResponse; at: number } | null = null;
+let currentSession: () => SessionResponse | null = () => null;
 const awaiting = new Set<(session: SessionResponse) => void>();
 const listeners = new Set<(session: SessionResponse) => void>();
 
-channel?.addEventListener('message', (event: MessageEvent<SessionResponse>) => {
-  handedOver = { session: event.data, at: Date.now() };
-  for (const take of [...awaiting, ...listeners]) take(event.data);
+channel?.addEventListener('message', ({ data }: MessageEvent<Message>) => {
+  if (data.kind === 'ask') {
+    const session = currentSession();
+    if (session && Date.parse(session.expiresAt) - Date.now() > HANDOVER_MIN_LIFE_MS) {
+      channel.postMessage({ kind: 'session', session } satisfies Message);
+    }
+    return;
+  }
+  handedOver = { session: data.session, at: Date.now() };
+  for (const take of [...awaiting, ...listeners]) take(data.session);
   awaiting.clear();
 });
 
@@ -31,11 +46,12 @@ export function onSessionHandedOver(listener: (session: SessionResponse) => void
   return () => listeners.delete(listener);
 }
 
-function sessionHandedOverSince(askedAt: number): Promise<SessionResponse | null> {
-  if (handedOver && handedOver.at >= askedAt) return Promise.resolve(handedOver.session);
-  const refreshedAt = Number(globalThis.localStorage?.getItem(REFRESHED_AT) ?? 0);
-  if (refreshedAt < askedAt) return Promise.resolve(null);
-  // Another tab refreshed while this one waited for the lock; its session is on the way.
+/** What this tab answers a newly opened tab that asks for the session (null while signed out). */
+export function shareSessionWithNewTabs(current: () => SessionResponse | null) {
+  currentSession = current;
+}
+
+function awaitHandover(): Promise<SessionResponse | null> {
   return new Promise((resolve) => {
     const take = (session: SessionResponse | null) => {
       clearTimeout(timer);
@@ -47,18 +63,29 @@ function sessionHandedOverSince(askedAt: number): Promise<SessionResponse | null
   });
 }
 
-/** `ask` trades the cookie for a session; it runs in one tab at a time, and only when no other tab just did. */
+function sessionFromOtherTabs(askedAt: number): Promise<SessionResponse | null> {
+  if (handedOver && handedOver.at >= askedAt) return Promise.resolve(handedOver.session);
+  const refreshedAt = Number(globalThis.localStorage?.getItem(REFRESHED_AT) ?? 0);
+  // Another tab refreshed while this one waited for the lock; its session is on the way.
+  if (refreshedAt >= askedAt) return awaitHandover();
+  if (!channel || Date.now() - refreshedAt > RECENT_REFRESH_MS) return Promise.resolve(null);
+  const answer = awaitHandover();
+  channel.postMessage({ kind: 'ask' } satisfies Message);
+  return answer;
+}
+
+/** `ask` trades the cookie for a session; it runs in one tab at a time, and only when no other tab has one. */
 export async function refreshOnceForAllTabs(
   ask: () => Promise<SessionResponse | null>,
 ): Promise<SessionResponse | null> {
   const askedAt = Date.now();
   const run = async () => {
-    const taken = await sessionHandedOverSince(askedAt);
+    const taken = await sessionFromOtherTabs(askedAt);
     if (taken) return taken;
     const session = await ask();
     if (session) {
       globalThis.localStorage?.setItem(REFRESHED_AT, String(Date.now()));
-      channel?.postMessage(session);
+      channel?.postMessage({ kind: 'session', session } satisfies Message);
     }
     return session;
   };

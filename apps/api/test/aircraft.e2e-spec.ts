@@ -5,6 +5,7 @@ import { DataSource } from 'typeorm';
 import { Cycle } from '../src/database/entities/cycle.entity.js';
 import { Slot } from '../src/database/entities/slot.entity.js';
 import { createAircraft, unique } from './support/fleet-fixtures.js';
+import { readAllPages } from './support/paged-list.js';
 import { bearer, signIn } from './support/sign-in.js';
 import { startTestApp } from './support/test-app.js';
 
@@ -22,7 +23,7 @@ describe('aircraft', () => {
     await app.close();
   });
 
-  const list = async (): Promise<AircraftView[]> => (await request(url).get('/api/aircraft').set(bearer(admin))).body;
+  const list = (): Promise<AircraftView[]> => readAllPages(url, admin, '/api/aircraft');
   const post = (body: object) => request(url).post('/api/aircraft').set(bearer(admin)).send(body);
   const patch = (id: number, body: object) => request(url).patch(`/api/aircraft/${id}`).set(bearer(admin)).send(body);
 

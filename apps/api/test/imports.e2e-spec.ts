@@ -399,7 +399,7 @@ describe('air plan and launch table import', () => {
       preview(fresh.id, { content: template.text }).then((response) => response.body.problems),
     ).resolves.toEqual([]);
 
-    const cycles = await driver.ok<CycleView[]>(OBSERVER, 'get', '/api/cycles');
+    const cycles = await driver.all<CycleView>(OBSERVER, '/api/cycles');
     const day = cycles.find((cycle) => cycle.number === 2)!;
     const example = readFileSync(new URL('../src/database/seeds/air-plan-example.csv', import.meta.url));
     const response = await preview(day.id, { content: example, fileName: 'air-plan-example.csv' });

@@ -1,13 +1,8 @@
-import type {
-  AircraftView,
-  LineupChange,
-  LineupCommandResult,
-  LineupSnapshot,
-  SuggestedLineup,
-} from '@catline/contracts';
+import type { AircraftView, LineupCommandResult, LineupSnapshot, SuggestedLineup } from '@catline/contracts';
 import type { INestApplication } from '@nestjs/common';
 import { applyLineupChanges, applyLineupPatch } from '@catline/contracts';
 import { ADMIN, AIR_OPS, HANDLER, LineupDriver, OBSERVER, launchKey, pilot } from './support/lineup-fixtures.js';
+import { readChangeLog } from './support/change-log.js';
 import { startTestApp } from './support/test-app.js';
 
 const idsOf = (snapshot: LineupSnapshot, catapultNumber: number) =>
@@ -37,8 +32,8 @@ describe('lineup commands', () => {
     return { cycle, slots, snapshot: await deck.snapshot(cycle.id) };
   }
 
-  const changesOf = (cycleId: number, since: number) =>
-    deck.ok<LineupChange[]>(OBSERVER, 'get', `/api/cycles/${cycleId}/lineup/changes?since=${since}`);
+  const changesOf = async (cycleId: number, since: number) =>
+    readChangeLog(deck.url, await deck.token(OBSERVER), cycleId, { since });
 
   it('accepts one of two moves of the same slot from the same basis and refuses the other with what changed', async () => {
     const { cycle, slots, snapshot } = await cycleWithLanes();
@@ -391,7 +386,7 @@ describe('lineup commands', () => {
 
   it('carries an aircraft edited between two changes in the next patch, as a fresh read shows it', async () => {
     const cycle = await deck.createCycle();
-    const [model] = await deck.ok<AircraftView[]>(OBSERVER, 'get', '/api/aircraft');
+    const [model] = await deck.all<AircraftView>(OBSERVER, '/api/aircraft');
     const side = () => `T${Math.floor(Math.random() * 1_000_000)}`;
     const { typeId, squadronId, parkedSpot } = model;
     const aircraft = await deck.ok<AircraftView>(
@@ -430,7 +425,7 @@ describe('lineup commands', () => {
   }
 
   async function shots(aircraftId: number, catapultId: number) {
-    const aircraft = await deck.ok<{ id: number; catapultShots: number }[]>(OBSERVER, 'get', '/api/aircraft');
+    const aircraft = await deck.all<{ id: number; catapultShots: number }>(OBSERVER, '/api/aircraft');
     const ships = await deck.ok<{ catapults: { id: number; shotCount: number }[] }[]>(OBSERVER, 'get', '/api/ships');
     return {
       aircraft: aircraft.find((row) => row.id === aircraftId)!.catapultShots,

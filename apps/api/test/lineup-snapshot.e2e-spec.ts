@@ -1,11 +1,4 @@
-import type {
-  AircraftTypeView,
-  AircraftView,
-  CycleView,
-  LineupChange,
-  LineupSnapshot,
-  ShipView,
-} from '@catline/contracts';
+import type { AircraftTypeView, AircraftView, CycleView, LineupSnapshot, ShipView } from '@catline/contracts';
 import {
   afterburnerRequired,
   airDensity,
@@ -31,6 +24,7 @@ import {
 import type { INestApplication } from '@nestjs/common';
 import { applyLineupChanges, isLandingAreaInUse } from '@catline/contracts';
 import { LineupDriver, OBSERVER } from './support/lineup-fixtures.js';
+import { readChangeLog } from './support/change-log.js';
 import { startTestApp } from './support/test-app.js';
 
 // The check values here are @catline/launch-math's own results for the seeded data: the snapshot must
@@ -67,7 +61,7 @@ describe('lineup snapshot of the demo cycles', () => {
     const started = await startTestApp();
     app = started.app;
     deck = new LineupDriver(started.url);
-    cycles = await deck.ok<CycleView[]>(OBSERVER, 'get', '/api/cycles');
+    cycles = await deck.all<CycleView>(OBSERVER, '/api/cycles');
   });
 
   afterAll(async () => {
@@ -151,7 +145,7 @@ describe('lineup snapshot of the demo cycles', () => {
   it('projects launch times as @catline/launch-math does, from taxi arrival, priority and catapult timing', async () => {
     const snapshot = await deck.snapshot(demoCycle(2).id);
     const ship = (await deck.ok<ShipView[]>(OBSERVER, 'get', '/api/ships'))[0];
-    const aircraft = await deck.ok<AircraftView[]>(OBSERVER, 'get', '/api/aircraft');
+    const aircraft = await deck.all<AircraftView>(OBSERVER, '/api/aircraft');
     const start = Date.parse(snapshot.cycle.plannedLaunchAt);
     const notBefore: Record<string, ReturnType<typeof epochMs>> = {};
     const priorities: Record<string, 'first' | 'normal' | 'last'> = {};
@@ -205,7 +199,7 @@ describe('lineup snapshot of the demo cycles', () => {
   it('keeps the flown cycle whole: a history that replays to its final lineup', async () => {
     const closed = demoCycle(1);
     const final = await deck.snapshot(closed.id);
-    const changes = await deck.ok<LineupChange[]>(OBSERVER, 'get', `/api/cycles/${closed.id}/lineup/changes?since=0`);
+    const changes = await readChangeLog(deck.url, await deck.token(OBSERVER), closed.id);
 
     expect(changes.map((change) => change.version)).toEqual(Array.from({ length: final.version }, (_, i) => i + 1));
     const kinds = new Set(changes.map((change) => change.kind));

@@ -433,7 +433,7 @@ describe('cycle reports, exports and shot counts', () => {
       );
       const { header, rows } = readCsv(response);
       expect(header).toEqual(['version', 'at', 'kind', 'actor', 'actor_role', 'summary', 'command']);
-      const log = (await get(`/api/cycles/${flown.cycle.id}/lineup/changes?since=0`)).body as {
+      const log = (await get(`/api/cycles/${flown.cycle.id}/lineup/changes?since=0&limit=500`)).body.items as {
         version: number;
         kind: string;
         summary: string;
@@ -484,7 +484,7 @@ describe('cycle reports, exports and shot counts', () => {
       const response = await shots('2001-01-01', '2001-01-31');
       expect(response.status).toBe(200);
       const counts = response.body as ShotCounts;
-      const fleet = (await get('/api/aircraft')).body as AircraftView[];
+      const fleet = (await get('/api/aircraft?limit=200')).body.items as AircraftView[];
       expect(counts.totalLaunches).toBe(0);
       expect(counts.airframes.map((entry) => entry.sideNumber).sort()).toEqual(
         fleet.map((plane) => plane.sideNumber).sort(),

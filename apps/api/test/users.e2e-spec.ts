@@ -2,6 +2,7 @@ import type { UserView } from '@catline/contracts';
 import type { INestApplication } from '@nestjs/common';
 import request from 'supertest';
 import { createSquadron, createUser, TEST_PASSWORD, unique } from './support/fleet-fixtures.js';
+import { readAllPages } from './support/paged-list.js';
 import { bearer, signIn } from './support/sign-in.js';
 import { startTestApp } from './support/test-app.js';
 
@@ -21,7 +22,7 @@ describe('people', () => {
     await app.close();
   });
 
-  const list = async (): Promise<UserView[]> => (await request(url).get('/api/users').set(bearer(admin))).body;
+  const list = (): Promise<UserView[]> => readAllPages(url, admin, '/api/users');
   const post = (body: object) => request(url).post('/api/users').set(bearer(admin)).send(body);
   const patch = (id: number, body: object) => request(url).patch(`/api/users/${id}`).set(bearer(admin)).send(body);
   const newPerson = () => {
@@ -48,12 +49,11 @@ describe('people', () => {
     const removed = await createUser(url, admin, 'pilot');
     await request(url).delete(`/api/users/${removed.id}`).set(bearer(admin));
 
-    const response = await request(url).get('/api/users/pilots').set(bearer(handler));
+    const pilots = await readAllPages<UserView>(url, handler, '/api/users/pilots');
 
-    expect(response.status).toBe(200);
-    expect(response.body.length).toBeGreaterThanOrEqual(9);
-    expect(response.body.every((person: UserView) => person.role === 'pilot' && person.active)).toBe(true);
-    expect(response.body.map((person: UserView) => person.id)).not.toContain(removed.id);
+    expect(pilots.length).toBeGreaterThanOrEqual(9);
+    expect(pilots.every((person) => person.role === 'pilot' && person.active)).toBe(true);
+    expect(pilots.map((person) => person.id)).not.toContain(removed.id);
   });
 
   describe('create', () => {

@@ -1,7 +1,7 @@
 import AxeBuilder from '@axe-core/playwright';
 import { expect, test, type Page } from '@playwright/test';
 import type { CycleView } from '@catline/contracts';
-import { apiAs, placeInLane, planCycle } from './support/demo-api.js';
+import { allOf, apiAs, placeInLane, planCycle } from './support/demo-api.js';
 import { card, lane, openAs, pool } from './support/screens.js';
 
 /** axe's findings on the page as it stands, as "rule: the elements" lines, so a failure says what to fix. */
@@ -67,7 +67,7 @@ test('a draggable card is named by what it shows', async ({ browser }) => {
 test('launched aircraft on the board keep their badge readable (4.5:1)', async ({ browser }) => {
   // The demo's flown cycle: its aircraft are off, each card with a "Launched" badge.
   const observer = await apiAs('observer');
-  const cycles = (await (await observer.get('/api/cycles')).json()) as CycleView[];
+  const cycles = await allOf<CycleView>(observer, '/api/cycles');
   await observer.dispose();
   const flown = cycles.find((cycle) => cycle.launchedCount > 0)!;
   expect(flown, 'a demo cycle with launched aircraft').toBeDefined();

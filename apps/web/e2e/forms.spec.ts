@@ -1,6 +1,6 @@
 import { expect, test } from '@playwright/test';
 import type { CycleView } from '@catline/contracts';
-import { apiAs, lineupOf } from './support/demo-api.js';
+import { allOf, apiAs, lineupOf } from './support/demo-api.js';
 import { openAs } from './support/screens.js';
 
 // The forms check what the server would refuse before sending, say it under the field, and clear
@@ -93,7 +93,7 @@ test('air operations is stopped on a wrong figure and window, creates the cycle,
   await expect(addSlot.getByLabel('Mission')).toHaveValue('');
 
   const api = await apiAs('airops');
-  const cycles = (await (await api.get('/api/cycles')).json()) as CycleView[];
+  const cycles = await allOf<CycleView>(api, '/api/cycles');
   const cycle = cycles.find((candidate) => candidate.number === Number(number))!;
   expect(cycle.shipSpeedKt).toBe(25);
   const lineup = await lineupOf(api, cycle.id);

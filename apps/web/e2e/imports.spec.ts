@@ -1,6 +1,6 @@
 import { expect, test, type Page } from '@playwright/test';
 import type { AircraftTypeView, AircraftView } from '@catline/contracts';
-import { apiAs, planCycle } from './support/demo-api.js';
+import { allOf, apiAs, planCycle } from './support/demo-api.js';
 import { card, openAs, pool } from './support/screens.js';
 
 const AIR_PLAN_HEADER = 'side_number,pilot_email,mission,fuel_lb,stores,gross_weight_lb,tanker,early_warning,spare';
@@ -49,7 +49,7 @@ test('air operations sees every problem of an air plan file, then imports a good
   await expect(rows.nth(1)).toContainText('Tanker');
   // Someone changes the cycle after the check: the import is refused in words, and works once the screen has caught up.
   const api = await apiAs('airops');
-  const fleet = (await (await api.get('/api/aircraft')).json()) as AircraftView[];
+  const fleet = await allOf<AircraftView>(api, '/api/aircraft');
   const added = await api.post(`/api/cycles/${cycle.id}/slots`, {
     data: {
       aircraftId: fleet.find((plane) => plane.sideNumber === 'C29')!.id,

@@ -8,13 +8,13 @@ import {
   type LineupSnapshot,
   type ShotCounts,
 } from '@catline/contracts';
-import { apiAs } from './support/demo-api.js';
+import { allOf, apiAs } from './support/demo-api.js';
 import { expectNoSidewaysOverflow, openAs } from './support/screens.js';
 
 // The seeded demo day: cycle 1 was flown and closed three hours ago, cycle 2 is planned with a lineup.
 async function demo() {
   const observer = await apiAs('observer');
-  const cycles = (await (await observer.get('/api/cycles')).json()) as CycleView[];
+  const cycles = await allOf<CycleView>(observer, '/api/cycles');
   const flown = cycles.find((cycle) => cycle.number === 1 && cycle.state === 'closed')!;
   const planned = cycles.find((cycle) => cycle.number === 2)!;
   const report = (await (await observer.get(`/api/cycles/${flown.id}/report`)).json()) as CycleReport;

@@ -39,14 +39,5 @@ export interface AuditEntryView {
   after: Record<string, unknown> | null;
 }
 
-/** One page of a list that grows without bound: `total` rows match, these are from `offset` on. */
-export interface Page<T> {
-  items: T[];
-  total: number;
-  limit: number;
-  offset: number;
-}
-
-export const AUDIT_PAGE_SIZE = { default: 50, max: 200 } as const;
 /** The most rows one CSV export holds (newest first); narrow the filters for older ones. */
 export const AUDIT_EXPORT_MAX_ROWS = 20_000;

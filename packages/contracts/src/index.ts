@@ -9,6 +9,7 @@ export * from './fleet.js';
 export * from './imports.js';
 export * from './lineup.js';
 export * from './lineup-patch.js';
+export * from './paging.js';
 export * from './refusals.js';
 export * from './reports.js';
 export * from './roles.js';

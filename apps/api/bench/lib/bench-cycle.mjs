@@ -9,7 +9,7 @@ export async function createBenchCycle(baseUrl) {
   const [ship] = expectOk(await admin.get('/ships'), 'list ships');
   const types = expectOk(await admin.get('/aircraft-types'), 'list types');
   const squadrons = expectOk(await admin.get('/squadrons'), 'list squadrons');
-  let aircraft = expectOk(await admin.get('/aircraft'), 'list aircraft');
+  let aircraft = expectOk(await admin.get('/aircraft?limit=200'), 'list aircraft').items;
   const strike = types.reduce((a, b) => (a.maxGrossWeightLb < b.maxGrossWeightLb && a.afterburnerFromLb ? a : b));
   for (let n = 0; aircraft.length < BENCH_AIRCRAFT; n += 1) {
     expectOk(
@@ -21,9 +21,9 @@ export async function createBenchCycle(baseUrl) {
       }),
       'add aircraft',
     );
-    aircraft = expectOk(await admin.get('/aircraft'), 'list aircraft');
+    aircraft = expectOk(await admin.get('/aircraft?limit=200'), 'list aircraft').items;
   }
-  const cycles = expectOk(await airops.get('/cycles'), 'list cycles');
+  const cycles = expectOk(await airops.get('/cycles?limit=200'), 'list cycles').items;
   const start = Date.now() + 3_600_000;
   const cycle = expectOk(
     await airops.post('/cycles', {

@@ -1,5 +1,17 @@
-import type { AircraftView } from '@catline/contracts';
-import { Body, Controller, Delete, Get, HttpCode, HttpStatus, Param, ParseIntPipe, Patch, Post } from '@nestjs/common';
+import type { AircraftView, Page } from '@catline/contracts';
+import {
+  Body,
+  Controller,
+  Delete,
+  Get,
+  HttpCode,
+  HttpStatus,
+  Param,
+  ParseIntPipe,
+  Patch,
+  Post,
+  Query,
+} from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { Roles } from '../common/decorators/roles.decorator.js';
 import { AircraftService } from './aircraft.service.js';
@@ -7,17 +19,18 @@ import { CreateAircraftDto } from './dto/create-aircraft.dto.js';
 import { UpdateAircraftDto } from './dto/update-aircraft.dto.js';
 import { ApiDoc } from '../common/openapi/api-doc.decorator.js';
 import { Created } from '../common/openapi/created.decorator.js';
-import { AircraftViewDto } from '../common/openapi/views/fleet.view.js';
+import { AircraftPageDto, AircraftViewDto } from '../common/openapi/views/fleet.view.js';
+import { RecordsPageQueryDto } from '../common/paging/page-query.dto.js';
 
 @ApiTags('aircraft')
 @Controller('aircraft')
 export class AircraftController {
   constructor(private readonly aircraft: AircraftService) {}
 
-  @ApiDoc('List the aircraft', { response: [AircraftViewDto] })
+  @ApiDoc('List the aircraft, a page at a time', { response: AircraftPageDto })
   @Get()
-  list(): Promise<AircraftView[]> {
-    return this.aircraft.list();
+  list(@Query() query: RecordsPageQueryDto): Promise<Page<AircraftView>> {
+    return this.aircraft.list(query);
   }
 
   @ApiDoc('Add an aircraft', {

@@ -1,9 +1,10 @@
-import type { AircraftView } from '@catline/contracts';
+import type { AircraftView, Page } from '@catline/contracts';
 import { Injectable, Logger } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, type EntityManager, Not } from 'typeorm';
 import { AuditTrail } from '../audit/audit-trail.service.js';
 import { definedFields } from '../common/defined-fields.js';
+import { pageOf, type PageWindow } from '../common/paging/page-query.dto.js';
 import { AircraftType } from '../database/entities/aircraft-type.entity.js';
 import { isDuplicateKey, isStillReferenced } from '../common/errors/database-errors.js';
 import { Slot } from '../database/entities/slot.entity.js';
@@ -26,12 +27,14 @@ export class AircraftService {
     private readonly audit: AuditTrail,
   ) {}
 
-  async list(): Promise<AircraftView[]> {
-    const aircraft = await this.dataSource.manager.find(Aircraft, {
+  async list(window: PageWindow): Promise<Page<AircraftView>> {
+    const [aircraft, total] = await this.dataSource.manager.findAndCount(Aircraft, {
       relations: WITH_NAMES,
-      order: { sideNumber: 'ASC' },
+      order: { sideNumber: 'ASC', id: 'ASC' },
+      take: window.limit,
+      skip: window.offset,
     });
-    return aircraft.map(toAircraftView);
+    return pageOf(window, aircraft.map(toAircraftView), total);
   }
 
   async create(body: CreateAircraftDto): Promise<AircraftView> {

@@ -1,8 +1,9 @@
-import { AUDIT_EXPORT_MAX_ROWS, AUDIT_PAGE_SIZE, type AuditEntryView, type Page } from '@catline/contracts';
+import { AUDIT_EXPORT_MAX_ROWS, type AuditEntryView, type Page } from '@catline/contracts';
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, type SelectQueryBuilder } from 'typeorm';
 import { toCsv } from '../common/csv.js';
+import { pageOf } from '../common/paging/page-query.dto.js';
 import type { CsvFile } from '../common/csv-response.js';
 import { AuditEntry } from '../database/entities/audit-entry.entity.js';
 import { toAuditEntryView } from './audit-entry.mapper.js';
@@ -29,10 +30,8 @@ export class AuditLog {
   constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
 
   async page(query: AuditPageQueryDto): Promise<Page<AuditEntryView>> {
-    const limit = query.limit ?? AUDIT_PAGE_SIZE.default;
-    const offset = query.offset ?? 0;
-    const [entries, total] = await this.select(query).take(limit).skip(offset).getManyAndCount();
-    return { items: entries.map(toAuditEntryView), total, limit, offset };
+    const [entries, total] = await this.select(query).take(query.limit).skip(query.offset).getManyAndCount();
+    return pageOf(query, entries.map(toAuditEntryView), total);
   }
 
   async csv(filter: AuditFilterDto): Promise<CsvFile> {

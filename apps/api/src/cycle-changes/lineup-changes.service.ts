@@ -1,9 +1,9 @@
-import type { LineupChange, LineupCommandResult, LineupPatch } from '@catline/contracts';
-import { MAX_REPLAY_CHANGES } from '@catline/contracts';
+import type { LineupChange, LineupCommandResult, LineupPatch, Page } from '@catline/contracts';
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { Between, DataSource, MoreThan, type EntityManager } from 'typeorm';
 import { Cycle } from '../database/entities/cycle.entity.js';
+import { pageOf, type PageWindow } from '../common/paging/page-query.dto.js';
 import { toLineupChange } from './change.mapper.js';
 import { CycleChange } from '../database/entities/cycle-change.entity.js';
 import { cycleNotFound } from './lineup-state.js';
@@ -17,7 +17,7 @@ export class LineupChangesService {
   constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
 
   /** Changes after `since`, ascending, at most `limit`; 404 for a cycle that does not exist. */
-  async since(cycleId: number, since: number, limit = MAX_REPLAY_CHANGES): Promise<LineupChange[]> {
+  async since(cycleId: number, since: number, limit: number): Promise<LineupChange[]> {
     const rows = await this.dataSource.manager.find(CycleChange, {
       where: { cycleId, version: MoreThan(since) },
       order: { version: 'ASC' },
@@ -27,6 +27,20 @@ export class LineupChangesService {
       throw cycleNotFound(cycleId);
     }
     return rows.map(toLineupChange);
+  }
+
+  /** One page of the changes after `since`, ascending; 404 for a cycle that does not exist. */
+  async pageSince(cycleId: number, since: number, window: PageWindow): Promise<Page<LineupChange>> {
+    const [rows, total] = await this.dataSource.manager.findAndCount(CycleChange, {
+      where: { cycleId, version: MoreThan(since) },
+      order: { version: 'ASC' },
+      take: window.limit,
+      skip: window.offset,
+    });
+    if (total === 0 && !(await this.dataSource.manager.existsBy(Cycle, { id: cycleId }))) {
+      throw cycleNotFound(cycleId);
+    }
+    return pageOf(window, rows.map(toLineupChange), total);
   }
 
   async currentVersion(cycleId: number): Promise<number> {

@@ -1,12 +1,13 @@
-import type { CycleView, LineupCommandResult } from '@catline/contracts';
-import { Body, Controller, Get, HttpCode, HttpStatus, Param, ParseIntPipe, Patch, Post } from '@nestjs/common';
+import type { CycleView, LineupCommandResult, Page } from '@catline/contracts';
+import { Body, Controller, Get, HttpCode, HttpStatus, Param, ParseIntPipe, Patch, Post, Query } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { Roles } from '../common/decorators/roles.decorator.js';
 import { ApiDoc } from '../common/openapi/api-doc.decorator.js';
 import { Created } from '../common/openapi/created.decorator.js';
-import { CycleViewDto } from '../common/openapi/views/cycles.view.js';
+import { CyclePageDto, CycleViewDto } from '../common/openapi/views/cycles.view.js';
+import { RecordsPageQueryDto } from '../common/paging/page-query.dto.js';
 import { LineupCommandResultDto } from '../common/openapi/views/lineup.view.js';
 import { actorOf } from '../cycle-changes/cycle-change.service.js';
 import { CycleCommandsService } from './cycle-commands.service.js';
@@ -25,10 +26,10 @@ export class CyclesController {
     private readonly commands: CycleCommandsService,
   ) {}
 
-  @ApiDoc('List the cycles', { response: [CycleViewDto] })
+  @ApiDoc('List the cycles, a page at a time', { response: CyclePageDto })
   @Get()
-  list(): Promise<CycleView[]> {
-    return this.cycles.list();
+  list(@Query() query: RecordsPageQueryDto): Promise<Page<CycleView>> {
+    return this.cycles.list(query);
   }
 
   @ApiDoc('Read one cycle', { response: CycleViewDto, refuses: { 404: ['not_found'] } })

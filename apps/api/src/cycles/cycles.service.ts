@@ -1,9 +1,10 @@
-import { DEFAULT_SHIP_TIME_ZONE, type CycleView } from '@catline/contracts';
+import { DEFAULT_SHIP_TIME_ZONE, type CycleView, type Page } from '@catline/contracts';
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
-import { DataSource } from 'typeorm';
+import { DataSource, In } from 'typeorm';
 import { AuditTrail } from '../audit/audit-trail.service.js';
 import { isDuplicateKey } from '../common/errors/database-errors.js';
+import { pageOf, type PageWindow } from '../common/paging/page-query.dto.js';
 import { Slot } from '../database/entities/slot.entity.js';
 import { Ship } from '../database/entities/ship.entity.js';
 import { Clock } from '../cycle-changes/clock.js';
@@ -25,19 +26,23 @@ export class CyclesService {
     private readonly clock: Clock,
   ) {}
 
-  async list(): Promise<CycleView[]> {
-    const cycles = await this.dataSource.manager.find(Cycle, {
+  /** Newest planned launch first. */
+  async list(window: PageWindow): Promise<Page<CycleView>> {
+    const [cycles, total] = await this.dataSource.manager.findAndCount(Cycle, {
       relations: { ship: true },
       order: { plannedLaunchAt: 'DESC', id: 'DESC' },
+      take: window.limit,
+      skip: window.offset,
     });
-    const counts = await this.counts();
-    return cycles.map((cycle) => toCycleView(cycle, cycle.ship.profile, counts.get(cycle.id) ?? NO_SLOTS));
+    const counts = await this.counts(cycles.map((cycle) => cycle.id));
+    const views = cycles.map((cycle) => toCycleView(cycle, cycle.ship.profile, counts.get(cycle.id) ?? NO_SLOTS));
+    return pageOf(window, views, total);
   }
 
   async get(id: number): Promise<CycleView> {
     const cycle = await this.dataSource.manager.findOne(Cycle, { where: { id }, relations: { ship: true } });
     if (!cycle) throw new CyclesException('not_found', `Cycle ${id} does not exist.`);
-    return toCycleView(cycle, cycle.ship.profile, (await this.counts(id)).get(id) ?? NO_SLOTS);
+    return toCycleView(cycle, cycle.ship.profile, (await this.counts([id])).get(id) ?? NO_SLOTS);
   }
 
   async create(request: CreateCycleDto): Promise<CycleView> {
@@ -84,7 +89,8 @@ export class CyclesService {
     }
   }
 
-  private async counts(cycleId?: number): Promise<Map<number, CycleCounts>> {
+  private async counts(cycleIds: number[]): Promise<Map<number, CycleCounts>> {
+    if (cycleIds.length === 0) return new Map();
     const query = this.dataSource.manager
       .createQueryBuilder(Slot, 'slot')
       .select('slot.cycleId', 'cycleId')
@@ -96,8 +102,8 @@ export class CyclesService {
         'slotCount',
       )
       .addSelect("SUM(CASE WHEN slot.status = 'launched' THEN 1 ELSE 0 END)", 'launchedCount')
+      .where({ cycleId: In(cycleIds) })
       .groupBy('slot.cycleId');
-    if (cycleId !== undefined) query.where('slot.cycleId = :cycleId', { cycleId });
     const rows = await query.getRawMany<{
       cycleId: number | string;
       slotCount: number | string;

@@ -4,6 +4,7 @@ import {
   type LineupChange,
   type LineupCommandResult,
   type LineupSnapshot,
+  type Page,
   type SuggestedLineup,
 } from '@catline/contracts';
 import { Body, Controller, Get, HttpCode, HttpStatus, Param, ParseIntPipe, Post, Query } from '@nestjs/common';
@@ -31,7 +32,7 @@ import { WaiversService } from './waivers.service.js';
 import { WaiveGateDto } from './dto/waive-gate.dto.js';
 import { ApiDoc } from '../common/openapi/api-doc.decorator.js';
 import {
-  LineupChangeDto,
+  LineupChangePageDto,
   LineupCommandResultDto,
   LineupSnapshotDto,
   SuggestedLineupDto,
@@ -61,16 +62,18 @@ export class LineupController {
   }
 
   @ApiDoc('Read the changes after a version', {
-    response: [LineupChangeDto],
-    description: 'How a client that missed broadcasts catches up, in version order.',
+    response: LineupChangePageDto,
+    description:
+      'How a client that missed broadcasts catches up, in version order, a page at a time: ' +
+      'it reads again from the last version it got until a page holds every change left (`total`).',
     refuses: { 404: ['not_found'] },
   })
   @Get('changes')
   changesSince(
     @Param('cycleId', ParseIntPipe) cycleId: number,
     @Query() query: ChangesQueryDto,
-  ): Promise<LineupChange[]> {
-    return this.changes.since(cycleId, query.since);
+  ): Promise<Page<LineupChange>> {
+    return this.changes.pageSince(cycleId, query.since, query);
   }
 
   @ApiDoc('Suggest a lineup', {

@@ -1,5 +1,17 @@
-import type { AcceptedResponse, UserView } from '@catline/contracts';
-import { Body, Controller, Delete, Get, HttpCode, HttpStatus, Param, ParseIntPipe, Patch, Post } from '@nestjs/common';
+import type { AcceptedResponse, Page, UserView } from '@catline/contracts';
+import {
+  Body,
+  Controller,
+  Delete,
+  Get,
+  HttpCode,
+  HttpStatus,
+  Param,
+  ParseIntPipe,
+  Patch,
+  Post,
+  Query,
+} from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
@@ -10,25 +22,29 @@ import { UsersService } from './users.service.js';
 import { ApiDoc } from '../common/openapi/api-doc.decorator.js';
 import { Created } from '../common/openapi/created.decorator.js';
 import { AcceptedResponseDto } from '../common/openapi/views/auth.view.js';
-import { UserViewDto } from '../common/openapi/views/fleet.view.js';
+import { UserPageDto, UserViewDto } from '../common/openapi/views/fleet.view.js';
+import { RecordsPageQueryDto } from '../common/paging/page-query.dto.js';
 
 @ApiTags('users')
 @Controller('users')
 export class UsersController {
   constructor(private readonly users: UsersService) {}
 
-  @ApiDoc('List the people', { response: [UserViewDto] })
+  @ApiDoc('List the people, a page at a time', { response: UserPageDto })
   @Roles('admin')
   @Get()
-  list(): Promise<UserView[]> {
-    return this.users.list();
+  list(@Query() query: RecordsPageQueryDto): Promise<Page<UserView>> {
+    return this.users.list(query);
   }
 
-  @ApiDoc('List the pilots', { response: [UserViewDto], description: 'The active pilots, to assign to sorties.' })
+  @ApiDoc('List the pilots, a page at a time', {
+    response: UserPageDto,
+    description: 'The active pilots, to assign to sorties.',
+  })
   @Roles('admin', 'air_operations', 'handler')
   @Get('pilots')
-  listPilots(): Promise<UserView[]> {
-    return this.users.listPilots();
+  listPilots(@Query() query: RecordsPageQueryDto): Promise<Page<UserView>> {
+    return this.users.listPilots(query);
   }
 
   @ApiDoc('Add a person', {

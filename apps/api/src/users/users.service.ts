@@ -1,4 +1,4 @@
-import { isCatapultRole, type UserView } from '@catline/contracts';
+import { isCatapultRole, type Page, type UserView } from '@catline/contracts';
 import { Injectable, Logger } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import type { DataSource, EntityManager } from 'typeorm';
@@ -10,6 +10,7 @@ import type { AuthenticatedUser } from '../common/authenticated-user.js';
 import { AuditTrail } from '../audit/audit-trail.service.js';
 import { PasswordLinks } from '../password-links/password-links.service.js';
 import { isDuplicateKey } from '../common/errors/database-errors.js';
+import { pageOf, type PageWindow } from '../common/paging/page-query.dto.js';
 import { Catapult } from '../database/entities/catapult.entity.js';
 import { Squadron } from '../database/entities/squadron.entity.js';
 import { catapultBindingProblem } from './catapult-binding.js';
@@ -31,17 +32,23 @@ export class UsersService {
     private readonly sessionEnds: SessionEnds,
   ) {}
 
-  async list(): Promise<UserView[]> {
-    const users = await this.dataSource.manager.find(User, { order: { name: 'ASC' } });
-    return users.map(toUserView);
+  async list(window: PageWindow): Promise<Page<UserView>> {
+    const [users, total] = await this.dataSource.manager.findAndCount(User, {
+      order: { name: 'ASC', id: 'ASC' },
+      take: window.limit,
+      skip: window.offset,
+    });
+    return pageOf(window, users.map(toUserView), total);
   }
 
-  async listPilots(): Promise<UserView[]> {
-    const pilots = await this.dataSource.manager.find(User, {
+  async listPilots(window: PageWindow): Promise<Page<UserView>> {
+    const [pilots, total] = await this.dataSource.manager.findAndCount(User, {
       where: { role: 'pilot', active: true },
-      order: { name: 'ASC' },
+      order: { name: 'ASC', id: 'ASC' },
+      take: window.limit,
+      skip: window.offset,
     });
-    return pilots.map(toUserView);
+    return pageOf(window, pilots.map(toUserView), total);
   }
 
   async create(body: CreateUserDto): Promise<UserView> {

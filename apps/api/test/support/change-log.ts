@@ -1,17 +1,27 @@
-import { MAX_REPLAY_CHANGES, type LineupChange } from '@catline/contracts';
+import type { LineupChange, Page } from '@catline/contracts';
 
-/** The whole change log of a cycle, read page by page through GET /lineup/changes. */
-export async function readChangeLog(url: string, token: string, cycleId: number): Promise<LineupChange[]> {
+/**
+ * The change log of a cycle after `since`, as a client catches up: page after page of
+ * GET /lineup/changes (of `limit` changes, the server's default unless given), each from the last
+ * version read, until a page holds every change left.
+ */
+export async function readChangeLog(
+  url: string,
+  token: string,
+  cycleId: number,
+  { since = 0, limit }: { since?: number; limit?: number } = {},
+): Promise<LineupChange[]> {
   const log: LineupChange[] = [];
   for (;;) {
-    const since = log.at(-1)?.version ?? 0;
-    const response = await fetch(`${url}/api/cycles/${cycleId}/lineup/changes?since=${since}`, {
+    const from = log.at(-1)?.version ?? since;
+    const size = limit === undefined ? '' : `&limit=${limit}`;
+    const response = await fetch(`${url}/api/cycles/${cycleId}/lineup/changes?since=${from}${size}`, {
       headers: { Authorization: `Bearer ${token}` },
     });
     if (!response.ok) throw new Error(`Reading the change log answered ${response.status}`);
-    const page = (await response.json()) as LineupChange[];
-    log.push(...page);
-    if (page.length < MAX_REPLAY_CHANGES) return log;
+    const page = (await response.json()) as Page<LineupChange>;
+    log.push(...page.items);
+    if (page.items.length >= page.total) return log;
   }
 }
 

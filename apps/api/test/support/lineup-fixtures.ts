@@ -11,6 +11,7 @@ import type {
   UserView,
 } from '@catline/contracts';
 import request from 'supertest';
+import { readAllPages } from './paged-list.js';
 import { bearer, signIn } from './sign-in.js';
 
 export const ADMIN = 'admin@catline.example';
@@ -82,6 +83,11 @@ export class LineupDriver {
     return response.body as T;
   }
 
+  /** Every row of a paged list, as `email` reads it. */
+  async all<T>(email: string, path: string): Promise<T[]> {
+    return readAllPages<T>(this.url, await this.token(email), path);
+  }
+
   demoShip(): Promise<ShipView> {
     this.ship ??= this.ok<ShipView[]>(OBSERVER, 'get', '/api/ships').then((ships) => ships[0]);
     return this.ship;
@@ -119,10 +125,10 @@ export class LineupDriver {
 
   /** The id of an aircraft by side number; the fleet is read once, and again for one added since. */
   async aircraftId(side: string): Promise<number> {
-    this.aircraft ??= this.ok<AircraftView[]>(OBSERVER, 'get', '/api/aircraft');
+    this.aircraft ??= this.all<AircraftView>(OBSERVER, '/api/aircraft');
     let found = (await this.aircraft).find((aircraft) => aircraft.sideNumber === side);
     if (!found) {
-      this.aircraft = this.ok<AircraftView[]>(OBSERVER, 'get', '/api/aircraft');
+      this.aircraft = this.all<AircraftView>(OBSERVER, '/api/aircraft');
       found = (await this.aircraft).find((aircraft) => aircraft.sideNumber === side);
     }
     return found!.id;

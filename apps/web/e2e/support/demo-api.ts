@@ -1,13 +1,15 @@
 import { expect, request, type APIRequestContext } from '@playwright/test';
-import type {
-  AircraftView,
-  CycleView,
-  LineupChange,
-  LineupCommandResult,
-  LineupSnapshot,
-  SessionResponse,
-  ShipView,
-  UserView,
+import {
+  nextPageOffset,
+  type Page,
+  type AircraftView,
+  type CycleView,
+  type LineupChange,
+  type LineupCommandResult,
+  type LineupSnapshot,
+  type SessionResponse,
+  type ShipView,
+  type UserView,
 } from '@catline/contracts';
 
 export const DEMO_PASSWORD = 'catline-demo';
@@ -28,6 +30,17 @@ export async function apiAs(who: string, password = DEMO_PASSWORD): Promise<APIR
 async function ok<T>(response: Awaited<ReturnType<APIRequestContext['get']>>): Promise<T> {
   expect(response.ok(), `${response.url()} → ${response.status()} ${await response.text()}`).toBe(true);
   return (await response.json()) as T;
+}
+
+/** Every row of a paged list (`path` may carry a query of its own), page after page. */
+export async function allOf<T>(api: APIRequestContext, path: string): Promise<T[]> {
+  const rows: T[] = [];
+  for (let offset: number | null = 0; offset !== null;) {
+    const page: Page<T> = await ok<Page<T>>(await api.get(`${path}${path.includes('?') ? '&' : '?'}offset=${offset}`));
+    rows.push(...page.items);
+    offset = nextPageOffset(page);
+  }
+  return rows;
 }
 
 export interface PlannedAircraft {
@@ -64,7 +77,7 @@ export interface PlanOptions {
 export async function planCycle({ aircraft, start = false, night = false }: PlanOptions) {
   const airops = await apiAs('airops');
   const [ship] = await ok<ShipView[]>(await airops.get('/api/ships'));
-  const cycles = await ok<CycleView[]>(await airops.get('/api/cycles'));
+  const cycles = await allOf<CycleView>(airops, '/api/cycles');
   const now = Date.now();
   const cycle = await ok<CycleView>(
     await airops.post('/api/cycles', {
@@ -85,8 +98,8 @@ export async function planCycle({ aircraft, start = false, night = false }: Plan
       },
     }),
   );
-  const fleet = await ok<AircraftView[]>(await airops.get('/api/aircraft'));
-  const pilots = await ok<UserView[]>(await airops.get('/api/users/pilots'));
+  const fleet = await allOf<AircraftView>(airops, '/api/aircraft');
+  const pilots = await allOf<UserView>(airops, '/api/users/pilots');
   const slotIds = new Map<string, number>();
   const crew = crewOf(aircraft, pilots);
   for (const [index, planned] of aircraft.entries()) {
@@ -137,7 +150,7 @@ export async function lineupOf(api: APIRequestContext, cycleId: number) {
 }
 
 export async function changesOf(api: APIRequestContext, cycleId: number) {
-  return ok<LineupChange[]>(await api.get(`/api/cycles/${cycleId}/lineup/changes?since=0`));
+  return allOf<LineupChange>(api, `/api/cycles/${cycleId}/lineup/changes?since=0`);
 }
 
 /** The handler puts a slot at the end of a catapult's lane through the API. */

@@ -1,7 +1,7 @@
-import { AUDIT_ACTIONS, AUDIT_PAGE_SIZE, type AuditAction } from '@catline/contracts';
-import { ApiPropertyOptional } from '@nestjs/swagger';
-import { Type } from 'class-transformer';
-import { IsEmail, IsIn, IsInt, IsISO8601, IsOptional, Max, Min } from 'class-validator';
+import { AUDIT_ACTIONS, type AuditAction } from '@catline/contracts';
+import { ApiPropertyOptional, IntersectionType } from '@nestjs/swagger';
+import { IsEmail, IsIn, IsISO8601, IsOptional } from 'class-validator';
+import { RecordsPageQueryDto } from '../../common/paging/page-query.dto.js';
 
 /** Which entries: every filter given must hold. */
 export class AuditFilterDto {
@@ -26,19 +26,4 @@ export class AuditFilterDto {
   until?: string;
 }
 
-export class AuditPageQueryDto extends AuditFilterDto {
-  @ApiPropertyOptional({ default: AUDIT_PAGE_SIZE.default, maximum: AUDIT_PAGE_SIZE.max })
-  @IsOptional()
-  @Type(() => Number)
-  @IsInt()
-  @Min(1)
-  @Max(AUDIT_PAGE_SIZE.max)
-  limit?: number;
-
-  @ApiPropertyOptional({ default: 0 })
-  @IsOptional()
-  @Type(() => Number)
-  @IsInt()
-  @Min(0)
-  offset?: number;
-}
+export class AuditPageQueryDto extends IntersectionType(AuditFilterDto, RecordsPageQueryDto) {}

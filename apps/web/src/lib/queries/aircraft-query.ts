@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { AircraftView } from '@catline/contracts';
-import { apiRequest } from '../api-client.js';
+import { PAGE_SIZE, type AircraftView } from '@catline/contracts';
+import { fetchAllPages } from '../paging.js';
 
 // Read by Fleet and by the cycle planner, so it lives here, not in a feature.
 export const aircraftKeys = {
@@ -11,7 +11,7 @@ export const aircraftKeys = {
 export const aircraftQueryOptions = () =>
   queryOptions({
     queryKey: aircraftKeys.list(),
-    queryFn: ({ signal }) => apiRequest<AircraftView[]>('/aircraft', { signal }),
+    queryFn: ({ signal }) => fetchAllPages<AircraftView>('/aircraft', PAGE_SIZE.max, signal),
   });
 
 export const useAircraft = () => useQuery(aircraftQueryOptions());

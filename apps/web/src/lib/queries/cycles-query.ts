@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { CycleView } from '@catline/contracts';
-import { apiRequest } from '../api-client.js';
+import { PAGE_SIZE, type CycleView } from '@catline/contracts';
+import { fetchAllPages } from '../paging.js';
 
 // Read by Cycles and by every live screen (to pick the cycle on show), so it lives here, not in a feature.
 export const cycleKeys = {
@@ -9,7 +9,8 @@ export const cycleKeys = {
   detail: (id: number) => ['cycles', 'detail', id] as const,
 };
 
-export const fetchCycles = (signal?: AbortSignal) => apiRequest<CycleView[]>('/cycles', { signal });
+/** Every cycle, newest first: the live screens pick theirs from these. */
+export const fetchCycles = (signal?: AbortSignal) => fetchAllPages<CycleView>('/cycles', PAGE_SIZE.max, signal);
 
 export const cyclesQueryOptions = () =>
   queryOptions({ queryKey: cycleKeys.list(), queryFn: ({ signal }) => fetchCycles(signal) });

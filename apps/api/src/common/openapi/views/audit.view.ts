@@ -1,6 +1,7 @@
-import { AUDIT_ACTIONS, type AuditAction, type AuditEntryView, type Page } from '@catline/contracts';
+import { AUDIT_ACTIONS, type AuditAction, type AuditEntryView } from '@catline/contracts';
 import { ApiProperty, ApiSchema } from '@nestjs/swagger';
 import { EnumProperty, IdProperty, InstantProperty, IntProperty } from './fields.js';
+import { PageDto } from './paging.view.js';
 
 const CHANGED_FIELDS = {
   type: 'object',
@@ -47,17 +48,4 @@ export class AuditEntryViewDto implements AuditEntryView {
   after: Record<string, unknown> | null;
 }
 
-@ApiSchema({ name: 'AuditEntryPage', description: 'One page of the audit trail, newest first.' })
-export class AuditEntryPageDto implements Page<AuditEntryView> {
-  @ApiProperty({ type: () => [AuditEntryViewDto] })
-  items: AuditEntryView[];
-
-  @IntProperty({ minimum: 0, description: 'How many entries match the filters in all.' })
-  total: number;
-
-  @IntProperty({ minimum: 1 })
-  limit: number;
-
-  @IntProperty({ minimum: 0 })
-  offset: number;
-}
+export const AuditEntryPageDto = PageDto(AuditEntryViewDto, 'AuditEntry', 'One page of the audit trail, newest first.');

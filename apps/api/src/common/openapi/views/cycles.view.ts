@@ -11,6 +11,7 @@ import {
 import { ApiProperty, ApiSchema } from '@nestjs/swagger';
 import { RespotViewDto } from './deck.view.js';
 import { EnumProperty, IdProperty, InstantProperty, IntProperty } from './fields.js';
+import { PageDto } from './paging.view.js';
 
 @ApiSchema({ name: 'CycleView' })
 export class CycleViewDto implements CycleView {
@@ -106,3 +107,5 @@ export class CycleViewDto implements CycleView {
   @ApiProperty({ description: 'The ship’s time zone (IANA name) the cycle’s times are shown in.' })
   timeZone: string;
 }
+
+export const CyclePageDto = PageDto(CycleViewDto, 'Cycle', 'One page of the cycles, newest planned launch first.');

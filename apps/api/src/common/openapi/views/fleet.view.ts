@@ -20,6 +20,7 @@ import {
 } from '@catline/contracts';
 import { ApiProperty, ApiPropertyOptional, ApiSchema } from '@nestjs/swagger';
 import { EnumProperty, IdProperty, IntProperty } from './fields.js';
+import { PageDto } from './paging.view.js';
 
 export const CATAPULT_POSITIONS: CatapultPosition[] = ['bow', 'waist'];
 export const CATAPULT_STATUSES: CatapultStatus[] = ['up', 'down'];
@@ -329,3 +330,7 @@ export class UserViewDto implements UserView {
   @ApiProperty()
   active: boolean;
 }
+
+export const UserPageDto = PageDto(UserViewDto, 'User', 'One page of the people, by name.');
+
+export const AircraftPageDto = PageDto(AircraftViewDto, 'Aircraft', 'One page of the aircraft, by side number.');

@@ -42,6 +42,7 @@ import { ApiProperty, ApiSchema } from '@nestjs/swagger';
 import { CycleViewDto } from './cycles.view.js';
 import { DeckPositionViewDto } from './deck.view.js';
 import { EnumProperty, IdProperty, InstantProperty, IntProperty } from './fields.js';
+import { PageDto } from './paging.view.js';
 import { CATAPULT_POSITIONS, CATAPULT_STATUSES } from './fleet.view.js';
 
 const CROSSWIND_SIDES: CrosswindSide[] = ['port', 'starboard', 'none'];
@@ -504,6 +505,12 @@ export class LineupChangeDto implements LineupChange {
   @ApiProperty({ type: () => LineupPatchDto })
   patch: LineupPatch;
 }
+
+export const LineupChangePageDto = PageDto(
+  LineupChangeDto,
+  'LineupChange',
+  'One page of a cycle’s changes, in version order.',
+);
 
 @ApiSchema({ name: 'LineupCommandResult', description: 'The accepted change and the version it made.' })
 export class LineupCommandResultDto implements LineupCommandResult {

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { Box, Button, Code, HStack, Input, Stack, Table, Text } from '@chakra-ui/react';
-import { AUDIT_ACTIONS, AUDIT_PAGE_SIZE, type AuditAction, type AuditEntryView } from '@catline/contracts';
+import { AUDIT_ACTIONS, PAGE_SIZE, type AuditAction, type AuditEntryView } from '@catline/contracts';
 import { FormField } from '../../../components/form-field.js';
 import { PageHeader } from '../../../components/page-header.js';
 import { EmptyState, QueryView } from '../../../components/query-states.js';
@@ -46,7 +46,7 @@ function ExportButton({ filter }: { filter: AuditFilter }) {
 export function AuditScreen() {
   const [filter, setFilter] = useState<AuditFilter>({ action: '', actor: '' });
   const [offset, setOffset] = useState(0);
-  const limit = AUDIT_PAGE_SIZE.default;
+  const limit = PAGE_SIZE.default;
   const entries = useAuditEntries({ ...filter, limit, offset });
   const change = (next: Partial<AuditFilter>) => {
     setFilter((current) => ({ ...current, ...next }));

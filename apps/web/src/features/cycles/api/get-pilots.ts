@@ -1,9 +1,9 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { UserView } from '@catline/contracts';
-import { apiRequest } from '../../../lib/api-client.js';
+import { PAGE_SIZE, type UserView } from '@catline/contracts';
+import { fetchAllPages } from '../../../lib/paging.js';
 import { cyclesFeatureKeys } from './cycles-feature-keys.js';
 
-export const getPilots = (signal?: AbortSignal) => apiRequest<UserView[]>('/users/pilots', { signal });
+export const getPilots = (signal?: AbortSignal) => fetchAllPages<UserView>('/users/pilots', PAGE_SIZE.max, signal);
 
 export const pilotsQueryOptions = () =>
   queryOptions({ queryKey: cyclesFeatureKeys.pilots(), queryFn: ({ signal }) => getPilots(signal) });

@@ -1,9 +1,9 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { UserView } from '@catline/contracts';
-import { apiRequest } from '../../../lib/api-client.js';
+import { PAGE_SIZE, type UserView } from '@catline/contracts';
+import { fetchAllPages } from '../../../lib/paging.js';
 import { peopleKeys } from './people-keys.js';
 
-export const getUsers = (signal?: AbortSignal) => apiRequest<UserView[]>('/users', { signal });
+export const getUsers = (signal?: AbortSignal) => fetchAllPages<UserView>('/users', PAGE_SIZE.max, signal);
 
 export const usersQueryOptions = () =>
   queryOptions({ queryKey: peopleKeys.list(), queryFn: ({ signal }) => getUsers(signal) });

@@ -1,11 +1,12 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { PAGE_SIZE, type CycleView } from '@catline/contracts';
-import { fetchAllPages } from '../paging.js';
+import { fetchAllPages, pageQueryOptions } from '../paging.js';
 
 // Read by Cycles and by every live screen (to pick the cycle on show), so it lives here, not in a feature.
 export const cycleKeys = {
   all: ['cycles'] as const,
   list: () => ['cycles', 'list'] as const,
+  pages: () => ['cycles', 'page'] as const,
   detail: (id: number) => ['cycles', 'detail', id] as const,
 };
 
@@ -16,3 +17,7 @@ export const cyclesQueryOptions = () =>
   queryOptions({ queryKey: cycleKeys.list(), queryFn: ({ signal }) => fetchCycles(signal) });
 
 export const useCycles = () => useQuery(cyclesQueryOptions());
+
+/** The Cycles screen's page from `offset`, newest first. */
+export const useCyclesPage = (offset: number) =>
+  useQuery(pageQueryOptions<CycleView>(cycleKeys.pages(), '/cycles', offset));

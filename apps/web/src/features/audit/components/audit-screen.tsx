@@ -3,6 +3,7 @@ import { Box, Button, Code, HStack, Input, Stack, Table, Text } from '@chakra-ui
 import { AUDIT_ACTIONS, PAGE_SIZE, type AuditAction, type AuditEntryView } from '@catline/contracts';
 import { FormField } from '../../../components/form-field.js';
 import { PageHeader } from '../../../components/page-header.js';
+import { Pager } from '../../../components/pager.js';
 import { EmptyState, QueryView } from '../../../components/query-states.js';
 import { SelectInput } from '../../../components/select-field.js';
 import { errorMessage } from '../../../lib/api-error.js';
@@ -121,27 +122,7 @@ export function AuditScreen() {
                   </Table.Body>
                 </Table.Root>
               </Table.ScrollArea>
-              <HStack gap="3">
-                <Button
-                  size="sm"
-                  variant="outline"
-                  disabled={offset === 0}
-                  onClick={() => setOffset(Math.max(0, offset - limit))}
-                >
-                  Newer
-                </Button>
-                <Text fontSize="sm" textStyle="figure">
-                  {page.offset + 1}–{page.offset + page.items.length} of {page.total}
-                </Text>
-                <Button
-                  size="sm"
-                  variant="outline"
-                  disabled={page.offset + page.items.length >= page.total}
-                  onClick={() => setOffset(offset + limit)}
-                >
-                  Older
-                </Button>
-              </HStack>
+              <Pager page={page} onOffset={setOffset} labels={{ previous: 'Newer', next: 'Older' }} />
             </Stack>
           )
         }

@@ -3,26 +3,21 @@ import { Badge, Button, Stack, Text } from '@chakra-ui/react';
 import type { CycleView } from '@catline/contracts';
 import { type Column, DataTable } from '../../../components/data-table.js';
 import { PageHeader } from '../../../components/page-header.js';
+import { Pager } from '../../../components/pager.js';
 import { QueryView } from '../../../components/query-states.js';
 import { RoleGate } from '../../../components/role-gate.js';
 import { errorMessage } from '../../../lib/api-error.js';
 import { formatDateTime, formatShortClock } from '../../../lib/format.js';
-import { useCycles } from '../../../lib/queries/cycles-query.js';
+import { useCycles, useCyclesPage } from '../../../lib/queries/cycles-query.js';
 import { useShips } from '../../../lib/queries/ships-query.js';
 import { useCreateCycle } from '../api/create-cycle.js';
 import { newCycleValues, toCreateRequest } from '../cycle-form-model.js';
 import { CycleForm } from './cycle-form.js';
 import { CyclePanel } from './cycle-panel.js';
 
-function NewCycle({
-  cycles,
-  onCreated,
-  onCancel,
-}: {
-  cycles: CycleView[];
-  onCreated: (cycle: CycleView) => void;
-  onCancel: () => void;
-}) {
+function NewCycle({ onCreated, onCancel }: { onCreated: (cycle: CycleView) => void; onCancel: () => void }) {
+  // The next number follows every cycle's, not only the page on screen.
+  const cycles = useCycles().data ?? [];
   const ships = useShips();
   const create = useCreateCycle();
   const shipId = ships.data?.[0]?.id;
@@ -54,7 +49,8 @@ function NewCycle({
 }
 
 export function CyclesScreen() {
-  const cycles = useCycles();
+  const [offset, setOffset] = useState(0);
+  const cycles = useCyclesPage(offset);
   const [creating, setCreating] = useState(false);
   const [selectedId, setSelectedId] = useState<number | null>(null);
 
@@ -140,13 +136,12 @@ export function CyclesScreen() {
         </RoleGate>
       </PageHeader>
       <QueryView query={cycles} loadingLabel="Loading cycles…">
-        {(list) => {
-          const selected = list.find((cycle) => cycle.id === selectedId);
+        {(page) => {
+          const selected = page.items.find((cycle) => cycle.id === selectedId);
           return (
             <Stack gap="4">
               {creating && (
                 <NewCycle
-                  cycles={list}
                   onCancel={() => setCreating(false)}
                   onCreated={(cycle) => {
                     setCreating(false);
@@ -156,13 +151,14 @@ export function CyclesScreen() {
               )}
               <DataTable
                 caption="Cycles"
-                rows={list}
+                rows={page.items}
                 columns={columns}
                 rowKey={(cycle) => cycle.id}
                 selectedKey={selectedId ?? undefined}
                 emptyTitle="No cycles yet"
                 emptyHint="Air operations creates the first cycle with “New cycle”."
               />
+              <Pager page={page} onOffset={setOffset} />
               {selected && <CyclePanel key={selected.id} cycle={selected} />}
             </Stack>
           );

@@ -1,6 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { AircraftView } from '@catline/contracts';
 import { apiRequest } from '../../../lib/api-client.js';
+import { changeRowInPages } from '../../../lib/paging.js';
 import { fleetKeys } from './fleet-keys.js';
 
 export interface UpdateAircraftVariables {
@@ -15,18 +16,16 @@ export const updateAircraft = ({ id, ...changes }: UpdateAircraftVariables) =>
 /** Optimistic: the row flips at once and flips back if the server refuses. */
 export function useUpdateAircraft() {
   const queryClient = useQueryClient();
-  const key = fleetKeys.aircraft.list();
+  const key = fleetKeys.aircraft.pages();
   return useMutation({
     mutationFn: updateAircraft,
     onMutate: async (variables) => {
       await queryClient.cancelQueries({ queryKey: key });
-      const previous = queryClient.getQueryData<AircraftView[]>(key);
-      queryClient.setQueryData<AircraftView[]>(key, (list) =>
-        list?.map((row) => (row.id === variables.id ? { ...row, ...variables } : row)),
-      );
-      return { previous };
+      return {
+        putBack: changeRowInPages<AircraftView>(queryClient, key, variables.id, (row) => ({ ...row, ...variables })),
+      };
     },
-    onError: (_error, _variables, context) => queryClient.setQueryData(key, context?.previous),
+    onError: (_error, _variables, context) => context?.putBack(),
     onSettled: () => queryClient.invalidateQueries({ queryKey: fleetKeys.aircraft.all }),
   });
 }

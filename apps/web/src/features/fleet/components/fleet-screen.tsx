@@ -4,10 +4,11 @@ import type { AircraftView, SquadronView } from '@catline/contracts';
 import { ActionDialog } from '../../../components/action-dialog.js';
 import { type Column, DataTable } from '../../../components/data-table.js';
 import { PageHeader } from '../../../components/page-header.js';
+import { Pager } from '../../../components/pager.js';
 import { QueryView } from '../../../components/query-states.js';
 import { NoticeBanner, refusalNotice, useNotice } from '../../../components/refusal-notice.js';
 import { RoleGate } from '../../../components/role-gate.js';
-import { useAircraft } from '../../../lib/queries/aircraft-query.js';
+import { useAircraft, useAircraftPage } from '../../../lib/queries/aircraft-query.js';
 import { useAircraftTypes } from '../../../lib/queries/aircraft-types-query.js';
 import { useShips } from '../../../lib/queries/ships-query.js';
 import { useSquadrons } from '../../../lib/queries/squadrons-query.js';
@@ -23,6 +24,8 @@ type Doomed = { kind: 'aircraft'; row: AircraftView } | { kind: 'squadron'; row:
 export function FleetScreen() {
   const admin = useHasRole('admin');
   const aircraft = useAircraft();
+  const [aircraftOffset, setAircraftOffset] = useState(0);
+  const aircraftPage = useAircraftPage(aircraftOffset);
   const squadrons = useSquadrons();
   const types = useAircraftTypes();
   const ships = useShips();
@@ -150,17 +153,20 @@ export function FleetScreen() {
         </Tabs.List>
         <Tabs.Content value="aircraft">
           <Stack gap="4">
-            <QueryView query={aircraft} loadingLabel="Loading aircraft…">
-              {(rows) => (
-                <DataTable
-                  caption="Aircraft"
-                  rows={rows}
-                  columns={aircraftColumns}
-                  rowKey={(row) => row.id}
-                  emptyTitle="No aircraft yet"
-                  emptyHint="The admin adds aircraft below."
-                  initialSort={{ key: 'side' }}
-                />
+            <QueryView query={aircraftPage} loadingLabel="Loading aircraft…">
+              {(page) => (
+                <Stack gap="2">
+                  <DataTable
+                    caption="Aircraft"
+                    rows={page.items}
+                    columns={aircraftColumns}
+                    rowKey={(row) => row.id}
+                    emptyTitle="No aircraft yet"
+                    emptyHint="The admin adds aircraft below."
+                    initialSort={{ key: 'side' }}
+                  />
+                  <Pager page={page} onOffset={setAircraftOffset} />
+                </Stack>
               )}
             </QueryView>
             <RoleGate roles={['admin']}>

@@ -1,11 +1,8 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
-import { PAGE_SIZE, type UserView } from '@catline/contracts';
-import { fetchAllPages } from '../../../lib/paging.js';
+import { useQuery } from '@tanstack/react-query';
+import type { UserView } from '@catline/contracts';
+import { pageQueryOptions } from '../../../lib/paging.js';
 import { peopleKeys } from './people-keys.js';
 
-export const getUsers = (signal?: AbortSignal) => fetchAllPages<UserView>('/users', PAGE_SIZE.max, signal);
-
-export const usersQueryOptions = () =>
-  queryOptions({ queryKey: peopleKeys.list(), queryFn: ({ signal }) => getUsers(signal) });
-
-export const useUsers = () => useQuery(usersQueryOptions());
+/** The People screen's page from `offset`, by name. */
+export const useUsersPage = (offset: number) =>
+  useQuery(pageQueryOptions<UserView>(peopleKeys.pages(), '/users', offset));

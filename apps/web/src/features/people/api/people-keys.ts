@@ -1,4 +1,4 @@
 export const peopleKeys = {
   all: ['users'] as const,
-  list: () => ['users', 'list'] as const,
+  pages: () => ['users', 'page'] as const,
 };

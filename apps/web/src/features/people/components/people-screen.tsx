@@ -4,6 +4,7 @@ import { isCatapultRole, ROLE_LABELS, type Role, type UserView } from '@catline/
 import { ActionDialog } from '../../../components/action-dialog.js';
 import { type Column, DataTable } from '../../../components/data-table.js';
 import { PageHeader } from '../../../components/page-header.js';
+import { Pager } from '../../../components/pager.js';
 import { QueryView } from '../../../components/query-states.js';
 import { NoticeBanner, refusalNotice, useNotice } from '../../../components/refusal-notice.js';
 import { SelectInput } from '../../../components/select-field.js';
@@ -12,14 +13,15 @@ import { useShips } from '../../../lib/queries/ships-query.js';
 import { useSquadrons } from '../../../lib/queries/squadrons-query.js';
 import { useSessionUser } from '../../../lib/session-store.js';
 import { useDeleteUser } from '../api/delete-user.js';
-import { useUsers } from '../api/get-users.js';
+import { useUsersPage } from '../api/get-users.js';
 import { useSendInvitation } from '../api/send-invitation.js';
 import { useUpdateUser } from '../api/update-user.js';
 import { roleChoices, UserForm } from './user-form.js';
 
 export function PeopleScreen() {
   const me = useSessionUser();
-  const users = useUsers();
+  const [offset, setOffset] = useState(0);
+  const users = useUsersPage(offset);
   const ships = useShips();
   const squadrons = useSquadrons();
   const update = useUpdateUser();
@@ -135,15 +137,18 @@ export function PeopleScreen() {
       <PageHeader title="People" subtitle="Sign-ins and roles" />
       {notice && <NoticeBanner notice={notice} onDismiss={dismiss} />}
       <QueryView query={users} loadingLabel="Loading people…">
-        {(list) => (
-          <DataTable
-            caption="People"
-            rows={list}
-            columns={columns}
-            rowKey={(user) => user.id}
-            emptyTitle="No people yet"
-            initialSort={{ key: 'name' }}
-          />
+        {(page) => (
+          <Stack gap="2">
+            <DataTable
+              caption="People"
+              rows={page.items}
+              columns={columns}
+              rowKey={(user) => user.id}
+              emptyTitle="No people yet"
+              initialSort={{ key: 'name' }}
+            />
+            <Pager page={page} onOffset={setOffset} />
+          </Stack>
         )}
       </QueryView>
       <Stack gap="2" borderWidth="1px" rounded="card" p="3">

@@ -8,6 +8,7 @@ import {
   launchKey,
   pilot,
 } from './support/lineup-fixtures.js';
+import { readChangeLog } from './support/change-log.js';
 import { startTestApp } from './support/test-app.js';
 
 describe('hangfire, suspected cold shot and down on the catapult', () => {
@@ -46,7 +47,7 @@ describe('hangfire, suspected cold shot and down on the catapult', () => {
   };
 
   const lastChange = async (cycleId: number): Promise<LineupChange> => {
-    const changes = await deck.ok<LineupChange[]>(HANDLER, 'get', `/api/cycles/${cycleId}/lineup/changes?since=0`);
+    const changes = await readChangeLog(deck.url, await deck.token(HANDLER), cycleId);
     return changes[changes.length - 1];
   };
 

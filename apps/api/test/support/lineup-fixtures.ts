@@ -229,7 +229,7 @@ export class LineupDriver {
 
   /** The air boss stops whichever cycle of the ship is launching, if one is. */
   async stopLaunching(shipId: number): Promise<void> {
-    const cycles = await this.ok<CycleView[]>(OBSERVER, 'get', '/api/cycles');
+    const cycles = await this.all<CycleView>(OBSERVER, '/api/cycles');
     for (const cycle of cycles.filter((candidate) => candidate.shipId === shipId && candidate.state === 'executing')) {
       await this.ok(AIR_BOSS, 'post', `/api/cycles/${cycle.id}/stop`, { basisVersion: cycle.version });
     }

@@ -134,7 +134,7 @@ export async function planCycle({ aircraft, start = false, night = false }: Plan
  */
 export async function startLaunching(cycleId: number) {
   const airboss = await apiAs('airboss');
-  const cycles = await ok<CycleView[]>(await airboss.get('/api/cycles'));
+  const cycles = await allOf<CycleView>(airboss, '/api/cycles');
   const cycle = cycles.find((candidate) => candidate.id === cycleId)!;
   for (const other of cycles.filter(
     (candidate) => candidate.shipId === cycle.shipId && candidate.state === 'executing',

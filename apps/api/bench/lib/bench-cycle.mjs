@@ -44,7 +44,7 @@ export async function createBenchCycle(baseUrl) {
     'create cycle',
   );
   // Pilots for as many aircraft as there are: only an aircraft with one may join a lane.
-  const pilots = expectOk(await airops.get('/users/pilots'), 'list pilots');
+  const pilots = expectOk(await airops.get('/users/pilots?limit=200'), 'list pilots').items;
   for (const [i, plane] of aircraft.slice(0, BENCH_AIRCRAFT).entries()) {
     const type = types.find((t) => t.id === plane.typeId);
     const weights = type.launchTable.map((row) => row.grossWeightLb);

@@ -161,7 +161,7 @@ export class LineupDriver {
   async pilotId(email: string): Promise<number> {
     const find = async () => (await this.pilots)?.find((person) => person.email === email);
     // A pilot created after the list was read: read it again.
-    if (!(await find())) this.pilots = this.ok<UserView[]>(AIR_OPS, 'get', '/api/users/pilots');
+    if (!(await find())) this.pilots = this.all<UserView>(AIR_OPS, '/api/users/pilots');
     const found = await find();
     if (!found) throw new Error(`${email} is not an active pilot`);
     return found.id;

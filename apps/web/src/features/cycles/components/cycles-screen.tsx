@@ -16,12 +16,12 @@ import { CycleForm } from './cycle-form.js';
 import { CyclePanel } from './cycle-panel.js';
 
 function NewCycle({ onCreated, onCancel }: { onCreated: (cycle: CycleView) => void; onCancel: () => void }) {
-  // The next number follows every cycle's, not only the page on screen.
-  const cycles = useCycles().data ?? [];
+  // The next number follows every cycle's, not only the page on screen: the form waits for them all,
+  // since it takes its first values once.
+  const cycles = useCycles();
   const ships = useShips();
   const create = useCreateCycle();
   const shipId = ships.data?.[0]?.id;
-  const nextNumber = Math.max(0, ...cycles.map((cycle) => cycle.number)) + 1;
   return (
     <Stack
       gap="3"
@@ -33,17 +33,21 @@ function NewCycle({ onCreated, onCancel }: { onCreated: (cycle: CycleView) => vo
       aria-label="New cycle"
     >
       <Text fontWeight="700">New cycle</Text>
-      <CycleForm
-        initial={newCycleValues(new Date(), nextNumber)}
-        withNumber
-        submitLabel="Create cycle"
-        pending={create.isPending}
-        serverError={create.isError ? errorMessage(create.error) : ships.isError ? errorMessage(ships.error) : null}
-        onCancel={onCancel}
-        onSubmit={(values) =>
-          shipId !== undefined && create.mutate(toCreateRequest(values, shipId), { onSuccess: onCreated })
-        }
-      />
+      <QueryView query={cycles} loadingLabel="Reading the cycle numbers…">
+        {(all) => (
+          <CycleForm
+            initial={newCycleValues(new Date(), Math.max(0, ...all.map((cycle) => cycle.number)) + 1)}
+            withNumber
+            submitLabel="Create cycle"
+            pending={create.isPending}
+            serverError={create.isError ? errorMessage(create.error) : ships.isError ? errorMessage(ships.error) : null}
+            onCancel={onCancel}
+            onSubmit={(values) =>
+              shipId !== undefined && create.mutate(toCreateRequest(values, shipId), { onSuccess: onCreated })
+            }
+          />
+        )}
+      </QueryView>
     </Stack>
   );
 }

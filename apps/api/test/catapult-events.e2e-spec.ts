@@ -104,7 +104,13 @@ describe('hangfire, suspected cold shot and down on the catapult', () => {
     await deck.stepThrough(cycle.id, second.id, 'on_catapult');
     const downed = await post(catapultOfficer(1), cycle.id, second.id, 'down-on-catapult', { outcome: 'down' });
     expect(downed.status).toBe(200);
-    expect(await deck.slot(cycle.id, second.id)).toMatchObject({ status: 'down', catapultId: null });
+    expect(await deck.slot(cycle.id, second.id)).toMatchObject({
+      status: 'down',
+      catapultId: null,
+      downFromCatapultId: await deck.catapultId(1),
+    });
+    // Back to the pool is not down: no catapult counts it.
+    expect((await deck.slot(cycle.id, first.id)).downFromCatapultId).toBeNull();
   });
 
   it('takes a suspected cold shot on the last launch: the catapult goes down and the aircraft on it is suspended', async () => {

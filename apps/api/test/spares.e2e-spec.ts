@@ -94,6 +94,9 @@ describe('spares, down aircraft, pilots and returns to the pool', () => {
     await deck.place(cycle.id, slot.id, 2);
     await markDown(cycle.id, slot.id);
     const down = await deck.slot(cycle.id, slot.id);
+    // Out of cat 2's order, it is still counted as cat 2's down aircraft.
+    const cat2 = (await deck.snapshot(cycle.id)).lanes.find((lane) => lane.number === 2)!;
+    expect(down).toMatchObject({ status: 'down', catapultId: null, downFromCatapultId: cat2.catapultId });
     const up = await deck.ok<LineupCommandResult>(HANDLER, 'post', slotPath(cycle.id, slot.id, 'up'), {
       slotVersion: down.version,
       reason: 'Hydraulic leak fixed',
@@ -107,6 +110,7 @@ describe('spares, down aircraft, pilots and returns to the pool', () => {
     expect(after.slots.find((candidate) => candidate.id === slot.id)).toMatchObject({
       status: 'planned',
       catapultId: null,
+      downFromCatapultId: null,
     });
     expect(after.pool).toContain(slot.id);
     const again = await deck.call(HANDLER, 'post', slotPath(cycle.id, slot.id, 'up'), {

@@ -21,6 +21,9 @@ test('the handler swaps in a spare, applies the suggested lineup and marks a cat
   await handler.getByRole('dialog').getByRole('button', { name: 'Mark D38 down' }).click();
   await expect(card(lane(handler, 1), 'C30')).toBeVisible();
   await expect(handler.getByTestId('down-list')).toContainText('D38');
+  // Cat 1's head still counts the aircraft that went down out of its order; the other catapults', none.
+  await expect(lane(handler, 1).getByTestId('lane-counts')).toHaveText('0 off · 1 to go · 0 late · 1 down');
+  await expect(lane(handler, 2).getByTestId('lane-counts')).toContainText('0 down');
 
   await handler.getByRole('button', { name: 'Suggest lineup' }).click();
   const dialog = handler.getByRole('dialog');

@@ -215,6 +215,8 @@ export interface SlotView {
   heldSpare: boolean;
   /** Null while the slot is in the deck pool. */
   catapultId: number | null;
+  /** The catapult whose order a down aircraft left; null while it is not down, or went down from the deck pool. */
+  downFromCatapultId: number | null;
   /** 0-based place in its lane; null in the deck pool. */
   position: number | null;
   status: SlotStatus;

@@ -55,6 +55,7 @@ const slot = (id: number, catapultId: number | null, position: number | null, ve
   spare: false,
   heldSpare: false,
   catapultId,
+  downFromCatapultId: null,
   position,
   status: 'planned',
   version,

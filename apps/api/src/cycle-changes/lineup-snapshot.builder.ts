@@ -219,6 +219,7 @@ export function buildSnapshot(state: LineupState): LineupSnapshot {
       spare: slot.spare,
       heldSpare: isHeldSpare(state, slot),
       catapultId: slot.catapultId,
+      downFromCatapultId: slot.downCatapultId,
       position: slot.position,
       status: slot.status,
       version: slot.version,

@@ -143,7 +143,7 @@ export class CatapultEventsService {
         reverifyCause: null,
         lastStep: null,
         suspendReason: null,
-        ...(request.outcome === 'down' ? { downAt: now } : {}),
+        ...(request.outcome === 'down' ? { downAt: now, downCatapultId: catapult.id } : {}),
       });
       await placeSlots(manager, { catapultId: catapult.id, slots: lane }, { catapultId: null, slots: [slot] });
       const where = request.outcome === 'down' ? 'down, out of the cycle' : 'back to the deck pool';

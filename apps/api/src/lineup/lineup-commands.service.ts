@@ -156,6 +156,7 @@ export class LineupCommandsService {
       await updateSlot(manager, slot, {
         status: 'down',
         downAt: now,
+        downCatapultId: catapultId,
         statusAt: now,
         statusBy: actor,
         catapultId: null,

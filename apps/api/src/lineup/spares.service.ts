@@ -80,7 +80,13 @@ export class SparesService {
         throw new LineupException('wrong_step', `${side} is ${slot.status.replaceAll('_', ' ')}, not down.`);
       }
       const now = this.clock.now();
-      await updateSlot(manager, slot, { status: 'planned', downAt: null, statusAt: now, statusBy: actor });
+      await updateSlot(manager, slot, {
+        status: 'planned',
+        downAt: null,
+        downCatapultId: null,
+        statusAt: now,
+        statusBy: actor,
+      });
       return {
         summary: `${side} up again, back in the deck pool: ${request.reason}${slot.pilotId === null ? ' (no pilot)' : ''}`,
         command: { type: 'up_again', slotId, ...request },

@@ -126,6 +126,10 @@ export class Slot {
   @InstantColumn({ name: 'down_at', nullable: true })
   downAt: Date | null;
 
+  /** The catapult whose order a down aircraft left; null while it is not down, or went down from the deck pool. */
+  @Column({ name: 'down_catapult_id', type: 'int', nullable: true })
+  downCatapultId: number | null;
+
   /** The spare slot that took this down aircraft's place. */
   @Column({ name: 'replaced_by_slot_id', type: 'int', nullable: true })
   replacedBySlotId: number | null;

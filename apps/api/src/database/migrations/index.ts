@@ -12,6 +12,7 @@ import { CycleDeckHolds1796216225592 } from './1796216225592-CycleDeckHolds.js';
 import { CycleRespot1796217149940 } from './1796217149940-CycleRespot.js';
 import { AircraftTypeStoresCatalogue1796225154045 } from './1796225154045-AircraftTypeStoresCatalogue.js';
 import { LandingAreaInUseDerived1796225353747 } from './1796225353747-LandingAreaInUseDerived.js';
+import { SlotDownCatapult1796228372875 } from './1796228372875-SlotDownCatapult.js';
 
 /** Every migration in the order it runs; add a new one at the end (see DEVELOPERS.md). */
 export const migrations = [
@@ -29,4 +30,5 @@ export const migrations = [
   CycleRespot1796217149940,
   AircraftTypeStoresCatalogue1796225154045,
   LandingAreaInUseDerived1796225353747,
+  SlotDownCatapult1796228372875,
 ];

@@ -70,6 +70,7 @@ function slot(
     spare: false,
     heldSpare: false,
     catapultId: place?.catapultId ?? null,
+    downFromCatapultId: null,
     position: place?.position ?? null,
     status: 'planned',
     version: 1,
@@ -242,7 +243,18 @@ describe('the marks and counts of a lane', () => {
   it('counts aircraft off, still to go and late', () => {
     const one = lane1('launched', 'on_catapult', 'planned', 'planned');
     one.slots.set(4, { ...one.slots.get(4)!, missesWindow: true });
-    expect(laneCounts(one.lane, one.slots)).toEqual({ launched: 1, toGo: 3, late: 1 });
+    expect(laneCounts(one.lane, one.slots)).toEqual({ launched: 1, toGo: 3, late: 1, down: 0 });
+  });
+
+  it("counts the aircraft gone down out of the lane's order, not those down from another catapult or the pool", () => {
+    const one = lane1('launched', 'planned');
+    const gone = (id: number, side: string, downFromCatapultId: number | null) =>
+      slot(id, side, null, { status: 'down', downFromCatapultId });
+    one.slots.set(5, gone(5, 'C25', 11));
+    one.slots.set(6, gone(6, 'C26', 11));
+    one.slots.set(7, gone(7, 'C27', 12));
+    one.slots.set(8, gone(8, 'C28', null));
+    expect(laneCounts(one.lane, one.slots)).toEqual({ launched: 1, toGo: 1, late: 0, down: 2 });
   });
 });
 

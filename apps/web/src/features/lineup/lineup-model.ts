@@ -72,14 +72,26 @@ export function laneMarks(lane: LaneView, slots: Map<number, SlotView>): Map<num
   return second ? marks.set(second.id, 'next') : marks;
 }
 
-/** What a lane's head counts: aircraft already off, still to go, and still to go but past the window. */
-export function laneCounts(lane: LaneView, slots: Map<number, SlotView>) {
+export interface LaneCounts {
+  launched: number;
+  toGo: number;
+  late: number;
+  down: number;
+}
+
+/**
+ * What a lane's head counts: aircraft already off, still to go, still to go but past the window, and
+ * those gone down out of its order (which the lane itself no longer holds).
+ */
+export function laneCounts(lane: LaneView, slots: Map<number, SlotView>): LaneCounts {
   const inLane = lane.slotIds.map((id) => slots.get(id)).filter((slot): slot is SlotView => !!slot);
   const waiting = laneWaiting(lane, slots);
   return {
     launched: inLane.filter((slot) => slot.status === 'launched').length,
     toGo: waiting.length,
     late: waiting.filter((slot) => slot.missesWindow).length,
+    down: [...slots.values()].filter((slot) => slot.status === 'down' && slot.downFromCatapultId === lane.catapultId)
+      .length,
   };
 }
 

@@ -302,6 +302,12 @@ export class SlotViewDto implements SlotView {
   @IdProperty({ nullable: true, description: 'Null while the slot is in the deck pool.' })
   catapultId: number | null;
 
+  @IdProperty({
+    nullable: true,
+    description: 'The catapult whose order a down aircraft left; null while not down, or down from the deck pool.',
+  })
+  downFromCatapultId: number | null;
+
   @IntProperty({ nullable: true, minimum: 0, description: '0-based place in its lane; null in the deck pool.' })
   position: number | null;
 

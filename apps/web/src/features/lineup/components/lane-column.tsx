@@ -8,12 +8,12 @@ import { WindIcon } from '../../../components/icons.js';
 import { formatKnots } from '../../../lib/format.js';
 import { slotItemId } from '../hooks/use-lineup-drag.js';
 import { DeckStatusLine } from '../../../components/deck-status-line.js';
-import { laneContainer } from '../lineup-model.js';
+import { laneContainer, type LaneCounts } from '../lineup-model.js';
 
 interface LaneColumnProps {
   lane: LaneView;
   slotIds: number[];
-  counts: { launched: number; toGo: number; late: number };
+  counts: LaneCounts;
   /** The catapult's own menu (mark it down or up), for the handler. */
   menu?: ReactNode;
   children: ReactNode;
@@ -23,6 +23,19 @@ function windWords(lane: LaneView) {
   const cross =
     lane.crosswindSide === 'none' ? 'no crosswind' : `${formatKnots(lane.crosswindKt)} from ${lane.crosswindSide}`;
   return `${formatKnots(lane.headwindKt)} headwind, ${cross}`;
+}
+
+/** One figure of a lane's head; a late or down aircraft stands out once there is one. */
+function LaneCount({ count, label, alarm = false }: { count: number; label: string; alarm?: boolean }) {
+  const raised = alarm && count > 0;
+  return (
+    <Text as="span" color={raised ? 'nogo.fg' : undefined} fontWeight={raised ? '700' : undefined}>
+      <Text as="span" textStyle="figure" color={raised ? undefined : 'fg'}>
+        {count}
+      </Text>{' '}
+      {label}
+    </Text>
+  );
 }
 
 /** One catapult's queue: its state and wind over deck on top, its slots in launch order below. */
@@ -77,20 +90,8 @@ export function LaneColumn({ lane, slotIds, counts, menu, children }: LaneColumn
           <Text truncate>{windWords(lane)}</Text>
         </HStack>
         <Text fontSize="xs" color="fg.muted" data-testid="lane-counts">
-          <Text as="span" textStyle="figure" color="fg">
-            {counts.launched}
-          </Text>{' '}
-          off ·{' '}
-          <Text as="span" textStyle="figure" color="fg">
-            {counts.toGo}
-          </Text>{' '}
-          to go
-          {counts.late > 0 && (
-            <Text as="span" color="nogo.fg" fontWeight="700">
-              {' '}
-              · {counts.late} late
-            </Text>
-          )}
+          <LaneCount count={counts.launched} label="off" /> · <LaneCount count={counts.toGo} label="to go" /> ·{' '}
+          <LaneCount count={counts.late} label="late" alarm /> · <LaneCount count={counts.down} label="down" alarm />
         </Text>
       </Stack>
       <SortableContext

@@ -108,16 +108,17 @@ const KICK_PATIENCE = 12;
 const KICK_EVALUATION_BUDGET = 40_000;
 const AIRCRAFT_MOVED_PER_KICK = 3;
 const KICK_SEED = 0x5eed;
-/** Lineup evaluations the two-aircraft moves after the kicks may spend. */
-const CHAIN_EVALUATION_BUDGET = 5_000;
+/** Lineup evaluations the pair moves after the kicks may spend. */
+const PAIR_MOVE_EVALUATION_BUDGET = 5_000;
 
-function evaluate(space: SearchSpace, lanes: Lanes): Score {
+/** Each aircraft's launch time in the lineup, by index (NaN when stranded or in no lane). */
+function launchTimes(space: SearchSpace, lanes: Lanes): Float64Array {
   space.evaluations.count += 1;
   const notBefore = new Float64Array(space.tier.length);
   lanes.forEach((lane, catapult) =>
     lane.forEach((aircraft) => (notBefore[aircraft] = space.arrival[aircraft][catapult])),
   );
-  const times = scheduleLaunches({
+  return scheduleLaunches({
     earliest: space.earliest,
     pairGapMs: space.pairGapMs,
     catapults: space.catapults,
@@ -128,6 +129,10 @@ function evaluate(space: SearchSpace, lanes: Lanes): Score {
     taxiStart: space.taxiStart,
     clearAfter: space.clearAfter,
   });
+}
+
+function evaluate(space: SearchSpace, lanes: Lanes): Score {
+  const times = launchTimes(space, lanes);
   let stranded = 0;
   let lastLaunch = space.earliest;
   let totalTime = 0;
@@ -321,63 +326,52 @@ function iterate(space: SearchSpace, start: { lanes: Lanes; score: Score }): { l
   return best;
 }
 
-/** The aircraft whose launch is the lineup's last: the ones a better lineup must launch sooner. */
-function lastToLaunch(space: SearchSpace, lanes: Lanes, lastLaunch: number): number[] {
-  const notBefore = new Float64Array(space.tier.length);
-  lanes.forEach((lane, catapult) =>
-    lane.forEach((aircraft) => (notBefore[aircraft] = space.arrival[aircraft][catapult])),
-  );
-  const times = scheduleLaunches({
-    earliest: space.earliest,
-    pairGapMs: space.pairGapMs,
-    catapults: space.catapults,
-    lanes,
-    notBefore,
-    tier: space.tier,
-    fixed: [],
-    taxiStart: space.taxiStart,
-    clearAfter: space.clearAfter,
-  });
-  return lanes.flat().filter((aircraft) => times[aircraft] === lastLaunch);
-}
-
 /**
- * Two-aircraft moves that neither a single move nor the kicks find reliably: the last aircraft to
- * launch goes to a place where it would launch later, and one aircraft of that lane makes room by
- * moving to its best place elsewhere (e.g. a spare waits behind a late arrival on one catapult while
- * an aircraft that could use an idle catapult holds the one it needs). Taken only when the pair of
- * moves scores better; local search follows each one taken, until none helps or the budget is spent.
+ * Two-aircraft moves that neither a single move nor the kicks find reliably: one aircraft goes to
+ * another place, even one that alone makes the lineup worse, and then an aircraft now launching last
+ * goes to its best place (e.g. a tanker moved behind another on one catapult frees its pair partner
+ * but holds the rest longer, until the spare stuck behind them moves to an idle catapult). Taken only
+ * when the pair scores better; local search follows each pair taken, until none helps or the budget
+ * is spent.
  */
-function makeRoom(space: SearchSpace, found: { lanes: Lanes; score: Score }): { lanes: Lanes; score: Score } {
+function pairMoves(space: SearchSpace, found: { lanes: Lanes; score: Score }): { lanes: Lanes; score: Score } {
   const lanes = found.lanes.map((lane) => [...lane]);
   let current = found.score;
-  const budget = space.evaluations.count + CHAIN_EVALUATION_BUDGET;
-  const tryRoomFor = (last: number): Score | null => {
-    const from = lanes.findIndex((lane) => lane.includes(last));
-    const fromPosition = lanes[from].indexOf(last);
+  const budget = space.evaluations.count + PAIR_MOVE_EVALUATION_BUDGET;
+  const pairFrom = (first: number): Score | null => {
+    const from = lanes.findIndex((lane) => lane.includes(first));
+    const fromPosition = lanes[from].indexOf(first);
     lanes[from].splice(fromPosition, 1);
     for (let catapult = 0; catapult < lanes.length; catapult += 1) {
-      if (catapult === from || !Number.isFinite(space.arrival[last][catapult])) continue;
+      if (!Number.isFinite(space.arrival[first][catapult])) continue;
       const lane = lanes[catapult];
       for (let position = 0; position <= lane.length; position += 1) {
-        if (!fitsAt(space, lane, position, space.tier[last])) continue;
-        lane.splice(position, 0, last);
-        for (const other of lane.filter((aircraft) => aircraft !== last)) {
-          if (space.evaluations.count >= budget) break;
-          const score = relocate(space, lanes, other, current);
+        if ((catapult === from && position === fromPosition) || !fitsAt(space, lane, position, space.tier[first]))
+          continue;
+        if (space.evaluations.count >= budget) break;
+        lane.splice(position, 0, first);
+        const times = launchTimes(space, lanes);
+        const lastLaunch = Math.max(
+          ...lanes
+            .flat()
+            .map((aircraft) => times[aircraft])
+            .filter(Number.isFinite),
+        );
+        for (const second of lanes.flat()) {
+          if (second === first || times[second] !== lastLaunch) continue;
+          const score = relocate(space, lanes, second, current);
           if (score !== null) return score;
         }
         lane.splice(position, 1);
       }
     }
-    lanes[from].splice(fromPosition, 0, last);
+    lanes[from].splice(fromPosition, 0, first);
     return null;
   };
   for (let taken = true; taken && space.evaluations.count < budget;) {
     taken = false;
-    for (const last of lastToLaunch(space, lanes, current.lastLaunch)) {
-      const score = tryRoomFor(last);
-      if (score === null) continue;
+    for (const first of lanes.flat()) {
+      if (pairFrom(first) === null) continue;
       current = improve(space, lanes).score;
       taken = true;
       break;
@@ -404,9 +398,9 @@ function startOrders(space: SearchSpace, aircraft: readonly number[]): number[][
  * refined by iterated local search, because the pair gap and the priority holds often need two
  * aircraft to move at once: up to 40 seeded kicks, each moving three aircraft at random before
  * searching locally again, stopping after 12 kicks in a row without a better lineup or 40,000
- * lineup evaluations. Last, the aircraft that launches last tries each place elsewhere with one
- * aircraft of that lane making room (at most 5,000 more evaluations: every such pair on a cycle of a
- * dozen aircraft). Scores compare the last launch, then the sum of launch times.
+ * lineup evaluations. Last, pair moves: each aircraft tries every other place, and an aircraft then
+ * launching last its best place (at most 5,000 more evaluations: every pair on a cycle of about ten
+ * aircraft). Scores compare the last launch, then the sum of launch times.
  */
 export function suggestLineup(input: SuggestionInput): LineupSuggestion {
   const earliest = earliestLaunch(input);
@@ -459,7 +453,7 @@ export function suggestLineup(input: SuggestionInput): LineupSuggestion {
     evaluations: { count: 0 },
   };
   const placeable = input.aircraft.flatMap((_, index) => (arrival[index].some(Number.isFinite) ? [index] : []));
-  const best = makeRoom(
+  const best = pairMoves(
     space,
     iterate(
       space,

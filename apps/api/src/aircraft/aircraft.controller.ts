@@ -33,6 +33,12 @@ export class AircraftController {
     return this.aircraft.list(query);
   }
 
+  @ApiDoc('Read one aircraft', { response: AircraftViewDto, refuses: { 404: ['aircraft_not_found'] } })
+  @Get(':id')
+  get(@Param('id', ParseIntPipe) id: number): Promise<AircraftView> {
+    return this.aircraft.get(id);
+  }
+
   @ApiDoc('Add an aircraft', {
     response: AircraftViewDto,
     refuses: { 400: ['unknown_reference'], 409: ['side_number_taken'] },

@@ -18,6 +18,8 @@ import { Aircraft } from '../database/entities/aircraft.entity.js';
 
 const WITH_NAMES = { type: true, squadron: true } as const;
 
+const noAircraft = (id: number) => new AircraftException('aircraft_not_found', `There is no aircraft with id ${id}.`);
+
 @Injectable()
 export class AircraftService {
   private readonly logger = new Logger(AircraftService.name);
@@ -35,6 +37,12 @@ export class AircraftService {
       skip: window.offset,
     });
     return pageOf(window, aircraft.map(toAircraftView), total);
+  }
+
+  async get(id: number): Promise<AircraftView> {
+    const aircraft = await this.dataSource.manager.findOne(Aircraft, { where: { id }, relations: WITH_NAMES });
+    if (!aircraft) throw noAircraft(id);
+    return toAircraftView(aircraft);
   }
 
   async create(body: CreateAircraftDto): Promise<AircraftView> {
@@ -102,7 +110,7 @@ export class AircraftService {
 
   private async findOrFail(manager: EntityManager, id: number): Promise<Aircraft> {
     const aircraft = await manager.findOne(Aircraft, { where: { id }, lock: { mode: 'pessimistic_write' } });
-    if (!aircraft) throw new AircraftException('aircraft_not_found', `There is no aircraft with id ${id}.`);
+    if (!aircraft) throw noAircraft(id);
     return aircraft;
   }
 

@@ -1,10 +1,10 @@
-import type { LineupSnapshot } from '@catline/contracts';
+import type { LineupSnapshot, SlotView } from '@catline/contracts';
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { DataSource } from 'typeorm';
 import { buildSnapshot } from './lineup-snapshot.builder.js';
 import { LineupStateLoader, type LineupState } from './lineup-state.js';
-import { asLaunchDataRefusal } from './lineup.exception.js';
+import { asLaunchDataRefusal, LineupException } from './lineup.exception.js';
 
 @Injectable()
 export class LineupSnapshotService {
@@ -25,5 +25,12 @@ export class LineupSnapshotService {
     } catch (error) {
       throw asLaunchDataRefusal(error);
     }
+  }
+
+  /** One slot as the lineup shows it: its projected figures depend on the whole cycle. */
+  async slot(cycleId: number, slotId: number): Promise<SlotView> {
+    const slot = (await this.snapshot(cycleId)).slots.find((candidate) => candidate.id === slotId);
+    if (!slot) throw new LineupException('not_found', `Cycle ${cycleId} has no slot ${slotId}.`);
+    return slot;
   }
 }

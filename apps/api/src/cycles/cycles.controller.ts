@@ -1,6 +1,7 @@
 import type { CycleView, LineupCommandResult, Page } from '@catline/contracts';
 import { Body, Controller, Get, HttpCode, HttpStatus, Param, ParseIntPipe, Patch, Post, Query } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
+import type { Request } from 'express';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { Roles } from '../common/decorators/roles.decorator.js';
@@ -17,6 +18,14 @@ import { BasisVersionDto } from './dto/basis-version.dto.js';
 import { CreateCycleDto } from './dto/create-cycle.dto.js';
 import { StartCycleDto } from './dto/start-cycle.dto.js';
 import { UpdateCycleConditionsDto } from './dto/update-cycle-conditions.dto.js';
+
+/** The address of the slot an add-slot command created: the slot of the aircraft it names. */
+function addedSlotLocation(result: LineupCommandResult, request: Request): string {
+  const { aircraftId } = request.body as AddSlotDto;
+  const slot = result.change.patch.slots?.find((added) => added.aircraftId === aircraftId);
+  if (!slot) throw new Error(`The change of an added slot holds no slot of aircraft ${aircraftId}`);
+  return `/api/cycles/${result.change.cycleId}/lineup/slots/${slot.id}`;
+}
 
 @ApiTags('cycles')
 @Controller('cycles')
@@ -116,7 +125,7 @@ export class CyclesController {
 
   @ApiDoc('Add an aircraft to a cycle', {
     response: LineupCommandResultDto,
-    description: 'The aircraft joins the deck pool of the cycle.',
+    description: 'The aircraft joins the deck pool of the cycle; `Location` names its slot.',
     refuses: {
       400: ['invalid_pilot'],
       404: ['not_found'],
@@ -131,7 +140,7 @@ export class CyclesController {
   })
   @Roles('air_operations')
   @Post(':cycleId/slots')
-  @HttpCode(HttpStatus.OK)
+  @Created(addedSlotLocation)
   addSlot(
     @Param('cycleId', ParseIntPipe) cycleId: number,
     @Body() body: AddSlotDto,

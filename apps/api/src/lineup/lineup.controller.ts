@@ -5,6 +5,7 @@ import {
   type LineupCommandResult,
   type LineupSnapshot,
   type Page,
+  type SlotView,
   type SuggestedLineup,
 } from '@catline/contracts';
 import { Body, Controller, Get, HttpCode, HttpStatus, Param, ParseIntPipe, Post, Query } from '@nestjs/common';
@@ -35,6 +36,7 @@ import {
   LineupChangePageDto,
   LineupCommandResultDto,
   LineupSnapshotDto,
+  SlotViewDto,
   SuggestedLineupDto,
 } from '../common/openapi/views/lineup.view.js';
 import { UndoStepDto } from './dto/undo-step.dto.js';
@@ -59,6 +61,19 @@ export class LineupController {
   @Get()
   snapshot(@Param('cycleId', ParseIntPipe) cycleId: number): Promise<LineupSnapshot> {
     return this.snapshots.snapshot(cycleId);
+  }
+
+  @ApiDoc('Read one slot of a cycle', {
+    response: SlotViewDto,
+    description: 'The slot as the lineup shows it, with its place and projected figures.',
+    refuses: { 404: ['not_found'], 422: ['launch_data_invalid'] },
+  })
+  @Get('slots/:slotId')
+  slot(
+    @Param('cycleId', ParseIntPipe) cycleId: number,
+    @Param('slotId', ParseIntPipe) slotId: number,
+  ): Promise<SlotView> {
+    return this.snapshots.slot(cycleId, slotId);
   }
 
   @ApiDoc('Read the changes after a version', {

@@ -20,6 +20,12 @@ export class SquadronsController {
     return this.squadrons.list();
   }
 
+  @ApiDoc('Read one squadron', { response: SquadronViewDto, refuses: { 404: ['squadron_not_found'] } })
+  @Get(':id')
+  get(@Param('id', ParseIntPipe) id: number): Promise<SquadronView> {
+    return this.squadrons.get(id);
+  }
+
   @ApiDoc('Add a squadron', { response: SquadronViewDto, refuses: { 409: ['code_taken'] } })
   @Roles('admin')
   @Post()

@@ -11,6 +11,8 @@ import { Squadron } from '../database/entities/squadron.entity.js';
 import { toSquadronView } from './squadron.mapper.js';
 import { SquadronsException } from './squadrons.exception.js';
 
+const noSquadron = (id: number) => new SquadronsException('squadron_not_found', `There is no squadron with id ${id}.`);
+
 @Injectable()
 export class SquadronsService {
   private readonly logger = new Logger(SquadronsService.name);
@@ -20,6 +22,12 @@ export class SquadronsService {
   async list(): Promise<SquadronView[]> {
     const squadrons = await this.dataSource.manager.find(Squadron, { order: { code: 'ASC' } });
     return squadrons.map(toSquadronView);
+  }
+
+  async get(id: number): Promise<SquadronView> {
+    const squadron = await this.dataSource.manager.findOneBy(Squadron, { id });
+    if (!squadron) throw noSquadron(id);
+    return toSquadronView(squadron);
   }
 
   async create(body: CreateSquadronDto): Promise<SquadronView> {
@@ -53,7 +61,7 @@ export class SquadronsService {
 
   private async findOrFail(manager: EntityManager, id: number): Promise<Squadron> {
     const squadron = await manager.findOne(Squadron, { where: { id }, lock: { mode: 'pessimistic_write' } });
-    if (!squadron) throw new SquadronsException('squadron_not_found', `There is no squadron with id ${id}.`);
+    if (!squadron) throw noSquadron(id);
     return squadron;
   }
 

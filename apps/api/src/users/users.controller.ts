@@ -47,6 +47,13 @@ export class UsersController {
     return this.users.listPilots(query);
   }
 
+  @ApiDoc('Read one person', { response: UserViewDto, refuses: { 404: ['user_not_found'] } })
+  @Roles('admin')
+  @Get(':id')
+  get(@Param('id', ParseIntPipe) id: number): Promise<UserView> {
+    return this.users.get(id);
+  }
+
   @ApiDoc('Add a person', {
     response: UserViewDto,
     description: 'Without a password the person is mailed an invitation link.',

@@ -20,6 +20,8 @@ import { User } from '../database/entities/user.entity.js';
 import { toUserView } from './user.mapper.js';
 import { UsersException } from './users.exception.js';
 
+const noPerson = (id: number) => new UsersException('user_not_found', `There is no person with id ${id}.`);
+
 @Injectable()
 export class UsersService {
   private readonly logger = new Logger(UsersService.name);
@@ -49,6 +51,12 @@ export class UsersService {
       skip: window.offset,
     });
     return pageOf(window, pilots.map(toUserView), total);
+  }
+
+  async get(id: number): Promise<UserView> {
+    const user = await this.dataSource.manager.findOneBy(User, { id });
+    if (!user) throw noPerson(id);
+    return toUserView(user);
   }
 
   async create(body: CreateUserDto): Promise<UserView> {
@@ -175,7 +183,7 @@ export class UsersService {
 
   private async findOrFail(manager: EntityManager, id: number): Promise<User> {
     const user = await manager.findOne(User, { where: { id }, lock: { mode: 'pessimistic_write' } });
-    if (!user) throw new UsersException('user_not_found', `There is no person with id ${id}.`);
+    if (!user) throw noPerson(id);
     return user;
   }
 

@@ -9,6 +9,7 @@ async function targetId(context: MatrixContext): Promise<number> {
 
 export const aircraftRoutes: MatrixRoute[] = [
   { method: 'GET', path: '/api/aircraft', allowed: ROLES },
+  { method: 'GET', path: '/api/aircraft/{id}', allowed: ROLES, example: () => ({ params: { id: 1 } }) },
   {
     method: 'POST',
     path: '/api/aircraft',

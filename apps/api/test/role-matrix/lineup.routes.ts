@@ -44,6 +44,15 @@ export const lineupRoutes: MatrixRoute[] = [
   },
   {
     method: 'GET',
+    path: '/api/cycles/{cycleId}/lineup/slots/{slotId}',
+    allowed: ROLES,
+    example: async (context) => {
+      const [slot] = (await lineupDriver(context).snapshot(DEMO_CYCLE)).slots;
+      return { params: { cycleId: DEMO_CYCLE, slotId: slot.id } };
+    },
+  },
+  {
+    method: 'GET',
     path: '/api/cycles/{cycleId}/lineup/changes',
     allowed: ROLES,
     example: () => ({ params: { cycleId: DEMO_CYCLE }, query: { since: 0 } }),

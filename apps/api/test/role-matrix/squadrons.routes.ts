@@ -9,6 +9,7 @@ async function targetId(context: MatrixContext): Promise<number> {
 
 export const squadronsRoutes: MatrixRoute[] = [
   { method: 'GET', path: '/api/squadrons', allowed: ROLES },
+  { method: 'GET', path: '/api/squadrons/{id}', allowed: ROLES, example: () => ({ params: { id: 1 } }) },
   {
     method: 'POST',
     path: '/api/squadrons',

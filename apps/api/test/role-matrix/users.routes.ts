@@ -14,6 +14,7 @@ async function targetId(context: MatrixContext): Promise<number> {
 export const usersRoutes: MatrixRoute[] = [
   { method: 'GET', path: '/api/users', allowed: ['admin'] },
   { method: 'GET', path: '/api/users/pilots', allowed: ['admin', 'air_operations', 'handler'] },
+  { method: 'GET', path: '/api/users/{id}', allowed: ['admin'], example: () => ({ params: { id: 1 } }) },
   {
     method: 'POST',
     path: '/api/users',

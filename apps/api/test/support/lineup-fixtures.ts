@@ -142,18 +142,24 @@ export class LineupDriver {
   ): Promise<SlotView> {
     const { pilotEmail, ...rest } = fields;
     const pilotId = pilotEmail ? await this.pilotId(pilotEmail) : null;
-    const result = await this.ok<LineupCommandResult>(AIR_OPS, 'post', `/api/cycles/${cycleId}/slots`, {
-      aircraftId: await this.aircraftId(side),
-      pilotId,
-      mission: 'Strike training',
-      fuelLb: 11_000,
-      stores: '',
-      grossWeightLb: 44_000,
-      tanker: false,
-      earlyWarning: false,
-      spare: false,
-      ...rest,
-    });
+    const result = await this.ok<LineupCommandResult>(
+      AIR_OPS,
+      'post',
+      `/api/cycles/${cycleId}/slots`,
+      {
+        aircraftId: await this.aircraftId(side),
+        pilotId,
+        mission: 'Strike training',
+        fuelLb: 11_000,
+        stores: '',
+        grossWeightLb: 44_000,
+        tanker: false,
+        earlyWarning: false,
+        spare: false,
+        ...rest,
+      },
+      201,
+    );
     return result.change.patch.slots!.find((slot) => slot.sideNumber === side)!;
   }
 

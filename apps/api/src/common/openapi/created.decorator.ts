@@ -10,12 +10,12 @@ import {
   UseInterceptors,
 } from '@nestjs/common';
 import { Reflector } from '@nestjs/core';
-import type { Response } from 'express';
+import type { Request, Response } from 'express';
 import { map, type Observable } from 'rxjs';
 
 export const CREATED_LOCATION = 'catline:createdLocation';
 
-type LocationOf = (body: never) => string;
+type LocationOf = (body: never, request: Request) => string;
 
 @Injectable()
 export class LocationInterceptor implements NestInterceptor {
@@ -23,10 +23,11 @@ export class LocationInterceptor implements NestInterceptor {
 
   intercept(context: ExecutionContext, next: CallHandler): Observable<unknown> {
     const locationOf = this.reflector.get<LocationOf>(CREATED_LOCATION, context.getHandler());
-    const response = context.switchToHttp().getResponse<Response>();
+    const http = context.switchToHttp();
+    const response = http.getResponse<Response>();
     return next.handle().pipe(
       map((body: unknown) => {
-        response.location(locationOf(body as never));
+        response.location(locationOf(body as never, http.getRequest<Request>()));
         return body;
       }),
     );
@@ -35,9 +36,10 @@ export class LocationInterceptor implements NestInterceptor {
 
 /**
  * A route that creates a resource: answers 201 with `Location`, the address of what it created,
- * built from the body it answers (e.g. `(cycle: CycleView) => `/api/cycles/${cycle.id}``).
+ * built from the body it answers (e.g. `(cycle: CycleView) => `/api/cycles/${cycle.id}``) and, where
+ * the body alone does not say which part is new, the request. A GET of that address answers it.
  */
-export const Created = <T>(locationOf: (body: T) => string) =>
+export const Created = <T>(locationOf: (body: T, request: Request) => string) =>
   applyDecorators(
     HttpCode(HttpStatus.CREATED),
     SetMetadata(CREATED_LOCATION, locationOf),

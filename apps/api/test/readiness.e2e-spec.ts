@@ -1,5 +1,7 @@
 import type { INestApplication } from '@nestjs/common';
+import type { AircraftTypeView } from '@catline/contracts';
 import {
+  ADMIN,
   AIR_BOSS,
   AIR_OPS,
   HANDLER,
@@ -235,6 +237,36 @@ describe('readiness steps and launch', () => {
       expect((await deck.slot(cycle.id, slot.id)).status).toBe('pilot_ready');
     },
   );
+
+  it("refuses a launch whose end speed is over the type's maximum (overstress), from the type's own field", async () => {
+    const cycle = await deck.createCycle();
+    const slot = await deck.addSlot(cycle.id, 'C21', { pilotEmail: pilot(9) });
+    await deck.place(cycle.id, slot.id, 1);
+    await deck.start(cycle.id);
+    const ready = await deck.readyToLaunch(cycle.id, slot.id, pilot(9));
+    expect(ready.gates).toEqual([]);
+    const types = await deck.ok<AircraftTypeView[]>(ADMIN, 'get', '/api/aircraft-types');
+    const type = types.find((candidate) => candidate.designation === 'WKD-41')!;
+    const endSpeed = ready.figures!.endSpeedKt;
+    // One knot under the shot's own end speed: the demo's 190 kt becomes a limit this shot passes.
+    const limit = Math.floor(endSpeed) - 1;
+    await deck.ok(ADMIN, 'patch', `/api/aircraft-types/${type.id}`, { maxEndSpeedKt: limit });
+    try {
+      const over = await deck.slot(cycle.id, slot.id);
+      expect(over.gates).toEqual([expect.objectContaining({ gate: 'end_speed_over_max', soft: false })]);
+      const refused = await deck.launch(cycle.id, over, launchKey());
+      expect(refused.status).toBe(409);
+      expect(refused.body).toMatchObject({
+        code: 'end_speed_over_max',
+        message: `End speed ${endSpeed.toFixed(1)} kt is over the WKD-41 maximum of ${limit.toFixed(1)} kt.`,
+      });
+      const cleared = await deck.call(ADMIN, 'patch', `/api/aircraft-types/${type.id}`, { maxEndSpeedKt: null });
+      expect(cleared.status).toBe(400);
+    } finally {
+      await deck.ok(ADMIN, 'patch', `/api/aircraft-types/${type.id}`, { maxEndSpeedKt: type.maxEndSpeedKt });
+    }
+    expect((await deck.slot(cycle.id, slot.id)).gates).toEqual([]);
+  });
 
   it('takes a launch field for no-go no more: the request refuses an override reason', async () => {
     const { cycle, first } = await executingCycle(pilot(3));

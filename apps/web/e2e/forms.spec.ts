@@ -120,6 +120,7 @@ test('the admin is told which figures of a new aircraft type are wrong, then add
   await form.getByLabel('Crosswind limit (kt)').fill('101');
   await form.getByLabel('Thrust (lbf)').fill('22000');
   await form.getByLabel('Required excess (kt)').fill('10');
+  await form.getByLabel('Max end speed (kt)').fill('175');
   await form.getByLabel('Trim bands').fill('44000:15');
   await form.getByLabel('Launch table').fill('34000:124, 30000:120');
   await form.getByRole('button', { name: 'Add type' }).click();

@@ -90,6 +90,7 @@ test('the admin replaces a launch table from a CSV file once its problems are pu
       thrustLbf: 20_000,
       requiredExcessKt: 15,
       afterburnerFromLb: null,
+      maxEndSpeedKt: 170,
       trimBands: [{ upToLb: null, trimDeg: 12 }],
       launchTable: [
         { grossWeightLb: 34_000, minLaunchAirspeedKt: 124 },

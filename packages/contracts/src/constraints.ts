@@ -63,6 +63,7 @@ export const CONDITION_RANGES = {
 export const AIRCRAFT_TYPE_RANGES = {
   maxGrossWeightLb: { min: 1, max: 1_000_000 },
   operatingWeightLb: { min: 1, max: 1_000_000 },
+  maxEndSpeedKt: { min: 1, max: 400 },
   crosswindLimitKt: { min: 0, max: 100 },
   thrustLbf: { min: 0, max: 1_000_000 },
   requiredExcessKt: { min: 0, max: 100 },

@@ -130,6 +130,11 @@ export interface AircraftTypeView {
   thrustLbf: number;
   requiredExcessKt: number;
   afterburnerFromLb: number | null;
+  /**
+   * The highest end speed the airframe takes (overstress), knots; a shot that gives more is refused. Null
+   * only for a type entered before the field existed: its launches are refused until the admin enters it.
+   */
+  maxEndSpeedKt: number | null;
   trimBands: TrimBand[];
   launchTable: LaunchTableRow[];
   /** What an aircraft of the type can carry, ordered by name. */
@@ -184,6 +189,8 @@ export interface CreateAircraftTypeRequest {
   requiredExcessKt: number;
   /** Null or left out when the type never needs afterburner. */
   afterburnerFromLb?: number | null;
+  /** The highest end speed the airframe takes (overstress), knots. */
+  maxEndSpeedKt: number;
   /** Increasing upToLb; the last band has upToLb null. */
   trimBands: TrimBand[];
   /** Ordered by strictly increasing gross weight, two rows at least. */

@@ -12,6 +12,7 @@ export function toAircraftTypeView(type: AircraftType): AircraftTypeView {
     thrustLbf: type.thrustLbf,
     requiredExcessKt: type.requiredExcessKt,
     afterburnerFromLb: type.afterburnerFromLb,
+    maxEndSpeedKt: type.maxEndSpeedKt,
     trimBands: type.trimBands,
     launchTable: type.launchTable,
     storesCatalogue: type.storesCatalogue,

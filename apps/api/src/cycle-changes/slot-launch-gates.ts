@@ -47,8 +47,12 @@ function sentence(gate: LaunchGate, state: LineupState, slot: Slot, figures: Lau
       return `Figures changed (${REVERIFY_WORDS[slot.reverifyCause ?? 'wind']}) — re-verify the setting for ${side}.`;
     case 'end_speed_below_minimum':
       return `Excess wind over deck ${kt(figures.excessWindOverDeckKt ?? 0)}: end speed and headwind are below the minimum launch airspeed.`;
-    case 'end_speed_over_max':
-      return `End speed ${kt(figures.endSpeedKt)} is over the ${slot.aircraft.type.designation} maximum.`;
+    case 'end_speed_over_max': {
+      const { designation, maxEndSpeedKt } = slot.aircraft.type;
+      return maxEndSpeedKt === null
+        ? `${designation} has no maximum end speed entered; the admin enters it on the Launch data screen.`
+        : `End speed ${kt(figures.endSpeedKt)} is over the ${designation} maximum of ${kt(maxEndSpeedKt)}.`;
+    }
     case 'excess_below_recommended':
       return `Excess wind over deck ${kt(figures.excessWindOverDeckKt ?? 0)} is below the recommended ${kt(figures.recommendedExcessKt ?? 0)}.`;
     case 'wind_reading_stale':
@@ -99,7 +103,7 @@ export function slotLaunchGates(state: LineupState, slot: Slot, figures: LaunchF
       weightAgreed: weightAgreed(slot),
       reverifyRequired: slot.reverifyCause !== null,
       windReadingStale: now !== null && windReadingStale(state, now),
-      maxEndSpeed: null,
+      maxEndSpeed: slot.aircraft.type.maxEndSpeedKt,
       waived: (slot.waivers ?? []).map((waiver) => waiver.gate),
     },
   );

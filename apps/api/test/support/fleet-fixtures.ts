@@ -38,6 +38,7 @@ export function aircraftTypeBody(designation = unique('T-', 12)) {
     thrustLbf: 20_000,
     requiredExcessKt: 10,
     afterburnerFromLb: 36_000,
+    maxEndSpeedKt: 170,
     trimBands: [
       { upToLb: 30_000, trimDeg: 10 },
       { upToLb: null, trimDeg: 12 },

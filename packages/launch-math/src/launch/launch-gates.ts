@@ -51,7 +51,7 @@ export interface LaunchGateFacts {
   /** Figures changed after the setting was read back and nobody has read the new one back. */
   readonly reverifyRequired: boolean;
   readonly windReadingStale: boolean;
-  /** The type's maximum end speed, knots; null when the type's data gives none. */
+  /** The type's maximum end speed (overstress), knots; null when not entered: no shot is known safe. */
   readonly maxEndSpeed: number | null;
   /** Soft gates the air boss has waived for this aircraft. */
   readonly waived: readonly SoftLaunchGate[];
@@ -106,7 +106,7 @@ function closedByFigures(figures: LaunchGateFigures, maxEndSpeed: number | null)
     }
   }
   if (figures.excessWindOverDeck !== null && figures.excessWindOverDeck < 0) closed.add('end_speed_below_minimum');
-  if (maxEndSpeed !== null && figures.endSpeed > maxEndSpeed) closed.add('end_speed_over_max');
+  if (maxEndSpeed === null || figures.endSpeed > maxEndSpeed) closed.add('end_speed_over_max');
   return closed;
 }
 

@@ -82,6 +82,12 @@ export class CreateAircraftTypeDto implements CreateAircraftTypeRequest {
   @Max(RANGES.afterburnerFromLb.max)
   afterburnerFromLb?: number | null;
 
+  @ApiProperty({ description: 'The highest end speed the airframe takes (overstress), knots.' })
+  @IsNumber({}, { message: 'maxEndSpeedKt must be a number of knots' })
+  @Min(RANGES.maxEndSpeedKt.min)
+  @Max(RANGES.maxEndSpeedKt.max)
+  maxEndSpeedKt: number;
+
   @ApiProperty({ type: [TrimBandDto], description: 'Increasing upToLb; the last band has upToLb null.' })
   @IsArray()
   @ArrayMinSize(1, { message: 'trimBands needs at least one band' })

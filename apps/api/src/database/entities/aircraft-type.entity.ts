@@ -33,6 +33,10 @@ export class AircraftType {
   @Column({ name: 'afterburner_from_lb', type: 'int', nullable: true })
   afterburnerFromLb: number | null;
 
+  /** Overstress limit, knots; null only for a type entered before the field existed (no shot is allowed). */
+  @Column({ name: 'max_end_speed_kt', type: 'double', nullable: true })
+  maxEndSpeedKt: number | null;
+
   @Column({ name: 'trim_bands', type: 'json' })
   trimBands: TrimBand[];
 

@@ -13,6 +13,7 @@ import { CycleRespot1796217149940 } from './1796217149940-CycleRespot.js';
 import { AircraftTypeStoresCatalogue1796225154045 } from './1796225154045-AircraftTypeStoresCatalogue.js';
 import { LandingAreaInUseDerived1796225353747 } from './1796225353747-LandingAreaInUseDerived.js';
 import { SlotDownCatapult1796228372875 } from './1796228372875-SlotDownCatapult.js';
+import { AircraftTypeMaxEndSpeed1796229016417 } from './1796229016417-AircraftTypeMaxEndSpeed.js';
 
 /** Every migration in the order it runs; add a new one at the end (see DEVELOPERS.md). */
 export const migrations = [
@@ -31,4 +32,5 @@ export const migrations = [
   AircraftTypeStoresCatalogue1796225154045,
   LandingAreaInUseDerived1796225353747,
   SlotDownCatapult1796228372875,
+  AircraftTypeMaxEndSpeed1796229016417,
 ];

@@ -143,6 +143,7 @@ export const demoAircraftTypes = [
     thrustLbf: 26_000,
     requiredExcessKt: 12,
     afterburnerFromLb: 46_000,
+    maxEndSpeedKt: 190,
     trimBands: strikeTrim,
     launchTable: [
       { grossWeightLb: 34_000, minLaunchAirspeedKt: 124 },
@@ -161,6 +162,7 @@ export const demoAircraftTypes = [
     thrustLbf: 17_500,
     requiredExcessKt: 10,
     afterburnerFromLb: 28_000,
+    maxEndSpeedKt: 165,
     trimBands: [
       { upToLb: 26_000, trimDeg: 10 },
       { upToLb: null, trimDeg: 12 },
@@ -185,6 +187,7 @@ export const demoAircraftTypes = [
     thrustLbf: 11_000,
     requiredExcessKt: 10,
     afterburnerFromLb: null,
+    maxEndSpeedKt: 150,
     trimBands: [{ upToLb: null, trimDeg: 6 }],
     launchTable: [
       { grossWeightLb: 44_000, minLaunchAirspeedKt: 104 },

@@ -9,6 +9,7 @@ const typed = {
   crosswindLimitKt: '15',
   thrustLbf: '0',
   requiredExcessKt: '10',
+  maxEndSpeedKt: '175',
   trimBands: '44000:15, *:18',
   launchTable: '34000:124, 46000:143',
 };
@@ -26,6 +27,7 @@ describe('a new aircraft type', () => {
       thrustLbf: 0,
       requiredExcessKt: 10,
       afterburnerFromLb: null,
+      maxEndSpeedKt: 175,
       trimBands: [
         { upToLb: 44_000, trimDeg: 15 },
         { upToLb: null, trimDeg: 18 },
@@ -58,8 +60,9 @@ describe('a new aircraft type', () => {
         crosswindLimitKt: '101',
         requiredExcessKt: '-1',
         afterburnerFromLb: '1000001',
+        maxEndSpeedKt: '401',
       }),
-    ).toEqual(['maxGrossWeightLb', 'crosswindLimitKt', 'requiredExcessKt', 'afterburnerFromLb']);
+    ).toEqual(['maxGrossWeightLb', 'crosswindLimitKt', 'requiredExcessKt', 'afterburnerFromLb', 'maxEndSpeedKt']);
   });
 
   it('says what is wrong with the bands and the table', () => {

@@ -53,6 +53,10 @@ export const aircraftTypeSchema = z.object({
   afterburnerFromLb: optionalTypedNumber(RANGES.afterburnerFromLb, 'Leave empty, or enter a weight in whole pounds.', {
     whole: true,
   }),
+  maxEndSpeedKt: typedNumber(
+    RANGES.maxEndSpeedKt,
+    `Enter the maximum end speed (overstress) in knots, ${span(RANGES.maxEndSpeedKt)}.`,
+  ),
   trimBands: parsedText<TrimBand[]>((text) => {
     const bands = parseTrimBands(text);
     return bands ? { value: bands } : { problem: 'Write bands as 44000:15, 48000:17, *:18 — the last one with *.' };
@@ -72,6 +76,7 @@ export const blankAircraftType: z.input<typeof aircraftTypeSchema> = {
   thrustLbf: '',
   requiredExcessKt: '',
   afterburnerFromLb: '',
+  maxEndSpeedKt: '',
   trimBands: '',
   launchTable: '',
 };

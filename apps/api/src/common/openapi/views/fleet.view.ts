@@ -267,6 +267,14 @@ export class AircraftTypeViewDto implements AircraftTypeView {
   @IntProperty({ nullable: true, description: 'Pounds; null when the type never needs afterburner.' })
   afterburnerFromLb: number | null;
 
+  @ApiProperty({
+    type: 'number',
+    nullable: true,
+    description:
+      'Overstress limit, knots; a shot giving more is refused. Null only for a type entered before the field existed: its shots are refused until entered.',
+  })
+  maxEndSpeedKt: number | null;
+
   @ApiProperty({ type: [TrimBandDto] })
   trimBands: TrimBand[];
 

@@ -58,6 +58,7 @@ export function AircraftTypeForm({ onCreated }: { onCreated: (id: number) => voi
           {field('thrustLbf', 'Thrust (lbf)')}
           {field('requiredExcessKt', 'Required excess (kt)')}
           {field('afterburnerFromLb', 'Afterburner from (lb)', 'Empty when never required.')}
+          {field('maxEndSpeedKt', 'Max end speed (kt)', 'Overstress: a shot giving more is refused.')}
         </SimpleGrid>
         <SimpleGrid columns={{ base: 1, md: 2 }} gap="3">
           {field('trimBands', 'Trim bands', 'e.g. 44000:15, 48000:17, *:18', false)}

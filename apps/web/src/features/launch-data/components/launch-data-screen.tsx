@@ -42,6 +42,11 @@ function TypeDetail({ type, editable }: { type: AircraftTypeView; editable: bool
         <FigureStat label="Thrust" value={`${formatWhole(type.thrustLbf)} lbf`} size="md" />
         <FigureStat label="Required excess" value={`${type.requiredExcessKt} kt`} size="md" />
         <FigureStat
+          label="Max end speed"
+          value={type.maxEndSpeedKt === null ? 'Not entered: no launch' : `${type.maxEndSpeedKt} kt`}
+          size="md"
+        />
+        <FigureStat
           label="Afterburner from"
           value={type.afterburnerFromLb === null ? 'Never' : formatPounds(type.afterburnerFromLb)}
           size="md"

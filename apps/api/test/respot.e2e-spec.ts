@@ -132,6 +132,16 @@ describe('the respot: targets, the ordered tows, the ticks and the next cycle', 
     await deck.readyToLaunch(cycle.id, flyer.id, pilot(5));
     const launched = await deck.launch(cycle.id, await deck.slot(cycle.id, flyer.id), launchKey(), catapultOfficer(1));
     expect(launched.status).toBe(200);
+    // The last launch closed the cycle: it refuses every change but the respot's.
+    const closed = await deck.snapshot(cycle.id);
+    expect(closed.cycle.state).toBe('closed');
+    const fouled = await deck.call(HANDLER, 'post', `/api/cycles/${cycle.id}/deck/landing-area`, {
+      state: 'fouled',
+      reason: 'Debris on deck',
+      basisVersion: closed.version,
+    });
+    expect(fouled.status).toBe(409);
+    expect(fouled.body.code).toBe('cycle_closed');
     const built = await build(cycle.id, [{ slotId: flyer.id, to: spot('bow-3') }]);
     expect(built.status).toBe(200);
     // Airborne: no tow now; it lands on bow-3, and the ship's next cycle finds it there.

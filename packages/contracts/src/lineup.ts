@@ -315,6 +315,17 @@ export const CHANGE_KINDS = [
 ] as const;
 export type ChangeKind = (typeof CHANGE_KINDS)[number];
 
+/**
+ * The only changes a closed cycle takes: building the respot and ticking off its tows. A cycle closes
+ * itself at its last launch, and the respot is for the recovery after that launch, so it always lands
+ * on a closed cycle; every other change to a closed cycle is refused (cycle_closed).
+ */
+export const CLOSED_CYCLE_CHANGE_KINDS = ['respot_built', 'respot_tow_done'] as const satisfies readonly ChangeKind[];
+
+/** Whether a closed cycle takes a change of this kind (see CLOSED_CYCLE_CHANGE_KINDS). */
+export const closedCycleTakes = (kind: ChangeKind): boolean =>
+  (CLOSED_CYCLE_CHANGE_KINDS as readonly ChangeKind[]).includes(kind);
+
 /** What changed: replace these parts of the snapshot, by id. */
 export interface LineupPatch {
   cycle?: CycleView;

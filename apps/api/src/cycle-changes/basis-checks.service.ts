@@ -1,4 +1,10 @@
-import type { CatapultStatus, LineupChange, LineupPatch } from '@catline/contracts';
+import {
+  closedCycleTakes,
+  type CatapultStatus,
+  type ChangeKind,
+  type LineupChange,
+  type LineupPatch,
+} from '@catline/contracts';
 import { Injectable } from '@nestjs/common';
 import type { EntityManager } from 'typeorm';
 import type { Catapult } from '../database/entities/catapult.entity.js';
@@ -35,8 +41,9 @@ export class BasisChecks {
     return catapult;
   }
 
-  requireOpen(state: LineupState): void {
-    if (state.cycle.state === 'closed') {
+  /** Refuses a change to a closed cycle, unless `kind` is one a closed cycle takes (the respot's). */
+  requireOpen(state: LineupState, kind?: ChangeKind): void {
+    if (state.cycle.state === 'closed' && !(kind && closedCycleTakes(kind))) {
       throw new LineupException('cycle_closed', `Cycle ${state.cycle.number} is closed; its lineup no longer changes.`);
     }
   }

@@ -26,7 +26,7 @@ const sides = (slots: readonly Slot[]) => slots.map((slot) => slot.aircraft.side
  * The respot for the coming recovery: the handler gives target positions after the last launch, Catline
  * orders the tows (launch-math's respotTows), and the deck crew's tows are ticked off one at a time; each
  * a change through the pipeline. The recovered aircraft start the ship's next cycle on their targets.
- * A cycle closes with its last launch, so the respot is the one change a closed cycle still takes.
+ * A cycle closes with its last launch, so the respot lands on a closed cycle (CLOSED_CYCLE_CHANGE_KINDS).
  */
 @Injectable()
 export class RespotService {
@@ -37,6 +37,7 @@ export class RespotService {
 
   build(cycleId: number, actor: ChangeActor, request: BuildRespotDto): Promise<LineupCommandResult> {
     return this.changes.apply(cycleId, actor, 'respot_built', async (manager, state) => {
+      this.basis.requireOpen(state, 'respot_built');
       await this.basis.cycleAsSeen(manager, state, request.basisVersion);
       const pending = state.slots.filter((slot) => slot.catapultId !== null && !done(slot));
       if (pending.length > 0) {
@@ -114,6 +115,7 @@ export class RespotService {
 
   towDone(cycleId: number, actor: ChangeActor, step: number, request: RespotTowDoneDto): Promise<LineupCommandResult> {
     return this.changes.apply(cycleId, actor, 'respot_tow_done', async (manager, state) => {
+      this.basis.requireOpen(state, 'respot_tow_done');
       await this.basis.cycleAsSeen(manager, state, request.basisVersion);
       const respot = state.cycle.respot;
       const tow = respot?.tows[step - 1];

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { Box, Button, Flex, Heading, Stack, Table, Text } from '@chakra-ui/react';
-import type { LineupSnapshot, RespotTarget } from '@catline/contracts';
+import { closedCycleTakes, type LineupSnapshot, type RespotTarget } from '@catline/contracts';
 import { NoticeBanner, refusalNotice, useNotice } from '../../../components/refusal-notice.js';
 import { SelectInput } from '../../../components/select-field.js';
 import { formatClock } from '../../../lib/format.js';
@@ -29,7 +29,7 @@ export function RespotPanel({
   panels: readonly DeckPanel[];
   live: boolean;
 }) {
-  const handler = useHasRole('handler') && snapshot.cycle.state !== 'closed';
+  const handler = useHasRole('handler') && (snapshot.cycle.state !== 'closed' || closedCycleTakes('respot_built'));
   const cycleId = snapshot.cycle.id;
   const [chosen, setChosen] = useState<Record<number, string>>({});
   const build = useBuildRespot(cycleId);

@@ -55,8 +55,8 @@ function stopAll() {
 process.on('SIGINT', () => proxy.close());
 process.on('SIGTERM', stopAll);
 void Promise.all(targets.map(answering)).then(
-  () => {
-    printBanner(env.PORT);
+  async () => {
+    await printBanner(env.PORT);
     console.log(
       `Two API processes (${API_PORTS.join(', ')}) behind the proxy on ${env.PORT}; Redis on 127.0.0.1:${REDIS_PORT}.`,
     );

@@ -23,8 +23,8 @@ process.on('SIGTERM', () => {
   mail.child?.kill('SIGTERM');
 });
 child.once('spawn', () =>
-  setTimeout(() => {
-    printBanner(env.PORT);
+  setTimeout(async () => {
+    await printBanner(env.PORT);
     if (mail.inbox)
       console.log(`Mail the app sends (invitations, password links, cycle summaries) is caught at ${mail.inbox}\n`);
   }, 1500),

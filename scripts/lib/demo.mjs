@@ -1,5 +1,4 @@
 /** The demo sign-ins that the seed creates (apps/api/src/database/seeds). */
-export const DEMO_PASSWORD = 'catline-demo';
 export const DEMO_SIGN_INS = [
   ['admin', 'admin@catline.example'],
   ['air operations', 'airops@catline.example'],
@@ -11,7 +10,9 @@ export const DEMO_SIGN_INS = [
   ['observer', 'observer@catline.example'],
 ];
 
-export function printBanner(port) {
+/** Called once the build is done: the demo password is read from the built contracts package. */
+export async function printBanner(port) {
+  const { DEMO_PASSWORD } = await import('../../packages/contracts/dist/index.js');
   const lines = [
     `Catline is running at http://127.0.0.1:${port}  (API under /api, docs at /api/docs)`,
     `Demo sign-ins, all with the password "${DEMO_PASSWORD}":`,

@@ -1,3 +1,4 @@
+import { DEMO_PASSWORD } from '@catline/contracts';
 import type { INestApplication } from '@nestjs/common';
 import request from 'supertest';
 
@@ -27,7 +28,7 @@ describe('login rate limit', () => {
   it('refuses the sixth attempt in a minute for one e-mail with 429, even with the right password', async () => {
     for (let i = 0; i < 5; i += 1) expect((await attempt('handler@catline.example')).status).toBe(401);
 
-    const refused = await attempt('handler@catline.example', 'catline-demo');
+    const refused = await attempt('handler@catline.example', DEMO_PASSWORD);
     expect(refused.status).toBe(429);
     expect(refused.body.code).toBe('too_many_attempts');
     expect(refused.body.message).toMatch(
@@ -37,6 +38,6 @@ describe('login rate limit', () => {
   });
 
   it('counts another e-mail on its own', async () => {
-    expect((await attempt('airops@catline.example', 'catline-demo')).status).toBe(200);
+    expect((await attempt('airops@catline.example', DEMO_PASSWORD)).status).toBe(200);
   });
 });

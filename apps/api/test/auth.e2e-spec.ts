@@ -1,3 +1,4 @@
+import { DEMO_PASSWORD } from '@catline/contracts';
 import type { INestApplication } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { JwtService } from '@nestjs/jwt';
@@ -35,7 +36,7 @@ describe('auth', () => {
   describe('login', () => {
     it('returns a 15-minute access token, the person and an httpOnly refresh cookie for the auth routes', async () => {
       const before = Date.now();
-      const response = await login('cat2@catline.example', 'catline-demo');
+      const response = await login('cat2@catline.example', DEMO_PASSWORD);
 
       expect(response.status).toBe(200);
       expect(response.body.user).toEqual({
@@ -58,14 +59,14 @@ describe('auth', () => {
     });
 
     it('accepts the e-mail in any case and with spaces around it', async () => {
-      const response = await login('  Observer@Catline.Example ', 'catline-demo');
+      const response = await login('  Observer@Catline.Example ', DEMO_PASSWORD);
       expect(response.status).toBe(200);
       expect(response.body.user.email).toBe('observer@catline.example');
     });
 
     it('refuses a wrong password and an unknown e-mail with the same 401 message', async () => {
-      const wrongPassword = await login(ADMIN, 'catline-demo-wrong');
-      const unknownEmail = await login('nobody@catline.example', 'catline-demo');
+      const wrongPassword = await login(ADMIN, `${DEMO_PASSWORD}-wrong`);
+      const unknownEmail = await login('nobody@catline.example', DEMO_PASSWORD);
 
       expect(wrongPassword.status).toBe(401);
       expect(unknownEmail.status).toBe(401);
@@ -85,7 +86,7 @@ describe('auth', () => {
 
       const extra = await request(url)
         .post('/api/auth/login')
-        .send({ email: ADMIN, password: 'catline-demo', role: 'admin' });
+        .send({ email: ADMIN, password: DEMO_PASSWORD, role: 'admin' });
       expect(extra.status).toBe(400);
       expect(extra.body.message).toMatch(/property role should not exist/);
     });

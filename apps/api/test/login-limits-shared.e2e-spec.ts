@@ -1,3 +1,4 @@
+import { DEMO_PASSWORD } from '@catline/contracts';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
@@ -54,7 +55,7 @@ describe('sign-in limits shared by several API processes through Redis', () => {
     for (const url of urls) {
       const refused = await request(url)
         .post('/api/auth/login')
-        .send({ email: 'observer@catline.example', password: 'catline-demo' });
+        .send({ email: 'observer@catline.example', password: DEMO_PASSWORD });
       expect(refused.status).toBe(429);
     }
   });

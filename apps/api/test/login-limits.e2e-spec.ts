@@ -1,3 +1,4 @@
+import { DEMO_PASSWORD } from '@catline/contracts';
 import type { INestApplication } from '@nestjs/common';
 import request from 'supertest';
 import { DataSource } from 'typeorm';
@@ -128,7 +129,7 @@ describe('sign-in and password-reset limits', () => {
       for (let i = 0; i < 60 && !statuses.includes(429); i += 1)
         statuses.push((await login(`guess${i}@catline.example`, 'x')).status);
       expect(statuses.at(-1)).toBe(429);
-      expect((await login('handler@catline.example', 'catline-demo')).status).toBe(429);
+      expect((await login('handler@catline.example', DEMO_PASSWORD)).status).toBe(429);
     });
   });
 });

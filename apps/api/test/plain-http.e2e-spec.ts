@@ -1,3 +1,4 @@
+import { DEMO_PASSWORD } from '@catline/contracts';
 import request from 'supertest';
 import { ApiProcess, apiSettings, type ApiSettings } from './reliability/support/api-process.js';
 import { demoEmail } from './support/sign-in.js';
@@ -24,7 +25,7 @@ async function withApp(overrides: Record<string, string>, check: (url: string) =
 const login = (url: string) =>
   request(url)
     .post('/api/auth/login')
-    .send({ email: demoEmail('observer'), password: 'catline-demo' });
+    .send({ email: demoEmail('observer'), password: DEMO_PASSWORD });
 
 const refreshCookie = (response: request.Response) =>
   ([] as string[]).concat(response.headers['set-cookie'] ?? []).find((cookie) => cookie.startsWith('catline_refresh='));

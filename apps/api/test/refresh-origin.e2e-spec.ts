@@ -1,3 +1,4 @@
+import { DEMO_PASSWORD } from '@catline/contracts';
 import type { INestApplication } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import request from 'supertest';
@@ -20,7 +21,7 @@ describe('POST /auth/refresh is for the Catline page only', () => {
 
   const cookie = async () =>
     refreshCookie(
-      await request(url).post('/api/auth/login').send({ email: 'observer@catline.example', password: 'catline-demo' }),
+      await request(url).post('/api/auth/login').send({ email: 'observer@catline.example', password: DEMO_PASSWORD }),
     );
 
   it("refuses another site's origin and a request without the X-Catline-Refresh header, keeping the cookie usable", async () => {

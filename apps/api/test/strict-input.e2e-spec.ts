@@ -1,3 +1,4 @@
+import { DEMO_PASSWORD } from '@catline/contracts';
 import type { INestApplication } from '@nestjs/common';
 import request from 'supertest';
 import { refreshCookie } from './support/cookies.js';
@@ -94,7 +95,7 @@ describe('strict input: names, path ids and token answers', () => {
     it('are never stored by a cache: sign-in and refresh send Cache-Control: no-store', async () => {
       const login = await request(url)
         .post('/api/auth/login')
-        .send({ email: 'observer@catline.example', password: 'catline-demo' });
+        .send({ email: 'observer@catline.example', password: DEMO_PASSWORD });
       expect(login.status).toBe(200);
       expect(login.headers['cache-control']).toBe('no-store');
       const refresh = await request(url)

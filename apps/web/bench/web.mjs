@@ -1,6 +1,7 @@
 // Web benchmark: gzip size of the JavaScript and CSS the built app loads first, and the time until
 // the Lineup of a 40-aircraft cycle is drawn in headless Chromium (median of several cold loads).
 // usage: node apps/web/bench/web.mjs '{"url":"http://127.0.0.1:3200","cycleId":N,"aircraft":40}'
+import { DEMO_PASSWORD } from '@catline/contracts';
 import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { gzipSync } from 'node:zlib';
@@ -54,7 +55,7 @@ async function timeToLineup() {
     const page = await context.newPage();
     await page.goto(`${url}/sign-in`);
     await page.getByLabel('E-mail').fill('handler@catline.example');
-    await page.getByLabel('Password').fill('catline-demo');
+    await page.getByLabel('Password').fill(DEMO_PASSWORD);
     await page.getByRole('button', { name: 'Sign in' }).click();
     await page.waitForURL((address) => !address.pathname.startsWith('/sign-in'));
     const lineup = await medianMs(async () => {

@@ -11,8 +11,8 @@ test('an ended session sends the person to sign in with a reason, then back to w
   // Changing the password ends every session of that person, this tablet's included.
   // (and back again, from a new session, so the demo password stays the same).
   for (const [currentPassword, newPassword] of [
-    [DEMO_PASSWORD, 'catline-demo-2'],
-    ['catline-demo-2', DEMO_PASSWORD],
+    [DEMO_PASSWORD, `${DEMO_PASSWORD}-2`],
+    [`${DEMO_PASSWORD}-2`, DEMO_PASSWORD],
   ]) {
     const elsewhere = await apiAs('pilot2', currentPassword);
     const response = await elsewhere.post('/api/auth/password', { data: { currentPassword, newPassword } });

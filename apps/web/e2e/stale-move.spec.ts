@@ -1,5 +1,5 @@
 import { expect, test } from '@playwright/test';
-import { planCycle } from './support/demo-api.js';
+import { DEMO_PASSWORD, planCycle } from './support/demo-api.js';
 import { card, dragWithMouse, lane, openAs, pool } from './support/screens.js';
 
 test('a move based on a lineup that changed meanwhile is refused with the server’s reason and rolled back', async ({
@@ -18,7 +18,7 @@ test('a move based on a lineup that changed meanwhile is refused with the server
   });
   await lagging.goto(`/lineup?cycle=${cycle.id}`);
   await lagging.getByLabel('E-mail').fill('handler@catline.example');
-  await lagging.getByLabel('Password').fill('catline-demo');
+  await lagging.getByLabel('Password').fill(DEMO_PASSWORD);
   await lagging.getByRole('button', { name: 'Sign in' }).click();
   await expect(card(pool(lagging), 'C24')).toBeVisible();
 

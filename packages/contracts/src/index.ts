@@ -5,6 +5,7 @@ export * from './constraints.js';
 export * from './cycle-follow.js';
 export * from './cycles.js';
 export * from './deck.js';
+export * from './demo.js';
 export * from './fleet.js';
 export * from './imports.js';
 export * from './lineup.js';

@@ -126,6 +126,13 @@ export const USER_REFUSAL_CODES = [
 ] as const;
 export type UserRefusalCode = (typeof USER_REFUSAL_CODES)[number];
 
+/** A new password (a person created with one, a change, a reset or invitation link). */
+export const PASSWORD_REFUSAL_CODES = [
+  /** Too easy to guess: a common password, a pattern, or made of the person's e-mail or name. */
+  'weak_password',
+] as const;
+export type PasswordRefusalCode = (typeof PASSWORD_REFUSAL_CODES)[number];
+
 /** Invitation and password-reset links. */
 export const PASSWORD_LINK_REFUSAL_CODES = ['link_invalid'] as const;
 export type PasswordLinkRefusalCode = (typeof PASSWORD_LINK_REFUSAL_CODES)[number];
@@ -203,6 +210,7 @@ export const REFUSAL_CODE_FAMILIES = {
   imports: IMPORT_REFUSAL_CODES,
   auth: AUTH_REFUSAL_CODES,
   users: USER_REFUSAL_CODES,
+  passwords: PASSWORD_REFUSAL_CODES,
   passwordLinks: PASSWORD_LINK_REFUSAL_CODES,
   ships: SHIP_REFUSAL_CODES,
   aircraft: AIRCRAFT_REFUSAL_CODES,

@@ -1,6 +1,7 @@
 // A small REST client for the benchmarks: JSON in, { status, body } out. It uses node:http with a
 // keep-alive agent rather than fetch: the load generator shares the machine with the server, and
 // fetch costs it about twice the CPU per request, which would be taken from the server being measured.
+import { DEMO_PASSWORD } from '@catline/contracts';
 import http from 'node:http';
 
 const agent = new http.Agent({ keepAlive: true, maxSockets: 64 });
@@ -45,7 +46,7 @@ export function apiClient(baseUrl, token) {
   };
 }
 
-export async function signIn(baseUrl, email, password = 'catline-demo') {
+export async function signIn(baseUrl, email, password = DEMO_PASSWORD) {
   const { status, body } = await apiClient(baseUrl).post('/auth/login', { email, password });
   if (status !== 200 && status !== 201)
     throw new Error(`Sign-in of ${email} failed: ${status} ${JSON.stringify(body)}`);

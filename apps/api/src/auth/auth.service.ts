@@ -12,6 +12,7 @@ import { AuthException } from './auth.exception.js';
 import { AttemptLimits } from './attempt-limits.service.js';
 import { emailIdentity } from './normalize-email.js';
 import { hashPassword, verifyPassword } from './password.js';
+import { assertStrongPassword } from './password-strength.js';
 import { type IssuedRefreshToken, RefreshTokens } from './refresh-tokens.service.js';
 import { SessionEnds } from './session-ends.service.js';
 import { toAuthenticatedUser, toSessionUser } from './session.mapper.js';
@@ -98,6 +99,7 @@ export class AuthService {
     if (currentPassword === newPassword) {
       throw new AuthException('password_unchanged', 'The new password must differ from the current one.');
     }
+    assertStrongPassword(newPassword, user);
     const passwordHash = await hashPassword(newPassword);
     const refresh = await this.dataSource.transaction(async (manager) => {
       await manager.update(User, { id: user.id }, { passwordHash, tokenVersion: () => 'token_version + 1' });

@@ -7,6 +7,7 @@ import { AuditTrail } from '../audit/audit-trail.service.js';
 import { AttemptLimits } from '../auth/attempt-limits.service.js';
 import { emailIdentity } from '../auth/normalize-email.js';
 import { hashPassword } from '../auth/password.js';
+import { assertStrongPassword } from '../auth/password-strength.js';
 import { RefreshTokens } from '../auth/refresh-tokens.service.js';
 import { SessionEnds } from '../auth/session-ends.service.js';
 import type { Environment } from '../config/environment.js';
@@ -99,6 +100,8 @@ export class PasswordLinks {
     const link = await this.dataSource.manager.findOneBy(PasswordLink, { tokenHash: digest(token), purpose });
     // Checked before hashing, so made-up tokens cost the server no password hash.
     if (!link || link.usedAt || link.expiresAt.getTime() <= Date.now()) throw this.invalid(purpose);
+    const owner = await this.dataSource.manager.findOneBy(User, { id: link.userId });
+    if (owner) assertStrongPassword(newPassword, owner);
     const passwordHash = await hashPassword(newPassword);
     await this.dataSource.transaction(async (manager) => {
       const claimed = await manager

@@ -4,6 +4,7 @@ import { InjectDataSource } from '@nestjs/typeorm';
 import type { DataSource, EntityManager } from 'typeorm';
 import { normalizeEmail } from '../auth/normalize-email.js';
 import { hashPassword } from '../auth/password.js';
+import { assertStrongPassword } from '../auth/password-strength.js';
 import { RefreshTokens } from '../auth/refresh-tokens.service.js';
 import { SessionEnds } from '../auth/session-ends.service.js';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
@@ -65,6 +66,7 @@ export class UsersService {
     const manager = this.dataSource.manager;
     await this.checkBinding(manager, binding.role, binding.catapultId, binding.squadronId);
     if (await manager.existsBy(User, { email })) throw this.emailTaken(email);
+    if (body.password !== undefined) assertStrongPassword(body.password, { email, name: body.name });
     const passwordHash = body.password === undefined ? null : await hashPassword(body.password);
     try {
       // Without a password the person gets an invitation, queued in the same transaction.

@@ -1,10 +1,10 @@
-import { ROLES } from '@catline/contracts';
+import { DEMO_PASSWORD, ROLES } from '@catline/contracts';
 import request from 'supertest';
 import { refreshCookie } from '../support/cookies.js';
 import { bearer, demoEmail, signIn } from '../support/sign-in.js';
 import type { MatrixRoute } from './route-table.js';
 
-const OBSERVER = { email: 'observer@catline.example', password: 'catline-demo' };
+const OBSERVER = { email: 'observer@catline.example', password: DEMO_PASSWORD };
 
 export const authRoutes: MatrixRoute[] = [
   { method: 'POST', path: '/api/auth/login', allowed: 'public', example: () => ({ body: OBSERVER }) },

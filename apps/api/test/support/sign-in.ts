@@ -1,9 +1,9 @@
-import type { Role } from '@catline/contracts';
+import { DEMO_PASSWORD, type Role } from '@catline/contracts';
 import request from 'supertest';
 import { demoPeople } from '../../src/database/seeds/demo-fleet.js';
 
 /** Signs in through the real login route and returns the access token; throws with the server's answer when refused. */
-export async function signIn(baseUrl: string, email: string, password = 'catline-demo'): Promise<string> {
+export async function signIn(baseUrl: string, email: string, password = DEMO_PASSWORD): Promise<string> {
   const response = await request(baseUrl).post('/api/auth/login').send({ email, password });
   if (response.status !== 200 || typeof response.body?.accessToken !== 'string') {
     throw new Error(`Sign-in as ${email} failed with ${response.status}: ${JSON.stringify(response.body)}`);

@@ -1,5 +1,6 @@
 import { expect, request, type APIRequestContext } from '@playwright/test';
 import {
+  DEMO_PASSWORD,
   nextPageOffset,
   type Page,
   type AircraftView,
@@ -12,7 +13,7 @@ import {
   type UserView,
 } from '@catline/contracts';
 
-export const DEMO_PASSWORD = 'catline-demo';
+export { DEMO_PASSWORD };
 export const demoEmail = (who: string) => `${who}@catline.example`;
 
 const baseURL = `http://127.0.0.1:${process.env.E2E_PORT ?? '3100'}`;

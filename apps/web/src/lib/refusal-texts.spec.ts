@@ -34,6 +34,7 @@ const FAMILIES: Record<RefusalFamily, { changedFirst: RefusalCode[]; titles: Par
     changedFirst: [],
     titles: { cannot_invite: 'Moving 104 refused: the person has already chosen a password' },
   },
+  passwords: { changedFirst: [], titles: { weak_password: 'Moving 104 refused: the password is too easy to guess' } },
   passwordLinks: { changedFirst: [], titles: { link_invalid: 'Moving 104 refused: the link is not valid' } },
   ships: { changedFirst: [], titles: { spot_in_use: 'Moving 104 refused: the spot is in use' } },
   aircraft: { changedFirst: [], titles: { side_number_taken: 'Moving 104 refused: the side number is taken' } },

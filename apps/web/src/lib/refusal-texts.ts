@@ -98,6 +98,7 @@ const REASONS: Record<RefusalCode, string> = {
   forbidden_role: 'not allowed for your role',
   wrong_password: 'the current password is wrong',
   password_unchanged: 'the new password is the old one',
+  weak_password: 'the password is too easy to guess',
   too_many_attempts: 'too many attempts',
   refresh_refused: 'the session was not renewed',
   // users

@@ -6,8 +6,6 @@ import type { DeckLayout, DeckSpot, LaunchTableRow, Role, ShipProfile, StoresIte
 // departures are the invented ship's own procedures, not published ones.
 // demo-names.spec.ts checks these names against real ones.
 
-export const DEMO_PASSWORD = 'catline-demo';
-
 export const demoShip = {
   name: 'Brindlemark',
   hullCode: 'DKT 3',

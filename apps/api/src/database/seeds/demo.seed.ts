@@ -1,3 +1,4 @@
+import { DEMO_PASSWORD } from '@catline/contracts';
 import type { DataSource } from 'typeorm';
 import { AircraftType } from '../entities/aircraft-type.entity.js';
 import { Aircraft } from '../entities/aircraft.entity.js';
@@ -8,7 +9,6 @@ import { Squadron } from '../entities/squadron.entity.js';
 import { User } from '../entities/user.entity.js';
 import { seedDemoCycles } from './demo-cycles.js';
 import {
-  DEMO_PASSWORD,
   demoAircraft,
   demoAircraftTypes,
   demoCatapults,

@@ -48,6 +48,13 @@ export class BasisChecks {
     }
   }
 
+  /** The slot a command names, refused unless the caller saw its current version. */
+  async seenSlot(manager: EntityManager, state: LineupState, slotId: number, seenVersion: number): Promise<Slot> {
+    const slot = this.slot(state, slotId);
+    await this.slotAsSeen(manager, state, slot, seenVersion);
+    return slot;
+  }
+
   async slotAsSeen(manager: EntityManager, state: LineupState, slot: Slot, seenVersion: number): Promise<void> {
     if (slot.version === seenVersion) return;
     const change = await this.latest(manager, state, (patch) =>

@@ -33,8 +33,7 @@ export class CatapultEventsService {
     request: CatapultEventRequest,
   ): Promise<LineupCommandResult> {
     return this.changes.apply(cycleId, actorOf(user), 'hangfire', async (manager, state) => {
-      const slot = this.basis.slot(state, slotId);
-      await this.basis.slotAsSeen(manager, state, slot, request.slotVersion);
+      const slot = await this.basis.seenSlot(manager, state, slotId, request.slotVersion);
       const side = slot.aircraft.sideNumber;
       transition(
         state,
@@ -73,8 +72,7 @@ export class CatapultEventsService {
     request: CatapultEventRequest,
   ): Promise<LineupCommandResult> {
     return this.changes.apply(cycleId, actorOf(user), 'cold_shot_suspected', async (manager, state) => {
-      const slot = this.basis.slot(state, slotId);
-      await this.basis.slotAsSeen(manager, state, slot, request.slotVersion);
+      const slot = await this.basis.seenSlot(manager, state, slotId, request.slotVersion);
       const side = slot.aircraft.sideNumber;
       transition(
         state,
@@ -117,8 +115,7 @@ export class CatapultEventsService {
     request: DownOnCatapultRequest,
   ): Promise<LineupCommandResult> {
     return this.changes.apply(cycleId, actorOf(user), 'down_on_catapult', async (manager, state) => {
-      const slot = this.basis.slot(state, slotId);
-      await this.basis.slotAsSeen(manager, state, slot, request.slotVersion);
+      const slot = await this.basis.seenSlot(manager, state, slotId, request.slotVersion);
       const side = slot.aircraft.sideNumber;
       const next = transition(
         state,

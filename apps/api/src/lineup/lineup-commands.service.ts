@@ -144,8 +144,7 @@ export class LineupCommandsService {
   ): Promise<LineupCommandResult> {
     return this.changes.apply(cycleId, actor, 'aircraft_down', async (manager, state) => {
       this.basis.requireOpen(state);
-      const slot = this.basis.slot(state, slotId);
-      await this.basis.slotAsSeen(manager, state, slot, request.slotVersion);
+      const slot = await this.basis.seenSlot(manager, state, slotId, request.slotVersion);
       const side = slot.aircraft.sideNumber;
       if (CANNOT_GO_DOWN.includes(slot.status)) {
         throw new LineupException('wrong_step', `${side} is ${slot.status}; it cannot be marked down.`);

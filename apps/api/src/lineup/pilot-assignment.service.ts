@@ -45,8 +45,7 @@ export class PilotAssignmentService {
   ): Promise<LineupCommandResult> {
     return this.changes.apply(cycleId, actor, 'pilot_assigned', async (manager, state) => {
       this.basis.requireOpen(state);
-      const slot = this.basis.slot(state, slotId);
-      await this.basis.slotAsSeen(manager, state, slot, request.slotVersion);
+      const slot = await this.basis.seenSlot(manager, state, slotId, request.slotVersion);
       const side = slot.aircraft.sideNumber;
       if (!pilotCanChange(slot)) {
         throw new LineupException(

@@ -132,8 +132,7 @@ export class ReadinessService {
     request: SuspendSlotRequest,
   ): Promise<LineupCommandResult> {
     return this.changes.apply(cycleId, actorOf(user), 'slot_suspended', async (manager, state) => {
-      const slot = this.basis.slot(state, slotId);
-      await this.basis.slotAsSeen(manager, state, slot, request.slotVersion);
+      const slot = await this.basis.seenSlot(manager, state, slotId, request.slotVersion);
       const next = transition(state, slot, user, { kind: 'suspend' }, 'suspended');
       const now = this.clock.now();
       await updateSlot(manager, slot, {
@@ -161,8 +160,7 @@ export class ReadinessService {
     request: SuspendReasonRequest,
   ): Promise<LineupCommandResult> {
     return this.changes.apply(cycleId, actorOf(user), 'suspend_reason_given', async (manager, state) => {
-      const slot = this.basis.slot(state, slotId);
-      await this.basis.slotAsSeen(manager, state, slot, request.slotVersion);
+      const slot = await this.basis.seenSlot(manager, state, slotId, request.slotVersion);
       const side = slot.aircraft.sideNumber;
       transition(
         state,

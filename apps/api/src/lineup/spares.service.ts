@@ -73,8 +73,7 @@ export class SparesService {
   upAgain(cycleId: number, actor: ChangeActor, slotId: number, request: UpAgainRequest): Promise<LineupCommandResult> {
     return this.changes.apply(cycleId, actor, 'aircraft_up', async (manager, state) => {
       this.basis.requireOpen(state);
-      const slot = this.basis.slot(state, slotId);
-      await this.basis.slotAsSeen(manager, state, slot, request.slotVersion);
+      const slot = await this.basis.seenSlot(manager, state, slotId, request.slotVersion);
       const side = slot.aircraft.sideNumber;
       if (slot.status !== 'down') {
         throw new LineupException('wrong_step', `${side} is ${slot.status.replaceAll('_', ' ')}, not down.`);

@@ -26,8 +26,7 @@ export class WaiversService {
   ): Promise<LineupCommandResult> {
     return this.changes.apply(cycleId, actorOf(user), 'gate_waived', async (manager, state) => {
       this.basis.requireOpen(state);
-      const slot = this.basis.slot(state, slotId);
-      await this.basis.slotAsSeen(manager, state, slot, request.slotVersion);
+      const slot = await this.basis.seenSlot(manager, state, slotId, request.slotVersion);
       const side = slot.aircraft.sideNumber;
       const figures = slot.status === 'launched' ? null : slotFigures(state, slot);
       const closed =

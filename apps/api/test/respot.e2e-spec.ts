@@ -17,6 +17,12 @@ describe('the respot: targets, the ordered tows, the ticks and the next cycle', 
     await app.close();
   });
 
+  const HOUR = 3_600_000;
+  const plannedAt = (at: number) => ({
+    plannedLaunchAt: new Date(at).toISOString(),
+    windowStartAt: new Date(at - HOUR / 6).toISOString(),
+    windowEndAt: new Date(at + HOUR).toISOString(),
+  });
   const spot = (name: string): DeckPositionView => ({ kind: 'spot', name });
   const bayA: DeckPositionView = { kind: 'hangar', name: 'bay-A' };
   const towTo = async (cycleId: number, slotId: number, to: DeckPositionView) => {
@@ -119,7 +125,13 @@ describe('the respot: targets, the ordered tows, the ticks and the next cycle', 
   });
 
   it('waits for the last launch, and the recovered aircraft start the next cycle on their targets', async () => {
-    const cycle = await deck.createCycle();
+    // Planned on the first half past the hour over an hour from now, the next cycle a minute later: the
+    // demo's cycles sit on whole hours and those of earlier tests within the hour from their start, so no
+    // other cycle falls in between to hold D35 (the demo's day cycle once did, at one minute to the hour).
+    const earliest = Date.now() + 61 * 60_000;
+    const halfPast = Math.floor(earliest / HOUR) * HOUR + HOUR / 2;
+    const planned = halfPast >= earliest ? halfPast : halfPast + HOUR;
+    const cycle = await deck.createCycle(plannedAt(planned));
     const flyer = await deck.addSlot(cycle.id, 'D35', { pilotEmail: pilot(5) });
     await deck.place(cycle.id, flyer.id, 1);
     const early = await build(cycle.id, [{ slotId: flyer.id, to: spot('bow-3') }]);
@@ -146,13 +158,7 @@ describe('the respot: targets, the ordered tows, the ticks and the next cycle', 
     expect(built.status).toBe(200);
     // Airborne: no tow now; it lands on bow-3, and the ship's next cycle finds it there.
     expect((await deck.snapshot(cycle.id)).cycle.respot!.tows).toEqual([]);
-    // One minute after it: a cycle of an earlier run, planned later than this one, is never in between.
-    const planned = Date.parse(cycle.plannedLaunchAt) + 60_000;
-    const next = await deck.createCycle({
-      plannedLaunchAt: new Date(planned).toISOString(),
-      windowStartAt: new Date(planned - 10 * 60_000).toISOString(),
-      windowEndAt: new Date(planned + 3_600_000).toISOString(),
-    });
+    const next = await deck.createCycle(plannedAt(planned + 60_000));
     const again = await deck.addSlot(next.id, 'D35');
     expect(again.deckPosition).toEqual(spot('bow-3'));
   });

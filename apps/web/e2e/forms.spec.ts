@@ -1,6 +1,6 @@
-import { expect, test } from '@playwright/test';
+import { expect, test, type Page } from '@playwright/test';
 import type { CycleView } from '@catline/contracts';
-import { allOf, apiAs, lineupOf } from './support/demo-api.js';
+import { addTrialType, allOf, apiAs, lineupOf } from './support/demo-api.js';
 import { openAs } from './support/screens.js';
 
 // The forms check what the server would refuse before sending, say it under the field, and clear
@@ -142,4 +142,49 @@ test('the admin is told which figures of a new aircraft type are wrong, then add
   await expect(detail).toContainText('52,000 lb');
   await expect(detail).toContainText('up to 44,000 lb: 15° · above: 18°');
   await expect(form.getByLabel('Designation')).toHaveValue('');
+});
+
+/** Does `act` and waits until the server has answered the PUT of the type's `part` with a 200. */
+async function saved(page: Page, part: string, act: () => Promise<void>) {
+  const answer = page.waitForResponse((r) => r.request().method() === 'PUT' && r.url().endsWith(`/${part}`));
+  await act();
+  expect((await answer).status()).toBe(200);
+}
+
+test('the admin edits a launch table and a stores catalogue row by row, told in words what is wrong', async ({
+  browser,
+}) => {
+  const type = await addTrialType(`RW-${Date.now() % 100_000}`);
+  const admin = await openAs(browser, 'admin', '/launch-data');
+  await admin.getByRole('button', { name: `Show ${type.designation}` }).click();
+
+  await admin.getByRole('button', { name: 'Add row' }).click();
+  await admin.getByLabel('Row 3 gross weight').fill('40000');
+  await admin.getByLabel('Row 3 minimum launch airspeed').fill('150');
+  await admin.getByRole('button', { name: 'Save table' }).click();
+  await expect(admin.getByRole('alert')).toContainText('Row 3: each weight must be heavier than the row above.');
+  await admin.getByLabel('Row 3 gross weight').fill('52000');
+  await saved(admin, 'launch-table', () => admin.getByRole('button', { name: 'Save table' }).click());
+  await expect(admin.getByRole('alert')).toHaveCount(0);
+
+  const stores = admin.getByRole('region', { name: 'Stores catalogue' });
+  await stores.getByRole('button', { name: 'Add item' }).click();
+  await stores.getByRole('button', { name: 'Add item' }).click();
+  await stores.getByLabel('Stores item 1 name').fill('Practice bomb rack');
+  await stores.getByLabel('Stores item 1 weight each').fill('95');
+  await stores.getByLabel('Stores item 2 name').fill('Spare tank');
+  await stores.getByLabel('Stores item 2 weight each').fill('12.5');
+  await stores.getByRole('button', { name: 'Save catalogue' }).click();
+  await expect(stores.getByRole('alert')).toContainText('Item 2: enter the weight of one Spare tank in whole pounds');
+  await stores.getByRole('button', { name: 'Remove stores item 2' }).click();
+  await saved(admin, 'stores-catalogue', () => stores.getByRole('button', { name: 'Save catalogue' }).click());
+
+  // What the server kept, read back by a fresh page.
+  const again = await openAs(browser, 'admin', '/launch-data');
+  await again.getByRole('button', { name: `Show ${type.designation}` }).click();
+  await expect(again.getByLabel('Row 3 gross weight')).toHaveValue('52000');
+  await expect(again.getByLabel('Row 3 minimum launch airspeed')).toHaveValue('150');
+  const kept = again.getByRole('region', { name: 'Stores catalogue' });
+  await expect(kept.getByLabel('Stores item 1 name')).toHaveValue('Practice bomb rack');
+  await expect(kept.getByLabel('Stores item 2 name')).toHaveCount(0);
 });

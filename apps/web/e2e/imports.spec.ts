@@ -1,6 +1,6 @@
 import { expect, test, type Page } from '@playwright/test';
-import type { AircraftTypeView, AircraftView } from '@catline/contracts';
-import { allOf, apiAs, planCycle } from './support/demo-api.js';
+import type { AircraftView } from '@catline/contracts';
+import { addTrialType, allOf, apiAs, planCycle } from './support/demo-api.js';
 import { card, openAs, pool } from './support/screens.js';
 
 const AIR_PLAN_HEADER = 'side_number,pilot_email,mission,fuel_lb,stores,gross_weight_lb,tanker,early_warning,spare';
@@ -79,31 +79,10 @@ test('air operations sees every problem of an air plan file, then imports a good
 });
 
 test('the admin replaces a launch table from a CSV file once its problems are put right', async ({ browser }) => {
-  const api = await apiAs('admin');
-  const designation = `IM-${Date.now() % 100_000}`;
-  const created = await api.post('/api/aircraft-types', {
-    data: {
-      designation,
-      name: 'Import trial type',
-      maxGrossWeightLb: 52_000,
-      crosswindLimitKt: 15,
-      thrustLbf: 20_000,
-      requiredExcessKt: 15,
-      afterburnerFromLb: null,
-      maxEndSpeedKt: 170,
-      trimBands: [{ upToLb: null, trimDeg: 12 }],
-      launchTable: [
-        { grossWeightLb: 34_000, minLaunchAirspeedKt: 124 },
-        { grossWeightLb: 46_000, minLaunchAirspeedKt: 143 },
-      ],
-    },
-  });
-  expect(created.status(), await created.text()).toBe(201);
-  const type = (await created.json()) as AircraftTypeView;
-  await api.dispose();
+  const type = await addTrialType(`IM-${Date.now() % 100_000}`);
 
   const admin = await openAs(browser, 'admin', '/launch-data');
-  await admin.getByRole('button', { name: `Show ${designation}` }).click();
+  await admin.getByRole('button', { name: `Show ${type.designation}` }).click();
   await chooseAndCheck(admin, 'Launch table file (CSV)', 'table.csv', [
     'gross_weight_lb,min_launch_airspeed_kt',
     '36000,126',

@@ -3,6 +3,7 @@ import {
   DEMO_PASSWORD,
   nextPageOffset,
   type Page,
+  type AircraftTypeView,
   type AircraftView,
   type CycleView,
   type LineupChange,
@@ -42,6 +43,31 @@ export async function allOf<T>(api: APIRequestContext, path: string): Promise<T[
     offset = nextPageOffset(page);
   }
   return rows;
+}
+
+/** A new aircraft type of invented figures, added by the admin, named `designation`. */
+export async function addTrialType(designation: string): Promise<AircraftTypeView> {
+  const api = await apiAs('admin');
+  const created = await api.post('/api/aircraft-types', {
+    data: {
+      designation,
+      name: 'Trial type',
+      maxGrossWeightLb: 52_000,
+      crosswindLimitKt: 15,
+      thrustLbf: 20_000,
+      requiredExcessKt: 15,
+      afterburnerFromLb: null,
+      maxEndSpeedKt: 170,
+      trimBands: [{ upToLb: null, trimDeg: 12 }],
+      launchTable: [
+        { grossWeightLb: 34_000, minLaunchAirspeedKt: 124 },
+        { grossWeightLb: 46_000, minLaunchAirspeedKt: 143 },
+      ],
+    },
+  });
+  const type = await ok<AircraftTypeView>(created);
+  await api.dispose();
+  return type;
 }
 
 export interface PlannedAircraft {

@@ -38,6 +38,9 @@ export const GROSS_WEIGHT_LB: Range = { min: 1, max: 200_000 };
 export const STORES_CATALOGUE_MAX_ITEMS = 40;
 export const STORES_ITEM_NAME_MAX_LENGTH = 60;
 export const STORES_ITEM_WEIGHT_LB: Range = { min: 1, max: 20_000 };
+/** A slot's stores list: lines, and how many of one item a line loads. */
+export const STORES_LINES_MAX = 20;
+export const STORES_COUNT: Range = { min: 1, max: 99 };
 
 /** A cycle's number in the ship's flying day. */
 export const CYCLE_NUMBER: Range = { min: 1, max: 9999 };

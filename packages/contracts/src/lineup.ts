@@ -190,6 +190,25 @@ export interface LaunchRecord {
   firedBy: LaunchFiredBy | null;
 }
 
+/** A stores line of a slot: an item of its type's catalogue, its weight each when loaded, and how many. */
+export interface SlotStoresLine {
+  name: string;
+  /** Whole pounds. */
+  weightEachLb: number;
+  /** One or more. */
+  count: number;
+}
+
+/** How a slot's planned gross weight was built (launch-math's grossWeightBuildUp), all in lb. */
+export interface GrossWeightPartsView {
+  /** The type's operating weight with crew when the load was set. */
+  operatingWeightLb: number;
+  fuelLb: number;
+  stores: (SlotStoresLine & { weightLb: number })[];
+  storesWeightLb: number;
+  grossWeightLb: number;
+}
+
 export interface SlotView {
   id: number;
   cycleId: number;
@@ -203,8 +222,14 @@ export interface SlotView {
   pilotName: string | null;
   mission: string;
   fuelLb: number;
+  /** The stores in words: the list below as one line, or as typed in the air plan. */
   stores: string;
+  /** The stores list as loaded; empty while the planned weight is the one typed in the air plan. */
+  storesList: SlotStoresLine[];
+  /** The planned gross weight, lb: built from its parts once fuel and stores are set, typed in before. */
   grossWeightLb: number;
+  /** The parts of the planned gross weight; null while it is the figure typed in the air plan. */
+  grossWeightParts: GrossWeightPartsView | null;
   tanker: boolean;
   earlyWarning: boolean;
   spare: boolean;
@@ -312,6 +337,7 @@ export const CHANGE_KINDS = [
   'cold_shot_suspected',
   'down_on_catapult',
   'suspend_reason_given',
+  'load_set',
 ] as const;
 export type ChangeKind = (typeof CHANGE_KINDS)[number];
 
@@ -519,6 +545,14 @@ export interface CallSpareRequest {
 }
 
 /** Assign a pilot to an aircraft, or take the pilot off it (`pilotId: null`); a pilot flying another aircraft moves. */
+/** Fuel on board and the stores list of a slot, each stores item named from its type's catalogue. */
+export interface SetLoadRequest {
+  slotVersion: number;
+  /** Whole pounds. */
+  fuelLb: number;
+  stores: { name: string; count: number }[];
+}
+
 export interface AssignPilotRequest {
   slotVersion: number;
   pilotId: number | null;

@@ -19,6 +19,10 @@ export const LINEUP_REFUSAL_CODES = [
   'pilot_missing',
   'agreement_required',
   'reason_required',
+  /** A stores item the aircraft's type does not list in its catalogue, or one named twice. */
+  'stores_not_in_catalogue',
+  /** Fuel and stores set on an aircraft whose type has no operating weight in the launch data. */
+  'operating_weight_missing',
   'not_your_catapult',
   'not_your_slot',
   'not_current_aircraft',

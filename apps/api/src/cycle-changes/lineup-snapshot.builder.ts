@@ -30,6 +30,7 @@ import {
 import { toCycleView } from './cycle.mapper.js';
 import type { Catapult } from '../database/entities/catapult.entity.js';
 import type { Slot } from '../database/entities/slot.entity.js';
+import { grossWeightParts } from './gross-weight-parts.js';
 import { launchFiguresView } from './launch-figures.js';
 import { recordedFigures } from './launch-record.js';
 import { shipReadinessSteps } from './readiness-steps.js';
@@ -213,7 +214,9 @@ export function buildSnapshot(state: LineupState): LineupSnapshot {
       mission: slot.mission,
       fuelLb: slot.fuelLb,
       stores: slot.stores,
+      storesList: slot.loadBuild?.stores ?? [],
       grossWeightLb: slot.grossWeightLb,
+      grossWeightParts: slot.loadBuild ? grossWeightParts(slot.fuelLb, slot.loadBuild) : null,
       tanker: slot.tanker,
       earlyWarning: slot.earlyWarning,
       spare: slot.spare,

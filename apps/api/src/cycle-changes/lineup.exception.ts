@@ -17,6 +17,8 @@ const STATUS: Record<LineupRefusalCode, HttpStatus> = {
   pilot_missing: HttpStatus.CONFLICT,
   agreement_required: HttpStatus.FORBIDDEN,
   reason_required: HttpStatus.UNPROCESSABLE_ENTITY,
+  stores_not_in_catalogue: HttpStatus.BAD_REQUEST,
+  operating_weight_missing: HttpStatus.CONFLICT,
   not_your_catapult: HttpStatus.FORBIDDEN,
   not_your_slot: HttpStatus.FORBIDDEN,
   not_current_aircraft: HttpStatus.CONFLICT,

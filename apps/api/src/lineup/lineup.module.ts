@@ -1,3 +1,5 @@
+import { SlotLoadController } from './slot-load.controller.js';
+import { SlotLoadService } from './slot-load.service.js';
 import { Module } from '@nestjs/common';
 import { CycleChangesModule } from '../cycle-changes/cycle-changes.module.js';
 import { CyclesModule } from '../cycles/cycles.module.js';
@@ -16,7 +18,7 @@ import { WaiversService } from './waivers.service.js';
 
 @Module({
   imports: [CycleChangesModule, CyclesModule],
-  controllers: [LineupController, SparesController, CatapultEventsController],
+  controllers: [LineupController, SparesController, CatapultEventsController, SlotLoadController],
   providers: [
     LineupCommandsService,
     CatapultEventsService,
@@ -27,6 +29,7 @@ import { WaiversService } from './waivers.service.js';
     PilotAssignmentService,
     ReturnToPoolService,
     WaiversService,
+    SlotLoadService,
   ],
 })
 export class LineupModule {}

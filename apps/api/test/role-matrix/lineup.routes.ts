@@ -287,6 +287,19 @@ export const lineupRoutes: MatrixRoute[] = [
   },
   {
     method: 'POST',
+    path: '/api/cycles/{cycleId}/lineup/slots/{slotId}/load',
+    allowed: ['handler', 'air_operations'],
+    example: async (context) => {
+      if (!context.allowed) return refused;
+      const { cycleId, slot } = await freshSlot(context, 'pool');
+      return {
+        params: { cycleId, slotId: slot.id },
+        body: { slotVersion: slot.version, fuelLb: 9_000, stores: [{ name: 'Practice bomb', count: 2 }] },
+      };
+    },
+  },
+  {
+    method: 'POST',
     path: '/api/cycles/{cycleId}/lineup/slots/{slotId}/return',
     allowed: ['catapult_officer', 'handler'],
     // The officer of another catapult may not return it (the handler needs the officer's agreement).

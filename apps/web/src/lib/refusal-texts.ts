@@ -36,6 +36,8 @@ const REASONS: Record<RefusalCode, string> = {
   pilot_missing: 'the aircraft has no pilot',
   agreement_required: "the catapult officer's agreement is needed",
   reason_required: 'a reason in a few words is needed',
+  stores_not_in_catalogue: 'the stores are not in the type’s catalogue',
+  operating_weight_missing: 'the type has no operating weight in the launch data',
   not_your_catapult: 'not your catapult',
   not_your_slot: 'not your aircraft',
   not_current_aircraft: 'not the aircraft on the catapult',

@@ -1,4 +1,11 @@
-import type { DeckPositionKind, LaunchRecord, ReverifyCause, SlotStatus, SoftLaunchGateCode } from '@catline/contracts';
+import type {
+  DeckPositionKind,
+  LaunchRecord,
+  ReverifyCause,
+  SlotStatus,
+  SlotStoresLine,
+  SoftLaunchGateCode,
+} from '@catline/contracts';
 import type { LastStep } from '@catline/launch-math';
 import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, Unique, type Relation } from 'typeorm';
 import { Aircraft } from './aircraft.entity.js';
@@ -15,6 +22,12 @@ export interface StoredWaiver {
   byName: string;
   /** ISO instant. */
   at: string;
+}
+
+/** What a slot's planned gross weight was built from besides its fuel: kept, so the parts always add up to it. */
+export interface StoredLoadBuild {
+  operatingWeightLb: number;
+  stores: SlotStoresLine[];
 }
 
 /** One aircraft's place in a cycle: in the deck pool (no catapult) or in a catapult's lane. */
@@ -58,6 +71,10 @@ export class Slot {
 
   @Column({ name: 'gross_weight_lb' })
   grossWeightLb: number;
+
+  /** Set with fuel and stores; null while the gross weight is the one typed in the air plan. */
+  @Column({ name: 'load_build', type: 'json', nullable: true })
+  loadBuild: StoredLoadBuild | null;
 
   @Column({ default: false })
   tanker: boolean;

@@ -12,6 +12,7 @@ import { CycleDeckHolds1796216225592 } from './1796216225592-CycleDeckHolds.js';
 import { CycleRespot1796217149940 } from './1796217149940-CycleRespot.js';
 import { AircraftTypeStoresCatalogue1796225154045 } from './1796225154045-AircraftTypeStoresCatalogue.js';
 import { LandingAreaInUseDerived1796225353747 } from './1796225353747-LandingAreaInUseDerived.js';
+import { SlotLoadBuild1796227583908 } from './1796227583908-SlotLoadBuild.js';
 import { SlotDownCatapult1796228372875 } from './1796228372875-SlotDownCatapult.js';
 import { AircraftTypeMaxEndSpeed1796229016417 } from './1796229016417-AircraftTypeMaxEndSpeed.js';
 
@@ -31,6 +32,7 @@ export const migrations = [
   CycleRespot1796217149940,
   AircraftTypeStoresCatalogue1796225154045,
   LandingAreaInUseDerived1796225353747,
+  SlotLoadBuild1796227583908,
   SlotDownCatapult1796228372875,
   AircraftTypeMaxEndSpeed1796229016417,
 ];

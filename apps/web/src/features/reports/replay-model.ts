@@ -43,6 +43,7 @@ export const CHANGE_KIND_LABELS: Record<ChangeKind, string> = {
   cold_shot_suspected: 'Suspected cold shot',
   down_on_catapult: 'Down on the catapult',
   suspend_reason_given: 'Suspend reason',
+  load_set: 'Fuel and stores',
 };
 
 /** Slots in no lane and not in the deck pool: down or scratched aircraft. */

@@ -32,6 +32,8 @@ import {
   type SoftLaunchGateCode,
   type SlotStatus,
   type SlotView,
+  type SlotStoresLine,
+  type GrossWeightPartsView,
   type SpareCandidate,
   type SpareMatch,
   type SuggestedLineup,
@@ -243,6 +245,42 @@ export class LaunchGateViewDto implements LaunchGateView {
   message: string;
 }
 
+@ApiSchema({ name: 'SlotStoresLine' })
+export class SlotStoresLineDto implements SlotStoresLine {
+  @ApiProperty({ description: "An item of the type's stores catalogue." })
+  name: string;
+
+  @IntProperty({ minimum: 1, description: 'Weight of one item when loaded, pounds.' })
+  weightEachLb: number;
+
+  @IntProperty({ minimum: 1 })
+  count: number;
+}
+
+@ApiSchema({ name: 'GrossWeightStoresLine' })
+export class GrossWeightStoresLineDto extends SlotStoresLineDto {
+  @IntProperty({ minimum: 0, description: 'Weight each × count, pounds.' })
+  weightLb: number;
+}
+
+@ApiSchema({ name: 'GrossWeightPartsView' })
+export class GrossWeightPartsViewDto implements GrossWeightPartsView {
+  @IntProperty({ minimum: 0, description: "The type's operating weight with crew when the load was set, pounds." })
+  operatingWeightLb: number;
+
+  @IntProperty({ minimum: 0, description: 'Pounds.' })
+  fuelLb: number;
+
+  @ApiProperty({ type: [GrossWeightStoresLineDto] })
+  stores: GrossWeightStoresLineDto[];
+
+  @IntProperty({ minimum: 0, description: 'Pounds.' })
+  storesWeightLb: number;
+
+  @IntProperty({ minimum: 0, description: 'Operating weight + fuel + stores, pounds.' })
+  grossWeightLb: number;
+}
+
 @ApiSchema({ name: 'SlotView', description: 'One aircraft of a cycle: where it stands in the lineup and its figures.' })
 export class SlotViewDto implements SlotView {
   @IdProperty()
@@ -281,11 +319,17 @@ export class SlotViewDto implements SlotView {
   @IntProperty({ minimum: 0 })
   fuelLb: number;
 
-  @ApiProperty()
+  @ApiProperty({ description: 'The stores in words.' })
   stores: string;
+
+  @ApiProperty({ type: [SlotStoresLineDto], description: 'Empty while the planned weight is the one typed in.' })
+  storesList: SlotStoresLine[];
 
   @IntProperty({ minimum: 0 })
   grossWeightLb: number;
+
+  @ApiProperty({ type: GrossWeightPartsViewDto, nullable: true, description: 'Null while the weight is typed in.' })
+  grossWeightParts: GrossWeightPartsView | null;
 
   @ApiProperty()
   tanker: boolean;

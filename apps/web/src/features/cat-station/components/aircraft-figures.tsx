@@ -2,6 +2,7 @@ import { Box, HStack, SimpleGrid, Stack, Text } from '@chakra-ui/react';
 import type { SlotView } from '@catline/contracts';
 import { FigureStat } from '../../../components/figure-stat.js';
 import { GoBadge } from '../../../components/go-badge.js';
+import { GrossWeightParts, storesLines } from '../../../components/gross-weight-parts.js';
 import { formatClock, formatKnots, formatPounds, formatSignedKnots } from '../../../lib/format.js';
 
 function agreement(at: string | null) {
@@ -49,6 +50,14 @@ export function AircraftFigures({ slot }: { slot: SlotView }) {
           tone={slot.afterburnerRequired ? 'caution' : undefined}
         />
       </SimpleGrid>
+      {slot.grossWeightParts && (
+        <Box data-testid="cat-weight-parts">
+          <GrossWeightParts parts={slot.grossWeightParts} fontSize="sm" />
+          <Text fontSize="sm" color="fg.muted">
+            Stores: {storesLines(slot.grossWeightParts)}
+          </Text>
+        </Box>
+      )}
       {figures && (
         <HStack gap="2" align="flex-start" wrap="wrap">
           <GoBadge go={figures.go} size="lg" />

@@ -9,6 +9,7 @@ import { SlotStatusBadge } from '../../../components/slot-status-badge.js';
 import { formatOptionalClock, formatPounds } from '../../../lib/format.js';
 import { slotItemId } from '../hooks/use-lineup-drag.js';
 import { isDone, type SlotMark } from '../lineup-model.js';
+import { GrossWeightParts } from '../../../components/gross-weight-parts.js';
 
 const MARK_LABELS: Record<SlotMark, string> = { 'on-catapult': 'On cat', next: 'Next' };
 
@@ -86,6 +87,7 @@ function SlotCardContent({ slot, movable, mark }: { slot: SlotView; movable: boo
       </HStack>
       <HStack gap="1.5" wrap="wrap" fontSize="sm" rowGap="0">
         <Text textStyle="figure">{formatPounds(slot.grossWeightLb)}</Text>
+        <GrossWeightParts parts={slot.grossWeightParts} />
         {slot.trimDeg !== null && <Text color="fg.muted">Trim {slot.trimDeg}°</Text>}
         {slot.afterburnerRequired && (
           <Badge size="sm" colorPalette="caution" variant="subtle">

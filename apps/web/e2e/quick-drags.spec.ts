@@ -1,6 +1,6 @@
 import { expect, test } from '@playwright/test';
 import { apiAs, lineupOf, planCycle } from './support/demo-api.js';
-import { card, grabPoint, lane, mouseDragBetween, openAs, pool, touchDragBetween } from './support/screens.js';
+import { card, dragWithMouse, dragWithTouch, grabPoint, lane, openAs, pool } from './support/screens.js';
 
 // A handler on a busy deck drags one move after another: the next drag starts as the last one lands, here
 // on the card just put down (a second thought), right where it landed.
@@ -8,8 +8,8 @@ const PAUSE_AFTER_DROP_MS = 80;
 const SIDES = ['C21', 'C22', 'C23'];
 
 const inputs = [
-  { name: 'mouse', viewport: { width: 1366, height: 768 }, touch: false, drag: mouseDragBetween },
-  { name: 'touch', viewport: { width: 1024, height: 768 }, touch: true, drag: touchDragBetween },
+  { name: 'mouse', viewport: { width: 1366, height: 768 }, touch: false, drag: dragWithMouse },
+  { name: 'touch', viewport: { width: 1024, height: 768 }, touch: true, drag: dragWithTouch },
 ] as const;
 
 for (const input of inputs) {

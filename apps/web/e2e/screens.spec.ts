@@ -6,6 +6,7 @@ const sizes = [
   { width: 1366, height: 768 },
   { width: 1024, height: 768 },
   { width: 390, height: 844 },
+  { width: 820, height: 1180 },
 ];
 
 const screens = [

@@ -3,6 +3,7 @@ import type { INestApplication } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import fc from 'fast-check';
 import { readChangeLog, versionProblems } from './support/change-log.js';
+import { staleBasisProblems } from './support/stale-basis.js';
 import { createBusyCycle, handlerTokens } from './support/busy-cycle.js';
 import { LineupDriver, OBSERVER } from './support/lineup-fixtures.js';
 import { LineupFollower, allAt } from './support/lineup-follower.js';
@@ -55,11 +56,14 @@ describe(`${HANDLERS} handlers sending ${TOTAL} lineup commands at one cycle (se
       fc.asyncProperty(lineupModelCommands(HANDLERS, MODEL_MAX_COMMANDS), async (commands) => {
         const model: LineupModel = { snapshot: await deck.snapshot(cycleId), outcomes: [] };
         try {
-          await fc.asyncModelRun(() => ({ model, real: { url, tokens } }), commands);
+          await fc.asyncModelRun(
+            () => ({ model, real: { url, tokens, read: () => deck.snapshot(cycleId) } }),
+            commands,
+          );
         } finally {
           outcomes.push(...model.outcomes);
         }
-        // Refused commands left nothing behind, and the accepted ones' patches describe the database exactly.
+        // Each command was checked against the model as it ran; the last lineup read is still the database's.
         expect(await deck.snapshot(cycleId)).toEqual(model.snapshot);
       }),
       { numRuns: MODEL_RUNS, seed: SEED, endOnFailure: true },
@@ -118,6 +122,9 @@ describe(`${HANDLERS} handlers sending ${TOTAL} lineup commands at one cycle (se
     for (const outcome of acceptedOnes) {
       expect((outcome.body as LineupCommandResult).change).toEqual(log[acceptedVersion(outcome) - 1]);
     }
+
+    // No accepted command was based on a stale lane, slot, version or catapult status.
+    expect(staleBasisProblems(first, log, acceptedOnes)).toEqual([]);
 
     // The database is the change log replayed from the cycle's first, empty snapshot.
     expect(first.version).toBe(0);

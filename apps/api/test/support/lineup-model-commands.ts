@@ -1,11 +1,16 @@
 import { applyLineupPatch, type LineupCommandResult, type LineupSnapshot, type SlotView } from '@catline/contracts';
 import fc from 'fast-check';
+import { isDeepStrictEqual } from 'node:util';
 import { type CommandOutcome, send } from './random-lineup-commands.js';
 
 /**
- * The model of fast-check's model-based run: the lineup as the rules say it must be. It starts from a
- * fetched snapshot; each command predicts the server's answer (accepted, or refused with 409/400) and
- * the lanes after it from the rules alone, then takes the accepted change's patch.
+ * The model of fast-check's model-based run: the lineup as the rules say it must be. Each command
+ * predicts, from the rules alone, the server's answer (accepted, or refused with 409/400) and what an
+ * accepted one leaves: the lanes in order, each catapult's status, each slot's status and catapult, the
+ * next version. After every command the lineup is read back and compared with that prediction (a refused
+ * command must leave it exactly as it was); the accepted change's patch, applied to the model's copy,
+ * must also give exactly what was read. Slot version numbers are bookkeeping the server keeps: the model
+ * takes them from what it read, to build the next command.
  */
 export interface LineupModel {
   snapshot: LineupSnapshot;
@@ -16,6 +21,8 @@ export interface LineupModel {
 export interface LineupReal {
   url: string;
   tokens: readonly string[];
+  /** The lineup as the server has it now (GET /lineup). */
+  read: () => Promise<LineupSnapshot>;
 }
 
 type Lanes = Map<number, number[]>;
@@ -30,8 +37,44 @@ const sameIds = (a: readonly number[], b: readonly number[]) =>
 
 const byId = (snapshot: LineupSnapshot) => [...snapshot.slots].sort((a, b) => a.id - b.id);
 
-/** Expected answer: 200 with the lanes after it, or the refusal status. */
-type Prediction = { status: 200; lanes: Lanes; down?: number } | { status: 400 | 409 };
+/** What an accepted command leaves, as the model works it out: lanes, and the slots and catapult it changes. */
+interface Expected {
+  lanes: Lanes;
+  /** Slots whose status the command sets. */
+  statuses?: ReadonlyMap<number, SlotView['status']>;
+  /** A catapult whose status the command sets. */
+  catapult?: { id: number; status: string };
+}
+
+/** Expected answer: 200 with what it leaves, or the refusal status. */
+type Prediction = ({ status: 200 } & Expected) | { status: 400 | 409 };
+
+/** The parts of a lineup the model predicts: version, lanes with their catapult's status, every slot's place and status. */
+function observed(snapshot: LineupSnapshot) {
+  return {
+    version: snapshot.version,
+    lanes: snapshot.lanes.map((lane) => ({ catapultId: lane.catapultId, status: lane.status, slotIds: lane.slotIds })),
+    slots: byId(snapshot).map((slot) => ({ id: slot.id, status: slot.status, catapultId: slot.catapultId })),
+  };
+}
+
+/** The model's lineup after an accepted command, from the one before it and the rules' prediction. */
+function expectedAfter(before: LineupSnapshot, expected: Expected): ReturnType<typeof observed> {
+  const laneOf = (slotId: number) => [...expected.lanes].find(([, ids]) => ids.includes(slotId))?.[0] ?? null;
+  return {
+    version: before.version + 1,
+    lanes: before.lanes.map((lane) => ({
+      catapultId: lane.catapultId,
+      status: expected.catapult?.id === lane.catapultId ? expected.catapult.status : lane.status,
+      slotIds: expected.lanes.get(lane.catapultId)!,
+    })) as ReturnType<typeof observed>['lanes'],
+    slots: byId(before).map((slot) => ({
+      id: slot.id,
+      status: expected.statuses?.get(slot.id) ?? slot.status,
+      catapultId: laneOf(slot.id),
+    })),
+  };
+}
 
 abstract class ModelCommand implements fc.AsyncCommand<LineupModel, LineupReal> {
   constructor(readonly handler: number) {}
@@ -48,23 +91,21 @@ abstract class ModelCommand implements fc.AsyncCommand<LineupModel, LineupReal> 
     model.outcomes.push(outcome);
     const answer = `${this.toString()} answered ${outcome.status} ${JSON.stringify(outcome.body)}`;
     if (outcome.status !== prediction.status) throw new Error(`expected ${prediction.status}: ${answer}`);
-    if (prediction.status !== 200) return;
-
-    const result = outcome.body as LineupCommandResult;
-    if (result.version !== model.snapshot.version + 1)
-      throw new Error(`expected version ${model.snapshot.version + 1}: ${answer}`);
-    model.snapshot = applyLineupPatch(model.snapshot, result.version, result.change.patch);
-    for (const lane of model.snapshot.lanes) {
-      const expected = prediction.lanes.get(lane.catapultId)!;
-      if (!sameIds(lane.slotIds, expected))
-        throw new Error(`cat ${lane.number} holds ${lane.slotIds}, the rules say ${expected}: ${answer}`);
+    const now = await real.read();
+    const expected = prediction.status === 200 ? expectedAfter(model.snapshot, prediction) : observed(model.snapshot);
+    if (!isDeepStrictEqual(observed(now), expected)) {
+      throw new Error(
+        `${answer}; the lineup is ${JSON.stringify(observed(now))}, the model says ${JSON.stringify(expected)}`,
+      );
     }
-    if (
-      prediction.down !== undefined &&
-      model.snapshot.slots.find((slot) => slot.id === prediction.down)?.status !== 'down'
-    ) {
-      throw new Error(`slot ${prediction.down} is not down: ${answer}`);
+    if (prediction.status === 200) {
+      const result = outcome.body as LineupCommandResult;
+      const patched = applyLineupPatch(model.snapshot, result.version, result.change.patch);
+      if (!isDeepStrictEqual(patched, now)) throw new Error(`${answer}; its patch does not give the lineup read back`);
+    } else if (!isDeepStrictEqual(now, model.snapshot)) {
+      throw new Error(`${answer}; the refused command changed the lineup`);
     }
+    model.snapshot = now;
   }
 }
 
@@ -157,7 +198,7 @@ class MarkDownCommand extends ModelCommand {
       if (spare) lane.splice(lane.indexOf(slot.id), 1, spare.id);
       else lane.splice(lane.indexOf(slot.id), 1);
     }
-    return { path, body, prediction: { status: 200 as const, lanes, down: slot.id } };
+    return { path, body, prediction: { status: 200 as const, lanes, statuses: new Map([[slot.id, 'down' as const]]) } };
   }
 
   override toString(): string {
@@ -183,7 +224,9 @@ class CatapultStatusCommand extends ModelCommand {
     return {
       path,
       body,
-      prediction: this.stale ? { status: 409 as const } : { status: 200 as const, lanes: lanesOf(snapshot) },
+      prediction: this.stale
+        ? { status: 409 as const }
+        : { status: 200 as const, lanes: lanesOf(snapshot), catapult: { id: lane.catapultId, status: other } },
     };
   }
 
@@ -227,6 +270,33 @@ class ApplyLineupCommand extends ModelCommand {
   }
 }
 
+class UpAgainCommand extends ModelCommand {
+  constructor(
+    handler: number,
+    private readonly slotPick: number,
+    private readonly stale: boolean,
+  ) {
+    super(handler);
+  }
+
+  protected request(model: LineupModel) {
+    const { snapshot } = model;
+    // Mostly a down aircraft, so that the command is taken; now and then any, which must be refused.
+    const down = byId(snapshot).filter((slot) => slot.status === 'down');
+    const slots = down.length > 0 && this.slotPick % 4 !== 0 ? down : byId(snapshot);
+    const slot = slots[this.slotPick % slots.length];
+    const path = `/api/cycles/${snapshot.cycle.id}/lineup/slots/${slot.id}/up`;
+    const body = { slotVersion: this.stale ? slot.version + 1 : slot.version, reason: 'Model run: fixed' };
+    if (this.stale || slot.status !== 'down') return { path, body, prediction: { status: 409 as const } };
+    const statuses = new Map([[slot.id, 'planned' as const]]);
+    return { path, body, prediction: { status: 200 as const, lanes: lanesOf(snapshot), statuses } };
+  }
+
+  override toString(): string {
+    return `up(handler ${this.handler}, slot #${this.slotPick}${this.stale ? ', stale' : ''})`;
+  }
+}
+
 /** fast-check's commands for a run by `handlers` handlers; downs are rare because they cannot be undone. */
 export function lineupModelCommands(handlers: number, maxCommands: number) {
   const handler = fc.nat(handlers - 1);
@@ -247,6 +317,10 @@ export function lineupModelCommands(handlers: number, maxCommands: number) {
         {
           weight: 3,
           arbitrary: fc.tuple(handler, fc.nat(), sometimes).map((args) => new CatapultStatusCommand(...args)),
+        },
+        {
+          weight: 2,
+          arbitrary: fc.tuple(handler, fc.nat(), sometimes).map((args) => new UpAgainCommand(...args)),
         },
         {
           weight: 3,

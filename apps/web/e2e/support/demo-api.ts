@@ -79,6 +79,9 @@ export interface PlannedAircraft {
    */
   pilot?: string | null;
   spare?: boolean;
+  /** 'Training sortie' unless told: a spare is offered first by type, then by mission. */
+  mission?: string;
+  tanker?: boolean;
 }
 
 /** Each aircraft's pilot id: the one named, or the next demo pilot nobody in the plan has (from the last). */
@@ -137,11 +140,11 @@ export async function planCycle({ aircraft, start = false, night = false }: Plan
         data: {
           aircraftId: plane!.id,
           pilotId: crew[index],
-          mission: 'Training sortie',
+          mission: planned.mission ?? 'Training sortie',
           fuelLb: 9000,
           stores: 'Clean',
           grossWeightLb: planned.grossWeightLb,
-          tanker: false,
+          tanker: planned.tanker ?? false,
           earlyWarning: false,
           spare: planned.spare ?? false,
         },

@@ -56,7 +56,10 @@ function Figure({ label, children, testId }: { label: string; children: ReactNod
 function LineupSummary({ snapshot }: { snapshot: LineupSnapshot }) {
   const slots = snapshot.slots;
   const launched = slots.filter((slot) => slot.status === 'launched').length;
-  const toLaunch = slots.filter((slot) => slot.status !== 'down' && slot.status !== 'scratched').length;
+  // A held spare launches only once it is called for a down aircraft.
+  const toLaunch = slots.filter(
+    (slot) => slot.status !== 'down' && slot.status !== 'scratched' && !slot.heldSpare,
+  ).length;
   return (
     <HStack gap="3" wrap="wrap" rowGap="1" data-testid="lineup-summary">
       <Figure label="Last launch" testId="last-launch">

@@ -151,23 +151,24 @@ export function SuggestionDialog({ snapshot, pending, onClose, onApply }: Sugges
       pending={pending}
     >
       <QueryView query={suggestion} loadingLabel="Working out the quickest lineup…">
-        {(suggested) =>
-          suggested.lanes.every((lane) => lane.slotIds.length === 0) ? (
-            <EmptyState title="Nothing to suggest">There are no aircraft to place, or no catapult is up.</EmptyState>
-          ) : (
-            <Box>
+        {(suggested) => (
+          <Box>
+            {suggested.lanes.every((lane) => lane.slotIds.length === 0) ? (
+              <EmptyState title="Nothing to suggest">There are no aircraft to place, or no catapult is up.</EmptyState>
+            ) : (
               <SuggestionSummary snapshot={snapshot} suggested={suggested} />
-              {suggested.unassigned.length > 0 && (
-                <Text mt="2" fontSize="sm" data-testid="suggestion-unassigned">
-                  Left out, no pilot assigned:{' '}
-                  {suggested.unassigned
-                    .map((id) => snapshot.slots.find((slot) => slot.id === id)?.sideNumber ?? `#${id}`)
-                    .join(', ')}
-                </Text>
-              )}
-            </Box>
-          )
-        }
+            )}
+            {/* Said even when nothing can be placed: the handler learns why the aircraft stays in the deck pool. */}
+            {suggested.unassigned.length > 0 && (
+              <Text mt="2" fontSize="sm" data-testid="suggestion-unassigned">
+                Left out, no pilot assigned:{' '}
+                {suggested.unassigned
+                  .map((id) => snapshot.slots.find((slot) => slot.id === id)?.sideNumber ?? `#${id}`)
+                  .join(', ')}
+              </Text>
+            )}
+          </Box>
+        )}
       </QueryView>
     </ActionDialog>
   );

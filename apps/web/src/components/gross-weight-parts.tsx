@@ -3,8 +3,11 @@ import type { GrossWeightPartsView } from '@catline/contracts';
 import { formatWhole } from '../lib/format.js';
 
 /** "operating weight + fuel + stores" in pounds, so the crew sees what the planned weight is made of. */
+export const weightSum = (operatingLb: number, fuelLb: number, storesLb: number) =>
+  `${formatWhole(operatingLb)} operating + ${formatWhole(fuelLb)} fuel + ${formatWhole(storesLb)} stores`;
+
 export const grossWeightSum = (parts: GrossWeightPartsView) =>
-  `${formatWhole(parts.operatingWeightLb)} operating + ${formatWhole(parts.fuelLb)} fuel + ${formatWhole(parts.storesWeightLb)} stores`;
+  weightSum(parts.operatingWeightLb, parts.fuelLb, parts.storesWeightLb);
 
 /** The stores lines with their weights, e.g. "2 × Rocket pod 1,040 lb"; "Clean" for none. */
 export const storesLines = (parts: GrossWeightPartsView) =>

@@ -18,6 +18,13 @@ export interface SlotActionHandlers {
   callSpare: (slot: SlotView) => void;
   upAgain: (slot: SlotView) => void;
   returnToPool: (slot: SlotView) => void;
+  setLoad: (slot: SlotView) => void;
+}
+
+/** What the signed-in person may do from a card: the handler arranges; air operations too sets loads. */
+export interface SlotActionRights {
+  arranges: boolean;
+  loads: boolean;
 }
 
 /**
@@ -25,8 +32,13 @@ export interface SlotActionHandlers {
  * applies to one aircraft; add its handler above and its entry below, with the condition under which it
  * makes sense for this slot.
  */
-export function slotActions(slot: SlotView, handlers: SlotActionHandlers): SlotAction[] {
+export function slotActions(slot: SlotView, rights: SlotActionRights, handlers: SlotActionHandlers): SlotAction[] {
   const actions: SlotAction[] = [];
+  // Fuel changes until the launch (a hot refuel); the server refuses it on a launched or scratched slot.
+  if (rights.loads && slot.status !== 'launched' && slot.status !== 'scratched') {
+    actions.push({ id: 'set-load', label: 'Fuel and stores…', run: () => handlers.setLoad(slot) });
+  }
+  if (!rights.arranges) return actions;
   // The server lets a pilot change only while the aircraft is planned or down.
   if ((slot.status === 'planned' && !slot.heldSpare) || slot.status === 'down') {
     const label = slot.pilotId === null ? 'Assign pilot…' : 'Change pilot…';

@@ -12,7 +12,7 @@ import { LiftedSlotCard, SortableSlotCard } from './slot-card.js';
 
 interface LineupBoardProps {
   snapshot: LineupSnapshot;
-  /** The handler arranges the lineup: the card and catapult menus are there (disabled while not live). */
+  /** The handler arranges the lineup: the catapult menus are there (disabled while not live). */
   arranges: boolean;
   /** The handler may drag now: arranges, and the board is live. */
   editable: boolean;
@@ -52,7 +52,7 @@ export function LineupBoard({
         slot={slot}
         movable={editable && isMovable(slot)}
         mark={marks.get(slot.id)}
-        menu={arranges && <SlotMenu slot={slot} actions={actionsFor(slot)} />}
+        menu={<SlotMenu slot={slot} actions={actionsFor(slot)} />}
       />
     );
   };
@@ -76,7 +76,7 @@ export function LineupBoard({
                     <Text fontSize="sm" color="nogo.fg" fontWeight="600">
                       {slot.sideNumber}
                     </Text>
-                    {arranges && <SlotMenu slot={slot} actions={actionsFor(slot)} />}
+                    <SlotMenu slot={slot} actions={actionsFor(slot)} />
                   </HStack>
                 ))}
               </HStack>

@@ -19,6 +19,7 @@ import { useCallSpare } from '../api/call-spare.js';
 import { useMarkDown } from '../api/mark-down.js';
 import { useMoveSlot } from '../api/move-slot.js';
 import { useReturnToPool } from '../api/return-to-pool.js';
+import { useSetLoad } from '../api/set-load.js';
 import { useSetCatapultStatus } from '../api/set-catapult-status.js';
 import { useUpAgain } from '../api/up-again.js';
 import { isDone, lineupWarnings } from '../lineup-model.js';
@@ -28,12 +29,13 @@ import { CallSpareDialog } from './call-spare-dialog.js';
 import { CatapultStatusDialog } from './catapult-status-dialog.js';
 import { LineupBoard } from './lineup-board.js';
 import { LineupWarnings } from './lineup-warnings.js';
+import { LoadDialog } from './load-dialog.js';
 import { MarkDownDialog } from './mark-down-dialog.js';
 import { ReasonDialog } from './reason-dialog.js';
 import { SuggestionDialog } from './suggestion-dialog.js';
 
 type OpenDialog =
-  | { kind: 'down' | 'pilot' | 'spare' | 'up' | 'return'; slot: SlotView }
+  | { kind: 'down' | 'pilot' | 'spare' | 'up' | 'return' | 'load'; slot: SlotView }
   /** `warning`: the server's sentence naming the aircraft a catapult down would suspend, to confirm. */
   | { kind: 'catapult'; lane: LaneView; warning?: string }
   | { kind: 'suggestion' }
@@ -80,7 +82,9 @@ function LineupSummary({ snapshot }: { snapshot: LineupSnapshot }) {
 
 function LineupWorkspace({ snapshot }: { snapshot: LineupSnapshot }) {
   const cycleId = snapshot.cycle.id;
-  const arranges = useHasRole('handler') && snapshot.cycle.state !== 'closed';
+  const open = snapshot.cycle.state !== 'closed';
+  const arranges = useHasRole('handler') && open;
+  const loads = useHasRole('handler', 'air_operations') && open;
   // Moves are drags, which the disabled fieldset of a stale board does not stop: they wait for it to be live.
   const live = useFiguresLive();
   const editable = arranges && live;
@@ -94,6 +98,7 @@ function LineupWorkspace({ snapshot }: { snapshot: LineupSnapshot }) {
   const callSpare = useCallSpare(cycleId);
   const upAgain = useUpAgain(cycleId);
   const returnToPool = useReturnToPool(cycleId);
+  const setLoad = useSetLoad(cycleId);
 
   const close = () => setDialog(null);
   const done = (title: string) => () => {
@@ -116,13 +121,18 @@ function LineupWorkspace({ snapshot }: { snapshot: LineupSnapshot }) {
         editable={editable}
         onMove={(request) => move.mutate(request, { onError: refused('Your move') })}
         actionsFor={(slot) =>
-          slotActions(slot, {
-            markDown: (chosen) => setDialog({ kind: 'down', slot: chosen }),
-            assignPilot: (chosen) => setDialog({ kind: 'pilot', slot: chosen }),
-            callSpare: (chosen) => setDialog({ kind: 'spare', slot: chosen }),
-            upAgain: (chosen) => setDialog({ kind: 'up', slot: chosen }),
-            returnToPool: (chosen) => setDialog({ kind: 'return', slot: chosen }),
-          })
+          slotActions(
+            slot,
+            { arranges, loads },
+            {
+              markDown: (chosen) => setDialog({ kind: 'down', slot: chosen }),
+              assignPilot: (chosen) => setDialog({ kind: 'pilot', slot: chosen }),
+              callSpare: (chosen) => setDialog({ kind: 'spare', slot: chosen }),
+              upAgain: (chosen) => setDialog({ kind: 'up', slot: chosen }),
+              returnToPool: (chosen) => setDialog({ kind: 'return', slot: chosen }),
+              setLoad: (chosen) => setDialog({ kind: 'load', slot: chosen }),
+            },
+          )
         }
         onCatapultStatus={(lane) => setDialog({ kind: 'catapult', lane })}
         poolAction={
@@ -222,6 +232,22 @@ function LineupWorkspace({ snapshot }: { snapshot: LineupSnapshot }) {
             returnToPool.mutate(
               { slotId: dialog.slot.id, slotVersion: dialog.slot.version, reason, catapultOfficerAgreed },
               { onSuccess: done(`${dialog.slot.sideNumber} is back in the deck pool`), onError: refused('The return') },
+            )
+          }
+        />
+      )}
+      {dialog?.kind === 'load' && (
+        <LoadDialog
+          slot={dialog.slot}
+          pending={setLoad.isPending}
+          onClose={close}
+          onConfirm={(load) =>
+            setLoad.mutate(
+              { slotId: dialog.slot.id, slotVersion: dialog.slot.version, ...load },
+              {
+                onSuccess: done(`Fuel and stores of ${dialog.slot.sideNumber} saved`),
+                onError: refused('The fuel and stores'),
+              },
             )
           }
         />

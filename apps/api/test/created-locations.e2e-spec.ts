@@ -1,6 +1,7 @@
 import type { LineupCommandResult } from '@catline/contracts';
 import type { INestApplication } from '@nestjs/common';
 import type { OpenAPIObject } from '@nestjs/swagger';
+import { DocumentedAnswers } from './support/documented-answers.js';
 import { aircraftTypeBody, TEST_PASSWORD, unique } from './support/fleet-fixtures.js';
 import { AIR_OPS, LineupDriver } from './support/lineup-fixtures.js';
 import { startTestApp } from './support/test-app.js';
@@ -92,12 +93,14 @@ describe('every creation names what it created, and the name can be read', () =>
   let app: INestApplication;
   let deck: LineupDriver;
   let document: OpenAPIObject;
+  let documented: DocumentedAnswers;
 
   beforeAll(async () => {
     const started = await startTestApp();
     app = started.app;
     deck = new LineupDriver(started.url);
     document = (await deck.call(ADMIN, 'get', '/api/docs-json')).body as OpenAPIObject;
+    documented = await DocumentedAnswers.of(started.url);
   });
 
   afterAll(async () => {
@@ -113,16 +116,21 @@ describe('every creation names what it created, and the name can be read', () =>
     expect(documented.sort()).toEqual(Object.keys(CREATIONS).sort());
   });
 
-  it.each(Object.entries(CREATIONS))('%s: 201, and a GET of its Location answers 200 with it', async (_, creation) => {
-    const { path, body } = await creation.request(deck);
-    const answer = await deck.call(creation.as, 'post', path, body);
-    expect(answer.status).toBe(201);
-    const location = answer.headers.location as string;
-    expect(documentedPathOf(document, location)).toBeDefined();
-    expect(document.paths[documentedPathOf(document, location)!].get).toBeDefined();
+  it.each(Object.entries(CREATIONS))(
+    '%s: 201, and a GET of its Location answers 200 with it',
+    async (operation, creation) => {
+      const { path, body } = await creation.request(deck);
+      const answer = await deck.call(creation.as, 'post', path, body);
+      expect(answer.status).toBe(201);
+      expect(documented.problems('POST', operation.split(' ')[1], answer)).toEqual([]);
+      const location = answer.headers.location as string;
+      expect(documentedPathOf(document, location)).toBeDefined();
+      expect(document.paths[documentedPathOf(document, location)!].get).toBeDefined();
 
-    const read = await deck.call(creation.as, 'get', location);
-    expect(read.status).toBe(200);
-    expect(read.body).toEqual(creation.created(answer.body, body));
-  });
+      const read = await deck.call(creation.as, 'get', location);
+      expect(read.status).toBe(200);
+      expect(documented.problems('GET', documentedPathOf(document, location)!, read)).toEqual([]);
+      expect(read.body).toEqual(creation.created(answer.body, body));
+    },
+  );
 });

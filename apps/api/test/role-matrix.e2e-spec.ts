@@ -3,6 +3,7 @@ import type { INestApplication } from '@nestjs/common';
 import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
 import request from 'supertest';
 import { type MatrixContext, type MatrixRoute, matrixRoutes } from './role-matrix/index.js';
+import { DocumentedAnswers } from './support/documented-answers.js';
 import { bearer, demoEmail, signIn } from './support/sign-in.js';
 import { startTestApp } from './support/test-app.js';
 
@@ -32,9 +33,13 @@ describe('role matrix', () => {
   let app: INestApplication;
   let url: string;
   const tokens = new Map<Role, string>();
+  let documented: DocumentedAnswers;
+  /** How the answers the rows got disagree with the document, gathered for the last test. */
+  const undocumented = new Set<string>();
 
   beforeAll(async () => {
     ({ app, url } = await startTestApp());
+    documented = await DocumentedAnswers.of(url);
     for (const role of ROLES) tokens.set(role, await signIn(url, demoEmail(role)));
   });
 
@@ -110,6 +115,7 @@ describe('role matrix', () => {
       for (const caller of [null, ...ROLES]) {
         const response = await call(route, caller);
         const who = caller ?? 'nobody';
+        for (const problem of documented.problems(route.method, route.path, response)) undocumented.add(problem);
         if (!isAllowed(route, caller)) {
           expected.push(`${who}: ${caller ? 403 : 401}`);
           outcomes.push(`${who}: ${response.status}`);
@@ -123,4 +129,9 @@ describe('role matrix', () => {
       expect(outcomes).toEqual(expected);
     },
   );
+
+  // After the rows: every answer they got, success or refusal, is one the document describes.
+  it('got only answers the document describes: a listed status, a body of its schema, a listed code', () => {
+    expect([...undocumented]).toEqual([]);
+  });
 });

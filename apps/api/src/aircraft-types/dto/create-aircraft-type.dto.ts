@@ -50,7 +50,11 @@ export class CreateAircraftTypeDto implements CreateAircraftTypeRequest {
   @Max(RANGES.maxGrossWeightLb.max)
   maxGrossWeightLb: number;
 
-  @ApiPropertyOptional({ nullable: true, description: 'Operating weight with crew, pounds; null while not known.' })
+  @ApiPropertyOptional({
+    type: 'integer',
+    nullable: true,
+    description: 'Operating weight with crew, pounds; null while not known.',
+  })
   @IsOptional()
   @IsInt()
   @Min(RANGES.operatingWeightLb.min)
@@ -75,7 +79,11 @@ export class CreateAircraftTypeDto implements CreateAircraftTypeRequest {
   @Max(RANGES.requiredExcessKt.max)
   requiredExcessKt: number;
 
-  @ApiPropertyOptional({ nullable: true, description: 'Pounds; null when the type never needs afterburner.' })
+  @ApiPropertyOptional({
+    type: 'integer',
+    nullable: true,
+    description: 'Pounds; null when the type never needs afterburner.',
+  })
   @IsOptional()
   @IsInt()
   @IsPositive()

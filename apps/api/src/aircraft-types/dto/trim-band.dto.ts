@@ -3,7 +3,11 @@ import { ApiProperty } from '@nestjs/swagger';
 import { IsNumber, IsPositive, Max, Min, ValidateIf } from 'class-validator';
 
 export class TrimBandDto implements TrimBand {
-  @ApiProperty({ nullable: true, description: 'Upper gross weight of the band, pounds; null for the last band.' })
+  @ApiProperty({
+    type: Number,
+    nullable: true,
+    description: 'Upper gross weight of the band, pounds; null for the last band.',
+  })
   @ValidateIf((_band: object, value: unknown) => value !== null)
   @IsNumber({}, { message: 'upToLb must be a number, or null for the last band' })
   @IsPositive()

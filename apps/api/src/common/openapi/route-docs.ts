@@ -3,7 +3,7 @@ import { type INestApplication, RequestMethod, type Type } from '@nestjs/common'
 import { HTTP_CODE_METADATA, METHOD_METADATA, PATH_METADATA, ROUTE_ARGS_METADATA } from '@nestjs/common/constants.js';
 import { RouteParamtypes } from '@nestjs/common/enums/route-paramtypes.enum.js';
 import { ModulesContainer } from '@nestjs/core';
-import { ApiBearerAuth, ApiOperation, ApiParam, ApiProduces, ApiResponse } from '@nestjs/swagger';
+import { ApiBearerAuth, ApiOperation, ApiParam, ApiResponse } from '@nestjs/swagger';
 import { IS_PUBLIC } from '../decorators/public.decorator.js';
 import { ROLES_KEY } from '../decorators/roles.decorator.js';
 import { API_DOC, type ApiDocMetadata, type RefusalStatus } from './api-doc.decorator.js';
@@ -131,9 +131,13 @@ function decorate(controller: Type<unknown>, name: string, route: RouteFacts, do
     ? { Location: { description: 'The address of the new resource.', schema: { type: 'string' as const } } }
     : undefined;
   if (doc.response === 'csv') {
+    // Only the success is CSV: a refusal of the same route is the JSON error body like any other.
     decorators.push(
-      ApiProduces('text/csv'),
-      ApiResponse({ status: route.status, description, schema: { type: 'string', format: 'binary' } }),
+      ApiResponse({
+        status: route.status,
+        description,
+        content: { 'text/csv': { schema: { type: 'string', format: 'binary' } } },
+      }),
     );
   } else if (doc.response) {
     decorators.push(ApiResponse({ status: route.status, description, headers, type: doc.response }));

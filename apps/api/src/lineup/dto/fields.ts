@@ -25,7 +25,9 @@ export const VersionField = (description: string) =>
 /** A reason a person writes, kept with the slot and the change (200 characters). */
 export const ReasonField = (field: string, { optional = false } = {}) =>
   applyDecorators(
-    ...(optional ? [ApiPropertyOptional({ maxLength: 200 }), IsOptional()] : [ApiProperty({ maxLength: 200 })]),
+    ...(optional
+      ? [ApiPropertyOptional({ type: String, maxLength: 200 }), IsOptional()]
+      : [ApiProperty({ type: String, maxLength: 200 })]),
     Trim(),
     IsString(),
     IsNotEmpty({ message: `${field} must not be empty` }),

@@ -75,13 +75,13 @@ export class LaunchFiguresDto implements LaunchFigures {
   @ApiProperty({ description: 'Knots.' })
   endSpeedKt: number;
 
-  @ApiProperty({ nullable: true, description: 'Knots; null outside the launch table.' })
+  @ApiProperty({ type: Number, nullable: true, description: 'Knots; null outside the launch table.' })
   requiredAirspeedKt: number | null;
 
-  @ApiProperty({ nullable: true, description: 'Knots; null outside the launch table.' })
+  @ApiProperty({ type: Number, nullable: true, description: 'Knots; null outside the launch table.' })
   requiredWindOverDeckKt: number | null;
 
-  @ApiProperty({ nullable: true, description: 'Knots; null outside the launch table.' })
+  @ApiProperty({ type: Number, nullable: true, description: 'Knots; null outside the launch table.' })
   marginKt: number | null;
 
   @ApiProperty({

@@ -171,14 +171,19 @@ export interface UserView {
 
 // Requests. The API's DTOs implement these and add the validation rules.
 
-export interface CreateSquadronRequest {
+/** Where a new ship-owned row goes: the caller's own ship, left out; a fleet admin must name one. */
+export interface ShipChoice {
+  shipId?: number;
+}
+
+export interface CreateSquadronRequest extends ShipChoice {
   name: string;
   code: string;
   /** Where the cycle summary goes. */
   email: string;
 }
 
-export interface CreateAircraftTypeRequest {
+export interface CreateAircraftTypeRequest extends ShipChoice {
   designation: string;
   name: string;
   maxGrossWeightLb: number;
@@ -208,6 +213,8 @@ export interface CreateAircraftRequest {
 }
 
 export interface CreateUserRequest {
+  /** The person's ship, as ShipChoice; null (a fleet admin may send it) makes a fleet admin. */
+  shipId?: number | null;
   email: string;
   name: string;
   role: Role;

@@ -144,6 +144,8 @@ export type PasswordLinkRefusalCode = (typeof PASSWORD_LINK_REFUSAL_CODES)[numbe
 /** The fleet: ships and catapults, aircraft, aircraft types, squadrons. */
 export const SHIP_REFUSAL_CODES = [
   'ship_not_found',
+  /** A fleet admin adding a ship's person, squadron or type must say which ship. */
+  'ship_required',
   'catapult_not_found',
   'invalid_configuration',
   'spot_in_use',

@@ -13,7 +13,9 @@ import {
   Put,
 } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
+import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { Roles } from '../common/decorators/roles.decorator.js';
+import type { AuthenticatedUser } from '../common/authenticated-user.js';
 import { AircraftTypesService } from './aircraft-types.service.js';
 import { CreateAircraftTypeDto } from './dto/create-aircraft-type.dto.js';
 import { LaunchTableDto } from './dto/launch-table.dto.js';
@@ -30,25 +32,25 @@ export class AircraftTypesController {
 
   @ApiDoc('List the aircraft types', { response: [AircraftTypeViewDto] })
   @Get()
-  list(): Promise<AircraftTypeView[]> {
-    return this.types.list();
+  list(@CurrentUser() caller: AuthenticatedUser): Promise<AircraftTypeView[]> {
+    return this.types.list(caller);
   }
 
   @ApiDoc('Read one aircraft type', { response: AircraftTypeViewDto, refuses: { 404: ['aircraft_type_not_found'] } })
   @Get(':id')
-  get(@Param('id', ParseIntPipe) id: number): Promise<AircraftTypeView> {
-    return this.types.get(id);
+  get(@CurrentUser() caller: AuthenticatedUser, @Param('id', ParseIntPipe) id: number): Promise<AircraftTypeView> {
+    return this.types.get(caller, id);
   }
 
   @ApiDoc('Add an aircraft type', {
     response: AircraftTypeViewDto,
-    refuses: { 400: ['invalid_launch_data'], 409: ['designation_taken'] },
+    refuses: { 400: ['invalid_launch_data', 'ship_required'], 404: ['ship_not_found'], 409: ['designation_taken'] },
   })
   @Roles('admin')
   @Post()
   @Created((created: AircraftTypeView) => `/api/aircraft-types/${created.id}`)
-  create(@Body() body: CreateAircraftTypeDto): Promise<AircraftTypeView> {
-    return this.types.create(body);
+  create(@CurrentUser() caller: AuthenticatedUser, @Body() body: CreateAircraftTypeDto): Promise<AircraftTypeView> {
+    return this.types.create(caller, body);
   }
 
   @ApiDoc('Change an aircraft type', {
@@ -57,8 +59,12 @@ export class AircraftTypesController {
   })
   @Roles('admin')
   @Patch(':id')
-  update(@Param('id', ParseIntPipe) id: number, @Body() body: UpdateAircraftTypeDto): Promise<AircraftTypeView> {
-    return this.types.update(id, body);
+  update(
+    @CurrentUser() caller: AuthenticatedUser,
+    @Param('id', ParseIntPipe) id: number,
+    @Body() body: UpdateAircraftTypeDto,
+  ): Promise<AircraftTypeView> {
+    return this.types.update(caller, id, body);
   }
 
   @ApiDoc('Replace the launch table of an aircraft type', {
@@ -67,8 +73,12 @@ export class AircraftTypesController {
   })
   @Roles('admin')
   @Put(':id/launch-table')
-  replaceLaunchTable(@Param('id', ParseIntPipe) id: number, @Body() body: LaunchTableDto): Promise<AircraftTypeView> {
-    return this.types.replaceLaunchTable(id, body.rows);
+  replaceLaunchTable(
+    @CurrentUser() caller: AuthenticatedUser,
+    @Param('id', ParseIntPipe) id: number,
+    @Body() body: LaunchTableDto,
+  ): Promise<AircraftTypeView> {
+    return this.types.replaceLaunchTable(caller, id, body.rows);
   }
 
   @ApiDoc('Replace the stores catalogue of an aircraft type', {
@@ -79,10 +89,11 @@ export class AircraftTypesController {
   @Roles('admin')
   @Put(':id/stores-catalogue')
   replaceStoresCatalogue(
+    @CurrentUser() caller: AuthenticatedUser,
     @Param('id', ParseIntPipe) id: number,
     @Body() body: StoresCatalogueDto,
   ): Promise<AircraftTypeView> {
-    return this.types.replaceStoresCatalogue(id, body.items);
+    return this.types.replaceStoresCatalogue(caller, id, body.items);
   }
 
   @ApiDoc('Remove an aircraft type', {
@@ -91,7 +102,7 @@ export class AircraftTypesController {
   @Roles('admin')
   @Delete(':id')
   @HttpCode(HttpStatus.NO_CONTENT)
-  remove(@Param('id', ParseIntPipe) id: number): Promise<void> {
-    return this.types.remove(id);
+  remove(@CurrentUser() caller: AuthenticatedUser, @Param('id', ParseIntPipe) id: number): Promise<void> {
+    return this.types.remove(caller, id);
   }
 }

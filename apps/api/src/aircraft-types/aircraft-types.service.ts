@@ -4,6 +4,8 @@ import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, type EntityManager, Not } from 'typeorm';
 import { AuditTrail } from '../audit/audit-trail.service.js';
 import { definedFields } from '../common/defined-fields.js';
+import { type ShipScope, shipWhere } from '../common/ship-scope.js';
+import { ownerShip } from '../ships/owner-ship.js';
 import { Aircraft } from '../database/entities/aircraft.entity.js';
 import { isDuplicateKey, isStillReferenced } from '../common/errors/database-errors.js';
 import { toAircraftTypeView } from './aircraft-type.mapper.js';
@@ -27,21 +29,26 @@ export class AircraftTypesService {
     private readonly audit: AuditTrail,
   ) {}
 
-  async list(): Promise<AircraftTypeView[]> {
-    const types = await this.dataSource.manager.find(AircraftType, { order: { designation: 'ASC' } });
+  async list(scope: ShipScope): Promise<AircraftTypeView[]> {
+    const types = await this.dataSource.manager.find(AircraftType, {
+      where: shipWhere(scope),
+      order: { designation: 'ASC' },
+    });
     return types.map(toAircraftTypeView);
   }
 
-  async get(id: number): Promise<AircraftTypeView> {
-    return toAircraftTypeView(await this.findOrFail(this.dataSource.manager, id));
+  async get(scope: ShipScope, id: number): Promise<AircraftTypeView> {
+    return toAircraftTypeView(await this.findOrFail(this.dataSource.manager, scope, id));
   }
 
-  async create(body: CreateAircraftTypeDto): Promise<AircraftTypeView> {
+  async create(scope: ShipScope, body: CreateAircraftTypeDto): Promise<AircraftTypeView> {
     this.checkLaunchData(trimBandProblems(body.trimBands), launchTableProblems(body.launchTable));
     const saved = await this.dataSource.transaction(async (manager) => {
+      const shipId = await ownerShip(manager, scope, body.shipId);
       await this.checkDesignationFree(manager, body.designation);
       const type = manager.create(AircraftType, {
         ...body,
+        shipId,
         operatingWeightLb: body.operatingWeightLb ?? null,
         afterburnerFromLb: body.afterburnerFromLb ?? null,
         storesCatalogue: [],
@@ -59,10 +66,10 @@ export class AircraftTypesService {
     return toAircraftTypeView(saved);
   }
 
-  async update(id: number, body: UpdateAircraftTypeDto): Promise<AircraftTypeView> {
+  async update(scope: ShipScope, id: number, body: UpdateAircraftTypeDto): Promise<AircraftTypeView> {
     if (body.trimBands) this.checkLaunchData(trimBandProblems(body.trimBands), []);
     return this.dataSource.transaction(async (manager) => {
-      const type = await this.findOrFail(manager, id, true);
+      const type = await this.findOrFail(manager, scope, id, true);
       if (body.designation !== undefined) await this.checkDesignationFree(manager, body.designation, id);
       const before = toAircraftTypeView(type);
       Object.assign(type, definedFields(body));
@@ -78,10 +85,10 @@ export class AircraftTypesService {
     });
   }
 
-  async replaceLaunchTable(id: number, rows: LaunchTableRow[]): Promise<AircraftTypeView> {
+  async replaceLaunchTable(scope: ShipScope, id: number, rows: LaunchTableRow[]): Promise<AircraftTypeView> {
     this.checkLaunchData([], launchTableProblems(rows));
     return this.dataSource.transaction(async (manager) => {
-      const type = await this.findOrFail(manager, id, true);
+      const type = await this.findOrFail(manager, scope, id, true);
       const before = type.launchTable;
       type.launchTable = rows;
       await manager.save(AircraftType, type);
@@ -97,11 +104,11 @@ export class AircraftTypesService {
     });
   }
 
-  async replaceStoresCatalogue(id: number, items: StoresItem[]): Promise<AircraftTypeView> {
+  async replaceStoresCatalogue(scope: ShipScope, id: number, items: StoresItem[]): Promise<AircraftTypeView> {
     this.checkLaunchData(storesCatalogueProblems(items));
     const catalogue = orderedStoresCatalogue(items);
     return this.dataSource.transaction(async (manager) => {
-      const type = await this.findOrFail(manager, id, true);
+      const type = await this.findOrFail(manager, scope, id, true);
       const before = type.storesCatalogue;
       type.storesCatalogue = catalogue;
       await manager.save(AircraftType, type);
@@ -117,9 +124,9 @@ export class AircraftTypesService {
     });
   }
 
-  async remove(id: number): Promise<void> {
+  async remove(scope: ShipScope, id: number): Promise<void> {
     await this.dataSource.transaction(async (manager) => {
-      const type = await this.findOrFail(manager, id, true);
+      const type = await this.findOrFail(manager, scope, id, true);
       const inUse = () => manager.countBy(Aircraft, { typeId: id });
       const count = await inUse();
       if (count > 0) throw this.inUse(type, count);
@@ -146,9 +153,9 @@ export class AircraftTypesService {
     }
   }
 
-  private async findOrFail(manager: EntityManager, id: number, lock = false): Promise<AircraftType> {
+  private async findOrFail(manager: EntityManager, scope: ShipScope, id: number, lock = false): Promise<AircraftType> {
     const type = await manager.findOne(AircraftType, {
-      where: { id },
+      where: { id, ...shipWhere(scope) },
       ...(lock ? { lock: { mode: 'pessimistic_write' as const } } : {}),
     });
     if (!type) throw new AircraftTypesException('aircraft_type_not_found', `There is no aircraft type with id ${id}.`);

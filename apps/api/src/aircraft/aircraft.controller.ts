@@ -13,7 +13,9 @@ import {
   Query,
 } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
+import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { Roles } from '../common/decorators/roles.decorator.js';
+import type { AuthenticatedUser } from '../common/authenticated-user.js';
 import { AircraftService } from './aircraft.service.js';
 import { CreateAircraftDto } from './dto/create-aircraft.dto.js';
 import { UpdateAircraftDto } from './dto/update-aircraft.dto.js';
@@ -29,14 +31,14 @@ export class AircraftController {
 
   @ApiDoc('List the aircraft, a page at a time', { response: AircraftPageDto })
   @Get()
-  list(@Query() query: RecordsPageQueryDto): Promise<Page<AircraftView>> {
-    return this.aircraft.list(query);
+  list(@CurrentUser() caller: AuthenticatedUser, @Query() query: RecordsPageQueryDto): Promise<Page<AircraftView>> {
+    return this.aircraft.list(caller, query);
   }
 
   @ApiDoc('Read one aircraft', { response: AircraftViewDto, refuses: { 404: ['aircraft_not_found'] } })
   @Get(':id')
-  get(@Param('id', ParseIntPipe) id: number): Promise<AircraftView> {
-    return this.aircraft.get(id);
+  get(@CurrentUser() caller: AuthenticatedUser, @Param('id', ParseIntPipe) id: number): Promise<AircraftView> {
+    return this.aircraft.get(caller, id);
   }
 
   @ApiDoc('Add an aircraft', {
@@ -46,8 +48,8 @@ export class AircraftController {
   @Roles('admin')
   @Post()
   @Created((created: AircraftView) => `/api/aircraft/${created.id}`)
-  create(@Body() body: CreateAircraftDto): Promise<AircraftView> {
-    return this.aircraft.create(body);
+  create(@CurrentUser() caller: AuthenticatedUser, @Body() body: CreateAircraftDto): Promise<AircraftView> {
+    return this.aircraft.create(caller, body);
   }
 
   @ApiDoc('Change an aircraft', {
@@ -56,15 +58,19 @@ export class AircraftController {
   })
   @Roles('admin')
   @Patch(':id')
-  update(@Param('id', ParseIntPipe) id: number, @Body() body: UpdateAircraftDto): Promise<AircraftView> {
-    return this.aircraft.update(id, body);
+  update(
+    @CurrentUser() caller: AuthenticatedUser,
+    @Param('id', ParseIntPipe) id: number,
+    @Body() body: UpdateAircraftDto,
+  ): Promise<AircraftView> {
+    return this.aircraft.update(caller, id, body);
   }
 
   @ApiDoc('Remove an aircraft', { refuses: { 404: ['aircraft_not_found'], 409: ['aircraft_in_use'] } })
   @Roles('admin')
   @Delete(':id')
   @HttpCode(HttpStatus.NO_CONTENT)
-  remove(@Param('id', ParseIntPipe) id: number): Promise<void> {
-    return this.aircraft.remove(id);
+  remove(@CurrentUser() caller: AuthenticatedUser, @Param('id', ParseIntPipe) id: number): Promise<void> {
+    return this.aircraft.remove(caller, id);
   }
 }

@@ -5,6 +5,7 @@ import { type DataSource, type EntityManager, Not } from 'typeorm';
 import { AuditTrail } from '../audit/audit-trail.service.js';
 import { definedFields } from '../common/defined-fields.js';
 import { pageOf, type PageWindow } from '../common/paging/page-query.dto.js';
+import { type ShipScope, shipWhere } from '../common/ship-scope.js';
 import { AircraftType } from '../database/entities/aircraft-type.entity.js';
 import { isDuplicateKey, isStillReferenced } from '../common/errors/database-errors.js';
 import { Slot } from '../database/entities/slot.entity.js';
@@ -29,8 +30,9 @@ export class AircraftService {
     private readonly audit: AuditTrail,
   ) {}
 
-  async list(window: PageWindow): Promise<Page<AircraftView>> {
+  async list(scope: ShipScope, window: PageWindow): Promise<Page<AircraftView>> {
     const [aircraft, total] = await this.dataSource.manager.findAndCount(Aircraft, {
+      where: shipWhere(scope),
       relations: WITH_NAMES,
       order: { sideNumber: 'ASC', id: 'ASC' },
       take: window.limit,
@@ -39,18 +41,24 @@ export class AircraftService {
     return pageOf(window, aircraft.map(toAircraftView), total);
   }
 
-  async get(id: number): Promise<AircraftView> {
-    const aircraft = await this.dataSource.manager.findOne(Aircraft, { where: { id }, relations: WITH_NAMES });
+  async get(scope: ShipScope, id: number): Promise<AircraftView> {
+    const aircraft = await this.dataSource.manager.findOne(Aircraft, {
+      where: { id, ...shipWhere(scope) },
+      relations: WITH_NAMES,
+    });
     if (!aircraft) throw noAircraft(id);
     return toAircraftView(aircraft);
   }
 
-  async create(body: CreateAircraftDto): Promise<AircraftView> {
+  /** The aircraft goes to its squadron's ship. */
+  async create(scope: ShipScope, body: CreateAircraftDto): Promise<AircraftView> {
     return this.dataSource.transaction(async (manager) => {
-      await this.checkReferences(manager, body);
+      const squadron = await manager.findOneBy(Squadron, { id: body.squadronId, ...shipWhere(scope) });
+      if (!squadron) throw this.unknownSquadron(body.squadronId);
+      await this.checkReferences(manager, squadron.shipId, body);
       const saved = await this.save(
         manager,
-        manager.create(Aircraft, { ...body, serviceable: body.serviceable ?? true }),
+        manager.create(Aircraft, { ...body, shipId: squadron.shipId, serviceable: body.serviceable ?? true }),
       );
       this.logger.log(`Aircraft ${saved.sideNumber} added`);
       const view = await this.view(manager, saved.id);
@@ -64,10 +72,10 @@ export class AircraftService {
     });
   }
 
-  async update(id: number, body: UpdateAircraftDto): Promise<AircraftView> {
+  async update(scope: ShipScope, id: number, body: UpdateAircraftDto): Promise<AircraftView> {
     return this.dataSource.transaction(async (manager) => {
-      const aircraft = await this.findOrFail(manager, id);
-      await this.checkReferences(manager, body, id);
+      const aircraft = await this.findOrFail(manager, scope, id);
+      await this.checkReferences(manager, aircraft.shipId, body, id);
       const before = await this.view(manager, id);
       await this.save(manager, Object.assign(aircraft, definedFields(body)));
       const after = await this.view(manager, id);
@@ -82,9 +90,9 @@ export class AircraftService {
     });
   }
 
-  async remove(id: number): Promise<void> {
+  async remove(scope: ShipScope, id: number): Promise<void> {
     await this.dataSource.transaction(async (manager) => {
-      const aircraft = await this.findOrFail(manager, id);
+      const aircraft = await this.findOrFail(manager, scope, id);
       const inUse = () => manager.countBy(Slot, { aircraftId: id });
       const slots = await inUse();
       if (slots > 0) throw this.inUse(aircraft, slots);
@@ -108,14 +116,19 @@ export class AircraftService {
     return toAircraftView(await manager.findOneOrFail(Aircraft, { where: { id }, relations: WITH_NAMES }));
   }
 
-  private async findOrFail(manager: EntityManager, id: number): Promise<Aircraft> {
-    const aircraft = await manager.findOne(Aircraft, { where: { id }, lock: { mode: 'pessimistic_write' } });
+  private async findOrFail(manager: EntityManager, scope: ShipScope, id: number): Promise<Aircraft> {
+    const aircraft = await manager.findOne(Aircraft, {
+      where: { id, ...shipWhere(scope) },
+      lock: { mode: 'pessimistic_write' },
+    });
     if (!aircraft) throw noAircraft(id);
     return aircraft;
   }
 
+  /** The type, squadron and deck spot must all be of the aircraft's ship. */
   private async checkReferences(
     manager: EntityManager,
+    shipId: number,
     body: Partial<CreateAircraftDto>,
     exceptId?: number,
   ): Promise<void> {
@@ -124,14 +137,14 @@ export class AircraftService {
         exceptId === undefined ? { sideNumber: body.sideNumber } : { sideNumber: body.sideNumber, id: Not(exceptId) };
       if (await manager.existsBy(Aircraft, where)) throw this.sideNumberTaken(body.sideNumber);
     }
-    if (body.typeId !== undefined && !(await manager.existsBy(AircraftType, { id: body.typeId }))) {
+    if (body.typeId !== undefined && !(await manager.existsBy(AircraftType, { id: body.typeId, shipId }))) {
       throw new AircraftException('unknown_reference', `There is no aircraft type with id ${body.typeId}.`);
     }
-    if (body.squadronId !== undefined && !(await manager.existsBy(Squadron, { id: body.squadronId }))) {
-      throw new AircraftException('unknown_reference', `There is no squadron with id ${body.squadronId}.`);
+    if (body.squadronId !== undefined && !(await manager.existsBy(Squadron, { id: body.squadronId, shipId }))) {
+      throw this.unknownSquadron(body.squadronId);
     }
     if (body.parkedSpot !== undefined) {
-      const spots = (await manager.find(Ship)).flatMap((ship) => ship.deckSpots.map((spot) => spot.name));
+      const spots = (await manager.findOneByOrFail(Ship, { id: shipId })).deckSpots.map((spot) => spot.name);
       if (!spots.includes(body.parkedSpot)) {
         throw new AircraftException(
           'unknown_reference',
@@ -149,6 +162,10 @@ export class AircraftService {
       if (isDuplicateKey(error)) throw this.sideNumberTaken(aircraft.sideNumber);
       throw error;
     }
+  }
+
+  private unknownSquadron(id: number): AircraftException {
+    return new AircraftException('unknown_reference', `There is no squadron with id ${id}.`);
   }
 
   private sideNumberTaken(sideNumber: string): AircraftException {

@@ -6,7 +6,9 @@ import type { AuthenticatedUser } from '../common/authenticated-user.js';
 import { requestContext } from '../common/request-context.js';
 import { IS_PUBLIC } from '../common/decorators/public.decorator.js';
 import { ROLES_KEY } from '../common/decorators/roles.decorator.js';
+import { isStrictId } from '../common/validation/strict-id.pipe.js';
 import { AuthException } from './auth.exception.js';
+import { CycleScope } from './cycle-scope.service.js';
 import { TokenVerifier } from './token-verifier.service.js';
 
 /** An HTTP request once the guard has let it through: the person and the session of their token. */
@@ -19,13 +21,14 @@ export function bearerToken(header: string | undefined): string | undefined {
 
 /**
  * Every HTTP route needs a valid access token unless marked @Public(), and a role from @Roles() when
- * it has one. Socket events are checked by the gateway itself (its handshake and guard use TokenVerifier).
+ * it has one; a route under a cycle only reaches that cycle on the caller's ship (CycleScope). Socket events are checked by the gateway itself (its handshake and guard use TokenVerifier).
  */
 @Injectable()
 export class AuthGuard implements CanActivate {
   constructor(
     private readonly reflector: Reflector,
     private readonly tokens: TokenVerifier,
+    private readonly cycles: CycleScope,
   ) {}
 
   async canActivate(context: ExecutionContext): Promise<boolean> {
@@ -50,6 +53,9 @@ export class AuthGuard implements CanActivate {
         `Only ${allowed} may do this; you are signed in as ${ROLE_LABELS[user.role]}.`,
       );
     }
+    // A malformed id is left to the route's StrictIdPipe, which refuses it with a 400.
+    const cycleId: unknown = request.params.cycleId;
+    if (typeof cycleId === 'string' && isStrictId(cycleId)) await this.cycles.check(user, Number(cycleId));
     return true;
   }
 }

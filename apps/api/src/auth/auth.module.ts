@@ -7,6 +7,7 @@ import type { Environment } from '../config/environment.js';
 import { ACCESS_TOKEN_ALGORITHM } from './access-token.js';
 import { AttemptLimits } from './attempt-limits.service.js';
 import { AuthController } from './auth.controller.js';
+import { CycleScope } from './cycle-scope.service.js';
 import { AuthGuard } from './auth.guard.js';
 import { AuthService } from './auth.service.js';
 import { PersonLookup } from './person-lookup.service.js';
@@ -34,8 +35,9 @@ import { TokenVerifier } from './token-verifier.service.js';
     RefreshTokens,
     SessionEnds,
     TokenVerifier,
+    CycleScope,
     { provide: APP_GUARD, useClass: AuthGuard },
   ],
-  exports: [AttemptLimits, TokenVerifier, RefreshTokens, SessionEnds],
+  exports: [AttemptLimits, TokenVerifier, CycleScope, RefreshTokens, SessionEnds],
 })
 export class AuthModule {}

@@ -7,4 +7,6 @@ export interface AuthenticatedUser {
   name: string;
   role: Role;
   catapultId: number | null;
+  /** The ship whose data they work on; null for a fleet admin (see ship-scope.ts). */
+  shipId: number | null;
 }

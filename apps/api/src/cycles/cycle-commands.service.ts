@@ -196,7 +196,7 @@ export class CycleCommandsService {
     return this.changes.apply(cycleId, actor, 'slot_added', async (manager, state) => {
       this.basis.requireOpen(state);
       const aircraft = await manager.findOne(Aircraft, {
-        where: { id: request.aircraftId },
+        where: { id: request.aircraftId, shipId: state.cycle.shipId },
         relations: { type: true },
       });
       if (!aircraft) throw new CyclesException('not_found', `Aircraft ${request.aircraftId} does not exist.`);
@@ -230,7 +230,7 @@ export class CycleCommandsService {
   }
 
   private async checkPilot(manager: EntityManager, state: LineupState, pilotId: number): Promise<void> {
-    const pilot = await manager.findOneBy(User, { id: pilotId });
+    const pilot = await manager.findOneBy(User, { id: pilotId, shipId: state.cycle.shipId });
     if (!pilot || pilot.role !== 'pilot' || !pilot.active) {
       throw new CyclesException('invalid_pilot', `Person ${pilotId} is not an active pilot.`);
     }

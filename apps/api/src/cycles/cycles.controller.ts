@@ -37,8 +37,8 @@ export class CyclesController {
 
   @ApiDoc('List the cycles, a page at a time', { response: CyclePageDto })
   @Get()
-  list(@Query() query: RecordsPageQueryDto): Promise<Page<CycleView>> {
-    return this.cycles.list(query);
+  list(@CurrentUser() caller: AuthenticatedUser, @Query() query: RecordsPageQueryDto): Promise<Page<CycleView>> {
+    return this.cycles.list(caller, query);
   }
 
   @ApiDoc('Read one cycle', { response: CycleViewDto, refuses: { 404: ['not_found'] } })
@@ -54,8 +54,8 @@ export class CyclesController {
   @Roles('air_operations')
   @Post()
   @Created((cycle: CycleView) => `/api/cycles/${cycle.id}`)
-  create(@Body() body: CreateCycleDto): Promise<CycleView> {
-    return this.cycles.create(body);
+  create(@CurrentUser() caller: AuthenticatedUser, @Body() body: CreateCycleDto): Promise<CycleView> {
+    return this.cycles.create(caller, body);
   }
 
   @ApiDoc('Change the conditions of a cycle', {

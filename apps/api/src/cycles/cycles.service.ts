@@ -5,6 +5,7 @@ import { DataSource, In } from 'typeorm';
 import { AuditTrail } from '../audit/audit-trail.service.js';
 import { isDuplicateKey } from '../common/errors/database-errors.js';
 import { pageOf, type PageWindow } from '../common/paging/page-query.dto.js';
+import { inShipScope, type ShipScope, shipWhere } from '../common/ship-scope.js';
 import { Slot } from '../database/entities/slot.entity.js';
 import { Ship } from '../database/entities/ship.entity.js';
 import { Clock } from '../cycle-changes/clock.js';
@@ -17,7 +18,10 @@ import { Cycle } from '../database/entities/cycle.entity.js';
 
 const NO_SLOTS: CycleCounts = { slotCount: 0, launchedCount: 0 };
 
-/** Cycles as records: listing, reading and creating. Changes to a cycle go through CycleCommandsService. */
+/**
+ * Cycles as records: listing, reading and creating. Changes to a cycle go through CycleCommandsService.
+ * Reading one cycle needs no scope here: the auth guard lets a route reach `:cycleId` only on the caller's ship.
+ */
 @Injectable()
 export class CyclesService {
   constructor(
@@ -27,8 +31,9 @@ export class CyclesService {
   ) {}
 
   /** Newest planned launch first. */
-  async list(window: PageWindow): Promise<Page<CycleView>> {
+  async list(scope: ShipScope, window: PageWindow): Promise<Page<CycleView>> {
     const [cycles, total] = await this.dataSource.manager.findAndCount(Cycle, {
+      where: shipWhere(scope),
       relations: { ship: true },
       order: { plannedLaunchAt: 'DESC', id: 'DESC' },
       take: window.limit,
@@ -45,7 +50,7 @@ export class CyclesService {
     return toCycleView(cycle, cycle.ship.profile, (await this.counts([id])).get(id) ?? NO_SLOTS);
   }
 
-  async create(request: CreateCycleDto): Promise<CycleView> {
+  async create(scope: ShipScope, request: CreateCycleDto): Promise<CycleView> {
     const times = {
       plannedLaunchAt: new Date(request.plannedLaunchAt),
       windowStartAt: new Date(request.windowStartAt),
@@ -53,7 +58,8 @@ export class CyclesService {
     };
     checkWindow(times);
     const ship = await this.dataSource.manager.findOneBy(Ship, { id: request.shipId });
-    if (!ship) throw new CyclesException('not_found', `Ship ${request.shipId} does not exist.`);
+    if (!ship || !inShipScope(scope, ship.id))
+      throw new CyclesException('not_found', `Ship ${request.shipId} does not exist.`);
     const { latitudeDeg = null, longitudeDeg = null } = request;
     const position = { latitudeDeg, longitudeDeg };
     const night = nightOf(

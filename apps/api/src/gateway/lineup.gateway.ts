@@ -9,6 +9,7 @@ import {
   SubscribeMessage,
   WebSocketGateway,
 } from '@nestjs/websockets';
+import { CycleScope } from '../auth/cycle-scope.service.js';
 import { SessionEnds } from '../auth/session-ends.service.js';
 import { TokenVerifier } from '../auth/token-verifier.service.js';
 import { Roles } from '../common/decorators/roles.decorator.js';
@@ -44,6 +45,7 @@ export class LineupGateway implements OnGatewayInit<CatlineServer>, OnModuleDest
     private readonly sessionEnds: SessionEnds,
     private readonly feed: LineupChangeFeed,
     private readonly joins: CycleJoinService,
+    private readonly cycleScope: CycleScope,
     private readonly config: ConfigService<Environment, true>,
   ) {}
 
@@ -72,7 +74,8 @@ export class LineupGateway implements OnGatewayInit<CatlineServer>, OnModuleDest
 
   /**
    * Answers with a snapshot, or with the changes after `sinceVersion` when the change log still holds them.
-   * The guard has just checked the person again (removed, role or password changed, logged out).
+   * The guard has just checked the person again (removed, role or password changed, logged out); a cycle
+   * of another ship is answered as one that does not exist.
    */
   @Roles(...ROLES)
   @SubscribeMessage('cycle:join')
@@ -83,6 +86,7 @@ export class LineupGateway implements OnGatewayInit<CatlineServer>, OnModuleDest
   ): Promise<void> {
     if (typeof ack !== 'function')
       throw new SocketRefusal('ack_required', 'cycle:join must be sent with an acknowledgement.');
+    await this.cycleScope.check(socket.data.user!, request.cycleId);
     await this.joins.join(request, { enter: () => void socket.join(cycleRoom(request.cycleId)), answer: ack });
   }
 

@@ -24,20 +24,27 @@ const NOT_FLYING: readonly SlotStatus[] = ['down', 'scratched'];
 /** The cycle's slots as the check needs them: with their aircraft. */
 type CycleSlot = Pick<Slot, 'aircraftId' | 'pilotId' | 'status'> & { aircraft: Pick<Aircraft, 'sideNumber'> };
 
-/** The fleet, people and cycle an air plan's lines are matched against, read with the caller's manager. */
+/**
+ * The fleet, people and cycle an air plan's lines are matched against, read with the caller's manager:
+ * only the aircraft and people of the cycle's ship (another ship's side number is an unknown one).
+ */
 async function planContext(
   manager: EntityManager,
   lines: AirPlanLine[],
-  cycleNumber: number,
+  cycle: Pick<Cycle, 'number' | 'shipId'>,
   slots: CycleSlot[],
 ): Promise<PlanContext> {
+  const { shipId } = cycle;
   const sides = [...new Set(lines.map((line) => line.sideNumber))];
   const emails = [...new Set(lines.flatMap((line) => (line.pilotEmail === null ? [] : [line.pilotEmail])))];
   const [aircraft, people] = await Promise.all([
     sides.length === 0
       ? []
-      : manager.find(Aircraft, { where: { sideNumber: In(sides) }, relations: { type: true, squadron: true } }),
-    emails.length === 0 ? [] : manager.find(User, { where: { email: In(emails) } }),
+      : manager.find(Aircraft, {
+          where: { sideNumber: In(sides), shipId },
+          relations: { type: true, squadron: true },
+        }),
+    emails.length === 0 ? [] : manager.find(User, { where: { email: In(emails), shipId } }),
   ]);
   return {
     aircraft: new Map(
@@ -60,7 +67,7 @@ async function planContext(
       ]),
     ),
     cycle: {
-      number: cycleNumber,
+      number: cycle.number,
       aircraftIds: new Set(slots.map((slot) => slot.aircraftId)),
       pilotsFlying: new Map(
         slots.flatMap((slot) =>
@@ -96,7 +103,7 @@ export class AirPlanImports {
     const text = await this.uploads.textOf(file, target, user, AIR_PLAN_LAYOUT);
     const read = readAirPlan(text);
     const slots = await manager.find(Slot, { where: { cycleId }, relations: { aircraft: true } });
-    const checked = checkAirPlan(read.lines, await planContext(manager, read.lines, cycle.number, slots));
+    const checked = checkAirPlan(read.lines, await planContext(manager, read.lines, cycle, slots));
     const problems = sortProblems([...read.problems, ...checked.problems], AIR_PLAN_COLUMNS);
     const upload = await this.uploads.record(file!, target, user, problems, checked.rows);
     return toImportPreview<AirPlanRow>(upload, checked.rows);
@@ -114,7 +121,7 @@ export class AirPlanImports {
       await this.basis.cycleAsSeen(manager, state, basisVersion);
       const lines = upload.rows as AirPlanLine[];
       // The fleet, the people and the cycle may have moved on since the preview: checked again, under the cycle's lock.
-      const checked = checkAirPlan(lines, await planContext(manager, lines, state.cycle.number, state.slots));
+      const checked = checkAirPlan(lines, await planContext(manager, lines, state.cycle, state.slots));
       if (checked.problems.length > 0) throw this.outOfDate(checked);
       const starts = await startingPositions(
         manager,

@@ -6,6 +6,7 @@ import { AuditTrail } from '../audit/audit-trail.service.js';
 import { toAircraftTypeView } from '../aircraft-types/aircraft-type.mapper.js';
 import { AircraftType } from '../database/entities/aircraft-type.entity.js';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
+import { shipWhere } from '../common/ship-scope.js';
 import { sortProblems } from './csv-table.js';
 import type { UploadedCsv } from './csv-upload.js';
 import { ImportsException } from './imports.exception.js';
@@ -15,7 +16,10 @@ import { UploadsService } from './uploads.service.js';
 
 const notFound = (id: number) => new ImportsException('target_not_found', `There is no aircraft type with id ${id}.`);
 
-/** Launch table import: a preview reads and checks the file; its confirm replaces the type's table whole. */
+/**
+ * Launch table import: a preview reads and checks the file; its confirm replaces the type's table whole.
+ * A type of another ship than the caller's is answered as one that does not exist.
+ */
 @Injectable()
 export class LaunchTableImports {
   private readonly logger = new Logger(LaunchTableImports.name);
@@ -27,7 +31,8 @@ export class LaunchTableImports {
   ) {}
 
   async preview(typeId: number, file: UploadedCsv | undefined, user: AuthenticatedUser): Promise<LaunchTablePreview> {
-    if (!(await this.dataSource.manager.existsBy(AircraftType, { id: typeId }))) throw notFound(typeId);
+    if (!(await this.dataSource.manager.existsBy(AircraftType, { id: typeId, ...shipWhere(user) })))
+      throw notFound(typeId);
     const target = { kind: 'launch_table', aircraftTypeId: typeId } as const;
     const { rows, problems } = readLaunchTable(await this.uploads.textOf(file, target, user, LAUNCH_TABLE_LAYOUT));
     const upload = await this.uploads.record(file!, target, user, sortProblems(problems, LAUNCH_TABLE_COLUMNS), rows);
@@ -36,7 +41,10 @@ export class LaunchTableImports {
 
   async confirm(typeId: number, uploadId: number, user: AuthenticatedUser): Promise<AircraftTypeView> {
     return this.dataSource.transaction(async (manager) => {
-      const type = await manager.findOne(AircraftType, { where: { id: typeId }, lock: { mode: 'pessimistic_write' } });
+      const type = await manager.findOne(AircraftType, {
+        where: { id: typeId, ...shipWhere(user) },
+        lock: { mode: 'pessimistic_write' },
+      });
       if (!type) throw notFound(typeId);
       const upload = await this.uploads.importable(manager, uploadId, { kind: 'launch_table', aircraftTypeId: typeId });
       const before = type.launchTable;

@@ -64,7 +64,7 @@ export class PilotAssignmentService {
         slot.pilot = null;
         return { summary: `${name} taken off ${side}; ${side} has no pilot`, command, mirrored: true };
       }
-      const pilot = await this.activePilot(manager, request.pilotId);
+      const pilot = await this.activePilot(manager, state.cycle.shipId, request.pilotId);
       const from = this.currentAircraft(state, pilot, slot);
       if (from) {
         requireOutOfLane(state, from);
@@ -83,9 +83,10 @@ export class PilotAssignmentService {
     });
   }
 
-  private async activePilot(manager: EntityManager, pilotId: number): Promise<User> {
+  /** A pilot of the cycle's ship: one of another ship is refused as a person who is not a pilot. */
+  private async activePilot(manager: EntityManager, shipId: number, pilotId: number): Promise<User> {
     const pilot = await manager.findOne(User, {
-      where: { id: pilotId },
+      where: { id: pilotId, shipId },
       select: { id: true, name: true, role: true, active: true },
     });
     if (!pilot || pilot.role !== 'pilot' || !pilot.active) {

@@ -7,6 +7,8 @@ import { ShotCountsQueryDto } from './dto/shot-counts-query.dto.js';
 import { ShotCountsService } from './shot-counts.service.js';
 import { ApiDoc } from '../common/openapi/api-doc.decorator.js';
 import { ShotCountsDto } from '../common/openapi/views/reports.view.js';
+import type { AuthenticatedUser } from '../common/authenticated-user.js';
+import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 
 // Kept for maintenance; every signed-in role may read them.
 @ApiTags('reports')
@@ -19,13 +21,13 @@ export class ShotCountsController {
     refuses: { 400: ['invalid_date_range'] },
   })
   @Get('shot-counts')
-  counts(@Query() query: ShotCountsQueryDto): Promise<ShotCounts> {
-    return this.shotCounts.counts(dayRange(query.from, query.to));
+  counts(@CurrentUser() caller: AuthenticatedUser, @Query() query: ShotCountsQueryDto): Promise<ShotCounts> {
+    return this.shotCounts.counts(caller, dayRange(query.from, query.to));
   }
 
   @ApiDoc('Download the shot counts as CSV', { response: 'csv', refuses: { 400: ['invalid_date_range'] } })
   @Get('shot-counts.csv')
-  async csv(@Query() query: ShotCountsQueryDto): Promise<StreamableFile> {
-    return csvResponse(await this.shotCounts.csv(dayRange(query.from, query.to)));
+  async csv(@CurrentUser() caller: AuthenticatedUser, @Query() query: ShotCountsQueryDto): Promise<StreamableFile> {
+    return csvResponse(await this.shotCounts.csv(caller, dayRange(query.from, query.to)));
   }
 }

@@ -8,6 +8,7 @@ import { ReplicaReads } from '../database/replica-reads.js';
 import { Catapult } from '../database/entities/catapult.entity.js';
 import type { CsvFile } from '../common/csv-response.js';
 import type { DayRange } from './day-range.js';
+import { type ShipScope, shipWhere } from '../common/ship-scope.js';
 
 export const SHOT_COUNT_COLUMNS = [
   'kind',
@@ -22,24 +23,31 @@ export const SHOT_COUNT_COLUMNS = [
 
 const bySide = (a: Aircraft, b: Aircraft) => a.sideNumber.localeCompare(b.sideNumber, 'en', { numeric: true });
 
-/** Maintenance's counts of catapult launches per airframe and per catapult, from the recorded launch times. */
+/**
+ * Maintenance's counts of catapult launches per airframe and per catapult, from the recorded launch times,
+ * for the caller's ship (every ship for a fleet admin).
+ */
 @Injectable()
 export class ShotCountsService {
   constructor(private readonly replica: ReplicaReads) {}
 
-  async counts(range: DayRange): Promise<ShotCounts> {
+  async counts(scope: ShipScope, range: DayRange): Promise<ShotCounts> {
     const [perAircraft, perCatapult, aircraft, catapults] = await this.replica.read((manager) =>
       Promise.all([
         this.launchesBy(manager, range, 'aircraftId'),
         this.launchesBy(manager, range, 'catapultId'),
-        manager.find(Aircraft, { relations: { type: true, squadron: true } }),
-        manager.find(Catapult, { relations: { ship: true }, order: { shipId: 'ASC', number: 'ASC' } }),
+        manager.find(Aircraft, { where: shipWhere(scope), relations: { type: true, squadron: true } }),
+        manager.find(Catapult, {
+          where: shipWhere(scope),
+          relations: { ship: true },
+          order: { shipId: 'ASC', number: 'ASC' },
+        }),
       ]),
     );
     return {
       from: range.from,
       to: range.to,
-      totalLaunches: [...perAircraft.values()].reduce((sum, count) => sum + count, 0),
+      totalLaunches: aircraft.reduce((sum, plane) => sum + (perAircraft.get(plane.id) ?? 0), 0),
       airframes: aircraft.sort(bySide).map((plane) => ({
         aircraftId: plane.id,
         sideNumber: plane.sideNumber,
@@ -58,8 +66,8 @@ export class ShotCountsService {
     };
   }
 
-  async csv(range: DayRange): Promise<CsvFile> {
-    const counts = await this.counts(range);
+  async csv(scope: ShipScope, range: DayRange): Promise<CsvFile> {
+    const counts = await this.counts(scope, range);
     const rows = [
       ...counts.airframes.map((row) => [
         'airframe',

@@ -1,7 +1,9 @@
 import type { CatapultView, ShipView } from '@catline/contracts';
 import { Body, Controller, Get, Param, ParseIntPipe, Patch } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
+import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { Roles } from '../common/decorators/roles.decorator.js';
+import type { AuthenticatedUser } from '../common/authenticated-user.js';
 import { UpdateCatapultDto } from './dto/update-catapult.dto.js';
 import { UpdateShipDto } from './dto/update-ship.dto.js';
 import { ShipsService } from './ships.service.js';
@@ -15,14 +17,14 @@ export class ShipsController {
 
   @ApiDoc('List the ships', { response: [ShipViewDto] })
   @Get()
-  list(): Promise<ShipView[]> {
-    return this.ships.list();
+  list(@CurrentUser() caller: AuthenticatedUser): Promise<ShipView[]> {
+    return this.ships.list(caller);
   }
 
   @ApiDoc('Read one ship', { response: ShipViewDto, refuses: { 404: ['ship_not_found'] } })
   @Get(':shipId')
-  get(@Param('shipId', ParseIntPipe) shipId: number): Promise<ShipView> {
-    return this.ships.get(shipId);
+  get(@CurrentUser() caller: AuthenticatedUser, @Param('shipId', ParseIntPipe) shipId: number): Promise<ShipView> {
+    return this.ships.get(caller, shipId);
   }
 
   @ApiDoc('Change a ship', {
@@ -32,8 +34,12 @@ export class ShipsController {
   })
   @Roles('admin')
   @Patch(':shipId')
-  update(@Param('shipId', ParseIntPipe) shipId: number, @Body() body: UpdateShipDto): Promise<ShipView> {
-    return this.ships.update(shipId, body);
+  update(
+    @CurrentUser() caller: AuthenticatedUser,
+    @Param('shipId', ParseIntPipe) shipId: number,
+    @Body() body: UpdateShipDto,
+  ): Promise<ShipView> {
+    return this.ships.update(caller, shipId, body);
   }
 
   @ApiDoc('Change a catapult', {
@@ -43,10 +49,11 @@ export class ShipsController {
   @Roles('admin')
   @Patch(':shipId/catapults/:catapultId')
   updateCatapult(
+    @CurrentUser() caller: AuthenticatedUser,
     @Param('shipId', ParseIntPipe) shipId: number,
     @Param('catapultId', ParseIntPipe) catapultId: number,
     @Body() body: UpdateCatapultDto,
   ): Promise<CatapultView> {
-    return this.ships.updateCatapult(shipId, catapultId, body);
+    return this.ships.updateCatapult(caller, shipId, catapultId, body);
   }
 }

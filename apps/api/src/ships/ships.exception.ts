@@ -4,6 +4,7 @@ import { DomainException } from '../common/errors/domain.exception.js';
 
 const STATUS: Record<ShipRefusalCode, HttpStatus> = {
   ship_not_found: HttpStatus.NOT_FOUND,
+  ship_required: HttpStatus.BAD_REQUEST,
   catapult_not_found: HttpStatus.NOT_FOUND,
   invalid_configuration: HttpStatus.BAD_REQUEST,
   spot_in_use: HttpStatus.CONFLICT,

@@ -4,6 +4,7 @@ import { Injectable, Logger } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, type EntityManager, In, Not } from 'typeorm';
 import { definedFields } from '../common/defined-fields.js';
+import { type ShipScope, inShipScope } from '../common/ship-scope.js';
 import { Aircraft } from '../database/entities/aircraft.entity.js';
 import { deckSpotProblems } from './deck-spots.js';
 import type { UpdateCatapultDto } from './dto/update-catapult.dto.js';
@@ -11,6 +12,7 @@ import type { UpdateShipDto } from './dto/update-ship.dto.js';
 import { Catapult } from '../database/entities/catapult.entity.js';
 import { Ship } from '../database/entities/ship.entity.js';
 import { toCatapultView, toShipView } from './ship.mapper.js';
+import { shipNotFound } from './owner-ship.js';
 import { ShipsException } from './ships.exception.js';
 
 @Injectable()
@@ -19,21 +21,27 @@ export class ShipsService {
 
   constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
 
-  async list(): Promise<ShipView[]> {
-    const ships = await this.dataSource.manager.find(Ship, { relations: { catapults: true }, order: { id: 'ASC' } });
+  async list(scope: ShipScope): Promise<ShipView[]> {
+    const ships = await this.dataSource.manager.find(Ship, {
+      where: scope.shipId === null ? {} : { id: scope.shipId },
+      relations: { catapults: true },
+      order: { id: 'ASC' },
+    });
     return ships.map((ship) => toShipView(ship, ship.catapults));
   }
 
-  async get(id: number): Promise<ShipView> {
+  async get(scope: ShipScope, id: number): Promise<ShipView> {
+    this.checkScope(scope, id);
     const ship = await this.dataSource.manager.findOne(Ship, { where: { id }, relations: { catapults: true } });
-    if (!ship) throw this.shipNotFound(id);
+    if (!ship) throw shipNotFound(id);
     return toShipView(ship, ship.catapults);
   }
 
-  async update(id: number, body: UpdateShipDto): Promise<ShipView> {
+  async update(scope: ShipScope, id: number, body: UpdateShipDto): Promise<ShipView> {
+    this.checkScope(scope, id);
     const view = await this.dataSource.transaction(async (manager) => {
       const ship = await manager.findOne(Ship, { where: { id }, lock: { mode: 'pessimistic_write' } });
-      if (!ship) throw this.shipNotFound(id);
+      if (!ship) throw shipNotFound(id);
       const catapults = await manager.findBy(Catapult, { shipId: id });
       if (body.deckSpots) await this.checkDeckSpots(manager, ship, body.deckSpots, catapults);
       const stepsProblem = body.profile?.readinessSteps && readinessStepsProblem(body.profile.readinessSteps);
@@ -46,10 +54,10 @@ export class ShipsService {
     return view;
   }
 
-  async updateCatapult(shipId: number, id: number, body: UpdateCatapultDto): Promise<CatapultView> {
+  async updateCatapult(scope: ShipScope, shipId: number, id: number, body: UpdateCatapultDto): Promise<CatapultView> {
     return this.dataSource.transaction(async (manager) => {
       const catapult = await manager.findOne(Catapult, { where: { id, shipId }, lock: { mode: 'pessimistic_write' } });
-      if (!catapult) {
+      if (!catapult || !inShipScope(scope, shipId)) {
         throw new ShipsException('catapult_not_found', `Ship ${shipId} has no catapult with id ${id}.`);
       }
       Object.assign(catapult, definedFields(body));
@@ -75,10 +83,9 @@ export class ShipsService {
       catapults.map((catapult) => catapult.number),
     );
     if (problems.length > 0) throw new ShipsException('invalid_configuration', problems.join(' '));
-    const otherShips = await manager.findBy(Ship, { id: Not(ship.id) });
-    const kept = [...spots, ...otherShips.flatMap((other) => other.deckSpots)].map((spot) => spot.name);
+    const kept = spots.map((spot) => spot.name);
     const stranded = await manager.find(Aircraft, {
-      where: { parkedSpot: Not(In(kept)) },
+      where: { shipId: ship.id, parkedSpot: Not(In(kept)) },
       order: { sideNumber: 'ASC' },
     });
     if (stranded.length > 0) {
@@ -90,7 +97,8 @@ export class ShipsService {
     }
   }
 
-  private shipNotFound(id: number): ShipsException {
-    return new ShipsException('ship_not_found', `There is no ship with id ${id}.`);
+  /** Another ship is answered as one that does not exist. */
+  private checkScope(scope: ShipScope, id: number): void {
+    if (!inShipScope(scope, id)) throw shipNotFound(id);
   }
 }

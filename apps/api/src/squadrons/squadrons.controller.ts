@@ -1,7 +1,9 @@
 import type { SquadronView } from '@catline/contracts';
 import { Body, Controller, Delete, Get, HttpCode, HttpStatus, Param, ParseIntPipe, Patch, Post } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
+import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { Roles } from '../common/decorators/roles.decorator.js';
+import type { AuthenticatedUser } from '../common/authenticated-user.js';
 import { CreateSquadronDto } from './dto/create-squadron.dto.js';
 import { UpdateSquadronDto } from './dto/update-squadron.dto.js';
 import { SquadronsService } from './squadrons.service.js';
@@ -16,22 +18,25 @@ export class SquadronsController {
 
   @ApiDoc('List the squadrons', { response: [SquadronViewDto] })
   @Get()
-  list(): Promise<SquadronView[]> {
-    return this.squadrons.list();
+  list(@CurrentUser() caller: AuthenticatedUser): Promise<SquadronView[]> {
+    return this.squadrons.list(caller);
   }
 
   @ApiDoc('Read one squadron', { response: SquadronViewDto, refuses: { 404: ['squadron_not_found'] } })
   @Get(':id')
-  get(@Param('id', ParseIntPipe) id: number): Promise<SquadronView> {
-    return this.squadrons.get(id);
+  get(@CurrentUser() caller: AuthenticatedUser, @Param('id', ParseIntPipe) id: number): Promise<SquadronView> {
+    return this.squadrons.get(caller, id);
   }
 
-  @ApiDoc('Add a squadron', { response: SquadronViewDto, refuses: { 409: ['code_taken'] } })
+  @ApiDoc('Add a squadron', {
+    response: SquadronViewDto,
+    refuses: { 400: ['ship_required'], 404: ['ship_not_found'], 409: ['code_taken'] },
+  })
   @Roles('admin')
   @Post()
   @Created((created: SquadronView) => `/api/squadrons/${created.id}`)
-  create(@Body() body: CreateSquadronDto): Promise<SquadronView> {
-    return this.squadrons.create(body);
+  create(@CurrentUser() caller: AuthenticatedUser, @Body() body: CreateSquadronDto): Promise<SquadronView> {
+    return this.squadrons.create(caller, body);
   }
 
   @ApiDoc('Change a squadron', {
@@ -40,15 +45,19 @@ export class SquadronsController {
   })
   @Roles('admin')
   @Patch(':id')
-  update(@Param('id', ParseIntPipe) id: number, @Body() body: UpdateSquadronDto): Promise<SquadronView> {
-    return this.squadrons.update(id, body);
+  update(
+    @CurrentUser() caller: AuthenticatedUser,
+    @Param('id', ParseIntPipe) id: number,
+    @Body() body: UpdateSquadronDto,
+  ): Promise<SquadronView> {
+    return this.squadrons.update(caller, id, body);
   }
 
   @ApiDoc('Remove a squadron', { refuses: { 404: ['squadron_not_found'], 409: ['squadron_in_use'] } })
   @Roles('admin')
   @Delete(':id')
   @HttpCode(HttpStatus.NO_CONTENT)
-  remove(@Param('id', ParseIntPipe) id: number): Promise<void> {
-    return this.squadrons.remove(id);
+  remove(@CurrentUser() caller: AuthenticatedUser, @Param('id', ParseIntPipe) id: number): Promise<void> {
+    return this.squadrons.remove(caller, id);
   }
 }

@@ -3,6 +3,8 @@ import { Injectable, Logger } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, type EntityManager, Not } from 'typeorm';
 import { definedFields } from '../common/defined-fields.js';
+import { type ShipScope, shipWhere } from '../common/ship-scope.js';
+import { ownerShip } from '../ships/owner-ship.js';
 import { Aircraft } from '../database/entities/aircraft.entity.js';
 import { isDuplicateKey, isStillReferenced } from '../common/errors/database-errors.js';
 import type { CreateSquadronDto } from './dto/create-squadron.dto.js';
@@ -19,34 +21,35 @@ export class SquadronsService {
 
   constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
 
-  async list(): Promise<SquadronView[]> {
-    const squadrons = await this.dataSource.manager.find(Squadron, { order: { code: 'ASC' } });
+  async list(scope: ShipScope): Promise<SquadronView[]> {
+    const squadrons = await this.dataSource.manager.find(Squadron, { where: shipWhere(scope), order: { code: 'ASC' } });
     return squadrons.map(toSquadronView);
   }
 
-  async get(id: number): Promise<SquadronView> {
-    const squadron = await this.dataSource.manager.findOneBy(Squadron, { id });
+  async get(scope: ShipScope, id: number): Promise<SquadronView> {
+    const squadron = await this.dataSource.manager.findOneBy(Squadron, { id, ...shipWhere(scope) });
     if (!squadron) throw noSquadron(id);
     return toSquadronView(squadron);
   }
 
-  async create(body: CreateSquadronDto): Promise<SquadronView> {
+  async create(scope: ShipScope, body: CreateSquadronDto): Promise<SquadronView> {
     const manager = this.dataSource.manager;
+    const shipId = await ownerShip(manager, scope, body.shipId);
     await this.checkCodeFree(manager, body.code);
-    return toSquadronView(await this.save(manager, manager.create(Squadron, body)));
+    return toSquadronView(await this.save(manager, manager.create(Squadron, { ...body, shipId })));
   }
 
-  async update(id: number, body: UpdateSquadronDto): Promise<SquadronView> {
+  async update(scope: ShipScope, id: number, body: UpdateSquadronDto): Promise<SquadronView> {
     return this.dataSource.transaction(async (manager) => {
-      const squadron = await this.findOrFail(manager, id);
+      const squadron = await this.findOrFail(manager, scope, id);
       if (body.code !== undefined) await this.checkCodeFree(manager, body.code, id);
       return toSquadronView(await this.save(manager, Object.assign(squadron, definedFields(body))));
     });
   }
 
-  async remove(id: number): Promise<void> {
+  async remove(scope: ShipScope, id: number): Promise<void> {
     await this.dataSource.transaction(async (manager) => {
-      const squadron = await this.findOrFail(manager, id);
+      const squadron = await this.findOrFail(manager, scope, id);
       const aircraft = await manager.countBy(Aircraft, { squadronId: id });
       if (aircraft > 0) throw this.inUse(squadron, aircraft);
       try {
@@ -59,8 +62,11 @@ export class SquadronsService {
     this.logger.log(`Squadron ${id} deleted`);
   }
 
-  private async findOrFail(manager: EntityManager, id: number): Promise<Squadron> {
-    const squadron = await manager.findOne(Squadron, { where: { id }, lock: { mode: 'pessimistic_write' } });
+  private async findOrFail(manager: EntityManager, scope: ShipScope, id: number): Promise<Squadron> {
+    const squadron = await manager.findOne(Squadron, {
+      where: { id, ...shipWhere(scope) },
+      lock: { mode: 'pessimistic_write' },
+    });
     if (!squadron) throw noSquadron(id);
     return squadron;
   }

@@ -33,8 +33,8 @@ export class UsersController {
   @ApiDoc('List the people, a page at a time', { response: UserPageDto })
   @Roles('admin')
   @Get()
-  list(@Query() query: RecordsPageQueryDto): Promise<Page<UserView>> {
-    return this.users.list(query);
+  list(@CurrentUser() caller: AuthenticatedUser, @Query() query: RecordsPageQueryDto): Promise<Page<UserView>> {
+    return this.users.list(caller, query);
   }
 
   @ApiDoc('List the pilots, a page at a time', {
@@ -43,27 +43,31 @@ export class UsersController {
   })
   @Roles('admin', 'air_operations', 'handler')
   @Get('pilots')
-  listPilots(@Query() query: RecordsPageQueryDto): Promise<Page<UserView>> {
-    return this.users.listPilots(query);
+  listPilots(@CurrentUser() caller: AuthenticatedUser, @Query() query: RecordsPageQueryDto): Promise<Page<UserView>> {
+    return this.users.listPilots(caller, query);
   }
 
   @ApiDoc('Read one person', { response: UserViewDto, refuses: { 404: ['user_not_found'] } })
   @Roles('admin')
   @Get(':id')
-  get(@Param('id', ParseIntPipe) id: number): Promise<UserView> {
-    return this.users.get(id);
+  get(@CurrentUser() caller: AuthenticatedUser, @Param('id', ParseIntPipe) id: number): Promise<UserView> {
+    return this.users.get(caller, id);
   }
 
   @ApiDoc('Add a person', {
     response: UserViewDto,
     description: 'Without a password the person is mailed an invitation link.',
-    refuses: { 400: ['invalid_binding', 'unknown_reference'], 409: ['email_taken'] },
+    refuses: {
+      400: ['invalid_binding', 'unknown_reference', 'ship_required'],
+      404: ['ship_not_found'],
+      409: ['email_taken'],
+    },
   })
   @Roles('admin')
   @Post()
   @Created((created: UserView) => `/api/users/${created.id}`)
-  create(@Body() body: CreateUserDto): Promise<UserView> {
-    return this.users.create(body);
+  create(@CurrentUser() actor: AuthenticatedUser, @Body() body: CreateUserDto): Promise<UserView> {
+    return this.users.create(actor, body);
   }
 
   @ApiDoc('Change a person', {
@@ -88,8 +92,11 @@ export class UsersController {
   @Roles('admin')
   @Post(':id/invitation')
   @HttpCode(HttpStatus.ACCEPTED)
-  async invite(@Param('id', ParseIntPipe) id: number): Promise<AcceptedResponse> {
-    const email = await this.users.resendInvitation(id);
+  async invite(
+    @CurrentUser() caller: AuthenticatedUser,
+    @Param('id', ParseIntPipe) id: number,
+  ): Promise<AcceptedResponse> {
+    const email = await this.users.resendInvitation(caller, id);
     return { message: `A new invitation link is on its way to ${email}; earlier links no longer work.` };
   }
 

@@ -12,6 +12,8 @@ import { AuditTrail } from '../audit/audit-trail.service.js';
 import { PasswordLinks } from '../password-links/password-links.service.js';
 import { isDuplicateKey } from '../common/errors/database-errors.js';
 import { pageOf, type PageWindow } from '../common/paging/page-query.dto.js';
+import { type ShipScope, shipWhere } from '../common/ship-scope.js';
+import { ownerShip } from '../ships/owner-ship.js';
 import { Catapult } from '../database/entities/catapult.entity.js';
 import { Squadron } from '../database/entities/squadron.entity.js';
 import { catapultBindingProblem } from './catapult-binding.js';
@@ -35,8 +37,9 @@ export class UsersService {
     private readonly sessionEnds: SessionEnds,
   ) {}
 
-  async list(window: PageWindow): Promise<Page<UserView>> {
+  async list(scope: ShipScope, window: PageWindow): Promise<Page<UserView>> {
     const [users, total] = await this.dataSource.manager.findAndCount(User, {
+      where: shipWhere(scope),
       order: { name: 'ASC', id: 'ASC' },
       take: window.limit,
       skip: window.offset,
@@ -44,9 +47,9 @@ export class UsersService {
     return pageOf(window, users.map(toUserView), total);
   }
 
-  async listPilots(window: PageWindow): Promise<Page<UserView>> {
+  async listPilots(scope: ShipScope, window: PageWindow): Promise<Page<UserView>> {
     const [pilots, total] = await this.dataSource.manager.findAndCount(User, {
-      where: { role: 'pilot', active: true },
+      where: { role: 'pilot', active: true, ...shipWhere(scope) },
       order: { name: 'ASC', id: 'ASC' },
       take: window.limit,
       skip: window.offset,
@@ -54,17 +57,23 @@ export class UsersService {
     return pageOf(window, pilots.map(toUserView), total);
   }
 
-  async get(id: number): Promise<UserView> {
-    const user = await this.dataSource.manager.findOneBy(User, { id });
+  async get(scope: ShipScope, id: number): Promise<UserView> {
+    const user = await this.dataSource.manager.findOneBy(User, { id, ...shipWhere(scope) });
     if (!user) throw noPerson(id);
     return toUserView(user);
   }
 
-  async create(body: CreateUserDto): Promise<UserView> {
+  async create(actor: AuthenticatedUser, body: CreateUserDto): Promise<UserView> {
     const email = normalizeEmail(body.email);
-    const binding = { role: body.role, catapultId: body.catapultId ?? null, squadronId: body.squadronId ?? null };
     const manager = this.dataSource.manager;
-    await this.checkBinding(manager, binding.role, binding.catapultId, binding.squadronId);
+    const shipId = await this.shipOfNew(manager, actor, body);
+    const binding = {
+      role: body.role,
+      catapultId: body.catapultId ?? null,
+      squadronId: body.squadronId ?? null,
+      shipId,
+    };
+    await this.checkBinding(manager, binding);
     if (await manager.existsBy(User, { email })) throw this.emailTaken(email);
     if (body.password !== undefined) assertStrongPassword(body.password, { email, name: body.name });
     const passwordHash = body.password === undefined ? null : await hashPassword(body.password);
@@ -100,7 +109,7 @@ export class UsersService {
   async update(id: number, body: UpdateUserDto, actor: AuthenticatedUser): Promise<UserView> {
     let accessChanged = false;
     const view = await this.dataSource.transaction(async (manager) => {
-      const user = await this.findOrFail(manager, id);
+      const user = await this.findOrFail(manager, actor, id);
       if (id === actor.id && ((body.role && body.role !== user.role) || body.active === false)) {
         throw new UsersException(
           'self_change',
@@ -113,7 +122,7 @@ export class UsersService {
       const catapultId =
         body.catapultId !== undefined ? body.catapultId : isCatapultRole(role) ? user.catapultId : null;
       const squadronId = body.squadronId !== undefined ? body.squadronId : user.squadronId;
-      await this.checkBinding(manager, role, catapultId, squadronId);
+      await this.checkBinding(manager, { role, catapultId, squadronId, shipId: user.shipId });
 
       const access =
         role !== user.role || catapultId !== user.catapultId || (body.active ?? user.active) !== user.active;
@@ -143,9 +152,9 @@ export class UsersService {
   }
 
   /** A fresh invitation link for an active person who has no password yet; returns the address it goes to. */
-  async resendInvitation(id: number): Promise<string> {
+  async resendInvitation(scope: ShipScope, id: number): Promise<string> {
     return this.dataSource.transaction(async (manager) => {
-      const user = await this.findOrFail(manager, id);
+      const user = await this.findOrFail(manager, scope, id);
       if (!user.active)
         throw new UsersException(
           'cannot_invite',
@@ -168,7 +177,7 @@ export class UsersService {
       throw new UsersException('self_change', 'You cannot remove your own account; ask another admin.');
     }
     await this.dataSource.transaction(async (manager) => {
-      const user = await this.findOrFail(manager, id);
+      const user = await this.findOrFail(manager, actor, id);
       await manager.update(User, { id: user.id }, { active: false, tokenVersion: user.tokenVersion + 1 });
       await this.refreshTokens.revokeAllFor(user.id, manager);
       await this.audit.record(manager, {
@@ -183,24 +192,44 @@ export class UsersService {
     this.logger.log(`User ${id} removed by ${actor.id}`);
   }
 
-  private async findOrFail(manager: EntityManager, id: number): Promise<User> {
-    const user = await manager.findOne(User, { where: { id }, lock: { mode: 'pessimistic_write' } });
+  private async findOrFail(manager: EntityManager, scope: ShipScope, id: number): Promise<User> {
+    const user = await manager.findOne(User, {
+      where: { id, ...shipWhere(scope) },
+      lock: { mode: 'pessimistic_write' },
+    });
     if (!user) throw noPerson(id);
     return user;
   }
 
+  /**
+   * The ship of a person being added: as for any ship-owned row (ownerShip), except that a fleet admin
+   * may add another fleet admin by sending `shipId: null`.
+   */
+  private async shipOfNew(
+    manager: EntityManager,
+    actor: AuthenticatedUser,
+    body: CreateUserDto,
+  ): Promise<number | null> {
+    if (body.shipId === null && actor.shipId === null) return null;
+    return ownerShip(manager, actor, body.shipId ?? undefined);
+  }
+
+  /** The catapult and squadron must be on the person's ship; only an admin may be without one. */
   private async checkBinding(
     manager: EntityManager,
-    role: User['role'],
-    catapultId: number | null,
-    squadronId: number | null,
+    { role, catapultId, squadronId, shipId }: Pick<User, 'role' | 'catapultId' | 'squadronId' | 'shipId'>,
   ): Promise<void> {
-    const problem = catapultBindingProblem(role, catapultId);
+    const problem =
+      catapultBindingProblem(role, catapultId) ??
+      (shipId === null && role !== 'admin'
+        ? 'Only an admin can work for the whole fleet; give the person a ship.'
+        : null);
     if (problem) throw new UsersException('invalid_binding', problem);
-    if (catapultId !== null && !(await manager.existsBy(Catapult, { id: catapultId }))) {
+    const onShip = shipId === null ? {} : { shipId };
+    if (catapultId !== null && !(await manager.existsBy(Catapult, { id: catapultId, ...onShip }))) {
       throw new UsersException('unknown_reference', `There is no catapult with id ${catapultId}.`);
     }
-    if (squadronId !== null && !(await manager.existsBy(Squadron, { id: squadronId }))) {
+    if (squadronId !== null && !(await manager.existsBy(Squadron, { id: squadronId, ...onShip }))) {
       throw new UsersException('unknown_reference', `There is no squadron with id ${squadronId}.`);
     }
   }

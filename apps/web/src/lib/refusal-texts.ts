@@ -114,6 +114,7 @@ const REASONS: Record<RefusalCode, string> = {
   link_invalid: 'the link is not valid',
   // fleet
   ship_not_found: 'ship not found',
+  ship_required: 'choose a ship',
   catapult_not_found: 'catapult not found',
   invalid_configuration: 'not a valid ship layout',
   spot_in_use: 'the spot is in use',

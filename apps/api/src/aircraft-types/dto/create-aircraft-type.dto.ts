@@ -26,8 +26,9 @@ import { LaunchTableRows } from './launch-table.dto.js';
 import { LaunchTableRowDto } from './launch-table-row.dto.js';
 import { TrimBandDto } from './trim-band.dto.js';
 import { PlainText } from '../../common/validation/plain-text.decorator.js';
+import { ShipChoiceDto } from '../../ships/dto/ship-choice.dto.js';
 
-export class CreateAircraftTypeDto implements CreateAircraftTypeRequest {
+export class CreateAircraftTypeDto extends ShipChoiceDto implements CreateAircraftTypeRequest {
   @ApiProperty({ example: 'WKD-41' })
   @Trim()
   @IsString()

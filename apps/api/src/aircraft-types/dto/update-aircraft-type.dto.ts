@@ -4,11 +4,11 @@ import { IsNumber, Max, Min, ValidateIf } from 'class-validator';
 import { CreateAircraftTypeDto } from './create-aircraft-type.dto.js';
 
 /**
- * The launch table changes only through PUT /aircraft-types/:id/launch-table. The maximum end speed may be
- * left out but never cleared: a type without it could not be launched.
+ * The launch table changes only through PUT /aircraft-types/:id/launch-table; a type stays on its ship. The
+ * maximum end speed may be left out but never cleared: a type without it could not be launched.
  */
 export class UpdateAircraftTypeDto extends PartialType(
-  OmitType(CreateAircraftTypeDto, ['launchTable', 'maxEndSpeedKt'] as const),
+  OmitType(CreateAircraftTypeDto, ['launchTable', 'maxEndSpeedKt', 'shipId'] as const),
   { skipNullProperties: false },
 ) {
   @ApiPropertyOptional({ description: 'The highest end speed the airframe takes (overstress), knots.' })

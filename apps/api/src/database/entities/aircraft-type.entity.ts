@@ -1,11 +1,20 @@
 import type { LaunchTableRow, StoresItem, TrimBand } from '@catline/contracts';
-import { Column, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, type Relation } from 'typeorm';
+import { Ship } from './ship.entity.js';
 
 /** A type's launch data as the ship's approved data gives it; entered by the user. */
 @Entity('aircraft_types')
 export class AircraftType {
   @PrimaryGeneratedColumn()
   id: number;
+
+  /** The ship whose data this is: only its people (and fleet admins) read or change it. */
+  @Column({ name: 'ship_id' })
+  shipId: number;
+
+  @ManyToOne(() => Ship, { onDelete: 'RESTRICT' })
+  @JoinColumn({ name: 'ship_id' })
+  ship: Relation<Ship>;
 
   @Index({ unique: true })
   @Column({ length: 20 })

@@ -1,11 +1,20 @@
 import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, type Relation } from 'typeorm';
 import { AircraftType } from './aircraft-type.entity.js';
+import { Ship } from './ship.entity.js';
 import { Squadron } from './squadron.entity.js';
 
 @Entity('aircraft')
 export class Aircraft {
   @PrimaryGeneratedColumn()
   id: number;
+
+  /** The ship whose data this is (its squadron's and type's ship): only its people (and fleet admins) read or change it. */
+  @Column({ name: 'ship_id' })
+  shipId: number;
+
+  @ManyToOne(() => Ship, { onDelete: 'RESTRICT' })
+  @JoinColumn({ name: 'ship_id' })
+  ship: Relation<Ship>;
 
   @Index({ unique: true })
   @Column({ name: 'side_number', length: 8 })

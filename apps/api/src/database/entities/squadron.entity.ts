@@ -1,9 +1,18 @@
-import { Column, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, type Relation } from 'typeorm';
+import { Ship } from './ship.entity.js';
 
 @Entity('squadrons')
 export class Squadron {
   @PrimaryGeneratedColumn()
   id: number;
+
+  /** The ship whose data this is: only its people (and fleet admins) read or change it. */
+  @Column({ name: 'ship_id' })
+  shipId: number;
+
+  @ManyToOne(() => Ship, { onDelete: 'RESTRICT' })
+  @JoinColumn({ name: 'ship_id' })
+  ship: Relation<Ship>;
 
   @Column({ length: 120 })
   name: string;

@@ -2,6 +2,7 @@ import type { Role } from '@catline/contracts';
 import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, type Relation } from 'typeorm';
 import { CreatedAtColumn, UpdatedAtColumn } from '../columns.js';
 import { Catapult } from './catapult.entity.js';
+import { Ship } from './ship.entity.js';
 import { Squadron } from './squadron.entity.js';
 
 @Entity('users')
@@ -22,6 +23,14 @@ export class User {
 
   @Column({ type: 'varchar', length: 20 })
   role: Role;
+
+  /** The ship the person serves on; null only for a fleet admin, who works on every ship. */
+  @Column({ name: 'ship_id', type: 'int', nullable: true })
+  shipId: number | null;
+
+  @ManyToOne(() => Ship, { nullable: true, onDelete: 'RESTRICT' })
+  @JoinColumn({ name: 'ship_id' })
+  ship: Relation<Ship> | null;
 
   /** The catapult a catapult officer runs now. */
   @Column({ name: 'catapult_id', type: 'int', nullable: true })

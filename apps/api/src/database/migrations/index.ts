@@ -15,6 +15,7 @@ import { LandingAreaInUseDerived1796225353747 } from './1796225353747-LandingAre
 import { SlotLoadBuild1796227583908 } from './1796227583908-SlotLoadBuild.js';
 import { SlotDownCatapult1796228372875 } from './1796228372875-SlotDownCatapult.js';
 import { AircraftTypeMaxEndSpeed1796229016417 } from './1796229016417-AircraftTypeMaxEndSpeed.js';
+import { ShipsOwnTheirData1796240912480 } from './1796240912480-ShipsOwnTheirData.js';
 
 /** Every migration in the order it runs; add a new one at the end (see DEVELOPERS.md). */
 export const migrations = [
@@ -35,4 +36,5 @@ export const migrations = [
   SlotLoadBuild1796227583908,
   SlotDownCatapult1796228372875,
   AircraftTypeMaxEndSpeed1796229016417,
+  ShipsOwnTheirData1796240912480,
 ];

@@ -26,6 +26,7 @@ import { LineupStateLoader } from '../../cycle-changes/lineup-state.js';
 import { ReadinessService } from '../../lineup/readiness.service.js';
 import { MailOutbox } from '../../mail/mail-outbox.service.js';
 import { User } from '../entities/user.entity.js';
+import { WHOLE_FLEET } from '../../common/ship-scope.js';
 
 /** A clock the demo sets, so the history it builds carries the times of an invented flying day. */
 export class SetClock extends Clock {
@@ -106,7 +107,7 @@ export class DemoDeck {
   }
 
   async createCycle(request: CreateCycleDto): Promise<number> {
-    return (await this.cycles.create(request)).id;
+    return (await this.cycles.create(WHOLE_FLEET, request)).id;
   }
 
   /** Air operations enters a wind reading (the ship's wind figures read again count as a new one). */

@@ -32,12 +32,20 @@ export async function seedDemo(dataSource: DataSource): Promise<boolean> {
       Catapult,
       demoCatapults.map((catapult) => ({ ...catapult, shipId: ship.id })),
     );
-    const squadrons = await manager.save(Squadron, demoSquadrons);
-    const types = await manager.save(AircraftType, demoAircraftTypes);
+    const onShip = { shipId: ship.id };
+    const squadrons = await manager.save(
+      Squadron,
+      demoSquadrons.map((squadron) => ({ ...squadron, ...onShip })),
+    );
+    const types = await manager.save(
+      AircraftType,
+      demoAircraftTypes.map((type) => ({ ...type, ...onShip })),
+    );
     await manager.save(
       Aircraft,
       demoAircraft.map(({ designation, squadron, ...aircraft }) => ({
         ...aircraft,
+        ...onShip,
         typeId: types.find((type) => type.designation === designation)!.id,
         squadronId: squadrons.find((s) => s.code === squadron)!.id,
       })),
@@ -48,6 +56,7 @@ export async function seedDemo(dataSource: DataSource): Promise<boolean> {
         email: person.email,
         name: person.name,
         role: person.role,
+        ...onShip,
         passwordHash,
         catapultId: catapults.find((c) => c.number === person.catapultNumber)?.id ?? null,
         squadronId: squadrons.find((s) => s.code === person.squadron)?.id ?? null,

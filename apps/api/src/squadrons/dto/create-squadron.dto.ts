@@ -9,8 +9,9 @@ import { ApiProperty } from '@nestjs/swagger';
 import { IsEmail, IsNotEmpty, IsString, Matches, MaxLength } from 'class-validator';
 import { Trim } from '../../common/validation/trim.decorator.js';
 import { PlainText } from '../../common/validation/plain-text.decorator.js';
+import { ShipChoiceDto } from '../../ships/dto/ship-choice.dto.js';
 
-export class CreateSquadronDto implements CreateSquadronRequest {
+export class CreateSquadronDto extends ShipChoiceDto implements CreateSquadronRequest {
   @ApiProperty()
   @Trim()
   @IsString()

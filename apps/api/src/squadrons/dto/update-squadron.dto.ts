@@ -1,4 +1,7 @@
-import { PartialType } from '@nestjs/swagger';
+import { OmitType, PartialType } from '@nestjs/swagger';
 import { CreateSquadronDto } from './create-squadron.dto.js';
 
-export class UpdateSquadronDto extends PartialType(CreateSquadronDto, { skipNullProperties: false }) {}
+/** A squadron stays on its ship. */
+export class UpdateSquadronDto extends PartialType(OmitType(CreateSquadronDto, ['shipId'] as const), {
+  skipNullProperties: false,
+}) {}

@@ -14,6 +14,18 @@ import { Trim } from '../../common/validation/trim.decorator.js';
 import { PlainText } from '../../common/validation/plain-text.decorator.js';
 
 export class CreateUserDto implements CreateUserRequest {
+  @ApiPropertyOptional({
+    type: 'integer',
+    nullable: true,
+    minimum: 1,
+    description:
+      "The person's ship. Left out, the caller's own; a fleet admin must give it, or null for another fleet admin.",
+  })
+  @IsOptional()
+  @IsInt()
+  @Min(1)
+  shipId?: number | null;
+
   @ApiProperty()
   @Trim()
   @IsEmail({}, { message: 'email must be an e-mail address' })

@@ -5,9 +5,9 @@ import { SkipIfAbsent } from '../../common/validation/skip-if-absent.decorator.j
 import { CreateUserDto } from './create-user.dto.js';
 
 // skipNullProperties: false keeps `null` from blanking required columns; catapultId and squadronId
-// stay nullable through their own @IsOptional().
+// stay nullable through their own @IsOptional(). A person stays on their ship.
 export class UpdateUserDto
-  extends PartialType(OmitType(CreateUserDto, ['email', 'password'] as const), {
+  extends PartialType(OmitType(CreateUserDto, ['email', 'password', 'shipId'] as const), {
     skipNullProperties: false,
   })
   implements UpdateUserRequest

@@ -1,4 +1,18 @@
 import { demoAircraft, demoAircraftTypes, demoPeople, demoShip, demoSquadrons } from './demo-fleet.js';
+import {
+  fleetAdmin,
+  secondShip,
+  secondShipAircraft,
+  secondShipAircraftTypes,
+  secondShipPeople,
+  secondShipSquadrons,
+} from './demo-second-ship.js';
+
+const ships = [demoShip, secondShip];
+const squadrons = [...demoSquadrons, ...secondShipSquadrons];
+const types = [...demoAircraftTypes, ...secondShipAircraftTypes];
+const aircraft = [...demoAircraft, ...secondShipAircraft];
+const people = [...demoPeople, ...secondShipPeople, fleetAdmin];
 
 // The demo must read as invented to someone from the trade. These lists of real names, written from
 // memory, stay here in the test and never reach the UI; a demo name that matches one (or sits one
@@ -352,9 +366,9 @@ function realNamesIn(name: string, realNames: string[]): string[] {
 const letterPrefix = (code: string) => code.toUpperCase().match(/^[A-Z]+/)?.[0] ?? '';
 
 const NAMED: [kind: string, name: string][] = [
-  ['ship', demoShip.name],
-  ...demoSquadrons.map((squadron): [string, string] => ['squadron', squadron.name]),
-  ...demoAircraftTypes.map((type): [string, string] => ['aircraft type', type.name]),
+  ...ships.map((ship): [string, string] => ['ship', ship.name]),
+  ...squadrons.map((squadron): [string, string] => ['squadron', squadron.name]),
+  ...types.map((type): [string, string] => ['aircraft type', type.name]),
 ];
 
 describe('the demo reads as invented', () => {
@@ -362,7 +376,7 @@ describe('the demo reads as invented', () => {
     expect(realNamesIn(name, [...REAL_SHIPS, ...REAL_SQUADRONS, ...REAL_AIRCRAFT_NAMES])).toEqual([]);
   });
 
-  it.each(demoAircraftTypes.map((type) => type.designation))(
+  it.each(types.map((type) => type.designation))(
     'the designation %s is no real one and uses no real prefix',
     (designation) => {
       expect(REAL_DESIGNATIONS.filter((real) => distance(compact(real), compact(designation)) <= 1)).toEqual([]);
@@ -370,25 +384,25 @@ describe('the demo reads as invented', () => {
     },
   );
 
-  it('gives the ship a hull code that is no real classification', () => {
-    expect(REAL_HULL_SYMBOLS).not.toContain(letterPrefix(demoShip.hullCode));
+  it.each(ships.map((ship) => ship.name))('gives the %s a hull code that is no real classification', (name) => {
+    expect(REAL_HULL_SYMBOLS).not.toContain(letterPrefix(ships.find((ship) => ship.name === name)!.hullCode));
   });
 
   it('numbers the aircraft in its own scheme: a letter, then two digits; never the three-digit numbers of real air wings', () => {
-    for (const aircraft of demoAircraft) {
-      expect(aircraft.sideNumber).toMatch(/^[A-Z]\d{2}$/);
+    for (const plane of aircraft) {
+      expect(plane.sideNumber).toMatch(/^[A-Z]\d{2}$/);
     }
-    expect(new Set(demoAircraft.map((aircraft) => aircraft.sideNumber)).size).toBe(demoAircraft.length);
+    expect(new Set(aircraft.map((plane) => plane.sideNumber)).size).toBe(aircraft.length);
   });
 
-  it.each(demoPeople.map((person) => person.name))('%s is no public figure', (name) => {
+  it.each(people.map((person) => person.name))('%s is no public figure', (name) => {
     expect(PUBLIC_FIGURES.filter((figure) => compact(figure) === compact(name))).toEqual([]);
     const surname = words(name).at(-1)!;
     expect(PUBLIC_FIGURES.filter((figure) => words(figure).at(-1) === surname)).toEqual([]);
   });
 
   it.each(['I', 'II', 'III'] as const)('labels the Case %s departure as the invented ship’s own', (weatherCase) => {
-    expect(demoShip.profile.departures[weatherCase]).toMatch(/invented for the demo/);
+    for (const ship of ships) expect(ship.profile.departures[weatherCase]).toMatch(/invented for the demo/);
   });
 
   it('catches the names the demo used to carry', () => {

@@ -83,6 +83,7 @@ describe('readiness steps and launch', () => {
     const stranger = await deck.call(pilot(7), 'post', path, { slotVersion: shown.version, grossWeightLb: 44_000 });
     expect(stranger.status).toBe(403);
     expect(stranger.body.code).toBe('not_your_slot');
+    expect(await deck.slot(cycle.id, first.id)).toMatchObject({ version: shown.version, pilotWeightAckLb: null });
     const answered = await deck.call(pilot(5), 'post', path, { slotVersion: shown.version, grossWeightLb: 46_500 });
     expect(answered.status).toBe(200);
     expect(answered.body.change.summary).toBe('Pilot of C21 answers 46,500 lb (planned 44,000 lb)');
@@ -367,17 +368,28 @@ describe('readiness steps and launch', () => {
   });
 
   it('refuses a launch from a catapult marked down, with its own code', async () => {
-    const { cycle, first } = await executingCycle(pilot(2));
+    const { cycle, first, second } = await executingCycle(pilot(2));
     const catapultId = await deck.catapultId(1);
     const path = `/api/cycles/${cycle.id}/lineup/catapults/${catapultId}/status`;
     // Down before the aircraft comes up: marking it down under the aircraft would suspend it.
     await deck.ok(HANDLER, 'post', path, { status: 'down', basisStatus: 'up' });
     try {
       const ready = await deck.readyToLaunch(cycle.id, first.id, pilot(2));
-      expect(ready.status).toBe('pilot_ready');
-      const response = await deck.launch(cycle.id, await deck.slot(cycle.id, first.id), launchKey());
+      const response = await deck.launch(cycle.id, ready, launchKey());
       expect(response.status).toBe(409);
       expect(response.body).toMatchObject({ code: 'catapult_down', message: 'Cat 1 is down.' });
+      // Read after the refusal: the aircraft still waits ready on the catapult, which is still down.
+      const after = await deck.snapshot(cycle.id);
+      expect(after.slots.find((slot) => slot.id === first.id)).toMatchObject({
+        status: 'pilot_ready',
+        version: ready.version,
+        launchedAt: null,
+        launchRecord: null,
+      });
+      expect(after.lanes.find((lane) => lane.number === 1)).toMatchObject({
+        status: 'down',
+        slotIds: [first.id, second.id],
+      });
     } finally {
       await deck.ok(HANDLER, 'post', path, { status: 'up', basisStatus: 'down' });
     }

@@ -14,6 +14,9 @@ test('the handler swaps in a spare, applies the suggested lineup and marks a cat
   await placeInLane(api, cycle.id, slotIds.get('D38')!, 1);
   await api.dispose();
   const handler = await openAs(browser, 'handler', `/lineup?cycle=${cycle.id}`);
+  // A second person follows the same cycle: each change must reach their page too, not only the handler's.
+  const watcher = await openAs(browser, 'observer', `/lineup?cycle=${cycle.id}`);
+  await expect(card(lane(watcher, 1), 'D38')).toBeVisible();
 
   await handler.getByRole('button', { name: 'Actions for D38' }).click();
   await handler.getByRole('menuitem', { name: 'Mark down…' }).click();
@@ -24,6 +27,9 @@ test('the handler swaps in a spare, applies the suggested lineup and marks a cat
   // Cat 1's head still counts the aircraft that went down out of its order; the other catapults', none.
   await expect(lane(handler, 1).getByTestId('lane-counts')).toHaveText('0 off · 1 to go · 0 late · 1 down');
   await expect(lane(handler, 2).getByTestId('lane-counts')).toContainText('0 down');
+  await expect(card(lane(watcher, 1), 'C30')).toBeVisible();
+  await expect(watcher.getByTestId('down-list')).toContainText('D38');
+  await expect(lane(watcher, 1).getByTestId('lane-counts')).toHaveText('0 off · 1 to go · 0 late · 1 down');
 
   await handler.getByRole('button', { name: 'Suggest lineup' }).click();
   const dialog = handler.getByRole('dialog');
@@ -34,6 +40,7 @@ test('the handler swaps in a spare, applies the suggested lineup and marks a cat
   await dialog.getByRole('button', { name: 'Apply suggestion' }).click();
   await expect(handler.getByTestId('notice')).toContainText('Suggested lineup applied');
   await expect(card(pool(handler), 'G43')).toHaveCount(0);
+  await expect(card(pool(watcher), 'G43')).toHaveCount(0);
 
   const catapult = await handler
     .locator('[data-testid="lane"]', { has: card(handler, 'G43') })
@@ -52,11 +59,15 @@ test('the handler swaps in a spare, applies the suggested lineup and marks a cat
     .click();
   await expect(lane(handler, Number(catapult)).getByTestId('catapult-status')).toHaveText('DOWN');
   await expect(handler.getByTestId('lineup-warnings')).toContainText(`Cat ${catapult} is down`);
+  await expect(card(lane(watcher, Number(catapult)), 'G43')).toBeVisible();
+  await expect(lane(watcher, Number(catapult)).getByTestId('catapult-status')).toHaveText('DOWN');
+  await expect(watcher.getByTestId('lineup-warnings')).toContainText(`Cat ${catapult} is down`);
 });
 
 test('an aircraft without a pilot cannot reach a catapult, so it never waits there for one', async ({ browser }) => {
   const { cycle } = await planCycle({ aircraft: [{ side: 'L48', grossWeightLb: 47_000, pilot: null }] });
   const handler = await openAs(browser, 'handler', `/lineup?cycle=${cycle.id}`);
+  const watcher = await openAs(browser, 'observer', `/lineup?cycle=${cycle.id}`);
   const tanker = card(pool(handler), 'L48');
   await expect(tanker.getByTestId('no-pilot')).toBeVisible();
   await expect(handler.getByTestId('lineup-warnings')).toContainText('No pilot assigned to L48');
@@ -72,9 +83,12 @@ test('an aircraft without a pilot cannot reach a catapult, so it never waits the
   await handler.getByRole('dialog').getByRole('button', { name: 'Save pilot' }).click();
   await expect(handler.getByTestId('notice')).toContainText('Pilot of L48 saved');
   await expect(card(pool(handler), 'L48').getByTestId('no-pilot')).toHaveCount(0);
+  await expect(card(pool(watcher), 'L48')).toContainText('Una Dapplewick');
+  await expect(card(pool(watcher), 'L48').getByTestId('no-pilot')).toHaveCount(0);
 
   await dragWithMouse(handler, card(pool(handler), 'L48'), lane(handler, 2).getByTestId('lane-drop-zone'));
   await expect(card(lane(handler, 2), 'L48')).toBeVisible();
+  await expect(card(lane(watcher, 2), 'L48')).toBeVisible();
 
   // Standing in the order, it keeps its pilot.
   await handler.getByRole('button', { name: 'Actions for L48' }).click();

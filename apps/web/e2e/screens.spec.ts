@@ -1,6 +1,6 @@
 import { expect, test, type Page } from '@playwright/test';
 import { apiAs, lineupOf, placeInLane, planCycle } from './support/demo-api.js';
-import { expectNoSidewaysOverflow, openAs } from './support/screens.js';
+import { card, expectNoSidewaysOverflow, lane, openAs, pool } from './support/screens.js';
 
 const sizes = [
   { width: 1366, height: 768 },
@@ -9,15 +9,50 @@ const sizes = [
   { width: 820, height: 1180 },
 ];
 
+/** Each screen, and what it must show at every size (the busy cycle below: C25 is on cat 1, C26 behind it). */
 const screens = [
-  { name: 'lineup', who: 'handler', path: '/lineup', ready: (page: Page) => page.getByTestId('lane').first() },
+  {
+    name: 'lineup',
+    who: 'handler',
+    path: '/lineup',
+    mustShow: async (page: Page) => {
+      for (const number of [1, 2, 3, 4]) await expect(lane(page, number)).toBeVisible();
+      await expect(lane(page, 1)).toBeInViewport();
+      for (const [number, sides] of [
+        [1, ['C25', 'C26']],
+        [2, ['D33', 'G44']],
+        [3, ['D34', 'G43']],
+        [4, ['L47']],
+      ] as const) {
+        for (const side of sides) await expect(card(lane(page, number), side)).toBeVisible();
+      }
+      await expect(pool(page)).toBeVisible();
+      await expect(page.getByTestId('lineup-summary')).toBeVisible();
+    },
+  },
   {
     name: 'cat-station',
     who: 'cat1',
     path: '/cat-station',
-    ready: (page: Page) => page.getByTestId('current-aircraft'),
+    mustShow: async (page: Page) => {
+      await expect(page.getByTestId('current-aircraft')).toHaveAttribute('data-side-number', 'C25');
+      await expect(page.getByTestId('current-aircraft')).toBeInViewport();
+      await expect(page.getByTestId('cat-figures')).toBeVisible();
+      await expect(page.getByTestId('step-weight_agreed')).toBeVisible();
+      await expect(page.getByTestId('next-up')).toContainText('C26');
+    },
   },
-  { name: 'my-launch', who: 'pilot', path: '/my-launch', ready: (page: Page) => page.getByTestId('my-slot') },
+  {
+    name: 'my-launch',
+    who: 'pilot',
+    path: '/my-launch',
+    mustShow: async (page: Page) => {
+      await expect(page.getByTestId('my-slot')).toHaveAttribute('data-side-number', 'C25');
+      await expect(page.getByTestId('my-slot')).toBeInViewport();
+      await expect(page.getByTestId('my-catapult')).toContainText('Cat 1');
+      await expect(page.getByTestId('acknowledge-weight')).toBeVisible();
+    },
+  },
 ];
 
 /** A busy cycle: lanes on every catapult, aircraft left in the pool, one no-go, one aircraft at the catapult. */
@@ -53,13 +88,15 @@ async function busyCycle(night: boolean) {
   return cycle;
 }
 
-test('Lineup, Cat station and My launch fit a laptop, a tablet and a phone', async ({ browser }) => {
+test('Lineup, Cat station and My launch show what they must on a laptop, a tablet and a phone, with no sideways overflow', async ({
+  browser,
+}) => {
   test.setTimeout(240_000);
   const cycle = await busyCycle(false);
   for (const size of sizes) {
     for (const screen of screens) {
       const page = await openAs(browser, screen.who, `${screen.path}?cycle=${cycle.id}`, size);
-      await expect(screen.ready(page)).toBeVisible();
+      await screen.mustShow(page);
       await expect(page.getByTestId('caution-line')).toBeVisible();
       await expect(page.getByTestId('connection-state')).toHaveAttribute('data-state', 'live');
       await expectNoSidewaysOverflow(page);

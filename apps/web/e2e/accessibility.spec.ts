@@ -1,17 +1,9 @@
 import AxeBuilder from '@axe-core/playwright';
-import { expect, test, type Page } from '@playwright/test';
+import { expect, test } from '@playwright/test';
 import type { CycleView } from '@catline/contracts';
 import { allOf, apiAs, placeInLane, planCycle } from './support/demo-api.js';
+import { axeViolations } from './support/axe.js';
 import { card, lane, openAs, pool } from './support/screens.js';
-
-/** axe's findings on the page as it stands, as "rule: the elements" lines, so a failure says what to fix. */
-async function axeViolations(page: Page) {
-  const results = await new AxeBuilder({ page }).analyze();
-  return results.violations.map(
-    (violation) =>
-      `${violation.id}: ${violation.nodes.map((node) => `${node.html.slice(0, 120)} (${node.failureSummary})`).join(', ')}`,
-  );
-}
 
 /** A launching cycle with an aircraft off, one on cat 1, aircraft waiting and one left in the pool. */
 async function launchingCycle(night: boolean) {

@@ -5,6 +5,7 @@ import type { ImportPreview, ImportProblem } from '@catline/contracts';
 import { errorMessage } from '../lib/api-error.js';
 import type { Column } from './data-table.js';
 import { FormField } from './form-field.js';
+import { TableScroll } from './table-scroll.js';
 
 interface CsvImportProps<Row extends { row: number }> {
   /** What the file holds, in a few words: "air plan", "launch table". */
@@ -24,7 +25,7 @@ const plural = (count: number, noun: string) => `${count} ${noun}${count === 1 ?
 
 function ProblemList({ problems }: { problems: ImportProblem[] }) {
   return (
-    <Table.ScrollArea borderWidth="1px" rounded="card" borderColor="nogo.border">
+    <TableScroll label="Problems found in the file" borderColor="nogo.border">
       <Table.Root size="sm" data-testid="import-problems">
         <Table.Caption srOnly>Problems found in the file</Table.Caption>
         <Table.Header>
@@ -50,7 +51,7 @@ function ProblemList({ problems }: { problems: ImportProblem[] }) {
           ))}
         </Table.Body>
       </Table.Root>
-    </Table.ScrollArea>
+    </TableScroll>
   );
 }
 
@@ -64,7 +65,7 @@ function RowsRead<Row extends { row: number }>({
   problemLines: Set<number>;
 }) {
   return (
-    <Table.ScrollArea borderWidth="1px" rounded="card">
+    <TableScroll label="Lines read from the file">
       <Table.Root size="sm" data-testid="import-rows">
         <Table.Caption srOnly>Lines read from the file</Table.Caption>
         <Table.Header>
@@ -96,7 +97,7 @@ function RowsRead<Row extends { row: number }>({
           ))}
         </Table.Body>
       </Table.Root>
-    </Table.ScrollArea>
+    </TableScroll>
   );
 }
 

@@ -1,6 +1,7 @@
 import { useMemo, useState, type ReactNode } from 'react';
 import { Box, chakra, HStack, Input, Table, Text } from '@chakra-ui/react';
 import { EmptyState } from './query-states.js';
+import { TableScroll } from './table-scroll.js';
 
 type Sortable = string | number | boolean | null;
 
@@ -96,7 +97,7 @@ export function DataTable<T>({
           {shown.length} of {rows.length}
         </Text>
       </HStack>
-      <Table.ScrollArea borderWidth="1px" rounded="card">
+      <TableScroll label={caption}>
         <Table.Root size="sm" stickyHeader>
           <Table.Caption srOnly>{caption}</Table.Caption>
           <Table.Header>
@@ -148,7 +149,7 @@ export function DataTable<T>({
             })}
           </Table.Body>
         </Table.Root>
-      </Table.ScrollArea>
+      </TableScroll>
       {shown.length === 0 && (
         <Text mt="2" fontSize="sm" color="fg.muted">
           Nothing matches “{filter}”.

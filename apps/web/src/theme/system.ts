@@ -30,6 +30,10 @@ const catlineConfig = defineConfig({
   globalCss: {
     'html, body': { bg: 'bg', color: 'fg', minHeight: '100%' },
     body: { fontFamily: 'body', fontSize: 'md', lineHeight: '1.45', overflowX: 'hidden' },
+    // On a tablet every control takes a finger, whatever size its screen drew it at for a mouse.
+    'button, a[href], input, select, textarea, [role=tab], [role=button]': {
+      '@media (pointer: coarse)': { minHeight: 'tap', minWidth: 'tap' },
+    },
   },
   theme: {
     tokens: {
@@ -43,7 +47,8 @@ const catlineConfig = defineConfig({
         gray: tokenScale('hull'),
       },
       fonts: { heading: { value: plexStack }, body: { value: plexStack } },
-      sizes: { touch: { value: '3.5rem' }, tap: { value: '2.75rem' } },
+      // tap: the least a finger can hit (44 px, WCAG 2.5.5); touch: a station's action, hit in a hurry on a moving deck (60 px).
+      sizes: { touch: { value: '3.75rem' }, tap: { value: '2.75rem' } },
       spacing: { gutter: { value: '1rem' }, 'gutter.wide': { value: '1.5rem' } },
       radii: { card: { value: '0.5rem' } },
     },

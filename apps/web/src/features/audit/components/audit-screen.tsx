@@ -9,6 +9,7 @@ import { SelectInput } from '../../../components/select-field.js';
 import { errorMessage } from '../../../lib/api-error.js';
 import { useFileDownload } from '../../../lib/use-file-download.js';
 import { type AuditFilter, auditExportPath, useAuditEntries } from '../api/get-audit-entries.js';
+import { TableScroll } from '../../../components/table-scroll.js';
 
 const ACTION_CHOICES = AUDIT_ACTIONS.map((action) => ({ value: action, label: action.replace(/[._]/g, ' ') }));
 
@@ -86,7 +87,7 @@ export function AuditScreen() {
             <EmptyState title="No entries match." />
           ) : (
             <Stack gap="3">
-              <Table.ScrollArea borderWidth="1px" rounded="card">
+              <TableScroll label="Audit trail">
                 <Table.Root size="sm">
                   <Table.Caption srOnly>Audit trail</Table.Caption>
                   <Table.Header>
@@ -121,7 +122,7 @@ export function AuditScreen() {
                     ))}
                   </Table.Body>
                 </Table.Root>
-              </Table.ScrollArea>
+              </TableScroll>
               <Pager page={page} onOffset={setOffset} labels={{ previous: 'Newer', next: 'Older' }} />
             </Stack>
           )

@@ -114,7 +114,7 @@ export function CyclesScreen() {
     },
     {
       key: 'open',
-      header: '',
+      header: 'Details',
       cell: (cycle) => (
         <Button
           size="xs"

@@ -23,7 +23,7 @@ export function DeckPlaceRow({ place, children }: { place: DeckPlace; children: 
       </Text>
       <Flex gap="1" wrap="wrap" flex="1">
         {place.slots.length === 0 ? (
-          <Text fontSize="sm" color="fg.subtle" pt="1">
+          <Text fontSize="sm" color="fg.muted" pt="1">
             free
           </Text>
         ) : (

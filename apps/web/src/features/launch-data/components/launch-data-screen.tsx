@@ -120,7 +120,7 @@ export function LaunchDataScreen() {
     },
     {
       key: 'show',
-      header: '',
+      header: 'Details',
       cell: (type) => (
         <Button
           size="xs"

@@ -26,6 +26,7 @@ import { useLiveCycle } from '../../../lib/live/use-live-cycle.js';
 import { useShips } from '../../../lib/queries/ships-query.js';
 import { useViewedCycle } from '../../../lib/queries/use-viewed-cycle.js';
 import { useNow } from '../../../lib/use-now.js';
+import { TableScroll } from '../../../components/table-scroll.js';
 
 // Printed, the sheet is the page: the app's header and menus go, colours turn to black on white, a
 // catapult's table is kept on one page when it fits and its header repeats when it does not.
@@ -148,7 +149,7 @@ function SheetLane({ lane, slots }: { lane: LaneView; slots: Map<number, SlotVie
           No aircraft on this catapult.
         </Text>
       ) : (
-        <Table.ScrollArea borderWidth="1px" rounded="card" className="sheet-table-wrap">
+        <TableScroll label={`Launch order on cat ${lane.number}`} className="sheet-table-wrap">
           <Table.Root size="sm">
             <Table.Caption srOnly>{`Launch order on cat ${lane.number}`}</Table.Caption>
             <colgroup>
@@ -175,7 +176,7 @@ function SheetLane({ lane, slots }: { lane: LaneView; slots: Map<number, SlotVie
               ))}
             </Table.Body>
           </Table.Root>
-        </Table.ScrollArea>
+        </TableScroll>
       )}
       {noGo.map((slot) => (
         <Text key={slot.id} fontSize="sm" color="nogo.fg">

@@ -1,5 +1,6 @@
 import type { ReactNode } from 'react';
 import { Table, Text } from '@chakra-ui/react';
+import { TableScroll } from '../../../components/table-scroll.js';
 
 export interface ReportColumn<T> {
   header: string;
@@ -25,7 +26,7 @@ export function ReportTable<T>({ caption, rows, columns, rowKey, empty }: Report
     );
   }
   return (
-    <Table.ScrollArea borderWidth="1px" rounded="card" className="report-table">
+    <TableScroll label={caption} className="report-table">
       <Table.Root size="sm">
         <Table.Caption srOnly>{caption}</Table.Caption>
         <Table.Header>
@@ -53,6 +54,6 @@ export function ReportTable<T>({ caption, rows, columns, rowKey, empty }: Report
           ))}
         </Table.Body>
       </Table.Root>
-    </Table.ScrollArea>
+    </TableScroll>
   );
 }

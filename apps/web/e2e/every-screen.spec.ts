@@ -1,0 +1,104 @@
+import { expect, test, type Page } from '@playwright/test';
+import { apiAs, placeInLane, planCycle } from './support/demo-api.js';
+import { axeViolations } from './support/axe.js';
+import { openAs } from './support/screens.js';
+
+// A normal visit to every screen, as the person who uses it, on the deck crews' tablet: nothing logged as an
+// error, no axe violation by day or by night, and every control big enough for a gloved finger.
+const TABLET = { width: 1024, height: 768 };
+/** WCAG 2.2 target size (enhanced, 2.5.5): 44 by 44 CSS pixels. */
+const TOUCH_PX = 44;
+/** The catapult issue: the station's actions are 60 px high, pressed in a hurry on a moving deck. */
+const STATION_ACTION_PX = 60;
+
+const CONTROLS = 'button, a[href], input:not([type=hidden]), select, textarea, [role=tab], [role=button]';
+
+/** Controls shown (not hidden or clipped away) smaller than `min` px either way, as "what it is (w×h)". */
+function smallControls(page: Page, min: number, selector = CONTROLS) {
+  return page.evaluate(
+    ({ min, selector }) =>
+      [...document.querySelectorAll(selector)]
+        .filter((element) => {
+          const box = element.getBoundingClientRect();
+          const style = getComputedStyle(element);
+          const shown = box.width > 1 && style.visibility !== 'hidden' && style.clip !== 'rect(0px, 0px, 0px, 0px)';
+          return shown && !element.closest('[aria-hidden=true]') && (box.width < min || box.height < min);
+        })
+        .map((element) => {
+          const box = element.getBoundingClientRect();
+          const name = element.getAttribute('aria-label') ?? element.textContent?.trim().slice(0, 40) ?? '';
+          return `${element.tagName.toLowerCase()} "${name}" (${Math.round(box.width)}×${Math.round(box.height)})`;
+        }),
+    { min, selector },
+  );
+}
+
+async function launchingCycle() {
+  const { cycle, slotIds } = await planCycle({
+    start: true,
+    aircraft: [
+      { side: 'C21', grossWeightLb: 44_800, pilot: 'pilot' },
+      { side: 'C22', grossWeightLb: 46_200 },
+      { side: 'D33', grossWeightLb: 45_500 },
+      { side: 'L47', grossWeightLb: 48_000 },
+    ],
+  });
+  const handler = await apiAs('handler');
+  for (const [side, catapult] of [
+    ['C21', 1],
+    ['C22', 1],
+    ['D33', 2],
+  ] as const) {
+    await placeInLane(handler, cycle.id, slotIds.get(side)!, catapult);
+  }
+  await handler.dispose();
+  return cycle;
+}
+
+const screens = [
+  { who: 'handler', path: (cycle: number) => `/lineup?cycle=${cycle}`, ready: 'lane' },
+  { who: 'handler', path: (cycle: number) => `/deck?cycle=${cycle}`, ready: 'landing-area' },
+  { who: 'cat1', path: (cycle: number) => `/cat-station?cycle=${cycle}`, ready: 'current-aircraft', station: true },
+  { who: 'pilot', path: (cycle: number) => `/my-launch?cycle=${cycle}`, ready: 'my-slot', station: true },
+  { who: 'airops', path: () => '/cycles' },
+  { who: 'airops', path: () => '/reports' },
+  { who: 'airops', path: (cycle: number) => `/reports/replay?cycle=${cycle}` },
+  { who: 'airops', path: (cycle: number) => `/reports/launch-sheet?cycle=${cycle}` },
+  { who: 'airops', path: () => '/reports/shot-counts' },
+  { who: 'admin', path: () => '/fleet' },
+  { who: 'admin', path: () => '/launch-data' },
+  { who: 'admin', path: () => '/people' },
+  { who: 'admin', path: () => '/audit' },
+];
+
+let cycleId: number;
+test.beforeAll(async () => {
+  cycleId = (await launchingCycle()).id;
+});
+
+for (const screen of screens) {
+  test(`${screen.path(0).split('?')[0]} as ${screen.who}: no error logged, no axe violation by day or night, controls a finger can hit`, async ({
+    browser,
+  }) => {
+    const path = screen.path(cycleId);
+    const page = await openAs(browser, screen.who, path, TABLET, true);
+    const errors: string[] = [];
+    page.on('console', (message) => {
+      if (message.type() === 'error') errors.push(message.text());
+    });
+    page.on('pageerror', (error) => errors.push(error.message));
+    if (screen.ready) await expect(page.getByTestId(screen.ready).first()).toBeVisible();
+    await page.waitForLoadState('networkidle');
+    const found = (await smallControls(page, TOUCH_PX)).map((small) => `${small} is under ${TOUCH_PX} px`);
+    if (screen.station)
+      for (const small of await smallControls(page, STATION_ACTION_PX, 'main button, main input'))
+        found.push(`${small} is under ${STATION_ACTION_PX} px on a station`);
+    for (const violation of await axeViolations(page)) found.push(`by day: ${violation}`);
+    await page.getByLabel('Theme').selectOption('night');
+    await expect(page.locator('html')).toHaveClass(/dark/);
+    for (const violation of await axeViolations(page)) found.push(`by night: ${violation}`);
+    for (const error of errors) found.push(`logged: ${error}`);
+    expect(found).toEqual([]);
+    await page.context().close();
+  });
+}

@@ -1,10 +1,13 @@
 import { type LineupSnapshot, ROLES, type Role } from '@catline/contracts';
 import type { INestApplication } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
 import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
 import request from 'supertest';
+import { secondShipPeople } from '../src/database/seeds/demo-second-ship.js';
 import { type MatrixContext, type MatrixRoute, matrixRoutes } from './role-matrix/index.js';
 import { DocumentedAnswers } from './support/documented-answers.js';
 import { bearer, demoEmail, signIn } from './support/sign-in.js';
+import { connected, join, openSocket } from './support/socket-client.js';
 import { startTestApp } from './support/test-app.js';
 
 const key = (method: string, path: string) => `${method.toUpperCase()} ${path}`;
@@ -26,6 +29,22 @@ function fillPath(path: string, params: Record<string, string | number> = {}): s
   });
 }
 
+/**
+ * What a route names of the first ship, read by that ship's admin: the cycle's lineup version for a route
+ * under a cycle, otherwise the row of the path's first id (`/api/users/{id}/invitation` reads `/api/users/{id}`).
+ */
+function ownerRead(route: MatrixRoute, params: Record<string, string | number> = {}): string {
+  if (params.cycleId !== undefined) return `/api/cycles/${params.cycleId}/lineup`;
+  return fillPath(/^\/api\/[\w-]+\/\{\w+\}/.exec(route.path)![0], params);
+}
+
+/** Rows that name a row of a ship in their path, and the roles they admit. */
+const shipRowRoutes = matrixRoutes.flatMap((route) =>
+  route.allowed !== 'public' && route.path.includes('{')
+    ? route.allowed.map((role) => [key(route.method, route.path), role, route] as const)
+    : [],
+);
+
 const isAllowed = (route: MatrixRoute, caller: Role | null) =>
   route.allowed === 'public' || (caller !== null && route.allowed.includes(caller));
 
@@ -33,6 +52,8 @@ describe('role matrix', () => {
   let app: INestApplication;
   let url: string;
   const tokens = new Map<Role, string>();
+  /** The people of the demo's second ship, one of each role, who must reach nothing of the first ship. */
+  const secondShipTokens = new Map<Role, string>();
   let documented: DocumentedAnswers;
   /** How the answers the rows got disagree with the document, gathered for the last test. */
   const undocumented = new Set<string>();
@@ -41,6 +62,7 @@ describe('role matrix', () => {
     ({ app, url } = await startTestApp());
     documented = await DocumentedAnswers.of(url);
     for (const role of ROLES) tokens.set(role, await signIn(url, demoEmail(role)));
+    for (const person of secondShipPeople) secondShipTokens.set(person.role, await signIn(url, person.email));
   });
 
   afterAll(async () => {
@@ -105,6 +127,59 @@ describe('role matrix', () => {
       (snapshot.body as LineupSnapshot).slots.find((slot) => slot.id === slotId);
     expect(slotOf(after)).toEqual(slotOf(before));
     expect((after.body as LineupSnapshot).version).toBe((before.body as LineupSnapshot).version);
+  });
+
+  // The two-ship matrix: each route naming a first-ship row, called by the second ship's person of every role
+  // it admits, with the example a refused caller gets (the first ship's shared rows; no fresh cycle each).
+  it.each(shipRowRoutes)(
+    "%s refuses the second ship's %s a first-ship row and leaves it as it was",
+    async (...[, role, route]) => {
+      const context: MatrixContext = { baseUrl: url, caller: role, allowed: false, tokenOf: (of) => tokens.get(of)! };
+      const example = (await route.example?.(context)) ?? {};
+      const read = async () => {
+        const answer = await request(url)
+          .get(ownerRead(route, example.params))
+          .set(bearer(tokens.get('admin')!));
+        return {
+          status: answer.status,
+          body: example.params?.cycleId === undefined ? answer.body : answer.body.version,
+        };
+      };
+      const before = await read();
+      const method = route.method.toLowerCase() as 'get';
+      const target = request(url)[method](fillPath(route.path, example.params));
+      const pending = target
+        .query(example.query ?? {})
+        .set(example.headers ?? {})
+        .set(bearer(secondShipTokens.get(role)!));
+      const response = example.body === undefined ? await pending : await pending.send(example.body);
+      const refused = response.status === 403 || response.status === 404;
+      expect(refused ? 'refused' : `${response.status} ${JSON.stringify(response.body)}`).toBe('refused');
+      expect(await read()).toEqual(before);
+    },
+  );
+
+  it("refuses cycle:join of a first-ship cycle to the second ship's people of every role", async () => {
+    const origin = app.get(ConfigService).get<string>('WEB_ORIGINS')!.split(',')[0].trim();
+    const [cycle] = (
+      await request(url)
+        .get('/api/cycles')
+        .set(bearer(tokens.get('observer')!))
+    ).body.items as {
+      id: number;
+    }[];
+    const answers: Record<string, unknown> = {};
+    for (const [role, token] of secondShipTokens) {
+      const socket = openSocket(url, { token, origin });
+      try {
+        await connected(socket);
+        answers[role] = await join(socket, { cycleId: cycle.id });
+      } finally {
+        socket.disconnect();
+      }
+    }
+    const notFound = { ok: false, code: 'not_found', message: `Cycle ${cycle.id} does not exist.` };
+    expect(answers).toEqual(Object.fromEntries(ROLES.map((role) => [role, notFound])));
   });
 
   it.each(matrixRoutes.map((route) => [key(route.method, route.path), route] as const))(

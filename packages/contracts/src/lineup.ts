@@ -230,6 +230,11 @@ export interface SlotView {
   grossWeightLb: number;
   /** The parts of the planned gross weight; null while it is the figure typed in the air plan. */
   grossWeightParts: GrossWeightPartsView | null;
+  /** Armed or safe as the deck crew last recorded it; null until first recorded. */
+  armState: ArmState | null;
+  /** When and by whom armed or safe was last recorded. */
+  armStateAt: string | null;
+  armStateBy: string | null;
   tanker: boolean;
   earlyWarning: boolean;
   spare: boolean;
@@ -338,6 +343,7 @@ export const CHANGE_KINDS = [
   'down_on_catapult',
   'suspend_reason_given',
   'load_set',
+  'arm_state_set',
 ] as const;
 export type ChangeKind = (typeof CHANGE_KINDS)[number];
 
@@ -546,6 +552,16 @@ export interface CallSpareRequest {
 
 /** Assign a pilot to an aircraft, or take the pilot off it (`pilotId: null`); a pilot flying another aircraft moves. */
 /** Fuel on board and the stores list of a slot, each stores item named from its type's catalogue. */
+/** Whether an aircraft's weapons are armed or made safe, as the deck crew records it. */
+export const ARM_STATES = ['safe', 'armed'] as const;
+export type ArmState = (typeof ARM_STATES)[number];
+
+/** Record an aircraft armed or safe: the handler, or the catapult officer or deck edge operator of its catapult. */
+export interface SetArmStateRequest {
+  slotVersion: number;
+  armState: ArmState;
+}
+
 export interface SetLoadRequest {
   slotVersion: number;
   /** Whole pounds. */

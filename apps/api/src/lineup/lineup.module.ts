@@ -1,4 +1,5 @@
 import { SlotLoadController } from './slot-load.controller.js';
+import { SlotArmStateService } from './slot-arm-state.service.js';
 import { SlotLoadService } from './slot-load.service.js';
 import { Module } from '@nestjs/common';
 import { CycleChangesModule } from '../cycle-changes/cycle-changes.module.js';
@@ -30,6 +31,7 @@ import { WaiversService } from './waivers.service.js';
     ReturnToPoolService,
     WaiversService,
     SlotLoadService,
+    SlotArmStateService,
   ],
 })
 export class LineupModule {}

@@ -7,14 +7,19 @@ import { Roles } from '../common/decorators/roles.decorator.js';
 import { ApiDoc } from '../common/openapi/api-doc.decorator.js';
 import { LineupCommandResultDto } from '../common/openapi/views/lineup.view.js';
 import { actorOf } from '../cycle-changes/cycle-change.service.js';
+import { SetArmStateDto } from './dto/set-arm-state.dto.js';
 import { SetLoadDto } from './dto/set-load.dto.js';
+import { SlotArmStateService } from './slot-arm-state.service.js';
 import { SlotLoadService } from './slot-load.service.js';
 
-// What a slot carries; the command answers 200 with the accepted change.
+// What a slot carries and whether it is armed; each command answers 200 with the accepted change.
 @ApiTags('lineup')
 @Controller('cycles/:cycleId/lineup/slots/:slotId')
 export class SlotLoadController {
-  constructor(private readonly load: SlotLoadService) {}
+  constructor(
+    private readonly load: SlotLoadService,
+    private readonly arming: SlotArmStateService,
+  ) {}
 
   @ApiDoc('Set the fuel on board and the stores of an aircraft', {
     response: LineupCommandResultDto,
@@ -36,5 +41,27 @@ export class SlotLoadController {
     @CurrentUser() user: AuthenticatedUser,
   ): Promise<LineupCommandResult> {
     return this.load.setLoad(cycleId, actorOf(user), slotId, body);
+  }
+
+  @ApiDoc('Record an aircraft armed or safe', {
+    response: LineupCommandResultDto,
+    description:
+      "The handler records it for any aircraft of the cycle; the catapult officer and the deck edge operator only for one in their catapult's order.",
+    refuses: {
+      403: ['not_your_catapult'],
+      404: ['not_found'],
+      409: ['wrong_step', 'no_change', 'stale_basis', 'cycle_closed'],
+    },
+  })
+  @Roles('handler', 'catapult_officer', 'deck_edge_operator')
+  @Post('arm-state')
+  @HttpCode(HttpStatus.OK)
+  setArmState(
+    @Param('cycleId', ParseIntPipe) cycleId: number,
+    @Param('slotId', ParseIntPipe) slotId: number,
+    @Body() body: SetArmStateDto,
+    @CurrentUser() user: AuthenticatedUser,
+  ): Promise<LineupCommandResult> {
+    return this.arming.setArmState(cycleId, user, slotId, body);
   }
 }

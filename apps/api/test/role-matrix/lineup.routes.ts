@@ -300,6 +300,18 @@ export const lineupRoutes: MatrixRoute[] = [
   },
   {
     method: 'POST',
+    path: '/api/cycles/{cycleId}/lineup/slots/{slotId}/arm-state',
+    allowed: ['handler', 'catapult_officer', 'deck_edge_operator'],
+    // The crew of another catapult may not record it.
+    notOwner: OTHER_CATAPULT,
+    example: async (context) => {
+      if (!context.allowed) return refused;
+      const { cycleId, slot } = await freshSlot(context, 'lane');
+      return { params: { cycleId, slotId: slot.id }, body: { slotVersion: slot.version, armState: 'armed' } };
+    },
+  },
+  {
+    method: 'POST',
     path: '/api/cycles/{cycleId}/lineup/slots/{slotId}/return',
     allowed: ['catapult_officer', 'handler'],
     // The officer of another catapult may not return it (the handler needs the officer's agreement).

@@ -1,4 +1,5 @@
 import type {
+  ArmState,
   DeckPositionKind,
   LaunchRecord,
   ReverifyCause,
@@ -75,6 +76,17 @@ export class Slot {
   /** Set with fuel and stores; null while the gross weight is the one typed in the air plan. */
   @Column({ name: 'load_build', type: 'json', nullable: true })
   loadBuild: StoredLoadBuild | null;
+
+  /** Null until the deck crew first records it. */
+  @Column({ name: 'arm_state', type: 'varchar', length: 5, nullable: true })
+  armState: ArmState | null;
+
+  @InstantColumn({ name: 'arm_state_at', nullable: true })
+  armStateAt: Date | null;
+
+  /** The name of who recorded it, as it was then (the change log keeps the person). */
+  @Column({ name: 'arm_state_by', type: 'varchar', length: 120, nullable: true })
+  armStateBy: string | null;
 
   @Column({ default: false })
   tanker: boolean;

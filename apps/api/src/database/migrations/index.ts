@@ -16,6 +16,7 @@ import { SlotLoadBuild1796227583908 } from './1796227583908-SlotLoadBuild.js';
 import { SlotDownCatapult1796228372875 } from './1796228372875-SlotDownCatapult.js';
 import { AircraftTypeMaxEndSpeed1796229016417 } from './1796229016417-AircraftTypeMaxEndSpeed.js';
 import { ShipsOwnTheirData1796240912480 } from './1796240912480-ShipsOwnTheirData.js';
+import { SlotArmState1796243880772 } from './1796243880772-SlotArmState.js';
 
 /** Every migration in the order it runs; add a new one at the end (see DEVELOPERS.md). */
 export const migrations = [
@@ -37,4 +38,5 @@ export const migrations = [
   SlotDownCatapult1796228372875,
   AircraftTypeMaxEndSpeed1796229016417,
   ShipsOwnTheirData1796240912480,
+  SlotArmState1796243880772,
 ];

@@ -44,6 +44,7 @@ export const CHANGE_KIND_LABELS: Record<ChangeKind, string> = {
   down_on_catapult: 'Down on the catapult',
   suspend_reason_given: 'Suspend reason',
   load_set: 'Fuel and stores',
+  arm_state_set: 'Armed or safe',
 };
 
 /** Slots in no lane and not in the deck pool: down or scratched aircraft. */

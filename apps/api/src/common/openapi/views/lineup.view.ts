@@ -1,4 +1,6 @@
 import {
+  ARM_STATES,
+  type ArmState,
   CHANGE_KINDS,
   type DeckPositionView,
   type ChangeActor,
@@ -330,6 +332,15 @@ export class SlotViewDto implements SlotView {
 
   @ApiProperty({ type: GrossWeightPartsViewDto, nullable: true, description: 'Null while the weight is typed in.' })
   grossWeightParts: GrossWeightPartsView | null;
+
+  @ApiProperty({ enum: ARM_STATES, nullable: true, description: 'Armed or safe as last recorded; null until then.' })
+  armState: ArmState | null;
+
+  @InstantProperty({ nullable: true, description: 'When armed or safe was last recorded.' })
+  armStateAt: string | null;
+
+  @ApiProperty({ type: String, nullable: true, description: 'Who recorded it.' })
+  armStateBy: string | null;
 
   @ApiProperty()
   tanker: boolean;

@@ -9,6 +9,12 @@ function agreement(at: string | null) {
   return at ? `Yes, ${formatClock(at)}` : 'Not yet';
 }
 
+/** Armed or safe with who recorded it and when; "Not recorded" until the crew does. */
+function armState({ armState: state, armStateAt: at, armStateBy: by }: SlotView) {
+  if (!state || !at) return 'Not recorded';
+  return `${state === 'armed' ? 'Armed' : 'Safe'}, ${formatClock(at)} by ${by ?? 'the crew'}`;
+}
+
 /** The launch figures of the aircraft on the catapult, large enough for a glance from the deck edge. */
 export function AircraftFigures({ slot }: { slot: SlotView }) {
   const figures = slot.figures;
@@ -48,6 +54,12 @@ export function AircraftFigures({ slot }: { slot: SlotView }) {
           label="Afterburner"
           value={slot.afterburnerRequired ? 'Required' : 'Not required'}
           tone={slot.afterburnerRequired ? 'caution' : undefined}
+        />
+        <FigureStat
+          label="Armed or safe"
+          value={armState(slot)}
+          tone={slot.armState === 'armed' ? 'caution' : undefined}
+          size="md"
         />
       </SimpleGrid>
       {slot.grossWeightParts && (

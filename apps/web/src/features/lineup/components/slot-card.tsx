@@ -109,6 +109,16 @@ function SlotCardContent({ slot, movable, mark }: { slot: SlotView; movable: boo
             {slot.heldSpare ? 'Spare, held' : 'Spare'}
           </Badge>
         )}
+        {slot.armState && (
+          <Badge
+            size="sm"
+            colorPalette="caution"
+            variant={slot.armState === 'armed' ? 'solid' : 'outline'}
+            data-testid="arm-state"
+          >
+            {slot.armState === 'armed' ? 'Armed' : 'Safe'}
+          </Badge>
+        )}
         {slot.pilotId === null && !isDone(slot) && !slot.heldSpare && (
           <Badge size="sm" colorPalette="caution" variant="solid" data-testid="no-pilot">
             No pilot

@@ -19,6 +19,12 @@ export const slotsById = (snapshot: LineupSnapshot) => new Map(snapshot.slots.ma
 export const isDone = (slot: SlotView) =>
   slot.status === 'launched' || slot.status === 'down' || slot.status === 'scratched';
 
+/**
+ * An aircraft still to fly with nobody to fly it: it cannot get past taxiing, so the suggestion leaves it
+ * out and the board flags it. A held spare brings no pilot until it is called.
+ */
+export const needsPilot = (slot: SlotView) => slot.pilotId === null && !isDone(slot) && !slot.heldSpare;
+
 /** The server moves planned aircraft only: once one is taxiing, its place is held. */
 export const isMovable = (slot: SlotView) => slot.status === 'planned';
 
@@ -193,8 +199,7 @@ export function lineupWarnings(snapshot: LineupSnapshot, formatTime: (iso: strin
       }
     }
   }
-  // An aircraft without a pilot cannot get past taxiing; the suggestion leaves it out until one is assigned.
-  const pilotless = snapshot.slots.filter((slot) => slot.pilotId === null && !isDone(slot) && !slot.heldSpare);
+  const pilotless = snapshot.slots.filter(needsPilot);
   if (pilotless.length > 0) {
     warnings.push({
       kind: 'no_pilot',

@@ -8,7 +8,7 @@ import { GripIcon } from '../../../components/icons.js';
 import { SlotStatusBadge } from '../../../components/slot-status-badge.js';
 import { formatOptionalClock, formatPounds } from '../../../lib/format.js';
 import { slotItemId } from '../hooks/use-lineup-drag.js';
-import { isDone, type SlotMark } from '../lineup-model.js';
+import { needsPilot, type SlotMark } from '../lineup-model.js';
 import { GrossWeightParts } from '../../../components/gross-weight-parts.js';
 
 const MARK_LABELS: Record<SlotMark, string> = { 'on-catapult': 'On cat', next: 'Next' };
@@ -119,7 +119,7 @@ function SlotCardContent({ slot, movable, mark }: { slot: SlotView; movable: boo
             {slot.armState === 'armed' ? 'Armed' : 'Safe'}
           </Badge>
         )}
-        {slot.pilotId === null && !isDone(slot) && !slot.heldSpare && (
+        {needsPilot(slot) && (
           <Badge size="sm" colorPalette="caution" variant="solid" data-testid="no-pilot">
             No pilot
           </Badge>

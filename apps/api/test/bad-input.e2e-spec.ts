@@ -5,6 +5,8 @@ import fc from 'fast-check';
 import request from 'supertest';
 import { DataSource } from 'typeorm';
 import { type MatrixContext, type MatrixRoute, type RouteExample, matrixRoutes } from './role-matrix/index.js';
+import { type RecordedAnswer, recordAnswers } from './support/answer-recorder.js';
+import { DocumentedAnswers } from './support/documented-answers.js';
 import { LineupDriver } from './support/lineup-fixtures.js';
 import { recreateOwnDatabase } from './support/own-database.js';
 import { bearer, demoEmail, signIn } from './support/sign-in.js';
@@ -83,6 +85,8 @@ describe(`bad input to every write route and socket event (${RUNS} tries each, s
   let url: string;
   let dataSource: DataSource;
   let tables: string[];
+  let answers: RecordedAnswer[];
+  let documented: DocumentedAnswers;
   const tokens = new Map<Role, string>();
 
   const sharedDatabase = process.env.DB_NAME;
@@ -92,6 +96,8 @@ describe(`bad input to every write route and socket event (${RUNS} tries each, s
   beforeAll(async () => {
     process.env.DB_NAME = (await recreateOwnDatabase('fuzz')).DB_NAME;
     ({ app, url } = await startTestApp());
+    answers = recordAnswers(app);
+    documented = await DocumentedAnswers.of(url);
     dataSource = app.get(DataSource);
     tables = dataSource.entityMetadatas.map((metadata) => metadata.tableName);
     for (const role of ROLES) tokens.set(role, await signIn(url, demoEmail(role)));
@@ -260,4 +266,9 @@ describe(`bad input to every write route and socket event (${RUNS} tries each, s
     expect(answers.filter((answer) => (answer as { code?: string }).code === 'internal_error')).toEqual([]);
     expect((await request(url).get('/api/health')).status).toBe(200);
   }, 180_000);
+
+  // After the junk: each refusal it got is one its operation documents, with that status's codes.
+  it('got only refusals the document lists for each operation', () => {
+    expect(documented.problemsOf(answers)).toEqual([]);
+  });
 });

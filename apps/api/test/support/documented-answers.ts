@@ -2,6 +2,7 @@ import type { OpenAPIObject } from '@nestjs/swagger';
 import { Ajv, type ValidateFunction } from 'ajv';
 import addFormatsModule from 'ajv-formats';
 import request from 'supertest';
+import type { RecordedAnswer } from './answer-recorder.js';
 
 // ajv-formats is CommonJS: its function is the default export's default under ESM.
 const addFormats = addFormatsModule as unknown as typeof addFormatsModule.default;
@@ -68,12 +69,33 @@ export class DocumentedAnswers {
     return new DocumentedAnswers(served.body as OpenAPIObject);
   }
 
-  /** The documented path (`/api/cycles/{cycleId}`) an address (`/api/cycles/12?x=1`) is an instance of. */
+  /**
+   * The documented path (`/api/cycles/{cycleId}`) an address (`/api/cycles/12?x=1`) is an instance of; a
+   * path with fewer placeholders first, so that `/api/users/me` is not taken for `/api/users/{userId}`.
+   */
   pathOf(address: string): string | undefined {
     const bare = address.split('?')[0];
-    return Object.keys(this.document.paths).find((path) =>
-      new RegExp(`^${path.replace(/\./g, '\\.').replace(/\{\w+\}/g, '[^/]+')}$`).test(bare),
-    );
+    const placeholders = (path: string) => path.split('{').length;
+    return Object.keys(this.document.paths)
+      .sort((a, b) => placeholders(a) - placeholders(b))
+      .find((path) => new RegExp(`^${path.replace(/\./g, '\\.').replace(/\{\w+\}/g, '[^/]+')}$`).test(bare));
+  }
+
+  /**
+   * How the answers a recorder kept (see answer-recorder.ts) disagree with the document, once each. An
+   * answer to no documented operation (an unknown path's 404, a 405, a HEAD) is left out: the document
+   * describes operations.
+   */
+  problemsOf(answers: readonly RecordedAnswer[]): string[] {
+    const problems = new Set<string>();
+    for (const answer of answers) {
+      const named = answer.route?.replace(/:(\w+)/g, '{$1}');
+      const path = named && this.document.paths[named] ? named : this.pathOf(answer.address);
+      const operations = path ? (this.document.paths[path] as Record<string, unknown>) : undefined;
+      if (!path || !operations?.[answer.method.toLowerCase()]) continue;
+      for (const problem of this.problems(answer.method, path, answer)) problems.add(problem);
+    }
+    return [...problems];
   }
 
   /** How `answer` to `method path` (as documented) disagrees with the document; empty when it agrees. */

@@ -46,20 +46,22 @@ const ERROR_DESCRIPTION: Record<RefusalStatus, string> = {
 
 /**
  * The refusals every route of a kind answers, by the facts the filter and pipes act on: the
- * validation pipe and StrictIdPipe (400), the body parser (400, 413), the auth guard (401, 403)
+ * validation pipe and StrictIdPipe (400), the body parser on every method but GET (400, 413), the auth guard (401, 403)
  * and the error filter's database answers (503).
  */
 function standardRefusals(route: RouteFacts): Partial<Record<RefusalStatus, RefusalCode[]>> {
   const refusals: Partial<Record<RefusalStatus, RefusalCode[]>> = {};
+  // The body parser reads a body sent to any method but GET, whether the handler takes one or not.
+  const parsesBody = route.verb !== RequestMethod.GET;
   const bad: RefusalCode[] = [
     ...(route.hasBody || route.hasQuery ? (['validation_failed'] as const) : []),
-    ...(route.hasBody ? (['json_too_deep', 'bad_request'] as const) : []),
+    ...(parsesBody ? (['json_too_deep', 'bad_request'] as const) : []),
     ...(route.idParams.length ? (['invalid_id'] as const) : []),
   ];
   if (bad.length) refusals[400] = bad;
   if (!route.isPublic) refusals[401] = ['unauthenticated', 'session_invalid', 'session_ended'];
   if (route.roles) refusals[403] = ['forbidden_role'];
-  if (route.hasBody) refusals[413] = ['payload_too_large'];
+  if (parsesBody) refusals[413] = ['payload_too_large'];
   refusals[503] = ['database_unavailable', 'database_busy'];
   return refusals;
 }

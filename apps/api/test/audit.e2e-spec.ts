@@ -1,6 +1,7 @@
 import type { AuditEntryView, Page } from '@catline/contracts';
 import type { INestApplication } from '@nestjs/common';
 import request from 'supertest';
+import { fleetAdmin } from '../src/database/seeds/demo-second-ship.js';
 import { createAircraft, createUser, unique } from './support/fleet-fixtures.js';
 import { ADMIN, AIR_OPS, LineupDriver } from './support/lineup-fixtures.js';
 import { bearer, signIn } from './support/sign-in.js';
@@ -20,8 +21,8 @@ describe('audit trail', () => {
     await app.close();
   });
 
-  const entries = async (query: Record<string, string | number>): Promise<Page<AuditEntryView>> => {
-    const response = await request(url).get('/api/audit').query(query).set(bearer(admin));
+  const entries = async (query: Record<string, string | number>, as = admin): Promise<Page<AuditEntryView>> => {
+    const response = await request(url).get('/api/audit').query(query).set(bearer(as));
     expect(response.status).toBe(200);
     return response.body as Page<AuditEntryView>;
   };
@@ -60,13 +61,16 @@ describe('audit trail', () => {
     const typed = `${unique('nobody', 12).toLowerCase()}@catline.example`;
     await request(url).post('/api/auth/login').send({ email: typed, password: 'not the password' }).expect(401);
 
-    const failed = await entries({ action: 'sign_in.failed', actor: typed });
+    // An address nobody signs in with belongs to no ship: the fleet admin reads it, a ship's admin does not.
+    const failed = await entries({ action: 'sign_in.failed', actor: typed }, await signIn(url, fleetAdmin.email));
     expect(failed.total).toBe(1);
     expect(failed.items[0]).toMatchObject({
       actorId: null,
       actorEmail: typed,
+      shipId: null,
       summary: expect.stringMatching(/no person/i),
     });
+    expect((await entries({ action: 'sign_in.failed', actor: typed })).total).toBe(0);
 
     const aircraft = await createAircraft(url, admin);
     const other = await createAircraft(url, admin);
@@ -128,7 +132,7 @@ describe('audit trail', () => {
       .split('\r\n')
       .filter((line) => !line.startsWith('# '));
     expect(lines[0]).toBe(
-      'id,at (UTC),actor id,actor e-mail,actor role,client address,action,subject type,subject id,summary,before,after',
+      'id,at (UTC),actor id,actor e-mail,actor role,client address,action,subject type,subject id,ship id,summary,before,after',
     );
     expect(lines.some((line) => line.includes(`,person.created,person,${person.id},`))).toBe(true);
     expect(

@@ -1,4 +1,4 @@
-import type { AircraftView, CycleView, ShipView, SquadronView, UserView } from '@catline/contracts';
+import type { AircraftView, AuditEntryView, CycleView, ShipView, SquadronView, UserView } from '@catline/contracts';
 import type { INestApplication } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import request from 'supertest';
@@ -179,6 +179,37 @@ describe('finding 12: ships own their data', () => {
       status: 404,
       code: 'ship_not_found',
     });
+  });
+
+  it("keeps each ship's audit trail to its own admins; a fleet admin reads every ship's, or one ship's", async () => {
+    const firstShipId = (await deck.demoShip()).id;
+    const secondShipId = (await rows<ShipView>(OTHER_ADMIN, '/api/ships'))[0].id;
+    const onFirst = await deck.ok<{ id: number }>(ADMIN, 'post', '/api/aircraft-types', aircraftTypeBody(), 201);
+    const onSecond = await deck.ok<{ id: number }>(OTHER_ADMIN, 'post', '/api/aircraft-types', aircraftTypeBody(), 201);
+    const created = async (email: string, query = '') =>
+      (await deck.all<AuditEntryView>(email, `/api/audit?action=aircraft_type.created${query}`)).map((entry) => ({
+        subjectId: entry.subjectId,
+        shipId: entry.shipId,
+      }));
+    const first = { subjectId: onFirst.id, shipId: firstShipId };
+    const second = { subjectId: onSecond.id, shipId: secondShipId };
+
+    expect(await created(ADMIN)).toContainEqual(first);
+    expect(await created(ADMIN)).not.toContainEqual(second);
+    expect(await created(OTHER_ADMIN)).toContainEqual(second);
+    expect((await created(OTHER_ADMIN)).every((entry) => entry.shipId === secondShipId)).toBe(true);
+    expect(await created(OTHER_ADMIN, `&ship=${firstShipId}`)).toEqual([]);
+    expect(await created(fleetAdmin.email)).toEqual(expect.arrayContaining([first, second]));
+    const ofSecond = await created(fleetAdmin.email, `&ship=${secondShipId}`);
+    expect(ofSecond).toContainEqual(second);
+    expect(ofSecond.every((entry) => entry.shipId === secondShipId)).toBe(true);
+
+    const csv = await request(url)
+      .get(`/api/audit/export.csv?action=aircraft_type.created`)
+      .set(bearer(await deck.token(OTHER_ADMIN)));
+    expect(csv.status).toBe(200);
+    expect(csv.text).toContain(`,aircraft_type.created,aircraft_type,${onSecond.id},${secondShipId},`);
+    expect(csv.text).not.toContain(`,aircraft_type.created,aircraft_type,${onFirst.id},`);
   });
 
   it('keeps a ship admin from making a fleet admin', async () => {

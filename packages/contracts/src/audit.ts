@@ -34,6 +34,8 @@ export interface AuditEntryView {
   action: AuditAction;
   subjectType: string;
   subjectId: number | null;
+  /** The ship the subject belongs to; null for a fleet admin or an e-mail nobody signs in with. */
+  shipId: number | null;
   summary: string;
   before: Record<string, unknown> | null;
   after: Record<string, unknown> | null;

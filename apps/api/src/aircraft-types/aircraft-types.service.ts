@@ -57,6 +57,7 @@ export class AircraftTypesService {
       await this.audit.record(manager, {
         action: 'aircraft_type.created',
         subject: { type: 'aircraft_type', id: created.id },
+        shipId: created.shipId,
         summary: `Aircraft type ${created.designation} created`,
         after: { ...toAircraftTypeView(created) },
       });
@@ -77,6 +78,7 @@ export class AircraftTypesService {
       await this.audit.record(manager, {
         action: 'aircraft_type.updated',
         subject: { type: 'aircraft_type', id },
+        shipId: type.shipId,
         summary: `Aircraft type ${after.designation} changed`,
         before: { ...before },
         after: { ...after },
@@ -95,6 +97,7 @@ export class AircraftTypesService {
       await this.audit.record(manager, {
         action: 'launch_table.replaced',
         subject: { type: 'aircraft_type', id },
+        shipId: type.shipId,
         summary: `Launch table of ${type.designation} replaced (${rows.length} rows)`,
         before: { launchTable: before },
         after: { launchTable: rows },
@@ -115,6 +118,7 @@ export class AircraftTypesService {
       await this.audit.record(manager, {
         action: 'stores_catalogue.replaced',
         subject: { type: 'aircraft_type', id },
+        shipId: type.shipId,
         summary: `Stores catalogue of ${type.designation} replaced (${catalogue.length} items)`,
         before: { storesCatalogue: before },
         after: { storesCatalogue: catalogue },
@@ -139,6 +143,7 @@ export class AircraftTypesService {
       await this.audit.record(manager, {
         action: 'aircraft_type.deleted',
         subject: { type: 'aircraft_type', id },
+        shipId: type.shipId,
         summary: `Aircraft type ${type.designation} deleted`,
         before: { ...toAircraftTypeView(type) },
       });

@@ -65,6 +65,7 @@ export class AircraftService {
       await this.audit.record(manager, {
         action: 'aircraft.created',
         subject: { type: 'aircraft', id: saved.id },
+        shipId: saved.shipId,
         summary: `Aircraft ${saved.sideNumber} added`,
         after: { ...view },
       });
@@ -82,6 +83,7 @@ export class AircraftService {
       await this.audit.record(manager, {
         action: 'aircraft.updated',
         subject: { type: 'aircraft', id },
+        shipId: aircraft.shipId,
         summary: `Aircraft ${after.sideNumber} changed`,
         before: { ...before },
         after: { ...after },
@@ -105,6 +107,7 @@ export class AircraftService {
       await this.audit.record(manager, {
         action: 'aircraft.deleted',
         subject: { type: 'aircraft', id },
+        shipId: aircraft.shipId,
         summary: `Aircraft ${aircraft.sideNumber} deleted`,
         before: { sideNumber: aircraft.sideNumber, typeId: aircraft.typeId, squadronId: aircraft.squadronId },
       });

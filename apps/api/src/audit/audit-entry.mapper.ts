@@ -13,6 +13,7 @@ export function toAuditEntryView(entry: AuditEntry): AuditEntryView {
     action: entry.action,
     subjectType: entry.subjectType,
     subjectId: entry.subjectId,
+    shipId: entry.shipId,
     summary: entry.summary,
     before: entry.before,
     after: entry.after,

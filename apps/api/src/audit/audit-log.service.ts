@@ -3,6 +3,7 @@ import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, type SelectQueryBuilder } from 'typeorm';
 import { toCsv } from '../common/csv.js';
+import type { ShipScope } from '../common/ship-scope.js';
 import { pageOf } from '../common/paging/page-query.dto.js';
 import type { CsvFile } from '../common/csv-response.js';
 import { AuditEntry } from '../database/entities/audit-entry.entity.js';
@@ -19,23 +20,24 @@ const CSV_HEADER = [
   'action',
   'subject type',
   'subject id',
+  'ship id',
   'summary',
   'before',
   'after',
 ];
 
-/** Reading the audit trail: newest first, filtered, one page at a time or as a CSV file. */
+/** Reading the audit trail of the caller's ship (every ship's for a fleet admin): newest first, filtered, a page at a time or as a CSV file. */
 @Injectable()
 export class AuditLog {
   constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
 
-  async page(query: AuditPageQueryDto): Promise<Page<AuditEntryView>> {
-    const [entries, total] = await this.select(query).take(query.limit).skip(query.offset).getManyAndCount();
+  async page(scope: ShipScope, query: AuditPageQueryDto): Promise<Page<AuditEntryView>> {
+    const [entries, total] = await this.select(scope, query).take(query.limit).skip(query.offset).getManyAndCount();
     return pageOf(query, entries.map(toAuditEntryView), total);
   }
 
-  async csv(filter: AuditFilterDto): Promise<CsvFile> {
-    const entries = await this.select(filter).take(AUDIT_EXPORT_MAX_ROWS).getMany();
+  async csv(scope: ShipScope, filter: AuditFilterDto): Promise<CsvFile> {
+    const entries = await this.select(scope, filter).take(AUDIT_EXPORT_MAX_ROWS).getMany();
     const rows = entries.map((entry) => [
       entry.id,
       entry.at.toISOString(),
@@ -46,6 +48,7 @@ export class AuditLog {
       entry.action,
       entry.subjectType,
       entry.subjectId,
+      entry.shipId,
       entry.summary,
       entry.before ? JSON.stringify(entry.before) : null,
       entry.after ? JSON.stringify(entry.after) : null,
@@ -53,11 +56,13 @@ export class AuditLog {
     return { fileName: 'audit-trail.csv', content: toCsv(CSV_HEADER, rows) };
   }
 
-  private select(filter: AuditFilterDto): SelectQueryBuilder<AuditEntry> {
+  private select(scope: ShipScope, filter: AuditFilterDto): SelectQueryBuilder<AuditEntry> {
     const query = this.dataSource.manager
       .createQueryBuilder(AuditEntry, 'entry')
       .orderBy('entry.at', 'DESC')
       .addOrderBy('entry.id', 'DESC');
+    if (scope.shipId !== null) query.andWhere('entry.shipId = :own', { own: scope.shipId });
+    if (filter.ship) query.andWhere('entry.shipId = :ship', { ship: filter.ship });
     if (filter.action) query.andWhere('entry.action = :action', { action: filter.action });
     // The column's collation (utf8mb4_unicode_ci) ignores case and accents, as sign-in does.
     if (filter.actor) query.andWhere('entry.actorEmail = :actor', { actor: filter.actor.trim() });

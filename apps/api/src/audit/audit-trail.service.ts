@@ -14,6 +14,8 @@ export type AuditActor =
 export interface AuditRecord {
   action: AuditAction;
   subject: { type: string; id?: number | null };
+  /** The ship the subject belongs to; null for a fleet admin or an e-mail nobody signs in with. */
+  shipId: number | null;
   summary: string;
   /** The record before the change (null on create); only fields that differ from `after` are kept. */
   before?: Fields | null;
@@ -43,7 +45,7 @@ export function changedFields(
 /**
  * The one way to add to the audit trail. Call it with the transaction's manager of the change it
  * describes, so the entry exists exactly when the change committed:
- *   await this.audit.record(manager, { action: 'aircraft.updated', subject: { type: 'aircraft', id }, summary, before, after });
+ *   await this.audit.record(manager, { action: 'aircraft.updated', subject: { type: 'aircraft', id }, shipId, summary, before, after });
  * The actor and client address come from the request (set by the auth guard) unless given.
  */
 @Injectable()
@@ -60,6 +62,7 @@ export class AuditTrail {
       action: record.action,
       subjectType: record.subject.type,
       subjectId: record.subject.id ?? null,
+      shipId: record.shipId,
       summary: record.summary.slice(0, SUMMARY_MAX),
       before,
       after,

@@ -1,7 +1,9 @@
 import type { AuditEntryView, Page } from '@catline/contracts';
 import { Controller, Get, Query, type StreamableFile } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
+import type { AuthenticatedUser } from '../common/authenticated-user.js';
 import { csvResponse } from '../common/csv-response.js';
+import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { Roles } from '../common/decorators/roles.decorator.js';
 import { ApiDoc } from '../common/openapi/api-doc.decorator.js';
 import { AuditEntryPageDto } from '../common/openapi/views/audit.view.js';
@@ -16,14 +18,14 @@ export class AuditController {
   @Roles('admin')
   @ApiDoc('List the audit trail, a page at a time', { response: AuditEntryPageDto })
   @Get()
-  list(@Query() query: AuditPageQueryDto): Promise<Page<AuditEntryView>> {
-    return this.log.page(query);
+  list(@CurrentUser() caller: AuthenticatedUser, @Query() query: AuditPageQueryDto): Promise<Page<AuditEntryView>> {
+    return this.log.page(caller, query);
   }
 
   @Roles('admin')
   @ApiDoc('Download the filtered audit trail as CSV', { response: 'csv' })
   @Get('export.csv')
-  async export(@Query() filter: AuditFilterDto): Promise<StreamableFile> {
-    return csvResponse(await this.log.csv(filter));
+  async export(@CurrentUser() caller: AuthenticatedUser, @Query() filter: AuditFilterDto): Promise<StreamableFile> {
+    return csvResponse(await this.log.csv(caller, filter));
   }
 }

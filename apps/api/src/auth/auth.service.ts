@@ -50,6 +50,7 @@ export class AuthService {
       await this.audit.record(this.dataSource.manager, {
         action: 'sign_in.failed',
         subject: { type: 'person', id: user?.id ?? null },
+        shipId: user?.shipId ?? null,
         summary: !user ? 'No person signs in with this e-mail' : !user.active ? 'Removed person' : 'Wrong password',
         actor: { email: identity },
       });
@@ -58,6 +59,7 @@ export class AuthService {
     await this.audit.record(this.dataSource.manager, {
       action: 'sign_in.succeeded',
       subject: { type: 'person', id: user.id },
+      shipId: user.shipId,
       summary: `${user.name} signed in`,
       actor: { id: user.id, email: user.email, role: user.role },
     });
@@ -107,6 +109,7 @@ export class AuthService {
       await this.audit.record(manager, {
         action: 'password.changed',
         subject: { type: 'person', id: user.id },
+        shipId: user.shipId,
         summary: `${user.name} changed their password; other sessions ended`,
       });
       this.logger.log(`User ${user.id} changed their password; other sessions ended`);

@@ -83,6 +83,7 @@ export class CyclesService {
         await this.audit.record(manager, {
           action: 'cycle.created',
           subject: { type: 'cycle', id: created.id },
+          shipId: created.shipId,
           summary: `Cycle ${created.number} created`,
           after: { ...toCycleView(created, ship.profile, NO_SLOTS) },
         });

@@ -57,6 +57,7 @@ export class LaunchTableImports {
       await this.audit.record(manager, {
         action: 'launch_table.replaced',
         subject: { type: 'aircraft_type', id: typeId },
+        shipId: type.shipId,
         summary: `Launch table of ${type.designation} replaced from upload ${upload.id} (${type.launchTable.length} rows)`,
         before: { launchTable: before },
         after: { launchTable: type.launchTable },

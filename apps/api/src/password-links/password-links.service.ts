@@ -118,6 +118,7 @@ export class PasswordLinks {
       await this.audit.record(manager, {
         action: 'password.set_by_link',
         subject: { type: 'person', id: user.id },
+        shipId: user.shipId,
         summary: `${user.name} set a password through a${purpose === 'invitation' ? 'n invitation' : ' reset'} link`,
         actor: { id: user.id, email: user.email, role: user.role },
       });

@@ -88,6 +88,7 @@ export class UsersService {
         await this.audit.record(writer, {
           action: 'person.created',
           subject: { type: 'person', id: saved.id },
+          shipId: saved.shipId,
           summary: `${saved.name} added as ${saved.role}`,
           after: { ...toUserView(saved) },
         });
@@ -141,6 +142,7 @@ export class UsersService {
       await this.audit.record(manager, {
         action: 'person.updated',
         subject: { type: 'person', id },
+        shipId: user.shipId,
         summary: `${user.name} changed`,
         before: { ...before },
         after: { ...after },
@@ -183,6 +185,7 @@ export class UsersService {
       await this.audit.record(manager, {
         action: 'person.removed',
         subject: { type: 'person', id },
+        shipId: user.shipId,
         summary: `${user.name} removed`,
         before: { active: user.active },
         after: { active: false },

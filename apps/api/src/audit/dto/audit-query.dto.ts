@@ -1,6 +1,7 @@
 import { AUDIT_ACTIONS, type AuditAction } from '@catline/contracts';
 import { ApiPropertyOptional, IntersectionType } from '@nestjs/swagger';
-import { IsEmail, IsIn, IsISO8601, IsOptional } from 'class-validator';
+import { Type } from 'class-transformer';
+import { IsEmail, IsIn, IsInt, IsISO8601, IsOptional, Min } from 'class-validator';
 import { RecordsPageQueryDto } from '../../common/paging/page-query.dto.js';
 
 /** Which entries: every filter given must hold. */
@@ -19,6 +20,17 @@ export class AuditFilterDto {
   @IsOptional()
   @IsISO8601({ strict: true }, { message: 'since must be an ISO 8601 instant, e.g. 2027-01-01T00:00:00Z' })
   since?: string;
+
+  @ApiPropertyOptional({
+    type: 'integer',
+    minimum: 1,
+    description: "Entries of one ship's data; a ship's admin only ever reads their own ship's.",
+  })
+  @IsOptional()
+  @Type(() => Number)
+  @IsInt({ message: 'ship must be a ship id, a whole number from 1' })
+  @Min(1, { message: 'ship must be a ship id, a whole number from 1' })
+  ship?: number;
 
   @ApiPropertyOptional({ example: '2027-01-02T00:00:00Z', description: 'Entries before this instant.' })
   @IsOptional()

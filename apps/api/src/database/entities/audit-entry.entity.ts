@@ -8,6 +8,7 @@ import { InstantColumn } from '../columns.js';
  */
 @Entity('audit_entries')
 @Index('ix_audit_entries_action_at', ['action', 'at'])
+@Index('ix_audit_entries_ship_at', ['shipId', 'at'])
 export class AuditEntry {
   @PrimaryGeneratedColumn({ type: 'bigint' })
   id: string;
@@ -36,6 +37,10 @@ export class AuditEntry {
 
   @Column({ name: 'subject_id', type: 'int', nullable: true })
   subjectId: number | null;
+
+  /** The ship the subject belongs to: a ship's admin reads only their ship's entries (ship-scope.ts). */
+  @Column({ name: 'ship_id', type: 'int', nullable: true })
+  shipId: number | null;
 
   @Column({ length: 300 })
   summary: string;

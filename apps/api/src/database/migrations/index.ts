@@ -17,6 +17,7 @@ import { SlotDownCatapult1796228372875 } from './1796228372875-SlotDownCatapult.
 import { AircraftTypeMaxEndSpeed1796229016417 } from './1796229016417-AircraftTypeMaxEndSpeed.js';
 import { ShipsOwnTheirData1796240912480 } from './1796240912480-ShipsOwnTheirData.js';
 import { SlotArmState1796243880772 } from './1796243880772-SlotArmState.js';
+import { AuditEntryShip1796245854530 } from './1796245854530-AuditEntryShip.js';
 
 /** Every migration in the order it runs; add a new one at the end (see DEVELOPERS.md). */
 export const migrations = [
@@ -39,4 +40,5 @@ export const migrations = [
   AircraftTypeMaxEndSpeed1796229016417,
   ShipsOwnTheirData1796240912480,
   SlotArmState1796243880772,
+  AuditEntryShip1796245854530,
 ];

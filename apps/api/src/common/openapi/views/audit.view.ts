@@ -38,6 +38,12 @@ export class AuditEntryViewDto implements AuditEntryView {
   @IdProperty({ nullable: true })
   subjectId: number | null;
 
+  @IdProperty({
+    nullable: true,
+    description: 'The ship the subject belongs to; null for a fleet admin or an unknown e-mail.',
+  })
+  shipId: number | null;
+
   @ApiProperty()
   summary: string;
 

@@ -16,6 +16,19 @@ export interface ImportProblem {
 export const UPLOAD_RESULTS = ['accepted', 'rejected', 'imported'] as const;
 export type UploadResult = (typeof UPLOAD_RESULTS)[number];
 
+/** One file as kept after its preview: who sent it, when, and what came of it. */
+export interface UploadView {
+  id: number;
+  fileName: string;
+  sizeBytes: number;
+  uploadedAt: string;
+  uploadedById: number;
+  result: UploadResult;
+  /** Every problem the preview found (only the first ones are kept with it). */
+  problemCount: number;
+  importedAt: string | null;
+}
+
 /** What a preview answers; confirm the upload by its id when `problems` is empty. */
 export interface ImportPreview<Row> {
   uploadId: number;

@@ -1,9 +1,10 @@
-import type { AirPlanPreview, AirPlanRow, LineupCommandResult, SlotStatus } from '@catline/contracts';
+import type { AirPlanPreview, AirPlanRow, LineupCommandResult, Page, SlotStatus, UploadView } from '@catline/contracts';
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, type EntityManager, In } from 'typeorm';
 import { Aircraft } from '../database/entities/aircraft.entity.js';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
+import type { PageWindow } from '../common/paging/page-query.dto.js';
 import { Cycle } from '../database/entities/cycle.entity.js';
 import { BasisChecks } from '../cycle-changes/basis-checks.service.js';
 import { actorOf, CycleChangeService } from '../cycle-changes/cycle-change.service.js';
@@ -92,6 +93,12 @@ export class AirPlanImports {
     private readonly changes: CycleChangeService,
     private readonly basis: BasisChecks,
   ) {}
+
+  async listUploads(cycleId: number, window: PageWindow): Promise<Page<UploadView>> {
+    if (!(await this.dataSource.manager.existsBy(Cycle, { id: cycleId })))
+      throw new ImportsException('target_not_found', `Cycle ${cycleId} does not exist.`);
+    return this.uploads.page({ kind: 'air_plan', cycleId }, window);
+  }
 
   async preview(cycleId: number, file: UploadedCsv | undefined, user: AuthenticatedUser): Promise<AirPlanPreview> {
     const manager = this.dataSource.manager;

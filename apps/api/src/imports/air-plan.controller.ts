@@ -1,4 +1,4 @@
-import type { AirPlanPreview, LineupCommandResult } from '@catline/contracts';
+import type { AirPlanPreview, LineupCommandResult, Page, UploadView } from '@catline/contracts';
 import {
   Body,
   Controller,
@@ -9,6 +9,7 @@ import {
   Param,
   ParseIntPipe,
   Post,
+  Query,
   UploadedFile,
 } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
@@ -22,7 +23,8 @@ import { CsvUpload } from './csv-upload.decorator.js';
 import type { UploadedCsv } from './csv-upload.js';
 import { ApiDoc } from '../common/openapi/api-doc.decorator.js';
 import { LineupCommandResultDto } from '../common/openapi/views/lineup.view.js';
-import { AirPlanPreviewDto } from '../common/openapi/views/imports.view.js';
+import { AirPlanPreviewDto, UploadPageDto } from '../common/openapi/views/imports.view.js';
+import { RecordsPageQueryDto } from '../common/paging/page-query.dto.js';
 
 @ApiTags('imports')
 @Controller()
@@ -37,6 +39,20 @@ export class AirPlanController {
   @Header('Content-Disposition', 'attachment; filename="air-plan-template.csv"')
   template(): string {
     return AIR_PLAN_TEMPLATE;
+  }
+
+  @ApiDoc("List a cycle's air plan uploads, a page at a time", {
+    response: UploadPageDto,
+    description: 'Newest first, each with its outcome: accepted, rejected (kept a day) or imported.',
+    refuses: { 404: ['target_not_found'] },
+  })
+  @Roles('air_operations')
+  @Get('cycles/:cycleId/air-plan/imports')
+  uploads(
+    @Param('cycleId', ParseIntPipe) cycleId: number,
+    @Query() query: RecordsPageQueryDto,
+  ): Promise<Page<UploadView>> {
+    return this.imports.listUploads(cycleId, query);
   }
 
   @ApiDoc('Preview an air plan', {

@@ -1,4 +1,4 @@
-import type { AircraftTypeView, LaunchTableImportRow, LaunchTablePreview } from '@catline/contracts';
+import type { AircraftTypeView, LaunchTableImportRow, LaunchTablePreview, Page, UploadView } from '@catline/contracts';
 import { Injectable, Logger } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import type { DataSource } from 'typeorm';
@@ -6,6 +6,7 @@ import { AuditTrail } from '../audit/audit-trail.service.js';
 import { toAircraftTypeView } from '../aircraft-types/aircraft-type.mapper.js';
 import { AircraftType } from '../database/entities/aircraft-type.entity.js';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
+import type { PageWindow } from '../common/paging/page-query.dto.js';
 import { shipWhere } from '../common/ship-scope.js';
 import { sortProblems } from './csv-table.js';
 import type { UploadedCsv } from './csv-upload.js';
@@ -29,6 +30,12 @@ export class LaunchTableImports {
     private readonly uploads: UploadsService,
     private readonly audit: AuditTrail,
   ) {}
+
+  async listUploads(typeId: number, user: AuthenticatedUser, window: PageWindow): Promise<Page<UploadView>> {
+    if (!(await this.dataSource.manager.existsBy(AircraftType, { id: typeId, ...shipWhere(user) })))
+      throw notFound(typeId);
+    return this.uploads.page({ kind: 'launch_table', aircraftTypeId: typeId }, window);
+  }
 
   async preview(typeId: number, file: UploadedCsv | undefined, user: AuthenticatedUser): Promise<LaunchTablePreview> {
     if (!(await this.dataSource.manager.existsBy(AircraftType, { id: typeId, ...shipWhere(user) })))

@@ -1,5 +1,16 @@
-import type { AircraftTypeView, LaunchTablePreview } from '@catline/contracts';
-import { Controller, Get, Header, HttpCode, HttpStatus, Param, ParseIntPipe, Post, UploadedFile } from '@nestjs/common';
+import type { AircraftTypeView, LaunchTablePreview, Page, UploadView } from '@catline/contracts';
+import {
+  Controller,
+  Get,
+  Header,
+  HttpCode,
+  HttpStatus,
+  Param,
+  ParseIntPipe,
+  Post,
+  Query,
+  UploadedFile,
+} from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
@@ -10,7 +21,8 @@ import { LAUNCH_TABLE_TEMPLATE } from './launch-table-layout.js';
 import { LaunchTableImports } from './launch-table-imports.service.js';
 import { ApiDoc } from '../common/openapi/api-doc.decorator.js';
 import { AircraftTypeViewDto } from '../common/openapi/views/fleet.view.js';
-import { LaunchTablePreviewDto } from '../common/openapi/views/imports.view.js';
+import { LaunchTablePreviewDto, UploadPageDto } from '../common/openapi/views/imports.view.js';
+import { RecordsPageQueryDto } from '../common/paging/page-query.dto.js';
 
 @ApiTags('imports')
 @Controller('aircraft-types')
@@ -25,6 +37,21 @@ export class LaunchTableController {
   @Header('Content-Disposition', 'attachment; filename="launch-table-template.csv"')
   template(): string {
     return LAUNCH_TABLE_TEMPLATE;
+  }
+
+  @ApiDoc("List an aircraft type's launch table uploads, a page at a time", {
+    response: UploadPageDto,
+    description: 'Newest first, each with its outcome: accepted, rejected (kept a day) or imported.',
+    refuses: { 404: ['target_not_found'] },
+  })
+  @Roles('admin')
+  @Get(':id/launch-table/imports')
+  uploads(
+    @Param('id', ParseIntPipe) id: number,
+    @CurrentUser() user: AuthenticatedUser,
+    @Query() query: RecordsPageQueryDto,
+  ): Promise<Page<UploadView>> {
+    return this.imports.listUploads(id, user, query);
   }
 
   @ApiDoc('Preview a launch table', {

@@ -1,9 +1,17 @@
 import { createHash } from 'node:crypto';
-import { type ImportProblem, MAX_IMPORT_PROBLEMS, MAX_PROBLEM_VALUE_CHARS } from '@catline/contracts';
+import {
+  type ImportProblem,
+  MAX_IMPORT_PROBLEMS,
+  MAX_PROBLEM_VALUE_CHARS,
+  type Page,
+  type UploadView,
+} from '@catline/contracts';
 import { Injectable, Logger } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, type EntityManager, LessThan } from 'typeorm';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
+import { pageOf, type PageWindow } from '../common/paging/page-query.dto.js';
+import { toUploadView } from './upload.mapper.js';
 import { type CsvLayout, headerWidthProblem } from './csv-table.js';
 import { csvText, notCsvReason, type UploadedCsv, CSV_FIELD } from './csv-upload.js';
 import { Upload, type UploadKind } from '../database/entities/upload.entity.js';
@@ -92,6 +100,30 @@ export class UploadsService {
       `Upload ${upload.id} (${upload.kind}, ${upload.fileName}, ${upload.sizeBytes} B) ${upload.result} with ${upload.problemCount} problems`,
     );
     return upload;
+  }
+
+  /** The target's uploads, newest first, a page at a time; the rows and problems they keep stay out. */
+  async page(target: UploadTarget, window: PageWindow): Promise<Page<UploadView>> {
+    const [uploads, total] = await this.dataSource.manager.findAndCount(Upload, {
+      select: {
+        id: true,
+        fileName: true,
+        sizeBytes: true,
+        uploadedAt: true,
+        uploadedById: true,
+        result: true,
+        problemCount: true,
+        importedAt: true,
+      },
+      where:
+        target.kind === 'air_plan'
+          ? { kind: target.kind, cycleId: target.cycleId }
+          : { kind: target.kind, aircraftTypeId: target.aircraftTypeId },
+      order: { uploadedAt: 'DESC', id: 'DESC' },
+      take: window.limit,
+      skip: window.offset,
+    });
+    return pageOf(window, uploads.map(toUploadView), total);
   }
 
   /** The upload, locked until the transaction ends, when it is an accepted one of this target; refuses otherwise. */

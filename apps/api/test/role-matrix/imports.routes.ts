@@ -40,6 +40,12 @@ async function previewed(
 export const importsRoutes: MatrixRoute[] = [
   { method: 'GET', path: '/api/air-plan/template', allowed: ['air_operations'] },
   {
+    method: 'GET',
+    path: '/api/cycles/{cycleId}/air-plan/imports',
+    allowed: ['air_operations'],
+    example: async (context) => ({ params: { cycleId: (await cycleFor({ ...context, allowed: false })).id } }),
+  },
+  {
     method: 'POST',
     path: '/api/cycles/{cycleId}/air-plan/preview',
     allowed: ['air_operations'],
@@ -61,6 +67,12 @@ export const importsRoutes: MatrixRoute[] = [
     },
   },
   { method: 'GET', path: '/api/aircraft-types/launch-table/template', allowed: ['admin'] },
+  {
+    method: 'GET',
+    path: '/api/aircraft-types/{id}/launch-table/imports',
+    allowed: ['admin'],
+    example: async (context) => ({ params: { id: (await typeFor({ ...context, allowed: false })).id } }),
+  },
   {
     method: 'POST',
     path: '/api/aircraft-types/{id}/launch-table/preview',

@@ -6,9 +6,11 @@ import {
   type LaunchTablePreview,
   UPLOAD_RESULTS,
   type UploadResult,
+  type UploadView,
 } from '@catline/contracts';
 import { ApiProperty, ApiSchema } from '@nestjs/swagger';
-import { EnumProperty, IdProperty, IntProperty } from './fields.js';
+import { EnumProperty, IdProperty, InstantProperty, IntProperty } from './fields.js';
+import { PageDto } from './paging.view.js';
 
 type PreviewResult = Exclude<UploadResult, 'imported'>;
 const PREVIEW_RESULTS = UPLOAD_RESULTS.filter((result) => result !== 'imported');
@@ -111,3 +113,32 @@ export class LaunchTablePreviewDto extends ImportPreviewFields implements Launch
   @ApiProperty({ type: [LaunchTableImportRowDto] })
   rows: LaunchTableImportRow[];
 }
+
+@ApiSchema({ name: 'Upload', description: 'One uploaded file as kept: who sent it, when, and what came of it.' })
+export class UploadViewDto implements UploadView {
+  @IdProperty()
+  id: number;
+
+  @ApiProperty({ description: "As the sender's computer named it." })
+  fileName: string;
+
+  @IntProperty({ minimum: 0 })
+  sizeBytes: number;
+
+  @InstantProperty()
+  uploadedAt: string;
+
+  @IdProperty()
+  uploadedById: number;
+
+  @EnumProperty(UPLOAD_RESULTS, 'UploadResult')
+  result: UploadResult;
+
+  @IntProperty({ minimum: 0, description: 'Every problem the preview found.' })
+  problemCount: number;
+
+  @InstantProperty({ nullable: true })
+  importedAt: string | null;
+}
+
+export const UploadPageDto = PageDto(UploadViewDto, 'Upload', 'One page of the uploads of one target, newest first.');

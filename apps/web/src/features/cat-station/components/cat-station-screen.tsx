@@ -22,10 +22,12 @@ import { useGiveSuspendReason } from '../api/give-suspend-reason.js';
 import { useReportColdShot } from '../api/report-cold-shot.js';
 import { useReportDownOnCatapult } from '../api/report-down-on-catapult.js';
 import { useReportHangfire } from '../api/report-hangfire.js';
+import { useSetArmState } from '../api/set-arm-state.js';
 import { useUndoStep } from '../api/undo-step.js';
 import { useUndoWindow } from '../hooks/use-undo-window.js';
 import { useLaunchIntent } from '../hooks/use-launch-intent.js';
 import { AircraftFigures } from './aircraft-figures.js';
+import { ArmStateButtons } from './arm-state-buttons.js';
 import { CatapultEvents } from './catapult-events.js';
 import { LaunchPanel } from './launch-panel.js';
 import { NextUp } from './next-up.js';
@@ -45,9 +47,10 @@ function Station({ snapshot, catapultId }: { snapshot: LineupSnapshot; catapultI
   const hangfire = useReportHangfire(cycleId);
   const downOnCatapult = useReportDownOnCatapult(cycleId);
   const coldShot = useReportColdShot(cycleId);
+  const arming = useSetArmState(cycleId);
   const undoWindow = useUndoWindow();
   const launchKey = useLaunchIntent(current?.id);
-  const anyPending = [advance, suspend, suspendReason, launch, undo, hangfire, downOnCatapult, coldShot].some(
+  const anyPending = [advance, suspend, suspendReason, launch, undo, hangfire, downOnCatapult, coldShot, arming].some(
     (command) => command.isPending,
   );
 
@@ -137,6 +140,16 @@ function Station({ snapshot, catapultId }: { snapshot: LineupSnapshot; catapultI
               <SlotStatusBadge status={current.status} size="lg" />
             </Flex>
             <AircraftFigures slot={current} />
+            <ArmStateButtons
+              slot={current}
+              pending={anyPending}
+              onRecord={(armState) =>
+                arming.mutate(
+                  { slotId: current.id, slotVersion: current.version, armState },
+                  { onError: refused('Armed or safe') },
+                )
+              }
+            />
           </Stack>
           <Stack gap="4">
             <ReadinessSteps

@@ -68,3 +68,19 @@ test('a pilot-less tanker is left out of the suggestion until it has a pilot, th
   await pilot.getByTestId('acknowledge-weight').click();
   await expect(catOfficer.getByTestId('pilot-weight')).toContainText('The pilot agrees 47,000 lb');
 });
+
+test('air operations gives a pilot-less aircraft its pilot from the card, as the server allows, and the handler sees it', async ({
+  browser,
+}) => {
+  const { cycle } = await planCycle({ aircraft: [{ side: 'L48', grossWeightLb: 47_000, pilot: null }] });
+  const airOps = await openAs(browser, 'airops', `/lineup?cycle=${cycle.id}`);
+  const handler = await openAs(browser, 'handler', `/lineup?cycle=${cycle.id}`);
+  await expect(card(pool(handler), 'L48').getByTestId('no-pilot')).toBeVisible();
+
+  await airOps.getByRole('button', { name: 'Actions for L48' }).click();
+  await airOps.getByRole('menuitem', { name: 'Assign pilot…' }).click();
+  await airOps.getByRole('dialog').getByRole('combobox').selectOption({ label: 'Joss Abbotsfell' });
+  await airOps.getByRole('dialog').getByRole('button', { name: 'Save pilot' }).click();
+  await expect(card(pool(airOps), 'L48').getByTestId('no-pilot')).toHaveCount(0);
+  await expect(card(pool(handler), 'L48').getByTestId('no-pilot')).toHaveCount(0);
+});

@@ -21,10 +21,11 @@ export interface SlotActionHandlers {
   setLoad: (slot: SlotView) => void;
 }
 
-/** What the signed-in person may do from a card: the handler arranges; air operations too sets loads. */
+/** What the signed-in person may do from a card: the handler arranges; air operations too plans each sortie. */
 export interface SlotActionRights {
   arranges: boolean;
-  loads: boolean;
+  /** Its pilot, fuel and stores. */
+  plans: boolean;
 }
 
 /**
@@ -35,15 +36,15 @@ export interface SlotActionRights {
 export function slotActions(slot: SlotView, rights: SlotActionRights, handlers: SlotActionHandlers): SlotAction[] {
   const actions: SlotAction[] = [];
   // Fuel changes until the launch (a hot refuel); the server refuses it on a launched or scratched slot.
-  if (rights.loads && slot.status !== 'launched' && slot.status !== 'scratched') {
+  if (rights.plans && slot.status !== 'launched' && slot.status !== 'scratched') {
     actions.push({ id: 'set-load', label: 'Fuel and stores…', run: () => handlers.setLoad(slot) });
   }
-  if (!rights.arranges) return actions;
   // The server lets a pilot change only while the aircraft is planned or down.
-  if ((slot.status === 'planned' && !slot.heldSpare) || slot.status === 'down') {
+  if (rights.plans && ((slot.status === 'planned' && !slot.heldSpare) || slot.status === 'down')) {
     const label = slot.pilotId === null ? 'Assign pilot…' : 'Change pilot…';
     actions.push({ id: 'assign-pilot', label, run: () => handlers.assignPilot(slot) });
   }
+  if (!rights.arranges) return actions;
   if (slot.status === 'down') {
     actions.push({ id: 'call-spare', label: 'Call a spare…', run: () => handlers.callSpare(slot) });
     actions.push({ id: 'up-again', label: 'Up again…', run: () => handlers.upAgain(slot) });

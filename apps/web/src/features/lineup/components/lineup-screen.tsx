@@ -84,7 +84,7 @@ function LineupWorkspace({ snapshot }: { snapshot: LineupSnapshot }) {
   const cycleId = snapshot.cycle.id;
   const open = snapshot.cycle.state !== 'closed';
   const arranges = useHasRole('handler') && open;
-  const loads = useHasRole('handler', 'air_operations') && open;
+  const plans = useHasRole('handler', 'air_operations') && open;
   // Moves are drags, which the disabled fieldset of a stale board does not stop: they wait for it to be live.
   const live = useFiguresLive();
   const editable = arranges && live;
@@ -123,7 +123,7 @@ function LineupWorkspace({ snapshot }: { snapshot: LineupSnapshot }) {
         actionsFor={(slot) =>
           slotActions(
             slot,
-            { arranges, loads },
+            { arranges, plans },
             {
               markDown: (chosen) => setDialog({ kind: 'down', slot: chosen }),
               assignPilot: (chosen) => setDialog({ kind: 'pilot', slot: chosen }),

@@ -144,7 +144,9 @@ class MoveCommand extends ModelCommand {
     const others = order.filter((id) => id !== slot.id);
     const toIndex = this.placePick % (others.length + 2);
     const body = { slotId: slot.id, slotVersion, toCatapultId: lane.catapultId, toIndex, targetLaneOrder: seen };
-    if (this.staleSlot || slot.status !== 'planned' || !sameIds(seen, order))
+    // A pilot-less aircraft may not join a catapult's order (an up-again one has lost its pilot to a spare).
+    const joinsWithoutPilot = slot.catapultId !== lane.catapultId && slot.pilotId === null;
+    if (this.staleSlot || slot.status !== 'planned' || joinsWithoutPilot || !sameIds(seen, order))
       return { path, body, prediction: refused(409) };
     if (toIndex > others.length) return { path, body, prediction: refused(400) };
     const next = [...others];
@@ -190,7 +192,9 @@ class MarkDownCommand extends ModelCommand {
       slotVersion: this.stale ? slot.version + 1 : slot.version,
       ...(spare ? { spareSlotId: spare.id } : {}),
     };
-    if (this.stale || slot.status !== 'planned' || (spare && slot.catapultId === null))
+    // The down aircraft's pilot walks to the spare; without one, the spare must bring its own.
+    const spareWithoutPilot = spare !== undefined && slot.pilotId === null && spare.pilotId === null;
+    if (this.stale || slot.status !== 'planned' || (spare && slot.catapultId === null) || spareWithoutPilot)
       return { path, body, prediction: { status: 409 as const } };
     const lanes = lanesOf(snapshot);
     if (slot.catapultId !== null) {
@@ -248,6 +252,7 @@ class ApplyLineupCommand extends ModelCommand {
   protected request(model: LineupModel) {
     const { snapshot } = model;
     const current = lanesOf(snapshot);
+    const slots = new Map(snapshot.slots.map((slot) => [slot.id, slot]));
     const lanes: Lanes = new Map(snapshot.lanes.map((lane) => [lane.catapultId, []]));
     byId(snapshot)
       .filter((slot) => slot.status === 'planned')
@@ -261,7 +266,8 @@ class ApplyLineupCommand extends ModelCommand {
       lanes: [...lanes].map(([catapultId, slotIds]) => ({ catapultId, slotIds })),
     };
     const unchanged = [...lanes].every(([catapultId, slotIds]) => sameIds(slotIds, current.get(catapultId)!));
-    if (this.stale || unchanged) return { path, body, prediction: { status: 409 as const } };
+    const pilotless = [...lanes.values()].flat().some((slotId) => slots.get(slotId)!.pilotId === null);
+    if (this.stale || unchanged || pilotless) return { path, body, prediction: { status: 409 as const } };
     return { path, body, prediction: { status: 200 as const, lanes } };
   }
 

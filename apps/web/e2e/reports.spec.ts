@@ -73,9 +73,9 @@ test('the report of the flown cycle draws the same launches in its chart as its 
   );
   await expect(surface.locator(':scope > desc')).toHaveText(await page.getByTestId('timeline-summary').innerText());
 
-  await expect(page.getByRole('region', { name: 'Suspends' })).toContainText('Launch bar not seated');
-  await expect(page.getByRole('region', { name: 'Down aircraft and spares' })).toContainText('C24 (CWR)');
-  await expect(page.getByRole('region', { name: 'Down aircraft and spares' })).toContainText('C31 (CWR)');
+  await expect(page.getByRole('region', { name: 'Suspends', exact: true })).toContainText('Launch bar not seated');
+  await expect(page.getByRole('region', { name: 'Down aircraft and spares', exact: true })).toContainText('C24 (CWR)');
+  await expect(page.getByRole('region', { name: 'Down aircraft and spares', exact: true })).toContainText('C31 (CWR)');
   await expectNoSidewaysOverflow(page);
   await page.screenshot({ path: 'test-results/reports/report-1366x768.png', fullPage: true });
 

@@ -6,6 +6,8 @@ import { openAs } from './support/screens.js';
 // A normal visit to every screen, as the person who uses it, on the deck crews' tablet: nothing logged as an
 // error, no axe violation by day or by night, and every control big enough for a gloved finger.
 const TABLET = { width: 1024, height: 768 };
+/** The sizes a screenshot of each screen is kept at: laptop, tablet, upright tablet. */
+const SIZES = [{ width: 1366, height: 768 }, TABLET, { width: 820, height: 1180 }];
 /** WCAG 2.2 target size (enhanced, 2.5.5): 44 by 44 CSS pixels. */
 const TOUCH_PX = 44;
 /** The catapult issue: the station's actions are 60 px high, pressed in a hurry on a moving deck. */
@@ -94,6 +96,16 @@ for (const screen of screens) {
       for (const small of await smallControls(page, STATION_ACTION_PX, 'main button, main input'))
         found.push(`${small} is under ${STATION_ACTION_PX} px on a station`);
     for (const violation of await axeViolations(page)) found.push(`by day: ${violation}`);
+    // Kept for a person to look over, at each size the crews use.
+    const name = path.split('?')[0].slice(1).replaceAll('/', '-');
+    for (const size of SIZES) {
+      await page.setViewportSize(size);
+      await page.screenshot({
+        path: `test-results/every-screen/${name}-${size.width}x${size.height}.png`,
+        fullPage: true,
+      });
+    }
+    await page.setViewportSize(TABLET);
     await page.getByLabel('Theme').selectOption('night');
     await expect(page.locator('html')).toHaveClass(/dark/);
     for (const violation of await axeViolations(page)) found.push(`by night: ${violation}`);

@@ -1,35 +1,9 @@
 import AxeBuilder from '@axe-core/playwright';
 import { expect, test } from '@playwright/test';
 import type { CycleView } from '@catline/contracts';
-import { allOf, apiAs, placeInLane, planCycle } from './support/demo-api.js';
+import { allOf, apiAs, launchingCycle } from './support/demo-api.js';
 import { axeViolations } from './support/axe.js';
 import { card, lane, openAs, pool } from './support/screens.js';
-
-/** A launching cycle with an aircraft off, one on cat 1, aircraft waiting and one left in the pool. */
-async function launchingCycle(night: boolean) {
-  const { cycle, slotIds } = await planCycle({
-    start: true,
-    night,
-    aircraft: [
-      { side: 'C21', grossWeightLb: 44_800, pilot: 'pilot' },
-      { side: 'C22', grossWeightLb: 46_200 },
-      { side: 'D33', grossWeightLb: 45_500 },
-      { side: 'G43', grossWeightLb: 24_000 },
-      { side: 'L47', grossWeightLb: 48_000 },
-    ],
-  });
-  const handler = await apiAs('handler');
-  for (const [side, catapult] of [
-    ['C21', 1],
-    ['C22', 1],
-    ['D33', 2],
-    ['G43', 3],
-  ] as const) {
-    await placeInLane(handler, cycle.id, slotIds.get(side)!, catapult);
-  }
-  await handler.dispose();
-  return cycle;
-}
 
 for (const night of [false, true]) {
   test(`the lineup board has no axe violation by ${night ? 'night' : 'day'}`, async ({ browser }) => {

@@ -1,5 +1,5 @@
 import { expect, test, type Page } from '@playwright/test';
-import { apiAs, placeInLane, planCycle } from './support/demo-api.js';
+import { launchingCycle } from './support/demo-api.js';
 import { axeViolations } from './support/axe.js';
 import { openAs } from './support/screens.js';
 
@@ -33,28 +33,6 @@ function smallControls(page: Page, min: number, selector = CONTROLS) {
         }),
     { min, selector },
   );
-}
-
-async function launchingCycle() {
-  const { cycle, slotIds } = await planCycle({
-    start: true,
-    aircraft: [
-      { side: 'C21', grossWeightLb: 44_800, pilot: 'pilot' },
-      { side: 'C22', grossWeightLb: 46_200 },
-      { side: 'D33', grossWeightLb: 45_500 },
-      { side: 'L47', grossWeightLb: 48_000 },
-    ],
-  });
-  const handler = await apiAs('handler');
-  for (const [side, catapult] of [
-    ['C21', 1],
-    ['C22', 1],
-    ['D33', 2],
-  ] as const) {
-    await placeInLane(handler, cycle.id, slotIds.get(side)!, catapult);
-  }
-  await handler.dispose();
-  return cycle;
 }
 
 const screens = [

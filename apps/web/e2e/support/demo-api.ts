@@ -200,3 +200,29 @@ export async function placeInLane(handler: APIRequestContext, cycleId: number, s
     }),
   );
 }
+
+/** A launching cycle with an aircraft off, one on cat 1, aircraft waiting and one left in the pool. */
+export async function launchingCycle(night = false) {
+  const { cycle, slotIds } = await planCycle({
+    start: true,
+    night,
+    aircraft: [
+      { side: 'C21', grossWeightLb: 44_800, pilot: 'pilot' },
+      { side: 'C22', grossWeightLb: 46_200 },
+      { side: 'D33', grossWeightLb: 45_500 },
+      { side: 'G43', grossWeightLb: 24_000 },
+      { side: 'L47', grossWeightLb: 48_000 },
+    ],
+  });
+  const handler = await apiAs('handler');
+  for (const [side, catapult] of [
+    ['C21', 1],
+    ['C22', 1],
+    ['D33', 2],
+    ['G43', 3],
+  ] as const) {
+    await placeInLane(handler, cycle.id, slotIds.get(side)!, catapult);
+  }
+  await handler.dispose();
+  return cycle;
+}

@@ -21,6 +21,8 @@ const fleetShown = (page: Page) => expect(page.getByRole('heading', { name: 'Fle
 test('six tabs opened at once restore the session with one refresh between them and all stay signed in', async ({
   browser,
 }) => {
+  // Eight tabs of the app load and render side by side: 37 s on a quiet clean-clone run, more on a loaded one.
+  test.setTimeout(150_000);
   const context = await browser.newContext();
   const first = await context.newPage();
   await first.goto('/fleet');

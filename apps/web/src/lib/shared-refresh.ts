@@ -12,8 +12,11 @@ import type { SessionResponse } from '@catline/contracts';
  */
 const LOCK = 'catline.refresh';
 const REFRESHED_AT = 'catline.refreshed-at';
-// How long a tab waits for another tab's session before asking the server itself.
-const HANDOVER_WAIT_MS = 1_000;
+// How long a tab that asked the open tabs waits for an answer before asking the server itself.
+const ASK_WAIT_MS = 1_000;
+// How long a tab waits for the session another tab has just refreshed: it is on its way, but a busy
+// browser may take a while to deliver it, and asking again would spend the cookie twice.
+const REFRESHED_WAIT_MS = 5_000;
 // A refresh this recent was heard by the tabs open then; a tab opened since asks them for its session.
 const RECENT_REFRESH_MS = 60_000;
 // A session handed to a new tab keeps at least this long; one closer to its end is renewed instead.
@@ -51,14 +54,14 @@ export function shareSessionWithNewTabs(current: () => SessionResponse | null) {
   currentSession = current;
 }
 
-function awaitHandover(): Promise<SessionResponse | null> {
+function awaitHandover(waitMs: number): Promise<SessionResponse | null> {
   return new Promise((resolve) => {
     const take = (session: SessionResponse | null) => {
       clearTimeout(timer);
       awaiting.delete(take);
       resolve(session);
     };
-    const timer = setTimeout(() => take(null), HANDOVER_WAIT_MS);
+    const timer = setTimeout(() => take(null), waitMs);
     awaiting.add(take);
   });
 }
@@ -67,9 +70,9 @@ function sessionFromOtherTabs(askedAt: number): Promise<SessionResponse | null> 
   if (handedOver && handedOver.at >= askedAt) return Promise.resolve(handedOver.session);
   const refreshedAt = Number(globalThis.localStorage?.getItem(REFRESHED_AT) ?? 0);
   // Another tab refreshed while this one waited for the lock; its session is on the way.
-  if (refreshedAt >= askedAt) return awaitHandover();
+  if (refreshedAt >= askedAt) return awaitHandover(REFRESHED_WAIT_MS);
   if (!channel || Date.now() - refreshedAt > RECENT_REFRESH_MS) return Promise.resolve(null);
-  const answer = awaitHandover();
+  const answer = awaitHandover(ASK_WAIT_MS);
   channel.postMessage({ kind: 'ask' } satisfies Message);
   return answer;
 }

@@ -2,7 +2,7 @@ import { expect, test } from '@playwright/test';
 import { apiAs, placeInLane, planCycle } from './support/demo-api.js';
 import { card, lane, openAs } from './support/screens.js';
 
-test('the catapult crew records the aircraft on the catapult safe, then armed, and the handler’s card follows', async ({
+test('the catapult crew records the aircraft on the catapult safe, then armed, and the handler’s card follows; the handler records it safe from the card', async ({
   browser,
 }) => {
   const { cycle, slotIds } = await planCycle({
@@ -28,4 +28,14 @@ test('the catapult crew records the aircraft on the catapult safe, then armed, a
   await arming.getByRole('button', { name: 'Record armed' }).click();
   await expect(figures).toContainText(/Armed, \d\d:\d\d:\d\d by /);
   await expect(card(lane(board, 1), 'C21').getByTestId('arm-state')).toHaveText('Armed');
+
+  // The handler's card offers only the state not in force, in the station's words.
+  await board.getByRole('button', { name: 'Actions for C21' }).click();
+  await expect(board.getByRole('menuitem', { name: 'Record armed' })).toHaveCount(0);
+  const recordSafe = board.getByRole('menuitem', { name: 'Record safe' });
+  expect((await recordSafe.boundingBox())?.height).toBeGreaterThanOrEqual(44);
+  await recordSafe.click();
+  await expect(card(lane(board, 1), 'C21').getByTestId('arm-state')).toHaveText('Safe');
+  await expect(figures).toContainText(/Safe, \d\d:\d\d:\d\d by /);
+  await expect(arming.getByRole('button', { name: 'Record safe' })).toHaveAttribute('aria-pressed', 'true');
 });

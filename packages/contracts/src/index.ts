@@ -15,4 +15,5 @@ export * from './refusals.js';
 export * from './reports.js';
 export * from './roles.js';
 export * from './socket.js';
+export * from './spare-order.js';
 export * from './time.js';

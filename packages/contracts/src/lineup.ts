@@ -556,6 +556,9 @@ export interface CallSpareRequest {
 export const ARM_STATES = ['safe', 'armed'] as const;
 export type ArmState = (typeof ARM_STATES)[number];
 
+/** The words of the command that records each state, the same at the Cat station and on the handler's lineup. */
+export const ARM_STATE_ACTION_LABELS: Record<ArmState, string> = { safe: 'Record safe', armed: 'Record armed' };
+
 /** Record an aircraft armed or safe: the handler, or the catapult officer or deck edge operator of its catapult. */
 export interface SetArmStateRequest {
   slotVersion: number;

@@ -13,7 +13,7 @@ describe('grossWeightBuildUp', () => {
   //   gross weight  31,250 + 11,400 + 2,707 = 45,357 lb
   //   in kilograms  45,357 × 0.45359237 = 20,573.589 126 09 kg (45,000 × 0.45359237 = 20,411.656 65;
   //   357 × 0.45359237 = 161.932 476 09) (NIST SP 811 (2008) B.8: pound (avoirdupois) =
-  //   4.535 924 E-01 kg, exactly 0.453 592 37 by definition).
+  //   4.535 924 E-01 kg, rounded there; exactly 0.453 592 37 by the international yard and pound of 1959).
   const loaded = {
     operatingWeight: pounds(31_250),
     fuel: pounds(11_400),
@@ -36,6 +36,8 @@ describe('grossWeightBuildUp', () => {
   it('gives the gross weight in kilograms by the NIST SP 811 factor', () => {
     // NIST SP 811 (2008) B.8: 1 lb = 0.453 592 37 kg exactly; 45,357 lb → 20,573.589 126 09 kg by hand.
     expect(grossWeightBuildUp(loaded).grossWeightKg).toBeCloseTo(20_573.58912609, 6);
+    // By B.8's rounded factor as printed: 45,357 × 0.453 592 4 = 20,573.590 486 8 kg by hand, the same to 0.002 kg.
+    expect(grossWeightBuildUp(loaded).grossWeightKg).toBeCloseTo(20_573.5904868, 2);
   });
 
   it('weighs a clean aircraft (no stores) as operating weight plus fuel', () => {

@@ -33,6 +33,14 @@ describe('unit conversions', () => {
     expect(nauticalMilesToMetres(nauticalMiles(1))).toBe(1852); // NIST SP 811 B.8: nautical mile = 1.852 E+03 m, exact
   });
 
+  it('turn kilograms back into pounds by the same NIST SP 811 (2008), Appendix B.8 factor', () => {
+    // B.8 gives pound (avoirdupois) = 4.535 924 E-01 kg, rounded to 7 figures, so that mass is 1 lb to 6 places.
+    expect(kilogramsToPounds(kilograms(4.535924e-1))).toBeCloseTo(1, 6); // NIST SP 811 B.8: pound (avoirdupois)
+    // 1 kg = 1 / 0.453 592 37 lb = 2.204 622 621 848 8 lb, worked out by hand from the exact pound
+    // (0.453 592 37 kg by the international yard and pound definition of 1959).
+    expect(kilogramsToPounds(kilograms(1))).toBeCloseTo(2.2046226218488, 12);
+  });
+
   it('use the standard gravity of the 3rd CGPM (1901)', () => {
     expect(STANDARD_GRAVITY).toBe(9.80665); // 3rd CGPM (1901): gn = 980.665 cm/s2
   });
@@ -43,7 +51,9 @@ describe('unit conversions', () => {
     expect(feetToMetres(feet(1))).toBe(unit(1, 'ft').toNumber('m')); // mathjs units: ft
     expect(knotsToMetresPerSecond(knots(30))).toBeCloseTo(unit(30 * 1852, 'm/h').toNumber('m/s'), 12); // mathjs units: m/h
     expect(STANDARD_GRAVITY).toBe(gravity.toNumber('m/s^2')); // mathjs constant: gravity
-    expect(poundsForceToNewtons(poundsForce(1))).toBeCloseTo(poundsToKilograms(pounds(1)) * STANDARD_GRAVITY, 12); // lbf = lb x g0
+    // lbf = lb x g0 = 0.453 592 37 kg x 9.806 65 m/s2 = 4.448 221 615 260 5 N exactly, worked out by hand from the
+    // exact pound (international yard and pound, 1959) and NIST SP 811 B.8: kilogram-force = 9.806 65 E+00 N (exact).
+    expect(poundsForceToNewtons(poundsForce(1))).toBeCloseTo(4.4482216152605, 12);
   });
 
   it('scale as mathjs does for arbitrary values', () => {

@@ -1,33 +1,16 @@
 import {
   type ReplaceStoresCatalogueRequest,
   STORES_CATALOGUE_MAX_ITEMS,
-  STORES_ITEM_NAME_MAX_LENGTH,
   STORES_ITEM_WEIGHT_LB,
   type StoresItem,
 } from '@catline/contracts';
 import { ApiProperty } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
-import {
-  ArrayMaxSize,
-  IsArray,
-  IsInt,
-  IsNotEmpty,
-  IsString,
-  Max,
-  MaxLength,
-  Min,
-  ValidateNested,
-} from 'class-validator';
-import { PlainText } from '../../common/validation/plain-text.decorator.js';
-import { Trim } from '../../common/validation/trim.decorator.js';
+import { ArrayMaxSize, IsArray, IsInt, Max, Min, ValidateNested } from 'class-validator';
+import { StoresItemNameField } from '../../common/validation/stores-item-name.field.js';
 
 export class StoresItemBodyDto implements StoresItem {
-  @ApiProperty({ example: 'Practice bomb' })
-  @Trim()
-  @IsString()
-  @IsNotEmpty({ message: 'each stores item needs a name' })
-  @PlainText()
-  @MaxLength(STORES_ITEM_NAME_MAX_LENGTH)
+  @StoresItemNameField('each stores item needs a name', { example: 'Practice bomb' })
   name: string;
 
   @ApiProperty({ description: 'Weight of one item, whole pounds.' })

@@ -1,34 +1,14 @@
-import {
-  FUEL_LB,
-  type SetLoadRequest,
-  STORES_COUNT,
-  STORES_ITEM_NAME_MAX_LENGTH,
-  STORES_LINES_MAX,
-} from '@catline/contracts';
+import { FUEL_LB, type SetLoadRequest, STORES_COUNT, STORES_LINES_MAX } from '@catline/contracts';
 import { ApiProperty } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
-import {
-  ArrayMaxSize,
-  IsArray,
-  IsInt,
-  IsNotEmpty,
-  IsString,
-  Max,
-  MaxLength,
-  Min,
-  ValidateNested,
-} from 'class-validator';
-import { PlainText } from '../../common/validation/plain-text.decorator.js';
-import { Trim } from '../../common/validation/trim.decorator.js';
+import { ArrayMaxSize, IsArray, IsInt, Max, Min, ValidateNested } from 'class-validator';
+import { StoresItemNameField } from '../../common/validation/stores-item-name.field.js';
 import { VersionField } from './fields.js';
 
 export class StoresLineDto {
-  @ApiProperty({ description: "An item of the aircraft type's stores catalogue, by name." })
-  @Trim()
-  @IsString()
-  @IsNotEmpty({ message: 'each stores line needs the name of a catalogue item' })
-  @PlainText()
-  @MaxLength(STORES_ITEM_NAME_MAX_LENGTH)
+  @StoresItemNameField('each stores line needs the name of a catalogue item', {
+    description: "An item of the aircraft type's stores catalogue, by name.",
+  })
   name: string;
 
   @ApiProperty({ type: 'integer', minimum: STORES_COUNT.min, maximum: STORES_COUNT.max })

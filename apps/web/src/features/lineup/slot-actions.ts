@@ -1,4 +1,10 @@
-import { RETURNABLE_STATUSES, type SlotView } from '@catline/contracts';
+import {
+  ARM_STATE_ACTION_LABELS,
+  ARM_STATES,
+  RETURNABLE_STATUSES,
+  type ArmState,
+  type SlotView,
+} from '@catline/contracts';
 import { isDone } from './lineup-model.js';
 
 /** One entry of a slot card's menu. */
@@ -19,6 +25,7 @@ export interface SlotActionHandlers {
   upAgain: (slot: SlotView) => void;
   returnToPool: (slot: SlotView) => void;
   setLoad: (slot: SlotView) => void;
+  recordArmState: (slot: SlotView, armState: ArmState) => void;
 }
 
 /** What the signed-in person may do from a card: the handler arranges; air operations too plans each sortie. */
@@ -48,6 +55,16 @@ export function slotActions(slot: SlotView, rights: SlotActionRights, handlers: 
   if (slot.status === 'down') {
     actions.push({ id: 'call-spare', label: 'Call a spare…', run: () => handlers.callSpare(slot) });
     actions.push({ id: 'up-again', label: 'Up again…', run: () => handlers.upAgain(slot) });
+  }
+  // The handler records armed or safe anywhere on deck, in the Cat station's words; the state in force is not offered.
+  if (slot.status !== 'launched' && slot.status !== 'scratched') {
+    for (const armState of ARM_STATES.filter((state) => state !== slot.armState)) {
+      actions.push({
+        id: `record-${armState}`,
+        label: ARM_STATE_ACTION_LABELS[armState],
+        run: () => handlers.recordArmState(slot, armState),
+      });
+    }
   }
   if (RETURNABLE_STATUSES.includes(slot.status)) {
     actions.push({ id: 'return-to-pool', label: 'Return to deck pool…', run: () => handlers.returnToPool(slot) });

@@ -10,6 +10,7 @@ const slot = (id: number, sideNumber: string, extra: Partial<SlotView> = {}) =>
     sideNumber,
     status: 'planned',
     spare: false,
+    heldSpare: false,
     catapultId: null,
     projectedLaunchAt: null,
     missesWindow: false,
@@ -100,9 +101,10 @@ describe('compareSuggestion', () => {
     expect(cat2.reordered).toBe(false);
   });
 
-  it('names planned aircraft the suggestion leaves in the deck pool, but not spares', () => {
+  it('names planned aircraft the suggestion leaves in the deck pool, and a called spare, but not a held spare', () => {
     const snapshot = board();
-    snapshot.slots.push(slot(5, 'C30', { spare: true }));
+    // C30 is still held aside; C31 was called for a down aircraft, so it is one of the cycle's aircraft now.
+    snapshot.slots.push(slot(5, 'C30', { spare: true, heldSpare: true }), slot(6, 'C31', { spare: true }));
     const withoutG43: SuggestedLineup = {
       ...suggestion,
       lanes: [
@@ -110,6 +112,6 @@ describe('compareSuggestion', () => {
         { catapultId: 12, slotIds: [3, 2] },
       ],
     };
-    expect(compareSuggestion(snapshot, withoutG43).leftInPool).toEqual(['G43']);
+    expect(compareSuggestion(snapshot, withoutG43).leftInPool).toEqual(['G43', 'C31']);
   });
 });

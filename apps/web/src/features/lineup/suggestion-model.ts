@@ -77,7 +77,8 @@ export function compareSuggestion(snapshot: LineupSnapshot, suggestion: Suggeste
       suggested: suggestion.projected.filter((launch) => launch.missesWindow).length,
     },
     leftInPool: snapshot.slots
-      .filter((slot) => slot.status === 'planned' && !slot.spare && !placed.has(slot.id))
+      // A held spare waits aside by design; one the handler called is one of the cycle's aircraft like any other.
+      .filter((slot) => slot.status === 'planned' && !slot.heldSpare && !placed.has(slot.id))
       .map((slot) => slot.sideNumber),
   };
 }

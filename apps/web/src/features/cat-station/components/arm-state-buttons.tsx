@@ -1,7 +1,5 @@
 import { Button, HStack } from '@chakra-ui/react';
-import { ARM_STATES, type ArmState, type SlotView } from '@catline/contracts';
-
-const LABELS: Record<ArmState, string> = { safe: 'Record safe', armed: 'Record armed' };
+import { ARM_STATE_ACTION_LABELS, ARM_STATES, type ArmState, type SlotView } from '@catline/contracts';
 
 /** The crew records the aircraft on the catapult armed or safe; the state in force shows solid and waits. */
 export function ArmStateButtons({
@@ -26,7 +24,7 @@ export function ArmStateButtons({
           disabled={pending || slot.armState === state}
           onClick={() => onRecord(state)}
         >
-          {LABELS[state]}
+          {ARM_STATE_ACTION_LABELS[state]}
         </Button>
       ))}
     </HStack>

@@ -10,6 +10,7 @@ import { NoticeBanner, refusalNotice, useNotice } from '../../../components/refu
 import { SlotStatusBadge } from '../../../components/slot-status-badge.js';
 import { SuspendControls } from '../../../components/suspend-controls.js';
 import { formatOptionalClock } from '../../../lib/format.js';
+import { useSetArmState } from '../../../lib/live/set-arm-state.js';
 import { useLiveCycle } from '../../../lib/live/use-live-cycle.js';
 import { useViewedCycle } from '../../../lib/queries/use-viewed-cycle.js';
 import { useSessionUser } from '../../../lib/session-store.js';
@@ -22,7 +23,6 @@ import { useGiveSuspendReason } from '../api/give-suspend-reason.js';
 import { useReportColdShot } from '../api/report-cold-shot.js';
 import { useReportDownOnCatapult } from '../api/report-down-on-catapult.js';
 import { useReportHangfire } from '../api/report-hangfire.js';
-import { useSetArmState } from '../api/set-arm-state.js';
 import { useUndoStep } from '../api/undo-step.js';
 import { useUndoWindow } from '../hooks/use-undo-window.js';
 import { useLaunchIntent } from '../hooks/use-launch-intent.js';

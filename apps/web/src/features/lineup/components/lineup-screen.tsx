@@ -9,6 +9,7 @@ import { EmptyState, ErrorState, LoadingState, QueryView } from '../../../compon
 import { NoticeBanner, refusalNotice, useNotice } from '../../../components/refusal-notice.js';
 import { ApiRequestError, errorMessage } from '../../../lib/api-error.js';
 import { formatClock, formatOptionalClock, formatShortClock } from '../../../lib/format.js';
+import { useSetArmState } from '../../../lib/live/set-arm-state.js';
 import { useLiveCycle } from '../../../lib/live/use-live-cycle.js';
 import { useViewedCycle } from '../../../lib/queries/use-viewed-cycle.js';
 import { useHasRole } from '../../../lib/session-store.js';
@@ -99,6 +100,7 @@ function LineupWorkspace({ snapshot }: { snapshot: LineupSnapshot }) {
   const upAgain = useUpAgain(cycleId);
   const returnToPool = useReturnToPool(cycleId);
   const setLoad = useSetLoad(cycleId);
+  const arming = useSetArmState(cycleId);
 
   const close = () => setDialog(null);
   const done = (title: string) => () => {
@@ -131,6 +133,11 @@ function LineupWorkspace({ snapshot }: { snapshot: LineupSnapshot }) {
               upAgain: (chosen) => setDialog({ kind: 'up', slot: chosen }),
               returnToPool: (chosen) => setDialog({ kind: 'return', slot: chosen }),
               setLoad: (chosen) => setDialog({ kind: 'load', slot: chosen }),
+              recordArmState: (chosen, armState) =>
+                arming.mutate(
+                  { slotId: chosen.id, slotVersion: chosen.version, armState },
+                  { onSuccess: done(`${chosen.sideNumber} recorded ${armState}`), onError: refused('Armed or safe') },
+                ),
             },
           )
         }

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { Stack, Text } from '@chakra-ui/react';
-import type { SlotView } from '@catline/contracts';
+import { orderSpares, type SlotView } from '@catline/contracts';
 import { ActionDialog } from '../../../components/action-dialog.js';
 import { FormField } from '../../../components/form-field.js';
 import { SelectInput } from '../../../components/select-field.js';
@@ -15,6 +15,8 @@ interface MarkDownDialogProps {
 
 export function MarkDownDialog({ slot, spares, pending, onClose, onConfirm }: MarkDownDialogProps) {
   const [spareId, setSpareId] = useState('');
+  // The same order as the server offers a held spare in: type, then mission, then side number.
+  const offered = orderSpares(slot, spares, (spare) => spare).map(({ spare }) => spare);
   return (
     <ActionDialog
       open
@@ -38,7 +40,7 @@ export function MarkDownDialog({ slot, spares, pending, onClose, onConfirm }: Ma
             value={spareId}
             onChange={setSpareId}
             placeholder="No spare"
-            choices={spares.map((spare) => ({
+            choices={offered.map((spare) => ({
               value: String(spare.id),
               label: `${spare.sideNumber} · ${spare.typeDesignation} · ${spare.squadronCode}`,
             }))}

@@ -1,6 +1,8 @@
 import type { LineupCommandResult, SetArmStateRequest } from '@catline/contracts';
-import { apiRequest } from '../../../lib/api-client.js';
-import { useLineupCommand } from '../../../lib/live/use-lineup-command.js';
+import { apiRequest } from '../api-client.js';
+import { useLineupCommand } from './use-lineup-command.js';
+
+// Sent from the Cat station and from the handler's lineup, so it lives here, not in a feature.
 
 export interface SetArmStateVariables extends SetArmStateRequest {
   slotId: number;

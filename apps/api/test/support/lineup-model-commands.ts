@@ -11,12 +11,13 @@ import { type CommandOutcome, send } from './random-lineup-commands.js';
 
 /**
  * The model of fast-check's model-based run: the lineup as the rules say it must be. Each command
- * predicts, from the rules alone, the server's answer (accepted, or refused with 409/400) and what an
- * accepted one leaves: the lanes in order, each catapult's status, each slot's status and catapult, the
- * next version. After every command the lineup is read back and compared with that prediction (a refused
- * command must leave it exactly as it was); the accepted change's patch, applied to the model's copy,
- * must also give exactly what was read. Slot version numbers are bookkeeping the server keeps: the model
- * takes them from what it read, to build the next command.
+ * predicts, from the rules alone, the server's answer (accepted, or refused with its status and, where the
+ * rules name it, its code) and what an accepted one leaves: the lanes in order, each catapult's status, the
+ * cycle's state, each slot's catapult and facts (status, weights answered and agreed, re-verify, suspend
+ * reason), the next version. After every command the lineup is read back and compared with that
+ * prediction (a refused command must leave it exactly as it was); the accepted change's patch, applied to
+ * the model's copy, must also give exactly what was read. Slot version numbers are bookkeeping the server
+ * keeps: the model takes them from what it read, to build the next command.
  */
 export interface LineupModel {
   snapshot: LineupSnapshot;

@@ -5,9 +5,10 @@ import fc from 'fast-check';
 import { readChangeLog, versionProblems } from './support/change-log.js';
 import { staleBasisProblems } from './support/stale-basis.js';
 import { createBusyCycle, handlerTokens } from './support/busy-cycle.js';
-import { LineupDriver, OBSERVER } from './support/lineup-fixtures.js';
+import { executingModelCommands } from './support/executing-model-commands.js';
+import { LineupDriver, OBSERVER, catapultOfficer, pilot } from './support/lineup-fixtures.js';
 import { LineupFollower, allAt } from './support/lineup-follower.js';
-import { type LineupModel, lineupModelCommands } from './support/lineup-model-commands.js';
+import { type Person, lineupModelCommands, newModel } from './support/lineup-model-commands.js';
 import {
   type CommandOutcome,
   accepted,
@@ -24,6 +25,23 @@ const HANDLERS = 16;
 /** A quarter of the commands go through fast-check's model-based run (one at a time, predicted); the rest race. */
 const MODEL_RUNS = Math.max(1, Math.round(TOTAL / 100));
 const MODEL_MAX_COMMANDS = 50;
+/** Launching cycles, each a fresh one (launches cannot be undone), for the crew's and pilots' commands. */
+const EXECUTING_RUNS = Math.max(1, Math.round(TOTAL / 250));
+const EXECUTING_MAX_COMMANDS = 120;
+/** What the launching cycle's commands are told apart by: the last part of the path, and a step's target. */
+const commandKind = (outcome: CommandOutcome) => {
+  const action = outcome.command.path.split('/').at(-1)!;
+  const body = outcome.command.body as { to?: string; outcome?: string };
+  return action === 'advance'
+    ? body.to === 'resume'
+      ? 'resume'
+      : 'advance'
+    : body.outcome
+      ? `${action}:${body.outcome}`
+      : action;
+};
+/** The launching cycle's aircraft by catapult number, each with a pilot of its own (pilot(2) on). */
+const EXECUTING_LANES = { 1: ['C21', 'C22', 'C23'], 2: ['C24', 'C25'], 3: ['C26'] };
 const SEED = Number(process.env.RELIABILITY_SEED ?? Date.now() % 1_000_000);
 
 describe(`${HANDLERS} handlers sending ${TOTAL} lineup commands at one cycle (seed ${SEED})`, () => {
@@ -54,7 +72,7 @@ describe(`${HANDLERS} handlers sending ${TOTAL} lineup commands at one cycle (se
   it('matches the model command by command (fast-check model-based run)', async () => {
     await fc.assert(
       fc.asyncProperty(lineupModelCommands(HANDLERS, MODEL_MAX_COMMANDS), async (commands) => {
-        const model: LineupModel = { snapshot: await deck.snapshot(cycleId), outcomes: [] };
+        const model = newModel(await deck.snapshot(cycleId));
         try {
           await fc.asyncModelRun(
             () => ({ model, real: { url, tokens, read: () => deck.snapshot(cycleId) } }),
@@ -135,4 +153,70 @@ describe(`${HANDLERS} handlers sending ${TOTAL} lineup commands at one cycle (se
     expect(followers.map((follower) => follower.gaps)).toEqual(followers.map(() => 0));
     for (const follower of followers) expect(follower.held).toEqual(final);
   }, 1_800_000);
+
+  it('matches the model command by command on a launching cycle (fast-check model-based run)', async () => {
+    const crewTokens = [tokens[0]];
+    const people: Person[] = [{ token: 0, role: 'handler', userId: 0, catapultId: null }];
+    for (const number of [1, 2, 3, 4]) {
+      const email = catapultOfficer(number);
+      const { id, catapultId } = await deck.me(email);
+      people.push({
+        token: crewTokens.push(await deck.token(email)) - 1,
+        role: 'catapult_officer',
+        userId: id,
+        catapultId,
+      });
+    }
+    // Each aircraft with a pilot of its own, from pilot(2) on; the pilots answer the weight on their tablets.
+    const pilots = Object.values(EXECUTING_LANES)
+      .flat()
+      .map((_, index) => pilot(2 + index));
+    let next = 0;
+    const lanes = Object.fromEntries(
+      Object.entries(EXECUTING_LANES).map(([number, sides]) => [
+        number,
+        sides.map((side) => ({ side, pilotEmail: pilots[next++] })),
+      ]),
+    );
+    for (const email of pilots) {
+      const token = crewTokens.push(await deck.token(email)) - 1;
+      people.push({ token, role: 'pilot', userId: await deck.pilotId(email), catapultId: null });
+    }
+    const answers = new Map<string, number>();
+    await fc.assert(
+      fc.asyncProperty(executingModelCommands(EXECUTING_MAX_COMMANDS), async (run) => {
+        const { cycle } = await deck.executingCycle(lanes);
+        const model = newModel(await deck.snapshot(cycle.id), people);
+        try {
+          await fc.asyncModelRun(
+            () => ({ model, real: { url, tokens: crewTokens, read: () => deck.snapshot(cycle.id) } }),
+            run,
+          );
+          expect(await deck.snapshot(cycle.id)).toEqual(model.snapshot);
+        } finally {
+          for (const outcome of model.outcomes) {
+            const kind = `${commandKind(outcome)} ${outcome.status}`;
+            answers.set(kind, (answers.get(kind) ?? 0) + 1);
+          }
+          await catapultsUp(cycle.id);
+        }
+      }),
+      { numRuns: EXECUTING_RUNS, seed: SEED, endOnFailure: true },
+    );
+    const table = [...answers].sort(([a], [b]) => a.localeCompare(b));
+    console.log(
+      `${table.reduce((sum, [, count]) => sum + count, 0)} commands on ${EXECUTING_RUNS} launching cycles, ` +
+        `each predicted by the model:\n${table.map(([kind, count]) => `${kind}: ${count}`).join('\n')}`,
+    );
+  }, 600_000);
+
+  /** The demo ship's catapults back up after a run, through the same pipeline. */
+  async function catapultsUp(cycleId: number) {
+    for (const lane of (await deck.snapshot(cycleId)).lanes.filter((candidate) => candidate.status !== 'up')) {
+      await send(url, tokens[0], {
+        path: `/api/cycles/${cycleId}/lineup/catapults/${lane.catapultId}/status`,
+        body: { status: 'up', basisStatus: lane.status },
+      });
+    }
+  }
 });

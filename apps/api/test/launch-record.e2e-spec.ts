@@ -22,12 +22,10 @@ describe('the launch record', () => {
 
   /** C21 launched from cat 1 under the driver's good conditions; the slot as the lineup shows it after. */
   async function launchedAircraft(pilotEmail: string) {
-    const cycle = await deck.createCycle();
-    const first = await deck.addSlot(cycle.id, 'C21', { pilotEmail });
-    const other = await deck.addSlot(cycle.id, 'C22');
-    await deck.place(cycle.id, first.id, 1);
-    await deck.place(cycle.id, other.id, 1);
-    await deck.start(cycle.id);
+    const {
+      cycle,
+      slots: [first],
+    } = await deck.executingCycle({ 1: [{ side: 'C21', pilotEmail }, 'C22'] });
     const ready = await deck.readyToLaunch(cycle.id, first.id, pilotEmail);
     const launch = await deck.launch(cycle.id, ready, launchKey());
     expect(launch.status).toBe(200);

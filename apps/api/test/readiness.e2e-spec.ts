@@ -29,14 +29,10 @@ describe('readiness steps and launch', () => {
 
   /** An executing cycle with two aircraft on cat 1 (the first flown by `pilotEmail`) and one on cat 2. */
   async function executingCycle(pilotEmail: string, conditions = {}) {
-    const cycle = await deck.createCycle(conditions);
-    const first = await deck.addSlot(cycle.id, 'C21', { pilotEmail });
-    const second = await deck.addSlot(cycle.id, 'C22');
-    const other = await deck.addSlot(cycle.id, 'D33');
-    await deck.place(cycle.id, first.id, 1);
-    await deck.place(cycle.id, second.id, 1);
-    await deck.place(cycle.id, other.id, 2);
-    await deck.start(cycle.id);
+    const {
+      cycle,
+      slots: [first, second, other],
+    } = await deck.executingCycle({ 1: [{ side: 'C21', pilotEmail }, 'C22'], 2: ['D33'] }, conditions);
     return { cycle, first, second, other };
   }
 

@@ -26,12 +26,10 @@ describe('suspend with one tap, the reason afterwards', () => {
 
   /** An executing cycle with one aircraft on cat 1, flown by `pilotEmail`, hooked up. */
   async function hookedUp(pilotEmail: string) {
-    const cycle = await deck.createCycle();
-    const slot = await deck.addSlot(cycle.id, 'C21', { pilotEmail });
-    const other = await deck.addSlot(cycle.id, 'D33');
-    await deck.place(cycle.id, slot.id, 1);
-    await deck.place(cycle.id, other.id, 2);
-    await deck.start(cycle.id);
+    const {
+      cycle,
+      slots: [slot],
+    } = await deck.executingCycle({ 1: [{ side: 'C21', pilotEmail }], 2: ['D33'] });
     await deck.stepThrough(cycle.id, slot.id, 'on_catapult');
     return { cycleId: cycle.id, slotId: slot.id };
   }

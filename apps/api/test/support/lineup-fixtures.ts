@@ -41,6 +41,9 @@ export const goodConditions = {
 
 type Method = 'get' | 'post' | 'patch';
 
+/** An aircraft of a lane by side number, flown by `pilotEmail` where given (else crewed when placed). */
+export type LaneAircraft = string | { side: string; pilotEmail?: string };
+
 /** Drives the API as the demo people do, for specs that need a cycle of their own. */
 export class LineupDriver {
   private readonly tokens = new Map<string, Promise<string>>();
@@ -231,6 +234,26 @@ export class LineupDriver {
       basisVersion: version,
       confirmOutsideWindow: true,
     });
+  }
+
+  /**
+   * A new cycle (under `conditions` where given) with the aircraft of each catapult number's lane added in
+   * the order listed, then placed at the end of their lanes, then started: its slots in the order listed.
+   */
+  async executingCycle(
+    lanes: Record<number, readonly LaneAircraft[]>,
+    conditions: Partial<CreateCycleRequest> = {},
+  ): Promise<{ cycle: CycleView; slots: SlotView[] }> {
+    const cycle = await this.createCycle(conditions);
+    const listed = Object.entries(lanes).flatMap(([number, aircraft]) =>
+      aircraft.map((one) => ({ catapultNumber: Number(number), ...(typeof one === 'string' ? { side: one } : one) })),
+    );
+    const slots: SlotView[] = [];
+    for (const { side, pilotEmail } of listed) slots.push(await this.addSlot(cycle.id, side, { pilotEmail }));
+    for (const [index, { catapultNumber }] of listed.entries())
+      await this.place(cycle.id, slots[index].id, catapultNumber);
+    await this.start(cycle.id);
+    return { cycle, slots };
   }
 
   /** The air boss stops whichever cycle of the ship is launching, if one is. */

@@ -1,22 +1,81 @@
-import { applyLineupPatch, type LineupCommandResult, type LineupSnapshot, type SlotView } from '@catline/contracts';
+import {
+  applyLineupPatch,
+  type LineupCommandResult,
+  type LineupSnapshot,
+  type SlotStatus,
+  type SlotView,
+} from '@catline/contracts';
 import fc from 'fast-check';
 import { isDeepStrictEqual } from 'node:util';
 import { type CommandOutcome, send } from './random-lineup-commands.js';
 
 /**
  * The model of fast-check's model-based run: the lineup as the rules say it must be. Each command
- * predicts, from the rules alone, the server's answer (accepted, or refused with 409/400) and what an
- * accepted one leaves: the lanes in order, each catapult's status, each slot's status and catapult, the
- * next version. After every command the lineup is read back and compared with that prediction (a refused
- * command must leave it exactly as it was); the accepted change's patch, applied to the model's copy,
- * must also give exactly what was read. Slot version numbers are bookkeeping the server keeps: the model
- * takes them from what it read, to build the next command.
+ * predicts, from the rules alone, the server's answer (accepted, or refused with its status and, where the
+ * rules name it, its code) and what an accepted one leaves: the lanes in order, each catapult's status, the
+ * cycle's state, each slot's catapult and facts (status, weights answered and agreed, re-verify, suspend
+ * reason), the next version. After every command the lineup is read back and compared with that
+ * prediction (a refused command must leave it exactly as it was); the accepted change's patch, applied to
+ * the model's copy, must also give exactly what was read. Slot version numbers are bookkeeping the server
+ * keeps: the model takes them from what it read, to build the next command.
  */
 export interface LineupModel {
   snapshot: LineupSnapshot;
   /** Every answer, for the run's own bookkeeping (the change log check). */
   outcomes: CommandOutcome[];
+  /** The last readiness step of each slot that its taker may still undo (the server keeps it out of sight). */
+  lastSteps: Map<number, LastStep>;
+  /** The order aircraft left each catapult in this run: a cold shot is reported on the last one only. */
+  launches: Map<number, number[]>;
+  /** Who sends the commands (by token): whose command a catapult or a slot takes. */
+  people: readonly Person[];
 }
+
+/** Someone who sends commands: `token` indexes the run's tokens; an officer's catapult, a pilot's user id. */
+export interface Person {
+  token: number;
+  role: 'handler' | 'catapult_officer' | 'pilot';
+  userId: number;
+  catapultId: number | null;
+}
+
+/** A readiness step as the model remembers it: who took it, when the request went out, from and to. */
+export interface LastStep {
+  byUserId: number;
+  sentAt: number;
+  from: SlotStatus;
+  to: SlotStatus;
+  reverifyBefore: SlotView['reverifyCause'];
+}
+
+/** What the model follows of a slot besides its place: a part of the slot view. */
+export interface SlotFacts {
+  status: SlotStatus;
+  agreedWeightLb: number | null;
+  /** The crew recorded the weight agreed with the pilot (catapultWeightAckAt set). */
+  weightAgreed: boolean;
+  /** What the pilot answered from the tablet; null until answered. */
+  pilotAnswerLb: number | null;
+  reverifyCause: SlotView['reverifyCause'];
+  suspendReason: string | null;
+}
+
+export const slotFacts = (slot: SlotView): SlotFacts => ({
+  status: slot.status,
+  agreedWeightLb: slot.agreedWeightLb,
+  weightAgreed: slot.catapultWeightAckAt !== null,
+  pilotAnswerLb: slot.pilotWeightAckAt === null ? null : slot.pilotWeightAckLb,
+  reverifyCause: slot.reverifyCause,
+  suspendReason: slot.suspendReason,
+});
+
+export const newModel = (snapshot: LineupSnapshot, people: readonly Person[] = []): LineupModel => ({
+  snapshot,
+  outcomes: [],
+  lastSteps: new Map(),
+  launches: new Map(),
+  people,
+});
 
 export interface LineupReal {
   url: string;
@@ -25,36 +84,52 @@ export interface LineupReal {
   read: () => Promise<LineupSnapshot>;
 }
 
-type Lanes = Map<number, number[]>;
+export type Lanes = Map<number, number[]>;
 
-const MAX_DOWN = 4;
+export const MAX_DOWN = 4;
 
-const lanesOf = (snapshot: LineupSnapshot): Lanes =>
+export const lanesOf = (snapshot: LineupSnapshot): Lanes =>
   new Map(snapshot.lanes.map((lane) => [lane.catapultId, [...lane.slotIds]]));
 
 const sameIds = (a: readonly number[], b: readonly number[]) =>
   a.length === b.length && a.every((id, i) => id === b[i]);
 
-const byId = (snapshot: LineupSnapshot) => [...snapshot.slots].sort((a, b) => a.id - b.id);
+export const byId = (snapshot: LineupSnapshot) => [...snapshot.slots].sort((a, b) => a.id - b.id);
 
 /** What an accepted command leaves, as the model works it out: lanes, and the slots and catapult it changes. */
-interface Expected {
+export interface Expected {
   lanes: Lanes;
-  /** Slots whose status the command sets. */
-  statuses?: ReadonlyMap<number, SlotView['status']>;
+  /** What the command sets of each slot it changes. */
+  slots?: ReadonlyMap<number, Partial<SlotFacts>>;
   /** A catapult whose status the command sets. */
   catapult?: { id: number; status: string };
+  /** The last aircraft launched: the cycle closes in a change of its own. */
+  closesCycle?: boolean;
 }
 
-/** Expected answer: 200 with what it leaves, or the refusal status. */
-type Prediction = ({ status: 200 } & Expected) | { status: 400 | 409 };
+/** Expected answer: 200 with what it leaves, or the refusal status (and its code, where the model knows it). */
+export type Prediction = ({ status: 200 } & Expected) | { status: 400 | 403 | 409; code?: string };
+
+/** A refusal with its code. */
+export const refusal = (status: 400 | 403 | 409, code: string): Prediction => ({ status, code });
+
+/** A request and what the model says it must do; `token`: whose (by index), the command's handler unless told. */
+export interface Request {
+  path: string;
+  body: object;
+  prediction: Prediction;
+  token?: number;
+  /** The model's own bookkeeping once an accepted command is confirmed. */
+  after?: (model: LineupModel, outcome: CommandOutcome) => void;
+}
 
 /** The parts of a lineup the model predicts: version, lanes with their catapult's status, every slot's place and status. */
 function observed(snapshot: LineupSnapshot) {
   return {
     version: snapshot.version,
+    cycleState: snapshot.cycle.state,
     lanes: snapshot.lanes.map((lane) => ({ catapultId: lane.catapultId, status: lane.status, slotIds: lane.slotIds })),
-    slots: byId(snapshot).map((slot) => ({ id: slot.id, status: slot.status, catapultId: slot.catapultId })),
+    slots: byId(snapshot).map((slot) => ({ id: slot.id, catapultId: slot.catapultId, ...slotFacts(slot) })),
   };
 }
 
@@ -62,7 +137,8 @@ function observed(snapshot: LineupSnapshot) {
 function expectedAfter(before: LineupSnapshot, expected: Expected): ReturnType<typeof observed> {
   const laneOf = (slotId: number) => [...expected.lanes].find(([, ids]) => ids.includes(slotId))?.[0] ?? null;
   return {
-    version: before.version + 1,
+    version: before.version + (expected.closesCycle ? 2 : 1),
+    cycleState: expected.closesCycle ? 'closed' : before.cycle.state,
     lanes: before.lanes.map((lane) => ({
       catapultId: lane.catapultId,
       status: expected.catapult?.id === lane.catapultId ? expected.catapult.status : lane.status,
@@ -70,27 +146,32 @@ function expectedAfter(before: LineupSnapshot, expected: Expected): ReturnType<t
     })) as ReturnType<typeof observed>['lanes'],
     slots: byId(before).map((slot) => ({
       id: slot.id,
-      status: expected.statuses?.get(slot.id) ?? slot.status,
       catapultId: laneOf(slot.id),
+      ...slotFacts(slot),
+      ...expected.slots?.get(slot.id),
     })),
   };
 }
 
-abstract class ModelCommand implements fc.AsyncCommand<LineupModel, LineupReal> {
+export abstract class ModelCommand implements fc.AsyncCommand<LineupModel, LineupReal> {
   constructor(readonly handler: number) {}
 
   check(_model: Readonly<LineupModel>): boolean {
     return true;
   }
 
-  protected abstract request(model: LineupModel): { path: string; body: object; prediction: Prediction };
+  protected abstract request(model: LineupModel): Request;
 
   async run(model: LineupModel, real: LineupReal): Promise<void> {
-    const { path, body, prediction } = this.request(model);
-    const outcome = await send(real.url, real.tokens[this.handler], { path, body }, this.handler);
+    const { path, body, prediction, token = this.handler, after } = this.request(model);
+    const outcome = await send(real.url, real.tokens[token], { path, body }, token);
     model.outcomes.push(outcome);
     const answer = `${this.toString()} answered ${outcome.status} ${JSON.stringify(outcome.body)}`;
-    if (outcome.status !== prediction.status) throw new Error(`expected ${prediction.status}: ${answer}`);
+    const code = (outcome.body as { code?: string } | null)?.code;
+    if (outcome.status !== prediction.status || ('code' in prediction && prediction.code && code !== prediction.code))
+      throw new Error(
+        `expected ${prediction.status} ${'code' in prediction ? (prediction.code ?? '') : ''}: ${answer}`,
+      );
     const now = await real.read();
     const expected = prediction.status === 200 ? expectedAfter(model.snapshot, prediction) : observed(model.snapshot);
     if (!isDeepStrictEqual(observed(now), expected)) {
@@ -98,12 +179,17 @@ abstract class ModelCommand implements fc.AsyncCommand<LineupModel, LineupReal> 
         `${answer}; the lineup is ${JSON.stringify(observed(now))}, the model says ${JSON.stringify(expected)}`,
       );
     }
-    if (prediction.status === 200) {
+    // A closing cycle adds a change of its own after the command's: its patch alone is not the lineup read.
+    if (prediction.status === 200 && !prediction.closesCycle) {
       const result = outcome.body as LineupCommandResult;
       const patched = applyLineupPatch(model.snapshot, result.version, result.change.patch);
       if (!isDeepStrictEqual(patched, now)) throw new Error(`${answer}; its patch does not give the lineup read back`);
     } else if (!isDeepStrictEqual(now, model.snapshot)) {
       throw new Error(`${answer}; the refused command changed the lineup`);
+    }
+    if (prediction.status === 200) {
+      for (const slotId of prediction.slots?.keys() ?? []) model.lastSteps.delete(slotId);
+      after?.(model, outcome);
     }
     model.snapshot = now;
   }
@@ -162,7 +248,7 @@ class MoveCommand extends ModelCommand {
   }
 }
 
-class MarkDownCommand extends ModelCommand {
+export class MarkDownCommand extends ModelCommand {
   constructor(
     handler: number,
     private readonly slotPick: number,
@@ -194,7 +280,11 @@ class MarkDownCommand extends ModelCommand {
     };
     // The down aircraft's pilot walks to the spare; without one, the spare must bring its own.
     const spareWithoutPilot = spare !== undefined && slot.pilotId === null && spare.pilotId === null;
-    if (this.stale || slot.status !== 'planned' || (spare && slot.catapultId === null) || spareWithoutPilot)
+    if (this.stale) return { path, body, prediction: refusal(409, 'stale_basis') };
+    // Any aircraft still to launch may go down, wherever it stands in its steps.
+    if (['launched', 'down', 'scratched'].includes(slot.status))
+      return { path, body, prediction: refusal(409, 'wrong_step') };
+    if ((spare && slot.catapultId === null) || spareWithoutPilot)
       return { path, body, prediction: { status: 409 as const } };
     const lanes = lanesOf(snapshot);
     if (slot.catapultId !== null) {
@@ -202,7 +292,11 @@ class MarkDownCommand extends ModelCommand {
       if (spare) lane.splice(lane.indexOf(slot.id), 1, spare.id);
       else lane.splice(lane.indexOf(slot.id), 1);
     }
-    return { path, body, prediction: { status: 200 as const, lanes, statuses: new Map([[slot.id, 'down' as const]]) } };
+    return {
+      path,
+      body,
+      prediction: { status: 200 as const, lanes, slots: new Map([[slot.id, { status: 'down' as const }]]) },
+    };
   }
 
   override toString(): string {
@@ -210,32 +304,61 @@ class MarkDownCommand extends ModelCommand {
   }
 }
 
-class CatapultStatusCommand extends ModelCommand {
+/** Hooked up or further, up to the shot: the aircraft a catapult going down suspends. */
+export const ON_CATAPULT: readonly SlotStatus[] = [
+  'on_catapult',
+  'weight_agreed',
+  'setting_set',
+  'deflector_up',
+  'tensioned',
+  'run_up',
+  'checks_clear',
+  'pilot_ready',
+];
+
+/** The first aircraft of a lane that is on the catapult; undefined for none. */
+export function onCatapult(snapshot: LineupSnapshot, catapultId: number): SlotView | undefined {
+  const ids = snapshot.lanes.find((lane) => lane.catapultId === catapultId)!.slotIds;
+  return ids
+    .map((id) => snapshot.slots.find((slot) => slot.id === id)!)
+    .find((slot) => ON_CATAPULT.includes(slot.status));
+}
+
+export class CatapultStatusCommand extends ModelCommand {
   constructor(
     handler: number,
     private readonly lanePick: number,
     private readonly stale: boolean,
+    /** Mark it down even with an aircraft on it (which is then suspended). */
+    private readonly confirm: boolean,
   ) {
     super(handler);
   }
 
-  protected request(model: LineupModel) {
+  protected request(model: LineupModel): Request {
     const { snapshot } = model;
     const lane = snapshot.lanes[this.lanePick % snapshot.lanes.length];
     const other = lane.status === 'up' ? 'down' : 'up';
     const path = `/api/cycles/${snapshot.cycle.id}/lineup/catapults/${lane.catapultId}/status`;
-    const body = { status: other, basisStatus: this.stale ? other : lane.status };
+    const body = { status: other, basisStatus: this.stale ? other : lane.status, confirm: this.confirm };
+    if (this.stale) return { path, body, prediction: refusal(409, 'stale_basis') };
+    const onIt = other === 'down' ? onCatapult(snapshot, lane.catapultId) : undefined;
+    if (onIt && !this.confirm) return { path, body, prediction: refusal(409, 'aircraft_on_catapult') };
+    const suspended = { status: 'suspended' as const, suspendReason: `cat ${lane.number} down` };
     return {
       path,
       body,
-      prediction: this.stale
-        ? { status: 409 as const }
-        : { status: 200 as const, lanes: lanesOf(snapshot), catapult: { id: lane.catapultId, status: other } },
+      prediction: {
+        status: 200,
+        lanes: lanesOf(snapshot),
+        catapult: { id: lane.catapultId, status: other },
+        slots: new Map(onIt ? [[onIt.id, suspended]] : []),
+      },
     };
   }
 
   override toString(): string {
-    return `catapult(handler ${this.handler}, lane #${this.lanePick}${this.stale ? ', stale' : ''})`;
+    return `catapult(handler ${this.handler}, lane #${this.lanePick}${this.stale ? ', stale' : ''}${this.confirm ? ', confirmed' : ''})`;
   }
 }
 
@@ -276,7 +399,7 @@ class ApplyLineupCommand extends ModelCommand {
   }
 }
 
-class UpAgainCommand extends ModelCommand {
+export class UpAgainCommand extends ModelCommand {
   constructor(
     handler: number,
     private readonly slotPick: number,
@@ -294,8 +417,8 @@ class UpAgainCommand extends ModelCommand {
     const path = `/api/cycles/${snapshot.cycle.id}/lineup/slots/${slot.id}/up`;
     const body = { slotVersion: this.stale ? slot.version + 1 : slot.version, reason: 'Model run: fixed' };
     if (this.stale || slot.status !== 'down') return { path, body, prediction: { status: 409 as const } };
-    const statuses = new Map([[slot.id, 'planned' as const]]);
-    return { path, body, prediction: { status: 200 as const, lanes: lanesOf(snapshot), statuses } };
+    const changed = new Map([[slot.id, { status: 'planned' as const }]]);
+    return { path, body, prediction: { status: 200 as const, lanes: lanesOf(snapshot), slots: changed } };
   }
 
   override toString(): string {
@@ -322,7 +445,9 @@ export function lineupModelCommands(handlers: number, maxCommands: number) {
         },
         {
           weight: 3,
-          arbitrary: fc.tuple(handler, fc.nat(), sometimes).map((args) => new CatapultStatusCommand(...args)),
+          arbitrary: fc
+            .tuple(handler, fc.nat(), sometimes, fc.boolean())
+            .map((args) => new CatapultStatusCommand(...args)),
         },
         {
           weight: 2,

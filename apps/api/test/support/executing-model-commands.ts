@@ -1,0 +1,535 @@
+import { RETURNABLE_STATUSES, type LineupSnapshot, type SlotStatus, type SlotView } from '@catline/contracts';
+import fc from 'fast-check';
+import {
+  CatapultStatusCommand,
+  type LineupModel,
+  MAX_DOWN,
+  MarkDownCommand,
+  ModelCommand,
+  type Request,
+  type Person,
+  type SlotFacts,
+  UpAgainCommand,
+  byId,
+  lanesOf,
+  ON_CATAPULT,
+  onCatapult,
+  refusal,
+  slotFacts,
+} from './lineup-model-commands.js';
+import { launchKey } from './lineup-fixtures.js';
+
+/**
+ * The commands of a launching cycle for fast-check's model-based run: readiness steps and their undo, the
+ * pilot's weight answer and the crew's agreement, suspend and resume, launch with its gates, hangfire, cold
+ * shot, down on the catapult, return to the pool, and (from the planning model) catapult up/down, down and
+ * up again. Each predicts from the rules as written here (not the service's) whether the server takes it,
+ * with which refusal code, and what it leaves; the model-based run checks that after every command.
+ */
+
+const GONE: readonly SlotStatus[] = ['launched', 'down', 'scratched'];
+/** From tensioned on: the catapult can be fired, so a hangfire can be reported. */
+const FIREABLE: readonly SlotStatus[] = ['tensioned', 'run_up', 'checks_clear', 'pilot_ready'];
+/** The undo window is 10 s; the model stays clear of the edge, as the request's own time is unknown. */
+const SURELY_IN_TIME_MS = 7_000;
+const SURELY_LATE_MS = 13_000;
+
+const slotIn = (snapshot: LineupSnapshot, id: number) => snapshot.slots.find((slot) => slot.id === id)!;
+
+/** 0 for the first aircraft of its lane not yet gone, 1 for the one behind it, … */
+function placeInLane(snapshot: LineupSnapshot, slot: SlotView): number {
+  const lane = snapshot.lanes.find((candidate) => candidate.catapultId === slot.catapultId);
+  const waiting = (lane?.slotIds ?? []).filter((id) => !GONE.includes(slotIn(snapshot, id).status));
+  return Math.max(0, waiting.indexOf(slot.id));
+}
+
+/**
+ * Mostly an aircraft the command is meant for (`meant`; by default one that may take a readiness step: the
+ * head of a lane, or the one behind it before it taxis), now and then any aircraft, which the rules must
+ * refuse or take as well.
+ */
+function pickSlot(snapshot: LineupSnapshot, pick: number, meant?: (slot: SlotView) => boolean): SlotView {
+  const stepping = (slot: SlotView) =>
+    slot.catapultId !== null &&
+    !GONE.includes(slot.status) &&
+    (placeInLane(snapshot, slot) === 0 || (placeInLane(snapshot, slot) === 1 && slot.status === 'planned'));
+  const likely = byId(snapshot).filter(meant ?? stepping);
+  if (likely.length > 0 && pick % 5 !== 0) return likely[pick % likely.length];
+  const slots = byId(snapshot);
+  return slots[pick % slots.length];
+}
+
+const officers = (model: LineupModel) => model.people.filter((person) => person.role === 'catapult_officer');
+const pilots = (model: LineupModel) => model.people.filter((person) => person.role === 'pilot');
+
+/** The slot's own catapult officer, or (wrong) any officer by `pick`. */
+function officerFor(model: LineupModel, slot: SlotView, right: boolean, pick: number): Person {
+  const own = officers(model).find((person) => person.catapultId === slot.catapultId);
+  return right && own ? own : officers(model)[pick % officers(model).length];
+}
+
+/** The slot's own pilot, or (wrong) any pilot by `pick`. */
+function pilotFor(model: LineupModel, slot: SlotView, right: boolean, pick: number): Person {
+  const own = pilots(model).find((person) => person.userId === slot.pilotId);
+  return right && own ? own : pilots(model)[pick % pilots(model).length];
+}
+
+/** Refused unless `person` is of the slot's catapult crew. */
+const notOwnCatapult = (person: Person, slot: SlotView) =>
+  person.role !== 'catapult_officer' || person.catapultId !== slot.catapultId;
+
+abstract class SlotCommand extends ModelCommand {
+  constructor(
+    protected readonly slotPick: number,
+    /** The person the command is meant for; false: someone picked by `personPick`. */
+    protected readonly rightPerson: boolean,
+    protected readonly personPick: number,
+    protected readonly stale: boolean,
+  ) {
+    super(0);
+  }
+
+  protected describe(kind: string, extra = ''): string {
+    return `${kind}(slot #${this.slotPick}${this.rightPerson ? '' : `, person #${this.personPick}`}${this.stale ? ', stale' : ''}${extra})`;
+  }
+
+  protected basis(slot: SlotView) {
+    return { slotVersion: this.stale ? slot.version + 1 : slot.version };
+  }
+
+  protected path(model: LineupModel, slot: SlotView, action: string) {
+    return `/api/cycles/${model.snapshot.cycle.id}/lineup/slots/${slot.id}/${action}`;
+  }
+
+  /** Accepted, leaving the lanes as they are (or as given) and the slot's facts changed by `facts`. */
+  protected accepted(model: LineupModel, slot: SlotView, facts: Partial<SlotFacts>, lanes = lanesOf(model.snapshot)) {
+    return { status: 200 as const, lanes, slots: new Map([[slot.id, facts]]) };
+  }
+}
+
+/** A readiness step (mostly the next one), or resume; the weight agreed is the pilot's answer, the plan, or off. */
+export class StepCommand extends SlotCommand {
+  constructor(
+    slotPick: number,
+    rightPerson: boolean,
+    personPick: number,
+    stale: boolean,
+    /** 0–5: the next step; 6: a step picked by `stepPick`; 7: resume. */
+    private readonly kind: number,
+    private readonly stepPick: number,
+    /** 0: the pilot's answer (or the plan), 1: the plan, 2: 500 lb more. */
+    private readonly weightPick: number,
+  ) {
+    super(slotPick, rightPerson, personPick, stale);
+  }
+
+  protected request(model: LineupModel): Request {
+    const { snapshot } = model;
+    const steps = snapshot.readinessSteps as SlotStatus[];
+    const slot = pickSlot(
+      snapshot,
+      this.slotPick,
+      this.kind === 7 ? (candidate) => candidate.status === 'suspended' : undefined,
+    );
+    const person = officerFor(model, slot, this.rightPerson, this.personPick);
+    const at = slot.status === 'planned' ? -1 : steps.indexOf(slot.status);
+    const next = at >= 0 || slot.status === 'planned' ? (steps[at + 1] ?? null) : null;
+    const to: SlotStatus | 'resume' =
+      this.kind === 7 ? 'resume' : this.kind === 6 || next === null ? steps[this.stepPick % steps.length] : next;
+    const { pilotAnswerLb } = slotFacts(slot);
+    const weight = [pilotAnswerLb ?? slot.grossWeightLb, slot.grossWeightLb, slot.grossWeightLb + 500][
+      this.weightPick % 3
+    ];
+    const body = { ...this.basis(slot), to, ...(to === 'weight_agreed' ? { agreedWeightLb: weight } : {}) };
+    const path = this.path(model, slot, 'advance');
+    const answer = (prediction: Request['prediction'], after?: Request['after']) => ({
+      path,
+      body,
+      prediction,
+      token: person.token,
+      after,
+    });
+    if (notOwnCatapult(person, slot)) return answer(refusal(403, 'not_your_catapult'));
+    if (this.stale) return answer(refusal(409, 'stale_basis'));
+    if (snapshot.cycle.state !== 'executing') return answer(refusal(409, 'cycle_not_executing'));
+    const place = placeInLane(snapshot, slot);
+    if (to === 'resume') {
+      if (slot.status !== 'suspended') return answer(refusal(409, 'wrong_step'));
+      // The head of the lane is hooked up again; one suspended while waiting behind it waits again.
+      const back: SlotStatus = place === 0 || !steps.includes('taxiing') ? 'on_catapult' : 'taxiing';
+      const facts: Partial<SlotFacts> = { status: back, agreedWeightLb: null, weightAgreed: false };
+      if (back === 'on_catapult') facts.suspendReason = null;
+      return answer(this.accepted(model, slot, facts));
+    }
+    if (to !== next) return answer(refusal(409, 'wrong_step'));
+    // The next aircraft may taxi up behind the deflector; only the head of the lane goes further.
+    if (place > (to === 'taxiing' ? 1 : 0)) return answer(refusal(409, 'not_current_aircraft'));
+    const facts: Partial<SlotFacts> = { status: to };
+    if (to === 'weight_agreed') {
+      if (pilotAnswerLb !== null && pilotAnswerLb !== weight) return answer(refusal(409, 'weight_mismatch'));
+      Object.assign(facts, { agreedWeightLb: weight, weightAgreed: true });
+    }
+    // Reading the setting back is the re-verify.
+    if (to === 'setting_set') facts.reverifyCause = null;
+    if (to === 'on_catapult') facts.suspendReason = null;
+    const step = { byUserId: person.userId, from: slot.status, to, reverifyBefore: slot.reverifyCause };
+    return answer(this.accepted(model, slot, facts), (after, outcome) =>
+      after.lastSteps.set(slot.id, { ...step, sentAt: outcome.sentAt }),
+    );
+  }
+
+  override toString(): string {
+    const kind = this.kind === 7 ? 'resume' : this.kind === 6 ? `step ${this.stepPick}` : 'next step';
+    return this.describe(kind, `, weight #${this.weightPick % 3}`);
+  }
+}
+
+export class UndoCommand extends SlotCommand {
+  /** Not in the seconds around the end of the undo window, where the answer depends on the request's own time. */
+  private slot(model: Readonly<LineupModel>): SlotView {
+    return pickSlot(model.snapshot, this.slotPick, (slot) => model.lastSteps.get(slot.id)?.to === slot.status);
+  }
+
+  override check(model: Readonly<LineupModel>): boolean {
+    const slot = this.slot(model);
+    const last = model.lastSteps.get(slot.id);
+    const age = last ? Date.now() - last.sentAt : 0;
+    return age < SURELY_IN_TIME_MS || age > SURELY_LATE_MS;
+  }
+
+  protected request(model: LineupModel): Request {
+    const slot = this.slot(model);
+    const person = officerFor(model, slot, this.rightPerson, this.personPick);
+    const answer = (prediction: Request['prediction']) => ({
+      path: this.path(model, slot, 'undo'),
+      body: this.basis(slot),
+      prediction,
+      token: person.token,
+    });
+    if (notOwnCatapult(person, slot)) return answer(refusal(403, 'not_your_catapult'));
+    if (this.stale) return answer(refusal(409, 'stale_basis'));
+    const last = model.lastSteps.get(slot.id);
+    if (!last || last.to !== slot.status) return answer(refusal(409, 'nothing_to_undo'));
+    if (last.byUserId !== person.userId) return answer(refusal(403, 'not_your_step'));
+    if (Date.now() - last.sentAt > SURELY_LATE_MS) return answer(refusal(409, 'undo_expired'));
+    const facts: Partial<SlotFacts> = { status: last.from };
+    if (slot.status === 'weight_agreed') Object.assign(facts, { agreedWeightLb: null, weightAgreed: false });
+    if (slot.status === 'setting_set') facts.reverifyCause = last.reverifyBefore;
+    return answer(this.accepted(model, slot, facts));
+  }
+
+  override toString(): string {
+    return this.describe('undo');
+  }
+}
+
+/** One tap by the catapult officer or by a pilot (the aircraft's own, or another). */
+export class SuspendCommand extends SlotCommand {
+  protected request(model: LineupModel): Request {
+    const steps = model.snapshot.readinessSteps as SlotStatus[];
+    const slot = pickSlot(model.snapshot, this.slotPick, (candidate) => steps.includes(candidate.status));
+    const byPilot = this.personPick % 2 === 0;
+    const person = byPilot
+      ? pilotFor(model, slot, this.rightPerson, this.personPick)
+      : officerFor(model, slot, this.rightPerson, this.personPick);
+    const answer = (prediction: Request['prediction']) => ({
+      path: this.path(model, slot, 'suspend'),
+      body: this.basis(slot),
+      prediction,
+      token: person.token,
+    });
+    if (this.stale) return answer(refusal(409, 'stale_basis'));
+    if (person.role === 'pilot' && person.userId !== slot.pilotId) return answer(refusal(403, 'not_your_slot'));
+    if (person.role === 'catapult_officer' && person.catapultId !== slot.catapultId)
+      return answer(refusal(403, 'not_your_catapult'));
+    if (!steps.includes(slot.status)) return answer(refusal(409, 'wrong_step'));
+    return answer(this.accepted(model, slot, { status: 'suspended', suspendReason: null }));
+  }
+
+  override toString(): string {
+    return this.describe('suspend', this.personPick % 2 === 0 ? ', by a pilot' : '');
+  }
+}
+
+/** The pilot answers the weight from the tablet: the planned figure, or one of 500 lb more. */
+export class WeightAnswerCommand extends SlotCommand {
+  constructor(
+    slotPick: number,
+    rightPerson: boolean,
+    personPick: number,
+    stale: boolean,
+    private readonly heavier: boolean,
+  ) {
+    super(slotPick, rightPerson, personPick, stale);
+  }
+
+  protected request(model: LineupModel): Request {
+    const steps = model.snapshot.readinessSteps as SlotStatus[];
+    const slot = pickSlot(model.snapshot, this.slotPick);
+    const person = pilotFor(model, slot, this.rightPerson, this.personPick);
+    const weight = slot.grossWeightLb + (this.heavier ? 500 : 0);
+    const answer = (prediction: Request['prediction']) => ({
+      path: this.path(model, slot, 'weight-ack'),
+      body: { ...this.basis(slot), grossWeightLb: weight },
+      prediction,
+      token: person.token,
+    });
+    if (person.userId !== slot.pilotId) return answer(refusal(403, 'not_your_slot'));
+    if (this.stale) return answer(refusal(409, 'stale_basis'));
+    if (GONE.includes(slot.status)) return answer(refusal(409, 'wrong_step'));
+    const facts: Partial<SlotFacts> = { pilotAnswerLb: weight };
+    // Another figure than the one agreed: back before the agreement, to agree and read the setting back anew.
+    const agreedAt = steps.indexOf('weight_agreed');
+    const at = steps.indexOf(slot.status);
+    if (slot.agreedWeightLb !== null && slot.agreedWeightLb !== weight && agreedAt >= 0 && at >= agreedAt) {
+      Object.assign(facts, {
+        status: steps[agreedAt - 1] ?? steps[0],
+        reverifyCause: 'weight',
+        agreedWeightLb: null,
+        weightAgreed: false,
+      });
+    }
+    return answer(this.accepted(model, slot, facts));
+  }
+
+  override toString(): string {
+    return this.describe('weight answer', this.heavier ? ', 500 lb more' : '');
+  }
+}
+
+/** The launch: the hard gates first (the catapult down, no weight agreed, a re-verify), then the step. */
+export class LaunchCommand extends SlotCommand {
+  protected request(model: LineupModel): Request {
+    const { snapshot } = model;
+    const steps = snapshot.readinessSteps as SlotStatus[];
+    // Mostly an aircraft ready to go, or one suspended on the way (which must not go).
+    const slot = pickSlot(snapshot, this.slotPick, (candidate) =>
+      [steps[steps.length - 1], 'suspended'].includes(candidate.status),
+    );
+    const person = officerFor(model, slot, this.rightPerson, this.personPick);
+    const answer = (prediction: Request['prediction'], after?: Request['after']) => ({
+      path: this.path(model, slot, 'launch'),
+      body: { ...this.basis(slot), idempotencyKey: launchKey() },
+      prediction,
+      token: person.token,
+      after,
+    });
+    if (notOwnCatapult(person, slot)) return answer(refusal(403, 'not_your_catapult'));
+    if (slot.status === 'launched') return answer(refusal(409, 'already_launched'));
+    if (this.stale) return answer(refusal(409, 'stale_basis'));
+    const lane = snapshot.lanes.find((candidate) => candidate.catapultId === slot.catapultId)!;
+    if (lane.status !== 'up') return answer(refusal(409, 'catapult_down'));
+    if (!slotFacts(slot).weightAgreed || slot.agreedWeightLb === null) return answer(refusal(409, 'weight_not_agreed'));
+    if (slot.reverifyCause !== null) return answer(refusal(409, 'reverify_required'));
+    if (slot.status !== steps[steps.length - 1] || placeInLane(snapshot, slot) !== 0)
+      return answer(refusal(409, 'wrong_step'));
+    // The last aircraft off closes the cycle.
+    const closesCycle = snapshot.slots.every((other) => other.id === slot.id || GONE.includes(other.status));
+    return answer({ ...this.accepted(model, slot, { status: 'launched' }), closesCycle }, (after) =>
+      after.launches.set(lane.catapultId, [...(after.launches.get(lane.catapultId) ?? []), slot.id]),
+    );
+  }
+
+  override toString(): string {
+    return this.describe('launch');
+  }
+}
+
+/** A hangfire, a suspected cold shot, or the aircraft unserviceable on the catapult (to the pool, or down). */
+export class CatapultEventCommand extends SlotCommand {
+  constructor(
+    slotPick: number,
+    rightPerson: boolean,
+    personPick: number,
+    stale: boolean,
+    private readonly event: 'hangfire' | 'cold-shot' | 'down-to-pool' | 'down',
+  ) {
+    super(slotPick, rightPerson, personPick, stale);
+  }
+
+  /** Downs cannot be undone: a few at most, as for the handler's downs. */
+  override check(model: Readonly<LineupModel>): boolean {
+    return this.event !== 'down' || model.snapshot.slots.filter((slot) => slot.status === 'down').length < MAX_DOWN;
+  }
+
+  protected request(model: LineupModel): Request {
+    const { snapshot } = model;
+    const steps = snapshot.readinessSteps as SlotStatus[];
+    const meant: Record<typeof this.event, (slot: SlotView) => boolean> = {
+      hangfire: (slot) => FIREABLE.includes(slot.status),
+      'cold-shot': (slot) => slot.status === 'launched',
+      'down-to-pool': (slot) => slot.status === 'suspended' || ON_CATAPULT.includes(slot.status),
+      down: (slot) => slot.status === 'suspended' || ON_CATAPULT.includes(slot.status),
+    };
+    const slot = pickSlot(snapshot, this.slotPick, meant[this.event]);
+    const person = officerFor(model, slot, this.rightPerson, this.personPick);
+    const action = this.event === 'hangfire' || this.event === 'cold-shot' ? this.event : 'down-on-catapult';
+    const outcome =
+      this.event === 'down' ? { outcome: 'down' } : this.event === 'down-to-pool' ? { outcome: 'pool' } : {};
+    const answer = (prediction: Request['prediction']) => ({
+      path: this.path(model, slot, action),
+      body: { ...this.basis(slot), ...outcome },
+      prediction,
+      token: person.token,
+    });
+    if (this.stale) return answer(refusal(409, 'stale_basis'));
+    if (notOwnCatapult(person, slot)) return answer(refusal(403, 'not_your_catapult'));
+    const wrongStep = answer(refusal(409, 'wrong_step'));
+    if (this.event === 'hangfire') {
+      if (!FIREABLE.includes(slot.status)) return wrongStep;
+      return answer(this.accepted(model, slot, { status: 'suspended', suspendReason: 'hangfire' }));
+    }
+    const lane = snapshot.lanes.find((candidate) => candidate.catapultId === slot.catapultId)!;
+    if (this.event === 'cold-shot') {
+      // Reported on the catapult's last shot only; the catapult goes down and the aircraft on it is suspended.
+      if (slot.status !== 'launched' || model.launches.get(lane.catapultId)?.at(-1) !== slot.id) return wrongStep;
+      const onIt = onCatapult(snapshot, lane.catapultId);
+      return answer({
+        status: 200,
+        lanes: lanesOf(snapshot),
+        catapult: { id: lane.catapultId, status: 'down' },
+        slots: new Map(onIt ? [[onIt.id, { status: 'suspended' as const, suspendReason: 'suspected cold shot' }]] : []),
+      });
+    }
+    if (slot.status !== 'suspended' && (!steps.includes(slot.status) || slot.status === 'taxiing')) return wrongStep;
+    const lanes = lanesOf(snapshot);
+    lanes.set(
+      lane.catapultId,
+      lanes.get(lane.catapultId)!.filter((id) => id !== slot.id),
+    );
+    return answer(
+      this.accepted(
+        model,
+        slot,
+        {
+          status: this.event === 'down' ? 'down' : 'planned',
+          agreedWeightLb: null,
+          weightAgreed: false,
+          reverifyCause: null,
+          suspendReason: null,
+        },
+        lanes,
+      ),
+    );
+  }
+
+  override toString(): string {
+    return this.describe(this.event);
+  }
+}
+
+/** A taxiing or on-catapult aircraft back to the deck pool: by its officer, or by the handler with agreement. */
+export class ReturnToPoolCommand extends SlotCommand {
+  constructor(
+    slotPick: number,
+    rightPerson: boolean,
+    personPick: number,
+    stale: boolean,
+    /** 0: by an officer; 1: by the handler with the officer's agreement; 2: by the handler without. */
+    private readonly by: number,
+  ) {
+    super(slotPick, rightPerson, personPick, stale);
+  }
+
+  protected request(model: LineupModel): Request {
+    const slot = pickSlot(model.snapshot, this.slotPick, (candidate) => RETURNABLE_STATUSES.includes(candidate.status));
+    const by = this.by % 3;
+    const person = by === 0 ? officerFor(model, slot, this.rightPerson, this.personPick) : model.people[0];
+    const answer = (prediction: Request['prediction']) => ({
+      path: this.path(model, slot, 'return'),
+      body: {
+        ...this.basis(slot),
+        reason: 'Model run: fuel leak',
+        ...(by === 1 ? { catapultOfficerAgreed: true } : {}),
+      },
+      prediction,
+      token: person.token,
+    });
+    if (slot.catapultId === null) return answer(refusal(409, 'no_change'));
+    if (by === 0 && person.catapultId !== slot.catapultId) return answer(refusal(403, 'not_your_catapult'));
+    if (by === 2) return answer(refusal(403, 'agreement_required'));
+    if (this.stale) return answer(refusal(409, 'stale_basis'));
+    if (!RETURNABLE_STATUSES.includes(slot.status)) return answer(refusal(409, 'wrong_step'));
+    const lanes = lanesOf(model.snapshot);
+    lanes.set(
+      slot.catapultId,
+      lanes.get(slot.catapultId)!.filter((id) => id !== slot.id),
+    );
+    // It keeps its pilot's answer and the agreed figure; the crew's agreement is to be made again.
+    return answer(this.accepted(model, slot, { status: 'planned', weightAgreed: false, suspendReason: null }, lanes));
+  }
+
+  override toString(): string {
+    return this.describe(
+      'return to pool',
+      [', by an officer', ', by the handler, agreed', ', by the handler'][this.by % 3],
+    );
+  }
+}
+
+/** fast-check's commands for a launching cycle; the model's first person is the handler (token 0). */
+export function executingModelCommands(maxCommands: number) {
+  const slot = fc.nat();
+  const mostly = fc.nat(7).map((n) => n !== 0);
+  const sometimes = fc.nat(9).map((n) => n === 0);
+  const crew = <T>(build: (slotPick: number, right: boolean, personPick: number, stale: boolean) => T) =>
+    fc.tuple(slot, mostly, fc.nat(), sometimes).map(([s, right, person, stale]) => build(s, right, person, stale));
+  return fc.commands(
+    [
+      fc.oneof(
+        {
+          weight: 80,
+          arbitrary: fc
+            .tuple(slot, mostly, fc.nat(), sometimes, fc.nat(7), fc.nat(), fc.nat(2))
+            .map((args) => new StepCommand(...args)),
+        },
+        { weight: 3, arbitrary: crew((...args) => new UndoCommand(...args)) },
+        { weight: 2, arbitrary: crew((...args) => new SuspendCommand(...args)) },
+        {
+          weight: 3,
+          arbitrary: fc
+            .tuple(slot, mostly, fc.nat(), sometimes, sometimes)
+            .map((args) => new WeightAnswerCommand(...args)),
+        },
+        { weight: 6, arbitrary: crew((...args) => new LaunchCommand(...args)) },
+        {
+          weight: 2,
+          arbitrary: fc
+            .tuple(
+              slot,
+              mostly,
+              fc.nat(),
+              sometimes,
+              fc.constantFrom('hangfire', 'cold-shot', 'down-to-pool', 'down') as fc.Arbitrary<
+                'hangfire' | 'cold-shot' | 'down-to-pool' | 'down'
+              >,
+            )
+            .map((args) => new CatapultEventCommand(...args)),
+        },
+        {
+          weight: 1,
+          arbitrary: fc
+            .tuple(slot, mostly, fc.nat(), sometimes, fc.nat(2))
+            .map((args) => new ReturnToPoolCommand(...args)),
+        },
+        {
+          weight: 1,
+          arbitrary: fc
+            .tuple(fc.nat(), sometimes, fc.boolean())
+            .map(([lane, stale, confirm]) => new CatapultStatusCommand(0, lane, stale, confirm)),
+        },
+        {
+          weight: 1,
+          arbitrary: fc
+            .tuple(fc.nat(), sometimes, fc.constant(false))
+            .map(([s, stale, spare]) => new MarkDownCommand(0, s, stale, spare)),
+        },
+        {
+          weight: 1,
+          arbitrary: fc.tuple(fc.nat(), sometimes).map(([s, stale]) => new UpAgainCommand(0, s, stale)),
+        },
+      ),
+    ],
+    { maxCommands, size: 'max' },
+  );
+}

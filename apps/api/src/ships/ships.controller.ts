@@ -4,7 +4,7 @@ import { ApiTags } from '@nestjs/swagger';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { Roles } from '../common/decorators/roles.decorator.js';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
-import { DeckLayoutDto } from './dto/deck-layout.dto.js';
+import { ReplaceDeckLayoutDto } from './dto/deck-layout.dto.js';
 import { UpdateCatapultDto } from './dto/update-catapult.dto.js';
 import { UpdateShipDto } from './dto/update-ship.dto.js';
 import { ShipsService } from './ships.service.js';
@@ -61,7 +61,7 @@ export class ShipsController {
   replaceDeckLayout(
     @CurrentUser() caller: AuthenticatedUser,
     @Param('shipId', ParseIntPipe) shipId: number,
-    @Body() body: DeckLayoutDto,
+    @Body() body: ReplaceDeckLayoutDto,
   ): Promise<ShipView> {
     return this.ships.replaceDeckLayout(caller, shipId, body);
   }

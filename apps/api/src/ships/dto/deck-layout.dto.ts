@@ -55,7 +55,7 @@ export class HangarBayDto implements HangarBayLayout {
   elevators: string[];
 }
 
-export class DeckLayoutDto implements ReplaceDeckLayoutRequest {
+export class ReplaceDeckLayoutDto implements ReplaceDeckLayoutRequest {
   @ApiProperty({ type: [DeckSpotDto] })
   @IsArray()
   @ArrayMinSize(1, { message: 'deckSpots must list at least one spot' })
@@ -78,7 +78,7 @@ export class DeckLayoutDto implements ReplaceDeckLayoutRequest {
   @Type(() => HangarBayDto)
   hangarBays: HangarBayDto[];
 
-  @ApiProperty({ example: [3, 4], description: 'Numbers of the catapults inside the landing area.' })
+  @ApiProperty({ type: [Number], example: [3, 4], description: 'Numbers of the catapults inside the landing area.' })
   @IsArray()
   @ArrayMaxSize(9)
   @IsInt({ each: true })

@@ -69,6 +69,15 @@ describe("the admin's deck layout", () => {
       taxiS: demoDeck.elevators[0].taxiS,
     });
     expect((await ship()).deckLayout.elevators).toEqual(elevators);
+    const audit = await driver.call(ADMIN, 'get', '/api/audit?action=deck_layout.replaced&limit=1');
+    expect(audit.body.items[0]).toMatchObject({
+      actorEmail: ADMIN,
+      subjectType: 'ship',
+      subjectId: 1,
+      summary: `Deck layout of ${(await ship()).name} replaced`,
+      before: { deckLayout: { elevators: demoDeck.elevators } },
+      after: { deckLayout: { elevators } },
+    });
     const after = Date.parse((await driver.slot(cycleId, slot.id)).projectedLaunchAt!);
     expect((before - after) / 1000).toBe(30);
   });

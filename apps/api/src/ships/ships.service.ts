@@ -3,6 +3,7 @@ import { readinessStepsProblem } from '@catline/launch-math';
 import { Injectable, Logger } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import type { DataSource } from 'typeorm';
+import { AuditTrail } from '../audit/audit-trail.service.js';
 import { definedFields } from '../common/defined-fields.js';
 import { type ShipScope, inShipScope } from '../common/ship-scope.js';
 import { deckLayoutData } from '../cycle-changes/deck-positions.js';
@@ -19,7 +20,10 @@ import { ShipsException } from './ships.exception.js';
 export class ShipsService {
   private readonly logger = new Logger(ShipsService.name);
 
-  constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
+  constructor(
+    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly audit: AuditTrail,
+  ) {}
 
   async list(scope: ShipScope): Promise<ShipView[]> {
     const ships = await this.dataSource.manager.find(Ship, {
@@ -64,9 +68,19 @@ export class ShipsService {
       if (!ship) throw shipNotFound(id);
       const catapults = await manager.findBy(Catapult, { shipId: id });
       await checkDeck(manager, ship, deckSpots, layout, catapults);
+      const before = toShipView(ship, catapults);
       Object.assign(ship, { deckSpots, deckLayout: layout });
       await manager.save(Ship, ship);
-      return toShipView(ship, catapults);
+      const after = toShipView(ship, catapults);
+      await this.audit.record(manager, {
+        action: 'deck_layout.replaced',
+        subject: { type: 'ship', id },
+        shipId: id,
+        summary: `Deck layout of ${ship.name} replaced`,
+        before: { deckSpots: before.deckSpots, deckLayout: before.deckLayout },
+        after: { deckSpots: after.deckSpots, deckLayout: after.deckLayout },
+      });
+      return after;
     });
     this.logger.log(`Ship ${id} deck layout replaced (${deckSpots.length} spots, ${elevators.length} elevators)`);
     return view;

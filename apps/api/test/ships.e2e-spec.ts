@@ -73,19 +73,9 @@ describe('ships and catapults', () => {
     ['a profile without departures', { profile: { clearingTurnDeg: { bow: 10, waist: -10 } } }, /departures/],
     ['a null name', { name: null }, /name must be a string/],
     [
-      'a deck spot with a negative taxi time',
-      { deckSpots: [{ name: 'bow-1', taxiS: { 1: -5, 2: 60, 3: 150, 4: 170 } }] },
+      'a deck spot with a taxi time past an hour',
+      { deckSpots: [{ name: 'bow-1', taxiS: { 1: 3601, 2: 60, 3: 150, 4: 170 } }] },
       /taxiS must map catapult numbers/,
-    ],
-    [
-      'a deck spot missing a catapult',
-      { deckSpots: demoDeckSpots.map((spot) => ({ ...spot, taxiS: { 1: 60 } })) },
-      /needs a taxi time to catapult 2, 3, 4/,
-    ],
-    [
-      'a deck spot listed twice',
-      { deckSpots: [...demoDeckSpots, demoDeckSpots[0]] },
-      /Deck spot bow-1 is listed twice/,
     ],
     ['an extra field', { catapults: [] }, /property catapults should not exist/],
   ])('refuses %s with a 400 and changes nothing', async (_case, body, message) => {
@@ -93,6 +83,35 @@ describe('ships and catapults', () => {
     const response = await patchShip(body);
     expect(response.status).toBe(400);
     expect(response.body.message).toMatch(message);
+    expect(await ship()).toEqual(before);
+  });
+
+  // The same deck rules as the whole layout's replacement (deck-layout.e2e-spec.ts), against the elevators held.
+  it.each([
+    [
+      'a deck spot with a negative taxi time',
+      {
+        deckSpots: demoDeckSpots.map((spot) =>
+          spot.name === 'bow-1' ? { ...spot, taxiS: { ...spot.taxiS, 1: -5 } } : spot,
+        ),
+      },
+      'The taxi time from the spot bow-1 to catapult 1 is -5 s; it cannot be below 0.',
+    ],
+    [
+      'a deck spot missing a catapult',
+      { deckSpots: demoDeckSpots.map((spot) => (spot.name === 'mid-1' ? { ...spot, taxiS: { 1: 60 } } : spot)) },
+      'The spot mid-1 needs a taxi time to catapult 2, 3, 4.',
+    ],
+    [
+      'a deck spot listed twice',
+      { deckSpots: [...demoDeckSpots, demoDeckSpots[0]] },
+      'The name bow-1 is given to more than one spot; each needs its own.',
+    ],
+  ])('refuses %s with a 422 and changes nothing', async (_case, body, message) => {
+    const before = await ship();
+    const response = await patchShip(body);
+    expect(response.status).toBe(422);
+    expect(response.body).toMatchObject({ code: 'deck_layout_invalid', message });
     expect(await ship()).toEqual(before);
   });
 

@@ -58,6 +58,14 @@ export interface DeckLayout {
   landingAreaCatapults: number[];
 }
 
+/**
+ * PUT /ships/:shipId/deck-layout: the whole deck, replacing the one held: the spots (grouped in areas, with
+ * their clear-before order and taxi times) and the rest of the layout.
+ */
+export interface ReplaceDeckLayoutRequest extends DeckLayout {
+  deckSpots: DeckSpot[];
+}
+
 /** The ship's own after-the-shot profile: data the ship writes, not code. */
 export interface ShipProfile {
   /** Clearing turn off a bow and a waist catapult in cases I and II (none in case III), degrees; positive to starboard. */

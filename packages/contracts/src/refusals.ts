@@ -149,6 +149,8 @@ export const SHIP_REFUSAL_CODES = [
   'catapult_not_found',
   'invalid_configuration',
   'spot_in_use',
+  /** The deck layout breaks a rule of the deck (launch-math's deckLayoutProblems); `details` lists each. */
+  'deck_layout_invalid',
 ] as const;
 export type ShipRefusalCode = (typeof SHIP_REFUSAL_CODES)[number];
 

@@ -11,6 +11,7 @@ export * from './launch/launch-airspeed.js';
 export * from './launch/launch-settings.js';
 export * from './launch/launch-figures.js';
 export * from './deck/deck-positions.js';
+export * from './deck/deck-layout-problems.js';
 export * from './deck/respot.js';
 export {
   catapultClosedReason,

@@ -1,4 +1,4 @@
-import type { DeckLayout as DeckLayoutData, DeckPositionView } from '@catline/contracts';
+import type { DeckLayout as DeckLayoutData, DeckPositionView, DeckSpot } from '@catline/contracts';
 import {
   blockingAircraft,
   seconds,
@@ -23,33 +23,42 @@ export const deckLayoutData = (ship: Ship, catapults: readonly Catapult[]): Deck
     landingAreaCatapults: catapults.filter((catapult) => catapult.position === 'waist').map((c) => c.number),
   };
 
-const byCatapultId = (taxiS: Record<number, number>, catapults: readonly Catapult[]): TaxiTimes =>
+/** Where a taxi time goes in launch-math's layout: the key of its catapult, undefined for no catapult. */
+type CatapultKey = (catapultNumber: number) => string | undefined;
+
+const keyedTaxi = (taxiS: Record<number, number>, key: CatapultKey): TaxiTimes =>
   Object.fromEntries(
-    catapults.flatMap((catapult) =>
-      taxiS[catapult.number] === undefined ? [] : [[String(catapult.id), seconds(taxiS[catapult.number])]],
-    ),
+    Object.entries(taxiS).flatMap(([number, taxi]) => {
+      const id = key(Number(number));
+      return id === undefined ? [] : [[id, seconds(taxi)]];
+    }),
   );
 
-/** The ship's deck for launch-math; catapults are keyed by their ids as strings, as in the projection. */
-export function deckLayout(ship: Ship, catapults: readonly Catapult[]): DeckLayout {
-  const data = deckLayoutData(ship, catapults);
-  const areas = [...new Set(ship.deckSpots.map((spot) => spot.area ?? spot.name))];
+/** Spots and the rest of a deck for launch-math, each taxi time keyed by `key` of its catapult number. */
+export function layoutOf(spots: readonly DeckSpot[], data: DeckLayoutData, key: CatapultKey): DeckLayout {
+  const areas = [...new Set(spots.map((spot) => spot.area ?? spot.name))];
   return {
     // Every stored spot carries its own taxi times, so an area adds none of its own.
     areas: areas.map((id) => ({ id, taxi: {} })),
-    spots: ship.deckSpots.map((spot) => ({
+    spots: spots.map((spot) => ({
       id: spot.name,
       areaId: spot.area ?? spot.name,
-      taxi: byCatapultId(spot.taxiS, catapults),
+      taxi: keyedTaxi(spot.taxiS, key),
       clearBefore: spot.clearBefore ?? [],
     })),
     elevators: data.elevators.map((elevator) => ({
       id: elevator.name,
       cycleTime: seconds(elevator.cycleS),
-      taxi: byCatapultId(elevator.taxiS, catapults),
+      taxi: keyedTaxi(elevator.taxiS, key),
     })),
     hangarBays: data.hangarBays.map((bay) => ({ id: bay.name, elevatorIds: bay.elevators })),
   };
+}
+
+/** The ship's deck for launch-math; catapults are keyed by their ids as strings, as in the projection. */
+export function deckLayout(ship: Ship, catapults: readonly Catapult[]): DeckLayout {
+  const ids = new Map(catapults.map((catapult) => [catapult.number, String(catapult.id)]));
+  return layoutOf(ship.deckSpots, deckLayoutData(ship, catapults), (number) => ids.get(number));
 }
 
 /** Where a slot's aircraft is; a slot from before positions were kept is where its aircraft is parked. */
@@ -67,7 +76,7 @@ export const holdsPosition = (slot: Slot): boolean =>
   slot.status === 'planned' || slot.status === 'down' || slot.status === 'scratched';
 
 /** Whether the ship's deck has the position. */
-export function positionExists(ship: Ship, position: DeckPositionView): boolean {
+export function positionExists(ship: Pick<Ship, 'deckSpots' | 'deckLayout'>, position: DeckPositionView): boolean {
   const names =
     position.kind === 'spot'
       ? ship.deckSpots.map((spot) => spot.name)

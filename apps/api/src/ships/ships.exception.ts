@@ -8,10 +8,11 @@ const STATUS: Record<ShipRefusalCode, HttpStatus> = {
   catapult_not_found: HttpStatus.NOT_FOUND,
   invalid_configuration: HttpStatus.BAD_REQUEST,
   spot_in_use: HttpStatus.CONFLICT,
+  deck_layout_invalid: HttpStatus.UNPROCESSABLE_ENTITY,
 };
 
 export class ShipsException extends DomainException {
-  constructor(code: ShipRefusalCode, message: string) {
-    super(STATUS[code], code, message);
+  constructor(code: ShipRefusalCode, message: string, details?: string[]) {
+    super(STATUS[code], code, message, details);
   }
 }

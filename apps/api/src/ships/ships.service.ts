@@ -1,12 +1,13 @@
-import type { CatapultView, DeckSpot, ShipView } from '@catline/contracts';
+import type { CatapultView, ReplaceDeckLayoutRequest, ShipView } from '@catline/contracts';
 import { readinessStepsProblem } from '@catline/launch-math';
 import { Injectable, Logger } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
-import { type DataSource, type EntityManager, In, Not } from 'typeorm';
+import type { DataSource } from 'typeorm';
+import { AuditTrail } from '../audit/audit-trail.service.js';
 import { definedFields } from '../common/defined-fields.js';
 import { type ShipScope, inShipScope } from '../common/ship-scope.js';
-import { Aircraft } from '../database/entities/aircraft.entity.js';
-import { deckSpotProblems } from './deck-spots.js';
+import { deckLayoutData } from '../cycle-changes/deck-positions.js';
+import { checkDeck } from './deck-layout-check.js';
 import type { UpdateCatapultDto } from './dto/update-catapult.dto.js';
 import type { UpdateShipDto } from './dto/update-ship.dto.js';
 import { Catapult } from '../database/entities/catapult.entity.js';
@@ -19,7 +20,10 @@ import { ShipsException } from './ships.exception.js';
 export class ShipsService {
   private readonly logger = new Logger(ShipsService.name);
 
-  constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
+  constructor(
+    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly audit: AuditTrail,
+  ) {}
 
   async list(scope: ShipScope): Promise<ShipView[]> {
     const ships = await this.dataSource.manager.find(Ship, {
@@ -43,7 +47,7 @@ export class ShipsService {
       const ship = await manager.findOne(Ship, { where: { id }, lock: { mode: 'pessimistic_write' } });
       if (!ship) throw shipNotFound(id);
       const catapults = await manager.findBy(Catapult, { shipId: id });
-      if (body.deckSpots) await this.checkDeckSpots(manager, ship, body.deckSpots, catapults);
+      if (body.deckSpots) await checkDeck(manager, ship, body.deckSpots, deckLayoutData(ship, catapults), catapults);
       const stepsProblem = body.profile?.readinessSteps && readinessStepsProblem(body.profile.readinessSteps);
       if (stepsProblem) throw new ShipsException('invalid_configuration', stepsProblem);
       Object.assign(ship, definedFields(body));
@@ -51,6 +55,34 @@ export class ShipsService {
       return toShipView(ship, catapults);
     });
     this.logger.log(`Ship ${id} updated (${Object.keys(definedFields(body)).join(', ') || 'nothing'})`);
+    return view;
+  }
+
+  /** The whole deck at once: spots, elevators, hangar bays and the landing area's catapults. */
+  async replaceDeckLayout(scope: ShipScope, id: number, body: ReplaceDeckLayoutRequest): Promise<ShipView> {
+    this.checkScope(scope, id);
+    const { deckSpots, elevators, hangarBays, landingAreaCatapults } = body;
+    const layout = { elevators, hangarBays, landingAreaCatapults };
+    const view = await this.dataSource.transaction(async (manager) => {
+      const ship = await manager.findOne(Ship, { where: { id }, lock: { mode: 'pessimistic_write' } });
+      if (!ship) throw shipNotFound(id);
+      const catapults = await manager.findBy(Catapult, { shipId: id });
+      await checkDeck(manager, ship, deckSpots, layout, catapults);
+      const before = toShipView(ship, catapults);
+      Object.assign(ship, { deckSpots, deckLayout: layout });
+      await manager.save(Ship, ship);
+      const after = toShipView(ship, catapults);
+      await this.audit.record(manager, {
+        action: 'deck_layout.replaced',
+        subject: { type: 'ship', id },
+        shipId: id,
+        summary: `Deck layout of ${ship.name} replaced`,
+        before: { deckSpots: before.deckSpots, deckLayout: before.deckLayout },
+        after: { deckSpots: after.deckSpots, deckLayout: after.deckLayout },
+      });
+      return after;
+    });
+    this.logger.log(`Ship ${id} deck layout replaced (${deckSpots.length} spots, ${elevators.length} elevators)`);
     return view;
   }
 
@@ -70,31 +102,6 @@ export class ShipsService {
       await manager.save(Catapult, catapult);
       return toCatapultView(catapult);
     });
-  }
-
-  private async checkDeckSpots(
-    manager: EntityManager,
-    ship: Ship,
-    spots: DeckSpot[],
-    catapults: Catapult[],
-  ): Promise<void> {
-    const problems = deckSpotProblems(
-      spots,
-      catapults.map((catapult) => catapult.number),
-    );
-    if (problems.length > 0) throw new ShipsException('invalid_configuration', problems.join(' '));
-    const kept = spots.map((spot) => spot.name);
-    const stranded = await manager.find(Aircraft, {
-      where: { shipId: ship.id, parkedSpot: Not(In(kept)) },
-      order: { sideNumber: 'ASC' },
-    });
-    if (stranded.length > 0) {
-      const list = stranded.map((aircraft) => `${aircraft.sideNumber} (${aircraft.parkedSpot})`).join(', ');
-      throw new ShipsException(
-        'spot_in_use',
-        `Aircraft are parked on spots this change removes: ${list}. Move them first.`,
-      );
-    }
   }
 
   /** Another ship is answered as one that does not exist. */

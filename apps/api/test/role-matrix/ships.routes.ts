@@ -1,5 +1,5 @@
 import { ROLES } from '@catline/contracts';
-import { demoCatapults, demoShip } from '../../src/database/seeds/demo-fleet.js';
+import { demoCatapults, demoDeckLayout, demoDeckSpots, demoShip } from '../../src/database/seeds/demo-fleet.js';
 import type { MatrixRoute } from './route-table.js';
 
 // The demo ship and its catapult 1 (ids 1 in the fresh test database), patched to the values they have.
@@ -11,6 +11,12 @@ export const shipsRoutes: MatrixRoute[] = [
     path: '/api/ships/{shipId}',
     allowed: ['admin'],
     example: () => ({ params: { shipId: 1 }, body: { pairGapS: demoShip.pairGapS } }),
+  },
+  {
+    method: 'PUT',
+    path: '/api/ships/{shipId}/deck-layout',
+    allowed: ['admin'],
+    example: () => ({ params: { shipId: 1 }, body: { deckSpots: demoDeckSpots, ...demoDeckLayout } }),
   },
   {
     method: 'PATCH',

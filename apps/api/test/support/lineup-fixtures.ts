@@ -39,7 +39,7 @@ export const goodConditions = {
   night: false,
 } as const;
 
-type Method = 'get' | 'post' | 'patch';
+type Method = 'get' | 'post' | 'put' | 'patch';
 
 /** An aircraft of a lane by side number, flown by `pilotEmail` where given (else crewed when placed). */
 export type LaneAircraft = string | { side: string; pilotEmail?: string };

@@ -118,6 +118,7 @@ const REASONS: Record<RefusalCode, string> = {
   catapult_not_found: 'catapult not found',
   invalid_configuration: 'not a valid ship layout',
   spot_in_use: 'the spot is in use',
+  deck_layout_invalid: 'the deck layout cannot be used',
   aircraft_not_found: 'aircraft not found',
   side_number_taken: 'the side number is taken',
   aircraft_in_use: 'the aircraft is in use',

@@ -12,18 +12,21 @@ function isTaxiTimes(value: unknown): boolean {
   return (
     entries.length > 0 &&
     entries.every(
-      ([key, seconds]) => /^[1-9]$/.test(key) && typeof seconds === 'number' && seconds > 0 && seconds <= MAX_TAXI_S,
+      ([key, seconds]) => /^[1-9]$/.test(key) && Number.isFinite(seconds) && (seconds as number) <= MAX_TAXI_S,
     )
   );
 }
 
-const IsTaxiTimes = () =>
+/**
+ * Catapult numbers to seconds, at most MAX_TAXI_S; whether every catapult has one and none is below 0 is
+ * the deck's rule (deckLayoutProblems), answered with a sentence naming the spot or elevator.
+ */
+export const IsTaxiTimes = () =>
   ValidateBy({
     name: 'isTaxiTimes',
     validator: {
       validate: isTaxiTimes,
-      defaultMessage: () =>
-        `$property must map catapult numbers to taxi times in seconds (greater than 0, at most ${MAX_TAXI_S})`,
+      defaultMessage: () => `$property must map catapult numbers to taxi times in seconds (at most ${MAX_TAXI_S})`,
     },
   });
 

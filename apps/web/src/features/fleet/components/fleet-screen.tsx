@@ -17,6 +17,7 @@ import { useDeleteAircraft } from '../api/delete-aircraft.js';
 import { useDeleteSquadron } from '../api/delete-squadron.js';
 import { useUpdateAircraft } from '../api/update-aircraft.js';
 import { AircraftForm } from './aircraft-form.js';
+import { DeckLayoutEditor } from './deck-layout-editor.js';
 import { SquadronForm } from './squadron-form.js';
 
 type Doomed = { kind: 'aircraft'; row: AircraftView } | { kind: 'squadron'; row: SquadronView } | null;
@@ -144,12 +145,16 @@ export function FleetScreen() {
 
   return (
     <Stack gap="4">
-      <PageHeader title="Fleet" subtitle="Aircraft and squadrons" />
+      <PageHeader
+        title="Fleet"
+        subtitle={admin ? 'Aircraft, squadrons and the deck layout' : 'Aircraft and squadrons'}
+      />
       {notice && <NoticeBanner notice={notice} onDismiss={dismiss} />}
       <Tabs.Root defaultValue="aircraft" variant="line">
         <Tabs.List>
           <Tabs.Trigger value="aircraft">Aircraft</Tabs.Trigger>
           <Tabs.Trigger value="squadrons">Squadrons</Tabs.Trigger>
+          {admin && <Tabs.Trigger value="deck-layout">Deck layout</Tabs.Trigger>}
         </Tabs.List>
         <Tabs.Content value="aircraft">
           <Stack gap="4">
@@ -203,6 +208,13 @@ export function FleetScreen() {
             </RoleGate>
           </Stack>
         </Tabs.Content>
+        {admin && (
+          <Tabs.Content value="deck-layout">
+            <QueryView query={ships} loadingLabel="Loading the ship…">
+              {(rows) => (rows[0] ? <DeckLayoutEditor key={rows[0].id} ship={rows[0]} /> : <Text>No ship yet.</Text>)}
+            </QueryView>
+          </Tabs.Content>
+        )}
       </Tabs.Root>
       {doomed && (
         <ActionDialog

@@ -220,7 +220,7 @@ function Station({ snapshot, catapultId }: { snapshot: LineupSnapshot; catapultI
 
 export function CatStationScreen() {
   const user = useSessionUser();
-  const { cycles, cycle, choose } = useViewedCycle();
+  const { cycles, cycle, choose, finding } = useViewedCycle();
   const live = useLiveCycle(cycle?.id);
   const snapshot = live.lineup.data;
   useCycleTheme((snapshot?.cycle ?? cycle)?.night);
@@ -241,7 +241,7 @@ export function CatStationScreen() {
         <EmptyState title="No catapult assigned to you">
           The admin assigns each catapult officer a catapult under People.
         </EmptyState>
-      ) : cycles.isPending ? (
+      ) : finding ? (
         <LoadingState label="Finding the current cycle…" />
       ) : cycles.isError ? (
         <ErrorState error={cycles.error} onRetry={() => void cycles.refetch()} />

@@ -130,7 +130,7 @@ function DeckWorkspace({ snapshot, ship }: { snapshot: LineupSnapshot; ship: Shi
 
 /** The deck: every aircraft of the cycle on its position, the landing area, and the handler's tows. */
 export function DeckScreen() {
-  const { cycles, cycle, choose } = useViewedCycle();
+  const { cycles, cycle, choose, finding } = useViewedCycle();
   const live = useLiveCycle(cycle?.id);
   const ships = useShips();
   const ship = ships.data?.find((candidate) => candidate.id === cycle?.shipId);
@@ -148,7 +148,7 @@ export function DeckScreen() {
           <CyclePicker cycles={cycles.data} value={cycle?.id} onChange={choose} />
         )}
       </Flex>
-      {cycles.isPending || ships.isPending ? (
+      {finding || ships.isPending ? (
         <LoadingState label="Finding the current cycle…" />
       ) : cycles.isError ? (
         <ErrorState error={cycles.error} onRetry={() => void cycles.refetch()} />

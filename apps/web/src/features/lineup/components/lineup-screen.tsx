@@ -296,7 +296,7 @@ function LineupWorkspace({ snapshot }: { snapshot: LineupSnapshot }) {
 }
 
 export function LineupScreen() {
-  const { cycles, cycle, choose } = useViewedCycle();
+  const { cycles, cycle, choose, finding } = useViewedCycle();
   const live = useLiveCycle(cycle?.id);
   useCycleTheme((live.lineup.data?.cycle ?? cycle)?.night);
 
@@ -314,7 +314,7 @@ export function LineupScreen() {
           <CyclePicker cycles={cycles.data} value={cycle?.id} onChange={choose} />
         )}
       </Flex>
-      {cycles.isPending ? (
+      {finding ? (
         <LoadingState label="Finding the current cycle…" />
       ) : cycles.isError ? (
         <ErrorState error={cycles.error} onRetry={() => void cycles.refetch()} />

@@ -142,7 +142,7 @@ function MySlot({ snapshot, pilotId }: { snapshot: LineupSnapshot; pilotId: numb
 
 export function MyLaunchScreen() {
   const user = useSessionUser();
-  const { cycles, cycle, choose } = useViewedCycle();
+  const { cycles, cycle, choose, finding } = useViewedCycle();
   const live = useLiveCycle(cycle?.id);
   useCycleTheme((live.lineup.data?.cycle ?? cycle)?.night);
   return (
@@ -153,7 +153,7 @@ export function MyLaunchScreen() {
           <CyclePicker cycles={cycles.data} value={cycle?.id} onChange={choose} />
         )}
       </PageHeader>
-      {cycles.isPending ? (
+      {finding ? (
         <LoadingState label="Finding the current cycle…" />
       ) : cycles.isError ? (
         <ErrorState error={cycles.error} onRetry={() => void cycles.refetch()} />

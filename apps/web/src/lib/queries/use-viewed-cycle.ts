@@ -3,6 +3,7 @@ import { useQuery } from '@tanstack/react-query';
 import { useSearchParams } from 'react-router-dom';
 import type { CycleLanding } from '@catline/contracts';
 import { apiRequest } from '../api-client.js';
+import { useLiveCycleList } from '../live/use-live-cycle.js';
 import { cycleKeys, useCycles } from './cycles-query.js';
 
 /** Where the server lands this person when the address names no cycle (its rule: GET /cycles/landing). */
@@ -22,6 +23,7 @@ const useLanding = (enabled: boolean) =>
  */
 export function useViewedCycle() {
   const cycles = useCycles();
+  useLiveCycleList();
   const [params, setParams] = useSearchParams();
   const named = params.get('cycle');
   const landing = useLanding(named === null);

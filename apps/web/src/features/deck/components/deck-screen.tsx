@@ -11,6 +11,7 @@ import {
 import { CautionLine } from '../../../components/caution-line.js';
 import { ConnectionBadge } from '../../../components/connection-badge.js';
 import { CyclePicker } from '../../../components/cycle-picker.js';
+import { ClosedCycleNotice } from '../../../components/closed-cycle-notice.js';
 import { LiveFigures, useFiguresLive } from '../../../components/live-figures.js';
 import { EmptyState, ErrorState, LoadingState, QueryView } from '../../../components/query-states.js';
 import { NoticeBanner, refusalNotice, useNotice } from '../../../components/refusal-notice.js';
@@ -148,6 +149,7 @@ export function DeckScreen() {
           <CyclePicker cycles={cycles.data} value={cycle?.id} onChange={choose} />
         )}
       </Flex>
+      <ClosedCycleNotice cycle={live.lineup.data?.cycle ?? cycle} />
       {finding || ships.isPending ? (
         <LoadingState label="Finding the current cycle…" />
       ) : cycles.isError ? (

@@ -5,6 +5,7 @@ import { CautionLine } from '../../../components/caution-line.js';
 import { ConnectionBadge } from '../../../components/connection-badge.js';
 import { LiveFigures, useFiguresLive } from '../../../components/live-figures.js';
 import { CyclePicker } from '../../../components/cycle-picker.js';
+import { ClosedCycleNotice } from '../../../components/closed-cycle-notice.js';
 import { EmptyState, ErrorState, LoadingState, QueryView } from '../../../components/query-states.js';
 import { NoticeBanner, refusalNotice, useNotice } from '../../../components/refusal-notice.js';
 import { ApiRequestError, errorMessage } from '../../../lib/api-error.js';
@@ -314,6 +315,7 @@ export function LineupScreen() {
           <CyclePicker cycles={cycles.data} value={cycle?.id} onChange={choose} />
         )}
       </Flex>
+      <ClosedCycleNotice cycle={live.lineup.data?.cycle ?? cycle} />
       {finding ? (
         <LoadingState label="Finding the current cycle…" />
       ) : cycles.isError ? (

@@ -3,6 +3,7 @@ import type { LineupSnapshot } from '@catline/contracts';
 import { CautionLine } from '../../../components/caution-line.js';
 import { ConnectionBadge } from '../../../components/connection-badge.js';
 import { CyclePicker } from '../../../components/cycle-picker.js';
+import { ClosedCycleNotice } from '../../../components/closed-cycle-notice.js';
 import { FigureStat } from '../../../components/figure-stat.js';
 import { LiveFigures, useFiguresLive } from '../../../components/live-figures.js';
 import { PageHeader } from '../../../components/page-header.js';
@@ -153,6 +154,7 @@ export function MyLaunchScreen() {
           <CyclePicker cycles={cycles.data} value={cycle?.id} onChange={choose} />
         )}
       </PageHeader>
+      <ClosedCycleNotice cycle={live.lineup.data?.cycle ?? cycle} />
       {finding ? (
         <LoadingState label="Finding the current cycle…" />
       ) : cycles.isError ? (

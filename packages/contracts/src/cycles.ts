@@ -54,6 +54,15 @@ export interface CycleView extends CycleConditions {
   timeZone: string;
 }
 
+/**
+ * The cycle a person's screens open on when the address names none (GET /cycles/landing): a pilot's
+ * cycle holds their slot, a catapult crew's launches their catapult, everyone else's is the ship's
+ * launching cycle, else the next planned. Null when the ship has no cycle.
+ */
+export interface CycleLanding {
+  cycleId: number | null;
+}
+
 /** The wind reading is older than the ship allows: flagged on every station, a waivable launch gate. */
 export const isWindReadingStale = (cycle: Pick<CycleView, 'windStaleAt'>, now: Date): boolean =>
   now.getTime() >= Date.parse(cycle.windStaleAt);

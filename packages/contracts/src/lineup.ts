@@ -358,6 +358,25 @@ export const CLOSED_CYCLE_CHANGE_KINDS = ['respot_built', 'respot_tow_done'] as 
 export const closedCycleTakes = (kind: ChangeKind): boolean =>
   (CLOSED_CYCLE_CHANGE_KINDS as readonly ChangeKind[]).includes(kind);
 
+/**
+ * The changes that alter what a list of cycles shows (state, conditions, aircraft and launches counted):
+ * the server also sends their cycle to every socket of the ship ('cycle:status'). A launch is one, since
+ * the last launch closes its cycle.
+ */
+export const CYCLE_LIST_CHANGE_KINDS = [
+  'cycle_started',
+  'cycle_stopped',
+  'cycle_closed',
+  'conditions_changed',
+  'slot_added',
+  'air_plan_imported',
+  'slot_launched',
+] as const satisfies readonly ChangeKind[];
+
+/** Whether a change of this kind alters what a list of cycles shows (see CYCLE_LIST_CHANGE_KINDS). */
+export const changesCycleList = (kind: ChangeKind): boolean =>
+  (CYCLE_LIST_CHANGE_KINDS as readonly ChangeKind[]).includes(kind);
+
 /** What changed: replace these parts of the snapshot, by id. */
 export interface LineupPatch {
   cycle?: CycleView;

@@ -1,3 +1,4 @@
+import type { CycleView } from './cycles.js';
 import type { LineupChange, LineupSnapshot } from './lineup.js';
 import type { RefusalCode } from './refusals.js';
 
@@ -17,6 +18,11 @@ export type RefreshSocketResult = { ok: true; expiresAt: string } | { ok: false;
 /** Events the server emits. */
 export interface ServerToClientEvents {
   'lineup:change': (change: LineupChange) => void;
+  /**
+   * A cycle of the person's ship changed as a record (started, stopped, closed, conditions): sent to every
+   * socket of the ship, whether or not it follows the cycle, so lists and pickers of cycles keep up.
+   */
+  'cycle:status': (cycle: CycleView) => void;
   'session:expired': () => void;
 }
 

@@ -1,4 +1,4 @@
-import type { CycleView, LineupCommandResult, Page } from '@catline/contracts';
+import type { CycleLanding, CycleView, LineupCommandResult, Page } from '@catline/contracts';
 import { Body, Controller, Get, HttpCode, HttpStatus, Param, ParseIntPipe, Patch, Post, Query } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import type { Request } from 'express';
@@ -7,7 +7,7 @@ import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { Roles } from '../common/decorators/roles.decorator.js';
 import { ApiDoc } from '../common/openapi/api-doc.decorator.js';
 import { Created } from '../common/openapi/created.decorator.js';
-import { CyclePageDto, CycleViewDto } from '../common/openapi/views/cycles.view.js';
+import { CycleLandingDto, CyclePageDto, CycleViewDto } from '../common/openapi/views/cycles.view.js';
 import { RecordsPageQueryDto } from '../common/paging/page-query.dto.js';
 import { LineupCommandResultDto } from '../common/openapi/views/lineup.view.js';
 import { actorOf } from '../cycle-changes/cycle-change.service.js';
@@ -39,6 +39,19 @@ export class CyclesController {
   @Get()
   list(@CurrentUser() caller: AuthenticatedUser, @Query() query: RecordsPageQueryDto): Promise<Page<CycleView>> {
     return this.cycles.list(caller, query);
+  }
+
+  @ApiDoc('The cycle to open when none is named', {
+    response: CycleLandingDto,
+    description:
+      'A pilot: the cycle holding their slot, launching first, then the next planned. A catapult officer or ' +
+      'deck edge operator: the launching cycle, else the next planned one lining up on their catapult. Anyone ' +
+      'else: the launching cycle of their ship, else the next planned, else the latest.',
+  })
+  // Before ':cycleId', which would take 'landing' for an id.
+  @Get('landing')
+  landing(@CurrentUser() caller: AuthenticatedUser): Promise<CycleLanding> {
+    return this.cycles.landing(caller);
   }
 
   @ApiDoc('Read one cycle', { response: CycleViewDto, refuses: { 404: ['not_found'] } })

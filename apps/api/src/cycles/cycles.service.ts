@@ -1,10 +1,17 @@
-import { DEFAULT_SHIP_TIME_ZONE, type CycleView, type Page } from '@catline/contracts';
+import {
+  DEFAULT_SHIP_TIME_ZONE,
+  type CycleLanding,
+  type CycleState,
+  type CycleView,
+  type Page,
+} from '@catline/contracts';
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
-import { DataSource, In } from 'typeorm';
+import { DataSource, In, Not } from 'typeorm';
 import { AuditTrail } from '../audit/audit-trail.service.js';
 import { isDuplicateKey } from '../common/errors/database-errors.js';
 import { pageOf, type PageWindow } from '../common/paging/page-query.dto.js';
+import type { AuthenticatedUser } from '../common/authenticated-user.js';
 import { inShipScope, type ShipScope, shipWhere } from '../common/ship-scope.js';
 import { Slot } from '../database/entities/slot.entity.js';
 import { Ship } from '../database/entities/ship.entity.js';
@@ -13,6 +20,7 @@ import { toCycleView, type CycleCounts } from '../cycle-changes/cycle.mapper.js'
 import { checkWindow } from './cycle-window.js';
 import { nightOf } from './cycle-sky.js';
 import { CyclesException } from './cycles.exception.js';
+import { chooseLandingCycle } from './landing-cycle.js';
 import type { CreateCycleDto } from './dto/create-cycle.dto.js';
 import { Cycle } from '../database/entities/cycle.entity.js';
 
@@ -48,6 +56,32 @@ export class CyclesService {
     const cycle = await this.dataSource.manager.findOne(Cycle, { where: { id }, relations: { ship: true } });
     if (!cycle) throw new CyclesException('not_found', `Cycle ${id} does not exist.`);
     return toCycleView(cycle, cycle.ship.profile, (await this.counts([id])).get(id) ?? NO_SLOTS);
+  }
+
+  /** The cycle the caller's screens open on when the address names none (the rule: landing-cycle.ts). */
+  async landing(caller: AuthenticatedUser): Promise<CycleLanding> {
+    const cycles = await this.dataSource.manager.find(Cycle, {
+      select: { id: true, state: true, plannedLaunchAt: true },
+      where: shipWhere(caller),
+    });
+    const chosen = chooseLandingCycle(cycles, { role: caller.role, heldCycleIds: await this.heldCycleIds(caller) });
+    return { cycleId: chosen?.id ?? null };
+  }
+
+  /** The open cycles holding the caller's part: a pilot's slot, or an aircraft in the lane of their catapult. */
+  private async heldCycleIds(caller: AuthenticatedUser): Promise<Set<number>> {
+    const part =
+      caller.role === 'pilot'
+        ? { pilotId: caller.id }
+        : (caller.role === 'catapult_officer' || caller.role === 'deck_edge_operator') && caller.catapultId !== null
+          ? { catapultId: caller.catapultId }
+          : null;
+    if (!part) return new Set();
+    const slots = await this.dataSource.manager.find(Slot, {
+      select: { id: true, cycleId: true },
+      where: { ...part, cycle: { state: Not<CycleState>('closed'), ...shipWhere(caller) } },
+    });
+    return new Set(slots.map((slot) => slot.cycleId));
   }
 
   async create(scope: ShipScope, request: CreateCycleDto): Promise<CycleView> {

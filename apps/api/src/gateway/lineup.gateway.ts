@@ -1,4 +1,4 @@
-import { ROLES, type JoinCycleResult, type RefreshSocketResult } from '@catline/contracts';
+import { changesCycleList, ROLES, type JoinCycleResult, type RefreshSocketResult } from '@catline/contracts';
 import { Logger, type OnModuleDestroy, UseFilters, UseGuards, UsePipes, ValidationPipe } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import {
@@ -24,12 +24,13 @@ import { SocketExceptionFilter } from './socket-exception.filter.js';
 import { SocketRefusal } from './socket-refusal.js';
 import { SocketRolesGuard } from './socket-roles.guard.js';
 import { SocketSessions } from './socket-sessions.service.js';
-import { cycleRoom, type CatlineServer, type CatlineSocket } from './socket.types.js';
+import { cycleRoom, shipRoom, type CatlineServer, type CatlineSocket } from './socket.types.js';
 
 /**
  * The live lineup: one room per cycle. Clients only listen and join; every change arrives through
  * the REST commands and is broadcast here, after its commit, in version order. With REDIS_URL the
- * rooms span every API process: each process broadcasts the changes it committed, right away.
+ * rooms span every API process: each process broadcasts the changes it committed, right away. A change
+ * a list of cycles shows also sends the cycle to the rooms of its ship and of the fleet.
  */
 @WebSocketGateway({ serveClient: false })
 @UseGuards(SocketRolesGuard)
@@ -63,6 +64,9 @@ export class LineupGateway implements OnGatewayInit<CatlineServer>, OnModuleDest
         // before its sockets get it: a socket joining there meanwhile re-reads the log instead of missing it.
         if (clustered) server.serverSideEmit('lineup:committed', change.cycleId, change.version);
         server.to(cycleRoom(change.cycleId)).emit('lineup:change', change);
+        const cycle = change.patch.cycle;
+        if (cycle && changesCycleList(change.kind))
+          server.to([shipRoom(cycle.shipId), shipRoom(null)]).emit('cycle:status', cycle);
       }),
     );
     this.logger.log('Lineup socket ready');

@@ -1,7 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import type { EndedSessions } from '../auth/session-ends.service.js';
 import type { VerifiedSession } from '../auth/token-verifier.service.js';
-import { type CatlineServer, type CatlineSocket, personRoom, sessionRoom } from './socket.types.js';
+import { type CatlineServer, type CatlineSocket, personRoom, sessionRoom, shipRoom } from './socket.types.js';
 
 /**
  * A socket lives as long as the access token it was opened (or last refreshed) with: when the token
@@ -20,7 +20,7 @@ export class SocketSessions {
   renew(socket: CatlineSocket, session: VerifiedSession): void {
     const previous = socket.data.claims?.sid;
     if (previous !== undefined && previous !== session.claims.sid) void socket.leave(sessionRoom(previous));
-    void socket.join([personRoom(session.user.id), sessionRoom(session.claims.sid)]);
+    void socket.join([personRoom(session.user.id), sessionRoom(session.claims.sid), shipRoom(session.user.shipId)]);
     socket.data.user = session.user;
     socket.data.claims = session.claims;
     socket.data.expiresAt = session.expiresAt;

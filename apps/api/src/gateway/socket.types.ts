@@ -33,3 +33,5 @@ export const cycleRoom = (cycleId: number) => `cycle:${cycleId}`;
 /** Every socket is in its person's room and its session's room, so ending either disconnects it on every process. */
 export const personRoom = (personId: number) => `person:${personId}`;
 export const sessionRoom = (sessionId: string) => `session:${sessionId}`;
+/** Every socket is in its ship's room (a fleet admin's in the fleet's), where each cycle's status changes go. */
+export const shipRoom = (shipId: number | null) => (shipId === null ? 'fleet' : `ship:${shipId}`);

@@ -12,6 +12,7 @@ async function targetCycle(context: MatrixContext): Promise<number> {
 
 export const cyclesRoutes: MatrixRoute[] = [
   { method: 'GET', path: '/api/cycles', allowed: ROLES },
+  { method: 'GET', path: '/api/cycles/landing', allowed: ROLES },
   {
     method: 'GET',
     path: '/api/cycles/{cycleId}',

@@ -9,6 +9,7 @@ import type {
 } from '@catline/contracts';
 import { forgetSession, refreshSession, SESSION_ENDED_NOTICE } from '../api-client.js';
 import { queryClient } from '../query-client.js';
+import { cycleKeys } from '../queries/cycles-query.js';
 import { getAccessToken, onAccessTokenChange } from '../session-store.js';
 import type { ConnectionState } from './connection-state.js';
 import { lineupKeys } from './lineup-keys.js';
@@ -38,6 +39,8 @@ export interface LiveState {
 class LiveCycles {
   private socket: CatlineSocket | null = null;
   private readonly watchers = new Map<number, number>();
+  /** Screens showing a list of cycles (or a picker), which follow the ship's cycle statuses. */
+  private listFollowers = 0;
   private readonly joining = new Set<number>();
   private readonly resyncTimers = new Map<number, ReturnType<typeof setTimeout>>();
   private offlineTimer: ReturnType<typeof setTimeout> | undefined;
@@ -64,6 +67,17 @@ class LiveCycles {
     const socket = this.open();
     if (socket.connected) this.join(cycleId);
     return () => this.unwatch(cycleId);
+  }
+
+  /** Keeps the ship's cycles (lists, pickers, states) up with the live feed until the returned function is called. */
+  followCycleList(): () => void {
+    clearTimeout(this.lingerTimer);
+    this.listFollowers += 1;
+    this.open();
+    return () => {
+      this.listFollowers -= 1;
+      this.closeWhenIdle();
+    };
   }
 
   /** A change the server answered a command with: applied in order like any broadcast. */
@@ -94,7 +108,17 @@ class LiveCycles {
     this.sync.forget(cycleId);
     this.setCaughtUp(cycleId, false);
     if (this.socket?.connected) this.socket.emit('cycle:leave', { cycleId }, () => undefined);
-    if (this.watchers.size === 0) this.lingerTimer = setTimeout(() => this.close(), LINGER_MS);
+    this.closeWhenIdle();
+  }
+
+  private closeWhenIdle() {
+    if (this.watchers.size === 0 && this.listFollowers === 0)
+      this.lingerTimer = setTimeout(() => this.close(), LINGER_MS);
+  }
+
+  /** Every list of cycles is read again: a status may have changed (or been missed while the link was down). */
+  private refreshCycleLists() {
+    void queryClient.invalidateQueries({ queryKey: cycleKeys.all });
   }
 
   private open(): CatlineSocket {
@@ -112,6 +136,7 @@ class LiveCycles {
       clearTimeout(this.offlineTimer);
       this.setConnection({ kind: 'live' });
       for (const cycleId of this.watchers.keys()) this.join(cycleId);
+      if (this.listFollowers > 0) this.refreshCycleLists();
     });
     socket.on('disconnect', (reason) => {
       if (reason === 'io client disconnect') return;
@@ -124,6 +149,7 @@ class LiveCycles {
       if (!socket.active) this.retryWithFreshToken(socket);
     });
     socket.on('lineup:change', (change) => this.sync.ingest(change));
+    socket.on('cycle:status', () => this.refreshCycleLists());
     socket.on('session:expired', () => {
       void refreshSession().then((session) => {
         if (!session) forgetSession(SESSION_ENDED_NOTICE);

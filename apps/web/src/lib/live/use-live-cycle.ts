@@ -32,5 +32,10 @@ function freshness(caughtUp: boolean, connection: ConnectionState, dataUpdatedAt
   return { live: false, lastUpdate: 'since' in connection ? connection.since : new Date(dataUpdatedAt) };
 }
 
+/** Keeps the ship's lists of cycles and pickers up with the live feed while the screen shows one. */
+export function useLiveCycleList() {
+  useEffect(() => liveCycles.followCycleList(), []);
+}
+
 /** Hands a command's answer to the live feed so the sender sees its own change at once, in order. */
 export const receiveLineupChange = liveCycles.receive.bind(liveCycles);

@@ -8,6 +8,7 @@ export const cycleKeys = {
   list: () => ['cycles', 'list'] as const,
   pages: () => ['cycles', 'page'] as const,
   detail: (id: number) => ['cycles', 'detail', id] as const,
+  landing: () => ['cycles', 'landing'] as const,
 };
 
 /** Every cycle, newest first: the live screens pick theirs from these. */

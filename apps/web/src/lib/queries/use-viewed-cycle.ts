@@ -1,29 +1,55 @@
+import { useEffect } from 'react';
+import { useQuery } from '@tanstack/react-query';
 import { useSearchParams } from 'react-router-dom';
-import type { CycleView } from '@catline/contracts';
-import { useCycles } from './cycles-query.js';
+import type { CycleLanding } from '@catline/contracts';
+import { apiRequest } from '../api-client.js';
+import { useLiveCycleList } from '../live/use-live-cycle.js';
+import { cycleKeys, useCycles } from './cycles-query.js';
 
-/** The cycle to show when none is chosen: the one flying now, else the next planned, else the latest. */
-export function pickCurrentCycle(cycles: CycleView[]): CycleView | undefined {
-  const executing = cycles.find((cycle) => cycle.state === 'executing');
-  if (executing) return executing;
-  const planned = cycles
-    .filter((cycle) => cycle.state === 'planning')
-    .sort((a, b) => Date.parse(a.plannedLaunchAt) - Date.parse(b.plannedLaunchAt));
-  return planned[0] ?? cycles[0];
-}
+/** Where the server lands this person when the address names no cycle (its rule: GET /cycles/landing). */
+const useLanding = (enabled: boolean) =>
+  useQuery({
+    queryKey: cycleKeys.landing(),
+    queryFn: ({ signal }) => apiRequest<CycleLanding>('/cycles/landing', { signal }),
+    enabled,
+    staleTime: 0,
+    // A screen that cannot learn its cycle says so (the route's error page) rather than show none.
+    throwOnError: true,
+  });
 
-/** The cycle a live screen shows: `?cycle=<id>` when given, else the current one. */
+/**
+ * The cycle a live screen shows: `?cycle=<id>` when given, else the one the server lands this person on,
+ * which is then written into the address (replacing it), so a reload or a shared link keeps the cycle.
+ */
 export function useViewedCycle() {
   const cycles = useCycles();
+  useLiveCycleList();
   const [params, setParams] = useSearchParams();
-  const chosen = Number(params.get('cycle'));
-  const list = cycles.data ?? [];
-  const cycle = list.find((candidate) => candidate.id === chosen) ?? pickCurrentCycle(list);
+  const named = params.get('cycle');
+  const landing = useLanding(named === null);
+  const landedId = landing.data?.cycleId ?? null;
+
+  useEffect(() => {
+    if (named !== null || landedId === null) return;
+    setParams(
+      (current) => {
+        const next = new URLSearchParams(current);
+        next.set('cycle', String(landedId));
+        return next;
+      },
+      { replace: true },
+    );
+  }, [named, landedId, setParams]);
+
+  const chosenId = named === null ? landedId : Number(named);
+  const cycle = cycles.data?.find((candidate) => candidate.id === chosenId);
   const choose = (cycleId: number) =>
     setParams((current) => {
       const next = new URLSearchParams(current);
       next.set('cycle', String(cycleId));
       return next;
     });
-  return { cycles, cycle, choose };
+  // Until the server has said where to land, the screen is still finding its cycle, not without one.
+  const finding = cycles.isPending || (named === null && landing.isPending);
+  return { cycles, cycle, choose, finding };
 }

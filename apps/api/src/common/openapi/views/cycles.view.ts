@@ -1,5 +1,6 @@
 import {
   CYCLE_STATES,
+  type CycleLanding,
   type CycleState,
   type CycleView,
   LANDING_AREA_STATES,
@@ -109,3 +110,9 @@ export class CycleViewDto implements CycleView {
 }
 
 export const CyclePageDto = PageDto(CycleViewDto, 'Cycle', 'One page of the cycles, newest planned launch first.');
+
+@ApiSchema({ name: 'CycleLanding' })
+export class CycleLandingDto implements CycleLanding {
+  @IdProperty({ nullable: true, description: 'The cycle to open; null when the ship has no cycle.' })
+  cycleId: number | null;
+}

@@ -4,6 +4,7 @@ import { CautionLine } from '../../../components/caution-line.js';
 import { ConnectionBadge } from '../../../components/connection-badge.js';
 import { LiveFigures } from '../../../components/live-figures.js';
 import { CyclePicker } from '../../../components/cycle-picker.js';
+import { ClosedCycleNotice } from '../../../components/closed-cycle-notice.js';
 import { PageHeader } from '../../../components/page-header.js';
 import { EmptyState, ErrorState, LoadingState, QueryView } from '../../../components/query-states.js';
 import { NoticeBanner, refusalNotice, useNotice } from '../../../components/refusal-notice.js';
@@ -220,7 +221,7 @@ function Station({ snapshot, catapultId }: { snapshot: LineupSnapshot; catapultI
 
 export function CatStationScreen() {
   const user = useSessionUser();
-  const { cycles, cycle, choose } = useViewedCycle();
+  const { cycles, cycle, choose, finding } = useViewedCycle();
   const live = useLiveCycle(cycle?.id);
   const snapshot = live.lineup.data;
   useCycleTheme((snapshot?.cycle ?? cycle)?.night);
@@ -237,11 +238,12 @@ export function CatStationScreen() {
           <CyclePicker cycles={cycles.data} value={cycle?.id} onChange={choose} />
         )}
       </PageHeader>
+      <ClosedCycleNotice cycle={snapshot?.cycle ?? cycle} />
       {user.catapultId === null ? (
         <EmptyState title="No catapult assigned to you">
           The admin assigns each catapult officer a catapult under People.
         </EmptyState>
-      ) : cycles.isPending ? (
+      ) : finding ? (
         <LoadingState label="Finding the current cycle…" />
       ) : cycles.isError ? (
         <ErrorState error={cycles.error} onRetry={() => void cycles.refetch()} />

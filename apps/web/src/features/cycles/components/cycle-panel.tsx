@@ -2,6 +2,7 @@ import { Badge, Button, Flex, Heading, HStack, Stack, Text } from '@chakra-ui/re
 import { Link as RouterLink } from 'react-router-dom';
 import type { CycleView } from '@catline/contracts';
 import { CautionLine } from '../../../components/caution-line.js';
+import { ClosedCycleNotice } from '../../../components/closed-cycle-notice.js';
 import { NoticeBanner, refusalNotice, useNotice } from '../../../components/refusal-notice.js';
 import { RoleGate } from '../../../components/role-gate.js';
 import { errorMessage } from '../../../lib/api-error.js';
@@ -32,6 +33,7 @@ export function CyclePanel({ cycle }: { cycle: CycleView }) {
       aria-label={`Cycle ${cycle.number}`}
       data-testid="cycle-panel"
     >
+      <ClosedCycleNotice cycle={cycle} />
       <Flex gap="3" align="center" wrap="wrap" justify="space-between">
         <HStack gap="3">
           <Heading as="h2" size="lg">

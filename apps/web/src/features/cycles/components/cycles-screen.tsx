@@ -7,6 +7,7 @@ import { Pager } from '../../../components/pager.js';
 import { QueryView } from '../../../components/query-states.js';
 import { RoleGate } from '../../../components/role-gate.js';
 import { errorMessage } from '../../../lib/api-error.js';
+import { useLiveCycleList } from '../../../lib/live/use-live-cycle.js';
 import { formatDateTime, formatShortClock } from '../../../lib/format.js';
 import { useCycles, useCyclesPage } from '../../../lib/queries/cycles-query.js';
 import { useShips } from '../../../lib/queries/ships-query.js';
@@ -55,6 +56,7 @@ function NewCycle({ onCreated, onCancel }: { onCreated: (cycle: CycleView) => vo
 export function CyclesScreen() {
   const [offset, setOffset] = useState(0);
   const cycles = useCyclesPage(offset);
+  useLiveCycleList();
   const [creating, setCreating] = useState(false);
   const [selectedId, setSelectedId] = useState<number | null>(null);
 

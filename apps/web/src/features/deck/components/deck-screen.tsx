@@ -11,6 +11,7 @@ import {
 import { CautionLine } from '../../../components/caution-line.js';
 import { ConnectionBadge } from '../../../components/connection-badge.js';
 import { CyclePicker } from '../../../components/cycle-picker.js';
+import { ClosedCycleNotice } from '../../../components/closed-cycle-notice.js';
 import { LiveFigures, useFiguresLive } from '../../../components/live-figures.js';
 import { EmptyState, ErrorState, LoadingState, QueryView } from '../../../components/query-states.js';
 import { NoticeBanner, refusalNotice, useNotice } from '../../../components/refusal-notice.js';
@@ -130,7 +131,7 @@ function DeckWorkspace({ snapshot, ship }: { snapshot: LineupSnapshot; ship: Shi
 
 /** The deck: every aircraft of the cycle on its position, the landing area, and the handler's tows. */
 export function DeckScreen() {
-  const { cycles, cycle, choose } = useViewedCycle();
+  const { cycles, cycle, choose, finding } = useViewedCycle();
   const live = useLiveCycle(cycle?.id);
   const ships = useShips();
   const ship = ships.data?.find((candidate) => candidate.id === cycle?.shipId);
@@ -148,7 +149,8 @@ export function DeckScreen() {
           <CyclePicker cycles={cycles.data} value={cycle?.id} onChange={choose} />
         )}
       </Flex>
-      {cycles.isPending || ships.isPending ? (
+      <ClosedCycleNotice cycle={live.lineup.data?.cycle ?? cycle} />
+      {finding || ships.isPending ? (
         <LoadingState label="Finding the current cycle…" />
       ) : cycles.isError ? (
         <ErrorState error={cycles.error} onRetry={() => void cycles.refetch()} />

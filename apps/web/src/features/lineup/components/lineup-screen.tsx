@@ -5,6 +5,7 @@ import { CautionLine } from '../../../components/caution-line.js';
 import { ConnectionBadge } from '../../../components/connection-badge.js';
 import { LiveFigures, useFiguresLive } from '../../../components/live-figures.js';
 import { CyclePicker } from '../../../components/cycle-picker.js';
+import { ClosedCycleNotice } from '../../../components/closed-cycle-notice.js';
 import { EmptyState, ErrorState, LoadingState, QueryView } from '../../../components/query-states.js';
 import { NoticeBanner, refusalNotice, useNotice } from '../../../components/refusal-notice.js';
 import { ApiRequestError, errorMessage } from '../../../lib/api-error.js';
@@ -303,7 +304,7 @@ function LineupWorkspace({ snapshot }: { snapshot: LineupSnapshot }) {
 }
 
 export function LineupScreen() {
-  const { cycles, cycle, choose } = useViewedCycle();
+  const { cycles, cycle, choose, finding } = useViewedCycle();
   const live = useLiveCycle(cycle?.id);
   useCycleTheme((live.lineup.data?.cycle ?? cycle)?.night);
 
@@ -321,7 +322,8 @@ export function LineupScreen() {
           <CyclePicker cycles={cycles.data} value={cycle?.id} onChange={choose} />
         )}
       </Flex>
-      {cycles.isPending ? (
+      <ClosedCycleNotice cycle={live.lineup.data?.cycle ?? cycle} />
+      {finding ? (
         <LoadingState label="Finding the current cycle…" />
       ) : cycles.isError ? (
         <ErrorState error={cycles.error} onRetry={() => void cycles.refetch()} />

@@ -3,6 +3,7 @@ import type { LineupSnapshot } from '@catline/contracts';
 import { CautionLine } from '../../../components/caution-line.js';
 import { ConnectionBadge } from '../../../components/connection-badge.js';
 import { CyclePicker } from '../../../components/cycle-picker.js';
+import { ClosedCycleNotice } from '../../../components/closed-cycle-notice.js';
 import { FigureStat } from '../../../components/figure-stat.js';
 import { LiveFigures, useFiguresLive } from '../../../components/live-figures.js';
 import { PageHeader } from '../../../components/page-header.js';
@@ -142,7 +143,7 @@ function MySlot({ snapshot, pilotId }: { snapshot: LineupSnapshot; pilotId: numb
 
 export function MyLaunchScreen() {
   const user = useSessionUser();
-  const { cycles, cycle, choose } = useViewedCycle();
+  const { cycles, cycle, choose, finding } = useViewedCycle();
   const live = useLiveCycle(cycle?.id);
   useCycleTheme((live.lineup.data?.cycle ?? cycle)?.night);
   return (
@@ -153,7 +154,8 @@ export function MyLaunchScreen() {
           <CyclePicker cycles={cycles.data} value={cycle?.id} onChange={choose} />
         )}
       </PageHeader>
-      {cycles.isPending ? (
+      <ClosedCycleNotice cycle={live.lineup.data?.cycle ?? cycle} />
+      {finding ? (
         <LoadingState label="Finding the current cycle…" />
       ) : cycles.isError ? (
         <ErrorState error={cycles.error} onRetry={() => void cycles.refetch()} />

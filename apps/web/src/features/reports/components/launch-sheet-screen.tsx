@@ -11,7 +11,7 @@ import {
 import { CautionLine } from '../../../components/caution-line.js';
 import { CyclePicker } from '../../../components/cycle-picker.js';
 import { GoBadge } from '../../../components/go-badge.js';
-import { EmptyState, QueryView } from '../../../components/query-states.js';
+import { EmptyState, LoadingState, QueryView } from '../../../components/query-states.js';
 import {
   formatClock,
   formatDegrees,
@@ -230,7 +230,7 @@ function SheetForCycle({ cycle }: { cycle: CycleView }) {
 
 /** The planned lineup per catapult with each aircraft's launch figures, laid out to print on A4 or US Letter. */
 export function LaunchSheetScreen() {
-  const { cycles, cycle, choose } = useViewedCycle();
+  const { cycles, cycle, choose, finding } = useViewedCycle();
   return (
     <Stack gap="3">
       <Global styles={printStyles} />
@@ -252,6 +252,8 @@ export function LaunchSheetScreen() {
       <Box>
         {cycle ? (
           <SheetForCycle key={cycle.id} cycle={cycle} />
+        ) : finding ? (
+          <LoadingState label="Finding the current cycle…" />
         ) : (
           <EmptyState title="No cycles yet">A launch sheet needs a cycle with a lineup.</EmptyState>
         )}

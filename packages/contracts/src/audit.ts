@@ -17,6 +17,7 @@ export const AUDIT_ACTIONS = [
   'aircraft_type.deleted',
   'launch_table.replaced',
   'stores_catalogue.replaced',
+  'setting_tables.replaced',
   'cycle.created',
 ] as const;
 export type AuditAction = (typeof AUDIT_ACTIONS)[number];

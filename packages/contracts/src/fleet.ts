@@ -111,6 +111,34 @@ export interface LaunchTableRow {
   minLaunchAirspeedKt: number;
 }
 
+/** Which approved setting table a launch reads: an aircraft carrying no stores launches clean. */
+export const LAUNCH_CONFIGURATIONS = ['clean', 'stores'] as const;
+export type LaunchConfiguration = (typeof LAUNCH_CONFIGURATIONS)[number];
+
+/** Every gross weight up to `upToLb` (inclusive) takes `setting`. */
+export interface SettingTableRow {
+  upToLb: number;
+  setting: number;
+}
+
+/**
+ * The ship's approved catapult settings for the type on one catapult in one configuration: the
+ * setting the Cat station shows, which Catline's energy model only cross-checks.
+ */
+export interface SettingTable {
+  catapultNumber: number;
+  configuration: LaunchConfiguration;
+  /** The excess wind over deck the launch data recommends, knots. */
+  recommendedExcessKt: number;
+  /** By strictly rising weight; a heavier weight than the last row has no approved setting. */
+  rows: SettingTableRow[];
+}
+
+/** PUT /aircraft-types/:id/setting-tables: every table of the type, replacing those held. */
+export interface ReplaceSettingTablesRequest {
+  tables: SettingTable[];
+}
+
 /** An item of a type's stores catalogue: what the launch data says one of it weighs. */
 export interface StoresItem {
   /** Unique within the type's catalogue (letter case aside). */
@@ -139,6 +167,8 @@ export interface AircraftTypeView {
   launchTable: LaunchTableRow[];
   /** What an aircraft of the type can carry, ordered by name. */
   storesCatalogue: StoresItem[];
+  /** Ordered by catapult number, then configuration. */
+  settingTables: SettingTable[];
 }
 
 /** PUT /aircraft-types/:id/stores-catalogue: the whole catalogue, replacing the one held. */

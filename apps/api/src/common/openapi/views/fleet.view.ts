@@ -15,6 +15,10 @@ import {
   type ShipView,
   type SquadronView,
   type StoresItem,
+  LAUNCH_CONFIGURATIONS,
+  type LaunchConfiguration,
+  type SettingTable,
+  type SettingTableRow,
   type TrimBand,
   type UserView,
 } from '@catline/contracts';
@@ -235,6 +239,30 @@ export class StoresItemDto implements StoresItem {
   weightEachLb: number;
 }
 
+@ApiSchema({ name: 'SettingTableRow' })
+export class SettingTableRowDto implements SettingTableRow {
+  @IntProperty({ minimum: 1, description: 'Upper gross-weight bound of the row, pounds (inclusive).' })
+  upToLb: number;
+
+  @IntProperty({ minimum: 0 })
+  setting: number;
+}
+
+@ApiSchema({ name: 'SettingTable' })
+export class SettingTableDto implements SettingTable {
+  @IntProperty({ minimum: 1 })
+  catapultNumber: number;
+
+  @EnumProperty(LAUNCH_CONFIGURATIONS, 'LaunchConfiguration')
+  configuration: LaunchConfiguration;
+
+  @ApiProperty({ description: 'Knots.' })
+  recommendedExcessKt: number;
+
+  @ApiProperty({ type: [SettingTableRowDto], description: 'By strictly rising weight.' })
+  rows: SettingTableRow[];
+}
+
 @ApiSchema({ name: 'AircraftTypeView' })
 export class AircraftTypeViewDto implements AircraftTypeView {
   @IdProperty()
@@ -283,6 +311,12 @@ export class AircraftTypeViewDto implements AircraftTypeView {
 
   @ApiProperty({ type: [StoresItemDto], description: 'Ordered by name.' })
   storesCatalogue: StoresItem[];
+
+  @ApiProperty({
+    type: [SettingTableDto],
+    description: 'The approved catapult settings; by catapult, then configuration.',
+  })
+  settingTables: SettingTable[];
 }
 
 @ApiSchema({ name: 'AircraftView' })

@@ -71,12 +71,23 @@ export interface ShipProfile {
   readinessSteps?: ReadinessStep[];
   /** How old a wind reading may be before every station flags it stale, minutes; left out, 30. */
   windReadingMaxAgeMin?: number;
+  /**
+   * How many settings the energy model's estimate may differ from the approved setting before the Cat
+   * station flags the difference; left out, DEFAULT_SETTING_CROSS_CHECK_TOLERANCE.
+   */
+  settingCrossCheckTolerance?: number;
   /** The time zone the ship keeps, an IANA name ("Pacific/Guam"); every time is shown in it. Left out, UTC. */
   timeZone?: string;
 }
 
 /** A wind reading is stale this long after it was taken unless the ship profile says otherwise, minutes. */
 export const DEFAULT_WIND_READING_MAX_AGE_MIN = 30;
+
+/**
+ * Settings the energy model's estimate may differ from the approved setting unflagged unless the ship
+ * profile says otherwise: two steps, room for the model's rounding and a hot or cold day (our own choice).
+ */
+export const DEFAULT_SETTING_CROSS_CHECK_TOLERANCE = 2;
 
 /** The zone times are shown in unless the ship profile names one. */
 export const DEFAULT_SHIP_TIME_ZONE = 'UTC';

@@ -39,7 +39,7 @@ export const goodConditions = {
   night: false,
 } as const;
 
-type Method = 'get' | 'post' | 'patch';
+type Method = 'get' | 'post' | 'patch' | 'put';
 
 /** Drives the API as the demo people do, for specs that need a cycle of their own. */
 export class LineupDriver {

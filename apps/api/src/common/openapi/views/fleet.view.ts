@@ -166,6 +166,12 @@ export class ShipProfileDto implements ShipProfile {
   @ApiPropertyOptional({ type: 'integer', description: 'Minutes a wind reading stays fresh; left out, 30.' })
   windReadingMaxAgeMin?: number;
 
+  @ApiPropertyOptional({
+    type: 'integer',
+    description: 'Settings the energy model may differ from the approved setting before it is flagged; left out, 2.',
+  })
+  settingCrossCheckTolerance?: number;
+
   @ApiPropertyOptional({ description: 'The ship’s time zone, an IANA name; left out, UTC.' })
   timeZone?: string;
 }

@@ -180,12 +180,12 @@ describe('launch figures', () => {
     expect(figures.reasons).toEqual([{ code: 'crosswind_over_limit', crosswind: 16, side: 'port', limit: 15 }]);
   });
 
-  // An invented approved table: the jet's 52,029 lb falls in the 55,000 lb row, setting 2, 8 kt recommended excess.
+  // An invented approved table: the jet's 52,029 lb falls in the 55,000 lb row, setting 1, 8 kt recommended excess.
   const approvedTable: ApprovedSettingTable = {
     recommendedExcess: knots(8),
     rows: [
-      { upToWeight: pounds(45000), setting: 1 },
-      { upToWeight: pounds(55000), setting: 2 },
+      { upToWeight: pounds(45000), setting: 0 },
+      { upToWeight: pounds(55000), setting: 1 },
     ],
   };
 
@@ -197,15 +197,17 @@ describe('launch figures', () => {
       conditions: open(),
       approved: { table: approvedTable, crossCheckTolerance: 1 },
     });
-    expect(figures.setting).toEqual({ setting: 2, source: 'approved_data' });
+    expect(figures.setting).toEqual({ setting: 1, source: 'approved_data' });
     expect(figures.recommendedExcess).toBe(8); // the table's, not the type's 5 kt
     expect(figures.requiredAirspeed).toBe(148); // 140 + 8
     expect(figures.wantedEndSpeed).toBe(123); // 148 - 25 kt headwind
-    expect(figures.endSpeed).toBeCloseTo(165.2, 1); // setting 2, by hand above (textbook: 85 m/s)
-    expect(figures.requiredWindOverDeck).toBeCloseTo(-17.2, 1); // 148 - 165.20
-    expect(figures.excessWindOverDeck).toBeCloseTo(50.2, 1); // 25 - (140 - 165.20)
-    // The model's lowest setting for 123 kt is 1 (123.24 kt by hand above): one step off, inside a tolerance of 1.
-    expect(figures.crossCheck).toEqual({ setting: 1, flagged: false });
+    expect(figures.endSpeed).toBeCloseTo(123.24, 2); // setting 1, by hand above
+    expect(figures.requiredWindOverDeck).toBeCloseTo(24.76, 2); // 148 - 123.24
+    expect(figures.margin).toBeCloseTo(0.24, 2); // 25 - 24.76
+    expect(figures.excessWindOverDeck).toBeCloseTo(8.24, 2); // 25 - (140 - 123.24)
+    // With no wind the model needs 148 kt from the catapult: setting 2 (165.20 kt by hand above), one step
+    // off the approved setting, inside a tolerance of 1.
+    expect(figures.crossCheck).toEqual({ setting: 2, flagged: false });
     expect(figures.go).toBe(true);
   });
 
@@ -217,7 +219,7 @@ describe('launch figures', () => {
       conditions: open(),
       approved: { table: approvedTable, crossCheckTolerance: 0 },
     });
-    expect(figures.crossCheck).toEqual({ setting: 1, flagged: true }); // 2 - 1 = 1 step, over a tolerance of 0
+    expect(figures.crossCheck).toEqual({ setting: 2, flagged: true }); // 2 - 1 = 1 step, over a tolerance of 0
     expect(figures.go).toBe(true); // a warning only: the approved data governs the shot
   });
 
@@ -227,11 +229,12 @@ describe('launch figures', () => {
       catapult: textbookCatapult,
       grossWeight,
       conditions: open({ wind: wind(-10), densityRatio: 0.81 }),
-      approved: { table: approvedTable, crossCheckTolerance: 2 },
+      approved: { table: { ...approvedTable, recommendedExcess: knots(10) }, crossCheckTolerance: 2 },
     });
-    expect(figures.setting).toEqual({ setting: 2, source: 'approved_data' });
+    expect(figures.setting).toEqual({ setting: 1, source: 'approved_data' });
+    // 140 / 0.9 + 10 = 165.56 kt required, past the highest setting's 165.20 kt (by hand above).
     expect(figures.crossCheck).toEqual({ setting: null, flagged: true });
-    // 155.56 + 8 + 10 kt tailwind = 173.56 kt wanted; 165.20 kt at setting 2 leaves the margin below zero.
+    // At setting 1's 123.24 kt with 10 kt of tailwind the margin is below zero; no out-of-range reason.
     expect(figures.reasons.map((reason) => reason.code)).toEqual(['margin_negative']);
   });
 

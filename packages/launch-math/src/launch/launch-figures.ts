@@ -90,7 +90,10 @@ export interface ApprovedLaunchData {
 
 /** Catline's own estimate held against the approved setting. */
 export interface SettingCrossCheck {
-  /** The energy model's lowest setting reaching the end speed wanted; null when none reaches it. */
+  /**
+   * The energy model's lowest setting reaching the required airspeed with no wind over the deck (the
+   * approved setting is by weight alone); null when none reaches it.
+   */
   readonly setting: number | null;
   /** True when the estimate is off by more than the tolerance, or reaches no setting at all. */
   readonly flagged: boolean;
@@ -150,8 +153,8 @@ export interface LaunchFigures {
 /**
  * One aircraft's launch figures on one catapult and whether it may launch. The wanted end speed is the
  * required airspeed less the headwind. With approved data, its setting's end speed is what the wind over
- * deck and the margin are judged on, and the lowest setting reaching the wanted end speed is the
- * cross-check; without, that lowest setting is the setting (the highest setting's end speed when none
+ * deck and the margin are judged on, and the lowest setting reaching the required airspeed with no
+ * wind is the cross-check; without, the lowest setting reaching the wanted end speed is the setting (the highest setting's end speed when none
  * reaches it).
  */
 export function launchFigures(input: LaunchFiguresInput): LaunchFigures {
@@ -166,15 +169,21 @@ export function launchFigures(input: LaunchFiguresInput): LaunchFigures {
   const wantedEndSpeed = requiredAirspeed === null ? null : knots(Math.max(0, requiredAirspeed - wind.headwind));
   const search =
     wantedEndSpeed === null ? null : lowestLaunchSetting({ aircraft, catapult, grossWeight, wanted: wantedEndSpeed });
-  const estimate = search?.kind === 'setting' ? search.setting : null;
+  // An approved table gives a setting by weight alone, wind aside; its cross-check is the model's setting
+  // for the required airspeed from the catapult alone, so the two compare like with like.
+  const check =
+    approved && requiredAirspeed !== null
+      ? lowestLaunchSetting({ aircraft, catapult, grossWeight, wanted: requiredAirspeed })
+      : null;
+  const estimate = check?.kind === 'setting' ? check.setting : null;
   const lookup = approved?.table ? approvedSetting(approved.table, grossWeight) : null;
   const setting: LaunchSetting | null = approved
     ? lookup?.kind === 'setting'
       ? { setting: lookup.setting, source: 'approved_data' }
       : null
-    : estimate === null
-      ? null
-      : { setting: estimate, source: 'energy_model' };
+    : search?.kind === 'setting'
+      ? { setting: search.setting, source: 'energy_model' }
+      : null;
   const endSpeed =
     setting?.source === 'energy_model' && search?.kind === 'setting'
       ? search.endSpeed

@@ -29,7 +29,7 @@ describe('aircraft types', () => {
     const body = aircraftTypeBody();
     const created = await request(url).post('/api/aircraft-types').set(bearer(admin)).send(body);
     expect(created.status).toBe(201);
-    expect(created.body).toEqual({ id: expect.any(Number), ...body, storesCatalogue: [] });
+    expect(created.body).toEqual({ id: expect.any(Number), ...body, storesCatalogue: [], settingTables: [] });
     expect((await get(created.body.id)).body).toEqual(created.body);
   });
 
@@ -166,6 +166,66 @@ describe('aircraft types', () => {
   ])('refuses a stores catalogue with %s and keeps the old one', async (_case, items, message) => {
     const type = await createAircraftType(url, admin);
     const response = await putStores(type.id, items);
+    expect(response.status).toBe(400);
+    expect(response.body.message).toMatch(message);
+    expect((await get(type.id)).body).toEqual(type);
+  });
+
+  const putSettings = (id: number, tables: unknown) =>
+    request(url).put(`/api/aircraft-types/${id}/setting-tables`).set(bearer(admin)).send({ tables });
+  const settingTable = (catapultNumber: number, configuration: string, rows = [{ upToLb: 30_000, setting: 5 }]) => ({
+    catapultNumber,
+    configuration,
+    recommendedExcessKt: 12,
+    rows,
+  });
+
+  it('replaces the approved setting tables, keeps them by catapult then configuration, and audits it', async () => {
+    const type = await createAircraftType(url, admin);
+    const tables = [
+      settingTable(2, 'stores'),
+      settingTable(1, 'stores'),
+      settingTable(1, 'clean', [
+        { upToLb: 30_000, setting: 4 },
+        { upToLb: 36_000, setting: 9 },
+      ]),
+    ];
+    const response = await putSettings(type.id, tables);
+    expect(response.status).toBe(200);
+    expect(response.body).toEqual({ ...type, settingTables: [tables[2], tables[1], tables[0]] });
+    expect((await get(type.id)).body.settingTables).toEqual([tables[2], tables[1], tables[0]]);
+    const audit = await request(url).get('/api/audit').query({ action: 'setting_tables.replaced' }).set(bearer(admin));
+    expect(audit.body.items[0]).toMatchObject({
+      subjectId: type.id,
+      summary: `Approved setting tables of ${type.designation} replaced (3 tables)`,
+    });
+  });
+
+  it.each([
+    ['a catapult the ship lacks', [settingTable(9, 'clean')], /has no cat 9/],
+    [
+      'a table given twice',
+      [settingTable(1, 'clean'), settingTable(1, 'clean')],
+      /clean table of cat 1 is given twice/,
+    ],
+    [
+      'weights that do not rise',
+      [
+        settingTable(1, 'clean', [
+          { upToLb: 30_000, setting: 4 },
+          { upToLb: 30_000, setting: 5 },
+        ]),
+      ],
+      /row 2 \(up to 30000 lb\) must end above row 1/,
+    ],
+    // The demo ship's catapults have 40 settings, 0 to 39.
+    ['a setting the catapult lacks', [settingTable(1, 'clean', [{ upToLb: 30_000, setting: 40 }])], /goes up to 39/],
+    ['a fractional setting', [settingTable(1, 'clean', [{ upToLb: 30_000, setting: 4.5 }])], /whole number/],
+    ['an unknown configuration', [settingTable(1, 'ferry')], /configuration is one of clean, stores/],
+    ['no rows', [settingTable(1, 'clean', [])], /at least one row/],
+  ])('refuses setting tables with %s and keeps the old ones', async (_case, tables, message) => {
+    const type = await createAircraftType(url, admin);
+    const response = await putSettings(type.id, tables);
     expect(response.status).toBe(400);
     expect(response.body.message).toMatch(message);
     expect((await get(type.id)).body).toEqual(type);

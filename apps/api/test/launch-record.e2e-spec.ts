@@ -45,7 +45,8 @@ describe('the launch record', () => {
       crosswindKt: ready.figures!.crosswindKt,
       endSpeedKt: ready.figures!.endSpeedKt,
       excessWindKt: ready.figures!.marginKt,
-      crossCheckSetting: ready.figures!.catapultSetting,
+      launchDataSetting: ready.figures!.catapultSetting,
+      crossCheckSetting: ready.figures!.crossCheckSetting,
       trimDeg: ready.trimDeg,
       afterburnerRequired: ready.afterburnerRequired,
       go: true,
@@ -131,6 +132,6 @@ describe('the launch record', () => {
     );
     // The driver hands JSON columns back parsed.
     const rebuilt = typeof row.launch_record === 'string' ? JSON.parse(row.launch_record) : row.launch_record;
-    expect(rebuilt).toEqual({ ...launched.launchRecord!, source: 'rebuilt', launchDataSetting: null });
+    expect(rebuilt).toEqual({ ...launched.launchRecord!, source: 'rebuilt' });
   });
 });

@@ -22,7 +22,7 @@ import {
   type AircraftProfile,
 } from '@catline/launch-math';
 import type { INestApplication } from '@nestjs/common';
-import { applyLineupChanges, isLandingAreaInUse } from '@catline/contracts';
+import { applyLineupChanges, DEFAULT_SETTING_CROSS_CHECK_TOLERANCE, isLandingAreaInUse } from '@catline/contracts';
 import { LineupDriver, OBSERVER } from './support/lineup-fixtures.js';
 import { readChangeLog } from './support/change-log.js';
 import { startTestApp } from './support/test-app.js';
@@ -105,8 +105,13 @@ describe('lineup snapshot of the demo cycles', () => {
       ]);
       for (const slotId of lane.slotIds) {
         const slot = snapshot.slots.find((candidate) => candidate.id === slotId)!;
-        const profile = profileOf(types.find((type) => type.id === slot.typeId)!);
+        const type = types.find((candidate) => candidate.id === slot.typeId)!;
+        const profile = profileOf(type);
         const weight = pounds(slot.grossWeightLb);
+        const configuration = slot.stores.trim() === '' ? 'clean' : 'stores';
+        const table = type.settingTables.find(
+          (candidate) => candidate.catapultNumber === catapult.number && candidate.configuration === configuration,
+        )!;
         const figures = launchFigures({
           aircraft: profile,
           catapult: {
@@ -117,12 +122,21 @@ describe('lineup snapshot of the demo cycles', () => {
           },
           grossWeight: weight,
           conditions: { wind, densityRatio: sigma, closedReason: null },
+          approved: {
+            table: {
+              recommendedExcess: knots(table.recommendedExcessKt),
+              rows: table.rows.map((row) => ({ upToWeight: pounds(row.upToLb), setting: row.setting })),
+            },
+            crossCheckTolerance: DEFAULT_SETTING_CROSS_CHECK_TOLERANCE,
+          },
         });
         expect(slot.figures).toEqual({
           headwindKt: wind.headwind,
           crosswindKt: wind.crosswind,
           crosswindSide: wind.side,
           catapultSetting: figures.setting?.setting ?? null,
+          crossCheckSetting: figures.crossCheck?.setting ?? null,
+          crossCheckFlagged: figures.crossCheck?.flagged ?? null,
           endSpeedKt: figures.endSpeed,
           requiredAirspeedKt: figures.requiredAirspeed,
           requiredWindOverDeckKt: figures.requiredWindOverDeck,

@@ -18,6 +18,7 @@ export const AUDIT_ACTIONS = [
   'launch_table.replaced',
   'stores_catalogue.replaced',
   'deck_layout.replaced',
+  'setting_tables.replaced',
   'cycle.created',
 ] as const;
 export type AuditAction = (typeof AUDIT_ACTIONS)[number];

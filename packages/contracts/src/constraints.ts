@@ -39,6 +39,10 @@ export const STORES_CATALOGUE_MAX_ITEMS = 40;
 export const STORES_ITEM_NAME_MAX_LENGTH = 60;
 export const STORES_ITEM_WEIGHT_LB: Range = { min: 1, max: 20_000 };
 /** A slot's stores list: lines, and how many of one item a line loads. */
+/** Tables per type: a few catapults times the configurations; rows per table. */
+export const SETTING_TABLES_MAX = 24;
+export const SETTING_TABLE_ROWS_MAX = 60;
+
 export const STORES_LINES_MAX = 20;
 export const STORES_COUNT: Range = { min: 1, max: 99 };
 

@@ -79,12 +79,23 @@ export interface ShipProfile {
   readinessSteps?: ReadinessStep[];
   /** How old a wind reading may be before every station flags it stale, minutes; left out, 30. */
   windReadingMaxAgeMin?: number;
+  /**
+   * How many settings the energy model's estimate may differ from the approved setting before the Cat
+   * station flags the difference; left out, DEFAULT_SETTING_CROSS_CHECK_TOLERANCE.
+   */
+  settingCrossCheckTolerance?: number;
   /** The time zone the ship keeps, an IANA name ("Pacific/Guam"); every time is shown in it. Left out, UTC. */
   timeZone?: string;
 }
 
 /** A wind reading is stale this long after it was taken unless the ship profile says otherwise, minutes. */
 export const DEFAULT_WIND_READING_MAX_AGE_MIN = 30;
+
+/**
+ * Settings the energy model's estimate may differ from the approved setting unflagged unless the ship
+ * profile says otherwise: two steps, room for the model's rounding and a hot or cold day (our own choice).
+ */
+export const DEFAULT_SETTING_CROSS_CHECK_TOLERANCE = 2;
 
 /** The zone times are shown in unless the ship profile names one. */
 export const DEFAULT_SHIP_TIME_ZONE = 'UTC';
@@ -119,6 +130,34 @@ export interface LaunchTableRow {
   minLaunchAirspeedKt: number;
 }
 
+/** Which approved setting table a launch reads: an aircraft carrying no stores launches clean. */
+export const LAUNCH_CONFIGURATIONS = ['clean', 'stores'] as const;
+export type LaunchConfiguration = (typeof LAUNCH_CONFIGURATIONS)[number];
+
+/** Every gross weight up to `upToLb` (inclusive) takes `setting`. */
+export interface SettingTableRow {
+  upToLb: number;
+  setting: number;
+}
+
+/**
+ * The ship's approved catapult settings for the type on one catapult in one configuration: the
+ * setting the Cat station shows, which Catline's energy model only cross-checks.
+ */
+export interface SettingTable {
+  catapultNumber: number;
+  configuration: LaunchConfiguration;
+  /** The excess wind over deck the launch data recommends, knots. */
+  recommendedExcessKt: number;
+  /** By strictly rising weight; a heavier weight than the last row has no approved setting. */
+  rows: SettingTableRow[];
+}
+
+/** PUT /aircraft-types/:id/setting-tables: every table of the type, replacing those held. */
+export interface ReplaceSettingTablesRequest {
+  tables: SettingTable[];
+}
+
 /** An item of a type's stores catalogue: what the launch data says one of it weighs. */
 export interface StoresItem {
   /** Unique within the type's catalogue (letter case aside). */
@@ -147,6 +186,8 @@ export interface AircraftTypeView {
   launchTable: LaunchTableRow[];
   /** What an aircraft of the type can carry, ordered by name. */
   storesCatalogue: StoresItem[];
+  /** Ordered by catapult number, then configuration. */
+  settingTables: SettingTable[];
 }
 
 /** PUT /aircraft-types/:id/stores-catalogue: the whole catalogue, replacing the one held. */

@@ -43,6 +43,7 @@ export const NO_GO_CODES = [
   'catapult_down',
   'catapult_closed',
   'outside_launch_table',
+  'approved_setting_missing',
   'setting_out_of_range',
 ] as const;
 export type NoGoCode = (typeof NO_GO_CODES)[number];
@@ -64,6 +65,7 @@ export const LAUNCH_GATE_CODES = [
   'over_max_gross_weight',
   'crosswind_over_limit',
   'outside_launch_table',
+  'approved_setting_missing',
   'end_speed_below_minimum',
   'end_speed_over_max',
   'excess_below_recommended',
@@ -100,8 +102,18 @@ export interface WindOverDeck {
 
 /** The figures of one aircraft on one catapult under the cycle's conditions. */
 export interface LaunchFigures extends WindOverDeck {
-  /** Lowest catapult setting reaching the wanted end speed; null when out of range. */
+  /**
+   * The setting from the ship's approved launch data for the catapult, type and configuration; null
+   * when the data gives none (no table, or the weight above its last row: the launch is refused).
+   */
   catapultSetting: number | null;
+  /** Catline's energy model's setting for the end speed wanted, the cross-check; null when none reaches it. */
+  crossCheckSetting: number | null;
+  /**
+   * True when the cross-check differs from the approved setting by more than the ship's tolerance, or
+   * reaches no setting; null where not judged (no approved setting, or a recorded shot).
+   */
+  crossCheckFlagged: boolean | null;
   /** At the setting given, or at the highest setting when none reaches the wanted end speed. */
   endSpeedKt: number;
   /**
@@ -113,7 +125,7 @@ export interface LaunchFigures extends WindOverDeck {
   marginKt: number | null;
   /** Headwind less (minimum launch airspeed - end speed); null outside the launch table or not recorded. */
   excessWindOverDeckKt: number | null;
-  /** The type's recommended excess wind over deck, to show beside the excess; null where not recorded. */
+  /** The approved data's recommended excess wind over deck, to show beside the excess; null where not recorded. */
   recommendedExcessKt: number | null;
   go: boolean;
   reasons: NoGoReason[];

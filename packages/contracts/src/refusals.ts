@@ -39,6 +39,7 @@ export const LINEUP_REFUSAL_CODES = [
   'over_max_gross_weight',
   'crosswind_over_limit',
   'outside_launch_table',
+  'approved_setting_missing',
   'end_speed_below_minimum',
   'end_speed_over_max',
   'excess_below_recommended',

@@ -9,6 +9,7 @@ export * from './aircraft/aircraft-profile.js';
 export * from './aircraft/gross-weight.js';
 export * from './launch/launch-airspeed.js';
 export * from './launch/launch-settings.js';
+export * from './launch/approved-setting.js';
 export * from './launch/launch-figures.js';
 export * from './deck/deck-positions.js';
 export * from './deck/deck-layout-problems.js';

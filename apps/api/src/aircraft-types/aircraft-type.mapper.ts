@@ -16,5 +16,6 @@ export function toAircraftTypeView(type: AircraftType): AircraftTypeView {
     trimBands: type.trimBands,
     launchTable: type.launchTable,
     storesCatalogue: type.storesCatalogue,
+    settingTables: type.settingTables,
   };
 }

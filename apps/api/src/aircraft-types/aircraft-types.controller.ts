@@ -19,6 +19,7 @@ import type { AuthenticatedUser } from '../common/authenticated-user.js';
 import { AircraftTypesService } from './aircraft-types.service.js';
 import { CreateAircraftTypeDto } from './dto/create-aircraft-type.dto.js';
 import { LaunchTableDto } from './dto/launch-table.dto.js';
+import { SettingTablesDto } from './dto/setting-tables.dto.js';
 import { StoresCatalogueDto } from './dto/stores-catalogue.dto.js';
 import { UpdateAircraftTypeDto } from './dto/update-aircraft-type.dto.js';
 import { ApiDoc } from '../common/openapi/api-doc.decorator.js';
@@ -94,6 +95,22 @@ export class AircraftTypesController {
     @Body() body: StoresCatalogueDto,
   ): Promise<AircraftTypeView> {
     return this.types.replaceStoresCatalogue(caller, id, body.items);
+  }
+
+  @ApiDoc('Replace the approved setting tables of an aircraft type', {
+    response: AircraftTypeViewDto,
+    description:
+      "Every table of the type: per catapult and configuration, the approved catapult setting by gross weight and the recommended excess wind over deck. The Cat station shows this setting; Catline's energy model only cross-checks it.",
+    refuses: { 400: ['invalid_launch_data'], 404: ['aircraft_type_not_found'] },
+  })
+  @Roles('admin')
+  @Put(':id/setting-tables')
+  replaceSettingTables(
+    @CurrentUser() caller: AuthenticatedUser,
+    @Param('id', ParseIntPipe) id: number,
+    @Body() body: SettingTablesDto,
+  ): Promise<AircraftTypeView> {
+    return this.types.replaceSettingTables(caller, id, body.tables);
   }
 
   @ApiDoc('Remove an aircraft type', {

@@ -1,4 +1,4 @@
-import type { AircraftTypeView, LaunchTableRow, StoresItem } from '@catline/contracts';
+import type { AircraftTypeView, LaunchTableRow, SettingTable, StoresItem } from '@catline/contracts';
 import { Injectable, Logger } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, type EntityManager, Not } from 'typeorm';
@@ -7,6 +7,7 @@ import { definedFields } from '../common/defined-fields.js';
 import { type ShipScope, shipWhere } from '../common/ship-scope.js';
 import { ownerShip } from '../ships/owner-ship.js';
 import { Aircraft } from '../database/entities/aircraft.entity.js';
+import { Catapult } from '../database/entities/catapult.entity.js';
 import { isDuplicateKey, isStillReferenced } from '../common/errors/database-errors.js';
 import { toAircraftTypeView } from './aircraft-type.mapper.js';
 import { AircraftTypesException } from './aircraft-types.exception.js';
@@ -15,7 +16,9 @@ import type { UpdateAircraftTypeDto } from './dto/update-aircraft-type.dto.js';
 import { AircraftType } from '../database/entities/aircraft-type.entity.js';
 import {
   launchTableProblems,
+  orderedSettingTables,
   orderedStoresCatalogue,
+  settingTableProblems,
   storesCatalogueProblems,
   trimBandProblems,
 } from './launch-data.js';
@@ -52,6 +55,7 @@ export class AircraftTypesService {
         operatingWeightLb: body.operatingWeightLb ?? null,
         afterburnerFromLb: body.afterburnerFromLb ?? null,
         storesCatalogue: [],
+        settingTables: [],
       });
       const created = await this.save(manager, type);
       await this.audit.record(manager, {
@@ -124,6 +128,28 @@ export class AircraftTypesService {
         after: { storesCatalogue: catalogue },
       });
       this.logger.log(`Stores catalogue of ${type.designation} replaced (${catalogue.length} items)`);
+      return toAircraftTypeView(type);
+    });
+  }
+
+  async replaceSettingTables(scope: ShipScope, id: number, tables: SettingTable[]): Promise<AircraftTypeView> {
+    const ordered = orderedSettingTables(tables);
+    return this.dataSource.transaction(async (manager) => {
+      const type = await this.findOrFail(manager, scope, id, true);
+      const catapults = await manager.find(Catapult, { where: { shipId: type.shipId } });
+      this.checkLaunchData(settingTableProblems(ordered, catapults));
+      const before = type.settingTables;
+      type.settingTables = ordered;
+      await manager.save(AircraftType, type);
+      await this.audit.record(manager, {
+        action: 'setting_tables.replaced',
+        subject: { type: 'aircraft_type', id },
+        shipId: type.shipId,
+        summary: `Approved setting tables of ${type.designation} replaced (${ordered.length} tables)`,
+        before: { settingTables: before },
+        after: { settingTables: ordered },
+      });
+      this.logger.log(`Approved setting tables of ${type.designation} replaced (${ordered.length} tables)`);
       return toAircraftTypeView(type);
     });
   }

@@ -32,6 +32,10 @@ const type = {
     { grossWeightLb: 30000, minLaunchAirspeedKt: 140 },
     { grossWeightLb: 66000, minLaunchAirspeedKt: 140 },
   ],
+  // The approved data (invented): setting 1 up to 60,000 lb off cat 3 clean, 5 kt recommended excess.
+  settingTables: [
+    { catapultNumber: 3, configuration: 'clean', recommendedExcessKt: 5, rows: [{ upToLb: 60000, setting: 1 }] },
+  ],
 } as unknown as AircraftType;
 const catapult = {
   number: 3,
@@ -55,36 +59,60 @@ const input = (overrides: Partial<FiguresInput> = {}): FiguresInput => ({
   closedReason: null,
   densityRatio: 1,
   clearingTurnDeg: 10,
+  configuration: 'clean',
+  crossCheckTolerance: undefined,
   ...overrides,
 });
 
 describe('launch figures as the deck crew reads them', () => {
-  it('carries launch-math figures and verdict unchanged when go', () => {
+  it('carries launch-math figures and verdict unchanged when go, the approved setting cross-checked', () => {
     const view = launchFiguresView(input());
     expect(view).toMatchObject({
       go: true,
       reasons: [],
       catapultSetting: 1,
+      // 145 kt from the catapult alone: setting 1 gives 123.24 kt, 2 gives 165.2 kt (launch-math's spec, by
+      // hand); one step off, inside the default tolerance of 2.
+      crossCheckSetting: 2,
+      crossCheckFlagged: false,
       requiredAirspeedKt: 145,
+      recommendedExcessKt: 5,
       clearingTurnDeg: 10,
     });
     expect(view.marginKt).toBeGreaterThan(0);
   });
 
-  it('words a setting out of range and a negative margin with their figures', () => {
-    // Hot day (sigma 0.81) with 10 kt of tailwind: 140 / 0.9 + 5 + 10 = 170.6 kt wanted, 165.2 kt at best,
-    // required wind over deck 160.56 - 165.20 = -4.6 kt, margin -10 - (-4.6) = -5.4 kt (worked by hand).
+  it("flags the cross-check beyond the ship's tolerance", () => {
+    // Approved setting 1 against the model's 2: one step, over a tolerance of 0.
+    expect(launchFiguresView(input({ crossCheckTolerance: 0 }))).toMatchObject({
+      catapultSetting: 1,
+      crossCheckSetting: 2,
+      crossCheckFlagged: true,
+    });
+  });
+
+  it('words a negative margin on the approved setting', () => {
+    // Hot day (sigma 0.81) with 10 kt of tailwind: 140 / 0.9 + 5 = 160.56 kt required; setting 1 gives
+    // 123.24 kt, so 160.56 - 123.24 = 37.3 kt wind over deck required, margin -10 - 37.32 = -47.3 kt
+    // (worked by hand).
     const view = launchFiguresView(input({ wind: wind(-10), densityRatio: 0.81 }));
-    expect(view.go).toBe(false);
-    expect(view.catapultSetting).toBeNull();
+    expect(view).toMatchObject({ go: false, catapultSetting: 1 });
     expect(view.reasons).toEqual([
       {
-        code: 'setting_out_of_range',
-        message: 'The highest setting of cat 3 gives 165.2 kt end speed; 170.6 kt is wanted.',
-      },
-      {
         code: 'margin_negative',
-        message: 'Launch margin -5.4 kt: headwind -10.0 kt is below the -4.6 kt wind over deck required.',
+        message: 'Launch margin -47.3 kt: headwind -10.0 kt is below the 37.3 kt wind over deck required.',
+      },
+    ]);
+  });
+
+  it('words a missing approved table for the configuration', () => {
+    const view = launchFiguresView(input({ configuration: 'stores' }));
+    expect(view).toMatchObject({ go: false, catapultSetting: null, crossCheckSetting: null, crossCheckFlagged: null });
+    expect(view.reasons).toEqual([
+      {
+        code: 'approved_setting_missing',
+        message:
+          'The approved launch data hold no stores setting table for the KX-1 on cat 3; the admin enters it on the Launch data screen.',
       },
     ]);
   });
@@ -100,6 +128,10 @@ describe('launch figures as the deck crew reads them', () => {
       {
         code: 'outside_launch_table',
         message: 'Gross weight 70,000 lb is outside the KX-1 launch data (30,000 lb to 66,000 lb).',
+      },
+      {
+        code: 'approved_setting_missing',
+        message: 'Gross weight 70,000 lb is above the approved clean settings of the KX-1 on cat 3 (up to 60,000 lb).',
       },
     ]);
     expect(view).toMatchObject({ requiredAirspeedKt: null, requiredWindOverDeckKt: null, marginKt: null });

@@ -1,4 +1,9 @@
-import type { LaunchFigures, NoGoReason } from '@catline/contracts';
+import {
+  DEFAULT_SETTING_CROSS_CHECK_TOLERANCE,
+  type LaunchConfiguration,
+  type LaunchFigures,
+  type NoGoReason,
+} from '@catline/contracts';
 import {
   launchFigures,
   pounds,
@@ -8,7 +13,7 @@ import {
 } from '@catline/launch-math';
 import type { AircraftType } from '../database/entities/aircraft-type.entity.js';
 import type { Catapult } from '../database/entities/catapult.entity.js';
-import { aircraftProfile, catapultEnergy } from './launch-math.adapter.js';
+import { aircraftProfile, approvedSettingTable, catapultEnergy } from './launch-math.adapter.js';
 
 export interface FiguresInput {
   type: AircraftType;
@@ -19,6 +24,10 @@ export interface FiguresInput {
   closedReason: UnschedulableReason | null;
   densityRatio: number;
   clearingTurnDeg: number;
+  /** Which of the type's approved setting tables the aircraft launches on. */
+  configuration: LaunchConfiguration;
+  /** The ship profile's settingCrossCheckTolerance; left out, the default. */
+  crossCheckTolerance: number | undefined;
 }
 
 const kt = (value: number) => `${value.toFixed(1)} kt`;
@@ -52,6 +61,14 @@ function describe(reason: LaunchNoGoReason, input: FiguresInput): NoGoReason {
         code: reason.code,
         message: `Gross weight ${lb(reason.grossWeight)} is outside the ${designation} launch data (${lb(reason.lowest)} to ${lb(reason.highest)}).`,
       };
+    case 'approved_setting_missing':
+      return {
+        code: reason.code,
+        message:
+          reason.highest === null
+            ? `The approved launch data hold no ${input.configuration} setting table for the ${designation} on cat ${input.catapult.number}; the admin enters it on the Launch data screen.`
+            : `Gross weight ${lb(reason.grossWeight)} is above the approved ${input.configuration} settings of the ${designation} on cat ${input.catapult.number} (up to ${lb(reason.highest)}).`,
+      };
     case 'setting_out_of_range':
       return {
         code: reason.code,
@@ -70,12 +87,18 @@ export function launchFiguresView(input: FiguresInput): LaunchFigures {
     catapult: catapultEnergy(input.catapult),
     grossWeight: pounds(input.grossWeightLb),
     conditions: { wind: input.wind, densityRatio: input.densityRatio, closedReason: input.closedReason },
+    approved: {
+      table: approvedSettingTable(input.type, input.catapult.number, input.configuration),
+      crossCheckTolerance: input.crossCheckTolerance ?? DEFAULT_SETTING_CROSS_CHECK_TOLERANCE,
+    },
   });
   return {
     headwindKt: figures.wind.headwind,
     crosswindKt: figures.wind.crosswind,
     crosswindSide: figures.wind.side,
     catapultSetting: figures.setting?.setting ?? null,
+    crossCheckSetting: figures.crossCheck?.setting ?? null,
+    crossCheckFlagged: figures.crossCheck?.flagged ?? null,
     endSpeedKt: figures.endSpeed,
     requiredAirspeedKt: figures.requiredAirspeed,
     requiredWindOverDeckKt: figures.requiredWindOverDeck,

@@ -1,4 +1,4 @@
-import type { ShipProfile as ShipProfileData, WeatherCase } from '@catline/contracts';
+import type { LaunchConfiguration, ShipProfile as ShipProfileData, WeatherCase } from '@catline/contracts';
 import {
   airDensity,
   celsius,
@@ -14,6 +14,7 @@ import {
   relativeWind,
   seconds,
   type AircraftProfile,
+  type ApprovedSettingTable,
   type CatapultEnergyProfile,
   type ClearingTurn,
   type LaunchCatapult,
@@ -49,6 +50,23 @@ export function aircraftProfile(type: AircraftType): AircraftProfile {
     trimWeightStep: pounds(1),
     afterburnerFromGrossWeight: type.afterburnerFromLb === null ? null : pounds(type.afterburnerFromLb),
   };
+}
+
+/** The type's approved setting table for a catapult (by number) and configuration; null when the ship holds none. */
+export function approvedSettingTable(
+  type: AircraftType,
+  catapultNumber: number,
+  configuration: LaunchConfiguration,
+): ApprovedSettingTable | null {
+  const table = type.settingTables.find(
+    (candidate) => candidate.catapultNumber === catapultNumber && candidate.configuration === configuration,
+  );
+  return table
+    ? {
+        recommendedExcess: knots(table.recommendedExcessKt),
+        rows: table.rows.map((row) => ({ upToWeight: pounds(row.upToLb), setting: row.setting })),
+      }
+    : null;
 }
 
 /** `settingCount` discrete settings, numbered 0 (lowest energy) to settingCount - 1 (highest). */

@@ -32,9 +32,9 @@ export function recordShot(input: ShotInput): LaunchRecord {
     grossWeightLb: slot.agreedWeightLb ?? slot.grossWeightLb,
     fuelLb: slot.fuelLb,
     stores: slot.stores,
-    // The approved launch data gives no setting yet; the energy model's is the cross-check.
-    launchDataSetting: null,
-    crossCheckSetting: figures.catapultSetting,
+    // The setting the crew set and read back, and the energy model's estimate it was checked against.
+    launchDataSetting: figures.catapultSetting,
+    crossCheckSetting: figures.crossCheckSetting,
     windReading: {
       readAt: null,
       shipCourseDeg: cycle.shipCourseDeg,
@@ -71,7 +71,11 @@ export function recordedFigures(record: LaunchRecord): LaunchFigures | null {
     headwindKt: record.headwindKt,
     crosswindKt: record.crosswindKt,
     crosswindSide: record.crosswindSide ?? 'none',
+    // A shot before the approved data gave settings was set to the energy model's.
     catapultSetting: record.launchDataSetting ?? record.crossCheckSetting,
+    crossCheckSetting: record.crossCheckSetting,
+    // The tolerance of the moment was not kept.
+    crossCheckFlagged: null,
     endSpeedKt: record.endSpeedKt,
     requiredAirspeedKt: record.requiredAirspeedKt,
     requiredWindOverDeckKt: record.requiredWindOverDeckKt,

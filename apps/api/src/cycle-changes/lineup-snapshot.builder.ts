@@ -1,6 +1,7 @@
 import {
   isLandingAreaInUse,
   type LaneView,
+  type LaunchConfiguration,
   type LaunchFigures,
   type LineupSnapshot,
   type SlotStatus,
@@ -131,6 +132,8 @@ interface LaneConditions {
 
 interface CycleConditions {
   density: number;
+  /** The ship profile's settingCrossCheckTolerance. */
+  crossCheckTolerance: number | undefined;
   departure: string;
   lanes: Map<number, LaneConditions>;
 }
@@ -142,6 +145,7 @@ function cycleConditions(state: LineupState): CycleConditions {
   const profile = shipProfile(state.ship.profile);
   return {
     density: cycleDensityRatio(cycle),
+    crossCheckTolerance: state.ship.profile.settingCrossCheckTolerance,
     departure: departureFor(profile, cycle.weatherCase).summary,
     lanes: new Map(
       state.catapults.map((catapult) => [
@@ -166,11 +170,20 @@ function figuresIn(conditions: CycleConditions, slot: Slot): LaunchFigures | nul
     ? launchFiguresView({
         type: slot.aircraft.type,
         grossWeightLb: launchWeight(slot),
+        configuration: launchConfiguration(slot),
         densityRatio: conditions.density,
+        crossCheckTolerance: conditions.crossCheckTolerance,
         ...lane,
       })
     : null;
 }
+
+/**
+ * Which approved setting table the aircraft launches on: with stores when its load lists any or, before
+ * a load is built, when the air plan's stores column is filled in.
+ */
+export const launchConfiguration = (slot: Slot): LaunchConfiguration =>
+  (slot.loadBuild ? slot.loadBuild.stores.length > 0 : slot.stores.trim() !== '') ? 'stores' : 'clean';
 
 /** The weight the figures are worked out for: the agreed one once the crew recorded it, the planned one before. */
 export const launchWeight = (slot: Slot): number => slot.agreedWeightLb ?? slot.grossWeightLb;

@@ -33,6 +33,7 @@ const STATUS: Record<LineupRefusalCode, HttpStatus> = {
   over_max_gross_weight: HttpStatus.CONFLICT,
   crosswind_over_limit: HttpStatus.CONFLICT,
   outside_launch_table: HttpStatus.CONFLICT,
+  approved_setting_missing: HttpStatus.CONFLICT,
   end_speed_below_minimum: HttpStatus.CONFLICT,
   end_speed_over_max: HttpStatus.CONFLICT,
   excess_below_recommended: HttpStatus.CONFLICT,

@@ -36,6 +36,7 @@ function sentence(gate: LaunchGate, state: LineupState, slot: Slot, figures: Lau
     case 'over_max_gross_weight':
     case 'crosswind_over_limit':
     case 'outside_launch_table':
+    case 'approved_setting_missing':
       return figures.reasons.find((reason) => reason.code === gate)?.message ?? `${side} is no-go.`;
     case 'cycle_not_executing':
       return `Cycle ${state.cycle.number} is ${state.cycle.state}, not executing; nothing launches.`;

@@ -1,4 +1,4 @@
-import type { LaunchRecord, LineupPatch, Role } from '@catline/contracts';
+import type { LaunchFigures, LaunchRecord, LineupPatch, Role } from '@catline/contracts';
 
 // Launch records for aircraft launched before the record existed, put together from what the change log
 // kept. Used by the SlotLaunchRecord migration; it reads plain rows so a later change of the entities
@@ -28,6 +28,19 @@ export interface LaunchChangeRow {
 }
 
 /**
+ * A change logged before the approved data gave settings carries the energy model's setting alone, as
+ * its catapult setting; a later one carries the approved setting and the cross-check beside it.
+ */
+function settingsOf(
+  figures: (Pick<LaunchFigures, 'catapultSetting'> & Partial<Pick<LaunchFigures, 'crossCheckSetting'>>) | null,
+): Pick<LaunchRecord, 'launchDataSetting' | 'crossCheckSetting'> {
+  if (figures === null) return { launchDataSetting: null, crossCheckSetting: null };
+  return figures.crossCheckSetting !== undefined
+    ? { launchDataSetting: figures.catapultSetting, crossCheckSetting: figures.crossCheckSetting }
+    : { launchDataSetting: null, crossCheckSetting: figures.catapultSetting };
+}
+
+/**
  * The record of a launch from the change that recorded it: its patch carries the slot's view with the
  * figures worked out at that version (under the conditions then in force) and the cycle's conditions.
  * Without the change only the slot's own columns are known, and every figure stays null.
@@ -44,8 +57,7 @@ export function rebuildLaunchRecord(slot: LaunchedSlotRow, change: LaunchChangeR
     grossWeightLb: slot.grossWeightLb,
     fuelLb: slot.fuelLb,
     stores: slot.stores,
-    launchDataSetting: null,
-    crossCheckSetting: figures?.catapultSetting ?? null,
+    ...settingsOf(figures),
     windReading: cycle
       ? {
           readAt: null,

@@ -36,6 +36,24 @@ export const aircraftTypesRoutes: MatrixRoute[] = [
     }),
   },
   {
+    method: 'PUT',
+    path: '/api/aircraft-types/{id}/setting-tables',
+    allowed: ['admin'],
+    example: async (context) => ({
+      params: { id: await targetId(context) },
+      body: {
+        tables: [
+          {
+            catapultNumber: 1,
+            configuration: 'clean',
+            recommendedExcessKt: 10,
+            rows: [{ upToLb: 30_000, setting: 5 }],
+          },
+        ],
+      },
+    }),
+  },
+  {
     method: 'DELETE',
     path: '/api/aircraft-types/{id}',
     allowed: ['admin'],

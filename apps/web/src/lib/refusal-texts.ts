@@ -52,6 +52,7 @@ const REASONS: Record<RefusalCode, string> = {
   over_max_gross_weight: 'over the type’s maximum catapult weight',
   crosswind_over_limit: 'crosswind over the type’s limit',
   outside_launch_table: 'the weight is outside the launch data',
+  approved_setting_missing: 'no approved catapult setting in the launch data',
   end_speed_below_minimum: 'end speed below the minimum',
   end_speed_over_max: 'end speed over the type’s maximum',
   excess_below_recommended: 'excess wind over deck below the recommended value',

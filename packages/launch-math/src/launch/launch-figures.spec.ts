@@ -3,6 +3,7 @@ import type { CatapultEnergyProfile } from '../catapult/end-speed.js';
 import { LaunchMathInputError } from '../errors.js';
 import { degrees, joules, knots, metres, pounds, poundsForce } from '../units/units.js';
 import type { WindComponents } from '../wind/wind-over-deck.js';
+import type { ApprovedSettingTable } from './approved-setting.js';
 import { LAUNCH_NO_GO_CODES, launchFigures, type LaunchConditionsNow } from './launch-figures.js';
 
 // The worked example behind every expected value below, worked by hand (not with this package):
@@ -179,6 +180,91 @@ describe('launch figures', () => {
     expect(figures.reasons).toEqual([{ code: 'crosswind_over_limit', crosswind: 16, side: 'port', limit: 15 }]);
   });
 
+  // An invented approved table: the jet's 52,029 lb falls in the 55,000 lb row, setting 1, 8 kt recommended excess.
+  const approvedTable: ApprovedSettingTable = {
+    recommendedExcess: knots(8),
+    rows: [
+      { upToWeight: pounds(45000), setting: 0 },
+      { upToWeight: pounds(55000), setting: 1 },
+    ],
+  };
+
+  it("shows the approved setting, judges the launch on its end speed, and cross-checks it with the energy model's", () => {
+    const figures = launchFigures({
+      aircraft: textbookJet,
+      catapult: fourStepCatapult,
+      grossWeight,
+      conditions: open(),
+      approved: { table: approvedTable, crossCheckTolerance: 1 },
+    });
+    expect(figures.setting).toEqual({ setting: 1, source: 'approved_data' });
+    expect(figures.recommendedExcess).toBe(8); // the table's, not the type's 5 kt
+    expect(figures.requiredAirspeed).toBe(148); // 140 + 8
+    expect(figures.wantedEndSpeed).toBe(123); // 148 - 25 kt headwind
+    expect(figures.endSpeed).toBeCloseTo(123.24, 2); // setting 1, by hand above
+    expect(figures.requiredWindOverDeck).toBeCloseTo(24.76, 2); // 148 - 123.24
+    expect(figures.margin).toBeCloseTo(0.24, 2); // 25 - 24.76
+    expect(figures.excessWindOverDeck).toBeCloseTo(8.24, 2); // 25 - (140 - 123.24)
+    // With no wind the model needs 148 kt from the catapult: setting 2 (165.20 kt by hand above), one step
+    // off the approved setting, inside a tolerance of 1.
+    expect(figures.crossCheck).toEqual({ setting: 2, flagged: false });
+    expect(figures.go).toBe(true);
+  });
+
+  it('flags the cross-check when the estimate is further off than the tolerance', () => {
+    const figures = launchFigures({
+      aircraft: textbookJet,
+      catapult: fourStepCatapult,
+      grossWeight,
+      conditions: open(),
+      approved: { table: approvedTable, crossCheckTolerance: 0 },
+    });
+    expect(figures.crossCheck).toEqual({ setting: 2, flagged: true }); // 2 - 1 = 1 step, over a tolerance of 0
+    expect(figures.go).toBe(true); // a warning only: the approved data governs the shot
+  });
+
+  it('flags the cross-check, and reports no out-of-range setting, when the model reaches no setting at all', () => {
+    const figures = launchFigures({
+      aircraft: textbookJet,
+      catapult: textbookCatapult,
+      grossWeight,
+      conditions: open({ wind: wind(-10), densityRatio: 0.81 }),
+      approved: { table: { ...approvedTable, recommendedExcess: knots(10) }, crossCheckTolerance: 2 },
+    });
+    expect(figures.setting).toEqual({ setting: 1, source: 'approved_data' });
+    // 140 / 0.9 + 10 = 165.56 kt required, past the highest setting's 165.20 kt (by hand above).
+    expect(figures.crossCheck).toEqual({ setting: null, flagged: true });
+    // At setting 1's 123.24 kt with 10 kt of tailwind the margin is below zero; no out-of-range reason.
+    expect(figures.reasons.map((reason) => reason.code)).toEqual(['margin_negative']);
+  });
+
+  it('is no-go with no setting above the last row of the approved table', () => {
+    const figures = launchFigures({
+      aircraft: textbookJet,
+      catapult: fourStepCatapult,
+      grossWeight,
+      conditions: open(),
+      approved: { table: { ...approvedTable, rows: approvedTable.rows.slice(0, 1) }, crossCheckTolerance: 2 },
+    });
+    expect(figures.setting).toBeNull();
+    expect(figures.crossCheck).toBeNull();
+    expect(figures.go).toBe(false);
+    expect(figures.reasons).toEqual([{ code: 'approved_setting_missing', grossWeight, highest: 45000 }]);
+  });
+
+  it('is no-go with no setting when the ship holds no approved table for the combination', () => {
+    const figures = launchFigures({
+      aircraft: textbookJet,
+      catapult: fourStepCatapult,
+      grossWeight,
+      conditions: open(),
+      approved: { table: null, crossCheckTolerance: 2 },
+    });
+    expect(figures.setting).toBeNull();
+    expect(figures.recommendedExcess).toBe(5); // the type's, with no table to give one
+    expect(figures.reasons).toEqual([{ code: 'approved_setting_missing', grossWeight, highest: null }]);
+  });
+
   it('names every code it can give, in the order it lists them', () => {
     expect(LAUNCH_NO_GO_CODES).toEqual([
       'catapult_down',
@@ -186,6 +272,7 @@ describe('launch figures', () => {
       'over_max_gross_weight',
       'crosswind_over_limit',
       'outside_launch_table',
+      'approved_setting_missing',
       'setting_out_of_range',
       'margin_negative',
     ]);

@@ -4,6 +4,7 @@ import { requirePositive } from '../errors.js';
 import type { UnschedulableReason } from '../schedule/launch-projection.js';
 import { knots, type Degrees, type Knots, type Pounds } from '../units/units.js';
 import type { CrosswindSide, WindComponents } from '../wind/wind-over-deck.js';
+import { approvedSetting, type ApprovedSettingTable } from './approved-setting.js';
 import { launchMargin, minimumLaunchAirspeed, requiredWindOverDeck } from './launch-airspeed.js';
 import { launchEndSpeed, lowestLaunchSetting } from './launch-settings.js';
 
@@ -29,7 +30,12 @@ export type LaunchNoGoReason =
       readonly lowest: Pounds;
       readonly highest: Pounds;
     }
-  /** Even the highest setting falls short of the end speed wanted. */
+  /**
+   * The ship's approved data gives no setting: no table for this catapult, type and configuration
+   * (`highest` null), or the weight is above its last row.
+   */
+  | { readonly code: 'approved_setting_missing'; readonly grossWeight: Pounds; readonly highest: Pounds | null }
+  /** Even the highest setting falls short of the end speed wanted (judged on the energy model's setting only). */
   | { readonly code: 'setting_out_of_range'; readonly wantedEndSpeed: Knots; readonly maxEndSpeed: Knots }
   | {
       readonly code: 'margin_negative';
@@ -47,6 +53,7 @@ const NO_GO_CODES_IN_ORDER = {
   over_max_gross_weight: true,
   crosswind_over_limit: true,
   outside_launch_table: true,
+  approved_setting_missing: true,
   setting_out_of_range: true,
   margin_negative: true,
 } as const satisfies Record<LaunchNoGoCode, true>;
@@ -54,11 +61,8 @@ const NO_GO_CODES_IN_ORDER = {
 /** Every code `launchFigures` can give, in the order it lists them. */
 export const LAUNCH_NO_GO_CODES = Object.keys(NO_GO_CODES_IN_ORDER) as readonly LaunchNoGoCode[];
 
-/**
- * Where the catapult setting came from. Today the energy model chooses it; when the ship's approved
- * launch data gives the setting, it becomes another source and the energy model only cross-checks it.
- */
-export type LaunchSettingSource = 'energy_model';
+/** Where the catapult setting came from: the ship's approved data, or the energy model where none is given. */
+export type LaunchSettingSource = 'approved_data' | 'energy_model';
 
 export interface LaunchSetting {
   /** Whole-number setting from 0 to the catapult's highest. */
@@ -76,6 +80,25 @@ export interface LaunchConditionsNow {
   readonly closedReason: UnschedulableReason | null;
 }
 
+/** The ship's approved launch data for this catapult, type and configuration. */
+export interface ApprovedLaunchData {
+  /** Null when the ship's data holds no table for the combination: no shot has an approved setting. */
+  readonly table: ApprovedSettingTable | null;
+  /** Settings the energy model's estimate may differ from the approved setting before it is flagged. */
+  readonly crossCheckTolerance: number;
+}
+
+/** Catline's own estimate held against the approved setting. */
+export interface SettingCrossCheck {
+  /**
+   * The energy model's lowest setting reaching the required airspeed with no wind over the deck (the
+   * approved setting is by weight alone); null when none reaches it.
+   */
+  readonly setting: number | null;
+  /** True when the estimate is off by more than the tolerance, or reaches no setting at all. */
+  readonly flagged: boolean;
+}
+
 export interface LaunchFiguresInput {
   /** The type's profile and launch data: launch table, limits, thrust, required excess, trim bands, afterburner threshold. */
   readonly aircraft: AircraftProfile;
@@ -84,6 +107,11 @@ export interface LaunchFiguresInput {
   /** Agreed gross weight, lb. */
   readonly grossWeight: Pounds;
   readonly conditions: LaunchConditionsNow;
+  /**
+   * Given, its setting is the setting and the energy model only cross-checks it; left out, the
+   * energy model's setting is used alone.
+   */
+  readonly approved?: ApprovedLaunchData;
 }
 
 /**
@@ -93,11 +121,16 @@ export interface LaunchFiguresInput {
 export interface LaunchFigures {
   readonly go: boolean;
   readonly reasons: readonly LaunchNoGoReason[];
-  /** Null when no setting reaches the end speed wanted, or the weight is outside the launch table. */
+  /**
+   * The approved setting when approved data is given (null when it has none for the weight); otherwise
+   * the energy model's, null when no setting reaches the end speed wanted or the weight is outside the launch table.
+   */
   readonly setting: LaunchSetting | null;
+  /** The energy model against the approved setting; null without approved data or when it has no setting. */
+  readonly crossCheck: SettingCrossCheck | null;
   /** Required airspeed less the headwind, never below zero. */
   readonly wantedEndSpeed: Knots | null;
-  /** At the setting given, or at the catapult's highest setting when there is none. */
+  /** At the setting given, or at the catapult's highest setting when there is none (the energy model's figure). */
   readonly endSpeed: Knots;
   /** From the launch table at the gross weight, hot-day corrected. */
   readonly minimumLaunchAirspeed: Knots | null;
@@ -109,7 +142,7 @@ export interface LaunchFigures {
   readonly margin: Knots | null;
   /** Headwind less (minimum launch airspeed - end speed), to show beside `recommendedExcess`. */
   readonly excessWindOverDeck: Knots | null;
-  /** The type's recommended excess (its `requiredExcess`). */
+  /** The approved table's recommended excess, or the type's (its `requiredExcess`) without one. */
   readonly recommendedExcess: Knots;
   readonly wind: WindComponents;
   /** Take-off trim, degrees; null when the weight is below the first trim band. */
@@ -119,33 +152,47 @@ export interface LaunchFigures {
 
 /**
  * One aircraft's launch figures on one catapult and whether it may launch. The wanted end speed is the
- * required airspeed less the headwind; the lowest setting reaching it gives the end speed that the
- * wind over deck and the margin are judged on (the highest setting's when none reaches it).
+ * required airspeed less the headwind. With approved data, its setting's end speed is what the wind over
+ * deck and the margin are judged on, and the lowest setting reaching the required airspeed with no
+ * wind is the cross-check; without, the lowest setting reaching the wanted end speed is the setting (the highest setting's end speed when none
+ * reaches it).
  */
 export function launchFigures(input: LaunchFiguresInput): LaunchFigures {
-  const { aircraft, catapult, grossWeight, conditions } = input;
+  const { aircraft, catapult, grossWeight, conditions, approved } = input;
   const { wind, densityRatio = 1, closedReason } = conditions;
   requirePositive(grossWeight, 'Gross weight (lb)');
 
+  const recommendedExcess = approved?.table?.recommendedExcess ?? aircraft.requiredExcess;
   const minimum = minimumLaunchAirspeed(aircraft, grossWeight, densityRatio);
   const minimumAirspeed = minimum.kind === 'airspeed' ? minimum.airspeed : null;
-  const requiredAirspeed = minimumAirspeed === null ? null : knots(minimumAirspeed + aircraft.requiredExcess);
+  const requiredAirspeed = minimumAirspeed === null ? null : knots(minimumAirspeed + recommendedExcess);
   const wantedEndSpeed = requiredAirspeed === null ? null : knots(Math.max(0, requiredAirspeed - wind.headwind));
   const search =
     wantedEndSpeed === null ? null : lowestLaunchSetting({ aircraft, catapult, grossWeight, wanted: wantedEndSpeed });
+  // An approved table gives a setting by weight alone, wind aside; its cross-check is the model's setting
+  // for the required airspeed from the catapult alone, so the two compare like with like.
+  const check =
+    approved && requiredAirspeed !== null
+      ? lowestLaunchSetting({ aircraft, catapult, grossWeight, wanted: requiredAirspeed })
+      : null;
+  const estimate = check?.kind === 'setting' ? check.setting : null;
+  const lookup = approved?.table ? approvedSetting(approved.table, grossWeight) : null;
+  const setting: LaunchSetting | null = approved
+    ? lookup?.kind === 'setting'
+      ? { setting: lookup.setting, source: 'approved_data' }
+      : null
+    : search?.kind === 'setting'
+      ? { setting: search.setting, source: 'energy_model' }
+      : null;
   const endSpeed =
-    search?.kind === 'setting'
+    setting?.source === 'energy_model' && search?.kind === 'setting'
       ? search.endSpeed
-      : launchEndSpeed({ aircraft, catapult, setting: catapult.maxSetting, grossWeight });
+      : launchEndSpeed({ aircraft, catapult, setting: setting?.setting ?? catapult.maxSetting, grossWeight });
 
   const required =
     minimumAirspeed === null
       ? null
-      : requiredWindOverDeck({
-          minimumLaunchAirspeed: minimumAirspeed,
-          requiredExcess: aircraft.requiredExcess,
-          endSpeed,
-        });
+      : requiredWindOverDeck({ minimumLaunchAirspeed: minimumAirspeed, requiredExcess: recommendedExcess, endSpeed });
   const margin = required === null ? null : launchMargin(wind.headwind, required);
 
   const reasons: LaunchNoGoReason[] = [];
@@ -165,7 +212,15 @@ export function launchFigures(input: LaunchFiguresInput): LaunchFigures {
   if (minimum.kind === 'outside_launch_table') {
     reasons.push({ code: 'outside_launch_table', grossWeight, lowest: minimum.lowest, highest: minimum.highest });
   }
-  if (search?.kind === 'out_of_range' && wantedEndSpeed !== null) {
+  if (approved && setting === null) {
+    reasons.push({
+      code: 'approved_setting_missing',
+      grossWeight,
+      highest: lookup?.kind === 'above_table' ? lookup.highest : null,
+    });
+  }
+  // With an approved setting the end speed it gives is judged by the margin below, not by the model's search.
+  if (!approved && search?.kind === 'out_of_range' && wantedEndSpeed !== null) {
     reasons.push({ code: 'setting_out_of_range', wantedEndSpeed, maxEndSpeed: search.maxEndSpeed });
   }
   if (margin !== null && required !== null && margin < 0) {
@@ -175,7 +230,14 @@ export function launchFigures(input: LaunchFiguresInput): LaunchFigures {
   return {
     go: reasons.length === 0,
     reasons,
-    setting: search?.kind === 'setting' ? { setting: search.setting, source: 'energy_model' } : null,
+    setting,
+    crossCheck:
+      approved && setting
+        ? {
+            setting: estimate,
+            flagged: estimate === null || Math.abs(estimate - setting.setting) > approved.crossCheckTolerance,
+          }
+        : null,
     wantedEndSpeed,
     endSpeed,
     minimumLaunchAirspeed: minimumAirspeed,
@@ -183,7 +245,7 @@ export function launchFigures(input: LaunchFiguresInput): LaunchFigures {
     requiredWindOverDeck: required,
     margin,
     excessWindOverDeck: minimumAirspeed === null ? null : knots(wind.headwind - (minimumAirspeed - endSpeed)),
-    recommendedExcess: aircraft.requiredExcess,
+    recommendedExcess,
     wind,
     trim: takeOffTrim(aircraft, grossWeight),
     afterburner: afterburnerRequired(aircraft, grossWeight),

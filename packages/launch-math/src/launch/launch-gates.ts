@@ -18,6 +18,8 @@ export const HARD_LAUNCH_GATES = [
   'over_max_gross_weight',
   'crosswind_over_limit',
   'outside_launch_table',
+  /** The ship's approved data gives no setting for this catapult, type, configuration and weight. */
+  'approved_setting_missing',
   /** End speed plus headwind below the minimum launch airspeed: the excess wind over deck is below zero. */
   'end_speed_below_minimum',
   /** The setting gives more end speed than the type may take (overstress). */
@@ -92,6 +94,7 @@ function closedByFigures(figures: LaunchGateFigures, maxEndSpeed: number | null)
       case 'over_max_gross_weight':
       case 'crosswind_over_limit':
       case 'outside_launch_table':
+      case 'approved_setting_missing':
         closed.add(code);
         break;
       // Short of the wanted end speed or of the recommended excess: how far short decides hard or soft.

@@ -1,4 +1,4 @@
-import type { LaunchTableRow, StoresItem, TrimBand } from '@catline/contracts';
+import type { LaunchTableRow, SettingTable, StoresItem, TrimBand } from '@catline/contracts';
 import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, type Relation } from 'typeorm';
 import { Ship } from './ship.entity.js';
 
@@ -56,4 +56,8 @@ export class AircraftType {
   /** What an aircraft of the type can carry, ordered by name; names unique regardless of case. */
   @Column({ name: 'stores_catalogue', type: 'json' })
   storesCatalogue: StoresItem[];
+
+  /** The approved catapult settings, one table per catapult and configuration, ordered as the view lists them. */
+  @Column({ name: 'setting_tables', type: 'json' })
+  settingTables: SettingTable[];
 }

@@ -18,6 +18,7 @@ import { AircraftTypeMaxEndSpeed1796229016417 } from './1796229016417-AircraftTy
 import { ShipsOwnTheirData1796240912480 } from './1796240912480-ShipsOwnTheirData.js';
 import { SlotArmState1796243880772 } from './1796243880772-SlotArmState.js';
 import { AuditEntryShip1796245854530 } from './1796245854530-AuditEntryShip.js';
+import { AircraftTypeSettingTables1796262840562 } from './1796262840562-AircraftTypeSettingTables.js';
 
 /** Every migration in the order it runs; add a new one at the end (see DEVELOPERS.md). */
 export const migrations = [
@@ -41,4 +42,5 @@ export const migrations = [
   ShipsOwnTheirData1796240912480,
   SlotArmState1796243880772,
   AuditEntryShip1796245854530,
+  AircraftTypeSettingTables1796262840562,
 ];

@@ -1,4 +1,5 @@
 import type { DeckLayout, DeckSpot, LaunchTableRow, Role, ShipProfile, StoresItem, TrimBand } from '@catline/contracts';
+import { demoSettingTables } from './demo-setting-tables.js';
 
 // The invented demo scenario: a fictional training carrier, its squadrons and aircraft types.
 // Every name and number here is made up for the demo; none is real launch data. The hull code, the
@@ -150,6 +151,34 @@ export const demoAircraftTypes = [
       { grossWeightLb: 51_000, minLaunchAirspeedKt: 151 },
     ] satisfies LaunchTableRow[],
     storesCatalogue: strikeStores,
+    settingTables: demoSettingTables(
+      demoCatapults,
+      {
+        bow: [
+          [36_000, 7],
+          [38_000, 9],
+          [40_000, 11],
+          [42_000, 14],
+          [44_000, 16],
+          [46_000, 19],
+          [48_000, 22],
+          [50_000, 25],
+          [51_000, 27],
+        ],
+        waist: [
+          [36_000, 9],
+          [38_000, 11],
+          [40_000, 13],
+          [42_000, 16],
+          [44_000, 19],
+          [46_000, 22],
+          [48_000, 25],
+          [50_000, 28],
+          [51_000, 29],
+        ],
+      },
+      12,
+    ),
   },
   {
     designation: 'MSD-26',
@@ -175,6 +204,28 @@ export const demoAircraftTypes = [
       { name: 'Practice bomb', weightEachLb: 30 },
       { name: 'Rocket pod', weightEachLb: 520 },
     ] satisfies StoresItem[],
+    settingTables: demoSettingTables(
+      demoCatapults,
+      {
+        bow: [
+          [22_000, 0],
+          [24_000, 0],
+          [26_000, 2],
+          [28_000, 4],
+          [30_000, 6],
+          [31_000, 7],
+        ],
+        waist: [
+          [22_000, 0],
+          [24_000, 1],
+          [26_000, 3],
+          [28_000, 5],
+          [30_000, 7],
+          [31_000, 8],
+        ],
+      },
+      10,
+    ),
   },
   {
     designation: 'FGD-63',
@@ -193,6 +244,28 @@ export const demoAircraftTypes = [
       { grossWeightLb: 56_000, minLaunchAirspeedKt: 119 },
     ],
     storesCatalogue: [{ name: 'Cargo pannier', weightEachLb: 260 }] satisfies StoresItem[],
+    settingTables: demoSettingTables(
+      demoCatapults,
+      {
+        bow: [
+          [46_000, 8],
+          [48_000, 9],
+          [50_000, 11],
+          [52_000, 13],
+          [54_000, 15],
+          [56_000, 17],
+        ],
+        waist: [
+          [46_000, 9],
+          [48_000, 11],
+          [50_000, 13],
+          [52_000, 15],
+          [54_000, 17],
+          [56_000, 19],
+        ],
+      },
+      10,
+    ),
   },
 ];
 

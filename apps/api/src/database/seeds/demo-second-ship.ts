@@ -1,4 +1,5 @@
 import type { DeckLayout, DeckSpot, Role, ShipProfile } from '@catline/contracts';
+import { demoSettingTables } from './demo-setting-tables.js';
 import { demoCatapults } from './demo-fleet.js';
 
 // A second, smaller invented ship, so the demo (and the role matrix) shows that a ship's people see and
@@ -53,6 +54,19 @@ export const secondShipAircraftTypes = [
       { grossWeightLb: 24_000, minLaunchAirspeedKt: 122 },
     ],
     storesCatalogue: [{ name: 'Practice bomb', weightEachLb: 30 }],
+    settingTables: demoSettingTables(
+      secondShipCatapults,
+      {
+        bow: [
+          [18_000, 0],
+          [20_000, 0],
+          [22_000, 0],
+          [24_000, 1],
+        ],
+        waist: [],
+      },
+      10,
+    ),
   },
 ];
 

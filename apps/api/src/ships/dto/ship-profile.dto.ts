@@ -1,5 +1,6 @@
 import {
   DEFAULT_SHIP_TIME_ZONE,
+  DEFAULT_SETTING_CROSS_CHECK_TOLERANCE,
   DEFAULT_WIND_READING_MAX_AGE_MIN,
   READINESS_STEPS,
   type ReadinessStep,
@@ -96,6 +97,17 @@ export class ShipProfileDto implements ShipProfile {
   @Min(1, { message: 'windReadingMaxAgeMin must be at least 1 minute' })
   @Max(720, { message: 'windReadingMaxAgeMin must be at most 720 minutes' })
   windReadingMaxAgeMin?: number;
+
+  @ApiPropertyOptional({
+    minimum: 0,
+    maximum: 20,
+    description: `Settings the energy model's estimate may differ from the approved setting before the Cat station flags it; left out, ${DEFAULT_SETTING_CROSS_CHECK_TOLERANCE}.`,
+  })
+  @IsOptional()
+  @IsInt({ message: 'settingCrossCheckTolerance must be a whole number of settings' })
+  @Min(0, { message: 'settingCrossCheckTolerance must be at least 0 settings' })
+  @Max(20, { message: 'settingCrossCheckTolerance must be at most 20 settings' })
+  settingCrossCheckTolerance?: number;
 
   @ApiPropertyOptional({ description: `The ship's time zone, an IANA name; left out, ${DEFAULT_SHIP_TIME_ZONE}.` })
   @IsOptional()

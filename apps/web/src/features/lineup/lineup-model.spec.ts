@@ -283,6 +283,8 @@ describe('lineupWarnings', () => {
       ...snapshot.slots[1],
       figures: {
         catapultSetting: null,
+        crossCheckSetting: null,
+        crossCheckFlagged: null,
         endSpeedKt: 120,
         requiredAirspeedKt: 140,
         requiredWindOverDeckKt: 30,
@@ -359,6 +361,8 @@ describe('lineupWarnings', () => {
       ...snapshot.slots[2],
       figures: {
         catapultSetting: 20,
+        crossCheckSetting: 20,
+        crossCheckFlagged: false,
         endSpeedKt: 150,
         requiredAirspeedKt: 140,
         requiredWindOverDeckKt: 10,

@@ -15,6 +15,10 @@ import {
   type ShipView,
   type SquadronView,
   type StoresItem,
+  LAUNCH_CONFIGURATIONS,
+  type LaunchConfiguration,
+  type SettingTable,
+  type SettingTableRow,
   type TrimBand,
   type UserView,
 } from '@catline/contracts';
@@ -162,6 +166,12 @@ export class ShipProfileDto implements ShipProfile {
   @ApiPropertyOptional({ type: 'integer', description: 'Minutes a wind reading stays fresh; left out, 30.' })
   windReadingMaxAgeMin?: number;
 
+  @ApiPropertyOptional({
+    type: 'integer',
+    description: 'Settings the energy model may differ from the approved setting before it is flagged; left out, 2.',
+  })
+  settingCrossCheckTolerance?: number;
+
   @ApiPropertyOptional({ description: 'The ship’s time zone, an IANA name; left out, UTC.' })
   timeZone?: string;
 }
@@ -235,6 +245,30 @@ export class StoresItemDto implements StoresItem {
   weightEachLb: number;
 }
 
+@ApiSchema({ name: 'SettingTableRow' })
+export class SettingTableRowDto implements SettingTableRow {
+  @IntProperty({ minimum: 1, description: 'Upper gross-weight bound of the row, pounds (inclusive).' })
+  upToLb: number;
+
+  @IntProperty({ minimum: 0 })
+  setting: number;
+}
+
+@ApiSchema({ name: 'SettingTable' })
+export class SettingTableDto implements SettingTable {
+  @IntProperty({ minimum: 1 })
+  catapultNumber: number;
+
+  @EnumProperty(LAUNCH_CONFIGURATIONS, 'LaunchConfiguration')
+  configuration: LaunchConfiguration;
+
+  @ApiProperty({ description: 'Knots.' })
+  recommendedExcessKt: number;
+
+  @ApiProperty({ type: [SettingTableRowDto], description: 'By strictly rising weight.' })
+  rows: SettingTableRow[];
+}
+
 @ApiSchema({ name: 'AircraftTypeView' })
 export class AircraftTypeViewDto implements AircraftTypeView {
   @IdProperty()
@@ -283,6 +317,12 @@ export class AircraftTypeViewDto implements AircraftTypeView {
 
   @ApiProperty({ type: [StoresItemDto], description: 'Ordered by name.' })
   storesCatalogue: StoresItem[];
+
+  @ApiProperty({
+    type: [SettingTableDto],
+    description: 'The approved catapult settings; by catapult, then configuration.',
+  })
+  settingTables: SettingTable[];
 }
 
 @ApiSchema({ name: 'AircraftView' })

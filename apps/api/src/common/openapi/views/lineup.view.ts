@@ -71,8 +71,26 @@ export class LaunchFiguresDto implements LaunchFigures {
   @EnumProperty(CROSSWIND_SIDES, 'CrosswindSide')
   crosswindSide: CrosswindSide;
 
-  @IntProperty({ nullable: true, description: 'Lowest setting reaching the wanted end speed; null when out of range.' })
+  @IntProperty({
+    nullable: true,
+    description:
+      "From the ship's approved launch data for the catapult, type and configuration; null when it gives none.",
+  })
   catapultSetting: number | null;
+
+  @IntProperty({
+    nullable: true,
+    description: "The energy model's setting, the cross-check; null when no setting reaches the end speed wanted.",
+  })
+  crossCheckSetting: number | null;
+
+  @ApiProperty({
+    type: Boolean,
+    nullable: true,
+    description:
+      "The cross-check differs from the approved setting by more than the ship's tolerance; null where not judged.",
+  })
+  crossCheckFlagged: boolean | null;
 
   @ApiProperty({ description: 'Knots.' })
   endSpeedKt: number;

@@ -4,6 +4,7 @@ import { FigureStat } from '../../../components/figure-stat.js';
 import { GoBadge } from '../../../components/go-badge.js';
 import { GrossWeightParts, storesLines } from '../../../components/gross-weight-parts.js';
 import { formatClock, formatKnots, formatPounds, formatSignedKnots } from '../../../lib/format.js';
+import { crossCheckWarning, excessTone } from '../launch-setting-model.js';
 
 function agreement(at: string | null) {
   return at ? `Yes, ${formatClock(at)}` : 'Not yet';
@@ -18,6 +19,7 @@ function armState({ armState: state, armStateAt: at, armStateBy: by }: SlotView)
 /** The launch figures of the aircraft on the catapult, large enough for a glance from the deck edge. */
 export function AircraftFigures({ slot }: { slot: SlotView }) {
   const figures = slot.figures;
+  const warning = figures && crossCheckWarning(figures);
   return (
     <Stack gap="3">
       <SimpleGrid columns={{ base: 2, md: 3 }} gap="3" data-testid="cat-figures">
@@ -35,14 +37,26 @@ export function AircraftFigures({ slot }: { slot: SlotView }) {
           size="md"
         />
         <FigureStat
-          label="Catapult setting"
-          value={figures?.catapultSetting ?? 'Out of range'}
+          label="Catapult setting (approved data)"
+          value={figures?.catapultSetting ?? 'None approved'}
           tone={figures?.catapultSetting == null ? 'nogo' : undefined}
           size="xl"
+        />
+        <FigureStat
+          label="Energy model cross-check"
+          value={figures?.crossCheckSetting ?? 'No setting'}
+          tone={figures?.crossCheckFlagged ? 'caution' : undefined}
+          size="md"
         />
         <FigureStat label="End speed" value={figures ? formatKnots(figures.endSpeedKt) : '—'} />
         <FigureStat label="Required wind over deck" value={formatKnots(figures?.requiredWindOverDeckKt ?? null)} />
         <FigureStat label="Headwind" value={figures ? formatKnots(figures.headwindKt) : '—'} />
+        <FigureStat
+          label="Excess wind over deck"
+          value={formatSignedKnots(figures?.excessWindOverDeckKt ?? null)}
+          tone={excessTone(figures?.excessWindOverDeckKt ?? null, figures?.recommendedExcessKt ?? null)}
+        />
+        <FigureStat label="Recommended excess" value={formatKnots(figures?.recommendedExcessKt ?? null)} />
         <FigureStat
           label="Margin"
           value={formatSignedKnots(figures?.marginKt ?? null)}
@@ -62,6 +76,11 @@ export function AircraftFigures({ slot }: { slot: SlotView }) {
           size="md"
         />
       </SimpleGrid>
+      {warning && (
+        <Text role="alert" color="caution.fg" fontWeight="600" data-testid="setting-cross-check">
+          {warning}
+        </Text>
+      )}
       {slot.grossWeightParts && (
         <Box data-testid="cat-weight-parts">
           <GrossWeightParts parts={slot.grossWeightParts} fontSize="sm" />

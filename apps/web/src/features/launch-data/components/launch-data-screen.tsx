@@ -14,6 +14,7 @@ import { formatTrimBands } from '../launch-data-model.js';
 import { AircraftTypeForm } from './aircraft-type-form.js';
 import { LaunchTableEditor } from './launch-table-editor.js';
 import { LaunchTableImport } from './launch-table-import.js';
+import { SettingTablesEditor } from './setting-tables-editor.js';
 import { StoresCatalogueEditor } from './stores-catalogue-editor.js';
 
 function TypeDetail({ type, editable }: { type: AircraftTypeView; editable: boolean }) {
@@ -63,6 +64,12 @@ function TypeDetail({ type, editable }: { type: AircraftTypeView; editable: bool
           Launch table
         </Text>
         <LaunchTableEditor key={`${type.id}-${JSON.stringify(type.launchTable)}`} type={type} editable={editable} />
+      </Box>
+      <Box as="section" aria-label="Approved catapult settings">
+        <Text fontWeight="700" mb="2">
+          Approved catapult settings
+        </Text>
+        <SettingTablesEditor key={`${type.id}-${JSON.stringify(type.settingTables)}`} type={type} editable={editable} />
       </Box>
       <Box as="section" aria-label="Stores catalogue">
         <Text fontWeight="700" mb="2">

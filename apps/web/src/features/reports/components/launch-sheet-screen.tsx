@@ -112,7 +112,7 @@ function SheetRow({ slot, place }: { slot: SlotView; place: number }) {
     slot.pilotName ?? '—',
     slot.launchedAt ? `Off ${formatClock(slot.launchedAt)}` : formatOptionalClock(slot.projectedLaunchAt),
     formatPounds(slot.launchRecord?.grossWeightLb ?? slot.grossWeightLb),
-    figures?.catapultSetting ?? 'Out of range',
+    figures?.catapultSetting ?? 'None approved',
     figures ? formatKnots(figures.endSpeedKt) : '—',
     formatKnots(figures?.requiredWindOverDeckKt ?? null),
     formatSignedKnots(figures?.marginKt ?? null),

@@ -1,6 +1,6 @@
 import type { LineupCommandResult, SpareCandidate, SuggestedLineup } from '@catline/contracts';
 import type { INestApplication } from '@nestjs/common';
-import { AIR_OPS, HANDLER, LineupDriver, catapultOfficer, pilot } from './support/lineup-fixtures.js';
+import { AIR_OPS, HANDLER, LineupDriver, catapultOfficer, launchKey, pilot } from './support/lineup-fixtures.js';
 import { startTestApp } from './support/test-app.js';
 
 describe('spares, down aircraft, pilots and returns to the pool', () => {
@@ -161,6 +161,46 @@ describe('spares, down aircraft, pilots and returns to the pool', () => {
     );
     after = await deck.snapshot(cycle.id);
     expect(after.lanes.find((lane) => lane.number === 1)!.slotIds).toEqual([]);
+  });
+
+  it('returns an aircraft from the last step before the launch, and refuses one already launched', async () => {
+    const cycle = await deck.createCycle();
+    const ready = await deck.addSlot(cycle.id, 'C26', { pilotEmail: pilot(8) });
+    const launched = await deck.addSlot(cycle.id, 'C27', { pilotEmail: pilot(9) });
+    await deck.place(cycle.id, launched.id, 2);
+    await deck.place(cycle.id, ready.id, 1);
+    await deck.start(cycle.id);
+    expect(await deck.readyToLaunch(cycle.id, ready.id, pilot(8))).toMatchObject({ status: 'pilot_ready' });
+
+    const atPilotReady = await deck.slot(cycle.id, ready.id);
+    const returned = await deck.ok<LineupCommandResult>(
+      catapultOfficer(1),
+      'post',
+      slotPath(cycle.id, ready.id, 'return'),
+      { slotVersion: atPilotReady.version, reason: 'Pilot reports a canopy seal warning' },
+    );
+    expect(returned.change.summary).toBe(
+      'C26 returned from cat 1 to the deck pool: Pilot reports a canopy seal warning',
+    );
+    const after = await deck.snapshot(cycle.id);
+    expect(after.pool).toContain(ready.id);
+    expect(after.slots.find((slot) => slot.id === ready.id)).toMatchObject({
+      status: 'planned',
+      catapultWeightAckAt: null,
+    });
+
+    const shot = await deck.launch(cycle.id, await deck.readyToLaunch(cycle.id, launched.id, pilot(9)), launchKey());
+    expect(shot.status).toBe(200);
+    const gone = await deck.slot(cycle.id, launched.id);
+    const refused = await deck.call(catapultOfficer(2), 'post', slotPath(cycle.id, launched.id, 'return'), {
+      slotVersion: gone.version,
+      reason: 'Too late',
+    });
+    expect(refused.status).toBe(409);
+    expect(refused.body).toMatchObject({
+      code: 'wrong_step',
+      message: 'C27 is launched; only an aircraft taxiing or on the catapult returns to the pool.',
+    });
   });
 
   it('keeps a pilot-less aircraft out of every catapult order, so it never waits on a catapult for a pilot', async () => {

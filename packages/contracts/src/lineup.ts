@@ -21,12 +21,17 @@ export const SLOT_STATUSES = [
 ] as const;
 export type SlotStatus = (typeof SLOT_STATUSES)[number];
 
-/** Past planned and not yet launched: the aircraft that can leave the catapult for the deck pool. */
+/** Past planned and not yet launched, at any readiness step: the aircraft that can leave the catapult for the deck pool. */
 export const RETURNABLE_STATUSES: readonly SlotStatus[] = [
   'taxiing',
   'on_catapult',
   'weight_agreed',
+  'setting_set',
+  'deflector_up',
   'tensioned',
+  'run_up',
+  'checks_clear',
+  'pilot_ready',
   'suspended',
 ];
 

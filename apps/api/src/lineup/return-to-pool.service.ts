@@ -46,7 +46,7 @@ export class ReturnToPoolService {
       if (!RETURNABLE_STATUSES.includes(slot.status)) {
         throw new LineupException(
           'wrong_step',
-          `${side} is ${slot.status.replaceAll('_', ' ')}; only a taxiing or on-catapult aircraft returns to the pool.`,
+          `${side} is ${slot.status.replaceAll('_', ' ')}; only an aircraft taxiing or on the catapult returns to the pool.`,
         );
       }
       const now = this.clock.now();

@@ -124,13 +124,31 @@ describe('the respot: targets, the ordered tows, the ticks and the next cycle', 
     expect((await deck.call(OBSERVER, 'post', `/api/cycles/${cycle.id}/deck/respot`, {})).status).toBe(403);
   });
 
-  it('waits for the last launch, and the recovered aircraft start the next cycle on their targets', async () => {
-    // Planned on the first half past the hour over an hour from now, the next cycle a minute later: the
-    // demo's cycles sit on whole hours and those of earlier tests within the hour from their start, so no
-    // other cycle falls in between to hold D35 (the demo's day cycle once did, at one minute to the hour).
+  /**
+   * The first half past the hour over an hour from now: a test's cycle planned on it, and the next a minute
+   * later, have no other cycle in between to hold their aircraft, since the demo's cycles sit on whole hours
+   * and those of earlier tests within the hour from their start (the demo's day cycle once held D35, at one
+   * minute to the hour).
+   */
+  const quietHalfHour = () => {
     const earliest = Date.now() + 61 * 60_000;
     const halfPast = Math.floor(earliest / HOUR) * HOUR + HOUR / 2;
-    const planned = halfPast >= earliest ? halfPast : halfPast + HOUR;
+    return halfPast >= earliest ? halfPast : halfPast + HOUR;
+  };
+
+  it('starts an aircraft the next cycle where a tow left it, though it did not launch', async () => {
+    const planned = quietHalfHour();
+    const cycle = await deck.createCycle(plannedAt(planned));
+    const stayer = await deck.addSlot(cycle.id, 'D42');
+    if (stayer.deckPosition?.kind !== 'hangar') await towTo(cycle.id, stayer.id, bayA);
+    await towTo(cycle.id, stayer.id, spot('stern-1'));
+    const next = await deck.createCycle(plannedAt(planned + 60_000));
+    const again = await deck.addSlot(next.id, 'D42');
+    expect(again.deckPosition).toEqual(spot('stern-1'));
+  });
+
+  it('waits for the last launch, and the recovered aircraft start the next cycle on their targets', async () => {
+    const planned = quietHalfHour();
     const cycle = await deck.createCycle(plannedAt(planned));
     const flyer = await deck.addSlot(cycle.id, 'D35', { pilotEmail: pilot(5) });
     await deck.place(cycle.id, flyer.id, 1);

@@ -333,35 +333,38 @@ describe('readiness steps and launch', () => {
     });
   });
 
-  it('drops an aircraft past the weight agreement back to it when the wind changes, until the setting is read back', async () => {
-    const { cycle, first } = await executingCycle(pilot(7));
-    await deck.readyToLaunch(cycle.id, first.id, pilot(7));
-    const { version } = await deck.snapshot(cycle.id);
-    const changed = await deck.ok<{ change: { summary: string } }>(
-      AIR_OPS,
-      'patch',
-      `/api/cycles/${cycle.id}/conditions`,
-      {
-        basisVersion: version,
-        trueWindSpeedKt: 14,
-      },
-    );
-    expect(changed.change.summary).toBe('Conditions: wind 0° 14 kt; re-verify: C21 to weight agreed');
-    const dropped = await deck.slot(cycle.id, first.id);
-    expect(dropped).toMatchObject({ status: 'weight_agreed', reverifyCause: 'wind' });
-    expect(dropped.gates).toEqual([expect.objectContaining({ gate: 'reverify_required', soft: false })]);
-    const refused = await deck.launch(cycle.id, dropped, launchKey());
-    expect(refused.body).toMatchObject({
-      code: 'reverify_required',
-      message: 'Figures changed (the wind) — re-verify the setting for C21.',
-    });
+  it.each([
+    ['the wind', { trueWindSpeedKt: 14 }, 'wind 0° 14 kt', 'wind'],
+    ['the ship’s speed', { shipSpeedKt: 28 }, 'ship 0° 28 kt', 'ship_speed'],
+  ])(
+    'drops an aircraft past the weight agreement back to it when %s changes, until the setting is read back',
+    async (what, conditions, described, cause) => {
+      const { cycle, first } = await executingCycle(pilot(7));
+      await deck.readyToLaunch(cycle.id, first.id, pilot(7));
+      const { version } = await deck.snapshot(cycle.id);
+      const changed = await deck.ok<{ change: { summary: string } }>(
+        AIR_OPS,
+        'patch',
+        `/api/cycles/${cycle.id}/conditions`,
+        { basisVersion: version, ...conditions },
+      );
+      expect(changed.change.summary).toBe(`Conditions: ${described}; re-verify: C21 to weight agreed`);
+      const dropped = await deck.slot(cycle.id, first.id);
+      expect(dropped).toMatchObject({ status: 'weight_agreed', reverifyCause: cause });
+      expect(dropped.gates).toEqual([expect.objectContaining({ gate: 'reverify_required', soft: false })]);
+      const refused = await deck.launch(cycle.id, dropped, launchKey());
+      expect(refused.body).toMatchObject({
+        code: 'reverify_required',
+        message: `Figures changed (${what}) — re-verify the setting for C21.`,
+      });
 
-    expect((await deck.step(cycle.id, first.id, 'setting_set')).status).toBe(200);
-    expect(await deck.slot(cycle.id, first.id)).toMatchObject({ reverifyCause: null, gates: [] });
-    await deck.stepThrough(cycle.id, first.id);
-    const verified = await deck.slot(cycle.id, first.id);
-    expect((await deck.launch(cycle.id, verified, launchKey())).status).toBe(200);
-  });
+      expect((await deck.step(cycle.id, first.id, 'setting_set')).status).toBe(200);
+      expect(await deck.slot(cycle.id, first.id)).toMatchObject({ reverifyCause: null, gates: [] });
+      await deck.stepThrough(cycle.id, first.id);
+      const verified = await deck.slot(cycle.id, first.id);
+      expect((await deck.launch(cycle.id, verified, launchKey())).status).toBe(200);
+    },
+  );
 
   it('refuses a launch from a catapult marked down, with its own code', async () => {
     const { cycle, first, second } = await executingCycle(pilot(2));

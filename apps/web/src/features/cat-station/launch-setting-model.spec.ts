@@ -1,6 +1,6 @@
 import type { LaunchFigures } from '@catline/contracts';
 import { describe, expect, it } from 'vitest';
-import { crossCheckWarning, excessTone } from './launch-setting-model.js';
+import { crossCheckWarning, excessTone, marginTone } from './launch-setting-model.js';
 
 describe('the excess wind over deck beside the recommended excess', () => {
   it('is no-go below zero, a caution short of the recommended excess, go at or above it', () => {
@@ -9,6 +9,15 @@ describe('the excess wind over deck beside the recommended excess', () => {
     expect(excessTone(11.9, 12)).toBe('caution');
     expect(excessTone(12, 12)).toBe('go');
     expect(excessTone(null, 12)).toBeUndefined();
+  });
+});
+
+describe('the margin', () => {
+  it('is no-go only below zero, whatever else holds the shot', () => {
+    expect(marginTone(-0.5)).toBe('nogo');
+    expect(marginTone(0)).toBe('go');
+    expect(marginTone(7.4)).toBe('go');
+    expect(marginTone(null)).toBeUndefined();
   });
 });
 

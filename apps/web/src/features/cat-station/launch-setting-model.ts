@@ -3,6 +3,15 @@ import type { LaunchFigures } from '@catline/contracts';
 export type FigureTone = 'go' | 'nogo' | 'caution';
 
 /**
+ * The margin's colour by its own sign: a positive margin never shows in the danger colour, even while
+ * another limit (crosswind, weight) holds the shot; those are named among the reasons below the figures.
+ */
+export function marginTone(marginKt: number | null): FigureTone | undefined {
+  if (marginKt === null) return undefined;
+  return marginKt < 0 ? 'nogo' : 'go';
+}
+
+/**
  * The excess wind over deck's colour beside the recommended excess: below zero is a hard no-go, short
  * of the recommended value a caution (the air boss may waive it), at or above it go.
  */

@@ -4,7 +4,7 @@ import { FigureStat } from '../../../components/figure-stat.js';
 import { GoBadge } from '../../../components/go-badge.js';
 import { GrossWeightParts, storesLines } from '../../../components/gross-weight-parts.js';
 import { formatClock, formatKnots, formatPounds, formatSignedKnots } from '../../../lib/format.js';
-import { crossCheckWarning, excessTone } from '../launch-setting-model.js';
+import { crossCheckWarning, excessTone, marginTone } from '../launch-setting-model.js';
 
 function agreement(at: string | null) {
   return at ? `Yes, ${formatClock(at)}` : 'Not yet';
@@ -60,7 +60,7 @@ export function AircraftFigures({ slot }: { slot: SlotView }) {
         <FigureStat
           label="Margin"
           value={formatSignedKnots(figures?.marginKt ?? null)}
-          tone={figures?.go ? 'go' : 'nogo'}
+          tone={marginTone(figures?.marginKt ?? null)}
           size="xl"
         />
         <FigureStat label="Trim" value={slot.trimDeg === null ? '—' : `${slot.trimDeg}°`} />

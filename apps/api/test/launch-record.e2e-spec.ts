@@ -45,6 +45,8 @@ describe('the launch record', () => {
       crosswindKt: ready.figures!.crosswindKt,
       endSpeedKt: ready.figures!.endSpeedKt,
       excessWindKt: ready.figures!.marginKt,
+      excessWindOverDeckKt: ready.figures!.excessWindOverDeckKt,
+      recommendedExcessKt: ready.figures!.recommendedExcessKt,
       launchDataSetting: ready.figures!.catapultSetting,
       crossCheckSetting: ready.figures!.crossCheckSetting,
       trimDeg: ready.trimDeg,
@@ -92,7 +94,9 @@ describe('the launch record', () => {
       wind_speed_kt: '10',
       headwind_kt: String(record.headwindKt),
       end_speed_kt: String(record.endSpeedKt),
-      excess_wind_kt: String(record.excessWindKt),
+      margin_kt: String(record.excessWindKt),
+      excess_wind_over_deck_kt: String(record.excessWindOverDeckKt),
+      recommended_excess_kt: String(record.recommendedExcessKt),
       fired_by: record.firedBy!.name,
     });
     expect(rows.find((candidate) => Number(candidate.slot_id) === waiting.id)!.record_source).toBe('');

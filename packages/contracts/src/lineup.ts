@@ -195,6 +195,12 @@ export interface LaunchRecord {
   requiredWindOverDeckKt: number | null;
   /** Headwind along the catapult minus the wind over deck required (the launch margin), knots. */
   excessWindKt: number | null;
+  /**
+   * The excess wind over deck the station showed and the type's recommended excess beside it, knots;
+   * null in a record kept before they were, or rebuilt without figures.
+   */
+  excessWindOverDeckKt: number | null;
+  recommendedExcessKt: number | null;
   /** The figures' verdict at the shot and why it was no-go, if it was. */
   go: boolean | null;
   reasons: NoGoReason[];

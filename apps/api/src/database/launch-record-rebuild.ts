@@ -76,6 +76,8 @@ export function rebuildLaunchRecord(slot: LaunchedSlotRow, change: LaunchChangeR
     requiredAirspeedKt: figures?.requiredAirspeedKt ?? null,
     requiredWindOverDeckKt: figures?.requiredWindOverDeckKt ?? null,
     excessWindKt: figures?.marginKt ?? null,
+    excessWindOverDeckKt: figures?.excessWindOverDeckKt ?? null,
+    recommendedExcessKt: figures?.recommendedExcessKt ?? null,
     go: figures?.go ?? null,
     reasons: figures?.reasons ?? [],
     trimDeg: view?.trimDeg ?? null,

@@ -213,6 +213,21 @@ export class LaunchRecordDto implements LaunchRecord {
   @ApiProperty({ type: Number, nullable: true, description: 'The launch margin, knots.' })
   excessWindKt: number | null;
 
+  @ApiProperty({
+    type: Number,
+    nullable: true,
+    description: 'The excess wind over deck shown at the shot, knots; null in a record kept before it was.',
+  })
+  excessWindOverDeckKt: number | null;
+
+  @ApiProperty({
+    type: Number,
+    nullable: true,
+    description:
+      "The type's recommended excess wind over deck at the shot, knots; null in a record kept before it was.",
+  })
+  recommendedExcessKt: number | null;
+
   @ApiProperty({ type: Boolean, nullable: true })
   go: boolean | null;
 

@@ -34,7 +34,12 @@ const columns: ReportColumn<ReportLaunch>[] = [
   },
   { header: 'Headwind', cell: (launch) => formatKnots(launch.launchRecord?.headwindKt ?? null), numeric: true },
   { header: 'End speed', cell: (launch) => formatKnots(launch.launchRecord?.endSpeedKt ?? null), numeric: true },
-  { header: 'Excess', cell: (launch) => formatSignedKnots(launch.launchRecord?.excessWindKt ?? null), numeric: true },
+  {
+    header: 'Excess WOD',
+    cell: (launch) => formatSignedKnots(launch.launchRecord?.excessWindOverDeckKt ?? null),
+    numeric: true,
+  },
+  { header: 'Margin', cell: (launch) => formatSignedKnots(launch.launchRecord?.excessWindKt ?? null), numeric: true },
   { header: 'Fired by', cell: (launch) => launch.launchRecord?.firedBy?.name ?? '—' },
 ];
 

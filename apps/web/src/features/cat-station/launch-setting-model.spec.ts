@@ -13,11 +13,12 @@ describe('the excess wind over deck beside the recommended excess', () => {
 });
 
 describe('the margin', () => {
-  it('is no-go only below zero, whatever else holds the shot', () => {
-    expect(marginTone(-0.5)).toBe('nogo');
-    expect(marginTone(0)).toBe('go');
-    expect(marginTone(7.4)).toBe('go');
-    expect(marginTone(null)).toBeUndefined();
+  it('is go at or above zero whatever else holds the shot, a caution below it, no-go once the excess is too', () => {
+    expect(marginTone(0, 12)).toBe('go');
+    expect(marginTone(7.4, 19.4)).toBe('go');
+    expect(marginTone(-0.5, 11.5)).toBe('caution');
+    expect(marginTone(-12.5, -0.5)).toBe('nogo');
+    expect(marginTone(null, null)).toBeUndefined();
   });
 });
 

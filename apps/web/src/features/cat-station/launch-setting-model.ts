@@ -5,10 +5,13 @@ export type FigureTone = 'go' | 'nogo' | 'caution';
 /**
  * The margin's colour by its own sign: a positive margin never shows in the danger colour, even while
  * another limit (crosswind, weight) holds the shot; those are named among the reasons below the figures.
+ * The margin counts the recommended excess, so below zero it is a caution (the air boss may waive it)
+ * until the excess wind over deck itself is below zero.
  */
-export function marginTone(marginKt: number | null): FigureTone | undefined {
+export function marginTone(marginKt: number | null, excessKt: number | null): FigureTone | undefined {
   if (marginKt === null) return undefined;
-  return marginKt < 0 ? 'nogo' : 'go';
+  if (marginKt >= 0) return 'go';
+  return excessKt !== null && excessKt < 0 ? 'nogo' : 'caution';
 }
 
 /**

@@ -60,7 +60,7 @@ export function AircraftFigures({ slot }: { slot: SlotView }) {
         <FigureStat
           label="Margin"
           value={formatSignedKnots(figures?.marginKt ?? null)}
-          tone={marginTone(figures?.marginKt ?? null)}
+          tone={marginTone(figures?.marginKt ?? null, figures?.excessWindOverDeckKt ?? null)}
           size="xl"
         />
         <FigureStat label="Trim" value={slot.trimDeg === null ? '—' : `${slot.trimDeg}°`} />

@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { Button, HStack, Input, Stack, Text } from '@chakra-ui/react';
+import { Button, HStack, Input, SimpleGrid, Stack, Text } from '@chakra-ui/react';
 import type { LaneView, LineupSnapshot } from '@catline/contracts';
 import { DeckStatusLine } from '../../../components/deck-status-line.js';
 import { NoticeBanner, refusalNotice, useNotice } from '../../../components/refusal-notice.js';
@@ -99,9 +99,11 @@ export function DeckStatusControl({ snapshot }: { snapshot: LineupSnapshot }) {
       data-testid="deck-status-control"
     >
       <Text fontWeight="700">Deck status</Text>
-      {lanes.map((lane) => (
-        <CatapultDeckStatus key={lane.catapultId} lane={lane} snapshot={snapshot} sets={sets} />
-      ))}
+      <SimpleGrid columns={{ base: 1, sm: 2, xl: 4 }} gap="3">
+        {lanes.map((lane) => (
+          <CatapultDeckStatus key={lane.catapultId} lane={lane} snapshot={snapshot} sets={sets} />
+        ))}
+      </SimpleGrid>
     </Stack>
   );
 }

@@ -50,6 +50,8 @@ test('the air boss holds a catapult with a reason and waives a soft limit; the h
     .click();
   const dialog = boardOfBoss.getByRole('dialog');
   await expect(dialog).toContainText('is below the recommended');
+  // The waiver states the excess wind over deck, a launch figure: the caution goes with it.
+  await expect(dialog.getByTestId('caution-line')).toBeVisible();
   await dialog.getByRole('button', { name: 'Grant waiver' }).click();
   await expect(dialog.getByText('Say why.')).toBeVisible();
   await dialog.getByLabel('Reason').fill('Ship cannot make more wind');

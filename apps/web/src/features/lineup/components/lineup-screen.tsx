@@ -297,6 +297,7 @@ function LineupWorkspace({ snapshot }: { snapshot: LineupSnapshot }) {
           explanation={`${dialog.gate.message} It may launch under your waiver, marked in its record and the cycle's report.`}
           confirmLabel="Grant waiver"
           placeholder="e.g. ship cannot make more wind"
+          showsFigures
           pending={waive.isPending}
           onClose={close}
           onConfirm={(reason) =>

@@ -97,14 +97,22 @@ function crewOf(aircraft: PlannedAircraft[], pilots: UserView[]): (number | unde
   });
 }
 
+/** The wind and the ship's way a cycle is planned in, when a test needs other than good wind. */
+export interface PlannedWind {
+  shipSpeedKt: number;
+  trueWindFromDeg: number;
+  trueWindSpeedKt: number;
+}
+
 export interface PlanOptions {
   aircraft: PlannedAircraft[];
   start?: boolean;
   night?: boolean;
+  wind?: PlannedWind;
 }
 
-/** Air operations creates a cycle flying now in good wind, with the given aircraft in its deck pool. */
-export async function planCycle({ aircraft, start = false, night = false }: PlanOptions) {
+/** Air operations creates a cycle flying now (in good wind unless told), with the given aircraft in its deck pool. */
+export async function planCycle({ aircraft, start = false, night = false, wind }: PlanOptions) {
   const airops = await apiAs('airops');
   const [ship] = await ok<ShipView[]>(await airops.get('/api/ships'));
   const cycles = await allOf<CycleView>(airops, '/api/cycles');
@@ -121,6 +129,7 @@ export async function planCycle({ aircraft, start = false, night = false }: Plan
         shipSpeedKt: 25,
         trueWindFromDeg: 0,
         trueWindSpeedKt: 12,
+        ...wind,
         temperatureC: 18,
         pressureHpa: 1015,
         weatherCase: night ? 'III' : 'I',

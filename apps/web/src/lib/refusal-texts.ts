@@ -156,6 +156,9 @@ const REASONS: Record<RefusalCode, string> = {
 
 const isRefusalCode = (code: string): code is RefusalCode => Object.hasOwn(REASONS, code);
 
+/** Why, in a few words: the same words a refusal of that code gives. */
+export const refusalReason = (code: RefusalCode): string => REASONS[code];
+
 /**
  * The notice for a refused `action` (e.g. "Moving 104"), chosen by the server's code; `message` is the
  * server's own sentence, which names the figures. An unknown code (no answer at all) says only that it

@@ -2,10 +2,20 @@ import {
   ARM_STATE_ACTION_LABELS,
   ARM_STATES,
   RETURNABLE_STATUSES,
+  SOFT_LAUNCH_GATE_CODES,
   type ArmState,
+  type LaunchGateView,
   type SlotView,
+  type SoftLaunchGateCode,
 } from '@catline/contracts';
+import { refusalReason } from '../../lib/refusal-texts.js';
 import { isDone } from './lineup-model.js';
+
+/** A closed launch gate the air boss may waive. */
+export type SoftGateView = LaunchGateView & { gate: SoftLaunchGateCode };
+
+const waivable = (gate: LaunchGateView): gate is SoftGateView =>
+  !gate.waived && (SOFT_LAUNCH_GATE_CODES as readonly string[]).includes(gate.gate);
 
 /** One entry of a slot card's menu. */
 export interface SlotAction {
@@ -26,6 +36,7 @@ export interface SlotActionHandlers {
   returnToPool: (slot: SlotView) => void;
   setLoad: (slot: SlotView) => void;
   recordArmState: (slot: SlotView, armState: ArmState) => void;
+  waive: (slot: SlotView, gate: SoftGateView) => void;
 }
 
 /** What the signed-in person may do from a card: the handler arranges; air operations too plans each sortie. */
@@ -33,6 +44,8 @@ export interface SlotActionRights {
   arranges: boolean;
   /** Its pilot, fuel and stores. */
   plans: boolean;
+  /** The air boss grants waivers of soft launch gates. */
+  waives: boolean;
 }
 
 /**
@@ -42,6 +55,16 @@ export interface SlotActionRights {
  */
 export function slotActions(slot: SlotView, rights: SlotActionRights, handlers: SlotActionHandlers): SlotAction[] {
   const actions: SlotAction[] = [];
+  // One entry per soft gate still closed: each waiver is its own decision with its own reason.
+  if (rights.waives) {
+    for (const gate of (slot.gates ?? []).filter(waivable)) {
+      actions.push({
+        id: `waive-${gate.gate}`,
+        label: `Grant waiver: ${refusalReason(gate.gate)}…`,
+        run: () => handlers.waive(slot, gate),
+      });
+    }
+  }
   // Fuel changes until the launch (a hot refuel); the server refuses it on a launched or scratched slot.
   if (rights.plans && slot.status !== 'launched' && slot.status !== 'scratched') {
     actions.push({ id: 'set-load', label: 'Fuel and stores…', run: () => handlers.setLoad(slot) });

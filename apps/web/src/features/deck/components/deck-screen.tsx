@@ -25,6 +25,7 @@ import { useTowAircraft } from '../api/tow-aircraft.js';
 import { deckPanels, positionFromKey, positionKey } from '../deck-model.js';
 import { useDeckDrag } from '../hooks/use-deck-drag.js';
 import { DeckPlaceRow } from './deck-place-row.js';
+import { DeckStatusControl } from './deck-status-control.js';
 import { LiftedChip, PositionChip } from './position-chip.js';
 import { RespotPanel } from './respot-panel.js';
 
@@ -103,6 +104,7 @@ function DeckWorkspace({ snapshot, ship }: { snapshot: LineupSnapshot; ship: Shi
     <Stack gap="2">
       {notice && <NoticeBanner notice={notice} onDismiss={dismiss} />}
       <LandingAreaControl snapshot={snapshot} />
+      <DeckStatusControl snapshot={snapshot} />
       <RespotPanel snapshot={snapshot} panels={panels} live={live} />
       <DndContext {...drag.contextProps}>
         <SimpleGrid columns={{ base: 2, lg: 3 }} gap="2">
@@ -129,7 +131,7 @@ function DeckWorkspace({ snapshot, ship }: { snapshot: LineupSnapshot; ship: Shi
   );
 }
 
-/** The deck: every aircraft of the cycle on its position, the landing area, and the handler's tows. */
+/** The deck: every aircraft of the cycle on its position, the landing area, each catapult's deck status, and the handler's tows. */
 export function DeckScreen() {
   const { cycles, cycle, choose, finding } = useViewedCycle();
   const live = useLiveCycle(cycle?.id);

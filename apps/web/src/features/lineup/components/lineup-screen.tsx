@@ -24,8 +24,9 @@ import { useReturnToPool } from '../api/return-to-pool.js';
 import { useSetLoad } from '../api/set-load.js';
 import { useSetCatapultStatus } from '../api/set-catapult-status.js';
 import { useUpAgain } from '../api/up-again.js';
+import { useWaiveGate } from '../api/waive-gate.js';
 import { isDone, lineupWarnings } from '../lineup-model.js';
-import { slotActions } from '../slot-actions.js';
+import { slotActions, type SoftGateView } from '../slot-actions.js';
 import { AssignPilotDialog } from './assign-pilot-dialog.js';
 import { CallSpareDialog } from './call-spare-dialog.js';
 import { CatapultStatusDialog } from './catapult-status-dialog.js';
@@ -41,6 +42,7 @@ type OpenDialog =
   /** `warning`: the server's sentence naming the aircraft a catapult down would suspend, to confirm. */
   | { kind: 'catapult'; lane: LaneView; warning?: string }
   | { kind: 'suggestion' }
+  | { kind: 'waiver'; slot: SlotView; gate: SoftGateView }
   | null;
 
 function Figure({ label, children, testId }: { label: string; children: ReactNode; testId?: string }) {
@@ -87,6 +89,7 @@ function LineupWorkspace({ snapshot }: { snapshot: LineupSnapshot }) {
   const open = snapshot.cycle.state !== 'closed';
   const arranges = useHasRole('handler') && open;
   const plans = useHasRole('handler', 'air_operations') && open;
+  const waives = useHasRole('air_boss') && open;
   // Moves are drags, which the disabled fieldset of a stale board does not stop: they wait for it to be live.
   const live = useFiguresLive();
   const editable = arranges && live;
@@ -102,6 +105,7 @@ function LineupWorkspace({ snapshot }: { snapshot: LineupSnapshot }) {
   const returnToPool = useReturnToPool(cycleId);
   const setLoad = useSetLoad(cycleId);
   const arming = useSetArmState(cycleId);
+  const waive = useWaiveGate(cycleId);
 
   const close = () => setDialog(null);
   const done = (title: string) => () => {
@@ -126,7 +130,7 @@ function LineupWorkspace({ snapshot }: { snapshot: LineupSnapshot }) {
         actionsFor={(slot) =>
           slotActions(
             slot,
-            { arranges, plans },
+            { arranges, plans, waives },
             {
               markDown: (chosen) => setDialog({ kind: 'down', slot: chosen }),
               assignPilot: (chosen) => setDialog({ kind: 'pilot', slot: chosen }),
@@ -139,6 +143,7 @@ function LineupWorkspace({ snapshot }: { snapshot: LineupSnapshot }) {
                   { slotId: chosen.id, slotVersion: chosen.version, armState },
                   { onSuccess: done(`${chosen.sideNumber} recorded ${armState}`), onError: refused('Armed or safe') },
                 ),
+              waive: (chosen, gate) => setDialog({ kind: 'waiver', slot: chosen, gate }),
             },
           )
         }
@@ -282,6 +287,23 @@ function LineupWorkspace({ snapshot }: { snapshot: LineupSnapshot }) {
                     ? setDialog({ ...dialog, warning: errorMessage(error) })
                     : refused('The catapult change')(error),
               },
+            )
+          }
+        />
+      )}
+      {dialog?.kind === 'waiver' && (
+        <ReasonDialog
+          title={`Waiver for ${dialog.slot.sideNumber}`}
+          explanation={`${dialog.gate.message} It may launch under your waiver, marked in its record and the cycle's report.`}
+          confirmLabel="Grant waiver"
+          placeholder="e.g. ship cannot make more wind"
+          showsFigures
+          pending={waive.isPending}
+          onClose={close}
+          onConfirm={(reason) =>
+            waive.mutate(
+              { slotId: dialog.slot.id, slotVersion: dialog.slot.version, gate: dialog.gate.gate, reason },
+              { onSuccess: done(`Waiver granted for ${dialog.slot.sideNumber}`), onError: refused('The waiver') },
             )
           }
         />

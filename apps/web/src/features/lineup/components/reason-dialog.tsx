@@ -2,6 +2,7 @@ import { useState } from 'react';
 import { Input, Stack, Text } from '@chakra-ui/react';
 import { CheckField } from '../../../components/check-field.js';
 import { ActionDialog } from '../../../components/action-dialog.js';
+import { CautionLine } from '../../../components/caution-line.js';
 import { FormField } from '../../../components/form-field.js';
 
 interface ReasonDialogProps {
@@ -11,18 +12,21 @@ interface ReasonDialogProps {
   placeholder: string;
   /** A box the sender ticks to say someone agreed (sent only when it is shown). */
   agreement?: string;
+  /** The explanation states a launch figure, so the launch caution goes with it. */
+  showsFigures?: boolean;
   pending: boolean;
   onClose: () => void;
   onConfirm: (reason: string, agreed: boolean | undefined) => void;
 }
 
-/** A change to one aircraft that needs a reason in the log: up again, back to the deck pool. */
+/** A change to one aircraft that needs a reason in the log: up again, back to the deck pool, a waiver. */
 export function ReasonDialog({
   title,
   explanation,
   confirmLabel,
   placeholder,
   agreement,
+  showsFigures = false,
   pending,
   onClose,
   onConfirm,
@@ -55,6 +59,7 @@ export function ReasonDialog({
           />
         </FormField>
         {agreement !== undefined && <CheckField label={agreement} checked={agreed} onChange={setAgreed} />}
+        {showsFigures && <CautionLine compact />}
       </Stack>
     </ActionDialog>
   );

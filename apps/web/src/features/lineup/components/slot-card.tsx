@@ -119,6 +119,17 @@ function SlotCardContent({ slot, movable, mark }: { slot: SlotView; movable: boo
             {slot.armState === 'armed' ? 'Armed' : 'Safe'}
           </Badge>
         )}
+        {slot.waivers.length > 0 && (
+          <Badge
+            size="sm"
+            colorPalette="caution"
+            variant="outline"
+            data-testid="waiver"
+            title={slot.waivers.map((waiver) => `${waiver.by}: ${waiver.reason}`).join('; ')}
+          >
+            Waiver
+          </Badge>
+        )}
         {needsPilot(slot) && (
           <Badge size="sm" colorPalette="caution" variant="solid" data-testid="no-pilot">
             No pilot

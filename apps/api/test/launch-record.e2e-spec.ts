@@ -1,7 +1,8 @@
-import type { CycleReport, LaunchRecord, SlotView } from '@catline/contracts';
+import type { CycleReport, CycleView, LaunchRecord, SlotView, UpdateCycleConditionsRequest } from '@catline/contracts';
 import type { INestApplication } from '@nestjs/common';
 import { DataSource } from 'typeorm';
 import { rebuildMissingLaunchRecords } from '../src/database/migrations/1796200292167-SlotLaunchRecord.js';
+import { LaunchRecordWholeWind1796277785788 } from '../src/database/migrations/1796277785788-LaunchRecordWholeWind.js';
 import { parse } from 'csv-parse/sync';
 import { AIR_OPS, LineupDriver, OBSERVER, launchKey, pilot } from './support/lineup-fixtures.js';
 import { startTestApp } from './support/test-app.js';
@@ -20,12 +21,19 @@ describe('the launch record', () => {
     await app.close();
   });
 
-  /** C21 launched from cat 1 under the driver's good conditions; the slot as the lineup shows it after. */
-  async function launchedAircraft(pilotEmail: string) {
+  /**
+   * C21 launched from cat 1 under the driver's good conditions, or under a wind reading entered before its
+   * steps; the slot as the lineup shows it after.
+   */
+  async function launchedAircraft(pilotEmail: string, reading?: Omit<UpdateCycleConditionsRequest, 'basisVersion'>) {
     const {
       cycle,
       slots: [first],
     } = await deck.executingCycle({ 1: [{ side: 'C21', pilotEmail }, 'C22'] });
+    if (reading) {
+      const { version } = await deck.snapshot(cycle.id);
+      await deck.ok(AIR_OPS, 'patch', `/api/cycles/${cycle.id}/conditions`, { ...reading, basisVersion: version });
+    }
     const ready = await deck.readyToLaunch(cycle.id, first.id, pilotEmail);
     const launch = await deck.launch(cycle.id, ready, launchKey());
     expect(launch.status).toBe(200);
@@ -33,14 +41,35 @@ describe('the launch record', () => {
   }
 
   it('freezes at the shot the weight, wind, figures and who fired, and keeps them after the wind changes', async () => {
-    const { cycle, ready, launched } = await launchedAircraft(pilot(5));
+    // A true wind from ahead with a spread, read five minutes before it was entered (still current).
+    const readAt = new Date(Date.now() - 5 * 60_000).toISOString();
+    const { cycle, ready, launched } = await launchedAircraft(pilot(5), {
+      trueWindFromDeg: 0,
+      trueWindSpeedKt: 10,
+      windGustKt: 16,
+      windLullKt: 7,
+      windReadAt: readAt,
+    });
     const record = launched.launchRecord!;
     expect(record).toMatchObject({
       source: 'shot',
       catapultNumber: 1,
       grossWeightLb: 44_000,
       fuelLb: 11_000,
-      windReading: { shipSpeedKt: 25, trueWindFromDeg: 0, trueWindSpeedKt: 10 },
+      // Ship on 000 at 25 kt into a true wind from dead ahead: across the deck the speeds add, on the bow.
+      windReading: {
+        readAt,
+        shipCourseDeg: 0,
+        shipSpeedKt: 25,
+        trueWindFromDeg: 0,
+        trueWindSpeedKt: 10,
+        windGustFromDeg: 0,
+        windGustKt: 16,
+        windLullFromDeg: 0,
+        windLullKt: 7,
+        relativeWindBearingDeg: 0,
+        relativeWindSpeedKt: 35,
+      },
       headwindKt: ready.figures!.headwindKt,
       crosswindKt: ready.figures!.crosswindKt,
       endSpeedKt: ready.figures!.endSpeedKt,
@@ -66,9 +95,13 @@ describe('the launch record', () => {
       trueWindSpeedKt: 20,
     });
     const after = await deck.snapshot(cycle.id);
+    // The new reading has no spread and a later time: none of the frozen wind may follow it.
+    expect(after.cycle).toMatchObject<Partial<CycleView>>({ windGustKt: 20, windLullKt: 20, windGustFromDeg: 90 });
+    expect(Date.parse(after.cycle.windReadAt)).toBeGreaterThan(Date.parse(readAt));
     const still = after.slots.find((slot) => slot.id === launched.id)!;
     const waiting = after.slots.find((slot) => slot.id !== launched.id)!;
     expect(waiting.figures!.headwindKt).not.toBeCloseTo(record.headwindKt!, 1);
+    // The whole record, the wind's spread and the wind across the deck with it.
     expect(still.launchRecord).toEqual(record);
     expect(still.figures).toEqual(launched.figures);
     expect(still.figures!.headwindKt).toBe(record.headwindKt);
@@ -130,12 +163,45 @@ describe('the launch record', () => {
     } finally {
       await runner.release();
     }
-    const [row]: { launch_record: string | LaunchRecord }[] = await dataSource.query(
-      'SELECT launch_record FROM slots WHERE id = ?',
+    expect(await storedRecord(launched.id)).toEqual({ ...launched.launchRecord!, source: 'rebuilt' });
+  });
+
+  it('gives a record frozen before the whole reading was kept the wind across the deck, and no spread', async () => {
+    const { launched } = await launchedAircraft(pilot(8));
+    const dataSource = app.get(DataSource);
+    await dataSource.query(
+      `UPDATE slots SET launch_record = JSON_REMOVE(launch_record, '$.windReading.windGustFromDeg',
+         '$.windReading.windGustKt', '$.windReading.windLullFromDeg', '$.windReading.windLullKt',
+         '$.windReading.relativeWindBearingDeg', '$.windReading.relativeWindSpeedKt') WHERE id = ?`,
       [launched.id],
     );
-    // The driver hands JSON columns back parsed.
-    const rebuilt = typeof row.launch_record === 'string' ? JSON.parse(row.launch_record) : row.launch_record;
-    expect(rebuilt).toEqual({ ...launched.launchRecord!, source: 'rebuilt' });
+    const runner = dataSource.createQueryRunner();
+    try {
+      await new LaunchRecordWholeWind1796277785788().up(runner);
+    } finally {
+      await runner.release();
+    }
+    const record = launched.launchRecord!;
+    // The driver's ship on 000 at 25 kt, true wind 10 kt from dead ahead: 35 kt on the bow.
+    expect(await storedRecord(launched.id)).toEqual({
+      ...record,
+      windReading: {
+        ...record.windReading!,
+        windGustFromDeg: null,
+        windGustKt: null,
+        windLullFromDeg: null,
+        windLullKt: null,
+        relativeWindBearingDeg: 0,
+        relativeWindSpeedKt: 35,
+      },
+    });
   });
+
+  async function storedRecord(slotId: number): Promise<LaunchRecord> {
+    const [row]: { launch_record: string | LaunchRecord }[] = await app
+      .get(DataSource)
+      .query('SELECT launch_record FROM slots WHERE id = ?', [slotId]);
+    // The driver hands JSON columns back parsed.
+    return typeof row.launch_record === 'string' ? JSON.parse(row.launch_record) : row.launch_record;
+  }
 });

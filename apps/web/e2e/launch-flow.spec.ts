@@ -1,5 +1,5 @@
 import { expect, test } from '@playwright/test';
-import { apiAs, changesOf, lineupOf, planCycle } from './support/demo-api.js';
+import { apiAs, changesOf, enterWindReading, lineupOf, planCycle } from './support/demo-api.js';
 import { card, dragWithMouse, lane, openAs, pool } from './support/screens.js';
 
 test('handler drags an aircraft to cat 1, the pilot sees it live, the catapult officer launches it once', async ({
@@ -19,6 +19,20 @@ test('handler drags an aircraft to cat 1, the pilot sees it live, the catapult o
   await expect(pilot.getByTestId('my-catapult')).toContainText('Deck pool');
   await expect(pilot.getByTestId('connection-state')).toHaveAttribute('data-state', 'live');
   await expect(catOfficer.getByText('No aircraft waiting on cat 1')).toBeVisible();
+
+  // A reading a few seconds short of the ship's age: each station flags it by its own clock, while the
+  // server sends nothing more, and a fresh reading clears the flag.
+  const stations = [handler, pilot, catOfficer];
+  const maxAgeMs = Date.parse(cycle.windStaleAt) - Date.parse(cycle.windReadAt);
+  await enterWindReading(cycle.id, maxAgeMs - 5_000);
+  for (const station of stations) {
+    await expect(station.getByTestId('stale-wind-notice')).toContainText(
+      `Wind reading is ${maxAgeMs / 60_000} min old`,
+      { timeout: 20_000 },
+    );
+  }
+  await enterWindReading(cycle.id, 0);
+  for (const station of stations) await expect(station.getByTestId('stale-wind-notice')).toHaveCount(0);
 
   await dragWithMouse(handler, card(pool(handler), 'C21'), lane(handler, 1).getByTestId('lane-drop-zone'));
   await expect(card(lane(handler, 1), 'C21')).toBeVisible();

@@ -155,6 +155,17 @@ export interface WindReadingUsed {
   /** Direction the true wind blew from, degrees true. */
   trueWindFromDeg: number;
   trueWindSpeedKt: number;
+  /**
+   * The gust and the lull of the reading as true winds (the lull is what the headwind rests on); null in a
+   * record frozen or rebuilt before the cycle kept a spread.
+   */
+  windGustFromDeg: number | null;
+  windGustKt: number | null;
+  windLullFromDeg: number | null;
+  windLullKt: number | null;
+  /** The steady wind across the deck: off the bow, degrees, negative to port; and its speed, knots. */
+  relativeWindBearingDeg: number;
+  relativeWindSpeedKt: number;
   temperatureC: number;
   pressureHpa: number;
 }

@@ -1,4 +1,5 @@
-import type { ChangeActor, LaunchFigures, LaunchRecord } from '@catline/contracts';
+import type { ChangeActor, LaunchFigures, LaunchRecord, WindReadingUsed } from '@catline/contracts';
+import { degrees, knots, relativeWind } from '@catline/launch-math';
 import type { Catapult } from '../database/entities/catapult.entity.js';
 import type { Cycle } from '../database/entities/cycle.entity.js';
 import type { Slot } from '../database/entities/slot.entity.js';
@@ -15,6 +16,44 @@ export interface ShotInput {
   waiver: string | null;
   firedBy: ChangeActor;
   at: Date;
+}
+
+/** The wind reading in force as a cycle holds it; null where the source kept no spread or time of reading. */
+export type WindInForce = Pick<
+  WindReadingUsed,
+  'shipCourseDeg' | 'shipSpeedKt' | 'trueWindFromDeg' | 'trueWindSpeedKt' | 'temperatureC' | 'pressureHpa'
+> & {
+  windGustFromDeg: number | null;
+  windGustKt: number | null;
+  windLullFromDeg: number | null;
+  windLullKt: number | null;
+  windReadAt: string | null;
+};
+
+/**
+ * The whole reading as a record freezes it: with the steady wind across the deck worked out from the ship's
+ * course and speed, so that a record says what the deck felt without computing it again later.
+ */
+export function windReadingUsed(wind: WindInForce): WindReadingUsed {
+  const across = relativeWind(
+    { course: degrees(wind.shipCourseDeg), speed: knots(wind.shipSpeedKt) },
+    { from: degrees(wind.trueWindFromDeg), speed: knots(wind.trueWindSpeedKt) },
+  );
+  return {
+    readAt: wind.windReadAt,
+    shipCourseDeg: wind.shipCourseDeg,
+    shipSpeedKt: wind.shipSpeedKt,
+    trueWindFromDeg: wind.trueWindFromDeg,
+    trueWindSpeedKt: wind.trueWindSpeedKt,
+    windGustFromDeg: wind.windGustFromDeg,
+    windGustKt: wind.windGustKt,
+    windLullFromDeg: wind.windLullFromDeg,
+    windLullKt: wind.windLullKt,
+    relativeWindBearingDeg: across.bearing,
+    relativeWindSpeedKt: across.speed,
+    temperatureC: wind.temperatureC,
+    pressureHpa: wind.pressureHpa,
+  };
 }
 
 /**
@@ -35,15 +74,7 @@ export function recordShot(input: ShotInput): LaunchRecord {
     // The setting the crew set and read back, and the energy model's estimate it was checked against.
     launchDataSetting: figures.catapultSetting,
     crossCheckSetting: figures.crossCheckSetting,
-    windReading: {
-      readAt: null,
-      shipCourseDeg: cycle.shipCourseDeg,
-      shipSpeedKt: cycle.shipSpeedKt,
-      trueWindFromDeg: cycle.trueWindFromDeg,
-      trueWindSpeedKt: cycle.trueWindSpeedKt,
-      temperatureC: cycle.temperatureC,
-      pressureHpa: cycle.pressureHpa,
-    },
+    windReading: windReadingUsed({ ...cycle, windReadAt: cycle.windReadAt.toISOString() }),
     headwindKt: figures.headwindKt,
     crosswindKt: figures.crosswindKt,
     crosswindSide: figures.crosswindSide,

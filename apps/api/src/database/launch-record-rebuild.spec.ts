@@ -71,6 +71,14 @@ describe('rebuildLaunchRecord', () => {
       windReading: { shipCourseDeg: 350, shipSpeedKt: 22, trueWindFromDeg: 340, trueWindSpeedKt: 12 },
       firedBy: { id: 12, name: 'Lt Vane', role: 'catapult_officer' },
     });
+    // This change was logged before the cycle kept a spread and a time of reading: none is made up.
+    expect(record.windReading).toMatchObject({
+      readAt: null,
+      windGustFromDeg: null,
+      windGustKt: null,
+      windLullFromDeg: null,
+      windLullKt: null,
+    });
   });
 
   it('keeps only the slot row when the log lost the launch change: every figure null, marked rebuilt', () => {

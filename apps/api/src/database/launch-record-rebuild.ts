@@ -1,4 +1,5 @@
-import type { LaunchFigures, LaunchRecord, LineupPatch, Role } from '@catline/contracts';
+import type { CycleView, LaunchFigures, LaunchRecord, LineupPatch, Role } from '@catline/contracts';
+import { windReadingUsed, type WindInForce } from '../cycle-changes/launch-record.js';
 
 // Launch records for aircraft launched before the record existed, put together from what the change log
 // kept. Used by the SlotLaunchRecord migration; it reads plain rows so a later change of the entities
@@ -40,6 +41,19 @@ function settingsOf(
     : { launchDataSetting: null, crossCheckSetting: figures.catapultSetting };
 }
 
+/** A change logged before the cycle kept the reading's spread and time carries neither: null, not guessed. */
+function windAsLogged(cycle: CycleView): WindInForce {
+  const logged: Partial<CycleView> = cycle;
+  return {
+    ...cycle,
+    windGustFromDeg: logged.windGustFromDeg ?? null,
+    windGustKt: logged.windGustKt ?? null,
+    windLullFromDeg: logged.windLullFromDeg ?? null,
+    windLullKt: logged.windLullKt ?? null,
+    windReadAt: logged.windReadAt ?? null,
+  };
+}
+
 /**
  * The record of a launch from the change that recorded it: its patch carries the slot's view with the
  * figures worked out at that version (under the conditions then in force) and the cycle's conditions.
@@ -58,17 +72,7 @@ export function rebuildLaunchRecord(slot: LaunchedSlotRow, change: LaunchChangeR
     fuelLb: slot.fuelLb,
     stores: slot.stores,
     ...settingsOf(figures),
-    windReading: cycle
-      ? {
-          readAt: null,
-          shipCourseDeg: cycle.shipCourseDeg,
-          shipSpeedKt: cycle.shipSpeedKt,
-          trueWindFromDeg: cycle.trueWindFromDeg,
-          trueWindSpeedKt: cycle.trueWindSpeedKt,
-          temperatureC: cycle.temperatureC,
-          pressureHpa: cycle.pressureHpa,
-        }
-      : null,
+    windReading: cycle ? windReadingUsed(windAsLogged(cycle)) : null,
     headwindKt: figures?.headwindKt ?? null,
     crosswindKt: figures?.crosswindKt ?? null,
     crosswindSide: figures?.crosswindSide ?? null,

@@ -192,6 +192,23 @@ export async function changesOf(api: APIRequestContext, cycleId: number) {
   return allOf<LineupChange>(api, `/api/cycles/${cycleId}/lineup/changes?since=0`);
 }
 
+/** Air operations enters the cycle's wind again, unchanged, as read `ageMs` ago. */
+export async function enterWindReading(cycleId: number, ageMs: number) {
+  const airops = await apiAs('airops');
+  const { version, cycle } = await lineupOf(airops, cycleId);
+  await ok(
+    await airops.patch(`/api/cycles/${cycleId}/conditions`, {
+      data: {
+        basisVersion: version,
+        trueWindFromDeg: cycle.trueWindFromDeg,
+        trueWindSpeedKt: cycle.trueWindSpeedKt,
+        windReadAt: new Date(Date.now() - ageMs).toISOString(),
+      },
+    }),
+  );
+  await airops.dispose();
+}
+
 /** The handler puts a slot at the end of a catapult's lane through the API. */
 export async function placeInLane(handler: APIRequestContext, cycleId: number, slotId: number, catapultNumber: number) {
   const snapshot = await lineupOf(handler, cycleId);

@@ -19,6 +19,7 @@ import { ShipsOwnTheirData1796240912480 } from './1796240912480-ShipsOwnTheirDat
 import { SlotArmState1796243880772 } from './1796243880772-SlotArmState.js';
 import { AuditEntryShip1796245854530 } from './1796245854530-AuditEntryShip.js';
 import { AircraftTypeSettingTables1796262840562 } from './1796262840562-AircraftTypeSettingTables.js';
+import { LaunchRecordWholeWind1796277785788 } from './1796277785788-LaunchRecordWholeWind.js';
 import { LaunchRecordExcessWind1796280000000 } from './1796280000000-LaunchRecordExcessWind.js';
 
 /** Every migration in the order it runs; add a new one at the end (see DEVELOPERS.md). */
@@ -44,5 +45,6 @@ export const migrations = [
   SlotArmState1796243880772,
   AuditEntryShip1796245854530,
   AircraftTypeSettingTables1796262840562,
+  LaunchRecordWholeWind1796277785788,
   LaunchRecordExcessWind1796280000000,
 ];

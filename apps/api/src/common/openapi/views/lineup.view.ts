@@ -141,6 +141,36 @@ export class WindReadingUsedDto implements WindReadingUsed {
   @ApiProperty({ description: 'Knots.' })
   trueWindSpeedKt: number;
 
+  @ApiProperty({
+    type: Number,
+    nullable: true,
+    description: 'Direction the gust blew from, degrees true; null when the record kept no spread.',
+  })
+  windGustFromDeg: number | null;
+
+  @ApiProperty({ type: Number, nullable: true, description: 'Knots, as a true wind; null when none was kept.' })
+  windGustKt: number | null;
+
+  @ApiProperty({
+    type: Number,
+    nullable: true,
+    description: 'Direction the lull blew from, degrees true; null when the record kept no spread.',
+  })
+  windLullFromDeg: number | null;
+
+  @ApiProperty({
+    type: Number,
+    nullable: true,
+    description: 'Knots, as a true wind; the headwind rests on it. Null when none was kept.',
+  })
+  windLullKt: number | null;
+
+  @ApiProperty({ description: 'Where the wind across the deck blew from off the bow, degrees, negative to port.' })
+  relativeWindBearingDeg: number;
+
+  @ApiProperty({ description: 'Speed of the wind across the deck, knots.' })
+  relativeWindSpeedKt: number;
+
   @ApiProperty({ description: 'Degrees Celsius.' })
   temperatureC: number;
 

@@ -5,6 +5,7 @@ import { ConnectionBadge } from '../../../components/connection-badge.js';
 import { LiveFigures } from '../../../components/live-figures.js';
 import { CyclePicker } from '../../../components/cycle-picker.js';
 import { ClosedCycleNotice } from '../../../components/closed-cycle-notice.js';
+import { StaleWindNotice } from '../../../components/stale-wind-notice.js';
 import { PageHeader } from '../../../components/page-header.js';
 import { EmptyState, ErrorState, LoadingState, QueryView } from '../../../components/query-states.js';
 import { NoticeBanner, refusalNotice, useNotice } from '../../../components/refusal-notice.js';
@@ -239,6 +240,7 @@ export function CatStationScreen() {
         )}
       </PageHeader>
       <ClosedCycleNotice cycle={snapshot?.cycle ?? cycle} />
+      <StaleWindNotice cycle={snapshot?.cycle ?? cycle} />
       {user.catapultId === null ? (
         <EmptyState title="No catapult assigned to you">
           The admin assigns each catapult officer a catapult under People.

@@ -6,6 +6,7 @@ import { ConnectionBadge } from '../../../components/connection-badge.js';
 import { LiveFigures, useFiguresLive } from '../../../components/live-figures.js';
 import { CyclePicker } from '../../../components/cycle-picker.js';
 import { ClosedCycleNotice } from '../../../components/closed-cycle-notice.js';
+import { StaleWindNotice } from '../../../components/stale-wind-notice.js';
 import { EmptyState, ErrorState, LoadingState, QueryView } from '../../../components/query-states.js';
 import { NoticeBanner, refusalNotice, useNotice } from '../../../components/refusal-notice.js';
 import { ApiRequestError, errorMessage } from '../../../lib/api-error.js';
@@ -345,6 +346,7 @@ export function LineupScreen() {
         )}
       </Flex>
       <ClosedCycleNotice cycle={live.lineup.data?.cycle ?? cycle} />
+      <StaleWindNotice cycle={live.lineup.data?.cycle ?? cycle} />
       {finding ? (
         <LoadingState label="Finding the current cycle…" />
       ) : cycles.isError ? (

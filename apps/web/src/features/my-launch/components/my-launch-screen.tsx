@@ -4,6 +4,7 @@ import { CautionLine } from '../../../components/caution-line.js';
 import { ConnectionBadge } from '../../../components/connection-badge.js';
 import { CyclePicker } from '../../../components/cycle-picker.js';
 import { ClosedCycleNotice } from '../../../components/closed-cycle-notice.js';
+import { StaleWindNotice } from '../../../components/stale-wind-notice.js';
 import { FigureStat } from '../../../components/figure-stat.js';
 import { LiveFigures, useFiguresLive } from '../../../components/live-figures.js';
 import { PageHeader } from '../../../components/page-header.js';
@@ -155,6 +156,7 @@ export function MyLaunchScreen() {
         )}
       </PageHeader>
       <ClosedCycleNotice cycle={live.lineup.data?.cycle ?? cycle} />
+      <StaleWindNotice cycle={live.lineup.data?.cycle ?? cycle} />
       {finding ? (
         <LoadingState label="Finding the current cycle…" />
       ) : cycles.isError ? (

@@ -14,6 +14,7 @@ const screens: {
   reveal?: (page: Page, cycleNumber: number) => Promise<void>;
 }[] = [
   { name: 'Lineup', who: 'handler', path: (cycleId) => `/lineup?cycle=${cycleId}` },
+  { name: 'Deck', who: 'handler', path: (cycleId) => `/deck?cycle=${cycleId}` },
   { name: 'Cat station', who: 'cat1', path: (cycleId) => `/cat-station?cycle=${cycleId}` },
   { name: 'My launch', who: 'pilot', path: (cycleId) => `/my-launch?cycle=${cycleId}` },
   { name: 'Launch data', who: 'admin', path: () => '/launch-data' },
@@ -23,6 +24,7 @@ const screens: {
     path: () => '/cycles',
     reveal: (page, cycleNumber) => page.getByRole('button', { name: `Show cycle ${cycleNumber}` }).click(),
   },
+  { name: 'Reports', who: 'observer', path: () => '/reports' },
   { name: 'Replay', who: 'observer', path: (cycleId) => `/reports/replay?cycle=${cycleId}` },
   { name: 'Launch sheet', who: 'observer', path: (cycleId) => `/reports/launch-sheet?cycle=${cycleId}` },
 ];

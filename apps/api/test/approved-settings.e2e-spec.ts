@@ -1,4 +1,4 @@
-import type { AircraftTypeView, AircraftView, SettingTable, ShipView } from '@catline/contracts';
+import type { AircraftTypeView, AircraftView, LineupChange, Page, SettingTable, ShipView } from '@catline/contracts';
 import type { INestApplication } from '@nestjs/common';
 import { aircraftTypeBody } from './support/fleet-fixtures.js';
 import { ADMIN, LineupDriver, launchKey, OBSERVER, pilot } from './support/lineup-fixtures.js';
@@ -108,6 +108,41 @@ describe('approved catapult settings', () => {
         message: expect.stringContaining('Gross weight 30,000 lb is above the approved clean settings'),
       }),
     ]);
+  });
+
+  it('takes an aircraft of the type back to re-verify when its approved settings change under it', async () => {
+    const { side, type } = await aircraftOfNewType([cleanOnCat1(10)]);
+    const cycle = await deck.createCycle();
+    const slot = await deck.addSlot(cycle.id, side, { pilotEmail: pilot(7), grossWeightLb: 30_000, stores: '' });
+    await deck.place(cycle.id, slot.id, 1);
+    await deck.start(cycle.id);
+    const ready = await deck.readyToLaunch(cycle.id, slot.id, pilot(7));
+    expect(ready).toMatchObject({ status: 'pilot_ready', figures: { catapultSetting: 10 } });
+    const before = (await deck.snapshot(cycle.id)).version;
+
+    await deck.ok(ADMIN, 'put', `/api/aircraft-types/${type.id}/setting-tables`, { tables: [cleanOnCat1(12)] });
+    const dropped = await deck.slot(cycle.id, slot.id);
+    expect(dropped).toMatchObject({
+      status: 'weight_agreed',
+      reverifyCause: 'launch_data',
+      agreedWeightLb: 30_000,
+      figures: { catapultSetting: 12 },
+    });
+    const refused = await deck.launch(cycle.id, dropped, launchKey());
+    expect(refused.body).toMatchObject({
+      code: 'reverify_required',
+      message: `Figures changed (the launch data) — re-verify the setting for ${side}.`,
+    });
+    const { items } = await deck.ok<Page<LineupChange>>(
+      OBSERVER,
+      'get',
+      `/api/cycles/${cycle.id}/lineup/changes?since=${before}`,
+    );
+    expect(items).toHaveLength(1);
+    expect(items[0]).toMatchObject({
+      kind: 'launch_data_changed',
+      summary: `The approved setting tables of ${type.designation} changed; re-verify: ${side} to weight agreed`,
+    });
   });
 
   it("flags an energy model further from the approved setting than the ship's tolerance, as a warning only", async () => {

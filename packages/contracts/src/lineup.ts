@@ -378,6 +378,7 @@ export const CHANGE_KINDS = [
   'suspend_reason_given',
   'load_set',
   'arm_state_set',
+  'launch_data_changed',
 ] as const;
 export type ChangeKind = (typeof CHANGE_KINDS)[number];
 

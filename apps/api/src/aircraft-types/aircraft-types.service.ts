@@ -3,6 +3,8 @@ import { Injectable, Logger } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, type EntityManager, Not } from 'typeorm';
 import { AuditTrail } from '../audit/audit-trail.service.js';
+import type { AuthenticatedUser } from '../common/authenticated-user.js';
+import { actorOf } from '../cycle-changes/cycle-change.service.js';
 import { definedFields } from '../common/defined-fields.js';
 import { type ShipScope, shipWhere } from '../common/ship-scope.js';
 import { ownerShip } from '../ships/owner-ship.js';
@@ -11,6 +13,7 @@ import { Catapult } from '../database/entities/catapult.entity.js';
 import { isDuplicateKey, isStillReferenced } from '../common/errors/database-errors.js';
 import { toAircraftTypeView } from './aircraft-type.mapper.js';
 import { AircraftTypesException } from './aircraft-types.exception.js';
+import { LaunchDataReverify } from './launch-data-reverify.service.js';
 import type { CreateAircraftTypeDto } from './dto/create-aircraft-type.dto.js';
 import type { UpdateAircraftTypeDto } from './dto/update-aircraft-type.dto.js';
 import { AircraftType } from '../database/entities/aircraft-type.entity.js';
@@ -30,6 +33,7 @@ export class AircraftTypesService {
   constructor(
     @InjectDataSource() private readonly dataSource: DataSource,
     private readonly audit: AuditTrail,
+    private readonly reverify: LaunchDataReverify,
   ) {}
 
   async list(scope: ShipScope): Promise<AircraftTypeView[]> {
@@ -71,10 +75,10 @@ export class AircraftTypesService {
     return toAircraftTypeView(saved);
   }
 
-  async update(scope: ShipScope, id: number, body: UpdateAircraftTypeDto): Promise<AircraftTypeView> {
+  async update(caller: AuthenticatedUser, id: number, body: UpdateAircraftTypeDto): Promise<AircraftTypeView> {
     if (body.trimBands) this.checkLaunchData(trimBandProblems(body.trimBands), []);
-    return this.dataSource.transaction(async (manager) => {
-      const type = await this.findOrFail(manager, scope, id, true);
+    const updated = await this.dataSource.transaction(async (manager) => {
+      const type = await this.findOrFail(manager, caller, id, true);
       if (body.designation !== undefined) await this.checkDesignationFree(manager, body.designation, id);
       const before = toAircraftTypeView(type);
       Object.assign(type, definedFields(body));
@@ -89,12 +93,15 @@ export class AircraftTypesService {
       });
       return after;
     });
+    if (Object.keys(definedFields(body)).some((field) => field !== 'designation' && field !== 'name'))
+      await this.reverify.launchDataChanged(updated, 'The figures', actorOf(caller));
+    return updated;
   }
 
-  async replaceLaunchTable(scope: ShipScope, id: number, rows: LaunchTableRow[]): Promise<AircraftTypeView> {
+  async replaceLaunchTable(caller: AuthenticatedUser, id: number, rows: LaunchTableRow[]): Promise<AircraftTypeView> {
     this.checkLaunchData([], launchTableProblems(rows));
-    return this.dataSource.transaction(async (manager) => {
-      const type = await this.findOrFail(manager, scope, id, true);
+    const replaced = await this.dataSource.transaction(async (manager) => {
+      const type = await this.findOrFail(manager, caller, id, true);
       const before = type.launchTable;
       type.launchTable = rows;
       await manager.save(AircraftType, type);
@@ -109,6 +116,8 @@ export class AircraftTypesService {
       this.logger.log(`Launch table of ${type.designation} replaced (${rows.length} rows)`);
       return toAircraftTypeView(type);
     });
+    await this.reverify.launchDataChanged(replaced, 'The launch table', actorOf(caller));
+    return replaced;
   }
 
   async replaceStoresCatalogue(scope: ShipScope, id: number, items: StoresItem[]): Promise<AircraftTypeView> {
@@ -132,10 +141,10 @@ export class AircraftTypesService {
     });
   }
 
-  async replaceSettingTables(scope: ShipScope, id: number, tables: SettingTable[]): Promise<AircraftTypeView> {
+  async replaceSettingTables(caller: AuthenticatedUser, id: number, tables: SettingTable[]): Promise<AircraftTypeView> {
     const ordered = orderedSettingTables(tables);
-    return this.dataSource.transaction(async (manager) => {
-      const type = await this.findOrFail(manager, scope, id, true);
+    const replaced = await this.dataSource.transaction(async (manager) => {
+      const type = await this.findOrFail(manager, caller, id, true);
       const catapults = await manager.find(Catapult, { where: { shipId: type.shipId } });
       this.checkLaunchData(settingTableProblems(ordered, catapults));
       const before = type.settingTables;
@@ -152,6 +161,8 @@ export class AircraftTypesService {
       this.logger.log(`Approved setting tables of ${type.designation} replaced (${ordered.length} tables)`);
       return toAircraftTypeView(type);
     });
+    await this.reverify.launchDataChanged(replaced, 'The approved setting tables', actorOf(caller));
+    return replaced;
   }
 
   async remove(scope: ShipScope, id: number): Promise<void> {

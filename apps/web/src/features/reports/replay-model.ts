@@ -45,6 +45,7 @@ export const CHANGE_KIND_LABELS: Record<ChangeKind, string> = {
   suspend_reason_given: 'Suspend reason',
   load_set: 'Fuel and stores',
   arm_state_set: 'Armed or safe',
+  launch_data_changed: 'Launch data',
 };
 
 /** Slots in no lane and not in the deck pool: down or scratched aircraft. */

@@ -7,14 +7,17 @@ const PILOT_TABLET = { width: 820, height: 1180 };
 // What the live feed brings to another screen may take a while on a loaded machine.
 const LIVE = { timeout: 10_000 };
 
-/** The large setting on the Cat station: the one from the ship's approved launch data. */
-const approvedSetting = (station: Page) =>
+/** The value of one of the Cat station's figures, by its label. */
+const figure = (station: Page, label: string) =>
   station
     .getByTestId('cat-figures')
     .locator(':scope > div')
-    .filter({ has: station.getByText('Catapult setting (approved data)', { exact: true }) })
+    .filter({ has: station.getByText(label, { exact: true }) })
     .locator('p')
     .last();
+
+/** The large setting on the Cat station: the one from the ship's approved launch data. */
+const approvedSetting = (station: Page) => figure(station, 'Catapult setting (approved data)');
 
 /** The approved setting the server works out for the aircraft now, as the station shows it. */
 async function settingOnServer(cycleId: number, side: string) {
@@ -62,6 +65,7 @@ test('the deck edge operator launches from a touch tablet an aircraft whose pilo
 
   const plannedSetting = await settingOnServer(cycle.id, 'C21');
   await expect(approvedSetting(station)).toHaveText(plannedSetting);
+  await expect(figure(station, 'Gross weight (planned)')).toHaveText('40,000 lb');
 
   // The pilot holds 3,500 lb more than the plan and answers it from the tablet.
   await pilot.getByTestId('weight-correction').fill('43,500');
@@ -81,6 +85,8 @@ test('the deck edge operator launches from a touch tablet an aircraft whose pilo
   const agreedSetting = await settingOnServer(cycle.id, 'C21');
   expect(agreedSetting).not.toBe(plannedSetting);
   await expect(approvedSetting(station)).toHaveText(agreedSetting);
+  // The weight beside the setting is the one it was worked out for.
+  await expect(figure(station, 'Gross weight (agreed)')).toHaveText('43,500 lb');
   await expect(pilot.getByTestId('weight-agreed')).toHaveText('Agreed with the crew: 43,500 lb.', LIVE);
   await expect(pilot.getByTestId('slot-status')).toHaveText('Weight agreed', LIVE);
   await expect(boardCard).toHaveAttribute('data-status', 'weight_agreed', LIVE);

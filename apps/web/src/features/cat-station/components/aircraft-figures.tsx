@@ -20,10 +20,16 @@ function armState({ armState: state, armStateAt: at, armStateBy: by }: SlotView)
 export function AircraftFigures({ slot }: { slot: SlotView }) {
   const figures = slot.figures;
   const warning = figures && crossCheckWarning(figures);
+  // Once agreed, the setting, trim and afterburner rest on the agreed figure: the weight beside them is that one.
+  const agreedLb = slot.catapultWeightAckAt ? slot.agreedWeightLb : null;
   return (
     <Stack gap="3">
       <SimpleGrid columns={{ base: 2, md: 3 }} gap="3" data-testid="cat-figures">
-        <FigureStat label="Gross weight" value={formatPounds(slot.grossWeightLb)} size="xl" />
+        <FigureStat
+          label={agreedLb === null ? 'Gross weight (planned)' : 'Gross weight (agreed)'}
+          value={formatPounds(agreedLb ?? slot.grossWeightLb)}
+          size="xl"
+        />
         <FigureStat
           label="Agreed by pilot"
           value={agreement(slot.pilotWeightAckAt)}

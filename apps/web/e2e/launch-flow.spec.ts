@@ -47,6 +47,10 @@ test('handler drags an aircraft to cat 1, the pilot sees it live, the catapult o
   await expect(catOfficer.getByTestId('step-on_catapult')).toHaveAttribute('data-done', 'true');
   await expect(catOfficer.getByTestId('pilot-weight')).toContainText('Show the pilot 40,000 lb');
   await expect(catOfficer.getByTestId('launch')).toBeDisabled();
+  const banner = catOfficer.getByTestId('station-banner');
+  await expect(banner).toHaveAttribute('data-state', 'waiting');
+  await expect(banner).toContainText('WAITING FOR');
+  await expect(banner).toContainText('agree the gross weight');
 
   await pilot.getByTestId('acknowledge-weight').click();
   await expect(pilot.getByTestId('weight-acknowledged')).toBeVisible();
@@ -66,6 +70,8 @@ test('handler drags an aircraft to cat 1, the pilot sees it live, the catapult o
     await expect(catOfficer.getByTestId(`step-${step}`)).toHaveAttribute('data-done', 'true');
   }
   await expect(catOfficer.getByTestId('launch')).toBeEnabled();
+  await expect(banner).toHaveAttribute('data-state', 'go');
+  await expect(banner).toHaveText('GO');
   // A double tap must launch once.
   await catOfficer.getByTestId('launch').dblclick();
 

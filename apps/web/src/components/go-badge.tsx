@@ -1,23 +1,37 @@
 import { Badge, HStack, Text } from '@chakra-ui/react';
-import type { LaunchFigures } from '@catline/contracts';
+import type { LaunchFigures, SlotView } from '@catline/contracts';
 import { formatSignedKnots } from '../lib/format.js';
+import { slotGoVerdict, type GoVerdict } from '../lib/launch-verdict.js';
 
-export function GoBadge({ go, size = 'sm' }: { go: boolean; size?: 'sm' | 'md' | 'lg' }) {
+const BADGES: Record<GoVerdict, { palette: string; label: string }> = {
+  go: { palette: 'go', label: 'GO' },
+  nogo: { palette: 'nogo', label: 'NO-GO' },
+  // Held only by a soft gate: the air boss may still waive it, so it is no refusal.
+  waiver: { palette: 'caution', label: 'WAIVER NEEDED' },
+};
+
+export function GoBadge({ verdict, size = 'sm' }: { verdict: GoVerdict; size?: 'sm' | 'md' | 'lg' }) {
+  const { palette, label } = BADGES[verdict];
   return (
-    <Badge size={size} colorPalette={go ? 'go' : 'nogo'} variant="solid" fontWeight="700">
-      {go ? 'GO' : 'NO-GO'}
+    <Badge size={size} colorPalette={palette} variant="solid" fontWeight="700" data-verdict={verdict}>
+      {label}
     </Badge>
   );
 }
 
+/** The margin's colour: a positive margin never in the danger colour, a negative one as the verdict says. */
+const marginColor = (marginKt: number | null, verdict: GoVerdict) =>
+  marginKt !== null && marginKt >= 0 ? 'go.fg' : verdict === 'nogo' ? 'nogo.fg' : 'caution.fg';
+
 /** A slot's launch margin beside its go/no-go, as the lineup cards show it. */
-export function MarginGo({ figures }: { figures: Pick<LaunchFigures, 'go' | 'marginKt'> }) {
+export function MarginGo({ slot }: { slot: Pick<SlotView, 'status' | 'gates'> & { figures: LaunchFigures } }) {
+  const verdict = slotGoVerdict(slot);
   return (
     <HStack gap="1.5">
-      <Text textStyle="figure" color={figures.go ? 'go.fg' : 'nogo.fg'} title="Launch margin">
-        {formatSignedKnots(figures.marginKt)}
+      <Text textStyle="figure" color={marginColor(slot.figures.marginKt, verdict)} title="Launch margin">
+        {formatSignedKnots(slot.figures.marginKt)}
       </Text>
-      <GoBadge go={figures.go} />
+      <GoBadge verdict={verdict} />
     </HStack>
   );
 }

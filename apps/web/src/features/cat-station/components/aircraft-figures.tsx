@@ -1,7 +1,6 @@
-import { Box, HStack, SimpleGrid, Stack, Text } from '@chakra-ui/react';
+import { Box, SimpleGrid, Stack, Text } from '@chakra-ui/react';
 import type { SlotView } from '@catline/contracts';
 import { FigureStat } from '../../../components/figure-stat.js';
-import { GoBadge } from '../../../components/go-badge.js';
 import { GrossWeightParts, storesLines } from '../../../components/gross-weight-parts.js';
 import { formatClock, formatKnots, formatPounds, formatSignedKnots } from '../../../lib/format.js';
 import { crossCheckWarning, excessTone, marginTone } from '../launch-setting-model.js';
@@ -94,18 +93,6 @@ export function AircraftFigures({ slot }: { slot: SlotView }) {
             Stores: {storesLines(slot.grossWeightParts)}
           </Text>
         </Box>
-      )}
-      {figures && (
-        <HStack gap="2" align="flex-start" wrap="wrap">
-          <GoBadge go={figures.go} size="lg" />
-          {figures.reasons.length > 0 && (
-            <Box color="nogo.fg" fontSize="sm" data-testid="no-go-reasons">
-              {figures.reasons.map((reason) => (
-                <Text key={reason.code}>{reason.message}</Text>
-              ))}
-            </Box>
-          )}
-        </HStack>
       )}
     </Stack>
   );

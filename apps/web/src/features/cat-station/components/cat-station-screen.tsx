@@ -21,6 +21,7 @@ import { useAdvanceSlot } from '../api/advance-slot.js';
 import { useLaunchSlot } from '../api/launch-slot.js';
 import { useSuspendSlot } from '../api/suspend-slot.js';
 import { STEP_LABELS, canSuspend, catapultQueue, lastLaunched } from '../cat-station-model.js';
+import { stationState } from '../station-state.js';
 import { useGiveSuspendReason } from '../api/give-suspend-reason.js';
 import { useReportColdShot } from '../api/report-cold-shot.js';
 import { useReportDownOnCatapult } from '../api/report-down-on-catapult.js';
@@ -34,6 +35,7 @@ import { CatapultEvents } from './catapult-events.js';
 import { LaunchPanel } from './launch-panel.js';
 import { NextUp } from './next-up.js';
 import { ReadinessSteps } from './readiness-steps.js';
+import { StationBanner } from './station-banner.js';
 import { DeckStatusLine } from '../../../components/deck-status-line.js';
 
 function Station({ snapshot, catapultId }: { snapshot: LineupSnapshot; catapultId: number }) {
@@ -88,6 +90,7 @@ function Station({ snapshot, catapultId }: { snapshot: LineupSnapshot; catapultI
 
   return (
     <Stack gap="3">
+      <StationBanner state={stationState(lane, current, snapshot.readinessSteps)} />
       {notice && <NoticeBanner notice={notice} onDismiss={dismiss} />}
       <DeckStatusLine lane={lane} size="lg" />
       {current && (

@@ -80,7 +80,7 @@ export function LaneColumn({ lane, slotIds, counts, menu, children }: LaneColumn
                 UP
               </Badge>
             )}
-            <GoBadge go={lane.go} />
+            <GoBadge verdict={lane.go ? 'go' : 'nogo'} />
             {menu}
           </HStack>
         </Flex>

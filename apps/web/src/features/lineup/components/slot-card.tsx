@@ -7,6 +7,7 @@ import { MarginGo } from '../../../components/go-badge.js';
 import { GripIcon } from '../../../components/icons.js';
 import { SlotStatusBadge } from '../../../components/slot-status-badge.js';
 import { formatOptionalClock, formatPounds } from '../../../lib/format.js';
+import { slotGoVerdict } from '../../../lib/launch-verdict.js';
 import { slotItemId } from '../hooks/use-lineup-drag.js';
 import { needsPilot, type SlotMark } from '../lineup-model.js';
 import { GrossWeightParts } from '../../../components/gross-weight-parts.js';
@@ -25,8 +26,7 @@ function SlotCardFrame({
   mark?: SlotMark;
   children: ReactNode;
 }) {
-  const figures = slot.figures;
-  const nogo = figures && !figures.go && slot.status !== 'launched';
+  const nogo = slot.figures && slot.status !== 'launched' && slotGoVerdict(slot) === 'nogo';
   return (
     <Flex
       align="flex-start"
@@ -149,7 +149,7 @@ function SlotCardContent({ slot, movable, mark }: { slot: SlotView; movable: boo
               </Text>
             )}
           </Text>
-          <MarginGo figures={figures} />
+          <MarginGo slot={{ ...slot, figures }} />
         </Flex>
       )}
     </Box>

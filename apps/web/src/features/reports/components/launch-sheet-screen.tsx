@@ -116,7 +116,7 @@ function SheetRow({ slot, place }: { slot: SlotView; place: number }) {
     figures ? formatKnots(figures.endSpeedKt) : '—',
     formatKnots(figures?.requiredWindOverDeckKt ?? null),
     formatSignedKnots(figures?.marginKt ?? null),
-    figures ? <GoBadge go={figures.go} key="go" /> : '—',
+    figures ? <GoBadge verdict={figures.go ? 'go' : 'nogo'} key="go" /> : '—',
     slot.trimDeg === null ? '—' : formatDegrees(slot.trimDeg),
     slot.afterburnerRequired ? 'Required' : 'No',
   ];

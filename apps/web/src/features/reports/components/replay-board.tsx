@@ -37,7 +37,7 @@ function ReplaySlot({ slot, changed }: { slot: SlotView; changed: boolean }) {
             ? `Off ${formatOptionalClock(slot.launchedAt)}`
             : `Proj. ${formatOptionalClock(slot.projectedLaunchAt)}`}
         </Text>
-        {figures && <MarginGo figures={figures} />}
+        {figures && <MarginGo slot={{ ...slot, figures }} />}
       </Flex>
     </Box>
   );

@@ -1,3 +1,4 @@
+import { evaluate } from 'mathjs';
 import { LaunchMathInputError } from '../errors.js';
 import { celsius, celsiusToKelvin, kelvin, kilogramsPerCubicMetre, knots, metres, pascals } from '../units/units.js';
 import {
@@ -23,9 +24,13 @@ describe('ISA air density', () => {
   it('has a density ratio of one at sea level and below one on a hot day', () => {
     expect(densityRatio(kilogramsPerCubicMetre(1.225))).toBe(1); // ICAO Doc 7488/3 (1993): sea-level density 1.225 kg/m3
     const hotDay = densityRatio(airDensity(celsiusToKelvin(celsius(35)), pascals(101325)));
-    // Dry air at 101.325 kPa and 35 C: 1.1455 kg/m3 (density-of-air table at standard pressure, as in the
-    // CRC Handbook of Chemistry and Physics; from memory), over the ISA sea-level 1.225 kg/m3: 0.9351.
-    expect(hotDay).toBeCloseTo(0.9351, 3);
+    // rho = p / (R* / M0 * T) worked in mathjs units with the constants of ICAO Doc 7488/3 (1993): universal
+    // gas constant R* = 8314.32 J/(kmol K), molar mass of dry air M0 = 28.964420 kg/kmol, sea-level pressure
+    // 101325 Pa and density 1.225 kg/m3; 35 C converted to kelvin by mathjs (1.14549 kg/m3, sigma 0.93510).
+    const hotDayDensity = evaluate(
+      '101325 Pa / (8314.32 J / (kmol K) / (28.964420 kg / kmol) * (35 degC to K))',
+    ).toNumber('kg/m^3');
+    expect(hotDay).toBeCloseTo(hotDayDensity / 1.225, 6);
   });
 
   it('raises a minimum launch airspeed by 1 / sqrt(sigma) on a hot day', () => {

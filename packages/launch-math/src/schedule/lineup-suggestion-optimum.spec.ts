@@ -199,19 +199,20 @@ describe('exhaustive search used as the yardstick', () => {
   });
 });
 
-// Both rows keep seeds of their own: fresh seeds found cycles where the suggestion landed far behind the
-// optimum (FC_SEED=1133753927 on 10 aircraft: 44 % later; 121483936 on 1-8 aircraft: 10 % later), both
-// answered by the pair moves on the cases kept in lineup-suggestion.spec.ts. Three fresh seeds then gave
-// the optimum on all 630 cycles, too few to trust a fresh seed on every run, where a random red run would
-// block every landing; the 10-aircraft row runs the seed that failed. 121483936 still fails the 1-8 row
-// with the pair moves: its 35th cycle shrinks to 8 aircraft (a5 and a7 first, a1 and a6 last, cat 2
-// resetting in 88 s, the others in 40 s) that the suggestion launches 10 % behind the optimum.
-const KNOWN_GOOD_SEEDS = { upTo8Aircraft: 1133753927, of10Aircraft: 1133753927 };
+// The 1-8 row runs on the suite's fast-check seed (jest.config.js draws a fresh one each run and prints it;
+// FC_SEED=<seed> repeats a run). It once kept a fixed seed while fresh ones found the suggestion 10 % and
+// 16 % behind the optimum (FC_SEED=121483936 and 1), until the branch and bound stage that ends the
+// suggestion on cycles of up to eight aircraft. The 10-aircraft row, where that stage does not run, keeps
+// the seed whose cycle the pair moves were made for (FC_SEED=1133753927, 44 % behind before them): fresh
+// seeds passed it in 5 runs of 5, but FC_SEED=1187696669 drew a cycle on which the exhaustive yardstick
+// took 235-370 s of the 600 s allowed on the loaded 2-core machine (13-60 s on the others), too near the
+// limit to risk in every run.
+const TEN_AIRCRAFT_SEED = 1133753927;
 
 describe('suggested lineup against the exhaustive optimum', () => {
   it.each([
-    { cycles: 200, minAircraft: 1, maxAircraft: 8, seed: KNOWN_GOOD_SEEDS.upTo8Aircraft },
-    { cycles: 10, minAircraft: 10, maxAircraft: 10, seed: KNOWN_GOOD_SEEDS.of10Aircraft },
+    { cycles: 200, minAircraft: 1, maxAircraft: 8, seed: fc.readConfigureGlobal().seed },
+    { cycles: 10, minAircraft: 10, maxAircraft: 10, seed: TEN_AIRCRAFT_SEED },
   ])(
     'finishes within 5% of the optimum on $cycles random cycles of $minAircraft to $maxAircraft aircraft and breaks no rule',
     ({ cycles, minAircraft, maxAircraft, seed }) => {

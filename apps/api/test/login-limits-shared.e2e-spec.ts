@@ -22,13 +22,14 @@ describe('sign-in limits shared by several API processes through Redis', () => {
   const apps: INestApplication[] = [];
   const urls: string[] = [];
 
+  // Two apps start one after the other; on a loaded machine that has taken over the default minute.
   beforeAll(async () => {
     for (let i = 0; i < 2; i += 1) {
       const { app, url } = await startTestApp();
       apps.push(app);
       urls.push(url);
     }
-  });
+  }, 180_000);
 
   afterAll(async () => {
     await Promise.all(apps.map((app) => app.close()));

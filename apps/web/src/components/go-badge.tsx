@@ -1,5 +1,6 @@
 import { Badge, HStack, Text } from '@chakra-ui/react';
 import type { LaunchFigures, SlotView } from '@catline/contracts';
+import { marginTone } from '../lib/figure-tones.js';
 import { formatSignedKnots } from '../lib/format.js';
 import { slotGoVerdict, type GoVerdict } from '../lib/launch-verdict.js';
 
@@ -19,16 +20,13 @@ export function GoBadge({ verdict, size = 'sm' }: { verdict: GoVerdict; size?: '
   );
 }
 
-/** The margin's colour: a positive margin never in the danger colour, a negative one as the verdict says. */
-const marginColor = (marginKt: number | null, verdict: GoVerdict) =>
-  marginKt !== null && marginKt >= 0 ? 'go.fg' : verdict === 'nogo' ? 'nogo.fg' : 'caution.fg';
-
 /** A slot's launch margin beside its go/no-go, as the lineup cards show it. */
 export function MarginGo({ slot }: { slot: Pick<SlotView, 'status' | 'gates'> & { figures: LaunchFigures } }) {
   const verdict = slotGoVerdict(slot);
+  const tone = marginTone(slot.figures.marginKt, slot.figures.excessWindOverDeckKt);
   return (
     <HStack gap="1.5">
-      <Text textStyle="figure" color={marginColor(slot.figures.marginKt, verdict)} title="Launch margin">
+      <Text textStyle="figure" color={tone ? `${tone}.fg` : 'fg'} title="Launch margin">
         {formatSignedKnots(slot.figures.marginKt)}
       </Text>
       <GoBadge verdict={verdict} />

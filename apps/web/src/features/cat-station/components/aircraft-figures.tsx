@@ -3,7 +3,8 @@ import type { SlotView } from '@catline/contracts';
 import { FigureStat } from '../../../components/figure-stat.js';
 import { GrossWeightParts, storesLines } from '../../../components/gross-weight-parts.js';
 import { formatClock, formatKnots, formatPounds, formatSignedKnots } from '../../../lib/format.js';
-import { crossCheckWarning, excessTone, marginTone } from '../launch-setting-model.js';
+import { excessTone, marginTone } from '../../../lib/figure-tones.js';
+import { crossCheckWarning } from '../launch-setting-model.js';
 
 function agreement(at: string | null) {
   return at ? `Yes, ${formatClock(at)}` : 'Not yet';

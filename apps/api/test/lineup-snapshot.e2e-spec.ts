@@ -27,8 +27,9 @@ import { LineupDriver, OBSERVER } from './support/lineup-fixtures.js';
 import { readChangeLog } from './support/change-log.js';
 import { startTestApp } from './support/test-app.js';
 
-// The check values here are @catline/launch-math's own results for the seeded data: the snapshot must
-// carry exactly what the package computes (the package's tests name the published sources).
+// Most check values here are @catline/launch-math's own results for the seeded data: the snapshot must
+// carry exactly what the package computes (the package's tests name the published sources). One case is
+// worked by hand instead, so the API's wiring of the wind to each catapult is checked from outside the code.
 
 function profileOf(type: AircraftTypeView): AircraftProfile {
   return {
@@ -154,6 +155,38 @@ describe('lineup snapshot of the demo cycles', () => {
       }
     }
     expect(checked).toBe(8);
+  });
+
+  it('splits the wind over the deck along and across each catapult as worked by hand', async () => {
+    // Hand computation (plane trigonometry, no source needed beyond it): steaming north at 20 kt into a true
+    // wind from 090° at 20 kt, the wind over the deck is the sum of two equal winds at right angles: from 045°
+    // relative at 20·√2 = 28.284 kt. Cat 1's axis points 1.5° to starboard, so that wind meets it 43.5° off
+    // the axis; cat 3's points 7.5° to port, 52.5° off. Along the axis: 28.284 · cos(angle); across it:
+    // 28.284 · sin(angle), from starboard. The WKD-41's crosswind limit is 15 kt (demo-fleet.ts): both are over.
+    const cycle = await deck.createCycle({
+      shipCourseDeg: 0,
+      shipSpeedKt: 20,
+      trueWindFromDeg: 90,
+      trueWindSpeedKt: 20,
+    });
+    const bow = await deck.addSlot(cycle.id, 'C21', { grossWeightLb: 44_000 });
+    const waist = await deck.addSlot(cycle.id, 'C22', { grossWeightLb: 44_000 });
+    await deck.place(cycle.id, bow.id, 1);
+    await deck.place(cycle.id, waist.id, 3);
+    const snapshot = await deck.snapshot(cycle.id);
+    const lane = (number: number) => snapshot.lanes.find((candidate) => candidate.number === number)!;
+    const handWorked = [
+      { lane: lane(1), slotId: bow.id, headwindKt: 20.517, crosswindKt: 19.47 },
+      { lane: lane(3), slotId: waist.id, headwindKt: 17.218, crosswindKt: 22.439 },
+    ];
+    for (const { lane: worked, slotId, headwindKt, crosswindKt } of handWorked) {
+      expect(worked.headwindKt).toBeCloseTo(headwindKt, 2);
+      expect(worked.crosswindKt).toBeCloseTo(crosswindKt, 2);
+      expect(worked.crosswindSide).toBe('starboard');
+      const figures = snapshot.slots.find((slot) => slot.id === slotId)!.figures!;
+      expect(figures.go).toBe(false);
+      expect(figures.reasons.map((reason) => reason.code)).toContain('crosswind_over_limit');
+    }
   });
 
   it('projects launch times as @catline/launch-math does, from taxi arrival, priority and catapult timing', async () => {

@@ -1,7 +1,7 @@
 // `npm run bench`: the same set-up as `npm start` on a database of its own (catline_bench), the
 // API on :3200, then the measurements of DEVELOPERS.md § Benchmarks. Client load runs in separate
 // processes on 127.0.0.1. Prints a table and writes bench-results/bench-<time>.json (git-ignored).
-// Options: --clients=100,500,1000,2000 --moves=200 --per-second=2 --commands=3000 --only=fanout,commit,math,web
+// Options: --clients=100,500,1000,2000 --moves=200 --per-second=2 --commands=1000 --runs=5 --only=fanout,commit,math,web
 // --cluster: two API processes (:3200 and :3202) sharing rooms through a Redis of their own (:6381),
 // with the fan-out clients spread over both; commands still go to :3200.
 import { spawnSync } from 'node:child_process';
@@ -18,7 +18,8 @@ const { values: args } = parseArgs({
     clients: { type: 'string', default: '100,500,1000,2000' },
     moves: { type: 'string', default: '200' },
     'per-second': { type: 'string', default: '2' },
-    commands: { type: 'string', default: '3000' },
+    commands: { type: 'string', default: '1000' },
+    runs: { type: 'string', default: '5' },
     only: { type: 'string', default: 'fanout,commit,math,web' },
     cluster: { type: 'boolean', default: false },
   },
@@ -104,6 +105,7 @@ try {
       cycleId,
       handlers: [1, 4, 16],
       commands: Number(args.commands),
+      runs: Number(args.runs),
       db: {
         host: env.DB_HOST,
         port: Number(env.DB_PORT),

@@ -1,9 +1,11 @@
 // Commit rate: lineup moves per second through the real API with 1, 4 and 16 concurrent handlers,
-// against the same number of plain single-row transactions through mysql2 as the baseline.
-// usage: node bench/commit-rate.mjs '{"url","cycleId","handlers":[1,4,16],"commands":800,"db":{...}}'
+// against the same number of plain single-row transactions through mysql2 as the baseline. Each count
+// runs `runs` times (5 by default), Catline and baseline in turn, and reports the median with the spread:
+// one run on a shared machine says little.
+// usage: node bench/commit-rate.mjs '{"url","cycleId","handlers":[1,4,16],"commands":800,"runs":5,"db":{...}}'
 import { createPool } from 'mysql2/promise';
 import { signIn } from './lib/http.mjs';
-import { now } from './lib/stats.mjs';
+import { median, now } from './lib/stats.mjs';
 import { TogglingHandler } from './lib/toggling-handler.mjs';
 
 const options = JSON.parse(process.argv[2]);
@@ -67,19 +69,38 @@ async function mysqlRun(concurrency, pool) {
   };
 }
 
+const runs = options.runs ?? 5;
+const round2 = (value) => Math.round(value * 100) / 100;
+
 const token = await signIn(options.url, 'handler@catline.example');
 const pool = createPool({ ...options.db, connectionLimit: Math.max(...options.handlers) });
 const results = [];
 try {
   for (const handlers of options.handlers) {
-    const catline = await catlineRun(handlers, token);
-    const mysql = await mysqlRun(handlers, pool);
+    const rounds = [];
+    for (let run = 0; run < runs; run += 1) {
+      const catline = await catlineRun(handlers, token);
+      const mysql = await mysqlRun(handlers, pool);
+      rounds.push({
+        ...catline,
+        baselinePerSecond: mysql.perSecond,
+        ratio: catline.acceptedPerSecond / mysql.perSecond,
+      });
+    }
+    const ratios = rounds.map((round) => round.ratio);
     results.push({
-      ...catline,
-      baselinePerSecond: mysql.perSecond,
-      ratio: Math.round((catline.acceptedPerSecond / mysql.perSecond) * 100) / 100,
+      handlers,
+      runs,
+      acceptedPerSecond: median(rounds.map((round) => round.acceptedPerSecond)),
+      baselinePerSecond: median(rounds.map((round) => round.baselinePerSecond)),
+      ratio: round2(median(ratios)),
+      ratioMin: round2(Math.min(...ratios)),
+      ratioMax: round2(Math.max(...ratios)),
+      conflicts: rounds.reduce((sum, round) => sum + round.conflicts, 0),
+      busy: rounds.reduce((sum, round) => sum + round.busy, 0),
+      refused: rounds.reduce((sum, round) => sum + round.refused, 0),
     });
-    console.error(`commit rate with ${handlers} handlers done`);
+    console.error(`commit rate with ${handlers} handlers done (${runs} runs)`);
   }
 } finally {
   await pool.end();

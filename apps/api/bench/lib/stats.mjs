@@ -16,4 +16,10 @@ export function summarize(values) {
   };
 }
 
+/** The middle value (the upper of the two middle ones for an even count). */
+export function median(values) {
+  const sorted = [...values].sort((a, b) => a - b);
+  return sorted[Math.floor(sorted.length / 2)];
+}
+
 export const now = () => performance.timeOrigin + performance.now();

@@ -469,9 +469,9 @@ function startOrders(space: SearchSpace, aircraft: readonly number[]): number[][
  * searching locally again, stopping after 12 kicks in a row without a better lineup or 40,000
  * lineup evaluations. Last, pair moves: each aircraft tries every other place, and an aircraft then
  * launching last its best place (at most 5,000 more evaluations: every pair on a cycle of about ten
- * aircraft). Last, on cycles of up to ten aircraft, a branch and bound search proves that lineup
- * optimal or finds a better one (within 200,000 branches). Scores compare the last launch, then the sum of
- * launch times.
+ * aircraft). Last, on cycles of up to eight aircraft, a branch and bound search proves that lineup
+ * optimal or finds a better one (within 5,000 branches; a cycle that needs more keeps the lineup found so
+ * far). Scores compare the last launch, then the sum of launch times.
  */
 export function suggestLineup(input: SuggestionInput): LineupSuggestion {
   const earliest = earliestLaunch(input);

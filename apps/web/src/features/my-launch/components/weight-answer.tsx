@@ -16,6 +16,9 @@ export function WeightAnswer({ slot, pending, onAnswer }: WeightAnswerProps) {
   const [typed, setTyped] = useState('');
   const [problem, setProblem] = useState<string | null>(null);
   const closed = slot.status === 'launched' || slot.status === 'down' || slot.status === 'scratched';
+  // Once the crew recorded a figure, agreeing the plan again would take that agreement back: only a
+  // different figure, typed on purpose, may still be answered.
+  const agreedByCrew = slot.catapultWeightAckAt !== null && slot.agreedWeightLb !== null;
   const answer = () => {
     const read = weightAnswer(typed);
     if ('problem' in read) return setProblem(read.problem);
@@ -37,17 +40,19 @@ export function WeightAnswer({ slot, pending, onAnswer }: WeightAnswerProps) {
       )}
       {!closed && (
         <>
-          <Button
-            h="touch"
-            fontSize="lg"
-            colorPalette="accent"
-            alignSelf={{ base: 'stretch', md: 'flex-start' }}
-            loading={pending}
-            data-testid="acknowledge-weight"
-            onClick={() => onAnswer(slot.grossWeightLb)}
-          >
-            I agree {formatPounds(slot.grossWeightLb)}
-          </Button>
+          {!agreedByCrew && (
+            <Button
+              h="touch"
+              fontSize="lg"
+              colorPalette="accent"
+              alignSelf={{ base: 'stretch', md: 'flex-start' }}
+              loading={pending}
+              data-testid="acknowledge-weight"
+              onClick={() => onAnswer(slot.grossWeightLb)}
+            >
+              I agree {formatPounds(slot.grossWeightLb)}
+            </Button>
+          )}
           <HStack gap="2" align="stretch">
             <Input
               aria-label="A different gross weight, lb"

@@ -249,6 +249,12 @@ describe('readiness steps and launch', () => {
     const limit = Math.floor(endSpeed) - 1;
     await deck.ok(ADMIN, 'patch', `/api/aircraft-types/${type.id}`, { maxEndSpeedKt: limit });
     try {
+      // A change of the type's launch data takes the aircraft back to re-verify: the setting is read back again.
+      expect(await deck.slot(cycle.id, slot.id)).toMatchObject({
+        status: 'weight_agreed',
+        reverifyCause: 'launch_data',
+      });
+      await deck.stepThrough(cycle.id, slot.id);
       const over = await deck.slot(cycle.id, slot.id);
       expect(over.gates).toEqual([expect.objectContaining({ gate: 'end_speed_over_max', soft: false })]);
       const refused = await deck.launch(cycle.id, over, launchKey());
@@ -262,6 +268,7 @@ describe('readiness steps and launch', () => {
     } finally {
       await deck.ok(ADMIN, 'patch', `/api/aircraft-types/${type.id}`, { maxEndSpeedKt: type.maxEndSpeedKt });
     }
+    await deck.stepThrough(cycle.id, slot.id);
     expect((await deck.slot(cycle.id, slot.id)).gates).toEqual([]);
   });
 

@@ -8,5 +8,6 @@ import { LaunchDataReverify } from './launch-data-reverify.service.js';
   imports: [CycleChangesModule],
   controllers: [AircraftTypesController],
   providers: [AircraftTypesService, LaunchDataReverify],
+  exports: [LaunchDataReverify],
 })
 export class AircraftTypesModule {}

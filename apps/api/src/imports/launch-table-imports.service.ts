@@ -4,8 +4,10 @@ import { InjectDataSource } from '@nestjs/typeorm';
 import type { DataSource } from 'typeorm';
 import { AuditTrail } from '../audit/audit-trail.service.js';
 import { toAircraftTypeView } from '../aircraft-types/aircraft-type.mapper.js';
+import { LaunchDataReverify } from '../aircraft-types/launch-data-reverify.service.js';
 import { AircraftType } from '../database/entities/aircraft-type.entity.js';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
+import { actorOf } from '../cycle-changes/cycle-change.service.js';
 import type { PageWindow } from '../common/paging/page-query.dto.js';
 import { shipWhere } from '../common/ship-scope.js';
 import { sortProblems } from './csv-table.js';
@@ -29,6 +31,7 @@ export class LaunchTableImports {
     @InjectDataSource() private readonly dataSource: DataSource,
     private readonly uploads: UploadsService,
     private readonly audit: AuditTrail,
+    private readonly reverify: LaunchDataReverify,
   ) {}
 
   async listUploads(typeId: number, user: AuthenticatedUser, window: PageWindow): Promise<Page<UploadView>> {
@@ -47,7 +50,7 @@ export class LaunchTableImports {
   }
 
   async confirm(typeId: number, uploadId: number, user: AuthenticatedUser): Promise<AircraftTypeView> {
-    return this.dataSource.transaction(async (manager) => {
+    const replaced = await this.dataSource.transaction(async (manager) => {
       const type = await manager.findOne(AircraftType, {
         where: { id: typeId, ...shipWhere(user) },
         lock: { mode: 'pessimistic_write' },
@@ -74,5 +77,7 @@ export class LaunchTableImports {
       );
       return toAircraftTypeView(type);
     });
+    await this.reverify.launchDataChanged(replaced, 'The launch table', actorOf(user));
+    return replaced;
   }
 }

@@ -168,8 +168,8 @@ export async function planCycle({ aircraft, start = false, night = false, wind }
 }
 
 /**
- * The air boss starts launching the cycle; one cycle per ship launches, so one an earlier test left
- * launching is stopped first.
+ * The air boss ticks the cycle's open launch prerequisites and starts launching it; one cycle per ship
+ * launches, so one an earlier test left launching is stopped first.
  */
 export async function startLaunching(cycleId: number) {
   const airboss = await apiAs('airboss');
@@ -180,7 +180,17 @@ export async function startLaunching(cycleId: number) {
   )) {
     await ok(await airboss.post(`/api/cycles/${other.id}/stop`, { data: { basisVersion: other.version } }));
   }
-  await ok(await airboss.post(`/api/cycles/${cycleId}/start`, { data: { basisVersion: cycle.version } }));
+  for (const [index, prerequisite] of cycle.launchPrerequisites.entries()) {
+    if (prerequisite.ticked) continue;
+    const { version } = await lineupOf(airboss, cycleId);
+    await ok(
+      await airboss.put(`/api/cycles/${cycleId}/prerequisites/${index + 1}`, {
+        data: { ticked: true, basisVersion: version },
+      }),
+    );
+  }
+  const { version } = await lineupOf(airboss, cycleId);
+  await ok(await airboss.post(`/api/cycles/${cycleId}/start`, { data: { basisVersion: version } }));
   await airboss.dispose();
 }
 

@@ -20,20 +20,27 @@ describe('launching', () => {
     await app.close();
   });
 
-  /** A cycle whose launch window is open now. */
+  const startAs = (email: string, cycle: CycleView, fields: object = {}) =>
+    deck.call(email, 'post', `/api/cycles/${cycle.id}/start`, { basisVersion: cycle.version, ...fields });
+
+  const current = (cycle: CycleView) => deck.ok<CycleView>(OBSERVER, 'get', `/api/cycles/${cycle.id}`);
+
+  /** A new cycle with every launch prerequisite ticked, as it stands after the ticks. */
+  const readyCycle = async (overrides: Parameters<LineupDriver['createCycle']>[0] = {}) => {
+    const created = await deck.createCycle(overrides);
+    await deck.tickPrerequisites(created.id);
+    return current(created);
+  };
+
+  /** A ready cycle whose launch window is open now. */
   const cycleInWindow = () => {
     const now = Date.now();
-    return deck.createCycle({
+    return readyCycle({
       plannedLaunchAt: new Date(now + 5 * MINUTE).toISOString(),
       windowStartAt: new Date(now - 10 * MINUTE).toISOString(),
       windowEndAt: new Date(now + 40 * MINUTE).toISOString(),
     });
   };
-
-  const startAs = (email: string, cycle: CycleView, fields: object = {}) =>
-    deck.call(email, 'post', `/api/cycles/${cycle.id}/start`, { basisVersion: cycle.version, ...fields });
-
-  const current = (cycle: CycleView) => deck.ok<CycleView>(OBSERVER, 'get', `/api/cycles/${cycle.id}`);
 
   it('lets the air boss start launching inside the window, and no one else', async () => {
     const cycle = await cycleInWindow();
@@ -50,13 +57,13 @@ describe('launching', () => {
   });
 
   it('warns before starting outside the window, and starts once the air boss confirms', async () => {
-    const cycle = await deck.createCycle();
+    const cycle = await readyCycle();
     await deck.stopLaunching(cycle.shipId);
     const warned = await startAs(AIR_BOSS, cycle);
     expect(warned.status).toBe(409);
     expect(warned.body.code).toBe('outside_window');
     expect(warned.body.message).toMatch(/^The launch window is \d\d:\d\dZ to \d\d:\d\dZ; now, .* is before it opens\./);
-    expect(await current(cycle)).toMatchObject({ state: 'planning', version: 0 });
+    expect(await current(cycle)).toMatchObject({ state: 'planning', version: cycle.version });
 
     const confirmed = await startAs(AIR_BOSS, cycle, { confirmOutsideWindow: true });
     expect(confirmed.status).toBe(200);

@@ -39,6 +39,7 @@ const cycle: CycleView = {
   latitudeDeg: null,
   longitudeDeg: null,
   timeZone: 'UTC',
+  launchPrerequisites: [],
   shipCourseDeg: 90,
   shipSpeedKt: 20,
   trueWindFromDeg: 80,

@@ -52,6 +52,28 @@ export interface CycleView extends CycleConditions {
   longitudeDeg: number | null;
   /** The ship's time zone (IANA name) every time of the cycle is shown in. */
   timeZone: string;
+  /** The ship profile's launch prerequisites in its order, each with the air boss's tick for this cycle. */
+  launchPrerequisites: LaunchPrerequisiteView[];
+}
+
+/** A tick the air boss gave a launch prerequisite of a cycle: who and when (ISO 8601). */
+export interface LaunchPrerequisiteTick {
+  name: string;
+  tickedBy: string;
+  tickedAt: string;
+}
+
+/** One launch prerequisite of a cycle; `tickedBy` and `tickedAt` are null while it is not ticked. */
+export interface LaunchPrerequisiteView {
+  name: string;
+  ticked: boolean;
+  tickedBy: string | null;
+  tickedAt: string | null;
+}
+
+/** The air boss ticks (or unticks) one launch prerequisite of a cycle in planning. */
+export interface SetLaunchPrerequisiteRequest extends CycleCommandRequest {
+  ticked: boolean;
 }
 
 /**

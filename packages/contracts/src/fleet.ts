@@ -86,6 +86,11 @@ export interface ShipProfile {
   settingCrossCheckTolerance?: number;
   /** The time zone the ship keeps, an IANA name ("Pacific/Guam"); every time is shown in it. Left out, UTC. */
   timeZone?: string;
+  /**
+   * What must be done before a cycle starts launching, in the ship's short words ("Rescue helicopter
+   * airborne"); the air boss ticks each per cycle. Left out, none.
+   */
+  launchPrerequisites?: string[];
 }
 
 /** A wind reading is stale this long after it was taken unless the ship profile says otherwise, minutes. */

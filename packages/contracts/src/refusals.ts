@@ -83,6 +83,8 @@ export const CYCLE_REFUSAL_CODES = [
   'ship_already_launching',
   /** Starting outside the launch window: a warning the air boss confirms by asking again. */
   'outside_window',
+  /** Starting while a launch prerequisite of the ship profile is not ticked by the air boss. */
+  'prerequisites_not_ticked',
   /** Half a wind reading, both frames at once, or a lull above the steady speed or a gust below it. */
   'invalid_wind_reading',
   /** Night by the sun at the cycle's position, or entered as night, with a case other than III. */

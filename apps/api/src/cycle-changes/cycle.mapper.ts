@@ -5,6 +5,7 @@ import {
   type ShipProfile,
 } from '@catline/contracts';
 import type { Cycle } from '../database/entities/cycle.entity.js';
+import { launchPrerequisitesOf } from './launch-prerequisites.js';
 
 export interface CycleCounts {
   slotCount: number;
@@ -47,5 +48,6 @@ export function toCycleView(cycle: Cycle, profile: ShipProfile, counts: CycleCou
     latitudeDeg: cycle.latitudeDeg,
     longitudeDeg: cycle.longitudeDeg,
     timeZone: profile.timeZone ?? DEFAULT_SHIP_TIME_ZONE,
+    launchPrerequisites: launchPrerequisitesOf(cycle, profile),
   };
 }

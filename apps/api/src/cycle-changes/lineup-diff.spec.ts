@@ -33,6 +33,7 @@ const cycle = (version: number): CycleView => ({
   latitudeDeg: null,
   longitudeDeg: null,
   timeZone: 'UTC',
+  launchPrerequisites: [],
 });
 
 const slot = (id: number, catapultId: number | null, position: number | null, version = 0): SlotView => ({

@@ -10,6 +10,7 @@ import { Slot } from '../database/entities/slot.entity.js';
 import type { LineupState } from '../cycle-changes/lineup-state.js';
 import { startingPositions } from '../cycle-changes/starting-positions.js';
 import { LineupException } from '../cycle-changes/lineup.exception.js';
+import { launchPrerequisitesOf } from '../cycle-changes/launch-prerequisites.js';
 import { User } from '../database/entities/user.entity.js';
 import { CycleClosing } from './cycle-closing.service.js';
 import { checkStartInWindow, checkWindow, clock } from './cycle-window.js';
@@ -146,7 +147,10 @@ export class CycleCommandsService {
     return '';
   }
 
-  /** The air boss starts launching: one launching cycle per ship, and outside the window only once confirmed. */
+  /**
+   * The air boss starts launching once every launch prerequisite is ticked: one launching cycle per ship,
+   * and outside the window only once confirmed.
+   */
   start(cycleId: number, actor: ChangeActor, request: StartCycleDto): Promise<LineupCommandResult> {
     return this.changes.apply(cycleId, actor, 'cycle_started', async (manager, state) => {
       await this.basis.cycleAsSeen(manager, state, request.basisVersion);
@@ -154,6 +158,13 @@ export class CycleCommandsService {
         throw new CyclesException(
           'wrong_state',
           `Cycle ${state.cycle.number} is ${state.cycle.state}; only a cycle in planning can start.`,
+        );
+      }
+      const unticked = launchPrerequisitesOf(state.cycle, state.ship.profile).filter((item) => !item.ticked);
+      if (unticked.length > 0) {
+        throw new CyclesException(
+          'prerequisites_not_ticked',
+          `Launching cannot start until the air boss ticks every launch prerequisite; not ticked: ${unticked.map((item) => item.name).join(', ')}.`,
         );
       }
       const now = this.clock.now();

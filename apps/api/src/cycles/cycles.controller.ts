@@ -1,5 +1,17 @@
 import type { CycleLanding, CycleView, LineupCommandResult, Page } from '@catline/contracts';
-import { Body, Controller, Get, HttpCode, HttpStatus, Param, ParseIntPipe, Patch, Post, Query } from '@nestjs/common';
+import {
+  Body,
+  Controller,
+  Get,
+  HttpCode,
+  HttpStatus,
+  Param,
+  ParseIntPipe,
+  Patch,
+  Post,
+  Put,
+  Query,
+} from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import type { Request } from 'express';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
@@ -13,9 +25,11 @@ import { LineupCommandResultDto } from '../common/openapi/views/lineup.view.js';
 import { actorOf } from '../cycle-changes/cycle-change.service.js';
 import { CycleCommandsService } from './cycle-commands.service.js';
 import { CyclesService } from './cycles.service.js';
+import { LaunchPrerequisitesService } from './launch-prerequisites.service.js';
 import { AddSlotDto } from './dto/add-slot.dto.js';
 import { BasisVersionDto } from './dto/basis-version.dto.js';
 import { CreateCycleDto } from './dto/create-cycle.dto.js';
+import { SetLaunchPrerequisiteDto } from './dto/set-launch-prerequisite.dto.js';
 import { StartCycleDto } from './dto/start-cycle.dto.js';
 import { UpdateCycleConditionsDto } from './dto/update-cycle-conditions.dto.js';
 
@@ -33,6 +47,7 @@ export class CyclesController {
   constructor(
     private readonly cycles: CyclesService,
     private readonly commands: CycleCommandsService,
+    private readonly prerequisites: LaunchPrerequisitesService,
   ) {}
 
   @ApiDoc('List the cycles, a page at a time', { response: CyclePageDto })
@@ -89,9 +104,13 @@ export class CyclesController {
   @ApiDoc('Start launching a cycle', {
     response: LineupCommandResultDto,
     description:
-      'By the air boss. One cycle per ship launches at a time; outside the launch window the start is ' +
-      'refused with outside_window until asked again with confirmOutsideWindow.',
-    refuses: { 404: ['not_found'], 409: ['stale_basis', 'wrong_state', 'ship_already_launching', 'outside_window'] },
+      'By the air boss, once every launch prerequisite of the ship is ticked. One cycle per ship launches at a ' +
+      'time; outside the launch window the start is refused with outside_window until asked again with ' +
+      'confirmOutsideWindow.',
+    refuses: {
+      404: ['not_found'],
+      409: ['stale_basis', 'wrong_state', 'prerequisites_not_ticked', 'ship_already_launching', 'outside_window'],
+    },
   })
   @Roles('air_boss')
   @Post(':cycleId/start')
@@ -102,6 +121,24 @@ export class CyclesController {
     @CurrentUser() user: AuthenticatedUser,
   ): Promise<LineupCommandResult> {
     return this.commands.start(cycleId, actorOf(user), body);
+  }
+
+  @ApiDoc('Tick or untick a launch prerequisite of a cycle', {
+    response: LineupCommandResultDto,
+    description:
+      'By the air boss, before launching starts: the prerequisite `number` (from 1) of the ship profile’s ' +
+      'list is ticked (done) or the tick is taken back; who and when are recorded.',
+    refuses: { 404: ['not_found'], 409: ['stale_basis', 'cycle_closed', 'wrong_state', 'no_change'] },
+  })
+  @Roles('air_boss')
+  @Put(':cycleId/prerequisites/:number')
+  setPrerequisite(
+    @Param('cycleId', ParseIntPipe) cycleId: number,
+    @Param('number', ParseIntPipe) number: number,
+    @Body() body: SetLaunchPrerequisiteDto,
+    @CurrentUser() user: AuthenticatedUser,
+  ): Promise<LineupCommandResult> {
+    return this.prerequisites.set(cycleId, actorOf(user), number, body);
   }
 
   @ApiDoc('Stop launching a cycle', {

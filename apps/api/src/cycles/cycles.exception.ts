@@ -13,6 +13,7 @@ const STATUS: Record<CycleRefusalCode, HttpStatus> = {
   pilot_already_assigned: HttpStatus.CONFLICT,
   ship_already_launching: HttpStatus.CONFLICT,
   outside_window: HttpStatus.CONFLICT,
+  prerequisites_not_ticked: HttpStatus.CONFLICT,
   invalid_wind_reading: HttpStatus.BAD_REQUEST,
   night_needs_case_iii: HttpStatus.CONFLICT,
   night_by_position: HttpStatus.CONFLICT,

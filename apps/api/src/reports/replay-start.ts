@@ -29,6 +29,8 @@ export function versionZeroState(state: LineupState, firstRecordedCycle: CycleVi
     ...state.cycle,
     ...(firstRecordedCycle ? conditionsOf(firstRecordedCycle) : {}),
     state: 'planning',
+    // Each tick entered through a logged change.
+    prerequisiteTicks: null,
     version: 0,
   };
   return { ...state, cycle, slots: [] };

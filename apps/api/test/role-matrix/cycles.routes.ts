@@ -55,6 +55,15 @@ export const cyclesRoutes: MatrixRoute[] = [
     example: async (context) => ({ params: { cycleId: await targetCycle(context) }, body: { basisVersion: 0 } }),
   },
   {
+    method: 'PUT',
+    path: '/api/cycles/{cycleId}/prerequisites/{number}',
+    allowed: ['air_boss'],
+    example: async (context) => ({
+      params: { cycleId: await targetCycle(context), number: 1 },
+      body: { ticked: true, basisVersion: 0 },
+    }),
+  },
+  {
     method: 'POST',
     path: '/api/cycles/{cycleId}/stop',
     allowed: ['air_boss'],

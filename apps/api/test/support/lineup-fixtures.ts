@@ -225,10 +225,12 @@ export class LineupDriver {
 
   /**
    * The air boss starts launching the cycle, confirming a start outside its window (a spec's cycle is planned
-   * an hour ahead). One cycle per ship launches: a cycle an earlier spec left launching is stopped first.
+   * an hour ahead), once every launch prerequisite is ticked. One cycle per ship launches: a cycle an earlier
+   * spec left launching is stopped first.
    */
   async start(cycleId: number): Promise<LineupCommandResult> {
     await this.stopLaunching((await this.demoShip()).id);
+    await this.tickPrerequisites(cycleId);
     const { version } = await this.snapshot(cycleId);
     return this.ok<LineupCommandResult>(AIR_BOSS, 'post', `/api/cycles/${cycleId}/start`, {
       basisVersion: version,
@@ -254,6 +256,19 @@ export class LineupDriver {
       await this.place(cycle.id, slots[index].id, catapultNumber);
     await this.start(cycle.id);
     return { cycle, slots };
+  }
+
+  /** The air boss ticks every launch prerequisite of the cycle not yet ticked. */
+  async tickPrerequisites(cycleId: number): Promise<void> {
+    const { cycle } = await this.snapshot(cycleId);
+    for (const [index, prerequisite] of cycle.launchPrerequisites.entries()) {
+      if (prerequisite.ticked) continue;
+      const { version } = await this.snapshot(cycleId);
+      await this.ok(AIR_BOSS, 'put', `/api/cycles/${cycleId}/prerequisites/${index + 1}`, {
+        ticked: true,
+        basisVersion: version,
+      });
+    }
   }
 
   /** The air boss stops whichever cycle of the ship is launching, if one is. */

@@ -168,10 +168,10 @@ export async function planCycle({ aircraft, start = false, night = false, wind }
 }
 
 /**
- * The air boss starts launching the cycle; one cycle per ship launches, so one an earlier test left
- * launching is stopped first.
+ * The air boss stops whichever cycle of the ship of `cycleId` is launching: one cycle per ship launches, so
+ * one an earlier test left launching would refuse the start of this one.
  */
-export async function startLaunching(cycleId: number) {
+export async function stopLaunchingBefore(cycleId: number) {
   const airboss = await apiAs('airboss');
   const cycles = await allOf<CycleView>(airboss, '/api/cycles');
   const cycle = cycles.find((candidate) => candidate.id === cycleId)!;
@@ -180,7 +180,25 @@ export async function startLaunching(cycleId: number) {
   )) {
     await ok(await airboss.post(`/api/cycles/${other.id}/stop`, { data: { basisVersion: other.version } }));
   }
-  await ok(await airboss.post(`/api/cycles/${cycleId}/start`, { data: { basisVersion: cycle.version } }));
+  await airboss.dispose();
+  return cycle;
+}
+
+/** The air boss ticks the cycle's open launch prerequisites and starts launching it. */
+export async function startLaunching(cycleId: number) {
+  const cycle = await stopLaunchingBefore(cycleId);
+  const airboss = await apiAs('airboss');
+  for (const [index, prerequisite] of cycle.launchPrerequisites.entries()) {
+    if (prerequisite.ticked) continue;
+    const { version } = await lineupOf(airboss, cycleId);
+    await ok(
+      await airboss.put(`/api/cycles/${cycleId}/prerequisites/${index + 1}`, {
+        data: { ticked: true, basisVersion: version },
+      }),
+    );
+  }
+  const { version } = await lineupOf(airboss, cycleId);
+  await ok(await airboss.post(`/api/cycles/${cycleId}/start`, { data: { basisVersion: version } }));
   await airboss.dispose();
 }
 

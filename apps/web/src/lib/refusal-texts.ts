@@ -81,6 +81,7 @@ const REASONS: Record<RefusalCode, string> = {
   pilot_already_assigned: 'the pilot already has an aircraft in the cycle',
   ship_already_launching: 'another cycle of the ship is launching',
   outside_window: 'now is outside the launch window',
+  prerequisites_not_ticked: 'a launch prerequisite is not ticked',
   invalid_wind_reading: 'the wind reading does not add up',
   night_needs_case_iii: 'a night cycle flies Case III',
   night_by_position: 'the sun at the ship’s position says otherwise',

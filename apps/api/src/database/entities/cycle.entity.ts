@@ -1,4 +1,11 @@
-import type { CatapultDeckHold, CycleState, LandingAreaState, RespotView, WeatherCase } from '@catline/contracts';
+import type {
+  CatapultDeckHold,
+  CycleState,
+  LaunchPrerequisiteTick,
+  LandingAreaState,
+  RespotView,
+  WeatherCase,
+} from '@catline/contracts';
 import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, Unique, type Relation } from 'typeorm';
 import { CreatedAtColumn, InstantColumn, UpdatedAtColumn } from '../columns.js';
 import { Ship } from './ship.entity.js';
@@ -85,6 +92,10 @@ export class Cycle {
   /** The catapults the air boss holds (deck not clear), with why; null or empty when every catapult is clear. */
   @Column({ name: 'deck_holds', type: 'json', nullable: true })
   deckHolds: CatapultDeckHold[] | null;
+
+  /** The launch prerequisites the air boss ticked for this cycle, by name; null or empty when none. */
+  @Column({ name: 'prerequisite_ticks', type: 'json', nullable: true })
+  prerequisiteTicks: LaunchPrerequisiteTick[] | null;
 
   /** The respot the handler built after the last launch, with its tows as the deck crew ticks them off. */
   @Column({ type: 'json', nullable: true })

@@ -21,6 +21,7 @@ import { AuditEntryShip1796245854530 } from './1796245854530-AuditEntryShip.js';
 import { AircraftTypeSettingTables1796262840562 } from './1796262840562-AircraftTypeSettingTables.js';
 import { LaunchRecordWholeWind1796277785788 } from './1796277785788-LaunchRecordWholeWind.js';
 import { LaunchRecordExcessWind1796280000000 } from './1796280000000-LaunchRecordExcessWind.js';
+import { CyclePrerequisiteTicks1796290000000 } from './1796290000000-CyclePrerequisiteTicks.js';
 
 /** Every migration in the order it runs; add a new one at the end (see DEVELOPERS.md). */
 export const migrations = [
@@ -47,4 +48,5 @@ export const migrations = [
   AircraftTypeSettingTables1796262840562,
   LaunchRecordWholeWind1796277785788,
   LaunchRecordExcessWind1796280000000,
+  CyclePrerequisiteTicks1796290000000,
 ];

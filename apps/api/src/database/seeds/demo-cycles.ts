@@ -132,6 +132,8 @@ async function flyEarlierCycle(deck: DemoDeck, shipId: number, planned: Date): P
   await deck.markDown(cycleId, HANDLER, 'C24', 'C31');
   deck.clock.advance(20);
   await deck.acknowledgeWeight(cycleId, 'C31');
+  deck.clock.at = new Date(planned.getTime() - 8 * MINUTE);
+  await deck.tickPrerequisites(cycleId, AIR_BOSS);
   deck.clock.at = new Date(planned.getTime() - 3 * MINUTE);
   await deck.readWind(cycleId, AIR_OPS, { trueWindFromDeg: 30, trueWindSpeedKt: 11 });
   deck.clock.at = new Date(planned.getTime() - 2 * MINUTE);

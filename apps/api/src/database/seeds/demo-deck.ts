@@ -12,6 +12,7 @@ import { toAuthenticatedUser } from '../../auth/session.mapper.js';
 import type { AuthenticatedUser } from '../../common/authenticated-user.js';
 import { CycleCommandsService } from '../../cycles/cycle-commands.service.js';
 import { CyclesService } from '../../cycles/cycles.service.js';
+import { LaunchPrerequisitesService } from '../../cycles/launch-prerequisites.service.js';
 import type { CreateCycleDto } from '../../cycles/dto/create-cycle.dto.js';
 import { BasisChecks } from '../../cycle-changes/basis-checks.service.js';
 import { LineupChangeFeed } from '../../cycle-changes/change-feed.service.js';
@@ -63,6 +64,7 @@ export class DemoDeck {
   readonly clock: SetClock;
   private readonly cycles: CyclesService;
   private readonly cycleCommands: CycleCommandsService;
+  private readonly prerequisites: LaunchPrerequisitesService;
   private readonly lineup: LineupCommandsService;
   private readonly readiness: ReadinessService;
   private readonly snapshots: LineupSnapshotService;
@@ -86,6 +88,7 @@ export class DemoDeck {
     const closing = new CycleClosing(new MailOutbox());
     this.cycles = new CyclesService(dataSource, new AuditTrail(), this.clock);
     this.cycleCommands = new CycleCommandsService(changes, basis, closing, this.clock);
+    this.prerequisites = new LaunchPrerequisitesService(changes, basis, this.clock);
     this.lineup = new LineupCommandsService(changes, basis, this.clock);
     this.readiness = new ReadinessService(changes, basis, log, closing, this.clock);
     this.snapshots = new LineupSnapshotService(dataSource, loader);
@@ -170,6 +173,17 @@ export class DemoDeck {
       slotVersion: slot.version,
       grossWeightLb: slot.grossWeightLb,
     });
+  }
+
+  /** The air boss ticks every launch prerequisite still open, half a minute apart. */
+  async tickPrerequisites(cycleId: number, by: string): Promise<void> {
+    const { cycle } = await this.snapshot(cycleId);
+    for (const [index, prerequisite] of cycle.launchPrerequisites.entries()) {
+      if (prerequisite.ticked) continue;
+      const { version } = await this.snapshot(cycleId);
+      await this.prerequisites.set(cycleId, this.actor(by), index + 1, { basisVersion: version, ticked: true });
+      this.clock.advance(30);
+    }
   }
 
   async start(cycleId: number, by: string): Promise<void> {

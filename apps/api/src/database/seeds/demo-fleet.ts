@@ -18,6 +18,13 @@ export const demoShip = {
       II: 'Brindlemark house departure, Case II (invented for the demo): after the clearing turn hold 800 ft on the ship’s heading to 5 nm, call "gate" to the ship’s departure desk, then climb on the heading the desk gives to the briefed block.',
       III: 'Brindlemark house departure, Case III (invented for the demo): no turn off the catapult; climb at once to 1,500 ft on the ship’s heading; at 4 nm take the heading the departure desk gives, climb to the briefed block and report level.',
     },
+    // The ship's own list, invented for the demo.
+    launchPrerequisites: [
+      'Plane guard helicopter up and on station',
+      'Flight deck swept for loose gear',
+      'Crash and salvage crews at their posts',
+      'No-load test shots fired on every catapult',
+    ],
   } satisfies ShipProfile,
 };
 

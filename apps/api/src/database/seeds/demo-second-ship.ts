@@ -17,6 +17,7 @@ export const secondShip = {
       II: 'Quillmoor house departure, Case II (invented for the demo): hold 700 ft on the ship’s heading to 4 nm, call the departure desk, climb on the heading it gives.',
       III: 'Quillmoor house departure, Case III (invented for the demo): climb at once to 1,500 ft on the ship’s heading; at 4 nm take the heading the departure desk gives.',
     },
+    launchPrerequisites: ['Plane guard helicopter up', 'Deck swept', 'Fire party at the catapults'],
   } satisfies ShipProfile,
 };
 

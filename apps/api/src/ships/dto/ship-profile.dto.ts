@@ -7,9 +7,10 @@ import {
   type ShipProfile,
 } from '@catline/contracts';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { Type } from 'class-transformer';
+import { Transform, Type } from 'class-transformer';
 import {
   ArrayMaxSize,
+  ArrayUnique,
   IsArray,
   IsIn,
   IsInt,
@@ -25,6 +26,8 @@ import {
   ValidateNested,
 } from 'class-validator';
 import { Trim } from '../../common/validation/trim.decorator.js';
+
+const MAX_LAUNCH_PREREQUISITES = 12;
 
 class ClearingTurnDto {
   @ApiProperty({ minimum: -180, maximum: 180, description: 'Degrees; positive to starboard.' })
@@ -113,4 +116,25 @@ export class ShipProfileDto implements ShipProfile {
   @IsOptional()
   @IsTimeZone({ message: 'timeZone must be a time zone name such as Pacific/Guam or UTC' })
   timeZone?: string;
+
+  @ApiPropertyOptional({
+    type: 'string',
+    isArray: true,
+    maxItems: MAX_LAUNCH_PREREQUISITES,
+    description: 'What the air boss ticks for each cycle before launching starts, in short words; left out, none.',
+  })
+  @IsOptional()
+  @Transform(({ value }: { value: unknown }) =>
+    Array.isArray(value) ? value.map((item: unknown) => (typeof item === 'string' ? item.trim() : item)) : value,
+  )
+  @IsArray({ message: 'launchPrerequisites must be a list of short texts' })
+  @ArrayMaxSize(MAX_LAUNCH_PREREQUISITES, {
+    message: `launchPrerequisites may hold at most ${MAX_LAUNCH_PREREQUISITES} items`,
+  })
+  @IsString({ each: true, message: 'launchPrerequisites must each be a text' })
+  @IsNotEmpty({ each: true, message: 'launchPrerequisites must not hold a blank item' })
+  @MaxLength(80, { each: true, message: 'launchPrerequisites must each be at most 80 characters' })
+  // The air boss's ticks are kept by name: two items of one name would share a tick.
+  @ArrayUnique({ message: 'launchPrerequisites must not name one item twice' })
+  launchPrerequisites?: string[];
 }

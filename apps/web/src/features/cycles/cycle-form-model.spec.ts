@@ -65,6 +65,7 @@ describe('editing a cycle', () => {
     latitudeDeg: null,
     longitudeDeg: null,
     timeZone: 'UTC',
+    launchPrerequisites: [],
     plannedLaunchAt: '2026-12-02T14:30:00.000Z',
     windowStartAt: '2026-12-02T14:20:00.000Z',
     windowEndAt: '2026-12-02T15:00:00.000Z',
@@ -101,6 +102,7 @@ describe('editing a cycle', () => {
       latitudeDeg: _latitude,
       longitudeDeg: _longitude,
       timeZone: _timeZone,
+      launchPrerequisites: _prerequisites,
       respot: _respot,
       ...conditions
     } = cycle;

@@ -28,6 +28,7 @@ const cycle: CycleView = {
   latitudeDeg: null,
   longitudeDeg: null,
   timeZone: 'UTC',
+  launchPrerequisites: [],
   plannedLaunchAt: '2026-12-02T10:00:00.000Z',
   windowStartAt: '2026-12-02T09:55:00.000Z',
   windowEndAt: '2026-12-02T10:20:00.000Z',

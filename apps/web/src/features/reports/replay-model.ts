@@ -33,6 +33,7 @@ export const CHANGE_KIND_LABELS: Record<ChangeKind, string> = {
   aircraft_towed: 'Tow',
   landing_area_set: 'Landing area',
   deck_status_set: 'Deck status',
+  launch_prerequisite_set: 'Launch prerequisite',
   respot_built: 'Respot',
   respot_tow_done: 'Respot tow',
   spare_called: 'Spare called',

@@ -20,6 +20,7 @@ function cycle(id: number, plannedLaunchAt: string, state: CycleView['state']): 
     latitudeDeg: null,
     longitudeDeg: null,
     timeZone: 'UTC',
+    launchPrerequisites: [],
     plannedLaunchAt,
     windowStartAt: plannedLaunchAt,
     windowEndAt: plannedLaunchAt,

@@ -5,6 +5,7 @@ import {
   type CycleView,
   LANDING_AREA_STATES,
   type LandingAreaState,
+  type LaunchPrerequisiteView,
   type RespotView,
   WEATHER_CASES,
   type WeatherCase,
@@ -13,6 +14,21 @@ import { ApiProperty, ApiSchema } from '@nestjs/swagger';
 import { RespotViewDto } from './deck.view.js';
 import { EnumProperty, IdProperty, InstantProperty, IntProperty } from './fields.js';
 import { PageDto } from './paging.view.js';
+
+@ApiSchema({ name: 'LaunchPrerequisiteView' })
+export class LaunchPrerequisiteViewDto implements LaunchPrerequisiteView {
+  @ApiProperty({ description: 'The prerequisite in the ship profile’s words.' })
+  name: string;
+
+  @ApiProperty({ description: 'True once the air boss has ticked it for this cycle.' })
+  ticked: boolean;
+
+  @ApiProperty({ type: 'string', nullable: true, description: 'Who ticked it; null while not ticked.' })
+  tickedBy: string | null;
+
+  @InstantProperty({ nullable: true, description: 'When it was ticked; null while not ticked.' })
+  tickedAt: string | null;
+}
 
 @ApiSchema({ name: 'CycleView' })
 export class CycleViewDto implements CycleView {
@@ -107,6 +123,14 @@ export class CycleViewDto implements CycleView {
 
   @ApiProperty({ description: 'The ship’s time zone (IANA name) the cycle’s times are shown in.' })
   timeZone: string;
+
+  @ApiProperty({
+    type: () => LaunchPrerequisiteViewDto,
+    isArray: true,
+    description:
+      'The ship profile’s launch prerequisites with the air boss’s ticks; launching starts once all are ticked.',
+  })
+  launchPrerequisites: LaunchPrerequisiteView[];
 }
 
 export const CyclePageDto = PageDto(CycleViewDto, 'Cycle', 'One page of the cycles, newest planned launch first.');

@@ -174,6 +174,13 @@ export class ShipProfileDto implements ShipProfile {
 
   @ApiPropertyOptional({ description: 'The ship’s time zone, an IANA name; left out, UTC.' })
   timeZone?: string;
+
+  @ApiPropertyOptional({
+    type: 'string',
+    isArray: true,
+    description: 'What the air boss ticks for each cycle before launching starts; left out, none.',
+  })
+  launchPrerequisites?: string[];
 }
 
 @ApiSchema({ name: 'ShipView' })

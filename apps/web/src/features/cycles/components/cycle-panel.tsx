@@ -13,6 +13,7 @@ import { toConditionsRequest, valuesFromCycle } from '../cycle-form-model.js';
 import { AddSlotForm } from './add-slot-form.js';
 import { AirPlanImport } from './air-plan-import.js';
 import { CycleForm } from './cycle-form.js';
+import { LaunchPrerequisites } from './launch-prerequisites.js';
 import { LaunchingControls } from './launching-controls.js';
 
 /** One cycle: its conditions (editable by air operations), the air boss's start and stop, closing, and adding aircraft. */
@@ -70,6 +71,7 @@ export function CyclePanel({ cycle }: { cycle: CycleView }) {
       {/* Gross weights are launch figures: the aircraft added below and the air-plan preview show them. */}
       <CautionLine />
       {notice && <NoticeBanner notice={notice} onDismiss={dismiss} />}
+      <LaunchPrerequisites cycle={cycle} onRefused={show} />
       <Stack gap="2">
         <Text fontWeight="700">Conditions</Text>
         <CycleForm

@@ -6,10 +6,12 @@ import { refusalNotice } from '../../../components/refusal-notice.js';
 import { ApiRequestError, errorMessage } from '../../../lib/api-error.js';
 import { useEndCycleStep } from '../api/end-cycle-step.js';
 import { useStartCycle } from '../api/start-cycle.js';
+import { startBlockedBy } from '../launch-prerequisites-model.js';
 
 /**
- * The air boss's start and stop of launching. Starting outside the launch window is first refused with a
- * warning; the air boss reads it and starts anyway with a second, deliberate press.
+ * The air boss's start and stop of launching. The start waits for every launch prerequisite to be ticked,
+ * and says which are not. Starting outside the launch window is first refused with a warning; the air
+ * boss reads it and starts anyway with a second, deliberate press.
  */
 export function LaunchingControls({ cycle, onRefused }: { cycle: CycleView; onRefused: (notice: Notice) => void }) {
   const start = useStartCycle(cycle.id);
@@ -58,9 +60,25 @@ export function LaunchingControls({ cycle, onRefused }: { cycle: CycleView; onRe
       </Stack>
     );
   }
+  const blockedBy = startBlockedBy(cycle);
+  const reasonId = `start-blocked-${cycle.id}`;
   return (
-    <Button size="lg" colorPalette="go" loading={start.isPending} onClick={() => send(false)}>
-      Start launching
-    </Button>
+    <Stack gap="1" maxW="md">
+      <Button
+        size="lg"
+        colorPalette="go"
+        loading={start.isPending}
+        disabled={blockedBy !== null}
+        aria-describedby={blockedBy ? reasonId : undefined}
+        onClick={() => send(false)}
+      >
+        Start launching
+      </Button>
+      {blockedBy && (
+        <Text id={reasonId} fontSize="sm">
+          {blockedBy}
+        </Text>
+      )}
+    </Stack>
   );
 }

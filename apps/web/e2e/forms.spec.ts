@@ -106,6 +106,23 @@ test('air operations is stopped on a wrong figure and window, creates the cycle,
       tanker,
     })),
   ).toEqual([{ sideNumber: side, mission: 'Tanker track', fuelLb: 11_500, grossWeightLb: 45_400, tanker: true }]);
+
+  // A wind read off the deck: 35 kt dead ahead while steaming 25 kt into it is 10 kt of true wind from
+  // ahead; its gust and lull likewise lose the ship's 25 kt (arithmetic, the wind being along the course).
+  const conditions = panel.getByRole('form', { name: 'Save conditions' });
+  await conditions.getByLabel('Wind entered as').selectOption('relative');
+  await conditions.getByRole('button', { name: 'Save conditions' }).click();
+  await expect(conditions.getByText('Enter a bearing off the bow from −180 to 180°.')).toBeVisible();
+  await conditions.getByLabel('Wind off the bow (°, port −)').fill('0');
+  await conditions.getByLabel('Wind over the deck (kt)').fill('35');
+  await conditions.getByLabel('Gust (kt, optional)').fill('38');
+  await conditions.getByLabel('Lull (kt, optional)').fill('33');
+  await conditions.getByRole('button', { name: 'Save conditions' }).click();
+  await expect(panel.getByText('Conditions saved; every launch figure has been worked out again.')).toBeVisible();
+  const read = (await allOf<CycleView>(api, '/api/cycles')).find((candidate) => candidate.id === cycle.id)!;
+  expect(read.trueWindSpeedKt).toBeCloseTo(10, 6);
+  expect(read.windGustKt).toBeCloseTo(13, 6);
+  expect(read.windLullKt).toBeCloseTo(8, 6);
 });
 
 test('the admin is told which figures of a new aircraft type are wrong, then adds it and sees its launch data', async ({

@@ -39,10 +39,14 @@ export const numberText = (range: Range, message: string, { whole = false } = {}
 export const typedNumber = (range: Range, message: string, options: { whole?: boolean } = {}) =>
   z.pipe(numberText(range, message, options), z.transform(Number));
 
+/** Text that stays empty or reads as a number within the range, kept as typed. */
+export const optionalNumberText = (range: Range, message: string, { whole = false } = {}) =>
+  z.string().check(z.refine((text) => text.trim() === '' || readsInRange(text, range, whole), message));
+
 /** The same, or nothing (null) when left empty. */
-export const optionalTypedNumber = (range: Range, message: string, { whole = false } = {}) =>
+export const optionalTypedNumber = (range: Range, message: string, options: { whole?: boolean } = {}) =>
   z.pipe(
-    z.string().check(z.refine((text) => text.trim() === '' || readsInRange(text, range, whole), message)),
+    optionalNumberText(range, message, options),
     z.transform((text: string) => (text.trim() === '' ? null : Number(text))),
   );
 

@@ -109,6 +109,42 @@ describe('editing a cycle', () => {
     expect(toConditionsRequest(valuesFromCycle(cycle), cycle.version)).toEqual({ ...conditions, basisVersion: 5 });
   });
 
+  it('sends a wind read across the deck, with its gust and lull, in place of the true wind', () => {
+    const values: CycleFormValues = {
+      ...valuesFromCycle(cycle),
+      windFrame: 'relative',
+      relativeWindBearingDeg: '-12',
+      relativeWindSpeedKt: '31',
+      windGustKt: '36',
+      windLullKt: '27',
+    };
+    const request = toConditionsRequest(values, cycle.version);
+    expect(request).toMatchObject({
+      relativeWindBearingDeg: -12,
+      relativeWindSpeedKt: 31,
+      windGustKt: 36,
+      windLullKt: 27,
+      basisVersion: 5,
+    });
+    expect(request).not.toHaveProperty('trueWindFromDeg');
+    expect(request).not.toHaveProperty('trueWindSpeedKt');
+  });
+
+  it('asks for the bearing and speed of a wind across the deck, and leaves gust and lull optional', () => {
+    const relative: CycleFormValues = { ...valuesFromCycle(cycle), windFrame: 'relative' };
+    expect(validateCycleForm(relative, false)).toEqual({
+      relativeWindBearingDeg: 'Enter a bearing off the bow from −180 to 180°.',
+      relativeWindSpeedKt: 'Enter a wind speed from 0 to 120 kt.',
+    });
+    expect(validateCycleForm({ ...valuesFromCycle(cycle), windGustKt: '121' }, false)).toEqual({
+      windGustKt: 'Enter a gust from 0 to 120 kt.',
+    });
+    // The true wind stays as it was and is not sent while the wind is read across the deck.
+    expect(validateCycleForm({ ...relative, relativeWindBearingDeg: '0', relativeWindSpeedKt: '0' }, false)).toEqual(
+      {},
+    );
+  });
+
   it('does not ask for the number, which a conditions change cannot alter', () => {
     expect(validateCycleForm({ ...valuesFromCycle(cycle), number: '' }, false)).toEqual({});
   });

@@ -9,7 +9,7 @@ import {
 } from '@catline/contracts';
 import * as z from 'zod/mini';
 import { formatWhole } from '../../lib/format.js';
-import { numberText } from '../../lib/form-rules.js';
+import { numberText, optionalNumberText } from '../../lib/form-rules.js';
 
 const pad = (n: number) => String(n).padStart(2, '0');
 
@@ -20,6 +20,18 @@ export function toLocalInput(iso: string): string {
 }
 
 const fromLocalInput = (value: string) => new Date(value).toISOString();
+
+/** How the wind is entered: the true wind, or the wind across the deck (a conditions change only). */
+export const WIND_FRAMES = ['true', 'relative'] as const;
+
+// A gust or lull left empty is the steady wind's.
+const trueWindEntry = {
+  windFrame: 'true',
+  relativeWindBearingDeg: '',
+  relativeWindSpeedKt: '',
+  windGustKt: '',
+  windLullKt: '',
+} as const;
 
 export function newCycleValues(now = new Date(), nextNumber = 1): CycleFormValues {
   const planned = new Date(now.getTime() + 30 * 60_000);
@@ -33,6 +45,7 @@ export function newCycleValues(now = new Date(), nextNumber = 1): CycleFormValue
     shipSpeedKt: '20',
     trueWindFromDeg: '0',
     trueWindSpeedKt: '10',
+    ...trueWindEntry,
     temperatureC: '15',
     pressureHpa: '1013',
     weatherCase: 'I',
@@ -50,6 +63,7 @@ export function valuesFromCycle(cycle: CycleView): CycleFormValues {
     shipSpeedKt: String(cycle.shipSpeedKt),
     trueWindFromDeg: String(cycle.trueWindFromDeg),
     trueWindSpeedKt: String(cycle.trueWindSpeedKt),
+    ...trueWindEntry,
     temperatureC: String(cycle.temperatureC),
     pressureHpa: String(cycle.pressureHpa),
     weatherCase: cycle.weatherCase,
@@ -77,11 +91,17 @@ const figureWords: Record<ConditionFigure, [words: string, unit: string]> = {
 // A typographic minus, as people write a temperature below zero.
 const figure = (value: number) => (value < 0 ? `−${formatWhole(-value)}` : formatWhole(value));
 
-const conditionFigure = (field: ConditionFigure) => {
+const figureMessage = (field: ConditionFigure) => {
   const [words, unit] = figureWords[field];
   const range = CONDITION_RANGES[field];
-  return numberText(range, `Enter ${words} from ${figure(range.min)} to ${figure(range.max)}${unit}.`);
+  return `Enter ${words} from ${figure(range.min)} to ${figure(range.max)}${unit}.`;
 };
+
+const conditionFigure = (field: ConditionFigure) => numberText(CONDITION_RANGES[field], figureMessage(field));
+const optionalConditionFigure = (field: ConditionFigure) =>
+  optionalNumberText(CONDITION_RANGES[field], figureMessage(field));
+
+const RELATIVE_WIND_FIGURES = ['relativeWindBearingDeg', 'relativeWindSpeedKt'] as const;
 
 const dateTime = z.string().check(z.refine((text) => !Number.isNaN(Date.parse(text)), 'Enter a date and time.'));
 
@@ -106,6 +126,12 @@ export const cycleFormSchema = (withNumber: boolean) =>
       shipSpeedKt: conditionFigure('shipSpeedKt'),
       trueWindFromDeg: conditionFigure('trueWindFromDeg'),
       trueWindSpeedKt: conditionFigure('trueWindSpeedKt'),
+      windFrame: z.enum(WIND_FRAMES),
+      // Checked below, when the wind is entered across the deck.
+      relativeWindBearingDeg: z.string(),
+      relativeWindSpeedKt: z.string(),
+      windGustKt: optionalConditionFigure('windGustKt'),
+      windLullKt: optionalConditionFigure('windLullKt'),
       temperatureC: conditionFigure('temperatureC'),
       pressureHpa: conditionFigure('pressureHpa'),
       weatherCase: z.enum(WEATHER_CASES),
@@ -116,6 +142,11 @@ export const cycleFormSchema = (withNumber: boolean) =>
         const [opens, planned, closes] = [values.windowStartAt, values.plannedLaunchAt, values.windowEndAt].map(
           Date.parse,
         );
+        if (values.windFrame === 'relative')
+          for (const field of RELATIVE_WIND_FIGURES) {
+            if (!conditionFigure(field).safeParse(values[field]).success)
+              context.addIssue({ code: 'custom', path: [field], message: figureMessage(field) });
+          }
         if (Number.isNaN(planned)) return;
         if (opens > planned)
           context.addIssue({
@@ -159,7 +190,26 @@ export const toCreateRequest = (values: CycleFormValues, shipId: number): Create
   number: Number(values.number),
 });
 
-export const toConditionsRequest = (values: CycleFormValues, basisVersion: number): UpdateCycleConditionsRequest => ({
-  ...conditionsOf(values),
-  basisVersion,
-});
+type WindReadingRequest = Pick<
+  UpdateCycleConditionsRequest,
+  'trueWindFromDeg' | 'trueWindSpeedKt' | 'relativeWindBearingDeg' | 'relativeWindSpeedKt' | 'windGustKt' | 'windLullKt'
+>;
+
+/** The wind reading of a conditions change: true or across the deck, with a gust and a lull where typed. */
+function windReadingOf(values: CycleFormValues): WindReadingRequest {
+  const reading: WindReadingRequest =
+    values.windFrame === 'relative'
+      ? {
+          relativeWindBearingDeg: Number(values.relativeWindBearingDeg),
+          relativeWindSpeedKt: Number(values.relativeWindSpeedKt),
+        }
+      : { trueWindFromDeg: Number(values.trueWindFromDeg), trueWindSpeedKt: Number(values.trueWindSpeedKt) };
+  if (values.windGustKt.trim() !== '') reading.windGustKt = Number(values.windGustKt);
+  if (values.windLullKt.trim() !== '') reading.windLullKt = Number(values.windLullKt);
+  return reading;
+}
+
+export function toConditionsRequest(values: CycleFormValues, basisVersion: number): UpdateCycleConditionsRequest {
+  const { trueWindFromDeg: _from, trueWindSpeedKt: _speed, ...rest } = conditionsOf(values);
+  return { ...rest, ...windReadingOf(values), basisVersion };
+}

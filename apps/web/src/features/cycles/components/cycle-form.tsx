@@ -1,10 +1,12 @@
 import { Alert, Button, HStack, Input, SimpleGrid, Stack } from '@chakra-ui/react';
 import { WEATHER_CASES } from '@catline/contracts';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useForm } from 'react-hook-form';
+import { useForm, useWatch } from 'react-hook-form';
 import { CheckControl, SelectControl } from '../../../components/form-controls.js';
 import { FormField } from '../../../components/form-field.js';
 import { cycleFormSchema, type CycleFormValues } from '../cycle-form-model.js';
+
+type FigureField = Exclude<keyof CycleFormValues, 'weatherCase' | 'night' | 'windFrame'>;
 
 interface CycleFormProps {
   initial: CycleFormValues;
@@ -18,14 +20,32 @@ interface CycleFormProps {
   onCancel?: () => void;
 }
 
-const numberFields = [
+const shipFields: [FigureField, string][] = [
   ['shipCourseDeg', 'Ship course (°T)'],
   ['shipSpeedKt', 'Ship speed (kt)'],
+];
+const trueWindFields: [FigureField, string][] = [
   ['trueWindFromDeg', 'True wind from (°T)'],
   ['trueWindSpeedKt', 'True wind speed (kt)'],
+];
+// Read off the deck's anemometer: where the wind comes from off the bow, and its speed over the deck.
+const relativeWindFields: [FigureField, string][] = [
+  ['relativeWindBearingDeg', 'Wind off the bow (°, port −)'],
+  ['relativeWindSpeedKt', 'Wind over the deck (kt)'],
+];
+const gustFields: [FigureField, string][] = [
+  ['windGustKt', 'Gust (kt, optional)'],
+  ['windLullKt', 'Lull (kt, optional)'],
+];
+const airFields: [FigureField, string][] = [
   ['temperatureC', 'Temperature (°C)'],
   ['pressureHpa', 'Pressure (hPa)'],
-] as const;
+];
+
+const WIND_FRAME_CHOICES = [
+  { value: 'true', label: 'True wind' },
+  { value: 'relative', label: 'Across the deck' },
+];
 
 export function CycleForm({
   initial,
@@ -43,6 +63,14 @@ export function CycleForm({
     handleSubmit,
     formState: { errors },
   } = useForm({ resolver: zodResolver(cycleFormSchema(withNumber)), defaultValues: initial });
+  // A new cycle starts from the true wind; a reading across the deck, gust and lull come with a change.
+  const acrossTheDeck = useWatch({ control, name: 'windFrame' }) === 'relative';
+  const figureFields = [
+    ...shipFields,
+    ...(acrossTheDeck ? relativeWindFields : trueWindFields),
+    ...(withNumber ? [] : gustFields),
+    ...airFields,
+  ];
 
   return (
     <form onSubmit={handleSubmit(onSubmit)} noValidate aria-label={submitLabel}>
@@ -68,8 +96,13 @@ export function CycleForm({
           <FormField label="Window closes" error={errors.windowEndAt?.message} required>
             <Input type="datetime-local" {...register('windowEndAt')} disabled={readOnly} />
           </FormField>
-          {numberFields.map(([field, label]) => (
-            <FormField key={field} label={label} error={errors[field]?.message} required>
+          {!withNumber && (
+            <FormField label="Wind entered as" required>
+              <SelectControl control={control} name="windFrame" choices={WIND_FRAME_CHOICES} disabled={readOnly} />
+            </FormField>
+          )}
+          {figureFields.map(([field, label]) => (
+            <FormField key={field} label={label} error={errors[field]?.message} required={!label.includes('optional')}>
               <Input inputMode="decimal" {...register(field)} disabled={readOnly} />
             </FormField>
           ))}

@@ -90,6 +90,7 @@ test('the deck edge operator launches from a touch tablet an aircraft whose pilo
   await expect(pilot.getByTestId('weight-agreed')).toHaveText('Agreed with the crew: 43,500 lb.', LIVE);
   // One tap on the plan's figure would take the agreement back: only a typed figure may still be answered.
   await expect(pilot.getByTestId('acknowledge-weight')).toBeHidden();
+  await expect(pilot.getByRole('region', { name: 'Gross weight' })).toContainText('Gross weight agreed43,500 lb');
   await expect(pilot.getByTestId('weight-correction')).toBeVisible();
   await expect(pilot.getByTestId('slot-status')).toHaveText('Weight agreed', LIVE);
   await expect(boardCard).toHaveAttribute('data-status', 'weight_agreed', LIVE);

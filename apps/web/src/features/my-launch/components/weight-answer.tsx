@@ -18,7 +18,8 @@ export function WeightAnswer({ slot, pending, onAnswer }: WeightAnswerProps) {
   const closed = slot.status === 'launched' || slot.status === 'down' || slot.status === 'scratched';
   // Once the crew recorded a figure, agreeing the plan again would take that agreement back: only a
   // different figure, typed on purpose, may still be answered.
-  const agreedByCrew = slot.catapultWeightAckAt !== null && slot.agreedWeightLb !== null;
+  const agreedLb = slot.catapultWeightAckAt !== null ? slot.agreedWeightLb : null;
+  const agreedByCrew = agreedLb !== null;
   const answer = () => {
     const read = weightAnswer(typed);
     if ('problem' in read) return setProblem(read.problem);
@@ -27,7 +28,11 @@ export function WeightAnswer({ slot, pending, onAnswer }: WeightAnswerProps) {
   };
   return (
     <Stack gap="3" borderWidth="1px" rounded="card" p={{ base: '3', md: '4' }} as="section" aria-label="Gross weight">
-      <FigureStat label="Gross weight shown by the crew" value={formatPounds(slot.grossWeightLb)} size="xl" />
+      <FigureStat
+        label={agreedByCrew ? 'Gross weight agreed' : 'Gross weight shown by the crew'}
+        value={formatPounds(agreedLb ?? slot.grossWeightLb)}
+        size="xl"
+      />
       {slot.agreedWeightLb !== null && (
         <Text color="go.fg" fontWeight="600" data-testid="weight-agreed">
           Agreed with the crew: {formatPounds(slot.agreedWeightLb)}.

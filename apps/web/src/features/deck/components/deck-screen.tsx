@@ -104,7 +104,6 @@ function DeckWorkspace({ snapshot, ship }: { snapshot: LineupSnapshot; ship: Shi
     <Stack gap="2">
       {notice && <NoticeBanner notice={notice} onDismiss={dismiss} />}
       <LandingAreaControl snapshot={snapshot} />
-      <DeckStatusControl snapshot={snapshot} />
       <RespotPanel snapshot={snapshot} panels={panels} live={live} />
       <DndContext {...drag.contextProps}>
         <SimpleGrid columns={{ base: 2, lg: 3 }} gap="2">
@@ -127,6 +126,8 @@ function DeckWorkspace({ snapshot, ship }: { snapshot: LineupSnapshot; ship: Shi
         </SimpleGrid>
         <DragOverlay>{drag.held ? <LiftedChip slot={drag.held} /> : null}</DragOverlay>
       </DndContext>
+      {/* Below the deck, so the deck itself stays on a tablet's first screen. */}
+      <DeckStatusControl snapshot={snapshot} />
     </Stack>
   );
 }

@@ -175,13 +175,14 @@ test('the admin edits a launch table and a stores catalogue row by row, told in 
   const admin = await openAs(browser, 'admin', '/launch-data');
   await admin.getByRole('button', { name: `Show ${type.designation}` }).click();
 
-  await admin.getByRole('button', { name: 'Add row' }).click();
-  await admin.getByLabel('Row 3 gross weight').fill('40000');
-  await admin.getByLabel('Row 3 minimum launch airspeed').fill('150');
-  await admin.getByRole('button', { name: 'Save table' }).click();
+  const table = admin.getByRole('region', { name: 'Launch table' });
+  await table.getByRole('button', { name: 'Add row' }).click();
+  await table.getByLabel('Row 3 gross weight').fill('40000');
+  await table.getByLabel('Row 3 minimum launch airspeed').fill('150');
+  await table.getByRole('button', { name: 'Save table' }).click();
   await expect(admin.getByRole('alert')).toContainText('Row 3: each weight must be heavier than the row above.');
-  await admin.getByLabel('Row 3 gross weight').fill('52000');
-  await saved(admin, 'launch-table', () => admin.getByRole('button', { name: 'Save table' }).click());
+  await table.getByLabel('Row 3 gross weight').fill('52000');
+  await saved(admin, 'launch-table', () => table.getByRole('button', { name: 'Save table' }).click());
   await expect(admin.getByRole('alert')).toHaveCount(0);
 
   const stores = admin.getByRole('region', { name: 'Stores catalogue' });

@@ -59,7 +59,7 @@ function TypeDetail({ type, editable }: { type: AircraftTypeView; editable: bool
         </Text>
         <Text>{formatTrimBands(type.trimBands)}</Text>
       </Box>
-      <Box>
+      <Box as="section" aria-label="Launch table">
         <Text fontWeight="700" mb="2">
           Launch table
         </Text>

@@ -1,25 +1,26 @@
 import { expect, test } from '@playwright/test';
 import type { CycleView } from '@catline/contracts';
-import { apiAs, placeInLane, planCycle } from './support/demo-api.js';
+import { apiAs, pilotsWithoutOpenSlots, placeInLane, planCycle } from './support/demo-api.js';
 import { openAs } from './support/screens.js';
 
 test('each person lands on their cycle, and the Cycles list and the screens on a cycle follow its closing live', async ({
   browser,
 }) => {
-  // Two cycles: one launching; one planned after it holding pilot20's only slot, on catapult 1 too.
+  // Two cycles: one launching; one planned after it holding the only slot of a pilot, on catapult 1 too.
+  const [pilot, other] = await pilotsWithoutOpenSlots(2);
   const { cycle: launching } = await planCycle({
     start: true,
-    aircraft: [{ side: 'C23', grossWeightLb: 43_500, pilot: 'pilot21' }],
+    aircraft: [{ side: 'C23', grossWeightLb: 43_500, pilot: other }],
   });
   const { cycle: planned, slotIds } = await planCycle({
-    aircraft: [{ side: 'C24', grossWeightLb: 45_100, pilot: 'pilot20' }],
+    aircraft: [{ side: 'C24', grossWeightLb: 45_100, pilot }],
   });
   const handlerApi = await apiAs('handler');
   await placeInLane(handlerApi, planned.id, slotIds.get('C24')!, 1);
   await handlerApi.dispose();
 
   // Opened without ?cycle=, each screen takes the cycle the server lands its person on into the address.
-  const pilotPage = await openAs(browser, 'pilot20', '/my-launch');
+  const pilotPage = await openAs(browser, pilot, '/my-launch');
   await expect(pilotPage).toHaveURL(new RegExp(`[?&]cycle=${planned.id}\\b`));
   await expect(pilotPage.getByText(`Cycle ${planned.number}`, { exact: true })).toBeVisible();
 

@@ -84,6 +84,22 @@ export interface PlannedAircraft {
   tanker?: boolean;
 }
 
+/**
+ * Demo pilots (as signed in, e.g. `pilot7`) who hold no slot in any open cycle: the screens land a pilot
+ * on an open cycle holding their slot, and earlier tests leave cycles open with pilots crewed in them.
+ */
+export async function pilotsWithoutOpenSlots(count: number): Promise<string[]> {
+  const airops = await apiAs('airops');
+  const open = (await allOf<CycleView>(airops, '/api/cycles')).filter((cycle) => cycle.state !== 'closed');
+  const busy = new Set<number | null>();
+  for (const cycle of open) for (const slot of (await lineupOf(airops, cycle.id)).slots) busy.add(slot.pilotId);
+  const pilots = await allOf<UserView>(airops, '/api/users/pilots');
+  await airops.dispose();
+  const free = pilots.filter((pilot) => !busy.has(pilot.id)).map((pilot) => pilot.email.split('@')[0]);
+  expect(free.length, 'demo pilots with no slot in an open cycle').toBeGreaterThanOrEqual(count);
+  return free.slice(0, count);
+}
+
 /** Each aircraft's pilot id: the one named, or the next demo pilot nobody in the plan has (from the last). */
 function crewOf(aircraft: PlannedAircraft[], pilots: UserView[]): (number | undefined)[] {
   const named = new Set(aircraft.map((planned) => planned.pilot && demoEmail(planned.pilot)));

@@ -107,6 +107,15 @@ export function forgetSession(notice: string | null = null, leftOnPurpose = fals
   endSession(notice, leftOnPurpose);
 }
 
+/**
+ * The server ended the session (a password change, an admin, its age): back to sign-in with the reason.
+ * A refusal that comes back after the person signed out here (a request or the live link still open) is
+ * not one: that session was left on purpose, and the sign-in page must not say it was ended.
+ */
+export function endedElsewhere() {
+  if (getSession().status !== 'signed-out') forgetSession(SESSION_ENDED_NOTICE);
+}
+
 /** Sends with the bearer token; on a 401, refreshes once and sends again. */
 async function sendSignedIn(path: string, options: RequestOptions): Promise<Response> {
   const token = getAccessToken();
@@ -115,7 +124,7 @@ async function sendSignedIn(path: string, options: RequestOptions): Promise<Resp
 
   const renewed = await refreshSession();
   if (!renewed) {
-    forgetSession(SESSION_ENDED_NOTICE);
+    endedElsewhere();
     throw new ApiRequestError(401, 'session_ended', SESSION_ENDED_NOTICE);
   }
   return send(path, options, renewed.accessToken);

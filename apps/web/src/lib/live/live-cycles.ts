@@ -7,7 +7,7 @@ import type {
   LineupSnapshot,
   ServerToClientEvents,
 } from '@catline/contracts';
-import { forgetSession, refreshSession, SESSION_ENDED_NOTICE } from '../api-client.js';
+import { endedElsewhere, refreshSession } from '../api-client.js';
 import { queryClient } from '../query-client.js';
 import { cycleKeys } from '../queries/cycles-query.js';
 import { getAccessToken, onAccessTokenChange } from '../session-store.js';
@@ -152,7 +152,7 @@ class LiveCycles {
     socket.on('cycle:status', () => this.refreshCycleLists());
     socket.on('session:expired', () => {
       void refreshSession().then((session) => {
-        if (!session) forgetSession(SESSION_ENDED_NOTICE);
+        if (!session) endedElsewhere();
       });
     });
     this.socket = socket;
@@ -178,7 +178,7 @@ class LiveCycles {
     setTimeout(() => {
       if (this.socket !== socket) return;
       void refreshSession().then((session) => {
-        if (!session) forgetSession(SESSION_ENDED_NOTICE);
+        if (!session) endedElsewhere();
         else if (this.socket === socket) socket.connect();
       });
     }, delay);

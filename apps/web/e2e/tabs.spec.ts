@@ -16,7 +16,9 @@ function countRefreshes(context: BrowserContext) {
   return { statuses, take: () => statuses.splice(0) };
 }
 
-const fleetShown = (page: Page) => expect(page.getByRole('heading', { name: 'Fleet' })).toBeVisible();
+// A tab may wait for another's refresh to be handed over (up to 5 s) before its own screen draws.
+const fleetShown = (page: Page) =>
+  expect(page.getByRole('heading', { name: 'Fleet' })).toBeVisible({ timeout: 20_000 });
 
 test('six tabs opened at once restore the session with one refresh between them and all stay signed in', async ({
   browser,

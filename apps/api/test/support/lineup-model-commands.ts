@@ -1,6 +1,7 @@
 import {
   applyLineupPatch,
   type LineupCommandResult,
+  SLOT_STATUSES,
   type LineupSnapshot,
   type SlotStatus,
   type SlotView,
@@ -305,16 +306,10 @@ export class MarkDownCommand extends ModelCommand {
 }
 
 /** Hooked up or further, up to the shot: the aircraft a catapult going down suspends. */
-export const ON_CATAPULT: readonly SlotStatus[] = [
-  'on_catapult',
-  'weight_agreed',
-  'setting_set',
-  'deflector_up',
-  'tensioned',
-  'run_up',
-  'checks_clear',
-  'pilot_ready',
-];
+export const ON_CATAPULT: readonly SlotStatus[] = SLOT_STATUSES.slice(
+  SLOT_STATUSES.indexOf('on_catapult'),
+  SLOT_STATUSES.indexOf('launched'),
+);
 
 /** The first aircraft of a lane that is on the catapult; undefined for none. */
 export function onCatapult(snapshot: LineupSnapshot, catapultId: number): SlotView | undefined {

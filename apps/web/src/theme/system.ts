@@ -1,4 +1,5 @@
-import { createSystem, defaultConfig, defineConfig } from '@chakra-ui/react';
+import { createSystem, defineConfig } from '@chakra-ui/react';
+import { chakraBaseConfig } from './chakra-base.js';
 import { scales } from './palette.js';
 
 type ScaleName = keyof typeof scales;
@@ -91,4 +92,4 @@ const catlineConfig = defineConfig({
   },
 });
 
-export const system = createSystem(defaultConfig, catlineConfig);
+export const system = createSystem(chakraBaseConfig, catlineConfig);

@@ -51,5 +51,8 @@ export function useViewedCycle() {
     });
   // Until the server has said where to land, the screen is still finding its cycle, not without one.
   const finding = cycles.isPending || (named === null && landing.isPending);
-  return { cycles, cycle, choose, finding };
+  // The id is known before the list arrives: a screen follows it at once (lineup and live link in
+  // parallel with the list) instead of waiting for the list to name it.
+  const cycleId = chosenId !== null && Number.isSafeInteger(chosenId) && chosenId > 0 ? chosenId : undefined;
+  return { cycles, cycleId, cycle, choose, finding };
 }

@@ -225,8 +225,8 @@ function Station({ snapshot, catapultId }: { snapshot: LineupSnapshot; catapultI
 
 export function CatStationScreen() {
   const user = useSessionUser();
-  const { cycles, cycle, choose, finding } = useViewedCycle();
-  const live = useLiveCycle(cycle?.id);
+  const { cycles, cycleId, cycle, choose, finding } = useViewedCycle();
+  const live = useLiveCycle(cycleId);
   const snapshot = live.lineup.data;
   useCycleTheme((snapshot?.cycle ?? cycle)?.night);
   const lane = snapshot?.lanes.find((candidate) => candidate.catapultId === user.catapultId);

@@ -134,8 +134,8 @@ function DeckWorkspace({ snapshot, ship }: { snapshot: LineupSnapshot; ship: Shi
 
 /** The deck: every aircraft of the cycle on its position, the landing area, each catapult's deck status, and the handler's tows. */
 export function DeckScreen() {
-  const { cycles, cycle, choose, finding } = useViewedCycle();
-  const live = useLiveCycle(cycle?.id);
+  const { cycles, cycleId, cycle, choose, finding } = useViewedCycle();
+  const live = useLiveCycle(cycleId);
   const ships = useShips();
   const ship = ships.data?.find((candidate) => candidate.id === cycle?.shipId);
   return (

@@ -327,8 +327,8 @@ function LineupWorkspace({ snapshot }: { snapshot: LineupSnapshot }) {
 }
 
 export function LineupScreen() {
-  const { cycles, cycle, choose, finding } = useViewedCycle();
-  const live = useLiveCycle(cycle?.id);
+  const { cycles, cycleId, cycle, choose, finding } = useViewedCycle();
+  const live = useLiveCycle(cycleId);
   useCycleTheme((live.lineup.data?.cycle ?? cycle)?.night);
 
   return (

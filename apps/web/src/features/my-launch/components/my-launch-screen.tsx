@@ -144,8 +144,8 @@ function MySlot({ snapshot, pilotId }: { snapshot: LineupSnapshot; pilotId: numb
 
 export function MyLaunchScreen() {
   const user = useSessionUser();
-  const { cycles, cycle, choose, finding } = useViewedCycle();
-  const live = useLiveCycle(cycle?.id);
+  const { cycles, cycleId, cycle, choose, finding } = useViewedCycle();
+  const live = useLiveCycle(cycleId);
   useCycleTheme((live.lineup.data?.cycle ?? cycle)?.night);
   return (
     <Stack gap="3">

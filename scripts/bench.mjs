@@ -1,9 +1,10 @@
 // `npm run bench`: the same set-up as `npm start` on a database of its own (catline_bench), the
 // API on :3200, then the measurements of DEVELOPERS.md § Benchmarks. Client load runs in separate
 // processes on 127.0.0.1. Prints a table and writes bench-results/bench-<time>.json (git-ignored).
-// Options: --clients=100,500,1000,2000 --moves=200 --per-second=2 --commands=1000 --runs=5 --only=fanout,commit,math,web
+// Options: --clients=100,500,1000,2000 --moves=200 --per-second=2 --commands=1000 --runs=5
+// --only=fanout,commit,math,web,lighthouse,latency
 // --cluster: two API processes (:3200 and :3202) sharing rooms through a Redis of their own (:6381),
-// with the fan-out clients spread over both; commands still go to :3200.
+// with the fan-out clients and the watching browser pages spread over both; commands still go to :3200.
 import { spawnSync } from 'node:child_process';
 import { mkdirSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
@@ -20,7 +21,7 @@ const { values: args } = parseArgs({
     'per-second': { type: 'string', default: '2' },
     commands: { type: 'string', default: '1000' },
     runs: { type: 'string', default: '5' },
-    only: { type: 'string', default: 'fanout,commit,math,web' },
+    only: { type: 'string', default: 'fanout,commit,math,web,lighthouse,latency' },
     cluster: { type: 'boolean', default: false },
   },
 });
@@ -32,7 +33,7 @@ const ports = args.cluster ? [port, port + 2] : [port];
 const urls = ports.map((p) => `http://127.0.0.1:${p}`);
 const REDIS_PORT = 6381;
 
-const { pnpm, env } = await setUp({ browser: parts.has('web') });
+const { pnpm, env } = await setUp({ browser: ['web', 'lighthouse', 'latency'].some((part) => parts.has(part)) });
 step('Building');
 run(pnpm, ['-r', 'build']);
 const benchEnv = {
@@ -40,7 +41,7 @@ const benchEnv = {
   ...env,
   DB_NAME: `${env.DB_NAME}_bench`,
   PORT: String(port),
-  WEB_ORIGINS: url,
+  WEB_ORIGINS: urls.join(','),
   NODE_ENV: 'production',
   LOGIN_RATE_LIMIT: '100000',
 };
@@ -124,6 +125,15 @@ try {
     step('Web');
     results.web = node('apps/web/bench/web.mjs', { url, cycleId });
   }
+  if (parts.has('lighthouse')) {
+    step('Lighthouse');
+    results.lighthouse = node('apps/web/bench/lighthouse.mjs', { url, cycleId });
+  }
+  // Last: it moves aircraft of the bench cycle onto catapult 1.
+  if (parts.has('latency')) {
+    step('Live latency in the browser');
+    results.liveLatency = node('apps/web/bench/live-latency.mjs', { urls, cycleId, pages: 20, moves: 20 });
+  }
 } finally {
   for (const server of servers) server.child.kill('SIGTERM');
   await Promise.all(servers.map((server) => server.exited));
@@ -137,7 +147,7 @@ writeFileSync(file, `${JSON.stringify(results, null, 2)}\n`);
 printTables(results);
 console.log(`\nWritten to ${path.relative(root, file)}`);
 
-function printTables({ fanOut, commitRate, computation, suggestionLoop, web, apiProcesses }) {
+function printTables({ fanOut, commitRate, computation, suggestionLoop, web, lighthouse, liveLatency, apiProcesses }) {
   if (fanOut) {
     const spread = apiProcesses > 1 ? `, clients spread over ${apiProcesses} API processes` : '';
     console.log(`\nFan-out latency, ms from sending the command to each client receiving the change${spread}`);
@@ -179,5 +189,13 @@ function printTables({ fanOut, commitRate, computation, suggestionLoop, web, api
   if (web) {
     console.log('\nWeb');
     console.table([web]);
+  }
+  if (lighthouse) {
+    console.log('\nLighthouse, mobile settings (apps/web/bench/lighthouse.mjs)');
+    console.table(lighthouse);
+  }
+  if (liveLatency) {
+    console.log("\nA handler's drop seen on other browser pages, ms (apps/web/bench/live-latency.mjs)");
+    console.table([liveLatency]);
   }
 }

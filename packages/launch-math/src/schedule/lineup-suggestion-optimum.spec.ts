@@ -62,8 +62,10 @@ function plainLastLaunch(cycle: PlainCycle, lanes: readonly (readonly number[])[
  * no aircraft behind a lower priority), by exhaustive search. Lineups are built by inserting aircraft
  * one at a time, tier by tier, at every place of every lane, so each lineup is met exactly once; a
  * branch is skipped only when a lower bound on its last launch cannot beat the best already found.
+ * Null when the search would visit more than `branchBudget` branches: the yardstick cannot judge that
+ * cycle in the time a test has.
  */
-function optimumLastLaunch(input: SuggestionInput, upperBound: number): number {
+function optimumLastLaunch(input: SuggestionInput, upperBound: number, branchBudget = Infinity): number | null {
   const open = [...input.catapults]
     .sort((a, b) => a.number - b.number)
     .filter((catapult) => catapult.up && !(input.landingAreaInUse && catapult.position === 'waist'));
@@ -114,8 +116,10 @@ function optimumLastLaunch(input: SuggestionInput, upperBound: number): number {
     return Math.max(...ends);
   };
 
+  let branches = 0;
   const search = (next: number): void => {
-    if (withRest(next) >= best) return;
+    branches += 1;
+    if (branches > branchBudget || withRest(next) >= best) return;
     if (next === order.length) {
       best = Math.min(best, plainLastLaunch(cycle, lanes));
       return;
@@ -132,7 +136,7 @@ function optimumLastLaunch(input: SuggestionInput, upperBound: number): number {
     });
   };
   search(0);
-  return best;
+  return branches > branchBudget ? null : best;
 }
 
 const permutations = <T>(items: readonly T[]): T[][] =>
@@ -199,30 +203,36 @@ describe('exhaustive search used as the yardstick', () => {
   });
 });
 
-// The 1-8 row runs on the suite's fast-check seed (jest.config.js draws a fresh one each run and prints it;
-// FC_SEED=<seed> repeats a run). It once kept a fixed seed while fresh ones found the suggestion 10 % and
-// 16 % behind the optimum (FC_SEED=121483936 and 1), until the branch and bound stage that ends the
-// suggestion on cycles of up to eight aircraft. The 10-aircraft row, where that stage does not run, keeps
-// the seed whose cycle the pair moves were made for (FC_SEED=1133753927, 44 % behind before them): fresh
-// seeds passed it in 5 runs of 5, but FC_SEED=1187696669 drew a cycle on which the exhaustive yardstick
-// took 235-370 s of the 600 s allowed on the loaded 2-core machine (13-60 s on the others), too near the
-// limit to risk in every run.
-const TEN_AIRCRAFT_SEED = 1133753927;
+// Both rows run on the suite's fast-check seed (jest.config.js draws a fresh one each run and prints it;
+// FC_SEED=<seed> repeats a run). The 1-8 row once kept a fixed seed while fresh ones found the suggestion
+// 10 % and 16 % behind the optimum (FC_SEED=121483936 and 1), until the branch and bound stage that ends
+// the suggestion on cycles of up to eight aircraft. On ten aircraft, where that stage does not run, a few
+// cycles take the exhaustive yardstick minutes (FC_SEED=1187696669 drew one of 235-370 s on the loaded
+// 2-core machine): the yardstick gives up on a cycle past its branch budget, which the row prints, and
+// the row fails unless it judged at least six of its ten cycles (with twice this budget, one cycle in
+// twenty went past it, on FC_SEED=1702726021 and 1187696669).
+const TEN_AIRCRAFT_BRANCH_BUDGET = 1_000_000;
 
 describe('suggested lineup against the exhaustive optimum', () => {
   it.each([
-    { cycles: 200, minAircraft: 1, maxAircraft: 8, seed: fc.readConfigureGlobal().seed },
-    { cycles: 10, minAircraft: 10, maxAircraft: 10, seed: TEN_AIRCRAFT_SEED },
+    { cycles: 200, minAircraft: 1, maxAircraft: 8, branchBudget: Infinity, judgedAtLeast: 200 },
+    { cycles: 10, minAircraft: 10, maxAircraft: 10, branchBudget: TEN_AIRCRAFT_BRANCH_BUDGET, judgedAtLeast: 6 },
   ])(
     'finishes within 5% of the optimum on $cycles random cycles of $minAircraft to $maxAircraft aircraft and breaks no rule',
-    ({ cycles, minAircraft, maxAircraft, seed }) => {
+    ({ cycles, minAircraft, maxAircraft, branchBudget, judgedAtLeast }) => {
+      const { seed } = fc.readConfigureGlobal();
       const gaps: number[] = [];
+      let unjudged = 0;
       fc.assert(
         fc.property(suggestionInputArbitrary(maxAircraft, minAircraft), (input) => {
           const suggestion = suggestLineup(input);
           expect(suggestionViolations(input, suggestion)).toEqual([]);
           const suggested = suggestion.projection.lastLaunch ?? input.cycleStart;
-          const optimum = optimumLastLaunch(input, suggested + 1);
+          const optimum = optimumLastLaunch(input, suggested + 1, branchBudget);
+          if (optimum === null) {
+            unjudged += 1;
+            return;
+          }
           expect(optimum).toBeLessThanOrEqual(suggested);
           const gap = optimum === input.cycleStart ? 0 : (suggested - optimum) / (optimum - input.cycleStart);
           gaps.push(gap);
@@ -233,9 +243,9 @@ describe('suggested lineup against the exhaustive optimum', () => {
       const worst = Math.max(...gaps);
       const optimal = gaps.filter((gap) => gap === 0).length;
       console.info(
-        `Suggested lineup vs optimum over ${gaps.length} cycles of ${minAircraft}-${maxAircraft} aircraft (fast-check seed ${seed}): worst gap ${(worst * 100).toFixed(2)}%, optimal in ${optimal}`,
+        `Suggested lineup vs optimum over ${gaps.length} cycles of ${minAircraft}-${maxAircraft} aircraft (fast-check seed ${seed}): worst gap ${(worst * 100).toFixed(2)}%, optimal in ${optimal}; past the yardstick's budget: ${unjudged}`,
       );
-      expect(gaps).toHaveLength(cycles);
+      expect(gaps.length).toBeGreaterThanOrEqual(judgedAtLeast);
     },
     600_000,
   );

@@ -1,5 +1,5 @@
 import type { INestApplication } from '@nestjs/common';
-import type { AircraftTypeView } from '@catline/contracts';
+import { READINESS_STEPS, type AircraftTypeView, type ReadinessStep } from '@catline/contracts';
 import {
   ADMIN,
   AIR_BOSS,
@@ -60,6 +60,41 @@ describe('readiness steps and launch', () => {
       code: 'not_current_aircraft',
       message: 'C22 may taxi up and wait behind the deflector; C21 is on the catapult.',
     });
+  });
+
+  it("runs a catapult's own list of steps beside the ship's, and refuses the step its list leaves out", async () => {
+    const cat2 = (await deck.demoShip()).catapults.find((catapult) => catapult.number === 2)!;
+    // A list of the catapult's own: no deflector to raise (Catline's example, no source).
+    const own = READINESS_STEPS.filter((step) => step !== 'deflector_up');
+    const patchCat2 = (readinessSteps: ReadinessStep[] | null) =>
+      deck.call(ADMIN, 'patch', `/api/ships/1/catapults/${cat2.id}`, { readinessSteps });
+    const changed = await patchCat2(own);
+    expect(changed.status).toBe(200);
+    expect(changed.body.readinessSteps).toEqual(own);
+    try {
+      const { cycle, first, other } = await executingCycle(pilot(4));
+      const { lanes } = await deck.snapshot(cycle.id);
+      expect(lanes.find((lane) => lane.number === 1)!.readinessSteps).toEqual(READINESS_STEPS);
+      expect(lanes.find((lane) => lane.number === 2)!.readinessSteps).toEqual(own);
+
+      await deck.stepThrough(cycle.id, other.id, 'setting_set');
+      const left = await deck.step(cycle.id, other.id, 'deflector_up');
+      expect(left.status).toBe(409);
+      expect(left.body).toMatchObject({
+        code: 'wrong_step',
+        message: 'D33 is setting set; the next step is tensioned, not deflector up.',
+      });
+      expect((await deck.step(cycle.id, other.id, 'tensioned')).status).toBe(200);
+
+      // Cat 1 still runs the ship's list, deflector and all.
+      await deck.stepThrough(cycle.id, first.id, 'setting_set');
+      expect((await deck.step(cycle.id, first.id, 'tensioned')).body.code).toBe('wrong_step');
+      expect((await deck.step(cycle.id, first.id, 'deflector_up')).status).toBe(200);
+    } finally {
+      const back = await patchCat2(null);
+      expect(back.status).toBe(200);
+      expect(back.body.readinessSteps).toBeNull();
+    }
   });
 
   it('refuses readiness steps before the cycle executes', async () => {

@@ -161,6 +161,40 @@ describe('ships and catapults', () => {
     expect(await ship()).toEqual(before);
   });
 
+  it.each([
+    [
+      'a required step left out',
+      ['taxiing', 'on_catapult', 'weight_agreed', 'setting_set', 'pilot_ready'],
+      'Catapult 3: These readiness steps cannot be left out: tensioned.',
+    ],
+    [
+      'launch-order broken (tension before the setting)',
+      ['on_catapult', 'weight_agreed', 'tensioned', 'setting_set'],
+      'Catapult 3: Readiness steps must keep the trade’s order.',
+    ],
+    [
+      'a step twice',
+      ['on_catapult', 'weight_agreed', 'setting_set', 'tensioned', 'tensioned'],
+      'Catapult 3: A readiness step is listed twice.',
+    ],
+  ])(
+    "refuses a catapult's own readiness steps with %s, in a sentence, and changes nothing",
+    async (_case, steps, message) => {
+      const before = await ship();
+      const response = await patchCatapult(1, before.catapults[2].id, { readinessSteps: steps });
+      expect(response.status).toBe(400);
+      expect(response.body).toMatchObject({ code: 'invalid_configuration', message });
+      expect(await ship()).toEqual(before);
+    },
+  );
+
+  it('refuses an unknown readiness step by name', async () => {
+    const before = await ship();
+    const response = await patchCatapult(1, before.catapults[2].id, { readinessSteps: ['on_catapult', 'hook_up'] });
+    expect(response.status).toBe(400);
+    expect(response.body.details).toEqual([expect.stringMatching(/^readinessSteps must each be one of taxiing, /)]);
+  });
+
   it('answers 404 for a catapult that is not on the ship', async () => {
     const response = await patchCatapult(2, 1, { resetIntervalS: 60 });
     expect(response.status).toBe(404);

@@ -24,6 +24,11 @@ export interface CatapultView {
   pair: number;
   status: CatapultStatus;
   shotCount: number;
+  /**
+   * The readiness steps this catapult runs when they differ from the ship's (a waist catapult, say),
+   * under the same rules as the ship's list; null when it runs the ship's.
+   */
+  readinessSteps: ReadinessStep[] | null;
 }
 
 export interface DeckSpot {

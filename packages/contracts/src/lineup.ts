@@ -331,13 +331,15 @@ export interface LaneView extends WindOverDeck {
   deckHoldReason: string | null;
   /** The lane's slots in launch order. */
   slotIds: number[];
+  /** The readiness steps this catapult runs, in order: its own list, or the ship's. */
+  readinessSteps: ReadinessStep[];
   /** True when every slot still to launch in the lane is go. */
   go: boolean;
 }
 
 export interface LineupSnapshot {
   cycle: CycleView;
-  /** The ship's readiness steps, in order. */
+  /** The ship's readiness steps, in order; a catapult with a list of its own has it on its lane. */
   readinessSteps: ReadinessStep[];
   lanes: LaneView[];
   /** Slots in the deck pool, by side number. */

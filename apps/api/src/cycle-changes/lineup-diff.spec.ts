@@ -1,5 +1,5 @@
 import type { CycleView, LaneView, LineupSnapshot, SlotView } from '@catline/contracts';
-import { applyLineupPatch } from '@catline/contracts';
+import { READINESS_STEPS, applyLineupPatch } from '@catline/contracts';
 import { diffSnapshots } from './lineup-diff.js';
 
 const cycle = (version: number): CycleView => ({
@@ -100,6 +100,7 @@ const lane = (catapultId: number, slotIds: number[]): LaneView => ({
   crosswindKt: 2,
   crosswindSide: 'port',
   slotIds,
+  readinessSteps: [...READINESS_STEPS],
   go: true,
 });
 

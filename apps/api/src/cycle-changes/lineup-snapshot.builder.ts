@@ -34,7 +34,7 @@ import type { Slot } from '../database/entities/slot.entity.js';
 import { grossWeightParts } from './gross-weight-parts.js';
 import { launchFiguresView } from './launch-figures.js';
 import { recordedFigures } from './launch-record.js';
-import { shipReadinessSteps } from './readiness-steps.js';
+import { catapultReadinessSteps, shipReadinessSteps } from './readiness-steps.js';
 import { slotLaunchGates } from './slot-launch-gates.js';
 import {
   aircraftProfile,
@@ -283,6 +283,7 @@ export function buildSnapshot(state: LineupState): LineupSnapshot {
       crosswindKt: lane.wind.crosswind,
       crosswindSide: lane.wind.side,
       slotIds: ids,
+      readinessSteps: catapultReadinessSteps(state, catapult.id),
       go: ids.every((id) => {
         const view = viewOf.get(id)!;
         return view.status === 'launched' || view.figures?.go === true;

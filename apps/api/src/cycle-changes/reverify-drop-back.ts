@@ -2,7 +2,7 @@ import type { ChangeActor, SlotStatus } from '@catline/contracts';
 import { reverifyDropBack, type ReverifyCause } from '@catline/launch-math';
 import type { EntityManager } from 'typeorm';
 import type { LineupState } from './lineup-state.js';
-import { shipReadinessSteps } from './readiness-steps.js';
+import { catapultReadinessSteps } from './readiness-steps.js';
 import { updateSlot, type SlotValues } from './slot-writes.js';
 
 const label = (status: string) => status.replaceAll('_', ' ');
@@ -25,7 +25,7 @@ export async function dropBackForReverify(
   const dropped: string[] = [];
   for (const slot of state.slots) {
     if (slotIds && !slotIds.includes(slot.id)) continue;
-    const back = reverifyDropBack(shipReadinessSteps(state), slot.status, cause);
+    const back = reverifyDropBack(catapultReadinessSteps(state, slot.catapultId), slot.status, cause);
     if (!back) continue;
     // A waiver was given for the figures as they were; the new ones need their own.
     const values: SlotValues = { status: back.to as SlotStatus, reverifyCause: cause, waivers: null, lastStep: null };

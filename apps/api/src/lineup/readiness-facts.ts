@@ -10,7 +10,7 @@ import type { AuthenticatedUser } from '../common/authenticated-user.js';
 import { laneSlots } from '../cycle-changes/lineup-snapshot.builder.js';
 import type { LineupState } from '../cycle-changes/lineup-state.js';
 import { LineupException } from '../cycle-changes/lineup.exception.js';
-import { shipReadinessSteps } from '../cycle-changes/readiness-steps.js';
+import { catapultReadinessSteps } from '../cycle-changes/readiness-steps.js';
 import type { Slot } from '../database/entities/slot.entity.js';
 
 const GONE: readonly SlotStatus[] = ['launched', 'down', 'scratched'];
@@ -42,7 +42,7 @@ export function readinessActor(user: AuthenticatedUser, slot: Slot): ReadinessAc
 /** A refusal of the machine in a sentence for the deck crew. */
 function refusal(state: LineupState, slot: Slot, code: string, to: string, wrongStep?: string): LineupException {
   const side = slot.aircraft.sideNumber;
-  const steps = shipReadinessSteps(state);
+  const steps = catapultReadinessSteps(state, slot.catapultId);
   switch (code) {
     case 'not_your_catapult':
     case 'forbidden_role':
@@ -103,7 +103,7 @@ export function transition(
   wrongStep?: string,
 ): SlotReadiness {
   const result = readinessTransition(
-    shipReadinessSteps(state),
+    catapultReadinessSteps(state, slot.catapultId),
     slotReadiness(state, slot),
     readinessActor(user, slot),
     command,

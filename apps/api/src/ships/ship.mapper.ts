@@ -18,6 +18,7 @@ export function toCatapultView(catapult: Catapult): CatapultView {
     pair: catapult.pair,
     status: catapult.status,
     shotCount: catapult.shotCount,
+    readinessSteps: catapult.readinessSteps,
   };
 }
 

@@ -92,6 +92,9 @@ export class ShipsService {
       if (!catapult || !inShipScope(scope, shipId)) {
         throw new ShipsException('catapult_not_found', `Ship ${shipId} has no catapult with id ${id}.`);
       }
+      const stepsProblem = body.readinessSteps && readinessStepsProblem(body.readinessSteps);
+      if (stepsProblem)
+        throw new ShipsException('invalid_configuration', `Catapult ${catapult.number}: ${stepsProblem}`);
       Object.assign(catapult, definedFields(body));
       if (catapult.energyMaxMj <= catapult.energyMinMj) {
         throw new ShipsException(

@@ -317,10 +317,12 @@ export class LineupDriver {
     });
   }
 
-  /** Takes the slot through the ship's steps from where it is up to `last` (every step by default). */
+  /** Takes the slot through its catapult's steps from where it is up to `last` (every step by default). */
   async stepThrough(cycleId: number, slotId: number, last?: ReadinessStep, by?: string): Promise<void> {
-    const { readinessSteps } = await this.snapshot(cycleId);
     const slot = await this.slot(cycleId, slotId);
+    const { readinessSteps } = (await this.snapshot(cycleId)).lanes.find(
+      (lane) => lane.catapultId === slot.catapultId,
+    )!;
     const from = readinessSteps.indexOf(slot.status as ReadinessStep) + 1;
     const to = last === undefined ? readinessSteps.length - 1 : readinessSteps.indexOf(last);
     for (const step of readinessSteps.slice(from, to + 1)) {

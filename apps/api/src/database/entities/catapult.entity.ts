@@ -1,4 +1,4 @@
-import type { CatapultPosition, CatapultStatus } from '@catline/contracts';
+import type { CatapultPosition, CatapultStatus, ReadinessStep } from '@catline/contracts';
 import { Column, Entity, JoinColumn, ManyToOne, PrimaryGeneratedColumn, Unique, type Relation } from 'typeorm';
 import { Ship } from './ship.entity.js';
 
@@ -48,4 +48,8 @@ export class Catapult {
 
   @Column({ name: 'shot_count', default: 0 })
   shotCount: number;
+
+  /** Null: the catapult runs the ship's readiness steps. */
+  @Column({ name: 'readiness_steps', type: 'json', nullable: true })
+  readinessSteps: ReadinessStep[] | null;
 }

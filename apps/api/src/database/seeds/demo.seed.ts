@@ -33,7 +33,7 @@ import {
 /** One ship of the demo with everything it owns, as demo-fleet.ts and demo-second-ship.ts write them. */
 interface DemoShipData {
   ship: Pick<Ship, 'name' | 'hullCode' | 'pairGapS' | 'profile' | 'deckSpots' | 'deckLayout'>;
-  catapults: readonly Omit<Catapult, 'id' | 'shipId' | 'ship' | 'shotCount' | 'status'>[];
+  catapults: readonly Omit<Catapult, 'id' | 'shipId' | 'ship' | 'shotCount' | 'status' | 'readinessSteps'>[];
   squadrons: readonly Pick<Squadron, 'code' | 'name' | 'email'>[];
   types: readonly Omit<AircraftType, 'id' | 'shipId' | 'ship'>[];
   aircraft: readonly { sideNumber: string; designation: string; squadron: string; parkedSpot: string }[];

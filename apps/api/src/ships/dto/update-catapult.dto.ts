@@ -1,6 +1,6 @@
-import type { CatapultPosition } from '@catline/contracts';
+import { READINESS_STEPS, type CatapultPosition, type ReadinessStep } from '@catline/contracts';
 import { ApiPropertyOptional } from '@nestjs/swagger';
-import { IsIn, IsInt, IsNumber, IsPositive, Max, Min } from 'class-validator';
+import { ArrayMaxSize, IsArray, IsIn, IsInt, IsNumber, IsOptional, IsPositive, Max, Min } from 'class-validator';
 import { SkipIfAbsent } from '../../common/validation/skip-if-absent.decorator.js';
 
 const POSITIONS: CatapultPosition[] = ['bow', 'waist'];
@@ -60,4 +60,17 @@ export class UpdateCatapultDto {
   @Min(1)
   @Max(9)
   pair?: number;
+
+  @ApiPropertyOptional({
+    enum: READINESS_STEPS,
+    isArray: true,
+    nullable: true,
+    description: "The catapult's own readiness steps, under the rules of the ship's list; null to run the ship's.",
+  })
+  // Null is a value here: it hands the catapult back to the ship's list.
+  @IsOptional()
+  @IsArray({ message: 'readinessSteps must be a list of steps, or null for the ship’s list' })
+  @ArrayMaxSize(READINESS_STEPS.length)
+  @IsIn(READINESS_STEPS, { each: true, message: `readinessSteps must each be one of ${READINESS_STEPS.join(', ')}` })
+  readinessSteps?: ReadinessStep[] | null;
 }

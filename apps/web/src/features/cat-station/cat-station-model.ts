@@ -1,4 +1,5 @@
 import { READINESS_STEPS, type LineupSnapshot, type ReadinessStep, type SlotView } from '@catline/contracts';
+import { STEP_LABELS } from '../../lib/readiness-step-labels.js';
 
 const finished = new Set(['launched', 'down', 'scratched']);
 
@@ -12,19 +13,6 @@ export function catapultQueue(snapshot: LineupSnapshot, catapultId: number) {
     .filter((slot): slot is SlotView => !!slot && !finished.has(slot.status));
   return { lane, current: waiting[0], next: waiting.slice(1, 3) };
 }
-
-/** Each step in the deck crew's words. */
-export const STEP_LABELS: Record<ReadinessStep, string> = {
-  taxiing: 'Taxi up behind the deflector',
-  on_catapult: 'Hooked up: launch bar, holdback',
-  weight_agreed: 'Weight agreed',
-  setting_set: 'Setting set and read back',
-  deflector_up: 'Deflector raised',
-  tensioned: 'Tension',
-  run_up: 'Full power, engine checks',
-  checks_clear: 'Final checks clear',
-  pilot_ready: 'Pilot ready',
-};
 
 /** How far along the ship's readiness steps a slot is: the index of its last step done, -1 before the first. */
 export function stepIndex(slot: SlotView, steps: readonly ReadinessStep[]): number {

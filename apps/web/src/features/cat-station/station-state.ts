@@ -1,7 +1,8 @@
 import type { LaneView, ReadinessStep, ReverifyCause, SlotView } from '@catline/contracts';
 import { limitVerdict } from '../../lib/launch-verdict.js';
 import { refusalReason } from '../../lib/refusal-texts.js';
-import { STEP_LABELS, stepIndex } from './cat-station-model.js';
+import { STEP_LABELS } from '../../lib/readiness-step-labels.js';
+import { stepIndex } from './cat-station-model.js';
 
 export type StationStateKind = 'cat_down' | 'suspended' | 'reverify' | 'nogo' | 'waiver' | 'waiting' | 'go';
 

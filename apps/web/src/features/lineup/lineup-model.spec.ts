@@ -1,4 +1,4 @@
-import type { CycleView, LaneView, LineupSnapshot, SlotView } from '@catline/contracts';
+import { READINESS_STEPS, type CycleView, type LaneView, type LineupSnapshot, type SlotView } from '@catline/contracts';
 import { describe, expect, it } from 'vitest';
 import {
   containersOf,
@@ -115,6 +115,7 @@ function lane(catapultId: number, number: number, slotIds: number[], extra: Part
     deckClear: true,
     deckHoldReason: null,
     slotIds,
+    readinessSteps: [...READINESS_STEPS],
     go: true,
     headwindKt: 30,
     crosswindKt: 0,

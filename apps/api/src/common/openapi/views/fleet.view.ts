@@ -16,6 +16,8 @@ import {
   type SquadronView,
   type StoresItem,
   LAUNCH_CONFIGURATIONS,
+  READINESS_STEPS,
+  type ReadinessStep,
   type LaunchConfiguration,
   type SettingTable,
   type SettingTableRow,
@@ -69,6 +71,15 @@ export class CatapultViewDto implements CatapultView {
 
   @IntProperty({ minimum: 0 })
   shotCount: number;
+
+  @ApiProperty({
+    enum: READINESS_STEPS,
+    isArray: true,
+    nullable: true,
+    description:
+      "The readiness steps this catapult runs when they differ from the ship's; null when it runs the ship's.",
+  })
+  readinessSteps: ReadinessStep[] | null;
 }
 
 @ApiSchema({ name: 'DeckSpot' })
@@ -162,6 +173,13 @@ export class ShipProfileDto implements ShipProfile {
 
   @ApiProperty({ type: () => DeparturesDto, description: 'Departure instruction per weather case.' })
   departures: DeparturesDto;
+
+  @ApiPropertyOptional({
+    enum: READINESS_STEPS,
+    isArray: true,
+    description: 'The readiness steps the ship runs, in the trade’s order; left out, every step.',
+  })
+  readinessSteps?: ReadinessStep[];
 
   @ApiPropertyOptional({ type: 'integer', description: 'Minutes a wind reading stays fresh; left out, 30.' })
   windReadingMaxAgeMin?: number;

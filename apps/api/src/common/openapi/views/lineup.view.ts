@@ -539,6 +539,13 @@ export class LaneViewDto implements LaneView {
   @ApiProperty({ type: 'integer', isArray: true, description: "The lane's slots in launch order." })
   slotIds: number[];
 
+  @ApiProperty({
+    enum: READINESS_STEPS,
+    isArray: true,
+    description: "The readiness steps this catapult runs, in order: its own list, or the ship's.",
+  })
+  readinessSteps: ReadinessStep[];
+
   @ApiProperty({ description: 'True when every slot still to launch in the lane is go.' })
   go: boolean;
 

@@ -20,7 +20,8 @@ import { useCycleTheme } from '../../../theme/use-cycle-theme.js';
 import { useAdvanceSlot } from '../api/advance-slot.js';
 import { useLaunchSlot } from '../api/launch-slot.js';
 import { useSuspendSlot } from '../api/suspend-slot.js';
-import { STEP_LABELS, canSuspend, catapultQueue, lastLaunched } from '../cat-station-model.js';
+import { STEP_LABELS } from '../../../lib/readiness-step-labels.js';
+import { canSuspend, catapultQueue, lastLaunched } from '../cat-station-model.js';
 import { stationState } from '../station-state.js';
 import { useGiveSuspendReason } from '../api/give-suspend-reason.js';
 import { useReportColdShot } from '../api/report-cold-shot.js';
@@ -90,7 +91,7 @@ function Station({ snapshot, catapultId }: { snapshot: LineupSnapshot; catapultI
 
   return (
     <Stack gap="3">
-      <StationBanner state={stationState(lane, current, snapshot.readinessSteps)} />
+      <StationBanner state={stationState(lane, current, lane.readinessSteps)} />
       {notice && <NoticeBanner notice={notice} onDismiss={dismiss} />}
       <DeckStatusLine lane={lane} size="lg" />
       {current && (
@@ -159,7 +160,7 @@ function Station({ snapshot, catapultId }: { snapshot: LineupSnapshot; catapultI
           <Stack gap="4">
             <ReadinessSteps
               slot={current}
-              steps={snapshot.readinessSteps}
+              steps={lane.readinessSteps}
               night={snapshot.cycle.night}
               pending={advance.isPending}
               onAdvance={(request) =>
@@ -194,7 +195,7 @@ function Station({ snapshot, catapultId }: { snapshot: LineupSnapshot; catapultI
             <LaunchPanel
               key={current.id}
               slot={current}
-              steps={snapshot.readinessSteps}
+              steps={lane.readinessSteps}
               pending={launch.isPending}
               onLaunch={() => {
                 // A second tap while the first is on its way does nothing; a retry reuses the same key.

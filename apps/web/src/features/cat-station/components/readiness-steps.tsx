@@ -1,7 +1,8 @@
 import { Button, SimpleGrid, Text } from '@chakra-ui/react';
 import type { AdvanceSlotRequest, ReadinessStep, SlotView } from '@catline/contracts';
 import { formatPounds } from '../../../lib/format.js';
-import { STEP_LABELS, stepIndex, weightToRecord } from '../cat-station-model.js';
+import { STEP_LABELS } from '../../../lib/readiness-step-labels.js';
+import { stepIndex, weightToRecord } from '../cat-station-model.js';
 
 interface ReadinessStepsProps {
   slot: SlotView;

@@ -18,6 +18,7 @@ import { useDeleteSquadron } from '../api/delete-squadron.js';
 import { useUpdateAircraft } from '../api/update-aircraft.js';
 import { AircraftForm } from './aircraft-form.js';
 import { DeckLayoutEditor } from './deck-layout-editor.js';
+import { ReadinessStepsEditor } from './readiness-steps-editor.js';
 import { SquadronForm } from './squadron-form.js';
 
 type Doomed = { kind: 'aircraft'; row: AircraftView } | { kind: 'squadron'; row: SquadronView } | null;
@@ -147,7 +148,7 @@ export function FleetScreen() {
     <Stack gap="4">
       <PageHeader
         title="Fleet"
-        subtitle={admin ? 'Aircraft, squadrons and the deck layout' : 'Aircraft and squadrons'}
+        subtitle={admin ? 'Aircraft, squadrons, the deck layout and the readiness steps' : 'Aircraft and squadrons'}
       />
       {notice && <NoticeBanner notice={notice} onDismiss={dismiss} />}
       <Tabs.Root defaultValue="aircraft" variant="line">
@@ -155,6 +156,7 @@ export function FleetScreen() {
           <Tabs.Trigger value="aircraft">Aircraft</Tabs.Trigger>
           <Tabs.Trigger value="squadrons">Squadrons</Tabs.Trigger>
           {admin && <Tabs.Trigger value="deck-layout">Deck layout</Tabs.Trigger>}
+          {admin && <Tabs.Trigger value="readiness-steps">Readiness steps</Tabs.Trigger>}
         </Tabs.List>
         <Tabs.Content value="aircraft">
           <Stack gap="4">
@@ -212,6 +214,15 @@ export function FleetScreen() {
           <Tabs.Content value="deck-layout">
             <QueryView query={ships} loadingLabel="Loading the ship…">
               {(rows) => (rows[0] ? <DeckLayoutEditor key={rows[0].id} ship={rows[0]} /> : <Text>No ship yet.</Text>)}
+            </QueryView>
+          </Tabs.Content>
+        )}
+        {admin && (
+          <Tabs.Content value="readiness-steps">
+            <QueryView query={ships} loadingLabel="Loading the ship…">
+              {(rows) =>
+                rows[0] ? <ReadinessStepsEditor key={rows[0].id} ship={rows[0]} /> : <Text>No ship yet.</Text>
+              }
             </QueryView>
           </Tabs.Content>
         )}

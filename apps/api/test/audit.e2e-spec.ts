@@ -304,4 +304,16 @@ describe('audit trail', () => {
       }
     });
   });
+
+  it('refuses to change or delete an entry, even to the database account of the app', async () => {
+    const person = await createUser(url, admin, 'observer');
+    const entry = (await latest('person.created', person.id))!;
+    const database = app.get(DataSource);
+
+    await expect(
+      database.query('UPDATE audit_entries SET summary = ? WHERE id = ?', ['rewritten', entry.id]),
+    ).rejects.toThrow(/append-only/);
+    await expect(database.query('DELETE FROM audit_entries WHERE id = ?', [entry.id])).rejects.toThrow(/append-only/);
+    expect(await latest('person.created', person.id)).toEqual(entry);
+  });
 });

@@ -125,6 +125,8 @@ export async function ensurePrivateMariaDB(env) {
     started = true;
   } else {
     step(`Reusing the private MariaDB already running on 127.0.0.1:${env.DB_PORT}`);
+    // A server started before catline.cnf had this setting gets it too (the append-only audit migration needs it).
+    sql(privateServer, 'SET GLOBAL log_bin_trust_function_creators = ON');
   }
   grantAppUser(privateServer, env);
   return started;

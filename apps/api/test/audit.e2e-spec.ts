@@ -1,8 +1,20 @@
-import type { AuditEntryView, Page } from '@catline/contracts';
+import { createHash, randomBytes } from 'node:crypto';
+import { type AuditEntryView, DEMO_PASSWORD, type Page } from '@catline/contracts';
 import type { INestApplication } from '@nestjs/common';
 import request from 'supertest';
+import { DataSource } from 'typeorm';
+import { PasswordLink } from '../src/database/entities/password-link.entity.js';
+import { demoCatapults, demoShip } from '../src/database/seeds/demo-fleet.js';
 import { fleetAdmin } from '../src/database/seeds/demo-second-ship.js';
-import { createAircraft, createUser, unique } from './support/fleet-fixtures.js';
+import {
+  TEST_PASSWORD,
+  aircraftTypeBody,
+  createAircraft,
+  createAircraftType,
+  createSquadron,
+  createUser,
+  unique,
+} from './support/fleet-fixtures.js';
 import { ADMIN, AIR_OPS, LineupDriver } from './support/lineup-fixtures.js';
 import { bearer, signIn } from './support/sign-in.js';
 import { startTestApp } from './support/test-app.js';
@@ -138,5 +150,170 @@ describe('audit trail', () => {
     expect(
       lines.filter((line) => line.length > 0).every((line, index) => index === 0 || line.includes('person.created')),
     ).toBe(true);
+  });
+
+  describe('sign-ins and passwords', () => {
+    it('records a successful sign-in by the person who signed in', async () => {
+      const person = await createUser(url, admin, 'pilot');
+      await signIn(url, person.email, TEST_PASSWORD);
+      expect(await latest('sign_in.succeeded', person.id)).toMatchObject({
+        actorId: person.id,
+        actorEmail: person.email,
+        actorRole: 'pilot',
+        subjectType: 'person',
+      });
+    });
+
+    it('records a password change by its owner, without the password', async () => {
+      const person = await createUser(url, admin, 'observer');
+      await request(url)
+        .post('/api/auth/password')
+        .set(bearer(await signIn(url, person.email, TEST_PASSWORD)))
+        .send({ currentPassword: TEST_PASSWORD, newPassword: `${DEMO_PASSWORD}-changed` })
+        .expect(204);
+      const entry = await latest('password.changed', person.id);
+      expect(entry).toMatchObject({ actorId: person.id, before: null, after: null });
+    });
+
+    it('records a password set through a reset link, by the link holder', async () => {
+      const person = await createUser(url, admin, 'observer');
+      const token = randomBytes(24).toString('base64url');
+      await app.get(DataSource).manager.insert(PasswordLink, {
+        userId: person.id,
+        purpose: 'reset',
+        tokenHash: createHash('sha256').update(token).digest('hex'),
+        expiresAt: new Date(Date.now() + 60_000),
+        createdAt: new Date(),
+      });
+      await request(url)
+        .post('/api/auth/password-reset/confirm')
+        .send({ token, newPassword: `${DEMO_PASSWORD}-by-link` })
+        .expect(204);
+      expect(await latest('password.set_by_link', person.id)).toMatchObject({
+        actorId: person.id,
+        actorEmail: person.email,
+        summary: expect.stringMatching(/reset link/),
+      });
+    });
+
+    it('records who sent an invitation again', async () => {
+      const email = `${unique('invitee', 16).toLowerCase()}@catline.example`;
+      const created = await request(url)
+        .post('/api/users')
+        .set(bearer(admin))
+        .send({ email, name: 'Audit invitee', role: 'observer' })
+        .expect(201);
+      await request(url).post(`/api/users/${created.body.id}/invitation`).set(bearer(admin)).expect(202);
+      expect(await latest('person.invited', created.body.id as number)).toMatchObject({
+        actorEmail: ADMIN,
+        subjectType: 'person',
+      });
+    });
+  });
+
+  describe('aircraft types and launch data', () => {
+    it('records a type change and a type deletion', async () => {
+      const type = await createAircraftType(url, admin);
+      await request(url)
+        .patch(`/api/aircraft-types/${type.id}`)
+        .set(bearer(admin))
+        .send({ name: 'Renamed in the audit test' })
+        .expect(200);
+      await request(url).delete(`/api/aircraft-types/${type.id}`).set(bearer(admin)).expect(204);
+
+      expect(await latest('aircraft_type.updated', type.id)).toMatchObject({
+        before: { name: type.name },
+        after: { name: 'Renamed in the audit test' },
+      });
+      expect(await latest('aircraft_type.deleted', type.id)).toMatchObject({
+        before: { designation: type.designation },
+        after: null,
+      });
+    });
+
+    it('records the launch table before and after a replacement', async () => {
+      const type = await createAircraftType(url, admin);
+      const rows = [
+        { grossWeightLb: 25_000, minLaunchAirspeedKt: 118 },
+        { grossWeightLb: 40_000, minLaunchAirspeedKt: 138 },
+      ];
+      await request(url)
+        .put(`/api/aircraft-types/${type.id}/launch-table`)
+        .set(bearer(admin))
+        .send({ rows })
+        .expect(200);
+      expect(await latest('launch_table.replaced', type.id)).toMatchObject({
+        before: { launchTable: aircraftTypeBody().launchTable },
+        after: { launchTable: rows },
+      });
+    });
+  });
+
+  describe('squadrons, the ship and its catapults', () => {
+    it('records a squadron added, changed and deleted', async () => {
+      const squadron = await createSquadron(url, admin);
+      await request(url)
+        .patch(`/api/squadrons/${squadron.id}`)
+        .set(bearer(admin))
+        .send({ name: 'Renamed squadron' })
+        .expect(200);
+      await request(url).delete(`/api/squadrons/${squadron.id}`).set(bearer(admin)).expect(204);
+
+      expect(await latest('squadron.created', squadron.id)).toMatchObject({
+        actorEmail: ADMIN,
+        subjectType: 'squadron',
+        shipId: 1,
+        before: null,
+        after: { code: squadron.code, name: squadron.name },
+      });
+      expect(await latest('squadron.updated', squadron.id)).toEqual(
+        expect.objectContaining({ before: { name: squadron.name }, after: { name: 'Renamed squadron' } }),
+      );
+      expect(await latest('squadron.deleted', squadron.id)).toMatchObject({
+        before: { code: squadron.code },
+        after: null,
+      });
+    });
+
+    it('records a change of the ship and of a catapult, and only what changed', async () => {
+      const patchShip = (pairGapS: number) =>
+        request(url).patch('/api/ships/1').set(bearer(admin)).send({ pairGapS }).expect(200);
+      const patchCatapult = (resetIntervalS: number) =>
+        request(url).patch('/api/ships/1/catapults/1').set(bearer(admin)).send({ resetIntervalS }).expect(200);
+      try {
+        await patchShip(demoShip.pairGapS + 1);
+        await patchCatapult(demoCatapults[0].resetIntervalS + 1);
+        expect(await latest('ship.updated', 1)).toEqual(
+          expect.objectContaining({
+            subjectType: 'ship',
+            before: { pairGapS: demoShip.pairGapS },
+            after: { pairGapS: demoShip.pairGapS + 1 },
+          }),
+        );
+        expect(await latest('catapult.updated', 1)).toEqual(
+          expect.objectContaining({
+            subjectType: 'catapult',
+            shipId: 1,
+            before: { resetIntervalS: demoCatapults[0].resetIntervalS },
+            after: { resetIntervalS: demoCatapults[0].resetIntervalS + 1 },
+          }),
+        );
+      } finally {
+        await patchShip(demoShip.pairGapS);
+        await patchCatapult(demoCatapults[0].resetIntervalS);
+      }
+    });
+  });
+
+  it('refuses to change or delete an entry, even to the database account of the app', async () => {
+    const person = await createUser(url, admin, 'observer');
+    const entry = (await latest('person.created', person.id))!;
+    const database = app.get(DataSource);
+
+    await expect(
+      database.query('UPDATE audit_entries SET summary = ? WHERE id = ?', ['rewritten', entry.id]),
+    ).rejects.toThrow(/append-only/);
+    await expect(database.query('DELETE FROM audit_entries WHERE id = ?', [entry.id])).rejects.toThrow(/append-only/);
+    expect(await latest('person.created', person.id)).toEqual(entry);
   });
 });

@@ -1,9 +1,19 @@
-import type { AircraftView, AuditEntryView, CycleView, ShipView, SquadronView, UserView } from '@catline/contracts';
+import type {
+  AircraftTypeView,
+  AircraftView,
+  AuditEntryView,
+  CycleLanding,
+  CycleView,
+  ShipView,
+  ShotCounts,
+  SquadronView,
+  UserView,
+} from '@catline/contracts';
 import type { INestApplication } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import request from 'supertest';
-import { fleetAdmin, secondShipPeople } from '../src/database/seeds/demo-second-ship.js';
-import { aircraftTypeBody, unique } from './support/fleet-fixtures.js';
+import { fleetAdmin, secondShip as secondShipSeed, secondShipPeople } from '../src/database/seeds/demo-second-ship.js';
+import { TEST_PASSWORD, aircraftTypeBody, unique } from './support/fleet-fixtures.js';
 import { ADMIN, AIR_OPS, LineupDriver, OBSERVER } from './support/lineup-fixtures.js';
 import { bearer } from './support/sign-in.js';
 import { connected, join, openSocket } from './support/socket-client.js';
@@ -226,5 +236,82 @@ describe('finding 12: ships own their data', () => {
     expect((await rows<UserView>(OTHER_ADMIN, '/api/users')).map((user) => user.id)).toContain(
       (response.body as UserView).id,
     );
+  });
+
+  it("keeps the shot counts, as JSON and as CSV, to the caller's ship", async () => {
+    const [first] = await rows<ShipView>(ADMIN, '/api/ships');
+    const [second] = await rows<ShipView>(OTHER_ADMIN, '/api/ships');
+    const firstAircraft = await rows<AircraftView>(ADMIN, '/api/aircraft');
+    const secondAircraft = await rows<AircraftView>(OTHER_ADMIN, '/api/aircraft');
+    const range = 'from=2000-01-01&to=2099-12-31';
+
+    const counts = await deck.ok<ShotCounts>(OTHER_ADMIN, 'get', `/api/reports/shot-counts?${range}`);
+    expect(counts.airframes.map((row) => row.aircraftId).sort()).toEqual(ids(secondAircraft).sort());
+    expect(counts.catapults.map((row) => row.catapultId).sort()).toEqual(ids(second.catapults).sort());
+
+    const csv = await request(url)
+      .get(`/api/reports/shot-counts.csv?${range}`)
+      .set(bearer(await deck.token(OTHER_ADMIN)));
+    expect(csv.status).toBe(200);
+    expect(csv.text).toContain(secondShipSeed.name);
+    expect(csv.text).not.toContain(first.name);
+    for (const plane of secondAircraft) expect(csv.text).toContain(`,${plane.sideNumber},`);
+    for (const plane of firstAircraft) expect(csv.text).not.toContain(`,${plane.sideNumber},`);
+  });
+
+  it("lands each ship's people on a cycle of their own ship, or on none", async () => {
+    const secondCycles = ids(await rows<CycleView>(OTHER_AIR_OPS, '/api/cycles'));
+    const { cycleId } = await deck.ok<CycleLanding>(OTHER_OBSERVER, 'get', '/api/cycles/landing');
+    expect(cycleId === null || secondCycles.includes(cycleId)).toBe(true);
+    expect(cycleId).not.toBe(firstCycle.id);
+    const own = await deck.ok<CycleLanding>(OBSERVER, 'get', '/api/cycles/landing');
+    expect(ids(await rows<CycleView>(AIR_OPS, '/api/cycles'))).toContain(own.cycleId);
+  });
+
+  it("refuses another ship's squadron, catapult or type named in a body, and adds or changes nothing", async () => {
+    const [firstShip] = await rows<ShipView>(ADMIN, '/api/ships');
+    const [firstSquadron] = await rows<SquadronView>(ADMIN, '/api/squadrons');
+    const [firstType] = await rows<AircraftTypeView>(ADMIN, '/api/aircraft-types');
+    const [ownSquadron] = await rows<SquadronView>(OTHER_ADMIN, '/api/squadrons');
+    const [ownType] = await rows<AircraftTypeView>(OTHER_ADMIN, '/api/aircraft-types');
+    const [ownAircraft] = await rows<AircraftView>(OTHER_ADMIN, '/api/aircraft');
+    const refused = { status: 400, code: 'unknown_reference' };
+    const outcome = (response: request.Response) => ({ status: response.status, code: response.body.code });
+
+    const person = (fields: object) => ({
+      email: `${unique('cross', 12).toLowerCase()}@catline.example`,
+      name: 'Cross-ship person',
+      password: TEST_PASSWORD,
+      ...fields,
+    });
+    const people = [
+      person({ role: 'catapult_officer', catapultId: firstShip.catapults[0].id }),
+      person({ role: 'pilot', squadronId: firstSquadron.id }),
+    ];
+    for (const body of people)
+      expect(outcome(await deck.call(OTHER_ADMIN, 'post', '/api/users', body))).toEqual(refused);
+    const emails = (await rows<UserView>(fleetAdmin.email, '/api/users')).map((user) => user.email);
+    expect(emails.filter((email) => people.some((body) => body.email === email))).toEqual([]);
+
+    const aircraft = (fields: object) => ({
+      sideNumber: unique('Q', 6),
+      typeId: ownType.id,
+      squadronId: ownSquadron.id,
+      parkedSpot: 'row-1',
+      ...fields,
+    });
+    expect(outcome(await deck.call(OTHER_ADMIN, 'post', '/api/aircraft', aircraft({ typeId: firstType.id })))).toEqual(
+      refused,
+    );
+    const foreignSquadron = await deck.call(
+      OTHER_ADMIN,
+      'post',
+      '/api/aircraft',
+      aircraft({ squadronId: firstSquadron.id }),
+    );
+    expect(outcome(foreignSquadron)).toEqual(refused);
+    for (const body of [{ typeId: firstType.id }, { squadronId: firstSquadron.id }])
+      expect(outcome(await deck.call(OTHER_ADMIN, 'patch', `/api/aircraft/${ownAircraft.id}`, body))).toEqual(refused);
+    expect(await rows<AircraftView>(OTHER_ADMIN, '/api/aircraft')).toContainEqual(ownAircraft);
   });
 });

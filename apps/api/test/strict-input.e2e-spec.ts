@@ -91,6 +91,23 @@ describe('strict input: names, path ids and token answers', () => {
     });
   });
 
+  describe('ids in the query string', () => {
+    it.each(['0x10', '1e3', ' 1', '1 ', '+1', '-1', '1.0', '0', '99999999999'])(
+      'refuses /api/audit?ship=%j with 400',
+      async (ship) => {
+        const response = await request(url).get('/api/audit').query({ ship }).set(bearer(admin));
+        expect(response.status).toBe(400);
+        expect(response.body.message).toMatch(/ship must be a ship id, a whole number from 1 written in digits only/);
+      },
+    );
+
+    it('reads a ship id written in plain digits', async () => {
+      const response = await request(url).get('/api/audit').query({ ship: '1', limit: 1 }).set(bearer(admin));
+      expect(response.status).toBe(200);
+      expect(response.body.items[0].shipId).toBe(1);
+    });
+  });
+
   describe('token answers', () => {
     it('are never stored by a cache: sign-in and refresh send Cache-Control: no-store', async () => {
       const login = await request(url)

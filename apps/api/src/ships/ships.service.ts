@@ -16,6 +16,11 @@ import { toCatapultView, toShipView } from './ship.mapper.js';
 import { shipNotFound } from './owner-ship.js';
 import { ShipsException } from './ships.exception.js';
 
+/** What PATCH /ships/:id changes; the catapults and the deck layout have audited routes of their own. */
+function shipFields({ name, hullCode, pairGapS, profile, deckSpots }: ShipView) {
+  return { name, hullCode, pairGapS, profile, deckSpots };
+}
+
 @Injectable()
 export class ShipsService {
   private readonly logger = new Logger(ShipsService.name);
@@ -50,9 +55,19 @@ export class ShipsService {
       if (body.deckSpots) await checkDeck(manager, ship, body.deckSpots, deckLayoutData(ship, catapults), catapults);
       const stepsProblem = body.profile?.readinessSteps && readinessStepsProblem(body.profile.readinessSteps);
       if (stepsProblem) throw new ShipsException('invalid_configuration', stepsProblem);
+      const before = shipFields(toShipView(ship, catapults));
       Object.assign(ship, definedFields(body));
       await manager.save(Ship, ship);
-      return toShipView(ship, catapults);
+      const after = toShipView(ship, catapults);
+      await this.audit.record(manager, {
+        action: 'ship.updated',
+        subject: { type: 'ship', id },
+        shipId: id,
+        summary: `Ship ${ship.name} changed`,
+        before,
+        after: shipFields(after),
+      });
+      return after;
     });
     this.logger.log(`Ship ${id} updated (${Object.keys(definedFields(body)).join(', ') || 'nothing'})`);
     return view;
@@ -95,6 +110,7 @@ export class ShipsService {
       const stepsProblem = body.readinessSteps && readinessStepsProblem(body.readinessSteps);
       if (stepsProblem)
         throw new ShipsException('invalid_configuration', `Catapult ${catapult.number}: ${stepsProblem}`);
+      const before = toCatapultView(catapult);
       Object.assign(catapult, definedFields(body));
       if (catapult.energyMaxMj <= catapult.energyMinMj) {
         throw new ShipsException(
@@ -103,7 +119,16 @@ export class ShipsService {
         );
       }
       await manager.save(Catapult, catapult);
-      return toCatapultView(catapult);
+      const after = toCatapultView(catapult);
+      await this.audit.record(manager, {
+        action: 'catapult.updated',
+        subject: { type: 'catapult', id },
+        shipId,
+        summary: `Catapult ${catapult.number} changed`,
+        before: { ...before },
+        after: { ...after },
+      });
+      return after;
     });
   }
 

@@ -2,6 +2,7 @@ import type { SquadronView } from '@catline/contracts';
 import { Injectable, Logger } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, type EntityManager, Not } from 'typeorm';
+import { AuditTrail } from '../audit/audit-trail.service.js';
 import { definedFields } from '../common/defined-fields.js';
 import { type ShipScope, shipWhere } from '../common/ship-scope.js';
 import { ownerShip } from '../ships/owner-ship.js';
@@ -19,7 +20,10 @@ const noSquadron = (id: number) => new SquadronsException('squadron_not_found', 
 export class SquadronsService {
   private readonly logger = new Logger(SquadronsService.name);
 
-  constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
+  constructor(
+    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly audit: AuditTrail,
+  ) {}
 
   async list(scope: ShipScope): Promise<SquadronView[]> {
     const squadrons = await this.dataSource.manager.find(Squadron, { where: shipWhere(scope), order: { code: 'ASC' } });
@@ -33,17 +37,37 @@ export class SquadronsService {
   }
 
   async create(scope: ShipScope, body: CreateSquadronDto): Promise<SquadronView> {
-    const manager = this.dataSource.manager;
-    const shipId = await ownerShip(manager, scope, body.shipId);
-    await this.checkCodeFree(manager, body.code);
-    return toSquadronView(await this.save(manager, manager.create(Squadron, { ...body, shipId })));
+    return this.dataSource.transaction(async (manager) => {
+      const shipId = await ownerShip(manager, scope, body.shipId);
+      await this.checkCodeFree(manager, body.code);
+      const saved = await this.save(manager, manager.create(Squadron, { ...body, shipId }));
+      const view = toSquadronView(saved);
+      await this.audit.record(manager, {
+        action: 'squadron.created',
+        subject: { type: 'squadron', id: saved.id },
+        shipId,
+        summary: `Squadron ${saved.code} added`,
+        after: { ...view },
+      });
+      return view;
+    });
   }
 
   async update(scope: ShipScope, id: number, body: UpdateSquadronDto): Promise<SquadronView> {
     return this.dataSource.transaction(async (manager) => {
       const squadron = await this.findOrFail(manager, scope, id);
       if (body.code !== undefined) await this.checkCodeFree(manager, body.code, id);
-      return toSquadronView(await this.save(manager, Object.assign(squadron, definedFields(body))));
+      const before = toSquadronView(squadron);
+      const after = toSquadronView(await this.save(manager, Object.assign(squadron, definedFields(body))));
+      await this.audit.record(manager, {
+        action: 'squadron.updated',
+        subject: { type: 'squadron', id },
+        shipId: squadron.shipId,
+        summary: `Squadron ${after.code} changed`,
+        before: { ...before },
+        after: { ...after },
+      });
+      return after;
     });
   }
 
@@ -58,6 +82,13 @@ export class SquadronsService {
         if (isStillReferenced(error)) throw this.inUse(squadron, await manager.countBy(Aircraft, { squadronId: id }));
         throw error;
       }
+      await this.audit.record(manager, {
+        action: 'squadron.deleted',
+        subject: { type: 'squadron', id },
+        shipId: squadron.shipId,
+        summary: `Squadron ${squadron.code} deleted`,
+        before: { ...toSquadronView(squadron) },
+      });
     });
     this.logger.log(`Squadron ${id} deleted`);
   }

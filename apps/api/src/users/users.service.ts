@@ -169,6 +169,12 @@ export class UsersService {
         );
       }
       await this.links.invite(manager, user);
+      await this.audit.record(manager, {
+        action: 'person.invited',
+        subject: { type: 'person', id },
+        shipId: user.shipId,
+        summary: `Invitation sent again to ${user.name}`,
+      });
       return user.email;
     });
   }

@@ -1,8 +1,8 @@
 import { AUDIT_ACTIONS, type AuditAction } from '@catline/contracts';
 import { ApiPropertyOptional, IntersectionType } from '@nestjs/swagger';
-import { Type } from 'class-transformer';
-import { IsEmail, IsIn, IsInt, IsISO8601, IsOptional, Min } from 'class-validator';
+import { IsEmail, IsIn, IsISO8601, IsOptional } from 'class-validator';
 import { RecordsPageQueryDto } from '../../common/paging/page-query.dto.js';
+import { QueryId } from '../../common/validation/query-id.decorator.js';
 
 /** Which entries: every filter given must hold. */
 export class AuditFilterDto {
@@ -27,9 +27,7 @@ export class AuditFilterDto {
     description: "Entries of one ship's data; a ship's admin only ever reads their own ship's.",
   })
   @IsOptional()
-  @Type(() => Number)
-  @IsInt({ message: 'ship must be a ship id, a whole number from 1' })
-  @Min(1, { message: 'ship must be a ship id, a whole number from 1' })
+  @QueryId('ship must be a ship id, a whole number from 1 written in digits only')
   ship?: number;
 
   @ApiPropertyOptional({ example: '2027-01-02T00:00:00Z', description: 'Entries before this instant.' })

@@ -22,6 +22,7 @@ import { AircraftTypeSettingTables1796262840562 } from './1796262840562-Aircraft
 import { LaunchRecordWholeWind1796277785788 } from './1796277785788-LaunchRecordWholeWind.js';
 import { LaunchRecordExcessWind1796280000000 } from './1796280000000-LaunchRecordExcessWind.js';
 import { CyclePrerequisiteTicks1796290000000 } from './1796290000000-CyclePrerequisiteTicks.js';
+import { AuditEntriesAppendOnly1796292153729 } from './1796292153729-AuditEntriesAppendOnly.js';
 import { CatapultReadinessSteps1796300000000 } from './1796300000000-CatapultReadinessSteps.js';
 
 /** Every migration in the order it runs; add a new one at the end (see DEVELOPERS.md). */
@@ -50,5 +51,6 @@ export const migrations = [
   LaunchRecordWholeWind1796277785788,
   LaunchRecordExcessWind1796280000000,
   CyclePrerequisiteTicks1796290000000,
+  AuditEntriesAppendOnly1796292153729,
   CatapultReadinessSteps1796300000000,
 ];

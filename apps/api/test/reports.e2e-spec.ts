@@ -23,6 +23,7 @@ import {
   launchKey,
   pilot,
 } from './support/lineup-fixtures.js';
+import { readChangeLog } from './support/change-log.js';
 import { bearer } from './support/sign-in.js';
 import { startTestApp } from './support/test-app.js';
 
@@ -45,7 +46,7 @@ interface Flown {
   cycle: CycleView;
   /** Slot ids by side number. */
   ids: Record<string, number>;
-  /** The lineup read right after the start. */
+  /** The lineup as the start change left it. */
   atStart: LineupSnapshot;
   /** The lineup after the close. */
   final: LineupSnapshot;
@@ -104,8 +105,15 @@ describe('cycle reports, exports and shot counts', () => {
       spareSlotId: ids['C27'],
     });
 
-    await deck.start(cycle.id);
-    const atStart = await deck.snapshot(cycle.id);
+    // The lineup as the start left it, from the log: a read after it is projected from the later moment.
+    const beforeStart = await deck.snapshot(cycle.id);
+    const started = await deck.start(cycle.id);
+    const atStart = applyLineupChanges(
+      beforeStart,
+      (await readChangeLog(url, await deck.token(OBSERVER), cycle.id, { since: beforeStart.version })).filter(
+        (change) => change.version <= started.version,
+      ),
+    );
     const launchedAt: Record<string, string> = {};
     const launch = async (side: string) => {
       const response = await deck.launch(cycle.id, await deck.slot(cycle.id, ids[side]), launchKey());

@@ -243,6 +243,26 @@ export interface GrossWeightPartsView {
   grossWeightLb: number;
 }
 
+/** launch-math's TimingVerdict. */
+export const TIMING_VERDICTS = ['early', 'on_time', 'late'] as const;
+export type TimingVerdict = (typeof TIMING_VERDICTS)[number];
+
+/** How a launch time runs against a reference, in whole minutes (0 when on time). */
+export interface TimingAgainstView {
+  verdict: TimingVerdict;
+  minutes: number;
+}
+
+/**
+ * An aircraft's launch time against its window's end (late by the minutes started after it, else on time
+ * with the whole minutes to spare) and, once launching, against the plan: the lineup as projected from the
+ * planned start with nothing yet launched.
+ */
+export interface LaunchTimingView {
+  window: TimingAgainstView;
+  plan: TimingAgainstView | null;
+}
+
 export interface SlotView {
   id: number;
   cycleId: number;
@@ -305,6 +325,8 @@ export interface SlotView {
   statusBy: string | null;
   projectedLaunchAt: string | null;
   missesWindow: boolean;
+  /** How the projected (or actual) launch runs against the window and the plan; null without a time. */
+  timing: LaunchTimingView | null;
   /** Null in the deck pool; for a launched aircraft, the figures its launch record froze. */
   figures: LaunchFigures | null;
   /** What was used with the shot; null until launched. */

@@ -29,6 +29,8 @@ export {
   type UnschedulableSlot,
 } from './schedule/launch-projection.js';
 export * from './schedule/lineup-suggestion.js';
+export * from './schedule/launch-readiness.js';
+export * from './schedule/launch-timing.js';
 export * from './after-shot/weather-case.js';
 export * from './after-shot/after-shot.js';
 export * from './after-shot/night.js';

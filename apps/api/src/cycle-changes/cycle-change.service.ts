@@ -1,4 +1,5 @@
 import type { ChangeActor, ChangeKind, LineupChange, LineupCommandResult } from '@catline/contracts';
+import { epochMs, type EpochMs } from '@catline/launch-math';
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { DataSource, type EntityManager, type QueryDeepPartialEntity } from 'typeorm';
@@ -112,7 +113,7 @@ export class CycleChangeService {
           else await this.bumpFrom(manager, state.cycle);
           if (!draft.mirrored)
             state = await this.loader.load(manager, await manager.findOneByOrFail(Cycle, { id: cycleId }), state);
-          const after = buildSnapshot(state);
+          const after = buildSnapshot(state, this.now());
           recorded.push(await this.append(manager, state, changeKind, actor, draft, diffSnapshots(before, after)));
           before = after;
         };
@@ -156,7 +157,12 @@ export class CycleChangeService {
     const read = await this.loader.read(manager, cycleId);
     // Read after the claim; the row differs from the state before the change in its version only.
     read.cycle.version = next - 1;
-    return new StartingPoint(read, buildSnapshot(read), generation);
+    return new StartingPoint(read, buildSnapshot(read, this.now()), generation);
+  }
+
+  /** The moment a launching cycle's projection is re-based on. */
+  private now(): EpochMs {
+    return epochMs(this.clock.now().getTime());
   }
 
   private async bumpFrom(manager: EntityManager, cycle: Cycle): Promise<void> {

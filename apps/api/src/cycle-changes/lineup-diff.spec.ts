@@ -81,6 +81,7 @@ const slot = (id: number, catapultId: number | null, position: number | null, ve
   statusBy: null,
   projectedLaunchAt: null,
   missesWindow: false,
+  timing: null,
   figures: null,
   launchRecord: null,
   gates: null,

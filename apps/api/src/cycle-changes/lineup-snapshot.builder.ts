@@ -3,6 +3,7 @@ import {
   type LaneView,
   type LaunchConfiguration,
   type LaunchFigures,
+  type LaunchTimingView,
   type LineupSnapshot,
   type SlotStatus,
   type SlotView,
@@ -16,15 +17,18 @@ import {
   degrees,
   departureFor,
   epochMs,
+  launchTiming,
   pounds,
   priorityForRole,
   projectLaunchTimes,
+  readyToLaunchAt,
   seconds,
   secondsToMilliseconds,
   takeOffTrim,
   type EpochMs,
   type LaunchPriority,
   type Projection,
+  type ReadinessPosition,
   type UnschedulableReason,
   type WindComponents,
 } from '@catline/launch-math';
@@ -89,13 +93,25 @@ export const launchCatapults = (state: LineupState) => {
 
 /**
  * launch-math's projection of a lineup (slot ids per catapult id): launched slots at their recorded
- * times, planned ones no earlier than their taxi from where they are now, and none out of its row
- * before the aircraft parked in front of it.
+ * times, none out of its row before the aircraft parked in front of it. While planning (or with no
+ * `now`), planned slots go no earlier than their taxi from where they stand, counted from the planned
+ * start. Once launching, what is left is re-based on now (or the planned start, if later): each slot no
+ * earlier than what its readiness step leaves to do (launch-math's readyToLaunchAt), nothing before now.
+ * `asPlanned` projects every slot as if nothing had launched and each set off from its spot at the
+ * planned start with every step to do: the plan launching is measured against.
  */
-export function projectLineup(state: LineupState, lanes: Record<string, string[]>): Projection {
+export function projectLineup(
+  state: LineupState,
+  lanes: Record<string, string[]>,
+  now?: EpochMs,
+  asPlanned = false,
+): Projection {
   const { cycle } = state;
   const layout = deckLayout(state.ship, state.catapults);
-  const start = epochMs(cycle.plannedLaunchAt.getTime());
+  const planned = epochMs(cycle.plannedLaunchAt.getTime());
+  const launching = asPlanned || (now !== undefined && cycle.state === 'executing');
+  const start = asPlanned || now === undefined ? planned : epochMs(Math.max(planned, now));
+  const steps = shipReadinessSteps(state);
   const slotById = new Map(state.slots.map((slot) => [String(slot.id), slot]));
   const launched: Record<string, EpochMs> = {};
   const notBefore: Record<string, EpochMs> = {};
@@ -104,9 +120,24 @@ export function projectLineup(state: LineupState, lanes: Record<string, string[]
     for (const slotId of lanes[String(catapult.id)] ?? []) {
       const slot = slotById.get(slotId)!;
       priorities[slotId] = launchPriority(slot);
-      if (slot.launchedAt) launched[slotId] = epochMs(slot.launchedAt.getTime());
-      const taxi = slot.status === 'planned' ? taxiSeconds(state, layout, slot, catapult) : undefined;
-      if (taxi !== undefined) notBefore[slotId] = epochMs(start + secondsToMilliseconds(seconds(taxi)));
+      if (slot.launchedAt && !asPlanned) {
+        launched[slotId] = epochMs(slot.launchedAt.getTime());
+        continue;
+      }
+      // In a lane and not launched: planned, suspended or at a readiness step.
+      const where: ReadinessPosition = asPlanned ? 'planned' : (slot.status as ReadinessPosition);
+      const taxi = where === 'planned' || where === 'taxiing' ? taxiSeconds(state, layout, slot, catapult) : 0;
+      if (launching) {
+        notBefore[slotId] = readyToLaunchAt({
+          position: where,
+          since: epochMs(slot.statusAt?.getTime() ?? start),
+          taxi: seconds(taxi ?? 0),
+          steps,
+          now: start,
+        });
+      } else if (where === 'planned' && taxi !== undefined) {
+        notBefore[slotId] = epochMs(start + secondsToMilliseconds(seconds(taxi)));
+      }
     }
   }
   return projectLaunchTimes({
@@ -119,6 +150,7 @@ export function projectLineup(state: LineupState, lanes: Record<string, string[]
     launched,
     notBefore,
     priorities,
+    now: launching && !asPlanned ? start : undefined,
     clearBefore: clearBefore(state, layout),
   });
 }
@@ -192,17 +224,39 @@ export const launchWeight = (slot: Slot): number => slot.agreedWeightLb ?? slot.
 export const slotFigures = (state: LineupState, slot: Slot): LaunchFigures | null =>
   figuresIn(cycleConditions(state), slot);
 
-/** The lineup snapshot of a cycle, every figure from @catline/launch-math; pure, so equal states give equal snapshots. */
-export function buildSnapshot(state: LineupState): LineupSnapshot {
+/**
+ * How each timed slot runs against the window's end and, once launching, against the plan (the lineup
+ * projected from the planned start as if nothing had launched).
+ */
+function slotTimings(
+  state: LineupState,
+  lanes: Record<string, string[]>,
+  projection: Projection,
+  now: EpochMs | undefined,
+): Map<number, LaunchTimingView> {
+  const windowEnd = epochMs(state.cycle.windowEndAt.getTime());
+  const plan =
+    now !== undefined && state.cycle.state === 'executing'
+      ? new Map(projectLineup(state, lanes, undefined, true).slots.map((slot) => [slot.slotId, slot.time]))
+      : undefined;
+  return new Map(
+    projection.slots.map((slot) => [Number(slot.slotId), launchTiming(slot.time, windowEnd, plan?.get(slot.slotId))]),
+  );
+}
+
+/**
+ * The lineup snapshot of a cycle, every figure from @catline/launch-math; pure, so equal states (at an
+ * equal `now`) give equal snapshots. `now` re-bases a launching cycle's projection on it.
+ */
+export function buildSnapshot(state: LineupState, now?: EpochMs): LineupSnapshot {
   const { cycle } = state;
   const conditions = cycleConditions(state);
   const laneOrder = new Map(state.catapults.map((catapult) => [catapult.id, laneSlots(state, catapult.id)]));
-  const projection = projectLineup(
-    state,
-    Object.fromEntries(
-      [...laneOrder].map(([catapultId, slots]) => [String(catapultId), slots.map((slot) => String(slot.id))]),
-    ),
+  const laneIds = Object.fromEntries(
+    [...laneOrder].map(([catapultId, slots]) => [String(catapultId), slots.map((slot) => String(slot.id))]),
   );
+  const projection = projectLineup(state, laneIds, now);
+  const timings = slotTimings(state, laneIds, projection, now);
   const projected = new Map(projection.slots.map((slot) => [Number(slot.slotId), slot]));
   const mustMove = new Map(projection.unschedulable.map((slot) => [slot.slotId, slot.mustMove ?? []]));
   const sideOf = new Map(state.slots.map((slot) => [String(slot.id), slot.aircraft.sideNumber]));
@@ -258,6 +312,7 @@ export function buildSnapshot(state: LineupState): LineupSnapshot {
       statusBy: slot.statusBy?.name ?? null,
       projectedLaunchAt: iso(projectedSlot?.time),
       missesWindow: projectedSlot?.missesWindow ?? false,
+      timing: timings.get(slot.id) ?? null,
       figures,
       launchRecord: record,
       gates: figures && !record ? slotLaunchGates(state, slot, figures, null).views : null,

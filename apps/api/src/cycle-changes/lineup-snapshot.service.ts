@@ -1,7 +1,9 @@
 import type { LineupSnapshot, SlotView } from '@catline/contracts';
+import { epochMs } from '@catline/launch-math';
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { DataSource } from 'typeorm';
+import { Clock } from './clock.js';
 import { buildSnapshot } from './lineup-snapshot.builder.js';
 import { LineupStateLoader, type LineupState } from './lineup-state.js';
 import { asLaunchDataRefusal, LineupException } from './lineup.exception.js';
@@ -11,6 +13,7 @@ export class LineupSnapshotService {
   constructor(
     @InjectDataSource() private readonly dataSource: DataSource,
     private readonly loader: LineupStateLoader,
+    private readonly clock: Clock,
   ) {}
 
   /** The cycle's state from one consistent read (a repeatable-read transaction sees a single moment). */
@@ -21,7 +24,7 @@ export class LineupSnapshotService {
   async snapshot(cycleId: number): Promise<LineupSnapshot> {
     const state = await this.readState(cycleId);
     try {
-      return buildSnapshot(state);
+      return buildSnapshot(state, epochMs(this.clock.now().getTime()));
     } catch (error) {
       throw asLaunchDataRefusal(error);
     }

@@ -1,6 +1,14 @@
 import { isLandingAreaInUse, type SuggestedLineup } from '@catline/contracts';
-import { epochMs, seconds, type LineupSuggestion, type Seconds, type SuggestionInput } from '@catline/launch-math';
+import {
+  epochMs,
+  seconds,
+  type EpochMs,
+  type LineupSuggestion,
+  type Seconds,
+  type SuggestionInput,
+} from '@catline/launch-math';
 import { Injectable } from '@nestjs/common';
+import { Clock } from '../cycle-changes/clock.js';
 import { clearBefore, deckLayout, taxiSeconds } from '../cycle-changes/deck-positions.js';
 import {
   isHeldSpare,
@@ -24,12 +32,14 @@ export class SuggestionService {
   constructor(
     private readonly snapshots: LineupSnapshotService,
     private readonly pool: SuggestionPool,
+    private readonly clock: Clock,
   ) {}
 
   async suggest(cycleId: number): Promise<SuggestedLineup> {
     const state = await this.snapshots.readState(cycleId);
     try {
-      return suggestedLineup(state, await this.pool.suggest(suggestionInput(state)));
+      const suggestion = await this.pool.suggest(suggestionInput(state));
+      return suggestedLineup(state, suggestion, epochMs(this.clock.now().getTime()));
     } catch (error) {
       throw asLaunchDataRefusal(error);
     }
@@ -68,8 +78,11 @@ export function suggestionInput(state: LineupState): SuggestionInput {
   };
 }
 
-/** The suggestion as the API answers it, with the launch times the lineup would have once applied. */
-export function suggestedLineup(state: LineupState, suggestion: LineupSuggestion): SuggestedLineup {
+/**
+ * The suggestion as the API answers it, with the launch times the lineup would have once applied: for a
+ * launching cycle re-based on `now`, as the board's are.
+ */
+export function suggestedLineup(state: LineupState, suggestion: LineupSuggestion, now?: EpochMs): SuggestedLineup {
   const { cycle } = state;
   const lanes = state.catapults.map((catapult) => ({
     catapultId: catapult.id,
@@ -87,7 +100,7 @@ export function suggestedLineup(state: LineupState, suggestion: LineupSuggestion
       ].map(String),
     ]),
   );
-  const projection = projectLineup(state, applied);
+  const projection = projectLineup(state, applied, now);
   return {
     basisVersion: cycle.version,
     lanes,

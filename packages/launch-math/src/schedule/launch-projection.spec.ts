@@ -95,6 +95,22 @@ describe('projected launch times', () => {
     ]);
   });
 
+  // Worked by hand (times invented, common practice, no source): planned from 0 s, a and c would go at
+  // 0 s, b at 60 s, d at 60 s. Launching ran late: a went at 300 s and c at 310 s, and it is now 320 s.
+  // b follows a's reset, 300 + 60 = 360 s; d follows c's, 310 + 60 = 370 s; e, on a third catapult
+  // with nothing launched, goes now, at 320 s, not at 0 s as planned.
+  it('re-base what is left on the launches made and now', () => {
+    const lanes = { cat1: ['a', 'b'], cat3: ['c', 'd'], cat4: ['e'] };
+    expect(timesOf(base({ lanes }))).toEqual({ a: 0, b: 60, c: 0, d: 60, e: 0 });
+    expect(timesOf(base({ lanes, launched: { a: at(300), c: at(310) }, now: at(320) }))).toEqual({
+      a: 300,
+      b: 360,
+      c: 310,
+      d: 370,
+      e: 320,
+    });
+  });
+
   it('project nothing before now or before an aircraft reaches its catapult', () => {
     expect(timesOf(base({ now: at(30), lanes: { cat1: ['a'], cat3: ['b'] }, notBefore: { b: at(200) } }))).toEqual({
       a: 30,

@@ -91,7 +91,7 @@ export class DemoDeck {
     this.prerequisites = new LaunchPrerequisitesService(changes, basis, this.clock);
     this.lineup = new LineupCommandsService(changes, basis, this.clock);
     this.readiness = new ReadinessService(changes, basis, log, closing, this.clock);
-    this.snapshots = new LineupSnapshotService(dataSource, loader);
+    this.snapshots = new LineupSnapshotService(dataSource, loader, this.clock);
   }
 
   static async open(dataSource: DataSource, start: Date): Promise<DemoDeck> {

@@ -96,6 +96,7 @@ function slot(
     statusBy: null,
     projectedLaunchAt: null,
     missesWindow: false,
+    timing: null,
     figures: null,
     launchRecord: null,
     gates: null,

@@ -15,6 +15,7 @@ import {
   type LaunchRecord,
   type LaunchRecordSource,
   type LaunchFigures,
+  type LaunchTimingView,
   type LineupChange,
   type LineupCommandResult,
   type LineupPatch,
@@ -32,6 +33,9 @@ import {
   type ReadinessStep,
   SOFT_LAUNCH_GATE_CODES,
   type SoftLaunchGateCode,
+  TIMING_VERDICTS,
+  type TimingAgainstView,
+  type TimingVerdict,
   type SlotStatus,
   type SlotView,
   type SlotStoresLine,
@@ -346,6 +350,31 @@ export class GrossWeightPartsViewDto implements GrossWeightPartsView {
   grossWeightLb: number;
 }
 
+@ApiSchema({ name: 'TimingAgainst', description: 'How a launch time runs against a reference, in whole minutes.' })
+class TimingAgainstDto implements TimingAgainstView {
+  @EnumProperty(TIMING_VERDICTS, 'TimingVerdict')
+  verdict: TimingVerdict;
+
+  @ApiProperty({ description: 'Minutes early or late; for an on-time launch against the window, minutes to spare.' })
+  minutes: number;
+}
+
+@ApiSchema({
+  name: 'LaunchTiming',
+  description: 'How a launch runs against its window end and, once launching, against the plan.',
+})
+class LaunchTimingDto implements LaunchTimingView {
+  @ApiProperty({ type: () => TimingAgainstDto, description: 'Late by the minutes started after the window end.' })
+  window: TimingAgainstView;
+
+  @ApiProperty({
+    type: () => TimingAgainstDto,
+    nullable: true,
+    description: 'Against the lineup projected from the planned start; null until launching.',
+  })
+  plan: TimingAgainstView | null;
+}
+
 @ApiSchema({ name: 'SlotView', description: 'One aircraft of a cycle: where it stands in the lineup and its figures.' })
 export class SlotViewDto implements SlotView {
   @IdProperty()
@@ -480,6 +509,9 @@ export class SlotViewDto implements SlotView {
 
   @ApiProperty()
   missesWindow: boolean;
+
+  @ApiProperty({ type: () => LaunchTimingDto, nullable: true, description: 'Null without a launch time.' })
+  timing: LaunchTimingView | null;
 
   @ApiProperty({ type: () => LaunchFiguresDto, nullable: true, description: 'Null in the deck pool.' })
   figures: LaunchFigures | null;

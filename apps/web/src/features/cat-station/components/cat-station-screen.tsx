@@ -2,6 +2,7 @@ import { Box, Button, Flex, Grid, Stack, Text } from '@chakra-ui/react';
 import type { LineupSnapshot, ReadinessStep } from '@catline/contracts';
 import { CautionLine } from '../../../components/caution-line.js';
 import { ConnectionBadge } from '../../../components/connection-badge.js';
+import { LaunchTiming } from '../../../components/launch-timing.js';
 import { LiveFigures } from '../../../components/live-figures.js';
 import { CyclePicker } from '../../../components/cycle-picker.js';
 import { ClosedCycleNotice } from '../../../components/closed-cycle-notice.js';
@@ -141,6 +142,12 @@ function Station({ snapshot, catapultId }: { snapshot: LineupSnapshot; catapultI
                 <Text fontSize="sm" color="fg.muted">
                   {current.pilotName ?? 'No pilot assigned'} · projected{' '}
                   {formatOptionalClock(current.projectedLaunchAt)}
+                  {current.timing && (
+                    <>
+                      {' · '}
+                      <LaunchTiming timing={current.timing} />
+                    </>
+                  )}
                 </Text>
               </Box>
               <SlotStatusBadge status={current.status} size="lg" />

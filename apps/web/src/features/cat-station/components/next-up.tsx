@@ -1,5 +1,6 @@
 import { Box, Button, Flex, Stack, Text } from '@chakra-ui/react';
 import type { SlotView } from '@catline/contracts';
+import { LaunchTiming } from '../../../components/launch-timing.js';
 import { SlotStatusBadge } from '../../../components/slot-status-badge.js';
 import { formatOptionalClock, formatPounds } from '../../../lib/format.js';
 
@@ -30,6 +31,12 @@ export function NextUp({ slots, pending, onTaxi }: NextUpProps) {
             {formatPounds(slot.grossWeightLb)} ·{' '}
             {slot.pilotWeightAckAt ? 'pilot answered the weight' : 'pilot has not answered the weight'} · projected{' '}
             {formatOptionalClock(slot.projectedLaunchAt)}
+            {slot.timing && (
+              <>
+                {' · '}
+                <LaunchTiming timing={slot.timing} />
+              </>
+            )}
           </Text>
           {index === 0 && slot.status === 'planned' && (
             <Button

@@ -11,6 +11,7 @@ import { slotGoVerdict } from '../../../lib/launch-verdict.js';
 import { slotItemId } from '../hooks/use-lineup-drag.js';
 import { needsPilot, type SlotMark } from '../lineup-model.js';
 import { GrossWeightParts } from '../../../components/gross-weight-parts.js';
+import { LaunchTiming } from '../../../components/launch-timing.js';
 
 const MARK_LABELS: Record<SlotMark, string> = { 'on-catapult': 'On cat', next: 'Next' };
 
@@ -142,11 +143,11 @@ function SlotCardContent({ slot, movable, mark }: { slot: SlotView; movable: boo
             {slot.launchedAt
               ? `Off ${formatOptionalClock(slot.launchedAt)}`
               : formatOptionalClock(slot.projectedLaunchAt)}
-            {slot.missesWindow && !slot.launchedAt && (
-              <Text as="span" color="nogo.fg" fontWeight="700">
-                {' '}
-                late
-              </Text>
+            {!slot.launchedAt && slot.timing && (
+              <>
+                {' · '}
+                <LaunchTiming timing={slot.timing} />
+              </>
             )}
           </Text>
           <MarginGo slot={{ ...slot, figures }} />

@@ -1,11 +1,12 @@
 import { Box, Grid, HStack, SimpleGrid, Stack, Text } from '@chakra-ui/react';
-import type { LineupSnapshot } from '@catline/contracts';
+import type { LineupSnapshot, SlotView } from '@catline/contracts';
 import { CautionLine } from '../../../components/caution-line.js';
 import { ConnectionBadge } from '../../../components/connection-badge.js';
 import { CyclePicker } from '../../../components/cycle-picker.js';
 import { ClosedCycleNotice } from '../../../components/closed-cycle-notice.js';
 import { StaleWindNotice } from '../../../components/stale-wind-notice.js';
 import { FigureStat } from '../../../components/figure-stat.js';
+import { LaunchTiming } from '../../../components/launch-timing.js';
 import { LiveFigures, useFiguresLive } from '../../../components/live-figures.js';
 import { PageHeader } from '../../../components/page-header.js';
 import { EmptyState, ErrorState, LoadingState, QueryView } from '../../../components/query-states.js';
@@ -24,7 +25,8 @@ import { useSuspendSlot } from '../api/suspend-slot.js';
 import { findMySlot, onTheCatapult } from '../my-launch-model.js';
 import { WeightAnswer } from './weight-answer.js';
 
-function Countdown({ projectedLaunchAt, launchedAt }: { projectedLaunchAt: string | null; launchedAt: string | null }) {
+function Countdown({ slot }: { slot: Pick<SlotView, 'projectedLaunchAt' | 'launchedAt' | 'timing'> }) {
+  const { projectedLaunchAt, launchedAt } = slot;
   const now = useNow(1_000, useFiguresLive());
   if (launchedAt) return <FigureStat label="Launched" value={formatClock(launchedAt)} tone="go" size="xl" />;
   if (!projectedLaunchAt) return <FigureStat label="Projected launch" value="Not yet planned" size="lg" />;
@@ -35,6 +37,9 @@ function Countdown({ projectedLaunchAt, launchedAt }: { projectedLaunchAt: strin
         value={formatCountdown(projectedLaunchAt, now)}
         size="xl"
       />
+      <Text fontSize="sm">
+        <LaunchTiming timing={slot.timing} />
+      </Text>
     </Box>
   );
 }
@@ -82,7 +87,7 @@ function MySlot({ snapshot, pilotId }: { snapshot: LineupSnapshot; pilotId: numb
             size="xl"
           />
         </Box>
-        <Countdown projectedLaunchAt={slot.projectedLaunchAt} launchedAt={slot.launchedAt} />
+        <Countdown slot={slot} />
       </Grid>
       <HStack gap="3" wrap="wrap">
         <Text fontSize="2xl" fontWeight="700">

@@ -9,6 +9,8 @@ import {
   type ElevatorLayout,
   type HangarBayLayout,
   type LaunchTableRow,
+  READINESS_STEPS,
+  type ReadinessStep,
   ROLES,
   type Role,
   type ShipProfile,
@@ -162,6 +164,13 @@ export class ShipProfileDto implements ShipProfile {
 
   @ApiProperty({ type: () => DeparturesDto, description: 'Departure instruction per weather case.' })
   departures: DeparturesDto;
+
+  @ApiPropertyOptional({
+    enum: READINESS_STEPS,
+    isArray: true,
+    description: 'The readiness steps the ship runs, in their order; left out, every step.',
+  })
+  readinessSteps?: ReadinessStep[];
 
   @ApiPropertyOptional({ type: 'integer', description: 'Minutes a wind reading stays fresh; left out, 30.' })
   windReadingMaxAgeMin?: number;

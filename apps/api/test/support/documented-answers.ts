@@ -63,8 +63,8 @@ const OUTSIDE_THE_DOCUMENT: { why: string; holds: (answer: RecordedAnswer, known
     holds: (answer) => answer.method === 'OPTIONS',
   },
   {
-    why: 'An address no route has answers 404 not_found: there is no operation to list it under.',
-    holds: (answer, known) => !known && !answer.route && answer.status === 404,
+    why: 'An address no documented path has answers 404 not_found (from no route, or the catch-all that serves the web app outside /api): there is no operation to list it under.',
+    holds: (answer, known) => !known && answer.status === 404,
   },
   {
     why: 'A documented path asked with a method it does not take answers 405 method_not_allowed from the document itself (method-not-allowed.ts).',

@@ -95,7 +95,7 @@ export class AuthController {
   /** Other sessions end; this one gets a fresh refresh cookie, so POST /auth/refresh continues it. */
   @ApiDoc('Change your password', {
     description: 'Ends your other sessions; this one continues with a fresh refresh cookie.',
-    refuses: { 400: ['wrong_password', 'password_unchanged'] },
+    refuses: { 400: ['wrong_password', 'password_unchanged', 'weak_password'] },
   })
   @Post('password')
   @HttpCode(HttpStatus.NO_CONTENT)

@@ -77,7 +77,11 @@ export class CyclesController {
 
   @ApiDoc('Create a cycle', {
     response: CycleViewDto,
-    refuses: { 400: ['invalid_window'], 404: ['not_found'], 409: ['cycle_number_taken'] },
+    refuses: {
+      400: ['invalid_window'],
+      404: ['not_found'],
+      409: ['cycle_number_taken', 'night_by_position', 'night_needs_case_iii'],
+    },
   })
   @Roles('air_operations')
   @Post()
@@ -89,7 +93,11 @@ export class CyclesController {
   @ApiDoc('Change the conditions of a cycle', {
     response: LineupCommandResultDto,
     description: 'Every launch figure of the lineup is computed again under the new conditions.',
-    refuses: { 400: ['invalid_window'], 404: ['not_found'], 409: ['stale_basis', 'cycle_closed', 'no_change'] },
+    refuses: {
+      400: ['invalid_window', 'invalid_wind_reading'],
+      404: ['not_found'],
+      409: ['stale_basis', 'cycle_closed', 'no_change', 'night_by_position', 'night_needs_case_iii'],
+    },
   })
   @Roles('air_operations')
   @Patch(':cycleId/conditions')

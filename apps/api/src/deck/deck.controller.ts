@@ -31,7 +31,6 @@ export class DeckController {
       400: ['unknown_position'],
       404: ['not_found'],
       409: ['stale_basis', 'cycle_closed', 'slot_not_movable', 'no_change', 'position_occupied', 'path_blocked'],
-      422: ['launch_data_invalid'],
     },
   })
   @Roles('handler')
@@ -48,7 +47,7 @@ export class DeckController {
   @ApiDoc('Set the landing area', {
     response: LineupCommandResultDto,
     description: 'Clear, recovering or fouled (with a reason); the catapults inside it pause unless clear.',
-    refuses: { 404: ['not_found'], 409: ['stale_basis', 'cycle_closed', 'no_change'], 422: ['launch_data_invalid'] },
+    refuses: { 404: ['not_found'], 409: ['stale_basis', 'cycle_closed', 'no_change'] },
   })
   @Roles('air_boss', 'handler')
   @Post('landing-area')
@@ -64,7 +63,7 @@ export class DeckController {
   @ApiDoc("Set a catapult's deck status", {
     response: LineupCommandResultDto,
     description: 'By the air boss: clear to launch, or not clear with a reason; a catapult not clear launches nothing.',
-    refuses: { 404: ['not_found'], 409: ['stale_basis', 'cycle_closed', 'no_change'], 422: ['launch_data_invalid'] },
+    refuses: { 404: ['not_found'], 409: ['stale_basis', 'cycle_closed', 'no_change'] },
   })
   @Roles('air_boss')
   @Post('catapult-status')
@@ -85,7 +84,6 @@ export class DeckController {
       400: ['unknown_position', 'invalid_respot'],
       404: ['not_found'],
       409: ['stale_basis', 'launches_pending', 'slot_not_movable', 'position_occupied', 'path_blocked'],
-      422: ['launch_data_invalid'],
     },
   })
   @Roles('handler')
@@ -112,7 +110,6 @@ export class DeckController {
         'position_occupied',
         'path_blocked',
       ],
-      422: ['launch_data_invalid'],
     },
   })
   @Roles('handler')

@@ -109,7 +109,6 @@ export class LineupController {
       400: ['invalid_lineup'],
       404: ['not_found'],
       409: ['stale_basis', 'cycle_closed', 'slot_not_movable', 'no_change', 'spare_held', 'pilot_missing'],
-      422: ['launch_data_invalid'],
     },
   })
   @Roles('handler')
@@ -129,7 +128,6 @@ export class LineupController {
       400: ['invalid_lineup'],
       404: ['not_found'],
       409: ['stale_basis', 'cycle_closed', 'slot_not_movable', 'no_change', 'spare_held', 'pilot_missing'],
-      422: ['launch_data_invalid'],
     },
   })
   @Roles('handler')
@@ -149,7 +147,6 @@ export class LineupController {
     refuses: {
       404: ['not_found'],
       409: ['stale_basis', 'cycle_closed', 'slot_not_movable', 'spare_unavailable', 'pilot_missing'],
-      422: ['launch_data_invalid'],
     },
   })
   @Roles('handler')
@@ -171,7 +168,6 @@ export class LineupController {
     refuses: {
       404: ['not_found'],
       409: ['stale_basis', 'cycle_closed', 'no_change', 'aircraft_on_catapult'],
-      422: ['launch_data_invalid'],
     },
   })
   @Roles('handler')
@@ -291,7 +287,6 @@ export class LineupController {
         'already_launched',
         'idempotency_key_reused',
       ],
-      422: ['launch_data_invalid'],
     },
   })
   @Roles(...CATAPULT_ROLES)
@@ -313,7 +308,6 @@ export class LineupController {
     refuses: {
       404: ['not_found'],
       409: ['stale_basis', 'cycle_closed', 'nothing_to_waive'],
-      422: ['launch_data_invalid'],
     },
   })
   @Roles('air_boss')

@@ -31,7 +31,7 @@ export class PasswordLinksController {
     return { message: RESET_ACCEPTED };
   }
 
-  @ApiDoc('Set a new password with a reset link', { refuses: { 400: ['link_invalid'] } })
+  @ApiDoc('Set a new password with a reset link', { refuses: { 400: ['link_invalid', 'weak_password'] } })
   @Public()
   @Post('password-reset/confirm')
   @HttpCode(HttpStatus.NO_CONTENT)
@@ -39,7 +39,9 @@ export class PasswordLinksController {
     return this.links.redeem('reset', body.token, body.newPassword);
   }
 
-  @ApiDoc('Accept an invitation and choose a password', { refuses: { 400: ['link_invalid'] } })
+  @ApiDoc('Accept an invitation and choose a password', {
+    refuses: { 400: ['link_invalid', 'weak_password'] },
+  })
   @Public()
   @Post('invitations/accept')
   @HttpCode(HttpStatus.NO_CONTENT)

@@ -21,7 +21,7 @@ export class CycleReportsController {
   @ApiDoc('Read the history of a cycle', {
     response: CycleReplayDto,
     description: 'The lineup at version 0 and every change after it, to step through.',
-    refuses: { 404: ['not_found'] },
+    refuses: { 404: ['not_found'], 422: ['launch_data_invalid'] },
   })
   @Get('replay')
   replay(@Param('cycleId', ParseIntPipe) cycleId: number): Promise<CycleReplay> {

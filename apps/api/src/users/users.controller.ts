@@ -58,7 +58,7 @@ export class UsersController {
     response: UserViewDto,
     description: 'Without a password the person is mailed an invitation link.',
     refuses: {
-      400: ['invalid_binding', 'unknown_reference', 'ship_required'],
+      400: ['invalid_binding', 'unknown_reference', 'ship_required', 'weak_password'],
       404: ['ship_not_found'],
       409: ['email_taken'],
     },

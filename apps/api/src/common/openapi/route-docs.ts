@@ -9,6 +9,7 @@ import { ROLES_KEY } from '../decorators/roles.decorator.js';
 import { API_DOC, type ApiDocMetadata, type RefusalStatus } from './api-doc.decorator.js';
 import { CREATED_LOCATION } from './created.decorator.js';
 import { ApiErrorDto } from './api-error.dto.js';
+import { LineupCommandResultDto } from './views/lineup.view.js';
 
 /** What a route's own decorators and parameters say about it. */
 interface RouteFacts {
@@ -64,6 +65,14 @@ function standardRefusals(route: RouteFacts): Partial<Record<RefusalStatus, Refu
   if (parsesBody) refusals[413] = ['payload_too_large'];
   refusals[503] = ['database_unavailable', 'database_busy'];
   return refusals;
+}
+
+/**
+ * The refusals every route answering a view answers, by that view: every lineup command goes through
+ * CycleChangeService.apply, which turns launch-math refusing the stored data into launch_data_invalid.
+ */
+function refusalsOfResponse(response: ApiDocMetadata['response']): Partial<Record<RefusalStatus, RefusalCode[]>> {
+  return response === LineupCommandResultDto ? { 422: ['launch_data_invalid'] } : {};
 }
 
 function mergeRefusals(
@@ -146,7 +155,11 @@ function decorate(controller: Type<unknown>, name: string, route: RouteFacts, do
   } else {
     decorators.push(ApiResponse({ status: route.status, description }));
   }
-  for (const [status, codes] of mergeRefusals(standardRefusals(route), doc.refuses ?? {})) {
+  for (const [status, codes] of mergeRefusals(
+    standardRefusals(route),
+    refusalsOfResponse(doc.response),
+    doc.refuses ?? {},
+  )) {
     if (own.has(String(status))) continue;
     decorators.push(
       ApiResponse({

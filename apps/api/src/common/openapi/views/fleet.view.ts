@@ -9,6 +9,8 @@ import {
   type ElevatorLayout,
   type HangarBayLayout,
   type LaunchTableRow,
+  READINESS_STEPS,
+  type ReadinessStep,
   ROLES,
   type Role,
   type ShipProfile,

@@ -18,8 +18,6 @@ import {
   type SquadronView,
   type StoresItem,
   LAUNCH_CONFIGURATIONS,
-  READINESS_STEPS,
-  type ReadinessStep,
   type LaunchConfiguration,
   type SettingTable,
   type SettingTableRow,

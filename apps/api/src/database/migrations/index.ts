@@ -22,6 +22,7 @@ import { AircraftTypeSettingTables1796262840562 } from './1796262840562-Aircraft
 import { LaunchRecordWholeWind1796277785788 } from './1796277785788-LaunchRecordWholeWind.js';
 import { LaunchRecordExcessWind1796280000000 } from './1796280000000-LaunchRecordExcessWind.js';
 import { CyclePrerequisiteTicks1796290000000 } from './1796290000000-CyclePrerequisiteTicks.js';
+import { AircraftClassDepartures1796301700000 } from './1796301700000-AircraftClassDepartures.js';
 
 /** Every migration in the order it runs; add a new one at the end (see DEVELOPERS.md). */
 export const migrations = [
@@ -49,4 +50,5 @@ export const migrations = [
   LaunchRecordWholeWind1796277785788,
   LaunchRecordExcessWind1796280000000,
   CyclePrerequisiteTicks1796290000000,
+  AircraftClassDepartures1796301700000,
 ];

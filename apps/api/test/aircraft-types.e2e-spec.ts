@@ -25,11 +25,17 @@ describe('aircraft types', () => {
   const putTable = (id: number, rows: unknown) =>
     request(url).put(`/api/aircraft-types/${id}/launch-table`).set(bearer(admin)).send({ rows });
 
-  it('creates a type and reads it back whole', async () => {
+  it('creates a type and reads it back whole, a jet when no class is given', async () => {
     const body = aircraftTypeBody();
     const created = await request(url).post('/api/aircraft-types').set(bearer(admin)).send(body);
     expect(created.status).toBe(201);
-    expect(created.body).toEqual({ id: expect.any(Number), ...body, storesCatalogue: [], settingTables: [] });
+    expect(created.body).toEqual({
+      id: expect.any(Number),
+      ...body,
+      aircraftClass: 'jet',
+      storesCatalogue: [],
+      settingTables: [],
+    });
     expect((await get(created.body.id)).body).toEqual(created.body);
   });
 
@@ -64,6 +70,8 @@ describe('aircraft types', () => {
       /The last trim band must have no upper weight/,
     ],
     ['a trim band without a trim', { trimBands: [{ upToLb: null }] }, /trimDeg must be a number/],
+    ['a class not in the list', { aircraftClass: 'glider' }, /aircraftClass must be one of jet, turboprop, helicopter/],
+    ['a null class', { aircraftClass: null }, /aircraftClass must be one of jet, turboprop, helicopter/],
     [
       'an extra field in a launch table row',
       { launchTable: [good[0], { ...good[1], note: 'x' }] },
@@ -101,6 +109,21 @@ describe('aircraft types', () => {
       .send({ launchTable: good });
     expect(table.status).toBe(400);
     expect(table.body.message).toMatch(/property launchTable should not exist/);
+  });
+
+  it('changes a type’s class and refuses a class not in the list or cleared', async () => {
+    const type = await createAircraftType(url, admin);
+    const patch = (aircraftClass: unknown) =>
+      request(url).patch(`/api/aircraft-types/${type.id}`).set(bearer(admin)).send({ aircraftClass });
+    const changed = await patch('helicopter');
+    expect(changed.status).toBe(200);
+    expect(changed.body).toEqual({ ...type, aircraftClass: 'helicopter' });
+    for (const refused of ['airship', null]) {
+      const response = await patch(refused);
+      expect(response.status).toBe(400);
+      expect(response.body.message).toMatch(/aircraftClass must be one of jet, turboprop, helicopter/);
+    }
+    expect((await get(type.id)).body.aircraftClass).toBe('helicopter');
   });
 
   it('replaces the launch table', async () => {

@@ -1,7 +1,8 @@
-import type { CycleView, LineupCommandResult } from '@catline/contracts';
+import type { AircraftTypeView, CycleView, LineupCommandResult } from '@catline/contracts';
 import { catapultWind, degrees, knots } from '@catline/launch-math';
 import type { INestApplication } from '@nestjs/common';
-import { AIR_OPS, LineupDriver, OBSERVER, launchKey, pilot } from './support/lineup-fixtures.js';
+import { aircraftTypeBody, createAircraft } from './support/fleet-fixtures.js';
+import { ADMIN, AIR_OPS, LineupDriver, OBSERVER, launchKey, pilot } from './support/lineup-fixtures.js';
 import { startTestApp } from './support/test-app.js';
 
 const MINUTE = 60_000;
@@ -207,5 +208,39 @@ describe('cycle conditions: wind readings, staleness, night and cases', () => {
     expect(await turnOn('II', 3)).toBe(-10);
     expect(await turnOn('III', 1)).toBe(0);
     expect(await turnOn('III', 3)).toBe(0);
+  });
+
+  it('gives a helicopter and a jet in one cycle each its own class’s departure for the cycle’s case', async () => {
+    const admin = await deck.token(ADMIN);
+    const helicopterType = await deck.ok<AircraftTypeView>(
+      ADMIN,
+      'post',
+      '/api/aircraft-types',
+      { ...aircraftTypeBody(), aircraftClass: 'helicopter' },
+      201,
+    );
+    const helicopter = await createAircraft(deck.url, admin, { typeId: helicopterType.id });
+    const { departures } = (await deck.demoShip()).profile;
+
+    const cycle = await deck.createCycle({ ...atlanta, ...night, weatherCase: 'III', night: true });
+    const jetSlot = await deck.addSlot(cycle.id, 'C25');
+    const helicopterSlot = await deck.addSlot(cycle.id, helicopter.sideNumber, { grossWeightLb: 30_000 });
+    const shown = async () => {
+      const slots = (await deck.snapshot(cycle.id)).slots;
+      const of = (id: number) => slots.find((slot) => slot.id === id)!;
+      return [of(jetSlot.id), of(helicopterSlot.id)].map(({ aircraftClass, departure }) => ({
+        aircraftClass,
+        departure,
+      }));
+    };
+    expect(await shown()).toEqual([
+      { aircraftClass: 'jet', departure: departures.III.jet },
+      { aircraftClass: 'helicopter', departure: departures.III.helicopter },
+    ]);
+    expect(departures.III.helicopter).not.toBe(departures.III.jet);
+
+    // The admin's class is the one the departure follows.
+    await deck.ok(ADMIN, 'patch', `/api/aircraft-types/${helicopterType.id}`, { aircraftClass: 'turboprop' });
+    expect((await shown())[1]).toEqual({ aircraftClass: 'turboprop', departure: departures.III.turboprop });
   });
 });

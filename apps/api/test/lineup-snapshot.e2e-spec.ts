@@ -150,7 +150,7 @@ describe('lineup snapshot of the demo cycles', () => {
         });
         expect(slot.trimDeg).toBe(takeOffTrim(profile, weight));
         expect(slot.afterburnerRequired).toBe(afterburnerRequired(profile, weight));
-        expect(slot.departure).toBe(ship.profile.departures.I);
+        expect(slot.departure).toBe(ship.profile.departures.I[type.aircraftClass]);
         checked += 1;
       }
     }

@@ -72,6 +72,21 @@ describe('ships and catapults', () => {
       /bow must not be greater than 180/,
     ],
     ['a profile without departures', { profile: { clearingTurnDeg: { bow: 10, waist: -10 } } }, /departures/],
+    [
+      'a case without a helicopter departure',
+      {
+        profile: {
+          ...demoShip.profile,
+          departures: { ...demoShip.profile.departures, II: { ...demoShip.profile.departures.II, helicopter: ' ' } },
+        },
+      },
+      /departures.II.helicopter should not be empty/,
+    ],
+    [
+      'a case given one text for every class',
+      { profile: { ...demoShip.profile, departures: { ...demoShip.profile.departures, I: 'Climb ahead.' } } },
+      /departures.I must be an object/,
+    ],
     ['a null name', { name: null }, /name must be a string/],
     [
       'a deck spot with a taxi time past an hour',

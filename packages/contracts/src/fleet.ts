@@ -1,7 +1,15 @@
+import type { WeatherCase } from './cycles.js';
 import type { ReadinessStep } from './lineup.js';
 import type { Role } from './roles.js';
 
 export type CatapultPosition = 'bow' | 'waist';
+
+/** The kinds of aircraft the ship's departures are written for: each flies its own after the launch. */
+export const AIRCRAFT_CLASSES = ['jet', 'turboprop', 'helicopter'] as const;
+export type AircraftClass = (typeof AIRCRAFT_CLASSES)[number];
+
+/** The class a type has unless the admin says otherwise. */
+export const DEFAULT_AIRCRAFT_CLASS: AircraftClass = 'jet';
 export type CatapultStatus = 'up' | 'down';
 
 export interface CatapultView {
@@ -75,8 +83,8 @@ export interface ReplaceDeckLayoutRequest extends DeckLayout {
 export interface ShipProfile {
   /** Clearing turn off a bow and a waist catapult in cases I and II (none in case III), degrees; positive to starboard. */
   clearingTurnDeg: Record<CatapultPosition, number>;
-  /** Departure instruction per weather case. */
-  departures: Record<'I' | 'II' | 'III', string>;
+  /** Departure instruction per weather case and aircraft class, as the ship writes it. */
+  departures: Record<WeatherCase, Record<AircraftClass, string>>;
   /**
    * The readiness steps the ship runs, a subset of READINESS_STEPS in its order with on_catapult,
    * weight_agreed, setting_set and tensioned in; left out, every step.
@@ -180,6 +188,8 @@ export interface AircraftTypeView {
   id: number;
   designation: string;
   name: string;
+  /** Which of the ship profile's departures its aircraft fly. */
+  aircraftClass: AircraftClass;
   maxGrossWeightLb: number;
   /** Operating weight with crew, empty of fuel and stores, lb; null until the admin enters it. */
   operatingWeightLb: number | null;
@@ -245,6 +255,8 @@ export interface CreateSquadronRequest extends ShipChoice {
 export interface CreateAircraftTypeRequest extends ShipChoice {
   designation: string;
   name: string;
+  /** Left out, DEFAULT_AIRCRAFT_CLASS. */
+  aircraftClass?: AircraftClass;
   maxGrossWeightLb: number;
   /** Operating weight with crew, lb; null or left out while not known. */
   operatingWeightLb?: number | null;

@@ -1,4 +1,4 @@
-import type { CatapultPosition, CatapultStatus } from './fleet.js';
+import type { AircraftClass, CatapultPosition, CatapultStatus } from './fleet.js';
 import type { CycleView } from './cycles.js';
 import type { DeckPositionView } from './deck.js';
 import type { Role } from './roles.js';
@@ -270,6 +270,8 @@ export interface SlotView {
   sideNumber: string;
   typeId: number;
   typeDesignation: string;
+  /** The type's class: which of the ship's departures the aircraft flies. */
+  aircraftClass: AircraftClass;
   squadronId: number;
   squadronCode: string;
   pilotId: number | null;
@@ -308,6 +310,7 @@ export interface SlotView {
   version: number;
   trimDeg: number | null;
   afterburnerRequired: boolean;
+  /** The ship profile's departure for the cycle's weather case and the aircraft's class. */
   departure: string;
   pilotWeightAckAt: string | null;
   /** The figure the pilot answered from the tablet; null when not answered there. */

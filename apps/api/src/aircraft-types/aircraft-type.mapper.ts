@@ -6,6 +6,7 @@ export function toAircraftTypeView(type: AircraftType): AircraftTypeView {
     id: type.id,
     designation: type.designation,
     name: type.name,
+    aircraftClass: type.aircraftClass,
     maxGrossWeightLb: type.maxGrossWeightLb,
     operatingWeightLb: type.operatingWeightLb,
     crosswindLimitKt: type.crosswindLimitKt,

@@ -1,4 +1,10 @@
-import type { AircraftTypeView, LaunchTableRow, SettingTable, StoresItem } from '@catline/contracts';
+import {
+  type AircraftTypeView,
+  DEFAULT_AIRCRAFT_CLASS,
+  type LaunchTableRow,
+  type SettingTable,
+  type StoresItem,
+} from '@catline/contracts';
 import { Injectable, Logger } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, type EntityManager, Not } from 'typeorm';
@@ -25,6 +31,9 @@ import {
   storesCatalogueProblems,
   trimBandProblems,
 } from './launch-data.js';
+
+/** Fields no launch figure rests on: changing them asks no crew to verify again. */
+const FIELDS_OUTSIDE_THE_FIGURES = new Set(['designation', 'name', 'aircraftClass']);
 
 @Injectable()
 export class AircraftTypesService {
@@ -56,6 +65,7 @@ export class AircraftTypesService {
       const type = manager.create(AircraftType, {
         ...body,
         shipId,
+        aircraftClass: body.aircraftClass ?? DEFAULT_AIRCRAFT_CLASS,
         operatingWeightLb: body.operatingWeightLb ?? null,
         afterburnerFromLb: body.afterburnerFromLb ?? null,
         storesCatalogue: [],
@@ -93,7 +103,7 @@ export class AircraftTypesService {
       });
       return after;
     });
-    if (Object.keys(definedFields(body)).some((field) => field !== 'designation' && field !== 'name'))
+    if (Object.keys(definedFields(body)).some((field) => !FIELDS_OUTSIDE_THE_FIGURES.has(field)))
       await this.reverify.launchDataChanged(updated, 'The figures', actorOf(caller));
     return updated;
   }

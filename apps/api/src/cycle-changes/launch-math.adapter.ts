@@ -99,18 +99,21 @@ const signedToTurn = (deg: number): ClearingTurn => ({
 
 /** The ship’s stored profile (signed turns for cases I and II, departures as text) in launch-math’s form. */
 export function shipProfile(profile: ShipProfileData): ShipProfile {
-  const departure = (weatherCase: WeatherCase) => ({
-    summary: profile.departures[weatherCase],
-    altitude: null,
-    untilRange: null,
-    speed: null,
-  });
+  const departure = (summary: string) => ({ summary, altitude: null, untilRange: null, speed: null });
+  const departures = (weatherCase: WeatherCase) => {
+    const byClass = profile.departures[weatherCase];
+    return {
+      jet: departure(byClass.jet),
+      turboprop: departure(byClass.turboprop),
+      helicopter: departure(byClass.helicopter),
+    };
+  };
   return {
     clearingTurns: {
       bow: signedToTurn(profile.clearingTurnDeg.bow),
       waist: signedToTurn(profile.clearingTurnDeg.waist),
     },
-    departures: { I: departure('I'), II: departure('II'), III: departure('III') },
+    departures: { I: departures('I'), II: departures('II'), III: departures('III') },
   };
 }
 

@@ -43,6 +43,7 @@ const slot = (id: number, catapultId: number | null, position: number | null, ve
   sideNumber: String(200 + id),
   typeId: 1,
   typeDesignation: 'WKD-41',
+  aircraftClass: 'jet',
   squadronId: 1,
   squadronCode: 'CWR',
   pilotId: null,

@@ -1,4 +1,5 @@
 import {
+  type AircraftClass,
   isLandingAreaInUse,
   type LaneView,
   type LaunchConfiguration,
@@ -166,7 +167,8 @@ interface CycleConditions {
   density: number;
   /** The ship profile's settingCrossCheckTolerance. */
   crossCheckTolerance: number | undefined;
-  departure: string;
+  /** The departure an aircraft of the class flies in the cycle's weather case. */
+  departure: (aircraftClass: AircraftClass) => string;
   lanes: Map<number, LaneConditions>;
 }
 
@@ -178,7 +180,7 @@ function cycleConditions(state: LineupState): CycleConditions {
   return {
     density: cycleDensityRatio(cycle),
     crossCheckTolerance: state.ship.profile.settingCrossCheckTolerance,
-    departure: departureFor(profile, cycle.weatherCase).summary,
+    departure: (aircraftClass) => departureFor(profile, cycle.weatherCase, aircraftClass).summary,
     lanes: new Map(
       state.catapults.map((catapult) => [
         catapult.id,
@@ -274,6 +276,7 @@ export function buildSnapshot(state: LineupState, now?: EpochMs): LineupSnapshot
       sideNumber: slot.aircraft.sideNumber,
       typeId: slot.aircraft.typeId,
       typeDesignation: slot.aircraft.type.designation,
+      aircraftClass: slot.aircraft.type.aircraftClass,
       squadronId: slot.aircraft.squadronId,
       squadronCode: slot.aircraft.squadron.code,
       pilotId: slot.pilotId,
@@ -298,7 +301,7 @@ export function buildSnapshot(state: LineupState, now?: EpochMs): LineupSnapshot
       version: slot.version,
       trimDeg: record ? record.trimDeg : takeOffTrim(type, pounds(launchWeight(slot))),
       afterburnerRequired: record?.afterburnerRequired ?? afterburnerRequired(type, pounds(launchWeight(slot))),
-      departure: conditions.departure,
+      departure: conditions.departure(slot.aircraft.type.aircraftClass),
       pilotWeightAckAt: iso(slot.pilotWeightAckAt),
       pilotWeightAckLb: slot.pilotWeightAckLb,
       agreedWeightLb: slot.agreedWeightLb,

@@ -1,5 +1,6 @@
 import { createSystem, defineConfig } from '@chakra-ui/react';
 import { chakraBaseConfig } from './chakra-base.js';
+import { type NightPaletteName, nightColour as night } from './night-scheme.js';
 import { scales } from './palette.js';
 
 type ScaleName = keyof typeof scales;
@@ -8,17 +9,18 @@ type Shade = keyof (typeof scales)['hull'];
 const ref = (scale: ScaleName, shade: Shade) => `{colors.${scale}.${shade}}`;
 const dayNight = (day: string, night: string) => ({ value: { _light: day, _dark: night } });
 
-/** A colour palette usable as `colorPalette`: bright and firm by day, dark and dim by night. */
-function semanticPalette(scale: ScaleName, dayContrast = '{colors.white}') {
+/** A colour palette usable as `colorPalette`: bright and firm by day, the dim night scheme's by night. */
+function semanticPalette(scale: ScaleName, name: NightPaletteName, dayContrast = '{colors.white}') {
+  const byNight = (role: string) => night(`${name}.${role}`);
   return {
-    contrast: dayNight(dayContrast, ref(scale, '100')),
-    fg: dayNight(ref(scale, '700'), ref(scale, '300')),
-    subtle: dayNight(ref(scale, '100'), ref(scale, '950')),
-    muted: dayNight(ref(scale, '200'), ref(scale, '900')),
-    emphasized: dayNight(ref(scale, '300'), ref(scale, '800')),
-    solid: dayNight(ref(scale, '600'), ref(scale, '800')),
-    focusRing: dayNight(ref(scale, '500'), ref(scale, '400')),
-    border: dayNight(ref(scale, '600'), ref(scale, '700')),
+    contrast: dayNight(dayContrast, byNight('contrast')),
+    fg: dayNight(ref(scale, '700'), byNight('fg')),
+    subtle: dayNight(ref(scale, '100'), byNight('subtle')),
+    muted: dayNight(ref(scale, '200'), byNight('muted')),
+    emphasized: dayNight(ref(scale, '300'), byNight('emphasized')),
+    solid: dayNight(ref(scale, '600'), byNight('solid')),
+    focusRing: dayNight(ref(scale, '500'), byNight('focusRing')),
+    border: dayNight(ref(scale, '600'), byNight('border')),
   };
 }
 
@@ -56,33 +58,37 @@ const catlineConfig = defineConfig({
     semanticTokens: {
       colors: {
         bg: {
-          DEFAULT: dayNight('{colors.white}', ref('hull', '950')),
-          subtle: dayNight(ref('hull', '50'), '#0f1920'),
-          muted: dayNight(ref('hull', '100'), ref('hull', '900')),
-          emphasized: dayNight(ref('hull', '200'), ref('hull', '800')),
-          panel: dayNight('{colors.white}', ref('hull', '900')),
+          DEFAULT: dayNight('{colors.white}', night('bg')),
+          subtle: dayNight(ref('hull', '50'), night('bg.subtle')),
+          muted: dayNight(ref('hull', '100'), night('bg.muted')),
+          emphasized: dayNight(ref('hull', '200'), night('bg.emphasized')),
+          panel: dayNight('{colors.white}', night('bg.panel')),
         },
         fg: {
-          DEFAULT: dayNight(ref('hull', '950'), ref('hull', '300')),
-          muted: dayNight(ref('hull', '700'), ref('hull', '400')),
-          subtle: dayNight(ref('hull', '600'), ref('hull', '500')),
+          DEFAULT: dayNight(ref('hull', '950'), night('fg')),
+          muted: dayNight(ref('hull', '700'), night('fg.muted')),
+          subtle: dayNight(ref('hull', '600'), night('fg.subtle')),
+          // Chakra's own components' message colours, in the night scheme's hues.
+          error: dayNight('{colors.red.500}', night('nogo.fg')),
+          warning: dayNight('{colors.orange.600}', night('caution.fg')),
+          success: dayNight('{colors.green.600}', night('go.fg')),
         },
         border: {
-          DEFAULT: dayNight(ref('hull', '400'), ref('hull', '800')),
-          muted: dayNight(ref('hull', '300'), ref('hull', '900')),
-          emphasized: dayNight(ref('hull', '600'), ref('hull', '700')),
+          DEFAULT: dayNight(ref('hull', '400'), night('border')),
+          muted: dayNight(ref('hull', '300'), night('border.muted')),
+          emphasized: dayNight(ref('hull', '600'), night('border.emphasized')),
         },
         gray: {
-          ...semanticPalette('hull'),
-          solid: dayNight(ref('hull', '900'), ref('hull', '700')),
-          fg: dayNight(ref('hull', '800'), ref('hull', '300')),
+          ...semanticPalette('hull', 'gray'),
+          solid: dayNight(ref('hull', '900'), night('gray.solid')),
+          fg: dayNight(ref('hull', '800'), night('gray.fg')),
         },
-        accent: semanticPalette('tide'),
-        go: semanticPalette('kelp'),
-        nogo: semanticPalette('ember'),
+        accent: semanticPalette('tide', 'accent'),
+        go: semanticPalette('kelp', 'go'),
+        nogo: semanticPalette('ember', 'nogo'),
         caution: {
-          ...semanticPalette('flare', ref('hull', '950')),
-          solid: dayNight(ref('flare', '300'), ref('flare', '800')),
+          ...semanticPalette('flare', 'caution', ref('hull', '950')),
+          solid: dayNight(ref('flare', '300'), night('caution.solid')),
         },
       },
     },

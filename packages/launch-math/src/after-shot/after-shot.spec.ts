@@ -37,18 +37,24 @@ describe('after the shot', () => {
     expect(clearingTurn(testShip, 'waist', 'III').direction).toBe('none');
   });
 
-  // Departures are the ship's own data, not a rule of the package: the check is that each case gets its
-  // own entry of the profile, whatever the ship wrote there.
-  it("gives each weather case the ship profile's own departure", () => {
-    expect(departureFor(testShip, 'I')).toBe(testShip.departures.I);
-    expect(departureFor(testShip, 'II')).toBe(testShip.departures.II);
-    expect(departureFor(testShip, 'III')).toBe(testShip.departures.III);
-    expect(departureFor(testShip, 'I')).not.toEqual(departureFor(testShip, 'III'));
+  // Departures are the ship's own data, not a rule of the package: the check is that each case and class
+  // gets its own entry of the profile, whatever the ship wrote there.
+  it.each(['I', 'II', 'III'] as const)(
+    "gives each aircraft class the ship profile's own departure in case %s",
+    (weather) => {
+      for (const aircraftClass of ['jet', 'turboprop', 'helicopter'] as const)
+        expect(departureFor(testShip, weather, aircraftClass)).toBe(testShip.departures[weather][aircraftClass]);
+      expect(departureFor(testShip, weather, 'helicopter')).not.toEqual(departureFor(testShip, weather, 'jet'));
+    },
+  );
+
+  it('gives one class a different departure in another case', () => {
+    expect(departureFor(testShip, 'I', 'jet')).not.toEqual(departureFor(testShip, 'III', 'jet'));
   });
 
   it('puts clearing turn and departure on one card', () => {
-    const card = afterTheShot(testShip, { position: 'waist', weatherCase: 'III' });
+    const card = afterTheShot(testShip, { position: 'waist', weatherCase: 'III', aircraftClass: 'helicopter' });
     expect(card.clearingTurn.direction).toBe('none');
-    expect(card.departure.summary).toBe('Case III test departure.');
+    expect(card.departure.summary).toBe('Case III helicopter test departure.');
   });
 });

@@ -4,6 +4,9 @@ import type { WeatherCase } from './weather-case.js';
 
 export type TurnDirection = 'left' | 'right' | 'none';
 
+/** The kinds of aircraft a ship writes its departures for: a helicopter does not fly a jet's climb-out. */
+export type AircraftClass = 'jet' | 'turboprop' | 'helicopter';
+
 /** The turn the aircraft makes right after the shot to clear the ship's bow. */
 export interface ClearingTurn {
   readonly direction: TurnDirection;
@@ -27,7 +30,7 @@ export interface DepartureInstruction {
 export interface ShipProfile {
   /** The turn off each kind of catapult in cases I and II; case III flies straight ahead. */
   readonly clearingTurns: Readonly<Record<CatapultPosition, ClearingTurn>>;
-  readonly departures: Readonly<Record<WeatherCase, DepartureInstruction>>;
+  readonly departures: Readonly<Record<WeatherCase, Readonly<Record<AircraftClass, DepartureInstruction>>>>;
 }
 
 /** What the pilot does after the shot. */
@@ -45,16 +48,24 @@ export const NO_CLEARING_TURN: ClearingTurn = { direction: 'none', degrees: degr
 export const clearingTurn = (ship: ShipProfile, position: CatapultPosition, weather: WeatherCase): ClearingTurn =>
   weather === 'III' ? NO_CLEARING_TURN : ship.clearingTurns[position];
 
-/** The departure for the weather case, from the ship's profile. */
-export const departureFor = (ship: ShipProfile, weather: WeatherCase): DepartureInstruction => ship.departures[weather];
+/** The departure an aircraft of this class flies in the weather case, from the ship's profile. */
+export const departureFor = (
+  ship: ShipProfile,
+  weather: WeatherCase,
+  aircraftClass: AircraftClass,
+): DepartureInstruction => ship.departures[weather][aircraftClass];
 
 /** Clearing turn and departure together, as a pilot's launch card shows them. */
 export function afterTheShot(
   ship: ShipProfile,
-  launch: { readonly position: CatapultPosition; readonly weatherCase: WeatherCase },
+  launch: {
+    readonly position: CatapultPosition;
+    readonly weatherCase: WeatherCase;
+    readonly aircraftClass: AircraftClass;
+  },
 ): AfterTheShot {
   return {
     clearingTurn: clearingTurn(ship, launch.position, launch.weatherCase),
-    departure: departureFor(ship, launch.weatherCase),
+    departure: departureFor(ship, launch.weatherCase, launch.aircraftClass),
   };
 }

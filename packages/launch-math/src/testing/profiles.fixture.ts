@@ -1,4 +1,4 @@
-import type { ShipProfile } from '../after-shot/after-shot.js';
+import type { DepartureInstruction, ShipProfile } from '../after-shot/after-shot.js';
 import type { AircraftProfile } from '../aircraft/aircraft-profile.js';
 import { degrees, feet, knots, nauticalMiles, pounds, poundsForce } from '../units/units.js';
 
@@ -26,11 +26,14 @@ export const strikeFighter: AircraftProfile = {
   afterburnerFromGrossWeight: pounds(45000),
 };
 
+/** A departure for tests whose wording is all there is to it. */
+const worded = (summary: string): DepartureInstruction => ({ summary, altitude: null, untilRange: null, speed: null });
+
 /**
  * A ship's after-the-shot rules for tests. Clearing turns about 10 degrees right off the bow, left off
- * the waist in cases I and II, none in case III: common practice, no source. Case I departure: NAVEDTRA 14342A table 11-10
- * (500 ft until 7 nm, then climb unrestricted in visual conditions); 300 kt: common practice, no source.
- * Cases II and III: wording invented for the tests.
+ * the waist in cases I and II, none in case III: common practice, no source. Case I jet departure: NAVEDTRA 14342A
+ * table 11-10 (500 ft until 7 nm, then climb unrestricted in visual conditions); 300 kt: common practice, no source.
+ * Every other departure: wording invented for the tests.
  */
 export const testShip: ShipProfile = {
   clearingTurns: {
@@ -39,13 +42,30 @@ export const testShip: ShipProfile = {
   },
   departures: {
     I: {
-      summary:
-        'After the clearing turn, parallel the base recovery course at 500 ft until 7 nm, then climb unrestricted in visual conditions.',
-      altitude: feet(500),
-      untilRange: nauticalMiles(7),
-      speed: knots(300),
+      jet: {
+        summary:
+          'After the clearing turn, parallel the base recovery course at 500 ft until 7 nm, then climb unrestricted in visual conditions.',
+        altitude: feet(500),
+        untilRange: nauticalMiles(7),
+        speed: knots(300),
+      },
+      turboprop: worded('Case I turboprop test departure.'),
+      helicopter: worded('Case I helicopter test departure.'),
     },
-    II: { summary: 'Case II test departure.', altitude: feet(500), untilRange: nauticalMiles(7), speed: knots(300) },
-    III: { summary: 'Case III test departure.', altitude: null, untilRange: null, speed: knots(250) },
+    II: {
+      jet: {
+        summary: 'Case II jet test departure.',
+        altitude: feet(500),
+        untilRange: nauticalMiles(7),
+        speed: knots(300),
+      },
+      turboprop: worded('Case II turboprop test departure.'),
+      helicopter: worded('Case II helicopter test departure.'),
+    },
+    III: {
+      jet: { summary: 'Case III jet test departure.', altitude: null, untilRange: null, speed: knots(250) },
+      turboprop: worded('Case III turboprop test departure.'),
+      helicopter: worded('Case III helicopter test departure.'),
+    },
   },
 };

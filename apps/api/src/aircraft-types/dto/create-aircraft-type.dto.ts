@@ -1,5 +1,8 @@
 import {
+  AIRCRAFT_CLASSES,
+  type AircraftClass,
   AIRCRAFT_TYPE_RANGES as RANGES,
+  DEFAULT_AIRCRAFT_CLASS,
   type CreateAircraftTypeRequest,
   NAME_MAX_LENGTH,
   TYPE_DESIGNATION_MAX_LENGTH,
@@ -10,6 +13,7 @@ import {
   ArrayMaxSize,
   ArrayMinSize,
   IsArray,
+  IsIn,
   IsInt,
   IsNotEmpty,
   IsNumber,
@@ -19,6 +23,7 @@ import {
   Max,
   MaxLength,
   Min,
+  ValidateIf,
   ValidateNested,
 } from 'class-validator';
 import { Trim } from '../../common/validation/trim.decorator.js';
@@ -44,6 +49,15 @@ export class CreateAircraftTypeDto extends ShipChoiceDto implements CreateAircra
   @PlainText()
   @MaxLength(NAME_MAX_LENGTH)
   name: string;
+
+  @ApiPropertyOptional({
+    enum: AIRCRAFT_CLASSES,
+    description: `Which of the ship profile's departures its aircraft fly; left out, ${DEFAULT_AIRCRAFT_CLASS}.`,
+  })
+  // Left out takes the default; null is refused like any other value outside the list.
+  @ValidateIf((_, value) => value !== undefined)
+  @IsIn(AIRCRAFT_CLASSES, { message: `aircraftClass must be one of ${AIRCRAFT_CLASSES.join(', ')}` })
+  aircraftClass?: AircraftClass;
 
   @ApiProperty({ description: 'Pounds.' })
   @IsInt()

@@ -1,4 +1,4 @@
-import type { LaunchTableRow, SettingTable, StoresItem, TrimBand } from '@catline/contracts';
+import type { AircraftClass, LaunchTableRow, SettingTable, StoresItem, TrimBand } from '@catline/contracts';
 import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, type Relation } from 'typeorm';
 import { Ship } from './ship.entity.js';
 
@@ -22,6 +22,10 @@ export class AircraftType {
 
   @Column({ length: 120 })
   name: string;
+
+  /** Which of the ship profile's departures its aircraft fly. */
+  @Column({ name: 'aircraft_class', type: 'varchar', length: 12, default: 'jet' })
+  aircraftClass: AircraftClass;
 
   @Column({ name: 'max_gross_weight_lb' })
   maxGrossWeightLb: number;

@@ -24,6 +24,7 @@ import { LaunchRecordExcessWind1796280000000 } from './1796280000000-LaunchRecor
 import { CyclePrerequisiteTicks1796290000000 } from './1796290000000-CyclePrerequisiteTicks.js';
 import { AuditEntriesAppendOnly1796292153729 } from './1796292153729-AuditEntriesAppendOnly.js';
 import { CatapultReadinessSteps1796300000000 } from './1796300000000-CatapultReadinessSteps.js';
+import { AircraftClassDepartures1796301700000 } from './1796301700000-AircraftClassDepartures.js';
 
 /** Every migration in the order it runs; add a new one at the end (see DEVELOPERS.md). */
 export const migrations = [
@@ -53,4 +54,5 @@ export const migrations = [
   CyclePrerequisiteTicks1796290000000,
   AuditEntriesAppendOnly1796292153729,
   CatapultReadinessSteps1796300000000,
+  AircraftClassDepartures1796301700000,
 ];

@@ -14,9 +14,27 @@ export const demoShip = {
   profile: {
     clearingTurnDeg: { bow: 10, waist: -10 },
     departures: {
-      I: 'Brindlemark house departure, Case I (invented for the demo): after the clearing turn hold 800 ft to the Lantern gate, 5 nm out on the launch side of the bow; from the gate climb on your own to the briefed block, clear of the ship’s 3 nm ring.',
-      II: 'Brindlemark house departure, Case II (invented for the demo): after the clearing turn hold 800 ft on the ship’s heading to 5 nm, call "gate" to the ship’s departure desk, then climb on the heading the desk gives to the briefed block.',
-      III: 'Brindlemark house departure, Case III (invented for the demo): no turn off the catapult; climb at once to 1,500 ft on the ship’s heading; at 4 nm take the heading the departure desk gives, climb to the briefed block and report level.',
+      I: {
+        jet: 'Brindlemark house departure, Case I jets (invented for the demo): after the clearing turn hold 800 ft to the Lantern gate, 5 nm out on the launch side of the bow; from the gate climb on your own to the briefed block, clear of the ship’s 3 nm ring.',
+        turboprop:
+          'Brindlemark house departure, Case I turboprops (invented for the demo): after the clearing turn hold 600 ft and 200 kt to the Lantern gate, then climb on your own to the briefed block, staying below the jets’ 800 ft lane until 5 nm.',
+        helicopter:
+          'Brindlemark house departure, Case I helicopters (invented for the demo): lift, slide clear to the side the handler signals, then hold 300 ft on the port quarter inside 2 nm until the tower releases you.',
+      },
+      II: {
+        jet: 'Brindlemark house departure, Case II jets (invented for the demo): after the clearing turn hold 800 ft on the ship’s heading to 5 nm, call "gate" to the ship’s departure desk, then climb on the heading the desk gives to the briefed block.',
+        turboprop:
+          'Brindlemark house departure, Case II turboprops (invented for the demo): after the clearing turn hold 600 ft on the ship’s heading to 5 nm, call "gate" to the departure desk and climb at 200 kt on the heading it gives.',
+        helicopter:
+          'Brindlemark house departure, Case II helicopters (invented for the demo): lift and hold 300 ft on the port quarter, call the departure desk and leave the 2 nm ring only on the heading it gives.',
+      },
+      III: {
+        jet: 'Brindlemark house departure, Case III jets (invented for the demo): no turn off the catapult; climb at once to 1,500 ft on the ship’s heading; at 4 nm take the heading the departure desk gives, climb to the briefed block and report level.',
+        turboprop:
+          'Brindlemark house departure, Case III turboprops (invented for the demo): no turn off the catapult; climb at once to 1,000 ft on the ship’s heading; at 4 nm take the heading the departure desk gives and report level.',
+        helicopter:
+          'Brindlemark house departure, Case III helicopters (invented for the demo): lift on instruments to 200 ft, then 500 ft on the port quarter; stay on the departure desk’s frequency and inside 3 nm until it hands you on.',
+      },
     },
     // The ship's own list, invented for the demo.
     launchPrerequisites: [
@@ -143,6 +161,7 @@ export const demoAircraftTypes = [
   {
     designation: 'WKD-41',
     name: 'Wickerbolt strike jet',
+    aircraftClass: 'jet' as const,
     maxGrossWeightLb: 51_000,
     operatingWeightLb: 29_400,
     crosswindLimitKt: 15,
@@ -190,6 +209,7 @@ export const demoAircraftTypes = [
   {
     designation: 'MSD-26',
     name: 'Mistlewing light attack',
+    aircraftClass: 'jet' as const,
     maxGrossWeightLb: 31_000,
     operatingWeightLb: 16_800,
     crosswindLimitKt: 12,
@@ -237,6 +257,7 @@ export const demoAircraftTypes = [
   {
     designation: 'FGD-63',
     name: 'Farglass early warning',
+    aircraftClass: 'turboprop' as const,
     maxGrossWeightLb: 56_000,
     operatingWeightLb: 39_500,
     crosswindLimitKt: 20,

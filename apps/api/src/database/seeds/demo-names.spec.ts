@@ -401,8 +401,10 @@ describe('the demo reads as invented', () => {
     expect(PUBLIC_FIGURES.filter((figure) => words(figure).at(-1) === surname)).toEqual([]);
   });
 
-  it.each(['I', 'II', 'III'] as const)('labels the Case %s departure as the invented ship’s own', (weatherCase) => {
-    for (const ship of ships) expect(ship.profile.departures[weatherCase]).toMatch(/invented for the demo/);
+  it.each(['I', 'II', 'III'] as const)('labels every Case %s departure as the invented ship’s own', (weatherCase) => {
+    for (const ship of ships)
+      for (const text of Object.values(ship.profile.departures[weatherCase]))
+        expect(text).toMatch(/invented for the demo/);
   });
 
   it('catches the names the demo used to carry', () => {

@@ -13,9 +13,27 @@ export const secondShip = {
   profile: {
     clearingTurnDeg: { bow: 8, waist: -8 },
     departures: {
-      I: 'Quillmoor house departure, Case I (invented for the demo): after the clearing turn hold 700 ft to 4 nm, then climb on your own to the briefed block.',
-      II: 'Quillmoor house departure, Case II (invented for the demo): hold 700 ft on the ship’s heading to 4 nm, call the departure desk, climb on the heading it gives.',
-      III: 'Quillmoor house departure, Case III (invented for the demo): climb at once to 1,500 ft on the ship’s heading; at 4 nm take the heading the departure desk gives.',
+      I: {
+        jet: 'Quillmoor house departure, Case I jets (invented for the demo): after the clearing turn hold 700 ft to 4 nm, then climb on your own to the briefed block.',
+        turboprop:
+          'Quillmoor house departure, Case I turboprops (invented for the demo): after the clearing turn hold 500 ft to 4 nm, then climb on your own to the briefed block.',
+        helicopter:
+          'Quillmoor house departure, Case I helicopters (invented for the demo): lift, clear to starboard and hold 300 ft inside 2 nm until the tower releases you.',
+      },
+      II: {
+        jet: 'Quillmoor house departure, Case II jets (invented for the demo): hold 700 ft on the ship’s heading to 4 nm, call the departure desk, climb on the heading it gives.',
+        turboprop:
+          'Quillmoor house departure, Case II turboprops (invented for the demo): hold 500 ft on the ship’s heading to 4 nm, call the departure desk, climb on the heading it gives.',
+        helicopter:
+          'Quillmoor house departure, Case II helicopters (invented for the demo): lift to 300 ft on the starboard quarter and call the departure desk before leaving 2 nm.',
+      },
+      III: {
+        jet: 'Quillmoor house departure, Case III jets (invented for the demo): climb at once to 1,500 ft on the ship’s heading; at 4 nm take the heading the departure desk gives.',
+        turboprop:
+          'Quillmoor house departure, Case III turboprops (invented for the demo): climb at once to 1,000 ft on the ship’s heading; at 4 nm take the heading the departure desk gives.',
+        helicopter:
+          'Quillmoor house departure, Case III helicopters (invented for the demo): lift on instruments to 500 ft on the starboard quarter and stay inside 3 nm until the departure desk hands you on.',
+      },
     },
     launchPrerequisites: ['Plane guard helicopter up', 'Deck swept', 'Fire party at the catapults'],
   } satisfies ShipProfile,
@@ -42,6 +60,7 @@ export const secondShipAircraftTypes = [
   {
     designation: 'PVK-12',
     name: 'Pennyvale trainer jet',
+    aircraftClass: 'jet' as const,
     operatingWeightLb: 14_500,
     maxGrossWeightLb: 24_000,
     crosswindLimitKt: 12,

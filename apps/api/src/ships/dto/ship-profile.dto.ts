@@ -1,11 +1,14 @@
 import {
+  type AircraftClass,
   DEFAULT_SHIP_TIME_ZONE,
   DEFAULT_SETTING_CROSS_CHECK_TOLERANCE,
   DEFAULT_WIND_READING_MAX_AGE_MIN,
   READINESS_STEPS,
   type ReadinessStep,
   type ShipProfile,
+  type WeatherCase,
 } from '@catline/contracts';
+import { applyDecorators } from '@nestjs/common';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Transform, Type } from 'class-transformer';
 import {
@@ -43,27 +46,39 @@ class ClearingTurnDto {
   waist: number;
 }
 
-class DeparturesDto {
-  @ApiProperty()
-  @Trim()
-  @IsString()
-  @IsNotEmpty()
-  @MaxLength(1000)
-  I: string;
+/** One departure text; the ship's own words, shown to the pilot as written. */
+const DepartureText = () =>
+  applyDecorators(ApiProperty({ maxLength: 1000 }), Trim(), IsString(), IsNotEmpty(), MaxLength(1000));
 
-  @ApiProperty()
-  @Trim()
-  @IsString()
-  @IsNotEmpty()
-  @MaxLength(1000)
-  II: string;
+class ClassDeparturesDto implements Record<AircraftClass, string> {
+  @DepartureText()
+  jet: string;
 
-  @ApiProperty()
-  @Trim()
-  @IsString()
-  @IsNotEmpty()
-  @MaxLength(1000)
-  III: string;
+  @DepartureText()
+  turboprop: string;
+
+  @DepartureText()
+  helicopter: string;
+}
+
+/** A text for every case and class: an aircraft the ship wrote nothing for would leave its pilot without one. */
+const ClassDepartures = () =>
+  applyDecorators(
+    ApiProperty({ type: ClassDeparturesDto, description: 'Departure per aircraft class.' }),
+    IsObject(),
+    ValidateNested(),
+    Type(() => ClassDeparturesDto),
+  );
+
+class DeparturesDto implements Record<WeatherCase, ClassDeparturesDto> {
+  @ClassDepartures()
+  I: ClassDeparturesDto;
+
+  @ClassDepartures()
+  II: ClassDeparturesDto;
+
+  @ClassDepartures()
+  III: ClassDeparturesDto;
 }
 
 export class ShipProfileDto implements ShipProfile {

@@ -21,6 +21,7 @@ describe('a new aircraft type', () => {
     expect(aircraftTypeSchema.parse(typed)).toEqual({
       designation: 'KX-9',
       name: 'Kestrel',
+      aircraftClass: 'jet',
       maxGrossWeightLb: 52_000,
       operatingWeightLb: null,
       crosswindLimitKt: 15,
@@ -37,6 +38,11 @@ describe('a new aircraft type', () => {
         { grossWeightLb: 46_000, minLaunchAirspeedKt: 143 },
       ],
     });
+  });
+
+  it('takes a class from the server’s list only', () => {
+    expect(aircraftTypeSchema.parse({ ...typed, aircraftClass: 'helicopter' }).aircraftClass).toBe('helicopter');
+    expect(fields({ ...typed, aircraftClass: 'glider' as 'jet' })).toEqual(['aircraftClass']);
   });
 
   it('wants whole pounds where the server does', () => {

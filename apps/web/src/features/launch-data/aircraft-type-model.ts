@@ -1,5 +1,7 @@
 import {
+  AIRCRAFT_CLASSES,
   AIRCRAFT_TYPE_RANGES as RANGES,
+  DEFAULT_AIRCRAFT_CLASS,
   NAME_MAX_LENGTH,
   type Range,
   type TrimBand,
@@ -29,6 +31,7 @@ function launchRowsOf(text: string) {
 export const aircraftTypeSchema = z.object({
   designation: requiredText(TYPE_DESIGNATION_MAX_LENGTH, 'Enter the designation.'),
   name: requiredText(NAME_MAX_LENGTH, 'Enter the name.'),
+  aircraftClass: z.enum(AIRCRAFT_CLASSES, 'Choose the class: jet, turboprop or helicopter.'),
   maxGrossWeightLb: typedNumber(
     RANGES.maxGrossWeightLb,
     `Enter the maximum gross weight in whole pounds, ${span(RANGES.maxGrossWeightLb)}.`,
@@ -70,6 +73,7 @@ export const aircraftTypeSchema = z.object({
 export const blankAircraftType: z.input<typeof aircraftTypeSchema> = {
   designation: '',
   name: '',
+  aircraftClass: DEFAULT_AIRCRAFT_CLASS,
   maxGrossWeightLb: '',
   operatingWeightLb: '',
   crosswindLimitKt: '',

@@ -58,6 +58,7 @@ function slot(
     sideNumber,
     typeId: 1,
     typeDesignation: 'KX-9',
+    aircraftClass: 'jet',
     squadronId: 1,
     squadronCode: 'VX-41',
     pilotId: id,

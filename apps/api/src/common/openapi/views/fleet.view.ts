@@ -1,4 +1,6 @@
 import {
+  AIRCRAFT_CLASSES,
+  type AircraftClass,
   type AircraftTypeView,
   type AircraftView,
   type CatapultPosition,
@@ -23,6 +25,7 @@ import {
   type SettingTableRow,
   type TrimBand,
   type UserView,
+  type WeatherCase,
 } from '@catline/contracts';
 import { ApiProperty, ApiPropertyOptional, ApiSchema } from '@nestjs/swagger';
 import { EnumProperty, IdProperty, IntProperty } from './fields.js';
@@ -151,16 +154,28 @@ class ClearingTurnsDto {
   waist: number;
 }
 
+@ApiSchema({ name: 'ClassDepartures' })
+class ClassDeparturesDto implements Record<AircraftClass, string> {
+  @ApiProperty()
+  jet: string;
+
+  @ApiProperty()
+  turboprop: string;
+
+  @ApiProperty()
+  helicopter: string;
+}
+
 @ApiSchema({ name: 'Departures' })
-class DeparturesDto {
-  @ApiProperty()
-  I: string;
+class DeparturesDto implements Record<WeatherCase, ClassDeparturesDto> {
+  @ApiProperty({ type: () => ClassDeparturesDto })
+  I: ClassDeparturesDto;
 
-  @ApiProperty()
-  II: string;
+  @ApiProperty({ type: () => ClassDeparturesDto })
+  II: ClassDeparturesDto;
 
-  @ApiProperty()
-  III: string;
+  @ApiProperty({ type: () => ClassDeparturesDto })
+  III: ClassDeparturesDto;
 }
 
 @ApiSchema({ name: 'ShipProfile', description: "The ship's own after-the-shot profile." })
@@ -171,7 +186,7 @@ export class ShipProfileDto implements ShipProfile {
   })
   clearingTurnDeg: ClearingTurnsDto;
 
-  @ApiProperty({ type: () => DeparturesDto, description: 'Departure instruction per weather case.' })
+  @ApiProperty({ type: () => DeparturesDto, description: 'Departure instruction per weather case and aircraft class.' })
   departures: DeparturesDto;
 
   @ApiPropertyOptional({
@@ -304,6 +319,11 @@ export class AircraftTypeViewDto implements AircraftTypeView {
 
   @ApiProperty()
   name: string;
+
+  @EnumProperty(AIRCRAFT_CLASSES, 'AircraftClass', {
+    description: "Which of the ship profile's departures its aircraft fly.",
+  })
+  aircraftClass: AircraftClass;
 
   @IntProperty({ minimum: 0, description: 'Pounds.' })
   maxGrossWeightLb: number;

@@ -1,4 +1,6 @@
 import {
+  AIRCRAFT_CLASSES,
+  type AircraftClass,
   ARM_STATES,
   type ArmState,
   CHANGE_KINDS,
@@ -395,6 +397,11 @@ export class SlotViewDto implements SlotView {
   @ApiProperty()
   typeDesignation: string;
 
+  @EnumProperty(AIRCRAFT_CLASSES, 'AircraftClass', {
+    description: "Which of the ship's departures the aircraft flies.",
+  })
+  aircraftClass: AircraftClass;
+
   @IdProperty()
   squadronId: number;
 
@@ -470,7 +477,7 @@ export class SlotViewDto implements SlotView {
   @ApiProperty()
   afterburnerRequired: boolean;
 
-  @ApiProperty()
+  @ApiProperty({ description: "The ship profile's departure for the cycle's weather case and the aircraft's class." })
   departure: string;
 
   @InstantProperty({ nullable: true })

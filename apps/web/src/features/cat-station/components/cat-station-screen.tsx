@@ -31,6 +31,7 @@ import { useReportHangfire } from '../api/report-hangfire.js';
 import { useUndoStep } from '../api/undo-step.js';
 import { useUndoWindow } from '../hooks/use-undo-window.js';
 import { useLaunchIntent } from '../hooks/use-launch-intent.js';
+import { DepartureNote } from '../../../components/departure-note.js';
 import { AircraftFigures } from './aircraft-figures.js';
 import { ArmStateButtons } from './arm-state-buttons.js';
 import { CatapultEvents } from './catapult-events.js';
@@ -153,6 +154,7 @@ function Station({ snapshot, catapultId }: { snapshot: LineupSnapshot; catapultI
               <SlotStatusBadge status={current.status} size="lg" />
             </Flex>
             <AircraftFigures slot={current} />
+            <DepartureNote slot={current} weatherCase={snapshot.cycle.weatherCase} size="md" />
             <ArmStateButtons
               slot={current}
               pending={anyPending}

@@ -1,12 +1,13 @@
-import { Alert, Button, Input, SimpleGrid, Stack } from '@chakra-ui/react';
+import { Alert, Button, Input, NativeSelect, SimpleGrid, Stack } from '@chakra-ui/react';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import { FormField } from '../../../components/form-field.js';
+import { aircraftClassChoices } from '../../../lib/aircraft-class.js';
 import { errorMessage } from '../../../lib/api-error.js';
 import { aircraftTypeSchema, blankAircraftType } from '../aircraft-type-model.js';
 import { useCreateAircraftType } from '../api/create-aircraft-type.js';
 
-type Field = keyof typeof blankAircraftType;
+type Field = Exclude<keyof typeof blankAircraftType, 'aircraftClass'>;
 
 export function AircraftTypeForm({ onCreated }: { onCreated: (id: number) => void }) {
   const create = useCreateAircraftType();
@@ -52,6 +53,23 @@ export function AircraftTypeForm({ onCreated }: { onCreated: (id: number) => voi
         <SimpleGrid columns={{ base: 1, sm: 2, lg: 4 }} gap="3">
           {field('designation', 'Designation', undefined, false)}
           {field('name', 'Name', undefined, false)}
+          <FormField
+            label="Class"
+            error={errors.aircraftClass?.message}
+            helper="Which of the ship's departures its aircraft fly."
+            required
+          >
+            <NativeSelect.Root>
+              <NativeSelect.Field {...register('aircraftClass')}>
+                {aircraftClassChoices.map((choice) => (
+                  <option key={choice.value} value={choice.value}>
+                    {choice.label}
+                  </option>
+                ))}
+              </NativeSelect.Field>
+              <NativeSelect.Indicator />
+            </NativeSelect.Root>
+          </FormField>
           {field('maxGrossWeightLb', 'Max gross weight (lb)')}
           {field('operatingWeightLb', 'Operating weight (lb)', 'With crew, no fuel or stores; empty if not known.')}
           {field('crosswindLimitKt', 'Crosswind limit (kt)')}

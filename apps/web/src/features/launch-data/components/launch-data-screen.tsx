@@ -1,21 +1,51 @@
 import { useState } from 'react';
-import { Box, Button, Heading, SimpleGrid, Stack, Text } from '@chakra-ui/react';
-import type { AircraftTypeView } from '@catline/contracts';
+import { Alert, Box, Button, Heading, SimpleGrid, Stack, Text } from '@chakra-ui/react';
+import type { AircraftClass, AircraftTypeView } from '@catline/contracts';
 import { CautionLine } from '../../../components/caution-line.js';
 import { type Column, DataTable } from '../../../components/data-table.js';
 import { FigureStat } from '../../../components/figure-stat.js';
 import { PageHeader } from '../../../components/page-header.js';
 import { QueryView } from '../../../components/query-states.js';
 import { RoleGate } from '../../../components/role-gate.js';
+import { SelectInput } from '../../../components/select-field.js';
+import { AIRCRAFT_CLASS_LABELS, aircraftClassChoices } from '../../../lib/aircraft-class.js';
+import { errorMessage } from '../../../lib/api-error.js';
 import { formatPounds, formatWhole } from '../../../lib/format.js';
 import { useAircraftTypes } from '../../../lib/queries/aircraft-types-query.js';
 import { useHasRole } from '../../../lib/session-store.js';
 import { formatTrimBands } from '../launch-data-model.js';
+import { useSetAircraftClass } from '../api/set-aircraft-class.js';
 import { AircraftTypeForm } from './aircraft-type-form.js';
 import { LaunchTableEditor } from './launch-table-editor.js';
 import { LaunchTableImport } from './launch-table-import.js';
 import { SettingTablesEditor } from './setting-tables-editor.js';
 import { StoresCatalogueEditor } from './stores-catalogue-editor.js';
+
+/** The type's class, which picks the departure its pilots are shown; the admin changes it in place. */
+function AircraftClassField({ type, editable }: { type: AircraftTypeView; editable: boolean }) {
+  const setClass = useSetAircraftClass();
+  if (!editable) return <FigureStat label="Class" value={AIRCRAFT_CLASS_LABELS[type.aircraftClass]} size="md" />;
+  return (
+    <Stack gap="1">
+      <Text fontSize="xs" textTransform="uppercase" letterSpacing="wider" color="fg.muted" fontWeight="600">
+        Class
+      </Text>
+      <SelectInput
+        value={type.aircraftClass}
+        choices={aircraftClassChoices}
+        ariaLabel={`Class of ${type.designation}`}
+        disabled={setClass.isPending}
+        onChange={(value) => setClass.mutate({ typeId: type.id, aircraftClass: value as AircraftClass })}
+      />
+      {setClass.isError && (
+        <Alert.Root status="error" colorPalette="nogo" role="alert">
+          <Alert.Indicator />
+          <Alert.Title>{errorMessage(setClass.error)}</Alert.Title>
+        </Alert.Root>
+      )}
+    </Stack>
+  );
+}
 
 function TypeDetail({ type, editable }: { type: AircraftTypeView; editable: boolean }) {
   return (
@@ -33,6 +63,7 @@ function TypeDetail({ type, editable }: { type: AircraftTypeView; editable: bool
         {type.designation} · {type.name}
       </Heading>
       <SimpleGrid columns={{ base: 2, md: 3, lg: 6 }} gap="3">
+        <AircraftClassField type={type} editable={editable} />
         <FigureStat label="Max gross weight" value={formatPounds(type.maxGrossWeightLb)} size="md" />
         <FigureStat
           label="Operating weight"
@@ -104,6 +135,12 @@ export function LaunchDataScreen() {
       sortValue: (type) => type.designation,
     },
     { key: 'name', header: 'Name', cell: (type) => type.name, sortValue: (type) => type.name },
+    {
+      key: 'class',
+      header: 'Class',
+      cell: (type) => AIRCRAFT_CLASS_LABELS[type.aircraftClass],
+      sortValue: (type) => type.aircraftClass,
+    },
     {
       key: 'max',
       header: 'Max gross (lb)',

@@ -3,6 +3,7 @@ import type { LineupSnapshot, SlotView } from '@catline/contracts';
 import { CautionLine } from '../../../components/caution-line.js';
 import { ConnectionBadge } from '../../../components/connection-badge.js';
 import { CyclePicker } from '../../../components/cycle-picker.js';
+import { DepartureNote } from '../../../components/departure-note.js';
 import { ClosedCycleNotice } from '../../../components/closed-cycle-notice.js';
 import { StaleWindNotice } from '../../../components/stale-wind-notice.js';
 import { FigureStat } from '../../../components/figure-stat.js';
@@ -137,12 +138,7 @@ function MySlot({ snapshot, pilotId }: { snapshot: LineupSnapshot; pilotId: numb
         <FigureStat label="Clearing turn" value={turn} size="md" />
         <FigureStat label="Fuel" value={formatPounds(slot.fuelLb)} size="md" />
       </SimpleGrid>
-      <Box borderWidth="1px" rounded="card" p={{ base: '3', md: '4' }} as="section" aria-label="Departure">
-        <Text fontSize="xs" textTransform="uppercase" letterSpacing="wider" color="fg.muted" fontWeight="600">
-          Departure · case {snapshot.cycle.weatherCase}
-        </Text>
-        <Text fontSize="lg">{slot.departure || '—'}</Text>
-      </Box>
+      <DepartureNote slot={slot} weatherCase={snapshot.cycle.weatherCase} />
     </Stack>
   );
 }

@@ -195,7 +195,8 @@ describe(`${HANDLERS} handlers sending ${TOTAL} lineup commands at one cycle (se
           expect(await deck.snapshot(cycle.id)).toEqual(model.snapshot);
         } finally {
           for (const outcome of model.outcomes) {
-            const kind = `${commandKind(outcome)} ${outcome.status}`;
+            const code = (outcome.body as { code?: string } | null)?.code;
+            const kind = `${commandKind(outcome)} ${outcome.status}${code ? ` ${code}` : ''}`;
             answers.set(kind, (answers.get(kind) ?? 0) + 1);
           }
           await catapultsUp(cycle.id);

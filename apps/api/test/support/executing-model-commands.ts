@@ -1,16 +1,13 @@
-import { RETURNABLE_STATUSES, type LineupSnapshot, type SlotStatus, type SlotView } from '@catline/contracts';
+import { RETURNABLE_STATUSES, type SlotStatus, type SlotView } from '@catline/contracts';
 import fc from 'fast-check';
 import {
   CatapultStatusCommand,
   type LineupModel,
   MAX_DOWN,
   MarkDownCommand,
-  ModelCommand,
   type Request,
-  type Person,
   type SlotFacts,
   UpAgainCommand,
-  byId,
   lanesOf,
   ON_CATAPULT,
   onCatapult,
@@ -18,94 +15,36 @@ import {
   slotFacts,
 } from './lineup-model-commands.js';
 import { launchKey } from './lineup-fixtures.js';
+import {
+  ArmStateCommand,
+  AssignPilotCommand,
+  LoadCommand,
+  SuspendReasonCommand,
+} from './slot-record-model-commands.js';
+import {
+  GONE,
+  SlotCommand,
+  officerFor,
+  pickSlot,
+  pilotFor,
+  placeInLane,
+  notOwnCatapult,
+} from './slot-model-command.js';
 
 /**
  * The commands of a launching cycle for fast-check's model-based run: readiness steps and their undo, the
- * pilot's weight answer and the crew's agreement, suspend and resume, launch with its gates, hangfire, cold
- * shot, down on the catapult, return to the pool, and (from the planning model) catapult up/down, down and
- * up again. Each predicts from the rules as written here (not the service's) whether the server takes it,
- * with which refusal code, and what it leaves; the model-based run checks that after every command.
+ * pilot's weight answer and the crew's agreement, suspend (and its reason) and resume, launch with its
+ * gates, hangfire, cold shot, down on the catapult, return to the pool, armed or safe, fuel and stores, the
+ * pilot, and (from the planning model) catapult up/down, down and up again. Each predicts from the rules
+ * as written here (not the service's) whether the server takes it, with which refusal code, and what it
+ * leaves; the model-based run checks that after every command.
  */
 
-const GONE: readonly SlotStatus[] = ['launched', 'down', 'scratched'];
 /** From tensioned on: the catapult can be fired, so a hangfire can be reported. */
 const FIREABLE: readonly SlotStatus[] = ['tensioned', 'run_up', 'checks_clear', 'pilot_ready'];
 /** The undo window is 10 s; the model stays clear of the edge, as the request's own time is unknown. */
 const SURELY_IN_TIME_MS = 7_000;
 const SURELY_LATE_MS = 13_000;
-
-const slotIn = (snapshot: LineupSnapshot, id: number) => snapshot.slots.find((slot) => slot.id === id)!;
-
-/** 0 for the first aircraft of its lane not yet gone, 1 for the one behind it, … */
-function placeInLane(snapshot: LineupSnapshot, slot: SlotView): number {
-  const lane = snapshot.lanes.find((candidate) => candidate.catapultId === slot.catapultId);
-  const waiting = (lane?.slotIds ?? []).filter((id) => !GONE.includes(slotIn(snapshot, id).status));
-  return Math.max(0, waiting.indexOf(slot.id));
-}
-
-/**
- * Mostly an aircraft the command is meant for (`meant`; by default one that may take a readiness step: the
- * head of a lane, or the one behind it before it taxis), now and then any aircraft, which the rules must
- * refuse or take as well.
- */
-function pickSlot(snapshot: LineupSnapshot, pick: number, meant?: (slot: SlotView) => boolean): SlotView {
-  const stepping = (slot: SlotView) =>
-    slot.catapultId !== null &&
-    !GONE.includes(slot.status) &&
-    (placeInLane(snapshot, slot) === 0 || (placeInLane(snapshot, slot) === 1 && slot.status === 'planned'));
-  const likely = byId(snapshot).filter(meant ?? stepping);
-  if (likely.length > 0 && pick % 5 !== 0) return likely[pick % likely.length];
-  const slots = byId(snapshot);
-  return slots[pick % slots.length];
-}
-
-const officers = (model: LineupModel) => model.people.filter((person) => person.role === 'catapult_officer');
-const pilots = (model: LineupModel) => model.people.filter((person) => person.role === 'pilot');
-
-/** The slot's own catapult officer, or (wrong) any officer by `pick`. */
-function officerFor(model: LineupModel, slot: SlotView, right: boolean, pick: number): Person {
-  const own = officers(model).find((person) => person.catapultId === slot.catapultId);
-  return right && own ? own : officers(model)[pick % officers(model).length];
-}
-
-/** The slot's own pilot, or (wrong) any pilot by `pick`. */
-function pilotFor(model: LineupModel, slot: SlotView, right: boolean, pick: number): Person {
-  const own = pilots(model).find((person) => person.userId === slot.pilotId);
-  return right && own ? own : pilots(model)[pick % pilots(model).length];
-}
-
-/** Refused unless `person` is of the slot's catapult crew. */
-const notOwnCatapult = (person: Person, slot: SlotView) =>
-  person.role !== 'catapult_officer' || person.catapultId !== slot.catapultId;
-
-abstract class SlotCommand extends ModelCommand {
-  constructor(
-    protected readonly slotPick: number,
-    /** The person the command is meant for; false: someone picked by `personPick`. */
-    protected readonly rightPerson: boolean,
-    protected readonly personPick: number,
-    protected readonly stale: boolean,
-  ) {
-    super(0);
-  }
-
-  protected describe(kind: string, extra = ''): string {
-    return `${kind}(slot #${this.slotPick}${this.rightPerson ? '' : `, person #${this.personPick}`}${this.stale ? ', stale' : ''}${extra})`;
-  }
-
-  protected basis(slot: SlotView) {
-    return { slotVersion: this.stale ? slot.version + 1 : slot.version };
-  }
-
-  protected path(model: LineupModel, slot: SlotView, action: string) {
-    return `/api/cycles/${model.snapshot.cycle.id}/lineup/slots/${slot.id}/${action}`;
-  }
-
-  /** Accepted, leaving the lanes as they are (or as given) and the slot's facts changed by `facts`. */
-  protected accepted(model: LineupModel, slot: SlotView, facts: Partial<SlotFacts>, lanes = lanesOf(model.snapshot)) {
-    return { status: 200 as const, lanes, slots: new Map([[slot.id, facts]]) };
-  }
-}
 
 /** A readiness step (mostly the next one), or resume; the weight agreed is the pilot's answer, the plan, or off. */
 export class StepCommand extends SlotCommand {
@@ -527,6 +466,26 @@ export function executingModelCommands(maxCommands: number) {
         {
           weight: 1,
           arbitrary: fc.tuple(fc.nat(), sometimes).map(([s, stale]) => new UpAgainCommand(0, s, stale)),
+        },
+        {
+          weight: 2,
+          arbitrary: fc
+            .tuple(slot, mostly, fc.nat(), sometimes, fc.boolean(), fc.boolean())
+            .map((args) => new ArmStateCommand(...args)),
+        },
+        {
+          weight: 2,
+          arbitrary: fc.tuple(slot, sometimes, fc.nat()).map((args) => new LoadCommand(...args)),
+        },
+        {
+          weight: 2,
+          arbitrary: fc.tuple(slot, sometimes, fc.nat()).map((args) => new AssignPilotCommand(...args)),
+        },
+        {
+          weight: 4,
+          arbitrary: fc
+            .tuple(slot, mostly, fc.nat(), sometimes, fc.nat())
+            .map((args) => new SuspendReasonCommand(...args)),
         },
       ),
     ],

@@ -59,6 +59,15 @@ export interface SlotFacts {
   pilotAnswerLb: number | null;
   reverifyCause: SlotView['reverifyCause'];
   suspendReason: string | null;
+  pilotId: number | null;
+  armState: SlotView['armState'];
+  fuelLb: number;
+  /** The stores in words. */
+  stores: string;
+  /** The planned gross weight. */
+  grossWeightLb: number;
+  /** The planned gross weight is built from fuel and stores set (not the figure typed in the air plan). */
+  loadBuilt: boolean;
 }
 
 export const slotFacts = (slot: SlotView): SlotFacts => ({
@@ -68,6 +77,12 @@ export const slotFacts = (slot: SlotView): SlotFacts => ({
   pilotAnswerLb: slot.pilotWeightAckAt === null ? null : slot.pilotWeightAckLb,
   reverifyCause: slot.reverifyCause,
   suspendReason: slot.suspendReason,
+  pilotId: slot.pilotId,
+  armState: slot.armState,
+  fuelLb: slot.fuelLb,
+  stores: slot.stores,
+  grossWeightLb: slot.grossWeightLb,
+  loadBuilt: slot.grossWeightParts !== null,
 });
 
 export const newModel = (snapshot: LineupSnapshot, people: readonly Person[] = []): LineupModel => ({
@@ -109,10 +124,12 @@ export interface Expected {
 }
 
 /** Expected answer: 200 with what it leaves, or the refusal status (and its code, where the model knows it). */
-export type Prediction = ({ status: 200 } & Expected) | { status: 400 | 403 | 409; code?: string };
+export type Prediction = ({ status: 200 } & Expected) | { status: RefusalStatus; code?: string };
+
+export type RefusalStatus = 400 | 403 | 409 | 422;
 
 /** A refusal with its code. */
-export const refusal = (status: 400 | 403 | 409, code: string): Prediction => ({ status, code });
+export const refusal = (status: RefusalStatus, code: string): Prediction => ({ status, code });
 
 /** A request and what the model says it must do; `token`: whose (by index), the command's handler unless told. */
 export interface Request {
@@ -189,7 +206,8 @@ export abstract class ModelCommand implements fc.AsyncCommand<LineupModel, Lineu
       throw new Error(`${answer}; the refused command changed the lineup`);
     }
     if (prediction.status === 200) {
-      for (const slotId of prediction.slots?.keys() ?? []) model.lastSteps.delete(slotId);
+      // A step can be undone until the slot's status changes otherwise (a record of arms or load leaves it).
+      for (const [slotId, facts] of prediction.slots ?? []) if (facts.status) model.lastSteps.delete(slotId);
       after?.(model, outcome);
     }
     model.snapshot = now;
@@ -293,11 +311,13 @@ export class MarkDownCommand extends ModelCommand {
       if (spare) lane.splice(lane.indexOf(slot.id), 1, spare.id);
       else lane.splice(lane.indexOf(slot.id), 1);
     }
-    return {
-      path,
-      body,
-      prediction: { status: 200 as const, lanes, slots: new Map([[slot.id, { status: 'down' as const }]]) },
-    };
+    const changed = new Map<number, Partial<SlotFacts>>([[slot.id, { status: 'down' }]]);
+    // The pilot walks to the spare, and neither has the new pilot's answer on the weight.
+    if (spare && slot.pilotId !== null) {
+      changed.set(slot.id, { status: 'down', pilotId: null, pilotAnswerLb: null });
+      changed.set(spare.id, { pilotId: slot.pilotId, pilotAnswerLb: null });
+    }
+    return { path, body, prediction: { status: 200 as const, lanes, slots: changed } };
   }
 
   override toString(): string {

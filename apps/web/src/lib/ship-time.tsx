@@ -1,5 +1,5 @@
 import { createContext, useContext, useMemo, type ReactNode } from 'react';
-import { DEFAULT_SHIP_TIME_ZONE, shipClock, shipDateTime, shipTime, shipTimeZone, zoneName } from '@catline/contracts';
+import { DEFAULT_SHIP_TIME_ZONE, shipClock, shipDateTime, shipTime, shipTimeZone } from '@catline/contracts';
 import { useShips } from './queries/ships-query.js';
 
 // Every time on screen is the ship's clock with its zone named, whatever zone the device is set to.
@@ -22,11 +22,9 @@ export function OwnShipTimeZone({ children }: { children: ReactNode }) {
   return <ShipTimeZone zone={only && shipTimeZone(only.profile)}>{children}</ShipTimeZone>;
 }
 
-export const useShipTimeZone = (): string => useContext(ZoneContext) ?? DEFAULT_SHIP_TIME_ZONE;
+const useShipTimeZone = (): string => useContext(ZoneContext) ?? DEFAULT_SHIP_TIME_ZONE;
 
 export interface ShipClock {
-  /** The zone's name as shown beside the times, e.g. "GMT+4". */
-  zone: string;
   /** "14:05:30 GMT+4". */
   clock: (instant: Date | string) => string;
   /** As `clock`, or a dash for none. */
@@ -39,7 +37,6 @@ export interface ShipClock {
 
 export function shipClockIn(timeZone: string): ShipClock {
   return {
-    zone: zoneName(timeZone),
     clock: (instant) => shipClock(instant, timeZone),
     optionalClock: (instant) => (instant ? shipClock(instant, timeZone) : '—'),
     time: (instant) => shipTime(instant, timeZone),

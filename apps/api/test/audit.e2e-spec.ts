@@ -144,7 +144,7 @@ describe('audit trail', () => {
       .split('\r\n')
       .filter((line) => !line.startsWith('# '));
     expect(lines[0]).toBe(
-      'id,at (UTC),actor id,actor e-mail,actor role,client address,action,subject type,subject id,ship id,summary,before,after',
+      'id,at,actor id,actor e-mail,actor role,client address,action,subject type,subject id,ship id,summary,before,after,time zone',
     );
     expect(lines.some((line) => line.includes(`,person.created,person,${person.id},`))).toBe(true);
     expect(

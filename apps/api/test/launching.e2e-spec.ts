@@ -62,7 +62,9 @@ describe('launching', () => {
     const warned = await startAs(AIR_BOSS, cycle);
     expect(warned.status).toBe(409);
     expect(warned.body.code).toBe('outside_window');
-    expect(warned.body.message).toMatch(/^The launch window is \d\d:\d\dZ to \d\d:\d\dZ; now, .* is before it opens\./);
+    expect(warned.body.message).toMatch(
+      /^The launch window is \d\d:\d\d UTC to \d\d:\d\d UTC; now, .* is before it opens\./,
+    );
     expect(await current(cycle)).toMatchObject({ state: 'planning', version: cycle.version });
 
     const confirmed = await startAs(AIR_BOSS, cycle, { confirmOutsideWindow: true });

@@ -36,6 +36,8 @@ const MINUTE = 60_000;
 const DAY = 86_400_000;
 const iso = (ms: number) => new Date(ms).toISOString();
 const utcDay = (ms: number) => iso(ms).slice(0, 10);
+/** An instant as the exports write it on the demo ship, which keeps UTC: to the second, offset +00:00. */
+const onDemoShip = (iso: string) => `${iso.slice(0, 19)}+00:00`;
 const seconds = (from: string, to: string) => (Date.parse(to) - Date.parse(from)) / 1000;
 
 // The launch record's note of the waiver: the gate in words, then the air boss's reason.
@@ -409,6 +411,7 @@ describe('cycle reports, exports and shot counts', () => {
         'afterburner',
         'waiver',
         'fired_by',
+        'time_zone',
       ]);
       expect(rows.map((row) => row.side_number)).toEqual(['C25', 'C26', 'D37', 'D38', 'C27', 'D39']);
       const row = (side: string) => rows.find((candidate) => candidate.side_number === side)!;
@@ -421,12 +424,13 @@ describe('cycle reports, exports and shot counts', () => {
         catapult: '1',
         position: '2',
         planned_catapult: '1',
-        planned_at: plannedAt,
-        launched_at: flown.launchedAt['C25'],
+        planned_at: onDemoShip(plannedAt),
+        launched_at: onDemoShip(flown.launchedAt['C25']),
         delta_s: String(seconds(plannedAt, flown.launchedAt['C25'])),
         in_window: 'false',
         spare: 'false',
         suspend_reason: '',
+        time_zone: 'UTC',
       });
       expect(row('D37')).toMatchObject({ gross_weight_lb: '51000', waiver_reason: WAIVER, in_window: 'true' });
       expect(row('D38')).toMatchObject({ status: 'down', catapult: '', replaced_by: 'C27' });
@@ -442,7 +446,7 @@ describe('cycle reports, exports and shot counts', () => {
         `attachment; filename="cycle-${flown.cycle.number}-changes.csv"`,
       );
       const { header, rows } = readCsv(response);
-      expect(header).toEqual(['version', 'at', 'kind', 'actor', 'actor_role', 'summary', 'command']);
+      expect(header).toEqual(['version', 'at', 'kind', 'actor', 'actor_role', 'summary', 'command', 'time_zone']);
       const log = (await get(`/api/cycles/${flown.cycle.id}/lineup/changes?since=0&limit=500`)).body.items as {
         version: number;
         kind: string;
@@ -450,7 +454,7 @@ describe('cycle reports, exports and shot counts', () => {
         at: string;
       }[];
       expect(rows.map((row) => [Number(row.version), row.kind, row.summary, row.at])).toEqual(
-        log.map((change) => [change.version, change.kind, change.summary, change.at]),
+        log.map((change) => [change.version, change.kind, change.summary, onDemoShip(change.at)]),
       );
       expect(rows[0]).toMatchObject({ kind: 'slot_added', actor: 'Priya Quennevar', actor_role: 'air_operations' });
       expect(JSON.parse(rows[0].command)).toMatchObject({ type: 'add_slot', aircraftId: expect.any(Number) });

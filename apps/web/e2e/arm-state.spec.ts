@@ -21,12 +21,12 @@ test('the catapult crew records the aircraft on the catapult safe, then armed, a
 
   const arming = station.getByRole('group', { name: 'Armed or safe: C21' });
   await arming.getByRole('button', { name: 'Record safe' }).click();
-  await expect(figures).toContainText(/Safe, \d\d:\d\d:\d\d by /);
+  await expect(figures).toContainText(/Safe, \d\d:\d\d:\d\d UTC by /);
   await expect(arming.getByRole('button', { name: 'Record safe' })).toHaveAttribute('aria-pressed', 'true');
   await expect(card(lane(board, 1), 'C21').getByTestId('arm-state')).toHaveText('Safe');
 
   await arming.getByRole('button', { name: 'Record armed' }).click();
-  await expect(figures).toContainText(/Armed, \d\d:\d\d:\d\d by /);
+  await expect(figures).toContainText(/Armed, \d\d:\d\d:\d\d UTC by /);
   await expect(card(lane(board, 1), 'C21').getByTestId('arm-state')).toHaveText('Armed');
 
   // The handler's card offers only the state not in force, in the station's words.
@@ -36,6 +36,6 @@ test('the catapult crew records the aircraft on the catapult safe, then armed, a
   expect((await recordSafe.boundingBox())?.height).toBeGreaterThanOrEqual(44);
   await recordSafe.click();
   await expect(card(lane(board, 1), 'C21').getByTestId('arm-state')).toHaveText('Safe');
-  await expect(figures).toContainText(/Safe, \d\d:\d\d:\d\d by /);
+  await expect(figures).toContainText(/Safe, \d\d:\d\d:\d\d UTC by /);
   await expect(arming.getByRole('button', { name: 'Record safe' })).toHaveAttribute('aria-pressed', 'true');
 });

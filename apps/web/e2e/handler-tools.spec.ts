@@ -35,7 +35,7 @@ test('the handler swaps in a spare, applies the suggested lineup and marks a cat
   const dialog = handler.getByRole('dialog');
   // What moves where, and what it gains, not just chains of side numbers.
   await expect(dialog.getByTestId('suggestion-lanes')).toContainText(/G43(, \w+)* join/);
-  await expect(dialog.getByTestId('suggestion-last-launch')).toContainText(/\d\d:\d\d:\d\d → \d\d:\d\d:\d\d/);
+  await expect(dialog.getByTestId('suggestion-last-launch')).toContainText(/\d\d:\d\d:\d\d UTC → \d\d:\d\d:\d\d UTC/);
   await expect(dialog.getByTestId('suggestion-window')).toContainText('Aircraft missing the window');
   await dialog.getByRole('button', { name: 'Apply suggestion' }).click();
   await expect(handler.getByTestId('notice')).toContainText('Suggested lineup applied');

@@ -1,18 +1,26 @@
-import { AUDIT_EXPORT_MAX_ROWS, type AuditEntryView, type Page } from '@catline/contracts';
+import {
+  AUDIT_EXPORT_MAX_ROWS,
+  DEFAULT_SHIP_TIME_ZONE,
+  shipIsoTime,
+  shipTimeZone,
+  type AuditEntryView,
+  type Page,
+} from '@catline/contracts';
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
-import { type DataSource, type SelectQueryBuilder } from 'typeorm';
+import { In, type DataSource, type SelectQueryBuilder } from 'typeorm';
 import { toCsv } from '../common/csv.js';
 import type { ShipScope } from '../common/ship-scope.js';
 import { pageOf } from '../common/paging/page-query.dto.js';
 import type { CsvFile } from '../common/csv-response.js';
 import { AuditEntry } from '../database/entities/audit-entry.entity.js';
+import { Ship } from '../database/entities/ship.entity.js';
 import { toAuditEntryView } from './audit-entry.mapper.js';
 import type { AuditFilterDto, AuditPageQueryDto } from './dto/audit-query.dto.js';
 
 const CSV_HEADER = [
   'id',
-  'at (UTC)',
+  'at',
   'actor id',
   'actor e-mail',
   'actor role',
@@ -24,6 +32,7 @@ const CSV_HEADER = [
   'summary',
   'before',
   'after',
+  'time zone',
 ];
 
 /** Reading the audit trail of the caller's ship (every ship's for a fleet admin): newest first, filtered, a page at a time or as a CSV file. */
@@ -38,9 +47,10 @@ export class AuditLog {
 
   async csv(scope: ShipScope, filter: AuditFilterDto): Promise<CsvFile> {
     const entries = await this.select(scope, filter).take(AUDIT_EXPORT_MAX_ROWS).getMany();
+    const zones = await this.shipZones(entries);
     const rows = entries.map((entry) => [
       entry.id,
-      entry.at.toISOString(),
+      shipIsoTime(entry.at, zones(entry.shipId)),
       entry.actorId,
       entry.actorEmail,
       entry.actorRole,
@@ -52,8 +62,17 @@ export class AuditLog {
       entry.summary,
       entry.before ? JSON.stringify(entry.before) : null,
       entry.after ? JSON.stringify(entry.after) : null,
+      zones(entry.shipId),
     ]);
     return { fileName: 'audit-trail.csv', content: toCsv(CSV_HEADER, rows) };
+  }
+
+  /** Each entry is told in its ship's zone; one that belongs to no ship (a fleet-wide change) in the default. */
+  private async shipZones(entries: AuditEntry[]): Promise<(shipId: number | null) => string> {
+    const ids = [...new Set(entries.flatMap((entry) => (entry.shipId === null ? [] : [entry.shipId])))];
+    const ships = ids.length ? await this.dataSource.manager.find(Ship, { where: { id: In(ids) } }) : [];
+    const zones = new Map(ships.map((ship) => [ship.id, shipTimeZone(ship.profile)]));
+    return (shipId) => (shipId === null ? undefined : zones.get(shipId)) ?? DEFAULT_SHIP_TIME_ZONE;
   }
 
   private select(scope: ShipScope, filter: AuditFilterDto): SelectQueryBuilder<AuditEntry> {

@@ -1,9 +1,4 @@
-import {
-  DEFAULT_SHIP_TIME_ZONE,
-  DEFAULT_WIND_READING_MAX_AGE_MIN,
-  type CycleView,
-  type ShipProfile,
-} from '@catline/contracts';
+import { DEFAULT_WIND_READING_MAX_AGE_MIN, shipTimeZone, type CycleView, type ShipProfile } from '@catline/contracts';
 import type { Cycle } from '../database/entities/cycle.entity.js';
 import { launchPrerequisitesOf } from './launch-prerequisites.js';
 
@@ -47,7 +42,7 @@ export function toCycleView(cycle: Cycle, profile: ShipProfile, counts: CycleCou
     windStaleAt: windStaleAt(cycle.windReadAt, profile).toISOString(),
     latitudeDeg: cycle.latitudeDeg,
     longitudeDeg: cycle.longitudeDeg,
-    timeZone: profile.timeZone ?? DEFAULT_SHIP_TIME_ZONE,
+    timeZone: shipTimeZone(profile),
     launchPrerequisites: launchPrerequisitesOf(cycle, profile),
   };
 }

@@ -1,4 +1,4 @@
-import { DEFAULT_SHIP_TIME_ZONE, type ChangeActor, type LineupCommandResult } from '@catline/contracts';
+import { shipTime, shipTimeZone, type ChangeActor, type LineupCommandResult } from '@catline/contracts';
 import { Injectable } from '@nestjs/common';
 import type { EntityManager } from 'typeorm';
 import { Aircraft } from '../database/entities/aircraft.entity.js';
@@ -13,7 +13,7 @@ import { LineupException } from '../cycle-changes/lineup.exception.js';
 import { launchPrerequisitesOf } from '../cycle-changes/launch-prerequisites.js';
 import { User } from '../database/entities/user.entity.js';
 import { CycleClosing } from './cycle-closing.service.js';
-import { checkStartInWindow, checkWindow, clock } from './cycle-window.js';
+import { checkStartInWindow, checkWindow } from './cycle-window.js';
 import { startLaunching } from './launching-rule.js';
 import { nightOf, windReading } from './cycle-sky.js';
 import { CyclesException } from './cycles.exception.js';
@@ -37,8 +37,9 @@ function describeWind(cycle: Cycle): string {
 }
 
 /** One short account of what changed in the conditions, e.g. "wind 250° 18 kt, case II". */
-function describeConditions(values: ConditionValues, cycle: Cycle): string {
+function describeConditions(values: ConditionValues, cycle: Cycle, timeZone: string): string {
   const merged = { ...cycle, ...values };
+  const clock = (instant: Date) => shipTime(instant, timeZone);
   const parts: string[] = [];
   const changed = (...keys: (keyof ConditionValues)[]) => keys.some((key) => key in values);
   if (changed('shipCourseDeg', 'shipSpeedKt')) parts.push(`ship ${merged.shipCourseDeg}° ${merged.shipSpeedKt} kt`);
@@ -122,7 +123,7 @@ export class CycleCommandsService {
     return this.changes.apply(cycleId, actor, 'conditions_changed', async (manager, state) => {
       this.basis.requireOpen(state);
       await this.basis.cycleAsSeen(manager, state, request.basisVersion);
-      const timeZone = state.ship.profile.timeZone ?? DEFAULT_SHIP_TIME_ZONE;
+      const timeZone = shipTimeZone(state.ship.profile);
       const values = changedConditions(request, state.cycle, timeZone, this.clock.now());
       if (Object.keys(values).length === 0) {
         throw new LineupException('no_change', 'The conditions already are as given; nothing changed.');
@@ -131,7 +132,7 @@ export class CycleCommandsService {
       await manager.update(Cycle, { id: cycleId }, values);
       const reverify = await this.reverifyFor(manager, state, values, actor);
       return {
-        summary: `Conditions: ${describeConditions(values, state.cycle)}${reverify}`,
+        summary: `Conditions: ${describeConditions(values, state.cycle, timeZone)}${reverify}`,
         command: { type: 'conditions', ...request },
       };
     });
@@ -168,7 +169,7 @@ export class CycleCommandsService {
         );
       }
       const now = this.clock.now();
-      checkStartInWindow(state.cycle, now, request.confirmOutsideWindow === true);
+      checkStartInWindow(state.cycle, now, request.confirmOutsideWindow === true, shipTimeZone(state.ship.profile));
       await startLaunching(manager, state.cycle);
       const inWindow = now >= state.cycle.windowStartAt && now <= state.cycle.windowEndAt;
       return {

@@ -1,3 +1,4 @@
+import { shipTimeZone } from '@catline/contracts';
 import { type EntityManager, In } from 'typeorm';
 import { CycleChange } from '../database/entities/cycle-change.entity.js';
 import { Slot } from '../database/entities/slot.entity.js';
@@ -46,6 +47,7 @@ function summaryInput(
     shipName: ship.name,
     hullCode: ship.hullCode,
     cycleNumber: cycle.number,
+    timeZone: shipTimeZone(ship.profile),
     plannedLaunchAt: cycle.plannedLaunchAt,
     windowStartAt: cycle.windowStartAt,
     windowEndAt: cycle.windowEndAt,

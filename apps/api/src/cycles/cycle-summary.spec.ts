@@ -1,4 +1,4 @@
-import { LAUNCH_CAUTION } from '@catline/contracts';
+import { LAUNCH_CAUTION, zoneName } from '@catline/contracts';
 import { composeCycleSummary, type CycleSummaryInput, type SummarySlot } from './cycle-summary.js';
 
 const at = (time: string) => new Date(`2026-05-04T${time}Z`);
@@ -20,6 +20,8 @@ const input: CycleSummaryInput = {
   shipName: 'Brindlemark',
   hullCode: 'DKT 3',
   cycleNumber: 7,
+  // +04:00 all year (IANA tz database, "Zone Asia/Dubai ... 4:00 - +04"): 14:00Z is 18:00 on board.
+  timeZone: 'Asia/Dubai',
   plannedLaunchAt: at('14:00:00'),
   windowStartAt: at('13:50:00'),
   windowEndAt: at('14:35:00'),
@@ -47,19 +49,21 @@ describe('composeCycleSummary', () => {
       email: 'cinderwrights@catline.example',
     });
     expect(mail.subject).toBe('Cycle 7 closed: Cinderwrights 2 of 4 launched');
+    // The zone's short name is Intl's to give ("GST" or "GMT+4"); the clock figures are worked by hand.
+    const zone = zoneName('Asia/Dubai');
     expect(mail.text.split('\n')).toEqual([
       'Cycle 7 of Brindlemark (DKT 3) is closed.',
-      'Planned launch 14:00Z (window 13:50Z to 14:35Z), case I, day.',
-      'Whole cycle: 3 of 5 aircraft launched, first at 14:00:20Z, last at 14:03:40Z.',
+      `Planned launch 2026-05-04 18:00 ${zone} (window 17:50 ${zone} to 18:35 ${zone}), case I, day.`,
+      `Whole cycle: 3 of 5 aircraft launched, first at 18:00:20 ${zone}, last at 18:03:40 ${zone}.`,
       '',
       'Cinderwrights (CWR): 2 of 4 launched',
-      '  C21  WKD-41  Strike training  Kit Marrowby    launched 14:01:05Z from cat 1',
+      `  C21  WKD-41  Strike training  Kit Marrowby    launched 18:01:05 ${zone} from cat 1`,
       '  C24  WKD-41  Strike training  no pilot named  down, replaced by C31',
-      '  C31  WKD-41  Spare            no pilot named  launched 14:03:40Z from cat 3',
+      `  C31  WKD-41  Spare            no pilot named  launched 18:03:40 ${zone} from cat 3`,
       '  C25  WKD-41  Strike training  no pilot named  not launched (scratched when the cycle closed)',
       '',
       'What happened to these aircraft:',
-      '  13:58:02Z  C24 down; spare C31 takes cat 3, place 2',
+      `  17:58:02 ${zone}  C24 down; spare C31 takes cat 3, place 2`,
       '',
       `Sent by Catline when the cycle closed. ${LAUNCH_CAUTION}`,
       '',

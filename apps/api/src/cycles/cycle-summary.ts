@@ -1,4 +1,11 @@
-import { LAUNCH_CAUTION, type SlotStatus, type WeatherCase } from '@catline/contracts';
+import {
+  LAUNCH_CAUTION,
+  shipClock,
+  shipDateTime,
+  shipTime,
+  type SlotStatus,
+  type WeatherCase,
+} from '@catline/contracts';
 
 // The summary a squadron receives when a cycle closes: its own aircraft line by line, the cycle's
 // totals, and what happened to its aircraft on the way (down, suspended, launched under a waiver).
@@ -35,6 +42,8 @@ export interface CycleSummaryInput {
   shipName: string;
   hullCode: string;
   cycleNumber: number;
+  /** The ship's zone (IANA name): every time of the summary is told in it, named. */
+  timeZone: string;
   plannedLaunchAt: Date;
   windowStartAt: Date;
   windowEndAt: Date;
@@ -49,13 +58,10 @@ export interface ComposedMail {
   text: string;
 }
 
-const hhmm = (at: Date) => `${at.toISOString().slice(11, 16)}Z`;
-const hhmmss = (at: Date) => `${at.toISOString().slice(11, 19)}Z`;
-
-function outcome(slot: SummarySlot): string {
+function outcome(slot: SummarySlot, timeZone: string): string {
   switch (slot.status) {
     case 'launched':
-      return `launched ${slot.launchedAt ? hhmmss(slot.launchedAt) : '(time not recorded)'} from cat ${slot.catapultNumber ?? '?'}`;
+      return `launched ${slot.launchedAt ? shipClock(slot.launchedAt, timeZone) : '(time not recorded)'} from cat ${slot.catapultNumber ?? '?'}`;
     case 'down':
       return slot.replacedBy ? `down, replaced by ${slot.replacedBy}` : 'down';
     default:
@@ -70,7 +76,7 @@ function cycleTotals(input: CycleSummaryInput): string {
   const times = launched.flatMap((slot) => (slot.launchedAt ? [slot.launchedAt.getTime()] : [])).sort((a, b) => a - b);
   const span =
     times.length > 0
-      ? `, first at ${hhmmss(new Date(times[0]))}, last at ${hhmmss(new Date(times[times.length - 1]))}`
+      ? `, first at ${shipClock(new Date(times[0]), input.timeZone)}, last at ${shipClock(new Date(times[times.length - 1]), input.timeZone)}`
       : '';
   return `Whole cycle: ${launched.length} of ${input.slots.length} aircraft launched${span}.`;
 }
@@ -89,11 +95,11 @@ export function composeCycleSummary(input: CycleSummaryInput, squadron: SummaryS
   ];
   const widths = columns.map(width);
   const line = (slot: SummarySlot) =>
-    `  ${columns.map((pick, i) => pick(slot).padEnd(widths[i])).join('  ')}  ${outcome(slot)}`;
+    `  ${columns.map((pick, i) => pick(slot).padEnd(widths[i])).join('  ')}  ${outcome(slot, input.timeZone)}`;
 
   const lines = [
     `Cycle ${input.cycleNumber} of ${input.shipName} (${input.hullCode}) is closed.`,
-    `Planned launch ${hhmm(input.plannedLaunchAt)} (window ${hhmm(input.windowStartAt)} to ${hhmm(input.windowEndAt)}), case ${input.weatherCase}, ${input.night ? 'night' : 'day'}.`,
+    `Planned launch ${shipDateTime(input.plannedLaunchAt, input.timeZone)} (window ${shipTime(input.windowStartAt, input.timeZone)} to ${shipTime(input.windowEndAt, input.timeZone)}), case ${input.weatherCase}, ${input.night ? 'night' : 'day'}.`,
     cycleTotals(input),
     '',
     `${squadron.name} (${squadron.code}): ${launchedOf(own).length} of ${own.length} launched`,
@@ -103,7 +109,7 @@ export function composeCycleSummary(input: CycleSummaryInput, squadron: SummaryS
     lines.push(
       '',
       'What happened to these aircraft:',
-      ...events.map((event) => `  ${hhmmss(event.at)}  ${event.summary}`),
+      ...events.map((event) => `  ${shipClock(event.at, input.timeZone)}  ${event.summary}`),
     );
   }
   lines.push('', `Sent by Catline when the cycle closed. ${LAUNCH_CAUTION}`);

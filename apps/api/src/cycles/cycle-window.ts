@@ -1,3 +1,4 @@
+import { shipTime } from '@catline/contracts';
 import { CyclesException } from './cycles.exception.js';
 
 export interface CycleTimes {
@@ -17,14 +18,12 @@ export function checkWindow(times: CycleTimes): void {
   }
 }
 
-/** An instant as the cycles' messages show it, e.g. "09:50Z". */
-export const clock = (instant: Date) => `${instant.toISOString().slice(11, 16)}Z`;
-
 /** Launching outside the window is allowed only once the air boss confirms it, having been warned. */
-export function checkStartInWindow(times: CycleTimes, now: Date, confirmed: boolean): void {
+export function checkStartInWindow(times: CycleTimes, now: Date, confirmed: boolean, timeZone: string): void {
   const early = now.getTime() < times.windowStartAt.getTime();
   const late = now.getTime() > times.windowEndAt.getTime();
   if (confirmed || (!early && !late)) return;
+  const clock = (instant: Date) => shipTime(instant, timeZone);
   const window = `${clock(times.windowStartAt)} to ${clock(times.windowEndAt)}`;
   throw new CyclesException(
     'outside_window',

@@ -1,10 +1,4 @@
-import {
-  DEFAULT_SHIP_TIME_ZONE,
-  type CycleLanding,
-  type CycleState,
-  type CycleView,
-  type Page,
-} from '@catline/contracts';
+import { shipTimeZone, type CycleLanding, type CycleState, type CycleView, type Page } from '@catline/contracts';
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { DataSource, In, Not } from 'typeorm';
@@ -96,11 +90,7 @@ export class CyclesService {
       throw new CyclesException('not_found', `Ship ${request.shipId} does not exist.`);
     const { latitudeDeg = null, longitudeDeg = null } = request;
     const position = { latitudeDeg, longitudeDeg };
-    const night = nightOf(
-      { ...request, ...times, ...position },
-      request.night,
-      ship.profile.timeZone ?? DEFAULT_SHIP_TIME_ZONE,
-    );
+    const night = nightOf({ ...request, ...times, ...position }, request.night, shipTimeZone(ship.profile));
     // The wind entered with a new cycle is its first reading, steady: its gust and lull are the wind itself.
     const spread = {
       windGustFromDeg: request.trueWindFromDeg,

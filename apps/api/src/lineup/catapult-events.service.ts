@@ -1,4 +1,11 @@
-import type { CatapultEventRequest, DownOnCatapultRequest, LineupCommandResult, SlotStatus } from '@catline/contracts';
+import {
+  shipClock,
+  shipTimeZone,
+  type CatapultEventRequest,
+  type DownOnCatapultRequest,
+  type LineupCommandResult,
+  type SlotStatus,
+} from '@catline/contracts';
 import { Injectable } from '@nestjs/common';
 import type { AuthenticatedUser } from '../common/authenticated-user.js';
 import { BasisChecks } from '../cycle-changes/basis-checks.service.js';
@@ -11,7 +18,6 @@ import { suspendOnStoppedCatapult, writeCatapultStatus } from './catapult-stop.j
 import { transition } from './readiness-facts.js';
 
 const label = (status: string) => status.replaceAll('_', ' ');
-const clock = (at: Date) => at.toISOString().slice(11, 19);
 
 /**
  * What goes wrong at the catapult, each an event of its own in the change log (who and when):
@@ -100,7 +106,7 @@ export class CatapultEventsService {
       }
       const suspended = await suspendOnStoppedCatapult(manager, state, catapult, user, now, 'suspected cold shot');
       return {
-        summary: `Suspected cold shot: ${side} from cat ${catapult.number} (launched ${clock(slot.launchedAt!)} UTC)${stopped}${suspended}`,
+        summary: `Suspected cold shot: ${side} from cat ${catapult.number} (launched ${shipClock(slot.launchedAt!, shipTimeZone(state.ship.profile))})${stopped}${suspended}`,
         command: { type: 'cold_shot', slotId, ...request },
         mirrored: true,
       };

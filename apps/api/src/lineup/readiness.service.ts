@@ -9,7 +9,7 @@ import type {
   UndoStepRequest,
   WeightAckRequest,
 } from '@catline/contracts';
-import { SUSPEND_REASON_LABELS } from '@catline/contracts';
+import { SUSPEND_REASON_LABELS, shipClock, shipTimeZone } from '@catline/contracts';
 import { afterburnerRequired, pounds, takeOffTrim, type ReadinessCommand } from '@catline/launch-math';
 import { Injectable } from '@nestjs/common';
 import type { EntityManager } from 'typeorm';
@@ -205,7 +205,7 @@ export class ReadinessService {
           if (original) return { repeatOf: original };
           throw new LineupException(
             'already_launched',
-            `${side} was launched at ${slot.launchedAt?.toISOString()}; this is a different launch request.`,
+            `${side} was launched at ${shipClock(slot.launchedAt!, shipTimeZone(state.ship.profile))}; this is a different launch request.`,
           );
         }
         await this.basis.slotAsSeen(manager, state, slot, request.slotVersion);

@@ -1,9 +1,18 @@
-import type { CycleReport, LaunchRecord } from '@catline/contracts';
+import { shipIsoTime, shipTimeZone, type CycleReport, type LaunchRecord } from '@catline/contracts';
 import type { CsvCell } from '../common/csv.js';
 import type { CycleChange } from '../database/entities/cycle-change.entity.js';
 import type { LineupState } from '../cycle-changes/lineup-state.js';
 
-// The columns of a cycle's CSV exports; README.md describes them.
+// The columns of a cycle's CSV exports; README.md describes them. Instants are in the ship's zone with
+// its offset, and the last column names the zone.
+
+/** Writes an instant (a date or an ISO 8601 string) as the ship's clock in ISO 8601; empty for none. */
+type ShipInstant = (instant: Date | string | null) => string | null;
+
+const shipInstant =
+  (timeZone: string): ShipInstant =>
+  (instant) =>
+    instant === null ? null : shipIsoTime(instant, timeZone);
 
 /** What was used with the shot, from the slot's launch record (empty unless launched). */
 const LAUNCH_RECORD_COLUMNS = [
@@ -29,7 +38,7 @@ const LAUNCH_RECORD_COLUMNS = [
   'fired_by',
 ] as const;
 
-function launchRecordCells(record: LaunchRecord | null): CsvCell[] {
+function launchRecordCells(record: LaunchRecord | null, iso: ShipInstant): CsvCell[] {
   if (!record) return LAUNCH_RECORD_COLUMNS.map(() => null);
   const wind = record.windReading;
   return [
@@ -41,7 +50,7 @@ function launchRecordCells(record: LaunchRecord | null): CsvCell[] {
     wind?.trueWindSpeedKt ?? null,
     wind?.shipCourseDeg ?? null,
     wind?.shipSpeedKt ?? null,
-    wind?.readAt ?? null,
+    iso(wind?.readAt ?? null),
     record.headwindKt,
     record.crosswindKt,
     record.crosswindSide,
@@ -84,17 +93,27 @@ export const SLOT_COLUMNS = [
   'down_at',
   'replaced_by',
   ...LAUNCH_RECORD_COLUMNS,
+  'time_zone',
 ] as const;
 
-export const CHANGE_COLUMNS = ['version', 'at', 'kind', 'actor', 'actor_role', 'summary', 'command'] as const;
-
-const iso = (instant: Date | null) => instant?.toISOString() ?? null;
+export const CHANGE_COLUMNS = [
+  'version',
+  'at',
+  'kind',
+  'actor',
+  'actor_role',
+  'summary',
+  'command',
+  'time_zone',
+] as const;
 
 /** One row per aircraft of the cycle, by slot id, with the report's planned time and verdicts. */
 export function slotRows(state: LineupState, report: CycleReport): CsvCell[][] {
   const lines = new Map(report.catapults.flatMap((catapult) => catapult.launches).map((line) => [line.slotId, line]));
   const numbers = new Map(state.catapults.map((catapult) => [catapult.id, catapult.number]));
   const sides = new Map(state.slots.map((slot) => [slot.id, slot.aircraft.sideNumber]));
+  const timeZone = shipTimeZone(state.ship.profile);
+  const iso = shipInstant(timeZone);
   return state.slots.map((slot) => {
     const line = lines.get(slot.id);
     return [
@@ -114,7 +133,7 @@ export function slotRows(state: LineupState, report: CycleReport): CsvCell[][] {
       slot.catapultId === null ? null : (numbers.get(slot.catapultId) ?? null),
       slot.position === null ? null : slot.position + 1,
       line?.plannedCatapultNumber ?? null,
-      line?.plannedAt ?? null,
+      iso(line?.plannedAt ?? null),
       iso(slot.launchedAt),
       line?.deltaS ?? null,
       line?.inWindow ?? null,
@@ -124,20 +143,22 @@ export function slotRows(state: LineupState, report: CycleReport): CsvCell[][] {
       slot.overrideReason,
       iso(slot.downAt),
       slot.replacedBySlotId === null ? null : (sides.get(slot.replacedBySlotId) ?? null),
-      ...launchRecordCells(slot.status === 'launched' ? slot.launchRecord : null),
+      ...launchRecordCells(slot.status === 'launched' ? slot.launchRecord : null, iso),
+      timeZone,
     ];
   });
 }
 
 /** One row per change, in version order; the command as the server accepted it, in JSON. */
-export function changeRows(rows: readonly CycleChange[]): CsvCell[][] {
+export function changeRows(rows: readonly CycleChange[], timeZone: string): CsvCell[][] {
   return rows.map((row) => [
     row.version,
-    row.at.toISOString(),
+    shipIsoTime(row.at, timeZone),
     row.kind,
     row.actorName,
     row.actorRole,
     row.summary,
     JSON.stringify(row.payload.command),
+    timeZone,
   ]);
 }

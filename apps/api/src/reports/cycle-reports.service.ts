@@ -1,4 +1,4 @@
-import type { CycleReplay, CycleReport } from '@catline/contracts';
+import { shipTimeZone, type CycleReplay, type CycleReport } from '@catline/contracts';
 import { Injectable } from '@nestjs/common';
 import { toCsv } from '../common/csv.js';
 import { toLineupChange } from '../cycle-changes/change.mapper.js';
@@ -38,6 +38,9 @@ export class CycleReportsService {
 
   async changesCsv(cycleId: number): Promise<CsvFile> {
     const { state, rows } = await this.reader.read(cycleId);
-    return { fileName: `cycle-${state.cycle.number}-changes.csv`, content: toCsv(CHANGE_COLUMNS, changeRows(rows)) };
+    return {
+      fileName: `cycle-${state.cycle.number}-changes.csv`,
+      content: toCsv(CHANGE_COLUMNS, changeRows(rows, shipTimeZone(state.ship.profile))),
+    };
   }
 }

@@ -4,6 +4,7 @@ import { NavLink, Outlet } from 'react-router-dom';
 import { LineupIcon } from '../components/icons.js';
 import { useSignOut } from '../features/auth/api/sign-out.js';
 import { useSessionUser } from '../lib/session-store.js';
+import { OwnShipTimeZone } from '../lib/ship-time.js';
 import { SCREENS_BY_ROLE } from './landing.js';
 import { ThemeSwitch } from './theme-switch.js';
 
@@ -71,7 +72,9 @@ export function AppShell() {
         </Flex>
       </Box>
       <Box as="main" flex="1" px={{ base: '2', md: '4' }} py="2" minW="0">
-        <Outlet />
+        <OwnShipTimeZone>
+          <Outlet />
+        </OwnShipTimeZone>
       </Box>
     </Flex>
   );

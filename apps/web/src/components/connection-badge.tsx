@@ -1,18 +1,19 @@
 import { Box, HStack, Text } from '@chakra-ui/react';
 import type { ConnectionState } from '../lib/live/connection-state.js';
-import { formatClock } from '../lib/format.js';
+import { useShipClock } from '../lib/ship-time.js';
 
 const looks = {
   connecting: { palette: 'gray', label: () => 'Connecting…' },
   live: { palette: 'go', label: () => 'Live' },
   reconnecting: { palette: 'caution', label: () => 'Reconnecting…' },
-  offline: { palette: 'nogo', label: (since: Date) => `Offline since ${formatClock(since)}` },
+  offline: { palette: 'nogo', label: (since: string) => `Offline since ${since}` },
 } as const;
 
 /** Shown on every live screen: whether what is on screen is still being kept up to date. */
 export function ConnectionBadge({ state }: { state: ConnectionState }) {
+  const { clock } = useShipClock();
   const look = looks[state.kind];
-  const label = look.label('since' in state ? state.since : new Date());
+  const label = look.label(clock('since' in state ? state.since : new Date()));
   return (
     <HStack
       role="status"

@@ -1,6 +1,5 @@
 import { NativeSelect } from '@chakra-ui/react';
-import type { CycleView } from '@catline/contracts';
-import { formatShortClock } from '../lib/format.js';
+import { shipTime, type CycleView } from '@catline/contracts';
 
 const stateWords = { planning: 'planning', executing: 'launching', closed: 'closed' } as const;
 
@@ -22,7 +21,7 @@ export function CyclePicker({
       >
         {cycles.map((cycle) => (
           <option key={cycle.id} value={cycle.id}>
-            Cycle {cycle.number} · {formatShortClock(cycle.plannedLaunchAt)} · {stateWords[cycle.state]}
+            Cycle {cycle.number} · {shipTime(cycle.plannedLaunchAt, cycle.timeZone)} · {stateWords[cycle.state]}
             {cycle.night ? ' · night' : ''}
           </option>
         ))}

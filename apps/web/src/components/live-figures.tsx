@@ -1,7 +1,7 @@
 import { createContext, useContext, type ReactNode } from 'react';
 import { chakra, Stack, Text } from '@chakra-ui/react';
 import type { Freshness } from '../lib/live/connection-state.js';
-import { formatClock } from '../lib/format.js';
+import { useShipClock } from '../lib/ship-time.js';
 
 const FreshnessContext = createContext<Freshness>({ live: true });
 
@@ -14,12 +14,13 @@ export const useFiguresLive = () => useContext(FreshnessContext).live;
  * so nobody acts on an old picture.
  */
 export function LiveFigures({ freshness, children }: { freshness: Freshness; children: ReactNode }) {
+  const { clock } = useShipClock();
   return (
     <FreshnessContext.Provider value={freshness}>
       <Stack gap="2" minW="0" data-testid="live-figures" data-live={String(freshness.live)}>
         {!freshness.live && (
           <Text role="status" fontWeight="700" color="fg.muted" data-testid="not-live">
-            Not live — last update {formatClock(freshness.lastUpdate)}
+            Not live — last update {clock(freshness.lastUpdate)}
           </Text>
         )}
         <chakra.fieldset

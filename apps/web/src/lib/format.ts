@@ -1,25 +1,5 @@
-const clock = new Intl.DateTimeFormat('en-GB', {
-  hour: '2-digit',
-  minute: '2-digit',
-  second: '2-digit',
-  hour12: false,
-});
-const shortClock = new Intl.DateTimeFormat('en-GB', { hour: '2-digit', minute: '2-digit', hour12: false });
-const dateTime = new Intl.DateTimeFormat('en-GB', {
-  day: '2-digit',
-  month: 'short',
-  hour: '2-digit',
-  minute: '2-digit',
-  hour12: false,
-});
 const whole = new Intl.NumberFormat('en-GB', { maximumFractionDigits: 0 });
 const oneDecimal = new Intl.NumberFormat('en-GB', { minimumFractionDigits: 1, maximumFractionDigits: 1 });
-
-/** hh:mm:ss in the device's time zone. */
-export const formatClock = (value: Date | string) => clock.format(new Date(value));
-export const formatShortClock = (value: Date | string) => shortClock.format(new Date(value));
-export const formatDateTime = (value: string) => dateTime.format(new Date(value));
-export const formatOptionalClock = (value: string | null) => (value ? formatClock(value) : '—');
 
 export const formatPounds = (lb: number) => `${whole.format(lb)} lb`;
 /** Figures the server could not work out (e.g. a weight outside the launch table) arrive as null. */

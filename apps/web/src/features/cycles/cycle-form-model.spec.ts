@@ -15,21 +15,23 @@ function validateCycleForm(values: CycleFormValues, withNumber: boolean): Record
   return Object.fromEntries((result.error?.issues ?? []).map((issue) => [issue.path.join('.'), issue.message]));
 }
 
-// vitest.config.ts pins the device's zone to UTC, so local inputs read as UTC here.
+// vitest.config.ts pins the device's zone to UTC; the form's times are the ship's clock all the same.
+// Asia/Dubai keeps +04:00 all year (IANA tz database, "Zone Asia/Dubai ... 4:00 - +04").
 const now = new Date('2026-12-02T09:12:34.000Z');
+const SHIP_ZONE = 'Asia/Dubai';
 
 describe('a new cycle', () => {
   it('is planned half an hour ahead, on the minute, with a window from 5 min before to 20 min after', () => {
-    const values = newCycleValues(now, 4);
+    const values = newCycleValues(SHIP_ZONE, now, 4);
     expect(values.number).toBe('4');
-    expect(values.plannedLaunchAt).toBe('2026-12-02T09:42');
-    expect(values.windowStartAt).toBe('2026-12-02T09:37');
-    expect(values.windowEndAt).toBe('2026-12-02T10:02');
+    expect(values.plannedLaunchAt).toBe('2026-12-02T13:42');
+    expect(values.windowStartAt).toBe('2026-12-02T13:37');
+    expect(values.windowEndAt).toBe('2026-12-02T14:02');
     expect(validateCycleForm(values, true)).toEqual({});
   });
 
-  it('becomes a create request with numbers and UTC instants', () => {
-    expect(toCreateRequest(newCycleValues(now, 4), 2)).toEqual({
+  it("becomes a create request with numbers and UTC instants, the times read on the ship's clock", () => {
+    expect(toCreateRequest(newCycleValues(SHIP_ZONE, now, 4), 2, SHIP_ZONE)).toEqual({
       shipId: 2,
       number: 4,
       plannedLaunchAt: '2026-12-02T09:42:00.000Z',
@@ -106,7 +108,7 @@ describe('editing a cycle', () => {
       respot: _respot,
       ...conditions
     } = cycle;
-    expect(toConditionsRequest(valuesFromCycle(cycle), cycle.version)).toEqual({ ...conditions, basisVersion: 5 });
+    expect(toConditionsRequest(valuesFromCycle(cycle), cycle)).toEqual({ ...conditions, basisVersion: 5 });
   });
 
   it('sends a wind read across the deck, with its gust and lull, in place of the true wind', () => {
@@ -118,7 +120,7 @@ describe('editing a cycle', () => {
       windGustKt: '36',
       windLullKt: '27',
     };
-    const request = toConditionsRequest(values, cycle.version);
+    const request = toConditionsRequest(values, cycle);
     expect(request).toMatchObject({
       relativeWindBearingDeg: -12,
       relativeWindSpeedKt: 31,
@@ -151,7 +153,7 @@ describe('editing a cycle', () => {
 });
 
 describe('validateCycleForm', () => {
-  const valid = newCycleValues(now, 1);
+  const valid = newCycleValues(SHIP_ZONE, now, 1);
 
   it("asks for a whole cycle number within the server's range", () => {
     const message = 'Enter the cycle number, a whole number from 1 to 9,999.';
@@ -193,7 +195,7 @@ describe('validateCycleForm', () => {
   });
 
   it('wants the window to open no later than the planned launch and close after it', () => {
-    expect(validateCycleForm({ ...valid, windowStartAt: '2026-12-02T09:43' }, true)).toEqual({
+    expect(validateCycleForm({ ...valid, windowStartAt: '2026-12-02T13:43' }, true)).toEqual({
       windowStartAt: 'The window must open before the planned launch.',
     });
     expect(validateCycleForm({ ...valid, windowStartAt: valid.plannedLaunchAt }, true)).toEqual({});

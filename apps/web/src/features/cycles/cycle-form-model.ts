@@ -2,6 +2,8 @@ import {
   CONDITION_RANGES,
   type CreateCycleRequest,
   CYCLE_NUMBER,
+  fromShipLocalInput,
+  shipLocalInput,
   type CycleConditions,
   type CycleView,
   type UpdateCycleConditionsRequest,
@@ -11,15 +13,8 @@ import * as z from 'zod/mini';
 import { formatWhole } from '../../lib/format.js';
 import { numberText, optionalNumberText } from '../../lib/form-rules.js';
 
-const pad = (n: number) => String(n).padStart(2, '0');
-
-/** `datetime-local` works in the device's local time without a zone. */
-export function toLocalInput(iso: string): string {
-  const date = new Date(iso);
-  return `${date.getFullYear()}-${pad(date.getMonth() + 1)}-${pad(date.getDate())}T${pad(date.getHours())}:${pad(date.getMinutes())}`;
-}
-
-const fromLocalInput = (value: string) => new Date(value).toISOString();
+// A `datetime-local` field holds a date and time without a zone: the form fills and reads it on the
+// ship's clock, whatever zone the device is set to.
 
 /** How the wind is entered: the true wind, or the wind across the deck (a conditions change only). */
 export const WIND_FRAMES = ['true', 'relative'] as const;
@@ -33,14 +28,14 @@ const trueWindEntry = {
   windLullKt: '',
 } as const;
 
-export function newCycleValues(now = new Date(), nextNumber = 1): CycleFormValues {
+export function newCycleValues(timeZone: string, now = new Date(), nextNumber = 1): CycleFormValues {
   const planned = new Date(now.getTime() + 30 * 60_000);
   planned.setSeconds(0, 0);
   return {
     number: String(nextNumber),
-    plannedLaunchAt: toLocalInput(planned.toISOString()),
-    windowStartAt: toLocalInput(new Date(planned.getTime() - 5 * 60_000).toISOString()),
-    windowEndAt: toLocalInput(new Date(planned.getTime() + 20 * 60_000).toISOString()),
+    plannedLaunchAt: shipLocalInput(planned, timeZone),
+    windowStartAt: shipLocalInput(new Date(planned.getTime() - 5 * 60_000), timeZone),
+    windowEndAt: shipLocalInput(new Date(planned.getTime() + 20 * 60_000), timeZone),
     shipCourseDeg: '0',
     shipSpeedKt: '20',
     trueWindFromDeg: '0',
@@ -56,9 +51,9 @@ export function newCycleValues(now = new Date(), nextNumber = 1): CycleFormValue
 export function valuesFromCycle(cycle: CycleView): CycleFormValues {
   return {
     number: String(cycle.number),
-    plannedLaunchAt: toLocalInput(cycle.plannedLaunchAt),
-    windowStartAt: toLocalInput(cycle.windowStartAt),
-    windowEndAt: toLocalInput(cycle.windowEndAt),
+    plannedLaunchAt: shipLocalInput(cycle.plannedLaunchAt, cycle.timeZone),
+    windowStartAt: shipLocalInput(cycle.windowStartAt, cycle.timeZone),
+    windowEndAt: shipLocalInput(cycle.windowEndAt, cycle.timeZone),
     shipCourseDeg: String(cycle.shipCourseDeg),
     shipSpeedKt: String(cycle.shipSpeedKt),
     trueWindFromDeg: String(cycle.trueWindFromDeg),
@@ -168,11 +163,13 @@ export type CycleFormValues = z.infer<ReturnType<typeof cycleFormSchema>>;
 
 function conditionsOf(
   values: CycleFormValues,
+  timeZone: string,
 ): CycleConditions & Pick<CreateCycleRequest, 'plannedLaunchAt' | 'windowStartAt' | 'windowEndAt'> {
+  const instant = (local: string) => fromShipLocalInput(local, timeZone).toISOString();
   return {
-    plannedLaunchAt: fromLocalInput(values.plannedLaunchAt),
-    windowStartAt: fromLocalInput(values.windowStartAt),
-    windowEndAt: fromLocalInput(values.windowEndAt),
+    plannedLaunchAt: instant(values.plannedLaunchAt),
+    windowStartAt: instant(values.windowStartAt),
+    windowEndAt: instant(values.windowEndAt),
     shipCourseDeg: Number(values.shipCourseDeg),
     shipSpeedKt: Number(values.shipSpeedKt),
     trueWindFromDeg: Number(values.trueWindFromDeg),
@@ -184,8 +181,8 @@ function conditionsOf(
   };
 }
 
-export const toCreateRequest = (values: CycleFormValues, shipId: number): CreateCycleRequest => ({
-  ...conditionsOf(values),
+export const toCreateRequest = (values: CycleFormValues, shipId: number, timeZone: string): CreateCycleRequest => ({
+  ...conditionsOf(values, timeZone),
   shipId,
   number: Number(values.number),
 });
@@ -209,7 +206,10 @@ function windReadingOf(values: CycleFormValues): WindReadingRequest {
   return reading;
 }
 
-export function toConditionsRequest(values: CycleFormValues, basisVersion: number): UpdateCycleConditionsRequest {
-  const { trueWindFromDeg: _from, trueWindSpeedKt: _speed, ...rest } = conditionsOf(values);
-  return { ...rest, ...windReadingOf(values), basisVersion };
+export function toConditionsRequest(
+  values: CycleFormValues,
+  cycle: Pick<CycleView, 'version' | 'timeZone'>,
+): UpdateCycleConditionsRequest {
+  const { trueWindFromDeg: _from, trueWindSpeedKt: _speed, ...rest } = conditionsOf(values, cycle.timeZone);
+  return { ...rest, ...windReadingOf(values), basisVersion: cycle.version };
 }

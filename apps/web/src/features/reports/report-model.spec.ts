@@ -1,4 +1,10 @@
-import type { CatapultTimeline, CycleReport, CycleView, ReportLaunch } from '@catline/contracts';
+import {
+  zoneName,
+  type CatapultTimeline,
+  type CycleReport,
+  type CycleView,
+  type ReportLaunch,
+} from '@catline/contracts';
 import { describe, expect, it } from 'vitest';
 import { formatDelta, formatDuration, pickReportCycle, timelinePoints, timelineSummary } from './report-model.js';
 
@@ -91,7 +97,8 @@ function report(catapults: CatapultTimeline[]): CycleReport {
     scratched: 0,
   };
   return {
-    cycle: cycle(1, '2026-12-02T10:00:00.000Z', 'closed'),
+    // A ship on +04:00 all year (IANA tz database, "Zone Asia/Dubai ... 4:00 - +04"): 10:00Z is 14:00 on board.
+    cycle: { ...cycle(1, '2026-12-02T10:00:00.000Z', 'closed'), timeZone: 'Asia/Dubai' },
     plannedBasis: 'cycle_start',
     plannedAtVersion: 3,
     startedAt: null,
@@ -164,10 +171,11 @@ describe('the timeline', () => {
 
   it('marks planned and actual launches with a label each', () => {
     const { planned, actual } = timelinePoints(report([cat1, cat2]));
+    const zone = zoneName('Asia/Dubai');
     expect(planned.map((point) => point.label)).toEqual([
-      'C21 planned 10:00:00 on cat 1',
-      'C22 planned 10:01:00 on cat 1',
-      'C23 planned 10:02:00 on cat 1',
+      `C21 planned 14:00:00 ${zone} on cat 1`,
+      `C22 planned 14:01:00 ${zone} on cat 1`,
+      `C23 planned 14:02:00 ${zone} on cat 1`,
     ]);
     expect(actual.map((point) => [point.slotId, point.time])).toEqual([
       [1, Date.parse('2026-12-02T10:00:12.000Z')],
@@ -177,8 +185,9 @@ describe('the timeline', () => {
   });
 
   it('summarises each catapult with its launches, their span and the mean delta', () => {
+    const zone = zoneName('Asia/Dubai');
     expect(timelineSummary(report([cat1, cat2, catapult(3, [])]))).toBe(
-      'Cat 1: 2 of 3 launched, from 10:00:12 to 10:00:58, on average +5.0 s against the plan. Cat 2: 1 of 1 launched, from 10:03:00 to 10:03:00.',
+      `Cat 1: 2 of 3 launched, from 14:00:12 ${zone} to 14:00:58 ${zone}, on average +5.0 s against the plan. Cat 2: 1 of 1 launched, from 14:03:00 ${zone} to 14:03:00 ${zone}.`,
     );
   });
 

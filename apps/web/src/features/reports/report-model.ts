@@ -1,5 +1,4 @@
-import type { CycleReport, CycleView, ReportLaunch } from '@catline/contracts';
-import { formatClock } from '../../lib/format.js';
+import { shipClock, type CycleReport, type CycleView, type ReportLaunch } from '@catline/contracts';
 
 /** The cycle a report screen opens on: the one asked for, else the latest closed, else the latest. */
 export function pickReportCycle(cycles: CycleView[], chosen: number | null): CycleView | undefined {
@@ -30,7 +29,7 @@ export function timelinePoints(report: CycleReport): { planned: TimelinePoint[];
     side: launch.sideNumber,
     catapult: launch.catapultNumber,
     time: Date.parse(at),
-    label: `${launch.sideNumber} ${what} ${formatClock(at)} on cat ${launch.catapultNumber}`,
+    label: `${launch.sideNumber} ${what} ${shipClock(at, report.cycle.timeZone)} on cat ${launch.catapultNumber}`,
   });
   return {
     planned: launches.flatMap((launch) => (launch.plannedAt ? [point(launch, launch.plannedAt, 'planned')] : [])),
@@ -65,7 +64,7 @@ export function timelineSummary(report: CycleReport): string {
       const mean = deltas.length > 0 ? deltas.reduce((sum, value) => sum + value, 0) / deltas.length : null;
       const span =
         launched.length > 0
-          ? `, from ${formatClock(launched[0].launchedAt!)} to ${formatClock(launched.at(-1)!.launchedAt!)}`
+          ? `, from ${shipClock(launched[0].launchedAt!, report.cycle.timeZone)} to ${shipClock(launched.at(-1)!.launchedAt!, report.cycle.timeZone)}`
           : '';
       const against = mean === null ? '' : `, on average ${formatDelta(mean)} against the plan`;
       return `Cat ${catapult.number}: ${launched.length} of ${catapult.launches.length} launched${span}${against}.`;

@@ -1,12 +1,22 @@
 import { useState } from 'react';
 import { Box, Button, Code, HStack, Input, Stack, Table, Text } from '@chakra-ui/react';
-import { AUDIT_ACTIONS, PAGE_SIZE, type AuditAction, type AuditEntryView } from '@catline/contracts';
+import {
+  AUDIT_ACTIONS,
+  DEFAULT_SHIP_TIME_ZONE,
+  PAGE_SIZE,
+  shipClock,
+  shipIsoTime,
+  shipTimeZone,
+  type AuditAction,
+  type AuditEntryView,
+} from '@catline/contracts';
 import { FormField } from '../../../components/form-field.js';
 import { PageHeader } from '../../../components/page-header.js';
 import { Pager } from '../../../components/pager.js';
 import { EmptyState, QueryView } from '../../../components/query-states.js';
 import { SelectInput } from '../../../components/select-field.js';
 import { errorMessage } from '../../../lib/api-error.js';
+import { useShips } from '../../../lib/queries/ships-query.js';
 import { useFileDownload } from '../../../lib/use-file-download.js';
 import { type AuditFilter, auditExportPath, useAuditEntries } from '../api/get-audit-entries.js';
 import { TableScroll } from '../../../components/table-scroll.js';
@@ -44,12 +54,26 @@ function ExportButton({ filter }: { filter: AuditFilter }) {
   );
 }
 
+/**
+ * When an entry was made, on its ship's clock with the zone named; an entry of no ship (a fleet-wide
+ * change) or of a ship not listed in UTC, named as such.
+ */
+function useEntryTime(): (entry: AuditEntryView) => string {
+  const ships = useShips();
+  const zones = new Map(ships.data?.map((ship) => [ship.id, shipTimeZone(ship.profile)]));
+  return (entry) => {
+    const zone = (entry.shipId !== null && zones.get(entry.shipId)) || DEFAULT_SHIP_TIME_ZONE;
+    return `${shipIsoTime(entry.at, zone).slice(0, 10)} ${shipClock(entry.at, zone)}`;
+  };
+}
+
 /** The admin's record of who changed what: newest first, a page at a time, filtered by action and person. */
 export function AuditScreen() {
   const [filter, setFilter] = useState<AuditFilter>({ action: '', actor: '' });
   const [offset, setOffset] = useState(0);
   const limit = PAGE_SIZE.default;
   const entries = useAuditEntries({ ...filter, limit, offset });
+  const entryTime = useEntryTime();
   const change = (next: Partial<AuditFilter>) => {
     setFilter((current) => ({ ...current, ...next }));
     setOffset(0);
@@ -92,7 +116,7 @@ export function AuditScreen() {
                   <Table.Caption srOnly>Audit trail</Table.Caption>
                   <Table.Header>
                     <Table.Row bg="bg.muted">
-                      <Table.ColumnHeader>When (UTC)</Table.ColumnHeader>
+                      <Table.ColumnHeader>When (ship's time)</Table.ColumnHeader>
                       <Table.ColumnHeader>Who</Table.ColumnHeader>
                       <Table.ColumnHeader>Action</Table.ColumnHeader>
                       <Table.ColumnHeader>What</Table.ColumnHeader>
@@ -103,7 +127,7 @@ export function AuditScreen() {
                     {page.items.map((entry) => (
                       <Table.Row key={entry.id} data-testid="audit-entry">
                         <Table.Cell whiteSpace="nowrap" textStyle="figure">
-                          {entry.at.slice(0, 19).replace('T', ' ')}
+                          {entryTime(entry)}
                         </Table.Cell>
                         <Table.Cell>
                           {entry.actorEmail ?? 'system'}

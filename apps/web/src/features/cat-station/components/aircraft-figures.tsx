@@ -2,22 +2,24 @@ import { Box, SimpleGrid, Stack, Text } from '@chakra-ui/react';
 import type { SlotView } from '@catline/contracts';
 import { FigureStat } from '../../../components/figure-stat.js';
 import { GrossWeightParts, storesLines } from '../../../components/gross-weight-parts.js';
-import { formatClock, formatKnots, formatPounds, formatSignedKnots } from '../../../lib/format.js';
+import { formatKnots, formatPounds, formatSignedKnots } from '../../../lib/format.js';
+import { useShipClock, type ShipClock } from '../../../lib/ship-time.js';
 import { excessTone, marginTone } from '../../../lib/figure-tones.js';
 import { crossCheckWarning } from '../launch-setting-model.js';
 
-function agreement(at: string | null) {
-  return at ? `Yes, ${formatClock(at)}` : 'Not yet';
+function agreement(at: string | null, clock: ShipClock['clock']) {
+  return at ? `Yes, ${clock(at)}` : 'Not yet';
 }
 
 /** Armed or safe with who recorded it and when; "Not recorded" until the crew does. */
-function armState({ armState: state, armStateAt: at, armStateBy: by }: SlotView) {
+function armState({ armState: state, armStateAt: at, armStateBy: by }: SlotView, clock: ShipClock['clock']) {
   if (!state || !at) return 'Not recorded';
-  return `${state === 'armed' ? 'Armed' : 'Safe'}, ${formatClock(at)} by ${by ?? 'the crew'}`;
+  return `${state === 'armed' ? 'Armed' : 'Safe'}, ${clock(at)} by ${by ?? 'the crew'}`;
 }
 
 /** The launch figures of the aircraft on the catapult, large enough for a glance from the deck edge. */
 export function AircraftFigures({ slot }: { slot: SlotView }) {
+  const { clock } = useShipClock();
   const figures = slot.figures;
   const warning = figures && crossCheckWarning(figures);
   // Once agreed, the setting, trim and afterburner rest on the agreed figure: the weight beside them is that one.
@@ -32,13 +34,13 @@ export function AircraftFigures({ slot }: { slot: SlotView }) {
         />
         <FigureStat
           label="Agreed by pilot"
-          value={agreement(slot.pilotWeightAckAt)}
+          value={agreement(slot.pilotWeightAckAt, clock)}
           tone={slot.pilotWeightAckAt ? 'go' : 'caution'}
           size="md"
         />
         <FigureStat
           label="Agreed by me"
-          value={agreement(slot.catapultWeightAckAt)}
+          value={agreement(slot.catapultWeightAckAt, clock)}
           tone={slot.catapultWeightAckAt ? 'go' : 'caution'}
           size="md"
         />
@@ -77,7 +79,7 @@ export function AircraftFigures({ slot }: { slot: SlotView }) {
         />
         <FigureStat
           label="Armed or safe"
-          value={armState(slot)}
+          value={armState(slot, clock)}
           tone={slot.armState === 'armed' ? 'caution' : undefined}
           size="md"
         />

@@ -12,7 +12,7 @@ import { EmptyState, ErrorState, LoadingState, QueryView } from '../../../compon
 import { NoticeBanner, refusalNotice, useNotice } from '../../../components/refusal-notice.js';
 import { SlotStatusBadge } from '../../../components/slot-status-badge.js';
 import { SuspendControls } from '../../../components/suspend-controls.js';
-import { formatOptionalClock } from '../../../lib/format.js';
+import { ShipTimeZone, useShipClock } from '../../../lib/ship-time.js';
 import { useSetArmState } from '../../../lib/live/set-arm-state.js';
 import { useLiveCycle } from '../../../lib/live/use-live-cycle.js';
 import { useViewedCycle } from '../../../lib/queries/use-viewed-cycle.js';
@@ -42,6 +42,7 @@ import { StationBanner } from './station-banner.js';
 import { DeckStatusLine } from '../../../components/deck-status-line.js';
 
 function Station({ snapshot, catapultId }: { snapshot: LineupSnapshot; catapultId: number }) {
+  const { optionalClock } = useShipClock();
   const cycleId = snapshot.cycle.id;
   const queue = catapultQueue(snapshot, catapultId);
   const current = queue?.current;
@@ -141,8 +142,7 @@ function Station({ snapshot, catapultId }: { snapshot: LineupSnapshot; catapultI
                   {current.typeDesignation} · {current.squadronCode}
                 </Text>
                 <Text fontSize="sm" color="fg.muted">
-                  {current.pilotName ?? 'No pilot assigned'} · projected{' '}
-                  {formatOptionalClock(current.projectedLaunchAt)}
+                  {current.pilotName ?? 'No pilot assigned'} · projected {optionalClock(current.projectedLaunchAt)}
                   {current.timing && (
                     <>
                       {' · '}
@@ -242,43 +242,45 @@ export function CatStationScreen() {
   const lane = snapshot?.lanes.find((candidate) => candidate.catapultId === user.catapultId);
 
   return (
-    <Stack gap="3">
-      <PageHeader
-        title={lane ? `Cat station · Cat ${lane.number}` : 'Cat station'}
-        subtitle={lane && `${lane.position} catapult${cycle ? ` · cycle ${cycle.number}` : ''}`}
-      >
-        {cycle && <ConnectionBadge state={live.connection} />}
-        {cycles.data && cycles.data.length > 1 && (
-          <CyclePicker cycles={cycles.data} value={cycle?.id} onChange={choose} />
-        )}
-      </PageHeader>
-      <ClosedCycleNotice cycle={snapshot?.cycle ?? cycle} />
-      <StaleWindNotice cycle={snapshot?.cycle ?? cycle} />
-      {user.catapultId === null ? (
-        <EmptyState title="No catapult assigned to you">
-          The admin assigns each catapult officer a catapult under People.
-        </EmptyState>
-      ) : finding ? (
-        <LoadingState label="Finding the current cycle…" />
-      ) : cycles.isError ? (
-        <ErrorState error={cycles.error} onRetry={() => void cycles.refetch()} />
-      ) : !cycle ? (
-        <EmptyState title="No cycle yet">
-          Your catapult's aircraft appear here once air operations creates a cycle.
-        </EmptyState>
-      ) : live.refusal ? (
-        <ErrorState title="This cycle cannot be followed live" error={new Error(live.refusal)} />
-      ) : (
-        <QueryView query={live.lineup} loadingLabel="Loading your catapult…">
-          {(data) => (
-            <LiveFigures freshness={live.freshness}>
-              <Station key={data.cycle.id} snapshot={data} catapultId={user.catapultId!} />
-            </LiveFigures>
+    <ShipTimeZone zone={(snapshot?.cycle ?? cycle)?.timeZone}>
+      <Stack gap="3">
+        <PageHeader
+          title={lane ? `Cat station · Cat ${lane.number}` : 'Cat station'}
+          subtitle={lane && `${lane.position} catapult${cycle ? ` · cycle ${cycle.number}` : ''}`}
+        >
+          {cycle && <ConnectionBadge state={live.connection} />}
+          {cycles.data && cycles.data.length > 1 && (
+            <CyclePicker cycles={cycles.data} value={cycle?.id} onChange={choose} />
           )}
-        </QueryView>
-      )}
-      {/* Pinned to the foot of the tablet's screen: the figures scroll, the caution stays in view. */}
-      <CautionLine pinned />
-    </Stack>
+        </PageHeader>
+        <ClosedCycleNotice cycle={snapshot?.cycle ?? cycle} />
+        <StaleWindNotice cycle={snapshot?.cycle ?? cycle} />
+        {user.catapultId === null ? (
+          <EmptyState title="No catapult assigned to you">
+            The admin assigns each catapult officer a catapult under People.
+          </EmptyState>
+        ) : finding ? (
+          <LoadingState label="Finding the current cycle…" />
+        ) : cycles.isError ? (
+          <ErrorState error={cycles.error} onRetry={() => void cycles.refetch()} />
+        ) : !cycle ? (
+          <EmptyState title="No cycle yet">
+            Your catapult's aircraft appear here once air operations creates a cycle.
+          </EmptyState>
+        ) : live.refusal ? (
+          <ErrorState title="This cycle cannot be followed live" error={new Error(live.refusal)} />
+        ) : (
+          <QueryView query={live.lineup} loadingLabel="Loading your catapult…">
+            {(data) => (
+              <LiveFigures freshness={live.freshness}>
+                <Station key={data.cycle.id} snapshot={data} catapultId={user.catapultId!} />
+              </LiveFigures>
+            )}
+          </QueryView>
+        )}
+        {/* Pinned to the foot of the tablet's screen: the figures scroll, the caution stays in view. */}
+        <CautionLine pinned />
+      </Stack>
+    </ShipTimeZone>
   );
 }

@@ -2,7 +2,8 @@ import { Box, Button, Flex, Stack, Text } from '@chakra-ui/react';
 import type { SlotView } from '@catline/contracts';
 import { LaunchTiming } from '../../../components/launch-timing.js';
 import { SlotStatusBadge } from '../../../components/slot-status-badge.js';
-import { formatOptionalClock, formatPounds } from '../../../lib/format.js';
+import { formatPounds } from '../../../lib/format.js';
+import { useShipClock } from '../../../lib/ship-time.js';
 
 interface NextUpProps {
   slots: SlotView[];
@@ -12,6 +13,7 @@ interface NextUpProps {
 }
 
 export function NextUp({ slots, pending, onTaxi }: NextUpProps) {
+  const { optionalClock } = useShipClock();
   return (
     <Stack as="section" aria-label="Next on this catapult" gap="2" data-testid="next-up">
       <Text fontWeight="700">Next on this catapult</Text>
@@ -30,7 +32,7 @@ export function NextUp({ slots, pending, onTaxi }: NextUpProps) {
           <Text fontSize="sm" color="fg.muted" textStyle="figure">
             {formatPounds(slot.grossWeightLb)} ·{' '}
             {slot.pilotWeightAckAt ? 'pilot answered the weight' : 'pilot has not answered the weight'} · projected{' '}
-            {formatOptionalClock(slot.projectedLaunchAt)}
+            {optionalClock(slot.projectedLaunchAt)}
             {slot.timing && (
               <>
                 {' · '}

@@ -1,5 +1,5 @@
 import { Alert, Button, HStack, Input, SimpleGrid, Stack } from '@chakra-ui/react';
-import { WEATHER_CASES } from '@catline/contracts';
+import { WEATHER_CASES, zoneName } from '@catline/contracts';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm, useWatch } from 'react-hook-form';
 import { CheckControl, SelectControl } from '../../../components/form-controls.js';
@@ -12,6 +12,8 @@ interface CycleFormProps {
   initial: CycleFormValues;
   /** Only a new cycle takes a number; conditions edits keep it. */
   withNumber: boolean;
+  /** The ship's zone: the times are typed on its clock, and the labels name it. */
+  timeZone: string;
   submitLabel: string;
   pending: boolean;
   serverError: string | null;
@@ -50,6 +52,7 @@ const WIND_FRAME_CHOICES = [
 export function CycleForm({
   initial,
   withNumber,
+  timeZone,
   submitLabel,
   pending,
   serverError,
@@ -71,6 +74,7 @@ export function CycleForm({
     ...(withNumber ? [] : gustFields),
     ...airFields,
   ];
+  const zone = zoneName(timeZone);
 
   return (
     <form onSubmit={handleSubmit(onSubmit)} noValidate aria-label={submitLabel}>
@@ -87,13 +91,13 @@ export function CycleForm({
               <Input inputMode="numeric" {...register('number')} disabled={readOnly} />
             </FormField>
           )}
-          <FormField label="Window opens" error={errors.windowStartAt?.message} required>
+          <FormField label={`Window opens (${zone})`} error={errors.windowStartAt?.message} required>
             <Input type="datetime-local" {...register('windowStartAt')} disabled={readOnly} />
           </FormField>
-          <FormField label="Planned first launch" error={errors.plannedLaunchAt?.message} required>
+          <FormField label={`Planned first launch (${zone})`} error={errors.plannedLaunchAt?.message} required>
             <Input type="datetime-local" {...register('plannedLaunchAt')} disabled={readOnly} />
           </FormField>
-          <FormField label="Window closes" error={errors.windowEndAt?.message} required>
+          <FormField label={`Window closes (${zone})`} error={errors.windowEndAt?.message} required>
             <Input type="datetime-local" {...register('windowEndAt')} disabled={readOnly} />
           </FormField>
           {!withNumber && (

@@ -78,11 +78,12 @@ export function CyclePanel({ cycle }: { cycle: CycleView }) {
           key={`${cycle.id}-${cycle.version}`}
           initial={valuesFromCycle(cycle)}
           withNumber={false}
+          timeZone={cycle.timeZone}
           readOnly={!airOps || cycle.state === 'closed'}
           submitLabel="Save conditions"
           pending={update.isPending}
           serverError={update.isError ? errorMessage(update.error) : null}
-          onSubmit={(values) => update.mutate(toConditionsRequest(values, cycle.version))}
+          onSubmit={(values) => update.mutate(toConditionsRequest(values, cycle))}
         />
         {update.isSuccess && (
           <Text color="go.fg" fontSize="sm" role="status">

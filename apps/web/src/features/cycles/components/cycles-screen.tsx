@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { Badge, Button, Stack, Text } from '@chakra-ui/react';
-import type { CycleView } from '@catline/contracts';
+import { shipDateTime, shipTime, shipTimeZone, type CycleView } from '@catline/contracts';
 import { type Column, DataTable } from '../../../components/data-table.js';
 import { PageHeader } from '../../../components/page-header.js';
 import { Pager } from '../../../components/pager.js';
@@ -8,7 +8,6 @@ import { QueryView } from '../../../components/query-states.js';
 import { RoleGate } from '../../../components/role-gate.js';
 import { errorMessage } from '../../../lib/api-error.js';
 import { useLiveCycleList } from '../../../lib/live/use-live-cycle.js';
-import { formatDateTime, formatShortClock } from '../../../lib/format.js';
 import { useCycles, useCyclesPage } from '../../../lib/queries/cycles-query.js';
 import { useShips } from '../../../lib/queries/ships-query.js';
 import { useCreateCycle } from '../api/create-cycle.js';
@@ -22,7 +21,9 @@ function NewCycle({ onCreated, onCancel }: { onCreated: (cycle: CycleView) => vo
   const cycles = useCycles();
   const ships = useShips();
   const create = useCreateCycle();
-  const shipId = ships.data?.[0]?.id;
+  // Air operations plan for their own ship, the one the list holds.
+  const ship = ships.data?.[0];
+  const timeZone = ship ? shipTimeZone(ship.profile) : undefined;
   return (
     <Stack
       gap="3"
@@ -35,19 +36,24 @@ function NewCycle({ onCreated, onCancel }: { onCreated: (cycle: CycleView) => vo
     >
       <Text fontWeight="700">New cycle</Text>
       <QueryView query={cycles} loadingLabel="Reading the cycle numbers…">
-        {(all) => (
-          <CycleForm
-            initial={newCycleValues(new Date(), Math.max(0, ...all.map((cycle) => cycle.number)) + 1)}
-            withNumber
-            submitLabel="Create cycle"
-            pending={create.isPending}
-            serverError={create.isError ? errorMessage(create.error) : ships.isError ? errorMessage(ships.error) : null}
-            onCancel={onCancel}
-            onSubmit={(values) =>
-              shipId !== undefined && create.mutate(toCreateRequest(values, shipId), { onSuccess: onCreated })
-            }
-          />
-        )}
+        {(all) =>
+          // The form takes its first values once: it waits for the ship, whose clock the times are typed on.
+          ship &&
+          timeZone && (
+            <CycleForm
+              initial={newCycleValues(timeZone, new Date(), Math.max(0, ...all.map((cycle) => cycle.number)) + 1)}
+              withNumber
+              timeZone={timeZone}
+              submitLabel="Create cycle"
+              pending={create.isPending}
+              serverError={
+                create.isError ? errorMessage(create.error) : ships.isError ? errorMessage(ships.error) : null
+              }
+              onCancel={onCancel}
+              onSubmit={(values) => create.mutate(toCreateRequest(values, ship.id, timeZone), { onSuccess: onCreated })}
+            />
+          )
+        }
       </QueryView>
     </Stack>
   );
@@ -84,14 +90,15 @@ export function CyclesScreen() {
     {
       key: 'planned',
       header: 'Planned launch',
-      cell: (cycle) => formatDateTime(cycle.plannedLaunchAt),
+      cell: (cycle) => shipDateTime(cycle.plannedLaunchAt, cycle.timeZone),
       sortValue: (cycle) => Date.parse(cycle.plannedLaunchAt),
-      filterText: (cycle) => formatDateTime(cycle.plannedLaunchAt),
+      filterText: (cycle) => shipDateTime(cycle.plannedLaunchAt, cycle.timeZone),
     },
     {
       key: 'window',
       header: 'Window',
-      cell: (cycle) => `${formatShortClock(cycle.windowStartAt)}–${formatShortClock(cycle.windowEndAt)}`,
+      cell: (cycle) =>
+        `${shipTime(cycle.windowStartAt, cycle.timeZone)}–${shipTime(cycle.windowEndAt, cycle.timeZone)}`,
     },
     { key: 'case', header: 'Case', cell: (cycle) => cycle.weatherCase, sortValue: (cycle) => cycle.weatherCase },
     {

@@ -3,7 +3,7 @@ import type { CycleView } from '@catline/contracts';
 import { CheckField } from '../../../components/check-field.js';
 import type { Notice } from '../../../components/refusal-notice.js';
 import { refusalNotice } from '../../../components/refusal-notice.js';
-import { formatShortClock } from '../../../lib/format.js';
+import { useShipClock } from '../../../lib/ship-time.js';
 import { useHasRole } from '../../../lib/session-store.js';
 import { useSetLaunchPrerequisite } from '../api/set-launch-prerequisite.js';
 
@@ -12,6 +12,7 @@ import { useSetLaunchPrerequisite } from '../api/set-launch-prerequisite.js';
  * cycle is in planning; everyone else reads who ticked what, and when.
  */
 export function LaunchPrerequisites({ cycle, onRefused }: { cycle: CycleView; onRefused: (notice: Notice) => void }) {
+  const { time } = useShipClock();
   const airBoss = useHasRole('air_boss');
   const set = useSetLaunchPrerequisite(cycle.id);
   if (cycle.launchPrerequisites.length === 0) return null;
@@ -49,7 +50,7 @@ export function LaunchPrerequisites({ cycle, onRefused }: { cycle: CycleView; on
             )}
             {item.ticked && (
               <Text fontSize="sm" color="fg.muted">
-                by {item.tickedBy} at {formatShortClock(item.tickedAt!)}
+                by {item.tickedBy} at {time(item.tickedAt!)}
               </Text>
             )}
           </HStack>

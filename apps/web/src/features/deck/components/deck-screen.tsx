@@ -28,6 +28,7 @@ import { DeckPlaceRow } from './deck-place-row.js';
 import { DeckStatusControl } from './deck-status-control.js';
 import { LiftedChip, PositionChip } from './position-chip.js';
 import { RespotPanel } from './respot-panel.js';
+import { ShipTimeZone } from '../../../lib/ship-time.js';
 
 const LANDING_WORDS: Record<LandingAreaState, string> = { clear: 'Clear', recovering: 'Recovering', fouled: 'Fouled' };
 
@@ -139,37 +140,39 @@ export function DeckScreen() {
   const ships = useShips();
   const ship = ships.data?.find((candidate) => candidate.id === cycle?.shipId);
   return (
-    <Stack gap="2">
-      <Flex gap="2" rowGap="1" wrap="wrap" align="center">
-        <Heading as="h1" size="xl" fontWeight="700" flexShrink={0}>
-          Deck
-        </Heading>
-        <Box flex="1 1 24rem" minW="0">
-          <CautionLine compact />
-        </Box>
-        {cycle && <ConnectionBadge state={live.connection} />}
-        {cycles.data && cycles.data.length > 0 && (
-          <CyclePicker cycles={cycles.data} value={cycle?.id} onChange={choose} />
-        )}
-      </Flex>
-      <ClosedCycleNotice cycle={live.lineup.data?.cycle ?? cycle} />
-      {finding || ships.isPending ? (
-        <LoadingState label="Finding the current cycle…" />
-      ) : cycles.isError ? (
-        <ErrorState error={cycles.error} onRetry={() => void cycles.refetch()} />
-      ) : !cycle || !ship ? (
-        <EmptyState title="No cycle yet">The deck appears here as soon as a cycle exists.</EmptyState>
-      ) : live.refusal ? (
-        <ErrorState title="This cycle cannot be followed live" error={new Error(live.refusal)} />
-      ) : (
-        <QueryView query={live.lineup} loadingLabel="Loading the deck…">
-          {(snapshot) => (
-            <LiveFigures freshness={live.freshness}>
-              <DeckWorkspace key={snapshot.cycle.id} snapshot={snapshot} ship={ship} />
-            </LiveFigures>
+    <ShipTimeZone zone={(live.lineup.data?.cycle ?? cycle)?.timeZone}>
+      <Stack gap="2">
+        <Flex gap="2" rowGap="1" wrap="wrap" align="center">
+          <Heading as="h1" size="xl" fontWeight="700" flexShrink={0}>
+            Deck
+          </Heading>
+          <Box flex="1 1 24rem" minW="0">
+            <CautionLine compact />
+          </Box>
+          {cycle && <ConnectionBadge state={live.connection} />}
+          {cycles.data && cycles.data.length > 0 && (
+            <CyclePicker cycles={cycles.data} value={cycle?.id} onChange={choose} />
           )}
-        </QueryView>
-      )}
-    </Stack>
+        </Flex>
+        <ClosedCycleNotice cycle={live.lineup.data?.cycle ?? cycle} />
+        {finding || ships.isPending ? (
+          <LoadingState label="Finding the current cycle…" />
+        ) : cycles.isError ? (
+          <ErrorState error={cycles.error} onRetry={() => void cycles.refetch()} />
+        ) : !cycle || !ship ? (
+          <EmptyState title="No cycle yet">The deck appears here as soon as a cycle exists.</EmptyState>
+        ) : live.refusal ? (
+          <ErrorState title="This cycle cannot be followed live" error={new Error(live.refusal)} />
+        ) : (
+          <QueryView query={live.lineup} loadingLabel="Loading the deck…">
+            {(snapshot) => (
+              <LiveFigures freshness={live.freshness}>
+                <DeckWorkspace key={snapshot.cycle.id} snapshot={snapshot} ship={ship} />
+              </LiveFigures>
+            )}
+          </QueryView>
+        )}
+      </Stack>
+    </ShipTimeZone>
   );
 }

@@ -3,12 +3,13 @@ import { useDraggable } from '@dnd-kit/core';
 import type { SlotView } from '@catline/contracts';
 import { GripIcon } from '../../../components/icons.js';
 import { SelectInput } from '../../../components/select-field.js';
-import { formatOptionalClock } from '../../../lib/format.js';
+import { useShipClock } from '../../../lib/ship-time.js';
 import { positionKey, positionLabel, type DeckPanel, towTargets } from '../deck-model.js';
 import { chipItemId } from '../hooks/use-deck-drag.js';
 
 /** What a chip says: side number, type, projected launch, and the aircraft it waits for. */
 function ChipContent({ slot, movable }: { slot: SlotView; movable: boolean }) {
+  const { optionalClock } = useShipClock();
   return (
     <Box>
       <Text fontWeight="700" fontSize="lg" lineHeight="1.2">
@@ -20,7 +21,7 @@ function ChipContent({ slot, movable }: { slot: SlotView; movable: boolean }) {
         {slot.sideNumber}
       </Text>
       <Text fontSize="xs" color="fg.muted" data-testid="chip-launch">
-        {slot.typeDesignation} · launch {formatOptionalClock(slot.projectedLaunchAt)}
+        {slot.typeDesignation} · launch {optionalClock(slot.projectedLaunchAt)}
       </Text>
       {slot.mustMove.length > 0 && (
         <Text fontSize="xs" color="fg.warning">

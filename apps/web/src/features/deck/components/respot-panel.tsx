@@ -3,7 +3,7 @@ import { Box, Button, Flex, Heading, Stack, Table, Text } from '@chakra-ui/react
 import { closedCycleTakes, type LineupSnapshot, type RespotTarget } from '@catline/contracts';
 import { NoticeBanner, refusalNotice, useNotice } from '../../../components/refusal-notice.js';
 import { SelectInput } from '../../../components/select-field.js';
-import { formatClock } from '../../../lib/format.js';
+import { useShipClock } from '../../../lib/ship-time.js';
 import { useHasRole } from '../../../lib/session-store.js';
 import { useBuildRespot } from '../api/build-respot.js';
 import { useRespotTowDone } from '../api/respot-tow-done.js';
@@ -29,6 +29,7 @@ export function RespotPanel({
   panels: readonly DeckPanel[];
   live: boolean;
 }) {
+  const { clock } = useShipClock();
   const handler = useHasRole('handler') && (snapshot.cycle.state !== 'closed' || closedCycleTakes('respot_built'));
   const cycleId = snapshot.cycle.id;
   const [chosen, setChosen] = useState<Record<number, string>>({});
@@ -64,7 +65,7 @@ export function RespotPanel({
               </Text>
               {step.doneAt ? (
                 <Text fontSize="sm" color="fg.muted">
-                  done {formatClock(step.doneAt)}
+                  done {clock(step.doneAt)}
                 </Text>
               ) : (
                 handler &&

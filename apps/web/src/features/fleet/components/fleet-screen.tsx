@@ -11,6 +11,7 @@ import { RoleGate } from '../../../components/role-gate.js';
 import { useAircraft, useAircraftPage } from '../../../lib/queries/aircraft-query.js';
 import { useAircraftTypes } from '../../../lib/queries/aircraft-types-query.js';
 import { useShips } from '../../../lib/queries/ships-query.js';
+import { ShipTimeZoneForm } from './ship-time-zone-form.js';
 import { useSquadrons } from '../../../lib/queries/squadrons-query.js';
 import { useHasRole } from '../../../lib/session-store.js';
 import { useDeleteAircraft } from '../api/delete-aircraft.js';
@@ -213,7 +214,16 @@ export function FleetScreen() {
         {admin && (
           <Tabs.Content value="deck-layout">
             <QueryView query={ships} loadingLabel="Loading the ship…">
-              {(rows) => (rows[0] ? <DeckLayoutEditor key={rows[0].id} ship={rows[0]} /> : <Text>No ship yet.</Text>)}
+              {(rows) =>
+                rows[0] ? (
+                  <Stack gap="4">
+                    <ShipTimeZoneForm key={rows[0].id} ship={rows[0]} />
+                    <DeckLayoutEditor key={rows[0].id} ship={rows[0]} />
+                  </Stack>
+                ) : (
+                  <Text>No ship yet.</Text>
+                )
+              }
             </QueryView>
           </Tabs.Content>
         )}

@@ -10,7 +10,7 @@ import { StaleWindNotice } from '../../../components/stale-wind-notice.js';
 import { EmptyState, ErrorState, LoadingState, QueryView } from '../../../components/query-states.js';
 import { NoticeBanner, refusalNotice, useNotice } from '../../../components/refusal-notice.js';
 import { ApiRequestError, errorMessage } from '../../../lib/api-error.js';
-import { formatClock, formatOptionalClock, formatShortClock } from '../../../lib/format.js';
+import { ShipTimeZone, useShipClock } from '../../../lib/ship-time.js';
 import { useSetArmState } from '../../../lib/live/set-arm-state.js';
 import { useLiveCycle } from '../../../lib/live/use-live-cycle.js';
 import { useViewedCycle } from '../../../lib/queries/use-viewed-cycle.js';
@@ -61,6 +61,7 @@ function Figure({ label, children, testId }: { label: string; children: ReactNod
 
 /** The cycle's figures, above its warnings. */
 function LineupSummary({ snapshot }: { snapshot: LineupSnapshot }) {
+  const { optionalClock, time } = useShipClock();
   const slots = snapshot.slots;
   const launched = slots.filter((slot) => slot.status === 'launched').length;
   // A held spare launches only once it is called for a down aircraft.
@@ -70,10 +71,10 @@ function LineupSummary({ snapshot }: { snapshot: LineupSnapshot }) {
   return (
     <HStack gap="3" wrap="wrap" rowGap="1" data-testid="lineup-summary">
       <Figure label="Last launch" testId="last-launch">
-        {formatOptionalClock(snapshot.lastLaunchAt)}
+        {optionalClock(snapshot.lastLaunchAt)}
       </Figure>
       <Figure label="Window">
-        {formatShortClock(snapshot.cycle.windowStartAt)}–{formatShortClock(snapshot.cycle.windowEndAt)}
+        {time(snapshot.cycle.windowStartAt)}–{time(snapshot.cycle.windowEndAt)}
       </Figure>
       <Figure label="Launched" testId="launched-count">
         {launched} of {toLaunch}
@@ -86,6 +87,7 @@ function LineupSummary({ snapshot }: { snapshot: LineupSnapshot }) {
 }
 
 function LineupWorkspace({ snapshot }: { snapshot: LineupSnapshot }) {
+  const { clock } = useShipClock();
   const cycleId = snapshot.cycle.id;
   const open = snapshot.cycle.state !== 'closed';
   const arranges = useHasRole('handler') && open;
@@ -163,7 +165,7 @@ function LineupWorkspace({ snapshot }: { snapshot: LineupSnapshot }) {
         aside={
           <Stack gap="1" minW="0">
             <LineupSummary snapshot={snapshot} />
-            <LineupWarnings warnings={lineupWarnings(snapshot, formatClock)} />
+            <LineupWarnings warnings={lineupWarnings(snapshot, clock)} />
           </Stack>
         }
       />
@@ -332,40 +334,42 @@ export function LineupScreen() {
   useCycleTheme((live.lineup.data?.cycle ?? cycle)?.night);
 
   return (
-    <Stack gap="2">
-      <Flex gap="2" rowGap="1" wrap="wrap" align="center">
-        <Heading as="h1" size="xl" fontWeight="700" flexShrink={0}>
-          Lineup
-        </Heading>
-        <Box flex="1 1 24rem" minW="0">
-          <CautionLine compact />
-        </Box>
-        {cycle && <ConnectionBadge state={live.connection} />}
-        {cycles.data && cycles.data.length > 0 && (
-          <CyclePicker cycles={cycles.data} value={cycle?.id} onChange={choose} />
-        )}
-      </Flex>
-      <ClosedCycleNotice cycle={live.lineup.data?.cycle ?? cycle} />
-      <StaleWindNotice cycle={live.lineup.data?.cycle ?? cycle} />
-      {finding ? (
-        <LoadingState label="Finding the current cycle…" />
-      ) : cycles.isError ? (
-        <ErrorState error={cycles.error} onRetry={() => void cycles.refetch()} />
-      ) : !cycle ? (
-        <EmptyState title="No cycle yet">
-          Air operations creates cycles; the lineup appears here as soon as one exists.
-        </EmptyState>
-      ) : live.refusal ? (
-        <ErrorState title="This cycle cannot be followed live" error={new Error(live.refusal)} />
-      ) : (
-        <QueryView query={live.lineup} loadingLabel="Loading the lineup…">
-          {(snapshot) => (
-            <LiveFigures freshness={live.freshness}>
-              <LineupWorkspace key={snapshot.cycle.id} snapshot={snapshot} />
-            </LiveFigures>
+    <ShipTimeZone zone={(live.lineup.data?.cycle ?? cycle)?.timeZone}>
+      <Stack gap="2">
+        <Flex gap="2" rowGap="1" wrap="wrap" align="center">
+          <Heading as="h1" size="xl" fontWeight="700" flexShrink={0}>
+            Lineup
+          </Heading>
+          <Box flex="1 1 24rem" minW="0">
+            <CautionLine compact />
+          </Box>
+          {cycle && <ConnectionBadge state={live.connection} />}
+          {cycles.data && cycles.data.length > 0 && (
+            <CyclePicker cycles={cycles.data} value={cycle?.id} onChange={choose} />
           )}
-        </QueryView>
-      )}
-    </Stack>
+        </Flex>
+        <ClosedCycleNotice cycle={live.lineup.data?.cycle ?? cycle} />
+        <StaleWindNotice cycle={live.lineup.data?.cycle ?? cycle} />
+        {finding ? (
+          <LoadingState label="Finding the current cycle…" />
+        ) : cycles.isError ? (
+          <ErrorState error={cycles.error} onRetry={() => void cycles.refetch()} />
+        ) : !cycle ? (
+          <EmptyState title="No cycle yet">
+            Air operations creates cycles; the lineup appears here as soon as one exists.
+          </EmptyState>
+        ) : live.refusal ? (
+          <ErrorState title="This cycle cannot be followed live" error={new Error(live.refusal)} />
+        ) : (
+          <QueryView query={live.lineup} loadingLabel="Loading the lineup…">
+            {(snapshot) => (
+              <LiveFigures freshness={live.freshness}>
+                <LineupWorkspace key={snapshot.cycle.id} snapshot={snapshot} />
+              </LiveFigures>
+            )}
+          </QueryView>
+        )}
+      </Stack>
+    </ShipTimeZone>
   );
 }

@@ -6,7 +6,8 @@ import type { SlotView } from '@catline/contracts';
 import { MarginGo } from '../../../components/go-badge.js';
 import { GripIcon } from '../../../components/icons.js';
 import { SlotStatusBadge } from '../../../components/slot-status-badge.js';
-import { formatOptionalClock, formatPounds } from '../../../lib/format.js';
+import { formatPounds } from '../../../lib/format.js';
+import { useShipClock } from '../../../lib/ship-time.js';
 import { slotGoVerdict } from '../../../lib/launch-verdict.js';
 import { slotItemId } from '../hooks/use-lineup-drag.js';
 import { needsPilot, type SlotMark } from '../lineup-model.js';
@@ -47,6 +48,7 @@ function SlotCardFrame({
 
 /** What a slot card shows: who, what, how heavy, when, and whether the figures are go. */
 function SlotCardContent({ slot, movable, mark }: { slot: SlotView; movable: boolean; mark?: SlotMark }) {
+  const { optionalClock } = useShipClock();
   const figures = slot.figures;
   return (
     <Box ps="2" pe="1" py="1" minW="0" flex="1">
@@ -140,9 +142,7 @@ function SlotCardContent({ slot, movable, mark }: { slot: SlotView; movable: boo
       {figures && (
         <Flex justify="space-between" align="center" gap="2" fontSize="sm" wrap="wrap">
           <Text textStyle="figure" title="Projected launch time">
-            {slot.launchedAt
-              ? `Off ${formatOptionalClock(slot.launchedAt)}`
-              : formatOptionalClock(slot.projectedLaunchAt)}
+            {slot.launchedAt ? `Off ${optionalClock(slot.launchedAt)}` : optionalClock(slot.projectedLaunchAt)}
             {!slot.launchedAt && slot.timing && (
               <>
                 {' · '}

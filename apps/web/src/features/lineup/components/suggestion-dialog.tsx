@@ -2,7 +2,7 @@ import { Box, HStack, Stack, Table, Text } from '@chakra-ui/react';
 import type { LineupSnapshot, SuggestedLineup } from '@catline/contracts';
 import { ActionDialog } from '../../../components/action-dialog.js';
 import { EmptyState, QueryView } from '../../../components/query-states.js';
-import { formatOptionalClock } from '../../../lib/format.js';
+import { useShipClock } from '../../../lib/ship-time.js';
 import { useSuggestion } from '../api/get-suggestion.js';
 import { compareSuggestion, type LaneComparison } from '../suggestion-model.js';
 import { slotsById } from '../lineup-model.js';
@@ -63,6 +63,7 @@ function Gain({
 }
 
 function SuggestionSummary({ snapshot, suggested }: { snapshot: LineupSnapshot; suggested: SuggestedLineup }) {
+  const { optionalClock } = useShipClock();
   const comparison = compareSuggestion(snapshot, suggested);
   const slots = slotsById(snapshot);
   const order = (catapultId: number) =>
@@ -76,8 +77,8 @@ function SuggestionSummary({ snapshot, suggested }: { snapshot: LineupSnapshot; 
         <Gain
           label="Last launch"
           testId="suggestion-last-launch"
-          now={formatOptionalClock(comparison.lastLaunch.now)}
-          suggested={formatOptionalClock(comparison.lastLaunch.suggested)}
+          now={optionalClock(comparison.lastLaunch.now)}
+          suggested={optionalClock(comparison.lastLaunch.suggested)}
           gain={gainWords(comparison.lastLaunch.gainMs)}
         />
         <Gain
@@ -108,10 +109,10 @@ function SuggestionSummary({ snapshot, suggested }: { snapshot: LineupSnapshot; 
             <Table.Row key={lane.catapultId} data-catapult-number={lane.number}>
               <Table.Cell fontWeight="700">Cat {lane.number}</Table.Cell>
               <Table.Cell textStyle="figure">
-                {lane.now.count} aircraft, last {formatOptionalClock(lane.now.lastAt)}
+                {lane.now.count} aircraft, last {optionalClock(lane.now.lastAt)}
               </Table.Cell>
               <Table.Cell textStyle="figure">
-                {lane.suggested.count} aircraft, last {formatOptionalClock(lane.suggested.lastAt)}
+                {lane.suggested.count} aircraft, last {optionalClock(lane.suggested.lastAt)}
               </Table.Cell>
               <Table.Cell>
                 <Text>{changeWords(lane)}</Text>

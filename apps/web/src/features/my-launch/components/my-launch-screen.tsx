@@ -14,7 +14,8 @@ import { EmptyState, ErrorState, LoadingState, QueryView } from '../../../compon
 import { NoticeBanner, refusalNotice, useNotice } from '../../../components/refusal-notice.js';
 import { SlotStatusBadge } from '../../../components/slot-status-badge.js';
 import { SuspendControls } from '../../../components/suspend-controls.js';
-import { formatClearingTurn, formatClock, formatCountdown, formatPounds, ordinal } from '../../../lib/format.js';
+import { formatClearingTurn, formatCountdown, formatPounds, ordinal } from '../../../lib/format.js';
+import { ShipTimeZone, useShipClock } from '../../../lib/ship-time.js';
 import { useLiveCycle } from '../../../lib/live/use-live-cycle.js';
 import { useViewedCycle } from '../../../lib/queries/use-viewed-cycle.js';
 import { useSessionUser } from '../../../lib/session-store.js';
@@ -28,13 +29,14 @@ import { WeightAnswer } from './weight-answer.js';
 
 function Countdown({ slot }: { slot: Pick<SlotView, 'projectedLaunchAt' | 'launchedAt' | 'timing'> }) {
   const { projectedLaunchAt, launchedAt } = slot;
+  const { clock } = useShipClock();
   const now = useNow(1_000, useFiguresLive());
-  if (launchedAt) return <FigureStat label="Launched" value={formatClock(launchedAt)} tone="go" size="xl" />;
+  if (launchedAt) return <FigureStat label="Launched" value={clock(launchedAt)} tone="go" size="xl" />;
   if (!projectedLaunchAt) return <FigureStat label="Projected launch" value="Not yet planned" size="lg" />;
   return (
     <Box data-testid="countdown">
       <FigureStat
-        label={`Projected launch ${formatClock(projectedLaunchAt)}`}
+        label={`Projected launch ${clock(projectedLaunchAt)}`}
         value={formatCountdown(projectedLaunchAt, now)}
         size="xl"
       />
@@ -149,36 +151,38 @@ export function MyLaunchScreen() {
   const live = useLiveCycle(cycleId);
   useCycleTheme((live.lineup.data?.cycle ?? cycle)?.night);
   return (
-    <Stack gap="3">
-      <PageHeader title="My launch" subtitle={cycle && `Cycle ${cycle.number}`}>
-        {cycle && <ConnectionBadge state={live.connection} />}
-        {cycles.data && cycles.data.length > 1 && (
-          <CyclePicker cycles={cycles.data} value={cycle?.id} onChange={choose} />
-        )}
-      </PageHeader>
-      <ClosedCycleNotice cycle={live.lineup.data?.cycle ?? cycle} />
-      <StaleWindNotice cycle={live.lineup.data?.cycle ?? cycle} />
-      {finding ? (
-        <LoadingState label="Finding the current cycle…" />
-      ) : cycles.isError ? (
-        <ErrorState error={cycles.error} onRetry={() => void cycles.refetch()} />
-      ) : !cycle ? (
-        <EmptyState title="No cycle yet">
-          Your launch appears here once air operations plans a cycle with you in it.
-        </EmptyState>
-      ) : live.refusal ? (
-        <ErrorState title="This cycle cannot be followed live" error={new Error(live.refusal)} />
-      ) : (
-        <QueryView query={live.lineup} loadingLabel="Loading your launch…">
-          {(snapshot) => (
-            <LiveFigures freshness={live.freshness}>
-              <MySlot key={snapshot.cycle.id} snapshot={snapshot} pilotId={user.id} />
-            </LiveFigures>
+    <ShipTimeZone zone={(live.lineup.data?.cycle ?? cycle)?.timeZone}>
+      <Stack gap="3">
+        <PageHeader title="My launch" subtitle={cycle && `Cycle ${cycle.number}`}>
+          {cycle && <ConnectionBadge state={live.connection} />}
+          {cycles.data && cycles.data.length > 1 && (
+            <CyclePicker cycles={cycles.data} value={cycle?.id} onChange={choose} />
           )}
-        </QueryView>
-      )}
-      {/* Pinned to the foot of the tablet's screen: the figures scroll, the caution stays in view. */}
-      <CautionLine pinned />
-    </Stack>
+        </PageHeader>
+        <ClosedCycleNotice cycle={live.lineup.data?.cycle ?? cycle} />
+        <StaleWindNotice cycle={live.lineup.data?.cycle ?? cycle} />
+        {finding ? (
+          <LoadingState label="Finding the current cycle…" />
+        ) : cycles.isError ? (
+          <ErrorState error={cycles.error} onRetry={() => void cycles.refetch()} />
+        ) : !cycle ? (
+          <EmptyState title="No cycle yet">
+            Your launch appears here once air operations plans a cycle with you in it.
+          </EmptyState>
+        ) : live.refusal ? (
+          <ErrorState title="This cycle cannot be followed live" error={new Error(live.refusal)} />
+        ) : (
+          <QueryView query={live.lineup} loadingLabel="Loading your launch…">
+            {(snapshot) => (
+              <LiveFigures freshness={live.freshness}>
+                <MySlot key={snapshot.cycle.id} snapshot={snapshot} pilotId={user.id} />
+              </LiveFigures>
+            )}
+          </QueryView>
+        )}
+        {/* Pinned to the foot of the tablet's screen: the figures scroll, the caution stays in view. */}
+        <CautionLine pinned />
+      </Stack>
+    </ShipTimeZone>
   );
 }

@@ -2,7 +2,8 @@ import { useState } from 'react';
 import { Button, HStack, Input, Stack, Text } from '@chakra-ui/react';
 import type { SlotView } from '@catline/contracts';
 import { FigureStat } from '../../../components/figure-stat.js';
-import { formatClock, formatPounds } from '../../../lib/format.js';
+import { formatPounds } from '../../../lib/format.js';
+import { useShipClock } from '../../../lib/ship-time.js';
 import { weightAnswer } from '../my-launch-model.js';
 
 interface WeightAnswerProps {
@@ -13,6 +14,7 @@ interface WeightAnswerProps {
 
 /** The crew shows the weight; the pilot agrees with one tap, or answers the figure they hold. */
 export function WeightAnswer({ slot, pending, onAnswer }: WeightAnswerProps) {
+  const { clock } = useShipClock();
   const [typed, setTyped] = useState('');
   const [problem, setProblem] = useState<string | null>(null);
   const closed = slot.status === 'launched' || slot.status === 'down' || slot.status === 'scratched';
@@ -40,7 +42,7 @@ export function WeightAnswer({ slot, pending, onAnswer }: WeightAnswerProps) {
       )}
       {slot.pilotWeightAckAt && slot.pilotWeightAckLb !== null && (
         <Text fontWeight="600" data-testid="weight-acknowledged">
-          You answered {formatPounds(slot.pilotWeightAckLb)} at {formatClock(slot.pilotWeightAckAt)}.
+          You answered {formatPounds(slot.pilotWeightAckLb)} at {clock(slot.pilotWeightAckAt)}.
         </Text>
       )}
       {!closed && (

@@ -1,7 +1,7 @@
 import { useEffect, useRef } from 'react';
 import { Box, chakra, Text } from '@chakra-ui/react';
 import type { LineupChange } from '@catline/contracts';
-import { formatClock } from '../../../lib/format.js';
+import { useShipClock } from '../../../lib/ship-time.js';
 
 const StepButton = chakra('button', {
   base: {
@@ -27,6 +27,7 @@ export function ChangeLogList({
   step: number;
   onStep: (step: number) => void;
 }) {
+  const { clock } = useShipClock();
   const listRef = useRef<HTMLOListElement>(null);
   useEffect(() => {
     const list = listRef.current;
@@ -61,7 +62,7 @@ export function ChangeLogList({
                 onClick={() => onStep(index + 1)}
               >
                 <Text fontSize="xs" color="fg.muted" textStyle="figure">
-                  {change.version} · {formatClock(change.at)} · {change.actor.name}
+                  {change.version} · {clock(change.at)} · {change.actor.name}
                 </Text>
                 <Text fontSize="sm" fontWeight={current ? '700' : '400'}>
                   {change.summary}

@@ -3,6 +3,8 @@ import { Box, Button, Heading, HStack, Stack, Table, Text } from '@chakra-ui/rea
 import { Link as RouterLink } from 'react-router-dom';
 import {
   isLandingAreaInUse,
+  shipClock,
+  shipTime,
   type CycleView,
   type LaneView,
   type LineupSnapshot,
@@ -12,19 +14,11 @@ import { CautionLine } from '../../../components/caution-line.js';
 import { CyclePicker } from '../../../components/cycle-picker.js';
 import { GoBadge } from '../../../components/go-badge.js';
 import { EmptyState, LoadingState, QueryView } from '../../../components/query-states.js';
-import {
-  formatClock,
-  formatDegrees,
-  formatKnots,
-  formatOptionalClock,
-  formatPounds,
-  formatShortClock,
-  formatSignedKnots,
-  formatWhole,
-} from '../../../lib/format.js';
+import { formatDegrees, formatKnots, formatPounds, formatSignedKnots, formatWhole } from '../../../lib/format.js';
 import { useLiveCycle } from '../../../lib/live/use-live-cycle.js';
 import { useShips } from '../../../lib/queries/ships-query.js';
 import { useViewedCycle } from '../../../lib/queries/use-viewed-cycle.js';
+import { ShipTimeZone, useShipClock } from '../../../lib/ship-time.js';
 import { useNow } from '../../../lib/use-now.js';
 import { TableScroll } from '../../../components/table-scroll.js';
 
@@ -85,7 +79,7 @@ function conditionsLine(cycle: CycleView): string {
     isLandingAreaInUse(cycle.landingArea)
       ? `landing area ${cycle.landingArea}${cycle.landingAreaReason ? ` (${cycle.landingAreaReason})` : ''}, its catapults paused`
       : null,
-    `planned launch ${formatShortClock(cycle.plannedLaunchAt)}, window ${formatShortClock(cycle.windowStartAt)}–${formatShortClock(cycle.windowEndAt)}`,
+    `planned launch ${shipTime(cycle.plannedLaunchAt, cycle.timeZone)}, window ${shipTime(cycle.windowStartAt, cycle.timeZone)}–${shipTime(cycle.windowEndAt, cycle.timeZone)}`,
   ]
     .filter(Boolean)
     .join(' · ');
@@ -101,6 +95,7 @@ function laneHeading(lane: LaneView): string {
 }
 
 function SheetRow({ slot, place }: { slot: SlotView; place: number }) {
+  const { clock, optionalClock } = useShipClock();
   const figures = slot.figures;
   const cells = [
     place,
@@ -110,7 +105,7 @@ function SheetRow({ slot, place }: { slot: SlotView; place: number }) {
     slot.typeDesignation,
     slot.squadronCode,
     slot.pilotName ?? '—',
-    slot.launchedAt ? `Off ${formatClock(slot.launchedAt)}` : formatOptionalClock(slot.projectedLaunchAt),
+    slot.launchedAt ? `Off ${clock(slot.launchedAt)}` : optionalClock(slot.projectedLaunchAt),
     formatPounds(slot.launchRecord?.grossWeightLb ?? slot.grossWeightLb),
     figures?.catapultSetting ?? 'None approved',
     figures ? formatKnots(figures.endSpeedKt) : '—',
@@ -201,8 +196,8 @@ function Sheet({ snapshot, shipName }: { snapshot: LineupSnapshot; shipName: str
         </Heading>
         <Text fontSize="sm">{conditionsLine(cycle)}</Text>
         <Text fontSize="xs" color="fg.muted">
-          The lineup at change {snapshot.version} ({cycle.state}); printed {formatClock(new Date(now))}. Times are this
-          device's.
+          The lineup at change {snapshot.version} ({cycle.state}); printed {shipClock(new Date(now), cycle.timeZone)}.
+          Times are the ship's clock.
         </Text>
       </Stack>
       <CautionLine />
@@ -225,7 +220,15 @@ function SheetForCycle({ cycle }: { cycle: CycleView }) {
   const { lineup } = useLiveCycle(cycle.id);
   const ships = useShips();
   const shipName = ships.data?.find((ship) => ship.id === cycle.shipId)?.name;
-  return <QueryView query={lineup}>{(snapshot) => <Sheet snapshot={snapshot} shipName={shipName} />}</QueryView>;
+  return (
+    <QueryView query={lineup}>
+      {(snapshot) => (
+        <ShipTimeZone zone={snapshot.cycle.timeZone}>
+          <Sheet snapshot={snapshot} shipName={shipName} />
+        </ShipTimeZone>
+      )}
+    </QueryView>
+  );
 }
 
 /** The planned lineup per catapult with each aircraft's launch figures, laid out to print on A4 or US Letter. */

@@ -1,7 +1,8 @@
 import { Badge, Text } from '@chakra-ui/react';
 import type { CycleReport, ReportLaunch } from '@catline/contracts';
 import { SlotStatusBadge } from '../../../components/slot-status-badge.js';
-import { formatKnots, formatOptionalClock, formatPounds, formatSignedKnots } from '../../../lib/format.js';
+import { formatKnots, formatPounds, formatSignedKnots } from '../../../lib/format.js';
+import { shipClockIn, type ShipClock } from '../../../lib/ship-time.js';
 import { formatDelta, timelineLaunches } from '../report-model.js';
 import { ReportTable, type ReportColumn } from './report-table.js';
 
@@ -16,13 +17,13 @@ function WindowVerdict({ inWindow }: { inWindow: boolean | null }) {
   );
 }
 
-const columns: ReportColumn<ReportLaunch>[] = [
+const columns = ({ optionalClock }: ShipClock): ReportColumn<ReportLaunch>[] => [
   { header: 'Cat', cell: (launch) => launch.catapultNumber, numeric: true },
   { header: 'Side', cell: (launch) => <Text fontWeight="700">{launch.sideNumber}</Text> },
   { header: 'Type', cell: (launch) => launch.typeDesignation },
   { header: 'Sqn', cell: (launch) => launch.squadronCode },
-  { header: 'Planned', cell: (launch) => formatOptionalClock(launch.plannedAt), numeric: true },
-  { header: 'Launched', cell: (launch) => formatOptionalClock(launch.launchedAt), numeric: true },
+  { header: 'Planned', cell: (launch) => optionalClock(launch.plannedAt), numeric: true },
+  { header: 'Launched', cell: (launch) => optionalClock(launch.launchedAt), numeric: true },
   { header: 'Against plan', cell: (launch) => formatDelta(launch.deltaS), numeric: true },
   { header: 'Window', cell: (launch) => <WindowVerdict inWindow={launch.inWindow} /> },
   { header: 'Status', cell: (launch) => <SlotStatusBadge status={launch.status} /> },
@@ -49,7 +50,7 @@ export function LaunchTable({ report }: { report: CycleReport }) {
     <ReportTable
       caption={LAUNCH_TABLE_CAPTION}
       rows={timelineLaunches(report)}
-      columns={columns}
+      columns={columns(shipClockIn(report.cycle.timeZone))}
       rowKey={(launch) => launch.slotId}
       empty="No aircraft was planned on a catapult in this cycle."
     />

@@ -13,7 +13,7 @@ import {
 } from 'recharts';
 import type { CycleReport } from '@catline/contracts';
 import { EmptyState } from '../../../components/query-states.js';
-import { formatClock } from '../../../lib/format.js';
+import { useShipClock } from '../../../lib/ship-time.js';
 import { timelinePoints, timelineSummary, type TimelinePoint } from '../report-model.js';
 
 // This file is the only one that imports recharts: it loads with the reports route, never with the shell.
@@ -80,6 +80,7 @@ function PointTooltip({ active, payload }: TooltipContentProps) {
 
 /** Planned against actual launch times, one row per catapult, with a text alternative beneath. */
 export function LaunchTimelineChart({ report }: { report: CycleReport }) {
+  const { clock } = useShipClock();
   const summaryId = useId();
   const { planned, actual } = useMemo(() => timelinePoints(report), [report]);
   const times = [...planned, ...actual].map((point) => point.time);
@@ -110,7 +111,7 @@ export function LaunchTimelineChart({ report }: { report: CycleReport }) {
           dataKey="time"
           name="Time"
           domain={[Math.min(...times) - MARGIN_MS, Math.max(...times) + MARGIN_MS]}
-          tickFormatter={(value: number) => formatClock(new Date(value))}
+          tickFormatter={(value: number) => clock(new Date(value))}
           tick={{ fill: colour.text, fontSize: 12 }}
           stroke={colour.text}
           label={{

@@ -2,11 +2,12 @@ import { Badge, Box, Flex, HStack, SimpleGrid, Stack, Text } from '@chakra-ui/re
 import type { LaneView, LineupSnapshot, SlotView } from '@catline/contracts';
 import { MarginGo } from '../../../components/go-badge.js';
 import { SlotStatusBadge } from '../../../components/slot-status-badge.js';
-import { formatOptionalClock } from '../../../lib/format.js';
+import { useShipClock } from '../../../lib/ship-time.js';
 import { outOfLineup } from '../replay-model.js';
 
 /** One aircraft as the lineup held it at the step; the ones the step changed are marked. */
 function ReplaySlot({ slot, changed }: { slot: SlotView; changed: boolean }) {
+  const { optionalClock } = useShipClock();
   const figures = slot.figures;
   return (
     <Box
@@ -33,9 +34,7 @@ function ReplaySlot({ slot, changed }: { slot: SlotView; changed: boolean }) {
       </Flex>
       <Flex justify="space-between" align="center" gap="2" fontSize="sm" mt="0.5" wrap="wrap">
         <Text textStyle="figure" color="fg.muted">
-          {slot.launchedAt
-            ? `Off ${formatOptionalClock(slot.launchedAt)}`
-            : `Proj. ${formatOptionalClock(slot.projectedLaunchAt)}`}
+          {slot.launchedAt ? `Off ${optionalClock(slot.launchedAt)}` : `Proj. ${optionalClock(slot.projectedLaunchAt)}`}
         </Text>
         {figures && <MarginGo slot={{ ...slot, figures }} />}
       </Flex>

@@ -1,7 +1,7 @@
 import { useEffect } from 'react';
 import { Box, Button, HStack, Stack, Text } from '@chakra-ui/react';
 import { ROLE_LABELS, type LineupChange } from '@catline/contracts';
-import { formatClock } from '../../../lib/format.js';
+import { useShipClock } from '../../../lib/ship-time.js';
 import { CHANGE_KIND_LABELS, stepForKey } from '../replay-model.js';
 
 interface ReplayControlsProps {
@@ -16,6 +16,7 @@ const isTyping = (target: EventTarget | null) =>
 
 /** The slider, first/previous/next/last, and the arrow keys anywhere on the page. */
 export function ReplayControls({ step, changes, onStep }: ReplayControlsProps) {
+  const { clock } = useShipClock();
   const last = changes.length;
   const change = step === 0 ? null : changes[step - 1];
 
@@ -72,7 +73,7 @@ export function ReplayControls({ step, changes, onStep }: ReplayControlsProps) {
         <Text fontSize="sm">{change ? change.summary : 'The cycle as created: no aircraft yet.'}</Text>
         {change && (
           <Text fontSize="sm" color="fg.muted">
-            {formatClock(change.at)} · {change.actor.name} ({ROLE_LABELS[change.actor.role]})
+            {clock(change.at)} · {change.actor.name} ({ROLE_LABELS[change.actor.role]})
           </Text>
         )}
       </Box>

@@ -12,6 +12,7 @@ import { replaySteps } from '../replay-model.js';
 import { ChangeLogList } from './change-log-list.js';
 import { ReplayBoard } from './replay-board.js';
 import { ReplayControls } from './replay-controls.js';
+import { ShipTimeZone } from '../../../lib/ship-time.js';
 
 function ReplayPlayer({ replay }: { replay: CycleReplay }) {
   const steps = useMemo(() => replaySteps(replay), [replay]);
@@ -46,28 +47,30 @@ function ReplayPanel({ cycle }: { cycle: CycleView }) {
 export function ReplayScreen() {
   const { cycles, cycle, choose } = useReportCycle();
   return (
-    <Stack gap="4">
-      <PageHeader title="Replay" subtitle={cycle ? `Cycle ${cycle.number}` : undefined}>
-        {cycle && (
-          <Button asChild size="sm" variant="outline">
-            <RouterLink to={`/reports?cycle=${cycle.id}`}>Back to the report</RouterLink>
-          </Button>
-        )}
-      </PageHeader>
-      <QueryView query={cycles} loadingLabel="Loading cycles…">
-        {(list) =>
-          cycle ? (
-            <Stack gap="3">
-              <HStack>
-                <CyclePicker cycles={list} value={cycle.id} onChange={choose} />
-              </HStack>
-              <ReplayPanel key={cycle.id} cycle={cycle} />
-            </Stack>
-          ) : (
-            <EmptyState title="No cycles yet">A cycle's replay appears here once it has changes.</EmptyState>
-          )
-        }
-      </QueryView>
-    </Stack>
+    <ShipTimeZone zone={cycle?.timeZone}>
+      <Stack gap="4">
+        <PageHeader title="Replay" subtitle={cycle ? `Cycle ${cycle.number}` : undefined}>
+          {cycle && (
+            <Button asChild size="sm" variant="outline">
+              <RouterLink to={`/reports?cycle=${cycle.id}`}>Back to the report</RouterLink>
+            </Button>
+          )}
+        </PageHeader>
+        <QueryView query={cycles} loadingLabel="Loading cycles…">
+          {(list) =>
+            cycle ? (
+              <Stack gap="3">
+                <HStack>
+                  <CyclePicker cycles={list} value={cycle.id} onChange={choose} />
+                </HStack>
+                <ReplayPanel key={cycle.id} cycle={cycle} />
+              </Stack>
+            ) : (
+              <EmptyState title="No cycles yet">A cycle's replay appears here once it has changes.</EmptyState>
+            )
+          }
+        </QueryView>
+      </Stack>
+    </ShipTimeZone>
   );
 }

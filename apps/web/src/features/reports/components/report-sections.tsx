@@ -12,7 +12,7 @@ import type {
   SquadronReport,
 } from '@catline/contracts';
 import { FigureStat } from '../../../components/figure-stat.js';
-import { formatClock, formatOptionalClock, formatShortClock } from '../../../lib/format.js';
+import { shipClockIn, type ShipClock } from '../../../lib/ship-time.js';
 import { formatDuration } from '../report-model.js';
 import { ReportTable, type ReportColumn } from './report-table.js';
 
@@ -27,10 +27,10 @@ export function ReportSection({ title, children }: { title: string; children: Re
   );
 }
 
-function basisSentence(report: CycleReport): string {
-  const window = `the launch window ${formatShortClock(report.cycle.windowStartAt)}–${formatShortClock(report.cycle.windowEndAt)}`;
+function basisSentence(report: CycleReport, { clock, time }: ShipClock): string {
+  const window = `the launch window ${time(report.cycle.windowStartAt)}–${time(report.cycle.windowEndAt)}`;
   if (report.plannedBasis === 'cycle_start' && report.startedAt) {
-    return `Planned times are those projected when the cycle started (${formatClock(report.startedAt)}, change ${report.plannedAtVersion}); launches are judged against ${window}.`;
+    return `Planned times are those projected when the cycle started (${clock(report.startedAt)}, change ${report.plannedAtVersion}); launches are judged against ${window}.`;
   }
   return `The cycle has not started: planned times are its latest projection (change ${report.plannedAtVersion}); launches are judged against ${window}.`;
 }
@@ -38,6 +38,7 @@ function basisSentence(report: CycleReport): string {
 /** The cycle's totals at a glance, and what the planned times mean. */
 export function ReportSummary({ report }: { report: CycleReport }) {
   const { totals } = report;
+  const shipClock = shipClockIn(report.cycle.timeZone);
   return (
     <Stack gap="2">
       <SimpleGrid columns={{ base: 2, sm: 4, lg: 8 }} gap="3" data-testid="report-totals">
@@ -67,11 +68,11 @@ export function ReportSummary({ report }: { report: CycleReport }) {
           tone={totals.waivers > 0 ? 'caution' : undefined}
           size="md"
         />
-        <FigureStat label="First launch" value={formatOptionalClock(report.firstLaunchAt)} size="md" />
-        <FigureStat label="Last launch" value={formatOptionalClock(report.lastLaunchAt)} size="md" />
+        <FigureStat label="First launch" value={shipClock.optionalClock(report.firstLaunchAt)} size="md" />
+        <FigureStat label="Last launch" value={shipClock.optionalClock(report.lastLaunchAt)} size="md" />
       </SimpleGrid>
       <Text fontSize="sm" color="fg.muted">
-        {basisSentence(report)}
+        {basisSentence(report, shipClock)}
       </Text>
     </Stack>
   );
@@ -129,19 +130,19 @@ export function IntervalsSection({ report }: { report: CycleReport }) {
   );
 }
 
-const suspendColumns: ReportColumn<ReportSuspend>[] = [
+const suspendColumns = ({ clock, optionalClock }: ShipClock): ReportColumn<ReportSuspend>[] => [
   { header: 'Side', cell: (event) => `${event.sideNumber} (${event.squadronCode})` },
   { header: 'Cat', cell: (event) => event.catapultNumber ?? '—', numeric: true },
-  { header: 'Suspended', cell: (event) => formatClock(event.at), numeric: true },
-  { header: 'Resumed', cell: (event) => formatOptionalClock(event.resumedAt), numeric: true },
+  { header: 'Suspended', cell: (event) => clock(event.at), numeric: true },
+  { header: 'Resumed', cell: (event) => optionalClock(event.resumedAt), numeric: true },
   { header: 'Reason', cell: (event) => event.reason },
   { header: 'By', cell: (event) => event.by },
 ];
 
-const downColumns: ReportColumn<ReportDown>[] = [
+const downColumns = ({ clock }: ShipClock): ReportColumn<ReportDown>[] => [
   { header: 'Down', cell: (event) => `${event.sideNumber} (${event.squadronCode})` },
   { header: 'Cat', cell: (event) => event.catapultNumber ?? 'pool', numeric: true },
-  { header: 'At', cell: (event) => formatClock(event.at), numeric: true },
+  { header: 'At', cell: (event) => clock(event.at), numeric: true },
   {
     header: 'Spare in its place',
     cell: (event) => (event.spare ? `${event.spare.sideNumber} (${event.spare.squadronCode})` : 'none'),
@@ -149,22 +150,23 @@ const downColumns: ReportColumn<ReportDown>[] = [
   { header: 'By', cell: (event) => event.by },
 ];
 
-const waiverColumns: ReportColumn<ReportWaiver>[] = [
+const waiverColumns = ({ clock }: ShipClock): ReportColumn<ReportWaiver>[] => [
   { header: 'Side', cell: (event) => `${event.sideNumber} (${event.squadronCode})` },
   { header: 'Cat', cell: (event) => event.catapultNumber, numeric: true },
-  { header: 'Launched', cell: (event) => formatClock(event.launchedAt), numeric: true },
+  { header: 'Launched', cell: (event) => clock(event.launchedAt), numeric: true },
   { header: 'Reason', cell: (event) => event.reason },
   { header: 'By', cell: (event) => event.by ?? '—' },
 ];
 
 export function EventsSection({ report }: { report: CycleReport }) {
+  const shipClock = shipClockIn(report.cycle.timeZone);
   return (
     <SimpleGrid columns={{ base: 1, lg: 2 }} gap="4">
       <ReportSection title="Suspends">
         <ReportTable
           caption="Suspends"
           rows={report.suspends}
-          columns={suspendColumns}
+          columns={suspendColumns(shipClock)}
           rowKey={(event) => `${event.slotId}-${event.at}`}
           empty="No launch was suspended."
         />
@@ -173,7 +175,7 @@ export function EventsSection({ report }: { report: CycleReport }) {
         <ReportTable
           caption="Down aircraft and spares"
           rows={report.downs}
-          columns={downColumns}
+          columns={downColumns(shipClock)}
           rowKey={(event) => event.slotId}
           empty="No aircraft went down."
         />
@@ -182,7 +184,7 @@ export function EventsSection({ report }: { report: CycleReport }) {
         <ReportTable
           caption="Launches on a waiver"
           rows={report.waivers}
-          columns={waiverColumns}
+          columns={waiverColumns(shipClock)}
           rowKey={(event) => event.slotId}
           empty="No launch needed a waiver."
         />

@@ -12,6 +12,7 @@ import { LaunchTable } from './launch-table.js';
 import { LaunchTimelineChart } from './launch-timeline-chart.js';
 import { EventsSection, IntervalsSection, ReportSection, ReportSummary, SquadronsSection } from './report-sections.js';
 import { ReportsNav } from './reports-nav.js';
+import { ShipTimeZone } from '../../../lib/ship-time.js';
 
 function CycleActions({ cycle }: { cycle: CycleView }) {
   return (
@@ -61,27 +62,29 @@ function CycleReportPanel({ cycle }: { cycle: CycleView }) {
 export function ReportsScreen() {
   const { cycles, cycle, choose } = useReportCycle();
   return (
-    <Stack gap="4">
-      <PageHeader title="Reports" subtitle={cycle ? `Cycle ${cycle.number}` : undefined}>
-        <ReportsNav />
-      </PageHeader>
-      <QueryView query={cycles} loadingLabel="Loading cycles…">
-        {(list) =>
-          cycle ? (
-            <Stack gap="4">
-              <HStack gap="3" wrap="wrap" justify="space-between" align="flex-start">
-                <CyclePicker cycles={list} value={cycle.id} onChange={choose} />
-                <CycleActions cycle={cycle} />
-              </HStack>
-              <CycleReportPanel key={cycle.id} cycle={cycle} />
-            </Stack>
-          ) : (
-            <EmptyState title="No cycles yet">
-              A report appears here once air operations has created a cycle.
-            </EmptyState>
-          )
-        }
-      </QueryView>
-    </Stack>
+    <ShipTimeZone zone={cycle?.timeZone}>
+      <Stack gap="4">
+        <PageHeader title="Reports" subtitle={cycle ? `Cycle ${cycle.number}` : undefined}>
+          <ReportsNav />
+        </PageHeader>
+        <QueryView query={cycles} loadingLabel="Loading cycles…">
+          {(list) =>
+            cycle ? (
+              <Stack gap="4">
+                <HStack gap="3" wrap="wrap" justify="space-between" align="flex-start">
+                  <CyclePicker cycles={list} value={cycle.id} onChange={choose} />
+                  <CycleActions cycle={cycle} />
+                </HStack>
+                <CycleReportPanel key={cycle.id} cycle={cycle} />
+              </Stack>
+            ) : (
+              <EmptyState title="No cycles yet">
+                A report appears here once air operations has created a cycle.
+              </EmptyState>
+            )
+          }
+        </QueryView>
+      </Stack>
+    </ShipTimeZone>
   );
 }

@@ -30,6 +30,16 @@ test('a draggable card is named by what it shows', async ({ browser }) => {
   await page.context().close();
 });
 
+test('an observer’s cards, which cannot be moved, are named by side number, type and status', async ({ browser }) => {
+  const cycle = await launchingCycle(false);
+  const page = await openAs(browser, 'observer', `/lineup?cycle=${cycle.id}`);
+  const inLane = card(lane(page, 1), 'C21');
+  await expect(inLane.getByRole('group')).toHaveAccessibleName(/^C21, (?:(?:On cat|Next), )?[\w/-]+, Planned$/);
+  await expect(inLane.getByRole('button', { name: /^C21\b/ }), 'nothing to drag').toHaveCount(0);
+  await expect(card(pool(page), 'L47').getByRole('group')).toHaveAccessibleName(/^L47, FGD-63, Planned$/);
+  await page.context().close();
+});
+
 test('launched aircraft on the board keep their badge readable (4.5:1)', async ({ browser }) => {
   // The demo's flown cycle: its aircraft are off, each card with a "Launched" badge.
   const observer = await apiAs('observer');
@@ -40,6 +50,10 @@ test('launched aircraft on the board keep their badge readable (4.5:1)', async (
   const page = await openAs(browser, 'handler', `/lineup?cycle=${flown.id}`);
   const launched = page.locator('[data-testid="slot-card"][data-status="launched"] [data-testid="slot-status"]');
   await expect(launched.first()).toHaveText('Launched');
+  // A launched card cannot be moved, so it is no button: it is still named by what it shows.
+  const flownCard = page.locator('[data-testid="lane"] [data-testid="slot-card"][data-status="launched"]').first();
+  const side = (await flownCard.getAttribute('data-side-number'))!;
+  await expect(flownCard.getByRole('group', { name: new RegExp(`^${side}\\b.*Launched$`) })).toBeVisible();
   const results = await new AxeBuilder({ page }).withRules(['color-contrast']).analyze();
   expect(results.violations.flatMap((violation) => violation.nodes.map((node) => node.failureSummary))).toEqual([]);
   await page.context().close();

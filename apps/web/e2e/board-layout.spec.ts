@@ -1,15 +1,22 @@
 import { mkdirSync, writeFileSync } from 'node:fs';
 import { expect, test, type Page } from '@playwright/test';
 import { apiAs, lineupOf, placeInLane, planCycle } from './support/demo-api.js';
-import { openAs } from './support/screens.js';
+import { card, openAs, pool } from './support/screens.js';
 
 // The handler's board must be readable at a glance on the laptop and the tablet the deck crews use.
 // Held upright, a tablet has the height for the pool and summary above the lanes and still shows four
 // aircraft per catapult, so its lanes may start lower than a third of the way down.
+// Lying down, the summary beside the pool is as tall as the pool: only upright does folding it raise the lanes.
 const sizes = [
-  { name: 'laptop', viewport: { width: 1366, height: 768 }, touch: false, lanesFrom: 1 / 3 },
-  { name: 'tablet', viewport: { width: 1024, height: 768 }, touch: true, lanesFrom: 1 / 3 },
-  { name: 'upright tablet', viewport: { width: 820, height: 1180 }, touch: true, lanesFrom: 2 / 5 },
+  { name: 'laptop', viewport: { width: 1366, height: 768 }, touch: false, lanesFrom: 1 / 3, foldRaisesLanes: false },
+  { name: 'tablet', viewport: { width: 1024, height: 768 }, touch: true, lanesFrom: 1 / 3, foldRaisesLanes: false },
+  {
+    name: 'upright tablet',
+    viewport: { width: 820, height: 1180 },
+    touch: true,
+    lanesFrom: 2 / 5,
+    foldRaisesLanes: true,
+  },
 ];
 
 /** Four aircraft on every catapult, five left in the deck pool, the first on cat 1 hooked up. */
@@ -102,7 +109,8 @@ for (const size of sizes) {
   }) => {
     const cycle = await fullDeck();
     const page = await openAs(browser, 'handler', `/lineup?cycle=${cycle.id}`, size.viewport, size.touch);
-    await expect(page.getByTestId('lane')).toHaveCount(4);
+    // The board's first draw after sign-in (21 aircraft) takes longer than 5 s on a loaded test machine.
+    await expect(page.getByTestId('lane')).toHaveCount(4, { timeout: 15_000 });
     await expect(page.getByTestId('connection-state')).toHaveAttribute('data-state', 'live');
     const at = await measure(page);
     mkdirSync('test-results/board', { recursive: true });
@@ -141,6 +149,27 @@ for (const size of sizes) {
       'C25',
     );
     await expect(page.getByRole('button', { name: 'Actions for C22' })).toBeVisible();
+
+    // Folded, the deck pool gives its height to the catapults; unfolded, its aircraft are back.
+    const toggle = page.getByTestId('deck-pool-toggle');
+    const laneTops = () =>
+      page.getByTestId('lane').evaluateAll((lanes) => lanes.map((lane) => lane.getBoundingClientRect().top));
+    await expect(toggle).toHaveAttribute('aria-expanded', 'true');
+    const unfolded = await laneTops();
+    await toggle.click();
+    await expect(toggle).toHaveAttribute('aria-expanded', 'false');
+    await expect(page.getByTestId('deck-pool-cards')).toHaveCount(0);
+    for (const [index, top] of (await laneTops()).entries()) {
+      if (size.foldRaisesLanes)
+        expect(top, `cat ${index + 1} moves up with the pool folded`).toBeLessThan(unfolded[index]);
+      else expect(top, `cat ${index + 1} never moves down with the pool folded`).toBeLessThanOrEqual(unfolded[index]);
+    }
+    await toggle.click();
+    await expect(toggle).toHaveAttribute('aria-expanded', 'true');
+    await expect(card(pool(page), 'C29')).toBeVisible();
+    for (const [index, top] of (await laneTops()).entries()) {
+      expect(top, `cat ${index + 1} back where it was`).toBeCloseTo(unfolded[index], 0);
+    }
     await page.context().close();
   });
 }

@@ -35,6 +35,24 @@ function smallControls(page: Page, min: number, selector = CONTROLS) {
   );
 }
 
+/** Every message the page logs as an error, and every error it throws, into `errors`. */
+function collectErrors(page: Page, errors: string[]) {
+  page.on('console', (message) => {
+    if (message.type() === 'error') errors.push(message.text());
+  });
+  page.on('pageerror', (error) => errors.push(error.message));
+}
+
+/** Kept for a person to look over, at each size the crews use: what the screen shows first, without scrolling. */
+async function keepScreenshots(page: Page, path: string) {
+  const name = path.split(/[?#]/)[0].slice(1).replaceAll('/', '-');
+  for (const size of SIZES) {
+    await page.setViewportSize(size);
+    await page.screenshot({ path: `test-results/every-screen/${name}-${size.width}x${size.height}.png` });
+  }
+  await page.setViewportSize(TABLET);
+}
+
 const screens = [
   { who: 'handler', path: (cycle: number) => `/lineup?cycle=${cycle}`, ready: 'lane' },
   { who: 'handler', path: (cycle: number) => `/deck?cycle=${cycle}`, ready: 'landing-area' },
@@ -67,10 +85,7 @@ for (const screen of screens) {
     const path = screen.path(cycleId);
     const page = await openAs(browser, screen.who, path, TABLET, true);
     const errors: string[] = [];
-    page.on('console', (message) => {
-      if (message.type() === 'error') errors.push(message.text());
-    });
-    page.on('pageerror', (error) => errors.push(error.message));
+    collectErrors(page, errors);
     if (screen.ready) await expect(page.getByTestId(screen.ready).first()).toBeVisible();
     await page.waitForLoadState('networkidle');
     const found = (await smallControls(page, TOUCH_PX)).map((small) => `${small} is under ${TOUCH_PX} px`);
@@ -78,20 +93,46 @@ for (const screen of screens) {
       for (const small of await smallControls(page, STATION_ACTION_PX, 'main button, main input'))
         found.push(`${small} is under ${STATION_ACTION_PX} px on a station`);
     for (const violation of await axeViolations(page)) found.push(`by day: ${violation}`);
-    // Kept for a person to look over, at each size the crews use: what the screen shows first, without scrolling.
-    const name = path.split('?')[0].slice(1).replaceAll('/', '-');
-    for (const size of SIZES) {
-      await page.setViewportSize(size);
-      await page.screenshot({
-        path: `test-results/every-screen/${name}-${size.width}x${size.height}.png`,
-      });
-    }
-    await page.setViewportSize(TABLET);
+    await keepScreenshots(page, path);
     await page.getByLabel('Theme').selectOption('night');
     await expect(page.locator('html')).toHaveClass(/dark/);
     for (const violation of await axeViolations(page)) found.push(`by night: ${violation}`);
     for (const error of errors) found.push(`logged: ${error}`);
     expect(found).toEqual([]);
     await page.context().close();
+  });
+}
+
+// The pages before sign-in, as someone who is not signed in opens them (the mailed links carry a token after #).
+const pagesBeforeSignIn = [
+  { path: '/sign-in', ready: 'Sign in' },
+  { path: '/forgot-password', ready: 'Send me a link' },
+  { path: '/reset-password#token=0f3a9c27d1b84e6a', ready: 'Set new password' },
+  { path: '/invitation#token=7b21e0d94c5f3a88', ready: 'Set my password' },
+];
+
+for (const before of pagesBeforeSignIn) {
+  test(`${before.path.split('#')[0]} before sign-in: no error logged, no axe violation by day or night, controls a finger can hit`, async ({
+    browser,
+  }) => {
+    const context = await browser.newContext({ viewport: TABLET, hasTouch: true });
+    const page = await context.newPage();
+    const errors: string[] = [];
+    collectErrors(page, errors);
+    await page.goto(before.path);
+    await expect(page.getByRole('button', { name: before.ready }).first()).toBeVisible({ timeout: 15_000 });
+    await page.waitForLoadState('networkidle');
+    const found = (await smallControls(page, TOUCH_PX)).map((small) => `${small} is under ${TOUCH_PX} px`);
+    for (const violation of await axeViolations(page)) found.push(`by day: ${violation}`);
+    await keepScreenshots(page, before.path);
+    // No theme switch before sign-in: the tablet's night choice, made earlier, is what these pages follow.
+    await page.evaluate(() => localStorage.setItem('catline.theme', 'night'));
+    await page.reload();
+    await expect(page.locator('html')).toHaveClass(/dark/);
+    await expect(page.getByRole('button', { name: before.ready }).first()).toBeVisible({ timeout: 15_000 });
+    for (const violation of await axeViolations(page)) found.push(`by night: ${violation}`);
+    for (const error of errors) found.push(`logged: ${error}`);
+    expect(found).toEqual([]);
+    await context.close();
   });
 }

@@ -1,9 +1,32 @@
-import { expect, test } from '@playwright/test';
-import { apiAs, lineupOf, placeInLane, planCycle } from './support/demo-api.js';
+import { expect, test, type Page } from '@playwright/test';
+import { apiAs, launchingCycle, lineupOf, placeInLane, planCycle } from './support/demo-api.js';
 import { card, lane, openAs, pool } from './support/screens.js';
 
 // Long enough for the link to give up ("Offline since"), as on a deck where the network drops for a while.
 const OUTAGE_MS = 20_000;
+const TABLET = { width: 1024, height: 768 };
+
+/** Greyed, saying since when, the caution still in view. */
+async function expectStale(page: Page) {
+  await expect(page.getByTestId('live-figures')).toHaveAttribute('data-live', 'false');
+  await expect(page.getByTestId('not-live')).toHaveText(/^Not live — last update \d\d:\d\d:\d\d UTC$/);
+  await expect(page.getByTestId('caution-line').first()).toBeVisible();
+}
+
+async function expectLiveAgain(page: Page) {
+  await expect(page.getByTestId('connection-state')).toHaveText('Live', { timeout: 15_000 });
+  await expect(page.getByTestId('live-figures')).toHaveAttribute('data-live', 'true');
+  await expect(page.getByTestId('not-live')).toHaveCount(0);
+}
+
+async function waitOutOutage(page: Page, wentOffline: number) {
+  await page.waitForTimeout(Math.max(0, OUTAGE_MS - (Date.now() - wentOffline)));
+  await expect(page.getByTestId('connection-state')).toHaveText(/^Offline since \d\d:\d\d:\d\d UTC$/);
+}
+
+/** Every control among a screen's live figures that could still be pressed. */
+const enabledControls = (page: Page) =>
+  page.getByTestId('live-figures').locator('button:enabled, select:enabled, input:enabled, textarea:enabled');
 
 test('with the network gone for 20 s the board and the pilot’s screen show stale figures, stop and refuse, then recover', async ({
   browser,
@@ -20,7 +43,7 @@ test('with the network gone for 20 s the board and the pilot’s screen show sta
   await placeInLane(api, cycle.id, slotIds.get('D38')!, 1);
   await api.dispose();
   const pilot = await openAs(browser, 'pilot3', `/my-launch?cycle=${cycle.id}`);
-  const board = await openAs(browser, 'handler', `/lineup?cycle=${cycle.id}`, { width: 1024, height: 768 }, true);
+  const board = await openAs(browser, 'handler', `/lineup?cycle=${cycle.id}`, TABLET, true);
   for (const page of [pilot, board]) {
     await expect(page.getByTestId('connection-state')).toHaveText('Live');
     await expect(page.getByTestId('live-figures')).toHaveAttribute('data-live', 'true');
@@ -43,28 +66,17 @@ test('with the network gone for 20 s the board and the pilot’s screen show sta
   await expect(markDown).toBeDisabled();
   await board.getByRole('dialog').getByRole('button', { name: 'Cancel' }).click();
   const frozenAt = await countdown.textContent();
-  for (const page of [pilot, board]) {
-    await expect(page.getByTestId('live-figures')).toHaveAttribute('data-live', 'false');
-    await expect(page.getByTestId('not-live')).toHaveText(/^Not live — last update \d\d:\d\d:\d\d UTC$/);
-    await expect(page.getByTestId('caution-line')).toBeVisible();
-  }
+  for (const page of [pilot, board]) await expectStale(page);
   await expect(confirm).toBeDisabled();
   await expect(menu).toBeDisabled();
   await expect(board.getByRole('button', { name: 'Suggest lineup' })).toBeDisabled();
   await expect(handle, 'a stale board offers no drag').toHaveCount(0);
 
-  await pilot.waitForTimeout(Math.max(0, OUTAGE_MS - (Date.now() - wentOffline)));
-  for (const page of [pilot, board]) {
-    await expect(page.getByTestId('connection-state')).toHaveText(/^Offline since \d\d:\d\d:\d\d UTC$/);
-  }
+  for (const page of [pilot, board]) await waitOutOutage(page, wentOffline);
   await expect(countdown, 'the countdown stood still for the whole outage').toHaveText(frozenAt!);
 
   await Promise.all([pilot.context().setOffline(false), board.context().setOffline(false)]);
-  for (const page of [pilot, board]) {
-    await expect(page.getByTestId('connection-state')).toHaveText('Live', { timeout: 15_000 });
-    await expect(page.getByTestId('live-figures')).toHaveAttribute('data-live', 'true');
-    await expect(page.getByTestId('not-live')).toHaveCount(0);
-  }
+  for (const page of [pilot, board]) await expectLiveAgain(page);
   await expect(confirm).toBeEnabled();
   await expect(menu).toBeEnabled();
   await expect(countdown).not.toHaveText(frozenAt!);
@@ -77,4 +89,36 @@ test('with the network gone for 20 s the board and the pilot’s screen show sta
   );
   await expect(card(lane(board, 1), 'D38')).toBeVisible();
   await Promise.all([pilot.context().close(), board.context().close()]);
+});
+
+test('with the network gone the Cat station and the Deck screen show stale figures and refuse too, then recover', async ({
+  browser,
+}) => {
+  test.setTimeout(120_000);
+  const cycle = await launchingCycle();
+  const station = await openAs(browser, 'cat1', `/cat-station?cycle=${cycle.id}`, TABLET, true);
+  const deck = await openAs(browser, 'handler', `/deck?cycle=${cycle.id}`, TABLET, true);
+  for (const page of [station, deck]) {
+    await expect(page.getByTestId('connection-state')).toHaveText('Live');
+    await expect(page.getByTestId('live-figures')).toHaveAttribute('data-live', 'true');
+  }
+  const taxi = station.getByTestId('step-taxiing');
+  await expect(station.getByTestId('current-aircraft')).toHaveAttribute('data-side-number', 'C21');
+  await expect(taxi).toBeEnabled();
+  await expect(enabledControls(deck).first(), 'the deck offers its actions while live').toBeVisible();
+
+  const wentOffline = Date.now();
+  await Promise.all([station.context().setOffline(true), deck.context().setOffline(true)]);
+  for (const page of [station, deck]) {
+    await expectStale(page);
+    await expect(enabledControls(page), 'nothing to press on a stale screen').toHaveCount(0);
+  }
+  await expect(taxi).toBeDisabled();
+  for (const page of [station, deck]) await waitOutOutage(page, wentOffline);
+
+  await Promise.all([station.context().setOffline(false), deck.context().setOffline(false)]);
+  for (const page of [station, deck]) await expectLiveAgain(page);
+  await expect(taxi).toBeEnabled();
+  await expect(enabledControls(deck).first()).toBeVisible();
+  await Promise.all([station.context().close(), deck.context().close()]);
 });

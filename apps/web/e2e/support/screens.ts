@@ -1,16 +1,21 @@
 import { expect, type Browser, type CDPSession, type Locator, type Page } from '@playwright/test';
 import { DEMO_PASSWORD, demoEmail } from './demo-api.js';
 
-/** Opens a screen as a person: the app sends them to sign in and back to the screen they asked for. */
+/**
+ * Opens a screen as a person: the app sends them to sign in and back to the screen they asked for.
+ * `beforeOpening` runs on the new page before it loads anything (to listen from the first request, or fake its clock).
+ */
 export async function openAs(
   browser: Browser,
   who: string,
   path: string,
   viewport = { width: 1366, height: 768 },
   hasTouch = false,
+  beforeOpening?: (page: Page) => Promise<void> | void,
 ) {
   const context = await browser.newContext({ viewport, hasTouch });
   const page = await context.newPage();
+  await beforeOpening?.(page);
   await page.goto(path);
   await signIn(page, who);
   await expect(page).toHaveURL(new RegExp(path.replace(/[?]/g, '\\?')));
@@ -18,7 +23,9 @@ export async function openAs(
 }
 
 export async function signIn(page: Page, who: string) {
-  await expect(page).toHaveURL(/\/sign-in/);
+  // A cold first load (the scripts, and the service worker keeping its copy alongside) takes more than the
+  // default 5 s on a loaded test machine.
+  await expect(page).toHaveURL(/\/sign-in/, { timeout: 15_000 });
   await page.getByLabel('E-mail').fill(demoEmail(who));
   await page.getByLabel('Password').fill(DEMO_PASSWORD);
   await page.getByRole('button', { name: 'Sign in' }).click();

@@ -70,11 +70,15 @@ interface QueryViewProps<T> {
   loadingLabel?: string;
   errorTitle?: string;
   children: (data: T) => ReactNode;
+  /** The child marks its data as not live itself (LiveFigures): a failed read again keeps showing it. */
+  keepsStaleData?: boolean;
 }
 
 /** Loading, error or the data: never a blank screen. Empty lists are the child's to describe. */
-export function QueryView<T>({ query, loadingLabel, errorTitle, children }: QueryViewProps<T>) {
+export function QueryView<T>({ query, loadingLabel, errorTitle, children, keepsStaleData }: QueryViewProps<T>) {
   if (query.isPending) return <LoadingState label={loadingLabel} />;
+  const kept = keepsStaleData ? query.data : undefined;
+  if (kept !== undefined) return <>{children(kept)}</>;
   if (query.isError) return <ErrorState error={query.error} title={errorTitle} onRetry={() => void query.refetch()} />;
   return <>{children(query.data)}</>;
 }

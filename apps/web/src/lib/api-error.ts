@@ -39,6 +39,10 @@ export async function toApiRequestError(response: Response): Promise<ApiRequestE
 export const unreachableServer = () =>
   new ApiRequestError(0, 'network', 'Cannot reach the Catline server. Check the connection and try again.');
 
+/** No answer came (no network, or nothing behind the address could answer): a refusal may still not be one. */
+export const isUnanswered = (error: unknown) =>
+  error instanceof ApiRequestError && (error.statusCode === 0 || error.statusCode >= 500);
+
 /** The sentence to show a person for any error a hook hands back. */
 export function errorMessage(error: unknown): string {
   if (error instanceof ApiRequestError) {

@@ -31,6 +31,14 @@ export function startSession({ user, accessToken, expiresAt }: SessionResponse) 
   session.setState({ status: 'signed-in', user, accessToken, expiresAt, endedNotice: null, leftOnPurpose: false });
 }
 
+/**
+ * Reopens a session the server could not be asked about (no network): the person as last signed in, with
+ * no token until the session is renewed. Requests wait for that renewal; the screens show what was kept.
+ */
+export function resumeSessionUnrenewed(user: SessionUser) {
+  session.setState({ status: 'signed-in', user, accessToken: null, expiresAt: null, endedNotice: null });
+}
+
 export function endSession(notice: string | null = null, leftOnPurpose = false) {
   session.setState({
     status: 'signed-out',
@@ -46,6 +54,13 @@ export function endSession(notice: string | null = null, leftOnPurpose = false) 
 export function onAccessTokenChange(listener: (token: string | null) => void) {
   return session.subscribe((state, previous) => {
     if (state.accessToken !== previous.accessToken) listener(state.accessToken);
+  });
+}
+
+/** Called once each time a session ends (or none could be restored), whatever its token was. */
+export function onSessionEnd(listener: () => void) {
+  return session.subscribe((state, previous) => {
+    if (state.status === 'signed-out' && previous.status !== 'signed-out') listener();
   });
 }
 

@@ -29,6 +29,8 @@ export interface LiveState {
   refusals: ReadonlyMap<number, string>;
   /** Cycles whose lineup has been brought up to the server's version since the link last came up. */
   caughtUp: ReadonlySet<number>;
+  /** When each cycle that was caught up stopped being so (the link dropped, or the screen left it). */
+  liveUntil: ReadonlyMap<number, Date>;
 }
 
 /**
@@ -51,6 +53,7 @@ class LiveCycles {
     connection: { kind: 'connecting' },
     refusals: new Map(),
     caughtUp: new Set(),
+    liveUntil: new Map(),
   }));
   readonly sync = new LineupSync(queryClient, (cycleId) => this.resync(cycleId));
 
@@ -151,9 +154,13 @@ class LiveCycles {
     socket.on('lineup:change', (change) => this.sync.ingest(change));
     socket.on('cycle:status', () => this.refreshCycleLists());
     socket.on('session:expired', () => {
-      void refreshSession().then((session) => {
-        if (!session) endedElsewhere();
-      });
+      // Without an answer the link drops and retries like any other outage.
+      refreshSession().then(
+        (session) => {
+          if (!session) endedElsewhere();
+        },
+        () => undefined,
+      );
     });
     this.socket = socket;
     socket.connect();
@@ -169,7 +176,12 @@ class LiveCycles {
     this.socket?.disconnect();
     this.socket = null;
     this.joining.clear();
-    this.state.setState({ connection: { kind: 'connecting' }, refusals: new Map(), caughtUp: new Set() });
+    this.state.setState({
+      connection: { kind: 'connecting' },
+      refusals: new Map(),
+      caughtUp: new Set(),
+      liveUntil: new Map(),
+    });
   }
 
   private retryWithFreshToken(socket: CatlineSocket) {
@@ -177,10 +189,14 @@ class LiveCycles {
     this.retryDelayMs = Math.min(this.retryDelayMs * 2, 30_000);
     setTimeout(() => {
       if (this.socket !== socket) return;
-      void refreshSession().then((session) => {
-        if (!session) endedElsewhere();
-        else if (this.socket === socket) socket.connect();
-      });
+      refreshSession().then(
+        (session) => {
+          if (!session) endedElsewhere();
+          else if (this.socket === socket) socket.connect();
+        },
+        // No answer: the network is down, not the session; ask again, waiting longer.
+        () => this.retryWithFreshToken(socket),
+      );
     }, delay);
   }
 
@@ -260,17 +276,27 @@ class LiveCycles {
 
   private setConnection(connection: ConnectionState) {
     // Whatever was caught up may miss changes from here on: each cycle catches up again when it rejoins.
-    if (connection.kind === 'live') this.state.setState({ connection });
-    else this.state.setState({ connection, caughtUp: new Set() });
+    if (connection.kind === 'live') {
+      this.state.setState({ connection });
+      return;
+    }
+    const { caughtUp, liveUntil } = this.state.getState();
+    const until = new Map(liveUntil);
+    for (const cycleId of caughtUp) until.set(cycleId, 'since' in connection ? connection.since : new Date());
+    this.state.setState({ connection, caughtUp: new Set(), liveUntil: until });
   }
 
   private setCaughtUp(cycleId: number, caughtUp: boolean) {
-    const current = this.state.getState().caughtUp;
-    if (current.has(cycleId) === caughtUp) return;
-    const next = new Set(current);
+    const current = this.state.getState();
+    if (current.caughtUp.has(cycleId) === caughtUp) return;
+    const next = new Set(current.caughtUp);
+    const until = new Map(current.liveUntil);
     if (caughtUp) next.add(cycleId);
-    else next.delete(cycleId);
-    this.state.setState({ caughtUp: next });
+    else {
+      next.delete(cycleId);
+      until.set(cycleId, new Date());
+    }
+    this.state.setState({ caughtUp: next, liveUntil: until });
   }
 }
 

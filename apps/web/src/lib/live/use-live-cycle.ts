@@ -1,7 +1,7 @@
 import { useEffect } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import { useStore } from 'zustand';
-import type { ConnectionState, Freshness } from './connection-state.js';
+import type { Freshness } from './connection-state.js';
 import { lineupSnapshotQueryOptions } from './lineup-query.js';
 import { liveCycles } from './live-cycles.js';
 
@@ -17,19 +17,23 @@ export function useLiveCycle(cycleId: number | undefined) {
   return {
     lineup,
     connection: live.connection,
-    freshness: freshness(caughtUp, live.connection, lineup.dataUpdatedAt),
+    freshness: freshness(
+      caughtUp,
+      cycleId === undefined ? undefined : live.liveUntil.get(cycleId),
+      lineup.dataUpdatedAt,
+    ),
     refusal: cycleId === undefined ? undefined : live.refusals.get(cycleId),
   };
 }
 
 /**
  * The one rule for "is this screen live": the link is up and the lineup has caught up with the server's
- * version since. Until then the figures were last known current when the link dropped (or, before the
- * first catch-up, when the lineup was last fetched).
+ * version since. Until then the figures were last known current when this screen last stopped being live,
+ * or when the lineup was last read, whichever is later (a lineup kept from before a reload only the latter).
  */
-function freshness(caughtUp: boolean, connection: ConnectionState, dataUpdatedAt: number): Freshness {
+function freshness(caughtUp: boolean, liveUntil: Date | undefined, dataUpdatedAt: number): Freshness {
   if (caughtUp) return { live: true };
-  return { live: false, lastUpdate: 'since' in connection ? connection.since : new Date(dataUpdatedAt) };
+  return { live: false, lastUpdate: new Date(Math.max(liveUntil?.getTime() ?? 0, dataUpdatedAt)) };
 }
 
 /** Keeps the ship's lists of cycles and pickers up with the live feed while the screen shows one. */

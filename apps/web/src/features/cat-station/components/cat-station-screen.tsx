@@ -261,7 +261,7 @@ export function CatStationScreen() {
           </EmptyState>
         ) : finding ? (
           <LoadingState label="Finding the current cycle…" />
-        ) : cycles.isError ? (
+        ) : cycles.isError && !cycles.data ? (
           <ErrorState error={cycles.error} onRetry={() => void cycles.refetch()} />
         ) : !cycle ? (
           <EmptyState title="No cycle yet">
@@ -270,7 +270,7 @@ export function CatStationScreen() {
         ) : live.refusal ? (
           <ErrorState title="This cycle cannot be followed live" error={new Error(live.refusal)} />
         ) : (
-          <QueryView query={live.lineup} loadingLabel="Loading your catapult…">
+          <QueryView query={live.lineup} keepsStaleData loadingLabel="Loading your catapult…">
             {(data) => (
               <LiveFigures freshness={live.freshness}>
                 <Station key={data.cycle.id} snapshot={data} catapultId={user.catapultId!} />

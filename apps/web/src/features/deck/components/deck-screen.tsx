@@ -157,14 +157,14 @@ export function DeckScreen() {
         <ClosedCycleNotice cycle={live.lineup.data?.cycle ?? cycle} />
         {finding || ships.isPending ? (
           <LoadingState label="Finding the current cycle…" />
-        ) : cycles.isError ? (
+        ) : cycles.isError && !cycles.data ? (
           <ErrorState error={cycles.error} onRetry={() => void cycles.refetch()} />
         ) : !cycle || !ship ? (
           <EmptyState title="No cycle yet">The deck appears here as soon as a cycle exists.</EmptyState>
         ) : live.refusal ? (
           <ErrorState title="This cycle cannot be followed live" error={new Error(live.refusal)} />
         ) : (
-          <QueryView query={live.lineup} loadingLabel="Loading the deck…">
+          <QueryView query={live.lineup} keepsStaleData loadingLabel="Loading the deck…">
             {(snapshot) => (
               <LiveFigures freshness={live.freshness}>
                 <DeckWorkspace key={snapshot.cycle.id} snapshot={snapshot} ship={ship} />

@@ -40,7 +40,14 @@ export function DeckPoolStrip({
       outline={isOver ? '2px dashed' : undefined}
       outlineColor="accent.focusRing"
     >
-      <Stack gap="1" flexShrink={0} justify="center">
+      {/* Folded, its controls line up in one row, so the strip gives its height to the catapults. */}
+      <Stack
+        direction={open ? 'column' : 'row'}
+        gap="1"
+        flexShrink={0}
+        justify="center"
+        align={open ? undefined : 'center'}
+      >
         <Button
           variant="ghost"
           size="sm"

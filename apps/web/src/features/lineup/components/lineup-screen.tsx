@@ -352,7 +352,7 @@ export function LineupScreen() {
         <StaleWindNotice cycle={live.lineup.data?.cycle ?? cycle} />
         {finding ? (
           <LoadingState label="Finding the current cycle…" />
-        ) : cycles.isError ? (
+        ) : cycles.isError && !cycles.data ? (
           <ErrorState error={cycles.error} onRetry={() => void cycles.refetch()} />
         ) : !cycle ? (
           <EmptyState title="No cycle yet">
@@ -361,7 +361,7 @@ export function LineupScreen() {
         ) : live.refusal ? (
           <ErrorState title="This cycle cannot be followed live" error={new Error(live.refusal)} />
         ) : (
-          <QueryView query={live.lineup} loadingLabel="Loading the lineup…">
+          <QueryView query={live.lineup} keepsStaleData loadingLabel="Loading the lineup…">
             {(snapshot) => (
               <LiveFigures freshness={live.freshness}>
                 <LineupWorkspace key={snapshot.cycle.id} snapshot={snapshot} />

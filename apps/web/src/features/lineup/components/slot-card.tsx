@@ -5,7 +5,7 @@ import { CSS } from '@dnd-kit/utilities';
 import type { SlotView } from '@catline/contracts';
 import { MarginGo } from '../../../components/go-badge.js';
 import { GripIcon } from '../../../components/icons.js';
-import { SlotStatusBadge } from '../../../components/slot-status-badge.js';
+import { SLOT_STATUS_LABELS, SlotStatusBadge } from '../../../components/slot-status-badge.js';
 import { formatPounds } from '../../../lib/format.js';
 import { useShipClock } from '../../../lib/ship-time.js';
 import { slotGoVerdict } from '../../../lib/launch-verdict.js';
@@ -176,6 +176,12 @@ interface SortableSlotCardProps {
   menu?: ReactNode;
 }
 
+/** A card nobody here can move is not a button, but is still named by its side number, type and status. */
+const fixedCardName = (slot: SlotView, mark?: SlotMark) =>
+  [slot.sideNumber, mark && MARK_LABELS[mark], slot.typeDesignation, SLOT_STATUS_LABELS[slot.status]]
+    .filter(Boolean)
+    .join(', ');
+
 export function SortableSlotCard({ slot, movable, mark, menu }: SortableSlotCardProps) {
   // The handle is named by what it shows (side number, mark, status, type, pilot, figures), so a person
   // who says or reads what they see finds it.
@@ -196,7 +202,7 @@ export function SortableSlotCard({ slot, movable, mark, menu }: SortableSlotCard
       <SlotCardFrame slot={slot} lifted={false} mark={mark}>
         <Box
           ref={setActivatorNodeRef}
-          {...(movable ? { ...attributes, ...listeners } : {})}
+          {...(movable ? { ...attributes, ...listeners } : { role: 'group', 'aria-label': fixedCardName(slot, mark) })}
           flex="1"
           minW="0"
           display="flex"

@@ -163,7 +163,7 @@ export function MyLaunchScreen() {
         <StaleWindNotice cycle={live.lineup.data?.cycle ?? cycle} />
         {finding ? (
           <LoadingState label="Finding the current cycle…" />
-        ) : cycles.isError ? (
+        ) : cycles.isError && !cycles.data ? (
           <ErrorState error={cycles.error} onRetry={() => void cycles.refetch()} />
         ) : !cycle ? (
           <EmptyState title="No cycle yet">
@@ -172,7 +172,7 @@ export function MyLaunchScreen() {
         ) : live.refusal ? (
           <ErrorState title="This cycle cannot be followed live" error={new Error(live.refusal)} />
         ) : (
-          <QueryView query={live.lineup} loadingLabel="Loading your launch…">
+          <QueryView query={live.lineup} keepsStaleData loadingLabel="Loading your launch…">
             {(snapshot) => (
               <LiveFigures freshness={live.freshness}>
                 <MySlot key={snapshot.cycle.id} snapshot={snapshot} pilotId={user.id} />

@@ -10,7 +10,7 @@ import {
   followSnapshot,
   startFollow,
 } from './cycle-follow.js';
-import type { LaneView, LineupChange, LineupSnapshot } from './lineup.js';
+import { type LaneView, type LineupChange, type LineupSnapshot, READINESS_STEPS } from './lineup.js';
 import { applyLineupChanges } from './lineup-patch.js';
 
 // A fresh seed every run, printed so a failure can be replayed with FOLLOW_SEED=<seed>.
@@ -67,6 +67,7 @@ function lane(catapultId: number, slotIds: number[]): LaneView {
     headwindKt: 30,
     crosswindKt: 2,
     crosswindSide: 'port',
+    readinessSteps: [...READINESS_STEPS],
   };
 }
 

@@ -47,8 +47,8 @@ const ERROR_DESCRIPTION: Record<RefusalStatus, string> = {
 
 /**
  * The refusals every route of a kind answers, by the facts the filter and pipes act on: the
- * validation pipe and StrictIdPipe (400), the body parser on every method but GET (400, 413), the auth guard (401, 403)
- * and the error filter's database answers (503).
+ * validation pipe and StrictIdPipe (400), the body parser on every method but GET (400, 413), the auth guard (401,
+ * 403, and 404 for a cycle of another ship) and the error filter's database answers (503).
  */
 function standardRefusals(route: RouteFacts): Partial<Record<RefusalStatus, RefusalCode[]>> {
   const refusals: Partial<Record<RefusalStatus, RefusalCode[]>> = {};
@@ -62,6 +62,8 @@ function standardRefusals(route: RouteFacts): Partial<Record<RefusalStatus, Refu
   if (bad.length) refusals[400] = bad;
   if (!route.isPublic) refusals[401] = ['unauthenticated', 'session_invalid', 'session_ended'];
   if (route.roles) refusals[403] = ['forbidden_role'];
+  // The auth guard keeps every cycle route to the caller's ship: another ship's cycle is answered as missing.
+  if (!route.isPublic && route.idParams.includes('cycleId')) refusals[404] = ['not_found'];
   if (parsesBody) refusals[413] = ['payload_too_large'];
   refusals[503] = ['database_unavailable', 'database_busy'];
   return refusals;

@@ -28,19 +28,10 @@ function textOf(chunks: Buffer[], encoding: string | undefined): string {
 const asBuffer = (chunk: unknown) =>
   Buffer.isBuffer(chunk) ? chunk : typeof chunk === 'string' ? Buffer.from(chunk) : Buffer.from(chunk as Uint8Array);
 
-function parsedOr(text: string): unknown {
-  try {
-    return JSON.parse(text) as unknown;
-  } catch {
-    return text;
-  }
-}
-
 /**
  * Records every /api answer the app gives from now on, whichever test or helper asked, so that a spec can
  * hold them against the document at its end (`DocumentedAnswers.problemsOf`). It listens on the HTTP
- * server ahead of Express and keeps what the response writes. Only /api is the document's: socket.io's
- * polling (/socket.io) and the web app's files are left unrecorded.
+ * server ahead of Express and keeps what the response writes.
  */
 export function recordAnswers(app: INestApplication): RecordedAnswer[] {
   const recorded: RecordedAnswer[] = [];
@@ -63,8 +54,7 @@ export function recordAnswers(app: INestApplication): RecordedAnswer[] {
       const text = textOf(chunks, res.getHeader('content-encoding') as string | undefined);
       const contentType = String(res.getHeader('content-type') ?? '');
       let body: unknown = text;
-      // A body cut short (the client went away) stays text; the check then reports it as not the documented JSON.
-      if (contentType.startsWith('application/json') && text) body = parsedOr(text);
+      if (contentType.startsWith('application/json') && text) body = JSON.parse(text);
       recorded.push({
         method: req.method ?? 'GET',
         address,

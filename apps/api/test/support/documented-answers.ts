@@ -45,33 +45,6 @@ function closed(schema: unknown): unknown {
   return nullable === true ? { anyOf: [node, { type: 'null' }] } : node;
 }
 
-/**
- * The answers the app rightly gives outside its document, each with why; `known` says whether the
- * address is an instance of a documented path. Any other answer must be to a documented operation.
- */
-const OUTSIDE_THE_DOCUMENT: { why: string; holds: (answer: RecordedAnswer, known: boolean) => boolean }[] = [
-  {
-    why: 'The document itself and its page (/api/docs, /api/docs-json) are served by @nestjs/swagger, not operations of the API.',
-    holds: (answer) => /^\/api\/docs(-json|\/|$)/.test(answer.address),
-  },
-  {
-    why: 'HEAD is answered by the GET route, headers only; OpenAPI documents the GET.',
-    holds: (answer) => answer.method === 'HEAD',
-  },
-  {
-    why: 'OPTIONS is the CORS preflight, answered before any route.',
-    holds: (answer) => answer.method === 'OPTIONS',
-  },
-  {
-    why: 'An address no documented path has answers 404 not_found (from no route, or the catch-all that serves the web app outside /api): there is no operation to list it under.',
-    holds: (answer, known) => !known && answer.status === 404,
-  },
-  {
-    why: 'A documented path asked with a method it does not take answers 405 method_not_allowed from the document itself (method-not-allowed.ts).',
-    holds: (answer, known) => known && answer.status === 405,
-  },
-];
-
 /** The codes a documented refusal names (route-docs.ts writes them as "Codes: `a`, `b`."). */
 const codesOf = (response: DocumentedResponse) =>
   [...(/Codes: (.*)\.$/.exec(response.description)?.[1] ?? '').matchAll(/`(\w+)`/g)].map((match) => match[1]);
@@ -109,8 +82,9 @@ export class DocumentedAnswers {
   }
 
   /**
-   * How the answers a recorder kept (see answer-recorder.ts) disagree with the document, once each. Every
-   * answer must be to a documented operation and fit it, but for those OUTSIDE_THE_DOCUMENT.
+   * How the answers a recorder kept (see answer-recorder.ts) disagree with the document, once each. An
+   * answer to no documented operation (an unknown path's 404, a 405, a HEAD) is left out: the document
+   * describes operations.
    */
   problemsOf(answers: readonly RecordedAnswer[]): string[] {
     const problems = new Set<string>();
@@ -118,13 +92,8 @@ export class DocumentedAnswers {
       const named = answer.route?.replace(/:(\w+)/g, '{$1}');
       const path = named && this.document.paths[named] ? named : this.pathOf(answer.address);
       const operations = path ? (this.document.paths[path] as Record<string, unknown>) : undefined;
-      if (path && operations?.[answer.method.toLowerCase()]) {
-        for (const problem of this.problems(answer.method, path, answer)) problems.add(problem);
-      } else if (!OUTSIDE_THE_DOCUMENT.some((outside) => outside.holds(answer, path !== undefined))) {
-        problems.add(
-          `${answer.method} ${answer.route ?? answer.address} answered ${answer.status}, an operation the document does not have`,
-        );
-      }
+      if (!path || !operations?.[answer.method.toLowerCase()]) continue;
+      for (const problem of this.problems(answer.method, path, answer)) problems.add(problem);
     }
     return [...problems];
   }

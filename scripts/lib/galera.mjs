@@ -77,6 +77,9 @@ function nodeArgs(cluster, node, { bootstrap }) {
     '--innodb-flush-log-at-trx-commit=1',
     '--max-connections=400',
     '--binlog-format=ROW',
+    // The audit trail's append-only triggers (see catline.cnf): a Galera node refuses them to a user without
+    // SUPER otherwise.
+    '--log-bin-trust-function-creators=ON',
     '--innodb-autoinc-lock-mode=2',
     '--wsrep-on=ON',
     `--wsrep-provider=${PROVIDER}`,

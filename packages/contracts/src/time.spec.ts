@@ -5,6 +5,7 @@ import {
   shipIsoTime,
   shipLocalInput,
   shipTime,
+  shipTimeRange,
   shipTimeZone,
 } from './time.js';
 
@@ -19,6 +20,7 @@ describe('ship time', () => {
     expect(shipClock(instant, 'Asia/Dubai')).toMatch(/^14:05:30 \S+$/);
     expect(shipDateTime(instant, 'Asia/Dubai')).toMatch(/^2026-12-02 14:05 \S+$/);
     expect(shipIsoTime(instant, 'Asia/Dubai')).toBe('2026-12-02T14:05:30+04:00');
+    expect(shipTimeRange(instant, '2026-12-02T10:50:00.000Z', 'Asia/Dubai')).toMatch(/^14:05–14:50 \S+$/);
   });
 
   it('crosses a date line in the zone: 22:30 UTC is the next day at +04:00', () => {

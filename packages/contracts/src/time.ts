@@ -59,6 +59,12 @@ export function shipTime(instant: Date | string, timeZone: string): string {
   return `${hour}:${minute} ${timeZoneName}`;
 }
 
+/** "14:05–14:50 GMT+10": two times of the ship's clock, the zone named once (the later time's). */
+export function shipTimeRange(from: Date | string, to: Date | string, timeZone: string): string {
+  const start = parts(from, timeZone, 'time');
+  return `${start.hour}:${start.minute}–${shipTime(to, timeZone)}`;
+}
+
 /** "14:05:30 GMT+10": the ship's clock time to the second, with its zone. */
 export function shipClock(instant: Date | string, timeZone: string): string {
   const { hour, minute, second, timeZoneName } = parts(instant, timeZone, 'seconds');

@@ -1,5 +1,12 @@
 import { createContext, useContext, useMemo, type ReactNode } from 'react';
-import { DEFAULT_SHIP_TIME_ZONE, shipClock, shipDateTime, shipTime, shipTimeZone } from '@catline/contracts';
+import {
+  DEFAULT_SHIP_TIME_ZONE,
+  shipClock,
+  shipDateTime,
+  shipTime,
+  shipTimeRange,
+  shipTimeZone,
+} from '@catline/contracts';
 import { useShips } from './queries/ships-query.js';
 
 // Every time on screen is the ship's clock with its zone named, whatever zone the device is set to.
@@ -31,6 +38,8 @@ export interface ShipClock {
   optionalClock: (instant: Date | string | null) => string;
   /** "14:05 GMT+4". */
   time: (instant: Date | string) => string;
+  /** "14:05–14:50 GMT+4": the zone named once. */
+  timeRange: (from: Date | string, to: Date | string) => string;
   /** "2026-12-02 14:05 GMT+4". */
   dateTime: (instant: Date | string) => string;
 }
@@ -40,6 +49,7 @@ export function shipClockIn(timeZone: string): ShipClock {
     clock: (instant) => shipClock(instant, timeZone),
     optionalClock: (instant) => (instant ? shipClock(instant, timeZone) : '—'),
     time: (instant) => shipTime(instant, timeZone),
+    timeRange: (from, to) => shipTimeRange(from, to, timeZone),
     dateTime: (instant) => shipDateTime(instant, timeZone),
   };
 }

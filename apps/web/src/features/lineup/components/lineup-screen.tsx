@@ -52,7 +52,14 @@ function Figure({ label, children, testId }: { label: string; children: ReactNod
       <Text fontSize="xs" color="fg.muted" textTransform="uppercase" fontWeight="600" lineHeight="1.2">
         {label}
       </Text>
-      <Text fontSize="lg" textStyle="figure" lineHeight="1.3" whiteSpace="nowrap" data-testid={testId}>
+      {/* A size smaller below 1280 px, so the four figures stay on one row on a 1024 px tablet. */}
+      <Text
+        fontSize={{ base: 'md', xl: 'lg' }}
+        textStyle="figure"
+        lineHeight="1.3"
+        whiteSpace="nowrap"
+        data-testid={testId}
+      >
         {children}
       </Text>
     </Box>
@@ -61,7 +68,7 @@ function Figure({ label, children, testId }: { label: string; children: ReactNod
 
 /** The cycle's figures, above its warnings. */
 function LineupSummary({ snapshot }: { snapshot: LineupSnapshot }) {
-  const { optionalClock, time } = useShipClock();
+  const { optionalClock, timeRange } = useShipClock();
   const slots = snapshot.slots;
   const launched = slots.filter((slot) => slot.status === 'launched').length;
   // A held spare launches only once it is called for a down aircraft.
@@ -73,9 +80,7 @@ function LineupSummary({ snapshot }: { snapshot: LineupSnapshot }) {
       <Figure label="Last launch" testId="last-launch">
         {optionalClock(snapshot.lastLaunchAt)}
       </Figure>
-      <Figure label="Window">
-        {time(snapshot.cycle.windowStartAt)}–{time(snapshot.cycle.windowEndAt)}
-      </Figure>
+      <Figure label="Window">{timeRange(snapshot.cycle.windowStartAt, snapshot.cycle.windowEndAt)}</Figure>
       <Figure label="Launched" testId="launched-count">
         {launched} of {toLaunch}
       </Figure>

@@ -146,7 +146,7 @@ function SlotCardContent({ slot, movable, mark }: { slot: SlotView; movable: boo
             {!slot.launchedAt && slot.timing && (
               <>
                 {' · '}
-                <LaunchTiming timing={slot.timing} />
+                <LaunchTiming timing={slot.timing} windowOnly />
               </>
             )}
           </Text>

@@ -48,6 +48,20 @@ test('air operations sees every problem of an air plan file, then imports a good
   await expect(rows.nth(0)).toContainText('Jo Fettleworth');
   await expect(rows.nth(1)).toContainText('Tanker');
   // Someone changes the cycle after the check: the import is refused in words, and works once the screen has caught up.
+  // The screen follows the cycle live and would read the new version before the click: its reads of cycles wait
+  // until the import tried on the version the check saw has been answered.
+  let release = () => {};
+  const released = new Promise<void>((resolve) => (release = resolve));
+  await airops.route('**/api/cycles**', async (route) => {
+    if (route.request().method() === 'GET') {
+      await released;
+      return route.fallback();
+    }
+    if (!route.request().url().includes('/air-plan/imports/')) return route.fallback();
+    const response = await route.fetch();
+    release();
+    return route.fulfill({ response });
+  });
   const api = await apiAs('airops');
   const fleet = await allOf<AircraftView>(api, '/api/aircraft');
   const added = await api.post(`/api/cycles/${cycle.id}/slots`, {
@@ -69,6 +83,7 @@ test('air operations sees every problem of an air plan file, then imports a good
   await expect(airops.getByTestId('import-refusal')).toContainText(
     `Cycle ${cycle.number} has changed 1 time since you saw it`,
   );
+  await airops.unroute('**/api/cycles**');
   await importButton.click();
   await expect(airops.getByTestId('import-done')).toContainText(`deck pool of cycle ${cycle.number}`);
 

@@ -103,10 +103,9 @@ export class UsersService {
   }
 
   /**
-   * Role, catapult and active changes take effect at once: the token version moves on, so tokens
-   * signed with the old role stop working (a refresh gives a new one while the person is active).
+   * A change of role, catapult or activity takes effect at once: the token version moves on, so tokens
+   * signed before it stop working, and the person's sessions and sockets are ended.
    */
-  /** A change of role, catapult or activity ends the person's sessions at once (their sockets too). */
   async update(id: number, body: UpdateUserDto, actor: AuthenticatedUser): Promise<UserView> {
     let accessChanged = false;
     const view = await this.dataSource.transaction(async (manager) => {

@@ -125,7 +125,9 @@ export async function send(url: string, token: string, command: LineupCommand, h
       answeredAt: Date.now(),
     };
   } catch (error) {
-    return { handler, command, status: 0, body: String(error), connection: null, sentAt, answeredAt: Date.now() };
+    // fetch says only "fetch failed"; its cause says whether the connection was refused, reset or timed out.
+    const body = error instanceof Error && error.cause ? `${String(error)}: ${String(error.cause)}` : String(error);
+    return { handler, command, status: 0, body, connection: null, sentAt, answeredAt: Date.now() };
   }
 }
 

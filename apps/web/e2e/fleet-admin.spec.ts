@@ -1,5 +1,5 @@
 import { expect, test } from '@playwright/test';
-import type { AuditEntryView, Page as ApiPage, ShipView, SquadronView } from '@catline/contracts';
+import type { AuditEntryView, Page as ApiPage, ShipView, SquadronView, UserView } from '@catline/contracts';
 import { apiAs } from './support/demo-api.js';
 import { openAs } from './support/screens.js';
 
@@ -63,4 +63,32 @@ test("the Fleet screen's Ship choice picks the ship whose readiness steps the ad
   await expect(page.getByLabel('Ship', { exact: true })).toHaveValue(String(second.id));
   await page.getByRole('tab', { name: 'Readiness steps' }).click();
   await expect(page.getByText(`${second.name} readiness steps`)).toBeVisible();
+});
+
+test("a fleet admin adds a catapult officer to the second ship, on one of that ship's catapults", async ({
+  browser,
+}) => {
+  const fleetApi = await apiAs('fleet');
+  const [, second] = (await (await fleetApi.get('/api/ships')).json()) as ShipView[];
+  const catapult = second.catapults[0];
+  const email = `far-cat${Date.now() % 100_000}@catline.example`;
+
+  const page = await openAs(browser, 'fleet', '/people');
+  const form = page.getByRole('form', { name: 'Add a person' });
+  await form.getByLabel('Ship they belong to').selectOption({ label: `${second.name} (${second.hullCode})` });
+  await form.getByLabel('Name').fill('Ora Farcat');
+  await form.getByLabel('E-mail').fill(email);
+  await form.getByLabel('First password').fill('a long first password for the test');
+  await form.getByLabel('Role').selectOption('catapult_officer');
+  await form.getByLabel('Catapult').selectOption({ label: `Cat ${catapult.number} (${catapult.position})` });
+  await form.getByRole('button', { name: 'Add person' }).click();
+  await expect(page.getByTestId('person-added')).toContainText('Ora Farcat added');
+
+  // Only the second ship's catapults were offered, so the person stands on one of them.
+  const people = (await (await fleetApi.get('/api/users', { params: { limit: 200 } })).json()) as ApiPage<UserView>;
+  expect(people.items.find((person) => person.email === email)).toMatchObject({
+    role: 'catapult_officer',
+    catapultId: catapult.id,
+  });
+  await fleetApi.dispose();
 });

@@ -1,5 +1,5 @@
 import { readFile } from 'node:fs/promises';
-import { expect, test } from '@playwright/test';
+import { expect, test, type Page } from '@playwright/test';
 import {
   type AuditEntryView,
   type Page as ApiPage,
@@ -16,6 +16,20 @@ import { openAs } from './support/screens.js';
 // exports holds exactly the entries the screen's filter matches.
 
 const DAY_MS = 86_400_000;
+
+/** The rows of the CSV the screen's Export button downloads, by column name. */
+async function exportedRows(page: Page): Promise<AuditCsvRow[]> {
+  const download = page.waitForEvent('download');
+  await page.getByRole('button', { name: 'Export CSV' }).click();
+  const file = await (await download).path();
+  // The caution lines (# …) open every Catline CSV; the table starts after them.
+  const text = (await readFile(file, 'utf8'))
+    .replace(/^\uFEFF/, '')
+    .split('\r\n')
+    .filter((line) => !line.startsWith('# '))
+    .join('\r\n');
+  return parse(text, { columns: true, skip_empty_lines: true }) as AuditCsvRow[];
+}
 
 interface AuditCsvRow {
   id: string;
@@ -57,16 +71,7 @@ test('the admin filters the audit trail by day and action and exports the same e
   const shown = await entries.count();
   for (let row = 0; row < shown; row += 1) await expect(entries.nth(row)).toContainText('squadron.created');
 
-  const download = page.waitForEvent('download');
-  await page.getByRole('button', { name: 'Export CSV' }).click();
-  const file = await (await download).path();
-  // The caution lines (# …) open every Catline CSV; the table starts after them.
-  const text = (await readFile(file, 'utf8'))
-    .replace(/^\uFEFF/, '')
-    .split('\r\n')
-    .filter((line) => !line.startsWith('# '))
-    .join('\r\n');
-  const rows = parse(text, { columns: true, skip_empty_lines: true }) as AuditCsvRow[];
+  const rows = await exportedRows(page);
 
   // What the filter must hold, asked of the API without the days: the entries whose day on the ship's clock is today.
   const all = (await (
@@ -79,4 +84,33 @@ test('the admin filters the audit trail by day and action and exports the same e
   expect(rows.every((row) => row.at.startsWith(today))).toBe(true);
   expect(rows.map((row) => Number(row['subject id']))).toContain(squadron.id);
   await api.dispose();
+});
+
+test("a fleet admin narrows the trail to one ship, and the CSV holds that ship's entries only", async ({ browser }) => {
+  const fleetApi = await apiAs('fleet');
+  const [first, second] = (await (await fleetApi.get('/api/ships')).json()) as ShipView[];
+  const tag = String(Date.now() % 100_000);
+  for (const ship of [first, second]) {
+    const created = await fleetApi.post('/api/squadrons', {
+      data: {
+        shipId: ship.id,
+        name: `Ship ${ship.id} Wing`,
+        code: `S${ship.id}-${tag}`,
+        email: `s${tag}@catline.example`,
+      },
+    });
+    expect(created.status()).toBe(201);
+  }
+
+  const page = await openAs(browser, 'fleet', '/audit');
+  await page.getByLabel('Action').selectOption('squadron.created');
+  await page.getByLabel('Ship').selectOption({ label: `${second.name} (${second.hullCode})` });
+  const entries = page.getByTestId('audit-entry');
+  await expect(entries.filter({ hasText: `S${second.id}-${tag}` })).toHaveCount(1);
+  await expect(entries.filter({ hasText: `S${first.id}-${tag}` })).toHaveCount(0);
+
+  const rows = await exportedRows(page);
+  expect(rows.length).toBeGreaterThan(0);
+  expect(rows.every((row) => row['ship id'] === String(second.id) && row.action === 'squadron.created')).toBe(true);
+  await fleetApi.dispose();
 });

@@ -152,6 +152,65 @@ describe('audit trail', () => {
     ).toBe(true);
   });
 
+  describe('filters by instants and ship', () => {
+    const csvRows = (text: string) =>
+      text
+        .replace(/^\uFEFF/, '')
+        .split('\r\n')
+        .filter((line) => line.length > 0 && !line.startsWith('# '))
+        .slice(1);
+
+    it('keeps entries from since (included) to until (excluded), in the list and the CSV alike', async () => {
+      const first = await createUser(url, admin, 'observer');
+      const firstAt = (await latest('person.created', first.id))!.at;
+      const second = await createUser(url, admin, 'observer');
+      const secondAt = (await latest('person.created', second.id))!.at;
+      // Each creation hashes a password, so the two stand at different instants; this says so if ever not.
+      expect(Date.parse(secondAt)).toBeGreaterThan(Date.parse(firstAt));
+
+      const range = { action: 'person.created', since: firstAt, until: secondAt };
+      const listed = await entries({ ...range, limit: 200 });
+      expect(listed.items.map((entry) => entry.subjectId)).toEqual([first.id]);
+
+      const csv = await request(url).get('/api/audit/export.csv').query(range).set(bearer(admin));
+      expect(csv.status).toBe(200);
+      const rows = csvRows(csv.text);
+      expect(rows).toHaveLength(1);
+      expect(rows[0]).toContain(`,person.created,person,${first.id},`);
+    });
+
+    it('refuses a range whose until comes before its since, in the list and the CSV, in words', async () => {
+      const reversed = { since: '2027-01-02T00:00:00Z', until: '2027-01-01T00:00:00Z' };
+      for (const path of ['/api/audit', '/api/audit/export.csv']) {
+        const response = await request(url).get(path).query(reversed).set(bearer(admin));
+        expect(response.status).toBe(400);
+        expect(JSON.stringify(response.body.message)).toMatch(/until must not be before since/);
+      }
+      const empty = { since: '2027-01-01T00:00:00Z', until: '2027-01-01T00:00:00Z' };
+      expect((await entries(empty)).total).toBe(0);
+      const notAnInstant = await request(url).get('/api/audit').query({ since: 'yesterday' }).set(bearer(admin));
+      expect(notAnInstant.status).toBe(400);
+      expect(JSON.stringify(notAnInstant.body.message)).toMatch(/since must be an ISO 8601 instant/);
+    });
+
+    it("gives a fleet admin one ship's entries, and a ship's admin nothing of another ship", async () => {
+      const fleet = await signIn(url, fleetAdmin.email);
+      await createUser(url, admin, 'observer');
+      const squadron = await request(url)
+        .post('/api/squadrons')
+        .set(bearer(fleet))
+        .send({ shipId: 2, name: 'Second ship squadron', code: unique('S', 8), email: 'second@catline.example' })
+        .expect(201);
+      const secondShip = await entries({ ship: 2, limit: 200 }, fleet);
+      expect(secondShip.items.map((entry) => entry.subjectId)).toContain(squadron.body.id);
+      expect(secondShip.items.every((entry) => entry.shipId === 2)).toBe(true);
+      const firstShip = await entries({ ship: 1, limit: 200 }, fleet);
+      expect(firstShip.total).toBeGreaterThan(0);
+      expect(firstShip.items.every((entry) => entry.shipId === 1)).toBe(true);
+      expect((await entries({ ship: 2 })).total).toBe(0);
+    });
+  });
+
   describe('sign-ins and passwords', () => {
     it('records a successful sign-in by the person who signed in', async () => {
       const person = await createUser(url, admin, 'pilot');

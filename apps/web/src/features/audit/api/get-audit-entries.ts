@@ -3,9 +3,14 @@ import type { AuditAction, AuditEntryView, Page } from '@catline/contracts';
 import { apiRequest } from '../../../lib/api-client.js';
 import { auditKeys } from './audit-keys.js';
 
+/** What the API filters on; `since`/`until` are instants (see audit-range-model.ts). */
 export interface AuditFilter {
   action: AuditAction | '';
   actor: string;
+  /** A ship's id, or empty for every ship the admin sees. */
+  ship: string;
+  since?: string;
+  until?: string;
 }
 
 export interface AuditQuery extends AuditFilter {
@@ -17,6 +22,9 @@ function filterParams(filter: AuditFilter): URLSearchParams {
   const params = new URLSearchParams();
   if (filter.action) params.set('action', filter.action);
   if (filter.actor.trim()) params.set('actor', filter.actor.trim());
+  if (filter.ship) params.set('ship', filter.ship);
+  if (filter.since) params.set('since', filter.since);
+  if (filter.until) params.set('until', filter.until);
   return params;
 }
 
@@ -38,4 +46,6 @@ export const auditEntriesQueryOptions = (query: AuditQuery) =>
     placeholderData: keepPreviousData,
   });
 
-export const useAuditEntries = (query: AuditQuery) => useQuery(auditEntriesQueryOptions(query));
+/** `enabled` false while the filter cannot be asked (a range that ends before it starts). */
+export const useAuditEntries = (query: AuditQuery, enabled = true) =>
+  useQuery({ ...auditEntriesQueryOptions(query), enabled });

@@ -7,6 +7,7 @@ import {
   shipClock,
   shipIsoTime,
   shipTimeZone,
+  zoneName,
   type AuditAction,
   type AuditEntryView,
 } from '@catline/contracts';
@@ -15,10 +16,12 @@ import { PageHeader } from '../../../components/page-header.js';
 import { Pager } from '../../../components/pager.js';
 import { EmptyState, QueryView } from '../../../components/query-states.js';
 import { SelectInput } from '../../../components/select-field.js';
+import { shipLabel } from '../../../components/ship-picker.js';
 import { errorMessage } from '../../../lib/api-error.js';
 import { useShips } from '../../../lib/queries/ships-query.js';
 import { useFileDownload } from '../../../lib/use-file-download.js';
 import { type AuditFilter, auditExportPath, useAuditEntries } from '../api/get-audit-entries.js';
+import { type AuditDays, auditInstants } from '../audit-range-model.js';
 import { TableScroll } from '../../../components/table-scroll.js';
 
 const ACTION_CHOICES = AUDIT_ACTIONS.map((action) => ({ value: action, label: action.replace(/[._]/g, ' ') }));
@@ -67,17 +70,36 @@ function useEntryTime(): (entry: AuditEntryView) => string {
   };
 }
 
-/** The admin's record of who changed what: newest first, a page at a time, filtered by action and person. */
+/** The filters as the admin sets them: the days are read on the clock of the ship chosen (or the only one). */
+interface AuditChoices extends AuditDays {
+  action: AuditAction | '';
+  actor: string;
+  ship: string;
+}
+
+/** The admin's record of who changed what: newest first, a page at a time, filtered by action, person, ship and days. */
 export function AuditScreen() {
-  const [filter, setFilter] = useState<AuditFilter>({ action: '', actor: '' });
+  const [choices, setChoices] = useState<AuditChoices>({ action: '', actor: '', ship: '', from: '', to: '' });
   const [offset, setOffset] = useState(0);
   const limit = PAGE_SIZE.default;
-  const entries = useAuditEntries({ ...filter, limit, offset });
+  const ships = useShips().data ?? [];
+  const dayShip = ships.find((ship) => String(ship.id) === choices.ship) ?? (ships.length === 1 ? ships[0] : undefined);
+  const zone = dayShip ? shipTimeZone(dayShip.profile) : DEFAULT_SHIP_TIME_ZONE;
+  const range = auditInstants(choices, zone);
+  const filter: AuditFilter = {
+    action: choices.action,
+    actor: choices.actor,
+    ship: choices.ship,
+    ...('instants' in range ? range.instants : {}),
+  };
+  // While the range cannot be asked, the last list stays on screen under the range's problem.
+  const entries = useAuditEntries({ ...filter, limit, offset }, !('problem' in range));
   const entryTime = useEntryTime();
-  const change = (next: Partial<AuditFilter>) => {
-    setFilter((current) => ({ ...current, ...next }));
+  const change = (next: Partial<AuditChoices>) => {
+    setChoices((current) => ({ ...current, ...next }));
     setOffset(0);
   };
+  const zoneNote = `On the ship's clock (${zoneName(zone)})${dayShip ? '' : ': choose a ship for its own'}.`;
 
   return (
     <Stack gap="4">
@@ -86,7 +108,7 @@ export function AuditScreen() {
         <Box w={{ base: 'full', sm: '16rem' }}>
           <FormField label="Action">
             <SelectInput
-              value={filter.action}
+              value={choices.action}
               choices={ACTION_CHOICES}
               placeholder="Every action"
               onChange={(value) => change({ action: value as AuditAction | '' })}
@@ -98,12 +120,44 @@ export function AuditScreen() {
             <Input
               size="sm"
               type="email"
-              value={filter.actor}
+              value={choices.actor}
               onChange={(event) => change({ actor: event.currentTarget.value })}
             />
           </FormField>
         </Box>
-        <ExportButton filter={filter} />
+        {ships.length > 1 && (
+          <Box w={{ base: 'full', sm: '16rem' }}>
+            <FormField label="Ship">
+              <SelectInput
+                value={choices.ship}
+                choices={ships.map((ship) => ({ value: String(ship.id), label: shipLabel(ship) }))}
+                placeholder="Every ship"
+                onChange={(value) => change({ ship: value })}
+              />
+            </FormField>
+          </Box>
+        )}
+        <Box w={{ base: 'full', sm: '11rem' }}>
+          <FormField label="From day" helper={zoneNote}>
+            <Input
+              size="sm"
+              type="date"
+              value={choices.from}
+              onChange={(event) => change({ from: event.currentTarget.value })}
+            />
+          </FormField>
+        </Box>
+        <Box w={{ base: 'full', sm: '11rem' }}>
+          <FormField label="To day (included)" error={'problem' in range ? range.problem : undefined}>
+            <Input
+              size="sm"
+              type="date"
+              value={choices.to}
+              onChange={(event) => change({ to: event.currentTarget.value })}
+            />
+          </FormField>
+        </Box>
+        {'instants' in range && <ExportButton filter={filter} />}
       </HStack>
       <QueryView query={entries} loadingLabel="Reading the audit trail…">
         {(page) =>

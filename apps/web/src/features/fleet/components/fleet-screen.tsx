@@ -1,5 +1,6 @@
 import { useState } from 'react';
-import { Badge, Button, HStack, Stack, Tabs, Text } from '@chakra-ui/react';
+import { useSearchParams } from 'react-router-dom';
+import { Badge, Box, Button, HStack, Stack, Tabs, Text } from '@chakra-ui/react';
 import type { AircraftView, SquadronView } from '@catline/contracts';
 import { ActionDialog } from '../../../components/action-dialog.js';
 import { type Column, DataTable } from '../../../components/data-table.js';
@@ -8,6 +9,7 @@ import { Pager } from '../../../components/pager.js';
 import { QueryView } from '../../../components/query-states.js';
 import { NoticeBanner, refusalNotice, useNotice } from '../../../components/refusal-notice.js';
 import { RoleGate } from '../../../components/role-gate.js';
+import { ShipPicker } from '../../../components/ship-picker.js';
 import { useAircraft, useAircraftPage } from '../../../lib/queries/aircraft-query.js';
 import { useAircraftTypes } from '../../../lib/queries/aircraft-types-query.js';
 import { useShips } from '../../../lib/queries/ships-query.js';
@@ -24,6 +26,24 @@ import { SquadronForm } from './squadron-form.js';
 
 type Doomed = { kind: 'aircraft'; row: AircraftView } | { kind: 'squadron'; row: SquadronView } | null;
 
+/**
+ * The ship whose profile the admin's tabs edit and new rows go to: `?ship=` when it names a listed ship
+ * (a fleet admin's choice, kept over a reload), else the first listed, which for a ship's admin is their own.
+ */
+function useFleetShip() {
+  const ships = useShips();
+  const [params, setParams] = useSearchParams();
+  const listed = ships.data ?? [];
+  const ship = listed.find((candidate) => String(candidate.id) === params.get('ship')) ?? listed[0];
+  const choose = (shipId: number) =>
+    setParams((current) => {
+      const next = new URLSearchParams(current);
+      next.set('ship', String(shipId));
+      return next;
+    });
+  return { ships, choice: { ships: listed, ship, choose } };
+}
+
 export function FleetScreen() {
   const admin = useHasRole('admin');
   const aircraft = useAircraft();
@@ -31,7 +51,8 @@ export function FleetScreen() {
   const aircraftPage = useAircraftPage(aircraftOffset);
   const squadrons = useSquadrons();
   const types = useAircraftTypes();
-  const ships = useShips();
+  const { ships, choice } = useFleetShip();
+  const ship = choice.ship;
   const updateAircraft = useUpdateAircraft();
   const deleteAircraft = useDeleteAircraft();
   const deleteSquadron = useDeleteSquadron();
@@ -152,6 +173,11 @@ export function FleetScreen() {
         subtitle={admin ? 'Aircraft, squadrons, the deck layout and the readiness steps' : 'Aircraft and squadrons'}
       />
       {notice && <NoticeBanner notice={notice} onDismiss={dismiss} />}
+      {admin && (
+        <Box w={{ base: 'full', sm: '20rem' }}>
+          <ShipPicker choice={choice} label="Ship" />
+        </Box>
+      )}
       <Tabs.Root defaultValue="aircraft" variant="line">
         <Tabs.List>
           <Tabs.Trigger value="aircraft">Aircraft</Tabs.Trigger>
@@ -180,11 +206,7 @@ export function FleetScreen() {
             <RoleGate roles={['admin']}>
               <Stack gap="2" borderWidth="1px" rounded="card" p="3">
                 <Text fontWeight="700">Add an aircraft</Text>
-                <AircraftForm
-                  types={types.data ?? []}
-                  squadrons={squadrons.data ?? []}
-                  spots={ships.data?.[0]?.deckSpots ?? []}
-                />
+                <AircraftForm types={types.data ?? []} squadrons={squadrons.data ?? []} spots={ship?.deckSpots ?? []} />
               </Stack>
             </RoleGate>
           </Stack>
@@ -206,7 +228,7 @@ export function FleetScreen() {
             <RoleGate roles={['admin']}>
               <Stack gap="2" borderWidth="1px" rounded="card" p="3">
                 <Text fontWeight="700">Add a squadron</Text>
-                <SquadronForm />
+                <SquadronForm key={ship?.id} shipId={ship?.id} />
               </Stack>
             </RoleGate>
           </Stack>
@@ -214,11 +236,11 @@ export function FleetScreen() {
         {admin && (
           <Tabs.Content value="deck-layout">
             <QueryView query={ships} loadingLabel="Loading the ship…">
-              {(rows) =>
-                rows[0] ? (
+              {() =>
+                ship ? (
                   <Stack gap="4">
-                    <ShipTimeZoneForm key={rows[0].id} ship={rows[0]} />
-                    <DeckLayoutEditor key={rows[0].id} ship={rows[0]} />
+                    <ShipTimeZoneForm key={ship.id} ship={ship} />
+                    <DeckLayoutEditor key={ship.id} ship={ship} />
                   </Stack>
                 ) : (
                   <Text>No ship yet.</Text>
@@ -230,9 +252,7 @@ export function FleetScreen() {
         {admin && (
           <Tabs.Content value="readiness-steps">
             <QueryView query={ships} loadingLabel="Loading the ship…">
-              {(rows) =>
-                rows[0] ? <ReadinessStepsEditor key={rows[0].id} ship={rows[0]} /> : <Text>No ship yet.</Text>
-              }
+              {() => (ship ? <ReadinessStepsEditor key={ship.id} ship={ship} /> : <Text>No ship yet.</Text>)}
             </QueryView>
           </Tabs.Content>
         )}

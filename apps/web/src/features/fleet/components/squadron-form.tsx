@@ -2,12 +2,15 @@ import { Alert, Button, Input, SimpleGrid, Stack } from '@chakra-ui/react';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import { FormField } from '../../../components/form-field.js';
+import { ShipPicker, useShipChoice } from '../../../components/ship-picker.js';
 import { errorMessage } from '../../../lib/api-error.js';
 import { useCreateSquadron } from '../api/create-squadron.js';
 import { blankSquadron, squadronSchema } from '../fleet-model.js';
 
-export function SquadronForm() {
+/** A new squadron, on the ship the screen shows unless a fleet admin picks another. */
+export function SquadronForm({ shipId }: { shipId: number | undefined }) {
   const create = useCreateSquadron();
+  const ship = useShipChoice(shipId);
   const {
     register,
     handleSubmit,
@@ -18,7 +21,9 @@ export function SquadronForm() {
 
   return (
     <form
-      onSubmit={handleSubmit((squadron) => create.mutate(squadron, { onSuccess: () => reset() }))}
+      onSubmit={handleSubmit((squadron) =>
+        create.mutate({ ...squadron, shipId: ship.ship?.id }, { onSuccess: () => reset() }),
+      )}
       noValidate
       aria-label="Add a squadron"
     >
@@ -30,6 +35,7 @@ export function SquadronForm() {
           </Alert.Root>
         )}
         <SimpleGrid columns={{ base: 1, sm: 3 }} gap="3">
+          <ShipPicker choice={ship} label="Ship it belongs to" />
           <FormField label="Name" error={errors.name?.message} required>
             <Input {...register('name')} />
           </FormField>

@@ -2,6 +2,7 @@ import { Alert, Button, Input, NativeSelect, SimpleGrid, Stack } from '@chakra-u
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import { FormField } from '../../../components/form-field.js';
+import { ShipPicker, useShipChoice } from '../../../components/ship-picker.js';
 import { aircraftClassChoices } from '../../../lib/aircraft-class.js';
 import { errorMessage } from '../../../lib/api-error.js';
 import { aircraftTypeSchema, blankAircraftType } from '../aircraft-type-model.js';
@@ -11,6 +12,7 @@ type Field = Exclude<keyof typeof blankAircraftType, 'aircraftClass'>;
 
 export function AircraftTypeForm({ onCreated }: { onCreated: (id: number) => void }) {
   const create = useCreateAircraftType();
+  const ship = useShipChoice();
   const {
     register,
     handleSubmit,
@@ -33,12 +35,15 @@ export function AircraftTypeForm({ onCreated }: { onCreated: (id: number) => voi
   return (
     <form
       onSubmit={handleSubmit((type) =>
-        create.mutate(type, {
-          onSuccess: (created) => {
-            reset();
-            onCreated(created.id);
+        create.mutate(
+          { ...type, shipId: ship.ship?.id },
+          {
+            onSuccess: (created) => {
+              reset();
+              onCreated(created.id);
+            },
           },
-        }),
+        ),
       )}
       noValidate
       aria-label="Add an aircraft type"
@@ -51,6 +56,7 @@ export function AircraftTypeForm({ onCreated }: { onCreated: (id: number) => voi
           </Alert.Root>
         )}
         <SimpleGrid columns={{ base: 1, sm: 2, lg: 4 }} gap="3">
+          <ShipPicker choice={ship} label="Ship it belongs to" />
           {field('designation', 'Designation', undefined, false)}
           {field('name', 'Name', undefined, false)}
           <FormField

@@ -153,7 +153,7 @@ export function PeopleScreen() {
       </QueryView>
       <Stack gap="2" borderWidth="1px" rounded="card" p="3">
         <Text fontWeight="700">Add a person</Text>
-        <UserForm catapults={catapults} squadrons={squadrons.data ?? []} />
+        <UserForm squadrons={squadrons.data ?? []} />
       </Stack>
       {doomed && (
         <ActionDialog

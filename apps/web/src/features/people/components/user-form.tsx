@@ -12,32 +12,44 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm, useWatch } from 'react-hook-form';
 import { SelectControl } from '../../../components/form-controls.js';
 import { FormField } from '../../../components/form-field.js';
+import { ShipPicker, useShipChoice } from '../../../components/ship-picker.js';
 import { errorMessage } from '../../../lib/api-error.js';
 import { useCreateUser } from '../api/create-user.js';
 import { blankUser, userSchema } from '../user-form-model.js';
 
 export const roleChoices = ROLES.map((role) => ({ value: role, label: ROLE_LABELS[role] }));
 
-export function UserForm({ catapults, squadrons }: { catapults: CatapultView[]; squadrons: SquadronView[] }) {
+export function UserForm({ squadrons }: { squadrons: SquadronView[] }) {
   const create = useCreateUser();
+  const ship = useShipChoice();
+  // A catapult officer works a catapult of the ship they join.
+  const catapults: CatapultView[] = ship.ship?.catapults ?? [];
   const {
     register,
     control,
     handleSubmit,
     reset,
+    setValue,
     formState: { errors },
   } = useForm({ resolver: zodResolver(userSchema), defaultValues: blankUser });
+  const chooseShip = (shipId: number) => {
+    ship.choose(shipId);
+    setValue('catapultId', '');
+  };
   const role = useWatch({ control, name: 'role' });
   const [created, setCreated] = useState<{ user: UserView; invited: boolean } | null>(null);
 
   const submit = handleSubmit((person) => {
     setCreated(null);
-    create.mutate(person, {
-      onSuccess: (user) => {
-        setCreated({ user, invited: person.password === undefined });
-        reset();
+    create.mutate(
+      { ...person, shipId: ship.ship?.id },
+      {
+        onSuccess: (user) => {
+          setCreated({ user, invited: person.password === undefined });
+          reset();
+        },
       },
-    });
+    );
   });
 
   return (
@@ -63,6 +75,7 @@ export function UserForm({ catapults, squadrons }: { catapults: CatapultView[]; 
           </Alert.Root>
         )}
         <SimpleGrid columns={{ base: 1, sm: 2, lg: 3 }} gap="3">
+          <ShipPicker choice={{ ...ship, choose: chooseShip }} label="Ship they belong to" />
           <FormField label="Name" error={errors.name?.message} required>
             <Input {...register('name')} />
           </FormField>

@@ -12,7 +12,7 @@ import {
   type LaunchWindow,
   type Projection,
 } from './launch-projection.js';
-import { scheduleLaunches, type SchedulerCatapult } from './launch-scheduler.js';
+import { LaunchScheduler } from './launch-scheduler.js';
 
 /** What an aircraft is flying in the cycle, as far as launch order cares. */
 export type SortieRole = 'tanker' | 'early_warning' | 'spare' | 'mission';
@@ -69,15 +69,17 @@ export interface LineupSuggestion {
 /** Index-based view of the problem for the search. */
 interface SearchSpace {
   readonly earliest: number;
-  /** When taxiing starts: arrivals are this plus the taxi time. */
-  readonly taxiStart: number;
-  readonly pairGapMs: number;
-  readonly catapults: readonly SchedulerCatapult[];
   /** arrival[aircraft][catapult], epoch ms; +Infinity when unreachable. */
   readonly arrival: readonly Float64Array[];
   readonly tier: readonly number[];
   /** Per aircraft, the aircraft (indices) that must leave their spots before it can taxi out; none when undefined. */
   readonly clearAfter: readonly (readonly number[] | undefined)[] | undefined;
+  /** Runs every lineup the search evaluates, reusing its buffers. */
+  readonly scheduler: LaunchScheduler;
+  /** Per aircraft, its taxi arrival at its lane's catapult in the lineup being evaluated. */
+  readonly notBefore: Float64Array;
+  /** Reset interval of each catapult, ms. */
+  readonly resetMs: readonly number[];
   /** Evaluations spent so far, so the search stays within its budget. */
   readonly evaluations: { count: number };
 }
@@ -115,28 +117,24 @@ const EXACT_SEARCH_MAX_AIRCRAFT = 8;
 /** Branches the exact search may visit; a cycle that needs more keeps the heuristic's lineup. */
 const EXACT_SEARCH_BRANCH_BUDGET = 5_000;
 
-/** Each aircraft's launch time in the lineup, by index (NaN when stranded or in no lane). */
-function launchTimes(space: SearchSpace, lanes: Lanes): Float64Array {
-  space.evaluations.count += 1;
-  const notBefore = new Float64Array(space.tier.length);
-  lanes.forEach((lane, catapult) =>
-    lane.forEach((aircraft) => (notBefore[aircraft] = space.arrival[aircraft][catapult])),
-  );
-  return scheduleLaunches({
-    earliest: space.earliest,
-    pairGapMs: space.pairGapMs,
-    catapults: space.catapults,
-    lanes,
-    notBefore,
-    tier: space.tier,
-    fixed: [],
-    taxiStart: space.taxiStart,
-    clearAfter: space.clearAfter,
+/** Each aircraft's taxi arrival at the catapult of its lane, into the search's buffer. */
+function arrivalsIn(space: SearchSpace, lanes: Lanes): Float64Array {
+  lanes.forEach((lane, catapult) => {
+    for (const aircraft of lane) space.notBefore[aircraft] = space.arrival[aircraft][catapult];
   });
+  return space.notBefore;
 }
 
-function evaluate(space: SearchSpace, lanes: Lanes): Score {
-  const times = launchTimes(space, lanes);
+/** Each aircraft's launch time in the lineup, by index (NaN when stranded or in no lane); valid until the next evaluation. */
+function launchTimes(space: SearchSpace, lanes: Lanes): Float64Array {
+  space.evaluations.count += 1;
+  space.scheduler.run(lanes, arrivalsIn(space, lanes));
+  return space.scheduler.times;
+}
+
+/** The score of the lineup the scheduler ran last. */
+function scoreOfRun(space: SearchSpace, lanes: Lanes): Score {
+  const times = space.scheduler.times;
   let stranded = 0;
   let lastLaunch = space.earliest;
   let totalTime = 0;
@@ -153,12 +151,48 @@ function evaluate(space: SearchSpace, lanes: Lanes): Score {
   return { stranded, lastLaunch, totalTime };
 }
 
+function evaluate(space: SearchSpace, lanes: Lanes): Score {
+  launchTimes(space, lanes);
+  return scoreOfRun(space, lanes);
+}
+
+/**
+ * The lineup's score when it beats `toBeat` (always when that is null), else null. The scheduler gives
+ * up on it as soon as a launch falls after `toBeat`'s last one, which decides it when `toBeat` strands
+ * no aircraft; and, given the step of the recorded lineup from which this one differs (see
+ * LaunchScheduler.stepBefore), it starts from there. Counted as one evaluation either way, so the
+ * search's budgets, and so its lineups, stay what a full evaluation of every lineup gave.
+ */
+function evaluateAgainst(
+  space: SearchSpace,
+  lanes: Lanes,
+  toBeat: Score | null,
+  fromStep: number | null,
+): Score | null {
+  space.evaluations.count += 1;
+  const notBefore = arrivalsIn(space, lanes);
+  const latestAllowed = toBeat === null || toBeat.stranded > 0 ? Number.POSITIVE_INFINITY : toBeat.lastLaunch;
+  const finished =
+    fromStep === null
+      ? space.scheduler.run(lanes, notBefore, latestAllowed)
+      : space.scheduler.resume(lanes, notBefore, fromStep, latestAllowed);
+  if (!finished) return null;
+  const score = scoreOfRun(space, lanes);
+  return toBeat === null || isBetter(score, toBeat) ? score : null;
+}
+
+/** Records the lineup as it stands, for evaluations of lineups that differ from it in a place or two. */
+const recordLineup = (space: SearchSpace, lanes: Lanes): void =>
+  space.scheduler.record(lanes, arrivalsIn(space, lanes));
+
 const fitsAt = (space: SearchSpace, lane: readonly number[], position: number, tier: number): boolean =>
   (position === 0 || space.tier[lane[position - 1]] <= tier) &&
   (position === lane.length || space.tier[lane[position]] >= tier);
 
+/** Whether the aircraft at `position` keeps the priority order with its neighbours. */
 const inOrderAround = (space: SearchSpace, lane: readonly number[], position: number): boolean =>
-  fitsAt(space, lane.slice(0, position).concat(lane.slice(position + 1)), position, space.tier[lane[position]]);
+  (position === 0 || space.tier[lane[position - 1]] <= space.tier[lane[position]]) &&
+  (position === lane.length - 1 || space.tier[lane[position + 1]] >= space.tier[lane[position]]);
 
 /** How many aircraft stand in front of one in its row, down to the row's front. */
 function rowDepth(space: SearchSpace): number[] {
@@ -178,16 +212,18 @@ function rowDepth(space: SearchSpace): number[] {
  * aircraft goes to the end of the lane that scores best.
  */
 function construct(space: SearchSpace, order: readonly number[]): Lanes {
-  const lanes: Lanes = space.catapults.map(() => []);
+  const lanes: Lanes = space.resetMs.map(() => []);
   const depth = rowDepth(space);
   for (const aircraft of [...order].sort((a, b) => space.tier[a] - space.tier[b] || depth[a] - depth[b])) {
     let best: { lane: number; score: Score } | null = null;
+    recordLineup(space, lanes);
     for (let catapult = 0; catapult < lanes.length; catapult += 1) {
       if (!Number.isFinite(space.arrival[aircraft][catapult])) continue;
+      const step = space.scheduler.stepBefore(catapult, lanes[catapult].length);
       lanes[catapult].push(aircraft);
-      const score = evaluate(space, lanes);
+      const score = evaluateAgainst(space, lanes, best?.score ?? null, step);
       lanes[catapult].pop();
-      if (best === null || isBetter(score, best.score)) best = { lane: catapult, score };
+      if (score !== null) best = { lane: catapult, score };
     }
     if (best !== null) lanes[best.lane].push(aircraft);
   }
@@ -199,6 +235,7 @@ function relocate(space: SearchSpace, lanes: Lanes, aircraft: number, current: S
   const from = lanes.findIndex((lane) => lane.includes(aircraft));
   const fromPosition = lanes[from].indexOf(aircraft);
   lanes[from].splice(fromPosition, 1);
+  recordLineup(space, lanes);
   let best: { lane: number; position: number; score: Score } | null = null;
   for (let catapult = 0; catapult < lanes.length; catapult += 1) {
     if (!Number.isFinite(space.arrival[aircraft][catapult])) continue;
@@ -206,10 +243,11 @@ function relocate(space: SearchSpace, lanes: Lanes, aircraft: number, current: S
     for (let position = 0; position <= lane.length; position += 1) {
       if ((catapult === from && position === fromPosition) || !fitsAt(space, lane, position, space.tier[aircraft]))
         continue;
+      const step = space.scheduler.stepBefore(catapult, position);
       lane.splice(position, 0, aircraft);
-      const score = evaluate(space, lanes);
+      const score = evaluateAgainst(space, lanes, best?.score ?? current, step);
       lane.splice(position, 1);
-      if (isBetter(score, best?.score ?? current)) best = { lane: catapult, position, score };
+      if (score !== null) best = { lane: catapult, position, score };
     }
   }
   if (best === null) {
@@ -220,7 +258,10 @@ function relocate(space: SearchSpace, lanes: Lanes, aircraft: number, current: S
   return best.score;
 }
 
-/** Swaps two aircraft's places when both can use the other's catapult and that scores better. */
+/**
+ * Swaps two aircraft's places when both can use the other's catapult and that scores better; the
+ * lineup before the swap must be the one recorded.
+ */
 function swap(
   space: SearchSpace,
   lanes: Lanes,
@@ -234,8 +275,9 @@ function swap(
   lanes[a[0]][a[1]] = second;
   lanes[b[0]][b[1]] = first;
   if (inOrderAround(space, lanes[a[0]], a[1]) && inOrderAround(space, lanes[b[0]], b[1])) {
-    const score = evaluate(space, lanes);
-    if (isBetter(score, current)) return score;
+    const step = Math.min(space.scheduler.stepBefore(a[0], a[1]), space.scheduler.stepBefore(b[0], b[1]));
+    const score = evaluateAgainst(space, lanes, current, step);
+    if (score !== null) return score;
   }
   lanes[a[0]][a[1]] = first;
   lanes[b[0]][b[1]] = second;
@@ -255,12 +297,14 @@ function improve(space: SearchSpace, lanes: Lanes): { lanes: Lanes; score: Score
       }
     }
     const places = lanes.flatMap((lane, catapult) => lane.map((_, position): [number, number] => [catapult, position]));
+    recordLineup(space, lanes);
     for (let i = 0; i < places.length; i += 1) {
       for (let j = i + 1; j < places.length; j += 1) {
         const score = swap(space, lanes, places[i], places[j], current);
         if (score !== null) {
           current = score;
           improved = true;
+          recordLineup(space, lanes);
         }
       }
     }
@@ -330,6 +374,14 @@ function iterate(space: SearchSpace, start: { lanes: Lanes; score: Score }): { l
   return best;
 }
 
+/** The aircraft whose launch is the lineup's last, in lane order. */
+function launchingLast(lanes: Lanes, times: Float64Array): number[] {
+  let last = Number.NEGATIVE_INFINITY;
+  for (const lane of lanes)
+    for (const aircraft of lane) if (Number.isFinite(times[aircraft])) last = Math.max(last, times[aircraft]);
+  return lanes.flatMap((lane) => lane.filter((aircraft) => times[aircraft] === last));
+}
+
 /**
  * Two-aircraft moves that neither a single move nor the kicks find reliably: one aircraft goes to
  * another place, even one that alone makes the lineup worse, and then an aircraft now launching last
@@ -354,15 +406,8 @@ function pairMoves(space: SearchSpace, found: { lanes: Lanes; score: Score }): {
           continue;
         if (space.evaluations.count >= budget) break;
         lane.splice(position, 0, first);
-        const times = launchTimes(space, lanes);
-        const lastLaunch = Math.max(
-          ...lanes
-            .flat()
-            .map((aircraft) => times[aircraft])
-            .filter(Number.isFinite),
-        );
-        for (const second of lanes.flat()) {
-          if (second === first || times[second] !== lastLaunch) continue;
+        for (const second of launchingLast(lanes, launchTimes(space, lanes))) {
+          if (second === first) continue;
           const score = relocate(space, lanes, second, current);
           if (score !== null) return score;
         }
@@ -394,7 +439,7 @@ function lastLaunchBound(space: SearchSpace, lanes: Lanes, rest: number): number
   const ends = lanes.map((lane, catapult) => {
     const arrivals = lane.map((aircraft) => Math.max(space.earliest, space.arrival[aircraft][catapult]));
     arrivals.sort((a, b) => a - b);
-    const reset = space.catapults[catapult].resetMs;
+    const reset = space.resetMs[catapult];
     return arrivals.reduce(
       (end, arrival, j) => Math.max(end, arrival + (arrivals.length - 1 - j) * reset),
       space.earliest,
@@ -403,7 +448,7 @@ function lastLaunchBound(space: SearchSpace, lanes: Lanes, rest: number): number
   const counts = lanes.map((lane) => lane.length);
   for (let placed = 0; placed < rest; placed += 1) {
     const cost = (catapult: number): number =>
-      Math.max(ends[catapult], space.earliest + counts[catapult] * space.catapults[catapult].resetMs);
+      Math.max(ends[catapult], space.earliest + counts[catapult] * space.resetMs[catapult]);
     const cheapest = ends.reduce((chosen, _, catapult) => (cost(catapult) < cost(chosen) ? catapult : chosen), 0);
     ends[cheapest] = cost(cheapest);
     counts[cheapest] += 1;
@@ -421,7 +466,7 @@ function lastLaunchBound(space: SearchSpace, lanes: Lanes, rest: number): number
 function provenBest(space: SearchSpace, found: { lanes: Lanes; score: Score }): { lanes: Lanes; score: Score } {
   const order = found.lanes.flat().sort((a, b) => space.tier[a] - space.tier[b]);
   if (order.length > EXACT_SEARCH_MAX_AIRCRAFT) return found;
-  const lanes: Lanes = space.catapults.map(() => []);
+  const lanes: Lanes = space.resetMs.map(() => []);
   let best = found;
   let branches = 0;
   const search = (next: number): void => {
@@ -430,8 +475,8 @@ function provenBest(space: SearchSpace, found: { lanes: Lanes; score: Score }): 
     const toBeat = best.score.stranded > 0 ? Number.POSITIVE_INFINITY : best.score.lastLaunch;
     if (branches > EXACT_SEARCH_BRANCH_BUDGET || lastLaunchBound(space, lanes, order.length - next) >= toBeat) return;
     if (next === order.length) {
-      const score = evaluate(space, lanes);
-      if (isBetter(score, best.score)) best = { lanes: lanes.map((lane) => [...lane]), score };
+      const score = evaluateAgainst(space, lanes, best.score, null);
+      if (score !== null) best = { lanes: lanes.map((lane) => [...lane]), score };
       return;
     }
     const aircraft = order[next];
@@ -500,27 +545,38 @@ export function suggestLineup(input: SuggestionInput): LineupSuggestion {
   const arrival = input.aircraft.map((aircraft, index) =>
     blocked.has(aircraft.id) ? Float64Array.from(open, () => Number.POSITIVE_INFINITY) : reachable[index],
   );
+  // Left out when no aircraft waits on another, so the scheduler's inner loop skips the rule entirely.
+  const clearAfter =
+    input.clearBefore === undefined || Object.keys(input.clearBefore).length === 0
+      ? undefined
+      : ids.map((id) =>
+          blocked.has(id) ? undefined : input.clearBefore?.[id]?.map((front) => indexOf.get(front) ?? -1),
+        );
+  const tier = clearingTiers(
+    ids,
+    input.aircraft.map((aircraft) => priorityTier(aircraft.priority)),
+    input.clearBefore,
+  );
+  const catapults = open.map((catapult) => ({
+    resetMs: secondsToMilliseconds(catapult.resetInterval),
+    group: catapult.pairId,
+  }));
   const space: SearchSpace = {
     earliest,
-    taxiStart: input.cycleStart,
-    // Left out when no aircraft waits on another, so the search's inner loop skips the rule entirely.
-    clearAfter:
-      input.clearBefore === undefined || Object.keys(input.clearBefore).length === 0
-        ? undefined
-        : ids.map((id) =>
-            blocked.has(id) ? undefined : input.clearBefore?.[id]?.map((front) => indexOf.get(front) ?? -1),
-          ),
-    pairGapMs: secondsToMilliseconds(input.pairMinimumGap),
-    catapults: open.map((catapult) => ({
-      resetMs: secondsToMilliseconds(catapult.resetInterval),
-      group: catapult.pairId,
-    })),
+    clearAfter,
     arrival,
-    tier: clearingTiers(
-      ids,
-      input.aircraft.map((aircraft) => priorityTier(aircraft.priority)),
-      input.clearBefore,
-    ),
+    tier,
+    scheduler: new LaunchScheduler({
+      earliest,
+      pairGapMs: secondsToMilliseconds(input.pairMinimumGap),
+      catapults,
+      tier,
+      fixed: [],
+      taxiStart: input.cycleStart,
+      clearAfter,
+    }),
+    notBefore: new Float64Array(ids.length),
+    resetMs: catapults.map((catapult) => catapult.resetMs),
     evaluations: { count: 0 },
   };
   const placeable = input.aircraft.flatMap((_, index) => (arrival[index].some(Number.isFinite) ? [index] : []));

@@ -115,8 +115,11 @@ describe('ownership of catapult and slot commands', () => {
   });
 
   it("refuses every readiness step to the other catapult's crew, and an undo to whoever did not take the step", async () => {
+    const strangersToUndo: Strangers = [...OTHER_CREW, [deckEdgeOperator(1), 'not_your_step']];
+    // Signed in before the step: a sign-in (argon2) inside the undo's 10 s on a loaded machine let the window close.
+    await Promise.all(strangersToUndo.map(([email]) => deck.token(email)));
     expect((await stepsUpTo('weight_agreed')).agreedWeightLb).toBe((await deck.slot(cycleId, slotId)).grossWeightLb);
-    const undone = await ownedBy(CAT_1, [...OTHER_CREW, [deckEdgeOperator(1), 'not_your_step']], 'undo', slotVersion);
+    const undone = await ownedBy(CAT_1, strangersToUndo, 'undo', slotVersion);
     expect(undone).toMatchObject({ status: 'on_catapult', agreedWeightLb: null });
     expect((await stepsUpTo()).status).toBe('pilot_ready');
   });

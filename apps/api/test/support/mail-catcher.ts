@@ -60,10 +60,13 @@ export class MailCatcher {
       '--silent',
     ];
     this.server = spawn(process.execPath, [MAILDEV, ...args.map(String)], { stdio: 'ignore' });
-    const deadline = Date.now() + 15_000;
+    // A loaded 2-core machine has taken more than 15 s to start it.
+    const deadline = Date.now() + 60_000;
     while (!(await this.answers())) {
       if (Date.now() > deadline || this.server.exitCode !== null)
-        throw new Error(`maildev did not start on ${this.smtpPort}/${this.webPort}`);
+        throw new Error(
+          `maildev did not start on ${this.smtpPort}/${this.webPort} (${this.server.exitCode === null ? 'no answer in 60 s' : `exit code ${this.server.exitCode}`})`,
+        );
       await new Promise((resolve) => setTimeout(resolve, 100));
     }
   }

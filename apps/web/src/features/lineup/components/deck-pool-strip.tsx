@@ -1,4 +1,4 @@
-import { useState, type ReactNode } from 'react';
+import type { ReactNode } from 'react';
 import { Box, Button, Flex, Stack, Text } from '@chakra-ui/react';
 import { useDroppable } from '@dnd-kit/core';
 import { horizontalListSortingStrategy, SortableContext } from '@dnd-kit/sortable';
@@ -12,16 +12,18 @@ export function DeckPoolStrip({
   slotIds,
   children,
   downList,
-  defaultOpen,
+  open,
+  onToggle,
   action,
 }: {
   slotIds: number[];
   children: ReactNode;
   downList: ReactNode;
-  defaultOpen: boolean;
+  /** Whether its cards are shown: the board lays out the band around the strip by it. */
+  open: boolean;
+  onToggle: () => void;
   action: ReactNode;
 }) {
-  const [open, setOpen] = useState(defaultOpen);
   const { setNodeRef, isOver } = useDroppable({ id: 'pool' });
   return (
     <Flex
@@ -55,7 +57,7 @@ export function DeckPoolStrip({
           fontSize="md"
           fontWeight="700"
           aria-expanded={open}
-          onClick={() => setOpen(!open)}
+          onClick={onToggle}
           data-testid="deck-pool-toggle"
         >
           {open ? '▾' : '▸'} Deck pool ({slotIds.length})
@@ -76,7 +78,8 @@ export function DeckPoolStrip({
         </SortableContext>
       )}
       {!open && (
-        <Text alignSelf="center" fontSize="sm" color="fg.muted" truncate textStyle="figure">
+        // Where the folded strip shares its row with the figures and the warnings, they need the width.
+        <Text alignSelf="center" fontSize="sm" color="fg.muted" truncate textStyle="figure" hideFrom="lg">
           {slotIds.length === 0 ? 'Every aircraft has a catapult.' : 'Open it to drag an aircraft to a catapult.'}
         </Text>
       )}

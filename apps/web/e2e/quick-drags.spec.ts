@@ -10,6 +10,7 @@ const SIDES = ['C21', 'C22', 'C23'];
 const inputs = [
   { name: 'mouse', viewport: { width: 1366, height: 768 }, touch: false, drag: dragWithMouse },
   { name: 'touch', viewport: { width: 1024, height: 768 }, touch: true, drag: dragWithTouch },
+  { name: 'touch upright', viewport: { width: 820, height: 1180 }, touch: true, drag: dragWithTouch },
 ] as const;
 
 for (const input of inputs) {

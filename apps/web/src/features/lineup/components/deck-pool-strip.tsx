@@ -1,6 +1,7 @@
 import type { ReactNode } from 'react';
 import { Box, Button, Flex, Stack, Text } from '@chakra-ui/react';
 import { useDroppable } from '@dnd-kit/core';
+import { useFiguresLive } from '../../../components/live-figures.js';
 import { horizontalListSortingStrategy, SortableContext } from '@dnd-kit/sortable';
 import { slotItemId } from '../hooks/use-lineup-drag.js';
 
@@ -25,6 +26,9 @@ export function DeckPoolStrip({
   action: ReactNode;
 }) {
   const { setNodeRef, isOver } = useDroppable({ id: 'pool' });
+  // Not live, the cards' controls are disabled and a strip to scroll would hold nothing the keyboard can reach:
+  // the cards wrap instead, every one in sight.
+  const scrolls = useFiguresLive();
   return (
     <Flex
       as="section"
@@ -67,7 +71,16 @@ export function DeckPoolStrip({
       </Stack>
       {open && (
         <SortableContext id="pool" items={slotIds.map(slotItemId)} strategy={horizontalListSortingStrategy}>
-          <Flex gap="2" flex="1" minW="0" overflowX="auto" align="stretch" p="0.5" data-testid="deck-pool-cards">
+          <Flex
+            gap="2"
+            flex="1"
+            minW="0"
+            overflowX={scrolls ? 'auto' : undefined}
+            wrap={scrolls ? undefined : 'wrap'}
+            align="stretch"
+            p="0.5"
+            data-testid="deck-pool-cards"
+          >
             {children}
             {slotIds.length === 0 && (
               <Box alignSelf="center" color="fg.muted" fontSize="sm" px="2">

@@ -1,4 +1,5 @@
 import { Flex, List, Text } from '@chakra-ui/react';
+import { useFiguresLive } from '../../../components/live-figures.js';
 import type { LineupWarning, WarningKind } from '../lineup-model.js';
 
 const palette: Record<WarningKind, string> = {
@@ -22,6 +23,9 @@ export function LineupWarnings({
   warnings: LineupWarning[];
   labelBeside?: boolean;
 }) {
+  // A stale board's controls are disabled, and a box to scroll with nothing to focus in it is out of the
+  // keyboard's reach: not live, the band shows every warning instead.
+  const scrolls = useFiguresLive();
   return (
     <Flex
       as="section"
@@ -44,7 +48,15 @@ export function LineupWarnings({
           None: every aircraft in a lane is go and within the window.
         </Text>
       ) : (
-        <List.Root gap="0.5" maxH="2.75rem" overflowY="auto" ps="0" listStyleType="none" tabIndex={0} minW="0">
+        <List.Root
+          gap="0.5"
+          maxH={scrolls ? '2.75rem' : undefined}
+          overflowY={scrolls ? 'auto' : undefined}
+          ps="0"
+          listStyleType="none"
+          tabIndex={scrolls ? 0 : undefined}
+          minW="0"
+        >
           {warnings.map((warning) => (
             <List.Item
               key={warning.key}

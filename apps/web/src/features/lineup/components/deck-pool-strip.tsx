@@ -26,8 +26,8 @@ export function DeckPoolStrip({
   action: ReactNode;
 }) {
   const { setNodeRef, isOver } = useDroppable({ id: 'pool' });
-  // Not live, the cards' controls are disabled and a strip to scroll would hold nothing the keyboard can reach:
-  // the cards wrap instead, every one in sight.
+  // Not live, the cards' controls are disabled with their fieldset, where axe counts a scroll box as out of the
+  // keyboard's reach: the cards wrap instead, every one in sight.
   const scrolls = useFiguresLive();
   return (
     <Flex

@@ -23,8 +23,8 @@ export function LineupWarnings({
   warnings: LineupWarning[];
   labelBeside?: boolean;
 }) {
-  // A stale board's controls are disabled, and a box to scroll with nothing to focus in it is out of the
-  // keyboard's reach: not live, the band shows every warning instead.
+  // Not live, the board sits in a disabled fieldset, where axe counts a scroll box as out of the keyboard's
+  // reach: then the band shows every warning instead.
   const scrolls = useFiguresLive();
   return (
     <Flex

@@ -43,22 +43,41 @@ function collectErrors(page: Page, errors: string[]) {
   page.on('pageerror', (error) => errors.push(error.message));
 }
 
-/** Kept for a person to look over, at each size the crews use: what the screen shows first, without scrolling. */
-async function keepScreenshots(page: Page, path: string) {
-  const name = path.split(/[?#]/)[0].slice(1).replaceAll('/', '-');
+/**
+ * axe's findings at each size the crews use, as "<when> at 1366×768: …", keeping on the way a screenshot of
+ * what the screen shows first, without scrolling, named `<screen>[-<suffix>]-<width>x<height>.png`.
+ */
+async function axeAtEverySize(page: Page, when: string, path: string, suffix = '') {
+  const name = path.split(/[?#]/)[0].slice(1).replaceAll('/', '-') + suffix;
+  const found: string[] = [];
   for (const size of SIZES) {
     await page.setViewportSize(size);
+    for (const violation of await axeViolations(page))
+      found.push(`${when} at ${size.width}×${size.height}: ${violation}`);
     await page.screenshot({ path: `test-results/every-screen/${name}-${size.width}x${size.height}.png` });
   }
   await page.setViewportSize(TABLET);
+  return found;
+}
+
+async function chooseTheme(page: Page, theme: 'day' | 'night') {
+  await page.getByLabel('Theme').selectOption(theme);
+  if (theme === 'night') await expect(page.locator('html')).toHaveClass(/dark/);
+  else await expect(page.locator('html')).not.toHaveClass(/dark/);
 }
 
 const screens = [
-  { who: 'handler', path: (cycle: number) => `/lineup?cycle=${cycle}`, ready: 'lane' },
-  { who: 'handler', path: (cycle: number) => `/deck?cycle=${cycle}`, ready: 'landing-area' },
-  { who: 'cat1', path: (cycle: number) => `/cat-station?cycle=${cycle}`, ready: 'current-aircraft', station: true },
-  { who: 'pilot', path: (cycle: number) => `/my-launch?cycle=${cycle}`, ready: 'my-slot', station: true },
-  { who: 'airops', path: () => '/cycles' },
+  { who: 'handler', path: (cycle: number) => `/lineup?cycle=${cycle}`, ready: 'lane', live: true },
+  { who: 'handler', path: (cycle: number) => `/deck?cycle=${cycle}`, ready: 'landing-area', live: true },
+  {
+    who: 'cat1',
+    path: (cycle: number) => `/cat-station?cycle=${cycle}`,
+    ready: 'current-aircraft',
+    station: true,
+    live: true,
+  },
+  { who: 'pilot', path: (cycle: number) => `/my-launch?cycle=${cycle}`, ready: 'my-slot', station: true, live: true },
+  { who: 'airops', path: () => '/cycles', ready: 'live-figures', live: true },
   { who: 'airops', path: () => '/reports' },
   { who: 'airops', path: (cycle: number) => `/reports/replay?cycle=${cycle}` },
   { who: 'airops', path: (cycle: number) => `/reports/launch-sheet?cycle=${cycle}` },
@@ -69,9 +88,9 @@ const screens = [
   { who: 'admin', path: () => '/audit' },
 ];
 
-// Two axe runs and three screenshots each: the report screens of a long-running test database need more than
-// the default minute on a loaded machine (the clean-clone run timed out on /reports).
-test.describe.configure({ timeout: 150_000 });
+// Axe at three sizes by day and by night (and greyed, for a live screen), with a screenshot each time: the
+// report screens of a long-running test database need more than the default minute on a loaded machine.
+test.describe.configure({ timeout: 240_000 });
 
 let cycleId: number;
 test.beforeAll(async () => {
@@ -79,25 +98,31 @@ test.beforeAll(async () => {
 });
 
 for (const screen of screens) {
-  test(`${screen.path(0).split('?')[0]} as ${screen.who}: no error logged, no axe violation by day or night, controls a finger can hit`, async ({
+  test(`${screen.path(0).split('?')[0]} as ${screen.who}: no error logged, no axe violation by day or night${screen.live ? ' nor greyed' : ''} at any size, controls a finger can hit`, async ({
     browser,
   }) => {
     const path = screen.path(cycleId);
-    const page = await openAs(browser, screen.who, path, TABLET, true);
     const errors: string[] = [];
-    collectErrors(page, errors);
+    // Listening from the first request: an error while the screen first loads, or while signing in, counts too.
+    const page = await openAs(browser, screen.who, path, TABLET, true, (opened) => collectErrors(opened, errors));
     if (screen.ready) await expect(page.getByTestId(screen.ready).first()).toBeVisible();
     await page.waitForLoadState('networkidle');
     const found = (await smallControls(page, TOUCH_PX)).map((small) => `${small} is under ${TOUCH_PX} px`);
     if (screen.station)
       for (const small of await smallControls(page, STATION_ACTION_PX, 'main button, main input'))
         found.push(`${small} is under ${STATION_ACTION_PX} px on a station`);
-    for (const violation of await axeViolations(page)) found.push(`by day: ${violation}`);
-    await keepScreenshots(page, path);
-    await page.getByLabel('Theme').selectOption('night');
-    await expect(page.locator('html')).toHaveClass(/dark/);
-    for (const violation of await axeViolations(page)) found.push(`by night: ${violation}`);
-    for (const error of errors) found.push(`logged: ${error}`);
+    found.push(...(await axeAtEverySize(page, 'by day', path)));
+    await chooseTheme(page, 'night');
+    found.push(...(await axeAtEverySize(page, 'by night', path, '-night')));
+    // A normal visit ends here: going offline makes the live link's own failures show in the console.
+    found.push(...errors.map((error) => `logged: ${error}`));
+    if (screen.live) {
+      await page.context().setOffline(true);
+      await expect(page.getByTestId('not-live')).toBeVisible();
+      found.push(...(await axeAtEverySize(page, 'greyed by night', path, '-not-live-night')));
+      await chooseTheme(page, 'day');
+      found.push(...(await axeAtEverySize(page, 'greyed by day', path, '-not-live')));
+    }
     expect(found).toEqual([]);
     await page.context().close();
   });
@@ -112,7 +137,7 @@ const pagesBeforeSignIn = [
 ];
 
 for (const before of pagesBeforeSignIn) {
-  test(`${before.path.split('#')[0]} before sign-in: no error logged, no axe violation by day or night, controls a finger can hit`, async ({
+  test(`${before.path.split('#')[0]} before sign-in: no error logged, no axe violation by day or night at any size, controls a finger can hit`, async ({
     browser,
   }) => {
     const context = await browser.newContext({ viewport: TABLET, hasTouch: true });
@@ -123,14 +148,13 @@ for (const before of pagesBeforeSignIn) {
     await expect(page.getByRole('button', { name: before.ready }).first()).toBeVisible({ timeout: 15_000 });
     await page.waitForLoadState('networkidle');
     const found = (await smallControls(page, TOUCH_PX)).map((small) => `${small} is under ${TOUCH_PX} px`);
-    for (const violation of await axeViolations(page)) found.push(`by day: ${violation}`);
-    await keepScreenshots(page, before.path);
+    found.push(...(await axeAtEverySize(page, 'by day', before.path)));
     // No theme switch before sign-in: the tablet's night choice, made earlier, is what these pages follow.
     await page.evaluate(() => localStorage.setItem('catline.theme', 'night'));
     await page.reload();
     await expect(page.locator('html')).toHaveClass(/dark/);
     await expect(page.getByRole('button', { name: before.ready }).first()).toBeVisible({ timeout: 15_000 });
-    for (const violation of await axeViolations(page)) found.push(`by night: ${violation}`);
+    found.push(...(await axeAtEverySize(page, 'by night', before.path, '-night')));
     for (const error of errors) found.push(`logged: ${error}`);
     expect(found).toEqual([]);
     await context.close();

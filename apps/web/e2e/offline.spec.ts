@@ -91,14 +91,16 @@ test('with the network gone for 20 s the board and the pilot’s screen show sta
   await Promise.all([pilot.context().close(), board.context().close()]);
 });
 
-test('with the network gone the Cat station and the Deck screen show stale figures and refuse too, then recover', async ({
+test('with the network gone the Cat station, the Deck screen and the Cycles list show stale figures and refuse too, then recover', async ({
   browser,
 }) => {
-  test.setTimeout(120_000);
+  test.setTimeout(150_000);
   const cycle = await launchingCycle();
   const station = await openAs(browser, 'cat1', `/cat-station?cycle=${cycle.id}`, TABLET, true);
   const deck = await openAs(browser, 'handler', `/deck?cycle=${cycle.id}`, TABLET, true);
-  for (const page of [station, deck]) {
+  const list = await openAs(browser, 'airops', '/cycles', TABLET, true);
+  const pages = [station, deck, list];
+  for (const page of pages) {
     await expect(page.getByTestId('connection-state')).toHaveText('Live');
     await expect(page.getByTestId('live-figures')).toHaveAttribute('data-live', 'true');
   }
@@ -106,19 +108,28 @@ test('with the network gone the Cat station and the Deck screen show stale figur
   await expect(station.getByTestId('current-aircraft')).toHaveAttribute('data-side-number', 'C21');
   await expect(taxi).toBeEnabled();
   await expect(enabledControls(deck).first(), 'the deck offers its actions while live').toBeVisible();
+  // The cycle's panel under the list: its caution, and the air operations' actions on it.
+  await list.getByRole('button', { name: `Show cycle ${cycle.number}` }).click();
+  await expect(list.getByTestId('cycle-panel')).toBeVisible();
+  await expect(enabledControls(list).first(), 'the list offers its actions while live').toBeVisible();
 
   const wentOffline = Date.now();
-  await Promise.all([station.context().setOffline(true), deck.context().setOffline(true)]);
-  for (const page of [station, deck]) {
+  await Promise.all(pages.map((page) => page.context().setOffline(true)));
+  for (const page of pages) {
     await expectStale(page);
     await expect(enabledControls(page), 'nothing to press on a stale screen').toHaveCount(0);
   }
   await expect(taxi).toBeDisabled();
-  for (const page of [station, deck]) await waitOutOutage(page, wentOffline);
+  // A cycle created while the list is offline: the list shows it only once it has caught up.
+  const { cycle: created } = await planCycle({ aircraft: [] });
+  const createdRow = list.getByRole('button', { name: `Show cycle ${created.number}` });
+  for (const page of pages) await waitOutOutage(page, wentOffline);
+  await expect(createdRow, 'the stale list shows no change').toHaveCount(0);
 
-  await Promise.all([station.context().setOffline(false), deck.context().setOffline(false)]);
-  for (const page of [station, deck]) await expectLiveAgain(page);
+  await Promise.all(pages.map((page) => page.context().setOffline(false)));
+  for (const page of pages) await expectLiveAgain(page);
   await expect(taxi).toBeEnabled();
   await expect(enabledControls(deck).first()).toBeVisible();
-  await Promise.all([station.context().close(), deck.context().close()]);
+  await expect(createdRow, 'the list caught up with what it missed').toBeEnabled();
+  await Promise.all(pages.map((page) => page.context().close()));
 });

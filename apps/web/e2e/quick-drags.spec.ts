@@ -10,7 +10,12 @@ const SIDES = ['C21', 'C22', 'C23'];
 const inputs = [
   { name: 'mouse', viewport: { width: 1366, height: 768 }, touch: false, drag: dragWithMouse },
   { name: 'touch', viewport: { width: 1024, height: 768 }, touch: true, drag: dragWithTouch },
+  { name: 'touch upright', viewport: { width: 820, height: 1180 }, touch: true, drag: dragWithTouch },
 ] as const;
+
+// Six real drags in a browser slowed to a tablet's speed take about a minute on a loaded test machine: the
+// default minute timed out mid-drag (the drags themselves all went through when given two).
+test.describe.configure({ timeout: 120_000 });
 
 for (const input of inputs) {
   test(`by ${input.name}, a drag started ${PAUSE_AFTER_DROP_MS} ms after the previous drop moves its aircraft`, async ({

@@ -31,6 +31,10 @@ export interface LiveState {
   caughtUp: ReadonlySet<number>;
   /** When each cycle that was caught up stopped being so (the link dropped, or the screen left it). */
   liveUntil: ReadonlyMap<number, Date>;
+  /** The lists of cycles on show have been read again since the link last came up; the feed keeps them so. */
+  listsCaughtUp: boolean;
+  /** When the lists last stopped being caught up (the link dropped). */
+  listsLiveUntil: Date | undefined;
 }
 
 /**
@@ -48,12 +52,16 @@ class LiveCycles {
   private offlineTimer: ReturnType<typeof setTimeout> | undefined;
   private lingerTimer: ReturnType<typeof setTimeout> | undefined;
   private retryDelayMs = 1_000;
+  /** Counts the lists' catch-ups, so an answer to one the link has since outlived is not taken as current. */
+  private listsRound = 0;
   /** What screens show about the link; they read it with `useStore`. */
   readonly state = createStore<LiveState>(() => ({
     connection: { kind: 'connecting' },
     refusals: new Map(),
     caughtUp: new Set(),
     liveUntil: new Map(),
+    listsCaughtUp: false,
+    listsLiveUntil: undefined,
   }));
   readonly sync = new LineupSync(queryClient, (cycleId) => this.resync(cycleId));
 
@@ -76,7 +84,8 @@ class LiveCycles {
   followCycleList(): () => void {
     clearTimeout(this.lingerTimer);
     this.listFollowers += 1;
-    this.open();
+    const socket = this.open();
+    if (socket.connected && !this.state.getState().listsCaughtUp) this.catchUpCycleLists();
     return () => {
       this.listFollowers -= 1;
       this.closeWhenIdle();
@@ -96,9 +105,15 @@ class LiveCycles {
       socket.connect();
       return;
     }
+    this.linkUp();
+  }
+
+  /** The link is up: every cycle followed, and the lists on show, catch up with what the server has now. */
+  private linkUp() {
     clearTimeout(this.offlineTimer);
     this.setConnection({ kind: 'live' });
     for (const cycleId of this.watchers.keys()) this.join(cycleId);
+    if (this.listFollowers > 0) this.catchUpCycleLists();
   }
 
   private unwatch(cycleId: number) {
@@ -119,9 +134,25 @@ class LiveCycles {
       this.lingerTimer = setTimeout(() => this.close(), LINGER_MS);
   }
 
-  /** Every list of cycles is read again: a status may have changed (or been missed while the link was down). */
-  private refreshCycleLists() {
-    void queryClient.invalidateQueries({ queryKey: cycleKeys.all });
+  /**
+   * Every list of cycles is read again: a status may have changed, or been missed while the link was down.
+   * The lists are current once read while the link stays up; a list that failed to read is not, until read
+   * again shortly.
+   */
+  private catchUpCycleLists() {
+    const round = ++this.listsRound;
+    const stillCurrent = () => round === this.listsRound && this.state.getState().connection.kind === 'live';
+    queryClient.invalidateQueries({ queryKey: cycleKeys.all }, { throwOnError: true }).then(
+      () => {
+        if (stillCurrent()) this.state.setState({ listsCaughtUp: true });
+      },
+      () => {
+        if (!stillCurrent()) return;
+        const { listsCaughtUp, listsLiveUntil } = this.state.getState();
+        this.state.setState({ listsCaughtUp: false, listsLiveUntil: listsCaughtUp ? new Date() : listsLiveUntil });
+        setTimeout(() => stillCurrent() && this.catchUpCycleLists(), 1_000);
+      },
+    );
   }
 
   private open(): CatlineSocket {
@@ -136,10 +167,7 @@ class LiveCycles {
     });
     socket.on('connect', () => {
       this.retryDelayMs = 1_000;
-      clearTimeout(this.offlineTimer);
-      this.setConnection({ kind: 'live' });
-      for (const cycleId of this.watchers.keys()) this.join(cycleId);
-      if (this.listFollowers > 0) this.refreshCycleLists();
+      this.linkUp();
     });
     socket.on('disconnect', (reason) => {
       if (reason === 'io client disconnect') return;
@@ -152,7 +180,7 @@ class LiveCycles {
       if (!socket.active) this.retryWithFreshToken(socket);
     });
     socket.on('lineup:change', (change) => this.sync.ingest(change));
-    socket.on('cycle:status', () => this.refreshCycleLists());
+    socket.on('cycle:status', () => this.catchUpCycleLists());
     socket.on('session:expired', () => {
       // Without an answer the link drops and retries like any other outage.
       refreshSession().then(
@@ -181,6 +209,8 @@ class LiveCycles {
       refusals: new Map(),
       caughtUp: new Set(),
       liveUntil: new Map(),
+      listsCaughtUp: false,
+      listsLiveUntil: undefined,
     });
   }
 
@@ -280,10 +310,18 @@ class LiveCycles {
       this.state.setState({ connection });
       return;
     }
-    const { caughtUp, liveUntil } = this.state.getState();
+    const { caughtUp, liveUntil, listsCaughtUp, listsLiveUntil } = this.state.getState();
+    const since = 'since' in connection ? connection.since : new Date();
     const until = new Map(liveUntil);
-    for (const cycleId of caughtUp) until.set(cycleId, 'since' in connection ? connection.since : new Date());
-    this.state.setState({ connection, caughtUp: new Set(), liveUntil: until });
+    for (const cycleId of caughtUp) until.set(cycleId, since);
+    this.listsRound += 1;
+    this.state.setState({
+      connection,
+      caughtUp: new Set(),
+      liveUntil: until,
+      listsCaughtUp: false,
+      listsLiveUntil: listsCaughtUp ? since : listsLiveUntil,
+    });
   }
 
   private setCaughtUp(cycleId: number, caughtUp: boolean) {

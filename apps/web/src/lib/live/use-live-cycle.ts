@@ -36,9 +36,16 @@ function freshness(caughtUp: boolean, liveUntil: Date | undefined, dataUpdatedAt
   return { live: false, lastUpdate: new Date(Math.max(liveUntil?.getTime() ?? 0, dataUpdatedAt)) };
 }
 
-/** Keeps the ship's lists of cycles and pickers up with the live feed while the screen shows one. */
-export function useLiveCycleList() {
+/**
+ * Keeps the ship's lists of cycles and pickers up with the live feed while the screen shows one, and says
+ * whether a list read at `dataUpdatedAt` is current: the link is up and the lists were read since it came up.
+ */
+export function useLiveCycleList(dataUpdatedAt = 0) {
   useEffect(() => liveCycles.followCycleList(), []);
+  const connection = useStore(liveCycles.state, (state) => state.connection);
+  const caughtUp = useStore(liveCycles.state, (state) => state.listsCaughtUp);
+  const liveUntil = useStore(liveCycles.state, (state) => state.listsLiveUntil);
+  return { connection, freshness: freshness(connection.kind === 'live' && caughtUp, liveUntil, dataUpdatedAt) };
 }
 
 /** Hands a command's answer to the live feed so the sender sees its own change at once, in order. */

@@ -1,7 +1,9 @@
 import { useState } from 'react';
 import { Badge, Button, Stack, Text } from '@chakra-ui/react';
 import { shipDateTime, shipTime, shipTimeZone, type CycleView } from '@catline/contracts';
+import { ConnectionBadge } from '../../../components/connection-badge.js';
 import { type Column, DataTable } from '../../../components/data-table.js';
+import { LiveFigures } from '../../../components/live-figures.js';
 import { PageHeader } from '../../../components/page-header.js';
 import { Pager } from '../../../components/pager.js';
 import { QueryView } from '../../../components/query-states.js';
@@ -62,7 +64,7 @@ function NewCycle({ onCreated, onCancel }: { onCreated: (cycle: CycleView) => vo
 export function CyclesScreen() {
   const [offset, setOffset] = useState(0);
   const cycles = useCyclesPage(offset);
-  useLiveCycleList();
+  const live = useLiveCycleList(cycles.dataUpdatedAt);
   const [creating, setCreating] = useState(false);
   const [selectedId, setSelectedId] = useState<number | null>(null);
 
@@ -140,6 +142,7 @@ export function CyclesScreen() {
   return (
     <Stack gap="4">
       <PageHeader title="Cycles" subtitle="Launch events, newest first">
+        <ConnectionBadge state={live.connection} />
         <RoleGate roles={['air_operations']}>
           {!creating && (
             <Button size="sm" colorPalette="accent" onClick={() => setCreating(true)}>
@@ -148,32 +151,34 @@ export function CyclesScreen() {
           )}
         </RoleGate>
       </PageHeader>
-      <QueryView query={cycles} loadingLabel="Loading cycles…">
+      <QueryView query={cycles} keepsStaleData loadingLabel="Loading cycles…">
         {(page) => {
           const selected = page.items.find((cycle) => cycle.id === selectedId);
           return (
-            <Stack gap="4">
-              {creating && (
-                <NewCycle
-                  onCancel={() => setCreating(false)}
-                  onCreated={(cycle) => {
-                    setCreating(false);
-                    setSelectedId(cycle.id);
-                  }}
+            <LiveFigures freshness={live.freshness}>
+              <Stack gap="4">
+                {creating && (
+                  <NewCycle
+                    onCancel={() => setCreating(false)}
+                    onCreated={(cycle) => {
+                      setCreating(false);
+                      setSelectedId(cycle.id);
+                    }}
+                  />
+                )}
+                <DataTable
+                  caption="Cycles"
+                  rows={page.items}
+                  columns={columns}
+                  rowKey={(cycle) => cycle.id}
+                  selectedKey={selectedId ?? undefined}
+                  emptyTitle="No cycles yet"
+                  emptyHint="Air operations creates the first cycle with “New cycle”."
                 />
-              )}
-              <DataTable
-                caption="Cycles"
-                rows={page.items}
-                columns={columns}
-                rowKey={(cycle) => cycle.id}
-                selectedKey={selectedId ?? undefined}
-                emptyTitle="No cycles yet"
-                emptyHint="Air operations creates the first cycle with “New cycle”."
-              />
-              <Pager page={page} onOffset={setOffset} />
-              {selected && <CyclePanel key={selected.id} cycle={selected} />}
-            </Stack>
+                <Pager page={page} onOffset={setOffset} />
+                {selected && <CyclePanel key={selected.id} cycle={selected} />}
+              </Stack>
+            </LiveFigures>
           );
         }}
       </QueryView>

@@ -1,6 +1,7 @@
-import { useState, type ReactNode } from 'react';
+import type { ReactNode } from 'react';
 import { Box, Button, Flex, Stack, Text } from '@chakra-ui/react';
 import { useDroppable } from '@dnd-kit/core';
+import { useFiguresLive } from '../../../components/live-figures.js';
 import { horizontalListSortingStrategy, SortableContext } from '@dnd-kit/sortable';
 import { slotItemId } from '../hooks/use-lineup-drag.js';
 
@@ -12,17 +13,22 @@ export function DeckPoolStrip({
   slotIds,
   children,
   downList,
-  defaultOpen,
+  open,
+  onToggle,
   action,
 }: {
   slotIds: number[];
   children: ReactNode;
   downList: ReactNode;
-  defaultOpen: boolean;
+  /** Whether its cards are shown: the board lays out the band around the strip by it. */
+  open: boolean;
+  onToggle: () => void;
   action: ReactNode;
 }) {
-  const [open, setOpen] = useState(defaultOpen);
   const { setNodeRef, isOver } = useDroppable({ id: 'pool' });
+  // Not live, the cards' controls are disabled with their fieldset, where axe counts a scroll box as out of the
+  // keyboard's reach: the cards wrap instead, every one in sight.
+  const scrolls = useFiguresLive();
   return (
     <Flex
       as="section"
@@ -55,7 +61,7 @@ export function DeckPoolStrip({
           fontSize="md"
           fontWeight="700"
           aria-expanded={open}
-          onClick={() => setOpen(!open)}
+          onClick={onToggle}
           data-testid="deck-pool-toggle"
         >
           {open ? '▾' : '▸'} Deck pool ({slotIds.length})
@@ -65,7 +71,16 @@ export function DeckPoolStrip({
       </Stack>
       {open && (
         <SortableContext id="pool" items={slotIds.map(slotItemId)} strategy={horizontalListSortingStrategy}>
-          <Flex gap="2" flex="1" minW="0" overflowX="auto" align="stretch" p="0.5" data-testid="deck-pool-cards">
+          <Flex
+            gap="2"
+            flex="1"
+            minW="0"
+            overflowX={scrolls ? 'auto' : undefined}
+            wrap={scrolls ? undefined : 'wrap'}
+            align="stretch"
+            p="0.5"
+            data-testid="deck-pool-cards"
+          >
             {children}
             {slotIds.length === 0 && (
               <Box alignSelf="center" color="fg.muted" fontSize="sm" px="2">
@@ -76,7 +91,8 @@ export function DeckPoolStrip({
         </SortableContext>
       )}
       {!open && (
-        <Text alignSelf="center" fontSize="sm" color="fg.muted" truncate textStyle="figure">
+        // Where the folded strip shares its row with the figures and the warnings, they need the width.
+        <Text alignSelf="center" fontSize="sm" color="fg.muted" truncate textStyle="figure" hideFrom="lg">
           {slotIds.length === 0 ? 'Every aircraft has a catapult.' : 'Open it to drag an aircraft to a catapult.'}
         </Text>
       )}

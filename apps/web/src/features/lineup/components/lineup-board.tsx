@@ -1,13 +1,22 @@
-import type { ReactNode } from 'react';
-import { Box, Grid, HStack, Text } from '@chakra-ui/react';
+import { useState, type ReactNode } from 'react';
+import { Box, Grid, HStack, Stack, Text } from '@chakra-ui/react';
 import { DndContext, DragOverlay } from '@dnd-kit/core';
 import type { LaneView, LineupSnapshot, MoveSlotRequest, SlotView } from '@catline/contracts';
 import { useLineupDrag } from '../hooks/use-lineup-drag.js';
-import { isMovable, laneContainer, laneCounts, laneMarks, slotsById, type SlotMark } from '../lineup-model.js';
+import {
+  isMovable,
+  laneContainer,
+  laneCounts,
+  laneMarks,
+  slotsById,
+  type LineupWarning,
+  type SlotMark,
+} from '../lineup-model.js';
 import type { SlotAction } from '../slot-actions.js';
 import { ActionMenu, SlotMenu } from './action-menu.js';
 import { DeckPoolStrip } from './deck-pool-strip.js';
 import { LaneColumn } from './lane-column.js';
+import { LineupWarnings } from './lineup-warnings.js';
 import { LiftedSlotCard, SortableSlotCard } from './slot-card.js';
 
 interface LineupBoardProps {
@@ -22,8 +31,9 @@ interface LineupBoardProps {
   onCatapultStatus: (lane: LaneView) => void;
   /** Under the deck pool's title: the handler's suggestion, or a word for those who only watch. */
   poolAction: ReactNode;
-  /** Shown beside the deck pool, in the same band above the lanes. */
-  aside: ReactNode;
+  /** The cycle's figures, beside the deck pool in the same band above the lanes, with the warnings. */
+  summary: ReactNode;
+  warnings: LineupWarning[];
 }
 
 export function LineupBoard({
@@ -34,8 +44,10 @@ export function LineupBoard({
   actionsFor,
   onCatapultStatus,
   poolAction,
-  aside,
+  summary,
+  warnings,
 }: LineupBoardProps) {
+  const [poolOpen, setPoolOpen] = useState(snapshot.pool.length > 0);
   const drag = useLineupDrag(snapshot, onMove);
   const slots = slotsById(snapshot);
   const held = drag.activeSlotId === null ? undefined : slots.get(drag.activeSlotId);
@@ -59,10 +71,21 @@ export function LineupBoard({
 
   return (
     <DndContext {...drag.contextProps}>
-      <Grid gap="2" templateColumns={{ base: 'minmax(0, 1fr)', lg: 'minmax(0, 3fr) minmax(24rem, 2fr)' }} mb="2">
+      {/* Folded, the pool, the figures and the warnings share one row on a wide screen, so the band is only as
+          tall as its tallest control and the lanes start higher; open, the cards set the band's height. */}
+      <Grid
+        gap="2"
+        mb="2"
+        alignItems={poolOpen ? undefined : 'center'}
+        templateColumns={{
+          base: 'minmax(0, 1fr)',
+          lg: poolOpen ? 'minmax(0, 3fr) minmax(24rem, 2fr)' : 'auto auto minmax(0, 1fr)',
+        }}
+      >
         <DeckPoolStrip
           slotIds={drag.containers.pool}
-          defaultOpen={snapshot.pool.length > 0}
+          open={poolOpen}
+          onToggle={() => setPoolOpen(!poolOpen)}
           action={poolAction}
           downList={
             downSlots.length > 0 && (
@@ -89,7 +112,17 @@ export function LineupBoard({
             </Box>
           ))}
         </DeckPoolStrip>
-        <Box minW="0">{aside}</Box>
+        {poolOpen ? (
+          <Stack gap="1" minW="0">
+            {summary}
+            <LineupWarnings warnings={warnings} />
+          </Stack>
+        ) : (
+          <>
+            {summary}
+            <LineupWarnings warnings={warnings} labelBeside />
+          </>
+        )}
       </Grid>
       <Grid
         gap="2"

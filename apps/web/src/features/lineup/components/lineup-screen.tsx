@@ -32,7 +32,6 @@ import { AssignPilotDialog } from './assign-pilot-dialog.js';
 import { CallSpareDialog } from './call-spare-dialog.js';
 import { CatapultStatusDialog } from './catapult-status-dialog.js';
 import { LineupBoard } from './lineup-board.js';
-import { LineupWarnings } from './lineup-warnings.js';
 import { LoadDialog } from './load-dialog.js';
 import { MarkDownDialog } from './mark-down-dialog.js';
 import { ReasonDialog } from './reason-dialog.js';
@@ -167,12 +166,8 @@ function LineupWorkspace({ snapshot }: { snapshot: LineupSnapshot }) {
             </Text>
           )
         }
-        aside={
-          <Stack gap="1" minW="0">
-            <LineupSummary snapshot={snapshot} />
-            <LineupWarnings warnings={lineupWarnings(snapshot, clock)} />
-          </Stack>
-        }
+        summary={<LineupSummary snapshot={snapshot} />}
+        warnings={lineupWarnings(snapshot, clock)}
       />
       {dialog?.kind === 'down' && (
         <MarkDownDialog

@@ -1,4 +1,5 @@
-import { Box, List, Text } from '@chakra-ui/react';
+import { Flex, List, Text } from '@chakra-ui/react';
+import { useFiguresLive } from '../../../components/live-figures.js';
 import type { LineupWarning, WarningKind } from '../lineup-model.js';
 
 const palette: Record<WarningKind, string> = {
@@ -11,11 +12,26 @@ const palette: Record<WarningKind, string> = {
   weight_not_agreed: 'gray',
 };
 
-/** The warnings, most serious first, in a short band that scrolls rather than pushing the lanes down. */
-export function LineupWarnings({ warnings }: { warnings: LineupWarning[] }) {
+/**
+ * The warnings, most serious first, in a short band that scrolls rather than pushing the lanes down;
+ * `labelBeside` puts their title to the left, a line less high, where the band shares a row with the figures.
+ */
+export function LineupWarnings({
+  warnings,
+  labelBeside = false,
+}: {
+  warnings: LineupWarning[];
+  labelBeside?: boolean;
+}) {
+  // Not live, the board sits in a disabled fieldset, where axe counts a scroll box as out of the keyboard's
+  // reach: then the band shows every warning instead.
+  const scrolls = useFiguresLive();
   return (
-    <Box
+    <Flex
       as="section"
+      direction={labelBeside ? 'row' : 'column'}
+      gap={labelBeside ? '2' : '0'}
+      minW="0"
       aria-label="Warnings"
       data-testid="lineup-warnings"
       borderWidth="1px"
@@ -24,7 +40,7 @@ export function LineupWarnings({ warnings }: { warnings: LineupWarning[] }) {
       py="1"
       bg="bg.panel"
     >
-      <Text fontSize="xs" color="fg.muted" textTransform="uppercase" fontWeight="600">
+      <Text fontSize="xs" color="fg.muted" textTransform="uppercase" fontWeight="600" flexShrink={0}>
         Warnings{warnings.length > 0 && ` (${warnings.length})`}
       </Text>
       {warnings.length === 0 ? (
@@ -32,7 +48,15 @@ export function LineupWarnings({ warnings }: { warnings: LineupWarning[] }) {
           None: every aircraft in a lane is go and within the window.
         </Text>
       ) : (
-        <List.Root gap="0.5" maxH="2.75rem" overflowY="auto" ps="0" listStyleType="none" tabIndex={0}>
+        <List.Root
+          gap="0.5"
+          maxH={scrolls ? '2.75rem' : undefined}
+          overflowY={scrolls ? 'auto' : undefined}
+          ps="0"
+          listStyleType="none"
+          tabIndex={scrolls ? 0 : undefined}
+          minW="0"
+        >
           {warnings.map((warning) => (
             <List.Item
               key={warning.key}
@@ -50,6 +74,6 @@ export function LineupWarnings({ warnings }: { warnings: LineupWarning[] }) {
           ))}
         </List.Root>
       )}
-    </Box>
+    </Flex>
   );
 }

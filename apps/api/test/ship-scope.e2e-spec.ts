@@ -161,6 +161,22 @@ describe('finding 12: ships own their data', () => {
     }
   });
 
+  it("names each squadron's and aircraft type's ship, one ship's admin reading only their own", async () => {
+    const firstShipId = (await deck.demoShip()).id;
+    const secondShipId = (await rows<ShipView>(OTHER_ADMIN, '/api/ships'))[0].id;
+    for (const path of ['/api/squadrons', '/api/aircraft-types']) {
+      const shipsOf = async (email: string) =>
+        [...new Set((await rows<{ shipId: number }>(email, path)).map((row) => row.shipId))].sort();
+      expect({ path, ships: await shipsOf(ADMIN) }).toEqual({ path, ships: [firstShipId] });
+      expect({ path, ships: await shipsOf(OTHER_ADMIN) }).toEqual({ path, ships: [secondShipId] });
+      // The fleet admin's forms keep to these ids to offer only the chosen ship's rows.
+      expect({ path, ships: await shipsOf(fleetAdmin.email) }).toEqual({
+        path,
+        ships: expect.arrayContaining([firstShipId, secondShipId]),
+      });
+    }
+  });
+
   it('lets a fleet admin work on both ships, naming the ship of what they add', async () => {
     const aircraft = await rows<AircraftView>(fleetAdmin.email, '/api/aircraft');
     const ofFirst = ids(await rows<AircraftView>(ADMIN, '/api/aircraft'));
@@ -178,6 +194,7 @@ describe('finding 12: ships own their data', () => {
       { ...body, shipId: secondShipId },
       201,
     );
+    expect(squadron.shipId).toBe(secondShipId);
     expect(ids(await rows<SquadronView>(OTHER_ADMIN, '/api/squadrons'))).toContain(squadron.id);
     expect(ids(await rows<SquadronView>(ADMIN, '/api/squadrons'))).not.toContain(squadron.id);
 

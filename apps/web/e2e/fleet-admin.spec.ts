@@ -1,5 +1,12 @@
-import { expect, test } from '@playwright/test';
-import type { AuditEntryView, Page as ApiPage, ShipView, SquadronView, UserView } from '@catline/contracts';
+import { expect, type Locator, test } from '@playwright/test';
+import type {
+  AircraftTypeView,
+  AuditEntryView,
+  Page as ApiPage,
+  ShipView,
+  SquadronView,
+  UserView,
+} from '@catline/contracts';
 import { apiAs } from './support/demo-api.js';
 import { openAs } from './support/screens.js';
 
@@ -91,4 +98,39 @@ test("a fleet admin adds a catapult officer to the second ship, on one of that s
     catapultId: catapult.id,
   });
   await fleetApi.dispose();
+});
+
+test("a fleet admin on the second ship is offered only that ship's squadrons, types and deck spots", async ({
+  browser,
+}) => {
+  const fleetApi = await apiAs('fleet');
+  const [first, second] = (await (await fleetApi.get('/api/ships')).json()) as ShipView[];
+  const squadrons = (await (await fleetApi.get('/api/squadrons')).json()) as SquadronView[];
+  const types = (await (await fleetApi.get('/api/aircraft-types')).json()) as AircraftTypeView[];
+  await fleetApi.dispose();
+  const squadronsOf = (shipId: number) =>
+    squadrons.filter((row) => row.shipId === shipId).map((squadron) => `${squadron.code} · ${squadron.name}`);
+  const typesOf = (shipId: number) =>
+    types.filter((row) => row.shipId === shipId).map((type) => `${type.designation} · ${type.name}`);
+  // Both ships have squadrons and types in the demo, so a list that kept the first ship's in would show it.
+  expect(squadronsOf(first.id)).not.toEqual([]);
+  expect(typesOf(first.id)).not.toEqual([]);
+  /** The select's choices, in the order listed, its placeholder left out. */
+  const offers = (select: Locator, labels: string[]) =>
+    expect(select.locator('option:not([value=""])')).toHaveText(labels);
+
+  const people = await openAs(browser, 'fleet', '/people');
+  const personForm = people.getByRole('form', { name: 'Add a person' });
+  await personForm.getByLabel('Ship they belong to').selectOption({ label: `${second.name} (${second.hullCode})` });
+  await personForm.getByLabel('Role').selectOption('pilot');
+  await offers(personForm.getByLabel('Squadron'), squadronsOf(second.id));
+
+  const fleet = await openAs(browser, 'fleet', `/fleet?ship=${second.id}`);
+  const aircraftForm = fleet.getByRole('form', { name: 'Add an aircraft' });
+  await offers(aircraftForm.getByLabel('Type'), typesOf(second.id));
+  await offers(aircraftForm.getByLabel('Squadron'), squadronsOf(second.id));
+  await offers(
+    aircraftForm.getByLabel('Parked at'),
+    second.deckSpots.map((spot) => spot.name),
+  );
 });

@@ -132,6 +132,8 @@ export interface ShipView {
 
 export interface SquadronView {
   id: number;
+  /** The ship the squadron belongs to: a fleet admin's forms offer it only for that ship. */
+  shipId: number;
   name: string;
   code: string;
   email: string;
@@ -186,6 +188,8 @@ export interface StoresItem {
 
 export interface AircraftTypeView {
   id: number;
+  /** The ship whose launch data this is: a fleet admin's forms offer it only for that ship. */
+  shipId: number;
   designation: string;
   name: string;
   /** Which of the ship profile's departures its aircraft fly. */

@@ -4,6 +4,7 @@ import type { AircraftType } from '../database/entities/aircraft-type.entity.js'
 export function toAircraftTypeView(type: AircraftType): AircraftTypeView {
   return {
     id: type.id,
+    shipId: type.shipId,
     designation: type.designation,
     name: type.name,
     aircraftClass: type.aircraftClass,

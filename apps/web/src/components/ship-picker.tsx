@@ -24,6 +24,13 @@ export function useShipChoice(initial?: number): ShipChoice {
   return { ships, ship: ships.find((ship) => ship.id === picked) ?? ships[0], choose };
 }
 
+/**
+ * The rows that belong to the ship, none while the ships load: a fleet admin lists every ship's squadrons
+ * and types, and the server refuses a row that points at another ship's, so a form offers only these.
+ */
+export const ofShip = <Row extends { shipId: number }>(rows: Row[], ship: ShipView | undefined): Row[] =>
+  rows.filter((row) => row.shipId === ship?.id);
+
 /** A labelled select of the ships, shown only when there is more than one to choose from. */
 export function ShipPicker({
   choice,

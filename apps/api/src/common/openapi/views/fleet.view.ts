@@ -248,6 +248,9 @@ export class SquadronViewDto implements SquadronView {
   @IdProperty()
   id: number;
 
+  @IdProperty({ description: 'The ship it belongs to.' })
+  shipId: number;
+
   @ApiProperty()
   name: string;
 
@@ -313,6 +316,9 @@ export class SettingTableDto implements SettingTable {
 export class AircraftTypeViewDto implements AircraftTypeView {
   @IdProperty()
   id: number;
+
+  @IdProperty({ description: 'The ship it belongs to.' })
+  shipId: number;
 
   @ApiProperty()
   designation: string;

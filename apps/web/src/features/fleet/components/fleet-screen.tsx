@@ -9,7 +9,7 @@ import { Pager } from '../../../components/pager.js';
 import { QueryView } from '../../../components/query-states.js';
 import { NoticeBanner, refusalNotice, useNotice } from '../../../components/refusal-notice.js';
 import { RoleGate } from '../../../components/role-gate.js';
-import { ShipPicker } from '../../../components/ship-picker.js';
+import { ofShip, ShipPicker } from '../../../components/ship-picker.js';
 import { useAircraft, useAircraftPage } from '../../../lib/queries/aircraft-query.js';
 import { useAircraftTypes } from '../../../lib/queries/aircraft-types-query.js';
 import { useShips } from '../../../lib/queries/ships-query.js';
@@ -206,7 +206,12 @@ export function FleetScreen() {
             <RoleGate roles={['admin']}>
               <Stack gap="2" borderWidth="1px" rounded="card" p="3">
                 <Text fontWeight="700">Add an aircraft</Text>
-                <AircraftForm types={types.data ?? []} squadrons={squadrons.data ?? []} spots={ship?.deckSpots ?? []} />
+                <AircraftForm
+                  key={ship?.id}
+                  types={ofShip(types.data ?? [], ship)}
+                  squadrons={ofShip(squadrons.data ?? [], ship)}
+                  spots={ship?.deckSpots ?? []}
+                />
               </Stack>
             </RoleGate>
           </Stack>

@@ -12,7 +12,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm, useWatch } from 'react-hook-form';
 import { SelectControl } from '../../../components/form-controls.js';
 import { FormField } from '../../../components/form-field.js';
-import { ShipPicker, useShipChoice } from '../../../components/ship-picker.js';
+import { ofShip, ShipPicker, useShipChoice } from '../../../components/ship-picker.js';
 import { errorMessage } from '../../../lib/api-error.js';
 import { useCreateUser } from '../api/create-user.js';
 import { blankUser, userSchema } from '../user-form-model.js';
@@ -24,6 +24,8 @@ export function UserForm({ squadrons }: { squadrons: SquadronView[] }) {
   const ship = useShipChoice();
   // A catapult officer works a catapult of the ship they join.
   const catapults: CatapultView[] = ship.ship?.catapults ?? [];
+  // A pilot flies with a squadron of the same ship.
+  const shipSquadrons = ofShip(squadrons, ship.ship);
   const {
     register,
     control,
@@ -35,6 +37,7 @@ export function UserForm({ squadrons }: { squadrons: SquadronView[] }) {
   const chooseShip = (shipId: number) => {
     ship.choose(shipId);
     setValue('catapultId', '');
+    setValue('squadronId', '');
   };
   const role = useWatch({ control, name: 'role' });
   const [created, setCreated] = useState<{ user: UserView; invited: boolean } | null>(null);
@@ -111,7 +114,7 @@ export function UserForm({ squadrons }: { squadrons: SquadronView[] }) {
                 control={control}
                 name="squadronId"
                 placeholder="No squadron"
-                choices={squadrons.map((squadron) => ({
+                choices={shipSquadrons.map((squadron) => ({
                   value: String(squadron.id),
                   label: `${squadron.code} · ${squadron.name}`,
                 }))}

@@ -45,6 +45,8 @@ const REASONS: Record<RefusalCode, string> = {
   aircraft_on_catapult: 'an aircraft is on the catapult',
   weight_not_agreed: 'gross weight not agreed',
   weight_mismatch: 'the gross weights do not match',
+  setting_not_read_back: 'the setting was not read back',
+  setting_mismatch: 'the console’s setting is not the approved one',
   catapult_down: 'the catapult is down',
   catapult_closed: 'the catapult is closed while the landing area is in use',
   deck_not_clear: 'the deck is not clear for this catapult',

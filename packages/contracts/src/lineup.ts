@@ -425,6 +425,8 @@ export const CHANGE_KINDS = [
   'load_set',
   'arm_state_set',
   'launch_data_changed',
+  /** The ship's profile or a catapult's readiness steps changed: the lanes carry the lists they run now. */
+  'readiness_steps_changed',
 ] as const;
 export type ChangeKind = (typeof CHANGE_KINDS)[number];
 

@@ -156,6 +156,8 @@ export const SHIP_REFUSAL_CODES = [
   'catapult_not_found',
   'invalid_configuration',
   'spot_in_use',
+  /** A new list of readiness steps leaves out the step an aircraft of an open cycle stands at. */
+  'readiness_step_in_use',
   /** The deck layout breaks a rule of the deck (launch-math's deckLayoutProblems); `details` lists each. */
   'deck_layout_invalid',
 ] as const;

@@ -121,6 +121,7 @@ const REASONS: Record<RefusalCode, string> = {
   ship_required: 'choose a ship',
   catapult_not_found: 'catapult not found',
   invalid_configuration: 'not a valid ship layout',
+  readiness_step_in_use: 'an aircraft stands at a step the list leaves out',
   spot_in_use: 'the spot is in use',
   deck_layout_invalid: 'the deck layout cannot be used',
   aircraft_not_found: 'aircraft not found',

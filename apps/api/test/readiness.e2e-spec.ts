@@ -1,11 +1,18 @@
 import type { INestApplication } from '@nestjs/common';
-import { READINESS_STEPS, type AircraftTypeView, type ReadinessStep } from '@catline/contracts';
+import {
+  READINESS_STEPS,
+  type AircraftTypeView,
+  type LineupChange,
+  type Page,
+  type ReadinessStep,
+} from '@catline/contracts';
 import {
   ADMIN,
   AIR_BOSS,
   AIR_OPS,
   HANDLER,
   LineupDriver,
+  OBSERVER,
   catapultOfficer,
   deckEdgeOperator,
   launchKey,
@@ -94,6 +101,56 @@ describe('readiness steps and launch', () => {
       const back = await patchCat2(null);
       expect(back.status).toBe(200);
       expect(back.body.readinessSteps).toBeNull();
+    }
+  });
+
+  it('refuses a new list of steps that leaves out the step an aircraft stands at, until it is past it', async () => {
+    const cat2 = (await deck.demoShip()).catapults.find((catapult) => catapult.number === 2)!;
+    const withoutDeflector = READINESS_STEPS.filter((step) => step !== 'deflector_up');
+    const patchCat2 = (readinessSteps: ReadinessStep[] | null) =>
+      deck.call(ADMIN, 'patch', `/api/ships/1/catapults/${cat2.id}`, { readinessSteps });
+    const { cycle, other } = await executingCycle(pilot(4));
+    await deck.stepThrough(cycle.id, other.id, 'deflector_up');
+    const refused = await patchCat2(withoutDeflector);
+    expect(refused.status).toBe(409);
+    expect(refused.body).toMatchObject({
+      code: 'readiness_step_in_use',
+      message:
+        'The new list leaves out a step an aircraft stands at: D33 on cat 2 is at "deflector up". Take it past that step, or change the list once it has launched.',
+    });
+    expect((await deck.snapshot(cycle.id)).lanes.find((lane) => lane.number === 2)!.readinessSteps).toEqual(
+      READINESS_STEPS,
+    );
+    // The ship's list too, for the catapults that follow it.
+    const { profile } = await deck.ok<{ profile: object }>(ADMIN, 'get', '/api/ships/1');
+    const shipRefused = await deck.call(ADMIN, 'patch', '/api/ships/1', {
+      profile: { ...profile, readinessSteps: withoutDeflector },
+    });
+    expect(shipRefused.body.code).toBe('readiness_step_in_use');
+
+    await deck.step(cycle.id, other.id, 'tensioned');
+    try {
+      const { version } = await deck.snapshot(cycle.id);
+      expect((await patchCat2(withoutDeflector)).status).toBe(200);
+      // The change reaches the stations live, the lane carrying the list it runs now.
+      const { items } = await deck.ok<Page<LineupChange>>(
+        OBSERVER,
+        'get',
+        `/api/cycles/${cycle.id}/lineup/changes?since=${version}`,
+      );
+      expect(items).toEqual([
+        expect.objectContaining({
+          kind: 'readiness_steps_changed',
+          summary: `Cat 2 runs its own readiness steps: ${withoutDeflector.join(', ').replaceAll('_', ' ')}`,
+          patch: expect.objectContaining({
+            lanes: [expect.objectContaining({ number: 2, readinessSteps: withoutDeflector })],
+          }),
+        }),
+      ]);
+      await deck.stepThrough(cycle.id, other.id);
+      expect((await deck.slot(cycle.id, other.id)).status).toBe('pilot_ready');
+    } finally {
+      expect((await patchCat2(null)).status).toBe(200);
     }
   });
 
@@ -250,7 +307,14 @@ describe('readiness steps and launch', () => {
       const slot = await deck.addSlot(cycle.id, 'C21', { pilotEmail: pilot(9), grossWeightLb: weight });
       await deck.place(cycle.id, slot.id, 1);
       await deck.start(cycle.id);
-      const ready = await deck.readyToLaunch(cycle.id, slot.id, pilot(9));
+      await deck.acknowledgeWeight(cycle.id, slot.id, pilot(9));
+      // Above the approved table's last row there is no setting to set, so none to read back: the aircraft
+      // stops at the weight agreement, and the launch is refused for the weight all the same.
+      const last = code === 'over_max_gross_weight' ? 'weight_agreed' : 'pilot_ready';
+      await deck.stepThrough(cycle.id, slot.id, last);
+      if (last === 'weight_agreed')
+        expect((await deck.step(cycle.id, slot.id, 'setting_set')).body.code).toBe('approved_setting_missing');
+      const ready = await deck.slot(cycle.id, slot.id);
       expect(ready.gates).toEqual(expect.arrayContaining([expect.objectContaining({ gate: code, soft: false })]));
 
       const refused = await deck.launch(cycle.id, ready, launchKey());
@@ -266,7 +330,7 @@ describe('readiness steps and launch', () => {
         deckEdgeOperator(1),
       );
       expect(refusedAgain.body.code).toBe(code);
-      expect((await deck.slot(cycle.id, slot.id)).status).toBe('pilot_ready');
+      expect((await deck.slot(cycle.id, slot.id)).status).toBe(last);
     },
   );
 

@@ -1,23 +1,11 @@
-import { expect, test, type Page } from '@playwright/test';
+import { expect, test } from '@playwright/test';
 import { apiAs, changesOf, lineupOf, placeInLane, planCycle } from './support/demo-api.js';
-import { card, lane, openAs } from './support/screens.js';
+import { approvedSetting, card, catFigure, lane, openAs } from './support/screens.js';
 
 const DECK_EDGE_TABLET = { width: 1024, height: 768 };
 const PILOT_TABLET = { width: 820, height: 1180 };
 // What the live feed brings to another screen may take a while on a loaded machine.
 const LIVE = { timeout: 10_000 };
-
-/** The value of one of the Cat station's figures, by its label. */
-const figure = (station: Page, label: string) =>
-  station
-    .getByTestId('cat-figures')
-    .locator(':scope > div')
-    .filter({ has: station.getByText(label, { exact: true }) })
-    .locator('p')
-    .last();
-
-/** The large setting on the Cat station: the one from the ship's approved launch data. */
-const approvedSetting = (station: Page) => figure(station, 'Catapult setting (approved data)');
 
 /** The approved setting the server works out for the aircraft now, as the station shows it. */
 async function settingOnServer(cycleId: number, side: string) {
@@ -58,6 +46,8 @@ test('the deck edge operator launches from a touch tablet an aircraft whose pilo
   };
 
   await tapStep('taxiing');
+  // The crew fits the holdback release element the type needs (the demo's invented designations).
+  await expect(station.getByTestId('holdback-element')).toHaveText(/^Holdback: RE-\d+$/);
   await tapStep('on_catapult');
   await expect(boardCard).toHaveAttribute('data-status', 'on_catapult', LIVE);
   await expect(pilot.getByTestId('slot-status')).toHaveText('On catapult', LIVE);
@@ -65,7 +55,7 @@ test('the deck edge operator launches from a touch tablet an aircraft whose pilo
 
   const plannedSetting = await settingOnServer(cycle.id, 'C21');
   await expect(approvedSetting(station)).toHaveText(plannedSetting);
-  await expect(figure(station, 'Gross weight (planned)')).toHaveText('40,000 lb');
+  await expect(catFigure(station, 'Gross weight (planned)')).toHaveText('40,000 lb');
 
   // The pilot holds 3,500 lb more than the plan and answers it from the tablet.
   await pilot.getByTestId('weight-correction').fill('43,500');
@@ -86,7 +76,7 @@ test('the deck edge operator launches from a touch tablet an aircraft whose pilo
   expect(agreedSetting).not.toBe(plannedSetting);
   await expect(approvedSetting(station)).toHaveText(agreedSetting);
   // The weight beside the setting is the one it was worked out for.
-  await expect(figure(station, 'Gross weight (agreed)')).toHaveText('43,500 lb');
+  await expect(catFigure(station, 'Gross weight (agreed)')).toHaveText('43,500 lb');
   await expect(pilot.getByTestId('weight-agreed')).toHaveText('Agreed with the crew: 43,500 lb.', LIVE);
   // One tap on the plan's figure would take the agreement back: only a typed figure may still be answered.
   await expect(pilot.getByTestId('acknowledge-weight')).toBeHidden();
@@ -95,7 +85,19 @@ test('the deck edge operator launches from a touch tablet an aircraft whose pilo
   await expect(pilot.getByTestId('slot-status')).toHaveText('Weight agreed', LIVE);
   await expect(boardCard).toHaveAttribute('data-status', 'weight_agreed', LIVE);
 
-  for (const name of ['setting_set', 'deflector_up', 'tensioned', 'run_up', 'checks_clear', 'pilot_ready']) {
+  // The two-person check: the figure typed from the console must be the approved setting for 43,500 lb.
+  const readBack = station.getByTestId('setting-read-back-input');
+  await expect(step('setting_set')).toBeDisabled();
+  await readBack.fill(String(Number(agreedSetting) + 1));
+  await step('setting_set').tap();
+  await expect(station.getByTestId('notice')).toContainText(
+    `The console reads ${Number(agreedSetting) + 1}, but the approved setting for C21 at 43,500 lb is ${agreedSetting}`,
+  );
+  await expect(step('setting_set')).not.toHaveAttribute('data-done');
+  await readBack.fill(agreedSetting);
+  await tapStep('setting_set');
+  await expect(step('setting_set')).toHaveText(`✓ Setting set and read back: ${agreedSetting}`);
+  for (const name of ['deflector_up', 'tensioned', 'run_up', 'checks_clear', 'pilot_ready']) {
     await tapStep(name);
   }
   await expect(boardCard).toHaveAttribute('data-status', 'pilot_ready', LIVE);

@@ -1,6 +1,6 @@
 import { expect, test } from '@playwright/test';
 import { apiAs, changesOf, enterWindReading, lineupOf, planCycle } from './support/demo-api.js';
-import { card, dragWithMouse, lane, openAs, pool } from './support/screens.js';
+import { approvedSetting, card, dragWithMouse, lane, openAs, pool } from './support/screens.js';
 
 test('handler drags an aircraft to cat 1, the pilot sees it live, the catapult officer launches it once', async ({
   browser,
@@ -56,16 +56,11 @@ test('handler drags an aircraft to cat 1, the pilot sees it live, the catapult o
   await expect(pilot.getByTestId('weight-acknowledged')).toBeVisible();
   await expect(catOfficer.getByTestId('pilot-weight')).toContainText('The pilot agrees 40,000 lb');
 
-  // One tap per step, in the ship's order.
-  for (const step of [
-    'weight_agreed',
-    'setting_set',
-    'deflector_up',
-    'tensioned',
-    'run_up',
-    'checks_clear',
-    'pilot_ready',
-  ]) {
+  // One tap per step, in the ship's order; the setting is read back from the console as the station shows it.
+  await catOfficer.getByTestId('step-weight_agreed').click();
+  await expect(catOfficer.getByTestId('step-weight_agreed')).toHaveAttribute('data-done', 'true');
+  await catOfficer.getByTestId('setting-read-back-input').fill(await approvedSetting(catOfficer).innerText());
+  for (const step of ['setting_set', 'deflector_up', 'tensioned', 'run_up', 'checks_clear', 'pilot_ready']) {
     await catOfficer.getByTestId(`step-${step}`).click();
     await expect(catOfficer.getByTestId(`step-${step}`)).toHaveAttribute('data-done', 'true');
   }

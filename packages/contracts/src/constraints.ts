@@ -18,6 +18,9 @@ export const SQUADRON_CODE_PATTERN = new RegExp(`^[A-Za-z0-9-]{1,${SQUADRON_CODE
 /** Names of people, squadrons and aircraft types. */
 export const NAME_MAX_LENGTH = 120;
 export const TYPE_DESIGNATION_MAX_LENGTH = 20;
+/** A holdback release element's designation, as marked on it: letters, digits, dashes or dots. */
+export const HOLDBACK_ELEMENT_MAX_LENGTH = 20;
+export const HOLDBACK_ELEMENT_PATTERN = new RegExp(`^[A-Za-z0-9][A-Za-z0-9.-]{0,${HOLDBACK_ELEMENT_MAX_LENGTH - 1}}$`);
 /** The longest address SMTP carries (RFC 5321 § 4.5.3.1.3, path of 256 less the angle brackets). */
 export const EMAIL_MAX_LENGTH = 254;
 
@@ -42,6 +45,8 @@ export const STORES_ITEM_WEIGHT_LB: Range = { min: 1, max: 20_000 };
 /** Tables per type: a few catapults times the configurations; rows per table. */
 export const SETTING_TABLES_MAX = 24;
 export const SETTING_TABLE_ROWS_MAX = 60;
+/** A whole-number catapult setting, in an approved table or read back from the console. */
+export const CATAPULT_SETTING: Range = { min: 0, max: 999 };
 
 export const STORES_LINES_MAX = 20;
 export const STORES_COUNT: Range = { min: 1, max: 99 };

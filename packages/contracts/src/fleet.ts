@@ -206,6 +206,8 @@ export interface AircraftTypeView {
    * only for a type entered before the field existed: its launches are refused until the admin enters it.
    */
   maxEndSpeedKt: number | null;
+  /** The holdback release element the type is launched with; null until the admin enters it. */
+  holdbackElement: string | null;
   trimBands: TrimBand[];
   launchTable: LaunchTableRow[];
   /** What an aircraft of the type can carry, ordered by name. */
@@ -271,6 +273,8 @@ export interface CreateAircraftTypeRequest extends ShipChoice {
   afterburnerFromLb?: number | null;
   /** The highest end speed the airframe takes (overstress), knots. */
   maxEndSpeedKt: number;
+  /** The holdback release element the type is launched with; null or left out while not known. */
+  holdbackElement?: string | null;
   /** Increasing upToLb; the last band has upToLb null. */
   trimBands: TrimBand[];
   /** Ordered by strictly increasing gross weight, two rows at least. */

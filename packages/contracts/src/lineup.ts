@@ -318,6 +318,12 @@ export interface SlotView {
   /** The gross weight the crew recorded as agreed; the setting is worked out from it. */
   agreedWeightLb: number | null;
   catapultWeightAckAt: string | null;
+  /** Who recorded the agreed weight, and so gave the setting to set; null while none is agreed. */
+  weightAgreedBy: string | null;
+  /** The setting read back from the console; null until read back, and again after a drop-back before it. */
+  settingReadBack: SettingReadBackView | null;
+  /** The holdback release element the aircraft's type is launched with; null while not recorded. */
+  holdbackElement: string | null;
   suspendReason: string | null;
   overrideReason: string | null;
   /** What changed under the agreed figures since they were verified; null when nothing waits for a read-back. */
@@ -342,6 +348,18 @@ export interface SlotView {
   deckPosition: DeckPositionView | null;
   /** Side numbers of the aircraft parked in front that must move before this one can taxi out to launch. */
   mustMove: string[];
+}
+
+/** The two-person check of the setting: the figure on the console, equal to the approved one. */
+export interface SettingReadBackView {
+  setting: number;
+  /** The agreed weight the setting is for, lb. */
+  weightLb: number;
+  /** Who recorded the agreed weight the setting was set for. */
+  setBy: string;
+  /** Who read the setting back from the console; may be the same person on a one-officer catapult. */
+  readBackBy: string;
+  at: string;
 }
 
 export interface LaneView extends WindOverDeck {
@@ -407,6 +425,8 @@ export const CHANGE_KINDS = [
   'load_set',
   'arm_state_set',
   'launch_data_changed',
+  /** The ship's profile or a catapult's readiness steps changed: the lanes carry the lists they run now. */
+  'readiness_steps_changed',
 ] as const;
 export type ChangeKind = (typeof CHANGE_KINDS)[number];
 
@@ -547,6 +567,11 @@ export interface AdvanceSlotRequest {
   to: ReadinessStep | 'resume';
   /** With `weight_agreed`: the gross weight the crew records as agreed with the pilot, lb. */
   agreedWeightLb?: number;
+  /**
+   * With `setting_set`: the setting the crew read on the catapult's console; refused unless it is the
+   * approved setting for the agreed weight.
+   */
+  settingReadBack?: number;
 }
 
 /** The person who took the last step takes it back, within 10 s. */

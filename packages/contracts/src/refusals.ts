@@ -29,6 +29,10 @@ export const LINEUP_REFUSAL_CODES = [
   'wrong_step',
   'weight_not_agreed',
   'weight_mismatch',
+  /** The setting step without the figure read on the catapult's console. */
+  'setting_not_read_back',
+  /** The setting read back from the console is not the approved one for the agreed weight. */
+  'setting_mismatch',
   /** Marking a catapult down under an aircraft: a warning the handler confirms by asking again. */
   'aircraft_on_catapult',
   // The launch gates (launch-math's launchGates): the launch command refuses with the first one closed.
@@ -152,6 +156,8 @@ export const SHIP_REFUSAL_CODES = [
   'catapult_not_found',
   'invalid_configuration',
   'spot_in_use',
+  /** A new list of readiness steps leaves out the step an aircraft of an open cycle stands at. */
+  'readiness_step_in_use',
   /** The deck layout breaks a rule of the deck (launch-math's deckLayoutProblems); `details` lists each. */
   'deck_layout_invalid',
 ] as const;

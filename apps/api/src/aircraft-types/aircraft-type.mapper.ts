@@ -15,6 +15,7 @@ export function toAircraftTypeView(type: AircraftType): AircraftTypeView {
     requiredExcessKt: type.requiredExcessKt,
     afterburnerFromLb: type.afterburnerFromLb,
     maxEndSpeedKt: type.maxEndSpeedKt,
+    holdbackElement: type.holdbackElement,
     trimBands: type.trimBands,
     launchTable: type.launchTable,
     storesCatalogue: type.storesCatalogue,

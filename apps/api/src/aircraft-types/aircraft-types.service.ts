@@ -33,7 +33,7 @@ import {
 } from './launch-data.js';
 
 /** Fields no launch figure rests on: changing them asks no crew to verify again. */
-const FIELDS_OUTSIDE_THE_FIGURES = new Set(['designation', 'name', 'aircraftClass']);
+const FIELDS_OUTSIDE_THE_FIGURES = new Set(['designation', 'name', 'aircraftClass', 'holdbackElement']);
 
 @Injectable()
 export class AircraftTypesService {
@@ -68,6 +68,7 @@ export class AircraftTypesService {
         aircraftClass: body.aircraftClass ?? DEFAULT_AIRCRAFT_CLASS,
         operatingWeightLb: body.operatingWeightLb ?? null,
         afterburnerFromLb: body.afterburnerFromLb ?? null,
+        holdbackElement: body.holdbackElement ?? null,
         storesCatalogue: [],
         settingTables: [],
       });

@@ -25,6 +25,8 @@ const STATUS: Record<LineupRefusalCode, HttpStatus> = {
   wrong_step: HttpStatus.CONFLICT,
   weight_not_agreed: HttpStatus.CONFLICT,
   weight_mismatch: HttpStatus.CONFLICT,
+  setting_not_read_back: HttpStatus.CONFLICT,
+  setting_mismatch: HttpStatus.CONFLICT,
   aircraft_on_catapult: HttpStatus.CONFLICT,
   catapult_down: HttpStatus.CONFLICT,
   catapult_closed: HttpStatus.CONFLICT,

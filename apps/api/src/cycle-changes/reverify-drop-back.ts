@@ -28,9 +28,17 @@ export async function dropBackForReverify(
     const back = reverifyDropBack(catapultReadinessSteps(state, slot.catapultId), slot.status, cause);
     if (!back) continue;
     // A waiver was given for the figures as they were; the new ones need their own.
-    const values: SlotValues = { status: back.to as SlotStatus, reverifyCause: cause, waivers: null, lastStep: null };
+    // Back before the read-back: the setting read then was for the old figures, so the check is done anew.
+    const values: SlotValues = {
+      status: back.to as SlotStatus,
+      reverifyCause: cause,
+      waivers: null,
+      lastStep: null,
+      settingReadBack: null,
+    };
     if (back.to !== slot.status) Object.assign(values, { statusAt: now, statusBy: by });
-    if (back.weightAgreementVoid) Object.assign(values, { catapultWeightAckAt: null, agreedWeightLb: null });
+    if (back.weightAgreementVoid)
+      Object.assign(values, { catapultWeightAckAt: null, agreedWeightLb: null, weightAgreedBy: null });
     await updateSlot(manager, slot, values);
     dropped.push(`${slot.aircraft.sideNumber} to ${label(back.to)}`);
   }

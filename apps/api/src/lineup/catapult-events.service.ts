@@ -143,6 +143,8 @@ export class CatapultEventsService {
         tensionedAt: null,
         agreedWeightLb: null,
         catapultWeightAckAt: null,
+        weightAgreedBy: null,
+        settingReadBack: null,
         reverifyCause: null,
         lastStep: null,
         suspendReason: null,

@@ -15,6 +15,7 @@ import type { Slot } from '../database/entities/slot.entity.js';
 
 const GONE: readonly SlotStatus[] = ['launched', 'down', 'scratched'];
 const label = (status: string) => status.replaceAll('_', ' ');
+const lb = (weight: number | null) => `${(weight ?? 0).toLocaleString('en-US')} lb`;
 
 /** The slot as launch-math's readiness machine sees it. */
 export function slotReadiness(state: LineupState, slot: Slot): SlotReadiness {
@@ -26,6 +27,7 @@ export function slotReadiness(state: LineupState, slot: Slot): SlotReadiness {
     agreedWeight: slot.agreedWeightLb,
     pilotAnswer: slot.pilotWeightAckAt === null ? null : slot.pilotWeightAckLb,
     reverify: slot.reverifyCause,
+    settingReadBack: slot.settingReadBack?.setting ?? null,
     lastStep: slot.lastStep,
   };
 }
@@ -40,7 +42,14 @@ export function readinessActor(user: AuthenticatedUser, slot: Slot): ReadinessAc
 }
 
 /** A refusal of the machine in a sentence for the deck crew. */
-function refusal(state: LineupState, slot: Slot, code: string, to: string, wrongStep?: string): LineupException {
+function refusal(
+  state: LineupState,
+  slot: Slot,
+  code: string,
+  command: ReadinessCommand,
+  to: string,
+  wrongStep?: string,
+): LineupException {
   const side = slot.aircraft.sideNumber;
   const steps = catapultReadinessSteps(state, slot.catapultId);
   switch (code) {
@@ -63,6 +72,23 @@ function refusal(state: LineupState, slot: Slot, code: string, to: string, wrong
         'weight_mismatch',
         `The pilot of ${side} answered ${slot.pilotWeightAckLb?.toLocaleString('en-US')} lb; record that figure or settle it with the pilot.`,
       );
+    case 'approved_setting_missing':
+      return new LineupException(
+        'approved_setting_missing',
+        `The approved launch data give no setting for ${side} at ${lb(slot.agreedWeightLb)}; the setting cannot be read back against nothing.`,
+      );
+    case 'setting_not_read_back':
+      return new LineupException(
+        'setting_not_read_back',
+        `Enter the setting read on the catapult's console for ${side}.`,
+      );
+    case 'setting_mismatch': {
+      const { settingReadBack, approvedSetting } = command as Extract<ReadinessCommand, { kind: 'advance' }>;
+      return new LineupException(
+        'setting_mismatch',
+        `The console reads ${settingReadBack}, but the approved setting for ${side} at ${lb(slot.agreedWeightLb)} is ${approvedSetting}; set ${approvedSetting} and read it back again.`,
+      );
+    }
     case 'nothing_to_undo':
       return new LineupException('nothing_to_undo', `${side} has no step to undo.`);
     case 'not_your_step':
@@ -108,6 +134,6 @@ export function transition(
     readinessActor(user, slot),
     command,
   );
-  if (!result.ok) throw refusal(state, slot, result.code, asked, wrongStep);
+  if (!result.ok) throw refusal(state, slot, result.code, command, asked, wrongStep);
   return result.state;
 }

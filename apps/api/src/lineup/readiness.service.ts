@@ -10,7 +10,13 @@ import type {
   WeightAckRequest,
 } from '@catline/contracts';
 import { SUSPEND_REASON_LABELS, shipClock, shipTimeZone } from '@catline/contracts';
-import { afterburnerRequired, pounds, takeOffTrim, type ReadinessCommand } from '@catline/launch-math';
+import {
+  afterburnerRequired,
+  pounds,
+  takeOffTrim,
+  type ReadinessCommand,
+  type SlotReadiness,
+} from '@catline/launch-math';
 import { Injectable } from '@nestjs/common';
 import type { EntityManager } from 'typeorm';
 import { Aircraft } from '../database/entities/aircraft.entity.js';
@@ -39,6 +45,14 @@ const label = (status: string) => status.replaceAll('_', ' ');
 
 const lb = (weight: number) => `${weight.toLocaleString('en-US')} lb`;
 
+/** Who agreed the weight, and the read-back, go with the agreement and the step they belong to. */
+function readBackValues(slot: Slot, next: SlotReadiness): SlotValues {
+  const values: SlotValues = {};
+  if (next.agreedWeight === null && slot.weightAgreedBy !== null) values.weightAgreedBy = null;
+  if (next.settingReadBack === null && slot.settingReadBack !== null) values.settingReadBack = null;
+  return values;
+}
+
 /** The catapult crew's readiness steps, undo, suspend and launch, and the pilot's answer on the weight. */
 @Injectable()
 export class ReadinessService {
@@ -60,13 +74,21 @@ export class ReadinessService {
       const slot = this.basis.slot(state, slotId);
       const catapult = this.ownCatapult(state, user, slot);
       await this.basis.slotAsSeen(manager, state, slot, request.slotVersion);
-      const side = slot.aircraft.sideNumber;
       this.requireExecuting(state);
       const now = this.clock.now();
       const command: ReadinessCommand =
         request.to === 'resume'
           ? { kind: 'resume' }
-          : { kind: 'advance', to: request.to, at: now.getTime(), agreedWeight: request.agreedWeightLb };
+          : {
+              kind: 'advance',
+              to: request.to,
+              at: now.getTime(),
+              agreedWeight: request.agreedWeightLb,
+              settingReadBack: request.settingReadBack,
+              // The setting the station shows large: the approved launch data's, for the agreed weight.
+              approvedSetting:
+                request.to === 'setting_set' ? (slotFigures(state, slot)?.catapultSetting ?? null) : null,
+            };
       const next = transition(state, slot, user, command, request.to);
       const status = next.status as SlotStatus;
       const values: SlotValues = {
@@ -76,20 +98,28 @@ export class ReadinessService {
         agreedWeightLb: next.agreedWeight,
         reverifyCause: next.reverify,
         lastStep: next.lastStep,
+        ...readBackValues(slot, next),
       };
       if (status === 'taxiing') values.taxiingAt = now;
       if (status === 'on_catapult') Object.assign(values, { onCatapultAt: now, suspendReason: null });
       if (next.agreedWeight === null) values.catapultWeightAckAt = null;
       if (status === 'tensioned') values.tensionedAt = now;
-      if (status === 'weight_agreed') values.catapultWeightAckAt = now;
+      if (status === 'weight_agreed') Object.assign(values, { catapultWeightAckAt: now, weightAgreedBy: user.name });
+      if (status === 'setting_set') {
+        values.settingReadBack = {
+          setting: next.settingReadBack!,
+          weightLb: next.agreedWeight!,
+          setBy: slot.weightAgreedBy ?? user.name,
+          readBackBy: user.name,
+          at: now.toISOString(),
+        };
+      }
       await updateSlot(manager, slot, values);
-      const what =
-        request.to === 'resume'
-          ? `${side} resumed on cat ${catapult.number}`
-          : status === 'weight_agreed'
-            ? `${side} weight agreed on cat ${catapult.number}: ${lb(next.agreedWeight!)} (planned ${lb(slot.grossWeightLb)})`
-            : `${side} ${label(status)} on cat ${catapult.number}`;
-      return { summary: what, command: { type: 'advance', slotId, ...request }, mirrored: true };
+      return {
+        summary: this.stepSummary(slot, catapult, request, values),
+        command: { type: 'advance', slotId, ...request },
+        mirrored: true,
+      };
     });
   }
 
@@ -115,6 +145,7 @@ export class ReadinessService {
         catapultWeightAckAt: next.agreedWeight === null ? null : slot.catapultWeightAckAt,
         reverifyCause: next.reverify,
         lastStep: null,
+        ...readBackValues(slot, next),
       });
       return {
         summary: `${slot.aircraft.sideNumber} on cat ${catapult.number}: ${label(undone)} undone`,
@@ -281,6 +312,19 @@ export class ReadinessService {
         mirrored: true,
       };
     });
+  }
+
+  /** The change log's line for a step: the weight with the plan beside it, the read-back with both people. */
+  private stepSummary(slot: Slot, catapult: Catapult, request: AdvanceSlotRequest, values: SlotValues): string {
+    const side = slot.aircraft.sideNumber;
+    const on = `on cat ${catapult.number}`;
+    if (request.to === 'resume') return `${side} resumed ${on}`;
+    if (request.to === 'weight_agreed')
+      return `${side} weight agreed ${on}: ${lb(values.agreedWeightLb!)} (planned ${lb(slot.grossWeightLb)})`;
+    const readBack = values.settingReadBack;
+    if (request.to === 'setting_set' && readBack)
+      return `${side} setting ${readBack.setting} read back ${on} by ${readBack.readBackBy}, the approved setting for ${lb(readBack.weightLb)} (weight agreed by ${readBack.setBy})`;
+    return `${side} ${label(request.to)} ${on}`;
   }
 
   private requireExecuting(state: LineupState): void {

@@ -59,6 +59,8 @@ export class ReturnToPoolService {
         onCatapultAt: null,
         tensionedAt: null,
         catapultWeightAckAt: null,
+        // Another catapult's setting differs: the read-back is done there anew.
+        settingReadBack: null,
         suspendReason: null,
       });
       await placeSlots(manager, { catapultId: catapult.id, slots: lane }, { catapultId: null, slots: [slot] });

@@ -34,7 +34,7 @@ export class ShipsController {
     refuses: {
       400: ['invalid_configuration'],
       404: ['ship_not_found'],
-      409: ['spot_in_use'],
+      409: ['spot_in_use', 'readiness_step_in_use'],
       422: ['deck_layout_invalid'],
     },
   })
@@ -68,7 +68,11 @@ export class ShipsController {
 
   @ApiDoc('Change a catapult', {
     response: CatapultViewDto,
-    refuses: { 400: ['invalid_configuration'], 404: ['ship_not_found', 'catapult_not_found'] },
+    refuses: {
+      400: ['invalid_configuration'],
+      404: ['ship_not_found', 'catapult_not_found'],
+      409: ['readiness_step_in_use'],
+    },
   })
   @Roles('admin')
   @Patch(':shipId/catapults/:catapultId')

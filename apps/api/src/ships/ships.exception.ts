@@ -8,6 +8,7 @@ const STATUS: Record<ShipRefusalCode, HttpStatus> = {
   catapult_not_found: HttpStatus.NOT_FOUND,
   invalid_configuration: HttpStatus.BAD_REQUEST,
   spot_in_use: HttpStatus.CONFLICT,
+  readiness_step_in_use: HttpStatus.CONFLICT,
   deck_layout_invalid: HttpStatus.UNPROCESSABLE_ENTITY,
 };
 

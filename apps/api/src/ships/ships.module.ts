@@ -1,6 +1,7 @@
 import { Module } from '@nestjs/common';
+import { CycleChangesModule } from '../cycle-changes/cycle-changes.module.js';
 import { ShipsController } from './ships.controller.js';
 import { ShipsService } from './ships.service.js';
 
-@Module({ controllers: [ShipsController], providers: [ShipsService] })
+@Module({ imports: [CycleChangesModule], controllers: [ShipsController], providers: [ShipsService] })
 export class ShipsModule {}

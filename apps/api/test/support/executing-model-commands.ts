@@ -79,7 +79,14 @@ export class StepCommand extends SlotCommand {
     const weight = [pilotAnswerLb ?? slot.grossWeightLb, slot.grossWeightLb, slot.grossWeightLb + 500][
       this.weightPick % 3
     ];
-    const body = { ...this.basis(slot), to, ...(to === 'weight_agreed' ? { agreedWeightLb: weight } : {}) };
+    // The crew reads back the setting the station shows: the approved one for the agreed weight.
+    const approvedSetting = slot.figures?.catapultSetting ?? null;
+    const body = {
+      ...this.basis(slot),
+      to,
+      ...(to === 'weight_agreed' ? { agreedWeightLb: weight } : {}),
+      ...(to === 'setting_set' && approvedSetting !== null ? { settingReadBack: approvedSetting } : {}),
+    };
     const path = this.path(model, slot, 'advance');
     const answer = (prediction: Request['prediction'], after?: Request['after']) => ({
       path,
@@ -108,6 +115,7 @@ export class StepCommand extends SlotCommand {
       if (pilotAnswerLb !== null && pilotAnswerLb !== weight) return answer(refusal(409, 'weight_mismatch'));
       Object.assign(facts, { agreedWeightLb: weight, weightAgreed: true });
     }
+    if (to === 'setting_set' && approvedSetting === null) return answer(refusal(409, 'approved_setting_missing'));
     // Reading the setting back is the re-verify.
     if (to === 'setting_set') facts.reverifyCause = null;
     if (to === 'on_catapult') facts.suspendReason = null;

@@ -298,7 +298,8 @@ export class LineupDriver {
 
   /**
    * A readiness step by the catapult officer of the slot's catapult (or `by`); the raw answer. Weight
-   * agreed records the pilot's answer from the tablet, else the planned weight, unless `agreedWeightLb`.
+   * agreed records the pilot's answer from the tablet, else the planned weight, unless `agreedWeightLb`;
+   * the setting step reads back the approved setting the snapshot shows, unless `settingReadBack`.
    */
   async step(
     cycleId: number,
@@ -306,14 +307,17 @@ export class LineupDriver {
     to: ReadinessStep | 'resume',
     by?: string,
     agreedWeightLb?: number,
+    settingReadBack?: number,
   ): Promise<request.Response> {
     const slot = await this.slot(cycleId, slotId);
     const number = (await this.demoShip()).catapults.find((catapult) => catapult.id === slot.catapultId)?.number ?? 1;
     const weight = to === 'weight_agreed' ? (agreedWeightLb ?? slot.pilotWeightAckLb ?? slot.grossWeightLb) : undefined;
+    const setting = to === 'setting_set' ? (settingReadBack ?? slot.figures?.catapultSetting) : undefined;
     return this.call(by ?? catapultOfficer(number), 'post', `/api/cycles/${cycleId}/lineup/slots/${slotId}/advance`, {
       slotVersion: slot.version,
       to,
       ...(weight === undefined ? {} : { agreedWeightLb: weight }),
+      ...(setting === undefined || setting === null ? {} : { settingReadBack: setting }),
     });
   }
 

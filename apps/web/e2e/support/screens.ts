@@ -31,6 +31,18 @@ export async function signIn(page: Page, who: string) {
   await page.getByRole('button', { name: 'Sign in' }).click();
 }
 
+/** The value of one of the Cat station's figures, by its label. */
+export const catFigure = (station: Page, label: string) =>
+  station
+    .getByTestId('cat-figures')
+    .locator(':scope > div')
+    .filter({ has: station.getByText(label, { exact: true }) })
+    .locator('p')
+    .last();
+
+/** The large setting on the Cat station: the one from the ship's approved launch data. */
+export const approvedSetting = (station: Page) => catFigure(station, 'Catapult setting (approved data)');
+
 export const lane = (page: Page, catapultNumber: number) =>
   page.locator(`[data-testid="lane"][data-catapult-number="${catapultNumber}"]`);
 export const pool = (page: Page) => page.getByTestId('deck-pool');

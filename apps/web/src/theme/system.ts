@@ -88,6 +88,8 @@ const catlineConfig = defineConfig({
         nogo: semanticPalette('ember', 'nogo'),
         caution: {
           ...semanticPalette('flare', 'caution', ref('hull', '950')),
+          // flare.700 on its own subtle tint reads 6.4:1; the Cat station's state colours need 7:1 in sun (WCAG 1.4.6).
+          fg: dayNight(ref('flare', '800'), night('caution.fg')),
           solid: dayNight(ref('flare', '300'), night('caution.solid')),
         },
       },

@@ -25,12 +25,15 @@ const fresh: SlotReadiness = {
   agreedWeight: null,
   pilotAnswer: null,
   reverify: null,
+  settingReadBack: null,
   lastStep: null,
 };
+/** The approved setting for 44,000 lb in these examples (an invented table row). */
+const APPROVED = 18;
 const officer: ReadinessActor = { id: 11, role: 'catapult_officer', atThisCatapult: true, fliesIt: false };
 const operator: ReadinessActor = { id: 12, role: 'deck_edge_operator', atThisCatapult: true, fliesIt: false };
 
-/** Takes `slot` through the steps up to `to` as the officer, agreeing 44,000 lb. */
+/** Takes `slot` through the steps up to `to` as the officer, agreeing 44,000 lb and reading back its setting. */
 function stepTo(to: ReadinessStepKey, slot = fresh): SlotReadiness {
   let state = slot;
   for (const step of steps.slice(0, steps.indexOf(to) + 1)) {
@@ -39,6 +42,8 @@ function stepTo(to: ReadinessStepKey, slot = fresh): SlotReadiness {
       to: step,
       at: 0,
       agreedWeight: 44_000,
+      settingReadBack: APPROVED,
+      approvedSetting: APPROVED,
     });
     if (!result.ok) throw new Error(`${step}: ${result.code}`);
     state = result.state;
@@ -100,18 +105,56 @@ describe('readinessTransition', () => {
     expect(record(45_500)).toMatchObject({ ok: true, state: { status: 'weight_agreed', agreedWeight: 45_500 } });
   });
 
+  it('takes the setting read back from the console only when it equals the approved one', () => {
+    const agreed = stepTo('weight_agreed');
+    const readBack = (settingReadBack: number | undefined, approvedSetting: number | null = APPROVED) =>
+      readinessTransition(steps, agreed, operator, {
+        kind: 'advance',
+        to: 'setting_set',
+        at: 0,
+        settingReadBack,
+        approvedSetting,
+      });
+    expect(readBack(17)).toEqual({ ok: false, code: 'setting_mismatch' });
+    expect(readBack(undefined)).toEqual({ ok: false, code: 'setting_not_read_back' });
+    expect(readBack(18, null)).toEqual({ ok: false, code: 'approved_setting_missing' });
+    expect(readBack(18)).toMatchObject({ ok: true, state: { status: 'setting_set', settingReadBack: 18 } });
+  });
+
+  it('keeps one person able to agree the weight and read the setting back', () => {
+    // Catline's choice: a ship with one catapult officer on a catapult must still launch; the record
+    // names both people, the rule does not demand two.
+    expect(stepTo('setting_set')).toMatchObject({ status: 'setting_set', settingReadBack: APPROVED });
+  });
+
+  it('forgets the read-back when the aircraft goes back before it', () => {
+    const set = stepTo('deflector_up');
+    const suspended = readinessTransition(steps, set, officer, { kind: 'suspend' });
+    if (!suspended.ok) throw new Error(suspended.code);
+    expect(suspended.state.settingReadBack).toBe(APPROVED);
+    expect(readinessTransition(steps, suspended.state, officer, { kind: 'resume' })).toMatchObject({
+      ok: true,
+      state: { status: 'on_catapult', settingReadBack: null },
+    });
+  });
+
   it('lets the person who took a step undo it within 10 s, and nobody else', () => {
     const set = readinessTransition(steps, stepTo('weight_agreed'), operator, {
       kind: 'advance',
       to: 'setting_set',
       at: 1_000,
+      settingReadBack: APPROVED,
+      approvedSetting: APPROVED,
     });
     if (!set.ok) throw new Error(set.code);
     const undoBy = (actor: ReadinessActor, at: number) =>
       readinessTransition(steps, set.state, actor, { kind: 'undo', at });
     expect(undoBy(officer, 2_000)).toEqual({ ok: false, code: 'not_your_step' });
     expect(undoBy(operator, 1_000 + UNDO_WINDOW_MS + 1)).toEqual({ ok: false, code: 'undo_expired' });
-    expect(undoBy(operator, 1_000 + UNDO_WINDOW_MS)).toMatchObject({ ok: true, state: { status: 'weight_agreed' } });
+    expect(undoBy(operator, 1_000 + UNDO_WINDOW_MS)).toMatchObject({
+      ok: true,
+      state: { status: 'weight_agreed', settingReadBack: null },
+    });
   });
 
   it('lets the crew, the pilot and the air boss suspend, and nobody else', () => {
@@ -199,7 +242,8 @@ const GATE_OR_READINESS: readonly string[] = [...READINESS_REFUSALS, ...LAUNCH_G
 
 type Step =
   | { kind: 'command'; slot: number; actor: ReadinessActor; command: Drawn }
-  | { kind: 'figures_changed'; cause: (typeof REVERIFY_CAUSES)[number] }
+  /** `setting`: the approved setting for the agreed weight under the new figures. */
+  | { kind: 'figures_changed'; cause: (typeof REVERIFY_CAUSES)[number]; setting: number | null }
   | { kind: 'pilot_answers'; slot: number; weight: number };
 
 // Mostly the catapult's own crew taking the next step, so runs get far along the steps; the rest of the
@@ -224,8 +268,20 @@ const actorArb = fc.oneof(
     }),
   },
 );
-/** 'next' is the slot's next step in the ship's order, resolved when the command is sent. */
-type Drawn = ReadinessCommand | { kind: 'advance'; to: 'next'; at: number; agreedWeight?: number };
+/**
+ * 'next' is the slot's next step in the ship's order, resolved when the command is sent; a read-back of
+ * 'approved' is the approved setting at that moment, 'off by one' one above it.
+ */
+type ReadBack = 'approved' | 'off by one' | undefined;
+type Drawn =
+  | Exclude<ReadinessCommand, { kind: 'advance' }>
+  | {
+      kind: 'advance';
+      to: ReadinessStepKey | 'next';
+      at: number;
+      agreedWeight?: number;
+      readBack: ReadBack;
+    };
 const commandArb: fc.Arbitrary<Drawn> = fc.oneof(
   {
     weight: 12,
@@ -237,6 +293,7 @@ const commandArb: fc.Arbitrary<Drawn> = fc.oneof(
       ),
       at: fc.integer({ min: 0, max: 30_000 }),
       agreedWeight: fc.option(fc.constantFrom(44_000, 45_500), { nil: undefined, freq: 4 }),
+      readBack: fc.constantFrom<ReadBack>('approved', 'approved', 'approved', 'off by one', undefined),
     }),
   },
   fc.record({ kind: fc.constant('undo' as const), at: fc.integer({ min: 0, max: 30_000 }) }),
@@ -269,7 +326,11 @@ const stepArb: fc.Arbitrary<Step> = fc.oneof(
   },
   {
     weight: 1,
-    arbitrary: fc.record({ kind: fc.constant('figures_changed' as const), cause: fc.constantFrom(...REVERIFY_CAUSES) }),
+    arbitrary: fc.record({
+      kind: fc.constant('figures_changed' as const),
+      cause: fc.constantFrom(...REVERIFY_CAUSES),
+      setting: fc.option(fc.integer({ min: 11, max: 20 }), { freq: 6 }),
+    }),
   },
   {
     weight: 1,
@@ -283,16 +344,40 @@ const stepArb: fc.Arbitrary<Step> = fc.oneof(
 
 const GONE = ['launched', 'down', 'planned-out'];
 
+/** The drawn step command as sent: the next step resolved, the weight the pilot answered, the read-back. */
+function resolve(
+  drawn: Extract<Drawn, { kind: 'advance' }>,
+  before: SlotReadiness,
+  approved: number | null,
+): ReadinessCommand {
+  const { readBack, ...rest } = drawn;
+  const next = drawn.to === 'next';
+  const settingReadBack =
+    readBack === undefined || approved === null ? undefined : readBack === 'approved' ? approved : approved + 1;
+  return {
+    ...rest,
+    to: next ? (nextStep(steps, before.status) ?? 'taxiing') : (drawn.to as ReadinessStepKey),
+    agreedWeight:
+      next && drawn.agreedWeight !== undefined ? (before.pilotAnswer ?? drawn.agreedWeight) : drawn.agreedWeight,
+    settingReadBack,
+    approvedSetting: approved,
+  };
+}
+
 describe('readiness model run', () => {
   it('never reaches an illegal state, never launches past a gate, and names every refusal', () => {
     fc.assert(
       fc.property(fc.array(stepArb, { minLength: 60, maxLength: 200 }), (run) => {
         // A slot sent back to the deck pool leaves the lane ('planned-out' in the model).
         const lane: (SlotReadiness & { out?: boolean })[] = [fresh, fresh, fresh].map((slot) => ({ ...slot }));
+        // The approved setting for the agreed weight under the figures of the moment; the same for every
+        // aircraft of the lane, which is enough to tell a current read-back from a stale one.
+        let approved: number | null = APPROVED;
         const place = (index: number) =>
           lane.slice(0, index).filter((slot) => !slot.out && !GONE.includes(slot.status)).length;
         for (const step of run) {
           if (step.kind === 'figures_changed') {
+            approved = step.setting;
             lane.forEach((slot, index) => {
               const back = reverifyDropBack(steps, slot.status, step.cause);
               if (back)
@@ -301,6 +386,7 @@ describe('readiness model run', () => {
                   status: back.to as ReadinessStepKey,
                   reverify: step.cause,
                   agreedWeight: back.weightAgreementVoid ? null : slot.agreedWeight,
+                  settingReadBack: null,
                   lastStep: null,
                 };
             });
@@ -313,15 +399,7 @@ describe('readiness model run', () => {
           const before = lane[step.slot];
           if (before.out) continue;
           const drawn = step.command;
-          const command: ReadinessCommand =
-            drawn.kind === 'advance' && drawn.to === 'next'
-              ? {
-                  ...drawn,
-                  to: nextStep(steps, before.status) ?? 'taxiing',
-                  agreedWeight:
-                    drawn.agreedWeight === undefined ? undefined : (before.pilotAnswer ?? drawn.agreedWeight),
-                }
-              : (drawn as ReadinessCommand);
+          const command: ReadinessCommand = drawn.kind === 'advance' ? resolve(drawn, before, approved) : drawn;
           const result = readinessTransition(steps, { ...before, placeInLane: place(step.slot) }, step.actor, command);
           // The crew's launch past a closed gate is refused with that gate's code, whatever else holds.
           const crew = CATAPULT_ROLES.includes(step.actor.role) && step.actor.atThisCatapult;
@@ -348,10 +426,18 @@ describe('readiness model run', () => {
           if (command.kind === 'cold_shot') expect(after.status).toBe('launched');
           if (command.kind === 'advance' && after.status !== 'taxiing') expect(place(step.slot)).toBe(0);
           lane[step.slot] = { ...after, out: command.kind === 'down_on_catapult' && after.status === 'planned' };
+          if (command.kind === 'advance' && command.to === 'setting_set')
+            expect(command.settingReadBack).toBe(command.approvedSetting);
           for (const slot of lane) {
             if (slot.status === 'weight_agreed' || isPast(slot.status, 'weight_agreed'))
               expect(slot.agreedWeight).not.toBeNull();
-            if (slot.status === 'setting_set' || isPast(slot.status, 'setting_set')) expect(slot.reverify).toBeNull();
+            // Past the read-back, the figure read back is the approved setting under today's figures.
+            if (slot.status === 'setting_set' || isPast(slot.status, 'setting_set')) {
+              expect(slot.reverify).toBeNull();
+              expect(slot.settingReadBack).toBe(approved);
+            } else if (slot.status !== 'suspended' && slot.status !== 'launched') {
+              expect(slot.settingReadBack).toBeNull();
+            }
           }
           // At most one aircraft of the lane is past the deflector at a time.
           expect(lane.filter((slot) => !slot.out && isPast(slot.status, 'taxiing')).length).toBeLessThanOrEqual(1);

@@ -40,11 +40,25 @@ export interface SlotReadiness {
   readonly pilotAnswer: number | null;
   /** What changed under agreed figures since the setting was read back; null when nothing waits. */
   readonly reverify: ReverifyCause | null;
+  /**
+   * The setting the crew read back from the catapult's console, equal to the approved one for the agreed
+   * weight; null until read back, and again once the aircraft is back before the read-back.
+   */
+  readonly settingReadBack: number | null;
   readonly lastStep: LastStep | null;
 }
 
 export type ReadinessCommand =
-  | { readonly kind: 'advance'; readonly to: ReadinessStepKey; readonly at: number; readonly agreedWeight?: number }
+  | {
+      readonly kind: 'advance';
+      readonly to: ReadinessStepKey;
+      readonly at: number;
+      readonly agreedWeight?: number;
+      /** With `setting_set`: the setting the crew read on the catapult's console. */
+      readonly settingReadBack?: number;
+      /** With `setting_set`: the approved setting for the agreed weight; null when the launch data give none. */
+      readonly approvedSetting?: number | null;
+    }
   | { readonly kind: 'undo'; readonly at: number }
   | { readonly kind: 'suspend' }
   /** The reason for a suspend, chosen after the one tap that suspended. */
@@ -67,6 +81,9 @@ export const READINESS_REFUSALS = [
   'wrong_step',
   'weight_not_agreed',
   'weight_mismatch',
+  'setting_not_read_back',
+  'setting_mismatch',
+  'approved_setting_missing',
   'nothing_to_undo',
   'not_your_step',
   'undo_expired',
@@ -124,12 +141,22 @@ function advance(
     if (slot.pilotAnswer !== null && slot.pilotAnswer !== command.agreedWeight) return refuse('weight_mismatch');
     agreedWeight = command.agreedWeight;
   }
+  let settingReadBack = slot.settingReadBack;
+  if (to === 'setting_set') {
+    // The two-person check: what the console shows must be the setting for the agreed weight.
+    if (command.approvedSetting === undefined || command.approvedSetting === null)
+      return refuse('approved_setting_missing');
+    if (command.settingReadBack === undefined) return refuse('setting_not_read_back');
+    if (command.settingReadBack !== command.approvedSetting) return refuse('setting_mismatch');
+    settingReadBack = command.settingReadBack;
+  }
   return {
     ok: true,
     state: {
       ...slot,
       status: to,
       agreedWeight,
+      settingReadBack,
       // Reading the setting back is the re-verify.
       reverify: to === 'setting_set' ? null : slot.reverify,
       lastStep: { byId: actor.id, at: command.at, from: slot.status, to, reverifyBefore: slot.reverify },
@@ -149,6 +176,7 @@ function undo(slot: SlotReadiness, actor: ReadinessActor, at: number): Readiness
       ...slot,
       status: last.from,
       agreedWeight: undoneWeight ? null : slot.agreedWeight,
+      settingReadBack: slot.status === 'setting_set' ? null : slot.settingReadBack,
       reverify: slot.status === 'setting_set' ? last.reverifyBefore : slot.reverify,
       lastStep: null,
     },
@@ -186,7 +214,7 @@ export function readinessTransition(
       // The first aircraft is back on the catapult, hooked up again; one suspended while waiting behind
       // it goes back to waiting. Weight and setting are agreed and read back anew either way.
       const back: ReadinessStepKey = slot.placeInLane === 0 || !steps.includes('taxiing') ? 'on_catapult' : 'taxiing';
-      return { ok: true, state: { ...slot, status: back, agreedWeight: null } };
+      return { ok: true, state: { ...slot, status: back, agreedWeight: null, settingReadBack: null } };
     }
     case 'launch': {
       if (command.refusals.length > 0) return refuse(command.refusals[0]);
@@ -208,6 +236,7 @@ export function readinessTransition(
               ...slot,
               status: command.outcome === 'down' ? 'down' : 'planned',
               agreedWeight: null,
+              settingReadBack: null,
               reverify: null,
               lastStep: null,
             },

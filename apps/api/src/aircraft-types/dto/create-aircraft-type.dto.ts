@@ -6,6 +6,8 @@ import {
   type CreateAircraftTypeRequest,
   NAME_MAX_LENGTH,
   TYPE_DESIGNATION_MAX_LENGTH,
+  HOLDBACK_ELEMENT_MAX_LENGTH,
+  HOLDBACK_ELEMENT_PATTERN,
 } from '@catline/contracts';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
@@ -20,6 +22,7 @@ import {
   IsOptional,
   IsPositive,
   IsString,
+  Matches,
   Max,
   MaxLength,
   Min,
@@ -110,6 +113,22 @@ export class CreateAircraftTypeDto extends ShipChoiceDto implements CreateAircra
   @Min(RANGES.maxEndSpeedKt.min)
   @Max(RANGES.maxEndSpeedKt.max)
   maxEndSpeedKt: number;
+
+  @ApiPropertyOptional({
+    type: 'string',
+    nullable: true,
+    maxLength: HOLDBACK_ELEMENT_MAX_LENGTH,
+    example: 'RE-14',
+    description: 'The holdback release element the type is launched with, as marked on it; null while not known.',
+  })
+  @IsOptional()
+  @Trim()
+  @IsString()
+  @MaxLength(HOLDBACK_ELEMENT_MAX_LENGTH)
+  @Matches(HOLDBACK_ELEMENT_PATTERN, {
+    message: 'holdbackElement is the designation marked on the element: letters, digits, dashes or dots',
+  })
+  holdbackElement?: string | null;
 
   @ApiProperty({ type: [TrimBandDto], description: 'Increasing upToLb; the last band has upToLb null.' })
   @IsArray()

@@ -1,5 +1,6 @@
 import {
   AIRCRAFT_TYPE_RANGES,
+  CATAPULT_SETTING,
   GROSS_WEIGHT_LB,
   LAUNCH_CONFIGURATIONS,
   type LaunchConfiguration,
@@ -22,8 +23,8 @@ export class SettingTableRowBodyDto implements SettingTableRow {
 
   @ApiProperty({ description: "Whole-number catapult setting, from 0 to the catapult's highest." })
   @IsInt({ message: 'a catapult setting is a whole number' })
-  @Min(0)
-  @Max(999)
+  @Min(CATAPULT_SETTING.min)
+  @Max(CATAPULT_SETTING.max)
   setting: number;
 }
 

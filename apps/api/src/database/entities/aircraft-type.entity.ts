@@ -50,6 +50,10 @@ export class AircraftType {
   @Column({ name: 'max_end_speed_kt', type: 'double', nullable: true })
   maxEndSpeedKt: number | null;
 
+  /** The holdback release element the type is launched with, as marked on it; null until entered. */
+  @Column({ name: 'holdback_element', type: 'varchar', length: 20, nullable: true })
+  holdbackElement: string | null;
+
   @Column({ name: 'trim_bands', type: 'json' })
   trimBands: TrimBand[];
 

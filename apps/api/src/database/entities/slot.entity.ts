@@ -3,6 +3,7 @@ import type {
   DeckPositionKind,
   LaunchRecord,
   ReverifyCause,
+  SettingReadBackView,
   SlotStatus,
   SlotStoresLine,
   SoftLaunchGateCode,
@@ -162,6 +163,14 @@ export class Slot {
   /** The spare slot that took this down aircraft's place. */
   @Column({ name: 'replaced_by_slot_id', type: 'int', nullable: true })
   replacedBySlotId: number | null;
+
+  /** Who recorded the agreed weight, and so gave the setting to set; null while none is agreed. */
+  @Column({ name: 'weight_agreed_by', type: 'varchar', length: 120, nullable: true })
+  weightAgreedBy: string | null;
+
+  /** The two-person check of the setting; null until read back, and again once the aircraft drops back before it. */
+  @Column({ name: 'setting_read_back', type: 'json', nullable: true })
+  settingReadBack: SettingReadBackView | null;
 
   /** What changed under the agreed figures since they were verified; cleared when the setting is read back again. */
   @Column({ name: 'reverify_cause', type: 'varchar', length: 12, nullable: true })

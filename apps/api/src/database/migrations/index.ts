@@ -25,6 +25,7 @@ import { CyclePrerequisiteTicks1796290000000 } from './1796290000000-CyclePrereq
 import { AuditEntriesAppendOnly1796292153729 } from './1796292153729-AuditEntriesAppendOnly.js';
 import { CatapultReadinessSteps1796300000000 } from './1796300000000-CatapultReadinessSteps.js';
 import { AircraftClassDepartures1796301700000 } from './1796301700000-AircraftClassDepartures.js';
+import { SettingReadBackAndHoldback1796302400000 } from './1796302400000-SettingReadBackAndHoldback.js';
 
 /** Every migration in the order it runs; add a new one at the end (see DEVELOPERS.md). */
 export const migrations = [
@@ -55,4 +56,5 @@ export const migrations = [
   AuditEntriesAppendOnly1796292153729,
   CatapultReadinessSteps1796300000000,
   AircraftClassDepartures1796301700000,
+  SettingReadBackAndHoldback1796302400000,
 ];

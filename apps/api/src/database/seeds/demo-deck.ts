@@ -195,10 +195,13 @@ export class DemoDeck {
     const slot = await this.slot(cycleId, side);
     // The pilot agreed the planned weight on the tablet; the officer records that figure.
     const agreedWeightLb = to === 'weight_agreed' ? slot.grossWeightLb : undefined;
+    // The console shows the approved setting, and the officer reads it back.
+    const settingReadBack = to === 'setting_set' ? (slot.figures?.catapultSetting ?? undefined) : undefined;
     await this.readiness.advance(cycleId, this.officerOf(slot), slot.id, {
       slotVersion: slot.version,
       to,
       agreedWeightLb,
+      settingReadBack,
     });
   }
 

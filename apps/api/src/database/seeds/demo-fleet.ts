@@ -169,6 +169,7 @@ export const demoAircraftTypes = [
     requiredExcessKt: 12,
     afterburnerFromLb: 46_000,
     maxEndSpeedKt: 190,
+    holdbackElement: 'RE-14',
     trimBands: strikeTrim,
     launchTable: [
       { grossWeightLb: 34_000, minLaunchAirspeedKt: 124 },
@@ -217,6 +218,7 @@ export const demoAircraftTypes = [
     requiredExcessKt: 10,
     afterburnerFromLb: 28_000,
     maxEndSpeedKt: 165,
+    holdbackElement: 'RE-9',
     trimBands: [
       { upToLb: 26_000, trimDeg: 10 },
       { upToLb: null, trimDeg: 12 },
@@ -265,6 +267,7 @@ export const demoAircraftTypes = [
     requiredExcessKt: 10,
     afterburnerFromLb: null,
     maxEndSpeedKt: 150,
+    holdbackElement: 'RE-22',
     trimBands: [{ upToLb: null, trimDeg: 6 }],
     launchTable: [
       { grossWeightLb: 44_000, minLaunchAirspeedKt: 104 },

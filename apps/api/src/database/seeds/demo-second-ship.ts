@@ -68,6 +68,7 @@ export const secondShipAircraftTypes = [
     requiredExcessKt: 10,
     afterburnerFromLb: null,
     maxEndSpeedKt: 160,
+    holdbackElement: 'RE-11',
     trimBands: [{ upToLb: null, trimDeg: 9 }],
     launchTable: [
       { grossWeightLb: 16_000, minLaunchAirspeedKt: 108 },

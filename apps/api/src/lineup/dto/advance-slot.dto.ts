@@ -1,4 +1,10 @@
-import { GROSS_WEIGHT_LB, READINESS_STEPS, type AdvanceSlotRequest, type ReadinessStep } from '@catline/contracts';
+import {
+  CATAPULT_SETTING,
+  GROSS_WEIGHT_LB,
+  READINESS_STEPS,
+  type AdvanceSlotRequest,
+  type ReadinessStep,
+} from '@catline/contracts';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { IsIn, IsInt, IsOptional, Max, Min } from 'class-validator';
 import { VersionField } from './fields.js';
@@ -23,4 +29,16 @@ export class AdvanceSlotDto implements AdvanceSlotRequest {
   @Min(GROSS_WEIGHT_LB.min)
   @Max(GROSS_WEIGHT_LB.max)
   agreedWeightLb?: number;
+
+  @ApiPropertyOptional({
+    minimum: CATAPULT_SETTING.min,
+    maximum: CATAPULT_SETTING.max,
+    description:
+      "With setting_set: the setting read on the catapult's console; refused unless it is the approved setting for the agreed weight.",
+  })
+  @IsOptional()
+  @IsInt({ message: 'settingReadBack is the whole-number setting read on the console' })
+  @Min(CATAPULT_SETTING.min)
+  @Max(CATAPULT_SETTING.max)
+  settingReadBack?: number;
 }

@@ -1,6 +1,12 @@
 import type { LineupSnapshot, SlotView } from '@catline/contracts';
 import { describe, expect, it } from 'vitest';
-import { canGoDownOnCatapult, canReportHangfire, lastLaunched } from './cat-station-model.js';
+import {
+  canGoDownOnCatapult,
+  canReportHangfire,
+  holdbackLabel,
+  lastLaunched,
+  readBackFigure,
+} from './cat-station-model.js';
 
 const slot = (status: SlotView['status'], extra: Partial<SlotView> = {}) =>
   ({ id: 1, catapultId: 1, status, launchedAt: null, ...extra }) as SlotView;
@@ -29,5 +35,28 @@ describe('events at the catapult', () => {
     ];
     expect(lastLaunched({ slots } as LineupSnapshot, 1)?.id).toBe(2);
     expect(lastLaunched({ slots: [slots[3]] } as LineupSnapshot, 1)).toBeUndefined();
+  });
+});
+
+describe('the setting read back from the console', () => {
+  it('takes a whole-number setting as typed, and nothing else', () => {
+    expect(readBackFigure(' 18 ')).toBe(18);
+    expect(readBackFigure('0')).toBe(0);
+    expect(readBackFigure('')).toBeNull();
+    expect(readBackFigure('18.5')).toBeNull();
+    expect(readBackFigure('-3')).toBeNull();
+    expect(readBackFigure('1000')).toBeNull();
+    expect(readBackFigure('1e2')).toBeNull();
+  });
+});
+
+describe('the holdback at the hook-up', () => {
+  it('names the element of the type, or says it is not recorded', () => {
+    expect(holdbackLabel(slot('taxiing', { holdbackElement: 'RE-14', typeDesignation: 'WKD-41' }))).toBe(
+      'Holdback: RE-14',
+    );
+    expect(holdbackLabel(slot('taxiing', { holdbackElement: null, typeDesignation: 'WKD-41' }))).toBe(
+      'Holdback: not recorded for the WKD-41',
+    );
   });
 });

@@ -1,4 +1,10 @@
-import { READINESS_STEPS, type LineupSnapshot, type ReadinessStep, type SlotView } from '@catline/contracts';
+import {
+  CATAPULT_SETTING,
+  READINESS_STEPS,
+  type LineupSnapshot,
+  type ReadinessStep,
+  type SlotView,
+} from '@catline/contracts';
 import { STEP_LABELS } from '../../lib/readiness-step-labels.js';
 
 const finished = new Set(['launched', 'down', 'scratched']);
@@ -23,6 +29,21 @@ export const canSuspend = (slot: SlotView) => (READINESS_STEPS as readonly strin
 
 /** The figure the crew records as agreed: the pilot's answer from the tablet, else the planned weight shown. */
 export const weightToRecord = (slot: SlotView): number => slot.pilotWeightAckLb ?? slot.grossWeightLb;
+
+/**
+ * The setting as typed from the catapult's console: a whole number in the settings' range, or null while
+ * the field holds anything else. Whether it is the approved one is the server's to judge.
+ */
+export function readBackFigure(typed: string): number | null {
+  const text = typed.trim();
+  if (!/^\d{1,3}$/.test(text)) return null;
+  const figure = Number(text);
+  return figure >= CATAPULT_SETTING.min && figure <= CATAPULT_SETTING.max ? figure : null;
+}
+
+/** What the crew fits at the hook-up: the type's holdback release element, or a word that it is not recorded. */
+export const holdbackLabel = (slot: SlotView): string =>
+  `Holdback: ${slot.holdbackElement ?? `not recorded for the ${slot.typeDesignation}`}`;
 
 /**
  * Everything that still stands between this aircraft and the shot, in the deck crew's words: the

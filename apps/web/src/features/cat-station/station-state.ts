@@ -25,6 +25,7 @@ const sentence = (words: string) => `${words.charAt(0).toUpperCase()}${words.sli
 /** Whom or what the next step waits for, in the deck crew's words. */
 function waitingFor(step: ReadinessStep): string {
   if (step === 'weight_agreed') return 'The pilot and the catapult officer to agree the gross weight.';
+  if (step === 'setting_set') return 'The deck crew to read the setting back from the console.';
   if (step === 'pilot_ready') return 'The pilot to signal ready.';
   return `The deck crew — ${STEP_LABELS[step].toLowerCase()}.`;
 }

@@ -17,6 +17,12 @@ const fields = (values: typeof blankAircraftType) =>
   aircraftTypeSchema.safeParse(values).error?.issues.map((issue) => issue.path.join('.')) ?? [];
 
 describe('a new aircraft type', () => {
+  it('takes the holdback release element as marked, or none when left empty', () => {
+    expect(aircraftTypeSchema.parse({ ...typed, holdbackElement: ' RE-14 ' }).holdbackElement).toBe('RE-14');
+    expect(aircraftTypeSchema.parse({ ...typed, holdbackElement: '' }).holdbackElement).toBeNull();
+    expect(fields({ ...typed, holdbackElement: 'RE 14' })).toEqual(['holdbackElement']);
+  });
+
   it('hands on the create request with bands and table read from their text', () => {
     expect(aircraftTypeSchema.parse(typed)).toEqual({
       designation: 'KX-9',
@@ -29,6 +35,7 @@ describe('a new aircraft type', () => {
       requiredExcessKt: 10,
       afterburnerFromLb: null,
       maxEndSpeedKt: 175,
+      holdbackElement: null,
       trimBands: [
         { upToLb: 44_000, trimDeg: 15 },
         { upToLb: null, trimDeg: 18 },

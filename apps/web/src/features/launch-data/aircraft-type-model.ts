@@ -2,6 +2,7 @@ import {
   AIRCRAFT_CLASSES,
   AIRCRAFT_TYPE_RANGES as RANGES,
   DEFAULT_AIRCRAFT_CLASS,
+  HOLDBACK_ELEMENT_PATTERN,
   NAME_MAX_LENGTH,
   type Range,
   type TrimBand,
@@ -26,6 +27,17 @@ function launchRowsOf(text: string) {
     });
   return parseLaunchTable(rows);
 }
+
+const holdbackMessage = 'Leave empty, or enter the element as marked on it: letters, digits, dashes or dots.';
+
+/** The holdback release element as typed: the designation marked on it, or nothing (null) while not known. */
+export const holdbackElementText = z.pipe(
+  z.string().check(
+    z.trim(),
+    z.refine((text) => text === '' || HOLDBACK_ELEMENT_PATTERN.test(text), holdbackMessage),
+  ),
+  z.transform((text: string) => (text === '' ? null : text)),
+);
 
 /** A new aircraft type as typed; the schema hands on the create request. */
 export const aircraftTypeSchema = z.object({
@@ -60,6 +72,7 @@ export const aircraftTypeSchema = z.object({
     RANGES.maxEndSpeedKt,
     `Enter the maximum end speed (overstress) in knots, ${span(RANGES.maxEndSpeedKt)}.`,
   ),
+  holdbackElement: holdbackElementText,
   trimBands: parsedText<TrimBand[]>((text) => {
     const bands = parseTrimBands(text);
     return bands ? { value: bands } : { problem: 'Write bands as 44000:15, 48000:17, *:18 — the last one with *.' };
@@ -81,6 +94,7 @@ export const blankAircraftType: z.input<typeof aircraftTypeSchema> = {
   requiredExcessKt: '',
   afterburnerFromLb: '',
   maxEndSpeedKt: '',
+  holdbackElement: '',
   trimBands: '',
   launchTable: '',
 };

@@ -47,6 +47,7 @@ export const CHANGE_KIND_LABELS: Record<ChangeKind, string> = {
   load_set: 'Fuel and stores',
   arm_state_set: 'Armed or safe',
   launch_data_changed: 'Launch data',
+  readiness_steps_changed: 'Readiness steps',
 };
 
 /** Slots in no lane and not in the deck pool: down or scratched aircraft. */

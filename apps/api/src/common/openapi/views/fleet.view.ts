@@ -360,6 +360,13 @@ export class AircraftTypeViewDto implements AircraftTypeView {
   })
   maxEndSpeedKt: number | null;
 
+  @ApiProperty({
+    type: 'string',
+    nullable: true,
+    description: 'The holdback release element the type is launched with; null until entered.',
+  })
+  holdbackElement: string | null;
+
   @ApiProperty({ type: [TrimBandDto] })
   trimBands: TrimBand[];
 

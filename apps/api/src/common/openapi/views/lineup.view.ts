@@ -28,6 +28,7 @@ import {
   type ProjectedLaunch,
   REVERIFY_CAUSES,
   type ReverifyCause,
+  type SettingReadBackView,
   ROLES,
   type Role,
   SLOT_STATUSES,
@@ -301,6 +302,27 @@ export class WaiverViewDto implements WaiverView {
   at: string;
 }
 
+@ApiSchema({
+  name: 'SettingReadBackView',
+  description: 'The two-person check of the setting: the figure on the console, equal to the approved one.',
+})
+export class SettingReadBackViewDto implements SettingReadBackView {
+  @IntProperty()
+  setting: number;
+
+  @IntProperty({ description: 'The agreed weight the setting is for, pounds.' })
+  weightLb: number;
+
+  @ApiProperty({ description: 'Who recorded the agreed weight the setting was set for.' })
+  setBy: string;
+
+  @ApiProperty({ description: 'Who read the setting back from the console; may be the same person.' })
+  readBackBy: string;
+
+  @InstantProperty()
+  at: string;
+}
+
 @ApiSchema({ name: 'LaunchGateView', description: 'A launch gate closed for an aircraft.' })
 export class LaunchGateViewDto implements LaunchGateView {
   @EnumProperty(LAUNCH_GATE_CODES, 'LaunchGateCode')
@@ -495,6 +517,23 @@ export class SlotViewDto implements SlotView {
 
   @InstantProperty({ nullable: true })
   catapultWeightAckAt: string | null;
+
+  @ApiProperty({ type: String, nullable: true, description: 'Who recorded the agreed weight; null while none is.' })
+  weightAgreedBy: string | null;
+
+  @ApiProperty({
+    type: () => SettingReadBackViewDto,
+    nullable: true,
+    description: 'The setting read back from the console; null until read back, and after a drop-back before it.',
+  })
+  settingReadBack: SettingReadBackView | null;
+
+  @ApiProperty({
+    type: String,
+    nullable: true,
+    description: "The holdback release element the aircraft's type is launched with; null while not recorded.",
+  })
+  holdbackElement: string | null;
 
   @ApiProperty({ type: String, nullable: true })
   suspendReason: string | null;

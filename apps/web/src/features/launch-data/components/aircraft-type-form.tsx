@@ -26,7 +26,7 @@ export function AircraftTypeForm({ onCreated }: { onCreated: (id: number) => voi
       label={label}
       error={errors[key]?.message}
       helper={helper}
-      required={key !== 'afterburnerFromLb' && key !== 'operatingWeightLb'}
+      required={key !== 'afterburnerFromLb' && key !== 'operatingWeightLb' && key !== 'holdbackElement'}
     >
       <Input inputMode={numeric ? 'decimal' : 'text'} {...register(key)} />
     </FormField>
@@ -83,6 +83,12 @@ export function AircraftTypeForm({ onCreated }: { onCreated: (id: number) => voi
           {field('requiredExcessKt', 'Required excess (kt)')}
           {field('afterburnerFromLb', 'Afterburner from (lb)', 'Empty when never required.')}
           {field('maxEndSpeedKt', 'Max end speed (kt)', 'Overstress: a shot giving more is refused.')}
+          {field(
+            'holdbackElement',
+            'Holdback release element',
+            'As marked on it, e.g. RE-14; shown at the hook-up.',
+            false,
+          )}
         </SimpleGrid>
         <SimpleGrid columns={{ base: 1, md: 2 }} gap="3">
           {field('trimBands', 'Trim bands', 'e.g. 44000:15, 48000:17, *:18', false)}

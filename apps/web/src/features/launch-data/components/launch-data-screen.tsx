@@ -16,6 +16,7 @@ import { useHasRole } from '../../../lib/session-store.js';
 import { formatTrimBands } from '../launch-data-model.js';
 import { useSetAircraftClass } from '../api/set-aircraft-class.js';
 import { AircraftTypeForm } from './aircraft-type-form.js';
+import { HoldbackElementField } from './holdback-element-field.js';
 import { LaunchTableEditor } from './launch-table-editor.js';
 import { LaunchTableImport } from './launch-table-import.js';
 import { SettingTablesEditor } from './setting-tables-editor.js';
@@ -83,6 +84,7 @@ function TypeDetail({ type, editable }: { type: AircraftTypeView; editable: bool
           value={type.afterburnerFromLb === null ? 'Never' : formatPounds(type.afterburnerFromLb)}
           size="md"
         />
+        <HoldbackElementField key={type.holdbackElement} type={type} editable={editable} />
       </SimpleGrid>
       <Box>
         <Text fontSize="xs" textTransform="uppercase" letterSpacing="wider" color="fg.muted" fontWeight="600">

@@ -205,7 +205,10 @@ describe(`${HANDLERS} handlers sending ${TOTAL} lineup commands at one cycle (se
         const model = newModel(await readyToLaunch(cycle.id, slots[0], lanes[1][0].pilotEmail), people);
         // The crew's last step may be undone for a while, as the model knows of its own steps.
         const [before, last] = model.snapshot.readinessSteps.slice(-2) as SlotStatus[];
-        const officer = people.find((person) => person.catapultId === slots[0].catapultId)!;
+        const ready = model.snapshot.slots.find((slot) => slot.id === slots[0].id)!;
+        const officer = people.find(
+          (person) => person.role === 'catapult_officer' && person.catapultId === ready.catapultId,
+        )!;
         model.lastSteps.set(slots[0].id, {
           byUserId: officer.userId,
           sentAt: lastStepSentBy,

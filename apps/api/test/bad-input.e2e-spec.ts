@@ -7,6 +7,7 @@ import { DataSource } from 'typeorm';
 import { type MatrixContext, type MatrixRoute, type RouteExample, matrixRoutes } from './role-matrix/index.js';
 import { type RecordedAnswer, recordAnswers } from './support/answer-recorder.js';
 import { DocumentedAnswers } from './support/documented-answers.js';
+import { secondShip, secondShipPeople } from '../src/database/seeds/demo-second-ship.js';
 import { LineupDriver } from './support/lineup-fixtures.js';
 import { recreateOwnDatabase } from './support/own-database.js';
 import { bearer, demoEmail, signIn } from './support/sign-in.js';
@@ -49,10 +50,57 @@ const junkValue: fc.Arbitrary<unknown> = fc.oneof(
 
 /**
  * What makes a request junk for certain, so that no answer but a 4xx is right: a field the route does not
- * know, one of its fields holding a value of the wrong JSON type, a path id that is no id, a path id of a
- * real row that belongs to another cycle, malformed JSON, or no token.
+ * know, one of its fields holding a value of the wrong JSON type, a path id that is no id, malformed JSON,
+ * or no token. (Real ids of other rows are tried one by one, below.)
  */
-type Fault = 'unknown_field' | 'wrong_type' | 'bad_param' | 'other_rows_id' | 'malformed' | 'no_token';
+type Fault = 'unknown_field' | 'wrong_type' | 'bad_param' | 'malformed' | 'no_token';
+
+/** The kinds of row a request names by id; each is given a real row that is not the request's. */
+type IdKind = 'slot' | 'catapult' | 'aircraft' | 'pilot' | 'person' | 'squadron' | 'aircraftType' | 'ship' | 'cycle';
+
+/** The ids a request names, by path placeholder or top-level body field. */
+const ID_FIELDS: Record<string, IdKind> = {
+  slotId: 'slot',
+  spareSlotId: 'slot',
+  catapultId: 'catapult',
+  toCatapultId: 'catapult',
+  aircraftId: 'aircraft',
+  pilotId: 'pilot',
+  squadronId: 'squadron',
+  typeId: 'aircraftType',
+  shipId: 'ship',
+  cycleId: 'cycle',
+};
+
+/** What a path's bare `{id}` names, by the path it is in. */
+const PATH_ID_KINDS: [prefix: string, kind: IdKind][] = [
+  ['/api/aircraft-types/', 'aircraftType'],
+  ['/api/aircraft/', 'aircraft'],
+  ['/api/users/', 'person'],
+  ['/api/squadrons/', 'squadron'],
+];
+
+/** One id of a request, where it is and what it names. */
+interface NamedId {
+  in: 'path' | 'body';
+  name: string;
+  kind: IdKind;
+}
+
+function namedIds(route: MatrixRoute, example: RouteExample): NamedId[] {
+  const placeholders = [...route.path.matchAll(/\{(\w+)\}/g)].map((match) => match[1]);
+  const inPath = placeholders.flatMap((name): NamedId[] => {
+    const kind = name === 'id' ? PATH_ID_KINDS.find(([prefix]) => route.path.startsWith(prefix))?.[1] : ID_FIELDS[name];
+    return kind ? [{ in: 'path', name, kind }] : [];
+  });
+  const body = typeof example.body === 'object' && example.body !== null ? example.body : {};
+  const inBody = Object.entries(body).flatMap(([name, value]): NamedId[] =>
+    ID_FIELDS[name] && (value === null || typeof value === 'number')
+      ? [{ in: 'body', name, kind: ID_FIELDS[name] }]
+      : [],
+  );
+  return [...inPath, ...inBody];
+}
 
 /** A value of another JSON type than `value`: no validator of ours takes it in its place. */
 function wrongTypeFor(value: unknown): unknown {
@@ -71,6 +119,18 @@ const junkParam = fc.oneof(
   fc.string({ minLength: 1, maxLength: 30 }).filter((text) => text !== '.' && text !== '..' && !/\d/.test(text)),
 );
 
+/** An aircraft of the second ship for its own cycle, as air operations add one. */
+const SECOND_SHIP_SLOT = {
+  pilotId: null,
+  mission: 'Training',
+  fuelLb: 4_000,
+  stores: '',
+  grossWeightLb: 18_500,
+  tanker: false,
+  earlyWarning: false,
+  spare: false,
+};
+
 interface Fuzzed {
   fault: Fault;
   value: unknown;
@@ -88,6 +148,10 @@ describe(`bad input to every write route and socket event (${RUNS} tries each, s
   let answers: RecordedAnswer[];
   let documented: DocumentedAnswers;
   const tokens = new Map<Role, string>();
+  let firstShip: LineupDriver;
+  let elsewhere: Record<IdKind, number[]>;
+  /** How many ids of other rows were tried, by kind. */
+  const triedKinds = new Map<IdKind, number>();
 
   const sharedDatabase = process.env.DB_NAME;
 
@@ -101,6 +165,8 @@ describe(`bad input to every write route and socket event (${RUNS} tries each, s
     dataSource = app.get(DataSource);
     tables = dataSource.entityMetadatas.map((metadata) => metadata.tableName);
     for (const role of ROLES) tokens.set(role, await signIn(url, demoEmail(role)));
+    firstShip = new LineupDriver(url, (email) => tokens.get(ROLES.find((role) => demoEmail(role) === email)!));
+    elsewhere = await rowsElsewhere();
   });
 
   afterAll(async () => {
@@ -115,6 +181,53 @@ describe(`bad input to every write route and socket event (${RUNS} tries each, s
       Checksum: string;
     }[];
     return rows.map((row) => `${row.Table}=${row.Checksum}`).join(' ');
+  }
+
+  /**
+   * Real rows no request of the first ship's people may reach: the second ship's (a cycle of its own with
+   * one aircraft is made here), and a slot of another cycle of the first ship.
+   */
+  async function rowsElsewhere(): Promise<Record<IdKind, number[]>> {
+    const [{ id: shipId }] = (await dataSource.query('SELECT id FROM ships WHERE name = ?', [secondShip.name])) as {
+      id: number;
+    }[];
+    const ids = async (table: string, where = '') =>
+      (
+        (await dataSource.query(`SELECT id FROM \`${table}\` WHERE ship_id = ? ${where} ORDER BY id LIMIT 1`, [
+          shipId,
+        ])) as {
+          id: number;
+        }[]
+      ).map((row) => row.id);
+    const aircraft = await ids('aircraft');
+    const airOps = await signIn(url, secondShipPeople.find((person) => person.role === 'air_operations')!.email);
+    const { number: _number, ...cycleBody } = await firstShip.createCycleBody();
+    const cycle = await request(url)
+      .post('/api/cycles')
+      .set(bearer(airOps))
+      .send({ ...cycleBody, shipId, number: 7_001 })
+      .expect(201);
+    await request(url)
+      .post(`/api/cycles/${cycle.body.id}/slots`)
+      .set(bearer(airOps))
+      .send({ ...SECOND_SHIP_SLOT, aircraftId: aircraft[0] })
+      .expect(201);
+    const [slot] = (await dataSource.query('SELECT id FROM slots WHERE cycle_id = ?', [cycle.body.id])) as {
+      id: number;
+    }[];
+    const otherCycle = await firstShip.createCycle();
+    const sameShipSlot = await firstShip.addSlot(otherCycle.id, 'C21');
+    return {
+      slot: [sameShipSlot.id, slot.id],
+      catapult: await ids('catapults'),
+      aircraft,
+      pilot: await ids('users', "AND role = 'pilot'"),
+      person: await ids('users', "AND role = 'observer'"),
+      squadron: await ids('squadrons'),
+      aircraftType: await ids('aircraft_types'),
+      ship: [shipId],
+      cycle: [cycle.body.id as number],
+    };
   }
 
   async function exampleOf(route: MatrixRoute, caller: Role | null): Promise<RouteExample> {
@@ -134,28 +247,27 @@ describe(`bad input to every write route and socket event (${RUNS} tries each, s
       ...(jsonBody ? (['unknown_field'] as const) : []),
       ...(jsonBody && Object.keys(example.body!).length > 0 ? (['wrong_type'] as const) : []),
       ...(placeholders.length > 0 ? (['bad_param'] as const) : []),
-      ...(placeholders.includes('slotId') && example.params?.cycleId !== undefined ? (['other_rows_id'] as const) : []),
       ...(caller ? (['no_token'] as const) : []),
     ];
   }
 
-  /** A slot of another cycle than `cycleId`: a real id, but not of this cycle's rows. */
-  async function slotOfAnotherCycle(cycleId: number): Promise<number> {
-    const [row] = (await dataSource.query('SELECT id FROM slots WHERE cycle_id <> ? ORDER BY id LIMIT 1', [
-      cycleId,
-    ])) as { id: number }[];
-    return row.id;
+  const pathOf = (route: MatrixRoute, params: Record<string, string | number>) =>
+    route.path.replace(/\{(\w+)\}/g, (_whole, name: string) => encodeURIComponent(String(params[name] ?? 1)));
+
+  /** The route's valid example as `caller` sends it, with the id `named` swapped for `id`. */
+  function sendWithId(route: MatrixRoute, caller: Role, example: RouteExample, named: NamedId, id: number) {
+    const params = { ...(example.params ?? {}), ...(named.in === 'path' ? { [named.name]: id } : {}) };
+    const body = { ...(example.body ?? {}), ...(named.in === 'body' ? { [named.name]: id } : {}) };
+    const call = request(url)[route.method.toLowerCase() as 'post'](pathOf(route, params));
+    const pending = call.set(bearer(tokens.get(caller)!));
+    return example.body === undefined ? pending : pending.send(body);
   }
 
   async function send(route: MatrixRoute, caller: Role | null, example: RouteExample, fuzzed: Fuzzed) {
     const params: Record<string, string | number> = { ...(example.params ?? {}) };
     const placeholders = [...route.path.matchAll(/\{(\w+)\}/g)].map((match) => match[1]);
     if (fuzzed.fault === 'bad_param') params[placeholders[fuzzed.pick % placeholders.length]] = fuzzed.param;
-    if (fuzzed.fault === 'other_rows_id') params.slotId = await slotOfAnotherCycle(Number(example.params!.cycleId));
-    const path = route.path.replace(/\{(\w+)\}/g, (_whole, name: string) =>
-      encodeURIComponent(String(params[name] ?? 1)),
-    );
-    const pending = request(url)[route.method.toLowerCase() as 'post'](path);
+    const pending = request(url)[route.method.toLowerCase() as 'post'](pathOf(route, params));
     if (caller && fuzzed.fault !== 'no_token') pending.set(bearer(tokens.get(caller)!));
     const body = { ...(example.body ?? {}) } as Record<string, unknown>;
     if (fuzzed.fault === 'unknown_field') body.catlineJunk = fuzzed.value;
@@ -207,10 +319,52 @@ describe(`bad input to every write route and socket event (${RUNS} tries each, s
     120_000,
   );
 
+  // Each id a route takes, swapped for the id of a real row that is not the caller's to name: a slot of
+  // another cycle, the second ship's cycle, catapult, aircraft, pilot, person, squadron, type or the ship.
+  const guardedCallsOf = (route: MatrixRoute) =>
+    route.allowed === 'public'
+      ? []
+      : route.allowed.map((caller) => [`${route.method} ${route.path} as ${caller}`, route, caller] as const);
+
+  it.each(writeRoutes.flatMap(guardedCallsOf))(
+    '%s refuses real ids of rows that are not its own with a 4xx, changing nothing',
+    async (_name, route, caller) => {
+      const example = await exampleOf(route, caller);
+      const failures: string[] = [];
+      for (const named of namedIds(route, example)) {
+        for (const id of elsewhere[named.kind]) {
+          const before = await fingerprint();
+          const response = await sendWithId(route, caller, example, named, id);
+          const what = `${named.name} = ${named.kind} ${id} of another row: ${response.status} ${JSON.stringify(response.body).slice(0, 300)}`;
+          if (response.status < 400 || response.status >= 500 || response.status === 401) failures.push(what);
+          else if ((await fingerprint()) !== before) failures.push(`${what}, yet the database changed`);
+          if (typeof response.body?.message !== 'string') failures.push(`${what} without a message`);
+          triedKinds.set(named.kind, (triedKinds.get(named.kind) ?? 0) + 1);
+        }
+      }
+      expect(failures).toEqual([]);
+    },
+    120_000,
+  );
+
+  it('tried an id of another row of every kind', () => {
+    const kinds: IdKind[] = [
+      'slot',
+      'catapult',
+      'aircraft',
+      'pilot',
+      'person',
+      'squadron',
+      'aircraftType',
+      'ship',
+      'cycle',
+    ];
+    expect(kinds.filter((kind) => !triedKinds.has(kind))).toEqual([]);
+  });
+
   it('answers junk socket events with a refusal or not at all, keeps the connection and changes nothing', async () => {
     const origin = app.get(ConfigService).get<string>('WEB_ORIGINS')!.split(',')[0].trim();
-    const deck = new LineupDriver(url, (email) => tokens.get(ROLES.find((role) => demoEmail(role) === email)!));
-    const cycle = await deck.createCycle();
+    const cycle = await firstShip.createCycle();
     const socket: ClientSocket = openSocket(url, { token: tokens.get('pilot')!, origin });
     await connected(socket);
     const raw = socket as unknown as {

@@ -1,8 +1,11 @@
 import type { DeckPositionView, ReplaceDeckLayoutRequest, ShipView, SlotView } from '@catline/contracts';
 import type { INestApplication } from '@nestjs/common';
 import { demoDeckLayout, demoDeckSpots } from '../src/database/seeds/demo-fleet.js';
+import { secondShipDeckLayout, secondShipDeckSpots, secondShipPeople } from '../src/database/seeds/demo-second-ship.js';
 import { ADMIN, HANDLER, LineupDriver, OBSERVER } from './support/lineup-fixtures.js';
 import { startTestApp } from './support/test-app.js';
+
+const SECOND_SHIP_ADMIN = secondShipPeople.find((person) => person.role === 'admin')!.email;
 
 // The demo ship's deck is put back after every change: other specs share the database.
 const demoDeck: ReplaceDeckLayoutRequest = JSON.parse(JSON.stringify({ deckSpots: demoDeckSpots, ...demoDeckLayout }));
@@ -156,6 +159,20 @@ describe("the admin's deck layout", () => {
       details,
     });
     expect(await ship()).toEqual(before);
+  });
+
+  it("refuses the second ship's layout naming a catapult only the first ship has, with 422, changing nothing", async () => {
+    const [other] = (await driver.call(SECOND_SHIP_ADMIN, 'get', '/api/ships')).body as ShipView[];
+    const read = async () => (await driver.call(SECOND_SHIP_ADMIN, 'get', `/api/ships/${other.id}`)).body;
+    const before = await read();
+    const response = await driver.call(SECOND_SHIP_ADMIN, 'put', `/api/ships/${other.id}/deck-layout`, {
+      deckSpots: secondShipDeckSpots,
+      ...secondShipDeckLayout,
+      landingAreaCatapults: [3],
+    });
+    expect(response.status).toBe(422);
+    expect(response.body.message).toBe('The landing area names catapult 3, which the ship does not have.');
+    expect(await read()).toEqual(before);
   });
 
   it('refuses a malformed layout with 400 before the deck rules', async () => {

@@ -8,12 +8,27 @@ import {
   type Request,
   type SlotFacts,
   UpAgainCommand,
+  LANDING_AREA_CATAPULTS,
+  cycleClosed,
+  droppedBack,
+  windReadingStale,
   lanesOf,
   ON_CATAPULT,
   onCatapult,
   refusal,
   slotFacts,
 } from './lineup-model-commands.js';
+import {
+  CloseCommand,
+  DeckStatusCommand,
+  LandingAreaCommand,
+  PrerequisiteCommand,
+  RespotCommand,
+  StopStartCommand,
+  TowCommand,
+  WaiverCommand,
+  WindReadingCommand,
+} from './cycle-model-commands.js';
 import { launchKey } from './lineup-fixtures.js';
 import {
   ArmStateCommand,
@@ -35,7 +50,9 @@ import {
  * The commands of a launching cycle for fast-check's model-based run: readiness steps and their undo, the
  * pilot's weight answer and the crew's agreement, suspend (and its reason) and resume, launch with its
  * gates, hangfire, cold shot, down on the catapult, return to the pool, armed or safe, fuel and stores, the
- * pilot, and (from the planning model) catapult up/down, down and up again. Each predicts from the rules
+ * pilot, (from the planning model) catapult up/down, down and up again, and (cycle-model-commands.ts) the
+ * commands on the cycle and its deck: wind readings, deck status, landing area, waivers, launch prerequisites,
+ * stop, start and close, tows and the respot. Each predicts from the rules
  * as written here (not the service's) whether the server takes it, with which refusal code, and what it
  * leaves; the model-based run checks that after every command.
  */
@@ -221,21 +238,14 @@ export class WeightAnswerCommand extends SlotCommand {
       prediction,
       token: person.token,
     });
+    if (cycleClosed(model)) return answer(refusal(409, 'cycle_closed'));
     if (person.userId !== slot.pilotId) return answer(refusal(403, 'not_your_slot'));
     if (this.stale) return answer(refusal(409, 'stale_basis'));
     if (GONE.includes(slot.status)) return answer(refusal(409, 'wrong_step'));
     const facts: Partial<SlotFacts> = { pilotAnswerLb: weight };
     // Another figure than the one agreed: back before the agreement, to agree and read the setting back anew.
-    const agreedAt = steps.indexOf('weight_agreed');
-    const at = steps.indexOf(slot.status);
-    if (slot.agreedWeightLb !== null && slot.agreedWeightLb !== weight && agreedAt >= 0 && at >= agreedAt) {
-      Object.assign(facts, {
-        status: steps[agreedAt - 1] ?? steps[0],
-        reverifyCause: 'weight',
-        agreedWeightLb: null,
-        weightAgreed: false,
-      });
-    }
+    if (slot.agreedWeightLb !== null && slot.agreedWeightLb !== weight)
+      Object.assign(facts, droppedBack(steps, slot.status, 'weight'));
     return answer(this.accepted(model, slot, facts));
   }
 
@@ -264,15 +274,24 @@ export class LaunchCommand extends SlotCommand {
     if (notOwnCatapult(person, slot)) return answer(refusal(403, 'not_your_catapult'));
     if (slot.status === 'launched') return answer(refusal(409, 'already_launched'));
     if (this.stale) return answer(refusal(409, 'stale_basis'));
+    // The gates in their order, hard ones first; the loads and winds of the run keep the figures' own gates open.
     const lane = snapshot.lanes.find((candidate) => candidate.catapultId === slot.catapultId)!;
+    if (snapshot.cycle.state !== 'executing') return answer(refusal(409, 'cycle_not_executing'));
     if (lane.status !== 'up') return answer(refusal(409, 'catapult_down'));
+    if (snapshot.cycle.landingArea !== 'clear' && LANDING_AREA_CATAPULTS.includes(lane.number))
+      return answer(refusal(409, 'catapult_closed'));
+    if (lane.deckHoldReason !== null) return answer(refusal(409, 'deck_not_clear'));
     if (!slotFacts(slot).weightAgreed || slot.agreedWeightLb === null) return answer(refusal(409, 'weight_not_agreed'));
     if (slot.reverifyCause !== null) return answer(refusal(409, 'reverify_required'));
+    if (windReadingStale(model) && !slotFacts(slot).waivedGates.includes('wind_reading_stale'))
+      return answer(refusal(409, 'wind_reading_stale'));
     if (slot.status !== steps[steps.length - 1] || placeInLane(snapshot, slot) !== 0)
       return answer(refusal(409, 'wrong_step'));
     // The last aircraft off closes the cycle.
     const closesCycle = snapshot.slots.every((other) => other.id === slot.id || GONE.includes(other.status));
-    return answer({ ...this.accepted(model, slot, { status: 'launched' }), closesCycle }, (after) =>
+    // Airborne, it no longer stands anywhere on deck.
+    const airborne = { status: 'launched' as const, deckPosition: null };
+    return answer({ ...this.accepted(model, slot, airborne), closesCycle }, (after) =>
       after.launches.set(lane.catapultId, [...(after.launches.get(lane.catapultId) ?? []), slot.id]),
     );
   }
@@ -392,6 +411,7 @@ export class ReturnToPoolCommand extends SlotCommand {
       prediction,
       token: person.token,
     });
+    if (cycleClosed(model)) return answer(refusal(409, 'cycle_closed'));
     if (slot.catapultId === null) return answer(refusal(409, 'no_change'));
     if (by === 0 && person.catapultId !== slot.catapultId) return answer(refusal(403, 'not_your_catapult'));
     if (by === 2) return answer(refusal(403, 'agreement_required'));
@@ -415,9 +435,12 @@ export class ReturnToPoolCommand extends SlotCommand {
 }
 
 /** fast-check's commands for a launching cycle; the model's first person is the handler (token 0). */
+const slotPick = fc.nat();
+const mostlyTrue = fc.nat(7).map((n) => n !== 0);
+
 export function executingModelCommands(maxCommands: number) {
-  const slot = fc.nat();
-  const mostly = fc.nat(7).map((n) => n !== 0);
+  const slot = slotPick;
+  const mostly = mostlyTrue;
   const sometimes = fc.nat(9).map((n) => n === 0);
   const crew = <T>(build: (slotPick: number, right: boolean, personPick: number, stale: boolean) => T) =>
     fc.tuple(slot, mostly, fc.nat(), sometimes).map(([s, right, person, stale]) => build(s, right, person, stale));
@@ -495,8 +518,45 @@ export function executingModelCommands(maxCommands: number) {
             .tuple(slot, mostly, fc.nat(), sometimes, fc.nat())
             .map((args) => new SuspendReasonCommand(...args)),
         },
+        ...cycleCommands(sometimes),
       ),
     ],
     { maxCommands, size: 'max' },
   );
+}
+
+/** The commands on the cycle and its deck, by the air boss, air operations and the handler. */
+function cycleCommands(sometimes: fc.Arbitrary<boolean>) {
+  return [
+    {
+      weight: 4,
+      arbitrary: fc.tuple(fc.nat(), fc.boolean(), sometimes).map((args) => new WindReadingCommand(...args)),
+    },
+    {
+      weight: 3,
+      arbitrary: fc.tuple(fc.nat(), fc.boolean(), sometimes, sometimes).map((args) => new DeckStatusCommand(...args)),
+    },
+    {
+      weight: 2,
+      arbitrary: fc.tuple(fc.nat(), fc.boolean(), sometimes).map((args) => new LandingAreaCommand(...args)),
+    },
+    {
+      weight: 4,
+      arbitrary: fc.tuple(slotPick, mostlyTrue, sometimes).map((args) => new WaiverCommand(...args)),
+    },
+    {
+      weight: 2,
+      arbitrary: fc.tuple(fc.nat(), fc.boolean(), sometimes).map((args) => new PrerequisiteCommand(...args)),
+    },
+    {
+      weight: 2,
+      arbitrary: fc.tuple(mostlyTrue, mostlyTrue, sometimes).map((args) => new StopStartCommand(...args)),
+    },
+    { weight: 1, arbitrary: sometimes.map((stale) => new CloseCommand(stale)) },
+    {
+      weight: 2,
+      arbitrary: fc.tuple(slotPick, fc.nat(), sometimes).map((args) => new TowCommand(...args)),
+    },
+    { weight: 1, arbitrary: fc.tuple(fc.boolean(), sometimes).map((args) => new RespotCommand(...args)) },
+  ];
 }

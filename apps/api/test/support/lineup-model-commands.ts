@@ -1,5 +1,6 @@
 import {
   applyLineupPatch,
+  DEFAULT_WIND_READING_MAX_AGE_MIN,
   type LineupCommandResult,
   SLOT_STATUSES,
   type LineupSnapshot,
@@ -8,7 +9,7 @@ import {
 } from '@catline/contracts';
 import fc from 'fast-check';
 import { isDeepStrictEqual } from 'node:util';
-import { type CommandOutcome, send } from './random-lineup-commands.js';
+import { type CommandOutcome, type LineupCommand, send } from './random-lineup-commands.js';
 
 /**
  * The model of fast-check's model-based run: the lineup as the rules say it must be. Each command
@@ -35,7 +36,7 @@ export interface LineupModel {
 /** Someone who sends commands: `token` indexes the run's tokens; an officer's catapult, a pilot's user id. */
 export interface Person {
   token: number;
-  role: 'handler' | 'catapult_officer' | 'pilot';
+  role: 'handler' | 'catapult_officer' | 'pilot' | 'air_boss' | 'air_operations';
   userId: number;
   catapultId: number | null;
 }
@@ -68,6 +69,10 @@ export interface SlotFacts {
   grossWeightLb: number;
   /** The planned gross weight is built from fuel and stores set (not the figure typed in the air plan). */
   loadBuilt: boolean;
+  /** The soft launch gates the air boss waived for this aircraft, in order. */
+  waivedGates: string[];
+  /** Where it stands on deck or below: "kind name"; null once airborne. */
+  deckPosition: string | null;
 }
 
 export const slotFacts = (slot: SlotView): SlotFacts => ({
@@ -83,7 +88,42 @@ export const slotFacts = (slot: SlotView): SlotFacts => ({
   stores: slot.stores,
   grossWeightLb: slot.grossWeightLb,
   loadBuilt: slot.grossWeightParts !== null,
+  waivedGates: slot.waivers.map((waiver) => waiver.gate).sort(),
+  deckPosition: slot.deckPosition && `${slot.deckPosition.kind} ${slot.deckPosition.name}`,
 });
+
+/** What the model follows of the cycle itself: a part of the cycle view. */
+export interface CycleFacts {
+  state: LineupSnapshot['cycle']['state'];
+  landingArea: LineupSnapshot['cycle']['landingArea'];
+  landingAreaReason: string | null;
+  /** Each launch prerequisite's tick, in the ship profile's order. */
+  ticked: boolean[];
+  /** The wind reading in force: when it was taken (ISO 8601), and the true wind's speed. */
+  windReadAt: string;
+  windKt: number;
+  /** The respot built after the last launch: how many targets and tows; null until built. */
+  respot: { targets: number; tows: number } | null;
+}
+
+export const cycleFacts = ({ cycle }: LineupSnapshot): CycleFacts => ({
+  state: cycle.state,
+  landingArea: cycle.landingArea,
+  landingAreaReason: cycle.landingAreaReason,
+  ticked: cycle.launchPrerequisites.map((prerequisite) => prerequisite.ticked),
+  windReadAt: cycle.windReadAt,
+  windKt: cycle.trueWindSpeedKt,
+  respot: cycle.respot && { targets: cycle.respot.targets.length, tows: cycle.respot.tows.length },
+});
+
+/**
+ * The demo ship's catapults inside the landing area, as the demo seed enters its deck layout: they pause
+ * (closed) while the landing area recovers or is fouled, unless already down.
+ */
+export const LANDING_AREA_CATAPULTS: readonly number[] = [3, 4];
+
+const laneClosed = (number: number, status: string, landingArea: CycleFacts['landingArea']) =>
+  status === 'up' && landingArea !== 'clear' && LANDING_AREA_CATAPULTS.includes(number);
 
 export const newModel = (snapshot: LineupSnapshot, people: readonly Person[] = []): LineupModel => ({
   snapshot,
@@ -121,12 +161,44 @@ export interface Expected {
   catapult?: { id: number; status: string };
   /** The last aircraft launched: the cycle closes in a change of its own. */
   closesCycle?: boolean;
+  /** What the command sets of the cycle itself. */
+  cycle?: Partial<CycleFacts>;
+  /** The air boss's hold on a catapult the command sets: its reason, null for clear to launch. */
+  deckHold?: { catapultId: number; reason: string | null };
 }
 
 /** Expected answer: 200 with what it leaves, or the refusal status (and its code, where the model knows it). */
 export type Prediction = ({ status: 200 } & Expected) | { status: RefusalStatus; code?: string };
 
-export type RefusalStatus = 400 | 403 | 409 | 422;
+export type RefusalStatus = 400 | 403 | 404 | 409 | 422;
+
+/**
+ * What a change under the agreed figures (a new weight, wind or ship's speed) does to an aircraft past the
+ * weight agreement, as the readiness rules say: a new weight voids the agreement and takes it back before
+ * it; a new wind takes it back to the agreement, to read the setting back anew. Either way it is marked for
+ * re-verify and loses its waivers (given for the figures as they were). Null for one not that far.
+ */
+export function droppedBack(
+  steps: readonly SlotStatus[],
+  status: SlotStatus,
+  cause: 'weight' | 'wind',
+): Partial<SlotFacts> | null {
+  const agreedAt = steps.indexOf('weight_agreed');
+  if (agreedAt < 0 || steps.indexOf(status) < agreedAt) return null;
+  const back = { reverifyCause: cause, waivedGates: [] };
+  if (cause === 'wind') return { ...back, status: 'weight_agreed' };
+  return { ...back, status: steps[agreedAt - 1] ?? steps[0], agreedWeightLb: null, weightAgreed: false };
+}
+
+/**
+ * The wind reading in force is older than the ship allows (the demo ship's profile names no age: the
+ * default); the model's readings are either fresh or well past it, never near the edge.
+ */
+export const windReadingStale = (model: Readonly<LineupModel>) =>
+  Date.now() >= Date.parse(model.snapshot.cycle.windReadAt) + DEFAULT_WIND_READING_MAX_AGE_MIN * 60_000;
+
+/** Every command but the respot's is refused once the cycle is closed. */
+export const cycleClosed = (model: Readonly<LineupModel>) => model.snapshot.cycle.state === 'closed';
 
 /** A refusal with its code. */
 export const refusal = (status: RefusalStatus, code: string): Prediction => ({ status, code });
@@ -135,18 +207,28 @@ export const refusal = (status: RefusalStatus, code: string): Prediction => ({ s
 export interface Request {
   path: string;
   body: object;
+  method?: LineupCommand['method'];
   prediction: Prediction;
   token?: number;
   /** The model's own bookkeeping once an accepted command is confirmed. */
   after?: (model: LineupModel, outcome: CommandOutcome) => void;
 }
 
-/** The parts of a lineup the model predicts: version, lanes with their catapult's status, every slot's place and status. */
+/**
+ * The parts of a lineup the model predicts: version, the cycle's facts, lanes with their catapult's status,
+ * pause and deck hold, every slot's place and facts.
+ */
 function observed(snapshot: LineupSnapshot) {
   return {
     version: snapshot.version,
-    cycleState: snapshot.cycle.state,
-    lanes: snapshot.lanes.map((lane) => ({ catapultId: lane.catapultId, status: lane.status, slotIds: lane.slotIds })),
+    cycle: cycleFacts(snapshot),
+    lanes: snapshot.lanes.map((lane) => ({
+      catapultId: lane.catapultId,
+      status: lane.status,
+      closed: lane.closed,
+      deckHoldReason: lane.deckHoldReason,
+      slotIds: lane.slotIds,
+    })),
     slots: byId(snapshot).map((slot) => ({ id: slot.id, catapultId: slot.catapultId, ...slotFacts(slot) })),
   };
 }
@@ -154,14 +236,25 @@ function observed(snapshot: LineupSnapshot) {
 /** The model's lineup after an accepted command, from the one before it and the rules' prediction. */
 function expectedAfter(before: LineupSnapshot, expected: Expected): ReturnType<typeof observed> {
   const laneOf = (slotId: number) => [...expected.lanes].find(([, ids]) => ids.includes(slotId))?.[0] ?? null;
+  const cycle = {
+    ...cycleFacts(before),
+    ...expected.cycle,
+    ...(expected.closesCycle ? { state: 'closed' as const } : {}),
+  };
   return {
     version: before.version + (expected.closesCycle ? 2 : 1),
-    cycleState: expected.closesCycle ? 'closed' : before.cycle.state,
-    lanes: before.lanes.map((lane) => ({
-      catapultId: lane.catapultId,
-      status: expected.catapult?.id === lane.catapultId ? expected.catapult.status : lane.status,
-      slotIds: expected.lanes.get(lane.catapultId)!,
-    })) as ReturnType<typeof observed>['lanes'],
+    cycle,
+    lanes: before.lanes.map((lane) => {
+      const status = expected.catapult?.id === lane.catapultId ? expected.catapult.status : lane.status;
+      return {
+        catapultId: lane.catapultId,
+        status,
+        closed: laneClosed(lane.number, status, cycle.landingArea),
+        deckHoldReason:
+          expected.deckHold?.catapultId === lane.catapultId ? expected.deckHold.reason : lane.deckHoldReason,
+        slotIds: expected.lanes.get(lane.catapultId)!,
+      };
+    }) as ReturnType<typeof observed>['lanes'],
     slots: byId(before).map((slot) => ({
       id: slot.id,
       catapultId: laneOf(slot.id),
@@ -181,8 +274,8 @@ export abstract class ModelCommand implements fc.AsyncCommand<LineupModel, Lineu
   protected abstract request(model: LineupModel): Request;
 
   async run(model: LineupModel, real: LineupReal): Promise<void> {
-    const { path, body, prediction, token = this.handler, after } = this.request(model);
-    const outcome = await send(real.url, real.tokens[token], { path, body }, token);
+    const { path, body, method, prediction, token = this.handler, after } = this.request(model);
+    const outcome = await send(real.url, real.tokens[token], { path, body, method }, token);
     model.outcomes.push(outcome);
     const answer = `${this.toString()} answered ${outcome.status} ${JSON.stringify(outcome.body)}`;
     const code = (outcome.body as { code?: string } | null)?.code;
@@ -299,6 +392,7 @@ export class MarkDownCommand extends ModelCommand {
     };
     // The down aircraft's pilot walks to the spare; without one, the spare must bring its own.
     const spareWithoutPilot = spare !== undefined && slot.pilotId === null && spare.pilotId === null;
+    if (cycleClosed(model)) return { path, body, prediction: refusal(409, 'cycle_closed') };
     if (this.stale) return { path, body, prediction: refusal(409, 'stale_basis') };
     // Any aircraft still to launch may go down, wherever it stands in its steps.
     if (['launched', 'down', 'scratched'].includes(slot.status))
@@ -356,6 +450,7 @@ export class CatapultStatusCommand extends ModelCommand {
     const other = lane.status === 'up' ? 'down' : 'up';
     const path = `/api/cycles/${snapshot.cycle.id}/lineup/catapults/${lane.catapultId}/status`;
     const body = { status: other, basisStatus: this.stale ? other : lane.status, confirm: this.confirm };
+    if (cycleClosed(model)) return { path, body, prediction: refusal(409, 'cycle_closed') };
     if (this.stale) return { path, body, prediction: refusal(409, 'stale_basis') };
     const onIt = other === 'down' ? onCatapult(snapshot, lane.catapultId) : undefined;
     if (onIt && !this.confirm) return { path, body, prediction: refusal(409, 'aircraft_on_catapult') };
@@ -431,6 +526,7 @@ export class UpAgainCommand extends ModelCommand {
     const slot = slots[this.slotPick % slots.length];
     const path = `/api/cycles/${snapshot.cycle.id}/lineup/slots/${slot.id}/up`;
     const body = { slotVersion: this.stale ? slot.version + 1 : slot.version, reason: 'Model run: fixed' };
+    if (cycleClosed(model)) return { path, body, prediction: refusal(409, 'cycle_closed') };
     if (this.stale || slot.status !== 'down') return { path, body, prediction: { status: 409 as const } };
     const changed = new Map([[slot.id, { status: 'planned' as const }]]);
     return { path, body, prediction: { status: 200 as const, lanes: lanesOf(snapshot), slots: changed } };

@@ -4,6 +4,8 @@ import type { LineupCommandResult, LineupSnapshot } from '@catline/contracts';
 export interface LineupCommand {
   path: string;
   body: object;
+  /** POST unless told (a cycle's conditions are patched, a launch prerequisite put). */
+  method?: 'PATCH' | 'PUT';
 }
 
 /** What the server answered; status 0 when the request never got an answer (connection lost). */
@@ -103,7 +105,7 @@ export async function send(url: string, token: string, command: LineupCommand, h
   const sentAt = Date.now();
   try {
     const response = await fetch(`${url}${command.path}`, {
-      method: 'POST',
+      method: command.method ?? 'POST',
       headers: { Authorization: `Bearer ${token}`, 'Content-Type': 'application/json' },
       body: JSON.stringify(command.body),
       signal: AbortSignal.timeout(30_000),

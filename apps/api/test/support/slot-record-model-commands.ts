@@ -4,6 +4,8 @@ import {
   type Person,
   type Request,
   type SlotFacts,
+  cycleClosed,
+  droppedBack,
   lanesOf,
   refusal,
   slotFacts,
@@ -21,9 +23,6 @@ const RECORDS_CLOSED: readonly SlotStatus[] = ['launched', 'scratched'];
 
 /** A pilot may change aircraft only while the aircraft is planned or down. */
 const PILOT_CAN_CHANGE: readonly SlotStatus[] = ['planned', 'down'];
-
-/** The command's refusals every cycle gives once it is closed. */
-const closed = (model: LineupModel) => model.snapshot.cycle.state === 'closed';
 
 /**
  * The handler records armed or safe for any aircraft; a catapult officer only for one in the order of
@@ -51,7 +50,7 @@ export class ArmStateCommand extends SlotCommand {
       prediction,
       token: person.token,
     });
-    if (closed(model)) return answer(refusal(409, 'cycle_closed'));
+    if (cycleClosed(model)) return answer(refusal(409, 'cycle_closed'));
     if (person.role !== 'handler' && (slot.catapultId === null || slot.catapultId !== person.catapultId))
       return answer(refusal(403, 'not_your_catapult'));
     if (this.stale) return answer(refusal(409, 'stale_basis'));
@@ -126,7 +125,7 @@ export class LoadCommand extends SlotCommand {
       prediction,
       token: model.people[0].token,
     });
-    if (closed(model)) return answer(refusal(409, 'cycle_closed'));
+    if (cycleClosed(model)) return answer(refusal(409, 'cycle_closed'));
     if (this.stale) return answer(refusal(409, 'stale_basis'));
     if (RECORDS_CLOSED.includes(slot.status)) return answer(refusal(409, 'wrong_step'));
     const weights = load.stores.map(({ name, count }) => (WKD_41.stores.get(name.toLowerCase()) ?? NaN) * count);
@@ -139,15 +138,7 @@ export class LoadCommand extends SlotCommand {
     // The pilot answered the figure of before.
     if (grossWeightLb !== slot.grossWeightLb) facts.pilotAnswerLb = null;
     // Any load set voids a weight agreement: the aircraft goes back to the step before it.
-    const agreedAt = steps.indexOf('weight_agreed');
-    if (agreedAt >= 0 && steps.indexOf(slot.status) >= agreedAt) {
-      Object.assign(facts, {
-        status: steps[agreedAt - 1] ?? steps[0],
-        reverifyCause: 'weight',
-        agreedWeightLb: null,
-        weightAgreed: false,
-      });
-    }
+    Object.assign(facts, droppedBack(steps, slot.status, 'weight'));
     return answer(this.accepted(model, slot, facts));
   }
 
@@ -200,7 +191,7 @@ export class AssignPilotCommand extends SlotCommand {
       prediction,
       token: model.people[0].token,
     });
-    if (closed(model)) return answer(refusal(409, 'cycle_closed'));
+    if (cycleClosed(model)) return answer(refusal(409, 'cycle_closed'));
     if (this.stale) return answer(refusal(409, 'stale_basis'));
     if (!PILOT_CAN_CHANGE.includes(slot.status)) return answer(refusal(409, 'wrong_step'));
     if (pilotId === slot.pilotId) return answer(refusal(409, 'no_change'));

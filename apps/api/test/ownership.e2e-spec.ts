@@ -82,6 +82,7 @@ describe('ownership of catapult and slot commands', () => {
     slotVersion: slot.version,
     to,
     ...(to === 'weight_agreed' ? { agreedWeightLb: slot.pilotWeightAckLb ?? slot.grossWeightLb } : {}),
+    ...(to === 'setting_set' ? { settingReadBack: slot.figures?.catapultSetting } : {}),
   });
 
   /** The ship's readiness steps from where the slot stands up to `last` (every one by default). */

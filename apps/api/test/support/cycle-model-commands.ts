@@ -51,7 +51,8 @@ const WIND_SPEEDS_KT = [10, 14];
 /**
  * Air operations enter a wind reading (true wind from dead ahead) taken a second ago, or 40 minutes ago
  * (past the ship's 30-minute age). A new wind takes every aircraft past the weight agreement back to it
- * for re-verify; the same wind read again only renews the reading.
+ * for re-verify; the same wind read again only renews the reading, and is accepted even when it names the
+ * instant of the reading before.
  */
 export class WindReadingCommand extends ModelCommand {
   constructor(
@@ -81,8 +82,8 @@ export class WindReadingCommand extends ModelCommand {
     });
     if (cycleClosed(model)) return answer(refusal(409, 'cycle_closed'));
     if (this.stale) return answer(refusal(409, 'stale_basis'));
+    // Every reading is a change, even one of the same wind at the same instant (the service's rule).
     const newWind = speed !== snapshot.cycle.trueWindSpeedKt;
-    if (!newWind && readAt === snapshot.cycle.windReadAt) return answer(refusal(409, 'no_change'));
     const slots = new Map<number, Partial<SlotFacts>>();
     const steps = snapshot.readinessSteps as SlotStatus[];
     for (const slot of newWind ? snapshot.slots : []) {

@@ -69,14 +69,19 @@ describe('approved catapult settings', () => {
     });
   });
 
-  it('refuses the launch with no approved table for the combination, and no waiver opens it', async () => {
+  it('stops at the weight with no approved table for the combination: nothing to read back, no launch, and no waiver opens it', async () => {
     // Tables for cat 2 only: nothing approves a shot off cat 1.
     const { side, type } = await aircraftOfNewType([{ ...cleanOnCat1(10), catapultNumber: 2 }]);
     const cycle = await deck.createCycle();
     const slot = await deck.addSlot(cycle.id, side, { pilotEmail: pilot(7), grossWeightLb: 30_000, stores: '' });
     await deck.place(cycle.id, slot.id, 1);
     await deck.start(cycle.id);
-    const ready = await deck.readyToLaunch(cycle.id, slot.id, pilot(7));
+    await deck.acknowledgeWeight(cycle.id, slot.id, pilot(7));
+    await deck.stepThrough(cycle.id, slot.id, 'weight_agreed');
+    const readBack = await deck.step(cycle.id, slot.id, 'setting_set');
+    expect(readBack.status).toBe(409);
+    expect(readBack.body).toMatchObject({ code: 'approved_setting_missing' });
+    const ready = await deck.slot(cycle.id, slot.id);
     expect(ready.figures).toMatchObject({ catapultSetting: null, go: false });
     expect(ready.gates).toEqual(
       expect.arrayContaining([expect.objectContaining({ gate: 'approved_setting_missing', soft: false })]),
@@ -88,7 +93,7 @@ describe('approved catapult settings', () => {
       `The approved launch data hold no clean setting table for the ${type.designation} on cat 1`,
     );
     expect((await deck.waive(cycle.id, slot.id, 'approved_setting_missing', 'Launch anyway')).status).toBe(400);
-    expect((await deck.slot(cycle.id, slot.id)).status).toBe('pilot_ready');
+    expect((await deck.slot(cycle.id, slot.id)).status).toBe('weight_agreed');
   });
 
   it('refuses the launch above the last row of the table', async () => {

@@ -28,11 +28,14 @@ describe('squadrons', () => {
       .set(bearer(admin))
       .send({ name: ' Stormpetrels ', code, email: 'storm@catline.example' });
     expect(created.status).toBe(201);
+    // A ship's admin creates for their own ship, the only one they list.
+    const [ship] = (await request(url).get('/api/ships').set(bearer(admin))).body as { id: number }[];
     expect(created.body).toEqual({
       id: expect.any(Number),
       name: 'Stormpetrels',
       code,
       email: 'storm@catline.example',
+      shipId: ship.id,
     });
 
     const renamed = await request(url)

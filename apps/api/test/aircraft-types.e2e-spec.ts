@@ -29,12 +29,16 @@ describe('aircraft types', () => {
     const body = aircraftTypeBody();
     const created = await request(url).post('/api/aircraft-types').set(bearer(admin)).send(body);
     expect(created.status).toBe(201);
+    // A ship's admin creates for their own ship, the only one they list.
+    const [ship] = (await request(url).get('/api/ships').set(bearer(admin))).body as { id: number }[];
     expect(created.body).toEqual({
       id: expect.any(Number),
       ...body,
       aircraftClass: 'jet',
       storesCatalogue: [],
       settingTables: [],
+      holdbackElement: null,
+      shipId: ship.id,
     });
     expect((await get(created.body.id)).body).toEqual(created.body);
   });

@@ -16,8 +16,7 @@ import { LineupException } from '../cycle-changes/lineup.exception.js';
 import { placeSlots, updateSlot } from '../cycle-changes/slot-writes.js';
 import { suspendOnStoppedCatapult, writeCatapultStatus } from './catapult-stop.js';
 import { transition } from './readiness-facts.js';
-
-const label = (status: string) => status.replaceAll('_', ' ');
+import { statusWords } from '../common/wording.js';
 
 /**
  * What goes wrong at the catapult, each an event of its own in the change log (who and when):
@@ -47,7 +46,7 @@ export class CatapultEventsService {
         user,
         { kind: 'hangfire' },
         'hangfire',
-        `${side} is ${label(slot.status)}; a hangfire is reported only once it is tensioned.`,
+        `${side} is ${statusWords(slot.status)}; a hangfire is reported only once it is tensioned.`,
       );
       const now = this.clock.now();
       await updateSlot(manager, slot, {
@@ -86,7 +85,7 @@ export class CatapultEventsService {
         user,
         { kind: 'cold_shot' },
         'cold shot',
-        `${side} is ${label(slot.status)}; a suspected cold shot is reported on an aircraft that launched.`,
+        `${side} is ${statusWords(slot.status)}; a suspected cold shot is reported on an aircraft that launched.`,
       );
       const catapult = this.basis.catapult(state, slot.catapultId!);
       const last = laneSlots(state, catapult.id)
@@ -129,7 +128,7 @@ export class CatapultEventsService {
         user,
         { kind: 'down_on_catapult', outcome: request.outcome },
         'down on catapult',
-        `${side} is ${label(slot.status)}; only an aircraft on the catapult or suspended there goes down on it.`,
+        `${side} is ${statusWords(slot.status)}; only an aircraft on the catapult or suspended there goes down on it.`,
       );
       const catapult = this.basis.catapult(state, slot.catapultId!);
       const now = this.clock.now();

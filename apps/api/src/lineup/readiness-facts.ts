@@ -12,10 +12,9 @@ import type { LineupState } from '../cycle-changes/lineup-state.js';
 import { LineupException } from '../cycle-changes/lineup.exception.js';
 import { catapultReadinessSteps } from '../cycle-changes/readiness-steps.js';
 import type { Slot } from '../database/entities/slot.entity.js';
+import { lb, statusWords } from '../common/wording.js';
 
 const GONE: readonly SlotStatus[] = ['launched', 'down', 'scratched'];
-const label = (status: string) => status.replaceAll('_', ' ');
-const lb = (weight: number | null) => `${(weight ?? 0).toLocaleString('en-US')} lb`;
 
 /** The slot as launch-math's readiness machine sees it. */
 export function slotReadiness(state: LineupState, slot: Slot): SlotReadiness {
@@ -75,7 +74,7 @@ function refusal(
     case 'approved_setting_missing':
       return new LineupException(
         'approved_setting_missing',
-        `The approved launch data give no setting for ${side} at ${lb(slot.agreedWeightLb)}; the setting cannot be read back against nothing.`,
+        `The approved launch data give no setting for ${side} at ${lb(slot.agreedWeightLb ?? 0)}; the setting cannot be read back against nothing.`,
       );
     case 'setting_not_read_back':
       return new LineupException(
@@ -86,7 +85,7 @@ function refusal(
       const { settingReadBack, approvedSetting } = command as Extract<ReadinessCommand, { kind: 'advance' }>;
       return new LineupException(
         'setting_mismatch',
-        `The console reads ${settingReadBack}, but the approved setting for ${side} at ${lb(slot.agreedWeightLb)} is ${approvedSetting}; set ${approvedSetting} and read it back again.`,
+        `The console reads ${settingReadBack}, but the approved setting for ${side} at ${lb(slot.agreedWeightLb ?? 0)} is ${approvedSetting}; set ${approvedSetting} and read it back again.`,
       );
     }
     case 'nothing_to_undo':
@@ -102,8 +101,8 @@ function refusal(
       return new LineupException(
         'wrong_step',
         next
-          ? `${side} is ${label(status)}; the next step is ${label(next)}, not ${label(to)}.`
-          : `${side} is ${label(status)}; it takes no more readiness steps.`,
+          ? `${side} is ${statusWords(status)}; the next step is ${statusWords(next)}, not ${statusWords(to)}.`
+          : `${side} is ${statusWords(status)}; it takes no more readiness steps.`,
       );
     }
   }

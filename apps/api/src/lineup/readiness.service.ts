@@ -38,12 +38,9 @@ import type { LineupState } from '../cycle-changes/lineup-state.js';
 import { LineupException } from '../cycle-changes/lineup.exception.js';
 import { transition } from './readiness-facts.js';
 import { type SlotValues, updateSlot } from '../cycle-changes/slot-writes.js';
+import { lb, statusWords } from '../common/wording.js';
 
 const ANSWERED_AFTER: readonly SlotStatus[] = ['launched', 'down', 'scratched'];
-
-const label = (status: string) => status.replaceAll('_', ' ');
-
-const lb = (weight: number) => `${weight.toLocaleString('en-US')} lb`;
 
 /** Who agreed the weight, and the read-back, go with the agreement and the step they belong to. */
 function readBackValues(slot: Slot, next: SlotReadiness): SlotValues {
@@ -148,7 +145,7 @@ export class ReadinessService {
         ...readBackValues(slot, next),
       });
       return {
-        summary: `${slot.aircraft.sideNumber} on cat ${catapult.number}: ${label(undone)} undone`,
+        summary: `${slot.aircraft.sideNumber} on cat ${catapult.number}: ${statusWords(undone)} undone`,
         command: { type: 'undo', slotId, ...request },
         mirrored: true,
       };
@@ -199,7 +196,7 @@ export class ReadinessService {
         user,
         { kind: 'suspend_reason' },
         'suspend reason',
-        `${side} is ${label(slot.status)}; a reason is given only while it is suspended.`,
+        `${side} is ${statusWords(slot.status)}; a reason is given only while it is suspended.`,
       );
       if (request.reason === 'other' && !request.text) {
         throw new LineupException('reason_required', `Say in a few words why ${side} was suspended.`);
@@ -324,7 +321,7 @@ export class ReadinessService {
     const readBack = values.settingReadBack;
     if (request.to === 'setting_set' && readBack)
       return `${side} setting ${readBack.setting} read back ${on} by ${readBack.readBackBy}, the approved setting for ${lb(readBack.weightLb)} (weight agreed by ${readBack.setBy})`;
-    return `${side} ${label(request.to)} ${on}`;
+    return `${side} ${statusWords(request.to)} ${on}`;
   }
 
   private requireExecuting(state: LineupState): void {

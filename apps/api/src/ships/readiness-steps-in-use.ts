@@ -3,8 +3,7 @@ import { In, type EntityManager } from 'typeorm';
 import type { Catapult } from '../database/entities/catapult.entity.js';
 import { Slot } from '../database/entities/slot.entity.js';
 import { ShipsException } from './ships.exception.js';
-
-const label = (step: string) => step.replaceAll('_', ' ');
+import { statusWords } from '../common/wording.js';
 
 /**
  * Refuses a new list of readiness steps while an aircraft of the launching cycle stands at a step its catapult
@@ -35,7 +34,7 @@ export async function refuseStrandingSteps(
     const catapult = catapults.find((candidate) => candidate.id === slot.catapultId)!;
     return stepsOf(catapult).includes(slot.status as ReadinessStep)
       ? []
-      : [`${slot.aircraft.sideNumber} on cat ${catapult.number} is at "${label(slot.status)}"`];
+      : [`${slot.aircraft.sideNumber} on cat ${catapult.number} is at "${statusWords(slot.status)}"`];
   });
   if (stranded.length > 0) {
     throw new ShipsException(

@@ -1,4 +1,3 @@
-import AxeBuilder from '@axe-core/playwright';
 import { expect, test } from '@playwright/test';
 import type { CycleView } from '@catline/contracts';
 import { allOf, apiAs, launchingCycle } from './support/demo-api.js';
@@ -54,8 +53,7 @@ test('launched aircraft on the board keep their badge readable (4.5:1)', async (
   const flownCard = page.locator('[data-testid="lane"] [data-testid="slot-card"][data-status="launched"]').first();
   const side = (await flownCard.getAttribute('data-side-number'))!;
   await expect(flownCard.getByRole('group', { name: new RegExp(`^${side}\\b.*Launched$`) })).toBeVisible();
-  const results = await new AxeBuilder({ page }).withRules(['color-contrast']).analyze();
-  expect(results.violations.flatMap((violation) => violation.nodes.map((node) => node.failureSummary))).toEqual([]);
+  expect(await axeViolations(page, ['color-contrast'])).toEqual([]);
   await page.context().close();
 });
 

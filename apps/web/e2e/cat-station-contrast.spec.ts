@@ -1,6 +1,6 @@
-import AxeBuilder from '@axe-core/playwright';
 import { expect, test, type APIRequestContext, type Page } from '@playwright/test';
 import type { ReadinessStep } from '@catline/contracts';
+import { axeViolations } from './support/axe.js';
 import { apiAs, launchingCycle, lineupOf } from './support/demo-api.js';
 import { openAs } from './support/screens.js';
 
@@ -30,13 +30,7 @@ async function stepsUpTo(cat1: APIRequestContext, cycleId: number, last: Readine
 /** Every text and state colour on the station at 7:1 or better (WCAG 2.2 § 1.4.6, contrast enhanced). */
 async function expectEnhancedContrast(station: Page, state: string) {
   await expect(station.getByTestId('station-banner')).toHaveAttribute('data-state', state, LIVE);
-  const results = await new AxeBuilder({ page: station }).withRules(['color-contrast-enhanced']).analyze();
-  expect(
-    results.violations.flatMap((violation) =>
-      violation.nodes.map((node) => `${node.target.join(' ')}: ${node.failureSummary}`),
-    ),
-    `below 7:1 with the banner ${state}`,
-  ).toEqual([]);
+  expect(await axeViolations(station, ['color-contrast-enhanced']), `below 7:1 with the banner ${state}`).toEqual([]);
 }
 
 test('the Cat station reads at 7:1 in the day theme: waiting, at the read-back, GO, NO-GO and suspended', async ({

@@ -10,7 +10,7 @@ import { DocumentedAnswers } from './support/documented-answers.js';
 import { secondShip, secondShipPeople } from '../src/database/seeds/demo-second-ship.js';
 import { LineupDriver } from './support/lineup-fixtures.js';
 import { recreateOwnDatabase } from './support/own-database.js';
-import { bearer, demoEmail, signIn } from './support/sign-in.js';
+import { bearer, demoEmail, signIn, TOKEN_RENEWAL_MS } from './support/sign-in.js';
 import { type ClientSocket, connected, openSocket } from './support/socket-client.js';
 import { startTestApp } from './support/test-app.js';
 
@@ -148,6 +148,7 @@ describe(`bad input to every write route and socket event (${RUNS} tries each, s
   let answers: RecordedAnswer[];
   let documented: DocumentedAnswers;
   const tokens = new Map<Role, string>();
+  let signedInAt = 0;
   let firstShip: LineupDriver;
   let elsewhere: Record<IdKind, number[]>;
   /** How many ids of other rows were tried, by kind. */
@@ -164,15 +165,25 @@ describe(`bad input to every write route and socket event (${RUNS} tries each, s
     documented = await DocumentedAnswers.of(url);
     dataSource = app.get(DataSource);
     tables = dataSource.entityMetadatas.map((metadata) => metadata.tableName);
-    for (const role of ROLES) tokens.set(role, await signIn(url, demoEmail(role)));
+    await signInEveryRole();
     firstShip = new LineupDriver(url, (email) => tokens.get(ROLES.find((role) => demoEmail(role) === email)!));
     elsewhere = await rowsElsewhere();
+  });
+
+  // The soak's 150 tries a route outlast one access token: every role signs in afresh well before it ends.
+  beforeEach(async () => {
+    if (Date.now() - signedInAt > TOKEN_RENEWAL_MS) await signInEveryRole();
   });
 
   afterAll(async () => {
     await app.close();
     process.env.DB_NAME = sharedDatabase;
   });
+
+  async function signInEveryRole() {
+    for (const role of ROLES) tokens.set(role, await signIn(url, demoEmail(role)));
+    signedInAt = Date.now();
+  }
 
   /** Every table's content checksum: any write anywhere changes it. */
   async function fingerprint(): Promise<string> {

@@ -12,7 +12,7 @@ import type {
 } from '@catline/contracts';
 import request from 'supertest';
 import { readAllPages } from './paged-list.js';
-import { bearer, signIn } from './sign-in.js';
+import { bearer, signIn, TOKEN_RENEWAL_MS } from './sign-in.js';
 
 export const ADMIN = 'admin@catline.example';
 export const AIR_OPS = 'airops@catline.example';
@@ -46,7 +46,7 @@ export type LaneAircraft = string | { side: string; pilotEmail?: string };
 
 /** Drives the API as the demo people do, for specs that need a cycle of their own. */
 export class LineupDriver {
-  private readonly tokens = new Map<string, Promise<string>>();
+  private readonly tokens = new Map<string, { token: Promise<string>; signedInAt: number }>();
   private aircraft?: Promise<AircraftView[]>;
   private pilots?: Promise<UserView[]>;
   private ship?: Promise<ShipView>;
@@ -57,12 +57,15 @@ export class LineupDriver {
     private readonly tokenOf: (email: string) => string | undefined = () => undefined,
   ) {}
 
+  /** The caller's token when it holds one (it renews its own), else one signed in here and renewed in time. */
   token(email: string): Promise<string> {
-    if (!this.tokens.has(email)) {
-      const held = this.tokenOf(email);
-      this.tokens.set(email, held === undefined ? signIn(this.url, email) : Promise.resolve(held));
-    }
-    return this.tokens.get(email)!;
+    const held = this.tokenOf(email);
+    if (held !== undefined) return Promise.resolve(held);
+    const kept = this.tokens.get(email);
+    if (kept && Date.now() - kept.signedInAt < TOKEN_RENEWAL_MS) return kept.token;
+    const token = signIn(this.url, email);
+    this.tokens.set(email, { token, signedInAt: Date.now() });
+    return token;
   }
 
   async call(email: string, method: Method, path: string, body?: object): Promise<request.Response> {

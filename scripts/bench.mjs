@@ -3,7 +3,7 @@
 // processes on 127.0.0.1. Prints a table and writes bench-results/bench-<time>.json (git-ignored).
 // Options: --clients=100,500,1000,2000 --moves=200 --per-second=2 --commands=1000 --runs=5
 // --only=fanout,commit,math,web,lighthouse,latency
-// --cluster: two API processes (:3200 and :3202) sharing rooms through a Redis of their own (:6381),
+// --cluster: two API processes (:3200 and :3203) sharing rooms through a Redis of their own (:6381),
 // with the fan-out clients and the watching browser pages spread over both; commands still go to :3200.
 import { spawnSync } from 'node:child_process';
 import { mkdirSync, writeFileSync } from 'node:fs';
@@ -28,8 +28,9 @@ const { values: args } = parseArgs({
 const parts = new Set(args.only.split(','));
 const port = 3200;
 const url = `http://127.0.0.1:${port}`;
-// The bare socket.io baseline takes port + 1.
-const ports = args.cluster ? [port, port + 2] : [port];
+// The bare socket.io baseline takes port + 1, its deflating twin port + 2 (so a second API process
+// in --cluster takes port + 3).
+const ports = args.cluster ? [port, port + 3] : [port];
 const urls = ports.map((p) => `http://127.0.0.1:${p}`);
 const REDIS_PORT = 6381;
 
@@ -94,6 +95,7 @@ try {
       origin: url,
       cycleId,
       barePort: port + 1,
+      deflateClients: [1000],
       clients: args.clients.split(',').map(Number),
       moves: Number(args.moves),
       perSecond: Number(args['per-second']),
@@ -164,6 +166,8 @@ function printTables({ fanOut, commitRate, computation, suggestionLoop, web, lig
           'bare p99': row.bare[mode].p99,
           'p50 ratio': row.ratio[`${mode}P50`],
           'p99 ratio': row.ratio[`${mode}P99`],
+          'bare deflate p99': row.deflate?.[mode].p99 ?? '',
+          'deflate p99 ratio': row.ratio[`deflate${mode === 'paced' ? 'Paced' : 'Burst'}P99`] ?? '',
           missing: row.catline[mode].missing,
           'out of order': row.catline[mode].outOfOrder,
           duplicates: row.catline[mode].duplicates,

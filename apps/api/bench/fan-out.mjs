@@ -1,8 +1,10 @@
 // Fan-out latency: N socket.io clients in separate load processes joined to one cycle; a handler
 // sends lineup moves through the real API (paced, then as a burst) and every client's arrival time
 // is set against the time the command was sent. The same payloads then go through a bare socket.io
-// server to the same number of clients, for the ratio.
-// usage: node bench/fan-out.mjs '{"url","urls"?,"origin","cycleId","clients":[100,...],"moves":200,"perSecond":2}'
+// server to the same number of clients, for the ratio, and, at the sizes in `deflateClients`, through
+// the bare server with per-message deflate on: Catline keeps deflate off unless that costs ≤ 1.1×.
+// usage: node bench/fan-out.mjs '{"url","urls"?,"origin","cycleId","clients":[100,...],"moves":200,"perSecond":2,
+//   "barePort","deflateClients":[1000]}'; the deflating bare server takes barePort + 1.
 // `urls` (default [url]) spreads the clients over several API processes; the handler sends to `url`.
 import { fork } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
@@ -101,9 +103,14 @@ async function measureBare(clients, bareUrl, payloads) {
   }
 }
 
-const bare = fork(here('./bare-server.mjs'), [String(options.barePort)]);
-await new Promise((resolve) => bare.once('message', resolve));
-const bareUrl = `http://127.0.0.1:${options.barePort}`;
+async function startBare(port, ...flags) {
+  const server = fork(here('./bare-server.mjs'), [String(port), ...flags]);
+  await new Promise((resolve) => server.once('message', resolve));
+  return { server, url: `http://127.0.0.1:${port}` };
+}
+
+const bare = await startBare(options.barePort);
+const deflating = await startBare(options.barePort + 1, 'deflate');
 const results = [];
 try {
   for (const clients of options.clients) {
@@ -111,7 +118,10 @@ try {
     const handlerToken = await signIn(options.url, 'handler@catline.example');
     const observerToken = await signIn(options.url, 'observer@catline.example');
     const catline = await measureCatline(clients, handlerToken, observerToken);
-    const baseline = await measureBare(clients, bareUrl, catline.payloads);
+    const baseline = await measureBare(clients, bare.url, catline.payloads);
+    const deflate = options.deflateClients?.includes(clients)
+      ? await measureBare(clients, deflating.url, catline.payloads)
+      : null;
     const payloadBytes = Math.round(
       catline.payloads.paced.reduce((sum, change) => sum + JSON.stringify(change).length, 0) /
         Math.max(1, catline.payloads.paced.length),
@@ -122,16 +132,20 @@ try {
       payloadBytes,
       catline: catline.result,
       bare: baseline,
+      deflate,
       ratio: {
         pacedP50: ratio(catline.result.paced.p50, baseline.paced.p50),
         pacedP99: ratio(catline.result.paced.p99, baseline.paced.p99),
         burstP50: ratio(catline.result.burst.p50, baseline.burst.p50),
         burstP99: ratio(catline.result.burst.p99, baseline.burst.p99),
+        deflatePacedP99: deflate && ratio(deflate.paced.p99, baseline.paced.p99),
+        deflateBurstP99: deflate && ratio(deflate.burst.p99, baseline.burst.p99),
       },
     });
     console.error(`fan-out ${clients} clients done`);
   }
 } finally {
-  bare.kill();
+  bare.server.kill();
+  deflating.server.kill();
 }
 console.log(JSON.stringify(results));

@@ -1,5 +1,5 @@
 import { spawn } from 'node:child_process';
-import { existsSync, mkdirSync } from 'node:fs';
+import { existsSync, mkdirSync, readFileSync, statSync } from 'node:fs';
 import path from 'node:path';
 import { ensureDebianPackages } from './debian.mjs';
 import { read, root, run, sleep, step } from './run.mjs';
@@ -69,6 +69,7 @@ export async function startMariaDB(server, port, { extraArgs = [] } = {}) {
     );
   }
   step(`Starting MariaDB on 127.0.0.1:${port}`);
+  const logStart = existsSync(server.logFile) ? statSync(server.logFile).size : 0;
   const child = spawn(
     binary('mariadbd'),
     [
@@ -84,10 +85,25 @@ export async function startMariaDB(server, port, { extraArgs = [] } = {}) {
     { detached: true, stdio: 'ignore' },
   );
   child.unref();
+  let exited = false;
+  child.once('exit', () => (exited = true));
   for (let waited = 0; !isMariaDBRunning(server); waited += 200) {
-    if (waited > 30_000) throw new Error(`MariaDB did not start; see ${server.logFile}`);
+    if (exited || waited > 30_000) throw new Error(notStarted(server, port, logStart));
     await sleep(200);
   }
+}
+
+/** Why the server did not start, from the errors its log got since `logStart`: most often another server holds the port. */
+function notStarted(server, port, logStart) {
+  const log = existsSync(server.logFile) ? readFileSync(server.logFile).subarray(logStart).toString('utf8') : '';
+  const errors = log
+    .split('\n')
+    .filter((line) => line.includes('[ERROR]'))
+    .slice(-3);
+  const portTaken = errors.some((line) => line.includes('Address already in use'))
+    ? `\nPort ${port} on 127.0.0.1 is taken (another checkout's MariaDB?): stop it, or set DB_PORT in .env to a free port.`
+    : '';
+  return `MariaDB did not start; see ${server.logFile}${errors.length ? `:\n  ${errors.join('\n  ')}` : ''}${portTaken}`;
 }
 
 /** Makes sure the application database and user exist on the server. */

@@ -191,8 +191,10 @@ function printTables({ fanOut, commitRate, computation, suggestionLoop, web, lig
     console.table(suggestionLoop.rows);
   }
   if (web) {
+    const { lastLineupLoad, ...figures } = web;
     console.log('\nWeb');
-    console.table([web]);
+    console.table([figures]);
+    console.log(`The last Lineup load, ms from the navigation's start:\n  ${lastLineupLoad.join('\n  ')}`);
   }
   if (lighthouse) {
     console.log('\nLighthouse, mobile settings (apps/web/bench/lighthouse.mjs)');

@@ -37,6 +37,26 @@ async function medianMs(task) {
   return Math.round(times[Math.floor(times.length / 2)]);
 }
 
+/**
+ * Where a load's time went, run in the page once the cards are drawn: each file and API call as
+ * "path start–end" in ms from the navigation's start, then when the document was parsed and when the
+ * cards were found.
+ */
+function loadTimeline() {
+  const { performance: timing } = globalThis;
+  const [navigation] = timing.getEntriesByType('navigation');
+  const fetched = timing
+    .getEntriesByType('resource')
+    .filter((entry) => /\/(api|assets)\//.test(entry.name))
+    .map((entry) => `${new URL(entry.name).pathname} ${Math.round(entry.startTime)}–${Math.round(entry.responseEnd)}`);
+  return [
+    `document ${Math.round(navigation.responseEnd)}`,
+    ...fetched,
+    `parsed ${Math.round(navigation.domContentLoadedEventEnd)}`,
+    `cards drawn ${Math.round(timing.now())}`,
+  ];
+}
+
 async function timeToLineup() {
   const browser = await chromium.launch({
     executablePath: '/usr/bin/chromium',
@@ -58,6 +78,7 @@ async function timeToLineup() {
     await page.getByLabel('Password').fill(DEMO_PASSWORD);
     await page.getByRole('button', { name: 'Sign in' }).click();
     await page.waitForURL((address) => !address.pathname.startsWith('/sign-in'));
+    let timeline;
     const lineup = await medianMs(async () => {
       await page.goto(`${url}/lineup?cycle=${cycleId}`);
       // Runs in the page, where document is defined.
@@ -66,6 +87,7 @@ async function timeToLineup() {
         aircraft,
         { timeout: 30_000 },
       );
+      timeline = await page.evaluate(loadTimeline);
     });
     // Baseline in the same browser: a cold load of the sign-in page, which fetches no data.
     const anonymous = await (await browser.newContext({ viewport: { width: 1366, height: 768 } })).newPage();
@@ -77,6 +99,7 @@ async function timeToLineup() {
       lineupDrawnMedianMs: lineup,
       signInDrawnMedianMs: signInPage,
       lineupRatio: Math.round((lineup / signInPage) * 100) / 100,
+      lastLineupLoad: timeline,
     };
   } finally {
     await browser.close();

@@ -290,10 +290,21 @@ describe('lineup commands', () => {
       expect(figures.reasons.map((reason) => reason.code)).toContain('catapult_down');
       expect(after.slots.find((slot) => slot.id === slots[3].id)!.projectedLaunchAt).toBeNull();
 
+      // A move onto the down catapult carries its lane, status and all; the refusal still names who set it down.
+      const moving = after.slots.find((slot) => slot.id === slots[0].id)!;
+      await deck.ok(HANDLER, 'post', `/api/cycles/${cycle.id}/lineup/moves`, {
+        slotId: moving.id,
+        slotVersion: moving.version,
+        toCatapultId: catapultId,
+        toIndex: 0,
+        targetLaneOrder: lane.slotIds,
+      });
       const stale = await deck.call(HANDLER, 'post', path, { status: 'down', basisStatus: 'up' });
       expect(stale.status).toBe(409);
       expect(stale.body.code).toBe('stale_basis');
-      expect(stale.body.message).toContain('Cat 2 is down now');
+      expect(stale.body.message).toBe(
+        `Cat 2 is down now: Tomas Ebberhold set it (Cat 2 down: Shuttle fault). Refresh and try again.`,
+      );
     } finally {
       await deck.call(HANDLER, 'post', path, { status: 'up', basisStatus: 'down' });
     }

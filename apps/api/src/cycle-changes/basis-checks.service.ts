@@ -16,6 +16,9 @@ import { LineupChangesService } from './lineup-changes.service.js';
 
 const REFRESH = 'Refresh and try again.';
 
+/** The changes that write a catapult's status: the handler's or air boss's status, and a suspected cold shot. */
+const SETS_CATAPULT_STATUS: readonly ChangeKind[] = ['catapult_status_set', 'cold_shot_suspected'];
+
 const account = (change: LineupChange | null, what: string) =>
   change
     ? `Since you saw it, ${change.actor.name} changed ${what}: ${change.summary}. ${REFRESH}`
@@ -84,8 +87,14 @@ export class BasisChecks {
     seen: CatapultStatus,
   ): Promise<void> {
     if (catapult.status === seen) return;
-    const change = await this.latest(manager, state, (patch) =>
-      (patch.lanes ?? []).some((lane) => lane.catapultId === catapult.id && lane.status === catapult.status),
+    // Every change of a lane carries its status, so only a change that sets it says who did. A status set
+    // through another cycle of the ship is in none of this cycle's changes.
+    const change = await this.latest(
+      manager,
+      state,
+      (patch, kind) =>
+        SETS_CATAPULT_STATUS.includes(kind) &&
+        (patch.lanes ?? []).some((lane) => lane.catapultId === catapult.id && lane.status === catapult.status),
     );
     throw new LineupException(
       'stale_basis',
@@ -108,7 +117,12 @@ export class BasisChecks {
     );
   }
 
-  private latest(manager: EntityManager, state: LineupState, matches: (patch: LineupPatch) => boolean, after = 0) {
+  private latest(
+    manager: EntityManager,
+    state: LineupState,
+    matches: (patch: LineupPatch, kind: ChangeKind) => boolean,
+    after = 0,
+  ) {
     return this.changes.latestMatching(manager, state.cycle.id, matches, after);
   }
 }

@@ -1,4 +1,4 @@
-import type { LineupChange, LineupCommandResult, LineupPatch, Page } from '@catline/contracts';
+import type { ChangeKind, LineupChange, LineupCommandResult, LineupPatch, Page } from '@catline/contracts';
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { Between, DataSource, MoreThan, type EntityManager } from 'typeorm';
@@ -65,7 +65,7 @@ export class LineupChangesService {
   async latestMatching(
     manager: EntityManager,
     cycleId: number,
-    matches: (patch: LineupPatch) => boolean,
+    matches: (patch: LineupPatch, kind: ChangeKind) => boolean,
     afterVersion = 0,
   ): Promise<LineupChange | null> {
     const rows = await manager.find(CycleChange, {
@@ -73,7 +73,7 @@ export class LineupChangesService {
       order: { version: 'DESC' },
       take: EXPLAIN_LOOKBACK,
     });
-    const row = rows.find((candidate) => matches(candidate.payload.patch));
+    const row = rows.find((candidate) => matches(candidate.payload.patch, candidate.kind));
     return row ? toLineupChange(row) : null;
   }
 

@@ -497,7 +497,7 @@ export function executingModelCommands(maxCommands: number) {
             .map(([lane, stale, confirm]) => new CatapultStatusCommand(0, lane, stale, confirm)),
         },
         {
-          weight: 1,
+          weight: 2,
           arbitrary: fc
             .tuple(fc.nat(), sometimes, fc.constant(false))
             .map(([s, stale, spare]) => new MarkDownCommand(0, s, stale, spare)),
@@ -562,8 +562,11 @@ function cycleCommands(sometimes: fc.Arbitrary<boolean>) {
     },
     { weight: 1, arbitrary: sometimes.map((stale) => new CloseCommand(stale)) },
     {
-      weight: 2,
-      arbitrary: fc.tuple(slotPick, fc.nat(), sometimes).map((args) => new TowCommand(...args)),
+      weight: 3,
+      // Half of them to a deck spot, the only tows the model sees accepted.
+      arbitrary: fc
+        .tuple(slotPick, fc.oneof(fc.nat(), fc.constant(3)), sometimes, fc.nat())
+        .map((args) => new TowCommand(...args)),
     },
     { weight: 1, arbitrary: fc.tuple(fc.boolean(), sometimes).map((args) => new RespotCommand(...args)) },
     ...fleetCommands(sometimes),
@@ -575,7 +578,8 @@ function fleetCommands(sometimes: fc.Arbitrary<boolean>) {
   return [
     {
       weight: 2,
-      arbitrary: fc.tuple(fc.nat(), fc.nat(3), fc.boolean()).map((args) => new AddSlotCommand(...args)),
+      // Mostly as a spare, so that the spare calls find one held aside.
+      arbitrary: fc.tuple(fc.nat(), fc.nat(3), mostlyTrue).map((args) => new AddSlotCommand(...args)),
     },
     {
       weight: 1,
@@ -584,7 +588,7 @@ function fleetCommands(sometimes: fc.Arbitrary<boolean>) {
         .map((args) => new AirPlanImportCommand(...args)),
     },
     {
-      weight: 3,
+      weight: 4,
       arbitrary: fc.tuple(slotPick, slotPick, sometimes).map((args) => new SpareCallCommand(...args)),
     },
     {

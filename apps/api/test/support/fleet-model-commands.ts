@@ -133,7 +133,7 @@ const AIR_PLAN_HEADER = 'side_number,pilot_email,mission,fuel_lb,stores,gross_we
 /**
  * Air operations import an air plan (preview, then confirm): one or two free aircraft, or a plan naming
  * an aircraft already in the cycle, which the preview rejects and the confirm refuses. A closed cycle
- * takes no preview: the command waits for an open one.
+ * refuses the preview and the confirm.
  */
 export class AirPlanImportCommand extends ModelCommand {
   private uploadId = 0;
@@ -148,10 +148,6 @@ export class AirPlanImportCommand extends ModelCommand {
     private readonly stale: boolean,
   ) {
     super(0);
-  }
-
-  override check(model: Readonly<LineupModel>): boolean {
-    return !cycleClosed(model);
   }
 
   private rejected(model: LineupModel) {
@@ -172,13 +168,19 @@ export class AirPlanImportCommand extends ModelCommand {
       content: [AIR_PLAN_HEADER, ...lines].join('\n'),
       fileName: 'model-plan.csv',
     });
-    // The preview lists the problems: an aircraft already in the cycle is one, and the upload is rejected.
+    // A closed cycle takes no air plan; otherwise the preview lists the problems: an aircraft already in
+    // the cycle is one, and the upload is rejected.
+    const closed = cycleClosed(model);
     const result = this.rejected(model) ? 'rejected' : 'accepted';
-    if (response.status !== 200 || response.body.result !== result)
+    const previewed = closed
+      ? response.status === 409 && response.body.code === 'cycle_closed'
+      : response.status === 200 && response.body.result === result;
+    if (!previewed)
       throw new Error(
-        `${this.toString()}: the preview answered ${response.status} ${response.text}, expected ${result}`,
+        `${this.toString()}: the preview answered ${response.status} ${response.text}, expected ${closed ? '409 cycle_closed' : result}`,
       );
-    this.uploadId = response.body.uploadId as number;
+    // With nothing previewed, the confirm names the first upload there is: the closed cycle is refused first.
+    this.uploadId = closed ? 1 : (response.body.uploadId as number);
   }
 
   protected request(model: LineupModel): Request {
@@ -188,6 +190,7 @@ export class AirPlanImportCommand extends ModelCommand {
       prediction,
       token: personOf(model, 'air_operations').token,
     });
+    if (cycleClosed(model)) return answer(refusal(409, 'cycle_closed'));
     if (this.rejected(model)) return answer(refusal(409, 'upload_not_importable'));
     if (this.stale) return answer(refusal(409, 'stale_basis'));
     const line = { pilotId: null, fuelLb: 11_000, grossWeightLb: 44_000, spare: this.spare };
@@ -220,9 +223,14 @@ export class SpareCallCommand extends ModelCommand {
     const slots = byId(model.snapshot);
     const down = slots.filter((slot) => slot.status === 'down');
     const held = slots.filter((slot) => heldSpare(slot, model.replacedBy));
-    const from = (likely: SlotView[], pick: number) =>
-      likely.length > 0 && pick % 5 !== 0 ? likely[pick % likely.length] : slots[pick % slots.length];
-    return { down: from(down, this.downPick), spare: from(held, this.sparePick) };
+    const from = (likely: SlotView[], pick: number, otherwise: SlotView[]) =>
+      likely.length > 0 && pick % 5 !== 0 ? likely[pick % likely.length] : otherwise[pick % otherwise.length];
+    // Now and then for an aircraft not down (if there is one), or a spare not held aside.
+    const notDown = slots.filter((slot) => slot.status !== 'down');
+    return {
+      down: from(down, this.downPick, notDown.length > 0 ? notDown : slots),
+      spare: from(held, this.sparePick, slots),
+    };
   }
 
   protected request(model: LineupModel): Request {
@@ -293,9 +301,9 @@ export class ApplySuggestionCommand extends ModelCommand {
     });
     if (cycleClosed(model)) return answer(refusal(409, 'cycle_closed'));
     if (this.stale) return answer(refusal(409, 'stale_basis'));
-    const byIdMap = new Map(slots.map((slot) => [slot.id, slot]));
+    const slotOf = new Map(slots.map((slot) => [slot.id, slot]));
     for (const id of [...lanes.values()].flat()) {
-      const slot = byIdMap.get(id)!;
+      const slot = slotOf.get(id)!;
       if (heldSpare(slot, model.replacedBy)) return answer(refusal(409, 'spare_held'));
       if (slot.pilotId === null) return answer(refusal(409, 'pilot_missing'));
       if (slot.status !== 'planned') return answer(refusal(400, 'invalid_lineup'));
@@ -306,7 +314,7 @@ export class ApplySuggestionCommand extends ModelCommand {
     const next: Lanes = new Map(
       [...current].map(([catapultId, ids]) => [
         catapultId,
-        [...ids.filter((id) => byIdMap.get(id)!.status !== 'planned'), ...lanes.get(catapultId)!],
+        [...ids.filter((id) => slotOf.get(id)!.status !== 'planned'), ...lanes.get(catapultId)!],
       ]),
     );
     const same = [...next].every(

@@ -1,4 +1,6 @@
 import {
+  type AircraftTypeView,
+  type AircraftView,
   applyLineupChanges,
   type LineupCommandResult,
   type LineupSnapshot,
@@ -12,7 +14,8 @@ import { readChangeLog, versionProblems } from './support/change-log.js';
 import { staleBasisProblems } from './support/stale-basis.js';
 import { createBusyCycle, handlerTokens } from './support/busy-cycle.js';
 import { executingModelCommands } from './support/executing-model-commands.js';
-import { AIR_BOSS, AIR_OPS, LineupDriver, OBSERVER, catapultOfficer, pilot } from './support/lineup-fixtures.js';
+import type { Fleet } from './support/fleet-model-commands.js';
+import { ADMIN, AIR_BOSS, AIR_OPS, LineupDriver, OBSERVER, catapultOfficer, pilot } from './support/lineup-fixtures.js';
 import { LineupFollower, allAt } from './support/lineup-follower.js';
 import { type Person, lineupModelCommands, newModel } from './support/lineup-model-commands.js';
 import {
@@ -171,6 +174,7 @@ describe(`${HANDLERS} handlers sending ${TOTAL} lineup commands at one cycle (se
     for (const [email, role] of [
       [AIR_BOSS, 'air_boss'],
       [AIR_OPS, 'air_operations'],
+      [ADMIN, 'admin'],
     ] as const) {
       const { id } = await deck.me(email);
       people.push({ token: crewTokens.push(await deck.token(email)) - 1, role, userId: id, catapultId: null });
@@ -191,10 +195,18 @@ describe(`${HANDLERS} handlers sending ${TOTAL} lineup commands at one cycle (se
       people.push({ token, role: 'pilot', userId: await deck.pilotId(email), catapultId: null });
     }
     const answers = new Map<string, number>();
+    // The demo ship's fleet and types, for the aircraft the model adds and the launch data it uploads again.
+    const shipId = (await deck.demoShip()).id;
+    const fleet: Fleet = {
+      aircraft: await deck.all<AircraftView>(OBSERVER, '/api/aircraft'),
+      types: (await deck.ok<AircraftTypeView[]>(ADMIN, 'get', '/api/aircraft-types')).filter(
+        (type) => type.shipId === shipId,
+      ),
+    };
     await fc.assert(
       fc.asyncProperty(executingModelCommands(EXECUTING_MAX_COMMANDS), async (run) => {
         const { cycle, slots } = await deck.executingCycle(lanes);
-        const model = newModel(await readyToLaunch(cycle.id, slots[0], lanes[1][0].pilotEmail), people);
+        const model = newModel(await readyToLaunch(cycle.id, slots[0], lanes[1][0].pilotEmail), people, fleet);
         // The crew's last step may be undone for a while, as the model knows of its own steps.
         const [before, last] = model.snapshot.readinessSteps.slice(-2) as SlotStatus[];
         const ready = model.snapshot.slots.find((slot) => slot.id === slots[0].id)!;

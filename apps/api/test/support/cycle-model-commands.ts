@@ -327,23 +327,45 @@ export class CloseCommand extends ModelCommand {
 const holdsPosition = (slot: SlotView) => ['planned', 'down', 'scratched'].includes(slot.status);
 
 /**
- * The handler tows an aircraft: to where it stands, to a position held by another aircraft, or to a spot
- * the ship has not. Which ways are free is launch-math's tow model, which the model does not have: it sends
- * only tows whose answer the rules alone decide, each of them refused, and checks that nothing moved.
+ * The demo ship's deck spots and the two that wait behind another (demo-fleet.ts, demoDeckSpots: aft-4
+ * waits for aft-3, stern-2 for stern-1): a tow from or to one of those needs the spot in front clear.
+ */
+const DEMO_SPOTS = [1, 2, 3, 4].flatMap((n) => [`bow-${n}`, `mid-${n}`, `aft-${n}`]).concat(['stern-1', 'stern-2']);
+const SPOT_IN_FRONT: Readonly<Record<string, string>> = { 'aft-4': 'aft-3', 'stern-2': 'stern-1' };
+
+const TOW_TARGETS = ['where it stands', "another's position", 'no such spot', 'a deck spot'];
+
+/**
+ * The handler tows an aircraft: to where it stands, to a position held by another aircraft, to a spot the
+ * ship has not, or from a deck spot to one of the demo deck's spots. The last one the model decides from
+ * the demo deck as the fixture lays it out (a spot held by another aircraft is occupied; a spot behind
+ * another waits for it to be clear, on either end of the tow); ways through an elevator to or from the
+ * hangar are launch-math's tow model, which the model does not have, so those it never sends.
  */
 export class TowCommand extends ModelCommand {
   constructor(
     private readonly slotPick: number,
-    /** 0: where it stands; 1: another aircraft's position; 2: a spot the ship has not. */
+    /** 0: where it stands; 1: another aircraft's position; 2: a spot the ship has not; 3: a deck spot. */
     private readonly targetPick: number,
     private readonly stale: boolean,
+    private readonly spotPick = 0,
   ) {
     super(0);
   }
 
+  private slot(model: Readonly<LineupModel>): SlotView {
+    return pickSlot(model.snapshot, this.slotPick, holdsPosition);
+  }
+
+  /** A tow to a deck spot starts on a deck spot, or is refused before its way matters. */
+  override check(model: Readonly<LineupModel>): boolean {
+    const slot = this.slot(model);
+    return this.targetPick % 4 !== 3 || !holdsPosition(slot) || slot.deckPosition?.kind === 'spot';
+  }
+
   protected request(model: LineupModel): Request {
     const { snapshot } = model;
-    const slot = pickSlot(snapshot, this.slotPick, holdsPosition);
+    const slot = this.slot(model);
     const held = (other: SlotView) =>
       other.id !== slot.id &&
       holdsPosition(other) &&
@@ -352,13 +374,15 @@ export class TowCommand extends ModelCommand {
     const other = byId(snapshot).find(
       (candidate) => held(candidate) && slotFacts(candidate).deckPosition !== slotFacts(slot).deckPosition,
     );
-    const target = this.targetPick % 3;
+    const target = this.targetPick % 4;
     const to =
-      target === 0 || (target === 1 && !other)
-        ? (slot.deckPosition ?? { kind: 'spot', name: 'model-z1' })
-        : target === 1
-          ? other!.deckPosition!
-          : { kind: 'spot', name: 'model-z9' };
+      target === 3
+        ? { kind: 'spot', name: DEMO_SPOTS[this.spotPick % DEMO_SPOTS.length] }
+        : target === 0 || (target === 1 && !other)
+          ? (slot.deckPosition ?? { kind: 'spot', name: 'model-z1' })
+          : target === 1
+            ? other!.deckPosition!
+            : { kind: 'spot', name: 'model-z9' };
     const answer = (prediction: Request['prediction']) => ({
       path: cyclePath(model, 'deck/tows'),
       body: { slotId: slot.id, to, slotVersion: slot.version + (this.stale ? 1 : 0) },
@@ -369,12 +393,22 @@ export class TowCommand extends ModelCommand {
     if (this.stale) return answer(refusal(409, 'stale_basis'));
     if (!holdsPosition(slot)) return answer(refusal(409, 'slot_not_movable'));
     if (to.name.startsWith('model-')) return answer(refusal(400, 'unknown_position'));
-    if (target !== 1 || !other) return answer(refusal(409, 'no_change'));
-    return answer(refusal(409, 'position_occupied'));
+    const words = (position: { kind: string; name: string }) => `${position.kind} ${position.name}`;
+    if (slotFacts(slot).deckPosition === words(to)) return answer(refusal(409, 'no_change'));
+    const holds = (position: string) =>
+      byId(snapshot).some((one) => held(one) && slotFacts(one).deckPosition === position);
+    if (holds(words(to))) return answer(refusal(409, 'position_occupied'));
+    // Only a tow between deck spots gets here with a way to weigh (check): the spot in front of either end.
+    const waits = [slot.deckPosition!.name, to.name].some(
+      (spot) => SPOT_IN_FRONT[spot] !== undefined && holds(`spot ${SPOT_IN_FRONT[spot]}`),
+    );
+    if (waits) return answer(refusal(409, 'path_blocked'));
+    return answer(acceptedOnCycle(model, { slots: new Map([[slot.id, { deckPosition: words(to) }]]) }));
   }
 
   override toString(): string {
-    return `tow(slot #${this.slotPick}, ${['where it stands', "another's position", 'no such spot'][this.targetPick % 3]}${this.stale ? ', stale' : ''})`;
+    const target = TOW_TARGETS[this.targetPick % 4];
+    return `tow(slot #${this.slotPick}, ${target}${this.targetPick % 4 === 3 ? ` ${DEMO_SPOTS[this.spotPick % DEMO_SPOTS.length]}` : ''}${this.stale ? ', stale' : ''})`;
   }
 }
 

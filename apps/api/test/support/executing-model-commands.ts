@@ -29,6 +29,13 @@ import {
   WaiverCommand,
   WindReadingCommand,
 } from './cycle-model-commands.js';
+import {
+  AddSlotCommand,
+  AirPlanImportCommand,
+  ApplySuggestionCommand,
+  LaunchDataCommand,
+  SpareCallCommand,
+} from './fleet-model-commands.js';
 import { launchKey } from './lineup-fixtures.js';
 import {
   ArmStateCommand,
@@ -52,7 +59,8 @@ import {
  * gates, hangfire, cold shot, down on the catapult, return to the pool, armed or safe, fuel and stores, the
  * pilot, (from the planning model) catapult up/down, down and up again, and (cycle-model-commands.ts) the
  * commands on the cycle and its deck: wind readings, deck status, landing area, waivers, launch prerequisites,
- * stop, start and close, tows and the respot. Each predicts from the rules
+ * stop, start and close, tows and the respot, and (fleet-model-commands.ts) an aircraft added, an air plan
+ * imported, a spare called, a suggested lineup applied and new launch data. Each predicts from the rules
  * as written here (not the service's) whether the server takes it, with which refusal code, and what it
  * leaves; the model-based run checks that after every command.
  */
@@ -489,7 +497,7 @@ export function executingModelCommands(maxCommands: number) {
             .map(([lane, stale, confirm]) => new CatapultStatusCommand(0, lane, stale, confirm)),
         },
         {
-          weight: 1,
+          weight: 2,
           arbitrary: fc
             .tuple(fc.nat(), sometimes, fc.constant(false))
             .map(([s, stale, spare]) => new MarkDownCommand(0, s, stale, spare)),
@@ -554,9 +562,49 @@ function cycleCommands(sometimes: fc.Arbitrary<boolean>) {
     },
     { weight: 1, arbitrary: sometimes.map((stale) => new CloseCommand(stale)) },
     {
-      weight: 2,
-      arbitrary: fc.tuple(slotPick, fc.nat(), sometimes).map((args) => new TowCommand(...args)),
+      weight: 3,
+      // Half of them to a deck spot, the only tows the model sees accepted.
+      arbitrary: fc
+        .tuple(slotPick, fc.oneof(fc.nat(), fc.constant(3)), sometimes, fc.nat())
+        .map((args) => new TowCommand(...args)),
     },
     { weight: 1, arbitrary: fc.tuple(fc.boolean(), sometimes).map((args) => new RespotCommand(...args)) },
+    ...fleetCommands(sometimes),
+  ];
+}
+
+/** Aircraft into the cycle (one by one, by air plan, a spare called), a suggested lineup, new launch data. */
+function fleetCommands(sometimes: fc.Arbitrary<boolean>) {
+  return [
+    {
+      weight: 3,
+      // Mostly as a spare, so that the spare calls find one held aside.
+      arbitrary: fc.tuple(fc.nat(), fc.nat(3), mostlyTrue).map((args) => new AddSlotCommand(...args)),
+    },
+    {
+      weight: 1,
+      arbitrary: fc
+        .tuple(fc.nat(), fc.boolean(), sometimes, mostlyTrue, sometimes)
+        .map((args) => new AirPlanImportCommand(...args)),
+    },
+    {
+      weight: 4,
+      arbitrary: fc.tuple(slotPick, slotPick, sometimes).map((args) => new SpareCallCommand(...args)),
+    },
+    {
+      weight: 2,
+      arbitrary: fc
+        .tuple(fc.array(fc.nat(), { minLength: 1, maxLength: 12 }), fc.option(fc.nat(), { freq: 4 }), sometimes)
+        .map((args) => new ApplySuggestionCommand(...args)),
+    },
+    {
+      weight: 1,
+      arbitrary: fc
+        .tuple(
+          mostlyTrue,
+          fc.nat(3).map((n) => n === 0),
+        )
+        .map((args) => new LaunchDataCommand(...args)),
+    },
   ];
 }

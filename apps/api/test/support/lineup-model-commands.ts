@@ -9,6 +9,7 @@ import {
 } from '@catline/contracts';
 import fc from 'fast-check';
 import { isDeepStrictEqual } from 'node:util';
+import type { Fleet } from './fleet-model-commands.js';
 import { type CommandOutcome, type LineupCommand, send } from './random-lineup-commands.js';
 
 /**
@@ -31,12 +32,19 @@ export interface LineupModel {
   launches: Map<number, number[]>;
   /** Who sends the commands (by token): whose command a catapult or a slot takes. */
   people: readonly Person[];
+  /**
+   * Each aircraft marked down with the spare recorded as its replacement (called for it, or taking its
+   * place): a spare so recorded is no longer held aside. Marking the aircraft down again records anew.
+   */
+  replacedBy: Map<number, number>;
+  /** The demo fleet, for the commands that add aircraft or change a type's launch data. */
+  fleet?: Fleet;
 }
 
 /** Someone who sends commands: `token` indexes the run's tokens; an officer's catapult, a pilot's user id. */
 export interface Person {
   token: number;
-  role: 'handler' | 'catapult_officer' | 'pilot' | 'air_boss' | 'air_operations';
+  role: 'handler' | 'catapult_officer' | 'pilot' | 'air_boss' | 'air_operations' | 'admin';
   userId: number;
   catapultId: number | null;
 }
@@ -125,13 +133,29 @@ export const LANDING_AREA_CATAPULTS: readonly number[] = [3, 4];
 const laneClosed = (number: number, status: string, landingArea: CycleFacts['landingArea']) =>
   status === 'up' && landingArea !== 'clear' && LANDING_AREA_CATAPULTS.includes(number);
 
-export const newModel = (snapshot: LineupSnapshot, people: readonly Person[] = []): LineupModel => ({
+export const newModel = (snapshot: LineupSnapshot, people: readonly Person[] = [], fleet?: Fleet): LineupModel => ({
   snapshot,
   outcomes: [],
   lastSteps: new Map(),
   launches: new Map(),
   people,
+  replacedBy: new Map(),
+  fleet,
 });
+
+/** A spare aside until called: planned, and no down aircraft's recorded replacement. */
+export const heldSpare = (slot: Pick<SlotView, 'id' | 'spare' | 'status'>, replacedBy: ReadonlyMap<number, number>) =>
+  slot.spare && slot.status === 'planned' && ![...replacedBy.values()].includes(slot.id);
+
+/** The replacements after a command that records one (`spare`) or none (null) for a down aircraft. */
+function replacedAfter(replacedBy: ReadonlyMap<number, number>, replaces: Expected['replaces']) {
+  const after = new Map(replacedBy);
+  if (!replaces) return after;
+  const { down, spare } = replaces;
+  if (spare === null) after.delete(down);
+  else after.set(down, spare);
+  return after;
+}
 
 export interface LineupReal {
   url: string;
@@ -163,8 +187,23 @@ export interface Expected {
   closesCycle?: boolean;
   /** What the command sets of the cycle itself. */
   cycle?: Partial<CycleFacts>;
+  /** Aircraft the command adds to the deck pool, by side number, with what they start with. */
+  added?: readonly AddedSlot[];
+  /** The replacement the command records for a down aircraft: a spare, or none (a new down). */
+  replaces?: { down: number; spare: number | null };
+  /** The answer's status when not 200 (201 for a slot added). */
+  answered?: number;
+  /** Changes the command makes on the cycle: 1 unless told (0 for an answer that leaves the cycle alone). */
+  changes?: 0 | 1;
   /** The air boss's hold on a catapult the command sets: its reason, null for clear to launch. */
   deckHold?: { catapultId: number; reason: string | null };
+}
+
+/** An aircraft new in the cycle: its side number and facts (its place on deck: see `startsFree`). */
+export interface AddedSlot {
+  side: string;
+  spare: boolean;
+  facts: Omit<SlotFacts, 'deckPosition'>;
 }
 
 /** Expected answer: 200 with what it leaves, or the refusal status (and its code, where the model knows it). */
@@ -175,18 +214,18 @@ export type RefusalStatus = 400 | 403 | 404 | 409 | 422;
 /**
  * What a change under the agreed figures (a new weight, wind or ship's speed) does to an aircraft past the
  * weight agreement, as the readiness rules say: a new weight voids the agreement and takes it back before
- * it; a new wind takes it back to the agreement, to read the setting back anew. Either way it is marked for
+ * it; a new wind or new launch data take it back to the agreement, to read the setting back anew. Either way it is marked for
  * re-verify and loses its waivers (given for the figures as they were). Null for one not that far.
  */
 export function droppedBack(
   steps: readonly SlotStatus[],
   status: SlotStatus,
-  cause: 'weight' | 'wind',
+  cause: 'weight' | 'wind' | 'launch_data',
 ): Partial<SlotFacts> | null {
   const agreedAt = steps.indexOf('weight_agreed');
   if (agreedAt < 0 || steps.indexOf(status) < agreedAt) return null;
   const back = { reverifyCause: cause, waivedGates: [] };
-  if (cause === 'wind') return { ...back, status: 'weight_agreed' };
+  if (cause !== 'weight') return { ...back, status: 'weight_agreed' };
   return { ...back, status: steps[agreedAt - 1] ?? steps[0], agreedWeightLb: null, weightAgreed: false };
 }
 
@@ -229,12 +268,53 @@ function observed(snapshot: LineupSnapshot) {
       deckHoldReason: lane.deckHoldReason,
       slotIds: lane.slotIds,
     })),
-    slots: byId(snapshot).map((slot) => ({ id: slot.id, catapultId: slot.catapultId, ...slotFacts(slot) })),
+    slots: byId(snapshot).map((slot) => ({
+      id: slot.id,
+      catapultId: slot.catapultId,
+      ...slotFacts(slot),
+      heldSpare: slot.heldSpare,
+    })),
   };
 }
 
+/** Planned, down or scratched: the aircraft stands on its deck position (later ones are at a catapult or airborne). */
+const standsOnPosition = (slot: SlotView) => ['planned', 'down', 'scratched'].includes(slot.status);
+
+/**
+ * Where an added aircraft starts, as the model can tell: in a hangar bay, or on a deck position no other
+ * aircraft of the cycle stands on. Its deck position as read when that holds; a word that fails the comparison otherwise.
+ */
+function startsFree(now: LineupSnapshot, added: SlotView): string | null {
+  const position = slotFacts(added).deckPosition;
+  if (added.deckPosition?.kind === 'hangar') return position;
+  const taken = now.slots.some(
+    (other) => other.id !== added.id && standsOnPosition(other) && slotFacts(other).deckPosition === position,
+  );
+  return taken ? `${position} (held by another aircraft)` : position;
+}
+
 /** The model's lineup after an accepted command, from the one before it and the rules' prediction. */
-function expectedAfter(before: LineupSnapshot, expected: Expected): ReturnType<typeof observed> {
+function expectedAfter(
+  before: LineupSnapshot,
+  expected: Expected,
+  replacedBy: ReadonlyMap<number, number>,
+  now: LineupSnapshot,
+): ReturnType<typeof observed> {
+  const called = replacedAfter(replacedBy, expected.replaces);
+  // Slot ids are the server's bookkeeping: an added aircraft is found by its side number among the new ids.
+  const known = new Set(before.slots.map((slot) => slot.id));
+  const added = (expected.added ?? []).map(({ side, spare, facts }) => {
+    const read = now.slots.find((slot) => !known.has(slot.id) && slot.sideNumber === side);
+    const id = read?.id ?? -1;
+    const deckPosition = read ? startsFree(now, read) : null;
+    return {
+      id,
+      catapultId: null,
+      ...facts,
+      deckPosition,
+      heldSpare: heldSpare({ id, spare, status: facts.status }, called),
+    };
+  });
   const laneOf = (slotId: number) => [...expected.lanes].find(([, ids]) => ids.includes(slotId))?.[0] ?? null;
   const cycle = {
     ...cycleFacts(before),
@@ -242,7 +322,7 @@ function expectedAfter(before: LineupSnapshot, expected: Expected): ReturnType<t
     ...(expected.closesCycle ? { state: 'closed' as const } : {}),
   };
   return {
-    version: before.version + (expected.closesCycle ? 2 : 1),
+    version: before.version + (expected.changes ?? 1) + (expected.closesCycle ? 1 : 0),
     cycle,
     lanes: before.lanes.map((lane) => {
       const status = expected.catapult?.id === lane.catapultId ? expected.catapult.status : lane.status;
@@ -255,14 +335,24 @@ function expectedAfter(before: LineupSnapshot, expected: Expected): ReturnType<t
         slotIds: expected.lanes.get(lane.catapultId)!,
       };
     }) as ReturnType<typeof observed>['lanes'],
-    slots: byId(before).map((slot) => ({
-      id: slot.id,
-      catapultId: laneOf(slot.id),
-      ...slotFacts(slot),
-      ...expected.slots?.get(slot.id),
-    })),
+    slots: [
+      ...byId(before).map((slot) => {
+        const facts = { ...slotFacts(slot), ...expected.slots?.get(slot.id) };
+        return {
+          id: slot.id,
+          catapultId: laneOf(slot.id),
+          ...facts,
+          heldSpare: heldSpare({ id: slot.id, spare: slot.spare, status: facts.status }, called),
+        };
+      }),
+      ...added.sort((a, b) => a.id - b.id),
+    ],
   };
 }
+
+/** A lineup command's answer (a change of launch data answers with the aircraft type instead). */
+const isLineupCommandResult = (body: unknown): body is LineupCommandResult =>
+  typeof body === 'object' && body !== null && 'change' in body && 'version' in body;
 
 export abstract class ModelCommand implements fc.AsyncCommand<LineupModel, LineupReal> {
   constructor(readonly handler: number) {}
@@ -273,34 +363,47 @@ export abstract class ModelCommand implements fc.AsyncCommand<LineupModel, Lineu
 
   protected abstract request(model: LineupModel): Request;
 
+  /** What a command must fetch or send before its request (an upload's preview, the tables held). */
+  protected async prepare(_model: LineupModel, _real: LineupReal): Promise<void> {}
+
   async run(model: LineupModel, real: LineupReal): Promise<void> {
+    await this.prepare(model, real);
     const { path, body, method, prediction, token = this.handler, after } = this.request(model);
     const outcome = await send(real.url, real.tokens[token], { path, body, method }, token);
     model.outcomes.push(outcome);
     const answer = `${this.toString()} answered ${outcome.status} ${JSON.stringify(outcome.body)}`;
     const code = (outcome.body as { code?: string } | null)?.code;
-    if (outcome.status !== prediction.status || ('code' in prediction && prediction.code && code !== prediction.code))
-      throw new Error(
-        `expected ${prediction.status} ${'code' in prediction ? (prediction.code ?? '') : ''}: ${answer}`,
-      );
+    const status = prediction.status === 200 ? (prediction.answered ?? 200) : prediction.status;
+    if (outcome.status !== status || ('code' in prediction && prediction.code && code !== prediction.code))
+      throw new Error(`expected ${status} ${'code' in prediction ? (prediction.code ?? '') : ''}: ${answer}`);
     const now = await real.read();
-    const expected = prediction.status === 200 ? expectedAfter(model.snapshot, prediction) : observed(model.snapshot);
+    const expected =
+      prediction.status === 200
+        ? expectedAfter(model.snapshot, prediction, model.replacedBy, now)
+        : observed(model.snapshot);
     if (!isDeepStrictEqual(observed(now), expected)) {
       throw new Error(
         `${answer}; the lineup is ${JSON.stringify(observed(now))}, the model says ${JSON.stringify(expected)}`,
       );
     }
     // A closing cycle adds a change of its own after the command's: its patch alone is not the lineup read.
-    if (prediction.status === 200 && !prediction.closesCycle) {
-      const result = outcome.body as LineupCommandResult;
-      const patched = applyLineupPatch(model.snapshot, result.version, result.change.patch);
-      if (!isDeepStrictEqual(patched, now)) throw new Error(`${answer}; its patch does not give the lineup read back`);
-    } else if (!isDeepStrictEqual(now, model.snapshot)) {
+    if (prediction.status === 200 && prediction.changes === 0) {
+      if (!isDeepStrictEqual(now, model.snapshot)) throw new Error(`${answer}; it changed the lineup`);
+    } else if (prediction.status === 200 && !prediction.closesCycle) {
+      // A change of launch data answers with the aircraft type: its lineup is checked against the model alone.
+      const result = outcome.body;
+      if (isLineupCommandResult(result)) {
+        const patched = applyLineupPatch(model.snapshot, result.version, result.change.patch);
+        if (!isDeepStrictEqual(patched, now))
+          throw new Error(`${answer}; its patch does not give the lineup read back`);
+      }
+    } else if (prediction.status !== 200 && !isDeepStrictEqual(now, model.snapshot)) {
       throw new Error(`${answer}; the refused command changed the lineup`);
     }
     if (prediction.status === 200) {
       // A step can be undone until the slot's status changes otherwise (a record of arms or load leaves it).
       for (const [slotId, facts] of prediction.slots ?? []) if (facts.status) model.lastSteps.delete(slotId);
+      model.replacedBy = replacedAfter(model.replacedBy, prediction.replaces);
       after?.(model, outcome);
     }
     model.snapshot = now;
@@ -411,7 +514,17 @@ export class MarkDownCommand extends ModelCommand {
       changed.set(slot.id, { status: 'down', pilotId: null, pilotAnswerLb: null });
       changed.set(spare.id, { pilotId: slot.pilotId, pilotAnswerLb: null });
     }
-    return { path, body, prediction: { status: 200 as const, lanes, slots: changed } };
+    // The down aircraft's replacement is recorded anew: the spare taking its place, or none.
+    return {
+      path,
+      body,
+      prediction: {
+        status: 200 as const,
+        lanes,
+        slots: changed,
+        replaces: { down: slot.id, spare: spare?.id ?? null },
+      },
+    };
   }
 
   override toString(): string {

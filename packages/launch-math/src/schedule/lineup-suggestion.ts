@@ -552,10 +552,14 @@ export function suggestLineup(input: SuggestionInput): LineupSuggestion {
       : ids.map((id) =>
           blocked.has(id) ? undefined : input.clearBefore?.[id]?.map((front) => indexOf.get(front) ?? -1),
         );
+  const placeable = input.aircraft.flatMap((_, index) => (arrival[index].some(Number.isFinite) ? [index] : []));
+  // Only aircraft the lineup holds lift the priority of those parked in front of them, as in the lineup's
+  // projection: an aircraft left out must not hurry its row's front past aircraft that wait on it.
+  const placed = new Set(placeable.map((index) => ids[index]));
   const tier = clearingTiers(
     ids,
     input.aircraft.map((aircraft) => priorityTier(aircraft.priority)),
-    input.clearBefore,
+    input.clearBefore && Object.fromEntries(Object.entries(input.clearBefore).filter(([behind]) => placed.has(behind))),
   );
   const catapults = open.map((catapult) => ({
     resetMs: secondsToMilliseconds(catapult.resetInterval),
@@ -579,7 +583,6 @@ export function suggestLineup(input: SuggestionInput): LineupSuggestion {
     resetMs: catapults.map((catapult) => catapult.resetMs),
     evaluations: { count: 0 },
   };
-  const placeable = input.aircraft.flatMap((_, index) => (arrival[index].some(Number.isFinite) ? [index] : []));
   const best = provenBest(
     space,
     pairMoves(

@@ -136,6 +136,10 @@ try {
     step('Live latency in the browser');
     results.liveLatency = node('apps/web/bench/live-latency.mjs', { urls, cycleId, pages: 20, moves: 20 });
   }
+} catch (error) {
+  // The parts measured before a failure are still written and printed; the run still fails.
+  results.failed = error.message;
+  process.exitCode = 1;
 } finally {
   for (const server of servers) server.child.kill('SIGTERM');
   await Promise.all(servers.map((server) => server.exited));
@@ -148,6 +152,7 @@ const file = path.join(dir, `bench-${results.at.replace(/[:.]/g, '-')}.json`);
 writeFileSync(file, `${JSON.stringify(results, null, 2)}\n`);
 printTables(results);
 console.log(`\nWritten to ${path.relative(root, file)}`);
+if (results.failed) console.error(`\nThe bench stopped early: ${results.failed}`);
 
 function printTables({ fanOut, commitRate, computation, suggestionLoop, web, lighthouse, liveLatency, apiProcesses }) {
   if (fanOut) {

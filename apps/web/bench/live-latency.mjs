@@ -12,9 +12,11 @@ const WATCHERS = [
   'observer',
   'airboss',
   'airops',
-  ...[1, 2, 3, 4].flatMap((n) => [`cat${n}`, `deo${n}`]),
+  ...[1, 2, 3, 4].map((n) => `cat${n}`),
+  'deo1',
+  'deo2',
   'pilot',
-  ...Array.from({ length: 9 }, (_, i) => `pilot${i + 2}`),
+  ...Array.from({ length: 11 }, (_, i) => `pilot${i + 2}`),
 ];
 const TIMEOUT_MS = 30_000;
 
@@ -28,8 +30,13 @@ async function openLineup(browser, url, who) {
   await page.getByLabel('E-mail').fill(`${who}@catline.example`);
   await page.getByLabel('Password').fill(DEMO_PASSWORD);
   await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.locator('[data-testid="lane"][data-catapult-number="1"]').waitFor();
-  await page.getByText('Live', { exact: true }).first().waitFor();
+  try {
+    await page.locator('[data-testid="lane"][data-catapult-number="1"]').waitFor();
+    await page.getByText('Live', { exact: true }).first().waitFor();
+  } catch (error) {
+    const shown = (await page.locator('body').innerText()).replace(/\s+/g, ' ').slice(0, 400);
+    throw new Error(`${who}'s Lineup did not open: at ${page.url()} the page shows "${shown}"`, { cause: error });
+  }
   return page;
 }
 

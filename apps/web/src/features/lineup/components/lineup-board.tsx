@@ -64,7 +64,7 @@ export function LineupBoard({
         slot={slot}
         movable={editable && isMovable(slot)}
         mark={marks.get(slot.id)}
-        menu={<SlotMenu slot={slot} actions={actionsFor(slot)} />}
+        actions={actionsFor(slot)}
       />
     );
   };

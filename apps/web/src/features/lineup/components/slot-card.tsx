@@ -1,4 +1,4 @@
-import type { ReactNode } from 'react';
+import { memo, type ReactNode } from 'react';
 import { Badge, Box, Flex, HStack, Text } from '@chakra-ui/react';
 import { useSortable } from '@dnd-kit/sortable';
 import { CSS } from '@dnd-kit/utilities';
@@ -11,6 +11,8 @@ import { useShipClock } from '../../../lib/ship-time.js';
 import { slotGoVerdict } from '../../../lib/launch-verdict.js';
 import { slotItemId } from '../hooks/use-lineup-drag.js';
 import { needsPilot, type SlotMark } from '../lineup-model.js';
+import type { SlotAction } from '../slot-actions.js';
+import { SlotMenu } from './action-menu.js';
 import { GrossWeightParts } from '../../../components/gross-weight-parts.js';
 import { LaunchTiming } from '../../../components/launch-timing.js';
 
@@ -46,8 +48,20 @@ function SlotCardFrame({
   );
 }
 
-/** What a slot card shows: who, what, how heavy, when, and whether the figures are go. */
-function SlotCardContent({ slot, movable, mark }: { slot: SlotView; movable: boolean; mark?: SlotMark }) {
+/**
+ * What a slot card shows: who, what, how heavy, when, and whether the figures are go. Drawn again only
+ * when its slot, mark or movability changes: a change replaces only the slots it touches, and redrawing
+ * every card of a 40-aircraft board for each one cost a watching tablet most of its time.
+ */
+const SlotCardContent = memo(function SlotCardContent({
+  slot,
+  movable,
+  mark,
+}: {
+  slot: SlotView;
+  movable: boolean;
+  mark?: SlotMark;
+}) {
   const { optionalClock } = useShipClock();
   const figures = slot.figures;
   return (
@@ -155,7 +169,7 @@ function SlotCardContent({ slot, movable, mark }: { slot: SlotView; movable: boo
       )}
     </Box>
   );
-}
+});
 
 /** A card as it floats under the pointer while it is being dragged. */
 export function LiftedSlotCard({ slot }: { slot: SlotView }) {
@@ -172,9 +186,26 @@ interface SortableSlotCardProps {
   movable: boolean;
   /** The aircraft on its lane's catapult, or the next one. */
   mark?: SlotMark;
-  /** The card's menu: it sits beside the draggable area, so its keys and taps never start a drag. */
-  menu?: ReactNode;
+  /** The card's menu entries: the menu sits beside the draggable area, so its keys and taps never start a drag. */
+  actions: SlotAction[];
 }
+
+/**
+ * Whether a card would draw the same: the same slot (a change replaces only the slots it touches), mark,
+ * movability and menu entries. An entry's `run` is made anew on every render of the board, but for the
+ * same slot it calls the same handlers, so the entries are compared by what they show.
+ */
+const drawsTheSame = (before: SortableSlotCardProps, after: SortableSlotCardProps) =>
+  before.slot === after.slot &&
+  before.movable === after.movable &&
+  before.mark === after.mark &&
+  before.actions.length === after.actions.length &&
+  before.actions.every(
+    (action, index) =>
+      action.id === after.actions[index].id &&
+      action.label === after.actions[index].label &&
+      action.tone === after.actions[index].tone,
+  );
 
 /** A card nobody here can move is not a button, but is still named by its side number, type and status. */
 const fixedCardName = (slot: SlotView, mark?: SlotMark) =>
@@ -182,23 +213,25 @@ const fixedCardName = (slot: SlotView, mark?: SlotMark) =>
     .filter(Boolean)
     .join(', ');
 
-export function SortableSlotCard({ slot, movable, mark, menu }: SortableSlotCardProps) {
-  // The handle is named by what it shows (side number, mark, status, type, pilot, figures), so a person
-  // who says or reads what they see finds it.
-  const { attributes, listeners, setNodeRef, setActivatorNodeRef, transform, transition, isDragging } = useSortable({
-    id: slotItemId(slot.id),
-    disabled: !movable,
-  });
-  return (
-    <Box
-      ref={setNodeRef}
-      style={{ transform: CSS.Translate.toString(transform), transition }}
-      opacity={isDragging ? 0.35 : 1}
-      data-testid="slot-card"
-      data-side-number={slot.sideNumber}
-      data-status={slot.status}
-      data-mark={mark}
-    >
+type Sortable = ReturnType<typeof useSortable>;
+
+interface PlacedSlotCardProps
+  extends SortableSlotCardProps, Pick<Sortable, 'attributes' | 'listeners' | 'setActivatorNodeRef'> {}
+
+/** The card in its place on the board; its handle is the drag activator. */
+const PlacedSlotCard = memo(
+  function PlacedSlotCard({
+    slot,
+    movable,
+    mark,
+    actions,
+    attributes,
+    listeners,
+    setActivatorNodeRef,
+  }: PlacedSlotCardProps) {
+    // The handle is named by what it shows (side number, mark, status, type, pilot, figures), so a person
+    // who says or reads what they see finds it.
+    return (
       <SlotCardFrame slot={slot} lifted={false} mark={mark}>
         <Box
           ref={setActivatorNodeRef}
@@ -213,8 +246,44 @@ export function SortableSlotCard({ slot, movable, mark, menu }: SortableSlotCard
         >
           <SlotCardContent slot={slot} movable={movable} mark={mark} />
         </Box>
-        {menu}
+        <SlotMenu slot={slot} actions={actions} />
       </SlotCardFrame>
-    </Box>
+    );
+  },
+  (before, after) =>
+    drawsTheSame(before, after) &&
+    before.attributes === after.attributes &&
+    before.listeners === after.listeners &&
+    before.setActivatorNodeRef === after.setActivatorNodeRef,
+);
+
+/**
+ * A card of the board that can be dragged. dnd-kit draws every sortable card again at each step of a
+ * drag and after each change of the board (twice per change on a watching screen); only this plain
+ * wrapper follows it, and the Chakra card inside is drawn again when what it shows changes. Drawing all
+ * 40 cards of the bench board for every change took most of a watching tablet's time.
+ */
+export const SortableSlotCard = memo(function SortableSlotCard(props: SortableSlotCardProps) {
+  const { slot, movable, mark } = props;
+  const { attributes, listeners, setNodeRef, setActivatorNodeRef, transform, transition, isDragging } = useSortable({
+    id: slotItemId(slot.id),
+    disabled: !movable,
+  });
+  return (
+    <div
+      ref={setNodeRef}
+      style={{ transform: CSS.Translate.toString(transform), transition, opacity: isDragging ? 0.35 : 1 }}
+      data-testid="slot-card"
+      data-side-number={slot.sideNumber}
+      data-status={slot.status}
+      data-mark={mark}
+    >
+      <PlacedSlotCard
+        {...props}
+        attributes={attributes}
+        listeners={listeners}
+        setActivatorNodeRef={setActivatorNodeRef}
+      />
+    </div>
   );
-}
+}, drawsTheSame);

@@ -53,3 +53,44 @@ test('six tabs opened at once restore the session with one refresh between them 
   expect(refreshes.take(), 'refreshes after the six tabs were open').toEqual([]);
   await context.close();
 });
+
+test('a lone tab reloaded just after a refresh asks the server at once, not tabs that are gone', async ({
+  browser,
+}) => {
+  const context = await browser.newContext();
+  // What each page of the context says to the other tabs, kept in the page.
+  await context.addInitScript(() => {
+    const said: string[] = [];
+    Object.assign(globalThis, { catlineTabsSaid: said });
+    const post = BroadcastChannel.prototype.postMessage;
+    BroadcastChannel.prototype.postMessage = function (this: BroadcastChannel, message: { kind: string }) {
+      said.push(message.kind);
+      post.call(this, message);
+    };
+  });
+  const first = await context.newPage();
+  await first.goto('/fleet');
+  await signIn(first, 'observer');
+  await fleetShown(first);
+  // A second tab restores its session with a refresh, so a refresh was made within the last minute.
+  const second = await context.newPage();
+  await second.goto('/fleet');
+  await fleetShown(second);
+  await first.close();
+
+  const refreshes = countRefreshes(context);
+  await second.reload();
+  await fleetShown(second);
+  expect(refreshes.take(), 'the reloaded tab refreshes its session itself').toEqual([200]);
+  expect(await second.evaluate(() => (globalThis as { catlineTabsSaid?: string[] }).catlineTabsSaid)).not.toContain(
+    'ask',
+  );
+
+  // With another tab open, a new one still asks it and is handed its session without a refresh.
+  const third = await context.newPage();
+  await third.goto('/fleet');
+  await fleetShown(third);
+  expect(await third.evaluate(() => (globalThis as { catlineTabsSaid?: string[] }).catlineTabsSaid)).toContain('ask');
+  expect(refreshes.take(), 'refreshes while the third tab opened').toEqual([]);
+  await context.close();
+});

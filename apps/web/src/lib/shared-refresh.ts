@@ -22,7 +22,24 @@ const RECENT_REFRESH_MS = 60_000;
 // A session handed to a new tab keeps at least this long; one closer to its end is renewed instead.
 const HANDOVER_MIN_LIFE_MS = 2 * 60_000;
 
+// Held, shared, by every open tab for its whole life: a tab asks the others only when one is there to answer.
+const OPEN_TAB = 'catline.open-tab';
+
 type Message = { kind: 'session'; session: SessionResponse } | { kind: 'ask' };
+
+void globalThis.navigator?.locks?.request(OPEN_TAB, { mode: 'shared' }, () => new Promise<never>(() => undefined));
+
+/**
+ * Whether another tab is open to hand over its session. A lone tab reloaded within a minute of its last
+ * refresh waited a whole second for an answer nobody could give (the bench's cold Lineup load, and every
+ * reload on deck). Without Web Locks it cannot tell, so it asks.
+ */
+async function anotherTabOpen(): Promise<boolean> {
+  const locks = globalThis.navigator?.locks;
+  if (!locks) return true;
+  const { held = [] } = await locks.query();
+  return held.filter((lock) => lock.name === OPEN_TAB).length > 1;
+}
 
 const channel = typeof BroadcastChannel === 'undefined' ? null : new BroadcastChannel('catline.session');
 let handedOver: { session: SessionResponse; at: number } | null = null;
@@ -66,12 +83,12 @@ function awaitHandover(waitMs: number): Promise<SessionResponse | null> {
   });
 }
 
-function sessionFromOtherTabs(askedAt: number): Promise<SessionResponse | null> {
-  if (handedOver && handedOver.at >= askedAt) return Promise.resolve(handedOver.session);
+async function sessionFromOtherTabs(askedAt: number): Promise<SessionResponse | null> {
+  if (handedOver && handedOver.at >= askedAt) return handedOver.session;
   const refreshedAt = Number(globalThis.localStorage?.getItem(REFRESHED_AT) ?? 0);
   // Another tab refreshed while this one waited for the lock; its session is on the way.
   if (refreshedAt >= askedAt) return awaitHandover(REFRESHED_WAIT_MS);
-  if (!channel || Date.now() - refreshedAt > RECENT_REFRESH_MS) return Promise.resolve(null);
+  if (!channel || Date.now() - refreshedAt > RECENT_REFRESH_MS || !(await anotherTabOpen())) return null;
   const answer = awaitHandover(ASK_WAIT_MS);
   channel.postMessage({ kind: 'ask' } satisfies Message);
   return answer;

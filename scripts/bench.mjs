@@ -131,15 +131,10 @@ try {
     step('Lighthouse');
     results.lighthouse = node('apps/web/bench/lighthouse.mjs', { url, cycleId });
   }
-  // Last: it moves 40 aircraft of the bench cycle's pool onto catapult 1, so run it alone (`--only=latency`)
-  // after the parts that move aircraft. A second bench cycle for it made drops nobody saw (not yet understood).
+  // Last: it moves 20 aircraft of the bench cycle's pool onto catapult 1.
   if (parts.has('latency')) {
     step('Live latency in the browser');
-    // Each run drops 20 aircraft onto catapult 1. Baseline: the same drops seen by one page. Twenty Chromium
-    // pages share this machine's cores, where each tablet on deck has its own; the gap between the rows is that.
-    results.liveLatency = [1, 20].map((pages) =>
-      node('apps/web/bench/live-latency.mjs', { urls, cycleId, pages, moves: 20 }),
-    );
+    results.liveLatency = node('apps/web/bench/live-latency.mjs', { urls, cycleId, pages: 20, moves: 20 });
   }
 } catch (error) {
   // The parts measured before a failure are still written and printed; the run still fails.
@@ -212,6 +207,6 @@ function printTables({ fanOut, commitRate, computation, suggestionLoop, web, lig
   }
   if (liveLatency) {
     console.log("\nA handler's drop seen on other browser pages, ms (apps/web/bench/live-latency.mjs)");
-    console.table(liveLatency);
+    console.table([liveLatency]);
   }
 }

@@ -1,8 +1,8 @@
-import type { DeckPositionView, ReplaceDeckLayoutRequest, ShipView, SlotView } from '@catline/contracts';
+import type { ReplaceDeckLayoutRequest, ShipView, SlotView } from '@catline/contracts';
 import type { INestApplication } from '@nestjs/common';
 import { demoDeckLayout, demoDeckSpots } from '../src/database/seeds/demo-fleet.js';
 import { secondShipDeckLayout, secondShipDeckSpots, secondShipPeople } from '../src/database/seeds/demo-second-ship.js';
-import { ADMIN, HANDLER, LineupDriver, OBSERVER } from './support/lineup-fixtures.js';
+import { ADMIN, HANDLER, HANGAR_BAY_A, LineupDriver, OBSERVER } from './support/lineup-fixtures.js';
 import { startTestApp } from './support/test-app.js';
 
 const SECOND_SHIP_ADMIN = secondShipPeople.find((person) => person.role === 'admin')!.email;
@@ -38,23 +38,10 @@ describe("the admin's deck layout", () => {
   const spotsWith = (name: string, change: object) =>
     demoDeck.deckSpots.map((spot) => (spot.name === name ? { ...spot, ...change } : spot));
 
-  const towed = async (cycleId: number, slotId: number, to: DeckPositionView) => {
-    const slot = await driver.slot(cycleId, slotId);
-    const response = await driver.call(HANDLER, 'post', `/api/cycles/${cycleId}/deck/tows`, {
-      slotId,
-      slotVersion: slot.version,
-      to,
-    });
-    if (response.status !== 200) throw new Error(`Tow answered ${response.status}: ${JSON.stringify(response.body)}`);
-  };
-  const bayA: DeckPositionView = { kind: 'hangar', name: 'bay-A' };
-
   /** A fresh cycle with one demo aircraft, in hangar bay A. */
   async function cycleWith(side: string): Promise<{ cycleId: number; slot: SlotView }> {
     const cycle = await driver.createCycle();
-    const slot = await driver.addSlot(cycle.id, side);
-    if (slot.deckPosition?.kind !== 'hangar') await towed(cycle.id, slot.id, bayA);
-    return { cycleId: cycle.id, slot };
+    return { cycleId: cycle.id, slot: await driver.addSlotInHangar(cycle.id, side) };
   }
 
   it('replaces the deck, and the projection then times an aircraft from it', async () => {
@@ -185,19 +172,19 @@ describe("the admin's deck layout", () => {
     const stern3 = { name: 'stern-3', area: 'Stern', taxiS: { 1: 230, 2: 220, 3: 140, 4: 130 } };
     expect((await put(deckWith({ deckSpots: [...demoDeck.deckSpots, stern3] }))).status).toBe(200);
     const { cycleId, slot } = await cycleWith('L48');
-    await towed(cycleId, slot.id, { kind: 'spot', name: 'stern-3' });
+    await driver.towed(cycleId, slot.id, { kind: 'spot', name: 'stern-3' });
     const before = await ship();
     const response = await put(demoDeck);
     expect(response.status).toBe(409);
     expect(response.body.code).toBe('spot_in_use');
     expect(response.body.message).toContain('L48 (spot stern-3, cycle ');
     expect(await ship()).toEqual(before);
-    await towed(cycleId, slot.id, bayA);
+    await driver.towed(cycleId, slot.id, HANGAR_BAY_A);
   });
 
   it('refuses removing an elevator an aircraft of a cycle not closed is on, with 409 naming it', async () => {
     const { cycleId, slot } = await cycleWith('L49');
-    await towed(cycleId, slot.id, { kind: 'elevator', name: 'lift-aft' });
+    await driver.towed(cycleId, slot.id, { kind: 'elevator', name: 'lift-aft' });
     const response = await put(
       deckWith({
         elevators: [demoDeck.elevators[0]],
@@ -207,6 +194,6 @@ describe("the admin's deck layout", () => {
     expect(response.status).toBe(409);
     expect(response.body.message).toMatch(/^Aircraft of cycles not yet closed are on positions this change removes: /);
     expect(response.body.message).toContain('L49 (elevator lift-aft, cycle ');
-    await towed(cycleId, slot.id, bayA);
+    await driver.towed(cycleId, slot.id, HANGAR_BAY_A);
   });
 });

@@ -1,4 +1,4 @@
-import type { DeckPositionView, LineupCommandResult, SlotView } from '@catline/contracts';
+import type { DeckPositionView, SlotView } from '@catline/contracts';
 import type { INestApplication } from '@nestjs/common';
 import { AIR_BOSS, HANDLER, LineupDriver, catapultOfficer, launchKey, pilot } from './support/lineup-fixtures.js';
 import { startTestApp } from './support/test-app.js';
@@ -17,37 +17,20 @@ describe('the deck: tows, the landing area and the deck status', () => {
     await app.close();
   });
 
-  const tow = async (cycleId: number, slotId: number, to: DeckPositionView) => {
-    const slot = await deck.slot(cycleId, slotId);
-    return deck.call(HANDLER, 'post', `/api/cycles/${cycleId}/deck/tows`, {
-      slotId,
-      slotVersion: slot.version,
-      to,
-    });
-  };
-  const towed = async (cycleId: number, slotId: number, to: DeckPositionView) => {
-    const response = await tow(cycleId, slotId, to);
-    if (response.status !== 200) throw new Error(`Tow answered ${response.status}: ${JSON.stringify(response.body)}`);
-    return response.body as LineupCommandResult;
-  };
   const spot = (name: string): DeckPositionView => ({ kind: 'spot', name });
 
   /** A fresh cycle with the given demo aircraft, each first towed down to hangar bay A out of the way. */
   async function cycleWith(...sides: string[]) {
     const cycle = await deck.createCycle();
     const slots: SlotView[] = [];
-    for (const side of sides) {
-      const slot = await deck.addSlot(cycle.id, side);
-      if (slot.deckPosition?.kind !== 'hangar') await towed(cycle.id, slot.id, { kind: 'hangar', name: 'bay-A' });
-      slots.push(slot);
-    }
+    for (const side of sides) slots.push(await deck.addSlotInHangar(cycle.id, side));
     return { cycle, slots };
   }
 
   it('tows an aircraft as a versioned change that every screen reads in the snapshot', async () => {
     const { cycle, slots } = await cycleWith('C24');
     const before = await deck.snapshot(cycle.id);
-    const result = await towed(cycle.id, slots[0].id, { kind: 'elevator', name: 'lift-fwd' });
+    const result = await deck.towed(cycle.id, slots[0].id, { kind: 'elevator', name: 'lift-fwd' });
     expect(result.version).toBe(before.version + 1);
     expect(result.change).toMatchObject({
       kind: 'aircraft_towed',
@@ -71,8 +54,8 @@ describe('the deck: tows, the landing area and the deck status', () => {
 
   it('refuses a tow into an occupied position with 409 naming the aircraft there', async () => {
     const { cycle, slots } = await cycleWith('C25', 'C26');
-    await towed(cycle.id, slots[0].id, spot('mid-2'));
-    const response = await tow(cycle.id, slots[1].id, spot('mid-2'));
+    await deck.towed(cycle.id, slots[0].id, spot('mid-2'));
+    const response = await deck.tow(cycle.id, slots[1].id, spot('mid-2'));
     expect(response.status).toBe(409);
     expect(response.body).toMatchObject({
       code: 'position_occupied',
@@ -83,16 +66,16 @@ describe('the deck: tows, the landing area and the deck status', () => {
   it('refuses a tow out of a row, or into one, past an aircraft in front, naming it', async () => {
     const { cycle, slots } = await cycleWith('C27', 'C28', 'C29');
     const [front, behind, other] = slots;
-    await towed(cycle.id, behind.id, spot('aft-4'));
-    await towed(cycle.id, front.id, spot('aft-3'));
-    const out = await tow(cycle.id, behind.id, spot('bow-2'));
+    await deck.towed(cycle.id, behind.id, spot('aft-4'));
+    await deck.towed(cycle.id, front.id, spot('aft-3'));
+    const out = await deck.tow(cycle.id, behind.id, spot('bow-2'));
     expect(out.status).toBe(409);
     expect(out.body).toMatchObject({
       code: 'path_blocked',
       message: 'C28 cannot be towed from spot aft-4 to spot bow-2 until C27 moves.',
     });
-    await towed(cycle.id, other.id, spot('stern-1'));
-    const into = await tow(cycle.id, front.id, spot('stern-2'));
+    await deck.towed(cycle.id, other.id, spot('stern-1'));
+    const into = await deck.tow(cycle.id, front.id, spot('stern-2'));
     expect(into.status).toBe(409);
     expect(into.body).toMatchObject({ code: 'path_blocked' });
     expect(into.body.message).toContain('until C29 moves');
@@ -100,7 +83,7 @@ describe('the deck: tows, the landing area and the deck status', () => {
 
   it('refuses a position the ship does not have with 400', async () => {
     const { cycle, slots } = await cycleWith('C30');
-    const response = await tow(cycle.id, slots[0].id, spot('nowhere'));
+    const response = await deck.tow(cycle.id, slots[0].id, spot('nowhere'));
     expect(response.status).toBe(400);
     expect(response.body.code).toBe('unknown_position');
   });
@@ -109,7 +92,7 @@ describe('the deck: tows, the landing area and the deck status', () => {
     const { cycle, slots } = await cycleWith('C31');
     await deck.place(cycle.id, slots[0].id, 1);
     const below = (await deck.slot(cycle.id, slots[0].id)).projectedLaunchAt!;
-    await towed(cycle.id, slots[0].id, spot('bow-1'));
+    await deck.towed(cycle.id, slots[0].id, spot('bow-1'));
     const onDeck = (await deck.slot(cycle.id, slots[0].id)).projectedLaunchAt!;
     // Demo layout: bay-A to cat 1 is lift-fwd's 50 s trip + 90 s taxi = 140 s; bow-1 taxis 70 s.
     expect((Date.parse(below) - Date.parse(onDeck)) / 1000).toBe(70);
@@ -118,8 +101,8 @@ describe('the deck: tows, the landing area and the deck status', () => {
   it('holds an aircraft sent before the one parked in front of it, and says which must move', async () => {
     const { cycle, slots } = await cycleWith('C32', 'D33');
     const [front, behind] = slots;
-    await towed(cycle.id, behind.id, spot('aft-4'));
-    await towed(cycle.id, front.id, spot('aft-3'));
+    await deck.towed(cycle.id, behind.id, spot('aft-4'));
+    await deck.towed(cycle.id, front.id, spot('aft-3'));
     await deck.place(cycle.id, behind.id, 3);
     await deck.place(cycle.id, front.id, 3);
     const blocked = await deck.slot(cycle.id, behind.id);

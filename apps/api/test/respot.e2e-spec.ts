@@ -1,6 +1,14 @@
 import type { DeckPositionView, LineupCommandResult, RespotTarget, SlotView } from '@catline/contracts';
 import type { INestApplication } from '@nestjs/common';
-import { HANDLER, LineupDriver, OBSERVER, catapultOfficer, launchKey, pilot } from './support/lineup-fixtures.js';
+import {
+  HANDLER,
+  HANGAR_BAY_A,
+  LineupDriver,
+  OBSERVER,
+  catapultOfficer,
+  launchKey,
+  pilot,
+} from './support/lineup-fixtures.js';
 import { startTestApp } from './support/test-app.js';
 
 describe('the respot: targets, the ordered tows, the ticks and the next cycle', () => {
@@ -24,16 +32,6 @@ describe('the respot: targets, the ordered tows, the ticks and the next cycle', 
     windowEndAt: new Date(at + HOUR).toISOString(),
   });
   const spot = (name: string): DeckPositionView => ({ kind: 'spot', name });
-  const bayA: DeckPositionView = { kind: 'hangar', name: 'bay-A' };
-  const towTo = async (cycleId: number, slotId: number, to: DeckPositionView) => {
-    const slot = await deck.slot(cycleId, slotId);
-    const response = await deck.call(HANDLER, 'post', `/api/cycles/${cycleId}/deck/tows`, {
-      slotId,
-      slotVersion: slot.version,
-      to,
-    });
-    if (response.status !== 200) throw new Error(`Tow answered ${response.status}: ${JSON.stringify(response.body)}`);
-  };
   const build = async (cycleId: number, targets: RespotTarget[]) =>
     deck.call(HANDLER, 'post', `/api/cycles/${cycleId}/deck/respot`, {
       targets,
@@ -49,12 +47,10 @@ describe('the respot: targets, the ordered tows, the ticks and the next cycle', 
     const cycle = await deck.createCycle();
     const slots: Record<string, SlotView> = {};
     for (const side of Object.keys(placed)) {
-      const slot = await deck.addSlot(cycle.id, side);
-      if (slot.deckPosition?.kind !== 'hangar') await towTo(cycle.id, slot.id, bayA);
-      slots[side] = slot;
+      slots[side] = await deck.addSlotInHangar(cycle.id, side);
     }
     for (const [side, position] of Object.entries(placed)) {
-      if (position.kind !== 'hangar') await towTo(cycle.id, slots[side].id, position);
+      if (position.kind !== 'hangar') await deck.towed(cycle.id, slots[side].id, position);
     }
     return { cycle, slots };
   }
@@ -63,7 +59,7 @@ describe('the respot: targets, the ordered tows, the ticks and the next cycle', 
     // Demo layout (invented): aft-4 waits for aft-3. C27 on aft-3 goes to mid-4; C28 on mid-3 goes into
     // aft-4, behind aft-3; C29 comes up from bay A to aft-3. C29 cannot go until C27 has left aft-3, and
     // C28 must be on aft-4 before C29 parks in front of it: C27, C28, C29, whatever order they are given.
-    const { cycle, slots } = await cycleOn({ C27: spot('aft-3'), C28: spot('mid-3'), C29: bayA });
+    const { cycle, slots } = await cycleOn({ C27: spot('aft-3'), C28: spot('mid-3'), C29: HANGAR_BAY_A });
     const built = await build(cycle.id, [
       { slotId: slots.C29.id, to: spot('aft-3') },
       { slotId: slots.C28.id, to: spot('aft-4') },
@@ -139,9 +135,8 @@ describe('the respot: targets, the ordered tows, the ticks and the next cycle', 
   it('starts an aircraft the next cycle where a tow left it, though it did not launch', async () => {
     const planned = quietHalfHour();
     const cycle = await deck.createCycle(plannedAt(planned));
-    const stayer = await deck.addSlot(cycle.id, 'D42');
-    if (stayer.deckPosition?.kind !== 'hangar') await towTo(cycle.id, stayer.id, bayA);
-    await towTo(cycle.id, stayer.id, spot('stern-1'));
+    const stayer = await deck.addSlotInHangar(cycle.id, 'D42');
+    await deck.towed(cycle.id, stayer.id, spot('stern-1'));
     const next = await deck.createCycle(plannedAt(planned + 60_000));
     const again = await deck.addSlot(next.id, 'D42');
     expect(again.deckPosition).toEqual(spot('stern-1'));

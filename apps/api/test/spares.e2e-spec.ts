@@ -29,8 +29,8 @@ describe('spares, down aircraft, pilots and returns to the pool', () => {
 
   it('holds a spare aside: out of the count, the lanes and the suggestion until called', async () => {
     const cycle = await deck.createCycle();
-    const flying = await deck.addSlot(cycle.id, 'C21', { pilotEmail: pilot(2) });
-    const spare = await deck.addSlot(cycle.id, 'D40', { pilotEmail: pilot(3), spare: true, mission: 'Spare' });
+    const flying = await deck.addSlotInHangar(cycle.id, 'C21', { pilotEmail: pilot(2) });
+    const spare = await deck.addSlotInHangar(cycle.id, 'D40', { pilotEmail: pilot(3), spare: true, mission: 'Spare' });
     const snapshot = await deck.snapshot(cycle.id);
     expect(snapshot.cycle.slotCount).toBe(1);
     expect(snapshot.slots.find((slot) => slot.id === spare.id)!.heldSpare).toBe(true);
@@ -247,8 +247,8 @@ describe('spares, down aircraft, pilots and returns to the pool', () => {
 
   it('leaves a pilot-less aircraft out of the suggestion, listed as unassigned, until air operations assigns one', async () => {
     const cycle = await deck.createCycle();
-    const manned = await deck.addSlot(cycle.id, 'C26', { pilotEmail: pilot(8) });
-    const tanker = await deck.addSlot(cycle.id, 'L48', { tanker: true, mission: 'Tanker' });
+    const manned = await deck.addSlotInHangar(cycle.id, 'C26', { pilotEmail: pilot(8) });
+    const tanker = await deck.addSlotInHangar(cycle.id, 'L48', { tanker: true, mission: 'Tanker' });
     let suggestion = await deck.ok<SuggestedLineup>(HANDLER, 'get', `/api/cycles/${cycle.id}/lineup/suggestion`);
     expect(suggestion.lanes.flatMap((lane) => lane.slotIds)).toEqual([manned.id]);
     expect(suggestion.unassigned).toEqual([tanker.id]);

@@ -3,6 +3,7 @@ import type {
   AircraftView,
   CreateCycleRequest,
   CycleView,
+  DeckPositionView,
   LineupCommandResult,
   LineupSnapshot,
   ReadinessStep,
@@ -38,6 +39,9 @@ export const goodConditions = {
   weatherCase: 'I',
   night: false,
 } as const;
+
+/** The demo deck's first hangar bay, where aircraft stand side by side: none waits for another to leave. */
+export const HANGAR_BAY_A: DeckPositionView = { kind: 'hangar', name: 'bay-A' };
 
 type Method = 'get' | 'post' | 'put' | 'patch';
 
@@ -167,6 +171,35 @@ export class LineupDriver {
       201,
     );
     return result.change.patch.slots!.find((slot) => slot.sideNumber === side)!;
+  }
+
+  /**
+   * Adds a demo aircraft and tows it down to hangar bay A. Every spec shares the demo fleet, so where an
+   * aircraft starts (where the latest earlier cycle left it) hangs on which specs ran before; in the bay it
+   * neither blocks nor waits behind the test's other aircraft, whatever ran first.
+   */
+  async addSlotInHangar(
+    cycleId: number,
+    side: string,
+    fields: Partial<AddSlotRequest> & { pilotEmail?: string } = {},
+  ): Promise<SlotView> {
+    const slot = await this.addSlot(cycleId, side, fields);
+    if (slot.deckPosition?.kind === 'hangar') return slot;
+    await this.towed(cycleId, slot.id, HANGAR_BAY_A);
+    return this.slot(cycleId, slot.id);
+  }
+
+  /** The handler tows the slot's aircraft to `to`, on the slot's latest version. */
+  async tow(cycleId: number, slotId: number, to: DeckPositionView): Promise<request.Response> {
+    const slot = await this.slot(cycleId, slotId);
+    return this.call(HANDLER, 'post', `/api/cycles/${cycleId}/deck/tows`, { slotId, slotVersion: slot.version, to });
+  }
+
+  /** As {@link tow}, for a tow the test builds on: any answer but 200 throws. */
+  async towed(cycleId: number, slotId: number, to: DeckPositionView): Promise<LineupCommandResult> {
+    const response = await this.tow(cycleId, slotId, to);
+    if (response.status !== 200) throw new Error(`Tow answered ${response.status}: ${JSON.stringify(response.body)}`);
+    return response.body as LineupCommandResult;
   }
 
   /** A pilot's id from air operations' list (no sign-in as the pilot, which the login limits would slow). */

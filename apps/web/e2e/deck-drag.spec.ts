@@ -31,6 +31,9 @@ test('the handler tows an aircraft from the hangar up an elevator to a deck spot
 
   await dragWithTouch(tablet, chip(tablet, 'C30').getByText('C30'), place(tablet, 'elevator:lift-fwd'));
   await expect(chip(place(observer, 'elevator:lift-fwd'), 'C30')).toBeVisible();
+  // The handler drags again once the tablet shows the tow: a drag from where the chip stood before would
+  // carry the version before the tow, and the server refuses it as stale.
+  await expect(chip(place(tablet, 'elevator:lift-fwd'), 'C30')).toBeVisible();
   const onElevator = await projected();
 
   await dragWithTouch(tablet, chip(tablet, 'C30').getByText('C30'), place(tablet, 'spot:bow-1'));

@@ -88,6 +88,52 @@ describe('spares, down aircraft, pilots and returns to the pool', () => {
     await deck.place(cycle.id, sameType.id, 1);
   });
 
+  it('keeps a called spare in the cycle when the aircraft it stood in for goes down again', async () => {
+    const cycle = await deck.createCycle();
+    const down = await deck.addSlot(cycle.id, 'C22', { pilotEmail: pilot(4) });
+    const spare = await deck.addSlot(cycle.id, 'D41', { spare: true, mission: 'Spare' });
+    const standIn = await deck.addSlot(cycle.id, 'G43', { pilotEmail: pilot(5) });
+    await deck.place(cycle.id, down.id, 1);
+    await markDown(cycle.id, down.id);
+    const downNow = await deck.slot(cycle.id, down.id);
+    await deck.ok<LineupCommandResult>(HANDLER, 'post', slotPath(cycle.id, down.id, 'spare'), {
+      slotVersion: downNow.version,
+      spareSlotId: spare.id,
+      spareVersion: (await deck.slot(cycle.id, spare.id)).version,
+    });
+    const upAgainAndPlaced = async () => {
+      await deck.ok<LineupCommandResult>(HANDLER, 'post', slotPath(cycle.id, down.id, 'up'), {
+        slotVersion: (await deck.slot(cycle.id, down.id)).version,
+        reason: 'Hydraulic leak fixed',
+      });
+      await deck.place(cycle.id, down.id, 1);
+    };
+    await upAgainAndPlaced();
+    const counted = (await deck.snapshot(cycle.id)).cycle.slotCount;
+
+    // Down again without a spare: the one called for it stays called, counted and free to join a lane.
+    await markDown(cycle.id, down.id);
+    const after = await deck.snapshot(cycle.id);
+    expect(after.slots.find((slot) => slot.id === spare.id)!.heldSpare).toBe(false);
+    expect(after.cycle.slotCount).toBe(counted);
+    await deck.place(cycle.id, spare.id, 2);
+
+    // A second stand-in would leave the first one's call unrecorded, so it is refused and nothing changes.
+    await upAgainAndPlaced();
+    const before = await deck.snapshot(cycle.id);
+    const refused = await deck.call(HANDLER, 'post', slotPath(cycle.id, down.id, 'down'), {
+      slotVersion: before.slots.find((slot) => slot.id === down.id)!.version,
+      spareSlotId: standIn.id,
+    });
+    expect(refused.status).toBe(409);
+    expect(refused.body).toMatchObject({
+      code: 'spare_unavailable',
+      message:
+        'D41 already stood in for C22; mark C22 down without a spare and place another aircraft from the deck pool.',
+    });
+    expect((await deck.snapshot(cycle.id)).version).toBe(before.version);
+  });
+
   it('puts a down aircraft back in the deck pool with a reason ("up again")', async () => {
     const cycle = await deck.createCycle();
     const slot = await deck.addSlot(cycle.id, 'C23', { pilotEmail: pilot(5) });

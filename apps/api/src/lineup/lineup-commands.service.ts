@@ -160,7 +160,9 @@ export class LineupCommandsService {
         statusBy: actor,
         catapultId: null,
         position: null,
-        replacedBySlotId: spare?.id ?? null,
+        // Down again without a spare, the one that stood in for it earlier stays recorded: that record is
+        // what keeps that spare called.
+        replacedBySlotId: spare?.id ?? slot.replacedBySlotId,
       });
       const command = { type: 'mark_down', slotId, ...request };
       if (catapultId === null) return { summary: `${side} down`, command, mirrored: true };
@@ -261,6 +263,15 @@ export class LineupCommandsService {
       throw new LineupException(
         'spare_unavailable',
         `${spare.aircraft.sideNumber} is not waiting in the deck pool; only a planned aircraft from the pool can stand in.`,
+      );
+    }
+    if (down.replacedBySlotId !== null) {
+      const earlier = this.basis.slot(state, down.replacedBySlotId).aircraft.sideNumber;
+      const side = down.aircraft.sideNumber;
+      // Recording a second would leave the first one's call unrecorded, and that spare held aside again.
+      throw new LineupException(
+        'spare_unavailable',
+        `${earlier} already stood in for ${side}; mark ${side} down without a spare and place another aircraft from the deck pool.`,
       );
     }
     // The down aircraft's pilot walks to the spare; without one, the spare must bring its own.

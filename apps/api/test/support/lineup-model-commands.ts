@@ -147,14 +147,9 @@ export const newModel = (snapshot: LineupSnapshot, people: readonly Person[] = [
 export const heldSpare = (slot: Pick<SlotView, 'id' | 'spare' | 'status'>, replacedBy: ReadonlyMap<number, number>) =>
   slot.spare && slot.status === 'planned' && ![...replacedBy.values()].includes(slot.id);
 
-/** The replacements after a command that records one (`spare`) or none (null) for a down aircraft. */
+/** The replacements after a command that records a spare standing in for a down aircraft. */
 function replacedAfter(replacedBy: ReadonlyMap<number, number>, replaces: Expected['replaces']) {
-  const after = new Map(replacedBy);
-  if (!replaces) return after;
-  const { down, spare } = replaces;
-  if (spare === null) after.delete(down);
-  else after.set(down, spare);
-  return after;
+  return replaces ? new Map(replacedBy).set(replaces.down, replaces.spare) : new Map(replacedBy);
 }
 
 export interface LineupReal {
@@ -189,8 +184,8 @@ export interface Expected {
   cycle?: Partial<CycleFacts>;
   /** Aircraft the command adds to the deck pool, by side number, with what they start with. */
   added?: readonly AddedSlot[];
-  /** The replacement the command records for a down aircraft: a spare, or none (a new down). */
-  replaces?: { down: number; spare: number | null };
+  /** The spare the command records standing in for a down aircraft. */
+  replaces?: { down: number; spare: number };
   /** The answer's status when not 200 (201 for a slot added). */
   answered?: number;
   /** Changes the command makes on the cycle: 1 unless told (0 for an answer that leaves the cycle alone). */
@@ -500,7 +495,8 @@ export class MarkDownCommand extends ModelCommand {
     // Any aircraft still to launch may go down, wherever it stands in its steps.
     if (['launched', 'down', 'scratched'].includes(slot.status))
       return { path, body, prediction: refusal(409, 'wrong_step') };
-    if ((spare && slot.catapultId === null) || spareWithoutPilot)
+    // A second stand-in for one aircraft is refused: the first one's call would go unrecorded.
+    if ((spare && (slot.catapultId === null || model.replacedBy.has(slot.id))) || spareWithoutPilot)
       return { path, body, prediction: { status: 409 as const } };
     const lanes = lanesOf(snapshot);
     if (slot.catapultId !== null) {
@@ -514,7 +510,7 @@ export class MarkDownCommand extends ModelCommand {
       changed.set(slot.id, { status: 'down', pilotId: null, pilotAnswerLb: null });
       changed.set(spare.id, { pilotId: slot.pilotId, pilotAnswerLb: null });
     }
-    // The down aircraft's replacement is recorded anew: the spare taking its place, or none.
+    // The spare taking its place is recorded; down without one, an earlier stand-in stays recorded.
     return {
       path,
       body,
@@ -522,7 +518,7 @@ export class MarkDownCommand extends ModelCommand {
         status: 200 as const,
         lanes,
         slots: changed,
-        replaces: { down: slot.id, spare: spare?.id ?? null },
+        replaces: spare && { down: slot.id, spare: spare.id },
       },
     };
   }

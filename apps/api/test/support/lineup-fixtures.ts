@@ -185,8 +185,8 @@ export class LineupDriver {
   ): Promise<SlotView> {
     const slot = await this.addSlot(cycleId, side, fields);
     if (slot.deckPosition?.kind === 'hangar') return slot;
-    await this.towed(cycleId, slot.id, HANGAR_BAY_A);
-    return this.slot(cycleId, slot.id);
+    const towed = await this.towed(cycleId, slot.id, HANGAR_BAY_A);
+    return towed.change.patch.slots!.find((candidate) => candidate.id === slot.id)!;
   }
 
   /** The handler tows the slot's aircraft to `to`, on the slot's latest version. */
